@@ -1,0 +1,75 @@
+import { existsSync } from "node:fs";
+import { fileURLToPath } from "node:url";
+import compression from "compression";
+import express, { type Express, type RequestHandler } from "express";
+import helmet from "helmet";
+import { pinoHttp } from "pino-http";
+import type { Logger } from "pino";
+import type { Database } from "./db/client.ts";
+import type { Env } from "./env.ts";
+import { apiNotFound, errorHandler } from "./http/error-handler.ts";
+import { healthRouter } from "./routes/health.ts";
+
+export interface AppDeps {
+  db: Database;
+  env: Env;
+  logger: Logger;
+  /** Serves the client: Vite's dev middleware, or nothing (the built files are served from dist/). */
+  clientMiddleware?: RequestHandler;
+}
+
+const distFolder = fileURLToPath(new URL("../dist", import.meta.url));
+
+/** JSON bodies stay small: readings and forms are a few kB; uploads go through multer. */
+const JSON_BODY_LIMIT = "200kb";
+
+/** Builds the Express app; never listens, so tests can drive it in-process. */
+export function createApp(deps: AppDeps): Express {
+  const { env, logger } = deps;
+  const app = express();
+  app.disable("x-powered-by"); // no need to advertise the framework
+  app.set("trust proxy", "loopback"); // rate limits see the client IP behind a local proxy
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Photos are shown from blob: URLs before upload; fonts are bundled, never from a CDN.
+          "img-src": ["'self'", "data:", "blob:"],
+          // Plain-http LAN hosts (a tablet on the workshop network) must not be forced to https.
+          "upgrade-insecure-requests": env.NODE_ENV === "production" ? [] : null,
+        },
+      },
+    }),
+  );
+  app.use(compression()); // readings and tables compress well on slow mobile links
+  app.use(
+    pinoHttp({
+      logger,
+      // Quiet logs: health probes and static assets are noise.
+      autoLogging: { ignore: (req) => req.url === "/api/health" || !req.url?.startsWith("/api") },
+      customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
+    }),
+  );
+  app.use("/api", express.json({ limit: JSON_BODY_LIMIT }));
+
+  const api = express.Router();
+  api.use("/health", healthRouter(deps.db));
+  api.use(apiNotFound);
+  app.use("/api", api);
+
+  if (deps.clientMiddleware) {
+    app.use(deps.clientMiddleware);
+  } else if (existsSync(distFolder)) {
+    // Hashed asset names change with content, so they can be cached for a year.
+    app.use("/assets", express.static(`${distFolder}/assets`, { immutable: true, maxAge: "1y", index: false }));
+    app.use(express.static(distFolder, { index: false, maxAge: "1h" }));
+    app.get("/{*splat}", (_req, res) => {
+      res.setHeader("Cache-Control", "no-cache");
+      res.sendFile(`${distFolder}/index.html`);
+    });
+  }
+
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,105 @@
+/**
+ * The invented demo world of PRODUCT.md: Bellbird Mechanical, a small service company,
+ * and the Wattle Lane Clinic it maintains. Every name and figure here is made up.
+ */
+import type { CircuitNameplate, Role } from "../schema.ts";
+
+export const DEMO_PASSWORD = "bellbird-demo-2026";
+
+export const demoOrganisation = { name: "Bellbird Mechanical" };
+
+export const demoPeople: { email: string; name: string; role: Role }[] = [
+  { email: "owner@bellbird.example", name: "Dana Whitlock", role: "owner" },
+  { email: "senior@bellbird.example", name: "Priya Raman", role: "senior" },
+  { email: "tech@bellbird.example", name: "Sam Toko", role: "technician" },
+  { email: "tech2@bellbird.example", name: "Lee Hargreaves", role: "technician" },
+  { email: "apprentice@bellbird.example", name: "Jordan Vu", role: "apprentice" },
+];
+
+export const demoCustomer = {
+  name: "Wattle Lane Clinic",
+  contactName: "Robin Ashby (practice manager)",
+  contactEmail: "facilities@wattlelane.example",
+  contactPhone: "03 5550 0142",
+};
+
+export const demoSite = {
+  name: "Wattle Lane Clinic — main building",
+  address: "14 Wattle Lane, Bellbird Creek",
+  altitudeM: 85,
+};
+
+export interface DemoEquipment {
+  name: string;
+  kind: string;
+  location: string;
+  maker: string;
+  model: string;
+  serial: string;
+  refrigerant: string;
+  circuits: CircuitNameplate[];
+  compressorRlaA: number;
+  compressorLraA: number;
+  fanFlaA: number;
+  supplyVoltageV: number;
+  phases: number;
+  ratedHighSideKPa: number;
+  ratedLowSideKPa: number;
+}
+
+export const demoEquipment: DemoEquipment[] = [
+  {
+    name: "RTU-1 packaged rooftop unit",
+    kind: "packaged rooftop",
+    location: "Roof, above the waiting room",
+    maker: "Southerly Air",
+    model: "SPR-150-2C",
+    serial: "SA21-44817",
+    refrigerant: "R407C",
+    circuits: [
+      { number: 1, factoryChargeKg: 4.2, meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5 },
+      { number: 2, factoryChargeKg: 4.2, meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5 },
+    ],
+    compressorRlaA: 11.8,
+    compressorLraA: 74,
+    fanFlaA: 2.1,
+    supplyVoltageV: 400,
+    phases: 3,
+    ratedHighSideKPa: 2900,
+    ratedLowSideKPa: 1700,
+  },
+  {
+    name: "Server cupboard wall split",
+    kind: "wall split",
+    location: "Level 1, comms cupboard",
+    maker: "Kestrel",
+    model: "KW-35R32",
+    serial: "KW3522-0931",
+    refrigerant: "R32",
+    circuits: [{ number: 1, factoryChargeKg: 0.85, meteringDevice: "eev", targetSuperheatK: null, targetSubcoolingK: null }],
+    compressorRlaA: 6.4,
+    compressorLraA: 28,
+    fanFlaA: 0.4,
+    supplyVoltageV: 230,
+    phases: 1,
+    ratedHighSideKPa: 4150,
+    ratedLowSideKPa: 2500,
+  },
+  {
+    name: "Vaccine and stores cool room",
+    kind: "cool room",
+    location: "Ground floor, rear store",
+    maker: "Polar Bay",
+    model: "PB-CR2",
+    serial: "PB19-2260",
+    refrigerant: "R404A",
+    circuits: [{ number: 1, factoryChargeKg: 2.6, meteringDevice: "txv", targetSuperheatK: 5.5, targetSubcoolingK: 4 }],
+    compressorRlaA: 7.9,
+    compressorLraA: 46,
+    fanFlaA: 0.9,
+    supplyVoltageV: 230,
+    phases: 1,
+    ratedHighSideKPa: 2800,
+    ratedLowSideKPa: 1600,
+  },
+];

@@ -1,0 +1,48 @@
+import type { ErrorRequestHandler, RequestHandler } from "express";
+import { ZodError } from "zod";
+import { HttpError } from "./http-error.ts";
+
+/** Turns zod issues into one message per field path, e.g. { "suctionPressureKPa": "..." }. */
+export function fieldMessages(error: ZodError): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.length > 0 ? issue.path.join(".") : "_";
+    fields[key] ??= issue.message;
+  }
+  return fields;
+}
+
+/** Unknown /api paths answer JSON, never the client's index.html. */
+export const apiNotFound: RequestHandler = (req, _res, next) => {
+  next(new HttpError(404, `No API route for ${req.method} ${req.originalUrl}`));
+};
+
+/**
+ * The one place errors become responses: every error is a JSON body with a message;
+ * validation errors also list the fields. Unexpected errors are logged and answered
+ * with a generic 500 so internals never leak to the client.
+ */
+export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
+  if (error instanceof ZodError) {
+    res.status(400).json({ message: "Some fields need attention", fields: fieldMessages(error) });
+    return;
+  }
+  if (error instanceof HttpError) {
+    res.status(error.status).json({ message: error.message, ...(error.fields ? { fields: error.fields } : {}) });
+    return;
+  }
+  // Errors raised by body-parser and multer carry their own status (413, 400 …).
+  const status = typeof error?.status === "number" ? error.status : typeof error?.statusCode === "number" ? error.statusCode : 500;
+  if (status >= 400 && status < 500) {
+    const message =
+      error?.type === "entity.too.large"
+        ? "The request is too large"
+        : error?.type === "entity.parse.failed"
+          ? "The request body is not valid JSON"
+          : String(error?.message ?? "Bad request");
+    res.status(status).json({ message });
+    return;
+  }
+  req.log?.error({ err: error }, "unhandled error");
+  res.status(500).json({ message: "Something went wrong on the server. The error has been logged." });
+};

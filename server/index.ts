@@ -1,0 +1,52 @@
+/**
+ * Satura's server entry: reads the environment, opens and migrates the embedded
+ * database, loads the demo company when the database is empty, and listens.
+ */
+import type { Server } from "node:http";
+import { createApp } from "./app.ts";
+import { openDatabase } from "./db/client.ts";
+import { seedDemoData } from "./db/seed/seed-demo.ts";
+import { readEnv } from "./env.ts";
+import { createLogger } from "./logger.ts";
+
+const env = readEnv();
+const logger = createLogger(env);
+
+const database = await openDatabase(env.DATA_DIR);
+if (env.DEMO_DATA && (await seedDemoData(database.db))) {
+  logger.info("demo data loaded (Bellbird Mechanical)");
+}
+
+let clientMiddleware;
+let closeVite: (() => Promise<void>) | undefined;
+if (env.NODE_ENV === "development") {
+  // One port in development: Vite serves the client with hot reload beside the API.
+  const { createServer } = await import("vite");
+  const vite = await createServer({ server: { middlewareMode: true }, appType: "spa" });
+  clientMiddleware = vite.middlewares;
+  closeVite = () => vite.close();
+}
+
+const app = createApp({ db: database.db, env, logger, clientMiddleware });
+const server: Server = app.listen(env.PORT, env.HOST, () => {
+  const address = server.address();
+  const port = typeof address === "object" && address ? address.port : env.PORT;
+  logger.info(`Satura listening on http://localhost:${port}`);
+});
+
+let stopping = false;
+async function shutdown(signal: string) {
+  if (stopping) return;
+  stopping = true;
+  logger.info({ signal }, "shutting down");
+  // Stop taking requests, let those in flight finish, then close the database so
+  // PGlite flushes its files; a hard exit after 10 s if something hangs.
+  const timer = setTimeout(() => process.exit(1), 10_000);
+  timer.unref();
+  await new Promise<void>((resolve) => server.close(() => resolve()));
+  await closeVite?.();
+  await database.close();
+  process.exit(0);
+}
+process.on("SIGTERM", () => void shutdown("SIGTERM"));
+process.on("SIGINT", () => void shutdown("SIGINT"));
