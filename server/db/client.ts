@@ -26,6 +26,11 @@ export async function openDatabase(dataDir: string): Promise<DatabaseHandle> {
   // "CREATE SCHEMA" error (STACK.md gotcha 5), so make the folder first.
   if (dataDir !== MEMORY) mkdirSync(dataDir, { recursive: true });
   const client = await PGlite.create(dataDir === MEMORY ? undefined : dataDir);
+  return attachDatabase(client);
+}
+
+/** Wraps an open PGlite in Drizzle and brings its schema up to date. */
+export async function attachDatabase(client: PGlite): Promise<DatabaseHandle> {
   const db = drizzle({ client, schema });
   await migrate(db, { migrationsFolder });
   return { db, client, close: () => client.close() };

@@ -1,0 +1,398 @@
+/**
+ * Charge diagnosis contract: what a technician measures on one running circuit, and what the
+ * diagnosis engine (`diagnose()` in shared/engine) answers. Client forms, the server and the
+ * engine all validate with these schemas, so a reading is accepted or refused the same way
+ * everywhere.
+ *
+ * Units (PRODUCT.md "Units"): temperatures °C, pressures kPa **gauge** unless a name says
+ * otherwise, temperature differences K, relative humidity in percent (0–100), currents A.
+ */
+import { z } from "zod";
+
+// ---------------------------------------------------------------------------------------------
+// Enumerations
+// ---------------------------------------------------------------------------------------------
+
+export const METERING_DEVICES = ["txv", "eev", "fixed-orifice", "capillary"] as const;
+export const MeteringDeviceSchema = z.enum(METERING_DEVICES, {
+  error: "Choose the metering device: TXV, EEV, fixed orifice or capillary",
+});
+export type MeteringDevice = z.infer<typeof MeteringDeviceSchema>;
+
+export const LIQUID_TEMP_LOCATIONS = ["liquid-line", "discharge-line"] as const;
+export const LiquidTempLocationSchema = z.enum(LIQUID_TEMP_LOCATIONS, {
+  error: "Say where the liquid temperature was taken: liquid line or discharge line",
+});
+export type LiquidTempLocation = z.infer<typeof LiquidTempLocationSchema>;
+
+export const CHARGE_STATES = [
+  "normal",
+  "undercharged",
+  "overcharged",
+  "restricted-metering",
+  "low-evaporator-airflow",
+  "condenser-airflow",
+  "non-condensables",
+  "weak-compressor",
+  "insufficient-data",
+] as const;
+export const ChargeStateSchema = z.enum(CHARGE_STATES);
+export type ChargeState = z.infer<typeof ChargeStateSchema>;
+/** The fault (and normal) states that evidence can point to; `insufficient-data` is a verdict only. */
+export type EvidenceState = Exclude<ChargeState, "insufficient-data">;
+
+// ---------------------------------------------------------------------------------------------
+// Limits (named so that forms, tests and the engine share them)
+// ---------------------------------------------------------------------------------------------
+
+/** Standard atmosphere at sea level, kPa absolute (PRODUCT.md "Units"). */
+export const STANDARD_ATMOSPHERE_KPA = 101.325;
+/** Lowest accepted site atmospheric pressure, kPa abs: about 5 500 m altitude. */
+export const MIN_ATMOSPHERIC_PRESSURE_KPA = 50;
+/** Highest accepted site atmospheric pressure, kPa abs: above any weather at sea level. */
+export const MAX_ATMOSPHERIC_PRESSURE_KPA = 110;
+/** Highest accepted gauge pressure, kPa: covers transcritical R744 gas coolers (~13 MPa). */
+export const MAX_GAUGE_PRESSURE_KPA = 15_000;
+/** Plausible pipe temperatures for a running circuit, °C. */
+export const MIN_LINE_TEMPERATURE_C = -100;
+export const MAX_LINE_TEMPERATURE_C = 200;
+/** Plausible air temperatures at a unit, °C. */
+export const MIN_AIR_TEMPERATURE_C = -50;
+export const MAX_AIR_TEMPERATURE_C = 70;
+/** Largest nameplate superheat or subcooling target accepted, K. */
+export const MAX_TARGET_K = 30;
+/** Largest current accepted, A. */
+export const MAX_CURRENT_A = 2_000;
+/** Wet bulb may read this much above dry bulb before it is called impossible (sensor noise), K. */
+export const WET_BULB_ABOVE_DRY_BULB_TOLERANCE_K = 0.2;
+
+// ---------------------------------------------------------------------------------------------
+// Input
+// ---------------------------------------------------------------------------------------------
+
+function number(label: string, unit: string) {
+  return z.number({ error: `${label} must be a number in ${unit}` });
+}
+
+function gaugePressure(label: string) {
+  return number(label, "kPa gauge").max(
+    MAX_GAUGE_PRESSURE_KPA,
+    `${label} above ${MAX_GAUGE_PRESSURE_KPA} kPa gauge is beyond any refrigeration gauge`,
+  );
+}
+
+function lineTemperature(label: string) {
+  return number(label, "°C")
+    .min(MIN_LINE_TEMPERATURE_C, `${label} below ${MIN_LINE_TEMPERATURE_C} °C is not a pipe reading`)
+    .max(MAX_LINE_TEMPERATURE_C, `${label} above ${MAX_LINE_TEMPERATURE_C} °C is not a pipe reading`);
+}
+
+function airTemperature(label: string) {
+  return number(label, "°C")
+    .min(MIN_AIR_TEMPERATURE_C, `${label} below ${MIN_AIR_TEMPERATURE_C} °C is not an air reading`)
+    .max(MAX_AIR_TEMPERATURE_C, `${label} above ${MAX_AIR_TEMPERATURE_C} °C is not an air reading`);
+}
+
+function targetK(label: string) {
+  return number(label, "K")
+    .min(0, `${label} cannot be negative`)
+    .max(MAX_TARGET_K, `${label} above ${MAX_TARGET_K} K is not a nameplate value`);
+}
+
+const DiagnosisInputObjectSchema = z.object({
+  /** ASHRAE designation as listed by `listRefrigerants()`, e.g. "R410A". */
+  refrigerant: z
+    .string({ error: "Choose the refrigerant" })
+    .trim()
+    .min(1, "Choose the refrigerant"),
+  meteringDevice: MeteringDeviceSchema,
+  /** Suction pressure at the suction service port, kPa gauge. */
+  suctionPressureKPa: gaugePressure("Suction pressure"),
+  /** Suction line temperature next to the suction port / evaporator outlet, °C. */
+  suctionLineTempC: lineTemperature("Suction line temperature"),
+  /** Liquid pressure at the liquid service port (condenser outlet), kPa gauge. */
+  liquidPressureKPa: gaugePressure("Liquid pressure"),
+  /** Pipe temperature taken for subcooling, °C. */
+  liquidLineTempC: lineTemperature("Liquid line temperature"),
+  /** Where `liquidLineTempC` was taken; default liquid line. A discharge-line reading voids subcooling. */
+  liquidTempLocation: LiquidTempLocationSchema.optional(),
+  /** Discharge pressure at the compressor, kPa gauge. */
+  dischargePressureKPa: gaugePressure("Discharge pressure").optional(),
+  /** Discharge line temperature within about 15 cm of the compressor, °C. */
+  dischargeLineTempC: lineTemperature("Discharge line temperature").optional(),
+  returnAirDryBulbC: airTemperature("Return air dry bulb").optional(),
+  returnAirWetBulbC: airTemperature("Return air wet bulb").optional(),
+  /** Return air relative humidity, percent (0–100]; used for the wet bulb when none is measured. */
+  returnAirRelativeHumidity: number("Return air relative humidity", "%")
+    .gt(0, "Return air relative humidity must be above 0 %")
+    .max(100, "Return air relative humidity cannot exceed 100 %")
+    .optional(),
+  supplyAirDryBulbC: airTemperature("Supply air dry bulb").optional(),
+  /** Outdoor air entering the condenser, in the shade, °C. */
+  outdoorAirDryBulbC: airTemperature("Outdoor air dry bulb").optional(),
+  compressorAmps: number("Compressor current", "A")
+    .min(0, "Compressor current cannot be negative")
+    .max(MAX_CURRENT_A, `Compressor current above ${MAX_CURRENT_A} A is not plausible`)
+    .optional(),
+  compressorRla: number("Compressor RLA", "A")
+    .gt(0, "Compressor RLA must be above 0 A")
+    .max(MAX_CURRENT_A, `Compressor RLA above ${MAX_CURRENT_A} A is not plausible`)
+    .optional(),
+  /** Maker's target superheat, K (nameplate, manual or the unit's own charging chart). */
+  targetSuperheatK: targetK("Target superheat").optional(),
+  /** Maker's target subcooling, K. */
+  targetSubcoolingK: targetK("Target subcooling").optional(),
+  /** Site atmospheric pressure, kPa absolute; default 101.325. */
+  atmosphericPressureKPa: number("Atmospheric pressure", "kPa absolute")
+    .min(MIN_ATMOSPHERIC_PRESSURE_KPA, `Atmospheric pressure below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`)
+    .max(MAX_ATMOSPHERIC_PRESSURE_KPA, `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`)
+    .optional(),
+  /** Minutes the compressor has run since start or the last adjustment. */
+  runMinutes: number("Run time", "minutes").min(0, "Run time cannot be negative").optional(),
+});
+
+/**
+ * One circuit's readings. Cross-field checks refuse readings that cannot come from a running
+ * circuit, with the message on the field the technician should look at.
+ */
+export const DiagnosisInputSchema = DiagnosisInputObjectSchema.superRefine((input, ctx) => {
+  const atmosphere = input.atmosphericPressureKPa ?? STANDARD_ATMOSPHERE_KPA;
+  // A gauge cannot read below a perfect vacuum: absolute pressure must stay above zero.
+  const gauges = [
+    ["suctionPressureKPa", "Suction pressure", input.suctionPressureKPa],
+    ["liquidPressureKPa", "Liquid pressure", input.liquidPressureKPa],
+    ["dischargePressureKPa", "Discharge pressure", input.dischargePressureKPa],
+  ] as const;
+  for (const [field, label, value] of gauges) {
+    if (value !== undefined && value <= -atmosphere) {
+      ctx.addIssue({
+        code: "custom",
+        path: [field],
+        message: `${label} of ${value} kPa gauge is below a perfect vacuum (${(-atmosphere).toFixed(1)} kPa gauge at this atmospheric pressure)`,
+      });
+    }
+  }
+  // In a running circuit the compressor lifts suction to condensing pressure; suction at or
+  // above the liquid pressure means swapped hoses, a stopped compressor or a wrong entry.
+  if (input.suctionPressureKPa >= input.liquidPressureKPa) {
+    const message = `Suction pressure (${input.suctionPressureKPa} kPa) must be below liquid pressure (${input.liquidPressureKPa} kPa) on a running circuit: check the hoses are not swapped and the compressor is running`;
+    ctx.addIssue({ code: "custom", path: ["suctionPressureKPa"], message });
+    ctx.addIssue({ code: "custom", path: ["liquidPressureKPa"], message });
+  }
+  if (input.dischargePressureKPa !== undefined && input.dischargePressureKPa <= input.suctionPressureKPa) {
+    ctx.addIssue({
+      code: "custom",
+      path: ["dischargePressureKPa"],
+      message: `Discharge pressure (${input.dischargePressureKPa} kPa) must be above suction pressure (${input.suctionPressureKPa} kPa) on a running compressor`,
+    });
+  }
+  // Wet bulb can never exceed dry bulb (psychrometric definition); allow sensor noise.
+  if (
+    input.returnAirWetBulbC !== undefined &&
+    input.returnAirDryBulbC !== undefined &&
+    input.returnAirWetBulbC > input.returnAirDryBulbC + WET_BULB_ABOVE_DRY_BULB_TOLERANCE_K
+  ) {
+    ctx.addIssue({
+      code: "custom",
+      path: ["returnAirWetBulbC"],
+      message: `Return air wet bulb (${input.returnAirWetBulbC} °C) cannot be above its dry bulb (${input.returnAirDryBulbC} °C): check the probes`,
+    });
+  }
+  // Relative humidity alone says nothing about wet bulb: it needs the dry bulb it was read at.
+  if (input.returnAirRelativeHumidity !== undefined && input.returnAirDryBulbC === undefined) {
+    ctx.addIssue({
+      code: "custom",
+      path: ["returnAirDryBulbC"],
+      message: "Enter the return air dry bulb too: relative humidity needs it to give a wet bulb",
+    });
+  }
+});
+export type DiagnosisInput = z.infer<typeof DiagnosisInputSchema>;
+/** What callers pass in (before defaults); same as `DiagnosisInput` since no field transforms. */
+export type DiagnosisInputDraft = z.input<typeof DiagnosisInputSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Result
+// ---------------------------------------------------------------------------------------------
+
+export const TARGET_BASES = ["nameplate", "formula", "common-practice"] as const;
+
+/** A band a measured superheat or subcooling is judged against, K. */
+export const TargetBandSchema = z.object({
+  /** Nominal target, K (mid-band for a common-practice band). */
+  targetK: z.number(),
+  lowK: z.number(),
+  highK: z.number(),
+  basis: z.enum(TARGET_BASES),
+  /** Why this band: rule, tolerance and source tags. */
+  source: z.string(),
+});
+export type TargetBand = z.infer<typeof TargetBandSchema>;
+
+export const FINDING_DIRECTIONS = ["low", "normal", "high", "excluded", "not-judged"] as const;
+
+export const EvidenceSchema = z.object({
+  state: ChargeStateSchema.exclude(["insufficient-data"]),
+  /** Positive supports the state, negative speaks against it; one rule gives at most ±1.5. */
+  weight: z.number(),
+});
+export type Evidence = z.infer<typeof EvidenceSchema>;
+
+export const FindingSchema = z.object({
+  /** Id of the rule that produced it (see the rule registry). */
+  ruleId: z.string(),
+  /** Result field the finding is about, e.g. "superheatK". */
+  reading: z.string(),
+  value: z.number(),
+  unit: z.string(),
+  direction: z.enum(FINDING_DIRECTIONS),
+  /** States this reading points to (and away from), strongest first. */
+  pointsTo: z.array(EvidenceSchema),
+  /** One sentence for the technician. */
+  message: z.string(),
+  /** Source tag(s) with title, or "common practice" / "memory". */
+  source: z.string(),
+});
+export type Finding = z.infer<typeof FindingSchema>;
+
+export const WARNING_CODES = [
+  "subcooling-on-discharge-line",
+  "suction-below-saturation",
+  "liquid-above-saturation",
+  "discharge-below-saturation",
+  "liquid-colder-than-outdoor-air",
+  "discharge-temperature-high",
+  "low-superheat-floodback",
+  "short-run-time",
+  "outside-table",
+  "fixed-orifice-target-unavailable",
+  "no-current-rating",
+  "compression-ratio-high",
+  "supply-warmer-than-return",
+] as const;
+export const WarningCodeSchema = z.enum(WARNING_CODES);
+export type WarningCode = z.infer<typeof WarningCodeSchema>;
+
+export const DiagnosisWarningSchema = z.object({
+  code: WarningCodeSchema,
+  /** "invalid-data": a value was not used; "danger": risk to plant; "caution": read with care. */
+  severity: z.enum(["caution", "invalid-data", "danger"]),
+  /** Input field the warning is about, when there is one. */
+  field: z.string().optional(),
+  message: z.string(),
+  source: z.string(),
+});
+export type DiagnosisWarning = z.infer<typeof DiagnosisWarningSchema>;
+
+export const RankedStateSchema = z.object({
+  state: ChargeStateSchema.exclude(["insufficient-data"]),
+  /** 0–1; from this state's own evidence only (1 − e^(−score)). */
+  confidence: z.number().min(0).max(1),
+  /** Net evidence score: sum of finding weights for this state, floored at 0. */
+  score: z.number().min(0),
+});
+export type RankedState = z.infer<typeof RankedStateSchema>;
+
+const nullableNumber = z.number().nullable();
+
+export const DiagnosisResultSchema = z.object({
+  refrigerant: z.string(),
+  meteringDevice: MeteringDeviceSchema,
+  /** Dew point at the suction pressure, °C. */
+  evaporatingTempC: nullableNumber,
+  /** Bubble point at the suction pressure, °C (equals the dew point for pure fluids). */
+  evaporatingBubbleTempC: nullableNumber,
+  /** Bubble point at the liquid pressure, °C. */
+  condensingTempC: nullableNumber,
+  /** Dew point at the liquid pressure, °C. */
+  condensingDewTempC: nullableNumber,
+  /** Glide at the suction pressure (dew − bubble), K; 0 for pure fluids and azeotropes. */
+  glideK: nullableNumber,
+  /** Glide at the liquid pressure, K. */
+  condenserGlideK: nullableNumber,
+  superheatK: nullableNumber,
+  /** Null when not valid (e.g. temperature taken on the discharge line). */
+  subcoolingK: nullableNumber,
+  targets: z.object({
+    superheat: TargetBandSchema.nullable(),
+    subcooling: TargetBandSchema.nullable(),
+  }),
+  /** Return air wet bulb used, °C, and where it came from. */
+  returnAirWetBulbC: nullableNumber,
+  wetBulbBasis: z.enum(["measured", "from-relative-humidity"]).nullable(),
+  /** Return air dry bulb − supply air dry bulb, K. */
+  temperatureSplitK: nullableNumber,
+  /** Liquid line temperature − outdoor air dry bulb, K. */
+  condenserApproachK: nullableNumber,
+  /** Condensing (bubble) temperature − outdoor air dry bulb, K. */
+  condensingOverAmbientK: nullableNumber,
+  /** Return air dry bulb − evaporating (dew) temperature, K. */
+  evaporatorTemperatureDifferenceK: nullableNumber,
+  /** Absolute discharge (or liquid, see basis) pressure ÷ absolute suction pressure. */
+  compressionRatio: nullableNumber,
+  compressionRatioBasis: z.enum(["discharge", "liquid"]).nullable(),
+  /** Compressor running current ÷ RLA. */
+  compressorCurrentRatio: nullableNumber,
+  chargeState: ChargeStateSchema,
+  /** Confidence of `chargeState` (0 for insufficient-data). */
+  confidence: z.number().min(0).max(1),
+  /** Other states with evidence, most likely first. */
+  alternatives: z.array(RankedStateSchema),
+  findings: z.array(FindingSchema),
+  warnings: z.array(DiagnosisWarningSchema),
+});
+export type DiagnosisResult = z.infer<typeof DiagnosisResultSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Trend (run log of one circuit)
+// ---------------------------------------------------------------------------------------------
+
+export const TrendReadingSchema = z.object({
+  /** When the reading was taken, ISO 8601 date-time with offset. */
+  takenAt: z.iso.datetime({ offset: true, error: "Reading time must be an ISO date-time" }),
+  input: DiagnosisInputSchema,
+  /** Set when the technician adjusted the system (charge, fan, valve) just before this reading. */
+  adjustment: z.string().trim().min(1).optional(),
+});
+export type TrendReading = z.infer<typeof TrendReadingSchema>;
+
+export const TrendInputSchema = z
+  .array(TrendReadingSchema)
+  .min(1, "A trend needs at least one reading")
+  .superRefine((series, ctx) => {
+    for (let index = 1; index < series.length; index += 1) {
+      if (Date.parse(series[index]!.takenAt) <= Date.parse(series[index - 1]!.takenAt)) {
+        ctx.addIssue({
+          code: "custom",
+          path: [index, "takenAt"],
+          message: "Readings must be in time order, each later than the one before",
+        });
+      }
+    }
+  });
+
+const RateSchema = z.object({
+  superheatKPerMin: nullableNumber,
+  subcoolingKPerMin: nullableNumber,
+});
+
+export const TrendResultSchema = z.object({
+  settled: z.boolean(),
+  /** Why settled or not, in words. */
+  reason: z.string(),
+  /** The criterion applied. */
+  criterion: z.object({ windowMinutes: z.number(), maxChangeK: z.number(), minRunMinutes: z.number(), source: z.string() }),
+  /** Least-squares slope over the last window (or the readings since the last adjustment), K/min. */
+  rate: RateSchema,
+  /** Largest − smallest value over the last window, K. */
+  changeOverWindow: z.object({ superheatK: nullableNumber, subcoolingK: nullableNumber }),
+  /** Minutes from the first reading (or last adjustment) to the last reading. */
+  minutesObserved: z.number(),
+  /** The most recent reading at which the circuit was settled, with its diagnosis. */
+  lastSettled: z
+    .object({ index: z.number().int(), takenAt: z.string(), result: DiagnosisResultSchema })
+    .nullable(),
+  /** Diagnosis of the latest reading (settled or not). */
+  latest: DiagnosisResultSchema,
+});
+export type TrendResult = z.infer<typeof TrendResultSchema>;

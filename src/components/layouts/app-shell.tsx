@@ -1,0 +1,99 @@
+import { NavLink, Outlet, useNavigation } from "react-router-dom";
+import { navigation } from "@/config/navigation.ts";
+import { SunlightToggle } from "@/features/theme/components/sunlight-toggle.tsx";
+import { useHealth } from "@/lib/api/health.ts";
+import { cn } from "@/lib/cn.ts";
+
+function ServerStatus() {
+  const health = useHealth();
+  if (health.isPending) return <span className="text-muted">Connecting…</span>;
+  if (health.isError) return <span className="font-medium text-fault">⚠ Server unreachable — entries are not being saved</span>;
+  return (
+    <span className="text-muted">
+      ● Server connected <span className="num">v{health.data.version}</span>
+    </span>
+  );
+}
+
+/**
+ * The frame of every signed-in screen: a side rail with labels on tablets and desktops,
+ * a bottom bar within thumb reach on phones, and the Sunlight switch always one tap away.
+ */
+export function AppShell() {
+  const navigationState = useNavigation();
+  return (
+    <div className="flex min-h-dvh flex-col md:flex-row">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-surface focus:p-3">
+        Skip to content
+      </a>
+      <aside className="no-print hidden w-56 shrink-0 flex-col border-r-2 border-rule bg-surface md:flex">
+        <div className="flex items-center gap-2 px-4 py-5">
+          <img src="/satura-mark.svg" alt="" className="size-8" />
+          <span className="text-xl font-semibold tracking-tight">Satura</span>
+        </div>
+        <nav aria-label="Main" className="flex flex-col gap-1 px-2">
+          {navigation.map((item) => (
+            <NavLink
+              key={item.href}
+              to={item.href}
+              end={!item.matchPrefix}
+              className={({ isActive }) =>
+                cn(
+                  "flex min-h-touch items-center gap-3 rounded-card px-3 font-medium",
+                  isActive ? "bg-ink text-paper" : "text-ink hover:bg-sunken",
+                )
+              }
+            >
+              <item.icon aria-hidden className="size-5" />
+              {item.label}
+            </NavLink>
+          ))}
+        </nav>
+        <div className="mt-auto p-3">
+          <SunlightToggle className="w-full justify-center" />
+        </div>
+      </aside>
+
+      <div className="flex min-w-0 flex-1 flex-col">
+        <header className="no-print flex items-center justify-between gap-2 border-b-2 border-rule bg-surface px-4 py-2 md:hidden">
+          <div className="flex items-center gap-2">
+            <img src="/satura-mark.svg" alt="" className="size-7" />
+            <span className="text-lg font-semibold">Satura</span>
+          </div>
+          <SunlightToggle />
+        </header>
+        <div aria-live="polite" className="h-1">
+          {navigationState.state === "loading" && <div className="h-1 w-full animate-pulse bg-accent" role="progressbar" aria-label="Loading page" />}
+        </div>
+        <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-4 pb-28 pt-4 md:px-8 md:pb-10">
+          <Outlet />
+        </main>
+        <footer className="no-print hidden px-8 pb-4 text-sm md:block">
+          <ServerStatus />
+        </footer>
+      </div>
+
+      <nav
+        aria-label="Main"
+        className="no-print fixed inset-x-0 bottom-0 z-40 flex border-t-2 border-rule bg-surface pb-[env(safe-area-inset-bottom)] md:hidden"
+      >
+        {navigation.map((item) => (
+          <NavLink
+            key={item.href}
+            to={item.href}
+            end={!item.matchPrefix}
+            className={({ isActive }) =>
+              cn(
+                "flex min-h-16 flex-1 flex-col items-center justify-center gap-0.5 text-xs font-medium",
+                isActive ? "bg-ink text-paper" : "text-ink",
+              )
+            }
+          >
+            <item.icon aria-hidden className="size-6" />
+            {item.label}
+          </NavLink>
+        ))}
+      </nav>
+    </div>
+  );
+}

@@ -1,0 +1,16 @@
+import { HardHat, Home, type LucideIcon } from "lucide-react";
+import { paths } from "./paths.ts";
+
+export interface NavItem {
+  label: string;
+  href: string;
+  icon: LucideIcon;
+  /** Marks the item active for nested URLs too (e.g. /tables/R32 under /tables). */
+  matchPrefix?: boolean;
+}
+
+/** The app's sections, in the order a technician reaches for them. */
+export const navigation: NavItem[] = [
+  { label: "Today", href: paths.home.getHref(), icon: Home },
+  { label: "Safety", href: paths.safety.getHref(), icon: HardHat },
+];

@@ -1,0 +1,5 @@
+/** Every URL of the client in one place: routes use `path`, links use `getHref`. */
+export const paths = {
+  home: { path: "/", getHref: () => "/" },
+  safety: { path: "/safety", getHref: () => "/safety" },
+} as const;

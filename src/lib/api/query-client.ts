@@ -1,0 +1,41 @@
+import { MutationCache, QueryCache, QueryClient } from "@tanstack/react-query";
+import { toast } from "sonner";
+import { ApiError } from "./api-client.ts";
+
+/** Client and server errors will not change on retry; only network and 5xx failures are retried. */
+function shouldRetry(failureCount: number, error: unknown): boolean {
+  if (error instanceof ApiError && error.status >= 400 && error.status < 500) return false;
+  return failureCount < 2;
+}
+
+/**
+ * The app's single QueryClient. Background refetch failures surface as a toast; a query
+ * whose data is on screen keeps showing it, and components render their own error states.
+ */
+export function createQueryClient(): QueryClient {
+  return new QueryClient({
+    queryCache: new QueryCache({
+      onError: (error, query) => {
+        if (query.state.data !== undefined) toast.error(`Could not refresh: ${error.message}`);
+      },
+    }),
+    mutationCache: new MutationCache({
+      onError: (error, _variables, _context, mutation) => {
+        // Forms show field errors themselves; a toast covers everything else.
+        if (mutation.options.meta?.silentErrors) return;
+        if (error instanceof ApiError && Object.keys(error.fields).length > 0) return;
+        toast.error(error.message);
+      },
+    }),
+    defaultOptions: {
+      queries: { staleTime: 30_000, retry: shouldRetry, refetchOnWindowFocus: true },
+      mutations: { retry: false },
+    },
+  });
+}
+
+declare module "@tanstack/react-query" {
+  interface Register {
+    mutationMeta: { silentErrors?: boolean };
+  }
+}
