@@ -1,0 +1,41 @@
+import { defineConfig } from "@playwright/test";
+import { CHROMIUM_PATH } from "./scripts/chromium-path.mjs";
+
+const PORT = 3100;
+
+// Browser tests drive Debian's Chromium (Playwright cannot download its own browsers
+// here) against the production build served by the real server on an in-memory database.
+export default defineConfig({
+  testDir: "tests/browser",
+  fullyParallel: false,
+  workers: 1,
+  retries: process.env.CI ? 1 : 0,
+  timeout: 60_000,
+  reporter: process.env.CI ? [["list"]] : [["list"]],
+  use: {
+    baseURL: `http://127.0.0.1:${PORT}`,
+    trace: "retain-on-failure",
+    screenshot: "only-on-failure",
+    launchOptions: {
+      executablePath: CHROMIUM_PATH,
+      args: [
+        "--headless",
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--no-first-run",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+      ],
+    },
+  },
+  webServer: {
+    command: `NODE_ENV=production DATA_DIR=memory:// PORT=${PORT} LOG_LEVEL=warn npx tsx server/index.ts`,
+    url: `http://127.0.0.1:${PORT}/api/health`,
+    reuseExistingServer: false,
+    timeout: 120_000,
+    stdout: "ignore",
+    stderr: "pipe",
+  },
+});
