@@ -1,0 +1,47 @@
+import js from "@eslint/js";
+import tanstackQuery from "@tanstack/eslint-plugin-query";
+import checkFile from "eslint-plugin-check-file";
+import { importX } from "eslint-plugin-import-x";
+import reactHooks from "eslint-plugin-react-hooks";
+import { createTypeScriptImportResolver } from "eslint-import-resolver-typescript";
+import globals from "globals";
+import tseslint from "typescript-eslint";
+
+export default tseslint.config(
+  { ignores: ["dist/**", "node_modules/**", "coverage/**", "data/**", "drizzle/**", "test-results/**", "playwright-report/**"] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    files: ["**/*.{ts,tsx,js,mjs}"],
+    languageOptions: { globals: { ...globals.browser, ...globals.node } },
+    plugins: { "check-file": checkFile, "import-x": importX },
+    // Resolve the tsconfig aliases (@/, @shared/, @server/) so boundary zones see through them.
+    settings: { "import-x/resolver-next": [createTypeScriptImportResolver({ project: "./tsconfig.json" })] },
+    rules: {
+      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
+      // File and folder names are kebab-case everywhere (STYLE.md, Naming).
+      "check-file/filename-naming-convention": ["error", { "**/*.{ts,tsx}": "KEBAB_CASE" }, { ignoreMiddleExtensions: true }],
+      "check-file/folder-naming-convention": ["error", { "{src,server,shared,tests,scripts,bench}/**/": "KEBAB_CASE" }],
+      // Import boundaries of the design card: shared/ is pure; the client never reaches into the server.
+      "import-x/no-restricted-paths": [
+        "error",
+        {
+          zones: [
+            { target: "./shared", from: "./src", message: "shared/ must not import the client" },
+            { target: "./shared", from: "./server", message: "shared/ must not import the server" },
+            { target: "./src", from: "./server", message: "the client must not import the server" },
+            { target: "./server", from: "./src", message: "the server must not import the client" },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    files: ["src/**/*.{ts,tsx}"],
+    plugins: { "react-hooks": reactHooks, "@tanstack/query": tanstackQuery },
+    rules: {
+      ...reactHooks.configs.recommended.rules,
+      ...tanstackQuery.configs.recommended.rules,
+    },
+  },
+);
