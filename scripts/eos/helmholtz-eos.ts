@@ -37,11 +37,11 @@ export interface HelmholtzEos {
   pressure(T: number, rho: number): number;
   state(T: number, rho: number): EosState;
   /**
-   * Density at (T, p) on the branch of `rhoGuess` by Newton in ln ρ; rejects steps
-   * where ∂p/∂ρ ≤ 0 (README §4.2).
-   * @throws Error when it does not converge
+   * Density at (T, p) on the liquid or vapour branch (default: the branch of `rhoGuess`
+   * relative to ρ_r); only roots with ∂p/∂ρ > 0 are returned (README §4.2).
+   * @throws Error when the branch has no root at this pressure or the solve does not converge
    */
-  densityFromPressure(T: number, p: number, rhoGuess: number): number;
+  densityFromPressure(T: number, p: number, rhoGuess: number, branch?: "liquid" | "vapour"): number;
 }
 
 export function createHelmholtzEos(file: ReferenceFluidFile): HelmholtzEos {
@@ -86,26 +86,64 @@ export function createHelmholtzEos(file: ReferenceFluidFile): HelmholtzEos {
         dpdrho: RT * (1 + 2 * delta * r.dDelta + delta * delta * r.dDelta2),
       };
     },
-    densityFromPressure(T, p, rhoGuess) {
-      const tau = Tr / T;
-      let lnRho = Math.log(rhoGuess);
-      for (let iteration = 0; iteration < 100; iteration++) {
-        const rho = Math.exp(lnRho);
+    densityFromPressure(T, p, rhoGuess, branch = rhoGuess > rhor ? "liquid" : "vapour") {
+      // Bracket the root on the requested branch (p rises with ρ on both stable branches),
+      // then Newton safeguarded by bisection. Near the critical point the roots sit close to
+      // the spinodals, where a plain Newton step easily jumps into the unstable region.
+      const pressureAt = (rho: number) => {
         const delta = rho / rhor;
-        const r = residual.evaluateDelta(tau, delta, scratch);
+        const r = residual.evaluateDelta(Tr / T, delta, scratch);
         const RT = R * T;
-        const pCalc = rho * RT * (1 + delta * r.dDelta);
-        const dpdrho = RT * (1 + 2 * delta * r.dDelta + delta * delta * r.dDelta2);
-        if (!(dpdrho > 0)) throw new Error(`${file.designation}: density solve at ${T} K, ${p} Pa entered an unstable region`);
-        // Newton in ln ρ on ln p (d ln p / d ln ρ = ρ/p · ∂p/∂ρ); on p itself while the
-        // liquid-side guess still gives a negative pressure
-        const step =
-          pCalc > 0 ? (Math.log(pCalc / p) * pCalc) / (rho * dpdrho) : (pCalc - p) / (rho * dpdrho);
-        const limited = Math.max(-0.5, Math.min(0.5, step));
-        lnRho -= limited;
-        if (Math.abs(limited) < 1e-14) return Math.exp(lnRho);
+        return { p: rho * RT * (1 + delta * r.dDelta), dpdrho: RT * (1 + 2 * delta * r.dDelta + delta * delta * r.dDelta2) };
+      };
+      const fail = (why: string) => new Error(`${file.designation}: no ${branch} density at ${T} K, ${p} Pa (${why})`);
+      let below: number; // ρ with p(ρ) < target
+      let above: number; // ρ with p(ρ) > target
+      if (branch === "liquid") {
+        above = rhoGuess;
+        for (let k = 0; pressureAt(above).p < p; k++) {
+          if (k > 200) throw fail("no pressure above target");
+          above *= 1.05;
+        }
+        below = above;
+        for (let k = 0; ; k++) {
+          const at = pressureAt(below);
+          if (at.p < p) break;
+          if (!(at.dpdrho > 0) || k > 400) throw fail("reached the liquid spinodal");
+          above = below;
+          below /= 1.01;
+        }
+      } else {
+        below = rhoGuess;
+        for (let k = 0; pressureAt(below).p > p; k++) {
+          if (k > 400) throw fail("no pressure below target");
+          below /= 1.05;
+        }
+        above = below;
+        for (let k = 0; ; k++) {
+          const at = pressureAt(above);
+          if (at.p > p) break;
+          if (!(at.dpdrho > 0) || k > 400) throw fail("reached the vapour spinodal");
+          below = above;
+          above *= 1.01;
+        }
       }
-      throw new Error(`${file.designation}: density solve at ${T} K, ${p} Pa did not converge`);
+      let rho = 0.5 * (below + above);
+      for (let iteration = 0; iteration < 200; iteration++) {
+        const at = pressureAt(rho);
+        if (at.p < p) below = rho;
+        else above = rho;
+        let next = rho - (at.p - p) / at.dpdrho;
+        if (!(at.dpdrho > 0) || !(next > Math.min(below, above) && next < Math.max(below, above))) {
+          next = 0.5 * (below + above);
+        }
+        if (Math.abs(next - rho) <= 1e-14 * rho || Math.abs(at.p - p) <= 1e-15 * p) {
+          if (!(pressureAt(next).dpdrho > 0)) throw fail("root is mechanically unstable");
+          return next;
+        }
+        rho = next;
+      }
+      throw fail("did not converge");
     },
   };
   return model;

@@ -68,7 +68,10 @@ export function solvePhaseEquilibrium(
     }
     xL -= stepL;
     xV -= stepV;
-    if (largest < 1e-12) {
+    // Converged when the step is negligible or, close to T_c where the system is
+    // ill-conditioned, when both residuals sit at rounding level.
+    const residualsAtRounding = Math.abs(f1) <= 1e-12 * Math.abs(pV) && Math.abs(f2) <= 1e-12;
+    if (largest < 1e-12 || residualsAtRounding) {
       const liquidDensity = Math.exp(xL) * rhor;
       const vapourDensity = Math.exp(xV) * rhor;
       if (!(liquidDensity > vapourDensity * (1 + 1e-9))) {

@@ -1,0 +1,233 @@
+/**
+ * Generates data/refrigerants/<id>.json: saturation tables computed from the
+ * published Helmholtz equations of state in ../shared/reference (never copied
+ * into the repository). Run with `npm run tables`.
+ *
+ * Pure fluids: phase equilibrium (equal p and g) solved at every row, each row
+ * checked against the superancillary; the build fails beyond 1e-6 relative.
+ * Pseudo-pure blends (R410A, R404A, R407C, R507A): bubble/dew pressures from the
+ * published equations of Lemmon (2003), densities and enthalpies from the same
+ * paper's EOS. Enthalpies on the IIR reference (200 kJ/kg at 0 °C saturated liquid).
+ *
+ * Also writes shared/engine/properties/refrigerant-table-files.ts, the static
+ * import list the engine's registry uses (works in Vite and tsx alike).
+ */
+import { mkdirSync, readdirSync, rmSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import {
+  applyIirReference,
+  createFluidModel,
+  listReferenceDesignations,
+  readReferenceFluid,
+  readReferenceManifest,
+  referencePackExists,
+  referenceRoot,
+  repoRoot,
+  saturationStateAt,
+  saturationTemperatureAt,
+  type FluidModel,
+} from "./eos/index.ts";
+import { REFRIGERANT_METADATA } from "./eos/refrigerant-metadata.ts";
+import { RefrigerantTableSchema, type RefrigerantTable } from "../shared/engine/properties/refrigerant-table-schema.ts";
+
+/** Build fails when a solved point differs from the superancillary by more than this (issue 3). */
+const SUPERANCILLARY_TOLERANCE = 1e-6;
+/** Grid step in K; the interpolation test proves ≤ 0.005 K error between rows. */
+const STEP_K = 0.5;
+/** Lowest table temperature unless the triple point is higher. */
+const LOWEST_C = -60;
+/**
+ * Tables stop this far below the end of the saturation curve. Blends stop earlier:
+ * within a few tenths of a kelvin of T_r the published bubble pressure of R507A falls
+ * below the pseudo-pure EOS's liquid spinodal, so no saturated-liquid density exists.
+ */
+const CRITICAL_MARGIN_K = { pure: 0.1, "pseudo-pure": 0.5 } as const;
+const KELVIN = 273.15;
+const COOLPROP_BIBTEX = "doi:10.1021/ie4033999";
+
+const significant = (value: number, digits: number) => Number(value.toPrecision(digits));
+const decimals = (value: number, places: number) => Number(value.toFixed(places));
+
+function temperatureGrid(model: FluidModel): number[] {
+  const lowC = Math.ceil((Math.max(model.minimumTemperature, LOWEST_C + KELVIN) - KELVIN) * 1000) / 1000;
+  const highC = Math.floor((model.criticalTemperature - CRITICAL_MARGIN_K[model.kind] - KELVIN) * 1000) / 1000;
+  const grid = [lowC];
+  for (let t = Math.floor(lowC / STEP_K + 1) * STEP_K; t < highC - 0.01; t += STEP_K) {
+    const rounded = decimals(t, 3);
+    if (rounded > grid[grid.length - 1]! + 0.01) grid.push(rounded);
+  }
+  grid.push(highC);
+  return grid;
+}
+
+function toKelvin(model: FluidModel, temperatureC: number): number {
+  // rounding of the °C value must not put the first row below the EOS limit
+  return Math.max(temperatureC + KELVIN, model.minimumTemperature);
+}
+
+function buildTable(designation: string, generated: string, dataNote: string): RefrigerantTable {
+  const file = readReferenceFluid(designation);
+  const model = createFluidModel(file);
+  const meta = REFRIGERANT_METADATA[designation];
+  if (!meta) throw new Error(`${designation}: no safety/GWP metadata in scripts/eos/refrigerant-metadata.ts`);
+  applyIirReference(model);
+  const M = model.eos.molarMass;
+  const check = model.kind === "pure" ? SUPERANCILLARY_TOLERANCE : undefined;
+
+  const grid = temperatureGrid(model);
+  const columns: RefrigerantTable["columns"] = {
+    temperature: [], bubblePressure: [], dewPressure: [], bubbleSlope: [], dewSlope: [],
+    liquidDensity: [], vapourDensity: [], liquidEnthalpy: [], vapourEnthalpy: [],
+  };
+  for (const temperatureC of grid) {
+    const state = saturationStateAt(model, toKelvin(model, temperatureC), { checkTolerance: check });
+    columns.temperature.push(temperatureC);
+    columns.bubblePressure.push(significant(state.bubblePressure / 1000, 10));
+    columns.dewPressure.push(significant(state.dewPressure / 1000, 10));
+    columns.bubbleSlope.push(significant(state.bubbleSlope / 1000, 9));
+    columns.dewSlope.push(significant(state.dewSlope / 1000, 9));
+    columns.liquidDensity.push(significant(state.liquidDensity * M, 9));
+    columns.vapourDensity.push(significant(state.vapourDensity * M, 9));
+    columns.liquidEnthalpy.push(decimals(state.liquidEnthalpy / M / 1000, 5));
+    columns.vapourEnthalpy.push(decimals(state.vapourEnthalpy / M / 1000, 5));
+  }
+
+  let criticalPoint: RefrigerantTable["criticalPoint"];
+  if (model.superancillary) {
+    const sa = model.superancillary;
+    criticalPoint = {
+      temperatureC: decimals(sa.criticalTemperature - KELVIN, 4),
+      pressureKPa: significant(sa.pressure(sa.criticalTemperature) / 1000, 7),
+      densityKgPerM3: significant(sa.criticalDensity * M, 7),
+      note: "end of the equation of state's saturation curve (superancillary meta Tcrittrue)",
+    };
+  } else {
+    const c = file.STATES.critical;
+    criticalPoint = {
+      temperatureC: decimals(c.T - KELVIN, 4),
+      pressureKPa: significant(c.p / 1000, 7),
+      densityKgPerM3: significant(c.rhomolar * M, 7),
+      note: "pseudo-critical point of the pseudo-pure equation of state (Lemmon 2003)",
+    };
+  }
+
+  const atmosphere = 101_325;
+  const bubbleAtAtmosphere = model.bubblePressureCurve.value(model.minimumTemperature) < atmosphere;
+  const normalBoilingPoint = bubbleAtAtmosphere
+    ? {
+        bubbleC: decimals(saturationTemperatureAt(model, atmosphere, "bubble") - KELVIN, 4),
+        dewC: decimals(saturationTemperatureAt(model, atmosphere, "dew") - KELVIN, 4),
+      }
+    : null;
+
+  let glideAt0C: RefrigerantTable["glideAt0C"] = null;
+  if (model.kind === "pseudo-pure") {
+    const dewPressure = model.dewPressureCurve.value(KELVIN);
+    const bubbleC = saturationTemperatureAt(model, dewPressure, "bubble") - KELVIN;
+    glideAt0C = {
+      pressureKPa: significant(dewPressure / 1000, 7),
+      bubbleC: decimals(bubbleC, 4),
+      dewC: 0,
+      glideK: decimals(-bubbleC, 4),
+      definition: "dew temperature minus bubble temperature at the dew pressure of 0 °C",
+    };
+  }
+
+  const eos = file.EOS[0];
+  const bibtexKeys = [eos.BibTeX_EOS];
+  if (eos.BibTeX_CP0 && eos.BibTeX_CP0 !== eos.BibTeX_EOS) bibtexKeys.push(eos.BibTeX_CP0);
+  bibtexKeys.push(COOLPROP_BIBTEX);
+  const isBlend = model.kind === "pseudo-pure";
+  const lowerLimit =
+    grid[0]! > LOWEST_C + 1e-9 ? (isBlend ? "200 K limit of the pseudo-pure equations" : "triple point") : "-60 °C table limit";
+
+  const table: RefrigerantTable = {
+    id: designation,
+    name: meta.name,
+    kind: isBlend ? "blend" : "pure",
+    ...(meta.composition ? { composition: meta.composition } : {}),
+    safety: {
+      class: meta.safetyClass as RefrigerantTable["safety"]["class"],
+      standard: "ASHRAE 34 / ISO 817",
+      fromMemory: meta.safetyClassFromMemory,
+    },
+    gwp100: {
+      ...meta.gwp100,
+      source: "IPCC AR4 WG1 Table 2.14 and AR5 WG1 Table 8.A.1 (100-year), as listed in the project's trade notes (TRADE.md §7.2); blends are mass-weighted sums",
+    },
+    criticalPoint,
+    normalBoilingPoint,
+    glideAt0C,
+    referenceState: "IIR: h = 200 kJ/kg and s = 1 kJ/(kg·K) for saturated liquid at 0 °C",
+    source: {
+      equationOfState: isBlend
+        ? `${eos.BibTeX_EOS}: pseudo-pure equation of state with published bubble- and dew-point pressure equations`
+        : `${eos.BibTeX_EOS}: Helmholtz-energy equation of state; saturation by equal pressure and Gibbs energy, checked against the superancillary to ${SUPERANCILLARY_TOLERANCE} relative`,
+      bibtexKeys,
+      data: dataNote,
+      licence: "EOS coefficients from CoolProp fluid files (MIT licence, Bell et al. 2014)",
+      method: `computed by scripts/build-tables.ts every ${STEP_K} K`,
+    },
+    generated,
+    validRange: { minimumC: grid[0]!, maximumC: grid[grid.length - 1]!, lowerLimit },
+    interpolation:
+      "pressure: cubic Hermite of ln p against 1/T using the dp/dT columns (inverse for temperature from pressure); density and enthalpy: linear in T",
+    units: {
+      temperature: "°C",
+      bubblePressure: "kPa absolute",
+      dewPressure: "kPa absolute",
+      bubbleSlope: "kPa/K (dp/dT along the bubble curve)",
+      dewSlope: "kPa/K (dp/dT along the dew curve)",
+      liquidDensity: "kg/m³ (saturated liquid at the bubble pressure)",
+      vapourDensity: "kg/m³ (saturated vapour at the dew pressure)",
+      liquidEnthalpy: "kJ/kg (IIR reference)",
+      vapourEnthalpy: "kJ/kg (IIR reference)",
+    },
+    columns,
+  };
+  return RefrigerantTableSchema.parse(table);
+}
+
+function main(): void {
+  if (!referencePackExists()) {
+    console.error(`Reference equations of state not found at ${referenceRoot}; cannot generate tables.`);
+    process.exit(1);
+  }
+  const manifest = readReferenceManifest();
+  const dataNote = `${manifest.source_repository} commit ${manifest.source_commit} (fluid files via the project's reference pack)`;
+  const generated = new Date().toISOString().slice(0, 10);
+  const outputDirectory = path.join(repoRoot, "data/refrigerants");
+  mkdirSync(outputDirectory, { recursive: true });
+  for (const name of readdirSync(outputDirectory)) {
+    if (name.endsWith(".json")) rmSync(path.join(outputDirectory, name));
+  }
+  const designations = listReferenceDesignations();
+  let totalBytes = 0;
+  for (const designation of designations) {
+    const started = performance.now();
+    const table = buildTable(designation, generated, dataNote);
+    const text = JSON.stringify(table);
+    writeFileSync(path.join(outputDirectory, `${designation}.json`), text + "\n");
+    totalBytes += text.length + 1;
+    console.log(
+      `${designation.padEnd(11)} ${String(table.columns.temperature.length).padStart(4)} rows  ${table.validRange.minimumC} … ${table.validRange.maximumC} °C  ${(text.length / 1024).toFixed(0)} kB  ${(performance.now() - started).toFixed(0)} ms`,
+    );
+  }
+  writeFileSync(
+    path.join(repoRoot, "data/refrigerants/index.json"),
+    JSON.stringify({ generated, refrigerants: designations.map((id) => ({ id, file: `${id}.json` })) }, null, 1) + "\n",
+  );
+
+  const registry = [
+    "// Generated by scripts/build-tables.ts — do not edit. Static imports so Vite and tsx both bundle the tables.",
+    ...designations.map((id, i) => `import table${i} from "../../../data/refrigerants/${id}.json";`),
+    "",
+    "/** Raw generated tables, validated by the registry on first use. */",
+    `export const REFRIGERANT_TABLE_FILES: readonly unknown[] = [${designations.map((_, i) => `table${i}`).join(", ")}];`,
+    "",
+  ].join("\n");
+  writeFileSync(path.join(repoRoot, "shared/engine/properties/refrigerant-table-files.ts"), registry);
+  console.log(`${designations.length} tables, ${(totalBytes / 1024).toFixed(0)} kB in data/refrigerants`);
+}
+
+main();
