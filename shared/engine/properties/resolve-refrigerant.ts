@@ -1,0 +1,107 @@
+/**
+ * Registry of the generated refrigerant tables. The JSON files are imported
+ * statically (refrigerant-table-files.ts, written by `npm run tables`), so the
+ * same code works in the browser bundle, the server and tests with no I/O.
+ * Each table is validated with its zod schema and compiled into typed arrays the
+ * first time it is used; later lookups are a Map hit.
+ */
+import { PropertyRangeError } from "./property-range-error.ts";
+import { KELVIN_OFFSET } from "./property-tolerances.ts";
+import { REFRIGERANT_TABLE_FILES } from "./refrigerant-table-files.ts";
+import { RefrigerantTableSchema, type RefrigerantTable } from "./refrigerant-table-schema.ts";
+
+/** Refrigerant metadata: everything in a table except its rows. */
+export type RefrigerantInfo = Readonly<Omit<RefrigerantTable, "columns" | "units" | "interpolation">>;
+
+/** One saturation curve (bubble or dew) prepared for cubic Hermite interpolation of ln p against 1/T. */
+export interface CompiledCurve {
+  /** ln(p / kPa), strictly increasing */
+  readonly lnPressure: Float64Array;
+  /** d ln p / d(1/T) in K, from the stored dp/dT */
+  readonly slope: Float64Array;
+}
+
+export interface CompiledRefrigerant {
+  readonly info: RefrigerantInfo;
+  readonly units: RefrigerantTable["units"];
+  readonly rowCount: number;
+  /** °C, strictly increasing */
+  readonly temperatureC: Float64Array;
+  /** 1/T in 1/K */
+  readonly inverseTemperature: Float64Array;
+  readonly bubble: CompiledCurve;
+  readonly dew: CompiledCurve;
+  readonly liquidDensity: Float64Array;
+  readonly vapourDensity: Float64Array;
+  readonly liquidEnthalpy: Float64Array;
+  readonly vapourEnthalpy: Float64Array;
+  readonly minimumC: number;
+  readonly maximumC: number;
+}
+
+const rawById = new Map<string, unknown>();
+for (const raw of REFRIGERANT_TABLE_FILES) {
+  const id = (raw as { id?: unknown }).id;
+  if (typeof id === "string") rawById.set(id, raw);
+}
+const compiledById = new Map<string, CompiledRefrigerant>();
+
+/** Every refrigerant id with a table, in file order. */
+export const REFRIGERANT_IDS: readonly string[] = [...rawById.keys()];
+
+function compileCurve(temperatureK: Float64Array, pressure: number[], slope: number[]): CompiledCurve {
+  const lnPressure = Float64Array.from(pressure, Math.log);
+  // d ln p / d(1/T) = −T² (dp/dT) / p
+  const slopeX = Float64Array.from(slope, (dpdT, i) => (-temperatureK[i]! * temperatureK[i]! * dpdT) / pressure[i]!);
+  return { lnPressure, slope: slopeX };
+}
+
+function compile(id: string, raw: unknown): CompiledRefrigerant {
+  const parsed = RefrigerantTableSchema.safeParse(raw);
+  if (!parsed.success) {
+    throw new PropertyRangeError("INVALID_TABLE", id, `The ${id} table is damaged: ${parsed.error.issues[0]?.message ?? "schema check failed"}`);
+  }
+  const { columns, units, interpolation: _interpolation, ...metadata } = parsed.data;
+  const temperatureC = Float64Array.from(columns.temperature);
+  const temperatureK = Float64Array.from(columns.temperature, (t) => t + KELVIN_OFFSET);
+  const info = Object.freeze(metadata);
+  return {
+    info,
+    units,
+    rowCount: temperatureC.length,
+    temperatureC,
+    inverseTemperature: Float64Array.from(temperatureK, (t) => 1 / t),
+    bubble: compileCurve(temperatureK, columns.bubblePressure, columns.bubbleSlope),
+    dew: compileCurve(temperatureK, columns.dewPressure, columns.dewSlope),
+    liquidDensity: Float64Array.from(columns.liquidDensity),
+    vapourDensity: Float64Array.from(columns.vapourDensity),
+    liquidEnthalpy: Float64Array.from(columns.liquidEnthalpy),
+    vapourEnthalpy: Float64Array.from(columns.vapourEnthalpy),
+    minimumC: temperatureC[0]!,
+    maximumC: temperatureC[temperatureC.length - 1]!,
+  };
+}
+
+/**
+ * Resolve a refrigerant id to its compiled table.
+ *
+ * @param id ASHRAE designation as in the table file names, e.g. "R32", "R1234ze(E)" (exact spelling)
+ * @returns the compiled table (cached)
+ * @throws PropertyRangeError UNKNOWN_REFRIGERANT for an id without a table; INVALID_TABLE when the file fails its schema
+ * @example resolveRefrigerant("R32").maximumC // 78.005
+ */
+export function resolveRefrigerant(id: string): CompiledRefrigerant {
+  const cached = compiledById.get(id);
+  if (cached) return cached;
+  const raw = rawById.get(id);
+  if (raw === undefined) {
+    throw new PropertyRangeError(
+      "UNKNOWN_REFRIGERANT",
+      String(id),
+      `${String(id)} is not a refrigerant Satura has tables for (known: ${REFRIGERANT_IDS.join(", ")})`,
+    );
+  }
+  const compiled = compile(id, raw);
+  compiledById.set(id, compiled);
+  return compiled;
+}
