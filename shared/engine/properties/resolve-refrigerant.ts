@@ -49,6 +49,14 @@ const compiledById = new Map<string, CompiledRefrigerant>();
 /** Every refrigerant id with a table, in file order. */
 export const REFRIGERANT_IDS: readonly string[] = [...rawById.keys()];
 
+function deepFreeze<T>(value: T): T {
+  if (value && typeof value === "object") {
+    for (const inner of Object.values(value)) deepFreeze(inner);
+    Object.freeze(value);
+  }
+  return value;
+}
+
 function compileCurve(temperatureK: Float64Array, pressure: number[], slope: number[]): CompiledCurve {
   const lnPressure = Float64Array.from(pressure, Math.log);
   // d ln p / d(1/T) = −T² (dp/dT) / p
@@ -64,7 +72,7 @@ function compile(id: string, raw: unknown): CompiledRefrigerant {
   const { columns, units, interpolation: _interpolation, ...metadata } = parsed.data;
   const temperatureC = Float64Array.from(columns.temperature);
   const temperatureK = Float64Array.from(columns.temperature, (t) => t + KELVIN_OFFSET);
-  const info = Object.freeze(metadata);
+  const info = deepFreeze(metadata);
   return {
     info,
     units,
