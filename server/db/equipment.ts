@@ -1,0 +1,120 @@
+/**
+ * Queries for customers, sites and equipment. Every function takes the caller's
+ * organisation id and never returns another organisation's rows.
+ */
+import { and, asc, eq } from "drizzle-orm";
+import type { z } from "zod";
+import type { CustomerInputSchema, EquipmentValues, SiteInputSchema } from "@shared/schemas/equipment.ts";
+import type { Database } from "./client.ts";
+import { customers, equipment, sites } from "./schema.ts";
+
+type CustomerValues = z.output<typeof CustomerInputSchema>;
+type SiteValues = z.output<typeof SiteInputSchema>;
+
+const customerColumns = {
+  id: customers.id,
+  name: customers.name,
+  contactName: customers.contactName,
+  contactEmail: customers.contactEmail,
+  contactPhone: customers.contactPhone,
+};
+
+export function listCustomers(db: Database, organisationId: string) {
+  return db.select(customerColumns).from(customers).where(eq(customers.organisationId, organisationId)).orderBy(asc(customers.name));
+}
+
+export async function createCustomer(db: Database, organisationId: string, values: CustomerValues) {
+  const [row] = await db.insert(customers).values({ ...values, organisationId }).returning(customerColumns);
+  return row;
+}
+
+const siteColumns = {
+  id: sites.id,
+  customerId: sites.customerId,
+  customerName: customers.name,
+  name: sites.name,
+  address: sites.address,
+  altitudeM: sites.altitudeM,
+};
+
+export function listSites(db: Database, organisationId: string) {
+  return db
+    .select(siteColumns)
+    .from(sites)
+    .innerJoin(customers, eq(customers.id, sites.customerId))
+    .where(eq(sites.organisationId, organisationId))
+    .orderBy(asc(customers.name), asc(sites.name));
+}
+
+export async function getSite(db: Database, organisationId: string, siteId: string) {
+  const [row] = await db
+    .select(siteColumns)
+    .from(sites)
+    .innerJoin(customers, eq(customers.id, sites.customerId))
+    .where(and(eq(sites.organisationId, organisationId), eq(sites.id, siteId)));
+  return row;
+}
+
+/** @returns the new site, or undefined when the customer is not the organisation's. */
+export async function createSite(db: Database, organisationId: string, values: SiteValues) {
+  const [customer] = await db
+    .select({ id: customers.id })
+    .from(customers)
+    .where(and(eq(customers.organisationId, organisationId), eq(customers.id, values.customerId)));
+  if (!customer) return undefined;
+  const [row] = await db.insert(sites).values({ ...values, organisationId }).returning({ id: sites.id });
+  return getSite(db, organisationId, row.id);
+}
+
+const equipmentColumns = {
+  id: equipment.id,
+  siteId: equipment.siteId,
+  siteName: sites.name,
+  customerId: customers.id,
+  customerName: customers.name,
+  name: equipment.name,
+  kind: equipment.kind,
+  location: equipment.location,
+  maker: equipment.maker,
+  model: equipment.model,
+  serial: equipment.serial,
+  refrigerant: equipment.refrigerant,
+  circuits: equipment.circuits,
+  compressorRlaA: equipment.compressorRlaA,
+  compressorLraA: equipment.compressorLraA,
+  fanFlaA: equipment.fanFlaA,
+  supplyVoltageV: equipment.supplyVoltageV,
+  phases: equipment.phases,
+  ratedHighSideKPa: equipment.ratedHighSideKPa,
+  ratedLowSideKPa: equipment.ratedLowSideKPa,
+  createdAt: equipment.createdAt,
+};
+
+function selectEquipment(db: Database) {
+  return db
+    .select(equipmentColumns)
+    .from(equipment)
+    .innerJoin(sites, eq(sites.id, equipment.siteId))
+    .innerJoin(customers, eq(customers.id, sites.customerId));
+}
+
+export type EquipmentRow = Awaited<ReturnType<typeof getEquipment>>;
+
+export function listEquipment(db: Database, organisationId: string) {
+  return selectEquipment(db)
+    .where(and(eq(equipment.organisationId, organisationId), eq(equipment.archived, false)))
+    .orderBy(asc(customers.name), asc(sites.name), asc(equipment.name));
+}
+
+export async function getEquipment(db: Database, organisationId: string, equipmentId: string) {
+  const [row] = await selectEquipment(db).where(and(eq(equipment.organisationId, organisationId), eq(equipment.id, equipmentId)));
+  return row;
+}
+
+/** @returns the new unit, or undefined when the site is not the organisation's. */
+export async function createEquipment(db: Database, organisationId: string, values: EquipmentValues) {
+  const site = await getSite(db, organisationId, values.siteId);
+  if (!site) return undefined;
+  const [row] = await db.insert(equipment).values({ ...values, organisationId }).returning({ id: equipment.id });
+  return getEquipment(db, organisationId, row.id);
+}
