@@ -5,15 +5,29 @@ import express, { type Express, type RequestHandler } from "express";
 import helmet from "helmet";
 import { pinoHttp } from "pino-http";
 import type { Logger } from "pino";
+import { createLucia } from "./auth/lucia.ts";
+import { originCheck } from "./auth/origin-check.ts";
+import { createAuthLimiters, type AuthLimits } from "./auth/rate-limits.ts";
+import { loadSession } from "./auth/session.ts";
 import type { Database } from "./db/client.ts";
 import type { Env } from "./env.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
+import type { Mailer } from "./mail/mailer.ts";
+import { authRouter } from "./routes/auth.ts";
 import { healthRouter } from "./routes/health.ts";
+import { invitationsRouter } from "./routes/invitations.ts";
+import { membersRouter } from "./routes/members.ts";
+import { outboxRouter } from "./routes/outbox.ts";
+import { profileRouter } from "./routes/profile.ts";
 
 export interface AppDeps {
   db: Database;
   env: Env;
   logger: Logger;
+  /** Outgoing mail (server/mail/mailer.ts); the caller starts it and closes it. */
+  mailer: Mailer;
+  /** Tighter or looser sign-in and reset throttles (tests); defaults in server/auth/rate-limits.ts. */
+  authLimits?: Partial<AuthLimits>;
   /** Serves the client: Vite's dev middleware, or nothing (the built files are served from dist/). */
   clientMiddleware?: RequestHandler;
 }
@@ -53,8 +67,18 @@ export function createApp(deps: AppDeps): Express {
   );
   app.use("/api", express.json({ limit: JSON_BODY_LIMIT }));
 
+  const auth = createLucia(deps.db, env);
+  const accountDeps = { ...deps, auth, limiters: createAuthLimiters(deps.authLimits) };
+
   const api = express.Router();
+  api.use(originCheck(env.APP_URL)); // refuse state-changing requests from other sites (CSRF)
+  api.use(loadSession(auth)); // res.locals.auth for signed-in users; see server/auth/session.ts
   api.use("/health", healthRouter(deps.db));
+  api.use("/auth", authRouter(accountDeps));
+  api.use("/members", membersRouter(accountDeps));
+  api.use("/invitations", invitationsRouter(accountDeps));
+  api.use("/profile", profileRouter(accountDeps));
+  api.use("/outbox", outboxRouter(accountDeps));
   api.use(apiNotFound);
   app.use("/api", api);
 

@@ -16,12 +16,51 @@ const EnvSchema = z.object({
     .default("true")
     .transform((value) => value === "true" || value === "1"),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
+
+  /**
+   * The address people reach Satura at, e.g. https://satura.example.com. Links in e-mails
+   * are built from it (never from the request's Host header, which a client can forge),
+   * and it is an allowed Origin for state-changing requests. Defaults to http://localhost:PORT.
+   */
+  APP_URL: z.url({ protocol: /^https?$/ }).optional(),
+  /** Real outgoing mail. Without SMTP_HOST an in-process fake SMTP server receives every message. */
+  SMTP_HOST: z.string().min(1).optional(),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65_535).default(587),
+  SMTP_USER: z.string().min(1).optional(),
+  SMTP_PASS: z.string().min(1).optional(),
+  /** Sender of every message, e.g. "Satura <no-reply@example.com>". */
+  MAIL_FROM: z.string().min(3).default("Satura <no-reply@satura.localhost>"),
+  /**
+   * Shows the Outbox (mail caught by the fake SMTP server) to owners. On by default outside
+   * production; never available when a real SMTP host is configured.
+   */
+  OUTBOX_ENABLED: z.enum(["true", "false", "1", "0"]).optional(),
+  /**
+   * Secure flag of the session cookie. Defaults to on in production; turn it off only for a
+   * plain-http deployment on a closed network, or browsers will drop the cookie.
+   */
+  COOKIE_SECURE: z.enum(["true", "false", "1", "0"]).optional(),
 });
 
-export type Env = z.infer<typeof EnvSchema>;
+const isOn = (value: string | undefined) => value === "true" || value === "1";
+
+/** Settings derived from several variables, worked out once here rather than at each use. */
+const ResolvedEnvSchema = EnvSchema.superRefine((env, context) => {
+  // Real mail carries sign-in links; they must point at the public address, not a guess.
+  if (env.SMTP_HOST && !env.APP_URL && env.NODE_ENV === "production") {
+    context.addIssue({ code: "custom", path: ["APP_URL"], message: "is required when SMTP_HOST is set in production" });
+  }
+}).transform((env) => ({
+  ...env,
+  APP_URL: (env.APP_URL ?? `http://localhost:${env.PORT}`).replace(/\/+$/, ""),
+  outboxEnabled: !env.SMTP_HOST && (env.OUTBOX_ENABLED === undefined ? env.NODE_ENV !== "production" : isOn(env.OUTBOX_ENABLED)),
+  cookieSecure: env.COOKIE_SECURE === undefined ? env.NODE_ENV === "production" : isOn(env.COOKIE_SECURE),
+}));
+
+export type Env = z.infer<typeof ResolvedEnvSchema>;
 
 export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
-  const parsed = EnvSchema.safeParse(source);
+  const parsed = ResolvedEnvSchema.safeParse(source);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((issue) => `  ${issue.path.join(".")}: ${issue.message}`);
     throw new Error(`Invalid environment:\n${lines.join("\n")}`);

@@ -7,6 +7,7 @@ import { createApp } from "./app.ts";
 import { openDatabase } from "./db/client.ts";
 import { seedDemoData } from "./db/seed/seed-demo.ts";
 import { readEnv } from "./env.ts";
+import { createMailer } from "./mail/mailer.ts";
 import { createLogger } from "./logger.ts";
 
 const env = readEnv();
@@ -27,7 +28,11 @@ if (env.NODE_ENV === "development") {
   closeVite = () => vite.close();
 }
 
-const app = createApp({ db: database.db, env, logger, clientMiddleware });
+// Real SMTP from SMTP_HOST, else a fake SMTP server inside this process (development, tests).
+const mailer = await createMailer({ env, db: database.db, logger });
+if (mailer.fakeSmtp) logger.info(`fake SMTP server on ${mailer.fakeSmtp.host}:${mailer.fakeSmtp.port}`);
+
+const app = createApp({ db: database.db, env, logger, mailer, clientMiddleware });
 const server: Server = app.listen(env.PORT, env.HOST, () => {
   const address = server.address();
   const port = typeof address === "object" && address ? address.port : env.PORT;
@@ -45,6 +50,7 @@ async function shutdown(signal: string) {
   timer.unref();
   await new Promise<void>((resolve) => server.close(() => resolve()));
   await closeVite?.();
+  await mailer.close();
   await database.close();
   process.exit(0);
 }

@@ -16,3 +16,15 @@ export async function verifyPassword(passwordHash: string, password: string): Pr
     return false;
   }
 }
+
+let dummyHash: Promise<string> | undefined;
+
+/**
+ * Spends the same time as a real password check, for sign-ins to addresses that have no
+ * account, so response times do not reveal which e-mail addresses are registered.
+ */
+export async function verifyDummyPassword(password: string): Promise<false> {
+  dummyHash ??= hashPassword("satura-timing-equaliser");
+  await verifyPassword(await dummyHash, password);
+  return false;
+}

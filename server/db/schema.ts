@@ -48,19 +48,31 @@ export const users = pgTable(
     passwordHash: text("password_hash").notNull(),
     /** Display preferences; storage stays SI-metric whatever is chosen here. */
     preferences: jsonb("preferences").$type<Record<string, unknown>>().notNull().default({}),
+    /**
+     * Set when an owner removes the member. The row stays, so records they signed keep
+     * their name; a deactivated user cannot sign in and has no sessions.
+     */
+    deactivatedAt: timestamp("deactivated_at", { withTimezone: true, mode: "date" }),
     ...timestamps,
   },
-  (table) => [uniqueIndex("users_email_unique").on(sql`lower(${table.email})`)],
+  (table) => [
+    uniqueIndex("users_email_unique").on(sql`lower(${table.email})`),
+    index("users_organisation_idx").on(table.organisationId),
+  ],
 );
 
 /** Sessions in the shape lucia v3's Drizzle adapter expects (id, user_id, expires_at). */
-export const sessions = pgTable("sessions", {
-  id: text("id").primaryKey(),
-  userId: uuid("user_id")
-    .notNull()
-    .references(() => users.id, { onDelete: "cascade" }),
-  expiresAt: timestamp("expires_at", { withTimezone: true, mode: "date" }).notNull(),
-});
+export const sessions = pgTable(
+  "sessions",
+  {
+    id: text("id").primaryKey(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true, mode: "date" }).notNull(),
+  },
+  (table) => [index("sessions_user_idx").on(table.userId)],
+);
 
 export const invitations = pgTable(
   "invitations",
@@ -78,7 +90,10 @@ export const invitations = pgTable(
     acceptedAt: timestamp("accepted_at", { withTimezone: true, mode: "date" }),
     createdAt,
   },
-  (table) => [uniqueIndex("invitations_token_hash_unique").on(table.tokenHash)],
+  (table) => [
+    uniqueIndex("invitations_token_hash_unique").on(table.tokenHash),
+    index("invitations_organisation_idx").on(table.organisationId),
+  ],
 );
 
 export const passwordResets = pgTable(
@@ -97,15 +112,19 @@ export const passwordResets = pgTable(
 );
 
 /** Mail handed to the SMTP layer, kept so owners can read the outbox in development. */
-export const outboundMail = pgTable("outbound_mail", {
-  id: uuid("id").primaryKey().defaultRandom(),
-  organisationId: uuid("organisation_id").references(() => organisations.id, { onDelete: "cascade" }),
-  to: text("to").notNull(),
-  subject: text("subject").notNull(),
-  text: text("text").notNull(),
-  html: text("html"),
-  createdAt,
-});
+export const outboundMail = pgTable(
+  "outbound_mail",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id").references(() => organisations.id, { onDelete: "cascade" }),
+    to: text("to").notNull(),
+    subject: text("subject").notNull(),
+    text: text("text").notNull(),
+    html: text("html"),
+    createdAt,
+  },
+  (table) => [index("outbound_mail_organisation_idx").on(table.organisationId, table.createdAt)],
+);
 
 export const customers = pgTable(
   "customers",

@@ -1,0 +1,107 @@
+/**
+ * Sessions and authorisation for every API route.
+ *
+ * How later routes use this (jobs/visits, casebook, tables …):
+ *
+ *   router.get("/", requireUser, async (req, res) => {
+ *     const { user, organisationId } = getAuth(res);
+ *     const rows = await listThings(db, organisationId); // every query scoped by organisationId
+ *     …
+ *   });
+ *   router.post("/:id/sign-off", requireRole(...PERMISSIONS.signOff), handler);
+ *
+ * - `loadSession(auth)` runs once for all of /api (mounted in app.ts). It reads the session
+ *   cookie, validates it, renews it when lucia says so, clears it when it is stale, and puts
+ *   `res.locals.auth = { user, session, organisationId }` for a signed-in, active user.
+ * - `requireUser` answers 401 without a session. `requireRole(...roles)` also answers 403 when
+ *   the user's role is not listed. Roles are read from the database on every request, so a
+ *   role change applies at once.
+ * - `getAuth(res)` returns res.locals.auth inside a handler behind requireUser/requireRole
+ *   (it throws a 401 if used without them, so a forgotten guard fails closed).
+ * - Records of another organisation must answer 404, never 403: look them up with
+ *   `where organisation_id = organisationId`, and treat "not found" and "not yours" alike.
+ */
+import type { RequestHandler, Response } from "express";
+import type { Session, User } from "lucia";
+import type { Role } from "@shared/schemas/auth.ts";
+import { HttpError } from "../http/http-error.ts";
+import type { Auth } from "./lucia.ts";
+
+export interface AuthContext {
+  user: User;
+  session: Session;
+  organisationId: string;
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface Locals {
+      /** Set by loadSession for a signed-in, active user; absent otherwise. */
+      auth?: AuthContext;
+    }
+  }
+}
+
+export function loadSession(auth: Auth): RequestHandler {
+  return async (req, res, next) => {
+    try {
+      const sessionId = auth.readSessionCookie(req.headers.cookie ?? "");
+      if (!sessionId) return next();
+      const { session, user } = await auth.validateSession(sessionId);
+      if (!session) {
+        // Expired or signed out elsewhere: drop the dead cookie.
+        res.append("Set-Cookie", auth.createBlankSessionCookie().serialize());
+        return next();
+      }
+      if (user.deactivatedAt) {
+        await auth.invalidateUserSessions(user.id);
+        res.append("Set-Cookie", auth.createBlankSessionCookie().serialize());
+        return next();
+      }
+      // lucia extended the session (renewal on use): send the cookie with the new expiry.
+      if (session.fresh) res.append("Set-Cookie", auth.createSessionCookie(session.id).serialize());
+      res.locals.auth = { user, session, organisationId: user.organisationId };
+      next();
+    } catch (error) {
+      next(error);
+    }
+  };
+}
+
+const SIGN_IN_REQUIRED = "Sign in to continue";
+
+export const requireUser: RequestHandler = (_req, res, next) => {
+  next(res.locals.auth ? undefined : new HttpError(401, SIGN_IN_REQUIRED));
+};
+
+export function requireRole(...roles: readonly Role[]): RequestHandler {
+  return (_req, res, next) => {
+    const context = res.locals.auth;
+    if (!context) return next(new HttpError(401, SIGN_IN_REQUIRED));
+    if (!roles.includes(context.user.role)) {
+      return next(new HttpError(403, "Your role does not allow this. Ask an owner if you need it."));
+    }
+    next();
+  };
+}
+
+export function getAuth(res: Response): AuthContext {
+  const context = res.locals.auth;
+  if (!context) throw new HttpError(401, SIGN_IN_REQUIRED);
+  return context;
+}
+
+/** Creates a session for the user and sets its cookie on the response. */
+export async function startSession(auth: Auth, res: Response, userId: string): Promise<void> {
+  const session = await auth.createSession(userId, {});
+  res.append("Set-Cookie", auth.createSessionCookie(session.id).serialize());
+}
+
+/** Ends the current session, if any, and clears the cookie. */
+export async function endSession(auth: Auth, res: Response): Promise<void> {
+  const current = res.locals.auth;
+  if (current) await auth.invalidateSession(current.session.id);
+  res.locals.auth = undefined;
+  res.append("Set-Cookie", auth.createBlankSessionCookie().serialize());
+}

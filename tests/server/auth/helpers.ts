@@ -1,0 +1,55 @@
+import { eq } from "drizzle-orm";
+import type { Express } from "express";
+import request from "supertest";
+import { users } from "@server/db/schema.ts";
+import { DEMO_PASSWORD, demoPeople } from "@server/db/seed/demo-scenario.ts";
+import { seedDemoData } from "@server/db/seed/seed-demo.ts";
+import type { TestApp } from "../../setup/test-app.ts";
+
+export const BELLBIRD = {
+  owner: "owner@bellbird.example",
+  senior: "senior@bellbird.example",
+  technician: "tech@bellbird.example",
+  apprentice: "apprentice@bellbird.example",
+} as const;
+
+/** A supertest agent (keeps cookies) signed in with the given credentials. */
+export async function signedIn(app: Express, email: string, password = DEMO_PASSWORD) {
+  const agent = request.agent(app);
+  const response = await agent.post("/api/auth/sign-in").send({ email, password });
+  if (response.status !== 200) throw new Error(`sign-in as ${email} failed: ${response.status} ${JSON.stringify(response.body)}`);
+  return agent;
+}
+
+/** Loads the Bellbird demo company and returns each demo person's user id by e-mail. */
+export async function seedBellbird(testApp: TestApp): Promise<Record<string, string>> {
+  await seedDemoData(testApp.database.db);
+  const ids: Record<string, string> = {};
+  for (const person of demoPeople) {
+    const [row] = await testApp.database.db.select({ id: users.id }).from(users).where(eq(users.email, person.email));
+    ids[person.email] = row.id;
+  }
+  return ids;
+}
+
+/** A second, unrelated company with its own owner, signed in. */
+export async function signUpOtherCompany(app: Express, email = "owner@coldfront.example") {
+  const agent = request.agent(app);
+  const response = await agent
+    .post("/api/auth/sign-up")
+    .send({ name: "Alex Marr", email, password: "frosty-coil-44-north", organisationName: "Coldfront Refrigeration" });
+  if (response.status !== 201) throw new Error(`sign-up failed: ${response.status} ${JSON.stringify(response.body)}`);
+  return { agent, user: response.body.user as { id: string; organisationId: string } };
+}
+
+/** The first URL in a mail caught by the fake SMTP server. */
+export function linkIn(decodedMail: string): URL {
+  const match = decodedMail.match(/https?:\/\/[^\s"<>]+/);
+  if (!match) throw new Error("no link in the mail");
+  return new URL(match[0]);
+}
+
+export function cookieHeader(response: request.Response): string[] {
+  const header = response.headers["set-cookie"] as unknown;
+  return Array.isArray(header) ? (header as string[]) : typeof header === "string" ? [header] : [];
+}
