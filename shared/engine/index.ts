@@ -33,3 +33,19 @@ export { convertTemperatureDifference } from "./units/convert-temperature-differ
 export { pressureToDisplay } from "./units/pressure-to-display.ts";
 export type { PressureScale } from "./units/pressure-to-display.ts";
 export { pressureFromDisplay } from "./units/pressure-from-display.ts";
+
+// Charge diagnosis (superheat, subcooling, targets, findings)
+export { diagnose, MIN_VERDICT_SCORE } from "./diagnosis/diagnose.ts";
+export { assessTrend, SETTLED_WINDOW_MINUTES, SETTLED_MAX_CHANGE_K } from "./diagnosis/assess-trend.ts";
+export { DiagnosisInputError } from "./diagnosis/diagnosis-input-error.ts";
+export type { FieldErrors } from "./diagnosis/diagnosis-input-error.ts";
+export { superheat } from "./diagnosis/superheat.ts";
+export { subcooling } from "./diagnosis/subcooling.ts";
+export { fixedOrificeTargetSuperheat } from "./diagnosis/fixed-orifice-target-superheat.ts";
+export type { FixedOrificeTarget } from "./diagnosis/fixed-orifice-target-superheat.ts";
+export { selectSuperheatTarget } from "./diagnosis/select-superheat-target.ts";
+export { selectSubcoolingTarget } from "./diagnosis/select-subcooling-target.ts";
+export { wetBulbFromRelativeHumidity } from "./diagnosis/psychrometrics/wet-bulb-from-relative-humidity.ts";
+export { DIAGNOSIS_RULES } from "./diagnosis/rules/registry.ts";
+export type { DiagnosisRule, DiagnosisSnapshot } from "./diagnosis/types.ts";
+export * as diagnosisLimits from "./diagnosis/diagnosis-limits.ts";

@@ -246,7 +246,7 @@ export const FindingSchema = z.object({
   value: z.number(),
   unit: z.string(),
   direction: z.enum(FINDING_DIRECTIONS),
-  /** States this reading points to (and away from), strongest first. */
+  /** States this reading points to (positive) and away from (negative), in the rule's order. */
   pointsTo: z.array(EvidenceSchema),
   /** One sentence for the technician. */
   message: z.string(),

@@ -1,0 +1,87 @@
+import {
+  DiagnosisInputSchema,
+  type DiagnosisInputDraft,
+  type DiagnosisResult,
+  type DiagnosisWarning,
+  type Finding,
+} from "../../schemas/diagnosis.ts";
+import { buildDiagnosisSnapshot } from "./build-diagnosis-snapshot.ts";
+import { DiagnosisInputError } from "./diagnosis-input-error.ts";
+import { rankChargeStates } from "./rank-charge-states.ts";
+import { DIAGNOSIS_RULES } from "./rules/registry.ts";
+
+/**
+ * Smallest winning score for a verdict: below it the evidence is too thin and the result is
+ * "insufficient-data" (score 0.5 ≈ confidence 0.39; about half of one full-strength reading).
+ */
+export const MIN_VERDICT_SCORE = 0.5;
+
+/** Rules whose findings carry the charge signal; without one of them judged there is no verdict. */
+const PRIMARY_RULES = new Set(["superheat-vs-target", "subcooling-vs-target"]);
+
+/**
+ * Charge diagnosis of one running circuit: saturation temperatures (dew point at suction,
+ * bubble point at the liquid pressure), superheat, subcooling, glide, their targets, the air
+ * and condenser values, and the charge state with its evidence and warnings.
+ *
+ * How: the readings are validated (`DiagnosisInputSchema`), every derived value is computed
+ * once into a snapshot through the property engine, each rule of `DIAGNOSIS_RULES` turns the
+ * snapshot into findings (each pointing to states with a weight) and warnings, and
+ * `rankChargeStates` sums the evidence. The top state wins if its score reaches
+ * `MIN_VERDICT_SCORE` and superheat or subcooling was judged against a target; otherwise the
+ * verdict is "insufficient-data". Symptom patterns: TRADE.md §2 [S21][S22][S23][S24].
+ *
+ * Units: kPa gauge, °C in; °C, K, ratios out (see `DiagnosisResultSchema`).
+ *
+ * @throws {DiagnosisInputError} when the readings are invalid or impossible (field messages),
+ *   or the refrigerant is unknown
+ * @example diagnose({ refrigerant: "R410A", meteringDevice: "txv", suctionPressureKPa: 820, suctionLineTempC: 13, liquidPressureKPa: 2650, liquidLineTempC: 38 }).chargeState
+ */
+export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
+  const parsed = DiagnosisInputSchema.safeParse(input);
+  if (!parsed.success) throw DiagnosisInputError.fromZodError(parsed.error);
+  const snapshot = buildDiagnosisSnapshot(parsed.data);
+
+  const findings: Finding[] = [];
+  const warnings: DiagnosisWarning[] = [];
+  for (const rule of DIAGNOSIS_RULES) {
+    const output = rule.evaluate(snapshot);
+    for (const finding of output.findings) findings.push(finding);
+    for (const warning of output.warnings) warnings.push(warning);
+  }
+
+  const ranked = rankChargeStates(findings);
+  const judged = findings.some(
+    (finding) => PRIMARY_RULES.has(finding.ruleId) && (finding.direction === "low" || finding.direction === "normal" || finding.direction === "high"),
+  );
+  const top = ranked[0];
+  const verdict = judged && top !== undefined && top.score >= MIN_VERDICT_SCORE ? top : null;
+
+  return {
+    refrigerant: parsed.data.refrigerant,
+    meteringDevice: parsed.data.meteringDevice,
+    evaporatingTempC: snapshot.evaporatingTempC,
+    evaporatingBubbleTempC: snapshot.evaporatingBubbleTempC,
+    condensingTempC: snapshot.condensingTempC,
+    condensingDewTempC: snapshot.condensingDewTempC,
+    glideK: snapshot.glideK,
+    condenserGlideK: snapshot.condenserGlideK,
+    superheatK: snapshot.superheatK,
+    subcoolingK: snapshot.subcoolingK,
+    targets: { superheat: snapshot.superheatTarget, subcooling: snapshot.subcoolingTarget },
+    returnAirWetBulbC: snapshot.returnAirWetBulbC,
+    wetBulbBasis: snapshot.wetBulbBasis,
+    temperatureSplitK: snapshot.temperatureSplitK,
+    condenserApproachK: snapshot.condenserApproachK,
+    condensingOverAmbientK: snapshot.condensingOverAmbientK,
+    evaporatorTemperatureDifferenceK: snapshot.evaporatorTemperatureDifferenceK,
+    compressionRatio: snapshot.compressionRatio,
+    compressionRatioBasis: snapshot.compressionRatioBasis,
+    compressorCurrentRatio: snapshot.compressorCurrentRatio,
+    chargeState: verdict ? verdict.state : "insufficient-data",
+    confidence: verdict ? verdict.confidence : 0,
+    alternatives: verdict ? ranked.slice(1) : ranked,
+    findings,
+    warnings,
+  };
+}

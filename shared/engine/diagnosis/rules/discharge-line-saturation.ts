@@ -1,0 +1,18 @@
+import type { DiagnosisRule } from "../types.ts";
+
+const SOURCE = "discharge gas is superheated vapour, so its line cannot be colder than the dew point at discharge pressure (TRADE.md §1.2)";
+
+/** Discharge line colder than the condensing dew point: impossible, the reading is not used. */
+export const dischargeLineSaturationRule: DiagnosisRule = {
+  id: "discharge-line-saturation",
+  description: "Discharge line temperature below the dew point at discharge pressure is impossible",
+  source: SOURCE,
+  evaluate(snapshot) {
+    const exclusion = snapshot.dischargeLineExcluded;
+    if (!exclusion) return { findings: [], warnings: [] };
+    return {
+      findings: [],
+      warnings: [{ code: exclusion.code, severity: "invalid-data", field: exclusion.field, message: exclusion.reason, source: SOURCE }],
+    };
+  },
+};

@@ -1,0 +1,19 @@
+import { cite } from "../sources.ts";
+import type { DiagnosisRule } from "../types.ts";
+
+const SOURCE = `${cite(["S13"])}; TRADE.md §1.2 (subcooling exists only downstream of the condensing section)`;
+
+/** Refuses subcooling when the "liquid" temperature was taken on the discharge line. */
+export const liquidTemperatureLocationRule: DiagnosisRule = {
+  id: "liquid-temperature-location",
+  description: "A temperature from the discharge line carries superheated vapour and cannot give subcooling",
+  source: SOURCE,
+  evaluate(snapshot) {
+    const exclusion = snapshot.subcoolingExcluded;
+    if (exclusion?.code !== "subcooling-on-discharge-line") return { findings: [], warnings: [] };
+    return {
+      findings: [],
+      warnings: [{ code: exclusion.code, severity: "invalid-data", field: exclusion.field, message: exclusion.reason, source: SOURCE }],
+    };
+  },
+};

@@ -1,0 +1,28 @@
+import { MIN_RUN_MINUTES } from "../diagnosis-limits.ts";
+import { COMMON_PRACTICE, cite } from "../sources.ts";
+import type { DiagnosisRule } from "../types.ts";
+
+const SOURCE = `${cite(["S10", "S20"])}; ${MIN_RUN_MINUTES}-minute minimum: ${COMMON_PRACTICE}`;
+
+/** Warns when the compressor has run too briefly for readings to have settled. */
+export const runTimeRule: DiagnosisRule = {
+  id: "run-time",
+  description: `Readings taken before ${MIN_RUN_MINUTES} minutes of running have not settled`,
+  source: SOURCE,
+  evaluate(snapshot) {
+    const minutes = snapshot.input.runMinutes;
+    if (minutes === undefined || minutes >= MIN_RUN_MINUTES) return { findings: [], warnings: [] };
+    return {
+      findings: [],
+      warnings: [
+        {
+          code: "short-run-time",
+          severity: "caution",
+          field: "runMinutes",
+          message: `The unit has run ${minutes.toFixed(0)} min: pressures and temperatures drift for 10–15 min after a start or an adjustment; wait (Title 24 reads at 15 min) before deciding`,
+          source: SOURCE,
+        },
+      ],
+    };
+  },
+};

@@ -1,0 +1,26 @@
+import { COMMON_PRACTICE } from "../sources.ts";
+import { formatTenths } from "../format-tenths.ts";
+import type { DiagnosisRule } from "../types.ts";
+
+/** Supply air warmer than return air: the coil is not cooling (or the probes are swapped). */
+export const supplyAirRule: DiagnosisRule = {
+  id: "supply-air",
+  description: "Supply air warmer than return air means no cooling, or swapped probes",
+  source: COMMON_PRACTICE,
+  evaluate(snapshot) {
+    const split = snapshot.temperatureSplitK;
+    if (split === null || split >= 0) return { findings: [], warnings: [] };
+    return {
+      findings: [],
+      warnings: [
+        {
+          code: "supply-warmer-than-return",
+          severity: "caution",
+          field: "supplyAirDryBulbC",
+          message: `Supply air is ${formatTenths(-split)} K warmer than return air: check the probes are not swapped and the unit is in cooling`,
+          source: COMMON_PRACTICE,
+        },
+      ],
+    };
+  },
+};

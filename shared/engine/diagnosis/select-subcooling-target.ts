@@ -1,0 +1,31 @@
+import type { TargetBand } from "../../schemas/diagnosis.ts";
+import {
+  DEFAULT_SUBCOOLING_BAND,
+  DEFAULT_SUBCOOLING_SOURCE,
+  NAMEPLATE_TARGET_TOLERANCE_K,
+  NAMEPLATE_TARGET_TOLERANCE_SOURCE,
+} from "./diagnosis-limits.ts";
+
+/**
+ * Chooses the subcooling band: the maker's target ± 1.7 K (Title 24 tolerance, memory) when
+ * given — TXV/EEV systems are charged to it [S9][S11][S14] — else the common-practice band
+ * 4.4–8.3 K [S14].
+ *
+ * Units: K.
+ *
+ * @throws never
+ * @example selectSubcoolingTarget(5).lowK // 3.3
+ */
+export function selectSubcoolingTarget(nameplateTargetK: number | undefined): TargetBand {
+  if (nameplateTargetK !== undefined) {
+    return {
+      targetK: nameplateTargetK,
+      lowK: Math.max(0, nameplateTargetK - NAMEPLATE_TARGET_TOLERANCE_K),
+      highK: nameplateTargetK + NAMEPLATE_TARGET_TOLERANCE_K,
+      basis: "nameplate",
+      source: `maker's target; ±${NAMEPLATE_TARGET_TOLERANCE_K} K: ${NAMEPLATE_TARGET_TOLERANCE_SOURCE}`,
+    };
+  }
+  const { lowK, highK, targetK } = DEFAULT_SUBCOOLING_BAND;
+  return { targetK, lowK, highK, basis: "common-practice", source: DEFAULT_SUBCOOLING_SOURCE };
+}
