@@ -29,6 +29,8 @@ export function createRouter(queryClient: QueryClient) {
           errorElement: <RouteError />,
           children: [
             { path: paths.home.path, lazy: lazyRoute(queryClient, () => import("./routes/home.tsx")) },
+            { path: paths.tables.path, lazy: lazyRoute(queryClient, () => import("./routes/pt-tables.tsx")) },
+            { path: paths.tables.detail.path, lazy: lazyRoute(queryClient, () => import("./routes/pt-table.tsx")) },
             { path: paths.safety.path, lazy: lazyRoute(queryClient, () => import("./routes/safety.tsx")) },
             { path: "*", lazy: lazyRoute(queryClient, () => import("./routes/not-found.tsx")) },
           ],

@@ -1,4 +1,4 @@
-import { HardHat, Home, type LucideIcon } from "lucide-react";
+import { HardHat, Home, Table2, type LucideIcon } from "lucide-react";
 import { paths } from "./paths.ts";
 
 export interface NavItem {
@@ -12,5 +12,6 @@ export interface NavItem {
 /** The app's sections, in the order a technician reaches for them. */
 export const navigation: NavItem[] = [
   { label: "Today", href: paths.home.getHref(), icon: Home },
+  { label: "P–T tables", href: paths.tables.getHref(), icon: Table2, matchPrefix: true },
   { label: "Safety", href: paths.safety.getHref(), icon: HardHat },
 ];

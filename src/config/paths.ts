@@ -2,4 +2,9 @@
 export const paths = {
   home: { path: "/", getHref: () => "/" },
   safety: { path: "/safety", getHref: () => "/safety" },
+  tables: {
+    path: "/tables",
+    getHref: () => "/tables",
+    detail: { path: "/tables/:refrigerantId", getHref: (id: string) => `/tables/${encodeURIComponent(id)}` },
+  },
 } as const;

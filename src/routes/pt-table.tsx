@@ -1,0 +1,123 @@
+import { Printer } from "lucide-react";
+import { useState } from "react";
+import { Link, useParams } from "react-router-dom";
+import { listRefrigerants, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.ts";
+import { safetyClasses } from "@shared/content/safety-classes.ts";
+import { Button } from "@/components/ui/button/button.tsx";
+import { paths } from "@/config/paths.ts";
+import { CautionPanel } from "@/features/safety/components/caution-panel.tsx";
+import { RefrigerantFacts } from "@/features/pt-tables/components/refrigerant-facts.tsx";
+import { SafetyBadge } from "@/features/pt-tables/components/safety-badge.tsx";
+import { SaturationConverter } from "@/features/pt-tables/components/saturation-converter.tsx";
+import { SaturationTable } from "@/features/pt-tables/components/saturation-table.tsx";
+import { TableControls, type TableRange } from "@/features/pt-tables/components/table-controls.tsx";
+import { UnitsBar } from "@/features/pt-tables/components/units-bar.tsx";
+import { resolveRange } from "@/features/pt-tables/utils/resolve-range.ts";
+import { METRIC_UNITS, formatNumber, temperatureToDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
+
+function defaultRange(minimumC: number, maximumC: number, units: DisplayUnits): TableRange {
+  // The service range most technicians read: -40 … +60 °C, inside the table.
+  const from = Math.max(Math.ceil(minimumC), -40);
+  const to = Math.min(Math.floor(maximumC), 60);
+  return {
+    fromText: formatNumber(temperatureToDisplay(from, units.temperature), 0),
+    toText: formatNumber(temperatureToDisplay(to, units.temperature), 0),
+    stepK: 1,
+    scale: "gauge",
+  };
+}
+
+export default function PtTableRoute() {
+  const { refrigerantId = "" } = useParams();
+  const info = listRefrigerants().find((candidate) => candidate.id === refrigerantId);
+  const [units, setUnits] = useState<DisplayUnits>(METRIC_UNITS);
+  const [range, setRange] = useState<TableRange | null>(null);
+
+  if (!info) {
+    return (
+      <div className="space-y-3">
+        <h1 className="text-2xl font-semibold">Unknown refrigerant</h1>
+        <p>
+          Satura has no table for “<span className="num">{refrigerantId}</span>”.
+        </p>
+        <Link to={paths.tables.getHref()} className="font-medium text-accent underline underline-offset-4">
+          All P–T tables
+        </Link>
+      </div>
+    );
+  }
+
+  const limits = info.validRange;
+  const currentRange = range ?? defaultRange(limits.minimumC, limits.maximumC, units);
+  const resolved = resolveRange(currentRange.fromText, currentRange.toText, currentRange.stepK, units.temperature, limits);
+  const caution = safetyClasses[info.safety.class].caution;
+  const atmosphericKPa = STANDARD_ATMOSPHERE_KPA;
+
+  return (
+    <div className="space-y-5">
+      <nav aria-label="Breadcrumb" className="no-print text-sm">
+        <Link to={paths.tables.getHref()} className="text-accent underline underline-offset-4">
+          P–T tables
+        </Link>{" "}
+        / <span className="num">{info.id}</span>
+      </nav>
+      <header className="flex flex-wrap items-center gap-3">
+        <h1 className="num text-3xl font-semibold">{info.id}</h1>
+        <SafetyBadge safetyClass={info.safety.class} />
+        <span className="text-muted">{info.name}</span>
+      </header>
+      {caution && (
+        <div className="no-print">
+          <CautionPanel topic={caution} compact />
+        </div>
+      )}
+      <div className="no-print">
+        <UnitsBar
+          units={units}
+          onChange={(next) => {
+            setUnits(next);
+            // The typed range is in the old unit: restart it in the new one.
+            if (next.temperature !== units.temperature) setRange(null);
+          }}
+        />
+      </div>
+      <div className="no-print">
+        <SaturationConverter refrigerantId={info.id} isBlend={info.kind === "blend"} units={units} atmosphericKPa={atmosphericKPa} />
+      </div>
+      <section aria-labelledby="table-heading" className="space-y-3">
+        <div className="flex flex-wrap items-center justify-between gap-2">
+          <h2 id="table-heading" className="text-lg font-semibold">
+            Saturation table
+          </h2>
+          <Button variant="secondary" className="no-print" onClick={() => window.print()}>
+            <Printer aria-hidden className="size-5" /> Print
+          </Button>
+        </div>
+        <p className="text-sm text-muted">
+          Gauge pressures against an atmosphere of <span className="num">{atmosphericKPa} kPa</span>.
+        </p>
+        <TableControls range={currentRange} onChange={setRange} temperatureUnit={units.temperature} error={resolved.ok ? null : resolved.message} />
+        <div className="max-h-[70vh] overflow-auto rounded-card border-2 border-rule bg-surface print:max-h-none print:overflow-visible">
+          {resolved.ok && (
+            <SaturationTable
+              refrigerantId={info.id}
+              isBlend={info.kind === "blend"}
+              fromC={resolved.fromC}
+              toC={resolved.toC}
+              stepK={currentRange.stepK}
+              units={units}
+              scale={currentRange.scale}
+              atmosphericKPa={atmosphericKPa}
+            />
+          )}
+        </div>
+      </section>
+      <section aria-labelledby="facts-heading" className="rounded-card border-2 border-rule bg-surface p-4">
+        <h2 id="facts-heading" className="mb-2 text-lg font-semibold">
+          About {info.id}
+        </h2>
+        <RefrigerantFacts info={info} temperatureUnit={units.temperature} />
+      </section>
+    </div>
+  );
+}
