@@ -6,6 +6,9 @@
  * Every organisation-owned row carries organisation_id: queries are always scoped by it.
  */
 import { sql } from "drizzle-orm";
+import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
+import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
+import type { VisitStatus } from "@shared/schemas/visits.ts";
 import {
   boolean,
   doublePrecision,
@@ -13,6 +16,7 @@ import {
   integer,
   jsonb,
   pgTable,
+  primaryKey,
   text,
   timestamp,
   uniqueIndex,
@@ -161,18 +165,6 @@ export const sites = pgTable(
   (table) => [index("sites_organisation_idx").on(table.organisationId)],
 );
 
-export const METERING_DEVICES = ["txv", "eev", "fixed-orifice", "capillary"] as const;
-export type MeteringDevice = (typeof METERING_DEVICES)[number];
-
-/** One refrigerant circuit of a unit, as its nameplate states it. */
-export interface CircuitNameplate {
-  number: number;
-  factoryChargeKg: number;
-  meteringDevice: MeteringDevice;
-  targetSuperheatK?: number | null;
-  targetSubcoolingK?: number | null;
-}
-
 export const equipment = pgTable(
   "equipment",
   {
@@ -203,4 +195,133 @@ export const equipment = pgTable(
     ...timestamps,
   },
   (table) => [index("equipment_organisation_idx").on(table.organisationId), index("equipment_site_idx").on(table.siteId)],
+);
+
+/** A visit to one unit: the run log, adjustments, comments and photos hang off it. */
+export const visits = pgTable(
+  "visits",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    equipmentId: uuid("equipment_id")
+      .notNull()
+      .references(() => equipment.id, { onDelete: "cascade" }),
+    reason: text("reason").notNull(),
+    status: text("status").$type<VisitStatus>().notNull().default("open"),
+    /** The senior's reason when sent back, or note when signed off. */
+    reviewNote: text("review_note"),
+    signedOffBy: uuid("signed_off_by").references(() => users.id, { onDelete: "set null" }),
+    signedOffAt: timestamp("signed_off_at", { withTimezone: true, mode: "date" }),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    startedAt: timestamp("started_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...timestamps,
+  },
+  (table) => [
+    index("visits_organisation_idx").on(table.organisationId),
+    index("visits_equipment_idx").on(table.equipmentId),
+    index("visits_status_idx").on(table.organisationId, table.status),
+  ],
+);
+
+export const visitTechnicians = pgTable(
+  "visit_technicians",
+  {
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+  },
+  (table) => [primaryKey({ columns: [table.visitId, table.userId] })],
+);
+
+/**
+ * One timed set of readings on one circuit. `input` is what the technician entered
+ * (SI-metric, gauge pressures); `result` is what the server's diagnosis engine made of it.
+ */
+export const readings = pgTable(
+  "readings",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    circuit: integer("circuit").notNull(),
+    takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    note: text("note"),
+    input: jsonb("input").$type<DiagnosisInput>().notNull(),
+    result: jsonb("result").$type<DiagnosisResult>().notNull(),
+    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt,
+  },
+  (table) => [index("readings_visit_idx").on(table.visitId, table.circuit, table.takenAt)],
+);
+
+/** A change made to the unit during the visit, drawn on the trend chart. */
+export const adjustments = pgTable(
+  "adjustments",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    circuit: integer("circuit"),
+    at: timestamp("at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    kind: text("kind").notNull(),
+    description: text("description").notNull(),
+    amountKg: doublePrecision("amount_kg"),
+    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt,
+  },
+  (table) => [index("adjustments_visit_idx").on(table.visitId, table.at)],
+);
+
+export const visitComments = pgTable(
+  "visit_comments",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    readingId: uuid("reading_id").references(() => readings.id, { onDelete: "cascade" }),
+    authorId: uuid("author_id").references(() => users.id, { onDelete: "set null" }),
+    body: text("body").notNull(),
+    createdAt,
+  },
+  (table) => [index("visit_comments_visit_idx").on(table.visitId, table.createdAt)],
+);
+
+/** Photos are stored as files under the data folder with random names; this is their index. */
+export const photos = pgTable(
+  "photos",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    kind: text("kind").notNull(),
+    caption: text("caption"),
+    storedName: text("stored_name").notNull(),
+    thumbnailName: text("thumbnail_name").notNull(),
+    mimeType: text("mime_type").notNull(),
+    bytes: integer("bytes").notNull(),
+    uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt,
+  },
+  (table) => [index("photos_visit_idx").on(table.visitId)],
 );

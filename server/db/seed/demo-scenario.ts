@@ -2,7 +2,8 @@
  * The invented demo world of PRODUCT.md: Bellbird Mechanical, a small service company,
  * and the Wattle Lane Clinic it maintains. Every name and figure here is made up.
  */
-import type { CircuitNameplate, Role } from "../schema.ts";
+import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
+import type { Role } from "../schema.ts";
 
 export const DEMO_PASSWORD = "bellbird-demo-2026";
 
