@@ -16,8 +16,12 @@ import { DIAGNOSIS_RULES } from "./rules/registry.ts";
  */
 export const MIN_VERDICT_SCORE = 0.5;
 
-/** Rules whose findings carry the charge signal; without one of them judged there is no verdict. */
-const PRIMARY_RULES = new Set(["superheat-vs-target", "subcooling-vs-target"]);
+/**
+ * The rule that carries the charge signal per metering family: a fixed device is charged by
+ * superheat [S10][S17], a TXV/EEV by subcooling [S9][S11][S14]. Without that reading judged
+ * against a target there is no verdict (weigh in the charge instead).
+ */
+const PRIMARY_RULE = { fixed: "superheat-vs-target", "expansion-valve": "subcooling-vs-target" } as const;
 
 /**
  * Charge diagnosis of one running circuit: saturation temperatures (dew point at suction,
@@ -28,8 +32,9 @@ const PRIMARY_RULES = new Set(["superheat-vs-target", "subcooling-vs-target"]);
  * once into a snapshot through the property engine, each rule of `DIAGNOSIS_RULES` turns the
  * snapshot into findings (each pointing to states with a weight) and warnings, and
  * `rankChargeStates` sums the evidence. The top state wins if its score reaches
- * `MIN_VERDICT_SCORE` and superheat or subcooling was judged against a target; otherwise the
- * verdict is "insufficient-data". Symptom patterns: TRADE.md §2 [S21][S22][S23][S24].
+ * `MIN_VERDICT_SCORE` and the metering device's charge signal (superheat for fixed devices,
+ * subcooling for TXV/EEV) was judged against a target; otherwise the verdict is
+ * "insufficient-data". Symptom patterns: TRADE.md §2 [S21][S22][S23][S24].
  *
  * Units: kPa gauge, °C in; °C, K, ratios out (see `DiagnosisResultSchema`).
  *
@@ -51,8 +56,9 @@ export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
   }
 
   const ranked = rankChargeStates(findings);
+  const primaryRule = PRIMARY_RULE[snapshot.meteringFamily];
   const judged = findings.some(
-    (finding) => PRIMARY_RULES.has(finding.ruleId) && (finding.direction === "low" || finding.direction === "normal" || finding.direction === "high"),
+    (finding) => finding.ruleId === primaryRule && (finding.direction === "low" || finding.direction === "normal" || finding.direction === "high"),
   );
   const top = ranked[0];
   const verdict = judged && top !== undefined && top.score >= MIN_VERDICT_SCORE ? top : null;

@@ -11,7 +11,7 @@ export const CONDENSING_OVER_AMBIENT_PROFILE: EvidenceProfile = {
   "weak-compressor": [0.5, 0, -0.3],
   undercharged: [0.4, 0, -0.3],
   "restricted-metering": [0.2, 0, 0],
-  normal: [-0.2, 0.2, -0.3],
+  normal: [-0.4, 0.2, -0.8],
 };
 
 const SOURCE = cite(["S26", "S21", "S122"]);

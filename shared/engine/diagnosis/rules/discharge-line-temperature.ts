@@ -52,6 +52,7 @@ export const dischargeLineTemperatureRule: DiagnosisRule = {
       { state: "weak-compressor", weight: 0.3 * strength },
       { state: "undercharged", weight: 0.2 * strength },
       { state: "condenser-airflow", weight: 0.2 * strength },
+      { state: "normal", weight: -0.3 * strength },
     ];
     return {
       findings: [

@@ -13,6 +13,7 @@ export const EVAPORATOR_TD_PROFILE: EvidenceProfile = {
   "low-evaporator-airflow": [-0.3, 0, 0.6],
   "restricted-metering": [-0.3, 0, 0.5],
   undercharged: [-0.3, 0, 0.4],
+  normal: [-0.4, 0, -0.4],
 };
 
 const SOURCE = `${cite(["S21", "S122"])}; ${EVAPORATOR_TD_SOURCE}`;

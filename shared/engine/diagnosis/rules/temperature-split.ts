@@ -11,7 +11,7 @@ export const TEMPERATURE_SPLIT_PROFILE: EvidenceProfile = {
   "weak-compressor": [0.3, 0, -0.2],
   "condenser-airflow": [0.1, 0, 0],
   "non-condensables": [0.1, 0, 0],
-  normal: [-0.2, 0.2, -0.2],
+  normal: [-0.4, 0.2, -0.8],
 };
 
 const SOURCE = cite(["S33", "S21"]);
