@@ -5,6 +5,7 @@ import {
   type DiagnosisWarning,
   type Finding,
 } from "../../schemas/diagnosis.ts";
+import { PropertyRangeError } from "../properties/property-range-error.ts";
 import { buildDiagnosisSnapshot } from "./build-diagnosis-snapshot.ts";
 import { DiagnosisInputError } from "./diagnosis-input-error.ts";
 import { rankChargeStates } from "./rank-charge-states.ts";
@@ -45,7 +46,15 @@ const PRIMARY_RULE = { fixed: "superheat-vs-target", "expansion-valve": "subcool
 export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
   const parsed = DiagnosisInputSchema.safeParse(input);
   if (!parsed.success) throw DiagnosisInputError.fromZodError(parsed.error);
-  const snapshot = buildDiagnosisSnapshot(parsed.data);
+  let snapshot;
+  try {
+    snapshot = buildDiagnosisSnapshot(parsed.data);
+  } catch (error) {
+    if (error instanceof PropertyRangeError && error.code === "UNKNOWN_REFRIGERANT") {
+      throw new DiagnosisInputError({ refrigerant: [error.message] });
+    }
+    throw error;
+  }
 
   const findings: Finding[] = [];
   const warnings: DiagnosisWarning[] = [];
