@@ -30,8 +30,8 @@ import {
 import { REFRIGERANT_METADATA } from "./eos/refrigerant-metadata.ts";
 import { RefrigerantTableSchema, type RefrigerantTable } from "../shared/engine/properties/refrigerant-table-schema.ts";
 
-/** Build fails when a solved point differs from the superancillary by more than this (issue 3). */
-const SUPERANCILLARY_TOLERANCE = 1e-6;
+// Build fails when a solved point differs from the superancillary by more than SUPERANCILLARY_TOLERANCE (issue 3).
+import { SUPERANCILLARY_TOLERANCE } from "../shared/engine/properties/property-tolerances.ts";
 /** Grid step in K; the interpolation test proves ≤ 0.005 K error between rows. */
 const STEP_K = 0.5;
 /** Lowest table temperature unless the triple point is higher. */
@@ -171,7 +171,7 @@ function buildTable(designation: string, generated: string, dataNote: string): R
     generated,
     validRange: { minimumC: grid[0]!, maximumC: grid[grid.length - 1]!, lowerLimit },
     interpolation:
-      "pressure: cubic Hermite of ln p against 1/T using the dp/dT columns (inverse for temperature from pressure); density and enthalpy: linear in T",
+      "pressure: cubic Hermite of p against T using the dp/dT columns (and of T against p with dT/dp for the inverse); density and enthalpy: linear in T",
     units: {
       temperature: "°C",
       bubblePressure: "kPa absolute",

@@ -1,7 +1,7 @@
 /**
  * Cubic Hermite interpolation on one interval: the cubic through (x0, y0) and
  * (x1, y1) with slopes dy/dx = m0 and m1 at the ends. With exact slopes (here
- * d ln p / d(1/T) from Clausius–Clapeyron or the published pL/pV equations) the
+ * dp/dT from Clausius–Clapeyron or the published pL/pV equations) the
  * error falls with the fourth power of the step.
  * Source: https://en.wikipedia.org/wiki/Cubic_Hermite_spline
  *

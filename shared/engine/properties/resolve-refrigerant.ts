@@ -6,19 +6,20 @@
  * first time it is used; later lookups are a Map hit.
  */
 import { PropertyRangeError } from "./property-range-error.ts";
-import { KELVIN_OFFSET } from "./property-tolerances.ts";
 import { REFRIGERANT_TABLE_FILES } from "./refrigerant-table-files.ts";
 import { RefrigerantTableSchema, type RefrigerantTable } from "./refrigerant-table-schema.ts";
 
 /** Refrigerant metadata: everything in a table except its rows. */
 export type RefrigerantInfo = Readonly<Omit<RefrigerantTable, "columns" | "units" | "interpolation">>;
 
-/** One saturation curve (bubble or dew) prepared for cubic Hermite interpolation of ln p against 1/T. */
+/** One saturation curve (bubble or dew) prepared for cubic Hermite interpolation of p against T. */
 export interface CompiledCurve {
-  /** ln(p / kPa), strictly increasing */
-  readonly lnPressure: Float64Array;
-  /** d ln p / d(1/T) in K, from the stored dp/dT */
+  /** kPa absolute, strictly increasing */
+  readonly pressure: Float64Array;
+  /** dp/dT in kPa/K */
   readonly slope: Float64Array;
+  /** dT/dp in K/kPa (for the inverse interpolation) */
+  readonly inverseSlope: Float64Array;
 }
 
 export interface CompiledRefrigerant {
@@ -27,8 +28,13 @@ export interface CompiledRefrigerant {
   readonly rowCount: number;
   /** °C, strictly increasing */
   readonly temperatureC: Float64Array;
-  /** 1/T in 1/K */
-  readonly inverseTemperature: Float64Array;
+  /**
+   * Rows 1 … n−2 lie on a uniform grid (the first and last rows sit at the triple
+   * point / −60 °C and just below critical); this lets lookups find the interval by
+   * direct index instead of a search. gridStep is 0 when the table is not uniform.
+   */
+  readonly gridStart: number;
+  readonly gridStep: number;
   readonly bubble: CompiledCurve;
   readonly dew: CompiledCurve;
   readonly liquidDensity: Float64Array;
@@ -57,11 +63,22 @@ function deepFreeze<T>(value: T): T {
   return value;
 }
 
-function compileCurve(temperatureK: Float64Array, pressure: number[], slope: number[]): CompiledCurve {
-  const lnPressure = Float64Array.from(pressure, Math.log);
-  // d ln p / d(1/T) = −T² (dp/dT) / p
-  const slopeX = Float64Array.from(slope, (dpdT, i) => (-temperatureK[i]! * temperatureK[i]! * dpdT) / pressure[i]!);
-  return { lnPressure, slope: slopeX };
+function compileCurve(pressure: number[], slope: number[]): CompiledCurve {
+  return {
+    pressure: Float64Array.from(pressure),
+    slope: Float64Array.from(slope),
+    inverseSlope: Float64Array.from(slope, (dpdT) => 1 / dpdT),
+  };
+}
+
+function uniformGrid(temperatureC: Float64Array): { gridStart: number; gridStep: number } {
+  const n = temperatureC.length;
+  if (n < 4) return { gridStart: temperatureC[0]!, gridStep: 0 };
+  const step = temperatureC[2]! - temperatureC[1]!;
+  for (let i = 2; i < n - 1; i++) {
+    if (Math.abs(temperatureC[i]! - temperatureC[i - 1]! - step) > 1e-9) return { gridStart: temperatureC[0]!, gridStep: 0 };
+  }
+  return { gridStart: temperatureC[1]!, gridStep: step };
 }
 
 function compile(id: string, raw: unknown): CompiledRefrigerant {
@@ -71,16 +88,15 @@ function compile(id: string, raw: unknown): CompiledRefrigerant {
   }
   const { columns, units, interpolation: _interpolation, ...metadata } = parsed.data;
   const temperatureC = Float64Array.from(columns.temperature);
-  const temperatureK = Float64Array.from(columns.temperature, (t) => t + KELVIN_OFFSET);
   const info = deepFreeze(metadata);
   return {
     info,
     units,
     rowCount: temperatureC.length,
     temperatureC,
-    inverseTemperature: Float64Array.from(temperatureK, (t) => 1 / t),
-    bubble: compileCurve(temperatureK, columns.bubblePressure, columns.bubbleSlope),
-    dew: compileCurve(temperatureK, columns.dewPressure, columns.dewSlope),
+    ...uniformGrid(temperatureC),
+    bubble: compileCurve(columns.bubblePressure, columns.bubbleSlope),
+    dew: compileCurve(columns.dewPressure, columns.dewSlope),
     liquidDensity: Float64Array.from(columns.liquidDensity),
     vapourDensity: Float64Array.from(columns.vapourDensity),
     liquidEnthalpy: Float64Array.from(columns.liquidEnthalpy),

@@ -12,7 +12,7 @@
  * @throws PropertyRangeError for an unknown id or a non-finite or out-of-range temperature
  * @example saturatedState("R134a", 0).liquidDensity // ≈ 1294.78 (kg/m³)
  */
-import { findInterval } from "./find-interval.ts";
+import { findTemperatureRow } from "./find-temperature-row.ts";
 import { requireTableTemperature } from "./require-table-temperature.ts";
 import { resolveRefrigerant } from "./resolve-refrigerant.ts";
 import { saturationPressure } from "./saturation-pressure.ts";
@@ -31,7 +31,7 @@ export function saturatedState(id: string, temperatureC: number): SaturatedState
   const refrigerant = resolveRefrigerant(id);
   requireTableTemperature(refrigerant, temperatureC);
   const t = refrigerant.temperatureC;
-  const i = findInterval(t, temperatureC);
+  const i = findTemperatureRow(refrigerant, temperatureC);
   const fraction = (temperatureC - t[i]!) / (t[i + 1]! - t[i]!);
   const linear = (column: Float64Array) => column[i]! + fraction * (column[i + 1]! - column[i]!);
   return {

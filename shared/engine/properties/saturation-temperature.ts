@@ -1,9 +1,9 @@
 /**
  * Saturation temperature of a refrigerant at a pressure, from its generated table.
  *
- * The inverse of saturationPressure: cubic Hermite interpolation of 1/T against
- * ln p with slopes d(1/T)/d ln p from the table; within 0.005 K of the equation of
- * state everywhere (tested). For blends use "dew" for superheat (suction pressure)
+ * The inverse of saturationPressure: cubic Hermite interpolation of T against p
+ * with slopes dT/dp = 1/(dp/dT) from the table, the interval found by binary search;
+ * within 0.005 K of the equation of state everywhere (tested). For blends use "dew" for superheat (suction pressure)
  * and "bubble" for subcooling (liquid-line pressure) — common practice, TRADE.md §1.1.
  *
  * @param id ASHRAE designation, e.g. "R404A"
@@ -17,7 +17,6 @@
 import { findInterval } from "./find-interval.ts";
 import { interpolateHermite } from "./interpolate-hermite.ts";
 import { PropertyRangeError } from "./property-range-error.ts";
-import { KELVIN_OFFSET } from "./property-tolerances.ts";
 import { requireSaturationPoint, type SaturationPoint } from "./require-saturation-point.ts";
 import { resolveRefrigerant } from "./resolve-refrigerant.ts";
 
@@ -31,31 +30,30 @@ export function saturationTemperature(id: string, pressureKPaAbs: number, point:
   }
   const curve = point === "bubble" ? refrigerant.bubble : refrigerant.dew;
   const last = refrigerant.rowCount - 1;
-  const lnPressure = pressureKPaAbs > 0 ? Math.log(pressureKPaAbs) : -Infinity;
-  if (!(lnPressure >= curve.lnPressure[0]!)) {
-    const lowest = Math.exp(curve.lnPressure[0]!);
+  const pressures = curve.pressure;
+  if (!(pressureKPaAbs >= pressures[0]!)) {
+    const lowest = pressures[0]!;
     throw new PropertyRangeError(
       "BELOW_RANGE",
       id,
       `${id} below ${formatKPa(lowest)} kPa absolute is outside the table (its lowest temperature, ${refrigerant.minimumC} °C; check that the reading is absolute, not gauge)`,
     );
   }
-  if (lnPressure > curve.lnPressure[last]!) {
-    const highest = Math.exp(curve.lnPressure[last]!);
+  if (pressureKPaAbs > pressures[last]!) {
+    const highest = pressures[last]!;
     throw new PropertyRangeError(
       "ABOVE_RANGE",
       id,
       `${id} above ${formatKPa(highest)} kPa absolute is outside the table (its highest temperature, ${refrigerant.maximumC} °C, near the critical point)`,
     );
   }
-  const i = findInterval(curve.lnPressure, lnPressure);
-  const x = refrigerant.inverseTemperature;
-  const inverseTemperature = interpolateHermite(
-    curve.lnPressure[i]!, x[i]!, 1 / curve.slope[i]!,
-    curve.lnPressure[i + 1]!, x[i + 1]!, 1 / curve.slope[i + 1]!,
-    lnPressure,
+  const i = findInterval(pressures, pressureKPaAbs);
+  const t = refrigerant.temperatureC;
+  const temperatureC = interpolateHermite(
+    pressures[i]!, t[i]!, curve.inverseSlope[i]!,
+    pressures[i + 1]!, t[i + 1]!, curve.inverseSlope[i + 1]!,
+    pressureKPaAbs,
   );
-  const temperatureC = 1 / inverseTemperature - KELVIN_OFFSET;
   // Rounding can put a query at the very end of the table a hair outside it.
   return Math.min(Math.max(temperatureC, refrigerant.minimumC), refrigerant.maximumC);
 }

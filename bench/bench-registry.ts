@@ -1,0 +1,39 @@
+/**
+ * Tiny benchmark registry: each bench module calls registerBench when imported, and
+ * bench/index.ts runs them in import order. No timing assertions; figures only.
+ */
+export interface BenchModule {
+  name: string;
+  run: () => void | Promise<void>;
+}
+
+const modules: BenchModule[] = [];
+
+export function registerBench(name: string, run: BenchModule["run"]): void {
+  modules.push({ name, run });
+}
+
+export async function runRegisteredBenches(): Promise<void> {
+  for (const module of modules) {
+    console.log(`\n== ${module.name} ==`);
+    await module.run();
+  }
+}
+
+/**
+ * Nanoseconds per call of `body(i)` over `iterations` calls, best of `repeats` runs
+ * after a warm-up. `body` returns a number that is accumulated so the JIT cannot drop it.
+ */
+export function nanosecondsPerCall(body: (i: number) => number, iterations: number, repeats = 5): number {
+  let sink = 0;
+  for (let i = 0; i < Math.min(iterations, 20_000); i++) sink += body(i);
+  let best = Infinity;
+  for (let r = 0; r < repeats; r++) {
+    const start = process.hrtime.bigint();
+    for (let i = 0; i < iterations; i++) sink += body(i);
+    const elapsed = Number(process.hrtime.bigint() - start);
+    best = Math.min(best, elapsed / iterations);
+  }
+  if (sink === 42.4242) console.log("");
+  return best;
+}

@@ -1,0 +1,93 @@
+/**
+ * Property engine benchmark: ns per saturationPressure / saturationTemperature call
+ * (table lookups, shared/engine) and the same points solved directly from the
+ * equation of state (scripts/eos: phase equilibrium started from the ancillaries,
+ * as a program without tables would do; for saturation temperature an outer Newton
+ * iteration on T around it). Needs ../shared/reference for the direct solves.
+ */
+import { listRefrigerants, saturationPressure, saturationTemperature } from "../shared/engine/index.ts";
+import {
+  createFluidModel,
+  readReferenceFluid,
+  referencePackExists,
+  saturationStateAt,
+  saturationTemperatureAt,
+  type FluidModel,
+} from "../scripts/eos/index.ts";
+import { nanosecondsPerCall, registerBench } from "./bench-registry.ts";
+
+const POINTS = 4096;
+
+/** Deterministic pseudo-random sequence (so runs compare like for like). */
+function sequence(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (Math.imul(state, 1664525) + 1013904223) >>> 0;
+    return state / 2 ** 32;
+  };
+}
+
+interface Point {
+  id: string;
+  temperatureC: number;
+  pressureKPa: number;
+  point: "bubble" | "dew";
+}
+
+function makePoints(ids: string[], seed: number): Point[] {
+  const random = sequence(seed);
+  const infos = listRefrigerants().filter((r) => ids.includes(r.id));
+  return Array.from({ length: POINTS }, () => {
+    const info = infos[Math.floor(random() * infos.length)]!;
+    // technician range: −40 °C … 60 °C, clipped to the table
+    const low = Math.max(info.validRange.minimumC, -40);
+    const high = Math.min(info.validRange.maximumC - 1, 60);
+    const temperatureC = low + random() * (high - low);
+    const point = random() < 0.5 ? "bubble" : "dew";
+    return { id: info.id, temperatureC, point, pressureKPa: saturationPressure(info.id, temperatureC, point) };
+  });
+}
+
+function report(label: string, tableNs: number, directNs?: number): void {
+  const direct = directNs === undefined ? "" : `   direct EOS ${(directNs / 1000).toFixed(1).padStart(8)} µs   ratio ${Math.round(directNs / tableNs).toLocaleString("en").padStart(8)}×`;
+  console.log(`${label.padEnd(44)} table ${tableNs.toFixed(0).padStart(5)} ns${direct}`);
+}
+
+registerBench("refrigerant properties", () => {
+  const all = listRefrigerants();
+  const pureIds = all.filter((r) => r.kind === "pure").map((r) => r.id);
+  const blendIds = all.filter((r) => r.kind === "blend").map((r) => r.id);
+  const haveEos = referencePackExists();
+  const models = new Map<string, FluidModel>();
+  if (haveEos) for (const r of all) models.set(r.id, createFluidModel(readReferenceFluid(r.id)));
+  else console.log("(../shared/reference absent: direct EOS solves skipped)");
+
+  for (const [group, ids] of [["pure fluids", pureIds], ["pseudo-pure blends", blendIds], ["R410A only", ["R410A"]]] as const) {
+    const points = makePoints([...ids], 7);
+    const pressureNs = nanosecondsPerCall((i) => {
+      const p = points[i & (POINTS - 1)]!;
+      return saturationPressure(p.id, p.temperatureC, p.point);
+    }, 2_000_000);
+    const temperatureNs = nanosecondsPerCall((i) => {
+      const p = points[i & (POINTS - 1)]!;
+      return saturationTemperature(p.id, p.pressureKPa, p.point);
+    }, 2_000_000);
+    let directPressureNs: number | undefined;
+    let directTemperatureNs: number | undefined;
+    if (haveEos) {
+      const count = group === "pure fluids" ? 2000 : 20000;
+      directPressureNs = nanosecondsPerCall((i) => {
+        const p = points[i % POINTS]!;
+        const state = saturationStateAt(models.get(p.id)!, p.temperatureC + 273.15, { guess: "ancillary" });
+        return p.point === "bubble" ? state.bubblePressure : state.dewPressure;
+      }, count, 3);
+      directTemperatureNs = nanosecondsPerCall((i) => {
+        const p = points[i % POINTS]!;
+        return saturationTemperatureAt(models.get(p.id)!, p.pressureKPa * 1000, p.point);
+      }, Math.max(200, count / 10), 3);
+    }
+    report(`saturationPressure, ${group}`, pressureNs, directPressureNs);
+    report(`saturationTemperature, ${group}`, temperatureNs, directTemperatureNs);
+  }
+  console.log("(direct EOS for blends = evaluating / inverting the published pL, pV equations)");
+});
