@@ -82,14 +82,14 @@ function buildTable(designation: string, generated: string, dataNote: string): R
   for (const temperatureC of grid) {
     const state = saturationStateAt(model, toKelvin(model, temperatureC), { checkTolerance: check });
     columns.temperature.push(temperatureC);
-    columns.bubblePressure.push(significant(state.bubblePressure / 1000, 10));
-    columns.dewPressure.push(significant(state.dewPressure / 1000, 10));
-    columns.bubbleSlope.push(significant(state.bubbleSlope / 1000, 9));
-    columns.dewSlope.push(significant(state.dewSlope / 1000, 9));
-    columns.liquidDensity.push(significant(state.liquidDensity * M, 9));
-    columns.vapourDensity.push(significant(state.vapourDensity * M, 9));
-    columns.liquidEnthalpy.push(decimals(state.liquidEnthalpy / M / 1000, 5));
-    columns.vapourEnthalpy.push(decimals(state.vapourEnthalpy / M / 1000, 5));
+    columns.bubblePressure.push(significant(state.bubblePressure / 1000, 9));
+    columns.dewPressure.push(significant(state.dewPressure / 1000, 9));
+    columns.bubbleSlope.push(significant(state.bubbleSlope / 1000, 7));
+    columns.dewSlope.push(significant(state.dewSlope / 1000, 7));
+    columns.liquidDensity.push(significant(state.liquidDensity * M, 8));
+    columns.vapourDensity.push(significant(state.vapourDensity * M, 8));
+    columns.liquidEnthalpy.push(decimals(state.liquidEnthalpy / M / 1000, 4));
+    columns.vapourEnthalpy.push(decimals(state.vapourEnthalpy / M / 1000, 4));
   }
 
   let criticalPoint: RefrigerantTable["criticalPoint"];
