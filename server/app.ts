@@ -14,6 +14,8 @@ import type { Env } from "./env.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
 import type { Mailer } from "./mail/mailer.ts";
 import { authRouter } from "./routes/auth.ts";
+import { customersRouter, equipmentRouter, sitesRouter } from "./routes/equipment.ts";
+import { photosRouter, visitsRouter } from "./routes/visits.ts";
 import { healthRouter } from "./routes/health.ts";
 import { invitationsRouter } from "./routes/invitations.ts";
 import { membersRouter } from "./routes/members.ts";
@@ -79,6 +81,11 @@ export function createApp(deps: AppDeps): Express {
   api.use("/invitations", invitationsRouter(accountDeps));
   api.use("/profile", profileRouter(accountDeps));
   api.use("/outbox", outboxRouter(accountDeps));
+  api.use("/customers", customersRouter(deps));
+  api.use("/sites", sitesRouter(deps));
+  api.use("/equipment", equipmentRouter(deps));
+  api.use("/visits", visitsRouter(deps));
+  api.use("/photos", photosRouter(deps));
   api.use(apiNotFound);
   app.use("/api", api);
 

@@ -1,3 +1,5 @@
+import { tmpdir } from "node:os";
+import { join } from "node:path";
 import { z } from "zod";
 
 /**
@@ -16,6 +18,8 @@ const EnvSchema = z.object({
     .default("true")
     .transform((value) => value === "true" || value === "1"),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
+  /** Folder for uploaded photos. Defaults to data/uploads, or a temporary folder with an in-memory database. */
+  UPLOADS_DIR: z.string().min(1).optional(),
 
   /**
    * The address people reach Satura at, e.g. https://satura.example.com. Links in e-mails
@@ -53,6 +57,7 @@ const ResolvedEnvSchema = EnvSchema.superRefine((env, context) => {
 }).transform((env) => ({
   ...env,
   APP_URL: (env.APP_URL ?? `http://localhost:${env.PORT}`).replace(/\/+$/, ""),
+  UPLOADS_DIR: env.UPLOADS_DIR ?? (env.DATA_DIR === "memory://" ? join(tmpdir(), `satura-uploads-${process.pid}`) : "data/uploads"),
   outboxEnabled: !env.SMTP_HOST && (env.OUTBOX_ENABLED === undefined ? env.NODE_ENV !== "production" : isOn(env.OUTBOX_ENABLED)),
   cookieSecure: env.COOKIE_SECURE === undefined ? env.NODE_ENV === "production" : isOn(env.COOKIE_SECURE),
 }));

@@ -1,5 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from "express";
+import multer from "multer";
 import { ZodError } from "zod";
+import { DiagnosisInputError } from "@shared/engine/index.ts";
 import { HttpError } from "./http-error.ts";
 
 /** Turns zod issues into one message per field path, e.g. { "suctionPressureKPa": "..." }. */
@@ -25,6 +27,16 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
 export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   if (error instanceof ZodError) {
     res.status(400).json({ message: "Some fields need attention", fields: fieldMessages(error) });
+    return;
+  }
+  if (error instanceof DiagnosisInputError) {
+    const fields = Object.fromEntries(Object.entries(error.fieldErrors).map(([field, messages]) => [field, messages[0] ?? "Check this value"]));
+    res.status(400).json({ message: error.formErrors[0] ?? "Some fields need attention", fields });
+    return;
+  }
+  if (error instanceof multer.MulterError) {
+    const tooLarge = error.code === "LIMIT_FILE_SIZE";
+    res.status(tooLarge ? 413 : 400).json({ message: tooLarge ? "That file is too large (12 MB at most)" : `Upload refused: ${error.message}` });
     return;
   }
   if (error instanceof HttpError) {

@@ -1,0 +1,263 @@
+/**
+ * Queries for visits and their run log. Every function takes the caller's organisation id;
+ * a visit of another organisation reads as missing.
+ */
+import { and, asc, count, desc, eq, inArray, type SQL } from "drizzle-orm";
+import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
+import type { Adjustment, Comment, Photo, Reading, VisitStatus, VisitSummary } from "@shared/schemas/visits.ts";
+import type { Database } from "./client.ts";
+import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitTechnicians, visits } from "./schema.ts";
+
+type PersonRef = { id: string; name: string } | null;
+
+async function peopleById(db: Database, ids: (string | null)[]): Promise<Map<string, { id: string; name: string }>> {
+  const wanted = [...new Set(ids.filter((id): id is string => id !== null))];
+  if (wanted.length === 0) return new Map();
+  const rows = await db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, wanted));
+  return new Map(rows.map((row) => [row.id, row]));
+}
+
+const person = (people: Map<string, { id: string; name: string }>, id: string | null): PersonRef => (id ? (people.get(id) ?? null) : null);
+
+const summaryColumns = {
+  id: visits.id,
+  equipmentId: visits.equipmentId,
+  equipmentName: equipment.name,
+  siteName: sites.name,
+  customerName: customers.name,
+  refrigerant: equipment.refrigerant,
+  reason: visits.reason,
+  status: visits.status,
+  startedAt: visits.startedAt,
+};
+
+async function summarise(db: Database, rows: { id: string; startedAt: Date }[]): Promise<Map<string, Pick<VisitSummary, "readingCount" | "technicians">>> {
+  const ids = rows.map((row) => row.id);
+  const result = new Map<string, Pick<VisitSummary, "readingCount" | "technicians">>();
+  if (ids.length === 0) return result;
+  const counts = await db
+    .select({ visitId: readings.visitId, n: count() })
+    .from(readings)
+    .where(inArray(readings.visitId, ids))
+    .groupBy(readings.visitId);
+  const crew = await db
+    .select({ visitId: visitTechnicians.visitId, id: users.id, name: users.name })
+    .from(visitTechnicians)
+    .innerJoin(users, eq(users.id, visitTechnicians.userId))
+    .where(inArray(visitTechnicians.visitId, ids))
+    .orderBy(asc(users.name));
+  for (const id of ids) result.set(id, { readingCount: 0, technicians: [] });
+  for (const row of counts) result.get(row.visitId)!.readingCount = row.n;
+  for (const row of crew) result.get(row.visitId)!.technicians.push({ id: row.id, name: row.name });
+  return result;
+}
+
+export interface VisitFilter {
+  status?: VisitStatus;
+  equipmentId?: string;
+}
+
+export async function listVisits(db: Database, organisationId: string, filter: VisitFilter = {}): Promise<VisitSummary[]> {
+  const conditions: SQL[] = [eq(visits.organisationId, organisationId)];
+  if (filter.status) conditions.push(eq(visits.status, filter.status));
+  if (filter.equipmentId) conditions.push(eq(visits.equipmentId, filter.equipmentId));
+  const rows = await db
+    .select(summaryColumns)
+    .from(visits)
+    .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
+    .innerJoin(sites, eq(sites.id, equipment.siteId))
+    .innerJoin(customers, eq(customers.id, sites.customerId))
+    .where(and(...conditions))
+    .orderBy(desc(visits.startedAt));
+  const extra = await summarise(db, rows);
+  return rows.map((row) => ({ ...row, startedAt: row.startedAt.toISOString(), ...extra.get(row.id)! }));
+}
+
+/** The visit row itself (for permission and status checks), scoped by organisation. */
+export async function findVisit(db: Database, organisationId: string, visitId: string) {
+  const [row] = await db
+    .select()
+    .from(visits)
+    .where(and(eq(visits.organisationId, organisationId), eq(visits.id, visitId)));
+  return row;
+}
+
+export async function createVisit(
+  db: Database,
+  organisationId: string,
+  values: { equipmentId: string; reason: string; createdBy: string },
+): Promise<string | undefined> {
+  const [unit] = await db
+    .select({ id: equipment.id })
+    .from(equipment)
+    .where(and(eq(equipment.organisationId, organisationId), eq(equipment.id, values.equipmentId)));
+  if (!unit) return undefined;
+  return db.transaction(async (tx) => {
+    const [row] = await tx.insert(visits).values({ ...values, organisationId }).returning({ id: visits.id });
+    await tx.insert(visitTechnicians).values({ visitId: row.id, userId: values.createdBy });
+    return row.id;
+  });
+}
+
+/** Puts the user on the visit's crew the first time they record something on it. */
+export async function joinCrew(db: Database, visitId: string, userId: string): Promise<void> {
+  await db.insert(visitTechnicians).values({ visitId, userId }).onConflictDoNothing();
+}
+
+export async function insertReading(
+  db: Database,
+  organisationId: string,
+  values: { visitId: string; circuit: number; takenAt?: Date; note?: string; input: DiagnosisInput; result: DiagnosisResult; recordedBy: string },
+): Promise<Reading> {
+  const [row] = await db
+    .insert(readings)
+    .values({ ...values, note: values.note || null, organisationId })
+    .returning();
+  const people = await peopleById(db, [row.recordedBy]);
+  return toReading(row, people);
+}
+
+function toReading(row: typeof readings.$inferSelect, people: Map<string, { id: string; name: string }>): Reading {
+  return {
+    id: row.id,
+    visitId: row.visitId,
+    circuit: row.circuit,
+    takenAt: row.takenAt.toISOString(),
+    note: row.note,
+    input: row.input,
+    result: row.result,
+    recordedBy: person(people, row.recordedBy),
+  };
+}
+
+function toAdjustment(row: typeof adjustments.$inferSelect, people: Map<string, { id: string; name: string }>): Adjustment {
+  return {
+    id: row.id,
+    circuit: row.circuit,
+    at: row.at.toISOString(),
+    kind: row.kind as Adjustment["kind"],
+    description: row.description,
+    amountKg: row.amountKg,
+    recordedBy: person(people, row.recordedBy),
+  };
+}
+
+export async function insertAdjustment(
+  db: Database,
+  organisationId: string,
+  values: { visitId: string; circuit: number | null; at?: Date; kind: string; description: string; amountKg: number | null; recordedBy: string },
+): Promise<Adjustment> {
+  const [row] = await db.insert(adjustments).values({ ...values, organisationId }).returning();
+  return toAdjustment(row, await peopleById(db, [row.recordedBy]));
+}
+
+export async function insertComment(
+  db: Database,
+  organisationId: string,
+  values: { visitId: string; readingId: string | null; authorId: string; body: string },
+): Promise<Comment | undefined> {
+  if (values.readingId) {
+    const [reading] = await db
+      .select({ id: readings.id })
+      .from(readings)
+      .where(and(eq(readings.id, values.readingId), eq(readings.visitId, values.visitId)));
+    if (!reading) return undefined;
+  }
+  const [row] = await db.insert(visitComments).values({ ...values, organisationId }).returning();
+  const people = await peopleById(db, [row.authorId]);
+  return { id: row.id, readingId: row.readingId, body: row.body, author: person(people, row.authorId), createdAt: row.createdAt.toISOString() };
+}
+
+export async function updateVisitStatus(
+  db: Database,
+  visitId: string,
+  values: { status: VisitStatus; reviewNote?: string | null; signedOffBy?: string | null; signedOffAt?: Date | null },
+): Promise<void> {
+  await db
+    .update(visits)
+    .set({ ...values, updatedAt: new Date() })
+    .where(eq(visits.id, visitId));
+}
+
+export function photoUrls(id: string): Pick<Photo, "url" | "thumbnailUrl"> {
+  return { url: `/api/photos/${id}`, thumbnailUrl: `/api/photos/${id}/thumbnail` };
+}
+
+/** The whole visit: summary, review state, and its run log in time order. */
+export async function getVisitDetail(db: Database, organisationId: string, visitId: string) {
+  const [summary] = await db
+    .select({ ...summaryColumns, reviewNote: visits.reviewNote, signedOffBy: visits.signedOffBy, signedOffAt: visits.signedOffAt })
+    .from(visits)
+    .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
+    .innerJoin(sites, eq(sites.id, equipment.siteId))
+    .innerJoin(customers, eq(customers.id, sites.customerId))
+    .where(and(eq(visits.organisationId, organisationId), eq(visits.id, visitId)));
+  if (!summary) return undefined;
+
+  const [readingRows, adjustmentRows, commentRows, photoRows, extra] = await Promise.all([
+    db.select().from(readings).where(eq(readings.visitId, visitId)).orderBy(asc(readings.takenAt), asc(readings.createdAt)),
+    db.select().from(adjustments).where(eq(adjustments.visitId, visitId)).orderBy(asc(adjustments.at)),
+    db.select().from(visitComments).where(eq(visitComments.visitId, visitId)).orderBy(asc(visitComments.createdAt)),
+    db.select().from(photos).where(eq(photos.visitId, visitId)).orderBy(asc(photos.createdAt)),
+    summarise(db, [summary]),
+  ]);
+  const people = await peopleById(db, [
+    summary.signedOffBy,
+    ...readingRows.map((row) => row.recordedBy),
+    ...adjustmentRows.map((row) => row.recordedBy),
+    ...commentRows.map((row) => row.authorId),
+  ]);
+  return {
+    ...summary,
+    ...extra.get(summary.id)!,
+    startedAt: summary.startedAt.toISOString(),
+    signedOffBy: person(people, summary.signedOffBy),
+    signedOffAt: summary.signedOffAt?.toISOString() ?? null,
+    readings: readingRows.map((row) => toReading(row, people)),
+    adjustments: adjustmentRows.map((row) => toAdjustment(row, people)),
+    comments: commentRows.map((row) => ({
+      id: row.id,
+      readingId: row.readingId,
+      body: row.body,
+      author: person(people, row.authorId),
+      createdAt: row.createdAt.toISOString(),
+    })),
+    photos: photoRows.map((row) => ({
+      id: row.id,
+      kind: row.kind as Photo["kind"],
+      caption: row.caption,
+      createdAt: row.createdAt.toISOString(),
+      ...photoUrls(row.id),
+    })),
+  };
+}
+
+/** Readings of one unit's most recent visit with any, per circuit, for the equipment page. */
+export async function latestVisitReadings(db: Database, organisationId: string, equipmentId: string) {
+  const [latest] = await db
+    .select({ visitId: readings.visitId })
+    .from(readings)
+    .innerJoin(visits, eq(visits.id, readings.visitId))
+    .where(and(eq(visits.organisationId, organisationId), eq(visits.equipmentId, equipmentId)))
+    .orderBy(desc(readings.takenAt))
+    .limit(1);
+  if (!latest) return [];
+  return db.select().from(readings).where(eq(readings.visitId, latest.visitId)).orderBy(asc(readings.takenAt));
+}
+
+export async function insertPhoto(
+  db: Database,
+  organisationId: string,
+  values: { visitId: string; kind: string; caption: string | null; storedName: string; thumbnailName: string; mimeType: string; bytes: number; uploadedBy: string },
+): Promise<Photo> {
+  const [row] = await db.insert(photos).values({ ...values, organisationId }).returning();
+  return { id: row.id, kind: row.kind as Photo["kind"], caption: row.caption, createdAt: row.createdAt.toISOString(), ...photoUrls(row.id) };
+}
+
+export async function findPhoto(db: Database, organisationId: string, photoId: string) {
+  const [row] = await db
+    .select()
+    .from(photos)
+    .where(and(eq(photos.organisationId, organisationId), eq(photos.id, photoId)));
+  return row;
+}

@@ -1,0 +1,90 @@
+import { Router } from "express";
+import { assessTrend } from "@shared/engine/index.ts";
+import { PERMISSIONS } from "@shared/schemas/auth.ts";
+import { CustomerInputSchema, EquipmentInputSchema, SiteInputSchema } from "@shared/schemas/equipment.ts";
+import type { EquipmentDetail } from "@shared/schemas/equipment-detail.ts";
+import { getAuth, requireRole, requireUser } from "../auth/session.ts";
+import {
+  createCustomer,
+  createEquipment,
+  createSite,
+  getEquipment,
+  listCustomers,
+  listEquipment,
+  listSites,
+  type EquipmentRow,
+} from "../db/equipment.ts";
+import { latestVisitReadings, listVisits } from "../db/visits.ts";
+import { HttpError, notFound } from "../http/http-error.ts";
+import { parseId } from "../http/parse-id.ts";
+import type { AccountRouteDeps } from "./route-deps.ts";
+
+type Deps = Pick<AccountRouteDeps, "db">;
+
+const toEquipment = (row: NonNullable<EquipmentRow>) => ({ ...row, createdAt: row.createdAt.toISOString() });
+
+export function customersRouter({ db }: Deps): Router {
+  const router = Router();
+  router.get("/", requireUser, async (_req, res) => {
+    res.json({ customers: await listCustomers(db, getAuth(res).organisationId) });
+  });
+  router.post("/", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const values = CustomerInputSchema.parse(req.body);
+    res.status(201).json({ customer: await createCustomer(db, getAuth(res).organisationId, values) });
+  });
+  return router;
+}
+
+export function sitesRouter({ db }: Deps): Router {
+  const router = Router();
+  router.get("/", requireUser, async (_req, res) => {
+    res.json({ sites: await listSites(db, getAuth(res).organisationId) });
+  });
+  router.post("/", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const values = SiteInputSchema.parse(req.body);
+    const site = await createSite(db, getAuth(res).organisationId, values);
+    if (!site) throw new HttpError(400, "Some fields need attention", { customerId: "Choose one of your customers" });
+    res.status(201).json({ site });
+  });
+  return router;
+}
+
+export function equipmentRouter({ db }: Deps): Router {
+  const router = Router();
+
+  router.get("/", requireUser, async (_req, res) => {
+    const rows = await listEquipment(db, getAuth(res).organisationId);
+    res.json({ equipment: rows.map(toEquipment) });
+  });
+
+  router.post("/", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const values = EquipmentInputSchema.parse(req.body);
+    const created = await createEquipment(db, getAuth(res).organisationId, values);
+    if (!created) throw new HttpError(400, "Some fields need attention", { siteId: "Choose one of your sites" });
+    res.status(201).json({ equipment: toEquipment(created) });
+  });
+
+  router.get("/:id", requireUser, async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const id = parseId(req.params.id, "Equipment");
+    const row = await getEquipment(db, organisationId, id);
+    if (!row) throw notFound("Equipment");
+    const [visits, latest] = await Promise.all([listVisits(db, organisationId, { equipmentId: id }), latestVisitReadings(db, organisationId, id)]);
+    // The last settled state of each circuit, judged by the same trend rule as the run log.
+    const lastSettled = row.circuits.map((circuit) => {
+      const series = latest
+        .filter((reading) => reading.circuit === circuit.number)
+        .map((reading) => ({ takenAt: reading.takenAt.toISOString(), input: reading.input }));
+      if (series.length === 0) return { circuit: circuit.number, takenAt: null, result: null };
+      const trend = assessTrend(series);
+      return {
+        circuit: circuit.number,
+        takenAt: trend.lastSettled?.takenAt ?? null,
+        result: trend.lastSettled?.result ?? null,
+      };
+    });
+    res.json({ equipment: toEquipment(row), visits, lastSettled } satisfies EquipmentDetail);
+  });
+
+  return router;
+}

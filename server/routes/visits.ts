@@ -1,0 +1,206 @@
+import { Router } from "express";
+import multer from "multer";
+import { z } from "zod";
+import { diagnose } from "@shared/engine/index.ts";
+import { PERMISSIONS } from "@shared/schemas/auth.ts";
+import { DiagnosisInputSchema } from "@shared/schemas/diagnosis.ts";
+import {
+  AdjustmentCreateSchema,
+  CommentCreateSchema,
+  PHOTO_KINDS,
+  ReadingBodySchema,
+  ReviewActionSchema,
+  VisitCreateSchema,
+  VisitStatusSchema,
+  type VisitStatus,
+} from "@shared/schemas/visits.ts";
+import { getAuth, requireRole, requireUser } from "../auth/session.ts";
+import { getEquipment } from "../db/equipment.ts";
+import {
+  createVisit,
+  findPhoto,
+  findVisit,
+  getVisitDetail,
+  insertAdjustment,
+  insertComment,
+  insertPhoto,
+  insertReading,
+  joinCrew,
+  listVisits,
+  updateVisitStatus,
+} from "../db/visits.ts";
+import { HttpError, notFound } from "../http/http-error.ts";
+import { parseId } from "../http/parse-id.ts";
+import { MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
+import type { AccountRouteDeps } from "./route-deps.ts";
+
+type Deps = Pick<AccountRouteDeps, "db" | "env">;
+
+/** A signed-off visit is a closed record: nothing more is written to it. */
+function requireWritable(status: VisitStatus) {
+  if (status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
+}
+
+const ListQuerySchema = z.object({
+  status: VisitStatusSchema.optional(),
+  equipmentId: z.uuid().optional(),
+});
+
+/** Which review actions each status allows, and where they lead. */
+const TRANSITIONS: Record<"submit" | "sign-off" | "send-back", { from: VisitStatus[]; to: VisitStatus }> = {
+  submit: { from: ["open", "sent-back"], to: "awaiting-review" },
+  "sign-off": { from: ["open", "awaiting-review"], to: "signed-off" },
+  "send-back": { from: ["open", "awaiting-review"], to: "sent-back" },
+};
+
+export function visitsRouter({ db, env }: Deps): Router {
+  const router = Router();
+  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PHOTO_BYTES, files: 1, fields: 10 } });
+
+  async function loadVisit(organisationId: string, rawId: unknown) {
+    const visit = await findVisit(db, organisationId, parseId(rawId, "Visit"));
+    if (!visit) throw notFound("Visit");
+    return visit;
+  }
+
+  router.get("/", requireUser, async (req, res) => {
+    const filter = ListQuerySchema.parse(req.query);
+    res.json({ visits: await listVisits(db, getAuth(res).organisationId, filter) });
+  });
+
+  router.post("/", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const values = VisitCreateSchema.parse(req.body);
+    const id = await createVisit(db, organisationId, { ...values, createdBy: user.id });
+    if (!id) throw new HttpError(400, "Some fields need attention", { equipmentId: "Choose one of your units" });
+    res.status(201).json({ visit: await getVisitDetail(db, organisationId, id) });
+  });
+
+  router.get("/:id", requireUser, async (req, res) => {
+    const visit = await getVisitDetail(db, getAuth(res).organisationId, parseId(req.params.id, "Visit"));
+    if (!visit) throw notFound("Visit");
+    res.json({ visit });
+  });
+
+  router.post("/:id/readings", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritable(visit.status);
+    const { circuit, takenAt, note, ...readingFields } = ReadingBodySchema.parse(req.body);
+    const unit = await getEquipment(db, organisationId, visit.equipmentId);
+    if (!unit) throw notFound("Equipment");
+    const nameplate = unit.circuits.find((candidate) => candidate.number === circuit);
+    if (!nameplate) {
+      throw new HttpError(400, "Some fields need attention", { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
+    }
+    // Refrigerant and metering device always come from the nameplate; targets and RLA too
+    // unless the technician entered others (e.g. from the unit's own charging chart).
+    const input = DiagnosisInputSchema.parse({
+      targetSuperheatK: nameplate.targetSuperheatK ?? undefined,
+      targetSubcoolingK: nameplate.targetSubcoolingK ?? undefined,
+      compressorRla: unit.compressorRlaA ?? undefined,
+      ...readingFields,
+      refrigerant: unit.refrigerant,
+      meteringDevice: nameplate.meteringDevice,
+    });
+    const result = diagnose(input);
+    const reading = await insertReading(db, organisationId, {
+      visitId: visit.id,
+      circuit,
+      takenAt: takenAt ? new Date(takenAt) : undefined,
+      note,
+      input,
+      result,
+      recordedBy: user.id,
+    });
+    await joinCrew(db, visit.id, user.id);
+    res.status(201).json({ reading });
+  });
+
+  router.post("/:id/adjustments", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritable(visit.status);
+    const values = AdjustmentCreateSchema.parse(req.body);
+    const adjustment = await insertAdjustment(db, organisationId, {
+      visitId: visit.id,
+      circuit: values.circuit ?? null,
+      at: values.at ? new Date(values.at) : undefined,
+      kind: values.kind,
+      description: values.description,
+      amountKg: values.amountKg ?? null,
+      recordedBy: user.id,
+    });
+    await joinCrew(db, visit.id, user.id);
+    res.status(201).json({ adjustment });
+  });
+
+  router.post("/:id/comments", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    const values = CommentCreateSchema.parse(req.body);
+    const comment = await insertComment(db, organisationId, {
+      visitId: visit.id,
+      readingId: values.readingId ?? null,
+      authorId: user.id,
+      body: values.body,
+    });
+    if (!comment) throw new HttpError(400, "Some fields need attention", { readingId: "That reading is not part of this visit" });
+    res.status(201).json({ comment });
+  });
+
+  router.post("/:id/review", requireUser, async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    const action = ReviewActionSchema.parse(req.body);
+    const allowed = action.action === "submit" ? PERMISSIONS.writeRecords : PERMISSIONS.signOff;
+    if (!(allowed as readonly string[]).includes(user.role)) {
+      throw new HttpError(403, action.action === "submit" ? "Apprentices can read visits but not submit them" : "Only a senior technician or an owner can sign off or send back");
+    }
+    const transition = TRANSITIONS[action.action];
+    if (!transition.from.includes(visit.status)) {
+      throw new HttpError(409, `A visit that is ${visit.status.replace("-", " ")} cannot be ${action.action === "submit" ? "submitted" : action.action === "sign-off" ? "signed off" : "sent back"}`);
+    }
+    if (action.action === "sign-off") {
+      await updateVisitStatus(db, visit.id, { status: transition.to, reviewNote: action.note || null, signedOffBy: user.id, signedOffAt: new Date() });
+    } else if (action.action === "send-back") {
+      await updateVisitStatus(db, visit.id, { status: transition.to, reviewNote: action.reason, signedOffBy: null, signedOffAt: null });
+      // The reason also goes on the visit's thread, so the technician sees it in context.
+      await insertComment(db, organisationId, { visitId: visit.id, readingId: null, authorId: user.id, body: `Sent back: ${action.reason}` });
+    } else {
+      await updateVisitStatus(db, visit.id, { status: transition.to });
+    }
+    res.json({ visit: await getVisitDetail(db, organisationId, visit.id) });
+  });
+
+  router.post("/:id/photos", requireRole(...PERMISSIONS.writeRecords), upload.single("photo"), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritable(visit.status);
+    if (!req.file) throw new HttpError(400, "Some fields need attention", { photo: "Choose a photo to upload" });
+    const meta = z
+      .object({ kind: z.enum(PHOTO_KINDS).default("other"), caption: z.string().trim().max(200).optional() })
+      .parse(req.body ?? {});
+    const stored = await storePhoto(env.UPLOADS_DIR, req.file.buffer);
+    const photo = await insertPhoto(db, organisationId, { visitId: visit.id, kind: meta.kind, caption: meta.caption || null, ...stored, uploadedBy: user.id });
+    res.status(201).json({ photo });
+  });
+
+  return router;
+}
+
+export function photosRouter({ db, env }: Deps): Router {
+  const router = Router();
+  const send = (variant: "original" | "thumbnail") =>
+    async (req: import("express").Request, res: import("express").Response) => {
+      const photo = await findPhoto(db, getAuth(res).organisationId, parseId(req.params.id, "Photo"));
+      if (!photo) throw notFound("Photo");
+      const data = await readPhoto(env.UPLOADS_DIR, variant === "original" ? photo.storedName : photo.thumbnailName);
+      res.setHeader("Content-Type", variant === "original" ? photo.mimeType : "image/webp");
+      res.setHeader("Cache-Control", "private, max-age=86400");
+      res.send(data);
+    };
+  router.get("/:id", requireUser, send("original"));
+  router.get("/:id/thumbnail", requireUser, send("thumbnail"));
+  return router;
+}

@@ -1,0 +1,169 @@
+import sharp from "sharp";
+import request from "supertest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { diagnose, saturationPressure } from "@shared/engine/index.ts";
+import { createTestApp, type TestApp } from "../setup/test-app.ts";
+import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "./auth/helpers.ts";
+
+type Agent = Awaited<ReturnType<typeof signedIn>>;
+
+const ATMOSPHERE = 101.325;
+/** Gauge pressure at which R407C has the wanted saturation temperature. */
+const gauge = (temperatureC: number, point: "bubble" | "dew") => Number((saturationPressure("R407C", temperatureC, point) - ATMOSPHERE).toFixed(1));
+
+/** A settled reading on the demo rooftop unit: dew 6 °C at suction, bubble 42 °C at the liquid port. */
+const rooftopReading = {
+  circuit: 1,
+  suctionPressureKPa: gauge(6, "dew"),
+  suctionLineTempC: 12,
+  liquidPressureKPa: gauge(42, "bubble"),
+  liquidLineTempC: 37,
+  dischargeLineTempC: 78,
+  returnAirDryBulbC: 24,
+  returnAirWetBulbC: 17,
+  supplyAirDryBulbC: 13,
+  outdoorAirDryBulbC: 31,
+  runMinutes: 20,
+};
+
+describe("visits and the run log API", () => {
+  let testApp: TestApp;
+  let technician: Agent;
+  let senior: Agent;
+  let apprentice: Agent;
+  let outsider: Agent;
+  let rooftopId: string;
+  let visitId: string;
+
+  beforeAll(async () => {
+    testApp = await createTestApp();
+    await seedBellbird(testApp);
+    technician = await signedIn(testApp.app, BELLBIRD.technician);
+    senior = await signedIn(testApp.app, BELLBIRD.senior);
+    apprentice = await signedIn(testApp.app, BELLBIRD.apprentice);
+    outsider = (await signUpOtherCompany(testApp.app)).agent;
+    const list = await technician.get("/api/equipment");
+    rooftopId = list.body.equipment.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C").id;
+  });
+  afterAll(() => testApp.close());
+
+  it("lists the demo equipment with nameplates, and 401 without a session", async () => {
+    const response = await technician.get("/api/equipment");
+    expect(response.status).toBe(200);
+    expect(response.body.equipment).toHaveLength(3);
+    const rooftop = response.body.equipment.find((unit: { id: string }) => unit.id === rooftopId);
+    expect(rooftop.circuits).toHaveLength(2);
+    expect(rooftop.circuits[0]).toMatchObject({ meteringDevice: "txv", factoryChargeKg: 4.2 });
+    expect((await request(testApp.app).get("/api/equipment")).status).toBe(401);
+  });
+
+  it("creates equipment with validation messages per field", async () => {
+    const sites = (await technician.get("/api/sites")).body.sites;
+    const bad = await technician.post("/api/equipment").send({ siteId: sites[0].id, name: "", kind: "wall split", refrigerant: "R999", circuits: [] });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.fields)).toEqual(expect.arrayContaining(["name", "refrigerant", "circuits"]));
+    const good = await technician.post("/api/equipment").send({
+      siteId: sites[0].id,
+      name: "Reception ducted split",
+      kind: "ducted split",
+      refrigerant: "R410A",
+      circuits: [{ number: 1, factoryChargeKg: 3.1, meteringDevice: "fixed-orifice" }],
+    });
+    expect(good.status).toBe(201);
+    expect(good.body.equipment).toMatchObject({ name: "Reception ducted split", customerName: "Wattle Lane Clinic" });
+    expect((await apprentice.post("/api/equipment").send({})).status).toBe(403);
+  });
+
+  it("starts a visit and records a reading whose stored result is the engine's diagnosis", async () => {
+    const created = await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Not cooling the waiting room" });
+    expect(created.status).toBe(201);
+    visitId = created.body.visit.id;
+    expect(created.body.visit.status).toBe("open");
+
+    const response = await technician.post(`/api/visits/${visitId}/readings`).send(rooftopReading);
+    expect(response.status).toBe(201);
+    const { reading } = response.body;
+    // Refrigerant, metering device and nameplate targets come from the equipment.
+    expect(reading.input).toMatchObject({ refrigerant: "R407C", meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5 });
+    const { circuit: _circuit, ...fields } = rooftopReading;
+    expect(reading.result).toEqual(diagnose({ ...fields, refrigerant: "R407C", meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, compressorRla: 11.8 }));
+    // Superheat from the dew point, subcooling from the bubble point (R407C glides ~5 K).
+    expect(reading.result.superheatK).toBeCloseTo(6, 1);
+    expect(reading.result.subcoolingK).toBeCloseTo(5, 1);
+  });
+
+  it("refuses impossible readings with field messages and keeps nothing", async () => {
+    const response = await technician
+      .post(`/api/visits/${visitId}/readings`)
+      .send({ ...rooftopReading, suctionPressureKPa: 2000, liquidPressureKPa: 1500 });
+    expect(response.status).toBe(400);
+    expect(response.body.fields.suctionPressureKPa).toMatch(/below liquid pressure/);
+    const missing = await technician.post(`/api/visits/${visitId}/readings`).send({ circuit: 3, suctionPressureKPa: "abc" });
+    expect(missing.status).toBe(400);
+    expect(missing.body.fields.circuit).toMatch(/2 circuit/);
+    const visit = await technician.get(`/api/visits/${visitId}`);
+    expect(visit.body.visit.readings).toHaveLength(1);
+  });
+
+  it("records adjustments and comments on the timeline", async () => {
+    const noMass = await technician.post(`/api/visits/${visitId}/adjustments`).send({ circuit: 1, kind: "charge-added", description: "Topped up" });
+    expect(noMass.status).toBe(400);
+    expect(noMass.body.fields.amountKg).toBeDefined();
+    const added = await technician
+      .post(`/api/visits/${visitId}/adjustments`)
+      .send({ circuit: 1, kind: "charge-added", description: "Added 0.4 kg liquid", amountKg: 0.4 });
+    expect(added.status).toBe(201);
+    const visit = (await senior.get(`/api/visits/${visitId}`)).body.visit;
+    const comment = await senior.post(`/api/visits/${visitId}/comments`).send({ body: "Superheat looks right; watch the DLT", readingId: visit.readings[0].id });
+    expect(comment.status).toBe(201);
+    expect(comment.body.comment.author.name).toBe("Priya Raman");
+    expect((await apprentice.post(`/api/visits/${visitId}/comments`).send({ body: "hi" })).status).toBe(403);
+  });
+
+  it("moves through review: submit, send back with a reason, resubmit, sign off, then closed", async () => {
+    expect((await technician.post(`/api/visits/${visitId}/review`).send({ action: "sign-off" })).status).toBe(403);
+    expect((await technician.post(`/api/visits/${visitId}/review`).send({ action: "submit" })).body.visit.status).toBe("awaiting-review");
+    const noReason = await senior.post(`/api/visits/${visitId}/review`).send({ action: "send-back" });
+    expect(noReason.status).toBe(400);
+    const sentBack = await senior.post(`/api/visits/${visitId}/review`).send({ action: "send-back", reason: "Log a reading on circuit 2 too" });
+    expect(sentBack.body.visit).toMatchObject({ status: "sent-back", reviewNote: "Log a reading on circuit 2 too" });
+    expect(sentBack.body.visit.comments.at(-1).body).toMatch(/circuit 2/);
+    await technician.post(`/api/visits/${visitId}/readings`).send({ ...rooftopReading, circuit: 2 });
+    await technician.post(`/api/visits/${visitId}/review`).send({ action: "submit" });
+    const signed = await senior.post(`/api/visits/${visitId}/review`).send({ action: "sign-off", note: "Good work" });
+    expect(signed.body.visit).toMatchObject({ status: "signed-off", signedOffBy: { name: "Priya Raman" } });
+    const late = await technician.post(`/api/visits/${visitId}/readings`).send(rooftopReading);
+    expect(late.status).toBe(409);
+    expect((await senior.post(`/api/visits/${visitId}/review`).send({ action: "sign-off" })).status).toBe(409);
+  });
+
+  it("hides every record from another organisation behind 404", async () => {
+    expect((await outsider.get(`/api/visits/${visitId}`)).status).toBe(404);
+    expect((await outsider.get(`/api/equipment/${rooftopId}`)).status).toBe(404);
+    expect((await outsider.post(`/api/visits/${visitId}/readings`).send(rooftopReading)).status).toBe(404);
+    expect((await outsider.post("/api/visits").send({ equipmentId: rooftopId, reason: "Sneaky visit" })).status).toBe(400);
+    expect((await outsider.get("/api/visits")).body.visits).toEqual([]);
+    expect((await technician.get("/api/visits/not-a-uuid")).status).toBe(404);
+  });
+
+  it("shows the equipment's visits and the last settled reading per circuit", async () => {
+    const response = await technician.get(`/api/equipment/${rooftopId}`);
+    expect(response.status).toBe(200);
+    expect(response.body.visits[0]).toMatchObject({ id: visitId, status: "signed-off", readingCount: 2 });
+    expect(response.body.lastSettled).toHaveLength(2);
+  });
+
+  it("accepts photos by content, refuses other files, and serves thumbnails", async () => {
+    const open = (await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Photo check visit" })).body.visit.id;
+    const png = await sharp({ create: { width: 800, height: 600, channels: 3, background: "#88aacc" } }).png().toBuffer();
+    const uploaded = await technician.post(`/api/visits/${open}/photos`).field("kind", "nameplate").attach("photo", png, "plate.png");
+    expect(uploaded.status).toBe(201);
+    const thumbnail = await technician.get(uploaded.body.photo.thumbnailUrl).buffer(true);
+    expect(thumbnail.status).toBe(200);
+    expect(thumbnail.headers["content-type"]).toBe("image/webp");
+    expect((await sharp(thumbnail.body).metadata()).width).toBe(320);
+    const fake = await technician.post(`/api/visits/${open}/photos`).attach("photo", Buffer.from("not an image"), "evil.jpg");
+    expect(fake.status).toBe(415);
+    expect((await outsider.get(uploaded.body.photo.url)).status).toBe(404);
+  });
+});
