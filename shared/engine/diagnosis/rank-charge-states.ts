@@ -1,7 +1,12 @@
 import { CHARGE_STATES, type Finding, type RankedState } from "../../schemas/diagnosis.ts";
 
+type State = RankedState["state"];
+
 /** Scores at or below this are rounding left-overs of cancelling weights, not evidence. */
 const SCORE_EPSILON = 1e-9;
+/** The states evidence can point to, in `CHARGE_STATES` order ("normal" first). */
+const EVIDENCE_STATES = CHARGE_STATES.filter((state): state is State => state !== "insufficient-data");
+const STATE_INDEX = Object.fromEntries(EVIDENCE_STATES.map((state, index) => [state, index])) as Record<State, number>;
 
 /**
  * Sums the evidence of all findings per state and ranks the states, most likely first.
@@ -16,17 +21,18 @@ const SCORE_EPSILON = 1e-9;
  * @example rankChargeStates([{ …, pointsTo: [{ state: "undercharged", weight: 1 }] }]) // [{ state: "undercharged", score: 1, confidence: 0.632 }]
  */
 export function rankChargeStates(findings: readonly Finding[]): RankedState[] {
-  const scores = new Map<RankedState["state"], number>();
-  for (const finding of findings) {
-    for (const evidence of finding.pointsTo) {
-      scores.set(evidence.state, (scores.get(evidence.state) ?? 0) + evidence.weight);
+  const scores = new Float64Array(EVIDENCE_STATES.length);
+  for (let findingIndex = 0; findingIndex < findings.length; findingIndex += 1) {
+    const pointsTo = findings[findingIndex]!.pointsTo;
+    for (let evidenceIndex = 0; evidenceIndex < pointsTo.length; evidenceIndex += 1) {
+      const evidence = pointsTo[evidenceIndex]!;
+      scores[STATE_INDEX[evidence.state]] += evidence.weight;
     }
   }
   const ranked: RankedState[] = [];
-  for (const state of CHARGE_STATES) {
-    if (state === "insufficient-data") continue;
-    const score = scores.get(state) ?? 0;
-    if (score > SCORE_EPSILON) ranked.push({ state, score, confidence: 1 - Math.exp(-score) });
+  for (let index = 0; index < EVIDENCE_STATES.length; index += 1) {
+    const score = scores[index]!;
+    if (score > SCORE_EPSILON) ranked.push({ state: EVIDENCE_STATES[index]!, score, confidence: 1 - Math.exp(-score) });
   }
   // Array.prototype.sort is stable, so equal scores keep CHARGE_STATES order.
   ranked.sort((first, second) => second.score - first.score);

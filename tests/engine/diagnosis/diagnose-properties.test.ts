@@ -1,5 +1,5 @@
 import fc from "fast-check";
-import { describe, expect, it } from "vitest";
+import { describe, it } from "vitest";
 import { DiagnosisResultSchema, METERING_DEVICES, type DiagnosisInputDraft, type DiagnosisResult, type EvidenceState } from "@shared/schemas/diagnosis";
 import { absoluteToGauge, diagnose, saturationPressure } from "@shared/engine/index";
 

@@ -1,6 +1,7 @@
 import { HIGH_CURRENT_RATIO, LOW_CURRENT_RATIO } from "../diagnosis-limits.ts";
 import { deviationStrength } from "../deviation-strength.ts";
 import { COMMON_PRACTICE, cite } from "../sources.ts";
+import { formatHundredths } from "../format-hundredths.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
 
@@ -31,26 +32,23 @@ export const compressorCurrentRule: DiagnosisRule = {
         ],
       };
     }
-    const finding = {
-      ruleId: this.id,
-      reading: "compressorCurrentRatio",
-      value: ratio,
-      unit: "× RLA",
-      source: SOURCE,
-    };
     if (ratio > HIGH_CURRENT_RATIO) {
       const strength = deviationStrength(ratio - HIGH_CURRENT_RATIO, FULL_STRENGTH_RATIO);
       return {
         findings: [
           {
-            ...finding,
+            ruleId: this.id,
+            reading: "compressorCurrentRatio",
+            value: ratio,
+            unit: "× RLA",
+            source: SOURCE,
             direction: "high",
             pointsTo: [
               { state: "condenser-airflow", weight: 0.4 * strength },
               { state: "non-condensables", weight: 0.4 * strength },
               { state: "overcharged", weight: 0.4 * strength },
             ],
-            message: `Compressor draws ${formatTenths(compressorAmps)} A, ${ratio.toFixed(2)} × RLA: above its rating — high head pressure or high load; investigate`,
+            message: `Compressor draws ${formatTenths(compressorAmps)} A, ${formatHundredths(ratio)} × RLA: above its rating — high head pressure or high load; investigate`,
           },
         ],
         warnings: [],
@@ -61,21 +59,25 @@ export const compressorCurrentRule: DiagnosisRule = {
       return {
         findings: [
           {
-            ...finding,
+            ruleId: this.id,
+            reading: "compressorCurrentRatio",
+            value: ratio,
+            unit: "× RLA",
+            source: SOURCE,
             direction: "low",
             pointsTo: [
               { state: "weak-compressor", weight: 0.3 * strength },
               { state: "undercharged", weight: 0.2 * strength },
               { state: "restricted-metering", weight: 0.2 * strength },
             ],
-            message: `Compressor draws ${formatTenths(compressorAmps)} A, ${ratio.toFixed(2)} × RLA: little refrigerant is being pumped`,
+            message: `Compressor draws ${formatTenths(compressorAmps)} A, ${formatHundredths(ratio)} × RLA: little refrigerant is being pumped`,
           },
         ],
         warnings: [],
       };
     }
     return {
-      findings: [{ ...finding, direction: "normal", pointsTo: [], message: `Compressor draws ${formatTenths(compressorAmps)} A, ${ratio.toFixed(2)} × RLA: within its rating` }],
+      findings: [{ ruleId: this.id, reading: "compressorCurrentRatio", value: ratio, unit: "× RLA", source: SOURCE, direction: "normal", pointsTo: [], message: `Compressor draws ${formatTenths(compressorAmps)} A, ${formatHundredths(ratio)} × RLA: within its rating` }],
       warnings: [],
     };
   },

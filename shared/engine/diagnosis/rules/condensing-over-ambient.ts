@@ -1,7 +1,7 @@
 import { CONDENSING_OVER_AMBIENT_BAND } from "../diagnosis-limits.ts";
 import { cite } from "../sources.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
-import { bandedFinding } from "./banded-finding.ts";
+import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 
 /** High CTOA = head pressure high for the weather; low = head low [S21][S26][S122]. */
 export const CONDENSING_OVER_AMBIENT_PROFILE: EvidenceProfile = {
@@ -15,6 +15,12 @@ export const CONDENSING_OVER_AMBIENT_PROFILE: EvidenceProfile = {
 };
 
 const SOURCE = cite(["S26", "S21", "S122"]);
+
+const MESSAGES: BandedReading["messages"] = {
+  low: (value, band) => `Condensing only ${value} K over outdoor air (expected ${band} K): head pressure is low — short of charge or the compressor is not pumping`,
+  normal: (value, band) => `Condensing ${value} K over outdoor air sits in ${band} K`,
+  high: (value, band) => `Condensing ${value} K over outdoor air is above ${band} K: head pressure is high — dirty condenser, fan, air in the system or too much charge`,
+};
 
 /** Condensing temperature over outdoor ambient: is head pressure right for the weather? */
 export const condensingOverAmbientRule: DiagnosisRule = {
@@ -33,11 +39,7 @@ export const condensingOverAmbientRule: DiagnosisRule = {
           unit: "K",
           band: CONDENSING_OVER_AMBIENT_BAND,
           profile: CONDENSING_OVER_AMBIENT_PROFILE,
-          messages: {
-            low: (value, band) => `Condensing only ${value} K over outdoor air (expected ${band} K): head pressure is low — short of charge or the compressor is not pumping`,
-            normal: (value, band) => `Condensing ${value} K over outdoor air sits in ${band} K`,
-            high: (value, band) => `Condensing ${value} K over outdoor air is above ${band} K: head pressure is high — dirty condenser, fan, air in the system or too much charge`,
-          },
+          messages: MESSAGES,
           source: SOURCE,
         }),
       ],

@@ -1,7 +1,7 @@
 import { COMFORT_RETURN_AIR_MIN_C, EVAPORATOR_TD_BAND, EVAPORATOR_TD_SOURCE } from "../diagnosis-limits.ts";
 import { cite } from "../sources.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
-import { bandedFinding } from "./banded-finding.ts";
+import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 
 /**
  * Large TD = suction low for the load (starved or airflow-poor coil); small TD = suction high
@@ -17,6 +17,12 @@ export const EVAPORATOR_TD_PROFILE: EvidenceProfile = {
 };
 
 const SOURCE = `${cite(["S21", "S122"])}; ${EVAPORATOR_TD_SOURCE}`;
+
+const MESSAGES: BandedReading["messages"] = {
+  low: (value, band) => `Evaporator TD ${value} K is below ${band} K: suction is high for the load — compressor not pumping, or the coil is overfed`,
+  normal: (value, band) => `Evaporator TD ${value} K sits in ${band} K: suction pressure suits the load`,
+  high: (value, band) => `Evaporator TD ${value} K is above ${band} K: suction is low for the load — starved coil or poor airflow`,
+};
 
 /** Return air dry bulb minus evaporating temperature: a proxy for "suction low / high". */
 export const evaporatorTemperatureDifferenceRule: DiagnosisRule = {
@@ -36,11 +42,7 @@ export const evaporatorTemperatureDifferenceRule: DiagnosisRule = {
           unit: "K",
           band: EVAPORATOR_TD_BAND,
           profile: EVAPORATOR_TD_PROFILE,
-          messages: {
-            low: (value, band) => `Evaporator TD ${value} K is below ${band} K: suction is high for the load — compressor not pumping, or the coil is overfed`,
-            normal: (value, band) => `Evaporator TD ${value} K sits in ${band} K: suction pressure suits the load`,
-            high: (value, band) => `Evaporator TD ${value} K is above ${band} K: suction is low for the load — starved coil or poor airflow`,
-          },
+          messages: MESSAGES,
           source: SOURCE,
         }),
       ],

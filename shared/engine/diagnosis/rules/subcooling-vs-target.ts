@@ -1,6 +1,6 @@
 import { cite } from "../sources.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
-import { bandedFinding } from "./banded-finding.ts";
+import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 
 /** TXV/EEV: charged to subcooling, so subcooling carries the charge signal [S9][S11][S14]. */
 export const VALVE_SUBCOOLING_PROFILE: EvidenceProfile = {
@@ -29,6 +29,12 @@ export const FIXED_SUBCOOLING_PROFILE: EvidenceProfile = {
 };
 
 const SOURCE = cite(["S9", "S11", "S14", "S21", "S24"]);
+
+const MESSAGES: BandedReading["messages"] = {
+  low: (value, band) => `Subcooling ${value} K is below ${band} K: little liquid is held in the condenser — short of charge, or the condenser is not condensing`,
+  normal: (value, band) => `Subcooling ${value} K sits in ${band} K`,
+  high: (value, band) => `Subcooling ${value} K is above ${band} K: liquid is backing up in the condenser — overcharged or restricted downstream`,
+};
 
 /** Subcooling (bubble point at liquid pressure) against its target band, weighted by metering device. */
 export const subcoolingVsTargetRule: DiagnosisRule = {
@@ -67,11 +73,7 @@ export const subcoolingVsTargetRule: DiagnosisRule = {
       unit: "K",
       band,
       profile: valve ? VALVE_SUBCOOLING_PROFILE : FIXED_SUBCOOLING_PROFILE,
-      messages: {
-        low: (value, band) => `Subcooling ${value} K is below ${band} K: little liquid is held in the condenser — short of charge, or the condenser is not condensing`,
-        normal: (value, band) => `Subcooling ${value} K sits in ${band} K`,
-        high: (value, band) => `Subcooling ${value} K is above ${band} K: liquid is backing up in the condenser — overcharged or restricted downstream`,
-      },
+      messages: MESSAGES,
       source: `${SOURCE}; band: ${band.source}`,
     });
     return { findings: [finding], warnings: [] };

@@ -1,7 +1,7 @@
 import { cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
-import { bandedFinding } from "./banded-finding.ts";
+import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 
 /**
  * Fixed metering devices cannot adjust, so superheat carries the charge signal: high →
@@ -31,6 +31,18 @@ export const VALVE_SUPERHEAT_PROFILE: EvidenceProfile = {
 };
 
 const SOURCE = cite(["S10", "S17", "S21", "S22", "S23"]);
+
+const FIXED_MESSAGES: BandedReading["messages"] = {
+  low: (value, band) => `Superheat ${value} K is below its target ${band} K: too much refrigerant for the load, or too little air over the evaporator`,
+  normal: (value, band) => `Superheat ${value} K sits in its target ${band} K`,
+  high: (value, band) => `Superheat ${value} K is above its target ${band} K: the evaporator is starved — short of charge or restricted`,
+};
+
+const VALVE_MESSAGES: BandedReading["messages"] = {
+  low: (value, band) => `Superheat ${value} K is below ${band} K: the valve is overfeeding (bulb contact, low load or low airflow)`,
+  normal: (value, band) => `Superheat ${value} K sits in ${band} K: the valve is controlling; subcooling carries the charge signal`,
+  high: (value, band) => `Superheat ${value} K is above ${band} K: the valve cannot feed enough — restriction or a large shortage of charge`,
+};
 
 /** Superheat against its target band, weighted by metering device. */
 export const superheatVsTargetRule: DiagnosisRule = {
@@ -74,17 +86,7 @@ export const superheatVsTargetRule: DiagnosisRule = {
       unit: "K",
       band,
       profile: fixed ? FIXED_SUPERHEAT_PROFILE : VALVE_SUPERHEAT_PROFILE,
-      messages: fixed
-        ? {
-            low: (value, band) => `Superheat ${value} K is below its target ${band} K: too much refrigerant for the load, or too little air over the evaporator`,
-            normal: (value, band) => `Superheat ${value} K sits in its target ${band} K`,
-            high: (value, band) => `Superheat ${value} K is above its target ${band} K: the evaporator is starved — short of charge or restricted`,
-          }
-        : {
-            low: (value, band) => `Superheat ${value} K is below ${band} K: the valve is overfeeding (bulb contact, low load or low airflow)`,
-            normal: (value, band) => `Superheat ${value} K sits in ${band} K: the valve is controlling; subcooling carries the charge signal`,
-            high: (value, band) => `Superheat ${value} K is above ${band} K: the valve cannot feed enough — restriction or a large shortage of charge`,
-          },
+      messages: fixed ? FIXED_MESSAGES : VALVE_MESSAGES,
       source: `${SOURCE}; band: ${band.source}`,
     });
     return { findings: [finding], warnings: [] };

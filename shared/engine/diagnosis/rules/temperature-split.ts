@@ -1,7 +1,7 @@
 import { COMFORT_RETURN_AIR_MIN_C, TEMPERATURE_SPLIT_BAND } from "../diagnosis-limits.ts";
 import { cite } from "../sources.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
-import { bandedFinding } from "./banded-finding.ts";
+import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 
 /** High split: too little air over the coil; low split: too little refrigeration effect [S21][S33]. */
 export const TEMPERATURE_SPLIT_PROFILE: EvidenceProfile = {
@@ -15,6 +15,12 @@ export const TEMPERATURE_SPLIT_PROFILE: EvidenceProfile = {
 };
 
 const SOURCE = cite(["S33", "S21"]);
+
+const MESSAGES: BandedReading["messages"] = {
+  low: (value, band) => `Air split ${value} K is below ${band} K: the coil is doing little cooling (humid air also lowers the split)`,
+  normal: (value, band) => `Air split ${value} K sits in ${band} K`,
+  high: (value, band) => `Air split ${value} K is above ${band} K: too little air over the evaporator — filter, coil or fan`,
+};
 
 /** Air temperature split across the evaporator against the comfort-cooling band. */
 export const temperatureSplitRule: DiagnosisRule = {
@@ -34,11 +40,7 @@ export const temperatureSplitRule: DiagnosisRule = {
           unit: "K",
           band: TEMPERATURE_SPLIT_BAND,
           profile: TEMPERATURE_SPLIT_PROFILE,
-          messages: {
-            low: (value, band) => `Air split ${value} K is below ${band} K: the coil is doing little cooling (humid air also lowers the split)`,
-            normal: (value, band) => `Air split ${value} K sits in ${band} K`,
-            high: (value, band) => `Air split ${value} K is above ${band} K: too little air over the evaporator — filter, coil or fan`,
-          },
+          messages: MESSAGES,
           source: SOURCE,
         }),
       ],

@@ -1,0 +1,30 @@
+/**
+ * Charge diagnosis benchmark: µs per `diagnose()` call (validation, saturation lookups, every
+ * rule, ranking) over the worked cases in tests/fixtures/diagnosis-cases. Target: under 5 µs
+ * per call. The humidity path is reported apart because psychrolib's wet-bulb solve (an
+ * iterative bisection) costs several µs on its own.
+ */
+import { diagnose } from "../shared/engine/index.ts";
+import { DiagnosisInputSchema, type DiagnosisInput } from "../shared/schemas/diagnosis.ts";
+import rawCases from "../tests/fixtures/diagnosis-cases/cases.json" with { type: "json" };
+import { DiagnosisCaseFileSchema } from "../tests/fixtures/diagnosis-cases/diagnosis-case-schema.ts";
+import { nanosecondsPerCall, registerBench } from "./bench-registry.ts";
+
+const TARGET_MICROSECONDS = 5;
+const ITERATIONS = 100_000;
+
+function report(label: string, nanoseconds: number, withTarget = true): void {
+  const verdict = withTarget ? (nanoseconds / 1000 < TARGET_MICROSECONDS ? "  (under the 5 µs target)" : "  (ABOVE the 5 µs target)") : "";
+  console.log(`${label.padEnd(52)} ${(nanoseconds / 1000).toFixed(2).padStart(6)} µs${verdict}`);
+}
+
+registerBench("charge diagnosis", () => {
+  const inputs: DiagnosisInput[] = DiagnosisCaseFileSchema.parse(rawCases).cases.map((worked) => worked.input);
+  const measured = inputs.filter((input) => input.returnAirRelativeHumidity === undefined);
+  const humidity = inputs.filter((input) => input.returnAirRelativeHumidity !== undefined);
+  const score = (input: DiagnosisInput) => diagnose(input).confidence + 1;
+
+  report(`diagnose(), ${measured.length} worked cases (wet bulb measured or none)`, nanosecondsPerCall((i) => score(measured[i % measured.length]!), ITERATIONS));
+  report(`diagnose(), ${humidity.length} case(s) with wet bulb from RH (psychrolib)`, nanosecondsPerCall((i) => score(humidity[i % humidity.length]!), ITERATIONS / 4), false);
+  report("  of which input validation (zod parse)", nanosecondsPerCall((i) => (DiagnosisInputSchema.parse(measured[i % measured.length]!).suctionPressureKPa > 0 ? 1 : 0), ITERATIONS), false);
+});
