@@ -49,7 +49,12 @@ function makePoints(ids: string[], seed: number): Point[] {
 }
 
 function report(label: string, tableNs: number, directNs?: number): void {
-  const direct = directNs === undefined ? "" : `   direct EOS ${(directNs / 1000).toFixed(1).padStart(8)} µs   ratio ${Math.round(directNs / tableNs).toLocaleString("en").padStart(8)}×`;
+  const direct =
+    directNs === undefined
+      ? ""
+      : `   direct EOS ${(directNs / 1000).toFixed(1).padStart(8)} µs   ratio ${Math.round(directNs / tableNs)
+          .toLocaleString("en")
+          .padStart(8)}×`;
   console.log(`${label.padEnd(44)} table ${tableNs.toFixed(0).padStart(5)} ns${direct}`);
 }
 
@@ -62,7 +67,11 @@ registerBench("refrigerant properties", () => {
   if (haveEos) for (const r of all) models.set(r.id, createFluidModel(readReferenceFluid(r.id)));
   else console.log("(../shared/reference absent: direct EOS solves skipped)");
 
-  for (const [group, ids] of [["pure fluids", pureIds], ["pseudo-pure blends", blendIds], ["R410A only", ["R410A"]]] as const) {
+  for (const [group, ids] of [
+    ["pure fluids", pureIds],
+    ["pseudo-pure blends", blendIds],
+    ["R410A only", ["R410A"]],
+  ] as const) {
     const points = makePoints([...ids], 7);
     const pressureNs = nanosecondsPerCall((i) => {
       const p = points[i & (POINTS - 1)]!;
@@ -76,15 +85,23 @@ registerBench("refrigerant properties", () => {
     let directTemperatureNs: number | undefined;
     if (haveEos) {
       const count = group === "pure fluids" ? 2000 : 20000;
-      directPressureNs = nanosecondsPerCall((i) => {
-        const p = points[i % POINTS]!;
-        const state = saturationStateAt(models.get(p.id)!, p.temperatureC + 273.15, { guess: "ancillary" });
-        return p.point === "bubble" ? state.bubblePressure : state.dewPressure;
-      }, count, 3);
-      directTemperatureNs = nanosecondsPerCall((i) => {
-        const p = points[i % POINTS]!;
-        return saturationTemperatureAt(models.get(p.id)!, p.pressureKPa * 1000, p.point);
-      }, Math.max(200, count / 10), 3);
+      directPressureNs = nanosecondsPerCall(
+        (i) => {
+          const p = points[i % POINTS]!;
+          const state = saturationStateAt(models.get(p.id)!, p.temperatureC + 273.15, { guess: "ancillary" });
+          return p.point === "bubble" ? state.bubblePressure : state.dewPressure;
+        },
+        count,
+        3,
+      );
+      directTemperatureNs = nanosecondsPerCall(
+        (i) => {
+          const p = points[i % POINTS]!;
+          return saturationTemperatureAt(models.get(p.id)!, p.pressureKPa * 1000, p.point);
+        },
+        Math.max(200, count / 10),
+        3,
+      );
     }
     report(`saturationPressure, ${group}`, pressureNs, directPressureNs);
     report(`saturationTemperature, ${group}`, temperatureNs, directTemperatureNs);

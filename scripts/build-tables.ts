@@ -76,8 +76,15 @@ function buildTable(designation: string, generated: string, dataNote: string): R
 
   const grid = temperatureGrid(model);
   const columns: RefrigerantTable["columns"] = {
-    temperature: [], bubblePressure: [], dewPressure: [], bubbleSlope: [], dewSlope: [],
-    liquidDensity: [], vapourDensity: [], liquidEnthalpy: [], vapourEnthalpy: [],
+    temperature: [],
+    bubblePressure: [],
+    dewPressure: [],
+    bubbleSlope: [],
+    dewSlope: [],
+    liquidDensity: [],
+    vapourDensity: [],
+    liquidEnthalpy: [],
+    vapourEnthalpy: [],
   };
   for (const temperatureC of grid) {
     const state = saturationStateAt(model, toKelvin(model, temperatureC), { checkTolerance: check });
@@ -139,7 +146,11 @@ function buildTable(designation: string, generated: string, dataNote: string): R
   bibtexKeys.push(COOLPROP_BIBTEX);
   const isBlend = model.kind === "pseudo-pure";
   const lowerLimit =
-    grid[0]! > LOWEST_C + 1e-9 ? (isBlend ? "200 K limit of the pseudo-pure equations" : "triple point") : "-60 °C table limit";
+    grid[0]! > LOWEST_C + 1e-9
+      ? isBlend
+        ? "200 K limit of the pseudo-pure equations"
+        : "triple point"
+      : "-60 °C table limit";
 
   const table: RefrigerantTable = {
     id: designation,
@@ -153,7 +164,8 @@ function buildTable(designation: string, generated: string, dataNote: string): R
     },
     gwp100: {
       ...meta.gwp100,
-      source: "IPCC AR4 WG1 Table 2.14 and AR5 WG1 Table 8.A.1 (100-year), as listed in the project's trade notes (TRADE.md §7.2); blends are mass-weighted sums",
+      source:
+        "IPCC AR4 WG1 Table 2.14 and AR5 WG1 Table 8.A.1 (100-year), as listed in the project's trade notes (TRADE.md §7.2); blends are mass-weighted sums",
     },
     criticalPoint,
     normalBoilingPoint,
@@ -223,7 +235,9 @@ function main(): void {
     ...designations.map((id, i) => `import table${i} from "../../../data/refrigerants/${id}.json";`),
     "",
     "/** Raw generated tables, validated by the registry on first use. */",
-    `export const REFRIGERANT_TABLE_FILES: readonly unknown[] = [${designations.map((_, i) => `table${i}`).join(", ")}];`,
+    "export const REFRIGERANT_TABLE_FILES: readonly unknown[] = [",
+    ...designations.map((_, i) => `  table${i},`),
+    "];",
     "",
   ].join("\n");
   writeFileSync(path.join(repoRoot, "shared/engine/properties/refrigerant-table-files.ts"), registry);

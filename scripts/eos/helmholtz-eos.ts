@@ -5,11 +5,7 @@
  * Molar SI units throughout: K, Pa, mol/m³, J/mol, J/(mol·K).
  */
 import { compileIdealHelmholtz, type IdealHelmholtz } from "./ideal-helmholtz.ts";
-import {
-  compileResidualHelmholtz,
-  createResidualDerivatives,
-  type ResidualHelmholtz,
-} from "./residual-helmholtz.ts";
+import { compileResidualHelmholtz, createResidualDerivatives, type ResidualHelmholtz } from "./residual-helmholtz.ts";
 import type { ReferenceFluidFile } from "./reference-types.ts";
 
 export interface EosState {
@@ -94,7 +90,10 @@ export function createHelmholtzEos(file: ReferenceFluidFile): HelmholtzEos {
         const delta = rho / rhor;
         const r = residual.evaluateDelta(Tr / T, delta, scratch);
         const RT = R * T;
-        return { p: rho * RT * (1 + delta * r.dDelta), dpdrho: RT * (1 + 2 * delta * r.dDelta + delta * delta * r.dDelta2) };
+        return {
+          p: rho * RT * (1 + delta * r.dDelta),
+          dpdrho: RT * (1 + 2 * delta * r.dDelta + delta * delta * r.dDelta2),
+        };
       };
       const fail = (why: string) => new Error(`${file.designation}: no ${branch} density at ${T} K, ${p} Pa (${why})`);
       let below: number; // ρ with p(ρ) < target

@@ -55,7 +55,8 @@ export function compileIdealHelmholtz(blocks: IdealBlock[]): IdealHelmholtz {
         const { n, t } = block;
         parts.push((tau, out) => {
           for (let k = 0; k < n.length; k++) {
-            const nk = n[k]!, tk = t[k]!;
+            const nk = n[k]!,
+              tk = t[k]!;
             out.alpha0 += nk * Math.pow(tau, tk);
             out.dTau += nk * tk * Math.pow(tau, tk - 1);
             out.dTau2 += nk * tk * (tk - 1) * Math.pow(tau, tk - 2);
@@ -67,7 +68,8 @@ export function compileIdealHelmholtz(blocks: IdealBlock[]): IdealHelmholtz {
         const { n, t } = block;
         parts.push((tau, out) => {
           for (let k = 0; k < n.length; k++) {
-            const nk = n[k]!, tk = t[k]!;
+            const nk = n[k]!,
+              tk = t[k]!;
             const e = Math.exp(tk * tau);
             out.alpha0 += nk * Math.log(1 - Math.exp(-tk * tau));
             out.dTau += (nk * tk) / (e - 1);
@@ -100,7 +102,8 @@ export function compileIdealHelmholtz(blocks: IdealBlock[]): IdealHelmholtz {
                 (ck * Math.pow(T0, tk + 1) * tau) / (Tc * (tk + 1)) +
                 (ck * Math.pow(T0, tk)) / tk;
               out.dTau +=
-                (ck * Math.pow(Tc, tk) * Math.pow(tau, -tk - 1)) / (tk + 1) - (ck * Math.pow(T0, tk + 1)) / (Tc * (tk + 1));
+                (ck * Math.pow(Tc, tk) * Math.pow(tau, -tk - 1)) / (tk + 1) -
+                (ck * Math.pow(T0, tk + 1)) / (Tc * (tk + 1));
               out.dTau2 += -ck * Math.pow(Tc, tk) * Math.pow(tau, -tk - 2);
             });
           }

@@ -57,7 +57,10 @@ export function solvePhaseEquilibrium(
     const f1 = pL - pV;
     const f2 = gL - gV;
     // Jacobian in x = ln δ: ∂(δ(1+δα_δ))/∂x = δ·J, ∂(α+δα_δ+ln δ)/∂x = J
-    const a11 = dL * jL, a12 = -dV * jV, a21 = jL, a22 = -jV;
+    const a11 = dL * jL,
+      a12 = -dV * jV,
+      a21 = jL,
+      a22 = -jV;
     const det = a11 * a22 - a12 * a21;
     let stepL = (f1 * a22 - a12 * f2) / det;
     let stepV = (a11 * f2 - a21 * f1) / det;

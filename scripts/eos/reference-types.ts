@@ -52,11 +52,7 @@ export interface ResidualNonAnalyticBlock {
   D: number[];
 }
 export type ResidualBlock =
-  | ResidualPowerBlock
-  | ResidualGaussianBlock
-  | ResidualLemmon2005Block
-  | ResidualGaoBBlock
-  | ResidualNonAnalyticBlock;
+  ResidualPowerBlock | ResidualGaussianBlock | ResidualLemmon2005Block | ResidualGaoBBlock | ResidualNonAnalyticBlock;
 
 export type IdealBlock =
   | { type: "IdealGasHelmholtzLead"; a1: number; a2: number }

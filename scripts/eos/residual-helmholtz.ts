@@ -79,9 +79,16 @@ function compileSeparable(blocks: ResidualBlock[]): SeparableTerms {
       case "ResidualHelmholtzGaussian":
         block.n.forEach((n, k) => {
           rows.push([
-            n, block.d[k]!, block.t[k]!,
-            QUADRATIC, -block.eta[k]!, block.epsilon[k]!,
-            QUADRATIC, -block.beta[k]!, block.gamma[k]!, 0,
+            n,
+            block.d[k]!,
+            block.t[k]!,
+            QUADRATIC,
+            -block.eta[k]!,
+            block.epsilon[k]!,
+            QUADRATIC,
+            -block.beta[k]!,
+            block.gamma[k]!,
+            0,
           ]);
         });
         break;
@@ -89,9 +96,16 @@ function compileSeparable(blocks: ResidualBlock[]): SeparableTerms {
         // Gao et al. 2020: exp[η(δ-ε)² + 1/(β(τ-γ)² + b)], stored η negative (README §3.2).
         block.n.forEach((n, k) => {
           rows.push([
-            n, block.d[k]!, block.t[k]!,
-            QUADRATIC, block.eta[k]!, block.epsilon[k]!,
-            GAO_RECIPROCAL, block.beta[k]!, block.gamma[k]!, block.b[k]!,
+            n,
+            block.d[k]!,
+            block.t[k]!,
+            QUADRATIC,
+            block.eta[k]!,
+            block.epsilon[k]!,
+            GAO_RECIPROCAL,
+            block.beta[k]!,
+            block.gamma[k]!,
+            block.b[k]!,
           ]);
         });
         break;
@@ -120,7 +134,14 @@ function compileSeparable(blocks: ResidualBlock[]): SeparableTerms {
 }
 
 interface NonAnalyticTerm {
-  n: number; a: number; b: number; beta: number; A: number; B: number; C: number; D: number;
+  n: number;
+  a: number;
+  b: number;
+  beta: number;
+  A: number;
+  B: number;
+  C: number;
+  D: number;
 }
 
 function compileNonAnalytic(blocks: ResidualBlock[]): NonAnalyticTerm[] {
@@ -142,7 +163,10 @@ function compileNonAnalytic(blocks: ResidualBlock[]): NonAnalyticTerm[] {
 function nonAnalyticValue(term: NonAnalyticTerm, tau: HyperDual, delta: HyperDual): HyperDual {
   const dm1 = delta.addReal(-1);
   const dm1Squared = dm1.mul(dm1);
-  const theta = tau.scale(-1).addReal(1).add(dm1Squared.pow(1 / (2 * term.beta)).scale(term.A));
+  const theta = tau
+    .scale(-1)
+    .addReal(1)
+    .add(dm1Squared.pow(1 / (2 * term.beta)).scale(term.A));
   const bigDelta = theta.mul(theta).add(dm1Squared.pow(term.a).scale(term.B));
   const tm1 = tau.addReal(-1);
   const psi = dm1Squared.scale(-term.C).add(tm1.mul(tm1).scale(-term.D)).exp();
@@ -170,13 +194,22 @@ export function compileResidualHelmholtz(blocks: ResidualBlock[]): ResidualHelmh
   const nonAnalytic = compileNonAnalytic(blocks);
 
   function separable(tau: number, delta: number, out: ResidualDerivatives, withTau: boolean): void {
-    let a = 0, ad = 0, at = 0, add = 0, adt = 0, att = 0;
+    let a = 0,
+      ad = 0,
+      at = 0,
+      add = 0,
+      adt = 0,
+      att = 0;
     const lnDelta = Math.log(delta);
     const lnTau = Math.log(tau);
     for (let k = 0; k < s.count; k++) {
       const d = s.d[k]!;
       const t = s.t[k]!;
-      let u = 0, ud = 0, udd = 0, ut = 0, utt = 0;
+      let u = 0,
+        ud = 0,
+        udd = 0,
+        ut = 0,
+        utt = 0;
       const dk = s.deltaKind[k];
       if (dk === NEG_POWER) {
         const l = s.deltaA[k]!;

@@ -94,7 +94,9 @@ export function saturationStateAt(model: FluidModel, T: number, options: Saturat
   const liquidDensity = eos.densityFromPressure(T, bubblePressure, model.liquidDensityCurve.value(T));
   const vapourDensity = eos.densityFromPressure(T, dewPressure, model.vapourDensityCurve.value(T));
   if (!(liquidDensity > vapourDensity)) {
-    throw new Error(`${model.designation} at ${T} K: liquid and vapour density solves met (${liquidDensity}, ${vapourDensity})`);
+    throw new Error(
+      `${model.designation} at ${T} K: liquid and vapour density solves met (${liquidDensity}, ${vapourDensity})`,
+    );
   }
   const liquid = eos.state(T, liquidDensity);
   const vapour = eos.state(T, vapourDensity);

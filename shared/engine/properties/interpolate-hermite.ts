@@ -10,7 +10,15 @@
  * @throws never
  * @example interpolateHermite(0, 0, 1, 1, 1, 1, 0.5) // 0.5
  */
-export function interpolateHermite(x0: number, y0: number, m0: number, x1: number, y1: number, m1: number, x: number): number {
+export function interpolateHermite(
+  x0: number,
+  y0: number,
+  m0: number,
+  x1: number,
+  y1: number,
+  m1: number,
+  x: number,
+): number {
   const width = x1 - x0;
   const fraction = (x - x0) / width;
   const fraction2 = fraction * fraction;

@@ -10,12 +10,7 @@
  *   }
  */
 export type PropertyErrorCode =
-  | "UNKNOWN_REFRIGERANT"
-  | "NOT_FINITE"
-  | "BELOW_RANGE"
-  | "ABOVE_RANGE"
-  | "INVALID_POINT"
-  | "INVALID_TABLE";
+  "UNKNOWN_REFRIGERANT" | "NOT_FINITE" | "BELOW_RANGE" | "ABOVE_RANGE" | "INVALID_POINT" | "INVALID_TABLE";
 
 export class PropertyRangeError extends Error {
   readonly code: PropertyErrorCode;

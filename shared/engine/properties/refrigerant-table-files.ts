@@ -21,4 +21,25 @@ import table18 from "../../../data/refrigerants/R717.json";
 import table19 from "../../../data/refrigerants/R744.json";
 
 /** Raw generated tables, validated by the registry on first use. */
-export const REFRIGERANT_TABLE_FILES: readonly unknown[] = [table0, table1, table2, table3, table4, table5, table6, table7, table8, table9, table10, table11, table12, table13, table14, table15, table16, table17, table18, table19];
+export const REFRIGERANT_TABLE_FILES: readonly unknown[] = [
+  table0,
+  table1,
+  table2,
+  table3,
+  table4,
+  table5,
+  table6,
+  table7,
+  table8,
+  table9,
+  table10,
+  table11,
+  table12,
+  table13,
+  table14,
+  table15,
+  table16,
+  table17,
+  table18,
+  table19,
+];

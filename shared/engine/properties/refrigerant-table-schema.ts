@@ -48,7 +48,12 @@ export const RefrigerantTableSchema = z
       AR5: GwpEntrySchema.nullable(),
       source: z.string(),
     }),
-    criticalPoint: z.object({ temperatureC: finite, pressureKPa: positive, densityKgPerM3: positive, note: z.string() }),
+    criticalPoint: z.object({
+      temperatureC: finite,
+      pressureKPa: positive,
+      densityKgPerM3: positive,
+      note: z.string(),
+    }),
     /** null when the triple-point pressure is above one atmosphere (R744) */
     normalBoilingPoint: z.object({ bubbleC: finite, dewC: finite }).nullable(),
     /** blends only: glide at the dew pressure of 0 °C */
@@ -67,17 +72,23 @@ export const RefrigerantTableSchema = z
     validRange: z.object({ minimumC: finite, maximumC: finite, lowerLimit: z.string() }),
     interpolation: z.string(),
     units: z.record(z.enum(TABLE_COLUMNS), z.string()),
-    columns: z.object(Object.fromEntries(TABLE_COLUMNS.map((name) => [name, z.array(finite).min(2)])) as Record<
-      TableColumn,
-      z.ZodArray<typeof finite>
-    >),
+    columns: z.object(
+      Object.fromEntries(TABLE_COLUMNS.map((name) => [name, z.array(finite).min(2)])) as Record<
+        TableColumn,
+        z.ZodArray<typeof finite>
+      >,
+    ),
   })
   .superRefine((table, context) => {
     const { columns } = table;
     const length = columns.temperature.length;
     for (const name of TABLE_COLUMNS) {
       if (columns[name].length !== length) {
-        context.addIssue({ code: "custom", message: `column ${name} has ${columns[name].length} rows, temperature has ${length}`, path: ["columns", name] });
+        context.addIssue({
+          code: "custom",
+          message: `column ${name} has ${columns[name].length} rows, temperature has ${length}`,
+          path: ["columns", name],
+        });
       }
     }
     // Strictly increasing axes: temperature and both pressures (saturation curves rise with T).
@@ -85,18 +96,36 @@ export const RefrigerantTableSchema = z
       const values = columns[name];
       for (let i = 1; i < values.length; i++) {
         if (!(values[i]! > values[i - 1]!)) {
-          context.addIssue({ code: "custom", message: `column ${name} is not strictly increasing at row ${i}`, path: ["columns", name] });
+          context.addIssue({
+            code: "custom",
+            message: `column ${name} is not strictly increasing at row ${i}`,
+            path: ["columns", name],
+          });
           break;
         }
       }
     }
-    for (const name of ["bubblePressure", "dewPressure", "bubbleSlope", "dewSlope", "liquidDensity", "vapourDensity"] as const) {
+    for (const name of [
+      "bubblePressure",
+      "dewPressure",
+      "bubbleSlope",
+      "dewSlope",
+      "liquidDensity",
+      "vapourDensity",
+    ] as const) {
       if (columns[name].some((value) => !(value > 0))) {
         context.addIssue({ code: "custom", message: `column ${name} must be positive`, path: ["columns", name] });
       }
     }
-    if (columns.temperature[0] !== table.validRange.minimumC || columns.temperature[length - 1] !== table.validRange.maximumC) {
-      context.addIssue({ code: "custom", message: "validRange must match the first and last temperature rows", path: ["validRange"] });
+    if (
+      columns.temperature[0] !== table.validRange.minimumC ||
+      columns.temperature[length - 1] !== table.validRange.maximumC
+    ) {
+      context.addIssue({
+        code: "custom",
+        message: "validRange must match the first and last temperature rows",
+        path: ["validRange"],
+      });
     }
   });
 

@@ -13,6 +13,10 @@ export type SaturationPoint = "bubble" | "dew";
 
 export function requireSaturationPoint(id: string, point: unknown): asserts point is SaturationPoint {
   if (point !== "bubble" && point !== "dew") {
-    throw new PropertyRangeError("INVALID_POINT", id, `${id}: the saturation point must be "bubble" or "dew" (got ${String(point)})`);
+    throw new PropertyRangeError(
+      "INVALID_POINT",
+      id,
+      `${id}: the saturation point must be "bubble" or "dew" (got ${String(point)})`,
+    );
   }
 }

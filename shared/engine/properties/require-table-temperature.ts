@@ -13,11 +13,19 @@ import type { CompiledRefrigerant } from "./resolve-refrigerant.ts";
 export function requireTableTemperature(refrigerant: CompiledRefrigerant, temperatureC: number): void {
   const { id } = refrigerant.info;
   if (typeof temperatureC !== "number" || !Number.isFinite(temperatureC)) {
-    throw new PropertyRangeError("NOT_FINITE", id, `${id}: the temperature must be a number in °C (got ${String(temperatureC)})`);
+    throw new PropertyRangeError(
+      "NOT_FINITE",
+      id,
+      `${id}: the temperature must be a number in °C (got ${String(temperatureC)})`,
+    );
   }
   const covers = `the table covers ${refrigerant.minimumC} to ${refrigerant.maximumC} °C`;
   if (temperatureC < refrigerant.minimumC) {
-    throw new PropertyRangeError("BELOW_RANGE", id, `${id} below ${refrigerant.minimumC} °C is outside the table (${covers})`);
+    throw new PropertyRangeError(
+      "BELOW_RANGE",
+      id,
+      `${id} below ${refrigerant.minimumC} °C is outside the table (${covers})`,
+    );
   }
   if (temperatureC > refrigerant.maximumC) {
     const critical = refrigerant.info.criticalPoint.temperatureC;

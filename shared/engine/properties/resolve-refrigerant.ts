@@ -76,7 +76,8 @@ function uniformGrid(temperatureC: Float64Array): { gridStart: number; gridStep:
   if (n < 4) return { gridStart: temperatureC[0]!, gridStep: 0 };
   const step = temperatureC[2]! - temperatureC[1]!;
   for (let i = 2; i < n - 1; i++) {
-    if (Math.abs(temperatureC[i]! - temperatureC[i - 1]! - step) > 1e-9) return { gridStart: temperatureC[0]!, gridStep: 0 };
+    if (Math.abs(temperatureC[i]! - temperatureC[i - 1]! - step) > 1e-9)
+      return { gridStart: temperatureC[0]!, gridStep: 0 };
   }
   return { gridStart: temperatureC[1]!, gridStep: step };
 }
@@ -84,7 +85,11 @@ function uniformGrid(temperatureC: Float64Array): { gridStart: number; gridStep:
 function compile(id: string, raw: unknown): CompiledRefrigerant {
   const parsed = RefrigerantTableSchema.safeParse(raw);
   if (!parsed.success) {
-    throw new PropertyRangeError("INVALID_TABLE", id, `The ${id} table is damaged: ${parsed.error.issues[0]?.message ?? "schema check failed"}`);
+    throw new PropertyRangeError(
+      "INVALID_TABLE",
+      id,
+      `The ${id} table is damaged: ${parsed.error.issues[0]?.message ?? "schema check failed"}`,
+    );
   }
   const { columns, units, interpolation: _interpolation, ...metadata } = parsed.data;
   const temperatureC = Float64Array.from(columns.temperature);

@@ -31,8 +31,12 @@ export function saturationPressure(id: string, temperatureC: number, point: Satu
   const i = findTemperatureRow(refrigerant, temperatureC);
   const t = refrigerant.temperatureC;
   return interpolateHermite(
-    t[i]!, curve.pressure[i]!, curve.slope[i]!,
-    t[i + 1]!, curve.pressure[i + 1]!, curve.slope[i + 1]!,
+    t[i]!,
+    curve.pressure[i]!,
+    curve.slope[i]!,
+    t[i + 1]!,
+    curve.pressure[i + 1]!,
+    curve.slope[i + 1]!,
     temperatureC,
   );
 }

@@ -26,7 +26,11 @@ export function saturationTemperature(id: string, pressureKPaAbs: number, point:
   const refrigerant = resolveRefrigerant(id);
   requireSaturationPoint(id, point);
   if (typeof pressureKPaAbs !== "number" || !Number.isFinite(pressureKPaAbs)) {
-    throw new PropertyRangeError("NOT_FINITE", id, `${id}: the pressure must be a number in kPa absolute (got ${String(pressureKPaAbs)})`);
+    throw new PropertyRangeError(
+      "NOT_FINITE",
+      id,
+      `${id}: the pressure must be a number in kPa absolute (got ${String(pressureKPaAbs)})`,
+    );
   }
   const curve = point === "bubble" ? refrigerant.bubble : refrigerant.dew;
   const last = refrigerant.rowCount - 1;
@@ -50,8 +54,12 @@ export function saturationTemperature(id: string, pressureKPaAbs: number, point:
   const i = findInterval(pressures, pressureKPaAbs);
   const t = refrigerant.temperatureC;
   const temperatureC = interpolateHermite(
-    pressures[i]!, t[i]!, curve.inverseSlope[i]!,
-    pressures[i + 1]!, t[i + 1]!, curve.inverseSlope[i + 1]!,
+    pressures[i]!,
+    t[i]!,
+    curve.inverseSlope[i]!,
+    pressures[i + 1]!,
+    t[i + 1]!,
+    curve.inverseSlope[i + 1]!,
     pressureKPaAbs,
   );
   // Rounding can put a query at the very end of the table a hair outside it.

@@ -18,7 +18,22 @@ describe("refrigerant tables against published values", () => {
   it("lists every refrigerant of the reference pack, R13I1 included", () => {
     const ids = listRefrigerants().map((r) => r.id);
     expect(ids).toHaveLength(20);
-    for (const id of ["R22", "R32", "R134a", "R410A", "R404A", "R407C", "R507A", "R290", "R600a", "R744", "R717", "R1234yf", "R1234ze(E)", "R13I1"]) {
+    for (const id of [
+      "R22",
+      "R32",
+      "R134a",
+      "R410A",
+      "R404A",
+      "R407C",
+      "R507A",
+      "R290",
+      "R600a",
+      "R744",
+      "R717",
+      "R1234yf",
+      "R1234ze(E)",
+      "R13I1",
+    ]) {
       expect(ids).toContain(id);
     }
   });
@@ -40,10 +55,13 @@ describe("refrigerant tables against published values", () => {
     ["R123", 27.82],
     ["R152a", -24.02],
   ];
-  it.each(normalBoilingPoints)("%s boils at %f °C at one atmosphere (NIST WebBook / ASHRAE, from memory)", (id, expected) => {
-    expect(Math.abs(saturationTemperature(id, 101.325) - expected)).toBeLessThan(0.05);
-    expect(Math.abs(getRefrigerant(id).normalBoilingPoint!.dewC - expected)).toBeLessThan(0.05);
-  });
+  it.each(normalBoilingPoints)(
+    "%s boils at %f °C at one atmosphere (NIST WebBook / ASHRAE, from memory)",
+    (id, expected) => {
+      expect(Math.abs(saturationTemperature(id, 101.325) - expected)).toBeLessThan(0.05);
+      expect(Math.abs(getRefrigerant(id).normalBoilingPoint!.dewC - expected)).toBeLessThan(0.05);
+    },
+  );
 
   // Critical temperatures (°C). Source: the EOS papers' critical constants as listed in
   // ../shared/reference/README.md §9.1 (T_c,EOS column, e.g. Tillner-Roth & Yokozeki 1997 for R32).
@@ -118,17 +136,20 @@ describe("refrigerant tables against published values", () => {
     ["R407C", 567.8898, 460.7241, 1236.179, 19.6913, 409.38],
     ["R507A", 624.3933, 623.9691, 1156.259, 32.2434, 362.058],
   ];
-  it.each(zeroCelsius)("%s at 0 °C matches README §9.2 (p %f / %f kPa)", (id, bubble, dew, liquid, vapour, vapourEnthalpy) => {
-    // tolerances: half a unit in the last digit README §9.2 prints
-    const state = saturatedState(id, 0);
-    expect(Math.abs(state.bubblePressureKPa - bubble)).toBeLessThan(6e-5);
-    expect(Math.abs(state.dewPressureKPa - dew)).toBeLessThan(6e-5);
-    expect(Math.abs(state.liquidDensityKgPerM3 - liquid)).toBeLessThan(6e-4);
-    expect(Math.abs(state.vapourDensityKgPerM3 - vapour)).toBeLessThan(6e-5);
-    expect(Math.abs(state.vapourEnthalpyKJPerKg - vapourEnthalpy)).toBeLessThan(0.001);
-    // IIR reference state: h' = 200 kJ/kg at 0 °C (README §6)
-    expect(Math.abs(state.liquidEnthalpyKJPerKg - 200)).toBeLessThan(1e-4);
-  });
+  it.each(zeroCelsius)(
+    "%s at 0 °C matches README §9.2 (p %f / %f kPa)",
+    (id, bubble, dew, liquid, vapour, vapourEnthalpy) => {
+      // tolerances: half a unit in the last digit README §9.2 prints
+      const state = saturatedState(id, 0);
+      expect(Math.abs(state.bubblePressureKPa - bubble)).toBeLessThan(6e-5);
+      expect(Math.abs(state.dewPressureKPa - dew)).toBeLessThan(6e-5);
+      expect(Math.abs(state.liquidDensityKgPerM3 - liquid)).toBeLessThan(6e-4);
+      expect(Math.abs(state.vapourDensityKgPerM3 - vapour)).toBeLessThan(6e-5);
+      expect(Math.abs(state.vapourEnthalpyKJPerKg - vapourEnthalpy)).toBeLessThan(0.001);
+      // IIR reference state: h' = 200 kJ/kg at 0 °C (README §6)
+      expect(Math.abs(state.liquidEnthalpyKJPerKg - 200)).toBeLessThan(1e-4);
+    },
+  );
 
   // Blend bubble/dew temperatures at one atmosphere. Source: README §9.2 (published pL/pV
   // equations of Lemmon 2003), ±0.002 K.
@@ -138,10 +159,13 @@ describe("refrigerant tables against published values", () => {
     ["R407C", 229.524, 236.52],
     ["R507A", 226.408, 226.41],
   ];
-  it.each(blendBoiling)("%s bubbles at %f K and is dew at %f K at 101.325 kPa (Lemmon 2003 via README §9.2)", (id, bubbleK, dewK) => {
-    expect(Math.abs(saturationTemperature(id, 101.325, "bubble") - (bubbleK - 273.15))).toBeLessThan(0.002);
-    expect(Math.abs(saturationTemperature(id, 101.325, "dew") - (dewK - 273.15))).toBeLessThan(0.002);
-  });
+  it.each(blendBoiling)(
+    "%s bubbles at %f K and is dew at %f K at 101.325 kPa (Lemmon 2003 via README §9.2)",
+    (id, bubbleK, dewK) => {
+      expect(Math.abs(saturationTemperature(id, 101.325, "bubble") - (bubbleK - 273.15))).toBeLessThan(0.002);
+      expect(Math.abs(saturationTemperature(id, 101.325, "dew") - (dewK - 273.15))).toBeLessThan(0.002);
+    },
+  );
 
   it("gives blend glides of the published size (TRADE.md §1.1)", () => {
     // R410A near-azeotropic, glide roughly 0.2 K [S6, weak]; R404A under 1 K and R407C

@@ -63,12 +63,17 @@ describe("property lookup errors", () => {
     expect(thrown(() => saturationTemperature("R410A", -100)).code).toBe("BELOW_RANGE");
   });
 
-  it.each([Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY])("rejects the non-finite input %f", (value) => {
-    expect(thrown(() => saturationPressure("R134a", value)).code).toBe("NOT_FINITE");
-    expect(thrown(() => saturationTemperature("R134a", value)).code).toBe("NOT_FINITE");
-    expect(thrown(() => saturatedState("R134a", value)).code).toBe("NOT_FINITE");
-    expect(thrown(() => saturationPressure("R134a", value)).message).toMatch(/^R134a: the temperature must be a number/);
-  });
+  it.each([Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY])(
+    "rejects the non-finite input %f",
+    (value) => {
+      expect(thrown(() => saturationPressure("R134a", value)).code).toBe("NOT_FINITE");
+      expect(thrown(() => saturationTemperature("R134a", value)).code).toBe("NOT_FINITE");
+      expect(thrown(() => saturatedState("R134a", value)).code).toBe("NOT_FINITE");
+      expect(thrown(() => saturationPressure("R134a", value)).message).toMatch(
+        /^R134a: the temperature must be a number/,
+      );
+    },
+  );
 
   it("rejects an unknown refrigerant and lists the known ones", () => {
     const error = thrown(() => saturationPressure("R999", 0));

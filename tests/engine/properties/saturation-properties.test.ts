@@ -25,17 +25,25 @@ const anyPoint = fc.constantFrom("bubble" as const, "dew" as const);
 const refrigerantAndTemperature = fc
   .constantFrom(...refrigerants)
   .chain((info) =>
-    fc.tuple(fc.constant(info), fc.double({ min: info.validRange.minimumC, max: info.validRange.maximumC, noNaN: true })),
+    fc.tuple(
+      fc.constant(info),
+      fc.double({ min: info.validRange.minimumC, max: info.validRange.maximumC, noNaN: true }),
+    ),
   );
 
 describe("saturation lookups (property-based)", () => {
   it("rise strictly with temperature", () => {
     fc.assert(
-      fc.property(refrigerantAndTemperature, fc.double({ min: 1e-4, max: 5, noNaN: true }), anyPoint, ([info, t], step, point) => {
-        const higher = Math.min(t + step, info.validRange.maximumC);
-        fc.pre(higher - t >= 1e-4);
-        expect(saturationPressure(info.id, higher, point)).toBeGreaterThan(saturationPressure(info.id, t, point));
-      }),
+      fc.property(
+        refrigerantAndTemperature,
+        fc.double({ min: 1e-4, max: 5, noNaN: true }),
+        anyPoint,
+        ([info, t], step, point) => {
+          const higher = Math.min(t + step, info.validRange.maximumC);
+          fc.pre(higher - t >= 1e-4);
+          expect(saturationPressure(info.id, higher, point)).toBeGreaterThan(saturationPressure(info.id, t, point));
+        },
+      ),
       { numRuns: 2000 },
     );
   });
@@ -67,7 +75,12 @@ describe("saturation lookups (property-based)", () => {
   it("give bubble pressure ≥ dew pressure for blends, and bubble temperature ≤ dew temperature", () => {
     const blendAndTemperature = fc
       .constantFrom(...blends)
-      .chain((info) => fc.tuple(fc.constant(info), fc.double({ min: info.validRange.minimumC, max: info.validRange.maximumC, noNaN: true })));
+      .chain((info) =>
+        fc.tuple(
+          fc.constant(info),
+          fc.double({ min: info.validRange.minimumC, max: info.validRange.maximumC, noNaN: true }),
+        ),
+      );
     fc.assert(
       fc.property(blendAndTemperature, fc.double({ min: 0, max: 1, noNaN: true }), ([info, t], fraction) => {
         expect(saturationPressure(info.id, t, "bubble")).toBeGreaterThanOrEqual(saturationPressure(info.id, t, "dew"));
@@ -75,7 +88,9 @@ describe("saturation lookups (property-based)", () => {
         const low = saturationPressure(info.id, info.validRange.minimumC, "bubble");
         const high = saturationPressure(info.id, info.validRange.maximumC, "dew");
         const p = Math.min(high, Math.max(low, low * Math.pow(high / low, fraction)));
-        expect(saturationTemperature(info.id, p, "bubble")).toBeLessThanOrEqual(saturationTemperature(info.id, p, "dew") + 1e-9);
+        expect(saturationTemperature(info.id, p, "bubble")).toBeLessThanOrEqual(
+          saturationTemperature(info.id, p, "dew") + 1e-9,
+        );
       }),
       { numRuns: 1000 },
     );
@@ -94,7 +109,10 @@ describe("saturation lookups (property-based)", () => {
   it("never return NaN: any number gives a finite answer or a PropertyRangeError", () => {
     fc.assert(
       fc.property(fc.constantFrom(...refrigerants), fc.double(), anyPoint, (info, value, point) => {
-        for (const lookup of [() => saturationPressure(info.id, value, point), () => saturationTemperature(info.id, value, point)]) {
+        for (const lookup of [
+          () => saturationPressure(info.id, value, point),
+          () => saturationTemperature(info.id, value, point),
+        ]) {
           try {
             expect(Number.isFinite(lookup())).toBe(true);
           } catch (error) {
