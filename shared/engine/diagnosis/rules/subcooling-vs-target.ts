@@ -44,22 +44,19 @@ export const subcoolingVsTargetRule: DiagnosisRule = {
   evaluate(snapshot) {
     const band = snapshot.subcoolingTarget;
     if (snapshot.subcoolingExcluded) {
-      const difference = snapshot.liquidSideDifferenceK;
       return {
-        findings: difference === null || band === null
-          ? []
-          : [
-              {
-                ruleId: this.id,
-                reading: "liquidLineTempC",
-                value: snapshot.input.liquidLineTempC,
-                unit: "°C",
-                direction: "excluded",
-                pointsTo: [],
-                message: `Subcooling is not used: ${snapshot.subcoolingExcluded.reason}`,
-                source: SOURCE,
-              },
-            ],
+        findings: [
+          {
+            ruleId: this.id,
+            reading: "liquidLineTempC",
+            value: snapshot.input.liquidLineTempC,
+            unit: "°C",
+            direction: "excluded",
+            pointsTo: [],
+            message: `Subcooling is not used: ${snapshot.subcoolingExcluded.reason}`,
+            source: SOURCE,
+          },
+        ],
         warnings: [],
       };
     }
