@@ -5,9 +5,9 @@ import { listRefrigerants, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
-import { CautionPanel } from "@/features/safety/components/caution-panel.tsx";
+import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { RefrigerantFacts } from "@/features/pt-tables/components/refrigerant-facts.tsx";
-import { SafetyBadge } from "@/features/pt-tables/components/safety-badge.tsx";
+import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
 import { SaturationConverter } from "@/features/pt-tables/components/saturation-converter.tsx";
 import { SaturationTable } from "@/features/pt-tables/components/saturation-table.tsx";
 import { TableControls, type TableRange } from "@/features/pt-tables/components/table-controls.tsx";

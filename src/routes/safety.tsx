@@ -1,5 +1,5 @@
 import type { CautionTopic } from "@shared/content/cautions.ts";
-import { CautionPanel, DeferToCodes } from "@/features/safety/components/caution-panel.tsx";
+import { CautionPanel, DeferToCodes } from "@/components/ui/caution-panel/caution-panel.tsx";
 
 const TOPICS: CautionTopic[] = ["electrical", "flammable", "toxic", "nitrogen", "pressure", "liquid-refrigerant", "recovery-cylinder"];
 

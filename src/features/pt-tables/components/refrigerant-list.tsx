@@ -5,7 +5,7 @@ import { listRefrigerants } from "@shared/engine/index.ts";
 import { describeSafetyClass, safetyClasses } from "@shared/content/safety-classes.ts";
 import { paths } from "@/config/paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
-import { SafetyBadge } from "./safety-badge.tsx";
+import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
 
 /** Matches "r32", "32", "R-32", "1234ze" against designations and names. */
 function normalise(text: string): string {
