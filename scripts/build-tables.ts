@@ -25,7 +25,10 @@ import {
   repoRoot,
   saturationStateAt,
   saturationTemperatureAt,
+  SuperancillaryMismatchError,
   type FluidModel,
+  type SaturationOptions,
+  type SaturationState,
 } from "./eos/index.ts";
 import { REFRIGERANT_METADATA } from "./eos/refrigerant-metadata.ts";
 import { RefrigerantTableSchema, type RefrigerantTable } from "../shared/engine/properties/refrigerant-table-schema.ts";
@@ -60,6 +63,29 @@ function temperatureGrid(model: FluidModel): number[] {
   return grid;
 }
 
+/**
+ * Tries each starting guess in turn and says which one converged.
+ * SuperancillaryMismatchError is never swallowed: it fails the build.
+ */
+function solveWithFallback(
+  model: FluidModel,
+  T: number,
+  attempts: SaturationOptions[],
+  checkTolerance: number | undefined,
+): { state: SaturationState; usedSuperancillary: boolean } {
+  let lastError: unknown;
+  for (const attempt of attempts) {
+    try {
+      const state = saturationStateAt(model, T, { ...attempt, checkTolerance });
+      return { state, usedSuperancillary: attempt.guess === "superancillary" && !attempt.startingDensities };
+    } catch (error) {
+      if (error instanceof SuperancillaryMismatchError) throw error;
+      lastError = error;
+    }
+  }
+  throw lastError;
+}
+
 function toKelvin(model: FluidModel, temperatureC: number): number {
   // rounding of the °C value must not put the first row below the EOS limit
   return Math.max(temperatureC + KELVIN, model.minimumTemperature);
@@ -86,8 +112,35 @@ function buildTable(designation: string, generated: string, dataNote: string): R
     liquidEnthalpy: [],
     vapourEnthalpy: [],
   };
+  // Pure fluids: the solve must not start from the superancillary it is checked against.
+  // The first row starts from the density ancillaries; each next row continues from the
+  // previous solutions (linear extrapolation in T). Only if that fails (close to T_c) does
+  // a row start from the ancillaries again, then from the superancillary (counted below).
+  let previous: SaturationState[] = [];
+  let superancillaryStarts = 0;
   for (const temperatureC of grid) {
-    const state = saturationStateAt(model, toKelvin(model, temperatureC), { checkTolerance: check });
+    const T = toKelvin(model, temperatureC);
+    let state: SaturationState;
+    if (model.kind === "pure") {
+      const attempts: SaturationOptions[] = [];
+      if (previous.length === 2) {
+        const [a, b] = previous as [SaturationState, SaturationState];
+        const fraction = (T - b.T) / (b.T - a.T);
+        attempts.push({
+          startingDensities: {
+            liquid: b.liquidDensity + fraction * (b.liquidDensity - a.liquidDensity),
+            vapour: b.vapourDensity * Math.pow(b.vapourDensity / a.vapourDensity, fraction),
+          },
+        });
+      }
+      attempts.push({ guess: "ancillary" }, { guess: "superancillary" });
+      const solved = solveWithFallback(model, T, attempts, check);
+      state = solved.state;
+      if (solved.usedSuperancillary) superancillaryStarts++;
+      previous = [...previous.slice(-1), state];
+    } else {
+      state = saturationStateAt(model, T);
+    }
     columns.temperature.push(temperatureC);
     columns.bubblePressure.push(significant(state.bubblePressure / 1000, 9));
     columns.dewPressure.push(significant(state.dewPressure / 1000, 9));
@@ -97,6 +150,12 @@ function buildTable(designation: string, generated: string, dataNote: string): R
     columns.vapourDensity.push(significant(state.vapourDensity * M, 8));
     columns.liquidEnthalpy.push(decimals(state.liquidEnthalpy / M / 1000, 4));
     columns.vapourEnthalpy.push(decimals(state.vapourEnthalpy / M / 1000, 4));
+  }
+
+  if (superancillaryStarts > 0) {
+    console.log(
+      `  ${designation}: ${superancillaryStarts} near-critical row(s) needed the superancillary as starting guess`,
+    );
   }
 
   let criticalPoint: RefrigerantTable["criticalPoint"];

@@ -35,6 +35,8 @@ export interface SaturationState {
 export interface SaturationOptions {
   /** Starting guess for pure fluids: the superancillary (fast, default) or the ancillaries (a "cold" solve). */
   guess?: "superancillary" | "ancillary";
+  /** Explicit starting densities (mol/m³) for pure fluids, e.g. continued from a neighbouring temperature; overrides `guess`. */
+  startingDensities?: { liquid: number; vapour: number };
   /** If set, throw when p, ρ' or ρ'' differ from the superancillary by more than this relative amount. */
   checkTolerance?: number;
 }
@@ -53,8 +55,10 @@ export function saturationStateAt(model: FluidModel, T: number, options: Saturat
   if (model.kind === "pure") {
     const sa = model.superancillary!;
     const useSa = (options.guess ?? "superancillary") === "superancillary";
-    const liquidGuess = useSa ? sa.liquidDensity(T) : model.liquidDensityCurve.value(T);
-    const vapourGuess = useSa ? sa.vapourDensity(T) : model.vapourDensityCurve.value(T);
+    const liquidGuess =
+      options.startingDensities?.liquid ?? (useSa ? sa.liquidDensity(T) : model.liquidDensityCurve.value(T));
+    const vapourGuess =
+      options.startingDensities?.vapour ?? (useSa ? sa.vapourDensity(T) : model.vapourDensityCurve.value(T));
     const solved = solvePhaseEquilibrium(eos, T, liquidGuess, vapourGuess);
     if (options.checkTolerance !== undefined) {
       const checks: Array<[string, number, number]> = [
