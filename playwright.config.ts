@@ -31,7 +31,8 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: `NODE_ENV=production DATA_DIR=memory:// PORT=${PORT} LOG_LEVEL=warn npx tsx server/index.ts`,
+    // OUTBOX_ENABLED: the invitation test reads the caught mail on the Outbox page.
+    command: `NODE_ENV=production DATA_DIR=memory:// PORT=${PORT} LOG_LEVEL=warn OUTBOX_ENABLED=true npx tsx server/index.ts`,
     url: `http://127.0.0.1:${PORT}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,

@@ -2,8 +2,10 @@ import type { QueryClient } from "@tanstack/react-query";
 import type { ComponentType } from "react";
 import { createBrowserRouter, type LoaderFunction } from "react-router-dom";
 import { AppShell } from "@/components/layouts/app-shell.tsx";
+import { AuthLayout } from "@/components/layouts/auth-layout.tsx";
 import { RouteError } from "@/components/errors/route-error.tsx";
 import { paths } from "@/config/paths.ts";
+import { requireSessionLoader } from "@/features/auth/utils/session-loaders.ts";
 
 interface RouteModule {
   default: ComponentType;
@@ -22,16 +24,35 @@ function lazyRoute(queryClient: QueryClient, load: () => Promise<RouteModule>) {
 export function createRouter(queryClient: QueryClient) {
   return createBrowserRouter([
     {
+      // Public account screens: no session needed, no app navigation.
+      element: <AuthLayout />,
+      errorElement: <RouteError />,
+      children: [
+        { path: paths.signIn.path, lazy: lazyRoute(queryClient, () => import("./routes/auth/sign-in.tsx")) },
+        { path: paths.signUp.path, lazy: lazyRoute(queryClient, () => import("./routes/auth/sign-up.tsx")) },
+        { path: paths.forgotPassword.path, lazy: lazyRoute(queryClient, () => import("./routes/auth/forgot-password.tsx")) },
+        { path: paths.resetPassword.path, lazy: lazyRoute(queryClient, () => import("./routes/auth/reset-password.tsx")) },
+        { path: paths.acceptInvitation.path, lazy: lazyRoute(queryClient, () => import("./routes/auth/accept-invitation.tsx")) },
+      ],
+    },
+    {
+      // Everything else needs a session: without one, sign in first and come back (requireSessionLoader).
+      id: "signed-in",
+      loader: requireSessionLoader(queryClient),
       element: <AppShell />,
       errorElement: <RouteError />,
       children: [
         {
           errorElement: <RouteError />,
+          // One line per screen.
           children: [
             { path: paths.home.path, lazy: lazyRoute(queryClient, () => import("./routes/home.tsx")) },
             { path: paths.tables.path, lazy: lazyRoute(queryClient, () => import("./routes/pt-tables.tsx")) },
             { path: paths.tables.detail.path, lazy: lazyRoute(queryClient, () => import("./routes/pt-table.tsx")) },
             { path: paths.safety.path, lazy: lazyRoute(queryClient, () => import("./routes/safety.tsx")) },
+            { path: paths.members.path, lazy: lazyRoute(queryClient, () => import("./routes/members.tsx")) },
+            { path: paths.profile.path, lazy: lazyRoute(queryClient, () => import("./routes/profile.tsx")) },
+            { path: paths.outbox.path, lazy: lazyRoute(queryClient, () => import("./routes/outbox.tsx")) },
             { path: "*", lazy: lazyRoute(queryClient, () => import("./routes/not-found.tsx")) },
           ],
         },

@@ -1,4 +1,5 @@
-import { HardHat, Home, Table2, type LucideIcon } from "lucide-react";
+import { HardHat, Home, Mail, SlidersHorizontal, Table2, Users, type LucideIcon } from "lucide-react";
+import type { Role } from "@shared/schemas/auth.ts";
 import { paths } from "./paths.ts";
 
 export interface NavItem {
@@ -7,6 +8,10 @@ export interface NavItem {
   icon: LucideIcon;
   /** Marks the item active for nested URLs too (e.g. /tables/R32 under /tables). */
   matchPrefix?: boolean;
+  /** Shown only to these roles (the server refuses the others anyway); everyone when absent. */
+  roles?: readonly Role[];
+  /** Shown only when the server offers the feature (the Outbox exists in development only). */
+  requires?: "outbox";
 }
 
 /** The app's sections, in the order a technician reaches for them. */
@@ -14,4 +19,12 @@ export const navigation: NavItem[] = [
   { label: "Today", href: paths.home.getHref(), icon: Home },
   { label: "P–T tables", href: paths.tables.getHref(), icon: Table2, matchPrefix: true },
   { label: "Safety", href: paths.safety.getHref(), icon: HardHat },
+  { label: "Members", href: paths.members.getHref(), icon: Users },
+  { label: "Profile", href: paths.profile.getHref(), icon: SlidersHorizontal },
+  { label: "Outbox", href: paths.outbox.getHref(), icon: Mail, roles: ["owner"], requires: "outbox" },
 ];
+
+/** The items one user sees. */
+export function navigationFor(role: Role, features: { outbox: boolean }): NavItem[] {
+  return navigation.filter((item) => (!item.roles || item.roles.includes(role)) && (item.requires !== "outbox" || features.outbox));
+}

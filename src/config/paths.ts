@@ -7,4 +7,20 @@ export const paths = {
     getHref: () => "/tables",
     detail: { path: "/tables/:refrigerantId", getHref: (id: string) => `/tables/${encodeURIComponent(id)}` },
   },
+
+  // Public account screens (outside the app shell).
+  signIn: {
+    path: "/sign-in",
+    /** `next` is where to go back to after signing in. */
+    getHref: (next?: string) => (next && next !== "/" ? `/sign-in?next=${encodeURIComponent(next)}` : "/sign-in"),
+  },
+  signUp: { path: "/sign-up", getHref: () => "/sign-up" },
+  forgotPassword: { path: "/forgot-password", getHref: () => "/forgot-password" },
+  // The server mails links to these two; keep them in step with server/routes/{auth,invitations}.ts.
+  resetPassword: { path: "/reset-password", getHref: (token: string) => `/reset-password?token=${encodeURIComponent(token)}` },
+  acceptInvitation: { path: "/accept-invitation", getHref: (token: string) => `/accept-invitation?token=${encodeURIComponent(token)}` },
+
+  members: { path: "/members", getHref: () => "/members" },
+  profile: { path: "/profile", getHref: () => "/profile" },
+  outbox: { path: "/outbox", getHref: () => "/outbox" },
 } as const;

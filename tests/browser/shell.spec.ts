@@ -1,8 +1,11 @@
 import { expect, test } from "@playwright/test";
+import { signIn } from "./sign-in.ts";
 
 test.describe("app shell", () => {
   test("loads, navigates, and keeps Sunlight mode across a reload", async ({ page }) => {
     await page.goto("/");
+    await signIn(page, "tech@bellbird.example");
+    await expect(page).toHaveURL(/\/$/);
     await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
     await expect(page.getByText("Server and database answering")).toBeVisible();
 
@@ -29,7 +32,11 @@ test.describe("app shell", () => {
   });
 
   test("shows a not-found page for an unknown address", async ({ page }) => {
+    // Without a session the app asks to sign in first, then comes back to the address asked for.
     await page.goto("/no/such/screen");
+    await expect(page).toHaveURL(/\/sign-in\?next=%2Fno%2Fsuch%2Fscreen$/);
+    await signIn(page, "senior@bellbird.example");
+    await expect(page).toHaveURL(/\/no\/such\/screen$/);
     await expect(page.getByRole("heading", { name: "Page not found" })).toBeVisible();
     await page.getByRole("link", { name: "Back to Today" }).click();
     await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();

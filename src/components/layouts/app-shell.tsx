@@ -1,6 +1,9 @@
 import { NavLink, Outlet, useNavigation } from "react-router-dom";
-import { navigation } from "@/config/navigation.ts";
+import { navigationFor } from "@/config/navigation.ts";
+import { UserMenu } from "@/features/auth/components/user-menu.tsx";
 import { SunlightToggle } from "@/features/theme/components/sunlight-toggle.tsx";
+import { useMe } from "@/lib/api/auth.ts";
+import { useOutboxAvailable } from "@/lib/api/outbox.ts";
 import { useHealth } from "@/lib/api/health.ts";
 import { cn } from "@/lib/cn.ts";
 
@@ -21,6 +24,10 @@ function ServerStatus() {
  */
 export function AppShell() {
   const navigationState = useNavigation();
+  const me = useMe();
+  const role = me.data?.role ?? "apprentice";
+  const outbox = useOutboxAvailable(role === "owner");
+  const navigation = navigationFor(role, { outbox: outbox.data === true });
   return (
     <div className="flex min-h-dvh flex-col md:flex-row">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-surface focus:p-3">
@@ -49,7 +56,8 @@ export function AppShell() {
             </NavLink>
           ))}
         </nav>
-        <div className="mt-auto p-3">
+        <div className="mt-auto space-y-3 p-3">
+          <UserMenu />
           <SunlightToggle className="w-full justify-center" />
         </div>
       </aside>
@@ -60,7 +68,10 @@ export function AppShell() {
             <img src="/satura-mark.svg" alt="" className="size-7" />
             <span className="text-lg font-semibold">Satura</span>
           </div>
-          <SunlightToggle />
+          <div className="flex items-center gap-2">
+            <SunlightToggle />
+            <UserMenu compact />
+          </div>
         </header>
         <div aria-live="polite" className="h-1">
           {navigationState.state === "loading" && <div className="h-1 w-full animate-pulse bg-accent" role="progressbar" aria-label="Loading page" />}

@@ -1,0 +1,37 @@
+import { LogOut } from "lucide-react";
+import { useNavigate } from "react-router-dom";
+import { ROLE_LABELS } from "@shared/schemas/auth.ts";
+import { paths } from "@/config/paths.ts";
+import { useMe, useSignOut } from "@/lib/api/auth.ts";
+import { cn } from "@/lib/cn.ts";
+
+/** Who is signed in (name and role, in words) and the sign-out button. */
+export function UserMenu({ compact = false, className }: { compact?: boolean; className?: string }) {
+  const me = useMe();
+  const signOut = useSignOut();
+  const navigate = useNavigate();
+  const user = me.data;
+  if (!user) return null;
+
+  const onSignOut = () => {
+    signOut.mutate(undefined, { onSettled: () => navigate(paths.signIn.getHref(), { replace: true }) });
+  };
+
+  return (
+    <div className={cn("flex items-center gap-2", className)}>
+      <div className={cn("min-w-0 flex-1 leading-tight", compact && "sr-only")} data-testid="signed-in-user">
+        <div className="truncate font-medium">{user.name}</div>
+        <div className="truncate text-sm text-muted">{ROLE_LABELS[user.role]}</div>
+      </div>
+      <button
+        type="button"
+        onClick={onSignOut}
+        disabled={signOut.isPending}
+        className="inline-flex min-h-touch min-w-touch items-center justify-center gap-2 rounded-card border-2 border-rule bg-surface px-3 font-medium hover:border-ink"
+      >
+        <LogOut aria-hidden className="size-5" />
+        <span className={cn(compact && "sr-only")}>Sign out</span>
+      </button>
+    </div>
+  );
+}

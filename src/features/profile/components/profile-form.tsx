@@ -1,0 +1,85 @@
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import {
+  ATMOSPHERIC_PRESSURE_MAX_KPA,
+  ATMOSPHERIC_PRESSURE_MIN_KPA,
+  PRESSURE_UNITS,
+  STANDARD_ATMOSPHERE_KPA,
+  TEMPERATURE_UNITS,
+  UpdateProfileSchema,
+  type Profile,
+} from "@shared/schemas/profile.ts";
+import { Button } from "@/components/ui/button/button.tsx";
+import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
+import { useUpdateProfile } from "@/lib/api/profile.ts";
+import { applyServerErrors } from "@/lib/form-errors.ts";
+
+const TEMPERATURE_LABELS: Record<(typeof TEMPERATURE_UNITS)[number], string> = { C: "°C (Celsius)", F: "°F (Fahrenheit)" };
+const PRESSURE_LABELS: Record<(typeof PRESSURE_UNITS)[number], string> = { kPa: "kPa", psi: "psi", bar: "bar" };
+
+export function ProfileForm({ profile }: { profile: Profile }) {
+  const update = useUpdateProfile();
+  const [formError, setFormError] = useState<string | null>(null);
+  const [saved, setSaved] = useState(false);
+  const form = useForm({
+    resolver: zodResolver(UpdateProfileSchema),
+    defaultValues: { name: profile.user.name, preferences: profile.preferences },
+  });
+  const { errors } = form.formState;
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    setFormError(null);
+    setSaved(false);
+    try {
+      const next = await update.mutateAsync(values);
+      form.reset({ name: next.user.name, preferences: next.preferences });
+      setSaved(true);
+    } catch (error) {
+      setFormError(
+        applyServerErrors(error, form.setError, ["name", "preferences.temperatureUnit", "preferences.pressureUnit", "preferences.atmosphericPressureKPa"]),
+      );
+    }
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="max-w-xl space-y-4">
+      {saved && <FormAlert tone="good">Settings saved.</FormAlert>}
+      {formError && <FormAlert>{formError}</FormAlert>}
+      <TextField label="Your name" autoComplete="name" hint="Shown on the visits you record and sign." error={errors.name?.message} {...form.register("name")} />
+      <fieldset className="space-y-4 rounded-card border-2 border-rule p-4">
+        <legend className="px-1 font-semibold">Display units</legend>
+        <p className="text-sm text-muted">Satura stores every reading in °C and kPa; this only changes what screens show.</p>
+        <SelectField label="Temperature" error={errors.preferences?.temperatureUnit?.message} {...form.register("preferences.temperatureUnit")}>
+          {TEMPERATURE_UNITS.map((unit) => (
+            <option key={unit} value={unit}>
+              {TEMPERATURE_LABELS[unit]}
+            </option>
+          ))}
+        </SelectField>
+        <SelectField label="Pressure" error={errors.preferences?.pressureUnit?.message} {...form.register("preferences.pressureUnit")}>
+          {PRESSURE_UNITS.map((unit) => (
+            <option key={unit} value={unit}>
+              {PRESSURE_LABELS[unit]}
+            </option>
+          ))}
+        </SelectField>
+      </fieldset>
+      <TextField
+        label="Default atmospheric pressure (kPa absolute)"
+        type="number"
+        inputMode="decimal"
+        step="0.001"
+        min={ATMOSPHERIC_PRESSURE_MIN_KPA}
+        max={ATMOSPHERIC_PRESSURE_MAX_KPA}
+        className="num"
+        hint={`Used to turn gauge readings into absolute pressure when a site has no altitude. Sea level: ${STANDARD_ATMOSPHERE_KPA} kPa.`}
+        error={errors.preferences?.atmosphericPressureKPa?.message}
+        {...form.register("preferences.atmosphericPressureKPa", { valueAsNumber: true })}
+      />
+      <Button type="submit" disabled={form.formState.isSubmitting}>
+        {form.formState.isSubmitting ? "Saving…" : "Save settings"}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,32 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { ProfileSchema, type Profile, type UpdateProfile } from "@shared/schemas/profile.ts";
+import { apiRequest } from "./api-client.ts";
+
+export function getProfile(signal?: AbortSignal): Promise<Profile> {
+  return apiRequest("/profile", { schema: ProfileSchema, signal });
+}
+
+export function updateProfile(input: UpdateProfile): Promise<Profile> {
+  return apiRequest("/profile", { method: "PUT", body: input, schema: ProfileSchema });
+}
+
+export const profileQueryOptions = () =>
+  queryOptions({
+    queryKey: ["profile"],
+    queryFn: ({ signal }) => getProfile(signal),
+  });
+
+export const useProfile = () => useQuery(profileQueryOptions());
+
+export function useUpdateProfile() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateProfile,
+    meta: { silentErrors: true },
+    onSuccess: (profile) => {
+      queryClient.setQueryData(profileQueryOptions().queryKey, profile);
+      // The name shows in the app shell too.
+      return queryClient.invalidateQueries({ queryKey: ["auth"] });
+    },
+  });
+}
