@@ -11,6 +11,14 @@ import { PropertyRangeError } from "./property-range-error.ts";
 import type { CompiledRefrigerant } from "./resolve-refrigerant.ts";
 
 export function requireTableTemperature(refrigerant: CompiledRefrigerant, temperatureC: number): void {
+  // Fast path first: this runs on every lookup, so no message is built unless it throws.
+  if (
+    typeof temperatureC === "number" &&
+    temperatureC >= refrigerant.minimumC &&
+    temperatureC <= refrigerant.maximumC
+  ) {
+    return;
+  }
   const { id } = refrigerant.info;
   if (typeof temperatureC !== "number" || !Number.isFinite(temperatureC)) {
     throw new PropertyRangeError(
@@ -27,12 +35,10 @@ export function requireTableTemperature(refrigerant: CompiledRefrigerant, temper
       `${id} below ${refrigerant.minimumC} °C is outside the table (${covers})`,
     );
   }
-  if (temperatureC > refrigerant.maximumC) {
-    const critical = refrigerant.info.criticalPoint.temperatureC;
-    throw new PropertyRangeError(
-      "ABOVE_RANGE",
-      id,
-      `${id} above ${refrigerant.maximumC} °C is outside the table (${covers}; critical point ${critical} °C, no liquid above it)`,
-    );
-  }
+  const critical = refrigerant.info.criticalPoint.temperatureC;
+  throw new PropertyRangeError(
+    "ABOVE_RANGE",
+    id,
+    `${id} above ${refrigerant.maximumC} °C is outside the table (${covers}; critical point ${critical} °C, no liquid above it)`,
+  );
 }
