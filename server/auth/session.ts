@@ -92,8 +92,13 @@ export function getAuth(res: Response): AuthContext {
   return context;
 }
 
-/** Creates a session for the user and sets its cookie on the response. */
+/**
+ * Creates a session for the user and sets its cookie on the response. A session the browser
+ * already had is ended first, so signing in always yields a fresh id (no session fixation).
+ */
 export async function startSession(auth: Auth, res: Response, userId: string): Promise<void> {
+  const previous = res.locals.auth;
+  if (previous) await auth.invalidateSession(previous.session.id);
   const session = await auth.createSession(userId, {});
   res.append("Set-Cookie", auth.createSessionCookie(session.id).serialize());
 }

@@ -1,5 +1,6 @@
-import { NavLink, Outlet, useNavigation } from "react-router-dom";
+import { Navigate, NavLink, Outlet, useLocation, useNavigation } from "react-router-dom";
 import { navigationFor } from "@/config/navigation.ts";
+import { paths } from "@/config/paths.ts";
 import { UserMenu } from "@/features/auth/components/user-menu.tsx";
 import { SunlightToggle } from "@/features/theme/components/sunlight-toggle.tsx";
 import { useMe } from "@/lib/api/auth.ts";
@@ -24,10 +25,13 @@ function ServerStatus() {
  */
 export function AppShell() {
   const navigationState = useNavigation();
+  const location = useLocation();
   const me = useMe();
   const role = me.data?.role ?? "apprentice";
   const outbox = useOutboxAvailable(role === "owner");
   const navigation = navigationFor(role, { outbox: outbox.data === true });
+  // The session ended while the app was open (expired, signed out elsewhere, member removed).
+  if (me.isSuccess && me.data === null) return <Navigate to={paths.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
   return (
     <div className="flex min-h-dvh flex-col md:flex-row">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-surface focus:p-3">

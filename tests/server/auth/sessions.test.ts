@@ -72,3 +72,21 @@ describe("sessions", () => {
     expect(me.body.user.role).toBe("apprentice");
   });
 });
+
+describe("session fixation", () => {
+  it("replaces the browser's existing session on a new sign-in", async () => {
+    const testApp = await createTestApp();
+    try {
+      await seedBellbird(testApp);
+      const agent = await signedIn(testApp.app, BELLBIRD.owner);
+      const first = await testApp.database.db.select().from(sessions);
+      const again = await agent.post("/api/auth/sign-in").send({ email: BELLBIRD.owner, password: "bellbird-demo-2026" });
+      expect(again.status).toBe(200);
+      const after = await testApp.database.db.select().from(sessions);
+      expect(after).toHaveLength(1);
+      expect(after[0].id).not.toBe(first[0].id);
+    } finally {
+      await testApp.close();
+    }
+  });
+});

@@ -18,16 +18,19 @@ export function UserMenu({ compact = false, className }: { compact?: boolean; cl
   };
 
   return (
-    <div className={cn("flex items-center gap-2", className)}>
-      <div className={cn("min-w-0 flex-1 leading-tight", compact && "sr-only")} data-testid="signed-in-user">
-        <div className="truncate font-medium">{user.name}</div>
+    <div className={cn(compact ? "flex items-center" : "space-y-2", className)}>
+      <div className={cn("min-w-0 leading-tight", compact && "sr-only")} data-testid="signed-in-user">
+        <div className="break-words font-medium">{user.name}</div>
         <div className="truncate text-sm text-muted">{ROLE_LABELS[user.role]}</div>
       </div>
       <button
         type="button"
         onClick={onSignOut}
         disabled={signOut.isPending}
-        className="inline-flex min-h-touch min-w-touch items-center justify-center gap-2 rounded-card border-2 border-rule bg-surface px-3 font-medium hover:border-ink"
+        className={cn(
+          "inline-flex min-h-touch min-w-touch items-center justify-center gap-2 rounded-card border-2 border-rule bg-surface px-3 font-medium hover:border-ink",
+          !compact && "w-full",
+        )}
       >
         <LogOut aria-hidden className="size-5" />
         <span className={cn(compact && "sr-only")}>Sign out</span>

@@ -71,11 +71,12 @@ export function MembersTable({ members, viewer }: { members: Member[]; viewer: A
   );
   const table = useTable({ features, columns, data: members, getRowId: (row) => row.id });
 
+  // On a phone each member is a stacked card (label above value); from sm up it is a plain table.
   return (
-    <div className="overflow-x-auto rounded-card border-2 border-rule bg-surface">
+    <div className="rounded-card border-2 border-rule bg-surface">
       <table className="w-full text-left">
         <caption className="sr-only">Members and their roles</caption>
-        <thead className="border-b-2 border-rule">
+        <thead className="sr-only border-b-2 border-rule sm:not-sr-only sm:table-header-group">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
               {group.headers.map((header) => (
@@ -88,9 +89,12 @@ export function MembersTable({ members, viewer }: { members: Member[]; viewer: A
         </thead>
         <tbody>
           {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="border-b border-rule last:border-b-0">
+            <tr key={row.id} className="block border-b border-rule py-2 last:border-b-0 sm:table-row sm:py-0">
               {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-2 align-middle">
+                <td key={cell.id} className="block px-3 py-1 align-middle sm:table-cell sm:py-2">
+                  <span aria-hidden className="block text-sm text-muted sm:hidden">
+                    {String(cell.column.columnDef.header ?? "")}
+                  </span>
                   <table.FlexRender cell={cell} />
                 </td>
               ))}
