@@ -84,7 +84,7 @@ export function createApp(deps: AppDeps): Express {
   api.use("/customers", customersRouter(deps));
   api.use("/sites", sitesRouter(deps));
   api.use("/equipment", equipmentRouter(deps));
-  api.use("/visits", visitsRouter(deps));
+  api.use("/visits", visitsRouter(accountDeps));
   api.use("/photos", photosRouter(deps));
   api.use(apiNotFound);
   app.use("/api", api);

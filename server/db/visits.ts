@@ -186,7 +186,7 @@ export function photoUrls(id: string): Pick<Photo, "url" | "thumbnailUrl"> {
 /** The whole visit: summary, review state, and its run log in time order. */
 export async function getVisitDetail(db: Database, organisationId: string, visitId: string) {
   const [summary] = await db
-    .select({ ...summaryColumns, reviewNote: visits.reviewNote, signedOffBy: visits.signedOffBy, signedOffAt: visits.signedOffAt })
+    .select({ ...summaryColumns, customerContactEmail: customers.contactEmail, reviewNote: visits.reviewNote, signedOffBy: visits.signedOffBy, signedOffAt: visits.signedOffAt })
     .from(visits)
     .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
     .innerJoin(sites, eq(sites.id, equipment.siteId))

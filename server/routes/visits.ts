@@ -10,6 +10,7 @@ import {
   PHOTO_KINDS,
   ReadingBodySchema,
   ReviewActionSchema,
+  SendReportSchema,
   VisitCreateSchema,
   VisitStatusSchema,
   type VisitStatus,
@@ -32,6 +33,7 @@ import {
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
+import { visitReportMail } from "../report/visit-report-mail.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
 
 type Deps = Pick<AccountRouteDeps, "db" | "env">;
@@ -53,7 +55,7 @@ const TRANSITIONS: Record<"submit" | "sign-off" | "send-back", { from: VisitStat
   "send-back": { from: ["open", "awaiting-review"], to: "sent-back" },
 };
 
-export function visitsRouter({ db, env }: Deps): Router {
+export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, "mailer">): Router {
   const router = Router();
   const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PHOTO_BYTES, files: 1, fields: 10 } });
 
@@ -184,6 +186,16 @@ export function visitsRouter({ db, env }: Deps): Router {
     const stored = await storePhoto(env.UPLOADS_DIR, req.file.buffer);
     const photo = await insertPhoto(db, organisationId, { visitId: visit.id, kind: meta.kind, caption: meta.caption || null, ...stored, uploadedBy: user.id });
     res.status(201).json({ photo });
+  });
+
+  router.post("/:id/report/send", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const { to } = SendReportSchema.parse(req.body);
+    const visit = await getVisitDetail(db, organisationId, parseId(req.params.id, "Visit"));
+    if (!visit) throw notFound("Visit");
+    // The link is built from APP_URL, never from the request's Host header.
+    await mailer.send(visitReportMail(visit, `${env.APP_URL}/visits/${visit.id}/report`, to, organisationId));
+    res.json({ sentTo: to });
   });
 
   return router;

@@ -169,6 +169,7 @@ export const VisitSummarySchema = z.object({
 export type VisitSummary = z.infer<typeof VisitSummarySchema>;
 
 export const VisitSchema = VisitSummarySchema.extend({
+  customerContactEmail: z.string().nullable(),
   reviewNote: z.string().nullable(),
   signedOffBy: PersonRefSchema.nullable(),
   signedOffAt: z.string().nullable(),
@@ -178,3 +179,7 @@ export const VisitSchema = VisitSummarySchema.extend({
   photos: z.array(PhotoSchema),
 });
 export type Visit = z.infer<typeof VisitSchema>;
+
+export const SendReportSchema = z.object({
+  to: z.email("Enter an e-mail address, like facilities@example.com"),
+});

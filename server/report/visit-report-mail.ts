@@ -1,0 +1,40 @@
+import { chargeStateText } from "@shared/content/charge-states.ts";
+import { VISIT_STATUS_LABELS, type Visit } from "@shared/schemas/visits.ts";
+import type { MailMessage } from "../mail/mailer.ts";
+
+const fixed = (value: number | null | undefined, decimals = 1) => (value == null ? "—" : value.toFixed(decimals));
+
+const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (character) => `&#${character.charCodeAt(0)};`);
+
+/**
+ * The visit report as an e-mail: the summary a customer contact needs (what was found on each
+ * circuit, what was changed, the sign-off) and a link to the full printable report.
+ * Metric units, as stored.
+ */
+export function visitReportMail(visit: Visit, reportUrl: string, to: string, organisationId: string): MailMessage {
+  const circuits = [...new Set(visit.readings.map((reading) => reading.circuit))].sort();
+  const lines: string[] = [
+    `Service visit report — ${visit.equipmentName}`,
+    `${visit.customerName}, ${visit.siteName}`,
+    `Refrigerant ${visit.refrigerant}. Started ${new Date(visit.startedAt).toISOString().slice(0, 16).replace("T", " ")} UTC.`,
+    `Reason for the visit: ${visit.reason}`,
+    `Status: ${VISIT_STATUS_LABELS[visit.status]}${visit.signedOffBy ? ` (signed off by ${visit.signedOffBy.name})` : ""}`,
+    "",
+  ];
+  for (const circuit of circuits) {
+    const last = visit.readings.filter((reading) => reading.circuit === circuit).at(-1)!;
+    lines.push(
+      `Circuit ${circuit}, last reading: ${chargeStateText[last.result.chargeState].title}.`,
+      `  Evaporating ${fixed(last.result.evaporatingTempC)} °C, superheat ${fixed(last.result.superheatK)} K; condensing ${fixed(last.result.condensingTempC)} °C, subcooling ${fixed(last.result.subcoolingK)} K.`,
+    );
+  }
+  if (circuits.length === 0) lines.push("No readings were recorded.");
+  if (visit.adjustments.length > 0) {
+    lines.push("", "Work done:");
+    for (const adjustment of visit.adjustments) lines.push(`  - ${adjustment.description}${adjustment.amountKg != null ? ` (${adjustment.amountKg} kg)` : ""}`);
+  }
+  lines.push("", `Full report: ${reportUrl}`);
+  const text = lines.join("\n");
+  const html = `<pre style="font-family: 'IBM Plex Mono', monospace; white-space: pre-wrap">${escapeHtml(text)}</pre>`;
+  return { to, subject: `Service report: ${visit.equipmentName} at ${visit.siteName}`, text, html, organisationId };
+}

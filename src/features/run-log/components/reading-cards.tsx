@@ -1,0 +1,165 @@
+import { diagnosisLimits } from "@shared/engine/index.ts";
+import type { DiagnosisResult, LiquidTempLocation, TargetBand } from "@shared/schemas/diagnosis.ts";
+import { Segmented } from "@/components/ui/field/segmented.tsx";
+import {
+  DIFFERENCE_LABEL,
+  GAUGE_LABEL,
+  TEMPERATURE_LABEL,
+  differenceToDisplay,
+  formatNumber,
+  temperatureToDisplay,
+  type DisplayUnits,
+} from "@/lib/units/display-units.ts";
+import type { DraftField, ReadingDraft } from "../utils/reading-draft.ts";
+import { Derived, DraftInput, ReadingCard } from "./reading-card.tsx";
+
+interface ReadingCardsProps {
+  draft: ReadingDraft;
+  onField: (field: DraftField, value: string) => void;
+  onLocation: (location: LiquidTempLocation) => void;
+  fieldErrors: Record<string, string>;
+  result: DiagnosisResult | null;
+  units: DisplayUnits;
+  isBlend: boolean;
+  /** The parsed discharge line temperature, °C, for its margin to the limit. */
+  dischargeLineTempC: number | undefined;
+}
+
+/**
+ * The entry cards in the order the refrigerant flows: suction (evaporator outlet), discharge,
+ * liquid (condenser outlet), then air and electrical. Each card shows what was measured, its
+ * saturation counterpart and the derived value on one line.
+ */
+export function ReadingCards({ draft, onField, onLocation, fieldErrors, result, units, isBlend, dischargeLineTempC }: ReadingCardsProps) {
+  const t = TEMPERATURE_LABEL[units.temperature];
+  const k = DIFFERENCE_LABEL[units.temperature];
+  const p = GAUGE_LABEL[units.pressure];
+  const temp = (value: number | null | undefined) => (value == null ? null : formatNumber(temperatureToDisplay(value, units.temperature), 1));
+  const diff = (value: number | null | undefined) => (value == null ? null : formatNumber(differenceToDisplay(value, units.temperature), 1));
+  const band = (target: TargetBand | null | undefined) =>
+    target ? `target ${diff(target.targetK)} ${k} (${diff(target.lowK)}–${diff(target.highK)}, ${target.basis.replace("-", " ")})` : undefined;
+  const input = (field: DraftField, label: string, unit: string, hint?: string) => (
+    <DraftInput name={field} label={label} unit={unit} value={draft[field]} onChange={(value) => onField(field, value)} error={fieldErrors[field]} hint={hint} />
+  );
+  const dischargeLimit = diagnosisLimits.DISCHARGE_LINE_LIMIT_C;
+  const dischargeMargin = dischargeLineTempC === undefined ? null : dischargeLimit - dischargeLineTempC;
+
+  return (
+    <div className="space-y-3">
+      <ReadingCard
+        step={1}
+        title="Suction"
+        where="evaporator outlet / suction service port"
+        side="low side"
+        derived={
+          <div className="flex flex-wrap gap-x-8 gap-y-2">
+            <Derived label={isBlend ? "Dew point" : "Saturation"} value={temp(result?.evaporatingTempC)} unit={t} testId="evaporating-temp" />
+            <Derived label="Superheat" value={diff(result?.superheatK)} unit={k} target={band(result?.targets.superheat)} testId="superheat" />
+          </div>
+        }
+      >
+        {input("suctionPressureKPa", "Suction pressure", p)}
+        {input("suctionLineTempC", "Suction line temperature", t)}
+      </ReadingCard>
+
+      <ReadingCard
+        step={2}
+        title="Discharge"
+        where="compressor outlet, within 15 cm"
+        side="high side"
+        derived={
+          <div className="flex flex-wrap gap-x-8 gap-y-2">
+            <Derived
+              label="Line temperature margin"
+              value={diff(dischargeMargin)}
+              unit={k}
+              target={`below the ${temp(dischargeLimit)} ${t} line limit`}
+              testId="discharge-margin"
+            />
+            <Derived label="Compression ratio" value={result?.compressionRatio == null ? null : formatNumber(result.compressionRatio, 1)} unit=": 1" />
+          </div>
+        }
+      >
+        {input("dischargePressureKPa", "Discharge pressure (optional)", p)}
+        {input("dischargeLineTempC", "Discharge line temperature", t, "Keep this in view: oil breaks down on an overheated discharge")}
+      </ReadingCard>
+
+      <ReadingCard
+        step={3}
+        title="Liquid"
+        where="condenser outlet / liquid service port"
+        side="high side"
+        derived={
+          <div className="flex flex-wrap gap-x-8 gap-y-2">
+            <Derived label={isBlend ? "Bubble point" : "Saturation"} value={temp(result?.condensingTempC)} unit={t} testId="condensing-temp" />
+            <Derived
+              label="Subcooling"
+              value={draft.liquidTempLocation === "discharge-line" ? null : diff(result?.subcoolingK)}
+              unit={k}
+              target={draft.liquidTempLocation === "discharge-line" ? "not valid on a discharge line" : band(result?.targets.subcooling)}
+              testId="subcooling"
+            />
+          </div>
+        }
+      >
+        {input("liquidPressureKPa", "Liquid pressure", p)}
+        {input("liquidLineTempC", "Line temperature for subcooling", t)}
+        <div className="sm:col-span-2">
+          <Segmented<LiquidTempLocation>
+            label="Where the temperature was taken"
+            value={draft.liquidTempLocation}
+            onChange={onLocation}
+            options={[
+              { value: "liquid-line", label: "On the liquid line" },
+              { value: "discharge-line", label: "On the discharge line" },
+            ]}
+          />
+          {draft.liquidTempLocation === "discharge-line" && (
+            <p className="mt-2 font-medium text-caution">
+              ⚠ The discharge line carries superheated vapour: subcooling read there is not valid and is left out of the finding.
+            </p>
+          )}
+        </div>
+      </ReadingCard>
+
+      <ReadingCard
+        step={4}
+        title="Air"
+        where="return, supply and outdoor air"
+        derived={
+          <div className="flex flex-wrap gap-x-8 gap-y-2">
+            <Derived label="Split across the coil" value={diff(result?.temperatureSplitK)} unit={k} />
+            <Derived
+              label={result?.wetBulbBasis === "from-relative-humidity" ? "Wet bulb (from RH)" : "Wet bulb"}
+              value={temp(result?.returnAirWetBulbC)}
+              unit={t}
+            />
+            <Derived label="Condenser approach" value={diff(result?.condenserApproachK)} unit={k} />
+          </div>
+        }
+      >
+        {input("returnAirDryBulbC", "Return air dry bulb", t)}
+        {input("returnAirWetBulbC", "Return air wet bulb", t, "Or enter relative humidity below")}
+        {input("returnAirRelativeHumidity", "Return air relative humidity", "% RH")}
+        {input("supplyAirDryBulbC", "Supply air dry bulb", t)}
+        {input("outdoorAirDryBulbC", "Outdoor air (condenser inlet, shade)", t)}
+      </ReadingCard>
+
+      <ReadingCard
+        step={5}
+        title="Electrical and run time"
+        where="compressor"
+        derived={
+          <Derived
+            label="Compressor current"
+            value={result?.compressorCurrentRatio == null ? null : formatNumber(result.compressorCurrentRatio * 100, 0)}
+            unit="% of RLA"
+          />
+        }
+      >
+        {input("compressorAmps", "Compressor running current", "A")}
+        {input("runMinutes", "Running since start or last change", "min", "Readings drift for 10–15 min after every change")}
+      </ReadingCard>
+    </div>
+  );
+}

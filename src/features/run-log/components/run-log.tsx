@@ -1,0 +1,179 @@
+import { Save } from "lucide-react";
+import { useMemo, useState } from "react";
+import type { LiquidTempLocation } from "@shared/schemas/diagnosis.ts";
+import type { Visit } from "@shared/schemas/visits.ts";
+import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { Button } from "@/components/ui/button/button.tsx";
+import { FormAlert } from "@/components/ui/field/field.tsx";
+import { useNow } from "@/hooks/use-now.ts";
+import { ApiError } from "@/lib/api/api-client.ts";
+import { useCreateReading } from "@/lib/api/visits.ts";
+import type { DisplayUnits } from "@/lib/units/display-units.ts";
+import { useLiveDiagnosis, type CircuitContext } from "../hooks/use-live-diagnosis.ts";
+import { circuitSeries } from "../utils/circuit-series.ts";
+import { draftFromInput, emptyDraft, parseDraft, REQUIRED_FIELDS, type DraftField, type ReadingDraft } from "../utils/reading-draft.ts";
+import { runMinutesAt, runTimeBase } from "../utils/run-time-base.ts";
+import { AdjustmentForm } from "./adjustment-form.tsx";
+import { FindingPanel } from "./finding-panel.tsx";
+import { ReadingCards } from "./reading-cards.tsx";
+import { SettledIndicator } from "./settled-indicator.tsx";
+import { TimelineStrip } from "./timeline-strip.tsx";
+import { TrendChart } from "./trend-chart.tsx";
+
+const FIELD_LABELS: Partial<Record<DraftField, string>> = {
+  suctionPressureKPa: "suction pressure",
+  suctionLineTempC: "suction line temperature",
+  liquidPressureKPa: "liquid pressure",
+  liquidLineTempC: "liquid line temperature",
+};
+
+interface RunLogProps {
+  visit: Visit;
+  circuit: number;
+  context: CircuitContext;
+  isBlend: boolean;
+  units: DisplayUnits;
+  atmosphericKPa: number;
+  canWrite: boolean;
+}
+
+/**
+ * The run log of one circuit: the finding on top, the entry cards in flow order, then the
+ * timeline strip that opens into the full trend chart.
+ */
+export function RunLog({ visit, circuit, context, isBlend, units, atmosphericKPa, canWrite }: RunLogProps) {
+  const series = useMemo(() => circuitSeries(visit.readings, visit.adjustments, circuit), [visit.readings, visit.adjustments, circuit]);
+  const lastInput = series.readings.at(-1)?.input;
+  // Last values carried forward, so a new reading changes only what moved.
+  const [draft, setDraft] = useState<ReadingDraft>(() => (lastInput ? { ...draftFromInput(lastInput, units, atmosphericKPa), runMinutes: "" } : emptyDraft()));
+  const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
+  const [formError, setFormError] = useState<string | null>(null);
+  const [savedAt, setSavedAt] = useState<string | null>(null);
+  const [showTrend, setShowTrend] = useState(false);
+  const createReading = useCreateReading();
+  const now = useNow();
+
+  // Run time counts on by itself from the last reading or adjustment unless typed over.
+  const autoRunMinutes = runMinutesAt(runTimeBase(series), now);
+  const effectiveDraft = draft.runMinutes === "" && autoRunMinutes !== null ? { ...draft, runMinutes: String(autoRunMinutes) } : draft;
+  const live = useLiveDiagnosis(effectiveDraft, context, units, atmosphericKPa);
+  const fieldErrors = { ...live.fieldErrors, ...serverErrors };
+  const shownResult = live.kind === "ready" ? live.result : (series.readings.at(-1)?.result ?? null);
+
+  const setField = (field: DraftField, value: string) => {
+    setDraft((current) => ({ ...current, [field]: value }));
+    setServerErrors(({ [field]: _dropped, ...rest }) => rest);
+  };
+  const setLocation = (liquidTempLocation: LiquidTempLocation) => setDraft((current) => ({ ...current, liquidTempLocation }));
+
+  const save = async () => {
+    setFormError(null);
+    if (live.kind !== "ready") {
+      setFormError(
+        live.kind === "incomplete" && live.missing.length > 0
+          ? `Enter the ${live.missing.map((field) => FIELD_LABELS[field] ?? field).join(", ")} first`
+          : live.kind === "invalid" && live.formError
+            ? live.formError
+            : "Check the fields marked below",
+      );
+      return;
+    }
+    const { values } = parseDraft(effectiveDraft, units, atmosphericKPa);
+    try {
+      const reading = await createReading.mutateAsync({ visitId: visit.id, circuit, ...values, atmosphericPressureKPa: atmosphericKPa });
+      setSavedAt(reading.takenAt);
+      setServerErrors({});
+      setDraft((current) => ({ ...current, runMinutes: "" }));
+    } catch (error) {
+      if (error instanceof ApiError && Object.keys(error.fields).length > 0) {
+        setServerErrors(error.fields);
+        setFormError(error.message);
+      } else {
+        setFormError(error instanceof Error ? error.message : "The reading was not saved. Try again.");
+      }
+    }
+  };
+
+  const missingRequired = REQUIRED_FIELDS.filter((field) => draft[field] === "");
+
+  return (
+    <div className="space-y-4">
+      <PanelBoundary>
+        {shownResult ? (
+          <FindingPanel result={shownResult} pending={live.kind !== "ready"} />
+        ) : (
+          <section aria-label="Finding" className="rounded-card border-2 border-dashed border-rule p-4">
+            <h2 className="text-xl font-semibold">Enter the readings</h2>
+            <p className="text-muted">Suction and liquid pressures with their line temperatures give the first finding.</p>
+          </section>
+        )}
+      </PanelBoundary>
+      <SettledIndicator trend={series.trend} />
+
+      <form
+        aria-label={`New reading, circuit ${circuit}`}
+        onSubmit={(event) => {
+          event.preventDefault();
+          void save();
+        }}
+        className="space-y-3"
+      >
+        <ReadingCards
+          draft={effectiveDraft}
+          onField={setField}
+          onLocation={setLocation}
+          fieldErrors={fieldErrors}
+          result={live.kind === "ready" ? live.result : null}
+          units={units}
+          isBlend={isBlend}
+          dischargeLineTempC={live.kind === "ready" ? live.input.dischargeLineTempC : undefined}
+        />
+        {formError && <FormAlert>{formError}</FormAlert>}
+        {canWrite ? (
+          <div className="sticky bottom-20 z-30 flex flex-wrap items-center gap-3 rounded-card border-2 border-ink bg-surface p-3 md:bottom-2">
+            <Button type="submit" size="lg" disabled={createReading.isPending} className="min-w-48">
+              <Save aria-hidden className="size-5" /> {createReading.isPending ? "Saving…" : "Save reading"}
+            </Button>
+            <span className="text-sm text-muted" aria-live="polite">
+              {savedAt
+                ? `✓ Saved at ${new Date(savedAt).toLocaleTimeString()} — values stay for the next reading`
+                : missingRequired.length > 0
+                  ? `${missingRequired.length} required field(s) to go`
+                  : "Values carry forward: change only what moved"}
+            </span>
+          </div>
+        ) : (
+          <p className="text-muted">You can read this visit; recording is for technicians, seniors and owners.</p>
+        )}
+      </form>
+
+      <section aria-labelledby={`timeline-${circuit}`} className="space-y-2">
+        <div className="flex flex-wrap items-center justify-between gap-2">
+          <h2 id={`timeline-${circuit}`} className="text-lg font-semibold">
+            Timeline
+          </h2>
+          <Button variant="secondary" aria-expanded={showTrend} onClick={() => setShowTrend((value) => !value)}>
+            {showTrend ? "Hide trend chart" : "Open trend chart"}
+          </Button>
+        </div>
+        <TimelineStrip series={series} units={units} />
+        {showTrend && (
+          <PanelBoundary>
+            <div className="rounded-card border-2 border-rule bg-surface p-2">
+              <TrendChart series={series} units={units} />
+            </div>
+          </PanelBoundary>
+        )}
+      </section>
+
+      {canWrite && (
+        <section aria-labelledby={`adjust-${circuit}`} className="rounded-card border-2 border-rule bg-surface p-4">
+          <h2 id={`adjust-${circuit}`} className="mb-2 text-lg font-semibold">
+            Log an adjustment
+          </h2>
+          <AdjustmentForm visitId={visit.id} circuit={circuit} />
+        </section>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,47 @@
+import { useDeferredValue, useMemo } from "react";
+import { diagnose, DiagnosisInputError } from "@shared/engine/index.ts";
+import type { DiagnosisInputDraft, DiagnosisResult, MeteringDevice } from "@shared/schemas/diagnosis.ts";
+import type { DisplayUnits } from "@/lib/units/display-units.ts";
+import { parseDraft, type DraftField, type ReadingDraft } from "../utils/reading-draft.ts";
+
+export interface CircuitContext {
+  refrigerant: string;
+  meteringDevice: MeteringDevice;
+  targetSuperheatK: number | null;
+  targetSubcoolingK: number | null;
+  compressorRla: number | null;
+}
+
+export type LiveDiagnosis =
+  | { kind: "incomplete"; missing: DraftField[]; fieldErrors: Record<string, string> }
+  | { kind: "invalid"; fieldErrors: Record<string, string>; formError: string | null }
+  | { kind: "ready"; input: DiagnosisInputDraft; result: DiagnosisResult; fieldErrors: Record<string, string> };
+
+/**
+ * Runs the same engine the server runs, on what is typed so far. The draft is deferred, so a
+ * burst of keystrokes re-diagnoses once the typing pauses rather than on every key.
+ */
+export function useLiveDiagnosis(draft: ReadingDraft, context: CircuitContext, units: DisplayUnits, atmosphericKPa: number): LiveDiagnosis {
+  const deferredDraft = useDeferredValue(draft);
+  return useMemo(() => {
+    const { values, typingErrors, missing } = parseDraft(deferredDraft, units, atmosphericKPa);
+    const fieldErrors: Record<string, string> = { ...typingErrors };
+    if (missing.length > 0 || Object.keys(typingErrors).length > 0) return { kind: "incomplete", missing, fieldErrors };
+    const input: DiagnosisInputDraft = {
+      refrigerant: context.refrigerant,
+      meteringDevice: context.meteringDevice,
+      targetSuperheatK: context.targetSuperheatK ?? undefined,
+      targetSubcoolingK: context.targetSubcoolingK ?? undefined,
+      compressorRla: context.compressorRla ?? undefined,
+      atmosphericPressureKPa: atmosphericKPa,
+      ...(values as Omit<DiagnosisInputDraft, "refrigerant" | "meteringDevice">),
+    };
+    try {
+      return { kind: "ready", input, result: diagnose(input), fieldErrors };
+    } catch (error) {
+      if (!(error instanceof DiagnosisInputError)) throw error;
+      for (const [field, messages] of Object.entries(error.fieldErrors)) fieldErrors[field] = messages[0] ?? "Check this value";
+      return { kind: "invalid", fieldErrors, formError: error.formErrors[0] ?? null };
+    }
+  }, [deferredDraft, context, units, atmosphericKPa]);
+}

@@ -1,0 +1,63 @@
+import { assessTrend } from "@shared/engine/index.ts";
+import type { TrendResult } from "@shared/schemas/diagnosis.ts";
+import type { Adjustment, Reading } from "@shared/schemas/visits.ts";
+
+export interface ChartPoint {
+  /** Minutes since the circuit's first reading. */
+  x: number;
+  takenAt: string;
+  superheatK: number | null;
+  subcoolingK: number | null;
+  evaporatingTempC: number | null;
+  condensingTempC: number | null;
+}
+
+export interface CircuitSeries {
+  readings: Reading[];
+  adjustments: (Adjustment & { x: number })[];
+  points: ChartPoint[];
+  trend: TrendResult | null;
+}
+
+const minutesBetween = (from: string, to: string) => (Date.parse(to) - Date.parse(from)) / 60_000;
+
+/**
+ * One circuit's run log as a time series: its readings in order, the adjustments that apply
+ * to it (its own and whole-unit ones), chart points, and the settled assessment of the engine.
+ */
+export function circuitSeries(readings: readonly Reading[], adjustments: readonly Adjustment[], circuit: number): CircuitSeries {
+  const own = readings.filter((reading) => reading.circuit === circuit).sort((a, b) => Date.parse(a.takenAt) - Date.parse(b.takenAt));
+  const origin = own[0]?.takenAt ?? adjustments[0]?.at ?? new Date(0).toISOString();
+  const relevant = adjustments
+    .filter((adjustment) => adjustment.circuit === null || adjustment.circuit === circuit)
+    .map((adjustment) => ({ ...adjustment, x: minutesBetween(origin, adjustment.at) }));
+
+  // assessTrend needs strictly increasing times; readings saved in the same millisecond keep the last.
+  const distinct = own.filter((reading, index) => index === own.length - 1 || Date.parse(own[index + 1]!.takenAt) > Date.parse(reading.takenAt));
+  const trend =
+    distinct.length === 0
+      ? null
+      : assessTrend(
+          distinct.map((reading, index) => {
+            const previous = distinct[index - 1];
+            const change = relevant.find(
+              (adjustment) => Date.parse(adjustment.at) <= Date.parse(reading.takenAt) && (!previous || Date.parse(adjustment.at) > Date.parse(previous.takenAt)),
+            );
+            return { takenAt: reading.takenAt, input: reading.input, ...(change ? { adjustment: change.description } : {}) };
+          }),
+        );
+
+  return {
+    readings: own,
+    adjustments: relevant,
+    points: own.map((reading) => ({
+      x: minutesBetween(origin, reading.takenAt),
+      takenAt: reading.takenAt,
+      superheatK: reading.result.superheatK,
+      subcoolingK: reading.result.subcoolingK,
+      evaporatingTempC: reading.result.evaporatingTempC,
+      condensingTempC: reading.result.condensingTempC,
+    })),
+    trend,
+  };
+}

@@ -1,0 +1,101 @@
+import { MessageSquare } from "lucide-react";
+import { useState } from "react";
+import type { Visit } from "@shared/schemas/visits.ts";
+import { MAX_COMMENT_LENGTH } from "@shared/schemas/visits.ts";
+import { Button } from "@/components/ui/button/button.tsx";
+import { FormAlert } from "@/components/ui/field/field.tsx";
+import { useCreateComment } from "@/lib/api/visits.ts";
+
+const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
+
+/** The visit's conversation: comments on the visit or on one reading, for the crew and the reviewer. */
+export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment: boolean }) {
+  const [body, setBody] = useState("");
+  const [readingId, setReadingId] = useState("");
+  const [error, setError] = useState<string | null>(null);
+  const createComment = useCreateComment();
+  const readingLabel = (id: string | null) => {
+    const reading = visit.readings.find((candidate) => candidate.id === id);
+    return reading ? `circuit ${reading.circuit}, ${new Date(reading.takenAt).toLocaleTimeString(undefined, { hour: "2-digit", minute: "2-digit" })}` : null;
+  };
+
+  const submit = async () => {
+    setError(null);
+    if (body.trim() === "") return setError("Write a comment first");
+    try {
+      await createComment.mutateAsync({ visitId: visit.id, body, readingId: readingId || null });
+      setBody("");
+      setReadingId("");
+    } catch (caught) {
+      setError(caught instanceof Error ? caught.message : "The comment was not saved");
+    }
+  };
+
+  return (
+    <section aria-labelledby="comments-heading" className="rounded-card border-2 border-rule bg-surface p-4">
+      <h2 id="comments-heading" className="flex items-center gap-2 text-lg font-semibold">
+        <MessageSquare aria-hidden className="size-5" /> Comments
+      </h2>
+      {visit.comments.length === 0 ? (
+        <p className="mt-2 text-muted">No comments yet.</p>
+      ) : (
+        <ul className="mt-2 space-y-3">
+          {visit.comments.map((comment) => (
+            <li key={comment.id} className="border-l-4 border-accent pl-3">
+              <p className="text-sm text-muted">
+                <strong className="text-ink">{comment.author?.name ?? "Former member"}</strong> · {stamp(comment.createdAt)}
+                {comment.readingId && <> · on the reading of {readingLabel(comment.readingId)}</>}
+              </p>
+              <p className="whitespace-pre-wrap">{comment.body}</p>
+            </li>
+          ))}
+        </ul>
+      )}
+      {canComment && (
+        <form
+          className="mt-3 space-y-2"
+          onSubmit={(event) => {
+            event.preventDefault();
+            void submit();
+          }}
+        >
+          {error && <FormAlert>{error}</FormAlert>}
+          <label htmlFor="comment-body" className="block font-medium">
+            Add a comment
+          </label>
+          <textarea
+            id="comment-body"
+            value={body}
+            maxLength={MAX_COMMENT_LENGTH}
+            onChange={(event) => setBody(event.target.value)}
+            rows={3}
+            className="block w-full rounded-card border-2 border-rule bg-surface p-3"
+          />
+          {visit.readings.length > 0 && (
+            <div>
+              <label htmlFor="comment-reading" className="block text-sm font-medium">
+                About
+              </label>
+              <select
+                id="comment-reading"
+                value={readingId}
+                onChange={(event) => setReadingId(event.target.value)}
+                className="min-h-touch rounded-card border-2 border-rule bg-surface px-3"
+              >
+                <option value="">The whole visit</option>
+                {visit.readings.map((reading) => (
+                  <option key={reading.id} value={reading.id}>
+                    Reading: {readingLabel(reading.id)}
+                  </option>
+                ))}
+              </select>
+            </div>
+          )}
+          <Button type="submit" variant="secondary" disabled={createComment.isPending}>
+            {createComment.isPending ? "Posting…" : "Post comment"}
+          </Button>
+        </form>
+      )}
+    </section>
+  );
+}

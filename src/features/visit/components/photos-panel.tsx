@@ -1,0 +1,88 @@
+import { Camera } from "lucide-react";
+import { useRef, useState } from "react";
+import { PHOTO_KINDS, type Visit } from "@shared/schemas/visits.ts";
+import { Button } from "@/components/ui/button/button.tsx";
+import { FormAlert } from "@/components/ui/field/field.tsx";
+import { useUploadPhoto } from "@/lib/api/visits.ts";
+
+const KIND_LABELS: Record<(typeof PHOTO_KINDS)[number], string> = {
+  nameplate: "Nameplate",
+  gauges: "Gauges",
+  damage: "Damage",
+  repair: "Repair",
+  other: "Other",
+};
+
+/** Photos of the nameplate, gauges and damage; the phone's camera opens straight from here. */
+export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boolean }) {
+  const upload = useUploadPhoto();
+  const [kind, setKind] = useState<(typeof PHOTO_KINDS)[number]>("gauges");
+  const [error, setError] = useState<string | null>(null);
+  const fileInput = useRef<HTMLInputElement>(null);
+
+  const send = async (file: File | undefined) => {
+    if (!file) return;
+    setError(null);
+    try {
+      await upload.mutateAsync({ visitId: visit.id, file, kind });
+    } catch (caught) {
+      setError(caught instanceof Error ? caught.message : "The photo was not uploaded");
+    } finally {
+      if (fileInput.current) fileInput.current.value = "";
+    }
+  };
+
+  return (
+    <section aria-labelledby="photos-heading" className="rounded-card border-2 border-rule bg-surface p-4">
+      <h2 id="photos-heading" className="flex items-center gap-2 text-lg font-semibold">
+        <Camera aria-hidden className="size-5" /> Photos
+      </h2>
+      {visit.photos.length === 0 ? (
+        <p className="mt-2 text-muted">No photos yet.</p>
+      ) : (
+        <ul className="mt-2 grid grid-cols-2 gap-2 sm:grid-cols-4">
+          {visit.photos.map((photo) => (
+            <li key={photo.id}>
+              <a href={photo.url} target="_blank" rel="noreferrer" className="block">
+                <img src={photo.thumbnailUrl} alt={`${KIND_LABELS[photo.kind]} photo${photo.caption ? `: ${photo.caption}` : ""}`} className="aspect-[4/3] w-full rounded-card border-2 border-rule object-cover" />
+                <span className="text-sm">{KIND_LABELS[photo.kind]}</span>
+              </a>
+            </li>
+          ))}
+        </ul>
+      )}
+      {canUpload && visit.status !== "signed-off" && (
+        <div className="mt-3 space-y-2">
+          {error && <FormAlert>{error}</FormAlert>}
+          <div className="flex flex-wrap items-end gap-2">
+            <div>
+              <label htmlFor="photo-kind" className="block text-sm font-medium">
+                Photo of
+              </label>
+              <select id="photo-kind" value={kind} onChange={(event) => setKind(event.target.value as typeof kind)} className="min-h-touch rounded-card border-2 border-rule bg-surface px-3">
+                {PHOTO_KINDS.map((value) => (
+                  <option key={value} value={value}>
+                    {KIND_LABELS[value]}
+                  </option>
+                ))}
+              </select>
+            </div>
+            <input
+              ref={fileInput}
+              id="photo-file"
+              type="file"
+              accept="image/jpeg,image/png,image/webp"
+              capture="environment"
+              className="sr-only"
+              onChange={(event) => void send(event.target.files?.[0])}
+            />
+            <Button variant="secondary" onClick={() => fileInput.current?.click()} disabled={upload.isPending}>
+              <Camera aria-hidden className="size-5" /> {upload.isPending ? "Uploading…" : "Add photo"}
+            </Button>
+          </div>
+          <p className="text-xs text-muted">JPEG, PNG or WebP, up to 12 MB.</p>
+        </div>
+      )}
+    </section>
+  );
+}

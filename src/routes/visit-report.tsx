@@ -1,0 +1,154 @@
+import { Printer } from "lucide-react";
+import { Link, useParams } from "react-router-dom";
+import { ADJUSTMENT_KIND_LABELS, VISIT_STATUS_LABELS } from "@shared/schemas/visits.ts";
+import { can } from "@shared/schemas/auth.ts";
+import { Button } from "@/components/ui/button/button.tsx";
+import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
+import { paths } from "@/config/paths.ts";
+import { ReadingsTable } from "@/features/report/components/readings-table.tsx";
+import { SendReportForm } from "@/features/report/components/send-report-form.tsx";
+import { FindingPanel } from "@/features/run-log/components/finding-panel.tsx";
+import { TrendChart } from "@/features/run-log/components/trend-chart.tsx";
+import { circuitSeries } from "@/features/run-log/utils/circuit-series.ts";
+import { useMe } from "@/lib/api/auth.ts";
+import { useEquipmentDetail } from "@/lib/api/equipment.ts";
+import { useVisit } from "@/lib/api/visits.ts";
+import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
+
+/** Width that fits an A4 page inside its print margins at 96 px per inch (≈ 180 mm). */
+const PRINT_CHART_WIDTH = 680;
+const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
+
+export default function VisitReportRoute() {
+  const { visitId = "" } = useParams();
+  const visit = useVisit(visitId);
+  const equipment = useEquipmentDetail(visit.data?.equipmentId ?? "");
+  const me = useMe();
+  const { units, atmosphericKPa } = useDisplayUnits();
+
+  if (visit.isPending || (visit.isSuccess && equipment.isPending)) return <p aria-busy="true">Preparing the report…</p>;
+  if (visit.isError || equipment.isError) {
+    return (
+      <p role="alert" className="font-medium text-fault">
+        ⚠ The report could not be prepared: {(visit.error ?? equipment.error)?.message}
+      </p>
+    );
+  }
+  const data = visit.data;
+  const unit = equipment.data!.equipment;
+
+  return (
+    <article className="report space-y-6" aria-label="Visit report">
+      <div className="no-print flex flex-wrap items-center gap-3">
+        <Link to={paths.visits.detail.getHref(data.id)} className="font-medium text-accent underline underline-offset-4">
+          ← Back to the visit
+        </Link>
+        <Button variant="secondary" onClick={() => window.print()}>
+          <Printer aria-hidden className="size-5" /> Print or save as PDF
+        </Button>
+      </div>
+
+      <header className="border-b-2 border-ink pb-3">
+        <p className="text-sm uppercase tracking-wider text-muted">Service visit report</p>
+        <h1 className="text-2xl font-semibold">{unit.name}</h1>
+        <p>
+          {data.customerName} · {data.siteName}
+        </p>
+        <p className="flex flex-wrap items-center gap-2 text-sm">
+          <VisitStatusBadge status={data.status} /> Started {stamp(data.startedAt)} · Crew: {data.technicians.map((person) => person.name).join(", ") || "—"}
+        </p>
+        <p className="mt-1">
+          <span className="font-medium">Reason:</span> {data.reason}
+        </p>
+      </header>
+
+      <section aria-labelledby="nameplate-heading">
+        <h2 id="nameplate-heading" className="text-lg font-semibold">
+          Equipment
+        </h2>
+        <dl className="num mt-1 grid grid-cols-2 gap-x-6 text-sm sm:grid-cols-4">
+          <dt className="font-sans text-muted">Refrigerant</dt>
+          <dd>{unit.refrigerant}</dd>
+          <dt className="font-sans text-muted">Maker / model</dt>
+          <dd>{[unit.maker, unit.model].filter(Boolean).join(" ") || "—"}</dd>
+          <dt className="font-sans text-muted">Serial</dt>
+          <dd>{unit.serial ?? "—"}</dd>
+          <dt className="font-sans text-muted">Supply</dt>
+          <dd>{unit.supplyVoltageV ? `${unit.supplyVoltageV} V ${unit.phases ?? ""}~` : "—"}</dd>
+          {unit.circuits.map((circuit) => (
+            <div key={circuit.number} className="contents">
+              <dt className="font-sans text-muted">Circuit {circuit.number}</dt>
+              <dd>
+                {circuit.factoryChargeKg} kg, {circuit.meteringDevice.toUpperCase().replace("-", " ")}
+              </dd>
+            </div>
+          ))}
+        </dl>
+      </section>
+
+      {unit.circuits.map((circuit) => {
+        const series = circuitSeries(data.readings, data.adjustments, circuit.number);
+        const last = series.readings.at(-1);
+        return (
+          <section key={circuit.number} aria-labelledby={`circuit-${circuit.number}-heading`} className="space-y-3 break-inside-avoid-page">
+            <h2 id={`circuit-${circuit.number}-heading`} className="text-lg font-semibold">
+              Circuit {circuit.number}
+            </h2>
+            <ReadingsTable readings={series.readings} units={units} atmosphericKPa={atmosphericKPa} />
+            {series.points.length > 0 && <TrendChart series={series} units={units} width={PRINT_CHART_WIDTH} height={260} />}
+            {last && <FindingPanel result={last.result} />}
+          </section>
+        );
+      })}
+
+      <section aria-labelledby="adjustments-heading">
+        <h2 id="adjustments-heading" className="text-lg font-semibold">
+          Adjustments and work done
+        </h2>
+        {data.adjustments.length === 0 ? (
+          <p className="text-muted">None recorded.</p>
+        ) : (
+          <ul className="mt-1 space-y-1">
+            {data.adjustments.map((adjustment) => (
+              <li key={adjustment.id}>
+                <span className="num text-muted">{stamp(adjustment.at)}</span> — {ADJUSTMENT_KIND_LABELS[adjustment.kind]}
+                {adjustment.circuit ? ` (circuit ${adjustment.circuit})` : ""}: {adjustment.description}
+                {adjustment.amountKg != null && <span className="num"> · {adjustment.amountKg} kg</span>}
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+
+      {data.photos.length > 0 && (
+        <section aria-labelledby="photos-heading" className="break-inside-avoid-page">
+          <h2 id="photos-heading" className="text-lg font-semibold">
+            Photos
+          </h2>
+          <div className="mt-1 grid grid-cols-3 gap-2">
+            {data.photos.map((photo) => (
+              <img key={photo.id} src={photo.thumbnailUrl} alt={`${photo.kind} photo`} className="w-full rounded-card border border-rule" />
+            ))}
+          </div>
+        </section>
+      )}
+
+      <section aria-labelledby="signoff-heading" className="break-inside-avoid-page rounded-card border-2 border-ink p-4">
+        <h2 id="signoff-heading" className="text-lg font-semibold">
+          Sign-off
+        </h2>
+        {data.status === "signed-off" ? (
+          <p>
+            {VISIT_STATUS_LABELS["signed-off"]} by <strong>{data.signedOffBy?.name ?? "—"}</strong>
+            {data.signedOffAt && ` on ${stamp(data.signedOffAt)}`}
+            {data.reviewNote && ` — “${data.reviewNote}”`}
+          </p>
+        ) : (
+          <p>Not signed off yet ({VISIT_STATUS_LABELS[data.status].toLowerCase()}).</p>
+        )}
+      </section>
+
+      {me.data && can(me.data.role, "writeRecords") && <SendReportForm visitId={data.id} defaultTo={data.customerContactEmail} />}
+    </article>
+  );
+}

@@ -1,0 +1,132 @@
+import { FileText } from "lucide-react";
+import { useState } from "react";
+import { Link, useParams } from "react-router-dom";
+import { getRefrigerant } from "@shared/engine/index.ts";
+import { can } from "@shared/schemas/auth.ts";
+import { safetyClasses } from "@shared/content/safety-classes.ts";
+import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { Segmented } from "@/components/ui/field/segmented.tsx";
+import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
+import { paths } from "@/config/paths.ts";
+import { RunLog } from "@/features/run-log/components/run-log.tsx";
+import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
+import { CommentsPanel } from "@/features/visit/components/comments-panel.tsx";
+import { PhotosPanel } from "@/features/visit/components/photos-panel.tsx";
+import { ReviewPanel } from "@/features/visit/components/review-panel.tsx";
+import { useMe } from "@/lib/api/auth.ts";
+import { useEquipmentDetail } from "@/lib/api/equipment.ts";
+import { useVisit } from "@/lib/api/visits.ts";
+import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
+
+const METERING_LABELS = { txv: "TXV", eev: "EEV", "fixed-orifice": "fixed orifice", capillary: "capillary" } as const;
+
+export default function VisitRoute() {
+  const { visitId = "" } = useParams();
+  const visit = useVisit(visitId);
+  const equipment = useEquipmentDetail(visit.data?.equipmentId ?? "");
+  const me = useMe();
+  const { units, atmosphericKPa } = useDisplayUnits();
+  const [circuit, setCircuit] = useState(1);
+
+  if (visit.isPending || (visit.isSuccess && equipment.isPending)) {
+    return <p aria-busy="true">Loading the visit…</p>;
+  }
+  if (visit.isError || equipment.isError) {
+    const error = visit.error ?? equipment.error;
+    return (
+      <div role="alert" className="space-y-2">
+        <h1 className="text-2xl font-semibold">This visit could not be opened</h1>
+        <p>{error?.message}</p>
+        <Link to={paths.jobs.getHref()} className="font-medium text-accent underline underline-offset-4">
+          Back to jobs
+        </Link>
+      </div>
+    );
+  }
+
+  const data = visit.data;
+  const unit = equipment.data!.equipment;
+  const role = me.data?.role ?? "apprentice";
+  const canWrite = can(role, "writeRecords") && data.status !== "signed-off";
+  const nameplate = unit.circuits.find((candidate) => candidate.number === circuit) ?? unit.circuits[0]!;
+  const refrigerant = getRefrigerant(unit.refrigerant);
+  const caution = safetyClasses[refrigerant.safety.class].caution;
+
+  return (
+    <div className="space-y-5">
+      <nav aria-label="Breadcrumb" className="text-sm">
+        <Link to={paths.jobs.getHref()} className="text-accent underline underline-offset-4">
+          Jobs
+        </Link>{" "}
+        /{" "}
+        <Link to={paths.equipment.detail.getHref(unit.id)} className="text-accent underline underline-offset-4">
+          {unit.name}
+        </Link>
+      </nav>
+      <header className="space-y-1">
+        <div className="flex flex-wrap items-center gap-3">
+          <h1 className="text-2xl font-semibold">{unit.name}</h1>
+          <VisitStatusBadge status={data.status} />
+        </div>
+        <p className="text-muted">
+          {data.customerName} · {data.siteName} · <span className="num">{unit.refrigerant}</span> · started{" "}
+          {new Date(data.startedAt).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" })}
+        </p>
+        <p>
+          <span className="font-medium">Reason:</span> {data.reason}
+        </p>
+        <Link to={paths.visits.report.getHref(data.id)} className="inline-flex min-h-touch items-center gap-2 font-medium text-accent underline underline-offset-4">
+          <FileText aria-hidden className="size-5" /> Visit report
+        </Link>
+      </header>
+
+      {caution && <CautionPanel topic={caution} compact />}
+
+      {unit.circuits.length > 1 && (
+        <Segmented<string>
+          label="Circuit"
+          value={String(circuit)}
+          onChange={(value) => setCircuit(Number(value))}
+          options={unit.circuits.map((candidate) => ({ value: String(candidate.number), label: `Circuit ${candidate.number}` }))}
+        />
+      )}
+      <p className="text-sm text-muted">
+        Circuit {nameplate.number}: {METERING_LABELS[nameplate.meteringDevice]}, factory charge <span className="num">{nameplate.factoryChargeKg} kg</span>
+        {nameplate.targetSuperheatK != null && <> · target superheat <span className="num">{nameplate.targetSuperheatK} K</span></>}
+        {nameplate.targetSubcoolingK != null && <> · target subcooling <span className="num">{nameplate.targetSubcoolingK} K</span></>} · gauge pressures against{" "}
+        <span className="num">{atmosphericKPa} kPa</span>
+      </p>
+
+      <PanelBoundary>
+        <RunLog
+          key={`${data.id}-${nameplate.number}`}
+          visit={data}
+          circuit={nameplate.number}
+          context={{
+            refrigerant: unit.refrigerant,
+            meteringDevice: nameplate.meteringDevice,
+            targetSuperheatK: nameplate.targetSuperheatK,
+            targetSubcoolingK: nameplate.targetSubcoolingK,
+            compressorRla: unit.compressorRlaA,
+          }}
+          isBlend={refrigerant.kind === "blend"}
+          units={units}
+          atmosphericKPa={atmosphericKPa}
+          canWrite={canWrite}
+        />
+      </PanelBoundary>
+
+      <div className="grid gap-4 lg:grid-cols-2">
+        <PanelBoundary>
+          <ReviewPanel visit={data} canSubmit={can(role, "writeRecords")} canSignOff={can(role, "signOff")} />
+        </PanelBoundary>
+        <PanelBoundary>
+          <CommentsPanel visit={data} canComment={can(role, "writeRecords")} />
+        </PanelBoundary>
+      </div>
+      <PanelBoundary>
+        <PhotosPanel visit={data} canUpload={can(role, "writeRecords")} />
+      </PanelBoundary>
+    </div>
+  );
+}
