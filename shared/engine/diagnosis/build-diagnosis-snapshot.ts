@@ -3,6 +3,8 @@ import { gaugeToAbsolute } from "../units/gauge-to-absolute.ts";
 import { PropertyRangeError } from "../properties/property-range-error.ts";
 import { saturationTemperature } from "../properties/saturation-temperature.ts";
 import { SENSOR_TOLERANCE_K } from "./diagnosis-limits.ts";
+import { formatTenths } from "./format-tenths.ts";
+import { tablePressureRange } from "./table-pressure-range.ts";
 import { wetBulbFromRelativeHumidity } from "./psychrometrics/wet-bulb-from-relative-humidity.ts";
 import { selectSubcoolingTarget } from "./select-subcooling-target.ts";
 import { selectSuperheatTarget } from "./select-superheat-target.ts";
@@ -10,6 +12,35 @@ import type { DiagnosisSnapshot, Exclusion } from "./types.ts";
 
 function difference(first: number | null | undefined, second: number | null | undefined): number | null {
   return first === null || first === undefined || second === null || second === undefined ? null : first - second;
+}
+
+/** Saturation temperature, or null with an `outsideTable` entry (once per field) when the
+ * pressure is outside the table; unknown refrigerants still throw. */
+function saturationOrExclusion(refrigerant: string, field: string, pressureKPaAbs: number, point: "bubble" | "dew", outsideTable: Exclusion[]): number | null {
+  const range = tablePressureRange(refrigerant, point);
+  if (!(pressureKPaAbs >= range.minimumKPaAbs && pressureKPaAbs <= range.maximumKPaAbs)) {
+    if (!outsideTable.some((exclusion) => exclusion.field === field)) {
+      const below = pressureKPaAbs < range.minimumKPaAbs;
+      const limit = below
+        ? `below ${formatTenths(range.minimumKPaAbs)} kPa absolute (${range.minimumC} °C)`
+        : `above ${formatTenths(range.maximumKPaAbs)} kPa absolute (${range.maximumC} °C, near the critical point)`;
+      outsideTable.push({
+        code: "outside-table",
+        field,
+        reason: `${refrigerant} at ${formatTenths(pressureKPaAbs)} kPa absolute is ${limit}, outside the table: no saturation temperature for this reading`,
+      });
+    }
+    return null;
+  }
+  try {
+    return saturationTemperature(refrigerant, pressureKPaAbs, point);
+  } catch (error) {
+    if (!(error instanceof PropertyRangeError) || error.code === "UNKNOWN_REFRIGERANT") throw error;
+    if (!outsideTable.some((exclusion) => exclusion.field === field)) {
+      outsideTable.push({ code: "outside-table", field, reason: `${error.message}: no saturation temperature for this reading` });
+    }
+    return null;
+  }
 }
 
 /**
@@ -33,17 +64,8 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
   const refrigerant = input.refrigerant;
   const outsideTable: Exclusion[] = [];
 
-  const saturation = (field: string, pressureKPaAbs: number, point: "bubble" | "dew"): number | null => {
-    try {
-      return saturationTemperature(refrigerant, pressureKPaAbs, point);
-    } catch (error) {
-      if (!(error instanceof PropertyRangeError) || error.code === "UNKNOWN_REFRIGERANT") throw error;
-      if (!outsideTable.some((exclusion) => exclusion.field === field)) {
-        outsideTable.push({ code: "outside-table", field, reason: `${error.message}: no saturation temperature for this reading` });
-      }
-      return null;
-    }
-  };
+  const saturation = (field: string, pressureKPaAbs: number, point: "bubble" | "dew") =>
+    saturationOrExclusion(refrigerant, field, pressureKPaAbs, point, outsideTable);
 
   const suctionPressureKPaAbs = gaugeToAbsolute(input.suctionPressureKPa, atmosphericPressureKPa);
   const liquidPressureKPaAbs = gaugeToAbsolute(input.liquidPressureKPa, atmosphericPressureKPa);

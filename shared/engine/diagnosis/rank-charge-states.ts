@@ -6,7 +6,10 @@ type State = RankedState["state"];
 const SCORE_EPSILON = 1e-9;
 /** The states evidence can point to, in `CHARGE_STATES` order ("normal" first). */
 const EVIDENCE_STATES = CHARGE_STATES.filter((state): state is State => state !== "insufficient-data");
+if (EVIDENCE_STATES.length !== 8) throw new Error("rankChargeStates requires the eight evidence states of CHARGE_STATES");
 const STATE_INDEX = Object.fromEntries(EVIDENCE_STATES.map((state, index) => [state, index])) as Record<State, number>;
+
+const byScoreDescending = (first: RankedState, second: RankedState) => second.score - first.score;
 
 /**
  * Sums the evidence of all findings per state and ranks the states, most likely first.
@@ -21,7 +24,7 @@ const STATE_INDEX = Object.fromEntries(EVIDENCE_STATES.map((state, index) => [st
  * @example rankChargeStates([{ …, pointsTo: [{ state: "undercharged", weight: 1 }] }]) // [{ state: "undercharged", score: 1, confidence: 0.632 }]
  */
 export function rankChargeStates(findings: readonly Finding[]): RankedState[] {
-  const scores = new Float64Array(EVIDENCE_STATES.length);
+  const scores = [0, 0, 0, 0, 0, 0, 0, 0];
   for (let findingIndex = 0; findingIndex < findings.length; findingIndex += 1) {
     const pointsTo = findings[findingIndex]!.pointsTo;
     for (let evidenceIndex = 0; evidenceIndex < pointsTo.length; evidenceIndex += 1) {
@@ -35,6 +38,6 @@ export function rankChargeStates(findings: readonly Finding[]): RankedState[] {
     if (score > SCORE_EPSILON) ranked.push({ state: EVIDENCE_STATES[index]!, score, confidence: 1 - Math.exp(-score) });
   }
   // Array.prototype.sort is stable, so equal scores keep CHARGE_STATES order.
-  ranked.sort((first, second) => second.score - first.score);
+  ranked.sort(byScoreDescending);
   return ranked;
 }

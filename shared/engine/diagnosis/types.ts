@@ -63,8 +63,8 @@ export interface DiagnosisSnapshot {
 }
 
 export interface RuleOutput {
-  findings: Finding[];
-  warnings: DiagnosisWarning[];
+  readonly findings: readonly Finding[];
+  readonly warnings: readonly DiagnosisWarning[];
 }
 
 /** One diagnostic rule: pure snapshot → findings and warnings. */

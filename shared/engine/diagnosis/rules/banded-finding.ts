@@ -14,6 +14,8 @@ export interface BandedReading {
   value: number;
   unit: string;
   band: Band;
+  /** The band as text ("8.0–13.0"), when the rule has it ready; else formatted here. */
+  bandText?: string;
   profile: EvidenceProfile;
   /** Sentence per direction, given the value and band as text with one decimal. */
   messages: { low: Message; normal: Message; high: Message };
@@ -30,7 +32,7 @@ export interface BandedReading {
 export function bandedFinding(spec: BandedReading): Finding {
   const deviation = bandDeviation(spec.value, spec.band);
   const direction = deviation < 0 ? "low" : deviation > 0 ? "high" : "normal";
-  const message = spec.messages[direction](formatTenths(spec.value), formatTenths(spec.band.lowK) + "–" + formatTenths(spec.band.highK));
+  const message = spec.messages[direction](formatTenths(spec.value), spec.bandText ?? formatTenths(spec.band.lowK) + "–" + formatTenths(spec.band.highK));
   return {
     ruleId: spec.ruleId,
     reading: spec.reading,

@@ -3,6 +3,7 @@ import { deviationStrength } from "../deviation-strength.ts";
 import { MEMORY, cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /** Ratio below the low limit at which the evidence reaches full strength. */
 const FULL_STRENGTH_RATIO_BELOW = 0.5;
@@ -15,7 +16,7 @@ export const compressionRatioRule: DiagnosisRule = {
   source: SOURCE,
   evaluate(snapshot) {
     const ratio = snapshot.compressionRatio;
-    if (ratio === null) return { findings: [], warnings: [] };
+    if (ratio === null) return NO_OUTPUT;
     const basis = snapshot.compressionRatioBasis === "liquid" ? " (from liquid pressure)" : "";
     if (ratio < LOW_COMPRESSION_RATIO) {
       const strength = deviationStrength(LOW_COMPRESSION_RATIO - ratio, FULL_STRENGTH_RATIO_BELOW);
@@ -49,6 +50,6 @@ export const compressionRatioRule: DiagnosisRule = {
         ],
       };
     }
-    return { findings: [], warnings: [] };
+    return NO_OUTPUT;
   },
 };

@@ -4,6 +4,7 @@ import { COMMON_PRACTICE, cite } from "../sources.ts";
 import { formatHundredths } from "../format-hundredths.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /** Current-ratio distance at which the evidence reaches full strength. */
 const FULL_STRENGTH_RATIO = 0.2;
@@ -16,7 +17,7 @@ export const compressorCurrentRule: DiagnosisRule = {
   source: SOURCE,
   evaluate(snapshot) {
     const { compressorAmps, compressorRla } = snapshot.input;
-    if (compressorAmps === undefined) return { findings: [], warnings: [] };
+    if (compressorAmps === undefined) return NO_OUTPUT;
     const ratio = snapshot.compressorCurrentRatio;
     if (ratio === null || compressorRla === undefined) {
       return {

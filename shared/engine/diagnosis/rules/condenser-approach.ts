@@ -3,6 +3,7 @@ import { deviationStrength } from "../deviation-strength.ts";
 import { cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = cite(["S26", "S34"]);
 
@@ -13,7 +14,7 @@ export const condenserApproachRule: DiagnosisRule = {
   source: SOURCE,
   evaluate(snapshot) {
     const approach = snapshot.condenserApproachK;
-    if (approach === null || snapshot.subcoolingExcluded || approach >= -SENSOR_TOLERANCE_K) return { findings: [], warnings: [] };
+    if (approach === null || snapshot.subcoolingExcluded || approach >= -SENSOR_TOLERANCE_K) return NO_OUTPUT;
     const strength = deviationStrength(approach + SENSOR_TOLERANCE_K);
     return {
       findings: [

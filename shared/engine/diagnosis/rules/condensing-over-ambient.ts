@@ -1,7 +1,9 @@
 import { CONDENSING_OVER_AMBIENT_BAND } from "../diagnosis-limits.ts";
+import { formatTenths } from "../format-tenths.ts";
 import { cite } from "../sources.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /** High CTOA = head pressure high for the weather; low = head low [S21][S26][S122]. */
 export const CONDENSING_OVER_AMBIENT_PROFILE: EvidenceProfile = {
@@ -15,6 +17,7 @@ export const CONDENSING_OVER_AMBIENT_PROFILE: EvidenceProfile = {
 };
 
 const SOURCE = cite(["S26", "S21", "S122"]);
+const BAND_TEXT = `${formatTenths(CONDENSING_OVER_AMBIENT_BAND.lowK)}–${formatTenths(CONDENSING_OVER_AMBIENT_BAND.highK)}`;
 
 const MESSAGES: BandedReading["messages"] = {
   low: (value, band) => `Condensing only ${value} K over outdoor air (expected ${band} K): head pressure is low — short of charge or the compressor is not pumping`,
@@ -29,7 +32,7 @@ export const condensingOverAmbientRule: DiagnosisRule = {
   source: SOURCE,
   evaluate(snapshot) {
     const difference = snapshot.condensingOverAmbientK;
-    if (difference === null) return { findings: [], warnings: [] };
+    if (difference === null) return NO_OUTPUT;
     return {
       findings: [
         bandedFinding({
@@ -38,6 +41,7 @@ export const condensingOverAmbientRule: DiagnosisRule = {
           value: difference,
           unit: "K",
           band: CONDENSING_OVER_AMBIENT_BAND,
+          bandText: BAND_TEXT,
           profile: CONDENSING_OVER_AMBIENT_PROFILE,
           messages: MESSAGES,
           source: SOURCE,

@@ -1,4 +1,5 @@
 import type { DiagnosisRule } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = "discharge gas is superheated vapour, so its line cannot be colder than the dew point at discharge pressure (TRADE.md §1.2)";
 
@@ -9,7 +10,7 @@ export const dischargeLineSaturationRule: DiagnosisRule = {
   source: SOURCE,
   evaluate(snapshot) {
     const exclusion = snapshot.dischargeLineExcluded;
-    if (!exclusion) return { findings: [], warnings: [] };
+    if (!exclusion) return NO_OUTPUT;
     return {
       findings: [],
       warnings: [{ code: exclusion.code, severity: "invalid-data", field: exclusion.field, message: exclusion.reason, source: SOURCE }],

@@ -3,6 +3,7 @@ import { deviationStrength } from "../deviation-strength.ts";
 import { cite } from "../sources.ts";
 import type { DiagnosisRule } from "../types.ts";
 import type { Evidence } from "../../../schemas/diagnosis.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = cite(["S13", "S37"]);
 /** Elevated-to-limit span over which the evidence reaches full strength, K. */
@@ -15,7 +16,7 @@ export const dischargeLineTemperatureRule: DiagnosisRule = {
   source: SOURCE,
   evaluate(snapshot) {
     const temperature = snapshot.input.dischargeLineTempC;
-    if (temperature === undefined || snapshot.dischargeLineExcluded) return { findings: [], warnings: [] };
+    if (temperature === undefined || snapshot.dischargeLineExcluded) return NO_OUTPUT;
     const warnings =
       temperature > DISCHARGE_LINE_LIMIT_C
         ? [

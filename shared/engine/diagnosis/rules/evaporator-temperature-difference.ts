@@ -1,7 +1,9 @@
 import { COMFORT_RETURN_AIR_MIN_C, EVAPORATOR_TD_BAND, EVAPORATOR_TD_SOURCE } from "../diagnosis-limits.ts";
+import { formatTenths } from "../format-tenths.ts";
 import { cite } from "../sources.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /**
  * Large TD = suction low for the load (starved or airflow-poor coil); small TD = suction high
@@ -17,6 +19,7 @@ export const EVAPORATOR_TD_PROFILE: EvidenceProfile = {
 };
 
 const SOURCE = `${cite(["S21", "S122"])}; ${EVAPORATOR_TD_SOURCE}`;
+const BAND_TEXT = `${formatTenths(EVAPORATOR_TD_BAND.lowK)}–${formatTenths(EVAPORATOR_TD_BAND.highK)}`;
 
 const MESSAGES: BandedReading["messages"] = {
   low: (value, band) => `Evaporator TD ${value} K is below ${band} K: suction is high for the load — compressor not pumping, or the coil is overfed`,
@@ -32,7 +35,7 @@ export const evaporatorTemperatureDifferenceRule: DiagnosisRule = {
   evaluate(snapshot) {
     const difference = snapshot.evaporatorTemperatureDifferenceK;
     // Comfort-cooling value: skip refrigeration coils (return air below the comfort range).
-    if (difference === null || (snapshot.input.returnAirDryBulbC ?? 0) < COMFORT_RETURN_AIR_MIN_C) return { findings: [], warnings: [] };
+    if (difference === null || (snapshot.input.returnAirDryBulbC ?? 0) < COMFORT_RETURN_AIR_MIN_C) return NO_OUTPUT;
     return {
       findings: [
         bandedFinding({
@@ -41,6 +44,7 @@ export const evaporatorTemperatureDifferenceRule: DiagnosisRule = {
           value: difference,
           unit: "K",
           band: EVAPORATOR_TD_BAND,
+          bandText: BAND_TEXT,
           profile: EVAPORATOR_TD_PROFILE,
           messages: MESSAGES,
           source: SOURCE,

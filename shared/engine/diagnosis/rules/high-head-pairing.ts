@@ -5,6 +5,7 @@ import { evidenceFromDeviation } from "../evidence-from-deviation.ts";
 import { cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /**
  * With high head pressure, subcooling tells the causes apart: low → poor condenser airflow
@@ -27,10 +28,10 @@ export const highHeadPairingRule: DiagnosisRule = {
   evaluate(snapshot) {
     const { condensingOverAmbientK, subcoolingK, subcoolingTarget } = snapshot;
     if (condensingOverAmbientK === null || subcoolingK === null || !subcoolingTarget || snapshot.subcoolingExcluded) {
-      return { findings: [], warnings: [] };
+      return NO_OUTPUT;
     }
     const headDeviation = bandDeviation(condensingOverAmbientK, CONDENSING_OVER_AMBIENT_BAND);
-    if (headDeviation <= 0) return { findings: [], warnings: [] };
+    if (headDeviation <= 0) return NO_OUTPUT;
     const headStrength = deviationStrength(headDeviation);
     const subcoolingDeviation = bandDeviation(subcoolingK, subcoolingTarget);
     const pointsTo = evidenceFromDeviation(subcoolingDeviation, deviationStrength(subcoolingDeviation), HIGH_HEAD_BY_SUBCOOLING).map(

@@ -1,6 +1,7 @@
 import { cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = "TRADE.md §1.2: negative subcooling means vapour or flash gas at the measuring point, or the wrong pipe";
 
@@ -18,7 +19,7 @@ export const liquidLineSaturationRule: DiagnosisRule = {
       };
     }
     const subcooling = snapshot.subcoolingK;
-    if (subcooling === null || subcooling >= 0) return { findings: [], warnings: [] };
+    if (subcooling === null || subcooling >= 0) return NO_OUTPUT;
     return {
       findings: [],
       warnings: [

@@ -1,5 +1,6 @@
 import { cite } from "../sources.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = `${cite(["S13"])}; TRADE.md §1.2 (subcooling exists only downstream of the condensing section)`;
 
@@ -10,7 +11,7 @@ export const liquidTemperatureLocationRule: DiagnosisRule = {
   source: SOURCE,
   evaluate(snapshot) {
     const exclusion = snapshot.subcoolingExcluded;
-    if (exclusion?.code !== "subcooling-on-discharge-line") return { findings: [], warnings: [] };
+    if (exclusion?.code !== "subcooling-on-discharge-line") return NO_OUTPUT;
     return {
       findings: [],
       warnings: [{ code: exclusion.code, severity: "invalid-data", field: exclusion.field, message: exclusion.reason, source: SOURCE }],

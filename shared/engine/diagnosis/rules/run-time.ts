@@ -1,6 +1,7 @@
 import { MIN_RUN_MINUTES } from "../diagnosis-limits.ts";
 import { COMMON_PRACTICE, cite } from "../sources.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = `${cite(["S10", "S20"])}; ${MIN_RUN_MINUTES}-minute minimum: ${COMMON_PRACTICE}`;
 
@@ -11,7 +12,7 @@ export const runTimeRule: DiagnosisRule = {
   source: SOURCE,
   evaluate(snapshot) {
     const minutes = snapshot.input.runMinutes;
-    if (minutes === undefined || minutes >= MIN_RUN_MINUTES) return { findings: [], warnings: [] };
+    if (minutes === undefined || minutes >= MIN_RUN_MINUTES) return NO_OUTPUT;
     return {
       findings: [],
       warnings: [

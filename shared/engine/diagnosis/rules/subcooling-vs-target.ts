@@ -1,6 +1,7 @@
 import { cite } from "../sources.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /** TXV/EEV: charged to subcooling, so subcooling carries the charge signal [S9][S11][S14]. */
 export const VALVE_SUBCOOLING_PROFILE: EvidenceProfile = {
@@ -61,7 +62,7 @@ export const subcoolingVsTargetRule: DiagnosisRule = {
       };
     }
     const subcooling = snapshot.subcoolingK;
-    if (subcooling === null || band === null) return { findings: [], warnings: [] };
+    if (subcooling === null || band === null) return NO_OUTPUT;
     const valve = snapshot.meteringFamily === "expansion-valve";
     const finding = bandedFinding({
       ruleId: this.id,

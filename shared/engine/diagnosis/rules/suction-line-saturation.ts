@@ -2,6 +2,7 @@ import { FLOODBACK_SUPERHEAT_K, SENSOR_TOLERANCE_K } from "../diagnosis-limits.t
 import { cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = `${cite(["S17"])}; vapour cannot be colder than its saturation temperature (TRADE.md §1.1); sensor allowance ${SENSOR_TOLERANCE_K} K ${cite(["S10"])}`;
 
@@ -22,7 +23,7 @@ export const suctionLineSaturationRule: DiagnosisRule = {
       };
     }
     const superheat = snapshot.superheatK;
-    if (superheat === null || superheat >= FLOODBACK_SUPERHEAT_K) return { findings: [], warnings: [] };
+    if (superheat === null || superheat >= FLOODBACK_SUPERHEAT_K) return NO_OUTPUT;
     return {
       findings: [],
       warnings: [

@@ -5,6 +5,7 @@ import { evidenceFromDeviation } from "../evidence-from-deviation.ts";
 import { cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /** With high superheat: subcooling low → undercharge, normal/high → restriction [S24][S25]. */
 export const HIGH_SUPERHEAT_BY_SUBCOOLING: EvidenceProfile = {
@@ -41,10 +42,10 @@ export const superheatSubcoolingPairingRule: DiagnosisRule = {
       superheatK === null || subcoolingK === null || !superheatTarget || !subcoolingTarget ||
       snapshot.superheatExcluded || snapshot.subcoolingExcluded
     ) {
-      return { findings: [], warnings: [] };
+      return NO_OUTPUT;
     }
     const superheatDeviation = bandDeviation(superheatK, superheatTarget);
-    if (superheatDeviation === 0) return { findings: [], warnings: [] };
+    if (superheatDeviation === 0) return NO_OUTPUT;
     const superheatStrength = deviationStrength(superheatDeviation);
     const subcoolingDeviation = bandDeviation(subcoolingK, subcoolingTarget);
     const scale = superheatStrength * (snapshot.meteringFamily === "fixed" ? 1 : VALVE_SCALE);

@@ -2,6 +2,7 @@ import { cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /**
  * Fixed metering devices cannot adjust, so superheat carries the charge signal: high →
@@ -51,7 +52,7 @@ export const superheatVsTargetRule: DiagnosisRule = {
   source: SOURCE,
   evaluate(snapshot) {
     const superheat = snapshot.superheatK;
-    if (superheat === null || snapshot.superheatExcluded) return { findings: [], warnings: [] };
+    if (superheat === null || snapshot.superheatExcluded) return NO_OUTPUT;
     const band = snapshot.superheatTarget;
     if (!band) {
       return {

@@ -1,6 +1,7 @@
 import { COMMON_PRACTICE } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /** Supply air warmer than return air: the coil is not cooling (or the probes are swapped). */
 export const supplyAirRule: DiagnosisRule = {
@@ -9,7 +10,7 @@ export const supplyAirRule: DiagnosisRule = {
   source: COMMON_PRACTICE,
   evaluate(snapshot) {
     const split = snapshot.temperatureSplitK;
-    if (split === null || split >= 0) return { findings: [], warnings: [] };
+    if (split === null || split >= 0) return NO_OUTPUT;
     return {
       findings: [],
       warnings: [

@@ -1,7 +1,9 @@
 import { COMFORT_RETURN_AIR_MIN_C, TEMPERATURE_SPLIT_BAND } from "../diagnosis-limits.ts";
+import { formatTenths } from "../format-tenths.ts";
 import { cite } from "../sources.ts";
 import type { DiagnosisRule, EvidenceProfile } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /** High split: too little air over the coil; low split: too little refrigeration effect [S21][S33]. */
 export const TEMPERATURE_SPLIT_PROFILE: EvidenceProfile = {
@@ -15,6 +17,7 @@ export const TEMPERATURE_SPLIT_PROFILE: EvidenceProfile = {
 };
 
 const SOURCE = cite(["S33", "S21"]);
+const BAND_TEXT = `${formatTenths(TEMPERATURE_SPLIT_BAND.lowK)}–${formatTenths(TEMPERATURE_SPLIT_BAND.highK)}`;
 
 const MESSAGES: BandedReading["messages"] = {
   low: (value, band) => `Air split ${value} K is below ${band} K: the coil is doing little cooling (humid air also lowers the split)`,
@@ -30,7 +33,7 @@ export const temperatureSplitRule: DiagnosisRule = {
   evaluate(snapshot) {
     const split = snapshot.temperatureSplitK;
     // Comfort-cooling band: skip refrigeration coils (return air below the comfort range).
-    if (split === null || split < 0 || (snapshot.input.returnAirDryBulbC ?? 0) < COMFORT_RETURN_AIR_MIN_C) return { findings: [], warnings: [] };
+    if (split === null || split < 0 || (snapshot.input.returnAirDryBulbC ?? 0) < COMFORT_RETURN_AIR_MIN_C) return NO_OUTPUT;
     return {
       findings: [
         bandedFinding({
@@ -39,6 +42,7 @@ export const temperatureSplitRule: DiagnosisRule = {
           value: split,
           unit: "K",
           band: TEMPERATURE_SPLIT_BAND,
+          bandText: BAND_TEXT,
           profile: TEMPERATURE_SPLIT_PROFILE,
           messages: MESSAGES,
           source: SOURCE,

@@ -4,6 +4,7 @@ import { deviationStrength } from "../deviation-strength.ts";
 import { cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { NO_OUTPUT } from "./no-output.ts";
 
 /** Full weight of the high-suction-with-low-head pattern. */
 const PATTERN_WEIGHT = 1.2;
@@ -20,11 +21,11 @@ export const weakCompressorPairingRule: DiagnosisRule = {
       evaporatorTemperatureDifferenceK === null || condensingOverAmbientK === null ||
       (snapshot.input.returnAirDryBulbC ?? 0) < COMFORT_RETURN_AIR_MIN_C
     ) {
-      return { findings: [], warnings: [] };
+      return NO_OUTPUT;
     }
     const suctionHigh = -Math.min(0, bandDeviation(evaporatorTemperatureDifferenceK, EVAPORATOR_TD_BAND));
     const headLow = -Math.min(0, bandDeviation(condensingOverAmbientK, CONDENSING_OVER_AMBIENT_BAND));
-    if (suctionHigh === 0 || headLow === 0) return { findings: [], warnings: [] };
+    if (suctionHigh === 0 || headLow === 0) return NO_OUTPUT;
     const weight = PATTERN_WEIGHT * deviationStrength(suctionHigh) * deviationStrength(headLow);
     return {
       findings: [
