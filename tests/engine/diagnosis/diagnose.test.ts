@@ -105,6 +105,7 @@ describe("diagnose", () => {
     expect(result.superheatK).toBeNull();
     const warning = result.warnings.find((w) => w.code === "outside-table");
     expect(warning?.field).toBe("suctionPressureKPa");
+    expect(warning?.message).toMatch(/R407C at 6\.3 kPa absolute is below .* outside the table/);
   });
 
   it("computes the wet bulb from humidity when none was measured, and uses it for the piston target", () => {
@@ -148,6 +149,13 @@ describe("diagnose", () => {
       const errors = fieldErrorsOf({ ...r407c, suctionLineTempC: "warm" });
       expect(errors.suctionLineTempC?.[0]).toBe("Suction line temperature must be a number in °C");
       expect(fieldErrorsOf({ ...r407c, meteringDevice: "piston" }).meteringDevice?.[0]).toMatch(/metering device/);
+    });
+
+    it("refuses readings outside their plausible range with the field's own message", () => {
+      expect(fieldErrorsOf({ ...r407c, returnAirDryBulbC: 25, returnAirRelativeHumidity: 120 }).returnAirRelativeHumidity?.[0]).toBe("Return air relative humidity cannot exceed 100 %");
+      expect(fieldErrorsOf({ ...r407c, suctionLineTempC: 250 }).suctionLineTempC?.[0]).toMatch(/not a pipe reading/);
+      expect(fieldErrorsOf({ ...r407c, compressorRla: 0 }).compressorRla?.[0]).toMatch(/above 0 A/);
+      expect(fieldErrorsOf({ ...r407c, atmosphericPressureKPa: 30 }).atmosphericPressureKPa?.[0]).toMatch(/altitude/);
     });
 
     it("refuses an unknown refrigerant on the refrigerant field", () => {
