@@ -1,5 +1,5 @@
-import { HardHat, Home, Mail, SlidersHorizontal, Table2, Users, type LucideIcon } from "lucide-react";
-import type { Role } from "@shared/schemas/auth.ts";
+import { ClipboardCheck, ClipboardList, HardHat, Home, Mail, SlidersHorizontal, Table2, Users, Wrench, type LucideIcon } from "lucide-react";
+import { PERMISSIONS, type Role } from "@shared/schemas/auth.ts";
 import { paths } from "./paths.ts";
 
 export interface NavItem {
@@ -17,6 +17,10 @@ export interface NavItem {
 /** The app's sections, in the order a technician reaches for them. */
 export const navigation: NavItem[] = [
   { label: "Today", href: paths.home.getHref(), icon: Home },
+  { label: "Jobs", href: paths.jobs.getHref(), icon: ClipboardList },
+  // The review queue: the jobs list narrowed to visits waiting for a senior's sign-off.
+  { label: "Review", href: paths.jobs.getHref("awaiting-review"), icon: ClipboardCheck, roles: PERMISSIONS.signOff },
+  { label: "Equipment", href: paths.equipment.getHref(), icon: Wrench, matchPrefix: true },
   { label: "P–T tables", href: paths.tables.getHref(), icon: Table2, matchPrefix: true },
   { label: "Safety", href: paths.safety.getHref(), icon: HardHat },
   { label: "Members", href: paths.members.getHref(), icon: Users },

@@ -20,6 +20,22 @@ export const paths = {
   resetPassword: { path: "/reset-password", getHref: (token: string) => `/reset-password?token=${encodeURIComponent(token)}` },
   acceptInvitation: { path: "/accept-invitation", getHref: (token: string) => `/accept-invitation?token=${encodeURIComponent(token)}` },
 
+  jobs: {
+    path: "/jobs",
+    /** `status` narrows the list, e.g. the review queue is /jobs?status=awaiting-review. */
+    getHref: (status?: string) => (status ? `/jobs?status=${encodeURIComponent(status)}` : "/jobs"),
+  },
+  equipment: {
+    path: "/equipment",
+    getHref: () => "/equipment",
+    new: { path: "/equipment/new", getHref: () => "/equipment/new" },
+    detail: { path: "/equipment/:equipmentId", getHref: (id: string) => `/equipment/${encodeURIComponent(id)}` },
+  },
+  visits: {
+    detail: { path: "/visits/:visitId", getHref: (id: string) => `/visits/${encodeURIComponent(id)}` },
+    report: { path: "/visits/:visitId/report", getHref: (id: string) => `/visits/${encodeURIComponent(id)}/report` },
+  },
+
   members: { path: "/members", getHref: () => "/members" },
   profile: { path: "/profile", getHref: () => "/profile" },
   outbox: { path: "/outbox", getHref: () => "/outbox" },

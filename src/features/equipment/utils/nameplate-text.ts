@@ -1,0 +1,51 @@
+import type { CircuitNameplate, Equipment } from "@shared/schemas/equipment.ts";
+import type { MeteringDevice } from "@shared/schemas/diagnosis.ts";
+
+/** Metering devices as the trade writes them. */
+export const METERING_DEVICE_LABELS: Record<MeteringDevice, string> = {
+  txv: "TXV",
+  eev: "EEV",
+  "fixed-orifice": "Fixed orifice",
+  capillary: "Capillary",
+};
+
+/** Sum of the factory charges of all circuits, kg. */
+export function totalFactoryChargeKg(circuits: readonly Pick<CircuitNameplate, "factoryChargeKg">[]): number {
+  return circuits.reduce((sum, circuit) => sum + circuit.factoryChargeKg, 0);
+}
+
+/** "2 × TXV" when every circuit has the same device, else "C1 TXV · C2 EEV". */
+export function meteringSummary(circuits: readonly Pick<CircuitNameplate, "number" | "meteringDevice">[]): string {
+  if (circuits.length === 0) return "—";
+  const devices = new Set(circuits.map((circuit) => circuit.meteringDevice));
+  if (devices.size === 1) return `${circuits.length} × ${METERING_DEVICE_LABELS[circuits[0].meteringDevice]}`;
+  return circuits.map((circuit) => `C${circuit.number} ${METERING_DEVICE_LABELS[circuit.meteringDevice]}`).join(" · ");
+}
+
+/** Every word a search box should find the unit by. */
+export function equipmentSearchText(unit: Equipment): string {
+  return [
+    unit.name,
+    unit.kind,
+    unit.siteName,
+    unit.customerName,
+    unit.refrigerant,
+    unit.location,
+    unit.maker,
+    unit.model,
+    unit.serial,
+  ]
+    .filter(Boolean)
+    .join(" ")
+    .toLowerCase();
+}
+
+/** Matches "r32", "32", "R-32" alike, and every word of the query anywhere in the text. */
+export function matchesSearch(searchText: string, query: string): boolean {
+  const words = query.toLowerCase().split(/\s+/).filter(Boolean);
+  const compact = searchText.replace(/[\s\-–]/g, "");
+  return words.every((word) => {
+    const bare = word.replace(/[-–]/g, "");
+    return searchText.includes(word) || compact.includes(bare) || compact.includes(bare.replace(/^r(?=\d)/, ""));
+  });
+}

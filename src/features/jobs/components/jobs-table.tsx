@@ -1,0 +1,252 @@
+import {
+  createColumnHelper,
+  createFilteredRowModel,
+  createSortedRowModel,
+  globalFilteringFeature,
+  columnFilteringFeature,
+  rowSortingFeature,
+  sortFn_alphanumeric,
+  sortFn_basic,
+  sortFn_datetime,
+  tableFeatures,
+  useTable,
+  type Column,
+  type SortingState,
+} from "@tanstack/react-table";
+import { ArrowDown, ArrowUp, ArrowUpDown, Search } from "lucide-react";
+import { useDeferredValue, useId, useMemo, useState } from "react";
+import { Link } from "react-router-dom";
+import type { VisitSummary } from "@shared/schemas/visits.ts";
+import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
+import { paths } from "@/config/paths.ts";
+import { formatVisitDate } from "../utils/format-visit-date.ts";
+
+interface JobRow extends VisitSummary {
+  startedAtMs: number;
+  crew: string;
+  searchText: string;
+}
+
+const features = tableFeatures({
+  rowSortingFeature,
+  columnFilteringFeature,
+  globalFilteringFeature,
+  sortedRowModel: createSortedRowModel(),
+  filteredRowModel: createFilteredRowModel(),
+  sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic, datetime: sortFn_datetime },
+});
+const column = createColumnHelper<typeof features, JobRow>();
+
+const columns = column.columns([
+  column.accessor("startedAtMs", {
+    header: "Started",
+    sortFn: "basic",
+    sortDescFirst: true,
+    cell: (info) => (
+      <Link
+        to={paths.visits.detail.getHref(info.row.original.id)}
+        className="num font-semibold text-accent underline underline-offset-4"
+      >
+        {formatVisitDate(info.row.original.startedAt)}
+      </Link>
+    ),
+  }),
+  column.accessor("equipmentName", {
+    header: "Unit",
+    sortFn: "alphanumeric",
+    cell: (info) => (
+      <span className="flex flex-col">
+        <Link
+          to={paths.equipment.detail.getHref(info.row.original.equipmentId)}
+          className="font-medium underline underline-offset-4"
+        >
+          {info.getValue()}
+        </Link>
+        <span className="text-sm text-muted">
+          {info.row.original.siteName} · <span className="num">{info.row.original.refrigerant}</span>
+        </span>
+      </span>
+    ),
+  }),
+  column.accessor("reason", {
+    header: "Reason",
+    sortFn: "alphanumeric",
+    cell: (info) => <span className="line-clamp-2">{info.getValue()}</span>,
+  }),
+  column.accessor("status", {
+    header: "Status",
+    sortFn: "alphanumeric",
+    cell: (info) => <VisitStatusBadge status={info.getValue()} />,
+  }),
+  column.accessor("readingCount", {
+    header: "Readings",
+    sortFn: "basic",
+    cell: (info) => <span className="num">{info.getValue()}</span>,
+  }),
+  column.accessor("crew", {
+    header: "Crew",
+    sortFn: "alphanumeric",
+    cell: (info) => info.getValue() || <span className="text-muted">—</span>,
+  }),
+]);
+
+function SortIcon({ direction }: { direction: false | "asc" | "desc" }) {
+  if (direction === "asc") return <ArrowUp aria-hidden className="size-4" />;
+  if (direction === "desc") return <ArrowDown aria-hidden className="size-4" />;
+  return <ArrowUpDown aria-hidden className="size-4 text-muted" />;
+}
+
+function SortableHeader({ column: target, label }: { column: Column<typeof features, JobRow>; label: string }) {
+  const direction = target.getIsSorted();
+  return (
+    <button
+      type="button"
+      onClick={target.getToggleSortingHandler()}
+      className="-mx-2 inline-flex min-h-touch items-center gap-1 rounded-card px-2 font-semibold hover:bg-sunken"
+    >
+      {label}
+      <SortIcon direction={direction} />
+      <span className="sr-only">
+        {direction === "asc" ? "(oldest or A first)" : direction === "desc" ? "(newest or Z first)" : "(sort)"}
+      </span>
+    </button>
+  );
+}
+
+/** Visits across all equipment, newest first; cards on phones, a sortable table from tablets up. */
+export function JobsTable({ visits }: { visits: readonly VisitSummary[] }) {
+  const rows = useMemo<JobRow[]>(
+    () =>
+      visits.map((visit) => {
+        const crew = visit.technicians.map((person) => person.name).join(", ");
+        return {
+          ...visit,
+          startedAtMs: Date.parse(visit.startedAt),
+          crew,
+          searchText: [visit.equipmentName, visit.siteName, visit.customerName, visit.refrigerant, visit.reason, crew]
+            .join(" ")
+            .toLowerCase(),
+        };
+      }),
+    [visits],
+  );
+  const [query, setQuery] = useState("");
+  const deferredQuery = useDeferredValue(query);
+  const [sorting, setSorting] = useState<SortingState>([{ id: "startedAtMs", desc: true }]);
+  const searchId = useId();
+  const table = useTable({
+    features,
+    columns,
+    data: rows,
+    getRowId: (row) => row.id,
+    state: { sorting, globalFilter: deferredQuery },
+    onSortingChange: setSorting,
+    globalFilterFn: (row, _columnId, filterValue: string) =>
+      filterValue
+        .toLowerCase()
+        .split(/\s+/)
+        .filter(Boolean)
+        .every((word) => row.original.searchText.includes(word)),
+  });
+  const shown = table.getRowModel().rows;
+
+  return (
+    <div className="space-y-4">
+      <div>
+        <label htmlFor={searchId} className="font-medium">
+          Find a visit
+        </label>
+        <div className="mt-1 flex min-h-14 items-center gap-2 rounded-card border-2 border-rule bg-surface px-3 focus-within:border-ink">
+          <Search aria-hidden className="size-5 text-muted" />
+          <input
+            id={searchId}
+            type="search"
+            value={query}
+            onChange={(event) => setQuery(event.target.value)}
+            placeholder="Unit, site, reason, technician…"
+            className="w-full bg-transparent py-2 text-lg outline-none"
+            autoComplete="off"
+          />
+        </div>
+      </div>
+      <p className="text-sm text-muted" aria-live="polite">
+        {shown.length === rows.length
+          ? `${rows.length} ${rows.length === 1 ? "visit" : "visits"}`
+          : `${shown.length} of ${rows.length} visits`}
+      </p>
+      {shown.length === 0 ? (
+        <p className="rounded-card border-2 border-dashed border-rule p-6 text-center">
+          No visit matches “{deferredQuery}”.
+        </p>
+      ) : (
+        <>
+          <ul className="space-y-3 md:hidden" aria-label="Visits">
+            {shown.map((row) => {
+              const visit = row.original;
+              return (
+                <li key={row.id}>
+                  <Link
+                    to={paths.visits.detail.getHref(visit.id)}
+                    className="block space-y-2 rounded-card border-2 border-rule bg-surface p-4 hover:border-ink"
+                  >
+                    <span className="flex flex-wrap items-center justify-between gap-2">
+                      <span className="font-semibold text-accent underline underline-offset-4">
+                        {visit.equipmentName}
+                      </span>
+                      <VisitStatusBadge status={visit.status} />
+                    </span>
+                    <span className="block">{visit.reason}</span>
+                    <span className="block text-sm text-muted">
+                      <span className="num">{formatVisitDate(visit.startedAt)}</span> · {visit.siteName} ·{" "}
+                      <span className="num">{visit.readingCount}</span>{" "}
+                      {visit.readingCount === 1 ? "reading" : "readings"}
+                      {visit.crew && ` · ${visit.crew}`}
+                    </span>
+                  </Link>
+                </li>
+              );
+            })}
+          </ul>
+          <div className="hidden overflow-x-auto rounded-card border-2 border-rule bg-surface md:block">
+            <table className="w-full text-left">
+              <caption className="sr-only">Visits, newest first; sortable by each column</caption>
+              <thead className="border-b-2 border-rule">
+                {table.getHeaderGroups().map((group) => (
+                  <tr key={group.id}>
+                    {group.headers.map((header) => (
+                      <th
+                        key={header.id}
+                        scope="col"
+                        aria-sort={
+                          header.column.getIsSorted() === "asc"
+                            ? "ascending"
+                            : header.column.getIsSorted() === "desc"
+                              ? "descending"
+                              : "none"
+                        }
+                        className="px-3 py-1"
+                      >
+                        <SortableHeader column={header.column} label={String(header.column.columnDef.header)} />
+                      </th>
+                    ))}
+                  </tr>
+                ))}
+              </thead>
+              <tbody>
+                {shown.map((row) => (
+                  <tr key={row.id} className="border-b border-rule last:border-b-0">
+                    {row.getAllCells().map((cell) => (
+                      <td key={cell.id} className="px-3 py-2 align-top">
+                        <table.FlexRender cell={cell} />
+                      </td>
+                    ))}
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        </>
+      )}
+    </div>
+  );
+}

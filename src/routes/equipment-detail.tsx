@@ -1,0 +1,127 @@
+import { MapPin } from "lucide-react";
+import { Link, useNavigate, useParams } from "react-router-dom";
+import { can } from "@shared/schemas/auth.ts";
+import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { Button } from "@/components/ui/button/button.tsx";
+import { paths } from "@/config/paths.ts";
+import { EquipmentNameplate } from "@/features/equipment/components/equipment-nameplate.tsx";
+import { LastSettledReadings } from "@/features/equipment/components/last-settled-readings.tsx";
+import { RefrigerantHistory } from "@/features/equipment/components/refrigerant-history.tsx";
+import { StartVisitForm } from "@/features/jobs/components/start-visit-form.tsx";
+import { VisitList } from "@/features/jobs/components/visit-list.tsx";
+import { ApiError } from "@/lib/api/api-client.ts";
+import { useMe } from "@/lib/api/auth.ts";
+import { useEquipmentDetail } from "@/lib/api/equipment.ts";
+import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
+
+function Panel({ title, id, children }: { title: string; id: string; children: React.ReactNode }) {
+  return (
+    <section aria-labelledby={id} className="space-y-3">
+      <h2 id={id} className="text-xl font-semibold">
+        {title}
+      </h2>
+      <PanelBoundary>{children}</PanelBoundary>
+    </section>
+  );
+}
+
+export default function EquipmentDetailRoute() {
+  const { equipmentId = "" } = useParams();
+  const navigate = useNavigate();
+  const me = useMe();
+  const detail = useEquipmentDetail(equipmentId);
+  const { units, atmosphericKPa } = useDisplayUnits();
+  const mayWrite = me.data ? can(me.data.role, "writeRecords") : false;
+
+  const breadcrumb = (
+    <nav aria-label="Breadcrumb" className="text-sm">
+      <Link to={paths.equipment.getHref()} className="text-accent underline underline-offset-4">
+        Equipment
+      </Link>
+      {detail.data && <> / {detail.data.equipment.name}</>}
+    </nav>
+  );
+
+  if (detail.isPending) {
+    return (
+      <div className="space-y-4">
+        {breadcrumb}
+        <p role="status" className="text-muted">
+          Loading the unit…
+        </p>
+      </div>
+    );
+  }
+  if (detail.isError) {
+    const missing = detail.error instanceof ApiError && (detail.error.status === 404 || detail.error.status === 400);
+    return (
+      <div className="space-y-4">
+        {breadcrumb}
+        <h1 className="text-2xl font-semibold">{missing ? "Unit not found" : "The unit did not load"}</h1>
+        <p role="alert">
+          {missing ? "No unit of your company lives at this address. It may have been removed." : detail.error.message}
+        </p>
+        {!missing && (
+          <Button variant="secondary" onClick={() => void detail.refetch()}>
+            Try again
+          </Button>
+        )}
+      </div>
+    );
+  }
+
+  const { equipment, visits, lastSettled } = detail.data;
+  return (
+    <div className="space-y-8">
+      {breadcrumb}
+      <header className="space-y-1">
+        <h1 className="text-3xl font-semibold">{equipment.name}</h1>
+        <p className="text-muted">
+          <span className="first-letter:uppercase">{equipment.kind}</span> · {equipment.siteName} ·{" "}
+          {equipment.customerName}
+        </p>
+        {equipment.location && (
+          <p className="flex items-center gap-1 text-muted">
+            <MapPin aria-hidden className="size-4" /> {equipment.location}
+          </p>
+        )}
+      </header>
+
+      {mayWrite && (
+        <section
+          aria-labelledby="start-visit-heading"
+          className="space-y-3 rounded-card border-2 border-accent bg-surface p-4"
+        >
+          <h2 id="start-visit-heading" className="text-xl font-semibold">
+            Start a visit
+          </h2>
+          <StartVisitForm
+            equipmentId={equipment.id}
+            onStarted={(visit) => navigate(paths.visits.detail.getHref(visit.id))}
+          />
+        </section>
+      )}
+
+      <Panel title="Last settled readings" id="settled-heading">
+        <LastSettledReadings lastSettled={lastSettled} units={units} />
+      </Panel>
+      <Panel title="Visits" id="visits-heading">
+        <VisitList visits={visits} />
+      </Panel>
+      <Panel title="Refrigerant history" id="refrigerant-heading">
+        <RefrigerantHistory visits={visits} circuits={equipment.circuits} />
+      </Panel>
+      <section
+        aria-labelledby="nameplate-heading"
+        className="space-y-3 rounded-card border-2 border-rule bg-surface p-4"
+      >
+        <h2 id="nameplate-heading" className="text-xl font-semibold">
+          Nameplate
+        </h2>
+        <PanelBoundary>
+          <EquipmentNameplate equipment={equipment} units={units} atmosphericKPa={atmosphericKPa} />
+        </PanelBoundary>
+      </section>
+    </div>
+  );
+}
