@@ -64,21 +64,18 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
   const refrigerant = input.refrigerant;
   const outsideTable: Exclusion[] = [];
 
-  const saturation = (field: string, pressureKPaAbs: number, point: "bubble" | "dew") =>
-    saturationOrExclusion(refrigerant, field, pressureKPaAbs, point, outsideTable);
-
   const suctionPressureKPaAbs = gaugeToAbsolute(input.suctionPressureKPa, atmosphericPressureKPa);
   const liquidPressureKPaAbs = gaugeToAbsolute(input.liquidPressureKPa, atmosphericPressureKPa);
   const dischargePressureKPaAbs =
     input.dischargePressureKPa === undefined ? null : gaugeToAbsolute(input.dischargePressureKPa, atmosphericPressureKPa);
 
   // Superheat from the dew point, subcooling from the bubble point (TRADE.md §1.1 [S1][S2][S3]).
-  const evaporatingTempC = saturation("suctionPressureKPa", suctionPressureKPaAbs, "dew");
-  const evaporatingBubbleTempC = saturation("suctionPressureKPa", suctionPressureKPaAbs, "bubble");
-  const condensingTempC = saturation("liquidPressureKPa", liquidPressureKPaAbs, "bubble");
-  const condensingDewTempC = saturation("liquidPressureKPa", liquidPressureKPaAbs, "dew");
+  const evaporatingTempC = saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "dew", outsideTable);
+  const evaporatingBubbleTempC = saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "bubble", outsideTable);
+  const condensingTempC = saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "bubble", outsideTable);
+  const condensingDewTempC = saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "dew", outsideTable);
   const dischargeDewTempC =
-    dischargePressureKPaAbs === null ? condensingDewTempC : saturation("dischargePressureKPa", dischargePressureKPaAbs, "dew");
+    dischargePressureKPaAbs === null ? condensingDewTempC : saturationOrExclusion(refrigerant, "dischargePressureKPa", dischargePressureKPaAbs, "dew", outsideTable);
 
   // Superheat: suction line − dew point. A vapour line below the bubble point is impossible.
   let superheatK = difference(input.suctionLineTempC, evaporatingTempC);
