@@ -261,3 +261,19 @@ export async function findPhoto(db: Database, organisationId: string, photoId: s
     .where(and(eq(photos.organisationId, organisationId), eq(photos.id, photoId)));
   return row;
 }
+
+/** Stores an imported series in one transaction: all rows or none. */
+export async function insertReadingSeries(
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  circuit: number,
+  rows: { takenAt: Date; input: DiagnosisInput; result: DiagnosisResult }[],
+  recordedBy: string,
+): Promise<number> {
+  if (rows.length === 0) return 0;
+  await db.transaction(async (tx) => {
+    await tx.insert(readings).values(rows.map((row) => ({ ...row, organisationId, visitId, circuit, recordedBy, note: "imported from CSV" })));
+  });
+  return rows.length;
+}

@@ -26,12 +26,14 @@ import {
   insertComment,
   insertPhoto,
   insertReading,
+  insertReadingSeries,
   joinCrew,
   listVisits,
   updateVisitStatus,
 } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
+import { ColumnMappingSchema, previewReadingsCsv } from "../import/readings-csv.ts";
 import { MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
 import { visitReportMail } from "../report/visit-report-mail.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
@@ -58,6 +60,26 @@ const TRANSITIONS: Record<"submit" | "sign-off" | "send-back", { from: VisitStat
 export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, "mailer">): Router {
   const router = Router();
   const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PHOTO_BYTES, files: 1, fields: 10 } });
+  /** A logged series of a few thousand rows is well under 2 MB of CSV. */
+  const csvUpload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 2 * 1024 * 1024, files: 1, fields: 10 } });
+
+  const ImportFieldsSchema = z.object({
+    circuit: z.coerce.number().int().min(1),
+    dayStart: z.iso.datetime({ offset: true, error: "dayStart must be an ISO date-time" }),
+    mode: z.enum(["preview", "all", "valid-only"]).default("preview"),
+    mapping: z
+      .string()
+      .optional()
+      .transform((text, context) => {
+        if (!text) return undefined;
+        try {
+          return ColumnMappingSchema.parse(JSON.parse(text));
+        } catch {
+          context.addIssue({ code: "custom", message: "The column mapping is not valid" });
+          return z.NEVER;
+        }
+      }),
+  });
 
   async function loadVisit(organisationId: string, rawId: unknown) {
     const visit = await findVisit(db, organisationId, parseId(rawId, "Visit"));
@@ -117,6 +139,37 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     });
     await joinCrew(db, visit.id, user.id);
     res.status(201).json({ reading });
+  });
+
+  // CSV import: preview first (nothing stored), then store all rows only if every row is
+  // valid, or store the valid rows when the user explicitly accepts skipping the others.
+  router.post("/:id/readings/import", requireRole(...PERMISSIONS.writeRecords), csvUpload.single("file"), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritable(visit.status);
+    if (!req.file) throw new HttpError(400, "Some fields need attention", { file: "Choose a CSV file" });
+    const fields = ImportFieldsSchema.parse(req.body ?? {});
+    const unit = await getEquipment(db, organisationId, visit.equipmentId);
+    const nameplate = unit?.circuits.find((candidate) => candidate.number === fields.circuit);
+    if (!unit || !nameplate) throw new HttpError(400, "Some fields need attention", { circuit: "That circuit is not on this unit" });
+    const preview = previewReadingsCsv(req.file.buffer.toString("utf8"), fields.mapping, {
+      base: {
+        refrigerant: unit.refrigerant,
+        meteringDevice: nameplate.meteringDevice,
+        targetSuperheatK: nameplate.targetSuperheatK ?? undefined,
+        targetSubcoolingK: nameplate.targetSubcoolingK ?? undefined,
+        compressorRla: unit.compressorRlaA ?? undefined,
+      },
+      dayStart: new Date(fields.dayStart),
+    });
+    const summary = { headers: preview.headers, mapping: preview.mapping, rowCount: preview.rowCount, validCount: preview.valid.length, problems: preview.problems };
+    if (fields.mode === "preview") return void res.json({ ...summary, stored: 0 });
+    if (fields.mode === "all" && preview.problems.length > 0) {
+      return void res.status(422).json({ message: `${preview.problems.length} row(s) have problems: nothing was stored`, ...summary, stored: 0 });
+    }
+    const stored = await insertReadingSeries(db, organisationId, visit.id, fields.circuit, preview.valid, user.id);
+    await joinCrew(db, visit.id, user.id);
+    res.status(201).json({ ...summary, stored });
   });
 
   router.post("/:id/adjustments", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {

@@ -15,6 +15,7 @@ import {
   type VisitStatus,
   type VisitSummary,
 } from "@shared/schemas/visits.ts";
+import { ImportSummarySchema, type ImportSummary } from "@shared/schemas/readings-import.ts";
 import { ApiError, apiRequest } from "./api-client.ts";
 
 const VisitListSchema = z.object({ visits: z.array(VisitSummarySchema) });
@@ -65,6 +66,27 @@ export async function uploadPhoto({ visitId, file, kind, caption }: { visitId: s
   return PhotoSchema.parse(payload.photo);
 }
 
+/** Previews or stores a CSV series; a 422 (problems, nothing stored) still returns its summary. */
+export async function importReadings({ visitId, file, circuit, mode, mapping }: { visitId: string; file: File; circuit: number; mode: "preview" | "all" | "valid-only"; mapping?: Record<string, string> }): Promise<ImportSummary> {
+  const form = new FormData();
+  form.append("circuit", String(circuit));
+  const day = new Date();
+  day.setHours(0, 0, 0, 0);
+  // Local midnight with its offset, so a logger's "10:05" lands on the right instant.
+  const offset = -day.getTimezoneOffset();
+  const sign = offset >= 0 ? "+" : "-";
+  const pad = (value: number) => String(Math.floor(Math.abs(value))).padStart(2, "0");
+  const localMidnight = `${day.getFullYear()}-${pad(day.getMonth() + 1)}-${pad(day.getDate())}T00:00:00${sign}${pad(offset / 60)}:${pad(offset % 60)}`;
+  form.append("dayStart", localMidnight);
+  form.append("mode", mode);
+  if (mapping) form.append("mapping", JSON.stringify(mapping));
+  form.append("file", file);
+  const response = await fetch(`/api/visits/${visitId}/readings/import`, { method: "POST", body: form, credentials: "same-origin" });
+  const payload = (await response.json().catch(() => ({}))) as { message?: string; fields?: Record<string, string> };
+  if (!response.ok && response.status !== 422) throw new ApiError(response.status, payload.message ?? `Import failed (${response.status})`, payload.fields ?? {});
+  return ImportSummarySchema.parse(payload);
+}
+
 export function sendReport({ visitId, to }: { visitId: string; to: string }): Promise<{ sentTo: string }> {
   return apiRequest(`/visits/${visitId}/report/send`, { method: "POST", body: { to }, schema: z.object({ sentTo: z.string() }) });
 }
@@ -100,6 +122,7 @@ export const useCreateAdjustment = () => useVisitMutation(createAdjustment);
 export const useCreateComment = () => useVisitMutation(createComment);
 export const useReviewVisit = () => useVisitMutation(reviewVisit);
 export const useUploadPhoto = () => useVisitMutation(uploadPhoto);
+export const useImportReadings = () => useVisitMutation(importReadings);
 export const useSendReport = () => useMutation({ mutationFn: sendReport, meta: { silentErrors: true } });
 
 export function useCreateVisit() {

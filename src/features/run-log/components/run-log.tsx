@@ -14,6 +14,7 @@ import { circuitSeries } from "../utils/circuit-series.ts";
 import { draftFromInput, emptyDraft, parseDraft, REQUIRED_FIELDS, type DraftField, type ReadingDraft } from "../utils/reading-draft.ts";
 import { runMinutesAt, runTimeBase } from "../utils/run-time-base.ts";
 import { AdjustmentForm } from "./adjustment-form.tsx";
+import { CsvImport } from "./csv-import.tsx";
 import { FindingPanel } from "./finding-panel.tsx";
 import { ReadingCards } from "./reading-cards.tsx";
 import { SettledIndicator } from "./settled-indicator.tsx";
@@ -173,6 +174,12 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphericKPa
           </h2>
           <AdjustmentForm visitId={visit.id} circuit={circuit} />
         </section>
+      )}
+      {canWrite && (
+        <details className="rounded-card border-2 border-rule bg-surface p-4">
+          <summary className="min-h-touch cursor-pointer py-2 text-lg font-semibold">Import a logged series (CSV)</summary>
+          <CsvImport visitId={visit.id} circuit={circuit} />
+        </details>
       )}
     </div>
   );
