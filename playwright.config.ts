@@ -1,7 +1,8 @@
 import { defineConfig } from "@playwright/test";
 import { CHROMIUM_PATH } from "./scripts/chromium-path.mjs";
 
-const PORT = 3100;
+// PLAYWRIGHT_PORT lets two checkouts run their browser tests side by side.
+const PORT = Number(process.env.PLAYWRIGHT_PORT ?? 3100);
 
 // Browser tests drive Debian's Chromium (Playwright cannot download its own browsers
 // here) against the production build served by the real server on an in-memory database.
