@@ -4,6 +4,8 @@
  * "common practice" / "memory" where no source was found.
  */
 export const TRADE_SOURCES = {
+  S1: "Arkema Forane technical centre, Definitions (bubble point, dew point, glide)",
+  S2: "HVAC School, What Is Temperature Glide?",
   S9: "Daikin DZ13SC installation manual p. 9",
   S10: "California Energy Commission, 2008 Reference Residential Appendices, RA3.2 refrigerant charge verification",
   S11: "Fujitsu FO20R series installation manual §5.8",

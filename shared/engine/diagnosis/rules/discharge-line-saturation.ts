@@ -1,7 +1,8 @@
+import { cite } from "../sources.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = "discharge gas is superheated vapour, so its line cannot be colder than the dew point at discharge pressure (TRADE.md §1.2)";
+const SOURCE = `discharge gas is superheated vapour, so its line cannot be colder than the dew point at discharge pressure (${cite(["S1", "S13"])})`;
 
 /** Discharge line colder than the condensing dew point: impossible, the reading is not used. */
 export const dischargeLineSaturationRule: DiagnosisRule = {

@@ -1,9 +1,9 @@
-import { cite } from "../sources.ts";
+import { COMMON_PRACTICE, cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = "TRADE.md §1.2: negative subcooling means vapour or flash gas at the measuring point, or the wrong pipe";
+const SOURCE = `negative subcooling means vapour or flash gas at the measuring point, or the wrong pipe (${cite(["S1", "S2"])}; ${COMMON_PRACTICE})`;
 
 /** Liquid line warmer than its bubble point: flash gas, or vapour (wrong pipe) beyond the dew point. */
 export const liquidLineSaturationRule: DiagnosisRule = {

@@ -2,7 +2,7 @@ import { cite } from "../sources.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = `${cite(["S13"])}; TRADE.md §1.2 (subcooling exists only downstream of the condensing section)`;
+const SOURCE = `${cite(["S13"])}; subcooling exists only downstream of the condensing section (${cite(["S1"])})`;
 
 /** Refuses subcooling when the "liquid" temperature was taken on the discharge line. */
 export const liquidTemperatureLocationRule: DiagnosisRule = {

@@ -4,7 +4,7 @@ import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = `${cite(["S17"])}; vapour cannot be colder than its saturation temperature (TRADE.md §1.1); sensor allowance ${SENSOR_TOLERANCE_K} K ${cite(["S10"])}`;
+const SOURCE = `${cite(["S17"])}; vapour cannot be colder than its saturation temperature (${cite(["S1"])}); sensor allowance ${SENSOR_TOLERANCE_K} K ${cite(["S10"])}`;
 
 /**
  * Suction line colder than saturation (impossible) or so close to it that liquid may reach
