@@ -6,6 +6,7 @@
  * Every organisation-owned row carries organisation_id: queries are always scoped by it.
  */
 import { sql } from "drizzle-orm";
+import type { Role } from "@shared/schemas/auth.ts";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { VisitStatus } from "@shared/schemas/visits.ts";
@@ -36,8 +37,7 @@ export const organisations = pgTable("organisations", {
   ...timestamps,
 });
 
-export const ROLES = ["owner", "senior", "technician", "apprentice"] as const;
-export type Role = (typeof ROLES)[number];
+export { ROLES, type Role } from "@shared/schemas/auth.ts";
 
 export const users = pgTable(
   "users",

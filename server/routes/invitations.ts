@@ -17,7 +17,7 @@ import { acceptInvitation, createInvitation, findUsableInvitation, listPendingIn
 import { getProfile } from "../db/accounts.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { invitationMail } from "../mail/messages.ts";
-import { parseId } from "./members.ts";
+import { parseId } from "../http/parse-id.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
 
 const INVALID_LINK = "This invitation link is not valid any more. Ask the person who invited you for a new one.";

@@ -1,18 +1,11 @@
 import { Router } from "express";
-import { z } from "zod";
 import { PERMISSIONS } from "@shared/schemas/auth.ts";
 import { UpdateMemberSchema, type MemberResponse, type MembersResponse } from "@shared/schemas/members.ts";
 import { getAuth, requireRole, requireUser } from "../auth/session.ts";
 import { changeMemberRole, LastOwnerError, listMembers, removeMember } from "../db/members.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
+import { parseId } from "../http/parse-id.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
-
-/** A malformed id is simply a record that does not exist (and never reaches Postgres's uuid cast). */
-export function parseId(value: unknown, what: string): string {
-  const parsed = z.uuid().safeParse(value);
-  if (!parsed.success) throw notFound(what);
-  return parsed.data;
-}
 
 const lastOwner = (error: unknown) => {
   if (error instanceof LastOwnerError) {
