@@ -8,6 +8,7 @@
  * otherwise, temperature differences K, relative humidity in percent (0–100), currents A.
  */
 import { z } from "zod";
+import { STANDARD_ATMOSPHERE_KPA } from "../engine/properties/property-tolerances.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Enumerations
@@ -45,8 +46,8 @@ export type EvidenceState = Exclude<ChargeState, "insufficient-data">;
 // Limits (named so that forms, tests and the engine share them)
 // ---------------------------------------------------------------------------------------------
 
-/** Standard atmosphere at sea level, kPa absolute (PRODUCT.md "Units"). */
-export const STANDARD_ATMOSPHERE_KPA = 101.325;
+/** Standard atmosphere at sea level, kPa absolute (ISO 2533): one constant for the whole engine. */
+export { STANDARD_ATMOSPHERE_KPA };
 /** Lowest accepted site atmospheric pressure, kPa abs: about 5 500 m altitude. */
 export const MIN_ATMOSPHERIC_PRESSURE_KPA = 50;
 /** Highest accepted site atmospheric pressure, kPa abs: above any weather at sea level. */

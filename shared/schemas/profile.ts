@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { STANDARD_ATMOSPHERE_KPA } from "../engine/properties/property-tolerances.ts";
 import { AuthUserSchema, PersonNameSchema } from "./auth.ts";
 
 /**
@@ -12,8 +13,8 @@ export const PressureUnitSchema = z.enum(PRESSURE_UNITS);
 export type TemperatureUnit = z.infer<typeof TemperatureUnitSchema>;
 export type PressureUnit = z.infer<typeof PressureUnitSchema>;
 
-/** Standard atmosphere at sea level (ISO 2533 / ICAO: 101.325 kPa). */
-export const STANDARD_ATMOSPHERE_KPA = 101.325;
+/** Standard atmosphere at sea level (ISO 2533 / ICAO: 101.325 kPa), the engine's constant. */
+export { STANDARD_ATMOSPHERE_KPA };
 /**
  * Accepted default atmospheric pressures, kPa absolute. 50 kPa is roughly the ISO 2533
  * standard atmosphere at 5 500 m, above any serviced building; 110 kPa is above the
