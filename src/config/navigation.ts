@@ -28,6 +28,24 @@ export const navigation: NavItem[] = [
   { label: "Outbox", href: paths.outbox.getHref(), icon: Mail, roles: ["owner"], requires: "outbox" },
 ];
 
+/**
+ * Whether an item is the current section. Items may share a path and differ by query (Jobs
+ * and the Review queue, /jobs?status=awaiting-review): the one whose query matches wins.
+ */
+export function isNavItemActive(item: NavItem, location: { pathname: string; search: string }, items: readonly NavItem[]): boolean {
+  const matches = (candidate: NavItem) => {
+    const url = new URL(candidate.href, "http://satura.invalid");
+    const onPath = candidate.matchPrefix ? location.pathname === url.pathname || location.pathname.startsWith(`${url.pathname}/`) : location.pathname === url.pathname;
+    if (!onPath) return false;
+    const current = new URLSearchParams(location.search);
+    return [...url.searchParams].every(([key, value]) => current.get(key) === value);
+  };
+  if (!matches(item)) return false;
+  const queryless = !item.href.includes("?");
+  // A plain item gives way to a sibling on the same path whose query matches more closely.
+  return !(queryless && items.some((other) => other !== item && other.href.includes("?") && matches(other)));
+}
+
 /** The items one user sees. */
 export function navigationFor(role: Role, features: { outbox: boolean }): NavItem[] {
   return navigation.filter((item) => (!item.roles || item.roles.includes(role)) && (item.requires !== "outbox" || features.outbox));

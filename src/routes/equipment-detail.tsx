@@ -77,7 +77,7 @@ export default function EquipmentDetailRoute() {
       <header className="space-y-1">
         <h1 className="text-3xl font-semibold">{equipment.name}</h1>
         <p className="text-muted">
-          <span className="first-letter:uppercase">{equipment.kind}</span> · {equipment.siteName} ·{" "}
+          {equipment.kind.charAt(0).toUpperCase() + equipment.kind.slice(1)} · {equipment.siteName} ·{" "}
           {equipment.customerName}
         </p>
         {equipment.location && (

@@ -1,5 +1,5 @@
-import { Navigate, NavLink, Outlet, useLocation, useNavigation } from "react-router-dom";
-import { navigationFor } from "@/config/navigation.ts";
+import { Link, Navigate, Outlet, useLocation, useNavigation } from "react-router-dom";
+import { isNavItemActive, navigationFor } from "@/config/navigation.ts";
 import { paths } from "@/config/paths.ts";
 import { UserMenu } from "@/features/auth/components/user-menu.tsx";
 import { SunlightToggle } from "@/features/theme/components/sunlight-toggle.tsx";
@@ -44,20 +44,18 @@ export function AppShell() {
         </div>
         <nav aria-label="Main" className="flex flex-col gap-1 px-2">
           {navigation.map((item) => (
-            <NavLink
+            <Link
               key={item.href}
               to={item.href}
-              end={!item.matchPrefix}
-              className={({ isActive }) =>
-                cn(
-                  "flex min-h-touch items-center gap-3 rounded-card px-3 font-medium",
-                  isActive ? "bg-ink text-paper" : "text-ink hover:bg-sunken",
-                )
-              }
+              aria-current={isNavItemActive(item, location, navigation) ? "page" : undefined}
+              className={cn(
+                "flex min-h-touch items-center gap-3 rounded-card px-3 font-medium",
+                isNavItemActive(item, location, navigation) ? "bg-ink text-paper" : "text-ink hover:bg-sunken",
+              )}
             >
               <item.icon aria-hidden className="size-5" />
               {item.label}
-            </NavLink>
+            </Link>
           ))}
         </nav>
         <div className="mt-auto space-y-3 p-3">
@@ -93,20 +91,18 @@ export function AppShell() {
         className="no-print fixed inset-x-0 bottom-0 z-40 flex border-t-2 border-rule bg-surface pb-[env(safe-area-inset-bottom)] md:hidden"
       >
         {navigation.map((item) => (
-          <NavLink
+          <Link
             key={item.href}
             to={item.href}
-            end={!item.matchPrefix}
-            className={({ isActive }) =>
-              cn(
-                "flex min-h-16 flex-1 flex-col items-center justify-center gap-0.5 text-xs font-medium",
-                isActive ? "bg-ink text-paper" : "text-ink",
-              )
-            }
+            aria-current={isNavItemActive(item, location, navigation) ? "page" : undefined}
+            className={cn(
+              "flex min-h-16 flex-1 flex-col items-center justify-center gap-0.5 text-xs font-medium",
+              isNavItemActive(item, location, navigation) ? "bg-ink text-paper" : "text-ink",
+            )}
           >
             <item.icon aria-hidden className="size-6" />
             {item.label}
-          </NavLink>
+          </Link>
         ))}
       </nav>
     </div>

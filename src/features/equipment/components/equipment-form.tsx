@@ -19,7 +19,7 @@ import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.t
 import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
 import { useCreateEquipment, useSites } from "@/lib/api/equipment.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
-import { METERING_DEVICE_LABELS } from "../utils/nameplate-text.ts";
+import { capitalise, METERING_DEVICE_LABELS } from "../utils/nameplate-text.ts";
 import { NewSitePanel } from "./new-site-panel.tsx";
 import { NumberField, typedNumber } from "./number-field.tsx";
 
@@ -180,7 +180,7 @@ export function EquipmentForm({ onCreated }: { onCreated: (equipment: Equipment)
             <option value="">Choose the kind…</option>
             {EQUIPMENT_KINDS.map((kind) => (
               <option key={kind} value={kind}>
-                {kind.charAt(0).toUpperCase() + kind.slice(1)}
+                {capitalise(kind)}
               </option>
             ))}
           </SelectField>

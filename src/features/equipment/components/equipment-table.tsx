@@ -22,7 +22,13 @@ import { EQUIPMENT_KINDS, type Equipment } from "@shared/schemas/equipment.ts";
 import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
 import { paths } from "@/config/paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
-import { equipmentSearchText, matchesSearch, meteringSummary, totalFactoryChargeKg } from "../utils/nameplate-text.ts";
+import {
+  capitalise,
+  equipmentSearchText,
+  matchesSearch,
+  meteringSummary,
+  totalFactoryChargeKg,
+} from "../utils/nameplate-text.ts";
 
 /** One table row: the unit plus what the columns sort and search by. */
 export interface EquipmentRow {
@@ -84,7 +90,9 @@ const columns = column.columns([
   column.accessor("kind", {
     header: "Kind",
     sortFn: "text",
-    cell: (info) => <span className="first-letter:uppercase">{info.getValue()}</span>,
+    // The kind filter is a choice from a list, so it matches the whole word exactly.
+    filterFn: (row, columnId, value: string) => row.getValue(columnId) === value,
+    cell: (info) => <span>{capitalise(info.getValue())}</span>,
   }),
   column.accessor("place", {
     header: "Site · customer",
@@ -107,14 +115,9 @@ const columns = column.columns([
     ),
   }),
   column.accessor("circuitCount", {
-    header: "Circuits",
+    header: "Circuits · metering",
     sortFn: "basic",
-    cell: (info) => (
-      <span className="flex flex-col">
-        <span className="num">{info.getValue()}</span>
-        <span className="text-sm text-muted">{info.row.original.metering}</span>
-      </span>
-    ),
+    cell: (info) => <span className="num">{info.row.original.metering}</span>,
   }),
   column.accessor("totalChargeKg", {
     header: "Factory charge",
@@ -142,7 +145,7 @@ function SortableHeader({ column: target, label }: { column: Column<typeof featu
     <button
       type="button"
       onClick={target.getToggleSortingHandler()}
-      className="-mx-2 inline-flex min-h-touch items-center gap-1 rounded-card px-2 font-semibold hover:bg-sunken"
+      className="-mx-2 inline-flex min-h-touch items-center gap-1 whitespace-nowrap rounded-card px-2 font-semibold hover:bg-sunken"
     >
       {label}
       <SortIcon direction={direction} />
@@ -220,7 +223,7 @@ export function EquipmentTable({ equipment }: { equipment: readonly Equipment[] 
             <option value="">All kinds</option>
             {kindsPresent.map((candidate) => (
               <option key={candidate} value={candidate}>
-                {candidate.charAt(0).toUpperCase() + candidate.slice(1)}
+                {capitalise(candidate)}
               </option>
             ))}
           </select>
@@ -282,8 +285,7 @@ export function EquipmentTable({ equipment }: { equipment: readonly Equipment[] 
                         {unit.name}
                       </span>
                       <span className="block text-sm text-muted">
-                        <span className="first-letter:uppercase">{unit.kind}</span> · {unit.siteName} ·{" "}
-                        {unit.customerName}
+                        {capitalise(unit.kind)} · {unit.siteName} · {unit.customerName}
                       </span>
                       <span className="flex flex-wrap items-center gap-2">
                         <span className="num font-semibold">{unit.refrigerant}</span>

@@ -106,23 +106,32 @@ export function RefrigerantHistory({
               );
             })}
           </ul>
-          <p className="text-sm">
-            Net change:{" "}
-            {circuits.map((circuit, index) => (
-              <span key={circuit.number} className="num">
-                {index > 0 && " · "}circuit {circuit.number} {net(circuit.number) >= 0 ? "+" : "−"}
-                {formatNumber(Math.abs(net(circuit.number)), 2)} kg of {formatNumber(circuit.factoryChargeKg, 2)} kg
-                factory charge
-              </span>
-            ))}
-            {movements.some((movement) => movement.circuit === null) && (
-              <span className="num">
-                {" "}
-                · not tied to a circuit {net(null) >= 0 ? "+" : "−"}
-                {formatNumber(Math.abs(net(null)), 2)} kg
-              </span>
-            )}
-          </p>
+          <dl className="flex flex-wrap gap-x-6 gap-y-1 text-sm">
+            {[
+              ...circuits.map((circuit) => circuit.number),
+              ...(movements.some((movement) => movement.circuit === null) ? [null] : []),
+            ].map((number) => {
+              const change = net(number);
+              const nameplate = circuits.find((circuit) => circuit.number === number);
+              return (
+                <div key={number ?? "none"} className="flex gap-1">
+                  <dt>{number === null ? "Net change, no circuit given:" : `Net change, circuit ${number}:`}</dt>
+                  <dd className="font-semibold">
+                    <span className="num">
+                      {change >= 0 ? "+" : "−"}
+                      {formatNumber(Math.abs(change), 2)} kg
+                    </span>
+                    {nameplate && (
+                      <span className="font-normal text-muted">
+                        {" "}
+                        (factory charge <span className="num">{formatNumber(nameplate.factoryChargeKg, 2)} kg</span>)
+                      </span>
+                    )}
+                  </dd>
+                </div>
+              );
+            })}
+          </dl>
         </>
       )}
       <p className="text-sm text-muted">

@@ -49,3 +49,8 @@ export function matchesSearch(searchText: string, query: string): boolean {
     return searchText.includes(word) || compact.includes(bare) || compact.includes(bare.replace(/^r(?=\d)/, ""));
   });
 }
+
+/** "packaged rooftop" → "Packaged rooftop": kinds are stored lower-case, shown as a label. */
+export function capitalise(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}

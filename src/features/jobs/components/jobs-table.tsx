@@ -102,7 +102,7 @@ function SortableHeader({ column: target, label }: { column: Column<typeof featu
     <button
       type="button"
       onClick={target.getToggleSortingHandler()}
-      className="-mx-2 inline-flex min-h-touch items-center gap-1 rounded-card px-2 font-semibold hover:bg-sunken"
+      className="-mx-2 inline-flex min-h-touch items-center gap-1 whitespace-nowrap rounded-card px-2 font-semibold hover:bg-sunken"
     >
       {label}
       <SortIcon direction={direction} />
