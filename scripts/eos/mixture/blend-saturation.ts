@@ -22,6 +22,9 @@ import {
   type EnvelopeStart,
 } from "./envelope-point.ts";
 
+/** Residual accepted while walking the envelope to the critical point (ill-conditioned there). */
+const CRITICAL_REGION_TOLERANCE = 1e-9;
+
 /** Continues from the previous one or two converged points to temperature T. */
 function continuedStart(previous: readonly EnvelopePoint[], T: number): EnvelopeStart | null {
   if (previous.length === 0) return null;
@@ -38,15 +41,21 @@ function continuedStart(previous: readonly EnvelopePoint[], T: number): Envelope
  * @param blend blend model
  * @param kind "bubble" or "dew"
  * @param temperatures increasing temperatures in K
+ * @param previous converged points of the same curve just below the first temperature (continuation)
  * @returns the converged points, in order; stops at the first temperature where neither
  *   continuation nor a cold start converges (or the pressure stops rising)
  */
-export function traceSaturationCurve(blend: BlendModel, kind: EnvelopeKind, temperatures: readonly number[]): EnvelopePoint[] {
+export function traceSaturationCurve(
+  blend: BlendModel,
+  kind: EnvelopeKind,
+  temperatures: readonly number[],
+  previous: readonly EnvelopePoint[] = [],
+): EnvelopePoint[] {
   const z = blend.moleFractions;
   const points: EnvelopePoint[] = [];
   for (const T of temperatures) {
     const attempts: Array<() => EnvelopeStart> = [];
-    const continued = continuedStart(points.slice(-2), T);
+    const continued = continuedStart([...previous, ...points].slice(-2), T);
     if (continued) attempts.push(() => continued);
     attempts.push(() => coldStart(blend.model, z, kind, T));
     let solved: EnvelopePoint | null = null;
@@ -59,7 +68,7 @@ export function traceSaturationCurve(blend: BlendModel, kind: EnvelopeKind, temp
       }
     }
     if (!solved) break;
-    const last = points[points.length - 1];
+    const last = points[points.length - 1] ?? previous[previous.length - 1];
     if (last && !(solved.p > last.p)) break;
     points.push(solved);
   }
@@ -98,7 +107,7 @@ export function blendCriticalPoint(blend: BlendModel, lastBubble: EnvelopePoint)
   targets.push(1e-3, 5e-4);
   const solved: EnvelopePoint[] = [];
   for (const target of targets) {
-    point = solveEnvelopePoint(blend.model, z, "bubble", { densityRatio: target }, point);
+    point = solveEnvelopePoint(blend.model, z, "bubble", { densityRatio: target }, point, CRITICAL_REGION_TOLERANCE);
     solved.push(point);
   }
   const [a, b] = solved.slice(-2) as [EnvelopePoint, EnvelopePoint];

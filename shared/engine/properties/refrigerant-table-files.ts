@@ -13,12 +13,23 @@ import table10 from "../../../data/refrigerants/R22.json";
 import table11 from "../../../data/refrigerants/R290.json";
 import table12 from "../../../data/refrigerants/R32.json";
 import table13 from "../../../data/refrigerants/R404A.json";
-import table14 from "../../../data/refrigerants/R407C.json";
-import table15 from "../../../data/refrigerants/R410A.json";
-import table16 from "../../../data/refrigerants/R507A.json";
-import table17 from "../../../data/refrigerants/R600a.json";
-import table18 from "../../../data/refrigerants/R717.json";
-import table19 from "../../../data/refrigerants/R744.json";
+import table14 from "../../../data/refrigerants/R407A.json";
+import table15 from "../../../data/refrigerants/R407C.json";
+import table16 from "../../../data/refrigerants/R407F.json";
+import table17 from "../../../data/refrigerants/R410A.json";
+import table18 from "../../../data/refrigerants/R448A.json";
+import table19 from "../../../data/refrigerants/R449A.json";
+import table20 from "../../../data/refrigerants/R452A.json";
+import table21 from "../../../data/refrigerants/R452B.json";
+import table22 from "../../../data/refrigerants/R454B.json";
+import table23 from "../../../data/refrigerants/R454C.json";
+import table24 from "../../../data/refrigerants/R455A.json";
+import table25 from "../../../data/refrigerants/R466A.json";
+import table26 from "../../../data/refrigerants/R507A.json";
+import table27 from "../../../data/refrigerants/R513A.json";
+import table28 from "../../../data/refrigerants/R600a.json";
+import table29 from "../../../data/refrigerants/R717.json";
+import table30 from "../../../data/refrigerants/R744.json";
 
 /** Raw generated tables, validated by the registry on first use. */
 export const REFRIGERANT_TABLE_FILES: readonly unknown[] = [
@@ -42,4 +53,15 @@ export const REFRIGERANT_TABLE_FILES: readonly unknown[] = [
   table17,
   table18,
   table19,
+  table20,
+  table21,
+  table22,
+  table23,
+  table24,
+  table25,
+  table26,
+  table27,
+  table28,
+  table29,
+  table30,
 ];

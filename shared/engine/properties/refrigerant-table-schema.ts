@@ -62,6 +62,11 @@ export const RefrigerantTableSchema = z
       .nullable(),
     referenceState: z.string(),
     source: z.object({
+      /**
+       * How the saturation rows were computed: one pure-fluid EOS, a pseudo-pure blend EOS with
+       * published bubble/dew equations, or the multi-fluid mixture model (equal fugacities).
+       */
+      model: z.enum(["pure-fluid", "pseudo-pure", "multi-fluid"]).optional(),
       equationOfState: z.string(),
       bibtexKeys: z.array(z.string()).min(1),
       data: z.string(),
