@@ -12,16 +12,18 @@ export interface NavItem {
   roles?: readonly Role[];
   /** Shown only when the server offers the feature (the Outbox exists in development only). */
   requires?: "outbox";
+  /** On the phone's bottom bar; the rest sit behind "More", so each target stays thumb-sized. */
+  phoneBar?: boolean;
 }
 
 /** The app's sections, in the order a technician reaches for them. */
 export const navigation: NavItem[] = [
-  { label: "Today", href: paths.home.getHref(), icon: Home },
-  { label: "Jobs", href: paths.jobs.getHref(), icon: ClipboardList },
+  { label: "Today", href: paths.home.getHref(), icon: Home, phoneBar: true },
+  { label: "Jobs", href: paths.jobs.getHref(), icon: ClipboardList, phoneBar: true },
   // The review queue: the jobs list narrowed to visits waiting for a senior's sign-off.
   { label: "Review", href: paths.jobs.getHref("awaiting-review"), icon: ClipboardCheck, roles: PERMISSIONS.signOff },
-  { label: "Equipment", href: paths.equipment.getHref(), icon: Wrench, matchPrefix: true },
-  { label: "P–T tables", href: paths.tables.getHref(), icon: Table2, matchPrefix: true },
+  { label: "Equipment", href: paths.equipment.getHref(), icon: Wrench, matchPrefix: true, phoneBar: true },
+  { label: "P–T tables", href: paths.tables.getHref(), icon: Table2, matchPrefix: true, phoneBar: true },
   { label: "Safety", href: paths.safety.getHref(), icon: HardHat },
   { label: "Members", href: paths.members.getHref(), icon: Users },
   { label: "Profile", href: paths.profile.getHref(), icon: SlidersHorizontal },

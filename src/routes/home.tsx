@@ -1,11 +1,52 @@
+import { ChevronRight } from "lucide-react";
 import { Link } from "react-router-dom";
+import { can } from "@shared/schemas/auth.ts";
+import type { VisitSummary } from "@shared/schemas/visits.ts";
+import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
-import { useHealth } from "@/lib/api/health.ts";
+import { useMe } from "@/lib/api/auth.ts";
+import { useVisits } from "@/lib/api/visits.ts";
+
+function VisitLinks({ title, visits, empty }: { title: string; visits: VisitSummary[] | undefined; empty: string }) {
+  return (
+    <section aria-label={title} className="rounded-card border-2 border-rule bg-surface p-4">
+      <h2 className="text-lg font-semibold">{title}</h2>
+      {visits === undefined ? (
+        <p className="mt-1 text-muted">Loading…</p>
+      ) : visits.length === 0 ? (
+        <p className="mt-1 text-muted">{empty}</p>
+      ) : (
+        <ul className="mt-2 divide-y-2 divide-rule">
+          {visits.map((visit) => (
+            <li key={visit.id}>
+              <Link to={paths.visits.detail.getHref(visit.id)} className="flex min-h-touch items-center gap-3 py-2 hover:bg-sunken">
+                <div className="min-w-0 flex-1">
+                  <p className="font-medium">{visit.equipmentName}</p>
+                  <p className="truncate text-sm text-muted">
+                    {visit.customerName} · {visit.reason}
+                  </p>
+                </div>
+                <VisitStatusBadge status={visit.status} />
+                <ChevronRight aria-hidden className="size-5 shrink-0" />
+              </Link>
+            </li>
+          ))}
+        </ul>
+      )}
+    </section>
+  );
+}
 
 export default function HomeRoute() {
-  const health = useHealth();
+  const me = useMe();
+  const open = useVisits({ status: "open" });
+  const sentBack = useVisits({ status: "sent-back" });
+  const reviewer = me.data ? can(me.data.role, "signOff") : false;
+  const awaiting = useVisits({ status: "awaiting-review" });
+  const inProgress = open.data && sentBack.data ? [...sentBack.data, ...open.data] : undefined;
+
   return (
-    <div className="space-y-6">
+    <div className="space-y-5">
       <header>
         <h1 className="text-3xl font-semibold">Today</h1>
         <p className="mt-1 max-w-prose text-muted">
@@ -13,22 +54,13 @@ export default function HomeRoute() {
           superheat, subcooling and what the circuit is telling you — and keeps the visit as a record.
         </p>
       </header>
-      <section aria-labelledby="status-heading" className="rounded-card border-2 border-rule bg-surface p-4">
-        <h2 id="status-heading" className="font-semibold">
-          Connection
-        </h2>
-        {health.isPending && <p className="mt-1">Checking the server…</p>}
-        {health.isError && (
-          <p className="mt-1 font-medium text-fault" role="alert">
-            ⚠ {health.error.message}
-          </p>
-        )}
-        {health.isSuccess && (
-          <p className="mt-1">
-            ✓ Server and database answering <span className="num text-muted">(v{health.data.version})</span>
-          </p>
-        )}
-      </section>
+      {(open.isError || awaiting.isError) && (
+        <p role="alert" className="font-medium text-fault">
+          ⚠ {(open.error ?? awaiting.error)?.message}
+        </p>
+      )}
+      <VisitLinks title="Visits in progress" visits={inProgress} empty="No open visits. Start one from a unit's page under Equipment." />
+      {reviewer && <VisitLinks title="Waiting for your review" visits={awaiting.data} empty="Nothing is waiting for review." />}
       <section className="rounded-card border-2 border-caution bg-surface p-4">
         <h2 className="font-semibold">Before you open a panel or a valve</h2>
         <p className="mt-1">

@@ -7,7 +7,8 @@ test.describe("app shell", () => {
     await signIn(page, "tech@bellbird.example");
     await expect(page).toHaveURL(/\/$/);
     await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
-    await expect(page.getByText("Server and database answering")).toBeVisible();
+    await expect(page.getByText(/Server connected/)).toBeVisible();
+    await expect(page.getByRole("region", { name: "Visits in progress" })).toBeVisible();
 
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Safety" }).click();
     await expect(page).toHaveURL(/\/safety$/);

@@ -1,5 +1,7 @@
+import { Menu } from "lucide-react";
+import { useState } from "react";
 import { Link, Navigate, Outlet, useLocation, useNavigation } from "react-router-dom";
-import { isNavItemActive, navigationFor } from "@/config/navigation.ts";
+import { isNavItemActive, navigationFor, type NavItem } from "@/config/navigation.ts";
 import { paths } from "@/config/paths.ts";
 import { UserMenu } from "@/features/auth/components/user-menu.tsx";
 import { SunlightToggle } from "@/features/theme/components/sunlight-toggle.tsx";
@@ -86,25 +88,61 @@ export function AppShell() {
         </footer>
       </div>
 
-      <nav
-        aria-label="Main"
-        className="no-print fixed inset-x-0 bottom-0 z-40 flex border-t-2 border-rule bg-surface pb-[env(safe-area-inset-bottom)] md:hidden"
-      >
-        {navigation.map((item) => (
+      <PhoneNavigation navigation={navigation} location={location} />
+    </div>
+  );
+}
+
+/**
+ * The phone's bottom bar: the four sections used on the roof, then "More" for the rest, so
+ * every target stays wide enough for a gloved thumb.
+ */
+function PhoneNavigation({ navigation, location }: { navigation: NavItem[]; location: { pathname: string; search: string } }) {
+  const [moreOpen, setMoreOpen] = useState(false);
+  const onBar = navigation.filter((item) => item.phoneBar);
+  const behindMore = navigation.filter((item) => !item.phoneBar);
+  const moreActive = behindMore.some((item) => isNavItemActive(item, location, navigation));
+  const itemClass = (active: boolean) =>
+    cn("flex min-h-16 flex-1 flex-col items-center justify-center gap-0.5 text-xs font-medium", active ? "bg-ink text-paper" : "text-ink");
+  return (
+    <nav aria-label="Main" className="no-print fixed inset-x-0 bottom-0 z-40 border-t-2 border-rule bg-surface pb-[env(safe-area-inset-bottom)] md:hidden">
+      {moreOpen && (
+        <ul id="more-sections" className="grid grid-cols-2 gap-1 border-b-2 border-rule p-2">
+          {behindMore.map((item) => (
+            <li key={item.href}>
+              <Link
+                to={item.href}
+                onClick={() => setMoreOpen(false)}
+                aria-current={isNavItemActive(item, location, navigation) ? "page" : undefined}
+                className={cn("flex min-h-touch items-center gap-2 rounded-card px-3 font-medium", isNavItemActive(item, location, navigation) ? "bg-ink text-paper" : "hover:bg-sunken")}
+              >
+                <item.icon aria-hidden className="size-5" />
+                {item.label}
+              </Link>
+            </li>
+          ))}
+        </ul>
+      )}
+      <div className="flex">
+        {onBar.map((item) => (
           <Link
             key={item.href}
             to={item.href}
+            onClick={() => setMoreOpen(false)}
             aria-current={isNavItemActive(item, location, navigation) ? "page" : undefined}
-            className={cn(
-              "flex min-h-16 flex-1 flex-col items-center justify-center gap-0.5 text-xs font-medium",
-              isNavItemActive(item, location, navigation) ? "bg-ink text-paper" : "text-ink",
-            )}
+            className={itemClass(isNavItemActive(item, location, navigation))}
           >
             <item.icon aria-hidden className="size-6" />
             {item.label}
           </Link>
         ))}
-      </nav>
-    </div>
+        {behindMore.length > 0 && (
+          <button type="button" aria-expanded={moreOpen} aria-controls="more-sections" onClick={() => setMoreOpen((open) => !open)} className={itemClass(moreActive || moreOpen)}>
+            <Menu aria-hidden className="size-6" />
+            More
+          </button>
+        )}
+      </div>
+    </nav>
   );
 }
