@@ -328,7 +328,8 @@ function buildBlendTable(blend: BlendModel, generated: string, dataNote: string)
   const probe = gridBetween(blend.minimumTemperature, 500).map((c) => Math.max(c + KELVIN, blend.minimumTemperature));
   const bubbleAll = traceSaturationCurve(blend, "bubble", probe);
   const dewAll = traceSaturationCurve(blend, "dew", probe);
-  if (bubbleAll.length < 2 || dewAll.length < 2) throw new Error(`${designation}: bubble/dew tracing failed at the first rows`);
+  if (bubbleAll.length < 2 || dewAll.length < 2)
+    throw new Error(`${designation}: bubble/dew tracing failed at the first rows`);
   const critical = blendCriticalPoint(blend, bubbleAll[bubbleAll.length - 1]!);
   const lastConverged = Math.min(bubbleAll[bubbleAll.length - 1]!.T, dewAll[dewAll.length - 1]!.T);
   if (critical.T - lastConverged > 1.5) {
@@ -397,7 +398,9 @@ function buildBlendTable(blend: BlendModel, generated: string, dataNote: string)
     b.EOS[0].STATES.sat_min_liquid.T > a.EOS[0].STATES.sat_min_liquid.T ? b : a,
   );
   const lowerLimit =
-    grid[0]! > LOWEST_C + 1e-9 ? `triple point of ${highestTriple.designation} (highest of the components)` : "-60 °C table limit";
+    grid[0]! > LOWEST_C + 1e-9
+      ? `triple point of ${highestTriple.designation} (highest of the components)`
+      : "-60 °C table limit";
   const table: RefrigerantTable = {
     id: designation,
     name: meta.name,
@@ -417,7 +420,9 @@ function buildBlendTable(blend: BlendModel, generated: string, dataNote: string)
       model: "multi-fluid",
       equationOfState: `multi-fluid Helmholtz mixture model (${MIXTURE_MODEL_BIBTEX} form) of ${componentFiles
         .map((file) => `${file.designation} (${file.EOS[0].BibTeX_EOS})`)
-        .join(", ")}; binary pairs: ${pairText}; bubble and dew points by equal fugacities of every component in both phases, converged to 1e-11 in ln f`,
+        .join(
+          ", ",
+        )}; binary pairs: ${pairText}; bubble and dew points by equal fugacities of every component in both phases, converged to 1e-11 in ln f`,
       bibtexKeys,
       data: `${dataNote}; composition ${record.source}`,
       licence: "EOS and mixture coefficients from CoolProp fluid and mixture files (MIT licence, Bell et al. 2014)",

@@ -237,13 +237,21 @@ const MIXTURE_METADATA: Record<string, RefrigerantMetadataSource> = {
     name: "R407A (R32/R125/R134a blend)",
     safetyClass: "A1",
     safetyClassFromMemory: true,
-    gwp100: blendGwp([["R32", 20], ["R125", 40], ["R134a", 40]]),
+    gwp100: blendGwp([
+      ["R32", 20],
+      ["R125", 40],
+      ["R134a", 40],
+    ]),
   },
   R407F: {
     name: "R407F (R32/R125/R134a blend)",
     safetyClass: "A1",
     safetyClassFromMemory: true,
-    gwp100: blendGwp([["R32", 30], ["R125", 30], ["R134a", 40]]),
+    gwp100: blendGwp([
+      ["R32", 30],
+      ["R125", 30],
+      ["R134a", 40],
+    ]),
   },
   R448A: {
     name: "R448A (R32/R125/R1234yf/R134a/R1234ze(E) blend)",
@@ -267,7 +275,11 @@ const MIXTURE_METADATA: Record<string, RefrigerantMetadataSource> = {
     name: "R452B (R32/R125/R1234yf blend)",
     safetyClass: "A2L",
     safetyClassFromMemory: true,
-    gwp100: blendGwp([["R32", 67], ["R125", 7], ["R1234yf", 26]]),
+    gwp100: blendGwp([
+      ["R32", 67],
+      ["R125", 7],
+      ["R1234yf", 26],
+    ]),
   },
   R454B: {
     name: "R454B (R32/R1234yf blend)",
@@ -279,13 +291,20 @@ const MIXTURE_METADATA: Record<string, RefrigerantMetadataSource> = {
     name: "R454C (R32/R1234yf blend)",
     safetyClass: "A2L",
     safetyClassFromMemory: true,
-    gwp100: blendGwp([["R32", 21.5], ["R1234yf", 78.5]]),
+    gwp100: blendGwp([
+      ["R32", 21.5],
+      ["R1234yf", 78.5],
+    ]),
   },
   R455A: {
     name: "R455A (R744/R32/R1234yf blend)",
     safetyClass: "A2L",
     safetyClassFromMemory: true,
-    gwp100: blendGwp([["R744", 3], ["R32", 21.5], ["R1234yf", 75.5]]),
+    gwp100: blendGwp([
+      ["R744", 3],
+      ["R32", 21.5],
+      ["R1234yf", 75.5],
+    ]),
   },
   R513A: {
     name: "R513A (R1234yf/R134a azeotrope)",
@@ -297,8 +316,15 @@ const MIXTURE_METADATA: Record<string, RefrigerantMetadataSource> = {
     name: "R466A (R32/R125/R13I1 blend)",
     safetyClass: "A1",
     safetyClassFromMemory: true,
-    gwp100: blendGwp([["R32", 49], ["R125", 11.5], ["R13I1", 39.5]]),
+    gwp100: blendGwp([
+      ["R32", 49],
+      ["R125", 11.5],
+      ["R13I1", 39.5],
+    ]),
   },
 };
 
-export const REFRIGERANT_METADATA: Record<string, RefrigerantMetadataSource> = { ...PURE_METADATA, ...MIXTURE_METADATA };
+export const REFRIGERANT_METADATA: Record<string, RefrigerantMetadataSource> = {
+  ...PURE_METADATA,
+  ...MIXTURE_METADATA,
+};

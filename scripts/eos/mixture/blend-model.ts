@@ -5,7 +5,13 @@
  */
 import { readReferenceFluid, listReferenceDesignations } from "../load-reference.ts";
 import type { BinaryPairRecord, BlendRecord, DepartureFunctionRecord } from "./mixture-data.ts";
-import { createMixtureComponent, createMixtureModel, matchPairs, type MixtureModel, type MixturePair } from "./mixture-model.ts";
+import {
+  createMixtureComponent,
+  createMixtureModel,
+  matchPairs,
+  type MixtureModel,
+  type MixturePair,
+} from "./mixture-model.ts";
 
 export interface BlendModel {
   readonly designation: string;

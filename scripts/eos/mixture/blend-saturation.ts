@@ -171,7 +171,8 @@ export function blendPointAtPressure(
     throw new Error(`blendPointAtPressure: ${pressure} Pa is outside the traced ${kind} curve`);
   }
   let nearest = curve[0]!;
-  for (const point of curve) if (Math.abs(Math.log(point.p / pressure)) < Math.abs(Math.log(nearest.p / pressure))) nearest = point;
+  for (const point of curve)
+    if (Math.abs(Math.log(point.p / pressure)) < Math.abs(Math.log(nearest.p / pressure))) nearest = point;
   return solveEnvelopePoint(blend.model, blend.moleFractions, kind, { pressure }, nearest);
 }
 

@@ -33,7 +33,13 @@ export function compileDepartureFunction(record: DepartureFunctionRecord): Resid
       l: record.n.slice(0, power).map(() => 0),
     });
     if (record.n.length > power) {
-      const gaussian = { n: [] as number[], d: [] as number[], t: [] as number[], epsilon: [] as number[], eta: [] as number[] };
+      const gaussian = {
+        n: [] as number[],
+        d: [] as number[],
+        t: [] as number[],
+        epsilon: [] as number[],
+        eta: [] as number[],
+      };
       for (let k = power; k < record.n.length; k++) {
         const eta = record.eta[k]!;
         const beta = record.beta[k]!;

@@ -71,7 +71,12 @@ function residuals(
   let sum = -1;
   for (let i = 0; i < n; i++) {
     out.push(
-      Math.log(z[i]!) + u[1]! + bulk.residualChemicalPotential[i]! - u[3 + i]! - u[2]! - incipient.residualChemicalPotential[i]!,
+      Math.log(z[i]!) +
+        u[1]! +
+        bulk.residualChemicalPotential[i]! -
+        u[3 + i]! -
+        u[2]! -
+        incipient.residualChemicalPotential[i]!,
     );
     sum += w[i]!;
   }
@@ -156,7 +161,10 @@ export function solveEnvelopePoint(
   for (let iteration = 1; iteration <= 60; iteration++) {
     const J = jacobian(model, z, kind, spec, u);
     if (!J) throw new Error(`${kind} point: the Jacobian reached an unstable state`);
-    let step = solveLinearSystem(J, f.map((value) => -value));
+    let step = solveLinearSystem(
+      J,
+      f.map((value) => -value),
+    );
     const size = largest(step);
     if (size > 0.25) step = step.map((value) => (value * 0.25) / size);
     let accepted: number[] | null = null;
@@ -194,7 +202,11 @@ export function solveEnvelopePoint(
     if (Math.abs(u[1]! - u[2]!) < 1e-6 && compositionGap < 1e-6) {
       throw new Error(`${kind} point collapsed onto the trivial solution (incipient phase = bulk phase)`);
     }
-    const p = model.pressure(T, kind === "bubble" ? incipientDensity : bulkDensity, kind === "bubble" ? incipient : z).p;
+    const p = model.pressure(
+      T,
+      kind === "bubble" ? incipientDensity : bulkDensity,
+      kind === "bubble" ? incipient : z,
+    ).p;
     return { kind, T, p, bulkDensity, incipientDensity, incipient, residual, iterations };
   }
 }

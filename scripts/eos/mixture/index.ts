@@ -8,12 +8,7 @@ export type { BinaryPairRecord, BlendRecord, DepartureFunctionRecord } from "./m
 export { createReducingFunctions } from "./reducing-functions.ts";
 export type { PairReducingParameters, ReducingFunctions, ReducingValues } from "./reducing-functions.ts";
 export { compileDepartureFunction } from "./departure-function.ts";
-export {
-  createMixtureComponent,
-  createMixtureModel,
-  matchPairs,
-  MIXTURE_GAS_CONSTANT,
-} from "./mixture-model.ts";
+export { createMixtureComponent, createMixtureModel, matchPairs, MIXTURE_GAS_CONSTANT } from "./mixture-model.ts";
 export type { MixtureComponent, MixtureModel, MixturePair, MixturePhase, MixtureResidual } from "./mixture-model.ts";
 export {
   coldStart,

@@ -106,7 +106,9 @@ function gergFromRecord(record: BinaryPairRecord, a: MixtureComponent, b: Mixtur
     const vb = 1 / b.reducingDensity;
     return {
       betaT: 1,
-      gammaT: (a.reducingTemperature + b.reducingTemperature + record.xi) / (2 * Math.sqrt(a.reducingTemperature * b.reducingTemperature)),
+      gammaT:
+        (a.reducingTemperature + b.reducingTemperature + record.xi) /
+        (2 * Math.sqrt(a.reducingTemperature * b.reducingTemperature)),
       betaV: 1,
       gammaV: (va + vb + record.zeta) / (Math.pow(Math.cbrt(va) + Math.cbrt(vb), 3) / 4),
     };
@@ -121,7 +123,8 @@ function gergFromRecord(record: BinaryPairRecord, a: MixtureComponent, b: Mixtur
 /** Builds one component from its reference fluid file (shipped reference state, no shift). */
 export function createMixtureComponent(file: ReferenceFluidFile): MixtureComponent {
   const eos = file.EOS[0];
-  if (eos.pseudo_pure) throw new Error(`createMixtureComponent requires a pure fluid (${file.designation} is pseudo-pure)`);
+  if (eos.pseudo_pure)
+    throw new Error(`createMixtureComponent requires a pure fluid (${file.designation} is pseudo-pure)`);
   return {
     designation: file.designation,
     cas: file.INFO.CAS,
@@ -167,7 +170,8 @@ export function matchPairs(
       let departure: ResidualHelmholtz | null = null;
       if (record.F !== 0) {
         const definition = departureRecords.find((d) => d.Name === record.function);
-        if (!definition) throw new Error(`departure function ${record.function} of ${a.designation}/${b.designation} is missing`);
+        if (!definition)
+          throw new Error(`departure function ${record.function} of ${a.designation}/${b.designation} is missing`);
         departure = compileDepartureFunction(definition);
       }
       pairs.push({
@@ -191,7 +195,10 @@ export function matchPairs(
  * @throws Error when a pair is missing
  * @example createMixtureModel(components, matchPairs(components, pairs, departures).pairs).phase(273.15, 500, x).p
  */
-export function createMixtureModel(components: readonly MixtureComponent[], pairs: readonly MixturePair[]): MixtureModel {
+export function createMixtureModel(
+  components: readonly MixtureComponent[],
+  pairs: readonly MixturePair[],
+): MixtureModel {
   const count = components.length;
   if (pairs.length !== (count * (count - 1)) / 2) {
     throw new Error(`createMixtureModel requires all ${(count * (count - 1)) / 2} pairs, got ${pairs.length}`);
@@ -231,7 +238,9 @@ export function createMixtureModel(components: readonly MixtureComponent[], pair
     }
     for (const pair of pairs) {
       if (!pair.departure) continue;
-      const r = withTau ? pair.departure.evaluate(tau, delta, pairScratch) : pair.departure.evaluateDelta(tau, delta, pairScratch);
+      const r = withTau
+        ? pair.departure.evaluate(tau, delta, pairScratch)
+        : pair.departure.evaluateDelta(tau, delta, pairScratch);
       const xi = x[pair.i]!;
       const xj = x[pair.j]!;
       const w = xi * xj * pair.F;
@@ -291,11 +300,7 @@ export function createMixtureModel(components: readonly MixtureComponent[], pair
         const densityTerm = -red.density * (red.dVolume[i]! - sumV);
         const temperatureTerm = (red.dTemperature[i]! - sumT) / red.temperature;
         chemical[i] =
-          r.alphar +
-          delta * r.dDelta * (1 - densityTerm) +
-          tau * r.dTau * temperatureTerm +
-          r.dComposition[i]! -
-          sumA;
+          r.alphar + delta * r.dDelta * (1 - densityTerm) + tau * r.dTau * temperatureTerm + r.dComposition[i]! - sumA;
         lnPhi[i] = chemical[i]! - lnZ;
       }
       const RT = R * T;
