@@ -325,3 +325,101 @@ export const photos = pgTable(
   },
   (table) => [index("photos_visit_idx").on(table.visitId)],
 );
+
+/*
+ * Procedure records of a visit (electrical checks, leak search, nitrogen pressure test,
+ * evacuation). Like readings, each keeps what the technician entered (`input`, SI-metric)
+ * and what the server's procedures engine made of it (`result`), recomputed on every save.
+ */
+
+/** Electrical checks on one target: a compressor, a fan motor or the supply. */
+export const electricalChecks = pgTable(
+  "electrical_checks",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    /** compressor, fan or supply. */
+    target: text("target").notNull(),
+    /** Phase voltages, insulation readings with their test voltage, winding resistances, running currents. */
+    input: jsonb("input").$type<Record<string, unknown>>().notNull(),
+    /** The verdicts per check and overall, as the engine judged them. */
+    result: jsonb("result").$type<Record<string, unknown>>().notNull(),
+    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    createdAt,
+  },
+  (table) => [index("electrical_checks_visit_idx").on(table.visitId, table.takenAt)],
+);
+
+/** One leak search: the method, the places checked, leaks found and repaired, the recheck. */
+export const leakSearches = pgTable(
+  "leak_searches",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    method: text("method").notNull(),
+    input: jsonb("input").$type<Record<string, unknown>>().notNull(),
+    result: jsonb("result").$type<Record<string, unknown>>().notNull(),
+    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    createdAt,
+  },
+  (table) => [index("leak_searches_visit_idx").on(table.visitId, table.takenAt)],
+);
+
+/** A nitrogen strength/tightness test: test pressure against the rated pressure, start and end of the hold. */
+export const pressureTests = pgTable(
+  "pressure_tests",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    input: jsonb("input").$type<Record<string, unknown>>().notNull(),
+    result: jsonb("result").$type<Record<string, unknown>>().notNull(),
+    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    createdAt,
+  },
+  (table) => [index("pressure_tests_visit_idx").on(table.visitId, table.takenAt)],
+);
+
+/**
+ * An evacuation with its decay test. Samples (microns, minutes from the start) are added
+ * while the pump runs and after it is valved off; the analysis is redone on every change.
+ */
+export const evacuations = pgTable(
+  "evacuations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    targetMicrons: doublePrecision("target_microns").notNull(),
+    /** Minutes from the start at which the pump was valved off; null while still pulling down. */
+    isolatedAtMinutes: doublePrecision("isolated_at_minutes"),
+    samples: jsonb("samples").$type<{ minutes: number; microns: number }[]>().notNull().default([]),
+    note: text("note"),
+    result: jsonb("result").$type<Record<string, unknown>>().notNull(),
+    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    startedAt: timestamp("started_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...timestamps,
+  },
+  (table) => [index("evacuations_visit_idx").on(table.visitId, table.startedAt)],
+);
