@@ -49,3 +49,14 @@ export { wetBulbFromRelativeHumidity } from "./diagnosis/psychrometrics/wet-bulb
 export { DIAGNOSIS_RULES } from "./diagnosis/rules/registry.ts";
 export type { DiagnosisRule, DiagnosisSnapshot } from "./diagnosis/types.ts";
 export * as diagnosisLimits from "./diagnosis/diagnosis-limits.ts";
+
+// Casebook (worked cases, scoring, worked solutions, the case generator)
+export { seededRandom } from "./casebook/seeded-random.ts";
+export { designCaseInput } from "./casebook/design-case-input.ts";
+export type { CaseDesign } from "./casebook/design-case-input.ts";
+export { expectedAnswers } from "./casebook/expected-answers.ts";
+export { scoreAttempt } from "./casebook/score-attempt.ts";
+export { workedSolution } from "./casebook/worked-solution.ts";
+export { caseSafetyNotes } from "./casebook/case-safety-notes.ts";
+export { generateCase, GENERATOR_REFRIGERANTS, SENSOR_NOISE_K, GAUGE_RESOLUTION_KPA, MAX_GENERATOR_DRAWS } from "./casebook/generate-case.ts";
+export type { GeneratedCase, GenerateCaseOptions } from "./casebook/generate-case.ts";

@@ -1,0 +1,27 @@
+import type { CaseExpected } from "../../schemas/casebook.ts";
+import type { DiagnosisResult } from "../../schemas/diagnosis.ts";
+
+/**
+ * Expected answers of a worked case, taken from the engine's diagnosis of its readings: dew
+ * point at suction (evaporating), bubble point at the liquid pressure (condensing), superheat,
+ * subcooling, charge state, the targets used and the warning codes. Answers are never typed by
+ * hand, so a case cannot disagree with what the run log would say for the same readings.
+ *
+ * Units: °C for saturation temperatures, K for differences. Range: any `diagnose()` result.
+ * Source: TRADE.md §1.1 (dew for superheat, bubble for subcooling [S1][S2][S3]).
+ *
+ * @throws never
+ * @example expectedAnswers(diagnose(input)).chargeState // "undercharged"
+ */
+export function expectedAnswers(result: DiagnosisResult): CaseExpected {
+  return {
+    evaporatingTempC: result.evaporatingTempC,
+    condensingTempC: result.condensingTempC,
+    superheatK: result.superheatK,
+    subcoolingK: result.subcoolingK,
+    chargeState: result.chargeState,
+    targetSuperheatK: result.targets.superheat?.targetK ?? null,
+    targetSubcoolingK: result.targets.subcooling?.targetK ?? null,
+    warnings: result.warnings.map((warning) => warning.code),
+  };
+}

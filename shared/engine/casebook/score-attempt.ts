@@ -1,0 +1,49 @@
+import {
+  ANSWER_FIELDS,
+  ANSWER_TOLERANCE_K,
+  type AnswerMark,
+  type AttemptAnswers,
+  type AttemptScore,
+  type CaseExpected,
+} from "../../schemas/casebook.ts";
+
+/**
+ * Scores an apprentice's attempt at a case: each of evaporating and condensing saturation
+ * temperature, superheat and subcooling is right within ±0.5 K of the engine's answer, and the
+ * charge state must match exactly. Where the case has no valid value (null: e.g. subcooling
+ * taken on the discharge line), the right answer is to leave it blank. The one line of
+ * reasoning is kept for the senior to read, not marked.
+ *
+ * Units: answers and expected values SI-metric (°C, K); convert display units first. The
+ * tolerance is in kelvin whatever the display unit (0.5 K = 0.9 °F). Source: issue 7 (±0.5 K);
+ * about one gauge graduation's worth of saturation temperature (common practice).
+ *
+ * @throws never
+ * @example scoreAttempt(expected, { ...answers, superheatK: expected.superheatK! + 0.4 }).marks[2].correct // true
+ */
+export function scoreAttempt(
+  expected: CaseExpected,
+  answers: AttemptAnswers,
+  toleranceK: number = ANSWER_TOLERANCE_K,
+): AttemptScore {
+  const marks: AnswerMark[] = ANSWER_FIELDS.map((field) => {
+    if (field === "chargeState") {
+      return {
+        field,
+        expected: expected.chargeState,
+        given: answers.chargeState,
+        correct: answers.chargeState === expected.chargeState,
+        differenceK: null,
+      };
+    }
+    const want = expected[field];
+    const given = answers[field];
+    if (want === null || given === null)
+      return { field, expected: want, given, correct: want === given, differenceK: null };
+    const differenceK = given - want;
+    // A hair of slack so that a displayed value rounded to 0.1 on the boundary still counts.
+    return { field, expected: want, given, correct: Math.abs(differenceK) <= toleranceK + 1e-9, differenceK };
+  });
+  const correctCount = marks.filter((mark) => mark.correct).length;
+  return { marks, correctCount, total: marks.length, allCorrect: correctCount === marks.length, toleranceK };
+}
