@@ -7,7 +7,8 @@
  */
 import { sql } from "drizzle-orm";
 import type { Role } from "@shared/schemas/auth.ts";
-import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
+import type { AttemptAnswers, AttemptScore, CaseDifficulty, CaseExpected, CaseStatus, CaseStory, SafetyNote, WorkedStep } from "@shared/schemas/casebook.ts";
+import type { ChargeState, DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { VisitStatus } from "@shared/schemas/visits.ts";
 import {
@@ -422,4 +423,69 @@ export const evacuations = pgTable(
     ...timestamps,
   },
   (table) => [index("evacuations_visit_idx").on(table.visitId, table.startedAt)],
+);
+
+/**
+ * A worked case written by a senior or owner for their own organisation (built-in cases live
+ * in data/casebook/ and are shared by everyone). `expected` is what the diagnosis engine made
+ * of `input` when the case was last saved; apprentices see only published cases.
+ */
+export const casebookCases = pgTable(
+  "casebook_cases",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    title: text("title").notNull(),
+    difficulty: text("difficulty").$type<CaseDifficulty>().notNull(),
+    story: jsonb("story").$type<CaseStory>().notNull(),
+    input: jsonb("input").$type<DiagnosisInput>().notNull(),
+    expected: jsonb("expected").$type<CaseExpected>().notNull(),
+    reasoning: text("reasoning").notNull(),
+    safetyTopics: jsonb("safety_topics").$type<SafetyNote["topic"][]>().notNull().default([]),
+    status: text("status").$type<CaseStatus>().notNull().default("draft"),
+    /** The run-log reading it was made from, if any (customer details are not copied). */
+    fromReadingId: uuid("from_reading_id").references(() => readings.id, { onDelete: "set null" }),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    publishedAt: timestamp("published_at", { withTimezone: true, mode: "date" }),
+    ...timestamps,
+  },
+  (table) => [index("casebook_cases_organisation_idx").on(table.organisationId, table.status)],
+);
+
+/**
+ * One scored attempt at a case. `caseId` is a built-in case id, an organisation case's uuid or
+ * a generated case's id (which carries its seed), so it is text without a foreign key. The
+ * score, worked solution and safety notes are kept as shown, so the record never changes
+ * when a case is edited later.
+ */
+export const casebookAttempts = pgTable(
+  "casebook_attempts",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    caseId: text("case_id").notNull(),
+    caseTitle: text("case_title").notNull(),
+    refrigerant: text("refrigerant").notNull(),
+    expectedState: text("expected_state").$type<ChargeState>().notNull(),
+    answers: jsonb("answers").$type<AttemptAnswers>().notNull(),
+    score: jsonb("score").$type<AttemptScore>().notNull(),
+    correctCount: integer("correct_count").notNull(),
+    allCorrect: boolean("all_correct").notNull(),
+    expected: jsonb("expected").$type<CaseExpected>().notNull(),
+    reasoning: text("reasoning"),
+    worked: jsonb("worked").$type<WorkedStep[]>().notNull(),
+    safety: jsonb("safety").$type<SafetyNote[]>().notNull(),
+    createdAt,
+  },
+  (table) => [
+    index("casebook_attempts_user_idx").on(table.organisationId, table.userId, table.createdAt),
+    index("casebook_attempts_case_idx").on(table.organisationId, table.caseId),
+  ],
 );
