@@ -38,7 +38,7 @@ export default function JobsRoute() {
           <h1 className="text-3xl font-semibold">{reviewing ? "Review" : "Jobs"}</h1>
           <p className="mt-1 text-muted">
             {reviewing
-              ? "Visits their technicians have submitted: read the run log, comment, then sign off or send back."
+              ? "Visits technicians have submitted for sign-off: read the run log, comment, then sign off or send back."
               : "Visits across all your equipment, newest first."}
           </p>
         </div>

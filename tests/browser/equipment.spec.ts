@@ -1,5 +1,9 @@
+import AxeBuilder from "@axe-core/playwright";
 import { expect, test } from "@playwright/test";
 import { signIn } from "./sign-in.ts";
+
+// WCAG 2.1 A and AA rules as axe-core implements them.
+const WCAG_TAGS = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"];
 
 test.describe("equipment", () => {
   test("a technician finds the demo units, opens the R407C rooftop unit and starts a visit", async ({ page }) => {
@@ -17,6 +21,8 @@ test.describe("equipment", () => {
     // R32 is class A2L under ISO 817 / ASHRAE 34.
     await expect(table.getByRole("row", { name: /Server cupboard wall split/ })).toContainText("A2L");
 
+    expect((await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze()).violations).toEqual([]);
+
     await page.getByLabel("Find a unit").fill("407C");
     await expect(table.getByRole("link")).toHaveCount(1);
     await table.getByRole("link", { name: "RTU-1 packaged rooftop unit" }).click();
@@ -24,6 +30,8 @@ test.describe("equipment", () => {
     await expect(page.getByRole("heading", { name: "RTU-1 packaged rooftop unit" })).toBeVisible();
     await expect(page.getByRole("heading", { name: "Nameplate" })).toBeVisible();
     await expect(page.getByText("R407C").first()).toBeVisible();
+
+    expect((await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze()).violations).toEqual([]);
 
     await page.getByLabel("Reason for the visit").fill("Quarterly service before summer");
     await page.getByRole("button", { name: "Start the visit" }).click();
@@ -45,5 +53,6 @@ test.describe("equipment", () => {
     await expect(page.getByText("⚠ Give the unit a name")).toBeVisible();
     // The first field with a problem takes the focus, so a keyboard or screen reader lands on it.
     await expect(page.getByLabel("Site", { exact: true })).toBeFocused();
+    expect((await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze()).violations).toEqual([]);
   });
 });

@@ -28,6 +28,12 @@ const numeric = { setValueAs: typedNumber };
 /** A phase count is chosen, not typed: "" means not on the nameplate. */
 const phaseValue = (value: unknown) => (value === "" || value == null ? undefined : Number(value));
 
+/** After the messages render, focus the first field with one, in screen order. */
+function focusFirstProblem(form: EventTarget | null | undefined) {
+  if (!(form instanceof HTMLFormElement)) return;
+  requestAnimationFrame(() => form.querySelector<HTMLElement>('[aria-invalid="true"]')?.focus());
+}
+
 const blankCircuit = (number: number): EquipmentInput["circuits"][number] => ({
   number,
   factoryChargeKg: undefined as unknown as number,
@@ -91,6 +97,9 @@ export function EquipmentForm({ onCreated }: { onCreated: (equipment: Equipment)
   const form = useForm<EquipmentInput, unknown, EquipmentValues>({
     resolver: zodResolver(EquipmentInputSchema),
     mode: "onTouched",
+    // Fields register as they mount (the site list arrives later), so react-hook-form's own
+    // focus could land mid-form; focusFirstProblem goes to the first one on screen instead.
+    shouldFocusError: false,
     defaultValues: {
       siteId: "",
       name: "",
@@ -110,14 +119,18 @@ export function EquipmentForm({ onCreated }: { onCreated: (equipment: Equipment)
   const caution = chosen ? safetyClasses[chosen.safety.class].caution : null;
   const noSites = sites.isSuccess && sites.data.length === 0;
 
-  const onSubmit = form.handleSubmit(async (values) => {
-    setFormError(null);
-    try {
-      onCreated(await create.mutateAsync(values));
-    } catch (error) {
-      setFormError(applyServerErrors(error, form.setError, fieldPaths(values.circuits.length)));
-    }
-  });
+  const onSubmit = form.handleSubmit(
+    async (values, event) => {
+      setFormError(null);
+      try {
+        onCreated(await create.mutateAsync(values));
+      } catch (error) {
+        setFormError(applyServerErrors(error, form.setError, fieldPaths(values.circuits.length)));
+        focusFirstProblem(event?.target);
+      }
+    },
+    (_errors, event) => focusFirstProblem(event?.target),
+  );
 
   function removeCircuit(index: number) {
     circuits.remove(index);
