@@ -10,6 +10,7 @@ import type { Role } from "@shared/schemas/auth.ts";
 import type { AttemptAnswers, AttemptScore, CaseDifficulty, CaseExpected, CaseStatus, CaseStory, SafetyNote, WorkedStep } from "@shared/schemas/casebook.ts";
 import type { ChargeState, DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
+import type { CylinderKind, MovementKind } from "@shared/schemas/register.ts";
 import type { VisitStatus } from "@shared/schemas/visits.ts";
 import {
   boolean,
@@ -488,4 +489,90 @@ export const casebookAttempts = pgTable(
     index("casebook_attempts_user_idx").on(table.organisationId, table.userId, table.createdAt),
     index("casebook_attempts_case_idx").on(table.organisationId, table.caseId),
   ],
+);
+
+/**
+ * The organisation's refrigerant cylinders. Contents are not stored: they are derived as the
+ * contents on the day the cylinder was entered (initial_contents_kg: a new cylinder's net
+ * fill, or a part-full recovery cylinder) plus register movements into it minus those out of
+ * it, so the register stays the one record of truth and the two can never disagree.
+ */
+export const cylinders = pgTable(
+  "cylinders",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    label: text("label").notNull(),
+    serial: text("serial"),
+    kind: text("kind").$type<CylinderKind>().notNull(),
+    /** One refrigerant per cylinder (TRADE.md §6 cylinder checks). */
+    refrigerant: text("refrigerant").notNull(),
+    waterCapacityKg: doublePrecision("water_capacity_kg").notNull(),
+    tareKg: doublePrecision("tare_kg").notNull(),
+    initialContentsKg: doublePrecision("initial_contents_kg").notNull().default(0),
+    ...timestamps,
+  },
+  (table) => [
+    index("cylinders_organisation_idx").on(table.organisationId),
+    uniqueIndex("cylinders_label_unique").on(table.organisationId, sql`lower(${table.label})`),
+  ],
+);
+
+/**
+ * The refrigerant register: every kilogram recovered, reused, added or sent for reclaim.
+ * It is the record of truth for refrigerant; the run log's charge adjustments (adjustments
+ * of kind charge-added / charge-removed) are marks on the trend chart and are never counted
+ * here, so nothing is counted twice. References have no ON DELETE action: a register entry
+ * outlives nothing it points to, except when the whole organisation goes.
+ */
+export const refrigerantMovements = pgTable(
+  "refrigerant_movements",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    /** Null only for a cylinder sent for reclaim from the cylinders page. */
+    visitId: uuid("visit_id").references(() => visits.id),
+    equipmentId: uuid("equipment_id").references(() => equipment.id),
+    circuit: integer("circuit"),
+    refrigerant: text("refrigerant").notNull(),
+    kind: text("kind").$type<MovementKind>().notNull(),
+    kg: doublePrecision("kg").notNull(),
+    cylinderId: uuid("cylinder_id").references(() => cylinders.id),
+    technicianId: uuid("technician_id").references(() => users.id),
+    at: timestamp("at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    note: text("note"),
+    createdAt,
+  },
+  (table) => [
+    index("refrigerant_movements_organisation_idx").on(table.organisationId, table.at),
+    index("refrigerant_movements_visit_idx").on(table.visitId),
+    index("refrigerant_movements_equipment_idx").on(table.equipmentId, table.at),
+    index("refrigerant_movements_cylinder_idx").on(table.cylinderId),
+  ],
+);
+
+/**
+ * A declared full weigh-in of one circuit on a visit, with its line-length adjustment. The
+ * weighed-in mass itself is not stored: it is the register's reused + added kg on that circuit.
+ */
+export const circuitCharges = pgTable(
+  "circuit_charges",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    circuit: integer("circuit").notNull(),
+    lineAdjustmentKg: doublePrecision("line_adjustment_kg").notNull().default(0),
+    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    ...timestamps,
+  },
+  (table) => [uniqueIndex("circuit_charges_visit_circuit_unique").on(table.visitId, table.circuit)],
 );

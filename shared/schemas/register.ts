@@ -1,0 +1,326 @@
+/**
+ * The refrigerant register: cylinders and every kilogram moved into or out of a system.
+ * Contracts of /api/cylinders, /api/visits/:id/refrigerant, /api/equipment/:id/refrigerant
+ * and /api/register. Masses in kg; the refrigerant of a movement always comes from the
+ * equipment's nameplate (or, for a cylinder sent for reclaim, the cylinder's label), never
+ * typed by hand.
+ *
+ * What a record must hold follows the record-keeping rules collated in TRADE.md §6
+ * ("Refrigerant records at charging/recovery") and §8: equipment and location, refrigerant,
+ * kg recovered / added (virgin or reclaimed) / sent on, cylinder id, technician, date.
+ */
+import { z } from "zod";
+import { listRefrigerants } from "../engine/index.ts";
+import { MAX_CIRCUIT_CHARGE_KG, MAX_CIRCUITS, MAX_NOTE_LENGTH } from "./equipment.ts";
+import { PersonRefSchema } from "./visits.ts";
+
+// ---------------------------------------------------------------------------------------------
+// Cylinders
+// ---------------------------------------------------------------------------------------------
+
+/** recovery: takes refrigerant out of systems; new (virgin) and reclaimed: supply charge. */
+export const CYLINDER_KINDS = ["recovery", "new", "reclaimed"] as const;
+export const CylinderKindSchema = z.enum(CYLINDER_KINDS, { error: "Choose the kind of cylinder" });
+export type CylinderKind = z.infer<typeof CylinderKindSchema>;
+export const CYLINDER_KIND_LABELS: Record<CylinderKind, string> = {
+  recovery: "Recovery",
+  new: "New (virgin)",
+  reclaimed: "Reclaimed",
+};
+
+/** Largest water capacity accepted, kg: a one-tonne drum is the biggest container a crew moves. */
+export const MAX_WATER_CAPACITY_KG = 1000;
+export const MAX_LABEL_LENGTH = 60;
+
+const knownRefrigerants = () => new Set(listRefrigerants().map((info) => info.id));
+
+const massKg = (label: string, max: number) =>
+  z
+    .number({ error: `${label} must be a number in kg` })
+    .refine(Number.isFinite, `${label} must be a number in kg`)
+    .min(0, `${label} cannot be negative`)
+    .max(max, `${label} above ${max} kg is not plausible`);
+
+export const CylinderCreateSchema = z
+  .object({
+    label: z
+      .string({ error: "Give the cylinder the label written on it" })
+      .trim()
+      .min(1, "Give the cylinder the label written on it")
+      .max(MAX_LABEL_LENGTH, `Keep the label under ${MAX_LABEL_LENGTH} characters`),
+    serial: z
+      .string()
+      .trim()
+      .max(MAX_LABEL_LENGTH, `Keep the serial under ${MAX_LABEL_LENGTH} characters`)
+      .optional()
+      .nullable()
+      // An emptied field means "no serial", never an empty string in the record.
+      .transform((value) => (value ? value : null)),
+    kind: CylinderKindSchema,
+    refrigerant: z
+      .string({ error: "Choose the refrigerant" })
+      .refine((id) => knownRefrigerants().has(id), "Choose a refrigerant from the list"),
+    waterCapacityKg: massKg("Water capacity", MAX_WATER_CAPACITY_KG).refine((value) => value > 0, "Water capacity must be above 0 kg"),
+    tareKg: massKg("Tare", MAX_WATER_CAPACITY_KG).refine((value) => value > 0, "Tare must be above 0 kg"),
+    /** What is in it on the day it is entered: gross weight on the scale minus the tare. */
+    initialContentsKg: massKg("Contents", MAX_WATER_CAPACITY_KG).default(0),
+  })
+  // Refrigerant liquid is at most about 1.5 kg/L near room temperature, so a cylinder cannot
+  // hold more than 1.5 × its water capacity; a larger figure is a typing error (kg vs lb).
+  .refine((value) => value.initialContentsKg <= value.waterCapacityKg * 1.5, {
+    path: ["initialContentsKg"],
+    message: "More than the cylinder can physically hold: check the water capacity and the contents",
+  });
+export type CylinderCreate = z.input<typeof CylinderCreateSchema>;
+export type CylinderValues = z.output<typeof CylinderCreateSchema>;
+
+export const VERDICTS = ["pass", "warn", "fail"] as const;
+export const VerdictSchema = z.object({
+  verdict: z.enum(VERDICTS),
+  reason: z.string(),
+  source: z.string(),
+});
+export type VerdictResult = z.infer<typeof VerdictSchema>;
+
+export const CylinderFillSchema = z.object({
+  /** 80 % liquid fill at the reference temperature (cylinderFillLimit); null when the tables cannot say. */
+  maxContentsKg: z.number().nullable(),
+  referenceTempC: z.number(),
+  /** judgeCylinderFill on the contents; null when there is no limit. */
+  check: VerdictSchema.nullable(),
+  /** Why there is no limit (e.g. the refrigerant is supercritical at the reference temperature). */
+  note: z.string().nullable(),
+});
+export type CylinderFill = z.infer<typeof CylinderFillSchema>;
+
+export const CylinderSchema = z.object({
+  id: z.uuid(),
+  label: z.string(),
+  serial: z.string().nullable(),
+  kind: CylinderKindSchema,
+  refrigerant: z.string(),
+  waterCapacityKg: z.number(),
+  tareKg: z.number(),
+  initialContentsKg: z.number(),
+  /** initial contents + movements in − movements out (derived from the register). */
+  contentsKg: z.number(),
+  /** tare + contents: what the scale should read. */
+  grossKg: z.number(),
+  fill: CylinderFillSchema,
+  createdAt: z.string(),
+});
+export type Cylinder = z.infer<typeof CylinderSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Movements
+// ---------------------------------------------------------------------------------------------
+
+export const MOVEMENT_KINDS = ["recovered", "reused", "added-new", "added-reclaimed", "sent-for-reclaim"] as const;
+export const MovementKindSchema = z.enum(MOVEMENT_KINDS, { error: "Choose what happened to the refrigerant" });
+export type MovementKind = z.infer<typeof MovementKindSchema>;
+export const MOVEMENT_KIND_LABELS: Record<MovementKind, string> = {
+  recovered: "Recovered from the system",
+  reused: "Reused (charged back into this system)",
+  "added-new": "Added, new refrigerant",
+  "added-reclaimed": "Added, reclaimed refrigerant",
+  "sent-for-reclaim": "Sent for reclaim",
+};
+
+/**
+ * Which cylinders each movement may use, and which way the mass goes for the cylinder.
+ * Recovered refrigerant goes into a recovery cylinder; reused refrigerant comes back out of
+ * one (or straight from the unit's own receiver, with no cylinder); additions come from a new
+ * or reclaimed cylinder; a recovery cylinder's contents are sent for reclaim.
+ */
+export const MOVEMENT_CYLINDER_RULES: Record<MovementKind, { cylinderKinds: readonly CylinderKind[]; cylinderRequired: boolean; intoCylinder: boolean }> = {
+  recovered: { cylinderKinds: ["recovery"], cylinderRequired: true, intoCylinder: true },
+  reused: { cylinderKinds: ["recovery"], cylinderRequired: false, intoCylinder: false },
+  "added-new": { cylinderKinds: ["new"], cylinderRequired: true, intoCylinder: false },
+  "added-reclaimed": { cylinderKinds: ["reclaimed"], cylinderRequired: true, intoCylinder: false },
+  "sent-for-reclaim": { cylinderKinds: ["recovery"], cylinderRequired: true, intoCylinder: false },
+};
+
+/** One movement is at most a large circuit's whole charge. */
+export const MAX_MOVEMENT_KG = MAX_CIRCUIT_CHARGE_KG;
+
+const MovementMassSchema = z
+  .number({ error: "Enter the mass in kg, weighed on the scale" })
+  .refine(Number.isFinite, "Enter the mass in kg, weighed on the scale")
+  .positive("The mass must be above 0 kg")
+  .max(MAX_MOVEMENT_KG, `More than ${MAX_MOVEMENT_KG} kg in one movement is not plausible`);
+
+const optionalNote = z
+  .string()
+  .trim()
+  .max(MAX_NOTE_LENGTH, `Keep the note under ${MAX_NOTE_LENGTH} characters`)
+  .optional()
+  .nullable()
+  .transform((value) => (value ? value : null));
+
+/** Body of POST /api/visits/:id/refrigerant. */
+export const MovementCreateSchema = z
+  .object({
+    kind: MovementKindSchema,
+    kg: MovementMassSchema,
+    circuit: z
+      .number({ error: "Say which circuit" })
+      .int("Circuits are numbered 1, 2, 3…")
+      .min(1, "Circuits are numbered from 1")
+      .max(MAX_CIRCUITS, `Satura records up to ${MAX_CIRCUITS} circuits`),
+    cylinderId: z.uuid("Choose a cylinder").optional().nullable(),
+    at: z.iso.datetime({ offset: true, error: "at must be an ISO 8601 date and time" }).optional(),
+    note: optionalNote,
+  })
+  // The register must say where the refrigerant went or came from (TRADE.md §6 record fields).
+  .refine((value) => !MOVEMENT_CYLINDER_RULES[value.kind].cylinderRequired || Boolean(value.cylinderId), {
+    path: ["cylinderId"],
+    message: "Choose the cylinder it went into or came from",
+  });
+export type MovementCreate = z.input<typeof MovementCreateSchema>;
+export type MovementValues = z.output<typeof MovementCreateSchema>;
+
+/** Body of POST /api/cylinders/:id/reclaim: a recovery cylinder's contents handed on for reclaim. */
+export const ReclaimCreateSchema = z.object({
+  kg: MovementMassSchema,
+  at: z.iso.datetime({ offset: true }).optional(),
+  note: optionalNote,
+});
+export type ReclaimCreate = z.input<typeof ReclaimCreateSchema>;
+
+export const MovementSchema = z.object({
+  id: z.uuid(),
+  visitId: z.uuid().nullable(),
+  equipmentId: z.uuid().nullable(),
+  equipmentName: z.string().nullable(),
+  circuit: z.number().int().nullable(),
+  refrigerant: z.string(),
+  kind: MovementKindSchema,
+  kg: z.number(),
+  cylinder: z.object({ id: z.uuid(), label: z.string() }).nullable(),
+  technician: PersonRefSchema.nullable(),
+  at: z.string(),
+  note: z.string().nullable(),
+});
+export type Movement = z.infer<typeof MovementSchema>;
+
+export const CylinderDetailSchema = z.object({ cylinder: CylinderSchema, movements: z.array(MovementSchema) });
+export type CylinderDetail = z.infer<typeof CylinderDetailSchema>;
+
+/** The answer to POST /api/visits/:id/refrigerant: the movement and, if it used one, its cylinder after it. */
+export const MovementCreatedSchema = z.object({ movement: MovementSchema, cylinder: CylinderSchema.nullable() });
+
+// ---------------------------------------------------------------------------------------------
+// A visit's balance and charging
+// ---------------------------------------------------------------------------------------------
+
+/** Line-length allowances are grams per metre (TRADE.md §6); ±50 kg covers any field run. */
+export const MAX_LINE_ADJUSTMENT_KG = 50;
+
+/** Body of PUT /api/visits/:id/refrigerant/charging/:circuit: this circuit had a full weigh-in. */
+export const ChargingUpdateSchema = z.object({
+  lineAdjustmentKg: z
+    .number({ error: "Enter the line-length adjustment in kg (0 if none)" })
+    .refine(Number.isFinite, "Enter the line-length adjustment in kg (0 if none)")
+    .min(-MAX_LINE_ADJUSTMENT_KG, `A line adjustment below −${MAX_LINE_ADJUSTMENT_KG} kg is not plausible`)
+    .max(MAX_LINE_ADJUSTMENT_KG, `A line adjustment above ${MAX_LINE_ADJUSTMENT_KG} kg is not plausible`),
+});
+export type ChargingUpdate = z.input<typeof ChargingUpdateSchema>;
+
+export const CircuitBalanceSchema = z.object({
+  circuit: z.number().int(),
+  nameplateKg: z.number(),
+  recoveredKg: z.number(),
+  reusedKg: z.number(),
+  addedKg: z.number(),
+  sentForReclaimKg: z.number(),
+  /** refrigerantBalance() over this visit's movements on the circuit. */
+  balance: z.object({
+    shortfallKg: z.number(),
+    finalChargeKg: z.number(),
+    differenceFromNameplateKg: z.number(),
+  }),
+  /** True when refrigerant was recovered, so the shortfall says how far short the system was. */
+  recoveredOnVisit: z.boolean(),
+  /** The full weigh-in against the nameplate, when the circuit was emptied or a weigh-in was declared. */
+  charging: z
+    .object({
+      weighedInKg: z.number(),
+      lineAdjustmentKg: z.number(),
+      declared: z.boolean(),
+      check: VerdictSchema.extend({ differenceKg: z.number(), percent: z.number() }),
+    })
+    .nullable(),
+});
+export type CircuitBalance = z.infer<typeof CircuitBalanceSchema>;
+
+export const VisitRefrigerantSchema = z.object({
+  refrigerant: z.string(),
+  /** Zeotropic blend with a glide above ZEOTROPE_GLIDE_NOTE_K: charge it as liquid (TRADE.md §6). */
+  liquidChargingNote: z.string().nullable(),
+  glideK: z.number().nullable(),
+  movements: z.array(MovementSchema),
+  circuits: z.array(CircuitBalanceSchema),
+  /** kg marked on the run log as charge adjustments; they are chart marks, not register entries. */
+  runLogChargeMarksKg: z.object({ added: z.number(), removed: z.number() }),
+});
+export type VisitRefrigerant = z.infer<typeof VisitRefrigerantSchema>;
+
+/**
+ * Glide above which Satura shows the liquid-charging note, K. Near-azeotropes such as R410A
+ * glide about 0.1 K and may be treated like pure fluids; 400-series blends with a real glide
+ * must leave the cylinder as liquid (TRADE.md §6 [S4][S56]); the 1 K threshold is common practice.
+ */
+export const ZEOTROPE_GLIDE_NOTE_K = 1;
+
+// ---------------------------------------------------------------------------------------------
+// Equipment history and the register
+// ---------------------------------------------------------------------------------------------
+
+export const EquipmentRefrigerantSchema = z.object({
+  refrigerant: z.string(),
+  nameplateKg: z.number(),
+  movements: z.array(MovementSchema),
+  /** Refrigerant put back per visit beyond what was taken out: what had leaked since. */
+  topUps: z.array(z.object({ visitId: z.uuid(), date: z.string(), addedKg: z.number() })),
+  leakRate: z.object({ kgPerYear: z.number(), percentOfChargePerYear: z.number() }).nullable(),
+});
+export type EquipmentRefrigerant = z.infer<typeof EquipmentRefrigerantSchema>;
+
+/** A calendar date or a date-time with offset; a bare date is a whole UTC day. */
+const DateBoundSchema = z.union([z.iso.date(), z.iso.datetime({ offset: true })], { error: "Use a date like 2026-07-01" });
+
+export const RegisterQuerySchema = z
+  .object({
+    from: DateBoundSchema.optional(),
+    to: DateBoundSchema.optional(),
+    technicianId: z.uuid("Choose a technician").optional(),
+  })
+  .refine((value) => !value.from || !value.to || boundStart(value.from) <= boundEnd(value.to), {
+    path: ["to"],
+    message: "The end of the period is before its start",
+  });
+export type RegisterQuery = z.input<typeof RegisterQuerySchema>;
+
+/** Start instant of a `from` bound (ms since epoch). */
+export function boundStart(bound: string): number {
+  return Date.parse(bound.length === 10 ? `${bound}T00:00:00Z` : bound);
+}
+
+/** End instant (exclusive) of a `to` bound: a bare date includes its whole day. */
+export function boundEnd(bound: string): number {
+  return bound.length === 10 ? Date.parse(`${bound}T00:00:00Z`) + 86_400_000 : Date.parse(bound);
+}
+
+export const RegisterListSchema = z.object({
+  movements: z.array(
+    MovementSchema.extend({
+      siteName: z.string().nullable(),
+      location: z.string().nullable(),
+    }),
+  ),
+  /** Totals by refrigerant and kind, kg, for the period. */
+  totals: z.array(z.object({ refrigerant: z.string(), kind: MovementKindSchema, kg: z.number() })),
+  /** False when the caller may only see their own movements (technicians). */
+  allTechnicians: z.boolean(),
+});
+export type RegisterList = z.infer<typeof RegisterListSchema>;
