@@ -52,7 +52,11 @@ import {
 import { RefrigerantTableSchema, type RefrigerantTable } from "../shared/engine/properties/refrigerant-table-schema.ts";
 
 // Build fails when a solved point differs from the superancillary by more than SUPERANCILLARY_TOLERANCE (issue 3).
-import { SUPERANCILLARY_TOLERANCE } from "../shared/engine/properties/property-tolerances.ts";
+import {
+  INTERPOLATION_TOLERANCE_K,
+  SUPERANCILLARY_TOLERANCE,
+} from "../shared/engine/properties/property-tolerances.ts";
+import { interpolateHermite } from "../shared/engine/properties/interpolate-hermite.ts";
 /** Grid step in K; the interpolation test proves ≤ 0.005 K error between rows. */
 const STEP_K = 0.5;
 /** Lowest table temperature unless the triple point is higher. */
@@ -308,6 +312,44 @@ function buildTable(designation: string, generated: string, dataNote: string): R
   return RefrigerantTableSchema.parse(table);
 }
 
+/** Largest interpolation error allowed at generation, K: half of INTERPOLATION_TOLERANCE_K. */
+const INTERPOLATION_BUDGET_K = INTERPOLATION_TOLERANCE_K / 2;
+
+/**
+ * Number of leading rows whose intervals all interpolate within INTERPOLATION_BUDGET_K:
+ * at each interval's midpoint the bubble and dew points are solved with the model and
+ * compared with the cubic Hermite the lookups use, in both directions (p from T, T from p).
+ */
+function rowsWithinInterpolationBudget(blend: BlendModel, states: SaturationState[]): number {
+  const midpoints = states.slice(0, -1).map((state, i) => 0.5 * (state.T + states[i + 1]!.T));
+  let usable = states.length;
+  for (const kind of ["bubble", "dew"] as const) {
+    const solved = traceSaturationCurve(blend, kind, midpoints);
+    const pressure = (state: SaturationState) => (kind === "bubble" ? state.bubblePressure : state.dewPressure);
+    const slope = (state: SaturationState) => (kind === "bubble" ? state.bubbleSlope : state.dewSlope);
+    for (let i = 0; i < midpoints.length && i + 1 < usable; i++) {
+      const point = solved[i];
+      if (!point) {
+        usable = i + 1;
+        break;
+      }
+      const [a, b] = [states[i]!, states[i + 1]!];
+      const meanSlope = (pressure(b) - pressure(a)) / (b.T - a.T);
+      const pressureError = Math.abs(
+        interpolateHermite(a.T, pressure(a), slope(a), b.T, pressure(b), slope(b), point.T) - point.p,
+      );
+      const temperatureError = Math.abs(
+        interpolateHermite(pressure(a), a.T, 1 / slope(a), pressure(b), b.T, 1 / slope(b), point.p) - point.T,
+      );
+      if (Math.max(pressureError / meanSlope, temperatureError) > INTERPOLATION_BUDGET_K) {
+        usable = i + 1;
+        break;
+      }
+    }
+  }
+  return usable;
+}
+
 /** Solves the bubble and dew point of a blend at one extra temperature by continuation from traced points. */
 function extendCurve(blend: BlendModel, kind: "bubble" | "dew", points: EnvelopePoint[], T: number): EnvelopePoint {
   const extended = traceSaturationCurve(blend, kind, [T], points.slice(-2));
@@ -356,10 +398,20 @@ function buildBlendTable(blend: BlendModel, generated: string, dataNote: string)
   };
   applyBlendIirReference(blend, atZero(bubble));
 
+  const states = grid.map((_, row) => blendSaturationState(blend, bubble[row]!, dew[row]!));
+  // Close to the critical point the bubble curve bends sharply; keep only the rows up to the
+  // first interval whose Hermite interpolation misses the model by more than half the promise.
+  const usable = rowsWithinInterpolationBudget(blend, states);
+  if (usable < grid.length) {
+    console.log(
+      `  ${designation}: table ends at ${grid[usable - 1]} °C, the next interval interpolates worse than ${INTERPOLATION_BUDGET_K} K`,
+    );
+  }
+  grid.length = usable;
+  bubble.length = usable;
+  dew.length = usable;
   const columns = emptyColumns();
-  grid.forEach((temperatureC, row) => {
-    pushRow(columns, temperatureC, blendSaturationState(blend, bubble[row]!, dew[row]!), M);
-  });
+  grid.forEach((temperatureC, row) => pushRow(columns, temperatureC, states[row]!, M));
 
   const atmosphere = 101_325;
   const normalBoilingPoint =
@@ -411,7 +463,7 @@ function buildBlendTable(blend: BlendModel, generated: string, dataNote: string)
       temperatureC: decimals(critical.T - KELVIN, 2),
       pressureKPa: significant(critical.p / 1000, 5),
       densityKgPerM3: significant(critical.rho * M, 4),
-      note: "critical point of the blend at its nominal composition from the multi-fluid model: the end of the phase envelope, where the bubble-point liquid and its incipient vapour become identical (bubble curve followed to a density ratio of 5e-4, then extrapolated); the table stops 0.5 K below it",
+      note: "critical point of the blend at its nominal composition from the multi-fluid model: the end of the phase envelope, where the bubble-point liquid and its incipient vapour become identical (bubble curve followed to a density ratio of 5e-4, then extrapolated); the table stops at least 0.5 K below it, at the last row where bubble and dew still converge and interpolate within 0.0025 K of the model",
     },
     normalBoilingPoint,
     glideAt0C,

@@ -87,7 +87,9 @@ describe("refrigerant tables against published values", () => {
     for (const info of listRefrigerants()) {
       const belowCritical = info.criticalPoint.temperatureC - info.validRange.maximumC;
       expect(belowCritical).toBeGreaterThan(0);
-      expect(belowCritical).toBeLessThan(1.1);
+      // multi-fluid blends stop where the sharply bending bubble curve still interpolates
+      // within half the 0.005 K promise (scripts/build-tables.ts), up to ~1.2 K below T_c
+      expect(belowCritical).toBeLessThan(info.source.model === "multi-fluid" ? 2 : 1.1);
     }
   });
 
