@@ -13,7 +13,9 @@ import type { Database } from "./db/client.ts";
 import type { Env } from "./env.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
 import type { Mailer } from "./mail/mailer.ts";
+import { attemptsRouter } from "./routes/attempts.ts";
 import { authRouter } from "./routes/auth.ts";
+import { casesRouter } from "./routes/cases.ts";
 import { customersRouter, equipmentRouter, sitesRouter } from "./routes/equipment.ts";
 import { photosRouter, visitsRouter } from "./routes/visits.ts";
 import { healthRouter } from "./routes/health.ts";
@@ -21,6 +23,7 @@ import { invitationsRouter } from "./routes/invitations.ts";
 import { membersRouter } from "./routes/members.ts";
 import { outboxRouter } from "./routes/outbox.ts";
 import { profileRouter } from "./routes/profile.ts";
+import { cylindersRouter, equipmentRefrigerantRouter, registerRouter, visitRefrigerantRouter } from "./routes/register.ts";
 
 export interface AppDeps {
   db: Database;
@@ -86,6 +89,13 @@ export function createApp(deps: AppDeps): Express {
   api.use("/equipment", equipmentRouter(deps));
   api.use("/visits", visitsRouter(accountDeps));
   api.use("/photos", photosRouter(deps));
+  // The refrigerant register (server/routes/register.ts): its visit and equipment routes sit beside theirs.
+  api.use("/visits", visitRefrigerantRouter(deps));
+  api.use("/equipment", equipmentRefrigerantRouter(deps));
+  api.use("/cylinders", cylindersRouter(deps));
+  api.use("/register", registerRouter(deps));
+  api.use("/cases", casesRouter(deps));
+  api.use("/attempts", attemptsRouter(deps));
   api.use(apiNotFound);
   app.use("/api", api);
 

@@ -1,0 +1,176 @@
+import { randomInt } from "node:crypto";
+import { Router, type Response } from "express";
+import { chargeStateText } from "@shared/content/charge-states.ts";
+import { diagnose, expectedAnswers, generateCase, GENERATOR_REFRIGERANTS, seededRandom } from "@shared/engine/index.ts";
+import {
+  CASEBOOK_PERMISSIONS,
+  CaseDraftSchema,
+  CaseFromReadingSchema,
+  GenerateCaseSchema,
+  canCasebook,
+  generatedCaseId,
+  type Case,
+  type CaseDraft,
+} from "@shared/schemas/casebook.ts";
+import { getAuth, requireRole, requireUser } from "../auth/session.ts";
+import {
+  deleteCase,
+  findCase,
+  findReadingForCase,
+  insertCase,
+  isBuiltInCaseId,
+  isGeneratedCaseId,
+  listCases,
+  publishCase,
+  updateCase,
+  type CaseRecord,
+} from "../db/casebook.ts";
+import { HttpError, notFound } from "../http/http-error.ts";
+import { parseId } from "../http/parse-id.ts";
+import type { AccountRouteDeps } from "./route-deps.ts";
+
+type Deps = Pick<AccountRouteDeps, "db">;
+
+const BUILT_IN_READ_ONLY =
+  "Built-in cases are shared by every organisation and cannot be changed. Write your own case instead (New case), or turn one of your visit readings into a case.";
+const GENERATED_READ_ONLY =
+  "Generated practice cases are made on demand and are not stored, so they cannot be changed or published.";
+const METERING_WORDS = { txv: "TXV", eev: "EEV", "fixed-orifice": "fixed orifice", capillary: "capillary" } as const;
+
+/** The case as the API sends it; the answers stay hidden from those who practise on it. */
+function toCase(record: CaseRecord, showAnswers: boolean): Case {
+  return {
+    id: record.id,
+    source: record.source,
+    status: record.status,
+    title: record.title,
+    difficulty: record.difficulty,
+    story: record.story,
+    input: record.input,
+    reasoning: showAnswers ? record.reasoning : null,
+    safetyTopics: record.safetyTopics,
+    expected: showAnswers ? record.expected : null,
+    authorName: record.authorName,
+    fromReading: record.fromReading,
+    editable: showAnswers && record.source === "organisation",
+    updatedAt: record.updatedAt,
+  };
+}
+
+/** Built-in and generated cases are nobody's to change: say so plainly, before any lookup. */
+function refuseSharedCase(id: string, status: 403 | 409 = 403) {
+  if (isBuiltInCaseId(id)) throw new HttpError(status, BUILT_IN_READ_ONLY);
+  if (isGeneratedCaseId(id)) throw new HttpError(status, GENERATED_READ_ONLY);
+}
+
+/** Expected answers always come from the engine, never from the author. */
+function withEngineAnswers(draft: CaseDraft) {
+  return { ...draft, expected: expectedAnswers(diagnose(draft.input)) };
+}
+
+const isAuthor = (res: Response) => canCasebook(getAuth(res).user.role, "author");
+
+export function casesRouter({ db }: Deps): Router {
+  const router = Router();
+
+  async function send(res: Response, organisationId: string, id: string, status = 200) {
+    const record = await findCase(db, organisationId, id, true);
+    if (!record) throw notFound("Case");
+    res.status(status).json({ case: toCase(record, true) });
+  }
+
+  router.get("/", requireUser, async (_req, res) => {
+    const { organisationId, user } = getAuth(res);
+    res.json({ cases: await listCases(db, organisationId, user.id, isAuthor(res)) });
+  });
+
+  router.post("/", requireRole(...CASEBOOK_PERMISSIONS.author), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const draft = CaseDraftSchema.parse(req.body);
+    const id = await insertCase(db, organisationId, { ...withEngineAnswers(draft), createdBy: user.id });
+    await send(res, organisationId, id, 201);
+  });
+
+  // A real visit's reading as a draft case: only the numbers and the kind of unit are kept.
+  router.post("/from-reading", requireRole(...CASEBOOK_PERMISSIONS.author), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const { readingId } = CaseFromReadingSchema.parse(req.body);
+    const reading = await findReadingForCase(db, organisationId, readingId);
+    if (!reading) throw notFound("Reading");
+    const { input } = reading;
+    const state = chargeStateText[reading.result.chargeState];
+    const draft = CaseDraftSchema.parse({
+      title: `Field case: ${reading.kind} on ${input.refrigerant}`,
+      difficulty: "intermediate",
+      story: {
+        site: "A real site (customer details removed)",
+        equipment: `${reading.kind[0]!.toUpperCase()}${reading.kind.slice(1)} on ${input.refrigerant}, circuit ${reading.circuit}, ${METERING_WORDS[input.meteringDevice]}`,
+        complaint: "Describe what the customer reported.",
+        conditions:
+          input.runMinutes === undefined
+            ? "Reading from the run log."
+            : `Reading from the run log after ${input.runMinutes} minutes of running.`,
+      },
+      input,
+      reasoning: `${state.title}. ${state.nextStep}`,
+      safetyTopics: [],
+    });
+    const id = await insertCase(db, organisationId, {
+      ...withEngineAnswers(draft),
+      createdBy: user.id,
+      fromReadingId: reading.id,
+    });
+    await send(res, organisationId, id, 201);
+  });
+
+  // Practice never runs out: any signed-in user may make a case; it is not stored.
+  router.post("/generate", requireUser, async (req, res) => {
+    const options = GenerateCaseSchema.parse(req.body);
+    if (!(GENERATOR_REFRIGERANTS as readonly string[]).includes(options.refrigerant)) {
+      throw new HttpError(400, "Some fields need attention", {
+        refrigerant: `The generator makes cases for ${GENERATOR_REFRIGERANTS.join(", ")}`,
+      });
+    }
+    const seed = options.seed ?? randomInt(0, 2 ** 32 - 1);
+    const id = generatedCaseId({ ...options, seed });
+    const made = generateCase({ ...options, random: seededRandom(seed) });
+    const record = await findCase(db, getAuth(res).organisationId, id, false);
+    if (!record || record.expected.chargeState !== made.expected.chargeState)
+      throw new Error("generated case did not reproduce from its id");
+    res.status(201).json({ case: toCase(record, isAuthor(res)) });
+  });
+
+  router.get("/:id", requireUser, async (req, res) => {
+    const author = isAuthor(res);
+    const record = await findCase(db, getAuth(res).organisationId, String(req.params.id), author);
+    if (!record) throw notFound("Case");
+    res.json({ case: toCase(record, author) });
+  });
+
+  router.put("/:id", requireRole(...CASEBOOK_PERMISSIONS.author), async (req, res) => {
+    const id = String(req.params.id);
+    refuseSharedCase(id);
+    const { organisationId } = getAuth(res);
+    const draft = CaseDraftSchema.parse(req.body);
+    if (!(await updateCase(db, organisationId, parseId(id, "Case"), withEngineAnswers(draft)))) throw notFound("Case");
+    await send(res, organisationId, id);
+  });
+
+  router.post("/:id/publish", requireRole(...CASEBOOK_PERMISSIONS.author), async (req, res) => {
+    const id = String(req.params.id);
+    // A built-in case is already published to everyone: a conflict with its state, not a permission.
+    refuseSharedCase(id, 409);
+    const { organisationId } = getAuth(res);
+    if (!(await publishCase(db, organisationId, parseId(id, "Case")))) throw notFound("Case");
+    await send(res, organisationId, id);
+  });
+
+  router.delete("/:id", requireRole(...CASEBOOK_PERMISSIONS.author), async (req, res) => {
+    const id = String(req.params.id);
+    refuseSharedCase(id);
+    if (!(await deleteCase(db, getAuth(res).organisationId, parseId(id, "Case")))) throw notFound("Case");
+    res.status(204).end();
+  });
+
+  return router;
+}
