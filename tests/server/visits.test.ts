@@ -153,6 +153,38 @@ describe("visits and the run log API", () => {
     expect(response.body.lastSettled).toHaveLength(2);
   });
 
+  it("e-mails the report to a customer contact with a link built from APP_URL", async () => {
+    const bad = await technician.post(`/api/visits/${visitId}/report/send`).send({ to: "not-an-address" });
+    expect(bad.status).toBe(400);
+    expect(bad.body.fields.to).toMatch(/e-mail/);
+    const sent = await technician.post(`/api/visits/${visitId}/report/send`).send({ to: "facilities@wattlelane.example" });
+    expect(sent.status).toBe(200);
+    const mail = await testApp.smtp.waitFor((message) => message.to.includes("facilities@wattlelane.example"));
+    // The subject is RFC 2047-encoded (it holds an em dash); the text part reads plainly.
+    expect(mail.decoded).toMatch(/Subject: =\?UTF-8\?Q\?Service_report:_RTU-1/);
+    expect(mail.decoded).toContain("RTU-1 packaged rooftop unit");
+    expect(mail.decoded).toContain("Circuit 1, last reading:");
+    expect(mail.decoded).toContain(`http://satura.test/visits/${visitId}/report`);
+    expect(mail.decoded).toContain("Added 0.4 kg liquid");
+    expect((await apprentice.post(`/api/visits/${visitId}/report/send`).send({ to: "x@example.com" })).status).toBe(403);
+    expect((await outsider.post(`/api/visits/${visitId}/report/send`).send({ to: "x@example.com" })).status).toBe(404);
+  });
+
+  it("creates customers and sites, refusing a site under another organisation's customer", async () => {
+    const customer = await technician.post("/api/customers").send({ name: "Bellbird Creek Library", contactEmail: "" });
+    expect(customer.status).toBe(201);
+    expect(customer.body.customer).toMatchObject({ name: "Bellbird Creek Library", contactEmail: null });
+    const badEmail = await technician.post("/api/customers").send({ name: "X", contactEmail: "nope" });
+    expect(badEmail.body.fields.contactEmail).toBeDefined();
+    const site = await technician.post("/api/sites").send({ customerId: customer.body.customer.id, name: "Reading room", altitudeM: 40 });
+    expect(site.status).toBe(201);
+    expect(site.body.site).toMatchObject({ customerName: "Bellbird Creek Library", altitudeM: 40 });
+    const foreign = await outsider.post("/api/sites").send({ customerId: customer.body.customer.id, name: "Not theirs" });
+    expect(foreign.status).toBe(400);
+    expect(foreign.body.fields.customerId).toBeDefined();
+    expect((await outsider.get("/api/customers")).body.customers).toEqual([]);
+  });
+
   it("accepts photos by content, refuses other files, and serves thumbnails", async () => {
     const open = (await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Photo check visit" })).body.visit.id;
     const png = await sharp({ create: { width: 800, height: 600, channels: 3, background: "#88aacc" } }).png().toBuffer();
