@@ -14,7 +14,22 @@ import {
   saturationTemperatureAt,
   type FluidModel,
 } from "../scripts/eos/index.ts";
+import {
+  coldStart,
+  createBlendModel,
+  readBinaryPairs,
+  readBlends,
+  readDepartureFunctions,
+  solveEnvelopePoint,
+  type BlendModel,
+} from "../scripts/eos/mixture/index.ts";
 import { nanosecondsPerCall, registerBench } from "./bench-registry.ts";
+
+function mixtureBlend(id: string): BlendModel {
+  const record = readBlends().find((blend) => blend.designation === id);
+  if (!record) throw new Error(`blends.tsv has no ${id}`);
+  return createBlendModel(record, readBinaryPairs(), readDepartureFunctions());
+}
 
 const POINTS = 4096;
 
@@ -61,15 +76,17 @@ function report(label: string, tableNs: number, directNs?: number): void {
 registerBench("refrigerant properties", () => {
   const all = listRefrigerants();
   const pureIds = all.filter((r) => r.kind === "pure").map((r) => r.id);
-  const blendIds = all.filter((r) => r.kind === "blend").map((r) => r.id);
+  const blendIds = all.filter((r) => r.kind === "blend" && r.source.model !== "multi-fluid").map((r) => r.id);
+  const mixtureIds = all.filter((r) => r.source.model === "multi-fluid").map((r) => r.id);
   const haveEos = referencePackExists();
   const models = new Map<string, FluidModel>();
-  if (haveEos) for (const r of all) models.set(r.id, createFluidModel(readReferenceFluid(r.id)));
+  if (haveEos) for (const id of [...pureIds, ...blendIds]) models.set(id, createFluidModel(readReferenceFluid(id)));
   else console.log("(../shared/reference absent: direct EOS solves skipped)");
 
   for (const [group, ids] of [
     ["pure fluids", pureIds],
     ["pseudo-pure blends", blendIds],
+    ["multi-fluid blends", mixtureIds],
     ["R410A only", ["R410A"]],
   ] as const) {
     const points = makePoints([...ids], 7);
@@ -83,7 +100,21 @@ registerBench("refrigerant properties", () => {
     }, 2_000_000);
     let directPressureNs: number | undefined;
     let directTemperatureNs: number | undefined;
-    if (haveEos) {
+    if (haveEos && group === "multi-fluid blends") {
+      // direct solve: Raoult/Wilson cold start, successive substitution and Newton on the mixture model
+      const blends = new Map(mixtureIds.map((id) => [id, mixtureBlend(id)]));
+      directPressureNs = nanosecondsPerCall(
+        (i) => {
+          const p = points[i % POINTS]!;
+          const blend = blends.get(p.id)!;
+          const T = p.temperatureC + 273.15;
+          const start = coldStart(blend.model, blend.moleFractions, p.point, T);
+          return solveEnvelopePoint(blend.model, blend.moleFractions, p.point, { temperature: T }, start).p;
+        },
+        200,
+        3,
+      );
+    } else if (haveEos) {
       const count = group === "pure fluids" ? 2000 : 20000;
       directPressureNs = nanosecondsPerCall(
         (i) => {
@@ -106,5 +137,6 @@ registerBench("refrigerant properties", () => {
     report(`saturationPressure, ${group}`, pressureNs, directPressureNs);
     report(`saturationTemperature, ${group}`, temperatureNs, directTemperatureNs);
   }
-  console.log("(direct EOS for blends = evaluating / inverting the published pL, pV equations)");
+  console.log("(direct EOS for pseudo-pure blends = evaluating / inverting the published pL, pV equations;");
+  console.log(" for multi-fluid blends = a cold-started bubble/dew solve of the mixture model, pressure only)");
 });
