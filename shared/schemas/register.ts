@@ -12,6 +12,13 @@
 import { z } from "zod";
 import { listRefrigerants } from "../engine/index.ts";
 import { MAX_CIRCUIT_CHARGE_KG, MAX_CIRCUITS, MAX_NOTE_LENGTH } from "./equipment.ts";
+import {
+  AnnualLeakRateSchema,
+  ChargeAgainstNameplateResultSchema,
+  MAX_WATER_CAPACITY_KG,
+  RefrigerantBalanceSchema,
+  VerdictSchema,
+} from "./procedures.ts";
 import { PersonRefSchema } from "./visits.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -28,8 +35,6 @@ export const CYLINDER_KIND_LABELS: Record<CylinderKind, string> = {
   reclaimed: "Reclaimed",
 };
 
-/** Largest water capacity accepted, kg: a one-tonne drum is the biggest container a crew moves. */
-export const MAX_WATER_CAPACITY_KG = 1000;
 export const MAX_LABEL_LENGTH = 60;
 
 const knownRefrigerants = () => new Set(listRefrigerants().map((info) => info.id));
@@ -73,14 +78,6 @@ export const CylinderCreateSchema = z
   });
 export type CylinderCreate = z.input<typeof CylinderCreateSchema>;
 export type CylinderValues = z.output<typeof CylinderCreateSchema>;
-
-export const VERDICTS = ["pass", "warn", "fail"] as const;
-export const VerdictSchema = z.object({
-  verdict: z.enum(VERDICTS),
-  reason: z.string(),
-  source: z.string(),
-});
-export type VerdictResult = z.infer<typeof VerdictSchema>;
 
 export const CylinderFillSchema = z.object({
   /** 80 % liquid fill at the reference temperature (cylinderFillLimit); null when the tables cannot say. */
@@ -234,11 +231,7 @@ export const CircuitBalanceSchema = z.object({
   addedKg: z.number(),
   sentForReclaimKg: z.number(),
   /** refrigerantBalance() over this visit's movements on the circuit. */
-  balance: z.object({
-    shortfallKg: z.number(),
-    finalChargeKg: z.number(),
-    differenceFromNameplateKg: z.number(),
-  }),
+  balance: RefrigerantBalanceSchema,
   /** True when refrigerant was recovered, so the shortfall says how far short the system was. */
   recoveredOnVisit: z.boolean(),
   /** The full weigh-in against the nameplate, when the circuit was emptied or a weigh-in was declared. */
@@ -247,7 +240,7 @@ export const CircuitBalanceSchema = z.object({
       weighedInKg: z.number(),
       lineAdjustmentKg: z.number(),
       declared: z.boolean(),
-      check: VerdictSchema.extend({ differenceKg: z.number(), percent: z.number() }),
+      check: ChargeAgainstNameplateResultSchema,
     })
     .nullable(),
 });
@@ -282,7 +275,7 @@ export const EquipmentRefrigerantSchema = z.object({
   movements: z.array(MovementSchema),
   /** Refrigerant put back per visit beyond what was taken out: what had leaked since. */
   topUps: z.array(z.object({ visitId: z.uuid(), date: z.string(), addedKg: z.number() })),
-  leakRate: z.object({ kgPerYear: z.number(), percentOfChargePerYear: z.number() }).nullable(),
+  leakRate: AnnualLeakRateSchema.nullable(),
 });
 export type EquipmentRefrigerant = z.infer<typeof EquipmentRefrigerantSchema>;
 

@@ -3,6 +3,7 @@
  * and the Wattle Lane Clinic it maintains. Every name and figure here is made up.
  */
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
+import type { CylinderKind } from "@shared/schemas/register.ts";
 import type { Role } from "../schema.ts";
 
 export const DEMO_PASSWORD = "bellbird-demo-2026";
@@ -103,4 +104,22 @@ export const demoEquipment: DemoEquipment[] = [
     ratedHighSideKPa: 2800,
     ratedLowSideKPa: 1600,
   },
+];
+
+/**
+ * Bellbird's R407C cylinders for the rooftop unit (invented). The recovery cylinder already
+ * holds refrigerant from an earlier job, entered as its contents on the day it was added;
+ * the register itself starts empty.
+ */
+export const demoCylinders: {
+  label: string;
+  serial: string;
+  kind: CylinderKind;
+  refrigerant: string;
+  waterCapacityKg: number;
+  tareKg: number;
+  initialContentsKg: number;
+}[] = [
+  { label: "BM-REC-07", serial: "RC12-30871", kind: "recovery", refrigerant: "R407C", waterCapacityKg: 12, tareKg: 7.4, initialContentsKg: 5.2 },
+  { label: "BM-407C-N3", serial: "NX10-55214", kind: "new", refrigerant: "R407C", waterCapacityKg: 11.8, tareKg: 6.1, initialContentsKg: 10 },
 ];

@@ -1,15 +1,17 @@
 import { count } from "drizzle-orm";
 import { hashPassword } from "../../auth/password.ts";
 import type { Database } from "../client.ts";
-import { customers, equipment, organisations, sites, users } from "../schema.ts";
+import { customers, cylinders, equipment, organisations, sites, users } from "../schema.ts";
 import {
   DEMO_PASSWORD,
   demoCustomer,
+  demoCylinders,
   demoEquipment,
   demoOrganisation,
   demoPeople,
   demoSite,
 } from "./demo-scenario.ts";
+import { seedDemoVisits } from "./demo-visits.ts";
 
 /**
  * Loads the demo company when the database holds no organisation yet, so a fresh
@@ -23,9 +25,10 @@ export async function seedDemoData(db: Database): Promise<boolean> {
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await db.transaction(async (tx) => {
     const [organisation] = await tx.insert(organisations).values(demoOrganisation).returning();
-    await tx
+    const people = await tx
       .insert(users)
-      .values(demoPeople.map((person) => ({ ...person, organisationId: organisation.id, passwordHash })));
+      .values(demoPeople.map((person) => ({ ...person, organisationId: organisation.id, passwordHash })))
+      .returning({ id: users.id, email: users.email });
     const [customer] = await tx
       .insert(customers)
       .values({ ...demoCustomer, organisationId: organisation.id })
@@ -37,6 +40,7 @@ export async function seedDemoData(db: Database): Promise<boolean> {
     await tx
       .insert(equipment)
       .values(demoEquipment.map((item) => ({ ...item, organisationId: organisation.id, siteId: site.id })));
+    await tx.insert(cylinders).values(demoCylinders.map((cylinder) => ({ ...cylinder, organisationId: organisation.id })));
   });
   return true;
 }

@@ -1,0 +1,225 @@
+/**
+ * Queries for the refrigerant register: cylinders, movements and declared weigh-ins. Every
+ * function takes the caller's organisation id; another organisation's records read as missing.
+ *
+ * A cylinder's contents are derived, never stored: initial contents + movements into it −
+ * movements out of it (MOVEMENT_CYLINDER_RULES says which way each kind goes).
+ */
+import { and, asc, desc, eq, gte, inArray, lt, sql, type SQL } from "drizzle-orm";
+import { MOVEMENT_CYLINDER_RULES, type CylinderValues, type Movement, type MovementKind } from "@shared/schemas/register.ts";
+import type { Database } from "./client.ts";
+import { adjustments, circuitCharges, cylinders, equipment, refrigerantMovements, sites, users } from "./schema.ts";
+
+export type CylinderRow = typeof cylinders.$inferSelect & { contentsKg: number };
+
+/** Contents per cylinder id from the register, for the given cylinders. */
+async function contentsById(db: Database, rows: (typeof cylinders.$inferSelect)[]): Promise<Map<string, number>> {
+  const result = new Map(rows.map((row) => [row.id, row.initialContentsKg]));
+  if (rows.length === 0) return result;
+  const sums = await db
+    .select({ cylinderId: refrigerantMovements.cylinderId, kind: refrigerantMovements.kind, kg: sql<number>`sum(${refrigerantMovements.kg})`.mapWith(Number) })
+    .from(refrigerantMovements)
+    .where(inArray(refrigerantMovements.cylinderId, rows.map((row) => row.id)))
+    .groupBy(refrigerantMovements.cylinderId, refrigerantMovements.kind);
+  for (const sum of sums) {
+    if (!sum.cylinderId) continue;
+    const sign = MOVEMENT_CYLINDER_RULES[sum.kind].intoCylinder ? 1 : -1;
+    result.set(sum.cylinderId, (result.get(sum.cylinderId) ?? 0) + sign * sum.kg);
+  }
+  // Sums of doubles drift in the last digits (0.1 + 0.2); grams are the scale's resolution.
+  for (const [id, kg] of result) result.set(id, Math.round(kg * 1000) / 1000);
+  return result;
+}
+
+export async function listCylinders(db: Database, organisationId: string, filter: { refrigerant?: string } = {}): Promise<CylinderRow[]> {
+  const conditions: SQL[] = [eq(cylinders.organisationId, organisationId)];
+  if (filter.refrigerant) conditions.push(eq(cylinders.refrigerant, filter.refrigerant));
+  const rows = await db.select().from(cylinders).where(and(...conditions)).orderBy(asc(cylinders.refrigerant), asc(cylinders.label));
+  const contents = await contentsById(db, rows);
+  return rows.map((row) => ({ ...row, contentsKg: contents.get(row.id) ?? 0 }));
+}
+
+export async function getCylinder(db: Database, organisationId: string, cylinderId: string): Promise<CylinderRow | undefined> {
+  const [row] = await db.select().from(cylinders).where(and(eq(cylinders.organisationId, organisationId), eq(cylinders.id, cylinderId)));
+  if (!row) return undefined;
+  const contents = await contentsById(db, [row]);
+  return { ...row, contentsKg: contents.get(row.id) ?? 0 };
+}
+
+/** @returns the new cylinder, or undefined when the organisation already has one with that label. */
+export async function createCylinder(db: Database, organisationId: string, values: CylinderValues): Promise<CylinderRow | undefined> {
+  const [existing] = await db
+    .select({ id: cylinders.id })
+    .from(cylinders)
+    .where(and(eq(cylinders.organisationId, organisationId), sql`lower(${cylinders.label}) = lower(${values.label})`));
+  if (existing) return undefined;
+  const [row] = await db.insert(cylinders).values({ ...values, organisationId }).returning();
+  return { ...row, contentsKg: row.initialContentsKg };
+}
+
+const movementColumns = {
+  id: refrigerantMovements.id,
+  visitId: refrigerantMovements.visitId,
+  equipmentId: refrigerantMovements.equipmentId,
+  equipmentName: equipment.name,
+  equipmentLocation: equipment.location,
+  siteName: sites.name,
+  circuit: refrigerantMovements.circuit,
+  refrigerant: refrigerantMovements.refrigerant,
+  kind: refrigerantMovements.kind,
+  kg: refrigerantMovements.kg,
+  cylinderId: refrigerantMovements.cylinderId,
+  cylinderLabel: cylinders.label,
+  technicianId: refrigerantMovements.technicianId,
+  technicianName: users.name,
+  at: refrigerantMovements.at,
+  note: refrigerantMovements.note,
+};
+
+export type MovementRow = Movement & { siteName: string | null; location: string | null };
+
+function selectMovements(db: Database, conditions: SQL[]) {
+  return db
+    .select(movementColumns)
+    .from(refrigerantMovements)
+    .leftJoin(equipment, eq(equipment.id, refrigerantMovements.equipmentId))
+    .leftJoin(sites, eq(sites.id, equipment.siteId))
+    .leftJoin(cylinders, eq(cylinders.id, refrigerantMovements.cylinderId))
+    .leftJoin(users, eq(users.id, refrigerantMovements.technicianId))
+    .where(and(...conditions));
+}
+
+function toMovement(row: Awaited<ReturnType<typeof selectMovements>>[number]): MovementRow {
+  return {
+    id: row.id,
+    visitId: row.visitId,
+    equipmentId: row.equipmentId,
+    equipmentName: row.equipmentName,
+    circuit: row.circuit,
+    refrigerant: row.refrigerant,
+    kind: row.kind,
+    kg: row.kg,
+    cylinder: row.cylinderId && row.cylinderLabel ? { id: row.cylinderId, label: row.cylinderLabel } : null,
+    technician: row.technicianId && row.technicianName ? { id: row.technicianId, name: row.technicianName } : null,
+    at: row.at.toISOString(),
+    note: row.note,
+    siteName: row.siteName,
+    location: row.equipmentLocation,
+  };
+}
+
+export async function visitMovements(db: Database, organisationId: string, visitId: string): Promise<MovementRow[]> {
+  const rows = await selectMovements(db, [eq(refrigerantMovements.organisationId, organisationId), eq(refrigerantMovements.visitId, visitId)]).orderBy(
+    asc(refrigerantMovements.at),
+    asc(refrigerantMovements.createdAt),
+  );
+  return rows.map(toMovement);
+}
+
+export async function equipmentMovements(db: Database, organisationId: string, equipmentId: string): Promise<MovementRow[]> {
+  const rows = await selectMovements(db, [eq(refrigerantMovements.organisationId, organisationId), eq(refrigerantMovements.equipmentId, equipmentId)]).orderBy(
+    asc(refrigerantMovements.at),
+    asc(refrigerantMovements.createdAt),
+  );
+  return rows.map(toMovement);
+}
+
+export async function cylinderMovements(db: Database, organisationId: string, cylinderId: string): Promise<MovementRow[]> {
+  const rows = await selectMovements(db, [eq(refrigerantMovements.organisationId, organisationId), eq(refrigerantMovements.cylinderId, cylinderId)]).orderBy(
+    desc(refrigerantMovements.at),
+    desc(refrigerantMovements.createdAt),
+  );
+  return rows.map(toMovement);
+}
+
+export interface RegisterFilter {
+  /** Inclusive start, ms since epoch. */
+  fromMs?: number;
+  /** Exclusive end, ms since epoch. */
+  toMs?: number;
+  technicianId?: string;
+}
+
+/** The register for a period, oldest first (the order a regulator's record reads in). */
+export async function registerMovements(db: Database, organisationId: string, filter: RegisterFilter): Promise<MovementRow[]> {
+  const conditions: SQL[] = [eq(refrigerantMovements.organisationId, organisationId)];
+  if (filter.fromMs !== undefined) conditions.push(gte(refrigerantMovements.at, new Date(filter.fromMs)));
+  if (filter.toMs !== undefined) conditions.push(lt(refrigerantMovements.at, new Date(filter.toMs)));
+  if (filter.technicianId) conditions.push(eq(refrigerantMovements.technicianId, filter.technicianId));
+  const rows = await selectMovements(db, conditions).orderBy(asc(refrigerantMovements.at), asc(refrigerantMovements.createdAt));
+  return rows.map(toMovement);
+}
+
+export interface MovementInsert {
+  visitId: string | null;
+  equipmentId: string | null;
+  circuit: number | null;
+  refrigerant: string;
+  kind: MovementKind;
+  kg: number;
+  cylinderId: string | null;
+  technicianId: string;
+  at?: Date;
+  note: string | null;
+}
+
+export async function insertMovement(db: Database, organisationId: string, values: MovementInsert): Promise<MovementRow> {
+  const [row] = await db
+    .insert(refrigerantMovements)
+    .values({ ...values, organisationId })
+    .returning({ id: refrigerantMovements.id });
+  const [created] = await selectMovements(db, [eq(refrigerantMovements.id, row.id)]);
+  return toMovement(created);
+}
+
+export async function visitCircuitCharges(db: Database, organisationId: string, visitId: string) {
+  return db
+    .select({ circuit: circuitCharges.circuit, lineAdjustmentKg: circuitCharges.lineAdjustmentKg })
+    .from(circuitCharges)
+    .where(and(eq(circuitCharges.organisationId, organisationId), eq(circuitCharges.visitId, visitId)));
+}
+
+/** Declares (or updates) a full weigh-in of one circuit on a visit. */
+export async function upsertCircuitCharge(
+  db: Database,
+  organisationId: string,
+  values: { visitId: string; circuit: number; lineAdjustmentKg: number; recordedBy: string },
+): Promise<void> {
+  await db
+    .insert(circuitCharges)
+    .values({ ...values, organisationId })
+    .onConflictDoUpdate({
+      target: [circuitCharges.visitId, circuitCharges.circuit],
+      set: { lineAdjustmentKg: values.lineAdjustmentKg, recordedBy: values.recordedBy, updatedAt: new Date() },
+    });
+}
+
+/** Removes a declared weigh-in (the technician unticked it). */
+export async function deleteCircuitCharge(db: Database, organisationId: string, visitId: string, circuit: number): Promise<void> {
+  await db
+    .delete(circuitCharges)
+    .where(and(eq(circuitCharges.organisationId, organisationId), eq(circuitCharges.visitId, visitId), eq(circuitCharges.circuit, circuit)));
+}
+
+/** A member of the organisation by id (for the technician filter), or undefined. */
+export async function findMember(db: Database, organisationId: string, userId: string) {
+  const [row] = await db
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(and(eq(users.organisationId, organisationId), eq(users.id, userId)));
+  return row;
+}
+
+/**
+ * kg marked on the visit's run log as charge adjustments. They are marks on the trend chart,
+ * not register entries: the visit's refrigerant section shows them only as a reminder.
+ */
+export async function runLogChargeMarks(db: Database, organisationId: string, visitId: string): Promise<{ added: number; removed: number }> {
+  const rows = await db
+    .select({ kind: adjustments.kind, kg: sql<number>`coalesce(sum(${adjustments.amountKg}), 0)`.mapWith(Number) })
+    .from(adjustments)
+    .where(and(eq(adjustments.organisationId, organisationId), eq(adjustments.visitId, visitId), inArray(adjustments.kind, ["charge-added", "charge-removed"])))
+    .groupBy(adjustments.kind);
+  const kgOf = (kind: string) => Math.round((rows.find((row) => row.kind === kind)?.kg ?? 0) * 1000) / 1000;
+  return { added: kgOf("charge-added"), removed: kgOf("charge-removed") };
+}

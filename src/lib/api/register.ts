@@ -1,0 +1,111 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { z } from "zod";
+import {
+  CylinderDetailSchema,
+  CylinderSchema,
+  EquipmentRefrigerantSchema,
+  MovementCreatedSchema,
+  RegisterListSchema,
+  VisitRefrigerantSchema,
+  type ChargingUpdate,
+  type Cylinder,
+  type CylinderCreate,
+  type CylinderDetail,
+  type EquipmentRefrigerant,
+  type MovementCreate,
+  type ReclaimCreate,
+  type RegisterList,
+  type RegisterQuery,
+  type VisitRefrigerant,
+} from "@shared/schemas/register.ts";
+import { apiRequest } from "./api-client.ts";
+
+const CylinderListSchema = z.object({ cylinders: z.array(CylinderSchema) });
+const CylinderEnvelopeSchema = z.object({ cylinder: CylinderSchema });
+
+export async function getCylinders(filter: { refrigerant?: string }, signal?: AbortSignal): Promise<Cylinder[]> {
+  const query = filter.refrigerant ? `?refrigerant=${encodeURIComponent(filter.refrigerant)}` : "";
+  return (await apiRequest(`/cylinders${query}`, { schema: CylinderListSchema, signal })).cylinders;
+}
+
+export function getCylinder(id: string, signal?: AbortSignal): Promise<CylinderDetail> {
+  return apiRequest(`/cylinders/${id}`, { schema: CylinderDetailSchema, signal });
+}
+
+export async function createCylinder(values: CylinderCreate): Promise<Cylinder> {
+  return (await apiRequest("/cylinders", { method: "POST", body: values, schema: CylinderEnvelopeSchema })).cylinder;
+}
+
+export function sendCylinderForReclaim({ cylinderId, ...body }: ReclaimCreate & { cylinderId: string }) {
+  return apiRequest(`/cylinders/${cylinderId}/reclaim`, { method: "POST", body, schema: MovementCreatedSchema });
+}
+
+export function getVisitRefrigerant(visitId: string, signal?: AbortSignal): Promise<VisitRefrigerant> {
+  return apiRequest(`/visits/${visitId}/refrigerant`, { schema: VisitRefrigerantSchema, signal });
+}
+
+export function createMovement({ visitId, ...body }: MovementCreate & { visitId: string }) {
+  return apiRequest(`/visits/${visitId}/refrigerant`, { method: "POST", body, schema: MovementCreatedSchema });
+}
+
+/** Declares a full weigh-in of a circuit with its line adjustment, or clears it (null). */
+export function setCharging({ visitId, circuit, value }: { visitId: string; circuit: number; value: ChargingUpdate | null }): Promise<VisitRefrigerant> {
+  return apiRequest(`/visits/${visitId}/refrigerant/charging/${circuit}`, {
+    method: value ? "PUT" : "DELETE",
+    body: value ?? undefined,
+    schema: VisitRefrigerantSchema,
+  });
+}
+
+export function getEquipmentRefrigerant(equipmentId: string, signal?: AbortSignal): Promise<EquipmentRefrigerant> {
+  return apiRequest(`/equipment/${equipmentId}/refrigerant`, { schema: EquipmentRefrigerantSchema, signal });
+}
+
+function registerSearch(filter: RegisterQuery): string {
+  const search = new URLSearchParams(Object.entries(filter).filter((entry): entry is [string, string] => Boolean(entry[1])));
+  return search.size > 0 ? `?${search}` : "";
+}
+
+export function getRegister(filter: RegisterQuery, signal?: AbortSignal): Promise<RegisterList> {
+  return apiRequest(`/register${registerSearch(filter)}`, { schema: RegisterListSchema, signal });
+}
+
+/** The CSV is downloaded by the browser itself (a plain link), so it keeps the session cookie. */
+export const registerExportHref = (filter: RegisterQuery) => `/api/register/export.csv${registerSearch(filter)}`;
+
+export const cylindersQueryOptions = (filter: { refrigerant?: string } = {}) =>
+  queryOptions({ queryKey: ["cylinders", "list", filter], queryFn: ({ signal }) => getCylinders(filter, signal) });
+
+export const cylinderQueryOptions = (id: string) =>
+  queryOptions({ queryKey: ["cylinders", "detail", id], queryFn: ({ signal }) => getCylinder(id, signal) });
+
+export const visitRefrigerantQueryOptions = (visitId: string) =>
+  queryOptions({ queryKey: ["register", "visit", visitId], queryFn: ({ signal }) => getVisitRefrigerant(visitId, signal) });
+
+export const equipmentRefrigerantQueryOptions = (equipmentId: string) =>
+  queryOptions({ queryKey: ["register", "equipment", equipmentId], queryFn: ({ signal }) => getEquipmentRefrigerant(equipmentId, signal) });
+
+export const registerQueryOptions = (filter: RegisterQuery) =>
+  queryOptions({ queryKey: ["register", "list", filter], queryFn: ({ signal }) => getRegister(filter, signal) });
+
+export const useCylinders = (filter: { refrigerant?: string } = {}) => useQuery(cylindersQueryOptions(filter));
+export const useCylinder = (id: string) => useQuery(cylinderQueryOptions(id));
+export const useVisitRefrigerant = (visitId: string) => useQuery(visitRefrigerantQueryOptions(visitId));
+export const useEquipmentRefrigerant = (equipmentId: string) => useQuery(equipmentRefrigerantQueryOptions(equipmentId));
+export const useRegister = (filter: RegisterQuery) => useQuery(registerQueryOptions(filter));
+
+/** Every register change moves cylinder contents and balances: refresh both families. */
+function useRegisterMutation<TVariables, TResult>(mutationFn: (variables: TVariables) => Promise<TResult>, options: { silentErrors?: boolean } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn,
+    meta: options.silentErrors ? { silentErrors: true } : undefined,
+    onSuccess: () =>
+      Promise.all([queryClient.invalidateQueries({ queryKey: ["register"] }), queryClient.invalidateQueries({ queryKey: ["cylinders"] })]),
+  });
+}
+
+export const useCreateCylinder = () => useRegisterMutation(createCylinder);
+export const useCreateMovement = () => useRegisterMutation(createMovement);
+export const useSendCylinderForReclaim = () => useRegisterMutation(sendCylinderForReclaim);
+export const useSetCharging = () => useRegisterMutation(setCharging);
