@@ -11,7 +11,6 @@ import {
   demoPeople,
   demoSite,
 } from "./demo-scenario.ts";
-import { seedDemoVisits } from "./demo-visits.ts";
 
 /**
  * Loads the demo company when the database holds no organisation yet, so a fresh
@@ -25,10 +24,9 @@ export async function seedDemoData(db: Database): Promise<boolean> {
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await db.transaction(async (tx) => {
     const [organisation] = await tx.insert(organisations).values(demoOrganisation).returning();
-    const people = await tx
+    await tx
       .insert(users)
-      .values(demoPeople.map((person) => ({ ...person, organisationId: organisation.id, passwordHash })))
-      .returning({ id: users.id, email: users.email });
+      .values(demoPeople.map((person) => ({ ...person, organisationId: organisation.id, passwordHash })));
     const [customer] = await tx
       .insert(customers)
       .values({ ...demoCustomer, organisationId: organisation.id })
