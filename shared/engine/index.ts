@@ -60,3 +60,50 @@ export { workedSolution } from "./casebook/worked-solution.ts";
 export { caseSafetyNotes } from "./casebook/case-safety-notes.ts";
 export { generateCase, GENERATOR_REFRIGERANTS, SENSOR_NOISE_K, GAUGE_RESOLUTION_KPA, MAX_GENERATOR_DRAWS } from "./casebook/generate-case.ts";
 export type { GeneratedCase, GenerateCaseOptions } from "./casebook/generate-case.ts";
+
+// Procedures (electrical checks, pressure test, evacuation, refrigerant register, charging)
+export { voltageImbalance } from "./procedures/voltage-imbalance.ts";
+export { currentImbalance } from "./procedures/current-imbalance.ts";
+export { judgeVoltageImbalance } from "./procedures/judge-voltage-imbalance.ts";
+export { judgeSupplyVoltage } from "./procedures/judge-supply-voltage.ts";
+export { judgeInsulationResistance } from "./procedures/judge-insulation-resistance.ts";
+export { windingBalance } from "./procedures/winding-balance.ts";
+export { runningCurrent } from "./procedures/running-current.ts";
+export { pressureTestResult } from "./procedures/pressure-test-result.ts";
+export { checkTestPressure } from "./procedures/check-test-pressure.ts";
+export { analyseDecay } from "./procedures/analyse-decay.ts";
+export { evacuationReached } from "./procedures/evacuation-reached.ts";
+export { micronsToPa } from "./procedures/microns-to-pa.ts";
+export { paToMicrons } from "./procedures/pa-to-microns.ts";
+export { refrigerantBalance } from "./procedures/refrigerant-balance.ts";
+export { cylinderFillLimit } from "./procedures/cylinder-fill-limit.ts";
+export { judgeCylinderFill } from "./procedures/judge-cylinder-fill.ts";
+export { annualLeakRate } from "./procedures/annual-leak-rate.ts";
+export { chargeAgainstNameplate } from "./procedures/charge-against-nameplate.ts";
+export { judgeLeakSearch } from "./procedures/judge-leak-search.ts";
+export type { LeakSearchFindings } from "./procedures/judge-leak-search.ts";
+export { PROCEDURE_SOURCES, citeProcedure } from "./procedures/procedure-sources.ts";
+export type { ProcedureSourceTag } from "./procedures/procedure-sources.ts";
+export {
+  VOLTAGE_IMBALANCE_LIMITS,
+  SUPPLY_VOLTAGE_LIMITS,
+  INSULATION_LIMITS,
+  WINDING_BALANCE_LIMITS,
+  RUNNING_CURRENT_LIMITS,
+  CURRENT_IMBALANCE_MAX_PERCENT,
+  TEST_PRESSURE_LIMITS,
+  EVACUATION_LIMITS,
+  CYLINDER_FILL_LIMITS,
+  CHARGE_LIMITS,
+} from "./procedures/procedure-limits.ts";
+export type {
+  VoltageImbalanceLimits,
+  SupplyVoltageLimits,
+  InsulationLimits,
+  WindingBalanceLimits,
+  RunningCurrentLimits,
+  TestPressureLimits,
+  EvacuationLimits,
+  CylinderFillLimits,
+  ChargeLimits,
+} from "./procedures/procedure-limits.ts";

@@ -1,0 +1,55 @@
+/**
+ * Sources behind the procedure limits, by the tags of the project's trade research notes
+ * (source list). Titles are the real documents; every verdict's `source` is built with
+ * `citeProcedure()`, or says "common practice" / "memory" where no source was found.
+ */
+export const PROCEDURE_SOURCES = {
+  S4: "ACHR News, The New Wave of Blends (500-micron industry standard; liquid charging of blends)",
+  S10: "California Energy Commission, 2008 Reference Residential Appendices, RA3.2 refrigerant charge verification",
+  S11: "Fujitsu FO20R series installation manual §5.8 (weigh-in, ±1 oz scale)",
+  S39: "rhvactools.com, Compressor Rated Load Amperage (RLA) (weak)",
+  S40: "RV products 9000 series service manual p. 18 (±10 % voltage)",
+  S41: "Trane CXRC-SVX01J installation manual p. 20 (2 % maximum voltage imbalance)",
+  S42: "Carrier 50JZ product data p. 22; AAON RN series manual p. 47 (2 % maximum)",
+  S43: "eng-tips.com threads quoting NEMA MG-1 (1 % recommended, above 5 % not recommended)",
+  S44: "EC&M, Unbalanced current (NEMA MG-1; lead-to-lead resistance within 2 %)",
+  S45: "Carrier/Carlyle 06E compressor manual p. 113 (current unbalance max 10 %)",
+  S47: "Detector Inspector help centre, Insulation Resistance (AS/NZS 3000 Wiring Rules, ≥ 1 MΩ) (weak)",
+  S48: "Tecumseh AH5540E service handbook p. 49 (below 2 MΩ = ground fault)",
+  S49: "HVAC School, Scroll Compressor Pump Down, Megohm Test & Fusite Terminals (Copeland AE4-1294)",
+  S52: "Lennox/Haier 4HP16 installation instructions (500 µm held for 20 minutes)",
+  S53: "ClimateMaster ACL and Fujitsu FO24 installation manuals §4.6–4.7 (500 µm for 15 minutes)",
+  S54: "Amana remote heat pump service manual p. 7 (1500 / 5000 µm decay interpretation)",
+  S55: "Deep Vacuum Principles and Applications, vacuum-gauge field guide",
+  S57: "US Unified Facilities Guide Specification 15182 §3.3, refrigerant piping tests",
+  S58: "Thermo King container unit maintenance manual, Pressure Rise Test",
+  S60: "sens4.com, Units for vacuum measurement (1 Torr = 133.322 Pa = 1000 micron)",
+  S61: "ANSI/ASHRAE Standard 15-1994 §10.1.2 Testing Procedure",
+  S63: "US UFGS 15652A §3.2.1 (isolate equipment during pressure tests)",
+  S64: "Behler-Young tech tip (close stop valves on pre-charged units before a nitrogen test)",
+  S65: "LG ARUV / ARUN / ATNH installation manuals (leak test, temperature correction, worked example)",
+  S74: "REFCOM TB017 v2, Pressure testing in changing ambient conditions",
+  S78: "Evomart weighing-scales note, safe fill 80 % at 21 °C (weak)",
+  S79: "HVAC School, recovery tank fill calculation",
+} as const;
+
+export type ProcedureSourceTag = keyof typeof PROCEDURE_SOURCES;
+
+/** Marks for limits without a published source (trade notes, "How to read the marks"). */
+export const COMMON_PRACTICE = "common practice";
+export const MEMORY = "memory (unverified)";
+export const COMPUTED = "computed from the definition";
+
+/**
+ * Formats source tags as "[S41] title; [S42] title", optionally followed by marks such as
+ * `COMMON_PRACTICE`.
+ *
+ * @param tags source tags of the trade research notes
+ * @param marks extra notes appended after the titles
+ * @returns one line naming every source
+ * @throws never
+ * @example citeProcedure(["S60"]) // "[S60] sens4.com, Units for vacuum measurement (1 Torr = 133.322 Pa = 1000 micron)"
+ */
+export function citeProcedure(tags: readonly ProcedureSourceTag[], ...marks: string[]): string {
+  return [...tags.map((tag) => `[${tag}] ${PROCEDURE_SOURCES[tag]}`), ...marks].join("; ");
+}
