@@ -11,6 +11,7 @@ import {
   demoPeople,
   demoSite,
 } from "./demo-scenario.ts";
+import { seedDemoVisits } from "./demo-visits.ts";
 
 /**
  * Loads the demo company when the database holds no organisation yet, so a fresh
@@ -24,9 +25,10 @@ export async function seedDemoData(db: Database): Promise<boolean> {
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await db.transaction(async (tx) => {
     const [organisation] = await tx.insert(organisations).values(demoOrganisation).returning();
-    await tx
+    const people = await tx
       .insert(users)
-      .values(demoPeople.map((person) => ({ ...person, organisationId: organisation.id, passwordHash })));
+      .values(demoPeople.map((person) => ({ ...person, organisationId: organisation.id, passwordHash })))
+      .returning({ id: users.id, email: users.email });
     const [customer] = await tx
       .insert(customers)
       .values({ ...demoCustomer, organisationId: organisation.id })
@@ -35,10 +37,23 @@ export async function seedDemoData(db: Database): Promise<boolean> {
       .insert(sites)
       .values({ ...demoSite, organisationId: organisation.id, customerId: customer.id })
       .returning();
-    await tx
+    const units = await tx
       .insert(equipment)
-      .values(demoEquipment.map((item) => ({ ...item, organisationId: organisation.id, siteId: site.id })));
+      .values(demoEquipment.map((item) => ({ ...item, organisationId: organisation.id, siteId: site.id })))
+      .returning();
     await tx.insert(cylinders).values(demoCylinders.map((cylinder) => ({ ...cylinder, organisationId: organisation.id })));
+    const person = (email: string) => people.find((row) => row.email === email)!.id;
+    await seedDemoVisits(
+      tx,
+      organisation.id,
+      { rooftop: units.find((unit) => unit.refrigerant === "R407C")!, split: units.find((unit) => unit.refrigerant === "R32")! },
+      {
+        owner: person("owner@bellbird.example"),
+        senior: person("senior@bellbird.example"),
+        technician: person("tech@bellbird.example"),
+        technician2: person("tech2@bellbird.example"),
+      },
+    );
   });
   return true;
 }
