@@ -36,6 +36,15 @@ export const paths = {
     report: { path: "/visits/:visitId/report", getHref: (id: string) => `/visits/${encodeURIComponent(id)}/report` },
   },
 
+  casebook: {
+    path: "/casebook",
+    getHref: () => "/casebook",
+    new: { path: "/casebook/new", getHref: () => "/casebook/new" },
+    team: { path: "/casebook/team", getHref: () => "/casebook/team" },
+    case: { path: "/casebook/cases/:caseId", getHref: (id: string) => `/casebook/cases/${encodeURIComponent(id)}` },
+    edit: { path: "/casebook/cases/:caseId/edit", getHref: (id: string) => `/casebook/cases/${encodeURIComponent(id)}/edit` },
+  },
+
   members: { path: "/members", getHref: () => "/members" },
   profile: { path: "/profile", getHref: () => "/profile" },
   outbox: { path: "/outbox", getHref: () => "/outbox" },

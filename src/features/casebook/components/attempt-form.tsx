@@ -1,0 +1,183 @@
+import { useId, useState, type FormEvent } from "react";
+import { chargeStateText } from "@shared/content/charge-states.ts";
+import { AttemptAnswersSchema, REASONING_MAX_LENGTH, type AttemptAnswers } from "@shared/schemas/casebook.ts";
+import { CHARGE_STATES } from "@shared/schemas/diagnosis.ts";
+import { Button } from "@/components/ui/button/button.tsx";
+import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
+import { NumberInput } from "@/components/ui/field/number-input.tsx";
+import type { DisplayUnits } from "@/lib/units/display-units.ts";
+import { parseQuantity, unitLabel, type Quantity } from "../utils/quantities.ts";
+
+const NUMBER_FIELDS: {
+  field: "evaporatingTempC" | "condensingTempC" | "superheatK" | "subcoolingK";
+  label: string;
+  hint: string;
+  quantity: Quantity;
+}[] = [
+  {
+    field: "evaporatingTempC",
+    label: "Evaporating saturation temperature",
+    hint: "From the suction pressure",
+    quantity: "temperature",
+  },
+  {
+    field: "condensingTempC",
+    label: "Condensing saturation temperature",
+    hint: "From the liquid pressure",
+    quantity: "temperature",
+  },
+  { field: "superheatK", label: "Superheat", hint: "Leave blank if it cannot be worked out", quantity: "difference" },
+  { field: "subcoolingK", label: "Subcooling", hint: "Leave blank if it cannot be worked out", quantity: "difference" },
+];
+
+type Draft = Record<(typeof NUMBER_FIELDS)[number]["field"], string> & { chargeState: string; reasoning: string };
+const EMPTY: Draft = {
+  evaporatingTempC: "",
+  condensingTempC: "",
+  superheatK: "",
+  subcoolingK: "",
+  chargeState: "",
+  reasoning: "",
+};
+
+function NumberAnswer({
+  label,
+  hint,
+  unit,
+  value,
+  error,
+  onChange,
+}: {
+  label: string;
+  hint: string;
+  unit: string;
+  value: string;
+  error?: string;
+  onChange: (text: string) => void;
+}) {
+  const id = useId();
+  return (
+    <div className="space-y-1">
+      <label htmlFor={id} className="block font-medium">
+        {label}
+      </label>
+      <NumberInput
+        id={id}
+        unit={unit}
+        value={value}
+        invalid={Boolean(error)}
+        aria-describedby={`${id}-hint${error ? ` ${id}-error` : ""}`}
+        onChange={(event) => onChange(event.target.value)}
+      />
+      <p id={`${id}-hint`} className="text-sm text-muted">
+        {hint}
+      </p>
+      {error && (
+        <p id={`${id}-error`} className="text-sm font-medium text-fault">
+          ⚠ {error}
+        </p>
+      )}
+    </div>
+  );
+}
+
+/**
+ * The apprentice's answers in their display units. Each is converted to SI-metric before it
+ * is checked with the shared schema and sent; the server does the scoring.
+ */
+export function AttemptForm({
+  units,
+  atmosphericKPa,
+  pending,
+  serverError,
+  onSubmit,
+}: {
+  units: DisplayUnits;
+  atmosphericKPa: number;
+  pending: boolean;
+  serverError: string | null;
+  onSubmit: (answers: AttemptAnswers) => void;
+}) {
+  const [draft, setDraft] = useState<Draft>(EMPTY);
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const set = (field: keyof Draft) => (text: string) => setDraft((current) => ({ ...current, [field]: text }));
+
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    const found: Record<string, string> = {};
+    const numbers: Record<string, number | null> = {};
+    for (const { field, label, quantity } of NUMBER_FIELDS) {
+      const parsed = parseQuantity(draft[field], quantity, units, atmosphericKPa);
+      if (parsed === "invalid") found[field] = `${label} must be a number, e.g. 4.5`;
+      numbers[field] = parsed === "invalid" || parsed === undefined ? null : parsed;
+    }
+    if (!draft.evaporatingTempC.trim()) found.evaporatingTempC ??= "Work out the evaporating temperature";
+    if (!draft.condensingTempC.trim()) found.condensingTempC ??= "Work out the condensing temperature";
+    const parsed = AttemptAnswersSchema.safeParse({
+      ...numbers,
+      chargeState: draft.chargeState || undefined,
+      reasoning: draft.reasoning,
+    });
+    if (!parsed.success) {
+      for (const issue of parsed.error.issues)
+        found[String(issue.path[0])] ??= issue.path[0] === "chargeState" ? "Pick the charge state" : issue.message;
+    }
+    setErrors(found);
+    if (Object.keys(found).length > 0 || !parsed.success) return;
+    onSubmit(parsed.data);
+  }
+
+  return (
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-labelledby="attempt-heading"
+      className="space-y-4 rounded-card border-2 border-rule bg-surface p-4"
+    >
+      <h2 id="attempt-heading" className="text-xl font-semibold">
+        Your working
+      </h2>
+      <p className="text-muted">
+        Answers count as right within ±0.5 K ({units.temperature === "F" ? "±0.9 °F" : "half a kelvin"}).
+      </p>
+      <div className="grid gap-4 sm:grid-cols-2">
+        {NUMBER_FIELDS.map(({ field, label, hint, quantity }) => (
+          <NumberAnswer
+            key={field}
+            label={label}
+            hint={hint}
+            unit={unitLabel(quantity, units)}
+            value={draft[field]}
+            error={errors[field]}
+            onChange={set(field)}
+          />
+        ))}
+      </div>
+      <SelectField
+        label="Charge state"
+        value={draft.chargeState}
+        error={errors.chargeState}
+        onChange={(event) => set("chargeState")(event.target.value)}
+      >
+        <option value="">Choose…</option>
+        {CHARGE_STATES.map((state) => (
+          <option key={state} value={state}>
+            {chargeStateText[state].title}
+          </option>
+        ))}
+      </SelectField>
+      <TextField
+        label="Your reasoning, in one line"
+        hint="Which reading points where, e.g. “low subcooling on a TXV with high superheat”"
+        maxLength={REASONING_MAX_LENGTH}
+        value={draft.reasoning}
+        error={errors.reasoning}
+        onChange={(event) => set("reasoning")(event.target.value)}
+      />
+      {serverError && <FormAlert>{serverError}</FormAlert>}
+      <Button type="submit" size="lg" disabled={pending}>
+        {pending ? "Checking…" : "Check my answers"}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,98 @@
+import { CircleCheck, CircleX } from "lucide-react";
+import { chargeStateText } from "@shared/content/charge-states.ts";
+import type { AnswerField, Attempt } from "@shared/schemas/casebook.ts";
+import type { ChargeState } from "@shared/schemas/diagnosis.ts";
+import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
+import { cn } from "@/lib/cn.ts";
+import type { DisplayUnits } from "@/lib/units/display-units.ts";
+import { withUnit, type Quantity } from "../utils/quantities.ts";
+import { WorkedSteps } from "./worked-steps.tsx";
+
+const FIELD_LABELS: Record<AnswerField, { label: string; quantity: Quantity | null }> = {
+  evaporatingTempC: { label: "Evaporating temperature", quantity: "temperature" },
+  condensingTempC: { label: "Condensing temperature", quantity: "temperature" },
+  superheatK: { label: "Superheat", quantity: "difference" },
+  subcoolingK: { label: "Subcooling", quantity: "difference" },
+  chargeState: { label: "Charge state", quantity: null },
+};
+
+/** Which answers were right, the working step by step, and the safety notes that apply. */
+export function AttemptResult({ attempt, units }: { attempt: Attempt; units: DisplayUnits }) {
+  const { score } = attempt;
+  const show = (value: number | string | null, quantity: Quantity | null) =>
+    quantity === null
+      ? value === null
+        ? "none"
+        : chargeStateText[value as ChargeState].title
+      : withUnit(value as number | null, quantity, units, 0);
+  return (
+    <div className="space-y-5">
+      <section
+        aria-labelledby="marks-heading"
+        className="rounded-card border-2 border-rule bg-surface p-4"
+        data-testid="attempt-result"
+      >
+        <h2 id="marks-heading" className="text-xl font-semibold">
+          {score.allCorrect ? "All right — " : ""}
+          {score.correctCount} of {score.total} right
+        </h2>
+        <ul className="mt-3 space-y-2">
+          {score.marks.map((mark) => {
+            const { label, quantity } = FIELD_LABELS[mark.field];
+            const Icon = mark.correct ? CircleCheck : CircleX;
+            return (
+              <li
+                key={mark.field}
+                data-testid={`mark-${mark.field}`}
+                className={cn("flex gap-3 rounded-card border-2 p-3", mark.correct ? "border-good" : "border-fault")}
+              >
+                <Icon aria-hidden className={cn("mt-0.5 size-6 shrink-0", mark.correct ? "text-good" : "text-fault")} />
+                <div className="min-w-0">
+                  <p className="font-semibold">
+                    {label}:{" "}
+                    <span className={mark.correct ? "text-good" : "text-fault"}>
+                      {mark.correct ? "right" : "not right"}
+                    </span>
+                  </p>
+                  <p className="num text-sm">
+                    yours {show(mark.given, quantity)} · correct {show(mark.expected, quantity)}
+                    {!mark.correct && mark.differenceK !== null && (
+                      <> · off by {withUnit(Math.abs(mark.differenceK), "difference", units, 0)}</>
+                    )}
+                  </p>
+                </div>
+              </li>
+            );
+          })}
+        </ul>
+        <p className="mt-3 text-sm">
+          <span className="font-medium">Your reasoning:</span> {attempt.answers.reasoning}
+        </p>
+        {attempt.reasoning && (
+          <p className="mt-1 text-sm">
+            <span className="font-medium">The case's reasoning:</span> {attempt.reasoning}
+          </p>
+        )}
+      </section>
+
+      <section aria-labelledby="working-heading" className="rounded-card border-2 border-rule bg-surface p-4">
+        <h2 id="working-heading" className="text-xl font-semibold">
+          The working, step by step
+        </h2>
+        <WorkedSteps steps={attempt.worked} units={units} />
+      </section>
+
+      <section aria-labelledby="safety-heading" className="space-y-3">
+        <h2 id="safety-heading" className="text-xl font-semibold">
+          Safety on this job
+        </h2>
+        {attempt.safety.map((note) => (
+          <div key={note.topic} className="space-y-1">
+            <p className="font-medium">{note.reason}</p>
+            <CautionPanel topic={note.topic} compact />
+          </div>
+        ))}
+      </section>
+    </div>
+  );
+}

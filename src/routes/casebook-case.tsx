@@ -1,0 +1,118 @@
+import { CheckCheck, Pencil } from "lucide-react";
+import { useState } from "react";
+import { Link, useParams } from "react-router-dom";
+import { diagnose, workedSolution } from "@shared/engine/index.ts";
+import { DIFFICULTY_LABELS, canCasebook, type Attempt } from "@shared/schemas/casebook.ts";
+import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { Button, buttonVariants } from "@/components/ui/button/button.tsx";
+import { FormAlert } from "@/components/ui/field/field.tsx";
+import { ChargeStateBadge } from "@/components/ui/state/charge-state-badge.tsx";
+import { paths } from "@/config/paths.ts";
+import { AttemptForm } from "@/features/casebook/components/attempt-form.tsx";
+import { AttemptResult } from "@/features/casebook/components/attempt-result.tsx";
+import { CaseStory } from "@/features/casebook/components/case-story.tsx";
+import { WorkedSteps } from "@/features/casebook/components/worked-steps.tsx";
+import { useMe } from "@/lib/api/auth.ts";
+import { useCase, useCreateAttempt, usePublishCase } from "@/lib/api/casebook.ts";
+import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
+
+const SOURCE_WORDS = {
+  "built-in": "Satura library — shared by every company, read-only",
+  organisation: "Your company's case",
+  generated: "Generated practice case",
+} as const;
+
+export default function CasebookCaseRoute() {
+  const { caseId = "" } = useParams();
+  const item = useCase(caseId);
+  const me = useMe();
+  const { units, atmosphericKPa } = useDisplayUnits();
+  const attempt = useCreateAttempt();
+  const publish = usePublishCase();
+  const [result, setResult] = useState<Attempt | null>(null);
+
+  if (item.isPending) return <p aria-busy="true">Loading the case…</p>;
+  if (item.isError) {
+    return (
+      <div role="alert" className="space-y-2">
+        <h1 className="text-2xl font-semibold">This case could not be opened</h1>
+        <p>{item.error.message}</p>
+        <Link to={paths.casebook.getHref()} className="font-medium text-accent underline underline-offset-4">
+          Back to the casebook
+        </Link>
+      </div>
+    );
+  }
+  const data = item.data;
+  const author = me.data ? canCasebook(me.data.role, "author") : false;
+
+  return (
+    <div className="space-y-5">
+      <nav aria-label="Breadcrumb" className="text-sm">
+        <Link to={paths.casebook.getHref()} className="text-accent underline underline-offset-4">
+          Casebook
+        </Link>
+      </nav>
+      <header className="space-y-1">
+        <h1 className="text-2xl font-semibold">{data.title}</h1>
+        <p className="text-muted">
+          {DIFFICULTY_LABELS[data.difficulty]} · {SOURCE_WORDS[data.source]}
+          {data.status === "draft" && " · draft, not yet visible to apprentices"}
+          {data.authorName && ` · written by ${data.authorName}`}
+        </p>
+      </header>
+
+      {author && data.expected && (
+        <section aria-labelledby="author-heading" className="space-y-3 rounded-card border-2 border-ink bg-surface p-4">
+          <h2 id="author-heading" className="text-xl font-semibold">
+            Author's preview
+          </h2>
+          <p className="flex flex-wrap items-center gap-2">
+            Expected verdict: <ChargeStateBadge state={data.expected.chargeState} />
+          </p>
+          {data.editable && (
+            <div className="flex flex-wrap gap-2">
+              <Link to={paths.casebook.edit.getHref(data.id)} className={buttonVariants({ variant: "secondary" })}>
+                <Pencil aria-hidden className="size-5" /> Edit
+              </Link>
+              {data.status === "draft" && (
+                <Button disabled={publish.isPending} onClick={() => publish.mutate(data.id)}>
+                  <CheckCheck aria-hidden className="size-5" /> Publish to your company
+                </Button>
+              )}
+            </div>
+          )}
+          {publish.isError && <FormAlert>{publish.error.message}</FormAlert>}
+          {publish.isSuccess && (
+            <FormAlert tone="good">Published: apprentices in your company can now attempt it.</FormAlert>
+          )}
+          <details>
+            <summary className="min-h-touch cursor-pointer py-2 font-medium">Show the working</summary>
+            <WorkedSteps steps={workedSolution(data.input, diagnose(data.input), data.reasoning)} units={units} />
+          </details>
+        </section>
+      )}
+
+      <PanelBoundary>
+        <CaseStory item={data} units={units} atmosphericKPa={atmosphericKPa} />
+      </PanelBoundary>
+
+      {result ? (
+        <>
+          <AttemptResult attempt={result} units={units} />
+          <Button variant="secondary" onClick={() => setResult(null)}>
+            Try this case again
+          </Button>
+        </>
+      ) : (
+        <AttemptForm
+          units={units}
+          atmosphericKPa={data.input.atmosphericPressureKPa ?? atmosphericKPa}
+          pending={attempt.isPending}
+          serverError={attempt.isError ? attempt.error.message : null}
+          onSubmit={(answers) => attempt.mutate({ caseId: data.id, answers }, { onSuccess: setResult })}
+        />
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,71 @@
+import { Link, useNavigate, useParams } from "react-router-dom";
+import { canCasebook, type CaseDraft } from "@shared/schemas/casebook.ts";
+import { paths } from "@/config/paths.ts";
+import { CaseEditor } from "@/features/casebook/components/case-editor.tsx";
+import { useMe } from "@/lib/api/auth.ts";
+import { useCase, useCreateCase, useUpdateCase } from "@/lib/api/casebook.ts";
+import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
+
+/** New case (/casebook/new) or edit one of the company's own (/casebook/cases/:caseId/edit). */
+export default function CasebookEditorRoute() {
+  const { caseId } = useParams();
+  const navigate = useNavigate();
+  const me = useMe();
+  const existing = useCase(caseId ?? "");
+  const create = useCreateCase();
+  const update = useUpdateCase();
+  const { units, atmosphericKPa } = useDisplayUnits();
+
+  if (me.data && !canCasebook(me.data.role, "author")) {
+    return (
+      <div role="alert" className="space-y-2">
+        <h1 className="text-2xl font-semibold">Only seniors and owners write cases</h1>
+        <Link to={paths.casebook.getHref()} className="font-medium text-accent underline underline-offset-4">
+          Back to the casebook
+        </Link>
+      </div>
+    );
+  }
+  if (caseId && existing.isPending) return <p aria-busy="true">Loading the case…</p>;
+  if (caseId && (existing.isError || !existing.data?.editable)) {
+    return (
+      <div role="alert" className="space-y-2">
+        <h1 className="text-2xl font-semibold">This case cannot be edited</h1>
+        <p>{existing.error?.message ?? "Built-in and generated cases are read-only. Write your own case instead."}</p>
+        <Link to={paths.casebook.getHref()} className="font-medium text-accent underline underline-offset-4">
+          Back to the casebook
+        </Link>
+      </div>
+    );
+  }
+
+  const save = async (draft: CaseDraft) => {
+    const saved = caseId ? await update.mutateAsync({ id: caseId, draft }) : await create.mutateAsync(draft);
+    navigate(paths.casebook.case.getHref(saved.id));
+  };
+
+  return (
+    <div className="space-y-5">
+      <nav aria-label="Breadcrumb" className="text-sm">
+        <Link to={paths.casebook.getHref()} className="text-accent underline underline-offset-4">
+          Casebook
+        </Link>
+      </nav>
+      <header>
+        <h1 className="text-2xl font-semibold">{caseId ? "Edit case" : "New case"}</h1>
+        <p className="mt-1 max-w-prose text-muted">
+          Write the story and the readings; the diagnosis engine works out the answers. Save it as a draft, check the
+          preview, then publish it to your company. Leave customer names out.
+        </p>
+      </header>
+      <CaseEditor
+        key={existing.data?.id ?? "new"}
+        item={caseId ? existing.data : undefined}
+        units={units}
+        atmosphericKPa={atmosphericKPa}
+        pending={create.isPending || update.isPending}
+        onSave={save}
+      />
+    </div>
+  );
+}
