@@ -23,6 +23,7 @@ import { invitationsRouter } from "./routes/invitations.ts";
 import { membersRouter } from "./routes/members.ts";
 import { outboxRouter } from "./routes/outbox.ts";
 import { profileRouter } from "./routes/profile.ts";
+import { cylindersRouter, equipmentRefrigerantRouter, registerRouter, visitRefrigerantRouter } from "./routes/register.ts";
 
 export interface AppDeps {
   db: Database;
@@ -88,6 +89,11 @@ export function createApp(deps: AppDeps): Express {
   api.use("/equipment", equipmentRouter(deps));
   api.use("/visits", visitsRouter(accountDeps));
   api.use("/photos", photosRouter(deps));
+  // The refrigerant register (server/routes/register.ts): its visit and equipment routes sit beside theirs.
+  api.use("/visits", visitRefrigerantRouter(deps));
+  api.use("/equipment", equipmentRefrigerantRouter(deps));
+  api.use("/cylinders", cylindersRouter(deps));
+  api.use("/register", registerRouter(deps));
   api.use("/cases", casesRouter(deps));
   api.use("/attempts", attemptsRouter(deps));
   api.use(apiNotFound);

@@ -1,0 +1,325 @@
+/**
+ * The refrigerant register: /api/cylinders, /api/visits/:id/refrigerant,
+ * /api/equipment/:id/refrigerant and /api/register (list and CSV export).
+ *
+ * The register is the record of truth for refrigerant. The run log's charge adjustments
+ * (charge-added / charge-removed on /api/visits/:id/adjustments) stay marks on the trend
+ * chart: they are shown beside the register as a reminder, never summed into it, so logging
+ * both never counts a kilogram twice.
+ */
+import { Router, type Response } from "express";
+import { z } from "zod";
+import { can, PERMISSIONS } from "@shared/schemas/auth.ts";
+import {
+  ChargingUpdateSchema,
+  CylinderCreateSchema,
+  MOVEMENT_CYLINDER_RULES,
+  MOVEMENT_KIND_LABELS,
+  MovementCreateSchema,
+  ReclaimCreateSchema,
+  RegisterQuerySchema,
+  boundEnd,
+  boundStart,
+  type CylinderKind,
+  type MovementKind,
+} from "@shared/schemas/register.ts";
+import { getAuth, requireRole, requireUser } from "../auth/session.ts";
+import { getEquipment } from "../db/equipment.ts";
+import {
+  createCylinder,
+  cylinderMovements,
+  deleteCircuitCharge,
+  equipmentMovements,
+  findMember,
+  getCylinder,
+  insertMovement,
+  listCylinders,
+  registerMovements,
+  runLogChargeMarks,
+  upsertCircuitCharge,
+  visitCircuitCharges,
+  visitMovements,
+  type CylinderRow,
+} from "../db/register.ts";
+import { findVisit, joinCrew } from "../db/visits.ts";
+import { HttpError, notFound } from "../http/http-error.ts";
+import { parseId } from "../http/parse-id.ts";
+import { circuitBalance, cylinderFill, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
+import { registerCsv } from "../register/register-csv.ts";
+import type { AccountRouteDeps } from "./route-deps.ts";
+
+type Deps = Pick<AccountRouteDeps, "db">;
+
+const fieldError = (field: string, message: string) => new HttpError(400, "Some fields need attention", { [field]: message });
+const kg = (value: number) => `${Number(value.toFixed(2))} kg`;
+
+const KIND_NAMES: Record<CylinderKind, string> = { recovery: "a recovery", new: "a new-refrigerant", reclaimed: "a reclaimed-refrigerant" };
+
+/**
+ * Checks that a movement may use this cylinder and that its contents allow it: one
+ * refrigerant per cylinder (TRADE.md §6), the cylinder kind fits the movement, nothing drawn
+ * that is not in it, and no recovery that takes a recovery cylinder past its 80 % liquid
+ * limit. The client shows the same fill check live before the technician saves.
+ */
+function checkCylinder(cylinder: CylinderRow, kind: MovementKind, refrigerant: string, massKg: number) {
+  if (cylinder.refrigerant !== refrigerant) {
+    throw fieldError(
+      "cylinderId",
+      `${cylinder.label} holds ${cylinder.refrigerant}, not ${refrigerant}: never mix refrigerants in one cylinder. Choose a ${refrigerant} cylinder.`,
+    );
+  }
+  const rule = MOVEMENT_CYLINDER_RULES[kind];
+  if (!rule.cylinderKinds.includes(cylinder.kind)) {
+    throw fieldError(
+      "cylinderId",
+      `${MOVEMENT_KIND_LABELS[kind]} needs ${rule.cylinderKinds.map((candidate) => KIND_NAMES[candidate]).join(" or ")} cylinder; ${cylinder.label} is ${KIND_NAMES[cylinder.kind]} cylinder.`,
+    );
+  }
+  if (!rule.intoCylinder && massKg > cylinder.contentsKg + 1e-9) {
+    throw fieldError("kg", `${cylinder.label} holds only ${kg(cylinder.contentsKg)} by the register: weigh it and check the figure.`);
+  }
+  if (rule.intoCylinder) {
+    const after = cylinderFill(cylinder, cylinder.contentsKg + massKg);
+    if (after.check?.verdict === "fail" && after.maxContentsKg !== null) {
+      const room = Math.max(0, after.maxContentsKg - cylinder.contentsKg);
+      throw fieldError(
+        "kg",
+        `That would fill ${cylinder.label} past its 80 % limit of ${kg(after.maxContentsKg)} (it holds ${kg(cylinder.contentsKg)}, room for ${kg(room)}). Stop and switch to another recovery cylinder, then log each cylinder's share.`,
+      );
+    }
+  }
+}
+
+/** Owners and seniors see everyone's movements; technicians see their own; apprentices none. */
+function registerScope(res: Response, requested: string | undefined): { technicianId?: string; allTechnicians: boolean } {
+  const { user } = getAuth(res);
+  // The register is the company's record under its trading authorisation (TRADE.md §8.1,
+  // reg 141: the business keeps it), which the owner keeps and seniors review, so they see
+  // every technician's movements. A technician's licence makes them answerable for their own
+  // handling, so they may read and export their own rows, never a colleague's. Apprentices
+  // work under supervision and keep no register of their own.
+  if (can(user.role, "signOff")) return { technicianId: requested, allTechnicians: true };
+  if (requested && requested !== user.id) throw new HttpError(403, "You can see and export only your own refrigerant records");
+  return { technicianId: user.id, allTechnicians: false };
+}
+
+export function cylindersRouter({ db }: Deps): Router {
+  const router = Router();
+  const ListQuery = z.object({ refrigerant: z.string().trim().min(1).optional() });
+
+  router.get("/", requireUser, async (req, res) => {
+    const filter = ListQuery.parse(req.query);
+    const rows = await listCylinders(db, getAuth(res).organisationId, filter);
+    res.json({ cylinders: rows.map(toCylinder) });
+  });
+
+  router.post("/", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const values = CylinderCreateSchema.parse(req.body);
+    const row = await createCylinder(db, getAuth(res).organisationId, values);
+    if (!row) throw fieldError("label", "Your company already has a cylinder with this label");
+    res.status(201).json({ cylinder: toCylinder(row) });
+  });
+
+  router.get("/:id", requireUser, async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const row = await getCylinder(db, organisationId, parseId(req.params.id, "Cylinder"));
+    if (!row) throw notFound("Cylinder");
+    res.json({ cylinder: toCylinder(row), movements: await cylinderMovements(db, organisationId, row.id) });
+  });
+
+  // A recovery cylinder's contents handed to a reclaimer: a register entry with no visit.
+  router.post("/:id/reclaim", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const row = await getCylinder(db, organisationId, parseId(req.params.id, "Cylinder"));
+    if (!row) throw notFound("Cylinder");
+    const values = ReclaimCreateSchema.parse(req.body);
+    checkCylinder(row, "sent-for-reclaim", row.refrigerant, values.kg);
+    const movement = await insertMovement(db, organisationId, {
+      visitId: null,
+      equipmentId: null,
+      circuit: null,
+      refrigerant: row.refrigerant,
+      kind: "sent-for-reclaim",
+      kg: values.kg,
+      cylinderId: row.id,
+      technicianId: user.id,
+      at: values.at ? new Date(values.at) : undefined,
+      note: values.note,
+    });
+    const after = await getCylinder(db, organisationId, row.id);
+    res.status(201).json({ movement, cylinder: after ? toCylinder(after) : null });
+  });
+
+  return router;
+}
+
+/** Mounted at /api/visits beside the visits router. */
+export function visitRefrigerantRouter({ db }: Deps): Router {
+  const router = Router();
+
+  async function loadVisitAndUnit(organisationId: string, rawId: unknown) {
+    const visit = await findVisit(db, organisationId, parseId(rawId, "Visit"));
+    if (!visit) throw notFound("Visit");
+    const unit = await getEquipment(db, organisationId, visit.equipmentId);
+    if (!unit) throw notFound("Equipment");
+    return { visit, unit };
+  }
+
+  async function visitRefrigerant(organisationId: string, visitId: string, unit: NonNullable<Awaited<ReturnType<typeof getEquipment>>>) {
+    const [movements, charges, marks] = await Promise.all([
+      visitMovements(db, organisationId, visitId),
+      visitCircuitCharges(db, organisationId, visitId),
+      runLogChargeMarks(db, organisationId, visitId),
+    ]);
+    const { note, glideK } = liquidChargingNote(unit.refrigerant);
+    return {
+      refrigerant: unit.refrigerant,
+      liquidChargingNote: note,
+      glideK,
+      movements,
+      circuits: unit.circuits.map((nameplate) =>
+        circuitBalance(
+          nameplate,
+          movements,
+          charges.find((charge) => charge.circuit === nameplate.number),
+        ),
+      ),
+      runLogChargeMarksKg: marks,
+    };
+  }
+
+  router.get("/:id/refrigerant", requireUser, async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
+    res.json(await visitRefrigerant(organisationId, visit.id, unit));
+  });
+
+  router.post("/:id/refrigerant", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
+    if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
+    const values = MovementCreateSchema.parse(req.body);
+    if (!unit.circuits.some((circuit) => circuit.number === values.circuit)) {
+      throw fieldError("circuit", `${unit.name} has ${unit.circuits.length} circuit(s)`);
+    }
+    let cylinder: CylinderRow | undefined;
+    if (values.cylinderId) {
+      cylinder = await getCylinder(db, organisationId, values.cylinderId);
+      if (!cylinder) throw fieldError("cylinderId", "Choose one of your company's cylinders");
+      checkCylinder(cylinder, values.kind, unit.refrigerant, values.kg);
+    }
+    if (values.kind === "reused") {
+      // Reused refrigerant is what was recovered from this circuit and put back (TRADE.md §6 records: destination "reuse in same system").
+      const own = (await visitMovements(db, organisationId, visit.id)).filter((movement) => movement.circuit === values.circuit);
+      const recovered = own.filter((movement) => movement.kind === "recovered").reduce((sum, movement) => sum + movement.kg, 0);
+      const reused = own.filter((movement) => movement.kind === "reused").reduce((sum, movement) => sum + movement.kg, 0);
+      if (reused + values.kg > recovered + 1e-9) {
+        throw fieldError(
+          "kg",
+          recovered === 0
+            ? `Nothing has been recovered from circuit ${values.circuit} on this visit, so nothing can be reused: log the recovery first, or log new refrigerant as added`
+            : `Only ${kg(recovered - reused)} recovered from circuit ${values.circuit} on this visit is left to reuse`,
+        );
+      }
+    }
+    const movement = await insertMovement(db, organisationId, {
+      visitId: visit.id,
+      equipmentId: unit.id,
+      circuit: values.circuit,
+      refrigerant: unit.refrigerant,
+      kind: values.kind,
+      kg: values.kg,
+      cylinderId: cylinder?.id ?? null,
+      technicianId: user.id,
+      at: values.at ? new Date(values.at) : undefined,
+      note: values.note,
+    });
+    await joinCrew(db, visit.id, user.id);
+    const after = cylinder ? await getCylinder(db, organisationId, cylinder.id) : undefined;
+    res.status(201).json({ movement, cylinder: after ? toCylinder(after) : null });
+  });
+
+  // Declares that the circuit had a full weigh-in (or clears it with DELETE); the weighed-in
+  // mass is the register's reused + added kg, so only the line-length adjustment is entered.
+  router.put("/:id/refrigerant/charging/:circuit", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
+    if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
+    const circuit = Number(req.params.circuit);
+    if (!unit.circuits.some((candidate) => candidate.number === circuit)) throw notFound("Circuit");
+    const values = ChargingUpdateSchema.parse(req.body);
+    await upsertCircuitCharge(db, organisationId, { visitId: visit.id, circuit, lineAdjustmentKg: values.lineAdjustmentKg, recordedBy: user.id });
+    res.json(await visitRefrigerant(organisationId, visit.id, unit));
+  });
+
+  router.delete("/:id/refrigerant/charging/:circuit", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
+    if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
+    await deleteCircuitCharge(db, organisationId, visit.id, Number(req.params.circuit));
+    res.json(await visitRefrigerant(organisationId, visit.id, unit));
+  });
+
+  return router;
+}
+
+/** Mounted at /api/equipment beside the equipment router. */
+export function equipmentRefrigerantRouter({ db }: Deps): Router {
+  const router = Router();
+  router.get("/:id/refrigerant", requireUser, async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const unit = await getEquipment(db, organisationId, parseId(req.params.id, "Equipment"));
+    if (!unit) throw notFound("Equipment");
+    const movements = await equipmentMovements(db, organisationId, unit.id);
+    const nameplateKg = unit.circuits.reduce((sum, circuit) => sum + circuit.factoryChargeKg, 0);
+    const events = topUps(movements);
+    res.json({
+      refrigerant: unit.refrigerant,
+      nameplateKg,
+      movements,
+      topUps: events,
+      leakRate: leakRate(events, nameplateKg),
+    });
+  });
+  return router;
+}
+
+export function registerRouter({ db }: Deps): Router {
+  const router = Router();
+
+  async function movementsFor(res: Response, query: unknown) {
+    const { organisationId } = getAuth(res);
+    const filter = RegisterQuerySchema.parse(query);
+    const scope = registerScope(res, filter.technicianId);
+    if (scope.technicianId && !(await findMember(db, organisationId, scope.technicianId))) throw fieldError("technicianId", "Choose one of your company's people");
+    const movements = await registerMovements(db, organisationId, {
+      fromMs: filter.from ? boundStart(filter.from) : undefined,
+      toMs: filter.to ? boundEnd(filter.to) : undefined,
+      technicianId: scope.technicianId,
+    });
+    return { movements, allTechnicians: scope.allTechnicians, filter };
+  }
+
+  router.get("/", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { movements, allTechnicians } = await movementsFor(res, req.query);
+    const totals = new Map<string, { refrigerant: string; kind: MovementKind; kg: number }>();
+    for (const movement of movements) {
+      const key = `${movement.refrigerant} ${movement.kind}`;
+      const total = totals.get(key) ?? { refrigerant: movement.refrigerant, kind: movement.kind, kg: 0 };
+      total.kg = Math.round((total.kg + movement.kg) * 1000) / 1000;
+      totals.set(key, total);
+    }
+    res.json({ movements, totals: [...totals.values()], allTechnicians });
+  });
+
+  router.get("/export.csv", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { movements, filter } = await movementsFor(res, req.query);
+    const name = ["refrigerant-register", filter.from, filter.to].filter(Boolean).join("_").replace(/[^0-9A-Za-z_-]/g, "-");
+    res.setHeader("Content-Type", "text/csv; charset=utf-8");
+    res.setHeader("Content-Disposition", `attachment; filename="${name}.csv"`);
+    res.setHeader("Cache-Control", "private, no-store");
+    res.send(registerCsv(movements));
+  });
+
+  return router;
+}
