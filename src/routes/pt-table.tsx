@@ -1,7 +1,7 @@
 import { Printer } from "lucide-react";
 import { useState } from "react";
 import { Link, useParams } from "react-router-dom";
-import { listRefrigerants, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.ts";
+import { listRefrigerants } from "@shared/engine/index.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
@@ -13,7 +13,8 @@ import { SaturationTable } from "@/features/pt-tables/components/saturation-tabl
 import { TableControls, type TableRange } from "@/features/pt-tables/components/table-controls.tsx";
 import { UnitsBar } from "@/features/pt-tables/components/units-bar.tsx";
 import { resolveRange } from "@/features/pt-tables/utils/resolve-range.ts";
-import { METRIC_UNITS, formatNumber, temperatureToDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
+import { formatNumber, temperatureToDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
+import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
 
 function defaultRange(minimumC: number, maximumC: number, units: DisplayUnits): TableRange {
   // The service range most technicians read: -40 … +60 °C, inside the table.
@@ -30,7 +31,10 @@ function defaultRange(minimumC: number, maximumC: number, units: DisplayUnits): 
 export default function PtTableRoute() {
   const { refrigerantId = "" } = useParams();
   const info = listRefrigerants().find((candidate) => candidate.id === refrigerantId);
-  const [units, setUnits] = useState<DisplayUnits>(METRIC_UNITS);
+  const profile = useDisplayUnits();
+  // Starts in the user's display units; switching here changes this page only.
+  const [chosenUnits, setUnits] = useState<DisplayUnits | null>(null);
+  const units = chosenUnits ?? profile.units;
   const [range, setRange] = useState<TableRange | null>(null);
 
   if (!info) {
@@ -51,7 +55,7 @@ export default function PtTableRoute() {
   const currentRange = range ?? defaultRange(limits.minimumC, limits.maximumC, units);
   const resolved = resolveRange(currentRange.fromText, currentRange.toText, currentRange.stepK, units.temperature, limits);
   const caution = safetyClasses[info.safety.class].caution;
-  const atmosphericKPa = STANDARD_ATMOSPHERE_KPA;
+  const atmosphericKPa = profile.atmosphericKPa;
 
   return (
     <div className="space-y-5">
