@@ -23,6 +23,7 @@ import { invitationsRouter } from "./routes/invitations.ts";
 import { membersRouter } from "./routes/members.ts";
 import { outboxRouter } from "./routes/outbox.ts";
 import { profileRouter } from "./routes/profile.ts";
+import { proceduresRouter } from "./routes/procedures.ts";
 import { cylindersRouter, equipmentRefrigerantRouter, registerRouter, visitRefrigerantRouter } from "./routes/register.ts";
 
 export interface AppDeps {
@@ -89,6 +90,8 @@ export function createApp(deps: AppDeps): Express {
   api.use("/equipment", equipmentRouter(deps));
   api.use("/visits", visitsRouter(accountDeps));
   api.use("/photos", photosRouter(deps));
+  // A visit's procedure records (server/routes/procedures.ts) sit beside its readings.
+  api.use("/visits", proceduresRouter(deps));
   // The refrigerant register (server/routes/register.ts): its visit and equipment routes sit beside theirs.
   api.use("/visits", visitRefrigerantRouter(deps));
   api.use("/equipment", equipmentRefrigerantRouter(deps));

@@ -1,0 +1,238 @@
+/**
+ * Queries for a visit's procedure records (electrical checks, leak searches, pressure tests,
+ * evacuations). Callers have already found the visit within their organisation; every insert
+ * still carries the organisation id and every read filters by it, so a record of another
+ * organisation reads as missing.
+ */
+import { and, asc, eq, inArray } from "drizzle-orm";
+import type {
+  ElectricalCheck,
+  ElectricalCheckInput,
+  ElectricalCheckResult,
+  Evacuation,
+  EvacuationResult,
+  LeakSearch,
+  LeakSearchInput,
+  PressureTest,
+  PressureTestRecordInput,
+  PressureTestRecordResult,
+  ProcedureSettings,
+} from "@shared/schemas/procedure-records.ts";
+import { ProcedureSettingsSchema } from "@shared/schemas/procedure-records.ts";
+import type { Verdict } from "@shared/schemas/procedures.ts";
+import type { Database } from "./client.ts";
+import { electricalChecks, evacuations, leakSearches, organisations, pressureTests, users } from "./schema.ts";
+
+type People = Map<string, { id: string; name: string }>;
+
+async function peopleById(db: Database, ids: (string | null)[]): Promise<People> {
+  const wanted = [...new Set(ids.filter((id): id is string => id !== null))];
+  if (wanted.length === 0) return new Map();
+  const rows = await db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, wanted));
+  return new Map(rows.map((row) => [row.id, row]));
+}
+
+const person = (people: People, id: string | null) => (id ? (people.get(id) ?? null) : null);
+
+/** The organisation's procedure settings (organisations.settings), malformed figures dropped. */
+export async function getProcedureSettings(db: Database, organisationId: string): Promise<ProcedureSettings> {
+  const [row] = await db.select({ settings: organisations.settings }).from(organisations).where(eq(organisations.id, organisationId));
+  return ProcedureSettingsSchema.parse(row?.settings ?? {});
+}
+
+// ---- electrical checks ----------------------------------------------------------------------
+
+function toElectricalCheck(row: typeof electricalChecks.$inferSelect, people: People): ElectricalCheck {
+  return {
+    id: row.id,
+    visitId: row.visitId,
+    takenAt: row.takenAt.toISOString(),
+    recordedBy: person(people, row.recordedBy),
+    input: row.input as unknown as ElectricalCheckInput,
+    result: row.result as unknown as ElectricalCheckResult,
+  };
+}
+
+export async function listElectricalChecks(db: Database, organisationId: string, visitId: string): Promise<ElectricalCheck[]> {
+  const rows = await db
+    .select()
+    .from(electricalChecks)
+    .where(and(eq(electricalChecks.organisationId, organisationId), eq(electricalChecks.visitId, visitId)))
+    .orderBy(asc(electricalChecks.takenAt));
+  const people = await peopleById(db, rows.map((row) => row.recordedBy));
+  return rows.map((row) => toElectricalCheck(row, people));
+}
+
+export async function insertElectricalCheck(
+  db: Database,
+  organisationId: string,
+  values: { visitId: string; input: ElectricalCheckInput; result: ElectricalCheckResult; recordedBy: string },
+): Promise<ElectricalCheck> {
+  const [row] = await db
+    .insert(electricalChecks)
+    .values({
+      organisationId,
+      visitId: values.visitId,
+      target: values.input.target,
+      input: values.input as unknown as Record<string, unknown>,
+      result: values.result as unknown as Record<string, unknown>,
+      recordedBy: values.recordedBy,
+    })
+    .returning();
+  return toElectricalCheck(row, await peopleById(db, [row.recordedBy]));
+}
+
+// ---- leak searches --------------------------------------------------------------------------
+
+function toLeakSearch(row: typeof leakSearches.$inferSelect, people: People): LeakSearch {
+  return {
+    id: row.id,
+    visitId: row.visitId,
+    takenAt: row.takenAt.toISOString(),
+    recordedBy: person(people, row.recordedBy),
+    input: row.input as unknown as LeakSearch["input"],
+    result: row.result as unknown as Verdict,
+  };
+}
+
+export async function listLeakSearches(db: Database, organisationId: string, visitId: string): Promise<LeakSearch[]> {
+  const rows = await db
+    .select()
+    .from(leakSearches)
+    .where(and(eq(leakSearches.organisationId, organisationId), eq(leakSearches.visitId, visitId)))
+    .orderBy(asc(leakSearches.takenAt));
+  const people = await peopleById(db, rows.map((row) => row.recordedBy));
+  return rows.map((row) => toLeakSearch(row, people));
+}
+
+export async function insertLeakSearch(
+  db: Database,
+  organisationId: string,
+  values: { visitId: string; input: LeakSearchInput; result: Verdict; recordedBy: string },
+): Promise<LeakSearch> {
+  const [row] = await db
+    .insert(leakSearches)
+    .values({
+      organisationId,
+      visitId: values.visitId,
+      method: values.input.method,
+      input: values.input as unknown as Record<string, unknown>,
+      result: values.result as unknown as Record<string, unknown>,
+      recordedBy: values.recordedBy,
+    })
+    .returning();
+  return toLeakSearch(row, await peopleById(db, [row.recordedBy]));
+}
+
+// ---- pressure tests -------------------------------------------------------------------------
+
+function toPressureTest(row: typeof pressureTests.$inferSelect, people: People): PressureTest {
+  return {
+    id: row.id,
+    visitId: row.visitId,
+    takenAt: row.takenAt.toISOString(),
+    recordedBy: person(people, row.recordedBy),
+    input: row.input as unknown as PressureTestRecordInput,
+    result: row.result as unknown as PressureTestRecordResult,
+  };
+}
+
+export async function listPressureTests(db: Database, organisationId: string, visitId: string): Promise<PressureTest[]> {
+  const rows = await db
+    .select()
+    .from(pressureTests)
+    .where(and(eq(pressureTests.organisationId, organisationId), eq(pressureTests.visitId, visitId)))
+    .orderBy(asc(pressureTests.takenAt));
+  const people = await peopleById(db, rows.map((row) => row.recordedBy));
+  return rows.map((row) => toPressureTest(row, people));
+}
+
+export async function insertPressureTest(
+  db: Database,
+  organisationId: string,
+  values: { visitId: string; input: PressureTestRecordInput; result: PressureTestRecordResult; recordedBy: string },
+): Promise<PressureTest> {
+  const [row] = await db
+    .insert(pressureTests)
+    .values({
+      organisationId,
+      visitId: values.visitId,
+      input: values.input as unknown as Record<string, unknown>,
+      result: values.result as unknown as Record<string, unknown>,
+      recordedBy: values.recordedBy,
+    })
+    .returning();
+  return toPressureTest(row, await peopleById(db, [row.recordedBy]));
+}
+
+// ---- evacuations ----------------------------------------------------------------------------
+
+export type EvacuationRow = typeof evacuations.$inferSelect;
+
+function toEvacuation(row: EvacuationRow, people: People): Evacuation {
+  return {
+    id: row.id,
+    visitId: row.visitId,
+    startedAt: row.startedAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+    recordedBy: person(people, row.recordedBy),
+    targetMicrons: row.targetMicrons,
+    isolatedAtMinutes: row.isolatedAtMinutes,
+    samples: row.samples,
+    note: row.note,
+    result: row.result as unknown as EvacuationResult,
+  };
+}
+
+export async function listEvacuations(db: Database, organisationId: string, visitId: string): Promise<Evacuation[]> {
+  const rows = await db
+    .select()
+    .from(evacuations)
+    .where(and(eq(evacuations.organisationId, organisationId), eq(evacuations.visitId, visitId)))
+    .orderBy(asc(evacuations.startedAt));
+  const people = await peopleById(db, rows.map((row) => row.recordedBy));
+  return rows.map((row) => toEvacuation(row, people));
+}
+
+/** One evacuation of the given visit, scoped by organisation; undefined when not found. */
+export async function findEvacuation(db: Database, organisationId: string, visitId: string, evacuationId: string): Promise<EvacuationRow | undefined> {
+  const [row] = await db
+    .select()
+    .from(evacuations)
+    .where(and(eq(evacuations.organisationId, organisationId), eq(evacuations.visitId, visitId), eq(evacuations.id, evacuationId)));
+  return row;
+}
+
+export async function insertEvacuation(
+  db: Database,
+  organisationId: string,
+  values: {
+    visitId: string;
+    targetMicrons: number;
+    isolatedAtMinutes: number | null;
+    samples: { minutes: number; microns: number }[];
+    note: string | null;
+    result: EvacuationResult;
+    recordedBy: string;
+  },
+): Promise<Evacuation> {
+  const [row] = await db
+    .insert(evacuations)
+    .values({ ...values, organisationId, result: values.result as unknown as Record<string, unknown> })
+    .returning();
+  return toEvacuation(row, await peopleById(db, [row.recordedBy]));
+}
+
+export async function updateEvacuation(
+  db: Database,
+  organisationId: string,
+  evacuationId: string,
+  values: { targetMicrons: number; isolatedAtMinutes: number | null; samples: { minutes: number; microns: number }[]; note: string | null; result: EvacuationResult },
+): Promise<Evacuation> {
+  const [row] = await db
+    .update(evacuations)
+    .set({ ...values, result: values.result as unknown as Record<string, unknown>, updatedAt: new Date() })
+    .where(and(eq(evacuations.organisationId, organisationId), eq(evacuations.id, evacuationId)))
+    .returning();
+  return toEvacuation(row, await peopleById(db, [row.recordedBy]));
+}

@@ -1,0 +1,257 @@
+/**
+ * A visit's procedure records, beside its readings: /api/visits/:id/electrical-checks,
+ * /leak-searches, /pressure-tests and /evacuations (with …/:evacuationId/samples to add vacuum
+ * readings as they are read, and PATCH …/:evacuationId to valve off the pump). Like readings:
+ * bodies are validated with the shared schemas (400 with field messages), the visit is looked
+ * up within the caller's organisation (404 otherwise), apprentices only read (403), a
+ * signed-off visit is closed (409), and the stored result is recomputed by the engine on
+ * every save.
+ */
+import { Router } from "express";
+import { PERMISSIONS } from "@shared/schemas/auth.ts";
+import {
+  DEFAULT_ALLOWED_DROP_KPA,
+  ElectricalCheckBodySchema,
+  EvacuationCreateSchema,
+  EvacuationSampleBodySchema,
+  EvacuationUpdateSchema,
+  LeakSearchBodySchema,
+  PressureTestBodySchema,
+  type ProcedureSettings,
+} from "@shared/schemas/procedure-records.ts";
+import { EVACUATION_LIMITS } from "@shared/engine/index.ts";
+import type { VisitStatus } from "@shared/schemas/visits.ts";
+import { getAuth, requireRole, requireUser } from "../auth/session.ts";
+import type { Database } from "../db/client.ts";
+import { getEquipment } from "../db/equipment.ts";
+import {
+  findEvacuation,
+  getProcedureSettings,
+  insertElectricalCheck,
+  insertEvacuation,
+  insertLeakSearch,
+  insertPressureTest,
+  listElectricalChecks,
+  listEvacuations,
+  listLeakSearches,
+  listPressureTests,
+  updateEvacuation,
+} from "../db/procedures.ts";
+import { findVisit, joinCrew } from "../db/visits.ts";
+import { HttpError, notFound } from "../http/http-error.ts";
+import { parseId } from "../http/parse-id.ts";
+import { electricalCheckResult, evacuationResult, leakSearchResult, pressureTestRecordResult } from "../procedures/record-results.ts";
+
+const FIELDS = "Some fields need attention";
+
+/** A signed-off visit is a closed record (same rule as its readings). */
+function requireWritable(status: VisitStatus) {
+  if (status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
+}
+
+const targetMicrons = (settings: ProcedureSettings) => settings.evacuationTargetMicrons ?? settings.procedureLimits?.evacuation?.targetMicrons ?? EVACUATION_LIMITS.targetMicrons;
+const allowedDropKPa = (settings: ProcedureSettings) => settings.pressureTestAllowedDropKPa ?? DEFAULT_ALLOWED_DROP_KPA;
+/** Minutes since a moment, to the tenth, from the server's clock. */
+const minutesSince = (start: Date) => Math.round((Date.now() - start.getTime()) / 6_000) / 10;
+
+/** Readings this close before "valve off now" count as the reading at isolation, minutes. */
+const ISOLATION_READING_WINDOW_MINUTES = 2;
+
+/** Valving off "now": at the last reading if it was just taken (it starts the decay test), else the clock. */
+function isolationNow(startedAt: Date, samples: { minutes: number }[]): number {
+  const now = minutesSince(startedAt);
+  const last = samples.at(-1)?.minutes;
+  return last !== undefined && now - last <= ISOLATION_READING_WINDOW_MINUTES ? last : Math.max(now, last ?? 0);
+}
+
+export function proceduresRouter({ db }: { db: Database }): Router {
+  const router = Router();
+
+  async function loadVisit(organisationId: string, rawId: unknown) {
+    const visit = await findVisit(db, organisationId, parseId(rawId, "Visit"));
+    if (!visit) throw notFound("Visit");
+    return visit;
+  }
+
+  async function loadUnit(organisationId: string, equipmentId: string) {
+    const unit = await getEquipment(db, organisationId, equipmentId);
+    if (!unit) throw notFound("Equipment");
+    return unit;
+  }
+
+  // ---- electrical checks --------------------------------------------------------------------
+
+  router.get("/:id/electrical-checks", requireUser, async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    const unit = await loadUnit(organisationId, visit.equipmentId);
+    res.json({
+      electricalChecks: await listElectricalChecks(db, organisationId, visit.id),
+      defaults: { nameplateV: unit.supplyVoltageV, phases: unit.phases, compressorRlaA: unit.compressorRlaA, fanFlaA: unit.fanFlaA },
+    });
+  });
+
+  router.post("/:id/electrical-checks", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritable(visit.status);
+    const body = ElectricalCheckBodySchema.parse(req.body);
+    const unit = await loadUnit(organisationId, visit.equipmentId);
+    // The nameplate fills in what the technician did not type (as targets do for readings).
+    const nameplateV = body.nameplateV ?? unit.supplyVoltageV ?? null;
+    const ratedA = body.ratedA ?? (body.target === "compressor" ? unit.compressorRlaA : body.target === "fan" ? unit.fanFlaA : null) ?? null;
+    if (body.runningAmps?.length && ratedA === null) {
+      throw new HttpError(400, FIELDS, { ratedA: `Enter the nameplate ${body.target === "fan" ? "FLA" : "RLA"}: ${unit.name} has none on record` });
+    }
+    if (body.supplyVolts?.length && nameplateV === null) {
+      throw new HttpError(400, FIELDS, { nameplateV: `Enter the nameplate voltage: ${unit.name} has none on record` });
+    }
+    const input = {
+      target: body.target,
+      circuit: body.circuit ?? null,
+      supplyVolts: body.supplyVolts ?? null,
+      nameplateV,
+      insulation: (body.insulation ?? []).map((reading) => ({ megohms: reading.megohms, testVoltageV: reading.testVoltageV, ...(reading.point ? { point: reading.point } : {}) })),
+      windingOhms: body.windingOhms ?? null,
+      runningAmps: body.runningAmps ?? null,
+      ratedA,
+      note: body.note || null,
+    };
+    const settings = await getProcedureSettings(db, organisationId);
+    const result = electricalCheckResult(input, settings.procedureLimits);
+    const electricalCheck = await insertElectricalCheck(db, organisationId, { visitId: visit.id, input, result, recordedBy: user.id });
+    await joinCrew(db, visit.id, user.id);
+    res.status(201).json({ electricalCheck });
+  });
+
+  // ---- leak searches ------------------------------------------------------------------------
+
+  router.get("/:id/leak-searches", requireUser, async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    res.json({ leakSearches: await listLeakSearches(db, organisationId, visit.id) });
+  });
+
+  router.post("/:id/leak-searches", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritable(visit.status);
+    const input = LeakSearchBodySchema.parse(req.body);
+    const leakSearch = await insertLeakSearch(db, organisationId, { visitId: visit.id, input, result: leakSearchResult(input), recordedBy: user.id });
+    await joinCrew(db, visit.id, user.id);
+    res.status(201).json({ leakSearch });
+  });
+
+  // ---- pressure tests -----------------------------------------------------------------------
+
+  router.get("/:id/pressure-tests", requireUser, async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    const unit = await loadUnit(organisationId, visit.equipmentId);
+    const settings = await getProcedureSettings(db, organisationId);
+    res.json({
+      pressureTests: await listPressureTests(db, organisationId, visit.id),
+      defaults: { allowedDropKPa: allowedDropKPa(settings), ratedHighSideKPa: unit.ratedHighSideKPa, ratedLowSideKPa: unit.ratedLowSideKPa },
+    });
+  });
+
+  router.post("/:id/pressure-tests", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritable(visit.status);
+    const body = PressureTestBodySchema.parse(req.body);
+    const settings = await getProcedureSettings(db, organisationId);
+    const input = {
+      ...body,
+      testGaugeKPa: body.testGaugeKPa ?? body.startGaugeKPa,
+      allowedDropKPa: body.allowedDropKPa ?? allowedDropKPa(settings),
+      note: body.note || null,
+    };
+    const result = pressureTestRecordResult(input, settings.procedureLimits);
+    const pressureTest = await insertPressureTest(db, organisationId, { visitId: visit.id, input, result, recordedBy: user.id });
+    await joinCrew(db, visit.id, user.id);
+    res.status(201).json({ pressureTest });
+  });
+
+  // ---- evacuations --------------------------------------------------------------------------
+
+  router.get("/:id/evacuations", requireUser, async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    const settings = await getProcedureSettings(db, organisationId);
+    res.json({ evacuations: await listEvacuations(db, organisationId, visit.id), defaults: { targetMicrons: targetMicrons(settings) } });
+  });
+
+  router.post("/:id/evacuations", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritable(visit.status);
+    const body = EvacuationCreateSchema.parse(req.body);
+    const settings = await getProcedureSettings(db, organisationId);
+    const target = body.targetMicrons ?? targetMicrons(settings);
+    const samples = body.samples ?? [];
+    const isolatedAtMinutes = body.isolatedAtMinutes ?? null;
+    const evacuation = await insertEvacuation(db, organisationId, {
+      visitId: visit.id,
+      targetMicrons: target,
+      isolatedAtMinutes,
+      samples,
+      note: body.note || null,
+      result: evacuationResult(samples, target, isolatedAtMinutes, settings.procedureLimits),
+      recordedBy: user.id,
+    });
+    await joinCrew(db, visit.id, user.id);
+    res.status(201).json({ evacuation });
+  });
+
+  async function loadEvacuation(organisationId: string, visitId: string, rawId: unknown) {
+    const row = await findEvacuation(db, organisationId, visitId, parseId(rawId, "Evacuation"));
+    if (!row) throw notFound("Evacuation");
+    return row;
+  }
+
+  router.post("/:id/evacuations/:evacuationId/samples", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritable(visit.status);
+    const row = await loadEvacuation(organisationId, visit.id, req.params.evacuationId);
+    const body = EvacuationSampleBodySchema.parse(req.body);
+    const minutes = body.minutes ?? minutesSince(row.startedAt);
+    const last = row.samples.at(-1);
+    if (last && minutes <= last.minutes) {
+      throw new HttpError(400, FIELDS, { minutes: `Each reading must be later than the one before it (${last.minutes} min)` });
+    }
+    const samples = [...row.samples, { minutes, microns: body.microns }];
+    const settings = await getProcedureSettings(db, organisationId);
+    const evacuation = await updateEvacuation(db, organisationId, row.id, {
+      targetMicrons: row.targetMicrons,
+      isolatedAtMinutes: row.isolatedAtMinutes,
+      samples,
+      note: row.note,
+      result: evacuationResult(samples, row.targetMicrons, row.isolatedAtMinutes, settings.procedureLimits),
+    });
+    await joinCrew(db, visit.id, user.id);
+    res.status(201).json({ evacuation });
+  });
+
+  router.patch("/:id/evacuations/:evacuationId", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritable(visit.status);
+    const row = await loadEvacuation(organisationId, visit.id, req.params.evacuationId);
+    const body = EvacuationUpdateSchema.parse(req.body);
+    const isolatedAtMinutes = body.isolateNow ? isolationNow(row.startedAt, row.samples) : body.isolatedAtMinutes === undefined ? row.isolatedAtMinutes : body.isolatedAtMinutes;
+    const target = body.targetMicrons ?? row.targetMicrons;
+    const settings = await getProcedureSettings(db, organisationId);
+    const evacuation = await updateEvacuation(db, organisationId, row.id, {
+      targetMicrons: target,
+      isolatedAtMinutes,
+      samples: row.samples,
+      note: body.note === undefined ? row.note : body.note || null,
+      result: evacuationResult(row.samples, target, isolatedAtMinutes, settings.procedureLimits),
+    });
+    res.json({ evacuation });
+  });
+
+  return router;
+}

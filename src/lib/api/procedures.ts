@@ -1,0 +1,94 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { z } from "zod";
+import {
+  ElectricalCheckListSchema,
+  ElectricalCheckSchema,
+  EvacuationListSchema,
+  EvacuationSchema,
+  LeakSearchListSchema,
+  LeakSearchSchema,
+  PressureTestListSchema,
+  PressureTestSchema,
+  type ElectricalCheckBody,
+  type EvacuationCreate,
+  type EvacuationSampleBody,
+  type EvacuationUpdate,
+  type LeakSearchBody,
+  type PressureTestBody,
+} from "@shared/schemas/procedure-records.ts";
+import { apiRequest } from "./api-client.ts";
+
+type Kind = "electrical-checks" | "leak-searches" | "pressure-tests" | "evacuations";
+
+// ---- requests ---------------------------------------------------------------------------------
+
+export const getElectricalChecks = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/electrical-checks`, { schema: ElectricalCheckListSchema, signal });
+export const getLeakSearches = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/leak-searches`, { schema: LeakSearchListSchema, signal });
+export const getPressureTests = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/pressure-tests`, { schema: PressureTestListSchema, signal });
+export const getEvacuations = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/evacuations`, { schema: EvacuationListSchema, signal });
+
+export async function createElectricalCheck({ visitId, ...body }: ElectricalCheckBody & { visitId: string }) {
+  return (await apiRequest(`/visits/${visitId}/electrical-checks`, { method: "POST", body, schema: z.object({ electricalCheck: ElectricalCheckSchema }) })).electricalCheck;
+}
+
+export async function createLeakSearch({ visitId, ...body }: LeakSearchBody & { visitId: string }) {
+  return (await apiRequest(`/visits/${visitId}/leak-searches`, { method: "POST", body, schema: z.object({ leakSearch: LeakSearchSchema }) })).leakSearch;
+}
+
+export async function createPressureTest({ visitId, ...body }: PressureTestBody & { visitId: string }) {
+  return (await apiRequest(`/visits/${visitId}/pressure-tests`, { method: "POST", body, schema: z.object({ pressureTest: PressureTestSchema }) })).pressureTest;
+}
+
+const EvacuationEnvelope = z.object({ evacuation: EvacuationSchema });
+
+export async function createEvacuation({ visitId, ...body }: EvacuationCreate & { visitId: string }) {
+  return (await apiRequest(`/visits/${visitId}/evacuations`, { method: "POST", body, schema: EvacuationEnvelope })).evacuation;
+}
+
+export async function addEvacuationSample({ visitId, evacuationId, ...body }: EvacuationSampleBody & { visitId: string; evacuationId: string }) {
+  return (await apiRequest(`/visits/${visitId}/evacuations/${evacuationId}/samples`, { method: "POST", body, schema: EvacuationEnvelope })).evacuation;
+}
+
+export async function updateEvacuation({ visitId, evacuationId, ...body }: EvacuationUpdate & { visitId: string; evacuationId: string }) {
+  return (await apiRequest(`/visits/${visitId}/evacuations/${evacuationId}`, { method: "PATCH", body, schema: EvacuationEnvelope })).evacuation;
+}
+
+// ---- query options ----------------------------------------------------------------------------
+
+const key = (kind: Kind, visitId: string) => ["procedures", kind, visitId] as const;
+
+export const electricalChecksQueryOptions = (visitId: string) =>
+  queryOptions({ queryKey: key("electrical-checks", visitId), queryFn: ({ signal }) => getElectricalChecks(visitId, signal) });
+export const leakSearchesQueryOptions = (visitId: string) =>
+  queryOptions({ queryKey: key("leak-searches", visitId), queryFn: ({ signal }) => getLeakSearches(visitId, signal) });
+export const pressureTestsQueryOptions = (visitId: string) =>
+  queryOptions({ queryKey: key("pressure-tests", visitId), queryFn: ({ signal }) => getPressureTests(visitId, signal) });
+export const evacuationsQueryOptions = (visitId: string) =>
+  queryOptions({ queryKey: key("evacuations", visitId), queryFn: ({ signal }) => getEvacuations(visitId, signal) });
+
+// ---- hooks ------------------------------------------------------------------------------------
+
+export const useElectricalChecks = (visitId: string) => useQuery(electricalChecksQueryOptions(visitId));
+export const useLeakSearches = (visitId: string) => useQuery(leakSearchesQueryOptions(visitId));
+export const usePressureTests = (visitId: string) => useQuery(pressureTestsQueryOptions(visitId));
+export const useEvacuations = (visitId: string) => useQuery(evacuationsQueryOptions(visitId));
+
+/** Saves, then refreshes that procedure's list and the visit (the crew may have grown). */
+function useProcedureMutation<TVariables extends { visitId: string }, TResult>(kind: Kind, mutationFn: (variables: TVariables) => Promise<TResult>) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn,
+    onSuccess: (_result, variables) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: key(kind, variables.visitId) }),
+        queryClient.invalidateQueries({ queryKey: ["visits", "detail", variables.visitId] }),
+      ]),
+  });
+}
+
+export const useCreateElectricalCheck = () => useProcedureMutation("electrical-checks", createElectricalCheck);
+export const useCreateLeakSearch = () => useProcedureMutation("leak-searches", createLeakSearch);
+export const useCreatePressureTest = () => useProcedureMutation("pressure-tests", createPressureTest);
+export const useCreateEvacuation = () => useProcedureMutation("evacuations", createEvacuation);
+export const useAddEvacuationSample = () => useProcedureMutation("evacuations", addEvacuationSample);
+export const useUpdateEvacuation = () => useProcedureMutation("evacuations", updateEvacuation);
