@@ -22,7 +22,7 @@
  * @throws RangeError "annualLeakRate requires ..." for no events, a bad date or mass, a charge
  *   or period ≤ 0, or (without a period) first and last events less than a day apart
  * @example annualLeakRate([{ date: "2025-01-10", addedKg: 0.5 }, { date: "2025-07-11", addedKg: 0.6 }], 4)
- *   // { kgPerYear: ≈ 1.21, percentOfChargePerYear: ≈ 30.2, periodDays: 182 }
+ *   // { kgPerYear: ≈ 1.203, percentOfChargePerYear: ≈ 30.08, periodDays: 182 }
  */
 import type { AnnualLeakRate } from "../../schemas/procedures.ts";
 import { DAYS_PER_YEAR } from "./procedure-limits.ts";

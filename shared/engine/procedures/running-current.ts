@@ -13,7 +13,7 @@
  * @param limits organisation override of RUNNING_CURRENT_LIMITS
  * @returns verdict, reason, source and the current as percent of the nameplate figure
  * @throws RangeError "runningCurrent requires ..." for a negative or non-finite current or a rating ≤ 0
- * @example runningCurrent({ amps: 9.2, ratedA: 10, kind: "compressor-rla" }).percentOfRated // 92
+ * @example runningCurrent({ amps: 9.2, ratedA: 10, kind: "compressor-rla" }).percentOfRated // ≈ 92
  */
 import type { RunningCurrentKind, RunningCurrentResult } from "../../schemas/procedures.ts";
 import { formatTenths } from "../diagnosis/format-tenths.ts";
