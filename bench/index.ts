@@ -3,6 +3,7 @@
  */
 import "./properties-bench.ts";
 import "./diagnose.bench.ts";
+import "./procedures.bench.ts";
 import { runRegisteredBenches } from "./bench-registry.ts";
 
 await runRegisteredBenches();
