@@ -53,9 +53,15 @@ export function pressureTestResult(input: {
   const pass = correctedDropKPa <= allowedDropKPa;
 
   const expected = `expected ${formatTenths(expectedEndGaugeKPa)} kPa at ${formatTenths(endTempC)} °C`;
-  const reason = pass
-    ? `Held: end reading ${formatTenths(endGaugeKPa)} kPa against ${expected}; the corrected drop of ${formatTenths(correctedDropKPa)} kPa is within the ${formatTenths(allowedDropKPa)} kPa allowed`
-    : `Lost pressure: end reading ${formatTenths(endGaugeKPa)} kPa against ${expected}; the corrected drop of ${formatTenths(correctedDropKPa)} kPa is more than the ${formatTenths(allowedDropKPa)} kPa allowed: find the leak`;
+  const allowed = `${formatTenths(allowedDropKPa)} kPa allowed`;
+  let reason: string;
+  if (!pass) {
+    reason = `Lost pressure: end reading ${formatTenths(endGaugeKPa)} kPa against ${expected}; the corrected drop of ${formatTenths(correctedDropKPa)} kPa is more than the ${allowed}: find the leak`;
+  } else if (correctedDropKPa <= 0) {
+    reason = `Held: end reading ${formatTenths(endGaugeKPa)} kPa against ${expected}; no loss once corrected for temperature (${formatTenths(-correctedDropKPa)} kPa above expected)`;
+  } else {
+    reason = `Held: end reading ${formatTenths(endGaugeKPa)} kPa against ${expected}; the corrected drop of ${formatTenths(correctedDropKPa)} kPa is within the ${allowed}`;
+  }
   return {
     expectedEndGaugeKPa,
     correctedDropKPa,

@@ -72,3 +72,10 @@ describe("checkTestPressure", () => {
     expect(verdict.source).toMatch(/organisation/);
   });
 });
+
+describe("pressureTestResult reason", () => {
+  it("says 'no loss' when the end reading is above the corrected expectation ([S65] worked example)", () => {
+    const { reason } = pressureTestResult({ startGaugeKPa: 3800, startTempC: 27, endGaugeKPa: 3730, endTempC: 20, allowedDropKPa: 0 });
+    expect(reason).toBe("Held: end reading 3730.0 kPa against expected 3709.0 kPa at 20.0 °C; no loss once corrected for temperature (21.0 kPa above expected)");
+  });
+});
