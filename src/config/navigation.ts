@@ -1,4 +1,4 @@
-import { ClipboardCheck, ClipboardList, GraduationCap, HardHat, Home, Mail, SlidersHorizontal, Table2, Users, Wrench, type LucideIcon } from "lucide-react";
+import { ClipboardCheck, ClipboardList, Cylinder, GraduationCap, HardHat, Home, Mail, SlidersHorizontal, Table2, Users, Wrench, type LucideIcon } from "lucide-react";
 import { PERMISSIONS, type Role } from "@shared/schemas/auth.ts";
 import { paths } from "./paths.ts";
 
@@ -24,6 +24,7 @@ export const navigation: NavItem[] = [
   { label: "Review", href: paths.jobs.getHref("awaiting-review"), icon: ClipboardCheck, roles: PERMISSIONS.signOff },
   { label: "Equipment", href: paths.equipment.getHref(), icon: Wrench, matchPrefix: true, phoneBar: true },
   { label: "P–T tables", href: paths.tables.getHref(), icon: Table2, matchPrefix: true, phoneBar: true },
+  { label: "Cylinders", href: paths.cylinders.getHref(), icon: Cylinder, matchPrefix: true },
   { label: "Casebook", href: paths.casebook.getHref(), icon: GraduationCap, matchPrefix: true },
   { label: "Safety", href: paths.safety.getHref(), icon: HardHat },
   { label: "Members", href: paths.members.getHref(), icon: Users },

@@ -45,6 +45,9 @@ export const paths = {
     edit: { path: "/casebook/cases/:caseId/edit", getHref: (id: string) => `/casebook/cases/${encodeURIComponent(id)}/edit` },
   },
 
+  cylinders: { path: "/cylinders", getHref: () => "/cylinders" },
+  register: { path: "/register", getHref: () => "/register" },
+
   members: { path: "/members", getHref: () => "/members" },
   profile: { path: "/profile", getHref: () => "/profile" },
   outbox: { path: "/outbox", getHref: () => "/outbox" },

@@ -6,7 +6,7 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
 import { EquipmentNameplate } from "@/features/equipment/components/equipment-nameplate.tsx";
 import { LastSettledReadings } from "@/features/equipment/components/last-settled-readings.tsx";
-import { RefrigerantHistory } from "@/features/equipment/components/refrigerant-history.tsx";
+import { EquipmentRefrigerantHistory } from "@/features/register/components/equipment-refrigerant-history.tsx";
 import { StartVisitForm } from "@/features/jobs/components/start-visit-form.tsx";
 import { VisitList } from "@/features/jobs/components/visit-list.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
@@ -109,7 +109,7 @@ export default function EquipmentDetailRoute() {
         <VisitList visits={visits} />
       </Panel>
       <Panel title="Refrigerant history" id="refrigerant-heading">
-        <RefrigerantHistory visits={visits} circuits={equipment.circuits} />
+        <EquipmentRefrigerantHistory equipmentId={equipment.id} />
       </Panel>
       <section
         aria-labelledby="nameplate-heading"

@@ -1,0 +1,68 @@
+import { MOVEMENT_KIND_LABELS } from "@shared/schemas/register.ts";
+import { useVisitRefrigerant } from "@/lib/api/register.ts";
+import { formatKg, formatSignedKg, formatWhen } from "../utils/format-register.ts";
+import { VerdictLine } from "./verdict-line.tsx";
+
+/** The report's refrigerant section: recovered, reused, added, the balance and the weigh-in per circuit. */
+export function RefrigerantReport({ visitId }: { visitId: string }) {
+  const register = useVisitRefrigerant(visitId);
+  return (
+    <section aria-labelledby="refrigerant-report-heading" className="space-y-2 break-inside-avoid-page">
+      <h2 id="refrigerant-report-heading" className="text-lg font-semibold">
+        Refrigerant
+      </h2>
+      {register.isPending && <p aria-busy="true">Reading the register…</p>}
+      {register.isError && <p role="alert" className="text-fault">⚠ The register did not load: {register.error.message}</p>}
+      {register.data && register.data.movements.length === 0 && <p className="text-muted">No refrigerant recovered or added.</p>}
+      {register.data && register.data.movements.length > 0 && (
+        <>
+          <table className="num w-full text-left text-sm">
+            <thead>
+              <tr className="border-b-2 border-ink font-sans">
+                <th className="py-1 pr-2">Circuit</th>
+                <th className="py-1 pr-2">Nameplate</th>
+                <th className="py-1 pr-2">Recovered</th>
+                <th className="py-1 pr-2">Reused</th>
+                <th className="py-1 pr-2">Added</th>
+                <th className="py-1 pr-2">Short when recovered</th>
+                <th className="py-1">Final vs nameplate</th>
+              </tr>
+            </thead>
+            <tbody>
+              {register.data.circuits.map((circuit) => (
+                <tr key={circuit.circuit} className="border-b border-rule">
+                  <td className="py-1 pr-2">{circuit.circuit}</td>
+                  <td className="py-1 pr-2">{formatKg(circuit.nameplateKg)}</td>
+                  <td className="py-1 pr-2">{formatKg(circuit.recoveredKg)}</td>
+                  <td className="py-1 pr-2">{formatKg(circuit.reusedKg)}</td>
+                  <td className="py-1 pr-2">{formatKg(circuit.addedKg)}</td>
+                  <td className="py-1 pr-2">{circuit.recoveredOnVisit ? formatKg(circuit.balance.shortfallKg) : "—"}</td>
+                  <td className="py-1">{circuit.recoveredOnVisit ? formatSignedKg(circuit.balance.differenceFromNameplateKg) : "—"}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          {register.data.circuits
+            .filter((circuit) => circuit.charging)
+            .map((circuit) => (
+              <div key={circuit.circuit}>
+                <p className="font-medium">Circuit {circuit.circuit} weigh-in</p>
+                <VerdictLine result={circuit.charging!.check} />
+              </div>
+            ))}
+          {register.data.liquidChargingNote && <p className="text-sm">{register.data.refrigerant} is a zeotropic blend: charged as liquid.</p>}
+          <ul className="space-y-0.5 text-sm">
+            {register.data.movements.map((movement) => (
+              <li key={movement.id}>
+                <span className="num text-muted">{formatWhen(movement.at)}</span> — {MOVEMENT_KIND_LABELS[movement.kind]}
+                {movement.circuit !== null && ` (circuit ${movement.circuit})`}: <span className="num">{formatKg(movement.kg)}</span>
+                {movement.cylinder && ` · cylinder ${movement.cylinder.label}`}
+                {movement.technician && ` · ${movement.technician.name}`}
+              </li>
+            ))}
+          </ul>
+        </>
+      )}
+    </section>
+  );
+}

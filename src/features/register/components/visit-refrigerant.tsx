@@ -1,0 +1,156 @@
+import { Droplets, Info } from "lucide-react";
+import { Link } from "react-router-dom";
+import type { Equipment } from "@shared/schemas/equipment.ts";
+import { MOVEMENT_KIND_LABELS, type CircuitBalance, type Movement } from "@shared/schemas/register.ts";
+import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
+import { paths } from "@/config/paths.ts";
+import { useCylinders, useVisitRefrigerant } from "@/lib/api/register.ts";
+import { formatKg, formatSignedKg, formatWhen } from "../utils/format-register.ts";
+import { ChargingCheck } from "./charging-check.tsx";
+import { CylinderFillBar } from "./cylinder-fill.tsx";
+import { MovementForm } from "./movement-form.tsx";
+
+function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitBalance; visitId: string; canWrite: boolean; single: boolean }) {
+  const { shortfallKg, finalChargeKg, differenceFromNameplateKg } = balance.balance;
+  return (
+    <section aria-label={`Circuit ${balance.circuit} balance`} className="space-y-3 rounded-card border-2 border-rule bg-surface p-4" data-testid={`balance-${balance.circuit}`}>
+      <h3 className="font-semibold">{single ? "Balance against the nameplate" : `Circuit ${balance.circuit}: balance against the nameplate`}</h3>
+      <dl className="num grid grid-cols-2 gap-x-4 gap-y-1 sm:grid-cols-3">
+        <dt className="font-sans text-muted">Nameplate</dt>
+        <dd>{formatKg(balance.nameplateKg)}</dd>
+        <dt className="font-sans text-muted">Recovered</dt>
+        <dd>{formatKg(balance.recoveredKg)}</dd>
+        <dt className="font-sans text-muted">Reused</dt>
+        <dd>{formatKg(balance.reusedKg)}</dd>
+        <dt className="font-sans text-muted">Added</dt>
+        <dd>{formatKg(balance.addedKg)}</dd>
+        {balance.sentForReclaimKg > 0 && (
+          <>
+            <dt className="font-sans text-muted">Sent for reclaim</dt>
+            <dd>{formatKg(balance.sentForReclaimKg)}</dd>
+          </>
+        )}
+      </dl>
+      {balance.recoveredOnVisit ? (
+        <div className="space-y-1">
+          <p className="font-semibold" data-testid={`shortfall-${balance.circuit}`}>
+            {shortfallKg > 0
+              ? `The circuit was ${formatKg(shortfallKg)} short of its nameplate charge when recovered.`
+              : shortfallKg < 0
+                ? `${formatKg(-shortfallKg)} more than the nameplate charge came out: check the nameplate and any line-length allowance.`
+                : "The recovered mass matches the nameplate charge."}
+          </p>
+          <p>
+            Charge now: <span className="num font-semibold">{formatKg(finalChargeKg)}</span> (reused + added), {formatSignedKg(differenceFromNameplateKg)} against the nameplate.
+          </p>
+        </div>
+      ) : (
+        <p className="text-muted">Nothing recovered on this visit, so there is no shortfall to work out.</p>
+      )}
+      <h4 className="font-semibold">Charging</h4>
+      <ChargingCheck visitId={visitId} balance={balance} canWrite={canWrite} />
+    </section>
+  );
+}
+
+function MovementList({ movements }: { movements: readonly Movement[] }) {
+  if (movements.length === 0) return <p className="text-muted">No refrigerant logged on this visit yet.</p>;
+  return (
+    <ul aria-label="Refrigerant logged on this visit" className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface">
+      {movements.map((movement) => (
+        <li key={movement.id} className="p-3">
+          <p className="font-semibold">
+            <span className="num">{formatKg(movement.kg)}</span> {MOVEMENT_KIND_LABELS[movement.kind].toLowerCase()}
+            {movement.circuit !== null && <span className="font-normal"> · circuit {movement.circuit}</span>}
+          </p>
+          <p className="text-sm text-muted">
+            <span className="num">{formatWhen(movement.at)}</span>
+            {movement.cylinder && <> · cylinder {movement.cylinder.label}</>}
+            {movement.technician && <> · {movement.technician.name}</>}
+          </p>
+          {movement.note && <p>{movement.note}</p>}
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+/** The visit's refrigerant: what was recovered, reused and added, the balance, the cylinders, the charging check. */
+export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId: string; unit: Equipment; circuit: number; canWrite: boolean }) {
+  const register = useVisitRefrigerant(visitId);
+  const cylinders = useCylinders({ refrigerant: unit.refrigerant });
+
+  if (register.isPending) return <p aria-busy="true">Reading the register…</p>;
+  if (register.isError) return <p role="alert" className="font-medium text-fault">⚠ The register did not load: {register.error.message}</p>;
+  const data = register.data;
+  const recoveryCylinders = (cylinders.data ?? []).filter((cylinder) => cylinder.kind === "recovery");
+  const filling = recoveryCylinders.filter((cylinder) => cylinder.fill.check && cylinder.fill.check.verdict !== "pass");
+  const logged = data.movements.some((movement) => movement.kind !== "recovered");
+
+  return (
+    <div className="space-y-4">
+      {data.liquidChargingNote && (
+        <div className="flex gap-3 rounded-card border-2 border-accent bg-surface p-4" data-testid="liquid-charging-note">
+          <Droplets aria-hidden className="mt-0.5 size-5 shrink-0 text-accent" />
+          <div>
+            <p className="font-semibold">Charge {data.refrigerant} as liquid</p>
+            <p>{data.liquidChargingNote}</p>
+            <p className="text-sm text-muted">Source: TRADE.md §6 zeotropic blends [S4][S56]; metering liquid into the suction side is common practice.</p>
+          </div>
+        </div>
+      )}
+
+      {filling.length > 0 && (
+        <div role="status" className="space-y-3 rounded-card border-2 border-caution bg-surface p-4" data-testid="cylinder-warnings">
+          <p className="font-semibold text-caution">⚠ Recovery cylinder{filling.length > 1 ? "s" : ""} near or past the 80 % fill limit</p>
+          {filling.map((cylinder) => (
+            <div key={cylinder.id}>
+              <p className="font-medium">{cylinder.label}</p>
+              <CylinderFillBar cylinder={cylinder} />
+            </div>
+          ))}
+        </div>
+      )}
+      <CautionPanel topic="recovery-cylinder" />
+
+      <div className="grid gap-4 lg:grid-cols-2">
+        {data.circuits.map((balance) => (
+          <BalanceCard key={balance.circuit} balance={balance} visitId={visitId} canWrite={canWrite} single={data.circuits.length === 1} />
+        ))}
+      </div>
+
+      {canWrite && (
+        <section aria-labelledby="movement-form-heading" className="space-y-3 rounded-card border-2 border-accent bg-surface p-4">
+          <h3 id="movement-form-heading" className="text-lg font-semibold">
+            Log refrigerant
+          </h3>
+          {cylinders.isError && <p role="alert" className="text-fault">⚠ The cylinders did not load: {cylinders.error.message}</p>}
+          <MovementForm visitId={visitId} refrigerant={unit.refrigerant} circuits={unit.circuits} defaultCircuit={circuit} cylinders={cylinders.data ?? []} />
+          <CautionPanel topic="liquid-refrigerant" compact />
+          <p className="text-sm text-muted">
+            Cylinders are kept on the{" "}
+            <Link to={paths.cylinders.getHref()} className="text-accent underline underline-offset-4">
+              Cylinders
+            </Link>{" "}
+            page.
+          </p>
+        </section>
+      )}
+
+      {(data.runLogChargeMarksKg.added > 0 || data.runLogChargeMarksKg.removed > 0) && (
+        <p className="flex items-start gap-2 text-sm">
+          <Info aria-hidden className="mt-0.5 size-4 shrink-0" />
+          <span>
+            The run log marks {data.runLogChargeMarksKg.added > 0 && <>{formatKg(data.runLogChargeMarksKg.added)} added</>}
+            {data.runLogChargeMarksKg.added > 0 && data.runLogChargeMarksKg.removed > 0 && " and "}
+            {data.runLogChargeMarksKg.removed > 0 && <>{formatKg(data.runLogChargeMarksKg.removed)} removed</>} on the trend chart. Those marks are not the register
+            {logged ? "" : ": log the kilograms here too"}, so nothing is counted twice.
+          </span>
+        </p>
+      )}
+
+      <h3 className="text-lg font-semibold">Logged on this visit</h3>
+      <MovementList movements={data.movements} />
+    </div>
+  );
+}
