@@ -63,6 +63,9 @@ export default function CasebookRoute() {
         )}
       </PanelBoundary>
       <PanelBoundary>
+        <GeneratorForm />
+      </PanelBoundary>
+      <PanelBoundary>
         {cases.isPending ? (
           <Loading what="the cases" />
         ) : cases.isError ? (
@@ -70,9 +73,6 @@ export default function CasebookRoute() {
         ) : (
           <CaseList cases={cases.data} />
         )}
-      </PanelBoundary>
-      <PanelBoundary>
-        <GeneratorForm />
       </PanelBoundary>
     </div>
   );

@@ -25,7 +25,11 @@ function saturationWhy(
     side === "suction"
       ? `Superheat is measured on vapour leaving the evaporator, so the suction pressure is looked up in the dew (vapour) column of the ${refrigerant} table.`
       : `Subcooling is measured on liquid leaving the condenser, so the liquid pressure is looked up in the bubble (liquid) column of the ${refrigerant} table.`;
-  const tables = " The table is in absolute pressure: add the atmospheric pressure to the gauge reading first.";
+  // Said once, on the first lookup: the tables are absolute, the gauges are not.
+  const tables =
+    side === "suction"
+      ? " The table is in absolute pressure: add the atmospheric pressure to the gauge reading first."
+      : "";
   if (!isBlend)
     return `${base}${tables} ${refrigerant} is a single substance: bubble and dew are the same temperature at one pressure.`;
   if (glideK !== null && Math.abs(glideK) < NEGLIGIBLE_GLIDE_K) {

@@ -112,7 +112,7 @@ export function WorkedSteps({ steps, units }: { steps: WorkedStep[]; units: Disp
           >
             {index + 1}
           </span>
-          <div className="min-w-0 space-y-1">
+          <div className="min-w-0 flex-1 space-y-1">
             <StepBody step={step} units={units} />
           </div>
         </li>
