@@ -5,6 +5,10 @@ import { can } from "@shared/schemas/auth.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
+import { ElectricalReport } from "@/features/procedures/components/electrical-report.tsx";
+import { EvacuationReport } from "@/features/procedures/components/evacuation-report.tsx";
+import { LeakSearchReport } from "@/features/procedures/components/leak-search-report.tsx";
+import { PressureTestReport } from "@/features/procedures/components/pressure-test-report.tsx";
 import { ReadingsTable } from "@/features/report/components/readings-table.tsx";
 import { SendReportForm } from "@/features/report/components/send-report-form.tsx";
 import { FindingPanel } from "@/features/run-log/components/finding-panel.tsx";
@@ -119,6 +123,11 @@ export default function VisitReportRoute() {
           </ul>
         )}
       </section>
+
+      <ElectricalReport visitId={data.id} />
+      <LeakSearchReport visitId={data.id} />
+      <PressureTestReport visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} />
+      <EvacuationReport visitId={data.id} chartWidth={PRINT_CHART_WIDTH} />
 
       {data.photos.length > 0 && (
         <section aria-labelledby="photos-heading" className="break-inside-avoid-page">

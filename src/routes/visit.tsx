@@ -1,6 +1,6 @@
 import { FileText } from "lucide-react";
-import { useState } from "react";
-import { Link, useParams } from "react-router-dom";
+import { useState, type ReactNode } from "react";
+import { Link, useParams, useSearchParams } from "react-router-dom";
 import { getRefrigerant } from "@shared/engine/index.ts";
 import { can } from "@shared/schemas/auth.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
@@ -9,6 +9,10 @@ import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
 import { RunLog } from "@/features/run-log/components/run-log.tsx";
+import { ElectricalPanel } from "@/features/procedures/components/electrical-panel.tsx";
+import { EvacuationPanel } from "@/features/procedures/components/evacuation-panel.tsx";
+import { LeakSearchPanel } from "@/features/procedures/components/leak-search-panel.tsx";
+import { PressureTestPanel } from "@/features/procedures/components/pressure-test-panel.tsx";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { CommentsPanel } from "@/features/visit/components/comments-panel.tsx";
 import { PhotosPanel } from "@/features/visit/components/photos-panel.tsx";
@@ -27,6 +31,7 @@ export default function VisitRoute() {
   const me = useMe();
   const { units, atmosphericKPa } = useDisplayUnits();
   const [circuit, setCircuit] = useState(1);
+  const [searchParams, setSearchParams] = useSearchParams();
 
   if (visit.isPending || (visit.isSuccess && equipment.isPending)) {
     return <p aria-busy="true">Loading the visit…</p>;
@@ -51,6 +56,57 @@ export default function VisitRoute() {
   const nameplate = unit.circuits.find((candidate) => candidate.number === circuit) ?? unit.circuits[0]!;
   const refrigerant = getRefrigerant(unit.refrigerant);
   const caution = safetyClasses[refrigerant.safety.class].caution;
+
+  // The visit's sections: one line each, shown one at a time (?section= keeps the choice on reload).
+  const sections: { id: string; label: string; element: ReactNode }[] = [
+    {
+      id: "run-log",
+      label: "Run log",
+      element: (
+        <div className="space-y-4">
+          {unit.circuits.length > 1 && (
+            <Segmented<string>
+              label="Circuit"
+              value={String(circuit)}
+              onChange={(value) => setCircuit(Number(value))}
+              options={unit.circuits.map((candidate) => ({ value: String(candidate.number), label: `Circuit ${candidate.number}` }))}
+            />
+          )}
+          <p className="text-sm text-muted">
+            Circuit {nameplate.number}: {METERING_LABELS[nameplate.meteringDevice]}, factory charge <span className="num">{nameplate.factoryChargeKg} kg</span>
+            {nameplate.targetSuperheatK != null && <> · target superheat <span className="num">{nameplate.targetSuperheatK} K</span></>}
+            {nameplate.targetSubcoolingK != null && <> · target subcooling <span className="num">{nameplate.targetSubcoolingK} K</span></>} · gauge pressures against{" "}
+            <span className="num">{atmosphericKPa} kPa</span>
+          </p>
+
+          <PanelBoundary>
+            <RunLog
+              key={`${data.id}-${nameplate.number}`}
+              visit={data}
+              circuit={nameplate.number}
+              context={{
+                refrigerant: unit.refrigerant,
+                meteringDevice: nameplate.meteringDevice,
+                targetSuperheatK: nameplate.targetSuperheatK,
+                targetSubcoolingK: nameplate.targetSubcoolingK,
+                compressorRla: unit.compressorRlaA,
+              }}
+              isBlend={refrigerant.kind === "blend"}
+              units={units}
+              atmosphericKPa={atmosphericKPa}
+              canWrite={canWrite}
+            />
+          </PanelBoundary>
+        </div>
+      ),
+    },
+    { id: "electrical", label: "Electrical", element: <ElectricalPanel visitId={data.id} circuits={unit.circuits.map((candidate) => candidate.number)} canWrite={canWrite} /> },
+    { id: "leak-search", label: "Leak search", element: <LeakSearchPanel visitId={data.id} canWrite={canWrite} /> },
+    { id: "pressure-test", label: "Pressure test", element: <PressureTestPanel visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} canWrite={canWrite} /> },
+    { id: "evacuation", label: "Evacuation", element: <EvacuationPanel visitId={data.id} canWrite={canWrite} /> },
+    // The refrigerant register's panel goes here: { id: "refrigerant", label: "Refrigerant", element: … },
+  ];
+  const activeSection = sections.find((section) => section.id === searchParams.get("section")) ?? sections[0]!;
 
   return (
     <div className="space-y-5">
@@ -82,39 +138,8 @@ export default function VisitRoute() {
 
       {caution && <CautionPanel topic={caution} compact />}
 
-      {unit.circuits.length > 1 && (
-        <Segmented<string>
-          label="Circuit"
-          value={String(circuit)}
-          onChange={(value) => setCircuit(Number(value))}
-          options={unit.circuits.map((candidate) => ({ value: String(candidate.number), label: `Circuit ${candidate.number}` }))}
-        />
-      )}
-      <p className="text-sm text-muted">
-        Circuit {nameplate.number}: {METERING_LABELS[nameplate.meteringDevice]}, factory charge <span className="num">{nameplate.factoryChargeKg} kg</span>
-        {nameplate.targetSuperheatK != null && <> · target superheat <span className="num">{nameplate.targetSuperheatK} K</span></>}
-        {nameplate.targetSubcoolingK != null && <> · target subcooling <span className="num">{nameplate.targetSubcoolingK} K</span></>} · gauge pressures against{" "}
-        <span className="num">{atmosphericKPa} kPa</span>
-      </p>
-
-      <PanelBoundary>
-        <RunLog
-          key={`${data.id}-${nameplate.number}`}
-          visit={data}
-          circuit={nameplate.number}
-          context={{
-            refrigerant: unit.refrigerant,
-            meteringDevice: nameplate.meteringDevice,
-            targetSuperheatK: nameplate.targetSuperheatK,
-            targetSubcoolingK: nameplate.targetSubcoolingK,
-            compressorRla: unit.compressorRlaA,
-          }}
-          isBlend={refrigerant.kind === "blend"}
-          units={units}
-          atmosphericKPa={atmosphericKPa}
-          canWrite={canWrite}
-        />
-      </PanelBoundary>
+      <Segmented<string> label="Visit section" value={activeSection.id} onChange={(id) => setSearchParams({ section: id }, { replace: true })} options={sections.map(({ id, label }) => ({ value: id, label }))} className="flex flex-wrap" />
+      <PanelBoundary key={activeSection.id}>{activeSection.element}</PanelBoundary>
 
       <div className="grid gap-4 lg:grid-cols-2">
         <PanelBoundary>

@@ -1,0 +1,16 @@
+import { useElectricalChecks } from "@/lib/api/procedures.ts";
+import { ElectricalCheckView } from "./electrical-check-view.tsx";
+import { ReportSection } from "./report-section.tsx";
+
+/** The visit report's electrical section: every check, each judged. */
+export function ElectricalReport({ visitId }: { visitId: string }) {
+  const checks = useElectricalChecks(visitId);
+  const list = checks.data?.electricalChecks ?? [];
+  return (
+    <ReportSection id="electrical-report" title="Electrical checks" state={checks} empty={list.length === 0}>
+      {list.map((check) => (
+        <ElectricalCheckView key={check.id} check={check} />
+      ))}
+    </ReportSection>
+  );
+}

@@ -1,0 +1,230 @@
+import { Plus, Play, Power, Undo2 } from "lucide-react";
+import { useState } from "react";
+import { paToMicrons } from "@shared/engine/index.ts";
+import { EvacuationCreateSchema, EvacuationSampleBodySchema, type Evacuation } from "@shared/schemas/procedure-records.ts";
+import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
+import { Button } from "@/components/ui/button/button.tsx";
+import { FormAlert } from "@/components/ui/field/field.tsx";
+import { Segmented } from "@/components/ui/field/segmented.tsx";
+import { useNow } from "@/hooks/use-now.ts";
+import { ApiError } from "@/lib/api/api-client.ts";
+import { useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
+import { formatNumber } from "@/lib/units/display-units.ts";
+import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { toNumber } from "../utils/parse-number.ts";
+import { EvacuationChart, formatVacuum, VACUUM_LABEL, type VacuumUnit } from "./evacuation-chart.tsx";
+import { EvacuationBadge, EvacuationSummary } from "./evacuation-view.tsx";
+import { NumberField } from "./number-field.tsx";
+
+/** Minutes since the evacuation started, to the tenth, by this device's clock. */
+const minutesSince = (startedAt: string, now: number) => Math.max(0, Math.round((now - new Date(startedAt).getTime()) / 6_000) / 10);
+const fromDisplay = (value: number, unit: VacuumUnit) => (unit === "micron" ? value : paToMicrons(value));
+
+function errorText(error: unknown, fallback: string): { message: string; fields: Record<string, string> } {
+  if (error instanceof ApiError) return { message: error.message, fields: error.fields };
+  return { message: error instanceof Error ? error.message : fallback, fields: {} };
+}
+
+/** Readings entry for the evacuation in progress: the time fills itself in, the unit is the technician's choice. */
+function SampleEntry({ visitId, evacuation, unit, canWrite }: { visitId: string; evacuation: Evacuation; unit: VacuumUnit; canWrite: boolean }) {
+  const now = useNow(5_000);
+  const addSample = useAddEvacuationSample();
+  const update = useUpdateEvacuation();
+  const [reading, setReading] = useState("");
+  const [minutes, setMinutes] = useState<string | null>(null);
+  const [isolation, setIsolation] = useState<string | null>(null);
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [formError, setFormError] = useState<string | null>(null);
+
+  const autoMinutes = formatNumber(minutesSince(evacuation.startedAt, now), 1);
+  const minutesText = minutes ?? autoMinutes;
+  const lastMinutes = evacuation.samples.at(-1)?.minutes;
+  const isolationText = isolation ?? (lastMinutes !== undefined ? String(lastMinutes) : autoMinutes);
+
+  const add = async () => {
+    setFormError(null);
+    const value = toNumber(reading);
+    const body = { microns: value === undefined || Number.isNaN(value) ? value : fromDisplay(value, unit), minutes: toNumber(minutesText) };
+    const parsed = EvacuationSampleBodySchema.safeParse(body);
+    if (!parsed.success) {
+      setErrors(fieldErrorsOf(parsed.error));
+      return;
+    }
+    setErrors({});
+    // Cleared at once, so the next reading can be typed while this one saves; restored on failure.
+    const typed = { reading, minutes };
+    setReading("");
+    setMinutes(null);
+    try {
+      await addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...parsed.data });
+    } catch (error) {
+      const { message, fields } = errorText(error, "The reading was not saved. Try again.");
+      setReading(typed.reading);
+      setMinutes(typed.minutes);
+      setErrors(fields);
+      setFormError(message);
+    }
+  };
+
+  const setIsolated = async (isolatedAtMinutes: number | null) => {
+    setFormError(null);
+    try {
+      await update.mutateAsync({ visitId, evacuationId: evacuation.id, isolatedAtMinutes });
+      setIsolation(null);
+    } catch (error) {
+      const { message, fields } = errorText(error, "The change was not saved. Try again.");
+      setErrors(fields);
+      setFormError(message);
+    }
+  };
+
+  if (!canWrite) return null;
+  return (
+    <div className="space-y-3">
+      <form
+        aria-label="Enter a gauge reading"
+        noValidate
+        className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[1fr_10rem_auto]"
+        onSubmit={(event) => {
+          event.preventDefault();
+          void add();
+        }}
+      >
+        <NumberField label="Vacuum reading" unit={VACUUM_LABEL[unit]} value={reading} onChange={setReading} error={errors.microns} />
+        <NumberField label="Time from start" unit="min" value={minutesText} onChange={setMinutes} error={errors.minutes} hint={minutes === null ? "Fills in by itself" : undefined} />
+        <Button type="submit" size="lg" disabled={addSample.isPending} className="col-span-2 sm:col-span-1">
+          <Plus aria-hidden className="size-5" /> {addSample.isPending ? "Saving…" : "Add reading"}
+        </Button>
+      </form>
+      {evacuation.isolatedAtMinutes === null ? (
+        <div className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[10rem_auto]">
+          <NumberField label="Valved off at" unit="min" value={isolationText} onChange={setIsolation} error={errors.isolatedAtMinutes} />
+          <Button variant="secondary" size="lg" disabled={update.isPending || evacuation.samples.length === 0} onClick={() => void setIsolated(toNumber(isolationText) ?? null)}>
+            <Power aria-hidden className="size-5" /> Pump valved off
+          </Button>
+        </div>
+      ) : (
+        <Button variant="quiet" disabled={update.isPending} onClick={() => void setIsolated(null)}>
+          <Undo2 aria-hidden className="size-5" /> Undo “valved off” (still pulling down)
+        </Button>
+      )}
+      {formError && <FormAlert>{formError}</FormAlert>}
+    </div>
+  );
+}
+
+/**
+ * Evacuation with its decay test: readings entered as they are read, charted on a log scale
+ * with the target and the valve-off moment, judged held / moisture / leak with the rise rate.
+ */
+export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWrite: boolean }) {
+  const evacuations = useEvacuations(visitId);
+  const create = useCreateEvacuation();
+  const [unit, setUnit] = useState<VacuumUnit>("micron");
+  const [target, setTarget] = useState<string | null>(null);
+  const [startError, setStartError] = useState<{ message: string; fields: Record<string, string> } | null>(null);
+
+  const list = evacuations.data?.evacuations ?? [];
+  const current = list.at(-1);
+  const earlier = list.slice(0, -1);
+  const targetText = target ?? (evacuations.data ? String(evacuations.data.defaults.targetMicrons) : "");
+
+  const start = async () => {
+    setStartError(null);
+    const body = { targetMicrons: toNumber(targetText) };
+    const parsed = EvacuationCreateSchema.safeParse(body);
+    if (!parsed.success) {
+      setStartError({ message: "Check the target", fields: fieldErrorsOf(parsed.error) });
+      return;
+    }
+    try {
+      await create.mutateAsync({ visitId, ...parsed.data });
+      setTarget(null);
+    } catch (error) {
+      setStartError(errorText(error, "The evacuation was not started. Try again."));
+    }
+  };
+
+  return (
+    <div className="space-y-4">
+      <CautionPanel topic="electrical" />
+      <p className="text-sm text-muted">Read the vacuum on an electronic (micron) gauge at the point furthest from the pump, never a compound gauge.</p>
+      {evacuations.isError && <FormAlert>The evacuations could not be loaded: {evacuations.error.message}</FormAlert>}
+
+      <Segmented<VacuumUnit> label="Vacuum unit" value={unit} onChange={setUnit} options={[{ value: "micron", label: "Microns" }, { value: "Pa", label: "Pa" }]} />
+
+      {current && (
+        <section aria-labelledby="evacuation-current-heading" className="space-y-3 rounded-card border-2 border-rule bg-surface p-4">
+          <h2 id="evacuation-current-heading" className="text-lg font-semibold">
+            Evacuation started {new Date(current.startedAt).toLocaleTimeString(undefined, { timeStyle: "short" })}
+          </h2>
+          <EvacuationSummary evacuation={current} unit={unit} />
+          <EvacuationChart evacuation={current} unit={unit} />
+          <SampleEntry key={current.id} visitId={visitId} evacuation={current} unit={unit} canWrite={canWrite} />
+          {current.samples.length > 0 && (
+            <details>
+              <summary className="min-h-touch cursor-pointer py-2 font-medium">Readings ({current.samples.length})</summary>
+              <table className="num w-full max-w-sm text-sm">
+                <thead>
+                  <tr className="text-left font-sans text-muted">
+                    <th className="py-1 font-medium">Time</th>
+                    <th className="py-1 font-medium">Reading</th>
+                  </tr>
+                </thead>
+                <tbody>
+                  {current.samples.map((sample) => (
+                    <tr key={sample.minutes} className="border-t border-rule">
+                      <td className="py-1">
+                        {formatNumber(sample.minutes, 1)} min{current.isolatedAtMinutes !== null && sample.minutes >= current.isolatedAtMinutes ? " (decay)" : ""}
+                      </td>
+                      <td className="py-1">{formatVacuum(sample.microns, unit)}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </details>
+          )}
+        </section>
+      )}
+
+      {canWrite && (
+        <form
+          aria-label="Start an evacuation"
+          noValidate
+          className="grid items-end gap-3 rounded-card border-2 border-dashed border-rule p-4 sm:grid-cols-[12rem_auto]"
+          onSubmit={(event) => {
+            event.preventDefault();
+            void start();
+          }}
+        >
+          <NumberField label="Target" unit="µm" value={targetText} onChange={setTarget} error={startError?.fields.targetMicrons} hint="Your company's figure; 500 µm is the trade norm" />
+          <Button type="submit" size="lg" variant={current ? "secondary" : "primary"} disabled={create.isPending}>
+            <Play aria-hidden className="size-5" /> {current ? "Start another evacuation" : "Start the evacuation"}
+          </Button>
+          {startError && !startError.fields.targetMicrons && (
+            <div className="sm:col-span-2">
+              <FormAlert>{startError.message}</FormAlert>
+            </div>
+          )}
+        </form>
+      )}
+
+      {earlier.length > 0 && (
+        <section aria-labelledby="evacuation-earlier-heading">
+          <h2 id="evacuation-earlier-heading" className="font-semibold">
+            Earlier on this visit
+          </h2>
+          <ul className="mt-1 space-y-1">
+            {earlier.map((evacuation) => (
+              <li key={evacuation.id} className="flex flex-wrap items-center gap-2 text-sm">
+                <span className="num">{new Date(evacuation.startedAt).toLocaleTimeString(undefined, { timeStyle: "short" })}</span>
+                <EvacuationBadge evacuation={evacuation} />
+                {evacuation.samples.length > 0 && <span className="num text-muted">last {formatVacuum(evacuation.samples.at(-1)!.microns, unit)}</span>}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,25 @@
+import { useEvacuations } from "@/lib/api/procedures.ts";
+import { EvacuationChart } from "./evacuation-chart.tsx";
+import { EvacuationSummary } from "./evacuation-view.tsx";
+import { ReportSection } from "./report-section.tsx";
+
+/** The visit report's evacuation section: each evacuation's chart and decay verdict, in microns. */
+export function EvacuationReport({ visitId, chartWidth }: { visitId: string; chartWidth: number }) {
+  const evacuations = useEvacuations(visitId);
+  const list = evacuations.data?.evacuations ?? [];
+  return (
+    <ReportSection id="evacuation-report" title="Evacuation and decay test" state={evacuations} empty={list.length === 0}>
+      {list.map((evacuation) => (
+        <article key={evacuation.id} aria-label="Evacuation" className="space-y-2 rounded-card border-2 border-rule bg-surface p-3">
+          <h3 className="font-semibold">
+            Started {new Date(evacuation.startedAt).toLocaleString(undefined, { dateStyle: "short", timeStyle: "short" })}
+            {evacuation.recordedBy && <span className="font-normal text-muted"> · {evacuation.recordedBy.name}</span>}
+          </h3>
+          <EvacuationSummary evacuation={evacuation} unit="micron" />
+          <EvacuationChart evacuation={evacuation} unit="micron" width={chartWidth} height={240} />
+          {evacuation.note && <p className="text-sm">Note: {evacuation.note}</p>}
+        </article>
+      ))}
+    </ReportSection>
+  );
+}
