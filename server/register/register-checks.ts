@@ -27,8 +27,13 @@ import type { CylinderRow, MovementRow } from "../db/register.ts";
 /** Hottest temperature a cylinder may see in a ute or on a roof, °C (TRADE.md §6 [S79]: 54 °C). */
 export const CYLINDER_REFERENCE_TEMP_C = 54;
 
-/** The 80 % liquid fill limit of a cylinder and the verdict on the given contents. */
-export function cylinderFill(cylinder: Pick<CylinderRow, "waterCapacityKg" | "refrigerant">, contentsKg: number): CylinderFill {
+/**
+ * The 80 % liquid fill limit of a cylinder and, for a recovery cylinder, the verdict on the
+ * given contents. New and reclaimed cylinders are filled by their supplier to its own filling
+ * ratio, so Satura shows their limit but does not judge them (TRADE.md §6 states the 80 %
+ * rule for recovery cylinders).
+ */
+export function cylinderFill(cylinder: Pick<CylinderRow, "waterCapacityKg" | "refrigerant" | "kind">, contentsKg: number): CylinderFill {
   let maxContentsKg: number;
   try {
     maxContentsKg = cylinderFillLimit({ waterCapacityKg: cylinder.waterCapacityKg, refrigerant: cylinder.refrigerant, referenceTempC: CYLINDER_REFERENCE_TEMP_C }).maxContentsKg;
@@ -40,6 +45,9 @@ export function cylinderFill(cylinder: Pick<CylinderRow, "waterCapacityKg" | "re
       check: null,
       note: `Satura's ${cylinder.refrigerant} table has no liquid at ${CYLINDER_REFERENCE_TEMP_C} °C, so no fill limit can be worked out: follow the cylinder's stamped maximum fill.`,
     };
+  }
+  if (cylinder.kind !== "recovery") {
+    return { maxContentsKg, referenceTempC: CYLINDER_REFERENCE_TEMP_C, check: null, note: "Filled by the supplier: not judged against the recovery limit." };
   }
   const verdict = judgeCylinderFill({ contentsKg: Math.max(0, contentsKg), maxContentsKg });
   return {

@@ -83,7 +83,7 @@ export const CylinderFillSchema = z.object({
   /** 80 % liquid fill at the reference temperature (cylinderFillLimit); null when the tables cannot say. */
   maxContentsKg: z.number().nullable(),
   referenceTempC: z.number(),
-  /** judgeCylinderFill on the contents; null when there is no limit. */
+  /** judgeCylinderFill on a recovery cylinder's contents; null for supplier-filled cylinders or without a limit. */
   check: VerdictSchema.nullable(),
   /** Why there is no limit (e.g. the refrigerant is supercritical at the reference temperature). */
   note: z.string().nullable(),

@@ -88,6 +88,8 @@ describe("refrigerant register API", () => {
     // saturated liquid near 54 °C is about 0.99 kg/L (memory), so 0.8 × 12 × 0.99 ≈ 9.5 kg.
     expect(recovery.fill.maxContentsKg).toBeCloseTo(9.5, 1);
     expect(recovery.fill.check?.verdict).toBe("pass");
+    // The 80 % rule is stated for recovery cylinders (TRADE.md §6): a supplier's fill is not judged.
+    expect(fresh.fill.check).toBeNull();
   });
 
   it("creates a cylinder with field messages, refuses a duplicate label, and apprentices may not", async () => {

@@ -121,5 +121,5 @@ export const demoCylinders: {
   initialContentsKg: number;
 }[] = [
   { label: "BM-REC-07", serial: "RC12-30871", kind: "recovery", refrigerant: "R407C", waterCapacityKg: 12, tareKg: 7.4, initialContentsKg: 5.2 },
-  { label: "BM-407C-N3", serial: "NX10-55214", kind: "new", refrigerant: "R407C", waterCapacityKg: 11.8, tareKg: 6.1, initialContentsKg: 10 },
+  { label: "BM-407C-N3", serial: "NX10-55214", kind: "new", refrigerant: "R407C", waterCapacityKg: 15, tareKg: 6.1, initialContentsKg: 10 },
 ];

@@ -53,7 +53,7 @@ export function ChargingCheck({ visitId, balance, canWrite }: { visitId: string;
             : "No charge weighed in on this circuit yet."}
         </p>
       )}
-      {canWrite && (
+      {canWrite && (charging || balance.reusedKg + balance.addedKg > 0) && (
         <form onSubmit={submit} noValidate className="space-y-2" aria-label={`Weigh-in of circuit ${balance.circuit}`}>
           {formError && <FormAlert>{formError}</FormAlert>}
           <div className="max-w-xs">

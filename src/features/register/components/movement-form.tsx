@@ -70,7 +70,7 @@ export function MovementForm({
   let preview: React.ReactNode = null;
   if (chosen && validMass !== null) {
     const after = chosen.contentsKg + (rule.intoCylinder ? validMass : -validMass);
-    const limit = chosen.fill.maxContentsKg;
+    const limit = chosen.kind === "recovery" ? chosen.fill.maxContentsKg : null;
     preview = (
       <div className="space-y-1 rounded-card border-2 border-rule bg-sunken p-3" aria-live="polite" data-testid="cylinder-preview">
         <p>

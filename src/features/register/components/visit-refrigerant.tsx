@@ -15,21 +15,21 @@ function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitB
   return (
     <section aria-label={`Circuit ${balance.circuit} balance`} className="space-y-3 rounded-card border-2 border-rule bg-surface p-4" data-testid={`balance-${balance.circuit}`}>
       <h3 className="font-semibold">{single ? "Balance against the nameplate" : `Circuit ${balance.circuit}: balance against the nameplate`}</h3>
-      <dl className="num grid grid-cols-2 gap-x-4 gap-y-1 sm:grid-cols-3">
-        <dt className="font-sans text-muted">Nameplate</dt>
-        <dd>{formatKg(balance.nameplateKg)}</dd>
-        <dt className="font-sans text-muted">Recovered</dt>
-        <dd>{formatKg(balance.recoveredKg)}</dd>
-        <dt className="font-sans text-muted">Reused</dt>
-        <dd>{formatKg(balance.reusedKg)}</dd>
-        <dt className="font-sans text-muted">Added</dt>
-        <dd>{formatKg(balance.addedKg)}</dd>
-        {balance.sentForReclaimKg > 0 && (
-          <>
-            <dt className="font-sans text-muted">Sent for reclaim</dt>
-            <dd>{formatKg(balance.sentForReclaimKg)}</dd>
-          </>
-        )}
+      <dl className="grid gap-x-6 gap-y-1 sm:grid-cols-2">
+        {(
+          [
+            ["Nameplate", balance.nameplateKg],
+            ["Recovered", balance.recoveredKg],
+            ["Reused", balance.reusedKg],
+            ["Added", balance.addedKg],
+            ...(balance.sentForReclaimKg > 0 ? ([["Sent for reclaim", balance.sentForReclaimKg]] as const) : []),
+          ] as const
+        ).map(([label, value]) => (
+          <div key={label} className="flex justify-between gap-2 border-b border-rule py-0.5">
+            <dt className="text-muted">{label}</dt>
+            <dd className="num">{formatKg(value)}</dd>
+          </div>
+        ))}
       </dl>
       {balance.recoveredOnVisit ? (
         <div className="space-y-1">
