@@ -9,6 +9,7 @@ import { ElectricalReport } from "@/features/procedures/components/electrical-re
 import { EvacuationReport } from "@/features/procedures/components/evacuation-report.tsx";
 import { LeakSearchReport } from "@/features/procedures/components/leak-search-report.tsx";
 import { PressureTestReport } from "@/features/procedures/components/pressure-test-report.tsx";
+import { RefrigerantReport } from "@/features/register/components/refrigerant-report.tsx";
 import { ReadingsTable } from "@/features/report/components/readings-table.tsx";
 import { SendReportForm } from "@/features/report/components/send-report-form.tsx";
 import { FindingPanel } from "@/features/run-log/components/finding-panel.tsx";
@@ -128,6 +129,7 @@ export default function VisitReportRoute() {
       <LeakSearchReport visitId={data.id} />
       <PressureTestReport visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} />
       <EvacuationReport visitId={data.id} chartWidth={PRINT_CHART_WIDTH} />
+      <RefrigerantReport visitId={data.id} />
 
       {data.photos.length > 0 && (
         <section aria-labelledby="photos-heading" className="break-inside-avoid-page">

@@ -13,6 +13,7 @@ import { ElectricalPanel } from "@/features/procedures/components/electrical-pan
 import { EvacuationPanel } from "@/features/procedures/components/evacuation-panel.tsx";
 import { LeakSearchPanel } from "@/features/procedures/components/leak-search-panel.tsx";
 import { PressureTestPanel } from "@/features/procedures/components/pressure-test-panel.tsx";
+import { VisitRefrigerant } from "@/features/register/components/visit-refrigerant.tsx";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { CommentsPanel } from "@/features/visit/components/comments-panel.tsx";
 import { PhotosPanel } from "@/features/visit/components/photos-panel.tsx";
@@ -104,7 +105,7 @@ export default function VisitRoute() {
     { id: "leak-search", label: "Leak search", element: <LeakSearchPanel visitId={data.id} canWrite={canWrite} /> },
     { id: "pressure-test", label: "Pressure test", element: <PressureTestPanel visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} canWrite={canWrite} /> },
     { id: "evacuation", label: "Evacuation", element: <EvacuationPanel visitId={data.id} canWrite={canWrite} /> },
-    // The refrigerant register's panel goes here: { id: "refrigerant", label: "Refrigerant", element: … },
+    { id: "refrigerant", label: "Refrigerant", element: <VisitRefrigerant visitId={data.id} unit={unit} circuit={nameplate.number} canWrite={canWrite} /> },
   ];
   const activeSection = sections.find((section) => section.id === searchParams.get("section")) ?? sections[0]!;
 
