@@ -4,7 +4,7 @@
  * still carries the organisation id and every read filters by it, so a record of another
  * organisation reads as missing.
  */
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq } from "drizzle-orm";
 import type {
   ElectricalCheck,
   ElectricalCheckInput,
@@ -21,18 +21,11 @@ import type {
 import { ProcedureSettingsSchema } from "@shared/schemas/procedure-records.ts";
 import type { Verdict } from "@shared/schemas/procedures.ts";
 import type { Database } from "./client.ts";
-import { electricalChecks, evacuations, leakSearches, organisations, pressureTests, users } from "./schema.ts";
+import { peopleById, person, type People } from "./people.ts";
+import { electricalChecks, evacuations, leakSearches, organisations, pressureTests } from "./schema.ts";
 
-type People = Map<string, { id: string; name: string }>;
 
-async function peopleById(db: Database, ids: (string | null)[]): Promise<People> {
-  const wanted = [...new Set(ids.filter((id): id is string => id !== null))];
-  if (wanted.length === 0) return new Map();
-  const rows = await db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, wanted));
-  return new Map(rows.map((row) => [row.id, row]));
-}
 
-const person = (people: People, id: string | null) => (id ? (people.get(id) ?? null) : null);
 
 /** The organisation's procedure settings (organisations.settings), malformed figures dropped. */
 export async function getProcedureSettings(db: Database, organisationId: string): Promise<ProcedureSettings> {

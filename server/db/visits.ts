@@ -6,18 +6,11 @@ import { and, asc, count, desc, eq, inArray, type SQL } from "drizzle-orm";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import type { Adjustment, Comment, Photo, Reading, VisitStatus, VisitSummary } from "@shared/schemas/visits.ts";
 import type { Database } from "./client.ts";
+import { peopleById, person, type People } from "./people.ts";
 import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitTechnicians, visits } from "./schema.ts";
 
-type PersonRef = { id: string; name: string } | null;
 
-async function peopleById(db: Database, ids: (string | null)[]): Promise<Map<string, { id: string; name: string }>> {
-  const wanted = [...new Set(ids.filter((id): id is string => id !== null))];
-  if (wanted.length === 0) return new Map();
-  const rows = await db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, wanted));
-  return new Map(rows.map((row) => [row.id, row]));
-}
 
-const person = (people: Map<string, { id: string; name: string }>, id: string | null): PersonRef => (id ? (people.get(id) ?? null) : null);
 
 const summaryColumns = {
   id: visits.id,
@@ -117,7 +110,7 @@ export async function insertReading(
   return toReading(row, people);
 }
 
-function toReading(row: typeof readings.$inferSelect, people: Map<string, { id: string; name: string }>): Reading {
+function toReading(row: typeof readings.$inferSelect, people: People): Reading {
   return {
     id: row.id,
     visitId: row.visitId,
@@ -130,7 +123,7 @@ function toReading(row: typeof readings.$inferSelect, people: Map<string, { id: 
   };
 }
 
-function toAdjustment(row: typeof adjustments.$inferSelect, people: Map<string, { id: string; name: string }>): Adjustment {
+function toAdjustment(row: typeof adjustments.$inferSelect, people: People): Adjustment {
   return {
     id: row.id,
     circuit: row.circuit,

@@ -20,7 +20,6 @@ import {
   type ProcedureSettings,
 } from "@shared/schemas/procedure-records.ts";
 import { EVACUATION_LIMITS } from "@shared/engine/index.ts";
-import type { VisitStatus } from "@shared/schemas/visits.ts";
 import { getAuth, requireRole, requireUser } from "../auth/session.ts";
 import type { Database } from "../db/client.ts";
 import { getEquipment } from "../db/equipment.ts";
@@ -40,14 +39,11 @@ import {
 import { findVisit, joinCrew } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
+import { requireWritableVisit } from "../http/require-writable-visit.ts";
 import { electricalCheckResult, evacuationResult, leakSearchResult, pressureTestRecordResult } from "../procedures/record-results.ts";
 
 const FIELDS = "Some fields need attention";
 
-/** A signed-off visit is a closed record (same rule as its readings). */
-function requireWritable(status: VisitStatus) {
-  if (status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
-}
 
 const targetMicrons = (settings: ProcedureSettings) => settings.evacuationTargetMicrons ?? settings.procedureLimits?.evacuation?.targetMicrons ?? EVACUATION_LIMITS.targetMicrons;
 const allowedDropKPa = (settings: ProcedureSettings) => settings.pressureTestAllowedDropKPa ?? DEFAULT_ALLOWED_DROP_KPA;
@@ -94,7 +90,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.post("/:id/electrical-checks", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritable(visit.status);
+    requireWritableVisit(visit.status);
     const body = ElectricalCheckBodySchema.parse(req.body);
     const unit = await loadUnit(organisationId, visit.equipmentId);
     // The nameplate fills in what the technician did not type (as targets do for readings).
@@ -135,7 +131,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.post("/:id/leak-searches", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritable(visit.status);
+    requireWritableVisit(visit.status);
     const input = LeakSearchBodySchema.parse(req.body);
     const leakSearch = await insertLeakSearch(db, organisationId, { visitId: visit.id, input, result: leakSearchResult(input), recordedBy: user.id });
     await joinCrew(db, visit.id, user.id);
@@ -158,7 +154,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.post("/:id/pressure-tests", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritable(visit.status);
+    requireWritableVisit(visit.status);
     const body = PressureTestBodySchema.parse(req.body);
     const settings = await getProcedureSettings(db, organisationId);
     const input = {
@@ -185,7 +181,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.post("/:id/evacuations", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritable(visit.status);
+    requireWritableVisit(visit.status);
     const body = EvacuationCreateSchema.parse(req.body);
     const settings = await getProcedureSettings(db, organisationId);
     const target = body.targetMicrons ?? targetMicrons(settings);
@@ -213,7 +209,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.post("/:id/evacuations/:evacuationId/samples", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritable(visit.status);
+    requireWritableVisit(visit.status);
     const row = await loadEvacuation(organisationId, visit.id, req.params.evacuationId);
     const body = EvacuationSampleBodySchema.parse(req.body);
     const minutes = body.minutes ?? minutesSince(row.startedAt);
@@ -237,7 +233,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.patch("/:id/evacuations/:evacuationId", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
     const { organisationId } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritable(visit.status);
+    requireWritableVisit(visit.status);
     const row = await loadEvacuation(organisationId, visit.id, req.params.evacuationId);
     const body = EvacuationUpdateSchema.parse(req.body);
     const isolatedAtMinutes = body.isolateNow ? isolationNow(row.startedAt, row.samples) : body.isolatedAtMinutes === undefined ? row.isolatedAtMinutes : body.isolatedAtMinutes;

@@ -33,6 +33,7 @@ import {
 } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
+import { requireWritableVisit } from "../http/require-writable-visit.ts";
 import { ColumnMappingSchema, previewReadingsCsv } from "../import/readings-csv.ts";
 import { MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
 import { visitReportMail } from "../report/visit-report-mail.ts";
@@ -40,10 +41,6 @@ import type { AccountRouteDeps } from "./route-deps.ts";
 
 type Deps = Pick<AccountRouteDeps, "db" | "env">;
 
-/** A signed-off visit is a closed record: nothing more is written to it. */
-function requireWritable(status: VisitStatus) {
-  if (status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
-}
 
 const ListQuerySchema = z.object({
   status: VisitStatusSchema.optional(),
@@ -109,7 +106,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   router.post("/:id/readings", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritable(visit.status);
+    requireWritableVisit(visit.status);
     const { circuit, takenAt, note, ...readingFields } = ReadingBodySchema.parse(req.body);
     const unit = await getEquipment(db, organisationId, visit.equipmentId);
     if (!unit) throw notFound("Equipment");
@@ -146,7 +143,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   router.post("/:id/readings/import", requireRole(...PERMISSIONS.writeRecords), csvUpload.single("file"), async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritable(visit.status);
+    requireWritableVisit(visit.status);
     if (!req.file) throw new HttpError(400, "Some fields need attention", { file: "Choose a CSV file" });
     const fields = ImportFieldsSchema.parse(req.body ?? {});
     const unit = await getEquipment(db, organisationId, visit.equipmentId);
@@ -175,7 +172,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   router.post("/:id/adjustments", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritable(visit.status);
+    requireWritableVisit(visit.status);
     const values = AdjustmentCreateSchema.parse(req.body);
     const adjustment = await insertAdjustment(db, organisationId, {
       visitId: visit.id,
@@ -231,7 +228,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   router.post("/:id/photos", requireRole(...PERMISSIONS.writeRecords), upload.single("photo"), async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritable(visit.status);
+    requireWritableVisit(visit.status);
     if (!req.file) throw new HttpError(400, "Some fields need attention", { photo: "Choose a photo to upload" });
     const meta = z
       .object({ kind: z.enum(PHOTO_KINDS).default("other"), caption: z.string().trim().max(200).optional() })
