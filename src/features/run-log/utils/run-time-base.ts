@@ -19,7 +19,15 @@ export function runTimeBase(series: CircuitSeries): RunTimeBase | null {
   return null;
 }
 
+/**
+ * Past this gap since the last reading or adjustment the unit has most likely been stopped
+ * (another day, a part on order), so the clock is not carried on: the technician types it.
+ */
+export const RUN_CLOCK_STALE_MINUTES = 60;
+
 export function runMinutesAt(base: RunTimeBase | null, now: number): number | null {
   if (!base) return null;
-  return Math.max(0, Math.round(base.minutes + (now - base.at) / 60_000));
+  const elapsed = (now - base.at) / 60_000;
+  if (elapsed > RUN_CLOCK_STALE_MINUTES) return null;
+  return Math.max(0, Math.round(base.minutes + elapsed));
 }
