@@ -26,7 +26,7 @@ export function EquipmentRefrigerantHistory({ equipmentId }: { equipmentId: stri
             </p>
             <p className="text-sm text-muted">
               From {topUps.length} top-ups over {Math.round(leakRate.periodDays)} days (the first opens the period). Leak-repair rules compare this with triggers such as 10 % for comfort
-              cooling and 20 % for commercial refrigeration (US 40 CFR 82.157; TRADE.md §8.3).
+              cooling and 20 % for commercial refrigeration (US 40 CFR 82.157).
             </p>
           </>
         ) : (

@@ -95,7 +95,7 @@ export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId
           <div>
             <p className="font-semibold">Charge {data.refrigerant} as liquid</p>
             <p>{data.liquidChargingNote}</p>
-            <p className="text-sm text-muted">Source: TRADE.md §6 zeotropic blends [S4][S56]; metering liquid into the suction side is common practice.</p>
+            <p className="text-sm text-muted">Source: ACHR News, “The New Wave of Blends” [S4]; a packaged-unit maker’s R407C service manual [S56]; metering liquid into the suction side is common practice.</p>
           </div>
         </div>
       )}
