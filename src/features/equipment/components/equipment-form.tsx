@@ -21,7 +21,7 @@ import { useCreateEquipment, useSites } from "@/lib/api/equipment.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 import { capitalise, METERING_DEVICE_LABELS } from "../utils/nameplate-text.ts";
 import { NewSitePanel } from "./new-site-panel.tsx";
-import { NumberField, typedNumber } from "./number-field.tsx";
+import { NumberField, typedNumber } from "@/components/ui/field/number-field.tsx";
 
 const numeric = { setValueAs: typedNumber };
 

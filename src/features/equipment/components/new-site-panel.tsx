@@ -6,7 +6,7 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { useCreateCustomer, useCreateSite, useCustomers } from "@/lib/api/equipment.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
-import { NumberField, typedNumber } from "./number-field.tsx";
+import { NumberField, typedNumber } from "@/components/ui/field/number-field.tsx";
 
 /**
  * These panels sit inside the equipment form, and forms cannot nest: Enter in one of their

@@ -10,7 +10,7 @@ import { useCreateElectricalCheck, useElectricalChecks } from "@/lib/api/procedu
 import { errorFor, fieldErrorsOf } from "../utils/field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { ElectricalCheckView } from "./electrical-check-view.tsx";
-import { NumberField } from "./number-field.tsx";
+import { NumberField } from "@/components/ui/field/number-field.tsx";
 
 interface ElectricalPanelProps {
   visitId: string;
@@ -139,9 +139,9 @@ export function ElectricalPanel({ visitId, circuits, canWrite }: ElectricalPanel
             <legend className="font-semibold">Supply voltage {threePhase ? "(line to line, running)" : "(running)"}</legend>
             <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
               {volts.slice(0, phaseCount).map((value, index) => (
-                <NumberField key={index} label={threePhase ? PHASE_PAIRS[index]! : "Measured"} unit="V" value={value} onChange={(text) => setAt(setVolts, index, text)} error={errors[`supplyVolts.${index}`]} />
+                <NumberField key={index} label={threePhase ? PHASE_PAIRS[index]! : "Measured"} unit="V" value={value} onValueChange={(text) => setAt(setVolts, index, text)} error={errors[`supplyVolts.${index}`]} />
               ))}
-              <NumberField label="Nameplate" unit="V" value={nameplateV} onChange={setNameplateV} error={errors.nameplateV} hint={defaults?.nameplateV ? `${defaults.nameplateV} V on the unit if left blank` : undefined} />
+              <NumberField label="Nameplate" unit="V" value={nameplateV} onValueChange={setNameplateV} error={errors.nameplateV} hint={defaults?.nameplateV ? `${defaults.nameplateV} V on the unit if left blank` : undefined} />
             </div>
             {(errors.supplyVolts || errors._) && <p className="text-sm font-medium text-fault">⚠ {errors.supplyVolts ?? errors._}</p>}
           </fieldset>
@@ -158,8 +158,8 @@ export function ElectricalPanel({ visitId, circuits, canWrite }: ElectricalPanel
                   onChange={(event) => setInsulation((rows) => rows.map((old, at) => (at === index ? { ...old, point: event.target.value } : old)))}
                   className="col-span-2 sm:col-span-1"
                 />
-                <NumberField label="Reading" unit="MΩ" value={row.megohms} onChange={(text) => setInsulation((rows) => rows.map((old, at) => (at === index ? { ...old, megohms: text } : old)))} error={errors[`insulation.${index}.megohms`]} />
-                <NumberField label="Test voltage" unit="V d.c." value={row.testVoltageV} onChange={(text) => setInsulation((rows) => rows.map((old, at) => (at === index ? { ...old, testVoltageV: text } : old)))} error={errors[`insulation.${index}.testVoltageV`]} />
+                <NumberField label="Reading" unit="MΩ" value={row.megohms} onValueChange={(text) => setInsulation((rows) => rows.map((old, at) => (at === index ? { ...old, megohms: text } : old)))} error={errors[`insulation.${index}.megohms`]} />
+                <NumberField label="Test voltage" unit="V d.c." value={row.testVoltageV} onValueChange={(text) => setInsulation((rows) => rows.map((old, at) => (at === index ? { ...old, testVoltageV: text } : old)))} error={errors[`insulation.${index}.testVoltageV`]} />
                 {insulation.length > 1 && (
                   <Button variant="quiet" aria-label={`Remove insulation reading ${index + 1}`} onClick={() => setInsulation((rows) => rows.filter((_row, at) => at !== index))}>
                     <Trash2 aria-hidden className="size-5" />
@@ -181,7 +181,7 @@ export function ElectricalPanel({ visitId, circuits, canWrite }: ElectricalPanel
                   <legend className="font-semibold">Winding resistance (lead to lead)</legend>
                   <div className="grid grid-cols-3 gap-3">
                     {ohms.map((value, index) => (
-                      <NumberField key={index} label={WINDING_PAIRS[index]!} unit="Ω" value={value} onChange={(text) => setAt(setOhms, index, text)} error={errors[`windingOhms.${index}`]} />
+                      <NumberField key={index} label={WINDING_PAIRS[index]!} unit="Ω" value={value} onValueChange={(text) => setAt(setOhms, index, text)} error={errors[`windingOhms.${index}`]} />
                     ))}
                   </div>
                   {errors.windingOhms && <p className="text-sm font-medium text-fault">⚠ {errors.windingOhms}</p>}
@@ -191,13 +191,13 @@ export function ElectricalPanel({ visitId, circuits, canWrite }: ElectricalPanel
                 <legend className="font-semibold">Running current</legend>
                 <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
                   {amps.slice(0, phaseCount).map((value, index) => (
-                    <NumberField key={index} label={threePhase ? `L${index + 1}` : "Measured"} unit="A" value={value} onChange={(text) => setAt(setAmps, index, text)} error={errors[`runningAmps.${index}`]} />
+                    <NumberField key={index} label={threePhase ? `L${index + 1}` : "Measured"} unit="A" value={value} onValueChange={(text) => setAt(setAmps, index, text)} error={errors[`runningAmps.${index}`]} />
                   ))}
                   <NumberField
                     label={target === "fan" ? "Nameplate FLA" : "Nameplate RLA"}
                     unit="A"
                     value={ratedA}
-                    onChange={setRatedA}
+                    onValueChange={setRatedA}
                     error={errors.ratedA}
                     hint={ratedDefault ? `${ratedDefault} A on the unit if left blank` : undefined}
                   />

@@ -14,7 +14,7 @@ import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { EvacuationChart, formatVacuum, VACUUM_LABEL, type VacuumUnit } from "./evacuation-chart.tsx";
 import { EvacuationBadge, EvacuationSummary } from "./evacuation-view.tsx";
-import { NumberField } from "./number-field.tsx";
+import { NumberField } from "@/components/ui/field/number-field.tsx";
 
 /** Minutes since the evacuation started, to the tenth, by this device's clock. */
 const minutesSince = (startedAt: string, now: number) => Math.max(0, Math.round((now - new Date(startedAt).getTime()) / 6_000) / 10);
@@ -90,15 +90,15 @@ function SampleEntry({ visitId, evacuation, unit, canWrite }: { visitId: string;
           void add();
         }}
       >
-        <NumberField label="Vacuum reading" unit={VACUUM_LABEL[unit]} value={reading} onChange={setReading} error={errors.microns} />
-        <NumberField label="Time from start" unit="min" value={minutesText} onChange={setMinutes} error={errors.minutes} hint={minutes === null ? "Fills in by itself" : undefined} />
+        <NumberField label="Vacuum reading" unit={VACUUM_LABEL[unit]} value={reading} onValueChange={setReading} error={errors.microns} />
+        <NumberField label="Time from start" unit="min" value={minutesText} onValueChange={setMinutes} error={errors.minutes} hint={minutes === null ? "Fills in by itself" : undefined} />
         <Button type="submit" size="lg" disabled={addSample.isPending} className="col-span-2 sm:col-span-1">
           <Plus aria-hidden className="size-5" /> {addSample.isPending ? "Saving…" : "Add reading"}
         </Button>
       </form>
       {evacuation.isolatedAtMinutes === null ? (
         <div className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[10rem_auto]">
-          <NumberField label="Valved off at" unit="min" value={isolationText} onChange={setIsolation} error={errors.isolatedAtMinutes} />
+          <NumberField label="Valved off at" unit="min" value={isolationText} onValueChange={setIsolation} error={errors.isolatedAtMinutes} />
           <Button variant="secondary" size="lg" disabled={update.isPending || evacuation.samples.length === 0} onClick={() => void setIsolated(toNumber(isolationText) ?? null)}>
             <Power aria-hidden className="size-5" /> Pump valved off
           </Button>
@@ -197,7 +197,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
             void start();
           }}
         >
-          <NumberField label="Target" unit="µm" value={targetText} onChange={setTarget} error={startError?.fields.targetMicrons} hint="Your company's figure; 500 µm is the trade norm" />
+          <NumberField label="Target" unit="µm" value={targetText} onValueChange={setTarget} error={startError?.fields.targetMicrons} hint="Your company's figure; 500 µm is the trade norm" />
           <Button type="submit" size="lg" variant={current ? "secondary" : "primary"} disabled={create.isPending}>
             <Play aria-hidden className="size-5" /> {current ? "Start another evacuation" : "Start the evacuation"}
           </Button>

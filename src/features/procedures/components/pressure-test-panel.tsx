@@ -9,7 +9,7 @@ import { useCreatePressureTest, usePressureTests } from "@/lib/api/procedures.ts
 import { formatNumber, GAUGE_LABEL, gaugeFromDisplay, gaugeToDisplay, PRESSURE_DECIMALS, TEMPERATURE_LABEL, temperatureFromDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
-import { NumberField } from "./number-field.tsx";
+import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { PressureTestView } from "./pressure-test-view.tsx";
 
 interface PressureTestPanelProps {
@@ -140,24 +140,24 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite }: 
               label="Rated pressure (lowest-rated component)"
               unit={pressureUnit}
               value={ratedText}
-              onChange={setRated}
+              onValueChange={setRated}
               error={errors.ratedKPa}
               hint={ratedDefault !== null ? "From the nameplate: confirm it for the parts under test" : "Not on the nameplate record: enter it from the maker's data"}
             />
           </div>
           <fieldset className="grid grid-cols-2 gap-3">
             <legend className="col-span-2 font-semibold">Start of the hold</legend>
-            <NumberField label="Start pressure" unit={pressureUnit} value={start} onChange={setStart} error={errors.startGaugeKPa} />
-            <NumberField label="Start temperature" unit={temperatureUnit} value={startTemp} onChange={setStartTemp} error={errors.startTempC} hint="Ambient or pipe" />
+            <NumberField label="Start pressure" unit={pressureUnit} value={start} onValueChange={setStart} error={errors.startGaugeKPa} />
+            <NumberField label="Start temperature" unit={temperatureUnit} value={startTemp} onValueChange={setStartTemp} error={errors.startTempC} hint="Ambient or pipe" />
           </fieldset>
           <fieldset className="grid grid-cols-2 gap-3">
             <legend className="col-span-2 font-semibold">End of the hold</legend>
-            <NumberField label="End pressure" unit={pressureUnit} value={end} onChange={setEnd} error={errors.endGaugeKPa} />
-            <NumberField label="End temperature" unit={temperatureUnit} value={endTemp} onChange={setEndTemp} error={errors.endTempC} />
+            <NumberField label="End pressure" unit={pressureUnit} value={end} onValueChange={setEnd} error={errors.endGaugeKPa} />
+            <NumberField label="End temperature" unit={temperatureUnit} value={endTemp} onValueChange={setEndTemp} error={errors.endTempC} />
           </fieldset>
           <div className="grid grid-cols-2 gap-3">
-            <NumberField label="Hold time" unit="min" value={hold} onChange={setHold} error={errors.holdMinutes} />
-            <NumberField label="Allowed drop" unit={units.pressure} value={allowedText} onChange={setAllowed} error={errors.allowedDropKPa} hint="After temperature correction; your company's figure" />
+            <NumberField label="Hold time" unit="min" value={hold} onValueChange={setHold} error={errors.holdMinutes} />
+            <NumberField label="Allowed drop" unit={units.pressure} value={allowedText} onValueChange={setAllowed} error={errors.allowedDropKPa} hint="After temperature correction; your company's figure" />
           </div>
           <TextField label="Note" value={note} onChange={(event) => setNote(event.target.value)} error={errors.note} placeholder="e.g. compressor and LP switch isolated" />
           {formError && <FormAlert>{formError}</FormAlert>}

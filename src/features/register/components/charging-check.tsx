@@ -7,7 +7,7 @@ import { FormAlert } from "@/components/ui/field/field.tsx";
 import { useSetCharging } from "@/lib/api/register.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 import { formatKg, formatSignedKg } from "../utils/format-register.ts";
-import { KgField, typedNumber } from "./kg-field.tsx";
+import { NumberField, typedNumber } from "@/components/ui/field/number-field.tsx";
 import { VerdictLine } from "./verdict-line.tsx";
 
 type FormValues = { lineAdjustmentKg: unknown };
@@ -57,7 +57,7 @@ export function ChargingCheck({ visitId, balance, canWrite }: { visitId: string;
         <form onSubmit={submit} noValidate className="space-y-2" aria-label={`Weigh-in of circuit ${balance.circuit}`}>
           {formError && <FormAlert>{formError}</FormAlert>}
           <div className="max-w-xs">
-            <KgField
+            <NumberField unit="kg"
               label="Line-length adjustment"
               registration={form.register("lineAdjustmentKg", { setValueAs: typedNumber })}
               error={form.formState.errors.lineAdjustmentKg?.message}

@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { useCreateCylinder } from "@/lib/api/register.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
-import { KgField, typedNumber } from "./kg-field.tsx";
+import { NumberField, typedNumber } from "@/components/ui/field/number-field.tsx";
 
 type FormValues = Omit<CylinderCreate, "waterCapacityKg" | "tareKg" | "initialContentsKg"> & { waterCapacityKg: unknown; tareKg: unknown; initialContentsKg: unknown };
 
@@ -52,9 +52,9 @@ export function CylinderForm({ onSaved }: { onSaved?: () => void }) {
             </option>
           ))}
         </SelectField>
-        <KgField label="Water capacity (WC)" registration={form.register("waterCapacityKg", asNumber)} error={errors.waterCapacityKg?.message} hint="Stamped on the collar, in kg of water." />
-        <KgField label="Tare (TW)" registration={form.register("tareKg", asNumber)} error={errors.tareKg?.message} hint="The empty cylinder's stamped weight." />
-        <KgField
+        <NumberField unit="kg" label="Water capacity (WC)" registration={form.register("waterCapacityKg", asNumber)} error={errors.waterCapacityKg?.message} hint="Stamped on the collar, in kg of water." />
+        <NumberField unit="kg" label="Tare (TW)" registration={form.register("tareKg", asNumber)} error={errors.tareKg?.message} hint="The empty cylinder's stamped weight." />
+        <NumberField unit="kg"
           label="Contents today"
           registration={form.register("initialContentsKg", asNumber)}
           error={errors.initialContentsKg?.message}

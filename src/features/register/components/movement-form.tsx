@@ -17,7 +17,7 @@ import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.t
 import { useCreateMovement } from "@/lib/api/register.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 import { formatKg } from "../utils/format-register.ts";
-import { KgField, typedNumber } from "./kg-field.tsx";
+import { NumberField, typedNumber } from "@/components/ui/field/number-field.tsx";
 import { VerdictLine } from "./verdict-line.tsx";
 
 type FormValues = Omit<MovementCreate, "kg"> & { kg: unknown };
@@ -124,7 +124,7 @@ export function MovementForm({
         ) : (
           <input type="hidden" {...form.register("circuit", { valueAsNumber: true })} />
         )}
-        <KgField label="Mass" placeholder="0.00" error={errors.kg?.message} registration={form.register("kg", { setValueAs: typedNumber })} hint="Weighed on the refrigerant scale." />
+        <NumberField unit="kg" label="Mass" placeholder="0.00" error={errors.kg?.message} registration={form.register("kg", { setValueAs: typedNumber })} hint="Weighed on the refrigerant scale." />
         <SelectField
           label={rule.cylinderRequired ? "Cylinder" : "Cylinder (if one was used)"}
           error={errors.cylinderId?.message}

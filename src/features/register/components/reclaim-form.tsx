@@ -6,7 +6,7 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, TextField } from "@/components/ui/field/field.tsx";
 import { useSendCylinderForReclaim } from "@/lib/api/register.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
-import { KgField, typedNumber } from "./kg-field.tsx";
+import { NumberField, typedNumber } from "@/components/ui/field/number-field.tsx";
 
 type FormValues = Omit<ReclaimCreate, "kg"> & { kg: unknown };
 
@@ -31,7 +31,7 @@ export function ReclaimForm({ cylinder }: { cylinder: Cylinder }) {
     <form onSubmit={submit} noValidate className="space-y-2" aria-label={`Send ${cylinder.label} for reclaim`}>
       {formError && <FormAlert>{formError}</FormAlert>}
       <div className="grid gap-2 sm:grid-cols-2">
-        <KgField label="Mass sent for reclaim" registration={form.register("kg", { setValueAs: typedNumber })} error={form.formState.errors.kg?.message} />
+        <NumberField unit="kg" label="Mass sent for reclaim" registration={form.register("kg", { setValueAs: typedNumber })} error={form.formState.errors.kg?.message} />
         <TextField label="Reclaimer or docket (optional)" error={form.formState.errors.note?.message} {...form.register("note")} />
       </div>
       <Button type="submit" variant="secondary" disabled={send.isPending}>

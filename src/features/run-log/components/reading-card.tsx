@@ -1,6 +1,5 @@
 import type { ReactNode } from "react";
 import { useId } from "react";
-import { NumberInput } from "@/components/ui/field/number-input.tsx";
 import { cn } from "@/lib/cn.ts";
 
 interface ReadingCardProps {
@@ -36,42 +35,6 @@ export function ReadingCard({ step, title, where, side, children, derived }: Rea
       <div className="grid gap-3 p-4 sm:grid-cols-2">{children}</div>
       {derived && <div className="border-t-2 border-dashed border-rule px-4 py-3">{derived}</div>}
     </section>
-  );
-}
-
-interface DraftInputProps {
-  label: string;
-  unit: string;
-  value: string;
-  onChange: (value: string) => void;
-  error?: string;
-  hint?: string;
-  name: string;
-}
-
-export function DraftInput({ label, unit, value, onChange, error, hint, name }: DraftInputProps) {
-  const id = useId();
-  return (
-    <div>
-      <label htmlFor={id} className="block font-medium">
-        {label}
-      </label>
-      <NumberInput
-        id={id}
-        name={name}
-        value={value}
-        unit={unit}
-        invalid={Boolean(error)}
-        onChange={(event) => onChange(event.target.value)}
-        aria-describedby={error || hint ? `${id}-note` : undefined}
-        className="mt-1"
-      />
-      {(error || hint) && (
-        <p id={`${id}-note`} className={cn("mt-1 text-sm", error ? "font-medium text-fault" : "text-muted")}>
-          {error ? `⚠ ${error}` : hint}
-        </p>
-      )}
-    </div>
   );
 }
 

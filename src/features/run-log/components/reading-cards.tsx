@@ -11,7 +11,8 @@ import {
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
 import type { DraftField, ReadingDraft } from "../utils/reading-draft.ts";
-import { Derived, DraftInput, ReadingCard } from "./reading-card.tsx";
+import { NumberField } from "@/components/ui/field/number-field.tsx";
+import { Derived, ReadingCard } from "./reading-card.tsx";
 
 interface ReadingCardsProps {
   draft: ReadingDraft;
@@ -39,7 +40,7 @@ export function ReadingCards({ draft, onField, onLocation, fieldErrors, result, 
   const band = (target: TargetBand | null | undefined) =>
     target ? `target ${diff(target.targetK)} ${k} (${diff(target.lowK)}–${diff(target.highK)}, ${target.basis.replace("-", " ")})` : undefined;
   const input = (field: DraftField, label: string, unit: string, hint?: string) => (
-    <DraftInput name={field} label={label} unit={unit} value={draft[field]} onChange={(value) => onField(field, value)} error={fieldErrors[field]} hint={hint} />
+    <NumberField name={field} label={label} unit={unit} value={draft[field]} onValueChange={(value) => onField(field, value)} error={fieldErrors[field]} hint={hint} />
   );
   const dischargeLimit = diagnosisLimits.DISCHARGE_LINE_LIMIT_C;
   const dischargeMargin = dischargeLineTempC === undefined ? null : dischargeLimit - dischargeLineTempC;
