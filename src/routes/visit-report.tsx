@@ -101,7 +101,7 @@ export default function VisitReportRoute() {
             </h2>
             <ReadingsTable readings={series.readings} units={units} atmosphericKPa={atmosphericKPa} />
             {series.points.length > 0 && <TrendChart series={series} units={units} width={PRINT_CHART_WIDTH} height={260} />}
-            {last && <FindingPanel result={last.result} />}
+            {last && <FindingPanel result={last.result} expanded />}
           </section>
         );
       })}

@@ -1,3 +1,4 @@
+import { useState } from "react";
 import { ArrowDown, ArrowUp, Ban, Equal, Minus, OctagonAlert, TriangleAlert, type LucideIcon } from "lucide-react";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import type { DiagnosisResult, Finding } from "@shared/schemas/diagnosis.ts";
@@ -26,7 +27,10 @@ const SEVERITY: Record<DiagnosisResult["warnings"][number]["severity"], { icon: 
 };
 
 /** The verdict in words, its evidence line by line, and warnings about the readings themselves. */
-export function FindingPanel({ result, pending = false }: { result: DiagnosisResult; pending?: boolean }) {
+export function FindingPanel({ result, pending = false, expanded = false }: { result: DiagnosisResult; pending?: boolean; expanded?: boolean }) {
+  // Open on tablets and desktops; on a phone the evidence starts folded so the entry cards
+  // stay within reach, one tap away.
+  const [evidenceOpen] = useState(() => expanded || typeof window === "undefined" || window.matchMedia("(min-width: 768px)").matches);
   const state = result.chargeState;
   const Icon = CHARGE_STATE_ICONS[state];
   const text = chargeStateText[state];
@@ -70,7 +74,7 @@ export function FindingPanel({ result, pending = false }: { result: DiagnosisRes
       )}
 
       {result.findings.length > 0 && (
-        <details className="mt-3" open>
+        <details className="mt-3" open={evidenceOpen}>
           <summary className="min-h-touch cursor-pointer py-2 font-medium">What this rests on ({result.findings.length})</summary>
           <ul className="space-y-2" aria-label="Evidence">
             {result.findings.map((finding) => {
