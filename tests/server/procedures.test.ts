@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { analyseDecay, judgeInsulationResistance, pressureTestResult, voltageImbalance } from "@shared/engine/index.ts";
 import { organisations, users } from "@server/db/schema.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "./auth/helpers.ts";
+import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../setup/demo-accounts.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 

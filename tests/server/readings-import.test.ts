@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { saturationPressure } from "@shared/engine/index.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn } from "./auth/helpers.ts";
+import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 const gauge = (temperatureC: number, point: "bubble" | "dew") => (saturationPressure("R407C", temperatureC, point) - 101.325).toFixed(1);

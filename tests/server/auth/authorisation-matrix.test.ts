@@ -2,7 +2,7 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Role } from "@shared/schemas/auth.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "./helpers.ts";
+import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../../setup/demo-accounts.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 

@@ -3,7 +3,7 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { invitations, users } from "@server/db/schema.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, linkIn, seedBellbird, signedIn, signUpOtherCompany } from "./helpers.ts";
+import { BELLBIRD, linkIn, seedBellbird, signedIn, signUpOtherCompany } from "../../setup/demo-accounts.ts";
 
 describe("invitations", () => {
   let testApp: TestApp;

@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { sessions } from "@server/db/schema.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn } from "./helpers.ts";
+import { BELLBIRD, seedBellbird, signedIn } from "../../setup/demo-accounts.ts";
 
 describe("members", () => {
   let testApp: TestApp;

@@ -1,7 +1,7 @@
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, seedBellbird } from "./helpers.ts";
+import { BELLBIRD, seedBellbird } from "../../setup/demo-accounts.ts";
 
 // OWASP CSRF Prevention Cheat Sheet: verify the Origin of state-changing requests.
 describe("origin check", () => {

@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { passwordResets, sessions } from "@server/db/schema.ts";
 import { RESET_REQUESTED } from "@server/routes/auth.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, linkIn, seedBellbird, signedIn } from "./helpers.ts";
+import { BELLBIRD, linkIn, seedBellbird, signedIn } from "../../setup/demo-accounts.ts";
 
 describe("password reset", () => {
   let testApp: TestApp;

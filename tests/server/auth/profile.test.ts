@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn } from "./helpers.ts";
+import { BELLBIRD, seedBellbird, signedIn } from "../../setup/demo-accounts.ts";
 
 describe("profile settings", () => {
   let testApp: TestApp;

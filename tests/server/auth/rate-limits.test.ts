@@ -2,7 +2,7 @@ import request from "supertest";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { DEFAULT_AUTH_LIMITS } from "@server/auth/rate-limits.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, seedBellbird } from "./helpers.ts";
+import { BELLBIRD, seedBellbird } from "../../setup/demo-accounts.ts";
 
 // OWASP Authentication Cheat Sheet: throttle per account and per source; the limits are ours.
 describe("sign-in and reset throttling", () => {

@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { SESSION_LIFETIME } from "@server/auth/lucia.ts";
 import { sessions, users } from "@server/db/schema.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, cookieHeader, seedBellbird, signedIn } from "./helpers.ts";
+import { BELLBIRD, cookieHeader, seedBellbird, signedIn } from "../../setup/demo-accounts.ts";
 
 const DAY_MS = 24 * 3600_000;
 

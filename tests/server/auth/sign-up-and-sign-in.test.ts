@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { organisations, users } from "@server/db/schema.ts";
 import { SIGN_IN_FAILED } from "@server/routes/auth.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, cookieHeader, seedBellbird, signedIn } from "./helpers.ts";
+import { BELLBIRD, cookieHeader, seedBellbird, signedIn } from "../../setup/demo-accounts.ts";
 
 describe("sign-up, sign-in, sign-out and me", () => {
   let testApp: TestApp;

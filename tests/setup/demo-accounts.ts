@@ -4,7 +4,7 @@ import request from "supertest";
 import { users } from "@server/db/schema.ts";
 import { DEMO_PASSWORD, demoPeople } from "@server/db/seed/demo-scenario.ts";
 import { seedDemoData } from "@server/db/seed/seed-demo.ts";
-import type { TestApp } from "../../setup/test-app.ts";
+import type { TestApp } from "./test-app.ts";
 
 export const BELLBIRD = {
   owner: "owner@bellbird.example",
