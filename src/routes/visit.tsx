@@ -3,11 +3,13 @@ import { useState, type ReactNode } from "react";
 import { Link, useParams, useSearchParams } from "react-router-dom";
 import { getRefrigerant } from "@shared/engine/index.ts";
 import { can } from "@shared/schemas/auth.ts";
+import { canCasebook } from "@shared/schemas/casebook.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
+import { CaseFromReading } from "@/features/casebook/components/case-from-reading.tsx";
 import { RunLog } from "@/features/run-log/components/run-log.tsx";
 import { ElectricalPanel } from "@/features/procedures/components/electrical-panel.tsx";
 import { EvacuationPanel } from "@/features/procedures/components/evacuation-panel.tsx";
@@ -153,6 +155,11 @@ export default function VisitRoute() {
       <PanelBoundary>
         <PhotosPanel visit={data} canUpload={can(role, "writeRecords")} />
       </PanelBoundary>
+      {canCasebook(role, "author") && (
+        <PanelBoundary>
+          <CaseFromReading readings={data.readings} />
+        </PanelBoundary>
+      )}
     </div>
   );
 }

@@ -89,6 +89,13 @@ test.describe("run log and review", () => {
     await expect(page.getByRole("heading", { name: /Review/ })).toContainText("Signed off");
     await expect(page.getByText(/Signed off by Priya Raman/)).toBeVisible();
 
+    // The senior turns the settled reading into a draft casebook case, without the customer.
+    await page.getByLabel("Reading", { exact: true }).selectOption({ index: 2 });
+    await page.getByRole("button", { name: "Make a casebook case" }).click();
+    await expect(page).toHaveURL(/\/casebook\/cases\/[^/]+\/edit$/);
+    await expect(page.locator("main")).not.toContainText("Wattle Lane");
+    await page.goto(visitUrl);
+
     // The report renders with the readings, the adjustment and the sign-off.
     await page.getByRole("link", { name: "Visit report" }).click();
     const report = page.getByRole("article", { name: "Visit report" });
