@@ -5,6 +5,7 @@
 import type { Server } from "node:http";
 import { createApp } from "./app.ts";
 import { openDatabase } from "./db/client.ts";
+import { deleteExpiredSessions } from "./db/expired-sessions.ts";
 import { seedDemoData } from "./db/seed/seed-demo.ts";
 import { readEnv } from "./env.ts";
 import { createMailer } from "./mail/mailer.ts";
@@ -38,6 +39,15 @@ const server: Server = app.listen(env.PORT, env.HOST, () => {
   const port = typeof address === "object" && address ? address.port : env.PORT;
   logger.info(`Satura listening on http://localhost:${port}`);
 });
+
+// Expired sessions are purged at start and hourly; unref so the timer never holds the process.
+const SESSION_PURGE_INTERVAL_MS = 60 * 60 * 1000;
+const purgeSessions = () =>
+  deleteExpiredSessions(database.db)
+    .then((count) => count > 0 && logger.info({ count }, "expired sessions deleted"))
+    .catch((error: unknown) => logger.error({ err: error }, "could not delete expired sessions"));
+void purgeSessions();
+setInterval(() => void purgeSessions(), SESSION_PURGE_INTERVAL_MS).unref();
 
 let stopping = false;
 async function shutdown(signal: string) {
