@@ -58,6 +58,9 @@ export function createApp(deps: AppDeps): Express {
           "img-src": ["'self'", "data:", "blob:"],
           // Plain-http LAN hosts (a tablet on the workshop network) must not be forced to https.
           "upgrade-insecure-requests": env.NODE_ENV === "production" ? [] : null,
+          // Vite's dev server injects an inline React Refresh preamble and talks over a
+          // websocket; the production build has neither, so only development relaxes these.
+          ...(deps.clientMiddleware ? { "script-src": ["'self'", "'unsafe-inline'"], "connect-src": ["'self'", "ws:"] } : {}),
         },
       },
     }),

@@ -39,6 +39,8 @@ export function createRouter(queryClient: QueryClient) {
       // Everything else needs a session: without one, sign in first and come back (requireSessionLoader).
       id: "signed-in",
       loader: requireSessionLoader(queryClient),
+      // Shown for the moment the session check takes on first load.
+      hydrateFallbackElement: <p className="p-6 text-muted">Loading Satura…</p>,
       element: <AppShell />,
       errorElement: <RouteError />,
       children: [
