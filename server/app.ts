@@ -21,6 +21,7 @@ import { photosRouter, visitsRouter } from "./routes/visits.ts";
 import { healthRouter } from "./routes/health.ts";
 import { invitationsRouter } from "./routes/invitations.ts";
 import { membersRouter } from "./routes/members.ts";
+import { organisationRouter } from "./routes/organisation.ts";
 import { outboxRouter } from "./routes/outbox.ts";
 import { profileRouter } from "./routes/profile.ts";
 import { proceduresRouter } from "./routes/procedures.ts";
@@ -88,6 +89,7 @@ export function createApp(deps: AppDeps): Express {
   api.use("/invitations", invitationsRouter(accountDeps));
   api.use("/profile", profileRouter(accountDeps));
   api.use("/outbox", outboxRouter(accountDeps));
+  api.use("/organisation", organisationRouter(deps));
   api.use("/customers", customersRouter(deps));
   api.use("/sites", sitesRouter(deps));
   api.use("/equipment", equipmentRouter(deps));

@@ -65,6 +65,7 @@ export function createRouter(queryClient: QueryClient) {
             { path: paths.casebook.edit.path, lazy: lazyRoute(queryClient, () => import("./routes/casebook-editor.tsx")) },
             { path: paths.cylinders.path, lazy: lazyRoute(queryClient, () => import("./routes/cylinders.tsx")) },
             { path: paths.register.path, lazy: lazyRoute(queryClient, () => import("./routes/register.tsx")) },
+            { path: paths.companySettings.path, lazy: lazyRoute(queryClient, () => import("./routes/company-settings.tsx")) },
             { path: paths.members.path, lazy: lazyRoute(queryClient, () => import("./routes/members.tsx")) },
             { path: paths.profile.path, lazy: lazyRoute(queryClient, () => import("./routes/profile.tsx")) },
             { path: paths.outbox.path, lazy: lazyRoute(queryClient, () => import("./routes/outbox.tsx")) },

@@ -229,3 +229,19 @@ export async function updateEvacuation(
     .returning();
   return toEvacuation(row, await peopleById(db, [row.recordedBy]));
 }
+
+/** Writes the organisation's procedure overrides, keeping any other settings it holds. */
+export async function updateProcedureSettings(
+  db: Database,
+  organisationId: string,
+  update: { evacuationTargetMicrons: number | null; pressureTestAllowedDropKPa: number | null },
+): Promise<ProcedureSettings> {
+  const [row] = await db.select({ settings: organisations.settings }).from(organisations).where(eq(organisations.id, organisationId));
+  const next: Record<string, unknown> = { ...(row?.settings ?? {}) };
+  for (const [key, value] of Object.entries(update)) {
+    if (value === null) delete next[key];
+    else next[key] = value;
+  }
+  await db.update(organisations).set({ settings: next, updatedAt: new Date() }).where(eq(organisations.id, organisationId));
+  return ProcedureSettingsSchema.parse(next);
+}

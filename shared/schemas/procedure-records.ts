@@ -335,3 +335,20 @@ export const ProcedureSettingsSchema = z.object({
   procedureLimits: ProcedureLimitsSchema.optional().catch(undefined),
 });
 export type ProcedureSettings = z.infer<typeof ProcedureSettingsSchema>;
+
+/**
+ * Body of PUT /api/organisation/settings (owners): the organisation's own limits where local
+ * codes differ from Satura's defaults. A null clears an override back to the default.
+ */
+export const ProcedureSettingsUpdateSchema = z.object({
+  evacuationTargetMicrons: TargetMicronsSchema.nullable(),
+  pressureTestAllowedDropKPa: PressureTestInputSchema.shape.allowedDropKPa.nullable(),
+});
+export type ProcedureSettingsUpdate = z.infer<typeof ProcedureSettingsUpdateSchema>;
+
+/** Answer of GET/PUT /api/organisation/settings: the overrides and the defaults they replace. */
+export const ProcedureSettingsResponseSchema = z.object({
+  settings: z.object({ evacuationTargetMicrons: z.number().nullable(), pressureTestAllowedDropKPa: z.number().nullable() }),
+  defaults: z.object({ evacuationTargetMicrons: z.number(), pressureTestAllowedDropKPa: z.number() }),
+});
+export type ProcedureSettingsResponse = z.infer<typeof ProcedureSettingsResponseSchema>;

@@ -1,4 +1,4 @@
-import { ClipboardCheck, ClipboardList, Cylinder, GraduationCap, HardHat, Home, Mail, SlidersHorizontal, Table2, Users, Wrench, type LucideIcon } from "lucide-react";
+import { Gauge, ClipboardCheck, ClipboardList, Cylinder, GraduationCap, HardHat, Home, Mail, SlidersHorizontal, Table2, Users, Wrench, type LucideIcon } from "lucide-react";
 import { PERMISSIONS, type Role } from "@shared/schemas/auth.ts";
 import { paths } from "./paths.ts";
 
@@ -28,6 +28,7 @@ export const navigation: NavItem[] = [
   { label: "Casebook", href: paths.casebook.getHref(), icon: GraduationCap, matchPrefix: true },
   { label: "Safety", href: paths.safety.getHref(), icon: HardHat },
   { label: "Members", href: paths.members.getHref(), icon: Users },
+  { label: "Company limits", href: paths.companySettings.getHref(), icon: Gauge, roles: PERMISSIONS.manageMembers },
   { label: "Profile", href: paths.profile.getHref(), icon: SlidersHorizontal },
   { label: "Outbox", href: paths.outbox.getHref(), icon: Mail, roles: ["owner"], requires: "outbox" },
 ];

@@ -49,6 +49,7 @@ export const paths = {
   register: { path: "/register", getHref: () => "/register" },
 
   members: { path: "/members", getHref: () => "/members" },
+  companySettings: { path: "/company-limits", getHref: () => "/company-limits" },
   profile: { path: "/profile", getHref: () => "/profile" },
   outbox: { path: "/outbox", getHref: () => "/outbox" },
 } as const;

@@ -1,0 +1,94 @@
+import { useState } from "react";
+import { ProcedureSettingsUpdateSchema, type ProcedureSettingsResponse } from "@shared/schemas/procedure-records.ts";
+import { Button } from "@/components/ui/button/button.tsx";
+import { FormAlert } from "@/components/ui/field/field.tsx";
+import { NumberField } from "@/components/ui/field/number-field.tsx";
+import { parseDecimal } from "@/components/ui/field/number-input.tsx";
+import { ApiError } from "@/lib/api/api-client.ts";
+import { useOrganisationSettings, useUpdateOrganisationSettings } from "@/lib/api/organisation.ts";
+
+const asText = (value: number | null) => (value === null ? "" : String(value));
+/** "" clears the override; unreadable text goes through as text so the schema names the field. */
+const asValue = (text: string) => {
+  const parsed = parseDecimal(text);
+  return parsed === undefined ? null : parsed === "invalid" ? text : parsed;
+};
+
+function SettingsForm({ current }: { current: ProcedureSettingsResponse }) {
+  const [target, setTarget] = useState(asText(current.settings.evacuationTargetMicrons));
+  const [drop, setDrop] = useState(asText(current.settings.pressureTestAllowedDropKPa));
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [saved, setSaved] = useState(false);
+  const update = useUpdateOrganisationSettings();
+
+  const submit = async () => {
+    setSaved(false);
+    const parsed = ProcedureSettingsUpdateSchema.safeParse({ evacuationTargetMicrons: asValue(target), pressureTestAllowedDropKPa: asValue(drop) });
+    if (!parsed.success) {
+      setErrors(Object.fromEntries(parsed.error.issues.map((issue) => [String(issue.path[0]), issue.message])));
+      return;
+    }
+    setErrors({});
+    try {
+      await update.mutateAsync(parsed.data);
+      setSaved(true);
+    } catch (error) {
+      setErrors(error instanceof ApiError ? { ...error.fields, _: error.message } : { _: "The settings were not saved" });
+    }
+  };
+
+  return (
+    <form
+      className="space-y-4 rounded-card border-2 border-rule bg-surface p-4"
+      noValidate
+      onSubmit={(event) => {
+        event.preventDefault();
+        void submit();
+      }}
+    >
+      {errors._ && <FormAlert>{errors._}</FormAlert>}
+      {saved && <FormAlert tone="good">Saved: new procedures on every visit use these limits</FormAlert>}
+      <NumberField
+        label="Evacuation target"
+        unit="µm"
+        value={target}
+        onValueChange={setTarget}
+        error={errors.evacuationTargetMicrons}
+        hint={`Leave empty for ${current.defaults.evacuationTargetMicrons} microns, the trade norm`}
+      />
+      <NumberField
+        label="Allowed pressure drop in a nitrogen test (after temperature correction)"
+        unit="kPa"
+        value={drop}
+        onValueChange={setDrop}
+        error={errors.pressureTestAllowedDropKPa}
+        hint={`Leave empty for ${current.defaults.pressureTestAllowedDropKPa} kPa: gauge resolution plus thermometer error near 4 MPa`}
+      />
+      <Button type="submit" disabled={update.isPending}>
+        {update.isPending ? "Saving…" : "Save limits"}
+      </Button>
+    </form>
+  );
+}
+
+export default function CompanySettingsRoute() {
+  const settings = useOrganisationSettings();
+  return (
+    <div className="max-w-2xl space-y-4">
+      <header>
+        <h1 className="text-2xl font-semibold">Company limits</h1>
+        <p className="mt-1 text-muted">
+          Where your local code or your customers ask for stricter limits than Satura's defaults, set them here. Local codes,
+          the maker's instructions and licensed practice decide.
+        </p>
+      </header>
+      {settings.isPending && <p aria-busy="true">Loading…</p>}
+      {settings.isError && (
+        <p role="alert" className="font-medium text-fault">
+          ⚠ {settings.error.message}
+        </p>
+      )}
+      {settings.isSuccess && <SettingsForm current={settings.data} />}
+    </div>
+  );
+}
