@@ -67,13 +67,28 @@ export async function getProfile(db: Database, userId: string, organisationId: s
     .where(and(eq(users.id, userId), eq(users.organisationId, organisationId), isNull(users.deactivatedAt)))
     .limit(1);
   if (!row) return undefined;
-  return { user: toAuthUser(row.user), organisationName: row.organisationName, preferences: readPreferences(row.user.preferences) };
+  return {
+    user: toAuthUser(row.user),
+    organisationName: row.organisationName,
+    preferences: readPreferences(row.user.preferences),
+    licenceNumber: row.user.licenceNumber,
+  };
 }
 
-export async function updateProfile(db: Database, userId: string, organisationId: string, input: { name: string; preferences: Preferences }) {
+export async function updateProfile(
+  db: Database,
+  userId: string,
+  organisationId: string,
+  input: { name: string; preferences: Preferences; licenceNumber?: string | null },
+) {
   await db
     .update(users)
-    .set({ name: input.name, preferences: input.preferences, updatedAt: new Date() })
+    .set({
+      name: input.name,
+      preferences: input.preferences,
+      ...(input.licenceNumber !== undefined ? { licenceNumber: input.licenceNumber } : {}),
+      updatedAt: new Date(),
+    })
     .where(and(eq(users.id, userId), eq(users.organisationId, organisationId)));
   return getProfile(db, userId, organisationId);
 }

@@ -59,6 +59,8 @@ export const users = pgTable(
      * their name; a deactivated user cannot sign in and has no sessions.
      */
     deactivatedAt: timestamp("deactivated_at", { withTimezone: true, mode: "date" }),
+    /** Refrigerant handling licence or certificate number, printed in the register export. */
+    licenceNumber: text("licence_number"),
     ...timestamps,
   },
   (table) => [

@@ -42,9 +42,8 @@ export function csvLine(fields: (string | number | null | undefined)[]): string 
 }
 
 /**
- * @param licenceNumbers licence or certificate number per user id. The user profile has no
- * such field yet, so callers pass an empty map and the column stays blank; the column is kept
- * so the file's layout does not change when it arrives.
+ * @param licenceNumbers licence or certificate number per user id, from each member's profile;
+ * blank for anyone who has not entered one.
  */
 export function registerCsv(movements: readonly MovementRow[], licenceNumbers: ReadonlyMap<string, string> = new Map()): string {
   let csv = csvLine([...REGISTER_CSV_COLUMNS]);

@@ -46,6 +46,7 @@ import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { circuitBalance, cylinderFill, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
 import { registerCsv } from "../register/register-csv.ts";
+import { licenceNumbers } from "../db/licence-numbers.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
 
 type Deps = Pick<AccountRouteDeps, "db">;
@@ -318,7 +319,7 @@ export function registerRouter({ db }: Deps): Router {
     res.setHeader("Content-Type", "text/csv; charset=utf-8");
     res.setHeader("Content-Disposition", `attachment; filename="${name}.csv"`);
     res.setHeader("Cache-Control", "private, no-store");
-    res.send(registerCsv(movements));
+    res.send(registerCsv(movements, await licenceNumbers(db, getAuth(res).organisationId)));
   });
 
   return router;

@@ -42,10 +42,14 @@ export const DEFAULT_PREFERENCES: Preferences = {
 };
 
 /** GET /api/profile and the answer to PUT. */
+export const LICENCE_NUMBER_MAX_LENGTH = 40;
+
 export const ProfileSchema = z.object({
   user: AuthUserSchema,
   organisationName: z.string(),
   preferences: PreferencesSchema,
+  /** Refrigerant handling licence or certificate number (the register export names it). */
+  licenceNumber: z.string().nullable(),
 });
 export type Profile = z.infer<typeof ProfileSchema>;
 
@@ -53,5 +57,12 @@ export type Profile = z.infer<typeof ProfileSchema>;
 export const UpdateProfileSchema = z.object({
   name: PersonNameSchema,
   preferences: PreferencesSchema,
+  /** Left out: unchanged. Empty: removed. */
+  licenceNumber: z
+    .string()
+    .trim()
+    .max(LICENCE_NUMBER_MAX_LENGTH, `At most ${LICENCE_NUMBER_MAX_LENGTH} characters`)
+    .optional()
+    .transform((value) => (value === undefined ? undefined : value === "" ? null : value)),
 });
 export type UpdateProfile = z.infer<typeof UpdateProfileSchema>;

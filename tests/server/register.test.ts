@@ -234,6 +234,14 @@ describe("refrigerant register API", () => {
     const note = '=SUM(A1) "drained", then\nweighed';
     expect((await senior.post(`/api/visits/${other}/refrigerant`).send({ kind: "recovered", kg: 0.25, circuit: 2, cylinderId: blue.id, note })).status).toBe(201);
 
+    // The licence number a technician keeps on their profile goes beside their entries.
+    const profile = (await technician.get("/api/profile")).body;
+    const licensed = await technician.put("/api/profile").send({ name: profile.user.name, preferences: profile.preferences, licenceNumber: " L123456 " });
+    expect(licensed.body.licenceNumber).toBe("L123456");
+    const tooLong = await technician.put("/api/profile").send({ name: profile.user.name, preferences: profile.preferences, licenceNumber: "x".repeat(41) });
+    expect(tooLong.status).toBe(400);
+    expect(tooLong.body.fields.licenceNumber).toBeDefined();
+
     const response = await owner.get("/api/register/export.csv");
     expect(response.status).toBe(200);
     expect(response.headers["content-type"]).toMatch(/^text\/csv/);
@@ -247,13 +255,13 @@ describe("refrigerant register API", () => {
     // OWASP CSV Injection: a leading "=" is neutralised with an apostrophe.
     expect(seniorRow[8]).toBe('BM "Blue", 2');
     expect(seniorRow[10]).toBe(`'${note}`);
-    expect(seniorRow[2]).toBe(""); // no licence number on the profile yet: blank column
+    expect(seniorRow[2]).toBe(""); // no licence number on Priya's profile: blank column
     expect(seniorRow).toMatchObject({ 3: "RTU-1 packaged rooftop unit", 4: "Wattle Lane Clinic — main building — Roof, above the waiting room", 5: "R407C", 6: "Recovered from the system", 7: "0.25", 9: "2" });
     expect(response.text).toContain('"BM ""Blue"", 2"');
 
     const samsOnly = parseCsv((await owner.get(`/api/register/export.csv?technicianId=${people[BELLBIRD.technician]}`)).text).slice(1);
     expect(samsOnly).toHaveLength(5);
-    expect(samsOnly.every((row) => row[1] === "Sam Toko")).toBe(true);
+    expect(samsOnly.every((row) => row[1] === "Sam Toko" && row[2] === "L123456")).toBe(true);
     const period = parseCsv((await owner.get("/api/register/export.csv?from=2026-07-01&to=2026-09-30")).text).slice(1);
     expect(period).toHaveLength(1);
     expect(period[0]![0]).toBe("2026-07-11T01:00:00.000Z");

@@ -24,7 +24,7 @@ export function ProfileForm({ profile }: { profile: Profile }) {
   const [saved, setSaved] = useState(false);
   const form = useForm({
     resolver: zodResolver(UpdateProfileSchema),
-    defaultValues: { name: profile.user.name, preferences: profile.preferences },
+    defaultValues: { name: profile.user.name, preferences: profile.preferences, licenceNumber: profile.licenceNumber ?? "" },
   });
   const { errors } = form.formState;
 
@@ -33,11 +33,11 @@ export function ProfileForm({ profile }: { profile: Profile }) {
     setSaved(false);
     try {
       const next = await update.mutateAsync(values);
-      form.reset({ name: next.user.name, preferences: next.preferences });
+      form.reset({ name: next.user.name, preferences: next.preferences, licenceNumber: next.licenceNumber ?? "" });
       setSaved(true);
     } catch (error) {
       setFormError(
-        applyServerErrors(error, form.setError, ["name", "preferences.temperatureUnit", "preferences.pressureUnit", "preferences.atmosphericPressureKPa"]),
+        applyServerErrors(error, form.setError, ["name", "licenceNumber", "preferences.temperatureUnit", "preferences.pressureUnit", "preferences.atmosphericPressureKPa"]),
       );
     }
   });
@@ -47,6 +47,13 @@ export function ProfileForm({ profile }: { profile: Profile }) {
       {saved && <FormAlert tone="good">Settings saved.</FormAlert>}
       {formError && <FormAlert>{formError}</FormAlert>}
       <TextField label="Your name" autoComplete="name" hint="Shown on the visits you record and sign." error={errors.name?.message} {...form.register("name")} />
+      <TextField
+        label="Refrigerant handling licence number (optional)"
+        hint="Your licence or certificate number for handling refrigerant; printed beside your entries in the register export."
+        autoComplete="off"
+        error={errors.licenceNumber?.message}
+        {...form.register("licenceNumber")}
+      />
       <fieldset className="space-y-4 rounded-card border-2 border-rule p-4">
         <legend className="px-1 font-semibold">Display units</legend>
         <p className="text-sm text-muted">Satura stores every reading in °C and kPa; this only changes what screens show.</p>
