@@ -101,7 +101,13 @@ export default function PtTableRoute() {
           Gauge pressures against an atmosphere of <span className="num">{atmosphericKPa} kPa</span>.
         </p>
         <TableControls range={currentRange} onChange={setRange} temperatureUnit={units.temperature} error={resolved.ok ? null : resolved.message} />
-        <div className="max-h-[70vh] overflow-auto rounded-card border-2 border-rule bg-surface print:max-h-none print:overflow-visible">
+        {/* Focusable so keyboard users can scroll a long table (WCAG 2.1.1). */}
+        <div
+          tabIndex={0}
+          role="region"
+          aria-label={`${info.id} saturation table`}
+          className="max-h-[70vh] overflow-auto rounded-card border-2 border-rule bg-surface print:max-h-none print:overflow-visible"
+        >
           {resolved.ok && (
             <SaturationTable
               refrigerantId={info.id}

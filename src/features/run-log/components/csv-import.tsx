@@ -51,6 +51,8 @@ export function CsvImport({ visitId, circuit }: { visitId: string; circuit: numb
         ref={fileInput}
         id={`csv-${circuit}`}
         type="file"
+        aria-label="CSV file"
+        tabIndex={-1}
         accept=".csv,text/csv"
         className="sr-only"
         onChange={(event) => {

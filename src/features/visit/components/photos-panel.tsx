@@ -71,6 +71,8 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
               ref={fileInput}
               id="photo-file"
               type="file"
+              aria-label="Photo file"
+              tabIndex={-1}
               accept="image/jpeg,image/png,image/webp"
               capture="environment"
               className="sr-only"
