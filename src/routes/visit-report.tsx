@@ -95,7 +95,7 @@ export default function VisitReportRoute() {
         const series = circuitSeries(data.readings, data.adjustments, circuit.number);
         const last = series.readings.at(-1);
         return (
-          <section key={circuit.number} aria-labelledby={`circuit-${circuit.number}-heading`} className="space-y-3 break-inside-avoid-page">
+          <section key={circuit.number} aria-labelledby={`circuit-${circuit.number}-heading`} className="space-y-3">
             <h2 id={`circuit-${circuit.number}-heading`} className="text-lg font-semibold">
               Circuit {circuit.number}
             </h2>
@@ -132,7 +132,7 @@ export default function VisitReportRoute() {
       <RefrigerantReport visitId={data.id} />
 
       {data.photos.length > 0 && (
-        <section aria-labelledby="photos-heading" className="break-inside-avoid-page">
+        <section aria-labelledby="photos-heading" className="keep-together">
           <h2 id="photos-heading" className="text-lg font-semibold">
             Photos
           </h2>
@@ -144,7 +144,7 @@ export default function VisitReportRoute() {
         </section>
       )}
 
-      <section aria-labelledby="signoff-heading" className="break-inside-avoid-page rounded-card border-2 border-ink p-4">
+      <section aria-labelledby="signoff-heading" className="keep-together rounded-card border-2 border-ink p-4">
         <h2 id="signoff-heading" className="text-lg font-semibold">
           Sign-off
         </h2>

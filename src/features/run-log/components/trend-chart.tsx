@@ -39,14 +39,15 @@ export function TrendChart({ series, units, width, height = 320 }: TrendChartPro
       <YAxis yAxisId="saturation" orientation="right" unit={` ${t}`} width={60} tick={{ fontFamily: "IBM Plex Mono", fontSize: 12 }} />
       <Tooltip formatter={(value) => (typeof value === "number" ? formatNumber(value, 1) : String(value))} labelFormatter={(x) => `${formatNumber(Number(x), 1)} min`} />
       <Legend />
-      {series.adjustments.map((adjustment) => (
+      {series.adjustments.map((adjustment, index) => (
         <ReferenceLine
           key={adjustment.id}
           yAxisId="difference"
           x={Number(adjustment.x.toFixed(2))}
           stroke="var(--color-ink)"
           strokeDasharray="6 3"
-          label={{ value: `✎ ${adjustment.description}`, position: "insideTopLeft", fontSize: 12, fill: "var(--color-ink)" }}
+          // A number on the line, the words in the key below: long notes would overlap.
+          label={{ value: `✎${index + 1}`, position: "insideTopLeft", fontSize: 12, fill: "var(--color-ink)" }}
         />
       ))}
       <Line yAxisId="difference" name={`Superheat (${k})`} dataKey="superheat" stroke="var(--color-low)" strokeWidth={3} dot={{ r: 3 }} isAnimationActive={false} connectNulls />
@@ -58,6 +59,15 @@ export function TrendChart({ series, units, width, height = 320 }: TrendChartPro
   return (
     <figure aria-label="Trend of superheat, subcooling and saturation temperatures" data-testid="trend-chart">
       {width ? chart : <ResponsiveContainer width="100%" height={height}>{chart}</ResponsiveContainer>}
+      {series.adjustments.length > 0 && (
+        <ol aria-label="Adjustments on the chart" className="mt-1 space-y-0.5 text-sm">
+          {series.adjustments.map((adjustment, index) => (
+            <li key={adjustment.id}>
+              <span className="num font-semibold">✎{index + 1}</span> at <span className="num">{formatNumber(adjustment.x, 0)} min</span>: {adjustment.description}
+            </li>
+          ))}
+        </ol>
+      )}
       {series.points.length > MAX_CHART_POINTS && (
         <figcaption className="text-xs text-muted">
           {series.points.length} readings, drawn as {MAX_CHART_POINTS} points that keep peaks and dips.
