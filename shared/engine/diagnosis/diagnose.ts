@@ -1,5 +1,6 @@
 import {
   DiagnosisInputSchema,
+  type DiagnosisInput,
   type DiagnosisInputDraft,
   type DiagnosisResult,
   type DiagnosisWarning,
@@ -8,6 +9,7 @@ import {
 import { PropertyRangeError } from "../properties/property-range-error.ts";
 import { buildDiagnosisSnapshot } from "./build-diagnosis-snapshot.ts";
 import { DiagnosisInputError } from "./diagnosis-input-error.ts";
+import { fastParseDiagnosisInput } from "./fast-parse-diagnosis-input.ts";
 import { rankChargeStates } from "./rank-charge-states.ts";
 import { DIAGNOSIS_RULES } from "./rules/registry.ts";
 
@@ -29,8 +31,9 @@ const PRIMARY_RULE = { fixed: "superheat-vs-target", "expansion-valve": "subcool
  * bubble point at the liquid pressure), superheat, subcooling, glide, their targets, the air
  * and condenser values, and the charge state with its evidence and warnings.
  *
- * How: the readings are validated (`DiagnosisInputSchema`), every derived value is computed
- * once into a snapshot through the property engine, each rule of `DIAGNOSIS_RULES` turns the
+ * How: the readings are validated (`DiagnosisInputSchema`, after `fastParseDiagnosisInput`
+ * has accepted the valid ones faster), every derived value is computed once into a snapshot
+ * through the property engine, each rule of `DIAGNOSIS_RULES` turns the
  * snapshot into findings (each pointing to states with a weight) and warnings, and
  * `rankChargeStates` sums the evidence. The top state wins if its score reaches
  * `MIN_VERDICT_SCORE` and the metering device's charge signal (superheat for fixed devices,
@@ -44,11 +47,17 @@ const PRIMARY_RULE = { fixed: "superheat-vs-target", "expansion-valve": "subcool
  * @example diagnose({ refrigerant: "R410A", meteringDevice: "txv", suctionPressureKPa: 820, suctionLineTempC: 13, liquidPressureKPa: 2650, liquidLineTempC: 38 }).chargeState
  */
 export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
-  const parsed = DiagnosisInputSchema.safeParse(input);
-  if (!parsed.success) throw DiagnosisInputError.fromZodError(parsed.error);
+  // Performance: the hand-written check accepts valid readings without zod's cost; anything it
+  // refuses goes through the schema, which stays the source of every message.
+  let data: DiagnosisInput | null = fastParseDiagnosisInput(input);
+  if (data === null) {
+    const parsed = DiagnosisInputSchema.safeParse(input);
+    if (!parsed.success) throw DiagnosisInputError.fromZodError(parsed.error);
+    data = parsed.data;
+  }
   let snapshot;
   try {
-    snapshot = buildDiagnosisSnapshot(parsed.data);
+    snapshot = buildDiagnosisSnapshot(data);
   } catch (error) {
     if (error instanceof PropertyRangeError && error.code === "UNKNOWN_REFRIGERANT") {
       throw new DiagnosisInputError({ refrigerant: [error.message] });
@@ -58,23 +67,28 @@ export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
 
   const findings: Finding[] = [];
   const warnings: DiagnosisWarning[] = [];
-  for (const rule of DIAGNOSIS_RULES) {
-    const output = rule.evaluate(snapshot);
-    for (const finding of output.findings) findings.push(finding);
-    for (const warning of output.warnings) warnings.push(warning);
+  // Indexed loops and no callback: this runs for every rule on every call (performance).
+  const primaryRule = PRIMARY_RULE[snapshot.meteringFamily];
+  let judged = false;
+  for (let ruleIndex = 0; ruleIndex < DIAGNOSIS_RULES.length; ruleIndex += 1) {
+    const output = DIAGNOSIS_RULES[ruleIndex]!.evaluate(snapshot);
+    const ruleFindings = output.findings;
+    for (let index = 0; index < ruleFindings.length; index += 1) {
+      const finding = ruleFindings[index]!;
+      findings.push(finding);
+      if (finding.ruleId === primaryRule && (finding.direction === "low" || finding.direction === "normal" || finding.direction === "high")) judged = true;
+    }
+    const ruleWarnings = output.warnings;
+    for (let index = 0; index < ruleWarnings.length; index += 1) warnings.push(ruleWarnings[index]!);
   }
 
   const ranked = rankChargeStates(findings);
-  const primaryRule = PRIMARY_RULE[snapshot.meteringFamily];
-  const judged = findings.some(
-    (finding) => finding.ruleId === primaryRule && (finding.direction === "low" || finding.direction === "normal" || finding.direction === "high"),
-  );
   const top = ranked[0];
   const verdict = judged && top !== undefined && top.score >= MIN_VERDICT_SCORE ? top : null;
 
   return {
-    refrigerant: parsed.data.refrigerant,
-    meteringDevice: parsed.data.meteringDevice,
+    refrigerant: data.refrigerant,
+    meteringDevice: data.meteringDevice,
     evaporatingTempC: snapshot.evaporatingTempC,
     evaporatingBubbleTempC: snapshot.evaporatingBubbleTempC,
     condensingTempC: snapshot.condensingTempC,

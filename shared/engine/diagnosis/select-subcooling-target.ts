@@ -6,6 +6,9 @@ import {
   NAMEPLATE_TARGET_TOLERANCE_SOURCE,
 } from "./diagnosis-limits.ts";
 
+/** Never changes: built once here instead of on every call (performance). */
+const NAMEPLATE_SOURCE = `maker's target; ±${NAMEPLATE_TARGET_TOLERANCE_K} K: ${NAMEPLATE_TARGET_TOLERANCE_SOURCE}`;
+
 /**
  * Chooses the subcooling band: the maker's target ± 1.7 K (Title 24 tolerance, memory) when
  * given — TXV/EEV systems are charged to it [S9][S11][S14] — else the common-practice band
@@ -23,7 +26,7 @@ export function selectSubcoolingTarget(nameplateTargetK: number | undefined): Ta
       lowK: Math.max(0, nameplateTargetK - NAMEPLATE_TARGET_TOLERANCE_K),
       highK: nameplateTargetK + NAMEPLATE_TARGET_TOLERANCE_K,
       basis: "nameplate",
-      source: `maker's target; ±${NAMEPLATE_TARGET_TOLERANCE_K} K: ${NAMEPLATE_TARGET_TOLERANCE_SOURCE}`,
+      source: NAMEPLATE_SOURCE,
     };
   }
   const { lowK, highK, targetK } = DEFAULT_SUBCOOLING_BAND;

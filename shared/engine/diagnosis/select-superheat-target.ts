@@ -10,6 +10,11 @@ import {
 import { fixedOrificeTargetSuperheat } from "./fixed-orifice-target-superheat.ts";
 import { cite } from "./sources.ts";
 
+// The band sources never change: built once here instead of on every call (performance).
+const FIXED_NAMEPLATE_SOURCE = `maker's target; ±${FIXED_ORIFICE_SUPERHEAT_TOLERANCE_K} K installer tolerance ${cite(["S10", "S17", "S18"])}`;
+const VALVE_NAMEPLATE_SOURCE = `maker's target; ±${NAMEPLATE_TARGET_TOLERANCE_K} K: ${NAMEPLATE_TARGET_TOLERANCE_SOURCE}`;
+const FORMULA_SOURCE = `SH = 1.5 × WB − 0.5 × DB − 4.4, ±${FIXED_ORIFICE_SUPERHEAT_TOLERANCE_K} K: ${FIXED_ORIFICE_TARGET_SOURCE}`;
+
 export interface SuperheatTargetChoice {
   band: TargetBand | null;
   /** Why there is no band, or a caution about the band used; null when nothing to say. */
@@ -39,9 +44,7 @@ export function selectSuperheatTarget(
   const fixed = meteringDevice === "fixed-orifice" || meteringDevice === "capillary";
   if (nameplateTargetK !== undefined) {
     const tolerance = fixed ? FIXED_ORIFICE_SUPERHEAT_TOLERANCE_K : NAMEPLATE_TARGET_TOLERANCE_K;
-    const source = fixed
-      ? `maker's target; ±${tolerance} K installer tolerance ${cite(["S10", "S17", "S18"])}`
-      : `maker's target; ±${tolerance} K: ${NAMEPLATE_TARGET_TOLERANCE_SOURCE}`;
+    const source = fixed ? FIXED_NAMEPLATE_SOURCE : VALVE_NAMEPLATE_SOURCE;
     return {
       band: { targetK: nameplateTargetK, lowK: Math.max(0, nameplateTargetK - tolerance), highK: nameplateTargetK + tolerance, basis: "nameplate", source },
       note: null,
@@ -69,7 +72,7 @@ export function selectSuperheatTarget(
       lowK: target.targetK - tolerance,
       highK: target.targetK + tolerance,
       basis: "formula",
-      source: `SH = 1.5 × WB − 0.5 × DB − 4.4, ±${tolerance} K: ${FIXED_ORIFICE_TARGET_SOURCE}`,
+      source: FORMULA_SOURCE,
     },
     note: null,
   };

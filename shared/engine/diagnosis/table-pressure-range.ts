@@ -8,7 +8,9 @@ export interface TablePressureRange {
   maximumC: number;
 }
 
-const ranges = new Map<string, TablePressureRange>();
+/** Both points per refrigerant id: keyed by the id alone so a lookup builds no key string
+ * (performance: five lookups per diagnosis). */
+const ranges = new Map<string, Partial<Record<"bubble" | "dew", TablePressureRange>>>();
 
 /**
  * The saturation pressures covered by a refrigerant's table for one saturation point: the
@@ -23,8 +25,8 @@ const ranges = new Map<string, TablePressureRange>();
  * @example tablePressureRange("R32", "dew").minimumC // -60
  */
 export function tablePressureRange(refrigerant: string, point: "bubble" | "dew"): TablePressureRange {
-  const key = `${refrigerant}|${point}`;
-  let range = ranges.get(key);
+  const byPoint = ranges.get(refrigerant);
+  let range = byPoint?.[point];
   if (!range) {
     const { minimumC, maximumC } = getRefrigerant(refrigerant).validRange;
     range = Object.freeze({
@@ -33,7 +35,9 @@ export function tablePressureRange(refrigerant: string, point: "bubble" | "dew")
       minimumC,
       maximumC,
     });
-    ranges.set(key, range);
+    // Stored only once the table is known, so unknown ids never grow the memo.
+    if (byPoint) byPoint[point] = range;
+    else ranges.set(refrigerant, { [point]: range });
   }
   return range;
 }

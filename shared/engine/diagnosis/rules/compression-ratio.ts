@@ -8,6 +8,8 @@ import { NO_OUTPUT } from "./no-output.ts";
 /** Ratio below the low limit at which the evidence reaches full strength. */
 const FULL_STRENGTH_RATIO_BELOW = 0.5;
 const SOURCE = cite(["S38", "S29"]);
+/** Built once rather than per warning (performance). */
+const HIGH_RATIO_SOURCE = `${MEMORY}; ${cite(["S38"])}`;
 
 /** Compression ratio: too low means the compressor is not pumping; very high strains a single stage. */
 export const compressionRatioRule: DiagnosisRule = {
@@ -45,7 +47,7 @@ export const compressionRatioRule: DiagnosisRule = {
             severity: "caution",
             field: "suctionPressureKPa",
             message: `Compression ratio ${formatTenths(ratio)}:1${basis} is above ${HIGH_COMPRESSION_RATIO}:1: expect high discharge temperatures on a single-stage compressor`,
-            source: `${MEMORY}; ${cite(["S38"])}`,
+            source: HIGH_RATIO_SOURCE,
           },
         ],
       };

@@ -4,6 +4,8 @@ import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = `negative subcooling means vapour or flash gas at the measuring point, or the wrong pipe (${cite(["S1", "S2"])}; ${COMMON_PRACTICE})`;
+/** Built once rather than per warning (performance). */
+const FLASH_GAS_SOURCE = `${SOURCE}; ${cite(["S22"])}`;
 
 /** Liquid line warmer than its bubble point: flash gas, or vapour (wrong pipe) beyond the dew point. */
 export const liquidLineSaturationRule: DiagnosisRule = {
@@ -28,7 +30,7 @@ export const liquidLineSaturationRule: DiagnosisRule = {
           severity: "caution",
           field: "liquidLineTempC",
           message: `Liquid line is ${formatTenths(-subcooling)} K above its bubble point: no subcooling, so flash gas reaches the metering device (short of charge or a restriction upstream); check the probe is on the liquid line`,
-          source: `${SOURCE}; ${cite(["S22"])}`,
+          source: FLASH_GAS_SOURCE,
         },
       ],
     };

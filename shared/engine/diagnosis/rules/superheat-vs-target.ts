@@ -32,6 +32,8 @@ export const VALVE_SUPERHEAT_PROFILE: EvidenceProfile = {
 };
 
 const SOURCE = cite(["S10", "S17", "S21", "S22", "S23"]);
+/** Built once rather than per warning (performance). */
+const TARGET_UNAVAILABLE_SOURCE = cite(["S10", "S17", "S18", "S19"]);
 
 const FIXED_MESSAGES: BandedReading["messages"] = {
   low: (value, band) => `Superheat ${value} K is below its target ${band} K: too much refrigerant for the load, or too little air over the evaporator`,
@@ -74,7 +76,7 @@ export const superheatVsTargetRule: DiagnosisRule = {
             severity: "caution",
             field: "returnAirWetBulbC",
             message: snapshot.superheatTargetNote ?? "No superheat target",
-            source: cite(["S10", "S17", "S18", "S19"]),
+            source: TARGET_UNAVAILABLE_SOURCE,
           },
         ],
       };
