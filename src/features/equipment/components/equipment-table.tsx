@@ -1,25 +1,12 @@
-import {
-  columnFilteringFeature,
-  createColumnHelper,
-  createFilteredRowModel,
-  createSortedRowModel,
-  globalFilteringFeature,
-  rowSortingFeature,
-  sortFn_alphanumeric,
-  sortFn_basic,
-  sortFn_text,
-  tableFeatures,
-  useTable,
-  type Column,
-  type SortingState,
-} from "@tanstack/react-table";
-import { ArrowDown, ArrowUp, ArrowUpDown, Search } from "lucide-react";
+import { createColumnHelper, useTable, type SortingState } from "@tanstack/react-table";
+import { Search } from "lucide-react";
 import { useDeferredValue, useId, useMemo, useState } from "react";
 import { Link } from "react-router-dom";
 import { listRefrigerants } from "@shared/engine/index.ts";
 import type { SafetyClass } from "@shared/content/safety-classes.ts";
 import { EQUIPMENT_KINDS, type Equipment } from "@shared/schemas/equipment.ts";
 import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
+import { SortableTable, sortableTableFeatures, SortIcon } from "@/components/ui/data-table/sortable-table.tsx";
 import { paths } from "@/config/paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import {
@@ -64,15 +51,7 @@ export function toEquipmentRows(equipment: readonly Equipment[]): EquipmentRow[]
   }));
 }
 
-const features = tableFeatures({
-  rowSortingFeature,
-  columnFilteringFeature,
-  globalFilteringFeature,
-  sortedRowModel: createSortedRowModel(),
-  filteredRowModel: createFilteredRowModel(),
-  sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic, text: sortFn_text },
-});
-const column = createColumnHelper<typeof features, EquipmentRow>();
+const column = createColumnHelper<typeof sortableTableFeatures, EquipmentRow>();
 
 const columns = column.columns([
   column.accessor("name", {
@@ -133,32 +112,7 @@ const SORT_CHOICES = [
   { value: "totalChargeKg", label: "Factory charge" },
 ] as const;
 
-function SortIcon({ direction }: { direction: false | "asc" | "desc" }) {
-  if (direction === "asc") return <ArrowUp aria-hidden className="size-4" />;
-  if (direction === "desc") return <ArrowDown aria-hidden className="size-4" />;
-  return <ArrowUpDown aria-hidden className="size-4 text-muted" />;
-}
 
-function SortableHeader({ column: target, label }: { column: Column<typeof features, EquipmentRow>; label: string }) {
-  const direction = target.getIsSorted();
-  return (
-    <button
-      type="button"
-      onClick={target.getToggleSortingHandler()}
-      className="-mx-2 inline-flex min-h-touch items-center gap-1 whitespace-nowrap rounded-card px-2 font-semibold hover:bg-sunken"
-    >
-      {label}
-      <SortIcon direction={direction} />
-      <span className="sr-only">
-        {direction === "asc"
-          ? "(sorted A to Z, low to high)"
-          : direction === "desc"
-            ? "(sorted Z to A, high to low)"
-            : "(sort)"}
-      </span>
-    </button>
-  );
-}
 
 /**
  * The company's units: a sortable table on tablets and desktops, a column of cards on phones
@@ -177,7 +131,7 @@ export function EquipmentTable({ equipment }: { equipment: readonly Equipment[] 
 
   const columnFilters = useMemo(() => (kind ? [{ id: "kind", value: kind }] : []), [kind]);
   const table = useTable({
-    features,
+    features: sortableTableFeatures,
     columns,
     data: rows,
     getRowId: (row) => row.id,
@@ -302,44 +256,7 @@ export function EquipmentTable({ equipment }: { equipment: readonly Equipment[] 
           </div>
 
           {/* Tablets and desktops: the table. */}
-          <div className="hidden overflow-x-auto rounded-card border-2 border-rule bg-surface md:block">
-            <table className="w-full text-left">
-              <caption className="sr-only">Equipment, sortable by each column</caption>
-              <thead className="border-b-2 border-rule">
-                {table.getHeaderGroups().map((group) => (
-                  <tr key={group.id}>
-                    {group.headers.map((header) => (
-                      <th
-                        key={header.id}
-                        scope="col"
-                        aria-sort={
-                          header.column.getIsSorted() === "asc"
-                            ? "ascending"
-                            : header.column.getIsSorted() === "desc"
-                              ? "descending"
-                              : "none"
-                        }
-                        className="px-3 py-1"
-                      >
-                        <SortableHeader column={header.column} label={String(header.column.columnDef.header)} />
-                      </th>
-                    ))}
-                  </tr>
-                ))}
-              </thead>
-              <tbody>
-                {shown.map((row) => (
-                  <tr key={row.id} className="border-b border-rule last:border-b-0">
-                    {row.getAllCells().map((cell) => (
-                      <td key={cell.id} className="px-3 py-2 align-top">
-                        <table.FlexRender cell={cell} />
-                      </td>
-                    ))}
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <SortableTable table={table} caption="Equipment, sortable by each column" words={{ asc: "(sorted A to Z, low to high)", desc: "(sorted Z to A, high to low)" }} />
         </>
       )}
     </div>

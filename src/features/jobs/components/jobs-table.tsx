@@ -1,23 +1,10 @@
-import {
-  createColumnHelper,
-  createFilteredRowModel,
-  createSortedRowModel,
-  globalFilteringFeature,
-  columnFilteringFeature,
-  rowSortingFeature,
-  sortFn_alphanumeric,
-  sortFn_basic,
-  sortFn_datetime,
-  tableFeatures,
-  useTable,
-  type Column,
-  type SortingState,
-} from "@tanstack/react-table";
-import { ArrowDown, ArrowUp, ArrowUpDown, Search } from "lucide-react";
+import { createColumnHelper, useTable, type SortingState } from "@tanstack/react-table";
+import { Search } from "lucide-react";
 import { useDeferredValue, useId, useMemo, useState } from "react";
 import { Link } from "react-router-dom";
 import type { VisitSummary } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
+import { SortableTable, sortableTableFeatures } from "@/components/ui/data-table/sortable-table.tsx";
 import { paths } from "@/config/paths.ts";
 import { formatVisitDate } from "../utils/format-visit-date.ts";
 
@@ -27,15 +14,7 @@ interface JobRow extends VisitSummary {
   searchText: string;
 }
 
-const features = tableFeatures({
-  rowSortingFeature,
-  columnFilteringFeature,
-  globalFilteringFeature,
-  sortedRowModel: createSortedRowModel(),
-  filteredRowModel: createFilteredRowModel(),
-  sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic, datetime: sortFn_datetime },
-});
-const column = createColumnHelper<typeof features, JobRow>();
+const column = createColumnHelper<typeof sortableTableFeatures, JobRow>();
 
 const columns = column.columns([
   column.accessor("startedAtMs", {
@@ -90,28 +69,7 @@ const columns = column.columns([
   }),
 ]);
 
-function SortIcon({ direction }: { direction: false | "asc" | "desc" }) {
-  if (direction === "asc") return <ArrowUp aria-hidden className="size-4" />;
-  if (direction === "desc") return <ArrowDown aria-hidden className="size-4" />;
-  return <ArrowUpDown aria-hidden className="size-4 text-muted" />;
-}
 
-function SortableHeader({ column: target, label }: { column: Column<typeof features, JobRow>; label: string }) {
-  const direction = target.getIsSorted();
-  return (
-    <button
-      type="button"
-      onClick={target.getToggleSortingHandler()}
-      className="-mx-2 inline-flex min-h-touch items-center gap-1 whitespace-nowrap rounded-card px-2 font-semibold hover:bg-sunken"
-    >
-      {label}
-      <SortIcon direction={direction} />
-      <span className="sr-only">
-        {direction === "asc" ? "(oldest or A first)" : direction === "desc" ? "(newest or Z first)" : "(sort)"}
-      </span>
-    </button>
-  );
-}
 
 /** Visits across all equipment, newest first; cards on phones, a sortable table from tablets up. */
 export function JobsTable({ visits }: { visits: readonly VisitSummary[] }) {
@@ -135,7 +93,7 @@ export function JobsTable({ visits }: { visits: readonly VisitSummary[] }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: "startedAtMs", desc: true }]);
   const searchId = useId();
   const table = useTable({
-    features,
+    features: sortableTableFeatures,
     columns,
     data: rows,
     getRowId: (row) => row.id,
@@ -207,44 +165,7 @@ export function JobsTable({ visits }: { visits: readonly VisitSummary[] }) {
               );
             })}
           </ul>
-          <div className="hidden overflow-x-auto rounded-card border-2 border-rule bg-surface md:block">
-            <table className="w-full text-left">
-              <caption className="sr-only">Visits, newest first; sortable by each column</caption>
-              <thead className="border-b-2 border-rule">
-                {table.getHeaderGroups().map((group) => (
-                  <tr key={group.id}>
-                    {group.headers.map((header) => (
-                      <th
-                        key={header.id}
-                        scope="col"
-                        aria-sort={
-                          header.column.getIsSorted() === "asc"
-                            ? "ascending"
-                            : header.column.getIsSorted() === "desc"
-                              ? "descending"
-                              : "none"
-                        }
-                        className="px-3 py-1"
-                      >
-                        <SortableHeader column={header.column} label={String(header.column.columnDef.header)} />
-                      </th>
-                    ))}
-                  </tr>
-                ))}
-              </thead>
-              <tbody>
-                {shown.map((row) => (
-                  <tr key={row.id} className="border-b border-rule last:border-b-0">
-                    {row.getAllCells().map((cell) => (
-                      <td key={cell.id} className="px-3 py-2 align-top">
-                        <table.FlexRender cell={cell} />
-                      </td>
-                    ))}
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <SortableTable table={table} caption="Visits, newest first; sortable by each column" words={{ asc: "(oldest or A first)", desc: "(newest or Z first)" }} />
         </>
       )}
     </div>
