@@ -1,7 +1,11 @@
 import { Plus, Save, Trash2 } from "lucide-react";
 import { useState } from "react";
-import { ELECTRICAL_TARGET_LABELS, ELECTRICAL_TARGETS, ElectricalCheckBodySchema, type ElectricalTarget } from "@shared/schemas/procedure-records.ts";
-import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
+import {
+  ELECTRICAL_TARGET_LABELS,
+  ELECTRICAL_TARGETS,
+  ElectricalCheckBodySchema,
+  type ElectricalTarget,
+} from "@shared/schemas/procedure-records.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, TextField } from "@/components/ui/field/field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
@@ -11,6 +15,7 @@ import { errorFor, fieldErrorsOf } from "../utils/field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { ElectricalCheckView } from "./electrical-check-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
+import { ProcedureLayout } from "./procedure-layout.tsx";
 
 interface ElectricalPanelProps {
   visitId: string;
@@ -26,7 +31,8 @@ const DEFAULT_TEST_VOLTAGE = "500";
 
 const emptyInsulation = (): InsulationRow => ({ point: "", megohms: "", testVoltageV: DEFAULT_TEST_VOLTAGE });
 /** Only filled values go to the schema; three empty phase boxes mean "not measured". */
-const filled = (values: string[]) => (values.some((value) => value.trim() !== "") ? values.map((value) => toNumber(value) ?? Number.NaN) : undefined);
+const filled = (values: string[]) =>
+  values.some((value) => value.trim() !== "") ? values.map((value) => toNumber(value) ?? Number.NaN) : undefined;
 
 /**
  * Electrical checks on a compressor, a fan motor or the supply: phase voltages and imbalance,
@@ -54,7 +60,8 @@ export function ElectricalPanel({ visitId, circuits, canWrite }: ElectricalPanel
   const [saved, setSaved] = useState(false);
 
   const ratedDefault = target === "compressor" ? defaults?.compressorRlaA : target === "fan" ? defaults?.fanFlaA : null;
-  const setAt = (setter: (update: (values: string[]) => string[]) => void, index: number, value: string) => setter((values) => values.map((old, at) => (at === index ? value : old)));
+  const setAt = (setter: (update: (values: string[]) => string[]) => void, index: number, value: string) =>
+    setter((values) => values.map((old, at) => (at === index ? value : old)));
 
   const save = async () => {
     setFormError(null);
@@ -65,7 +72,14 @@ export function ElectricalPanel({ visitId, circuits, canWrite }: ElectricalPanel
       circuit: target === "supply" ? null : Number(circuit),
       supplyVolts: filled(volts.slice(0, phaseCount)),
       nameplateV: toNumber(nameplateV),
-      insulation: insulationRows.length > 0 ? insulationRows.map((row) => ({ point: row.point.trim() || undefined, megohms: toNumber(row.megohms) ?? Number.NaN, testVoltageV: toNumber(row.testVoltageV) ?? Number.NaN })) : undefined,
+      insulation:
+        insulationRows.length > 0
+          ? insulationRows.map((row) => ({
+              point: row.point.trim() || undefined,
+              megohms: toNumber(row.megohms) ?? Number.NaN,
+              testVoltageV: toNumber(row.testVoltageV) ?? Number.NaN,
+            }))
+          : undefined,
       windingOhms: target === "supply" ? undefined : (filled(ohms) as [number, number, number] | undefined),
       runningAmps: target === "supply" ? undefined : filled(amps.slice(0, phaseCount)),
       ratedA: toNumber(ratedA),
@@ -93,135 +107,203 @@ export function ElectricalPanel({ visitId, circuits, canWrite }: ElectricalPanel
   };
 
   return (
-    <div className="space-y-4">
-      <CautionPanel topic="electrical" />
-
-      {checks.data && checks.data.electricalChecks.length > 0 && (
-        <section aria-labelledby="electrical-saved-heading" className="space-y-2">
-          <h2 id="electrical-saved-heading" className="text-lg font-semibold">
-            Checks on this visit
-          </h2>
-          {checks.data.electricalChecks.map((check) => (
-            <ElectricalCheckView key={check.id} check={check} />
-          ))}
-        </section>
-      )}
-      {checks.isError && <FormAlert>The electrical checks could not be loaded: {checks.error.message}</FormAlert>}
-
-      {canWrite ? (
-        <form
-          aria-label="New electrical check"
-          noValidate
-          className="space-y-4 rounded-card border-2 border-rule bg-surface p-4"
-          onSubmit={(event) => {
-            event.preventDefault();
-            void save();
-          }}
-        >
-          <h2 className="text-lg font-semibold">New electrical check</h2>
-          <div className="flex flex-wrap gap-3">
-            <Segmented<ElectricalTarget>
-              label="What was checked"
-              value={target}
-              onChange={(value) => {
-                setTarget(value);
-                setErrors({});
-              }}
-              options={ELECTRICAL_TARGETS.map((value) => ({ value, label: ELECTRICAL_TARGET_LABELS[value] }))}
-            />
-            {target !== "supply" && circuits.length > 1 && (
-              <Segmented<string> label="Circuit" value={circuit} onChange={setCircuit} options={circuits.map((number) => ({ value: String(number), label: `Circuit ${number}` }))} />
-            )}
-          </div>
-          {errors.target && <p className="text-sm font-medium text-fault">⚠ {errors.target}</p>}
-
-          <fieldset className="space-y-2">
-            <legend className="font-semibold">Supply voltage {threePhase ? "(line to line, running)" : "(running)"}</legend>
-            <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-              {volts.slice(0, phaseCount).map((value, index) => (
-                <NumberField key={index} label={threePhase ? PHASE_PAIRS[index]! : "Measured"} unit="V" value={value} onValueChange={(text) => setAt(setVolts, index, text)} error={errors[`supplyVolts.${index}`]} />
-              ))}
-              <NumberField label="Nameplate" unit="V" value={nameplateV} onValueChange={setNameplateV} error={errors.nameplateV} hint={defaults?.nameplateV ? `${defaults.nameplateV} V on the unit if left blank` : undefined} />
-            </div>
-            {(errors.supplyVolts || errors._) && <p className="text-sm font-medium text-fault">⚠ {errors.supplyVolts ?? errors._}</p>}
-          </fieldset>
-
-          <fieldset className="space-y-2">
-            <legend className="font-semibold">Insulation resistance to earth</legend>
-            <p className="text-sm text-muted">Never on a compressor under vacuum. Enter the tester voltage you used.</p>
-            {insulation.map((row, index) => (
-              <div key={index} className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[1fr_10rem_10rem_auto]">
-                <TextField
-                  label="Point tested"
-                  placeholder={target === "supply" ? "e.g. L1 to earth" : "e.g. C to earth"}
-                  value={row.point}
-                  onChange={(event) => setInsulation((rows) => rows.map((old, at) => (at === index ? { ...old, point: event.target.value } : old)))}
-                  className="col-span-2 sm:col-span-1"
-                />
-                <NumberField label="Reading" unit="MΩ" value={row.megohms} onValueChange={(text) => setInsulation((rows) => rows.map((old, at) => (at === index ? { ...old, megohms: text } : old)))} error={errors[`insulation.${index}.megohms`]} />
-                <NumberField label="Test voltage" unit="V d.c." value={row.testVoltageV} onValueChange={(text) => setInsulation((rows) => rows.map((old, at) => (at === index ? { ...old, testVoltageV: text } : old)))} error={errors[`insulation.${index}.testVoltageV`]} />
-                {insulation.length > 1 && (
-                  <Button variant="quiet" aria-label={`Remove insulation reading ${index + 1}`} onClick={() => setInsulation((rows) => rows.filter((_row, at) => at !== index))}>
-                    <Trash2 aria-hidden className="size-5" />
-                  </Button>
-                )}
-              </div>
-            ))}
-            {insulation.length < 6 && (
-              <Button variant="secondary" onClick={() => setInsulation((rows) => [...rows, emptyInsulation()])}>
-                <Plus aria-hidden className="size-5" /> Another insulation reading
-              </Button>
-            )}
-          </fieldset>
-
-          {target !== "supply" && (
-            <>
-              {threePhase && (
-                <fieldset className="space-y-2">
-                  <legend className="font-semibold">Winding resistance (lead to lead)</legend>
-                  <div className="grid grid-cols-3 gap-3">
-                    {ohms.map((value, index) => (
-                      <NumberField key={index} label={WINDING_PAIRS[index]!} unit="Ω" value={value} onValueChange={(text) => setAt(setOhms, index, text)} error={errors[`windingOhms.${index}`]} />
-                    ))}
+    <ProcedureLayout
+      caution="electrical"
+      saved={{
+        headingId: "electrical-saved-heading",
+        title: "Checks on this visit",
+        records: (checks.data?.electricalChecks ?? []).map((check) => (
+          <ElectricalCheckView key={check.id} check={check} />
+        )),
+      }}
+      loadError={checks.isError ? `The electrical checks could not be loaded: ${checks.error.message}` : undefined}
+      form={
+        canWrite
+          ? {
+              label: "New electrical check",
+              title: "New electrical check",
+              onSubmit: () => void save(),
+              children: (
+                <>
+                  <div className="flex flex-wrap gap-3">
+                    <Segmented<ElectricalTarget>
+                      label="What was checked"
+                      value={target}
+                      onChange={(value) => {
+                        setTarget(value);
+                        setErrors({});
+                      }}
+                      options={ELECTRICAL_TARGETS.map((value) => ({ value, label: ELECTRICAL_TARGET_LABELS[value] }))}
+                    />
+                    {target !== "supply" && circuits.length > 1 && (
+                      <Segmented<string>
+                        label="Circuit"
+                        value={circuit}
+                        onChange={setCircuit}
+                        options={circuits.map((number) => ({ value: String(number), label: `Circuit ${number}` }))}
+                      />
+                    )}
                   </div>
-                  {errors.windingOhms && <p className="text-sm font-medium text-fault">⚠ {errors.windingOhms}</p>}
-                </fieldset>
-              )}
-              <fieldset className="space-y-2">
-                <legend className="font-semibold">Running current</legend>
-                <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-                  {amps.slice(0, phaseCount).map((value, index) => (
-                    <NumberField key={index} label={threePhase ? `L${index + 1}` : "Measured"} unit="A" value={value} onValueChange={(text) => setAt(setAmps, index, text)} error={errors[`runningAmps.${index}`]} />
-                  ))}
-                  <NumberField
-                    label={target === "fan" ? "Nameplate FLA" : "Nameplate RLA"}
-                    unit="A"
-                    value={ratedA}
-                    onValueChange={setRatedA}
-                    error={errors.ratedA}
-                    hint={ratedDefault ? `${ratedDefault} A on the unit if left blank` : undefined}
-                  />
-                </div>
-              </fieldset>
-            </>
-          )}
+                  {errors.target && <p className="text-sm font-medium text-fault">⚠ {errors.target}</p>}
 
-          <TextField label="Note" value={note} onChange={(event) => setNote(event.target.value)} error={errorFor(errors, "note")} placeholder="e.g. contactor pitted, replaced" />
-          {formError && <FormAlert>{formError}</FormAlert>}
-          <div className="flex flex-wrap items-center gap-3">
-            <Button type="submit" size="lg" disabled={create.isPending}>
-              <Save aria-hidden className="size-5" /> {create.isPending ? "Saving…" : "Save electrical check"}
-            </Button>
-            {saved && (
-              <span role="status" className="text-sm text-muted">
-                ✓ Saved and judged — see the check above
-              </span>
-            )}
-          </div>
-        </form>
-      ) : (
-        <p className="text-muted">You can read this visit; recording is for technicians, seniors and owners.</p>
-      )}
-    </div>
+                  <fieldset className="space-y-2">
+                    <legend className="font-semibold">
+                      Supply voltage {threePhase ? "(line to line, running)" : "(running)"}
+                    </legend>
+                    <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+                      {volts.slice(0, phaseCount).map((value, index) => (
+                        <NumberField
+                          key={index}
+                          label={threePhase ? PHASE_PAIRS[index]! : "Measured"}
+                          unit="V"
+                          value={value}
+                          onValueChange={(text) => setAt(setVolts, index, text)}
+                          error={errors[`supplyVolts.${index}`]}
+                        />
+                      ))}
+                      <NumberField
+                        label="Nameplate"
+                        unit="V"
+                        value={nameplateV}
+                        onValueChange={setNameplateV}
+                        error={errors.nameplateV}
+                        hint={defaults?.nameplateV ? `${defaults.nameplateV} V on the unit if left blank` : undefined}
+                      />
+                    </div>
+                    {(errors.supplyVolts || errors._) && (
+                      <p className="text-sm font-medium text-fault">⚠ {errors.supplyVolts ?? errors._}</p>
+                    )}
+                  </fieldset>
+
+                  <fieldset className="space-y-2">
+                    <legend className="font-semibold">Insulation resistance to earth</legend>
+                    <p className="text-sm text-muted">
+                      Never on a compressor under vacuum. Enter the tester voltage you used.
+                    </p>
+                    {insulation.map((row, index) => (
+                      <div key={index} className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[1fr_10rem_10rem_auto]">
+                        <TextField
+                          label="Point tested"
+                          placeholder={target === "supply" ? "e.g. L1 to earth" : "e.g. C to earth"}
+                          value={row.point}
+                          onChange={(event) =>
+                            setInsulation((rows) =>
+                              rows.map((old, at) => (at === index ? { ...old, point: event.target.value } : old)),
+                            )
+                          }
+                          className="col-span-2 sm:col-span-1"
+                        />
+                        <NumberField
+                          label="Reading"
+                          unit="MΩ"
+                          value={row.megohms}
+                          onValueChange={(text) =>
+                            setInsulation((rows) =>
+                              rows.map((old, at) => (at === index ? { ...old, megohms: text } : old)),
+                            )
+                          }
+                          error={errors[`insulation.${index}.megohms`]}
+                        />
+                        <NumberField
+                          label="Test voltage"
+                          unit="V d.c."
+                          value={row.testVoltageV}
+                          onValueChange={(text) =>
+                            setInsulation((rows) =>
+                              rows.map((old, at) => (at === index ? { ...old, testVoltageV: text } : old)),
+                            )
+                          }
+                          error={errors[`insulation.${index}.testVoltageV`]}
+                        />
+                        {insulation.length > 1 && (
+                          <Button
+                            variant="quiet"
+                            aria-label={`Remove insulation reading ${index + 1}`}
+                            onClick={() => setInsulation((rows) => rows.filter((_row, at) => at !== index))}
+                          >
+                            <Trash2 aria-hidden className="size-5" />
+                          </Button>
+                        )}
+                      </div>
+                    ))}
+                    {insulation.length < 6 && (
+                      <Button variant="secondary" onClick={() => setInsulation((rows) => [...rows, emptyInsulation()])}>
+                        <Plus aria-hidden className="size-5" /> Another insulation reading
+                      </Button>
+                    )}
+                  </fieldset>
+
+                  {target !== "supply" && (
+                    <>
+                      {threePhase && (
+                        <fieldset className="space-y-2">
+                          <legend className="font-semibold">Winding resistance (lead to lead)</legend>
+                          <div className="grid grid-cols-3 gap-3">
+                            {ohms.map((value, index) => (
+                              <NumberField
+                                key={index}
+                                label={WINDING_PAIRS[index]!}
+                                unit="Ω"
+                                value={value}
+                                onValueChange={(text) => setAt(setOhms, index, text)}
+                                error={errors[`windingOhms.${index}`]}
+                              />
+                            ))}
+                          </div>
+                          {errors.windingOhms && (
+                            <p className="text-sm font-medium text-fault">⚠ {errors.windingOhms}</p>
+                          )}
+                        </fieldset>
+                      )}
+                      <fieldset className="space-y-2">
+                        <legend className="font-semibold">Running current</legend>
+                        <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+                          {amps.slice(0, phaseCount).map((value, index) => (
+                            <NumberField
+                              key={index}
+                              label={threePhase ? `L${index + 1}` : "Measured"}
+                              unit="A"
+                              value={value}
+                              onValueChange={(text) => setAt(setAmps, index, text)}
+                              error={errors[`runningAmps.${index}`]}
+                            />
+                          ))}
+                          <NumberField
+                            label={target === "fan" ? "Nameplate FLA" : "Nameplate RLA"}
+                            unit="A"
+                            value={ratedA}
+                            onValueChange={setRatedA}
+                            error={errors.ratedA}
+                            hint={ratedDefault ? `${ratedDefault} A on the unit if left blank` : undefined}
+                          />
+                        </div>
+                      </fieldset>
+                    </>
+                  )}
+
+                  <TextField
+                    label="Note"
+                    value={note}
+                    onChange={(event) => setNote(event.target.value)}
+                    error={errorFor(errors, "note")}
+                    placeholder="e.g. contactor pitted, replaced"
+                  />
+                  {formError && <FormAlert>{formError}</FormAlert>}
+                  <div className="flex flex-wrap items-center gap-3">
+                    <Button type="submit" size="lg" disabled={create.isPending}>
+                      <Save aria-hidden className="size-5" /> {create.isPending ? "Saving…" : "Save electrical check"}
+                    </Button>
+                    {saved && (
+                      <span role="status" className="text-sm text-muted">
+                        ✓ Saved and judged — see the check above
+                      </span>
+                    )}
+                  </div>
+                </>
+              ),
+            }
+          : null
+      }
+    />
   );
 }

@@ -19,6 +19,7 @@ import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateLeakSearch, useLeakSearches } from "@/lib/api/procedures.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { LeakSearchView } from "./leak-search-view.tsx";
+import { ProcedureLayout } from "./procedure-layout.tsx";
 
 type LeakRow = { location: string; severity: LeakSeverity; repair: string; repaired: boolean };
 const emptyLeak = (): LeakRow => ({ location: "", severity: "small", repair: "", repaired: false });
@@ -35,7 +36,8 @@ export function LeakSearchPanel({ visitId, canWrite }: { visitId: string; canWri
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
 
-  const updateLeak = (index: number, change: Partial<LeakRow>) => setLeaks((rows) => rows.map((row, at) => (at === index ? { ...row, ...change } : row)));
+  const updateLeak = (index: number, change: Partial<LeakRow>) =>
+    setLeaks((rows) => rows.map((row, at) => (at === index ? { ...row, ...change } : row)));
 
   const save = async () => {
     setFormError(null);
@@ -46,7 +48,12 @@ export function LeakSearchPanel({ visitId, canWrite }: { visitId: string; canWri
         .split(/[\n;]/)
         .map((place) => place.trim())
         .filter(Boolean),
-      leaks: leaks.map((leak) => ({ location: leak.location, severity: leak.severity, repair: leak.repair.trim() || undefined, repaired: leak.repaired })),
+      leaks: leaks.map((leak) => ({
+        location: leak.location,
+        severity: leak.severity,
+        repair: leak.repair.trim() || undefined,
+        repaired: leak.repaired,
+      })),
       recheck,
       note: note.trim() || undefined,
     };
@@ -70,104 +77,136 @@ export function LeakSearchPanel({ visitId, canWrite }: { visitId: string; canWri
   };
 
   return (
-    <div className="space-y-4">
-      {searches.data && searches.data.leakSearches.length > 0 && (
-        <section aria-labelledby="leak-saved-heading" className="space-y-2">
-          <h2 id="leak-saved-heading" className="text-lg font-semibold">
-            Leak searches on this visit
-          </h2>
-          {searches.data.leakSearches.map((search) => (
-            <LeakSearchView key={search.id} search={search} />
-          ))}
-        </section>
-      )}
-      {searches.isError && <FormAlert>The leak searches could not be loaded: {searches.error.message}</FormAlert>}
-
-      {canWrite ? (
-        <form
-          aria-label="New leak search"
-          noValidate
-          className="space-y-4 rounded-card border-2 border-rule bg-surface p-4"
-          onSubmit={(event) => {
-            event.preventDefault();
-            void save();
-          }}
-        >
-          <h2 className="text-lg font-semibold">New leak search</h2>
-          <SelectField label="Method" value={method} onChange={(event) => setMethod(event.target.value as LeakMethod)} error={errors.method}>
-            {LEAK_METHODS.map((value) => (
-              <option key={value} value={value}>
-                {LEAK_METHOD_LABELS[value]}
-              </option>
-            ))}
-          </SelectField>
-          <div className="space-y-1">
-            <label htmlFor="leak-places" className="block font-medium">
-              Places checked
-            </label>
-            <textarea
-              id="leak-places"
-              rows={3}
-              value={places}
-              onChange={(event) => setPlaces(event.target.value)}
-              aria-invalid={errors.placesChecked ? true : undefined}
-              aria-describedby="leak-places-hint"
-              placeholder={"Service valves and caps\nEvaporator U-bends\nFilter drier flare nuts"}
-              className="block w-full rounded-card border-2 border-rule bg-surface px-3 py-2 text-base aria-[invalid=true]:border-fault"
-            />
-            <p id="leak-places-hint" className="text-sm text-muted">
-              One place per line.
-            </p>
-            {errors.placesChecked && <p className="text-sm font-medium text-fault">⚠ {errors.placesChecked}</p>}
-          </div>
-
-          <fieldset className="space-y-3">
-            <legend className="font-semibold">Leaks found</legend>
-            {leaks.length === 0 && <p className="text-sm text-muted">None recorded. Add each leak you find.</p>}
-            {leaks.map((leak, index) => (
-              <div key={index} className="space-y-2 rounded-card border-2 border-rule p-3">
-                <div className="grid gap-3 sm:grid-cols-[1fr_14rem]">
-                  <TextField label={`Leak ${index + 1}: where`} value={leak.location} onChange={(event) => updateLeak(index, { location: event.target.value })} error={errors[`leaks.${index}.location`]} placeholder="e.g. Schrader core, suction service valve" />
-                  <SelectField label="Severity" value={leak.severity} onChange={(event) => updateLeak(index, { severity: event.target.value as LeakSeverity })}>
-                    {LEAK_SEVERITIES.map((value) => (
+    <ProcedureLayout
+      saved={{
+        headingId: "leak-saved-heading",
+        title: "Leak searches on this visit",
+        records: (searches.data?.leakSearches ?? []).map((search) => (
+          <LeakSearchView key={search.id} search={search} />
+        )),
+      }}
+      loadError={searches.isError ? `The leak searches could not be loaded: ${searches.error.message}` : undefined}
+      form={
+        canWrite
+          ? {
+              label: "New leak search",
+              title: "New leak search",
+              onSubmit: () => void save(),
+              children: (
+                <>
+                  <SelectField
+                    label="Method"
+                    value={method}
+                    onChange={(event) => setMethod(event.target.value as LeakMethod)}
+                    error={errors.method}
+                  >
+                    {LEAK_METHODS.map((value) => (
                       <option key={value} value={value}>
-                        {LEAK_SEVERITY_LABELS[value]}
+                        {LEAK_METHOD_LABELS[value]}
                       </option>
                     ))}
                   </SelectField>
-                </div>
-                <TextField label="Repair done" value={leak.repair} onChange={(event) => updateLeak(index, { repair: event.target.value })} placeholder="e.g. core replaced, cap fitted" />
-                <div className="flex flex-wrap items-center gap-3">
-                  <label className="inline-flex min-h-touch items-center gap-2 font-medium">
-                    <input type="checkbox" className="size-6" checked={leak.repaired} onChange={(event) => updateLeak(index, { repaired: event.target.checked })} /> Repaired
-                  </label>
-                  <Button variant="quiet" onClick={() => setLeaks((rows) => rows.filter((_row, at) => at !== index))}>
-                    <Trash2 aria-hidden className="size-5" /> Remove leak {index + 1}
-                  </Button>
-                </div>
-              </div>
-            ))}
-            <Button variant="secondary" onClick={() => setLeaks((rows) => [...rows, emptyLeak()])}>
-              <Plus aria-hidden className="size-5" /> Add a leak found
-            </Button>
-          </fieldset>
+                  <div className="space-y-1">
+                    <label htmlFor="leak-places" className="block font-medium">
+                      Places checked
+                    </label>
+                    <textarea
+                      id="leak-places"
+                      rows={3}
+                      value={places}
+                      onChange={(event) => setPlaces(event.target.value)}
+                      aria-invalid={errors.placesChecked ? true : undefined}
+                      aria-describedby="leak-places-hint"
+                      placeholder={"Service valves and caps\nEvaporator U-bends\nFilter drier flare nuts"}
+                      className="block w-full rounded-card border-2 border-rule bg-surface px-3 py-2 text-base aria-[invalid=true]:border-fault"
+                    />
+                    <p id="leak-places-hint" className="text-sm text-muted">
+                      One place per line.
+                    </p>
+                    {errors.placesChecked && <p className="text-sm font-medium text-fault">⚠ {errors.placesChecked}</p>}
+                  </div>
 
-          <div className="space-y-1">
-            <p className="font-medium">
-              Recheck after repair
-            </p>
-            <Segmented<RecheckResult> label="Recheck after repair" value={recheck} onChange={setRecheck} options={RECHECK_RESULTS.map((value) => ({ value, label: RECHECK_LABELS[value] }))} className="flex-wrap" />
-            {errors.recheck && <p className="text-sm font-medium text-fault">⚠ {errors.recheck}</p>}
-          </div>
-          <TextField label="Note" value={note} onChange={(event) => setNote(event.target.value)} error={errors.note} />
-          {formError && <FormAlert>{formError}</FormAlert>}
-          <Button type="submit" size="lg" disabled={create.isPending}>
-            <Save aria-hidden className="size-5" /> {create.isPending ? "Saving…" : "Save leak search"}
-          </Button>
-        </form>
-      ) : (
-        <p className="text-muted">You can read this visit; recording is for technicians, seniors and owners.</p>
-      )}
-    </div>
+                  <fieldset className="space-y-3">
+                    <legend className="font-semibold">Leaks found</legend>
+                    {leaks.length === 0 && <p className="text-sm text-muted">None recorded. Add each leak you find.</p>}
+                    {leaks.map((leak, index) => (
+                      <div key={index} className="space-y-2 rounded-card border-2 border-rule p-3">
+                        <div className="grid gap-3 sm:grid-cols-[1fr_14rem]">
+                          <TextField
+                            label={`Leak ${index + 1}: where`}
+                            value={leak.location}
+                            onChange={(event) => updateLeak(index, { location: event.target.value })}
+                            error={errors[`leaks.${index}.location`]}
+                            placeholder="e.g. Schrader core, suction service valve"
+                          />
+                          <SelectField
+                            label="Severity"
+                            value={leak.severity}
+                            onChange={(event) => updateLeak(index, { severity: event.target.value as LeakSeverity })}
+                          >
+                            {LEAK_SEVERITIES.map((value) => (
+                              <option key={value} value={value}>
+                                {LEAK_SEVERITY_LABELS[value]}
+                              </option>
+                            ))}
+                          </SelectField>
+                        </div>
+                        <TextField
+                          label="Repair done"
+                          value={leak.repair}
+                          onChange={(event) => updateLeak(index, { repair: event.target.value })}
+                          placeholder="e.g. core replaced, cap fitted"
+                        />
+                        <div className="flex flex-wrap items-center gap-3">
+                          <label className="inline-flex min-h-touch items-center gap-2 font-medium">
+                            <input
+                              type="checkbox"
+                              className="size-6"
+                              checked={leak.repaired}
+                              onChange={(event) => updateLeak(index, { repaired: event.target.checked })}
+                            />{" "}
+                            Repaired
+                          </label>
+                          <Button
+                            variant="quiet"
+                            onClick={() => setLeaks((rows) => rows.filter((_row, at) => at !== index))}
+                          >
+                            <Trash2 aria-hidden className="size-5" /> Remove leak {index + 1}
+                          </Button>
+                        </div>
+                      </div>
+                    ))}
+                    <Button variant="secondary" onClick={() => setLeaks((rows) => [...rows, emptyLeak()])}>
+                      <Plus aria-hidden className="size-5" /> Add a leak found
+                    </Button>
+                  </fieldset>
+
+                  <div className="space-y-1">
+                    <p className="font-medium">Recheck after repair</p>
+                    <Segmented<RecheckResult>
+                      label="Recheck after repair"
+                      value={recheck}
+                      onChange={setRecheck}
+                      options={RECHECK_RESULTS.map((value) => ({ value, label: RECHECK_LABELS[value] }))}
+                      className="flex-wrap"
+                    />
+                    {errors.recheck && <p className="text-sm font-medium text-fault">⚠ {errors.recheck}</p>}
+                  </div>
+                  <TextField
+                    label="Note"
+                    value={note}
+                    onChange={(event) => setNote(event.target.value)}
+                    error={errors.note}
+                  />
+                  {formError && <FormAlert>{formError}</FormAlert>}
+                  <Button type="submit" size="lg" disabled={create.isPending}>
+                    <Save aria-hidden className="size-5" /> {create.isPending ? "Saving…" : "Save leak search"}
+                  </Button>
+                </>
+              ),
+            }
+          : null
+      }
+    />
   );
 }

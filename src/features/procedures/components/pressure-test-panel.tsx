@@ -1,15 +1,29 @@
 import { Save } from "lucide-react";
 import { useState } from "react";
-import { PRESSURE_TEST_SECTION_LABELS, PRESSURE_TEST_SECTIONS, PressureTestBodySchema, type PressureTestSection } from "@shared/schemas/procedure-records.ts";
-import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
+import {
+  PRESSURE_TEST_SECTION_LABELS,
+  PRESSURE_TEST_SECTIONS,
+  PressureTestBodySchema,
+  type PressureTestSection,
+} from "@shared/schemas/procedure-records.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreatePressureTest, usePressureTests } from "@/lib/api/procedures.ts";
-import { formatNumber, GAUGE_LABEL, gaugeFromDisplay, gaugeToDisplay, PRESSURE_DECIMALS, TEMPERATURE_LABEL, temperatureFromDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
+import {
+  formatNumber,
+  GAUGE_LABEL,
+  gaugeFromDisplay,
+  gaugeToDisplay,
+  PRESSURE_DECIMALS,
+  TEMPERATURE_LABEL,
+  temperatureFromDisplay,
+  type DisplayUnits,
+} from "@/lib/units/display-units.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
+import { ProcedureLayout } from "./procedure-layout.tsx";
 import { PressureTestView } from "./pressure-test-view.tsx";
 
 interface PressureTestPanelProps {
@@ -38,7 +52,8 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite }: 
   const defaults = tests.data?.defaults;
   const pressureUnit = GAUGE_LABEL[units.pressure];
   const temperatureUnit = TEMPERATURE_LABEL[units.temperature];
-  const shown = (kPa: number) => formatNumber(gaugeToDisplay(kPa, units.pressure, atmosphericKPa), PRESSURE_DECIMALS[units.pressure]);
+  const shown = (kPa: number) =>
+    formatNumber(gaugeToDisplay(kPa, units.pressure, atmosphericKPa), PRESSURE_DECIMALS[units.pressure]);
 
   const [section, setSection] = useState<PressureTestSection>("whole-system");
   const [rated, setRated] = useState<string | null>(null);
@@ -59,8 +74,10 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite }: 
 
   const save = async () => {
     setFormError(null);
-    const pressure = (text: string) => toConverted(text, (value) => gaugeFromDisplay(value, units.pressure, atmosphericKPa));
-    const temperature = (text: string) => toConverted(text, (value) => temperatureFromDisplay(value, units.temperature));
+    const pressure = (text: string) =>
+      toConverted(text, (value) => gaugeFromDisplay(value, units.pressure, atmosphericKPa));
+    const temperature = (text: string) =>
+      toConverted(text, (value) => temperatureFromDisplay(value, units.temperature));
     const body = {
       section,
       ratedKPa: pressure(ratedText),
@@ -95,79 +112,120 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite }: 
   };
 
   return (
-    <div className="space-y-4">
-      <CautionPanel topic="nitrogen" />
-
-      {tests.data && tests.data.pressureTests.length > 0 && (
-        <section aria-labelledby="pressure-saved-heading" className="space-y-2">
-          <h2 id="pressure-saved-heading" className="text-lg font-semibold">
-            Tests on this visit
-          </h2>
-          {tests.data.pressureTests.map((test) => (
-            <PressureTestView key={test.id} test={test} units={units} atmosphericKPa={atmosphericKPa} />
-          ))}
-        </section>
-      )}
-      {tests.isError && <FormAlert>The pressure tests could not be loaded: {tests.error.message}</FormAlert>}
-
-      {canWrite ? (
-        <form
-          aria-label="New pressure test"
-          noValidate
-          className="space-y-4 rounded-card border-2 border-rule bg-surface p-4"
-          onSubmit={(event) => {
-            event.preventDefault();
-            void save();
-          }}
-        >
-          <h2 className="text-lg font-semibold">New nitrogen pressure test</h2>
-          <div className="grid gap-3 sm:grid-cols-2">
-            <SelectField
-              label="Part tested"
-              value={section}
-              onChange={(event) => {
-                setSection(event.target.value as PressureTestSection);
-                setRated(null);
-              }}
-            >
-              {PRESSURE_TEST_SECTIONS.map((value) => (
-                <option key={value} value={value}>
-                  {PRESSURE_TEST_SECTION_LABELS[value]}
-                </option>
-              ))}
-            </SelectField>
-            <NumberField
-              label="Rated pressure (lowest-rated component)"
-              unit={pressureUnit}
-              value={ratedText}
-              onValueChange={setRated}
-              error={errors.ratedKPa}
-              hint={ratedDefault !== null ? "From the nameplate: confirm it for the parts under test" : "Not on the nameplate record: enter it from the maker's data"}
-            />
-          </div>
-          <fieldset className="grid grid-cols-2 gap-3">
-            <legend className="col-span-2 font-semibold">Start of the hold</legend>
-            <NumberField label="Start pressure" unit={pressureUnit} value={start} onValueChange={setStart} error={errors.startGaugeKPa} />
-            <NumberField label="Start temperature" unit={temperatureUnit} value={startTemp} onValueChange={setStartTemp} error={errors.startTempC} hint="Ambient or pipe" />
-          </fieldset>
-          <fieldset className="grid grid-cols-2 gap-3">
-            <legend className="col-span-2 font-semibold">End of the hold</legend>
-            <NumberField label="End pressure" unit={pressureUnit} value={end} onValueChange={setEnd} error={errors.endGaugeKPa} />
-            <NumberField label="End temperature" unit={temperatureUnit} value={endTemp} onValueChange={setEndTemp} error={errors.endTempC} />
-          </fieldset>
-          <div className="grid grid-cols-2 gap-3">
-            <NumberField label="Hold time" unit="min" value={hold} onValueChange={setHold} error={errors.holdMinutes} />
-            <NumberField label="Allowed drop" unit={units.pressure} value={allowedText} onValueChange={setAllowed} error={errors.allowedDropKPa} hint="After temperature correction; your company's figure" />
-          </div>
-          <TextField label="Note" value={note} onChange={(event) => setNote(event.target.value)} error={errors.note} placeholder="e.g. compressor and LP switch isolated" />
-          {formError && <FormAlert>{formError}</FormAlert>}
-          <Button type="submit" size="lg" disabled={create.isPending}>
-            <Save aria-hidden className="size-5" /> {create.isPending ? "Saving…" : "Save pressure test"}
-          </Button>
-        </form>
-      ) : (
-        <p className="text-muted">You can read this visit; recording is for technicians, seniors and owners.</p>
-      )}
-    </div>
+    <ProcedureLayout
+      caution="nitrogen"
+      saved={{
+        headingId: "pressure-saved-heading",
+        title: "Tests on this visit",
+        records: (tests.data?.pressureTests ?? []).map((test) => (
+          <PressureTestView key={test.id} test={test} units={units} atmosphericKPa={atmosphericKPa} />
+        )),
+      }}
+      loadError={tests.isError ? `The pressure tests could not be loaded: ${tests.error.message}` : undefined}
+      form={
+        canWrite
+          ? {
+              label: "New pressure test",
+              title: "New nitrogen pressure test",
+              onSubmit: () => void save(),
+              children: (
+                <>
+                  <div className="grid gap-3 sm:grid-cols-2">
+                    <SelectField
+                      label="Part tested"
+                      value={section}
+                      onChange={(event) => {
+                        setSection(event.target.value as PressureTestSection);
+                        setRated(null);
+                      }}
+                    >
+                      {PRESSURE_TEST_SECTIONS.map((value) => (
+                        <option key={value} value={value}>
+                          {PRESSURE_TEST_SECTION_LABELS[value]}
+                        </option>
+                      ))}
+                    </SelectField>
+                    <NumberField
+                      label="Rated pressure (lowest-rated component)"
+                      unit={pressureUnit}
+                      value={ratedText}
+                      onValueChange={setRated}
+                      error={errors.ratedKPa}
+                      hint={
+                        ratedDefault !== null
+                          ? "From the nameplate: confirm it for the parts under test"
+                          : "Not on the nameplate record: enter it from the maker's data"
+                      }
+                    />
+                  </div>
+                  <fieldset className="grid grid-cols-2 gap-3">
+                    <legend className="col-span-2 font-semibold">Start of the hold</legend>
+                    <NumberField
+                      label="Start pressure"
+                      unit={pressureUnit}
+                      value={start}
+                      onValueChange={setStart}
+                      error={errors.startGaugeKPa}
+                    />
+                    <NumberField
+                      label="Start temperature"
+                      unit={temperatureUnit}
+                      value={startTemp}
+                      onValueChange={setStartTemp}
+                      error={errors.startTempC}
+                      hint="Ambient or pipe"
+                    />
+                  </fieldset>
+                  <fieldset className="grid grid-cols-2 gap-3">
+                    <legend className="col-span-2 font-semibold">End of the hold</legend>
+                    <NumberField
+                      label="End pressure"
+                      unit={pressureUnit}
+                      value={end}
+                      onValueChange={setEnd}
+                      error={errors.endGaugeKPa}
+                    />
+                    <NumberField
+                      label="End temperature"
+                      unit={temperatureUnit}
+                      value={endTemp}
+                      onValueChange={setEndTemp}
+                      error={errors.endTempC}
+                    />
+                  </fieldset>
+                  <div className="grid grid-cols-2 gap-3">
+                    <NumberField
+                      label="Hold time"
+                      unit="min"
+                      value={hold}
+                      onValueChange={setHold}
+                      error={errors.holdMinutes}
+                    />
+                    <NumberField
+                      label="Allowed drop"
+                      unit={units.pressure}
+                      value={allowedText}
+                      onValueChange={setAllowed}
+                      error={errors.allowedDropKPa}
+                      hint="After temperature correction; your company's figure"
+                    />
+                  </div>
+                  <TextField
+                    label="Note"
+                    value={note}
+                    onChange={(event) => setNote(event.target.value)}
+                    error={errors.note}
+                    placeholder="e.g. compressor and LP switch isolated"
+                  />
+                  {formError && <FormAlert>{formError}</FormAlert>}
+                  <Button type="submit" size="lg" disabled={create.isPending}>
+                    <Save aria-hidden className="size-5" /> {create.isPending ? "Saving…" : "Save pressure test"}
+                  </Button>
+                </>
+              ),
+            }
+          : null
+      }
+    />
   );
 }
