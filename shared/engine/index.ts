@@ -24,6 +24,7 @@ export { relativeDifference } from "./properties/relative-difference.ts";
 
 // Units for display (convert-units inside; SI-metric in the engine)
 export { gaugeToAbsolute } from "./units/gauge-to-absolute.ts";
+export { atmosphericPressureAtAltitude } from "./units/atmospheric-pressure-at-altitude.ts";
 export { absoluteToGauge } from "./units/absolute-to-gauge.ts";
 export { convertPressure, PRESSURE_UNITS } from "./units/convert-pressure.ts";
 export type { PressureUnit } from "./units/convert-pressure.ts";
