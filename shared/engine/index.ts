@@ -36,7 +36,7 @@ export type { PressureScale } from "./units/pressure-to-display.ts";
 export { pressureFromDisplay } from "./units/pressure-from-display.ts";
 
 // Charge diagnosis (superheat, subcooling, targets, findings)
-export { diagnose, MIN_VERDICT_SCORE } from "./diagnosis/diagnose.ts";
+export { diagnose, MIN_VERDICT_SCORE, MIN_VERDICT_SCORE_WITHOUT_CHARGE_SIGNAL } from "./diagnosis/diagnose.ts";
 export { assessTrend, SETTLED_WINDOW_MINUTES, SETTLED_MAX_CHANGE_K } from "./diagnosis/assess-trend.ts";
 export { DiagnosisInputError } from "./diagnosis/diagnosis-input-error.ts";
 export type { FieldErrors } from "./diagnosis/diagnosis-input-error.ts";
@@ -47,6 +47,14 @@ export type { FixedOrificeTarget } from "./diagnosis/fixed-orifice-target-superh
 export { selectSuperheatTarget } from "./diagnosis/select-superheat-target.ts";
 export { selectSubcoolingTarget } from "./diagnosis/select-subcooling-target.ts";
 export { wetBulbFromRelativeHumidity } from "./diagnosis/psychrometrics/wet-bulb-from-relative-humidity.ts";
+export { targetTemperatureSplit } from "./diagnosis/psychrometrics/target-temperature-split.ts";
+export { suctionLineAllowance } from "./diagnosis/suction-line-allowance.ts";
+export { dischargeLineLimits } from "./diagnosis/discharge-line-limits.ts";
+export { inferApplication } from "./diagnosis/infer-application.ts";
+export { SIGNATURES, SIGNATURE_FEATURES, EXPECTATIONS } from "./diagnosis/signature-table.ts";
+export type { Signature, SignatureCell, SignatureFeature, Expectation, MeteringFamily } from "./diagnosis/signature-table.ts";
+export { signatureMatch } from "./diagnosis/signature-match.ts";
+export { meteringFamilyOf } from "./diagnosis/metering-family-of.ts";
 export { DIAGNOSIS_RULES } from "./diagnosis/rules/registry.ts";
 export type { DiagnosisRule, DiagnosisSnapshot } from "./diagnosis/types.ts";
 export * as diagnosisLimits from "./diagnosis/diagnosis-limits.ts";

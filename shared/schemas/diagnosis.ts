@@ -26,12 +26,42 @@ export const LiquidTempLocationSchema = z.enum(LIQUID_TEMP_LOCATIONS, {
 });
 export type LiquidTempLocation = z.infer<typeof LiquidTempLocationSchema>;
 
+/**
+ * What the equipment does: the bands of the air-side and coil checks, the default superheat and
+ * the discharge limits depend on it (comfort cooling runs its coil about 19 K below the room, a
+ * cool room about 6 K). A heat pump is judged in cooling mode.
+ */
+export const APPLICATIONS = [
+  "comfort-cooling",
+  "heat-pump",
+  "medium-temperature-refrigeration",
+  "low-temperature-refrigeration",
+  "process-chilling",
+] as const;
+export const ApplicationSchema = z.enum(APPLICATIONS, {
+  error: "Choose the application: comfort cooling, heat pump, medium- or low-temperature refrigeration, or process chilling",
+});
+export type Application = z.infer<typeof ApplicationSchema>;
+
+/**
+ * Where the suction line temperature (and pressure) for superheat was taken: at the evaporator
+ * outlet (what a TXV controls) or at the outdoor unit / compressor suction service valve (what
+ * fixed-orifice charging charts use), which reads higher by the line set's heat gain and
+ * pressure drop.
+ */
+export const SUCTION_TEMP_LOCATIONS = ["evaporator-outlet", "outdoor-unit"] as const;
+export const SuctionTempLocationSchema = z.enum(SUCTION_TEMP_LOCATIONS, {
+  error: "Say where the suction temperature was taken: evaporator outlet or outdoor unit",
+});
+export type SuctionTempLocation = z.infer<typeof SuctionTempLocationSchema>;
+
 export const CHARGE_STATES = [
   "normal",
   "undercharged",
   "overcharged",
   "restricted-metering",
   "low-evaporator-airflow",
+  "overfeeding-metering",
   "condenser-airflow",
   "non-condensables",
   "weak-compressor",
@@ -62,6 +92,8 @@ export const MIN_AIR_TEMPERATURE_C = -50;
 export const MAX_AIR_TEMPERATURE_C = 70;
 /** Largest nameplate superheat or subcooling target accepted, K. */
 export const MAX_TARGET_K = 30;
+/** Longest liquid line (line set) accepted, m. */
+export const MAX_LINE_LENGTH_M = 300;
 /** Largest current accepted, A. */
 export const MAX_CURRENT_A = 2_000;
 /** Wet bulb may read this much above dry bulb before it is called impossible (sensor noise), K. */
@@ -146,6 +178,12 @@ export const DIAGNOSIS_FIELD_RANGES = {
     maxMessage: `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`,
   },
   runMinutes: { min: 0, max: Infinity, minMessage: "Run time cannot be negative", maxMessage: "" },
+  liquidLineLengthM: {
+    min: 0,
+    max: MAX_LINE_LENGTH_M,
+    minMessage: "Liquid line length cannot be negative",
+    maxMessage: `Liquid line length above ${MAX_LINE_LENGTH_M} m is not a line set`,
+  },
 } as const satisfies Record<string, FieldRange>;
 const RANGE_ENTRIES = Object.entries(DIAGNOSIS_FIELD_RANGES) as [keyof typeof DIAGNOSIS_FIELD_RANGES, FieldRange][];
 
@@ -160,6 +198,11 @@ const DiagnosisInputObjectSchema = z.object({
   suctionPressureKPa: number("Suction pressure", "kPa gauge"),
   /** Suction line temperature next to the suction port / evaporator outlet, °C. */
   suctionLineTempC: number("Suction line temperature", "°C"),
+  /**
+   * Where the suction temperature was taken. Unstated, each target is read at its own reference
+   * point (TXV/EEV at the evaporator outlet, fixed-device charts at the outdoor unit).
+   */
+  suctionTempLocation: SuctionTempLocationSchema.optional(),
   /** Liquid pressure at the liquid service port (condenser outlet), kPa gauge. */
   liquidPressureKPa: number("Liquid pressure", "kPa gauge"),
   /** Pipe temperature taken for subcooling, °C. */
@@ -170,10 +213,15 @@ const DiagnosisInputObjectSchema = z.object({
   dischargePressureKPa: number("Discharge pressure", "kPa gauge").optional(),
   /** Discharge line temperature within about 15 cm of the compressor, °C. */
   dischargeLineTempC: number("Discharge line temperature", "°C").optional(),
+  /**
+   * Air entering the evaporator, °C: return air for comfort cooling and heat pumps, the room or
+   * box air on the coil for refrigeration, the entering water or glycol for process chilling.
+   */
   returnAirDryBulbC: number("Return air dry bulb", "°C").optional(),
   returnAirWetBulbC: number("Return air wet bulb", "°C").optional(),
   /** Return air relative humidity, percent (0–100]; used for the wet bulb when none is measured. */
   returnAirRelativeHumidity: number("Return air relative humidity", "%").optional(),
+  /** Air (or fluid, for process chilling) leaving the evaporator, °C. */
   supplyAirDryBulbC: number("Supply air dry bulb", "°C").optional(),
   /** Outdoor air entering the condenser, in the shade, °C. */
   outdoorAirDryBulbC: number("Outdoor air dry bulb", "°C").optional(),
@@ -187,6 +235,13 @@ const DiagnosisInputObjectSchema = z.object({
   atmosphericPressureKPa: number("Atmospheric pressure", "kPa absolute").optional(),
   /** Minutes the compressor has run since start or the last adjustment. */
   runMinutes: number("Run time", "minutes").optional(),
+  /**
+   * What the equipment does (from the equipment record). Without it the engine infers it from
+   * the return air temperature and says so.
+   */
+  application: ApplicationSchema.optional(),
+  /** Length of the liquid line (the line set), m: sets the suction line allowance. */
+  liquidLineLengthM: number("Liquid line length", "m").optional(),
 });
 
 /**
@@ -260,6 +315,8 @@ export type DiagnosisInputDraft = z.input<typeof DiagnosisInputSchema>;
 // ---------------------------------------------------------------------------------------------
 
 export const TARGET_BASES = ["nameplate", "formula", "common-practice"] as const;
+/** Where the application the bands come from was found. */
+export const APPLICATION_BASES = ["equipment", "inferred-from-return-air", "default"] as const;
 
 /** A band a measured superheat or subcooling is judged against, K. */
 export const TargetBandSchema = z.object({
@@ -273,7 +330,8 @@ export const TargetBandSchema = z.object({
 });
 export type TargetBand = z.infer<typeof TargetBandSchema>;
 
-export const FINDING_DIRECTIONS = ["low", "normal", "high", "excluded", "not-judged"] as const;
+/** "summary": the verdict's signature in words (first line, no evidence of its own). */
+export const FINDING_DIRECTIONS = ["low", "normal", "high", "excluded", "not-judged", "summary"] as const;
 
 export const EvidenceSchema = z.object({
   state: ChargeStateSchema.exclude(["insufficient-data"]),
@@ -313,6 +371,13 @@ export const WARNING_CODES = [
   "no-current-rating",
   "compression-ratio-high",
   "supply-warmer-than-return",
+  "suction-inside-glide",
+  "suction-pressure-very-low",
+  "transcritical-gas-cooler",
+  "application-assumed",
+  "application-mismatch",
+  "low-discharge-superheat",
+  "judged-without-charge-signal",
 ] as const;
 export const WarningCodeSchema = z.enum(WARNING_CODES);
 export type WarningCode = z.infer<typeof WarningCodeSchema>;
@@ -339,9 +404,25 @@ export type RankedState = z.infer<typeof RankedStateSchema>;
 
 const nullableNumber = z.number().nullable();
 
+/** A reading left out of the verdict, with the reason in words. */
+export const LeftOutReadingSchema = z.object({ field: z.string(), reason: z.string() });
+export type LeftOutReading = z.infer<typeof LeftOutReadingSchema>;
+
 export const DiagnosisResultSchema = z.object({
   refrigerant: z.string(),
   meteringDevice: MeteringDeviceSchema,
+  /** The application whose bands were used, and where it came from. */
+  application: ApplicationSchema,
+  applicationBasis: z.enum(APPLICATION_BASES),
+  /** Atmospheric pressure used to turn gauge readings into absolute, kPa abs. */
+  atmosphericPressureKPa: z.number(),
+  /**
+   * Where superheat was measured (null: not stated, so each target is read at its own reference
+   * point: TXV/EEV bands at the evaporator outlet, fixed-device charts at the outdoor unit), and
+   * the line-set allowance that moved the superheat band for it, K (0 when none).
+   */
+  suctionTempLocation: SuctionTempLocationSchema.nullable(),
+  suctionLineAllowanceK: z.number(),
   /** Dew point at the suction pressure, °C. */
   evaporatingTempC: nullableNumber,
   /** Bubble point at the suction pressure, °C (equals the dew point for pure fluids). */
@@ -360,6 +441,10 @@ export const DiagnosisResultSchema = z.object({
   targets: z.object({
     superheat: TargetBandSchema.nullable(),
     subcooling: TargetBandSchema.nullable(),
+    /** Expected return − supply split: from the return dry and wet bulb, or the application's band. */
+    temperatureSplit: TargetBandSchema.nullable(),
+    /** Expected liquid line − outdoor air: condensing over ambient minus the subcooling target. */
+    condenserApproach: TargetBandSchema,
   }),
   /** Return air wet bulb used, °C, and where it came from. */
   returnAirWetBulbC: nullableNumber,
@@ -368,10 +453,14 @@ export const DiagnosisResultSchema = z.object({
   temperatureSplitK: nullableNumber,
   /** Liquid line temperature − outdoor air dry bulb, K. */
   condenserApproachK: nullableNumber,
-  /** Condensing (bubble) temperature − outdoor air dry bulb, K. */
+  /** Mean (mid-glide) condensing temperature − outdoor air dry bulb, K. */
   condensingOverAmbientK: nullableNumber,
-  /** Return air dry bulb − evaporating (dew) temperature, K. */
+  /** Return (room, entering fluid) temperature − mean (mid-glide) evaporating temperature, K. */
   evaporatorTemperatureDifferenceK: nullableNumber,
+  /** Discharge line temperature − dew point at the discharge (or liquid) pressure, K. */
+  dischargeSuperheatK: nullableNumber,
+  /** Discharge line temperatures for this refrigerant and application, °C. */
+  dischargeLineLimits: z.object({ elevatedC: z.number(), limitC: z.number(), source: z.string() }),
   /** Absolute discharge (or liquid, see basis) pressure ÷ absolute suction pressure. */
   compressionRatio: nullableNumber,
   compressionRatioBasis: z.enum(["discharge", "liquid"]).nullable(),
@@ -382,6 +471,8 @@ export const DiagnosisResultSchema = z.object({
   confidence: z.number().min(0).max(1),
   /** Other states with evidence, most likely first. */
   alternatives: z.array(RankedStateSchema),
+  /** Readings measured but left out of the verdict (impossible where taken, outside the table…). */
+  readingsLeftOut: z.array(LeftOutReadingSchema),
   findings: z.array(FindingSchema),
   warnings: z.array(DiagnosisWarningSchema),
 });

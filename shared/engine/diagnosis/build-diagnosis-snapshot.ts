@@ -1,17 +1,36 @@
-import { STANDARD_ATMOSPHERE_KPA, type DiagnosisInput } from "../../schemas/diagnosis.ts";
-import { gaugeToAbsolute } from "../units/gauge-to-absolute.ts";
+import { STANDARD_ATMOSPHERE_KPA, type DiagnosisInput, type TargetBand } from "../../schemas/diagnosis.ts";
+import { getRefrigerant } from "../properties/get-refrigerant.ts";
 import { PropertyRangeError } from "../properties/property-range-error.ts";
 import { saturationTemperature } from "../properties/saturation-temperature.ts";
-import { SENSOR_TOLERANCE_K } from "./diagnosis-limits.ts";
+import { gaugeToAbsolute } from "../units/gauge-to-absolute.ts";
+import {
+  APPLICATION_LIMITS,
+  CONDENSER_APPROACH_SOURCE,
+  CONDENSER_APPROACH_TOLERANCE_K,
+  SENSOR_TOLERANCE_K,
+  SPLIT_TARGET_MODEL,
+  SUBCOOLING_PIVOT_BELOW_TARGET_K,
+} from "./diagnosis-limits.ts";
+import { dischargeLineLimits } from "./discharge-line-limits.ts";
 import { formatTenths } from "./format-tenths.ts";
-import { tablePressureRange } from "./table-pressure-range.ts";
+import { inferApplication } from "./infer-application.ts";
+import { meteringFamilyOf } from "./metering-family-of.ts";
+import { targetTemperatureSplit } from "./psychrometrics/target-temperature-split.ts";
 import { wetBulbFromRelativeHumidity } from "./psychrometrics/wet-bulb-from-relative-humidity.ts";
 import { selectSubcoolingTarget } from "./select-subcooling-target.ts";
 import { selectSuperheatTarget } from "./select-superheat-target.ts";
+import { suctionLineAllowance } from "./suction-line-allowance.ts";
+import { tablePressureRange } from "./table-pressure-range.ts";
 import type { DiagnosisSnapshot, Exclusion } from "./types.ts";
+
+const SPLIT_SOURCE = SPLIT_TARGET_MODEL.source;
 
 function difference(first: number | null | undefined, second: number | null | undefined): number | null {
   return first === null || first === undefined || second === null || second === undefined ? null : first - second;
+}
+
+function mean(first: number | null, second: number | null): number | null {
+  return first === null || second === null ? null : (first + second) / 2;
 }
 
 /** Saturation temperature, or null with an `outsideTable` entry (once per field) when the
@@ -43,15 +62,44 @@ function saturationOrExclusion(refrigerant: string, field: string, pressureKPaAb
   }
 }
 
+/** Expected liquid line − outdoor air: condensing over ambient minus subcooling (TRADE.md §3 [S26]). */
+function approachTarget(condensing: { lowK: number; highK: number }, subcoolingTargetK: number): TargetBand {
+  const expected = (condensing.lowK + condensing.highK) / 2 - subcoolingTargetK;
+  return {
+    targetK: expected,
+    lowK: expected - CONDENSER_APPROACH_TOLERANCE_K,
+    highK: expected + CONDENSER_APPROACH_TOLERANCE_K,
+    basis: "formula",
+    source: CONDENSER_APPROACH_SOURCE,
+  };
+}
+
+/** The expected air (or fluid) split: psychrometric for comfort coils with a wet bulb, else the application's band. */
+function splitTarget(snapshotApplication: DiagnosisSnapshot["application"], returnDryBulbC: number | undefined, wetBulbC: number | null, atmosphereKPa: number): TargetBand | null {
+  const comfort = snapshotApplication === "comfort-cooling" || snapshotApplication === "heat-pump";
+  if (comfort && returnDryBulbC !== undefined && wetBulbC !== null) {
+    const target = targetTemperatureSplit(returnDryBulbC, wetBulbC, atmosphereKPa);
+    if (target !== null) {
+      const tolerance = SPLIT_TARGET_MODEL.toleranceK;
+      return { targetK: target, lowK: Math.max(0, target - tolerance), highK: target + tolerance, basis: "formula", source: SPLIT_SOURCE };
+    }
+  }
+  const band = APPLICATION_LIMITS[snapshotApplication].temperatureSplit;
+  return { targetK: (band.lowK + band.highK) / 2, lowK: band.lowK, highK: band.highK, basis: "common-practice", source: band.source };
+}
+
 /**
  * Computes every derived value of one circuit's validated readings, once, for the rules:
  * saturation temperatures through the property engine (dew point at suction, bubble point at
- * the liquid pressure; both points for glide), superheat and subcooling, the target bands, the
- * wet bulb (measured, or from relative humidity via psychrolib at the site's atmospheric
- * pressure), air and condenser differences, compression ratio and current ratio. It also
- * decides which values must not be used: a "liquid" temperature taken on the discharge line,
- * a line colder (suction, discharge) or warmer (liquid, beyond the dew point) than physics
- * allows, and pressures outside the refrigerant's table (TRADE.md §1.1–1.2).
+ * the liquid pressure; both points for glide and the mid-glide means the coil differences use),
+ * superheat and subcooling, the application (recorded, or inferred from the return air) and its
+ * bands, the target bands (superheat moved for where it was read), the wet bulb (measured, or
+ * from relative humidity via psychrolib at the site's atmospheric pressure), the air split
+ * target, air and condenser differences, discharge superheat, compression ratio and current
+ * ratio. It also decides which values must not be used: a "liquid" temperature taken on the
+ * discharge line, a line colder (suction, discharge) or warmer (liquid, beyond the dew point)
+ * than physics allows, a high side above the critical pressure (gas cooler), and pressures
+ * outside the refrigerant's table (TRADE.md §1.1–1.2).
  *
  * Units: kPa gauge and °C in; °C, K, kPa abs out.
  *
@@ -62,20 +110,28 @@ function saturationOrExclusion(refrigerant: string, field: string, pressureKPaAb
 export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot {
   const atmosphericPressureKPa = input.atmosphericPressureKPa ?? STANDARD_ATMOSPHERE_KPA;
   const refrigerant = input.refrigerant;
+  const info = getRefrigerant(refrigerant);
   const outsideTable: Exclusion[] = [];
+  const { application, basis: applicationBasis } = inferApplication(input.application, input.returnAirDryBulbC);
+  const limits = APPLICATION_LIMITS[application];
 
   const suctionPressureKPaAbs = gaugeToAbsolute(input.suctionPressureKPa, atmosphericPressureKPa);
   const liquidPressureKPaAbs = gaugeToAbsolute(input.liquidPressureKPa, atmosphericPressureKPa);
   const dischargePressureKPaAbs =
     input.dischargePressureKPa === undefined ? null : gaugeToAbsolute(input.dischargePressureKPa, atmosphericPressureKPa);
+  // Above the critical pressure there is no condensing at all (R744 gas coolers).
+  const criticalKPa = info.criticalPoint.pressureKPa;
+  const transcritical = liquidPressureKPaAbs > criticalKPa;
 
   // Superheat from the dew point, subcooling from the bubble point (TRADE.md §1.1 [S1][S2][S3]).
   const evaporatingTempC = saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "dew", outsideTable);
   const evaporatingBubbleTempC = saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "bubble", outsideTable);
-  const condensingTempC = saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "bubble", outsideTable);
-  const condensingDewTempC = saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "dew", outsideTable);
+  const condensingTempC = transcritical ? null : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "bubble", outsideTable);
+  const condensingDewTempC = transcritical ? null : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "dew", outsideTable);
   const dischargeDewTempC =
-    dischargePressureKPaAbs === null ? condensingDewTempC : saturationOrExclusion(refrigerant, "dischargePressureKPa", dischargePressureKPaAbs, "dew", outsideTable);
+    dischargePressureKPaAbs === null || dischargePressureKPaAbs > criticalKPa
+      ? condensingDewTempC
+      : saturationOrExclusion(refrigerant, "dischargePressureKPa", dischargePressureKPaAbs, "dew", outsideTable);
 
   // Superheat: suction line − dew point. A vapour line below the bubble point is impossible.
   let superheatK = difference(input.suctionLineTempC, evaporatingTempC);
@@ -93,17 +149,36 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
   const liquidSideDifferenceK = difference(condensingTempC, input.liquidLineTempC);
   let subcoolingK = liquidSideDifferenceK;
   let subcoolingExcluded: Exclusion | null = null;
-  if ((input.liquidTempLocation ?? "liquid-line") === "discharge-line") {
-    const detail =
-      liquidSideDifferenceK === null
-        ? ""
-        : ` (bubble point ${condensingTempC!.toFixed(1)} °C − line ${input.liquidLineTempC.toFixed(1)} °C = ${liquidSideDifferenceK.toFixed(1)} K is discharge superheat, not subcooling)`;
+  // A "liquid" temperature tagged as taken on the discharge line that is a plausible discharge
+  // reading still tells the discharge temperature: judge with it when none was entered.
+  let dischargeLineTempC = input.dischargeLineTempC;
+  const onDischargeLine = (input.liquidTempLocation ?? "liquid-line") === "discharge-line";
+  if (transcritical) {
     subcoolingExcluded = {
-      code: "subcooling-on-discharge-line",
-      field: "liquidTempLocation",
-      reason: `The temperature was taken on the discharge line, which carries superheated vapour${detail}: subcooling is not valid and is left out of the verdict; take it on the liquid line at the condenser outlet`,
+      code: "transcritical-gas-cooler",
+      field: "liquidPressureKPa",
+      reason: `${refrigerant} at ${formatTenths(liquidPressureKPaAbs)} kPa absolute is above its critical pressure ${formatTenths(criticalKPa)} kPa: the high side is a transcritical gas cooler, where nothing condenses, so subcooling does not apply; judge it by the gas cooler outlet temperature and the maker's high-side pressure`,
     };
     subcoolingK = null;
+  } else if (onDischargeLine) {
+    subcoolingK = null;
+    const dew = dischargeDewTempC;
+    if (dew !== null && input.liquidLineTempC < dew - SENSOR_TOLERANCE_K) {
+      const looksLike = condensingTempC === null ? "" : `; if it was taken on the liquid line, mark it so and the subcooling is ${formatTenths(condensingTempC - input.liquidLineTempC)} K`;
+      subcoolingExcluded = {
+        code: "subcooling-on-discharge-line",
+        field: "liquidTempLocation",
+        reason: `A discharge line carries superheated gas and cannot be ${formatTenths(dew - input.liquidLineTempC)} K colder than the dew point ${formatTenths(dew)} °C at its pressure: ${formatTenths(input.liquidLineTempC)} °C cannot have been read on the discharge line${looksLike}. Subcooling is not used`,
+      };
+    } else {
+      const detail = dew === null ? "" : ` (line ${formatTenths(input.liquidLineTempC)} °C − dew point ${formatTenths(dew)} °C = ${formatTenths(input.liquidLineTempC - dew)} K is discharge superheat, not subcooling)`;
+      subcoolingExcluded = {
+        code: "subcooling-on-discharge-line",
+        field: "liquidTempLocation",
+        reason: `The temperature was taken on the discharge line, which carries superheated vapour${detail}: subcooling is not valid and is left out of the verdict, which rests on the other readings; take it on the liquid line at the condenser outlet`,
+      };
+      dischargeLineTempC ??= input.liquidLineTempC;
+    }
   } else if (condensingDewTempC !== null && input.liquidLineTempC > condensingDewTempC + SENSOR_TOLERANCE_K) {
     subcoolingExcluded = {
       code: "liquid-above-saturation",
@@ -121,6 +196,7 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
       field: "dischargeLineTempC",
       reason: `Discharge line ${input.dischargeLineTempC.toFixed(1)} °C is below the dew point ${dischargeDewTempC.toFixed(1)} °C at discharge pressure, which is impossible for discharge gas: check the probe; the reading is not used`,
     };
+    dischargeLineTempC = undefined;
   }
 
   let returnAirWetBulbC: number | null = null;
@@ -133,14 +209,28 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
     wetBulbBasis = "from-relative-humidity";
   }
 
-  const superheatChoice = selectSuperheatTarget(input.meteringDevice, input.targetSuperheatK, returnAirWetBulbC, input.outdoorAirDryBulbC);
-  const fixed = input.meteringDevice === "fixed-orifice" || input.meteringDevice === "capillary";
-  const liquidOnLiquidLine = subcoolingExcluded?.code !== "subcooling-on-discharge-line";
+  const suctionTempLocation = input.suctionTempLocation ?? null;
+  const allowanceK = suctionTempLocation === null ? 0 : suctionLineAllowance(input.liquidLineLengthM);
+  const superheatChoice = selectSuperheatTarget(input.meteringDevice, input.targetSuperheatK, returnAirWetBulbC, input.outdoorAirDryBulbC, {
+    application,
+    ...(suctionTempLocation === null ? {} : { suctionTempLocation }),
+    allowanceK,
+  });
+  const subcoolingTarget = selectSubcoolingTarget(input.targetSubcoolingK, application);
+  const liquidOnLiquidLine = !onDischargeLine && !transcritical && subcoolingExcluded === null;
+  const evaporatingMeanTempC = mean(evaporatingTempC, evaporatingBubbleTempC);
+  const condensingMeanTempC = mean(condensingTempC, condensingDewTempC);
 
   return {
     input,
     meteringDevice: input.meteringDevice,
-    meteringFamily: fixed ? "fixed" : "expansion-valve",
+    meteringFamily: meteringFamilyOf(input.meteringDevice),
+    application,
+    applicationBasis,
+    limits,
+    dischargeLimits: dischargeLineLimits(refrigerant, application),
+    suctionTempLocation,
+    suctionLineAllowanceK: superheatChoice.shiftK,
     atmosphericPressureKPa,
     suctionPressureKPaAbs,
     liquidPressureKPaAbs,
@@ -150,8 +240,11 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
     condensingTempC,
     condensingDewTempC,
     dischargeDewTempC,
+    evaporatingMeanTempC,
+    condensingMeanTempC,
     glideK: difference(evaporatingTempC, evaporatingBubbleTempC),
     condenserGlideK: difference(condensingDewTempC, condensingTempC),
+    transcritical,
     superheatK,
     liquidSideDifferenceK,
     subcoolingK,
@@ -161,13 +254,18 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
     outsideTable,
     superheatTarget: superheatChoice.band,
     superheatTargetNote: superheatChoice.note,
-    subcoolingTarget: selectSubcoolingTarget(input.targetSubcoolingK),
+    subcoolingTarget,
+    subcoolingPivotK: subcoolingTarget.targetK - SUBCOOLING_PIVOT_BELOW_TARGET_K,
+    condenserApproachTarget: approachTarget(limits.condensingOverAmbient, subcoolingTarget.targetK),
+    temperatureSplitTarget: splitTarget(application, input.returnAirDryBulbC, returnAirWetBulbC, atmosphericPressureKPa),
     returnAirWetBulbC,
     wetBulbBasis,
     temperatureSplitK: difference(input.returnAirDryBulbC, input.supplyAirDryBulbC),
     condenserApproachK: liquidOnLiquidLine ? difference(input.liquidLineTempC, input.outdoorAirDryBulbC) : null,
-    condensingOverAmbientK: difference(condensingTempC, input.outdoorAirDryBulbC),
-    evaporatorTemperatureDifferenceK: difference(input.returnAirDryBulbC, evaporatingTempC),
+    condensingOverAmbientK: difference(condensingMeanTempC, input.outdoorAirDryBulbC),
+    evaporatorTemperatureDifferenceK: difference(input.returnAirDryBulbC, evaporatingMeanTempC),
+    dischargeSuperheatK: difference(dischargeLineTempC, dischargeDewTempC),
+    dischargeLineTempC: dischargeLineTempC ?? null,
     compressionRatio: (dischargePressureKPaAbs ?? liquidPressureKPaAbs) / suctionPressureKPaAbs,
     compressionRatioBasis: dischargePressureKPaAbs === null ? "liquid" : "discharge",
     compressorCurrentRatio:

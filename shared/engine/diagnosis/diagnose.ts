@@ -4,41 +4,75 @@ import {
   type DiagnosisInputDraft,
   type DiagnosisResult,
   type DiagnosisWarning,
+  type EvidenceState,
   type Finding,
+  type LeftOutReading,
+  type RankedState,
 } from "../../schemas/diagnosis.ts";
 import { PropertyRangeError } from "../properties/property-range-error.ts";
 import { buildDiagnosisSnapshot } from "./build-diagnosis-snapshot.ts";
 import { DiagnosisInputError } from "./diagnosis-input-error.ts";
+import { MIN_RUN_MINUTES, NO_CHARGE_SIGNAL_CONFIDENCE, UNSETTLED_CONFIDENCE_FLOOR } from "./diagnosis-limits.ts";
+import { evidenceWeight } from "./evidence-weight.ts";
 import { fastParseDiagnosisInput } from "./fast-parse-diagnosis-input.ts";
 import { rankChargeStates } from "./rank-charge-states.ts";
 import { DIAGNOSIS_RULES } from "./rules/registry.ts";
+import { COMMON_PRACTICE, cite } from "./sources.ts";
+import { summarizeVerdict } from "./summarize-verdict.ts";
+import type { DiagnosisSnapshot } from "./types.ts";
 
 /**
  * Smallest winning score for a verdict: below it the evidence is too thin and the result is
  * "insufficient-data" (score 0.5 ≈ confidence 0.39; about half of one full-strength reading).
  */
 export const MIN_VERDICT_SCORE = 0.5;
+/**
+ * Smallest winning score when the metering family's charge signal (superheat on a fixed device,
+ * subcooling on a TXV/EEV) could not be judged: the other readings must agree more strongly.
+ */
+export const MIN_VERDICT_SCORE_WITHOUT_CHARGE_SIGNAL = 1.5;
 
 /**
  * The rule that carries the charge signal per metering family: a fixed device is charged by
- * superheat [S10][S17], a TXV/EEV by subcooling [S9][S11][S14]. Without that reading judged
- * against a target there is no verdict (weigh in the charge instead).
+ * superheat [S10][S17], a TXV/EEV by subcooling [S9][S11][S14].
  */
 const PRIMARY_RULE = { fixed: "superheat-vs-target", "expansion-valve": "subcooling-vs-target" } as const;
+/** States that say the charge is right or wrong: a fixed device without its superheat target can name none of them (weigh in [S10]). */
+const CHARGE_VERDICTS: ReadonlySet<EvidenceState> = new Set(["normal", "undercharged", "overcharged"]);
+const JUDGED = new Set<Finding["direction"]>(["low", "normal", "high"]);
+const NO_SIGNAL_SOURCE = `${cite(["S9", "S10", "S11"])}; judging from the remaining readings (${COMMON_PRACTICE})`;
+
+/** Confidence multiplier for the run time: readings drift for 10–15 min after a start [S10][S20]. */
+function settlingFactor(runMinutes: number | undefined): number {
+  if (runMinutes === undefined || runMinutes >= MIN_RUN_MINUTES) return 1;
+  return UNSETTLED_CONFIDENCE_FLOOR + (1 - UNSETTLED_CONFIDENCE_FLOOR) * Math.max(0, runMinutes) / MIN_RUN_MINUTES;
+}
+
+function readingsLeftOut(snapshot: DiagnosisSnapshot): LeftOutReading[] {
+  const left: LeftOutReading[] = [];
+  for (const exclusion of [snapshot.superheatExcluded, snapshot.subcoolingExcluded, snapshot.dischargeLineExcluded]) {
+    if (exclusion) left.push({ field: exclusion.field, reason: exclusion.reason });
+  }
+  for (const exclusion of snapshot.outsideTable) left.push({ field: exclusion.field, reason: exclusion.reason });
+  return left;
+}
 
 /**
  * Charge diagnosis of one running circuit: saturation temperatures (dew point at suction,
  * bubble point at the liquid pressure), superheat, subcooling, glide, their targets, the air
- * and condenser values, and the charge state with its evidence and warnings.
+ * and condenser values, and the state of the circuit with its evidence and warnings.
  *
  * How: the readings are validated (`DiagnosisInputSchema`, after `fastParseDiagnosisInput`
  * has accepted the valid ones faster), every derived value is computed once into a snapshot
- * through the property engine, each rule of `DIAGNOSIS_RULES` turns the
- * snapshot into findings (each pointing to states with a weight) and warnings, and
- * `rankChargeStates` sums the evidence. The top state wins if its score reaches
- * `MIN_VERDICT_SCORE` and the metering device's charge signal (superheat for fixed devices,
- * subcooling for TXV/EEV) was judged against a target; otherwise the verdict is
- * "insufficient-data". Symptom patterns: TRADE.md §2 [S21][S22][S23][S24].
+ * through the property engine, each rule of `DIAGNOSIS_RULES` judges one reading against its
+ * band (the equipment's application sets the bands) and the signature table
+ * (signature-table.ts, docs/diagnosis-signatures.md) turns it into evidence for every state;
+ * `rankChargeStates` sums the evidence. The verdict is the best-supported state, except that:
+ * a danger warning (liquid floodback, a suction below the table, a discharge line past its
+ * limit) never ends as "normal"; a fixed device without its superheat target names no charge
+ * state (weigh in [S10]); without the family's charge signal the other readings must agree
+ * more strongly and the confidence is lowered; a short run time lowers the confidence. Below the
+ * threshold the verdict is "insufficient-data". Symptom patterns: TRADE.md §2 [S21]–[S24].
  *
  * Units: kPa gauge, °C in; °C, K, ratios out (see `DiagnosisResultSchema`).
  *
@@ -70,25 +104,65 @@ export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
   // Indexed loops and no callback: this runs for every rule on every call (performance).
   const primaryRule = PRIMARY_RULE[snapshot.meteringFamily];
   let judged = false;
+  let danger = false;
   for (let ruleIndex = 0; ruleIndex < DIAGNOSIS_RULES.length; ruleIndex += 1) {
     const output = DIAGNOSIS_RULES[ruleIndex]!.evaluate(snapshot);
     const ruleFindings = output.findings;
     for (let index = 0; index < ruleFindings.length; index += 1) {
       const finding = ruleFindings[index]!;
       findings.push(finding);
-      if (finding.ruleId === primaryRule && (finding.direction === "low" || finding.direction === "normal" || finding.direction === "high")) judged = true;
+      if (finding.ruleId === primaryRule && JUDGED.has(finding.direction)) judged = true;
     }
     const ruleWarnings = output.warnings;
-    for (let index = 0; index < ruleWarnings.length; index += 1) warnings.push(ruleWarnings[index]!);
+    for (let index = 0; index < ruleWarnings.length; index += 1) {
+      warnings.push(ruleWarnings[index]!);
+      if (ruleWarnings[index]!.severity === "danger") danger = true;
+    }
   }
 
-  const ranked = rankChargeStates(findings);
-  const top = ranked[0];
-  const verdict = judged && top !== undefined && top.score >= MIN_VERDICT_SCORE ? top : null;
+  const quality = settlingFactor(data.runMinutes) * (judged ? 1 : NO_CHARGE_SIGNAL_CONFIDENCE);
+  const ranked: RankedState[] = [];
+  for (const entry of rankChargeStates(findings)) {
+    // A danger never ends as "normal"; it is not offered as an alternative either.
+    if (danger && entry.state === "normal") continue;
+    ranked.push(quality === 1 ? entry : { ...entry, confidence: entry.confidence * quality });
+  }
+  const chargeVerdictAllowed = judged || snapshot.meteringFamily === "expansion-valve";
+  const minimum = judged ? MIN_VERDICT_SCORE : MIN_VERDICT_SCORE_WITHOUT_CHARGE_SIGNAL;
+  let verdict: RankedState | null = null;
+  for (const entry of ranked) {
+    if (!chargeVerdictAllowed && CHARGE_VERDICTS.has(entry.state)) continue;
+    if (entry.score >= minimum) verdict = entry;
+    break;
+  }
+
+  if (verdict) {
+    if (!judged) {
+      const missing = snapshot.meteringFamily === "fixed" ? "superheat" : "subcooling";
+      const why = snapshot.meteringFamily === "fixed" ? snapshot.superheatExcluded?.reason ?? snapshot.superheatTargetNote : snapshot.subcoolingExcluded?.reason;
+      warnings.push({
+        code: "judged-without-charge-signal",
+        severity: "caution",
+        field: missing === "superheat" ? "suctionLineTempC" : "liquidLineTempC",
+        message: `Judged without ${missing}, which carries the charge signal of this metering device${why ? ` (${why.charAt(0).toLowerCase()}${why.slice(1)})` : ""}: the verdict rests on the other readings and its confidence is lowered`,
+        source: NO_SIGNAL_SOURCE,
+      });
+    }
+    // The headline's signature first, then the evidence that supports it most.
+    const state = verdict.state;
+    const weights = new Map(findings.map((finding) => [finding, evidenceWeight(finding, state)]));
+    findings.sort((first, second) => weights.get(second)! - weights.get(first)!);
+    findings.unshift(summarizeVerdict(state, findings));
+  }
 
   return {
     refrigerant: data.refrigerant,
     meteringDevice: data.meteringDevice,
+    application: snapshot.application,
+    applicationBasis: snapshot.applicationBasis,
+    atmosphericPressureKPa: snapshot.atmosphericPressureKPa,
+    suctionTempLocation: snapshot.suctionTempLocation,
+    suctionLineAllowanceK: snapshot.suctionLineAllowanceK,
     evaporatingTempC: snapshot.evaporatingTempC,
     evaporatingBubbleTempC: snapshot.evaporatingBubbleTempC,
     condensingTempC: snapshot.condensingTempC,
@@ -97,19 +171,27 @@ export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
     condenserGlideK: snapshot.condenserGlideK,
     superheatK: snapshot.superheatK,
     subcoolingK: snapshot.subcoolingK,
-    targets: { superheat: snapshot.superheatTarget, subcooling: snapshot.subcoolingTarget },
+    targets: {
+      superheat: snapshot.superheatTarget,
+      subcooling: snapshot.subcoolingTarget,
+      temperatureSplit: snapshot.temperatureSplitTarget,
+      condenserApproach: snapshot.condenserApproachTarget,
+    },
     returnAirWetBulbC: snapshot.returnAirWetBulbC,
     wetBulbBasis: snapshot.wetBulbBasis,
     temperatureSplitK: snapshot.temperatureSplitK,
     condenserApproachK: snapshot.condenserApproachK,
     condensingOverAmbientK: snapshot.condensingOverAmbientK,
     evaporatorTemperatureDifferenceK: snapshot.evaporatorTemperatureDifferenceK,
+    dischargeSuperheatK: snapshot.dischargeSuperheatK,
+    dischargeLineLimits: snapshot.dischargeLimits,
     compressionRatio: snapshot.compressionRatio,
     compressionRatioBasis: snapshot.compressionRatioBasis,
     compressorCurrentRatio: snapshot.compressorCurrentRatio,
     chargeState: verdict ? verdict.state : "insufficient-data",
     confidence: verdict ? verdict.confidence : 0,
-    alternatives: verdict ? ranked.slice(1) : ranked,
+    alternatives: verdict ? ranked.filter((entry) => entry !== verdict) : ranked,
+    readingsLeftOut: readingsLeftOut(snapshot),
     findings,
     warnings,
   };

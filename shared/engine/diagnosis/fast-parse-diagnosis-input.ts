@@ -1,9 +1,11 @@
 import {
+  APPLICATIONS,
   DIAGNOSIS_FIELD_RANGES,
   DiagnosisInputSchema,
   LIQUID_TEMP_LOCATIONS,
   METERING_DEVICES,
   STANDARD_ATMOSPHERE_KPA,
+  SUCTION_TEMP_LOCATIONS,
   WET_BULB_ABOVE_DRY_BULB_TOLERANCE_K,
   type DiagnosisInput,
   type DiagnosisInputDraft,
@@ -17,6 +19,7 @@ const CHECKED_FIELDS = [
   "meteringDevice",
   "suctionPressureKPa",
   "suctionLineTempC",
+  "suctionTempLocation",
   "liquidPressureKPa",
   "liquidLineTempC",
   "liquidTempLocation",
@@ -33,10 +36,12 @@ const CHECKED_FIELDS = [
   "targetSubcoolingK",
   "atmosphericPressureKPa",
   "runMinutes",
+  "application",
+  "liquidLineLengthM",
 ] as const;
 // A field or range added to the schema but not here would make this check looser than the
 // schema: fail at start-up instead of accepting readings the schema refuses.
-const UNRANGED_FIELDS: readonly string[] = ["refrigerant", "meteringDevice", "liquidTempLocation"];
+const UNRANGED_FIELDS: readonly string[] = ["refrigerant", "meteringDevice", "liquidTempLocation", "suctionTempLocation", "application"];
 if (
   Object.keys(DiagnosisInputSchema.shape).join() !== CHECKED_FIELDS.join() ||
   Object.keys(RANGES).join() !== CHECKED_FIELDS.filter((field) => !UNRANGED_FIELDS.includes(field)).join()
@@ -45,6 +50,8 @@ if (
 }
 const METERING_DEVICE_SET: ReadonlySet<unknown> = new Set(METERING_DEVICES);
 const LIQUID_TEMP_LOCATION_SET: ReadonlySet<unknown> = new Set(LIQUID_TEMP_LOCATIONS);
+const SUCTION_TEMP_LOCATION_SET: ReadonlySet<unknown> = new Set(SUCTION_TEMP_LOCATIONS);
+const APPLICATION_SET: ReadonlySet<unknown> = new Set(APPLICATIONS);
 
 /** `z.number()` accepts finite numbers only (zod 4 refuses NaN and ±Infinity). */
 function isFiniteNumber(value: unknown): value is number {
@@ -90,6 +97,10 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
   if (!METERING_DEVICE_SET.has(meteringDevice)) return null;
   const liquidTempLocation = draft.liquidTempLocation;
   if (liquidTempLocation !== undefined && !LIQUID_TEMP_LOCATION_SET.has(liquidTempLocation)) return null;
+  const suctionTempLocation = draft.suctionTempLocation;
+  if (suctionTempLocation !== undefined && !SUCTION_TEMP_LOCATION_SET.has(suctionTempLocation)) return null;
+  const application = draft.application;
+  if (application !== undefined && !APPLICATION_SET.has(application)) return null;
 
   const {
     suctionPressureKPa,
@@ -109,6 +120,7 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
     targetSubcoolingK,
     atmosphericPressureKPa,
     runMinutes,
+    liquidLineLengthM,
   } = draft;
   if (
     !isFiniteNumber(suctionPressureKPa) ||
@@ -127,7 +139,8 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
     !isOptionalFiniteNumber(targetSuperheatK) ||
     !isOptionalFiniteNumber(targetSubcoolingK) ||
     !isOptionalFiniteNumber(atmosphericPressureKPa) ||
-    !isOptionalFiniteNumber(runMinutes)
+    !isOptionalFiniteNumber(runMinutes) ||
+    !isOptionalFiniteNumber(liquidLineLengthM)
   ) {
     return null;
   }
@@ -138,6 +151,7 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
     meteringDevice: meteringDevice as DiagnosisInput["meteringDevice"],
     suctionPressureKPa,
     suctionLineTempC,
+    suctionTempLocation: suctionTempLocation as DiagnosisInput["suctionTempLocation"],
     liquidPressureKPa,
     liquidLineTempC,
     liquidTempLocation: liquidTempLocation as DiagnosisInput["liquidTempLocation"],
@@ -154,6 +168,8 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
     targetSubcoolingK,
     atmosphericPressureKPa,
     runMinutes,
+    application: application as DiagnosisInput["application"],
+    liquidLineLengthM,
   };
 
   // The schema's refinement, check for check, without building any message. Field by field
@@ -175,7 +191,8 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
     outsideRange(targetSuperheatK, RANGES.targetSuperheatK) ||
     outsideRange(targetSubcoolingK, RANGES.targetSubcoolingK) ||
     outsideRange(atmosphericPressureKPa, RANGES.atmosphericPressureKPa) ||
-    outsideRange(runMinutes, RANGES.runMinutes)
+    outsideRange(runMinutes, RANGES.runMinutes) ||
+    outsideRange(liquidLineLengthM, RANGES.liquidLineLengthM)
   ) {
     return null;
   }

@@ -6,7 +6,7 @@ type State = RankedState["state"];
 const SCORE_EPSILON = 1e-9;
 /** The states evidence can point to, in `CHARGE_STATES` order ("normal" first). */
 const EVIDENCE_STATES = CHARGE_STATES.filter((state): state is State => state !== "insufficient-data");
-if (EVIDENCE_STATES.length !== 8) throw new Error("rankChargeStates requires the eight evidence states of CHARGE_STATES");
+if (EVIDENCE_STATES.length !== 9) throw new Error("rankChargeStates requires the nine evidence states of CHARGE_STATES");
 const STATE_INDEX = Object.fromEntries(EVIDENCE_STATES.map((state, index) => [state, index])) as Record<State, number>;
 
 const byScoreDescending = (first: RankedState, second: RankedState) => second.score - first.score;
@@ -24,7 +24,7 @@ const byScoreDescending = (first: RankedState, second: RankedState) => second.sc
  * @example rankChargeStates([{ …, pointsTo: [{ state: "undercharged", weight: 1 }] }]) // [{ state: "undercharged", score: 1, confidence: 0.632 }]
  */
 export function rankChargeStates(findings: readonly Finding[]): RankedState[] {
-  const scores = [0, 0, 0, 0, 0, 0, 0, 0];
+  const scores = [0, 0, 0, 0, 0, 0, 0, 0, 0];
   for (let findingIndex = 0; findingIndex < findings.length; findingIndex += 1) {
     const pointsTo = findings[findingIndex]!.pointsTo;
     for (let evidenceIndex = 0; evidenceIndex < pointsTo.length; evidenceIndex += 1) {

@@ -1,25 +1,21 @@
-import type { TargetBand } from "../../schemas/diagnosis.ts";
-import {
-  DEFAULT_SUBCOOLING_BAND,
-  DEFAULT_SUBCOOLING_SOURCE,
-  NAMEPLATE_TARGET_TOLERANCE_K,
-  NAMEPLATE_TARGET_TOLERANCE_SOURCE,
-} from "./diagnosis-limits.ts";
+import type { Application, TargetBand } from "../../schemas/diagnosis.ts";
+import { APPLICATION_LIMITS, NAMEPLATE_TARGET_TOLERANCE_K, NAMEPLATE_TARGET_TOLERANCE_SOURCE } from "./diagnosis-limits.ts";
 
 /** Never changes: built once here instead of on every call (performance). */
 const NAMEPLATE_SOURCE = `maker's target; ±${NAMEPLATE_TARGET_TOLERANCE_K} K: ${NAMEPLATE_TARGET_TOLERANCE_SOURCE}`;
 
 /**
  * Chooses the subcooling band: the maker's target ± 1.7 K (Title 24 tolerance, memory) when
- * given — TXV/EEV systems are charged to it [S9][S11][S14] — else the common-practice band
- * 4.4–8.3 K [S14].
+ * given — TXV/EEV systems are charged to it [S9][S11][S14] — else the application's band:
+ * comfort cooling 4.4–8.3 K [S14], refrigeration with a receiver 2–7 K, chillers 3–8 K
+ * (common practice).
  *
  * Units: K.
  *
  * @throws never
  * @example selectSubcoolingTarget(5).lowK // 3.3
  */
-export function selectSubcoolingTarget(nameplateTargetK: number | undefined): TargetBand {
+export function selectSubcoolingTarget(nameplateTargetK: number | undefined, application: Application = "comfort-cooling"): TargetBand {
   if (nameplateTargetK !== undefined) {
     return {
       targetK: nameplateTargetK,
@@ -29,6 +25,6 @@ export function selectSubcoolingTarget(nameplateTargetK: number | undefined): Ta
       source: NAMEPLATE_SOURCE,
     };
   }
-  const { lowK, highK, targetK } = DEFAULT_SUBCOOLING_BAND;
-  return { targetK, lowK, highK, basis: "common-practice", source: DEFAULT_SUBCOOLING_SOURCE };
+  const { lowK, highK, targetK, source } = APPLICATION_LIMITS[application].subcooling;
+  return { targetK, lowK, highK, basis: "common-practice", source };
 }

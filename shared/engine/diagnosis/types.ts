@@ -1,12 +1,16 @@
 import type {
+  Application,
   DiagnosisInput,
+  DiagnosisResult,
   DiagnosisWarning,
-  EvidenceState,
   Finding,
   MeteringDevice,
+  SuctionTempLocation,
   TargetBand,
   WarningCode,
 } from "../../schemas/diagnosis.ts";
+import type { ApplicationLimits, DischargeLineLimits } from "./diagnosis-limits.ts";
+import type { MeteringFamily } from "./signature-table.ts";
 
 /** Why a derived value is not used for the verdict. */
 export interface Exclusion {
@@ -24,7 +28,15 @@ export interface DiagnosisSnapshot {
   input: DiagnosisInput;
   meteringDevice: MeteringDevice;
   /** TXV/EEV hold superheat; fixed orifice and capillary do not (TRADE.md §2 notes). */
-  meteringFamily: "expansion-valve" | "fixed";
+  meteringFamily: MeteringFamily;
+  application: Application;
+  applicationBasis: DiagnosisResult["applicationBasis"];
+  /** The application's bands. */
+  limits: ApplicationLimits;
+  dischargeLimits: DischargeLineLimits;
+  suctionTempLocation: SuctionTempLocation | null;
+  /** How far the superheat band was moved for where it was read, K (negative: down; 0: not moved). */
+  suctionLineAllowanceK: number;
   atmosphericPressureKPa: number;
   suctionPressureKPaAbs: number;
   liquidPressureKPaAbs: number;
@@ -35,8 +47,13 @@ export interface DiagnosisSnapshot {
   condensingDewTempC: number | null;
   /** Dew point at the discharge pressure (or liquid pressure when no discharge gauge), °C. */
   dischargeDewTempC: number | null;
+  /** Mid-glide (mean) evaporating and condensing temperatures, °C: coil temperature differences use these. */
+  evaporatingMeanTempC: number | null;
+  condensingMeanTempC: number | null;
   glideK: number | null;
   condenserGlideK: number | null;
+  /** The liquid (high side) pressure is above the critical pressure: a gas cooler (R744). */
+  transcritical: boolean;
   superheatK: number | null;
   /** Saturation (bubble) − liquid temperature even when not valid as subcooling, K. */
   liquidSideDifferenceK: number | null;
@@ -51,12 +68,25 @@ export interface DiagnosisSnapshot {
   /** Why there is no superheat target, or why a formula target is not to be charged by. */
   superheatTargetNote: string | null;
   subcoolingTarget: TargetBand | null;
+  /** Subcooling below this (target − 1 K) with high superheat reads as a shortage, K. */
+  subcoolingPivotK: number | null;
+  /** Expected liquid line − outdoor air band. */
+  condenserApproachTarget: TargetBand;
+  /** Expected return − supply split band, when there is one. */
+  temperatureSplitTarget: TargetBand | null;
   returnAirWetBulbC: number | null;
   wetBulbBasis: "measured" | "from-relative-humidity" | null;
   temperatureSplitK: number | null;
   condenserApproachK: number | null;
   condensingOverAmbientK: number | null;
   evaporatorTemperatureDifferenceK: number | null;
+  /** Discharge line − dew point at the discharge (or liquid) pressure, K. */
+  dischargeSuperheatK: number | null;
+  /**
+   * Discharge line temperature the rules judge, °C: the one entered, or a "liquid" temperature
+   * that was in fact read on the discharge line; null when none or impossible.
+   */
+  dischargeLineTempC: number | null;
   compressionRatio: number | null;
   compressionRatioBasis: "discharge" | "liquid" | null;
   compressorCurrentRatio: number | null;
@@ -76,10 +106,3 @@ export interface DiagnosisRule {
   source: string;
   evaluate(snapshot: DiagnosisSnapshot): RuleOutput;
 }
-
-/**
- * Evidence weights of one state against a reading's deviation from its band:
- * [well below the band, inside the band, well above the band]. Between the band edge and full
- * strength the weight moves linearly from `inside` to the outer value.
- */
-export type EvidenceProfile = Partial<Record<EvidenceState, readonly [below: number, inside: number, above: number]>>;

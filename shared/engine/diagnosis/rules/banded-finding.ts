@@ -2,9 +2,9 @@ import type { Finding } from "../../../schemas/diagnosis.ts";
 import { bandDeviation } from "../band-deviation.ts";
 import type { Band } from "../diagnosis-limits.ts";
 import { deviationStrength } from "../deviation-strength.ts";
-import { evidenceFromDeviation } from "../evidence-from-deviation.ts";
+import { evidenceFromSignature } from "../evidence-from-signature.ts";
 import { formatTenths } from "../format-tenths.ts";
-import type { EvidenceProfile } from "../types.ts";
+import type { MeteringFamily, SignatureFeature } from "../signature-table.ts";
 
 export type Message = (value: string, band: string) => string;
 
@@ -16,22 +16,33 @@ export interface BandedReading {
   band: Band;
   /** The band as text ("8.0–13.0"), when the rule has it ready; else formatted here. */
   bandText?: string;
-  profile: EvidenceProfile;
+  /** The signature-table column this reading fills, and the circuit's metering family. */
+  feature: SignatureFeature;
+  family: MeteringFamily;
+  /** Distance beyond the band edge that counts in full (default 2.8 K). */
+  fullStrength?: number;
+  /** Pivot for the "below/above pivot" cells (subcooling only), in the reading's unit. */
+  pivot?: number;
   /** Sentence per direction, given the value and band as text with one decimal. */
   messages: { low: Message; normal: Message; high: Message };
   source: string;
 }
 
 /**
- * A finding for a reading judged against a band: direction, graded evidence from the rule's
- * profile, and the rule's sentence with the numbers filled in (one decimal).
+ * A finding for a reading judged against a band: direction, the evidence the signature table
+ * gives each state for it (graded by how far outside the band it lies), and the rule's sentence
+ * with the numbers filled in (one decimal).
  *
  * @throws {RangeError} when the band is inverted
- * @example bandedFinding({ ruleId: "x", reading: "superheatK", value: 12, unit: "K", band: { lowK: 5, highK: 11 }, profile: {}, messages, source }).direction // "high"
+ * @example bandedFinding({ ruleId: "x", reading: "superheatK", value: 12, unit: "K", band: { lowK: 5, highK: 11 }, feature: "superheat", family: "fixed", messages, source }).direction // "high"
  */
 export function bandedFinding(spec: BandedReading): Finding {
   const deviation = bandDeviation(spec.value, spec.band);
   const direction = deviation < 0 ? "low" : deviation > 0 ? "high" : "normal";
+  const strength = deviationStrength(deviation, spec.fullStrength);
+  const bandStrength = deviation < 0 ? -strength : strength;
+  const fullScale = spec.fullStrength ?? undefined;
+  const pivotDeviation = spec.pivot === undefined ? 0 : Math.sign(spec.value - spec.pivot) * deviationStrength(spec.value - spec.pivot, fullScale);
   const message = spec.messages[direction](formatTenths(spec.value), spec.bandText ?? formatTenths(spec.band.lowK) + "–" + formatTenths(spec.band.highK));
   return {
     ruleId: spec.ruleId,
@@ -39,7 +50,7 @@ export function bandedFinding(spec: BandedReading): Finding {
     value: spec.value,
     unit: spec.unit,
     direction,
-    pointsTo: evidenceFromDeviation(deviation, deviationStrength(deviation), spec.profile),
+    pointsTo: evidenceFromSignature(spec.feature, spec.family, bandStrength, pivotDeviation),
     message,
     source: spec.source,
   };

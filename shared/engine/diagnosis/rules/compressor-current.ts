@@ -1,13 +1,10 @@
-import { HIGH_CURRENT_RATIO, LOW_CURRENT_RATIO } from "../diagnosis-limits.ts";
-import { deviationStrength } from "../deviation-strength.ts";
+import { CURRENT_RATIO_BAND, CURRENT_RATIO_FULL_STRENGTH } from "../diagnosis-limits.ts";
 import { COMMON_PRACTICE, cite } from "../sources.ts";
 import { formatHundredths } from "../format-hundredths.ts";
-import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { bandedFinding } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-/** Current-ratio distance at which the evidence reaches full strength. */
-const FULL_STRENGTH_RATIO = 0.2;
 const SOURCE = `${cite(["S39", "S21"])}; ${COMMON_PRACTICE}`;
 
 /** Compressor running current against RLA (RLA is a rating, not the expected running current). */
@@ -33,53 +30,23 @@ export const compressorCurrentRule: DiagnosisRule = {
         ],
       };
     }
-    if (ratio > HIGH_CURRENT_RATIO) {
-      const strength = deviationStrength(ratio - HIGH_CURRENT_RATIO, FULL_STRENGTH_RATIO);
-      return {
-        findings: [
-          {
-            ruleId: this.id,
-            reading: "compressorCurrentRatio",
-            value: ratio,
-            unit: "× RLA",
-            source: SOURCE,
-            direction: "high",
-            pointsTo: [
-              { state: "condenser-airflow", weight: 0.4 * strength },
-              { state: "non-condensables", weight: 0.4 * strength },
-              { state: "overcharged", weight: 0.4 * strength },
-            ],
-            message: `Compressor draws ${formatTenths(compressorAmps)} A, ${formatHundredths(ratio)} × RLA: above its rating — high head pressure or high load; investigate`,
-          },
-        ],
-        warnings: [],
-      };
-    }
-    if (ratio < LOW_CURRENT_RATIO) {
-      const strength = deviationStrength(LOW_CURRENT_RATIO - ratio, FULL_STRENGTH_RATIO);
-      return {
-        findings: [
-          {
-            ruleId: this.id,
-            reading: "compressorCurrentRatio",
-            value: ratio,
-            unit: "× RLA",
-            source: SOURCE,
-            direction: "low",
-            pointsTo: [
-              { state: "weak-compressor", weight: 0.3 * strength },
-              { state: "undercharged", weight: 0.2 * strength },
-              { state: "restricted-metering", weight: 0.2 * strength },
-            ],
-            message: `Compressor draws ${formatTenths(compressorAmps)} A, ${formatHundredths(ratio)} × RLA: little refrigerant is being pumped`,
-          },
-        ],
-        warnings: [],
-      };
-    }
-    return {
-      findings: [{ ruleId: this.id, reading: "compressorCurrentRatio", value: ratio, unit: "× RLA", source: SOURCE, direction: "normal", pointsTo: [], message: `Compressor draws ${formatTenths(compressorAmps)} A, ${formatHundredths(ratio)} × RLA: within its rating` }],
-      warnings: [],
-    };
+    const amps = compressorAmps.toFixed(1);
+    const finding = bandedFinding({
+      ruleId: this.id,
+      reading: "compressorCurrentRatio",
+      value: ratio,
+      unit: "× RLA",
+      band: CURRENT_RATIO_BAND,
+      fullStrength: CURRENT_RATIO_FULL_STRENGTH,
+      feature: "compressorCurrent",
+      family: snapshot.meteringFamily,
+      messages: {
+        low: () => `Compressor draws ${amps} A, ${formatHundredths(ratio)} × RLA: little refrigerant is being pumped`,
+        normal: () => `Compressor draws ${amps} A, ${formatHundredths(ratio)} × RLA: within its rating`,
+        high: () => `Compressor draws ${amps} A, ${formatHundredths(ratio)} × RLA: above its rating — high head pressure or high load; investigate`,
+      },
+      source: SOURCE,
+    });
+    return { findings: [finding], warnings: [] };
   },
 };

@@ -1,40 +1,51 @@
 import { SENSOR_TOLERANCE_K } from "../diagnosis-limits.ts";
-import { deviationStrength } from "../deviation-strength.ts";
-import { cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
+import { cite } from "../sources.ts";
 import type { DiagnosisRule } from "../types.ts";
+import { bandedFinding } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = cite(["S26", "S34"]);
 
-/** A liquid line colder than the air cooling it needs a restriction (or a bad probe). */
+/**
+ * Liquid line minus the outdoor air entering the condenser: how close the condenser brings its
+ * liquid to the air cooling it. High: the condenser cannot reject heat (dirty coil, slow fan, hot
+ * air recirculating); low: a condenser full of liquid (overcharge); below zero only a pressure
+ * drop upstream of the probe (restriction) or a wrong probe can do it.
+ */
 export const condenserApproachRule: DiagnosisRule = {
   id: "condenser-approach",
-  description: "Liquid line colder than the outdoor air entering the condenser points to a restriction upstream or a bad probe",
+  description: "Liquid line minus outdoor air against the application's band: high when the condenser cannot reject heat, low when it is full of liquid",
   source: SOURCE,
   evaluate(snapshot) {
     const approach = snapshot.condenserApproachK;
-    if (approach === null || snapshot.subcoolingExcluded || approach >= -SENSOR_TOLERANCE_K) return NO_OUTPUT;
-    const strength = deviationStrength(approach + SENSOR_TOLERANCE_K);
+    if (approach === null) return NO_OUTPUT;
+    const band = snapshot.condenserApproachTarget;
+    const finding = bandedFinding({
+      ruleId: this.id,
+      reading: "condenserApproachK",
+      value: approach,
+      unit: "K",
+      band,
+      feature: "condenserApproach",
+      family: snapshot.meteringFamily,
+      pivot: band.targetK,
+      messages: {
+        low: (value, text) => `Liquid leaves the condenser only ${value} K above the outdoor air (expected ${text} K): the condenser is full of liquid`,
+        normal: (value, text) => `Liquid leaves the condenser ${value} K above the outdoor air (expected ${text} K)`,
+        high: (value, text) => `Liquid leaves the condenser ${value} K above the outdoor air (expected ${text} K): the condenser is not rejecting its heat — coil, fan or air recirculating`,
+      },
+      source: `${SOURCE}; band: ${band.source}`,
+    });
+    if (approach >= -SENSOR_TOLERANCE_K) return { findings: [finding], warnings: [] };
     return {
-      findings: [
-        {
-          ruleId: this.id,
-          reading: "condenserApproachK",
-          value: approach,
-          unit: "K",
-          direction: "low",
-          pointsTo: [{ state: "restricted-metering", weight: 0.5 * strength }],
-          message: `Liquid line is ${formatTenths(-approach)} K colder than the outdoor air: only a pressure drop (restriction) upstream of the probe can do that — or the probe is wrong`,
-          source: SOURCE,
-        },
-      ],
+      findings: [finding],
       warnings: [
         {
           code: "liquid-colder-than-outdoor-air",
           severity: "caution",
           field: "liquidLineTempC",
-          message: `Liquid line ${formatTenths(snapshot.input.liquidLineTempC)} °C is colder than the outdoor air ${formatTenths(snapshot.input.outdoorAirDryBulbC ?? Number.NaN)} °C: check the probe, then look for a restriction (cold spot, sweat) before the probe`,
+          message: `Liquid line ${formatTenths(snapshot.input.liquidLineTempC)} °C is colder than the outdoor air ${formatTenths(snapshot.input.outdoorAirDryBulbC ?? Number.NaN)} °C: only a pressure drop (restriction) before the probe can do that — check the probe, then look for a cold spot or sweat before it`,
           source: SOURCE,
         },
       ],

@@ -1,60 +1,60 @@
-import { DISCHARGE_LINE_ELEVATED_C, DISCHARGE_LINE_LIMIT_C } from "../diagnosis-limits.ts";
+import type { DiagnosisWarning, Finding } from "../../../schemas/diagnosis.ts";
+import { DANGER_DISCHARGE_SUPERHEAT_K, LOW_DISCHARGE_SUPERHEAT_K } from "../diagnosis-limits.ts";
 import { deviationStrength } from "../deviation-strength.ts";
-import { cite } from "../sources.ts";
+import { evidenceFromSignature } from "../evidence-from-signature.ts";
+import { formatTenths } from "../format-tenths.ts";
+import { COMMON_PRACTICE, MEMORY, cite } from "../sources.ts";
 import type { DiagnosisRule } from "../types.ts";
-import type { Evidence } from "../../../schemas/diagnosis.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = cite(["S13", "S37"]);
-/** Elevated-to-limit span over which the evidence reaches full strength, K. */
-const RAMP_K = DISCHARGE_LINE_LIMIT_C - DISCHARGE_LINE_ELEVATED_C;
+const LOW_SUPERHEAT_SOURCE = `discharge gas only a few kelvin above its dew point means liquid is reaching the compressor (${COMMON_PRACTICE}; ${MEMORY})`;
 
-/** Hot discharge line: elevated above typical values, dangerous above the oil-breakdown margin. */
+/**
+ * Discharge line temperature: hot above the application's (and refrigerant's) elevated value,
+ * dangerous above its limit (oil breakdown); too cool when it sits only a few kelvin above the
+ * dew point at discharge pressure, which means liquid is coming back to the compressor.
+ */
 export const dischargeLineTemperatureRule: DiagnosisRule = {
   id: "discharge-line-temperature",
-  description: `Discharge line above ${DISCHARGE_LINE_ELEVATED_C} °C is elevated; above ${DISCHARGE_LINE_LIMIT_C} °C it risks oil breakdown`,
+  description: "Discharge line against its refrigerant's and application's limits: hot is a warning, barely superheated means liquid is returning",
   source: SOURCE,
   evaluate(snapshot) {
-    const temperature = snapshot.input.dischargeLineTempC;
-    if (temperature === undefined || snapshot.dischargeLineExcluded) return NO_OUTPUT;
-    const warnings =
-      temperature > DISCHARGE_LINE_LIMIT_C
-        ? [
-            {
-              code: "discharge-temperature-high" as const,
-              severity: "danger" as const,
-              field: "dischargeLineTempC",
-              message: `Discharge line ${Math.round(temperature)} °C is above ${DISCHARGE_LINE_LIMIT_C} °C: the discharge valve runs about 42 K hotter and oil starts to break down; find the cause before running on`,
-              source: SOURCE,
-            },
-          ]
-        : [];
-    if (temperature <= DISCHARGE_LINE_ELEVATED_C) {
-      return {
-        findings: [
-          {
-            ruleId: this.id,
-            reading: "dischargeLineTempC",
-            value: temperature,
-            unit: "°C",
-            direction: "normal",
-            pointsTo: [],
-            message: `Discharge line ${Math.round(temperature)} °C is not elevated (healthy AC runs about 71–82 °C in hot weather)`,
-            source: SOURCE,
-          },
-        ],
-        warnings,
-      };
+    const temperature = snapshot.dischargeLineTempC;
+    if (temperature === null) return NO_OUTPUT;
+    const { elevatedC, limitC, source: limitSource } = snapshot.dischargeLimits;
+    const dischargeSuperheat = snapshot.dischargeSuperheatK;
+    const warnings: DiagnosisWarning[] = [];
+    if (temperature > limitC) {
+      warnings.push({
+        code: "discharge-temperature-high",
+        severity: "danger",
+        field: "dischargeLineTempC",
+        message: `Discharge line ${Math.round(temperature)} °C is above ${limitC} °C: the discharge valve runs about 42 K hotter and oil starts to break down; find the cause before running on`,
+        source: limitSource,
+      });
     }
-    const strength = deviationStrength(temperature - DISCHARGE_LINE_ELEVATED_C, RAMP_K);
-    const pointsTo: Evidence[] = [
-      { state: "restricted-metering", weight: 0.3 * strength },
-      { state: "non-condensables", weight: 0.3 * strength },
-      { state: "weak-compressor", weight: 0.3 * strength },
-      { state: "undercharged", weight: 0.2 * strength },
-      { state: "condenser-airflow", weight: 0.2 * strength },
-      { state: "normal", weight: -0.3 * strength },
-    ];
+    // Signed strength: + above the elevated value (full at the limit), − when barely superheated.
+    let strength = 0;
+    if (temperature > elevatedC) strength = deviationStrength(temperature - elevatedC, Math.max(1, limitC - elevatedC));
+    else if (dischargeSuperheat !== null && dischargeSuperheat < LOW_DISCHARGE_SUPERHEAT_K) {
+      strength = -deviationStrength(LOW_DISCHARGE_SUPERHEAT_K - dischargeSuperheat, LOW_DISCHARGE_SUPERHEAT_K - DANGER_DISCHARGE_SUPERHEAT_K);
+      warnings.push({
+        code: "low-discharge-superheat",
+        severity: dischargeSuperheat < DANGER_DISCHARGE_SUPERHEAT_K ? "danger" : "caution",
+        field: "dischargeLineTempC",
+        message: `Discharge line only ${formatTenths(dischargeSuperheat)} K above its dew point: the compressor is barely heating its gas, so liquid is reaching it; do not add refrigerant`,
+        source: LOW_SUPERHEAT_SOURCE,
+      });
+    }
+    const direction: Finding["direction"] = strength > 0 ? "high" : strength < 0 ? "low" : "normal";
+    const superheatText = dischargeSuperheat === null ? "" : `, ${formatTenths(dischargeSuperheat)} K above its dew point`;
+    const message =
+      direction === "high"
+        ? `Discharge line ${Math.round(temperature)} °C is hotter than the ${elevatedC} °C this circuit should run at: high suction superheat, high head or re-compressed gas`
+        : direction === "low"
+          ? `Discharge line ${Math.round(temperature)} °C${superheatText}: liquid is returning to the compressor`
+          : `Discharge line ${Math.round(temperature)} °C${superheatText} is not elevated (below ${elevatedC} °C for this refrigerant and application)`;
     return {
       findings: [
         {
@@ -62,10 +62,10 @@ export const dischargeLineTemperatureRule: DiagnosisRule = {
           reading: "dischargeLineTempC",
           value: temperature,
           unit: "°C",
-          direction: "high",
-          pointsTo,
-          message: `Discharge line ${Math.round(temperature)} °C is hotter than usual: high superheat at suction, high head or re-compressed gas`,
-          source: SOURCE,
+          direction,
+          pointsTo: evidenceFromSignature("dischargeLine", snapshot.meteringFamily, strength, 0),
+          message,
+          source: `${SOURCE}; limits: ${limitSource}`,
         },
       ],
       warnings,

@@ -1,18 +1,20 @@
-import { FLOODBACK_SUPERHEAT_K, SENSOR_TOLERANCE_K } from "../diagnosis-limits.ts";
+import { EVAPORATOR_OUTLET_FLOODBACK_K, FLOODBACK_SUPERHEAT_K, SENSOR_TOLERANCE_K } from "../diagnosis-limits.ts";
 import { cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = `${cite(["S17"])}; vapour cannot be colder than its saturation temperature (${cite(["S1"])}); sensor allowance ${SENSOR_TOLERANCE_K} K ${cite(["S10"])}`;
+const GLIDE_SOURCE = `between bubble and dew point a blend is still boiling (${cite(["S1", "S2"])}); ${cite(["S17"])}`;
 
 /**
- * Suction line colder than saturation (impossible) or so close to it that liquid may reach
- * the compressor.
+ * Suction line colder than saturation (impossible), inside a blend's glide (still boiling: liquid
+ * leaves the coil), or so close to saturation that liquid may reach the compressor: at the
+ * compressor under 2.8 K [S17], at the evaporator outlet within a sensor's tolerance of zero.
  */
 export const suctionLineSaturationRule: DiagnosisRule = {
   id: "suction-line-saturation",
-  description: "Suction line temperature below saturation is impossible; superheat under 2.8 K risks floodback",
+  description: "Suction line below saturation is impossible; inside the glide or with superheat near zero, liquid is leaving the coil",
   source: SOURCE,
   evaluate(snapshot) {
     const exclusion = snapshot.superheatExcluded;
@@ -23,7 +25,27 @@ export const suctionLineSaturationRule: DiagnosisRule = {
       };
     }
     const superheat = snapshot.superheatK;
-    if (superheat === null || superheat >= FLOODBACK_SUPERHEAT_K) return NO_OUTPUT;
+    if (superheat === null) return NO_OUTPUT;
+    const line = snapshot.input.suctionLineTempC;
+    const bubble = snapshot.evaporatingBubbleTempC;
+    const dew = snapshot.evaporatingTempC;
+    if (superheat < 0 && bubble !== null && dew !== null && dew - bubble > SENSOR_TOLERANCE_K) {
+      return {
+        findings: [],
+        warnings: [
+          {
+            code: "suction-inside-glide",
+            severity: "danger",
+            field: "suctionLineTempC",
+            message: `Suction line ${formatTenths(line)} °C lies between the bubble point ${formatTenths(bubble)} °C and the dew point ${formatTenths(dew)} °C: the blend is still boiling there, so liquid is leaving the evaporator; do not add refrigerant`,
+            source: GLIDE_SOURCE,
+          },
+        ],
+      };
+    }
+    const atEvaporator = snapshot.suctionTempLocation === "evaporator-outlet";
+    const threshold = atEvaporator ? EVAPORATOR_OUTLET_FLOODBACK_K : FLOODBACK_SUPERHEAT_K;
+    if (superheat >= threshold) return NO_OUTPUT;
     return {
       findings: [],
       warnings: [
@@ -31,7 +53,9 @@ export const suctionLineSaturationRule: DiagnosisRule = {
           code: "low-superheat-floodback",
           severity: "danger",
           field: "suctionLineTempC",
-          message: `Superheat ${formatTenths(superheat)} K is under ${FLOODBACK_SUPERHEAT_K} K: liquid may be reaching the compressor; do not add refrigerant`,
+          message: atEvaporator
+            ? `Superheat ${formatTenths(superheat)} K at the evaporator outlet is all but zero: liquid is leaving the coil and may reach the compressor; do not add refrigerant`
+            : `Superheat ${formatTenths(superheat)} K is under ${FLOODBACK_SUPERHEAT_K} K: liquid may be reaching the compressor; do not add refrigerant`,
           source: SOURCE,
         },
       ],

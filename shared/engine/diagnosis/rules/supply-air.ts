@@ -18,7 +18,10 @@ export const supplyAirRule: DiagnosisRule = {
           code: "supply-warmer-than-return",
           severity: "caution",
           field: "supplyAirDryBulbC",
-          message: `Supply air is ${formatTenths(-split)} K warmer than return air: check the probes are not swapped and the unit is in cooling`,
+          message:
+            snapshot.application === "heat-pump"
+              ? `Supply air is ${formatTenths(-split)} K warmer than return air: the heat pump is heating. Satura judges heat pumps in cooling mode (where makers give the charging figures); check in cooling, or weigh in the charge`
+              : `Supply air is ${formatTenths(-split)} K warmer than return air: check the probes are not swapped and the unit is in cooling`,
           source: COMMON_PRACTICE,
         },
       ],

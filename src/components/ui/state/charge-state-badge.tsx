@@ -7,6 +7,7 @@ import {
   Cog,
   Fan,
   Funnel,
+  Droplets,
   Wind,
   type LucideIcon,
 } from "lucide-react";
@@ -21,6 +22,7 @@ export const CHARGE_STATE_ICONS: Record<ChargeState, LucideIcon> = {
   overcharged: ArrowUpToLine,
   "restricted-metering": Funnel,
   "low-evaporator-airflow": Fan,
+  "overfeeding-metering": Droplets,
   "condenser-airflow": Wind,
   "non-condensables": Bubbles,
   "weak-compressor": Cog,

@@ -11,6 +11,7 @@ const DIRECTION: Record<Finding["direction"], { icon: LucideIcon; word: string }
   normal: { icon: Equal, word: "in band" },
   excluded: { icon: Ban, word: "not used" },
   "not-judged": { icon: Minus, word: "not judged" },
+  summary: { icon: Equal, word: "signature" },
 };
 
 /** Confidence in words first; the number is there for those who want it. */

@@ -1,4 +1,3 @@
-import { diagnosisLimits } from "@shared/engine/index.ts";
 import type { DiagnosisResult, LiquidTempLocation, TargetBand } from "@shared/schemas/diagnosis.ts";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import {
@@ -26,6 +25,9 @@ interface ReadingCardsProps {
   dischargeLineTempC: number | undefined;
 }
 
+/** Shown before the first result arrives: the general limit (225 °F [S13]). */
+const DEFAULT_DISCHARGE_LIMIT_C = 107;
+
 /**
  * The entry cards in the order the refrigerant flows: suction (evaporator outlet), discharge,
  * liquid (condenser outlet), then air and electrical. Each card shows what was measured, its
@@ -42,7 +44,8 @@ export function ReadingCards({ draft, onField, onLocation, fieldErrors, result, 
   const input = (field: DraftField, label: string, unit: string, hint?: string) => (
     <NumberField name={field} label={label} unit={unit} value={draft[field]} onValueChange={(value) => onField(field, value)} error={fieldErrors[field]} hint={hint} />
   );
-  const dischargeLimit = diagnosisLimits.DISCHARGE_LINE_LIMIT_C;
+  // The limit depends on the refrigerant and the application: the engine's result carries it.
+  const dischargeLimit = result?.dischargeLineLimits.limitC ?? DEFAULT_DISCHARGE_LIMIT_C;
   const dischargeMargin = dischargeLineTempC === undefined ? null : dischargeLimit - dischargeLineTempC;
 
   return (
