@@ -74,7 +74,7 @@ export function equipmentRouter({ db }: Deps): Router {
     const lastSettled = row.circuits.map((circuit) => {
       const series = latest
         .filter((reading) => reading.circuit === circuit.number)
-        .map((reading) => ({ takenAt: reading.takenAt.toISOString(), input: reading.input }));
+        .map((reading) => ({ takenAt: reading.takenAt.toISOString(), input: reading.input, result: reading.result }));
       if (series.length === 0) return { circuit: circuit.number, takenAt: null, result: null };
       const trend = assessTrend(series);
       return {

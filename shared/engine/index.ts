@@ -37,7 +37,7 @@ export { pressureFromDisplay } from "./units/pressure-from-display.ts";
 
 // Charge diagnosis (superheat, subcooling, targets, findings)
 export { diagnose, MIN_VERDICT_SCORE, MIN_VERDICT_SCORE_WITHOUT_CHARGE_SIGNAL } from "./diagnosis/diagnose.ts";
-export { assessTrend, SETTLED_WINDOW_MINUTES, SETTLED_MAX_CHANGE_K } from "./diagnosis/assess-trend.ts";
+export { assessTrend, SETTLED_WINDOW_MINUTES, SETTLED_MAX_CHANGE_K, SETTLED_MAX_RATE_K_PER_MIN } from "./diagnosis/assess-trend.ts";
 export { DiagnosisInputError } from "./diagnosis/diagnosis-input-error.ts";
 export type { FieldErrors } from "./diagnosis/diagnosis-input-error.ts";
 export { superheat } from "./diagnosis/superheat.ts";
@@ -90,6 +90,7 @@ export { judgeCylinderFill } from "./procedures/judge-cylinder-fill.ts";
 export { annualLeakRate } from "./procedures/annual-leak-rate.ts";
 export { chargeAgainstNameplate } from "./procedures/charge-against-nameplate.ts";
 export { judgeLeakSearch } from "./procedures/judge-leak-search.ts";
+export { judgeStandingPressure, NON_CONDENSABLE_EXCESS_K, STANDING_PRESSURE_TOLERANCE_K } from "./procedures/judge-standing-pressure.ts";
 export type { LeakSearchFindings } from "./procedures/judge-leak-search.ts";
 export { PROCEDURE_SOURCES, citeProcedure } from "./procedures/procedure-sources.ts";
 export type { ProcedureSourceTag } from "./procedures/procedure-sources.ts";

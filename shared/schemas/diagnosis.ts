@@ -488,6 +488,11 @@ export const TrendReadingSchema = z.object({
   input: DiagnosisInputSchema,
   /** Set when the technician adjusted the system (charge, fan, valve) just before this reading. */
   adjustment: z.string().trim().min(1).optional(),
+  /**
+   * The diagnosis stored with the reading when it was saved (the server's own `diagnose()`
+   * output): the trend reads it instead of diagnosing again. Trusted, not re-validated.
+   */
+  result: z.custom<DiagnosisResult>((value) => typeof value === "object" && value !== null && "chargeState" in value, "A stored result must be a diagnosis").optional(),
 });
 export type TrendReading = z.infer<typeof TrendReadingSchema>;
 
@@ -516,7 +521,7 @@ export const TrendResultSchema = z.object({
   /** Why settled or not, in words. */
   reason: z.string(),
   /** The criterion applied. */
-  criterion: z.object({ windowMinutes: z.number(), maxChangeK: z.number(), minRunMinutes: z.number(), source: z.string() }),
+  criterion: z.object({ windowMinutes: z.number(), maxChangeK: z.number(), maxRateKPerMin: z.number(), minRunMinutes: z.number(), source: z.string() }),
   /** Least-squares slope over the last window (or the readings since the last adjustment), K/min. */
   rate: RateSchema,
   /** Largest − smallest value over the last window, K. */

@@ -176,6 +176,41 @@ export const PressureTestInputSchema = z.object({
 });
 export type PressureTestInput = z.infer<typeof PressureTestInputSchema>;
 
+// ---------------------------------------------------------------------------------------------
+// Standing-pressure check for non-condensables (trade notes §2)
+// ---------------------------------------------------------------------------------------------
+
+/**
+ * Off-cycle standing pressure of the condenser (or the whole equalised circuit) and the
+ * temperature it has settled to: the unit is off, the condenser fan has run until the air
+ * leaving equals the air entering.
+ */
+export const StandingPressureInputSchema = z.object({
+  refrigerant: z.string({ error: "Choose the refrigerant" }).trim().min(1, "Choose the refrigerant"),
+  standingGaugeKPa: number("Standing pressure", "kPa gauge").max(MAX_GAUGE_PRESSURE_KPA, `Standing pressure above ${MAX_GAUGE_PRESSURE_KPA} kPa gauge is beyond any refrigeration gauge`),
+  equalisedTempC: temperature("Equalised temperature"),
+  /** Site atmospheric pressure, kPa absolute; default 101.325. */
+  atmosphericPressureKPa: number("Atmospheric pressure", "kPa absolute")
+    .min(MIN_ATMOSPHERIC_PRESSURE_KPA, `Atmospheric pressure below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`)
+    .max(MAX_ATMOSPHERIC_PRESSURE_KPA, `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`)
+    .optional(),
+});
+export type StandingPressureInput = z.infer<typeof StandingPressureInputSchema>;
+
+export const StandingPressureResultSchema = VerdictSchema.extend({
+  /** Saturation pressure at the equalised temperature, kPa gauge (bubble point for blends). */
+  expectedGaugeKPa: z.number(),
+  /** Dew-point pressure at that temperature, kPa gauge (equal to the expected one for pure fluids). */
+  dewGaugeKPa: z.number(),
+  /** Standing pressure − expected pressure, kPa. */
+  excessKPa: z.number(),
+  /** Saturation temperature at the standing pressure (bubble point for blends) − equalised temperature, K. */
+  excessK: z.number(),
+  /** True when the refrigerant is a zeotropic blend (the comparison shows less, see `reason`). */
+  zeotrope: z.boolean(),
+});
+export type StandingPressureResult = z.infer<typeof StandingPressureResultSchema>;
+
 /** Test pressure against the rated pressure (PS) of the lowest-rated component, both kPa gauge. */
 export const TestPressureInputSchema = z.object({
   testGaugeKPa: positive("Test pressure", "kPa gauge", MAX_GAUGE_PRESSURE_KPA),

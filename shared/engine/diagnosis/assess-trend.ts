@@ -24,10 +24,15 @@ export const SETTLED_WINDOW_MINUTES = 5;
  * superheat [S10], ±1.7 K subcooling), so a settled reading would not change the verdict.
  */
 export const SETTLED_MAX_CHANGE_K = 1;
+/**
+ * Largest steady drift of superheat and of subcooling, K/min: a slow drift can stay under the
+ * 1 K change limit over 5 minutes and still carry the reading another 1.5 K over the rest of
+ * Title 24's 15-minute settling period [S10] — about a whole tolerance. 0.1 K/min keeps that
+ * under 1 K (common practice).
+ */
+export const SETTLED_MAX_RATE_K_PER_MIN = 0.1;
 
-const CRITERION_SOURCE = `${cite(["S10", "S20"])}; window and change limit: ${COMMON_PRACTICE}`;
-
-const minutesBetween = (from: string, to: string) => (Date.parse(to) - Date.parse(from)) / 60_000;
+const CRITERION_SOURCE = `${cite(["S10", "S20"])}; window, change and drift limits: ${COMMON_PRACTICE}`;
 
 interface WindowStatus {
   settled: boolean;
@@ -39,50 +44,49 @@ interface WindowStatus {
   minutesObserved: number;
 }
 
-function spread(values: readonly number[]): number | null {
-  return values.length === 0 ? null : Math.max(...values) - Math.min(...values);
-}
-
-function slope(minutes: readonly number[], values: readonly (number | null)[]): number | null {
+/** Spread and least-squares slope of one series over readings first…last (nulls skipped). */
+function spreadAndSlope(minutes: Float64Array, values: readonly (number | null)[], first: number, last: number): { change: number | null; rate: number | null } {
+  let minimum = Infinity;
+  let maximum = -Infinity;
   const x: number[] = [];
   const y: number[] = [];
-  values.forEach((value, index) => {
-    if (value !== null) {
-      x.push(minutes[index]!);
-      y.push(value);
-    }
-  });
-  return x.length >= 2 && x[x.length - 1]! > x[0]! ? leastSquaresSlope(x, y) : null;
+  for (let index = first; index <= last; index += 1) {
+    const value = values[index];
+    if (value === null || value === undefined) continue;
+    if (value < minimum) minimum = value;
+    if (value > maximum) maximum = value;
+    x.push(minutes[index]!);
+    y.push(value);
+  }
+  const change = x.length === 0 ? null : maximum - minimum;
+  const rate = x.length >= 2 && x[x.length - 1]! > x[0]! ? leastSquaresSlope(x, y) : null;
+  return { change, rate };
 }
 
-/** Settled status at reading `last`, looking back over readings since the last adjustment. */
-function windowStatus(series: readonly TrendReading[], results: readonly DiagnosisResult[], last: number): WindowStatus {
-  let start = 0;
-  for (let index = last; index >= 0; index -= 1) {
-    if (series[index]!.adjustment !== undefined) {
-      start = index;
-      break;
-    }
-  }
-  const lastAt = series[last]!.takenAt;
-  const minutesObserved = minutesBetween(series[start]!.takenAt, lastAt);
-  // The window: readings from the latest one at or before (last − window) up to `last`.
-  let windowStart = start;
-  for (let index = start; index <= last; index += 1) {
-    if (minutesBetween(series[index]!.takenAt, lastAt) >= SETTLED_WINDOW_MINUTES) windowStart = index;
-  }
-  const indices: number[] = [];
-  for (let index = windowStart; index <= last; index += 1) indices.push(index);
-  const minutes = indices.map((index) => minutesBetween(series[start]!.takenAt, series[index]!.takenAt));
-  const superheats = indices.map((index) => results[index]!.superheatK);
-  const subcoolings = indices.map((index) => results[index]!.subcoolingK);
-  const superheatChangeK = spread(superheats.filter((value): value is number => value !== null));
-  const subcoolingChangeK = spread(subcoolings.filter((value): value is number => value !== null));
+/**
+ * Settled status at reading `last`, looking back over readings since the last adjustment.
+ * `minutes` are the reading times in minutes (parsed once); `adjustedAt[i]` is the index of the
+ * latest adjustment at or before i (0 when none); `windowStart[i]` the first reading of i's window.
+ */
+function windowStatus(
+  series: readonly TrendReading[],
+  minutes: Float64Array,
+  adjustedAt: Int32Array,
+  windowStart: Int32Array,
+  superheats: readonly (number | null)[],
+  subcoolings: readonly (number | null)[],
+  last: number,
+): WindowStatus {
+  const start = adjustedAt[last]!;
+  const minutesObserved = minutes[last]! - minutes[start]!;
+  const first = Math.max(start, windowStart[last]!);
+  const superheat = spreadAndSlope(minutes, superheats, first, last);
+  const subcooling = spreadAndSlope(minutes, subcoolings, first, last);
   const base = {
-    superheatChangeK,
-    subcoolingChangeK,
-    superheatRate: slope(minutes, superheats),
-    subcoolingRate: slope(minutes, subcoolings),
+    superheatChangeK: superheat.change,
+    subcoolingChangeK: subcooling.change,
+    superheatRate: superheat.rate,
+    subcoolingRate: subcooling.rate,
     minutesObserved,
   };
 
@@ -97,29 +101,40 @@ function windowStatus(series: readonly TrendReading[], results: readonly Diagnos
       reason: `Only ${minutesObserved.toFixed(1)} min of readings${start > 0 ? " since the last adjustment" : ""}; settling needs ${SETTLED_WINDOW_MINUTES} min`,
     };
   }
-  if (superheatChangeK === null && subcoolingChangeK === null) {
+  if (superheat.change === null && subcooling.change === null) {
     return { ...base, settled: false, reason: "Neither superheat nor subcooling could be computed, so settling cannot be judged" };
   }
   const moving: string[] = [];
-  if (superheatChangeK !== null && superheatChangeK >= SETTLED_MAX_CHANGE_K) moving.push(`superheat moved ${superheatChangeK.toFixed(1)} K`);
-  if (subcoolingChangeK !== null && subcoolingChangeK >= SETTLED_MAX_CHANGE_K) moving.push(`subcooling moved ${subcoolingChangeK.toFixed(1)} K`);
+  if (superheat.change !== null && superheat.change >= SETTLED_MAX_CHANGE_K) moving.push(`superheat moved ${superheat.change.toFixed(1)} K`);
+  if (subcooling.change !== null && subcooling.change >= SETTLED_MAX_CHANGE_K) moving.push(`subcooling moved ${subcooling.change.toFixed(1)} K`);
   if (moving.length > 0) {
     return { ...base, settled: false, reason: `Still moving: ${moving.join(", ")} in the last ${SETTLED_WINDOW_MINUTES} min (limit ${SETTLED_MAX_CHANGE_K} K)` };
+  }
+  const drifting: string[] = [];
+  if (superheat.rate !== null && Math.abs(superheat.rate) >= SETTLED_MAX_RATE_K_PER_MIN) drifting.push(`superheat ${superheat.rate.toFixed(2)} K/min`);
+  if (subcooling.rate !== null && Math.abs(subcooling.rate) >= SETTLED_MAX_RATE_K_PER_MIN) drifting.push(`subcooling ${subcooling.rate.toFixed(2)} K/min`);
+  if (drifting.length > 0) {
+    return { ...base, settled: false, reason: `Still drifting: ${drifting.join(", ")} (limit ${SETTLED_MAX_RATE_K_PER_MIN} K/min)` };
   }
   return {
     ...base,
     settled: true,
-    reason: `Superheat and subcooling each changed less than ${SETTLED_MAX_CHANGE_K} K over the last ${SETTLED_WINDOW_MINUTES} min`,
+    reason: `Superheat and subcooling each changed less than ${SETTLED_MAX_CHANGE_K} K, and drift less than ${SETTLED_MAX_RATE_K_PER_MIN} K/min, over the last ${SETTLED_WINDOW_MINUTES} min`,
   };
 }
 
 /**
  * Settling assessment of one circuit's run log: the circuit is settled when superheat and
- * subcooling have each changed by less than `SETTLED_MAX_CHANGE_K` (1 K) over the last
+ * subcooling have each changed by less than `SETTLED_MAX_CHANGE_K` (1 K) and drift by less
+ * than `SETTLED_MAX_RATE_K_PER_MIN` (0.1 K/min, least-squares slope) over the last
  * `SETTLED_WINDOW_MINUTES` (5 min) of readings since the last adjustment, and the unit has run
  * at least 10 minutes when the run time is recorded (TRADE.md §1.5 [S10][S20]). Also gives the
- * least-squares rate of change over that window (K/min) and the most recent settled reading
- * with its diagnosis. Readings must be in time order; each is diagnosed with `diagnose()`.
+ * rate of change over that window (K/min) and the most recent settled reading with its
+ * diagnosis. Readings must be in time order. A reading that carries its stored `result` (the
+ * server's diagnosis when it was saved) is judged from it; others are diagnosed here.
+ *
+ * Cost: linear in the number of readings times the readings per window (times are parsed
+ * once, adjustments found in one pass, windows found with a moving pointer).
  *
  * Units: ISO 8601 times in; K, K/min, minutes out.
  *
@@ -131,25 +146,43 @@ export function assessTrend(readings: readonly unknown[]): TrendResult {
   const parsed = TrendInputSchema.safeParse(readings);
   if (!parsed.success) throw DiagnosisInputError.fromZodError(parsed.error);
   const series = parsed.data;
-  const results = series.map((reading) => diagnose(reading.input));
+  const count = series.length;
+  const results: DiagnosisResult[] = series.map((reading) => reading.result ?? diagnose(reading.input));
 
+  const origin = Date.parse(series[0]!.takenAt);
+  const minutes = new Float64Array(count);
+  const adjustedAt = new Int32Array(count);
+  const windowStart = new Int32Array(count);
+  let adjustment = 0;
+  let pointer = 0;
+  for (let index = 0; index < count; index += 1) {
+    minutes[index] = (Date.parse(series[index]!.takenAt) - origin) / 60_000;
+    if (series[index]!.adjustment !== undefined) adjustment = index;
+    adjustedAt[index] = adjustment;
+    // The window: from the latest reading at or before (this − window) up to this one.
+    while (pointer + 1 <= index && minutes[index]! - minutes[pointer + 1]! >= SETTLED_WINDOW_MINUTES) pointer += 1;
+    windowStart[index] = minutes[index]! - minutes[pointer]! >= SETTLED_WINDOW_MINUTES ? pointer : 0;
+  }
+  const superheats = results.map((result) => result.superheatK);
+  const subcoolings = results.map((result) => result.subcoolingK);
+
+  const latestStatus = windowStatus(series, minutes, adjustedAt, windowStart, superheats, subcoolings, count - 1);
   let lastSettled: TrendResult["lastSettled"] = null;
-  let latestStatus: WindowStatus | null = null;
-  for (let index = series.length - 1; index >= 0; index -= 1) {
-    const status = windowStatus(series, results, index);
-    if (index === series.length - 1) latestStatus = status;
+  for (let index = count - 1; index >= 0; index -= 1) {
+    const status = index === count - 1 ? latestStatus : windowStatus(series, minutes, adjustedAt, windowStart, superheats, subcoolings, index);
     if (status.settled) {
       lastSettled = { index, takenAt: series[index]!.takenAt, result: results[index]! };
       break;
     }
   }
-  const status = latestStatus!;
+  const status = latestStatus;
   return {
     settled: status.settled,
     reason: status.reason,
     criterion: {
       windowMinutes: SETTLED_WINDOW_MINUTES,
       maxChangeK: SETTLED_MAX_CHANGE_K,
+      maxRateKPerMin: SETTLED_MAX_RATE_K_PER_MIN,
       minRunMinutes: MIN_RUN_MINUTES,
       source: CRITERION_SOURCE,
     },
@@ -157,6 +190,6 @@ export function assessTrend(readings: readonly unknown[]): TrendResult {
     changeOverWindow: { superheatK: status.superheatChangeK, subcoolingK: status.subcoolingChangeK },
     minutesObserved: status.minutesObserved,
     lastSettled,
-    latest: results[results.length - 1]!,
+    latest: results[count - 1]!,
   };
 }

@@ -5,8 +5,12 @@
  */
 export const PROCEDURE_SOURCES = {
   S4: "ACHR News, The New Wave of Blends (500-micron industry standard; liquid charging of blends)",
+  S1: "Arkema Forane technical centre, Definitions (bubble point, dew point, glide)",
   S10: "California Energy Commission, 2008 Reference Residential Appendices, RA3.2 refrigerant charge verification",
   S11: "Fujitsu FO20R series installation manual §5.8 (weigh-in, ±1 oz scale)",
+  S27: "iheatcool.com, How to Diagnose Non-Condensables (weak)",
+  S28: "Behler-Young tech tip, Non-Condensables in a Refrigeration System",
+  S31: "US Army TM 55-1905-220-14-8, §4-31 (non-condensable test: standing saturation temperature more than 5 °F above the condenser medium)",
   S39: "rhvactools.com, Compressor Rated Load Amperage (RLA) (weak)",
   S40: "RV products 9000 series service manual p. 18 (±10 % voltage)",
   S41: "Trane CXRC-SVX01J installation manual p. 20 (2 % maximum voltage imbalance)",

@@ -44,7 +44,13 @@ export const suctionLineSaturationRule: DiagnosisRule = {
       };
     }
     const atEvaporator = snapshot.suctionTempLocation === "evaporator-outlet";
-    const threshold = atEvaporator ? EVAPORATOR_OUTLET_FLOODBACK_K : FLOODBACK_SUPERHEAT_K;
+    // Unstated, the reading may be either: never call a superheat inside its own band (a
+    // freezer valve holds about 2.8 K [S15]) a floodback.
+    const threshold = atEvaporator
+      ? EVAPORATOR_OUTLET_FLOODBACK_K
+      : snapshot.suctionTempLocation === null
+        ? Math.min(FLOODBACK_SUPERHEAT_K, snapshot.superheatTarget?.lowK ?? FLOODBACK_SUPERHEAT_K)
+        : FLOODBACK_SUPERHEAT_K;
     if (superheat >= threshold) return NO_OUTPUT;
     return {
       findings: [],
@@ -55,7 +61,7 @@ export const suctionLineSaturationRule: DiagnosisRule = {
           field: "suctionLineTempC",
           message: atEvaporator
             ? `Superheat ${formatTenths(superheat)} K at the evaporator outlet is all but zero: liquid is leaving the coil and may reach the compressor; do not add refrigerant`
-            : `Superheat ${formatTenths(superheat)} K is under ${FLOODBACK_SUPERHEAT_K} K: liquid may be reaching the compressor; do not add refrigerant`,
+            : `Superheat ${formatTenths(superheat)} K is under ${formatTenths(threshold)} K: liquid may be reaching the compressor; do not add refrigerant`,
           source: SOURCE,
         },
       ],

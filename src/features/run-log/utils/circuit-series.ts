@@ -43,7 +43,7 @@ export function circuitSeries(readings: readonly Reading[], adjustments: readonl
             const change = relevant.find(
               (adjustment) => Date.parse(adjustment.at) <= Date.parse(reading.takenAt) && (!previous || Date.parse(adjustment.at) > Date.parse(previous.takenAt)),
             );
-            return { takenAt: reading.takenAt, input: reading.input, ...(change ? { adjustment: change.description } : {}) };
+            return { takenAt: reading.takenAt, input: reading.input, result: reading.result, ...(change ? { adjustment: change.description } : {}) };
           }),
         );
 
