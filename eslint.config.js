@@ -8,7 +8,7 @@ import globals from "globals";
 import tseslint from "typescript-eslint";
 
 export default tseslint.config(
-  { ignores: ["dist/**", "node_modules/**", "coverage/**", "data/**", "drizzle/**", "test-results/**", "playwright-report/**"] },
+  { ignores: [".scratch/**", "dist/**", "node_modules/**", "coverage/**", "data/**", "drizzle/**", "test-results/**", "playwright-report/**"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

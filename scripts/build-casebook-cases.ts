@@ -8,7 +8,7 @@ import { designCaseInput, type CaseDesign } from "../shared/engine/casebook/desi
 import { expectedAnswers } from "../shared/engine/casebook/expected-answers.ts";
 import { diagnose } from "../shared/engine/index.ts";
 import { BuiltInCaseFileSchema, BUILT_IN_CASE_FORMAT, type BuiltInCase, type CaseDifficulty, type CaseStory } from "../shared/schemas/casebook.ts";
-import type { ChargeState, DiagnosisInput } from "../shared/schemas/diagnosis.ts";
+import type { Application, ChargeState, DiagnosisInput } from "../shared/schemas/diagnosis.ts";
 
 type Spec = {
   id: string; title: string; difficulty: CaseDifficulty; story: CaseStory; state: ChargeState;
@@ -42,8 +42,8 @@ const SPECS: Spec[] = [
     reasoning: "Subcooling far above the 5 K target with high head pressure and amps over RLA, while the TXV holds superheat: too much refrigerant is stacked in the condenser.", sources: ["S21", "S23", "S39"] },
   { id: "wattle-lane-rtu1-c2-humming-compressor", title: "Wattle Lane RTU-1, circuit 2: runs all day, little cooling", difficulty: "advanced", state: "weak-compressor",
     story: { site: WATTLE, equipment: `${RTU(2)}; discharge gauge on the compressor service valve`, complaint: "Circuit 2 runs all day and the upstairs consulting rooms stay warm.", conditions: "Hot afternoon; unit running 30 minutes." },
-    design: d("R407C", "txv", 14, 40, 4, 9), readings: { ...RTU_T, dischargePressureKPa: 1600, returnAirDryBulbC: 26, returnAirWetBulbC: 18.5, supplyAirDryBulbC: 20, outdoorAirDryBulbC: 35, compressorAmps: 8, compressorRla: 17, runMinutes: 30 },
-    reasoning: "Suction high for the load and head only a few kelvin over ambient, with low amps and a small split: the compressor cannot pull its pressure difference.", sources: ["S21", "S29", "S122"] },
+    design: d("R407C", "txv", 17, 37, 4, 3.5), readings: { ...RTU_T, dischargePressureKPa: 1430, returnAirDryBulbC: 26, returnAirWetBulbC: 18.5, supplyAirDryBulbC: 20, outdoorAirDryBulbC: 33, compressorAmps: 8, compressorRla: 17, runMinutes: 30 },
+    reasoning: "The coil runs only about 11 K below the return air (suction high for the load) while condensing sits a few kelvin over ambient, with half the rated amps and a small split: the compressor cannot pull its pressure difference. A shortage would pull the suction down instead.", sources: ["S21", "S29", "S122"] },
   { id: "wattle-lane-rtu1-c1-leafy-condenser", title: "Wattle Lane RTU-1, circuit 1: high-pressure trips after a windy week", difficulty: "intermediate", state: "condenser-airflow",
     story: { site: WATTLE, equipment: RTU(1), complaint: "High-pressure lockouts on circuit 1 after a windy week; gum leaves and lint on the condenser face.", conditions: "Hot, still afternoon; unit running 20 minutes." },
     design: d("R407C", "txv", 9, 57, 6, 2), readings: { ...RTU_T, returnAirDryBulbC: 26, returnAirWetBulbC: 18.5, supplyAirDryBulbC: 15.5, outdoorAirDryBulbC: 34, dischargeLineTempC: 100, compressorAmps: 19, compressorRla: 17, runMinutes: 20 },
@@ -79,6 +79,14 @@ const SPECS: Spec[] = [
     story: { site: WATTLE, equipment: `${COOL}; condensing unit in the courtyard`, complaint: "Compressor cutting out on high pressure; one condenser fan blade is not turning.", conditions: "Warm afternoon; compressor running 30 minutes between trips." },
     design: d("R404A", "txv", -8, 52, 5, 1), readings: { ...COOL_T, returnAirDryBulbC: 3, outdoorAirDryBulbC: 30, dischargeLineTempC: 105, runMinutes: 30 },
     reasoning: "Condensing far above ambient with subcooling below target: the condenser is not rejecting heat. Isolate and prove dead before freeing or replacing the fan motor.", sources: ["S21", "S26"] },
+  { id: "wattle-lane-cool-room-iced-coil", title: "Wattle Lane cool room: coil iced, room creeping up", difficulty: "intermediate", state: "low-evaporator-airflow",
+    story: { site: WATTLE, equipment: COOL, complaint: "Room creeping up to 7 °C; the evaporator fins are white with ice and the defrost heater fuse has blown.", conditions: "Mild morning; compressor running continuously for 40 minutes." },
+    design: d("R404A", "txv", -17, 40, 5.5, 4), readings: { ...COOL_T, suctionTempLocation: "evaporator-outlet", returnAirDryBulbC: 4, supplyAirDryBulbC: 1, outdoorAirDryBulbC: 27, runMinutes: 40 },
+    reasoning: "Superheat and subcooling sit on their targets, yet the coil runs about 20 K below a 4 °C room where a cool-room coil runs 4–10 K: ice is starving it of air. Comfort-cooling bands would have called this normal. Defrost and repair the heater before touching the charge.", sources: ["S15", "S21"] },
+  { id: "wattle-lane-rtu1-c2-bulb-adrift", title: "Wattle Lane RTU-1, circuit 2: suction line frosting to the compressor", difficulty: "advanced", state: "overfeeding-metering",
+    story: { site: WATTLE, equipment: RTU(2), complaint: "After a coil clean the suction line sweats and frosts back to the compressor; the TXV bulb strap was found loose.", conditions: "Warm afternoon; unit running 25 minutes." },
+    design: d("R407C", "txv", 8, 45, 0.5, 5), readings: { ...RTU_T, suctionTempLocation: "evaporator-outlet", returnAirDryBulbC: 25, returnAirWetBulbC: 18, supplyAirDryBulbC: 15, outdoorAirDryBulbC: 33, dischargeLineTempC: 62, compressorAmps: 13, compressorRla: 17, runMinutes: 25 },
+    reasoning: "Superheat almost zero at the evaporator outlet while subcooling and head are on target: not an overcharge but a valve overfeeding — a bulb that no longer feels the suction line. Refit and insulate the bulb; never add refrigerant with liquid reaching the compressor.", sources: ["S17", "S21"] },
   // ----- Banksia Street Dental (R410A)
   { id: "banksia-dental-piston-service", title: "Banksia Street Dental: ducted split with a piston, annual service", difficulty: "starter", state: "normal",
     story: { site: "Banksia Street Dental, a single-storey surgery (invented)", equipment: "Ducted split on R410A with a fixed orifice (piston) in the indoor coil", complaint: "Annual service before summer.", conditions: "Hot afternoon; unit running 20 minutes; wet bulb measured in the return duct." },
@@ -94,8 +102,8 @@ const SPECS: Spec[] = [
     reasoning: "Low superheat could look like an overcharge, but subcooling is normal and the air split is wide: the coil is short of air. Floodback risk until it is fixed.", sources: ["S21", "S33"] },
   { id: "banksia-dental-new-install-air", title: "Banksia Street Dental: new TXV system, high head from day one", difficulty: "advanced", state: "non-condensables",
     story: { site: "Banksia Street Dental, a single-storey surgery (invented)", equipment: "New ducted split on R410A with a TXV; nameplate target subcooling 6 K", complaint: "Installed last week by another firm; head pressure high from the first day. The line set may not have been evacuated.", conditions: "Hot afternoon; unit running 20 minutes." },
-    design: d("R410A", "txv", 8, 57, 5, 6), readings: { ...COMFORT, dischargeLineTempC: 99, compressorAmps: 19.8, compressorRla: 18, targetSubcoolingK: 6, runMinutes: 20 },
-    reasoning: "Subcooling is on target, so the charge is right, yet condensing is far above ambient with amps over RLA: gas that does not condense is taking condenser space. Confirm with a standing-pressure check.", sources: ["S27", "S28", "S39"] },
+    design: d("R410A", "txv", 8, 56, 5, 11), readings: { ...COMFORT, dischargeLineTempC: 99, compressorAmps: 19.8, compressorRla: 18, targetSubcoolingK: 6, runMinutes: 20 },
+    reasoning: "Condensing far above ambient and subcooling reading 11 K against 6 K, yet the liquid leaves 10 K above the outdoor air — a condenser stacked with surplus liquid would cool it close to ambient. The gauge is reading air's pressure: confirm with a standing-pressure check.", sources: ["S27", "S28", "S39"] },
   { id: "banksia-dental-probe-on-discharge", title: "Banksia Street Dental: the subcooling probe on the wrong pipe", difficulty: "intermediate", state: "insufficient-data",
     story: { site: "Banksia Street Dental, a single-storey surgery (invented)", equipment: "Ducted split on R410A with a TXV; no maker's targets found", complaint: "A new technician's readings for review: the 'liquid' clamp was fitted to the discharge line.", conditions: "Hot afternoon; unit running 20 minutes." },
     design: d("R410A", "txv", 7, 46, 5, 0), readings: { ...COMFORT, liquidTempLocation: "discharge-line", liquidLineTempC: 80, runMinutes: 20 },
@@ -120,8 +128,8 @@ const SPECS: Spec[] = [
     reasoning: "The capillary's target from wet bulb and outdoor dry bulb matches the measured superheat, and subcooling and head agree.", sources: ["S10", "S17"] },
   { id: "kookaburra-portable-r290-overfilled", title: "Kookaburra Early Learning: propane unit recharged by weight — wrongly", difficulty: "intermediate", state: "overcharged",
     story: { site: "Kookaburra Early Learning Centre, nap room (invented)", equipment: "Portable room air conditioner on R290 with a capillary", complaint: "Recharged after a repair; the scale was zeroed with the hose full. Cools poorly and the compressor is hot.", conditions: "Warm afternoon; running 20 minutes." },
-    design: d("R290", "capillary", 10, 52, 2.5, 10), readings: { returnAirDryBulbC: 25, returnAirWetBulbC: 18, supplyAirDryBulbC: 14.5, outdoorAirDryBulbC: 32, runMinutes: 20 },
-    reasoning: "Superheat well under the capillary target with high subcooling and head: overcharged. On a flammable refrigerant, recover with a suitable machine and no ignition sources.", safetyTopics: ["recovery-cylinder"], sources: ["S10", "S21", "S23"] },
+    design: d("R290", "capillary", 10, 50, 2.5, 13), readings: { returnAirDryBulbC: 25, returnAirWetBulbC: 18, supplyAirDryBulbC: 14.5, outdoorAirDryBulbC: 32, runMinutes: 20 },
+    reasoning: "Superheat well under the capillary target with high subcooling and head, and the liquid leaving only 5 K above the room: overcharged. On a flammable refrigerant, recover with a suitable machine and no ignition sources.", safetyTopics: ["recovery-cylinder"], sources: ["S10", "S21", "S23"] },
   // ----- Greywater Brewing (R134a glycol chiller)
   { id: "greywater-brewing-chiller-leak", title: "Greywater Brewing: glycol chiller slow to pull down", difficulty: "starter", state: "undercharged",
     story: { site: "Greywater Brewing, fermentation hall (invented)", equipment: "Air-cooled glycol chiller on R134a with a TXV", complaint: "Glycol takes hours to pull down after a brew day; oil on the condenser coil bends.", conditions: "Warm afternoon; chiller running 30 minutes." },
@@ -129,8 +137,8 @@ const SPECS: Spec[] = [
     reasoning: "Subcooling under the common band on a TXV, high superheat and condensing close to ambient: undercharged.", safetyTopics: ["nitrogen"], sources: ["S14", "S21", "S26"] },
   { id: "greywater-brewing-chiller-after-repair", title: "Greywater Brewing: high head after a compressor change", difficulty: "advanced", state: "non-condensables",
     story: { site: "Greywater Brewing, fermentation hall (invented)", equipment: "Air-cooled glycol chiller on R134a with a TXV", complaint: "Compressor replaced last week; head pressure has been high since, condenser clean.", conditions: "Hot afternoon; chiller running 30 minutes." },
-    design: d("R134a", "txv", 6, 55, 5, 6), readings: { outdoorAirDryBulbC: 33, dischargeLineTempC: 96, runMinutes: 30 },
-    reasoning: "Head far above ambient while subcooling is normal and the condenser is clean: non-condensables left after the repair. Recover, evacuate properly and recharge by weight.", sources: ["S27", "S28"] },
+    design: d("R134a", "txv", 6, 55, 5, 12), readings: { outdoorAirDryBulbC: 33, dischargeLineTempC: 96, runMinutes: 30 },
+    reasoning: "Head far above ambient and subcooling reading 12 K with a clean condenser, yet the liquid leaves 10 K above the outdoor air: air left in after the repair, not surplus refrigerant. Confirm with a standing-pressure check, then recover, evacuate properly and recharge by weight.", sources: ["S27", "S28"] },
   { id: "greywater-brewing-chiller-power-head", title: "Greywater Brewing: TXV not feeding", difficulty: "intermediate", state: "restricted-metering",
     story: { site: "Greywater Brewing, cellar (invented)", equipment: "Air-cooled glycol chiller on R134a with a TXV", complaint: "Suction pressure low and the glycol warm; the TXV bulb clamp is loose and the power head is cold.", conditions: "Warm afternoon; chiller running 30 minutes." },
     design: d("R134a", "txv", -4, 40, 14, 10), readings: { outdoorAirDryBulbC: 30, runMinutes: 30 },
@@ -189,8 +197,16 @@ const SPECS: Spec[] = [
     reasoning: "Low superheat with normal subcooling and a wide air split: the coil is short of air (here still iced). Let it defrost and re-read before judging the charge.", sources: ["S21", "S33"] },
 ];
 
+/** What each site's equipment does (the bands the engine judges it by). */
+function applicationOf(spec: Spec): Application {
+  if (spec.id.startsWith("wattle-lane-cool-room") || spec.id === "wattle-lane-staff-fridge-capillary") return "medium-temperature-refrigeration";
+  if (spec.id.startsWith("magpie-meats") || spec.id.startsWith("lyrebird-grocers")) return "low-temperature-refrigeration";
+  if (spec.id.startsWith("greywater-brewing") || spec.id.startsWith("riverbend-ice") || spec.id.startsWith("currawong-college")) return "process-chilling";
+  return "comfort-cooling";
+}
+
 const cases: BuiltInCase[] = SPECS.map((spec) => {
-  const input = designCaseInput({ ...spec.design, pressureResolutionKPa: 1, readings: spec.readings });
+  const input = designCaseInput({ ...spec.design, pressureResolutionKPa: 1, readings: { application: applicationOf(spec), ...spec.readings } });
   const result = diagnose(input);
   if (result.chargeState !== spec.state) console.error(`!! ${spec.id}: engine says ${result.chargeState}, wanted ${spec.state}`, result.alternatives.slice(0, 2), result.warnings.map((w) => w.code));
   const expected = expectedAnswers(result);

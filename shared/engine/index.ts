@@ -67,7 +67,10 @@ export { expectedAnswers } from "./casebook/expected-answers.ts";
 export { scoreAttempt } from "./casebook/score-attempt.ts";
 export { workedSolution } from "./casebook/worked-solution.ts";
 export { caseSafetyNotes } from "./casebook/case-safety-notes.ts";
-export { generateCase, GENERATOR_REFRIGERANTS, SENSOR_NOISE_K, GAUGE_RESOLUTION_KPA, MAX_GENERATOR_DRAWS } from "./casebook/generate-case.ts";
+export { generateCase, GENERATOR_REFRIGERANTS, SENSOR_NOISE_K, GAUGE_NOISE_FRACTION, GAUGE_RESOLUTION_KPA, MAX_GENERATOR_DRAWS } from "./casebook/generate-case.ts";
+export { drawFaultScenario } from "./casebook/draw-fault-scenario.ts";
+export type { FaultScenario, FaultScenarioOptions } from "./casebook/draw-fault-scenario.ts";
+export { OPERATING_POINTS, FAULT_MOVES, BAND_UNITS } from "./casebook/fault-scenarios.ts";
 export type { GeneratedCase, GenerateCaseOptions } from "./casebook/generate-case.ts";
 
 // Procedures (electrical checks, pressure test, evacuation, refrigerant register, charging)

@@ -14,11 +14,14 @@
 import { z } from "zod";
 import { ROLES, type Role } from "./auth.ts";
 import {
+  ApplicationSchema,
   ChargeStateSchema,
   DiagnosisInputSchema,
   MeteringDeviceSchema,
   TargetBandSchema,
   WarningCodeSchema,
+  type Application,
+  type MeteringDevice,
 } from "./diagnosis.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -168,6 +171,7 @@ export const GENERATOR_FAULTS = [
   "overcharged",
   "restricted-metering",
   "low-evaporator-airflow",
+  "overfeeding-metering",
   "condenser-airflow",
   "non-condensables",
   "weak-compressor",
@@ -175,18 +179,35 @@ export const GENERATOR_FAULTS = [
 export const GeneratorFaultSchema = z.enum(GENERATOR_FAULTS, { error: "Choose the fault to practise" });
 export type GeneratorFault = z.infer<typeof GeneratorFaultSchema>;
 
-export const GenerateCaseSchema = z.object({
-  refrigerant: z.string().trim().min(1, "Choose the refrigerant"),
-  meteringDevice: MeteringDeviceSchema,
-  fault: GeneratorFaultSchema,
-  /** Same seed, same case; the server picks one when absent. */
-  seed: z
-    .number()
-    .int()
-    .min(0)
-    .max(2 ** 32 - 1)
-    .optional(),
-});
+/** Metering devices each application is built with (a fixed orifice is a comfort-cooling part). */
+export const GENERATOR_DEVICES: Readonly<Record<Application, readonly MeteringDevice[]>> = {
+  "comfort-cooling": ["txv", "eev", "fixed-orifice", "capillary"],
+  "heat-pump": ["txv", "eev", "fixed-orifice"],
+  "medium-temperature-refrigeration": ["txv", "eev", "capillary"],
+  "low-temperature-refrigeration": ["txv", "eev", "capillary"],
+  "process-chilling": ["txv", "eev"],
+};
+
+export const GenerateCaseSchema = z
+  .object({
+    refrigerant: z.string().trim().min(1, "Choose the refrigerant"),
+    meteringDevice: MeteringDeviceSchema,
+    fault: GeneratorFaultSchema,
+    /** What the equipment does; comfort cooling when absent. */
+    application: ApplicationSchema.optional(),
+    /** Same seed, same case; the server picks one when absent. */
+    seed: z
+      .number()
+      .int()
+      .min(0)
+      .max(2 ** 32 - 1)
+      .optional(),
+  })
+  // A fixed orifice belongs to air conditioning, a capillary to small units and cabinets, never to a chiller.
+  .refine((options) => GENERATOR_DEVICES[options.application ?? "comfort-cooling"].includes(options.meteringDevice), {
+    path: ["meteringDevice"],
+    message: "That metering device is not used in that application: choose a TXV or EEV (or a capillary for small refrigeration)",
+  });
 export type GenerateCase = z.infer<typeof GenerateCaseSchema>;
 
 /**
@@ -195,20 +216,28 @@ export type GenerateCase = z.infer<typeof GenerateCaseSchema>;
  * "~" never occurs in refrigerant names, devices or faults, and needs no URL escaping.
  */
 const GENERATED_PREFIX = "gen";
-export function generatedCaseId(options: Required<GenerateCase>): string {
-  return [GENERATED_PREFIX, options.seed, options.meteringDevice, options.fault, options.refrigerant].join("~");
+export type GeneratedCaseOptions = Omit<GenerateCase, "seed" | "application"> & { seed: number; application?: Application };
+
+export function generatedCaseId(options: GeneratedCaseOptions): string {
+  const parts: (string | number)[] = [GENERATED_PREFIX, options.seed, options.meteringDevice, options.fault, options.refrigerant];
+  // Comfort cooling needs no part of its own, so ids made before applications existed still work.
+  if (options.application && options.application !== "comfort-cooling") parts.push(options.application);
+  return parts.join("~");
 }
 
-export function parseGeneratedCaseId(id: string): Required<GenerateCase> | null {
-  const [prefix, seed, meteringDevice, fault, ...rest] = id.split("~");
-  if (prefix !== GENERATED_PREFIX || rest.length !== 1 || !/^\d+$/.test(seed ?? "")) return null;
-  const parsed = GenerateCaseSchema.required().safeParse({
+export function parseGeneratedCaseId(id: string): GeneratedCaseOptions | null {
+  const [prefix, seed, meteringDevice, fault, refrigerant, application, ...rest] = id.split("~");
+  if (prefix !== GENERATED_PREFIX || rest.length !== 0 || !refrigerant || !/^\d+$/.test(seed ?? "")) return null;
+  const parsed = GenerateCaseSchema.safeParse({
     seed: Number(seed),
     meteringDevice,
     fault,
-    refrigerant: rest[0],
+    refrigerant,
+    ...(application === undefined ? {} : { application }),
   });
-  return parsed.success ? parsed.data : null;
+  if (!parsed.success || parsed.data.seed === undefined) return null;
+  const { seed: parsedSeed, application: parsedApplication, ...rest2 } = parsed.data;
+  return { ...rest2, seed: parsedSeed, ...(parsedApplication ? { application: parsedApplication } : {}) };
 }
 
 /** One case as the API sends it. `expected` is present only for authors (preview) and after an attempt. */

@@ -74,24 +74,26 @@ export function drawFaultScenario(options: FaultScenarioOptions): FaultScenario 
   const gauge = (absoluteKPa: number) => Math.round(absoluteKPa * (1 + between(random, [-options.pressureNoiseFraction, options.pressureNoiseFraction])) - STANDARD_ATMOSPHERE_KPA);
 
   // Operating point; a fixed orifice in comfort cooling needs a chart target (TRADE.md §1.4).
-  let outdoor = 0;
-  let returnDry = 0;
-  let returnWet: number | null = null;
+  const drawConditions = () => {
+    const outdoor = between(random, point.outdoorC);
+    const returnDry = between(random, point.returnC);
+    const returnWet = point.wetBulbDepressionK ? returnDry - between(random, point.wetBulbDepressionK) : null;
+    return { outdoor, returnDry, returnWet };
+  };
+  let conditions = drawConditions();
   let chartTarget: number | null = null;
-  for (let draw = 0; ; draw += 1) {
-    outdoor = between(random, point.outdoorC);
-    returnDry = between(random, point.returnC);
-    returnWet = point.wetBulbDepressionK ? returnDry - between(random, point.wetBulbDepressionK) : null;
-    if (!fixed || point.capillarySuperheatTargetK !== null) break;
-    if (meteringDevice === "fixed-orifice" || meteringDevice === "capillary") {
-      const target = returnWet === null ? null : fixedOrificeTargetSuperheat(returnWet, outdoor);
+  if (fixed && point.capillarySuperheatTargetK === null) {
+    for (let draw = 0; ; draw += 1) {
+      const target = conditions.returnWet === null ? null : fixedOrificeTargetSuperheat(conditions.returnWet, conditions.outdoor);
       if (target?.status === "ok" && target.targetK >= MIN_CHART_TARGET_K) {
         chartTarget = target.targetK;
         break;
       }
+      if (draw >= MAX_CHART_DRAWS) throw new RangeError(`drawFaultScenario requires conditions with a charging-chart target; none found for ${application}`);
+      conditions = drawConditions();
     }
-    if (draw >= MAX_CHART_DRAWS) throw new RangeError(`drawFaultScenario requires conditions with a charging-chart target; none found for ${application}`);
   }
+  const { outdoor, returnDry, returnWet } = conditions;
 
   // Evaporator and condenser.
   const evaporatorTd = between(random, point.evaporatorTdK) + between(random, move.evaporatorTdUnits) * units.evaporatorTdK;

@@ -24,6 +24,8 @@ import { tablePressureRange } from "./table-pressure-range.ts";
 import type { DiagnosisSnapshot, Exclusion } from "./types.ts";
 
 const SPLIT_SOURCE = SPLIT_TARGET_MODEL.source;
+/** The one refrigerant run above its critical point in service (CO₂ gas coolers). */
+const TRANSCRITICAL_REFRIGERANT = "R744";
 
 function difference(first: number | null | undefined, second: number | null | undefined): number | null {
   return first === null || first === undefined || second === null || second === undefined ? null : first - second;
@@ -119,9 +121,10 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
   const liquidPressureKPaAbs = gaugeToAbsolute(input.liquidPressureKPa, atmosphericPressureKPa);
   const dischargePressureKPaAbs =
     input.dischargePressureKPa === undefined ? null : gaugeToAbsolute(input.dischargePressureKPa, atmosphericPressureKPa);
-  // Above the critical pressure there is no condensing at all (R744 gas coolers).
+  // Above the critical pressure there is no condensing at all: R744 gas coolers run there by
+  // design; for any other refrigerant such a reading is outside the table.
   const criticalKPa = info.criticalPoint.pressureKPa;
-  const transcritical = liquidPressureKPaAbs > criticalKPa;
+  const transcritical = refrigerant === TRANSCRITICAL_REFRIGERANT && liquidPressureKPaAbs > criticalKPa;
 
   // Superheat from the dew point, subcooling from the bubble point (TRADE.md §1.1 [S1][S2][S3]).
   const evaporatingTempC = saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "dew", outsideTable);
@@ -129,7 +132,7 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
   const condensingTempC = transcritical ? null : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "bubble", outsideTable);
   const condensingDewTempC = transcritical ? null : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "dew", outsideTable);
   const dischargeDewTempC =
-    dischargePressureKPaAbs === null || dischargePressureKPaAbs > criticalKPa
+    dischargePressureKPaAbs === null || (transcritical && dischargePressureKPaAbs > criticalKPa)
       ? condensingDewTempC
       : saturationOrExclusion(refrigerant, "dischargePressureKPa", dischargePressureKPaAbs, "dew", outsideTable);
 

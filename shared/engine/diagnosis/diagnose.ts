@@ -71,7 +71,7 @@ function readingsLeftOut(snapshot: DiagnosisSnapshot): LeftOutReading[] {
  * a danger warning (liquid floodback, a suction below the table, a discharge line past its
  * limit) never ends as "normal"; a fixed device without its superheat target names no charge
  * state (weigh in [S10]); without the family's charge signal the other readings must agree
- * more strongly and the confidence is lowered; a short run time lowers the confidence. Below the
+ * more strongly, "normal" cannot be confirmed, and the confidence is lowered; a short run time lowers the confidence. Below the
  * threshold the verdict is "insufficient-data". Symptom patterns: TRADE.md §2 [S21]–[S24].
  *
  * Units: kPa gauge, °C in; °C, K, ratios out (see `DiagnosisResultSchema`).
@@ -132,6 +132,9 @@ export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
   let verdict: RankedState | null = null;
   for (const entry of ranked) {
     if (!chargeVerdictAllowed && CHARGE_VERDICTS.has(entry.state)) continue;
+    // Without the charge signal a fault can still be named on strong evidence, but "the charge
+    // is right" cannot be confirmed.
+    if (!judged && entry.state === "normal") continue;
     if (entry.score >= minimum) verdict = entry;
     break;
   }

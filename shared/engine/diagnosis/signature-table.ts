@@ -149,7 +149,7 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
   },
   "non-condensables": {
     cells: {
-      superheat: cell("normal", 0.3),
+      superheat: cell("normal", 0.5),
       subcooling: cell("high", 1),
       evaporatorTd: cell("normal", 0.3),
       condensingOverAmbient: cell("high", 1.2),

@@ -87,11 +87,50 @@ describe("diagnose (properties)", () => {
     );
   });
 
-  it("never gives a verdict on a fixed orifice without a superheat target (weigh in [S10])", () => {
+  // Without its superheat target a fixed device's charge cannot be judged (weigh in [S10]): no
+  // charge verdict, whatever else the readings show (a fault elsewhere may still be named).
+  it("never names a charge state on a fixed orifice without a superheat target (weigh in [S10])", () => {
     fc.assert(
       fc.property(circuit, (input) => {
         const bare = { ...input, meteringDevice: "fixed-orifice" as const, returnAirWetBulbC: undefined, returnAirRelativeHumidity: undefined, targetSuperheatK: undefined };
-        return diagnose(bare).chargeState === "insufficient-data";
+        return !["normal", "undercharged", "overcharged"].includes(diagnose(bare).chargeState);
+      }),
+    );
+  });
+
+  // A danger to the plant (liquid reaching the compressor, a suction below the table, a discharge
+  // line past its limit) never ends as "normal" (TRADE.md §1.3 [S17], §3 [S13]).
+  it("never calls a circuit with a danger warning normal", () => {
+    fc.assert(
+      fc.property(circuit, (input) => {
+        const result = diagnose(input);
+        const danger = result.warnings.some((warning) => warning.severity === "danger");
+        return !danger || (result.chargeState !== "normal" && result.alternatives.every((alternative) => alternative.state !== "normal"));
+      }),
+    );
+  });
+
+  // The headline never contradicts the first lines of its evidence: the verdict's own signature
+  // comes first, and the reading listed next supports the verdict.
+  it("puts the verdict's signature first and leads with evidence that supports it", () => {
+    fc.assert(
+      fc.property(circuit, (input) => {
+        const result = diagnose(input);
+        if (result.chargeState === "insufficient-data") return true;
+        const [first, second] = result.findings;
+        if (first?.direction !== "summary") return false;
+        if (!second) return true;
+        return (second.pointsTo.find((evidence) => evidence.state === result.chargeState)?.weight ?? 0) > 0;
+      }),
+    );
+  });
+
+  it("trusts readings taken before the unit has run 10 minutes less (Title 24 reads at 15 min [S10])", () => {
+    fc.assert(
+      fc.property(circuit, fc.integer({ min: 0, max: 9 }), (input, minutes) => {
+        const early = diagnose({ ...input, runMinutes: minutes });
+        const settled = diagnose({ ...input, runMinutes: 20 });
+        return early.chargeState !== settled.chargeState || early.confidence <= settled.confidence * 0.96 || settled.confidence === 0;
       }),
     );
   });
