@@ -64,16 +64,29 @@ function saturationOrExclusion(refrigerant: string, field: string, pressureKPaAb
   }
 }
 
+/** Approach bands already built, by condensing band and subcooling target (performance). */
+const approachBands = new WeakMap<object, Map<number, TargetBand>>();
+
 /** Expected liquid line − outdoor air: condensing over ambient minus subcooling (TRADE.md §3 [S26]). */
 function approachTarget(condensing: { lowK: number; highK: number }, subcoolingTargetK: number): TargetBand {
-  const expected = (condensing.lowK + condensing.highK) / 2 - subcoolingTargetK;
-  return {
-    targetK: expected,
-    lowK: expected - CONDENSER_APPROACH_TOLERANCE_K,
-    highK: expected + CONDENSER_APPROACH_TOLERANCE_K,
-    basis: "formula",
-    source: CONDENSER_APPROACH_SOURCE,
-  };
+  let bySubcooling = approachBands.get(condensing);
+  if (!bySubcooling) {
+    bySubcooling = new Map();
+    approachBands.set(condensing, bySubcooling);
+  }
+  let band = bySubcooling.get(subcoolingTargetK);
+  if (!band) {
+    const expected = (condensing.lowK + condensing.highK) / 2 - subcoolingTargetK;
+    band = Object.freeze({
+      targetK: expected,
+      lowK: expected - CONDENSER_APPROACH_TOLERANCE_K,
+      highK: expected + CONDENSER_APPROACH_TOLERANCE_K,
+      basis: "formula" as const,
+      source: CONDENSER_APPROACH_SOURCE,
+    });
+    if (bySubcooling.size < 1000) bySubcooling.set(subcoolingTargetK, band);
+  }
+  return band;
 }
 
 /** The expected air (or fluid) split: psychrometric for comfort coils with a wet bulb, else the application's band. */
@@ -127,10 +140,12 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
   const transcritical = refrigerant === TRANSCRITICAL_REFRIGERANT && liquidPressureKPaAbs > criticalKPa;
 
   // Superheat from the dew point, subcooling from the bubble point (TRADE.md §1.1 [S1][S2][S3]).
+  // A pure refrigerant (or azeotrope) has one saturation curve: one lookup per pressure.
+  const oneCurve = info.kind !== "blend";
   const evaporatingTempC = saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "dew", outsideTable);
-  const evaporatingBubbleTempC = saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "bubble", outsideTable);
+  const evaporatingBubbleTempC = oneCurve ? evaporatingTempC : saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "bubble", outsideTable);
   const condensingTempC = transcritical ? null : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "bubble", outsideTable);
-  const condensingDewTempC = transcritical ? null : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "dew", outsideTable);
+  const condensingDewTempC = transcritical ? null : oneCurve ? condensingTempC : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "dew", outsideTable);
   const dischargeDewTempC =
     dischargePressureKPaAbs === null || (transcritical && dischargePressureKPaAbs > criticalKPa)
       ? condensingDewTempC

@@ -153,9 +153,21 @@ export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
     }
     // The headline's signature first, then the evidence that supports it most.
     const state = verdict.state;
-    const weights = new Map(findings.map((finding) => [finding, evidenceWeight(finding, state)]));
-    findings.sort((first, second) => weights.get(second)! - weights.get(first)!);
-    findings.unshift(summarizeVerdict(state, findings));
+    const weights = new Float64Array(findings.length);
+    const order: number[] = [];
+    for (let index = 0; index < findings.length; index += 1) {
+      weights[index] = evidenceWeight(findings[index]!, state);
+      order.push(index);
+    }
+    order.sort((first, second) => weights[second]! - weights[first]! || first - second);
+    const sorted: Finding[] = [];
+    const sortedWeights = new Float64Array(order.length);
+    for (let index = 0; index < order.length; index += 1) {
+      sorted.push(findings[order[index]!]!);
+      sortedWeights[index] = weights[order[index]!]!;
+    }
+    findings.length = 0;
+    findings.push(summarizeVerdict(state, sorted, sortedWeights), ...sorted);
   }
 
   return {

@@ -1,8 +1,8 @@
 import type { Application } from "../../schemas/diagnosis.ts";
 import { APPLICATION_LIMITS, HOT_DISCHARGE_REFRIGERANTS, HOT_DISCHARGE_SOURCE, type DischargeLineLimits } from "./diagnosis-limits.ts";
 
-/** Built once per refrigerant and application (performance: one lookup per diagnosis). */
-const memo = new Map<string, DischargeLineLimits>();
+/** Built once per refrigerant and application (performance: no key strings per call). */
+const memo = new Map<string, Map<Application, DischargeLineLimits>>();
 
 /**
  * Discharge line temperatures for a refrigerant in an application: where "elevated" starts and
@@ -17,8 +17,12 @@ const memo = new Map<string, DischargeLineLimits>();
  * @example dischargeLineLimits("R32", "comfort-cooling").elevatedC // 102
  */
 export function dischargeLineLimits(refrigerant: string, application: Application): DischargeLineLimits {
-  const key = refrigerant + "|" + application;
-  let limits = memo.get(key);
+  let byApplication = memo.get(refrigerant);
+  if (!byApplication) {
+    byApplication = new Map();
+    memo.set(refrigerant, byApplication);
+  }
+  let limits = byApplication.get(application);
   if (!limits) {
     const base = APPLICATION_LIMITS[application].dischargeLine;
     const hot = HOT_DISCHARGE_REFRIGERANTS[refrigerant];
@@ -26,7 +30,7 @@ export function dischargeLineLimits(refrigerant: string, application: Applicatio
     limits = hot
       ? Object.freeze({ elevatedC: Math.min(limitC - 3, base.elevatedC + hot.elevatedAddK), limitC, source: `${base.source}; ${HOT_DISCHARGE_SOURCE}` })
       : base;
-    memo.set(key, limits);
+    byApplication.set(application, limits);
   }
   return limits;
 }

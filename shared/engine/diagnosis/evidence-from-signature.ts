@@ -1,27 +1,28 @@
 import { CHARGE_STATES, type Evidence, type EvidenceState } from "../../schemas/diagnosis.ts";
 import { signatureCell } from "./signature-cell.ts";
 import { signatureMatch } from "./signature-match.ts";
-import type { MeteringFamily, SignatureCell, SignatureFeature } from "./signature-table.ts";
+import { SIGNATURE_FEATURES, type MeteringFamily, type SignatureCell, type SignatureFeature } from "./signature-table.ts";
 
 const EVIDENCE_STATES = CHARGE_STATES.filter((state): state is EvidenceState => state !== "insufficient-data");
 
-/** The table's cells per feature and family, in state order, built once (performance). */
-const compiled = new Map<string, readonly (readonly [EvidenceState, SignatureCell])[]>();
+type CompiledCells = readonly (readonly [EvidenceState, SignatureCell])[];
 
-function cellsOf(feature: SignatureFeature, family: MeteringFamily) {
-  const key = family === "fixed" ? feature + "|f" : feature;
-  let cells = compiled.get(key);
-  if (!cells) {
+function compile(family: MeteringFamily): Record<SignatureFeature, CompiledCells> {
+  const byFeature = {} as Record<SignatureFeature, CompiledCells>;
+  for (const feature of SIGNATURE_FEATURES) {
     const list: (readonly [EvidenceState, SignatureCell])[] = [];
     for (const state of EVIDENCE_STATES) {
       const found = signatureCell(state, feature, family);
       if (found) list.push([state, found]);
     }
-    cells = list;
-    compiled.set(key, cells);
+    byFeature[feature] = list;
   }
-  return cells;
+  return byFeature;
 }
+
+/** The table's cells per family and feature, in state order, built once (performance: no key strings per call). */
+const FIXED_CELLS = compile("fixed");
+const VALVE_CELLS = compile("expansion-valve");
 
 /**
  * The evidence one judged reading gives each state, read from the signature table: the cell's
@@ -34,12 +35,13 @@ function cellsOf(feature: SignatureFeature, family: MeteringFamily) {
  * @example evidenceFromSignature("superheat", "fixed", 1, 0).find((e) => e.state === "undercharged")?.weight // 1.5
  */
 export function evidenceFromSignature(feature: SignatureFeature, family: MeteringFamily, bandStrength: number, pivotDeviation: number): Evidence[] {
-  const cells = cellsOf(feature, family);
+  const cells = (family === "fixed" ? FIXED_CELLS : VALVE_CELLS)[feature];
   const evidence: Evidence[] = [];
   for (let index = 0; index < cells.length; index += 1) {
-    const [state, found] = cells[index]!;
+    const entry = cells[index]!;
+    const found = entry[1];
     const weight = found.weight * signatureMatch(found.expect, bandStrength, pivotDeviation);
-    if (weight !== 0) evidence.push({ state, weight });
+    if (weight !== 0) evidence.push({ state: entry[0], weight });
   }
   return evidence;
 }

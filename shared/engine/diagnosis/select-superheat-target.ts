@@ -35,6 +35,18 @@ export interface SuperheatTargetOptions {
   allowanceK?: number;
 }
 
+/** The application's default TXV/EEV band, built once and shared (performance). */
+const valveBands = new Map<Application, TargetBand>();
+function valveBand(application: Application): TargetBand {
+  let band = valveBands.get(application);
+  if (!band) {
+    const { lowK, highK, targetK, source } = APPLICATION_LIMITS[application].valveSuperheat;
+    band = Object.freeze({ targetK, lowK, highK, basis: "common-practice" as const, source });
+    valveBands.set(application, band);
+  }
+  return band;
+}
+
 /** Moves a band by the line-set allowance and says so in its source. */
 function shifted(band: TargetBand, byK: number, where: string): TargetBand {
   if (byK === 0) return band;
@@ -92,8 +104,8 @@ export function selectSuperheatTarget(
     return { band: shifted(band, shift, where), note: null, shiftK: shift };
   }
   if (!fixed) {
-    const { lowK, highK, targetK, source } = limits.valveSuperheat;
-    return { band: shifted({ targetK, lowK, highK, basis: "common-practice", source }, shift, where), note: null, shiftK: shift };
+    const band = shifted(valveBand(options.application ?? "comfort-cooling"), shift, where);
+    return { band, note: null, shiftK: shift };
   }
   if (!limits.fixedOrificeChart) return { band: null, note: NO_CHART_NOTE, shiftK: 0 };
   if (returnAirWetBulbC === null || outdoorAirDryBulbC === undefined) {

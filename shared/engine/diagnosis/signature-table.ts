@@ -68,7 +68,6 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       temperatureSplit: cell("normal", 0.6),
       compressorCurrent: cell("normal", 0.3),
       dischargeLine: cell("normal", 0.5),
-      compressionRatio: cell("normal", 0.3),
     },
     source: `every reading in its band ${cite(["S9", "S10", "S26", "S33"])}`,
   },

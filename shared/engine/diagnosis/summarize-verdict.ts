@@ -3,6 +3,12 @@ import { chargeStateText } from "../../content/charge-states.ts";
 import { evidenceWeight } from "./evidence-weight.ts";
 import { SIGNATURES } from "./signature-table.ts";
 
+/** Titles and sources per state, built once (performance). */
+const TITLES = Object.fromEntries(Object.entries(chargeStateText).map(([state, text]) => [state, text.title.toLowerCase()])) as Record<EvidenceState, string>;
+const SOURCES = Object.fromEntries(
+  Object.entries(SIGNATURES).map(([state, signature]) => [state, `signature table (docs/diagnosis-signatures.md): ${signature.source}`]),
+) as Record<EvidenceState, string>;
+
 /** What each judged reading is called in a summary, by direction. */
 const WORDS: Readonly<Record<string, { low: string; normal: string; high: string }>> = {
   superheatK: { low: "superheat low", normal: "superheat on target", high: "superheat high" },
@@ -20,25 +26,34 @@ const WORDS: Readonly<Record<string, { low: string; normal: string; high: string
 
 /**
  * The first evidence line: the verdict's signature in words, made from the judged readings that
- * support it (strongest first), so the headline and the list beneath it always agree.
+ * support it (strongest first; `findings` must come sorted by their weight for `state`, and
+ * `weights`, when given, are those weights in the same order), so the headline and the list
+ * beneath it always agree.
  *
  * @throws never
  * @example summarizeVerdict("undercharged", findings).message // "Matches Undercharged: superheat high, subcooling low, suction low for the load"
  */
-export function summarizeVerdict(state: EvidenceState, findings: readonly Finding[]): Finding {
-  const supporting = findings
-    .map((finding) => ({ finding, weight: evidenceWeight(finding, state) }))
-    .filter(({ finding, weight }) => weight > 0 && WORDS[finding.reading] !== undefined && (finding.direction === "low" || finding.direction === "high" || finding.direction === "normal"))
-    .sort((first, second) => second.weight - first.weight);
-  const parts = supporting.slice(0, 5).map(({ finding }) => WORDS[finding.reading]![finding.direction as "low" | "normal" | "high"]);
+export function summarizeVerdict(state: EvidenceState, findings: readonly Finding[], weights?: ArrayLike<number>): Finding {
+  // The findings come sorted by their weight for the verdict, strongest first (diagnose()).
+  const parts: string[] = [];
+  let total = 0;
+  for (let index = 0; index < findings.length; index += 1) {
+    const finding = findings[index]!;
+    const weight = weights ? weights[index]! : evidenceWeight(finding, state);
+    if (weight <= 0) continue;
+    total += weight;
+    const words = WORDS[finding.reading];
+    const direction = finding.direction;
+    if (parts.length < 5 && words !== undefined && (direction === "low" || direction === "high" || direction === "normal")) parts.push(words[direction]);
+  }
   return {
     ruleId: "signature",
     reading: "chargeState",
-    value: supporting.reduce((sum, { weight }) => sum + weight, 0),
+    value: total,
     unit: "score",
     direction: "summary",
     pointsTo: [],
-    message: `Matches ${chargeStateText[state].title.toLowerCase()}: ${parts.length > 0 ? parts.join(", ") : "the readings in their bands"}`,
-    source: `signature table (docs/diagnosis-signatures.md): ${SIGNATURES[state].source}`,
+    message: `Matches ${TITLES[state]}: ${parts.length > 0 ? parts.join(", ") : "the readings in their bands"}`,
+    source: SOURCES[state],
   };
 }

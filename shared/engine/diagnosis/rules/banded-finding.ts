@@ -5,8 +5,10 @@ import { deviationStrength } from "../deviation-strength.ts";
 import { evidenceFromSignature } from "../evidence-from-signature.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { MeteringFamily, SignatureFeature } from "../signature-table.ts";
+import type { DiagnosisSnapshot } from "../types.ts";
 
-export type Message = (value: string, band: string) => string;
+/** One sentence, given the value and band as text (one decimal) and the snapshot for anything else. */
+export type Message = (value: string, band: string, snapshot: DiagnosisSnapshot) => string;
 
 export interface BandedReading {
   ruleId: string;
@@ -25,7 +27,14 @@ export interface BandedReading {
   pivot?: number;
   /** Sentence per direction, given the value and band as text with one decimal. */
   messages: { low: Message; normal: Message; high: Message };
+  /** The rule's source; the band's own source is added after it when the band has one. */
   source: string;
+}
+
+/** "rule source; band: band source" when the band names its own source. */
+function sourceOf(ruleSource: string, band: Band): string {
+  const bandSource = (band as { source?: unknown }).source;
+  return typeof bandSource === "string" ? `${ruleSource}; band: ${bandSource}` : ruleSource;
 }
 
 /**
@@ -34,16 +43,15 @@ export interface BandedReading {
  * with the numbers filled in (one decimal).
  *
  * @throws {RangeError} when the band is inverted
- * @example bandedFinding({ ruleId: "x", reading: "superheatK", value: 12, unit: "K", band: { lowK: 5, highK: 11 }, feature: "superheat", family: "fixed", messages, source }).direction // "high"
+ * @example bandedFinding({ ruleId: "x", reading: "superheatK", value: 12, unit: "K", band: { lowK: 5, highK: 11 }, feature: "superheat", family: "fixed", messages, source }, snapshot).direction // "high"
  */
-export function bandedFinding(spec: BandedReading): Finding {
+export function bandedFinding(spec: BandedReading, snapshot: DiagnosisSnapshot): Finding {
   const deviation = bandDeviation(spec.value, spec.band);
   const direction = deviation < 0 ? "low" : deviation > 0 ? "high" : "normal";
   const strength = deviationStrength(deviation, spec.fullStrength);
   const bandStrength = deviation < 0 ? -strength : strength;
-  const fullScale = spec.fullStrength ?? undefined;
-  const pivotDeviation = spec.pivot === undefined ? 0 : Math.sign(spec.value - spec.pivot) * deviationStrength(spec.value - spec.pivot, fullScale);
-  const message = spec.messages[direction](formatTenths(spec.value), spec.bandText ?? formatTenths(spec.band.lowK) + "–" + formatTenths(spec.band.highK));
+  const pivotDeviation = spec.pivot === undefined ? 0 : Math.sign(spec.value - spec.pivot) * deviationStrength(spec.value - spec.pivot, spec.fullStrength);
+  const message = spec.messages[direction](formatTenths(spec.value), spec.bandText ?? formatTenths(spec.band.lowK) + "–" + formatTenths(spec.band.highK), snapshot);
   return {
     ruleId: spec.ruleId,
     reading: spec.reading,
@@ -52,6 +60,6 @@ export function bandedFinding(spec: BandedReading): Finding {
     direction,
     pointsTo: evidenceFromSignature(spec.feature, spec.family, bandStrength, pivotDeviation),
     message,
-    source: spec.source,
+    source: sourceOf(spec.source, spec.band),
   };
 }

@@ -1,8 +1,8 @@
 import { HIGH_COMPRESSION_RATIO, LOW_COMPRESSION_RATIO } from "../diagnosis-limits.ts";
 import { MEMORY, cite } from "../sources.ts";
 import { formatTenths } from "../format-tenths.ts";
-import type { DiagnosisRule } from "../types.ts";
-import { bandedFinding } from "./banded-finding.ts";
+import type { DiagnosisRule, DiagnosisSnapshot } from "../types.ts";
+import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
 /** Ratio below the low limit at which the evidence reaches full strength. */
@@ -14,6 +14,14 @@ const HIGH_RATIO_SOURCE = `${MEMORY}; ${cite(["S38"])}`;
 const BAND = { lowK: LOW_COMPRESSION_RATIO, highK: Number.POSITIVE_INFINITY };
 
 /** Compression ratio: too low means the compressor is not pumping; very high strains a single stage. */
+const basisOf = (snapshot: DiagnosisSnapshot) => (snapshot.compressionRatioBasis === "liquid" ? " (from liquid pressure)" : "");
+
+const MESSAGES: BandedReading["messages"] = {
+  low: (_value, _band, snapshot) => `Compression ratio ${snapshot.compressionRatio!.toFixed(2)}:1${basisOf(snapshot)} is below ${LOW_COMPRESSION_RATIO}:1: the compressor is not building a normal pressure difference`,
+  normal: (_value, _band, snapshot) => `Compression ratio ${snapshot.compressionRatio!.toFixed(2)}:1${basisOf(snapshot)}`,
+  high: (_value, _band, snapshot) => `Compression ratio ${snapshot.compressionRatio!.toFixed(2)}:1${basisOf(snapshot)}`,
+};
+
 export const compressionRatioRule: DiagnosisRule = {
   id: "compression-ratio",
   description: `Compression ratio under ${LOW_COMPRESSION_RATIO}:1 points to a weak compressor; over ${HIGH_COMPRESSION_RATIO}:1 expect hot discharge`,
@@ -21,7 +29,23 @@ export const compressionRatioRule: DiagnosisRule = {
   evaluate(snapshot) {
     const ratio = snapshot.compressionRatio;
     if (ratio === null || snapshot.transcritical) return NO_OUTPUT;
-    const basis = snapshot.compressionRatioBasis === "liquid" ? " (from liquid pressure)" : "";
+    if (ratio >= LOW_COMPRESSION_RATIO && ratio <= HIGH_COMPRESSION_RATIO) return NO_OUTPUT;
+    const basis = basisOf(snapshot);
+    // In its band the ratio says little; only a low ratio is evidence (weak compressor).
+    if (ratio > HIGH_COMPRESSION_RATIO) {
+      return {
+        findings: [],
+        warnings: [
+          {
+            code: "compression-ratio-high",
+            severity: "caution",
+            field: "suctionPressureKPa",
+            message: `Compression ratio ${formatTenths(ratio)}:1${basis} is above ${HIGH_COMPRESSION_RATIO}:1: expect high discharge temperatures on a single-stage compressor`,
+            source: HIGH_RATIO_SOURCE,
+          },
+        ],
+      };
+    }
     const finding = bandedFinding({
       ruleId: this.id,
       reading: "compressionRatio",
@@ -32,25 +56,9 @@ export const compressionRatioRule: DiagnosisRule = {
       fullStrength: FULL_STRENGTH_RATIO_BELOW,
       feature: "compressionRatio",
       family: snapshot.meteringFamily,
-      messages: {
-        low: () => `Compression ratio ${ratio.toFixed(2)}:1${basis} is below ${LOW_COMPRESSION_RATIO}:1: the compressor is not building a normal pressure difference`,
-        normal: () => `Compression ratio ${ratio.toFixed(2)}:1${basis}`,
-        high: () => `Compression ratio ${ratio.toFixed(2)}:1${basis}`,
-      },
+      messages: MESSAGES,
       source: SOURCE,
-    });
-    const warnings =
-      ratio > HIGH_COMPRESSION_RATIO
-        ? [
-            {
-              code: "compression-ratio-high" as const,
-              severity: "caution" as const,
-              field: "suctionPressureKPa",
-              message: `Compression ratio ${formatTenths(ratio)}:1${basis} is above ${HIGH_COMPRESSION_RATIO}:1: expect high discharge temperatures on a single-stage compressor`,
-              source: HIGH_RATIO_SOURCE,
-            },
-          ]
-        : [];
-    return { findings: [finding], warnings };
+    }, snapshot);
+    return { findings: [finding], warnings: [] };
   },
 };

@@ -2,12 +2,18 @@ import { CURRENT_RATIO_BAND, CURRENT_RATIO_FULL_STRENGTH } from "../diagnosis-li
 import { COMMON_PRACTICE, cite } from "../sources.ts";
 import { formatHundredths } from "../format-hundredths.ts";
 import type { DiagnosisRule } from "../types.ts";
-import { bandedFinding } from "./banded-finding.ts";
+import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = `${cite(["S39", "S21"])}; ${COMMON_PRACTICE}`;
 
 /** Compressor running current against RLA (RLA is a rating, not the expected running current). */
+const MESSAGES: BandedReading["messages"] = {
+  low: (_value, _band, { input, compressorCurrentRatio }) => `Compressor draws ${input.compressorAmps!.toFixed(1)} A, ${formatHundredths(compressorCurrentRatio!)} × RLA: little refrigerant is being pumped`,
+  normal: (_value, _band, { input, compressorCurrentRatio }) => `Compressor draws ${input.compressorAmps!.toFixed(1)} A, ${formatHundredths(compressorCurrentRatio!)} × RLA: within its rating`,
+  high: (_value, _band, { input, compressorCurrentRatio }) => `Compressor draws ${input.compressorAmps!.toFixed(1)} A, ${formatHundredths(compressorCurrentRatio!)} × RLA: above its rating — high head pressure or high load; investigate`,
+};
+
 export const compressorCurrentRule: DiagnosisRule = {
   id: "compressor-current",
   description: "Compressor current above RLA points to high load (head pressure); far below it, to little refrigerant pumped",
@@ -30,7 +36,6 @@ export const compressorCurrentRule: DiagnosisRule = {
         ],
       };
     }
-    const amps = compressorAmps.toFixed(1);
     const finding = bandedFinding({
       ruleId: this.id,
       reading: "compressorCurrentRatio",
@@ -40,13 +45,9 @@ export const compressorCurrentRule: DiagnosisRule = {
       fullStrength: CURRENT_RATIO_FULL_STRENGTH,
       feature: "compressorCurrent",
       family: snapshot.meteringFamily,
-      messages: {
-        low: () => `Compressor draws ${amps} A, ${formatHundredths(ratio)} × RLA: little refrigerant is being pumped`,
-        normal: () => `Compressor draws ${amps} A, ${formatHundredths(ratio)} × RLA: within its rating`,
-        high: () => `Compressor draws ${amps} A, ${formatHundredths(ratio)} × RLA: above its rating — high head pressure or high load; investigate`,
-      },
+      messages: MESSAGES,
       source: SOURCE,
-    });
+    }, snapshot);
     return { findings: [finding], warnings: [] };
   },
 };

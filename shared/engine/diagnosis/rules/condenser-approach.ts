@@ -2,7 +2,7 @@ import { SENSOR_TOLERANCE_K } from "../diagnosis-limits.ts";
 import { formatTenths } from "../format-tenths.ts";
 import { cite } from "../sources.ts";
 import type { DiagnosisRule } from "../types.ts";
-import { bandedFinding } from "./banded-finding.ts";
+import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = cite(["S26", "S34"]);
@@ -13,6 +13,12 @@ const SOURCE = cite(["S26", "S34"]);
  * air recirculating); low: a condenser full of liquid (overcharge); below zero only a pressure
  * drop upstream of the probe (restriction) or a wrong probe can do it.
  */
+const MESSAGES: BandedReading["messages"] = {
+  low: (value, text) => `Liquid leaves the condenser only ${value} K above the outdoor air (expected ${text} K): the condenser is full of liquid`,
+  normal: (value, text) => `Liquid leaves the condenser ${value} K above the outdoor air (expected ${text} K)`,
+  high: (value, text) => `Liquid leaves the condenser ${value} K above the outdoor air (expected ${text} K): the condenser is not rejecting its heat — coil, fan or air recirculating`,
+};
+
 export const condenserApproachRule: DiagnosisRule = {
   id: "condenser-approach",
   description: "Liquid line minus outdoor air against the application's band: high when the condenser cannot reject heat, low when it is full of liquid",
@@ -30,13 +36,9 @@ export const condenserApproachRule: DiagnosisRule = {
       feature: "condenserApproach",
       family: snapshot.meteringFamily,
       pivot: band.targetK,
-      messages: {
-        low: (value, text) => `Liquid leaves the condenser only ${value} K above the outdoor air (expected ${text} K): the condenser is full of liquid`,
-        normal: (value, text) => `Liquid leaves the condenser ${value} K above the outdoor air (expected ${text} K)`,
-        high: (value, text) => `Liquid leaves the condenser ${value} K above the outdoor air (expected ${text} K): the condenser is not rejecting its heat — coil, fan or air recirculating`,
-      },
-      source: `${SOURCE}; band: ${band.source}`,
-    });
+      messages: MESSAGES,
+      source: SOURCE,
+    }, snapshot);
     if (approach >= -SENSOR_TOLERANCE_K) return { findings: [finding], warnings: [] };
     return {
       findings: [finding],

@@ -1,11 +1,17 @@
 import { cite } from "../sources.ts";
 import type { DiagnosisRule } from "../types.ts";
-import { bandedFinding } from "./banded-finding.ts";
+import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = cite(["S26", "S21", "S122"]);
+const SOURCE = `${cite(["S26", "S21", "S122"])}; mid-glide condensing temperature for blends`;
 
 /** Mean condensing temperature over outdoor ambient: is head pressure right for the weather? */
+const MESSAGES: BandedReading["messages"] = {
+  low: (value, text) => `Condensing only ${value} K over the outdoor air (expected ${text} K): head pressure is low for the weather`,
+  normal: (value, text) => `Condensing ${value} K over the outdoor air sits in ${text} K`,
+  high: (value, text) => `Condensing ${value} K over the outdoor air (expected ${text} K): head pressure is high for the weather`,
+};
+
 export const condensingOverAmbientRule: DiagnosisRule = {
   id: "condensing-over-ambient",
   description: "Mean condensing temperature over outdoor air against the application's band: is head pressure right for the weather",
@@ -24,13 +30,9 @@ export const condensingOverAmbientRule: DiagnosisRule = {
           band,
           feature: "condensingOverAmbient",
           family: snapshot.meteringFamily,
-          messages: {
-            low: (value, text) => `Condensing only ${value} K over the outdoor air (expected ${text} K): head pressure is low for the weather`,
-            normal: (value, text) => `Condensing ${value} K over the outdoor air sits in ${text} K`,
-            high: (value, text) => `Condensing ${value} K over the outdoor air (expected ${text} K): head pressure is high for the weather`,
-          },
-          source: `${SOURCE}; band: ${band.source}; mid-glide condensing temperature for blends`,
-        }),
+          messages: MESSAGES,
+          source: SOURCE,
+        }, snapshot),
       ],
       warnings: [],
     };

@@ -48,8 +48,8 @@ export const subcoolingVsTargetRule: DiagnosisRule = {
       family: snapshot.meteringFamily,
       pivot: snapshot.subcoolingPivotK ?? band.targetK,
       messages: MESSAGES,
-      source: `${SOURCE}; band: ${band.source}`,
-    });
+      source: SOURCE,
+    }, snapshot);
     return { findings: [finding], warnings: [] };
   },
 };

@@ -64,8 +64,8 @@ export const superheatVsTargetRule: DiagnosisRule = {
       feature: "superheat",
       family: snapshot.meteringFamily,
       messages: fixed ? FIXED_MESSAGES : VALVE_MESSAGES,
-      source: `${SOURCE}; band: ${band.source}`,
-    });
+      source: SOURCE,
+    }, snapshot);
     return { findings: [finding], warnings: [] };
   },
 };
