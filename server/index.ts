@@ -7,6 +7,7 @@ import { createApp } from "./app.ts";
 import { openDatabase } from "./db/client.ts";
 import { deleteExpiredSessions } from "./db/expired-sessions.ts";
 import { seedDemoData } from "./db/seed/seed-demo.ts";
+import { upgradeStoredDiagnoses } from "./db/upgrade-stored-diagnoses.ts";
 import { readEnv } from "./env.ts";
 import { createMailer } from "./mail/mailer.ts";
 import { createLogger } from "./logger.ts";
@@ -18,6 +19,8 @@ const database = await openDatabase(env.DATA_DIR);
 if (env.DEMO_DATA && (await seedDemoData(database.db))) {
   logger.info("demo data loaded (Bellbird Mechanical)");
 }
+const upgraded = await upgradeStoredDiagnoses(database.db);
+if (upgraded > 0) logger.info(`${upgraded} stored reading(s) re-diagnosed in the current result format`);
 
 let clientMiddleware;
 let closeVite: (() => Promise<void>) | undefined;

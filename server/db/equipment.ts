@@ -74,6 +74,7 @@ const equipmentColumns = {
   customerName: customers.name,
   name: equipment.name,
   kind: equipment.kind,
+  application: equipment.application,
   location: equipment.location,
   maker: equipment.maker,
   model: equipment.model,

@@ -8,7 +8,7 @@
 import { sql } from "drizzle-orm";
 import type { Role } from "@shared/schemas/auth.ts";
 import type { AttemptAnswers, AttemptScore, CaseDifficulty, CaseExpected, CaseStatus, CaseStory, SafetyNote, WorkedStep } from "@shared/schemas/casebook.ts";
-import type { ChargeState, DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
+import type { Application, ChargeState, DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { CylinderKind, MovementKind } from "@shared/schemas/register.ts";
 import type { VisitStatus } from "@shared/schemas/visits.ts";
@@ -181,6 +181,8 @@ export const equipment = pgTable(
       .references(() => sites.id, { onDelete: "cascade" }),
     name: text("name").notNull(),
     kind: text("kind").notNull(),
+    /** What the unit does (comfort cooling, refrigeration…): the bands its readings are judged by. */
+    application: text("application").$type<Application>().notNull().default("comfort-cooling"),
     location: text("location"),
     maker: text("maker"),
     model: text("model"),

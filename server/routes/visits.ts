@@ -123,6 +123,8 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
       ...readingFields,
       refrigerant: unit.refrigerant,
       meteringDevice: nameplate.meteringDevice,
+      application: unit.application,
+      liquidLineLengthM: nameplate.liquidLineLengthM ?? undefined,
     });
     const result = diagnose(input);
     const reading = await insertReading(db, organisationId, {
@@ -156,6 +158,8 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
         targetSuperheatK: nameplate.targetSuperheatK ?? undefined,
         targetSubcoolingK: nameplate.targetSubcoolingK ?? undefined,
         compressorRla: unit.compressorRlaA ?? undefined,
+        application: unit.application,
+        liquidLineLengthM: nameplate.liquidLineLengthM ?? undefined,
       },
       dayStart: new Date(fields.dayStart),
     });

@@ -5,7 +5,7 @@
  */
 import { z } from "zod";
 import { listRefrigerants } from "../engine/index.ts";
-import { MeteringDeviceSchema } from "./diagnosis.ts";
+import { ApplicationSchema, MAX_LINE_LENGTH_M, MeteringDeviceSchema, type Application } from "./diagnosis.ts";
 
 export const MAX_CIRCUITS = 4;
 /** Largest factory charge per circuit accepted, kg: a large packaged chiller circuit. */
@@ -105,6 +105,14 @@ export const CircuitNameplateSchema = z.object({
     .optional()
     .nullable()
     .transform((value) => value ?? null),
+  /** Length of the liquid line (the line set) between the units, m; null for a packaged unit or unknown. */
+  liquidLineLengthM: z
+    .number({ error: "Liquid line length must be a number in m" })
+    .min(0, "Liquid line length cannot be negative")
+    .max(MAX_LINE_LENGTH_M, `Liquid line length above ${MAX_LINE_LENGTH_M} m is not a line set`)
+    .optional()
+    .nullable()
+    .transform((value) => value ?? null),
 });
 export type CircuitNameplate = z.infer<typeof CircuitNameplateSchema>;
 
@@ -122,10 +130,25 @@ export const EQUIPMENT_KINDS = [
 
 const knownRefrigerants = () => new Set(listRefrigerants().map((info) => info.id));
 
+/** Application a new unit of each kind usually has (the form's starting point; the technician decides). */
+export const DEFAULT_APPLICATION_BY_KIND: Readonly<Record<(typeof EQUIPMENT_KINDS)[number], Application>> = {
+  "packaged rooftop": "comfort-cooling",
+  "split system": "comfort-cooling",
+  "wall split": "comfort-cooling",
+  "ducted split": "comfort-cooling",
+  "cool room": "medium-temperature-refrigeration",
+  "freezer room": "low-temperature-refrigeration",
+  chiller: "process-chilling",
+  "display case": "medium-temperature-refrigeration",
+  other: "comfort-cooling",
+};
+
 export const EquipmentInputSchema = z.object({
   siteId: z.uuid("Choose the site"),
   name: requiredName("unit"),
   kind: z.enum(EQUIPMENT_KINDS, { error: "Choose the kind of equipment" }),
+  /** What the unit does: sets the bands its readings are judged against. */
+  application: ApplicationSchema,
   location: optionalText(MAX_NOTE_LENGTH),
   maker: optionalText(MAX_NAME_LENGTH),
   model: optionalText(MAX_NAME_LENGTH),
@@ -169,6 +192,7 @@ export const EquipmentSchema = z.object({
   customerName: z.string(),
   name: z.string(),
   kind: z.string(),
+  application: ApplicationSchema,
   location: z.string().nullable(),
   maker: z.string().nullable(),
   model: z.string().nullable(),

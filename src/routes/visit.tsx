@@ -1,3 +1,4 @@
+import { applicationText } from "@shared/content/applications.ts";
 import { FileText } from "lucide-react";
 import { useState, type ReactNode } from "react";
 import { Link, useParams, useSearchParams } from "react-router-dom";
@@ -76,7 +77,7 @@ export default function VisitRoute() {
             />
           )}
           <p className="text-sm text-muted">
-            Circuit {nameplate.number}: {METERING_LABELS[nameplate.meteringDevice]}, factory charge <span className="num">{nameplate.factoryChargeKg} kg</span>
+            {applicationText[unit.application].label} · Circuit {nameplate.number}: {METERING_LABELS[nameplate.meteringDevice]}, factory charge <span className="num">{nameplate.factoryChargeKg} kg</span>
             {nameplate.targetSuperheatK != null && <> · target superheat <span className="num">{nameplate.targetSuperheatK} K</span></>}
             {nameplate.targetSubcoolingK != null && <> · target subcooling <span className="num">{nameplate.targetSubcoolingK} K</span></>} · gauge pressures against{" "}
             <span className="num">{atmosphericKPa} kPa</span>
@@ -93,6 +94,8 @@ export default function VisitRoute() {
                 targetSuperheatK: nameplate.targetSuperheatK,
                 targetSubcoolingK: nameplate.targetSubcoolingK,
                 compressorRla: unit.compressorRlaA,
+                application: unit.application,
+                liquidLineLengthM: nameplate.liquidLineLengthM,
               }}
               isBlend={refrigerant.kind === "blend"}
               units={units}

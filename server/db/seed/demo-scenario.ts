@@ -3,6 +3,7 @@
  * and the Wattle Lane Clinic it maintains. Every name and figure here is made up.
  */
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
+import type { Application } from "@shared/schemas/diagnosis.ts";
 import type { CylinderKind } from "@shared/schemas/register.ts";
 import type { Role } from "../schema.ts";
 
@@ -34,6 +35,7 @@ export const demoSite = {
 export interface DemoEquipment {
   name: string;
   kind: string;
+  application: Application;
   location: string;
   maker: string;
   model: string;
@@ -53,14 +55,15 @@ export const demoEquipment: DemoEquipment[] = [
   {
     name: "RTU-1 packaged rooftop unit",
     kind: "packaged rooftop",
+    application: "comfort-cooling",
     location: "Roof, above the waiting room",
     maker: "Southerly Air",
     model: "SPR-150-2C",
     serial: "SA21-44817",
     refrigerant: "R407C",
     circuits: [
-      { number: 1, factoryChargeKg: 4.2, meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5 },
-      { number: 2, factoryChargeKg: 4.2, meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5 },
+      { number: 1, factoryChargeKg: 4.2, meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, liquidLineLengthM: null },
+      { number: 2, factoryChargeKg: 4.2, meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, liquidLineLengthM: null },
     ],
     compressorRlaA: 11.8,
     compressorLraA: 74,
@@ -73,12 +76,13 @@ export const demoEquipment: DemoEquipment[] = [
   {
     name: "Server cupboard wall split",
     kind: "wall split",
+    application: "comfort-cooling",
     location: "Level 1, comms cupboard",
     maker: "Kestrel",
     model: "KW-35R32",
     serial: "KW3522-0931",
     refrigerant: "R32",
-    circuits: [{ number: 1, factoryChargeKg: 0.85, meteringDevice: "eev", targetSuperheatK: null, targetSubcoolingK: null }],
+    circuits: [{ number: 1, factoryChargeKg: 0.85, meteringDevice: "eev", targetSuperheatK: null, targetSubcoolingK: null, liquidLineLengthM: 6 }],
     compressorRlaA: 6.4,
     compressorLraA: 28,
     fanFlaA: 0.4,
@@ -90,12 +94,13 @@ export const demoEquipment: DemoEquipment[] = [
   {
     name: "Vaccine and stores cool room",
     kind: "cool room",
+    application: "medium-temperature-refrigeration",
     location: "Ground floor, rear store",
     maker: "Polar Bay",
     model: "PB-CR2",
     serial: "PB19-2260",
     refrigerant: "R404A",
-    circuits: [{ number: 1, factoryChargeKg: 2.6, meteringDevice: "txv", targetSuperheatK: 5.5, targetSubcoolingK: 4 }],
+    circuits: [{ number: 1, factoryChargeKg: 2.6, meteringDevice: "txv", targetSuperheatK: 5.5, targetSubcoolingK: 4, liquidLineLengthM: 9 }],
     compressorRlaA: 7.9,
     compressorLraA: 46,
     fanFlaA: 0.9,

@@ -4,8 +4,10 @@ import { useMemo, useState } from "react";
 import { useFieldArray, useForm, useWatch, type Path } from "react-hook-form";
 import { listRefrigerants } from "@shared/engine/index.ts";
 import { describeSafetyClass, safetyClasses } from "@shared/content/safety-classes.ts";
-import { METERING_DEVICES } from "@shared/schemas/diagnosis.ts";
+import { applicationText } from "@shared/content/applications.ts";
+import { APPLICATIONS, METERING_DEVICES } from "@shared/schemas/diagnosis.ts";
 import {
+  DEFAULT_APPLICATION_BY_KIND,
   EQUIPMENT_KINDS,
   EquipmentInputSchema,
   MAX_CIRCUITS,
@@ -40,12 +42,14 @@ const blankCircuit = (number: number): EquipmentInput["circuits"][number] => ({
   meteringDevice: "txv",
   targetSuperheatK: undefined,
   targetSubcoolingK: undefined,
+  liquidLineLengthM: undefined,
 });
 
 const TOP_FIELDS = [
   "siteId",
   "name",
   "kind",
+  "application",
   "location",
   "maker",
   "model",
@@ -60,7 +64,7 @@ const TOP_FIELDS = [
   "ratedHighSideKPa",
   "ratedLowSideKPa",
 ] as const satisfies readonly Path<EquipmentInput>[];
-const CIRCUIT_FIELDS = ["factoryChargeKg", "meteringDevice", "targetSuperheatK", "targetSubcoolingK"] as const;
+const CIRCUIT_FIELDS = ["factoryChargeKg", "meteringDevice", "targetSuperheatK", "targetSubcoolingK", "liquidLineLengthM"] as const;
 
 /** Every path a server message can land on, circuits included. */
 function fieldPaths(circuitCount: number): Path<EquipmentInput>[] {
@@ -104,6 +108,7 @@ export function EquipmentForm({ onCreated }: { onCreated: (equipment: Equipment)
       siteId: "",
       name: "",
       kind: "" as EquipmentInput["kind"],
+      application: "comfort-cooling",
       location: "",
       maker: "",
       model: "",
@@ -115,6 +120,8 @@ export function EquipmentForm({ onCreated }: { onCreated: (equipment: Equipment)
   const { errors } = form.formState;
   const circuits = useFieldArray({ control: form.control, name: "circuits" });
   const refrigerantId = useWatch({ control: form.control, name: "refrigerant" });
+  const application = useWatch({ control: form.control, name: "application" });
+  const kindField = form.register("kind");
   const chosen = refrigerants.find((info) => info.id === refrigerantId);
   const caution = chosen ? safetyClasses[chosen.safety.class].caution : null;
   const noSites = sites.isSuccess && sites.data.length === 0;
@@ -189,7 +196,19 @@ export function EquipmentForm({ onCreated }: { onCreated: (equipment: Equipment)
             error={errors.name?.message}
             {...form.register("name")}
           />
-          <SelectField label="Kind" error={errors.kind?.message} {...form.register("kind")}>
+          <SelectField
+            label="Kind"
+            error={errors.kind?.message}
+            {...kindField}
+            onChange={(event) => {
+              void kindField.onChange(event);
+              // The kind suggests the application until the technician chooses one.
+              const kind = event.target.value as keyof typeof DEFAULT_APPLICATION_BY_KIND;
+              if (!form.getFieldState("application").isDirty && kind in DEFAULT_APPLICATION_BY_KIND) {
+                form.setValue("application", DEFAULT_APPLICATION_BY_KIND[kind]);
+              }
+            }}
+          >
             <option value="">Choose the kind…</option>
             {EQUIPMENT_KINDS.map((kind) => (
               <option key={kind} value={kind}>
@@ -198,6 +217,18 @@ export function EquipmentForm({ onCreated }: { onCreated: (equipment: Equipment)
             ))}
           </SelectField>
         </div>
+        <SelectField
+          label="Application"
+          hint={`${applicationText[application ?? "comfort-cooling"].hint}. Sets the bands its readings are judged against.`}
+          error={errors.application?.message}
+          {...form.register("application")}
+        >
+          {APPLICATIONS.map((value) => (
+            <option key={value} value={value}>
+              {applicationText[value].label}
+            </option>
+          ))}
+        </SelectField>
         <TextField
           label="Location on site (optional)"
           hint="e.g. “Roof, above the waiting room”."
@@ -266,6 +297,13 @@ export function EquipmentForm({ onCreated }: { onCreated: (equipment: Equipment)
                     unit="K"
                     error={circuitErrors?.targetSubcoolingK?.message}
                     registration={form.register(`circuits.${index}.targetSubcoolingK`, numeric)}
+                  />
+                  <NumberField
+                    label="Liquid line length (optional)"
+                    unit="m"
+                    hint="Between indoor and outdoor units; blank for a packaged unit."
+                    error={circuitErrors?.liquidLineLengthM?.message}
+                    registration={form.register(`circuits.${index}.liquidLineLengthM`, numeric)}
                   />
                 </div>
                 {circuits.fields.length > 1 && (

@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import { applicationText } from "@shared/content/applications.ts";
 import { listRefrigerants } from "@shared/engine/index.ts";
 import type { Equipment } from "@shared/schemas/equipment.ts";
 import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
@@ -57,6 +58,7 @@ export function EquipmentNameplate({
             {info && <SafetyBadge safetyClass={info.safety.class} />}
           </span>
         </Item>
+        <Item label="Application">{applicationText[equipment.application].label}</Item>
         <Item label="Factory charge, all circuits">
           <span className="num">{formatNumber(totalFactoryChargeKg(equipment.circuits), 2)} kg</span>
         </Item>
@@ -101,8 +103,11 @@ export function EquipmentNameplate({
               <th scope="col" className="py-1 pr-3">
                 Target superheat
               </th>
-              <th scope="col" className="py-1">
+              <th scope="col" className="py-1 pr-3">
                 Target subcooling
+              </th>
+              <th scope="col" className="py-1">
+                Liquid line
               </th>
             </tr>
           </thead>
@@ -115,7 +120,8 @@ export function EquipmentNameplate({
                 <td className="num py-2 pr-3">{formatNumber(circuit.factoryChargeKg, 2)} kg</td>
                 <td className="py-2 pr-3">{METERING_DEVICE_LABELS[circuit.meteringDevice]}</td>
                 <td className="num py-2 pr-3">{difference(circuit.targetSuperheatK)}</td>
-                <td className="num py-2">{difference(circuit.targetSubcoolingK)}</td>
+                <td className="num py-2 pr-3">{difference(circuit.targetSubcoolingK)}</td>
+                <td className="num py-2">{circuit.liquidLineLengthM == null ? "—" : `${formatNumber(circuit.liquidLineLengthM, 1)} m`}</td>
               </tr>
             ))}
           </tbody>

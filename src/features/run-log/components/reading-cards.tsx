@@ -9,7 +9,7 @@ import {
   temperatureToDisplay,
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
-import type { DraftField, ReadingDraft } from "../utils/reading-draft.ts";
+import type { DraftField, ReadingDraft, SuctionLocationChoice } from "../utils/reading-draft.ts";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { Derived, ReadingCard } from "./reading-card.tsx";
 
@@ -17,6 +17,7 @@ interface ReadingCardsProps {
   draft: ReadingDraft;
   onField: (field: DraftField, value: string) => void;
   onLocation: (location: LiquidTempLocation) => void;
+  onSuctionLocation: (location: SuctionLocationChoice) => void;
   fieldErrors: Record<string, string>;
   result: DiagnosisResult | null;
   units: DisplayUnits;
@@ -33,7 +34,7 @@ const DEFAULT_DISCHARGE_LIMIT_C = 107;
  * liquid (condenser outlet), then air and electrical. Each card shows what was measured, its
  * saturation counterpart and the derived value on one line.
  */
-export function ReadingCards({ draft, onField, onLocation, fieldErrors, result, units, isBlend, dischargeLineTempC }: ReadingCardsProps) {
+export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fieldErrors, result, units, isBlend, dischargeLineTempC }: ReadingCardsProps) {
   const t = TEMPERATURE_LABEL[units.temperature];
   const k = DIFFERENCE_LABEL[units.temperature];
   const p = GAUGE_LABEL[units.pressure];
@@ -64,6 +65,23 @@ export function ReadingCards({ draft, onField, onLocation, fieldErrors, result, 
       >
         {input("suctionPressureKPa", "Suction pressure", p)}
         {input("suctionLineTempC", "Suction line temperature", t)}
+        <div className="sm:col-span-2">
+          <Segmented<SuctionLocationChoice>
+            label="Where the suction temperature was taken"
+            value={draft.suctionTempLocation}
+            onChange={onSuctionLocation}
+            options={[
+              { value: "evaporator-outlet", label: "Evaporator outlet" },
+              { value: "outdoor-unit", label: "Outdoor unit" },
+              { value: "", label: "Not stated" },
+            ]}
+          />
+          {result && result.suctionLineAllowanceK !== 0 && (
+            <p className="mt-2 text-sm text-muted">
+              Target moved {result.suctionLineAllowanceK > 0 ? "up" : "down"} {diff(Math.abs(result.suctionLineAllowanceK))} {k} for the suction line between coil and outdoor unit.
+            </p>
+          )}
+        </div>
       </ReadingCard>
 
       <ReadingCard

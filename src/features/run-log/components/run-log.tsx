@@ -1,6 +1,7 @@
 import { Save } from "lucide-react";
 import { useMemo, useState } from "react";
 import type { LiquidTempLocation } from "@shared/schemas/diagnosis.ts";
+import type { SuctionLocationChoice } from "../utils/reading-draft.ts";
 import type { Visit } from "@shared/schemas/visits.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
@@ -66,6 +67,7 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphericKPa
     setServerErrors(({ [field]: _dropped, ...rest }) => rest);
   };
   const setLocation = (liquidTempLocation: LiquidTempLocation) => setDraft((current) => ({ ...current, liquidTempLocation }));
+  const setSuctionLocation = (suctionTempLocation: SuctionLocationChoice) => setDraft((current) => ({ ...current, suctionTempLocation }));
 
   const save = async () => {
     setFormError(null);
@@ -120,7 +122,7 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphericKPa
         className="space-y-3"
       >
         <ReadingCards
-          draft={effectiveDraft}
+onSuctionLocation={setSuctionLocation}           draft={effectiveDraft}
           onField={setField}
           onLocation={setLocation}
           fieldErrors={fieldErrors}

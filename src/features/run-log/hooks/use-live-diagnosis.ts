@@ -1,6 +1,6 @@
 import { useDeferredValue, useMemo } from "react";
 import { diagnose, DiagnosisInputError } from "@shared/engine/index.ts";
-import type { DiagnosisInputDraft, DiagnosisResult, MeteringDevice } from "@shared/schemas/diagnosis.ts";
+import type { Application, DiagnosisInputDraft, DiagnosisResult, MeteringDevice } from "@shared/schemas/diagnosis.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { parseDraft, type DraftField, type ReadingDraft } from "../utils/reading-draft.ts";
 
@@ -10,6 +10,9 @@ export interface CircuitContext {
   targetSuperheatK: number | null;
   targetSubcoolingK: number | null;
   compressorRla: number | null;
+  /** The equipment's application and the circuit's liquid line length: they set the bands. */
+  application: Application;
+  liquidLineLengthM: number | null;
 }
 
 export type LiveDiagnosis =
@@ -33,6 +36,8 @@ export function useLiveDiagnosis(draft: ReadingDraft, context: CircuitContext, u
       targetSuperheatK: context.targetSuperheatK ?? undefined,
       targetSubcoolingK: context.targetSubcoolingK ?? undefined,
       compressorRla: context.compressorRla ?? undefined,
+      application: context.application,
+      liquidLineLengthM: context.liquidLineLengthM ?? undefined,
       atmosphericPressureKPa: atmosphericKPa,
       ...(values as Omit<DiagnosisInputDraft, "refrigerant" | "meteringDevice">),
     };

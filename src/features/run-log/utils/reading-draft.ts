@@ -1,4 +1,4 @@
-import type { DiagnosisInput, LiquidTempLocation } from "@shared/schemas/diagnosis.ts";
+import type { DiagnosisInput, LiquidTempLocation, SuctionTempLocation } from "@shared/schemas/diagnosis.ts";
 import { parseDecimal } from "@/components/ui/field/number-input.tsx";
 import {
   formatNumber,
@@ -32,12 +32,15 @@ export const DRAFT_FIELDS = {
 export type DraftField = keyof typeof DRAFT_FIELDS;
 export const REQUIRED_FIELDS: DraftField[] = ["suctionPressureKPa", "suctionLineTempC", "liquidPressureKPa", "liquidLineTempC"];
 
+/** Where the suction temperature was taken; "" when the technician did not say. */
+export type SuctionLocationChoice = SuctionTempLocation | "";
+
 /** The entry form's state: exactly what was typed, in display units, so nothing is lost. */
-export type ReadingDraft = Record<DraftField, string> & { liquidTempLocation: LiquidTempLocation };
+export type ReadingDraft = Record<DraftField, string> & { liquidTempLocation: LiquidTempLocation; suctionTempLocation: SuctionLocationChoice };
 
 export function emptyDraft(): ReadingDraft {
   const draft = Object.fromEntries(Object.keys(DRAFT_FIELDS).map((key) => [key, ""])) as Record<DraftField, string>;
-  return { ...draft, liquidTempLocation: "liquid-line" };
+  return { ...draft, liquidTempLocation: "liquid-line", suctionTempLocation: "" };
 }
 
 /** Carries a stored reading forward into the form, in the user's units. */
@@ -54,12 +57,13 @@ export function draftFromInput(input: Partial<DiagnosisInput>, units: DisplayUni
           : String(value);
   }
   draft.liquidTempLocation = input.liquidTempLocation ?? "liquid-line";
+  draft.suctionTempLocation = input.suctionTempLocation ?? "";
   return draft;
 }
 
 export interface ParsedDraft {
   /** Every field that holds a number, converted to SI-metric (kPa gauge, °C). */
-  values: Partial<Pick<DiagnosisInput, DraftField>> & { liquidTempLocation: LiquidTempLocation };
+  values: Partial<Pick<DiagnosisInput, DraftField | "suctionTempLocation">> & { liquidTempLocation: LiquidTempLocation };
   /** Fields whose text is not a number. */
   typingErrors: Partial<Record<DraftField, string>>;
   /** Required fields still empty. */
@@ -67,7 +71,10 @@ export interface ParsedDraft {
 }
 
 export function parseDraft(draft: ReadingDraft, units: DisplayUnits, atmosphericKPa: number): ParsedDraft {
-  const values: ParsedDraft["values"] = { liquidTempLocation: draft.liquidTempLocation };
+  const values: ParsedDraft["values"] = {
+    liquidTempLocation: draft.liquidTempLocation,
+    ...(draft.suctionTempLocation === "" ? {} : { suctionTempLocation: draft.suctionTempLocation }),
+  };
   const typingErrors: ParsedDraft["typingErrors"] = {};
   const missing: DraftField[] = [];
   for (const [key, kind] of Object.entries(DRAFT_FIELDS) as [DraftField, FieldKind][]) {

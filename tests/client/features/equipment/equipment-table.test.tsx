@@ -14,6 +14,7 @@ const site = {
   customerName: "Wattle Lane Clinic",
 };
 const blank = {
+  application: "comfort-cooling" as const,
   location: null,
   maker: null,
   model: null,
@@ -33,6 +34,7 @@ const circuit = (number: number, factoryChargeKg: number, meteringDevice: "txv" 
   meteringDevice,
   targetSuperheatK: null,
   targetSubcoolingK: null,
+  liquidLineLengthM: null,
 });
 
 // Invented units of the demo scenario (PRODUCT.md "Demo scenario").

@@ -1,0 +1,35 @@
+/**
+ * Brings readings saved by an older diagnosis engine up to the current result format. A
+ * reading's measured values are the record and never change; its `result` is derived from them,
+ * and the screens parse it with the current schema, so a result missing the current fields is
+ * worked out again (same code the server runs on every save). Readings now carry the
+ * equipment's application, as every new reading does; older ones get it added first.
+ */
+import { sql } from "drizzle-orm";
+import { diagnose } from "@shared/engine/index.ts";
+import type { Database } from "./client.ts";
+import { equipment, readings, visits } from "./schema.ts";
+
+/** A field every current result has and older ones lack. */
+const MARKER_FIELD = "readingsLeftOut";
+const BATCH = 500;
+
+/** @returns how many readings were brought up to date. */
+export async function upgradeStoredDiagnoses(db: Database): Promise<number> {
+  let upgraded = 0;
+  for (;;) {
+    const stale = await db
+      .select({ id: readings.id, input: readings.input, application: equipment.application })
+      .from(readings)
+      .innerJoin(visits, sql`${visits.id} = ${readings.visitId}`)
+      .innerJoin(equipment, sql`${equipment.id} = ${visits.equipmentId}`)
+      .where(sql`NOT (${readings.result} ? ${MARKER_FIELD})`)
+      .limit(BATCH);
+    if (stale.length === 0) return upgraded;
+    for (const row of stale) {
+      const input = { ...row.input, application: row.input.application ?? row.application };
+      await db.update(readings).set({ input, result: diagnose(input) }).where(sql`${readings.id} = ${row.id}`);
+    }
+    upgraded += stale.length;
+  }
+}
