@@ -5,6 +5,7 @@ import express, { type Express, type RequestHandler } from "express";
 import helmet from "helmet";
 import { pinoHttp } from "pino-http";
 import type { Logger } from "pino";
+import { logSerializers } from "./logger.ts";
 import { createLucia } from "./auth/lucia.ts";
 import { originCheck } from "./auth/origin-check.ts";
 import { createAuthLimiters, type AuthLimits } from "./auth/rate-limits.ts";
@@ -57,8 +58,9 @@ export function createApp(deps: AppDeps): Express {
         directives: {
           // Photos are shown from blob: URLs before upload; fonts are bundled, never from a CDN.
           "img-src": ["'self'", "data:", "blob:"],
-          // Plain-http LAN hosts (a tablet on the workshop network) must not be forced to https.
-          "upgrade-insecure-requests": env.NODE_ENV === "production" ? [] : null,
+          // Only an https install may ask browsers to upgrade: on a plain-http LAN host (a tablet
+          // on the workshop network) the upgraded requests would have nowhere to go.
+          "upgrade-insecure-requests": env.NODE_ENV === "production" && new URL(env.APP_URL).protocol === "https:" ? [] : null,
           // Vite's dev server injects an inline React Refresh preamble and talks over a
           // websocket; the production build has neither, so only development relaxes these.
           ...(deps.clientMiddleware ? { "script-src": ["'self'", "'unsafe-inline'"], "connect-src": ["'self'", "ws:"] } : {}),
@@ -70,6 +72,8 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     pinoHttp({
       logger,
+      // Cookies and tokens never reach the log: see server/logger.ts.
+      serializers: logSerializers,
       // Quiet logs: health probes and static assets are noise.
       autoLogging: { ignore: (req) => req.url === "/api/health" || !req.url?.startsWith("/api") },
       customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
