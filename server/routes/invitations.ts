@@ -13,6 +13,7 @@ import { hashPassword } from "../auth/password.ts";
 import { getAuth, requireRole, startSession } from "../auth/session.ts";
 import { createToken, hashToken } from "../auth/tokens.ts";
 import { emailInUse, findUserByEmail, toAuthUser } from "../db/accounts.ts";
+import { uniqueViolation } from "../db/errors.ts";
 import { acceptInvitation, createInvitation, findUsableInvitation, listPendingInvitations, revokeInvitation } from "../db/invitations.ts";
 import { getProfile } from "../db/accounts.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
@@ -79,10 +80,12 @@ export function invitationsRouter({ db, env, auth, mailer, limiters }: AccountRo
     const { token, name, password } = AcceptInvitationSchema.parse(req.body);
     const found = await findUsableInvitation(db, hashToken(token));
     if (!found) throw new HttpError(404, INVALID_LINK);
-    if (await emailInUse(db, found.invitation.email)) {
-      throw new HttpError(409, "This e-mail address already has a Satura account. Sign in with it, or ask for an invitation to another address.");
-    }
-    const user = await acceptInvitation(db, { invitationId: found.invitation.id, name, passwordHash: await hashPassword(password) });
+    const taken = () =>
+      new HttpError(409, "This e-mail address already has a Satura account. Sign in with it, or ask for an invitation to another address.");
+    if (await emailInUse(db, found.invitation.email)) throw taken();
+    const user = await acceptInvitation(db, { invitationId: found.invitation.id, name, passwordHash: await hashPassword(password) }).catch(
+      (error: unknown) => Promise.reject(uniqueViolation(error) ? taken() : error),
+    );
     if (!user) throw new HttpError(404, INVALID_LINK);
     await startSession(auth, res, user.id);
     res.status(201).json({ user: toAuthUser(user) });

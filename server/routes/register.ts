@@ -10,6 +10,8 @@
 import { Router, type Response } from "express";
 import { z } from "zod";
 import { can, PERMISSIONS } from "@shared/schemas/auth.ts";
+import { boundEnd, boundStart } from "@shared/schemas/dates.ts";
+import { text } from "@shared/schemas/text.ts";
 import {
   ChargingUpdateSchema,
   CylinderCreateSchema,
@@ -18,8 +20,6 @@ import {
   MovementCreateSchema,
   ReclaimCreateSchema,
   RegisterQuerySchema,
-  boundEnd,
-  boundStart,
   type CylinderKind,
   type MovementKind,
 } from "@shared/schemas/register.ts";
@@ -106,7 +106,7 @@ function registerScope(res: Response, requested: string | undefined): { technici
 
 export function cylindersRouter({ db }: Deps): Router {
   const router = Router();
-  const ListQuery = z.object({ refrigerant: z.string().trim().min(1).optional() });
+  const ListQuery = z.object({ refrigerant: text().min(1).optional() });
 
   router.get("/", requireUser, async (req, res) => {
     const filter = ListQuery.parse(req.query);
@@ -152,6 +152,13 @@ export function cylindersRouter({ db }: Deps): Router {
   });
 
   return router;
+}
+
+/** The `:circuit` of a path, as a circuit of the unit's nameplate; anything else (2.5, "x", 9) is no circuit of it. */
+function circuitOf(unit: { circuits: { number: number }[] }, raw: unknown): number {
+  const circuit = typeof raw === "string" && /^\d{1,2}$/.test(raw) ? Number(raw) : NaN;
+  if (!unit.circuits.some((candidate) => candidate.number === circuit)) throw notFound("Circuit");
+  return circuit;
 }
 
 /** Mounted at /api/visits beside the visits router. */
@@ -246,8 +253,7 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
     const { organisationId, user } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
     if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
-    const circuit = Number(req.params.circuit);
-    if (!unit.circuits.some((candidate) => candidate.number === circuit)) throw notFound("Circuit");
+    const circuit = circuitOf(unit, req.params.circuit);
     const values = ChargingUpdateSchema.parse(req.body);
     await upsertCircuitCharge(db, organisationId, { visitId: visit.id, circuit, lineAdjustmentKg: values.lineAdjustmentKg, recordedBy: user.id });
     res.json(await visitRefrigerant(organisationId, visit.id, unit));
@@ -257,7 +263,7 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
     const { organisationId } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
     if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
-    await deleteCircuitCharge(db, organisationId, visit.id, Number(req.params.circuit));
+    await deleteCircuitCharge(db, organisationId, visit.id, circuitOf(unit, req.params.circuit));
     res.json(await visitRefrigerant(organisationId, visit.id, unit));
   });
 

@@ -3,7 +3,9 @@ import multer from "multer";
 import { z } from "zod";
 import { diagnose } from "@shared/engine/index.ts";
 import { PERMISSIONS } from "@shared/schemas/auth.ts";
+import { instant } from "@shared/schemas/dates.ts";
 import { DiagnosisInputSchema } from "@shared/schemas/diagnosis.ts";
+import { text } from "@shared/schemas/text.ts";
 import {
   AdjustmentCreateSchema,
   CommentCreateSchema,
@@ -62,7 +64,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
 
   const ImportFieldsSchema = z.object({
     circuit: z.coerce.number().int().min(1),
-    dayStart: z.iso.datetime({ offset: true, error: "dayStart must be an ISO date-time" }),
+    dayStart: instant("dayStart must be an ISO date-time"),
     mode: z.enum(["preview", "all", "valid-only"]).default("preview"),
     mapping: z
       .string()
@@ -231,7 +233,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     requireWritableVisit(visit.status);
     if (!req.file) throw new HttpError(400, "Some fields need attention", { photo: "Choose a photo to upload" });
     const meta = z
-      .object({ kind: z.enum(PHOTO_KINDS).default("other"), caption: z.string().trim().max(200).optional() })
+      .object({ kind: z.enum(PHOTO_KINDS).default("other"), caption: text().max(200).optional() })
       .parse(req.body ?? {});
     const stored = await storePhoto(env.UPLOADS_DIR, req.file.buffer);
     const photo = await insertPhoto(db, organisationId, { visitId: visit.id, kind: meta.kind, caption: meta.caption || null, ...stored, uploadedBy: user.id });

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { COMMON_PASSWORDS } from "./common-passwords.ts";
+import { text } from "./text.ts";
 
 /** The four roles of a service company's people, most rights first. */
 export const ROLES = ["owner", "senior", "technician", "apprentice"] as const;
@@ -39,9 +40,7 @@ export const NAME_MAX_LENGTH = 100;
 export const EMAIL_MAX_LENGTH = 254;
 
 /** Addresses compare case-insensitively, so they are stored and compared trimmed and lower-case. */
-export const EmailSchema = z
-  .string()
-  .trim()
+export const EmailSchema = text()
   .toLowerCase()
   .min(1, "Enter an e-mail address")
   .max(EMAIL_MAX_LENGTH, `At most ${EMAIL_MAX_LENGTH} characters`)
@@ -51,8 +50,7 @@ export const EmailSchema = z
  * A new password: length first (NIST SP 800-63B §5.1.1.2 favours length over composition
  * rules), then refused when it is on the common list or one character repeated.
  */
-export const NewPasswordSchema = z
-  .string()
+export const NewPasswordSchema = text({ trim: false })
   .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters`)
   .max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters`)
   // A leaked or guessable password is weak whatever its length.
@@ -60,22 +58,16 @@ export const NewPasswordSchema = z
   // "aaaaaaaaaa" passes the length rule but is guessed at once.
   .refine((value) => new Set(value).size > 1, "Use more than one kind of character");
 
-export const PersonNameSchema = z
-  .string()
-  .trim()
+export const PersonNameSchema = text()
   .min(1, "Enter a name")
   .max(NAME_MAX_LENGTH, `At most ${NAME_MAX_LENGTH} characters`);
 
-export const OrganisationNameSchema = z
-  .string()
-  .trim()
+export const OrganisationNameSchema = text()
   .min(1, "Enter the company name")
   .max(NAME_MAX_LENGTH, `At most ${NAME_MAX_LENGTH} characters`);
 
 /** One-time tokens from e-mailed links: 32 random bytes in base64url. */
-export const TokenSchema = z
-  .string()
-  .trim()
+export const TokenSchema = text()
   .min(20, "This link is incomplete")
   .max(100, "This link is not valid");
 
@@ -91,7 +83,7 @@ export type SignUp = z.infer<typeof SignUpSchema>;
 /** POST /api/auth/sign-in. No password rules here: old passwords must still work. */
 export const SignInSchema = z.object({
   email: EmailSchema,
-  password: z.string().min(1, "Enter your password").max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters`),
+  password: text({ trim: false }).min(1, "Enter your password").max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters`),
 });
 export type SignIn = z.infer<typeof SignInSchema>;
 

@@ -20,6 +20,8 @@ import {
   VerdictSchema,
 } from "./procedures.ts";
 import { PersonRefSchema } from "./visits.ts";
+import { boundEnd, boundStart, dayOrInstant, instant } from "./dates.ts";
+import { text } from "./text.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Cylinders
@@ -48,23 +50,17 @@ const massKg = (label: string, max: number) =>
 
 export const CylinderCreateSchema = z
   .object({
-    label: z
-      .string({ error: "Give the cylinder the label written on it" })
-      .trim()
+    label: text({ error: "Give the cylinder the label written on it" })
       .min(1, "Give the cylinder the label written on it")
       .max(MAX_LABEL_LENGTH, `Keep the label under ${MAX_LABEL_LENGTH} characters`),
-    serial: z
-      .string()
-      .trim()
+    serial: text()
       .max(MAX_LABEL_LENGTH, `Keep the serial under ${MAX_LABEL_LENGTH} characters`)
       .optional()
       .nullable()
       // An emptied field means "no serial", never an empty string in the record.
       .transform((value) => (value ? value : null)),
     kind: CylinderKindSchema,
-    refrigerant: z
-      .string({ error: "Choose the refrigerant" })
-      .refine((id) => knownRefrigerants().has(id), "Choose a refrigerant from the list"),
+    refrigerant: text({ error: "Choose the refrigerant" }).refine((id) => knownRefrigerants().has(id), "Choose a refrigerant from the list"),
     waterCapacityKg: massKg("Water capacity", MAX_WATER_CAPACITY_KG).refine((value) => value > 0, "Water capacity must be above 0 kg"),
     tareKg: massKg("Tare", MAX_WATER_CAPACITY_KG).refine((value) => value > 0, "Tare must be above 0 kg"),
     /** What is in it on the day it is entered: gross weight on the scale minus the tare. */
@@ -146,9 +142,7 @@ const MovementMassSchema = z
   .positive("The mass must be above 0 kg")
   .max(MAX_MOVEMENT_KG, `More than ${MAX_MOVEMENT_KG} kg in one movement is not plausible`);
 
-const optionalNote = z
-  .string()
-  .trim()
+const optionalNote = text({ multiline: true })
   .max(MAX_NOTE_LENGTH, `Keep the note under ${MAX_NOTE_LENGTH} characters`)
   .optional()
   .nullable()
@@ -165,7 +159,7 @@ export const MovementCreateSchema = z
       .min(1, "Circuits are numbered from 1")
       .max(MAX_CIRCUITS, `Satura records up to ${MAX_CIRCUITS} circuits`),
     cylinderId: z.uuid("Choose a cylinder").optional().nullable(),
-    at: z.iso.datetime({ offset: true, error: "at must be an ISO 8601 date and time" }).optional(),
+    at: instant("at must be an ISO 8601 date and time").optional(),
     note: optionalNote,
   })
   // The register must say where the refrigerant went or came from (TRADE.md §6 record fields).
@@ -179,7 +173,7 @@ export type MovementValues = z.output<typeof MovementCreateSchema>;
 /** Body of POST /api/cylinders/:id/reclaim: a recovery cylinder's contents handed on for reclaim. */
 export const ReclaimCreateSchema = z.object({
   kg: MovementMassSchema,
-  at: z.iso.datetime({ offset: true }).optional(),
+  at: instant().optional(),
   note: optionalNote,
 });
 export type ReclaimCreate = z.input<typeof ReclaimCreateSchema>;
@@ -280,7 +274,7 @@ export const EquipmentRefrigerantSchema = z.object({
 export type EquipmentRefrigerant = z.infer<typeof EquipmentRefrigerantSchema>;
 
 /** A calendar date or a date-time with offset; a bare date is a whole UTC day. */
-const DateBoundSchema = z.union([z.iso.date(), z.iso.datetime({ offset: true })], { error: "Use a date like 2026-07-01" });
+const DateBoundSchema = dayOrInstant();
 
 export const RegisterQuerySchema = z
   .object({
@@ -293,16 +287,6 @@ export const RegisterQuerySchema = z
     message: "The end of the period is before its start",
   });
 export type RegisterQuery = z.input<typeof RegisterQuerySchema>;
-
-/** Start instant of a `from` bound (ms since epoch). */
-export function boundStart(bound: string): number {
-  return Date.parse(bound.length === 10 ? `${bound}T00:00:00Z` : bound);
-}
-
-/** End instant (exclusive) of a `to` bound: a bare date includes its whole day. */
-export function boundEnd(bound: string): number {
-  return bound.length === 10 ? Date.parse(`${bound}T00:00:00Z`) + 86_400_000 : Date.parse(bound);
-}
 
 export const RegisterListSchema = z.object({
   movements: z.array(
