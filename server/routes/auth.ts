@@ -9,7 +9,7 @@ import {
 } from "@shared/schemas/auth.ts";
 import { hashPassword, verifyDummyPassword, verifyPassword } from "../auth/password.ts";
 import { endSession, getAuth, requireUser, startSession } from "../auth/session.ts";
-import { createToken, hashToken } from "../auth/tokens.ts";
+import { createToken, hashToken, tokenLink } from "../auth/tokens.ts";
 import { createOrganisationWithOwner, emailInUse, findUserByEmail, toAuthUser } from "../db/accounts.ts";
 import { uniqueViolation } from "../db/errors.ts";
 import { consumePasswordReset, createPasswordReset } from "../db/password-resets.ts";
@@ -84,7 +84,7 @@ export function authRouter({ db, env, logger, auth, mailer, limiters }: AccountR
         tokenHash,
         expiresAt: new Date(Date.now() + PASSWORD_RESET_VALID_MINUTES * 60_000),
       });
-      const link = `${env.APP_URL}/reset-password?token=${encodeURIComponent(token)}`;
+      const link = tokenLink(env.APP_URL, "/reset-password", token);
       await mailer.send(
         passwordResetMail({ to: user.email, name: user.name, link, validMinutes: PASSWORD_RESET_VALID_MINUTES, organisationId: user.organisationId }),
       );

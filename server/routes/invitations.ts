@@ -11,7 +11,7 @@ import {
 } from "@shared/schemas/invitations.ts";
 import { hashPassword } from "../auth/password.ts";
 import { getAuth, requireRole, startSession } from "../auth/session.ts";
-import { createToken, hashToken } from "../auth/tokens.ts";
+import { createToken, hashToken, tokenLink } from "../auth/tokens.ts";
 import { emailInUse, findUserByEmail, toAuthUser } from "../db/accounts.ts";
 import { uniqueViolation } from "../db/errors.ts";
 import { acceptInvitation, createInvitation, findUsableInvitation, listPendingInvitations, revokeInvitation } from "../db/invitations.ts";
@@ -53,7 +53,7 @@ export function invitationsRouter({ db, env, auth, mailer, limiters }: AccountRo
       invitedByName: user.name,
       expiresAt: new Date(Date.now() + INVITATION_VALID_DAYS * 24 * 3600_000),
     });
-    const link = `${env.APP_URL}/accept-invitation?token=${encodeURIComponent(token)}`;
+    const link = tokenLink(env.APP_URL, "/accept-invitation", token);
     await mailer.send(
       invitationMail({ to: email, organisationName: profile?.organisationName ?? "your company", invitedByName: user.name, role, link, organisationId }),
     );
