@@ -9,7 +9,7 @@
  */
 import { Router, type Response } from "express";
 import { z } from "zod";
-import { can, PERMISSIONS } from "@shared/schemas/auth.ts";
+import { PERMISSIONS } from "@shared/schemas/auth.ts";
 import { boundEnd, boundStart } from "@shared/schemas/dates.ts";
 import { text } from "@shared/schemas/text.ts";
 import {
@@ -46,6 +46,7 @@ import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { circuitBalance, cylinderFill, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
 import { registerCsv } from "../register/register-csv.ts";
+import { mayReadRegisterLine, readsWholeRegister, visibleRegisterLines, type RegisterReader } from "../register/register-visibility.ts";
 import { licenceNumbers } from "../db/licence-numbers.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
 
@@ -91,17 +92,16 @@ function checkCylinder(cylinder: CylinderRow, kind: MovementKind, refrigerant: s
   }
 }
 
-/** Owners and seniors see everyone's movements; technicians see their own; apprentices none. */
+/**
+ * The register's technician filter within what the reader may see (server/register/register-visibility.ts):
+ * the whole register reads anyone's lines or everyone's; otherwise only one's own.
+ */
 function registerScope(res: Response, requested: string | undefined): { technicianId?: string; allTechnicians: boolean } {
   const { user } = getAuth(res);
-  // The register is the company's record under its trading authorisation (TRADE.md §8.1,
-  // reg 141: the business keeps it), which the owner keeps and seniors review, so they see
-  // every technician's movements. A technician's licence makes them answerable for their own
-  // handling, so they may read and export their own rows, never a colleague's. Apprentices
-  // work under supervision and keep no register of their own.
-  if (can(user.role, "signOff")) return { technicianId: requested, allTechnicians: true };
-  if (requested && requested !== user.id) throw new HttpError(403, "You can see and export only your own refrigerant records");
-  return { technicianId: user.id, allTechnicians: false };
+  if (readsWholeRegister(user)) return { technicianId: requested, allTechnicians: true };
+  const technicianId = requested ?? user.id;
+  if (!mayReadRegisterLine(user, technicianId)) throw new HttpError(403, "You can see and export only your own refrigerant records");
+  return { technicianId, allTechnicians: false };
 }
 
 export function cylindersRouter({ db }: Deps): Router {
@@ -122,10 +122,10 @@ export function cylindersRouter({ db }: Deps): Router {
   });
 
   router.get("/:id", requireUser, async (req, res) => {
-    const { organisationId } = getAuth(res);
+    const { organisationId, user } = getAuth(res);
     const row = await getCylinder(db, organisationId, parseId(req.params.id, "Cylinder"));
     if (!row) throw notFound("Cylinder");
-    res.json({ cylinder: toCylinder(row), movements: await cylinderMovements(db, organisationId, row.id) });
+    res.json({ cylinder: toCylinder(row), ...visibleRegisterLines(user, await cylinderMovements(db, organisationId, row.id)) });
   });
 
   // A recovery cylinder's contents handed to a reclaimer: a register entry with no visit.
@@ -173,7 +173,8 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
     return { visit, unit };
   }
 
-  async function visitRefrigerant(organisationId: string, visitId: string, unit: NonNullable<Awaited<ReturnType<typeof getEquipment>>>) {
+  /** The visit's refrigerant as `reader` may see it: their lines, balances over all of them. */
+  async function visitRefrigerant(reader: RegisterReader, organisationId: string, visitId: string, unit: NonNullable<Awaited<ReturnType<typeof getEquipment>>>) {
     const [movements, charges, marks] = await Promise.all([
       visitMovements(db, organisationId, visitId),
       visitCircuitCharges(db, organisationId, visitId),
@@ -184,7 +185,7 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
       refrigerant: unit.refrigerant,
       liquidChargingNote: note,
       glideK,
-      movements,
+      ...visibleRegisterLines(reader, movements),
       circuits: unit.circuits.map((nameplate) =>
         circuitBalance(
           nameplate,
@@ -197,9 +198,9 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
   }
 
   router.get("/:id/refrigerant", requireUser, async (req, res) => {
-    const { organisationId } = getAuth(res);
+    const { organisationId, user } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
-    res.json(await visitRefrigerant(organisationId, visit.id, unit));
+    res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
   });
 
   router.post("/:id/refrigerant", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
@@ -256,15 +257,15 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
     const circuit = circuitOf(unit, req.params.circuit);
     const values = ChargingUpdateSchema.parse(req.body);
     await upsertCircuitCharge(db, organisationId, { visitId: visit.id, circuit, lineAdjustmentKg: values.lineAdjustmentKg, recordedBy: user.id });
-    res.json(await visitRefrigerant(organisationId, visit.id, unit));
+    res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
   });
 
   router.delete("/:id/refrigerant/charging/:circuit", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
-    const { organisationId } = getAuth(res);
+    const { organisationId, user } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
     if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
     await deleteCircuitCharge(db, organisationId, visit.id, circuitOf(unit, req.params.circuit));
-    res.json(await visitRefrigerant(organisationId, visit.id, unit));
+    res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
   });
 
   return router;
@@ -274,7 +275,7 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
 export function equipmentRefrigerantRouter({ db }: Deps): Router {
   const router = Router();
   router.get("/:id/refrigerant", requireUser, async (req, res) => {
-    const { organisationId } = getAuth(res);
+    const { organisationId, user } = getAuth(res);
     const unit = await getEquipment(db, organisationId, parseId(req.params.id, "Equipment"));
     if (!unit) throw notFound("Equipment");
     const movements = await equipmentMovements(db, organisationId, unit.id);
@@ -283,7 +284,7 @@ export function equipmentRefrigerantRouter({ db }: Deps): Router {
     res.json({
       refrigerant: unit.refrigerant,
       nameplateKg,
-      movements,
+      ...visibleRegisterLines(user, movements),
       topUps: events,
       leakRate: leakRate(events, nameplateKg),
     });
@@ -295,15 +296,17 @@ export function registerRouter({ db }: Deps): Router {
   const router = Router();
 
   async function movementsFor(res: Response, query: unknown) {
-    const { organisationId } = getAuth(res);
+    const { organisationId, user } = getAuth(res);
     const filter = RegisterQuerySchema.parse(query);
     const scope = registerScope(res, filter.technicianId);
     if (scope.technicianId && !(await findMember(db, organisationId, scope.technicianId))) throw fieldError("technicianId", "Choose one of your company's people");
-    const movements = await registerMovements(db, organisationId, {
+    const rows = await registerMovements(db, organisationId, {
       fromMs: filter.from ? boundStart(filter.from) : undefined,
       toMs: filter.to ? boundEnd(filter.to) : undefined,
       technicianId: scope.technicianId,
     });
+    // The filter above already keeps a technician to their own lines; the rule is still the one that decides.
+    const { movements } = visibleRegisterLines(user, rows);
     return { movements, allTechnicians: scope.allTechnicians, filter };
   }
 

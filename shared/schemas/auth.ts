@@ -25,6 +25,17 @@ export const PERMISSIONS = {
   signOff: ["owner", "senior"],
   /** Create and change field records (visits, readings, procedures). Apprentices only read. */
   writeRecords: ["owner", "senior", "technician"],
+  /**
+   * Read every technician's refrigerant register lines. The register is the company's record
+   * under its trading authorisation (TRADE.md §8.1, reg 141: the business keeps it): the owner
+   * keeps it and seniors review it.
+   */
+  readAllRegisterLines: ["owner", "senior"],
+  /**
+   * Read the register lines one recorded oneself: a technician's licence makes them answerable
+   * for their own handling, never a colleague's. Apprentices work under supervision and keep none.
+   */
+  readOwnRegisterLines: ["owner", "senior", "technician"],
 } as const satisfies Record<string, readonly Role[]>;
 export type Permission = keyof typeof PERMISSIONS;
 

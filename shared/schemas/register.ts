@@ -194,7 +194,13 @@ export const MovementSchema = z.object({
 });
 export type Movement = z.infer<typeof MovementSchema>;
 
-export const CylinderDetailSchema = z.object({ cylinder: CylinderSchema, movements: z.array(MovementSchema) });
+/**
+ * How many register lines an answer leaves out because the reader may not see them (another
+ * technician's, for a technician; all, for an apprentice). Balances and contents still count them.
+ */
+const HiddenMovementsSchema = z.number().int().min(0);
+
+export const CylinderDetailSchema = z.object({ cylinder: CylinderSchema, movements: z.array(MovementSchema), hiddenMovements: HiddenMovementsSchema });
 export type CylinderDetail = z.infer<typeof CylinderDetailSchema>;
 
 /** The answer to POST /api/visits/:id/refrigerant: the movement and, if it used one, its cylinder after it. */
@@ -246,6 +252,7 @@ export const VisitRefrigerantSchema = z.object({
   liquidChargingNote: z.string().nullable(),
   glideK: z.number().nullable(),
   movements: z.array(MovementSchema),
+  hiddenMovements: HiddenMovementsSchema,
   circuits: z.array(CircuitBalanceSchema),
   /** kg marked on the run log as charge adjustments; they are chart marks, not register entries. */
   runLogChargeMarksKg: z.object({ added: z.number(), removed: z.number() }),
@@ -267,6 +274,7 @@ export const EquipmentRefrigerantSchema = z.object({
   refrigerant: z.string(),
   nameplateKg: z.number(),
   movements: z.array(MovementSchema),
+  hiddenMovements: HiddenMovementsSchema,
   /** Refrigerant put back per visit beyond what was taken out: what had leaked since. */
   topUps: z.array(z.object({ visitId: z.uuid(), date: z.string(), addedKg: z.number() })),
   leakRate: AnnualLeakRateSchema.nullable(),
