@@ -82,7 +82,7 @@ export function createApp(deps: AppDeps): Express {
   app.use("/api", express.json({ limit: JSON_BODY_LIMIT }));
 
   const auth = createLucia(deps.db, env);
-  const accountDeps = { ...deps, auth, limiters: createAuthLimiters(deps.authLimits) };
+  const accountDeps = { ...deps, auth, limiters: createAuthLimiters(deps.db, deps.authLimits) };
 
   const api = express.Router();
   api.use(originCheck(env.APP_URL)); // refuse state-changing requests from other sites (CSRF)
