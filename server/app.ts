@@ -9,6 +9,7 @@ import { logSerializers } from "./logger.ts";
 import { createLucia } from "./auth/lucia.ts";
 import { originCheck } from "./auth/origin-check.ts";
 import { createAuthLimiters, type AuthLimits } from "./auth/rate-limits.ts";
+import { routePermissionGate } from "./auth/route-permissions.ts";
 import { loadSession } from "./auth/session.ts";
 import type { Database } from "./db/client.ts";
 import type { Env } from "./env.ts";
@@ -87,6 +88,7 @@ export function createApp(deps: AppDeps): Express {
   const api = express.Router();
   api.use(originCheck(env.APP_URL)); // refuse state-changing requests from other sites (CSRF)
   api.use(loadSession(auth)); // res.locals.auth for signed-in users; see server/auth/session.ts
+  api.use(routePermissionGate()); // who may call which route: the one table in server/auth/route-permissions.ts
   api.use("/health", healthRouter(deps.db));
   api.use("/auth", authRouter(accountDeps));
   api.use("/members", membersRouter(accountDeps));

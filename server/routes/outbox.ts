@@ -1,7 +1,6 @@
 import { Router } from "express";
-import { PERMISSIONS } from "@shared/schemas/auth.ts";
 import type { OutboxResponse } from "@shared/schemas/outbox.ts";
-import { getAuth, requireRole } from "../auth/session.ts";
+import { getAuth } from "../auth/session.ts";
 import { hideLinkTokens } from "../auth/tokens.ts";
 import { listOutboundMail } from "../db/outbox.ts";
 import { HttpError } from "../http/http-error.ts";
@@ -19,7 +18,7 @@ import type { AccountRouteDeps } from "./route-deps.ts";
  */
 export function outboxRouter({ db, mailer }: AccountRouteDeps): Router {
   const router = Router();
-  router.get("/", requireRole(...PERMISSIONS.manageMembers), async (_req, res) => {
+  router.get("/", async (_req, res) => {
     if (!mailer.outboxEnabled) throw new HttpError(404, "The outbox is only available in development");
     const { organisationId, user } = getAuth(res);
     const reader = user.email.toLowerCase();
