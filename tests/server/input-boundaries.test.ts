@@ -59,7 +59,7 @@ describe("input boundaries", () => {
         () =>
           senior.post("/api/cases").send({
             title: "Surrogate case",
-            difficulty: "beginner",
+            difficulty: "starter",
             story: { site: `Roof ${LONE_SURROGATE}`, equipment: "Split system", complaint: "Not cooling", conditions: "Hot day" },
             input: { refrigerant: "R410A", meteringDevice: "txv", suctionPressureKPa: 820, suctionLineTempC: 13, liquidPressureKPa: 2650, liquidLineTempC: 38 },
             reasoning: "Superheat and subcooling are both on target.",
