@@ -44,7 +44,7 @@ describe("input boundaries", () => {
       ["a profile name", () => technician.put("/api/profile").send({ name: `Sam${NUL}`, preferences: { temperatureUnit: "C", pressureUnit: "kPa", atmosphericPressureKPa: 101.325 } }), "name"],
       ["a comment", () => technician.post(`/api/visits/${visitId}/comments`).send({ body: `Checked${NUL}` }), "body"],
       ["a reading note", () => technician.post(`/api/visits/${visitId}/readings`).send({ circuit: 1, note: `x${NUL}`, suctionPressureKPa: gauge(6, "dew"), suctionLineTempC: 12, liquidPressureKPa: gauge(42, "bubble"), liquidLineTempC: 37 }), "note"],
-      ["a leak-search place", () => technician.post(`/api/visits/${visitId}/leak-searches`).send({ method: "electronic", placesChecked: [`Service valves${NUL}`] }), "placesChecked.0"],
+      ["a leak-search place", () => technician.post(`/api/visits/${visitId}/leak-searches`).send({ method: "electronic-detector", placesChecked: [`Service valves${NUL}`] }), "placesChecked.0"],
       ["a cylinder filter", () => technician.get("/api/cylinders?refrigerant=R32%00"), "refrigerant"],
     ])("refuses a NUL character in %s (400, field named)", async (_what, call, field) => {
       const response = await call();
@@ -53,7 +53,7 @@ describe("input boundaries", () => {
     });
 
     it.each([
-      ["a leak-search note (stored in jsonb)", () => technician.post(`/api/visits/${visitId}/leak-searches`).send({ method: "electronic", placesChecked: ["Caps"], note: `ok ${LONE_SURROGATE}` }), "note"],
+      ["a leak-search note (stored in jsonb)", () => technician.post(`/api/visits/${visitId}/leak-searches`).send({ method: "electronic-detector", placesChecked: ["Caps"], note: `ok ${LONE_SURROGATE}` }), "note"],
       [
         "a case story (stored in jsonb)",
         () =>

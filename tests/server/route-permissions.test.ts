@@ -7,7 +7,8 @@ import { errorHandler } from "@server/http/error-handler.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { appRoutes } from "../setup/route-table.ts";
 import { BELLBIRD, signedIn } from "../setup/demo-accounts.ts";
-import { CASE_DRAFT, pathFor, twoCompanies, type TwoCompanies } from "../setup/two-companies.ts";
+import { SESSION_ROUTES, UNTHROTTLED, sampleBodies } from "../setup/route-samples.ts";
+import { pathFor, twoCompanies, type TwoCompanies } from "../setup/two-companies.ts";
 
 const allows = (access: Access, role: Role) => access === PUBLIC || access === SIGNED_IN || (access as readonly Role[]).includes(role);
 const ENTRIES = Object.entries(ROUTE_PERMISSIONS) as [RouteKey, Access][];
@@ -16,26 +17,15 @@ const hasRecordInPath = (key: RouteKey) => key.includes("/:");
 const NO_SUCH_RECORD = "00000000-0000-4000-8000-000000000000";
 
 /**
- * Valid bodies for the routes that read their body before they look up the record in their
- * path, so that another company's record is what answers (404), not the body (400).
+ * Calls a route with its sample body (tests/setup/route-samples.ts): routes that read their
+ * body before they look up the record in their path must meet a valid one, so that the record
+ * answers (404), not the body (400).
  */
-const BODIES: Partial<Record<RouteKey, object>> = {
-  "PATCH /api/members/:id": { role: "technician" },
-  "PUT /api/cases/:id": CASE_DRAFT,
-  "POST /api/visits/:id/report/send": { to: "facilities@example.com" },
-  "PUT /api/visits/:id/refrigerant/charging/:circuit": { lineAdjustmentKg: 0 },
-  "POST /api/visits/:id/comments": { body: "Looks fine" },
-  "POST /api/visits/:id/adjustments": { kind: "airflow", description: "Fan speed up" },
-  "POST /api/visits/:id/review": { action: "submit" },
-  "POST /api/visits/:id/evacuations/:evacuationId/samples": { microns: 400 },
-  "PATCH /api/visits/:id/evacuations/:evacuationId": { isolateNow: true },
-  "POST /api/cylinders/:id/reclaim": { kg: 0.5 },
-};
-
+let bodies: ReturnType<typeof sampleBodies> = {};
 function call(agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, key: RouteKey, url: string) {
   const { method } = parseRouteKey(key);
   const test = agent[method](url);
-  return method === "get" ? test : test.send(BODIES[key] ?? {});
+  return method === "get" ? test : test.send(bodies[key] ?? {});
 }
 
 /** The route's URL naming records that do not exist (and circuit 1). */
@@ -55,9 +45,10 @@ describe("route permissions", () => {
   let world: TwoCompanies;
 
   beforeAll(async () => {
-    // Signing in ten people and re-signing for sign-out must not trip the sign-in throttle.
-    testApp = await createTestApp({ authLimits: { signInPerIp: 1_000, signUpPerIp: 1_000 } });
+    // Every caller comes from one address here; the throttles have their own tests.
+    testApp = await createTestApp({ authLimits: UNTHROTTLED });
     world = await twoCompanies(testApp);
+    bodies = sampleBodies(world.records);
   }, 120_000);
   afterAll(() => testApp.close());
 
@@ -91,9 +82,9 @@ describe("route permissions", () => {
     });
 
     it.each(ROLES)("as a %s of the company: the gate follows the table", async (role) => {
-      // Records that do not exist, so a permitted call changes nothing (404 or 400). Signing
-      // out ends the session it is made with, so it gets a session of its own.
-      const agent = key === "POST /api/auth/sign-out" ? await signedIn(testApp.app, BELLBIRD[role]) : world.bellbird[role];
+      // Records that do not exist, so a permitted call changes nothing (404 or 400). Routes
+      // that end or replace the session get a session of their own.
+      const agent = SESSION_ROUTES.has(key) ? await signedIn(testApp.app, BELLBIRD[role]) : world.bellbird[role];
       const response = await call(agent, key, urlWithoutRecords(path));
       if (allows(access, role)) {
         expect(response.status, JSON.stringify(response.body)).not.toBe(403);

@@ -22,6 +22,7 @@ export interface BellbirdRecords {
   visitId: string;
   equipmentId: string;
   customerId: string;
+  siteId: string;
   cylinderId: string;
   photoId: string;
   evacuationId: string;
@@ -72,6 +73,7 @@ export async function twoCompanies(testApp: TestApp): Promise<TwoCompanies> {
   };
   const unit = ok(await technician.get("/api/equipment"), "equipment").equipment.find((candidate: { refrigerant: string }) => candidate.refrigerant === "R407C");
   const customerId = ok(await technician.get("/api/customers"), "customers").customers[0].id;
+  const siteId = ok(await technician.get("/api/sites"), "sites").sites[0].id;
   const visitId = ok(await technician.post("/api/visits").send({ equipmentId: unit.id, reason: "Matrix visit" }), "visit").visit.id;
   const readingId = ok(
     await technician.post(`/api/visits/${visitId}/readings`).send({ circuit: 1, suctionPressureKPa: 350, suctionLineTempC: 12, liquidPressureKPa: 1600, liquidLineTempC: 37 }),
@@ -104,6 +106,7 @@ export async function twoCompanies(testApp: TestApp): Promise<TwoCompanies> {
       visitId,
       equipmentId: unit.id,
       customerId,
+      siteId,
       cylinderId,
       photoId,
       evacuationId,
