@@ -66,13 +66,12 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     circuit: z.coerce.number().int().min(1),
     dayStart: instant("dayStart must be an ISO date-time"),
     mode: z.enum(["preview", "all", "valid-only"]).default("preview"),
-    mapping: z
-      .string()
+    mapping: text({ multiline: true })
       .optional()
-      .transform((text, context) => {
-        if (!text) return undefined;
+      .transform((json, context) => {
+        if (!json) return undefined;
         try {
-          return ColumnMappingSchema.parse(JSON.parse(text));
+          return ColumnMappingSchema.parse(JSON.parse(json));
         } catch {
           context.addIssue({ code: "custom", message: "The column mapping is not valid" });
           return z.NEVER;
