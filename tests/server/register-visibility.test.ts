@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Role } from "@shared/schemas/auth.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
+import { BELLBIRD, seedBellbird, signedIn, signedInBellbird } from "../setup/demo-accounts.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 interface Line {
@@ -19,7 +19,7 @@ interface Line {
 describe("who reads which register line", () => {
   let testApp: TestApp;
   let ids: Record<string, string>;
-  const agents = {} as Record<Role | "technician2", Agent>;
+  let agents: Record<Role | "technician2", Agent>;
   let visitId: string;
   let unitId: string;
   let recoveryId: string;
@@ -29,11 +29,7 @@ describe("who reads which register line", () => {
   beforeAll(async () => {
     testApp = await createTestApp();
     ids = await seedBellbird(testApp);
-    agents.owner = await signedIn(testApp.app, BELLBIRD.owner);
-    agents.senior = await signedIn(testApp.app, BELLBIRD.senior);
-    agents.technician = await signedIn(testApp.app, BELLBIRD.technician);
-    agents.technician2 = await signedIn(testApp.app, "tech2@bellbird.example");
-    agents.apprentice = await signedIn(testApp.app, BELLBIRD.apprentice);
+    agents = { ...(await signedInBellbird(testApp.app)), technician2: await signedIn(testApp.app, "tech2@bellbird.example") };
 
     const unit = (await agents.technician.get("/api/equipment")).body.equipment.find((candidate: { refrigerant: string }) => candidate.refrigerant === "R407C");
     unitId = unit.id;

@@ -4,7 +4,7 @@ import { ROLES, type Role } from "@shared/schemas/auth.ts";
 import { hashPassword } from "@server/auth/password.ts";
 import { createUser } from "@server/db/accounts.ts";
 import type { TestApp } from "./test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "./demo-accounts.ts";
+import { seedBellbird, signedIn, signedInBellbird, signUpOtherCompany } from "./demo-accounts.ts";
 
 export type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -50,11 +50,7 @@ const COLDFRONT_PASSWORD = "frosty-coil-44-north";
  */
 export async function twoCompanies(testApp: TestApp): Promise<TwoCompanies> {
   const userIds = await seedBellbird(testApp);
-  const bellbird = {} as Record<Role, Agent>;
-  bellbird.owner = await signedIn(testApp.app, BELLBIRD.owner);
-  bellbird.senior = await signedIn(testApp.app, BELLBIRD.senior);
-  bellbird.technician = await signedIn(testApp.app, BELLBIRD.technician);
-  bellbird.apprentice = await signedIn(testApp.app, BELLBIRD.apprentice);
+  const bellbird = await signedInBellbird(testApp.app);
 
   const coldfront = {} as Record<Role, Agent>;
   const { agent, user } = await signUpOtherCompany(testApp.app);
