@@ -94,7 +94,8 @@ export type SignUp = z.infer<typeof SignUpSchema>;
 /** POST /api/auth/sign-in. No password rules here: old passwords must still work. */
 export const SignInSchema = z.object({
   email: EmailSchema,
-  password: text({ trim: false }).min(1, "Enter your password").max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters`),
+  // Tabs and line breaks pass: a password set before the text rules must still sign in.
+  password: text({ trim: false, multiline: true }).min(1, "Enter your password").max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters`),
 });
 export type SignIn = z.infer<typeof SignInSchema>;
 
