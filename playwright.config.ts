@@ -1,5 +1,6 @@
 import { defineConfig } from "@playwright/test";
 import { CHROMIUM_PATH } from "./scripts/chromium-path.mjs";
+import { MAIL_DROP_DIR } from "./tests/browser/mail-drop.ts";
 
 // PLAYWRIGHT_PORT lets two checkouts run their browser tests side by side.
 const PORT = Number(process.env.PLAYWRIGHT_PORT ?? 3100);
@@ -32,8 +33,9 @@ export default defineConfig({
     },
   },
   webServer: {
-    // OUTBOX_ENABLED: the invitation test reads the caught mail on the Outbox page.
-    command: `NODE_ENV=production DATA_DIR=memory:// PORT=${PORT} LOG_LEVEL=warn OUTBOX_ENABLED=true npx tsx server/index.ts`,
+    // OUTBOX_ENABLED: the invitation test sees the caught mail on the Outbox page; the invitee
+    // reads it from MAIL_DROP_DIR, emptied at each start, since the Outbox hides others' links.
+    command: `rm -rf ${MAIL_DROP_DIR} && NODE_ENV=production DATA_DIR=memory:// PORT=${PORT} LOG_LEVEL=warn OUTBOX_ENABLED=true MAIL_DROP_DIR=${MAIL_DROP_DIR} npx tsx server/index.ts`,
     url: `http://127.0.0.1:${PORT}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,

@@ -5,9 +5,11 @@ import express, { type Express, type RequestHandler } from "express";
 import helmet from "helmet";
 import { pinoHttp } from "pino-http";
 import type { Logger } from "pino";
+import { logSerializers } from "./logger.ts";
 import { createLucia } from "./auth/lucia.ts";
 import { originCheck } from "./auth/origin-check.ts";
 import { createAuthLimiters, type AuthLimits } from "./auth/rate-limits.ts";
+import { routePermissionGate } from "./auth/route-permissions.ts";
 import { loadSession } from "./auth/session.ts";
 import type { Database } from "./db/client.ts";
 import type { Env } from "./env.ts";
@@ -57,8 +59,9 @@ export function createApp(deps: AppDeps): Express {
         directives: {
           // Photos are shown from blob: URLs before upload; fonts are bundled, never from a CDN.
           "img-src": ["'self'", "data:", "blob:"],
-          // Plain-http LAN hosts (a tablet on the workshop network) must not be forced to https.
-          "upgrade-insecure-requests": env.NODE_ENV === "production" ? [] : null,
+          // Only an https install may ask browsers to upgrade: on a plain-http LAN host (a tablet
+          // on the workshop network) the upgraded requests would have nowhere to go.
+          "upgrade-insecure-requests": env.NODE_ENV === "production" && new URL(env.APP_URL).protocol === "https:" ? [] : null,
           // Vite's dev server injects an inline React Refresh preamble and talks over a
           // websocket; the production build has neither, so only development relaxes these.
           ...(deps.clientMiddleware ? { "script-src": ["'self'", "'unsafe-inline'"], "connect-src": ["'self'", "ws:"] } : {}),
@@ -70,6 +73,8 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     pinoHttp({
       logger,
+      // Cookies and tokens never reach the log: see server/logger.ts.
+      serializers: logSerializers,
       // Quiet logs: health probes and static assets are noise.
       autoLogging: { ignore: (req) => req.url === "/api/health" || !req.url?.startsWith("/api") },
       customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
@@ -78,11 +83,12 @@ export function createApp(deps: AppDeps): Express {
   app.use("/api", express.json({ limit: JSON_BODY_LIMIT }));
 
   const auth = createLucia(deps.db, env);
-  const accountDeps = { ...deps, auth, limiters: createAuthLimiters(deps.authLimits) };
+  const accountDeps = { ...deps, auth, limiters: createAuthLimiters(deps.db, deps.authLimits) };
 
   const api = express.Router();
   api.use(originCheck(env.APP_URL)); // refuse state-changing requests from other sites (CSRF)
   api.use(loadSession(auth)); // res.locals.auth for signed-in users; see server/auth/session.ts
+  api.use(routePermissionGate()); // who may call which route: the one table in server/auth/route-permissions.ts
   api.use("/health", healthRouter(deps.db));
   api.use("/auth", authRouter(accountDeps));
   api.use("/members", membersRouter(accountDeps));

@@ -40,6 +40,12 @@ const EnvSchema = z.object({
    */
   OUTBOX_ENABLED: z.enum(["true", "false", "1", "0"]).optional(),
   /**
+   * A folder where the built-in fake mail server also writes each message it catches, one
+   * file each: the mailbox of people who cannot read the Outbox (an invitee, a colleague whose
+   * reset link the Outbox hides). For development and the browser tests; ignored with SMTP_HOST.
+   */
+  MAIL_DROP_DIR: z.string().min(1).optional(),
+  /**
    * Secure flag of the session cookie. Defaults to on in production; turn it off only for a
    * plain-http deployment on a closed network, or browsers will drop the cookie.
    */

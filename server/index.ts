@@ -6,6 +6,7 @@ import type { Server } from "node:http";
 import { createApp } from "./app.ts";
 import { openDatabase } from "./db/client.ts";
 import { deleteExpiredSessions } from "./db/expired-sessions.ts";
+import { deleteEndedCounters } from "./db/rate-limit-counters.ts";
 import { seedDemoData } from "./db/seed/seed-demo.ts";
 import { upgradeStoredDiagnoses } from "./db/upgrade-stored-diagnoses.ts";
 import { readEnv } from "./env.ts";
@@ -43,12 +44,13 @@ const server: Server = app.listen(env.PORT, env.HOST, () => {
   logger.info(`Satura listening on http://localhost:${port}`);
 });
 
-// Expired sessions are purged at start and hourly; unref so the timer never holds the process.
+// Expired sessions and ended throttle counters are purged at start and hourly; unref so the
+// timer never holds the process.
 const SESSION_PURGE_INTERVAL_MS = 60 * 60 * 1000;
 const purgeSessions = () =>
-  deleteExpiredSessions(database.db)
-    .then((count) => count > 0 && logger.info({ count }, "expired sessions deleted"))
-    .catch((error: unknown) => logger.error({ err: error }, "could not delete expired sessions"));
+  Promise.all([deleteExpiredSessions(database.db), deleteEndedCounters(database.db)])
+    .then(([count]) => count > 0 && logger.info({ count }, "expired sessions deleted"))
+    .catch((error: unknown) => logger.error({ err: error }, "could not delete expired sessions or throttle counters"));
 void purgeSessions();
 setInterval(() => void purgeSessions(), SESSION_PURGE_INTERVAL_MS).unref();
 

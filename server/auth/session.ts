@@ -1,23 +1,27 @@
 /**
  * Sessions and authorisation for every API route.
  *
- * How later routes use this (jobs/visits, casebook, tables …):
+ * How routes use this:
  *
- *   router.get("/", requireUser, async (req, res) => {
+ *   // server/auth/route-permissions.ts: who may call the route at all
+ *   "POST /api/visits/:id/readings": PERMISSIONS.writeRecords,
+ *
+ *   // the router: no guard of its own; the gate has already answered 401 or 403
+ *   router.post("/:id/readings", async (req, res) => {
  *     const { user, organisationId } = getAuth(res);
  *     const rows = await listThings(db, organisationId); // every query scoped by organisationId
  *     …
  *   });
- *   router.post("/:id/sign-off", requireRole(...PERMISSIONS.signOff), handler);
  *
  * - `loadSession(auth)` runs once for all of /api (mounted in app.ts). It reads the session
  *   cookie, validates it, renews it when lucia says so, clears it when it is stale, and puts
  *   `res.locals.auth = { user, session, organisationId }` for a signed-in, active user.
  * - `requireUser` answers 401 without a session. `requireRole(...roles)` also answers 403 when
- *   the user's role is not listed. Roles are read from the database on every request, so a
- *   role change applies at once.
- * - `getAuth(res)` returns res.locals.auth inside a handler behind requireUser/requireRole
- *   (it throws a 401 if used without them, so a forgotten guard fails closed).
+ *   the user's role is not listed. The route gate (server/auth/route-permissions.ts) applies
+ *   them from its table. Roles are read from the database on every request, so a role change
+ *   applies at once.
+ * - `getAuth(res)` returns res.locals.auth inside a handler of a signed-in route (it throws a
+ *   401 if there is no session, so a route wrongly marked public fails closed).
  * - Records of another organisation must answer 404, never 403: look them up with
  *   `where organisation_id = organisationId`, and treat "not found" and "not yours" alike.
  */

@@ -13,7 +13,7 @@ export async function recordOutboundMail(
 }
 
 /** The organisation's latest messages, newest first. */
-export async function listOutboundMail(db: Database, organisationId: string): Promise<OutboxMessage[]> {
+export async function listOutboundMail(db: Database, organisationId: string): Promise<Omit<OutboxMessage, "linksHidden">[]> {
   const rows = await db
     .select()
     .from(outboundMail)

@@ -119,6 +119,22 @@ export const passwordResets = pgTable(
   (table) => [uniqueIndex("password_resets_token_hash_unique").on(table.tokenHash)],
 );
 
+/**
+ * Hit counters of the sign-in, reset and sign-up throttles (server/auth/rate-limits.ts), in the
+ * database rather than in one process's memory, so that several app servers share one count.
+ * The key is a SHA-256 of the throttle's name and what it counts (an address, an account and
+ * client pair): no e-mail address or IP is stored. A row counts until `reset_at`, then starts over.
+ */
+export const rateLimitCounters = pgTable(
+  "rate_limit_counters",
+  {
+    key: text("key").primaryKey(),
+    hits: integer("hits").notNull(),
+    resetAt: timestamp("reset_at", { withTimezone: true, mode: "date" }).notNull(),
+  },
+  (table) => [index("rate_limit_counters_reset_at_idx").on(table.resetAt)],
+);
+
 /** Mail handed to the SMTP layer, kept so owners can read the outbox in development. */
 export const outboundMail = pgTable(
   "outbound_mail",

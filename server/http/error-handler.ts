@@ -2,6 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from "express";
 import multer from "multer";
 import { ZodError } from "zod";
 import { DiagnosisInputError } from "@shared/engine/index.ts";
+import { uniqueViolation } from "../db/errors.ts";
 import { HttpError } from "./http-error.ts";
 
 /** Turns zod issues into one message per field path, e.g. { "suctionPressureKPa": "..." }. */
@@ -37,6 +38,11 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   if (error instanceof multer.MulterError) {
     const tooLarge = error.code === "LIMIT_FILE_SIZE";
     res.status(tooLarge ? 413 : 400).json({ message: tooLarge ? "That file is too large (12 MB at most)" : `Upload refused: ${error.message}` });
+    return;
+  }
+  // Two requests raced past a route's own "is it taken?" check; the unique index held.
+  if (uniqueViolation(error)) {
+    res.status(409).json({ message: "That record already exists: another request saved it a moment ago. Reload to see it." });
     return;
   }
   if (error instanceof HttpError) {

@@ -7,6 +7,7 @@ import { parse } from "csv-parse/sync";
 import { z } from "zod";
 import { diagnose } from "@shared/engine/index.ts";
 import { DiagnosisInputSchema, type DiagnosisInput, type DiagnosisResult } from "@shared/schemas/diagnosis.ts";
+import { isStorableInstant } from "@shared/schemas/dates.ts";
 
 /** Reading fields a column can be mapped to, besides the time column. */
 export const IMPORTABLE_FIELDS = [
@@ -89,15 +90,18 @@ interface ImportContext {
   dayStart: Date;
 }
 
+/** A time cell as an instant the database can store (a cell like "99999" reads as the year 99999), or null. */
 function parseTime(text: string, dayStart: Date): Date | null {
   const trimmed = text.trim();
   const clock = /^(\d{1,2}):(\d{2})(?::(\d{2}))?$/.exec(trimmed);
+  let ms: number;
   if (clock) {
-    const seconds = Number(clock[1]) * 3600 + Number(clock[2]) * 60 + Number(clock[3] ?? 0);
-    return Number(clock[1]) < 24 && Number(clock[2]) < 60 ? new Date(dayStart.getTime() + seconds * 1000) : null;
+    if (Number(clock[1]) >= 24 || Number(clock[2]) >= 60) return null;
+    ms = dayStart.getTime() + (Number(clock[1]) * 3600 + Number(clock[2]) * 60 + Number(clock[3] ?? 0)) * 1000;
+  } else {
+    ms = Date.parse(trimmed);
   }
-  const parsed = Date.parse(trimmed);
-  return Number.isNaN(parsed) ? null : new Date(parsed);
+  return isStorableInstant(ms) ? new Date(ms) : null;
 }
 
 export function previewReadingsCsv(text: string, mappingIn: ColumnMapping | undefined, context: ImportContext): ImportPreview {

@@ -1,4 +1,7 @@
+import { randomBytes } from "node:crypto";
+import { mkdirSync, writeFileSync } from "node:fs";
 import type { AddressInfo } from "node:net";
+import { join } from "node:path";
 import { SMTPServer } from "smtp-server";
 
 /** A message as the fake server received it over SMTP. */
@@ -31,7 +34,8 @@ function decodeQuotedPrintable(raw: string): string {
  * inside the app's process, that accepts everything and keeps it in memory. No TLS and no
  * login (STACK.md gotcha 12), so it must never listen beyond loopback.
  */
-export async function startFakeSmtp(): Promise<FakeSmtp> {
+export async function startFakeSmtp(options: { dropDir?: string } = {}): Promise<FakeSmtp> {
+  if (options.dropDir) mkdirSync(options.dropDir, { recursive: true });
   const messages: ReceivedMail[] = [];
   const waiters = new Set<(mail: ReceivedMail) => void>();
 
@@ -54,6 +58,8 @@ export async function startFakeSmtp(): Promise<FakeSmtp> {
           receivedAt: new Date(),
         };
         messages.push(mail);
+        // One file per message, named to sort by arrival, for whoever reads the drop folder.
+        if (options.dropDir) writeFileSync(join(options.dropDir, `${mail.receivedAt.getTime()}-${randomBytes(4).toString("hex")}.eml`), mail.decoded);
         for (const waiter of waiters) waiter(mail);
         callback();
       });

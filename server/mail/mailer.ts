@@ -54,7 +54,7 @@ export async function createMailer({ env, db, logger }: { env: Env; db: Database
   if (env.NODE_ENV === "production") {
     logger.warn("SMTP_HOST is not set: e-mail goes to the built-in fake mail server and is never delivered");
   }
-  const fakeSmtp = await startFakeSmtp();
+  const fakeSmtp = await startFakeSmtp({ dropDir: env.MAIL_DROP_DIR });
   const transport = nodemailer.createTransport({
     host: fakeSmtp.host,
     port: fakeSmtp.port,

@@ -8,9 +8,10 @@ import {
   type MeResponse,
 } from "@shared/schemas/auth.ts";
 import { hashPassword, verifyDummyPassword, verifyPassword } from "../auth/password.ts";
-import { endSession, getAuth, requireUser, startSession } from "../auth/session.ts";
-import { createToken, hashToken } from "../auth/tokens.ts";
+import { endSession, getAuth, startSession } from "../auth/session.ts";
+import { createToken, hashToken, tokenLink } from "../auth/tokens.ts";
 import { createOrganisationWithOwner, emailInUse, findUserByEmail, toAuthUser } from "../db/accounts.ts";
+import { uniqueViolation } from "../db/errors.ts";
 import { consumePasswordReset, createPasswordReset } from "../db/password-resets.ts";
 import { HttpError } from "../http/http-error.ts";
 import { passwordResetMail } from "../mail/messages.ts";
@@ -30,12 +31,13 @@ export function authRouter({ db, env, logger, auth, mailer, limiters }: AccountR
   router.post("/sign-up", ...limiters.signUp, async (req, res) => {
     const input = SignUpSchema.parse(req.body);
     // Sign-up must say when an address is taken; it is throttled per IP like sign-in.
-    if (await emailInUse(db, input.email)) {
-      throw new HttpError(409, "Some fields need attention", {
-        email: "This e-mail address already has an account. Sign in, or reset the password.",
-      });
-    }
-    const user = await createOrganisationWithOwner(db, { ...input, passwordHash: await hashPassword(input.password) });
+    const taken = () =>
+      new HttpError(409, "Some fields need attention", { email: "This e-mail address already has an account. Sign in, or reset the password." });
+    if (await emailInUse(db, input.email)) throw taken();
+    // Two sign-ups for one address at once both pass the check above; the unique index stops the second.
+    const user = await createOrganisationWithOwner(db, { ...input, passwordHash: await hashPassword(input.password) }).catch((error: unknown) =>
+      Promise.reject(uniqueViolation(error) ? taken() : error),
+    );
     await startSession(auth, res, user.id);
     res.status(201).json({ user: toAuthUser(user) } satisfies MeResponse);
   });
@@ -63,7 +65,7 @@ export function authRouter({ db, env, logger, auth, mailer, limiters }: AccountR
     res.status(204).end();
   });
 
-  router.get("/me", requireUser, (_req, res) => {
+  router.get("/me", (_req, res) => {
     const { user } = getAuth(res);
     res.json({ user: toAuthUser({ ...user }) } satisfies MeResponse);
   });
@@ -82,7 +84,7 @@ export function authRouter({ db, env, logger, auth, mailer, limiters }: AccountR
         tokenHash,
         expiresAt: new Date(Date.now() + PASSWORD_RESET_VALID_MINUTES * 60_000),
       });
-      const link = `${env.APP_URL}/reset-password?token=${encodeURIComponent(token)}`;
+      const link = tokenLink(env.APP_URL, "/reset-password", token);
       await mailer.send(
         passwordResetMail({ to: user.email, name: user.name, link, validMinutes: PASSWORD_RESET_VALID_MINUTES, organisationId: user.organisationId }),
       );

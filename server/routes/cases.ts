@@ -1,9 +1,8 @@
 import { randomInt } from "node:crypto";
 import { Router, type Response } from "express";
 import { chargeStateText } from "@shared/content/charge-states.ts";
-import { diagnose, expectedAnswers, generateCase, GENERATOR_REFRIGERANTS, seededRandom } from "@shared/engine/index.ts";
+import { diagnose, expectedAnswers, generateCase, seededRandom } from "@shared/engine/index.ts";
 import {
-  CASEBOOK_PERMISSIONS,
   CaseDraftSchema,
   CaseFromReadingSchema,
   GenerateCaseSchema,
@@ -12,7 +11,7 @@ import {
   type Case,
   type CaseDraft,
 } from "@shared/schemas/casebook.ts";
-import { getAuth, requireRole, requireUser } from "../auth/session.ts";
+import { getAuth } from "../auth/session.ts";
 import {
   deleteCase,
   findCase,
@@ -79,12 +78,12 @@ export function casesRouter({ db }: Deps): Router {
     res.status(status).json({ case: toCase(record, true) });
   }
 
-  router.get("/", requireUser, async (_req, res) => {
+  router.get("/", async (_req, res) => {
     const { organisationId, user } = getAuth(res);
     res.json({ cases: await listCases(db, organisationId, user.id, isAuthor(res)) });
   });
 
-  router.post("/", requireRole(...CASEBOOK_PERMISSIONS.author), async (req, res) => {
+  router.post("/", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const draft = CaseDraftSchema.parse(req.body);
     const id = await insertCase(db, organisationId, { ...withEngineAnswers(draft), createdBy: user.id });
@@ -92,7 +91,7 @@ export function casesRouter({ db }: Deps): Router {
   });
 
   // A real visit's reading as a draft case: only the numbers and the kind of unit are kept.
-  router.post("/from-reading", requireRole(...CASEBOOK_PERMISSIONS.author), async (req, res) => {
+  router.post("/from-reading", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const { readingId } = CaseFromReadingSchema.parse(req.body);
     const reading = await findReadingForCase(db, organisationId, readingId);
@@ -124,13 +123,8 @@ export function casesRouter({ db }: Deps): Router {
   });
 
   // Practice never runs out: any signed-in user may make a case; it is not stored.
-  router.post("/generate", requireUser, async (req, res) => {
+  router.post("/generate", async (req, res) => {
     const options = GenerateCaseSchema.parse(req.body);
-    if (!(GENERATOR_REFRIGERANTS as readonly string[]).includes(options.refrigerant)) {
-      throw new HttpError(400, "Some fields need attention", {
-        refrigerant: `The generator makes cases for ${GENERATOR_REFRIGERANTS.join(", ")}`,
-      });
-    }
     const seed = options.seed ?? randomInt(0, 2 ** 32 - 1);
     const id = generatedCaseId({ ...options, seed });
     const made = generateCase({ ...options, random: seededRandom(seed) });
@@ -140,14 +134,14 @@ export function casesRouter({ db }: Deps): Router {
     res.status(201).json({ case: toCase(record, isAuthor(res)) });
   });
 
-  router.get("/:id", requireUser, async (req, res) => {
+  router.get("/:id", async (req, res) => {
     const author = isAuthor(res);
     const record = await findCase(db, getAuth(res).organisationId, String(req.params.id), author);
     if (!record) throw notFound("Case");
     res.json({ case: toCase(record, author) });
   });
 
-  router.put("/:id", requireRole(...CASEBOOK_PERMISSIONS.author), async (req, res) => {
+  router.put("/:id", async (req, res) => {
     const id = String(req.params.id);
     refuseSharedCase(id);
     const { organisationId } = getAuth(res);
@@ -156,7 +150,7 @@ export function casesRouter({ db }: Deps): Router {
     await send(res, organisationId, id);
   });
 
-  router.post("/:id/publish", requireRole(...CASEBOOK_PERMISSIONS.author), async (req, res) => {
+  router.post("/:id/publish", async (req, res) => {
     const id = String(req.params.id);
     // A built-in case is already published to everyone: a conflict with its state, not a permission.
     refuseSharedCase(id, 409);
@@ -165,7 +159,7 @@ export function casesRouter({ db }: Deps): Router {
     await send(res, organisationId, id);
   });
 
-  router.delete("/:id", requireRole(...CASEBOOK_PERMISSIONS.author), async (req, res) => {
+  router.delete("/:id", async (req, res) => {
     const id = String(req.params.id);
     refuseSharedCase(id);
     if (!(await deleteCase(db, getAuth(res).organisationId, parseId(id, "Case")))) throw notFound("Case");

@@ -1,5 +1,4 @@
 import { Router } from "express";
-import { PERMISSIONS } from "@shared/schemas/auth.ts";
 import {
   AcceptInvitationSchema,
   CreateInvitationSchema,
@@ -10,9 +9,10 @@ import {
   type InvitationsResponse,
 } from "@shared/schemas/invitations.ts";
 import { hashPassword } from "../auth/password.ts";
-import { getAuth, requireRole, startSession } from "../auth/session.ts";
-import { createToken, hashToken } from "../auth/tokens.ts";
+import { getAuth, startSession } from "../auth/session.ts";
+import { createToken, hashToken, tokenLink } from "../auth/tokens.ts";
 import { emailInUse, findUserByEmail, toAuthUser } from "../db/accounts.ts";
+import { uniqueViolation } from "../db/errors.ts";
 import { acceptInvitation, createInvitation, findUsableInvitation, listPendingInvitations, revokeInvitation } from "../db/invitations.ts";
 import { getProfile } from "../db/accounts.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
@@ -24,14 +24,13 @@ const INVALID_LINK = "This invitation link is not valid any more. Ask the person
 
 export function invitationsRouter({ db, env, auth, mailer, limiters }: AccountRouteDeps): Router {
   const router = Router();
-  const manage = requireRole(...PERMISSIONS.manageMembers);
 
-  router.get("/", manage, async (_req, res) => {
+  router.get("/", async (_req, res) => {
     const { organisationId } = getAuth(res);
     res.json({ invitations: await listPendingInvitations(db, organisationId) } satisfies InvitationsResponse);
   });
 
-  router.post("/", manage, async (req, res) => {
+  router.post("/", async (req, res) => {
     const { user, organisationId } = getAuth(res);
     const { email, role } = CreateInvitationSchema.parse(req.body);
     // Someone already in this company is visible to the owner anyway. An address that belongs
@@ -52,14 +51,14 @@ export function invitationsRouter({ db, env, auth, mailer, limiters }: AccountRo
       invitedByName: user.name,
       expiresAt: new Date(Date.now() + INVITATION_VALID_DAYS * 24 * 3600_000),
     });
-    const link = `${env.APP_URL}/accept-invitation?token=${encodeURIComponent(token)}`;
+    const link = tokenLink(env.APP_URL, "/accept-invitation", token);
     await mailer.send(
       invitationMail({ to: email, organisationName: profile?.organisationName ?? "your company", invitedByName: user.name, role, link, organisationId }),
     );
     res.status(201).json({ invitation } satisfies InvitationResponse);
   });
 
-  router.delete("/:id", manage, async (req, res) => {
+  router.delete("/:id", async (req, res) => {
     const { organisationId } = getAuth(res);
     const id = parseId(req.params.id, "Invitation");
     if (!(await revokeInvitation(db, organisationId, id))) throw notFound("Invitation");
@@ -79,10 +78,12 @@ export function invitationsRouter({ db, env, auth, mailer, limiters }: AccountRo
     const { token, name, password } = AcceptInvitationSchema.parse(req.body);
     const found = await findUsableInvitation(db, hashToken(token));
     if (!found) throw new HttpError(404, INVALID_LINK);
-    if (await emailInUse(db, found.invitation.email)) {
-      throw new HttpError(409, "This e-mail address already has a Satura account. Sign in with it, or ask for an invitation to another address.");
-    }
-    const user = await acceptInvitation(db, { invitationId: found.invitation.id, name, passwordHash: await hashPassword(password) });
+    const taken = () =>
+      new HttpError(409, "This e-mail address already has a Satura account. Sign in with it, or ask for an invitation to another address.");
+    if (await emailInUse(db, found.invitation.email)) throw taken();
+    const user = await acceptInvitation(db, { invitationId: found.invitation.id, name, passwordHash: await hashPassword(password) }).catch(
+      (error: unknown) => Promise.reject(uniqueViolation(error) ? taken() : error),
+    );
     if (!user) throw new HttpError(404, INVALID_LINK);
     await startSession(auth, res, user.id);
     res.status(201).json({ user: toAuthUser(user) });

@@ -1,6 +1,6 @@
 import { Router } from "express";
 import { UpdateProfileSchema, type Profile } from "@shared/schemas/profile.ts";
-import { getAuth, requireUser } from "../auth/session.ts";
+import { getAuth } from "../auth/session.ts";
 import { getProfile, updateProfile } from "../db/accounts.ts";
 import { notFound } from "../http/http-error.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
@@ -8,7 +8,6 @@ import type { AccountRouteDeps } from "./route-deps.ts";
 /** Everyone's own settings: display name, display units and default atmospheric pressure. */
 export function profileRouter({ db }: AccountRouteDeps): Router {
   const router = Router();
-  router.use(requireUser);
 
   router.get("/", async (_req, res) => {
     const { user, organisationId } = getAuth(res);

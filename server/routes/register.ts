@@ -9,7 +9,8 @@
  */
 import { Router, type Response } from "express";
 import { z } from "zod";
-import { can, PERMISSIONS } from "@shared/schemas/auth.ts";
+import { boundEnd, boundStart } from "@shared/schemas/dates.ts";
+import { text } from "@shared/schemas/text.ts";
 import {
   ChargingUpdateSchema,
   CylinderCreateSchema,
@@ -18,12 +19,10 @@ import {
   MovementCreateSchema,
   ReclaimCreateSchema,
   RegisterQuerySchema,
-  boundEnd,
-  boundStart,
   type CylinderKind,
   type MovementKind,
 } from "@shared/schemas/register.ts";
-import { getAuth, requireRole, requireUser } from "../auth/session.ts";
+import { getAuth } from "../auth/session.ts";
 import { getEquipment } from "../db/equipment.ts";
 import {
   createCylinder,
@@ -46,6 +45,7 @@ import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { circuitBalance, cylinderFill, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
 import { registerCsv } from "../register/register-csv.ts";
+import { mayReadRegisterLine, readsWholeRegister, visibleRegisterLines, type RegisterReader } from "../register/register-visibility.ts";
 import { licenceNumbers } from "../db/licence-numbers.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
 
@@ -91,45 +91,44 @@ function checkCylinder(cylinder: CylinderRow, kind: MovementKind, refrigerant: s
   }
 }
 
-/** Owners and seniors see everyone's movements; technicians see their own; apprentices none. */
+/**
+ * The register's technician filter within what the reader may see (server/register/register-visibility.ts):
+ * the whole register reads anyone's lines or everyone's; otherwise only one's own.
+ */
 function registerScope(res: Response, requested: string | undefined): { technicianId?: string; allTechnicians: boolean } {
   const { user } = getAuth(res);
-  // The register is the company's record under its trading authorisation (TRADE.md §8.1,
-  // reg 141: the business keeps it), which the owner keeps and seniors review, so they see
-  // every technician's movements. A technician's licence makes them answerable for their own
-  // handling, so they may read and export their own rows, never a colleague's. Apprentices
-  // work under supervision and keep no register of their own.
-  if (can(user.role, "signOff")) return { technicianId: requested, allTechnicians: true };
-  if (requested && requested !== user.id) throw new HttpError(403, "You can see and export only your own refrigerant records");
-  return { technicianId: user.id, allTechnicians: false };
+  if (readsWholeRegister(user)) return { technicianId: requested, allTechnicians: true };
+  const technicianId = requested ?? user.id;
+  if (!mayReadRegisterLine(user, technicianId)) throw new HttpError(403, "You can see and export only your own refrigerant records");
+  return { technicianId, allTechnicians: false };
 }
 
 export function cylindersRouter({ db }: Deps): Router {
   const router = Router();
-  const ListQuery = z.object({ refrigerant: z.string().trim().min(1).optional() });
+  const ListQuery = z.object({ refrigerant: text().min(1).optional() });
 
-  router.get("/", requireUser, async (req, res) => {
+  router.get("/", async (req, res) => {
     const filter = ListQuery.parse(req.query);
     const rows = await listCylinders(db, getAuth(res).organisationId, filter);
     res.json({ cylinders: rows.map(toCylinder) });
   });
 
-  router.post("/", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+  router.post("/", async (req, res) => {
     const values = CylinderCreateSchema.parse(req.body);
     const row = await createCylinder(db, getAuth(res).organisationId, values);
     if (!row) throw fieldError("label", "Your company already has a cylinder with this label");
     res.status(201).json({ cylinder: toCylinder(row) });
   });
 
-  router.get("/:id", requireUser, async (req, res) => {
-    const { organisationId } = getAuth(res);
+  router.get("/:id", async (req, res) => {
+    const { organisationId, user } = getAuth(res);
     const row = await getCylinder(db, organisationId, parseId(req.params.id, "Cylinder"));
     if (!row) throw notFound("Cylinder");
-    res.json({ cylinder: toCylinder(row), movements: await cylinderMovements(db, organisationId, row.id) });
+    res.json({ cylinder: toCylinder(row), ...visibleRegisterLines(user, await cylinderMovements(db, organisationId, row.id)) });
   });
 
   // A recovery cylinder's contents handed to a reclaimer: a register entry with no visit.
-  router.post("/:id/reclaim", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+  router.post("/:id/reclaim", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const row = await getCylinder(db, organisationId, parseId(req.params.id, "Cylinder"));
     if (!row) throw notFound("Cylinder");
@@ -154,6 +153,13 @@ export function cylindersRouter({ db }: Deps): Router {
   return router;
 }
 
+/** The `:circuit` of a path, as a circuit of the unit's nameplate; anything else (2.5, "x", 9) is no circuit of it. */
+function circuitOf(unit: { circuits: { number: number }[] }, raw: unknown): number {
+  const circuit = typeof raw === "string" && /^\d{1,2}$/.test(raw) ? Number(raw) : NaN;
+  if (!unit.circuits.some((candidate) => candidate.number === circuit)) throw notFound("Circuit");
+  return circuit;
+}
+
 /** Mounted at /api/visits beside the visits router. */
 export function visitRefrigerantRouter({ db }: Deps): Router {
   const router = Router();
@@ -166,7 +172,8 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
     return { visit, unit };
   }
 
-  async function visitRefrigerant(organisationId: string, visitId: string, unit: NonNullable<Awaited<ReturnType<typeof getEquipment>>>) {
+  /** The visit's refrigerant as `reader` may see it: their lines, balances over all of them. */
+  async function visitRefrigerant(reader: RegisterReader, organisationId: string, visitId: string, unit: NonNullable<Awaited<ReturnType<typeof getEquipment>>>) {
     const [movements, charges, marks] = await Promise.all([
       visitMovements(db, organisationId, visitId),
       visitCircuitCharges(db, organisationId, visitId),
@@ -177,7 +184,7 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
       refrigerant: unit.refrigerant,
       liquidChargingNote: note,
       glideK,
-      movements,
+      ...visibleRegisterLines(reader, movements),
       circuits: unit.circuits.map((nameplate) =>
         circuitBalance(
           nameplate,
@@ -189,13 +196,13 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
     };
   }
 
-  router.get("/:id/refrigerant", requireUser, async (req, res) => {
-    const { organisationId } = getAuth(res);
+  router.get("/:id/refrigerant", async (req, res) => {
+    const { organisationId, user } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
-    res.json(await visitRefrigerant(organisationId, visit.id, unit));
+    res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
   });
 
-  router.post("/:id/refrigerant", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+  router.post("/:id/refrigerant", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
     if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
@@ -242,23 +249,22 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
 
   // Declares that the circuit had a full weigh-in (or clears it with DELETE); the weighed-in
   // mass is the register's reused + added kg, so only the line-length adjustment is entered.
-  router.put("/:id/refrigerant/charging/:circuit", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+  router.put("/:id/refrigerant/charging/:circuit", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
     if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
-    const circuit = Number(req.params.circuit);
-    if (!unit.circuits.some((candidate) => candidate.number === circuit)) throw notFound("Circuit");
+    const circuit = circuitOf(unit, req.params.circuit);
     const values = ChargingUpdateSchema.parse(req.body);
     await upsertCircuitCharge(db, organisationId, { visitId: visit.id, circuit, lineAdjustmentKg: values.lineAdjustmentKg, recordedBy: user.id });
-    res.json(await visitRefrigerant(organisationId, visit.id, unit));
+    res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
   });
 
-  router.delete("/:id/refrigerant/charging/:circuit", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
-    const { organisationId } = getAuth(res);
+  router.delete("/:id/refrigerant/charging/:circuit", async (req, res) => {
+    const { organisationId, user } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
     if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
-    await deleteCircuitCharge(db, organisationId, visit.id, Number(req.params.circuit));
-    res.json(await visitRefrigerant(organisationId, visit.id, unit));
+    await deleteCircuitCharge(db, organisationId, visit.id, circuitOf(unit, req.params.circuit));
+    res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
   });
 
   return router;
@@ -267,8 +273,8 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
 /** Mounted at /api/equipment beside the equipment router. */
 export function equipmentRefrigerantRouter({ db }: Deps): Router {
   const router = Router();
-  router.get("/:id/refrigerant", requireUser, async (req, res) => {
-    const { organisationId } = getAuth(res);
+  router.get("/:id/refrigerant", async (req, res) => {
+    const { organisationId, user } = getAuth(res);
     const unit = await getEquipment(db, organisationId, parseId(req.params.id, "Equipment"));
     if (!unit) throw notFound("Equipment");
     const movements = await equipmentMovements(db, organisationId, unit.id);
@@ -277,7 +283,7 @@ export function equipmentRefrigerantRouter({ db }: Deps): Router {
     res.json({
       refrigerant: unit.refrigerant,
       nameplateKg,
-      movements,
+      ...visibleRegisterLines(user, movements),
       topUps: events,
       leakRate: leakRate(events, nameplateKg),
     });
@@ -289,19 +295,21 @@ export function registerRouter({ db }: Deps): Router {
   const router = Router();
 
   async function movementsFor(res: Response, query: unknown) {
-    const { organisationId } = getAuth(res);
+    const { organisationId, user } = getAuth(res);
     const filter = RegisterQuerySchema.parse(query);
     const scope = registerScope(res, filter.technicianId);
     if (scope.technicianId && !(await findMember(db, organisationId, scope.technicianId))) throw fieldError("technicianId", "Choose one of your company's people");
-    const movements = await registerMovements(db, organisationId, {
+    const rows = await registerMovements(db, organisationId, {
       fromMs: filter.from ? boundStart(filter.from) : undefined,
       toMs: filter.to ? boundEnd(filter.to) : undefined,
       technicianId: scope.technicianId,
     });
+    // The filter above already keeps a technician to their own lines; the rule is still the one that decides.
+    const { movements } = visibleRegisterLines(user, rows);
     return { movements, allTechnicians: scope.allTechnicians, filter };
   }
 
-  router.get("/", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+  router.get("/", async (req, res) => {
     const { movements, allTechnicians } = await movementsFor(res, req.query);
     const totals = new Map<string, { refrigerant: string; kind: MovementKind; kg: number }>();
     for (const movement of movements) {
@@ -313,7 +321,7 @@ export function registerRouter({ db }: Deps): Router {
     res.json({ movements, totals: [...totals.values()], allTechnicians });
   });
 
-  router.get("/export.csv", requireRole(...PERMISSIONS.writeRecords), async (req, res) => {
+  router.get("/export.csv", async (req, res) => {
     const { movements, filter } = await movementsFor(res, req.query);
     const name = ["refrigerant-register", filter.from, filter.to].filter(Boolean).join("_").replace(/[^0-9A-Za-z_-]/g, "-");
     res.setHeader("Content-Type", "text/csv; charset=utf-8");

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { COMMON_PASSWORDS } from "./common-passwords.ts";
+import { text } from "./text.ts";
 
 /** The four roles of a service company's people, most rights first. */
 export const ROLES = ["owner", "senior", "technician", "apprentice"] as const;
@@ -24,6 +25,17 @@ export const PERMISSIONS = {
   signOff: ["owner", "senior"],
   /** Create and change field records (visits, readings, procedures). Apprentices only read. */
   writeRecords: ["owner", "senior", "technician"],
+  /**
+   * Read every technician's refrigerant register lines. The register is the company's record
+   * under its trading authorisation (TRADE.md §8.1, reg 141: the business keeps it): the owner
+   * keeps it and seniors review it.
+   */
+  readAllRegisterLines: ["owner", "senior"],
+  /**
+   * Read the register lines one recorded oneself: a technician's licence makes them answerable
+   * for their own handling, never a colleague's. Apprentices work under supervision and keep none.
+   */
+  readOwnRegisterLines: ["owner", "senior", "technician"],
 } as const satisfies Record<string, readonly Role[]>;
 export type Permission = keyof typeof PERMISSIONS;
 
@@ -39,9 +51,7 @@ export const NAME_MAX_LENGTH = 100;
 export const EMAIL_MAX_LENGTH = 254;
 
 /** Addresses compare case-insensitively, so they are stored and compared trimmed and lower-case. */
-export const EmailSchema = z
-  .string()
-  .trim()
+export const EmailSchema = text()
   .toLowerCase()
   .min(1, "Enter an e-mail address")
   .max(EMAIL_MAX_LENGTH, `At most ${EMAIL_MAX_LENGTH} characters`)
@@ -51,8 +61,7 @@ export const EmailSchema = z
  * A new password: length first (NIST SP 800-63B §5.1.1.2 favours length over composition
  * rules), then refused when it is on the common list or one character repeated.
  */
-export const NewPasswordSchema = z
-  .string()
+export const NewPasswordSchema = text({ trim: false })
   .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters`)
   .max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters`)
   // A leaked or guessable password is weak whatever its length.
@@ -60,22 +69,16 @@ export const NewPasswordSchema = z
   // "aaaaaaaaaa" passes the length rule but is guessed at once.
   .refine((value) => new Set(value).size > 1, "Use more than one kind of character");
 
-export const PersonNameSchema = z
-  .string()
-  .trim()
+export const PersonNameSchema = text()
   .min(1, "Enter a name")
   .max(NAME_MAX_LENGTH, `At most ${NAME_MAX_LENGTH} characters`);
 
-export const OrganisationNameSchema = z
-  .string()
-  .trim()
+export const OrganisationNameSchema = text()
   .min(1, "Enter the company name")
   .max(NAME_MAX_LENGTH, `At most ${NAME_MAX_LENGTH} characters`);
 
 /** One-time tokens from e-mailed links: 32 random bytes in base64url. */
-export const TokenSchema = z
-  .string()
-  .trim()
+export const TokenSchema = text()
   .min(20, "This link is incomplete")
   .max(100, "This link is not valid");
 
@@ -91,7 +94,8 @@ export type SignUp = z.infer<typeof SignUpSchema>;
 /** POST /api/auth/sign-in. No password rules here: old passwords must still work. */
 export const SignInSchema = z.object({
   email: EmailSchema,
-  password: z.string().min(1, "Enter your password").max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters`),
+  // Tabs and line breaks pass: a password set before the text rules must still sign in.
+  password: text({ trim: false, multiline: true }).min(1, "Enter your password").max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters`),
 });
 export type SignIn = z.infer<typeof SignInSchema>;
 

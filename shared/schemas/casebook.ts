@@ -12,6 +12,8 @@
  * user's display units before sending them.
  */
 import { z } from "zod";
+// Straight from its file, not the engine's index: the index also loads the scorer, which reads this module.
+import { GENERATOR_REFRIGERANTS } from "../engine/casebook/generate-case.ts";
 import { ROLES, type Role } from "./auth.ts";
 import {
   ApplicationSchema,
@@ -23,6 +25,7 @@ import {
   type Application,
   type MeteringDevice,
 } from "./diagnosis.ts";
+import { text } from "./text.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Limits and enumerations
@@ -80,9 +83,7 @@ export function canCasebook(role: Role, permission: keyof typeof CASEBOOK_PERMIS
 // ---------------------------------------------------------------------------------------------
 
 const storyText = (label: string) =>
-  z
-    .string({ error: `${label} is needed` })
-    .trim()
+  text({ multiline: true, error: `${label} is needed` })
     .min(3, `${label} is needed`)
     .max(STORY_FIELD_MAX_LENGTH, `${label} must be at most ${STORY_FIELD_MAX_LENGTH} characters`);
 
@@ -119,18 +120,14 @@ export const CaseDesignSchema = z.object({
 });
 
 const caseFields = {
-  title: z
-    .string({ error: "Give the case a title" })
-    .trim()
+  title: text({ error: "Give the case a title" })
     .min(5, "Give the case a title of at least 5 characters")
     .max(CASE_TITLE_MAX_LENGTH, `The title must be at most ${CASE_TITLE_MAX_LENGTH} characters`),
   difficulty: CaseDifficultySchema,
   story: CaseStorySchema,
   input: DiagnosisInputSchema,
   /** One or two sentences a senior would give as the reason for the verdict. */
-  reasoning: z
-    .string({ error: "Write the reasoning" })
-    .trim()
+  reasoning: text({ multiline: true, error: "Write the reasoning" })
     .min(10, "Write the reasoning in a sentence")
     .max(REASONING_MAX_LENGTH * 2, `The reasoning must be at most ${REASONING_MAX_LENGTH * 2} characters`),
   /** Hazards of the job in the story beyond the refrigerant's class (e.g. a condenser fan: electrical). */
@@ -190,7 +187,10 @@ export const GENERATOR_DEVICES: Readonly<Record<Application, readonly MeteringDe
 
 export const GenerateCaseSchema = z
   .object({
-    refrigerant: z.string().trim().min(1, "Choose the refrigerant"),
+    refrigerant: text({ error: "Choose the refrigerant" })
+      .min(1, "Choose the refrigerant")
+      // The generator's own list: a case id naming any other refrigerant is not a case.
+      .refine((id) => (GENERATOR_REFRIGERANTS as readonly string[]).includes(id), `The generator makes cases for ${GENERATOR_REFRIGERANTS.join(", ")}`),
     meteringDevice: MeteringDeviceSchema,
     fault: GeneratorFaultSchema,
     /** What the equipment does; comfort cooling when absent. */
@@ -296,17 +296,14 @@ export const AttemptAnswersSchema = z.object({
   superheatK: answerNumber("Superheat").nullable(),
   subcoolingK: answerNumber("Subcooling").nullable(),
   chargeState: ChargeStateSchema,
-  reasoning: z
-    .string({ error: "Write one line of reasoning" })
-    .trim()
+  // Single-line text: a pasted paragraph would not be "one line of reasoning".
+  reasoning: text({ error: "Write one line of reasoning" })
     .min(3, "Write one line of reasoning")
-    .max(REASONING_MAX_LENGTH, `Keep the reasoning to one line (${REASONING_MAX_LENGTH} characters)`)
-    // One line: a pasted paragraph would not be "one line of reasoning".
-    .refine((text) => !/[\r\n]/.test(text), "Keep the reasoning to one line"),
+    .max(REASONING_MAX_LENGTH, `Keep the reasoning to one line (${REASONING_MAX_LENGTH} characters)`),
 });
 export type AttemptAnswers = z.infer<typeof AttemptAnswersSchema>;
 
-export const AttemptCreateSchema = z.object({ caseId: z.string().min(1).max(200), answers: AttemptAnswersSchema });
+export const AttemptCreateSchema = z.object({ caseId: text().min(1).max(200), answers: AttemptAnswersSchema });
 export type AttemptCreate = z.infer<typeof AttemptCreateSchema>;
 
 export const ANSWER_FIELDS = [

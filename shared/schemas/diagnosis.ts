@@ -9,6 +9,7 @@
  */
 import { z } from "zod";
 import { STANDARD_ATMOSPHERE_KPA } from "../engine/properties/property-tolerances.ts";
+import { text } from "./text.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Enumerations
@@ -189,10 +190,7 @@ const RANGE_ENTRIES = Object.entries(DIAGNOSIS_FIELD_RANGES) as [keyof typeof DI
 
 const DiagnosisInputObjectSchema = z.object({
   /** ASHRAE designation as listed by `listRefrigerants()`, e.g. "R410A". */
-  refrigerant: z
-    .string({ error: "Choose the refrigerant" })
-    .trim()
-    .min(1, "Choose the refrigerant"),
+  refrigerant: text({ error: "Choose the refrigerant" }).min(1, "Choose the refrigerant"),
   meteringDevice: MeteringDeviceSchema,
   /** Suction pressure at the suction service port, kPa gauge. */
   suctionPressureKPa: number("Suction pressure", "kPa gauge"),

@@ -6,6 +6,7 @@
 import { z } from "zod";
 import { listRefrigerants } from "../engine/index.ts";
 import { ApplicationSchema, MAX_LINE_LENGTH_M, MeteringDeviceSchema, type Application } from "./diagnosis.ts";
+import { text } from "./text.ts";
 
 export const MAX_CIRCUITS = 4;
 /** Largest factory charge per circuit accepted, kg: a large packaged chiller circuit. */
@@ -13,10 +14,8 @@ export const MAX_CIRCUIT_CHARGE_KG = 500;
 export const MAX_NAME_LENGTH = 120;
 export const MAX_NOTE_LENGTH = 500;
 
-const optionalText = (max: number) =>
-  z
-    .string()
-    .trim()
+const optionalText = (max: number, options: { multiline?: boolean } = {}) =>
+  text(options)
     .max(max, `Keep this under ${max} characters`)
     .optional()
     .nullable()
@@ -24,9 +23,7 @@ const optionalText = (max: number) =>
     .transform((value) => (value ? value : null));
 
 const requiredName = (what: string) =>
-  z
-    .string({ error: `Give the ${what} a name` })
-    .trim()
+  text({ error: `Give the ${what} a name` })
     .min(1, `Give the ${what} a name`)
     .max(MAX_NAME_LENGTH, `Keep the name under ${MAX_NAME_LENGTH} characters`);
 
@@ -63,7 +60,7 @@ export type Customer = z.infer<typeof CustomerSchema>;
 export const SiteInputSchema = z.object({
   customerId: z.uuid("Choose the customer"),
   name: requiredName("site"),
-  address: optionalText(MAX_NOTE_LENGTH),
+  address: optionalText(MAX_NOTE_LENGTH, { multiline: true }),
   altitudeM: z
     .number({ error: "Altitude must be a number in metres" })
     .min(-430, "Altitude below the Dead Sea shore is not a site")
@@ -153,9 +150,7 @@ export const EquipmentInputSchema = z.object({
   maker: optionalText(MAX_NAME_LENGTH),
   model: optionalText(MAX_NAME_LENGTH),
   serial: optionalText(MAX_NAME_LENGTH),
-  refrigerant: z
-    .string({ error: "Choose the refrigerant" })
-    .refine((id) => knownRefrigerants().has(id), "Choose a refrigerant from the list"),
+  refrigerant: text({ error: "Choose the refrigerant" }).refine((id) => knownRefrigerants().has(id), "Choose a refrigerant from the list"),
   circuits: z
     .array(CircuitNameplateSchema)
     .min(1, "A unit has at least one circuit")

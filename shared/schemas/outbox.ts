@@ -7,6 +7,8 @@ export const OutboxMessageSchema = z.object({
   subject: z.string(),
   text: z.string(),
   createdAt: z.iso.datetime({ offset: true }),
+  /** True when the message is another person's and the token of its links was taken out. */
+  linksHidden: z.boolean(),
 });
 export type OutboxMessage = z.infer<typeof OutboxMessageSchema>;
 

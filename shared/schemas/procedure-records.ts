@@ -28,9 +28,10 @@ import {
   WindingBalanceResultSchema,
 } from "./procedures.ts";
 import { PersonRefSchema } from "./visits.ts";
+import { text } from "./text.ts";
 
 export const MAX_NOTE_LENGTH = 500;
-const NoteSchema = z.string().trim().max(MAX_NOTE_LENGTH, `Keep notes under ${MAX_NOTE_LENGTH} characters`).optional();
+const NoteSchema = text({ multiline: true }).max(MAX_NOTE_LENGTH, `Keep notes under ${MAX_NOTE_LENGTH} characters`).optional();
 const CircuitSchema = z.number().int("Circuits are numbered 1, 2, 3…").min(1).max(MAX_CIRCUITS).optional().nullable();
 
 /** The verdict of a whole record: the worst of its checks, with that check's reason and source. */
@@ -48,7 +49,7 @@ export const ELECTRICAL_TARGET_LABELS: Record<ElectricalTarget, string> = { comp
 
 /** One insulation reading to earth, named by the point tested (e.g. "C to earth"). */
 export const InsulationReadingSchema = InsulationResistanceInputSchema.omit({ kind: true }).extend({
-  point: z.string().trim().max(60, "Name the point in under 60 characters").optional(),
+  point: text().max(60, "Name the point in under 60 characters").optional(),
 });
 
 /**
@@ -146,9 +147,9 @@ export type RecheckResult = z.infer<typeof RecheckResultSchema>;
 export const RECHECK_LABELS: Record<RecheckResult, string> = { "not-done": "Not rechecked yet", "no-leak": "No leak on recheck", "still-leaking": "Still leaking" };
 
 export const LeakFoundSchema = z.object({
-  location: z.string({ error: "Say where the leak is" }).trim().min(2, "Say where the leak is, e.g. “Schrader core, suction service valve”").max(200),
+  location: text({ error: "Say where the leak is" }).min(2, "Say where the leak is, e.g. “Schrader core, suction service valve”").max(200),
   severity: LeakSeveritySchema,
-  repair: z.string().trim().max(200).optional(),
+  repair: text().max(200).optional(),
   repaired: z.boolean().default(false),
 });
 export type LeakFound = z.infer<typeof LeakFoundSchema>;
@@ -158,7 +159,7 @@ export const LeakSearchBodySchema = z
   .object({
     method: LeakMethodSchema,
     placesChecked: z
-      .array(z.string().trim().min(1).max(120), { error: "List the places you checked" })
+      .array(text().min(1).max(120), { error: "List the places you checked" })
       .min(1, "List at least one place you checked")
       .max(40, "List at most 40 places"),
     leaks: z.array(LeakFoundSchema).max(20).default([]),

@@ -20,6 +20,7 @@ import {
   WINDING_BALANCE_LIMITS,
 } from "../engine/procedures/procedure-limits.ts";
 import { MAX_ATMOSPHERIC_PRESSURE_KPA, MAX_CURRENT_A, MAX_GAUGE_PRESSURE_KPA, MIN_ATMOSPHERIC_PRESSURE_KPA } from "./diagnosis.ts";
+import { dayOrInstant } from "./dates.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Verdicts
@@ -312,7 +313,7 @@ export const CylinderFillInputSchema = z.object({
 export type CylinderFillInput = z.infer<typeof CylinderFillInputSchema>;
 
 /** A calendar date (YYYY-MM-DD) or an ISO 8601 timestamp with offset. */
-const EventDateSchema = z.union([z.iso.date(), z.iso.datetime({ offset: true })], { error: "Enter the date as YYYY-MM-DD" });
+const EventDateSchema = dayOrInstant("Enter the date as YYYY-MM-DD");
 
 /** One addition of refrigerant to a piece of equipment (a top-up after a leak). */
 export const LeakEventSchema = z.object({

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { STANDARD_ATMOSPHERE_KPA } from "../engine/properties/property-tolerances.ts";
 import { AuthUserSchema, PersonNameSchema } from "./auth.ts";
+import { text } from "./text.ts";
 
 /**
  * Display preferences. Storage and the engine stay SI-metric (°C, kPa); these only change
@@ -58,9 +59,7 @@ export const UpdateProfileSchema = z.object({
   name: PersonNameSchema,
   preferences: PreferencesSchema,
   /** Left out: unchanged. Empty: removed. */
-  licenceNumber: z
-    .string()
-    .trim()
+  licenceNumber: text()
     .max(LICENCE_NUMBER_MAX_LENGTH, `At most ${LICENCE_NUMBER_MAX_LENGTH} characters`)
     .optional()
     .transform((value) => (value === undefined ? undefined : value === "" ? null : value)),

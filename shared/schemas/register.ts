@@ -20,6 +20,8 @@ import {
   VerdictSchema,
 } from "./procedures.ts";
 import { PersonRefSchema } from "./visits.ts";
+import { boundEnd, boundStart, dayOrInstant, instant } from "./dates.ts";
+import { text } from "./text.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Cylinders
@@ -48,23 +50,17 @@ const massKg = (label: string, max: number) =>
 
 export const CylinderCreateSchema = z
   .object({
-    label: z
-      .string({ error: "Give the cylinder the label written on it" })
-      .trim()
+    label: text({ error: "Give the cylinder the label written on it" })
       .min(1, "Give the cylinder the label written on it")
       .max(MAX_LABEL_LENGTH, `Keep the label under ${MAX_LABEL_LENGTH} characters`),
-    serial: z
-      .string()
-      .trim()
+    serial: text()
       .max(MAX_LABEL_LENGTH, `Keep the serial under ${MAX_LABEL_LENGTH} characters`)
       .optional()
       .nullable()
       // An emptied field means "no serial", never an empty string in the record.
       .transform((value) => (value ? value : null)),
     kind: CylinderKindSchema,
-    refrigerant: z
-      .string({ error: "Choose the refrigerant" })
-      .refine((id) => knownRefrigerants().has(id), "Choose a refrigerant from the list"),
+    refrigerant: text({ error: "Choose the refrigerant" }).refine((id) => knownRefrigerants().has(id), "Choose a refrigerant from the list"),
     waterCapacityKg: massKg("Water capacity", MAX_WATER_CAPACITY_KG).refine((value) => value > 0, "Water capacity must be above 0 kg"),
     tareKg: massKg("Tare", MAX_WATER_CAPACITY_KG).refine((value) => value > 0, "Tare must be above 0 kg"),
     /** What is in it on the day it is entered: gross weight on the scale minus the tare. */
@@ -146,9 +142,7 @@ const MovementMassSchema = z
   .positive("The mass must be above 0 kg")
   .max(MAX_MOVEMENT_KG, `More than ${MAX_MOVEMENT_KG} kg in one movement is not plausible`);
 
-const optionalNote = z
-  .string()
-  .trim()
+const optionalNote = text({ multiline: true })
   .max(MAX_NOTE_LENGTH, `Keep the note under ${MAX_NOTE_LENGTH} characters`)
   .optional()
   .nullable()
@@ -165,7 +159,7 @@ export const MovementCreateSchema = z
       .min(1, "Circuits are numbered from 1")
       .max(MAX_CIRCUITS, `Satura records up to ${MAX_CIRCUITS} circuits`),
     cylinderId: z.uuid("Choose a cylinder").optional().nullable(),
-    at: z.iso.datetime({ offset: true, error: "at must be an ISO 8601 date and time" }).optional(),
+    at: instant("at must be an ISO 8601 date and time").optional(),
     note: optionalNote,
   })
   // The register must say where the refrigerant went or came from (TRADE.md §6 record fields).
@@ -179,7 +173,7 @@ export type MovementValues = z.output<typeof MovementCreateSchema>;
 /** Body of POST /api/cylinders/:id/reclaim: a recovery cylinder's contents handed on for reclaim. */
 export const ReclaimCreateSchema = z.object({
   kg: MovementMassSchema,
-  at: z.iso.datetime({ offset: true }).optional(),
+  at: instant().optional(),
   note: optionalNote,
 });
 export type ReclaimCreate = z.input<typeof ReclaimCreateSchema>;
@@ -200,7 +194,13 @@ export const MovementSchema = z.object({
 });
 export type Movement = z.infer<typeof MovementSchema>;
 
-export const CylinderDetailSchema = z.object({ cylinder: CylinderSchema, movements: z.array(MovementSchema) });
+/**
+ * How many register lines an answer leaves out because the reader may not see them (another
+ * technician's, for a technician; all, for an apprentice). Balances and contents still count them.
+ */
+const HiddenMovementsSchema = z.number().int().min(0);
+
+export const CylinderDetailSchema = z.object({ cylinder: CylinderSchema, movements: z.array(MovementSchema), hiddenMovements: HiddenMovementsSchema });
 export type CylinderDetail = z.infer<typeof CylinderDetailSchema>;
 
 /** The answer to POST /api/visits/:id/refrigerant: the movement and, if it used one, its cylinder after it. */
@@ -252,6 +252,7 @@ export const VisitRefrigerantSchema = z.object({
   liquidChargingNote: z.string().nullable(),
   glideK: z.number().nullable(),
   movements: z.array(MovementSchema),
+  hiddenMovements: HiddenMovementsSchema,
   circuits: z.array(CircuitBalanceSchema),
   /** kg marked on the run log as charge adjustments; they are chart marks, not register entries. */
   runLogChargeMarksKg: z.object({ added: z.number(), removed: z.number() }),
@@ -273,6 +274,7 @@ export const EquipmentRefrigerantSchema = z.object({
   refrigerant: z.string(),
   nameplateKg: z.number(),
   movements: z.array(MovementSchema),
+  hiddenMovements: HiddenMovementsSchema,
   /** Refrigerant put back per visit beyond what was taken out: what had leaked since. */
   topUps: z.array(z.object({ visitId: z.uuid(), date: z.string(), addedKg: z.number() })),
   leakRate: AnnualLeakRateSchema.nullable(),
@@ -280,7 +282,7 @@ export const EquipmentRefrigerantSchema = z.object({
 export type EquipmentRefrigerant = z.infer<typeof EquipmentRefrigerantSchema>;
 
 /** A calendar date or a date-time with offset; a bare date is a whole UTC day. */
-const DateBoundSchema = z.union([z.iso.date(), z.iso.datetime({ offset: true })], { error: "Use a date like 2026-07-01" });
+const DateBoundSchema = dayOrInstant();
 
 export const RegisterQuerySchema = z
   .object({
@@ -293,16 +295,6 @@ export const RegisterQuerySchema = z
     message: "The end of the period is before its start",
   });
 export type RegisterQuery = z.input<typeof RegisterQuerySchema>;
-
-/** Start instant of a `from` bound (ms since epoch). */
-export function boundStart(bound: string): number {
-  return Date.parse(bound.length === 10 ? `${bound}T00:00:00Z` : bound);
-}
-
-/** End instant (exclusive) of a `to` bound: a bare date includes its whole day. */
-export function boundEnd(bound: string): number {
-  return bound.length === 10 ? Date.parse(`${bound}T00:00:00Z`) + 86_400_000 : Date.parse(bound);
-}
 
 export const RegisterListSchema = z.object({
   movements: z.array(

@@ -6,6 +6,8 @@
 import { z } from "zod";
 import { DiagnosisInputSchema, DiagnosisResultSchema } from "./diagnosis.ts";
 import { MAX_CIRCUITS } from "./equipment.ts";
+import { instant } from "./dates.ts";
+import { text } from "./text.ts";
 
 export const VISIT_STATUSES = ["open", "awaiting-review", "signed-off", "sent-back"] as const;
 export const VisitStatusSchema = z.enum(VISIT_STATUSES);
@@ -23,9 +25,7 @@ export const MAX_COMMENT_LENGTH = 2000;
 
 export const VisitCreateSchema = z.object({
   equipmentId: z.uuid("Choose the equipment"),
-  reason: z
-    .string({ error: "Say why you are visiting" })
-    .trim()
+  reason: text({ multiline: true, error: "Say why you are visiting" })
     .min(3, "Say why you are visiting (at least a few words)")
     .max(MAX_REASON_LENGTH, `Keep the reason under ${MAX_REASON_LENGTH} characters`),
 });
@@ -45,8 +45,8 @@ const CircuitNumberSchema = z
 export const ReadingBodySchema = z
   .object({
     circuit: CircuitNumberSchema,
-    takenAt: z.iso.datetime({ offset: true, error: "takenAt must be an ISO 8601 date and time" }).optional(),
-    note: z.string().trim().max(MAX_REASON_LENGTH).optional(),
+    takenAt: instant("takenAt must be an ISO 8601 date and time").optional(),
+    note: text({ multiline: true }).max(MAX_REASON_LENGTH).optional(),
   })
   .loose();
 export type ReadingBody = z.input<typeof ReadingBodySchema>;
@@ -78,11 +78,9 @@ export const ADJUSTMENT_KIND_LABELS: Record<(typeof ADJUSTMENT_KINDS)[number], s
 export const AdjustmentCreateSchema = z
   .object({
     circuit: CircuitNumberSchema.optional().nullable(),
-    at: z.iso.datetime({ offset: true }).optional(),
+    at: instant().optional(),
     kind: z.enum(ADJUSTMENT_KINDS, { error: "Choose what was changed" }),
-    description: z
-      .string({ error: "Describe the change" })
-      .trim()
+    description: text({ multiline: true, error: "Describe the change" })
       .min(2, "Describe the change, e.g. “metering opened half a turn”")
       .max(MAX_REASON_LENGTH),
     amountKg: z
@@ -111,9 +109,7 @@ export const AdjustmentSchema = z.object({
 export type Adjustment = z.infer<typeof AdjustmentSchema>;
 
 export const CommentCreateSchema = z.object({
-  body: z
-    .string({ error: "Write a comment" })
-    .trim()
+  body: text({ multiline: true, error: "Write a comment" })
     .min(1, "Write a comment")
     .max(MAX_COMMENT_LENGTH, `Keep comments under ${MAX_COMMENT_LENGTH} characters`),
   readingId: z.uuid().optional().nullable(),
@@ -141,12 +137,10 @@ export type Photo = z.infer<typeof PhotoSchema>;
 
 export const ReviewActionSchema = z.discriminatedUnion("action", [
   z.object({ action: z.literal("submit") }),
-  z.object({ action: z.literal("sign-off"), note: z.string().trim().max(MAX_COMMENT_LENGTH).optional() }),
+  z.object({ action: z.literal("sign-off"), note: text({ multiline: true }).max(MAX_COMMENT_LENGTH).optional() }),
   z.object({
     action: z.literal("send-back"),
-    reason: z
-      .string({ error: "Say what needs doing before sign-off" })
-      .trim()
+    reason: text({ multiline: true, error: "Say what needs doing before sign-off" })
       .min(3, "Say what needs doing before sign-off")
       .max(MAX_COMMENT_LENGTH),
   }),

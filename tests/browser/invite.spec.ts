@@ -1,4 +1,5 @@
 import { expect, test } from "@playwright/test";
+import { lastLinkTo } from "./mail-drop.ts";
 import { signIn, signOut } from "./sign-in.ts";
 
 test.describe("invitations", () => {
@@ -18,13 +19,18 @@ test.describe("invitations", () => {
     await expect(page.getByRole("status")).toContainText(`Invitation sent to ${email}`);
     await expect(page.getByRole("region", { name: "Waiting to join" })).toContainText(email);
 
-    // The fake SMTP server caught the mail; owners read it on the Outbox page.
+    // The fake SMTP server caught the mail; the owner sees it on the Outbox page, but not its
+    // working link, which is the invitee's alone (issue 13, item 11).
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Outbox" }).click();
     const mail = page.getByRole("article", { name: `Mail to ${email}: Join Bellbird Mechanical on Satura` });
     await expect(mail).toBeVisible();
-    const href = await mail.getByRole("link").first().getAttribute("href");
-    expect(href).toMatch(/\/accept-invitation\?token=/);
-    const link = new URL(href!);
+    await expect(mail).toContainText("/accept-invitation?token=hidden");
+    await expect(mail).toContainText(`The link in this message works only for ${email}`);
+    await expect(mail.getByRole("link")).toHaveCount(0);
+    // The invitee reads the same message in their own mailbox.
+    await expect.poll(() => lastLinkTo(email)?.pathname).toBe("/accept-invitation");
+    const link = lastLinkTo(email)!;
+    expect(link.searchParams.get("token")).toMatch(/^[A-Za-z0-9_-]{43}$/);
 
     await signOut(page);
 

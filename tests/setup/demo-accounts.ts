@@ -1,5 +1,6 @@
 import { eq } from "drizzle-orm";
 import type { Express } from "express";
+import type { Role } from "@shared/schemas/auth.ts";
 import request from "supertest";
 import { users } from "@server/db/schema.ts";
 import { DEMO_PASSWORD, demoPeople } from "@server/db/seed/demo-scenario.ts";
@@ -19,6 +20,16 @@ export async function signedIn(app: Express, email: string, password = DEMO_PASS
   const response = await agent.post("/api/auth/sign-in").send({ email, password });
   if (response.status !== 200) throw new Error(`sign-in as ${email} failed: ${response.status} ${JSON.stringify(response.body)}`);
   return agent;
+}
+
+/** One signed-in agent per role of Bellbird, the demo company. */
+export async function signedInBellbird(app: Express): Promise<Record<Role, Awaited<ReturnType<typeof signedIn>>>> {
+  return {
+    owner: await signedIn(app, BELLBIRD.owner),
+    senior: await signedIn(app, BELLBIRD.senior),
+    technician: await signedIn(app, BELLBIRD.technician),
+    apprentice: await signedIn(app, BELLBIRD.apprentice),
+  };
 }
 
 /** Loads the Bellbird demo company and returns each demo person's user id by e-mail. */

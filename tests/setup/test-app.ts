@@ -1,4 +1,5 @@
 import type { Express } from "express";
+import type { DestinationStream } from "pino";
 import { createApp } from "@server/app.ts";
 import type { AuthLimits } from "@server/auth/rate-limits.ts";
 import type { DatabaseHandle } from "@server/db/client.ts";
@@ -21,13 +22,21 @@ export interface TestAppOptions {
   /** Extra environment variables, e.g. { OUTBOX_ENABLED: "false" }. */
   env?: Record<string, string>;
   authLimits?: Partial<AuthLimits>;
+  /** Where log lines go (at LOG_LEVEL, default info); without it the test app logs nothing. */
+  logDestination?: DestinationStream;
 }
 
 /** The real app in-process over a fresh database, as the server builds it, with a fake SMTP server. */
 export async function createTestApp(options: TestAppOptions = {}): Promise<TestApp> {
   const database = await createTestDatabase();
-  const env = readEnv({ NODE_ENV: "test", DATA_DIR: "memory://", APP_URL: "http://satura.test", LOG_LEVEL: "silent", ...options.env });
-  const logger = createLogger(env);
+  const env = readEnv({
+    NODE_ENV: "test",
+    DATA_DIR: "memory://",
+    APP_URL: "http://satura.test",
+    LOG_LEVEL: options.logDestination ? "info" : "silent",
+    ...options.env,
+  });
+  const logger = createLogger(env, options.logDestination);
   const mailer = await createMailer({ env, db: database.db, logger });
   const app = createApp({ db: database.db, env, logger, mailer, authLimits: options.authLimits });
   return {

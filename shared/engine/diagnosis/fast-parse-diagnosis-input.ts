@@ -10,6 +10,7 @@ import {
   type DiagnosisInput,
   type DiagnosisInputDraft,
 } from "../../schemas/diagnosis.ts";
+import { isCleanText } from "../../schemas/text.ts";
 
 const RANGES = DIAGNOSIS_FIELD_RANGES;
 
@@ -92,7 +93,7 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
   const refrigerant = draft.refrigerant;
   if (typeof refrigerant !== "string") return null;
   const trimmed = refrigerant.trim();
-  if (trimmed.length < 1) return null;
+  if (trimmed.length < 1 || !isCleanText(trimmed)) return null;
   const meteringDevice = draft.meteringDevice;
   if (!METERING_DEVICE_SET.has(meteringDevice)) return null;
   const liquidTempLocation = draft.liquidTempLocation;

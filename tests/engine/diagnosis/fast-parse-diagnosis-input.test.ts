@@ -55,7 +55,7 @@ const optional = (field: Field) => fc.option(reading(field), { nil: undefined, f
 
 const input = fc.record(
   {
-    refrigerant: fc.constantFrom<unknown>("R410A", "R410A", " R32 ", "\tR22\n", "", "   ", "R999", 5, undefined),
+    refrigerant: fc.constantFrom<unknown>("R410A", "R410A", " R32 ", "\tR22\n", "", "   ", "R999", "R4\u000010A", "R410A\uD83D", "R\u007F32", 5, undefined),
     meteringDevice: fc.constantFrom<unknown>(...METERING_DEVICES, ...METERING_DEVICES, "TXV", "", undefined),
     suctionPressureKPa: reading("suctionPressureKPa"),
     suctionLineTempC: reading("suctionLineTempC"),

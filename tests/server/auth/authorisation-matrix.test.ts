@@ -2,7 +2,7 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Role } from "@shared/schemas/auth.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../../setup/demo-accounts.ts";
+import { BELLBIRD, seedBellbird, signedIn, signedInBellbird, signUpOtherCompany } from "../../setup/demo-accounts.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -14,7 +14,7 @@ type Agent = Awaited<ReturnType<typeof signedIn>>;
 describe("authorisation matrix", () => {
   let testApp: TestApp;
   let ids: Record<string, string>;
-  const agents = {} as Record<Role, Agent>;
+  let agents: Record<Role, Agent>;
   let outsider: Agent;
   let invitationId: string;
   let outsiderInvitationId: string;
@@ -22,10 +22,7 @@ describe("authorisation matrix", () => {
   beforeAll(async () => {
     testApp = await createTestApp();
     ids = await seedBellbird(testApp);
-    agents.owner = await signedIn(testApp.app, BELLBIRD.owner);
-    agents.senior = await signedIn(testApp.app, BELLBIRD.senior);
-    agents.technician = await signedIn(testApp.app, BELLBIRD.technician);
-    agents.apprentice = await signedIn(testApp.app, BELLBIRD.apprentice);
+    agents = await signedInBellbird(testApp.app);
     outsider = (await signUpOtherCompany(testApp.app)).agent;
     invitationId = (await agents.owner.post("/api/invitations").send({ email: "cross@bellbird.example", role: "apprentice" })).body.invitation.id;
     outsiderInvitationId = (await outsider.post("/api/invitations").send({ email: "matrix@coldfront.example", role: "technician" })).body.invitation.id;

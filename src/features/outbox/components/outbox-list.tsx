@@ -22,6 +22,7 @@ function Linkified({ text }: { text: string }) {
 
 export function OutboxList({ messages }: { messages: OutboxMessage[] }) {
   if (messages.length === 0) return <p className="text-muted">Nothing sent yet. Invitations and password resets show up here.</p>;
+  // Other people's sign-in links are never shown whole (docs/accounts.md, "Outbox").
   return (
     <ul className="space-y-3">
       {messages.map((message) => (
@@ -33,9 +34,16 @@ export function OutboxList({ messages }: { messages: OutboxMessage[] }) {
                 To <span className="break-all">{message.to}</span> · <span className="num">{timeFormat.format(new Date(message.createdAt))}</span>
               </p>
             </header>
-            <p className="whitespace-pre-wrap break-words">
-              <Linkified text={message.text} />
-            </p>
+            {message.linksHidden ? (
+              <>
+                <p className="whitespace-pre-wrap break-words">{message.text}</p>
+                <p className="mt-2 text-sm text-muted">The link in this message works only for {message.to}, so its token is hidden here.</p>
+              </>
+            ) : (
+              <p className="whitespace-pre-wrap break-words">
+                <Linkified text={message.text} />
+              </p>
+            )}
           </article>
         </li>
       ))}

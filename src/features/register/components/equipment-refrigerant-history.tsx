@@ -4,6 +4,7 @@ import { paths } from "@/config/paths.ts";
 import { useEquipmentRefrigerant } from "@/lib/api/register.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { formatKg, formatWhen } from "../utils/format-register.ts";
+import { HiddenLinesNote } from "./hidden-lines-note.tsx";
 
 /**
  * A unit's refrigerant history from the register, newest first, with the estimated leak rate
@@ -13,7 +14,7 @@ export function EquipmentRefrigerantHistory({ equipmentId }: { equipmentId: stri
   const history = useEquipmentRefrigerant(equipmentId);
   if (history.isPending) return <p aria-busy="true">Reading the register…</p>;
   if (history.isError) return <p role="alert" className="font-medium text-fault">⚠ The register did not load: {history.error.message}</p>;
-  const { movements, leakRate, topUps, nameplateKg, refrigerant } = history.data;
+  const { movements, hiddenMovements, leakRate, topUps, nameplateKg, refrigerant } = history.data;
   const newestFirst = [...movements].reverse();
   return (
     <div className="space-y-3">
@@ -35,8 +36,9 @@ export function EquipmentRefrigerantHistory({ equipmentId }: { equipmentId: stri
           </p>
         )}
       </div>
+      <HiddenLinesNote count={hiddenMovements} />
       {newestFirst.length === 0 ? (
-        <p className="text-muted">No {refrigerant} recovered, reused or added on this unit yet.</p>
+        hiddenMovements === 0 && <p className="text-muted">No {refrigerant} recovered, reused or added on this unit yet.</p>
       ) : (
         <ul aria-label="Refrigerant history" className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface">
           {newestFirst.map((movement) => (

@@ -1,6 +1,7 @@
 import { MOVEMENT_KIND_LABELS } from "@shared/schemas/register.ts";
 import { useVisitRefrigerant } from "@/lib/api/register.ts";
 import { formatKg, formatSignedKg, formatWhen } from "../utils/format-register.ts";
+import { HiddenLinesNote } from "./hidden-lines-note.tsx";
 import { VerdictLine } from "./verdict-line.tsx";
 
 /** The report's refrigerant section: recovered, reused, added, the balance and the weigh-in per circuit. */
@@ -13,8 +14,8 @@ export function RefrigerantReport({ visitId }: { visitId: string }) {
       </h2>
       {register.isPending && <p aria-busy="true">Reading the register…</p>}
       {register.isError && <p role="alert" className="text-fault">⚠ The register did not load: {register.error.message}</p>}
-      {register.data && register.data.movements.length === 0 && <p className="text-muted">No refrigerant recovered or added.</p>}
-      {register.data && register.data.movements.length > 0 && (
+      {register.data && register.data.movements.length + register.data.hiddenMovements === 0 && <p className="text-muted">No refrigerant recovered or added.</p>}
+      {register.data && register.data.movements.length + register.data.hiddenMovements > 0 && (
         <>
           <table className="num w-full text-left text-sm">
             <thead>
@@ -61,6 +62,7 @@ export function RefrigerantReport({ visitId }: { visitId: string }) {
               </li>
             ))}
           </ul>
+          <HiddenLinesNote count={register.data.hiddenMovements} />
         </>
       )}
     </section>

@@ -8,6 +8,7 @@ import { useCylinders, useVisitRefrigerant } from "@/lib/api/register.ts";
 import { formatKg, formatSignedKg, formatWhen } from "../utils/format-register.ts";
 import { ChargingCheck } from "./charging-check.tsx";
 import { CylinderFillBar } from "./cylinder-fill.tsx";
+import { HiddenLinesNote } from "./hidden-lines-note.tsx";
 import { MovementForm } from "./movement-form.tsx";
 
 function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitBalance; visitId: string; canWrite: boolean; single: boolean }) {
@@ -53,8 +54,9 @@ function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitB
   );
 }
 
-function MovementList({ movements }: { movements: readonly Movement[] }) {
-  if (movements.length === 0) return <p className="text-muted">No refrigerant logged on this visit yet.</p>;
+function MovementList({ movements, hidden }: { movements: readonly Movement[]; hidden: number }) {
+  if (movements.length === 0 && hidden === 0) return <p className="text-muted">No refrigerant logged on this visit yet.</p>;
+  if (movements.length === 0) return <HiddenLinesNote count={hidden} />;
   return (
     <ul aria-label="Refrigerant logged on this visit" className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface">
       {movements.map((movement) => (
@@ -150,7 +152,8 @@ export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId
       )}
 
       <h3 className="text-lg font-semibold">Logged on this visit</h3>
-      <MovementList movements={data.movements} />
+      <MovementList movements={data.movements} hidden={data.hiddenMovements} />
+      {data.movements.length > 0 && <HiddenLinesNote count={data.hiddenMovements} />}
     </div>
   );
 }
