@@ -144,8 +144,8 @@ export const EquipmentInputSchema = z.object({
   siteId: z.uuid("Choose the site"),
   name: requiredName("unit"),
   kind: z.enum(EQUIPMENT_KINDS, { error: "Choose the kind of equipment" }),
-  /** What the unit does: sets the bands its readings are judged against. */
-  application: ApplicationSchema,
+  /** What the unit does: sets the bands its readings are judged against. Absent: the kind's usual one. */
+  application: ApplicationSchema.optional(),
   location: optionalText(MAX_NOTE_LENGTH),
   maker: optionalText(MAX_NAME_LENGTH),
   model: optionalText(MAX_NAME_LENGTH),
@@ -175,7 +175,10 @@ export const EquipmentInputSchema = z.object({
     .transform((value) => value ?? null),
   ratedHighSideKPa: optionalPositive("Rated high-side pressure", "kPa", 15_000),
   ratedLowSideKPa: optionalPositive("Rated low-side pressure", "kPa", 15_000),
-});
+})
+  // An API client that leaves the application out gets the one its kind usually has.
+  .transform((values) => ({ ...values, application: values.application ?? DEFAULT_APPLICATION_BY_KIND[values.kind] }));
+
 export type EquipmentInput = z.input<typeof EquipmentInputSchema>;
 export type EquipmentValues = z.output<typeof EquipmentInputSchema>;
 

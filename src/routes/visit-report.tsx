@@ -1,3 +1,5 @@
+import { formatNumber } from "@/lib/units/display-units.ts";
+import { applicationText } from "@shared/content/applications.ts";
 import { Printer } from "lucide-react";
 import { Link, useParams } from "react-router-dom";
 import { ADJUSTMENT_KIND_LABELS, VISIT_STATUS_LABELS } from "@shared/schemas/visits.ts";
@@ -74,6 +76,8 @@ export default function VisitReportRoute() {
         <dl className="num mt-1 grid grid-cols-2 gap-x-6 text-sm sm:grid-cols-4">
           <dt className="font-sans text-muted">Refrigerant</dt>
           <dd>{unit.refrigerant}</dd>
+          <dt className="font-sans text-muted">Application</dt>
+          <dd className="font-sans">{applicationText[unit.application].label}</dd>
           <dt className="font-sans text-muted">Maker / model</dt>
           <dd>{[unit.maker, unit.model].filter(Boolean).join(" ") || "—"}</dd>
           <dt className="font-sans text-muted">Serial</dt>
@@ -101,6 +105,13 @@ export default function VisitReportRoute() {
             </h2>
             <ReadingsTable readings={series.readings} units={units} atmosphericKPa={atmosphericKPa} />
             {series.points.length > 0 && <TrendChart series={series} units={units} width={PRINT_CHART_WIDTH} height={260} />}
+            {last && (
+              <p className="text-sm text-muted">
+                Judged as {applicationText[last.result.application].label.toLowerCase()}
+                {last.result.applicationBasis === "equipment" ? "" : " (assumed)"}; gauge readings against{" "}
+                <span className="num">{formatNumber(last.result.atmosphericPressureKPa, 1)} kPa</span> atmosphere.
+              </p>
+            )}
             {last && <FindingPanel result={last.result} expanded />}
           </section>
         );

@@ -86,7 +86,7 @@ describe("visits and the run log API", () => {
     // Refrigerant, metering device and nameplate targets come from the equipment.
     expect(reading.input).toMatchObject({ refrigerant: "R407C", meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5 });
     const { circuit: _circuit, ...fields } = rooftopReading;
-    expect(reading.result).toEqual(diagnose({ ...fields, refrigerant: "R407C", meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, compressorRla: 11.8 }));
+    expect(reading.result).toEqual(diagnose({ ...fields, refrigerant: "R407C", meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, compressorRla: 11.8, application: "comfort-cooling" }));
     // Superheat from the dew point, subcooling from the bubble point (R407C glides ~5 K).
     expect(reading.result.superheatK).toBeCloseTo(6, 1);
     expect(reading.result.subcoolingK).toBeCloseTo(5, 1);

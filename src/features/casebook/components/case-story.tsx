@@ -1,3 +1,4 @@
+import { applicationText } from "@shared/content/applications.ts";
 import type { Case } from "@shared/schemas/casebook.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { CASE_READINGS, METERING_LABELS } from "../utils/case-readings.ts";
@@ -44,7 +45,8 @@ export function CaseStory({
         <dd>{story.conditions}</dd>
       </dl>
       <p className="text-sm">
-        <span className="num font-semibold">{input.refrigerant}</span> · {METERING_LABELS[input.meteringDevice]} ·
+        <span className="num font-semibold">{input.refrigerant}</span> · {METERING_LABELS[input.meteringDevice]} ·{" "}
+        {input.application ? `${applicationText[input.application].label} · ` : ""}
         gauges read against <span className="num">{input.atmosphericPressureKPa ?? atmosphericKPa} kPa</span> atmosphere
       </p>
       <div className="grid gap-4 md:grid-cols-2">

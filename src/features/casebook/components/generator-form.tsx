@@ -2,26 +2,35 @@ import { useState, type FormEvent } from "react";
 import { useNavigate } from "react-router-dom";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { GENERATOR_REFRIGERANTS } from "@shared/engine/index.ts";
-import { GENERATOR_FAULTS, type GeneratorFault } from "@shared/schemas/casebook.ts";
-import { METERING_DEVICES, type MeteringDevice } from "@shared/schemas/diagnosis.ts";
+import { applicationText } from "@shared/content/applications.ts";
+import { GENERATOR_DEVICES, GENERATOR_FAULTS, type GeneratorFault } from "@shared/schemas/casebook.ts";
+import { APPLICATIONS, type Application, type MeteringDevice } from "@shared/schemas/diagnosis.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField } from "@/components/ui/field/field.tsx";
 import { paths } from "@/config/paths.ts";
 import { useGenerateCase } from "@/lib/api/casebook.ts";
 import { METERING_LABELS } from "../utils/case-readings.ts";
 
-/** Pick a refrigerant, metering device and fault; the server's engine makes a new case from a fresh seed. */
+/** Pick an application, refrigerant, metering device and fault; the server's engine makes a new case from a fresh seed. */
 export function GeneratorForm() {
   const navigate = useNavigate();
   const generate = useGenerateCase();
   const [refrigerant, setRefrigerant] = useState<string>("R410A");
   const [meteringDevice, setMeteringDevice] = useState<MeteringDevice>("txv");
   const [fault, setFault] = useState<GeneratorFault>("undercharged");
+  const [application, setApplication] = useState<Application>("comfort-cooling");
+  const devices = GENERATOR_DEVICES[application];
+
+  function chooseApplication(next: Application) {
+    setApplication(next);
+    // Keep the device valid for the new application (a chiller has no fixed orifice).
+    if (!GENERATOR_DEVICES[next].includes(meteringDevice)) setMeteringDevice(GENERATOR_DEVICES[next][0]!);
+  }
 
   function submit(event: FormEvent) {
     event.preventDefault();
     generate.mutate(
-      { refrigerant, meteringDevice, fault },
+      { refrigerant, meteringDevice, fault, application },
       { onSuccess: (made) => navigate(paths.casebook.case.getHref(made.id)) },
     );
   }
@@ -39,7 +48,14 @@ export function GeneratorForm() {
         The engine draws a new, physically consistent case for the fault you choose, with the scatter of real probes and
         gauges. The fault is named only here — work it out as if you did not know.
       </p>
-      <div className="grid gap-3 sm:grid-cols-3">
+      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+        <SelectField label="Application" value={application} onChange={(event) => chooseApplication(event.target.value as Application)}>
+          {APPLICATIONS.map((value) => (
+            <option key={value} value={value}>
+              {applicationText[value].label}
+            </option>
+          ))}
+        </SelectField>
         <SelectField label="Refrigerant" value={refrigerant} onChange={(event) => setRefrigerant(event.target.value)}>
           {GENERATOR_REFRIGERANTS.map((id) => (
             <option key={id} value={id}>
@@ -52,7 +68,7 @@ export function GeneratorForm() {
           value={meteringDevice}
           onChange={(event) => setMeteringDevice(event.target.value as MeteringDevice)}
         >
-          {METERING_DEVICES.map((device) => (
+          {devices.map((device) => (
             <option key={device} value={device}>
               {METERING_LABELS[device]}
             </option>
