@@ -1,0 +1,80 @@
+/**
+ * Reduced temperature r at which one phase grid, at a fixed pressure, has a given enthalpy or
+ * entropy: the inverse of interpolatePhaseGrid along r. Both rise with temperature at constant
+ * pressure (c_p > 0), so along r they rise for the vapour (r grows with T) and fall for the
+ * liquid (r grows as T falls). The node interval comes from a binary search on the node values
+ * of the interpolated row; inside it the Hermite cubic is solved by Newton's method kept inside
+ * the interval by bisection.
+ *
+ * @param grid compiled phase grid
+ * @param rows window and weights from phaseGridRows at the pressure
+ * @param property "enthalpy" (kJ/kg) or "entropy" (kJ/(kg·K))
+ * @param target the value sought
+ * @returns r in [0, 1]; "saturation-side" when the value lies beyond the saturation curve (in the
+ *   dome or the other phase); "beyond-bound" when it lies past the far temperature bound
+ * @throws never
+ * @example invertPhaseGrid(grid, rows, "enthalpy", 450) // e.g. 0.18
+ */
+import type { PhaseGridRows } from "./phase-grid-rows.ts";
+import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
+
+export function invertPhaseGrid(
+  grid: CompiledPhaseGrid,
+  rows: PhaseGridRows,
+  property: "enthalpy" | "entropy",
+  target: number,
+): number | "saturation-side" | "beyond-bound" {
+  const values = property === "enthalpy" ? grid.enthalpy : grid.entropy;
+  const slopes = property === "enthalpy" ? grid.enthalpyByR : grid.entropyByR;
+  const { columns, nodes } = grid;
+  const direction = grid.phase === "vapour" ? 1 : -1;
+  const { start, weights } = rows;
+  const at = (array: Float64Array, j: number) =>
+    weights[0] * array[start * columns + j]! +
+    weights[1] * array[(start + 1) * columns + j]! +
+    weights[2] * array[(start + 2) * columns + j]! +
+    weights[3] * array[(start + 3) * columns + j]!;
+  // g rises with r: g(r) = direction · (value(r) − target)
+  const g = (j: number) => direction * (at(values, j) - target);
+  if (g(0) > 0) return "saturation-side";
+  if (g(columns - 1) < 0) return "beyond-bound";
+  let low = 0;
+  let high = columns - 1;
+  while (high - low > 1) {
+    const middle = (low + high) >> 1;
+    if (g(middle) <= 0) low = middle;
+    else high = middle;
+  }
+  const width = nodes[high]! - nodes[low]!;
+  const v0 = at(values, low) - target;
+  const v1 = at(values, high) - target;
+  const m0 = at(slopes, low) * width;
+  const m1 = at(slopes, high) * width;
+  // Hermite cubic in t ∈ [0, 1] minus the target, and its derivative
+  const f = (t: number) => {
+    const t2 = t * t;
+    const t3 = t2 * t;
+    return (2 * t3 - 3 * t2 + 1) * v0 + (t3 - 2 * t2 + t) * m0 + (-2 * t3 + 3 * t2) * v1 + (t3 - t2) * m1;
+  };
+  const df = (t: number) => {
+    const t2 = t * t;
+    return (6 * t2 - 6 * t) * v0 + (3 * t2 - 4 * t + 1) * m0 + (-6 * t2 + 6 * t) * v1 + (3 * t2 - 2 * t) * m1;
+  };
+  let lowT = 0;
+  let highT = 1;
+  let t = v0 === v1 ? 0 : v0 / (v0 - v1);
+  for (let iteration = 0; iteration < 50; iteration++) {
+    const value = direction * f(t);
+    if (value <= 0) lowT = t;
+    else highT = t;
+    const slope = f(t) === 0 ? 1 : df(t);
+    let next = t - f(t) / slope;
+    if (!(next > lowT && next < highT)) next = 0.5 * (lowT + highT);
+    if (Math.abs(next - t) < 1e-13) {
+      t = next;
+      break;
+    }
+    t = next;
+  }
+  return nodes[low]! + t * width;
+}
