@@ -11,11 +11,13 @@
  * @param property "enthalpy" (kJ/kg) or "entropy" (kJ/(kg·K))
  * @param target the value sought
  * @returns r in [0, 1]; "saturation-side" when the value lies beyond the saturation curve (in the
- *   dome or the other phase); "beyond-bound" when it lies past the far temperature bound
+ *   dome or the other phase); "beyond-bound" when it lies past the far temperature bound by more
+ *   than the table's promised error (within it, the bound: r = 1)
  * @throws never
  * @example invertPhaseGrid(grid, rows, "enthalpy", 450) // e.g. 0.18
  */
 import type { PhaseGridRows } from "./phase-grid-rows.ts";
+import { SINGLE_PHASE_TOLERANCES } from "./property-tolerances.ts";
 import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
 
 export function invertPhaseGrid(
@@ -37,7 +39,9 @@ export function invertPhaseGrid(
   // g rises with r: g(r) = direction · (value(r) − target)
   const g = (j: number) => direction * (at(values, j) - target);
   if (g(0) > 0) return "saturation-side";
-  if (g(columns - 1) < 0) return "beyond-bound";
+  // A value past the far bound by less than the table's own error is the bound itself.
+  const last = g(columns - 1);
+  if (last < 0) return -last <= SINGLE_PHASE_TOLERANCES[property === "enthalpy" ? "enthalpyKJPerKg" : "entropyKJPerKgK"] ? 1 : "beyond-bound";
   let low = 0;
   let high = columns - 1;
   while (high - low > 1) {

@@ -34,6 +34,8 @@ import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
 export type { SinglePhaseState };
 
 const formatC = (value: number) => value.toFixed(2);
+/** Rounding of a temperature computed at a table's end must not refuse it, K. */
+const BOUND_SLACK_K = 1e-9;
 
 function pressureOutsidePhase(id: string, grid: CompiledPhaseGrid, pressureKPa: number): PropertyRangeError {
   const range = `${grid.minimumPressureKPa.toFixed(1)} to ${grid.maximumPressureKPa.toFixed(0)} kPa absolute`;
@@ -56,7 +58,7 @@ export function singlePhaseState(refrigerant: string, pressureKPa: number, tempe
   if (temperatureC >= dewC) {
     grid = table.vapour;
     saturationC = dewC;
-    if (temperatureC > grid.boundC) {
+    if (temperatureC > grid.boundC + BOUND_SLACK_K) {
       throw new PropertyRangeError(
         "ABOVE_RANGE",
         refrigerant,
@@ -75,7 +77,7 @@ export function singlePhaseState(refrigerant: string, pressureKPa: number, tempe
     }
     grid = table.liquid;
     saturationC = bubbleC;
-    if (temperatureC < grid.boundC) {
+    if (temperatureC < grid.boundC - BOUND_SLACK_K) {
       throw new PropertyRangeError(
         "BELOW_RANGE",
         refrigerant,
