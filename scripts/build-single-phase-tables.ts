@@ -35,12 +35,15 @@ function main(): void {
   if (unknown.length > 0) throw new Error(`no saturation table for ${unknown.join(", ")}`);
   const ids = requested.length > 0 ? requested : all;
   if (requested.length === 0) {
-    for (const name of readdirSync(outputDirectory)) if (name.endsWith(".json")) rmSync(path.join(outputDirectory, name));
+    for (const name of readdirSync(outputDirectory))
+      if (name.endsWith(".json")) rmSync(path.join(outputDirectory, name));
   }
   let totalBytes = 0;
   for (const id of ids) {
     const started = performance.now();
-    const saturation = RefrigerantTableSchema.parse(JSON.parse(readFileSync(path.join(saturationDirectory, `${id}.json`), "utf8")));
+    const saturation = RefrigerantTableSchema.parse(
+      JSON.parse(readFileSync(path.join(saturationDirectory, `${id}.json`), "utf8")),
+    );
     const solver = createSinglePhaseSolver(id);
     const build = buildSinglePhaseTable(solver, saturation, {
       generated,
@@ -76,7 +79,10 @@ function main(): void {
   ].join("\n");
   mkdirSync(path.join(repoRoot, "shared/property-tables"), { recursive: true });
   writeFileSync(path.join(repoRoot, "shared/property-tables/single-phase-table-imports.ts"), imports);
-  if (requested.length === 0) console.log(`${ids.length} single-phase tables, ${(totalBytes / 1024).toFixed(0)} kB in data/refrigerants/single-phase`);
+  if (requested.length === 0)
+    console.log(
+      `${ids.length} single-phase tables, ${(totalBytes / 1024).toFixed(0)} kB in data/refrigerants/single-phase`,
+    );
 }
 
 main();

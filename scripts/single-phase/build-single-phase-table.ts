@@ -133,7 +133,12 @@ function nodeValues(solver: SinglePhaseSolver, T: number, pPa: number, phase: Si
   } catch {
     // a metastable neighbour without a root: one-sided, away from saturation
     const sign = phase === "vapour" ? 1 : -1;
-    const [a, b, c, e] = [1, 2, 3, 4].map((k) => at(T + sign * k * d)) as [typeof centre, typeof centre, typeof centre, typeof centre];
+    const [a, b, c, e] = [1, 2, 3, 4].map((k) => at(T + sign * k * d)) as [
+      typeof centre,
+      typeof centre,
+      typeof centre,
+      typeof centre,
+    ];
     const one = (f: (s: typeof centre) => number) =>
       (sign * (-25 * f(centre) + 48 * f(a) - 36 * f(b) + 16 * f(c) - 3 * f(e))) / (12 * d);
     slopes = { h: one((s) => s.enthalpy), lnRho: one((s) => Math.log(s.density)) };
@@ -147,13 +152,19 @@ function nodeValues(solver: SinglePhaseSolver, T: number, pPa: number, phase: Si
   };
 }
 
-export function buildGrid(solver: SinglePhaseSolver, frame: PhaseFrame, spacing: GridSpacing): SinglePhaseTable["vapour"] {
+export function buildGrid(
+  solver: SinglePhaseSolver,
+  frame: PhaseFrame,
+  spacing: GridSpacing,
+): SinglePhaseTable["vapour"] {
   const scale = frame.pressureScaleKPa;
   const start = coordinateOf(frame.lowestPressureKPa, scale);
   const end = coordinateOf(frame.highestPressureKPa, scale);
   const rows = Math.max(4, Math.ceil((end - start) / spacing.coordinateStep) + 1);
   const step = (end - start) / (rows - 1);
-  const nodes = Array.from({ length: spacing.intervals + 1 }, (_, j) => (j === spacing.intervals ? 1 : Math.pow(j / spacing.intervals, spacing.exponent)));
+  const nodes = Array.from({ length: spacing.intervals + 1 }, (_, j) =>
+    j === spacing.intervals ? 1 : Math.pow(j / spacing.intervals, spacing.exponent),
+  );
   const grid: SinglePhaseTable["vapour"] = {
     pressureScaleKPa: scale,
     coordinateStart: start,
@@ -222,7 +233,8 @@ function checkGrid(solver: SinglePhaseSolver, frame: PhaseFrame, grid: SinglePha
     const h = exact.enthalpy / 1000;
     const s = exact.entropy / 1000;
     const looked = singlePhaseState(solver.designation, pressureKPa, temperatureC);
-    if (looked.phase !== frame.phase) throw new Error(`${solver.designation}: ${frame.phase} point looked up as ${looked.phase}`);
+    if (looked.phase !== frame.phase)
+      throw new Error(`${solver.designation}: ${frame.phase} point looked up as ${looked.phase}`);
     note(errors.enthalpyKJPerKg, Math.abs(looked.enthalpyKJPerKg - h), pressureKPa, temperatureC);
     note(errors.entropyKJPerKgK, Math.abs(looked.entropyKJPerKgK - s), pressureKPa, temperatureC);
     note(errors.densityRelative, Math.abs(looked.densityKgPerM3 / exact.density - 1), pressureKPa, temperatureC);
@@ -241,8 +253,18 @@ function checkGrid(solver: SinglePhaseSolver, frame: PhaseFrame, grid: SinglePha
       errors.checkedPoints++;
       return;
     }
-    note(errors.temperatureFromEnthalpyK, back(() => singlePhaseStateFromEnthalpy(solver.designation, pressureKPa, h)), pressureKPa, temperatureC);
-    note(errors.temperatureFromEntropyK, back(() => singlePhaseStateFromEntropy(solver.designation, pressureKPa, s)), pressureKPa, temperatureC);
+    note(
+      errors.temperatureFromEnthalpyK,
+      back(() => singlePhaseStateFromEnthalpy(solver.designation, pressureKPa, h)),
+      pressureKPa,
+      temperatureC,
+    );
+    note(
+      errors.temperatureFromEntropyK,
+      back(() => singlePhaseStateFromEntropy(solver.designation, pressureKPa, s)),
+      pressureKPa,
+      temperatureC,
+    );
     errors.checkedPoints++;
   };
   // Next to saturation the looked-up dew/bubble point (saturation table, ≤ 0.005 K) decides the

@@ -5,5 +5,10 @@
  */
 export { createSinglePhaseSolver } from "./single-phase-solver.ts";
 export type { SinglePhaseEosState, SinglePhaseSolver, SaturationKind } from "./single-phase-solver.ts";
-export { buildSinglePhaseTable, CRITICAL_GAP_K, GRID_CANDIDATES, HIGHEST_VAPOUR_C } from "./build-single-phase-table.ts";
+export {
+  buildSinglePhaseTable,
+  CRITICAL_GAP_K,
+  GRID_CANDIDATES,
+  HIGHEST_VAPOUR_C,
+} from "./build-single-phase-table.ts";
 export type { GridSpacing, PhaseErrors, SinglePhaseBuild } from "./build-single-phase-table.ts";

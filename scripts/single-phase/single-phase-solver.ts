@@ -90,7 +90,8 @@ function pureSolver(designation: string): SinglePhaseSolver {
       if (f > 0) high = T;
       else low = T;
       const dT = 1e-4;
-      const slope = (Math.log(sa.pressure(Math.min(T + dT, sa.criticalTemperature))) - Math.log(sa.pressure(T - dT))) / (2 * dT);
+      const slope =
+        (Math.log(sa.pressure(Math.min(T + dT, sa.criticalTemperature))) - Math.log(sa.pressure(T - dT))) / (2 * dT);
       let next = T - f / slope;
       if (!(next > low && next < high)) next = 0.5 * (low + high);
       if (Math.abs(next - T) < 1e-11) return next;
@@ -150,7 +151,9 @@ function blendSolver(blend: BlendModel): SinglePhaseSolver {
     minimumTemperature: blend.minimumTemperature,
     maximumTemperature: Math.min(...files.map((file) => file.EOS[0].T_max)),
     criticalTemperature: last,
-    bibtexKeys: [...new Set([...files.map((file) => file.EOS[0].BibTeX_EOS), ...blend.pairs.map((pair) => pair.bibtex)])],
+    bibtexKeys: [
+      ...new Set([...files.map((file) => file.EOS[0].BibTeX_EOS), ...blend.pairs.map((pair) => pair.bibtex)]),
+    ],
     saturationPressure(T, kind) {
       // continue from the traced points just below T (continuation runs upward in T)
       const below = curves[kind].filter((point) => point.T < T - 1e-9).slice(-2);

@@ -20,10 +20,16 @@ export function loadSinglePhaseTable(refrigerant: string): Promise<void> {
   if (isSinglePhaseTableLoaded(refrigerant)) return Promise.resolve();
   const inFlight = pending.get(refrigerant);
   if (inFlight) return inFlight;
-  const load = Object.hasOwn(SINGLE_PHASE_TABLE_IMPORTS, refrigerant) ? SINGLE_PHASE_TABLE_IMPORTS[refrigerant] : undefined;
+  const load = Object.hasOwn(SINGLE_PHASE_TABLE_IMPORTS, refrigerant)
+    ? SINGLE_PHASE_TABLE_IMPORTS[refrigerant]
+    : undefined;
   if (!load) {
     return Promise.reject(
-      new PropertyRangeError("UNKNOWN_REFRIGERANT", String(refrigerant), `${String(refrigerant)} has no single-phase table (known: ${Object.keys(SINGLE_PHASE_TABLE_IMPORTS).join(", ")})`),
+      new PropertyRangeError(
+        "UNKNOWN_REFRIGERANT",
+        String(refrigerant),
+        `${String(refrigerant)} has no single-phase table (known: ${Object.keys(SINGLE_PHASE_TABLE_IMPORTS).join(", ")})`,
+      ),
     );
   }
   const loading = load()

@@ -34,7 +34,8 @@ export function airSideCapacity(input: {
   atmosphericKPa: number;
 }): AirSideCapacity {
   const { airflowM3PerS, returnDryBulbC, supplyDryBulbC, atmosphericKPa } = input;
-  if (!Number.isFinite(airflowM3PerS) || !(airflowM3PerS > 0)) throw new RangeError("airSideCapacity requires an airflow above zero");
+  if (!Number.isFinite(airflowM3PerS) || !(airflowM3PerS > 0))
+    throw new RangeError("airSideCapacity requires an airflow above zero");
   const returnHumidity =
     input.returnWetBulbC !== undefined
       ? { wetBulbC: input.returnWetBulbC }
@@ -47,7 +48,8 @@ export function airSideCapacity(input: {
   // h(T_s, W_r): the supply temperature at the return air's humidity ratio (no moisture removed)
   moistAirState(supplyDryBulbC, { relativeHumidityPercent: 50 }, atmosphericKPa); // range check of the supply reading
   psychrolib.SetUnitSystem(psychrolib.SI);
-  const supplyAtReturnHumidity = (psychrolib.GetMoistAirEnthalpy(supplyDryBulbC, returnAir.humidityRatio) as number) / 1000;
+  const supplyAtReturnHumidity =
+    (psychrolib.GetMoistAirEnthalpy(supplyDryBulbC, returnAir.humidityRatio) as number) / 1000;
   const sensibleDrop = returnAir.enthalpyKJPerKgDryAir - supplyAtReturnHumidity;
   let totalKW: number | null = null;
   if (input.supplyWetBulbC !== undefined && returnHumidity !== null) {

@@ -10,10 +10,17 @@
  * @throws {RangeError} "electricalInputPower requires ..." for a value outside its range
  * @example electricalInputPower({ currentA: 10, voltageV: 400, powerFactor: 0.85, phases: 3 }) // ≈ 5.889 (kW)
  */
-export function electricalInputPower(input: { currentA: number; voltageV: number; powerFactor: number; phases: 1 | 3 }): number {
+export function electricalInputPower(input: {
+  currentA: number;
+  voltageV: number;
+  powerFactor: number;
+  phases: 1 | 3;
+}): number {
   const { currentA, voltageV, powerFactor, phases } = input;
-  if (!Number.isFinite(currentA) || currentA < 0) throw new RangeError("electricalInputPower requires a current of zero or more");
-  if (!Number.isFinite(voltageV) || !(voltageV > 0)) throw new RangeError("electricalInputPower requires a voltage above zero");
+  if (!Number.isFinite(currentA) || currentA < 0)
+    throw new RangeError("electricalInputPower requires a current of zero or more");
+  if (!Number.isFinite(voltageV) || !(voltageV > 0))
+    throw new RangeError("electricalInputPower requires a voltage above zero");
   if (!Number.isFinite(powerFactor) || !(powerFactor > 0) || powerFactor > 1) {
     throw new RangeError("electricalInputPower requires a power factor above 0 and at most 1");
   }

@@ -164,7 +164,12 @@ function attempt<T>(notes: CycleNote[], figure: CycleFigure, step: () => T | nul
   try {
     return step();
   } catch (error) {
-    if (!(error instanceof PropertyRangeError) || error.code === "TABLE_NOT_LOADED" || error.code === "UNKNOWN_REFRIGERANT") throw error;
+    if (
+      !(error instanceof PropertyRangeError) ||
+      error.code === "TABLE_NOT_LOADED" ||
+      error.code === "UNKNOWN_REFRIGERANT"
+    )
+      throw error;
     notes.push({ figure, message: error.message });
     return null;
   }
@@ -204,9 +209,19 @@ export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras
       return null;
     }
     const saturated = lineC < dewC;
-    if (saturated) notes.push({ figure: "suction", message: `The suction line is within ${SATURATED_WITHIN_K} K of the dew point: taken as saturated vapour` });
+    if (saturated)
+      notes.push({
+        figure: "suction",
+        message: `The suction line is within ${SATURATED_WITHIN_K} K of the dew point: taken as saturated vapour`,
+      });
     const state = singlePhaseState(refrigerant, suctionKPa, Math.max(lineC, dewC));
-    return fromSinglePhase("suction", state, saturated ? "suction pressure, saturated vapour (line at the dew point)" : "suction pressure and suction line temperature");
+    return fromSinglePhase(
+      "suction",
+      state,
+      saturated
+        ? "suction pressure, saturated vapour (line at the dew point)"
+        : "suction pressure and suction line temperature",
+    );
   });
 
   // 2. Discharge pressure: measured, or liquid pressure plus the line and condenser allowance.
@@ -223,10 +238,15 @@ export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras
     });
   }
   const dischargeDewC =
-    dischargeKPa === null ? null : attempt(notes, "dischargeSuperheat", () => saturationTemperature(refrigerant, dischargeKPa, "dew"));
+    dischargeKPa === null
+      ? null
+      : attempt(notes, "dischargeSuperheat", () => saturationTemperature(refrigerant, dischargeKPa, "dew"));
   let dischargeSuperheatK: number | null = null;
   if (input.dischargeLineTempC === undefined) {
-    notes.push({ figure: "dischargeSuperheat", message: "No discharge line temperature: no discharge state, superheat, compression work or efficiency" });
+    notes.push({
+      figure: "dischargeSuperheat",
+      message: "No discharge line temperature: no discharge state, superheat, compression work or efficiency",
+    });
   } else if (dischargeDewC !== null) {
     dischargeSuperheatK = input.dischargeLineTempC - dischargeDewC;
     if (dischargeSuperheatK < 0) {
@@ -246,14 +266,21 @@ export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras
           return fromSinglePhase(
             "discharge",
             state,
-            dischargeMeasured ? "discharge pressure and discharge line temperature" : "liquid pressure plus allowance, and discharge line temperature",
+            dischargeMeasured
+              ? "discharge pressure and discharge line temperature"
+              : "liquid pressure plus allowance, and discharge line temperature",
           );
         });
 
   // 3. Liquid: subcooled liquid at the liquid pressure and line temperature.
   const liquid =
     input.liquidTempLocation === "discharge-line"
-      ? (notes.push({ figure: "liquid", message: "The liquid temperature was taken on the discharge line: no liquid state, so no evaporator inlet or refrigerating effect" }), null)
+      ? (notes.push({
+          figure: "liquid",
+          message:
+            "The liquid temperature was taken on the discharge line: no liquid state, so no evaporator inlet or refrigerating effect",
+        }),
+        null)
       : attempt(notes, "liquid", () => {
           const bubbleC = saturationTemperature(refrigerant, liquidKPa, "bubble");
           const lineC = input.liquidLineTempC;
@@ -264,9 +291,22 @@ export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras
             });
             return null;
           }
-          if (lineC < bubbleC) return fromSinglePhase("liquid", singlePhaseState(refrigerant, liquidKPa, lineC), "liquid pressure and liquid line temperature");
-          if (lineC > bubbleC) notes.push({ figure: "liquid", message: `The liquid line is within ${SATURATED_WITHIN_K} K of the bubble point: taken as saturated liquid` });
-          return fromSinglePhase("liquid", saturatedPhasesAtPressure(refrigerant, liquidKPa).liquid, "liquid pressure, saturated liquid (no subcooling)");
+          if (lineC < bubbleC)
+            return fromSinglePhase(
+              "liquid",
+              singlePhaseState(refrigerant, liquidKPa, lineC),
+              "liquid pressure and liquid line temperature",
+            );
+          if (lineC > bubbleC)
+            notes.push({
+              figure: "liquid",
+              message: `The liquid line is within ${SATURATED_WITHIN_K} K of the bubble point: taken as saturated liquid`,
+            });
+          return fromSinglePhase(
+            "liquid",
+            saturatedPhasesAtPressure(refrigerant, liquidKPa).liquid,
+            "liquid pressure, saturated liquid (no subcooling)",
+          );
         });
 
   // 4. Evaporator inlet: isenthalpic expansion to the suction pressure.
@@ -288,25 +328,41 @@ export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras
           } satisfies CycleState;
         });
 
-  const refrigeratingEffectKJPerKg = suction && evaporatorInlet ? suction.enthalpyKJPerKg - evaporatorInlet.enthalpyKJPerKg : null;
+  const refrigeratingEffectKJPerKg =
+    suction && evaporatorInlet ? suction.enthalpyKJPerKg - evaporatorInlet.enthalpyKJPerKg : null;
   if (refrigeratingEffectKJPerKg === null) {
-    notes.push({ figure: "refrigeratingEffect", message: "The refrigerating effect needs both the suction state and the liquid state" });
+    notes.push({
+      figure: "refrigeratingEffect",
+      message: "The refrigerating effect needs both the suction state and the liquid state",
+    });
   }
 
   let compressionWorkKJPerKg: number | null = null;
   if (suction && discharge) {
     const work = discharge.enthalpyKJPerKg - suction.enthalpyKJPerKg;
     if (work > 0) compressionWorkKJPerKg = work;
-    else notes.push({ figure: "compressionWork", message: "The discharge enthalpy is not above the suction enthalpy: the discharge probe reads low (or is not on the discharge line)" });
+    else
+      notes.push({
+        figure: "compressionWork",
+        message:
+          "The discharge enthalpy is not above the suction enthalpy: the discharge probe reads low (or is not on the discharge line)",
+      });
   } else {
-    notes.push({ figure: "compressionWork", message: "The compression work needs both the suction and the discharge state" });
+    notes.push({
+      figure: "compressionWork",
+      message: "The compression work needs both the suction and the discharge state",
+    });
   }
 
   let isentropicDischarge: CycleState | null = null;
   let isentropicEfficiency: number | null = null;
   if (suction && discharge && dischargeKPa !== null && compressionWorkKJPerKg !== null) {
     isentropicDischarge = attempt(notes, "isentropicEfficiency", () =>
-      fromSinglePhase("isentropicDischarge", singlePhaseStateFromEntropy(refrigerant, dischargeKPa, suction.entropyKJPerKgK!), "discharge pressure at the suction entropy (ideal compression)"),
+      fromSinglePhase(
+        "isentropicDischarge",
+        singlePhaseStateFromEntropy(refrigerant, dischargeKPa, suction.entropyKJPerKgK!),
+        "discharge pressure at the suction entropy (ideal compression)",
+      ),
     );
     if (isentropicDischarge) {
       isentropicEfficiency = (isentropicDischarge.enthalpyKJPerKg - suction.enthalpyKJPerKg) / compressionWorkKJPerKg;
@@ -316,21 +372,42 @@ export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras
           "Apparent isentropic efficiency from the discharge line temperature: heat lost from the shell and line before the probe makes it read high, a hermetic motor's heat in the gas makes it read low; compare the compressor with itself over time",
       });
       if (isentropicEfficiency > 1) {
-        notes.push({ figure: "isentropicEfficiency", message: "Above 1: more heat is lost before the probe than the compressor's losses add; check the probe is on the discharge line close to the compressor" });
+        notes.push({
+          figure: "isentropicEfficiency",
+          message:
+            "Above 1: more heat is lost before the probe than the compressor's losses add; check the probe is on the discharge line close to the compressor",
+        });
       }
     }
   } else {
-    notes.push({ figure: "isentropicEfficiency", message: "The isentropic efficiency needs the suction and discharge states" });
+    notes.push({
+      figure: "isentropicEfficiency",
+      message: "The isentropic efficiency needs the suction and discharge states",
+    });
   }
 
-  const cop = refrigeratingEffectKJPerKg !== null && compressionWorkKJPerKg !== null ? refrigeratingEffectKJPerKg / compressionWorkKJPerKg : null;
-  if (cop === null) notes.push({ figure: "cop", message: "The COP needs the refrigerating effect and the compression work" });
+  const cop =
+    refrigeratingEffectKJPerKg !== null && compressionWorkKJPerKg !== null
+      ? refrigeratingEffectKJPerKg / compressionWorkKJPerKg
+      : null;
+  if (cop === null)
+    notes.push({ figure: "cop", message: "The COP needs the refrigerating effect and the compression work" });
 
   // Electrical input, mass flow and capacity.
   let electricalPowerKW: number | null = null;
   if (extras.measuredPowerKW !== undefined) electricalPowerKW = extras.measuredPowerKW;
-  else if (input.compressorAmps !== undefined && extras.voltageV !== undefined && extras.powerFactor !== undefined && extras.phases !== undefined) {
-    electricalPowerKW = electricalInputPower({ currentA: input.compressorAmps, voltageV: extras.voltageV, powerFactor: extras.powerFactor, phases: extras.phases });
+  else if (
+    input.compressorAmps !== undefined &&
+    extras.voltageV !== undefined &&
+    extras.powerFactor !== undefined &&
+    extras.phases !== undefined
+  ) {
+    electricalPowerKW = electricalInputPower({
+      currentA: input.compressorAmps,
+      voltageV: extras.voltageV,
+      powerFactor: extras.powerFactor,
+      phases: extras.phases,
+    });
   } else {
     const missing = [
       input.compressorAmps === undefined && "the compressor current",
@@ -338,12 +415,21 @@ export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras
       extras.powerFactor === undefined && "the power factor",
       extras.phases === undefined && "the number of phases",
     ].filter(Boolean);
-    notes.push({ figure: "electricalPower", message: `No electrical input: enter a measured kW, or ${missing.join(", ")}` });
+    notes.push({
+      figure: "electricalPower",
+      message: `No electrical input: enter a measured kW, or ${missing.join(", ")}`,
+    });
   }
-  const massFlowKgPerS = electricalPowerKW !== null && compressionWorkKJPerKg !== null ? electricalPowerKW / compressionWorkKJPerKg : null;
-  const capacityKW = massFlowKgPerS !== null && refrigeratingEffectKJPerKg !== null ? massFlowKgPerS * refrigeratingEffectKJPerKg : null;
+  const massFlowKgPerS =
+    electricalPowerKW !== null && compressionWorkKJPerKg !== null ? electricalPowerKW / compressionWorkKJPerKg : null;
+  const capacityKW =
+    massFlowKgPerS !== null && refrigeratingEffectKJPerKg !== null ? massFlowKgPerS * refrigeratingEffectKJPerKg : null;
   if (massFlowKgPerS !== null) {
-    notes.push({ figure: "massFlow", message: "Mass flow = electrical input ÷ compression work: all electrical input taken as heat in the gas (adiabatic compressor), so it is an upper bound" });
+    notes.push({
+      figure: "massFlow",
+      message:
+        "Mass flow = electrical input ÷ compression work: all electrical input taken as heat in the gas (adiabatic compressor), so it is an upper bound",
+    });
   } else {
     notes.push({ figure: "capacity", message: "The capacity needs the electrical input and the cycle's enthalpies" });
   }
@@ -358,21 +444,35 @@ export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras
         ? { value: extras.nominalCapacityKW * NOMINAL_AIRFLOW_M3_PER_S_PER_KW, basis: "nominal-capacity" as const }
         : null;
   if (airflow === null || input.returnAirDryBulbC === undefined || input.supplyAirDryBulbC === undefined) {
-    notes.push({ figure: "airSide", message: "The air-side capacity needs the airflow (or the nominal capacity) and the return and supply air temperatures" });
+    notes.push({
+      figure: "airSide",
+      message:
+        "The air-side capacity needs the airflow (or the nominal capacity) and the return and supply air temperatures",
+    });
   } else {
     try {
       const air = airSideCapacity({
         airflowM3PerS: airflow.value,
         returnDryBulbC: input.returnAirDryBulbC,
         ...(input.returnAirWetBulbC !== undefined ? { returnWetBulbC: input.returnAirWetBulbC } : {}),
-        ...(input.returnAirRelativeHumidity !== undefined ? { returnRelativeHumidityPercent: input.returnAirRelativeHumidity } : {}),
+        ...(input.returnAirRelativeHumidity !== undefined
+          ? { returnRelativeHumidityPercent: input.returnAirRelativeHumidity }
+          : {}),
         supplyDryBulbC: input.supplyAirDryBulbC,
         ...(extras.supplyAirWetBulbC !== undefined ? { supplyWetBulbC: extras.supplyAirWetBulbC } : {}),
         atmosphericKPa: atmosphere,
       });
-      airSide = { airflowM3PerS: airflow.value, airflowBasis: airflow.basis, sensibleKW: air.sensibleKW, totalKW: air.totalKW };
+      airSide = {
+        airflowM3PerS: airflow.value,
+        airflowBasis: airflow.basis,
+        sensibleKW: air.sensibleKW,
+        totalKW: air.totalKW,
+      };
       if (airflow.basis === "nominal-capacity") {
-        notes.push({ figure: "airSide", message: "Airflow estimated from the nominal capacity (400 cfm per ton): real airflow is often 10–20 % off" });
+        notes.push({
+          figure: "airSide",
+          message: "Airflow estimated from the nominal capacity (400 cfm per ton): real airflow is often 10–20 % off",
+        });
       }
       if (capacityKW !== null && capacityKW > 0) {
         const airKW = air.totalKW ?? air.sensibleKW;

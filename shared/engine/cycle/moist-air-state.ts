@@ -36,13 +36,15 @@ export function moistAirState(
   if (!Number.isFinite(dryBulbC) || dryBulbC < MIN_DRY_BULB_C || dryBulbC > MAX_DRY_BULB_C) {
     throw new RangeError(`moistAirState requires a dry bulb between ${MIN_DRY_BULB_C} and ${MAX_DRY_BULB_C} °C`);
   }
-  if (!Number.isFinite(atmosphericKPa) || !(atmosphericKPa > 0)) throw new RangeError("moistAirState requires a positive atmospheric pressure in kPa");
+  if (!Number.isFinite(atmosphericKPa) || !(atmosphericKPa > 0))
+    throw new RangeError("moistAirState requires a positive atmospheric pressure in kPa");
   psychrolib.SetUnitSystem(psychrolib.SI);
   const pressurePa = atmosphericKPa * 1000;
   let humidityRatio: number;
   if ("wetBulbC" in humidity) {
     const { wetBulbC } = humidity;
-    if (!Number.isFinite(wetBulbC) || wetBulbC > dryBulbC + 1e-9) throw new RangeError("moistAirState requires a wet bulb at or below the dry bulb");
+    if (!Number.isFinite(wetBulbC) || wetBulbC > dryBulbC + 1e-9)
+      throw new RangeError("moistAirState requires a wet bulb at or below the dry bulb");
     humidityRatio = psychrolib.GetHumRatioFromTWetBulb(dryBulbC, wetBulbC, pressurePa) as number;
   } else {
     const { relativeHumidityPercent } = humidity;

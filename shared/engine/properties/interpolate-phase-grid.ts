@@ -42,12 +42,20 @@ export function interpolatePhaseGrid(grid: CompiledPhaseGrid, rows: PhaseGridRow
     const w = rows.weights[m]!;
     const k = (rows.start + m) * columns + j;
     enthalpy +=
-      w * (h00 * grid.enthalpy[k]! + h10 * grid.enthalpyByR[k]! + h01 * grid.enthalpy[k + 1]! + h11 * grid.enthalpyByR[k + 1]!);
+      w *
+      (h00 * grid.enthalpy[k]! +
+        h10 * grid.enthalpyByR[k]! +
+        h01 * grid.enthalpy[k + 1]! +
+        h11 * grid.enthalpyByR[k + 1]!);
     entropy +=
-      w * (h00 * grid.entropy[k]! + h10 * grid.entropyByR[k]! + h01 * grid.entropy[k + 1]! + h11 * grid.entropyByR[k + 1]!);
+      w *
+      (h00 * grid.entropy[k]! + h10 * grid.entropyByR[k]! + h01 * grid.entropy[k + 1]! + h11 * grid.entropyByR[k + 1]!);
     logDensity +=
       w *
-      (h00 * grid.logDensity[k]! + h10 * grid.logDensityByR[k]! + h01 * grid.logDensity[k + 1]! + h11 * grid.logDensityByR[k + 1]!);
+      (h00 * grid.logDensity[k]! +
+        h10 * grid.logDensityByR[k]! +
+        h01 * grid.logDensity[k + 1]! +
+        h11 * grid.logDensityByR[k + 1]!);
   }
   return { enthalpy, entropy, logDensity };
 }

@@ -41,7 +41,10 @@ export function invertPhaseGrid(
   if (g(0) > 0) return "saturation-side";
   // A value past the far bound by less than the table's own error is the bound itself.
   const last = g(columns - 1);
-  if (last < 0) return -last <= SINGLE_PHASE_TOLERANCES[property === "enthalpy" ? "enthalpyKJPerKg" : "entropyKJPerKgK"] ? 1 : "beyond-bound";
+  if (last < 0)
+    return -last <= SINGLE_PHASE_TOLERANCES[property === "enthalpy" ? "enthalpyKJPerKg" : "entropyKJPerKgK"]
+      ? 1
+      : "beyond-bound";
   let low = 0;
   let high = columns - 1;
   while (high - low > 1) {

@@ -16,7 +16,11 @@ const formatKPa = (value: number) => (value >= 100 ? value.toFixed(0) : value.to
 export function requireSinglePhasePressure(table: CompiledSinglePhaseTable, pressureKPa: number): void {
   const { id, vapour, liquid } = table;
   if (typeof pressureKPa !== "number" || !Number.isFinite(pressureKPa)) {
-    throw new PropertyRangeError("NOT_FINITE", id, `${id}: the pressure must be a number in kPa absolute (got ${String(pressureKPa)})`);
+    throw new PropertyRangeError(
+      "NOT_FINITE",
+      id,
+      `${id}: the pressure must be a number in kPa absolute (got ${String(pressureKPa)})`,
+    );
   }
   const lowest = Math.min(vapour.minimumPressureKPa, liquid.minimumPressureKPa);
   const highest = Math.max(vapour.maximumPressureKPa, liquid.maximumPressureKPa);

@@ -16,6 +16,10 @@
 import type { SinglePhaseState } from "./phase-grid-state.ts";
 import { singlePhaseStateFromProperty } from "./single-phase-state-from-property.ts";
 
-export function singlePhaseStateFromEnthalpy(refrigerant: string, pressureKPa: number, enthalpyKJPerKg: number): SinglePhaseState {
+export function singlePhaseStateFromEnthalpy(
+  refrigerant: string,
+  pressureKPa: number,
+  enthalpyKJPerKg: number,
+): SinglePhaseState {
   return singlePhaseStateFromProperty(refrigerant, pressureKPa, "enthalpy", enthalpyKJPerKg);
 }

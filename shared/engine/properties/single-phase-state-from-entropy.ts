@@ -16,6 +16,10 @@
 import type { SinglePhaseState } from "./phase-grid-state.ts";
 import { singlePhaseStateFromProperty } from "./single-phase-state-from-property.ts";
 
-export function singlePhaseStateFromEntropy(refrigerant: string, pressureKPa: number, entropyKJPerKgK: number): SinglePhaseState {
+export function singlePhaseStateFromEntropy(
+  refrigerant: string,
+  pressureKPa: number,
+  entropyKJPerKgK: number,
+): SinglePhaseState {
   return singlePhaseStateFromProperty(refrigerant, pressureKPa, "entropy", entropyKJPerKgK);
 }

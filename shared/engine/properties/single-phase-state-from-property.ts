@@ -32,7 +32,11 @@ export function singlePhaseStateFromProperty(
   requireSinglePhasePressure(table, pressureKPa);
   const [name, unit, digits] = LABEL[property];
   if (typeof value !== "number" || !Number.isFinite(value)) {
-    throw new PropertyRangeError("NOT_FINITE", refrigerant, `${refrigerant}: the ${name} must be a number in ${unit} (got ${String(value)})`);
+    throw new PropertyRangeError(
+      "NOT_FINITE",
+      refrigerant,
+      `${refrigerant}: the ${name} must be a number in ${unit} (got ${String(value)})`,
+    );
   }
   for (const grid of [table.vapour, table.liquid]) {
     if (pressureKPa < grid.minimumPressureKPa || pressureKPa > grid.maximumPressureKPa) continue;

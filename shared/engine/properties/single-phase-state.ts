@@ -50,7 +50,11 @@ export function singlePhaseState(refrigerant: string, pressureKPa: number, tempe
   const table = resolveSinglePhaseTable(refrigerant);
   requireSinglePhasePressure(table, pressureKPa);
   if (typeof temperatureC !== "number" || !Number.isFinite(temperatureC)) {
-    throw new PropertyRangeError("NOT_FINITE", refrigerant, `${refrigerant}: the temperature must be a number in °C (got ${String(temperatureC)})`);
+    throw new PropertyRangeError(
+      "NOT_FINITE",
+      refrigerant,
+      `${refrigerant}: the temperature must be a number in °C (got ${String(temperatureC)})`,
+    );
   }
   const dewC = saturationTemperature(refrigerant, pressureKPa, "dew");
   let grid: CompiledPhaseGrid;
@@ -68,7 +72,10 @@ export function singlePhaseState(refrigerant: string, pressureKPa: number, tempe
   } else {
     const bubbleC = saturationTemperature(refrigerant, pressureKPa, "bubble");
     if (temperatureC > bubbleC) {
-      const between = bubbleC === dewC ? `at its saturation temperature ${formatC(dewC)} °C` : `between its bubble point ${formatC(bubbleC)} °C and dew point ${formatC(dewC)} °C`;
+      const between =
+        bubbleC === dewC
+          ? `at its saturation temperature ${formatC(dewC)} °C`
+          : `between its bubble point ${formatC(bubbleC)} °C and dew point ${formatC(dewC)} °C`;
       throw new PropertyRangeError(
         "INSIDE_DOME",
         refrigerant,

@@ -47,15 +47,18 @@ const PhaseGridSchema = z
   })
   .superRefine((grid, ctx) => {
     const size = grid.rows * grid.nodes.length;
-    if (grid.saturationC.length !== grid.rows) ctx.addIssue({ code: "custom", message: "saturationC needs one entry per row" });
+    if (grid.saturationC.length !== grid.rows)
+      ctx.addIssue({ code: "custom", message: "saturationC needs one entry per row" });
     for (const key of ["enthalpy", "enthalpySlope", "entropy", "logDensity", "logDensitySlope"] as const) {
-      if (grid[key].length !== size) ctx.addIssue({ code: "custom", path: [key], message: `needs rows × nodes = ${size} values` });
+      if (grid[key].length !== size)
+        ctx.addIssue({ code: "custom", path: [key], message: `needs rows × nodes = ${size} values` });
     }
     if (grid.nodes[0] !== 0 || grid.nodes[grid.nodes.length - 1] !== 1) {
       ctx.addIssue({ code: "custom", path: ["nodes"], message: "must run from 0 to 1" });
     }
     for (let j = 1; j < grid.nodes.length; j++) {
-      if (!(grid.nodes[j]! > grid.nodes[j - 1]!)) ctx.addIssue({ code: "custom", path: ["nodes"], message: "must increase strictly" });
+      if (!(grid.nodes[j]! > grid.nodes[j - 1]!))
+        ctx.addIssue({ code: "custom", path: ["nodes"], message: "must increase strictly" });
     }
   });
 export type SinglePhaseGrid = z.infer<typeof PhaseGridSchema>;

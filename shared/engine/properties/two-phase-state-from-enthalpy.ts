@@ -37,7 +37,11 @@ export interface TwoPhaseState {
   saturatedVapourEnthalpyKJPerKg: number;
 }
 
-export function twoPhaseStateFromEnthalpy(refrigerant: string, pressureKPa: number, enthalpyKJPerKg: number): TwoPhaseState {
+export function twoPhaseStateFromEnthalpy(
+  refrigerant: string,
+  pressureKPa: number,
+  enthalpyKJPerKg: number,
+): TwoPhaseState {
   const { liquid, vapour } = saturatedPhasesAtPressure(refrigerant, pressureKPa);
   if (!(enthalpyKJPerKg >= liquid.enthalpyKJPerKg && enthalpyKJPerKg <= vapour.enthalpyKJPerKg)) {
     throw new PropertyRangeError(

@@ -15,7 +15,9 @@ describe("electrical input and air-side capacity", () => {
   it("computes single- and three-phase active power", () => {
     expect(electricalInputPower({ currentA: 10, voltageV: 230, powerFactor: 0.9, phases: 1 })).toBeCloseTo(2.07, 12);
     expect(electricalInputPower({ currentA: 10, voltageV: 400, powerFactor: 0.85, phases: 3 })).toBeCloseTo(5.889, 3);
-    expect(() => electricalInputPower({ currentA: 10, voltageV: 400, powerFactor: 1.2, phases: 3 })).toThrow(/power factor/);
+    expect(() => electricalInputPower({ currentA: 10, voltageV: 400, powerFactor: 1.2, phases: 3 })).toThrow(
+      /power factor/,
+    );
   });
 
   it("gives moist-air enthalpy by the ASHRAE formula and the saturation humidity ratio of eq. 23", () => {
@@ -28,13 +30,23 @@ describe("electrical input and air-side capacity", () => {
   });
 
   it("gives total capacity from the enthalpy drop and sensible capacity at the return humidity", () => {
-    const input = { airflowM3PerS: 0.4, returnDryBulbC: 26.7, returnWetBulbC: 19.4, supplyDryBulbC: 14, supplyWetBulbC: 13, atmosphericKPa: 101.325 };
+    const input = {
+      airflowM3PerS: 0.4,
+      returnDryBulbC: 26.7,
+      returnWetBulbC: 19.4,
+      supplyDryBulbC: 14,
+      supplyWetBulbC: 13,
+      atmosphericKPa: 101.325,
+    };
     const result = airSideCapacity(input);
     const returnAir = moistAirState(26.7, { wetBulbC: 19.4 }, 101.325);
     const supplyAir = moistAirState(14, { wetBulbC: 13 }, 101.325);
     const massFlow = 0.4 / returnAir.specificVolumeM3PerKgDryAir;
     expect(result.dryAirMassFlowKgPerS).toBeCloseTo(massFlow, 12);
-    expect(result.totalKW).toBeCloseTo(massFlow * (returnAir.enthalpyKJPerKgDryAir - supplyAir.enthalpyKJPerKgDryAir), 9);
+    expect(result.totalKW).toBeCloseTo(
+      massFlow * (returnAir.enthalpyKJPerKgDryAir - supplyAir.enthalpyKJPerKgDryAir),
+      9,
+    );
     expect(result.sensibleKW).toBeCloseTo(massFlow * (1.006 + 1.86 * returnAir.humidityRatio) * (26.7 - 14), 6);
     expect(result.totalKW!).toBeGreaterThan(result.sensibleKW);
     expect(airSideCapacity({ ...input, supplyWetBulbC: undefined }).totalKW).toBeNull();

@@ -37,7 +37,11 @@ describe("measuredCycle", () => {
     const suctionC = saturationTemperature("R134a", low, "dew");
     const liquidC = saturationTemperature("R134a", high, "bubble");
     // the ideal compressor's outlet: discharge pressure at the suction entropy
-    const isentropic = singlePhaseStateFromEntropy("R134a", high, saturatedPhasesAtPressure("R134a", low).vapour.entropyKJPerKgK);
+    const isentropic = singlePhaseStateFromEntropy(
+      "R134a",
+      high,
+      saturatedPhasesAtPressure("R134a", low).vapour.entropyKJPerKgK,
+    );
     const input: DiagnosisInput = Object.freeze({
       refrigerant: "R134a",
       meteringDevice: "txv",
@@ -52,7 +56,10 @@ describe("measuredCycle", () => {
     const massFlow = 0.05;
     expect(massFlow * cycle.refrigeratingEffectKJPerKg!).toBeCloseTo(7.18, 2); // Q̇_L, kW
     expect(massFlow * cycle.compressionWorkKJPerKg!).toBeCloseTo(1.81, 2); // Ẇ_in, kW
-    expect(massFlow * (cycle.states.discharge!.enthalpyKJPerKg - cycle.states.liquid!.enthalpyKJPerKg)).toBeCloseTo(8.99, 2); // Q̇_H
+    expect(massFlow * (cycle.states.discharge!.enthalpyKJPerKg - cycle.states.liquid!.enthalpyKJPerKg)).toBeCloseTo(
+      8.99,
+      2,
+    ); // Q̇_H
     expect(cycle.cop).toBeCloseTo(3.97, 2);
     expect(cycle.isentropicEfficiency).toBeCloseTo(1, 3);
     // the evaporator inlet is the throttled liquid: same enthalpy, at the suction pressure
@@ -82,34 +89,51 @@ describe("measuredCycle", () => {
     const cycle = measuredCycle(field);
     const suctionKPa = 820 + STANDARD_ATMOSPHERE_KPA;
     expect(cycle.states.suction!.enthalpyKJPerKg).toBe(singlePhaseState("R410A", suctionKPa, 12).enthalpyKJPerKg);
-    expect(cycle.states.liquid!.enthalpyKJPerKg).toBe(singlePhaseState("R410A", 2600 + STANDARD_ATMOSPHERE_KPA, 38).enthalpyKJPerKg);
-    expect(cycle.refrigeratingEffectKJPerKg).toBeCloseTo(cycle.states.suction!.enthalpyKJPerKg - cycle.states.liquid!.enthalpyKJPerKg, 12);
+    expect(cycle.states.liquid!.enthalpyKJPerKg).toBe(
+      singlePhaseState("R410A", 2600 + STANDARD_ATMOSPHERE_KPA, 38).enthalpyKJPerKg,
+    );
+    expect(cycle.refrigeratingEffectKJPerKg).toBeCloseTo(
+      cycle.states.suction!.enthalpyKJPerKg - cycle.states.liquid!.enthalpyKJPerKg,
+      12,
+    );
     // no discharge gauge: liquid pressure plus the pressure of 1 K of dew temperature
     const condensingDewC = saturationTemperature("R410A", 2600 + STANDARD_ATMOSPHERE_KPA, "dew");
     const expectedKPa = saturationPressure("R410A", condensingDewC + cycleLimits.DISCHARGE_PRESSURE_ALLOWANCE_K, "dew");
     expect(cycle.states.discharge!.pressureKPa).toBeCloseTo(expectedKPa, 9);
     expect(cycle.dischargePressureBasis).toBe("liquid-plus-allowance");
     expect(cycle.dischargeSuperheatK).toBeCloseTo(75 - saturationTemperature("R410A", expectedKPa, "dew"), 9);
-    expect(cycle.notes.some((note) => note.figure === "discharge" && /liquid pressure plus/.test(note.message))).toBe(true);
+    expect(cycle.notes.some((note) => note.figure === "discharge" && /liquid pressure plus/.test(note.message))).toBe(
+      true,
+    );
     // a sound scroll compressor on R410A: apparent η_s between 0.5 and 1
     expect(cycle.isentropicEfficiency!).toBeGreaterThan(0.5);
     expect(cycle.isentropicEfficiency!).toBeLessThan(1);
     expect(cycle.cop).toBeCloseTo(cycle.refrigeratingEffectKJPerKg! / cycle.compressionWorkKJPerKg!, 12);
     // no electrical input or airflow: null, with what is missing
     expect(cycle.capacityKW).toBeNull();
-    expect(cycle.notes.find((note) => note.figure === "electricalPower")!.message).toMatch(/the supply voltage, the power factor, the number of phases/);
+    expect(cycle.notes.find((note) => note.figure === "electricalPower")!.message).toMatch(
+      /the supply voltage, the power factor, the number of phases/,
+    );
     expect(cycle.airSide).toBeNull();
   });
 
   it("gives mass flow and capacity from V·I·cos φ, and compares them with the air side", () => {
-    const cycle = measuredCycle(field, { voltageV: 230, phases: 1, powerFactor: 0.9, airflowM3PerS: 0.45, supplyAirWetBulbC: 13.2 });
+    const cycle = measuredCycle(field, {
+      voltageV: 230,
+      phases: 1,
+      powerFactor: 0.9,
+      airflowM3PerS: 0.45,
+      supplyAirWetBulbC: 13.2,
+    });
     expect(cycle.electricalPowerKW).toBeCloseTo((230 * 10 * 0.9) / 1000, 12);
     expect(cycle.massFlowKgPerS).toBeCloseTo(cycle.electricalPowerKW! / cycle.compressionWorkKJPerKg!, 12);
     expect(cycle.capacityKW).toBeCloseTo(cycle.massFlowKgPerS! * cycle.refrigeratingEffectKJPerKg!, 12);
     expect(cycle.airSide!.airflowBasis).toBe("measured");
     expect(cycle.airSide!.totalKW).not.toBeNull();
     expect(cycle.airToRefrigerantRatio).toBeCloseTo(cycle.airSide!.totalKW! / cycle.capacityKW!, 12);
-    expect(cycle.notes.some((note) => note.figure === "airSide" && /(agree within|differ by)/.test(note.message))).toBe(true);
+    expect(cycle.notes.some((note) => note.figure === "airSide" && /(agree within|differ by)/.test(note.message))).toBe(
+      true,
+    );
   });
 
   it("estimates the airflow from the nominal capacity (400 cfm per ton) when none was measured", () => {
@@ -126,7 +150,9 @@ describe("measuredCycle", () => {
     expect(cycle.states.suction).toBeNull();
     expect(cycle.refrigeratingEffectKJPerKg).toBeNull();
     expect(cycle.isentropicEfficiency).toBeNull();
-    expect(cycle.notes.find((note) => note.figure === "suction")!.message).toMatch(/below the dew point .* may carry liquid/);
+    expect(cycle.notes.find((note) => note.figure === "suction")!.message).toMatch(
+      /below the dew point .* may carry liquid/,
+    );
     // within probe accuracy of the dew point: saturated vapour
     const saturated = measuredCycle({ ...field, suctionLineTempC: dewC - 0.1 });
     expect(saturated.states.suction!.temperatureC).toBeCloseTo(dewC, 9);
@@ -140,11 +166,21 @@ describe("measuredCycle", () => {
     expect(warm.notes.find((note) => note.figure === "liquid")!.message).toMatch(/flash gas/);
     // no subcooling at all: saturated liquid, the left edge of the dome
     const saturated = measuredCycle({ ...field, liquidLineTempC: bubbleC });
-    expect(saturated.states.liquid!.enthalpyKJPerKg).toBeCloseTo(saturatedPhasesAtPressure("R410A", 2600 + STANDARD_ATMOSPHERE_KPA).liquid.enthalpyKJPerKg, 9);
+    expect(saturated.states.liquid!.enthalpyKJPerKg).toBeCloseTo(
+      saturatedPhasesAtPressure("R410A", 2600 + STANDARD_ATMOSPHERE_KPA).liquid.enthalpyKJPerKg,
+      9,
+    );
   });
 
   it("places a blend's evaporator inlet inside its glide", () => {
-    const cycle = measuredCycle({ ...field, refrigerant: "R407C", suctionPressureKPa: 380, suctionLineTempC: 12, liquidPressureKPa: 1700, liquidLineTempC: 40 });
+    const cycle = measuredCycle({
+      ...field,
+      refrigerant: "R407C",
+      suctionPressureKPa: 380,
+      suctionLineTempC: 12,
+      liquidPressureKPa: 1700,
+      liquidLineTempC: 40,
+    });
     const inlet = cycle.states.evaporatorInlet!;
     const bubbleC = saturationTemperature("R407C", 380 + STANDARD_ATMOSPHERE_KPA, "bubble");
     const dewC = saturationTemperature("R407C", 380 + STANDARD_ATMOSPHERE_KPA, "dew");
@@ -159,7 +195,9 @@ describe("measuredCycle", () => {
     const dewC = saturationTemperature("R410A", 2700 + STANDARD_ATMOSPHERE_KPA, "dew");
     expect(cycle.dischargeSuperheatK).toBeCloseTo(40 - dewC, 9);
     expect(cycle.states.discharge).toBeNull();
-    expect(cycle.notes.some((note) => note.figure === "dischargeSuperheat" && /below the dew point/.test(note.message))).toBe(true);
+    expect(
+      cycle.notes.some((note) => note.figure === "dischargeSuperheat" && /below the dew point/.test(note.message)),
+    ).toBe(true);
   });
 
   it("throws a clear error when the refrigerant's table has not been loaded", () => {

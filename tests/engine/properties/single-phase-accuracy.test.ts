@@ -65,10 +65,19 @@ describe.skipIf(!referencePackPresent)(
               h: Math.abs(looked.enthalpyKJPerKg - exact.enthalpy / 1000),
               s: Math.abs(looked.entropyKJPerKgK - exact.entropy / 1000),
               rho: Math.abs(looked.densityKgPerM3 / exact.density - 1),
-              fromH: Math.abs(singlePhaseStateFromEnthalpy(id, pressureKPa, exact.enthalpy / 1000).temperatureC - temperatureC),
-              fromS: Math.abs(singlePhaseStateFromEntropy(id, pressureKPa, exact.entropy / 1000).temperatureC - temperatureC),
+              fromH: Math.abs(
+                singlePhaseStateFromEnthalpy(id, pressureKPa, exact.enthalpy / 1000).temperatureC - temperatureC,
+              ),
+              fromS: Math.abs(
+                singlePhaseStateFromEntropy(id, pressureKPa, exact.entropy / 1000).temperatureC - temperatureC,
+              ),
             };
-            [h, s, rho, t] = [Math.max(h, errors.h), Math.max(s, errors.s), Math.max(rho, errors.rho), Math.max(t, errors.fromH, errors.fromS)];
+            [h, s, rho, t] = [
+              Math.max(h, errors.h),
+              Math.max(s, errors.s),
+              Math.max(rho, errors.rho),
+              Math.max(t, errors.fromH, errors.fromS),
+            ];
             expect(errors.h).toBeLessThanOrEqual(SINGLE_PHASE_TOLERANCES.enthalpyKJPerKg);
             expect(errors.s).toBeLessThanOrEqual(SINGLE_PHASE_TOLERANCES.entropyKJPerKgK);
             expect(errors.rho).toBeLessThanOrEqual(SINGLE_PHASE_TOLERANCES.densityRelative);
@@ -78,7 +87,10 @@ describe.skipIf(!referencePackPresent)(
           { numRuns: runsFor(id), seed: 18, endOnFailure: true },
         );
       }
-      worst.set(id, `h ${h.toExponential(1)} kJ/kg, s ${s.toExponential(1)}, ρ ${(rho * 100).toFixed(4)} %, T ${t.toExponential(1)} K`);
+      worst.set(
+        id,
+        `h ${h.toExponential(1)} kJ/kg, s ${s.toExponential(1)}, ρ ${(rho * 100).toFixed(4)} %, T ${t.toExponential(1)} K`,
+      );
     });
 
     it("the enthalpy of saturated liquid at 0 °C is 200 kJ/kg and its entropy 1 kJ/(kg·K) (IIR reference, as the saturation tables)", async () => {
@@ -88,7 +100,9 @@ describe.skipIf(!referencePackPresent)(
         // 0.2 K of subcooling: inside the liquid grid; h and s follow the EOS from there
         const exact = solver.state(KELVIN_OFFSET - 0.2, pressurePa, "liquid");
         const looked = singlePhaseState(id, pressurePa / 1000, -0.2);
-        expect(Math.abs(looked.enthalpyKJPerKg - exact.enthalpy / 1000)).toBeLessThanOrEqual(SINGLE_PHASE_TOLERANCES.enthalpyKJPerKg);
+        expect(Math.abs(looked.enthalpyKJPerKg - exact.enthalpy / 1000)).toBeLessThanOrEqual(
+          SINGLE_PHASE_TOLERANCES.enthalpyKJPerKg,
+        );
         // the EOS itself: 200 kJ/kg and 1 kJ/(kg·K) at the bubble point, minus c_p × 0.2 K
         expect(exact.enthalpy / 1000).toBeGreaterThan(199);
         expect(exact.enthalpy / 1000).toBeLessThan(200);

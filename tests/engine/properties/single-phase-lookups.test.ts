@@ -86,16 +86,28 @@ describe("single-phase tables and lookups", () => {
     for (const id of ["R32", "R410A", "R454B", "R717"]) {
       const table = resolveSinglePhaseTable(id);
       fc.assert(
-        fc.property(fc.noBias(fc.integer({ min: 50, max: 950 })).map((n) => n / 1000), fc.noBias(fc.integer({ min: 1, max: 1000 })).map((n) => n / 1000), fc.boolean(), (along, across, vapour) => {
-          const grid = vapour ? table.vapour : table.liquid;
-          const pressureKPa = grid.minimumPressureKPa * Math.pow(grid.maximumPressureKPa / grid.minimumPressureKPa, along);
-          const saturationC = saturationTemperature(id, pressureKPa, vapour ? "dew" : "bubble");
-          const temperatureC = saturationC + across * (grid.boundC - saturationC);
-          if (Math.abs(temperatureC - saturationC) < 0.05) return;
-          const state = singlePhaseState(id, pressureKPa, temperatureC);
-          expect(Math.abs(singlePhaseStateFromEnthalpy(id, pressureKPa, state.enthalpyKJPerKg).temperatureC - temperatureC)).toBeLessThan(1e-3);
-          expect(Math.abs(singlePhaseStateFromEntropy(id, pressureKPa, state.entropyKJPerKgK).temperatureC - temperatureC)).toBeLessThan(1e-3);
-        }),
+        fc.property(
+          fc.noBias(fc.integer({ min: 50, max: 950 })).map((n) => n / 1000),
+          fc.noBias(fc.integer({ min: 1, max: 1000 })).map((n) => n / 1000),
+          fc.boolean(),
+          (along, across, vapour) => {
+            const grid = vapour ? table.vapour : table.liquid;
+            const pressureKPa =
+              grid.minimumPressureKPa * Math.pow(grid.maximumPressureKPa / grid.minimumPressureKPa, along);
+            const saturationC = saturationTemperature(id, pressureKPa, vapour ? "dew" : "bubble");
+            const temperatureC = saturationC + across * (grid.boundC - saturationC);
+            if (Math.abs(temperatureC - saturationC) < 0.05) return;
+            const state = singlePhaseState(id, pressureKPa, temperatureC);
+            expect(
+              Math.abs(
+                singlePhaseStateFromEnthalpy(id, pressureKPa, state.enthalpyKJPerKg).temperatureC - temperatureC,
+              ),
+            ).toBeLessThan(1e-3);
+            expect(
+              Math.abs(singlePhaseStateFromEntropy(id, pressureKPa, state.entropyKJPerKgK).temperatureC - temperatureC),
+            ).toBeLessThan(1e-3);
+          },
+        ),
         { numRuns: 100, seed: 7 },
       );
     }
@@ -108,14 +120,18 @@ describe("single-phase tables and lookups", () => {
       expect(h).toBeGreaterThan(previous);
       previous = h;
     }
-    expect(singlePhaseState("R32", 1500, 80).enthalpyKJPerKg).toBeLessThan(singlePhaseState("R32", 1000, 80).enthalpyKJPerKg);
+    expect(singlePhaseState("R32", 1500, 80).enthalpyKJPerKg).toBeLessThan(
+      singlePhaseState("R32", 1000, 80).enthalpyKJPerKg,
+    );
   });
 
   it("refuses a state inside the dome, naming the bubble and dew points of a blend", () => {
     const pressureKPa = saturationPressure("R407C", 0, "dew");
     const error = rangeError(() => singlePhaseState("R407C", pressureKPa, -3));
     expect(error.code).toBe("INSIDE_DOME");
-    expect(error.message).toMatch(/R407C at .* kPa absolute and -3\.00 °C is inside the dome \(between its bubble point -6\.\d\d °C and dew point 0\.00 °C\)/);
+    expect(error.message).toMatch(
+      /R407C at .* kPa absolute and -3\.00 °C is inside the dome \(between its bubble point -6\.\d\d °C and dew point 0\.00 °C\)/,
+    );
     expect(rangeError(() => singlePhaseStateFromEnthalpy("R134a", 500, 300)).code).toBe("INSIDE_DOME");
   });
 
@@ -132,7 +148,10 @@ describe("single-phase tables and lookups", () => {
   it("says so when a table has not been loaded, and loads it once for concurrent callers", async () => {
     // a fresh id-less registry is not possible in one module graph: a damaged copy stands in
     const raw = (await SINGLE_PHASE_TABLE_IMPORTS["R290"]!()).default as Record<string, unknown>;
-    expect(rangeError(() => registerSinglePhaseTable({ ...raw, vapour: { ...(raw.vapour as object), nodes: [0.5, 1] } })).code).toBe("INVALID_TABLE");
+    expect(
+      rangeError(() => registerSinglePhaseTable({ ...raw, vapour: { ...(raw.vapour as object), nodes: [0.5, 1] } }))
+        .code,
+    ).toBe("INVALID_TABLE");
     await expect(loadSinglePhaseTable("R999")).rejects.toThrow(/R999 has no single-phase table/);
     await Promise.all([loadSinglePhaseTable("R290"), loadSinglePhaseTable("R290")]);
     expect(singlePhaseState("R290", 1000, 60).phase).toBe("vapour");
@@ -143,7 +162,11 @@ describe("single-phase tables and lookups", () => {
     const pressureKPa = saturationPressure("R134a", 0);
     const mixture = twoPhaseStateFromEnthalpy("R134a", pressureKPa, liquid.enthalpyKJPerKg);
     const edges = saturatedPhasesAtPressure("R134a", pressureKPa);
-    expect(mixture.quality).toBeCloseTo((liquid.enthalpyKJPerKg - edges.liquid.enthalpyKJPerKg) / (edges.vapour.enthalpyKJPerKg - edges.liquid.enthalpyKJPerKg), 12);
+    expect(mixture.quality).toBeCloseTo(
+      (liquid.enthalpyKJPerKg - edges.liquid.enthalpyKJPerKg) /
+        (edges.vapour.enthalpyKJPerKg - edges.liquid.enthalpyKJPerKg),
+      12,
+    );
     expect(mixture.temperatureC).toBeCloseTo(0, 3);
     expect(rangeError(() => twoPhaseStateFromEnthalpy("R134a", pressureKPa, 500)).code).toBe("INVALID_POINT");
   });
