@@ -20,6 +20,22 @@ import type { PhaseGridRows } from "./phase-grid-rows.ts";
 import { SINGLE_PHASE_TOLERANCES } from "./property-tolerances.ts";
 import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
 
+/** Node j of the row interpolated at the query pressure (no closures: this runs on every lookup). */
+function rowValue(
+  array: Float64Array,
+  weights: PhaseGridRows["weights"],
+  start: number,
+  columns: number,
+  j: number,
+): number {
+  return (
+    weights[0] * array[start * columns + j]! +
+    weights[1] * array[(start + 1) * columns + j]! +
+    weights[2] * array[(start + 2) * columns + j]! +
+    weights[3] * array[(start + 3) * columns + j]!
+  );
+}
+
 export function invertPhaseGrid(
   grid: CompiledPhaseGrid,
   rows: PhaseGridRows,
@@ -31,16 +47,10 @@ export function invertPhaseGrid(
   const { columns, nodes } = grid;
   const direction = grid.phase === "vapour" ? 1 : -1;
   const { start, weights } = rows;
-  const at = (array: Float64Array, j: number) =>
-    weights[0] * array[start * columns + j]! +
-    weights[1] * array[(start + 1) * columns + j]! +
-    weights[2] * array[(start + 2) * columns + j]! +
-    weights[3] * array[(start + 3) * columns + j]!;
   // g rises with r: g(r) = direction · (value(r) − target)
-  const g = (j: number) => direction * (at(values, j) - target);
-  if (g(0) > 0) return "saturation-side";
+  if (direction * (rowValue(values, weights, start, columns, 0) - target) > 0) return "saturation-side";
   // A value past the far bound by less than the table's own error is the bound itself.
-  const last = g(columns - 1);
+  const last = direction * (rowValue(values, weights, start, columns, columns - 1) - target);
   if (last < 0)
     return -last <= SINGLE_PHASE_TOLERANCES[property === "enthalpy" ? "enthalpyKJPerKg" : "entropyKJPerKgK"]
       ? 1
@@ -49,38 +59,32 @@ export function invertPhaseGrid(
   let high = columns - 1;
   while (high - low > 1) {
     const middle = (low + high) >> 1;
-    if (g(middle) <= 0) low = middle;
+    if (direction * (rowValue(values, weights, start, columns, middle) - target) <= 0) low = middle;
     else high = middle;
   }
   const width = nodes[high]! - nodes[low]!;
-  const v0 = at(values, low) - target;
-  const v1 = at(values, high) - target;
-  const m0 = at(slopes, low) * width;
-  const m1 = at(slopes, high) * width;
-  // Hermite cubic in t ∈ [0, 1] minus the target, and its derivative
-  const f = (t: number) => {
-    const t2 = t * t;
-    const t3 = t2 * t;
-    return (2 * t3 - 3 * t2 + 1) * v0 + (t3 - 2 * t2 + t) * m0 + (-2 * t3 + 3 * t2) * v1 + (t3 - t2) * m1;
-  };
-  const df = (t: number) => {
-    const t2 = t * t;
-    return (6 * t2 - 6 * t) * v0 + (3 * t2 - 4 * t + 1) * m0 + (-6 * t2 + 6 * t) * v1 + (3 * t2 - 2 * t) * m1;
-  };
+  const v0 = rowValue(values, weights, start, columns, low) - target;
+  const v1 = rowValue(values, weights, start, columns, high) - target;
+  const m0 = rowValue(slopes, weights, start, columns, low) * width;
+  const m1 = rowValue(slopes, weights, start, columns, high) * width;
+  // Newton on the Hermite cubic in t ∈ [0, 1] (minus the target), kept inside the bracket.
   let lowT = 0;
   let highT = 1;
   let t = v0 === v1 ? 0 : v0 / (v0 - v1);
-  for (let iteration = 0; iteration < 50; iteration++) {
-    const value = direction * f(t);
-    if (value <= 0) lowT = t;
+  for (let iteration = 0; iteration < 40; iteration++) {
+    const t2 = t * t;
+    const t3 = t2 * t;
+    const value = (2 * t3 - 3 * t2 + 1) * v0 + (t3 - 2 * t2 + t) * m0 + (-2 * t3 + 3 * t2) * v1 + (t3 - t2) * m1;
+    const slope = (6 * t2 - 6 * t) * (v0 - v1) + (3 * t2 - 4 * t + 1) * m0 + (3 * t2 - 2 * t) * m1;
+    if (direction * value <= 0) lowT = t;
     else highT = t;
-    const slope = f(t) === 0 ? 1 : df(t);
-    let next = t - f(t) / slope;
-    if (!(next > lowT && next < highT)) next = 0.5 * (lowT + highT);
-    if (Math.abs(next - t) < 1e-13) {
-      t = next;
+    let next = slope !== 0 ? t - value / slope : Number.NaN;
+    // Converged: checked before the bracket, since at the root Newton lands on a bracket end.
+    if (Math.abs(next - t) < 1e-12) {
+      t = Math.min(Math.max(next, 0), 1);
       break;
     }
+    if (!(next > lowT && next < highT)) next = 0.5 * (lowT + highT);
     t = next;
   }
   return nodes[low]! + t * width;
