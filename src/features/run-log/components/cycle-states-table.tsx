@@ -33,7 +33,13 @@ export function CycleStatesTable({
   const t = TEMPERATURE_LABEL[units.temperature];
   const p = ABSOLUTE_LABEL[units.pressure];
   return (
-    <div className="overflow-x-auto">
+    // Scrolls sideways on a phone: focusable so the keyboard can scroll it too (WCAG 2.1.1).
+    <div
+      className="overflow-x-auto"
+      tabIndex={0}
+      role="region"
+      aria-label="Cycle states (scrolls sideways on a narrow screen)"
+    >
       <table className="num w-full border-collapse text-right text-sm">
         <caption className="pb-1 text-left font-sans text-sm text-muted">{caption}</caption>
         <thead className="font-sans">

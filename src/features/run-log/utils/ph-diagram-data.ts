@@ -101,7 +101,7 @@ export function phDiagramData(
   const lowC = Number.isFinite(lowestKPa)
     ? Math.max(minimumC, lowestSaturationC(refrigerant, lowestKPa) - 30)
     : Math.max(minimumC, -40);
-  const steps = 120;
+  const steps = 60;
   const liquidLine: PhPoint[] = [];
   const vapourLine: PhPoint[] = [];
   for (let step = 0; step <= steps; step++) {
