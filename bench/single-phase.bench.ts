@@ -17,18 +17,9 @@ import { loadSinglePhaseTable } from "../shared/property-tables/load-single-phas
 import { referencePackExists } from "../scripts/eos/index.ts";
 import { createSinglePhaseSolver, type SinglePhaseSolver } from "../scripts/single-phase/index.ts";
 import { resolveSinglePhaseTable } from "../shared/engine/properties/resolve-single-phase-table.ts";
-import { nanosecondsPerCall, registerBench } from "./bench-registry.ts";
+import { nanosecondsPerCall, pseudoRandomSequence, registerBench, reportLookup } from "./bench-registry.ts";
 
 const POINTS = 4096;
-
-/** Deterministic pseudo-random sequence (so runs compare like for like). */
-function sequence(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (Math.imul(state, 1664525) + 1013904223) >>> 0;
-    return state / 2 ** 32;
-  };
-}
 
 interface Point {
   id: string;
@@ -40,7 +31,7 @@ interface Point {
 
 /** Technician states: vapour 0–60 K above its dew point, liquid 0–20 K below its bubble point, −30…55 °C saturation. */
 function makePoints(ids: readonly string[], seed: number): Point[] {
-  const random = sequence(seed);
+  const random = pseudoRandomSequence(seed);
   const points: Point[] = [];
   while (points.length < POINTS) {
     const id = ids[Math.floor(random() * ids.length)]!;
@@ -57,16 +48,6 @@ function makePoints(ids: readonly string[], seed: number): Point[] {
     points.push({ id, pressureKPa, temperatureC, enthalpy: state.enthalpyKJPerKg, phase: state.phase });
   }
   return points;
-}
-
-function report(label: string, tableNs: number, directNs?: number): void {
-  const direct =
-    directNs === undefined
-      ? ""
-      : `   direct EOS ${(directNs / 1000).toFixed(1).padStart(8)} µs   ratio ${Math.round(directNs / tableNs)
-          .toLocaleString("en")
-          .padStart(8)}×`;
-  console.log(`${label.padEnd(48)} table ${tableNs.toFixed(0).padStart(5)} ns${direct}`);
 }
 
 /** T at (p, h) straight from the EOS: secant on T with a direct (T, p) solve at each step. */
@@ -123,8 +104,8 @@ registerBench("single-phase states and the measured cycle", async () => {
         3,
       );
     }
-    report(`singlePhaseState, ${group}`, stateNs, directStateNs);
-    report(`singlePhaseStateFromEnthalpy, ${group}`, inverseNs, directInverseNs);
+    reportLookup(`singlePhaseState, ${group}`, stateNs, directStateNs, 48);
+    reportLookup(`singlePhaseStateFromEnthalpy, ${group}`, inverseNs, directInverseNs, 48);
   }
   const input = {
     refrigerant: "R410A",

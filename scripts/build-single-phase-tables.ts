@@ -11,17 +11,12 @@
  */
 import { mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import path from "node:path";
-import { readReferenceManifest, referencePackExists, referenceRoot, repoRoot } from "./eos/index.ts";
+import { repoRoot, requireReferencePack } from "./eos/index.ts";
 import { buildSinglePhaseTable, createSinglePhaseSolver } from "./single-phase/index.ts";
 import { RefrigerantTableSchema } from "../shared/engine/properties/refrigerant-table-schema.ts";
 
 function main(): void {
-  if (!referencePackExists()) {
-    console.error(`Reference equations of state not found at ${referenceRoot}; cannot generate tables.`);
-    process.exit(1);
-  }
-  const manifest = readReferenceManifest();
-  const dataNote = `${manifest.source_repository} commit ${manifest.source_commit} (fluid files via the project's reference pack)`;
+  const dataNote = requireReferencePack();
   const generated = new Date().toISOString().slice(0, 10);
   const saturationDirectory = path.join(repoRoot, "data/refrigerants");
   const outputDirectory = path.join(saturationDirectory, "single-phase");

@@ -4,6 +4,8 @@ import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
 
 // A built-in case that asks about the measured cycle (issue 18): R407C RTU-1, circuit 1.
 const CYCLE_CASE = "wattle-lane-rtu1-c1-cycle-on-the-chart";
+/** The usual five answers, right for that case (dew 7 °C, bubble 45 °C, 6 K and 5 K, normal). */
+const USUAL = { evaporatingTempC: 7, condensingTempC: 45, superheatK: 6, subcoolingK: 5, chargeState: "normal" };
 
 describe("casebook API: measured-cycle questions", () => {
   let testApp: TestApp;
@@ -29,11 +31,7 @@ describe("casebook API: measured-cycle questions", () => {
     const response = await apprentice.post("/api/attempts").send({
       caseId: CYCLE_CASE,
       answers: {
-        evaporatingTempC: 7,
-        condensingTempC: 45,
-        superheatK: 6,
-        subcoolingK: 5,
-        chargeState: "normal",
+        ...USUAL,
         reasoning: "Both on target; read the enthalpies off the chart",
         // the stored answers are 158.343 kJ/kg and 23.312 K (data/casebook/built-in-cases.json)
         refrigeratingEffectKJPerKg: 155,
@@ -52,18 +50,7 @@ describe("casebook API: measured-cycle questions", () => {
   it("refuses a refrigerating effect outside the schema's range", async () => {
     const response = await apprentice
       .post("/api/attempts")
-      .send({
-        caseId: CYCLE_CASE,
-        answers: {
-          evaporatingTempC: 7,
-          condensingTempC: 45,
-          superheatK: 6,
-          subcoolingK: 5,
-          chargeState: "normal",
-          reasoning: "x y z",
-          refrigeratingEffectKJPerKg: -3,
-        },
-      });
+      .send({ caseId: CYCLE_CASE, answers: { ...USUAL, reasoning: "x y z", refrigeratingEffectKJPerKg: -3 } });
     expect(response.status).toBe(400);
   });
 });

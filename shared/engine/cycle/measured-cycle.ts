@@ -189,6 +189,23 @@ function fromSinglePhase(point: CycleStatePoint, state: SinglePhaseState, basis:
   };
 }
 
+/**
+ * Vapour at a pipe's pressure and temperature: superheated above the dew point, saturated vapour
+ * when the line reads up to SATURATED_WITHIN_K below it (probe accuracy), none when colder.
+ */
+function vapourAtLine(
+  refrigerant: string,
+  point: CycleStatePoint,
+  pressureKPa: number,
+  lineC: number,
+  dewC: number,
+  basis: string,
+): CycleState | null {
+  if (lineC < dewC - SATURATED_WITHIN_K) return null;
+  const state = singlePhaseState(refrigerant, pressureKPa, Math.max(lineC, dewC));
+  return fromSinglePhase(point, state, lineC < dewC ? `${basis} (at the dew point: saturated vapour)` : basis);
+}
+
 export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras = {}): MeasuredCycle {
   const refrigerant = input.refrigerant;
   resolveSinglePhaseTable(refrigerant); // fail loudly before any figure when the table is not loaded
@@ -208,19 +225,18 @@ export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras
       });
       return null;
     }
-    const saturated = lineC < dewC;
-    if (saturated)
+    if (lineC < dewC)
       notes.push({
         figure: "suction",
         message: `The suction line is within ${SATURATED_WITHIN_K} K of the dew point: taken as saturated vapour`,
       });
-    const state = singlePhaseState(refrigerant, suctionKPa, Math.max(lineC, dewC));
-    return fromSinglePhase(
+    return vapourAtLine(
+      refrigerant,
       "suction",
-      state,
-      saturated
-        ? "suction pressure, saturated vapour (line at the dew point)"
-        : "suction pressure and suction line temperature",
+      suctionKPa,
+      lineC,
+      dewC,
+      "suction pressure and suction line temperature",
     );
   });
 
@@ -259,18 +275,18 @@ export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras
   const discharge =
     dischargeKPa === null || dischargeDewC === null || input.dischargeLineTempC === undefined
       ? null
-      : attempt(notes, "discharge", () => {
-          const lineC = input.dischargeLineTempC!;
-          if (lineC < dischargeDewC - SATURATED_WITHIN_K) return null;
-          const state = singlePhaseState(refrigerant, dischargeKPa, Math.max(lineC, dischargeDewC));
-          return fromSinglePhase(
+      : attempt(notes, "discharge", () =>
+          vapourAtLine(
+            refrigerant,
             "discharge",
-            state,
+            dischargeKPa,
+            input.dischargeLineTempC!,
+            dischargeDewC,
             dischargeMeasured
               ? "discharge pressure and discharge line temperature"
               : "liquid pressure plus allowance, and discharge line temperature",
-          );
-        });
+          ),
+        );
 
   // 3. Liquid: subcooled liquid at the liquid pressure and line temperature.
   const liquid =

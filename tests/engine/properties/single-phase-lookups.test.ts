@@ -12,7 +12,6 @@ import fc from "fast-check";
 import { beforeAll, describe, expect, it } from "vitest";
 import {
   listRefrigerants,
-  PropertyRangeError,
   registerSinglePhaseTable,
   saturatedPhasesAtPressure,
   saturatedState,
@@ -27,19 +26,12 @@ import {
 import { resolveSinglePhaseTable } from "@shared/engine/properties/resolve-single-phase-table.ts";
 import { loadSinglePhaseTable } from "@shared/property-tables/load-single-phase-table.ts";
 import { SINGLE_PHASE_TABLE_IMPORTS } from "@shared/property-tables/single-phase-table-imports.ts";
+import { thrownPropertyError } from "./thrown-property-error.ts";
 
 const ids = listRefrigerants().map((refrigerant) => refrigerant.id);
 const directory = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../../data/refrigerants/single-phase");
 
-function rangeError(action: () => unknown): PropertyRangeError {
-  try {
-    action();
-  } catch (error) {
-    if (error instanceof PropertyRangeError) return error;
-    throw error;
-  }
-  throw new Error("expected a PropertyRangeError");
-}
+const rangeError = thrownPropertyError;
 
 describe("single-phase tables and lookups", () => {
   beforeAll(async () => {
