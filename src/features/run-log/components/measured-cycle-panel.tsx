@@ -1,8 +1,16 @@
-import { lazy, Suspense, useMemo, useState } from "react";
+import { lazy, Suspense, useId, useMemo, useState } from "react";
 import type { MeasuredCycle, MeasuredCycleExtras } from "@shared/engine/index.ts";
 import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
-import { DIFFERENCE_LABEL, differenceToDisplay, formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
+import { NumberInput, parseDecimal } from "@/components/ui/field/number-input.tsx";
+import {
+  DIFFERENCE_LABEL,
+  differenceToDisplay,
+  formatNumber,
+  TEMPERATURE_LABEL,
+  temperatureFromDisplay,
+  type DisplayUnits,
+} from "@/lib/units/display-units.ts";
 import { useMeasuredCycle } from "../hooks/use-measured-cycle.ts";
 import { phDiagramData } from "../utils/ph-diagram-data.ts";
 import { CycleStatesTable } from "./cycle-states-table.tsx";
@@ -67,6 +75,75 @@ function Figures({ cycle, units }: { cycle: MeasuredCycle; units: DisplayUnits }
   );
 }
 
+const EXTRA_FIELDS = [
+  { key: "measuredPowerKW", label: "Compressor power (metered)", unit: "kW" },
+  { key: "voltageV", label: "Supply voltage", unit: "V" },
+  { key: "phases", label: "Phases (1 or 3)", unit: "" },
+  { key: "powerFactor", label: "Power factor", unit: "" },
+  { key: "airflowLitresPerS", label: "Evaporator airflow", unit: "L/s" },
+  { key: "supplyAirWetBulb", label: "Supply air wet bulb", unit: "temperature" },
+] as const;
+type ExtraKey = (typeof EXTRA_FIELDS)[number]["key"];
+
+/** What the technician may add for capacity, COP from power and the air side: kept on this screen only, never saved. */
+function toExtras(draft: Partial<Record<ExtraKey, string>>, units: DisplayUnits): MeasuredCycleExtras {
+  const number = (key: ExtraKey) => {
+    const parsed = parseDecimal(draft[key] ?? "");
+    return typeof parsed === "number" && Number.isFinite(parsed) ? parsed : undefined;
+  };
+  const extras: MeasuredCycleExtras = {};
+  const power = number("measuredPowerKW");
+  if (power !== undefined && power > 0) extras.measuredPowerKW = power;
+  const voltage = number("voltageV");
+  if (voltage !== undefined && voltage > 0) extras.voltageV = voltage;
+  const phases = number("phases");
+  if (phases === 1 || phases === 3) extras.phases = phases;
+  const powerFactor = number("powerFactor");
+  if (powerFactor !== undefined && powerFactor > 0 && powerFactor <= 1) extras.powerFactor = powerFactor;
+  const airflow = number("airflowLitresPerS");
+  if (airflow !== undefined && airflow > 0) extras.airflowM3PerS = airflow / 1000;
+  const wetBulb = number("supplyAirWetBulb");
+  if (wetBulb !== undefined) extras.supplyAirWetBulbC = temperatureFromDisplay(wetBulb, units.temperature);
+  return extras;
+}
+
+function ExtraInputs({
+  draft,
+  onChange,
+  units,
+}: {
+  draft: Partial<Record<ExtraKey, string>>;
+  onChange: (key: ExtraKey, value: string) => void;
+  units: DisplayUnits;
+}) {
+  const id = useId();
+  return (
+    <details className="text-sm">
+      <summary className="min-h-touch cursor-pointer py-2 font-medium">
+        Add electrical and airflow readings (capacity, air side)
+      </summary>
+      <p className="text-muted">
+        Used for the figures above only; not saved with the reading. A metered kW is used before V × A × power factor.
+      </p>
+      <div className="mt-2 grid gap-3 sm:grid-cols-3">
+        {EXTRA_FIELDS.map((field) => (
+          <div key={field.key} className="space-y-1">
+            <label htmlFor={`${id}-${field.key}`} className="block font-medium">
+              {field.label}
+            </label>
+            <NumberInput
+              id={`${id}-${field.key}`}
+              unit={field.unit === "temperature" ? TEMPERATURE_LABEL[units.temperature] : field.unit}
+              value={draft[field.key] ?? ""}
+              onChange={(event) => onChange(field.key, event.target.value)}
+            />
+          </div>
+        ))}
+      </div>
+    </details>
+  );
+}
+
 function CycleContent({
   input,
   previousInput,
@@ -75,7 +152,12 @@ function CycleContent({
   extras,
   mode,
 }: Omit<MeasuredCyclePanelProps, "mode"> & { mode: MeasuredCyclePanelProps["mode"] }) {
-  const state = useMeasuredCycle(input, previousInput, extras ?? NO_EXTRAS, true);
+  const [draft, setDraft] = useState<Partial<Record<ExtraKey, string>>>({});
+  const typed = useMemo(
+    () => (mode === "run-log" ? { ...toExtras(draft, units), ...extras } : (extras ?? NO_EXTRAS)),
+    [draft, units, extras, mode],
+  );
+  const state = useMeasuredCycle(input, previousInput, typed, true);
   const data = useMemo(
     () =>
       state.kind === "ready" && input
@@ -112,6 +194,13 @@ function CycleContent({
   return (
     <div className="space-y-3">
       {!quiz && <Figures cycle={cycle} units={units} />}
+      {mode === "run-log" && (
+        <ExtraInputs
+          draft={draft}
+          units={units}
+          onChange={(key, value) => setDraft((current) => ({ ...current, [key]: value }))}
+        />
+      )}
       <Suspense
         fallback={
           <p aria-busy="true" className="text-muted">
