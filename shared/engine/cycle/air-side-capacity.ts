@@ -10,7 +10,7 @@
  * Valid range: air temperatures −50…70 °C; airflow > 0.
  *
  * @throws {RangeError} for an airflow ≤ 0 or air readings outside moistAirState's range
- * @example airSideCapacity({ airflowM3PerS: 0.4, returnDryBulbC: 26.7, returnWetBulbC: 19.4, supplyDryBulbC: 14, supplyWetBulbC: 13, atmosphericKPa: 101.325 }).totalKW // ≈ 8.7
+ * @example airSideCapacity({ airflowM3PerS: 0.4, returnDryBulbC: 26.7, returnWetBulbC: 19.4, supplyDryBulbC: 14, supplyWetBulbC: 13, atmosphericKPa: 101.325 }).totalKW // ≈ 8.58 (kW; sensible ≈ 6.03)
  */
 import psychrolib from "psychrolib";
 import { moistAirState } from "./moist-air-state.ts";

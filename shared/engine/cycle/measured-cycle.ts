@@ -45,7 +45,7 @@
  *
  * @throws PropertyRangeError TABLE_NOT_LOADED when the refrigerant's single-phase table has not
  *   been loaded (load it first; see shared/property-tables), UNKNOWN_REFRIGERANT for an unknown id
- * @example measuredCycle({ refrigerant: "R410A", meteringDevice: "txv", suctionPressureKPa: 820, suctionLineTempC: 12, liquidPressureKPa: 2600, liquidLineTempC: 38, dischargeLineTempC: 75 }).refrigeratingEffectKJPerKg // ≈ 170
+ * @example measuredCycle({ refrigerant: "R410A", meteringDevice: "txv", suctionPressureKPa: 820, suctionLineTempC: 12, liquidPressureKPa: 2600, liquidLineTempC: 38, dischargeLineTempC: 75 }).refrigeratingEffectKJPerKg // ≈ 168.9 (kJ/kg)
  */
 import { STANDARD_ATMOSPHERE_KPA, type DiagnosisInput } from "../../schemas/diagnosis.ts";
 import { PropertyRangeError } from "../properties/property-range-error.ts";

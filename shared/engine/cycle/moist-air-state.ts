@@ -26,7 +26,7 @@ const MAX_DRY_BULB_C = 70;
  * Valid range: dry bulb −50…70 °C; wet bulb at most the dry bulb.
  *
  * @throws {RangeError} "moistAirState requires ..." for inputs outside the range
- * @example moistAirState(26.7, { wetBulbC: 19.4 }, 101.325).enthalpyKJPerKgDryAir // ≈ 55.2
+ * @example moistAirState(26.7, { wetBulbC: 19.4 }, 101.325).enthalpyKJPerKgDryAir // ≈ 55.16 (W ≈ 0.01109)
  */
 export function moistAirState(
   dryBulbC: number,

@@ -11,7 +11,7 @@
  * @param reduced r in [0, 1] (0 on the saturation curve, 1 at the far temperature bound)
  * @returns h in kJ/kg, s in kJ/(kg·K), ln(ρ / (kg/m³))
  * @throws never (the caller checks the ranges)
- * @example interpolatePhaseGrid(grid, phaseGridRows(grid, 1000), 0.2).enthalpy
+ * @example interpolatePhaseGrid(r32.vapour, phaseGridRows(r32.vapour, 1000), 0.2).enthalpy // ≈ 552.30 (kJ/kg, R32 at 1000 kPa, 43.2 °C)
  */
 import { findInterval } from "./find-interval.ts";
 import type { PhaseGridRows } from "./phase-grid-rows.ts";

@@ -14,7 +14,7 @@
  *   dome or the other phase); "beyond-bound" when it lies past the far temperature bound by more
  *   than the table's promised error (within it, the bound: r = 1)
  * @throws never
- * @example invertPhaseGrid(grid, rows, "enthalpy", 450) // e.g. 0.18
+ * @example invertPhaseGrid(r32.vapour, phaseGridRows(r32.vapour, 1000), "enthalpy", 560) // ≈ 0.2469
  */
 import type { PhaseGridRows } from "./phase-grid-rows.ts";
 import { SINGLE_PHASE_TOLERANCES } from "./property-tolerances.ts";

@@ -8,7 +8,7 @@
  * @param pressureKPa kPa absolute, inside the grid's rows (the caller checks the range)
  * @returns first row of the window and the weights of its four rows (they sum to 1)
  * @throws never
- * @example phaseGridRows(grid, grid.minimumPressureKPa).weights // [1, 0, 0, 0]
+ * @example phaseGridRows(grid, grid.minimumPressureKPa).weights // [1, 0, 0, 0] (to rounding)
  */
 import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
 

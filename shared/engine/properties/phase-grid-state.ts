@@ -10,7 +10,7 @@
  * @param reduced r in [0, 1]
  * @returns the state
  * @throws never
- * @example phaseGridState(grid, rows, 1000, 6.62, 0.1).phase // "vapour"
+ * @example phaseGridState(r32.vapour, phaseGridRows(r32.vapour, 1000), 1000, 6.62, 0.1).phase // "vapour"
  */
 import { interpolatePhaseGrid } from "./interpolate-phase-grid.ts";
 import type { PhaseGridRows } from "./phase-grid-rows.ts";

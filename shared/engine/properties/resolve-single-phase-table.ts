@@ -6,7 +6,7 @@
  * @returns the compiled table
  * @throws PropertyRangeError UNKNOWN_REFRIGERANT for an id without a saturation table;
  *   TABLE_NOT_LOADED when the single-phase table has not been registered
- * @example resolveSinglePhaseTable("R32").vapour.rows // e.g. 40 (after loading R32)
+ * @example resolveSinglePhaseTable("R32").vapour.rows // 34 (after loading R32)
  */
 import { PropertyRangeError } from "./property-range-error.ts";
 import { resolveRefrigerant } from "./resolve-refrigerant.ts";

@@ -104,7 +104,7 @@ function compileGrid(phase: SinglePhase, grid: SinglePhaseGrid): CompiledPhaseGr
  * @param raw the table as loaded (unknown until validated)
  * @returns the id of the registered refrigerant
  * @throws PropertyRangeError INVALID_TABLE when the data fails its schema
- * @example registerSinglePhaseTable(await import("data/refrigerants/single-phase/R32.json")) // "R32"
+ * @example registerSinglePhaseTable((await import("data/refrigerants/single-phase/R32.json")).default) // "R32"
  */
 export function registerSinglePhaseTable(raw: unknown): string {
   const parsed = SinglePhaseTableSchema.safeParse(raw);

@@ -11,7 +11,7 @@
  * @returns the state with its temperature (°C)
  * @throws PropertyRangeError TABLE_NOT_LOADED, NOT_FINITE, BELOW_RANGE, ABOVE_RANGE, or
  *   INSIDE_DOME when the enthalpy lies between saturated liquid and vapour at p
- * @example singlePhaseStateFromEnthalpy("R134a", 1000, 441.5).temperatureC // ≈ 60.0 (°C)
+ * @example singlePhaseStateFromEnthalpy("R134a", 1000, 441.5).temperatureC // ≈ 59.97 (°C)
  */
 import type { SinglePhaseState } from "./phase-grid-state.ts";
 import { singlePhaseStateFromProperty } from "./single-phase-state-from-property.ts";

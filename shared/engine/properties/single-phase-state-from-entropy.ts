@@ -11,7 +11,7 @@
  * @returns the state with its temperature (°C)
  * @throws PropertyRangeError TABLE_NOT_LOADED, NOT_FINITE, BELOW_RANGE, ABOVE_RANGE, or
  *   INSIDE_DOME when the entropy lies between saturated liquid and vapour at p
- * @example singlePhaseStateFromEntropy("R134a", 1000, 1.7476).temperatureC // ≈ 45 (°C, superheated vapour)
+ * @example singlePhaseStateFromEntropy("R134a", 1000, 1.7476).temperatureC // ≈ 49.8 (°C, superheated vapour)
  */
 import type { SinglePhaseState } from "./phase-grid-state.ts";
 import { singlePhaseStateFromProperty } from "./single-phase-state-from-property.ts";

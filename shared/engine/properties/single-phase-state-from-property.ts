@@ -10,7 +10,7 @@
  * @param value the known enthalpy or entropy
  * @returns the state, its temperature found by inverting the table
  * @throws PropertyRangeError TABLE_NOT_LOADED, NOT_FINITE, BELOW_RANGE, ABOVE_RANGE or INSIDE_DOME
- * @example singlePhaseStateFromProperty("R134a", 1000, "enthalpy", 441.5).temperatureC // ≈ 60
+ * @example singlePhaseStateFromProperty("R134a", 1000, "enthalpy", 441.5).temperatureC // ≈ 59.97
  */
 import { invertPhaseGrid } from "./invert-phase-grid.ts";
 import { phaseGridRows } from "./phase-grid-rows.ts";
