@@ -37,3 +37,23 @@ export function nanosecondsPerCall(body: (i: number) => number, iterations: numb
   if (sink === 42.4242) console.log("");
   return best;
 }
+
+/** Deterministic pseudo-random sequence in [0, 1) (a linear congruential generator), so runs compare like for like. */
+export function pseudoRandomSequence(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (Math.imul(state, 1664525) + 1013904223) >>> 0;
+    return state / 2 ** 32;
+  };
+}
+
+/** One line of a lookup bench: ns per table lookup, and the direct solve with the ratio when measured. */
+export function reportLookup(label: string, tableNs: number, directNs?: number, labelWidth = 44): void {
+  const direct =
+    directNs === undefined
+      ? ""
+      : `   direct EOS ${(directNs / 1000).toFixed(1).padStart(8)} µs   ratio ${Math.round(directNs / tableNs)
+          .toLocaleString("en")
+          .padStart(8)}×`;
+  console.log(`${label.padEnd(labelWidth)} table ${tableNs.toFixed(0).padStart(5)} ns${direct}`);
+}

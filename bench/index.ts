@@ -2,6 +2,7 @@
  * `npm run bench`: runs every bench module in turn. Add a module with one import line.
  */
 import "./properties.bench.ts";
+import "./single-phase.bench.ts";
 import "./diagnose.bench.ts";
 import "./procedures.bench.ts";
 import { runRegisteredBenches } from "./bench-registry.ts";

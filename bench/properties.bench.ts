@@ -23,7 +23,7 @@ import {
   solveEnvelopePoint,
   type BlendModel,
 } from "../scripts/eos/mixture/index.ts";
-import { nanosecondsPerCall, registerBench } from "./bench-registry.ts";
+import { nanosecondsPerCall, pseudoRandomSequence, registerBench, reportLookup } from "./bench-registry.ts";
 
 function mixtureBlend(id: string): BlendModel {
   const record = readBlends().find((blend) => blend.designation === id);
@@ -33,15 +33,6 @@ function mixtureBlend(id: string): BlendModel {
 
 const POINTS = 4096;
 
-/** Deterministic pseudo-random sequence (so runs compare like for like). */
-function sequence(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (Math.imul(state, 1664525) + 1013904223) >>> 0;
-    return state / 2 ** 32;
-  };
-}
-
 interface Point {
   id: string;
   temperatureC: number;
@@ -50,7 +41,7 @@ interface Point {
 }
 
 function makePoints(ids: string[], seed: number): Point[] {
-  const random = sequence(seed);
+  const random = pseudoRandomSequence(seed);
   const infos = listRefrigerants().filter((r) => ids.includes(r.id));
   return Array.from({ length: POINTS }, () => {
     const info = infos[Math.floor(random() * infos.length)]!;
@@ -61,16 +52,6 @@ function makePoints(ids: string[], seed: number): Point[] {
     const point = random() < 0.5 ? "bubble" : "dew";
     return { id: info.id, temperatureC, point, pressureKPa: saturationPressure(info.id, temperatureC, point) };
   });
-}
-
-function report(label: string, tableNs: number, directNs?: number): void {
-  const direct =
-    directNs === undefined
-      ? ""
-      : `   direct EOS ${(directNs / 1000).toFixed(1).padStart(8)} µs   ratio ${Math.round(directNs / tableNs)
-          .toLocaleString("en")
-          .padStart(8)}×`;
-  console.log(`${label.padEnd(44)} table ${tableNs.toFixed(0).padStart(5)} ns${direct}`);
 }
 
 registerBench("refrigerant properties", () => {
@@ -134,8 +115,8 @@ registerBench("refrigerant properties", () => {
         3,
       );
     }
-    report(`saturationPressure, ${group}`, pressureNs, directPressureNs);
-    report(`saturationTemperature, ${group}`, temperatureNs, directTemperatureNs);
+    reportLookup(`saturationPressure, ${group}`, pressureNs, directPressureNs);
+    reportLookup(`saturationTemperature, ${group}`, temperatureNs, directTemperatureNs);
   }
   console.log("(direct EOS for pseudo-pure blends = evaluating / inverting the published pL, pV equations;");
   console.log(" for multi-fluid blends = a cold-started bubble/dew solve of the mixture model, pressure only)");

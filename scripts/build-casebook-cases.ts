@@ -6,7 +6,8 @@
 import { writeFileSync } from "node:fs";
 import { designCaseInput, type CaseDesign } from "../shared/engine/casebook/design-case-input.ts";
 import { expectedAnswers } from "../shared/engine/casebook/expected-answers.ts";
-import { diagnose } from "../shared/engine/index.ts";
+import { diagnose, measuredCycle } from "../shared/engine/index.ts";
+import { loadSinglePhaseTable } from "../shared/property-tables/load-single-phase-table.ts";
 import { BuiltInCaseFileSchema, BUILT_IN_CASE_FORMAT, type BuiltInCase, type CaseDifficulty, type CaseStory } from "../shared/schemas/casebook.ts";
 import type { Application, ChargeState, DiagnosisInput } from "../shared/schemas/diagnosis.ts";
 
@@ -14,6 +15,8 @@ type Spec = {
   id: string; title: string; difficulty: CaseDifficulty; story: CaseStory; state: ChargeState;
   design: Omit<CaseDesign, "readings" | "pressureResolutionKPa">; readings?: Partial<DiagnosisInput>;
   reasoning: string; safetyTopics?: BuiltInCase["safetyTopics"]; sources: string[];
+  /** Also asks the refrigerating effect and discharge superheat from the pressure–enthalpy diagram (issue 18). */
+  cycle?: true;
 };
 const COMFORT = { returnAirDryBulbC: 26.7, returnAirWetBulbC: 19.4, supplyAirDryBulbC: 15.7, outdoorAirDryBulbC: 35 };
 const WATTLE = "Wattle Lane Clinic, a two-storey community health clinic (Bellbird Mechanical maintenance contract)";
@@ -195,6 +198,19 @@ const SPECS: Spec[] = [
     story: { site: "Ironbark Bowls Club, beer cellar office (invented)", equipment: "Through-wall unit on R22 with a capillary", complaint: "Coil iced up; a cardboard box was found against the return grille.", conditions: "Hot afternoon; running 20 minutes after the box was moved but before the ice cleared." },
     design: d("R22", "capillary", 0, 44, 2, 6), readings: { returnAirDryBulbC: 26.7, returnAirWetBulbC: 19.4, supplyAirDryBulbC: 9.7, outdoorAirDryBulbC: 35, runMinutes: 20 },
     reasoning: "Low superheat with normal subcooling and a wide air split: the coil is short of air (here still iced). Let it defrost and re-read before judging the charge.", sources: ["S21", "S33"] },
+  // ----- Measured-cycle questions (issue 18): read the refrigerating effect and discharge superheat off the diagram
+  { id: "wattle-lane-rtu1-c1-cycle-on-the-chart", title: "Wattle Lane RTU-1, circuit 1: the cycle on the chart", difficulty: "intermediate", state: "normal", cycle: true,
+    story: { site: WATTLE, equipment: `${RTU(1)}; no discharge gauge fitted`, complaint: "Quarterly maintenance; the senior wants the cycle drawn for the service file.", conditions: "Warm afternoon; the unit has run on full cooling for 30 minutes." },
+    design: d("R407C", "txv", 7, 45, 6, 5), readings: { ...RTU_T, returnAirDryBulbC: 24, returnAirWetBulbC: 17, supplyAirDryBulbC: 13, outdoorAirDryBulbC: 33, dischargeLineTempC: 74, compressorAmps: 12.5, compressorRla: 17, runMinutes: 30 },
+    reasoning: "Superheat and subcooling on their targets; on the diagram the liquid enters the evaporator at about a quarter vapour, and the discharge is about 23 K above its dew point: a healthy cycle.", sources: ["S1", "S9", "S26"] },
+  { id: "banksia-dental-txv-cycle-effect", title: "Banksia Street Dental: how much does each kilogram cool?", difficulty: "starter", state: "normal", cycle: true,
+    story: { site: "Banksia Street Dental, a single-storey surgery (invented)", equipment: "Ducted split on R410A with a TXV; nameplate target subcooling 6 K", complaint: "Annual service; the practice asks whether the unit still cools as it did.", conditions: "Warm afternoon; unit running 25 minutes." },
+    design: d("R410A", "txv", 8, 42, 6, 6), readings: { ...COMFORT, dischargeLineTempC: 70, targetSubcoolingK: 6, runMinutes: 25 },
+    reasoning: "Subcooling on the 6 K target with normal superheat: the charge is right. The refrigerating effect is the suction enthalpy minus that of the liquid entering the valve.", sources: ["S1", "S26"] },
+  { id: "wattle-lane-server-split-hot-discharge", title: "Wattle Lane server cupboard split: a hot discharge line", difficulty: "advanced", state: "undercharged", cycle: true,
+    story: { site: WATTLE, equipment: SPLIT, complaint: "The compressor trips on its thermal protector on hot afternoons; the discharge line is too hot to touch.", conditions: "Hot afternoon; test mode for 20 minutes." },
+    design: d("R32", "eev", 3, 40, 16, 1), readings: { returnAirDryBulbC: 25, returnAirWetBulbC: 17.5, supplyAirDryBulbC: 18, outdoorAirDryBulbC: 34, dischargeLineTempC: 112, runMinutes: 20 },
+    reasoning: "Almost no subcooling with high superheat is a shortage; the starved compressor runs hot, and the diagram shows the discharge far above its dew point with a small refrigerating effect per kilogram.", safetyTopics: ["nitrogen"], sources: ["S14", "S21", "S24"] },
 ];
 
 /** What each site's equipment does (the bands the engine judges it by). */
@@ -205,23 +221,28 @@ function applicationOf(spec: Spec): Application {
   return "comfort-cooling";
 }
 
+// The measured-cycle questions need each refrigerant's single-phase table.
+await Promise.all([...new Set(SPECS.filter((spec) => spec.cycle).map((spec) => spec.design.refrigerant))].map((id) => loadSinglePhaseTable(id)));
+
 const cases: BuiltInCase[] = SPECS.map((spec) => {
   const input = designCaseInput({ ...spec.design, pressureResolutionKPa: 1, readings: { application: applicationOf(spec), ...spec.readings } });
   const result = diagnose(input);
   if (result.chargeState !== spec.state) console.error(`!! ${spec.id}: engine says ${result.chargeState}, wanted ${spec.state}`, result.alternatives.slice(0, 2), result.warnings.map((w) => w.code));
-  const expected = expectedAnswers(result);
+  const cycle = spec.cycle ? measuredCycle(input) : undefined;
+  const expected = expectedAnswers(result, cycle);
   const r3 = (v: number | null) => (v === null ? null : Number(v.toFixed(3)));
+  const cycleAnswers = cycle ? { refrigeratingEffectKJPerKg: r3(expected.refrigeratingEffectKJPerKg ?? null), dischargeSuperheatK: r3(expected.dischargeSuperheatK ?? null) } : {};
   return {
     id: spec.id, title: spec.title, difficulty: spec.difficulty, story: spec.story, input, reasoning: spec.reasoning,
     safetyTopics: spec.safetyTopics ?? [],
     design: { evaporatingDewC: spec.design.evaporatingDewC, condensingBubbleC: spec.design.condensingBubbleC },
-    expected: { ...expected, evaporatingTempC: r3(expected.evaporatingTempC), condensingTempC: r3(expected.condensingTempC), superheatK: r3(expected.superheatK), subcoolingK: r3(expected.subcoolingK), targetSuperheatK: r3(expected.targetSuperheatK), targetSubcoolingK: r3(expected.targetSubcoolingK) },
+    expected: { ...expected, evaporatingTempC: r3(expected.evaporatingTempC), condensingTempC: r3(expected.condensingTempC), superheatK: r3(expected.superheatK), subcoolingK: r3(expected.subcoolingK), targetSuperheatK: r3(expected.targetSuperheatK), targetSubcoolingK: r3(expected.targetSubcoolingK), ...cycleAnswers },
     sources: spec.sources,
   };
 });
 const file = BuiltInCaseFileSchema.parse({
   format: BUILT_IN_CASE_FORMAT, version: 1,
-  generatedBy: "Written by intent (design saturation temperatures, superheat, subcooling); pressures from designCaseInput (saturationPressure, 101.325 kPa, rounded to 1 kPa gauge); expected answers from diagnose() via expectedAnswers(), rounded to 0.001. All sites and readings invented.",
+  generatedBy: "Written by intent (design saturation temperatures, superheat, subcooling); pressures from designCaseInput (saturationPressure, 101.325 kPa, rounded to 1 kPa gauge); expected answers from diagnose() via expectedAnswers() (and measuredCycle() for the cases that ask about the cycle), rounded to 0.001. All sites and readings invented.",
   cases,
 });
 writeFileSync("data/casebook/built-in-cases.json", `${JSON.stringify(file, null, 2)}\n`);

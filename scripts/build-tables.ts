@@ -23,10 +23,8 @@ import {
   createFluidModel,
   listReferenceDesignations,
   readReferenceFluid,
-  readReferenceManifest,
-  referencePackExists,
-  referenceRoot,
   repoRoot,
+  requireReferencePack,
   saturationStateAt,
   saturationTemperatureAt,
   SuperancillaryMismatchError,
@@ -490,12 +488,7 @@ function buildBlendTable(blend: BlendModel, generated: string, dataNote: string)
 }
 
 function main(): void {
-  if (!referencePackExists()) {
-    console.error(`Reference equations of state not found at ${referenceRoot}; cannot generate tables.`);
-    process.exit(1);
-  }
-  const manifest = readReferenceManifest();
-  const dataNote = `${manifest.source_repository} commit ${manifest.source_commit} (fluid files via the project's reference pack)`;
+  const dataNote = requireReferencePack();
   const generated = new Date().toISOString().slice(0, 10);
   const outputDirectory = path.join(repoRoot, "data/refrigerants");
   mkdirSync(outputDirectory, { recursive: true });

@@ -136,9 +136,13 @@ export function createHelmholtzEos(file: ReferenceFluidFile): HelmholtzEos {
         if (!(at.dpdrho > 0) || !(next > Math.min(below, above) && next < Math.max(below, above))) {
           next = 0.5 * (below + above);
         }
-        if (Math.abs(next - rho) <= 1e-14 * rho || Math.abs(at.p - p) <= 1e-15 * p) {
-          if (!(pressureAt(next).dpdrho > 0)) throw fail("root is mechanically unstable");
-          return next;
+        // Regression (issue 18): when p(ρ) already hits the target, ρ is the root; the step may
+        // then have fallen back to bisection, whose midpoint is not (it gave a wrong liquid
+        // density whenever the pressure matched exactly, e.g. R32 at 306.096 K and 2308 kPa).
+        const root = Math.abs(at.p - p) <= 1e-15 * p ? rho : Math.abs(next - rho) <= 1e-14 * rho ? next : null;
+        if (root !== null) {
+          if (!(pressureAt(root).dpdrho > 0)) throw fail("root is mechanically unstable");
+          return root;
         }
         rho = next;
       }

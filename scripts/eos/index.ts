@@ -30,5 +30,6 @@ export {
   referencePackExists,
   referenceRoot,
   repoRoot,
+  requireReferencePack,
 } from "./load-reference.ts";
 export type * from "./reference-types.ts";

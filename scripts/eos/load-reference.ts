@@ -30,3 +30,16 @@ export function readReferenceFluid(designation: string): ReferenceFluidFile {
 export function readReferenceManifest(): { source_repository: string; source_commit: string } {
   return JSON.parse(readFileSync(path.join(referenceRoot, "manifest.json"), "utf8"));
 }
+
+/**
+ * For the table generators: stops the process with a plain message when the pack is absent;
+ * otherwise the provenance note every generated table carries (source repository and commit).
+ */
+export function requireReferencePack(): string {
+  if (!referencePackExists()) {
+    console.error(`Reference equations of state not found at ${referenceRoot}; cannot generate tables.`);
+    process.exit(1);
+  }
+  const manifest = readReferenceManifest();
+  return `${manifest.source_repository} commit ${manifest.source_commit} (fluid files via the project's reference pack)`;
+}

@@ -5,6 +5,7 @@ import { diagnose, expectedAnswers, generateCase, seededRandom } from "@shared/e
 import {
   CaseDraftSchema,
   CaseFromReadingSchema,
+  cycleQuestionsOf,
   GenerateCaseSchema,
   canCasebook,
   generatedCaseId,
@@ -49,6 +50,7 @@ function toCase(record: CaseRecord, showAnswers: boolean): Case {
     reasoning: showAnswers ? record.reasoning : null,
     safetyTopics: record.safetyTopics,
     expected: showAnswers ? record.expected : null,
+    cycleQuestions: cycleQuestionsOf(record.expected),
     authorName: record.authorName,
     fromReading: record.fromReading,
     editable: showAnswers && record.source === "organisation",

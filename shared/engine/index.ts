@@ -21,6 +21,21 @@ export {
   STANDARD_ATMOSPHERE_KPA,
 } from "./properties/property-tolerances.ts";
 export { relativeDifference } from "./properties/relative-difference.ts";
+// Single-phase states (superheated vapour, subcooled liquid): tables loaded per refrigerant
+export { registerSinglePhaseTable } from "./properties/single-phase-registry.ts";
+export type { SinglePhase } from "./properties/single-phase-registry.ts";
+export { isSinglePhaseTableLoaded } from "./properties/is-single-phase-table-loaded.ts";
+export { singlePhaseState } from "./properties/single-phase-state.ts";
+export type { SinglePhaseState } from "./properties/single-phase-state.ts";
+export { singlePhaseStateFromEnthalpy } from "./properties/single-phase-state-from-enthalpy.ts";
+export { singlePhaseStateFromEntropy } from "./properties/single-phase-state-from-entropy.ts";
+export { SinglePhaseTableSchema, SINGLE_PHASE_TABLE_FORMAT } from "./properties/single-phase-table-schema.ts";
+export type { SinglePhaseTable } from "./properties/single-phase-table-schema.ts";
+export { SINGLE_PHASE_TOLERANCES } from "./properties/property-tolerances.ts";
+export { saturatedPhasesAtPressure } from "./properties/saturated-phases-at-pressure.ts";
+export type { SaturatedPhases } from "./properties/saturated-phases-at-pressure.ts";
+export { twoPhaseStateFromEnthalpy } from "./properties/two-phase-state-from-enthalpy.ts";
+export type { TwoPhaseState } from "./properties/two-phase-state-from-enthalpy.ts";
 
 // Units for display (convert-units inside; SI-metric in the engine)
 export { gaugeToAbsolute } from "./units/gauge-to-absolute.ts";
@@ -34,6 +49,24 @@ export { convertTemperatureDifference } from "./units/convert-temperature-differ
 export { pressureToDisplay } from "./units/pressure-to-display.ts";
 export type { PressureScale } from "./units/pressure-to-display.ts";
 export { pressureFromDisplay } from "./units/pressure-from-display.ts";
+
+// The measured cycle (states on the pressure–enthalpy diagram, compressor and coil figures)
+export { measuredCycle } from "./cycle/measured-cycle.ts";
+export type {
+  AirSideFigures,
+  CycleFigure,
+  CycleNote,
+  CycleState,
+  CycleStatePoint,
+  MeasuredCycle,
+  MeasuredCycleExtras,
+} from "./cycle/measured-cycle.ts";
+export { electricalInputPower } from "./cycle/electrical-input-power.ts";
+export { moistAirState } from "./cycle/moist-air-state.ts";
+export type { MoistAirState } from "./cycle/moist-air-state.ts";
+export { airSideCapacity } from "./cycle/air-side-capacity.ts";
+export type { AirSideCapacity } from "./cycle/air-side-capacity.ts";
+export * as cycleLimits from "./cycle/cycle-limits.ts";
 
 // Charge diagnosis (superheat, subcooling, targets, findings)
 export { diagnose, MIN_VERDICT_SCORE, MIN_VERDICT_SCORE_WITHOUT_CHARGE_SIGNAL } from "./diagnosis/diagnose.ts";

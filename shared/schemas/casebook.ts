@@ -33,6 +33,12 @@ import { text } from "./text.ts";
 
 /** An answered temperature or difference counts as right within this many kelvin (issue 7). */
 export const ANSWER_TOLERANCE_K = 0.5;
+/**
+ * A refrigerating effect read off a pressure–enthalpy diagram counts as right within this many
+ * kJ/kg: about half a minor division of a printed chart's enthalpy scale, or 2–3 % of a typical
+ * effect (common practice for chart reading; issue 18).
+ */
+export const REFRIGERATING_EFFECT_TOLERANCE_KJ_PER_KG = 5;
 export const CASE_TITLE_MAX_LENGTH = 120;
 export const STORY_FIELD_MAX_LENGTH = 600;
 export const REASONING_MAX_LENGTH = 300;
@@ -110,8 +116,24 @@ export const CaseExpectedSchema = z.object({
   targetSuperheatK: z.number().nullable(),
   targetSubcoolingK: z.number().nullable(),
   warnings: z.array(WarningCodeSchema),
+  /**
+   * Measured-cycle questions (issue 18), present only when the case asks them, from
+   * measuredCycle(): h₁ − h₄ in kJ/kg, and the discharge line temperature minus the dew point at
+   * the discharge pressure in K. Null when the readings cannot give it.
+   */
+  refrigeratingEffectKJPerKg: z.number().nullable().optional(),
+  dischargeSuperheatK: z.number().nullable().optional(),
 });
 export type CaseExpected = z.infer<typeof CaseExpectedSchema>;
+
+/** Questions about the measured cycle a case may add to the usual five (read off the pressure–enthalpy diagram). */
+export const CYCLE_ANSWER_FIELDS = ["refrigeratingEffectKJPerKg", "dischargeSuperheatK"] as const;
+export type CycleAnswerField = (typeof CYCLE_ANSWER_FIELDS)[number];
+
+/** The cycle questions a case asks: those its expected answers carry. */
+export function cycleQuestionsOf(expected: CaseExpected): CycleAnswerField[] {
+  return CYCLE_ANSWER_FIELDS.filter((field) => expected[field] !== undefined);
+}
 
 /** The saturation temperatures a case's pressures were derived from, °C (reproducibility). */
 export const CaseDesignSchema = z.object({
@@ -252,6 +274,8 @@ export const CaseSchema = z.object({
   reasoning: z.string().nullable(),
   safetyTopics: z.array(CaseSafetyTopicSchema),
   expected: CaseExpectedSchema.nullable(),
+  /** Measured-cycle questions the attempt form adds (shown to everyone; the answers stay hidden). */
+  cycleQuestions: z.array(z.enum(CYCLE_ANSWER_FIELDS)).default([]),
   /** Organisation cases: who wrote it and whether it came from a real reading. */
   authorName: z.string().nullable(),
   fromReading: z.boolean(),
@@ -295,6 +319,14 @@ export const AttemptAnswersSchema = z.object({
   condensingTempC: answerNumber("Condensing temperature").nullable(),
   superheatK: answerNumber("Superheat").nullable(),
   subcoolingK: answerNumber("Subcooling").nullable(),
+  /** Cycle questions, only for cases that ask them (kJ/kg and K); absent or null = left blank. */
+  refrigeratingEffectKJPerKg: z
+    .number({ error: "Refrigerating effect must be a number" })
+    .min(0, "Refrigerating effect is out of range")
+    .max(3000, "Refrigerating effect is out of range")
+    .nullable()
+    .optional(),
+  dischargeSuperheatK: answerNumber("Discharge superheat").nullable().optional(),
   chargeState: ChargeStateSchema,
   // Single-line text: a pasted paragraph would not be "one line of reasoning".
   reasoning: text({ error: "Write one line of reasoning" })
@@ -316,13 +348,15 @@ export const ANSWER_FIELDS = [
 export type AnswerField = (typeof ANSWER_FIELDS)[number];
 
 export const AnswerMarkSchema = z.object({
-  field: z.enum(ANSWER_FIELDS),
+  field: z.enum([...ANSWER_FIELDS, ...CYCLE_ANSWER_FIELDS]),
   /** Number (°C or K) or charge state; null = no valid value. */
   expected: z.union([z.number(), ChargeStateSchema]).nullable(),
   given: z.union([z.number(), ChargeStateSchema]).nullable(),
   correct: z.boolean(),
   /** given − expected, K, for numeric answers that both exist. */
   differenceK: z.number().nullable(),
+  /** given − expected, kJ/kg, for the refrigerating effect. */
+  differenceKJPerKg: z.number().nullable().optional(),
 });
 export type AnswerMark = z.infer<typeof AnswerMarkSchema>;
 
@@ -332,6 +366,8 @@ export const AttemptScoreSchema = z.object({
   total: z.number().int(),
   allCorrect: z.boolean(),
   toleranceK: z.number(),
+  /** Present when a refrigerating effect was marked. */
+  toleranceKJPerKg: z.number().optional(),
 });
 export type AttemptScore = z.infer<typeof AttemptScoreSchema>;
 

@@ -12,6 +12,7 @@ import { AttemptForm } from "@/features/casebook/components/attempt-form.tsx";
 import { AttemptResult } from "@/features/casebook/components/attempt-result.tsx";
 import { CaseStory } from "@/features/casebook/components/case-story.tsx";
 import { WorkedSteps } from "@/features/casebook/components/worked-steps.tsx";
+import { MeasuredCyclePanel } from "@/features/run-log/components/measured-cycle-panel.tsx";
 import { useMe } from "@/lib/api/auth.ts";
 import { useCase, useCreateAttempt, usePublishCase } from "@/lib/api/casebook.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
@@ -97,6 +98,10 @@ export default function CasebookCaseRoute() {
         <CaseStory item={data} units={units} atmosphericKPa={atmosphericKPa} />
       </PanelBoundary>
 
+      {data.cycleQuestions.length > 0 && (
+        <MeasuredCyclePanel mode={result ? "report" : "quiz"} input={data.input} previousInput={null} units={units} />
+      )}
+
       {result ? (
         <>
           <AttemptResult attempt={result} units={units} />
@@ -111,6 +116,7 @@ export default function CasebookCaseRoute() {
           pending={attempt.isPending}
           serverError={attempt.isError ? attempt.error.message : null}
           onSubmit={(answers) => attempt.mutate({ caseId: data.id, answers }, { onSuccess: setResult })}
+          cycleQuestions={data.cycleQuestions}
         />
       )}
     </div>

@@ -15,6 +15,7 @@ import { RefrigerantReport } from "@/features/register/components/refrigerant-re
 import { ReadingsTable } from "@/features/report/components/readings-table.tsx";
 import { SendReportForm } from "@/features/report/components/send-report-form.tsx";
 import { FindingPanel } from "@/features/run-log/components/finding-panel.tsx";
+import { MeasuredCyclePanel } from "@/features/run-log/components/measured-cycle-panel.tsx";
 import { TrendChart } from "@/features/run-log/components/trend-chart.tsx";
 import { circuitSeries } from "@/features/run-log/utils/circuit-series.ts";
 import { useMe } from "@/lib/api/auth.ts";
@@ -112,6 +113,7 @@ export default function VisitReportRoute() {
                 <span className="num">{formatNumber(last.result.atmosphericPressureKPa, 1)} kPa</span> atmosphere.
               </p>
             )}
+            {last && <MeasuredCyclePanel mode="report" input={last.input} previousInput={series.readings.at(-2)?.input ?? null} units={units} width={PRINT_CHART_WIDTH} />}
             {last && <FindingPanel result={last.result} expanded />}
           </section>
         );

@@ -372,9 +372,12 @@ export function createMixtureModel(
         if (!(state.dpdrho > 0) || !(next > Math.min(below, above) && next < Math.max(below, above))) {
           next = 0.5 * (below + above);
         }
-        if (Math.abs(next - rho) <= 1e-14 * rho || Math.abs(state.p - p) <= 1e-15 * p) {
-          if (!(at(next).dpdrho > 0)) throw fail("root is mechanically unstable");
-          return next;
+        // Regression (issue 18): an exact pressure match means ρ is the root, not the bisection
+        // midpoint the step may have fallen back to (see helmholtz-eos.ts).
+        const root = Math.abs(state.p - p) <= 1e-15 * p ? rho : Math.abs(next - rho) <= 1e-14 * rho ? next : null;
+        if (root !== null) {
+          if (!(at(root).dpdrho > 0)) throw fail("root is mechanically unstable");
+          return root;
         }
         rho = next;
       }

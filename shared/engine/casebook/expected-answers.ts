@@ -1,5 +1,6 @@
 import type { CaseExpected } from "../../schemas/casebook.ts";
 import type { DiagnosisResult } from "../../schemas/diagnosis.ts";
+import type { MeasuredCycle } from "../cycle/measured-cycle.ts";
 
 /**
  * Expected answers of a worked case, taken from the engine's diagnosis of its readings: dew
@@ -10,11 +11,14 @@ import type { DiagnosisResult } from "../../schemas/diagnosis.ts";
  * Units: °C for saturation temperatures, K for differences. Range: any `diagnose()` result.
  * Source: TRADE.md §1.1 (dew for superheat, bubble for subcooling [S1][S2][S3]).
  *
+ * With the case's measured cycle (a case that asks about the cycle, issue 18) the answers also
+ * carry its refrigerating effect (kJ/kg) and discharge superheat (K), from measuredCycle().
+ *
  * @throws never
  * @example expectedAnswers(diagnose(input)).chargeState // "undercharged"
  */
-export function expectedAnswers(result: DiagnosisResult): CaseExpected {
-  return {
+export function expectedAnswers(result: DiagnosisResult, cycle?: MeasuredCycle): CaseExpected {
+  const answers: CaseExpected = {
     evaporatingTempC: result.evaporatingTempC,
     condensingTempC: result.condensingTempC,
     superheatK: result.superheatK,
@@ -24,4 +28,9 @@ export function expectedAnswers(result: DiagnosisResult): CaseExpected {
     targetSubcoolingK: result.targets.subcooling?.targetK ?? null,
     warnings: result.warnings.map((warning) => warning.code),
   };
+  if (cycle) {
+    answers.refrigeratingEffectKJPerKg = cycle.refrigeratingEffectKJPerKg;
+    answers.dischargeSuperheatK = cycle.dischargeSuperheatK;
+  }
+  return answers;
 }

@@ -1,6 +1,8 @@
 import {
   ANSWER_FIELDS,
   ANSWER_TOLERANCE_K,
+  cycleQuestionsOf,
+  REFRIGERATING_EFFECT_TOLERANCE_KJ_PER_KG,
   type AnswerMark,
   type AttemptAnswers,
   type AttemptScore,
@@ -17,6 +19,10 @@ import {
  * Units: answers and expected values SI-metric (°C, K); convert display units first. The
  * tolerance is in kelvin whatever the display unit (0.5 K = 0.9 °F). Source: issue 7 (±0.5 K);
  * about one gauge graduation's worth of saturation temperature (common practice).
+ *
+ * A case that asks measured-cycle questions (issue 18; its expected answers carry them) adds a
+ * mark for each: the refrigerating effect right within ±5 kJ/kg (read off a pressure–enthalpy
+ * diagram), the discharge superheat within ±0.5 K. Cases without them score as before.
  *
  * @throws never
  * @example scoreAttempt(expected, { ...answers, superheatK: expected.superheatK! + 0.4 }).marks[2].correct // true
@@ -44,6 +50,33 @@ export function scoreAttempt(
     // A hair of slack so that a displayed value rounded to 0.1 on the boundary still counts.
     return { field, expected: want, given, correct: Math.abs(differenceK) <= toleranceK + 1e-9, differenceK };
   });
+  const asked = cycleQuestionsOf(expected);
+  for (const field of asked) {
+    const want = expected[field] ?? null;
+    const given = answers[field] ?? null;
+    const energy = field === "refrigeratingEffectKJPerKg";
+    if (want === null || given === null) {
+      marks.push({ field, expected: want, given, correct: want === given, differenceK: null, ...(energy ? { differenceKJPerKg: null } : {}) });
+      continue;
+    }
+    const difference = given - want;
+    const tolerance = energy ? REFRIGERATING_EFFECT_TOLERANCE_KJ_PER_KG : toleranceK;
+    marks.push({
+      field,
+      expected: want,
+      given,
+      correct: Math.abs(difference) <= tolerance + 1e-9,
+      differenceK: energy ? null : difference,
+      ...(energy ? { differenceKJPerKg: difference } : {}),
+    });
+  }
   const correctCount = marks.filter((mark) => mark.correct).length;
-  return { marks, correctCount, total: marks.length, allCorrect: correctCount === marks.length, toleranceK };
+  return {
+    marks,
+    correctCount,
+    total: marks.length,
+    allCorrect: correctCount === marks.length,
+    toleranceK,
+    ...(asked.includes("refrigeratingEffectKJPerKg") ? { toleranceKJPerKg: REFRIGERATING_EFFECT_TOLERANCE_KJ_PER_KG } : {}),
+  };
 }

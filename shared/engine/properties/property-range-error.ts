@@ -10,7 +10,16 @@
  *   }
  */
 export type PropertyErrorCode =
-  "UNKNOWN_REFRIGERANT" | "NOT_FINITE" | "BELOW_RANGE" | "ABOVE_RANGE" | "INVALID_POINT" | "INVALID_TABLE";
+  | "UNKNOWN_REFRIGERANT"
+  | "NOT_FINITE"
+  | "BELOW_RANGE"
+  | "ABOVE_RANGE"
+  | "INVALID_POINT"
+  | "INVALID_TABLE"
+  /** single-phase lookups: the state lies between the bubble and dew curves */
+  | "INSIDE_DOME"
+  /** single-phase lookups: the refrigerant's single-phase table has not been registered */
+  | "TABLE_NOT_LOADED";
 
 export class PropertyRangeError extends Error {
   readonly code: PropertyErrorCode;

@@ -6,22 +6,14 @@
 import { describe, expect, it } from "vitest";
 import {
   getRefrigerant,
-  PropertyRangeError,
   saturatedState,
   saturationPressure,
   saturationTemperature,
   type SaturationPoint,
 } from "@shared/engine/index.ts";
+import { thrownPropertyError } from "./thrown-property-error.ts";
 
-function thrown(run: () => unknown): PropertyRangeError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof PropertyRangeError) return error;
-    throw error;
-  }
-  throw new Error("expected a PropertyRangeError");
-}
+const thrown = thrownPropertyError;
 
 describe("property lookup errors", () => {
   it("rejects a temperature below the table in words a technician reads", () => {

@@ -1,10 +1,15 @@
 import { useId, useState, type FormEvent } from "react";
 import { chargeStateText } from "@shared/content/charge-states.ts";
-import { AttemptAnswersSchema, REASONING_MAX_LENGTH, type AttemptAnswers } from "@shared/schemas/casebook.ts";
+import {
+  AttemptAnswersSchema,
+  REASONING_MAX_LENGTH,
+  type AttemptAnswers,
+  type CycleAnswerField,
+} from "@shared/schemas/casebook.ts";
 import { CHARGE_STATES } from "@shared/schemas/diagnosis.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
-import { NumberInput } from "@/components/ui/field/number-input.tsx";
+import { NumberInput, parseDecimal } from "@/components/ui/field/number-input.tsx";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { parseQuantity, unitLabel, type Quantity } from "../utils/quantities.ts";
 
@@ -30,12 +35,20 @@ const NUMBER_FIELDS: {
   { field: "subcoolingK", label: "Subcooling", hint: "Leave blank if it cannot be worked out", quantity: "difference" },
 ];
 
-type Draft = Record<(typeof NUMBER_FIELDS)[number]["field"], string> & { chargeState: string; reasoning: string };
+/** Measured-cycle questions (issue 18), shown only for cases that ask them; read off the pressure–enthalpy diagram. */
+const CYCLE_FIELDS: Record<CycleAnswerField, { label: string; hint: string; quantity: "energy" | "difference" }> = {
+  refrigeratingEffectKJPerKg: { label: "Refrigerating effect (h₁ − h₄)", hint: "From the diagram: suction enthalpy minus the liquid's", quantity: "energy" },
+  dischargeSuperheatK: { label: "Discharge superheat", hint: "Discharge line minus the dew point at the discharge pressure", quantity: "difference" },
+};
+
+type Draft = Record<(typeof NUMBER_FIELDS)[number]["field"] | CycleAnswerField, string> & { chargeState: string; reasoning: string };
 const EMPTY: Draft = {
   evaporatingTempC: "",
   condensingTempC: "",
   superheatK: "",
   subcoolingK: "",
+  refrigeratingEffectKJPerKg: "",
+  dischargeSuperheatK: "",
   chargeState: "",
   reasoning: "",
 };
@@ -91,12 +104,15 @@ export function AttemptForm({
   pending,
   serverError,
   onSubmit,
+  cycleQuestions = [],
 }: {
   units: DisplayUnits;
   atmosphericKPa: number;
   pending: boolean;
   serverError: string | null;
   onSubmit: (answers: AttemptAnswers) => void;
+  /** The case's measured-cycle questions, if any. */
+  cycleQuestions?: readonly CycleAnswerField[];
 }) {
   const [draft, setDraft] = useState<Draft>(EMPTY);
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -109,6 +125,12 @@ export function AttemptForm({
     for (const { field, label, quantity } of NUMBER_FIELDS) {
       const parsed = parseQuantity(draft[field], quantity, units, atmosphericKPa);
       if (parsed === "invalid") found[field] = `${label} must be a number, e.g. 4.5`;
+      numbers[field] = parsed === "invalid" || parsed === undefined ? null : parsed;
+    }
+    for (const field of cycleQuestions) {
+      const { label, quantity } = CYCLE_FIELDS[field];
+      const parsed = quantity === "energy" ? parseDecimal(draft[field]) : parseQuantity(draft[field], quantity, units, atmosphericKPa);
+      if (parsed === "invalid") found[field] = `${label} must be a number, e.g. 165`;
       numbers[field] = parsed === "invalid" || parsed === undefined ? null : parsed;
     }
     if (!draft.evaporatingTempC.trim()) found.evaporatingTempC ??= "Work out the evaporating temperature";
@@ -138,7 +160,8 @@ export function AttemptForm({
         Your working
       </h2>
       <p className="text-muted">
-        Answers count as right within ±0.5 K ({units.temperature === "F" ? "±0.9 °F" : "half a kelvin"}).
+        Answers count as right within ±0.5 K ({units.temperature === "F" ? "±0.9 °F" : "half a kelvin"})
+        {cycleQuestions.includes("refrigeratingEffectKJPerKg") ? ", the refrigerating effect within ±5 kJ/kg" : ""}.
       </p>
       <div className="grid gap-4 sm:grid-cols-2">
         {NUMBER_FIELDS.map(({ field, label, hint, quantity }) => (
@@ -147,6 +170,17 @@ export function AttemptForm({
             label={label}
             hint={hint}
             unit={unitLabel(quantity, units)}
+            value={draft[field]}
+            error={errors[field]}
+            onChange={set(field)}
+          />
+        ))}
+        {cycleQuestions.map((field) => (
+          <NumberAnswer
+            key={field}
+            label={CYCLE_FIELDS[field].label}
+            hint={CYCLE_FIELDS[field].hint}
+            unit={CYCLE_FIELDS[field].quantity === "energy" ? "kJ/kg" : unitLabel("difference", units)}
             value={draft[field]}
             error={errors[field]}
             onChange={set(field)}

@@ -1,30 +1,37 @@
 import { CircleCheck, CircleX } from "lucide-react";
 import { chargeStateText } from "@shared/content/charge-states.ts";
-import type { AnswerField, Attempt } from "@shared/schemas/casebook.ts";
+import type { AnswerMark, Attempt } from "@shared/schemas/casebook.ts";
 import type { ChargeState } from "@shared/schemas/diagnosis.ts";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { cn } from "@/lib/cn.ts";
-import type { DisplayUnits } from "@/lib/units/display-units.ts";
+import { formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { withUnit, type Quantity } from "../utils/quantities.ts";
 import { WorkedSteps } from "./worked-steps.tsx";
 
-const FIELD_LABELS: Record<AnswerField, { label: string; quantity: Quantity | null }> = {
+/** "energy": a specific enthalpy difference, kJ/kg in every unit system. */
+const FIELD_LABELS: Record<AnswerMark["field"], { label: string; quantity: Quantity | "energy" | null }> = {
   evaporatingTempC: { label: "Evaporating temperature", quantity: "temperature" },
   condensingTempC: { label: "Condensing temperature", quantity: "temperature" },
   superheatK: { label: "Superheat", quantity: "difference" },
   subcoolingK: { label: "Subcooling", quantity: "difference" },
   chargeState: { label: "Charge state", quantity: null },
+  refrigeratingEffectKJPerKg: { label: "Refrigerating effect", quantity: "energy" },
+  dischargeSuperheatK: { label: "Discharge superheat", quantity: "difference" },
 };
 
 /** Which answers were right, the working step by step, and the safety notes that apply. */
 export function AttemptResult({ attempt, units }: { attempt: Attempt; units: DisplayUnits }) {
   const { score } = attempt;
-  const show = (value: number | string | null, quantity: Quantity | null) =>
+  const show = (value: number | string | null, quantity: Quantity | "energy" | null) =>
     quantity === null
       ? value === null
         ? "none"
         : chargeStateText[value as ChargeState].title
-      : withUnit(value as number | null, quantity, units, 0);
+      : quantity === "energy"
+        ? value === null
+          ? "none"
+          : `${formatNumber(value as number, 1)} kJ/kg`
+        : withUnit(value as number | null, quantity, units, 0);
   return (
     <div className="space-y-5">
       <section
@@ -59,6 +66,7 @@ export function AttemptResult({ attempt, units }: { attempt: Attempt; units: Dis
                     {!mark.correct && mark.differenceK !== null && (
                       <> · off by {withUnit(Math.abs(mark.differenceK), "difference", units, 0)}</>
                     )}
+                    {!mark.correct && mark.differenceKJPerKg != null && <> · off by {formatNumber(Math.abs(mark.differenceKJPerKg), 1)} kJ/kg</>}
                   </p>
                 </div>
               </li>

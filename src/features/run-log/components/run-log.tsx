@@ -17,6 +17,7 @@ import { runMinutesAt, runTimeBase } from "../utils/run-time-base.ts";
 import { AdjustmentForm } from "./adjustment-form.tsx";
 import { CsvImport } from "./csv-import.tsx";
 import { FindingPanel } from "./finding-panel.tsx";
+import { MeasuredCyclePanel } from "./measured-cycle-panel.tsx";
 import { ReadingCards } from "./reading-cards.tsx";
 import { SettledIndicator } from "./settled-indicator.tsx";
 import { TimelineStrip } from "./timeline-strip.tsx";
@@ -149,6 +150,13 @@ onSuctionLocation={setSuctionLocation}           draft={effectiveDraft}
           <p className="text-muted">You can read this visit; recording is for technicians, seniors and owners.</p>
         )}
       </form>
+
+      <MeasuredCyclePanel
+        mode="run-log"
+        input={live.kind === "ready" ? live.input : (series.readings.at(-1)?.input ?? null)}
+        previousInput={(live.kind === "ready" ? series.readings.at(-1) : series.readings.at(-2))?.input ?? null}
+        units={units}
+      />
 
       <section aria-labelledby={`timeline-${circuit}`} className="space-y-2">
         <div className="flex flex-wrap items-center justify-between gap-2">
