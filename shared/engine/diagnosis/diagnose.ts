@@ -153,21 +153,22 @@ export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
     }
     // The headline's signature first, then the evidence that supports it most.
     const state = verdict.state;
-    const weights = new Float64Array(findings.length);
-    const order: number[] = [];
+    // Insertion sort by weight for the verdict, strongest first, stable: a dozen findings, and
+    // no typed arrays or comparator closures to allocate (performance).
+    const weights: number[] = [];
     for (let index = 0; index < findings.length; index += 1) {
-      weights[index] = evidenceWeight(findings[index]!, state);
-      order.push(index);
+      const finding = findings[index]!;
+      const weight = evidenceWeight(finding, state);
+      let position = index;
+      while (position > 0 && weights[position - 1]! < weight) {
+        weights[position] = weights[position - 1]!;
+        findings[position] = findings[position - 1]!;
+        position -= 1;
+      }
+      weights[position] = weight;
+      findings[position] = finding;
     }
-    order.sort((first, second) => weights[second]! - weights[first]! || first - second);
-    const sorted: Finding[] = [];
-    const sortedWeights = new Float64Array(order.length);
-    for (let index = 0; index < order.length; index += 1) {
-      sorted.push(findings[order[index]!]!);
-      sortedWeights[index] = weights[order[index]!]!;
-    }
-    findings.length = 0;
-    findings.push(summarizeVerdict(state, sorted, sortedWeights), ...sorted);
+    findings.unshift(summarizeVerdict(state, findings, weights));
   }
 
   return {
