@@ -171,10 +171,10 @@ const SPECS: CaseSpec[] = [
     expected: { chargeState: "overcharged", warnings: ["low-superheat-floodback"] },
     why: "Superheat well under the 6.6 K capillary target with high subcooling and head, and the liquid leaves only 5 K above the outdoor air: a condenser stacked with liquid.", sources: ["S10", "S21", "S23"] },
   { id: "overcharged-r407c-txv", title: "R407C rooftop circuit overcharged", refrigerant: "R407C", meteringDevice: "txv",
-    evaporatingDewC: 8, condensingBubbleC: 51, superheatK: 5, subcoolingK: 12,
+    evaporatingDewC: 8, condensingBubbleC: 48, superheatK: 5, subcoolingK: 12,
     readings: { returnAirDryBulbC: 26, supplyAirDryBulbC: 15.5, outdoorAirDryBulbC: 33, targetSubcoolingK: 5, runMinutes: 30 },
     expected: { chargeState: "overcharged" },
-    why: "Subcooling from the bubble point is 12 K against a 5 K target; head pressure is high and superheat held by the valve.", sources: ["S21", "S23"] },
+    why: "Subcooling from the bubble point is 12 K against a 5 K target and the liquid leaves only 3 K above the outdoor air: the condenser is stacked with liquid; head is high and superheat held by the valve.", sources: ["S21", "S23"] },
 
   // ---------------------------------------------------------------- restricted metering / liquid line
   { id: "restricted-r410a-txv", title: "R410A TXV split with a blocked filter drier", refrigerant: "R410A", meteringDevice: "txv",

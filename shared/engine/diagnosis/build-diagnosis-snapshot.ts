@@ -64,29 +64,20 @@ function saturationOrExclusion(refrigerant: string, field: string, pressureKPaAb
   }
 }
 
-/** Approach bands already built, by condensing band and subcooling target (performance). */
-const approachBands = new WeakMap<object, Map<number, TargetBand>>();
-
-/** Expected liquid line − outdoor air: condensing over ambient minus subcooling (TRADE.md §3 [S26]). */
-function approachTarget(condensing: { lowK: number; highK: number }, subcoolingTargetK: number): TargetBand {
-  let bySubcooling = approachBands.get(condensing);
-  if (!bySubcooling) {
-    bySubcooling = new Map();
-    approachBands.set(condensing, bySubcooling);
-  }
-  let band = bySubcooling.get(subcoolingTargetK);
-  if (!band) {
-    const expected = (condensing.lowK + condensing.highK) / 2 - subcoolingTargetK;
-    band = Object.freeze({
-      targetK: expected,
-      lowK: expected - CONDENSER_APPROACH_TOLERANCE_K,
-      highK: expected + CONDENSER_APPROACH_TOLERANCE_K,
-      basis: "formula" as const,
-      source: CONDENSER_APPROACH_SOURCE,
-    });
-    if (bySubcooling.size < 1000) bySubcooling.set(subcoolingTargetK, band);
-  }
-  return band;
+/**
+ * Expected liquid line − outdoor air: condensing over ambient minus subcooling (TRADE.md §3
+ * [S26]). For a blend the liquid leaves from the bubble point, half the condensing glide below
+ * the mid-glide temperature the condensing band is read with, so half the glide comes off too.
+ */
+function approachTarget(condensing: { lowK: number; highK: number }, subcoolingTargetK: number, condenserGlideK: number | null): TargetBand {
+  const expected = (condensing.lowK + condensing.highK) / 2 - (condenserGlideK ?? 0) / 2 - subcoolingTargetK;
+  return {
+    targetK: expected,
+    lowK: expected - CONDENSER_APPROACH_TOLERANCE_K,
+    highK: expected + CONDENSER_APPROACH_TOLERANCE_K,
+    basis: "formula",
+    source: CONDENSER_APPROACH_SOURCE,
+  };
 }
 
 /** The expected air (or fluid) split: psychrometric for comfort coils with a wet bulb, else the application's band. */
@@ -274,7 +265,7 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
     superheatTargetNote: superheatChoice.note,
     subcoolingTarget,
     subcoolingPivotK: subcoolingTarget.targetK - SUBCOOLING_PIVOT_BELOW_TARGET_K,
-    condenserApproachTarget: approachTarget(limits.condensingOverAmbient, subcoolingTarget.targetK),
+    condenserApproachTarget: approachTarget(limits.condensingOverAmbient, subcoolingTarget.targetK, difference(condensingDewTempC, condensingTempC)),
     temperatureSplitTarget: splitTarget(application, input.returnAirDryBulbC, returnAirWetBulbC, atmosphericPressureKPa),
     returnAirWetBulbC,
     wetBulbBasis,
