@@ -77,6 +77,15 @@ export const FULL_STRENGTH_DEVIATION_K = 2.8;
 
 // ---- Per application (TRADE.md §1.3, §3) -------------------------------------------------------
 
+/** Frozen all the way down: the bands are shared by every diagnosis and must never change. */
+function deepFreeze<T>(value: T): T {
+  if (value && typeof value === "object" && !Object.isFrozen(value)) {
+    for (const inner of Object.values(value)) deepFreeze(inner);
+    Object.freeze(value);
+  }
+  return value;
+}
+
 /**
  * Half-width of the condenser approach band around its expected value, K. Approach =
  * condensing over ambient − subcooling (TRADE.md §3 [S26]); ±3 K covers the spread of condenser
@@ -144,7 +153,7 @@ const REFRIGERATION_CONDENSER = {
 } as const;
 
 /** Bands by application; sources per band. */
-export const APPLICATION_LIMITS: Record<Application, ApplicationLimits> = {
+export const APPLICATION_LIMITS: Readonly<Record<Application, ApplicationLimits>> = deepFreeze({
   "comfort-cooling": COMFORT,
   // Heat pumps are judged in cooling mode, where their charge is checked (makers' charging
   // tables are for cooling; in heating mode weigh in) (common practice).
@@ -182,7 +191,7 @@ export const APPLICATION_LIMITS: Record<Application, ApplicationLimits> = {
     returnRangeC: { min: -15, max: 30 },
     fixedOrificeChart: false,
   },
-};
+});
 
 /**
  * Refrigerants with a high heat of compression run hotter discharge lines than R410A at the same

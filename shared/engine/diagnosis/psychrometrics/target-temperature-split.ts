@@ -7,6 +7,19 @@ const RETURN_DRY_BULB_RANGE_C = { min: 18, max: 35 } as const;
 const DRY_AIR_CP = 1.006;
 const VAPOUR_CP = 1.86;
 
+/** Apparatus dew point's humidity ratio and enthalpy by atmospheric pressure: a handful of sites, computed once each (performance). */
+const dewPointByPressure = new Map<number, { ratio: number; enthalpyKJPerKg: number }>();
+
+function apparatusDewPoint(pressurePa: number): { ratio: number; enthalpyKJPerKg: number } {
+  let point = dewPointByPressure.get(pressurePa);
+  if (!point) {
+    const ratio = psychrolib.GetSatHumRatio(SPLIT_TARGET_MODEL.apparatusDewPointC, pressurePa) as number;
+    point = { ratio, enthalpyKJPerKg: (psychrolib.GetMoistAirEnthalpy(SPLIT_TARGET_MODEL.apparatusDewPointC, ratio) as number) / 1000 };
+    if (dewPointByPressure.size < 1000) dewPointByPressure.set(pressurePa, point);
+  }
+  return point;
+}
+
 /**
  * Target air temperature split (return dry bulb − supply dry bulb) of a comfort-cooling coil,
  * from the return air's dry and wet bulb: the split a healthy coil gives when it removes its
@@ -35,7 +48,7 @@ export function targetTemperatureSplit(returnDryBulbC: number, returnWetBulbC: n
   psychrolib.SetUnitSystem(psychrolib.SI);
   const pressurePa = atmosphericPressureKPa * 1000;
   const returnRatio = psychrolib.GetHumRatioFromTWetBulb(returnDryBulbC, returnWetBulbC, pressurePa) as number;
-  const dewPointRatio = psychrolib.GetSatHumRatio(model.apparatusDewPointC, pressurePa) as number;
+  const { ratio: dewPointRatio, enthalpyKJPerKg: dewPointEnthalpy } = apparatusDewPoint(pressurePa);
   const nominalDropKJPerKg = 1 / ((model.airflowLitresPerSecondPerKW / 1000) * model.airDensityKgPerM3);
   const temperatureSpan = returnDryBulbC - model.apparatusDewPointC;
   let fraction: number;
@@ -43,7 +56,6 @@ export function targetTemperatureSplit(returnDryBulbC: number, returnWetBulbC: n
     fraction = nominalDropKJPerKg / ((DRY_AIR_CP + VAPOUR_CP * returnRatio) * temperatureSpan);
   } else {
     const returnEnthalpy = (psychrolib.GetMoistAirEnthalpy(returnDryBulbC, returnRatio) as number) / 1000;
-    const dewPointEnthalpy = (psychrolib.GetMoistAirEnthalpy(model.apparatusDewPointC, dewPointRatio) as number) / 1000;
     fraction = nominalDropKJPerKg / (returnEnthalpy - dewPointEnthalpy);
   }
   return Math.min(model.maxContactFactor, fraction) * temperatureSpan;

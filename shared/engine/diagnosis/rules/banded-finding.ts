@@ -31,6 +31,21 @@ export interface BandedReading {
   source: string;
 }
 
+/**
+ * Texts of the shared, frozen bands (the application's and the default targets), formatted once:
+ * two number formats per finding add up over a dozen findings (performance). Bands made per
+ * call are not frozen and are never kept.
+ */
+const frozenBandTexts = new Map<Band, string>();
+
+function bandTextOf(band: Band): string {
+  const cached = frozenBandTexts.get(band);
+  if (cached !== undefined) return cached;
+  const text = formatTenths(band.lowK) + "–" + formatTenths(band.highK);
+  if (Object.isFrozen(band)) frozenBandTexts.set(band, text);
+  return text;
+}
+
 /** "rule source; band: band source" when the band names its own source. */
 function sourceOf(ruleSource: string, band: Band): string {
   const bandSource = (band as { source?: unknown }).source;
@@ -51,7 +66,7 @@ export function bandedFinding(spec: BandedReading, snapshot: DiagnosisSnapshot):
   const strength = deviationStrength(deviation, spec.fullStrength);
   const bandStrength = deviation < 0 ? -strength : strength;
   const pivotDeviation = spec.pivot === undefined ? 0 : Math.sign(spec.value - spec.pivot) * deviationStrength(spec.value - spec.pivot, spec.fullStrength);
-  const message = spec.messages[direction](formatTenths(spec.value), spec.bandText ?? formatTenths(spec.band.lowK) + "–" + formatTenths(spec.band.highK), snapshot);
+  const message = spec.messages[direction](formatTenths(spec.value), spec.bandText ?? bandTextOf(spec.band), snapshot);
   return {
     ruleId: spec.ruleId,
     reading: spec.reading,
