@@ -6,6 +6,8 @@ import type { Server } from "node:http";
 import { createApp } from "./app.ts";
 import { openDatabase } from "./db/client.ts";
 import { deleteExpiredSessions } from "./db/expired-sessions.ts";
+import { discardStagedReadings } from "./db/visits.ts";
+import { closeCsvImportPool } from "./import/csv-import-pool.ts";
 import { seedDemoData } from "./db/seed/seed-demo.ts";
 import { readEnv } from "./env.ts";
 import { createMailer } from "./mail/mailer.ts";
@@ -15,6 +17,8 @@ const env = readEnv();
 const logger = createLogger(env);
 
 const database = await openDatabase(env.DATA_DIR);
+// A CSV import cut off by a stop leaves staged rows that never became readings: clear them.
+await discardStagedReadings(database.db);
 if (env.DEMO_DATA && (await seedDemoData(database.db))) {
   logger.info("demo data loaded (Bellbird Mechanical)");
 }
@@ -60,6 +64,7 @@ async function shutdown(signal: string) {
   timer.unref();
   await new Promise<void>((resolve) => server.close(() => resolve()));
   await closeVite?.();
+  await closeCsvImportPool();
   await mailer.close();
   await database.close();
   process.exit(0);

@@ -50,6 +50,8 @@ export const ProfileSchema = z.object({
   preferences: PreferencesSchema,
   /** Refrigerant handling licence or certificate number (the register export names it). */
   licenceNumber: z.string().nullable(),
+  /** Sent back as If-Match with PUT /api/profile. */
+  version: z.number().int(),
 });
 export type Profile = z.infer<typeof ProfileSchema>;
 

@@ -1,3 +1,4 @@
+import { LockOpen } from "lucide-react";
 import { useState } from "react";
 import type { Visit } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
@@ -11,18 +12,30 @@ interface ReviewPanelProps {
   canSignOff: boolean;
 }
 
-/** Submit for review (crew) and sign off or send back with a reason (senior, owner). */
+/**
+ * Submit for review (crew); sign off or send back with a reason (senior, owner); and reopen a
+ * visit awaiting review or signed off, with a reason, so that it can be corrected (senior, owner).
+ */
 export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) {
   const review = useReviewVisit();
   const [reason, setReason] = useState("");
+  const [reopenReason, setReopenReason] = useState("");
   const [error, setError] = useState<string | null>(null);
-  const act = async (action: "submit" | "sign-off" | "send-back") => {
+  const act = async (action: "submit" | "sign-off" | "send-back" | "reopen") => {
     setError(null);
     if (action === "send-back" && reason.trim().length < 3) return setError("Say what needs doing before sign-off");
+    if (action === "reopen" && reopenReason.trim().length < 3) return setError("Say why the visit is reopened, e.g. “pressure test entered wrongly”");
     try {
       await review.mutateAsync(
-        action === "send-back" ? { visitId: visit.id, action, reason } : action === "sign-off" ? { visitId: visit.id, action, note: reason || undefined } : { visitId: visit.id, action },
+        action === "send-back"
+          ? { visitId: visit.id, action, reason }
+          : action === "reopen"
+            ? { visitId: visit.id, action, reason: reopenReason }
+            : action === "sign-off"
+              ? { visitId: visit.id, action, note: reason || undefined }
+              : { visitId: visit.id, action },
       );
+      setReopenReason("");
       setReason("");
     } catch (caught) {
       setError(caught instanceof Error ? caught.message : "That did not go through");
@@ -30,6 +43,7 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
   };
   const reviewable = visit.status === "open" || visit.status === "awaiting-review";
   const submittable = visit.status === "open" || visit.status === "sent-back";
+  const reopenable = visit.status === "awaiting-review" || visit.status === "signed-off";
 
   return (
     <section aria-labelledby="review-heading" className="rounded-card border-2 border-rule bg-surface p-4">
@@ -78,6 +92,25 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
                 Send back
               </Button>
             </div>
+          </div>
+        )}
+        {canSignOff && reopenable && (
+          <div className="space-y-2 border-t-2 border-rule pt-3">
+            <label htmlFor="reopen-reason" className="block font-medium">
+              Reason for reopening (required)
+            </label>
+            <textarea
+              id="reopen-reason"
+              rows={2}
+              value={reopenReason}
+              onChange={(event) => setReopenReason(event.target.value)}
+              placeholder="What must be corrected, e.g. “pressure test entered as 3500 kPa, was 350”"
+              className="block w-full rounded-card border-2 border-rule bg-surface p-3"
+            />
+            <p className="text-sm text-muted">Reopening lets the crew void and re-enter records; the reason goes in the audit trail{visit.status === "signed-off" ? " and the visit will need signing off again" : ""}.</p>
+            <Button variant="secondary" onClick={() => void act("reopen")} disabled={review.isPending}>
+              <LockOpen aria-hidden className="size-5" /> Reopen the visit
+            </Button>
           </div>
         )}
       </div>
