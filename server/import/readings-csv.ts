@@ -22,8 +22,8 @@ export const MAX_IMPORT_ROWS = 5000;
 export const MAX_IMPORT_COLUMNS = 64;
 /** 64 columns of 60 characters; a longer line is not a reading series (or has lost its line breaks). */
 export const MAX_IMPORT_LINE_CHARS = 4096;
-/** Rows per slice handed back for storing: each slice holds the database for tens of milliseconds. */
-export const IMPORT_SLICE_ROWS = 100;
+/** Rows per slice handed back for storing: each slice holds the database for a few tens of milliseconds. */
+export const IMPORT_SLICE_ROWS = 50;
 
 // The labels the client shows for these targets live in shared/schemas/readings-import.ts.
 export const ColumnMappingSchema = z.record(z.string(), z.union([z.enum(IMPORTABLE_FIELDS), z.literal("takenAt"), z.literal("ignore")]));
@@ -84,11 +84,12 @@ export interface ImportPreview {
   validCount: number;
   problems: RowProblem[];
   /**
-   * The valid rows as JSON arrays of { takenAt, input, result }, IMPORT_SLICE_ROWS at a time
-   * (only when keepRows). Serialised here so the server's thread neither builds nor copies
+   * The valid rows as UTF-8 JSON arrays of { takenAt, input, result }, IMPORT_SLICE_ROWS at a
+   * time (only when keepRows), all views of one buffer. Serialised here and handed over without
+   * a copy (the worker transfers the buffer), so the server's thread neither builds nor clones
    * thousands of objects; PostgreSQL unpacks them (stageImportedReadings).
    */
-  slices: string[];
+  slices: Uint8Array[];
 }
 
 /** A file refused as a whole, with the status and message the route answers. */
@@ -189,8 +190,16 @@ export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRef
   return summary();
 }
 
-function slicesOf(rows: readonly unknown[]): string[] {
-  const slices: string[] = [];
-  for (let start = 0; start < rows.length; start += IMPORT_SLICE_ROWS) slices.push(JSON.stringify(rows.slice(start, start + IMPORT_SLICE_ROWS)));
-  return slices;
+function slicesOf(rows: readonly unknown[]): Uint8Array[] {
+  const encoder = new TextEncoder();
+  const encoded: Uint8Array[] = [];
+  for (let start = 0; start < rows.length; start += IMPORT_SLICE_ROWS) encoded.push(encoder.encode(JSON.stringify(rows.slice(start, start + IMPORT_SLICE_ROWS))));
+  // One buffer for all slices, so the worker can transfer it in one move.
+  const buffer = new Uint8Array(encoded.reduce((total, slice) => total + slice.length, 0));
+  let offset = 0;
+  return encoded.map((slice) => {
+    buffer.set(slice, offset);
+    offset += slice.length;
+    return buffer.subarray(offset - slice.length, offset);
+  });
 }

@@ -17,18 +17,19 @@ const yieldToOtherRequests = () => new Promise<void>((resolve) => setImmediate(r
 export async function storeImportedReadings(
   db: Database,
   organisationId: string,
-  values: { visitId: string; circuit: number; recordedBy: string; slices: readonly string[] },
+  values: { visitId: string; circuit: number; recordedBy: string; slices: readonly Uint8Array[] },
 ): Promise<number> {
   if (values.slices.length === 0) return 0;
   const importId = randomUUID();
+  const decoder = new TextDecoder();
   try {
-    for (const rowsJson of values.slices) {
+    for (const slice of values.slices) {
       await stageImportedReadings(db, organisationId, {
         importId,
         visitId: values.visitId,
         circuit: values.circuit,
         recordedBy: values.recordedBy,
-        rowsJson,
+        rowsJson: decoder.decode(slice),
       });
       await yieldToOtherRequests();
     }

@@ -243,7 +243,7 @@ describe("readingInput and siteAtmosphere", () => {
       keepRows: true,
     });
     if ("refused" in outcome) throw new Error(outcome.refused.message);
-    const [row] = JSON.parse(outcome.slices[0]!);
+    const [row] = JSON.parse(new TextDecoder().decode(outcome.slices[0]!));
     const typed = readingInput(
       {
         suctionPressureKPa: measured.suctionPressureKPa,

@@ -12,7 +12,8 @@ type Agent = Awaited<ReturnType<typeof signedIn>>;
 
 const TRIALS = 6;
 const ATMOSPHERE = atmosphericPressureAtAltitude(demoSite.altitudeM);
-const gauge = (temperatureC: number, point: "bubble" | "dew") => Number((saturationPressure("R407C", temperatureC, point) - ATMOSPHERE).toFixed(1));
+const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+  Number((saturationPressure("R407C", temperatureC, point) - ATMOSPHERE).toFixed(1));
 
 const pause = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
@@ -36,16 +37,30 @@ describe("writes racing a sign-off", () => {
     await seedBellbird(testApp);
     technician = await signedIn(testApp.app, BELLBIRD.technician);
     senior = await signedIn(testApp.app, BELLBIRD.senior);
-    rooftopId = (await technician.get("/api/equipment")).body.equipment.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C").id;
+    rooftopId = (await technician.get("/api/equipment")).body.equipment.find(
+      (unit: { refrigerant: string }) => unit.refrigerant === "R407C",
+    ).id;
     // A noisy photo takes sharp long enough to decode that a sign-off can slip in meanwhile.
-    photo = await sharp({ create: { width: 1600, height: 1200, channels: 3, noise: { type: "gaussian", mean: 128, sigma: 40 } } }).png().toBuffer();
+    photo = await sharp({
+      create: {
+        width: 1600,
+        height: 1200,
+        channels: 3,
+        background: "#808080",
+        noise: { type: "gaussian", mean: 128, sigma: 40 },
+      },
+    })
+      .png()
+      .toBuffer();
   });
   afterAll(async () => {
     await testApp.close();
     await rm(uploadsDir, { recursive: true, force: true });
   });
 
-  const newVisit = async () => (await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Race trial" })).body.visit.id as string;
+  const newVisit = async () =>
+    (await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Race trial" })).body.visit
+      .id as string;
   const storedFiles = async () => (await readdir(uploadsDir)).length;
 
   it(`never stores a photo after the sign-off (${TRIALS} trials, staggered)`, async () => {
@@ -53,7 +68,11 @@ describe("writes racing a sign-off", () => {
     for (let trial = 0; trial < TRIALS; trial++) {
       const visitId = await newVisit();
       const filesBefore = await storedFiles();
-      const upload = technician.post(`/api/visits/${visitId}/photos`).field("kind", "gauges").attach("photo", photo, "gauges.png").then((response) => response);
+      const upload = technician
+        .post(`/api/visits/${visitId}/photos`)
+        .field("kind", "gauges")
+        .attach("photo", photo, "gauges.png")
+        .then((response) => response);
       await pause(trial * 15);
       const signOff = await senior.post(`/api/visits/${visitId}/review`).send({ action: "sign-off" });
       const uploaded = await upload;
@@ -63,7 +82,8 @@ describe("writes racing a sign-off", () => {
 
       const visit = (await technician.get(`/api/visits/${visitId}`)).body.visit;
       const signedOffAt = Date.parse(visit.signedOffAt);
-      for (const stored of visit.photos as { createdAt: string }[]) expect(Date.parse(stored.createdAt)).toBeLessThanOrEqual(signedOffAt);
+      for (const stored of visit.photos as { createdAt: string }[])
+        expect(Date.parse(stored.createdAt)).toBeLessThanOrEqual(signedOffAt);
       if (uploaded.status === 409) {
         expect(uploaded.body.message).toMatch(/signed off/);
         expect(visit.photos).toHaveLength(0);
@@ -83,10 +103,19 @@ describe("writes racing a sign-off", () => {
       const readings = Array.from({ length: 8 }, (_, index) =>
         technician
           .post(`/api/visits/${visitId}/readings`)
-          .send({ circuit: 1, suctionPressureKPa: gauge(6, "dew"), suctionLineTempC: 12 + index / 10, liquidPressureKPa: gauge(42, "bubble"), liquidLineTempC: 37 })
+          .send({
+            circuit: 1,
+            suctionPressureKPa: gauge(6, "dew"),
+            suctionLineTempC: 12 + index / 10,
+            liquidPressureKPa: gauge(42, "bubble"),
+            liquidLineTempC: 37,
+          })
           .then((response) => response),
       );
-      const signOff = senior.post(`/api/visits/${visitId}/review`).send({ action: "sign-off" }).then((response) => response);
+      const signOff = senior
+        .post(`/api/visits/${visitId}/review`)
+        .send({ action: "sign-off" })
+        .then((response) => response);
       const [signed, ...answers] = await Promise.all([signOff, ...readings]);
       expect(signed.status).toBe(200);
       const visit = (await technician.get(`/api/visits/${visitId}`)).body.visit;
@@ -94,7 +123,8 @@ describe("writes racing a sign-off", () => {
       expect(accepted.length + answers.filter((answer) => answer.status === 409).length).toBe(answers.length);
       expect(visit.readings).toHaveLength(accepted.length);
       const signedOffAt = Date.parse(visit.signedOffAt);
-      for (const stored of visit.readings as { takenAt: string }[]) expect(Date.parse(stored.takenAt)).toBeLessThanOrEqual(signedOffAt);
+      for (const stored of visit.readings as { takenAt: string }[])
+        expect(Date.parse(stored.takenAt)).toBeLessThanOrEqual(signedOffAt);
     }
   });
 });
