@@ -29,10 +29,10 @@ export function setVersion(res: Response, version: number): void {
   res.setHeader("ETag", `"${version}"`);
 }
 
-/** The answer to a write based on an old version. */
+/** The answer to a write based on an old version; `what` in running text, e.g. "the company limits". */
 export function staleWrite(what: string): HttpError {
   return new HttpError(
     409,
-    `${what} was changed by someone else after you opened it, so your change was not saved. Reload to see the latest version, then make your change again.`,
+    `A newer version of ${what} was saved after you opened it here, so your change was not saved. Reload to see the latest version, then make your change again.`,
   );
 }

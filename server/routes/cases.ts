@@ -86,7 +86,7 @@ export function casesRouter({ db }: Deps): Router {
   /** A versioned write's outcome as an answer: 404 for no such case, 409 for a stale copy. */
   function requireDone(outcome: CaseWrite) {
     if (outcome === "missing") throw notFound("Case");
-    if (outcome === "stale") throw staleWrite("This case");
+    if (outcome === "stale") throw staleWrite("this case");
   }
 
   router.get("/", requireUser, async (_req, res) => {

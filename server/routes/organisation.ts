@@ -35,7 +35,7 @@ export function organisationRouter({ db }: Pick<AccountRouteDeps, "db">): Router
   router.patch("/settings", requireRole(...PERMISSIONS.manageMembers), async (req, res) => {
     const update = ProcedureSettingsUpdateSchema.parse(req.body);
     const saved = await updateProcedureSettings(db, getAuth(res).organisationId, update, requireIfMatch(req));
-    if (!saved) throw staleWrite("The company limits");
+    if (!saved) throw staleWrite("the company limits");
     setVersion(res, saved.version);
     res.json(respond(saved));
   });

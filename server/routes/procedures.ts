@@ -274,7 +274,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
         },
         version,
       );
-      if (!updated) throw staleWrite("This evacuation");
+      if (!updated) throw staleWrite("this evacuation");
       return updated;
     });
     res.json({ evacuation });

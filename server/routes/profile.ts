@@ -24,7 +24,7 @@ export function profileRouter({ db }: AccountRouteDeps): Router {
     const { user, organisationId } = getAuth(res);
     const input = UpdateProfileSchema.parse(req.body);
     const profile = await updateProfile(db, user.id, organisationId, input, requireIfMatch(req));
-    if (profile === "stale") throw staleWrite("Your profile");
+    if (profile === "stale") throw staleWrite("your profile");
     if (!profile) throw notFound("Profile");
     setVersion(res, profile.version);
     res.json(profile satisfies Profile);

@@ -194,7 +194,7 @@ describe("casebook API", () => {
     // An owner who opened the case before that edit: their copy is stale and is refused.
     const stale = await owner.put(`/api/cases/${draft.id}`).set("If-Match", '"1"').send({ ...authored, title: "Overwritten" });
     expect(stale.status).toBe(409);
-    expect(stale.body.message).toMatch(/This case was changed by someone else.*Reload/);
+    expect(stale.body.message).toMatch(/A newer version of this case was saved.*Reload/);
     expect((await senior.get(`/api/cases/${draft.id}`)).body.case.title).toBe(authored.title);
     expect((await owner.post(`/api/cases/${draft.id}/publish`).set("If-Match", '"1"')).status).toBe(409);
 

@@ -59,7 +59,7 @@ describe("organisation procedure settings", () => {
     // A second tab still holding the version before that save.
     const stale = await patch(owner, seen, { evacuationTargetMicrons: 400 });
     expect(stale.status).toBe(409);
-    expect(stale.body.message).toMatch(/changed by someone else.*Reload/);
+    expect(stale.body.message).toMatch(/A newer version of the company limits was saved.*Reload/);
     expect((await owner.get("/api/organisation/settings")).body.settings.evacuationTargetMicrons).toBe(250);
     const unversioned = await owner.patch("/api/organisation/settings").send({ evacuationTargetMicrons: 400 });
     expect(unversioned.status).toBe(428);

@@ -147,7 +147,7 @@ describe("procedure records API", () => {
     expect(isolated.body.evacuation.version).toBe(2);
     const stale = await technician.patch(`/api/visits/${visitId}/evacuations/${evacuationId}`).set("If-Match", '"1"').send({ targetMicrons: 250 });
     expect(stale.status).toBe(409);
-    expect(stale.body.message).toMatch(/This evacuation was changed by someone else/);
+    expect(stale.body.message).toMatch(/A newer version of this evacuation was saved/);
     for (const sample of HELD) last = await technician.post(`/api/visits/${visitId}/evacuations/${evacuationId}/samples`).send(sample);
     const { result } = last!.body.evacuation;
     expect(result.stage).toBe("judged");

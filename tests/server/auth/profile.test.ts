@@ -56,7 +56,7 @@ describe("profile settings", () => {
     expect((await agent.put("/api/profile").set("If-Match", `"${version}"`).send(body("Priya Raman"))).status).toBe(200);
     const stale = await agent.put("/api/profile").set("If-Match", `"${version}"`).send(body("Priya R."));
     expect(stale.status).toBe(409);
-    expect(stale.body.message).toMatch(/Your profile was changed by someone else/);
+    expect(stale.body.message).toMatch(/A newer version of your profile was saved/);
     expect((await agent.get("/api/profile")).body.user.name).toBe("Priya Raman");
   });
 });

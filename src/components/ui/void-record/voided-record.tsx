@@ -9,7 +9,7 @@ export function VoidNote({ voided }: { voided: NonNullable<VoidInfo> }) {
     <p className="flex items-start gap-2 text-sm font-medium" data-testid="void-note">
       <Ban aria-hidden className="mt-0.5 size-4 shrink-0" />
       <span>
-        Void: {voided.reason} — {voided.by?.name ?? "a former member"},{" "}
+        <span className="uppercase tracking-wide">Void</span>: {voided.reason} — {voided.by?.name ?? "a former member"},{" "}
         <span className="num">
           {new Date(voided.at).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" })}
         </span>
@@ -32,12 +32,13 @@ export function VoidedRecord({
   className?: string;
 }) {
   if (!voided) return <div className={className}>{children}</div>;
+  // The void comes first, so it is read before the record it corrects.
   return (
     <div className={cn("space-y-1", className)}>
-      <div className="text-muted line-through decoration-2" aria-label="Voided record">
+      <VoidNote voided={voided} />
+      <div className="text-muted line-through decoration-2 opacity-75" aria-label="Voided record">
         {children}
       </div>
-      <VoidNote voided={voided} />
     </div>
   );
 }

@@ -1,5 +1,5 @@
 import { History } from "lucide-react";
-import { VISIT_EVENT_LABELS, VOIDABLE_KIND_LABELS, type VisitEvent } from "@shared/schemas/visits.ts";
+import { VISIT_EVENT_LABELS, type VisitEvent } from "@shared/schemas/visits.ts";
 
 const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
 
@@ -24,11 +24,7 @@ export function AuditTrail({ events, headingLevel = 2 }: { events: readonly Visi
           {events.map((event) => (
             <li key={event.id} className="border-l-4 border-rule pl-3" data-testid="audit-event">
               <p>
-                <span className="font-semibold">
-                  {event.action === "voided" && event.recordKind
-                    ? `Voided: ${VOIDABLE_KIND_LABELS[event.recordKind].toLowerCase()}`
-                    : VISIT_EVENT_LABELS[event.action]}
-                </span>
+                <span className="font-semibold">{VISIT_EVENT_LABELS[event.action]}</span>
                 {event.action !== "started" && event.summary !== VISIT_EVENT_LABELS[event.action] && (
                   <> — {event.summary}</>
                 )}
