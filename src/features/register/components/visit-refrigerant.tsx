@@ -3,15 +3,15 @@ import { Link } from "react-router-dom";
 import type { Equipment } from "@shared/schemas/equipment.ts";
 import { MOVEMENT_KIND_LABELS, type CircuitBalance, type Movement } from "@shared/schemas/register.ts";
 import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
-import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
 import { useVoidRecord } from "@/lib/api/visits.ts";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { paths } from "@/config/paths.ts";
 import { useCylinders, useVisitRefrigerant } from "@/lib/api/register.ts";
-import { formatKg, formatSignedKg, formatWhen } from "../utils/format-register.ts";
+import { formatKg, formatSignedKg } from "../utils/format-register.ts";
 import { ChargingCheck } from "./charging-check.tsx";
 import { CylinderFillBar } from "./cylinder-fill.tsx";
 import { MovementForm } from "./movement-form.tsx";
+import { MovementRecord } from "./movement-record.tsx";
 
 function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitBalance; visitId: string; canWrite: boolean; single: boolean }) {
   const { shortfallKg, finalChargeKg, differenceFromNameplateKg } = balance.balance;
@@ -66,18 +66,7 @@ function MovementList({ visitId, movements, canWrite }: { visitId: string; movem
         const what = `${formatKg(movement.kg)} ${MOVEMENT_KIND_LABELS[movement.kind].toLowerCase()}`;
         return (
           <li key={movement.id} className="space-y-1 p-3">
-            <VoidedRecord voided={movement.voided}>
-              <p className="font-semibold">
-                <span className="num">{formatKg(movement.kg)}</span> {MOVEMENT_KIND_LABELS[movement.kind].toLowerCase()}
-                {movement.circuit !== null && <span className="font-normal"> · circuit {movement.circuit}</span>}
-              </p>
-              <p className="text-sm text-muted">
-                <span className="num">{formatWhen(movement.at)}</span>
-                {movement.cylinder && <> · cylinder {movement.cylinder.label}</>}
-                {movement.technician && <> · {movement.technician.name}</>}
-              </p>
-              {movement.note && <p>{movement.note}</p>}
-            </VoidedRecord>
+            <MovementRecord movement={movement} />
             {canWrite && !movement.voided && (
               <VoidAction what={`the movement “${what}”`} onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: "movement", recordId: movement.id, reason })} />
             )}

@@ -12,6 +12,25 @@ interface ReviewPanelProps {
   canSignOff: boolean;
 }
 
+/** A labelled two-line text box for a review note or reason. */
+function ReasonBox({ id, label, value, onChange, placeholder }: { id: string; label: string; value: string; onChange: (value: string) => void; placeholder: string }) {
+  return (
+    <>
+      <label htmlFor={id} className="block font-medium">
+        {label}
+      </label>
+      <textarea
+        id={id}
+        rows={2}
+        value={value}
+        onChange={(event) => onChange(event.target.value)}
+        placeholder={placeholder}
+        className="block w-full rounded-card border-2 border-rule bg-surface p-3"
+      />
+    </>
+  );
+}
+
 /**
  * Submit for review (crew); sign off or send back with a reason (senior, owner); and reopen a
  * visit awaiting review or signed off, with a reason, so that it can be corrected (senior, owner).
@@ -73,17 +92,7 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
         )}
         {canSignOff && reviewable && (
           <div className="space-y-2">
-            <label htmlFor="review-reason" className="block font-medium">
-              Note or reason
-            </label>
-            <textarea
-              id="review-reason"
-              rows={2}
-              value={reason}
-              onChange={(event) => setReason(event.target.value)}
-              placeholder="A note with the sign-off, or what needs doing if you send it back"
-              className="block w-full rounded-card border-2 border-rule bg-surface p-3"
-            />
+            <ReasonBox id="review-reason" label="Note or reason" value={reason} onChange={setReason} placeholder="A note with the sign-off, or what needs doing if you send it back" />
             <div className="flex flex-wrap gap-2">
               <Button onClick={() => void act("sign-off")} disabled={review.isPending}>
                 Sign off
@@ -96,16 +105,12 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
         )}
         {canSignOff && reopenable && (
           <div className="space-y-2 border-t-2 border-rule pt-3">
-            <label htmlFor="reopen-reason" className="block font-medium">
-              Reason for reopening (required)
-            </label>
-            <textarea
+            <ReasonBox
               id="reopen-reason"
-              rows={2}
+              label="Reason for reopening (required)"
               value={reopenReason}
-              onChange={(event) => setReopenReason(event.target.value)}
+              onChange={setReopenReason}
               placeholder="What must be corrected, e.g. “pressure test entered as 3500 kPa, was 350”"
-              className="block w-full rounded-card border-2 border-rule bg-surface p-3"
             />
             <p className="text-sm text-muted">Reopening lets the crew void and re-enter records; the reason goes in the audit trail{visit.status === "signed-off" ? " and the visit will need signing off again" : ""}.</p>
             <Button variant="secondary" onClick={() => void act("reopen")} disabled={review.isPending}>
