@@ -156,6 +156,7 @@ describe("CSV import of a reading series", () => {
     const file = Buffer.from(lines.join("\n"));
     const waits: number[] = [];
     let importing = true;
+    const importStarted = performance.now();
     const importDone = technician
       .post(`/api/visits/${busy}/readings/import`)
       .field("circuit", "1")
@@ -174,12 +175,17 @@ describe("CSV import of a reading series", () => {
       await new Promise((resolve) => setTimeout(resolve, 20));
     }
     const imported = await importDone;
+    const importMs = performance.now() - importStarted;
     expect(imported.status).toBe(201);
     expect(imported.body.stored).toBe(5000);
-    expect(waits.length).toBeGreaterThan(3);
-    // The target is under 100 ms (npm run bench prints the figures); this bound only catches a
-    // server that stalls again, on a machine shared with other work.
-    expect(Math.max(...waits)).toBeLessThan(1_000);
+    // Health checks kept being answered all through the import, most of them at once. The target
+    // is under 100 ms (npm run bench prints the figures); these bounds only catch a server that
+    // stalls again (before: one health check waited 9.9 s, the whole import), and they scale with
+    // the import's own time because the suite runs on machines shared with other work.
+    waits.sort((a, b) => a - b);
+    expect(waits.length).toBeGreaterThan(5);
+    expect(waits[Math.floor(waits.length / 2)]).toBeLessThan(250);
+    expect(waits.at(-1)).toBeLessThan(Math.max(1_000, importMs / 4));
     expect((await technician.get(`/api/visits/${busy}`)).body.visit.readingCount).toBe(5000);
   });
 });
