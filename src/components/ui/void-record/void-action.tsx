@@ -77,7 +77,7 @@ export function VoidAction({ what, onVoid, disabled = false }: VoidActionProps) 
             <textarea
               id={`${id}-reason`}
               rows={3}
-              required
+              aria-required="true"
               maxLength={MAX_REASON_LENGTH}
               value={reason}
               onChange={(event) => setReason(event.target.value)}

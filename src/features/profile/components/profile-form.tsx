@@ -105,7 +105,7 @@ export function ProfileForm({ profile }: { profile: Profile }) {
         min={ATMOSPHERIC_PRESSURE_MIN_KPA}
         max={ATMOSPHERIC_PRESSURE_MAX_KPA}
         className="num"
-        hint={`Used to turn gauge readings into absolute pressure when a site has no altitude. Sea level: ${STANDARD_ATMOSPHERE_KPA} kPa.`}
+        hint={`For the P–T tables and the casebook. On a visit, gauges read against the site's atmosphere: from its altitude, or ${STANDARD_ATMOSPHERE_KPA} kPa (sea level) when it has none.`}
         error={errors.preferences?.atmosphericPressureKPa?.message}
         {...form.register("preferences.atmosphericPressureKPa", { valueAsNumber: true })}
       />
