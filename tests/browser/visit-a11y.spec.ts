@@ -7,6 +7,8 @@ const WCAG_TAGS = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"];
 
 test.describe("accessibility of the field screens", () => {
   test("the visit's sections, its report and a P–T table pass axe", async ({ page }) => {
+    // Seven screens, each with a full axe run: near a minute on a busy 2-core machine.
+    test.slow();
     const signIn = await page.request.post("/api/auth/sign-in", { data: { email: "senior@bellbird.example", password: DEMO_PASSWORD } });
     expect(signIn.status()).toBe(200);
     const { visits } = (await (await page.request.get("/api/visits?status=awaiting-review")).json()) as { visits: { id: string; equipmentName: string }[] };
