@@ -59,12 +59,16 @@ export type Profile = z.infer<typeof ProfileSchema>;
 export const UpdateProfileSchema = z.object({
   name: PersonNameSchema,
   preferences: PreferencesSchema,
-  /** Left out: unchanged. Empty: removed. */
+  /**
+   * Left out: unchanged. Empty or null: removed. Null is accepted because the form sends what
+   * this schema made of an emptied field (regression: a profile with no licence could not be saved).
+   */
   licenceNumber: z
     .string()
     .trim()
     .max(LICENCE_NUMBER_MAX_LENGTH, `At most ${LICENCE_NUMBER_MAX_LENGTH} characters`)
+    .nullable()
     .optional()
-    .transform((value) => (value === undefined ? undefined : value === "" ? null : value)),
+    .transform((value) => (value === undefined ? undefined : value ? value : null)),
 });
 export type UpdateProfile = z.infer<typeof UpdateProfileSchema>;
