@@ -1,4 +1,5 @@
 import { RefreshCw } from "lucide-react";
+import { useEffect, useRef } from "react";
 import { Button } from "@/components/ui/button/button.tsx";
 
 interface StaleWriteNoticeProps {
@@ -16,8 +17,11 @@ interface StaleWriteNoticeProps {
  * view, and offers to load the latest version before trying again.
  */
 export function StaleWriteNotice({ message, onReload, reloading = false, typed = [] }: StaleWriteNoticeProps) {
+  const box = useRef<HTMLDivElement>(null);
+  // On a phone the save button is far below: bring the notice into view when it appears.
+  useEffect(() => box.current?.scrollIntoView?.({ block: "nearest", behavior: "smooth" }), []);
   return (
-    <div role="alert" className="space-y-3 rounded-card border-2 border-caution bg-surface p-3">
+    <div ref={box} role="alert" className="space-y-3 rounded-card border-2 border-caution bg-surface p-3">
       <p className="font-medium">⚠ {message}</p>
       {typed.length > 0 && (
         <div>
