@@ -7,6 +7,8 @@ import { createApp } from "./app.ts";
 import { openDatabase } from "./db/client.ts";
 import { deleteExpiredSessions } from "./db/expired-sessions.ts";
 import { deleteEndedCounters } from "./db/rate-limit-counters.ts";
+import { discardStagedReadings } from "./db/visits.ts";
+import { closeCsvImportPool } from "./import/csv-import-pool.ts";
 import { seedDemoData } from "./db/seed/seed-demo.ts";
 import { upgradeStoredDiagnoses } from "./db/upgrade-stored-diagnoses.ts";
 import { readEnv } from "./env.ts";
@@ -17,6 +19,8 @@ const env = readEnv();
 const logger = createLogger(env);
 
 const database = await openDatabase(env.DATA_DIR);
+// A CSV import cut off by a stop leaves staged rows that never became readings: clear them.
+await discardStagedReadings(database.db);
 if (env.DEMO_DATA && (await seedDemoData(database.db))) {
   logger.info("demo data loaded (Bellbird Mechanical)");
 }
@@ -65,6 +69,7 @@ async function shutdown(signal: string) {
   timer.unref();
   await new Promise<void>((resolve) => server.close(() => resolve()));
   await closeVite?.();
+  await closeCsvImportPool();
   await mailer.close();
   await database.close();
   process.exit(0);

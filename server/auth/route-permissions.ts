@@ -46,7 +46,7 @@ export const ROUTE_PERMISSIONS = {
   "PUT /api/profile": SIGNED_IN,
   "GET /api/outbox": PERMISSIONS.manageMembers,
   "GET /api/organisation/settings": SIGNED_IN,
-  "PUT /api/organisation/settings": PERMISSIONS.manageMembers,
+  "PATCH /api/organisation/settings": PERMISSIONS.manageMembers,
 
   "GET /api/customers": SIGNED_IN,
   "POST /api/customers": PERMISSIONS.writeRecords,
@@ -64,7 +64,9 @@ export const ROUTE_PERMISSIONS = {
   "POST /api/visits/:id/readings/import": PERMISSIONS.writeRecords,
   "POST /api/visits/:id/adjustments": PERMISSIONS.writeRecords,
   "POST /api/visits/:id/comments": PERMISSIONS.writeRecords,
-  // Submitting needs writeRecords, signing off or sending back needs signOff: the handler decides by the action.
+  // Voiding a record with its reason: the handler checks the visit is open.
+  "POST /api/visits/:id/voids": PERMISSIONS.writeRecords,
+  // Submitting needs writeRecords, signing off, sending back or reopening needs signOff: the handler decides by the action.
   "POST /api/visits/:id/review": SIGNED_IN,
   "POST /api/visits/:id/photos": PERMISSIONS.writeRecords,
   "POST /api/visits/:id/report/send": PERMISSIONS.writeRecords,
@@ -85,11 +87,11 @@ export const ROUTE_PERMISSIONS = {
   "GET /api/visits/:id/refrigerant": SIGNED_IN,
   "POST /api/visits/:id/refrigerant": PERMISSIONS.writeRecords,
   "PUT /api/visits/:id/refrigerant/charging/:circuit": PERMISSIONS.writeRecords,
-  "DELETE /api/visits/:id/refrigerant/charging/:circuit": PERMISSIONS.writeRecords,
   "GET /api/cylinders": SIGNED_IN,
   "POST /api/cylinders": PERMISSIONS.writeRecords,
   "GET /api/cylinders/:id": SIGNED_IN,
   "POST /api/cylinders/:id/reclaim": PERMISSIONS.writeRecords,
+  "POST /api/cylinders/:id/movements/:movementId/void": PERMISSIONS.writeRecords,
   "GET /api/register": PERMISSIONS.readOwnRegisterLines,
   "GET /api/register/export.csv": PERMISSIONS.readOwnRegisterLines,
 

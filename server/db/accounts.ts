@@ -72,23 +72,30 @@ export async function getProfile(db: Database, userId: string, organisationId: s
     organisationName: row.organisationName,
     preferences: readPreferences(row.user.preferences),
     licenceNumber: row.user.licenceNumber,
+    version: row.user.profileVersion,
   };
 }
 
+/** Saves the profile if it is still at `version`; "stale" when it was changed since, undefined when the user is gone. */
 export async function updateProfile(
   db: Database,
   userId: string,
   organisationId: string,
   input: { name: string; preferences: Preferences; licenceNumber?: string | null },
+  version: number,
 ) {
-  await db
+  const updated = await db
     .update(users)
     .set({
       name: input.name,
       preferences: input.preferences,
       ...(input.licenceNumber !== undefined ? { licenceNumber: input.licenceNumber } : {}),
+      profileVersion: sql`${users.profileVersion} + 1`,
       updatedAt: new Date(),
     })
-    .where(and(eq(users.id, userId), eq(users.organisationId, organisationId)));
-  return getProfile(db, userId, organisationId);
+    .where(and(eq(users.id, userId), eq(users.organisationId, organisationId), eq(users.profileVersion, version)))
+    .returning({ id: users.id });
+  const profile = await getProfile(db, userId, organisationId);
+  if (profile && updated.length === 0) return "stale" as const;
+  return profile;
 }

@@ -3,7 +3,7 @@
  * organisation cases and attempts. Every function takes the caller's organisation id; a case
  * or attempt of another organisation reads as missing.
  */
-import { and, count, desc, eq, inArray, isNull, or, type SQL } from "drizzle-orm";
+import { and, count, desc, eq, inArray, isNull, or, sql, type SQL } from "drizzle-orm";
 import { generateCase, seededRandom } from "@shared/engine/index.ts";
 import {
   BuiltInCaseFileSchema,
@@ -48,6 +48,8 @@ export interface CaseRecord {
   authorName: string | null;
   fromReading: boolean;
   updatedAt: string | null;
+  /** Organisation cases only: bumped by every change, checked against If-Match. */
+  version: number | null;
 }
 
 function fromBuiltIn(worked: BuiltInCase): CaseRecord {
@@ -65,6 +67,7 @@ function fromBuiltIn(worked: BuiltInCase): CaseRecord {
     authorName: null,
     fromReading: false,
     updatedAt: null,
+    version: null,
   };
 }
 
@@ -110,6 +113,7 @@ function fromRow({ row, authorName }: Awaited<ReturnType<typeof organisationCase
     authorName: authorName ?? null,
     fromReading: row.fromReadingId !== null,
     updatedAt: row.updatedAt.toISOString(),
+    version: row.version,
   };
 }
 
@@ -191,36 +195,52 @@ export async function insertCase(
   return row.id;
 }
 
-/** Changes an organisation case; false when it is not the organisation's. */
+/**
+ * What a versioned write on an organisation case found: done, changed by someone else since
+ * the version the caller saw, or no such case in the organisation.
+ */
+export type CaseWrite = "done" | "stale" | "missing";
+
+async function caseWriteOutcome(db: Database, organisationId: string, id: string, written: boolean): Promise<CaseWrite> {
+  if (written) return "done";
+  const [exists] = await db
+    .select({ id: casebookCases.id })
+    .from(casebookCases)
+    .where(and(eq(casebookCases.organisationId, organisationId), eq(casebookCases.id, id)));
+  return exists ? "stale" : "missing";
+}
+
+const caseAt = (organisationId: string, id: string, version: number) =>
+  and(eq(casebookCases.organisationId, organisationId), eq(casebookCases.id, id), eq(casebookCases.version, version));
+
+/** Changes an organisation case if it is still at `version`. */
 export async function updateCase(
   db: Database,
   organisationId: string,
   id: string,
   values: CaseDraft & { expected: CaseExpected },
-): Promise<boolean> {
+  version: number,
+): Promise<CaseWrite> {
   const rows = await db
     .update(casebookCases)
-    .set({ ...values, updatedAt: new Date() })
-    .where(and(eq(casebookCases.organisationId, organisationId), eq(casebookCases.id, id)))
+    .set({ ...values, version: sql`${casebookCases.version} + 1`, updatedAt: new Date() })
+    .where(caseAt(organisationId, id, version))
     .returning({ id: casebookCases.id });
-  return rows.length > 0;
+  return caseWriteOutcome(db, organisationId, id, rows.length > 0);
 }
 
-export async function publishCase(db: Database, organisationId: string, id: string): Promise<boolean> {
+export async function publishCase(db: Database, organisationId: string, id: string, version: number): Promise<CaseWrite> {
   const rows = await db
     .update(casebookCases)
-    .set({ status: "published", publishedAt: new Date(), updatedAt: new Date() })
-    .where(and(eq(casebookCases.organisationId, organisationId), eq(casebookCases.id, id)))
+    .set({ status: "published", publishedAt: new Date(), version: sql`${casebookCases.version} + 1`, updatedAt: new Date() })
+    .where(caseAt(organisationId, id, version))
     .returning({ id: casebookCases.id });
-  return rows.length > 0;
+  return caseWriteOutcome(db, organisationId, id, rows.length > 0);
 }
 
-export async function deleteCase(db: Database, organisationId: string, id: string): Promise<boolean> {
-  const rows = await db
-    .delete(casebookCases)
-    .where(and(eq(casebookCases.organisationId, organisationId), eq(casebookCases.id, id)))
-    .returning({ id: casebookCases.id });
-  return rows.length > 0;
+export async function deleteCase(db: Database, organisationId: string, id: string, version: number): Promise<CaseWrite> {
+  const rows = await db.delete(casebookCases).where(caseAt(organisationId, id, version)).returning({ id: casebookCases.id });
+  return caseWriteOutcome(db, organisationId, id, rows.length > 0);
 }
 
 /**
@@ -239,7 +259,8 @@ export async function findReadingForCase(db: Database, organisationId: string, r
     .from(readings)
     .innerJoin(visits, eq(visits.id, readings.visitId))
     .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
-    .where(and(eq(readings.organisationId, organisationId), eq(readings.id, readingId)));
+    // A voided reading is not evidence of anything, and a staged import row is not yet a record.
+    .where(and(eq(readings.organisationId, organisationId), eq(readings.id, readingId), isNull(readings.voidedAt), isNull(readings.pendingImportId)));
   return row;
 }
 

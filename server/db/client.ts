@@ -1,14 +1,19 @@
 import { mkdirSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { PGlite } from "@electric-sql/pglite";
-import { drizzle, type PgliteDatabase } from "drizzle-orm/pglite";
+import type { PgDatabase } from "drizzle-orm/pg-core";
+import { drizzle, type PgliteDatabase, type PgliteQueryResultHKT } from "drizzle-orm/pglite";
 import { migrate } from "drizzle-orm/pglite/migrator";
 import * as schema from "./schema.ts";
 
-export type Database = PgliteDatabase<typeof schema>;
+/**
+ * What queries run on: the database or a transaction on it. Every query function takes this,
+ * so a caller can run several of them in one transaction (e.g. under a visit's row lock).
+ */
+export type Database = PgDatabase<PgliteQueryResultHKT, typeof schema>;
 
 export interface DatabaseHandle {
-  db: Database;
+  db: PgliteDatabase<typeof schema>;
   client: PGlite;
   close: () => Promise<void>;
 }

@@ -1,4 +1,5 @@
 import { inArray } from "drizzle-orm";
+import type { VoidInfo } from "@shared/schemas/visits.ts";
 import type { Database } from "./client.ts";
 import { users } from "./schema.ts";
 
@@ -15,3 +16,8 @@ export async function peopleById(db: Database, ids: (string | null)[]): Promise<
 
 /** The person a record names, or null when none (or a removed member's row is gone). */
 export const person = (people: People, id: string | null): PersonRef | null => (id ? (people.get(id) ?? null) : null);
+
+/** A voidable row's void (who, when, why), or null while it stands. */
+export function voidInfo(row: { voidedAt: Date | null; voidedBy: string | null; voidReason: string | null }, people: People): VoidInfo {
+  return row.voidedAt ? { at: row.voidedAt.toISOString(), by: person(people, row.voidedBy), reason: row.voidReason ?? "" } : null;
+}

@@ -4,7 +4,7 @@
  * still carries the organisation id and every read filters by it, so a record of another
  * organisation reads as missing.
  */
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import type {
   ElectricalCheck,
   ElectricalCheckInput,
@@ -21,12 +21,11 @@ import type {
 import { ProcedureSettingsSchema } from "@shared/schemas/procedure-records.ts";
 import type { Verdict } from "@shared/schemas/procedures.ts";
 import type { Database } from "./client.ts";
-import { peopleById, person, type People } from "./people.ts";
+import { peopleById, person, voidInfo, type People } from "./people.ts";
 import { electricalChecks, evacuations, leakSearches, organisations, pressureTests } from "./schema.ts";
 
-
-
-
+/** The people a record names: who recorded it and who voided it. */
+const mentioned = (rows: { recordedBy: string | null; voidedBy: string | null }[]) => rows.flatMap((row) => [row.recordedBy, row.voidedBy]);
 /** The organisation's procedure settings (organisations.settings), malformed figures dropped. */
 export async function getProcedureSettings(db: Database, organisationId: string): Promise<ProcedureSettings> {
   const [row] = await db.select({ settings: organisations.settings }).from(organisations).where(eq(organisations.id, organisationId));
@@ -41,6 +40,7 @@ function toElectricalCheck(row: typeof electricalChecks.$inferSelect, people: Pe
     visitId: row.visitId,
     takenAt: row.takenAt.toISOString(),
     recordedBy: person(people, row.recordedBy),
+    voided: voidInfo(row, people),
     input: row.input as unknown as ElectricalCheckInput,
     result: row.result as unknown as ElectricalCheckResult,
   };
@@ -52,7 +52,7 @@ export async function listElectricalChecks(db: Database, organisationId: string,
     .from(electricalChecks)
     .where(and(eq(electricalChecks.organisationId, organisationId), eq(electricalChecks.visitId, visitId)))
     .orderBy(asc(electricalChecks.takenAt));
-  const people = await peopleById(db, rows.map((row) => row.recordedBy));
+  const people = await peopleById(db, mentioned(rows));
   return rows.map((row) => toElectricalCheck(row, people));
 }
 
@@ -72,7 +72,7 @@ export async function insertElectricalCheck(
       recordedBy: values.recordedBy,
     })
     .returning();
-  return toElectricalCheck(row, await peopleById(db, [row.recordedBy]));
+  return toElectricalCheck(row, await peopleById(db, mentioned([row])));
 }
 
 // ---- leak searches --------------------------------------------------------------------------
@@ -83,6 +83,7 @@ function toLeakSearch(row: typeof leakSearches.$inferSelect, people: People): Le
     visitId: row.visitId,
     takenAt: row.takenAt.toISOString(),
     recordedBy: person(people, row.recordedBy),
+    voided: voidInfo(row, people),
     input: row.input as unknown as LeakSearch["input"],
     result: row.result as unknown as Verdict,
   };
@@ -94,7 +95,7 @@ export async function listLeakSearches(db: Database, organisationId: string, vis
     .from(leakSearches)
     .where(and(eq(leakSearches.organisationId, organisationId), eq(leakSearches.visitId, visitId)))
     .orderBy(asc(leakSearches.takenAt));
-  const people = await peopleById(db, rows.map((row) => row.recordedBy));
+  const people = await peopleById(db, mentioned(rows));
   return rows.map((row) => toLeakSearch(row, people));
 }
 
@@ -114,7 +115,7 @@ export async function insertLeakSearch(
       recordedBy: values.recordedBy,
     })
     .returning();
-  return toLeakSearch(row, await peopleById(db, [row.recordedBy]));
+  return toLeakSearch(row, await peopleById(db, mentioned([row])));
 }
 
 // ---- pressure tests -------------------------------------------------------------------------
@@ -125,6 +126,7 @@ function toPressureTest(row: typeof pressureTests.$inferSelect, people: People):
     visitId: row.visitId,
     takenAt: row.takenAt.toISOString(),
     recordedBy: person(people, row.recordedBy),
+    voided: voidInfo(row, people),
     input: row.input as unknown as PressureTestRecordInput,
     result: row.result as unknown as PressureTestRecordResult,
   };
@@ -136,7 +138,7 @@ export async function listPressureTests(db: Database, organisationId: string, vi
     .from(pressureTests)
     .where(and(eq(pressureTests.organisationId, organisationId), eq(pressureTests.visitId, visitId)))
     .orderBy(asc(pressureTests.takenAt));
-  const people = await peopleById(db, rows.map((row) => row.recordedBy));
+  const people = await peopleById(db, mentioned(rows));
   return rows.map((row) => toPressureTest(row, people));
 }
 
@@ -155,7 +157,7 @@ export async function insertPressureTest(
       recordedBy: values.recordedBy,
     })
     .returning();
-  return toPressureTest(row, await peopleById(db, [row.recordedBy]));
+  return toPressureTest(row, await peopleById(db, mentioned([row])));
 }
 
 // ---- evacuations ----------------------------------------------------------------------------
@@ -174,6 +176,8 @@ function toEvacuation(row: EvacuationRow, people: People): Evacuation {
     samples: row.samples,
     note: row.note,
     result: row.result as unknown as EvacuationResult,
+    version: row.version,
+    voided: voidInfo(row, people),
   };
 }
 
@@ -183,7 +187,7 @@ export async function listEvacuations(db: Database, organisationId: string, visi
     .from(evacuations)
     .where(and(eq(evacuations.organisationId, organisationId), eq(evacuations.visitId, visitId)))
     .orderBy(asc(evacuations.startedAt));
-  const people = await peopleById(db, rows.map((row) => row.recordedBy));
+  const people = await peopleById(db, mentioned(rows));
   return rows.map((row) => toEvacuation(row, people));
 }
 
@@ -213,35 +217,77 @@ export async function insertEvacuation(
     .insert(evacuations)
     .values({ ...values, organisationId, result: values.result as unknown as Record<string, unknown> })
     .returning();
-  return toEvacuation(row, await peopleById(db, [row.recordedBy]));
+  return toEvacuation(row, await peopleById(db, mentioned([row])));
 }
 
+/**
+ * Changes an evacuation: a new sample, valving off, the target or the note. With `version`
+ * (a PATCH's If-Match) it is a change to the record's figures: made only if nobody changed them
+ * since (undefined otherwise), and the version moves on. New samples only add to the series, so
+ * they leave the version alone and never make another device's copy stale.
+ */
 export async function updateEvacuation(
   db: Database,
   organisationId: string,
   evacuationId: string,
   values: { targetMicrons: number; isolatedAtMinutes: number | null; samples: { minutes: number; microns: number }[]; note: string | null; result: EvacuationResult },
-): Promise<Evacuation> {
+  version?: number,
+): Promise<Evacuation | undefined> {
   const [row] = await db
     .update(evacuations)
-    .set({ ...values, result: values.result as unknown as Record<string, unknown>, updatedAt: new Date() })
-    .where(and(eq(evacuations.organisationId, organisationId), eq(evacuations.id, evacuationId)))
+    .set({
+      ...values,
+      result: values.result as unknown as Record<string, unknown>,
+      ...(version === undefined ? {} : { version: sql`${evacuations.version} + 1` }),
+      updatedAt: new Date(),
+    })
+    .where(
+      and(
+        eq(evacuations.organisationId, organisationId),
+        eq(evacuations.id, evacuationId),
+        version === undefined ? undefined : eq(evacuations.version, version),
+      ),
+    )
     .returning();
-  return toEvacuation(row, await peopleById(db, [row.recordedBy]));
+  return row ? toEvacuation(row, await peopleById(db, mentioned([row]))) : undefined;
 }
 
-/** Writes the organisation's procedure overrides, keeping any other settings it holds. */
+/** The organisation's procedure settings with their version (for the company limits page). */
+export async function getVersionedProcedureSettings(db: Database, organisationId: string): Promise<{ settings: ProcedureSettings; version: number }> {
+  const [row] = await db
+    .select({ settings: organisations.settings, version: organisations.settingsVersion })
+    .from(organisations)
+    .where(eq(organisations.id, organisationId));
+  return { settings: ProcedureSettingsSchema.parse(row?.settings ?? {}), version: row?.version ?? 1 };
+}
+
+/**
+ * Changes only the overrides named in `update` (a null clears one), keeping every other
+ * setting, if the settings are still at `version`; undefined when someone changed them since.
+ */
 export async function updateProcedureSettings(
   db: Database,
   organisationId: string,
-  update: { evacuationTargetMicrons: number | null; pressureTestAllowedDropKPa: number | null },
-): Promise<ProcedureSettings> {
-  const [row] = await db.select({ settings: organisations.settings }).from(organisations).where(eq(organisations.id, organisationId));
-  const next: Record<string, unknown> = { ...(row?.settings ?? {}) };
-  for (const [key, value] of Object.entries(update)) {
-    if (value === null) delete next[key];
-    else next[key] = value;
-  }
-  await db.update(organisations).set({ settings: next, updatedAt: new Date() }).where(eq(organisations.id, organisationId));
-  return ProcedureSettingsSchema.parse(next);
+  update: { evacuationTargetMicrons?: number | null; pressureTestAllowedDropKPa?: number | null },
+  version: number,
+): Promise<{ settings: ProcedureSettings; version: number } | undefined> {
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .select({ settings: organisations.settings, version: organisations.settingsVersion })
+      .from(organisations)
+      .where(eq(organisations.id, organisationId))
+      .for("update");
+    if (!row || row.version !== version) return undefined;
+    const next: Record<string, unknown> = { ...row.settings };
+    for (const [key, value] of Object.entries(update)) {
+      if (value === undefined) continue;
+      if (value === null) delete next[key];
+      else next[key] = value;
+    }
+    await tx
+      .update(organisations)
+      .set({ settings: next, settingsVersion: row.version + 1, updatedAt: new Date() })
+      .where(eq(organisations.id, organisationId));
+    return { settings: ProcedureSettingsSchema.parse(next), version: row.version + 1 };
+  });
 }

@@ -5,12 +5,16 @@
  * A cylinder's contents are derived, never stored: initial contents + movements into it −
  * movements out of it (MOVEMENT_CYLINDER_RULES says which way each kind goes).
  */
-import { and, asc, desc, eq, gte, inArray, lt, sql, type SQL } from "drizzle-orm";
+import { and, asc, desc, eq, gte, inArray, isNull, lt, sql, type SQL } from "drizzle-orm";
 import { MOVEMENT_CYLINDER_RULES, type CylinderValues, type Movement, type MovementKind } from "@shared/schemas/register.ts";
+import { alias } from "drizzle-orm/pg-core";
 import type { Database } from "./client.ts";
 import { adjustments, circuitCharges, cylinders, equipment, refrigerantMovements, sites, users } from "./schema.ts";
 
 export type CylinderRow = typeof cylinders.$inferSelect & { contentsKg: number };
+
+/** The person who voided a movement (users joined a second time). */
+const voiders = alias(users, "voiders");
 
 /** Contents per cylinder id from the register, for the given cylinders. */
 async function contentsById(db: Database, rows: (typeof cylinders.$inferSelect)[]): Promise<Map<string, number>> {
@@ -19,7 +23,8 @@ async function contentsById(db: Database, rows: (typeof cylinders.$inferSelect)[
   const sums = await db
     .select({ cylinderId: refrigerantMovements.cylinderId, kind: refrigerantMovements.kind, kg: sql<number>`sum(${refrigerantMovements.kg})`.mapWith(Number) })
     .from(refrigerantMovements)
-    .where(inArray(refrigerantMovements.cylinderId, rows.map((row) => row.id)))
+    // A voided movement never moved anything: it counts in no cylinder's contents.
+    .where(and(inArray(refrigerantMovements.cylinderId, rows.map((row) => row.id)), isNull(refrigerantMovements.voidedAt)))
     .groupBy(refrigerantMovements.cylinderId, refrigerantMovements.kind);
   for (const sum of sums) {
     if (!sum.cylinderId) continue;
@@ -74,6 +79,10 @@ const movementColumns = {
   technicianName: users.name,
   at: refrigerantMovements.at,
   note: refrigerantMovements.note,
+  voidedAt: refrigerantMovements.voidedAt,
+  voidReason: refrigerantMovements.voidReason,
+  voidedByName: voiders.name,
+  voidedBy: refrigerantMovements.voidedBy,
 };
 
 export type MovementRow = Movement & { siteName: string | null; location: string | null };
@@ -86,6 +95,7 @@ function selectMovements(db: Database, conditions: SQL[]) {
     .leftJoin(sites, eq(sites.id, equipment.siteId))
     .leftJoin(cylinders, eq(cylinders.id, refrigerantMovements.cylinderId))
     .leftJoin(users, eq(users.id, refrigerantMovements.technicianId))
+    .leftJoin(voiders, eq(voiders.id, refrigerantMovements.voidedBy))
     .where(and(...conditions));
 }
 
@@ -103,6 +113,9 @@ function toMovement(row: Awaited<ReturnType<typeof selectMovements>>[number]): M
     technician: row.technicianId && row.technicianName ? { id: row.technicianId, name: row.technicianName } : null,
     at: row.at.toISOString(),
     note: row.note,
+    voided: row.voidedAt
+      ? { at: row.voidedAt.toISOString(), by: row.voidedBy && row.voidedByName ? { id: row.voidedBy, name: row.voidedByName } : null, reason: row.voidReason ?? "" }
+      : null,
     siteName: row.siteName,
     location: row.equipmentLocation,
   };
@@ -140,9 +153,12 @@ export interface RegisterFilter {
   technicianId?: string;
 }
 
-/** The register for a period, oldest first (the order a regulator's record reads in). */
+/**
+ * The register for a period, oldest first (the order a regulator's record reads in). Voided
+ * movements are left out: the register, its totals and its export hold what really moved.
+ */
 export async function registerMovements(db: Database, organisationId: string, filter: RegisterFilter): Promise<MovementRow[]> {
-  const conditions: SQL[] = [eq(refrigerantMovements.organisationId, organisationId)];
+  const conditions: SQL[] = [eq(refrigerantMovements.organisationId, organisationId), isNull(refrigerantMovements.voidedAt)];
   if (filter.fromMs !== undefined) conditions.push(gte(refrigerantMovements.at, new Date(filter.fromMs)));
   if (filter.toMs !== undefined) conditions.push(lt(refrigerantMovements.at, new Date(filter.toMs)));
   if (filter.technicianId) conditions.push(eq(refrigerantMovements.technicianId, filter.technicianId));
@@ -172,33 +188,64 @@ export async function insertMovement(db: Database, organisationId: string, value
   return toMovement(created);
 }
 
+/** The standing (not voided) full weigh-in declarations of a visit's circuits. */
 export async function visitCircuitCharges(db: Database, organisationId: string, visitId: string) {
   return db
-    .select({ circuit: circuitCharges.circuit, lineAdjustmentKg: circuitCharges.lineAdjustmentKg })
+    .select({ id: circuitCharges.id, circuit: circuitCharges.circuit, lineAdjustmentKg: circuitCharges.lineAdjustmentKg })
     .from(circuitCharges)
-    .where(and(eq(circuitCharges.organisationId, organisationId), eq(circuitCharges.visitId, visitId)));
+    .where(and(eq(circuitCharges.organisationId, organisationId), eq(circuitCharges.visitId, visitId), isNull(circuitCharges.voidedAt)));
 }
 
-/** Declares (or updates) a full weigh-in of one circuit on a visit. */
-export async function upsertCircuitCharge(
+/**
+ * Declares a full weigh-in of one circuit. A standing declaration with another line
+ * adjustment is voided first, saying what changed, so the earlier figure is kept; the same
+ * figure again changes nothing. Call under the visit's lock (writeToVisit).
+ * @returns the void of the replaced declaration, for the audit trail, if there was one
+ */
+export async function declareCircuitCharge(
   db: Database,
   organisationId: string,
   values: { visitId: string; circuit: number; lineAdjustmentKg: number; recordedBy: string },
-): Promise<void> {
-  await db
-    .insert(circuitCharges)
-    .values({ ...values, organisationId })
-    .onConflictDoUpdate({
-      target: [circuitCharges.visitId, circuitCharges.circuit],
-      set: { lineAdjustmentKg: values.lineAdjustmentKg, recordedBy: values.recordedBy, updatedAt: new Date() },
-    });
+): Promise<{ replacedId: string; reason: string } | null> {
+  const [standing] = (await visitCircuitCharges(db, organisationId, values.visitId)).filter((charge) => charge.circuit === values.circuit);
+  if (standing && standing.lineAdjustmentKg === values.lineAdjustmentKg) return null;
+  let replaced: { replacedId: string; reason: string } | null = null;
+  if (standing) {
+    const reason = `Replaced: line adjustment ${standing.lineAdjustmentKg} kg changed to ${values.lineAdjustmentKg} kg`;
+    await db
+      .update(circuitCharges)
+      .set({ voidedAt: new Date(), voidedBy: values.recordedBy, voidReason: reason, updatedAt: new Date() })
+      .where(eq(circuitCharges.id, standing.id));
+    replaced = { replacedId: standing.id, reason };
+  }
+  await db.insert(circuitCharges).values({ ...values, organisationId });
+  return replaced;
 }
 
-/** Removes a declared weigh-in (the technician unticked it). */
-export async function deleteCircuitCharge(db: Database, organisationId: string, visitId: string, circuit: number): Promise<void> {
-  await db
-    .delete(circuitCharges)
-    .where(and(eq(circuitCharges.organisationId, organisationId), eq(circuitCharges.visitId, visitId), eq(circuitCharges.circuit, circuit)));
+/**
+ * Voids a reclaim (a movement with no visit) of a cylinder. Voiding takes nothing out of the
+ * cylinder that is not in it: a reclaim only ever took refrigerant out, so it gives it back.
+ * @returns the voided movement, or why it was not voided
+ */
+export async function voidReclaim(
+  db: Database,
+  organisationId: string,
+  values: { cylinderId: string; movementId: string; reason: string; voidedBy: string },
+): Promise<MovementRow | "missing" | "on-a-visit" | "already-void"> {
+  const [row] = await db
+    .select({ visitId: refrigerantMovements.visitId, voidedAt: refrigerantMovements.voidedAt })
+    .from(refrigerantMovements)
+    .where(and(eq(refrigerantMovements.organisationId, organisationId), eq(refrigerantMovements.cylinderId, values.cylinderId), eq(refrigerantMovements.id, values.movementId)));
+  if (!row) return "missing";
+  if (row.visitId) return "on-a-visit";
+  const voided = await db
+    .update(refrigerantMovements)
+    .set({ voidedAt: new Date(), voidedBy: values.voidedBy, voidReason: values.reason })
+    .where(and(eq(refrigerantMovements.id, values.movementId), isNull(refrigerantMovements.voidedAt)))
+    .returning({ id: refrigerantMovements.id });
+  if (voided.length === 0) return "already-void";
+  const [movement] = await selectMovements(db, [eq(refrigerantMovements.id, values.movementId)]);
+  return toMovement(movement);
 }
 
 /** A member of the organisation by id (for the technician filter), or undefined. */
@@ -218,7 +265,14 @@ export async function runLogChargeMarks(db: Database, organisationId: string, vi
   const rows = await db
     .select({ kind: adjustments.kind, kg: sql<number>`coalesce(sum(${adjustments.amountKg}), 0)`.mapWith(Number) })
     .from(adjustments)
-    .where(and(eq(adjustments.organisationId, organisationId), eq(adjustments.visitId, visitId), inArray(adjustments.kind, ["charge-added", "charge-removed"])))
+    .where(
+      and(
+        eq(adjustments.organisationId, organisationId),
+        eq(adjustments.visitId, visitId),
+        inArray(adjustments.kind, ["charge-added", "charge-removed"]),
+        isNull(adjustments.voidedAt),
+      ),
+    )
     .groupBy(adjustments.kind);
   const kgOf = (kind: string) => Math.round((rows.find((row) => row.kind === kind)?.kg ?? 0) * 1000) / 1000;
   return { added: kgOf("charge-added"), removed: kgOf("charge-removed") };

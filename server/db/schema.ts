@@ -11,9 +11,10 @@ import type { AttemptAnswers, AttemptScore, CaseDifficulty, CaseExpected, CaseSt
 import type { Application, ChargeState, DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { CylinderKind, MovementKind } from "@shared/schemas/register.ts";
-import type { VisitStatus } from "@shared/schemas/visits.ts";
+import { VISIT_EVENT_ACTIONS, type VisitEventAction, type VisitStatus, type VoidableKind } from "@shared/schemas/visits.ts";
 import {
   boolean,
+  check,
   doublePrecision,
   index,
   integer,
@@ -24,11 +25,31 @@ import {
   timestamp,
   uniqueIndex,
   uuid,
+  type AnyPgColumn,
 } from "drizzle-orm/pg-core";
 
 const createdAt = timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow();
 const updatedAt = timestamp("updated_at", { withTimezone: true, mode: "date" }).notNull().defaultNow();
 const timestamps = { createdAt, updatedAt };
+
+/**
+ * A visit record is corrected by voiding it with a reason, never by deleting or editing it:
+ * the row stays, struck through on screen and left out of results, balances and the report.
+ * These columns go on every voidable record; the check keeps a void and its reason together.
+ */
+const voidColumns = () => ({
+  voidedAt: timestamp("voided_at", { withTimezone: true, mode: "date" }),
+  voidedBy: uuid("voided_by").references(() => users.id, { onDelete: "set null" }),
+  voidReason: text("void_reason"),
+});
+const voidComplete = (table: string, columns: { voidedAt: AnyPgColumn; voidReason: AnyPgColumn }) =>
+  check(`${table}_void_complete`, sql`(${columns.voidedAt} is null) = (${columns.voidReason} is null)`);
+
+/**
+ * Optimistic concurrency for records people edit: every change bumps the version, and a write
+ * naming an older version (If-Match) is refused with 409 instead of silently overwriting.
+ */
+const version = (name = "version") => integer(name).notNull().default(1);
 
 /** The service company: the customer of Satura. */
 export const organisations = pgTable("organisations", {
@@ -36,6 +57,8 @@ export const organisations = pgTable("organisations", {
   name: text("name").notNull(),
   /** Overrides of trade limits where local codes differ (e.g. evacuation target). */
   settings: jsonb("settings").$type<Record<string, unknown>>().notNull().default({}),
+  /** Version of `settings` (the company limits), for If-Match on PATCH. */
+  settingsVersion: version("settings_version"),
   ...timestamps,
 });
 
@@ -61,6 +84,8 @@ export const users = pgTable(
     deactivatedAt: timestamp("deactivated_at", { withTimezone: true, mode: "date" }),
     /** Refrigerant handling licence or certificate number, printed in the register export. */
     licenceNumber: text("licence_number"),
+    /** Version of what the person edits on their profile (name, preferences, licence), for If-Match. */
+    profileVersion: version("profile_version"),
     ...timestamps,
   },
   (table) => [
@@ -280,9 +305,20 @@ export const readings = pgTable(
     input: jsonb("input").$type<DiagnosisInput>().notNull(),
     result: jsonb("result").$type<DiagnosisResult>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    /**
+     * Set while a CSV import stores its rows in short slices (so other requests are not held
+     * up); the import makes them readings in one step at the end. Rows still carrying it are
+     * not records: every read skips them, and start-up removes any an interruption left.
+     */
+    pendingImportId: uuid("pending_import_id"),
+    ...voidColumns(),
     createdAt,
   },
-  (table) => [index("readings_visit_idx").on(table.visitId, table.circuit, table.takenAt)],
+  (table) => [
+    index("readings_visit_idx").on(table.visitId, table.circuit, table.takenAt),
+    index("readings_pending_import_idx").on(table.pendingImportId).where(sql`${table.pendingImportId} is not null`),
+    voidComplete("readings", table),
+  ],
 );
 
 /** A change made to the unit during the visit, drawn on the trend chart. */
@@ -302,9 +338,10 @@ export const adjustments = pgTable(
     description: text("description").notNull(),
     amountKg: doublePrecision("amount_kg"),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    ...voidColumns(),
     createdAt,
   },
-  (table) => [index("adjustments_visit_idx").on(table.visitId, table.at)],
+  (table) => [index("adjustments_visit_idx").on(table.visitId, table.at), voidComplete("adjustments", table)],
 );
 
 export const visitComments = pgTable(
@@ -373,9 +410,10 @@ export const electricalChecks = pgTable(
     result: jsonb("result").$type<Record<string, unknown>>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...voidColumns(),
     createdAt,
   },
-  (table) => [index("electrical_checks_visit_idx").on(table.visitId, table.takenAt)],
+  (table) => [index("electrical_checks_visit_idx").on(table.visitId, table.takenAt), voidComplete("electrical_checks", table)],
 );
 
 /** One leak search: the method, the places checked, leaks found and repaired, the recheck. */
@@ -394,9 +432,10 @@ export const leakSearches = pgTable(
     result: jsonb("result").$type<Record<string, unknown>>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...voidColumns(),
     createdAt,
   },
-  (table) => [index("leak_searches_visit_idx").on(table.visitId, table.takenAt)],
+  (table) => [index("leak_searches_visit_idx").on(table.visitId, table.takenAt), voidComplete("leak_searches", table)],
 );
 
 /** A nitrogen strength/tightness test: test pressure against the rated pressure, start and end of the hold. */
@@ -414,9 +453,10 @@ export const pressureTests = pgTable(
     result: jsonb("result").$type<Record<string, unknown>>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...voidColumns(),
     createdAt,
   },
-  (table) => [index("pressure_tests_visit_idx").on(table.visitId, table.takenAt)],
+  (table) => [index("pressure_tests_visit_idx").on(table.visitId, table.takenAt), voidComplete("pressure_tests", table)],
 );
 
 /**
@@ -441,9 +481,12 @@ export const evacuations = pgTable(
     result: jsonb("result").$type<Record<string, unknown>>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     startedAt: timestamp("started_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    /** Valving off, the target and the note can change (PATCH with If-Match). */
+    version: version(),
+    ...voidColumns(),
     ...timestamps,
   },
-  (table) => [index("evacuations_visit_idx").on(table.visitId, table.startedAt)],
+  (table) => [index("evacuations_visit_idx").on(table.visitId, table.startedAt), voidComplete("evacuations", table)],
 );
 
 /**
@@ -470,6 +513,7 @@ export const casebookCases = pgTable(
     fromReadingId: uuid("from_reading_id").references(() => readings.id, { onDelete: "set null" }),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     publishedAt: timestamp("published_at", { withTimezone: true, mode: "date" }),
+    version: version(),
     ...timestamps,
   },
   (table) => [index("casebook_cases_organisation_idx").on(table.organisationId, table.status)],
@@ -565,9 +609,11 @@ export const refrigerantMovements = pgTable(
     technicianId: uuid("technician_id").references(() => users.id),
     at: timestamp("at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     note: text("note"),
+    ...voidColumns(),
     createdAt,
   },
   (table) => [
+    voidComplete("refrigerant_movements", table),
     index("refrigerant_movements_organisation_idx").on(table.organisationId, table.at),
     index("refrigerant_movements_visit_idx").on(table.visitId),
     index("refrigerant_movements_equipment_idx").on(table.equipmentId, table.at),
@@ -592,7 +638,42 @@ export const circuitCharges = pgTable(
     circuit: integer("circuit").notNull(),
     lineAdjustmentKg: doublePrecision("line_adjustment_kg").notNull().default(0),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    ...voidColumns(),
     ...timestamps,
   },
-  (table) => [uniqueIndex("circuit_charges_visit_circuit_unique").on(table.visitId, table.circuit)],
+  (table) => [
+    // One standing declaration per circuit; voided ones stay beside it as history.
+    uniqueIndex("circuit_charges_visit_circuit_unique").on(table.visitId, table.circuit).where(sql`${table.voidedAt} is null`),
+    voidComplete("circuit_charges", table),
+  ],
+);
+
+/**
+ * A visit's audit trail: who did what to the record and why — review steps, reopening,
+ * voids (naming the record) and imports. Rows are only ever added.
+ */
+export const visitEvents = pgTable(
+  "visit_events",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    action: text("action").$type<VisitEventAction>().notNull(),
+    /** The record concerned (a void), by kind and id; null for events about the whole visit. */
+    recordKind: text("record_kind").$type<VoidableKind>(),
+    recordId: uuid("record_id"),
+    /** What it was about, in words, e.g. "Reading at 10:42, circuit 1". */
+    summary: text("summary").notNull(),
+    reason: text("reason"),
+    actorId: uuid("actor_id").references(() => users.id, { onDelete: "set null" }),
+    at: timestamp("at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (table) => [
+    index("visit_events_visit_idx").on(table.visitId, table.at),
+    check("visit_events_action_known", sql.raw(`action in (${VISIT_EVENT_ACTIONS.map((action) => `'${action}'`).join(", ")})`)),
+  ],
 );

@@ -2,15 +2,19 @@
  * Queries for visits and their run log. Every function takes the caller's organisation id;
  * a visit of another organisation reads as missing.
  */
-import { and, asc, count, desc, eq, inArray, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, isNotNull, isNull, sql, type SQL } from "drizzle-orm";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import type { Adjustment, Comment, Photo, Reading, VisitStatus, VisitSummary } from "@shared/schemas/visits.ts";
+import { siteAtmosphere } from "../visits/reading-input.ts";
 import type { Database } from "./client.ts";
-import { peopleById, person, type People } from "./people.ts";
+import { peopleById, person, voidInfo, type People } from "./people.ts";
 import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitTechnicians, visits } from "./schema.ts";
+import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
 
-
-
+/** Readings that are records: not rows of a CSV import still being stored (see readings.pendingImportId). */
+const isRecord = isNull(readings.pendingImportId);
+/** Readings that count in results: records not voided. */
+const countsInResults = and(isRecord, isNull(readings.voidedAt));
 
 const summaryColumns = {
   id: visits.id,
@@ -31,7 +35,7 @@ async function summarise(db: Database, rows: { id: string; startedAt: Date }[]):
   const counts = await db
     .select({ visitId: readings.visitId, n: count() })
     .from(readings)
-    .where(inArray(readings.visitId, ids))
+    .where(and(inArray(readings.visitId, ids), countsInResults))
     .groupBy(readings.visitId);
   const crew = await db
     .select({ visitId: visitTechnicians.visitId, id: users.id, name: users.name })
@@ -88,6 +92,7 @@ export async function createVisit(
   return db.transaction(async (tx) => {
     const [row] = await tx.insert(visits).values({ ...values, organisationId }).returning({ id: visits.id });
     await tx.insert(visitTechnicians).values({ visitId: row.id, userId: values.createdBy });
+    await insertVisitEvent(tx, organisationId, { visitId: row.id, action: "started", summary: values.reason, actorId: values.createdBy });
     return row.id;
   });
 }
@@ -110,6 +115,8 @@ export async function insertReading(
   return toReading(row, people);
 }
 
+const mentionedPeople = (row: { recordedBy: string | null; voidedBy: string | null }) => [row.recordedBy, row.voidedBy];
+
 function toReading(row: typeof readings.$inferSelect, people: People): Reading {
   return {
     id: row.id,
@@ -120,6 +127,7 @@ function toReading(row: typeof readings.$inferSelect, people: People): Reading {
     input: row.input,
     result: row.result,
     recordedBy: person(people, row.recordedBy),
+    voided: voidInfo(row, people),
   };
 }
 
@@ -132,6 +140,7 @@ function toAdjustment(row: typeof adjustments.$inferSelect, people: People): Adj
     description: row.description,
     amountKg: row.amountKg,
     recordedBy: person(people, row.recordedBy),
+    voided: voidInfo(row, people),
   };
 }
 
@@ -153,7 +162,7 @@ export async function insertComment(
     const [reading] = await db
       .select({ id: readings.id })
       .from(readings)
-      .where(and(eq(readings.id, values.readingId), eq(readings.visitId, values.visitId)));
+      .where(and(eq(readings.id, values.readingId), eq(readings.visitId, values.visitId), isRecord));
     if (!reading) return undefined;
   }
   const [row] = await db.insert(visitComments).values({ ...values, organisationId }).returning();
@@ -179,7 +188,14 @@ export function photoUrls(id: string): Pick<Photo, "url" | "thumbnailUrl"> {
 /** The whole visit: summary, review state, and its run log in time order. */
 export async function getVisitDetail(db: Database, organisationId: string, visitId: string) {
   const [summary] = await db
-    .select({ ...summaryColumns, customerContactEmail: customers.contactEmail, reviewNote: visits.reviewNote, signedOffBy: visits.signedOffBy, signedOffAt: visits.signedOffAt })
+    .select({
+      ...summaryColumns,
+      customerContactEmail: customers.contactEmail,
+      reviewNote: visits.reviewNote,
+      signedOffBy: visits.signedOffBy,
+      signedOffAt: visits.signedOffAt,
+      siteAltitudeM: sites.altitudeM,
+    })
     .from(visits)
     .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
     .innerJoin(sites, eq(sites.id, equipment.siteId))
@@ -187,22 +203,26 @@ export async function getVisitDetail(db: Database, organisationId: string, visit
     .where(and(eq(visits.organisationId, organisationId), eq(visits.id, visitId)));
   if (!summary) return undefined;
 
-  const [readingRows, adjustmentRows, commentRows, photoRows, extra] = await Promise.all([
-    db.select().from(readings).where(eq(readings.visitId, visitId)).orderBy(asc(readings.takenAt), asc(readings.createdAt)),
+  const [readingRows, adjustmentRows, commentRows, photoRows, extra, events] = await Promise.all([
+    db.select().from(readings).where(and(eq(readings.visitId, visitId), isRecord)).orderBy(asc(readings.takenAt), asc(readings.createdAt)),
     db.select().from(adjustments).where(eq(adjustments.visitId, visitId)).orderBy(asc(adjustments.at)),
     db.select().from(visitComments).where(eq(visitComments.visitId, visitId)).orderBy(asc(visitComments.createdAt)),
     db.select().from(photos).where(eq(photos.visitId, visitId)).orderBy(asc(photos.createdAt)),
     summarise(db, [summary]),
+    listVisitEvents(db, organisationId, visitId),
   ]);
   const people = await peopleById(db, [
     summary.signedOffBy,
-    ...readingRows.map((row) => row.recordedBy),
-    ...adjustmentRows.map((row) => row.recordedBy),
+    ...readingRows.flatMap(mentionedPeople),
+    ...adjustmentRows.flatMap(mentionedPeople),
     ...commentRows.map((row) => row.authorId),
   ]);
+  const { siteAltitudeM, ...visit } = summary;
   return {
-    ...summary,
+    ...visit,
     ...extra.get(summary.id)!,
+    atmosphere: siteAtmosphere({ altitudeM: siteAltitudeM }),
+    events,
     startedAt: summary.startedAt.toISOString(),
     signedOffBy: person(people, summary.signedOffBy),
     signedOffAt: summary.signedOffAt?.toISOString() ?? null,
@@ -231,11 +251,15 @@ export async function latestVisitReadings(db: Database, organisationId: string, 
     .select({ visitId: readings.visitId })
     .from(readings)
     .innerJoin(visits, eq(visits.id, readings.visitId))
-    .where(and(eq(visits.organisationId, organisationId), eq(visits.equipmentId, equipmentId)))
+    .where(and(eq(visits.organisationId, organisationId), eq(visits.equipmentId, equipmentId), countsInResults))
     .orderBy(desc(readings.takenAt))
     .limit(1);
   if (!latest) return [];
-  return db.select().from(readings).where(eq(readings.visitId, latest.visitId)).orderBy(asc(readings.takenAt));
+  return db
+    .select()
+    .from(readings)
+    .where(and(eq(readings.visitId, latest.visitId), countsInResults))
+    .orderBy(asc(readings.takenAt));
 }
 
 export async function insertPhoto(
@@ -255,18 +279,37 @@ export async function findPhoto(db: Database, organisationId: string, photoId: s
   return row;
 }
 
-/** Stores an imported series in one transaction: all rows or none. */
-export async function insertReadingSeries(
+/**
+ * One slice of a CSV import, stored hidden under its import id. `rowsJson` is the worker's
+ * JSON array of { takenAt, input, result }: PostgreSQL unpacks it, so the server's thread
+ * never builds or parses the whole series, and each slice holds the database only briefly.
+ */
+export async function stageImportedReadings(
   db: Database,
   organisationId: string,
-  visitId: string,
-  circuit: number,
-  rows: { takenAt: Date; input: DiagnosisInput; result: DiagnosisResult }[],
-  recordedBy: string,
-): Promise<number> {
-  if (rows.length === 0) return 0;
-  await db.transaction(async (tx) => {
-    await tx.insert(readings).values(rows.map((row) => ({ ...row, organisationId, visitId, circuit, recordedBy, note: "imported from CSV" })));
-  });
+  values: { importId: string; visitId: string; circuit: number; recordedBy: string; rowsJson: string },
+): Promise<void> {
+  await db.execute(sql`
+    insert into ${readings} (organisation_id, visit_id, circuit, taken_at, input, result, recorded_by, note, pending_import_id)
+    select ${organisationId}, ${values.visitId}, ${values.circuit}, (row->>'takenAt')::timestamptz, row->'input', row->'result',
+           ${values.recordedBy}, 'imported from CSV', ${values.importId}
+    from jsonb_array_elements(${values.rowsJson}::jsonb) as row`);
+}
+
+/** Makes a staged import's rows readings, all in one step (call under the visit's lock). */
+export async function commitImportedReadings(db: Database, importId: string): Promise<number> {
+  const rows = await db
+    .update(readings)
+    .set({ pendingImportId: null })
+    .where(eq(readings.pendingImportId, importId))
+    .returning({ id: readings.id });
   return rows.length;
+}
+
+/**
+ * Removes rows an import staged but never committed (refused, failed, or cut off by a
+ * restart): they were never records, so nothing recorded is lost. Without an id, every one.
+ */
+export async function discardStagedReadings(db: Database, importId?: string): Promise<void> {
+  await db.delete(readings).where(importId ? eq(readings.pendingImportId, importId) : isNotNull(readings.pendingImportId));
 }

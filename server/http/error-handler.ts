@@ -5,14 +5,23 @@ import { DiagnosisInputError } from "@shared/engine/index.ts";
 import { uniqueViolation } from "../db/errors.ts";
 import { HttpError } from "./http-error.ts";
 
-/** Turns zod issues into one message per field path, e.g. { "suctionPressureKPa": "..." }. */
+/**
+ * Turns zod issues into one message per field path, e.g. { "suctionPressureKPa": "..." }. A
+ * field a strict body does not take is listed under its own name, so the client can say which.
+ */
 export function fieldMessages(error: ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {
-    const key = issue.path.length > 0 ? issue.path.join(".") : "_";
-    fields[key] ??= issue.message;
+    const prefix = issue.path.length > 0 ? `${issue.path.join(".")}.` : "";
+    const keys = issue.code === "unrecognized_keys" ? issue.keys.map((key) => `${prefix}${key}`) : [issue.path.length > 0 ? issue.path.join(".") : "_"];
+    for (const key of keys) fields[key] ??= issue.message;
   }
   return fields;
+}
+
+/** The answer's headline: what an unknown field is, when there is one, else a general prompt. */
+function validationMessage(error: ZodError): string {
+  return error.issues.find((issue) => issue.code === "unrecognized_keys")?.message ?? "Some fields need attention";
 }
 
 /** Unknown /api paths answer JSON, never the client's index.html. */
@@ -27,7 +36,7 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
  */
 export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   if (error instanceof ZodError) {
-    res.status(400).json({ message: "Some fields need attention", fields: fieldMessages(error) });
+    res.status(400).json({ message: validationMessage(error), fields: fieldMessages(error) });
     return;
   }
   if (error instanceof DiagnosisInputError) {
@@ -37,7 +46,7 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   }
   if (error instanceof multer.MulterError) {
     const tooLarge = error.code === "LIMIT_FILE_SIZE";
-    res.status(tooLarge ? 413 : 400).json({ message: tooLarge ? "That file is too large (12 MB at most)" : `Upload refused: ${error.message}` });
+    res.status(tooLarge ? 413 : 400).json({ message: tooLarge ? "That file is too large" : `Upload refused: ${error.message}` });
     return;
   }
   // Two requests raced past a route's own "is it taken?" check; the unique index held.

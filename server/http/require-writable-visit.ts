@@ -1,7 +1,11 @@
-import type { VisitStatus } from "@shared/schemas/visits.ts";
+import { closedVisitMessage, STATUSES_OPEN_FOR_ENTRIES, type VisitStatus } from "@shared/schemas/visits.ts";
 import { HttpError } from "./http-error.ts";
 
-/** A signed-off visit is a closed record: nothing more is written to it (readings, procedures, photos). */
-export function requireWritableVisit(status: VisitStatus): void {
-  if (status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
+/**
+ * A visit awaiting review or signed off takes no new entries (readings, procedures,
+ * refrigerant, photos) and no voids until a senior or owner reopens it. Routes call this
+ * early to refuse before any slow work; writeToVisit checks again under the row lock.
+ */
+export function requireWritableVisit(status: VisitStatus, allow: readonly VisitStatus[] = STATUSES_OPEN_FOR_ENTRIES): void {
+  if (!allow.includes(status)) throw new HttpError(409, closedVisitMessage(status));
 }

@@ -1,32 +1,30 @@
 /**
  * Import of a logged reading series from CSV (a data logger's export or a spreadsheet).
- * Values are SI-metric as stored: kPa gauge, °C, %, A, minutes. Each row is checked with the
- * same contract as a hand-entered reading; every bad row is reported with its line number.
+ * Values are SI-metric as stored: kPa gauge, °C, %, A, minutes. Each row goes through the same
+ * builder as a hand-entered reading (server/visits/reading-input.ts), so its targets, RLA and
+ * atmosphere come from the equipment and the site; every bad row is reported with its line.
+ *
+ * This module runs in a worker thread (readings-csv-worker.mjs through csv-import-pool.ts):
+ * parsing and diagnosing thousands of rows would otherwise hold up every other request. It is
+ * pure — text and plain data in, plain data out — so it also runs directly in tests.
  */
 import { parse } from "csv-parse/sync";
 import { z } from "zod";
 import { diagnose } from "@shared/engine/index.ts";
-import { DiagnosisInputSchema, type DiagnosisInput, type DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import { isStorableInstant } from "@shared/schemas/dates.ts";
+import { MEASURED_FIELDS, type NumericMeasuredField } from "@shared/schemas/visits.ts";
+import { readingInput, type ReadingContext } from "../visits/reading-input.ts";
 
-/** Reading fields a column can be mapped to, besides the time column. */
-export const IMPORTABLE_FIELDS = [
-  "suctionPressureKPa",
-  "suctionLineTempC",
-  "dischargePressureKPa",
-  "dischargeLineTempC",
-  "liquidPressureKPa",
-  "liquidLineTempC",
-  "returnAirDryBulbC",
-  "returnAirWetBulbC",
-  "returnAirRelativeHumidity",
-  "supplyAirDryBulbC",
-  "outdoorAirDryBulbC",
-  "compressorAmps",
-  "runMinutes",
-] as const;
-export type ImportableField = (typeof IMPORTABLE_FIELDS)[number];
+/** Reading fields a column can be mapped to, besides the time column: every measured number. */
+export const IMPORTABLE_FIELDS = MEASURED_FIELDS.filter((field): field is NumericMeasuredField => field !== "liquidTempLocation");
+export type ImportableField = NumericMeasuredField;
 export const MAX_IMPORT_ROWS = 5000;
+/** A logger's export has a time column and a dozen readings; 64 columns leaves room for any. */
+export const MAX_IMPORT_COLUMNS = 64;
+/** 64 columns of 60 characters; a longer line is not a reading series (or has lost its line breaks). */
+export const MAX_IMPORT_LINE_CHARS = 4096;
+/** Rows per slice handed back for storing: each slice holds the database for a few tens of milliseconds. */
+export const IMPORT_SLICE_ROWS = 50;
 
 // The labels the client shows for these targets live in shared/schemas/readings-import.ts.
 export const ColumnMappingSchema = z.record(z.string(), z.union([z.enum(IMPORTABLE_FIELDS), z.literal("takenAt"), z.literal("ignore")]));
@@ -68,26 +66,36 @@ export interface RowProblem {
   message: string;
 }
 
-export interface ParsedRow {
-  line: number;
-  takenAt: Date;
-  input: DiagnosisInput;
-  result: DiagnosisResult;
+/** What the import route sends the worker: only plain data, so it crosses threads as is. */
+export interface CsvImportTask {
+  text: string;
+  mapping?: ColumnMapping;
+  /** The equipment, circuit nameplate and site the readings belong to. */
+  context: ReadingContext;
+  /** Local midnight of the logging day (ISO, with the client's offset), for times of day like 10:05. */
+  dayStart: string;
+  /** True to hand back the valid rows, judged and serialised for storing; false for a preview. */
+  keepRows: boolean;
 }
 
 export interface ImportPreview {
   headers: string[];
   mapping: ColumnMapping;
   rowCount: number;
-  valid: ParsedRow[];
+  validCount: number;
   problems: RowProblem[];
+  /**
+   * The valid rows as UTF-8 JSON arrays of { takenAt, input, result }, IMPORT_SLICE_ROWS at a
+   * time (only when keepRows), all views of one buffer. Serialised here and handed over without
+   * a copy (the worker transfers the buffer), so the server's thread neither builds nor clones
+   * thousands of objects; PostgreSQL unpacks them (stageImportedReadings).
+   */
+  slices: Uint8Array[];
 }
 
-interface ImportContext {
-  /** Merged into every row: refrigerant, metering device, nameplate targets, RLA, atmosphere. */
-  base: Partial<DiagnosisInput> & Pick<DiagnosisInput, "refrigerant" | "meteringDevice">;
-  /** Local midnight of the logging day (from the client, with its offset), for times of day like 10:05. */
-  dayStart: Date;
+/** A file refused as a whole, with the status and message the route answers. */
+export interface ImportRefusal {
+  refused: { status: number; message: string };
 }
 
 /** A time cell as an instant the database can store (a cell like "99999" reads as the year 99999), or null. */
@@ -104,32 +112,69 @@ function parseTime(text: string, dayStart: Date): Date | null {
   return isStorableInstant(ms) ? new Date(ms) : null;
 }
 
-export function previewReadingsCsv(text: string, mappingIn: ColumnMapping | undefined, context: ImportContext): ImportPreview {
+const thousands = (value: number) => value.toLocaleString("en-GB").replace(/,/g, " ");
+
+/** Refuses what is not a reading series before parsing it: an overlong line (e.g. a 1.9 MB header). */
+function overlongLine(text: string): ImportRefusal | null {
+  let line = 1;
+  let start = 0;
+  while (start <= text.length) {
+    const end = text.indexOf("\n", start);
+    const stop = end === -1 ? text.length : end;
+    if (stop - start > MAX_IMPORT_LINE_CHARS) {
+      const message = `Line ${line} has ${thousands(stop - start)} characters; a line may have at most ${thousands(MAX_IMPORT_LINE_CHARS)}. Is this a logger's reading series?`;
+      return { refused: { status: 400, message } };
+    }
+    if (end === -1) break;
+    start = end + 1;
+    line += 1;
+  }
+  return null;
+}
+
+const readError = (error: unknown): ImportRefusal => ({ refused: { status: 400, message: `This is not a readable CSV file: ${(error as Error).message}` } });
+
+export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRefusal {
+  const tooLong = overlongLine(task.text);
+  if (tooLong) return tooLong;
   let records: string[][];
   try {
-    records = parse(text, { skip_empty_lines: true, trim: true, relax_column_count: true, bom: true });
+    const [header = []] = parse(task.text, { to_line: 1, bom: true, trim: true, relax_column_count: true }) as string[][];
+    if (header.length > MAX_IMPORT_COLUMNS) {
+      return { refused: { status: 400, message: `The header has ${thousands(header.length)} columns; Satura reads at most ${MAX_IMPORT_COLUMNS}.` } };
+    }
+    records = parse(task.text, { skip_empty_lines: true, trim: true, relax_column_count: true, bom: true });
   } catch (error) {
-    return { headers: [], mapping: {}, rowCount: 0, valid: [], problems: [{ line: 1, message: `This is not a readable CSV file: ${(error as Error).message}` }] };
+    return readError(error);
   }
   const [headers = [], ...rows] = records;
-  const mapping = mappingIn ?? guessMapping(headers);
+  const mapping = task.mapping ?? guessMapping(headers);
   const problems: RowProblem[] = [];
-  const valid: ParsedRow[] = [];
+  const valid: { takenAt: string; input: unknown; result: unknown }[] = [];
+  const summary = () => ({
+    headers,
+    mapping,
+    rowCount: rows.length,
+    validCount: valid.length,
+    problems,
+    slices: task.keepRows ? slicesOf(valid) : [],
+  });
   const timeColumn = headers.findIndex((header) => mapping[header] === "takenAt");
   if (headers.length === 0) problems.push({ line: 1, message: "The file is empty" });
   if (timeColumn < 0 && headers.length > 0) problems.push({ line: 1, message: "Map one column to the reading time" });
   if (rows.length > MAX_IMPORT_ROWS) problems.push({ line: MAX_IMPORT_ROWS + 2, message: `At most ${MAX_IMPORT_ROWS} rows per import` });
-  if (problems.length > 0) return { headers, mapping, rowCount: rows.length, valid, problems };
+  if (problems.length > 0) return summary();
 
+  const dayStart = new Date(task.dayStart);
   let previousTime = -Infinity;
   rows.forEach((row, index) => {
     const line = index + 2;
-    const takenAt = parseTime(row[timeColumn] ?? "", context.dayStart);
+    const takenAt = parseTime(row[timeColumn] ?? "", dayStart);
     if (!takenAt) return problems.push({ line, field: "takenAt", message: `“${row[timeColumn] ?? ""}” is not a time (use 2026-03-14T10:05 or 10:05)` });
     if (takenAt.getTime() <= previousTime) return problems.push({ line, field: "takenAt", message: "Rows must be in time order, each later than the one before" });
     previousTime = takenAt.getTime();
 
-    const values: Record<string, number> = {};
+    const values: Partial<Record<ImportableField, number>> = {};
     for (const [column, header] of headers.entries()) {
       const field = mapping[header];
       if (!field || field === "ignore" || field === "takenAt") continue;
@@ -139,12 +184,26 @@ export function previewReadingsCsv(text: string, mappingIn: ColumnMapping | unde
       if (!Number.isFinite(number)) return problems.push({ line, field, message: `${header}: “${row[column]}” is not a number` });
       values[field] = number;
     }
-    const parsed = DiagnosisInputSchema.safeParse({ ...context.base, ...values });
+    const parsed = readingInput(values, task.context);
     if (!parsed.success) {
       const issue = parsed.error.issues[0]!;
       return problems.push({ line, field: issue.path.join(".") || undefined, message: issue.message });
     }
-    valid.push({ line, takenAt, input: parsed.data, result: diagnose(parsed.data) });
+    valid.push({ takenAt: takenAt.toISOString(), input: parsed.data, result: diagnose(parsed.data) });
   });
-  return { headers, mapping, rowCount: rows.length, valid, problems };
+  return summary();
+}
+
+function slicesOf(rows: readonly unknown[]): Uint8Array[] {
+  const encoder = new TextEncoder();
+  const encoded: Uint8Array[] = [];
+  for (let start = 0; start < rows.length; start += IMPORT_SLICE_ROWS) encoded.push(encoder.encode(JSON.stringify(rows.slice(start, start + IMPORT_SLICE_ROWS))));
+  // One buffer for all slices, so the worker can transfer it in one move.
+  const buffer = new Uint8Array(encoded.reduce((total, slice) => total + slice.length, 0));
+  let offset = 0;
+  return encoded.map((slice) => {
+    buffer.set(slice, offset);
+    offset += slice.length;
+    return buffer.subarray(offset - slice.length, offset);
+  });
 }

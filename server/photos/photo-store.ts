@@ -1,5 +1,5 @@
 import { randomBytes } from "node:crypto";
-import { mkdir, readFile, writeFile } from "node:fs/promises";
+import { mkdir, readFile, rm, writeFile } from "node:fs/promises";
 import { join } from "node:path";
 import sharp, { type Metadata } from "sharp";
 import { HttpError } from "../http/http-error.ts";
@@ -90,4 +90,9 @@ export function readPhoto(folder: string, name: string): Promise<Buffer> {
   // Names come from the database, never from the request; still refuse anything path-like.
   if (!/^[a-f0-9]{32}(-thumb)?\.(jpg|png|webp)$/.test(name)) throw new HttpError(404, "Photo not found");
   return readFile(join(folder, name));
+}
+
+/** Removes the files of a photo that was refused after they were written (its visit closed meanwhile). */
+export async function discardPhoto(folder: string, photo: Pick<StoredPhoto, "storedName" | "thumbnailName">): Promise<void> {
+  await Promise.all([photo.storedName, photo.thumbnailName].map((name) => rm(join(folder, name), { force: true })));
 }

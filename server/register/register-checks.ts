@@ -75,8 +75,11 @@ export function toCylinder(row: CylinderRow): Cylinder {
   };
 }
 
+/** Voided movements stay on the lists, struck through, but count in no sum of kilograms. */
 const sumKg = (movements: readonly MovementRow[], kinds: readonly MovementKind[]) =>
-  Math.round(movements.filter((movement) => kinds.includes(movement.kind)).reduce((sum, movement) => sum + movement.kg, 0) * 1000) / 1000;
+  Math.round(
+    movements.filter((movement) => movement.voided === null && kinds.includes(movement.kind)).reduce((sum, movement) => sum + movement.kg, 0) * 1000,
+  ) / 1000;
 
 export const ADDED_KINDS: readonly MovementKind[] = ["added-new", "added-reclaimed"];
 
@@ -85,7 +88,7 @@ export const ADDED_KINDS: readonly MovementKind[] = ["added-new", "added-reclaim
  * this visit (emptied and recharged) or the technician declared a full weigh-in; the weighed-in
  * mass is what the register says went in (reused + added), so it is never typed twice.
  */
-export function circuitBalance(nameplate: CircuitNameplate, movements: readonly MovementRow[], declared: { lineAdjustmentKg: number } | undefined): CircuitBalance {
+export function circuitBalance(nameplate: CircuitNameplate, movements: readonly MovementRow[], declared: { id: string; lineAdjustmentKg: number } | undefined): CircuitBalance {
   const own = movements.filter((movement) => movement.circuit === nameplate.number);
   const recoveredKg = sumKg(own, ["recovered"]);
   const reusedKg = sumKg(own, ["reused"]);
@@ -109,6 +112,7 @@ export function circuitBalance(nameplate: CircuitNameplate, movements: readonly 
           weighedInKg,
           lineAdjustmentKg,
           declared: declared !== undefined,
+          declarationId: declared?.id ?? null,
           check,
         }
       : null,
@@ -139,7 +143,7 @@ export function liquidChargingNote(refrigerantId: string): { note: string | null
 export function topUps(movements: readonly MovementRow[]): EquipmentRefrigerant["topUps"] {
   const byVisit = new Map<string, MovementRow[]>();
   for (const movement of movements) {
-    if (!movement.visitId) continue;
+    if (!movement.visitId || movement.voided !== null) continue;
     byVisit.set(movement.visitId, [...(byVisit.get(movement.visitId) ?? []), movement]);
   }
   const result: EquipmentRefrigerant["topUps"] = [];

@@ -12,7 +12,10 @@ const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (character) => `&#
  * Metric units, as stored.
  */
 export function visitReportMail(visit: Visit, reportUrl: string, to: string, organisationId: string): MailMessage {
-  const circuits = [...new Set(visit.readings.map((reading) => reading.circuit))].sort();
+  // Voided records are corrections: the report leaves them out (the audit trail keeps them).
+  const readings = visit.readings.filter((reading) => reading.voided === null);
+  const adjustments = visit.adjustments.filter((adjustment) => adjustment.voided === null);
+  const circuits = [...new Set(readings.map((reading) => reading.circuit))].sort();
   const lines: string[] = [
     `Service visit report — ${visit.equipmentName}`,
     `${visit.customerName}, ${visit.siteName}`,
@@ -22,16 +25,16 @@ export function visitReportMail(visit: Visit, reportUrl: string, to: string, org
     "",
   ];
   for (const circuit of circuits) {
-    const last = visit.readings.filter((reading) => reading.circuit === circuit).at(-1)!;
+    const last = readings.filter((reading) => reading.circuit === circuit).at(-1)!;
     lines.push(
       `Circuit ${circuit}, last reading: ${chargeStateText[last.result.chargeState].title}.`,
       `  Evaporating ${fixed(last.result.evaporatingTempC)} °C, superheat ${fixed(last.result.superheatK)} K; condensing ${fixed(last.result.condensingTempC)} °C, subcooling ${fixed(last.result.subcoolingK)} K.`,
     );
   }
   if (circuits.length === 0) lines.push("No readings were recorded.");
-  if (visit.adjustments.length > 0) {
+  if (adjustments.length > 0) {
     lines.push("", "Work done:");
-    for (const adjustment of visit.adjustments) lines.push(`  - ${adjustment.description}${adjustment.amountKg != null ? ` (${adjustment.amountKg} kg)` : ""}`);
+    for (const adjustment of adjustments) lines.push(`  - ${adjustment.description}${adjustment.amountKg != null ? ` (${adjustment.amountKg} kg)` : ""}`);
   }
   lines.push("", `Full report: ${reportUrl}`);
   const text = lines.join("\n");

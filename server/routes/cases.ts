@@ -24,9 +24,11 @@ import {
   publishCase,
   updateCase,
   type CaseRecord,
+  type CaseWrite,
 } from "../db/casebook.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
+import { requireIfMatch, setVersion, staleWrite } from "../http/versioning.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
 
 type Deps = Pick<AccountRouteDeps, "db">;
@@ -55,6 +57,7 @@ function toCase(record: CaseRecord, showAnswers: boolean): Case {
     fromReading: record.fromReading,
     editable: showAnswers && record.source === "organisation",
     updatedAt: record.updatedAt,
+    version: record.version,
   };
 }
 
@@ -77,7 +80,14 @@ export function casesRouter({ db }: Deps): Router {
   async function send(res: Response, organisationId: string, id: string, status = 200) {
     const record = await findCase(db, organisationId, id, true);
     if (!record) throw notFound("Case");
+    if (record.version !== null) setVersion(res, record.version);
     res.status(status).json({ case: toCase(record, true) });
+  }
+
+  /** A versioned write's outcome as an answer: 404 for no such case, 409 for a stale copy. */
+  function requireDone(outcome: CaseWrite) {
+    if (outcome === "missing") throw notFound("Case");
+    if (outcome === "stale") throw staleWrite("this case");
   }
 
   router.get("/", async (_req, res) => {
@@ -148,7 +158,7 @@ export function casesRouter({ db }: Deps): Router {
     refuseSharedCase(id);
     const { organisationId } = getAuth(res);
     const draft = CaseDraftSchema.parse(req.body);
-    if (!(await updateCase(db, organisationId, parseId(id, "Case"), withEngineAnswers(draft)))) throw notFound("Case");
+    requireDone(await updateCase(db, organisationId, parseId(id, "Case"), withEngineAnswers(draft), requireIfMatch(req)));
     await send(res, organisationId, id);
   });
 
@@ -157,14 +167,14 @@ export function casesRouter({ db }: Deps): Router {
     // A built-in case is already published to everyone: a conflict with its state, not a permission.
     refuseSharedCase(id, 409);
     const { organisationId } = getAuth(res);
-    if (!(await publishCase(db, organisationId, parseId(id, "Case")))) throw notFound("Case");
+    requireDone(await publishCase(db, organisationId, parseId(id, "Case"), requireIfMatch(req)));
     await send(res, organisationId, id);
   });
 
   router.delete("/:id", async (req, res) => {
     const id = String(req.params.id);
     refuseSharedCase(id);
-    if (!(await deleteCase(db, getAuth(res).organisationId, parseId(id, "Case")))) throw notFound("Case");
+    requireDone(await deleteCase(db, getAuth(res).organisationId, parseId(id, "Case"), requireIfMatch(req)));
     res.status(204).end();
   });
 

@@ -3,9 +3,10 @@
  * /leak-searches, /pressure-tests and /evacuations (with …/:evacuationId/samples to add vacuum
  * readings as they are read, and PATCH …/:evacuationId to valve off the pump). Like readings:
  * bodies are validated with the shared schemas (400 with field messages), the visit is looked
- * up within the caller's organisation (404 otherwise), apprentices only read (403), a
- * signed-off visit is closed (409), and the stored result is recomputed by the engine on
- * every save.
+ * up within the caller's organisation (404 otherwise), apprentices only read (403), a visit
+ * awaiting review or signed off takes no entries (409; checked again under the visit's lock by
+ * writeToVisit), and the stored result is recomputed by the engine on every save. A record is
+ * corrected by voiding it (POST /api/visits/:id/voids), never by deleting it.
  */
 import { Router } from "express";
 import {
@@ -39,10 +40,11 @@ import { findVisit, joinCrew } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
+import { requireIfMatch, staleWrite } from "../http/versioning.ts";
+import { writeToVisit } from "../visits/write-to-visit.ts";
 import { electricalCheckResult, evacuationResult, leakSearchResult, pressureTestRecordResult } from "../procedures/record-results.ts";
 
 const FIELDS = "Some fields need attention";
-
 
 const targetMicrons = (settings: ProcedureSettings) => settings.evacuationTargetMicrons ?? settings.procedureLimits?.evacuation?.targetMicrons ?? EVACUATION_LIMITS.targetMicrons;
 const allowedDropKPa = (settings: ProcedureSettings) => settings.pressureTestAllowedDropKPa ?? DEFAULT_ALLOWED_DROP_KPA;
@@ -66,6 +68,15 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     const visit = await findVisit(db, organisationId, parseId(rawId, "Visit"));
     if (!visit) throw notFound("Visit");
     return visit;
+  }
+
+  /** Stores a record under the visit's lock (refused if the visit closed meanwhile) and puts the author on the crew. */
+  function recordOnVisit<T>(organisationId: string, visitId: string, userId: string, write: (tx: Database) => Promise<T>): Promise<T> {
+    return writeToVisit(db, organisationId, visitId, async (tx) => {
+      const stored = await write(tx);
+      await joinCrew(tx, visitId, userId);
+      return stored;
+    });
   }
 
   async function loadUnit(organisationId: string, equipmentId: string) {
@@ -114,8 +125,9 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     };
     const settings = await getProcedureSettings(db, organisationId);
     const result = electricalCheckResult(input, settings.procedureLimits);
-    const electricalCheck = await insertElectricalCheck(db, organisationId, { visitId: visit.id, input, result, recordedBy: user.id });
-    await joinCrew(db, visit.id, user.id);
+    const electricalCheck = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+      insertElectricalCheck(tx, organisationId, { visitId: visit.id, input, result, recordedBy: user.id }),
+    );
     res.status(201).json({ electricalCheck });
   });
 
@@ -132,8 +144,9 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     const visit = await loadVisit(organisationId, req.params.id);
     requireWritableVisit(visit.status);
     const input = LeakSearchBodySchema.parse(req.body);
-    const leakSearch = await insertLeakSearch(db, organisationId, { visitId: visit.id, input, result: leakSearchResult(input), recordedBy: user.id });
-    await joinCrew(db, visit.id, user.id);
+    const leakSearch = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+      insertLeakSearch(tx, organisationId, { visitId: visit.id, input, result: leakSearchResult(input), recordedBy: user.id }),
+    );
     res.status(201).json({ leakSearch });
   });
 
@@ -163,8 +176,9 @@ export function proceduresRouter({ db }: { db: Database }): Router {
       note: body.note || null,
     };
     const result = pressureTestRecordResult(input, settings.procedureLimits);
-    const pressureTest = await insertPressureTest(db, organisationId, { visitId: visit.id, input, result, recordedBy: user.id });
-    await joinCrew(db, visit.id, user.id);
+    const pressureTest = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+      insertPressureTest(tx, organisationId, { visitId: visit.id, input, result, recordedBy: user.id }),
+    );
     res.status(201).json({ pressureTest });
   });
 
@@ -186,64 +200,81 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     const target = body.targetMicrons ?? targetMicrons(settings);
     const samples = body.samples ?? [];
     const isolatedAtMinutes = body.isolatedAtMinutes ?? null;
-    const evacuation = await insertEvacuation(db, organisationId, {
-      visitId: visit.id,
-      targetMicrons: target,
-      isolatedAtMinutes,
-      samples,
-      note: body.note || null,
-      result: evacuationResult(samples, target, isolatedAtMinutes, settings.procedureLimits),
-      recordedBy: user.id,
-    });
-    await joinCrew(db, visit.id, user.id);
+    const evacuation = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+      insertEvacuation(tx, organisationId, {
+        visitId: visit.id,
+        targetMicrons: target,
+        isolatedAtMinutes,
+        samples,
+        note: body.note || null,
+        result: evacuationResult(samples, target, isolatedAtMinutes, settings.procedureLimits),
+        recordedBy: user.id,
+      }),
+    );
     res.status(201).json({ evacuation });
   });
 
-  async function loadEvacuation(organisationId: string, visitId: string, rawId: unknown) {
-    const row = await findEvacuation(db, organisationId, visitId, parseId(rawId, "Evacuation"));
+  /** The evacuation as it stands, read under the visit's lock; a voided one takes no more changes. */
+  async function loadEvacuation(tx: Database, organisationId: string, visitId: string, rawId: unknown) {
+    const row = await findEvacuation(tx, organisationId, visitId, parseId(rawId, "Evacuation"));
     if (!row) throw notFound("Evacuation");
+    if (row.voidedAt) throw new HttpError(409, "This evacuation is void: start a new one to record more");
     return row;
   }
 
+  // Samples are appended under the visit's lock, so two devices adding readings at once both land.
   router.post("/:id/evacuations/:evacuationId/samples", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
     requireWritableVisit(visit.status);
-    const row = await loadEvacuation(organisationId, visit.id, req.params.evacuationId);
     const body = EvacuationSampleBodySchema.parse(req.body);
-    const minutes = body.minutes ?? minutesSince(row.startedAt);
-    const last = row.samples.at(-1);
-    if (last && minutes <= last.minutes) {
-      throw new HttpError(400, FIELDS, { minutes: `Each reading must be later than the one before it (${last.minutes} min)` });
-    }
-    const samples = [...row.samples, { minutes, microns: body.microns }];
     const settings = await getProcedureSettings(db, organisationId);
-    const evacuation = await updateEvacuation(db, organisationId, row.id, {
-      targetMicrons: row.targetMicrons,
-      isolatedAtMinutes: row.isolatedAtMinutes,
-      samples,
-      note: row.note,
-      result: evacuationResult(samples, row.targetMicrons, row.isolatedAtMinutes, settings.procedureLimits),
+    const evacuation = await recordOnVisit(organisationId, visit.id, user.id, async (tx) => {
+      const row = await loadEvacuation(tx, organisationId, visit.id, req.params.evacuationId);
+      const minutes = body.minutes ?? minutesSince(row.startedAt);
+      const last = row.samples.at(-1);
+      if (last && minutes <= last.minutes) {
+        throw new HttpError(400, FIELDS, { minutes: `Each reading must be later than the one before it (${last.minutes} min)` });
+      }
+      const samples = [...row.samples, { minutes, microns: body.microns }];
+      return (await updateEvacuation(tx, organisationId, row.id, {
+        targetMicrons: row.targetMicrons,
+        isolatedAtMinutes: row.isolatedAtMinutes,
+        samples,
+        note: row.note,
+        result: evacuationResult(samples, row.targetMicrons, row.isolatedAtMinutes, settings.procedureLimits),
+      }))!;
     });
-    await joinCrew(db, visit.id, user.id);
     res.status(201).json({ evacuation });
   });
 
+  // Valving off, the target and the note change the record: the request names the version it saw.
   router.patch("/:id/evacuations/:evacuationId", async (req, res) => {
     const { organisationId } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
     requireWritableVisit(visit.status);
-    const row = await loadEvacuation(organisationId, visit.id, req.params.evacuationId);
     const body = EvacuationUpdateSchema.parse(req.body);
-    const isolatedAtMinutes = body.isolateNow ? isolationNow(row.startedAt, row.samples) : body.isolatedAtMinutes === undefined ? row.isolatedAtMinutes : body.isolatedAtMinutes;
-    const target = body.targetMicrons ?? row.targetMicrons;
+    const version = requireIfMatch(req);
     const settings = await getProcedureSettings(db, organisationId);
-    const evacuation = await updateEvacuation(db, organisationId, row.id, {
-      targetMicrons: target,
-      isolatedAtMinutes,
-      samples: row.samples,
-      note: body.note === undefined ? row.note : body.note || null,
-      result: evacuationResult(row.samples, target, isolatedAtMinutes, settings.procedureLimits),
+    const evacuation = await writeToVisit(db, organisationId, visit.id, async (tx) => {
+      const row = await loadEvacuation(tx, organisationId, visit.id, req.params.evacuationId);
+      const isolatedAtMinutes = body.isolateNow ? isolationNow(row.startedAt, row.samples) : body.isolatedAtMinutes === undefined ? row.isolatedAtMinutes : body.isolatedAtMinutes;
+      const target = body.targetMicrons ?? row.targetMicrons;
+      const updated = await updateEvacuation(
+        tx,
+        organisationId,
+        row.id,
+        {
+          targetMicrons: target,
+          isolatedAtMinutes,
+          samples: row.samples,
+          note: body.note === undefined ? row.note : body.note || null,
+          result: evacuationResult(row.samples, target, isolatedAtMinutes, settings.procedureLimits),
+        },
+        version,
+      );
+      if (!updated) throw staleWrite("this evacuation");
+      return updated;
     });
     res.json({ evacuation });
   });

@@ -11,6 +11,7 @@ import { Router, type Response } from "express";
 import { z } from "zod";
 import { boundEnd, boundStart } from "@shared/schemas/dates.ts";
 import { text } from "@shared/schemas/text.ts";
+import { MovementVoidBodySchema } from "@shared/schemas/visits.ts";
 import {
   ChargingUpdateSchema,
   CylinderCreateSchema,
@@ -27,7 +28,7 @@ import { getEquipment } from "../db/equipment.ts";
 import {
   createCylinder,
   cylinderMovements,
-  deleteCircuitCharge,
+  declareCircuitCharge,
   equipmentMovements,
   findMember,
   getCylinder,
@@ -35,14 +36,17 @@ import {
   listCylinders,
   registerMovements,
   runLogChargeMarks,
-  upsertCircuitCharge,
   visitCircuitCharges,
   visitMovements,
+  voidReclaim,
   type CylinderRow,
 } from "../db/register.ts";
+import { insertVisitEvent } from "../db/visit-events.ts";
 import { findVisit, joinCrew } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
+import { requireWritableVisit } from "../http/require-writable-visit.ts";
+import { writeToVisit } from "../visits/write-to-visit.ts";
 import { circuitBalance, cylinderFill, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
 import { registerCsv } from "../register/register-csv.ts";
 import { mayReadRegisterLine, readsWholeRegister, visibleRegisterLines, type RegisterReader } from "../register/register-visibility.ts";
@@ -150,6 +154,21 @@ export function cylindersRouter({ db }: Deps): Router {
     res.status(201).json({ movement, cylinder: after ? toCylinder(after) : null });
   });
 
+  // A reclaim entered wrongly is voided with a reason, like any register movement; one made on
+  // a visit is voided there (POST /api/visits/:id/voids), under that visit's open/closed rule.
+  router.post("/:id/movements/:movementId/void", async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const row = await getCylinder(db, organisationId, parseId(req.params.id, "Cylinder"));
+    if (!row) throw notFound("Cylinder");
+    const { reason } = MovementVoidBodySchema.parse(req.body);
+    const outcome = await voidReclaim(db, organisationId, { cylinderId: row.id, movementId: parseId(req.params.movementId, "Movement"), reason, voidedBy: user.id });
+    if (outcome === "missing") throw notFound("Movement");
+    if (outcome === "on-a-visit") throw new HttpError(409, "This movement was logged on a visit: void it on that visit's Refrigerant section");
+    if (outcome === "already-void") throw new HttpError(409, "This movement is already void");
+    const after = await getCylinder(db, organisationId, row.id);
+    res.status(201).json({ movement: outcome, cylinder: after ? toCylinder(after) : null });
+  });
+
   return router;
 }
 
@@ -205,7 +224,7 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
   router.post("/:id/refrigerant", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
-    if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
+    requireWritableVisit(visit.status);
     const values = MovementCreateSchema.parse(req.body);
     if (!unit.circuits.some((circuit) => circuit.number === values.circuit)) {
       throw fieldError("circuit", `${unit.name} has ${unit.circuits.length} circuit(s)`);
@@ -216,54 +235,63 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
       if (!cylinder) throw fieldError("cylinderId", "Choose one of your company's cylinders");
       checkCylinder(cylinder, values.kind, unit.refrigerant, values.kg);
     }
-    if (values.kind === "reused") {
-      // Reused refrigerant is what was recovered from this circuit and put back (TRADE.md §6 records: destination "reuse in same system").
-      const own = (await visitMovements(db, organisationId, visit.id)).filter((movement) => movement.circuit === values.circuit);
-      const recovered = own.filter((movement) => movement.kind === "recovered").reduce((sum, movement) => sum + movement.kg, 0);
-      const reused = own.filter((movement) => movement.kind === "reused").reduce((sum, movement) => sum + movement.kg, 0);
-      if (reused + values.kg > recovered + 1e-9) {
-        throw fieldError(
-          "kg",
-          recovered === 0
-            ? `Nothing has been recovered from circuit ${values.circuit} on this visit, so nothing can be reused: log the recovery first, or log new refrigerant as added`
-            : `Only ${kg(recovered - reused)} recovered from circuit ${values.circuit} on this visit is left to reuse`,
-        );
+    const movement = await writeToVisit(db, organisationId, visit.id, async (tx) => {
+      if (values.kind === "reused") {
+        // Reused refrigerant is what was recovered from this circuit and put back (TRADE.md §6 records: destination "reuse in same system").
+        const own = (await visitMovements(tx, organisationId, visit.id)).filter((movement) => movement.circuit === values.circuit && movement.voided === null);
+        const recovered = own.filter((movement) => movement.kind === "recovered").reduce((sum, movement) => sum + movement.kg, 0);
+        const reused = own.filter((movement) => movement.kind === "reused").reduce((sum, movement) => sum + movement.kg, 0);
+        if (reused + values.kg > recovered + 1e-9) {
+          throw fieldError(
+            "kg",
+            recovered === 0
+              ? `Nothing has been recovered from circuit ${values.circuit} on this visit, so nothing can be reused: log the recovery first, or log new refrigerant as added`
+              : `Only ${kg(recovered - reused)} recovered from circuit ${values.circuit} on this visit is left to reuse`,
+          );
+        }
       }
-    }
-    const movement = await insertMovement(db, organisationId, {
-      visitId: visit.id,
-      equipmentId: unit.id,
-      circuit: values.circuit,
-      refrigerant: unit.refrigerant,
-      kind: values.kind,
-      kg: values.kg,
-      cylinderId: cylinder?.id ?? null,
-      technicianId: user.id,
-      at: values.at ? new Date(values.at) : undefined,
-      note: values.note,
+      const stored = await insertMovement(tx, organisationId, {
+        visitId: visit.id,
+        equipmentId: unit.id,
+        circuit: values.circuit,
+        refrigerant: unit.refrigerant,
+        kind: values.kind,
+        kg: values.kg,
+        cylinderId: cylinder?.id ?? null,
+        technicianId: user.id,
+        at: values.at ? new Date(values.at) : undefined,
+        note: values.note,
+      });
+      await joinCrew(tx, visit.id, user.id);
+      return stored;
     });
-    await joinCrew(db, visit.id, user.id);
     const after = cylinder ? await getCylinder(db, organisationId, cylinder.id) : undefined;
     res.status(201).json({ movement, cylinder: after ? toCylinder(after) : null });
   });
 
-  // Declares that the circuit had a full weigh-in (or clears it with DELETE); the weighed-in
-  // mass is the register's reused + added kg, so only the line-length adjustment is entered.
+  // Declares that the circuit had a full weigh-in; the weighed-in mass is the register's
+  // reused + added kg, so only the line-length adjustment is entered. A changed figure voids
+  // the standing declaration (kept, with what changed); withdrawing one is a void with a reason.
   router.put("/:id/refrigerant/charging/:circuit", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
-    if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
+    requireWritableVisit(visit.status);
     const circuit = circuitOf(unit, req.params.circuit);
     const values = ChargingUpdateSchema.parse(req.body);
-    await upsertCircuitCharge(db, organisationId, { visitId: visit.id, circuit, lineAdjustmentKg: values.lineAdjustmentKg, recordedBy: user.id });
-    res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
-  });
-
-  router.delete("/:id/refrigerant/charging/:circuit", async (req, res) => {
-    const { organisationId, user } = getAuth(res);
-    const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
-    if (visit.status === "signed-off") throw new HttpError(409, "This visit is signed off; start a new visit to record more");
-    await deleteCircuitCharge(db, organisationId, visit.id, circuitOf(unit, req.params.circuit));
+    await writeToVisit(db, organisationId, visit.id, async (tx) => {
+      const replaced = await declareCircuitCharge(tx, organisationId, { visitId: visit.id, circuit, lineAdjustmentKg: values.lineAdjustmentKg, recordedBy: user.id });
+      if (replaced) {
+        await insertVisitEvent(tx, organisationId, {
+          visitId: visit.id,
+          action: "voided",
+          recordKind: "charging",
+          recordId: replaced.replacedId,
+          summary: `Full weigh-in of circuit ${circuit}`,
+          reason: replaced.reason,
+          actorId: user.id,
+        });
+      }
+    });
     res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
   });
 

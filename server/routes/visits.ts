@@ -1,10 +1,8 @@
 import { Router } from "express";
-import multer from "multer";
 import { z } from "zod";
 import { diagnose } from "@shared/engine/index.ts";
-import { PERMISSIONS } from "@shared/schemas/auth.ts";
+import { can, type Permission } from "@shared/schemas/auth.ts";
 import { instant } from "@shared/schemas/dates.ts";
-import { DiagnosisInputSchema } from "@shared/schemas/diagnosis.ts";
 import { text } from "@shared/schemas/text.ts";
 import {
   AdjustmentCreateSchema,
@@ -13,12 +11,19 @@ import {
   ReadingBodySchema,
   ReviewActionSchema,
   SendReportSchema,
+  STATUSES_OPEN_FOR_COMMENTS,
+  VISIT_EVENT_LABELS,
+  VISIT_STATUS_LABELS,
   VisitCreateSchema,
   VisitStatusSchema,
+  VoidBodySchema,
+  type ReviewAction,
+  type VisitEventAction,
   type VisitStatus,
 } from "@shared/schemas/visits.ts";
 import { getAuth } from "../auth/session.ts";
-import { getEquipment } from "../db/equipment.ts";
+import { getEquipment, getSite } from "../db/equipment.ts";
+import { insertVisitEvent } from "../db/visit-events.ts";
 import {
   createVisit,
   findPhoto,
@@ -28,39 +33,48 @@ import {
   insertComment,
   insertPhoto,
   insertReading,
-  insertReadingSeries,
   joinCrew,
   listVisits,
   updateVisitStatus,
 } from "../db/visits.ts";
+import { singleFileUpload } from "../http/file-upload.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
-import { ColumnMappingSchema, previewReadingsCsv } from "../import/readings-csv.ts";
-import { MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
+import { judgeCsvOffThread } from "../import/csv-import-pool.ts";
+import { ColumnMappingSchema } from "../import/readings-csv.ts";
+import { storeImportedReadings } from "../import/store-imported-readings.ts";
+import { discardPhoto, MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
 import { visitReportMail } from "../report/visit-report-mail.ts";
+import { readingInput, type ReadingContext } from "../visits/reading-input.ts";
+import { voidVisitRecord } from "../visits/void-record.ts";
+import { writeToVisit } from "../visits/write-to-visit.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
 
 type Deps = Pick<AccountRouteDeps, "db" | "env">;
 
+const FIELDS = "Some fields need attention";
+/** A logged series of a few thousand rows is well under 2 MB of CSV. */
+const MAX_CSV_BYTES = 2 * 1024 * 1024;
 
 const ListQuerySchema = z.object({
   status: VisitStatusSchema.optional(),
   equipmentId: z.uuid().optional(),
 });
 
-/** Which review actions each status allows, and where they lead. */
-const TRANSITIONS: Record<"submit" | "sign-off" | "send-back", { from: VisitStatus[]; to: VisitStatus }> = {
-  submit: { from: ["open", "sent-back"], to: "awaiting-review" },
-  "sign-off": { from: ["open", "awaiting-review"], to: "signed-off" },
-  "send-back": { from: ["open", "awaiting-review"], to: "sent-back" },
+/** Each review action: the statuses it starts from, where it leads, who may take it, and its audit line. */
+const TRANSITIONS: Record<ReviewAction["action"], { from: VisitStatus[]; to: VisitStatus; permission: Permission; event: VisitEventAction; verb: string; refused: string }> = {
+  submit: { from: ["open", "sent-back"], to: "awaiting-review", permission: "writeRecords", event: "submitted", verb: "submitted", refused: "Apprentices can read visits but not submit them" },
+  "sign-off": { from: ["open", "awaiting-review"], to: "signed-off", permission: "signOff", event: "signed-off", verb: "signed off", refused: "Only a senior technician or an owner can sign off or send back" },
+  "send-back": { from: ["open", "awaiting-review"], to: "sent-back", permission: "signOff", event: "sent-back", verb: "sent back", refused: "Only a senior technician or an owner can sign off or send back" },
+  // Corrections after review: only a senior or owner reopens, with a reason kept in the audit trail.
+  reopen: { from: ["awaiting-review", "signed-off"], to: "open", permission: "signOff", event: "reopened", verb: "reopened", refused: "Only a senior technician or an owner can reopen a visit" },
 };
 
 export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, "mailer">): Router {
   const router = Router();
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PHOTO_BYTES, files: 1, fields: 10 } });
-  /** A logged series of a few thousand rows is well under 2 MB of CSV. */
-  const csvUpload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 2 * 1024 * 1024, files: 1, fields: 10 } });
+  const photoUpload = singleFileUpload("photo", "photo", MAX_PHOTO_BYTES);
+  const csvUpload = singleFileUpload("file", "CSV file", MAX_CSV_BYTES);
 
   const ImportFieldsSchema = z.object({
     circuit: z.coerce.number().int().min(1),
@@ -85,6 +99,17 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     return visit;
   }
 
+  /** The unit, the circuit's nameplate and the site: what the server adds to every reading. */
+  async function readingContext(organisationId: string, equipmentId: string, circuit: number): Promise<ReadingContext> {
+    const unit = await getEquipment(db, organisationId, equipmentId);
+    if (!unit) throw notFound("Equipment");
+    const nameplate = unit.circuits.find((candidate) => candidate.number === circuit);
+    if (!nameplate) throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
+    const site = await getSite(db, organisationId, unit.siteId);
+    if (!site) throw notFound("Site");
+    return { unit, nameplate, site };
+  }
+
   router.get("/", async (req, res) => {
     const filter = ListQuerySchema.parse(req.query);
     res.json({ visits: await listVisits(db, getAuth(res).organisationId, filter) });
@@ -94,7 +119,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     const { organisationId, user } = getAuth(res);
     const values = VisitCreateSchema.parse(req.body);
     const id = await createVisit(db, organisationId, { ...values, createdBy: user.id });
-    if (!id) throw new HttpError(400, "Some fields need attention", { equipmentId: "Choose one of your units" });
+    if (!id) throw new HttpError(400, FIELDS, { equipmentId: "Choose one of your units" });
     res.status(201).json({ visit: await getVisitDetail(db, organisationId, id) });
   });
 
@@ -104,73 +129,47 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     res.json({ visit });
   });
 
+  // The body holds measured values only (strict); the server adds the nameplate, the RLA and
+  // the site's atmosphere, re-runs the engine and stores input and result together.
   router.post("/:id/readings", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
     requireWritableVisit(visit.status);
-    const { circuit, takenAt, note, ...readingFields } = ReadingBodySchema.parse(req.body);
-    const unit = await getEquipment(db, organisationId, visit.equipmentId);
-    if (!unit) throw notFound("Equipment");
-    const nameplate = unit.circuits.find((candidate) => candidate.number === circuit);
-    if (!nameplate) {
-      throw new HttpError(400, "Some fields need attention", { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
-    }
-    // Refrigerant and metering device always come from the nameplate; targets and RLA too
-    // unless the technician entered others (e.g. from the unit's own charging chart).
-    const input = DiagnosisInputSchema.parse({
-      targetSuperheatK: nameplate.targetSuperheatK ?? undefined,
-      targetSubcoolingK: nameplate.targetSubcoolingK ?? undefined,
-      compressorRla: unit.compressorRlaA ?? undefined,
-      ...readingFields,
-      refrigerant: unit.refrigerant,
-      meteringDevice: nameplate.meteringDevice,
-      application: unit.application,
-      liquidLineLengthM: nameplate.liquidLineLengthM ?? undefined,
-    });
+    const { circuit, takenAt, note, ...measured } = ReadingBodySchema.parse(req.body);
+    const parsed = readingInput(measured, await readingContext(organisationId, visit.equipmentId, circuit));
+    if (!parsed.success) throw parsed.error;
+    const input = parsed.data;
     const result = diagnose(input);
-    const reading = await insertReading(db, organisationId, {
-      visitId: visit.id,
-      circuit,
-      takenAt: takenAt ? new Date(takenAt) : undefined,
-      note,
-      input,
-      result,
-      recordedBy: user.id,
+    const reading = await writeToVisit(db, organisationId, visit.id, async (tx) => {
+      const stored = await insertReading(tx, organisationId, { visitId: visit.id, circuit, takenAt: takenAt ? new Date(takenAt) : undefined, note, input, result, recordedBy: user.id });
+      await joinCrew(tx, visit.id, user.id);
+      return stored;
     });
-    await joinCrew(db, visit.id, user.id);
     res.status(201).json({ reading });
   });
 
   // CSV import: preview first (nothing stored), then store all rows only if every row is
-  // valid, or store the valid rows when the user explicitly accepts skipping the others.
-  router.post("/:id/readings/import", csvUpload.single("file"), async (req, res) => {
+  // valid, or store the valid rows when the user explicitly accepts skipping the others. The
+  // file is parsed and judged in a worker thread; the rows are stored in slices.
+  router.post("/:id/readings/import", csvUpload, async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
     requireWritableVisit(visit.status);
-    if (!req.file) throw new HttpError(400, "Some fields need attention", { file: "Choose a CSV file" });
+    if (!req.file) throw new HttpError(400, FIELDS, { file: "Choose a CSV file" });
     const fields = ImportFieldsSchema.parse(req.body ?? {});
-    const unit = await getEquipment(db, organisationId, visit.equipmentId);
-    const nameplate = unit?.circuits.find((candidate) => candidate.number === fields.circuit);
-    if (!unit || !nameplate) throw new HttpError(400, "Some fields need attention", { circuit: "That circuit is not on this unit" });
-    const preview = previewReadingsCsv(req.file.buffer.toString("utf8"), fields.mapping, {
-      base: {
-        refrigerant: unit.refrigerant,
-        meteringDevice: nameplate.meteringDevice,
-        targetSuperheatK: nameplate.targetSuperheatK ?? undefined,
-        targetSubcoolingK: nameplate.targetSubcoolingK ?? undefined,
-        compressorRla: unit.compressorRlaA ?? undefined,
-        application: unit.application,
-        liquidLineLengthM: nameplate.liquidLineLengthM ?? undefined,
-      },
-      dayStart: new Date(fields.dayStart),
+    const context = await readingContext(organisationId, visit.equipmentId, fields.circuit);
+    const { slices, ...summary } = await judgeCsvOffThread({
+      text: req.file.buffer.toString("utf8"),
+      mapping: fields.mapping,
+      context,
+      dayStart: fields.dayStart,
+      keepRows: fields.mode !== "preview",
     });
-    const summary = { headers: preview.headers, mapping: preview.mapping, rowCount: preview.rowCount, validCount: preview.valid.length, problems: preview.problems };
     if (fields.mode === "preview") return void res.json({ ...summary, stored: 0 });
-    if (fields.mode === "all" && preview.problems.length > 0) {
-      return void res.status(422).json({ message: `${preview.problems.length} row(s) have problems: nothing was stored`, ...summary, stored: 0 });
+    if (fields.mode === "all" && summary.problems.length > 0) {
+      return void res.status(422).json({ message: `${summary.problems.length} row(s) have problems: nothing was stored`, ...summary, stored: 0 });
     }
-    const stored = await insertReadingSeries(db, organisationId, visit.id, fields.circuit, preview.valid, user.id);
-    await joinCrew(db, visit.id, user.id);
+    const stored = await storeImportedReadings(db, organisationId, { visitId: visit.id, circuit: fields.circuit, recordedBy: user.id, slices });
     res.status(201).json({ ...summary, stored });
   });
 
@@ -179,30 +178,44 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     const visit = await loadVisit(organisationId, req.params.id);
     requireWritableVisit(visit.status);
     const values = AdjustmentCreateSchema.parse(req.body);
-    const adjustment = await insertAdjustment(db, organisationId, {
-      visitId: visit.id,
-      circuit: values.circuit ?? null,
-      at: values.at ? new Date(values.at) : undefined,
-      kind: values.kind,
-      description: values.description,
-      amountKg: values.amountKg ?? null,
-      recordedBy: user.id,
+    const adjustment = await writeToVisit(db, organisationId, visit.id, async (tx) => {
+      const stored = await insertAdjustment(tx, organisationId, {
+        visitId: visit.id,
+        circuit: values.circuit ?? null,
+        at: values.at ? new Date(values.at) : undefined,
+        kind: values.kind,
+        description: values.description,
+        amountKg: values.amountKg ?? null,
+        recordedBy: user.id,
+      });
+      await joinCrew(tx, visit.id, user.id);
+      return stored;
     });
-    await joinCrew(db, visit.id, user.id);
     res.status(201).json({ adjustment });
+  });
+
+  // Corrections: a record is voided with a reason (and entered again if need be), never deleted.
+  router.post("/:id/voids", async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritableVisit(visit.status);
+    const body = VoidBodySchema.parse(req.body);
+    const event = await writeToVisit(db, organisationId, visit.id, (tx) => voidVisitRecord(tx, organisationId, visit.id, body, user.id));
+    res.status(201).json({ event });
   });
 
   router.post("/:id/comments", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
     const values = CommentCreateSchema.parse(req.body);
-    const comment = await insertComment(db, organisationId, {
-      visitId: visit.id,
-      readingId: values.readingId ?? null,
-      authorId: user.id,
-      body: values.body,
-    });
-    if (!comment) throw new HttpError(400, "Some fields need attention", { readingId: "That reading is not part of this visit" });
+    const comment = await writeToVisit(
+      db,
+      organisationId,
+      visit.id,
+      (tx) => insertComment(tx, organisationId, { visitId: visit.id, readingId: values.readingId ?? null, authorId: user.id, body: values.body }),
+      { allow: STATUSES_OPEN_FOR_COMMENTS, refuse: () => new HttpError(409, "This visit is signed off: comments are closed until it is reopened") },
+    );
+    if (!comment) throw new HttpError(400, FIELDS, { readingId: "That reading is not part of this visit" });
     res.status(201).json({ comment });
   });
 
@@ -210,37 +223,52 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
     const action = ReviewActionSchema.parse(req.body);
-    const allowed = action.action === "submit" ? PERMISSIONS.writeRecords : PERMISSIONS.signOff;
-    if (!(allowed as readonly string[]).includes(user.role)) {
-      throw new HttpError(403, action.action === "submit" ? "Apprentices can read visits but not submit them" : "Only a senior technician or an owner can sign off or send back");
-    }
     const transition = TRANSITIONS[action.action];
-    if (!transition.from.includes(visit.status)) {
-      throw new HttpError(409, `A visit that is ${visit.status.replace("-", " ")} cannot be ${action.action === "submit" ? "submitted" : action.action === "sign-off" ? "signed off" : "sent back"}`);
-    }
-    if (action.action === "sign-off") {
-      await updateVisitStatus(db, visit.id, { status: transition.to, reviewNote: action.note || null, signedOffBy: user.id, signedOffAt: new Date() });
-    } else if (action.action === "send-back") {
-      await updateVisitStatus(db, visit.id, { status: transition.to, reviewNote: action.reason, signedOffBy: null, signedOffAt: null });
-      // The reason also goes on the visit's thread, so the technician sees it in context.
-      await insertComment(db, organisationId, { visitId: visit.id, readingId: null, authorId: user.id, body: `Sent back: ${action.reason}` });
-    } else {
-      await updateVisitStatus(db, visit.id, { status: transition.to });
-    }
+    if (!can(user.role, transition.permission)) throw new HttpError(403, transition.refused);
+    const refuse = (status: VisitStatus) => new HttpError(409, `A visit that is ${VISIT_STATUS_LABELS[status].toLowerCase()} cannot be ${transition.verb}`);
+    await writeToVisit(
+      db,
+      organisationId,
+      visit.id,
+      async (tx) => {
+        const reason = action.action === "sign-off" ? action.note || null : action.action === "send-back" || action.action === "reopen" ? action.reason : null;
+        if (action.action === "sign-off") {
+          await updateVisitStatus(tx, visit.id, { status: transition.to, reviewNote: reason, signedOffBy: user.id, signedOffAt: new Date() });
+        } else if (action.action === "send-back" || action.action === "reopen") {
+          // Reopening undoes the sign-off on the visit itself; the trail keeps when it was signed and by whom.
+          await updateVisitStatus(tx, visit.id, { status: transition.to, reviewNote: action.action === "send-back" ? reason : null, signedOffBy: null, signedOffAt: null });
+        } else {
+          await updateVisitStatus(tx, visit.id, { status: transition.to });
+        }
+        // The reason also goes on the visit's thread, so the technician sees it in context.
+        if (action.action === "send-back") await insertComment(tx, organisationId, { visitId: visit.id, readingId: null, authorId: user.id, body: `Sent back: ${reason}` });
+        await insertVisitEvent(tx, organisationId, { visitId: visit.id, action: transition.event, summary: VISIT_EVENT_LABELS[transition.event], reason, actorId: user.id });
+      },
+      { allow: transition.from, refuse },
+    );
     res.json({ visit: await getVisitDetail(db, organisationId, visit.id) });
   });
 
-  router.post("/:id/photos", upload.single("photo"), async (req, res) => {
+  // The photo is checked and written before the visit is locked (decoding takes a while); if the
+  // visit closed meanwhile, the insert is refused under the lock and the files are removed.
+  router.post("/:id/photos", photoUpload, async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
     requireWritableVisit(visit.status);
-    if (!req.file) throw new HttpError(400, "Some fields need attention", { photo: "Choose a photo to upload" });
+    if (!req.file) throw new HttpError(400, FIELDS, { photo: "Choose a photo to upload" });
     const meta = z
       .object({ kind: z.enum(PHOTO_KINDS).default("other"), caption: text().max(200).optional() })
       .parse(req.body ?? {});
     const stored = await storePhoto(env.UPLOADS_DIR, req.file.buffer);
-    const photo = await insertPhoto(db, organisationId, { visitId: visit.id, kind: meta.kind, caption: meta.caption || null, ...stored, uploadedBy: user.id });
-    res.status(201).json({ photo });
+    try {
+      const photo = await writeToVisit(db, organisationId, visit.id, (tx) =>
+        insertPhoto(tx, organisationId, { visitId: visit.id, kind: meta.kind, caption: meta.caption || null, ...stored, uploadedBy: user.id }),
+      );
+      res.status(201).json({ photo });
+    } catch (error) {
+      await discardPhoto(env.UPLOADS_DIR, stored);
+      throw error;
+    }
   });
 
   router.post("/:id/report/send", async (req, res) => {

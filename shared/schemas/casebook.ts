@@ -281,6 +281,8 @@ export const CaseSchema = z.object({
   fromReading: z.boolean(),
   editable: z.boolean(),
   updatedAt: z.string().nullable(),
+  /** An organisation case's version, sent back as If-Match when it is changed; null for built-in and generated cases. */
+  version: z.number().int().nullable(),
 });
 export type Case = z.infer<typeof CaseSchema>;
 

@@ -188,7 +188,8 @@ export const DIAGNOSIS_FIELD_RANGES = {
 } as const satisfies Record<string, FieldRange>;
 const RANGE_ENTRIES = Object.entries(DIAGNOSIS_FIELD_RANGES) as [keyof typeof DIAGNOSIS_FIELD_RANGES, FieldRange][];
 
-const DiagnosisInputObjectSchema = z.object({
+/** The input's fields without the cross-field checks, so a request body can pick the ones it takes. */
+export const DiagnosisInputObjectSchema = z.object({
   /** ASHRAE designation as listed by `listRefrigerants()`, e.g. "R410A". */
   refrigerant: text({ error: "Choose the refrigerant" }).min(1, "Choose the refrigerant"),
   meteringDevice: MeteringDeviceSchema,

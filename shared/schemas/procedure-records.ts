@@ -27,7 +27,7 @@ import {
   WindingBalanceInputSchema,
   WindingBalanceResultSchema,
 } from "./procedures.ts";
-import { PersonRefSchema } from "./visits.ts";
+import { PersonRefSchema, VoidInfoSchema } from "./visits.ts";
 import { text } from "./text.ts";
 
 export const MAX_NOTE_LENGTH = 500;
@@ -111,6 +111,8 @@ const RecordBaseSchema = z.object({
   visitId: z.uuid(),
   takenAt: z.string(),
   recordedBy: PersonRefSchema.nullable(),
+  /** A voided record stays listed, struck through, and is left out of the report. */
+  voided: VoidInfoSchema,
 });
 
 export const ElectricalCheckSchema = RecordBaseSchema.extend({ input: ElectricalCheckInputSchema, result: ElectricalCheckResultSchema });
@@ -304,6 +306,8 @@ export const EvacuationSchema = RecordBaseSchema.omit({ takenAt: true }).extend(
   samples: z.array(z.object({ minutes: z.number(), microns: z.number() })),
   note: z.string().nullable(),
   result: EvacuationResultSchema,
+  /** Sent back as If-Match when valving off or changing the target or note. */
+  version: z.number().int(),
 });
 export type Evacuation = z.infer<typeof EvacuationSchema>;
 
@@ -338,18 +342,22 @@ export const ProcedureSettingsSchema = z.object({
 export type ProcedureSettings = z.infer<typeof ProcedureSettingsSchema>;
 
 /**
- * Body of PUT /api/organisation/settings (owners): the organisation's own limits where local
- * codes differ from Satura's defaults. A null clears an override back to the default.
+ * Body of PATCH /api/organisation/settings (owners): the organisation's own limits where local
+ * codes differ from Satura's defaults. Only the fields sent change; a null clears an override
+ * back to the default. The request names the version it was based on (If-Match).
  */
-export const ProcedureSettingsUpdateSchema = z.object({
-  evacuationTargetMicrons: TargetMicronsSchema.nullable(),
-  pressureTestAllowedDropKPa: PressureTestInputSchema.shape.allowedDropKPa.nullable(),
-});
-export type ProcedureSettingsUpdate = z.infer<typeof ProcedureSettingsUpdateSchema>;
+export const ProcedureSettingsUpdateSchema = z
+  .strictObject({
+    evacuationTargetMicrons: TargetMicronsSchema.nullable().optional(),
+    pressureTestAllowedDropKPa: PressureTestInputSchema.shape.allowedDropKPa.nullable().optional(),
+  })
+  .refine((body) => Object.values(body).some((value) => value !== undefined), { path: ["evacuationTargetMicrons"], message: "Nothing to change" });
+export type ProcedureSettingsUpdate = z.input<typeof ProcedureSettingsUpdateSchema>;
 
-/** Answer of GET/PUT /api/organisation/settings: the overrides and the defaults they replace. */
+/** Answer of GET/PATCH /api/organisation/settings: the overrides, the defaults they replace, and their version. */
 export const ProcedureSettingsResponseSchema = z.object({
   settings: z.object({ evacuationTargetMicrons: z.number().nullable(), pressureTestAllowedDropKPa: z.number().nullable() }),
   defaults: z.object({ evacuationTargetMicrons: z.number(), pressureTestAllowedDropKPa: z.number() }),
+  version: z.number().int(),
 });
 export type ProcedureSettingsResponse = z.infer<typeof ProcedureSettingsResponseSchema>;

@@ -51,6 +51,8 @@ export const ProfileSchema = z.object({
   preferences: PreferencesSchema,
   /** Refrigerant handling licence or certificate number (the register export names it). */
   licenceNumber: z.string().nullable(),
+  /** Sent back as If-Match with PUT /api/profile. */
+  version: z.number().int(),
 });
 export type Profile = z.infer<typeof ProfileSchema>;
 
@@ -58,10 +60,14 @@ export type Profile = z.infer<typeof ProfileSchema>;
 export const UpdateProfileSchema = z.object({
   name: PersonNameSchema,
   preferences: PreferencesSchema,
-  /** Left out: unchanged. Empty: removed. */
+  /**
+   * Left out: unchanged. Empty or null: removed. Null is accepted because the form sends what
+   * this schema made of an emptied field (regression: a profile with no licence could not be saved).
+   */
   licenceNumber: text()
     .max(LICENCE_NUMBER_MAX_LENGTH, `At most ${LICENCE_NUMBER_MAX_LENGTH} characters`)
+    .nullable()
     .optional()
-    .transform((value) => (value === undefined ? undefined : value === "" ? null : value)),
+    .transform((value) => (value === undefined ? undefined : value ? value : null)),
 });
 export type UpdateProfile = z.infer<typeof UpdateProfileSchema>;

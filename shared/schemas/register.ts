@@ -19,7 +19,7 @@ import {
   RefrigerantBalanceSchema,
   VerdictSchema,
 } from "./procedures.ts";
-import { PersonRefSchema } from "./visits.ts";
+import { PersonRefSchema, VoidInfoSchema } from "./visits.ts";
 import { boundEnd, boundStart, dayOrInstant, instant } from "./dates.ts";
 import { text } from "./text.ts";
 
@@ -191,6 +191,8 @@ export const MovementSchema = z.object({
   technician: PersonRefSchema.nullable(),
   at: z.string(),
   note: z.string().nullable(),
+  /** A voided movement stays listed, struck through, and counts in no balance, contents, total or export. */
+  voided: VoidInfoSchema,
 });
 export type Movement = z.infer<typeof MovementSchema>;
 
@@ -213,8 +215,12 @@ export const MovementCreatedSchema = z.object({ movement: MovementSchema, cylind
 /** Line-length allowances are grams per metre (TRADE.md §6); ±50 kg covers any field run. */
 export const MAX_LINE_ADJUSTMENT_KG = 50;
 
-/** Body of PUT /api/visits/:id/refrigerant/charging/:circuit: this circuit had a full weigh-in. */
-export const ChargingUpdateSchema = z.object({
+/**
+ * Body of PUT /api/visits/:id/refrigerant/charging/:circuit: this circuit had a full weigh-in.
+ * A changed figure voids the standing declaration (saying what changed) and records the new one;
+ * withdrawing it is a void with a reason (POST /api/visits/:id/voids, kind "charging").
+ */
+export const ChargingUpdateSchema = z.strictObject({
   lineAdjustmentKg: z
     .number({ error: "Enter the line-length adjustment in kg (0 if none)" })
     .refine(Number.isFinite, "Enter the line-length adjustment in kg (0 if none)")
@@ -240,6 +246,8 @@ export const CircuitBalanceSchema = z.object({
       weighedInKg: z.number(),
       lineAdjustmentKg: z.number(),
       declared: z.boolean(),
+      /** The standing declaration's id (to void it); null when the weigh-in is inferred from a recovery. */
+      declarationId: z.uuid().nullable(),
       check: ChargeAgainstNameplateResultSchema,
     })
     .nullable(),

@@ -4,7 +4,7 @@
  * computed from it with the same engine the client runs.
  */
 import { z } from "zod";
-import { DiagnosisInputSchema, DiagnosisResultSchema } from "./diagnosis.ts";
+import { DiagnosisInputObjectSchema, DiagnosisInputSchema, DiagnosisResultSchema } from "./diagnosis.ts";
 import { MAX_CIRCUITS } from "./equipment.ts";
 import { instant } from "./dates.ts";
 import { text } from "./text.ts";
@@ -23,6 +23,30 @@ export const VISIT_STATUS_LABELS: Record<VisitStatus, string> = {
 export const MAX_REASON_LENGTH = 500;
 export const MAX_COMMENT_LENGTH = 2000;
 
+/**
+ * Statuses in which a visit takes new entries (readings, procedures, refrigerant, photos) and
+ * voids. Awaiting review and signed off are closed until a senior or owner reopens the visit.
+ */
+export const STATUSES_OPEN_FOR_ENTRIES = ["open", "sent-back"] as const satisfies readonly VisitStatus[];
+export const acceptsEntries = (status: VisitStatus) => (STATUSES_OPEN_FOR_ENTRIES as readonly VisitStatus[]).includes(status);
+/** Comments stay possible while a senior reviews; only a signed-off visit is closed to them. */
+export const STATUSES_OPEN_FOR_COMMENTS = ["open", "sent-back", "awaiting-review"] as const satisfies readonly VisitStatus[];
+
+/** Why a closed visit refuses an entry, in words the technician can act on. */
+export function closedVisitMessage(status: VisitStatus): string {
+  return status === "signed-off"
+    ? "This visit is signed off: nothing more can be recorded or voided until a senior technician or an owner reopens it with a reason"
+    : "This visit is awaiting review: nothing more can be recorded or voided until the reviewer sends it back or a senior technician or an owner reopens it";
+}
+
+/** A reason for voiding a record or reopening a visit: kept in the audit trail for good. */
+const reasonSchema = (prompt: string) =>
+  z
+    .string({ error: prompt })
+    .trim()
+    .min(3, prompt)
+    .max(MAX_REASON_LENGTH, `Keep the reason under ${MAX_REASON_LENGTH} characters`);
+
 export const VisitCreateSchema = z.object({
   equipmentId: z.uuid("Choose the equipment"),
   reason: text({ multiline: true, error: "Say why you are visiting" })
@@ -38,20 +62,130 @@ const CircuitNumberSchema = z
   .max(MAX_CIRCUITS, `Satura records up to ${MAX_CIRCUITS} circuits`);
 
 /**
- * Body of POST /api/visits/:id/readings: the circuit, when it was read, and every diagnosis
- * input except the refrigerant and metering device, which come from the equipment's
- * nameplate. The server merges those in and validates the whole with DiagnosisInputSchema.
+ * What a technician measures: the only diagnosis inputs a reading body (and a CSV column) may
+ * carry. Everything else the engine needs — refrigerant, metering device, targets, RLA, the
+ * atmosphere — the server takes from the equipment and the site (server/visits/reading-input.ts),
+ * so a client cannot make a stored finding say what it likes.
  */
-export const ReadingBodySchema = z
-  .object({
+export const MEASURED_FIELDS = [
+  "suctionPressureKPa",
+  "suctionLineTempC",
+  "suctionTempLocation",
+  "dischargePressureKPa",
+  "dischargeLineTempC",
+  "liquidPressureKPa",
+  "liquidLineTempC",
+  "liquidTempLocation",
+  "returnAirDryBulbC",
+  "returnAirWetBulbC",
+  "returnAirRelativeHumidity",
+  "supplyAirDryBulbC",
+  "outdoorAirDryBulbC",
+  "compressorAmps",
+  "runMinutes",
+] as const;
+export type MeasuredField = (typeof MEASURED_FIELDS)[number];
+/** The measured fields that hold a number (all but where the temperatures were taken). */
+export type NumericMeasuredField = Exclude<MeasuredField, "liquidTempLocation" | "suctionTempLocation">;
+
+export const MeasuredValuesSchema = DiagnosisInputObjectSchema.pick(Object.fromEntries(MEASURED_FIELDS.map((field) => [field, true])) as Record<MeasuredField, true>);
+export type MeasuredValues = z.infer<typeof MeasuredValuesSchema>;
+
+/** The message for fields a strict body does not take, naming each one. */
+export const unknownFieldsMessage = (keys: readonly string[], hint: string) => `Not accepted: ${keys.join(", ")}. ${hint}`;
+
+/**
+ * Body of POST /api/visits/:id/readings: the circuit, when it was read, and the measured
+ * values. Strict: an unknown field (a target, an RLA, an atmosphere) is refused by name.
+ */
+export const ReadingBodySchema = z.strictObject(
+  {
     circuit: CircuitNumberSchema,
     takenAt: instant("takenAt must be an ISO 8601 date and time").optional(),
     note: text({ multiline: true }).max(MAX_REASON_LENGTH).optional(),
-  })
-  .loose();
+    ...MeasuredValuesSchema.shape,
+  },
+  {
+    error: (issue) =>
+      issue.code === "unrecognized_keys"
+        ? unknownFieldsMessage(issue.keys, "A reading takes measured values only; targets and ratings come from the equipment, the atmosphere from the site.")
+        : undefined,
+  },
+);
 export type ReadingBody = z.input<typeof ReadingBodySchema>;
 
 export const PersonRefSchema = z.object({ id: z.uuid(), name: z.string() });
+
+/** Who voided a record, when and why; null while the record stands. */
+export const VoidInfoSchema = z.object({ at: z.string(), by: PersonRefSchema.nullable(), reason: z.string() }).nullable();
+export type VoidInfo = z.infer<typeof VoidInfoSchema>;
+/** A record that has not been voided: the only kind results, balances and reports count. */
+export const isStanding = (record: { voided: VoidInfo }) => record.voided === null;
+
+/** Records of a visit that can be voided (with a reason) and entered again; none is ever deleted. */
+export const VOIDABLE_KINDS = ["reading", "adjustment", "electrical-check", "leak-search", "pressure-test", "evacuation", "movement", "charging"] as const;
+export const VoidableKindSchema = z.enum(VOIDABLE_KINDS);
+export type VoidableKind = z.infer<typeof VoidableKindSchema>;
+export const VOIDABLE_KIND_LABELS: Record<VoidableKind, string> = {
+  reading: "Reading",
+  adjustment: "Adjustment",
+  "electrical-check": "Electrical check",
+  "leak-search": "Leak search",
+  "pressure-test": "Pressure test",
+  evacuation: "Evacuation",
+  movement: "Refrigerant movement",
+  charging: "Full weigh-in declaration",
+};
+
+/** Body of POST /api/visits/:id/voids. */
+export const VoidBodySchema = z.strictObject({
+  kind: VoidableKindSchema,
+  recordId: z.uuid("Say which record to void"),
+  reason: reasonSchema("Say why this record is void, e.g. “typed 3500 for 350 kPa”"),
+});
+export type VoidBody = z.input<typeof VoidBodySchema>;
+
+/** Body of POST /api/cylinders/:id/movements/:movementId/void (a reclaim, which has no visit). */
+export const MovementVoidBodySchema = VoidBodySchema.pick({ reason: true });
+
+export const VISIT_EVENT_ACTIONS = ["started", "submitted", "signed-off", "sent-back", "reopened", "voided", "imported"] as const;
+export type VisitEventAction = (typeof VISIT_EVENT_ACTIONS)[number];
+export const VISIT_EVENT_LABELS: Record<VisitEventAction, string> = {
+  started: "Started the visit",
+  submitted: "Submitted for review",
+  "signed-off": "Signed off",
+  "sent-back": "Sent back",
+  reopened: "Reopened",
+  voided: "Voided",
+  imported: "Imported readings",
+};
+
+/** One line of a visit's audit trail. */
+export const VisitEventSchema = z.object({
+  id: z.uuid(),
+  action: z.enum(VISIT_EVENT_ACTIONS),
+  recordKind: VoidableKindSchema.nullable(),
+  recordId: z.uuid().nullable(),
+  summary: z.string(),
+  reason: z.string().nullable(),
+  actor: PersonRefSchema.nullable(),
+  at: z.string(),
+});
+export type VisitEvent = z.infer<typeof VisitEventSchema>;
+
+/**
+ * The atmospheric pressure gauge readings on this visit are taken against, and why: the
+ * site's altitude (ISO 2533) or, without one, the standard atmosphere. The server diagnoses
+ * with it; the run log's live diagnosis uses the same figure.
+ */
+export const AtmosphereSchema = z.object({
+  pressureKPa: z.number(),
+  basis: z.enum(["site-altitude", "standard"]),
+  altitudeM: z.number().nullable(),
+  /** e.g. "site altitude 85 m" or "standard atmosphere: site has no altitude". */
+  description: z.string(),
+});
+export type Atmosphere = z.infer<typeof AtmosphereSchema>;
 
 export const ReadingSchema = z.object({
   id: z.uuid(),
@@ -62,6 +196,7 @@ export const ReadingSchema = z.object({
   input: DiagnosisInputSchema,
   result: DiagnosisResultSchema,
   recordedBy: PersonRefSchema.nullable(),
+  voided: VoidInfoSchema,
 });
 export type Reading = z.infer<typeof ReadingSchema>;
 
@@ -105,6 +240,7 @@ export const AdjustmentSchema = z.object({
   description: z.string(),
   amountKg: z.number().nullable(),
   recordedBy: PersonRefSchema.nullable(),
+  voided: VoidInfoSchema,
 });
 export type Adjustment = z.infer<typeof AdjustmentSchema>;
 
@@ -144,6 +280,8 @@ export const ReviewActionSchema = z.discriminatedUnion("action", [
       .min(3, "Say what needs doing before sign-off")
       .max(MAX_COMMENT_LENGTH),
   }),
+  // A senior or owner opens a closed visit again for corrections; the reason goes in the audit trail.
+  z.object({ action: z.literal("reopen"), reason: reasonSchema("Say why the visit is reopened, e.g. “pressure test entered wrongly”") }),
 ]);
 export type ReviewAction = z.infer<typeof ReviewActionSchema>;
 
@@ -171,6 +309,9 @@ export const VisitSchema = VisitSummarySchema.extend({
   adjustments: z.array(AdjustmentSchema),
   comments: z.array(CommentSchema),
   photos: z.array(PhotoSchema),
+  atmosphere: AtmosphereSchema,
+  /** The audit trail, oldest first. */
+  events: z.array(VisitEventSchema),
 });
 export type Visit = z.infer<typeof VisitSchema>;
 

@@ -16,6 +16,8 @@ import { MeasuredCyclePanel } from "@/features/run-log/components/measured-cycle
 import { useMe } from "@/lib/api/auth.ts";
 import { useCase, useCreateAttempt, usePublishCase } from "@/lib/api/casebook.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
+import { StaleWriteNotice } from "@/components/ui/stale-write/stale-write-notice.tsx";
+import { ApiError } from "@/lib/api/api-client.ts";
 
 const SOURCE_WORDS = {
   "built-in": "Satura library — shared by every company, read-only",
@@ -77,13 +79,18 @@ export default function CasebookCaseRoute() {
                 <Pencil aria-hidden className="size-5" /> Edit
               </Link>
               {data.status === "draft" && (
-                <Button disabled={publish.isPending} onClick={() => publish.mutate(data.id)}>
+                <Button disabled={publish.isPending} onClick={() => publish.mutate({ id: data.id, version: data.version ?? 0 })}>
                   <CheckCheck aria-hidden className="size-5" /> Publish to your company
                 </Button>
               )}
             </div>
           )}
-          {publish.isError && <FormAlert>{publish.error.message}</FormAlert>}
+          {publish.isError &&
+            (publish.error instanceof ApiError && publish.error.isStale ? (
+              <StaleWriteNotice message={publish.error.message} onReload={() => void item.refetch().then(() => publish.reset())} reloading={item.isFetching} />
+            ) : (
+              <FormAlert>{publish.error.message}</FormAlert>
+            ))}
           {publish.isSuccess && (
             <FormAlert tone="good">Published: apprentices in your company can now attempt it.</FormAlert>
           )}

@@ -1,7 +1,10 @@
+import { useState } from "react";
 import { Link, useNavigate, useParams } from "react-router-dom";
 import { canCasebook, type CaseDraft } from "@shared/schemas/casebook.ts";
+import { StaleWriteNotice } from "@/components/ui/stale-write/stale-write-notice.tsx";
 import { paths } from "@/config/paths.ts";
 import { CaseEditor } from "@/features/casebook/components/case-editor.tsx";
+import { ApiError } from "@/lib/api/api-client.ts";
 import { useMe } from "@/lib/api/auth.ts";
 import { useCase, useCreateCase, useUpdateCase } from "@/lib/api/casebook.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
@@ -15,6 +18,7 @@ export default function CasebookEditorRoute() {
   const create = useCreateCase();
   const update = useUpdateCase();
   const { units, atmosphericKPa } = useDisplayUnits();
+  const [stale, setStale] = useState<string | null>(null);
 
   if (me.data && !canCasebook(me.data.role, "author")) {
     return (
@@ -40,8 +44,22 @@ export default function CasebookEditorRoute() {
   }
 
   const save = async (draft: CaseDraft) => {
-    const saved = caseId ? await update.mutateAsync({ id: caseId, draft }) : await create.mutateAsync(draft);
-    navigate(paths.casebook.case.getHref(saved.id));
+    setStale(null);
+    try {
+      const saved = caseId ? await update.mutateAsync({ id: caseId, draft, version: existing.data?.version ?? 0 }) : await create.mutateAsync(draft);
+      navigate(paths.casebook.case.getHref(saved.id));
+    } catch (error) {
+      // Someone saved the case after this editor opened it: keep the text in the form, offer the latest.
+      if (error instanceof ApiError && error.isStale) return setStale(error.message);
+      throw error;
+    }
+  };
+  // The editor keeps everything typed; reloading fetches the saved version to compare against.
+  const reload = async () => {
+    const fetched = await existing.refetch();
+    setStale(
+      `Loaded the version saved ${fetched.data?.updatedAt ? new Date(fetched.data.updatedAt).toLocaleString() : "now"}. Your text is still in the form: open the saved case in a new tab to compare, then save to replace it with what you see here.`,
+    );
   };
 
   return (
@@ -65,6 +83,17 @@ export default function CasebookEditorRoute() {
         atmosphericKPa={atmosphericKPa}
         pending={create.isPending || update.isPending}
         onSave={save}
+        notice={
+          stale &&
+          caseId && (
+            <div className="space-y-2">
+              <StaleWriteNotice message={stale} onReload={() => void reload()} reloading={existing.isFetching} />
+              <a href={paths.casebook.case.getHref(caseId)} target="_blank" rel="noreferrer" className="font-medium text-accent underline underline-offset-4">
+                Open the saved case in a new tab
+              </a>
+            </div>
+          )
+        }
       />
     </div>
   );

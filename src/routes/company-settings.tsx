@@ -2,10 +2,13 @@ import { useState } from "react";
 import { ProcedureSettingsUpdateSchema, type ProcedureSettingsResponse } from "@shared/schemas/procedure-records.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
+import { StaleWriteNotice } from "@/components/ui/stale-write/stale-write-notice.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { parseDecimal } from "@/components/ui/field/number-input.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useOrganisationSettings, useUpdateOrganisationSettings } from "@/lib/api/organisation.ts";
+
+const LABELS = { evacuationTargetMicrons: "Evacuation target (µm)", pressureTestAllowedDropKPa: "Allowed pressure drop (kPa)" } as const;
 
 const asText = (value: number | null) => (value === null ? "" : String(value));
 /** "" clears the override; unreadable text goes through as text so the schema names the field. */
@@ -14,27 +17,51 @@ const asValue = (text: string) => {
   return parsed === undefined ? null : parsed === "invalid" ? text : parsed;
 };
 
-function SettingsForm({ current }: { current: ProcedureSettingsResponse }) {
+function SettingsForm({ current, onReload, reloading }: { current: ProcedureSettingsResponse; onReload: () => Promise<unknown>; reloading: boolean }) {
   const [target, setTarget] = useState(asText(current.settings.evacuationTargetMicrons));
   const [drop, setDrop] = useState(asText(current.settings.pressureTestAllowedDropKPa));
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [saved, setSaved] = useState(false);
+  const [stale, setStale] = useState<{ message: string; typed: [string, string][] } | null>(null);
   const update = useUpdateOrganisationSettings();
 
   const submit = async () => {
     setSaved(false);
-    const parsed = ProcedureSettingsUpdateSchema.safeParse({ evacuationTargetMicrons: asValue(target), pressureTestAllowedDropKPa: asValue(drop) });
+    setStale(null);
+    // Only what changed is sent (PATCH), so a colleague's change to the other limit is kept.
+    const typed = { evacuationTargetMicrons: target, pressureTestAllowedDropKPa: drop };
+    const changed = Object.fromEntries(
+      Object.entries(typed)
+        .filter(([field, text]) => text !== asText(current.settings[field as keyof typeof typed]))
+        .map(([field, text]) => [field, asValue(text)]),
+    );
+    if (Object.keys(changed).length === 0) return setSaved(true);
+    const parsed = ProcedureSettingsUpdateSchema.safeParse(changed);
     if (!parsed.success) {
       setErrors(Object.fromEntries(parsed.error.issues.map((issue) => [String(issue.path[0]), issue.message])));
       return;
     }
     setErrors({});
     try {
-      await update.mutateAsync(parsed.data);
+      await update.mutateAsync({ ...parsed.data, version: current.version });
       setSaved(true);
     } catch (error) {
+      if (error instanceof ApiError && error.isStale) {
+        setStale({ message: error.message, typed: Object.keys(changed).map((field) => [LABELS[field as keyof typeof LABELS], typed[field as keyof typeof typed]]) });
+        return;
+      }
       setErrors(error instanceof ApiError ? { ...error.fields, _: error.message } : { _: "The settings were not saved" });
     }
+  };
+
+  // Loads the saved limits into the form; what the person typed stays listed in the notice.
+  const reload = async () => {
+    const latest = (await onReload()) as { data?: ProcedureSettingsResponse } | undefined;
+    if (latest?.data) {
+      setTarget(asText(latest.data.settings.evacuationTargetMicrons));
+      setDrop(asText(latest.data.settings.pressureTestAllowedDropKPa));
+    }
+    setStale((shown) => (shown ? { ...shown, message: "These are the limits as saved now. Make your change again if it still applies." } : null));
   };
 
   return (
@@ -47,6 +74,7 @@ function SettingsForm({ current }: { current: ProcedureSettingsResponse }) {
       }}
     >
       {errors._ && <FormAlert>{errors._}</FormAlert>}
+      {stale && <StaleWriteNotice message={stale.message} typed={stale.typed} onReload={() => void reload()} reloading={reloading} />}
       {saved && <FormAlert tone="good">Saved: new procedures on every visit use these limits</FormAlert>}
       <NumberField
         label="Evacuation target"
@@ -88,7 +116,7 @@ export default function CompanySettingsRoute() {
           ⚠ {settings.error.message}
         </p>
       )}
-      {settings.isSuccess && <SettingsForm current={settings.data} />}
+      {settings.isSuccess && <SettingsForm current={settings.data} onReload={() => settings.refetch()} reloading={settings.isFetching} />}
     </div>
   );
 }

@@ -2,7 +2,7 @@ import { formatNumber } from "@/lib/units/display-units.ts";
 import { applicationText } from "@shared/content/applications.ts";
 import { Printer } from "lucide-react";
 import { Link, useParams } from "react-router-dom";
-import { ADJUSTMENT_KIND_LABELS, VISIT_STATUS_LABELS } from "@shared/schemas/visits.ts";
+import { ADJUSTMENT_KIND_LABELS, isStanding, VISIT_STATUS_LABELS } from "@shared/schemas/visits.ts";
 import { can } from "@shared/schemas/auth.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
@@ -18,6 +18,7 @@ import { FindingPanel } from "@/features/run-log/components/finding-panel.tsx";
 import { MeasuredCyclePanel } from "@/features/run-log/components/measured-cycle-panel.tsx";
 import { TrendChart } from "@/features/run-log/components/trend-chart.tsx";
 import { circuitSeries } from "@/features/run-log/utils/circuit-series.ts";
+import { AuditTrail } from "@/features/visit/components/audit-trail.tsx";
 import { useMe } from "@/lib/api/auth.ts";
 import { useEquipmentDetail } from "@/lib/api/equipment.ts";
 import { useVisit } from "@/lib/api/visits.ts";
@@ -32,7 +33,7 @@ export default function VisitReportRoute() {
   const visit = useVisit(visitId);
   const equipment = useEquipmentDetail(visit.data?.equipmentId ?? "");
   const me = useMe();
-  const { units, atmosphericKPa } = useDisplayUnits();
+  const { units } = useDisplayUnits();
 
   if (visit.isPending || (visit.isSuccess && equipment.isPending)) return <p aria-busy="true">Preparing the report…</p>;
   if (visit.isError || equipment.isError) {
@@ -44,6 +45,9 @@ export default function VisitReportRoute() {
   }
   const data = visit.data;
   const unit = equipment.data!.equipment;
+  const atmosphericKPa = data.atmosphere.pressureKPa;
+  // Voided records are corrections: left out of the report, named in its audit trail.
+  const adjustments = data.adjustments.filter(isStanding);
 
   return (
     <article className="report space-y-6" aria-label="Visit report">
@@ -123,11 +127,11 @@ export default function VisitReportRoute() {
         <h2 id="adjustments-heading" className="text-lg font-semibold">
           Adjustments and work done
         </h2>
-        {data.adjustments.length === 0 ? (
+        {adjustments.length === 0 ? (
           <p className="text-muted">None recorded.</p>
         ) : (
           <ul className="mt-1 space-y-1">
-            {data.adjustments.map((adjustment) => (
+            {adjustments.map((adjustment) => (
               <li key={adjustment.id}>
                 <span className="num text-muted">{stamp(adjustment.at)}</span> — {ADJUSTMENT_KIND_LABELS[adjustment.kind]}
                 {adjustment.circuit ? ` (circuit ${adjustment.circuit})` : ""}: {adjustment.description}
@@ -171,6 +175,8 @@ export default function VisitReportRoute() {
           <p>Not signed off yet ({VISIT_STATUS_LABELS[data.status].toLowerCase()}).</p>
         )}
       </section>
+
+      <AuditTrail events={data.events} />
 
       {me.data && can(me.data.role, "writeRecords") && <SendReportForm visitId={data.id} defaultTo={data.customerContactEmail} />}
     </article>

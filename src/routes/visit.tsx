@@ -1,9 +1,10 @@
 import { applicationText } from "@shared/content/applications.ts";
-import { FileText } from "lucide-react";
+import { FileText, Lock } from "lucide-react";
 import { useState, type ReactNode } from "react";
 import { Link, useParams, useSearchParams } from "react-router-dom";
 import { getRefrigerant } from "@shared/engine/index.ts";
 import { can } from "@shared/schemas/auth.ts";
+import { acceptsEntries, closedVisitMessage } from "@shared/schemas/visits.ts";
 import { canCasebook } from "@shared/schemas/casebook.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
@@ -15,9 +16,11 @@ import { RunLog } from "@/features/run-log/components/run-log.tsx";
 import { ElectricalPanel } from "@/features/procedures/components/electrical-panel.tsx";
 import { EvacuationPanel } from "@/features/procedures/components/evacuation-panel.tsx";
 import { LeakSearchPanel } from "@/features/procedures/components/leak-search-panel.tsx";
+import { ROLE_READ_ONLY_NOTE } from "@/features/procedures/components/procedure-layout.tsx";
 import { PressureTestPanel } from "@/features/procedures/components/pressure-test-panel.tsx";
 import { VisitRefrigerant } from "@/features/register/components/visit-refrigerant.tsx";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
+import { AuditTrail } from "@/features/visit/components/audit-trail.tsx";
 import { CommentsPanel } from "@/features/visit/components/comments-panel.tsx";
 import { PhotosPanel } from "@/features/visit/components/photos-panel.tsx";
 import { ReviewPanel } from "@/features/visit/components/review-panel.tsx";
@@ -33,7 +36,7 @@ export default function VisitRoute() {
   const visit = useVisit(visitId);
   const equipment = useEquipmentDetail(visit.data?.equipmentId ?? "");
   const me = useMe();
-  const { units, atmosphericKPa } = useDisplayUnits();
+  const { units } = useDisplayUnits();
   const [circuit, setCircuit] = useState(1);
   const [searchParams, setSearchParams] = useSearchParams();
 
@@ -56,7 +59,12 @@ export default function VisitRoute() {
   const data = visit.data;
   const unit = equipment.data!.equipment;
   const role = me.data?.role ?? "apprentice";
-  const canWrite = can(role, "writeRecords") && data.status !== "signed-off";
+  // Entries and voids only while the visit is open or sent back; awaiting review and signed off are closed.
+  const open = acceptsEntries(data.status);
+  const canWrite = can(role, "writeRecords") && open;
+  const readOnlyNote = open ? ROLE_READ_ONLY_NOTE : closedVisitMessage(data.status);
+  // The site's atmosphere (from the server), for every gauge pressure on this visit.
+  const atmosphericKPa = data.atmosphere.pressureKPa;
   const nameplate = unit.circuits.find((candidate) => candidate.number === circuit) ?? unit.circuits[0]!;
   const refrigerant = getRefrigerant(unit.refrigerant);
   const caution = safetyClasses[refrigerant.safety.class].caution;
@@ -79,8 +87,7 @@ export default function VisitRoute() {
           <p className="text-sm text-muted">
             {applicationText[unit.application].label} · Circuit {nameplate.number}: {METERING_LABELS[nameplate.meteringDevice]}, factory charge <span className="num">{nameplate.factoryChargeKg} kg</span>
             {nameplate.targetSuperheatK != null && <> · target superheat <span className="num">{nameplate.targetSuperheatK} K</span></>}
-            {nameplate.targetSubcoolingK != null && <> · target subcooling <span className="num">{nameplate.targetSubcoolingK} K</span></>} · gauge pressures against{" "}
-            <span className="num">{atmosphericKPa} kPa</span>
+            {nameplate.targetSubcoolingK != null && <> · target subcooling <span className="num">{nameplate.targetSubcoolingK} K</span></>}
           </p>
 
           <PanelBoundary>
@@ -99,16 +106,21 @@ export default function VisitRoute() {
               }}
               isBlend={refrigerant.kind === "blend"}
               units={units}
-              atmosphericKPa={atmosphericKPa}
+              atmosphere={data.atmosphere}
               canWrite={canWrite}
+              readOnlyNote={readOnlyNote}
             />
           </PanelBoundary>
         </div>
       ),
     },
-    { id: "electrical", label: "Electrical", element: <ElectricalPanel visitId={data.id} circuits={unit.circuits.map((candidate) => candidate.number)} canWrite={canWrite} /> },
-    { id: "leak-search", label: "Leak search", element: <LeakSearchPanel visitId={data.id} canWrite={canWrite} /> },
-    { id: "pressure-test", label: "Pressure test", element: <PressureTestPanel visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} canWrite={canWrite} /> },
+    { id: "electrical", label: "Electrical", element: <ElectricalPanel visitId={data.id} circuits={unit.circuits.map((candidate) => candidate.number)} canWrite={canWrite} readOnlyNote={readOnlyNote} /> },
+    { id: "leak-search", label: "Leak search", element: <LeakSearchPanel visitId={data.id} canWrite={canWrite} readOnlyNote={readOnlyNote} /> },
+    {
+      id: "pressure-test",
+      label: "Pressure test",
+      element: <PressureTestPanel visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} canWrite={canWrite} readOnlyNote={readOnlyNote} />,
+    },
     { id: "evacuation", label: "Evacuation", element: <EvacuationPanel visitId={data.id} canWrite={canWrite} /> },
     { id: "refrigerant", label: "Refrigerant", element: <VisitRefrigerant visitId={data.id} unit={unit} circuit={nameplate.number} canWrite={canWrite} /> },
   ];
@@ -142,6 +154,16 @@ export default function VisitRoute() {
         </Link>
       </header>
 
+      {!open && (
+        <div role="status" className="flex items-start gap-3 rounded-card border-2 border-ink bg-surface p-4" data-testid="visit-closed">
+          <Lock aria-hidden className="mt-0.5 size-5 shrink-0" />
+          <div>
+            <p className="font-semibold">{closedVisitMessage(data.status)}.</p>
+            {can(role, "signOff") && <p className="text-sm">To correct it, reopen it with a reason in the Review panel below.</p>}
+          </div>
+        </div>
+      )}
+
       {caution && <CautionPanel topic={caution} compact />}
 
       <Segmented<string> label="Visit section" value={activeSection.id} onChange={(id) => setSearchParams({ section: id }, { replace: true })} options={sections.map(({ id, label }) => ({ value: id, label }))} className="flex flex-wrap" />
@@ -152,11 +174,14 @@ export default function VisitRoute() {
           <ReviewPanel visit={data} canSubmit={can(role, "writeRecords")} canSignOff={can(role, "signOff")} />
         </PanelBoundary>
         <PanelBoundary>
-          <CommentsPanel visit={data} canComment={can(role, "writeRecords")} />
+          <CommentsPanel visit={data} canComment={can(role, "writeRecords") && data.status !== "signed-off"} />
         </PanelBoundary>
       </div>
       <PanelBoundary>
-        <PhotosPanel visit={data} canUpload={can(role, "writeRecords")} />
+        <PhotosPanel visit={data} canUpload={canWrite} />
+      </PanelBoundary>
+      <PanelBoundary>
+        <AuditTrail events={data.events} />
       </PanelBoundary>
       {canCasebook(role, "author") && (
         <PanelBoundary>

@@ -2,12 +2,13 @@ import { expect, test, type Page } from "@playwright/test";
 import { signIn, signOut } from "./sign-in.ts";
 
 /**
- * R407C gauge pressures (kPa, atmosphere 101.325 kPa) at which it saturates at the given
- * temperature, from Satura's table (saturationPressure, checked against the Lemmon 2003
- * equations in tests/engine/properties). Playwright's loader cannot import the JSON tables,
- * so the values are written here, rounded to the kPa a gauge shows.
+ * R407C gauge pressures (kPa) at which it saturates at the given temperature, from Satura's
+ * table (saturationPressure, checked against the Lemmon 2003 equations in tests/engine/properties),
+ * against the demo clinic's atmosphere: 100.308 kPa at its 85 m altitude (ISO 2533), the figure
+ * the run log and the server both use. Playwright's loader cannot import the JSON tables, so
+ * the values are written here, rounded to the kPa a gauge shows.
  */
-const R407C_GAUGE: Record<string, string> = { "dew 1": "376", "bubble 38": "1564", "dew 5": "446", "bubble 42": "1734", "dew 6": "464" };
+const R407C_GAUGE: Record<string, string> = { "dew 1": "377", "bubble 38": "1565", "dew 5": "447", "bubble 42": "1736", "dew 6": "465" };
 const gauge = (temperatureC: number, point: "bubble" | "dew") => R407C_GAUGE[`${point} ${temperatureC}`]!;
 
 async function fill(page: Page, label: string, value: string) {
@@ -24,6 +25,8 @@ test.describe("run log and review", () => {
     await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
     const visitUrl = page.url();
 
+    // The run log says which atmosphere the gauges read against: the site's, as the server uses.
+    await expect(page.getByTestId("atmosphere-line")).toHaveText("Gauge pressures against 100.3 kPa absolute: site altitude 85 m.");
     // Reading 1: short of charge — suction dew 1 °C, suction line 13 °C (12 K superheat), liquid bubble 38 °C, line 37 °C.
     await fill(page, "Suction pressure", gauge(1, "dew"));
     await fill(page, "Suction line temperature", "13");

@@ -181,14 +181,24 @@ describe("casebook API", () => {
     expect((await apprentice.get("/api/cases")).body.cases.some((c: { id: string }) => c.id === draft.id)).toBe(false);
     expect((await apprentice.post(`/api/cases/${draft.id}/publish`)).status).toBe(403);
 
+    expect(draft.version).toBe(1);
     const edited = await senior
       .put(`/api/cases/${draft.id}`)
+      .set("If-Match", '"1"')
       .send({ ...authored, input: { ...authored.input, liquidLineTempC: 44.5 } });
     expect(edited.status).toBe(200);
+    expect(edited.body.case.version).toBe(2);
     // Subcooling now 0.5 K against a 5 K target: the engine, not the author, changes the answer.
     expect(edited.body.case.expected.chargeState).toBe("undercharged");
 
-    const published = await owner.post(`/api/cases/${draft.id}/publish`);
+    // An owner who opened the case before that edit: their copy is stale and is refused.
+    const stale = await owner.put(`/api/cases/${draft.id}`).set("If-Match", '"1"').send({ ...authored, title: "Overwritten" });
+    expect(stale.status).toBe(409);
+    expect(stale.body.message).toMatch(/A newer version of this case was saved.*Reload/);
+    expect((await senior.get(`/api/cases/${draft.id}`)).body.case.title).toBe(authored.title);
+    expect((await owner.post(`/api/cases/${draft.id}/publish`).set("If-Match", '"1"')).status).toBe(409);
+
+    const published = await owner.post(`/api/cases/${draft.id}/publish`).set("If-Match", '"2"');
     expect(published.status).toBe(200);
     expect(published.body.case.status).toBe("published");
     expect((await apprentice.get(`/api/cases/${draft.id}`)).status).toBe(200);
@@ -216,9 +226,9 @@ describe("casebook API", () => {
     const list = await senior.get("/api/cases");
     const own = list.body.cases.find((c: { source: string }) => c.source === "organisation");
     expect((await outsider.get(`/api/cases/${own.id}`)).status).toBe(404);
-    expect((await outsider.put(`/api/cases/${own.id}`).send(authored)).status).toBe(404);
-    expect((await outsider.post(`/api/cases/${own.id}/publish`)).status).toBe(404);
-    expect((await outsider.delete(`/api/cases/${own.id}`)).status).toBe(404);
+    expect((await outsider.put(`/api/cases/${own.id}`).set("If-Match", '"1"').send(authored)).status).toBe(404);
+    expect((await outsider.post(`/api/cases/${own.id}/publish`).set("If-Match", '"1"')).status).toBe(404);
+    expect((await outsider.delete(`/api/cases/${own.id}`).set("If-Match", '"1"')).status).toBe(404);
     expect(
       (
         await outsider
@@ -252,9 +262,11 @@ describe("casebook API", () => {
         .post(`/api/visits/${visit.id}/readings`)
         .send({
           circuit: 1,
+          // A reading carries measured values only; the nameplate gives the rest.
           ...authored.input,
           refrigerant: undefined,
           meteringDevice: undefined,
+          targetSubcoolingK: undefined,
           note: "Spoke with the practice manager",
         })
     ).body.reading;

@@ -21,22 +21,52 @@ describe("organisation procedure settings", () => {
   });
   afterAll(() => testApp.close());
 
+  const patch = (agent: Agent, version: number, body: object) => agent.patch("/api/organisation/settings").set("If-Match", `"${version}"`).send(body);
+  const currentVersion = async () => (await owner.get("/api/organisation/settings")).body.version as number;
+
   it("starts on Satura's defaults: 500 microns (the trade norm, ACHR News [S4]) and the app's 10 kPa allowed drop", async () => {
     const response = await technician.get("/api/organisation/settings");
     expect(response.status).toBe(200);
     expect(response.body).toEqual({
       settings: { evacuationTargetMicrons: null, pressureTestAllowedDropKPa: null },
       defaults: { evacuationTargetMicrons: 500, pressureTestAllowedDropKPa: 10 },
+      version: 1,
     });
+    expect(response.headers.etag).toBe('"1"');
   });
 
   it("lets only owners change them, with field messages for bad values", async () => {
-    expect((await senior.put("/api/organisation/settings").send({ evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: null })).status).toBe(403);
-    const bad = await owner.put("/api/organisation/settings").send({ evacuationTargetMicrons: -5, pressureTestAllowedDropKPa: "x" });
+    expect((await patch(senior, 1, { evacuationTargetMicrons: 300 })).status).toBe(403);
+    const bad = await patch(owner, 1, { evacuationTargetMicrons: -5, pressureTestAllowedDropKPa: "x" });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.fields)).toEqual(expect.arrayContaining(["evacuationTargetMicrons", "pressureTestAllowedDropKPa"]));
-    const saved = await owner.put("/api/organisation/settings").send({ evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 5 });
-    expect(saved.body.settings).toEqual({ evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 5 });
+    const unknown = await patch(owner, 1, { evacuationTargetMicrons: 300, procedureLimits: {} });
+    expect(unknown.status).toBe(400);
+    expect(unknown.body.fields.procedureLimits).toMatch(/procedureLimits/);
+    const saved = await patch(owner, 1, { evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 5 });
+    expect(saved.status).toBe(200);
+    expect(saved.body).toMatchObject({ settings: { evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 5 }, version: 2 });
+  });
+
+  it("changes only the fields sent (PATCH), keeping the others", async () => {
+    const saved = await patch(owner, await currentVersion(), { pressureTestAllowedDropKPa: 7 });
+    expect(saved.body.settings).toEqual({ evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 7 });
+  });
+
+  it("refuses a save based on an old version with 409, keeping the newer one", async () => {
+    const seen = await currentVersion();
+    expect((await patch(owner, seen, { evacuationTargetMicrons: 250 })).status).toBe(200);
+    // A second tab still holding the version before that save.
+    const stale = await patch(owner, seen, { evacuationTargetMicrons: 400 });
+    expect(stale.status).toBe(409);
+    expect(stale.body.message).toMatch(/A newer version of the company limits was saved.*Reload/);
+    expect((await owner.get("/api/organisation/settings")).body.settings.evacuationTargetMicrons).toBe(250);
+    const unversioned = await owner.patch("/api/organisation/settings").send({ evacuationTargetMicrons: 400 });
+    expect(unversioned.status).toBe(428);
+    expect(unversioned.body.message).toMatch(/If-Match/);
+    expect((await owner.patch("/api/organisation/settings").set("If-Match", "*").send({ evacuationTargetMicrons: 400 })).status).toBe(400);
+    // Back to the figure the next test expects.
+    expect((await patch(owner, await currentVersion(), { evacuationTargetMicrons: 300 })).status).toBe(200);
   });
 
   it("applies the override to new evacuations on a visit, and keeps it to the one organisation", async () => {
@@ -48,7 +78,7 @@ describe("organisation procedure settings", () => {
   });
 
   it("clears an override with null", async () => {
-    const cleared = await owner.put("/api/organisation/settings").send({ evacuationTargetMicrons: null, pressureTestAllowedDropKPa: 5 });
-    expect(cleared.body.settings).toEqual({ evacuationTargetMicrons: null, pressureTestAllowedDropKPa: 5 });
+    const cleared = await patch(owner, await currentVersion(), { evacuationTargetMicrons: null });
+    expect(cleared.body.settings).toEqual({ evacuationTargetMicrons: null, pressureTestAllowedDropKPa: 7 });
   });
 });

@@ -140,8 +140,14 @@ describe("procedure records API", () => {
     expect(earlier.status).toBe(400);
     expect(earlier.body.fields.minutes).toMatch(/later than/);
 
-    const isolated = await technician.patch(`/api/visits/${visitId}/evacuations/${evacuationId}`).send({ isolatedAtMinutes: 30 });
+    // Samples only add to the series: the version a device holds for valving off stays good.
+    expect(last!.body.evacuation.version).toBe(1);
+    const isolated = await technician.patch(`/api/visits/${visitId}/evacuations/${evacuationId}`).set("If-Match", '"1"').send({ isolatedAtMinutes: 30 });
     expect(isolated.body.evacuation.result.stage).toBe("decay-test");
+    expect(isolated.body.evacuation.version).toBe(2);
+    const stale = await technician.patch(`/api/visits/${visitId}/evacuations/${evacuationId}`).set("If-Match", '"1"').send({ targetMicrons: 250 });
+    expect(stale.status).toBe(409);
+    expect(stale.body.message).toMatch(/A newer version of this evacuation was saved/);
     for (const sample of HELD) last = await technician.post(`/api/visits/${visitId}/evacuations/${evacuationId}/samples`).send(sample);
     const { result } = last!.body.evacuation;
     expect(result.stage).toBe("judged");
@@ -201,6 +207,6 @@ describe("procedure records API", () => {
     expect((await technician.post(`/api/visits/${visitId}/leak-searches`).send({ method: "uv-dye", placesChecked: ["Coil"] })).status).toBe(409);
     expect((await technician.post(`/api/visits/${visitId}/electrical-checks`).send({ target: "supply", supplyVolts: [415, 415, 415] })).status).toBe(409);
     expect((await technician.post(`/api/visits/${visitId}/evacuations/${evacuationId}/samples`).send({ microns: 300 })).status).toBe(409);
-    expect((await technician.patch(`/api/visits/${visitId}/evacuations/${evacuationId}`).send({ isolatedAtMinutes: null })).status).toBe(409);
+    expect((await technician.patch(`/api/visits/${visitId}/evacuations/${evacuationId}`).set("If-Match", '"1"').send({ isolatedAtMinutes: null })).status).toBe(409);
   });
 });

@@ -1,10 +1,18 @@
+import { isNotNull } from "drizzle-orm";
+import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { saturationPressure } from "@shared/engine/index.ts";
+import { readings } from "@server/db/schema.ts";
+import { judgeReadingsCsv } from "@server/import/readings-csv.ts";
+import { storeImportedReadings } from "@server/import/store-imported-readings.ts";
+import { demoSite } from "@server/db/seed/demo-scenario.ts";
+import { atmosphericPressureAtAltitude, saturationPressure } from "@shared/engine/index.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
-const gauge = (temperatureC: number, point: "bubble" | "dew") => (saturationPressure("R407C", temperatureC, point) - 101.325).toFixed(1);
+/** Gauges at the demo clinic (85 m) read against the ISO 2533 atmosphere there. */
+const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+  (saturationPressure("R407C", temperatureC, point) - atmosphericPressureAtAltitude(demoSite.altitudeM)).toFixed(1);
 
 /** A logger export: one row a minute, suction dew 6 °C, liquid bubble 42 °C. */
 function loggedSeries(rows: number): string[] {
@@ -86,6 +94,98 @@ describe("CSV import of a reading series", () => {
     const noTime = await send("a,b\n1,2", "preview", { a: "suctionPressureKPa", b: "ignore" });
     expect(noTime.body.problems[0].message).toMatch(/reading time/);
     const binary = await send('"unclosed,quote\n1,2', "preview");
-    expect(binary.body.problems[0].message).toMatch(/not a readable CSV/);
+    expect(binary.status).toBe(400);
+    expect(binary.body.message).toMatch(/not a readable CSV/);
+  });
+
+  it("caps the columns and the line length with messages that say so, before judging anything", async () => {
+    const wide = ["Time", ...Array.from({ length: 70 }, (_, index) => `c${index}`)].join(",");
+    const tooWide = await send(`${wide}\n10:00${",1".repeat(70)}`, "preview");
+    expect(tooWide.status).toBe(400);
+    expect(tooWide.body.message).toBe("The header has 71 columns; Satura reads at most 64.");
+    // The 1.9 MB header of the issue: refused on its length at once, not parsed column by column.
+    const huge = Array.from({ length: 190_000 }, (_, index) => `c${index % 10}`).join(",");
+    const started = performance.now();
+    const tooLong = await send(`${huge}\n1,2`, "preview");
+    expect(tooLong.status).toBe(400);
+    expect(tooLong.body.message).toMatch(/^Line 1 has [\d ]+ characters; a line may have at most 4 096\./);
+    expect(performance.now() - started).toBeLessThan(5_000);
+    expect(await readingCount()).toBe(4);
+  });
+
+  it("names the CSV limit (2 MB) when the file is too large", async () => {
+    const response = await send("x".repeat(2 * 1024 * 1024 + 10), "preview");
+    expect(response.status).toBe(413);
+    expect(response.body.message).toBe("That CSV file is too large (2 MB at most)");
+  });
+
+  it("stores every row or none: a visit signed off while the slices go in gets none of them", async () => {
+    const units = (await technician.get("/api/equipment")).body.equipment;
+    const rooftop = units.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C");
+    const closing = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Signed off mid-import" })).body.visit.id;
+    const judged = judgeReadingsCsv({
+      text: loggedSeries(30).join("\n"),
+      context: { unit: rooftop, nameplate: rooftop.circuits[0], site: { altitudeM: demoSite.altitudeM } },
+      dayStart,
+      keepRows: true,
+    });
+    if ("refused" in judged) throw new Error(judged.refused.message);
+    expect(judged.validCount).toBe(30);
+    const senior = await signedIn(testApp.app, BELLBIRD.senior);
+    expect((await senior.post(`/api/visits/${closing}/review`).send({ action: "sign-off" })).status).toBe(200);
+
+    const organisationId = (await technician.get("/api/auth/me")).body.user.organisationId;
+    const recordedBy = (await technician.get("/api/auth/me")).body.user.id;
+    await expect(
+      storeImportedReadings(testApp.database.db, organisationId, { visitId: closing, circuit: 1, recordedBy, slices: judged.slices }),
+    ).rejects.toThrow(/signed off/);
+    const staged = await testApp.database.db.select({ id: readings.id }).from(readings).where(isNotNull(readings.pendingImportId));
+    expect(staged).toHaveLength(0);
+    expect((await technician.get(`/api/visits/${closing}`)).body.visit.readings).toHaveLength(0);
+  });
+
+  it("keeps the server answering while a 5 000-row file is judged and stored", async () => {
+    const units = (await technician.get("/api/equipment")).body.equipment;
+    const rooftop = units.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C");
+    const busy = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Week of logger data" })).body.visit.id;
+    const lines = ["Time,Suction pressure kPa,Suction temp C,Liquid pressure kPa,Liquid temp C"];
+    for (let second = 0; second < 5000; second++) {
+      const iso = new Date(Date.UTC(2026, 10, 30, 20, 0, second)).toISOString();
+      lines.push(`${iso},${gauge(6, "dew")},${(12 + (second % 50) / 100).toFixed(2)},${gauge(42, "bubble")},37`);
+    }
+    const file = Buffer.from(lines.join("\n"));
+    const waits: number[] = [];
+    let importing = true;
+    const importStarted = performance.now();
+    const importDone = technician
+      .post(`/api/visits/${busy}/readings/import`)
+      .field("circuit", "1")
+      .field("dayStart", dayStart)
+      .field("mode", "all")
+      .attach("file", file, "week.csv")
+      .then((response) => {
+        importing = false;
+        return response;
+      });
+    while (importing) {
+      const started = performance.now();
+      const health = await request(testApp.app).get("/api/health");
+      if (importing) waits.push(performance.now() - started);
+      expect(health.status).toBe(200);
+      await new Promise((resolve) => setTimeout(resolve, 20));
+    }
+    const imported = await importDone;
+    const importMs = performance.now() - importStarted;
+    expect(imported.status).toBe(201);
+    expect(imported.body.stored).toBe(5000);
+    // Health checks kept being answered all through the import, most of them at once. The target
+    // is under 100 ms (npm run bench prints the figures); these bounds only catch a server that
+    // stalls again (before: one health check waited 9.9 s, the whole import), and they scale with
+    // the import's own time because the suite runs on machines shared with other work.
+    waits.sort((a, b) => a - b);
+    expect(waits.length).toBeGreaterThan(5);
+    expect(waits[Math.floor(waits.length / 2)]).toBeLessThan(250);
+    expect(waits.at(-1)).toBeLessThan(Math.max(1_000, importMs / 4));
+    expect((await technician.get(`/api/visits/${busy}`)).body.visit.readingCount).toBe(5000);
   });
 });

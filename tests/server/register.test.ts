@@ -182,7 +182,18 @@ describe("refrigerant register API", () => {
     expect(declared.body.circuits[0].charging).toMatchObject({ lineAdjustmentKg: 0.5, declared: true });
     expect(declared.body.circuits[0].charging.check.verdict).toBe("fail");
     expect((await technician.put(`/api/visits/${visitId}/refrigerant/charging/1`).send({ lineAdjustmentKg: "lots" })).status).toBe(400);
-    expect((await technician.delete(`/api/visits/${visitId}/refrigerant/charging/1`)).body.circuits[0].charging.declared).toBe(false);
+    // Changing the figure keeps the earlier declaration, voided with what changed.
+    const changed = await technician.put(`/api/visits/${visitId}/refrigerant/charging/1`).send({ lineAdjustmentKg: 0.4 });
+    expect(changed.body.circuits[0].charging).toMatchObject({ lineAdjustmentKg: 0.4, declared: true });
+    const trail = (await technician.get(`/api/visits/${visitId}`)).body.visit.events;
+    expect(trail.at(-1)).toMatchObject({ action: "voided", recordKind: "charging", reason: "Replaced: line adjustment 0.5 kg changed to 0.4 kg" });
+    // Withdrawing a declaration is a void with a reason; nothing is deleted (no DELETE route).
+    const withdrawn = await technician
+      .post(`/api/visits/${visitId}/voids`)
+      .send({ kind: "charging", recordId: changed.body.circuits[0].charging.declarationId, reason: "Not a full weigh-in after all" });
+    expect(withdrawn.status).toBe(201);
+    expect((await technician.get(`/api/visits/${visitId}/refrigerant`)).body.circuits[0].charging.declared).toBe(false);
+    expect((await technician.delete(`/api/visits/${visitId}/refrigerant/charging/1`)).status).toBe(404);
 
     // Cylinder contents follow the register: 8.8 − 3.6 reused = 5.2 kg; 10 − 0.6 = 9.4 kg.
     expect((await technician.get(`/api/cylinders/${recovery.id}`)).body.cylinder.contentsKg).toBeCloseTo(5.2, 6);
@@ -236,7 +247,7 @@ describe("refrigerant register API", () => {
 
     // The licence number a technician keeps on their profile goes beside their entries.
     const profile = (await technician.get("/api/profile")).body;
-    const licensed = await technician.put("/api/profile").send({ name: profile.user.name, preferences: profile.preferences, licenceNumber: " L123456 " });
+    const licensed = await technician.put("/api/profile").set("If-Match", `"${profile.version}"`).send({ name: profile.user.name, preferences: profile.preferences, licenceNumber: " L123456 " });
     expect(licensed.body.licenceNumber).toBe("L123456");
     const tooLong = await technician.put("/api/profile").send({ name: profile.user.name, preferences: profile.preferences, licenceNumber: "x".repeat(41) });
     expect(tooLong.status).toBe(400);

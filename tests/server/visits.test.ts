@@ -1,13 +1,15 @@
 import sharp from "sharp";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { diagnose, saturationPressure } from "@shared/engine/index.ts";
+import { demoSite } from "@server/db/seed/demo-scenario.ts";
+import { atmosphericPressureAtAltitude, diagnose, saturationPressure } from "@shared/engine/index.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../setup/demo-accounts.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
-const ATMOSPHERE = 101.325;
+/** The demo clinic stands at 85 m: gauges there read against the ISO 2533 atmosphere at that altitude. */
+const ATMOSPHERE = atmosphericPressureAtAltitude(demoSite.altitudeM);
 /** Gauge pressure at which R407C has the wanted saturation temperature. */
 const gauge = (temperatureC: number, point: "bubble" | "dew") => Number((saturationPressure("R407C", temperatureC, point) - ATMOSPHERE).toFixed(1));
 
@@ -86,7 +88,10 @@ describe("visits and the run log API", () => {
     // Refrigerant, metering device and nameplate targets come from the equipment.
     expect(reading.input).toMatchObject({ refrigerant: "R407C", meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5 });
     const { circuit: _circuit, ...fields } = rooftopReading;
-    expect(reading.result).toEqual(diagnose({ ...fields, refrigerant: "R407C", meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, compressorRla: 11.8, application: "comfort-cooling" }));
+    expect(reading.input.atmosphericPressureKPa).toBe(ATMOSPHERE);
+    expect(reading.result).toEqual(
+      diagnose({ ...fields, refrigerant: "R407C", meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, compressorRla: 11.8, application: "comfort-cooling", atmosphericPressureKPa: ATMOSPHERE }),
+    );
     // Superheat from the dew point, subcooling from the bubble point (R407C glides ~5 K).
     expect(reading.result.superheatK).toBeCloseTo(6, 1);
     expect(reading.result.subcoolingK).toBeCloseTo(5, 1);
@@ -98,7 +103,10 @@ describe("visits and the run log API", () => {
       .send({ ...rooftopReading, suctionPressureKPa: 2000, liquidPressureKPa: 1500 });
     expect(response.status).toBe(400);
     expect(response.body.fields.suctionPressureKPa).toMatch(/below liquid pressure/);
-    const missing = await technician.post(`/api/visits/${visitId}/readings`).send({ circuit: 3, suctionPressureKPa: "abc" });
+    const typo = await technician.post(`/api/visits/${visitId}/readings`).send({ ...rooftopReading, suctionPressureKPa: "abc" });
+    expect(typo.status).toBe(400);
+    expect(typo.body.fields.suctionPressureKPa).toMatch(/must be a number in kPa gauge/);
+    const missing = await technician.post(`/api/visits/${visitId}/readings`).send({ ...rooftopReading, circuit: 3 });
     expect(missing.status).toBe(400);
     expect(missing.body.fields.circuit).toMatch(/2 circuit/);
     const visit = await technician.get(`/api/visits/${visitId}`);

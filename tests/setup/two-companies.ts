@@ -131,6 +131,8 @@ export function pathFor(path: string, records: BellbirdRecords): string {
   return segments
     .map((segment, index) => {
       if (segment === ":evacuationId") return records.evacuationId;
+      // A reclaim line that does not exist: the void route must still check who may call it.
+      if (segment === ":movementId") return "00000000-0000-4000-8000-00000000beef";
       if (segment === ":circuit") return "1";
       if (segment.startsWith(":")) {
         const id = byResource[segments[index - 1]!];

@@ -10,6 +10,11 @@ export class ApiError extends Error {
     super(message);
     this.name = "ApiError";
   }
+
+  /** Someone else saved the record after this copy was read: offer to reload. */
+  get isStale(): boolean {
+    return this.status === 409;
+  }
 }
 
 interface RequestOptions<T> {
@@ -18,6 +23,11 @@ interface RequestOptions<T> {
   /** Parses the response, so a server that drifts from the shared contract fails loudly. */
   schema?: z.ZodType<T>;
   signal?: AbortSignal;
+  /**
+   * The version of the record this change is based on, sent as If-Match; the server answers
+   * 409 (ApiError.isStale) when someone saved a newer version meanwhile.
+   */
+  ifMatch?: number;
 }
 
 /**
@@ -25,13 +35,16 @@ interface RequestOptions<T> {
  * ApiError with the server's message on any non-2xx answer.
  */
 export async function apiRequest<T = unknown>(path: string, options: RequestOptions<T> = {}): Promise<T> {
-  const { method = "GET", body, schema, signal } = options;
+  const { method = "GET", body, schema, signal, ifMatch } = options;
+  const headers: Record<string, string> = { Accept: "application/json" };
+  if (body !== undefined) headers["Content-Type"] = "application/json";
+  if (ifMatch !== undefined) headers["If-Match"] = `"${ifMatch}"`;
   let response: Response;
   try {
     response = await fetch(`/api${path}`, {
       method,
       credentials: "same-origin",
-      headers: body === undefined ? { Accept: "application/json" } : { Accept: "application/json", "Content-Type": "application/json" },
+      headers,
       body: body === undefined ? undefined : JSON.stringify(body),
       signal,
     });

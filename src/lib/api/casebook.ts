@@ -35,12 +35,13 @@ export async function createCase(draft: CaseDraftInput): Promise<Case> {
   return (await apiRequest("/cases", { method: "POST", body: draft, schema: CaseEnvelopeSchema })).case;
 }
 
-export async function updateCase({ id, draft }: { id: string; draft: CaseDraftInput }): Promise<Case> {
-  return (await apiRequest(caseUrl(id), { method: "PUT", body: draft, schema: CaseEnvelopeSchema })).case;
+/** Saves a case over the version the editor opened (409 when someone saved since). */
+export async function updateCase({ id, draft, version }: { id: string; draft: CaseDraftInput; version: number }): Promise<Case> {
+  return (await apiRequest(caseUrl(id), { method: "PUT", body: draft, schema: CaseEnvelopeSchema, ifMatch: version })).case;
 }
 
-export async function publishCase(id: string): Promise<Case> {
-  return (await apiRequest(`${caseUrl(id)}/publish`, { method: "POST", schema: CaseEnvelopeSchema })).case;
+export async function publishCase({ id, version }: { id: string; version: number }): Promise<Case> {
+  return (await apiRequest(`${caseUrl(id)}/publish`, { method: "POST", schema: CaseEnvelopeSchema, ifMatch: version })).case;
 }
 
 export async function createCaseFromReading(readingId: string): Promise<Case> {

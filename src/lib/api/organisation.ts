@@ -6,8 +6,9 @@ export function getOrganisationSettings(signal?: AbortSignal): Promise<Procedure
   return apiRequest("/organisation/settings", { schema: ProcedureSettingsResponseSchema, signal });
 }
 
-export function updateOrganisationSettings(update: ProcedureSettingsUpdate): Promise<ProcedureSettingsResponse> {
-  return apiRequest("/organisation/settings", { method: "PUT", body: update, schema: ProcedureSettingsResponseSchema });
+/** Changes only the fields given, over the version the page showed (409 when someone saved since). */
+export function updateOrganisationSettings({ version, ...update }: ProcedureSettingsUpdate & { version: number }): Promise<ProcedureSettingsResponse> {
+  return apiRequest("/organisation/settings", { method: "PATCH", body: update, schema: ProcedureSettingsResponseSchema, ifMatch: version });
 }
 
 export const organisationSettingsQueryOptions = () =>

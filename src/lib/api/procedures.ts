@@ -49,8 +49,9 @@ export async function addEvacuationSample({ visitId, evacuationId, ...body }: Ev
   return (await apiRequest(`/visits/${visitId}/evacuations/${evacuationId}/samples`, { method: "POST", body, schema: EvacuationEnvelope })).evacuation;
 }
 
-export async function updateEvacuation({ visitId, evacuationId, ...body }: EvacuationUpdate & { visitId: string; evacuationId: string }) {
-  return (await apiRequest(`/visits/${visitId}/evacuations/${evacuationId}`, { method: "PATCH", body, schema: EvacuationEnvelope })).evacuation;
+/** Valves off or changes the target or note, naming the version the screen showed (409 if stale). */
+export async function updateEvacuation({ visitId, evacuationId, version, ...body }: EvacuationUpdate & { visitId: string; evacuationId: string; version: number }) {
+  return (await apiRequest(`/visits/${visitId}/evacuations/${evacuationId}`, { method: "PATCH", body, schema: EvacuationEnvelope, ifMatch: version })).evacuation;
 }
 
 // ---- query options ----------------------------------------------------------------------------

@@ -6,8 +6,9 @@ export function getProfile(signal?: AbortSignal): Promise<Profile> {
   return apiRequest("/profile", { schema: ProfileSchema, signal });
 }
 
-export function updateProfile(input: UpdateProfile): Promise<Profile> {
-  return apiRequest("/profile", { method: "PUT", body: input, schema: ProfileSchema });
+/** Saves the profile over the version the form was filled from (409 when another device saved since). */
+export function updateProfile({ version, ...input }: UpdateProfile & { version: number }): Promise<Profile> {
+  return apiRequest("/profile", { method: "PUT", body: input, schema: ProfileSchema, ifMatch: version });
 }
 
 export const profileQueryOptions = () =>

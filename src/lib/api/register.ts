@@ -48,13 +48,9 @@ export function createMovement({ visitId, ...body }: MovementCreate & { visitId:
   return apiRequest(`/visits/${visitId}/refrigerant`, { method: "POST", body, schema: MovementCreatedSchema });
 }
 
-/** Declares a full weigh-in of a circuit with its line adjustment, or clears it (null). */
-export function setCharging({ visitId, circuit, value }: { visitId: string; circuit: number; value: ChargingUpdate | null }): Promise<VisitRefrigerant> {
-  return apiRequest(`/visits/${visitId}/refrigerant/charging/${circuit}`, {
-    method: value ? "PUT" : "DELETE",
-    body: value ?? undefined,
-    schema: VisitRefrigerantSchema,
-  });
+/** Declares a full weigh-in of a circuit with its line adjustment (withdrawing one is a void). */
+export function setCharging({ visitId, circuit, value }: { visitId: string; circuit: number; value: ChargingUpdate }): Promise<VisitRefrigerant> {
+  return apiRequest(`/visits/${visitId}/refrigerant/charging/${circuit}`, { method: "PUT", body: value, schema: VisitRefrigerantSchema });
 }
 
 export function getEquipmentRefrigerant(equipmentId: string, signal?: AbortSignal): Promise<EquipmentRefrigerant> {

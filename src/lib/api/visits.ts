@@ -5,6 +5,7 @@ import {
   CommentSchema,
   PhotoSchema,
   ReadingSchema,
+  VisitEventSchema,
   VisitSchema,
   VisitSummarySchema,
   type AdjustmentCreate,
@@ -14,6 +15,7 @@ import {
   type VisitCreate,
   type VisitStatus,
   type VisitSummary,
+  type VoidBody,
 } from "@shared/schemas/visits.ts";
 import { ImportSummarySchema, type ImportSummary } from "@shared/schemas/readings-import.ts";
 import { ApiError, apiRequest } from "./api-client.ts";
@@ -48,6 +50,11 @@ export async function createAdjustment({ visitId, ...body }: AdjustmentCreate & 
 
 export async function createComment({ visitId, ...body }: { visitId: string; body: string; readingId?: string | null }) {
   return (await apiRequest(`/visits/${visitId}/comments`, { method: "POST", body, schema: z.object({ comment: CommentSchema }) })).comment;
+}
+
+/** Voids one of the visit's records with a reason (it stays on the record, struck through). */
+export async function voidRecord({ visitId, ...body }: VoidBody & { visitId: string }) {
+  return (await apiRequest(`/visits/${visitId}/voids`, { method: "POST", body, schema: z.object({ event: VisitEventSchema }) })).event;
 }
 
 export async function reviewVisit({ visitId, ...action }: ReviewAction & { visitId: string }): Promise<Visit> {
@@ -121,6 +128,27 @@ export const useCreateReading = () => useVisitMutation(createReading);
 export const useCreateAdjustment = () => useVisitMutation(createAdjustment);
 export const useCreateComment = () => useVisitMutation(createComment);
 export const useReviewVisit = () => useVisitMutation(reviewVisit);
+
+/**
+ * A void changes what the visit's sections show (procedures, refrigerant balance), so it
+ * refreshes those as well as the visit.
+ */
+export function useVoidRecord() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: voidRecord,
+    meta: { silentErrors: true },
+    onSuccess: (_event, variables) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: ["visits", "detail", variables.visitId] }),
+        queryClient.invalidateQueries({ queryKey: ["visits", "list"] }),
+        queryClient.invalidateQueries({ queryKey: ["procedures"] }),
+        queryClient.invalidateQueries({ queryKey: ["register"] }),
+        queryClient.invalidateQueries({ queryKey: ["cylinders"] }),
+        queryClient.invalidateQueries({ queryKey: ["equipment"] }),
+      ]),
+  });
+}
 export const useUploadPhoto = () => useVisitMutation(uploadPhoto);
 export const useImportReadings = () => useVisitMutation(importReadings);
 export const useSendReport = () => useMutation({ mutationFn: sendReport, meta: { silentErrors: true } });

@@ -47,7 +47,14 @@ describe("authorisation matrix", () => {
     { name: "GET /api/profile", call: (a) => a.get("/api/profile"), expect: allowAll(200) },
     {
       name: "PUT /api/profile",
-      call: (a) => a.put("/api/profile").send({ name: "Same Name", preferences: { temperatureUnit: "C", pressureUnit: "kPa", atmosphericPressureKPa: 101.325 } }),
+      // A profile save names the version it replaces (If-Match), read just before.
+      call: async (a) => {
+        const version = (await a.get("/api/profile")).body.version ?? 0;
+        return a
+          .put("/api/profile")
+          .set("If-Match", `"${version}"`)
+          .send({ name: "Same Name", preferences: { temperatureUnit: "C", pressureUnit: "kPa", atmosphericPressureKPa: 101.325 } });
+      },
       expect: allowAll(200),
     },
     { name: "GET /api/members", call: (a) => a.get("/api/members"), expect: allowAll(200) },

@@ -1,4 +1,4 @@
-import { useMemo, useState, type FormEvent } from "react";
+import { useMemo, useState, type FormEvent, type ReactNode } from "react";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { cautions } from "@shared/content/cautions.ts";
 import {
@@ -105,12 +105,15 @@ export function CaseEditor({
   atmosphericKPa,
   pending,
   onSave,
+  notice,
 }: {
   item?: Case;
   units: DisplayUnits;
   atmosphericKPa: number;
   pending: boolean;
   onSave: (draft: CaseDraft) => Promise<unknown>;
+  /** Shown beside the save button, e.g. that a newer version was saved meanwhile. */
+  notice?: ReactNode;
 }) {
   const [state, setState] = useState(() => initialState(item, units, atmosphericKPa));
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -302,6 +305,7 @@ export function CaseEditor({
           </fieldset>
         </section>
         {formError && <FormAlert>{formError}</FormAlert>}
+        {notice}
         <Button type="submit" size="lg" disabled={pending}>
           {pending ? "Saving…" : item ? "Save changes" : "Save as draft"}
         </Button>

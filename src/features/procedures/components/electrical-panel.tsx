@@ -16,11 +16,13 @@ import { toNumber } from "../utils/parse-number.ts";
 import { ElectricalCheckView } from "./electrical-check-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
+import { recordTime } from "../utils/record-time.ts";
 
 interface ElectricalPanelProps {
   visitId: string;
   circuits: number[];
   canWrite: boolean;
+  readOnlyNote?: string;
 }
 
 type InsulationRow = { point: string; megohms: string; testVoltageV: string };
@@ -39,7 +41,7 @@ const filled = (values: string[]) =>
  * insulation to earth with the test voltage, winding balance, running current against the
  * nameplate. Judged by the server's engine when saved.
  */
-export function ElectricalPanel({ visitId, circuits, canWrite }: ElectricalPanelProps) {
+export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: ElectricalPanelProps) {
   const checks = useElectricalChecks(visitId);
   const create = useCreateElectricalCheck();
   const defaults = checks.data?.defaults;
@@ -109,12 +111,19 @@ export function ElectricalPanel({ visitId, circuits, canWrite }: ElectricalPanel
   return (
     <ProcedureLayout
       caution="electrical"
+      visitId={visitId}
+      readOnlyNote={readOnlyNote}
       saved={{
         headingId: "electrical-saved-heading",
         title: "Checks on this visit",
-        records: (checks.data?.electricalChecks ?? []).map((check) => (
-          <ElectricalCheckView key={check.id} check={check} />
-        )),
+        kind: "electrical-check",
+        canVoid: canWrite,
+        records: (checks.data?.electricalChecks ?? []).map((check) => ({
+          id: check.id,
+          voided: check.voided,
+          what: `the electrical check of ${recordTime(check.takenAt)}`,
+          element: <ElectricalCheckView check={check} />,
+        })),
       }}
       loadError={checks.isError ? `The electrical checks could not be loaded: ${checks.error.message}` : undefined}
       form={

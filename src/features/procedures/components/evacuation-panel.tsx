@@ -2,16 +2,22 @@ import { Plus, Play, Power, Undo2 } from "lucide-react";
 import { useState } from "react";
 import { paToMicrons } from "@shared/engine/index.ts";
 import { EvacuationCreateSchema, EvacuationSampleBodySchema, type Evacuation } from "@shared/schemas/procedure-records.ts";
+import { isStanding } from "@shared/schemas/visits.ts";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
+import { StaleWriteNotice } from "@/components/ui/stale-write/stale-write-notice.tsx";
+import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
+import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
+import { useVoidRecord } from "@/lib/api/visits.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
+import { recordTime } from "../utils/record-time.ts";
 import { EvacuationChart, formatVacuum, VACUUM_LABEL, type VacuumUnit } from "./evacuation-chart.tsx";
 import { EvacuationBadge, EvacuationSummary } from "./evacuation-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
@@ -26,7 +32,7 @@ function errorText(error: unknown, fallback: string): { message: string; fields:
 }
 
 /** Readings entry for the evacuation in progress: the time fills itself in, the unit is the technician's choice. */
-function SampleEntry({ visitId, evacuation, unit, canWrite }: { visitId: string; evacuation: Evacuation; unit: VacuumUnit; canWrite: boolean }) {
+function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitId: string; evacuation: Evacuation; unit: VacuumUnit; canWrite: boolean; onReload: () => Promise<unknown> }) {
   const now = useNow(5_000);
   const addSample = useAddEvacuationSample();
   const update = useUpdateEvacuation();
@@ -35,6 +41,8 @@ function SampleEntry({ visitId, evacuation, unit, canWrite }: { visitId: string;
   const [isolation, setIsolation] = useState<string | null>(null);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
+  const [stale, setStale] = useState<string | null>(null);
+  const [reloading, setReloading] = useState(false);
 
   const autoMinutes = formatNumber(minutesSince(evacuation.startedAt, now), 1);
   const minutesText = minutes ?? autoMinutes;
@@ -68,10 +76,13 @@ function SampleEntry({ visitId, evacuation, unit, canWrite }: { visitId: string;
 
   const setIsolated = async (isolatedAtMinutes: number | null) => {
     setFormError(null);
+    setStale(null);
     try {
-      await update.mutateAsync({ visitId, evacuationId: evacuation.id, isolatedAtMinutes });
+      await update.mutateAsync({ visitId, evacuationId: evacuation.id, isolatedAtMinutes, version: evacuation.version });
       setIsolation(null);
     } catch (error) {
+      // Another device valved off (or undid it) since this screen loaded: show theirs first.
+      if (error instanceof ApiError && error.isStale) return setStale(error.message);
       const { message, fields } = errorText(error, "The change was not saved. Try again.");
       setErrors(fields);
       setFormError(message);
@@ -109,6 +120,19 @@ function SampleEntry({ visitId, evacuation, unit, canWrite }: { visitId: string;
         </Button>
       )}
       {formError && <FormAlert>{formError}</FormAlert>}
+      {stale && (
+        <StaleWriteNotice
+          message={stale}
+          reloading={reloading}
+          onReload={() => {
+            setReloading(true);
+            void onReload().finally(() => {
+              setReloading(false);
+              setStale(null);
+            });
+          }}
+        />
+      )}
     </div>
   );
 }
@@ -124,9 +148,12 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
   const [target, setTarget] = useState<string | null>(null);
   const [startError, setStartError] = useState<{ message: string; fields: Record<string, string> } | null>(null);
 
+  const voidRecord = useVoidRecord();
   const list = evacuations.data?.evacuations ?? [];
-  const current = list.at(-1);
-  const earlier = list.slice(0, -1);
+  // The latest evacuation that stands is the one in progress; voided ones stay listed below.
+  const current = list.filter(isStanding).at(-1);
+  const earlier = list.filter((evacuation) => evacuation !== current);
+  const voidEvacuation = (evacuation: Evacuation) => (reason: string) => voidRecord.mutateAsync({ visitId, kind: "evacuation", recordId: evacuation.id, reason });
   const targetText = target ?? (evacuations.data ? String(evacuations.data.defaults.targetMicrons) : "");
 
   const start = async () => {
@@ -160,7 +187,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
           </h2>
           <EvacuationSummary evacuation={current} unit={unit} />
           <EvacuationChart evacuation={current} unit={unit} />
-          <SampleEntry key={current.id} visitId={visitId} evacuation={current} unit={unit} canWrite={canWrite} />
+          <SampleEntry key={current.id} visitId={visitId} evacuation={current} unit={unit} canWrite={canWrite} onReload={() => evacuations.refetch()} />
           {current.samples.length > 0 && (
             <details>
               <summary className="min-h-touch cursor-pointer py-2 font-medium">Readings ({current.samples.length})</summary>
@@ -184,6 +211,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
               </table>
             </details>
           )}
+          {canWrite && <VoidAction what={`the evacuation started ${recordTime(current.startedAt)}`} onVoid={voidEvacuation(current)} />}
         </section>
       )}
 
@@ -217,9 +245,12 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
           <ul className="mt-1 space-y-1">
             {earlier.map((evacuation) => (
               <li key={evacuation.id} className="flex flex-wrap items-center gap-2 text-sm">
-                <span className="num">{new Date(evacuation.startedAt).toLocaleTimeString(undefined, { timeStyle: "short" })}</span>
-                <EvacuationBadge evacuation={evacuation} />
-                {evacuation.samples.length > 0 && <span className="num text-muted">last {formatVacuum(evacuation.samples.at(-1)!.microns, unit)}</span>}
+                <VoidedRecord voided={evacuation.voided} className="flex flex-wrap items-center gap-2">
+                  <span className="num">{recordTime(evacuation.startedAt)}</span>
+                  <EvacuationBadge evacuation={evacuation} />
+                  {evacuation.samples.length > 0 && <span className="num text-muted">last {formatVacuum(evacuation.samples.at(-1)!.microns, unit)}</span>}
+                </VoidedRecord>
+                {canWrite && !evacuation.voided && <VoidAction what={`the evacuation started ${recordTime(evacuation.startedAt)}`} onVoid={voidEvacuation(evacuation)} />}
               </li>
             ))}
           </ul>

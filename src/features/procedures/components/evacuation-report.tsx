@@ -1,3 +1,4 @@
+import { isStanding } from "@shared/schemas/visits.ts";
 import { useEvacuations } from "@/lib/api/procedures.ts";
 import { EvacuationChart } from "./evacuation-chart.tsx";
 import { EvacuationSummary } from "./evacuation-view.tsx";
@@ -6,7 +7,8 @@ import { ReportSection } from "./report-section.tsx";
 /** The visit report's evacuation section: each evacuation's chart and decay verdict, in microns. */
 export function EvacuationReport({ visitId, chartWidth }: { visitId: string; chartWidth: number }) {
   const evacuations = useEvacuations(visitId);
-  const list = evacuations.data?.evacuations ?? [];
+  // Voided records are corrections: the report leaves them out (the audit trail names them).
+  const list = (evacuations.data?.evacuations ?? []).filter(isStanding);
   return (
     <ReportSection id="evacuation-report" title="Evacuation and decay test" state={evacuations} empty={list.length === 0}>
       {list.map((evacuation) => (

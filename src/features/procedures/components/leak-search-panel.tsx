@@ -20,12 +20,13 @@ import { useCreateLeakSearch, useLeakSearches } from "@/lib/api/procedures.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { LeakSearchView } from "./leak-search-view.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
+import { recordTime } from "../utils/record-time.ts";
 
 type LeakRow = { location: string; severity: LeakSeverity; repair: string; repaired: boolean };
 const emptyLeak = (): LeakRow => ({ location: "", severity: "small", repair: "", repaired: false });
 
 /** The leak search: how, where, what was found and repaired, and what the recheck showed. */
-export function LeakSearchPanel({ visitId, canWrite }: { visitId: string; canWrite: boolean }) {
+export function LeakSearchPanel({ visitId, canWrite, readOnlyNote }: { visitId: string; canWrite: boolean; readOnlyNote?: string }) {
   const searches = useLeakSearches(visitId);
   const create = useCreateLeakSearch();
   const [method, setMethod] = useState<LeakMethod>("electronic-detector");
@@ -78,12 +79,19 @@ export function LeakSearchPanel({ visitId, canWrite }: { visitId: string; canWri
 
   return (
     <ProcedureLayout
+      visitId={visitId}
+      readOnlyNote={readOnlyNote}
       saved={{
         headingId: "leak-saved-heading",
         title: "Leak searches on this visit",
-        records: (searches.data?.leakSearches ?? []).map((search) => (
-          <LeakSearchView key={search.id} search={search} />
-        )),
+        kind: "leak-search",
+        canVoid: canWrite,
+        records: (searches.data?.leakSearches ?? []).map((search) => ({
+          id: search.id,
+          voided: search.voided,
+          what: `the leak search of ${recordTime(search.takenAt)}`,
+          element: <LeakSearchView search={search} />,
+        })),
       }}
       loadError={searches.isError ? `The leak searches could not be loaded: ${searches.error.message}` : undefined}
       form={

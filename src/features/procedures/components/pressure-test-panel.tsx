@@ -24,6 +24,7 @@ import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
+import { recordTime } from "../utils/record-time.ts";
 import { PressureTestView } from "./pressure-test-view.tsx";
 
 interface PressureTestPanelProps {
@@ -31,6 +32,7 @@ interface PressureTestPanelProps {
   units: DisplayUnits;
   atmosphericKPa: number;
   canWrite: boolean;
+  readOnlyNote?: string;
 }
 
 /** The nameplate rating that applies to the part tested: the lower side governs a whole-system test. */
@@ -46,7 +48,7 @@ function ratedFor(section: PressureTestSection, high: number | null, low: number
  * confirms, start and end of the hold with their temperatures; the server corrects the drop
  * for temperature (ideal gas) and judges it against the allowed drop.
  */
-export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite }: PressureTestPanelProps) {
+export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, readOnlyNote }: PressureTestPanelProps) {
   const tests = usePressureTests(visitId);
   const create = useCreatePressureTest();
   const defaults = tests.data?.defaults;
@@ -114,12 +116,19 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite }: 
   return (
     <ProcedureLayout
       caution="nitrogen"
+      visitId={visitId}
+      readOnlyNote={readOnlyNote}
       saved={{
         headingId: "pressure-saved-heading",
         title: "Tests on this visit",
-        records: (tests.data?.pressureTests ?? []).map((test) => (
-          <PressureTestView key={test.id} test={test} units={units} atmosphericKPa={atmosphericKPa} />
-        )),
+        kind: "pressure-test",
+        canVoid: canWrite,
+        records: (tests.data?.pressureTests ?? []).map((test) => ({
+          id: test.id,
+          voided: test.voided,
+          what: `the pressure test of ${recordTime(test.takenAt)}`,
+          element: <PressureTestView test={test} units={units} atmosphericKPa={atmosphericKPa} />,
+        })),
       }}
       loadError={tests.isError ? `The pressure tests could not be loaded: ${tests.error.message}` : undefined}
       form={

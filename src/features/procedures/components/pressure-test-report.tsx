@@ -1,3 +1,4 @@
+import { isStanding } from "@shared/schemas/visits.ts";
 import { usePressureTests } from "@/lib/api/procedures.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { PressureTestView } from "./pressure-test-view.tsx";
@@ -6,7 +7,8 @@ import { ReportSection } from "./report-section.tsx";
 /** The visit report's nitrogen pressure test section. */
 export function PressureTestReport({ visitId, units, atmosphericKPa }: { visitId: string; units: DisplayUnits; atmosphericKPa: number }) {
   const tests = usePressureTests(visitId);
-  const list = tests.data?.pressureTests ?? [];
+  // Voided records are corrections: the report leaves them out (the audit trail names them).
+  const list = (tests.data?.pressureTests ?? []).filter(isStanding);
   return (
     <ReportSection id="pressure-report" title="Nitrogen pressure test" state={tests} empty={list.length === 0}>
       {list.map((test) => (

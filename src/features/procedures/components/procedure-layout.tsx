@@ -1,24 +1,46 @@
 import type { ReactNode } from "react";
 import type { CautionTopic } from "@shared/content/cautions.ts";
+import type { VoidableKind, VoidInfo } from "@shared/schemas/visits.ts";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
+import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
+import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
+import { useVoidRecord } from "@/lib/api/visits.ts";
+
+/** One saved record: how it looks, and what the void dialog calls it. */
+export interface SavedRecord {
+  id: string;
+  voided: VoidInfo;
+  /** e.g. "the pressure test of 10:42". */
+  what: string;
+  element: ReactNode;
+}
 
 interface ProcedureLayoutProps {
+  visitId: string;
   /** The caution shown first, where the work can hurt (not every record has one). */
   caution?: CautionTopic;
-  /** Records already on the visit, each rendered; the list shows only when there are some. */
-  saved: { headingId: string; title: string; records: ReactNode[] };
+  /**
+   * Records already on the visit; the list shows only when there are some. Voided ones stay,
+   * struck through with their reason; the others can be voided while the visit is open.
+   */
+  saved: { headingId: string; title: string; kind: VoidableKind; canVoid: boolean; records: SavedRecord[] };
   /** Set when the saved records could not be loaded. */
   loadError?: string;
-  /** The entry form, or null for roles that only read. */
+  /** The entry form, or null when nothing can be recorded (the role, or a closed visit). */
   form: { label: string; title: string; onSubmit: () => void; children: ReactNode } | null;
+  /** Why there is no form; the role's note by default. */
+  readOnlyNote?: string;
 }
 
 /**
  * The frame the procedure sections share: their caution first, what was recorded on this
  * visit, then the form for a new record (or a note that the role only reads).
  */
-export function ProcedureLayout({ caution, saved, loadError, form }: ProcedureLayoutProps) {
+export const ROLE_READ_ONLY_NOTE = "You can read this visit; recording is for technicians, seniors and owners.";
+
+export function ProcedureLayout({ visitId, caution, saved, loadError, form, readOnlyNote = ROLE_READ_ONLY_NOTE }: ProcedureLayoutProps) {
+  const voidRecord = useVoidRecord();
   return (
     <div className="space-y-4">
       {caution && <CautionPanel topic={caution} />}
@@ -27,7 +49,14 @@ export function ProcedureLayout({ caution, saved, loadError, form }: ProcedureLa
           <h2 id={saved.headingId} className="text-lg font-semibold">
             {saved.title}
           </h2>
-          {saved.records}
+          {saved.records.map((record) => (
+            <div key={record.id} className="space-y-1">
+              <VoidedRecord voided={record.voided}>{record.element}</VoidedRecord>
+              {saved.canVoid && !record.voided && (
+                <VoidAction what={record.what} onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: saved.kind, recordId: record.id, reason })} />
+              )}
+            </div>
+          ))}
         </section>
       )}
       {loadError && <FormAlert>{loadError}</FormAlert>}
@@ -45,7 +74,7 @@ export function ProcedureLayout({ caution, saved, loadError, form }: ProcedureLa
           {form.children}
         </form>
       ) : (
-        <p className="text-muted">You can read this visit; recording is for technicians, seniors and owners.</p>
+        <p className="text-muted">{readOnlyNote}</p>
       )}
     </div>
   );

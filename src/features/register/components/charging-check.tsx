@@ -8,6 +8,8 @@ import { useSetCharging } from "@/lib/api/register.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 import { formatKg, formatSignedKg } from "../utils/format-register.ts";
 import { NumberField, typedNumber } from "@/components/ui/field/number-field.tsx";
+import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
+import { useVoidRecord } from "@/lib/api/visits.ts";
 import { VerdictLine } from "./verdict-line.tsx";
 
 type FormValues = { lineAdjustmentKg: unknown };
@@ -19,6 +21,7 @@ type FormValues = { lineAdjustmentKg: unknown };
  */
 export function ChargingCheck({ visitId, balance, canWrite }: { visitId: string; balance: CircuitBalance; canWrite: boolean }) {
   const setCharging = useSetCharging();
+  const voidRecord = useVoidRecord();
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<FormValues>({
     resolver: zodResolver(ChargingUpdateSchema) as never,
@@ -68,10 +71,13 @@ export function ChargingCheck({ visitId, balance, canWrite }: { visitId: string;
             <Button type="submit" variant="secondary" disabled={setCharging.isPending}>
               {charging?.declared ? "Update the weigh-in" : "Record a full weigh-in"}
             </Button>
-            {charging?.declared && (
-              <Button variant="quiet" disabled={setCharging.isPending} onClick={() => void setCharging.mutateAsync({ visitId, circuit: balance.circuit, value: null })}>
-                Not a full weigh-in
-              </Button>
+            {/* Withdrawing a declaration voids it with a reason; the earlier figure stays on record. */}
+            {charging?.declarationId && (
+              <VoidAction
+                what={`the full weigh-in declaration of circuit ${balance.circuit}`}
+                disabled={setCharging.isPending}
+                onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: "charging", recordId: charging.declarationId!, reason })}
+              />
             )}
           </div>
         </form>

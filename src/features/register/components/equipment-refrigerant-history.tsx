@@ -1,10 +1,10 @@
 import { Link } from "react-router-dom";
-import { MOVEMENT_KIND_LABELS } from "@shared/schemas/register.ts";
 import { paths } from "@/config/paths.ts";
 import { useEquipmentRefrigerant } from "@/lib/api/register.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
-import { formatKg, formatWhen } from "../utils/format-register.ts";
+import { formatKg } from "../utils/format-register.ts";
 import { HiddenLinesNote } from "./hidden-lines-note.tsx";
+import { MovementRecord } from "./movement-record.tsx";
 
 /**
  * A unit's refrigerant history from the register, newest first, with the estimated leak rate
@@ -43,25 +43,20 @@ export function EquipmentRefrigerantHistory({ equipmentId }: { equipmentId: stri
         <ul aria-label="Refrigerant history" className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface">
           {newestFirst.map((movement) => (
             <li key={movement.id} className="p-3">
-              <p className="font-semibold">
-                <span className="num">{formatKg(movement.kg)}</span> {MOVEMENT_KIND_LABELS[movement.kind].toLowerCase()}
-                {movement.circuit !== null && <span className="font-normal"> · circuit {movement.circuit}</span>}
-              </p>
-              <p className="text-sm text-muted">
-                <span className="num">{formatWhen(movement.at)}</span>
-                {movement.cylinder && <> · cylinder {movement.cylinder.label}</>}
-                {movement.technician && <> · {movement.technician.name}</>}
-                {movement.visitId && (
-                  <>
-                    {" "}
-                    ·{" "}
-                    <Link to={paths.visits.detail.getHref(movement.visitId)} className="text-accent underline underline-offset-4">
-                      open the visit
-                    </Link>
-                  </>
-                )}
-              </p>
-              {movement.note && <p>{movement.note}</p>}
+              <MovementRecord
+                movement={movement}
+                extra={
+                  movement.visitId && (
+                    <>
+                      {" "}
+                      ·{" "}
+                      <Link to={paths.visits.detail.getHref(movement.visitId)} className="text-accent underline underline-offset-4">
+                        open the visit
+                      </Link>
+                    </>
+                  )
+                }
+              />
             </li>
           ))}
         </ul>

@@ -1,3 +1,4 @@
+import { isStanding } from "@shared/schemas/visits.ts";
 import { MOVEMENT_KIND_LABELS } from "@shared/schemas/register.ts";
 import { useVisitRefrigerant } from "@/lib/api/register.ts";
 import { formatKg, formatSignedKg, formatWhen } from "../utils/format-register.ts";
@@ -7,6 +8,8 @@ import { VerdictLine } from "./verdict-line.tsx";
 /** The report's refrigerant section: recovered, reused, added, the balance and the weigh-in per circuit. */
 export function RefrigerantReport({ visitId }: { visitId: string }) {
   const register = useVisitRefrigerant(visitId);
+  // Voided movements are corrections: the report leaves them out (the audit trail names them).
+  const movements = (register.data?.movements ?? []).filter(isStanding);
   return (
     <section aria-labelledby="refrigerant-report-heading" className="space-y-2 break-inside-avoid-page">
       <h2 id="refrigerant-report-heading" className="text-lg font-semibold">
@@ -14,8 +17,8 @@ export function RefrigerantReport({ visitId }: { visitId: string }) {
       </h2>
       {register.isPending && <p aria-busy="true">Reading the register…</p>}
       {register.isError && <p role="alert" className="text-fault">⚠ The register did not load: {register.error.message}</p>}
-      {register.data && register.data.movements.length + register.data.hiddenMovements === 0 && <p className="text-muted">No refrigerant recovered or added.</p>}
-      {register.data && register.data.movements.length + register.data.hiddenMovements > 0 && (
+      {register.data && movements.length + register.data.hiddenMovements === 0 && <p className="text-muted">No refrigerant recovered or added.</p>}
+      {register.data && movements.length + register.data.hiddenMovements > 0 && (
         <>
           <table className="num w-full text-left text-sm">
             <thead>
@@ -53,7 +56,7 @@ export function RefrigerantReport({ visitId }: { visitId: string }) {
             ))}
           {register.data.liquidChargingNote && <p className="text-sm">{register.data.refrigerant} is a zeotropic blend: charged as liquid.</p>}
           <ul className="space-y-0.5 text-sm">
-            {register.data.movements.map((movement) => (
+            {movements.map((movement) => (
               <li key={movement.id}>
                 <span className="num text-muted">{formatWhen(movement.at)}</span> — {MOVEMENT_KIND_LABELS[movement.kind]}
                 {movement.circuit !== null && ` (circuit ${movement.circuit})`}: <span className="num">{formatKg(movement.kg)}</span>

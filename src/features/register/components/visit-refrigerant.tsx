@@ -2,14 +2,17 @@ import { Droplets, Info } from "lucide-react";
 import { Link } from "react-router-dom";
 import type { Equipment } from "@shared/schemas/equipment.ts";
 import { MOVEMENT_KIND_LABELS, type CircuitBalance, type Movement } from "@shared/schemas/register.ts";
+import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
+import { useVoidRecord } from "@/lib/api/visits.ts";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { paths } from "@/config/paths.ts";
 import { useCylinders, useVisitRefrigerant } from "@/lib/api/register.ts";
-import { formatKg, formatSignedKg, formatWhen } from "../utils/format-register.ts";
+import { formatKg, formatSignedKg } from "../utils/format-register.ts";
 import { ChargingCheck } from "./charging-check.tsx";
 import { CylinderFillBar } from "./cylinder-fill.tsx";
 import { HiddenLinesNote } from "./hidden-lines-note.tsx";
 import { MovementForm } from "./movement-form.tsx";
+import { MovementRecord } from "./movement-record.tsx";
 
 function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitBalance; visitId: string; canWrite: boolean; single: boolean }) {
   const { shortfallKg, finalChargeKg, differenceFromNameplateKg } = balance.balance;
@@ -54,25 +57,24 @@ function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitB
   );
 }
 
-function MovementList({ movements, hidden }: { movements: readonly Movement[]; hidden: number }) {
+/** The visit's movements; a voided one stays, struck through with its reason, and counts in no balance. */
+function MovementList({ visitId, movements, hidden, canWrite }: { visitId: string; movements: readonly Movement[]; hidden: number; canWrite: boolean }) {
+  const voidRecord = useVoidRecord();
   if (movements.length === 0 && hidden === 0) return <p className="text-muted">No refrigerant logged on this visit yet.</p>;
   if (movements.length === 0) return <HiddenLinesNote count={hidden} />;
   return (
     <ul aria-label="Refrigerant logged on this visit" className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface">
-      {movements.map((movement) => (
-        <li key={movement.id} className="p-3">
-          <p className="font-semibold">
-            <span className="num">{formatKg(movement.kg)}</span> {MOVEMENT_KIND_LABELS[movement.kind].toLowerCase()}
-            {movement.circuit !== null && <span className="font-normal"> · circuit {movement.circuit}</span>}
-          </p>
-          <p className="text-sm text-muted">
-            <span className="num">{formatWhen(movement.at)}</span>
-            {movement.cylinder && <> · cylinder {movement.cylinder.label}</>}
-            {movement.technician && <> · {movement.technician.name}</>}
-          </p>
-          {movement.note && <p>{movement.note}</p>}
-        </li>
-      ))}
+      {movements.map((movement) => {
+        const what = `${formatKg(movement.kg)} ${MOVEMENT_KIND_LABELS[movement.kind].toLowerCase()}`;
+        return (
+          <li key={movement.id} className="space-y-1 p-3">
+            <MovementRecord movement={movement} />
+            {canWrite && !movement.voided && (
+              <VoidAction what={`the movement “${what}”`} onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: "movement", recordId: movement.id, reason })} />
+            )}
+          </li>
+        );
+      })}
     </ul>
   );
 }
@@ -87,7 +89,7 @@ export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId
   const data = register.data;
   const recoveryCylinders = (cylinders.data ?? []).filter((cylinder) => cylinder.kind === "recovery");
   const filling = recoveryCylinders.filter((cylinder) => cylinder.fill.check && cylinder.fill.check.verdict !== "pass");
-  const logged = data.movements.some((movement) => movement.kind !== "recovered");
+  const logged = data.movements.some((movement) => movement.voided === null && movement.kind !== "recovered");
 
   return (
     <div className="space-y-4">
@@ -152,7 +154,7 @@ export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId
       )}
 
       <h3 className="text-lg font-semibold">Logged on this visit</h3>
-      <MovementList movements={data.movements} hidden={data.hiddenMovements} />
+      <MovementList visitId={visitId} movements={data.movements} hidden={data.hiddenMovements} canWrite={canWrite} />
       {data.movements.length > 0 && <HiddenLinesNote count={data.hiddenMovements} />}
     </div>
   );

@@ -1,15 +1,15 @@
-import { Save } from "lucide-react";
+import { Mountain, Save } from "lucide-react";
 import { useMemo, useState } from "react";
 import type { LiquidTempLocation } from "@shared/schemas/diagnosis.ts";
 import type { SuctionLocationChoice } from "../utils/reading-draft.ts";
-import type { Visit } from "@shared/schemas/visits.ts";
+import type { Atmosphere, MeasuredValues, Visit } from "@shared/schemas/visits.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateReading } from "@/lib/api/visits.ts";
-import type { DisplayUnits } from "@/lib/units/display-units.ts";
+import { formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { useLiveDiagnosis, type CircuitContext } from "../hooks/use-live-diagnosis.ts";
 import { circuitSeries } from "../utils/circuit-series.ts";
 import { draftFromInput, emptyDraft, parseDraft, REQUIRED_FIELDS, type DraftField, type ReadingDraft } from "../utils/reading-draft.ts";
@@ -18,6 +18,7 @@ import { AdjustmentForm } from "./adjustment-form.tsx";
 import { CsvImport } from "./csv-import.tsx";
 import { FindingPanel } from "./finding-panel.tsx";
 import { MeasuredCyclePanel } from "./measured-cycle-panel.tsx";
+import { RecordedEntries } from "./recorded-entries.tsx";
 import { ReadingCards } from "./reading-cards.tsx";
 import { SettledIndicator } from "./settled-indicator.tsx";
 import { TimelineStrip } from "./timeline-strip.tsx";
@@ -36,15 +37,19 @@ interface RunLogProps {
   context: CircuitContext;
   isBlend: boolean;
   units: DisplayUnits;
-  atmosphericKPa: number;
+  /** The site's atmosphere, from the server: the live diagnosis uses exactly what the server will. */
+  atmosphere: Atmosphere;
   canWrite: boolean;
+  /** Why nothing can be recorded, when canWrite is false (a closed visit, or the role). */
+  readOnlyNote: string;
 }
 
 /**
  * The run log of one circuit: the finding on top, the entry cards in flow order, then the
  * timeline strip that opens into the full trend chart.
  */
-export function RunLog({ visit, circuit, context, isBlend, units, atmosphericKPa, canWrite }: RunLogProps) {
+export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, canWrite, readOnlyNote }: RunLogProps) {
+  const atmosphericKPa = atmosphere.pressureKPa;
   const series = useMemo(() => circuitSeries(visit.readings, visit.adjustments, circuit), [visit.readings, visit.adjustments, circuit]);
   const lastInput = series.readings.at(-1)?.input;
   // Last values carried forward, so a new reading changes only what moved.
@@ -84,7 +89,8 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphericKPa
     }
     const { values } = parseDraft(effectiveDraft, units, atmosphericKPa);
     try {
-      const reading = await createReading.mutateAsync({ visitId: visit.id, circuit, ...values, atmosphericPressureKPa: atmosphericKPa });
+      // Measured values only: the server adds the nameplate targets, the RLA and the site's atmosphere.
+      const reading = await createReading.mutateAsync({ visitId: visit.id, circuit, ...(values as MeasuredValues) });
       setSavedAt(reading.takenAt);
       setServerErrors({});
       setDraft((current) => ({ ...current, runMinutes: "" }));
@@ -113,6 +119,12 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphericKPa
         )}
       </PanelBoundary>
       <SettledIndicator trend={series.trend} />
+      <p className="flex items-start gap-2 text-sm text-muted" data-testid="atmosphere-line">
+        <Mountain aria-hidden className="mt-0.5 size-4 shrink-0" />
+        <span>
+          Gauge pressures against <span className="num">{formatNumber(atmosphericKPa, 1)} kPa</span> absolute: {atmosphere.description}.
+        </span>
+      </p>
 
       <form
         aria-label={`New reading, circuit ${circuit}`}
@@ -147,7 +159,7 @@ onSuctionLocation={setSuctionLocation}           draft={effectiveDraft}
             </span>
           </div>
         ) : (
-          <p className="text-muted">You can read this visit; recording is for technicians, seniors and owners.</p>
+          <p className="text-muted">{readOnlyNote}</p>
         )}
       </form>
 
@@ -176,6 +188,19 @@ onSuctionLocation={setSuctionLocation}           draft={effectiveDraft}
           </PanelBoundary>
         )}
       </section>
+
+      <details className="rounded-card border-2 border-rule bg-surface p-4">
+        <summary className="min-h-touch cursor-pointer py-2 text-lg font-semibold">Recorded entries (to check or void)</summary>
+        <RecordedEntries
+          visitId={visit.id}
+          circuit={circuit}
+          readings={visit.readings}
+          adjustments={visit.adjustments}
+          units={units}
+          atmosphericKPa={atmosphericKPa}
+          canVoid={canWrite}
+        />
+      </details>
 
       {canWrite && (
         <section aria-labelledby={`adjust-${circuit}`} className="rounded-card border-2 border-rule bg-surface p-4">

@@ -24,12 +24,16 @@ const minutesBetween = (from: string, to: string) => (Date.parse(to) - Date.pars
 /**
  * One circuit's run log as a time series: its readings in order, the adjustments that apply
  * to it (its own and whole-unit ones), chart points, and the settled assessment of the engine.
+ * Voided readings and adjustments are corrections, not evidence: they are left out here, so
+ * the finding, the trend, the settled test and the report never count them.
  */
 export function circuitSeries(readings: readonly Reading[], adjustments: readonly Adjustment[], circuit: number): CircuitSeries {
-  const own = readings.filter((reading) => reading.circuit === circuit).sort((a, b) => Date.parse(a.takenAt) - Date.parse(b.takenAt));
+  const own = readings
+    .filter((reading) => reading.circuit === circuit && reading.voided === null)
+    .sort((a, b) => Date.parse(a.takenAt) - Date.parse(b.takenAt));
   const origin = own[0]?.takenAt ?? adjustments[0]?.at ?? new Date(0).toISOString();
   const relevant = adjustments
-    .filter((adjustment) => adjustment.circuit === null || adjustment.circuit === circuit)
+    .filter((adjustment) => adjustment.voided === null && (adjustment.circuit === null || adjustment.circuit === circuit))
     .map((adjustment) => ({ ...adjustment, x: minutesBetween(origin, adjustment.at) }));
 
   // assessTrend needs strictly increasing times; readings saved in the same millisecond keep the last.

@@ -51,7 +51,7 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
           ))}
         </ul>
       )}
-      {canUpload && visit.status !== "signed-off" && (
+      {canUpload && (
         <div className="mt-3 space-y-2">
           {error && <FormAlert>{error}</FormAlert>}
           <div className="flex flex-wrap items-end gap-2">

@@ -1,3 +1,4 @@
+import { LockOpen } from "lucide-react";
 import { useState } from "react";
 import type { Visit } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
@@ -11,18 +12,49 @@ interface ReviewPanelProps {
   canSignOff: boolean;
 }
 
-/** Submit for review (crew) and sign off or send back with a reason (senior, owner). */
+/** A labelled two-line text box for a review note or reason. */
+function ReasonBox({ id, label, value, onChange, placeholder }: { id: string; label: string; value: string; onChange: (value: string) => void; placeholder: string }) {
+  return (
+    <>
+      <label htmlFor={id} className="block font-medium">
+        {label}
+      </label>
+      <textarea
+        id={id}
+        rows={2}
+        value={value}
+        onChange={(event) => onChange(event.target.value)}
+        placeholder={placeholder}
+        className="block w-full rounded-card border-2 border-rule bg-surface p-3"
+      />
+    </>
+  );
+}
+
+/**
+ * Submit for review (crew); sign off or send back with a reason (senior, owner); and reopen a
+ * visit awaiting review or signed off, with a reason, so that it can be corrected (senior, owner).
+ */
 export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) {
   const review = useReviewVisit();
   const [reason, setReason] = useState("");
+  const [reopenReason, setReopenReason] = useState("");
   const [error, setError] = useState<string | null>(null);
-  const act = async (action: "submit" | "sign-off" | "send-back") => {
+  const act = async (action: "submit" | "sign-off" | "send-back" | "reopen") => {
     setError(null);
     if (action === "send-back" && reason.trim().length < 3) return setError("Say what needs doing before sign-off");
+    if (action === "reopen" && reopenReason.trim().length < 3) return setError("Say why the visit is reopened, e.g. “pressure test entered wrongly”");
     try {
       await review.mutateAsync(
-        action === "send-back" ? { visitId: visit.id, action, reason } : action === "sign-off" ? { visitId: visit.id, action, note: reason || undefined } : { visitId: visit.id, action },
+        action === "send-back"
+          ? { visitId: visit.id, action, reason }
+          : action === "reopen"
+            ? { visitId: visit.id, action, reason: reopenReason }
+            : action === "sign-off"
+              ? { visitId: visit.id, action, note: reason || undefined }
+              : { visitId: visit.id, action },
       );
+      setReopenReason("");
       setReason("");
     } catch (caught) {
       setError(caught instanceof Error ? caught.message : "That did not go through");
@@ -30,6 +62,7 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
   };
   const reviewable = visit.status === "open" || visit.status === "awaiting-review";
   const submittable = visit.status === "open" || visit.status === "sent-back";
+  const reopenable = visit.status === "awaiting-review" || visit.status === "signed-off";
 
   return (
     <section aria-labelledby="review-heading" className="rounded-card border-2 border-rule bg-surface p-4">
@@ -59,17 +92,7 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
         )}
         {canSignOff && reviewable && (
           <div className="space-y-2">
-            <label htmlFor="review-reason" className="block font-medium">
-              Note or reason
-            </label>
-            <textarea
-              id="review-reason"
-              rows={2}
-              value={reason}
-              onChange={(event) => setReason(event.target.value)}
-              placeholder="A note with the sign-off, or what needs doing if you send it back"
-              className="block w-full rounded-card border-2 border-rule bg-surface p-3"
-            />
+            <ReasonBox id="review-reason" label="Note or reason" value={reason} onChange={setReason} placeholder="A note with the sign-off, or what needs doing if you send it back" />
             <div className="flex flex-wrap gap-2">
               <Button onClick={() => void act("sign-off")} disabled={review.isPending}>
                 Sign off
@@ -78,6 +101,21 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
                 Send back
               </Button>
             </div>
+          </div>
+        )}
+        {canSignOff && reopenable && (
+          <div className="space-y-2 border-t-2 border-rule pt-3">
+            <ReasonBox
+              id="reopen-reason"
+              label="Reason for reopening (required)"
+              value={reopenReason}
+              onChange={setReopenReason}
+              placeholder="What must be corrected, e.g. “pressure test entered as 3500 kPa, was 350”"
+            />
+            <p className="text-sm text-muted">Reopening lets the crew void and re-enter records; the reason goes in the audit trail{visit.status === "signed-off" ? " and the visit will need signing off again" : ""}.</p>
+            <Button variant="secondary" onClick={() => void act("reopen")} disabled={review.isPending}>
+              <LockOpen aria-hidden className="size-5" /> Reopen the visit
+            </Button>
           </div>
         )}
       </div>

@@ -1,0 +1,66 @@
+/**
+ * A visit's audit trail (visit_events): review steps, reopening, voids and imports, with who,
+ * when and why. Rows are only ever added, inside the same transaction as the change they record.
+ */
+import { and, asc, eq } from "drizzle-orm";
+import type { VisitEvent, VisitEventAction, VoidableKind } from "@shared/schemas/visits.ts";
+import type { Database } from "./client.ts";
+import { peopleById, person } from "./people.ts";
+import { visitEvents } from "./schema.ts";
+
+export interface VisitEventInsert {
+  visitId: string;
+  action: VisitEventAction;
+  summary: string;
+  actorId: string;
+  reason?: string | null;
+  recordKind?: VoidableKind | null;
+  recordId?: string | null;
+}
+
+type EventRow = typeof visitEvents.$inferSelect;
+
+function toEvent(row: EventRow, people: Awaited<ReturnType<typeof peopleById>>): VisitEvent {
+  return {
+    id: row.id,
+    action: row.action,
+    recordKind: row.recordKind,
+    recordId: row.recordId,
+    summary: row.summary,
+    reason: row.reason,
+    actor: person(people, row.actorId),
+    at: row.at.toISOString(),
+  };
+}
+
+export async function insertVisitEvent(
+  db: Database,
+  organisationId: string,
+  values: VisitEventInsert,
+): Promise<VisitEvent> {
+  const [row] = await db
+    .insert(visitEvents)
+    .values({
+      ...values,
+      reason: values.reason ?? null,
+      recordKind: values.recordKind ?? null,
+      recordId: values.recordId ?? null,
+      organisationId,
+    })
+    .returning();
+  return toEvent(row, await peopleById(db, [row.actorId]));
+}
+
+/** The visit's trail, oldest first. */
+export async function listVisitEvents(db: Database, organisationId: string, visitId: string): Promise<VisitEvent[]> {
+  const rows = await db
+    .select()
+    .from(visitEvents)
+    .where(and(eq(visitEvents.organisationId, organisationId), eq(visitEvents.visitId, visitId)))
+    .orderBy(asc(visitEvents.at), asc(visitEvents.id));
+  const people = await peopleById(
+    db,
+    rows.map((row) => row.actorId),
+  );
+  return rows.map((row) => toEvent(row, people));
+}

@@ -1,0 +1,45 @@
+/**
+ * The one way anything is written to a visit. The visit's row is locked (SELECT … FOR UPDATE)
+ * and its status checked inside the same transaction as the write, so a write racing a
+ * sign-off either lands before it or is refused after it: nothing is ever stored on a visit
+ * that is already closed. Review steps (submit, sign off, send back, reopen) take the same
+ * lock. On PGlite, where transactions already run one at a time, the lock costs nothing and
+ * keeps the code right on a real PostgreSQL.
+ */
+import { and, eq } from "drizzle-orm";
+import { STATUSES_OPEN_FOR_ENTRIES, type VisitStatus } from "@shared/schemas/visits.ts";
+import type { Database } from "../db/client.ts";
+import { visits } from "../db/schema.ts";
+import { notFound, type HttpError } from "../http/http-error.ts";
+import { requireWritableVisit } from "../http/require-writable-visit.ts";
+
+export type VisitRow = typeof visits.$inferSelect;
+
+export interface VisitWriteOptions {
+  /** Statuses the write is allowed in; entries and voids by default (open, sent back). */
+  allow?: readonly VisitStatus[];
+  /** The refusal when the status is not allowed; the closed-visit message by default. */
+  refuse?: (status: VisitStatus) => HttpError;
+}
+
+export function writeToVisit<T>(
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  write: (tx: Database, visit: VisitRow) => Promise<T>,
+  { allow = STATUSES_OPEN_FOR_ENTRIES, refuse }: VisitWriteOptions = {},
+): Promise<T> {
+  return db.transaction(async (tx) => {
+    const [visit] = await tx
+      .select()
+      .from(visits)
+      .where(and(eq(visits.organisationId, organisationId), eq(visits.id, visitId)))
+      .for("update");
+    if (!visit) throw notFound("Visit");
+    if (!allow.includes(visit.status)) {
+      if (refuse) throw refuse(visit.status);
+      requireWritableVisit(visit.status, allow);
+    }
+    return write(tx, visit);
+  });
+}

@@ -1,0 +1,121 @@
+import { PencilLine } from "lucide-react";
+import { chargeStateText } from "@shared/content/charge-states.ts";
+import { ADJUSTMENT_KIND_LABELS, type Adjustment, type Reading } from "@shared/schemas/visits.ts";
+import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
+import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
+import { useVoidRecord } from "@/lib/api/visits.ts";
+import {
+  DIFFERENCE_LABEL,
+  differenceToDisplay,
+  formatNumber,
+  GAUGE_LABEL,
+  gaugeToDisplay,
+  PRESSURE_DECIMALS,
+  type DisplayUnits,
+} from "@/lib/units/display-units.ts";
+
+const clock = (iso: string) => new Date(iso).toLocaleTimeString(undefined, { hour: "2-digit", minute: "2-digit" });
+
+type Entry =
+  { kind: "reading"; at: string; reading: Reading } | { kind: "adjustment"; at: string; adjustment: Adjustment };
+
+interface RecordedEntriesProps {
+  visitId: string;
+  circuit: number;
+  readings: readonly Reading[];
+  adjustments: readonly Adjustment[];
+  units: DisplayUnits;
+  atmosphericKPa: number;
+  canVoid: boolean;
+}
+
+/**
+ * Every reading and adjustment recorded on this circuit, voided ones included (struck through
+ * with their reason): the place to void a wrong entry, which then counts in nothing, and enter
+ * it again.
+ */
+export function RecordedEntries({
+  visitId,
+  circuit,
+  readings,
+  adjustments,
+  units,
+  atmosphericKPa,
+  canVoid,
+}: RecordedEntriesProps) {
+  const voidRecord = useVoidRecord();
+  const entries: Entry[] = [
+    ...readings
+      .filter((reading) => reading.circuit === circuit)
+      .map((reading) => ({ kind: "reading" as const, at: reading.takenAt, reading })),
+    ...adjustments
+      .filter((adjustment) => adjustment.circuit === null || adjustment.circuit === circuit)
+      .map((adjustment) => ({ kind: "adjustment" as const, at: adjustment.at, adjustment })),
+  ].sort((a, b) => Date.parse(b.at) - Date.parse(a.at));
+  if (entries.length === 0) return <p className="text-muted">Nothing recorded on this circuit yet.</p>;
+  const k = DIFFERENCE_LABEL[units.temperature];
+  const diff = (value: number | null) =>
+    value === null ? "—" : formatNumber(differenceToDisplay(value, units.temperature), 1);
+  const pressure = (kPa: number, atmosphere: number) =>
+    `${formatNumber(gaugeToDisplay(kPa, units.pressure, atmosphere), PRESSURE_DECIMALS[units.pressure])} ${GAUGE_LABEL[units.pressure]}`;
+
+  return (
+    <ol
+      aria-label={`Entries on circuit ${circuit}, newest first`}
+      className="divide-y-2 divide-rule rounded-card border-2 border-rule bg-surface"
+    >
+      {entries.map((entry) => {
+        const id = entry.kind === "reading" ? entry.reading.id : entry.adjustment.id;
+        const voided = entry.kind === "reading" ? entry.reading.voided : entry.adjustment.voided;
+        const what =
+          entry.kind === "reading"
+            ? `the reading of ${clock(entry.at)} on circuit ${circuit}`
+            : `the adjustment of ${clock(entry.at)}`;
+        return (
+          <li key={id} className="flex flex-wrap items-start justify-between gap-2 p-3" data-testid={`entry-${id}`}>
+            <VoidedRecord voided={voided} className="min-w-0 flex-1">
+              {entry.kind === "reading" ? (
+                <p className="num">
+                  <span className="font-sans font-semibold">{clock(entry.at)} reading</span> · suction{" "}
+                  {pressure(
+                    entry.reading.input.suctionPressureKPa,
+                    entry.reading.input.atmosphericPressureKPa ?? atmosphericKPa,
+                  )}
+                  , liquid{" "}
+                  {pressure(
+                    entry.reading.input.liquidPressureKPa,
+                    entry.reading.input.atmosphericPressureKPa ?? atmosphericKPa,
+                  )}{" "}
+                  · SH {diff(entry.reading.result.superheatK)} {k}, SC {diff(entry.reading.result.subcoolingK)} {k} ·{" "}
+                  <span className="font-sans">{chargeStateText[entry.reading.result.chargeState].short}</span>
+                  {entry.reading.recordedBy && (
+                    <span className="font-sans text-muted"> · {entry.reading.recordedBy.name}</span>
+                  )}
+                </p>
+              ) : (
+                <p className="flex items-start gap-1">
+                  <PencilLine aria-hidden className="mt-1 size-4 shrink-0" />
+                  <span>
+                    <span className="font-semibold">
+                      {clock(entry.at)} {ADJUSTMENT_KIND_LABELS[entry.adjustment.kind].toLowerCase()}
+                    </span>
+                    : {entry.adjustment.description}
+                    {entry.adjustment.amountKg != null && (
+                      <span className="num"> ({entry.adjustment.amountKg} kg)</span>
+                    )}
+                  </span>
+                </p>
+              )}
+            </VoidedRecord>
+            {canVoid && !voided && (
+              <VoidAction
+                what={what}
+                onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: entry.kind, recordId: id, reason })}
+              />
+            )}
+          </li>
+        );
+      })}
+    </ol>
+  );
+}
