@@ -6,7 +6,7 @@
  * equipment's application, as every new reading does; older ones get it added first.
  */
 import { sql } from "drizzle-orm";
-import { diagnose } from "@shared/engine/index.ts";
+import { diagnoseReading } from "../diagnosis/diagnose-on-server.ts";
 import type { Database } from "./client.ts";
 import { equipment, readings, visits } from "./schema.ts";
 
@@ -28,7 +28,7 @@ export async function upgradeStoredDiagnoses(db: Database): Promise<number> {
     if (stale.length === 0) return upgraded;
     for (const row of stale) {
       const input = { ...row.input, application: row.input.application ?? row.application };
-      await db.update(readings).set({ input, result: diagnose(input) }).where(sql`${readings.id} = ${row.id}`);
+      await db.update(readings).set({ input, result: await diagnoseReading(input) }).where(sql`${readings.id} = ${row.id}`);
     }
     upgraded += stale.length;
   }

@@ -8,9 +8,14 @@ import { register } from "tsx/esm/api";
 
 register();
 const { judgeReadingsCsv } = await import("./readings-csv.ts");
+const { prepareRefrigerant } = await import("../diagnosis/diagnose-on-server.ts");
 
-/** Judges the file and hands the rows' buffer to the server's thread without copying it. */
-export default function judge(task) {
+/**
+ * Judges the file (with the refrigerant's single-phase table loaded, as every stored reading is
+ * judged) and hands the rows' buffer to the server's thread without copying it.
+ */
+export default async function judge(task) {
+  await prepareRefrigerant(task.context.unit.refrigerant);
   const outcome = judgeReadingsCsv(task);
   const buffer = outcome.slices?.[0]?.buffer;
   return buffer ? Piscina.move({ [Piscina.transferableSymbol]: buffer, [Piscina.valueSymbol]: outcome }) : outcome;

@@ -189,7 +189,7 @@ export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRef
       const issue = parsed.error.issues[0]!;
       return problems.push({ line, field: issue.path.join(".") || undefined, message: issue.message });
     }
-    valid.push({ takenAt: takenAt.toISOString(), input: parsed.data, result: diagnose(parsed.data) });
+    valid.push({ takenAt: takenAt.toISOString(), input: parsed.data, result: diagnose(parsed.data, { withMeasuredCycle: true }) });
   });
   return summary();
 }

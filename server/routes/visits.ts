@@ -1,6 +1,5 @@
 import { Router } from "express";
 import { z } from "zod";
-import { diagnose } from "@shared/engine/index.ts";
 import { can, type Permission } from "@shared/schemas/auth.ts";
 import { instant } from "@shared/schemas/dates.ts";
 import { text } from "@shared/schemas/text.ts";
@@ -22,6 +21,7 @@ import {
   type VisitStatus,
 } from "@shared/schemas/visits.ts";
 import { getAuth } from "../auth/session.ts";
+import { diagnoseReading } from "../diagnosis/diagnose-on-server.ts";
 import { getEquipment, getSite } from "../db/equipment.ts";
 import { insertVisitEvent } from "../db/visit-events.ts";
 import {
@@ -139,7 +139,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     const parsed = readingInput(measured, await readingContext(organisationId, visit.equipmentId, circuit));
     if (!parsed.success) throw parsed.error;
     const input = parsed.data;
-    const result = diagnose(input);
+    const result = await diagnoseReading(input);
     const reading = await writeToVisit(db, organisationId, visit.id, async (tx) => {
       const stored = await insertReading(tx, organisationId, { visitId: visit.id, circuit, takenAt: takenAt ? new Date(takenAt) : undefined, note, input, result, recordedBy: user.id });
       await joinCrew(tx, visit.id, user.id);

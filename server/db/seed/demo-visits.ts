@@ -5,20 +5,32 @@
  * their pressures are what a gauge on that refrigerant would show, and each is diagnosed by
  * the same engine as a live reading.
  */
-import { diagnose, saturationPressure, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.ts";
-import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
+import { atmosphericPressureAtAltitude, diagnose, saturationPressure } from "@shared/engine/index.ts";
+import type { Application, DiagnosisInput } from "@shared/schemas/diagnosis.ts";
+import { prepareRefrigerant } from "../../diagnosis/diagnose-on-server.ts";
+import { demoSite } from "./demo-scenario.ts";
 import type { Database } from "../client.ts";
 import { adjustments, readings, visitComments, visitTechnicians, visits } from "../schema.ts";
 
-type Unit = { id: string; refrigerant: string; name: string; circuits: { number: number; meteringDevice: DiagnosisInput["meteringDevice"]; targetSuperheatK?: number | null; targetSubcoolingK?: number | null }[]; compressorRlaA: number | null };
+type Unit = {
+  id: string;
+  refrigerant: string;
+  name: string;
+  application: Application;
+  circuits: { number: number; meteringDevice: DiagnosisInput["meteringDevice"]; targetSuperheatK?: number | null; targetSubcoolingK?: number | null; liquidLineLengthM?: number | null }[];
+  compressorRlaA: number | null;
+};
 type People = Record<"owner" | "senior" | "technician" | "technician2", string>;
 
 const MINUTE = 60_000;
 const DAY = 24 * 60 * MINUTE;
 
+/** The clinic's atmosphere (ISO 2533 at the site's altitude), as the server uses for its readings. */
+const ATMOSPHERE_KPA = atmosphericPressureAtAltitude(demoSite.altitudeM);
+
 /** Gauge pressure (kPa) at which the refrigerant saturates at a temperature, rounded as a gauge reads. */
 const gauge = (refrigerant: string, temperatureC: number, point: "bubble" | "dew") =>
-  Math.round(saturationPressure(refrigerant, temperatureC, point) - STANDARD_ATMOSPHERE_KPA);
+  Math.round(saturationPressure(refrigerant, temperatureC, point) - ATMOSPHERE_KPA);
 
 interface DemoReading {
   minutes: number;
@@ -42,18 +54,22 @@ function readingRows(unit: Unit, circuit: number, visitId: string, organisationI
       liquidLineTempC: reading.liquidLineTempC,
       dischargeLineTempC: reading.dischargeLineTempC,
       runMinutes: reading.runMinutes,
-      atmosphericPressureKPa: STANDARD_ATMOSPHERE_KPA,
+      atmosphericPressureKPa: ATMOSPHERE_KPA,
+      application: unit.application,
+      ...(nameplate.liquidLineLengthM != null ? { liquidLineLengthM: nameplate.liquidLineLengthM } : {}),
       ...(nameplate.targetSuperheatK != null ? { targetSuperheatK: nameplate.targetSuperheatK } : {}),
       ...(nameplate.targetSubcoolingK != null ? { targetSubcoolingK: nameplate.targetSubcoolingK } : {}),
       ...(unit.compressorRlaA != null ? { compressorRla: unit.compressorRlaA } : {}),
       ...air,
     };
-    return { organisationId, visitId, circuit, takenAt: new Date(start + reading.minutes * MINUTE), input, result: diagnose(input), recordedBy };
+    return { organisationId, visitId, circuit, takenAt: new Date(start + reading.minutes * MINUTE), input, result: diagnose(input, { withMeasuredCycle: true }), recordedBy };
   });
 }
 
 export async function seedDemoVisits(db: Pick<Database, "insert">, organisationId: string, units: { rooftop: Unit; split: Unit }, people: People, now = Date.now()): Promise<void> {
   const { rooftop, split } = units;
+  // Judged as every run-log reading is: with the measured cycle's compressor figures.
+  await Promise.all([prepareRefrigerant(rooftop.refrigerant), prepareRefrigerant(split.refrigerant)]);
   const rooftopAir = { returnAirDryBulbC: 25, returnAirWetBulbC: 18, supplyAirDryBulbC: 14, outdoorAirDryBulbC: 31 };
 
   // 1. Three weeks ago: circuit 2 tripping on high pressure; a burnt condenser-fan contactor.

@@ -113,7 +113,7 @@ function splitTarget(snapshotApplication: DiagnosisSnapshot["application"], retu
  *   errors become `outsideTable` entries)
  * @example buildDiagnosisSnapshot(input).superheatK
  */
-export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot {
+export function buildDiagnosisSnapshot(input: DiagnosisInput, withMeasuredCycle = false): DiagnosisSnapshot {
   const atmosphericPressureKPa = input.atmosphericPressureKPa ?? STANDARD_ATMOSPHERE_KPA;
   const refrigerant = input.refrigerant;
   const info = getRefrigerant(refrigerant);
@@ -232,6 +232,7 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput): DiagnosisSnapshot
 
   return {
     input,
+    withMeasuredCycle,
     meteringDevice: input.meteringDevice,
     meteringFamily: meteringFamilyOf(input.meteringDevice),
     application,

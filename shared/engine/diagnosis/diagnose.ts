@@ -74,13 +74,25 @@ function readingsLeftOut(snapshot: DiagnosisSnapshot): LeftOutReading[] {
  * more strongly, "normal" cannot be confirmed, and the confidence is lowered; a short run time lowers the confidence. Below the
  * threshold the verdict is "insufficient-data". Symptom patterns: TRADE.md §2 [S21]–[S24].
  *
+ * With `withMeasuredCycle` (and the refrigerant's single-phase table loaded) the compressor's
+ * apparent isentropic efficiency joins the evidence.
+ *
  * Units: kPa gauge, °C in; °C, K, ratios out (see `DiagnosisResultSchema`).
  *
  * @throws {DiagnosisInputError} when the readings are invalid or impossible (field messages),
  *   or the refrigerant is unknown
  * @example diagnose({ refrigerant: "R410A", meteringDevice: "txv", suctionPressureKPa: 820, suctionLineTempC: 13, liquidPressureKPa: 2650, liquidLineTempC: 38 }).chargeState
  */
-export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
+export interface DiagnoseOptions {
+  /**
+   * Judge the compressor from the measured cycle too (its apparent isentropic efficiency), when
+   * the refrigerant's single-phase table is loaded. The run log asks for it (server and browser
+   * both load the table first); worked cases and the casebook judge the saturation readings only.
+   */
+  withMeasuredCycle?: boolean;
+}
+
+export function diagnose(input: DiagnosisInputDraft, options: DiagnoseOptions = {}): DiagnosisResult {
   // Performance: the hand-written check accepts valid readings without zod's cost; anything it
   // refuses goes through the schema, which stays the source of every message.
   let data: DiagnosisInput | null = fastParseDiagnosisInput(input);
@@ -91,7 +103,7 @@ export function diagnose(input: DiagnosisInputDraft): DiagnosisResult {
   }
   let snapshot;
   try {
-    snapshot = buildDiagnosisSnapshot(data);
+    snapshot = buildDiagnosisSnapshot(data, options.withMeasuredCycle === true);
   } catch (error) {
     if (error instanceof PropertyRangeError && error.code === "UNKNOWN_REFRIGERANT") {
       throw new DiagnosisInputError({ refrigerant: [error.message] });

@@ -246,6 +246,15 @@ export const HIGH_COMPRESSION_RATIO = 10;
 export const CURRENT_RATIO_BAND: Band = { lowK: 0.55, highK: 1 };
 /** Ratio distance at which a current deviation counts in full. */
 export const CURRENT_RATIO_FULL_STRENGTH = 0.2;
+/**
+ * Apparent isentropic efficiency from the discharge line: healthy scroll and reciprocating
+ * compressors about 0.6–0.75 (memory), a hermetic's motor heat reading it lower; below 0.45 the
+ * gas is taking far more work than it should — re-compressed through leaking valves (common
+ * practice). Only the low side is judged; full strength at 0.30.
+ */
+export const COMPRESSOR_EFFICIENCY_BAND: Band = { lowK: 0.45, highK: Number.POSITIVE_INFINITY };
+export const COMPRESSOR_EFFICIENCY_FULL_STRENGTH = 0.15;
+export const COMPRESSOR_EFFICIENCY_SOURCE = `apparent isentropic efficiency of healthy compressors about 0.6–0.75 (${MEMORY}); below 0.45 re-compressed gas (${COMMON_PRACTICE}); ${cite(["S21", "S29"])}`;
 
 // ---- Data quality --------------------------------------------------------------------------------
 

@@ -19,6 +19,7 @@ export const SIGNATURE_FEATURES = [
   "compressorCurrent",
   "dischargeLine",
   "compressionRatio",
+  "compressorEfficiency",
 ] as const;
 export type SignatureFeature = (typeof SIGNATURE_FEATURES)[number];
 
@@ -169,6 +170,7 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       temperatureSplit: cell("low", 0.6),
       compressorCurrent: cell("low", 0.8),
       compressionRatio: cell("low", 0.8),
+      compressorEfficiency: cell("low", 0.8),
     },
     source: cite(["S21", "S29", "S30", "S122"]),
   },

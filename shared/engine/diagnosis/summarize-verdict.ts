@@ -20,6 +20,7 @@ const WORDS: Readonly<Record<string, { low: string; normal: string; high: string
   compressorCurrentRatio: { low: "low compressor current", normal: "current within rating", high: "current above RLA" },
   dischargeLineTempC: { low: "discharge barely superheated", normal: "discharge temperature normal", high: "hot discharge line" },
   compressionRatio: { low: "low compression ratio", normal: "normal compression ratio", high: "high compression ratio" },
+  compressorEfficiency: { low: "compressor working the gas twice", normal: "compressor efficiency normal", high: "compressor efficiency normal" },
   suctionPressureKPa: { low: "suction below the table", normal: "suction pressure", high: "suction pressure" },
 };
 

@@ -26,6 +26,8 @@ export interface Exclusion {
  */
 export interface DiagnosisSnapshot {
   input: DiagnosisInput;
+  /** Judge the compressor from the measured cycle too (see `diagnose` options). */
+  withMeasuredCycle: boolean;
   meteringDevice: MeteringDevice;
   /** TXV/EEV hold superheat; fixed orifice and capillary do not (TRADE.md §2 notes). */
   meteringFamily: MeteringFamily;

@@ -9,6 +9,7 @@ import { applicationFitRule } from "./application-fit.ts";
 import { transcriticalHighSideRule } from "./transcritical-high-side.ts";
 import { compressionRatioRule } from "./compression-ratio.ts";
 import { compressorCurrentRule } from "./compressor-current.ts";
+import { compressorEfficiencyRule } from "./compressor-efficiency.ts";
 import { condenserApproachRule } from "./condenser-approach.ts";
 import { condensingOverAmbientRule } from "./condensing-over-ambient.ts";
 import { dischargeLineSaturationRule } from "./discharge-line-saturation.ts";
@@ -43,4 +44,5 @@ export const DIAGNOSIS_RULES: readonly DiagnosisRule[] = Object.freeze([
   condenserApproachRule,
   compressionRatioRule,
   compressorCurrentRule,
+  compressorEfficiencyRule,
 ]);

@@ -2,6 +2,7 @@ import { useDeferredValue, useMemo } from "react";
 import { diagnose, DiagnosisInputError } from "@shared/engine/index.ts";
 import type { Application, DiagnosisInputDraft, DiagnosisResult, MeteringDevice } from "@shared/schemas/diagnosis.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
+import { useSinglePhaseTable } from "./use-single-phase-table.ts";
 import { parseDraft, type DraftField, type ReadingDraft } from "../utils/reading-draft.ts";
 
 export interface CircuitContext {
@@ -26,6 +27,8 @@ export type LiveDiagnosis =
  */
 export function useLiveDiagnosis(draft: ReadingDraft, context: CircuitContext, units: DisplayUnits, atmosphericKPa: number): LiveDiagnosis {
   const deferredDraft = useDeferredValue(draft);
+  // The compressor is judged from the measured cycle once its table is here, as on the server.
+  const cycleReady = useSinglePhaseTable(context.refrigerant).isSuccess;
   return useMemo(() => {
     const { values, typingErrors, missing } = parseDraft(deferredDraft, units, atmosphericKPa);
     const fieldErrors: Record<string, string> = { ...typingErrors };
@@ -42,11 +45,11 @@ export function useLiveDiagnosis(draft: ReadingDraft, context: CircuitContext, u
       ...(values as Omit<DiagnosisInputDraft, "refrigerant" | "meteringDevice">),
     };
     try {
-      return { kind: "ready", input, result: diagnose(input), fieldErrors };
+      return { kind: "ready", input, result: diagnose(input, { withMeasuredCycle: cycleReady }), fieldErrors };
     } catch (error) {
       if (!(error instanceof DiagnosisInputError)) throw error;
       for (const [field, messages] of Object.entries(error.fieldErrors)) fieldErrors[field] = messages[0] ?? "Check this value";
       return { kind: "invalid", fieldErrors, formError: error.formErrors[0] ?? null };
     }
-  }, [deferredDraft, context, units, atmosphericKPa]);
+  }, [deferredDraft, context, units, atmosphericKPa, cycleReady]);
 }

@@ -1,8 +1,7 @@
-import { useQuery } from "@tanstack/react-query";
 import { useMemo } from "react";
 import { measuredCycle, type MeasuredCycle, type MeasuredCycleExtras } from "@shared/engine/index.ts";
-import { loadSinglePhaseTable } from "@shared/property-tables/load-single-phase-table.ts";
 import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
+import { useSinglePhaseTable } from "./use-single-phase-table.ts";
 
 export type MeasuredCycleState =
   | { kind: "idle" }
@@ -22,16 +21,7 @@ export function useMeasuredCycle(
   enabled: boolean,
 ): MeasuredCycleState {
   const refrigerant = input?.refrigerant ?? "";
-  const table = useQuery({
-    queryKey: ["single-phase-table", refrigerant],
-    queryFn: async () => {
-      await loadSinglePhaseTable(refrigerant);
-      return refrigerant;
-    },
-    enabled: enabled && refrigerant !== "",
-    staleTime: Infinity,
-    gcTime: Infinity,
-  });
+  const table = useSinglePhaseTable(refrigerant, enabled);
   return useMemo((): MeasuredCycleState => {
     if (!enabled || !input) return { kind: "idle" };
     if (table.isError)
