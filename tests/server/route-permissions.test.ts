@@ -19,13 +19,14 @@ const NO_SUCH_RECORD = "00000000-0000-4000-8000-000000000000";
 /**
  * Calls a route with its sample body (tests/setup/route-samples.ts): routes that read their
  * body before they look up the record in their path must meet a valid one, so that the record
- * answers (404), not the body (400).
+ * answers (404), not the body (400). Writes name a version (If-Match) for the same reason: the
+ * versioned records refuse a write without one (428) before they look for the record.
  */
 let bodies: ReturnType<typeof sampleBodies> = {};
 function call(agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, key: RouteKey, url: string) {
   const { method } = parseRouteKey(key);
   const test = agent[method](url);
-  return method === "get" ? test : test.send(bodies[key] ?? {});
+  return method === "get" ? test : test.set("If-Match", '"1"').send(bodies[key] ?? {});
 }
 
 /** The route's URL naming records that do not exist (and circuit 1). */

@@ -85,7 +85,7 @@ export async function twoCompanies(testApp: TestApp): Promise<TwoCompanies> {
   const evacuationId = ok(await technician.post(`/api/visits/${visitId}/evacuations`).send({ samples: [{ minutes: 0, microns: 5000 }] }), "evacuation").evacuation.id;
   const invitationId = ok(await owner.post("/api/invitations").send({ email: "matrix-invitee@bellbird.example", role: "apprentice" }), "invitation").invitation.id;
   const caseId = ok(await senior.post("/api/cases").send(CASE_DRAFT), "case").case.id;
-  ok(await senior.post(`/api/cases/${caseId}/publish`), "publish");
+  ok(await senior.post(`/api/cases/${caseId}/publish`).set("If-Match", '"1"'), "publish");
   const attemptId = ok(
     await apprentice.post("/api/attempts").send({
       caseId,

@@ -46,6 +46,16 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
       expect(result.findings[0]!.message).toMatch(/approach high/);
     });
 
+    it("a high approach that only the missing subcooling explains is not the condenser's: normal head and no subcooling is a shortage [S24][S26]", () => {
+      // Approach ≈ condensing over ambient − subcooling: with the head where it belongs and the
+      // liquid leaving at its bubble point, the approach reads high from a clean condenser.
+      for (const superheatK of [6, 12]) {
+        const result = diagnose(r410a({ condensingC: 47, subcoolingK: 0.5, superheatK, dischargeLineTempC: 85 }));
+        expect(result.chargeState, `superheat ${superheatK} K`).toBe("undercharged");
+        expect(result.alternatives.map((alternative) => alternative.state)).not.toContain("condenser-airflow");
+      }
+    });
+
     it("high head with the computed subcooling high but the liquid no closer to ambient than usual: non-condensables", () => {
       // Air adds its partial pressure: the bubble point of the gauge reading is ~10 K above the
       // real condensing temperature, so the computed subcooling reads 10 K too high.

@@ -1,7 +1,7 @@
 import { SENSOR_TOLERANCE_K } from "../diagnosis-limits.ts";
 import { formatTenths } from "../format-tenths.ts";
 import { cite } from "../sources.ts";
-import type { DiagnosisRule } from "../types.ts";
+import type { DiagnosisRule, DiagnosisSnapshot, TargetBand } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
@@ -19,6 +19,24 @@ const MESSAGES: BandedReading["messages"] = {
   high: (value, text) => `Liquid leaves the condenser ${value} K above the outdoor air (expected ${text} K): the condenser is not rejecting its heat — coil, fan or air recirculating`,
 };
 
+/**
+ * The expected approach, raised by any subcooling shortfall. Approach ≈ condensing over ambient −
+ * subcooling, so a liquid line with too little subcooling reads a high approach from a condenser
+ * that rejects its heat well; that shortfall is the subcooling rule's evidence (undercharge,
+ * restriction), not the condenser's. Only a high approach the short subcooling does not explain
+ * points at the condenser. Subcooling above target is left alone: a high computed subcooling with
+ * a high approach is what tells air in the system from a dirty coil.
+ */
+function expectedApproach(snapshot: DiagnosisSnapshot): TargetBand {
+  const band = snapshot.condenserApproachTarget;
+  const target = snapshot.subcoolingTarget;
+  const subcooling = snapshot.subcoolingK;
+  if (target === null || subcooling === null || snapshot.subcoolingExcluded !== null) return band;
+  const shortfall = target.lowK - subcooling;
+  if (shortfall <= 0) return band;
+  return { ...band, lowK: band.lowK + shortfall, highK: band.highK + shortfall, targetK: band.targetK + shortfall };
+}
+
 export const condenserApproachRule: DiagnosisRule = {
   id: "condenser-approach",
   description: "Liquid line minus outdoor air against the application's band: high when the condenser cannot reject heat, low when it is full of liquid",
@@ -26,7 +44,7 @@ export const condenserApproachRule: DiagnosisRule = {
   evaluate(snapshot) {
     const approach = snapshot.condenserApproachK;
     if (approach === null) return NO_OUTPUT;
-    const band = snapshot.condenserApproachTarget;
+    const band = expectedApproach(snapshot);
     const finding = bandedFinding({
       ruleId: this.id,
       reading: "condenserApproachK",
