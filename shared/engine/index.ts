@@ -154,3 +154,9 @@ export type {
   CylinderFillLimits,
   ChargeLimits,
 } from "./procedures/procedure-limits.ts";
+export { estimateChargeDeviation } from "./charge/estimate-charge-deviation.ts";
+export type { ChargeDeviationEstimate } from "./charge/estimate-charge-deviation.ts";
+export { virtualChargeFraction } from "./charge/virtual-charge-fraction.ts";
+export type { VirtualChargeCoefficients } from "./charge/virtual-charge-fraction.ts";
+export { defaultChargeCoefficients } from "./charge/default-charge-coefficients.ts";
+export * as CHARGE_DEVIATION_LIMITS from "./charge/charge-deviation-limits.ts";

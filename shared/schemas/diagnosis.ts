@@ -95,6 +95,8 @@ export const MAX_AIR_TEMPERATURE_C = 70;
 export const MAX_TARGET_K = 30;
 /** Longest liquid line (line set) accepted, m. */
 export const MAX_LINE_LENGTH_M = 300;
+/** Largest charge of one circuit, kg. */
+export const MAX_CIRCUIT_CHARGE_KG = 500;
 /** Largest current accepted, A. */
 export const MAX_CURRENT_A = 2_000;
 /** Wet bulb may read this much above dry bulb before it is called impossible (sensor noise), K. */
@@ -185,8 +187,47 @@ export const DIAGNOSIS_FIELD_RANGES = {
     minMessage: "Liquid line length cannot be negative",
     maxMessage: `Liquid line length above ${MAX_LINE_LENGTH_M} m is not a line set`,
   },
+  chargeKg: {
+    min: 0,
+    minExclusive: true,
+    max: MAX_CIRCUIT_CHARGE_KG,
+    minMessage: "Correct charge must be above 0 kg",
+    maxMessage: `Correct charge above ${MAX_CIRCUIT_CHARGE_KG} kg is not one circuit`,
+  },
 } as const satisfies Record<string, FieldRange>;
 const RANGE_ENTRIES = Object.entries(DIAGNOSIS_FIELD_RANGES) as [keyof typeof DIAGNOSIS_FIELD_RANGES, FieldRange][];
+
+/**
+ * A circuit's charge reference point: settled readings taken at a known correct charge (after a
+ * weigh-in of the nameplate charge into an evacuated circuit). Charge deviation is measured from
+ * it (virtual refrigerant charge method, Li & Braun 2009).
+ */
+const referenceTemperature = (label: string) =>
+  z.number({ error: `${label} must be a number in °C` }).min(-80, `${label} below −80 °C is not a running circuit`).max(90, `${label} above 90 °C is not a running circuit`);
+const referenceDifference = (label: string) =>
+  z.number({ error: `${label} must be a number in K` }).min(-5, `${label} below −5 K is not a settled reading`).max(60, `${label} above 60 K is not a settled reading`);
+export const ChargeReferenceSchema = z.object({
+  subcoolingK: referenceDifference("Reference subcooling"),
+  superheatK: referenceDifference("Reference superheat"),
+  evaporatingTempC: referenceTemperature("Reference evaporating temperature"),
+  condensingTempC: referenceTemperature("Reference condensing temperature"),
+  outdoorAirDryBulbC: referenceTemperature("Reference outdoor air").nullable(),
+  returnAirDryBulbC: referenceTemperature("Reference return air").nullable(),
+});
+export type ChargeReference = z.infer<typeof ChargeReferenceSchema>;
+
+export const CHARGE_DEVIATION_BASES = ["unit-reference", "generic"] as const;
+export type ChargeDeviationBasis = (typeof CHARGE_DEVIATION_BASES)[number];
+/** Charge over (+) or under (−) the correct charge, kg, with its range, basis and source. */
+export const ChargeDeviationSchema = z.object({
+  kg: z.number(),
+  lowKg: z.number(),
+  highKg: z.number(),
+  /** unit-reference: against the circuit's own reference point (narrow); generic: published default coefficients (wide). */
+  basis: z.enum(CHARGE_DEVIATION_BASES),
+  source: z.string(),
+});
+export type ChargeDeviation = z.infer<typeof ChargeDeviationSchema>;
 
 /** The input's fields without the cross-field checks, so a request body can pick the ones it takes. */
 export const DiagnosisInputObjectSchema = z.object({
@@ -241,6 +282,10 @@ export const DiagnosisInputObjectSchema = z.object({
   application: ApplicationSchema.optional(),
   /** Length of the liquid line (the line set), m: sets the suction line allowance. */
   liquidLineLengthM: number("Liquid line length", "m").optional(),
+  /** The circuit's correct charge (nameplate plus any line-set adjustment), kg: sets the scale of `chargeDeviation`. */
+  chargeKg: number("Correct charge", "kg").optional(),
+  /** The circuit's own reference point (settled readings at a known correct charge), when one was set. */
+  chargeReference: ChargeReferenceSchema.optional(),
 });
 
 /**
@@ -472,6 +517,9 @@ export const DiagnosisResultSchema = z.object({
   alternatives: z.array(RankedStateSchema),
   /** Readings measured but left out of the verdict (impossible where taken, outside the table…). */
   readingsLeftOut: z.array(LeftOutReadingSchema),
+  /** How far the charge is from the correct charge, kg (negative: short); null with `chargeDeviationNote` when the readings cannot support it. */
+  chargeDeviation: ChargeDeviationSchema.nullable(),
+  chargeDeviationNote: z.string().nullable(),
   findings: z.array(FindingSchema),
   warnings: z.array(DiagnosisWarningSchema),
 });

@@ -5,12 +5,12 @@
  */
 import { z } from "zod";
 import { listRefrigerants } from "../engine/index.ts";
-import { ApplicationSchema, MAX_LINE_LENGTH_M, MeteringDeviceSchema, type Application } from "./diagnosis.ts";
+import { ApplicationSchema, MAX_CIRCUIT_CHARGE_KG, MAX_LINE_LENGTH_M, MeteringDeviceSchema, type Application } from "./diagnosis.ts";
 import { text } from "./text.ts";
 
 export const MAX_CIRCUITS = 4;
 /** Largest factory charge per circuit accepted, kg: a large packaged chiller circuit. */
-export const MAX_CIRCUIT_CHARGE_KG = 500;
+export { MAX_CIRCUIT_CHARGE_KG };
 export const MAX_NAME_LENGTH = 120;
 export const MAX_NOTE_LENGTH = 500;
 

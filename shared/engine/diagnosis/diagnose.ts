@@ -9,6 +9,7 @@ import {
   type LeftOutReading,
   type RankedState,
 } from "../../schemas/diagnosis.ts";
+import { estimateChargeDeviation } from "../charge/estimate-charge-deviation.ts";
 import { PropertyRangeError } from "../properties/property-range-error.ts";
 import { buildDiagnosisSnapshot } from "./build-diagnosis-snapshot.ts";
 import { DiagnosisInputError } from "./diagnosis-input-error.ts";
@@ -75,7 +76,9 @@ function readingsLeftOut(snapshot: DiagnosisSnapshot): LeftOutReading[] {
  * threshold the verdict is "insufficient-data". Symptom patterns: TRADE.md §2 [S21]–[S24].
  *
  * With `withMeasuredCycle` (and the refrigerant's single-phase table loaded) the compressor's
- * apparent isentropic efficiency joins the evidence.
+ * apparent isentropic efficiency joins the evidence. With the circuit's correct charge
+ * (`chargeKg`, and `chargeReference` when the circuit has its own reference point) the result
+ * says how many kilograms the charge is off (`chargeDeviation`, see estimateChargeDeviation).
  *
  * Units: kPa gauge, °C in; °C, K, ratios out (see `DiagnosisResultSchema`).
  *
@@ -220,6 +223,7 @@ export function diagnose(input: DiagnosisInputDraft, options: DiagnoseOptions = 
     confidence: verdict ? verdict.confidence : 0,
     alternatives: verdict ? ranked.filter((entry) => entry !== verdict) : ranked,
     readingsLeftOut: readingsLeftOut(snapshot),
+    ...estimateChargeDeviation(snapshot),
     findings,
     warnings,
   };

@@ -39,10 +39,12 @@ const CHECKED_FIELDS = [
   "runMinutes",
   "application",
   "liquidLineLengthM",
+  "chargeKg",
+  "chargeReference",
 ] as const;
 // A field or range added to the schema but not here would make this check looser than the
 // schema: fail at start-up instead of accepting readings the schema refuses.
-const UNRANGED_FIELDS: readonly string[] = ["refrigerant", "meteringDevice", "liquidTempLocation", "suctionTempLocation", "application"];
+const UNRANGED_FIELDS: readonly string[] = ["refrigerant", "meteringDevice", "liquidTempLocation", "suctionTempLocation", "application", "chargeReference"];
 if (
   Object.keys(DiagnosisInputSchema.shape).join() !== CHECKED_FIELDS.join() ||
   Object.keys(RANGES).join() !== CHECKED_FIELDS.filter((field) => !UNRANGED_FIELDS.includes(field)).join()
@@ -102,6 +104,8 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
   if (suctionTempLocation !== undefined && !SUCTION_TEMP_LOCATION_SET.has(suctionTempLocation)) return null;
   const application = draft.application;
   if (application !== undefined && !APPLICATION_SET.has(application)) return null;
+  // A circuit's reference point is an object of its own: the schema checks it (rare, once per reading).
+  if (draft.chargeReference !== undefined) return null;
 
   const {
     suctionPressureKPa,
@@ -122,6 +126,7 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
     atmosphericPressureKPa,
     runMinutes,
     liquidLineLengthM,
+    chargeKg,
   } = draft;
   if (
     !isFiniteNumber(suctionPressureKPa) ||
@@ -141,7 +146,8 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
     !isOptionalFiniteNumber(targetSubcoolingK) ||
     !isOptionalFiniteNumber(atmosphericPressureKPa) ||
     !isOptionalFiniteNumber(runMinutes) ||
-    !isOptionalFiniteNumber(liquidLineLengthM)
+    !isOptionalFiniteNumber(liquidLineLengthM) ||
+    !isOptionalFiniteNumber(chargeKg)
   ) {
     return null;
   }
@@ -171,6 +177,8 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
     runMinutes,
     application: application as DiagnosisInput["application"],
     liquidLineLengthM,
+    chargeKg,
+    chargeReference: undefined,
   };
 
   // The schema's refinement, check for check, without building any message. Field by field
@@ -193,7 +201,8 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
     outsideRange(targetSubcoolingK, RANGES.targetSubcoolingK) ||
     outsideRange(atmosphericPressureKPa, RANGES.atmosphericPressureKPa) ||
     outsideRange(runMinutes, RANGES.runMinutes) ||
-    outsideRange(liquidLineLengthM, RANGES.liquidLineLengthM)
+    outsideRange(liquidLineLengthM, RANGES.liquidLineLengthM) ||
+    outsideRange(chargeKg, RANGES.chargeKg)
   ) {
     return null;
   }

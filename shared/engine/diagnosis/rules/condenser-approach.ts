@@ -1,7 +1,8 @@
 import { SENSOR_TOLERANCE_K } from "../diagnosis-limits.ts";
 import { formatTenths } from "../format-tenths.ts";
 import { cite } from "../sources.ts";
-import type { DiagnosisRule, DiagnosisSnapshot, TargetBand } from "../types.ts";
+import type { TargetBand } from "../../../schemas/diagnosis.ts";
+import type { DiagnosisRule, DiagnosisSnapshot } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
