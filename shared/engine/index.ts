@@ -159,4 +159,7 @@ export type { ChargeDeviationEstimate } from "./charge/estimate-charge-deviation
 export { virtualChargeFraction } from "./charge/virtual-charge-fraction.ts";
 export type { VirtualChargeCoefficients } from "./charge/virtual-charge-fraction.ts";
 export { defaultChargeCoefficients } from "./charge/default-charge-coefficients.ts";
-export * as CHARGE_DEVIATION_LIMITS from "./charge/charge-deviation-limits.ts";
+export { chargingPlan, CHARGING_PLAN_SOURCE } from "./charge/charging-plan.ts";
+export type { ChargingPlan } from "./charge/charging-plan.ts";
+export { chargeStepChecks } from "./charge/charge-step-checks.ts";
+export type { ChargeStep, ChargeStepCheck, EstimatePoint } from "./charge/charge-step-checks.ts";
