@@ -146,7 +146,7 @@ export default function VisitReportRoute() {
       <LeakSearchReport visitId={data.id} />
       <PressureTestReport visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} />
       <EvacuationReport visitId={data.id} chartWidth={PRINT_CHART_WIDTH} />
-      <RefrigerantReport visitId={data.id} />
+      <RefrigerantReport visitId={data.id} readings={data.readings} />
 
       {data.photos.length > 0 && (
         <section aria-labelledby="photos-heading" className="keep-together">

@@ -1,12 +1,17 @@
-import { isStanding } from "@shared/schemas/visits.ts";
+import { isStanding, type Reading } from "@shared/schemas/visits.ts";
 import { MOVEMENT_KIND_LABELS } from "@shared/schemas/register.ts";
 import { useVisitRefrigerant } from "@/lib/api/register.ts";
+import { estimateBeforeRecovery } from "../utils/estimate-before-recovery.ts";
 import { formatKg, formatSignedKg, formatWhen } from "../utils/format-register.ts";
 import { HiddenLinesNote } from "./hidden-lines-note.tsx";
 import { VerdictLine } from "./verdict-line.tsx";
 
-/** The report's refrigerant section: recovered, reused, added, the balance and the weigh-in per circuit. */
-export function RefrigerantReport({ visitId }: { visitId: string }) {
+/**
+ * The report's refrigerant section: recovered, reused, added, the balance and the weigh-in per
+ * circuit, and — where the circuit was recovered — the readings' charge estimate beside what the
+ * scale found, so the estimate is checked against the scale on every recovery.
+ */
+export function RefrigerantReport({ visitId, readings = [] }: { visitId: string; readings?: readonly Reading[] }) {
   const register = useVisitRefrigerant(visitId);
   // Voided movements are corrections: the report leaves them out (the audit trail names them).
   const movements = (register.data?.movements ?? []).filter(isStanding);
@@ -46,6 +51,24 @@ export function RefrigerantReport({ visitId }: { visitId: string }) {
               ))}
             </tbody>
           </table>
+          {register.data.circuits.map((circuit) => {
+            const estimate = circuit.recoveredOnVisit ? estimateBeforeRecovery(readings, movements, circuit.circuit) : null;
+            if (!estimate) return null;
+            // shortfall = nameplate − recovered; the estimate's kg is negative when short.
+            const scaleKg = -circuit.balance.shortfallKg;
+            const inside = scaleKg >= estimate.lowKg && scaleKg <= estimate.highKg;
+            return (
+              <p key={`estimate-${circuit.circuit}`} className="text-sm" data-testid="estimate-against-scale">
+                Circuit {circuit.circuit}: the readings estimated <span className="num">{formatSignedKg(estimate.kg)}</span> (
+                <span className="num">
+                  {formatSignedKg(estimate.lowKg)} to {formatSignedKg(estimate.highKg)}
+                </span>
+                , {estimate.basis === "unit-reference" ? "against the circuit's reference point" : "generic coefficients"}); the scale found{" "}
+                <span className="num">{formatSignedKg(scaleKg)}</span> against nameplate —{" "}
+                {inside ? "inside the estimate's range" : <strong>outside the estimate's range</strong>}.
+              </p>
+            );
+          })}
           {register.data.circuits
             .filter((circuit) => circuit.charging)
             .map((circuit) => (

@@ -4,6 +4,7 @@ import { chargeStateText } from "@shared/content/charge-states.ts";
 import type { DiagnosisResult, Finding } from "@shared/schemas/diagnosis.ts";
 import { CHARGE_STATE_ICONS, chargeStateTone } from "@/components/ui/state/charge-state-badge.tsx";
 import { cn } from "@/lib/cn.ts";
+import { ChargeEstimate } from "./charge-estimate.tsx";
 
 const DIRECTION: Record<Finding["direction"], { icon: LucideIcon; word: string }> = {
   low: { icon: ArrowDown, word: "low" },
@@ -52,6 +53,7 @@ export function FindingPanel({ result, pending = false, expanded = false }: { re
               {alternatives.map((alternative) => `${chargeStateText[alternative.state].title} (${Math.round(alternative.confidence * 100)} %)`).join("; ")}
             </p>
           )}
+          <ChargeEstimate result={result} />
         </div>
       </div>
 

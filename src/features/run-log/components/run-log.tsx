@@ -12,9 +12,17 @@ import { useCreateReading } from "@/lib/api/visits.ts";
 import { formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { useLiveDiagnosis, type CircuitContext } from "../hooks/use-live-diagnosis.ts";
 import { circuitSeries } from "../utils/circuit-series.ts";
-import { draftFromInput, emptyDraft, parseDraft, REQUIRED_FIELDS, type DraftField, type ReadingDraft } from "../utils/reading-draft.ts";
+import {
+  draftFromInput,
+  emptyDraft,
+  parseDraft,
+  REQUIRED_FIELDS,
+  type DraftField,
+  type ReadingDraft,
+} from "../utils/reading-draft.ts";
 import { runMinutesAt, runTimeBase } from "../utils/run-time-base.ts";
 import { AdjustmentForm } from "./adjustment-form.tsx";
+import { ChargingPlanPanel } from "./charging-plan-panel.tsx";
 import { CsvImport } from "./csv-import.tsx";
 import { FindingPanel } from "./finding-panel.tsx";
 import { MeasuredCyclePanel } from "./measured-cycle-panel.tsx";
@@ -50,10 +58,15 @@ interface RunLogProps {
  */
 export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, canWrite, readOnlyNote }: RunLogProps) {
   const atmosphericKPa = atmosphere.pressureKPa;
-  const series = useMemo(() => circuitSeries(visit.readings, visit.adjustments, circuit), [visit.readings, visit.adjustments, circuit]);
+  const series = useMemo(
+    () => circuitSeries(visit.readings, visit.adjustments, circuit),
+    [visit.readings, visit.adjustments, circuit],
+  );
   const lastInput = series.readings.at(-1)?.input;
   // Last values carried forward, so a new reading changes only what moved.
-  const [draft, setDraft] = useState<ReadingDraft>(() => (lastInput ? { ...draftFromInput(lastInput, units, atmosphericKPa), runMinutes: "" } : emptyDraft()));
+  const [draft, setDraft] = useState<ReadingDraft>(() =>
+    lastInput ? { ...draftFromInput(lastInput, units, atmosphericKPa), runMinutes: "" } : emptyDraft(),
+  );
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
   const [savedAt, setSavedAt] = useState<string | null>(null);
@@ -63,17 +76,21 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
 
   // Run time counts on by itself from the last reading or adjustment unless typed over.
   const autoRunMinutes = runMinutesAt(runTimeBase(series), now);
-  const effectiveDraft = draft.runMinutes === "" && autoRunMinutes !== null ? { ...draft, runMinutes: String(autoRunMinutes) } : draft;
+  const effectiveDraft =
+    draft.runMinutes === "" && autoRunMinutes !== null ? { ...draft, runMinutes: String(autoRunMinutes) } : draft;
   const live = useLiveDiagnosis(effectiveDraft, context, units, atmosphericKPa);
   const fieldErrors = { ...live.fieldErrors, ...serverErrors };
   const shownResult = live.kind === "ready" ? live.result : (series.readings.at(-1)?.result ?? null);
+  const shownInput = live.kind === "ready" ? live.input : (series.readings.at(-1)?.input ?? null);
 
   const setField = (field: DraftField, value: string) => {
     setDraft((current) => ({ ...current, [field]: value }));
     setServerErrors(({ [field]: _dropped, ...rest }) => rest);
   };
-  const setLocation = (liquidTempLocation: LiquidTempLocation) => setDraft((current) => ({ ...current, liquidTempLocation }));
-  const setSuctionLocation = (suctionTempLocation: SuctionLocationChoice) => setDraft((current) => ({ ...current, suctionTempLocation }));
+  const setLocation = (liquidTempLocation: LiquidTempLocation) =>
+    setDraft((current) => ({ ...current, liquidTempLocation }));
+  const setSuctionLocation = (suctionTempLocation: SuctionLocationChoice) =>
+    setDraft((current) => ({ ...current, suctionTempLocation }));
 
   const save = async () => {
     setFormError(null);
@@ -114,7 +131,9 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
         ) : (
           <section aria-label="Finding" className="rounded-card border-2 border-dashed border-rule p-4">
             <h2 className="text-xl font-semibold">Enter the readings</h2>
-            <p className="text-muted">Suction and liquid pressures with their line temperatures give the first finding.</p>
+            <p className="text-muted">
+              Suction and liquid pressures with their line temperatures give the first finding.
+            </p>
           </section>
         )}
       </PanelBoundary>
@@ -122,7 +141,8 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
       <p className="flex items-start gap-2 text-sm text-muted" data-testid="atmosphere-line">
         <Mountain aria-hidden className="mt-0.5 size-4 shrink-0" />
         <span>
-          Gauge pressures against <span className="num">{formatNumber(atmosphericKPa, 1)} kPa</span> absolute: {atmosphere.description}.
+          Gauge pressures against <span className="num">{formatNumber(atmosphericKPa, 1)} kPa</span> absolute:{" "}
+          {atmosphere.description}.
         </span>
       </p>
 
@@ -135,7 +155,8 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
         className="space-y-3"
       >
         <ReadingCards
-onSuctionLocation={setSuctionLocation}           draft={effectiveDraft}
+          onSuctionLocation={setSuctionLocation}
+          draft={effectiveDraft}
           onField={setField}
           onLocation={setLocation}
           fieldErrors={fieldErrors}
@@ -162,6 +183,12 @@ onSuctionLocation={setSuctionLocation}           draft={effectiveDraft}
           <p className="text-muted">{readOnlyNote}</p>
         )}
       </form>
+
+      {shownInput && shownResult && (
+        <PanelBoundary>
+          <ChargingPlanPanel result={shownResult} input={shownInput} series={series} isBlend={isBlend} />
+        </PanelBoundary>
+      )}
 
       <MeasuredCyclePanel
         mode="run-log"
@@ -190,7 +217,9 @@ onSuctionLocation={setSuctionLocation}           draft={effectiveDraft}
       </section>
 
       <details className="rounded-card border-2 border-rule bg-surface p-4">
-        <summary className="min-h-touch cursor-pointer py-2 text-lg font-semibold">Recorded entries (to check or void)</summary>
+        <summary className="min-h-touch cursor-pointer py-2 text-lg font-semibold">
+          Recorded entries (to check or void)
+        </summary>
         <RecordedEntries
           visitId={visit.id}
           circuit={circuit}
@@ -212,7 +241,9 @@ onSuctionLocation={setSuctionLocation}           draft={effectiveDraft}
       )}
       {canWrite && (
         <details className="rounded-card border-2 border-rule bg-surface p-4">
-          <summary className="min-h-touch cursor-pointer py-2 text-lg font-semibold">Import a logged series (CSV)</summary>
+          <summary className="min-h-touch cursor-pointer py-2 text-lg font-semibold">
+            Import a logged series (CSV)
+          </summary>
           <CsvImport visitId={visit.id} circuit={circuit} />
         </details>
       )}
