@@ -26,5 +26,8 @@ registerBench("charge diagnosis", () => {
 
   report(`diagnose(), ${measured.length} worked cases (wet bulb measured or none)`, nanosecondsPerCall((i) => score(measured[i % measured.length]!), ITERATIONS));
   report(`diagnose(), ${humidity.length} case(s) with wet bulb from RH (psychrolib)`, nanosecondsPerCall((i) => score(humidity[i % humidity.length]!), ITERATIONS / 4), false);
+  // The same cases as circuits with a known correct charge (3.2 kg, 7.5 m line set): the charge estimate joins every result.
+  const withCharge = measured.map((input) => ({ ...input, chargeKg: 3.2, liquidLineLengthM: 7.5 }));
+  report(`diagnose() with the charge estimate (chargeKg), ${withCharge.length} cases`, nanosecondsPerCall((i) => score(withCharge[i % withCharge.length]!), ITERATIONS));
   report("  of which input validation (zod parse)", nanosecondsPerCall((i) => (DiagnosisInputSchema.parse(measured[i % measured.length]!).suctionPressureKPa > 0 ? 1 : 0), ITERATIONS), false);
 });
