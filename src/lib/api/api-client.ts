@@ -30,15 +30,23 @@ interface RequestOptions<T> {
   ifMatch?: number;
 }
 
+/** A write that has had no answer by then is reported as not confirmed, so no form waits for ever. */
+export const WRITE_TIMEOUT_MS = 20_000;
+
 /**
  * The one fetch wrapper of the client: JSON in and out, same-origin cookies, and a typed
- * ApiError with the server's message on any non-2xx answer.
+ * ApiError with the server's message on any non-2xx answer. Writes without a connection fail at
+ * once; writes without an answer within WRITE_TIMEOUT_MS fail with a message that says so.
  */
 export async function apiRequest<T = unknown>(path: string, options: RequestOptions<T> = {}): Promise<T> {
   const { method = "GET", body, schema, signal, ifMatch } = options;
   const headers: Record<string, string> = { Accept: "application/json" };
   if (body !== undefined) headers["Content-Type"] = "application/json";
   if (ifMatch !== undefined) headers["If-Match"] = `"${ifMatch}"`;
+  const write = method !== "GET";
+  if (write && typeof navigator !== "undefined" && navigator.onLine === false) {
+    throw new ApiError(0, "No connection: nothing was saved. Your values are kept here; save again when the signal is back.");
+  }
   let response: Response;
   try {
     response = await fetch(`/api${path}`, {
@@ -46,11 +54,15 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
       credentials: "same-origin",
       headers,
       body: body === undefined ? undefined : JSON.stringify(body),
-      signal,
+      signal: signal ?? (write ? AbortSignal.timeout(WRITE_TIMEOUT_MS) : undefined),
     });
   } catch (error) {
-    if ((error as Error).name === "AbortError") throw error;
-    throw new ApiError(0, "No connection to the Satura server. Check the network and try again.");
+    const name = (error as Error).name;
+    if (name === "TimeoutError") {
+      throw new ApiError(0, `No answer from the Satura server within ${WRITE_TIMEOUT_MS / 1000} s, so this was not confirmed saved. Your values are kept; check the list before saving again.`);
+    }
+    if (name === "AbortError") throw error;
+    throw new ApiError(0, "No connection to the Satura server: nothing was confirmed saved. Check the network and try again.");
   }
 
   if (response.status === 204) return undefined as T;

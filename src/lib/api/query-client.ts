@@ -29,7 +29,10 @@ export function createQueryClient(): QueryClient {
     }),
     defaultOptions: {
       queries: { staleTime: 30_000, retry: shouldRetry, refetchOnWindowFocus: true },
-      mutations: { retry: false },
+      // A write is sent at once and fails at once without a connection: TanStack's default
+      // ("online") would hold it silently and send it minutes later, stamped with the
+      // reconnect time. The form keeps the values and says it was not saved.
+      mutations: { retry: false, networkMode: "always" },
     },
   });
 }

@@ -4,6 +4,7 @@ import { ROLE_LABELS } from "@shared/schemas/auth.ts";
 import { paths } from "@/config/paths.ts";
 import { useMe, useSignOut } from "@/lib/api/auth.ts";
 import { cn } from "@/lib/cn.ts";
+import { clearAllDrafts, countDrafts } from "@/lib/drafts/draft-store.ts";
 
 /** Who is signed in (name and role, in words) and the sign-out button. */
 export function UserMenu({ compact = false, className }: { compact?: boolean; className?: string }) {
@@ -14,7 +15,14 @@ export function UserMenu({ compact = false, className }: { compact?: boolean; cl
   if (!user) return null;
 
   const onSignOut = () => {
-    signOut.mutate(undefined, { onSettled: () => navigate(paths.signIn.getHref(), { replace: true }) });
+    // Unsaved values are kept on this device per form; signing out would hand them to the next
+    // person on a shared tablet, so it asks first and then clears them.
+    const drafts = countDrafts();
+    if (drafts > 0 && !window.confirm(`${drafts === 1 ? "One form holds" : `${drafts} forms hold`} values that are not saved yet. Sign out and discard them?`)) return;
+    signOut.mutate(undefined, {
+      onSuccess: () => clearAllDrafts(),
+      onSettled: () => navigate(paths.signIn.getHref(), { replace: true }),
+    });
   };
 
   return (

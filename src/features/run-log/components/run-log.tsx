@@ -9,6 +9,7 @@ import { FormAlert } from "@/components/ui/field/field.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateReading } from "@/lib/api/visits.ts";
+import { useStoredDraft } from "@/lib/drafts/use-stored-draft.ts";
 import { formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { useLiveDiagnosis, type CircuitContext } from "../hooks/use-live-diagnosis.ts";
 import { circuitSeries } from "../utils/circuit-series.ts";
@@ -63,10 +64,14 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
     [visit.readings, visit.adjustments, circuit],
   );
   const lastInput = series.readings.at(-1)?.input;
-  // Last values carried forward, so a new reading changes only what moved.
-  const [draft, setDraft] = useState<ReadingDraft>(() =>
+  // Last values carried forward, so a new reading changes only what moved. What is typed is
+  // kept on the device (per visit, circuit and display units) until it is saved: a switch of
+  // section or circuit, a reload or a dropped page loses nothing.
+  const stored = useStoredDraft<ReadingDraft>(`run-log:${visit.id}:${circuit}:${units.temperature}-${units.pressure}`, () =>
     lastInput ? { ...draftFromInput(lastInput, units, atmosphericKPa), runMinutes: "" } : emptyDraft(),
   );
+  const draft = stored.value;
+  const setDraft = stored.update;
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
   const [savedAt, setSavedAt] = useState<string | null>(null);
@@ -105,12 +110,14 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
       return;
     }
     const { values } = parseDraft(effectiveDraft, units, atmosphericKPa);
+    // The reading keeps the time it was taken, however long the answer takes.
+    const takenAt = new Date().toISOString();
     try {
       // Measured values only: the server adds the nameplate targets, the RLA and the site's atmosphere.
-      const reading = await createReading.mutateAsync({ visitId: visit.id, circuit, ...(values as MeasuredValues) });
+      const reading = await createReading.mutateAsync({ visitId: visit.id, circuit, takenAt, ...(values as MeasuredValues) });
       setSavedAt(reading.takenAt);
       setServerErrors({});
-      setDraft((current) => ({ ...current, runMinutes: "" }));
+      stored.discard((current) => ({ ...current, runMinutes: "" }));
     } catch (error) {
       if (error instanceof ApiError && Object.keys(error.fields).length > 0) {
         setServerErrors(error.fields);
@@ -174,6 +181,8 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
             <span className="text-sm text-muted" aria-live="polite">
               {savedAt
                 ? `✓ Saved at ${new Date(savedAt).toLocaleTimeString()} — values stay for the next reading`
+                : stored.restored
+                  ? "Values typed earlier on this device are back — not saved yet"
                 : missingRequired.length > 0
                   ? `${missingRequired.length} required field(s) to go`
                   : "Values carry forward: change only what moved"}
