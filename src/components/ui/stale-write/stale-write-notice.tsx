@@ -19,7 +19,10 @@ interface StaleWriteNoticeProps {
 export function StaleWriteNotice({ message, onReload, reloading = false, typed = [] }: StaleWriteNoticeProps) {
   const box = useRef<HTMLDivElement>(null);
   // On a phone the save button is far below: bring the notice into view when it appears.
-  useEffect(() => box.current?.scrollIntoView?.({ block: "nearest", behavior: "smooth" }), []);
+  // Braces: newer browsers return a promise from scrollIntoView, and an effect may return only a cleanup.
+  useEffect(() => {
+    box.current?.scrollIntoView?.({ block: "nearest", behavior: "smooth" });
+  }, []);
   return (
     <div ref={box} role="alert" className="space-y-3 rounded-card border-2 border-caution bg-surface p-3">
       <p className="font-medium">⚠ {message}</p>

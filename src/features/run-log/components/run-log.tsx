@@ -88,7 +88,10 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
   const shownResult = live.kind === "ready" ? live.result : (series.readings.at(-1)?.result ?? null);
   const shownInput = live.kind === "ready" ? live.input : (series.readings.at(-1)?.input ?? null);
 
+  // A save that failed keeps the time the reading was taken for the next try, until a value changes.
+  const [pendingTakenAt, setPendingTakenAt] = useState<string | null>(null);
   const setField = (field: DraftField, value: string) => {
+    setPendingTakenAt(null);
     setDraft((current) => ({ ...current, [field]: value }));
     setServerErrors(({ [field]: _dropped, ...rest }) => rest);
   };
@@ -110,15 +113,17 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
       return;
     }
     const { values } = parseDraft(effectiveDraft, units, atmosphericKPa);
-    // The reading keeps the time it was taken, however long the answer takes.
-    const takenAt = new Date().toISOString();
+    // The reading keeps the time it was taken, however long the answer takes or how often the save is tried.
+    const takenAt = pendingTakenAt ?? new Date().toISOString();
     try {
       // Measured values only: the server adds the nameplate targets, the RLA and the site's atmosphere.
       const reading = await createReading.mutateAsync({ visitId: visit.id, circuit, takenAt, ...(values as MeasuredValues) });
       setSavedAt(reading.takenAt);
       setServerErrors({});
       stored.discard((current) => ({ ...current, runMinutes: "" }));
+      setPendingTakenAt(null);
     } catch (error) {
+      setPendingTakenAt(takenAt);
       if (error instanceof ApiError && Object.keys(error.fields).length > 0) {
         setServerErrors(error.fields);
         setFormError(error.message);
