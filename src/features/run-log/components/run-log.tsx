@@ -1,5 +1,5 @@
 import { Mountain, Save } from "lucide-react";
-import { useMemo, useState } from "react";
+import { useMemo, useRef, useState } from "react";
 import type { LiquidTempLocation } from "@shared/schemas/diagnosis.ts";
 import type { SuctionLocationChoice } from "../utils/reading-draft.ts";
 import type { Atmosphere, MeasuredValues, Visit } from "@shared/schemas/visits.ts";
@@ -26,6 +26,7 @@ import { AdjustmentForm } from "./adjustment-form.tsx";
 import { ChargingPlanPanel } from "./charging-plan-panel.tsx";
 import { CsvImport } from "./csv-import.tsx";
 import { FindingPanel } from "./finding-panel.tsx";
+import { LiveLine } from "./live-line.tsx";
 import { MeasuredCyclePanel } from "./measured-cycle-panel.tsx";
 import { RecordedEntries } from "./recorded-entries.tsx";
 import { ReadingCards } from "./reading-cards.tsx";
@@ -67,8 +68,9 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
   // Last values carried forward, so a new reading changes only what moved. What is typed is
   // kept on the device (per visit, circuit and display units) until it is saved: a switch of
   // section or circuit, a reload or a dropped page loses nothing.
-  const stored = useStoredDraft<ReadingDraft>(`run-log:${visit.id}:${circuit}:${units.temperature}-${units.pressure}`, () =>
-    lastInput ? { ...draftFromInput(lastInput, units, atmosphericKPa), runMinutes: "" } : emptyDraft(),
+  const stored = useStoredDraft<ReadingDraft>(
+    `run-log:${visit.id}:${circuit}:${units.temperature}-${units.pressure}`,
+    () => (lastInput ? { ...draftFromInput(lastInput, units, atmosphericKPa), runMinutes: "" } : emptyDraft()),
   );
   const draft = stored.value;
   const setDraft = stored.update;
@@ -85,7 +87,9 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
     draft.runMinutes === "" && autoRunMinutes !== null ? { ...draft, runMinutes: String(autoRunMinutes) } : draft;
   const live = useLiveDiagnosis(effectiveDraft, context, units, atmosphericKPa);
   const fieldErrors = { ...live.fieldErrors, ...serverErrors };
-  const shownResult = live.kind === "ready" ? live.result : (series.readings.at(-1)?.result ?? null);
+  const lastReading = series.readings.at(-1);
+  const shownResult = live.kind === "ready" ? live.result : (lastReading?.result ?? null);
+  const findingRef = useRef<HTMLDivElement>(null);
   const shownInput = live.kind === "ready" ? live.input : (series.readings.at(-1)?.input ?? null);
 
   // A save that failed keeps the time the reading was taken for the next try, until a value changes.
@@ -117,7 +121,12 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
     const takenAt = pendingTakenAt ?? new Date().toISOString();
     try {
       // Measured values only: the server adds the nameplate targets, the RLA and the site's atmosphere.
-      const reading = await createReading.mutateAsync({ visitId: visit.id, circuit, takenAt, ...(values as MeasuredValues) });
+      const reading = await createReading.mutateAsync({
+        visitId: visit.id,
+        circuit,
+        takenAt,
+        ...(values as MeasuredValues),
+      });
       setSavedAt(reading.takenAt);
       setServerErrors({});
       stored.discard((current) => ({ ...current, runMinutes: "" }));
@@ -138,8 +147,21 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
   return (
     <div className="space-y-4">
       <PanelBoundary>
+        {live.kind !== "ready" && shownResult && lastReading && (
+          <p
+            role="status"
+            className="rounded-card border-2 border-caution p-2 text-sm font-medium"
+            data-testid="finding-waits"
+          >
+            Waiting for the readings: the finding below is the last saved reading&apos;s (
+            {new Date(lastReading.takenAt).toLocaleTimeString([], { hour: "2-digit", minute: "2-digit" })}), not the
+            values on screen now.
+          </p>
+        )}
         {shownResult ? (
-          <FindingPanel result={shownResult} pending={live.kind !== "ready"} />
+          <div ref={findingRef} className="scroll-mt-4">
+            <FindingPanel result={shownResult} pending={live.kind !== "ready"} />
+          </div>
         ) : (
           <section aria-label="Finding" className="rounded-card border-2 border-dashed border-rule p-4">
             <h2 className="text-xl font-semibold">Enter the readings</h2>
@@ -179,19 +201,27 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
         />
         {formError && <FormAlert>{formError}</FormAlert>}
         {canWrite ? (
-          <div className="sticky bottom-20 z-30 flex flex-wrap items-center gap-3 rounded-card border-2 border-ink bg-surface p-3 md:bottom-2">
-            <Button type="submit" size="lg" disabled={createReading.isPending} className="min-w-48">
-              <Save aria-hidden className="size-5" /> {createReading.isPending ? "Saving…" : "Save reading"}
-            </Button>
-            <span className="text-sm text-muted" aria-live="polite">
-              {savedAt
-                ? `✓ Saved at ${new Date(savedAt).toLocaleTimeString()} — values stay for the next reading`
-                : stored.restored
-                  ? "Values typed earlier on this device are back — not saved yet"
-                : missingRequired.length > 0
-                  ? `${missingRequired.length} required field(s) to go`
-                  : "Values carry forward: change only what moved"}
-            </span>
+          <div className="sticky bottom-20 z-30 space-y-1 rounded-card border-2 border-ink bg-surface px-3 py-2 md:bottom-2">
+            <LiveLine
+              result={live.kind === "ready" ? live.result : null}
+              trend={series.trend}
+              units={units}
+              onOpen={() => findingRef.current?.scrollIntoView({ block: "start", behavior: "smooth" })}
+            />
+            <div className="flex items-center gap-3">
+              <Button type="submit" size="lg" disabled={createReading.isPending} className="min-w-40 shrink-0">
+                <Save aria-hidden className="size-5" /> {createReading.isPending ? "Saving…" : "Save reading"}
+              </Button>
+              <span className="line-clamp-2 text-xs text-muted sm:text-sm" aria-live="polite">
+                {savedAt
+                  ? `✓ Saved at ${new Date(savedAt).toLocaleTimeString()} — values stay for the next reading`
+                  : stored.restored
+                    ? "Values typed earlier on this device are back — not saved yet"
+                    : missingRequired.length > 0
+                      ? `${missingRequired.length} required field(s) to go`
+                      : "Values carry forward: change only what moved"}
+              </span>
+            </div>
           </div>
         ) : (
           <p className="text-muted">{readOnlyNote}</p>
