@@ -1,0 +1,46 @@
+import { fixedOrificeTargetSuperheat } from "../../shared/engine/index.ts";
+import { DESIGN_CONDITIONS, type ChargeCircuit, type InventoryMeteringDevice } from "./charge-circuit.ts";
+
+/** Liquid line inner diameters, m: 1/4, 5/16 and 3/8 in copper (0.76 mm wall) — common line sets. */
+const LIQUID_LINE_INNER_DIAMETERS_M = [0.00483, 0.00643, 0.00800];
+
+/**
+ * Draws one plausible split air conditioner for the charge-inventory model. Ranges are from
+ * memory of residential and light-commercial units (2–14 kW), not from a product list:
+ * condenser 1.5–5 L (microchannel to round-tube), evaporator 1–3 L, line set 3–25 m, condensing
+ * 8–14 K over outdoor air, evaporating 15–21 K under return air, subcooled zone 1.5–3 % of the
+ * condenser per kelvin of design subcooling, superheated zone 1.5–2.5 % of the evaporator per
+ * kelvin of design superheat, valve reserve 1.15–1.5, orifice gain 1–2 % per kelvin.
+ * Design subcooling: TXV/EEV 4–8 K (nameplate targets, TRADE.md §1.3); fixed orifice 3–6 K.
+ * Design superheat: TXV/EEV 4–7 K; fixed orifice the charging-chart target at the design point
+ * (`fixedOrificeTargetSuperheat`, TRADE.md §1.4), so the correct charge reads on target there.
+ *
+ * @param random uniform [0, 1) source (seededRandom for a repeatable run)
+ */
+export function drawChargeCircuit(refrigerant: string, meteringDevice: InventoryMeteringDevice, random: () => number): ChargeCircuit {
+  const between = (low: number, high: number) => low + (high - low) * random();
+  const fixed = meteringDevice === "fixed-orifice";
+  const designSubcoolingK = fixed ? between(3, 6) : between(4, 8);
+  const chart = fixedOrificeTargetSuperheat(DESIGN_CONDITIONS.returnWetBulbC, DESIGN_CONDITIONS.outdoorAirC);
+  const designSuperheatK = fixed && chart.status === "ok" ? chart.targetK : between(4, 7);
+  const evaporatorTemperatureDifferenceK = between(15, 21);
+  return {
+    refrigerant,
+    meteringDevice,
+    condenserVolumeM3: between(1.5, 5) / 1000,
+    evaporatorVolumeM3: between(1, 3) / 1000,
+    liquidLineLengthM: between(3, 25),
+    liquidLineInnerDiameterM: LIQUID_LINE_INNER_DIAMETERS_M[Math.floor(random() * LIQUID_LINE_INNER_DIAMETERS_M.length)]!,
+    suctionLineInnerDiameterM: between(0.011, 0.0175),
+    compressorAllowanceKg: between(0.08, 0.3),
+    desuperheatingShare: between(0.05, 0.12),
+    condensingOverAmbientK: between(Math.max(8, designSubcoolingK + 3), 14),
+    evaporatorTemperatureDifferenceK,
+    designSubcoolingK,
+    designSubcooledShare: designSubcoolingK * between(0.015, 0.03),
+    designSuperheatK,
+    designSuperheatedShare: designSuperheatK * between(0.015, 0.025),
+    valveReserve: between(1.15, 1.5),
+    orificeSubcoolingGainPerK: between(0.01, 0.02),
+  };
+}
