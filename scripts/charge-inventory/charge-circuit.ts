@@ -27,6 +27,12 @@ export interface ChargeCircuit {
   /** Subcooling at the design point, K, and the share of the condenser volume it takes. */
   designSubcoolingK: number;
   designSubcooledShare: number;
+  /**
+   * Nameplate target subcooling minus the subcooling this circuit really shows at its correct
+   * charge at the design point, K: the label is written for a nominal unit and line set, and
+   * installers accept about ±1.7 K around it (Title 24 tolerance, TRADE.md §1.3, from memory).
+   */
+  nameplateSubcoolingOffsetK: number;
   /** Superheat at the design point, K, and the share of the evaporator volume it takes. */
   designSuperheatK: number;
   designSuperheatedShare: number;

@@ -143,19 +143,3 @@ export function operatingPointAt(circuit: ChargeCircuit, conditions: InventoryCo
   };
 }
 
-/**
- * The design point's flow figures: the operating point at the design conditions and design
- * subcooled share, before any device closure.
- */
-export function designFlowOf(circuit: ChargeCircuit, conditions: InventoryConditions): DesignFlow {
-  const point = operatingPointAt(circuit, conditions, circuit.designSubcooledShare, null);
-  const refrigerant = circuit.refrigerant;
-  const high = saturatedPhasesAtPressure(refrigerant, point.condensingPressureKPa);
-  const liquid = point.subcoolingK > SATURATED_WITHIN_K ? singlePhaseState(refrigerant, point.condensingPressureKPa, point.liquidLineC) : high.liquid;
-  const low = saturatedPhasesAtPressure(refrigerant, point.evaporatingPressureKPa);
-  const orificeGain = circuit.meteringDevice === "fixed-orifice" ? 1 + circuit.orificeSubcoolingGainPerK * point.subcoolingK : 1;
-  return {
-    flowFactor: Math.sqrt(liquid.densityKgPerM3 * (point.condensingPressureKPa - point.evaporatingPressureKPa)) * orificeGain,
-    twoPhaseEnthalpyRiseKJPerKg: low.vapour.enthalpyKJPerKg - liquid.enthalpyKJPerKg,
-  };
-}
