@@ -112,7 +112,7 @@ for (const refrigerant of REFRIGERANTS) {
               const estimate = result.chargeDeviation;
               if (DUMP && estimate)
                 dumped.push(
-                  [refrigerant, device, basis, outdoorAirC, returnAirC, deviation, correctKg.toFixed(3), trueKg.toFixed(3), estimate.kg, estimate.lowKg, estimate.highKg, result.subcoolingK?.toFixed(2), result.superheatK?.toFixed(2), basis === "generic" ? input.targetSubcoolingK : chargeReference.subcoolingK.toFixed(2), chargeReference.superheatK.toFixed(2), point.valveWideOpen].join(","),
+                  [refrigerant, device, basis, outdoorAirC, returnAirC, deviation, correctKg.toFixed(3), trueKg.toFixed(3), estimate.kg, estimate.lowKg, estimate.highKg, result.subcoolingK?.toFixed(2), result.superheatK?.toFixed(2), basis === "generic" ? (result.targets.subcooling?.targetK.toFixed(2) ?? "") : chargeReference.subcoolingK.toFixed(2), chargeReference.superheatK.toFixed(2), point.valveWideOpen].join(","),
                 );
               for (const key of keys) {
                 const entry = tally(key);

@@ -31,8 +31,9 @@ export interface ChargeCircuit {
    * Nameplate target subcooling minus the subcooling this circuit really shows at its correct
    * charge at the design point, K: the label is written for a nominal unit and line set, and
    * installers accept about ±1.7 K around it (Title 24 tolerance, TRADE.md §1.3, from memory).
+   * Null when the label gives no target (the engine then falls back on its default band).
    */
-  nameplateSubcoolingOffsetK: number;
+  nameplateSubcoolingOffsetK: number | null;
   /** Superheat at the design point, K, and the share of the evaporator volume it takes. */
   designSuperheatK: number;
   designSuperheatedShare: number;

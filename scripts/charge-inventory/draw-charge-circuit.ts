@@ -4,6 +4,9 @@ import { DESIGN_CONDITIONS, type ChargeCircuit, type InventoryMeteringDevice } f
 /** Liquid line inner diameters, m: 1/4, 5/16 and 3/8 in copper (0.76 mm wall) — common line sets. */
 const LIQUID_LINE_INNER_DIAMETERS_M = [0.00483, 0.00643, 0.00800];
 
+/** Share of circuits whose label gives no target subcooling. */
+const NO_NAMEPLATE_TARGET_SHARE = 0.25;
+
 /**
  * Draws one plausible split air conditioner for the charge-inventory model. Ranges are from
  * memory of residential and light-commercial units (2–14 kW), not from a product list:
@@ -12,7 +15,8 @@ const LIQUID_LINE_INNER_DIAMETERS_M = [0.00483, 0.00643, 0.00800];
  * condenser per kelvin of design subcooling, superheated zone 1.5–2.5 % of the evaporator per
  * kelvin of design superheat, valve reserve 1.15–1.5, orifice gain 1–2 % per kelvin.
  * The nameplate target subcooling differs from the circuit's own by up to ±1.5 K (a label is
- * written for a nominal unit and line set; Title 24 accepts ±1.7 K around it, from memory).
+ * written for a nominal unit and line set; Title 24 accepts ±1.7 K around it, from memory);
+ * one label in four gives none (as the diagnosis validation draws them).
  * Design subcooling: TXV/EEV 4–8 K (nameplate targets, TRADE.md §1.3); fixed orifice 3–6 K.
  * Design superheat: TXV/EEV 4–7 K; fixed orifice the charging-chart target at the design point
  * (`fixedOrificeTargetSuperheat`, TRADE.md §1.4), so the correct charge reads on target there.
@@ -40,7 +44,7 @@ export function drawChargeCircuit(refrigerant: string, meteringDevice: Inventory
     evaporatorTemperatureDifferenceK,
     designSubcoolingK,
     designSubcooledShare: designSubcoolingK * between(0.015, 0.03),
-    nameplateSubcoolingOffsetK: between(-1.5, 1.5),
+    nameplateSubcoolingOffsetK: random() < NO_NAMEPLATE_TARGET_SHARE ? null : between(-1.5, 1.5),
     designSuperheatK,
     designSuperheatedShare: designSuperheatK * between(0.015, 0.025),
     valveReserve: between(1.15, 1.5),

@@ -13,8 +13,8 @@ export interface ReadingScatter {
  * The gauge and probe readings a technician would take on the model's operating point, as a
  * diagnose() input: suction and liquid gauge pressures at the standard atmosphere, suction line
  * at the evaporator outlet (dew point + superheat; no suction-line heat gain in the model), liquid
- * line at the condenser outlet, outdoor and return air, the nameplate subcooling target (the
- * circuit's own ± its nameplate offset), the
+ * line at the condenser outlet, outdoor and return air, the nameplate subcooling target when the
+ * label has one (the circuit's own ± its nameplate offset), the
  * correct charge and the line length, settled (20 minutes' run).
  *
  * Units: kPa gauge, °C, K, kg, m.
@@ -39,7 +39,9 @@ export function inventoryReadings(
     outdoorAirDryBulbC: conditions.outdoorAirC,
     returnAirDryBulbC: conditions.returnAirC,
     returnAirWetBulbC: conditions.returnWetBulbC,
-    targetSubcoolingK: Math.max(1, Math.round((circuit.designSubcoolingK + circuit.nameplateSubcoolingOffsetK) * 10) / 10),
+    ...(circuit.nameplateSubcoolingOffsetK === null
+      ? {}
+      : { targetSubcoolingK: Math.max(1, Math.round((circuit.designSubcoolingK + circuit.nameplateSubcoolingOffsetK) * 10) / 10) }),
     application: "comfort-cooling",
     runMinutes: 20,
     chargeKg: Math.round(correctChargeKg * 100) / 100,
