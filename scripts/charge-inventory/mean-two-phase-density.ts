@@ -15,7 +15,7 @@ const PANELS = 64;
  * Units: kg/m³ in and out; qualities 0–1, low < high (equal returns the local density).
  *
  * @throws never
- * @example meanTwoPhaseDensity(0, 1, 100, 1000) // ≈ 230 kg/m³ (R410A-like condenser densities)
+ * @example meanTwoPhaseDensity(0, 1, 100, 1000) // ≈ 336.4 kg/m³ (homogeneous would give 255.8)
  */
 export function meanTwoPhaseDensity(qualityLow: number, qualityHigh: number, vapourDensity: number, liquidDensity: number): number {
   const local = (quality: number) => {
