@@ -7,6 +7,9 @@ const LIQUID_LINE_INNER_DIAMETERS_M = [0.00483, 0.00643, 0.00800];
 /** Share of circuits whose label gives no target subcooling. */
 const NO_NAMEPLATE_TARGET_SHARE = 0.25;
 
+/** Share of the condenser the subcooled zone takes per kelvin of design subcooling (from memory: ε-NTU of a round-tube coil's last passes). */
+export const SUBCOOLED_SHARE_PER_K: readonly [number, number] = [0.015, 0.03];
+
 /**
  * Draws one plausible split air conditioner for the charge-inventory model. Ranges are from
  * memory of residential and light-commercial units (2–14 kW), not from a product list:
@@ -21,9 +24,19 @@ const NO_NAMEPLATE_TARGET_SHARE = 0.25;
  * Design superheat: TXV/EEV 4–7 K; fixed orifice the charging-chart target at the design point
  * (`fixedOrificeTargetSuperheat`, TRADE.md §1.4), so the correct charge reads on target there.
  *
+ * The subcooled share per kelvin sets how many kilograms a kelvin of subcooling is worth (the
+ * slope k_ch the estimate must know), so the validation can be rerun with another range to see
+ * how much the figures rest on it.
+ *
  * @param random uniform [0, 1) source (seededRandom for a repeatable run)
+ * @param subcooledSharePerK low and high of the subcooled zone's share per kelvin
  */
-export function drawChargeCircuit(refrigerant: string, meteringDevice: InventoryMeteringDevice, random: () => number): ChargeCircuit {
+export function drawChargeCircuit(
+  refrigerant: string,
+  meteringDevice: InventoryMeteringDevice,
+  random: () => number,
+  subcooledSharePerK: readonly [number, number] = SUBCOOLED_SHARE_PER_K,
+): ChargeCircuit {
   const between = (low: number, high: number) => low + (high - low) * random();
   const fixed = meteringDevice === "fixed-orifice";
   const designSubcoolingK = fixed ? between(3, 6) : between(4, 8);
@@ -43,7 +56,7 @@ export function drawChargeCircuit(refrigerant: string, meteringDevice: Inventory
     condensingOverAmbientK: between(Math.max(8, designSubcoolingK + 3), 14),
     evaporatorTemperatureDifferenceK,
     designSubcoolingK,
-    designSubcooledShare: designSubcoolingK * between(0.015, 0.03),
+    designSubcooledShare: designSubcoolingK * between(subcooledSharePerK[0], subcooledSharePerK[1]),
     nameplateSubcoolingOffsetK: random() < NO_NAMEPLATE_TARGET_SHARE ? null : between(-1.5, 1.5),
     designSuperheatK,
     designSuperheatedShare: designSuperheatK * between(0.015, 0.025),

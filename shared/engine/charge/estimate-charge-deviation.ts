@@ -54,7 +54,7 @@ function roundKg(kg: number): number {
  * Source: `VIRTUAL_CHARGE_SOURCE`.
  *
  * @throws never
- * @example estimateChargeDeviation(snapshot).chargeDeviation?.kg // -0.6 for a 3 kg TXV circuit 3 K short of its subcooling target
+ * @example estimateChargeDeviation(snapshot).chargeDeviation // { kg: -0.45, lowKg: -0.75, highKg: -0.1, basis: "generic", … } for a 3 kg R410A TXV circuit with 7.5 m of line reading 2 K against a 6 K target (tests/engine/charge)
  */
 export function estimateChargeDeviation(snapshot: DiagnosisSnapshot): ChargeDeviationEstimate {
   const input = snapshot.input;
