@@ -41,6 +41,8 @@ export interface ChargeCircuit {
   valveReserve: number;
   /** Fractional rise of a fixed orifice's flow per kelvin of inlet subcooling, 1/K. */
   orificeSubcoolingGainPerK: number;
+  /** Void-fraction model of the two-phase zones: Zivi (the model's own) or homogeneous (a check). */
+  voidFraction: "zivi" | "homogeneous";
 }
 
 /** Air conditions around the circuit, °C. */

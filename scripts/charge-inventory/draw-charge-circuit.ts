@@ -62,5 +62,6 @@ export function drawChargeCircuit(
     designSuperheatedShare: designSuperheatK * between(0.015, 0.025),
     valveReserve: between(1.15, 1.5),
     orificeSubcoolingGainPerK: between(0.01, 0.02),
+    voidFraction: "zivi",
   };
 }

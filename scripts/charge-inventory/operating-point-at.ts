@@ -1,5 +1,6 @@
 import { saturatedPhasesAtPressure, saturationPressure, singlePhaseState } from "../../shared/engine/index.ts";
 import type { ChargeCircuit, InventoryConditions, OperatingPoint } from "./charge-circuit.ts";
+import { homogeneousVoidFraction } from "./homogeneous-void-fraction.ts";
 import { meanTwoPhaseDensity } from "./mean-two-phase-density.ts";
 import { ziviVoidFraction } from "./zivi-void-fraction.ts";
 
@@ -46,7 +47,7 @@ const tubeVolume = (innerDiameterM: number, lengthM: number) => (Math.PI / 4) * 
  *   TXV/EEV holds its design superheat while its wide-open flow (valveReserve × design, scaled the
  *   same way) can feed the evaporator; beyond that it is an orifice and the superheat rises.
  * - Mass: desuperheating vapour at the dew point + 15 K; two-phase zones with the Zivi void
- *   fraction and quality linear along the zone (`meanTwoPhaseDensity`; saturated liquid = bubble
+ *   fraction (homogeneous as a check, `circuit.voidFraction`) and quality linear along the zone (`meanTwoPhaseDensity`; saturated liquid = bubble
  *   point, vapour = dew point at the pressure, a simplification for blends); subcooled liquid at
  *   its mean temperature; liquid line at the outlet state; superheated zone and suction line
  *   vapour; compressor allowance constant. Densities from the engine's single-phase tables
@@ -58,6 +59,7 @@ const tubeVolume = (innerDiameterM: number, lengthM: number) => (Math.PI / 4) * 
  */
 export function operatingPointAt(circuit: ChargeCircuit, conditions: InventoryConditions, coordinate: number, design: DesignFlow | null): OperatingPoint {
   const refrigerant = circuit.refrigerant;
+  const voidFraction = circuit.voidFraction === "homogeneous" ? homogeneousVoidFraction : ziviVoidFraction;
   const subcooledShare = Math.max(coordinate, 0);
   const outletQuality = Math.max(-coordinate, 0);
 
@@ -107,15 +109,15 @@ export function operatingPointAt(circuit: ChargeCircuit, conditions: InventoryCo
   const condenserKg =
     circuit.condenserVolumeM3 *
     (circuit.desuperheatingShare * singlePhaseState(refrigerant, condensingPressureKPa, high.vapour.temperatureC + MEAN_DESUPERHEAT_K).densityKgPerM3 +
-      twoPhaseShare * meanTwoPhaseDensity(outletQuality, 1, high.vapour.densityKgPerM3, high.liquid.densityKgPerM3) +
+      twoPhaseShare * meanTwoPhaseDensity(outletQuality, 1, high.vapour.densityKgPerM3, high.liquid.densityKgPerM3, voidFraction) +
       subcooledShare *
         (subcoolingK > SATURATED_WITHIN_K ? singlePhaseState(refrigerant, condensingPressureKPa, condensingBubbleC - subcoolingK / 2).densityKgPerM3 : high.liquid.densityKgPerM3));
-  const lineVoid = ziviVoidFraction(outletQuality, high.vapour.densityKgPerM3, high.liquid.densityKgPerM3);
+  const lineVoid = voidFraction(outletQuality, high.vapour.densityKgPerM3, high.liquid.densityKgPerM3);
   const liquidLineDensity = outletQuality > 0 ? lineVoid * high.vapour.densityKgPerM3 + (1 - lineVoid) * high.liquid.densityKgPerM3 : liquid.densityKgPerM3;
   const liquidLineKg = tubeVolume(circuit.liquidLineInnerDiameterM, circuit.liquidLineLengthM) * liquidLineDensity;
   const evaporatorKg =
     circuit.evaporatorVolumeM3 *
-    ((1 - superheatedShare) * meanTwoPhaseDensity(inletQuality, 1, low.vapour.densityKgPerM3, low.liquid.densityKgPerM3) +
+    ((1 - superheatedShare) * meanTwoPhaseDensity(inletQuality, 1, low.vapour.densityKgPerM3, low.liquid.densityKgPerM3, voidFraction) +
       superheatedShare * vapourAt(evaporatingDewC + superheatK / 2));
   const suctionLineKg = tubeVolume(circuit.suctionLineInnerDiameterM, circuit.liquidLineLengthM + 1) * vapourAt(evaporatingDewC + superheatK);
   const compressorKg = circuit.compressorAllowanceKg;
