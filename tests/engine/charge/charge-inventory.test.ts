@@ -17,6 +17,7 @@ import { inventoryReadings } from "../../../scripts/charge-inventory/inventory-r
 import { meanTwoPhaseDensity } from "../../../scripts/charge-inventory/mean-two-phase-density.ts";
 import { operatingPointAt } from "../../../scripts/charge-inventory/operating-point-at.ts";
 import { solveOperatingPoint } from "../../../scripts/charge-inventory/solve-operating-point.ts";
+import { homogeneousVoidFraction } from "../../../scripts/charge-inventory/homogeneous-void-fraction.ts";
 import { ziviVoidFraction } from "../../../scripts/charge-inventory/zivi-void-fraction.ts";
 
 /** The estimate is rounded to 0.05 kg: a truth within half a step of the range's end is inside it. */
@@ -31,6 +32,13 @@ describe("charge inventory model", () => {
     expect(ziviVoidFraction(0.5, 100, 1000)).toBeCloseTo(1 / (1 + Math.pow(0.1, 2 / 3)), 12);
     expect(ziviVoidFraction(0, 100, 1000)).toBe(0);
     expect(ziviVoidFraction(1, 100, 1000)).toBe(1);
+  });
+
+  it("takes the homogeneous void fraction α = 1/(1 + ((1 − x)/x)(ρv/ρl)) (no slip, textbook): x 0.5, ρ 100/1000 → 1/1.1, above Zivi's", () => {
+    expect(homogeneousVoidFraction(0.5, 100, 1000)).toBeCloseTo(1 / 1.1, 12);
+    expect(homogeneousVoidFraction(0.5, 100, 1000)).toBeGreaterThan(ziviVoidFraction(0.5, 100, 1000));
+    // No slip over x 0–1: ∫ dx / (x/100 + (1 − x)/1000) = ln(10)/0.009 = 255.8 kg/m³.
+    expect(meanTwoPhaseDensity(0, 1, 100, 1000, homogeneousVoidFraction)).toBeCloseTo(Math.log(10) / 0.009, 0);
   });
 
   it("averages a two-phase zone between its liquid and vapour densities, holding more liquid than the zone's mean quality suggests (Zivi slip)", () => {
