@@ -6,7 +6,9 @@
  * line of a high-pressure blend holds about 50 g/m, TRADE.md §6 line-set adjustments: 57 g/m for 3/8 in R410A).
  */
 import { describe, expect, it } from "vitest";
-import { CHARGE_DEVIATION_LIMITS, defaultChargeCoefficients } from "@shared/engine/index";
+import { defaultChargeCoefficients } from "@shared/engine/index";
+// The limits module itself, not a namespace on the engine's index (which need not re-export it).
+import * as CHARGE_DEVIATION_LIMITS from "@shared/engine/charge/charge-deviation-limits";
 
 describe("defaultChargeCoefficients", () => {
   it("works the doc example: 6 K, 3 kg, 7.5 m → 6 / (0.25 × (3 − 0.375)/3) = 27.43 K", () => {
