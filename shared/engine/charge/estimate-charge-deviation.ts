@@ -7,8 +7,11 @@ import {
   RANGE_SHARE_PER_K_BEYOND,
   REFERENCE_CONDITION_TOLERANCE_K,
   REFERENCE_RANGE_SHARE,
+  REFERENCE_SLOPE_UNCERTAINTY,
+  SATURATED_EXTRA_SHORT_SHARE,
+  SATURATED_SUBCOOLING_K,
   SENSOR_SUBCOOLING_K,
-  SUPERHEAT_TO_SUBCOOLING_RATIO,
+  VALVE_PAST_BAND_SUPERHEAT_RATIO,
   VIRTUAL_CHARGE_SOURCE,
 } from "./charge-deviation-limits.ts";
 import { defaultChargeCoefficients } from "./default-charge-coefficients.ts";
@@ -41,11 +44,17 @@ function roundKg(kg: number): number {
  * subcooling does not see), transcritical, no valid subcooling, or a fixed device without its
  * superheat.
  *
+ * The range: with a reference point, a share of the charge plus the sensors' error on the
+ * subcooling plus a share of the estimate (one point fixes the offset, not the slope); generic, a
+ * wider share of the charge plus a wider share of the estimate; reaching further short when the
+ * subcooling is about zero (it cannot show a larger shortage). Sized on the charge-inventory
+ * model (`npm run validate:charge`, README "Charge deviation validation").
+ *
  * Units: kg out, negative when short; lowKg ≤ kg ≤ highKg; never below the whole charge missing.
  * Source: `VIRTUAL_CHARGE_SOURCE`.
  *
  * @throws never
- * @example estimateChargeDeviation(snapshot).chargeDeviation?.kg // -0.6 for a 3 kg TXV circuit 3 K short of its subcooling target
+ * @example estimateChargeDeviation(snapshot).chargeDeviation // { kg: -0.45, lowKg: -0.75, highKg: -0.1, basis: "generic", … } for a 3 kg R410A TXV circuit with 7.5 m of line reading 2 K against a 6 K target (tests/engine/charge)
  */
 export function estimateChargeDeviation(snapshot: DiagnosisSnapshot): ChargeDeviationEstimate {
   const input = snapshot.input;
@@ -91,7 +100,7 @@ export function estimateChargeDeviation(snapshot: DiagnosisSnapshot): ChargeDevi
       const top = snapshot.superheatTarget?.highK ?? referenceSuperheat;
       if (superheat > top) {
         superheatDeviation = superheat - top;
-        coefficients.superheatToSubcooling = SUPERHEAT_TO_SUBCOOLING_RATIO;
+        coefficients.superheatToSubcooling = VALVE_PAST_BAND_SUPERHEAT_RATIO;
       }
     }
   }
@@ -100,7 +109,7 @@ export function estimateChargeDeviation(snapshot: DiagnosisSnapshot): ChargeDevi
 
   let halfRangeKg: number;
   if (basis === "unit-reference") {
-    halfRangeKg = REFERENCE_RANGE_SHARE * chargeKg + (SENSOR_SUBCOOLING_K / coefficients.kChK) * chargeKg;
+    halfRangeKg = REFERENCE_RANGE_SHARE * chargeKg + (SENSOR_SUBCOOLING_K / coefficients.kChK) * chargeKg + REFERENCE_SLOPE_UNCERTAINTY * Math.abs(kg);
     const outdoorNow = input.outdoorAirDryBulbC;
     const outdoorThen = reference?.outdoorAirDryBulbC;
     if (outdoorNow !== undefined && outdoorThen !== null && outdoorThen !== undefined) {
@@ -110,6 +119,8 @@ export function estimateChargeDeviation(snapshot: DiagnosisSnapshot): ChargeDevi
   } else {
     halfRangeKg = GENERIC_SLOPE_UNCERTAINTY * Math.abs(kg) + GENERIC_RANGE_SHARE * chargeKg;
   }
+  // A saturated condenser outlet hides how much further short the charge is: reach lower.
+  const extraShortKg = subcooling <= SATURATED_SUBCOOLING_K ? SATURATED_EXTRA_SHORT_SHARE * chargeKg : 0;
   const against =
     basis === "unit-reference"
       ? `the circuit's own reference point (subcooling ${formatTenths(referenceSubcooling)} K${referenceSuperheat === null ? "" : `, superheat ${formatTenths(referenceSuperheat)} K`})`
@@ -117,7 +128,7 @@ export function estimateChargeDeviation(snapshot: DiagnosisSnapshot): ChargeDevi
   return {
     chargeDeviation: {
       kg: roundKg(kg),
-      lowKg: roundKg(Math.max(kg - halfRangeKg, -chargeKg)),
+      lowKg: roundKg(Math.max(kg - halfRangeKg - extraShortKg, -chargeKg)),
       highKg: roundKg(kg + halfRangeKg),
       basis,
       source: `${VIRTUAL_CHARGE_SOURCE}; measured against ${against}; k_ch ${formatTenths(coefficients.kChK)} K for the whole ${formatTenths(chargeKg)} kg charge`,
