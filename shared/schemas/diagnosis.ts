@@ -202,10 +202,13 @@ const RANGE_ENTRIES = Object.entries(DIAGNOSIS_FIELD_RANGES) as [keyof typeof DI
  * weigh-in of the nameplate charge into an evacuated circuit). Charge deviation is measured from
  * it (virtual refrigerant charge method, Li & Braun 2009).
  */
+/** Bounds of a reference point's figures (the fast input check reads them too). */
+export const CHARGE_REFERENCE_LIMITS = { temperatureC: { min: -80, max: 90 }, differenceK: { min: -5, max: 60 } } as const;
+const { temperatureC: REF_T, differenceK: REF_D } = CHARGE_REFERENCE_LIMITS;
 const referenceTemperature = (label: string) =>
-  z.number({ error: `${label} must be a number in °C` }).min(-80, `${label} below −80 °C is not a running circuit`).max(90, `${label} above 90 °C is not a running circuit`);
+  z.number({ error: `${label} must be a number in °C` }).min(REF_T.min, `${label} below −80 °C is not a running circuit`).max(REF_T.max, `${label} above 90 °C is not a running circuit`);
 const referenceDifference = (label: string) =>
-  z.number({ error: `${label} must be a number in K` }).min(-5, `${label} below −5 K is not a settled reading`).max(60, `${label} above 60 K is not a settled reading`);
+  z.number({ error: `${label} must be a number in K` }).min(REF_D.min, `${label} below −5 K is not a settled reading`).max(REF_D.max, `${label} above 60 K is not a settled reading`);
 export const ChargeReferenceSchema = z.object({
   subcoolingK: referenceDifference("Reference subcooling"),
   superheatK: referenceDifference("Reference superheat"),

@@ -1,5 +1,6 @@
 import {
   APPLICATIONS,
+  CHARGE_REFERENCE_LIMITS,
   DIAGNOSIS_FIELD_RANGES,
   DiagnosisInputSchema,
   LIQUID_TEMP_LOCATIONS,
@@ -7,6 +8,7 @@ import {
   STANDARD_ATMOSPHERE_KPA,
   SUCTION_TEMP_LOCATIONS,
   WET_BULB_ABOVE_DRY_BULB_TOLERANCE_K,
+  type ChargeReference,
   type DiagnosisInput,
   type DiagnosisInputDraft,
 } from "../../schemas/diagnosis.ts";
@@ -71,6 +73,30 @@ function isOptionalFiniteNumber(value: unknown): value is number | undefined {
   return value === undefined || isFiniteNumber(value);
 }
 
+const inside = (value: unknown, min: number, max: number): value is number => isFiniteNumber(value) && value >= min && value <= max;
+
+/**
+ * ChargeReferenceSchema's checks (`REFERENCE_LIMITS` are its bounds): the six figures, the two
+ * air temperatures nullable; unknown keys dropped. Null when the schema would refuse it.
+ */
+function fastParseChargeReference(value: unknown): ChargeReference | null {
+  if (typeof value !== "object" || value === null || Array.isArray(value)) return null;
+  const reference = value as Record<string, unknown>;
+  const { subcoolingK, superheatK, evaporatingTempC, condensingTempC, outdoorAirDryBulbC, returnAirDryBulbC } = reference;
+  const { differenceK, temperatureC } = CHARGE_REFERENCE_LIMITS;
+  if (
+    !inside(subcoolingK, differenceK.min, differenceK.max) ||
+    !inside(superheatK, differenceK.min, differenceK.max) ||
+    !inside(evaporatingTempC, temperatureC.min, temperatureC.max) ||
+    !inside(condensingTempC, temperatureC.min, temperatureC.max) ||
+    (outdoorAirDryBulbC !== null && !inside(outdoorAirDryBulbC, temperatureC.min, temperatureC.max)) ||
+    (returnAirDryBulbC !== null && !inside(returnAirDryBulbC, temperatureC.min, temperatureC.max))
+  ) {
+    return null;
+  }
+  return { subcoolingK, superheatK, evaporatingTempC, condensingTempC, outdoorAirDryBulbC, returnAirDryBulbC };
+}
+
 /**
  * Fast acceptance check of one circuit's readings: answers the validated readings exactly as
  * `DiagnosisInputSchema.parse` would (refrigerant trimmed, unknown keys dropped) when the input
@@ -104,8 +130,8 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
   if (suctionTempLocation !== undefined && !SUCTION_TEMP_LOCATION_SET.has(suctionTempLocation)) return null;
   const application = draft.application;
   if (application !== undefined && !APPLICATION_SET.has(application)) return null;
-  // A circuit's reference point is an object of its own: the schema checks it (rare, once per reading).
-  if (draft.chargeReference !== undefined) return null;
+  const chargeReference = draft.chargeReference === undefined ? undefined : fastParseChargeReference(draft.chargeReference);
+  if (chargeReference === null) return null;
 
   const {
     suctionPressureKPa,
@@ -178,7 +204,7 @@ export function fastParseDiagnosisInput(input: DiagnosisInputDraft | unknown): D
     application: application as DiagnosisInput["application"],
     liquidLineLengthM,
     chargeKg,
-    chargeReference: undefined,
+    chargeReference,
   };
 
   // The schema's refinement, check for check, without building any message. Field by field

@@ -81,6 +81,22 @@ const input = fc.record(
     targetSubcoolingK: optional("targetSubcoolingK"),
     atmosphericPressureKPa: optional("atmosphericPressureKPa"),
     runMinutes: optional("runMinutes"),
+    chargeKg: optional("chargeKg"),
+    chargeReference: fc.option(
+      fc.record(
+        {
+          subcoolingK: fc.oneof(fc.double({ min: -6, max: 61, noNaN: true }), fc.constantFrom<unknown>(-5, 60, "5", null)),
+          superheatK: fc.oneof(fc.double({ min: -6, max: 61, noNaN: true }), fc.constantFrom<unknown>(-5.0001, 60.0001)),
+          evaporatingTempC: fc.double({ min: -81, max: 91, noNaN: true }),
+          condensingTempC: fc.oneof(fc.double({ min: -81, max: 91, noNaN: true }), fc.constantFrom<unknown>(Number.NaN, Infinity)),
+          outdoorAirDryBulbC: fc.oneof(fc.double({ min: -81, max: 91, noNaN: true }), fc.constant(null)),
+          returnAirDryBulbC: fc.oneof(fc.double({ min: -81, max: 91, noNaN: true }), fc.constant(null), fc.constant(undefined)),
+          extra: fc.constant("dropped"),
+        },
+        { requiredKeys: ["subcoolingK", "superheatK", "evaporatingTempC", "condensingTempC", "outdoorAirDryBulbC"] },
+      ),
+      { nil: undefined, freq: 2 },
+    ),
     unrelatedField: fc.constant("dropped by the schema"),
   },
   {
