@@ -36,13 +36,31 @@ function describeError(error: unknown): string {
   throw error;
 }
 
+/** The typed text in the new units, same quantity; text that is not a number is left as typed. */
+function convertEntry(text: string, direction: Direction, from: DisplayUnits, to: DisplayUnits, atmosphericKPa: number): string {
+  const parsed = parseDecimal(text);
+  if (parsed === undefined || parsed === "invalid") return text;
+  if (direction === "pressure-to-temperature") {
+    const gaugeKPa = gaugeFromDisplay(parsed, from.pressure, atmosphericKPa);
+    return formatNumber(pressureToDisplay(gaugeKPa + atmosphericKPa, to.pressure, "gauge", atmosphericKPa), PRESSURE_DECIMALS[to.pressure]);
+  }
+  return formatNumber(temperatureToDisplay(temperatureFromDisplay(parsed, from.temperature), to.temperature), 1);
+}
+
 /**
  * Pressure → saturation temperature and back, as you type. Blends show both points,
  * each labelled with what it is for: dew for superheat, bubble for subcooling.
  */
 export function SaturationConverter({ refrigerantId, isBlend, units, atmosphericKPa }: ConverterProps) {
   const [direction, setDirection] = useState<Direction>("pressure-to-temperature");
-  const [text, setText] = useState("");
+  // The typed value belongs to the units it was typed in: switching units converts it (430 kPa
+  // stays 430 kPa, shown as 62.4 psig), never re-reads the same digits in the new unit.
+  const [entry, setEntry] = useState({ text: "", units });
+  if (entry.units.pressure !== units.pressure || entry.units.temperature !== units.temperature) {
+    setEntry({ text: convertEntry(entry.text, direction, entry.units, units, atmosphericKPa), units });
+  }
+  const text = entry.text;
+  const setText = (next: string) => setEntry({ text: next, units });
   const inputId = useId();
   const outputId = useId();
 
