@@ -11,7 +11,9 @@ export type CautionTopic =
   | "nitrogen"
   | "pressure"
   | "liquid-refrigerant"
-  | "recovery-cylinder";
+  | "recovery-cylinder"
+  | "height"
+  | "hot-surface";
 
 export interface Caution {
   topic: CautionTopic;
@@ -97,5 +99,24 @@ export const cautions: Record<CautionTopic, Caution> = {
       "Use only cylinders rated for the refrigerant's pressure and in test date; never mix refrigerants in one cylinder.",
     ],
     source: "Refrigerant handling codes of practice (e.g. the Australian refrigerant handling code); common practice",
+  },
+  height: {
+    topic: "height",
+    title: "Working at height",
+    points: [
+      "On a roof, stay inside the edge protection or clipped to a rated anchor; keep clear of skylights and fragile sheeting.",
+      "Carry gauges, cylinders and tools up by hoist or line, not in your hands on the ladder; secure the ladder at the top.",
+      "Stop in high wind, rain or ice; hot roof sheeting and glare tire you faster than you notice.",
+    ],
+    source: "Work-at-height regulations and codes of practice (e.g. Safe Work Australia, Managing the risk of falls at workplaces; OSHA 29 CFR 1926 Subpart M); common practice",
+  },
+  "hot-surface": {
+    topic: "hot-surface",
+    title: "Hot surfaces",
+    points: [
+      "The discharge line and compressor top run at 70–110 °C and above: touch them only through a clamp probe or gloves.",
+      "Let a compressor cool before work on its terminals or shell; crankcase heaters stay hot with the unit off.",
+    ],
+    source: "Common practice; makers' service manuals",
   },
 };

@@ -70,6 +70,8 @@ export const CASE_SAFETY_TOPICS = [
   "pressure",
   "liquid-refrigerant",
   "recovery-cylinder",
+  "height",
+  "hot-surface",
 ] as const;
 export const CaseSafetyTopicSchema = z.enum(CASE_SAFETY_TOPICS);
 

@@ -1,7 +1,7 @@
 import type { CautionTopic } from "@shared/content/cautions.ts";
 import { CautionPanel, DeferToCodes } from "@/components/ui/caution-panel/caution-panel.tsx";
 
-const TOPICS: CautionTopic[] = ["electrical", "flammable", "toxic", "nitrogen", "pressure", "liquid-refrigerant", "recovery-cylinder"];
+const TOPICS: CautionTopic[] = ["electrical", "flammable", "toxic", "nitrogen", "pressure", "liquid-refrigerant", "recovery-cylinder", "height", "hot-surface"];
 
 export default function SafetyRoute() {
   return (
@@ -10,7 +10,9 @@ export default function SafetyRoute() {
       <DeferToCodes />
       <div className="grid gap-4 lg:grid-cols-2">
         {TOPICS.map((topic) => (
-          <CautionPanel key={topic} topic={topic} />
+          <div key={topic} id={topic} className="scroll-mt-4">
+            <CautionPanel topic={topic} />
+          </div>
         ))}
       </div>
     </div>

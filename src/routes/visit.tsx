@@ -1,3 +1,4 @@
+import { CautionLine } from "@/components/ui/caution-panel/caution-line.tsx";
 import { applicationText } from "@shared/content/applications.ts";
 import { FileText, Lock } from "lucide-react";
 import { useState, type ReactNode } from "react";
@@ -89,6 +90,7 @@ export default function VisitRoute() {
             {nameplate.targetSuperheatK != null && <> · target superheat <span className="num">{nameplate.targetSuperheatK} K</span></>}
             {nameplate.targetSubcoolingK != null && <> · target subcooling <span className="num">{nameplate.targetSubcoolingK} K</span></>}
           </p>
+          {unit.kind === "packaged rooftop" && <CautionLine topic="height" />}
 
           <PanelBoundary>
             <RunLog

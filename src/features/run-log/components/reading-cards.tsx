@@ -1,3 +1,4 @@
+import { CautionLine } from "@/components/ui/caution-panel/caution-line.tsx";
 import type { DiagnosisResult, LiquidTempLocation, TargetBand } from "@shared/schemas/diagnosis.ts";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import {
@@ -66,6 +67,9 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
         {input("suctionPressureKPa", "Suction pressure", p)}
         {input("suctionLineTempC", "Suction line temperature", t)}
         <div className="sm:col-span-2">
+          <CautionLine topic="pressure" point={1} />
+        </div>
+        <div className="sm:col-span-2">
           <Segmented<SuctionLocationChoice>
             label="Where the suction temperature was taken"
             value={draft.suctionTempLocation}
@@ -104,6 +108,9 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
       >
         {input("dischargePressureKPa", "Discharge pressure (optional)", p)}
         {input("dischargeLineTempC", "Discharge line temperature", t, "Keep this in view: oil breaks down on an overheated discharge")}
+        <div className="sm:col-span-2">
+          <CautionLine topic="hot-surface" />
+        </div>
       </ReadingCard>
 
       <ReadingCard
