@@ -1,6 +1,6 @@
 import { CautionLine } from "@/components/ui/caution-panel/caution-line.tsx";
 import { applicationText } from "@shared/content/applications.ts";
-import { FileText, Lock } from "lucide-react";
+import { FileText, Lock, Undo2 } from "lucide-react";
 import { useState, type ReactNode } from "react";
 import { Link, useParams, useSearchParams } from "react-router-dom";
 import { getRefrigerant } from "@shared/engine/index.ts";
@@ -162,6 +162,17 @@ export default function VisitRoute() {
           <div>
             <p className="font-semibold">{closedVisitMessage(data.status)}.</p>
             {can(role, "signOff") && <p className="text-sm">To correct it, reopen it with a reason in the Review panel below.</p>}
+          </div>
+        </div>
+      )}
+
+      {data.status === "sent-back" && (
+        <div role="alert" className="flex items-start gap-3 rounded-card border-2 border-caution bg-surface p-4" data-testid="sent-back-note">
+          <Undo2 aria-hidden className="mt-0.5 size-5 shrink-0 text-caution" />
+          <div>
+            <p className="font-semibold">Sent back by the reviewer</p>
+            <p>{data.reviewNote ?? "No reason was given; see the comments."}</p>
+            <p className="text-sm text-muted">Record what was asked for, then submit for review again (Review panel below).</p>
           </div>
         </div>
       )}
