@@ -9,7 +9,8 @@ import type { ChargeReference } from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { Database } from "./client.ts";
 import { peopleById, person, voidInfo } from "./people.ts";
-import { chargeReferences, circuitCharges, visits } from "./schema.ts";
+import { chargeReferences, circuitCharges, readings, visits } from "./schema.ts";
+import { countsInResults } from "./visits.ts";
 
 type ReferenceRow = typeof chargeReferences.$inferSelect;
 
@@ -198,4 +199,14 @@ export async function hasWeighInReferenceFromVisit(db: Database, organisationId:
     )
     .limit(1);
   return row !== undefined;
+}
+
+/** A standing reading of one of the unit's circuits, by id (any visit of the unit), or undefined. */
+export async function findUnitReading(db: Database, organisationId: string, equipmentId: string, readingId: string) {
+  const [row] = await db
+    .select({ id: readings.id, visitId: readings.visitId, circuit: readings.circuit, input: readings.input, result: readings.result })
+    .from(readings)
+    .innerJoin(visits, eq(visits.id, readings.visitId))
+    .where(and(eq(readings.organisationId, organisationId), eq(visits.equipmentId, equipmentId), eq(readings.id, readingId), countsInResults));
+  return row;
 }
