@@ -132,6 +132,8 @@ export interface ChargeReferenceInsert {
   readingId: string | null;
   readingCount: number;
   note: string | null;
+  /** When it was set; now unless a history is being written (the demo). */
+  at?: Date;
 }
 
 /**
@@ -141,7 +143,8 @@ export interface ChargeReferenceInsert {
  */
 export async function setChargeReference(db: Database, organisationId: string, values: ChargeReferenceInsert): Promise<string> {
   const reason = values.source === "weigh-in" ? "Replaced by the reference point settled after a weigh-in" : "Replaced by a reference point set by a senior";
-  await clearChargeReference(db, organisationId, { equipmentId: values.equipmentId, circuit: values.circuit, reason, clearedBy: values.setBy });
+  const at = values.at ?? new Date();
+  await clearChargeReference(db, organisationId, { equipmentId: values.equipmentId, circuit: values.circuit, reason, clearedBy: values.setBy, at });
   const [row] = await db
     .insert(chargeReferences)
     .values({
@@ -155,6 +158,7 @@ export async function setChargeReference(db: Database, organisationId: string, v
       readingId: values.readingId,
       readingCount: values.readingCount,
       note: values.note,
+      setAt: at,
     })
     .returning({ id: chargeReferences.id });
   return row.id;
@@ -164,11 +168,11 @@ export async function setChargeReference(db: Database, organisationId: string, v
 export async function clearChargeReference(
   db: Database,
   organisationId: string,
-  values: { equipmentId: string; circuit: number; reason: string; clearedBy: string | null },
+  values: { equipmentId: string; circuit: number; reason: string; clearedBy: string | null; at?: Date },
 ): Promise<boolean> {
   const cleared = await db
     .update(chargeReferences)
-    .set({ voidedAt: new Date(), voidedBy: values.clearedBy, voidReason: values.reason })
+    .set({ voidedAt: values.at ?? new Date(), voidedBy: values.clearedBy, voidReason: values.reason })
     .where(
       and(
         eq(chargeReferences.organisationId, organisationId),

@@ -17,7 +17,7 @@ import { settledChargeReference } from "./settled-charge-reference.ts";
 export async function calibrateAfterWeighIn(
   db: Database,
   organisationId: string,
-  values: { visitId: string; equipmentId: string; circuit: number; actorId: string | null },
+  values: { visitId: string; equipmentId: string; circuit: number; actorId: string | null; at?: Date },
 ): Promise<string | null> {
   // One per visit: a reference a senior has since cleared must not come back with the next reading.
   if (await hasWeighInReferenceFromVisit(db, organisationId, values.visitId, values.circuit)) return null;
@@ -35,5 +35,6 @@ export async function calibrateAfterWeighIn(
     readingId: settled.readingId,
     readingCount: settled.readingCount,
     note: `Mean of ${settled.readingCount} settled reading(s) after the full weigh-in`,
+    at: values.at,
   });
 }
