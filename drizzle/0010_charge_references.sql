@@ -23,6 +23,7 @@ CREATE TABLE "charge_references" (
 	CONSTRAINT "charge_references_source_known" CHECK (source in ('weigh-in', 'set-by-senior'))
 );
 --> statement-breakpoint
+ALTER TABLE "visit_events" DROP CONSTRAINT "visit_events_action_known";--> statement-breakpoint
 ALTER TABLE "charge_references" ADD CONSTRAINT "charge_references_organisation_id_organisations_id_fk" FOREIGN KEY ("organisation_id") REFERENCES "public"."organisations"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "charge_references" ADD CONSTRAINT "charge_references_equipment_id_equipment_id_fk" FOREIGN KEY ("equipment_id") REFERENCES "public"."equipment"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "charge_references" ADD CONSTRAINT "charge_references_visit_id_visits_id_fk" FOREIGN KEY ("visit_id") REFERENCES "public"."visits"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
@@ -30,4 +31,5 @@ ALTER TABLE "charge_references" ADD CONSTRAINT "charge_references_reading_id_rea
 ALTER TABLE "charge_references" ADD CONSTRAINT "charge_references_set_by_users_id_fk" FOREIGN KEY ("set_by") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "charge_references" ADD CONSTRAINT "charge_references_voided_by_users_id_fk" FOREIGN KEY ("voided_by") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 CREATE UNIQUE INDEX "charge_references_circuit_unique" ON "charge_references" USING btree ("equipment_id","circuit") WHERE "charge_references"."voided_at" is null;--> statement-breakpoint
-CREATE INDEX "charge_references_equipment_idx" ON "charge_references" USING btree ("equipment_id","circuit","set_at");
+CREATE INDEX "charge_references_equipment_idx" ON "charge_references" USING btree ("equipment_id","circuit","set_at");--> statement-breakpoint
+ALTER TABLE "visit_events" ADD CONSTRAINT "visit_events_action_known" CHECK (action in ('started', 'submitted', 'signed-off', 'sent-back', 'reopened', 'voided', 'imported', 'charge-reference-set'));

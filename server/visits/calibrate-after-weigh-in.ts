@@ -10,6 +10,7 @@
  */
 import { hasWeighInReferenceFromVisit, setChargeReference } from "../db/charge-references.ts";
 import type { Database } from "../db/client.ts";
+import { insertVisitEvent } from "../db/visit-events.ts";
 import { weighInRunLog } from "../db/weigh-in-run-log.ts";
 import { settledChargeReference } from "./settled-charge-reference.ts";
 
@@ -17,7 +18,7 @@ import { settledChargeReference } from "./settled-charge-reference.ts";
 export async function calibrateAfterWeighIn(
   db: Database,
   organisationId: string,
-  values: { visitId: string; equipmentId: string; circuit: number; actorId: string | null; at?: Date },
+  values: { visitId: string; equipmentId: string; circuit: number; actorId: string; at?: Date },
 ): Promise<string | null> {
   // One per visit: a reference a senior has since cleared must not come back with the next reading.
   if (await hasWeighInReferenceFromVisit(db, organisationId, values.visitId, values.circuit)) return null;
@@ -25,7 +26,7 @@ export async function calibrateAfterWeighIn(
   if (!runLog) return null;
   const settled = settledChargeReference(runLog);
   if (!settled) return null;
-  return setChargeReference(db, organisationId, {
+  const id = await setChargeReference(db, organisationId, {
     equipmentId: values.equipmentId,
     circuit: values.circuit,
     values: settled.values,
@@ -37,4 +38,13 @@ export async function calibrateAfterWeighIn(
     note: `Mean of ${settled.readingCount} settled reading(s) after the full weigh-in`,
     at: values.at,
   });
+  // The visit's trail says its readings now calibrate the unit: later estimates depend on them.
+  await insertVisitEvent(db, organisationId, {
+    visitId: values.visitId,
+    action: "charge-reference-set",
+    summary: `Circuit ${values.circuit}: settled after the full weigh-in (subcooling ${settled.values.subcoolingK} K, superheat ${settled.values.superheatK} K); its charge reference point from now on`,
+    actorId: values.actorId,
+    at: values.at,
+  });
+  return id;
 }

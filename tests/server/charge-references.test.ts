@@ -162,6 +162,9 @@ describe("charge reference points", () => {
     expect(circuits[1].current.values.superheatK).toBeCloseTo(6, 0);
     expect(circuits[1].current.readingCount).toBeGreaterThanOrEqual(3);
     expect(circuits[0].current?.visitId).not.toBe(visitId);
+    // The visit's trail says its readings now calibrate the unit.
+    const trail = (await technician.get(`/api/visits/${visitId}`)).body.visit.events as { action: string; summary: string }[];
+    expect(trail.filter((event) => event.action === "charge-reference-set")).toEqual([expect.objectContaining({ summary: expect.stringMatching(/^Circuit 2: settled after the full weigh-in/) })]);
 
     // One per visit: after a senior clears it, more settled readings do not bring it back.
     expect((await senior.delete(path(rooftopId, 2)).send({ reason: "Checking the clear holds" })).status).toBe(200);
