@@ -16,7 +16,7 @@ import { calibrateAfterWeighIn } from "../../visits/calibrate-after-weigh-in.ts"
 import { standingChargeReference } from "../charge-references.ts";
 import { demoSite } from "./demo-scenario.ts";
 import type { Database } from "../client.ts";
-import { adjustments, circuitCharges, readings, refrigerantMovements, visitComments, visitTechnicians, visits } from "../schema.ts";
+import { adjustments, circuitCharges, cylinders as cylinderTable, readings, refrigerantMovements, visitComments, visitTechnicians, visits } from "../schema.ts";
 
 type Unit = {
   id: string;
@@ -27,8 +27,8 @@ type Unit = {
   compressorRlaA: number | null;
 };
 type People = Record<"owner" | "senior" | "technician" | "technician2", string>;
-/** The demo's R407C cylinders: the recovery cylinder and the new-refrigerant one. */
-type Cylinders = { recovery: string; fresh: string };
+/** The demo's R407C recovery cylinder. */
+type Cylinders = { recovery: string };
 
 const MINUTE = 60_000;
 const DAY = 24 * 60 * MINUTE;
@@ -219,10 +219,16 @@ export async function seedDemoVisits(
     { organisationId, visitId: leak.id, circuit: 1, at: new Date(firstRead + 30 * MINUTE), kind: "charge-added", description: "Weighed in the 4.2 kg nameplate charge as liquid (3.1 kg reused, 1.1 kg new)", amountKg: 4.2, recordedBy: people.technician },
   ]);
   if (withChargeHistory) {
+    // Lee brought the recovery machine and the part-used cylinder from the van, and kept the register lines.
+    await db.insert(visitTechnicians).values({ visitId: leak.id, userId: people.technician2 });
+    const [van] = await db
+      .insert(cylinderTable)
+      .values({ organisationId, label: "BM-407C-N2", serial: "NX10-51877", kind: "new", refrigerant: rooftop.refrigerant, waterCapacityKg: 15, tareKg: 6.1, initialContentsKg: 2.5 })
+      .returning({ id: cylinderTable.id });
     await db.insert(refrigerantMovements).values([
-      movement(leak.id, people.technician, firstRead + 8 * MINUTE, { kind: "recovered", kg: 3.1, cylinderId: cylinders.recovery, note: "Recovered and weighed: 1.1 kg short of the nameplate" }),
-      movement(leak.id, people.technician, firstRead + 28 * MINUTE, { kind: "reused", kg: 3.1, cylinderId: cylinders.recovery, note: "Recovered charge weighed back in" }),
-      movement(leak.id, people.technician, firstRead + 30 * MINUTE, { kind: "added-new", kg: 1.1, cylinderId: cylinders.fresh, note: "Made up to the 4.2 kg nameplate charge" }),
+      movement(leak.id, people.technician2, firstRead + 8 * MINUTE, { kind: "recovered", kg: 3.1, cylinderId: cylinders.recovery, note: "Recovered and weighed: 1.1 kg short of the nameplate" }),
+      movement(leak.id, people.technician2, firstRead + 28 * MINUTE, { kind: "reused", kg: 3.1, cylinderId: cylinders.recovery, note: "Recovered charge weighed back in" }),
+      movement(leak.id, people.technician2, firstRead + 30 * MINUTE, { kind: "added-new", kg: 1.1, cylinderId: van.id, note: "Made up to the 4.2 kg nameplate charge" }),
     ]);
     await db.insert(circuitCharges).values({ organisationId, visitId: leak.id, circuit: 1, lineAdjustmentKg: 0, recordedBy: people.technician, createdAt: new Date(firstRead + 31 * MINUTE), updatedAt: new Date(firstRead + 31 * MINUTE) });
   }

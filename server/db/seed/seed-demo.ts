@@ -57,7 +57,7 @@ export async function seedDemoData(db: Database, options: Pick<DemoVisitOptions,
         technician: person("tech@bellbird.example"),
         technician2: person("tech2@bellbird.example"),
       },
-      { recovery: cylinderOf("recovery"), fresh: cylinderOf("new") },
+      { recovery: cylinderOf("recovery") },
       options,
     );
   });
