@@ -70,7 +70,7 @@ registerBench("CSV import (5 000 rows) and /api/health meanwhile", async () => {
     const inline = performance.now();
     judgeReadingsCsv({
       text,
-      context: { unit: rooftop, nameplate: rooftop.circuits[0]!, site: { altitudeM: demoSite.altitudeM } },
+      context: { unit: rooftop, nameplate: rooftop.circuits[0]!, site: { altitudeM: demoSite.altitudeM }, charge: { chargeKg: 4.2, chargeReference: null } },
       dayStart: "2026-12-01T00:00:00Z",
       keepRows: true,
     });

@@ -18,6 +18,7 @@ import type { Mailer } from "./mail/mailer.ts";
 import { attemptsRouter } from "./routes/attempts.ts";
 import { authRouter } from "./routes/auth.ts";
 import { casesRouter } from "./routes/cases.ts";
+import { chargeReferencesRouter } from "./routes/charge-references.ts";
 import { customersRouter, equipmentRouter, sitesRouter } from "./routes/equipment.ts";
 import { photosRouter, visitsRouter } from "./routes/visits.ts";
 import { healthRouter } from "./routes/health.ts";
@@ -106,6 +107,8 @@ export function createApp(deps: AppDeps): Express {
   // The refrigerant register (server/routes/register.ts): its visit and equipment routes sit beside theirs.
   api.use("/visits", visitRefrigerantRouter(deps));
   api.use("/equipment", equipmentRefrigerantRouter(deps));
+  // Each circuit's charge reference point (server/routes/charge-references.ts) sits beside the unit.
+  api.use("/equipment", chargeReferencesRouter(deps));
   api.use("/cylinders", cylindersRouter(deps));
   api.use("/register", registerRouter(deps));
   api.use("/cases", casesRouter(deps));

@@ -56,6 +56,10 @@ export const ROUTE_PERMISSIONS = {
   "POST /api/equipment": PERMISSIONS.writeRecords,
   "GET /api/equipment/:id": SIGNED_IN,
   "GET /api/equipment/:id/refrigerant": SIGNED_IN,
+  "GET /api/equipment/:id/charge-references": SIGNED_IN,
+  // Every later charge estimate on the unit is measured from its reference point.
+  "PUT /api/equipment/:id/charge-references/:circuit": PERMISSIONS.setChargeReference,
+  "DELETE /api/equipment/:id/charge-references/:circuit": PERMISSIONS.setChargeReference,
 
   "GET /api/visits": SIGNED_IN,
   "POST /api/visits": PERMISSIONS.writeRecords,

@@ -9,6 +9,7 @@ import { sql } from "drizzle-orm";
 import type { Role } from "@shared/schemas/auth.ts";
 import type { AttemptAnswers, AttemptScore, CaseDifficulty, CaseExpected, CaseStatus, CaseStory, SafetyNote, WorkedStep } from "@shared/schemas/casebook.ts";
 import type { Application, ChargeState, DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
+import { CHARGE_REFERENCE_SOURCES, type ChargeReferenceSource } from "@shared/schemas/charge-references.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { CylinderKind, MovementKind } from "@shared/schemas/register.ts";
 import { VISIT_EVENT_ACTIONS, type VisitEventAction, type VisitStatus, type VoidableKind } from "@shared/schemas/visits.ts";
@@ -645,6 +646,47 @@ export const circuitCharges = pgTable(
     // One standing declaration per circuit; voided ones stay beside it as history.
     uniqueIndex("circuit_charges_visit_circuit_unique").on(table.visitId, table.circuit).where(sql`${table.voidedAt} is null`),
     voidComplete("circuit_charges", table),
+  ],
+);
+
+/**
+ * A circuit's charge reference point: the settled readings at a known correct charge that its
+ * later charge estimates are measured from (virtual refrigerant charge, Li & Braun 2009). One
+ * stands per circuit; a cleared or replaced one keeps its row with when, by whom and why (the
+ * void columns), so the history of the unit's calibration is never lost.
+ */
+export const chargeReferences = pgTable(
+  "charge_references",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    equipmentId: uuid("equipment_id")
+      .notNull()
+      .references(() => equipment.id, { onDelete: "cascade" }),
+    circuit: integer("circuit").notNull(),
+    subcoolingK: doublePrecision("subcooling_k").notNull(),
+    superheatK: doublePrecision("superheat_k").notNull(),
+    evaporatingTempC: doublePrecision("evaporating_temp_c").notNull(),
+    condensingTempC: doublePrecision("condensing_temp_c").notNull(),
+    outdoorAirDryBulbC: doublePrecision("outdoor_air_dry_bulb_c"),
+    returnAirDryBulbC: doublePrecision("return_air_dry_bulb_c"),
+    source: text("source").$type<ChargeReferenceSource>().notNull(),
+    visitId: uuid("visit_id").references(() => visits.id, { onDelete: "set null" }),
+    readingId: uuid("reading_id").references(() => readings.id, { onDelete: "set null" }),
+    readingCount: integer("reading_count").notNull().default(0),
+    note: text("note"),
+    setBy: uuid("set_by").references(() => users.id, { onDelete: "set null" }),
+    setAt: timestamp("set_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...voidColumns(),
+  },
+  (table) => [
+    // One standing reference per circuit; cleared ones stay beside it as history.
+    uniqueIndex("charge_references_circuit_unique").on(table.equipmentId, table.circuit).where(sql`${table.voidedAt} is null`),
+    index("charge_references_equipment_idx").on(table.equipmentId, table.circuit, table.setAt),
+    voidComplete("charge_references", table),
+    check("charge_references_source_known", sql.raw(`source in (${CHARGE_REFERENCE_SOURCES.map((source) => `'${source}'`).join(", ")})`)),
   ],
 );
 

@@ -16,6 +16,8 @@ export interface VisitEventInsert {
   reason?: string | null;
   recordKind?: VoidableKind | null;
   recordId?: string | null;
+  /** Now, unless a history is being written (the demo). */
+  at?: Date;
 }
 
 type EventRow = typeof visitEvents.$inferSelect;

@@ -14,7 +14,7 @@ import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
 /** Readings that are records: not rows of a CSV import still being stored (see readings.pendingImportId). */
 const isRecord = isNull(readings.pendingImportId);
 /** Readings that count in results: records not voided. */
-const countsInResults = and(isRecord, isNull(readings.voidedAt));
+export const countsInResults = and(isRecord, isNull(readings.voidedAt));
 
 const summaryColumns = {
   id: visits.id,

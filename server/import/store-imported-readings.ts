@@ -9,6 +9,7 @@ import { randomUUID } from "node:crypto";
 import type { Database } from "../db/client.ts";
 import { insertVisitEvent } from "../db/visit-events.ts";
 import { commitImportedReadings, discardStagedReadings, joinCrew, stageImportedReadings } from "../db/visits.ts";
+import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 
 /** Lets requests that queued while a slice was stored run before the next one. */
@@ -17,7 +18,7 @@ const yieldToOtherRequests = () => new Promise<void>((resolve) => setImmediate(r
 export async function storeImportedReadings(
   db: Database,
   organisationId: string,
-  values: { visitId: string; circuit: number; recordedBy: string; slices: readonly Uint8Array[] },
+  values: { visitId: string; equipmentId: string; circuit: number; recordedBy: string; slices: readonly Uint8Array[] },
 ): Promise<number> {
   if (values.slices.length === 0) return 0;
   const importId = randomUUID();
@@ -42,6 +43,8 @@ export async function storeImportedReadings(
         summary: `${stored} readings imported from CSV into circuit ${values.circuit}`,
         actorId: values.recordedBy,
       });
+      // A logged series after a full weigh-in calibrates the circuit as hand-entered readings do.
+      await calibrateAfterWeighIn(tx, organisationId, { visitId: values.visitId, equipmentId: values.equipmentId, circuit: values.circuit, actorId: values.recordedBy });
       return stored;
     });
   } catch (error) {

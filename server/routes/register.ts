@@ -46,6 +46,7 @@ import { findVisit, joinCrew } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
+import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import { circuitBalance, cylinderFill, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
 import { registerCsv } from "../register/register-csv.ts";
@@ -291,6 +292,8 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
           actorId: user.id,
         });
       }
+      // Readings logged before the declaration may already show the circuit settled on its new charge.
+      await calibrateAfterWeighIn(tx, organisationId, { visitId: visit.id, equipmentId: unit.id, circuit, actorId: user.id });
     });
     res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
   });

@@ -22,6 +22,7 @@ import {
 } from "@shared/schemas/visits.ts";
 import { getAuth } from "../auth/session.ts";
 import { diagnoseReading } from "../diagnosis/diagnose-on-server.ts";
+import { circuitCharge } from "../db/charge-references.ts";
 import { getEquipment, getSite } from "../db/equipment.ts";
 import { insertVisitEvent } from "../db/visit-events.ts";
 import {
@@ -46,6 +47,7 @@ import { ColumnMappingSchema } from "../import/readings-csv.ts";
 import { storeImportedReadings } from "../import/store-imported-readings.ts";
 import { discardPhoto, MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
 import { visitReportMail } from "../report/visit-report-mail.ts";
+import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
 import { readingInput, type ReadingContext } from "../visits/reading-input.ts";
 import { voidVisitRecord } from "../visits/void-record.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
@@ -99,15 +101,15 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     return visit;
   }
 
-  /** The unit, the circuit's nameplate and the site: what the server adds to every reading. */
+  /** The unit, the circuit's nameplate and charge record, and the site: what the server adds to every reading. */
   async function readingContext(organisationId: string, equipmentId: string, circuit: number): Promise<ReadingContext> {
     const unit = await getEquipment(db, organisationId, equipmentId);
     if (!unit) throw notFound("Equipment");
     const nameplate = unit.circuits.find((candidate) => candidate.number === circuit);
     if (!nameplate) throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
-    const site = await getSite(db, organisationId, unit.siteId);
+    const [site, charge] = await Promise.all([getSite(db, organisationId, unit.siteId), circuitCharge(db, organisationId, unit.id, nameplate)]);
     if (!site) throw notFound("Site");
-    return { unit, nameplate, site };
+    return { unit, nameplate, site, charge };
   }
 
   router.get("/", async (req, res) => {
@@ -143,6 +145,8 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     const reading = await writeToVisit(db, organisationId, visit.id, async (tx) => {
       const stored = await insertReading(tx, organisationId, { visitId: visit.id, circuit, takenAt: takenAt ? new Date(takenAt) : undefined, note, input, result, recordedBy: user.id });
       await joinCrew(tx, visit.id, user.id);
+      // After a full weigh-in, the first settled window becomes the circuit's reference point.
+      await calibrateAfterWeighIn(tx, organisationId, { visitId: visit.id, equipmentId: visit.equipmentId, circuit, actorId: user.id });
       return stored;
     });
     res.status(201).json({ reading });
@@ -169,7 +173,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     if (fields.mode === "all" && summary.problems.length > 0) {
       return void res.status(422).json({ message: `${summary.problems.length} row(s) have problems: nothing was stored`, ...summary, stored: 0 });
     }
-    const stored = await storeImportedReadings(db, organisationId, { visitId: visit.id, circuit: fields.circuit, recordedBy: user.id, slices });
+    const stored = await storeImportedReadings(db, organisationId, { visitId: visit.id, equipmentId: visit.equipmentId, circuit: fields.circuit, recordedBy: user.id, slices });
     res.status(201).json({ ...summary, stored });
   });
 

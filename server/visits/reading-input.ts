@@ -2,7 +2,8 @@
  * The one place the server turns a reading into the engine's input: what the technician
  * measured (a reading body or a CSV row) plus what the server knows. Refrigerant, metering
  * device, targets and the liquid line length come from the circuit's nameplate, the compressor
- * RLA and the application from the equipment,
+ * RLA and the application from the equipment, the correct charge (nameplate plus the line-set
+ * adjustment of its weigh-in) and the reference point from the circuit's charge record,
  * the atmosphere from the site — never from the client, so a stored finding cannot be forged
  * (README decision 004). POST /api/visits/:id/readings and the CSV import (in its worker) both
  * call it, so the same numbers always give the same stored finding.
@@ -10,7 +11,7 @@
  * Pure: no database, no I/O; the callers load the equipment and the site.
  */
 import { atmosphericPressureAtAltitude, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.ts";
-import { DiagnosisInputSchema, type Application, type DiagnosisInput } from "@shared/schemas/diagnosis.ts";
+import { DiagnosisInputSchema, type Application, type ChargeReference, type DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { Atmosphere, MeasuredValues } from "@shared/schemas/visits.ts";
 import type { z } from "zod";
@@ -27,11 +28,20 @@ export interface ReadingSite {
   altitudeM: number | null;
 }
 
+/** What the charge estimate takes from the circuit's record (server/db/charge-references.ts). */
+export interface ReadingCharge {
+  /** Nameplate factory charge plus the line-set adjustment of its latest full weigh-in, kg. */
+  chargeKg: number;
+  /** The circuit's standing reference point, or null (the estimate then uses generic coefficients). */
+  chargeReference: ChargeReference | null;
+}
+
 /** Everything the server adds to a reading of one circuit, loaded once per request or import. */
 export interface ReadingContext {
   unit: ReadingEquipment;
   nameplate: CircuitNameplate;
   site: ReadingSite;
+  charge: ReadingCharge;
 }
 
 /**
@@ -62,7 +72,7 @@ export function siteAtmosphere(site: ReadingSite): Atmosphere {
  */
 export function readingInput(
   measured: Partial<MeasuredValues>,
-  { unit, nameplate, site }: ReadingContext,
+  { unit, nameplate, site, charge }: ReadingContext,
 ): z.ZodSafeParseResult<DiagnosisInput> {
   return DiagnosisInputSchema.safeParse({
     ...measured,
@@ -73,6 +83,8 @@ export function readingInput(
     compressorRla: unit.compressorRlaA ?? undefined,
     application: unit.application,
     liquidLineLengthM: nameplate.liquidLineLengthM ?? undefined,
+    chargeKg: charge.chargeKg,
+    chargeReference: charge.chargeReference ?? undefined,
     atmosphericPressureKPa: siteAtmosphere(site).pressureKPa,
   });
 }

@@ -36,6 +36,11 @@ export const PERMISSIONS = {
    * for their own handling, never a colleague's. Apprentices work under supervision and keep none.
    */
   readOwnRegisterLines: ["owner", "senior", "technician"],
+  /**
+   * Set or clear a circuit's charge reference point by hand. Every later charge estimate on the
+   * unit is measured from it, so it takes the judgement of those who sign work off.
+   */
+  setChargeReference: ["owner", "senior"],
 } as const satisfies Record<string, readonly Role[]>;
 export type Permission = keyof typeof PERMISSIONS;
 

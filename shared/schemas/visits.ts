@@ -148,7 +148,7 @@ export type VoidBody = z.input<typeof VoidBodySchema>;
 /** Body of POST /api/cylinders/:id/movements/:movementId/void (a reclaim, which has no visit). */
 export const MovementVoidBodySchema = VoidBodySchema.pick({ reason: true });
 
-export const VISIT_EVENT_ACTIONS = ["started", "submitted", "signed-off", "sent-back", "reopened", "voided", "imported"] as const;
+export const VISIT_EVENT_ACTIONS = ["started", "submitted", "signed-off", "sent-back", "reopened", "voided", "imported", "charge-reference-set"] as const;
 export type VisitEventAction = (typeof VISIT_EVENT_ACTIONS)[number];
 export const VISIT_EVENT_LABELS: Record<VisitEventAction, string> = {
   started: "Started the visit",
@@ -158,6 +158,8 @@ export const VISIT_EVENT_LABELS: Record<VisitEventAction, string> = {
   reopened: "Reopened",
   voided: "Voided",
   imported: "Imported readings",
+  // The visit's settled readings after a full weigh-in became a circuit's charge reference point.
+  "charge-reference-set": "Charge reference point set",
 };
 
 /** One line of a visit's audit trail. */

@@ -4,6 +4,7 @@ import { can } from "@shared/schemas/auth.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
+import { ChargeReferencePoints } from "@/features/equipment/components/charge-reference-points.tsx";
 import { EquipmentNameplate } from "@/features/equipment/components/equipment-nameplate.tsx";
 import { LastSettledReadings } from "@/features/equipment/components/last-settled-readings.tsx";
 import { EquipmentRefrigerantHistory } from "@/features/register/components/equipment-refrigerant-history.tsx";
@@ -32,6 +33,7 @@ export default function EquipmentDetailRoute() {
   const detail = useEquipmentDetail(equipmentId);
   const { units, atmosphericKPa } = useDisplayUnits();
   const mayWrite = me.data ? can(me.data.role, "writeRecords") : false;
+  const mayCalibrate = me.data ? can(me.data.role, "setChargeReference") : false;
 
   const breadcrumb = (
     <nav aria-label="Breadcrumb" className="text-sm">
@@ -104,6 +106,9 @@ export default function EquipmentDetailRoute() {
 
       <Panel title="Last settled readings" id="settled-heading">
         <LastSettledReadings lastSettled={lastSettled} units={units} />
+      </Panel>
+      <Panel title="Charge reference points" id="charge-reference-heading">
+        <ChargeReferencePoints equipmentId={equipment.id} visits={visits} units={units} canManage={mayCalibrate} />
       </Panel>
       <Panel title="Visits" id="visits-heading">
         <VisitList visits={visits} />

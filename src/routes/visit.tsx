@@ -26,6 +26,7 @@ import { CommentsPanel } from "@/features/visit/components/comments-panel.tsx";
 import { PhotosPanel } from "@/features/visit/components/photos-panel.tsx";
 import { ReviewPanel } from "@/features/visit/components/review-panel.tsx";
 import { useMe } from "@/lib/api/auth.ts";
+import { useChargeReferences } from "@/lib/api/charge-references.ts";
 import { useEquipmentDetail } from "@/lib/api/equipment.ts";
 import { useVisit } from "@/lib/api/visits.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
@@ -36,6 +37,7 @@ export default function VisitRoute() {
   const { visitId = "" } = useParams();
   const visit = useVisit(visitId);
   const equipment = useEquipmentDetail(visit.data?.equipmentId ?? "");
+  const chargeReferences = useChargeReferences(visit.data?.equipmentId ?? "");
   const me = useMe();
   const { units } = useDisplayUnits();
   const [circuit, setCircuit] = useState(1);
@@ -69,6 +71,8 @@ export default function VisitRoute() {
   const nameplate = unit.circuits.find((candidate) => candidate.number === circuit) ?? unit.circuits[0]!;
   const refrigerant = getRefrigerant(unit.refrigerant);
   const caution = safetyClasses[refrigerant.safety.class].caution;
+  // The circuit's correct charge and reference point, as the server diagnoses with them.
+  const circuitCharge = chargeReferences.data?.circuits.find((candidate) => candidate.circuit === nameplate.number);
 
   // The visit's sections: one line each, shown one at a time (?section= keeps the choice on reload).
   const sections: { id: string; label: string; element: ReactNode }[] = [
@@ -105,6 +109,8 @@ export default function VisitRoute() {
                 compressorRla: unit.compressorRlaA,
                 application: unit.application,
                 liquidLineLengthM: nameplate.liquidLineLengthM,
+                chargeKg: circuitCharge?.correctChargeKg ?? null,
+                chargeReference: circuitCharge?.current?.values ?? null,
               }}
               isBlend={refrigerant.kind === "blend"}
               units={units}

@@ -208,6 +208,7 @@ describe("readingInput and siteAtmosphere", () => {
       liquidLineLengthM: null,
     },
     site: { altitudeM: 1000 },
+    charge: { chargeKg: 4.5, chargeReference: null },
   };
 
   it("takes the atmosphere from the site's altitude (ISO 2533) or the standard atmosphere", () => {
@@ -234,6 +235,14 @@ describe("readingInput and siteAtmosphere", () => {
       compressorRla: 11.8,
       atmosphericPressureKPa: atmosphericPressureAtAltitude(1000),
     });
+  });
+
+  it("takes the correct charge and the reference point from the circuit's charge record, never from the reading", () => {
+    const reference = { subcoolingK: 5, superheatK: 6, evaporatingTempC: 6, condensingTempC: 42, outdoorAirDryBulbC: 31, returnAirDryBulbC: 25 };
+    const forged = { ...measured, chargeKg: 99, chargeReference: { ...reference, subcoolingK: 30 } } as typeof measured;
+    const parsed = readingInput(forged, { ...context, charge: { chargeKg: 4.5, chargeReference: reference } });
+    expect(parsed.data).toMatchObject({ chargeKg: 4.5, chargeReference: reference });
+    expect(readingInput(measured, context).data?.chargeReference).toBeUndefined();
   });
 
   it("judges a CSV row with the same context", () => {

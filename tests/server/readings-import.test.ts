@@ -125,7 +125,7 @@ describe("CSV import of a reading series", () => {
     const closing = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Signed off mid-import" })).body.visit.id;
     const judged = judgeReadingsCsv({
       text: loggedSeries(30).join("\n"),
-      context: { unit: rooftop, nameplate: rooftop.circuits[0], site: { altitudeM: demoSite.altitudeM } },
+      context: { unit: rooftop, nameplate: rooftop.circuits[0], site: { altitudeM: demoSite.altitudeM }, charge: { chargeKg: rooftop.circuits[0].factoryChargeKg, chargeReference: null } },
       dayStart,
       keepRows: true,
     });
@@ -137,7 +137,7 @@ describe("CSV import of a reading series", () => {
     const organisationId = (await technician.get("/api/auth/me")).body.user.organisationId;
     const recordedBy = (await technician.get("/api/auth/me")).body.user.id;
     await expect(
-      storeImportedReadings(testApp.database.db, organisationId, { visitId: closing, circuit: 1, recordedBy, slices: judged.slices }),
+      storeImportedReadings(testApp.database.db, organisationId, { visitId: closing, equipmentId: rooftop.id, circuit: 1, recordedBy, slices: judged.slices }),
     ).rejects.toThrow(/signed off/);
     const staged = await testApp.database.db.select({ id: readings.id }).from(readings).where(isNotNull(readings.pendingImportId));
     expect(staged).toHaveLength(0);

@@ -90,8 +90,10 @@ describe("visits and the run log API", () => {
     const { circuit: _circuit, ...fields } = rooftopReading;
     expect(reading.input.atmosphericPressureKPa).toBe(ATMOSPHERE);
     expect(reading.result).toEqual(
-      diagnose({ ...fields, refrigerant: "R407C", meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, compressorRla: 11.8, application: "comfort-cooling", atmosphericPressureKPa: ATMOSPHERE }),
+      diagnose({ ...fields, refrigerant: "R407C", meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, compressorRla: 11.8, application: "comfort-cooling", atmosphericPressureKPa: ATMOSPHERE, chargeKg: 4.2 }),
     );
+    // The correct charge comes from the circuit's record too (nameplate, no line-set adjustment).
+    expect(reading.input.chargeKg).toBe(4.2);
     // Superheat from the dew point, subcooling from the bubble point (R407C glides ~5 K).
     expect(reading.result.superheatK).toBeCloseTo(6, 1);
     expect(reading.result.subcoolingK).toBeCloseTo(5, 1);

@@ -56,6 +56,11 @@ export function sampleBodies(records: BellbirdRecords): Partial<Record<RouteKey,
       supplyVoltageV: 230,
       phases: 1,
     },
+    "PUT /api/equipment/:id/charge-references/:circuit": {
+      values: { subcoolingK: 5, superheatK: 6, evaporatingTempC: 6, condensingTempC: 42, outdoorAirDryBulbC: 31, returnAirDryBulbC: 25 },
+      note: "From the commissioning sheet",
+    },
+    "DELETE /api/equipment/:id/charge-references/:circuit": { reason: "Condenser coil replaced" },
     "POST /api/visits": { equipmentId: records.equipmentId, reason: "Sample visit" },
     "POST /api/visits/:id/readings": {
       circuit: 1,

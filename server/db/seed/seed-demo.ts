@@ -11,14 +11,14 @@ import {
   demoPeople,
   demoSite,
 } from "./demo-scenario.ts";
-import { seedDemoVisits } from "./demo-visits.ts";
+import { seedDemoVisits, type DemoVisitOptions } from "./demo-visits.ts";
 
 /**
  * Loads the demo company when the database holds no organisation yet, so a fresh
  * install opens on something to look at and a second start never duplicates it.
  * @returns true when the demo data was written, false when the database was not empty.
  */
-export async function seedDemoData(db: Database): Promise<boolean> {
+export async function seedDemoData(db: Database, options: Pick<DemoVisitOptions, "withChargeHistory"> = {}): Promise<boolean> {
   const [{ organisationCount }] = await db.select({ organisationCount: count() }).from(organisations);
   if (organisationCount > 0) return false;
 
@@ -41,7 +41,11 @@ export async function seedDemoData(db: Database): Promise<boolean> {
       .insert(equipment)
       .values(demoEquipment.map((item) => ({ ...item, organisationId: organisation.id, siteId: site.id })))
       .returning();
-    await tx.insert(cylinders).values(demoCylinders.map((cylinder) => ({ ...cylinder, organisationId: organisation.id })));
+    const stock = await tx
+      .insert(cylinders)
+      .values(demoCylinders.map((cylinder) => ({ ...cylinder, organisationId: organisation.id })))
+      .returning({ id: cylinders.id, kind: cylinders.kind, refrigerant: cylinders.refrigerant });
+    const cylinderOf = (kind: string) => stock.find((cylinder) => cylinder.kind === kind && cylinder.refrigerant === "R407C")!.id;
     const person = (email: string) => people.find((row) => row.email === email)!.id;
     await seedDemoVisits(
       tx,
@@ -53,6 +57,8 @@ export async function seedDemoData(db: Database): Promise<boolean> {
         technician: person("tech@bellbird.example"),
         technician2: person("tech2@bellbird.example"),
       },
+      { recovery: cylinderOf("recovery") },
+      options,
     );
   });
   return true;

@@ -90,18 +90,28 @@ export const useVisitRefrigerant = (visitId: string) => useQuery(visitRefrigeran
 export const useEquipmentRefrigerant = (equipmentId: string) => useQuery(equipmentRefrigerantQueryOptions(equipmentId));
 export const useRegister = (filter: RegisterQuery) => useQuery(registerQueryOptions(filter));
 
-/** Every register change moves cylinder contents and balances: refresh both families. */
-function useRegisterMutation<TVariables, TResult>(mutationFn: (variables: TVariables) => Promise<TResult>, options: { silentErrors?: boolean } = {}) {
+/**
+ * Every register change moves cylinder contents and balances: refresh both families. A weigh-in
+ * declaration also changes the circuit's correct charge and may calibrate it: its reference points too.
+ */
+function useRegisterMutation<TVariables, TResult>(
+  mutationFn: (variables: TVariables) => Promise<TResult>,
+  options: { silentErrors?: boolean; alsoRefresh?: readonly string[][] } = {},
+) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn,
     meta: options.silentErrors ? { silentErrors: true } : undefined,
     onSuccess: () =>
-      Promise.all([queryClient.invalidateQueries({ queryKey: ["register"] }), queryClient.invalidateQueries({ queryKey: ["cylinders"] })]),
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: ["register"] }),
+        queryClient.invalidateQueries({ queryKey: ["cylinders"] }),
+        ...(options.alsoRefresh ?? []).map((queryKey) => queryClient.invalidateQueries({ queryKey })),
+      ]),
   });
 }
 
 export const useCreateCylinder = () => useRegisterMutation(createCylinder);
 export const useCreateMovement = () => useRegisterMutation(createMovement);
 export const useSendCylinderForReclaim = () => useRegisterMutation(sendCylinderForReclaim);
-export const useSetCharging = () => useRegisterMutation(setCharging);
+export const useSetCharging = () => useRegisterMutation(setCharging, { alsoRefresh: [["charge-references"]] });

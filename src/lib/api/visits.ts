@@ -112,7 +112,7 @@ export const visitQueryOptions = (id: string) =>
 export const useVisits = (filter: { status?: VisitStatus; equipmentId?: string } = {}) => useQuery(visitsQueryOptions(filter));
 export const useVisit = (id: string) => useQuery(visitQueryOptions(id));
 
-function useVisitMutation<TVariables extends { visitId: string }, TResult>(mutationFn: (variables: TVariables) => Promise<TResult>) {
+function useVisitMutation<TVariables extends { visitId: string }, TResult>(mutationFn: (variables: TVariables) => Promise<TResult>, alsoRefresh: readonly string[][] = []) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn,
@@ -120,11 +120,14 @@ function useVisitMutation<TVariables extends { visitId: string }, TResult>(mutat
       Promise.all([
         queryClient.invalidateQueries({ queryKey: ["visits", "detail", variables.visitId] }),
         queryClient.invalidateQueries({ queryKey: ["visits", "list"] }),
+        ...alsoRefresh.map((queryKey) => queryClient.invalidateQueries({ queryKey })),
       ]),
   });
 }
 
-export const useCreateReading = () => useVisitMutation(createReading);
+// A stored reading may make a circuit's settled readings after a weigh-in its charge reference
+// point (calibrated on the server), so the units' reference points are fetched again too.
+export const useCreateReading = () => useVisitMutation(createReading, [["charge-references"]]);
 export const useCreateAdjustment = () => useVisitMutation(createAdjustment);
 export const useCreateComment = () => useVisitMutation(createComment);
 export const useReviewVisit = () => useVisitMutation(reviewVisit);

@@ -1,6 +1,6 @@
 import { useDeferredValue, useMemo } from "react";
 import { diagnose, DiagnosisInputError } from "@shared/engine/index.ts";
-import type { Application, DiagnosisInputDraft, DiagnosisResult, MeteringDevice } from "@shared/schemas/diagnosis.ts";
+import type { Application, ChargeReference, DiagnosisInputDraft, DiagnosisResult, MeteringDevice } from "@shared/schemas/diagnosis.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { useSinglePhaseTable } from "./use-single-phase-table.ts";
 import { parseDraft, type DraftField, type ReadingDraft } from "../utils/reading-draft.ts";
@@ -14,6 +14,13 @@ export interface CircuitContext {
   /** The equipment's application and the circuit's liquid line length: they set the bands. */
   application: Application;
   liquidLineLengthM: number | null;
+  /**
+   * The circuit's correct charge (nameplate plus its weigh-in line adjustment), kg, and its
+   * reference point, as the server diagnoses with them: the live charge estimate matches the
+   * stored one. Null while they load (no estimate in kilograms until then).
+   */
+  chargeKg: number | null;
+  chargeReference: ChargeReference | null;
 }
 
 export type LiveDiagnosis =
@@ -41,6 +48,8 @@ export function useLiveDiagnosis(draft: ReadingDraft, context: CircuitContext, u
       compressorRla: context.compressorRla ?? undefined,
       application: context.application,
       liquidLineLengthM: context.liquidLineLengthM ?? undefined,
+      chargeKg: context.chargeKg ?? undefined,
+      chargeReference: context.chargeReference ?? undefined,
       atmosphericPressureKPa: atmosphericKPa,
       ...(values as Omit<DiagnosisInputDraft, "refrigerant" | "meteringDevice">),
     };
