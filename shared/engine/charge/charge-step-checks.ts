@@ -22,7 +22,12 @@ export interface ChargeStepCheck {
   expectedKg: number | null;
   /** The after-estimate's range contains the expected value; null when there is no estimate to compare. */
   agrees: boolean | null;
+  /** A weigh-in after recovery (more than half the charge at once), not a trim: nothing to compare. */
+  refill: boolean;
 }
+
+/** A step above this share of the correct charge is a refill after recovery, not a trim of a running circuit. */
+export const REFILL_SHARE = 0.5;
 
 /**
  * Each charge step beside what the estimate did: the estimate just before the step plus the
@@ -35,7 +40,7 @@ export interface ChargeStepCheck {
  * @throws never
  * @example chargeStepChecks([{ at: "…10:20", kg: 0.3 }], points)[0]?.agrees // true when the next estimate moved by about 0.3 kg
  */
-export function chargeStepChecks(steps: readonly ChargeStep[], points: readonly EstimatePoint[]): ChargeStepCheck[] {
+export function chargeStepChecks(steps: readonly ChargeStep[], points: readonly EstimatePoint[], chargeKg?: number): ChargeStepCheck[] {
   const ordered = [...points].filter((point) => point.chargeDeviation !== null).sort((a, b) => Date.parse(a.takenAt) - Date.parse(b.takenAt));
   const sortedSteps = [...steps].sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
   return sortedSteps.map((step, index) => {
@@ -43,13 +48,15 @@ export function chargeStepChecks(steps: readonly ChargeStep[], points: readonly 
     const nextAt = index + 1 < sortedSteps.length ? Date.parse(sortedSteps[index + 1]!.at) : Number.POSITIVE_INFINITY;
     const before = ordered.filter((point) => Date.parse(point.takenAt) < at).at(-1)?.chargeDeviation ?? null;
     const after = ordered.filter((point) => Date.parse(point.takenAt) > at && Date.parse(point.takenAt) < nextAt).at(-1)?.chargeDeviation ?? null;
-    const expectedKg = before === null ? null : before.kg + step.kg;
+    const refill = chargeKg !== undefined && Math.abs(step.kg) > REFILL_SHARE * chargeKg;
+    const expectedKg = before === null || refill ? null : before.kg + step.kg;
     return {
       step,
       beforeKg: before?.kg ?? null,
       afterKg: after?.kg ?? null,
       expectedKg,
       agrees: expectedKg === null || after === null ? null : expectedKg >= after.lowKg && expectedKg <= after.highKg,
+      refill,
     };
   });
 }

@@ -70,4 +70,9 @@ describe("chargeStepChecks", () => {
     const [check] = chargeStepChecks([{ at: "2026-12-01T10:10:00Z", kg: -0.2 }], [point("2026-12-01T10:20:00Z", 0.1)]);
     expect(check).toMatchObject({ beforeKg: null, afterKg: 0.1, expectedKg: null, agrees: null });
   });
+
+  it("does not compare a weigh-in after recovery (more than half the charge at once) with the estimate before it", () => {
+    const [check] = chargeStepChecks([{ at: "2026-12-01T10:10:00Z", kg: 4.2 }], [point("2026-12-01T10:00:00Z", -1.2), point("2026-12-01T10:30:00Z", 0)], 4.2);
+    expect(check).toMatchObject({ refill: true, beforeKg: -1.2, afterKg: 0, expectedKg: null, agrees: null });
+  });
 });

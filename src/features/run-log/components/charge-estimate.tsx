@@ -6,7 +6,7 @@ const kg = (value: number) => `${Math.abs(value).toFixed(2)} kg`;
 /** "0.60 kg short (0.30–0.90 kg)" — the range written the way the charge is off. */
 export function chargeEstimateWords(deviation: NonNullable<DiagnosisResult["chargeDeviation"]>): string {
   if (deviation.lowKg <= 0 && deviation.highKg >= 0 && Math.abs(deviation.kg) < 0.05) {
-    return `On charge within the estimate (${deviation.lowKg.toFixed(2)} to +${deviation.highKg.toFixed(2)} kg)`;
+    return `On charge within the estimate (−${Math.abs(deviation.lowKg).toFixed(2)} to +${deviation.highKg.toFixed(2)} kg)`;
   }
   const short = deviation.kg < 0;
   const [near, far] = short ? [-deviation.highKg, -deviation.lowKg] : [deviation.lowKg, deviation.highKg];

@@ -86,7 +86,11 @@ export function ChargingPlanPanel({ result, input, series, isBlend }: ChargingPl
               <li key={check.step.at} className="border-t border-rule pt-1">
                 <span className="num">{signedKg(check.step.kg)}</span> at{" "}
                 {new Date(check.step.at).toLocaleTimeString([], { hour: "2-digit", minute: "2-digit" })}:{" "}
-                {check.expectedKg === null || check.afterKg === null ? (
+                {check.refill ? (
+                  <span className="text-muted">
+                    weighed in after recovery{check.afterKg === null ? "" : <>; estimate since <span className="num">{signedKg(check.afterKg)}</span></>}
+                  </span>
+                ) : check.expectedKg === null || check.afterKg === null ? (
                   <span className="text-muted">
                     no estimate {check.beforeKg === null ? "before" : "since"} to compare
                   </span>
