@@ -6,7 +6,7 @@ import { MEMORY } from "../diagnosis/sources.ts";
  * metering, or a valve past its range), in the superheat deviation, with coefficients from a
  * reference point. Equations as recalled from the papers, not re-read here.
  */
-export const VIRTUAL_CHARGE_SOURCE = `virtual refrigerant charge method: H. Li and J. E. Braun, "Development, evaluation, and demonstration of a virtual refrigerant charge sensor", HVAC&R Research 15(1), 2009, and W. Kim and J. E. Braun's later Purdue evaluations with default parameters (equations ${MEMORY.replace("memory", "from memory")})`;
+export const VIRTUAL_CHARGE_SOURCE = `virtual refrigerant charge method: H. Li and J. E. Braun, "Development, evaluation, and demonstration of a virtual refrigerant charge sensor", HVAC&R Research 15(1), 2009, and W. Kim and J. E. Braun's later Purdue evaluations with default parameters; equations as recalled: ${MEMORY}`;
 
 /**
  * Share of the charge held as subcooled liquid in the condenser at the reference point of a

@@ -1,4 +1,5 @@
 import type { ChargeDeviation } from "../../schemas/diagnosis.ts";
+import { formatHundredths } from "../diagnosis/format-hundredths.ts";
 import { formatTenths } from "../diagnosis/format-tenths.ts";
 import type { DiagnosisSnapshot } from "../diagnosis/types.ts";
 import {
@@ -131,7 +132,7 @@ export function estimateChargeDeviation(snapshot: DiagnosisSnapshot): ChargeDevi
       lowKg: roundKg(Math.max(kg - halfRangeKg - extraShortKg, -chargeKg)),
       highKg: roundKg(kg + halfRangeKg),
       basis,
-      source: `${VIRTUAL_CHARGE_SOURCE}; measured against ${against}; k_ch ${formatTenths(coefficients.kChK)} K for the whole ${formatTenths(chargeKg)} kg charge`,
+      source: `${VIRTUAL_CHARGE_SOURCE}; measured against ${against}; k_ch ${formatTenths(coefficients.kChK)} K for the whole ${formatHundredths(chargeKg)} kg charge`,
     },
     chargeDeviationNote: null,
   };
