@@ -14,12 +14,18 @@ export function ChargeToAddResult({ attempt, chargeKg }: { attempt: Attempt; cha
   if (deviation === undefined) return null;
   if (deviation === null) {
     return (
-      <section aria-labelledby="charge-estimate-heading" className="rounded-card border-2 border-rule bg-surface p-4" data-testid="charge-to-add-result">
+      <section
+        aria-labelledby="charge-estimate-heading"
+        className="rounded-card border-2 border-rule bg-surface p-4"
+        data-testid="charge-to-add-result"
+      >
         <h2 id="charge-estimate-heading" className="flex items-center gap-2 text-xl font-semibold">
           <Scale aria-hidden className="size-5 shrink-0" /> The charge estimate
         </h2>
         <p className="mt-2">No estimate from these readings, so the right answer was to leave it blank.</p>
-        {attempt.expected.chargeDeviationNote && <p className="mt-1 text-sm">{attempt.expected.chargeDeviationNote}.</p>}
+        {attempt.expected.chargeDeviationNote && (
+          <p className="mt-1 text-sm">{attempt.expected.chargeDeviationNote}.</p>
+        )}
       </section>
     );
   }
@@ -32,7 +38,11 @@ export function ChargeToAddResult({ attempt, chargeKg }: { attempt: Attempt; cha
       ? null
       : chargingPlan(deviation, attempt.expectedState, chargeKg, getRefrigerant(attempt.refrigerant).kind === "blend");
   return (
-    <section aria-labelledby="charge-estimate-heading" className="space-y-2 rounded-card border-2 border-rule bg-surface p-4" data-testid="charge-to-add-result">
+    <section
+      aria-labelledby="charge-estimate-heading"
+      className="space-y-2 rounded-card border-2 border-rule bg-surface p-4"
+      data-testid="charge-to-add-result"
+    >
       <h2 id="charge-estimate-heading" className="flex items-center gap-2 text-xl font-semibold">
         <Scale aria-hidden className="size-5 shrink-0" /> The charge estimate
       </h2>

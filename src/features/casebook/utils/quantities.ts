@@ -18,7 +18,8 @@ import {
  * Charge (kg) and line length (m) are shown metric whatever the display units: the display
  * settings have no mass or length unit yet.
  */
-export type Quantity = "pressure" | "temperature" | "difference" | "current" | "minutes" | "percent" | "mass" | "length";
+export type Quantity =
+  "pressure" | "temperature" | "difference" | "current" | "minutes" | "percent" | "mass" | "length";
 
 export function unitLabel(quantity: Quantity, units: DisplayUnits): string {
   switch (quantity) {
