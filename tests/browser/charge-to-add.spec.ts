@@ -82,4 +82,27 @@ test.describe("casebook: the charge to add", () => {
     await expect(page.getByTestId("mark-chargeToAddKg")).toContainText("yours blank (no estimate)");
     await expect(page.getByTestId("charge-to-add-result")).toContainText("receiver");
   });
+
+  test("a senior's own case asks the charge to add once the circuit's correct charge is given", async ({ page }) => {
+    await page.setViewportSize({ width: 390, height: 844 });
+    const signIn = await page.request.post("/api/auth/sign-in", {
+      data: { email: "senior@bellbird.example", password: DEMO_PASSWORD },
+    });
+    expect(signIn.status()).toBe(200);
+    await page.goto("/casebook/new");
+    await page.getByLabel("Suction pressure (low side)").fill("833");
+    await page.getByLabel("Suction line temperature").fill("17");
+    await page.getByLabel("Liquid pressure (high side)").fill("2390");
+    await page.getByLabel("Liquid line temperature").fill("39");
+    await page.getByLabel(/^Target subcooling/).fill("6");
+    await page.getByLabel(/^Outdoor air/).fill("33");
+    const preview = page.getByRole("complementary", { name: "Preview: the answers" });
+    await expect(preview).toContainText("No charge-to-add question: Enter the circuit's correct charge");
+    await page.getByLabel(/^Correct charge/).fill("2.8");
+    // generic coefficients (Li & Braun 2009 defaults): no reference point in an authored case
+    await expect(preview).toContainText("Apprentices are also asked the charge to add, right from +");
+    await expect(preview).toContainText("generic coefficients, a wide range");
+    await expect(preview.getByTestId("preview-charge-to-add")).toContainText("+");
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+  });
 });
