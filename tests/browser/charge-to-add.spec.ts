@@ -79,7 +79,7 @@ test.describe("casebook: the charge to add", () => {
     await usualAnswers(page, ["-14", "34", "11", "0.5"], "Undercharged", "Receiver: subcooling cannot say how much");
     await page.getByRole("button", { name: "Check my answers" }).click();
     await expect(page.getByTestId("mark-chargeToAddKg")).toContainText("Charge to add: right", { timeout: 20_000 });
-    await expect(page.getByTestId("mark-chargeToAddKg")).toContainText("yours blank (no estimate)");
+    await expect(page.getByTestId("mark-chargeToAddKg")).toContainText("yours blank · estimate none");
     await expect(page.getByTestId("charge-to-add-result")).toContainText("receiver");
   });
 

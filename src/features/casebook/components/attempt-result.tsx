@@ -45,7 +45,7 @@ export function AttemptResult({
           : `${formatNumber(value as number, 1)} kJ/kg`
         : quantity === "mass"
           ? value === null
-            ? "blank (no estimate)"
+            ? "blank"
             : signedKg(value as number)
           : withUnit(value as number | null, quantity, units, 0);
   return (
@@ -79,7 +79,7 @@ export function AttemptResult({
                   </p>
                   <p className="num text-sm">
                     yours {show(mark.given, quantity)} · {mark.field === "chargeToAddKg" ? "estimate" : "correct"}{" "}
-                    {show(mark.expected, quantity)}
+                    {mark.field === "chargeToAddKg" && mark.expected === null ? "none" : show(mark.expected, quantity)}
                     {!mark.correct && mark.differenceK !== null && (
                       <> · off by {withUnit(Math.abs(mark.differenceK), "difference", units, 0)}</>
                     )}
