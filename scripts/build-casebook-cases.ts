@@ -17,6 +17,8 @@ type Spec = {
   reasoning: string; safetyTopics?: BuiltInCase["safetyTopics"]; sources: string[];
   /** Also asks the refrigerating effect and discharge superheat from the pressure–enthalpy diagram (issue 18). */
   cycle?: true;
+  /** Also asks the charge to add, from the engine's charge-deviation estimate (issue 14); the readings carry `chargeKg`. */
+  charge?: true;
 };
 const COMFORT = { returnAirDryBulbC: 26.7, returnAirWetBulbC: 19.4, supplyAirDryBulbC: 15.7, outdoorAirDryBulbC: 35 };
 const WATTLE = "Wattle Lane Clinic, a two-storey community health clinic (Bellbird Mechanical maintenance contract)";
@@ -211,6 +213,28 @@ const SPECS: Spec[] = [
     story: { site: WATTLE, equipment: SPLIT, complaint: "The compressor trips on its thermal protector on hot afternoons; the discharge line is too hot to touch.", conditions: "Hot afternoon; test mode for 20 minutes." },
     design: d("R32", "eev", 3, 40, 16, 1), readings: { returnAirDryBulbC: 25, returnAirWetBulbC: 17.5, supplyAirDryBulbC: 18, outdoorAirDryBulbC: 34, dischargeLineTempC: 112, runMinutes: 20 },
     reasoning: "Almost no subcooling with high superheat is a shortage; the starved compressor runs hot, and the diagram shows the discharge far above its dew point with a small refrigerating effect per kilogram.", safetyTopics: ["nitrogen"], sources: ["S14", "S21", "S24"] },
+  // ----- Charge to add (issue 14): how much, from the engine's estimate, right anywhere within its range
+  { id: "banksia-dental-txv-how-much-to-add", title: "Banksia Street Dental: how much to put back after the flare repair?", difficulty: "intermediate", state: "undercharged", charge: true,
+    story: { site: "Banksia Street Dental, a single-storey surgery (invented)", equipment: "Ducted split on R410A with a TXV; nameplate target subcooling 6 K; correct charge 3.2 kg (factory charge plus the 12 m line set). Its reference point was set when the charge was weighed in after last spring's coil replacement: subcooling 6.2 K and superheat 6 K at 8 °C evaporating and 43 °C condensing, with 32 °C outdoors and 25 °C return air", complaint: "Surgery warm by the afternoon list; a leaking flare at the indoor coil was found and re-made, and the nitrogen test held. Nobody knows how much leaked out.", conditions: "Hot afternoon; unit running 25 minutes after the repair." },
+    design: d("R410A", "txv", 5, 41, 12, 2), readings: { ...COMFORT, supplyAirDryBulbC: 17.5, outdoorAirDryBulbC: 33, targetSubcoolingK: 6, runMinutes: 25, chargeKg: 3.2, liquidLineLengthM: 12,
+      chargeReference: { subcoolingK: 6.2, superheatK: 6, evaporatingTempC: 8, condensingTempC: 43, outdoorAirDryBulbC: 32, returnAirDryBulbC: 25 } },
+    reasoning: "On a TXV the charge shows in subcooling: 2 K against the 6.2 K this circuit settled at on its weighed-in charge is a shortage of about half a kilogram, with a narrow range because it is measured against the unit's own reference point. Add it in steps as liquid and let each settle.",
+    sources: ["S14", "S22", "Li & Braun 2009 (virtual refrigerant charge)", "common practice (charging in steps)"] },
+  { id: "ironbark-bowls-piston-how-much-to-add", title: "Ironbark Bowls Club: how much is the old piston unit short?", difficulty: "advanced", state: "undercharged", charge: true,
+    story: { site: "Ironbark Bowls Club, clubhouse bar (invented)", equipment: "Older packaged unit on R22 with a piston; nameplate charge 2.6 kg, no line set; never weighed in since the club bought it, so it has no reference point", complaint: "Bar warm on a busy Saturday; oily dust on the liquid service valve cap. The valve core was replaced and the leak test passed.", conditions: "Hot afternoon; unit running 20 minutes; wet bulb measured in the return." },
+    design: d("R22", "fixed-orifice", 2, 43, 20, 2), readings: { ...COMFORT, supplyAirDryBulbC: 19, runMinutes: 20, chargeKg: 2.6, liquidLineLengthM: 2 },
+    reasoning: "Superheat far above the piston's target with little subcooling: short of charge. Without a reference point the estimate stands on generic coefficients, so its range is wide: add in small steps and judge the superheat after each, never the whole amount at once.",
+    safetyTopics: ["nitrogen"], sources: ["S10", "S17", "S22", "Li & Braun 2009 (virtual refrigerant charge)", "common practice (charging in steps)"] },
+  { id: "banksia-dental-r32-how-much-to-recover", title: "Banksia Street Dental: topped up by the gauges, how much comes out?", difficulty: "intermediate", state: "overcharged", charge: true,
+    story: { site: "Banksia Street Dental, a single-storey surgery (invented)", equipment: "Ducted split on R32 with a TXV serving the treatment rooms; nameplate target superheat 5 K and subcooling 5 K; correct charge 1.8 kg (factory charge plus the 7.5 m line set)", complaint: "Another firm changed the compressor in January and charged 'by the gauges'; since then it trips on high pressure on hot afternoons.", conditions: "Hot afternoon; unit running 25 minutes." },
+    design: d("R32", "txv", 9, 52, 5, 11), readings: { ...COMFORT, supplyAirDryBulbC: 15, outdoorAirDryBulbC: 34, targetSuperheatK: 5, targetSubcoolingK: 5, runMinutes: 25, chargeKg: 1.8, liquidLineLengthM: 7.5 },
+    reasoning: "Subcooling twice its target with high head pressure while the TXV holds its superheat: refrigerant stacked in the condenser. The estimate says how much to recover into a weighed cylinder; generic coefficients, so take it out in steps and re-read.",
+    safetyTopics: ["recovery-cylinder"], sources: ["S21", "S23", "Li & Braun 2009 (virtual refrigerant charge)", "common practice (charging in steps)"] },
+  { id: "wattle-lane-cool-room-how-much-to-add", title: "Wattle Lane cool room: how much to add? (a trick question)", difficulty: "advanced", state: "undercharged", charge: true,
+    story: { site: WATTLE, equipment: `${COOL}; receiver on the condensing unit; nameplate charge 4.5 kg`, complaint: "Bubbles in the sight glass and the room slow to pull down; the leak at a Schrader core has been fixed.", conditions: "Mild morning; compressor running continuously for 30 minutes." },
+    design: d("R404A", "txv", -14, 34, 11, 0.5), readings: { ...COOL_T, returnAirDryBulbC: 7, outdoorAirDryBulbC: 28, runMinutes: 30, chargeKg: 4.5 },
+    reasoning: "Short of charge, but a receiver holds a varying amount of liquid that the subcooling does not show, so no amount can be estimated from these readings: leave it blank, and charge to a clear sight glass or recover and weigh in the nameplate charge.",
+    safetyTopics: ["nitrogen"], sources: ["S14", "S21", "S22", "Li & Braun 2009 (virtual refrigerant charge)"] },
 ];
 
 /** What each site's equipment does (the bands the engine judges it by). */
@@ -229,7 +253,8 @@ const cases: BuiltInCase[] = SPECS.map((spec) => {
   const result = diagnose(input);
   if (result.chargeState !== spec.state) console.error(`!! ${spec.id}: engine says ${result.chargeState}, wanted ${spec.state}`, result.alternatives.slice(0, 2), result.warnings.map((w) => w.code));
   const cycle = spec.cycle ? measuredCycle(input) : undefined;
-  const expected = expectedAnswers(result, cycle);
+  const expected = expectedAnswers(result, cycle, spec.charge === true);
+  if (spec.charge) console.log(`${spec.id}: charge deviation`, result.chargeDeviation ?? result.chargeDeviationNote);
   const r3 = (v: number | null) => (v === null ? null : Number(v.toFixed(3)));
   const cycleAnswers = cycle ? { refrigeratingEffectKJPerKg: r3(expected.refrigeratingEffectKJPerKg ?? null), dischargeSuperheatK: r3(expected.dischargeSuperheatK ?? null) } : {};
   return {
@@ -242,7 +267,7 @@ const cases: BuiltInCase[] = SPECS.map((spec) => {
 });
 const file = BuiltInCaseFileSchema.parse({
   format: BUILT_IN_CASE_FORMAT, version: 1,
-  generatedBy: "Written by intent (design saturation temperatures, superheat, subcooling); pressures from designCaseInput (saturationPressure, 101.325 kPa, rounded to 1 kPa gauge); expected answers from diagnose() via expectedAnswers() (and measuredCycle() for the cases that ask about the cycle), rounded to 0.001. All sites and readings invented.",
+  generatedBy: "Written by intent (design saturation temperatures, superheat, subcooling); pressures from designCaseInput (saturationPressure, 101.325 kPa, rounded to 1 kPa gauge); expected answers from diagnose() via expectedAnswers() (and measuredCycle() for the cases that ask about the cycle; the charge deviation, as diagnose() rounds it, for the cases that ask the charge to add), rounded to 0.001. All sites and readings invented.",
   cases,
 });
 writeFileSync("data/casebook/built-in-cases.json", `${JSON.stringify(file, null, 2)}\n`);

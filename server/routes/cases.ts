@@ -1,8 +1,9 @@
 import { randomInt } from "node:crypto";
 import { Router, type Response } from "express";
 import { chargeStateText } from "@shared/content/charge-states.ts";
-import { diagnose, expectedAnswers, generateCase, seededRandom } from "@shared/engine/index.ts";
+import { authoredAnswers, diagnose, generateCase, seededRandom } from "@shared/engine/index.ts";
 import {
+  asksChargeToAdd,
   CaseDraftSchema,
   CaseFromReadingSchema,
   cycleQuestionsOf,
@@ -53,6 +54,7 @@ function toCase(record: CaseRecord, showAnswers: boolean): Case {
     safetyTopics: record.safetyTopics,
     expected: showAnswers ? record.expected : null,
     cycleQuestions: cycleQuestionsOf(record.expected),
+    chargeQuestion: asksChargeToAdd(record.expected),
     authorName: record.authorName,
     fromReading: record.fromReading,
     editable: showAnswers && record.source === "organisation",
@@ -67,9 +69,12 @@ function refuseSharedCase(id: string, status: 403 | 409 = 403) {
   if (isGeneratedCaseId(id)) throw new HttpError(status, GENERATED_READ_ONLY);
 }
 
-/** Expected answers always come from the engine, never from the author. */
+/**
+ * Expected answers always come from the engine, never from the author; a case that gives the
+ * circuit's correct charge asks the charge to add whenever the engine can estimate it.
+ */
 function withEngineAnswers(draft: CaseDraft) {
-  return { ...draft, expected: expectedAnswers(diagnose(draft.input)) };
+  return { ...draft, expected: authoredAnswers(diagnose(draft.input)) };
 }
 
 const isAuthor = (res: Response) => canCasebook(getAuth(res).user.role, "author");

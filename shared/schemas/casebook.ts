@@ -17,8 +17,10 @@ import { GENERATOR_REFRIGERANTS } from "../engine/casebook/generate-case.ts";
 import { ROLES, type Role } from "./auth.ts";
 import {
   ApplicationSchema,
+  ChargeDeviationSchema,
   ChargeStateSchema,
   DiagnosisInputSchema,
+  MAX_CIRCUIT_CHARGE_KG,
   MeteringDeviceSchema,
   TargetBandSchema,
   WarningCodeSchema,
@@ -125,6 +127,13 @@ export const CaseExpectedSchema = z.object({
    */
   refrigeratingEffectKJPerKg: z.number().nullable().optional(),
   dischargeSuperheatK: z.number().nullable().optional(),
+  /**
+   * The charge-to-add question (issue 14), present only when the case asks it: the engine's
+   * charge deviation for the readings (kg over the correct charge, negative = short, with its
+   * range, basis and source), or null with `chargeDeviationNote` saying why there is none.
+   */
+  chargeDeviation: ChargeDeviationSchema.nullable().optional(),
+  chargeDeviationNote: z.string().nullable().optional(),
 });
 export type CaseExpected = z.infer<typeof CaseExpectedSchema>;
 
@@ -135,6 +144,14 @@ export type CycleAnswerField = (typeof CYCLE_ANSWER_FIELDS)[number];
 /** The cycle questions a case asks: those its expected answers carry. */
 export function cycleQuestionsOf(expected: CaseExpected): CycleAnswerField[] {
   return CYCLE_ANSWER_FIELDS.filter((field) => expected[field] !== undefined);
+}
+
+/** The charge-to-add answer: kg to add, negative to recover (issue 14). */
+export const CHARGE_ANSWER_FIELD = "chargeToAddKg";
+
+/** Whether a case asks the charge to add: its expected answers carry the engine's estimate (or its absence). */
+export function asksChargeToAdd(expected: CaseExpected): boolean {
+  return expected.chargeDeviation !== undefined;
 }
 
 /** The saturation temperatures a case's pressures were derived from, °C (reproducibility). */
@@ -278,6 +295,8 @@ export const CaseSchema = z.object({
   expected: CaseExpectedSchema.nullable(),
   /** Measured-cycle questions the attempt form adds (shown to everyone; the answers stay hidden). */
   cycleQuestions: z.array(z.enum(CYCLE_ANSWER_FIELDS)).default([]),
+  /** Whether the attempt form asks the charge to add (shown to everyone; the estimate stays hidden). */
+  chargeQuestion: z.boolean().default(false),
   /** Organisation cases: who wrote it and whether it came from a real reading. */
   authorName: z.string().nullable(),
   fromReading: z.boolean(),
@@ -331,6 +350,13 @@ export const AttemptAnswersSchema = z.object({
     .nullable()
     .optional(),
   dischargeSuperheatK: answerNumber("Discharge superheat").nullable().optional(),
+  /** Charge to add, kg (negative: to recover), only for cases that ask it; absent or null = no estimate possible. */
+  chargeToAddKg: z
+    .number({ error: "Charge to add must be a number of kilograms" })
+    .min(-MAX_CIRCUIT_CHARGE_KG, "Charge to add is more than any one circuit holds")
+    .max(MAX_CIRCUIT_CHARGE_KG, "Charge to add is more than any one circuit holds")
+    .nullable()
+    .optional(),
   chargeState: ChargeStateSchema,
   // Single-line text: a pasted paragraph would not be "one line of reasoning".
   reasoning: text({ error: "Write one line of reasoning" })
@@ -352,8 +378,8 @@ export const ANSWER_FIELDS = [
 export type AnswerField = (typeof ANSWER_FIELDS)[number];
 
 export const AnswerMarkSchema = z.object({
-  field: z.enum([...ANSWER_FIELDS, ...CYCLE_ANSWER_FIELDS]),
-  /** Number (°C or K) or charge state; null = no valid value. */
+  field: z.enum([...ANSWER_FIELDS, ...CYCLE_ANSWER_FIELDS, CHARGE_ANSWER_FIELD]),
+  /** Number (°C, K, kJ/kg, or kg to add) or charge state; null = no valid value. */
   expected: z.union([z.number(), ChargeStateSchema]).nullable(),
   given: z.union([z.number(), ChargeStateSchema]).nullable(),
   correct: z.boolean(),
@@ -361,6 +387,8 @@ export const AnswerMarkSchema = z.object({
   differenceK: z.number().nullable(),
   /** given − expected, kJ/kg, for the refrigerating effect. */
   differenceKJPerKg: z.number().nullable().optional(),
+  /** The charge to add: the range (kg to add) an answer is right within; null when the engine gives no estimate. */
+  rangeKg: z.object({ lowKg: z.number(), highKg: z.number() }).nullable().optional(),
 });
 export type AnswerMark = z.infer<typeof AnswerMarkSchema>;
 

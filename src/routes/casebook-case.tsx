@@ -10,6 +10,7 @@ import { ChargeStateBadge } from "@/components/ui/state/charge-state-badge.tsx";
 import { paths } from "@/config/paths.ts";
 import { AttemptForm } from "@/features/casebook/components/attempt-form.tsx";
 import { AttemptResult } from "@/features/casebook/components/attempt-result.tsx";
+import { ChargeToAddPreview } from "@/features/casebook/components/charge-to-add-result.tsx";
 import { CaseStory } from "@/features/casebook/components/case-story.tsx";
 import { WorkedSteps } from "@/features/casebook/components/worked-steps.tsx";
 import { MeasuredCyclePanel } from "@/features/run-log/components/measured-cycle-panel.tsx";
@@ -73,6 +74,7 @@ export default function CasebookCaseRoute() {
           <p className="flex flex-wrap items-center gap-2">
             Expected verdict: <ChargeStateBadge state={data.expected.chargeState} />
           </p>
+          {data.chargeQuestion && <ChargeToAddPreview expected={data.expected} />}
           {data.editable && (
             <div className="flex flex-wrap gap-2">
               <Link to={paths.casebook.edit.getHref(data.id)} className={buttonVariants({ variant: "secondary" })}>
@@ -111,7 +113,7 @@ export default function CasebookCaseRoute() {
 
       {result ? (
         <>
-          <AttemptResult attempt={result} units={units} />
+          <AttemptResult attempt={result} units={units} chargeKg={data.input.chargeKg} />
           <Button variant="secondary" onClick={() => setResult(null)}>
             Try this case again
           </Button>
@@ -124,6 +126,7 @@ export default function CasebookCaseRoute() {
           serverError={attempt.isError ? attempt.error.message : null}
           onSubmit={(answers) => attempt.mutate({ caseId: data.id, answers }, { onSuccess: setResult })}
           cycleQuestions={data.cycleQuestions}
+          chargeQuestion={data.chargeQuestion}
         />
       )}
     </div>

@@ -13,11 +13,13 @@ import type { MeasuredCycle } from "../cycle/measured-cycle.ts";
  *
  * With the case's measured cycle (a case that asks about the cycle, issue 18) the answers also
  * carry its refrigerating effect (kJ/kg) and discharge superheat (K), from measuredCycle().
+ * A case that asks the charge to add (issue 14) also carries the engine's charge deviation, or
+ * null with the reason there is none: then the right answer is to leave it blank.
  *
  * @throws never
  * @example expectedAnswers(diagnose(input)).chargeState // "undercharged"
  */
-export function expectedAnswers(result: DiagnosisResult, cycle?: MeasuredCycle): CaseExpected {
+export function expectedAnswers(result: DiagnosisResult, cycle?: MeasuredCycle, asksChargeToAdd = false): CaseExpected {
   const answers: CaseExpected = {
     evaporatingTempC: result.evaporatingTempC,
     condensingTempC: result.condensingTempC,
@@ -31,6 +33,10 @@ export function expectedAnswers(result: DiagnosisResult, cycle?: MeasuredCycle):
   if (cycle) {
     answers.refrigeratingEffectKJPerKg = cycle.refrigeratingEffectKJPerKg;
     answers.dischargeSuperheatK = cycle.dischargeSuperheatK;
+  }
+  if (asksChargeToAdd) {
+    answers.chargeDeviation = result.chargeDeviation;
+    answers.chargeDeviationNote = result.chargeDeviationNote;
   }
   return answers;
 }

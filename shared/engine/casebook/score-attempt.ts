@@ -1,6 +1,8 @@
 import {
   ANSWER_FIELDS,
   ANSWER_TOLERANCE_K,
+  asksChargeToAdd,
+  CHARGE_ANSWER_FIELD,
   cycleQuestionsOf,
   REFRIGERATING_EFFECT_TOLERANCE_KJ_PER_KG,
   type AnswerMark,
@@ -8,6 +10,10 @@ import {
   type AttemptScore,
   type CaseExpected,
 } from "../../schemas/casebook.ts";
+import { chargeToAdd } from "./charge-to-add.ts";
+
+/** A hair of slack so that a displayed value rounded on the boundary still counts. */
+const BOUNDARY_SLACK = 1e-9;
 
 /**
  * Scores an apprentice's attempt at a case: each of evaporating and condensing saturation
@@ -23,6 +29,11 @@ import {
  * A case that asks measured-cycle questions (issue 18; its expected answers carry them) adds a
  * mark for each: the refrigerating effect right within ±5 kJ/kg (read off a pressure–enthalpy
  * diagram), the discharge superheat within ±0.5 K. Cases without them score as before.
+ *
+ * A case that asks the charge to add (issue 14) adds one more mark: right when the amount (kg to
+ * add, negative to recover) lies within the range the engine states for its estimate, ends
+ * included, since the method cannot tell those amounts apart (virtual refrigerant charge, Li &
+ * Braun 2009); blank is right only when the engine gives no estimate for the readings.
  *
  * @throws never
  * @example scoreAttempt(expected, { ...answers, superheatK: expected.superheatK! + 0.4 }).marks[2].correct // true
@@ -48,7 +59,7 @@ export function scoreAttempt(
       return { field, expected: want, given, correct: want === given, differenceK: null };
     const differenceK = given - want;
     // A hair of slack so that a displayed value rounded to 0.1 on the boundary still counts.
-    return { field, expected: want, given, correct: Math.abs(differenceK) <= toleranceK + 1e-9, differenceK };
+    return { field, expected: want, given, correct: Math.abs(differenceK) <= toleranceK + BOUNDARY_SLACK, differenceK };
   });
   const asked = cycleQuestionsOf(expected);
   for (const field of asked) {
@@ -65,9 +76,24 @@ export function scoreAttempt(
       field,
       expected: want,
       given,
-      correct: Math.abs(difference) <= tolerance + 1e-9,
+      correct: Math.abs(difference) <= tolerance + BOUNDARY_SLACK,
       differenceK: energy ? null : difference,
       ...(energy ? { differenceKJPerKg: difference } : {}),
+    });
+  }
+  if (asksChargeToAdd(expected)) {
+    const toAdd = expected.chargeDeviation ? chargeToAdd(expected.chargeDeviation) : null;
+    const given = answers[CHARGE_ANSWER_FIELD] ?? null;
+    marks.push({
+      field: CHARGE_ANSWER_FIELD,
+      expected: toAdd === null ? null : toAdd.kg,
+      given,
+      correct:
+        toAdd === null || given === null
+          ? toAdd === given
+          : given >= toAdd.lowKg - BOUNDARY_SLACK && given <= toAdd.highKg + BOUNDARY_SLACK,
+      differenceK: null,
+      rangeKg: toAdd === null ? null : { lowKg: toAdd.lowKg, highKg: toAdd.highKg },
     });
   }
   const correctCount = marks.filter((mark) => mark.correct).length;

@@ -2,6 +2,7 @@ import { useId, useState, type FormEvent } from "react";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import {
   AttemptAnswersSchema,
+  CHARGE_ANSWER_FIELD,
   REASONING_MAX_LENGTH,
   type AttemptAnswers,
   type CycleAnswerField,
@@ -41,7 +42,16 @@ const CYCLE_FIELDS: Record<CycleAnswerField, { label: string; hint: string; quan
   dischargeSuperheatK: { label: "Discharge superheat", hint: "Discharge line minus the dew point at the discharge pressure", quantity: "difference" },
 };
 
-type Draft = Record<(typeof NUMBER_FIELDS)[number]["field"] | CycleAnswerField, string> & { chargeState: string; reasoning: string };
+/** The charge-to-add question (issue 14), shown only for cases that ask it. */
+const CHARGE_FIELD = {
+  label: "Charge to add",
+  hint: "Kilograms to add; negative to recover. Leave blank if these readings cannot give an estimate",
+};
+
+type Draft = Record<(typeof NUMBER_FIELDS)[number]["field"] | CycleAnswerField | typeof CHARGE_ANSWER_FIELD, string> & {
+  chargeState: string;
+  reasoning: string;
+};
 const EMPTY: Draft = {
   evaporatingTempC: "",
   condensingTempC: "",
@@ -49,6 +59,7 @@ const EMPTY: Draft = {
   subcoolingK: "",
   refrigeratingEffectKJPerKg: "",
   dischargeSuperheatK: "",
+  chargeToAddKg: "",
   chargeState: "",
   reasoning: "",
 };
@@ -105,6 +116,7 @@ export function AttemptForm({
   serverError,
   onSubmit,
   cycleQuestions = [],
+  chargeQuestion = false,
 }: {
   units: DisplayUnits;
   atmosphericKPa: number;
@@ -113,6 +125,8 @@ export function AttemptForm({
   onSubmit: (answers: AttemptAnswers) => void;
   /** The case's measured-cycle questions, if any. */
   cycleQuestions?: readonly CycleAnswerField[];
+  /** Whether the case asks the charge to add. */
+  chargeQuestion?: boolean;
 }) {
   const [draft, setDraft] = useState<Draft>(EMPTY);
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -132,6 +146,11 @@ export function AttemptForm({
       const parsed = quantity === "energy" ? parseDecimal(draft[field]) : parseQuantity(draft[field], quantity, units, atmosphericKPa);
       if (parsed === "invalid") found[field] = `${label} must be a number, e.g. 165`;
       numbers[field] = parsed === "invalid" || parsed === undefined ? null : parsed;
+    }
+    if (chargeQuestion) {
+      const parsed = parseDecimal(draft[CHARGE_ANSWER_FIELD]);
+      if (parsed === "invalid") found[CHARGE_ANSWER_FIELD] = `${CHARGE_FIELD.label} must be a number of kilograms, e.g. 0.6, or -0.4 to recover`;
+      numbers[CHARGE_ANSWER_FIELD] = parsed === "invalid" || parsed === undefined ? null : parsed;
     }
     if (!draft.evaporatingTempC.trim()) found.evaporatingTempC ??= "Work out the evaporating temperature";
     if (!draft.condensingTempC.trim()) found.condensingTempC ??= "Work out the condensing temperature";
@@ -162,6 +181,13 @@ export function AttemptForm({
       <p className="text-muted">
         Answers count as right within ±0.5 K ({units.temperature === "F" ? "±0.9 °F" : "half a kelvin"})
         {cycleQuestions.includes("refrigeratingEffectKJPerKg") ? ", the refrigerating effect within ±5 kJ/kg" : ""}.
+        {chargeQuestion && (
+          <>
+            {" "}
+            The charge to add is right when it lies within the range of the engine's estimate; the range is shown
+            after you answer.
+          </>
+        )}
       </p>
       <div className="grid gap-4 sm:grid-cols-2">
         {NUMBER_FIELDS.map(({ field, label, hint, quantity }) => (
@@ -186,6 +212,16 @@ export function AttemptForm({
             onChange={set(field)}
           />
         ))}
+        {chargeQuestion && (
+          <NumberAnswer
+            label={CHARGE_FIELD.label}
+            hint={CHARGE_FIELD.hint}
+            unit="kg"
+            value={draft[CHARGE_ANSWER_FIELD]}
+            error={errors[CHARGE_ANSWER_FIELD]}
+            onChange={set(CHARGE_ANSWER_FIELD)}
+          />
+        )}
       </div>
       <SelectField
         label="Charge state"

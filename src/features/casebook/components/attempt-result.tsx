@@ -6,6 +6,8 @@ import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { cn } from "@/lib/cn.ts";
 import { formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { withUnit, type Quantity } from "../utils/quantities.ts";
+import { signedKg } from "../utils/signed-kg.ts";
+import { ChargeToAddResult } from "./charge-to-add-result.tsx";
 import { WorkedSteps } from "./worked-steps.tsx";
 
 /** "energy": a specific enthalpy difference, kJ/kg in every unit system. */
@@ -17,10 +19,20 @@ const FIELD_LABELS: Record<AnswerMark["field"], { label: string; quantity: Quant
   chargeState: { label: "Charge state", quantity: null },
   refrigeratingEffectKJPerKg: { label: "Refrigerating effect", quantity: "energy" },
   dischargeSuperheatK: { label: "Discharge superheat", quantity: "difference" },
+  chargeToAddKg: { label: "Charge to add", quantity: "mass" },
 };
 
 /** Which answers were right, the working step by step, and the safety notes that apply. */
-export function AttemptResult({ attempt, units }: { attempt: Attempt; units: DisplayUnits }) {
+export function AttemptResult({
+  attempt,
+  units,
+  chargeKg,
+}: {
+  attempt: Attempt;
+  units: DisplayUnits;
+  /** The case's correct charge, kg, for the charging plan of a case that asks the charge to add. */
+  chargeKg?: number;
+}) {
   const { score } = attempt;
   const show = (value: number | string | null, quantity: Quantity | "energy" | null) =>
     quantity === null
@@ -31,7 +43,11 @@ export function AttemptResult({ attempt, units }: { attempt: Attempt; units: Dis
         ? value === null
           ? "none"
           : `${formatNumber(value as number, 1)} kJ/kg`
-        : withUnit(value as number | null, quantity, units, 0);
+        : quantity === "mass"
+          ? value === null
+            ? "blank"
+            : signedKg(value as number)
+          : withUnit(value as number | null, quantity, units, 0);
   return (
     <div className="space-y-5">
       <section
@@ -62,11 +78,18 @@ export function AttemptResult({ attempt, units }: { attempt: Attempt; units: Dis
                     </span>
                   </p>
                   <p className="num text-sm">
-                    yours {show(mark.given, quantity)} · correct {show(mark.expected, quantity)}
+                    yours {show(mark.given, quantity)} · {mark.field === "chargeToAddKg" ? "estimate" : "correct"}{" "}
+                    {mark.field === "chargeToAddKg" && mark.expected === null ? "none" : show(mark.expected, quantity)}
                     {!mark.correct && mark.differenceK !== null && (
                       <> · off by {withUnit(Math.abs(mark.differenceK), "difference", units, 0)}</>
                     )}
                     {!mark.correct && mark.differenceKJPerKg != null && <> · off by {formatNumber(Math.abs(mark.differenceKJPerKg), 1)} kJ/kg</>}
+                    {mark.rangeKg && (
+                      <>
+                        {" "}
+                        · right from {signedKg(mark.rangeKg.lowKg)} to {signedKg(mark.rangeKg.highKg)}
+                      </>
+                    )}
                   </p>
                 </div>
               </li>
@@ -82,6 +105,8 @@ export function AttemptResult({ attempt, units }: { attempt: Attempt; units: Dis
           </p>
         )}
       </section>
+
+      <ChargeToAddResult attempt={attempt} chargeKg={chargeKg} />
 
       <section aria-labelledby="working-heading" className="rounded-card border-2 border-rule bg-surface p-4">
         <h2 id="working-heading" className="text-xl font-semibold">

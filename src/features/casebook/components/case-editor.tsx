@@ -2,9 +2,10 @@ import { useMemo, useState, type FormEvent, type ReactNode } from "react";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { cautions } from "@shared/content/cautions.ts";
 import {
+  authoredAnswers,
+  chargeToAdd,
   diagnose,
   DiagnosisInputError,
-  expectedAnswers,
   listRefrigerants,
   workedSolution,
 } from "@shared/engine/index.ts";
@@ -21,6 +22,7 @@ import {
 } from "@shared/schemas/casebook.ts";
 import {
   METERING_DEVICES,
+  type ChargeReference,
   type DiagnosisInput,
   type LiquidTempLocation,
   type MeteringDevice,
@@ -32,6 +34,7 @@ import { ChargeStateBadge } from "@/components/ui/state/charge-state-badge.tsx";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { CASE_READINGS, METERING_LABELS } from "../utils/case-readings.ts";
 import { formatQuantity, parseQuantity, unitLabel, withUnit } from "../utils/quantities.ts";
+import { signedKg } from "../utils/signed-kg.ts";
 import { WorkedSteps } from "./worked-steps.tsx";
 
 type ReadingField = (typeof CASE_READINGS)[number]["field"];
@@ -53,6 +56,8 @@ interface EditorState {
   readings: Record<ReadingField, string>;
   reasoning: string;
   safetyTopics: SafetyNote["topic"][];
+  /** Kept as it came (a case from a reading of a circuit with one); the editor does not change it. */
+  chargeReference?: ChargeReference;
 }
 
 function initialState(item: Case | undefined, units: DisplayUnits, atmosphericKPa: number): EditorState {
@@ -72,6 +77,7 @@ function initialState(item: Case | undefined, units: DisplayUnits, atmosphericKP
     readings,
     reasoning: item?.reasoning ?? "",
     safetyTopics: item?.safetyTopics ?? [],
+    ...(item?.input.chargeReference ? { chargeReference: item.input.chargeReference } : {}),
   };
 }
 
@@ -91,6 +97,7 @@ function toInput(
     else if (REQUIRED.includes(field)) errors[`input.${field}`] = `${label} is needed`;
   }
   if (atmosphericKPa !== 101.325) input.atmosphericPressureKPa = atmosphericKPa;
+  if (state.chargeReference) input.chargeReference = state.chargeReference;
   return { input: input as Partial<DiagnosisInput>, errors };
 }
 
@@ -126,9 +133,11 @@ export function CaseEditor({
     try {
       const input = converted.input as DiagnosisInput;
       const result = diagnose(input);
+      const expected = authoredAnswers(result);
       return {
         result,
-        expected: expectedAnswers(result),
+        expected,
+        toAdd: expected.chargeDeviation ? chargeToAdd(expected.chargeDeviation) : null,
         steps: workedSolution(input, result, state.reasoning.trim() || null),
       };
     } catch (error) {
@@ -342,7 +351,19 @@ export function CaseEditor({
               <dd>{withUnit(preview.expected!.superheatK, "difference", units, 0)}</dd>
               <dt>Subcooling</dt>
               <dd>{withUnit(preview.expected!.subcoolingK, "difference", units, 0)}</dd>
+              {preview.toAdd && (
+                <>
+                  <dt>Charge to add</dt>
+                  <dd data-testid="preview-charge-to-add">{signedKg(preview.toAdd.kg)}</dd>
+                </>
+              )}
             </dl>
+            {/* Says whether the case asks the charge to add, the same rule the server applies on save. */}
+            <p className="text-sm text-muted">
+              {preview.toAdd
+                ? `Apprentices are also asked the charge to add, right from ${signedKg(preview.toAdd.lowKg)} to ${signedKg(preview.toAdd.highKg)} (${preview.expected!.chargeDeviation!.basis === "unit-reference" ? "against the circuit's own reference point" : "generic coefficients, a wide range"}).`
+                : `No charge-to-add question: ${preview.result!.chargeDeviationNote ?? "the engine gives no estimate"}.`}
+            </p>
             <details>
               <summary className="min-h-touch cursor-pointer py-2 font-medium">
                 The working apprentices will see

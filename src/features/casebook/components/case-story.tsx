@@ -1,5 +1,6 @@
 import { applicationText } from "@shared/content/applications.ts";
 import type { Case } from "@shared/schemas/casebook.ts";
+import type { ChargeReference } from "@shared/schemas/diagnosis.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { CASE_READINGS, METERING_LABELS } from "../utils/case-readings.ts";
 import { unitLabel, formatQuantity } from "../utils/quantities.ts";
@@ -10,6 +11,16 @@ const GROUP_TITLES = {
   electrical: "Running",
   nameplate: "From the nameplate",
 } as const;
+
+/** The reference point's readings, in the order the story tells them. */
+const REFERENCE_ROWS: { field: keyof ChargeReference; label: string; quantity: "temperature" | "difference" }[] = [
+  { field: "subcoolingK", label: "Subcooling", quantity: "difference" },
+  { field: "superheatK", label: "Superheat", quantity: "difference" },
+  { field: "evaporatingTempC", label: "Evaporating (dew)", quantity: "temperature" },
+  { field: "condensingTempC", label: "Condensing (bubble)", quantity: "temperature" },
+  { field: "outdoorAirDryBulbC", label: "Outdoor air", quantity: "temperature" },
+  { field: "returnAirDryBulbC", label: "Return air", quantity: "temperature" },
+];
 
 /** The story and the readings the technician took, in the user's display units. */
 export function CaseStory({
@@ -84,6 +95,31 @@ export function CaseStory({
             </table>
           </div>
         ))}
+        {input.chargeReference && (
+          <div data-testid="charge-reference">
+            <h3 className="font-semibold">This circuit's reference point</h3>
+            <p className="mb-1 text-sm text-muted">Settled readings at its correct charge, after a weigh-in</p>
+            <table className="w-full text-left">
+              <tbody>
+                {REFERENCE_ROWS.map(({ field, label, quantity }) => {
+                  const value = input.chargeReference![field];
+                  if (value === null) return null;
+                  return (
+                    <tr key={field} className="border-t border-rule">
+                      <th scope="row" className="py-2 pr-2 font-normal">
+                        {label}
+                      </th>
+                      <td className="num py-2 text-right text-lg whitespace-nowrap">
+                        {formatQuantity(value, quantity, units, input.atmosphericPressureKPa ?? atmosphericKPa)}{" "}
+                        <span className="text-sm text-muted">{unitLabel(quantity, units)}</span>
+                      </td>
+                    </tr>
+                  );
+                })}
+              </tbody>
+            </table>
+          </div>
+        )}
       </div>
     </section>
   );

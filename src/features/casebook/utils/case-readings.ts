@@ -23,6 +23,9 @@ export const CASE_READINGS: {
   { field: "compressorRla", label: "Compressor RLA (nameplate)", quantity: "current", group: "nameplate" },
   { field: "targetSuperheatK", label: "Target superheat (nameplate)", quantity: "difference", group: "nameplate" },
   { field: "targetSubcoolingK", label: "Target subcooling (nameplate)", quantity: "difference", group: "nameplate" },
+  // The circuit's correct charge lets the engine estimate the charge to add (issue 14).
+  { field: "chargeKg", label: "Correct charge (nameplate plus line set)", quantity: "mass", group: "nameplate" },
+  { field: "liquidLineLengthM", label: "Liquid line length", quantity: "length", group: "nameplate" },
   { field: "runMinutes", label: "Running time", quantity: "minutes", group: "electrical" },
 ];
 

@@ -13,8 +13,13 @@ import {
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
 
-/** What a number is, so it shows and converts in the user's display units; storage stays SI-metric. */
-export type Quantity = "pressure" | "temperature" | "difference" | "current" | "minutes" | "percent";
+/**
+ * What a number is, so it shows and converts in the user's display units; storage stays SI-metric.
+ * Charge (kg) and line length (m) are shown metric whatever the display units: the display
+ * settings have no mass or length unit yet.
+ */
+export type Quantity =
+  "pressure" | "temperature" | "difference" | "current" | "minutes" | "percent" | "mass" | "length";
 
 export function unitLabel(quantity: Quantity, units: DisplayUnits): string {
   switch (quantity) {
@@ -30,6 +35,10 @@ export function unitLabel(quantity: Quantity, units: DisplayUnits): string {
       return "min";
     case "percent":
       return "%";
+    case "mass":
+      return "kg";
+    case "length":
+      return "m";
   }
 }
 
