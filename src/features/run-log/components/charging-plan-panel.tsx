@@ -59,10 +59,10 @@ export function ChargingPlanPanel({ result, input, series, isBlend }: ChargingPl
       {plan ? (
         <>
           <p className="font-medium">{plan.summary}.</p>
-          <ol className="num list-decimal space-y-1 pl-6">
+          <ol className="list-decimal space-y-1 pl-6">
             {plan.steps.map((step, index) => (
               <li key={index}>
-                {plan.action === "add" ? "Add" : "Recover"} {kgText(step)}, log it as an adjustment with its weight,
+                {plan.action === "add" ? "Add" : "Recover"} <span className="num">{kgText(step)}</span>, log it as an adjustment with its weight,
                 then wait {plan.settleMinutes} min and save a reading
               </li>
             ))}
