@@ -1,6 +1,7 @@
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { applicationText } from "@shared/content/applications.ts";
 import { Printer } from "lucide-react";
+import { useState } from "react";
 import { Link, useParams } from "react-router-dom";
 import { ADJUSTMENT_KIND_LABELS, isStanding, VISIT_STATUS_LABELS } from "@shared/schemas/visits.ts";
 import { can } from "@shared/schemas/auth.ts";
@@ -25,7 +26,13 @@ import { useVisit } from "@/lib/api/visits.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
 
 /** Width that fits an A4 page inside its print margins at 96 px per inch (≈ 180 mm). */
+/**
+ * Charts are drawn at a fixed width so the printed page is laid out the same everywhere; on a
+ * phone the same width would push the page sideways, so it shrinks to the screen there.
+ */
 const PRINT_CHART_WIDTH = 680;
+const SCREEN_MARGIN_PX = 32;
+const chartWidthFor = (viewportWidth: number) => Math.max(280, Math.min(PRINT_CHART_WIDTH, viewportWidth - SCREEN_MARGIN_PX));
 const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
 
 export default function VisitReportRoute() {
@@ -34,6 +41,7 @@ export default function VisitReportRoute() {
   const equipment = useEquipmentDetail(visit.data?.equipmentId ?? "");
   const me = useMe();
   const { units } = useDisplayUnits();
+  const [chartWidth] = useState(() => chartWidthFor(typeof window === "undefined" ? PRINT_CHART_WIDTH + SCREEN_MARGIN_PX : window.innerWidth));
 
   if (visit.isPending || (visit.isSuccess && equipment.isPending)) return <p aria-busy="true">Preparing the report…</p>;
   if (visit.isError || equipment.isError) {
@@ -109,7 +117,7 @@ export default function VisitReportRoute() {
               Circuit {circuit.number}
             </h2>
             <ReadingsTable readings={series.readings} units={units} atmosphericKPa={atmosphericKPa} />
-            {series.points.length > 0 && <TrendChart series={series} units={units} width={PRINT_CHART_WIDTH} height={260} />}
+            {series.points.length > 0 && <TrendChart series={series} units={units} width={chartWidth} height={260} />}
             {last && (
               <p className="text-sm text-muted">
                 Judged as {applicationText[last.result.application].label.toLowerCase()}
@@ -117,7 +125,7 @@ export default function VisitReportRoute() {
                 <span className="num">{formatNumber(last.result.atmosphericPressureKPa, 1)} kPa</span> atmosphere.
               </p>
             )}
-            {last && <MeasuredCyclePanel mode="report" input={last.input} previousInput={series.readings.at(-2)?.input ?? null} units={units} width={PRINT_CHART_WIDTH} />}
+            {last && <MeasuredCyclePanel mode="report" input={last.input} previousInput={series.readings.at(-2)?.input ?? null} units={units} width={chartWidth} />}
             {last && <FindingPanel result={last.result} expanded />}
           </section>
         );
@@ -145,7 +153,7 @@ export default function VisitReportRoute() {
       <ElectricalReport visitId={data.id} />
       <LeakSearchReport visitId={data.id} />
       <PressureTestReport visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} />
-      <EvacuationReport visitId={data.id} chartWidth={PRINT_CHART_WIDTH} />
+      <EvacuationReport visitId={data.id} chartWidth={chartWidth} />
       <RefrigerantReport visitId={data.id} readings={data.readings} />
 
       {data.photos.length > 0 && (
