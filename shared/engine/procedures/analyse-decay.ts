@@ -83,7 +83,13 @@ export function analyseDecay(samples: readonly { minutes: number; microns: numbe
   }
   if (levelledOff) {
     const risen = peakMicrons > first.microns;
-    const what = risen ? `rose above ${holdMicrons} microns and levelled off at ${Math.round(finalMicrons)}` : `stayed above ${holdMicrons} microns without rising (${Math.round(finalMicrons)})`;
+    // "Rose above" only when the pull-down had reached the hold limit; otherwise it never got there.
+    const what =
+      first.microns > holdMicrons
+        ? `started at ${Math.round(first.microns)} microns (the pull-down never reached ${holdMicrons}) and ${risen ? "levelled off" : "stayed"} at ${Math.round(finalMicrons)}`
+        : risen
+          ? `rose above ${holdMicrons} microns and levelled off at ${Math.round(finalMicrons)}`
+          : `stayed above ${holdMicrons} microns without rising (${Math.round(finalMicrons)})`;
     return { verdict: "moisture", ...common, reason: `Moisture: ${what} within ${span}; the system looks tight but wet: evacuate longer (triple evacuate, warm cold spots).${short}` };
   }
   const why = earlierRate === null ? "; with only two readings a levelling-off cannot be seen, so take more readings" : "";

@@ -72,6 +72,14 @@ describe("analyseDecay", () => {
     expect(result.reason).toMatch(/evacuate longer/);
   });
 
+  it("does not say the reading rose above the hold limit when the pull-down never reached it", () => {
+    // Synthetic: valved off at 900 microns (above the 500 µm target), levelling near 1500.
+    const result = analyseDecay(sampled((t) => 900 + 600 * (1 - Math.exp(-t / 3))));
+    expect(result.verdict).toBe("moisture");
+    expect(result.reason).toMatch(/started at 900 microns \(the pull-down never reached 500\)/);
+    expect(result.reason).not.toMatch(/rose above/);
+  });
+
   it("moisture: rises and holds near 5000 microns ([S54] reads that as moisture)", () => {
     const result = analyseDecay(sampled((t) => 250 + 4600 * (1 - Math.exp(-t / 2.5)), 30, 3));
     expect(result.finalMicrons).toBeLessThanOrEqual(5000);

@@ -83,7 +83,15 @@ export function MovementForm({
           )}
           .
         </p>
-        {rule.intoCylinder && limit !== null && <VerdictLine result={judgeCylinderFill({ contentsKg: after, maxContentsKg: limit })} showSource={false} />}
+        {rule.intoCylinder && limit !== null && after > limit ? (
+          // The register refuses a movement past the limit, so say that, not a verdict on a fill that will not happen.
+          <p className="font-medium text-fault" data-testid="overfill-refused">
+            ⚠ Will be refused: that is past the 80 % fill limit (room for <span className="num">{formatKg(Math.max(0, limit - chosen.contentsKg))}</span>). Stop
+            at the limit and switch to another recovery cylinder; log each cylinder&apos;s share.
+          </p>
+        ) : (
+          rule.intoCylinder && limit !== null && <VerdictLine result={judgeCylinderFill({ contentsKg: after, maxContentsKg: limit })} showSource={false} />
+        )}
         {!rule.intoCylinder && after < 0 && <p className="font-medium text-fault">⚠ More than the register says is in the cylinder ({formatKg(chosen.contentsKg)}).</p>}
       </div>
     );
