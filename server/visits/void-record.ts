@@ -69,7 +69,9 @@ const SUMMARIES: Record<VoidableKind, (row: RawRow) => string> = {
   "leak-search": (row) => `Leak search by ${LEAK_METHOD_LABELS[row.method as LeakMethod].toLowerCase()}`,
   "standing-pressure": (row) => {
     const input = row.input as Json;
-    return `Standing pressure ${input.standingGaugeKPa} kPa gauge at ${input.equalisedTempC} °C (${input.refrigerant})`;
+    // Typed in psi or °F, the stored SI figures carry long fractions; a tenth is what a gauge shows.
+    const tenths = (value: unknown) => Number(Number(value).toFixed(1));
+    return `Standing pressure ${tenths(input.standingGaugeKPa)} kPa gauge at ${tenths(input.equalisedTempC)} °C (${input.refrigerant})`;
   },
   "pressure-test": (row) => {
     const input = row.input as Json;
