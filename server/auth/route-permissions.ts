@@ -80,6 +80,8 @@ export const ROUTE_PERMISSIONS = {
   "POST /api/visits/:id/electrical-checks": PERMISSIONS.writeRecords,
   "GET /api/visits/:id/leak-searches": SIGNED_IN,
   "POST /api/visits/:id/leak-searches": PERMISSIONS.writeRecords,
+  "GET /api/visits/:id/standing-pressure-checks": SIGNED_IN,
+  "POST /api/visits/:id/standing-pressure-checks": PERMISSIONS.writeRecords,
   "GET /api/visits/:id/pressure-tests": SIGNED_IN,
   "POST /api/visits/:id/pressure-tests": PERMISSIONS.writeRecords,
   "GET /api/visits/:id/evacuations": SIGNED_IN,

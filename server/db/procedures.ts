@@ -1,6 +1,6 @@
 /**
- * Queries for a visit's procedure records (electrical checks, leak searches, pressure tests,
- * evacuations). Callers have already found the visit within their organisation; every insert
+ * Queries for a visit's procedure records (electrical checks, leak searches, standing-pressure
+ * checks, pressure tests, evacuations). Callers have already found the visit within their organisation; every insert
  * still carries the organisation id and every read filters by it, so a record of another
  * organisation reads as missing.
  */
@@ -17,12 +17,14 @@ import type {
   PressureTestRecordInput,
   PressureTestRecordResult,
   ProcedureSettings,
+  StandingPressureCheck,
+  StandingPressureRecordInput,
 } from "@shared/schemas/procedure-records.ts";
 import { ProcedureSettingsSchema } from "@shared/schemas/procedure-records.ts";
-import type { Verdict } from "@shared/schemas/procedures.ts";
+import type { StandingPressureResult, Verdict } from "@shared/schemas/procedures.ts";
 import type { Database } from "./client.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
-import { electricalChecks, evacuations, leakSearches, organisations, pressureTests } from "./schema.ts";
+import { electricalChecks, evacuations, leakSearches, organisations, pressureTests, standingPressureChecks } from "./schema.ts";
 
 /** The people a record names: who recorded it and who voided it. */
 const mentioned = (rows: { recordedBy: string | null; voidedBy: string | null }[]) => rows.flatMap((row) => [row.recordedBy, row.voidedBy]);
@@ -116,6 +118,49 @@ export async function insertLeakSearch(
     })
     .returning();
   return toLeakSearch(row, await peopleById(db, mentioned([row])));
+}
+
+// ---- standing-pressure checks ---------------------------------------------------------------
+
+function toStandingPressureCheck(row: typeof standingPressureChecks.$inferSelect, people: People): StandingPressureCheck {
+  return {
+    id: row.id,
+    visitId: row.visitId,
+    takenAt: row.takenAt.toISOString(),
+    recordedBy: person(people, row.recordedBy),
+    voided: voidInfo(row, people),
+    input: row.input as unknown as StandingPressureRecordInput,
+    result: row.result as unknown as StandingPressureResult,
+  };
+}
+
+export async function listStandingPressureChecks(db: Database, organisationId: string, visitId: string): Promise<StandingPressureCheck[]> {
+  const rows = await db
+    .select()
+    .from(standingPressureChecks)
+    .where(and(eq(standingPressureChecks.organisationId, organisationId), eq(standingPressureChecks.visitId, visitId)))
+    .orderBy(asc(standingPressureChecks.takenAt));
+  const people = await peopleById(db, mentioned(rows));
+  return rows.map((row) => toStandingPressureCheck(row, people));
+}
+
+export async function insertStandingPressureCheck(
+  db: Database,
+  organisationId: string,
+  values: { visitId: string; input: StandingPressureRecordInput; result: StandingPressureResult; recordedBy: string },
+): Promise<StandingPressureCheck> {
+  const [row] = await db
+    .insert(standingPressureChecks)
+    .values({
+      organisationId,
+      visitId: values.visitId,
+      circuit: values.input.circuit,
+      input: values.input as unknown as Record<string, unknown>,
+      result: values.result as unknown as Record<string, unknown>,
+      recordedBy: values.recordedBy,
+    })
+    .returning();
+  return toStandingPressureCheck(row, await peopleById(db, mentioned([row])));
 }
 
 // ---- pressure tests -------------------------------------------------------------------------

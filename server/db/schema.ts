@@ -439,6 +439,33 @@ export const leakSearches = pgTable(
   (table) => [index("leak_searches_visit_idx").on(table.visitId, table.takenAt), voidComplete("leak_searches", table)],
 );
 
+/**
+ * An off-cycle standing-pressure check for non-condensables: the gauge pressure of the stopped
+ * unit against the saturation pressure of the equalised condenser temperature. The input holds
+ * the refrigerant and atmosphere the server supplied, so the stored verdict can be re-derived.
+ */
+export const standingPressureChecks = pgTable(
+  "standing_pressure_checks",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    /** The circuit read, or null for a single-circuit unit or a check not tied to one. */
+    circuit: integer("circuit"),
+    input: jsonb("input").$type<Record<string, unknown>>().notNull(),
+    result: jsonb("result").$type<Record<string, unknown>>().notNull(),
+    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...voidColumns(),
+    createdAt,
+  },
+  (table) => [index("standing_pressure_checks_visit_idx").on(table.visitId, table.takenAt), voidComplete("standing_pressure_checks", table)],
+);
+
 /** A nitrogen strength/tightness test: test pressure against the rated pressure, start and end of the hold. */
 export const pressureTests = pgTable(
   "pressure_tests",

@@ -1,6 +1,6 @@
 /**
  * A visit's procedure records, beside its readings: /api/visits/:id/electrical-checks,
- * /leak-searches, /pressure-tests and /evacuations (with …/:evacuationId/samples to add vacuum
+ * /leak-searches, /standing-pressure-checks, /pressure-tests and /evacuations (with …/:evacuationId/samples to add vacuum
  * readings as they are read, and PATCH …/:evacuationId to valve off the pump). Like readings:
  * bodies are validated with the shared schemas (400 with field messages), the visit is looked
  * up within the caller's organisation (404 otherwise), apprentices only read (403), a visit
@@ -17,12 +17,13 @@ import {
   EvacuationUpdateSchema,
   LeakSearchBodySchema,
   PressureTestBodySchema,
+  StandingPressureBodySchema,
   type ProcedureSettings,
 } from "@shared/schemas/procedure-records.ts";
-import { EVACUATION_LIMITS } from "@shared/engine/index.ts";
+import { EVACUATION_LIMITS, standingPressureOutcome } from "@shared/engine/index.ts";
 import { getAuth } from "../auth/session.ts";
 import type { Database } from "../db/client.ts";
-import { getEquipment } from "../db/equipment.ts";
+import { getEquipment, getSite } from "../db/equipment.ts";
 import {
   findEvacuation,
   getProcedureSettings,
@@ -30,10 +31,12 @@ import {
   insertEvacuation,
   insertLeakSearch,
   insertPressureTest,
+  insertStandingPressureCheck,
   listElectricalChecks,
   listEvacuations,
   listLeakSearches,
   listPressureTests,
+  listStandingPressureChecks,
   updateEvacuation,
 } from "../db/procedures.ts";
 import { findVisit, joinCrew } from "../db/visits.ts";
@@ -41,6 +44,7 @@ import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
 import { requireIfMatch, staleWrite } from "../http/versioning.ts";
+import { siteAtmosphere } from "../visits/reading-input.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import { electricalCheckResult, evacuationResult, leakSearchResult, pressureTestRecordResult } from "../procedures/record-results.ts";
 
@@ -148,6 +152,44 @@ export function proceduresRouter({ db }: { db: Database }): Router {
       insertLeakSearch(tx, organisationId, { visitId: visit.id, input, result: leakSearchResult(input), recordedBy: user.id }),
     );
     res.status(201).json({ leakSearch });
+  });
+
+  // ---- standing-pressure checks -------------------------------------------------------------
+
+  router.get("/:id/standing-pressure-checks", async (req, res) => {
+    const { organisationId } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    res.json({ standingPressureChecks: await listStandingPressureChecks(db, organisationId, visit.id) });
+  });
+
+  // The body holds the two readings; the refrigerant (the unit's) and the atmosphere (the
+  // site's, as for readings) are the server's, so the stored verdict cannot be steered.
+  router.post("/:id/standing-pressure-checks", async (req, res) => {
+    const { organisationId, user } = getAuth(res);
+    const visit = await loadVisit(organisationId, req.params.id);
+    requireWritableVisit(visit.status);
+    const body = StandingPressureBodySchema.parse(req.body);
+    const unit = await loadUnit(organisationId, visit.equipmentId);
+    const circuit = body.circuit ?? null;
+    if (circuit !== null && !unit.circuits.some((candidate) => candidate.number === circuit)) {
+      throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
+    }
+    const site = await getSite(db, organisationId, unit.siteId);
+    if (!site) throw notFound("Site");
+    const input = {
+      refrigerant: unit.refrigerant,
+      standingGaugeKPa: body.standingGaugeKPa,
+      equalisedTempC: body.equalisedTempC,
+      atmosphericPressureKPa: siteAtmosphere(site).pressureKPa,
+      circuit,
+      note: body.note || null,
+    };
+    const outcome = standingPressureOutcome(input);
+    if ("problem" in outcome) throw new HttpError(400, FIELDS, { [outcome.problem.field]: outcome.problem.message });
+    const standingPressureCheck = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+      insertStandingPressureCheck(tx, organisationId, { visitId: visit.id, input, result: outcome.result, recordedBy: user.id }),
+    );
+    res.status(201).json({ standingPressureCheck });
   });
 
   // ---- pressure tests -----------------------------------------------------------------------

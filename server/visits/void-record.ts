@@ -32,6 +32,7 @@ import {
   pressureTests,
   readings,
   refrigerantMovements,
+  standingPressureChecks,
 } from "../db/schema.ts";
 import { insertVisitEvent } from "../db/visit-events.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
@@ -42,6 +43,7 @@ const TABLES: Record<VoidableKind, PgTable> = {
   adjustment: adjustments,
   "electrical-check": electricalChecks,
   "leak-search": leakSearches,
+  "standing-pressure": standingPressureChecks,
   "pressure-test": pressureTests,
   evacuation: evacuations,
   movement: refrigerantMovements,
@@ -65,6 +67,12 @@ const SUMMARIES: Record<VoidableKind, (row: RawRow) => string> = {
   "electrical-check": (row) =>
     `Electrical check of the ${ELECTRICAL_TARGET_LABELS[row.target as ElectricalTarget].toLowerCase()}`,
   "leak-search": (row) => `Leak search by ${LEAK_METHOD_LABELS[row.method as LeakMethod].toLowerCase()}`,
+  "standing-pressure": (row) => {
+    const input = row.input as Json;
+    // Typed in psi or °F, the stored SI figures carry long fractions; a tenth is what a gauge shows.
+    const tenths = (value: unknown) => Number(Number(value).toFixed(1));
+    return `Standing pressure ${tenths(input.standingGaugeKPa)} kPa gauge at ${tenths(input.equalisedTempC)} °C (${input.refrigerant})`;
+  },
   "pressure-test": (row) => {
     const input = row.input as Json;
     return `Pressure test: ${input.startGaugeKPa} to ${input.endGaugeKPa} kPa gauge over ${input.holdMinutes} min`;

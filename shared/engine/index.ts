@@ -131,6 +131,8 @@ export { annualLeakRate } from "./procedures/annual-leak-rate.ts";
 export { chargeAgainstNameplate } from "./procedures/charge-against-nameplate.ts";
 export { judgeLeakSearch } from "./procedures/judge-leak-search.ts";
 export { judgeStandingPressure, NON_CONDENSABLE_EXCESS_K, STANDING_PRESSURE_TOLERANCE_K } from "./procedures/judge-standing-pressure.ts";
+export { standingPressureOutcome } from "./procedures/standing-pressure-outcome.ts";
+export type { StandingPressureProblem } from "./procedures/standing-pressure-outcome.ts";
 export type { LeakSearchFindings } from "./procedures/judge-leak-search.ts";
 export { PROCEDURE_SOURCES, citeProcedure } from "./procedures/procedure-sources.ts";
 export type { ProcedureSourceTag } from "./procedures/procedure-sources.ts";

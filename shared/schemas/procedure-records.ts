@@ -1,6 +1,6 @@
 /**
  * A visit's procedure records: the contracts of /api/visits/:id/electrical-checks,
- * /leak-searches, /pressure-tests and /evacuations. Each record keeps what the technician
+ * /leak-searches, /standing-pressure-checks, /pressure-tests and /evacuations. Each record keeps what the technician
  * entered (SI-metric: V, A, Ω, MΩ, kPa gauge, °C, microns) and the result the server computed
  * from it with the procedures engine, recomputed on every save. The single-check inputs and
  * the engine's result shapes come from ./procedures.ts; this file composes them into records.
@@ -19,6 +19,8 @@ import {
   PressureTestResultSchema,
   RunningCurrentInputSchema,
   RunningCurrentResultSchema,
+  StandingPressureInputSchema,
+  StandingPressureResultSchema,
   SupplyVoltageInputSchema,
   SupplyVoltageResultSchema,
   VacuumSampleSchema,
@@ -27,7 +29,7 @@ import {
   WindingBalanceInputSchema,
   WindingBalanceResultSchema,
 } from "./procedures.ts";
-import { PersonRefSchema, VoidInfoSchema } from "./visits.ts";
+import { PersonRefSchema, unknownFieldsMessage, VoidInfoSchema } from "./visits.ts";
 import { text } from "./text.ts";
 
 export const MAX_NOTE_LENGTH = 500;
@@ -189,6 +191,45 @@ export const LeakSearchSchema = RecordBaseSchema.extend({
 export type LeakSearch = z.infer<typeof LeakSearchSchema>;
 
 // ---------------------------------------------------------------------------------------------
+// Off-cycle standing pressure (non-condensables)
+// ---------------------------------------------------------------------------------------------
+
+/**
+ * Body of POST /api/visits/:id/standing-pressure-checks: what the technician read. Strict: the
+ * refrigerant comes from the visit's equipment and the atmosphere from the site, so a client
+ * cannot choose the table its own reading is judged against.
+ */
+export const StandingPressureBodySchema = z.strictObject(
+  {
+    standingGaugeKPa: StandingPressureInputSchema.shape.standingGaugeKPa,
+    equalisedTempC: StandingPressureInputSchema.shape.equalisedTempC,
+    circuit: CircuitSchema,
+    note: NoteSchema,
+  },
+  {
+    error: (issue) =>
+      issue.code === "unrecognized_keys"
+        ? unknownFieldsMessage(issue.keys, "A standing-pressure check takes the gauge pressure and the temperature; the refrigerant comes from the equipment, the atmosphere from the site.")
+        : undefined,
+  },
+);
+export type StandingPressureBody = z.input<typeof StandingPressureBodySchema>;
+
+/** What the server stores as input: the readings with the refrigerant and atmosphere it supplied. */
+export const StandingPressureRecordInputSchema = z.object({
+  refrigerant: z.string(),
+  standingGaugeKPa: z.number(),
+  equalisedTempC: z.number(),
+  atmosphericPressureKPa: z.number(),
+  circuit: z.number().int().nullable(),
+  note: z.string().nullable(),
+});
+export type StandingPressureRecordInput = z.infer<typeof StandingPressureRecordInputSchema>;
+
+export const StandingPressureCheckSchema = RecordBaseSchema.extend({ input: StandingPressureRecordInputSchema, result: StandingPressureResultSchema });
+export type StandingPressureCheck = z.infer<typeof StandingPressureCheckSchema>;
+
+// ---------------------------------------------------------------------------------------------
 // Nitrogen pressure test
 // ---------------------------------------------------------------------------------------------
 
@@ -320,6 +361,7 @@ export const ElectricalCheckListSchema = z.object({
   defaults: z.object({ nameplateV: z.number().nullable(), phases: z.number().nullable(), compressorRlaA: z.number().nullable(), fanFlaA: z.number().nullable() }),
 });
 export const LeakSearchListSchema = z.object({ leakSearches: z.array(LeakSearchSchema) });
+export const StandingPressureCheckListSchema = z.object({ standingPressureChecks: z.array(StandingPressureCheckSchema) });
 export const PressureTestListSchema = z.object({
   pressureTests: z.array(PressureTestSchema),
   defaults: z.object({ allowedDropKPa: z.number(), ratedHighSideKPa: z.number().nullable(), ratedLowSideKPa: z.number().nullable() }),

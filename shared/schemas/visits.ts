@@ -123,7 +123,7 @@ export type VoidInfo = z.infer<typeof VoidInfoSchema>;
 export const isStanding = (record: { voided: VoidInfo }) => record.voided === null;
 
 /** Records of a visit that can be voided (with a reason) and entered again; none is ever deleted. */
-export const VOIDABLE_KINDS = ["reading", "adjustment", "electrical-check", "leak-search", "pressure-test", "evacuation", "movement", "charging"] as const;
+export const VOIDABLE_KINDS = ["reading", "adjustment", "electrical-check", "leak-search", "standing-pressure", "pressure-test", "evacuation", "movement", "charging"] as const;
 export const VoidableKindSchema = z.enum(VOIDABLE_KINDS);
 export type VoidableKind = z.infer<typeof VoidableKindSchema>;
 export const VOIDABLE_KIND_LABELS: Record<VoidableKind, string> = {
@@ -131,6 +131,7 @@ export const VOIDABLE_KIND_LABELS: Record<VoidableKind, string> = {
   adjustment: "Adjustment",
   "electrical-check": "Electrical check",
   "leak-search": "Leak search",
+  "standing-pressure": "Standing-pressure check",
   "pressure-test": "Pressure test",
   evacuation: "Evacuation",
   movement: "Refrigerant movement",

@@ -11,6 +11,7 @@ import { paths } from "@/config/paths.ts";
 import { ElectricalReport } from "@/features/procedures/components/electrical-report.tsx";
 import { EvacuationReport } from "@/features/procedures/components/evacuation-report.tsx";
 import { LeakSearchReport } from "@/features/procedures/components/leak-search-report.tsx";
+import { StandingPressureReport } from "@/features/procedures/components/standing-pressure-report.tsx";
 import { PressureTestReport } from "@/features/procedures/components/pressure-test-report.tsx";
 import { RefrigerantReport } from "@/features/register/components/refrigerant-report.tsx";
 import { ReadingsTable } from "@/features/report/components/readings-table.tsx";
@@ -152,6 +153,7 @@ export default function VisitReportRoute() {
 
       <ElectricalReport visitId={data.id} />
       <LeakSearchReport visitId={data.id} />
+      <StandingPressureReport visitId={data.id} units={units} />
       <PressureTestReport visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} />
       <EvacuationReport visitId={data.id} chartWidth={chartWidth} />
       <RefrigerantReport visitId={data.id} readings={data.readings} />

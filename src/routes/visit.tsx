@@ -17,6 +17,7 @@ import { RunLog } from "@/features/run-log/components/run-log.tsx";
 import { ElectricalPanel } from "@/features/procedures/components/electrical-panel.tsx";
 import { EvacuationPanel } from "@/features/procedures/components/evacuation-panel.tsx";
 import { LeakSearchPanel } from "@/features/procedures/components/leak-search-panel.tsx";
+import { StandingPressurePanel } from "@/features/procedures/components/standing-pressure-panel.tsx";
 import { ROLE_READ_ONLY_NOTE } from "@/features/procedures/components/procedure-layout.tsx";
 import { PressureTestPanel } from "@/features/procedures/components/pressure-test-panel.tsx";
 import { VisitRefrigerant } from "@/features/register/components/visit-refrigerant.tsx";
@@ -124,6 +125,22 @@ export default function VisitRoute() {
     },
     { id: "electrical", label: "Electrical", element: <ElectricalPanel visitId={data.id} circuits={unit.circuits.map((candidate) => candidate.number)} canWrite={canWrite} readOnlyNote={readOnlyNote} /> },
     { id: "leak-search", label: "Leak search", element: <LeakSearchPanel visitId={data.id} canWrite={canWrite} readOnlyNote={readOnlyNote} /> },
+    {
+      id: "standing-pressure",
+      label: "Standing pressure",
+      element: (
+        <StandingPressurePanel
+          visitId={data.id}
+          refrigerant={unit.refrigerant}
+          isBlend={refrigerant.kind === "blend"}
+          circuits={unit.circuits.map((candidate) => candidate.number)}
+          units={units}
+          atmosphericKPa={atmosphericKPa}
+          canWrite={canWrite}
+          readOnlyNote={readOnlyNote}
+        />
+      ),
+    },
     {
       id: "pressure-test",
       label: "Pressure test",

@@ -92,6 +92,12 @@ export function sampleBodies(records: BellbirdRecords): Partial<Record<RouteKey,
       recheck: "no-leak",
       note: "Rechecked after repair",
     },
+    "POST /api/visits/:id/standing-pressure-checks": {
+      standingGaugeKPa: 500,
+      equalisedTempC: 20,
+      circuit: 1,
+      note: "Condenser fan run until air off equalled air on",
+    },
     "POST /api/visits/:id/pressure-tests": {
       section: "whole-system",
       startGaugeKPa: 2800,

@@ -9,21 +9,26 @@ import {
   LeakSearchSchema,
   PressureTestListSchema,
   PressureTestSchema,
+  StandingPressureCheckListSchema,
+  StandingPressureCheckSchema,
   type ElectricalCheckBody,
   type EvacuationCreate,
   type EvacuationSampleBody,
   type EvacuationUpdate,
   type LeakSearchBody,
   type PressureTestBody,
+  type StandingPressureBody,
 } from "@shared/schemas/procedure-records.ts";
 import { apiRequest } from "./api-client.ts";
 
-type Kind = "electrical-checks" | "leak-searches" | "pressure-tests" | "evacuations";
+type Kind = "electrical-checks" | "leak-searches" | "standing-pressure-checks" | "pressure-tests" | "evacuations";
 
 // ---- requests ---------------------------------------------------------------------------------
 
 export const getElectricalChecks = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/electrical-checks`, { schema: ElectricalCheckListSchema, signal });
 export const getLeakSearches = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/leak-searches`, { schema: LeakSearchListSchema, signal });
+export const getStandingPressureChecks = (visitId: string, signal?: AbortSignal) =>
+  apiRequest(`/visits/${visitId}/standing-pressure-checks`, { schema: StandingPressureCheckListSchema, signal });
 export const getPressureTests = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/pressure-tests`, { schema: PressureTestListSchema, signal });
 export const getEvacuations = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/evacuations`, { schema: EvacuationListSchema, signal });
 
@@ -33,6 +38,12 @@ export async function createElectricalCheck({ visitId, ...body }: ElectricalChec
 
 export async function createLeakSearch({ visitId, ...body }: LeakSearchBody & { visitId: string }) {
   return (await apiRequest(`/visits/${visitId}/leak-searches`, { method: "POST", body, schema: z.object({ leakSearch: LeakSearchSchema }) })).leakSearch;
+}
+
+export async function createStandingPressureCheck({ visitId, ...body }: StandingPressureBody & { visitId: string }) {
+  return (
+    await apiRequest(`/visits/${visitId}/standing-pressure-checks`, { method: "POST", body, schema: z.object({ standingPressureCheck: StandingPressureCheckSchema }) })
+  ).standingPressureCheck;
 }
 
 export async function createPressureTest({ visitId, ...body }: PressureTestBody & { visitId: string }) {
@@ -62,6 +73,8 @@ export const electricalChecksQueryOptions = (visitId: string) =>
   queryOptions({ queryKey: key("electrical-checks", visitId), queryFn: ({ signal }) => getElectricalChecks(visitId, signal) });
 export const leakSearchesQueryOptions = (visitId: string) =>
   queryOptions({ queryKey: key("leak-searches", visitId), queryFn: ({ signal }) => getLeakSearches(visitId, signal) });
+export const standingPressureChecksQueryOptions = (visitId: string) =>
+  queryOptions({ queryKey: key("standing-pressure-checks", visitId), queryFn: ({ signal }) => getStandingPressureChecks(visitId, signal) });
 export const pressureTestsQueryOptions = (visitId: string) =>
   queryOptions({ queryKey: key("pressure-tests", visitId), queryFn: ({ signal }) => getPressureTests(visitId, signal) });
 export const evacuationsQueryOptions = (visitId: string) =>
@@ -71,6 +84,7 @@ export const evacuationsQueryOptions = (visitId: string) =>
 
 export const useElectricalChecks = (visitId: string) => useQuery(electricalChecksQueryOptions(visitId));
 export const useLeakSearches = (visitId: string) => useQuery(leakSearchesQueryOptions(visitId));
+export const useStandingPressureChecks = (visitId: string) => useQuery(standingPressureChecksQueryOptions(visitId));
 export const usePressureTests = (visitId: string) => useQuery(pressureTestsQueryOptions(visitId));
 export const useEvacuations = (visitId: string) => useQuery(evacuationsQueryOptions(visitId));
 
@@ -89,6 +103,7 @@ function useProcedureMutation<TVariables extends { visitId: string }, TResult>(k
 
 export const useCreateElectricalCheck = () => useProcedureMutation("electrical-checks", createElectricalCheck);
 export const useCreateLeakSearch = () => useProcedureMutation("leak-searches", createLeakSearch);
+export const useCreateStandingPressureCheck = () => useProcedureMutation("standing-pressure-checks", createStandingPressureCheck);
 export const useCreatePressureTest = () => useProcedureMutation("pressure-tests", createPressureTest);
 export const useCreateEvacuation = () => useProcedureMutation("evacuations", createEvacuation);
 export const useAddEvacuationSample = () => useProcedureMutation("evacuations", addEvacuationSample);
