@@ -30,7 +30,8 @@ export function TimelineStrip({ series, units }: { series: CircuitSeries; units:
   const diff = (value: number | null) => (value === null ? "—" : formatNumber(differenceToDisplay(value, units.temperature), 1));
 
   return (
-    <ol ref={strip} aria-label="Latest readings and adjustments" className="flex gap-2 overflow-x-auto pb-2">
+    // A strip that scrolls sideways takes the keyboard focus, so arrow keys can scroll it.
+    <ol ref={strip} tabIndex={0} aria-label="Latest readings and adjustments" className="flex gap-2 overflow-x-auto pb-2">
       {entries.map((entry) =>
         entry.kind === "reading" ? (
           <li key={entry.reading.id} className="num min-w-28 rounded-card border-2 border-rule bg-surface p-2 text-sm">
