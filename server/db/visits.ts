@@ -2,13 +2,14 @@
  * Queries for visits and their run log. Every function takes the caller's organisation id;
  * a visit of another organisation reads as missing.
  */
-import { and, asc, count, desc, eq, inArray, isNotNull, isNull, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, isNotNull, isNull, max, sql, type SQL } from "drizzle-orm";
+import { unionAll } from "drizzle-orm/pg-core";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
-import type { Adjustment, Comment, Photo, Reading, VisitStatus, VisitSummary } from "@shared/schemas/visits.ts";
+import { visitReasonText, type Adjustment, type Comment, type Photo, type Reading, type VisitStatus, type VisitSummary } from "@shared/schemas/visits.ts";
 import { siteAtmosphere } from "../visits/reading-input.ts";
 import type { Database } from "./client.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
-import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitTechnicians, visits } from "./schema.ts";
+import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitTechnicians, visits } from "./schema.ts";
 import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
 
 /** Readings that are records: not rows of a CSV import still being stored (see readings.pendingImportId). */
@@ -28,9 +29,32 @@ const summaryColumns = {
   startedAt: visits.startedAt,
 };
 
-async function summarise(db: Database, rows: { id: string; startedAt: Date }[]): Promise<Map<string, Pick<VisitSummary, "readingCount" | "technicians">>> {
+type SummaryExtra = Pick<VisitSummary, "readingCount" | "technicians" | "yourLastActivityAt">;
+
+/**
+ * When one person last recorded anything on each of these visits: readings, adjustments,
+ * comments and the trail's events (started, submitted, voided, imported…), in one query.
+ */
+async function lastActivityOf(db: Database, viewerId: string, ids: string[]): Promise<Map<string, Date>> {
+  const rows = await unionAll(
+    db.select({ visitId: readings.visitId, at: max(readings.createdAt) }).from(readings).where(and(inArray(readings.visitId, ids), eq(readings.recordedBy, viewerId), isRecord)).groupBy(readings.visitId),
+    db.select({ visitId: adjustments.visitId, at: max(adjustments.createdAt) }).from(adjustments).where(and(inArray(adjustments.visitId, ids), eq(adjustments.recordedBy, viewerId))).groupBy(adjustments.visitId),
+    db.select({ visitId: visitComments.visitId, at: max(visitComments.createdAt) }).from(visitComments).where(and(inArray(visitComments.visitId, ids), eq(visitComments.authorId, viewerId))).groupBy(visitComments.visitId),
+    db.select({ visitId: visitEvents.visitId, at: max(visitEvents.at) }).from(visitEvents).where(and(inArray(visitEvents.visitId, ids), eq(visitEvents.actorId, viewerId))).groupBy(visitEvents.visitId),
+  );
+  const latest = new Map<string, Date>();
+  for (const row of rows) {
+    if (!row.at) continue;
+    const at = new Date(row.at);
+    const seen = latest.get(row.visitId);
+    if (!seen || at > seen) latest.set(row.visitId, at);
+  }
+  return latest;
+}
+
+async function summarise(db: Database, rows: { id: string; startedAt: Date }[], viewerId?: string): Promise<Map<string, SummaryExtra>> {
   const ids = rows.map((row) => row.id);
-  const result = new Map<string, Pick<VisitSummary, "readingCount" | "technicians">>();
+  const result = new Map<string, SummaryExtra>();
   if (ids.length === 0) return result;
   const counts = await db
     .select({ visitId: readings.visitId, n: count() })
@@ -43,7 +67,8 @@ async function summarise(db: Database, rows: { id: string; startedAt: Date }[]):
     .innerJoin(users, eq(users.id, visitTechnicians.userId))
     .where(inArray(visitTechnicians.visitId, ids))
     .orderBy(asc(users.name));
-  for (const id of ids) result.set(id, { readingCount: 0, technicians: [] });
+  const activity = viewerId ? await lastActivityOf(db, viewerId, ids) : new Map<string, Date>();
+  for (const id of ids) result.set(id, { readingCount: 0, technicians: [], yourLastActivityAt: activity.get(id)?.toISOString() ?? null });
   for (const row of counts) result.get(row.visitId)!.readingCount = row.n;
   for (const row of crew) result.get(row.visitId)!.technicians.push({ id: row.id, name: row.name });
   return result;
@@ -54,7 +79,8 @@ export interface VisitFilter {
   equipmentId?: string;
 }
 
-export async function listVisits(db: Database, organisationId: string, filter: VisitFilter = {}): Promise<VisitSummary[]> {
+/** `viewerId`: whose last activity each summary carries (`yourLastActivityAt`). */
+export async function listVisits(db: Database, organisationId: string, filter: VisitFilter = {}, viewerId?: string): Promise<VisitSummary[]> {
   const conditions: SQL[] = [eq(visits.organisationId, organisationId)];
   if (filter.status) conditions.push(eq(visits.status, filter.status));
   if (filter.equipmentId) conditions.push(eq(visits.equipmentId, filter.equipmentId));
@@ -66,7 +92,7 @@ export async function listVisits(db: Database, organisationId: string, filter: V
     .innerJoin(customers, eq(customers.id, sites.customerId))
     .where(and(...conditions))
     .orderBy(desc(visits.startedAt));
-  const extra = await summarise(db, rows);
+  const extra = await summarise(db, rows, viewerId);
   return rows.map((row) => ({ ...row, startedAt: row.startedAt.toISOString(), ...extra.get(row.id)! }));
 }
 
@@ -92,7 +118,7 @@ export async function createVisit(
   return db.transaction(async (tx) => {
     const [row] = await tx.insert(visits).values({ ...values, organisationId }).returning({ id: visits.id });
     await tx.insert(visitTechnicians).values({ visitId: row.id, userId: values.createdBy });
-    await insertVisitEvent(tx, organisationId, { visitId: row.id, action: "started", summary: values.reason, actorId: values.createdBy });
+    await insertVisitEvent(tx, organisationId, { visitId: row.id, action: "started", summary: visitReasonText(values.reason), actorId: values.createdBy });
     return row.id;
   });
 }
@@ -173,7 +199,7 @@ export async function insertComment(
 export async function updateVisitStatus(
   db: Database,
   visitId: string,
-  values: { status: VisitStatus; reviewNote?: string | null; signedOffBy?: string | null; signedOffAt?: Date | null },
+  values: { status: VisitStatus; reviewNote?: string | null; signedOffBy?: string | null; signedOffAt?: Date | null; reason?: string },
 ): Promise<void> {
   await db
     .update(visits)

@@ -6,7 +6,9 @@ import { text } from "@shared/schemas/text.ts";
 import {
   AdjustmentCreateSchema,
   CommentCreateSchema,
+  hasReason,
   PHOTO_KINDS,
+  REASON_NEEDED_MESSAGE,
   ReadingBodySchema,
   ReviewActionSchema,
   SendReportSchema,
@@ -114,7 +116,8 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
 
   router.get("/", async (req, res) => {
     const filter = ListQuerySchema.parse(req.query);
-    res.json({ visits: await listVisits(db, getAuth(res).organisationId, filter) });
+    const { organisationId, user } = getAuth(res);
+    res.json({ visits: await listVisits(db, organisationId, filter, user.id) });
   });
 
   router.post("/", async (req, res) => {
@@ -234,15 +237,22 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
       db,
       organisationId,
       visit.id,
-      async (tx) => {
-        const reason = action.action === "sign-off" ? action.note || null : action.action === "send-back" || action.action === "reopen" ? action.reason : null;
+      async (tx, locked) => {
+        if (action.action === "submit") {
+          // A visit may start without its reason, but never goes for review without one.
+          // Checked on the locked row, so a reason given meanwhile in another tab counts.
+          const given = action.reason ?? "";
+          if (!hasReason(given) && !hasReason(locked.reason)) throw new HttpError(400, REASON_NEEDED_MESSAGE, { reason: REASON_NEEDED_MESSAGE });
+          await updateVisitStatus(tx, visit.id, { status: transition.to, ...(hasReason(given) ? { reason: given } : {}) });
+          await insertVisitEvent(tx, organisationId, { visitId: visit.id, action: transition.event, summary: VISIT_EVENT_LABELS[transition.event], reason: hasReason(given) ? `Reason for the visit: ${given}` : null, actorId: user.id });
+          return;
+        }
+        const reason = action.action === "sign-off" ? action.note || null : action.reason;
         if (action.action === "sign-off") {
           await updateVisitStatus(tx, visit.id, { status: transition.to, reviewNote: reason, signedOffBy: user.id, signedOffAt: new Date() });
         } else if (action.action === "send-back" || action.action === "reopen") {
           // Reopening undoes the sign-off on the visit itself; the trail keeps when it was signed and by whom.
           await updateVisitStatus(tx, visit.id, { status: transition.to, reviewNote: action.action === "send-back" ? reason : null, signedOffBy: null, signedOffAt: null });
-        } else {
-          await updateVisitStatus(tx, visit.id, { status: transition.to });
         }
         // The reason also goes on the visit's thread, so the technician sees it in context.
         if (action.action === "send-back") await insertComment(tx, organisationId, { visitId: visit.id, readingId: null, authorId: user.id, body: `Sent back: ${reason}` });

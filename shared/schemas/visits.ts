@@ -47,11 +47,27 @@ const reasonSchema = (prompt: string) =>
     .min(3, prompt)
     .max(MAX_REASON_LENGTH, `Keep the reason under ${MAX_REASON_LENGTH} characters`);
 
+/**
+ * The reason for a visit. Optional when it starts (on the roof, the first reading matters
+ * more than the words), so an empty text is a visit whose reason is still to come; it must
+ * be given before the visit goes for review. Stored as "" — the column stays NOT NULL and
+ * needs no migration.
+ */
+const VisitReasonSchema = text({ multiline: true, error: "Say why you are visiting" })
+  .max(MAX_REASON_LENGTH, `Keep the reason under ${MAX_REASON_LENGTH} characters`)
+  // Empty means "not given yet"; anything typed must say something.
+  .refine((value) => value === "" || value.length >= 3, "Say why you are visiting (at least a few words), or leave it for later");
+
+/** What screens show for a visit whose reason is still to be given. */
+export const NO_REASON_YET = "No reason given yet";
+export const REASON_NEEDED_MESSAGE = "Give the reason for the visit first";
+/** The reason as shown: the text, or plainly that none was given yet. */
+export const visitReasonText = (reason: string) => (reason.trim() === "" ? NO_REASON_YET : reason);
+export const hasReason = (reason: string) => reason.trim() !== "";
+
 export const VisitCreateSchema = z.object({
   equipmentId: z.uuid("Choose the equipment"),
-  reason: text({ multiline: true, error: "Say why you are visiting" })
-    .min(3, "Say why you are visiting (at least a few words)")
-    .max(MAX_REASON_LENGTH, `Keep the reason under ${MAX_REASON_LENGTH} characters`),
+  reason: VisitReasonSchema.default(""),
 });
 export type VisitCreate = z.input<typeof VisitCreateSchema>;
 
@@ -275,7 +291,8 @@ export const PhotoSchema = z.object({
 export type Photo = z.infer<typeof PhotoSchema>;
 
 export const ReviewActionSchema = z.discriminatedUnion("action", [
-  z.object({ action: z.literal("submit") }),
+  // A visit started without a reason gets it here, at the latest: submit refuses without one.
+  z.object({ action: z.literal("submit"), reason: VisitReasonSchema.optional() }),
   z.object({ action: z.literal("sign-off"), note: text({ multiline: true }).max(MAX_COMMENT_LENGTH).optional() }),
   z.object({
     action: z.literal("send-back"),
@@ -300,6 +317,12 @@ export const VisitSummarySchema = z.object({
   startedAt: z.string(),
   readingCount: z.number().int(),
   technicians: z.array(PersonRefSchema),
+  /**
+   * When the person asking last recorded anything on this visit (a reading, an adjustment, a
+   * comment, a step in its trail); null if never, or when the answer is not for one person.
+   * Today's "Resume" opens the open visit with the latest.
+   */
+  yourLastActivityAt: z.string().nullable(),
 });
 export type VisitSummary = z.infer<typeof VisitSummarySchema>;
 
