@@ -134,6 +134,8 @@ export { judgeStandingPressure, NON_CONDENSABLE_EXCESS_K, STANDING_PRESSURE_TOLE
 export { standingPressureOutcome } from "./procedures/standing-pressure-outcome.ts";
 export type { StandingPressureProblem } from "./procedures/standing-pressure-outcome.ts";
 export type { LeakSearchFindings } from "./procedures/judge-leak-search.ts";
+export { submitChecklist, CHARGE_MATCH_TOLERANCE_KG } from "./procedures/submit-checklist.ts";
+export type { SubmitChecklistInput, SubmitChecklistItem } from "./procedures/submit-checklist.ts";
 export { PROCEDURE_SOURCES, citeProcedure } from "./procedures/procedure-sources.ts";
 export type { ProcedureSourceTag } from "./procedures/procedure-sources.ts";
 export {
