@@ -1,11 +1,19 @@
 import { ChevronRight } from "lucide-react";
 import { Link } from "react-router-dom";
 import { can } from "@shared/schemas/auth.ts";
-import type { VisitSummary } from "@shared/schemas/visits.ts";
+import type { Equipment } from "@shared/schemas/equipment.ts";
+import { visitReasonText, type VisitSummary } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
+import { equipmentSearchText, matchesSearch } from "@/features/equipment/utils/nameplate-text.ts";
+import { QuickStartVisit } from "@/features/jobs/components/quick-start-visit.tsx";
+import { ResumeVisit } from "@/features/jobs/components/resume-visit.tsx";
+import { visitToResume } from "@/features/jobs/utils/visit-to-resume.ts";
 import { useMe } from "@/lib/api/auth.ts";
 import { useVisits } from "@/lib/api/visits.ts";
+
+/** Today's unit search is the equipment list's own, so a unit is found the same way everywhere. */
+const unitMatches = (unit: Equipment, query: string) => matchesSearch(equipmentSearchText(unit), query);
 
 function VisitLinks({ title, visits, empty }: { title: string; visits: VisitSummary[] | undefined; empty: string }) {
   return (
@@ -23,7 +31,7 @@ function VisitLinks({ title, visits, empty }: { title: string; visits: VisitSumm
                 <div className="min-w-0 flex-1">
                   <p className="font-medium">{visit.equipmentName}</p>
                   <p className="truncate text-sm text-muted">
-                    {visit.customerName} · {visit.reason}
+                    {visit.customerName} · {visitReasonText(visit.reason)}
                   </p>
                 </div>
                 <VisitStatusBadge status={visit.status} />
@@ -44,6 +52,8 @@ export default function HomeRoute() {
   const reviewer = me.data ? can(me.data.role, "signOff") : false;
   const awaiting = useVisits({ status: "awaiting-review" });
   const inProgress = open.data && sentBack.data ? [...sentBack.data, ...open.data] : undefined;
+  const resume = inProgress ? visitToResume(inProgress) : null;
+  const writer = me.data ? can(me.data.role, "writeRecords") : false;
 
   return (
     <div className="space-y-5">
@@ -59,7 +69,9 @@ export default function HomeRoute() {
           ⚠ {(open.error ?? awaiting.error)?.message}
         </p>
       )}
-      <VisitLinks title="Visits in progress" visits={inProgress} empty="No open visits. Start one from a unit's page under Equipment." />
+      {resume && <ResumeVisit visit={resume} />}
+      {writer && <QuickStartVisit matches={unitMatches} />}
+      <VisitLinks title="Visits in progress" visits={inProgress} empty={writer ? "No open visits. Find a unit above to start one." : "No open visits."} />
       {reviewer && <VisitLinks title="Waiting for your review" visits={awaiting.data} empty="Nothing is waiting for review." />}
       <section className="rounded-card border-2 border-caution bg-surface p-4">
         <h2 className="font-semibold">Before you open a panel or a valve</h2>

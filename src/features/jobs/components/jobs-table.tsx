@@ -2,7 +2,7 @@ import { createColumnHelper, useTable, type SortingState } from "@tanstack/react
 import { Search } from "lucide-react";
 import { useDeferredValue, useId, useMemo, useState } from "react";
 import { Link } from "react-router-dom";
-import type { VisitSummary } from "@shared/schemas/visits.ts";
+import { visitReasonText, type VisitSummary } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { SortableTable, sortableTableFeatures } from "@/components/ui/data-table/sortable-table.tsx";
 import { paths } from "@/config/paths.ts";
@@ -50,7 +50,7 @@ const columns = column.columns([
   column.accessor("reason", {
     header: "Reason",
     sortFn: "alphanumeric",
-    cell: (info) => <span className="line-clamp-2">{info.getValue()}</span>,
+    cell: (info) => <span className="line-clamp-2">{visitReasonText(info.getValue())}</span>,
   }),
   column.accessor("status", {
     header: "Status",
@@ -153,7 +153,7 @@ export function JobsTable({ visits }: { visits: readonly VisitSummary[] }) {
                       </span>
                       <VisitStatusBadge status={visit.status} />
                     </span>
-                    <span className="block">{visit.reason}</span>
+                    <span className="block">{visitReasonText(visit.reason)}</span>
                     <span className="block text-sm text-muted">
                       <span className="num">{formatVisitDate(visit.startedAt)}</span> · {visit.siteName} ·{" "}
                       <span className="num">{visit.readingCount}</span>{" "}

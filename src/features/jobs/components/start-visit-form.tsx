@@ -76,7 +76,7 @@ export function StartVisitForm({
       )}
       <div className="space-y-1">
         <label htmlFor={reasonId} className="block font-medium">
-          Reason for the visit
+          Reason for the visit <span className="font-normal text-muted">(can wait until you submit for review)</span>
         </label>
         <textarea
           id={reasonId}

@@ -1,6 +1,6 @@
 import { ChevronRight } from "lucide-react";
 import { Link } from "react-router-dom";
-import type { VisitSummary } from "@shared/schemas/visits.ts";
+import { visitReasonText, type VisitSummary } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
 import { formatVisitDate } from "../utils/format-visit-date.ts";
@@ -26,7 +26,7 @@ export function VisitList({ visits }: { visits: readonly VisitSummary[] }) {
                 <span className="num font-semibold">{formatVisitDate(visit.startedAt)}</span>
                 <VisitStatusBadge status={visit.status} />
               </span>
-              <span className="block">{visit.reason}</span>
+              <span className="block">{visitReasonText(visit.reason)}</span>
               <span className="block text-sm text-muted">
                 <span className="num">{visit.readingCount}</span> {visit.readingCount === 1 ? "reading" : "readings"}
                 {visit.technicians.length > 0 && ` · ${visit.technicians.map((person) => person.name).join(", ")}`}

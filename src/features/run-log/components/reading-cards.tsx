@@ -1,3 +1,4 @@
+import type { KeyboardEvent } from "react";
 import { CautionLine } from "@/components/ui/caution-panel/caution-line.tsx";
 import type { DiagnosisResult, LiquidTempLocation, TargetBand } from "@shared/schemas/diagnosis.ts";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
@@ -27,6 +28,26 @@ interface ReadingCardsProps {
   dischargeLineTempC: number | undefined;
 }
 
+/** The last field on the cards: its Enter ("done" on the keypad) saves the reading. */
+const LAST_FIELD: DraftField = "runMinutes";
+
+/**
+ * Enter (the keypad's "next") moves to the next reading field with its value selected, so a
+ * gloved technician types the round without reaching for the screen and a carried-forward
+ * value is replaced by typing over it. Enter in the last field submits the form as usual.
+ */
+function moveToNextField(event: KeyboardEvent<HTMLDivElement>) {
+  if (event.key !== "Enter" || event.nativeEvent.isComposing) return;
+  const target = event.target;
+  if (!(target instanceof HTMLInputElement) || !("readingField" in target.dataset)) return;
+  const fields = [...event.currentTarget.querySelectorAll<HTMLInputElement>("input[data-reading-field]")];
+  const next = fields[fields.indexOf(target) + 1];
+  if (!next) return;
+  event.preventDefault();
+  next.focus();
+  next.select();
+}
+
 /** Shown before the first result arrives: the general limit (225 °F [S13]). */
 const DEFAULT_DISCHARGE_LIMIT_C = 107;
 
@@ -44,14 +65,25 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
   const band = (target: TargetBand | null | undefined) =>
     target ? `target ${diff(target.targetK)} ${k} (${diff(target.lowK)}–${diff(target.highK)}, ${target.basis.replace("-", " ")})` : undefined;
   const input = (field: DraftField, label: string, unit: string, hint?: string) => (
-    <NumberField name={field} label={label} unit={unit} value={draft[field]} onValueChange={(value) => onField(field, value)} error={fieldErrors[field]} hint={hint} />
+    <NumberField
+      name={field}
+      label={label}
+      unit={unit}
+      value={draft[field]}
+      onValueChange={(value) => onField(field, value)}
+      error={fieldErrors[field]}
+      hint={hint}
+      data-reading-field
+      enterKeyHint={field === LAST_FIELD ? "done" : "next"}
+    />
   );
   // The limit depends on the refrigerant and the application: the engine's result carries it.
   const dischargeLimit = result?.dischargeLineLimits.limitC ?? DEFAULT_DISCHARGE_LIMIT_C;
   const dischargeMargin = dischargeLineTempC === undefined ? null : dischargeLimit - dischargeLineTempC;
 
   return (
-    <div className="space-y-3">
+    // Not a control itself: it only passes Enter on to the next field (see moveToNextField).
+    <div className="space-y-3" onKeyDown={moveToNextField}>
       <ReadingCard
         step={1}
         title="Suction"

@@ -1,9 +1,14 @@
-import { LockOpen } from "lucide-react";
-import { useState } from "react";
-import type { Visit } from "@shared/schemas/visits.ts";
+import { AlertTriangle, ClipboardCheck, LockOpen, Send } from "lucide-react";
+import { useId, useState } from "react";
+import { submitChecklist } from "@shared/engine/index.ts";
+import { hasReason, MAX_REASON_LENGTH, REASON_NEEDED_MESSAGE, type Visit } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
+import { ApiError } from "@/lib/api/api-client.ts";
+import { useEquipmentDetail } from "@/lib/api/equipment.ts";
+import { useElectricalChecks, useEvacuations, usePressureTests, useStandingPressureChecks } from "@/lib/api/procedures.ts";
+import { useVisitRefrigerant } from "@/lib/api/register.ts";
 import { useReviewVisit } from "@/lib/api/visits.ts";
 
 interface ReviewPanelProps {
@@ -32,6 +37,117 @@ function ReasonBox({ id, label, value, onChange, placeholder }: { id: string; la
 }
 
 /**
+ * What to look at before the visit goes for review, fetched when the technician asks to
+ * submit: circuits without readings, failed tests, charge not in the register (warnings they
+ * acknowledge by confirming), and the reason for the visit, which must be given here if it
+ * was left out at the start.
+ */
+function SubmitChecklist({ visit, onDone }: { visit: Visit; onDone: () => void }) {
+  const review = useReviewVisit();
+  const equipment = useEquipmentDetail(visit.equipmentId);
+  const pressureTests = usePressureTests(visit.id);
+  const evacuations = useEvacuations(visit.id);
+  const standing = useStandingPressureChecks(visit.id);
+  const electrical = useElectricalChecks(visit.id);
+  const refrigerant = useVisitRefrigerant(visit.id);
+  const [reason, setReason] = useState("");
+  const [error, setError] = useState<string | null>(null);
+  const id = useId();
+  const queries = [equipment, pressureTests, evacuations, standing, electrical, refrigerant];
+  const failed = queries.find((query) => query.isError)?.error;
+
+  if (!failed && queries.some((query) => query.isPending)) {
+    return (
+      <p aria-busy="true" className="text-muted">
+        Checking the visit before it goes…
+      </p>
+    );
+  }
+  const needsReason = !hasReason(visit.reason);
+  // A check that could not load is said plainly; the technician may still submit (the server checks the reason).
+  const items =
+    failed || !equipment.data || !pressureTests.data || !evacuations.data || !standing.data || !electrical.data || !refrigerant.data
+      ? []
+      : submitChecklist({
+          reason: visit.reason,
+          circuits: equipment.data.equipment.circuits.map((circuit) => circuit.number),
+          readings: visit.readings,
+          adjustments: visit.adjustments,
+          registerChargedKg: refrigerant.data.circuits.reduce((sum, circuit) => sum + circuit.addedKg + circuit.reusedKg, 0),
+          tests: {
+            pressureTests: pressureTests.data.pressureTests.map((test) => ({ voided: test.voided, verdict: test.result.overall.verdict, reason: test.result.overall.reason })),
+            evacuations: evacuations.data.evacuations.map((evacuation) => ({ voided: evacuation.voided, verdict: evacuation.result.overall?.verdict ?? null, reason: evacuation.result.overall?.reason ?? "" })),
+            standingPressureChecks: standing.data.standingPressureChecks.map((check) => ({ voided: check.voided, verdict: check.result.verdict, reason: check.result.reason })),
+            electricalChecks: electrical.data.electricalChecks.map((check) => ({ voided: check.voided, verdict: check.result.overall.verdict, reason: check.result.overall.reason })),
+          },
+        });
+  const warnings = items.filter((item) => !item.blocking);
+
+  const submit = async () => {
+    setError(null);
+    if (needsReason && reason.trim().length < 3) return setError(REASON_NEEDED_MESSAGE);
+    try {
+      await review.mutateAsync({ visitId: visit.id, action: "submit", ...(needsReason ? { reason } : {}) });
+      onDone();
+    } catch (caught) {
+      setError(caught instanceof ApiError ? (caught.fields.reason ?? caught.message) : caught instanceof Error ? caught.message : "That did not go through");
+    }
+  };
+
+  return (
+    <div role="group" aria-labelledby={`${id}-title`} className="space-y-3 rounded-card border-2 border-ink p-3" data-testid="submit-checklist">
+      <h3 id={`${id}-title`} className="flex items-center gap-2 font-semibold">
+        <ClipboardCheck aria-hidden className="size-5" /> Before it goes for review
+      </h3>
+      {failed && <FormAlert>Could not check everything ({failed.message}). You can still submit.</FormAlert>}
+      {!failed && warnings.length === 0 && <p>Nothing to flag: every circuit has readings, no test failed, the charge is in the register.</p>}
+      {warnings.length > 0 && (
+        <ul className="space-y-2" aria-label="Warnings">
+          {warnings.map((item) => (
+            <li key={item.message} className="flex items-start gap-2">
+              <AlertTriangle aria-hidden className="mt-0.5 size-5 shrink-0 text-caution" />
+              <span>{item.message}</span>
+            </li>
+          ))}
+        </ul>
+      )}
+      {needsReason && (
+        <div className="space-y-1">
+          <label htmlFor={`${id}-reason`} className="block font-medium">
+            Reason for the visit (required)
+          </label>
+          <p id={`${id}-reason-hint`} className="text-sm text-muted">
+            It was left for later when the visit started: the reviewer and the customer read it first.
+          </p>
+          <textarea
+            id={`${id}-reason`}
+            rows={2}
+            maxLength={MAX_REASON_LENGTH}
+            value={reason}
+            onChange={(event) => setReason(event.target.value)}
+            aria-required="true"
+            aria-describedby={`${id}-reason-hint`}
+            aria-invalid={error === REASON_NEEDED_MESSAGE || undefined}
+            placeholder="e.g. “Not cooling; tenant reports warm air from the supply grilles”"
+            className="block w-full rounded-card border-2 border-rule bg-surface p-3 aria-[invalid=true]:border-fault"
+          />
+        </div>
+      )}
+      {error && <FormAlert>{error}</FormAlert>}
+      {warnings.length > 0 && <p className="text-sm">Confirming says you have read these; the reviewer sees the same records.</p>}
+      <div className="flex flex-wrap gap-2">
+        <Button onClick={() => void submit()} disabled={review.isPending}>
+          <Send aria-hidden className="size-5" /> {review.isPending ? "Submitting…" : warnings.length > 0 ? "Confirm and submit anyway" : "Confirm and submit"}
+        </Button>
+        <Button variant="secondary" onClick={onDone} disabled={review.isPending}>
+          Not yet
+        </Button>
+      </div>
+    </div>
+  );
+}
+
+/**
  * Submit for review (crew); sign off or send back with a reason (senior, owner); and reopen a
  * visit awaiting review or signed off, with a reason, so that it can be corrected (senior, owner).
  */
@@ -40,7 +156,8 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
   const [reason, setReason] = useState("");
   const [reopenReason, setReopenReason] = useState("");
   const [error, setError] = useState<string | null>(null);
-  const act = async (action: "submit" | "sign-off" | "send-back" | "reopen") => {
+  const [checking, setChecking] = useState(false);
+  const act = async (action: "sign-off" | "send-back" | "reopen") => {
     setError(null);
     if (action === "send-back" && reason.trim().length < 3) return setError("Say what needs doing before sign-off");
     if (action === "reopen" && reopenReason.trim().length < 3) return setError("Say why the visit is reopened, e.g. “pressure test entered wrongly”");
@@ -50,9 +167,7 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
           ? { visitId: visit.id, action, reason }
           : action === "reopen"
             ? { visitId: visit.id, action, reason: reopenReason }
-            : action === "sign-off"
-              ? { visitId: visit.id, action, note: reason || undefined }
-              : { visitId: visit.id, action },
+            : { visitId: visit.id, action, note: reason || undefined },
       );
       setReopenReason("");
       setReason("");
@@ -85,11 +200,14 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
         </div>
       )}
       <div className="mt-3 space-y-3">
-        {canSubmit && submittable && (
-          <Button onClick={() => void act("submit")} disabled={review.isPending}>
-            Submit for review
-          </Button>
-        )}
+        {canSubmit && submittable &&
+          (checking ? (
+            <SubmitChecklist visit={visit} onDone={() => setChecking(false)} />
+          ) : (
+            <Button onClick={() => setChecking(true)} disabled={review.isPending}>
+              Submit for review
+            </Button>
+          ))}
         {canSignOff && reviewable && (
           <div className="space-y-2">
             <ReasonBox id="review-reason" label="Note or reason" value={reason} onChange={setReason} placeholder="A note with the sign-off, or what needs doing if you send it back" />
