@@ -41,6 +41,8 @@ test.describe("corrections", () => {
     await expect(page.getByRole("button", { name: /^Void the pressure test of/ })).toHaveCount(0);
 
     await page.getByRole("button", { name: "Submit for review" }).click();
+    // The checklist comes first; its warnings are read and confirmed.
+    await page.getByTestId("submit-checklist").getByRole("button", { name: /^Confirm and submit/ }).click();
     await expect(page.getByTestId("visit-closed")).toContainText("awaiting review: nothing more can be recorded or voided");
     await expect(page.getByRole("button", { name: "Save pressure test" })).toHaveCount(0);
     await signOut(page);

@@ -54,6 +54,7 @@ for (const [device, viewport] of [
 ] as const) {
   test.describe(`fewer taps on a ${device} (${viewport.width}×${viewport.height})`, () => {
     test.use({ viewport });
+    test.slow();
 
     test("a returning technician goes from the sign-in page to a saved finding in 5 taps or fewer", async ({ page }) => {
       const { tap, count } = await tapCounter(page);
@@ -107,6 +108,8 @@ for (const [device, viewport] of [
 
 test.describe("start from Today without a reason", () => {
   test.use({ viewport: { width: 390, height: 844 } });
+  // Several pages and a dozen requests each: give them room on a shared, busy machine.
+  test.slow();
 
   test("starts a visit from Today's search with no reason; submitting asks for it and shows the checklist", async ({ page }) => {
     await page.goto("/");
@@ -159,9 +162,10 @@ test.describe("start from Today without a reason", () => {
     await page.goto("/");
     await signIn(page, "tech@bellbird.example");
     await page.getByTestId("resume-visit").click();
+    await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/, PAGE_LOAD);
     await page.getByRole("link", { name: "Visit report" }).click();
     const form = page.getByRole("form", { name: "Send the report" });
-    await expect(form.getByTestId("unsigned-report-warning")).toContainText("the customer will get an unsigned report");
+    await expect(form.getByTestId("unsigned-report-warning")).toContainText("the customer will get an unsigned report", PAGE_LOAD);
     await form.getByLabel("Send the report to").fill("facilities@wattlelane.example");
     await form.getByRole("button", { name: "Send unsigned report" }).click();
     await expect(form.getByRole("alert")).toContainText("Tick the box to send a report that is not signed off");

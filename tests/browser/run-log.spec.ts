@@ -77,6 +77,8 @@ test.describe("run log and review", () => {
     await expect(page.getByTestId("settled-indicator")).toBeVisible();
 
     await page.getByRole("button", { name: "Submit for review" }).click();
+    // The checklist comes first; its warnings are read and confirmed.
+    await page.getByTestId("submit-checklist").getByRole("button", { name: /^Confirm and submit/ }).click();
     await expect(page.getByRole("heading", { name: /Review/ })).toContainText("Awaiting review");
     await signOut(page);
 
