@@ -1,21 +1,12 @@
 import { useId } from "react";
-import {
-  ArrowDown,
-  ArrowUp,
-  Ban,
-  ChevronRight,
-  Equal,
-  Minus,
-  OctagonAlert,
-  TriangleAlert,
-  type LucideIcon,
-} from "lucide-react";
+import { ArrowDown, ArrowUp, Ban, Equal, Minus, OctagonAlert, TriangleAlert, type LucideIcon } from "lucide-react";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import type { DiagnosisResult, Finding } from "@shared/schemas/diagnosis.ts";
 import { CHARGE_STATE_ICONS, chargeStateTone } from "@/components/ui/state/charge-state-badge.tsx";
 import { cn } from "@/lib/cn.ts";
 import { numberSources } from "../utils/number-sources.ts";
 import { ChargeEstimate } from "./charge-estimate.tsx";
+import { SourceNote } from "./source-note.tsx";
 
 const DIRECTION: Record<Finding["direction"], { icon: LucideIcon; word: string }> = {
   low: { icon: ArrowDown, word: "low" },
@@ -33,33 +24,11 @@ export function confidenceWords(confidence: number): string {
   return `${words} (${percent} %)`;
 }
 
-const SEVERITY: Record<
-  DiagnosisResult["warnings"][number]["severity"],
-  { icon: LucideIcon; word: string; tone: string }
-> = {
+const SEVERITY: Record<DiagnosisResult["warnings"][number]["severity"], { icon: LucideIcon; word: string; tone: string }> = {
   danger: { icon: OctagonAlert, word: "Danger", tone: "border-fault text-fault" },
   "invalid-data": { icon: Ban, word: "Not used", tone: "border-caution text-caution" },
   caution: { icon: TriangleAlert, word: "Caution", tone: "border-caution text-caution" },
 };
-
-/**
- * The rule or source behind one line, folded behind a small tap: closed, it shows the start of
- * the citation cut to one line, so the evidence stays one short line each; opened, all of it.
- */
-function SourceNote({ source }: { source: string }) {
-  return (
-    <details className="group text-xs text-muted">
-      <summary className="flex min-h-touch max-w-full cursor-pointer list-none items-center gap-1 [&::-webkit-details-marker]:hidden">
-        <ChevronRight aria-hidden className="size-4 shrink-0 transition-transform group-open:rotate-90" />
-        <span className="font-medium text-ink underline underline-offset-2">Source</span>
-        <span aria-hidden className="min-w-0 truncate group-open:hidden">
-          {source}
-        </span>
-      </summary>
-      <p className="pb-2 pl-5">{source}</p>
-    </details>
-  );
-}
 
 /** A reference marker on a printed line, pointing at its entry in the numbered list below. */
 function NoteMarker({ number, idPrefix }: { number: number; idPrefix: string }) {
@@ -122,21 +91,9 @@ export function FindingPanel({ result, pending = false, variant = "run-log" }: F
   );
 
   return (
-    <section
-      aria-label="Finding"
-      aria-live="polite"
-      className={cn(
-        "rounded-card border-2 bg-surface p-4",
-        chargeStateTone(state).split(" ")[1],
-        pending && "opacity-70",
-      )}
-    >
+    <section aria-label="Finding" aria-live="polite" className={cn("rounded-card border-2 bg-surface p-4", chargeStateTone(state).split(" ")[1], pending && "opacity-70")}>
       <div className="flex items-start gap-3">
-        <Icon
-          aria-hidden
-          className={cn("mt-0.5 size-8 shrink-0", chargeStateTone(state).split(" ")[0])}
-          strokeWidth={2.4}
-        />
+        <Icon aria-hidden className={cn("mt-0.5 size-8 shrink-0", chargeStateTone(state).split(" ")[0])} strokeWidth={2.4} />
         <div className="min-w-0">
           <h2 className="text-xl font-semibold" data-testid="charge-state">
             {text.title}
@@ -146,12 +103,7 @@ export function FindingPanel({ result, pending = false, variant = "run-log" }: F
           {alternatives.length > 0 && (
             <p className="mt-1 text-sm text-muted">
               Also possible:{" "}
-              {alternatives
-                .map(
-                  (alternative) =>
-                    `${chargeStateText[alternative.state].title} (${Math.round(alternative.confidence * 100)} %)`,
-                )
-                .join("; ")}
+              {alternatives.map((alternative) => `${chargeStateText[alternative.state].title} (${Math.round(alternative.confidence * 100)} %)`).join("; ")}
             </p>
           )}
           <ChargeEstimate result={result} />

@@ -69,7 +69,8 @@ export function TrendChart({ series, units, width, height = 320 }: TrendChartPro
   const minutesAfterOrigin = (iso: string) => (Date.parse(iso) - Date.parse(origin)) / 60_000;
   const xMin = Math.min(...data.map((point) => point.x));
   const xMax = Math.max(...data.map((point) => point.x));
-  const ticks = clockTicks(origin, xMin, xMax, MAX_TIME_TICKS).map((tick) => Number(tick.toFixed(2)));
+  // Unrounded: a tick rounded to 0.01 min can fall a second before its minute and read "14:59".
+  const ticks = clockTicks(origin, xMin, xMax, MAX_TIME_TICKS);
   // The bands the verdict was judged against: the latest reading's (a fixed-orifice target moves with the air).
   const targets = series.readings.at(-1)?.result.targets;
   const superheatBand = targets?.superheat ?? null;
@@ -148,7 +149,7 @@ export function TrendChart({ series, units, width, height = 320 }: TrendChartPro
           strokeWidth={3}
           label={{
             value: series.trend?.settled ? "✓ settled" : "✓ last settled",
-            position: "top",
+            position: "insideBottomRight",
             fontSize: "0.8125rem",
             fill: "var(--color-good)",
           }}
