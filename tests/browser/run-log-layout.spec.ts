@@ -8,6 +8,8 @@ import { DEMO_PASSWORD, signIn } from "./sign-in.ts";
  */
 const SUCTION_DEW_5C = "447";
 const LIQUID_BUBBLE_42C = "1736";
+/** Pages and charts load lazily; allow for a machine shared with other builds. */
+const LOADED = { timeout: 20_000 };
 
 async function startVisit(page: Page, reason: string) {
   await page.goto("/equipment");
@@ -15,7 +17,8 @@ async function startVisit(page: Page, reason: string) {
   await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
   await page.getByLabel("Reason for the visit").fill(reason);
   await page.getByRole("button", { name: "Start the visit" }).click();
-  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/, LOADED);
+  await expect(page.getByLabel("Suction pressure", { exact: true })).toBeVisible(LOADED);
 }
 
 async function enterReading(page: Page) {
@@ -110,6 +113,7 @@ test.describe("run log layout", () => {
       const visitId = await demoVisitId(page);
       await page.goto(`/visits/${visitId}/report`);
       const report = page.getByRole("article", { name: "Visit report" });
+      await expect(report.getByRole("heading", { name: "Circuit 1" })).toBeVisible(LOADED);
       const finding = report.getByRole("region", { name: "Finding" }).first();
       const sources = finding.getByRole("list", { name: "Sources" });
       await expect(sources).toBeVisible();
@@ -129,15 +133,17 @@ test.describe("run log layout", () => {
     test("the trend chart shades the target bands, marks the settled reading and reads in clock times", async ({ page }) => {
       const visitId = await demoVisitId(page);
       await page.goto(`/visits/${visitId}`);
-      await page.getByRole("button", { name: "Open trend chart" }).click();
+      await page.getByRole("button", { name: "Open trend chart" }).click(LOADED);
       const chart = page.getByTestId("trend-chart");
-      await expect(chart.locator(".recharts-line")).toHaveCount(4);
+      await expect(chart.locator(".recharts-line")).toHaveCount(4, LOADED);
       // Superheat and subcooling bands, from the latest reading's targets (the verdict's own bands).
       await expect(chart.locator(".recharts-reference-area")).toHaveCount(2);
       await expect(chart.getByTestId("trend-key")).toContainText(/Superheat target [\d.]+–[\d.]+ K/);
       await expect(chart.getByTestId("trend-key")).toContainText(/Settled at \d{2}:\d{2}/);
       await expect(chart.getByText(/✓ (last )?settled/)).toBeVisible();
-      const ticks = await chart.locator(".recharts-xAxis .recharts-cartesian-axis-tick-value").allTextContents();
+      // Recharts draws all tick labels in one layer; the time axis's are those without a unit (K, °C).
+      const labels = await chart.locator(".recharts-cartesian-axis-tick-value").allTextContents();
+      const ticks = labels.filter((label) => !/K|°/.test(label));
       expect(ticks.length).toBeGreaterThanOrEqual(2);
       for (const tick of ticks) expect(tick).toMatch(/^\d{2}:\d{2}$/);
       // Round clock times: every tick on a whole multiple of the same step.
