@@ -127,7 +127,7 @@ export default function VisitReportRoute() {
               </p>
             )}
             {last && <MeasuredCyclePanel mode="report" input={last.input} previousInput={series.readings.at(-2)?.input ?? null} units={units} width={chartWidth} />}
-            {last && <FindingPanel result={last.result} expanded />}
+            {last && <FindingPanel result={last.result} variant="report" />}
           </section>
         );
       })}

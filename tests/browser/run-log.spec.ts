@@ -42,6 +42,8 @@ test.describe("run log and review", () => {
     await expect(page.getByTestId("superheat")).toHaveText("12.0");
     await expect(page.getByTestId("subcooling")).toHaveText("1.0");
     await expect(page.getByTestId("charge-state")).toHaveText("Undercharged");
+    // The evidence starts folded: one tap on "Why: N points" opens it.
+    await page.getByTestId("evidence").getByText(/^Why: \d+ points?$/).click();
     await expect(page.getByRole("list", { name: "Evidence" })).toContainText("Superheat");
     await page.getByRole("button", { name: "Save reading" }).click();
     await expect(page.getByText(/Saved at/)).toBeVisible();

@@ -33,7 +33,12 @@ export function ReadingCard({ step, title, where, side, children, derived }: Rea
         )}
       </header>
       <div className="grid gap-3 p-4 sm:grid-cols-2">{children}</div>
-      {derived && <div className="border-t-2 border-dashed border-rule px-4 py-3">{derived}</div>}
+      {/* Marked so the run log can keep this line above its save bar while a field is typed. */}
+      {derived && (
+        <div data-derived className="border-t-2 border-dashed border-rule px-4 py-3">
+          {derived}
+        </div>
+      )}
     </section>
   );
 }

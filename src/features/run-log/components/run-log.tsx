@@ -1,5 +1,5 @@
 import { Mountain, Save } from "lucide-react";
-import { useMemo, useRef, useState } from "react";
+import { useLayoutEffect, useMemo, useRef, useState, type FocusEvent } from "react";
 import type { LiquidTempLocation } from "@shared/schemas/diagnosis.ts";
 import type { SuctionLocationChoice } from "../utils/reading-draft.ts";
 import type { Atmosphere, MeasuredValues, Visit } from "@shared/schemas/visits.ts";
@@ -144,89 +144,149 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
 
   const missingRequired = REQUIRED_FIELDS.filter((field) => draft[field] === "");
 
+  // The save bar (and on a phone the navigation bar under it) cover the bottom of the screen:
+  // their height goes to the page's scroll padding (app.css), so a field the browser scrolls to
+  // on focus lands above them, not behind.
+  const saveBarRef = useRef<HTMLDivElement>(null);
+  useLayoutEffect(() => {
+    const bar = saveBarRef.current;
+    if (!bar) return;
+    const root = document.documentElement;
+    const update = () => {
+      const offset = Number.parseFloat(getComputedStyle(bar).bottom) || 0;
+      root.style.setProperty("--bottom-bars", `${Math.ceil(bar.offsetHeight + offset)}px`);
+    };
+    update();
+    const observer = new ResizeObserver(update);
+    observer.observe(bar);
+    window.addEventListener("resize", update);
+    return () => {
+      observer.disconnect();
+      window.removeEventListener("resize", update);
+      root.style.removeProperty("--bottom-bars");
+    };
+  }, [canWrite]);
+
+  // What a field gives (its saturation temperature, superheat, subcooling) sits on its card's
+  // derived line, below the field: bring that line above the save bar too, so the number the
+  // technician acts on is never typed blind. Runs after the browser's own focus scroll.
+  const keepDerivedInView = (event: FocusEvent<HTMLFormElement>) => {
+    const field = event.target;
+    const derived = field.closest("section")?.querySelector<HTMLElement>("[data-derived]");
+    const bar = saveBarRef.current;
+    if (!derived || !bar) return;
+    requestAnimationFrame(() => {
+      const gap = 8;
+      const overlap = derived.getBoundingClientRect().bottom - (bar.getBoundingClientRect().top - gap);
+      if (overlap <= 0) return;
+      // Never so far that the field itself leaves the top of the screen.
+      const room = Math.max(0, field.getBoundingClientRect().top - gap);
+      window.scrollBy({ top: Math.min(overlap, room) });
+    });
+  };
+
   return (
     <div className="space-y-4">
-      <PanelBoundary>
-        {live.kind !== "ready" && shownResult && lastReading && (
-          <p
-            role="status"
-            className="rounded-card border-2 border-caution p-2 text-sm font-medium"
-            data-testid="finding-waits"
-          >
-            Waiting for the readings: the finding below is the last saved reading&apos;s (
-            {new Date(lastReading.takenAt).toLocaleTimeString([], { hour: "2-digit", minute: "2-digit" })}), not the
-            values on screen now.
+      {/* Tablet and wider: entry on the left, the finding in a column on the right that stays in
+          view while any field is typed. A phone keeps one column, the verdict in the save bar. */}
+      <div className="space-y-4 lg:grid lg:grid-cols-[minmax(0,1fr)_minmax(0,20rem)] lg:items-start lg:gap-4 lg:space-y-0">
+        <div
+          className="space-y-4 lg:sticky lg:top-4 lg:col-start-2 lg:row-start-1 lg:max-h-[calc(100dvh-2rem)] lg:overflow-y-auto"
+          data-testid="finding-column"
+        >
+          <PanelBoundary>
+            {live.kind !== "ready" && shownResult && lastReading && (
+              <p
+                role="status"
+                className="rounded-card border-2 border-caution p-2 text-sm font-medium"
+                data-testid="finding-waits"
+              >
+                Waiting for the readings: the finding below is the last saved reading&apos;s (
+                {new Date(lastReading.takenAt).toLocaleTimeString([], { hour: "2-digit", minute: "2-digit" })}), not the
+                values on screen now.
+              </p>
+            )}
+            {shownResult ? (
+              <div ref={findingRef} className="scroll-mt-4">
+                <FindingPanel result={shownResult} pending={live.kind !== "ready"} />
+              </div>
+            ) : (
+              <section aria-label="Finding" className="rounded-card border-2 border-dashed border-rule p-4">
+                <h2 className="text-xl font-semibold">Enter the readings</h2>
+                <p className="text-muted">
+                  Suction and liquid pressures with their line temperatures give the first finding.
+                </p>
+              </section>
+            )}
+          </PanelBoundary>
+          <SettledIndicator trend={series.trend} />
+        </div>
+        <div className="space-y-4 lg:col-start-1 lg:row-start-1">
+          <p className="flex items-start gap-2 text-sm text-muted" data-testid="atmosphere-line">
+            <Mountain aria-hidden className="mt-0.5 size-4 shrink-0" />
+            <span>
+              Gauge pressures against <span className="num">{formatNumber(atmosphericKPa, 1)} kPa</span> absolute:{" "}
+              {atmosphere.description}.
+            </span>
           </p>
-        )}
-        {shownResult ? (
-          <div ref={findingRef} className="scroll-mt-4">
-            <FindingPanel result={shownResult} pending={live.kind !== "ready"} />
-          </div>
-        ) : (
-          <section aria-label="Finding" className="rounded-card border-2 border-dashed border-rule p-4">
-            <h2 className="text-xl font-semibold">Enter the readings</h2>
-            <p className="text-muted">
-              Suction and liquid pressures with their line temperatures give the first finding.
-            </p>
-          </section>
-        )}
-      </PanelBoundary>
-      <SettledIndicator trend={series.trend} />
-      <p className="flex items-start gap-2 text-sm text-muted" data-testid="atmosphere-line">
-        <Mountain aria-hidden className="mt-0.5 size-4 shrink-0" />
-        <span>
-          Gauge pressures against <span className="num">{formatNumber(atmosphericKPa, 1)} kPa</span> absolute:{" "}
-          {atmosphere.description}.
-        </span>
-      </p>
 
-      <form
-        aria-label={`New reading, circuit ${circuit}`}
-        onSubmit={(event) => {
-          event.preventDefault();
-          void save();
-        }}
-        className="space-y-3"
-      >
-        <ReadingCards
-          onSuctionLocation={setSuctionLocation}
-          draft={effectiveDraft}
-          onField={setField}
-          onLocation={setLocation}
-          fieldErrors={fieldErrors}
-          result={live.kind === "ready" ? live.result : null}
-          units={units}
-          isBlend={isBlend}
-          dischargeLineTempC={live.kind === "ready" ? live.input.dischargeLineTempC : undefined}
-        />
-        {formError && <FormAlert>{formError}</FormAlert>}
-        {canWrite ? (
-          <div className="sticky bottom-20 z-30 space-y-1 rounded-card border-2 border-ink bg-surface px-3 py-2 md:bottom-2">
-            <LiveLine
+          <form
+            aria-label={`New reading, circuit ${circuit}`}
+            onSubmit={(event) => {
+              event.preventDefault();
+              void save();
+            }}
+            onFocus={keepDerivedInView}
+            className="space-y-3"
+          >
+            <ReadingCards
+              onSuctionLocation={setSuctionLocation}
+              draft={effectiveDraft}
+              onField={setField}
+              onLocation={setLocation}
+              fieldErrors={fieldErrors}
               result={live.kind === "ready" ? live.result : null}
-              trend={series.trend}
               units={units}
-              onOpen={() => findingRef.current?.scrollIntoView({ block: "start", behavior: "smooth" })}
+              isBlend={isBlend}
+              dischargeLineTempC={live.kind === "ready" ? live.input.dischargeLineTempC : undefined}
             />
-            <div className="flex items-center gap-3">
-              <Button type="submit" size="lg" disabled={createReading.isPending} className="min-w-40 shrink-0">
-                <Save aria-hidden className="size-5" /> {createReading.isPending ? "Saving…" : "Save reading"}
-              </Button>
-              <span className="line-clamp-2 text-xs text-muted sm:text-sm" aria-live="polite">
-                {savedAt
-                  ? `✓ Saved at ${new Date(savedAt).toLocaleTimeString()} — values stay for the next reading`
-                  : stored.restored
-                    ? "Values typed earlier on this device are back — not saved yet"
-                    : missingRequired.length > 0
-                      ? `${missingRequired.length} required field(s) to go`
-                      : "Values carry forward: change only what moved"}
-              </span>
-            </div>
-          </div>
-        ) : (
-          <p className="text-muted">{readOnlyNote}</p>
-        )}
-      </form>
+            {formError && <FormAlert>{formError}</FormAlert>}
+            {canWrite ? (
+              <div
+                ref={saveBarRef}
+                className="sticky bottom-20 z-30 space-y-1 rounded-card border-2 border-ink bg-surface px-3 py-2 md:bottom-2"
+                data-testid="save-bar"
+              >
+                {/* From tablet width the finding column beside the fields says all this already. */}
+                <div className="lg:hidden">
+                  <LiveLine
+                    result={live.kind === "ready" ? live.result : null}
+                    trend={series.trend}
+                    units={units}
+                    onOpen={() => findingRef.current?.scrollIntoView({ block: "start", behavior: "smooth" })}
+                  />
+                </div>
+                <div className="flex items-center gap-3">
+                  <Button type="submit" size="lg" disabled={createReading.isPending} className="min-w-40 shrink-0">
+                    <Save aria-hidden className="size-5" /> {createReading.isPending ? "Saving…" : "Save reading"}
+                  </Button>
+                  <span className="line-clamp-2 text-xs text-muted sm:text-sm" aria-live="polite">
+                    {savedAt
+                      ? `✓ Saved at ${new Date(savedAt).toLocaleTimeString()} — values stay for the next reading`
+                      : stored.restored
+                        ? "Values typed earlier on this device are back — not saved yet"
+                        : missingRequired.length > 0
+                          ? `${missingRequired.length} required field(s) to go`
+                          : "Values carry forward: change only what moved"}
+                  </span>
+                </div>
+              </div>
+            ) : (
+              <p className="text-muted">{readOnlyNote}</p>
+            )}
+          </form>
+        </div>
+      </div>
 
       {shownInput && shownResult && (
         <PanelBoundary>
