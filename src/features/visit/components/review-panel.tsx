@@ -5,6 +5,7 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { useReviewVisit } from "@/lib/api/visits.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 interface ReviewPanelProps {
   visit: Visit;
@@ -75,7 +76,7 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
       {visit.status === "signed-off" && (
         <p className="mt-2">
           Signed off by <strong>{visit.signedOffBy?.name ?? "a former member"}</strong>
-          {visit.signedOffAt && ` on ${new Date(visit.signedOffAt).toLocaleString()}`}
+          {visit.signedOffAt && ` on ${formatDateTime(visit.signedOffAt)}`}
           {visit.reviewNote && ` — “${visit.reviewNote}”`}
         </p>
       )}
