@@ -95,10 +95,11 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
               className="sr-only"
               onChange={(event) => void send(event.target.files?.[0])}
             />
-            <Button variant="secondary" className="min-h-12" onClick={() => cameraInput.current?.click()} disabled={upload.isPending}>
+            {/* py-3: 52 px tall, over the 48 px target (min-h-touch alone gives 44). */}
+            <Button variant="secondary" className="py-3" onClick={() => cameraInput.current?.click()} disabled={upload.isPending}>
               <Camera aria-hidden className="size-5" /> Take photo
             </Button>
-            <Button variant="secondary" className="min-h-12" onClick={() => galleryInput.current?.click()} disabled={upload.isPending}>
+            <Button variant="secondary" className="py-3" onClick={() => galleryInput.current?.click()} disabled={upload.isPending}>
               <Images aria-hidden className="size-5" /> Choose from gallery
             </Button>
           </div>
