@@ -25,7 +25,7 @@ import { useMe } from "@/lib/api/auth.ts";
 import { useEquipmentDetail } from "@/lib/api/equipment.ts";
 import { useVisit } from "@/lib/api/visits.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
-import { formatDateTime } from "@shared/format/date-time.ts";
+import { formatDateTime, viewerTimeZone } from "@shared/format/date-time.ts";
 
 /** Width that fits an A4 page inside its print margins at 96 px per inch (≈ 180 mm). */
 /**
@@ -77,7 +77,7 @@ export default function VisitReportRoute() {
           {data.customerName} · {data.siteName}
         </p>
         <p className="flex flex-wrap items-center gap-2 text-sm">
-          <VisitStatusBadge status={data.status} /> Started {stamp(data.startedAt)} · Crew: {data.technicians.map((person) => person.name).join(", ") || "—"}
+          <VisitStatusBadge status={data.status} /> Started {stamp(data.startedAt)} ({viewerTimeZone()} time) · Crew: {data.technicians.map((person) => person.name).join(", ") || "—"}
         </p>
         <p className="mt-1">
           <span className="font-medium">Reason:</span> {data.reason}

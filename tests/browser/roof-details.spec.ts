@@ -85,7 +85,7 @@ test.describe("on the roof, at 390 × 844", () => {
     // The report: same date, same words.
     await page.goto(`/visits/${visitId}/report`);
     const report = page.getByRole("article", { name: "Visit report" });
-    await slowExpect(report).toContainText(`Started ${started}`);
+    await slowExpect(report).toContainText(`Started ${started} (${ZONE} time)`);
     await expect(report).not.toHaveText(NUMERIC_DATE);
   });
 });
