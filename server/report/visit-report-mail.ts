@@ -1,6 +1,7 @@
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { VISIT_STATUS_LABELS, type Visit } from "@shared/schemas/visits.ts";
 import type { MailMessage } from "../mail/mailer.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 const fixed = (value: number | null | undefined, decimals = 1) => (value == null ? "—" : value.toFixed(decimals));
 
@@ -9,9 +10,9 @@ const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (character) => `&#
 /**
  * The visit report as an e-mail: the summary a customer contact needs (what was found on each
  * circuit, what was changed, the sign-off) and a link to the full printable report.
- * Metric units, as stored.
+ * Metric units, as stored; times in `timeZone` (the sender's, an IANA name), named beside them.
  */
-export function visitReportMail(visit: Visit, reportUrl: string, to: string, organisationId: string): MailMessage {
+export function visitReportMail(visit: Visit, reportUrl: string, to: string, organisationId: string, timeZone = "UTC"): MailMessage {
   // Voided records are corrections: the report leaves them out (the audit trail keeps them).
   const readings = visit.readings.filter((reading) => reading.voided === null);
   const adjustments = visit.adjustments.filter((adjustment) => adjustment.voided === null);
@@ -19,9 +20,9 @@ export function visitReportMail(visit: Visit, reportUrl: string, to: string, org
   const lines: string[] = [
     `Service visit report — ${visit.equipmentName}`,
     `${visit.customerName}, ${visit.siteName}`,
-    `Refrigerant ${visit.refrigerant}. Started ${new Date(visit.startedAt).toISOString().slice(0, 16).replace("T", " ")} UTC.`,
+    `Refrigerant ${visit.refrigerant}. Started ${formatDateTime(visit.startedAt, timeZone)} (${timeZone} time).`,
     `Reason for the visit: ${visit.reason}`,
-    `Status: ${VISIT_STATUS_LABELS[visit.status]}${visit.signedOffBy ? ` (signed off by ${visit.signedOffBy.name})` : ""}`,
+    `Status: ${VISIT_STATUS_LABELS[visit.status]}${visit.signedOffBy ? ` (signed off by ${visit.signedOffBy.name}${visit.signedOffAt ? ` on ${formatDateTime(visit.signedOffAt, timeZone)}` : ""})` : ""}`,
     "",
   ];
   for (const circuit of circuits) {

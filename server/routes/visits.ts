@@ -287,11 +287,11 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
 
   router.post("/:id/report/send", async (req, res) => {
     const { organisationId } = getAuth(res);
-    const { to } = SendReportSchema.parse(req.body);
+    const { to, timeZone } = SendReportSchema.parse(req.body);
     const visit = await getVisitDetail(db, organisationId, parseId(req.params.id, "Visit"));
     if (!visit) throw notFound("Visit");
     // The link is built from APP_URL, never from the request's Host header.
-    await mailer.send(visitReportMail(visit, `${env.APP_URL}/visits/${visit.id}/report`, to, organisationId));
+    await mailer.send(visitReportMail(visit, `${env.APP_URL}/visits/${visit.id}/report`, to, organisationId, timeZone));
     res.json({ sentTo: to });
   });
 

@@ -7,6 +7,7 @@ import { z } from "zod";
 import { DiagnosisInputObjectSchema, DiagnosisInputSchema, DiagnosisResultSchema } from "./diagnosis.ts";
 import { MAX_CIRCUITS } from "./equipment.ts";
 import { instant } from "./dates.ts";
+import { isTimeZone } from "../format/date-time.ts";
 import { text } from "./text.ts";
 
 export const VISIT_STATUSES = ["open", "awaiting-review", "signed-off", "sent-back"] as const;
@@ -343,4 +344,9 @@ export type Visit = z.infer<typeof VisitSchema>;
 
 export const SendReportSchema = z.object({
   to: z.email("Enter an e-mail address, like facilities@example.com"),
+  /**
+   * The sender's IANA time zone, so the e-mail's times read as the report they just saw; left
+   * out, the e-mail writes UTC and says so. An unknown name is refused, never silently dropped.
+   */
+  timeZone: z.string().max(64).refine(isTimeZone, "Use a time zone name like Australia/Sydney").optional(),
 });

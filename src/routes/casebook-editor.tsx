@@ -8,6 +8,7 @@ import { ApiError } from "@/lib/api/api-client.ts";
 import { useMe } from "@/lib/api/auth.ts";
 import { useCase, useCreateCase, useUpdateCase } from "@/lib/api/casebook.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /** New case (/casebook/new) or edit one of the company's own (/casebook/cases/:caseId/edit). */
 export default function CasebookEditorRoute() {
@@ -58,7 +59,7 @@ export default function CasebookEditorRoute() {
   const reload = async () => {
     const fetched = await existing.refetch();
     setStale(
-      `Loaded the version saved ${fetched.data?.updatedAt ? new Date(fetched.data.updatedAt).toLocaleString() : "now"}. Your text is still in the form: open the saved case in a new tab to compare, then save to replace it with what you see here.`,
+      `Loaded the version saved ${fetched.data?.updatedAt ? formatDateTime(fetched.data.updatedAt) : "now"}. Your text is still in the form: open the saved case in a new tab to compare, then save to replace it with what you see here.`,
     );
   };
 

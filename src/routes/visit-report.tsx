@@ -25,6 +25,7 @@ import { useMe } from "@/lib/api/auth.ts";
 import { useEquipmentDetail } from "@/lib/api/equipment.ts";
 import { useVisit } from "@/lib/api/visits.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
+import { formatDateTime, viewerTimeZone } from "@shared/format/date-time.ts";
 
 /** Width that fits an A4 page inside its print margins at 96 px per inch (≈ 180 mm). */
 /**
@@ -34,7 +35,7 @@ import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
 const PRINT_CHART_WIDTH = 680;
 const SCREEN_MARGIN_PX = 32;
 const chartWidthFor = (viewportWidth: number) => Math.max(280, Math.min(PRINT_CHART_WIDTH, viewportWidth - SCREEN_MARGIN_PX));
-const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
+const stamp = (iso: string) => formatDateTime(iso);
 
 export default function VisitReportRoute() {
   const { visitId = "" } = useParams();
@@ -76,7 +77,7 @@ export default function VisitReportRoute() {
           {data.customerName} · {data.siteName}
         </p>
         <p className="flex flex-wrap items-center gap-2 text-sm">
-          <VisitStatusBadge status={data.status} /> Started {stamp(data.startedAt)} · Crew: {data.technicians.map((person) => person.name).join(", ") || "—"}
+          <VisitStatusBadge status={data.status} /> Started {stamp(data.startedAt)} ({viewerTimeZone()} time) · Crew: {data.technicians.map((person) => person.name).join(", ") || "—"}
         </p>
         <p className="mt-1">
           <span className="font-medium">Reason:</span> {data.reason}

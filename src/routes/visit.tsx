@@ -31,6 +31,7 @@ import { useChargeReferences } from "@/lib/api/charge-references.ts";
 import { useEquipmentDetail } from "@/lib/api/equipment.ts";
 import { useVisit } from "@/lib/api/visits.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 const METERING_LABELS = { txv: "TXV", eev: "EEV", "fixed-orifice": "fixed orifice", capillary: "capillary" } as const;
 
@@ -169,7 +170,7 @@ export default function VisitRoute() {
         </div>
         <p className="text-muted">
           {data.customerName} · {data.siteName} · <span className="num">{unit.refrigerant}</span> · started{" "}
-          {new Date(data.startedAt).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" })}
+          {formatDateTime(data.startedAt)}
         </p>
         <p>
           <span className="font-medium">Reason:</span> {data.reason}

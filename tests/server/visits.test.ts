@@ -176,6 +176,14 @@ describe("visits and the run log API", () => {
     expect(mail.decoded).toContain("Circuit 1, last reading:");
     expect(mail.decoded).toContain(`http://satura.test/visits/${visitId}/report`);
     expect(mail.decoded).toContain("Added 0.4 kg liquid");
+    // Without the sender's zone the e-mail writes UTC and names it; the date reads "2 Dec 2026, 14:05", never 12/2/26.
+    expect(mail.decoded).toMatch(/Started \d{1,2} (Jan|Feb|Mar|Apr|May|Jun|Jul|Aug|Sep|Oct|Nov|Dec) \d{4}, [0-2]\d:[0-5]\d \(UTC time\)/);
+    const badZone = await technician.post(`/api/visits/${visitId}/report/send`).send({ to: "facilities@wattlelane.example", timeZone: "Mars/Olympus_Mons" });
+    expect(badZone.status).toBe(400);
+    expect(badZone.body.fields.timeZone).toMatch(/time zone/);
+    await technician.post(`/api/visits/${visitId}/report/send`).send({ to: "zoned@wattlelane.example", timeZone: "Australia/Sydney" });
+    const zoned = await testApp.smtp.waitFor((message) => message.to.includes("zoned@wattlelane.example"));
+    expect(zoned.decoded).toMatch(/Started \d{1,2} [A-Z][a-z]{2} \d{4}, [0-2]\d:[0-5]\d \(Australia\/Sydney time\)/);
     expect((await apprentice.post(`/api/visits/${visitId}/report/send`).send({ to: "x@example.com" })).status).toBe(403);
     expect((await outsider.post(`/api/visits/${visitId}/report/send`).send({ to: "x@example.com" })).status).toBe(404);
   });

@@ -19,6 +19,7 @@ import {
 } from "@shared/schemas/visits.ts";
 import { ImportSummarySchema, type ImportSummary } from "@shared/schemas/readings-import.ts";
 import { ApiError, apiRequest } from "./api-client.ts";
+import { viewerTimeZone } from "@shared/format/date-time.ts";
 
 const VisitListSchema = z.object({ visits: z.array(VisitSummarySchema) });
 const VisitEnvelopeSchema = z.object({ visit: VisitSchema });
@@ -95,7 +96,8 @@ export async function importReadings({ visitId, file, circuit, mode, mapping }: 
 }
 
 export function sendReport({ visitId, to }: { visitId: string; to: string }): Promise<{ sentTo: string }> {
-  return apiRequest(`/visits/${visitId}/report/send`, { method: "POST", body: { to }, schema: z.object({ sentTo: z.string() }) });
+  // The sender's zone, so the e-mail's times match the report on their screen.
+  return apiRequest(`/visits/${visitId}/report/send`, { method: "POST", body: { to, timeZone: viewerTimeZone() }, schema: z.object({ sentTo: z.string() }) });
 }
 
 export const visitsQueryOptions = (filter: { status?: VisitStatus; equipmentId?: string } = {}) =>

@@ -2,6 +2,7 @@ import { Ban } from "lucide-react";
 import type { ReactNode } from "react";
 import type { VoidInfo } from "@shared/schemas/visits.ts";
 import { cn } from "@/lib/cn.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /** When and by whom a record was voided, and why, in one line. */
 export function VoidNote({ voided }: { voided: NonNullable<VoidInfo> }) {
@@ -11,7 +12,7 @@ export function VoidNote({ voided }: { voided: NonNullable<VoidInfo> }) {
       <span>
         <span className="uppercase tracking-wide">Void</span>: {voided.reason} — {voided.by?.name ?? "a former member"},{" "}
         <span className="num">
-          {new Date(voided.at).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" })}
+          {formatDateTime(voided.at)}
         </span>
       </span>
     </p>

@@ -6,9 +6,10 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { paths } from "@/config/paths.ts";
 import { useCreateCaseFromReading } from "@/lib/api/casebook.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 const label = (reading: Reading) =>
-  `Circuit ${reading.circuit}, ${new Date(reading.takenAt).toLocaleString(undefined, { dateStyle: "short", timeStyle: "short" })}`;
+  `Circuit ${reading.circuit}, ${formatDateTime(reading.takenAt)}`;
 
 /**
  * Turns a real reading into a draft casebook case for apprentices: the server copies the

@@ -1,6 +1,7 @@
 import { ROLE_LABELS } from "@shared/schemas/auth.ts";
 import type { TeamProgress } from "@shared/schemas/casebook.ts";
 import { ProgressPanel } from "./progress-panel.tsx";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /** Every apprentice's progress (and anyone else who practises), one panel per person. */
 export function TeamProgressList({ team }: { team: TeamProgress }) {
@@ -12,7 +13,7 @@ export function TeamProgressList({ team }: { team: TeamProgress }) {
           <p className="text-sm text-muted">
             {ROLE_LABELS[user.role]}
             {lastAttemptAt
-              ? ` · last attempt ${new Date(lastAttemptAt).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" })}`
+              ? ` · last attempt ${formatDateTime(lastAttemptAt)}`
               : " · no attempts yet"}
           </p>
           <ProgressPanel progress={progress} title={user.name} />

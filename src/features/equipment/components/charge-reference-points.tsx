@@ -6,7 +6,7 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
 import { useChargeReferences } from "@/lib/api/charge-references.ts";
 import { formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
-import { formatTakenAt } from "../utils/format-taken-at.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 import { ChargeReferenceValues } from "./charge-reference-values.tsx";
 import { ClearChargeReference } from "./clear-charge-reference.tsx";
 import { SetChargeReference } from "./set-charge-reference.tsx";
@@ -26,14 +26,14 @@ interface ChargeReferencePointsProps {
 function Provenance({ reference }: { reference: StoredChargeReference }) {
   return (
     <p className="text-sm">
-      {CHARGE_REFERENCE_SOURCE_LABELS[reference.source]} · set {formatTakenAt(reference.setAt)}
+      {CHARGE_REFERENCE_SOURCE_LABELS[reference.source]} · set {formatDateTime(reference.setAt)}
       {reference.setBy && <> by {reference.setBy.name}</>}
       {reference.visitId && (
         <>
           {" "}
           · from{" "}
           <Link to={paths.visits.detail.getHref(reference.visitId)} className="text-accent underline underline-offset-4">
-            the visit of {reference.visitStartedAt ? formatTakenAt(reference.visitStartedAt) : "that day"}
+            the visit of {reference.visitStartedAt ? formatDateTime(reference.visitStartedAt) : "that day"}
           </Link>
         </>
       )}
@@ -89,7 +89,7 @@ function CircuitReference({ circuit, showNumber, ...props }: ChargeReferencePoin
                 <Provenance reference={reference} />
                 {reference.cleared && (
                   <p className="text-sm">
-                    Cleared {formatTakenAt(reference.cleared.at)}
+                    Cleared {formatDateTime(reference.cleared.at)}
                     {reference.cleared.by && <> by {reference.cleared.by.name}</>}: {reference.cleared.reason}
                   </p>
                 )}

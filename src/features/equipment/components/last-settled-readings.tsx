@@ -10,7 +10,7 @@ import {
   temperatureToDisplay,
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
-import { formatTakenAt } from "../utils/format-taken-at.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 type Settled = EquipmentDetail["lastSettled"][number];
 
@@ -52,7 +52,7 @@ export function LastSettledReadings({
           <h3 className="flex flex-wrap items-baseline justify-between gap-2 font-semibold">
             <span>Circuit {entry.circuit}</span>
             {entry.takenAt && (
-              <span className="num text-sm font-normal text-muted">{formatTakenAt(entry.takenAt)}</span>
+              <span className="num text-sm font-normal text-muted">{formatDateTime(entry.takenAt)}</span>
             )}
           </h3>
           {entry.result ? (

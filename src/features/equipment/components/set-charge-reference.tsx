@@ -9,7 +9,7 @@ import { ApiError } from "@/lib/api/api-client.ts";
 import { useSetChargeReference } from "@/lib/api/charge-references.ts";
 import { visitQueryOptions } from "@/lib/api/visits.ts";
 import { DIFFERENCE_LABEL, TEMPERATURE_DECIMALS, differenceToDisplay, formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
-import { formatTakenAt } from "../utils/format-taken-at.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 interface SetChargeReferenceProps {
   equipmentId: string;
@@ -95,7 +95,7 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
             <option value="">Choose a visit…</option>
             {withReadings.map((candidate) => (
               <option key={candidate.id} value={candidate.id}>
-                {formatTakenAt(candidate.startedAt)} — {candidate.reason}
+                {formatDateTime(candidate.startedAt)} — {candidate.reason}
               </option>
             ))}
           </SelectField>
@@ -109,7 +109,7 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
                 <option value="">Choose a reading…</option>
                 {readings.map((reading) => (
                   <option key={reading.id} value={reading.id}>
-                    {formatTakenAt(reading.takenAt)} · superheat {difference(reading.result.superheatK)} · subcooling {difference(reading.result.subcoolingK)}
+                    {formatDateTime(reading.takenAt)} · superheat {difference(reading.result.superheatK)} · subcooling {difference(reading.result.subcoolingK)}
                   </option>
                 ))}
               </SelectField>

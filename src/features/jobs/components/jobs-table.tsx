@@ -6,7 +6,7 @@ import { visitReasonText, type VisitSummary } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { SortableTable, sortableTableFeatures } from "@/components/ui/data-table/sortable-table.tsx";
 import { paths } from "@/config/paths.ts";
-import { formatVisitDate } from "../utils/format-visit-date.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 interface JobRow extends VisitSummary {
   startedAtMs: number;
@@ -26,7 +26,7 @@ const columns = column.columns([
         to={paths.visits.detail.getHref(info.row.original.id)}
         className="num font-semibold text-accent underline underline-offset-4"
       >
-        {formatVisitDate(info.row.original.startedAt)}
+        {formatDateTime(info.row.original.startedAt)}
       </Link>
     ),
   }),
@@ -155,7 +155,7 @@ export function JobsTable({ visits }: { visits: readonly VisitSummary[] }) {
                     </span>
                     <span className="block">{visitReasonText(visit.reason)}</span>
                     <span className="block text-sm text-muted">
-                      <span className="num">{formatVisitDate(visit.startedAt)}</span> · {visit.siteName} ·{" "}
+                      <span className="num">{formatDateTime(visit.startedAt)}</span> · {visit.siteName} ·{" "}
                       <span className="num">{visit.readingCount}</span>{" "}
                       {visit.readingCount === 1 ? "reading" : "readings"}
                       {visit.crew && ` · ${visit.crew}`}

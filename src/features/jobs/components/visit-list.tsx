@@ -3,7 +3,7 @@ import { Link } from "react-router-dom";
 import { visitReasonText, type VisitSummary } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
-import { formatVisitDate } from "../utils/format-visit-date.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /** A short list of one unit's visits, newest first, each a link to its run log. */
 export function VisitList({ visits }: { visits: readonly VisitSummary[] }) {
@@ -23,7 +23,7 @@ export function VisitList({ visits }: { visits: readonly VisitSummary[] }) {
           >
             <span className="min-w-0 flex-1 space-y-1">
               <span className="flex flex-wrap items-center gap-2">
-                <span className="num font-semibold">{formatVisitDate(visit.startedAt)}</span>
+                <span className="num font-semibold">{formatDateTime(visit.startedAt)}</span>
                 <VisitStatusBadge status={visit.status} />
               </span>
               <span className="block">{visitReasonText(visit.reason)}</span>

@@ -2,8 +2,7 @@ import { ROLE_LABELS } from "@shared/schemas/auth.ts";
 import type { Invitation } from "@shared/schemas/invitations.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { useRevokeInvitation } from "@/lib/api/invitations.ts";
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
+import { formatDate } from "@shared/format/date-time.ts";
 
 export function PendingInvitations({ invitations }: { invitations: Invitation[] }) {
   const revoke = useRevokeInvitation();
@@ -21,7 +20,7 @@ export function PendingInvitations({ invitations }: { invitations: Invitation[] 
               <div className="min-w-0">
                 <div className="break-all font-medium">{invitation.email}</div>
                 <div className="text-sm text-muted">
-                  {ROLE_LABELS[invitation.role]} · link valid until <span className="num">{dateFormat.format(new Date(invitation.expiresAt))}</span>
+                  {ROLE_LABELS[invitation.role]} · link valid until <span className="num">{formatDate(invitation.expiresAt)}</span>
                 </div>
               </div>
               <Button variant="secondary" disabled={revoke.isPending} onClick={() => revoke.mutate(invitation.id)} aria-label={`Withdraw the invitation to ${invitation.email}`}>

@@ -1,6 +1,5 @@
 import type { OutboxMessage } from "@shared/schemas/outbox.ts";
-
-const timeFormat = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /** Turns the URLs of a plain-text mail into links, so a tester can follow an invitation in one tap. */
 function Linkified({ text }: { text: string }) {
@@ -31,7 +30,7 @@ export function OutboxList({ messages }: { messages: OutboxMessage[] }) {
             <header className="mb-2">
               <h2 className="font-semibold">{message.subject}</h2>
               <p className="text-sm text-muted">
-                To <span className="break-all">{message.to}</span> · <span className="num">{timeFormat.format(new Date(message.createdAt))}</span>
+                To <span className="break-all">{message.to}</span> · <span className="num">{formatDateTime(message.createdAt)}</span>
               </p>
             </header>
             {message.linksHidden ? (

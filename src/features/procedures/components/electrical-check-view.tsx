@@ -2,6 +2,7 @@ import { ELECTRICAL_TARGET_LABELS, type ElectricalCheck } from "@shared/schemas/
 import { CURRENT_IMBALANCE_MAX_PERCENT } from "@shared/engine/index.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { VerdictBadge, VerdictLine } from "./verdict-badge.tsx";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 const list = (values: readonly number[], unit: string, decimals = 0) => `${values.map((value) => formatNumber(value, decimals)).join(" / ")} ${unit}`;
 
@@ -16,7 +17,7 @@ export function ElectricalCheckView({ check }: { check: ElectricalCheck }) {
           {input.circuit ? `, circuit ${input.circuit}` : ""}
         </h3>
         <VerdictBadge verdict={result.overall.verdict} />
-        <span className="num text-sm text-muted">{new Date(check.takenAt).toLocaleString(undefined, { dateStyle: "short", timeStyle: "short" })}</span>
+        <span className="num text-sm text-muted">{formatDateTime(check.takenAt)}</span>
         {check.recordedBy && <span className="text-sm text-muted">· {check.recordedBy.name}</span>}
       </header>
       <ul className="mt-2">

@@ -183,7 +183,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
       {current && (
         <section aria-labelledby="evacuation-current-heading" className="space-y-3 rounded-card border-2 border-rule bg-surface p-4">
           <h2 id="evacuation-current-heading" className="text-lg font-semibold">
-            Evacuation started {new Date(current.startedAt).toLocaleTimeString(undefined, { timeStyle: "short" })}
+            Evacuation started {recordTime(current.startedAt)}
           </h2>
           <EvacuationSummary evacuation={current} unit={unit} />
           <EvacuationChart evacuation={current} unit={unit} />

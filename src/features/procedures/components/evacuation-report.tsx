@@ -3,6 +3,7 @@ import { useEvacuations } from "@/lib/api/procedures.ts";
 import { EvacuationChart } from "./evacuation-chart.tsx";
 import { EvacuationSummary } from "./evacuation-view.tsx";
 import { ReportSection } from "./report-section.tsx";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /** The visit report's evacuation section: each evacuation's chart and decay verdict, in microns. */
 export function EvacuationReport({ visitId, chartWidth }: { visitId: string; chartWidth: number }) {
@@ -14,7 +15,7 @@ export function EvacuationReport({ visitId, chartWidth }: { visitId: string; cha
       {list.map((evacuation) => (
         <article key={evacuation.id} aria-label="Evacuation" className="space-y-2 rounded-card border-2 border-rule bg-surface p-3">
           <h3 className="font-semibold">
-            Started {new Date(evacuation.startedAt).toLocaleString(undefined, { dateStyle: "short", timeStyle: "short" })}
+            Started {formatDateTime(evacuation.startedAt)}
             {evacuation.recordedBy && <span className="font-normal text-muted"> · {evacuation.recordedBy.name}</span>}
           </h3>
           <EvacuationSummary evacuation={evacuation} unit="micron" />

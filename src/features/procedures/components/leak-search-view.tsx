@@ -1,5 +1,6 @@
 import { LEAK_METHOD_LABELS, LEAK_SEVERITY_LABELS, RECHECK_LABELS, type LeakSearch } from "@shared/schemas/procedure-records.ts";
 import { VerdictBadge, VerdictLine } from "./verdict-badge.tsx";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /** One saved leak search: method, places, each leak with its repair, the recheck and the verdict. */
 export function LeakSearchView({ search }: { search: LeakSearch }) {
@@ -9,7 +10,7 @@ export function LeakSearchView({ search }: { search: LeakSearch }) {
       <header className="flex flex-wrap items-center gap-2">
         <h3 className="font-semibold">Leak search — {LEAK_METHOD_LABELS[input.method]}</h3>
         <VerdictBadge verdict={result.verdict} />
-        <span className="num text-sm text-muted">{new Date(search.takenAt).toLocaleString(undefined, { dateStyle: "short", timeStyle: "short" })}</span>
+        <span className="num text-sm text-muted">{formatDateTime(search.takenAt)}</span>
         {search.recordedBy && <span className="text-sm text-muted">· {search.recordedBy.name}</span>}
       </header>
       <p className="mt-1 text-sm">

@@ -1,6 +1,7 @@
 import { PRESSURE_TEST_SECTION_LABELS, type PressureTest } from "@shared/schemas/procedure-records.ts";
 import { formatNumber, GAUGE_LABEL, gaugeToDisplay, PRESSURE_DECIMALS, TEMPERATURE_LABEL, temperatureToDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { VerdictBadge, VerdictLine } from "./verdict-badge.tsx";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /** One saved nitrogen test: the test pressure against the rating, then the temperature-corrected hold. */
 export function PressureTestView({ test, units, atmosphericKPa }: { test: PressureTest; units: DisplayUnits; atmosphericKPa: number }) {
@@ -15,7 +16,7 @@ export function PressureTestView({ test, units, atmosphericKPa }: { test: Pressu
       <header className="flex flex-wrap items-center gap-2">
         <h3 className="font-semibold">Nitrogen test — {PRESSURE_TEST_SECTION_LABELS[input.section]}</h3>
         <VerdictBadge verdict={result.overall.verdict} word={result.overall.verdict === "pass" ? "Held" : result.overall.verdict === "fail" ? "Fail" : undefined} />
-        <span className="num text-sm text-muted">{new Date(test.takenAt).toLocaleString(undefined, { dateStyle: "short", timeStyle: "short" })}</span>
+        <span className="num text-sm text-muted">{formatDateTime(test.takenAt)}</span>
         {test.recordedBy && <span className="text-sm text-muted">· {test.recordedBy.name}</span>}
       </header>
       <dl className="num mt-2 grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-4">

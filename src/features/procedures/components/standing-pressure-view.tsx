@@ -12,6 +12,7 @@ import {
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
 import { VerdictBadge, VerdictLine } from "./verdict-badge.tsx";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /** The words a standing-pressure verdict is read as: the question the check answers is "air in it?". */
 export const STANDING_PRESSURE_WORDS = { pass: "No air shown", warn: "Suspect", fail: "Non-condensables" } as const;
@@ -58,7 +59,7 @@ export function StandingPressureView({ check, units }: { check: StandingPressure
           {input.circuit !== null && `, circuit ${input.circuit}`}
         </h3>
         <VerdictBadge verdict={result.verdict} word={STANDING_PRESSURE_WORDS[result.verdict]} />
-        <span className="num text-sm text-muted">{new Date(check.takenAt).toLocaleString(undefined, { dateStyle: "short", timeStyle: "short" })}</span>
+        <span className="num text-sm text-muted">{formatDateTime(check.takenAt)}</span>
         {check.recordedBy && <span className="text-sm text-muted">· {check.recordedBy.name}</span>}
       </header>
       <p className="num text-sm">

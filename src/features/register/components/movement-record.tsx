@@ -1,7 +1,8 @@
 import type { ReactNode } from "react";
 import { MOVEMENT_KIND_LABELS, type Movement } from "@shared/schemas/register.ts";
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
-import { formatKg, formatWhen } from "../utils/format-register.ts";
+import { formatKg } from "../utils/format-register.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /**
  * One register movement as the lists show it: mass and kind, circuit, when, cylinder and
@@ -16,7 +17,7 @@ export function MovementRecord({ movement, extra }: { movement: Movement; extra?
         {movement.circuit !== null && <span className="font-normal"> · circuit {movement.circuit}</span>}
       </p>
       <p className="text-sm text-muted">
-        <span className="num">{formatWhen(movement.at)}</span>
+        <span className="num">{formatDateTime(movement.at)}</span>
         {movement.cylinder && <> · cylinder {movement.cylinder.label}</>}
         {movement.technician && <> · {movement.technician.name}</>}
         {extra}

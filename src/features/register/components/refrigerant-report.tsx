@@ -2,7 +2,8 @@ import { isStanding, type Reading } from "@shared/schemas/visits.ts";
 import { MOVEMENT_KIND_LABELS } from "@shared/schemas/register.ts";
 import { useVisitRefrigerant } from "@/lib/api/register.ts";
 import { estimateBeforeRecovery } from "../utils/estimate-before-recovery.ts";
-import { formatKg, formatSignedKg, formatWhen } from "../utils/format-register.ts";
+import { formatKg, formatSignedKg } from "../utils/format-register.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 import { HiddenLinesNote } from "./hidden-lines-note.tsx";
 import { VerdictLine } from "./verdict-line.tsx";
 
@@ -81,7 +82,7 @@ export function RefrigerantReport({ visitId, readings = [] }: { visitId: string;
           <ul className="space-y-0.5 text-sm">
             {movements.map((movement) => (
               <li key={movement.id}>
-                <span className="num text-muted">{formatWhen(movement.at)}</span> — {MOVEMENT_KIND_LABELS[movement.kind]}
+                <span className="num text-muted">{formatDateTime(movement.at)}</span> — {MOVEMENT_KIND_LABELS[movement.kind]}
                 {movement.circuit !== null && ` (circuit ${movement.circuit})`}: <span className="num">{formatKg(movement.kg)}</span>
                 {movement.cylinder && ` · cylinder ${movement.cylinder.label}`}
                 {movement.technician && ` · ${movement.technician.name}`}

@@ -5,7 +5,8 @@ import { buttonVariants } from "@/components/ui/button/button.tsx";
 import { SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { useMembers } from "@/lib/api/members.ts";
 import { registerExportHref, useRegister } from "@/lib/api/register.ts";
-import { formatKg, formatWhen, localDayEnd, localDayStart } from "../utils/format-register.ts";
+import { formatKg, localDayEnd, localDayStart } from "../utils/format-register.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 export interface RegisterFilters {
   /** Local calendar dates (YYYY-MM-DD) as typed in the date inputs; "" = open-ended. */
@@ -94,7 +95,7 @@ export function RegisterView({ filters, onChange, mayChooseTechnician }: { filte
             <ul aria-label="Register entries" className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface">
               {register.data.movements.map((movement) => (
                 <li key={movement.id} className="grid gap-1 p-3 md:grid-cols-[11rem_1fr_8rem]">
-                  <p className="num text-sm text-muted">{formatWhen(movement.at)}</p>
+                  <p className="num text-sm text-muted">{formatDateTime(movement.at)}</p>
                   <div>
                     <p className="font-semibold">
                       {MOVEMENT_KIND_LABELS[movement.kind]} · <span className="num">{movement.refrigerant}</span>

@@ -6,11 +6,6 @@ export const formatKg = (kg: number) => `${formatNumber(kg, 2)} kg`;
 /** A signed mass difference: "+0.30 kg" / "−0.30 kg". */
 export const formatSignedKg = (kg: number) => `${kg >= 0 ? "+" : "−"}${formatNumber(Math.abs(kg), 2)} kg`;
 
-const dateTime = new Intl.DateTimeFormat("en-AU", { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" });
-
-/** "3 Dec 2026, 09:41" in the viewer's own time zone. */
-export const formatWhen = (iso: string) => dateTime.format(new Date(iso));
-
 /**
  * A local calendar date (YYYY-MM-DD from a date input) as the instant its day starts, with the
  * viewer's offset, so a quarter's register ends at local midnight rather than UTC's.

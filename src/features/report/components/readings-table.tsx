@@ -11,6 +11,7 @@ import {
   temperatureToDisplay,
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
+import { formatTime } from "@shared/format/date-time.ts";
 
 /** Every reading of one circuit as a table, in the order taken. */
 export function ReadingsTable({ readings, units, atmosphericKPa }: { readings: Reading[]; units: DisplayUnits; atmosphericKPa: number }) {
@@ -43,7 +44,7 @@ export function ReadingsTable({ readings, units, atmosphericKPa }: { readings: R
             const atmosphere = reading.input.atmosphericPressureKPa ?? atmosphericKPa;
             return (
               <tr key={reading.id} className="border-b border-rule">
-                <td className="px-2 py-1 text-left">{new Date(reading.takenAt).toLocaleTimeString(undefined, { hour: "2-digit", minute: "2-digit" })}</td>
+                <td className="px-2 py-1 text-left">{formatTime(reading.takenAt)}</td>
                 <td className="px-2 py-1">{pressure(reading.input.suctionPressureKPa, atmosphere)}</td>
                 <td className="px-2 py-1">{temp(reading.result.evaporatingTempC)}</td>
                 <td className="px-2 py-1">{diff(reading.result.superheatK)}</td>

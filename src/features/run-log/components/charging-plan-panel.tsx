@@ -5,6 +5,7 @@ import { safetyClasses } from "@shared/content/safety-classes.ts";
 import type { DiagnosisInputDraft, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import { CautionPanel, DeferToCodes } from "@/components/ui/caution-panel/caution-panel.tsx";
 import type { CircuitSeries } from "../utils/circuit-series.ts";
+import { formatTime } from "@shared/format/date-time.ts";
 
 const kgText = (kg: number) => `${kg.toFixed(2)} kg`;
 const signedKg = (kg: number) => `${kg > 0 ? "+" : kg < 0 ? "−" : ""}${Math.abs(kg).toFixed(2)} kg`;
@@ -85,7 +86,7 @@ export function ChargingPlanPanel({ result, input, series, isBlend }: ChargingPl
             {checks.map((check) => (
               <li key={check.step.at} className="border-t border-rule pt-1">
                 <span className="num">{signedKg(check.step.kg)}</span> at{" "}
-                {new Date(check.step.at).toLocaleTimeString([], { hour: "2-digit", minute: "2-digit" })}:{" "}
+                {formatTime(check.step.at)}:{" "}
                 {check.refill ? (
                   <span className="text-muted">
                     weighed in after recovery{check.afterKg === null ? "" : <>; estimate since <span className="num">{signedKg(check.afterKg)}</span></>}

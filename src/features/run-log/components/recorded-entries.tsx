@@ -13,8 +13,9 @@ import {
   PRESSURE_DECIMALS,
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
+import { formatTime } from "@shared/format/date-time.ts";
 
-const clock = (iso: string) => new Date(iso).toLocaleTimeString(undefined, { hour: "2-digit", minute: "2-digit" });
+const clock = (iso: string) => formatTime(iso);
 
 type Entry =
   { kind: "reading"; at: string; reading: Reading } | { kind: "adjustment"; at: string; adjustment: Adjustment };

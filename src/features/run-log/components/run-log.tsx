@@ -33,6 +33,7 @@ import { ReadingCards } from "./reading-cards.tsx";
 import { SettledIndicator } from "./settled-indicator.tsx";
 import { TimelineStrip } from "./timeline-strip.tsx";
 import { TrendChart } from "./trend-chart.tsx";
+import { formatTime } from "@shared/format/date-time.ts";
 
 const FIELD_LABELS: Partial<Record<DraftField, string>> = {
   suctionPressureKPa: "suction pressure",
@@ -202,7 +203,7 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
                 data-testid="finding-waits"
               >
                 Waiting for the readings: the finding below is the last saved reading&apos;s (
-                {new Date(lastReading.takenAt).toLocaleTimeString([], { hour: "2-digit", minute: "2-digit" })}), not the
+                {formatTime(lastReading.takenAt)}), not the
                 values on screen now.
               </p>
             )}
@@ -272,7 +273,7 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
                   </Button>
                   <span className="line-clamp-2 text-xs text-muted sm:text-sm" aria-live="polite">
                     {savedAt
-                      ? `✓ Saved at ${new Date(savedAt).toLocaleTimeString()} — values stay for the next reading`
+                      ? `✓ Saved at ${formatTime(savedAt)} — values stay for the next reading`
                       : stored.restored
                         ? "Values typed earlier on this device are back — not saved yet"
                         : missingRequired.length > 0

@@ -4,9 +4,10 @@ import { chargeStateText } from "@shared/content/charge-states.ts";
 import { CHARGE_STATE_ICONS } from "@/components/ui/state/charge-state-badge.tsx";
 import { DIFFERENCE_LABEL, differenceToDisplay, formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
 import type { CircuitSeries } from "../utils/circuit-series.ts";
+import { formatTime } from "@shared/format/date-time.ts";
 
 const STRIP_LENGTH = 8;
-const clock = (iso: string) => new Date(iso).toLocaleTimeString(undefined, { hour: "2-digit", minute: "2-digit" });
+const clock = (iso: string) => formatTime(iso);
 
 type Entry = { kind: "reading"; at: string; reading: CircuitSeries["readings"][number] } | { kind: "adjustment"; at: string; adjustment: CircuitSeries["adjustments"][number] };
 

@@ -1,7 +1,8 @@
 import { History } from "lucide-react";
 import { VISIT_EVENT_LABELS, type VisitEvent } from "@shared/schemas/visits.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
-const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
+const stamp = (iso: string) => formatDateTime(iso);
 
 /**
  * The visit's audit trail: who did what to the record, when and why — review steps,

@@ -5,8 +5,9 @@ import { MAX_COMMENT_LENGTH } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { useCreateComment } from "@/lib/api/visits.ts";
+import { formatDateTime, formatTime } from "@shared/format/date-time.ts";
 
-const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
+const stamp = (iso: string) => formatDateTime(iso);
 
 /** The visit's conversation: comments on the visit or on one reading, for the crew and the reviewer. */
 export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment: boolean }) {
@@ -16,7 +17,7 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
   const createComment = useCreateComment();
   const readingLabel = (id: string | null) => {
     const reading = visit.readings.find((candidate) => candidate.id === id);
-    return reading ? `circuit ${reading.circuit}, ${new Date(reading.takenAt).toLocaleTimeString(undefined, { hour: "2-digit", minute: "2-digit" })}` : null;
+    return reading ? `circuit ${reading.circuit}, ${formatTime(reading.takenAt)}` : null;
   };
 
   const submit = async () => {

@@ -1,4 +1,4 @@
-import { Camera } from "lucide-react";
+import { Camera, Images } from "lucide-react";
 import { useRef, useState } from "react";
 import { PHOTO_KINDS, type Visit } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
@@ -13,12 +13,17 @@ const KIND_LABELS: Record<(typeof PHOTO_KINDS)[number], string> = {
   other: "Other",
 };
 
-/** Photos of the nameplate, gauges and damage; the phone's camera opens straight from here. */
+/**
+ * Photos of the nameplate, gauges and damage. Two ways in: the camera straight away (capture), or
+ * the gallery for a photo taken earlier, e.g. before signal came back; one capture input alone
+ * makes some phones skip the gallery.
+ */
 export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boolean }) {
   const upload = useUploadPhoto();
   const [kind, setKind] = useState<(typeof PHOTO_KINDS)[number]>("gauges");
   const [error, setError] = useState<string | null>(null);
-  const fileInput = useRef<HTMLInputElement>(null);
+  const cameraInput = useRef<HTMLInputElement>(null);
+  const galleryInput = useRef<HTMLInputElement>(null);
 
   const send = async (file: File | undefined) => {
     if (!file) return;
@@ -28,7 +33,8 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
     } catch (caught) {
       setError(caught instanceof Error ? caught.message : "The photo was not uploaded");
     } finally {
-      if (fileInput.current) fileInput.current.value = "";
+      // Cleared, so choosing the same file again still uploads it.
+      for (const input of [cameraInput.current, galleryInput.current]) if (input) input.value = "";
     }
   };
 
@@ -67,22 +73,39 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
                 ))}
               </select>
             </div>
+            {/* The file inputs stay hidden and out of the Tab order: the buttons open them. */}
             <input
-              ref={fileInput}
-              id="photo-file"
+              ref={cameraInput}
+              id="photo-camera"
               type="file"
-              aria-label="Photo file"
+              aria-label="Photo from the camera"
               tabIndex={-1}
               accept="image/jpeg,image/png,image/webp"
               capture="environment"
               className="sr-only"
               onChange={(event) => void send(event.target.files?.[0])}
             />
-            <Button variant="secondary" onClick={() => fileInput.current?.click()} disabled={upload.isPending}>
-              <Camera aria-hidden className="size-5" /> {upload.isPending ? "Uploading…" : "Add photo"}
+            <input
+              ref={galleryInput}
+              id="photo-gallery"
+              type="file"
+              aria-label="Photo from the gallery"
+              tabIndex={-1}
+              accept="image/jpeg,image/png,image/webp"
+              className="sr-only"
+              onChange={(event) => void send(event.target.files?.[0])}
+            />
+            {/* py-3: 52 px tall, over the 48 px target (min-h-touch alone gives 44). */}
+            <Button variant="secondary" className="py-3" onClick={() => cameraInput.current?.click()} disabled={upload.isPending}>
+              <Camera aria-hidden className="size-5" /> Take photo
+            </Button>
+            <Button variant="secondary" className="py-3" onClick={() => galleryInput.current?.click()} disabled={upload.isPending}>
+              <Images aria-hidden className="size-5" /> Choose from gallery
             </Button>
           </div>
-          <p className="text-xs text-muted">JPEG, PNG or WebP, up to 12 MB.</p>
+          <p className="text-xs text-muted" role="status">
+            {upload.isPending ? "Uploading…" : "JPEG, PNG or WebP, up to 12 MB."}
+          </p>
         </div>
       )}
     </section>

@@ -10,6 +10,7 @@ import { useEquipmentDetail } from "@/lib/api/equipment.ts";
 import { useElectricalChecks, useEvacuations, usePressureTests, useStandingPressureChecks } from "@/lib/api/procedures.ts";
 import { useVisitRefrigerant } from "@/lib/api/register.ts";
 import { useReviewVisit } from "@/lib/api/visits.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 interface ReviewPanelProps {
   visit: Visit;
@@ -190,7 +191,7 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
       {visit.status === "signed-off" && (
         <p className="mt-2">
           Signed off by <strong>{visit.signedOffBy?.name ?? "a former member"}</strong>
-          {visit.signedOffAt && ` on ${new Date(visit.signedOffAt).toLocaleString()}`}
+          {visit.signedOffAt && ` on ${formatDateTime(visit.signedOffAt)}`}
           {visit.reviewNote && ` — “${visit.reviewNote}”`}
         </p>
       )}
