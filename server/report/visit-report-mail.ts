@@ -1,5 +1,5 @@
 import { chargeStateText } from "@shared/content/charge-states.ts";
-import { VISIT_STATUS_LABELS, type Visit } from "@shared/schemas/visits.ts";
+import { VISIT_STATUS_LABELS, visitReasonText, type Visit } from "@shared/schemas/visits.ts";
 import type { MailMessage } from "../mail/mailer.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
 
@@ -21,7 +21,7 @@ export function visitReportMail(visit: Visit, reportUrl: string, to: string, org
     `Service visit report — ${visit.equipmentName}`,
     `${visit.customerName}, ${visit.siteName}`,
     `Refrigerant ${visit.refrigerant}. Started ${formatDateTime(visit.startedAt, timeZone)} (${timeZone} time).`,
-    `Reason for the visit: ${visit.reason}`,
+    `Reason for the visit: ${visitReasonText(visit.reason)}`,
     `Status: ${VISIT_STATUS_LABELS[visit.status]}${visit.signedOffBy ? ` (signed off by ${visit.signedOffBy.name}${visit.signedOffAt ? ` on ${formatDateTime(visit.signedOffAt, timeZone)}` : ""})` : ""}`,
     "",
   ];

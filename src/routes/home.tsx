@@ -70,7 +70,7 @@ export default function HomeRoute() {
         </p>
       )}
       {resume && <ResumeVisit visit={resume} />}
-      {writer && <QuickStartVisit matches={unitMatches} />}
+      {writer && <QuickStartVisit matches={unitMatches} inProgress={inProgress} />}
       <VisitLinks title="Visits in progress" visits={inProgress} empty={writer ? "No open visits. Find a unit above to start one." : "No open visits."} />
       {reviewer && <VisitLinks title="Waiting for your review" visits={awaiting.data} empty="Nothing is waiting for review." />}
       <section className="rounded-card border-2 border-caution bg-surface p-4">

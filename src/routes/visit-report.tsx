@@ -3,7 +3,7 @@ import { applicationText } from "@shared/content/applications.ts";
 import { Printer } from "lucide-react";
 import { useState } from "react";
 import { Link, useParams } from "react-router-dom";
-import { ADJUSTMENT_KIND_LABELS, isStanding, VISIT_STATUS_LABELS } from "@shared/schemas/visits.ts";
+import { ADJUSTMENT_KIND_LABELS, isStanding, VISIT_STATUS_LABELS, visitReasonText } from "@shared/schemas/visits.ts";
 import { can } from "@shared/schemas/auth.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
@@ -80,7 +80,7 @@ export default function VisitReportRoute() {
           <VisitStatusBadge status={data.status} /> Started {stamp(data.startedAt)} ({viewerTimeZone()} time) · Crew: {data.technicians.map((person) => person.name).join(", ") || "—"}
         </p>
         <p className="mt-1">
-          <span className="font-medium">Reason:</span> {data.reason}
+          <span className="font-medium">Reason:</span> {visitReasonText(data.reason)}
         </p>
       </header>
 

@@ -5,7 +5,7 @@ import { useState, type ReactNode } from "react";
 import { Link, useParams, useSearchParams } from "react-router-dom";
 import { getRefrigerant } from "@shared/engine/index.ts";
 import { can } from "@shared/schemas/auth.ts";
-import { acceptsEntries, closedVisitMessage } from "@shared/schemas/visits.ts";
+import { acceptsEntries, closedVisitMessage, visitReasonText } from "@shared/schemas/visits.ts";
 import { canCasebook } from "@shared/schemas/casebook.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
@@ -173,7 +173,7 @@ export default function VisitRoute() {
           {formatDateTime(data.startedAt)}
         </p>
         <p>
-          <span className="font-medium">Reason:</span> {data.reason}
+          <span className="font-medium">Reason:</span> {visitReasonText(data.reason)}
         </p>
         <Link to={paths.visits.report.getHref(data.id)} className="inline-flex min-h-touch items-center gap-2 font-medium text-accent underline underline-offset-4">
           <FileText aria-hidden className="size-5" /> Visit report

@@ -1,7 +1,8 @@
 import { Play, Search } from "lucide-react";
 import { useDeferredValue, useId, useState } from "react";
-import { useNavigate } from "react-router-dom";
+import { Link, useNavigate } from "react-router-dom";
 import type { Equipment } from "@shared/schemas/equipment.ts";
+import type { VisitSummary } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { paths } from "@/config/paths.ts";
@@ -15,8 +16,16 @@ const MAX_SHOWN = 5;
  * Find a unit by name, site or customer and start a visit on it from Today, in one tap. The
  * reason can wait: it is asked for before the visit goes for review. `matches` is the
  * equipment list's own search (passed in by the route, so there is one way to match a unit).
+ * A unit that already has a visit in progress offers that visit instead: two open visits on
+ * one unit would split its readings and trend.
  */
-export function QuickStartVisit({ matches }: { matches: (unit: Equipment, query: string) => boolean }) {
+export function QuickStartVisit({
+  matches,
+  inProgress,
+}: {
+  matches: (unit: Equipment, query: string) => boolean;
+  inProgress: VisitSummary[] | undefined;
+}) {
   const equipment = useEquipmentList();
   const create = useCreateVisit();
   const navigate = useNavigate();
@@ -26,6 +35,8 @@ export function QuickStartVisit({ matches }: { matches: (unit: Equipment, query:
   const [starting, setStarting] = useState<string | null>(null);
   const searchId = useId();
   const found = deferredQuery && equipment.data ? equipment.data.filter((unit) => matches(unit, deferredQuery)) : [];
+
+  const openVisit = (unit: Equipment) => inProgress?.find((visit) => visit.equipmentId === unit.id);
 
   const start = async (unit: Equipment) => {
     setError(null);
@@ -84,9 +95,19 @@ export function QuickStartVisit({ matches }: { matches: (unit: Equipment, query:
                       {unit.customerName} · {unit.siteName} · <span className="num">{unit.refrigerant}</span>
                     </p>
                   </div>
-                  <Button onClick={() => void start(unit)} disabled={create.isPending} aria-label={`Start a visit on ${unit.name}`}>
-                    <Play aria-hidden className="size-5" /> {starting === unit.id ? "Starting…" : "Start visit"}
-                  </Button>
+                  {openVisit(unit) ? (
+                    <Link
+                      to={paths.visits.detail.getHref(openVisit(unit)!.id)}
+                      className="inline-flex min-h-touch items-center gap-2 rounded-card border-2 border-ink px-4 font-semibold"
+                      aria-label={`Continue the visit in progress on ${unit.name}`}
+                    >
+                      <Play aria-hidden className="size-5" /> Continue visit
+                    </Link>
+                  ) : (
+                    <Button onClick={() => void start(unit)} disabled={create.isPending} aria-label={`Start a visit on ${unit.name}`}>
+                      <Play aria-hidden className="size-5" /> {starting === unit.id ? "Starting…" : "Start visit"}
+                    </Button>
+                  )}
                 </li>
               ))}
             </ul>

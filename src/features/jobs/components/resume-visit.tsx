@@ -2,7 +2,7 @@ import { ChevronRight, PlayCircle } from "lucide-react";
 import { Link } from "react-router-dom";
 import { visitReasonText, type VisitSummary } from "@shared/schemas/visits.ts";
 import { paths } from "@/config/paths.ts";
-import { formatVisitDate } from "../utils/format-visit-date.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
 
 /**
  * One big target straight into the run log of the visit the technician was last working on:
@@ -24,7 +24,7 @@ export function ResumeVisit({ visit }: { visit: VisitSummary }) {
         </span>
         <span className="block truncate">{visitReasonText(visit.reason)}</span>
         <span className="block text-sm">
-          {visit.yourLastActivityAt && <>You last worked on it {formatVisitDate(visit.yourLastActivityAt)} · </>}
+          {visit.yourLastActivityAt && <>You last worked on it {formatDateTime(visit.yourLastActivityAt)} · </>}
           <span className="num">{visit.readingCount}</span> {visit.readingCount === 1 ? "reading" : "readings"}
         </span>
       </span>
