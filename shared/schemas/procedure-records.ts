@@ -18,6 +18,8 @@ import {
   PressureTestResultSchema,
   RunningCurrentInputSchema,
   RunningCurrentResultSchema,
+  SinglePhaseWindingInputSchema,
+  SinglePhaseWindingResultSchema,
   StandingPressureInputSchema,
   StandingPressureResultSchema,
   SupplyVoltageInputSchema,
@@ -65,19 +67,26 @@ export const ElectricalCheckBodySchema = z
     nameplateV: SupplyVoltageInputSchema.shape.nameplateV.optional(),
     insulation: z.array(InsulationReadingSchema).max(6, "Record at most six insulation readings per check").optional(),
     windingOhms: WindingBalanceInputSchema.shape.ohms.optional(),
+    /** A single-phase compressor's terminals C–R, C–S, R–S (instead of three-phase T1–T2…). */
+    singlePhaseWindingOhms: SinglePhaseWindingInputSchema.optional(),
     runningAmps: z.array(RunningCurrentInputSchema.shape.amps).min(1).max(3, "Enter at most three phase currents").optional(),
     ratedA: RunningCurrentInputSchema.shape.ratedA.optional(),
     note: NoteSchema,
   })
   // A record with nothing measured says nothing; ask for at least one reading.
-  .refine((body) => Boolean(body.supplyVolts?.length || body.insulation?.length || body.windingOhms || body.runningAmps?.length), {
+  .refine((body) => Boolean(body.supplyVolts?.length || body.insulation?.length || body.windingOhms || body.singlePhaseWindingOhms || body.runningAmps?.length), {
     path: ["supplyVolts"],
     message: "Enter at least one measurement: supply voltage, insulation, winding resistance or running current",
   })
   // The supply has no windings or running current of its own.
-  .refine((body) => body.target !== "supply" || (!body.windingOhms && !body.runningAmps?.length), {
+  .refine((body) => body.target !== "supply" || (!body.windingOhms && !body.singlePhaseWindingOhms && !body.runningAmps?.length), {
     path: ["target"],
     message: "Winding resistance and running current belong to a compressor or fan check",
+  })
+  // C, R and S are a compressor's terminals; one motor has either three-phase or single-phase windings.
+  .refine((body) => !body.singlePhaseWindingOhms || (body.target === "compressor" && !body.windingOhms), {
+    path: ["singlePhaseWindingOhms"],
+    message: "C–R, C–S and R–S belong to a single-phase compressor, not alongside three-phase windings",
   });
 export type ElectricalCheckBody = z.input<typeof ElectricalCheckBodySchema>;
 
@@ -89,6 +98,8 @@ export const ElectricalCheckInputSchema = z.object({
   nameplateV: z.number().nullable(),
   insulation: z.array(z.object({ megohms: z.number(), testVoltageV: z.number(), point: z.string().optional() })),
   windingOhms: z.tuple([z.number(), z.number(), z.number()]).nullable(),
+  /** Absent on checks saved before single-phase windings were recorded. */
+  singlePhaseWindingOhms: z.object({ commonRun: z.number(), commonStart: z.number(), runStart: z.number() }).nullable().optional(),
   runningAmps: z.array(z.number()).nullable(),
   ratedA: z.number().nullable(),
   note: z.string().nullable(),
@@ -101,6 +112,8 @@ export const ElectricalCheckResultSchema = z.object({
   supplyVoltage: SupplyVoltageResultSchema.nullable(),
   insulation: z.array(InsulationResistanceResultSchema.extend({ point: z.string().optional() })),
   windingBalance: WindingBalanceResultSchema.nullable(),
+  /** Absent on checks saved before single-phase windings were recorded. */
+  singlePhaseWindings: SinglePhaseWindingResultSchema.nullable().optional(),
   runningCurrent: z.array(RunningCurrentResultSchema),
   currentImbalancePercent: z.number().nullable(),
   overall: OverallVerdictSchema,

@@ -17,13 +17,18 @@ import { micronsToPa } from "./microns-to-pa.ts";
 export function describeDecay(wording: DecayWording, unit: VacuumUnit = "micron"): string {
   const { holdMicrons, leakRiseMicrons, startMicrons, finalMicrons, minutes } = wording;
   // Microns are whole numbers on a gauge; pascals need a tenth (500 µm is 66.7 Pa).
-  const bare = (microns: number) => (unit === "micron" ? String(Math.round(microns)) : formatTenths(micronsToPa(microns)));
+  const bare = (microns: number) =>
+    unit === "micron" ? String(Math.round(microns)) : formatTenths(micronsToPa(microns));
   const unitWord = unit === "micron" ? "microns" : "Pa";
   const value = (microns: number) => `${bare(microns)} ${unitWord}`;
-  const rateValue = unit === "micron" ? wording.riseRateMicronsPerMinute : micronsToPa(wording.riseRateMicronsPerMinute);
+  const rateValue =
+    unit === "micron" ? wording.riseRateMicronsPerMinute : micronsToPa(wording.riseRateMicronsPerMinute);
   const rate = `${formatTenths(rateValue)} ${unit === "micron" ? "µm" : "Pa"}/min`;
   const span = `${formatTenths(minutes)} min`;
-  const short = wording.shortOfMinutes !== null ? ` The test lasted only ${span}; makers ask for ${wording.shortOfMinutes}–20 minutes.` : "";
+  const short =
+    wording.shortOfMinutes !== null
+      ? ` The test lasted only ${span}; makers ask for ${wording.shortOfMinutes}–20 minutes.`
+      : "";
 
   switch (wording.case) {
     case "held":
@@ -42,7 +47,9 @@ export function describeDecay(wording: DecayWording, unit: VacuumUnit = "micron"
       return `Moisture: ${what} within ${span}; the system looks tight but wet: evacuate longer (triple evacuate, warm cold spots).${short}`;
     }
     case "leak-still-rising": {
-      const why = wording.twoReadingsOnly ? "; with only two readings a levelling-off cannot be seen, so take more readings" : "";
+      const why = wording.twoReadingsOnly
+        ? "; with only two readings a levelling-off cannot be seen, so take more readings"
+        : "";
       return `Leak: still rising at ${rate} after ${span} (final ${value(finalMicrons)}) without levelling off${why}; find the leak and pressure test again.${short}`;
     }
   }

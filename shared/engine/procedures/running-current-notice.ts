@@ -26,7 +26,10 @@ export interface LiveNotice {
   source: string;
 }
 
-export function runningCurrentNotice(input: { amps: number; ratedA: number; kind: RunningCurrentKind }, limits?: Partial<RunningCurrentLimits>): LiveNotice | null {
+export function runningCurrentNotice(
+  input: { amps: number; ratedA: number; kind: RunningCurrentKind },
+  limits?: Partial<RunningCurrentLimits>,
+): LiveNotice | null {
   const { amps, ratedA, kind } = input;
   // Zero is left to the saved verdict: it is also what a box holds on the way to "0.5".
   if (!Number.isFinite(amps) || !(amps > 0) || !Number.isFinite(ratedA) || !(ratedA > 0)) return null;

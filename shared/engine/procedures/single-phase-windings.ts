@@ -27,7 +27,10 @@ const SOURCE = citeProcedure(["S46"], `R–S = C–R + C–S (${MEMORY}); tolera
 /** Ohms to two decimals: winding readings are often a few ohms, so tenths hide the difference. */
 const ohmsText = (value: number) => `${(Math.round(value * 100) / 100).toFixed(2)} Ω`;
 
-export function singlePhaseWindings(ohms: SinglePhaseWindingInput, limits?: Partial<SinglePhaseWindingLimits>): SinglePhaseWindingResult {
+export function singlePhaseWindings(
+  ohms: SinglePhaseWindingInput,
+  limits?: Partial<SinglePhaseWindingLimits>,
+): SinglePhaseWindingResult {
   const { commonRun, commonStart, runStart } = ohms;
   if ([commonRun, commonStart, runStart].some((value) => !Number.isFinite(value) || !(value > 0))) {
     throw new RangeError("singlePhaseWindings requires three finite resistances above zero");
@@ -44,9 +47,17 @@ export function singlePhaseWindings(ohms: SinglePhaseWindingInput, limits?: Part
   const allowance = Math.max((applied.passWithinPercent / 100) * runStart, applied.meterAllowanceOhms);
   if (mismatch > allowance) {
     if (sumMismatchPercent > applied.warnWithinPercent) {
-      return { verdict: "fail", reason: `${sum}, more than ${applied.warnWithinPercent} %: suspect an open or shorted winding or misread terminals; measure again at clean terminals before running`, ...common };
+      return {
+        verdict: "fail",
+        reason: `${sum}, more than ${applied.warnWithinPercent} %: suspect an open or shorted winding or misread terminals; measure again at clean terminals before running`,
+        ...common,
+      };
     }
-    return { verdict: "warn", reason: `${sum}, more than ${applied.passWithinPercent} %: clean the terminals, zero the meter leads and measure again`, ...common };
+    return {
+      verdict: "warn",
+      reason: `${sum}, more than ${applied.passWithinPercent} %: clean the terminals, zero the meter leads and measure again`,
+      ...common,
+    };
   }
   if (!startAboveRun) {
     return {
@@ -55,5 +66,9 @@ export function singlePhaseWindings(ohms: SinglePhaseWindingInput, limits?: Part
       ...common,
     };
   }
-  return { verdict: "pass", reason: `${sum}: the windings add up and the start winding reads above the run winding`, ...common };
+  return {
+    verdict: "pass",
+    reason: `${sum}: the windings add up and the start winding reads above the run winding`,
+    ...common,
+  };
 }

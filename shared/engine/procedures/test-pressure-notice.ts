@@ -20,7 +20,8 @@ import { TEST_PRESSURE_LIMITS, type TestPressureLimits } from "./procedure-limit
 import { resolveLimits } from "./resolve-limits.ts";
 import type { LiveNotice } from "./running-current-notice.ts";
 
-const usable = (value: number | null | undefined): value is number => value !== null && value !== undefined && Number.isFinite(value) && value > 0;
+const usable = (value: number | null | undefined): value is number =>
+  value !== null && value !== undefined && Number.isFinite(value) && value > 0;
 
 export function testPressureNotice(
   input: { testGaugeKPa: number | undefined; ratedKPa: number | undefined; nameplateKPa: number | null },
@@ -31,7 +32,8 @@ export function testPressureNotice(
   const ratings = [ratedKPa, nameplateKPa].filter(usable);
   if (ratings.length === 0) return null;
   const governing = Math.min(...ratings);
-  const fromNameplate = usable(nameplateKPa) && governing === nameplateKPa && !(usable(ratedKPa) && ratedKPa === governing);
+  const fromNameplate =
+    usable(nameplateKPa) && governing === nameplateKPa && !(usable(ratedKPa) && ratedKPa === governing);
   if (usable(testGaugeKPa)) {
     const check = checkTestPressure({ testGaugeKPa, ratedKPa: governing }, limits);
     if (check.verdict === "fail") {
@@ -52,4 +54,3 @@ export function testPressureNotice(
   }
   return null;
 }
-
