@@ -60,7 +60,7 @@ export function ElectricalCheckView({ check }: { check: ElectricalCheck }) {
         {result.singlePhaseWindings && input.singlePhaseWindingOhms && (
           <VerdictLine
             label="Windings C–R / C–S / R–S"
-            figure={`${list([input.singlePhaseWindingOhms.commonRun, input.singlePhaseWindingOhms.commonStart, input.singlePhaseWindingOhms.runStart], "Ω", 2)}; C–R + C–S = ${formatNumber(result.singlePhaseWindings.expectedRunStartOhms, 2)} Ω`}
+            figure={list([input.singlePhaseWindingOhms.commonRun, input.singlePhaseWindingOhms.commonStart, input.singlePhaseWindingOhms.runStart], "Ω", 2)}
             verdict={result.singlePhaseWindings.verdict}
             reason={result.singlePhaseWindings.reason}
             source={result.singlePhaseWindings.source}
