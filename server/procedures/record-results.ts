@@ -14,6 +14,7 @@ import {
   judgeVoltageImbalance,
   pressureTestResult,
   runningCurrent,
+  singlePhaseWindings,
   voltageImbalance,
   windingBalance,
 } from "@shared/engine/index.ts";
@@ -59,6 +60,8 @@ export function electricalCheckResult(input: ElectricalCheckInput, limits: Proce
 
   const windings = input.windingOhms ? windingBalance(input.windingOhms, limits.windingBalance) : null;
   if (windings) checks.push({ check: "Winding balance", verdict: windings });
+  const terminals = input.singlePhaseWindingOhms ? singlePhaseWindings(input.singlePhaseWindingOhms, limits.singlePhaseWindings) : null;
+  if (terminals) checks.push({ check: "Windings C–R, C–S, R–S", verdict: terminals });
 
   const kind = CURRENT_KIND[input.target];
   const amps = input.runningAmps ?? [];
@@ -72,6 +75,7 @@ export function electricalCheckResult(input: ElectricalCheckInput, limits: Proce
     supplyVoltage,
     insulation,
     windingBalance: windings,
+    singlePhaseWindings: terminals,
     runningCurrent: running,
     currentImbalancePercent,
     overall: worstOf(checks),

@@ -123,6 +123,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
       nameplateV,
       insulation: (body.insulation ?? []).map((reading) => ({ megohms: reading.megohms, testVoltageV: reading.testVoltageV, ...(reading.point ? { point: reading.point } : {}) })),
       windingOhms: body.windingOhms ?? null,
+      singlePhaseWindingOhms: body.singlePhaseWindingOhms ?? null,
       runningAmps: body.runningAmps ?? null,
       ratedA,
       note: body.note || null,

@@ -117,7 +117,12 @@ export { judgeVoltageImbalance } from "./procedures/judge-voltage-imbalance.ts";
 export { judgeSupplyVoltage } from "./procedures/judge-supply-voltage.ts";
 export { judgeInsulationResistance } from "./procedures/judge-insulation-resistance.ts";
 export { windingBalance } from "./procedures/winding-balance.ts";
+export { singlePhaseWindings } from "./procedures/single-phase-windings.ts";
 export { runningCurrent } from "./procedures/running-current.ts";
+export { runningCurrentNotice } from "./procedures/running-current-notice.ts";
+export type { LiveNotice } from "./procedures/running-current-notice.ts";
+export { testPressureNotice } from "./procedures/test-pressure-notice.ts";
+export { describeDecay } from "./procedures/describe-decay.ts";
 export { pressureTestResult } from "./procedures/pressure-test-result.ts";
 export { checkTestPressure } from "./procedures/check-test-pressure.ts";
 export { analyseDecay } from "./procedures/analyse-decay.ts";
@@ -143,7 +148,9 @@ export {
   SUPPLY_VOLTAGE_LIMITS,
   INSULATION_LIMITS,
   WINDING_BALANCE_LIMITS,
+  SINGLE_PHASE_WINDING_LIMITS,
   RUNNING_CURRENT_LIMITS,
+  MAX_PLAUSIBLE_TIMES_RATED,
   CURRENT_IMBALANCE_MAX_PERCENT,
   TEST_PRESSURE_LIMITS,
   EVACUATION_LIMITS,
@@ -155,6 +162,7 @@ export type {
   SupplyVoltageLimits,
   InsulationLimits,
   WindingBalanceLimits,
+  SinglePhaseWindingLimits,
   RunningCurrentLimits,
   TestPressureLimits,
   EvacuationLimits,

@@ -14,6 +14,7 @@ import {
   EVACUATION_LIMITS,
   INSULATION_LIMITS,
   RUNNING_CURRENT_LIMITS,
+  SINGLE_PHASE_WINDING_LIMITS,
   SUPPLY_VOLTAGE_LIMITS,
   TEST_PRESSURE_LIMITS,
   VOLTAGE_IMBALANCE_LIMITS,
@@ -145,6 +146,17 @@ export const WindingBalanceInputSchema = z.object({
   ohms: threePhase("the winding resistance", "Ω", positive("Winding resistance", "Ω", MAX_WINDING_OHMS)),
 });
 export type WindingBalanceInput = z.infer<typeof WindingBalanceInputSchema>;
+
+const terminalOhms = (pair: string) => positive(`Winding resistance ${pair}`, "Ω", MAX_WINDING_OHMS);
+/**
+ * A single-phase compressor's three terminal-to-terminal resistances (Ω): common to run, common
+ * to start, run to start. An open winding cannot be entered as a number: record it as a fault.
+ */
+export const SinglePhaseWindingInputSchema = z.object(
+  { commonRun: terminalOhms("C–R"), commonStart: terminalOhms("C–S"), runStart: terminalOhms("R–S") },
+  { error: "Enter all three resistances C–R, C–S and R–S, in Ω" },
+);
+export type SinglePhaseWindingInput = z.infer<typeof SinglePhaseWindingInputSchema>;
 
 export const RUNNING_CURRENT_KINDS = ["compressor-rla", "fan-fla"] as const;
 export const RunningCurrentKindSchema = z.enum(RUNNING_CURRENT_KINDS, { error: "Say which nameplate current this is: compressor RLA or fan FLA" });
@@ -359,6 +371,7 @@ export const ProcedureLimitsSchema = z.object({
   supplyVoltage: overrides(SUPPLY_VOLTAGE_LIMITS).optional(),
   insulation: overrides(INSULATION_LIMITS).optional(),
   windingBalance: overrides(WINDING_BALANCE_LIMITS).optional(),
+  singlePhaseWindings: overrides(SINGLE_PHASE_WINDING_LIMITS).optional(),
   runningCurrent: overrides(RUNNING_CURRENT_LIMITS).optional(),
   testPressure: overrides(TEST_PRESSURE_LIMITS).optional(),
   evacuation: overrides(EVACUATION_LIMITS).optional(),
@@ -380,6 +393,16 @@ export type InsulationResistanceResult = z.infer<typeof InsulationResistanceResu
 export const WindingBalanceResultSchema = VerdictSchema.extend({ maxDeviationPercent: z.number() });
 export type WindingBalanceResult = z.infer<typeof WindingBalanceResultSchema>;
 
+export const SinglePhaseWindingResultSchema = VerdictSchema.extend({
+  /** C–R + C–S, Ω: what R–S should read. */
+  expectedRunStartOhms: z.number(),
+  /** |R–S − (C–R + C–S)| as percent of R–S. */
+  sumMismatchPercent: z.number(),
+  /** True when C–S reads higher than C–R, as a start winding should. */
+  startAboveRun: z.boolean(),
+});
+export type SinglePhaseWindingResult = z.infer<typeof SinglePhaseWindingResultSchema>;
+
 export const RunningCurrentResultSchema = VerdictSchema.extend({ percentOfRated: z.number() });
 export type RunningCurrentResult = z.infer<typeof RunningCurrentResultSchema>;
 
@@ -397,6 +420,34 @@ export const PressureTestResultSchema = z.object({
 });
 export type PressureTestResult = z.infer<typeof PressureTestResultSchema>;
 
+/** Units a vacuum is read in: microns (µmHg, stored) or pascals absolute. */
+export const VACUUM_UNITS = ["micron", "Pa"] as const;
+export type VacuumUnit = (typeof VACUUM_UNITS)[number];
+
+export const DECAY_CASES = ["held", "leak-past-threshold", "moisture-never-reached", "moisture-rose", "moisture-stayed-above", "leak-still-rising"] as const;
+
+/**
+ * The figures a decay verdict's sentence is built from, so it can be worded again in the unit
+ * the technician reads (describeDecay). Records saved before it existed lack it and keep their
+ * stored sentence, in microns.
+ */
+export const DecayWordingSchema = z.object({
+  case: z.enum(DECAY_CASES),
+  holdMicrons: z.number(),
+  leakRiseMicrons: z.number(),
+  startMicrons: z.number(),
+  finalMicrons: z.number(),
+  riseRateMicronsPerMinute: z.number(),
+  minutes: z.number(),
+  /** The peak was above the first reading. */
+  risen: z.boolean(),
+  /** Only two readings: no levelling-off can be seen. */
+  twoReadingsOnly: z.boolean(),
+  /** Shortest hold makers ask for, minutes, when the test was shorter; null otherwise. */
+  shortOfMinutes: z.number().nullable(),
+});
+export type DecayWording = z.infer<typeof DecayWordingSchema>;
+
 export const DecayAnalysisSchema = z.object({
   verdict: DecayVerdictSchema,
   riseRateMicronsPerMinute: z.number(),
@@ -404,6 +455,7 @@ export const DecayAnalysisSchema = z.object({
   levelledOff: z.boolean(),
   reason: z.string(),
   source: z.string(),
+  wording: DecayWordingSchema.optional(),
 });
 export type DecayAnalysis = z.infer<typeof DecayAnalysisSchema>;
 

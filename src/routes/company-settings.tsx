@@ -1,5 +1,11 @@
 import { useState } from "react";
-import { ProcedureSettingsUpdateSchema, type ProcedureSettingsResponse } from "@shared/schemas/procedure-records.ts";
+import {
+  MAX_ALLOWED_DROP_KPA,
+  MAX_TARGET_MICRONS,
+  MIN_TARGET_MICRONS,
+  ProcedureSettingsUpdateSchema,
+  type ProcedureSettingsResponse,
+} from "@shared/schemas/procedure-records.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { StaleWriteNotice } from "@/components/ui/stale-write/stale-write-notice.tsx";
@@ -24,6 +30,12 @@ function SettingsForm({ current, onReload, reloading }: { current: ProcedureSett
   const [saved, setSaved] = useState(false);
   const [stale, setStale] = useState<{ message: string; typed: [string, string][] } | null>(null);
   const update = useUpdateOrganisationSettings();
+  // A corrected field drops its old message at once; the others keep theirs until the next save.
+  const edit = (field: keyof typeof LABELS, set: (text: string) => void) => (text: string) => {
+    set(text);
+    setSaved(false);
+    setErrors(({ [field]: _corrected, ...rest }) => rest);
+  };
 
   const submit = async () => {
     setSaved(false);
@@ -80,17 +92,17 @@ function SettingsForm({ current, onReload, reloading }: { current: ProcedureSett
         label="Evacuation target"
         unit="µm"
         value={target}
-        onValueChange={setTarget}
+        onValueChange={edit("evacuationTargetMicrons", setTarget)}
         error={errors.evacuationTargetMicrons}
-        hint={`Leave empty for ${current.defaults.evacuationTargetMicrons} microns, the trade norm`}
+        hint={`${MIN_TARGET_MICRONS}–${MAX_TARGET_MICRONS} µm. Leave empty for ${current.defaults.evacuationTargetMicrons} microns, the trade norm`}
       />
       <NumberField
         label="Allowed pressure drop in a nitrogen test (after temperature correction)"
         unit="kPa"
         value={drop}
-        onValueChange={setDrop}
+        onValueChange={edit("pressureTestAllowedDropKPa", setDrop)}
         error={errors.pressureTestAllowedDropKPa}
-        hint={`Leave empty for ${current.defaults.pressureTestAllowedDropKPa} kPa: gauge resolution plus thermometer error near 4 MPa`}
+        hint={`0–${MAX_ALLOWED_DROP_KPA} kPa. Leave empty for ${current.defaults.pressureTestAllowedDropKPa} kPa: gauge resolution plus thermometer error near 4 MPa`}
       />
       <Button type="submit" disabled={update.isPending}>
         {update.isPending ? "Saving…" : "Save limits"}

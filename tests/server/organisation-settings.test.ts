@@ -48,6 +48,26 @@ describe("organisation procedure settings", () => {
     expect(saved.body).toMatchObject({ settings: { evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 5 }, version: 2 });
   });
 
+  it("refuses an evacuation target outside 50–1000 µm and an allowed drop above 50 kPa, saving nothing", async () => {
+    // Makers ask for 250–500 µm, the loosest rule in use is about 1000 µm (trade notes §4.1 [S4][S52][S53][S54][S57]; common practice).
+    const before = await owner.get("/api/organisation/settings");
+    const tooHigh = await patch(owner, before.body.version, { evacuationTargetMicrons: 100_000 });
+    expect(tooHigh.status).toBe(400);
+    expect(tooHigh.body.fields.evacuationTargetMicrons).toMatch(/above 1000 microns leaves moisture/);
+    const tooLow = await patch(owner, before.body.version, { evacuationTargetMicrons: 10 });
+    expect(tooLow.body.fields.evacuationTargetMicrons).toMatch(/below 50 microns/);
+    // The test asks for no drop [S53][S67]; 60 kPa would pass a leaking joint.
+    const looseDrop = await patch(owner, before.body.version, { pressureTestAllowedDropKPa: 60 });
+    expect(looseDrop.status).toBe(400);
+    expect(looseDrop.body.fields.pressureTestAllowedDropKPa).toMatch(/above 50 kPa/);
+    const after = await owner.get("/api/organisation/settings");
+    expect(after.body).toEqual(before.body);
+    // The bounds themselves are accepted.
+    for (const body of [{ evacuationTargetMicrons: 1000 }, { evacuationTargetMicrons: 50 }, { pressureTestAllowedDropKPa: 50 }, { pressureTestAllowedDropKPa: 5, evacuationTargetMicrons: 300 }]) {
+      expect((await patch(owner, await currentVersion(), body)).status).toBe(200);
+    }
+  });
+
   it("changes only the fields sent (PATCH), keeping the others", async () => {
     const saved = await patch(owner, await currentVersion(), { pressureTestAllowedDropKPa: 7 });
     expect(saved.body.settings).toEqual({ evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 7 });

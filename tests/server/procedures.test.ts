@@ -1,7 +1,10 @@
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { analyseDecay, judgeInsulationResistance, pressureTestResult, voltageImbalance } from "@shared/engine/index.ts";
+import { analyseDecay, judgeInsulationResistance, pressureTestResult, singlePhaseWindings, voltageImbalance } from "@shared/engine/index.ts";
+import { ElectricalCheckListSchema } from "@shared/schemas/procedure-records.ts";
+import { insertElectricalCheck } from "@server/db/procedures.ts";
 import { organisations, users } from "@server/db/schema.ts";
+import { electricalCheckResult } from "@server/procedures/record-results.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../setup/demo-accounts.ts";
 
@@ -85,6 +88,47 @@ describe("procedure records API", () => {
     const bad = await technician.post(`/api/visits/${visitId}/electrical-checks`).send({ target: "supply", supplyVolts: [415, "x", 410], runningAmps: [3] });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.fields)).toEqual(expect.arrayContaining(["supplyVolts.1"]));
+  });
+
+  it("records a single-phase compressor's C–R, C–S, R–S and judges them by R–S = C–R + C–S ([S46]; memory)", async () => {
+    const units = (await technician.get("/api/equipment")).body.equipment as { id: string; refrigerant: string }[];
+    const wallSplit = units.find((unit) => unit.refrigerant === "R32")!; // single phase, 230 V, RLA 6.4 A (demo nameplate)
+    const splitVisit = (await technician.post("/api/visits").send({ equipmentId: wallSplit.id, reason: "Compressor trips on start" })).body.visit.id;
+    // 1.9 + 4.6 = 6.5 Ω against 6.5 Ω read; start above run.
+    const response = await technician.post(`/api/visits/${splitVisit}/electrical-checks`).send({
+      target: "compressor",
+      singlePhaseWindingOhms: { commonRun: 1.9, commonStart: 4.6, runStart: 6.5 },
+      runningAmps: [5.8],
+    });
+    expect(response.status).toBe(201);
+    const { input, result } = response.body.electricalCheck;
+    expect(input.singlePhaseWindingOhms).toEqual({ commonRun: 1.9, commonStart: 4.6, runStart: 6.5 });
+    expect(result.singlePhaseWindings).toEqual(singlePhaseWindings({ commonRun: 1.9, commonStart: 4.6, runStart: 6.5 }));
+    expect(result.singlePhaseWindings.verdict).toBe("pass");
+    expect(result.overall.verdict).toBe("pass");
+    // Open start winding read as a huge R–S: the sum is far off → fail, and the record says which check.
+    const open = await technician.post(`/api/visits/${splitVisit}/electrical-checks`).send({ target: "compressor", singlePhaseWindingOhms: { commonRun: 1.9, commonStart: 4.6, runStart: 40 } });
+    expect(open.body.electricalCheck.result.overall).toMatchObject({ verdict: "fail", check: "Windings C–R, C–S, R–S" });
+    // The terminals are a compressor's, and incomplete readings are named by field.
+    const onFan = await technician.post(`/api/visits/${splitVisit}/electrical-checks`).send({ target: "fan", singlePhaseWindingOhms: { commonRun: 1, commonStart: 2, runStart: 3 } });
+    expect(onFan.status).toBe(400);
+    expect(onFan.body.fields.singlePhaseWindingOhms).toMatch(/single-phase compressor/);
+    const partial = await technician.post(`/api/visits/${splitVisit}/electrical-checks`).send({ target: "compressor", singlePhaseWindingOhms: { commonRun: 1.9, commonStart: -4 } });
+    expect(partial.status).toBe(400);
+    expect(Object.keys(partial.body.fields)).toEqual(expect.arrayContaining(["singlePhaseWindingOhms.commonStart", "singlePhaseWindingOhms.runStart"]));
+  });
+
+  it("keeps electrical checks stored before single-phase windings readable", async () => {
+    // A record as saved before: no singlePhaseWindingOhms in the input, no singlePhaseWindings in the result.
+    const { singlePhaseWindingOhms: _input, ...oldInput } = {
+      target: "fan" as const, circuit: 1, supplyVolts: null, nameplateV: null, insulation: [], windingOhms: null, singlePhaseWindingOhms: null, runningAmps: [3.1], ratedA: 3.4, note: null,
+    };
+    const { singlePhaseWindings: _result, ...oldResult } = electricalCheckResult({ ...oldInput, singlePhaseWindingOhms: null });
+    await insertElectricalCheck(testApp.database.db, organisationId, { visitId, input: oldInput, result: oldResult, recordedBy: (await testApp.database.db.select({ id: users.id }).from(users).limit(1))[0]!.id });
+    const list = await technician.get(`/api/visits/${visitId}/electrical-checks`);
+    expect(list.status).toBe(200);
+    const parsed = ElectricalCheckListSchema.parse(list.body);
+    expect(parsed.electricalChecks.some((check) => check.input.target === "fan" && check.result.singlePhaseWindings === undefined)).toBe(true);
   });
 
   it("records a leak search and judges an unrepaired leak as a fail", async () => {

@@ -21,14 +21,15 @@
  * @param samples readings after valve-off, in time order: minutes (strictly increasing), microns (≥ 0); at least two
  * @param options targetMicrons (default 500), holdMicrons (default the target), leakRiseMicrons
  *   (default 5000), levelledRatio, flatRiseMicronsPerMinute — any left out take EVACUATION_LIMITS
- * @returns verdict, later-half rise rate (µm/min), final reading (µm), levelledOff, reason, source
+ * @returns verdict, later-half rise rate (µm/min), final reading (µm), levelledOff, reason (in
+ *   microns), source, and the figures the reason is built from (`wording`, for describeDecay)
  * @throws RangeError "analyseDecay requires ..." for fewer than two readings, unsorted or
  *   non-finite readings, or a non-positive or non-finite limit
  * @example analyseDecay([{ minutes: 0, microns: 400 }, { minutes: 10, microns: 430 }, { minutes: 20, microns: 450 }]).verdict // "held"
  */
-import type { DecayAnalysis, DecayOptions } from "../../schemas/procedures.ts";
+import type { DecayAnalysis, DecayOptions, DecayWording } from "../../schemas/procedures.ts";
 import { leastSquaresSlope } from "../diagnosis/least-squares-slope.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { describeDecay } from "./describe-decay.ts";
 import { limitSource } from "./limit-source.ts";
 import { EVACUATION_LIMITS } from "./procedure-limits.ts";
 import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
@@ -70,28 +71,29 @@ export function analyseDecay(samples: readonly { minutes: number; microns: numbe
     (earlierRate !== null && riseRateMicronsPerMinute <= limits.levelledRatio * earlierRate);
 
   const minutes = last.minutes - first.minutes;
-  const span = `${formatTenths(minutes)} min`;
-  const rate = `${formatTenths(riseRateMicronsPerMinute)} µm/min`;
-  const short = minutes < SHORTEST_MAKER_HOLD_MINUTES ? ` The test lasted only ${span}; makers ask for ${SHORTEST_MAKER_HOLD_MINUTES}–20 minutes.` : "";
   const common = { riseRateMicronsPerMinute, finalMicrons, levelledOff, source };
+  // The sentence is built from these figures (describeDecay) so a client can word it in pascals.
+  const facts = {
+    holdMicrons,
+    leakRiseMicrons: limits.leakRiseMicrons,
+    startMicrons: first.microns,
+    finalMicrons,
+    riseRateMicronsPerMinute,
+    minutes,
+    risen: peakMicrons > first.microns,
+    twoReadingsOnly: earlierRate === null,
+    shortOfMinutes: minutes < SHORTEST_MAKER_HOLD_MINUTES ? SHORTEST_MAKER_HOLD_MINUTES : null,
+  };
+  const judged = (verdict: DecayAnalysis["verdict"], wordingCase: DecayWording["case"]): DecayAnalysis => {
+    const wording = { case: wordingCase, ...facts };
+    return { verdict, ...common, reason: describeDecay(wording), wording };
+  };
 
-  if (peakMicrons <= holdMicrons) {
-    return { verdict: "held", ...common, reason: `Held: stayed at or under ${holdMicrons} microns for ${span} (final ${Math.round(finalMicrons)} microns); tight and dry.${short}` };
-  }
-  if (finalMicrons > limits.leakRiseMicrons) {
-    return { verdict: "leak", ...common, reason: `Leak: rose to ${Math.round(finalMicrons)} microns, past ${limits.leakRiseMicrons}, in ${span} (still rising ${rate}); find the leak and pressure test again.${short}` };
-  }
+  if (peakMicrons <= holdMicrons) return judged("held", "held");
+  if (finalMicrons > limits.leakRiseMicrons) return judged("leak", "leak-past-threshold");
   if (levelledOff) {
-    const risen = peakMicrons > first.microns;
     // "Rose above" only when the pull-down had reached the hold limit; otherwise it never got there.
-    const what =
-      first.microns > holdMicrons
-        ? `started at ${Math.round(first.microns)} microns (the pull-down never reached ${holdMicrons}) and ${risen ? "levelled off" : "stayed"} at ${Math.round(finalMicrons)}`
-        : risen
-          ? `rose above ${holdMicrons} microns and levelled off at ${Math.round(finalMicrons)}`
-          : `stayed above ${holdMicrons} microns without rising (${Math.round(finalMicrons)})`;
-    return { verdict: "moisture", ...common, reason: `Moisture: ${what} within ${span}; the system looks tight but wet: evacuate longer (triple evacuate, warm cold spots).${short}` };
+    return judged("moisture", first.microns > holdMicrons ? "moisture-never-reached" : facts.risen ? "moisture-rose" : "moisture-stayed-above");
   }
-  const why = earlierRate === null ? "; with only two readings a levelling-off cannot be seen, so take more readings" : "";
-  return { verdict: "leak", ...common, reason: `Leak: still rising at ${rate} after ${span} (final ${Math.round(finalMicrons)} microns) without levelling off${why}; find the leak and pressure test again.${short}` };
+  return judged("leak", "leak-still-rising");
 }

@@ -62,6 +62,21 @@ export const WINDING_BALANCE_LIMITS = {
 export type WindingBalanceLimits = typeof WINDING_BALANCE_LIMITS;
 
 /**
+ * Single-phase compressor windings read C–R (run), C–S (start) and R–S (both in series): R–S
+ * equals C–R + C–S and the start winding reads higher than the run winding ([S46]; memory).
+ * The sum may miss by the meter's lead and contact resistance, so a mismatch within 5 % of
+ * R–S or 0.2 Ω (whichever is larger) passes, up to 10 % warns (re-clean the terminals and
+ * measure again), beyond fails (an open, shorted or grounded winding, or misread terminals).
+ * The 5 %, 10 % and 0.2 Ω figures are this engine's choice (common practice, no published figure).
+ */
+export const SINGLE_PHASE_WINDING_LIMITS = {
+  passWithinPercent: 5,
+  warnWithinPercent: 10,
+  meterAllowanceOhms: 0.2,
+};
+export type SinglePhaseWindingLimits = typeof SINGLE_PHASE_WINDING_LIMITS;
+
+/**
  * Running current against the nameplate, percent of RLA (compressors) or FLA (fans).
  * Compressors: amps above RLA need investigation [S39] (weak); RLA = MCC ÷ 1.56 (UL) or ÷ 1.4
  * (some makers) [S39], so above 140 % of RLA the compressor is past the lower of the two
@@ -76,6 +91,13 @@ export const RUNNING_CURRENT_LIMITS = {
   fanFailAbovePercent: 115,
 };
 export type RunningCurrentLimits = typeof RUNNING_CURRENT_LIMITS;
+
+/**
+ * A running current is not plausible above this many times the nameplate rating: a motor draws
+ * its most with a locked rotor, typically about 5–7 × RLA (memory), so a higher figure is a
+ * misplaced decimal point or a clamp on the wrong range. Checked while typing, never refused.
+ */
+export const MAX_PLAUSIBLE_TIMES_RATED = 8;
 
 /** Current imbalance limit, percent: max 10 % (one compressor maker) [S45]. Shown only. */
 export const CURRENT_IMBALANCE_MAX_PERCENT = 10;

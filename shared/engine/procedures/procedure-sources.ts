@@ -18,6 +18,7 @@ export const PROCEDURE_SOURCES = {
   S43: "eng-tips.com threads quoting NEMA MG-1 (1 % recommended, above 5 % not recommended)",
   S44: "EC&M, Unbalanced current (NEMA MG-1; lead-to-lead resistance within 2 %)",
   S45: "Carrier/Carlyle 06E compressor manual p. 113 (current unbalance max 10 %)",
+  S46: "G-W, Heating and Cooling Essentials (2022) p. 531 (identifying compressor terminals)",
   S47: "Detector Inspector help centre, Insulation Resistance (AS/NZS 3000 Wiring Rules, ≥ 1 MΩ) (weak)",
   S48: "Tecumseh AH5540E service handbook p. 49 (below 2 MΩ = ground fault)",
   S49: "HVAC School, Scroll Compressor Pump Down, Megohm Test & Fusite Terminals (Copeland AE4-1294)",

@@ -58,6 +58,15 @@ export function ElectricalCheckView({ check }: { check: ElectricalCheck }) {
             source={result.windingBalance.source}
           />
         )}
+        {result.singlePhaseWindings && input.singlePhaseWindingOhms && (
+          <VerdictLine
+            label="Windings C–R / C–S / R–S"
+            figure={list([input.singlePhaseWindingOhms.commonRun, input.singlePhaseWindingOhms.commonStart, input.singlePhaseWindingOhms.runStart], "Ω", 2)}
+            verdict={result.singlePhaseWindings.verdict}
+            reason={result.singlePhaseWindings.reason}
+            source={result.singlePhaseWindings.source}
+          />
+        )}
         {result.runningCurrent.map((current, index) => (
           <VerdictLine
             key={`current-${index}`}

@@ -1,7 +1,13 @@
 import { Plus, Play, Power, Undo2 } from "lucide-react";
 import { useState } from "react";
-import { paToMicrons } from "@shared/engine/index.ts";
-import { EvacuationCreateSchema, EvacuationSampleBodySchema, type Evacuation } from "@shared/schemas/procedure-records.ts";
+import { micronsToPa, paToMicrons } from "@shared/engine/index.ts";
+import {
+  EvacuationCreateSchema,
+  EvacuationSampleBodySchema,
+  MAX_TARGET_MICRONS,
+  MIN_TARGET_MICRONS,
+  type Evacuation,
+} from "@shared/schemas/procedure-records.ts";
 import { isStanding } from "@shared/schemas/visits.ts";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
@@ -25,6 +31,12 @@ import { NumberField } from "@/components/ui/field/number-field.tsx";
 /** Minutes since the evacuation started, to the tenth, by this device's clock. */
 const minutesSince = (startedAt: string, now: number) => Math.max(0, Math.round((now - new Date(startedAt).getTime()) / 6_000) / 10);
 const fromDisplay = (value: number, unit: VacuumUnit) => (unit === "micron" ? value : paToMicrons(value));
+/** A typed target carried over to the other unit when the technician switches (text that is not a number stays as typed). */
+function convertTyped(text: string, from: VacuumUnit, to: VacuumUnit): string {
+  const value = toNumber(text);
+  if (from === to || value === undefined || Number.isNaN(value)) return text;
+  return to === "micron" ? String(Math.round(paToMicrons(value))) : formatNumber(micronsToPa(value), 1);
+}
 
 function errorText(error: unknown, fallback: string): { message: string; fields: Record<string, string> } {
   if (error instanceof ApiError) return { message: error.message, fields: error.fields };
@@ -145,6 +157,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
   const evacuations = useEvacuations(visitId);
   const create = useCreateEvacuation();
   const [unit, setUnit] = useState<VacuumUnit>("micron");
+  // Typed in the unit shown; stored and sent in microns.
   const [target, setTarget] = useState<string | null>(null);
   const [startError, setStartError] = useState<{ message: string; fields: Record<string, string> } | null>(null);
 
@@ -154,14 +167,20 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
   const current = list.filter(isStanding).at(-1);
   const earlier = list.filter((evacuation) => evacuation !== current);
   const voidEvacuation = (evacuation: Evacuation) => (reason: string) => voidRecord.mutateAsync({ visitId, kind: "evacuation", recordId: evacuation.id, reason });
-  const targetText = target ?? (evacuations.data ? String(evacuations.data.defaults.targetMicrons) : "");
+  const targetText =
+    target ?? (evacuations.data ? convertTyped(String(evacuations.data.defaults.targetMicrons), "micron", unit) : "");
+  const targetRange = `${formatVacuum(MIN_TARGET_MICRONS, unit)} to ${formatVacuum(MAX_TARGET_MICRONS, unit)}`;
 
   const start = async () => {
     setStartError(null);
-    const body = { targetMicrons: toNumber(targetText) };
+    const typed = toNumber(targetText);
+    const body = { targetMicrons: typed === undefined || Number.isNaN(typed) ? typed : Math.round(fromDisplay(typed, unit)) };
     const parsed = EvacuationCreateSchema.safeParse(body);
     if (!parsed.success) {
-      setStartError({ message: "Check the target", fields: fieldErrorsOf(parsed.error) });
+      // The schema speaks microns; someone reading pascals gets the range in pascals.
+      const fields = fieldErrorsOf(parsed.error);
+      if (unit === "Pa" && fields.targetMicrons) fields.targetMicrons = `Enter a target from ${targetRange}`;
+      setStartError({ message: "Check the target", fields });
       return;
     }
     try {
@@ -178,7 +197,16 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
       <p className="text-sm text-muted">Read the vacuum on an electronic (micron) gauge at the point furthest from the pump, never a compound gauge.</p>
       {evacuations.isError && <FormAlert>The evacuations could not be loaded: {evacuations.error.message}</FormAlert>}
 
-      <Segmented<VacuumUnit> label="Vacuum unit" value={unit} onChange={setUnit} options={[{ value: "micron", label: "Microns" }, { value: "Pa", label: "Pa" }]} />
+      <Segmented<VacuumUnit>
+        label="Vacuum unit"
+        value={unit}
+        onChange={(next) => {
+          setTarget((typed) => (typed === null ? null : convertTyped(typed, unit, next)));
+          setStartError(null);
+          setUnit(next);
+        }}
+        options={[{ value: "micron", label: "Microns" }, { value: "Pa", label: "Pa" }]}
+      />
 
       {current && (
         <section aria-labelledby="evacuation-current-heading" className="space-y-3 rounded-card border-2 border-rule bg-surface p-4">
@@ -225,7 +253,17 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
             void start();
           }}
         >
-          <NumberField label="Target" unit="µm" value={targetText} onValueChange={setTarget} error={startError?.fields.targetMicrons} hint="Your company's figure; 500 µm is the trade norm" />
+          <NumberField
+            label="Target"
+            unit={VACUUM_LABEL[unit]}
+            value={targetText}
+            onValueChange={(text) => {
+              setTarget(text);
+              setStartError(null);
+            }}
+            error={startError?.fields.targetMicrons}
+            hint={`Your company's figure; ${formatVacuum(500, unit)} is the trade norm (${targetRange} accepted)`}
+          />
           <Button type="submit" size="lg" variant={current ? "secondary" : "primary"} disabled={create.isPending}>
             <Play aria-hidden className="size-5" /> {current ? "Start another evacuation" : "Start the evacuation"}
           </Button>

@@ -1,3 +1,4 @@
+import { describeDecay } from "@shared/engine/index.ts";
 import type { DecayVerdict } from "@shared/schemas/procedures.ts";
 import type { Evacuation } from "@shared/schemas/procedure-records.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
@@ -40,7 +41,7 @@ export function EvacuationSummary({ evacuation, unit }: { evacuation: Evacuation
           testId="decay-verdict"
           verdict={result.overall.verdict}
           word={DECAY_WORDS[result.decay.verdict]}
-          reason={`${result.decay.reason} Rise rate ${rate}, final ${formatVacuum(result.decay.finalMicrons, unit)} after ${formatNumber(result.decayMinutes ?? 0, 0)} min${result.decay.levelledOff ? ", levelled off" : ""}.`}
+          reason={`${result.decay.wording ? describeDecay(result.decay.wording, unit) : result.decay.reason} Rise rate ${rate}, final ${formatVacuum(result.decay.finalMicrons, unit)} after ${formatNumber(result.decayMinutes ?? 0, 0)} min${result.decay.levelledOff ? ", levelled off" : ""}.`}
           source={result.decay.source}
         />
       ) : (

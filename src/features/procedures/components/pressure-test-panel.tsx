@@ -1,5 +1,6 @@
 import { Save } from "lucide-react";
 import { useState } from "react";
+import { testPressureNotice } from "@shared/engine/index.ts";
 import {
   PRESSURE_TEST_SECTION_LABELS,
   PRESSURE_TEST_SECTIONS,
@@ -26,6 +27,7 @@ import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
 import { recordTime } from "../utils/record-time.ts";
 import { PressureTestView } from "./pressure-test-view.tsx";
+import { LiveNoticeLine } from "./live-notice.tsx";
 
 interface PressureTestPanelProps {
   visitId: string;
@@ -73,11 +75,24 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
   const ratedDefault = defaults ? ratedFor(section, defaults.ratedHighSideKPa, defaults.ratedLowSideKPa) : null;
   const ratedText = rated ?? (ratedDefault !== null ? shown(ratedDefault) : "");
   const allowedText = allowed ?? (defaults ? shown(defaults.allowedDropKPa) : "");
+  const pressure = (text: string) =>
+    toConverted(text, (value) => gaugeFromDisplay(value, units.pressure, atmosphericKPa));
+
+  // While typing: the highest pressure in the hold against the lower of the typed and nameplate ratings.
+  const held = [pressure(start), pressure(end)].filter(
+    (value): value is number => value !== undefined && !Number.isNaN(value),
+  );
+  const ratedNotice = testPressureNotice(
+    {
+      testGaugeKPa: held.length > 0 ? Math.max(...held) : undefined,
+      ratedKPa: pressure(ratedText),
+      nameplateKPa: ratedDefault,
+    },
+    (kPa) => `${shown(kPa)} ${pressureUnit}`,
+  );
 
   const save = async () => {
     setFormError(null);
-    const pressure = (text: string) =>
-      toConverted(text, (value) => gaugeFromDisplay(value, units.pressure, atmosphericKPa));
     const temperature = (text: string) =>
       toConverted(text, (value) => temperatureFromDisplay(value, units.temperature));
     const body = {
@@ -184,6 +199,9 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
                       error={errors.startTempC}
                       hint="Ambient or pipe"
                     />
+                    <div className="col-span-2">
+                      <LiveNoticeLine notice={ratedNotice} testId="test-pressure-notice" />
+                    </div>
                   </fieldset>
                   <fieldset className="grid grid-cols-2 gap-3">
                     <legend className="col-span-2 font-semibold">End of the hold</legend>
