@@ -1,3 +1,7 @@
+import type { DecayWording, VacuumUnit } from "../../schemas/procedures.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { micronsToPa } from "./microns-to-pa.ts";
+
 /**
  * Words a decay-test verdict in the unit the technician reads the gauge in (microns or
  * pascals), from the figures analyseDecay kept. The sentence says "rose above" the hold limit
@@ -10,10 +14,6 @@
  * @throws never
  * @example describeDecay(analyseDecay(samples).wording!, "Pa") // "Held: stayed at or under 66.7 Pa for …"
  */
-import type { DecayWording, VacuumUnit } from "../../schemas/procedures.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { micronsToPa } from "./microns-to-pa.ts";
-
 export function describeDecay(wording: DecayWording, unit: VacuumUnit = "micron"): string {
   const { holdMicrons, leakRiseMicrons, startMicrons, finalMicrons, minutes } = wording;
   // Microns are whole numbers on a gauge; pascals need a tenth (500 µm is 66.7 Pa).
@@ -34,16 +34,16 @@ export function describeDecay(wording: DecayWording, unit: VacuumUnit = "micron"
     case "held":
       return `Held: stayed at or under ${value(holdMicrons)} for ${span} (final ${value(finalMicrons)}); tight and dry.${short}`;
     case "leak-past-threshold":
-      return `Leak: rose to ${value(finalMicrons)}, past ${bare(leakRiseMicrons)}, in ${span} (still rising ${rate}); find the leak and pressure test again.${short}`;
+      return `Leak: rose to ${value(finalMicrons)}, past ${value(leakRiseMicrons)}, in ${span} (still rising ${rate}); find the leak and pressure test again.${short}`;
     case "moisture-never-reached":
     case "moisture-rose":
     case "moisture-stayed-above": {
       const what =
         wording.case === "moisture-never-reached"
-          ? `started at ${value(startMicrons)} (the pull-down never reached ${bare(holdMicrons)}) and ${wording.risen ? "levelled off" : "stayed"} at ${bare(finalMicrons)}`
+          ? `started at ${value(startMicrons)} (the pull-down never reached ${value(holdMicrons)}) and ${wording.risen ? "levelled off" : "stayed"} at ${value(finalMicrons)}`
           : wording.case === "moisture-rose"
-            ? `rose above ${value(holdMicrons)} and levelled off at ${bare(finalMicrons)}`
-            : `stayed above ${value(holdMicrons)} without rising (${bare(finalMicrons)})`;
+            ? `rose above ${value(holdMicrons)} and levelled off at ${value(finalMicrons)}`
+            : `stayed above ${value(holdMicrons)} without rising (${value(finalMicrons)})`;
       return `Moisture: ${what} within ${span}; the system looks tight but wet: evacuate longer (triple evacuate, warm cold spots).${short}`;
     }
     case "leak-still-rising": {

@@ -76,7 +76,7 @@ describe("analyseDecay", () => {
     // Synthetic: valved off at 900 microns (above the 500 µm target), levelling near 1500.
     const result = analyseDecay(sampled((t) => 900 + 600 * (1 - Math.exp(-t / 3))));
     expect(result.verdict).toBe("moisture");
-    expect(result.reason).toMatch(/started at 900 microns \(the pull-down never reached 500\)/);
+    expect(result.reason).toMatch(/started at 900 microns \(the pull-down never reached 500 microns\)/);
     expect(result.reason).not.toMatch(/rose above/);
   });
 

@@ -119,7 +119,7 @@ describe("describeDecay", () => {
     expect(wet.verdict).toBe("moisture");
     for (const unit of ["micron", "Pa"] as const) expect(describeDecay(wet.wording!, unit)).not.toMatch(/rose above/);
     // 900 µm × 0.133322 = 120.0 Pa; 1460 µm = 194.7 Pa.
-    expect(describeDecay(wet.wording!, "Pa")).toMatch(/started at 120\.0 Pa \(the pull-down never reached 66\.7\) and levelled off at 194\.7/);
+    expect(describeDecay(wet.wording!, "Pa")).toMatch(/started at 120\.0 Pa \(the pull-down never reached 66\.7 Pa\) and levelled off at 194\.7 Pa/);
   });
 
   it("gives a leak's rise rate in Pa/min: 150 µm/min = 20.0 Pa/min", () => {
