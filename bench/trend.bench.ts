@@ -12,7 +12,7 @@ const READINGS = 10_000;
 const TARGET_MS = 20;
 /** A logger writing every 2 s: 150 readings in each 5-minute window, the dense end of real imports. */
 const INTERVAL_SECONDS = 2;
-const REPEATS = 15;
+const REPEATS = 30;
 
 const START = Date.parse("2026-11-30T20:00:00Z");
 const suctionKPa = absoluteToGauge(saturationPressure("R410A", 7, "dew"));
