@@ -4,6 +4,7 @@
 import "./properties.bench.ts";
 import "./single-phase.bench.ts";
 import "./diagnose.bench.ts";
+import "./trend.bench.ts";
 import "./procedures.bench.ts";
 import "./import.bench.ts";
 import { runRegisteredBenches } from "./bench-registry.ts";

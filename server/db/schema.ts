@@ -270,6 +270,9 @@ export const visits = pgTable(
     index("visits_organisation_idx").on(table.organisationId),
     index("visits_equipment_idx").on(table.equipmentId),
     index("visits_status_idx").on(table.organisationId, table.status),
+    // The company's visits newest first (lists, the review queue) read in index order instead of
+    // sorting every visit the company has.
+    index("visits_organisation_started_idx").on(table.organisationId, table.startedAt),
   ],
 );
 

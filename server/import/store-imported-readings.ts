@@ -7,6 +7,8 @@
  */
 import { randomUUID } from "node:crypto";
 import type { Database } from "../db/client.ts";
+import { analyzeTables } from "../db/planner-statistics.ts";
+import { readings } from "../db/schema.ts";
 import { insertVisitEvent } from "../db/visit-events.ts";
 import { commitImportedReadings, discardStagedReadings, joinCrew, stageImportedReadings } from "../db/visits.ts";
 import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
@@ -23,6 +25,7 @@ export async function storeImportedReadings(
   if (values.slices.length === 0) return 0;
   const importId = randomUUID();
   const decoder = new TextDecoder();
+  let stored: number;
   try {
     for (const slice of values.slices) {
       await stageImportedReadings(db, organisationId, {
@@ -34,7 +37,7 @@ export async function storeImportedReadings(
       });
       await yieldToOtherRequests();
     }
-    return await writeToVisit(db, organisationId, values.visitId, async (tx) => {
+    stored = await writeToVisit(db, organisationId, values.visitId, async (tx) => {
       const stored = await commitImportedReadings(tx, importId);
       await joinCrew(tx, values.visitId, values.recordedBy);
       await insertVisitEvent(tx, organisationId, {
@@ -51,4 +54,9 @@ export async function storeImportedReadings(
     await discardStagedReadings(db, importId);
     throw error;
   }
+  // Thousands of readings at once move the table's size well past what the planner last saw.
+  // The readings are stored by now: a failed refresh must not report the import as failed (a
+  // retry would store them twice), and the hourly refresh catches up.
+  await analyzeTables(db, [readings]).catch(() => undefined);
+  return stored;
 }

@@ -1,6 +1,7 @@
 import { count } from "drizzle-orm";
 import { hashPassword } from "../../auth/password.ts";
 import type { Database } from "../client.ts";
+import { analyzeTables } from "../planner-statistics.ts";
 import { customers, cylinders, equipment, organisations, sites, users } from "../schema.ts";
 import {
   DEMO_PASSWORD,
@@ -61,5 +62,7 @@ export async function seedDemoData(db: Database, options: Pick<DemoVisitOptions,
       options,
     );
   });
+  // A bulk write into empty tables: without fresh statistics the planner still sees them empty.
+  await analyzeTables(db);
   return true;
 }

@@ -1,0 +1,1 @@
+CREATE INDEX "visits_organisation_started_idx" ON "visits" USING btree ("organisation_id","started_at");
