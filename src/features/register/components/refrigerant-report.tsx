@@ -4,6 +4,7 @@ import { useVisitRefrigerant } from "@/lib/api/register.ts";
 import { estimateBeforeRecovery } from "../utils/estimate-before-recovery.ts";
 import { formatKg, formatSignedKg, formatWhen } from "../utils/format-register.ts";
 import { HiddenLinesNote } from "./hidden-lines-note.tsx";
+import { RunLogCheck } from "./run-log-check.tsx";
 import { VerdictLine } from "./verdict-line.tsx";
 
 /**
@@ -90,6 +91,9 @@ export function RefrigerantReport({ visitId, readings = [] }: { visitId: string;
           </ul>
           <HiddenLinesNote count={register.data.hiddenMovements} />
         </>
+      )}
+      {register.data && (movements.length + register.data.hiddenMovements > 0 || register.data.runLogCheck.unlinked.length > 0) && (
+        <RunLogCheck check={register.data.runLogCheck} />
       )}
     </section>
   );
