@@ -179,7 +179,7 @@ describe("visits and the run log API", () => {
     expect(mail.decoded).toContain("RTU-1 packaged rooftop unit");
     expect(mail.decoded).toContain("Circuit 1, last reading:");
     expect(mail.decoded).toContain(`http://satura.test/visits/${visitId}/report`);
-    expect(mail.decoded).toContain("Added 0.4 kg liquid");
+    expect(mail.decoded).toContain("Opened the TXV a quarter turn");
     expect((await apprentice.post(`/api/visits/${visitId}/report/send`).send({ to: "x@example.com" })).status).toBe(403);
     expect((await outsider.post(`/api/visits/${visitId}/report/send`).send({ to: "x@example.com" })).status).toBe(404);
   });
