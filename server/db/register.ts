@@ -6,7 +6,8 @@
  * movements out of it (MOVEMENT_CYLINDER_RULES says which way each kind goes).
  */
 import { and, asc, desc, eq, gte, inArray, isNull, lt, sql, type SQL } from "drizzle-orm";
-import { MOVEMENT_CYLINDER_RULES, type CylinderValues, type Movement, type MovementKind } from "@shared/schemas/register.ts";
+import { MOVEMENT_CYLINDER_RULES, MOVEMENT_DIRECTION, type CylinderValues, type Movement, type MovementKind, type RunLogChargeCheck } from "@shared/schemas/register.ts";
+import { CHARGE_ADJUSTMENT_KINDS, type ChargeAdjustmentKind } from "@shared/schemas/visits.ts";
 import { alias } from "drizzle-orm/pg-core";
 import type { Database } from "./client.ts";
 import { adjustments, circuitCharges, cylinders, equipment, refrigerantMovements, sites, users } from "./schema.ts";
@@ -257,23 +258,38 @@ export async function findMember(db: Database, organisationId: string, userId: s
   return row;
 }
 
+const grams = (value: number) => Math.round(value * 1000) / 1000;
+
 /**
- * kg marked on the visit's run log as charge adjustments. They are marks on the trend chart,
- * not register entries: the visit's refrigerant section shows them only as a reminder.
+ * The visit's run-log charge adjustments beside its register movements (RunLogChargeCheckSchema).
+ * Linked adjustments carry their movement's kilograms, so the totals agree unless a row was
+ * changed outside Satura; the report prints the check either way. Unlinked adjustments (stored
+ * before entries were linked) are listed for the reader and counted nowhere.
  */
-export async function runLogChargeMarks(db: Database, organisationId: string, visitId: string): Promise<{ added: number; removed: number }> {
+export async function runLogChargeCheck(db: Database, organisationId: string, visitId: string, movements: readonly Movement[]): Promise<RunLogChargeCheck> {
   const rows = await db
-    .select({ kind: adjustments.kind, kg: sql<number>`coalesce(sum(${adjustments.amountKg}), 0)`.mapWith(Number) })
+    .select({ id: adjustments.id, at: adjustments.at, circuit: adjustments.circuit, kind: adjustments.kind, amountKg: adjustments.amountKg, movementId: adjustments.movementId })
     .from(adjustments)
     .where(
       and(
         eq(adjustments.organisationId, organisationId),
         eq(adjustments.visitId, visitId),
-        inArray(adjustments.kind, ["charge-added", "charge-removed"]),
+        inArray(adjustments.kind, [...CHARGE_ADJUSTMENT_KINDS]),
         isNull(adjustments.voidedAt),
       ),
     )
-    .groupBy(adjustments.kind);
-  const kgOf = (kind: string) => Math.round((rows.find((row) => row.kind === kind)?.kg ?? 0) * 1000) / 1000;
-  return { added: kgOf("charge-added"), removed: kgOf("charge-removed") };
+    .orderBy(asc(adjustments.at));
+  const linked = rows.filter((row) => row.movementId !== null);
+  const sumOf = (kind: string) => grams(linked.filter((row) => row.kind === kind).reduce((sum, row) => sum + (row.amountKg ?? 0), 0));
+  const standing = movements.filter((movement) => movement.voided === null && movement.kind !== "sent-for-reclaim");
+  const registerOf = (direction: string) =>
+    grams(standing.filter((movement) => MOVEMENT_DIRECTION[movement.kind as keyof typeof MOVEMENT_DIRECTION] === direction).reduce((sum, movement) => sum + movement.kg, 0));
+  const check = { runLogInKg: sumOf("charge-added"), runLogOutKg: sumOf("charge-removed"), registerInKg: registerOf("charge-added"), registerOutKg: registerOf("charge-removed") };
+  return {
+    ...check,
+    agrees: check.runLogInKg === check.registerInKg && check.runLogOutKg === check.registerOutKg,
+    unlinked: rows
+      .filter((row) => row.movementId === null && row.amountKg !== null)
+      .map((row) => ({ id: row.id, at: row.at.toISOString(), circuit: row.circuit, kind: row.kind as ChargeAdjustmentKind, amountKg: row.amountKg! })),
+  };
 }

@@ -325,7 +325,12 @@ export const readings = pgTable(
   ],
 );
 
-/** A change made to the unit during the visit, drawn on the trend chart. */
+/**
+ * A change made to the unit during the visit, drawn on the trend chart. A charge adjustment
+ * (charge-added / charge-removed) is the run log's view of one register movement: movement_id
+ * links the two, they are written and voided together, and the kilograms are the movement's.
+ * Rows stored before the link existed may stay unlinked; the refrigerant section says so.
+ */
 export const adjustments = pgTable(
   "adjustments",
   {
@@ -341,11 +346,18 @@ export const adjustments = pgTable(
     kind: text("kind").notNull(),
     description: text("description").notNull(),
     amountKg: doublePrecision("amount_kg"),
+    /** The register movement this charge adjustment is; no ON DELETE action, like the register's own references. */
+    movementId: uuid("movement_id").references((): AnyPgColumn => refrigerantMovements.id),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [index("adjustments_visit_idx").on(table.visitId, table.at), voidComplete("adjustments", table)],
+  (table) => [
+    index("adjustments_visit_idx").on(table.visitId, table.at),
+    voidComplete("adjustments", table),
+    // One movement has one run-log entry, so a kilogram can never be shown twice.
+    uniqueIndex("adjustments_movement_unique").on(table.movementId).where(sql`${table.movementId} is not null`),
+  ],
 );
 
 export const visitComments = pgTable(
@@ -617,9 +629,9 @@ export const cylinders = pgTable(
 
 /**
  * The refrigerant register: every kilogram recovered, reused, added or sent for reclaim.
- * It is the record of truth for refrigerant; the run log's charge adjustments (adjustments
- * of kind charge-added / charge-removed) are marks on the trend chart and are never counted
- * here, so nothing is counted twice. References have no ON DELETE action: a register entry
+ * It is the record of truth for refrigerant; each movement on a visit has its run-log charge
+ * adjustment (adjustments.movement_id) carrying the same kilograms, and only the movement is
+ * counted, so nothing is counted twice. References have no ON DELETE action: a register entry
  * outlives nothing it points to, except when the whole organisation goes.
  */
 export const refrigerantMovements = pgTable(

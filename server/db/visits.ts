@@ -165,6 +165,7 @@ function toAdjustment(row: typeof adjustments.$inferSelect, people: People): Adj
     kind: row.kind as Adjustment["kind"],
     description: row.description,
     amountKg: row.amountKg,
+    movementId: row.movementId,
     recordedBy: person(people, row.recordedBy),
     voided: voidInfo(row, people),
   };
@@ -173,7 +174,7 @@ function toAdjustment(row: typeof adjustments.$inferSelect, people: People): Adj
 export async function insertAdjustment(
   db: Database,
   organisationId: string,
-  values: { visitId: string; circuit: number | null; at?: Date; kind: string; description: string; amountKg: number | null; recordedBy: string },
+  values: { visitId: string; circuit: number | null; at?: Date; kind: string; description: string; amountKg: number | null; movementId?: string | null; recordedBy: string },
 ): Promise<Adjustment> {
   const [row] = await db.insert(adjustments).values({ ...values, organisationId }).returning();
   return toAdjustment(row, await peopleById(db, [row.recordedBy]));

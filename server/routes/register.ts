@@ -2,10 +2,9 @@
  * The refrigerant register: /api/cylinders, /api/visits/:id/refrigerant,
  * /api/equipment/:id/refrigerant and /api/register (list and CSV export).
  *
- * The register is the record of truth for refrigerant. The run log's charge adjustments
- * (charge-added / charge-removed on /api/visits/:id/adjustments) stay marks on the trend
- * chart: they are shown beside the register as a reminder, never summed into it, so logging
- * both never counts a kilogram twice.
+ * The register is the record of truth for refrigerant. A movement logged on a visit and the
+ * run log's charge adjustment (charge-added / charge-removed on /api/visits/:id/adjustments)
+ * are one entry: either route writes both, linked, with one figure (server/register/charge-entry.ts).
  */
 import { Router, type Response } from "express";
 import { z } from "zod";
@@ -15,12 +14,9 @@ import { MovementVoidBodySchema } from "@shared/schemas/visits.ts";
 import {
   ChargingUpdateSchema,
   CylinderCreateSchema,
-  MOVEMENT_CYLINDER_RULES,
-  MOVEMENT_KIND_LABELS,
   MovementCreateSchema,
   ReclaimCreateSchema,
   RegisterQuerySchema,
-  type CylinderKind,
   type MovementKind,
 } from "@shared/schemas/register.ts";
 import { getAuth } from "../auth/session.ts";
@@ -35,66 +31,26 @@ import {
   insertMovement,
   listCylinders,
   registerMovements,
-  runLogChargeMarks,
+  runLogChargeCheck,
   visitCircuitCharges,
   visitMovements,
   voidReclaim,
-  type CylinderRow,
 } from "../db/register.ts";
 import { insertVisitEvent } from "../db/visit-events.ts";
 import { findVisit, joinCrew } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
+import { checkCylinder, fieldError, recordChargeEntry } from "../register/charge-entry.ts";
 import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
-import { circuitBalance, cylinderFill, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
+import { circuitBalance, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
 import { registerCsv } from "../register/register-csv.ts";
 import { mayReadRegisterLine, readsWholeRegister, visibleRegisterLines, type RegisterReader } from "../register/register-visibility.ts";
 import { licenceNumbers } from "../db/licence-numbers.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
 
 type Deps = Pick<AccountRouteDeps, "db">;
-
-const fieldError = (field: string, message: string) => new HttpError(400, "Some fields need attention", { [field]: message });
-const kg = (value: number) => `${Number(value.toFixed(2))} kg`;
-
-const KIND_NAMES: Record<CylinderKind, string> = { recovery: "a recovery", new: "a new-refrigerant", reclaimed: "a reclaimed-refrigerant" };
-
-/**
- * Checks that a movement may use this cylinder and that its contents allow it: one
- * refrigerant per cylinder (TRADE.md §6), the cylinder kind fits the movement, nothing drawn
- * that is not in it, and no recovery that takes a recovery cylinder past its 80 % liquid
- * limit. The client shows the same fill check live before the technician saves.
- */
-function checkCylinder(cylinder: CylinderRow, kind: MovementKind, refrigerant: string, massKg: number) {
-  if (cylinder.refrigerant !== refrigerant) {
-    throw fieldError(
-      "cylinderId",
-      `${cylinder.label} holds ${cylinder.refrigerant}, not ${refrigerant}: never mix refrigerants in one cylinder. Choose a ${refrigerant} cylinder.`,
-    );
-  }
-  const rule = MOVEMENT_CYLINDER_RULES[kind];
-  if (!rule.cylinderKinds.includes(cylinder.kind)) {
-    throw fieldError(
-      "cylinderId",
-      `${MOVEMENT_KIND_LABELS[kind]} needs ${rule.cylinderKinds.map((candidate) => KIND_NAMES[candidate]).join(" or ")} cylinder; ${cylinder.label} is ${KIND_NAMES[cylinder.kind]} cylinder.`,
-    );
-  }
-  if (!rule.intoCylinder && massKg > cylinder.contentsKg + 1e-9) {
-    throw fieldError("kg", `${cylinder.label} holds only ${kg(cylinder.contentsKg)} by the register: weigh it and check the figure.`);
-  }
-  if (rule.intoCylinder) {
-    const after = cylinderFill(cylinder, cylinder.contentsKg + massKg);
-    if (after.check?.verdict === "fail" && after.maxContentsKg !== null) {
-      const room = Math.max(0, after.maxContentsKg - cylinder.contentsKg);
-      throw fieldError(
-        "kg",
-        `That would fill ${cylinder.label} past its 80 % limit of ${kg(after.maxContentsKg)} (it holds ${kg(cylinder.contentsKg)}, room for ${kg(room)}). Stop and switch to another recovery cylinder, then log each cylinder's share.`,
-      );
-    }
-  }
-}
 
 /**
  * The register's technician filter within what the reader may see (server/register/register-visibility.ts):
@@ -194,11 +150,9 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
 
   /** The visit's refrigerant as `reader` may see it: their lines, balances over all of them. */
   async function visitRefrigerant(reader: RegisterReader, organisationId: string, visitId: string, unit: NonNullable<Awaited<ReturnType<typeof getEquipment>>>) {
-    const [movements, charges, marks] = await Promise.all([
-      visitMovements(db, organisationId, visitId),
-      visitCircuitCharges(db, organisationId, visitId),
-      runLogChargeMarks(db, organisationId, visitId),
-    ]);
+    const [movements, charges] = await Promise.all([visitMovements(db, organisationId, visitId), visitCircuitCharges(db, organisationId, visitId)]);
+    // Over every movement, like the balances: the check compares totals, not the lines shown.
+    const runLogCheck = await runLogChargeCheck(db, organisationId, visitId, movements);
     const { note, glideK } = liquidChargingNote(unit.refrigerant);
     return {
       refrigerant: unit.refrigerant,
@@ -212,7 +166,7 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
           charges.find((charge) => charge.circuit === nameplate.number),
         ),
       ),
-      runLogChargeMarksKg: marks,
+      runLogCheck,
     };
   }
 
@@ -230,38 +184,13 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
     if (!unit.circuits.some((circuit) => circuit.number === values.circuit)) {
       throw fieldError("circuit", `${unit.name} has ${unit.circuits.length} circuit(s)`);
     }
-    let cylinder: CylinderRow | undefined;
-    if (values.cylinderId) {
-      cylinder = await getCylinder(db, organisationId, values.cylinderId);
-      if (!cylinder) throw fieldError("cylinderId", "Choose one of your company's cylinders");
-      checkCylinder(cylinder, values.kind, unit.refrigerant, values.kg);
-    }
-    const movement = await writeToVisit(db, organisationId, visit.id, async (tx) => {
-      if (values.kind === "reused") {
-        // Reused refrigerant is what was recovered from this circuit and put back (TRADE.md §6 records: destination "reuse in same system").
-        const own = (await visitMovements(tx, organisationId, visit.id)).filter((movement) => movement.circuit === values.circuit && movement.voided === null);
-        const recovered = own.filter((movement) => movement.kind === "recovered").reduce((sum, movement) => sum + movement.kg, 0);
-        const reused = own.filter((movement) => movement.kind === "reused").reduce((sum, movement) => sum + movement.kg, 0);
-        if (reused + values.kg > recovered + 1e-9) {
-          throw fieldError(
-            "kg",
-            recovered === 0
-              ? `Nothing has been recovered from circuit ${values.circuit} on this visit, so nothing can be reused: log the recovery first, or log new refrigerant as added`
-              : `Only ${kg(recovered - reused)} recovered from circuit ${values.circuit} on this visit is left to reuse`,
-          );
-        }
-      }
-      const stored = await insertMovement(tx, organisationId, {
+    // The movement and its run-log charge adjustment, checked and stored together (server/register/charge-entry.ts).
+    const { movement, cylinder } = await writeToVisit(db, organisationId, visit.id, async (tx) => {
+      const stored = await recordChargeEntry(tx, organisationId, {
         visitId: visit.id,
-        equipmentId: unit.id,
-        circuit: values.circuit,
-        refrigerant: unit.refrigerant,
-        kind: values.kind,
-        kg: values.kg,
-        cylinderId: cylinder?.id ?? null,
+        unit,
         technicianId: user.id,
-        at: values.at ? new Date(values.at) : undefined,
-        note: values.note,
+        movement: { kind: values.kind, kg: values.kg, circuit: values.circuit, cylinderId: values.cylinderId ?? null, at: values.at ? new Date(values.at) : undefined, note: values.note },
       });
       await joinCrew(tx, visit.id, user.id);
       return stored;

@@ -7,6 +7,7 @@ import {
   AdjustmentCreateSchema,
   CommentCreateSchema,
   hasReason,
+  isChargeAdjustment,
   PHOTO_KINDS,
   REASON_NEEDED_MESSAGE,
   ReadingBodySchema,
@@ -49,6 +50,7 @@ import { ColumnMappingSchema } from "../import/readings-csv.ts";
 import { storeImportedReadings } from "../import/store-imported-readings.ts";
 import { discardPhoto, MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
 import { visitReportMail } from "../report/visit-report-mail.ts";
+import { chargeMovementKind, linkToMovement, recordChargeEntry } from "../register/charge-entry.ts";
 import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
 import { readingInput, type ReadingContext } from "../visits/reading-input.ts";
 import { voidVisitRecord } from "../visits/void-record.ts";
@@ -185,6 +187,30 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     const visit = await loadVisit(organisationId, req.params.id);
     requireWritableVisit(visit.status);
     const values = AdjustmentCreateSchema.parse(req.body);
+    if (isChargeAdjustment(values.kind)) {
+      // Refrigerant added or removed is a register movement: both records in one transaction,
+      // linked, with one figure; the register's rules refuse it whole or store it whole.
+      const unit = await getEquipment(db, organisationId, visit.equipmentId);
+      if (!unit) throw notFound("Equipment");
+      const circuit = values.circuit!;
+      if (!unit.circuits.some((candidate) => candidate.number === circuit)) throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
+      const kind = values.kind;
+      const at = values.at ? new Date(values.at) : undefined;
+      const entry = await writeToVisit(db, organisationId, visit.id, async (tx) => {
+        const stored = values.movementId
+          ? { adjustment: await linkToMovement(tx, organisationId, { visitId: visit.id, movementId: values.movementId, kind, amountKg: values.amountKg!, circuit, description: values.description, at, recordedBy: user.id }) }
+          : await recordChargeEntry(tx, organisationId, {
+              visitId: visit.id,
+              unit,
+              technicianId: user.id,
+              movement: { kind: await chargeMovementKind(tx, organisationId, kind, values.cylinderId!), kg: values.amountKg!, circuit, cylinderId: values.cylinderId!, at, note: values.description },
+              adjustment: { description: values.description },
+            });
+        await joinCrew(tx, visit.id, user.id);
+        return stored;
+      });
+      return void res.status(201).json({ adjustment: entry.adjustment });
+    }
     const adjustment = await writeToVisit(db, organisationId, visit.id, async (tx) => {
       const stored = await insertAdjustment(tx, organisationId, {
         visitId: visit.id,

@@ -3,7 +3,8 @@
  * movement or weigh-in declaration is corrected. The row stays as it was written, marked with
  * who voided it, when and why; every result, balance, total, export and report leaves it out,
  * and the visit's audit trail gets a line naming it. Nothing is ever deleted. Runs under the
- * visit's lock (writeToVisit), so it follows the same open/closed rule as new entries.
+ * visit's lock (writeToVisit), so it follows the same open/closed rule as new entries. A charge
+ * adjustment and its linked register movement are voided together.
  */
 import { sql } from "drizzle-orm";
 import type { PgTable } from "drizzle-orm/pg-core";
@@ -111,12 +112,49 @@ export async function voidVisitRecord(
     throw notFound(VOIDABLE_KIND_LABELS[body.kind]);
   }
   if (body.kind === "movement") await requireRegisterStillPossible(tx, organisationId, visitId, row);
-  return insertVisitEvent(tx, organisationId, {
+  const event = await insertVisitEvent(tx, organisationId, {
     visitId,
     action: "voided",
     recordKind: body.kind,
     recordId: row.id,
     summary: SUMMARIES[body.kind](row),
+    reason: body.reason.trim(),
+    actorId,
+  });
+  await voidLinkedChargeEntry(tx, organisationId, visitId, body, row, actorId);
+  return event;
+}
+
+/**
+ * A charge adjustment and its register movement are one entry: voiding either voids the other
+ * with the same reason, in the same transaction, so the run log and the register never show
+ * different kilograms. Each void gets its own line in the audit trail.
+ */
+async function voidLinkedChargeEntry(tx: Database, organisationId: string, visitId: string, body: VoidBody, row: RawRow, actorId: string): Promise<void> {
+  let linked: { kind: VoidableKind; row: RawRow } | undefined;
+  if (body.kind === "adjustment" && typeof row.movement_id === "string") {
+    const updated = await tx.execute<RawRow>(sql`
+      update ${refrigerantMovements} set voided_at = now(), voided_by = ${actorId}, void_reason = ${body.reason.trim()}
+      where id = ${row.movement_id} and organisation_id = ${organisationId} and voided_at is null
+      returning *`);
+    if (updated.rows[0]) {
+      await requireRegisterStillPossible(tx, organisationId, visitId, updated.rows[0]);
+      linked = { kind: "movement", row: updated.rows[0] };
+    }
+  } else if (body.kind === "movement") {
+    const updated = await tx.execute<RawRow>(sql`
+      update ${adjustments} set voided_at = now(), voided_by = ${actorId}, void_reason = ${body.reason.trim()}
+      where movement_id = ${row.id} and organisation_id = ${organisationId} and voided_at is null
+      returning *`);
+    if (updated.rows[0]) linked = { kind: "adjustment", row: updated.rows[0] };
+  }
+  if (!linked) return;
+  await insertVisitEvent(tx, organisationId, {
+    visitId,
+    action: "voided",
+    recordKind: linked.kind,
+    recordId: linked.row.id,
+    summary: SUMMARIES[linked.kind](linked.row),
     reason: body.reason.trim(),
     actorId,
   });

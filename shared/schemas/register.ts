@@ -254,6 +254,33 @@ export const CircuitBalanceSchema = z.object({
 });
 export type CircuitBalance = z.infer<typeof CircuitBalanceSchema>;
 
+/**
+ * The run log's charge adjustments beside the register. A linked adjustment carries its
+ * movement's kilograms, so the two totals are equal by construction; `agrees` is the check that
+ * says so on the report. Adjustments stored before entries were linked are listed, never counted.
+ */
+export const RunLogChargeCheckSchema = z.object({
+  /** Standing linked adjustments: refrigerant added (into the system) and removed, kg. */
+  runLogInKg: z.number(),
+  runLogOutKg: z.number(),
+  /** Standing register movements of the visit: reused + added, and recovered, kg. */
+  registerInKg: z.number(),
+  registerOutKg: z.number(),
+  agrees: z.boolean(),
+  unlinked: z.array(
+    z.object({ id: z.uuid(), at: z.string(), circuit: z.number().int().nullable(), kind: z.enum(["charge-added", "charge-removed"]), amountKg: z.number() }),
+  ),
+});
+export type RunLogChargeCheck = z.infer<typeof RunLogChargeCheckSchema>;
+
+/** Into or out of the system, for the run log's two charge adjustment kinds. */
+export const MOVEMENT_DIRECTION: Record<Exclude<MovementKind, "sent-for-reclaim">, "charge-added" | "charge-removed"> = {
+  recovered: "charge-removed",
+  reused: "charge-added",
+  "added-new": "charge-added",
+  "added-reclaimed": "charge-added",
+};
+
 export const VisitRefrigerantSchema = z.object({
   refrigerant: z.string(),
   /** Zeotropic blend with a glide above ZEOTROPE_GLIDE_NOTE_K: charge it as liquid (TRADE.md §6). */
@@ -262,8 +289,8 @@ export const VisitRefrigerantSchema = z.object({
   movements: z.array(MovementSchema),
   hiddenMovements: HiddenMovementsSchema,
   circuits: z.array(CircuitBalanceSchema),
-  /** kg marked on the run log as charge adjustments; they are chart marks, not register entries. */
-  runLogChargeMarksKg: z.object({ added: z.number(), removed: z.number() }),
+  /** The run log's charge adjustments against the register: one entry, one number. */
+  runLogCheck: RunLogChargeCheckSchema,
 });
 export type VisitRefrigerant = z.infer<typeof VisitRefrigerantSchema>;
 

@@ -230,6 +230,11 @@ export const ADJUSTMENT_KIND_LABELS: Record<(typeof ADJUSTMENT_KINDS)[number], s
   other: "Other change",
 };
 
+/** Adjustment kinds that move refrigerant: each is one register movement, never a second figure. */
+export const CHARGE_ADJUSTMENT_KINDS = ["charge-added", "charge-removed"] as const;
+export type ChargeAdjustmentKind = (typeof CHARGE_ADJUSTMENT_KINDS)[number];
+export const isChargeAdjustment = (kind: string): kind is ChargeAdjustmentKind => (CHARGE_ADJUSTMENT_KINDS as readonly string[]).includes(kind);
+
 export const AdjustmentCreateSchema = z
   .object({
     circuit: CircuitNumberSchema.optional().nullable(),
@@ -244,11 +249,30 @@ export const AdjustmentCreateSchema = z
       .max(100, "More than 100 kg in one step is not plausible")
       .optional()
       .nullable(),
+    /** Charge adjustments: the register cylinder, so the server records the movement with it. */
+    cylinderId: z.uuid("Choose a cylinder").optional().nullable(),
+    /** Charge adjustments: a movement already in the visit's register that this entry is. */
+    movementId: z.uuid("Choose a register line").optional().nullable(),
   })
   // A charge change is only meaningful with its mass: the register needs the kilograms.
-  .refine((value) => !value.kind.startsWith("charge-") || value.amountKg != null, {
+  .refine((value) => !isChargeAdjustment(value.kind) || value.amountKg != null, {
     path: ["amountKg"],
     message: "Enter how many kg were added or removed",
+  })
+  // A charge adjustment is a register movement, and a movement belongs to one circuit.
+  .refine((value) => !isChargeAdjustment(value.kind) || value.circuit != null, {
+    path: ["circuit"],
+    message: "Say which circuit the refrigerant went into or came out of",
+  })
+  // The register needs the cylinder it came from or went into (TRADE.md §6 record fields);
+  // a movement already in the register can be named instead, so it is not entered twice.
+  .refine((value) => !isChargeAdjustment(value.kind) || Boolean(value.cylinderId) || Boolean(value.movementId), {
+    path: ["cylinderId"],
+    message: "Choose the cylinder it came from or went into",
+  })
+  .refine((value) => isChargeAdjustment(value.kind) || (!value.cylinderId && !value.movementId), {
+    path: ["cylinderId"],
+    message: "Only refrigerant added or removed goes with a cylinder",
   });
 export type AdjustmentCreate = z.input<typeof AdjustmentCreateSchema>;
 
@@ -259,6 +283,8 @@ export const AdjustmentSchema = z.object({
   kind: z.enum(ADJUSTMENT_KINDS),
   description: z.string(),
   amountKg: z.number().nullable(),
+  /** The register movement a charge adjustment is (same kilograms, voided together); null for others and old unlinked rows. */
+  movementId: z.uuid().nullable(),
   recordedBy: PersonRefSchema.nullable(),
   voided: VoidInfoSchema,
 });

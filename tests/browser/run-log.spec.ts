@@ -52,6 +52,7 @@ test.describe("run log and review", () => {
     await page.getByLabel("What changed").selectOption("charge-added");
     await page.getByLabel("Description").fill("Added 0.4 kg liquid through the suction port");
     await page.getByLabel("Amount (kg)").fill("0.4");
+    await page.getByLabel("From cylinder").selectOption({ label: "BM-407C-N3 · New (virgin) · 10.00 kg in it" });
     await page.getByRole("button", { name: "Log adjustment" }).click();
     await expect(page.getByRole("list", { name: "Latest readings and adjustments" })).toContainText("Added 0.4 kg");
 

@@ -202,10 +202,14 @@ describe("refrigerant register API", () => {
     expect(freshDetail.movements).toHaveLength(1);
   });
 
-  it("keeps the run log's charge marks out of the register (nothing counted twice)", async () => {
-    await technician.post(`/api/visits/${visitId}/adjustments`).send({ circuit: 1, kind: "charge-added", description: "Added 0.6 kg liquid", amountKg: 0.6 });
+  it("shows each register movement once on the run log, with the same figure (nothing counted twice)", async () => {
     const body = (await technician.get(`/api/visits/${visitId}/refrigerant`)).body;
-    expect(body.runLogChargeMarksKg).toEqual({ added: 0.6, removed: 0 });
+    const adjustments = (await technician.get(`/api/visits/${visitId}`)).body.visit.adjustments as { movementId: string | null; amountKg: number }[];
+    expect(adjustments).toHaveLength(body.movements.length);
+    for (const movement of body.movements as { id: string; kg: number }[]) {
+      expect(adjustments.find((adjustment) => adjustment.movementId === movement.id)?.amountKg).toBe(movement.kg);
+    }
+    expect(body.runLogCheck).toMatchObject({ runLogInKg: body.runLogCheck.registerInKg, runLogOutKg: body.runLogCheck.registerOutKg, agrees: true, unlinked: [] });
     expect(body.circuits[0].addedKg).toBeCloseTo(0.6, 6);
     expect(body.movements).toHaveLength(3);
   });

@@ -119,9 +119,13 @@ describe("visits and the run log API", () => {
     const noMass = await technician.post(`/api/visits/${visitId}/adjustments`).send({ circuit: 1, kind: "charge-added", description: "Topped up" });
     expect(noMass.status).toBe(400);
     expect(noMass.body.fields.amountKg).toBeDefined();
+    // Refrigerant added is a register movement: without its cylinder the register could not record it.
+    const noCylinder = await technician.post(`/api/visits/${visitId}/adjustments`).send({ circuit: 1, kind: "charge-added", description: "Topped up", amountKg: 0.4 });
+    expect(noCylinder.status).toBe(400);
+    expect(noCylinder.body.fields.cylinderId).toMatch(/Choose the cylinder/);
     const added = await technician
       .post(`/api/visits/${visitId}/adjustments`)
-      .send({ circuit: 1, kind: "charge-added", description: "Added 0.4 kg liquid", amountKg: 0.4 });
+      .send({ circuit: 1, kind: "metering", description: "Opened the TXV a quarter turn" });
     expect(added.status).toBe(201);
     const visit = (await senior.get(`/api/visits/${visitId}`)).body.visit;
     const comment = await senior.post(`/api/visits/${visitId}/comments`).send({ body: "Superheat looks right; watch the DLT", readingId: visit.readings[0].id });
@@ -175,7 +179,7 @@ describe("visits and the run log API", () => {
     expect(mail.decoded).toContain("RTU-1 packaged rooftop unit");
     expect(mail.decoded).toContain("Circuit 1, last reading:");
     expect(mail.decoded).toContain(`http://satura.test/visits/${visitId}/report`);
-    expect(mail.decoded).toContain("Added 0.4 kg liquid");
+    expect(mail.decoded).toContain("Opened the TXV a quarter turn");
     // Without the sender's zone the e-mail writes UTC and names it; the date reads "2 Dec 2026, 14:05", never 12/2/26.
     expect(mail.decoded).toMatch(/Started \d{1,2} (Jan|Feb|Mar|Apr|May|Jun|Jul|Aug|Sep|Oct|Nov|Dec) \d{4}, [0-2]\d:[0-5]\d \(UTC time\)/);
     const badZone = await technician.post(`/api/visits/${visitId}/report/send`).send({ to: "facilities@wattlelane.example", timeZone: "Mars/Olympus_Mons" });

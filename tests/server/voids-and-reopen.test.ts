@@ -119,18 +119,21 @@ describe("records are corrected by voiding, never lost; closed visits take nothi
     });
   });
 
-  it("voids an adjustment: its charge mark no longer counts", async () => {
+  it("voids an adjustment: its charge entry no longer counts, in the run log or the register", async () => {
+    const supply = (await technician.get("/api/cylinders?refrigerant=R407C")).body.cylinders.find(
+      (cylinder: { kind: string }) => cylinder.kind === "new",
+    );
     const adjustment = (
       await technician
         .post(`/api/visits/${visitId}/adjustments`)
-        .send({ circuit: 1, kind: "charge-added", description: "Added 0.4 kg", amountKg: 0.4 })
+        .send({ circuit: 1, kind: "charge-added", description: "Added 0.4 kg", amountKg: 0.4, cylinderId: supply.id })
     ).body.adjustment;
-    expect((await technician.get(`/api/visits/${visitId}/refrigerant`)).body.runLogChargeMarksKg.added).toBe(0.4);
+    expect((await technician.get(`/api/visits/${visitId}/refrigerant`)).body.runLogCheck).toMatchObject({ runLogInKg: 0.4, registerInKg: 0.4 });
     expect(
       (await voidIt(technician, { kind: "adjustment", recordId: adjustment.id, reason: "Logged on the wrong unit" }))
         .status,
     ).toBe(201);
-    expect((await technician.get(`/api/visits/${visitId}/refrigerant`)).body.runLogChargeMarksKg.added).toBe(0);
+    expect((await technician.get(`/api/visits/${visitId}/refrigerant`)).body.runLogCheck).toMatchObject({ runLogInKg: 0, registerInKg: 0, agrees: true });
     expect((await visit()).adjustments[0].voided.reason).toBe("Logged on the wrong unit");
   });
 

@@ -16,6 +16,7 @@ import { calibrateAfterWeighIn } from "../../visits/calibrate-after-weigh-in.ts"
 import { standingChargeReference } from "../charge-references.ts";
 import { demoSite } from "./demo-scenario.ts";
 import type { Database } from "../client.ts";
+import { MOVEMENT_DIRECTION } from "@shared/schemas/register.ts";
 import { adjustments, circuitCharges, cylinders as cylinderTable, readings, refrigerantMovements, visitComments, visitTechnicians, visits } from "../schema.ts";
 
 type Unit = {
@@ -119,6 +120,27 @@ export async function seedDemoVisits(
     ...values,
   });
 
+  /**
+   * Register lines with their run-log charge adjustments linked, as the app writes them: one
+   * entry, one number, so the demo report never shows two figures for the same kilograms.
+   */
+  const insertChargeEntries = async (rows: ReturnType<typeof movement>[]) => {
+    const stored = await db.insert(refrigerantMovements).values(rows).returning();
+    await db.insert(adjustments).values(
+      stored.map((row) => ({
+        organisationId,
+        visitId: row.visitId!,
+        circuit: row.circuit,
+        at: row.at,
+        kind: MOVEMENT_DIRECTION[row.kind as keyof typeof MOVEMENT_DIRECTION],
+        description: row.note ?? "",
+        amountKg: row.kg,
+        movementId: row.id,
+        recordedBy: row.technicianId,
+      })),
+    );
+  };
+
   if (withChargeHistory) {
     // 0. Five months ago: circuit 1's liquid line filter-drier blocked. The charge was recovered,
     // the drier replaced, the circuit evacuated and the 4.2 kg nameplate charge weighed back in;
@@ -139,7 +161,7 @@ export async function seedDemoVisits(
       })
       .returning({ id: visits.id });
     await db.insert(visitTechnicians).values({ visitId: drier.id, userId: people.technician2 });
-    await db.insert(refrigerantMovements).values([
+    await insertChargeEntries([
       movement(drier.id, people.technician2, drierStart + 30 * MINUTE, { kind: "recovered", kg: 4.2, cylinderId: cylinders.recovery, note: "Whole charge recovered before replacing the drier" }),
       movement(drier.id, people.technician2, drierStart + 150 * MINUTE, { kind: "reused", kg: 4.2, cylinderId: cylinders.recovery, note: "Nameplate charge weighed back in as liquid" }),
     ]);
@@ -214,9 +236,10 @@ export async function seedDemoVisits(
       { minutes: 5, evaporatingDewC: 0, suctionLineTempC: 13.2, condensingBubbleC: 37, liquidLineTempC: 36.6, dischargeLineTempC: 99, runMinutes: 30 },
     ], rooftopAir, circuitOneReference),
   );
+  // The kilograms (3.1 kg recovered, 3.1 kg reused, 1.1 kg new) are the register lines below,
+  // each with its own run-log entry; this line says what was done, without a second figure.
   await db.insert(adjustments).values([
-    { organisationId, visitId: leak.id, circuit: 1, at: new Date(firstRead + 12 * MINUTE), kind: "other", description: "Leak found at liquid-port valve core (bubble test); charge recovered (3.1 kg), core replaced, evacuated", recordedBy: people.technician },
-    { organisationId, visitId: leak.id, circuit: 1, at: new Date(firstRead + 30 * MINUTE), kind: "charge-added", description: "Weighed in the 4.2 kg nameplate charge as liquid (3.1 kg reused, 1.1 kg new)", amountKg: 4.2, recordedBy: people.technician },
+    { organisationId, visitId: leak.id, circuit: 1, at: new Date(firstRead + 12 * MINUTE), kind: "other", description: "Leak found at liquid-port valve core (bubble test); charge recovered, core replaced, evacuated", recordedBy: people.technician },
   ]);
   if (withChargeHistory) {
     // Lee brought the recovery machine and the part-used cylinder from the van, and kept the register lines.
@@ -225,7 +248,7 @@ export async function seedDemoVisits(
       .insert(cylinderTable)
       .values({ organisationId, label: "BM-407C-N2", serial: "NX10-51877", kind: "new", refrigerant: rooftop.refrigerant, waterCapacityKg: 15, tareKg: 6.1, initialContentsKg: 2.5 })
       .returning({ id: cylinderTable.id });
-    await db.insert(refrigerantMovements).values([
+    await insertChargeEntries([
       movement(leak.id, people.technician2, firstRead + 8 * MINUTE, { kind: "recovered", kg: 3.1, cylinderId: cylinders.recovery, note: "Recovered and weighed: 1.1 kg short of the nameplate" }),
       movement(leak.id, people.technician2, firstRead + 28 * MINUTE, { kind: "reused", kg: 3.1, cylinderId: cylinders.recovery, note: "Recovered charge weighed back in" }),
       movement(leak.id, people.technician2, firstRead + 30 * MINUTE, { kind: "added-new", kg: 1.1, cylinderId: van.id, note: "Made up to the 4.2 kg nameplate charge" }),

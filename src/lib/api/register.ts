@@ -112,6 +112,7 @@ function useRegisterMutation<TVariables, TResult>(
 }
 
 export const useCreateCylinder = () => useRegisterMutation(createCylinder);
-export const useCreateMovement = () => useRegisterMutation(createMovement);
+// A visit movement writes its run-log charge adjustment too: the visit's adjustments change with it.
+export const useCreateMovement = () => useRegisterMutation(createMovement, { alsoRefresh: [["visits", "detail"]] });
 export const useSendCylinderForReclaim = () => useRegisterMutation(sendCylinderForReclaim);
 export const useSetCharging = () => useRegisterMutation(setCharging, { alsoRefresh: [["charge-references"]] });

@@ -130,7 +130,8 @@ function useVisitMutation<TVariables extends { visitId: string }, TResult>(mutat
 // A stored reading may make a circuit's settled readings after a weigh-in its charge reference
 // point (calibrated on the server), so the units' reference points are fetched again too.
 export const useCreateReading = () => useVisitMutation(createReading, [["charge-references"]]);
-export const useCreateAdjustment = () => useVisitMutation(createAdjustment);
+// A charge adjustment is also a register movement: the visit's refrigerant and the cylinders change with it.
+export const useCreateAdjustment = () => useVisitMutation(createAdjustment, [["register"], ["cylinders"], ["equipment"]]);
 export const useCreateComment = () => useVisitMutation(createComment);
 export const useReviewVisit = () => useVisitMutation(reviewVisit);
 

@@ -24,7 +24,7 @@ describe("circuitSeries", () => {
   it("leaves voided readings and adjustments out of the series, the chart and the settled test", () => {
     const readings = [reading("a", 0, 12), reading("b", 5, 30, VOID), reading("c", 10, 12.2)];
     const adjustments: Adjustment[] = [
-      { id: "x", circuit: 1, at: "2026-12-01T10:07:00.000Z", kind: "metering", description: "Opened the TXV", amountKg: null, recordedBy: null, voided: VOID },
+      { id: "x", circuit: 1, at: "2026-12-01T10:07:00.000Z", kind: "metering", description: "Opened the TXV", amountKg: null, movementId: null, recordedBy: null, voided: VOID },
     ];
     const series = circuitSeries(readings, adjustments, 1);
     expect(series.readings.map((entry) => entry.id)).toEqual(["a", "c"]);

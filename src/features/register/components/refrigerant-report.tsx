@@ -5,6 +5,7 @@ import { estimateBeforeRecovery } from "../utils/estimate-before-recovery.ts";
 import { formatKg, formatSignedKg } from "../utils/format-register.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
 import { HiddenLinesNote } from "./hidden-lines-note.tsx";
+import { RunLogCheck } from "./run-log-check.tsx";
 import { VerdictLine } from "./verdict-line.tsx";
 
 /**
@@ -91,6 +92,9 @@ export function RefrigerantReport({ visitId, readings = [] }: { visitId: string;
           </ul>
           <HiddenLinesNote count={register.data.hiddenMovements} />
         </>
+      )}
+      {register.data && (movements.length + register.data.hiddenMovements > 0 || register.data.runLogCheck.unlinked.length > 0) && (
+        <RunLogCheck check={register.data.runLogCheck} />
       )}
     </section>
   );

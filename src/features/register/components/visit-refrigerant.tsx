@@ -1,4 +1,4 @@
-import { Droplets, Info } from "lucide-react";
+import { Droplets } from "lucide-react";
 import { Link } from "react-router-dom";
 import type { Equipment } from "@shared/schemas/equipment.ts";
 import { MOVEMENT_KIND_LABELS, type CircuitBalance, type Movement } from "@shared/schemas/register.ts";
@@ -13,6 +13,7 @@ import { CylinderFillBar } from "./cylinder-fill.tsx";
 import { HiddenLinesNote } from "./hidden-lines-note.tsx";
 import { MovementForm } from "./movement-form.tsx";
 import { MovementRecord } from "./movement-record.tsx";
+import { RunLogCheck } from "./run-log-check.tsx";
 
 function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitBalance; visitId: string; canWrite: boolean; single: boolean }) {
   const { shortfallKg, finalChargeKg, differenceFromNameplateKg } = balance.balance;
@@ -70,7 +71,7 @@ function MovementList({ visitId, movements, hidden, canWrite }: { visitId: strin
           <li key={movement.id} className="space-y-1 p-3">
             <MovementRecord movement={movement} />
             {canWrite && !movement.voided && (
-              <VoidAction what={`the movement “${what}”`} onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: "movement", recordId: movement.id, reason })} />
+              <VoidAction what={`the movement “${what}” and its run-log entry`} onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: "movement", recordId: movement.id, reason })} />
             )}
           </li>
         );
@@ -89,7 +90,6 @@ export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId
   const data = register.data;
   const recoveryCylinders = (cylinders.data ?? []).filter((cylinder) => cylinder.kind === "recovery");
   const filling = recoveryCylinders.filter((cylinder) => cylinder.fill.check && cylinder.fill.check.verdict !== "pass");
-  const logged = data.movements.some((movement) => movement.voided === null && movement.kind !== "recovered");
 
   return (
     <div className="space-y-4">
@@ -141,17 +141,7 @@ export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId
         </section>
       )}
 
-      {(data.runLogChargeMarksKg.added > 0 || data.runLogChargeMarksKg.removed > 0) && (
-        <p className="flex items-start gap-2 text-sm">
-          <Info aria-hidden className="mt-0.5 size-4 shrink-0" />
-          <span>
-            The run log marks {data.runLogChargeMarksKg.added > 0 && <>{formatKg(data.runLogChargeMarksKg.added)} added</>}
-            {data.runLogChargeMarksKg.added > 0 && data.runLogChargeMarksKg.removed > 0 && " and "}
-            {data.runLogChargeMarksKg.removed > 0 && <>{formatKg(data.runLogChargeMarksKg.removed)} removed</>} on the trend chart. Those marks are not the register
-            {logged ? "" : ": log the kilograms here too"}, so nothing is counted twice.
-          </span>
-        </p>
-      )}
+      <RunLogCheck check={data.runLogCheck} />
 
       <h3 className="text-lg font-semibold">Logged on this visit</h3>
       <MovementList visitId={visitId} movements={data.movements} hidden={data.hiddenMovements} canWrite={canWrite} />
