@@ -1,6 +1,7 @@
 import { CheckCircle2, TriangleAlert } from "lucide-react";
 import type { RunLogChargeCheck } from "@shared/schemas/register.ts";
-import { formatKg, formatWhen } from "../utils/format-register.ts";
+import { formatDateTime } from "@shared/format/date-time.ts";
+import { formatKg } from "../utils/format-register.ts";
 
 /**
  * The run log's charge adjustments against the register, for the visit's Refrigerant section
@@ -42,7 +43,7 @@ export function RunLogCheck({ check }: { check: RunLogChargeCheck }) {
             <ul className="list-disc pl-5">
               {check.unlinked.map((entry) => (
                 <li key={entry.id}>
-                  <span className="num">{formatWhen(entry.at)}</span> — <span className="num">{formatKg(entry.amountKg)}</span> {entry.kind === "charge-added" ? "added" : "removed"}
+                  <span className="num">{formatDateTime(entry.at)}</span> — <span className="num">{formatKg(entry.amountKg)}</span> {entry.kind === "charge-added" ? "added" : "removed"}
                   {entry.circuit !== null && `, circuit ${entry.circuit}`}
                 </li>
               ))}
