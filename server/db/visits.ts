@@ -286,7 +286,8 @@ export async function latestVisitReadings(db: Database, organisationId: string, 
     .select()
     .from(readings)
     .where(and(eq(readings.visitId, latest.visitId), countsInResults))
-    .orderBy(asc(readings.takenAt));
+    // Equal times in the order they were stored, so the trend keeps the later entry.
+    .orderBy(asc(readings.takenAt), asc(readings.createdAt));
 }
 
 export async function insertPhoto(

@@ -45,7 +45,7 @@ export async function weighInRunLog(db: Database, organisationId: string, visitI
       .select({ id: readings.id, takenAt: readings.takenAt, input: readings.input, result: readings.result })
       .from(readings)
       .where(and(eq(readings.visitId, visitId), eq(readings.circuit, circuit), gte(readings.takenAt, weighedInAt), countsInResults))
-      .orderBy(asc(readings.takenAt), asc(readings.id)),
+      .orderBy(asc(readings.takenAt), asc(readings.createdAt), asc(readings.id)),
     db
       .select({ at: adjustments.at, description: adjustments.description })
       .from(adjustments)

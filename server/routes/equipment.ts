@@ -1,5 +1,5 @@
 import { Router } from "express";
-import { assessTrend } from "@shared/engine/index.ts";
+import { assessTrend, lastAtEachInstant } from "@shared/engine/index.ts";
 import { CustomerInputSchema, EquipmentInputSchema, SiteInputSchema } from "@shared/schemas/equipment.ts";
 import type { EquipmentDetail } from "@shared/schemas/equipment-detail.ts";
 import { getAuth } from "../auth/session.ts";
@@ -71,8 +71,8 @@ export function equipmentRouter({ db }: Deps): Router {
     const [visits, latest] = await Promise.all([listVisits(db, organisationId, { equipmentId: id }), latestVisitReadings(db, organisationId, id)]);
     // The last settled state of each circuit, judged by the same trend rule as the run log.
     const lastSettled = row.circuits.map((circuit) => {
-      const series = latest
-        .filter((reading) => reading.circuit === circuit.number)
+      const own = latest.filter((reading) => reading.circuit === circuit.number);
+      const series = lastAtEachInstant(own, (reading) => reading.takenAt.getTime())
         .map((reading) => ({ takenAt: reading.takenAt.toISOString(), input: reading.input, result: reading.result }));
       if (series.length === 0) return { circuit: circuit.number, takenAt: null, result: null };
       const trend = assessTrend(series);

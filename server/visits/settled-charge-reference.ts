@@ -7,7 +7,7 @@
  *
  * Pure: the caller loads the run log (server/db/weigh-in-run-log.ts).
  */
-import { assessTrend, DiagnosisInputError, SETTLED_WINDOW_MINUTES } from "@shared/engine/index.ts";
+import { assessTrend, DiagnosisInputError, lastAtEachInstant, SETTLED_WINDOW_MINUTES } from "@shared/engine/index.ts";
 import { ChargeReferenceSchema, type ChargeReference, type TrendReading } from "@shared/schemas/diagnosis.ts";
 import type { WeighInRunLog } from "../db/weigh-in-run-log.ts";
 
@@ -32,8 +32,7 @@ const tenths = (value: number) => Math.round(value * 10) / 10;
 
 /** @returns the reference point, or null while the circuit has not settled since the weigh-in */
 export function settledChargeReference(runLog: WeighInRunLog): SettledChargeReference | null {
-  // The trend needs readings strictly in time order: of two at the same instant, keep the first.
-  const logged = runLog.readings.filter((reading, index, all) => index === 0 || reading.takenAt.getTime() > all[index - 1]!.takenAt.getTime());
+  const logged = lastAtEachInstant(runLog.readings, (reading) => reading.takenAt.getTime());
   if (logged.length === 0) return null;
   // An adjustment marks the first reading after it, so settling is judged from there (as on the run log).
   let nextAdjustment = 0;

@@ -71,6 +71,7 @@ export * as cycleLimits from "./cycle/cycle-limits.ts";
 // Charge diagnosis (superheat, subcooling, targets, findings)
 export { diagnose, MIN_VERDICT_SCORE, MIN_VERDICT_SCORE_WITHOUT_CHARGE_SIGNAL } from "./diagnosis/diagnose.ts";
 export type { DiagnoseOptions } from "./diagnosis/diagnose.ts";
+export { lastAtEachInstant } from "./diagnosis/last-at-each-instant.ts";
 export { assessTrend, SETTLED_WINDOW_MINUTES, SETTLED_MAX_CHANGE_K, SETTLED_MAX_RATE_K_PER_MIN } from "./diagnosis/assess-trend.ts";
 export { DiagnosisInputError } from "./diagnosis/diagnosis-input-error.ts";
 export type { FieldErrors } from "./diagnosis/diagnosis-input-error.ts";

@@ -194,6 +194,19 @@ describe("readings are built from the measured values, the nameplate and the sit
     expect(response.status).toBe(400);
     expect(response.body.fields.mapping).toMatch(/column mapping is not valid/);
   });
+
+  it("keeps the unit's page and the trend working when two readings share one instant (the later entry stands)", async () => {
+    const at = "2026-12-02T03:04:05.000Z";
+    for (const suctionLineTempC of [12, 13]) {
+      const saved = await technician.post(`/api/visits/${visitId}/readings`).send({ circuit: 1, ...measured, suctionLineTempC, takenAt: at });
+      expect(saved.status).toBe(201);
+    }
+    const unit = await technician.get(`/api/equipment/${rooftop.id}`);
+    expect(unit.status).toBe(200);
+    const visit = (await technician.get(`/api/visits/${visitId}`)).body.visit;
+    const twins = visit.readings.filter((reading: { takenAt: string }) => reading.takenAt === at);
+    expect(twins).toHaveLength(2);
+  });
 });
 
 describe("readingInput and siteAtmosphere", () => {

@@ -22,6 +22,7 @@ import { useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateE
 import { useVoidRecord } from "@/lib/api/visits.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { recordTime } from "../utils/record-time.ts";
 import { EvacuationChart, formatVacuum, VACUUM_LABEL, type VacuumUnit } from "./evacuation-chart.tsx";
@@ -51,7 +52,6 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
   const [reading, setReading] = useState("");
   const [minutes, setMinutes] = useState<string | null>(null);
   const [isolation, setIsolation] = useState<string | null>(null);
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
   const [stale, setStale] = useState<string | null>(null);
   const [reloading, setReloading] = useState(false);
@@ -60,6 +60,8 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
   const minutesText = minutes ?? autoMinutes;
   const lastMinutes = evacuation.samples.at(-1)?.minutes;
   const isolationText = isolation ?? (lastMinutes !== undefined ? String(lastMinutes) : autoMinutes);
+  // A message goes as soon as its field is changed.
+  const [errors, setErrors] = useFieldErrors({ microns: reading, minutes: minutesText, isolatedAtMinutes: isolationText });
 
   const add = async () => {
     setFormError(null);

@@ -18,6 +18,7 @@ import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateLeakSearch, useLeakSearches } from "@/lib/api/procedures.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { LeakSearchView } from "./leak-search-view.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
 import { recordTime } from "../utils/record-time.ts";
@@ -34,11 +35,12 @@ export function LeakSearchPanel({ visitId, canWrite, readOnlyNote }: { visitId: 
   const [leaks, setLeaks] = useState<LeakRow[]>([]);
   const [recheck, setRecheck] = useState<RecheckResult>("not-done");
   const [note, setNote] = useState("");
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
 
   const updateLeak = (index: number, change: Partial<LeakRow>) =>
     setLeaks((rows) => rows.map((row, at) => (at === index ? { ...row, ...change } : row)));
+  // A message goes as soon as its field is changed.
+  const [errors, setErrors] = useFieldErrors({ method, placesChecked: places, leaks, recheck, note });
 
   const save = async () => {
     setFormError(null);

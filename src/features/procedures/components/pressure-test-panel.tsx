@@ -22,6 +22,7 @@ import {
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
@@ -68,13 +69,14 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
   const [hold, setHold] = useState("");
   const [allowed, setAllowed] = useState<string | null>(null);
   const [note, setNote] = useState("");
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
 
   // Until the technician types their own, the nameplate rating and the organisation's allowed drop are offered.
   const ratedDefault = defaults ? ratedFor(section, defaults.ratedHighSideKPa, defaults.ratedLowSideKPa) : null;
   const ratedText = rated ?? (ratedDefault !== null ? shown(ratedDefault) : "");
   const allowedText = allowed ?? (defaults ? shown(defaults.allowedDropKPa) : "");
+  // A message goes as soon as its field is changed.
+  const [errors, setErrors] = useFieldErrors({ section, ratedKPa: ratedText, startGaugeKPa: start, startTempC: startTemp, endGaugeKPa: end, endTempC: endTemp, holdMinutes: hold, allowedDropKPa: allowedText, note });
   const pressure = (text: string) =>
     toConverted(text, (value) => gaugeFromDisplay(value, units.pressure, atmosphericKPa));
 

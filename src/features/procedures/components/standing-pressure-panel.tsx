@@ -10,6 +10,7 @@ import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateStandingPressureCheck, useStandingPressureChecks } from "@/lib/api/procedures.ts";
 import { GAUGE_LABEL, gaugeFromDisplay, TEMPERATURE_LABEL, temperatureFromDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted } from "../utils/parse-number.ts";
 import { recordTime } from "../utils/record-time.ts";
 import { ProcedureLayout } from "./procedure-layout.tsx";
@@ -41,8 +42,9 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
   const [temperature, setTemperature] = useState("");
   const [circuit, setCircuit] = useState(String(circuits[0] ?? 1));
   const [note, setNote] = useState("");
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
+  // A message goes as soon as its field is changed.
+  const [errors, setErrors] = useFieldErrors({ standingGaugeKPa: standing, equalisedTempC: temperature, circuit, note });
 
   const body = {
     standingGaugeKPa: toConverted(standing, (value) => gaugeFromDisplay(value, units.pressure, atmosphericKPa)),

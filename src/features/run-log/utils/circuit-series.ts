@@ -1,4 +1,4 @@
-import { assessTrend } from "@shared/engine/index.ts";
+import { assessTrend, lastAtEachInstant } from "@shared/engine/index.ts";
 import type { TrendResult } from "@shared/schemas/diagnosis.ts";
 import type { Adjustment, Reading } from "@shared/schemas/visits.ts";
 
@@ -36,8 +36,7 @@ export function circuitSeries(readings: readonly Reading[], adjustments: readonl
     .filter((adjustment) => adjustment.voided === null && (adjustment.circuit === null || adjustment.circuit === circuit))
     .map((adjustment) => ({ ...adjustment, x: minutesBetween(origin, adjustment.at) }));
 
-  // assessTrend needs strictly increasing times; readings saved in the same millisecond keep the last.
-  const distinct = own.filter((reading, index) => index === own.length - 1 || Date.parse(own[index + 1]!.takenAt) > Date.parse(reading.takenAt));
+  const distinct = lastAtEachInstant(own, (reading) => Date.parse(reading.takenAt));
   const trend =
     distinct.length === 0
       ? null
