@@ -111,6 +111,7 @@ export function RecordedEntries({
             {canVoid && !voided && (
               <VoidAction
                 what={what}
+                alsoVoids={entry.kind === "adjustment" && entry.adjustment.movementId ? "Its line in the refrigerant register is voided with it, with the same reason." : undefined}
                 onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: entry.kind, recordId: id, reason })}
               />
             )}
