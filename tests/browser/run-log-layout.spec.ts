@@ -100,6 +100,11 @@ test.describe("run log layout", () => {
       expect(findingBox.y).toBeLessThan(768);
       // The width is used: the two columns together span most of the content area (rail 224 px).
       expect(findingBox.x + findingBox.width - formBox.x).toBeGreaterThan(600);
+      // Beside the finding the fields column is narrow: every typed value still shows whole.
+      const clipped = await form.locator("input[data-reading-field]").evaluateAll((inputs) =>
+        (inputs as HTMLInputElement[]).filter((input) => input.value !== "" && input.scrollWidth > input.clientWidth).map((input) => input.name),
+      );
+      expect(clipped).toEqual([]);
 
       for (const label of ["Line temperature for subcooling", "Running since start or last change"]) {
         await page.getByLabel(label, { exact: true }).focus();

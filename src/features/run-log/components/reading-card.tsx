@@ -17,7 +17,7 @@ interface ReadingCardProps {
 export function ReadingCard({ step, title, where, side, children, derived }: ReadingCardProps) {
   const headingId = useId();
   return (
-    <section aria-labelledby={headingId} className="rounded-card border-2 border-rule bg-surface">
+    <section aria-labelledby={headingId} className="@container rounded-card border-2 border-rule bg-surface">
       <header className="flex flex-wrap items-baseline gap-x-3 gap-y-1 border-b-2 border-rule px-4 py-2">
         <span aria-hidden className="num flex size-7 items-center justify-center rounded-full border-2 border-ink text-sm font-semibold">
           {step}
@@ -32,7 +32,9 @@ export function ReadingCard({ step, title, where, side, children, derived }: Rea
           </span>
         )}
       </header>
-      <div className="grid gap-3 p-4 sm:grid-cols-2">{children}</div>
+      {/* Two fields a row only when the card itself is wide enough for a gauge pressure with its
+          unit and sign button: beside the tablet's finding column the card is narrow. */}
+      <div className="grid gap-3 p-4 @lg:grid-cols-2">{children}</div>
       {/* Marked so the run log can keep this line above its save bar while a field is typed. */}
       {derived && (
         <div data-derived className="border-t-2 border-dashed border-rule px-4 py-3">

@@ -98,10 +98,10 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
       >
         {input("suctionPressureKPa", "Suction pressure", p)}
         {input("suctionLineTempC", "Suction line temperature", t)}
-        <div className="sm:col-span-2">
+        <div className="@lg:col-span-2">
           <CautionLine topic="pressure" point={1} />
         </div>
-        <div className="sm:col-span-2">
+        <div className="@lg:col-span-2">
           <Segmented<SuctionLocationChoice>
             label="Where the suction temperature was taken"
             value={draft.suctionTempLocation}
@@ -140,7 +140,7 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
       >
         {input("dischargePressureKPa", "Discharge pressure (optional)", p)}
         {input("dischargeLineTempC", "Discharge line temperature", t, "Keep this in view: oil breaks down on an overheated discharge")}
-        <div className="sm:col-span-2">
+        <div className="@lg:col-span-2">
           <CautionLine topic="hot-surface" />
         </div>
       </ReadingCard>
@@ -165,7 +165,7 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
       >
         {input("liquidPressureKPa", "Liquid pressure", p)}
         {input("liquidLineTempC", "Line temperature for subcooling", t)}
-        <div className="sm:col-span-2">
+        <div className="@lg:col-span-2">
           <Segmented<LiquidTempLocation>
             label="Where the temperature was taken"
             value={draft.liquidTempLocation}
