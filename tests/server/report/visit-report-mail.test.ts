@@ -19,6 +19,7 @@ const visit = VisitSchema.parse({
   startedAt: "2026-12-02T03:05:00Z",
   readingCount: 0,
   technicians: [],
+  yourLastActivityAt: null,
   customerContactEmail: null,
   reviewNote: null,
   signedOffBy: { id: "0b6f6f3e-8a77-4d4b-9d5c-3f1f7a1a2b03", name: "Priya Raman" },
