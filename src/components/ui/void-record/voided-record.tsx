@@ -37,7 +37,8 @@ export function VoidedRecord({
   return (
     <div className={cn("space-y-1", className)}>
       <VoidNote voided={voided} />
-      <div className="text-muted line-through decoration-2 opacity-75" aria-label="Voided record">
+      {/* Struck through in the muted ink, not faded: a voided line must stay readable (WCAG AA contrast). */}
+      <div className="text-muted line-through decoration-2" aria-label="Voided record">
         {children}
       </div>
     </div>

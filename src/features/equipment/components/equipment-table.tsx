@@ -1,5 +1,4 @@
 import { createColumnHelper, useTable, type SortingState } from "@tanstack/react-table";
-import { Search } from "lucide-react";
 import { useDeferredValue, useId, useMemo, useState } from "react";
 import { Link } from "react-router-dom";
 import { listRefrigerants } from "@shared/engine/index.ts";
@@ -16,6 +15,7 @@ import {
   meteringSummary,
   totalFactoryChargeKg,
 } from "../utils/nameplate-text.ts";
+import { SearchInput } from "@/components/ui/search-input/search-input.tsx";
 
 /** One table row: the unit plus what the columns sort and search by. */
 export interface EquipmentRow {
@@ -151,18 +151,7 @@ export function EquipmentTable({ equipment }: { equipment: readonly Equipment[] 
           <label htmlFor={searchId} className="font-medium">
             Find a unit
           </label>
-          <div className="mt-1 flex min-h-14 items-center gap-2 rounded-card border-2 border-rule bg-surface px-3 focus-within:border-ink">
-            <Search aria-hidden className="size-5 text-muted" />
-            <input
-              id={searchId}
-              type="search"
-              value={query}
-              onChange={(event) => setQuery(event.target.value)}
-              placeholder="Name, site, R32, serial…"
-              className="w-full bg-transparent py-2 text-lg outline-none"
-              autoComplete="off"
-            />
-          </div>
+          <SearchInput id={searchId} value={query} onChange={setQuery} placeholder="Name, site, R32, serial…" />
         </div>
         <div>
           <label htmlFor={kindId} className="font-medium">

@@ -1,5 +1,4 @@
 import { createColumnHelper, useTable, type SortingState } from "@tanstack/react-table";
-import { Search } from "lucide-react";
 import { useDeferredValue, useId, useMemo, useState } from "react";
 import { Link } from "react-router-dom";
 import { visitReasonText, type VisitSummary } from "@shared/schemas/visits.ts";
@@ -7,6 +6,7 @@ import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { SortableTable, sortableTableFeatures } from "@/components/ui/data-table/sortable-table.tsx";
 import { paths } from "@/config/paths.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
+import { SearchInput } from "@/components/ui/search-input/search-input.tsx";
 
 interface JobRow extends VisitSummary {
   startedAtMs: number;
@@ -114,18 +114,7 @@ export function JobsTable({ visits }: { visits: readonly VisitSummary[] }) {
         <label htmlFor={searchId} className="font-medium">
           Find a visit
         </label>
-        <div className="mt-1 flex min-h-14 items-center gap-2 rounded-card border-2 border-rule bg-surface px-3 focus-within:border-ink">
-          <Search aria-hidden className="size-5 text-muted" />
-          <input
-            id={searchId}
-            type="search"
-            value={query}
-            onChange={(event) => setQuery(event.target.value)}
-            placeholder="Unit, site, reason, technician…"
-            className="w-full bg-transparent py-2 text-lg outline-none"
-            autoComplete="off"
-          />
-        </div>
+        <SearchInput id={searchId} value={query} onChange={setQuery} placeholder="Unit, site, reason, technician…" />
       </div>
       <p className="text-sm text-muted" aria-live="polite">
         {shown.length === rows.length

@@ -1,4 +1,4 @@
-import { Play, Search } from "lucide-react";
+import { Play } from "lucide-react";
 import { useDeferredValue, useId, useState } from "react";
 import { Link, useNavigate } from "react-router-dom";
 import type { Equipment } from "@shared/schemas/equipment.ts";
@@ -8,6 +8,7 @@ import { FormAlert } from "@/components/ui/field/field.tsx";
 import { paths } from "@/config/paths.ts";
 import { useEquipmentList } from "@/lib/api/equipment.ts";
 import { useCreateVisit } from "@/lib/api/visits.ts";
+import { SearchInput } from "@/components/ui/search-input/search-input.tsx";
 
 /** A phone shows about this many rows above the keyboard; more means the search needs another word. */
 const MAX_SHOWN = 5;
@@ -58,19 +59,7 @@ export function QuickStartVisit({
       <label htmlFor={searchId} className="mt-1 block text-muted">
         Find the unit by its name, site or customer
       </label>
-      <div className="mt-1 flex min-h-14 items-center gap-2 rounded-card border-2 border-rule bg-surface px-3 focus-within:border-ink">
-        <Search aria-hidden className="size-5 text-muted" />
-        <input
-          id={searchId}
-          type="search"
-          value={query}
-          onChange={(event) => setQuery(event.target.value)}
-          placeholder="e.g. rooftop, Wattle Lane"
-          className="w-full bg-transparent py-2 text-lg outline-none"
-          autoComplete="off"
-          enterKeyHint="search"
-        />
-      </div>
+      <SearchInput id={searchId} value={query} onChange={setQuery} placeholder="e.g. rooftop, Wattle Lane" />
       {equipment.isError && <FormAlert>{equipment.error.message}</FormAlert>}
       {error && (
         <div className="mt-2">

@@ -1,4 +1,3 @@
-import { Search } from "lucide-react";
 import { useDeferredValue, useId, useMemo, useState } from "react";
 import { Link } from "react-router-dom";
 import { listRefrigerants } from "@shared/engine/index.ts";
@@ -6,6 +5,7 @@ import { describeSafetyClass, safetyClasses } from "@shared/content/safety-class
 import { paths } from "@/config/paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
+import { SearchInput } from "@/components/ui/search-input/search-input.tsx";
 
 /** Matches "r32", "32", "R-32", "1234ze" against designations and names. */
 function normalise(text: string): string {
@@ -26,18 +26,7 @@ export function RefrigerantList() {
         <label htmlFor={searchId} className="font-medium">
           Find a refrigerant
         </label>
-        <div className="mt-1 flex min-h-14 items-center gap-2 rounded-card border-2 border-rule bg-surface px-3 focus-within:border-ink">
-          <Search aria-hidden className="size-5 text-muted" />
-          <input
-            id={searchId}
-            type="search"
-            value={query}
-            onChange={(event) => setQuery(event.target.value)}
-            placeholder="R32, 407C, propane…"
-            className="w-full bg-transparent py-2 text-xl outline-none"
-            autoComplete="off"
-          />
-        </div>
+        <SearchInput id={searchId} value={query} onChange={setQuery} placeholder="R32, 407C, propane…" large />
       </div>
       <p className="text-sm text-muted" aria-live="polite">
         {shown.length} of {refrigerants.length} refrigerants

@@ -155,54 +155,27 @@ export function TrendChart({ series, units, width, height = 320 }: TrendChartPro
           }}
         />
       )}
-      <Line
-        yAxisId="difference"
-        name={`Superheat (${k})`}
-        dataKey="superheat"
-        stroke="var(--color-low)"
-        strokeWidth={3}
-        dot={{ r: 3 }}
-        legendType="plainline"
-        isAnimationActive={false}
-        connectNulls
-      />
-      <Line
-        yAxisId="difference"
-        name={`Subcooling (${k})`}
-        dataKey="subcooling"
-        stroke="var(--color-high)"
-        strokeWidth={3}
-        strokeDasharray="8 4"
-        dot={{ r: 3 }}
-        legendType="plainline"
-        isAnimationActive={false}
-        connectNulls
-      />
       {/* Saturation lines last, so they are drawn over the thicker lines, in their own colours and patterns. */}
-      <Line
-        yAxisId="saturation"
-        name={`Evaporating (${t})`}
-        dataKey="evaporating"
-        stroke="var(--color-accent)"
-        strokeWidth={2}
-        strokeDasharray="12 4 2 4"
-        dot={false}
-        legendType="plainline"
-        isAnimationActive={false}
-        connectNulls
-      />
-      <Line
-        yAxisId="saturation"
-        name={`Condensing (${t})`}
-        dataKey="condensing"
-        stroke="var(--color-caution)"
-        strokeWidth={2}
-        strokeDasharray="2 3"
-        dot={false}
-        legendType="plainline"
-        isAnimationActive={false}
-        connectNulls
-      />
+      {[
+        { axis: "difference", name: `Superheat (${k})`, key: "superheat", colour: "var(--color-low)", width: 3, dash: undefined, dots: true },
+        { axis: "difference", name: `Subcooling (${k})`, key: "subcooling", colour: "var(--color-high)", width: 3, dash: "8 4", dots: true },
+        { axis: "saturation", name: `Evaporating (${t})`, key: "evaporating", colour: "var(--color-accent)", width: 2, dash: "12 4 2 4", dots: false },
+        { axis: "saturation", name: `Condensing (${t})`, key: "condensing", colour: "var(--color-caution)", width: 2, dash: "2 3", dots: false },
+      ].map((line) => (
+        <Line
+          key={line.key}
+          yAxisId={line.axis}
+          name={line.name}
+          dataKey={line.key}
+          stroke={line.colour}
+          strokeWidth={line.width}
+          strokeDasharray={line.dash}
+          dot={line.dots ? { r: 3 } : false}
+          legendType="plainline"
+          isAnimationActive={false}
+          connectNulls
+        />
+      ))}
     </LineChart>
   );
   return (
