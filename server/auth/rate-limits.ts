@@ -9,8 +9,8 @@ import { DatabaseRateLimitStore } from "./rate-limit-store.ts";
  * reset (mail bombing), sign-up and invitation links. The policy and its sources are stated in
  * docs/accounts.md ("Sign-in throttling"); in short, for sign-in:
  *
- * - Per client address, any accounts: 30 attempts per 15 minutes (one address trying many
- *   accounts, "password spraying").
+ * - Per client address, any accounts: 30 failures per 15 minutes (one address trying many
+ *   accounts, "password spraying"; a crew signing in from one office address is not refused).
  * - Per account and client address: 5 failures per 15 minutes. A burst of wrong passwords from
  *   one address refuses that address only; the owner, signing in from elsewhere, is not
  *   affected (OWASP Authentication Cheat Sheet, "Account Lockout": a lockout that anyone can
@@ -26,7 +26,7 @@ import { DatabaseRateLimitStore } from "./rate-limit-store.ts";
 export interface AuthLimits {
   /** Window of every count below except the account ceiling. */
   windowMs: number;
-  /** Sign-in attempts per client address in the window, whatever the account. */
+  /** Failed sign-ins per client address in the window, whatever the account. */
   signInPerIp: number;
   /** Failed sign-ins per account from one client address in the window. */
   signInFailuresPerAccountAndClient: number;
@@ -98,7 +98,8 @@ export function createAuthLimiters(db: Database, overrides: Partial<AuthLimits> 
   return {
     // In this order: a request refused by one throttle never reaches (or counts in) the next.
     signIn: [
-      limiter(db, { name: "sign-in:client", limit: limits.signInPerIp, windowMs, key: "client" }),
+      // Failures only: a depot's crew signs in from one address at the start of a shift.
+      limiter(db, { name: "sign-in:client", limit: limits.signInPerIp, windowMs, key: "client", onlyFailures: true }),
       limiter(db, { name: "sign-in:account-client", limit: limits.signInFailuresPerAccountAndClient, windowMs, key: "accountAndClient", onlyFailures: true }),
       limiter(db, { name: "sign-in:account", limit: limits.signInFailuresPerAccount, windowMs: limits.accountWindowMs, key: "account", onlyFailures: true }),
     ],

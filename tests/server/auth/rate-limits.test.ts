@@ -6,6 +6,7 @@ import { rateLimitCounters } from "@server/db/schema.ts";
 import { readEnv } from "@server/env.ts";
 import { createLogger } from "@server/logger.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
+import { DEMO_PASSWORD } from "@server/db/seed/demo-scenario.ts";
 import { BELLBIRD, seedBellbird } from "../../setup/demo-accounts.ts";
 
 const PASSWORD = "bellbird-demo-2026";
@@ -95,6 +96,20 @@ describe("sign-in and reset throttling", () => {
       }
       const blocked = await request(small.app).post("/api/auth/sign-in").send({ email: "user9@example.com", password: "whatever-it-is" });
       expect(blocked.status).toBe(429);
+    } finally {
+      await small.close();
+    }
+  });
+
+  it("lets a crew sign in from one address: successes do not count against the address", async () => {
+    const small = await createTestApp({ authLimits: { signInPerIp: 3 } });
+    try {
+      await seedBellbird(small);
+      for (let attempt = 0; attempt < 5; attempt++) {
+        const email = [BELLBIRD.technician, BELLBIRD.senior, BELLBIRD.owner][attempt % 3];
+        const response = await request(small.app).post("/api/auth/sign-in").send({ email, password: DEMO_PASSWORD });
+        expect(response.status).toBe(200);
+      }
     } finally {
       await small.close();
     }
