@@ -6,73 +6,106 @@ import { signIn } from "./sign-in.ts";
  * reload, signing out asks first (and then discards them), and a save without a connection
  * says so at once and keeps the values and the time the reading was taken.
  */
-test.describe("values typed at the unit", () => {
-  test.use({ viewport: { width: 390, height: 844 } });
+for (const size of [
+  { name: "phone", width: 390, height: 844 },
+  { name: "tablet", width: 1024, height: 768 },
+]) {
+  test.describe(`values typed at the unit on a ${size.name} (${size.width}×${size.height})`, () => {
+    test.use({ viewport: { width: size.width, height: size.height } });
 
-  test("survive a section switch and a reload; sign-out asks before discarding them", async ({ page }) => {
-    await page.goto("/equipment");
-    await signIn(page, "tech@bellbird.example");
-    await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
-    await page.getByLabel("Reason for the visit").fill("Drafts at the unit");
-    await page.getByRole("button", { name: "Start the visit" }).click();
-    await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+    test("survive a section switch, a circuit switch and a reload; sign-out asks before discarding them", async ({
+      page,
+    }) => {
+      await page.goto("/equipment");
+      await signIn(page, "tech@bellbird.example");
+      await page
+        .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+        .first()
+        .click();
+      await page.getByLabel("Reason for the visit").fill("Drafts at the unit");
+      await page.getByRole("button", { name: "Start the visit" }).click();
+      await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
 
-    await page.getByLabel("Suction pressure", { exact: true }).fill("431");
-    await page.getByLabel("Suction line temperature", { exact: true }).fill("12.5");
+      await page.getByLabel("Suction pressure", { exact: true }).fill("431");
+      await page.getByLabel("Suction line temperature", { exact: true }).fill("12.5");
 
-    await page.getByRole("radio", { name: "Electrical" }).click();
-    await page.getByRole("radio", { name: "Run log" }).click();
-    await expect(page.getByLabel("Suction pressure", { exact: true })).toHaveValue("431");
+      await page.getByRole("radio", { name: "Electrical" }).click();
+      await page.getByRole("radio", { name: "Run log" }).click();
+      await expect(page.getByLabel("Suction pressure", { exact: true })).toHaveValue("431");
 
-    await page.reload();
-    await expect(page.getByLabel("Suction line temperature", { exact: true })).toHaveValue("12.5");
-    await expect(page.getByText("Values typed earlier on this device are back — not saved yet")).toBeVisible();
+      // RTU-1 has two circuits: each keeps its own values through a switch and back.
+      const circuits = page.getByRole("radiogroup", { name: "Circuit" });
+      await circuits.getByRole("radio", { name: "Circuit 2" }).click();
+      await expect(page.getByRole("form", { name: "New reading, circuit 2" })).toBeVisible();
+      await page.getByLabel("Suction pressure", { exact: true }).fill("452");
+      await circuits.getByRole("radio", { name: "Circuit 1" }).click();
+      await expect(page.getByLabel("Suction pressure", { exact: true })).toHaveValue("431");
+      await circuits.getByRole("radio", { name: "Circuit 2" }).click();
+      await expect(page.getByLabel("Suction pressure", { exact: true })).toHaveValue("452");
+      await circuits.getByRole("radio", { name: "Circuit 1" }).click();
 
-    // Sign out asks; declining keeps the session and the values.
-    const asked: string[] = [];
-    page.once("dialog", (dialog) => {
-      asked.push(dialog.message());
-      void dialog.dismiss();
+      await page.reload();
+      await expect(page.getByLabel("Suction line temperature", { exact: true })).toHaveValue("12.5");
+      await expect(page.getByText("Values typed earlier on this device are back — not saved yet")).toBeVisible();
+
+      // Sign out asks; declining keeps the session and the values.
+      const asked: string[] = [];
+      page.once("dialog", (dialog) => {
+        asked.push(dialog.message());
+        void dialog.dismiss();
+      });
+      await page.getByRole("button", { name: "Sign out" }).click();
+      await expect.poll(() => asked.length).toBe(1);
+      expect(asked[0]).toMatch(/not saved yet/);
+      await expect(page.getByLabel("Suction pressure", { exact: true })).toHaveValue("431");
+
+      // Accepting signs out and discards them: the next person on this device does not see them.
+      page.once("dialog", (dialog) => void dialog.accept());
+      await page.getByRole("button", { name: "Sign out" }).click();
+      await expect(page.getByRole("heading", { name: "Sign in" })).toBeVisible();
+      expect(
+        await page.evaluate(() => Object.keys(localStorage).filter((key) => key.startsWith("satura:draft:"))),
+      ).toEqual([]);
     });
-    await page.getByRole("button", { name: "Sign out" }).click();
-    await expect.poll(() => asked.length).toBe(1);
-    expect(asked[0]).toMatch(/not saved yet/);
-    await expect(page.getByLabel("Suction pressure", { exact: true })).toHaveValue("431");
 
-    // Accepting signs out and discards them: the next person on this device does not see them.
-    page.once("dialog", (dialog) => void dialog.accept());
-    await page.getByRole("button", { name: "Sign out" }).click();
-    await expect(page.getByRole("heading", { name: "Sign in" })).toBeVisible();
-    expect(await page.evaluate(() => Object.keys(localStorage).filter((key) => key.startsWith("satura:draft:")))).toEqual([]);
+    test("a save without a connection fails at once and keeps the values and the time taken", async ({
+      page,
+      context,
+    }) => {
+      await page.goto("/equipment");
+      await signIn(page, "tech@bellbird.example");
+      await page
+        .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+        .first()
+        .click();
+      await page.getByLabel("Reason for the visit").fill("Save without signal");
+      await page.getByRole("button", { name: "Start the visit" }).click();
+      await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+
+      // R407C: 465 kPa gauge ≈ 6 °C dew, 1736 kPa ≈ 42 °C bubble at the site (see run-log.spec.ts).
+      await page.getByLabel("Suction pressure", { exact: true }).fill("465");
+      await page.getByLabel("Suction line temperature", { exact: true }).fill("12");
+      await page.getByLabel("Liquid pressure", { exact: true }).fill("1736");
+      await page.getByLabel("Line temperature for subcooling", { exact: true }).fill("37");
+      // While the last field is typed the verdict is in view: the live line on a phone, the finding beside the fields on a tablet.
+      await expect(page.getByTestId(size.width < 1024 ? "live-line" : "charge-state")).toBeInViewport();
+
+      await context.setOffline(true);
+      const tried = Date.now();
+      await page.getByRole("button", { name: "Save reading" }).click();
+      await expect(page.getByText(/No connection/).first()).toBeVisible({ timeout: 3000 });
+      await expect(page.getByLabel("Liquid pressure", { exact: true })).toHaveValue("1736");
+
+      // Back online a while later: the reading is stored with the time of the first try.
+      await page.waitForTimeout(2500);
+      await context.setOffline(false);
+      const saved = page.waitForResponse(
+        (response) => response.url().includes("/readings") && response.request().method() === "POST",
+      );
+      await page.getByRole("button", { name: "Save reading" }).click();
+      const body = (await (await saved).json()) as { reading: { takenAt: string } };
+      expect(Date.parse(body.reading.takenAt)).toBeLessThan(tried + 2000);
+      await expect(page.getByText(/Saved at/)).toBeVisible();
+    });
   });
-
-  test("a save without a connection fails at once and keeps the values and the time taken", async ({ page, context }) => {
-    await page.goto("/equipment");
-    await signIn(page, "tech@bellbird.example");
-    await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
-    await page.getByLabel("Reason for the visit").fill("Save without signal");
-    await page.getByRole("button", { name: "Start the visit" }).click();
-    await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
-
-    // R407C: 465 kPa gauge ≈ 6 °C dew, 1736 kPa ≈ 42 °C bubble at the site (see run-log.spec.ts).
-    await page.getByLabel("Suction pressure", { exact: true }).fill("465");
-    await page.getByLabel("Suction line temperature", { exact: true }).fill("12");
-    await page.getByLabel("Liquid pressure", { exact: true }).fill("1736");
-    await page.getByLabel("Line temperature for subcooling", { exact: true }).fill("37");
-
-    await context.setOffline(true);
-    const tried = Date.now();
-    await page.getByRole("button", { name: "Save reading" }).click();
-    await expect(page.getByText(/No connection/).first()).toBeVisible({ timeout: 3000 });
-    await expect(page.getByLabel("Liquid pressure", { exact: true })).toHaveValue("1736");
-
-    // Back online a while later: the reading is stored with the time of the first try.
-    await page.waitForTimeout(2500);
-    await context.setOffline(false);
-    const saved = page.waitForResponse((response) => response.url().includes("/readings") && response.request().method() === "POST");
-    await page.getByRole("button", { name: "Save reading" }).click();
-    const body = (await (await saved).json()) as { reading: { takenAt: string } };
-    expect(Date.parse(body.reading.takenAt)).toBeLessThan(tried + 2000);
-    await expect(page.getByText(/Saved at/)).toBeVisible();
-  });
-});
+}
