@@ -1,4 +1,5 @@
 import { useId } from "react";
+import { NumberInput } from "@/components/ui/field/number-input.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { TEMPERATURE_LABEL, type TemperatureDisplayUnit } from "@/lib/units/display-units.ts";
 
@@ -27,30 +28,32 @@ export function TableControls({ range, onChange, temperatureUnit, error }: Table
       <legend className="sr-only">Table range and step</legend>
       <div>
         <label htmlFor={`${id}-from`} className="block text-sm font-medium">
-          From ({unit})
+          From
         </label>
-        <input
+        {/* Tables start below zero (−40 °C): the field carries its own ± for keypads without a minus. */}
+        <NumberInput
           id={`${id}-from`}
-          inputMode="decimal"
+          unit={unit}
           value={range.fromText}
           onChange={(event) => onChange({ ...range, fromText: event.target.value })}
-          aria-invalid={error ? true : undefined}
+          invalid={Boolean(error)}
           aria-describedby={error ? `${id}-error` : undefined}
-          className="num min-h-touch w-28 rounded-card border-2 border-rule bg-surface px-3 text-lg"
+          className="mt-1 w-44"
         />
       </div>
       <div>
         <label htmlFor={`${id}-to`} className="block text-sm font-medium">
-          To ({unit})
+          To
         </label>
-        <input
+        {/* Tables start below zero (−40 °C): the field carries its own ± for keypads without a minus. */}
+        <NumberInput
           id={`${id}-to`}
-          inputMode="decimal"
+          unit={unit}
           value={range.toText}
           onChange={(event) => onChange({ ...range, toText: event.target.value })}
-          aria-invalid={error ? true : undefined}
+          invalid={Boolean(error)}
           aria-describedby={error ? `${id}-error` : undefined}
-          className="num min-h-touch w-28 rounded-card border-2 border-rule bg-surface px-3 text-lg"
+          className="mt-1 w-44"
         />
       </div>
       <div>
