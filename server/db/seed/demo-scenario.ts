@@ -112,8 +112,7 @@ export const demoEquipment: DemoEquipment[] = [
 ];
 
 /**
- * Bellbird's cylinders (invented): R407C for the rooftop unit and R32 for the wall split, whose
- * open check may need a top-up. The recovery cylinder already
+ * Bellbird's R407C cylinders for the rooftop unit (invented). The recovery cylinder already
  * holds refrigerant from an earlier job, entered as its contents on the day it was added;
  * the register itself starts empty.
  */
@@ -128,5 +127,4 @@ export const demoCylinders: {
 }[] = [
   { label: "BM-REC-07", serial: "RC12-30871", kind: "recovery", refrigerant: "R407C", waterCapacityKg: 12, tareKg: 7.4, initialContentsKg: 5.2 },
   { label: "BM-407C-N3", serial: "NX10-55214", kind: "new", refrigerant: "R407C", waterCapacityKg: 15, tareKg: 6.1, initialContentsKg: 10 },
-  { label: "BM-R32-N1", serial: "NX08-61093", kind: "new", refrigerant: "R32", waterCapacityKg: 10, tareKg: 5.3, initialContentsKg: 7 },
 ];
