@@ -1,7 +1,7 @@
 import type { LucideIcon } from "lucide-react";
 import { useId, useRef, useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button/button.tsx";
-import { FormAlert } from "@/components/ui/field/field.tsx";
+import { ModalForm } from "@/components/ui/modal-form/modal-form.tsx";
 
 interface ReasonDialogProps {
   /** The button that opens the dialog. */
@@ -56,49 +56,36 @@ export function ReasonDialog({ trigger, title, explanation, maxLength, confirmLa
       <Button variant={trigger.variant} onClick={open} disabled={trigger.disabled} aria-label={trigger.ariaLabel}>
         <Icon aria-hidden className="size-5" /> {trigger.label}
       </Button>
-      <dialog
-        ref={dialog}
-        aria-labelledby={`${id}-title`}
-        className="m-auto w-[min(32rem,calc(100vw-2rem))] rounded-card border-2 border-ink bg-surface p-4 text-ink backdrop:bg-black/40"
+      <ModalForm
+        dialogRef={dialog}
+        title={title}
+        explanation={explanation}
+        error={error}
+        pending={pending}
+        submit={
+          <>
+            <Icon aria-hidden className="size-5" /> {pending ? pendingLabel : confirmLabel}
+          </>
+        }
+        submitVariant="danger"
+        onSubmit={() => void confirm()}
       >
-        <form
-          method="dialog"
-          className="space-y-3"
-          onSubmit={(event) => {
-            event.preventDefault();
-            void confirm();
-          }}
-        >
-          <h2 id={`${id}-title`} className="text-lg font-semibold">
-            {title}
-          </h2>
-          <p className="text-sm">{explanation}</p>
-          <div className="space-y-1">
-            <label htmlFor={`${id}-reason`} className="block font-medium">
-              Reason (required)
-            </label>
-            <textarea
-              id={`${id}-reason`}
-              rows={3}
-              aria-required="true"
-              maxLength={maxLength}
-              value={reason}
-              onChange={(event) => setReason(event.target.value)}
-              aria-invalid={error ? true : undefined}
-              className="block w-full rounded-card border-2 border-rule bg-surface p-3"
-            />
-          </div>
-          {error && <FormAlert>{error}</FormAlert>}
-          <div className="flex flex-wrap justify-end gap-2">
-            <Button variant="secondary" onClick={() => dialog.current?.close()} disabled={pending}>
-              Cancel
-            </Button>
-            <Button type="submit" variant="danger" disabled={pending}>
-              <Icon aria-hidden className="size-5" /> {pending ? pendingLabel : confirmLabel}
-            </Button>
-          </div>
-        </form>
-      </dialog>
+        <div className="space-y-1">
+          <label htmlFor={`${id}-reason`} className="block font-medium">
+            Reason (required)
+          </label>
+          <textarea
+            id={`${id}-reason`}
+            rows={3}
+            aria-required="true"
+            maxLength={maxLength}
+            value={reason}
+            onChange={(event) => setReason(event.target.value)}
+            aria-invalid={error ? true : undefined}
+            className="block w-full rounded-card border-2 border-rule bg-surface p-3"
+          />
+        </div>
+      </ModalForm>
     </>
   );
 }

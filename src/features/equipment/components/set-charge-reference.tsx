@@ -4,6 +4,7 @@ import { useId, useRef, useState } from "react";
 import { ChargeReferenceSetSchema, MAX_CLEAR_REASON_LENGTH } from "@shared/schemas/charge-references.ts";
 import type { VisitSummary } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
+import { ModalForm } from "@/components/ui/modal-form/modal-form.tsx";
 import { FormAlert, SelectField } from "@/components/ui/field/field.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useSetChargeReference } from "@/lib/api/charge-references.ts";
@@ -64,80 +65,63 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
       <Button variant="secondary" onClick={open}>
         <Crosshair aria-hidden className="size-5" /> Set from a reading…
       </Button>
-      <dialog
-        ref={dialog}
-        aria-labelledby={`${id}-title`}
-        className="m-auto w-[min(32rem,calc(100vw-2rem))] rounded-card border-2 border-ink bg-surface p-4 text-ink backdrop:bg-black/40"
+      <ModalForm
+        dialogRef={dialog}
+        title={<>Set circuit {circuit}&rsquo;s reference point</>}
+        explanation="Choose a settled reading taken at the correct charge (after a weigh-in of the nameplate charge). Later charge estimates on this circuit are measured from it; the current reference point stays in the history."
+        error={error}
+        pending={set.isPending}
+        submit={
+          <>
+            <Crosshair aria-hidden className="size-5" /> {set.isPending ? "Setting…" : "Set the reference point"}
+          </>
+        }
+        onSubmit={() => void confirm()}
       >
-        <form
-          method="dialog"
-          className="space-y-3"
-          onSubmit={(event) => {
-            event.preventDefault();
-            void confirm();
+        <SelectField
+          label="Visit"
+          value={visitId}
+          onChange={(event) => {
+            setVisitId(event.target.value);
+            setReadingId("");
           }}
         >
-          <h2 id={`${id}-title`} className="text-lg font-semibold">
-            Set circuit {circuit}&rsquo;s reference point
-          </h2>
-          <p className="text-sm">
-            Choose a settled reading taken at the correct charge (after a weigh-in of the nameplate charge). Later charge estimates on this circuit are measured
-            from it; the current reference point stays in the history.
-          </p>
-          <SelectField
-            label="Visit"
-            value={visitId}
-            onChange={(event) => {
-              setVisitId(event.target.value);
-              setReadingId("");
-            }}
-          >
-            <option value="">Choose a visit…</option>
-            {withReadings.map((candidate) => (
-              <option key={candidate.id} value={candidate.id}>
-                {formatDateTime(candidate.startedAt)} — {candidate.reason}
-              </option>
-            ))}
-          </SelectField>
-          {visitId !== "" && visit.isPending && <p aria-busy="true">Loading the visit&rsquo;s readings…</p>}
-          {visit.isError && <FormAlert>The visit did not load: {visit.error.message}</FormAlert>}
-          {visit.isSuccess &&
-            (readings.length === 0 ? (
-              <p className="text-muted">No standing reading of circuit {circuit} on this visit.</p>
-            ) : (
-              <SelectField label="Reading" value={readingId} onChange={(event) => setReadingId(event.target.value)}>
-                <option value="">Choose a reading…</option>
-                {readings.map((reading) => (
-                  <option key={reading.id} value={reading.id}>
-                    {formatDateTime(reading.takenAt)} · superheat {difference(reading.result.superheatK)} · subcooling {difference(reading.result.subcoolingK)}
-                  </option>
-                ))}
-              </SelectField>
-            ))}
-          <div className="space-y-1">
-            <label htmlFor={`${id}-note`} className="block font-medium">
-              Note (optional)
-            </label>
-            <textarea
-              id={`${id}-note`}
-              rows={2}
-              maxLength={MAX_CLEAR_REASON_LENGTH}
-              value={note}
-              onChange={(event) => setNote(event.target.value)}
-              className="block w-full rounded-card border-2 border-rule bg-surface p-3"
-            />
-          </div>
-          {error && <FormAlert>{error}</FormAlert>}
-          <div className="flex flex-wrap justify-end gap-2">
-            <Button variant="secondary" onClick={() => dialog.current?.close()} disabled={set.isPending}>
-              Cancel
-            </Button>
-            <Button type="submit" disabled={set.isPending}>
-              <Crosshair aria-hidden className="size-5" /> {set.isPending ? "Setting…" : "Set the reference point"}
-            </Button>
-          </div>
-        </form>
-      </dialog>
+          <option value="">Choose a visit…</option>
+          {withReadings.map((candidate) => (
+            <option key={candidate.id} value={candidate.id}>
+              {formatDateTime(candidate.startedAt)} — {candidate.reason}
+            </option>
+          ))}
+        </SelectField>
+        {visitId !== "" && visit.isPending && <p aria-busy="true">Loading the visit&rsquo;s readings…</p>}
+        {visit.isError && <FormAlert>The visit did not load: {visit.error.message}</FormAlert>}
+        {visit.isSuccess &&
+          (readings.length === 0 ? (
+            <p className="text-muted">No standing reading of circuit {circuit} on this visit.</p>
+          ) : (
+            <SelectField label="Reading" value={readingId} onChange={(event) => setReadingId(event.target.value)}>
+              <option value="">Choose a reading…</option>
+              {readings.map((reading) => (
+                <option key={reading.id} value={reading.id}>
+                  {formatDateTime(reading.takenAt)} · superheat {difference(reading.result.superheatK)} · subcooling {difference(reading.result.subcoolingK)}
+                </option>
+              ))}
+            </SelectField>
+          ))}
+        <div className="space-y-1">
+          <label htmlFor={`${id}-note`} className="block font-medium">
+            Note (optional)
+          </label>
+          <textarea
+            id={`${id}-note`}
+            rows={2}
+            maxLength={MAX_CLEAR_REASON_LENGTH}
+            value={note}
+            onChange={(event) => setNote(event.target.value)}
+            className="block w-full rounded-card border-2 border-rule bg-surface p-3"
+          />
+        </div>
+      </ModalForm>
     </>
   );
 }
