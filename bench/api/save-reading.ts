@@ -6,11 +6,12 @@
  * does). Prints p50/p95/p99 and requests per second at 1, 10 and 50 connections. Target: p95
  * under 50 ms at 50 connections. Figures only; never part of the tests.
  *
- * Run on its own: `npx tsx bench/api/save-reading.ts [seconds per level]`, or call
+ * Run on its own: `npx tsx bench/api/save-reading.ts [seconds per level] [levels, e.g. 1,10,50]`, or call
  * `benchSaveReading()` from the API bench harness.
  */
 import { Agent, createServer, request } from "node:http";
 import type { AddressInfo } from "node:net";
+import { cpus, loadavg } from "node:os";
 import { pathToFileURL } from "node:url";
 import { createApp } from "../../server/app.ts";
 import { openDatabase } from "../../server/db/client.ts";
@@ -34,6 +35,11 @@ export interface SaveReadingLevel {
   p95Ms: number;
   p99Ms: number;
   maxMs: number;
+  /**
+   * Process CPU (server and this client together) per request: steadier than the latencies on a
+   * shared machine, where they mostly measure the other jobs.
+   */
+  cpuMsPerRequest: number;
 }
 
 export interface SaveReadingOptions {
@@ -91,14 +97,33 @@ interface Answer {
   headers: Record<string, string | string[] | undefined>;
 }
 
-function send(agent: Agent, base: URL, method: string, path: string, headers: Record<string, string>, body?: string): Promise<Answer> {
+function send(
+  agent: Agent,
+  base: URL,
+  method: string,
+  path: string,
+  headers: Record<string, string>,
+  body?: string,
+): Promise<Answer> {
   return new Promise((resolve, reject) => {
     const req = request(
-      { agent, host: base.hostname, port: base.port, method, path, headers: { ...headers, ...(body ? { "content-type": "application/json", "content-length": String(Buffer.byteLength(body)) } : {}) } },
+      {
+        agent,
+        host: base.hostname,
+        port: base.port,
+        method,
+        path,
+        headers: {
+          ...headers,
+          ...(body ? { "content-type": "application/json", "content-length": String(Buffer.byteLength(body)) } : {}),
+        },
+      },
       (res) => {
         const chunks: Buffer[] = [];
         res.on("data", (chunk: Buffer) => chunks.push(chunk));
-        res.on("end", () => resolve({ status: res.statusCode ?? 0, body: Buffer.concat(chunks).toString("utf8"), headers: res.headers }));
+        res.on("end", () =>
+          resolve({ status: res.statusCode ?? 0, body: Buffer.concat(chunks).toString("utf8"), headers: res.headers }),
+        );
         res.on("error", reject);
       },
     );
@@ -107,17 +132,25 @@ function send(agent: Agent, base: URL, method: string, path: string, headers: Re
   });
 }
 
-const percentile = (sorted: number[], fraction: number) => sorted[Math.min(sorted.length - 1, Math.ceil(fraction * sorted.length) - 1)] ?? NaN;
+const percentile = (sorted: number[], fraction: number) =>
+  sorted[Math.min(sorted.length - 1, Math.ceil(fraction * sorted.length) - 1)] ?? NaN;
 
 /**
  * `connections` closed loops for `seconds`, each on its own keep-alive socket, spread over the
  * posters; every answer's time from request to its last byte.
  */
-async function closedLoop(base: URL, posters: Poster[], connections: number, seconds: number, sequence: { next: number }): Promise<SaveReadingLevel> {
+async function closedLoop(
+  base: URL,
+  posters: Poster[],
+  connections: number,
+  seconds: number,
+  sequence: { next: number },
+): Promise<SaveReadingLevel> {
   const latencies: number[] = [];
   let failures = 0;
   const until = performance.now() + seconds * 1000;
   const started = performance.now();
+  const cpu = process.cpuUsage();
   await Promise.all(
     Array.from({ length: connections }, async (_, index) => {
       const agent = new Agent({ keepAlive: true, maxSockets: 1 });
@@ -125,7 +158,14 @@ async function closedLoop(base: URL, posters: Poster[], connections: number, sec
       while (performance.now() < until) {
         const body = readingBody(poster, sequence.next++);
         const start = performance.now();
-        const answer = await send(agent, base, "POST", poster.path, { cookie: poster.cookie, origin: base.origin }, body);
+        const answer = await send(
+          agent,
+          base,
+          "POST",
+          poster.path,
+          { cookie: poster.cookie, origin: base.origin },
+          body,
+        );
         latencies.push(performance.now() - start);
         if (answer.status !== 201) {
           failures++;
@@ -136,6 +176,7 @@ async function closedLoop(base: URL, posters: Poster[], connections: number, sec
     }),
   );
   const elapsed = (performance.now() - started) / 1000;
+  const used = process.cpuUsage(cpu);
   latencies.sort((a, b) => a - b);
   return {
     connections,
@@ -146,11 +187,23 @@ async function closedLoop(base: URL, posters: Poster[], connections: number, sec
     p95Ms: percentile(latencies, 0.95),
     p99Ms: percentile(latencies, 0.99),
     maxMs: latencies.at(-1) ?? NaN,
+    cpuMsPerRequest: (used.user + used.system) / 1000 / latencies.length,
   };
 }
 
-export async function benchSaveReading({ connectionLevels = [1, 10, 50], seconds = 10, print = true, onLevelStart }: SaveReadingOptions = {}): Promise<SaveReadingLevel[]> {
-  const env = readEnv({ NODE_ENV: "test", DATA_DIR: "memory://", LOG_LEVEL: "silent", DEMO_DATA: "false", APP_URL: "http://127.0.0.1" });
+export async function benchSaveReading({
+  connectionLevels = [1, 10, 50],
+  seconds = 10,
+  print = true,
+  onLevelStart,
+}: SaveReadingOptions = {}): Promise<SaveReadingLevel[]> {
+  const env = readEnv({
+    NODE_ENV: "test",
+    DATA_DIR: "memory://",
+    LOG_LEVEL: "silent",
+    DEMO_DATA: "false",
+    APP_URL: "http://127.0.0.1",
+  });
   const database = await openDatabase(env.DATA_DIR);
   await seedDemoData(database.db);
   const logger = createLogger(env);
@@ -164,22 +217,48 @@ export async function benchSaveReading({ connectionLevels = [1, 10, 50], seconds
     // Each person signs in once (a correct password never counts towards the sign-in throttle).
     const cookies: string[] = [];
     for (const email of PEOPLE) {
-      const answer = await send(setupAgent, base, "POST", "/api/auth/sign-in", { origin: base.origin }, JSON.stringify({ email, password: PASSWORD }));
+      const answer = await send(
+        setupAgent,
+        base,
+        "POST",
+        "/api/auth/sign-in",
+        { origin: base.origin },
+        JSON.stringify({ email, password: PASSWORD }),
+      );
       if (answer.status !== 200) throw new Error(`sign-in as ${email}: ${answer.status} ${answer.body}`);
       const setCookie = answer.headers["set-cookie"];
-      cookies.push((Array.isArray(setCookie) ? setCookie : [setCookie ?? ""]).map((header) => header.split(";")[0]).join("; "));
+      cookies.push(
+        (Array.isArray(setCookie) ? setCookie : [setCookie ?? ""]).map((header) => header.split(";")[0]).join("; "),
+      );
     }
-    const units = (JSON.parse((await send(setupAgent, base, "GET", "/api/equipment", { cookie: cookies[0]! })).body) as { equipment: Unit[] }).equipment;
+    const units = (
+      JSON.parse((await send(setupAgent, base, "GET", "/api/equipment", { cookie: cookies[0]! })).body) as {
+        equipment: Unit[];
+      }
+    ).equipment;
 
     // Every person opens a visit on every unit and posts to each of its circuits: 3 people ×
     // (rooftop 2 circuits + split + cool room) = 12 run logs, as a busy morning would have.
     const posters: Poster[] = [];
     for (const cookie of cookies) {
       for (const unit of units) {
-        const answer = await send(setupAgent, base, "POST", "/api/visits", { cookie, origin: base.origin }, JSON.stringify({ equipmentId: unit.id, reason: "Load test: quarterly check" }));
+        const answer = await send(
+          setupAgent,
+          base,
+          "POST",
+          "/api/visits",
+          { cookie, origin: base.origin },
+          JSON.stringify({ equipmentId: unit.id, reason: "Load test: quarterly check" }),
+        );
         if (answer.status !== 201) throw new Error(`open a visit on ${unit.name}: ${answer.status} ${answer.body}`);
         const visitId = (JSON.parse(answer.body) as { visit: { id: string } }).visit.id;
-        for (const circuit of unit.circuits) posters.push({ cookie, path: `/api/visits/${visitId}/readings`, refrigerant: unit.refrigerant, circuit: circuit.number });
+        for (const circuit of unit.circuits)
+          posters.push({
+            cookie,
+            path: `/api/visits/${visitId}/readings`,
+            refrigerant: unit.refrigerant,
+            circuit: circuit.number,
+          });
       }
     }
 
@@ -192,12 +271,19 @@ export async function benchSaveReading({ connectionLevels = [1, 10, 50], seconds
     }
 
     if (print) {
-      console.log(`POST /api/visits/:id/readings — demo company (${PEOPLE.length} people, ${posters.length} run logs on ${units.length} units), in-memory PGlite, ${seconds} s per level`);
-      console.log("connections   requests  failures    req/s     p50      p95      p99      max");
+      console.log(
+        `POST /api/visits/:id/readings — demo company (${PEOPLE.length} people, ${posters.length} run logs on ${units.length} units), in-memory PGlite, ${seconds} s per level`,
+      );
+      console.log(
+        `load average ${loadavg()
+          .map((value) => value.toFixed(1))
+          .join(" ")} on ${cpus().length} cores`,
+      );
+      console.log("connections   requests  failures    req/s     p50      p95      p99      max   CPU/req");
       for (const level of levels) {
         const ms = (value: number) => `${value.toFixed(1).padStart(7)}`;
         console.log(
-          `${String(level.connections).padStart(11)} ${String(level.requests).padStart(10)} ${String(level.failures).padStart(9)} ${level.requestsPerSecond.toFixed(0).padStart(8)} ${ms(level.p50Ms)}  ${ms(level.p95Ms)}  ${ms(level.p99Ms)}  ${ms(level.maxMs)}`,
+          `${String(level.connections).padStart(11)} ${String(level.requests).padStart(10)} ${String(level.failures).padStart(9)} ${level.requestsPerSecond.toFixed(0).padStart(8)} ${ms(level.p50Ms)}  ${ms(level.p95Ms)}  ${ms(level.p99Ms)}  ${ms(level.maxMs)}  ${ms(level.cpuMsPerRequest)}`,
         );
       }
       console.log("(ms; target: p95 under 50 ms at 50 connections)");
@@ -213,5 +299,6 @@ export async function benchSaveReading({ connectionLevels = [1, 10, 50], seconds
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? "").href) {
   const seconds = Number(process.argv[2] ?? 10);
-  await benchSaveReading({ seconds });
+  const connectionLevels = process.argv[3]?.split(",").map(Number);
+  await benchSaveReading({ seconds, connectionLevels });
 }

@@ -22,7 +22,11 @@ export interface UnitForReadings {
 }
 
 /** The units by id; a unit of another organisation than those given is never read. */
-export async function unitsForReadings(db: Database, organisationIds: readonly string[], equipmentIds: readonly string[]): Promise<Map<string, UnitForReadings>> {
+export async function unitsForReadings(
+  db: Database,
+  organisationIds: readonly string[],
+  equipmentIds: readonly string[],
+): Promise<Map<string, UnitForReadings>> {
   const [rows, charges] = await Promise.all([
     db
       .select({
@@ -48,10 +52,16 @@ export async function unitsForReadings(db: Database, organisationIds: readonly s
         const nameplate = row.circuits.find((candidate) => candidate.number === circuit);
         if (!nameplate) return undefined;
         const key = circuitKey(row.id, circuit);
-        const charge = { chargeKg: nameplate.factoryChargeKg + (charges.lineAdjustmentKg.get(key) ?? 0), chargeReference: charges.references.get(key) ?? null };
+        const charge = {
+          chargeKg: nameplate.factoryChargeKg + (charges.lineAdjustmentKg.get(key) ?? 0),
+          chargeReference: charges.references.get(key) ?? null,
+        };
         return { unit, nameplate, site, charge };
       };
-      return [row.id, { id: row.id, organisationId: row.organisationId, name: row.name, circuits: row.circuits, context }];
+      return [
+        row.id,
+        { id: row.id, organisationId: row.organisationId, name: row.name, circuits: row.circuits, context },
+      ];
     }),
   );
 }

@@ -55,6 +55,7 @@ const MAX_BATCH = 200;
 export function createReadingSaver(db: Database): (save: ReadingSave) => Promise<Reading> {
   const queue: Pending[] = [];
   let writing = false;
+  let lastArrival = 0;
 
   async function drain(): Promise<void> {
     while (queue.length > 0) await writeBatch(db, queue.splice(0, MAX_BATCH));
@@ -63,7 +64,10 @@ export function createReadingSaver(db: Database): (save: ReadingSave) => Promise
 
   return (save) =>
     new Promise<Reading>((resolve, reject) => {
-      queue.push({ save, arrivedAt: new Date(), resolve, reject });
+      // A millisecond apart at least: readings without a time of their own, stored in one
+      // transaction, still sort in the order they arrived (the run log orders by time).
+      lastArrival = Math.max(Date.now(), lastArrival + 1);
+      queue.push({ save, arrivedAt: new Date(lastArrival), resolve, reject });
       if (writing) return;
       writing = true;
       // Saves that arrived in the same turn of the event loop share the first batch.
@@ -105,12 +109,12 @@ async function writeBatch(db: Database, batch: Pending[]): Promise<void> {
  */
 async function saveTogether(tx: Database, batch: Pending[]): Promise<Outcome[]> {
   const organisationIds = [...new Set(batch.map(({ save }) => save.organisationId))];
-  const locked = new Map((await lockVisits(tx, [...new Set(batch.map(({ save }) => save.visitId))])).map((visit) => [visit.id, visit]));
-  const units = await unitsForReadings(
-    tx,
-    organisationIds,
-    [...new Set([...locked.values()].map((visit) => visit.equipmentId))],
+  const locked = new Map(
+    (await lockVisits(tx, [...new Set(batch.map(({ save }) => save.visitId))])).map((visit) => [visit.id, visit]),
   );
+  const units = await unitsForReadings(tx, organisationIds, [
+    ...new Set([...locked.values()].map((visit) => visit.equipmentId)),
+  ]);
 
   const outcomes: Outcome[] = [];
   const rows: { index: number; row: NewReading }[] = [];
@@ -124,14 +128,27 @@ async function saveTogether(tx: Database, batch: Pending[]): Promise<Outcome[]> 
       const unit = units.get(visit.equipmentId);
       if (!unit || unit.organisationId !== save.organisationId) throw notFound("Equipment");
       const context = unit.context(circuit);
-      if (!context) throw new HttpError(400, "Some fields need attention", { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
+      if (!context)
+        throw new HttpError(400, "Some fields need attention", {
+          circuit: `${unit.name} has ${unit.circuits.length} circuit(s)`,
+        });
       const parsed = readingInput(measured, context);
       if (!parsed.success) throw parsed.error;
       const input: DiagnosisInput = parsed.data;
       const result = await diagnoseReading(input);
       rows.push({
         index,
-        row: { id: randomUUID(), organisationId: save.organisationId, visitId: visit.id, circuit, takenAt: takenAt ? new Date(takenAt) : arrivedAt, note: note || null, input, result, recordedBy: save.user.id },
+        row: {
+          id: randomUUID(),
+          organisationId: save.organisationId,
+          visitId: visit.id,
+          circuit,
+          takenAt: takenAt ? new Date(takenAt) : arrivedAt,
+          note: note || null,
+          input,
+          result,
+          recordedBy: save.user.id,
+        },
       });
       outcomes.push({ error: undefined }); // replaced by the reading once stored
     } catch (error) {
@@ -148,20 +165,25 @@ async function saveTogether(tx: Database, batch: Pending[]): Promise<Outcome[]> 
   );
   rows.forEach(({ index }, position) => (outcomes[index] = { reading: stored[position]! }));
   // Whoever records something on a visit is on its crew.
-  const crew = new Map(rows.map(({ row }) => [`${row.visitId}:${row.recordedBy}`, { visitId: row.visitId, userId: row.recordedBy }]));
+  const crew = new Map(
+    rows.map(({ row }) => [`${row.visitId}:${row.recordedBy}`, { visitId: row.visitId, userId: row.recordedBy }]),
+  );
   await joinCrews(tx, [...crew.values()]);
 
   // After a full weigh-in, the first settled window becomes the circuit's reference point; the
   // cheap check first, so the run log is read only where a weigh-in still awaits its reference.
-  const awaiting = await circuitsAwaitingWeighInReference(
-    tx,
-    organisationIds,
-    [...new Set(rows.map(({ row }) => row.visitId))],
-  );
+  const awaiting = await circuitsAwaitingWeighInReference(tx, organisationIds, [
+    ...new Set(rows.map(({ row }) => row.visitId)),
+  ]);
   for (const { visitId, circuit } of awaiting) {
     const last = rows.findLast(({ row }) => row.visitId === visitId && row.circuit === circuit)?.row;
     if (!last) continue;
-    await calibrateAfterWeighIn(tx, last.organisationId, { visitId, equipmentId: locked.get(visitId)!.equipmentId, circuit, actorId: last.recordedBy });
+    await calibrateAfterWeighIn(tx, last.organisationId, {
+      visitId,
+      equipmentId: locked.get(visitId)!.equipmentId,
+      circuit,
+      actorId: last.recordedBy,
+    });
   }
   return outcomes;
 }
