@@ -79,40 +79,6 @@ export async function circuitCharge(db: Database, organisationId: string, equipm
   return { chargeKg: nameplate.factoryChargeKg + lineAdjustmentKg, chargeReference };
 }
 
-/** A circuit's key in the maps below. */
-export const circuitKey = (equipmentId: string, circuit: number) => `${equipmentId}:${circuit}`;
-
-/**
- * The charge record of every circuit of several units in two queries (readings saved together):
- * by circuitKey, the latest standing weigh-in's line-set adjustment and the standing reference
- * point. A circuit missing from a map has none (adjustment 0, no reference), as in circuitCharge.
- */
-export async function chargeRecordsOfUnits(
-  db: Database,
-  organisationIds: readonly string[],
-  equipmentIds: readonly string[],
-): Promise<{ lineAdjustmentKg: Map<string, number>; references: Map<string, ChargeReference> }> {
-  const [declarations, standing] = await Promise.all([
-    db
-      .select({ equipmentId: visits.equipmentId, circuit: circuitCharges.circuit, lineAdjustmentKg: circuitCharges.lineAdjustmentKg })
-      .from(circuitCharges)
-      .innerJoin(visits, eq(visits.id, circuitCharges.visitId))
-      .where(and(inArray(circuitCharges.organisationId, [...organisationIds]), inArray(visits.equipmentId, [...equipmentIds]), isNull(circuitCharges.voidedAt)))
-      .orderBy(desc(circuitCharges.createdAt)),
-    db
-      .select()
-      .from(chargeReferences)
-      .where(and(inArray(chargeReferences.organisationId, [...organisationIds]), inArray(chargeReferences.equipmentId, [...equipmentIds]), isNull(chargeReferences.voidedAt))),
-  ]);
-  const lineAdjustmentKg = new Map<string, number>();
-  // Newest first: the first row of a circuit is its latest declaration.
-  for (const row of declarations) {
-    const key = circuitKey(row.equipmentId, row.circuit);
-    if (!lineAdjustmentKg.has(key)) lineAdjustmentKg.set(key, row.lineAdjustmentKg);
-  }
-  return { lineAdjustmentKg, references: new Map(standing.map((row) => [circuitKey(row.equipmentId, row.circuit), valuesOf(row)])) };
-}
-
 /**
  * Of the given visits, the circuits with a standing full weigh-in and no reference point from it
  * yet (standing or cleared): the only ones a new reading can calibrate (calibrateAfterWeighIn).

@@ -2,7 +2,7 @@ import { randomUUID } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ZodError } from "zod";
-import { readings, visits, visitTechnicians } from "@server/db/schema.ts";
+import { chargeReferences, circuitCharges, readings, visits, visitTechnicians } from "@server/db/schema.ts";
 import { demoSite } from "@server/db/seed/demo-scenario.ts";
 import { HttpError } from "@server/http/http-error.ts";
 import { createReadingSaver, type ReadingSave } from "@server/visits/save-readings.ts";
@@ -136,6 +136,63 @@ describe("readings saved together", () => {
     ]);
     expect(outcomes.map((outcome) => outcome.status)).toEqual(["fulfilled", "rejected", "fulfilled"]);
     expect((await storedOn(visitId)).map((row) => row.input.suctionLineTempC)).toEqual([12, 12.2]);
+  });
+
+  it("diagnoses against the circuit's latest standing weigh-in and its standing reference point, read for the whole batch at once", async () => {
+    const earlier = await openVisit();
+    const later = await openVisit();
+    const db = testApp.database.db;
+    const technicianId = ids[BELLBIRD.technician]!;
+    // Circuit 2: two weigh-ins (the later one stands with 0.3 kg of line set; a voided one is ignored).
+    await db.insert(circuitCharges).values([
+      {
+        organisationId,
+        visitId: earlier,
+        circuit: 2,
+        lineAdjustmentKg: 0.1,
+        recordedBy: technicianId,
+        createdAt: new Date(Date.now() - 60_000),
+      },
+      { organisationId, visitId: later, circuit: 2, lineAdjustmentKg: 0.3, recordedBy: technicianId },
+    ]);
+    await db
+      .insert(circuitCharges)
+      .values({
+        organisationId,
+        visitId: earlier,
+        circuit: 1,
+        lineAdjustmentKg: 9,
+        recordedBy: technicianId,
+        voidedAt: new Date(),
+        voidReason: "Typed wrong",
+      });
+    const reference = {
+      subcoolingK: 5.5,
+      superheatK: 6.5,
+      evaporatingTempC: 5.2,
+      condensingTempC: 42.3,
+      outdoorAirDryBulbC: 31,
+      returnAirDryBulbC: null,
+    };
+    await db
+      .insert(chargeReferences)
+      .values({
+        organisationId,
+        equipmentId: rooftopId,
+        circuit: 2,
+        ...reference,
+        source: "set-by-senior",
+        setBy: ids[BELLBIRD.senior]!,
+      });
+    const visitId = await openVisit();
+    const [one, two] = await Promise.all([
+      technician.post(`/api/visits/${visitId}/readings`).send(body(11, 1)),
+      technician.post(`/api/visits/${visitId}/readings`).send(body(11, 2)),
+    ]);
+    expect(one.body.reading.input.chargeKg).toBe(4.2);
+    expect(one.body.reading.input.chargeReference).toBeUndefined();
+    expect(two.body.reading.input.chargeKg).toBeCloseTo(4.5, 10);
+    expect(two.body.reading.input.chargeReference).toEqual(reference);
   });
 
   it("puts whoever saves on the visit's crew, once", async () => {
