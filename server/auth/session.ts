@@ -30,6 +30,7 @@ import type { Session, User } from "lucia";
 import type { Role } from "@shared/schemas/auth.ts";
 import { HttpError } from "../http/http-error.ts";
 import type { Auth } from "./lucia.ts";
+import { cachedSession, forgetSession, forgetUserSessions, rememberSession } from "./session-cache.ts";
 
 export interface AuthContext {
   user: User;
@@ -52,7 +53,9 @@ export function loadSession(auth: Auth): RequestHandler {
     try {
       const sessionId = auth.readSessionCookie(req.headers.cookie ?? "");
       if (!sessionId) return next();
-      const { session, user } = await auth.validateSession(sessionId);
+      // A session validated within the last minute and not changed since (server/auth/session-cache.ts).
+      const cached = cachedSession(sessionId);
+      const { session, user } = cached ?? (await auth.validateSession(sessionId));
       if (!session) {
         // Expired or signed out elsewhere: drop the dead cookie.
         res.append("Set-Cookie", auth.createBlankSessionCookie().serialize());
@@ -60,11 +63,13 @@ export function loadSession(auth: Auth): RequestHandler {
       }
       if (user.deactivatedAt) {
         await auth.invalidateUserSessions(user.id);
+        forgetUserSessions(user.id);
         res.append("Set-Cookie", auth.createBlankSessionCookie().serialize());
         return next();
       }
       // lucia extended the session (renewal on use): send the cookie with the new expiry.
       if (session.fresh) res.append("Set-Cookie", auth.createSessionCookie(session.id).serialize());
+      if (!cached) rememberSession(session, user);
       res.locals.auth = { user, session, organisationId: user.organisationId };
       next();
     } catch (error) {
@@ -102,7 +107,10 @@ export function getAuth(res: Response): AuthContext {
  */
 export async function startSession(auth: Auth, res: Response, userId: string): Promise<void> {
   const previous = res.locals.auth;
-  if (previous) await auth.invalidateSession(previous.session.id);
+  if (previous) {
+    await auth.invalidateSession(previous.session.id);
+    forgetSession(previous.session.id);
+  }
   const session = await auth.createSession(userId, {});
   res.append("Set-Cookie", auth.createSessionCookie(session.id).serialize());
 }
@@ -110,7 +118,10 @@ export async function startSession(auth: Auth, res: Response, userId: string): P
 /** Ends the current session, if any, and clears the cookie. */
 export async function endSession(auth: Auth, res: Response): Promise<void> {
   const current = res.locals.auth;
-  if (current) await auth.invalidateSession(current.session.id);
+  if (current) {
+    await auth.invalidateSession(current.session.id);
+    forgetSession(current.session.id);
+  }
   res.locals.auth = undefined;
   res.append("Set-Cookie", auth.createBlankSessionCookie().serialize());
 }

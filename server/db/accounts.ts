@@ -3,6 +3,7 @@ import type { AuthUser, Role } from "@shared/schemas/auth.ts";
 import { DEFAULT_PREFERENCES, PreferencesSchema, type Preferences } from "@shared/schemas/profile.ts";
 import type { Database } from "./client.ts";
 import { organisations, users } from "./schema.ts";
+import { forgetUserSessions } from "../auth/session-cache.ts";
 
 type UserRow = typeof users.$inferSelect;
 
@@ -50,6 +51,7 @@ export async function createUser(
 
 export async function setPasswordHash(db: Database, userId: string, passwordHash: string): Promise<void> {
   await db.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, userId));
+  forgetUserSessions(userId);
 }
 
 /** Stored preferences may predate a field or hold junk; missing or bad values fall back to defaults. */
@@ -95,6 +97,7 @@ export async function updateProfile(
     })
     .where(and(eq(users.id, userId), eq(users.organisationId, organisationId), eq(users.profileVersion, version)))
     .returning({ id: users.id });
+  forgetUserSessions(userId); // the session carries the name
   const profile = await getProfile(db, userId, organisationId);
   if (profile && updated.length === 0) return "stale" as const;
   return profile;

@@ -3,7 +3,7 @@
  * diagnosis scales its kilograms by. Every function takes the caller's organisation id and never
  * reads or writes another organisation's rows.
  */
-import { and, desc, eq, isNull } from "drizzle-orm";
+import { and, desc, eq, inArray, isNull, notExists } from "drizzle-orm";
 import type { ChargeReferenceSource, CircuitChargeReferences, StoredChargeReference } from "@shared/schemas/charge-references.ts";
 import type { ChargeReference } from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
@@ -77,6 +77,30 @@ export async function circuitCharge(db: Database, organisationId: string, equipm
     standingChargeReference(db, organisationId, equipmentId, nameplate.number),
   ]);
   return { chargeKg: nameplate.factoryChargeKg + lineAdjustmentKg, chargeReference };
+}
+
+/**
+ * Of the given visits, the circuits with a standing full weigh-in and no reference point from it
+ * yet (standing or cleared): the only ones a new reading can calibrate (calibrateAfterWeighIn).
+ * One indexed query, so a save skips the calibration's reads when there is nothing to do.
+ */
+export async function circuitsAwaitingWeighInReference(db: Database, organisationIds: readonly string[], visitIds: readonly string[]): Promise<{ visitId: string; circuit: number }[]> {
+  return db
+    .selectDistinct({ visitId: circuitCharges.visitId, circuit: circuitCharges.circuit })
+    .from(circuitCharges)
+    .where(
+      and(
+        inArray(circuitCharges.organisationId, [...organisationIds]),
+        inArray(circuitCharges.visitId, [...visitIds]),
+        isNull(circuitCharges.voidedAt),
+        notExists(
+          db
+            .select({ id: chargeReferences.id })
+            .from(chargeReferences)
+            .where(and(eq(chargeReferences.visitId, circuitCharges.visitId), eq(chargeReferences.circuit, circuitCharges.circuit), eq(chargeReferences.source, "weigh-in"))),
+        ),
+      ),
+    );
 }
 
 /** Every reference point of a unit's circuits, the standing one first, then newest first; with the correct charge. */

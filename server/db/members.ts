@@ -3,6 +3,7 @@ import type { Member } from "@shared/schemas/members.ts";
 import type { Role } from "@shared/schemas/auth.ts";
 import type { Database } from "./client.ts";
 import { sessions, users } from "./schema.ts";
+import { forgetUserSessions } from "../auth/session-cache.ts";
 
 type UserRow = typeof users.$inferSelect;
 
@@ -47,13 +48,15 @@ async function ownerCount(db: Pick<Database, "select">, organisationId: string):
  * transaction so two owners demoting each other cannot both succeed.
  */
 export async function changeMemberRole(db: Database, organisationId: string, memberId: string, role: Role): Promise<Member | undefined> {
-  return db.transaction(async (tx) => {
+  const member = await db.transaction(async (tx) => {
     const [row] = await tx.select().from(users).where(and(activeIn(organisationId), eq(users.id, memberId))).for("update");
     if (!row) return undefined;
     if (row.role === "owner" && role !== "owner" && (await ownerCount(tx, organisationId)) <= 1) throw new LastOwnerError();
     const [updated] = await tx.update(users).set({ role, updatedAt: new Date() }).where(eq(users.id, memberId)).returning();
     return toMember(updated);
   });
+  forgetUserSessions(memberId); // the new role applies to their next request
+  return member;
 }
 
 /**
@@ -62,7 +65,7 @@ export async function changeMemberRole(db: Database, organisationId: string, mem
  * @returns false when there is no such active member in this organisation.
  */
 export async function removeMember(db: Database, organisationId: string, memberId: string): Promise<boolean> {
-  return db.transaction(async (tx) => {
+  const removed = await db.transaction(async (tx) => {
     const [row] = await tx.select().from(users).where(and(activeIn(organisationId), eq(users.id, memberId))).for("update");
     if (!row) return false;
     if (row.role === "owner" && (await ownerCount(tx, organisationId)) <= 1) throw new LastOwnerError();
@@ -70,4 +73,6 @@ export async function removeMember(db: Database, organisationId: string, memberI
     await tx.delete(sessions).where(eq(sessions.userId, memberId));
     return true;
   });
+  forgetUserSessions(memberId);
+  return removed;
 }

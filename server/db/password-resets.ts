@@ -1,6 +1,7 @@
 import { and, eq, gt, isNull } from "drizzle-orm";
 import type { Database } from "./client.ts";
 import { passwordResets, sessions, users } from "./schema.ts";
+import { forgetUserSessions } from "../auth/session-cache.ts";
 
 /** Stores a new reset token for the user; any earlier unused one stops working. */
 export async function createPasswordReset(db: Database, input: { userId: string; tokenHash: string; expiresAt: Date }, now = new Date()) {
@@ -19,7 +20,7 @@ export async function createPasswordReset(db: Database, input: { userId: string;
  * @returns false when the token is unknown, used or expired.
  */
 export async function consumePasswordReset(db: Database, input: { tokenHash: string; passwordHash: string }, now = new Date()) {
-  return db.transaction(async (tx) => {
+  const consumed = await db.transaction(async (tx) => {
     const [reset] = await tx
       .update(passwordResets)
       .set({ usedAt: now })
@@ -33,6 +34,9 @@ export async function consumePasswordReset(db: Database, input: { tokenHash: str
       .returning({ id: users.id });
     if (!user) return false;
     await tx.delete(sessions).where(eq(sessions.userId, reset.userId));
-    return true;
+    return reset.userId;
   });
+  if (!consumed) return false;
+  forgetUserSessions(consumed);
+  return true;
 }

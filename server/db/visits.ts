@@ -125,7 +125,12 @@ export async function createVisit(
 
 /** Puts the user on the visit's crew the first time they record something on it. */
 export async function joinCrew(db: Database, visitId: string, userId: string): Promise<void> {
-  await db.insert(visitTechnicians).values({ visitId, userId }).onConflictDoNothing();
+  await joinCrews(db, [{ visitId, userId }]);
+}
+
+/** joinCrew for several people and visits in one statement (readings saved together). */
+export async function joinCrews(db: Database, members: { visitId: string; userId: string }[]): Promise<void> {
+  if (members.length > 0) await db.insert(visitTechnicians).values(members).onConflictDoNothing();
 }
 
 export async function insertReading(
@@ -139,6 +144,40 @@ export async function insertReading(
     .returning();
   const people = await peopleById(db, [row.recordedBy]);
   return toReading(row, people);
+}
+
+/** A reading to store with insertReadings: its id and time chosen by the caller. */
+export interface NewReading {
+  id: string;
+  organisationId: string;
+  visitId: string;
+  circuit: number;
+  takenAt: Date;
+  note: string | null;
+  input: DiagnosisInput;
+  result: DiagnosisResult;
+  recordedBy: string;
+}
+
+/**
+ * Several readings in one statement (readings saved together, server/visits/save-readings.ts),
+ * answered as the run log shows them. The caller knows the ids, times and recorders' names, so
+ * nothing is read back: the stored input and result are the caller's own.
+ */
+export async function insertReadings(db: Database, rows: NewReading[], people: People): Promise<Reading[]> {
+  if (rows.length === 0) return [];
+  await db.insert(readings).values(rows);
+  return rows.map((row) => ({
+    id: row.id,
+    visitId: row.visitId,
+    circuit: row.circuit,
+    takenAt: row.takenAt.toISOString(),
+    note: row.note,
+    input: row.input,
+    result: row.result,
+    recordedBy: person(people, row.recordedBy),
+    voided: null,
+  }));
 }
 
 const mentionedPeople = (row: { recordedBy: string | null; voidedBy: string | null }) => [row.recordedBy, row.voidedBy];

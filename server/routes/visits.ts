@@ -24,7 +24,6 @@ import {
   type VisitStatus,
 } from "@shared/schemas/visits.ts";
 import { getAuth } from "../auth/session.ts";
-import { diagnoseReading } from "../diagnosis/diagnose-on-server.ts";
 import { circuitCharge } from "../db/charge-references.ts";
 import { getEquipment, getSite } from "../db/equipment.ts";
 import { insertVisitEvent } from "../db/visit-events.ts";
@@ -36,7 +35,6 @@ import {
   insertAdjustment,
   insertComment,
   insertPhoto,
-  insertReading,
   joinCrew,
   listVisits,
   updateVisitStatus,
@@ -51,8 +49,8 @@ import { storeImportedReadings } from "../import/store-imported-readings.ts";
 import { discardPhoto, MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
 import { visitReportMail } from "../report/visit-report-mail.ts";
 import { chargeMovementKind, linkToMovement, recordChargeEntry } from "../register/charge-entry.ts";
-import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
-import { readingInput, type ReadingContext } from "../visits/reading-input.ts";
+import type { ReadingContext } from "../visits/reading-input.ts";
+import { createReadingSaver } from "../visits/save-readings.ts";
 import { voidVisitRecord } from "../visits/void-record.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
@@ -79,6 +77,7 @@ const TRANSITIONS: Record<ReviewAction["action"], { from: VisitStatus[]; to: Vis
 
 export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, "mailer">): Router {
   const router = Router();
+  const saveReading = createReadingSaver(db);
   const photoUpload = singleFileUpload("photo", "photo", MAX_PHOTO_BYTES);
   const csvUpload = singleFileUpload("file", "CSV file", MAX_CSV_BYTES);
 
@@ -137,23 +136,14 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   });
 
   // The body holds measured values only (strict); the server adds the nameplate, the RLA and
-  // the site's atmosphere, re-runs the engine and stores input and result together.
+  // the site's atmosphere, re-runs the engine and stores input and result together. Concurrent
+  // saves are written together, one transaction per batch (server/visits/save-readings.ts).
   router.post("/:id/readings", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
-    requireWritableVisit(visit.status);
-    const { circuit, takenAt, note, ...measured } = ReadingBodySchema.parse(req.body);
-    const parsed = readingInput(measured, await readingContext(organisationId, visit.equipmentId, circuit));
-    if (!parsed.success) throw parsed.error;
-    const input = parsed.data;
-    const result = await diagnoseReading(input);
-    const reading = await writeToVisit(db, organisationId, visit.id, async (tx) => {
-      const stored = await insertReading(tx, organisationId, { visitId: visit.id, circuit, takenAt: takenAt ? new Date(takenAt) : undefined, note, input, result, recordedBy: user.id });
-      await joinCrew(tx, visit.id, user.id);
-      // After a full weigh-in, the first settled window becomes the circuit's reference point.
-      await calibrateAfterWeighIn(tx, organisationId, { visitId: visit.id, equipmentId: visit.equipmentId, circuit, actorId: user.id });
-      return stored;
-    });
+    const visitId = parseId(req.params.id, "Visit");
+    // Checked against the visit first (404, 409), then the body's refusal (400), inside the batch.
+    const body = ReadingBodySchema.safeParse(req.body);
+    const reading = await saveReading({ organisationId, visitId, user: { id: user.id, name: user.name }, body });
     res.status(201).json({ reading });
   });
 

@@ -6,7 +6,7 @@
  * lock. On PGlite, where transactions already run one at a time, the lock costs nothing and
  * keeps the code right on a real PostgreSQL.
  */
-import { and, eq } from "drizzle-orm";
+import { and, asc, eq, inArray } from "drizzle-orm";
 import { STATUSES_OPEN_FOR_ENTRIES, type VisitStatus } from "@shared/schemas/visits.ts";
 import type { Database } from "../db/client.ts";
 import { visits } from "../db/schema.ts";
@@ -42,4 +42,19 @@ export function writeToVisit<T>(
     }
     return write(tx, visit);
   });
+}
+
+/**
+ * Several visits' rows locked at once, in id order (so two writers locking overlapping sets on a
+ * real PostgreSQL never deadlock), for a write that covers them all in one transaction (readings
+ * saved together, server/visits/save-readings.ts). The caller checks each row's organisation and
+ * status, as writeToVisit does for one.
+ */
+export function lockVisits(tx: Database, visitIds: readonly string[]): Promise<VisitRow[]> {
+  return tx
+    .select()
+    .from(visits)
+    .where(inArray(visits.id, [...visitIds]))
+    .orderBy(asc(visits.id))
+    .for("update");
 }

@@ -1,0 +1,189 @@
+/**
+ * Saving run-log readings with group commit. The embedded database answers one statement at a
+ * time, so a save's cost is its number of statements: fifteen each (session, visit, unit, site,
+ * charge record, lock, insert, names, crew, calibration checks, begin, commit) held fifty
+ * technicians to about a hundred saves a second, each waiting seconds behind the others.
+ *
+ * Saves that arrive while a batch is being written wait for the next one, and each batch is one
+ * transaction of a fixed number of statements whatever its size: the visits' rows locked in id
+ * order and checked (README decision 012), the units' nameplates, sites and charge records read
+ * once, every reading judged, one insert, one crew insert, one check for a weigh-in awaiting its
+ * reference. A save arriving alone is written at once, as before.
+ *
+ * Each save keeps its own answer: a closed visit (409), another company's visit (404), a wrong
+ * circuit or bad values (400) refuse that save only, inside the batch. Should the transaction
+ * itself fail, its saves are written again one by one, so one save's failure never loses or fails
+ * the others.
+ */
+import { randomUUID } from "node:crypto";
+import type { z, ZodSafeParseResult } from "zod";
+import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
+import type { Reading, ReadingBodySchema } from "@shared/schemas/visits.ts";
+import { circuitsAwaitingWeighInReference } from "../db/charge-references.ts";
+import type { Database } from "../db/client.ts";
+import type { People } from "../db/people.ts";
+import { unitsForReadings } from "../db/reading-contexts.ts";
+import { insertReadings, joinCrews, type NewReading } from "../db/visits.ts";
+import { diagnoseReading } from "../diagnosis/diagnose-on-server.ts";
+import { HttpError, notFound } from "../http/http-error.ts";
+import { requireWritableVisit } from "../http/require-writable-visit.ts";
+import { calibrateAfterWeighIn } from "./calibrate-after-weigh-in.ts";
+import { readingInput } from "./reading-input.ts";
+import { lockVisits } from "./write-to-visit.ts";
+
+/** One save as the route hands it over: who, which visit, and the body as parsed at the boundary. */
+export interface ReadingSave {
+  organisationId: string;
+  visitId: string;
+  user: { id: string; name: string };
+  /** The body's parse: a refusal is answered after the visit's own checks, as before (404, 409, then 400). */
+  body: ZodSafeParseResult<z.infer<typeof ReadingBodySchema>>;
+}
+
+interface Pending {
+  save: ReadingSave;
+  /** When the save arrived: its time when the body gives none, so readings keep their order. */
+  arrivedAt: Date;
+  resolve: (reading: Reading) => void;
+  reject: (error: unknown) => void;
+}
+
+/** Enough to take a full room of technicians in one transaction; more wait for the next. */
+const MAX_BATCH = 200;
+
+/** @returns save(), which resolves to the stored reading or rejects with that save's own refusal. */
+export function createReadingSaver(db: Database): (save: ReadingSave) => Promise<Reading> {
+  const queue: Pending[] = [];
+  let writing = false;
+  let lastArrival = 0;
+
+  async function drain(): Promise<void> {
+    while (queue.length > 0) await writeBatch(db, queue.splice(0, MAX_BATCH));
+    writing = false;
+  }
+
+  return (save) =>
+    new Promise<Reading>((resolve, reject) => {
+      // A millisecond apart at least: readings without a time of their own, stored in one
+      // transaction, still sort in the order they arrived (the run log orders by time).
+      lastArrival = Math.max(Date.now(), lastArrival + 1);
+      queue.push({ save, arrivedAt: new Date(lastArrival), resolve, reject });
+      if (writing) return;
+      writing = true;
+      // Saves that arrived in the same turn of the event loop share the first batch.
+      setImmediate(() => void drain());
+    });
+}
+
+type Outcome = { reading: Reading } | { error: unknown };
+
+/** Writes a batch, then answers each save; one by one if the batch's transaction failed. */
+async function writeBatch(db: Database, batch: Pending[]): Promise<void> {
+  let outcomes: Outcome[];
+  try {
+    outcomes = await db.transaction((tx) => saveTogether(tx, batch));
+  } catch (error) {
+    if (batch.length === 1) {
+      outcomes = [{ error }];
+    } else {
+      outcomes = [];
+      for (const pending of batch) {
+        try {
+          outcomes.push(...(await db.transaction((tx) => saveTogether(tx, [pending]))));
+        } catch (alone) {
+          outcomes.push({ error: alone });
+        }
+      }
+    }
+  }
+  batch.forEach((pending, index) => {
+    const outcome = outcomes[index]!;
+    if ("reading" in outcome) pending.resolve(outcome.reading);
+    else pending.reject(outcome.error);
+  });
+}
+
+/**
+ * One transaction for the whole batch; a save's refusal is its outcome, not a thrown error, so it
+ * rolls back nothing of the others. Outcomes are in the batch's order.
+ */
+async function saveTogether(tx: Database, batch: Pending[]): Promise<Outcome[]> {
+  const organisationIds = [...new Set(batch.map(({ save }) => save.organisationId))];
+  const locked = new Map(
+    (await lockVisits(tx, [...new Set(batch.map(({ save }) => save.visitId))])).map((visit) => [visit.id, visit]),
+  );
+  const units = await unitsForReadings(tx, organisationIds, [
+    ...new Set([...locked.values()].map((visit) => visit.equipmentId)),
+  ]);
+
+  const outcomes: Outcome[] = [];
+  const rows: { index: number; row: NewReading }[] = [];
+  for (const [index, { save, arrivedAt }] of batch.entries()) {
+    try {
+      const visit = locked.get(save.visitId);
+      if (!visit || visit.organisationId !== save.organisationId) throw notFound("Visit");
+      requireWritableVisit(visit.status);
+      if (!save.body.success) throw save.body.error;
+      const { circuit, takenAt, note, ...measured } = save.body.data;
+      const unit = units.get(visit.equipmentId);
+      if (!unit || unit.organisationId !== save.organisationId) throw notFound("Equipment");
+      const context = unit.context(circuit);
+      if (!context)
+        throw new HttpError(400, "Some fields need attention", {
+          circuit: `${unit.name} has ${unit.circuits.length} circuit(s)`,
+        });
+      const parsed = readingInput(measured, context);
+      if (!parsed.success) throw parsed.error;
+      const input: DiagnosisInput = parsed.data;
+      const result = await diagnoseReading(input);
+      rows.push({
+        index,
+        row: {
+          id: randomUUID(),
+          organisationId: save.organisationId,
+          visitId: visit.id,
+          circuit,
+          takenAt: takenAt ? new Date(takenAt) : arrivedAt,
+          note: note || null,
+          input,
+          result,
+          recordedBy: save.user.id,
+        },
+      });
+      outcomes.push({ error: undefined }); // replaced by the reading once stored
+    } catch (error) {
+      outcomes.push({ error });
+    }
+  }
+  if (rows.length === 0) return outcomes;
+
+  const people: People = new Map(batch.map(({ save }) => [save.user.id, save.user]));
+  const stored = await insertReadings(
+    tx,
+    rows.map(({ row }) => row),
+    people,
+  );
+  rows.forEach(({ index }, position) => (outcomes[index] = { reading: stored[position]! }));
+  // Whoever records something on a visit is on its crew.
+  const crew = new Map(
+    rows.map(({ row }) => [`${row.visitId}:${row.recordedBy}`, { visitId: row.visitId, userId: row.recordedBy }]),
+  );
+  await joinCrews(tx, [...crew.values()]);
+
+  // After a full weigh-in, the first settled window becomes the circuit's reference point; the
+  // cheap check first, so the run log is read only where a weigh-in still awaits its reference.
+  const awaiting = await circuitsAwaitingWeighInReference(tx, organisationIds, [
+    ...new Set(rows.map(({ row }) => row.visitId)),
+  ]);
+  for (const { visitId, circuit } of awaiting) {
+    const last = rows.findLast(({ row }) => row.visitId === visitId && row.circuit === circuit)?.row;
+    if (!last) continue;
+    await calibrateAfterWeighIn(tx, last.organisationId, {
+      visitId,
+      equipmentId: locked.get(visitId)!.equipmentId,
+      circuit,
+      actorId: last.recordedBy,
+    });
+  }
+  return outcomes;
+}
