@@ -50,7 +50,7 @@ export async function startServer(dataDir: string, extraEnv: Record<string, stri
   const origin = `http://127.0.0.1:${port}`;
   const child = spawn(process.execPath, ["--import", "tsx", "--import", "./bench/api/memory-probe.ts", "server/index.ts"], {
     cwd: root,
-    env: { ...process.env, NODE_ENV: "production", HOST: "127.0.0.1", PORT: String(port), APP_URL: origin, DATA_DIR: dataDir, DEMO_DATA: "true", LOG_LEVEL: "warn", COOKIE_SECURE: "false", ...extraEnv },
+    env: { ...process.env, NODE_ENV: "production", HOST: "127.0.0.1", PORT: String(port), APP_URL: origin, DATA_DIR: dataDir, DEMO_DATA: "true", LOG_LEVEL: "fatal", COOKIE_SECURE: "false", ...extraEnv },
     stdio: ["ignore", "inherit", "inherit", "ipc"],
   });
   await waitForHealth(origin, child, 120_000);
