@@ -62,6 +62,12 @@ export const LONG_VISIT_REASON = "Logger left on circuit 1 overnight: reading ev
 const OPEN_VISITS = 60;
 /** Rows per INSERT: a few hundred readings is ~1 MB of JSON, one short statement each. */
 const SLICE_ROWS = 400;
+/**
+ * The logger's scatter against hand-held readings: fixed probes read within about ±0.1–0.2 K of
+ * each other from one reading to the next, so the circuit settles by the run log's rule (less
+ * than 1 K over 5 minutes) once the pull-down is over.
+ */
+const LOGGER_NOISE = 0.2;
 const MINUTE = 60_000;
 const DAY = 24 * 60 * MINUTE;
 
@@ -129,11 +135,13 @@ function pickCondition(random: Random): Condition {
  * What a technician's gauges and probes would read on a unit in a condition, rounded as the
  * instruments read (gauge kPa to 1, probes to 0.1 K): pressures from the refrigerant's own
  * saturation curve at the site's atmosphere, so the engine sees a consistent cycle.
- * `settle` (0…1) eases a just-started system in from its start-up state.
+ * `settle` (0…1) eases a just-started system in from its start-up state; `noiseScale` shrinks the
+ * scatter between readings (a logger's fixed probes scatter far less than hand-held ones moved
+ * from unit to unit).
  */
-function measuredValues(refrigerant: string, atmosphereKPa: number, condition: Condition, random: Random, runMinutes: number, settle = 1): MeasuredValues {
+function measuredValues(refrigerant: string, atmosphereKPa: number, condition: Condition, random: Random, runMinutes: number, settle = 1, noiseScale = 1): MeasuredValues {
   const healthy = HEALTHY[refrigerant]!;
-  const noise = (spread: number) => random.between(-spread, spread);
+  const noise = (spread: number) => noiseScale * random.between(-spread, spread);
   const startUp = 1 - settle;
   const evaporatingDewC = healthy.evaporatingDewC + condition.evaporatingK + noise(0.4) - 3 * startUp;
   const condensingBubbleC = healthy.condensingBubbleC + condition.condensingK + noise(0.5) + 2 * startUp;
@@ -255,7 +263,7 @@ export async function growDemoData(db: Database, sizes: GrowSizes, { now = Date.
     let rows = [];
     for (let index = 0; index < sizes.longVisitReadings; index++) {
       const seconds = index * 2;
-      const measured = measuredValues(rooftop.refrigerant, atmosphereOf(rooftop), healthy, random, 5 + seconds / 60, 1 - Math.exp(-seconds / 600));
+      const measured = measuredValues(rooftop.refrigerant, atmosphereOf(rooftop), healthy, random, 5 + seconds / 60, 1 - Math.exp(-seconds / 600), LOGGER_NOISE);
       rows.push(await readingRow(context, measured, { organisationId, visitId: longVisit!.id, circuit: 1, takenAt: new Date(startedAt + 5 * MINUTE + seconds * 1_000), recordedBy: technician }));
       if (rows.length === SLICE_ROWS) {
         await db.insert(readings).values(rows);

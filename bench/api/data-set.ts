@@ -42,6 +42,7 @@ export async function readDataSet(dataDir: string): Promise<DataSet> {
     const busiest = await one<{ id: string }>(`select visit_id as id from readings group by visit_id order by count(*) desc limit 1`);
     const longVisitId = long.rows[0]?.id ?? busiest.id;
     const ordinary = await one<{ id: string }>(`select v.id from visits v where v.status = 'signed-off' and exists (select 1 from readings r where r.visit_id = v.id) order by v.started_at desc limit 1`);
+    const logged = await one<{ id: string }>(`select equipment_id as id from visits where id = '${longVisitId}'`);
     const unit = await one<{ id: string }>(`select equipment_id as id from visits group by equipment_id order by count(*) desc limit 1`);
     const cylinder = await one<{ id: string }>(`select cylinder_id as id from refrigerant_movements where cylinder_id is not null group by cylinder_id order by count(*) desc limit 1`);
     const open = await handle.client.query<{ id: string }>(
@@ -62,7 +63,7 @@ export async function readDataSet(dataDir: string): Promise<DataSet> {
     const database = await one<{ bytes: string }>(`select pg_database_size(current_database()) as bytes`);
     return {
       counts,
-      ids: { equipmentId: unit.id, visitId: ordinary.id, longVisitId, cylinderId: cylinder.id },
+      ids: { equipmentId: unit.id, loggedEquipmentId: logged.id, visitId: ordinary.id, longVisitId, cylinderId: cylinder.id },
       openReadingVisits: open.rows.map((row) => row.id),
       readingCost: {
         readings: rows,

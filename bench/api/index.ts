@@ -82,7 +82,7 @@ async function measureRoutes(server: BenchServer, dataSet: DataSet | undefined, 
   const cookies = await sessions(server);
   const rows: Row[] = [];
   for (const route of routes) {
-    const path = route.path(dataSet?.ids ?? { equipmentId: "", visitId: "", longVisitId: "", cylinderId: "" });
+    const path = route.path(dataSet?.ids ?? { equipmentId: "", loggedEquipmentId: "", visitId: "", longVisitId: "", cylinderId: "" });
     const headers: Record<string, string> = { cookie: cookies[route.as] };
     if (route.conditional) {
       const etag = await etagOf(server, path, cookies[route.as]);

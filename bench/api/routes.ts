@@ -7,6 +7,8 @@
  */
 export interface BenchIds {
   equipmentId: string;
+  /** The unit the 10,000-reading visit is on: its detail judges that visit's last settled state. */
+  loggedEquipmentId: string;
   visitId: string;
   longVisitId: string;
   cylinderId: string;
@@ -35,6 +37,7 @@ export const ROUTES: readonly BenchRoute[] = [
   { name: "sites", path: () => "/api/sites", as: "tech", connections: [1], list: true },
   // Equipment detail.
   { name: "equipment detail", path: (ids) => `/api/equipment/${ids.equipmentId}`, as: "tech", connections: [1] },
+  { name: "equipment detail, logged unit", path: (ids) => `/api/equipment/${ids.loggedEquipmentId}`, as: "tech", connections: [1] },
   { name: "equipment visits", path: (ids) => `/api/visits?equipmentId=${ids.equipmentId}`, as: "tech", connections: [1] },
   { name: "equipment refrigerant", path: (ids) => `/api/equipment/${ids.equipmentId}/refrigerant`, as: "tech", connections: [1] },
   { name: "equipment charge references", path: (ids) => `/api/equipment/${ids.equipmentId}/charge-references`, as: "tech", connections: [1] },
