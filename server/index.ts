@@ -6,7 +6,7 @@ import type { Server } from "node:http";
 import { createApp } from "./app.ts";
 import { openDatabase } from "./db/client.ts";
 import { deleteExpiredSessions } from "./db/expired-sessions.ts";
-import { analyzeTables } from "./db/planner-statistics.ts";
+import { analyzeChangedTables, analyzeTables } from "./db/planner-statistics.ts";
 import { deleteEndedCounters } from "./db/rate-limit-counters.ts";
 import { discardStagedReadings } from "./db/visits.ts";
 import { closeCsvImportPool } from "./import/csv-import-pool.ts";
@@ -28,10 +28,14 @@ if (env.DEMO_DATA && (await seedDemoData(database.db))) {
 const upgraded = await upgradeStoredDiagnoses(database.db);
 if (upgraded > 0) logger.info(`${upgraded} stored reading(s) re-diagnosed in the current result format`);
 // PGlite has no autovacuum, so the planner's statistics are gathered here after migrations (and
-// any seed or upgrade), then hourly; a failure only leaves older estimates, so it is logged.
-const refreshPlannerStatistics = () =>
-  analyzeTables(database.db).catch((error: unknown) => logger.error({ err: error }, "could not refresh the planner's statistics"));
-await refreshPlannerStatistics();
+// any seed or upgrade), then every few minutes for the tables that changed enough since (see
+// analyzeChangedTables); a failure only leaves older estimates, so it is logged.
+const logStatisticsFailure = (error: unknown) => logger.error({ err: error }, "could not refresh the planner's statistics");
+await analyzeTables(database.db).catch(logStatisticsFailure);
+/** Often enough that a day's readings never wait long for fresh estimates; a quiet check is one small query. */
+const STATISTICS_CHECK_INTERVAL_MS = 10 * 60 * 1000;
+const statisticsTimer = setInterval(() => void analyzeChangedTables(database.db).catch(logStatisticsFailure), STATISTICS_CHECK_INTERVAL_MS);
+statisticsTimer.unref();
 
 let clientMiddleware;
 let closeVite: (() => Promise<void>) | undefined;
@@ -54,15 +58,16 @@ const server: Server = app.listen(env.PORT, env.HOST, () => {
   logger.info(`Satura listening on http://localhost:${port}`);
 });
 
-// Expired sessions and ended throttle counters are purged at start and hourly, and the
-// planner's statistics refreshed hourly after them; unref so the timer never holds the process.
+// Expired sessions and ended throttle counters are purged at start and hourly; unref so the
+// timer never holds the process.
 const SESSION_PURGE_INTERVAL_MS = 60 * 60 * 1000;
 const purgeSessions = () =>
   Promise.all([deleteExpiredSessions(database.db), deleteEndedCounters(database.db)])
     .then(([count]) => count > 0 && logger.info({ count }, "expired sessions deleted"))
     .catch((error: unknown) => logger.error({ err: error }, "could not delete expired sessions or throttle counters"));
 void purgeSessions();
-setInterval(() => void purgeSessions().then(refreshPlannerStatistics), SESSION_PURGE_INTERVAL_MS).unref();
+const purgeTimer = setInterval(() => void purgeSessions(), SESSION_PURGE_INTERVAL_MS);
+purgeTimer.unref();
 
 let stopping = false;
 async function shutdown(signal: string) {
@@ -73,6 +78,9 @@ async function shutdown(signal: string) {
   // PGlite flushes its files; a hard exit after 10 s if something hangs.
   const timer = setTimeout(() => process.exit(1), 10_000);
   timer.unref();
+  // No refresh or purge may start on a database being closed.
+  clearInterval(statisticsTimer);
+  clearInterval(purgeTimer);
   await new Promise<void>((resolve) => server.close(() => resolve()));
   await closeVite?.();
   await closeCsvImportPool();

@@ -3,10 +3,11 @@
  * runs ANALYZE on its own: the planner then guesses table sizes from page counts and default
  * selectivities (it once estimated 65 readings where there were 19 938 and chose its joins
  * accordingly). The server refreshes them after migrations at start-up, after the demo seed and
- * a CSV import (bulk writes), and hourly (PostgreSQL docs, "Updating Planner Statistics",
+ * a CSV import (bulk writes), and every few minutes for the tables that changed enough
+ * (analyzeChangedTables, PostgreSQL docs, "Updating Planner Statistics",
  * routine-vacuuming.html#VACUUM-FOR-STATISTICS).
  */
-import { getTableColumns, is, sql, type SQL } from "drizzle-orm";
+import { getTableColumns, getTableName, is, sql, type SQL } from "drizzle-orm";
 import { PgTable } from "drizzle-orm/pg-core";
 import type { Database } from "./client.ts";
 import * as schema from "./schema.ts";
@@ -36,4 +37,37 @@ function analyzeTarget(table: PgTable): SQL {
 export async function analyzeTables(db: Database, tables: readonly PgTable[] = ALL_TABLES): Promise<void> {
   if (tables.length === 0) return;
   await db.execute(sql`ANALYZE ${sql.join(tables.map(analyzeTarget), sql`, `)}`);
+}
+
+/**
+ * When a table's statistics are stale: autovacuum's default rule, more rows changed since the last
+ * ANALYZE than 50 plus 10 % of the table (PostgreSQL docs, "The Autovacuum Daemon",
+ * routine-vacuuming.html#AUTOVACUUM: autovacuum_analyze_threshold 50,
+ * autovacuum_analyze_scale_factor 0.1). PGlite keeps the counts (pg_stat_user_tables) but runs no
+ * autovacuum to act on them.
+ */
+export const ANALYZE_THRESHOLD_ROWS = 50;
+export const ANALYZE_SCALE_FACTOR = 0.1;
+
+/**
+ * Runs ANALYZE on the tables whose statistics are stale, and only those, so a periodic refresh
+ * costs one small query while the data is quiet and holds the single connection only for the
+ * tables that grew. "Changed" is rows added or removed: the live-row count against the planner's
+ * (n_live_tup against reltuples), since n_mod_since_analyze is never reset by an ANALYZE with a
+ * column list, which is how analyzeTables leaves out the JSON columns (PostgreSQL's analyze.c
+ * reports the reset only for a whole-table ANALYZE). Counts reach pg_stat_user_tables about a
+ * second after a write.
+ *
+ * @returns the names of the tables analysed
+ * @throws the database's error, as analyzeTables
+ */
+export async function analyzeChangedTables(db: Database): Promise<string[]> {
+  const { rows } = await db.execute<{ relname: string }>(sql`
+    select s.relname from pg_stat_user_tables s join pg_class c on c.oid = s.relid
+    where s.schemaname = 'public'
+      and abs(s.n_live_tup - greatest(c.reltuples, 0)) > ${ANALYZE_THRESHOLD_ROWS} + ${ANALYZE_SCALE_FACTOR} * greatest(c.reltuples, 0)`);
+  const stale = new Set(rows.map((row) => row.relname));
+  const tables = ALL_TABLES.filter((table) => stale.has(getTableName(table)));
+  await analyzeTables(db, tables);
+  return tables.map((table) => getTableName(table));
 }

@@ -1,5 +1,4 @@
 import { Router } from "express";
-import { assessTrend, lastAtEachInstant } from "@shared/engine/index.ts";
 import { CustomerInputSchema, EquipmentInputSchema, SiteInputSchema } from "@shared/schemas/equipment.ts";
 import type { EquipmentDetail } from "@shared/schemas/equipment-detail.ts";
 import { getAuth } from "../auth/session.ts";
@@ -13,7 +12,8 @@ import {
   listSites,
   type EquipmentRow,
 } from "../db/equipment.ts";
-import { latestVisitReadings, listVisits } from "../db/visits.ts";
+import { listVisits } from "../db/visits.ts";
+import { lastSettledStates } from "../equipment/last-settled-states.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
@@ -68,20 +68,9 @@ export function equipmentRouter({ db }: Deps): Router {
     const id = parseId(req.params.id, "Equipment");
     const row = await getEquipment(db, organisationId, id);
     if (!row) throw notFound("Equipment");
-    const [visits, latest] = await Promise.all([listVisits(db, organisationId, { equipmentId: id }), latestVisitReadings(db, organisationId, id)]);
-    // The last settled state of each circuit, judged by the same trend rule as the run log.
-    const lastSettled = row.circuits.map((circuit) => {
-      const own = latest.filter((reading) => reading.circuit === circuit.number);
-      const series = lastAtEachInstant(own, (reading) => reading.takenAt.getTime())
-        .map((reading) => ({ takenAt: reading.takenAt.toISOString(), input: reading.input, result: reading.result }));
-      if (series.length === 0) return { circuit: circuit.number, takenAt: null, result: null };
-      const trend = assessTrend(series);
-      return {
-        circuit: circuit.number,
-        takenAt: trend.lastSettled?.takenAt ?? null,
-        result: trend.lastSettled?.result ?? null,
-      };
-    });
+    // The last settled state of each circuit, judged by the same trend rule as the run log, from
+    // the tail of the latest visit only (server/equipment/last-settled-states.ts).
+    const [visits, lastSettled] = await Promise.all([listVisits(db, organisationId, { equipmentId: id }), lastSettledStates(db, organisationId, id, row.circuits)]);
     res.json({ equipment: toEquipment(row), visits, lastSettled } satisfies EquipmentDetail);
   });
 

@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { DatabaseHandle } from "@server/db/client.ts";
-import { analyzeTables } from "@server/db/planner-statistics.ts";
+import { analyzeChangedTables, analyzeTables } from "@server/db/planner-statistics.ts";
 import { equipment, users, visits } from "@server/db/schema.ts";
 import { demoSite } from "@server/db/seed/demo-scenario.ts";
 import { seedDemoData } from "@server/db/seed/seed-demo.ts";
@@ -81,5 +81,25 @@ describe("planner statistics", () => {
     expect(stored).toBe(600);
     expect(await rowEstimate("readings")).toBe(before + 600);
     expect(await rowEstimate("readings")).toBe(await rowCount("readings"));
+  });
+
+  it("re-analyses only the tables changed past autovacuum's threshold, then none while quiet", async () => {
+    await analyzeTables(handle.db);
+    const before = await rowCount("readings");
+    const [visit] = await handle.client.query<{ visit_id: string }>("select visit_id from readings limit 1").then((result) => result.rows);
+    await handle.client.query(
+      `insert into readings (organisation_id, visit_id, circuit, taken_at, input, result)
+       select organisation_id, visit_id, circuit, taken_at + make_interval(days => 1, secs => step), input, result
+       from (select * from readings where visit_id = $1 limit 1) one, generate_series(1, 1000) step`,
+      [visit!.visit_id],
+    );
+    // The counts reach pg_stat_user_tables when the session next reports them (about a second).
+    const live = async () => (await handle.client.query<{ n: number }>("select n_live_tup::int as n from pg_stat_user_tables where relname = 'readings'")).rows[0]!.n;
+    for (let attempt = 0; attempt < 40 && (await live()) < before + 1000; attempt++) await new Promise((resolve) => setTimeout(resolve, 250));
+    expect(await live()).toBeGreaterThanOrEqual(before + 1000);
+    expect(await rowEstimate("readings")).toBe(before);
+    expect(await analyzeChangedTables(handle.db)).toEqual(["readings"]);
+    expect(await rowEstimate("readings")).toBe(before + 1000);
+    expect(await analyzeChangedTables(handle.db)).toEqual([]);
   });
 });

@@ -1,0 +1,202 @@
+/**
+ * `npm run bench:api [-- --dir data/large --seconds 5 --only <name>]`: the API at the size of a
+ * busy company (issue 16). Starts the real server on the large data set in a child process,
+ * signs the demo people in, and measures each GET route a screen calls and saving a reading,
+ * closed-loop at 1 connection (lists and saving also at 10 and 50), then the list routes again
+ * on a demo-size database: their ratio shows whether a list's time grows with the rows behind it.
+ * Prints the data set, the server's memory idle and under load, what a stored reading costs, and
+ * each figure beside its target. Timings on a shared machine are noisy: compare runs, not digits.
+ */
+import { existsSync } from "node:fs";
+import { parseArgs } from "node:util";
+import { readDataSet, type DataSet } from "./data-set.ts";
+import { runLoad, type LoadResult } from "./load.ts";
+import { READING_BODY, ROUTES, SAVE_CONNECTIONS, type BenchRoute, type Person } from "./routes.ts";
+import { startServer, type BenchServer } from "./server-process.ts";
+
+/** Targets of issue 16. */
+const ROUTE_P95_MS = 100;
+const SAVE_P95_MS = 50;
+const SAVE_TARGET_CONNECTIONS = 50;
+/** A list "independent of the number of rows": at most this many times its demo-size median. */
+const LIST_RATIO = 2;
+
+const { values } = parseArgs({
+  options: {
+    dir: { type: "string", default: "data/large" },
+    seconds: { type: "string", default: "5" },
+    only: { type: "string" },
+    "skip-demo": { type: "boolean", default: false },
+  },
+});
+const seconds = Number(values.seconds);
+const REBUILD = `npm run data:large -- --dir ${values.dir}`;
+
+if (!existsSync(values.dir)) {
+  console.error(`No data set at ${values.dir}. Build it first (2,000 units, 20,000 visits, one visit of 10,000 readings; a few minutes):\n  ${REBUILD}`);
+  process.exit(1);
+}
+
+const EMAILS: Record<Person, string> = { tech: "tech@bellbird.example", senior: "senior@bellbird.example", owner: "owner@bellbird.example" };
+const ms = (value: number) => (Number.isFinite(value) ? value.toFixed(value < 10 ? 1 : 0) : "–");
+const mb = (bytes: number) => `${(bytes / 1_048_576).toFixed(0)} MB`;
+const selected = (route: BenchRoute) => !values.only || route.name.includes(values.only);
+
+interface Row {
+  name: string;
+  connections: number;
+  result: LoadResult;
+  target: string;
+  pass: boolean | null;
+}
+
+async function sessions(server: BenchServer): Promise<Record<Person, string>> {
+  return { tech: await server.signIn(EMAILS.tech), senior: await server.signIn(EMAILS.senior), owner: await server.signIn(EMAILS.owner) };
+}
+
+/** The ETag of a first answer, for the conditional form of a route. */
+async function etagOf(server: BenchServer, path: string, cookie: string): Promise<string | undefined> {
+  const response = await fetch(`${server.origin}${path}`, { headers: { cookie } });
+  await response.arrayBuffer();
+  return response.headers.get("etag") ?? undefined;
+}
+
+/** Peak resident set while `work` runs, sampled each half second. */
+async function withPeakMemory<T>(server: BenchServer, work: () => Promise<T>): Promise<{ value: T; peak: NodeJS.MemoryUsage }> {
+  let peak = await server.memory();
+  let running = true;
+  const sampler = (async () => {
+    while (running) {
+      await new Promise((resolve) => setTimeout(resolve, 500));
+      const now = await server.memory().catch(() => peak);
+      if (now.rss > peak.rss) peak = now;
+    }
+  })();
+  const value = await work();
+  running = false;
+  await sampler;
+  return { value, peak };
+}
+
+async function measureRoutes(server: BenchServer, dataSet: DataSet | undefined, routes: readonly BenchRoute[], levels: (route: BenchRoute) => readonly number[]): Promise<Row[]> {
+  const cookies = await sessions(server);
+  const rows: Row[] = [];
+  for (const route of routes) {
+    const path = route.path(dataSet?.ids ?? { equipmentId: "", loggedEquipmentId: "", visitId: "", longVisitId: "", cylinderId: "" });
+    const headers: Record<string, string> = { cookie: cookies[route.as] };
+    if (route.conditional) {
+      const etag = await etagOf(server, path, cookies[route.as]);
+      if (etag) headers["if-none-match"] = etag;
+    }
+    for (const connections of levels(route)) {
+      const result = await runLoad({ origin: server.origin, connections, seconds, maxRequests: 5_000, next: () => ({ path, headers }), expectStatus: route.conditional ? [304] : [200] });
+      const pass = connections === 1 ? result.p95 < ROUTE_P95_MS : null;
+      rows.push({ name: route.name, connections, result, target: connections === 1 ? `p95 < ${ROUTE_P95_MS} ms` : "", pass });
+      process.stdout.write(".");
+    }
+  }
+  return rows;
+}
+
+async function measureSaving(server: BenchServer, openVisits: readonly string[]): Promise<Row[]> {
+  if (openVisits.length === 0) return [];
+  const cookie = await server.signIn(EMAILS.tech);
+  const body = JSON.stringify(READING_BODY);
+  const rows: Row[] = [];
+  for (const connections of SAVE_CONNECTIONS) {
+    const result = await runLoad({
+      origin: server.origin,
+      connections,
+      seconds,
+      // Each save goes to the next open visit, as a crew spread over jobs would send them.
+      next: (index) => ({ method: "POST", path: `/api/visits/${openVisits[index % openVisits.length]}/readings`, headers: { cookie, origin: server.origin }, body }),
+      expectStatus: [201],
+    });
+    const targeted = connections === SAVE_TARGET_CONNECTIONS;
+    rows.push({ name: "save a reading (POST readings)", connections, result, target: targeted ? `p95 < ${SAVE_P95_MS} ms` : "", pass: targeted ? result.p95 < SAVE_P95_MS : null });
+    process.stdout.write(".");
+  }
+  return rows;
+}
+
+function printRows(rows: readonly Row[]) {
+  const header = ["route", "conn", "requests", "p50 ms", "p95 ms", "p99 ms", "max ms", "req/s", "body KB", "target", ""];
+  const lines = rows.map((row) => {
+    const unexpected = Object.entries(row.result.unexpected).map(([status, n]) => `${n}×${status}`).join(" ");
+    return [
+      row.name,
+      String(row.connections),
+      String(row.result.requests),
+      ms(row.result.p50),
+      ms(row.result.p95),
+      ms(row.result.p99),
+      ms(row.result.max),
+      row.result.perSecond.toFixed(1),
+      (row.result.meanBytes / 1024).toFixed(1),
+      row.target,
+      (row.pass === null ? "" : row.pass ? "pass" : "MISS") + (unexpected ? ` (unexpected: ${unexpected})` : ""),
+    ];
+  });
+  const widths = header.map((title, column) => Math.max(title.length, ...lines.map((line) => line[column]!.length)));
+  const format = (cells: string[]) => cells.map((cell, column) => (column === 0 || column >= 9 ? cell.padEnd(widths[column]!) : cell.padStart(widths[column]!))).join("  ");
+  console.log(format(header));
+  for (const line of lines) console.log(format(line));
+}
+
+function printMemory(label: string, memory: NodeJS.MemoryUsage) {
+  console.log(`  ${label.padEnd(34)} rss ${mb(memory.rss).padStart(7)}  heap used ${mb(memory.heapUsed).padStart(7)} of ${mb(memory.heapTotal).padStart(7)}  external (PGlite's WebAssembly memory, buffers) ${mb(memory.external).padStart(7)}  array buffers ${mb(memory.arrayBuffers).padStart(7)}`);
+}
+
+console.log(`Reading the data set at ${values.dir}…`);
+const dataSet = await readDataSet(values.dir);
+console.log(`Data set ${values.dir} (rebuild: rm -rf ${values.dir} && ${REBUILD}):`);
+console.log("  " + Object.entries(dataSet.counts).map(([table, n]) => `${table} ${n.toLocaleString("en")}`).join(", ") + `; database ${mb(dataSet.databaseBytes)}`);
+const cost = dataSet.readingCost;
+console.log(
+  `  a stored reading: ${cost.totalPerReading.toFixed(0)} B on disk (heap ${cost.heapPerReading.toFixed(0)}, TOAST ${cost.toastPerReading.toFixed(0)}, indexes ${cost.indexesPerReading.toFixed(0)}); ` +
+    `its result column ${cost.resultStored.toFixed(0)} B stored (${cost.resultText.toFixed(0)} B as JSON text), its input ${cost.inputStored.toFixed(0)} B`,
+);
+
+const large = await startServer(values.dir);
+let rows: Row[] = [];
+const memoryRows: [string, NodeJS.MemoryUsage][] = [];
+try {
+  memoryRows.push(["idle after start", await large.memory()]);
+  const routes = ROUTES.filter(selected);
+  const { value: routeRows, peak: routePeak } = await withPeakMemory(large, () => measureRoutes(large, dataSet, routes, (route) => route.connections));
+  rows = routeRows;
+  memoryRows.push(["peak under the GET routes", routePeak]);
+  if (!values.only || "save a reading".includes(values.only)) {
+    const { value: saveRows, peak: savePeak } = await withPeakMemory(large, () => measureSaving(large, dataSet.openReadingVisits));
+    rows.push(...saveRows);
+    memoryRows.push(["peak while saving readings", savePeak]);
+  }
+  await new Promise((resolve) => setTimeout(resolve, 2_000));
+  memoryRows.push(["idle after the load", await large.memory()]);
+} finally {
+  await large.stop();
+}
+
+let ratios: { name: string; demo: number; large: number }[] = [];
+if (!values["skip-demo"]) {
+  const demo = await startServer("memory://");
+  try {
+    const lists = ROUTES.filter((route) => route.list && selected(route));
+    const demoRows = await measureRoutes(demo, undefined, lists, () => [1]);
+    ratios = demoRows.map((row) => ({ name: row.name, demo: row.result.p50, large: rows.find((candidate) => candidate.name === row.name && candidate.connections === 1)!.result.p50 }));
+  } finally {
+    await demo.stop();
+  }
+}
+
+console.log("\n\nLatency at the large data set (closed loop, each level for " + `${seconds} s or 5,000 requests):`);
+printRows(rows);
+if (ratios.length > 0) {
+  console.log(`\nLists at the demo size vs the large data set (p50 at 1 connection; target: at most ${LIST_RATIO}× the demo's):`);
+  for (const ratio of ratios) {
+    const times = ratio.large / ratio.demo;
+    console.log(`  ${ratio.name.padEnd(30)} demo ${ms(ratio.demo).padStart(6)} ms   large ${ms(ratio.large).padStart(6)} ms   ×${times.toFixed(1).padStart(6)}   ${times <= LIST_RATIO ? "pass" : "MISS"}`);
+  }
+}
+console.log("\nServer memory (one process: Node heap plus PGlite's WebAssembly memory):");
+for (const [label, memory] of memoryRows) printMemory(label, memory);

@@ -1,0 +1,85 @@
+/**
+ * The GET routes the screens call, one line each, so a route that gains a query (`?limit=`,
+ * `?after=`) or changes its path is a one-line edit. `as`: who calls it; `connections`: the
+ * concurrency levels measured; `list`: also measured on a demo-size database, to show its time
+ * does not grow with the organisation's rows; `conditional`: sent again with the ETag of a
+ * first answer (If-None-Match), expecting 304.
+ */
+export interface BenchIds {
+  equipmentId: string;
+  /** The unit the 10,000-reading visit is on: its detail judges that visit's last settled state. */
+  loggedEquipmentId: string;
+  visitId: string;
+  longVisitId: string;
+  cylinderId: string;
+}
+
+export type Person = "tech" | "senior" | "owner";
+
+export interface BenchRoute {
+  name: string;
+  path: (ids: BenchIds) => string;
+  as: Person;
+  connections: readonly number[];
+  list?: boolean;
+  conditional?: boolean;
+}
+
+export const ROUTES: readonly BenchRoute[] = [
+  // Today (home): the open, sent-back and awaiting-review lists.
+  { name: "today: open visits", path: () => "/api/visits?status=open", as: "tech", connections: [1, 10], list: true },
+  { name: "today: sent back", path: () => "/api/visits?status=sent-back", as: "tech", connections: [1, 10], list: true },
+  { name: "today: awaiting review", path: () => "/api/visits?status=awaiting-review", as: "senior", connections: [1, 10], list: true },
+  // Jobs and equipment lists (server-driven paging: owned by the lists' engineer).
+  { name: "jobs list", path: () => "/api/visits", as: "tech", connections: [1, 10], list: true },
+  { name: "equipment list", path: () => "/api/equipment", as: "tech", connections: [1, 10], list: true },
+  { name: "customers", path: () => "/api/customers", as: "tech", connections: [1], list: true },
+  { name: "sites", path: () => "/api/sites", as: "tech", connections: [1], list: true },
+  // Equipment detail.
+  { name: "equipment detail", path: (ids) => `/api/equipment/${ids.equipmentId}`, as: "tech", connections: [1] },
+  { name: "equipment detail, logged unit", path: (ids) => `/api/equipment/${ids.loggedEquipmentId}`, as: "tech", connections: [1] },
+  { name: "equipment visits", path: (ids) => `/api/visits?equipmentId=${ids.equipmentId}`, as: "tech", connections: [1] },
+  { name: "equipment refrigerant", path: (ids) => `/api/equipment/${ids.equipmentId}/refrigerant`, as: "tech", connections: [1] },
+  { name: "equipment charge references", path: (ids) => `/api/equipment/${ids.equipmentId}/charge-references`, as: "tech", connections: [1] },
+  // A visit (run log): an ordinary one, the 10,000-reading one, and its conditional refresh.
+  { name: "visit detail", path: (ids) => `/api/visits/${ids.visitId}`, as: "tech", connections: [1] },
+  { name: "visit detail, 10,000 readings", path: (ids) => `/api/visits/${ids.longVisitId}`, as: "tech", connections: [1] },
+  { name: "visit detail, 10,000 readings, 304", path: (ids) => `/api/visits/${ids.longVisitId}`, as: "tech", connections: [1], conditional: true },
+  { name: "visit refrigerant", path: (ids) => `/api/visits/${ids.longVisitId}/refrigerant`, as: "tech", connections: [1] },
+  // Procedures of a visit.
+  { name: "electrical checks", path: (ids) => `/api/visits/${ids.longVisitId}/electrical-checks`, as: "tech", connections: [1] },
+  { name: "leak searches", path: (ids) => `/api/visits/${ids.longVisitId}/leak-searches`, as: "tech", connections: [1] },
+  { name: "standing-pressure checks", path: (ids) => `/api/visits/${ids.longVisitId}/standing-pressure-checks`, as: "tech", connections: [1] },
+  { name: "pressure tests", path: (ids) => `/api/visits/${ids.longVisitId}/pressure-tests`, as: "tech", connections: [1] },
+  { name: "evacuations", path: (ids) => `/api/visits/${ids.longVisitId}/evacuations`, as: "tech", connections: [1] },
+  // Register and cylinders.
+  { name: "register", path: () => "/api/register", as: "owner", connections: [1, 10], list: true },
+  { name: "register CSV export", path: () => "/api/register/export.csv", as: "owner", connections: [1], list: true },
+  { name: "cylinders", path: () => "/api/cylinders", as: "tech", connections: [1, 10], list: true },
+  { name: "cylinder detail", path: (ids) => `/api/cylinders/${ids.cylinderId}`, as: "tech", connections: [1] },
+  // Casebook.
+  { name: "casebook", path: () => "/api/cases", as: "tech", connections: [1], list: true },
+  { name: "attempts", path: () => "/api/attempts", as: "tech", connections: [1], list: true },
+  { name: "progress", path: () => "/api/attempts/progress", as: "tech", connections: [1], list: true },
+  { name: "team progress", path: () => "/api/attempts/progress/team", as: "senior", connections: [1], list: true },
+  // Everywhere: who is signed in, the company's settings, the people.
+  { name: "me", path: () => "/api/auth/me", as: "tech", connections: [1] },
+  { name: "organisation settings", path: () => "/api/organisation/settings", as: "tech", connections: [1] },
+  { name: "members", path: () => "/api/members", as: "owner", connections: [1] },
+];
+
+/** POST /api/visits/:id/readings: a reading a technician types on an R407C unit, spread over open visits. */
+export const READING_BODY = {
+  circuit: 1,
+  suctionPressureKPa: 468,
+  suctionLineTempC: 12.1,
+  liquidPressureKPa: 1685,
+  liquidLineTempC: 37,
+  dischargeLineTempC: 82,
+  returnAirDryBulbC: 24.5,
+  returnAirWetBulbC: 17.8,
+  supplyAirDryBulbC: 13.6,
+  outdoorAirDryBulbC: 30.2,
+  runMinutes: 20,
+};
+export const SAVE_CONNECTIONS = [1, 10, 50] as const;

@@ -1,0 +1,88 @@
+/**
+ * Starts the real server (server/index.ts) in a child process for the bench, on a free port and a
+ * given data folder, signs the demo people in, and reads its memory through bench/api/memory-probe.ts.
+ */
+import { spawn, type ChildProcess } from "node:child_process";
+import { createServer } from "node:net";
+import { fileURLToPath } from "node:url";
+import { SESSION_COOKIE_NAME } from "../../server/auth/lucia.ts";
+
+export const DEMO_PASSWORD = "bellbird-demo-2026";
+const root = fileURLToPath(new URL("../..", import.meta.url));
+
+export interface BenchServer {
+  origin: string;
+  child: ChildProcess;
+  /** Resident set, V8 heap and ArrayBuffers (PGlite's WebAssembly memory), in bytes. */
+  memory: () => Promise<NodeJS.MemoryUsage>;
+  signIn: (email: string) => Promise<string>;
+  stop: () => Promise<void>;
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once("error", reject);
+    probe.listen(0, "127.0.0.1", () => {
+      const address = probe.address();
+      probe.close(() => resolve(typeof address === "object" && address ? address.port : 0));
+    });
+  });
+}
+
+async function waitForHealth(origin: string, child: ChildProcess, timeoutMs: number) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`the server stopped with code ${child.exitCode} before answering`);
+    try {
+      if ((await fetch(`${origin}/api/health`)).ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+  throw new Error(`the server did not answer /api/health within ${timeoutMs / 1000} s`);
+}
+
+/** `dataDir`: a PGlite folder, or "memory://" for a fresh demo-size database. */
+export async function startServer(dataDir: string, extraEnv: Record<string, string> = {}): Promise<BenchServer> {
+  const port = await freePort();
+  const origin = `http://127.0.0.1:${port}`;
+  const child = spawn(process.execPath, ["--import", "tsx", "--import", "./bench/api/memory-probe.ts", "server/index.ts"], {
+    cwd: root,
+    env: { ...process.env, NODE_ENV: "production", HOST: "127.0.0.1", PORT: String(port), APP_URL: origin, DATA_DIR: dataDir, DEMO_DATA: "true", LOG_LEVEL: "fatal", COOKIE_SECURE: "false", ...extraEnv },
+    stdio: ["ignore", "inherit", "inherit", "ipc"],
+  });
+  await waitForHealth(origin, child, 120_000);
+
+  const memory = () =>
+    new Promise<NodeJS.MemoryUsage>((resolve, reject) => {
+      const timer = setTimeout(() => reject(new Error("the server did not report its memory")), 5_000);
+      child.once("message", (message: { memory: NodeJS.MemoryUsage }) => {
+        clearTimeout(timer);
+        resolve(message.memory);
+      });
+      child.send("memory");
+    });
+
+  const signIn = async (email: string) => {
+    const response = await fetch(`${origin}/api/auth/sign-in`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin },
+      body: JSON.stringify({ email, password: DEMO_PASSWORD }),
+    });
+    if (!response.ok) throw new Error(`sign-in as ${email} answered ${response.status}`);
+    const cookie = response.headers.getSetCookie().find((value) => value.startsWith(`${SESSION_COOKIE_NAME}=`));
+    if (!cookie) throw new Error(`sign-in as ${email} set no session cookie`);
+    return cookie.split(";")[0]!;
+  };
+
+  const stop = () =>
+    new Promise<void>((resolve) => {
+      if (child.exitCode !== null) return resolve();
+      child.once("exit", () => resolve());
+      child.kill("SIGTERM");
+    });
+
+  return { origin, child, memory, signIn, stop };
+}
