@@ -61,7 +61,8 @@ export const VisitListQuerySchema = z.object({
   limit,
 });
 export type VisitListQuery = z.output<typeof VisitListQuerySchema>;
-export type VisitListParams = z.input<typeof VisitListQuerySchema>;
+/** What a client sends (the limit as a number; the query string carries it as text). */
+export type VisitListParams = Omit<z.input<typeof VisitListQuerySchema>, "limit"> & { limit?: number };
 
 /** The columns the equipment list sorts by on the server. */
 export const EQUIPMENT_SORTS = ["name", "kind", "place", "refrigerant", "circuits", "factoryCharge"] as const;
@@ -77,7 +78,7 @@ export const EquipmentListQuerySchema = z.object({
   limit,
 });
 export type EquipmentListQuery = z.output<typeof EquipmentListQuerySchema>;
-export type EquipmentListParams = z.input<typeof EquipmentListQuerySchema>;
+export type EquipmentListParams = Omit<z.input<typeof EquipmentListQuerySchema>, "limit"> & { limit?: number };
 
 /** The default direction of each sort: dates newest first, everything else A (or least) first. */
 export const defaultDirection = (sort: string): SortDirection => (sort === "startedAt" ? "desc" : "asc");
