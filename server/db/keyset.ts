@@ -28,7 +28,9 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 // Values as Postgres prints them (timestamps to the microsecond, which a JS Date would round:
 // two visits a few microseconds apart would then repeat or vanish between pages).
 const VALUE_SHAPES: Record<KeyType, RegExp> = {
-  text: /^[\s\S]{0,500}$/,
+  // No NUL (PostgreSQL refuses it in text); other characters are compared, never run.
+  // eslint-disable-next-line no-control-regex -- finding the NUL is the point
+  text: /^[^\u0000]{0,500}$/,
   timestamptz: /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?[+-]\d{2}(:\d{2})?$/,
   numeric: /^-?\d{1,20}(\.\d{1,20})?$/,
 };

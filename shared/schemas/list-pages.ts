@@ -6,6 +6,7 @@
  */
 import { z } from "zod";
 import { EQUIPMENT_KINDS, EquipmentSchema } from "./equipment.ts";
+import { text } from "./text.ts";
 import { VISIT_STATUSES, VisitStatusSchema, VisitSummarySchema } from "./visits.ts";
 
 /** Rows in a page when the client does not say: a screenful on a tablet, a few scrolls on a phone. */
@@ -32,7 +33,8 @@ const cursor = z
   .regex(/^[A-Za-z0-9_-]+$/, "That cursor is not one this list gave out; start from the first page")
   .optional();
 
-const search = z.string().trim().max(MAX_SEARCH_LENGTH, `Search with at most ${MAX_SEARCH_LENGTH} characters`).optional();
+// text(): a NUL or a lone surrogate would make PostgreSQL refuse the query (see text.ts).
+const search = text().max(MAX_SEARCH_LENGTH, `Search with at most ${MAX_SEARCH_LENGTH} characters`).optional();
 
 const direction = z.enum(SORT_DIRECTIONS, { error: "The direction is asc or desc" }).optional();
 
