@@ -110,22 +110,25 @@ export function pageOf<Row extends { id: string }>(rows: Row[], limit: number, k
 /**
  * The search of shared/format/search-terms.ts in SQL over a lower-case text expression: each
  * word found in the text as typed, or without dashes (or a leading "r") in the text with its
- * spaces and dashes removed. Words are bound parameters and matched with strpos, so % and _
- * are plain characters.
+ * spaces and dashes removed, or by `alsoMatches` (e.g. a crew member's name). Words are bound
+ * parameters and matched with strpos, so % and _ are plain characters.
  */
-export function matchesSearchSql(searchText: SQL, query: string | undefined): SQL | undefined {
+export function matchesSearchSql(searchText: SQL, query: string | undefined, alsoMatches?: (word: string) => SQL): SQL | undefined {
   const terms = query ? searchTerms(query) : [];
   if (terms.length === 0) return undefined;
-  // The text is built once per row (OFFSET 0 keeps the planner from copying the expression,
-  // with its crew subquery, into every strpos); the compact form takes out the characters
-  // compactSearchText takes out on the client: white space, hyphen, en dash.
+  // The text is built once per row (OFFSET 0 keeps the planner from copying the expression
+  // into every strpos); the compact form drops what compactSearchText drops on the client
+  // (white space, hyphen, en dash), with translate(), several times cheaper than a regex.
   const plain = sql.raw("search.plain");
   const compact = sql.raw("search.compact");
   const every = sql.join(
-    terms.map((term) => sql`(strpos(${plain}, ${term.word}) > 0 or strpos(${compact}, ${term.bare}) > 0 or strpos(${compact}, ${term.withoutR}) > 0)`),
+    terms.map(
+      (term) =>
+        sql`(strpos(${plain}, ${term.word}) > 0 or strpos(${compact}, ${term.bare}) > 0 or strpos(${compact}, ${term.withoutR}) > 0${alsoMatches ? sql` or ${alsoMatches(term.word)}` : sql``})`,
+    ),
     sql` and `,
   );
-  return sql`exists (select 1 from (select words.plain, regexp_replace(words.plain, '[[:space:]–-]', '', 'g') as compact from (select ${searchText} as plain offset 0) as words offset 0) as search where ${every})`;
+  return sql`exists (select 1 from (select words.plain, translate(words.plain, ' -–' || chr(9) || chr(10) || chr(13), '') as compact from (select ${searchText} as plain offset 0) as words offset 0) as search where ${every})`;
 }
 
 /** lower(concat_ws(' ', …)): the record's words in one lower-case text, nulls skipped. */

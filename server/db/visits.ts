@@ -89,8 +89,12 @@ const VISIT_SORT_KEYS: Record<VisitSort, SortKey[]> = {
   status: [{ expr: visits.status, type: "text" }],
 };
 
-/** The crew's names as one text, for the search (a correlated read of a few rows per visit). */
-const crewNames = sql`coalesce((select string_agg(${users.name}, ' ') from ${visitTechnicians} inner join ${users} on ${users.id} = ${visitTechnicians.userId} where ${visitTechnicians.visitId} = ${visits.id}), '')`;
+/**
+ * A search word that names someone on the visit's crew: the visits of the people whose name
+ * holds the word, read once per query (an uncorrelated, hashed subquery), not once per visit.
+ */
+const crewNamed = (word: string) =>
+  sql`${visits.id} in (select ${visitTechnicians.visitId} from ${visitTechnicians} inner join ${users} on ${users.id} = ${visitTechnicians.userId} where strpos(lower(${users.name}), ${word}) > 0)`;
 
 /**
  * One page of the organisation's visits in the asked order, after `query.cursor`. Reading
@@ -106,7 +110,7 @@ export async function listVisitPage(db: Database, organisationId: string, query:
   if (query.crew === "me") {
     conditions.push(sql`exists (select 1 from ${visitTechnicians} where ${visitTechnicians.visitId} = ${visits.id} and ${visitTechnicians.userId} = ${viewerId})`);
   }
-  conditions.push(matchesSearchSql(searchTextOf(equipment.name, sites.name, customers.name, equipment.refrigerant, visits.reason, crewNames), query.q));
+  conditions.push(matchesSearchSql(searchTextOf(equipment.name, sites.name, customers.name, equipment.refrigerant, visits.reason), query.q, crewNamed));
   if (query.cursor) conditions.push(afterCursor(keys, visits.id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
   const rows = await db
     .select({ ...summaryColumns, ...cursorColumns(keys) })

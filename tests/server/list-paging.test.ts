@@ -144,6 +144,9 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     expect(onCrew).toBeGreaterThan(0);
     expect(rows).toHaveLength(onCrew);
     expect(rows.every((row) => row.technicians.some((person) => person.id === technicianId))).toBe(true);
+    // A crew member's name finds their visits, as the jobs search did on the client.
+    const byName = await walk<Summary>(technician, "/api/visits?q=TOKO&limit=200", "visits");
+    expect(byName.rows.map((row) => row.id).sort()).toEqual(rows.map((row) => row.id).sort());
   });
 
   it("refuses a bad cursor, limit, sort or status with a clear 400", async () => {
