@@ -2,10 +2,12 @@
  * Queries for customers, sites and equipment. Every function takes the caller's
  * organisation id and never returns another organisation's rows.
  */
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql, type SQL } from "drizzle-orm";
 import type { z } from "zod";
 import type { CustomerInputSchema, EquipmentValues, SiteInputSchema } from "@shared/schemas/equipment.ts";
+import { defaultDirection, type EquipmentListQuery, type EquipmentSort } from "@shared/schemas/list-pages.ts";
 import type { Database } from "./client.ts";
+import { afterCursor, cursorColumns, decodeCursor, keysetOrder, matchesSearchSql, pageOf, searchTextOf, type SortKey } from "./keyset.ts";
 import { customers, equipment, sites } from "./schema.ts";
 
 type CustomerValues = z.output<typeof CustomerInputSchema>;
@@ -101,10 +103,50 @@ function selectEquipment(db: Database) {
 
 export type EquipmentRow = Awaited<ReturnType<typeof getEquipment>>;
 
+/** Every unit of the organisation, unpaged (the seed and the register's few units); screens use `listEquipmentPage`. */
 export function listEquipment(db: Database, organisationId: string) {
   return selectEquipment(db)
     .where(and(eq(equipment.organisationId, organisationId), eq(equipment.archived, false)))
     .orderBy(asc(customers.name), asc(sites.name), asc(equipment.name));
+}
+
+/** The factory charge of all circuits, kg, summed in the database so the list can sort by it. */
+const totalFactoryCharge = sql`(select coalesce(sum((circuit ->> 'factoryChargeKg')::numeric), 0) from jsonb_array_elements(${equipment.circuits}) as circuit)`;
+
+// lower(): the table sorted "a" with "A" before; Postgres would put every capital first.
+const byName: SortKey = { expr: sql`lower(${equipment.name})`, type: "text" };
+const EQUIPMENT_SORT_KEYS: Record<EquipmentSort, SortKey[]> = {
+  name: [byName],
+  kind: [{ expr: equipment.kind, type: "text" }, byName],
+  place: [{ expr: sql`lower(${sites.name})`, type: "text" }, { expr: sql`lower(${customers.name})`, type: "text" }, byName],
+  refrigerant: [{ expr: equipment.refrigerant, type: "text" }, byName],
+  circuits: [{ expr: sql`jsonb_array_length(${equipment.circuits})`, type: "numeric" }, byName],
+  factoryCharge: [{ expr: totalFactoryCharge, type: "numeric" }, byName],
+};
+
+/** One page of the organisation's units in use, searched, filtered by kind and sorted, after `query.cursor`. */
+export async function listEquipmentPage(db: Database, organisationId: string, query: EquipmentListQuery) {
+  const direction = query.dir ?? defaultDirection(query.sort);
+  const keys = EQUIPMENT_SORT_KEYS[query.sort];
+  const conditions: (SQL | undefined)[] = [eq(equipment.organisationId, organisationId), eq(equipment.archived, false)];
+  if (query.kind) conditions.push(eq(equipment.kind, query.kind));
+  conditions.push(
+    matchesSearchSql(
+      searchTextOf(equipment.name, equipment.kind, sites.name, customers.name, equipment.refrigerant, equipment.location, equipment.maker, equipment.model, equipment.serial),
+      query.q,
+    ),
+  );
+  if (query.cursor) conditions.push(afterCursor(keys, equipment.id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
+  const rows = await db
+    .select({ ...equipmentColumns, ...cursorColumns(keys) })
+    .from(equipment)
+    .innerJoin(sites, eq(sites.id, equipment.siteId))
+    .innerJoin(customers, eq(customers.id, sites.customerId))
+    .where(and(...conditions))
+    .orderBy(...keysetOrder(keys, equipment.id, direction))
+    .limit(query.limit + 1);
+  const { page, nextCursor } = pageOf(rows, query.limit, keys, query.sort, direction);
+  return { rows: page, nextCursor };
 }
 
 export async function getEquipment(db: Database, organisationId: string, equipmentId: string) {

@@ -5,9 +5,11 @@
 import { and, asc, count, desc, eq, inArray, isNotNull, isNull, max, sql, type SQL } from "drizzle-orm";
 import { unionAll } from "drizzle-orm/pg-core";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
+import { defaultDirection, type VisitListQuery, type VisitPage, type VisitSort } from "@shared/schemas/list-pages.ts";
 import { visitReasonText, type Adjustment, type Comment, type Photo, type Reading, type VisitStatus, type VisitSummary } from "@shared/schemas/visits.ts";
 import { siteAtmosphere } from "../visits/reading-input.ts";
 import type { Database } from "./client.ts";
+import { afterCursor, cursorColumns, decodeCursor, keysetOrder, matchesSearchSql, pageOf, searchTextOf, type SortKey } from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
 import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitTechnicians, visits } from "./schema.ts";
 import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
@@ -79,7 +81,68 @@ export interface VisitFilter {
   equipmentId?: string;
 }
 
-/** `viewerId`: whose last activity each summary carries (`yourLastActivityAt`). */
+const VISIT_SORT_KEYS: Record<VisitSort, SortKey[]> = {
+  startedAt: [{ expr: visits.startedAt, type: "timestamptz" }],
+  // lower(): the table sorted "a" with "A" before; Postgres would put every capital first.
+  equipmentName: [{ expr: sql`lower(${equipment.name})`, type: "text" }],
+  reason: [{ expr: sql`lower(${visits.reason})`, type: "text" }],
+  status: [{ expr: visits.status, type: "text" }],
+};
+
+/**
+ * A search word that names someone on the visit's crew: the visits of the people whose name
+ * holds the word, read once per query (an uncorrelated, hashed subquery), not once per visit.
+ */
+const crewNamed = (word: string) =>
+  sql`${visits.id} in (select ${visitTechnicians.visitId} from ${visitTechnicians} inner join ${users} on ${users.id} = ${visitTechnicians.userId} where strpos(lower(${users.name}), ${word}) > 0)`;
+
+/**
+ * One page of the organisation's visits in the asked order, after `query.cursor`. Reading
+ * counts, crew and the viewer's last activity are gathered for the page's rows only (at most
+ * `query.limit` ids), so the cost follows the page, not the organisation.
+ */
+export async function listVisitPage(db: Database, organisationId: string, query: VisitListQuery, viewerId: string): Promise<VisitPage> {
+  const direction = query.dir ?? defaultDirection(query.sort);
+  const keys = VISIT_SORT_KEYS[query.sort];
+  const conditions: (SQL | undefined)[] = [eq(visits.organisationId, organisationId)];
+  if (query.status) conditions.push(query.status.length === 1 ? eq(visits.status, query.status[0]) : inArray(visits.status, query.status));
+  if (query.equipmentId) conditions.push(eq(visits.equipmentId, query.equipmentId));
+  if (query.crew === "me") {
+    conditions.push(sql`exists (select 1 from ${visitTechnicians} where ${visitTechnicians.visitId} = ${visits.id} and ${visitTechnicians.userId} = ${viewerId})`);
+  }
+  conditions.push(matchesSearchSql(searchTextOf(equipment.name, sites.name, customers.name, equipment.refrigerant, visits.reason), query.q, crewNamed));
+  if (query.cursor) conditions.push(afterCursor(keys, visits.id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
+  const rows = await db
+    .select({ ...summaryColumns, ...cursorColumns(keys) })
+    .from(visits)
+    .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
+    .innerJoin(sites, eq(sites.id, equipment.siteId))
+    .innerJoin(customers, eq(customers.id, sites.customerId))
+    .where(and(...conditions))
+    .orderBy(...keysetOrder(keys, visits.id, direction))
+    .limit(query.limit + 1);
+  const { page, nextCursor } = pageOf(rows, query.limit, keys, query.sort, direction);
+  const extra = await summarise(db, page, viewerId);
+  const summaries = page.map((row) => ({
+    id: row.id,
+    equipmentId: row.equipmentId,
+    equipmentName: row.equipmentName,
+    siteName: row.siteName,
+    customerName: row.customerName,
+    refrigerant: row.refrigerant,
+    reason: row.reason,
+    status: row.status,
+    startedAt: row.startedAt.toISOString(),
+    ...extra.get(row.id)!,
+  }));
+  return { visits: summaries, nextCursor };
+}
+
+/**
+ * Every visit that matches, unpaged: for one unit's history (the equipment page), which grows
+ * with that unit's visits only. Lists over the organisation use `listVisitPage`.
+ * `viewerId`: whose last activity each summary carries (`yourLastActivityAt`).
+ */
 export async function listVisits(db: Database, organisationId: string, filter: VisitFilter = {}, viewerId?: string): Promise<VisitSummary[]> {
   const conditions: SQL[] = [eq(visits.organisationId, organisationId)];
   if (filter.status) conditions.push(eq(visits.status, filter.status));

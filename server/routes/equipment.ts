@@ -1,6 +1,7 @@
 import { Router } from "express";
 import { CustomerInputSchema, EquipmentInputSchema, SiteInputSchema } from "@shared/schemas/equipment.ts";
 import type { EquipmentDetail } from "@shared/schemas/equipment-detail.ts";
+import { EquipmentListQuerySchema } from "@shared/schemas/list-pages.ts";
 import { getAuth } from "../auth/session.ts";
 import {
   createCustomer,
@@ -8,7 +9,7 @@ import {
   createSite,
   getEquipment,
   listCustomers,
-  listEquipment,
+  listEquipmentPage,
   listSites,
   type EquipmentRow,
 } from "../db/equipment.ts";
@@ -51,9 +52,11 @@ export function sitesRouter({ db }: Deps): Router {
 export function equipmentRouter({ db }: Deps): Router {
   const router = Router();
 
-  router.get("/", async (_req, res) => {
-    const rows = await listEquipment(db, getAuth(res).organisationId);
-    res.json({ equipment: rows.map(toEquipment) });
+  // A page at a time, searched and sorted by the server: an organisation may hold thousands of units.
+  router.get("/", async (req, res) => {
+    const query = EquipmentListQuerySchema.parse(req.query);
+    const { rows, nextCursor } = await listEquipmentPage(db, getAuth(res).organisationId, query);
+    res.json({ equipment: rows.map(toEquipment), nextCursor });
   });
 
   router.post("/", async (req, res) => {

@@ -2,6 +2,7 @@ import { Router } from "express";
 import { z } from "zod";
 import { can, type Permission } from "@shared/schemas/auth.ts";
 import { instant } from "@shared/schemas/dates.ts";
+import { VisitListQuerySchema } from "@shared/schemas/list-pages.ts";
 import { text } from "@shared/schemas/text.ts";
 import {
   AdjustmentCreateSchema,
@@ -17,7 +18,6 @@ import {
   VISIT_EVENT_LABELS,
   VISIT_STATUS_LABELS,
   VisitCreateSchema,
-  VisitStatusSchema,
   VoidBodySchema,
   type ReviewAction,
   type VisitEventAction,
@@ -36,7 +36,7 @@ import {
   insertComment,
   insertPhoto,
   joinCrew,
-  listVisits,
+  listVisitPage,
   updateVisitStatus,
 } from "../db/visits.ts";
 import { singleFileUpload } from "../http/file-upload.ts";
@@ -60,11 +60,6 @@ type Deps = Pick<AccountRouteDeps, "db" | "env">;
 const FIELDS = "Some fields need attention";
 /** A logged series of a few thousand rows is well under 2 MB of CSV. */
 const MAX_CSV_BYTES = 2 * 1024 * 1024;
-
-const ListQuerySchema = z.object({
-  status: VisitStatusSchema.optional(),
-  equipmentId: z.uuid().optional(),
-});
 
 /** Each review action: the statuses it starts from, where it leads, who may take it, and its audit line. */
 const TRANSITIONS: Record<ReviewAction["action"], { from: VisitStatus[]; to: VisitStatus; permission: Permission; event: VisitEventAction; verb: string; refused: string }> = {
@@ -115,10 +110,11 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     return { unit, nameplate, site, charge };
   }
 
+  // A page at a time, filtered, searched and sorted by the server (see shared/schemas/list-pages.ts).
   router.get("/", async (req, res) => {
-    const filter = ListQuerySchema.parse(req.query);
+    const query = VisitListQuerySchema.parse(req.query);
     const { organisationId, user } = getAuth(res);
-    res.json({ visits: await listVisits(db, organisationId, filter, user.id) });
+    res.json(await listVisitPage(db, organisationId, query, user.id));
   });
 
   router.post("/", async (req, res) => {

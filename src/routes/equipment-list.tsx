@@ -2,11 +2,10 @@ import { Plus } from "lucide-react";
 import { Link } from "react-router-dom";
 import { can } from "@shared/schemas/auth.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
-import { Button, buttonVariants } from "@/components/ui/button/button.tsx";
+import { buttonVariants } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
 import { EquipmentTable } from "@/features/equipment/components/equipment-table.tsx";
 import { useMe } from "@/lib/api/auth.ts";
-import { useEquipmentList } from "@/lib/api/equipment.ts";
 
 function AddEquipmentLink() {
   return (
@@ -18,7 +17,6 @@ function AddEquipmentLink() {
 
 export default function EquipmentListRoute() {
   const me = useMe();
-  const equipment = useEquipmentList();
   const mayWrite = me.data ? can(me.data.role, "writeRecords") : false;
   return (
     <div className="space-y-6">
@@ -32,35 +30,23 @@ export default function EquipmentListRoute() {
         {mayWrite && <AddEquipmentLink />}
       </header>
       <PanelBoundary>
-        {equipment.isPending && (
-          <p role="status" className="rounded-card border-2 border-rule bg-surface p-6 text-center text-muted">
-            Loading equipment…
-          </p>
-        )}
-        {equipment.isError && (
-          <div role="alert" className="space-y-2 rounded-card border-2 border-fault bg-surface p-4">
-            <p className="font-semibold text-fault">⚠ The equipment list did not load: {equipment.error.message}</p>
-            <Button variant="secondary" onClick={() => void equipment.refetch()}>
-              Try again
-            </Button>
-          </div>
-        )}
-        {equipment.isSuccess && equipment.data.length === 0 && (
-          <div className="space-y-3 rounded-card border-2 border-dashed border-rule p-6 text-center">
-            <p className="font-semibold">No equipment yet.</p>
-            <p className="text-muted">
-              {mayWrite
-                ? "Add the first unit from its nameplate; you can add its site and customer on the way."
-                : "A technician or the owner adds units here."}
-            </p>
-            {mayWrite && (
-              <div className="flex justify-center">
-                <AddEquipmentLink />
-              </div>
-            )}
-          </div>
-        )}
-        {equipment.isSuccess && equipment.data.length > 0 && <EquipmentTable equipment={equipment.data} />}
+        <EquipmentTable
+          empty={
+            <div className="space-y-3 rounded-card border-2 border-dashed border-rule p-6 text-center">
+              <p className="font-semibold">No equipment yet.</p>
+              <p className="text-muted">
+                {mayWrite
+                  ? "Add the first unit from its nameplate; you can add its site and customer on the way."
+                  : "A technician or the owner adds units here."}
+              </p>
+              {mayWrite && (
+                <div className="flex justify-center">
+                  <AddEquipmentLink />
+                </div>
+              )}
+            </div>
+          }
+        />
       </PanelBoundary>
     </div>
   );

@@ -1,21 +1,22 @@
 import { ChevronRight } from "lucide-react";
 import { Link } from "react-router-dom";
 import { can } from "@shared/schemas/auth.ts";
-import type { Equipment } from "@shared/schemas/equipment.ts";
 import { visitReasonText, type VisitSummary } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
-import { equipmentSearchText, matchesSearch } from "@/features/equipment/utils/nameplate-text.ts";
 import { QuickStartVisit } from "@/features/jobs/components/quick-start-visit.tsx";
 import { ResumeVisit } from "@/features/jobs/components/resume-visit.tsx";
 import { visitToResume } from "@/features/jobs/utils/visit-to-resume.ts";
 import { useMe } from "@/lib/api/auth.ts";
 import { useVisits } from "@/lib/api/visits.ts";
 
-/** Today's unit search is the equipment list's own, so a unit is found the same way everywhere. */
-const unitMatches = (unit: Equipment, query: string) => matchesSearch(equipmentSearchText(unit), query);
+/** Today lists a short first page of each kind; the jobs page holds the rest. */
+const SHORT_LIST = 10;
+/** The visits one person is on the crew of and still open: few, so one page holds them all. */
+const OWN_OPEN_VISITS = 50;
+const IN_PROGRESS = "open,sent-back";
 
-function VisitLinks({ title, visits, empty }: { title: string; visits: VisitSummary[] | undefined; empty: string }) {
+function VisitLinks({ title, visits, empty, more }: { title: string; visits: VisitSummary[] | undefined; empty: string; more: { shown: boolean; href: string } }) {
   return (
     <section aria-label={title} className="rounded-card border-2 border-rule bg-surface p-4">
       <h2 className="text-lg font-semibold">{title}</h2>
@@ -41,18 +42,23 @@ function VisitLinks({ title, visits, empty }: { title: string; visits: VisitSumm
           ))}
         </ul>
       )}
+      {more.shown && (
+        <Link to={more.href} className="mt-2 inline-flex min-h-touch items-center gap-1 font-medium text-accent underline underline-offset-4">
+          See all on the jobs page <ChevronRight aria-hidden className="size-5" />
+        </Link>
+      )}
     </section>
   );
 }
 
 export default function HomeRoute() {
   const me = useMe();
-  const open = useVisits({ status: "open" });
-  const sentBack = useVisits({ status: "sent-back" });
+  const inProgress = useVisits({ status: IN_PROGRESS, limit: SHORT_LIST });
+  // The visit to resume is among those the person is on the crew of (they join it by recording).
+  const own = useVisits({ status: IN_PROGRESS, crew: "me", limit: OWN_OPEN_VISITS });
   const reviewer = me.data ? can(me.data.role, "signOff") : false;
-  const awaiting = useVisits({ status: "awaiting-review" });
-  const inProgress = open.data && sentBack.data ? [...sentBack.data, ...open.data] : undefined;
-  const resume = inProgress ? visitToResume(inProgress) : null;
+  const awaiting = useVisits({ status: "awaiting-review", limit: SHORT_LIST }, { enabled: reviewer });
+  const resume = own.data ? visitToResume(own.data.visits) : null;
   const writer = me.data ? can(me.data.role, "writeRecords") : false;
 
   return (
@@ -64,15 +70,27 @@ export default function HomeRoute() {
           superheat, subcooling and what the circuit is telling you — and keeps the visit as a record.
         </p>
       </header>
-      {(open.isError || awaiting.isError) && (
+      {(inProgress.isError || own.isError || awaiting.isError) && (
         <p role="alert" className="font-medium text-fault">
-          ⚠ {(open.error ?? awaiting.error)?.message}
+          ⚠ {(inProgress.error ?? own.error ?? awaiting.error)?.message}
         </p>
       )}
       {resume && <ResumeVisit visit={resume} />}
-      {writer && <QuickStartVisit matches={unitMatches} inProgress={inProgress} />}
-      <VisitLinks title="Visits in progress" visits={inProgress} empty={writer ? "No open visits. Find a unit above to start one." : "No open visits."} />
-      {reviewer && <VisitLinks title="Waiting for your review" visits={awaiting.data} empty="Nothing is waiting for review." />}
+      {writer && <QuickStartVisit />}
+      <VisitLinks
+        title="Visits in progress"
+        visits={inProgress.data?.visits}
+        empty={writer ? "No open visits. Find a unit above to start one." : "No open visits."}
+        more={{ shown: Boolean(inProgress.data?.nextCursor), href: paths.jobs.getHref() }}
+      />
+      {reviewer && (
+        <VisitLinks
+          title="Waiting for your review"
+          visits={awaiting.data?.visits}
+          empty="Nothing is waiting for review."
+          more={{ shown: Boolean(awaiting.data?.nextCursor), href: paths.jobs.getHref("awaiting-review") }}
+        />
+      )}
       <section className="rounded-card border-2 border-caution bg-surface p-4">
         <h2 className="font-semibold">Before you open a panel or a valve</h2>
         <p className="mt-1">

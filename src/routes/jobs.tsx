@@ -10,7 +10,6 @@ import { JobsTable } from "@/features/jobs/components/jobs-table.tsx";
 import { StartVisitForm } from "@/features/jobs/components/start-visit-form.tsx";
 import { StatusFilter } from "@/features/jobs/components/status-filter.tsx";
 import { useMe } from "@/lib/api/auth.ts";
-import { useVisits } from "@/lib/api/visits.ts";
 
 const EMPTY_TEXT: Record<VisitStatus | "all", string> = {
   all: "No visits yet. Start one from here or from a unit's page.",
@@ -26,7 +25,6 @@ export default function JobsRoute() {
   const me = useMe();
   const parsed = VisitStatusSchema.safeParse(params.get("status"));
   const status = parsed.success ? parsed.data : null;
-  const visits = useVisits(status ? { status } : {});
   const [starting, setStarting] = useState(false);
   const mayWrite = me.data ? can(me.data.role, "writeRecords") : false;
   const reviewing = status === "awaiting-review" && me.data != null && can(me.data.role, "signOff");
@@ -71,25 +69,10 @@ export default function JobsRoute() {
       <StatusFilter value={status} onChange={(next) => setParams(next ? { status: next } : {}, { replace: true })} />
 
       <PanelBoundary>
-        {visits.isPending && (
-          <p role="status" className="rounded-card border-2 border-rule bg-surface p-6 text-center text-muted">
-            Loading visits…
-          </p>
-        )}
-        {visits.isError && (
-          <div role="alert" className="space-y-2 rounded-card border-2 border-fault bg-surface p-4">
-            <p className="font-semibold text-fault">⚠ The visits did not load: {visits.error.message}</p>
-            <Button variant="secondary" onClick={() => void visits.refetch()}>
-              Try again
-            </Button>
-          </div>
-        )}
-        {visits.isSuccess && visits.data.length === 0 && (
-          <p className="rounded-card border-2 border-dashed border-rule p-6 text-center">
-            {EMPTY_TEXT[status ?? "all"]}
-          </p>
-        )}
-        {visits.isSuccess && visits.data.length > 0 && <JobsTable visits={visits.data} />}
+        <JobsTable
+          status={status}
+          empty={<p className="rounded-card border-2 border-dashed border-rule p-6 text-center">{EMPTY_TEXT[status ?? "all"]}</p>}
+        />
       </PanelBoundary>
     </div>
   );

@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import { EquipmentDetailSchema, type EquipmentDetail } from "@shared/schemas/equipment-detail.ts";
 import {
@@ -12,15 +12,17 @@ import {
   type Site,
   type SiteInput,
 } from "@shared/schemas/equipment.ts";
+import { EquipmentPageSchema, type EquipmentListParams, type EquipmentPage } from "@shared/schemas/list-pages.ts";
 import { apiRequest } from "./api-client.ts";
+import { listQueryString } from "./list-params.ts";
 
-const EquipmentListSchema = z.object({ equipment: z.array(EquipmentSchema) });
 const EquipmentCreatedSchema = z.object({ equipment: EquipmentSchema });
 const SitesSchema = z.object({ sites: z.array(SiteSchema) });
 const CustomersSchema = z.object({ customers: z.array(CustomerSchema) });
 
-export async function getEquipmentList(signal?: AbortSignal): Promise<Equipment[]> {
-  return (await apiRequest("/equipment", { schema: EquipmentListSchema, signal })).equipment;
+/** One page of the company's units, searched and sorted by the server (see shared/schemas/list-pages.ts). */
+export function getEquipmentList(params: EquipmentListParams = {}, signal?: AbortSignal): Promise<EquipmentPage> {
+  return apiRequest(`/equipment${listQueryString(params)}`, { schema: EquipmentPageSchema, signal });
 }
 
 export function getEquipmentDetail(id: string, signal?: AbortSignal): Promise<EquipmentDetail> {
@@ -39,15 +41,18 @@ export async function getCustomers(signal?: AbortSignal) {
   return (await apiRequest("/customers", { schema: CustomersSchema, signal })).customers;
 }
 
-export const equipmentListQueryOptions = () =>
-  queryOptions({ queryKey: ["equipment", "list"], queryFn: ({ signal }) => getEquipmentList(signal) });
+/** The key holds every parameter, cursor included: each page of each search is its own entry. */
+export const equipmentListQueryOptions = (params: EquipmentListParams = {}) =>
+  queryOptions({ queryKey: ["equipment", "list", params], queryFn: ({ signal }) => getEquipmentList(params, signal) });
 
 export const equipmentDetailQueryOptions = (id: string) =>
   queryOptions({ queryKey: ["equipment", "detail", id], queryFn: ({ signal }) => getEquipmentDetail(id, signal) });
 
 export const sitesQueryOptions = () => queryOptions({ queryKey: ["sites", "list"], queryFn: ({ signal }) => getSites(signal) });
 
-export const useEquipmentList = () => useQuery(equipmentListQueryOptions());
+/** A page of units; while the next page (or another search) loads, the last one stays on screen. */
+export const useEquipmentList = (params: EquipmentListParams = {}, { enabled = true } = {}) =>
+  useQuery({ ...equipmentListQueryOptions(params), placeholderData: keepPreviousData, enabled });
 export const useEquipmentDetail = (id: string) => useQuery(equipmentDetailQueryOptions(id));
 export const useSites = () => useQuery(sitesQueryOptions());
 

@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import {
   AdjustmentSchema,
@@ -7,30 +7,27 @@ import {
   ReadingSchema,
   VisitEventSchema,
   VisitSchema,
-  VisitSummarySchema,
   type AdjustmentCreate,
   type ReadingBody,
   type ReviewAction,
   type Visit,
   type VisitCreate,
-  type VisitStatus,
-  type VisitSummary,
   type VoidBody,
 } from "@shared/schemas/visits.ts";
 import { ImportSummarySchema, type ImportSummary } from "@shared/schemas/readings-import.ts";
+import { VisitPageSchema, type VisitListParams, type VisitPage } from "@shared/schemas/list-pages.ts";
 import { ApiError, apiRequest } from "./api-client.ts";
+import { listQueryString } from "./list-params.ts";
 import { viewerTimeZone } from "@shared/format/date-time.ts";
 
-const VisitListSchema = z.object({ visits: z.array(VisitSummarySchema) });
 const VisitEnvelopeSchema = z.object({ visit: VisitSchema });
 
 /** How often an open visit refreshes, so a remote reviewer sees readings within seconds. */
 export const LIVE_REFRESH_MS = 4000;
 
-export async function getVisits(filter: { status?: VisitStatus; equipmentId?: string }, signal?: AbortSignal): Promise<VisitSummary[]> {
-  const search = new URLSearchParams(Object.entries(filter).filter((entry): entry is [string, string] => Boolean(entry[1])));
-  const query = search.size > 0 ? `?${search}` : "";
-  return (await apiRequest(`/visits${query}`, { schema: VisitListSchema, signal })).visits;
+/** One page of the company's visits (see shared/schemas/list-pages.ts for the parameters). */
+export async function getVisits(params: VisitListParams = {}, signal?: AbortSignal): Promise<VisitPage> {
+  return apiRequest(`/visits${listQueryString(params)}`, { schema: VisitPageSchema, signal });
 }
 
 export async function getVisit(id: string, signal?: AbortSignal): Promise<Visit> {
@@ -100,8 +97,9 @@ export function sendReport({ visitId, to }: { visitId: string; to: string }): Pr
   return apiRequest(`/visits/${visitId}/report/send`, { method: "POST", body: { to, timeZone: viewerTimeZone() }, schema: z.object({ sentTo: z.string() }) });
 }
 
-export const visitsQueryOptions = (filter: { status?: VisitStatus; equipmentId?: string } = {}) =>
-  queryOptions({ queryKey: ["visits", "list", filter], queryFn: ({ signal }) => getVisits(filter, signal) });
+/** The key holds every parameter, cursor included: each page of each order is its own entry. */
+export const visitsQueryOptions = (params: VisitListParams = {}) =>
+  queryOptions({ queryKey: ["visits", "list", params], queryFn: ({ signal }) => getVisits(params, signal) });
 
 export const visitQueryOptions = (id: string) =>
   queryOptions({
@@ -111,7 +109,9 @@ export const visitQueryOptions = (id: string) =>
     refetchInterval: (query) => (query.state.data?.status === "signed-off" ? false : LIVE_REFRESH_MS),
   });
 
-export const useVisits = (filter: { status?: VisitStatus; equipmentId?: string } = {}) => useQuery(visitsQueryOptions(filter));
+/** A page of visits; while the next page (or another order) loads, the last one stays on screen. */
+export const useVisits = (params: VisitListParams = {}, { enabled = true } = {}) =>
+  useQuery({ ...visitsQueryOptions(params), placeholderData: keepPreviousData, enabled });
 export const useVisit = (id: string) => useQuery(visitQueryOptions(id));
 
 function useVisitMutation<TVariables extends { visitId: string }, TResult>(mutationFn: (variables: TVariables) => Promise<TResult>, alsoRefresh: readonly string[][] = []) {

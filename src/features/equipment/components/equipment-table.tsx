@@ -1,23 +1,23 @@
 import { createColumnHelper, useTable, type SortingState } from "@tanstack/react-table";
-import { useDeferredValue, useId, useMemo, useState } from "react";
+import { useId, useMemo, useState, type ReactNode } from "react";
 import { Link } from "react-router-dom";
 import { listRefrigerants } from "@shared/engine/index.ts";
 import type { SafetyClass } from "@shared/content/safety-classes.ts";
 import { EQUIPMENT_KINDS, type Equipment } from "@shared/schemas/equipment.ts";
+import type { EquipmentSort } from "@shared/schemas/list-pages.ts";
+import { Button } from "@/components/ui/button/button.tsx";
+import { PageControls } from "@/components/ui/data-table/page-controls.tsx";
 import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
 import { SortableTable, sortableTableFeatures, SortIcon } from "@/components/ui/data-table/sortable-table.tsx";
 import { paths } from "@/config/paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
-import {
-  capitalise,
-  equipmentSearchText,
-  matchesSearch,
-  meteringSummary,
-  totalFactoryChargeKg,
-} from "../utils/nameplate-text.ts";
+import { capitalise, meteringSummary, totalFactoryChargeKg } from "../utils/nameplate-text.ts";
 import { SearchInput } from "@/components/ui/search-input/search-input.tsx";
+import { useCursorPages } from "@/hooks/use-cursor-pages.ts";
+import { useDebouncedValue } from "@/hooks/use-debounced-value.ts";
+import { useEquipmentList } from "@/lib/api/equipment.ts";
 
-/** One table row: the unit plus what the columns sort and search by. */
+/** One table row: the unit plus what the columns show. */
 export interface EquipmentRow {
   id: string;
   name: string;
@@ -30,7 +30,6 @@ export interface EquipmentRow {
   circuitCount: number;
   metering: string;
   totalChargeKg: number;
-  searchText: string;
 }
 
 export function toEquipmentRows(equipment: readonly Equipment[]): EquipmentRow[] {
@@ -47,7 +46,6 @@ export function toEquipmentRows(equipment: readonly Equipment[]): EquipmentRow[]
     circuitCount: unit.circuits.length,
     metering: meteringSummary(unit.circuits),
     totalChargeKg: totalFactoryChargeKg(unit.circuits),
-    searchText: equipmentSearchText(unit),
   }));
 }
 
@@ -56,7 +54,6 @@ const column = createColumnHelper<typeof sortableTableFeatures, EquipmentRow>();
 const columns = column.columns([
   column.accessor("name", {
     header: "Unit",
-    sortFn: "alphanumeric",
     cell: (info) => (
       <Link
         to={paths.equipment.detail.getHref(info.row.original.id)}
@@ -68,14 +65,10 @@ const columns = column.columns([
   }),
   column.accessor("kind", {
     header: "Kind",
-    sortFn: "text",
-    // The kind filter is a choice from a list, so it matches the whole word exactly.
-    filterFn: (row, columnId, value: string) => row.getValue(columnId) === value,
     cell: (info) => <span>{capitalise(info.getValue())}</span>,
   }),
   column.accessor("place", {
     header: "Site · customer",
-    sortFn: "text",
     cell: (info) => (
       <span className="flex flex-col">
         <span>{info.row.original.siteName}</span>
@@ -85,7 +78,6 @@ const columns = column.columns([
   }),
   column.accessor("refrigerant", {
     header: "Refrigerant",
-    sortFn: "alphanumeric",
     cell: (info) => (
       <span className="flex flex-wrap items-center gap-2">
         <span className="num font-semibold">{info.getValue()}</span>
@@ -95,15 +87,23 @@ const columns = column.columns([
   }),
   column.accessor("circuitCount", {
     header: "Circuits · metering",
-    sortFn: "basic",
     cell: (info) => <span className="num">{info.row.original.metering}</span>,
   }),
   column.accessor("totalChargeKg", {
     header: "Factory charge",
-    sortFn: "basic",
     cell: (info) => <span className="num">{formatNumber(info.getValue(), 2)} kg</span>,
   }),
 ]);
+
+/** The server's sort for each column id. */
+const SERVER_SORTS: Record<string, EquipmentSort> = {
+  name: "name",
+  kind: "kind",
+  place: "place",
+  refrigerant: "refrigerant",
+  circuitCount: "circuits",
+  totalChargeKg: "factoryCharge",
+};
 
 const SORT_CHOICES = [
   { value: "name", label: "Unit name" },
@@ -116,33 +116,63 @@ const SORT_CHOICES = [
 
 /**
  * The company's units: a sortable table on tablets and desktops, a column of cards on phones
- * (a wide table is unreadable at arm's length on a roof), both fed by the same filtered,
- * sorted row model.
+ * (a wide table is unreadable at arm's length on a roof), both showing the page the server
+ * searched, filtered and sorted (an organisation can look after thousands of units).
+ * `empty` shows when the company has no unit at all.
  */
-export function EquipmentTable({ equipment }: { equipment: readonly Equipment[] }) {
-  const rows = useMemo(() => toEquipmentRows(equipment), [equipment]);
+export function EquipmentTable({ empty }: { empty?: ReactNode }) {
   const [query, setQuery] = useState("");
   const [kind, setKind] = useState("");
   const [sorting, setSorting] = useState<SortingState>([{ id: "name", desc: false }]);
-  const deferredQuery = useDeferredValue(query);
+  const search = useDebouncedValue(query.trim());
+  const current = sorting[0] ?? { id: "name", desc: false };
+  const sort = SERVER_SORTS[current.id] ?? "name";
+  const dir = current.desc ? "desc" : "asc";
+  const pages = useCursorPages(JSON.stringify([search, kind, sort, dir]));
+  const list = useEquipmentList({
+    q: search || undefined,
+    kind: (kind || undefined) as (typeof EQUIPMENT_KINDS)[number] | undefined,
+    sort,
+    dir,
+    cursor: pages.cursor,
+  });
+  const rows = useMemo(() => toEquipmentRows(list.data?.equipment ?? []), [list.data]);
   const searchId = useId();
   const kindId = useId();
   const sortId = useId();
 
-  const columnFilters = useMemo(() => (kind ? [{ id: "kind", value: kind }] : []), [kind]);
   const table = useTable({
     features: sortableTableFeatures,
     columns,
     data: rows,
     getRowId: (row) => row.id,
-    state: { sorting, globalFilter: deferredQuery, columnFilters },
+    state: { sorting },
     onSortingChange: setSorting,
-    // The search looks at every word of the unit (serial and model too), not only the columns shown.
-    globalFilterFn: (row, _columnId, filterValue: string) => matchesSearch(row.original.searchText, filterValue),
+    // The rows come searched and sorted from the server.
+    manualSorting: true,
+    manualFiltering: true,
   });
   const shown = table.getRowModel().rows;
-  const kindsPresent = EQUIPMENT_KINDS.filter((candidate) => rows.some((row) => row.kind === candidate));
-  const current = sorting[0];
+  const nextCursor = list.data?.nextCursor ?? null;
+
+  if (list.isPending) {
+    return (
+      <p role="status" className="rounded-card border-2 border-rule bg-surface p-6 text-center text-muted">
+        Loading equipment…
+      </p>
+    );
+  }
+  if (list.isError && !list.data) {
+    return (
+      <div role="alert" className="space-y-2 rounded-card border-2 border-fault bg-surface p-4">
+        <p className="font-semibold text-fault">⚠ The equipment list did not load: {list.error.message}</p>
+        <Button variant="secondary" onClick={() => void list.refetch()}>
+          Try again
+        </Button>
+      </div>
+    );
+  }
+  if (pages.pageNumber === 1 && rows.length === 0 && !search && !kind && !list.isPlaceholderData && empty) return <>{empty}</>;
 
   return (
     <div className="space-y-4">
@@ -164,7 +194,7 @@ export function EquipmentTable({ equipment }: { equipment: readonly Equipment[] 
             className="mt-1 block min-h-14 w-full rounded-card border-2 border-rule bg-surface px-3 text-base"
           >
             <option value="">All kinds</option>
-            {kindsPresent.map((candidate) => (
+            {EQUIPMENT_KINDS.map((candidate) => (
               <option key={candidate} value={candidate}>
                 {capitalise(candidate)}
               </option>
@@ -173,15 +203,20 @@ export function EquipmentTable({ equipment }: { equipment: readonly Equipment[] 
         </div>
       </div>
 
+      {list.isError && (
+        <p role="alert" className="font-medium text-fault">
+          ⚠ The equipment list did not load: {list.error.message}
+        </p>
+      )}
       <p className="text-sm text-muted" aria-live="polite">
-        {shown.length === rows.length
-          ? `${rows.length} ${rows.length === 1 ? "unit" : "units"}`
-          : `${shown.length} of ${rows.length} units`}
+        {list.isPlaceholderData
+          ? "Loading…"
+          : `${rows.length}${nextCursor ? "+" : ""} ${rows.length === 1 && !nextCursor ? "unit" : "units"}${search || kind ? " found" : ""}`}
       </p>
 
       {shown.length === 0 ? (
         <p className="rounded-card border-2 border-dashed border-rule p-6 text-center">
-          No unit matches{deferredQuery ? ` “${deferredQuery}”` : ""}
+          No unit matches{search ? ` “${search}”` : ""}
           {kind ? ` among ${kind} units` : ""}. Clear the search or choose all kinds.
         </p>
       ) : (
@@ -248,6 +283,15 @@ export function EquipmentTable({ equipment }: { equipment: readonly Equipment[] 
           <SortableTable table={table} caption="Equipment, sortable by each column" words={{ asc: "(sorted A to Z, low to high)", desc: "(sorted Z to A, high to low)" }} />
         </>
       )}
+      <PageControls
+        noun="units"
+        pageNumber={pages.pageNumber}
+        shown={rows.length}
+        hasNext={nextCursor !== null}
+        loading={list.isPlaceholderData}
+        onPrevious={pages.previous}
+        onNext={() => nextCursor && pages.next(nextCursor)}
+      />
     </div>
   );
 }

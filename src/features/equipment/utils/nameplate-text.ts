@@ -40,15 +40,8 @@ export function equipmentSearchText(unit: Equipment): string {
     .toLowerCase();
 }
 
-/** Matches "r32", "32", "R-32" alike, and every word of the query anywhere in the text. */
-export function matchesSearch(searchText: string, query: string): boolean {
-  const words = query.toLowerCase().split(/\s+/).filter(Boolean);
-  const compact = searchText.replace(/[\s\-–]/g, "");
-  return words.every((word) => {
-    const bare = word.replace(/[-–]/g, "");
-    return searchText.includes(word) || compact.includes(bare) || compact.includes(bare.replace(/^r(?=\d)/, ""));
-  });
-}
+/** The one search rule, shared with the server's SQL (shared/format/search-terms.ts). */
+export { matchesSearch } from "@shared/format/search-terms.ts";
 
 /** "packaged rooftop" → "Packaged rooftop": kinds are stored lower-case, shown as a label. */
 export function capitalise(text: string): string {

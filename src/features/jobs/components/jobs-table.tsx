@@ -1,25 +1,32 @@
 import { createColumnHelper, useTable, type SortingState } from "@tanstack/react-table";
-import { useDeferredValue, useId, useMemo, useState } from "react";
+import { useId, useState, type ReactNode } from "react";
 import { Link } from "react-router-dom";
-import { visitReasonText, type VisitSummary } from "@shared/schemas/visits.ts";
+import type { VisitSort } from "@shared/schemas/list-pages.ts";
+import { visitReasonText, type VisitStatus, type VisitSummary } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
+import { PageControls } from "@/components/ui/data-table/page-controls.tsx";
 import { SortableTable, sortableTableFeatures } from "@/components/ui/data-table/sortable-table.tsx";
+import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
 import { SearchInput } from "@/components/ui/search-input/search-input.tsx";
+import { useCursorPages } from "@/hooks/use-cursor-pages.ts";
+import { useDebouncedValue } from "@/hooks/use-debounced-value.ts";
+import { useVisits } from "@/lib/api/visits.ts";
 
 interface JobRow extends VisitSummary {
-  startedAtMs: number;
   crew: string;
-  searchText: string;
 }
+
+/** The column ids the server sorts by (the table's ids are the server's names). */
+const SERVER_SORTS: Record<string, VisitSort> = { startedAt: "startedAt", equipmentName: "equipmentName", reason: "reason", status: "status" };
+const DEFAULT_SORTING: SortingState = [{ id: "startedAt", desc: true }];
 
 const column = createColumnHelper<typeof sortableTableFeatures, JobRow>();
 
 const columns = column.columns([
-  column.accessor("startedAtMs", {
+  column.accessor("startedAt", {
     header: "Started",
-    sortFn: "basic",
     sortDescFirst: true,
     cell: (info) => (
       <Link
@@ -32,7 +39,6 @@ const columns = column.columns([
   }),
   column.accessor("equipmentName", {
     header: "Unit",
-    sortFn: "alphanumeric",
     cell: (info) => (
       <span className="flex flex-col">
         <Link
@@ -49,64 +55,73 @@ const columns = column.columns([
   }),
   column.accessor("reason", {
     header: "Reason",
-    sortFn: "alphanumeric",
     cell: (info) => <span className="line-clamp-2">{visitReasonText(info.getValue())}</span>,
   }),
   column.accessor("status", {
     header: "Status",
-    sortFn: "alphanumeric",
     cell: (info) => <VisitStatusBadge status={info.getValue()} />,
   }),
+  // Counted for the page shown only, so the server cannot sort the whole list by them.
   column.accessor("readingCount", {
     header: "Readings",
-    sortFn: "basic",
+    enableSorting: false,
     cell: (info) => <span className="num">{info.getValue()}</span>,
   }),
   column.accessor("crew", {
     header: "Crew",
-    sortFn: "alphanumeric",
+    enableSorting: false,
     cell: (info) => info.getValue() || <span className="text-muted">—</span>,
   }),
 ]);
 
-
-
-/** Visits across all equipment, newest first; cards on phones, a sortable table from tablets up. */
-export function JobsTable({ visits }: { visits: readonly VisitSummary[] }) {
-  const rows = useMemo<JobRow[]>(
-    () =>
-      visits.map((visit) => {
-        const crew = visit.technicians.map((person) => person.name).join(", ");
-        return {
-          ...visit,
-          startedAtMs: Date.parse(visit.startedAt),
-          crew,
-          searchText: [visit.equipmentName, visit.siteName, visit.customerName, visit.refrigerant, visit.reason, crew]
-            .join(" ")
-            .toLowerCase(),
-        };
-      }),
-    [visits],
-  );
+/**
+ * Visits across all equipment, newest first, a page at a time: the server searches, filters
+ * and sorts (an organisation can hold tens of thousands of visits). Cards on phones, a
+ * sortable table from tablets up. `empty` shows when the status has no visit at all.
+ */
+export function JobsTable({ status, empty }: { status: VisitStatus | null; empty: ReactNode }) {
   const [query, setQuery] = useState("");
-  const deferredQuery = useDeferredValue(query);
-  const [sorting, setSorting] = useState<SortingState>([{ id: "startedAtMs", desc: true }]);
+  const search = useDebouncedValue(query.trim());
+  const [sorting, setSorting] = useState<SortingState>(DEFAULT_SORTING);
+  const current = sorting[0] ?? DEFAULT_SORTING[0];
+  const sort = SERVER_SORTS[current.id] ?? "startedAt";
+  const dir = current.desc ? "desc" : "asc";
+  const pages = useCursorPages(JSON.stringify([status, search, sort, dir]));
+  const visits = useVisits({ status: status ?? undefined, q: search || undefined, sort, dir, cursor: pages.cursor });
+  const rows: JobRow[] = (visits.data?.visits ?? []).map((visit) => ({ ...visit, crew: visit.technicians.map((person) => person.name).join(", ") }));
   const searchId = useId();
   const table = useTable({
     features: sortableTableFeatures,
     columns,
     data: rows,
     getRowId: (row) => row.id,
-    state: { sorting, globalFilter: deferredQuery },
+    state: { sorting },
     onSortingChange: setSorting,
-    globalFilterFn: (row, _columnId, filterValue: string) =>
-      filterValue
-        .toLowerCase()
-        .split(/\s+/)
-        .filter(Boolean)
-        .every((word) => row.original.searchText.includes(word)),
+    // The rows come sorted and filtered from the server.
+    manualSorting: true,
+    manualFiltering: true,
   });
-  const shown = table.getRowModel().rows;
+
+  if (visits.isPending) {
+    return (
+      <p role="status" className="rounded-card border-2 border-rule bg-surface p-6 text-center text-muted">
+        Loading visits…
+      </p>
+    );
+  }
+  if (visits.isError && !visits.data) {
+    return (
+      <div role="alert" className="space-y-2 rounded-card border-2 border-fault bg-surface p-4">
+        <p className="font-semibold text-fault">⚠ The visits did not load: {visits.error.message}</p>
+        <Button variant="secondary" onClick={() => void visits.refetch()}>
+          Try again
+        </Button>
+      </div>
+    );
+  }
+  const firstPage = pages.pageNumber === 1;
+  if (firstPage && rows.length === 0 && !search && !visits.isPlaceholderData) return <>{empty}</>;
+  const nextCursor = visits.data?.nextCursor ?? null;
 
   return (
     <div className="space-y-4">
@@ -116,47 +131,55 @@ export function JobsTable({ visits }: { visits: readonly VisitSummary[] }) {
         </label>
         <SearchInput id={searchId} value={query} onChange={setQuery} placeholder="Unit, site, reason, technician…" />
       </div>
-      <p className="text-sm text-muted" aria-live="polite">
-        {shown.length === rows.length
-          ? `${rows.length} ${rows.length === 1 ? "visit" : "visits"}`
-          : `${shown.length} of ${rows.length} visits`}
-      </p>
-      {shown.length === 0 ? (
-        <p className="rounded-card border-2 border-dashed border-rule p-6 text-center">
-          No visit matches “{deferredQuery}”.
+      {visits.isError && (
+        <p role="alert" className="font-medium text-fault">
+          ⚠ The visits did not load: {visits.error.message}
         </p>
+      )}
+      <p className="text-sm text-muted" aria-live="polite">
+        {visits.isPlaceholderData
+          ? "Loading…"
+          : search
+            ? `${rows.length}${nextCursor ? "+" : ""} ${rows.length === 1 && !nextCursor ? "visit matches" : "visits match"} “${search}”`
+            : `${rows.length}${nextCursor ? "+" : ""} ${rows.length === 1 && !nextCursor ? "visit" : "visits"}`}
+      </p>
+      {rows.length === 0 ? (
+        <p className="rounded-card border-2 border-dashed border-rule p-6 text-center">No visit matches “{search}”.</p>
       ) : (
         <>
           <ul className="space-y-3 md:hidden" aria-label="Visits">
-            {shown.map((row) => {
-              const visit = row.original;
-              return (
-                <li key={row.id}>
-                  <Link
-                    to={paths.visits.detail.getHref(visit.id)}
-                    className="block space-y-2 rounded-card border-2 border-rule bg-surface p-4 hover:border-ink"
-                  >
-                    <span className="flex flex-wrap items-center justify-between gap-2">
-                      <span className="font-semibold text-accent underline underline-offset-4">
-                        {visit.equipmentName}
-                      </span>
-                      <VisitStatusBadge status={visit.status} />
-                    </span>
-                    <span className="block">{visitReasonText(visit.reason)}</span>
-                    <span className="block text-sm text-muted">
-                      <span className="num">{formatDateTime(visit.startedAt)}</span> · {visit.siteName} ·{" "}
-                      <span className="num">{visit.readingCount}</span>{" "}
-                      {visit.readingCount === 1 ? "reading" : "readings"}
-                      {visit.crew && ` · ${visit.crew}`}
-                    </span>
-                  </Link>
-                </li>
-              );
-            })}
+            {rows.map((visit) => (
+              <li key={visit.id}>
+                <Link
+                  to={paths.visits.detail.getHref(visit.id)}
+                  className="block space-y-2 rounded-card border-2 border-rule bg-surface p-4 hover:border-ink"
+                >
+                  <span className="flex flex-wrap items-center justify-between gap-2">
+                    <span className="font-semibold text-accent underline underline-offset-4">{visit.equipmentName}</span>
+                    <VisitStatusBadge status={visit.status} />
+                  </span>
+                  <span className="block">{visitReasonText(visit.reason)}</span>
+                  <span className="block text-sm text-muted">
+                    <span className="num">{formatDateTime(visit.startedAt)}</span> · {visit.siteName} ·{" "}
+                    <span className="num">{visit.readingCount}</span> {visit.readingCount === 1 ? "reading" : "readings"}
+                    {visit.crew && ` · ${visit.crew}`}
+                  </span>
+                </Link>
+              </li>
+            ))}
           </ul>
-          <SortableTable table={table} caption="Visits, newest first; sortable by each column" words={{ asc: "(oldest or A first)", desc: "(newest or Z first)" }} />
+          <SortableTable table={table} caption="Visits, newest first; sortable by start, unit, reason and status" words={{ asc: "(oldest or A first)", desc: "(newest or Z first)" }} />
         </>
       )}
+      <PageControls
+        noun="visits"
+        pageNumber={pages.pageNumber}
+        shown={rows.length}
+        hasNext={nextCursor !== null}
+        loading={visits.isPlaceholderData}
+        onPrevious={pages.previous}
+        onNext={() => nextCursor && pages.next(nextCursor)}
+      />
     </div>
   );
 }

@@ -2,14 +2,25 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { Play } from "lucide-react";
 import { useId, useState } from "react";
 import { useForm, type UseFormRegisterReturn } from "react-hook-form";
+import type { Equipment } from "@shared/schemas/equipment.ts";
 import { VisitCreateSchema, type Visit } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField } from "@/components/ui/field/field.tsx";
+import { SearchInput } from "@/components/ui/search-input/search-input.tsx";
+import { useDebouncedValue } from "@/hooks/use-debounced-value.ts";
 import { useEquipmentList } from "@/lib/api/equipment.ts";
 import { useCreateVisit } from "@/lib/api/visits.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 import { cn } from "@/lib/cn.ts";
 
+/** Units listed under the search at once: a select this long is still quick to scan. */
+const PICKER_PAGE = 20;
+
+/**
+ * The unit for the visit: a search the server answers (a moment after typing stops) narrows the
+ * choice below it, so a company with thousands of units never loads them all. The chosen unit
+ * stays a choice while another search runs, so what the form holds is always on screen.
+ */
 function EquipmentPicker({
   error,
   registration,
@@ -17,18 +28,53 @@ function EquipmentPicker({
   error?: string;
   registration: UseFormRegisterReturn<"equipmentId">;
 }) {
-  const equipment = useEquipmentList();
-  if (equipment.isPending) return <p>Loading equipment…</p>;
-  if (equipment.isError) return <FormAlert>{equipment.error.message}</FormAlert>;
+  const [query, setQuery] = useState("");
+  const search = useDebouncedValue(query.trim());
+  const equipment = useEquipmentList({ q: search || undefined, limit: PICKER_PAGE });
+  const [chosen, setChosen] = useState<Equipment | null>(null);
+  const searchId = useId();
+  const found = equipment.data?.equipment ?? [];
+  const choices = chosen && !found.some((unit) => unit.id === chosen.id) ? [chosen, ...found] : found;
+  const searching = query.trim() !== search || equipment.isPlaceholderData;
   return (
-    <SelectField label="Equipment" error={error} {...registration}>
-      <option value="">Choose the unit…</option>
-      {equipment.data.map((unit) => (
-        <option key={unit.id} value={unit.id}>
-          {unit.name} · {unit.siteName} ({unit.refrigerant})
-        </option>
-      ))}
-    </SelectField>
+    <div className="space-y-2">
+      <div>
+        <label htmlFor={searchId} className="font-medium">
+          Find the unit
+        </label>
+        <SearchInput id={searchId} value={query} onChange={setQuery} placeholder="Name, site, customer, R32…" />
+      </div>
+      {equipment.isError && <FormAlert>{equipment.error.message}</FormAlert>}
+      {equipment.isPending ? (
+        <p role="status">Loading equipment…</p>
+      ) : (
+        <SelectField
+          label="Equipment"
+          error={error}
+          hint={
+            searching
+              ? "Searching…"
+              : found.length === 0
+                ? `No unit matches “${search}”.`
+                : equipment.data?.nextCursor
+                  ? `The first ${found.length} units${search ? " found" : ""}: search to narrow the list.`
+                  : undefined
+          }
+          {...registration}
+          onChange={(event) => {
+            setChosen(choices.find((unit) => unit.id === event.target.value) ?? null);
+            return registration.onChange(event);
+          }}
+        >
+          <option value="">Choose the unit…</option>
+          {choices.map((unit) => (
+            <option key={unit.id} value={unit.id}>
+              {unit.name} · {unit.siteName} ({unit.refrigerant})
+            </option>
+          ))}
+        </SelectField>
+      )}
+    </div>
   );
 }
 

@@ -1,9 +1,10 @@
 // @vitest-environment jsdom
 import "@testing-library/jest-dom/vitest";
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { cleanup, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { MemoryRouter } from "react-router-dom";
-import { afterEach, describe, expect, it } from "vitest";
+import { afterEach, describe, expect, it, vi } from "vitest";
 import type { Equipment } from "@shared/schemas/equipment.ts";
 import { EquipmentTable } from "@/features/equipment/components/equipment-table.tsx";
 
@@ -69,82 +70,126 @@ const units: Equipment[] = [
   },
 ];
 
+/**
+ * The server's side, as the table sees it: each request is recorded, and answered with the
+ * units `answer` picks for its query (the search, sort and paging themselves are the server's,
+ * tested in tests/server/list-paging.test.ts).
+ */
+function serve(answer: (params: URLSearchParams) => { equipment: Equipment[]; nextCursor: string | null }) {
+  const asked: URLSearchParams[] = [];
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async (input: RequestInfo | URL) => {
+      const url = new URL(String(input), "http://satura.test");
+      if (url.pathname !== "/api/equipment") return new Response(JSON.stringify({ message: "No such route" }), { status: 404 });
+      asked.push(url.searchParams);
+      return new Response(JSON.stringify(answer(url.searchParams)), { status: 200, headers: { "Content-Type": "application/json" } });
+    }),
+  );
+  return asked;
+}
+
 function renderTable() {
+  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   render(
-    <MemoryRouter>
-      <EquipmentTable equipment={units} />
-    </MemoryRouter>,
+    <QueryClientProvider client={queryClient}>
+      <MemoryRouter>
+        <EquipmentTable empty={<p>No equipment yet.</p>} />
+      </MemoryRouter>
+    </QueryClientProvider>,
   );
   // jsdom applies no media queries, so both layouts render; the table is the one checked here.
-  const table = screen.getByRole("table");
   const unitNames = () =>
-    within(table)
+    within(screen.getByRole("table"))
       .getAllByRole("row")
       .slice(1)
       .map((row) => within(row).getAllByRole("link")[0]!.textContent);
-  return { table, unitNames };
+  return { unitNames };
 }
 
-afterEach(cleanup);
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
 
 describe("EquipmentTable", () => {
-  it("lists every unit by name, A to Z, with the circuits and the total factory charge", () => {
-    const { table, unitNames } = renderTable();
-    expect(unitNames()).toEqual([
-      "RTU-1 packaged rooftop unit",
-      "Server cupboard wall split",
-      "Vaccine and stores cool room",
-    ]);
+  it("shows the page the server sent, in its order, with the circuits and the total factory charge", async () => {
+    serve(() => ({ equipment: units, nextCursor: null }));
+    const { unitNames } = renderTable();
+    await waitFor(() => expect(unitNames()).toEqual(["RTU-1 packaged rooftop unit", "Server cupboard wall split", "Vaccine and stores cool room"]));
     // 2 circuits × 4.2 kg = 8.40 kg in all.
-    const rooftop = within(table).getByRole("row", { name: /RTU-1/ });
+    const rooftop = within(screen.getByRole("table")).getByRole("row", { name: /RTU-1/ });
     expect(within(rooftop).getByText("8.40 kg")).toBeInTheDocument();
     expect(within(rooftop).getByText("2 × TXV")).toBeInTheDocument();
+    expect(screen.getByText("3 units")).toBeInTheDocument();
   });
 
-  it("shows each refrigerant's ISO 817 safety class beside it", () => {
-    const { table } = renderTable();
+  it("shows each refrigerant's ISO 817 safety class beside it", async () => {
+    serve(() => ({ equipment: units, nextCursor: null }));
+    renderTable();
+    const table = await screen.findByRole("table");
     // ISO 817 / ASHRAE 34 safety classes: R32 is A2L, R407C and R404A are A1.
     expect(within(within(table).getByRole("row", { name: /Server cupboard/ })).getByText("A2L")).toBeInTheDocument();
     expect(within(within(table).getByRole("row", { name: /RTU-1/ })).getByText("A1")).toBeInTheDocument();
   });
 
-  it("narrows the list to units matching the search, whichever way the refrigerant is typed", async () => {
+  it("asks the server once typing stops, and shows what it found", async () => {
     const user = userEvent.setup();
+    const asked = serve((params) => ({ equipment: params.get("q") ? [units[1]] : units, nextCursor: null }));
     const { unitNames } = renderTable();
-    const search = screen.getByLabelText("Find a unit");
-    // Technicians write R32, R-32 or just 32 for the same refrigerant (common practice).
-    for (const typed of ["R32", "r-32", "32"]) {
-      await user.clear(search);
-      await user.type(search, typed);
-      await waitFor(() => expect(unitNames()).toEqual(["Server cupboard wall split"]));
-    }
-    expect(screen.getByText("1 of 3 units")).toBeInTheDocument();
-    await user.clear(search);
-    await user.type(search, "SA21-44817");
+    await waitFor(() => expect(unitNames()).toHaveLength(3));
+    // Typed as fast as a phone's suggestion bar puts in a word.
+    await user.click(screen.getByLabelText("Find a unit"));
+    await user.paste("R-32");
+    await waitFor(() => expect(unitNames()).toEqual(["Server cupboard wall split"]), { timeout: 3000 });
+    // One request for the word once typing stops.
+    expect(asked.map((params) => params.get("q"))).toEqual([null, "R-32"]);
+    expect(screen.getByText("1 unit found")).toBeInTheDocument();
+  });
+
+  it("filters by kind on the server and says so when nothing matches", async () => {
+    const user = userEvent.setup();
+    const asked = serve((params) => ({ equipment: params.get("kind") ? [] : units, nextCursor: null }));
+    renderTable();
+    await screen.findByRole("table");
+    await user.selectOptions(screen.getByLabelText("Kind"), "freezer room");
+    expect(await screen.findByText(/No unit matches among freezer room units/)).toBeInTheDocument();
+    expect(asked.at(-1)!.get("kind")).toBe("freezer room");
+  });
+
+  it("sorts by factory charge on the server when its header is pressed, and reverses on a second press", async () => {
+    const user = userEvent.setup();
+    const asked = serve(() => ({ equipment: units, nextCursor: null }));
+    renderTable();
+    const table = await screen.findByRole("table");
+    const header = within(table).getByRole("button", { name: /Factory charge/ });
+    await user.click(header);
+    await waitFor(() => expect(asked.at(-1)!.get("sort")).toBe("factoryCharge"));
+    const first = asked.at(-1)!.get("dir");
+    await user.click(within(table).getByRole("button", { name: /Factory charge/ }));
+    await waitFor(() => expect(asked.at(-1)!.get("dir")).not.toBe(first));
+    expect([first, asked.at(-1)!.get("dir")].sort()).toEqual(["asc", "desc"]);
+  });
+
+  it("pages with the cursor the server gave, and goes back to the first page", async () => {
+    const user = userEvent.setup();
+    const asked = serve((params) =>
+      params.get("cursor") === "after-rtu" ? { equipment: units.slice(1), nextCursor: null } : { equipment: units.slice(0, 1), nextCursor: "after-rtu" },
+    );
+    const { unitNames } = renderTable();
+    await waitFor(() => expect(unitNames()).toEqual(["RTU-1 packaged rooftop unit"]));
+    expect(screen.getByRole("button", { name: "Previous page of units" })).toBeDisabled();
+    await user.click(screen.getByRole("button", { name: "Next page of units" }));
+    await waitFor(() => expect(unitNames()).toEqual(["Server cupboard wall split", "Vaccine and stores cool room"]));
+    expect(asked.at(-1)!.get("cursor")).toBe("after-rtu");
+    expect(screen.getByRole("button", { name: "Next page of units" })).toBeDisabled();
+    await user.click(screen.getByRole("button", { name: "Previous page of units" }));
     await waitFor(() => expect(unitNames()).toEqual(["RTU-1 packaged rooftop unit"]));
   });
 
-  it("filters by kind and says so when nothing matches", async () => {
-    const user = userEvent.setup();
-    const { unitNames } = renderTable();
-    await user.selectOptions(screen.getByLabelText("Kind"), "cool room");
-    expect(unitNames()).toEqual(["Vaccine and stores cool room"]);
-    await user.type(screen.getByLabelText("Find a unit"), "R32");
-    expect(await screen.findByText(/No unit matches “R32” among cool room units/)).toBeInTheDocument();
-  });
-
-  it("sorts by factory charge when its header is pressed, and reverses on a second press", async () => {
-    const user = userEvent.setup();
-    const { table, unitNames } = renderTable();
-    const header = within(table).getByRole("button", { name: /Factory charge/ });
-    await user.click(header);
-    const ascending = unitNames();
-    await user.click(header);
-    const descending = unitNames();
-    // 0.85 kg < 2.60 kg < 8.40 kg.
-    const lightestFirst = ["Server cupboard wall split", "Vaccine and stores cool room", "RTU-1 packaged rooftop unit"];
-    expect([ascending, descending]).toContainEqual(lightestFirst);
-    expect([ascending, descending]).toContainEqual([...lightestFirst].reverse());
-    expect(ascending).not.toEqual(descending);
+  it("shows the empty state when the company has no unit at all", async () => {
+    serve(() => ({ equipment: [], nextCursor: null }));
+    renderTable();
+    expect(await screen.findByText("No equipment yet.")).toBeInTheDocument();
   });
 });

@@ -1,0 +1,135 @@
+/**
+ * Keyset paging for the lists: a page ends at a row, and the next page starts strictly after
+ * that row's sort key and id. The database then reads rows in index order from that point,
+ * however deep the page, where an OFFSET would read and throw away every row before it; and
+ * rows added or removed meanwhile cannot make a row repeat or drop out between pages.
+ */
+import { and, asc, desc, sql, type AnyColumn, type SQL } from "drizzle-orm";
+import { searchTerms } from "@shared/format/search-terms.ts";
+import type { SortDirection } from "@shared/schemas/list-pages.ts";
+import { HttpError } from "../http/http-error.ts";
+
+/** How a key's value travels in the cursor: as Postgres prints it, cast back on the way in. */
+type KeyType = "text" | "timestamptz" | "numeric";
+
+/** One sort expression of a list. The row's id always follows as the tie-break. */
+export interface SortKey {
+  expr: SQL | AnyColumn;
+  type: KeyType;
+}
+
+interface Cursor {
+  values: string[];
+  id: string;
+}
+
+const BAD_CURSOR = "That cursor is not one this list gave out; start from the first page";
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+// Values as Postgres prints them (timestamps to the microsecond, which a JS Date would round:
+// two visits a few microseconds apart would then repeat or vanish between pages).
+const VALUE_SHAPES: Record<KeyType, RegExp> = {
+  // No NUL (PostgreSQL refuses it in text); other characters are compared, never run.
+  // eslint-disable-next-line no-control-regex -- finding the NUL is the point
+  text: /^[^\u0000]{0,500}$/,
+  timestamptz: /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?[+-]\d{2}(:\d{2})?$/,
+  numeric: /^-?\d{1,20}(\.\d{1,20})?$/,
+};
+
+/** The cursor names its sort and direction, so one given out for another order is refused, not misread. */
+export function encodeCursor(sort: string, direction: SortDirection, values: string[], id: string): string {
+  return Buffer.from(JSON.stringify({ s: sort, d: direction, v: values, id })).toString("base64url");
+}
+
+/** @throws HttpError 400 when the cursor was not made by `encodeCursor` for this sort and direction. */
+export function decodeCursor(raw: string, sort: string, direction: SortDirection, keys: readonly SortKey[]): Cursor {
+  const refuse = () => new HttpError(400, BAD_CURSOR, { cursor: BAD_CURSOR });
+  let parsed: unknown;
+  try {
+    parsed = JSON.parse(Buffer.from(raw, "base64url").toString("utf8"));
+  } catch {
+    throw refuse();
+  }
+  if (typeof parsed !== "object" || parsed === null) throw refuse();
+  const { s, d, v, id } = parsed as Record<string, unknown>;
+  if (s !== sort || d !== direction) {
+    throw new HttpError(400, "That cursor belongs to another sort order; start from the first page", { cursor: "The sort order changed" });
+  }
+  if (typeof id !== "string" || !UUID.test(id) || !Array.isArray(v) || v.length !== keys.length) throw refuse();
+  const values = v.map((value, index) => {
+    if (typeof value !== "string" || !VALUE_SHAPES[keys[index].type].test(value)) throw refuse();
+    return value;
+  });
+  return { values, id };
+}
+
+const typed = (value: string, type: KeyType) =>
+  type === "timestamptz" ? sql`cast(${value} as timestamptz)` : type === "numeric" ? sql`cast(${value} as numeric)` : sql`${value}`;
+
+/**
+ * Rows strictly after the cursor in this order. The first key's bound is also written on its
+ * own, so the planner can start an index scan there instead of filtering every row.
+ */
+export function afterCursor(keys: readonly SortKey[], idColumn: AnyColumn, direction: SortDirection, cursor: Cursor): SQL {
+  const beyond = direction === "asc" ? sql.raw(">") : sql.raw("<");
+  const reaches = direction === "asc" ? sql.raw(">=") : sql.raw("<=");
+  const left = sql.join([...keys.map((key) => sql`${key.expr}`), sql`${idColumn}`], sql`, `);
+  const right = sql.join([...keys.map((key, index) => typed(cursor.values[index], key.type)), sql`cast(${cursor.id} as uuid)`], sql`, `);
+  return and(sql`${keys[0].expr} ${reaches} ${typed(cursor.values[0], keys[0].type)}`, sql`(${left}) ${beyond} (${right})`)!;
+}
+
+export function keysetOrder(keys: readonly SortKey[], idColumn: AnyColumn, direction: SortDirection): SQL[] {
+  const by = direction === "asc" ? asc : desc;
+  return [...keys.map((key) => by(key.expr)), by(idColumn)];
+}
+
+/** The keys as text in the select list, to build the next cursor from the page's last row. */
+export function cursorColumns(keys: readonly SortKey[]): Record<string, SQL.Aliased<string>> {
+  return Object.fromEntries(keys.map((key, index) => [`cursorKey${index}`, sql<string>`(${key.expr})::text`.as(`cursor_key_${index}`)]));
+}
+
+/**
+ * Takes `limit + 1` rows as read: the extra one only says that another page exists.
+ * @returns the page's rows and the cursor after its last row (null on the last page).
+ */
+export function pageOf<Row extends { id: string }>(rows: Row[], limit: number, keys: readonly SortKey[], sort: string, direction: SortDirection) {
+  const page = rows.slice(0, limit) as (Row & Record<string, unknown>)[];
+  const last = page.at(-1);
+  const nextCursor =
+    rows.length > limit && last
+      ? encodeCursor(sort, direction, keys.map((_key, index) => String(last[`cursorKey${index}`])), last.id)
+      : null;
+  // The keys were read for the cursor only; the rows go out without them.
+  const withoutKeys = page.map((row) => {
+    const copy: Record<string, unknown> = { ...row };
+    keys.forEach((_key, index) => delete copy[`cursorKey${index}`]);
+    return copy as Row;
+  });
+  return { page: withoutKeys, nextCursor };
+}
+
+/**
+ * The search of shared/format/search-terms.ts in SQL over a lower-case text expression: each
+ * word found in the text as typed, or without dashes (or a leading "r") in the text with its
+ * spaces and dashes removed, or by `alsoMatches` (e.g. a crew member's name). Words are bound
+ * parameters and matched with strpos, so % and _ are plain characters.
+ */
+export function matchesSearchSql(searchText: SQL, query: string | undefined, alsoMatches?: (word: string) => SQL): SQL | undefined {
+  const terms = query ? searchTerms(query) : [];
+  if (terms.length === 0) return undefined;
+  // The text is built once per row (OFFSET 0 keeps the planner from copying the expression
+  // into every strpos); the compact form drops what compactSearchText drops on the client
+  // (white space, hyphen, en dash), with translate(), several times cheaper than a regex.
+  const plain = sql.raw("search.plain");
+  const compact = sql.raw("search.compact");
+  const every = sql.join(
+    terms.map(
+      (term) =>
+        sql`(strpos(${plain}, ${term.word}) > 0 or strpos(${compact}, ${term.bare}) > 0 or strpos(${compact}, ${term.withoutR}) > 0${alsoMatches ? sql` or ${alsoMatches(term.word)}` : sql``})`,
+    ),
+    sql` and `,
+  );
+  return sql`exists (select 1 from (select words.plain, translate(words.plain, ' -–' || chr(9) || chr(10) || chr(13), '') as compact from (select ${searchText} as plain offset 0) as words offset 0) as search where ${every})`;
+}
+
+/** lower(concat_ws(' ', …)): the record's words in one lower-case text, nulls skipped. */
+export const searchTextOf = (...parts: (SQL | AnyColumn)[]) => sql`lower(concat_ws(' ', ${sql.join(parts.map((part) => sql`${part}`), sql`, `)}))`;
