@@ -17,6 +17,7 @@ import {
   VISIT_EVENT_LABELS,
   VISIT_STATUS_LABELS,
   VisitCreateSchema,
+  VisitDetailQuerySchema,
   VisitStatusSchema,
   VoidBodySchema,
   type ReviewAction,
@@ -32,7 +33,9 @@ import {
   createVisit,
   findPhoto,
   findVisit,
+  getVisitDelta,
   getVisitDetail,
+  getVisitHead,
   insertAdjustment,
   insertComment,
   insertPhoto,
@@ -53,6 +56,7 @@ import { visitReportMail } from "../report/visit-report-mail.ts";
 import { chargeMovementKind, linkToMovement, recordChargeEntry } from "../register/charge-entry.ts";
 import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
 import { readingInput, type ReadingContext } from "../visits/reading-input.ts";
+import { matchesIfNoneMatch, revisionSince, visitEtag } from "../visits/visit-revision.ts";
 import { voidVisitRecord } from "../visits/void-record.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
@@ -130,10 +134,23 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     res.status(201).json({ visit: await getVisitDetail(db, organisationId, id) });
   });
 
+  // The open visit is polled every few seconds: answer from the visit's row alone when the
+  // client already holds its revision (304), else only what changed since the revision it
+  // names (a delta), else the whole visit. The ETag is ours (the revision), so Express's own
+  // body hash, which needs the body built first, never runs here.
   router.get("/:id", async (req, res) => {
-    const visit = await getVisitDetail(db, getAuth(res).organisationId, parseId(req.params.id, "Visit"));
-    if (!visit) throw notFound("Visit");
-    res.json({ visit });
+    const { organisationId } = getAuth(res);
+    const { since } = VisitDetailQuerySchema.parse(req.query);
+    const head = await getVisitHead(db, organisationId, parseId(req.params.id, "Visit"));
+    if (!head) throw notFound("Visit");
+    const etag = visitEtag(head.token);
+    res.setHeader("ETag", etag);
+    // Always revalidate: a visit is live, and a cached copy must be checked against its revision.
+    res.setHeader("Cache-Control", "private, no-cache");
+    if (matchesIfNoneMatch(req.get("if-none-match"), etag)) return void res.status(304).end();
+    const sinceRevision = revisionSince(since, head.revision);
+    if (sinceRevision !== undefined) return void res.json({ delta: { ...(await getVisitDelta(db, organisationId, head, sinceRevision)), since } });
+    res.json({ visit: await getVisitDetail(db, organisationId, head.id, head) });
   });
 
   // The body holds measured values only (strict); the server adds the nameplate, the RLA and

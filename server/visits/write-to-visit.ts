@@ -5,8 +5,13 @@
  * that is already closed. Review steps (submit, sign off, send back, reopen) take the same
  * lock. On PGlite, where transactions already run one at a time, the lock costs nothing and
  * keeps the code right on a real PostgreSQL.
+ *
+ * Taking the lock also bumps the visit's revision (one UPDATE … RETURNING both locks and bumps),
+ * and every run-log row written in the transaction is stamped with the new revision by a
+ * trigger (migration 0014): so the visit detail's ETag and deltas (server/visits/visit-revision.ts)
+ * see every write. A refused or failed write rolls the bump back with everything else.
  */
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { STATUSES_OPEN_FOR_ENTRIES, type VisitStatus } from "@shared/schemas/visits.ts";
 import type { Database } from "../db/client.ts";
 import { visits } from "../db/schema.ts";
@@ -31,10 +36,10 @@ export function writeToVisit<T>(
 ): Promise<T> {
   return db.transaction(async (tx) => {
     const [visit] = await tx
-      .select()
-      .from(visits)
+      .update(visits)
+      .set({ revision: sql`${visits.revision} + 1` })
       .where(and(eq(visits.organisationId, organisationId), eq(visits.id, visitId)))
-      .for("update");
+      .returning();
     if (!visit) throw notFound("Visit");
     if (!allow.includes(visit.status)) {
       if (refuse) throw refuse(visit.status);
