@@ -15,7 +15,8 @@ BEGIN
   RETURN NEW;
 END;
 $$;--> statement-breakpoint
-CREATE TRIGGER "readings_stamp_revision" BEFORE INSERT OR UPDATE ON "readings" FOR EACH ROW EXECUTE FUNCTION "stamp_visit_revision"();--> statement-breakpoint
+-- Rows a CSV import is still staging are not records yet: they are stamped when the import commits them.
+CREATE TRIGGER "readings_stamp_revision" BEFORE INSERT OR UPDATE ON "readings" FOR EACH ROW WHEN (NEW.pending_import_id IS NULL) EXECUTE FUNCTION "stamp_visit_revision"();--> statement-breakpoint
 CREATE TRIGGER "adjustments_stamp_revision" BEFORE INSERT OR UPDATE ON "adjustments" FOR EACH ROW EXECUTE FUNCTION "stamp_visit_revision"();--> statement-breakpoint
 CREATE TRIGGER "visit_comments_stamp_revision" BEFORE INSERT OR UPDATE ON "visit_comments" FOR EACH ROW EXECUTE FUNCTION "stamp_visit_revision"();--> statement-breakpoint
 CREATE TRIGGER "photos_stamp_revision" BEFORE INSERT OR UPDATE ON "photos" FOR EACH ROW EXECUTE FUNCTION "stamp_visit_revision"();--> statement-breakpoint

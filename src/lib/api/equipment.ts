@@ -43,7 +43,12 @@ export const equipmentListQueryOptions = () =>
   queryOptions({ queryKey: ["equipment", "list"], queryFn: ({ signal }) => getEquipmentList(signal) });
 
 export const equipmentDetailQueryOptions = (id: string) =>
-  queryOptions({ queryKey: ["equipment", "detail", id], queryFn: ({ signal }) => getEquipmentDetail(id, signal) });
+  queryOptions({
+    queryKey: ["equipment", "detail", id],
+    queryFn: ({ signal }) => getEquipmentDetail(id, signal),
+    // Pages that learn the id from another answer (a visit) pass "" meanwhile: "/equipment/" is the whole list.
+    enabled: id !== "",
+  });
 
 export const sitesQueryOptions = () => queryOptions({ queryKey: ["sites", "list"], queryFn: ({ signal }) => getSites(signal) });
 
