@@ -7,6 +7,7 @@ import "./diagnose.bench.ts";
 import "./trend.bench.ts";
 import "./procedures.bench.ts";
 import "./import.bench.ts";
+import "./visit-poll.bench.ts";
 import { runRegisteredBenches } from "./bench-registry.ts";
 
 await runRegisteredBenches();

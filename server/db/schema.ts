@@ -264,6 +264,11 @@ export const visits = pgTable(
     signedOffAt: timestamp("signed_off_at", { withTimezone: true, mode: "date" }),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     startedAt: timestamp("started_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    /**
+     * Bumped once by every write to the visit (server/visits/write-to-visit.ts, under the row
+     * lock), so it orders the visit's writes: the detail's ETag and the `since` of a delta.
+     */
+    revision: integer("revision").notNull().default(0),
     ...timestamps,
   },
   (table) => [
@@ -315,11 +320,15 @@ export const readings = pgTable(
      * not records: every read skips them, and start-up removes any an interruption left.
      */
     pendingImportId: uuid("pending_import_id"),
+    /** The visit's revision when this row was last written (inserted, voided, imported): a trigger sets it (migration 0014). */
+    revision: integer("revision").notNull().default(0),
     ...voidColumns(),
     createdAt,
   },
   (table) => [
     index("readings_visit_idx").on(table.visitId, table.circuit, table.takenAt),
+    // A delta (what changed since a revision) reads only the changed rows of a long visit.
+    index("readings_visit_revision_idx").on(table.visitId, table.revision),
     index("readings_pending_import_idx").on(table.pendingImportId).where(sql`${table.pendingImportId} is not null`),
     voidComplete("readings", table),
   ],
@@ -349,6 +358,8 @@ export const adjustments = pgTable(
     /** The register movement this charge adjustment is; no ON DELETE action, like the register's own references. */
     movementId: uuid("movement_id").references((): AnyPgColumn => refrigerantMovements.id),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+    /** The visit's revision when this row was last written (inserted, voided, imported): a trigger sets it (migration 0014). */
+    revision: integer("revision").notNull().default(0),
     ...voidColumns(),
     createdAt,
   },
@@ -373,6 +384,8 @@ export const visitComments = pgTable(
     readingId: uuid("reading_id").references(() => readings.id, { onDelete: "cascade" }),
     authorId: uuid("author_id").references(() => users.id, { onDelete: "set null" }),
     body: text("body").notNull(),
+    /** The visit's revision when this row was last written (inserted, voided, imported): a trigger sets it (migration 0014). */
+    revision: integer("revision").notNull().default(0),
     createdAt,
   },
   (table) => [index("visit_comments_visit_idx").on(table.visitId, table.createdAt)],
@@ -396,6 +409,8 @@ export const photos = pgTable(
     mimeType: text("mime_type").notNull(),
     bytes: integer("bytes").notNull(),
     uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
+    /** The visit's revision when this row was last written (inserted, voided, imported): a trigger sets it (migration 0014). */
+    revision: integer("revision").notNull().default(0),
     createdAt,
   },
   (table) => [index("photos_visit_idx").on(table.visitId)],
@@ -755,6 +770,8 @@ export const visitEvents = pgTable(
     reason: text("reason"),
     actorId: uuid("actor_id").references(() => users.id, { onDelete: "set null" }),
     at: timestamp("at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    /** The visit's revision when this row was last written (inserted, voided, imported): a trigger sets it (migration 0014). */
+    revision: integer("revision").notNull().default(0),
   },
   (table) => [
     index("visit_events_visit_idx").on(table.visitId, table.at),

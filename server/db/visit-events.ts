@@ -2,7 +2,7 @@
  * A visit's audit trail (visit_events): review steps, reopening, voids and imports, with who,
  * when and why. Rows are only ever added, inside the same transaction as the change they record.
  */
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, gt } from "drizzle-orm";
 import type { VisitEvent, VisitEventAction, VoidableKind } from "@shared/schemas/visits.ts";
 import type { Database } from "./client.ts";
 import { peopleById, person } from "./people.ts";
@@ -53,12 +53,12 @@ export async function insertVisitEvent(
   return toEvent(row, await peopleById(db, [row.actorId]));
 }
 
-/** The visit's trail, oldest first. */
-export async function listVisitEvents(db: Database, organisationId: string, visitId: string): Promise<VisitEvent[]> {
+/** The visit's trail, oldest first; with `sinceRevision`, only the lines written after that visit revision. */
+export async function listVisitEvents(db: Database, organisationId: string, visitId: string, sinceRevision?: number): Promise<VisitEvent[]> {
   const rows = await db
     .select()
     .from(visitEvents)
-    .where(and(eq(visitEvents.organisationId, organisationId), eq(visitEvents.visitId, visitId)))
+    .where(and(eq(visitEvents.organisationId, organisationId), eq(visitEvents.visitId, visitId), sinceRevision === undefined ? undefined : gt(visitEvents.revision, sinceRevision)))
     .orderBy(asc(visitEvents.at), asc(visitEvents.id));
   const people = await peopleById(
     db,

@@ -2,12 +2,13 @@
  * Queries for visits and their run log. Every function takes the caller's organisation id;
  * a visit of another organisation reads as missing.
  */
-import { and, asc, count, desc, eq, inArray, isNotNull, isNull, max, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, gt, inArray, isNotNull, isNull, max, sql, type SQL } from "drizzle-orm";
 import { unionAll } from "drizzle-orm/pg-core";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import { defaultDirection, type VisitListQuery, type VisitPage, type VisitSort } from "@shared/schemas/list-pages.ts";
 import { visitReasonText, type Adjustment, type Comment, type Photo, type Reading, type VisitStatus, type VisitSummary } from "@shared/schemas/visits.ts";
 import { siteAtmosphere } from "../visits/reading-input.ts";
+import { visitRevisionToken } from "../visits/visit-revision.ts";
 import type { Database } from "./client.ts";
 import { afterCursor, cursorColumns, decodeCursor, keysetOrder, matchesSearchSql, pageOf, searchTextOf, type SortKey } from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
@@ -314,9 +315,12 @@ export function photoUrls(id: string): Pick<Photo, "url" | "thumbnailUrl"> {
   return { url: `/api/photos/${id}`, thumbnailUrl: `/api/photos/${id}/thumbnail` };
 }
 
-/** The whole visit: summary, review state, and its run log in time order. */
-export async function getVisitDetail(db: Database, organisationId: string, visitId: string) {
-  const [summary] = await db
+/**
+ * The visit's own row with what its detail shows from the unit, site and customer: one small
+ * query, enough to answer a conditional request (ETag from the revision) without reading the run log.
+ */
+export async function getVisitHead(db: Database, organisationId: string, visitId: string) {
+  const [head] = await db
     .select({
       ...summaryColumns,
       customerContactEmail: customers.contactEmail,
@@ -324,37 +328,53 @@ export async function getVisitDetail(db: Database, organisationId: string, visit
       signedOffBy: visits.signedOffBy,
       signedOffAt: visits.signedOffAt,
       siteAltitudeM: sites.altitudeM,
+      revision: visits.revision,
     })
     .from(visits)
     .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
     .innerJoin(sites, eq(sites.id, equipment.siteId))
     .innerJoin(customers, eq(customers.id, sites.customerId))
     .where(and(eq(visits.organisationId, organisationId), eq(visits.id, visitId)));
-  if (!summary) return undefined;
+  if (!head) return undefined;
+  const { equipmentName, siteName, customerName, refrigerant, customerContactEmail, siteAltitudeM } = head;
+  // What other tables contribute to the detail changes without a visit write, so it is in the token.
+  return { ...head, token: visitRevisionToken(head.revision, [equipmentName, siteName, customerName, refrigerant, customerContactEmail, siteAltitudeM]) };
+}
+export type VisitHead = NonNullable<Awaited<ReturnType<typeof getVisitHead>>>;
 
+/**
+ * The visit with its run log in time order. With `sinceRevision`, only the run-log rows written
+ * (added, voided, imported) after that revision: a delta the client merges by id; the summary,
+ * review state, counts and crew are always whole (they are small).
+ */
+async function buildVisit(db: Database, organisationId: string, head: VisitHead, sinceRevision?: number) {
+  const visitId = head.id;
+  const changed = <T extends typeof readings | typeof adjustments | typeof visitComments | typeof photos>(table: T) =>
+    sinceRevision === undefined ? undefined : gt(table.revision, sinceRevision);
   const [readingRows, adjustmentRows, commentRows, photoRows, extra, events] = await Promise.all([
-    db.select().from(readings).where(and(eq(readings.visitId, visitId), isRecord)).orderBy(asc(readings.takenAt), asc(readings.createdAt)),
-    db.select().from(adjustments).where(eq(adjustments.visitId, visitId)).orderBy(asc(adjustments.at)),
-    db.select().from(visitComments).where(eq(visitComments.visitId, visitId)).orderBy(asc(visitComments.createdAt)),
-    db.select().from(photos).where(eq(photos.visitId, visitId)).orderBy(asc(photos.createdAt)),
-    summarise(db, [summary]),
-    listVisitEvents(db, organisationId, visitId),
+    db.select().from(readings).where(and(eq(readings.visitId, visitId), isRecord, changed(readings))).orderBy(asc(readings.takenAt), asc(readings.createdAt)),
+    db.select().from(adjustments).where(and(eq(adjustments.visitId, visitId), changed(adjustments))).orderBy(asc(adjustments.at)),
+    db.select().from(visitComments).where(and(eq(visitComments.visitId, visitId), changed(visitComments))).orderBy(asc(visitComments.createdAt)),
+    db.select().from(photos).where(and(eq(photos.visitId, visitId), changed(photos))).orderBy(asc(photos.createdAt)),
+    summarise(db, [head]),
+    listVisitEvents(db, organisationId, visitId, sinceRevision),
   ]);
   const people = await peopleById(db, [
-    summary.signedOffBy,
+    head.signedOffBy,
     ...readingRows.flatMap(mentionedPeople),
     ...adjustmentRows.flatMap(mentionedPeople),
     ...commentRows.map((row) => row.authorId),
   ]);
-  const { siteAltitudeM, ...visit } = summary;
+  const { siteAltitudeM, token, revision: _revision, ...visit } = head;
   return {
     ...visit,
-    ...extra.get(summary.id)!,
+    ...extra.get(head.id)!,
+    revision: token,
     atmosphere: siteAtmosphere({ altitudeM: siteAltitudeM }),
     events,
-    startedAt: summary.startedAt.toISOString(),
-    signedOffBy: person(people, summary.signedOffBy),
-    signedOffAt: summary.signedOffAt?.toISOString() ?? null,
+    startedAt: head.startedAt.toISOString(),
+    signedOffBy: person(people, head.signedOffBy),
+    signedOffAt: head.signedOffAt?.toISOString() ?? null,
     readings: readingRows.map((row) => toReading(row, people)),
     adjustments: adjustmentRows.map((row) => toAdjustment(row, people)),
     comments: commentRows.map((row) => ({
@@ -372,6 +392,17 @@ export async function getVisitDetail(db: Database, organisationId: string, visit
       ...photoUrls(row.id),
     })),
   };
+}
+
+/** The whole visit: summary, review state, and its run log in time order. */
+export async function getVisitDetail(db: Database, organisationId: string, visitId: string, head?: VisitHead) {
+  const found = head ?? (await getVisitHead(db, organisationId, visitId));
+  return found && buildVisit(db, organisationId, found);
+}
+
+/** What changed on the visit after `sinceRevision` (see buildVisit), and the token it brings the client to. */
+export async function getVisitDelta(db: Database, organisationId: string, head: VisitHead, sinceRevision: number) {
+  return buildVisit(db, organisationId, head, sinceRevision);
 }
 
 /** Readings of one unit's most recent visit with any, per circuit, for the equipment page. */

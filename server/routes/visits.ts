@@ -18,6 +18,7 @@ import {
   VISIT_EVENT_LABELS,
   VISIT_STATUS_LABELS,
   VisitCreateSchema,
+  VisitDetailQuerySchema,
   VoidBodySchema,
   type ReviewAction,
   type VisitEventAction,
@@ -31,7 +32,9 @@ import {
   createVisit,
   findPhoto,
   findVisit,
+  getVisitDelta,
   getVisitDetail,
+  getVisitHead,
   insertAdjustment,
   insertComment,
   insertPhoto,
@@ -49,8 +52,9 @@ import { storeImportedReadings } from "../import/store-imported-readings.ts";
 import { discardPhoto, MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
 import { visitReportMail } from "../report/visit-report-mail.ts";
 import { chargeMovementKind, linkToMovement, recordChargeEntry } from "../register/charge-entry.ts";
-import type { ReadingContext } from "../visits/reading-input.ts";
 import { createReadingSaver } from "../visits/save-readings.ts";
+import type { ReadingContext } from "../visits/reading-input.ts";
+import { matchesIfNoneMatch, revisionSince, visitEtag } from "../visits/visit-revision.ts";
 import { voidVisitRecord } from "../visits/void-record.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
@@ -125,10 +129,23 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     res.status(201).json({ visit: await getVisitDetail(db, organisationId, id) });
   });
 
+  // The open visit is polled every few seconds: answer from the visit's row alone when the
+  // client already holds its revision (304), else only what changed since the revision it
+  // names (a delta), else the whole visit. The ETag is ours (the revision), so Express's own
+  // body hash, which needs the body built first, never runs here.
   router.get("/:id", async (req, res) => {
-    const visit = await getVisitDetail(db, getAuth(res).organisationId, parseId(req.params.id, "Visit"));
-    if (!visit) throw notFound("Visit");
-    res.json({ visit });
+    const { organisationId } = getAuth(res);
+    const { since } = VisitDetailQuerySchema.parse(req.query);
+    const head = await getVisitHead(db, organisationId, parseId(req.params.id, "Visit"));
+    if (!head) throw notFound("Visit");
+    const etag = visitEtag(head.token);
+    res.setHeader("ETag", etag);
+    // Always revalidate: a visit is live, and a cached copy must be checked against its revision.
+    res.setHeader("Cache-Control", "private, no-cache");
+    if (matchesIfNoneMatch(req.get("if-none-match"), etag)) return void res.status(304).end();
+    const sinceRevision = revisionSince(since, head.revision);
+    if (sinceRevision !== undefined) return void res.json({ delta: { ...(await getVisitDelta(db, organisationId, head, sinceRevision)), since } });
+    res.json({ visit: await getVisitDetail(db, organisationId, head.id, head) });
   });
 
   // The body holds measured values only (strict); the server adds the nameplate, the RLA and

@@ -5,8 +5,14 @@
  * that is already closed. Review steps (submit, sign off, send back, reopen) take the same
  * lock. On PGlite, where transactions already run one at a time, the lock costs nothing and
  * keeps the code right on a real PostgreSQL.
+ *
+ * Taking the lock also bumps the visit's revision (one UPDATE … RETURNING both locks and bumps),
+ * and every run-log row written in the transaction is stamped with the new revision by a
+ * trigger (migration 0014): so the visit detail's ETag and deltas (server/visits/visit-revision.ts)
+ * see every write. A refused or failed write rolls the bump back with everything else.
  */
-import { and, asc, eq, inArray } from "drizzle-orm";
+
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { STATUSES_OPEN_FOR_ENTRIES, type VisitStatus } from "@shared/schemas/visits.ts";
 import type { Database } from "../db/client.ts";
 import { visits } from "../db/schema.ts";
@@ -31,10 +37,10 @@ export function writeToVisit<T>(
 ): Promise<T> {
   return db.transaction(async (tx) => {
     const [visit] = await tx
-      .select()
-      .from(visits)
+      .update(visits)
+      .set({ revision: sql`${visits.revision} + 1` })
       .where(and(eq(visits.organisationId, organisationId), eq(visits.id, visitId)))
-      .for("update");
+      .returning();
     if (!visit) throw notFound("Visit");
     if (!allow.includes(visit.status)) {
       if (refuse) throw refuse(visit.status);
@@ -50,11 +56,21 @@ export function writeToVisit<T>(
  * saved together, server/visits/save-readings.ts). The caller checks each row's organisation and
  * status, as writeToVisit does for one.
  */
-export function lockVisits(tx: Database, visitIds: readonly string[]): Promise<VisitRow[]> {
-  return tx
+export async function lockVisits(tx: Database, visitIds: readonly string[]): Promise<VisitRow[]> {
+  const rows = await tx
     .select()
     .from(visits)
     .where(inArray(visits.id, [...visitIds]))
     .orderBy(asc(visits.id))
     .for("update");
+  // Locked in id order first (no deadlock between batches), then bumped like writeToVisit does,
+  // so the rows the batch writes are stamped with a new revision and pollers see them.
+  if (rows.length === 0) return rows;
+  const bumped = await tx
+    .update(visits)
+    .set({ revision: sql`${visits.revision} + 1` })
+    .where(inArray(visits.id, [...visitIds]))
+    .returning();
+  const byId = new Map(bumped.map((row) => [row.id, row]));
+  return rows.map((row) => byId.get(row.id) ?? row);
 }

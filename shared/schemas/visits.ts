@@ -365,8 +365,30 @@ export const VisitSchema = VisitSummarySchema.extend({
   atmosphere: AtmosphereSchema,
   /** The audit trail, oldest first. */
   events: z.array(VisitEventSchema),
+  /**
+   * Opaque token of the state this copy shows: the detail's ETag, and the `since` with which the
+   * client asks only for what changed (GET /api/visits/:id?since=…).
+   */
+  revision: z.string(),
 });
 export type Visit = z.infer<typeof VisitSchema>;
+
+/** Query of GET /api/visits/:id: `since`, the revision the client holds, asks for a delta. */
+export const VisitDetailQuerySchema = z.object({ since: z.string().max(100).optional() });
+
+/**
+ * What changed on a visit after the revision `since`: the summary, counts, crew and review state
+ * whole; in the lists only the records added or changed (voided, imported) since, each whole, to
+ * be merged by id. `revision` is the state the client holds once merged.
+ */
+export const VisitDeltaSchema = VisitSchema.extend({ since: z.string() });
+export type VisitDelta = z.infer<typeof VisitDeltaSchema>;
+
+/**
+ * Answer of GET /api/visits/:id: the whole visit, or (asked with a `since` the server can build
+ * on) a delta. 304 with no body when If-None-Match names the current revision.
+ */
+export const VisitDetailResponseSchema = z.union([z.object({ visit: VisitSchema }), z.object({ delta: VisitDeltaSchema })]);
 
 export const SendReportSchema = z.object({
   to: z.email("Enter an e-mail address, like facilities@example.com"),

@@ -16,6 +16,7 @@ import { PressureTestReport } from "@/features/procedures/components/pressure-te
 import { RefrigerantReport } from "@/features/register/components/refrigerant-report.tsx";
 import { ReadingsTable } from "@/features/report/components/readings-table.tsx";
 import { SendReportForm } from "@/features/report/components/send-report-form.tsx";
+import { readingsThatMatter, REPORT_LATEST_READINGS } from "@/features/report/utils/readings-that-matter.ts";
 import { FindingPanel } from "@/features/run-log/components/finding-panel.tsx";
 import { MeasuredCyclePanel } from "@/features/run-log/components/measured-cycle-panel.tsx";
 import { TrendChart } from "@/features/run-log/components/trend-chart.tsx";
@@ -113,12 +114,19 @@ export default function VisitReportRoute() {
       {unit.circuits.map((circuit) => {
         const series = circuitSeries(data.readings, data.adjustments, circuit.number);
         const last = series.readings.at(-1);
+        const listed = readingsThatMatter(series.readings, series.adjustments.map((adjustment) => adjustment.at));
         return (
           <section key={circuit.number} aria-labelledby={`circuit-${circuit.number}-heading`} className="space-y-3">
             <h2 id={`circuit-${circuit.number}-heading`} className="text-lg font-semibold">
               Circuit {circuit.number}
             </h2>
-            <ReadingsTable readings={series.readings} units={units} atmosphericKPa={atmosphericKPa} />
+            <ReadingsTable readings={listed.readings} units={units} atmosphericKPa={atmosphericKPa} />
+            {listed.leftOut > 0 && (
+              <p className="text-sm text-muted" data-testid="readings-left-out">
+                {listed.readings.length} of {series.readings.length} readings listed: the first, those either side of each adjustment and the latest{" "}
+                {REPORT_LATEST_READINGS}. The trend chart below draws the whole series.
+              </p>
+            )}
             {series.points.length > 0 && <TrendChart series={series} units={units} width={chartWidth} height={260} />}
             {last && (
               <p className="text-sm text-muted">

@@ -28,6 +28,12 @@ interface RequestOptions<T> {
    * 409 (ApiError.isStale) when someone saved a newer version meanwhile.
    */
   ifMatch?: number;
+  /**
+   * The ETag of the copy the caller holds, sent as If-None-Match: a 304 answer (the copy is
+   * current) returns undefined. Setting the header makes the browser pass the 304 through
+   * instead of answering from its own cache (Fetch standard, "HTTP-network-or-cache fetch").
+   */
+  ifNoneMatch?: string;
 }
 
 /** A write that has had no answer by then is reported as not confirmed, so no form waits for ever. */
@@ -39,10 +45,11 @@ export const WRITE_TIMEOUT_MS = 20_000;
  * once; writes without an answer within WRITE_TIMEOUT_MS fail with a message that says so.
  */
 export async function apiRequest<T = unknown>(path: string, options: RequestOptions<T> = {}): Promise<T> {
-  const { method = "GET", body, schema, signal, ifMatch } = options;
+  const { method = "GET", body, schema, signal, ifMatch, ifNoneMatch } = options;
   const headers: Record<string, string> = { Accept: "application/json" };
   if (body !== undefined) headers["Content-Type"] = "application/json";
   if (ifMatch !== undefined) headers["If-Match"] = `"${ifMatch}"`;
+  if (ifNoneMatch !== undefined) headers["If-None-Match"] = ifNoneMatch;
   const write = method !== "GET";
   if (write && typeof navigator !== "undefined" && navigator.onLine === false) {
     throw new ApiError(0, "No connection: nothing was saved. Your values are kept here; save again when the signal is back.");
@@ -65,7 +72,7 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
     throw new ApiError(0, "No connection to the Satura server: nothing was confirmed saved. Check the network and try again.");
   }
 
-  if (response.status === 204) return undefined as T;
+  if (response.status === 204 || (response.status === 304 && ifNoneMatch !== undefined)) return undefined as T;
   const payload: unknown = await response.json().catch(() => undefined);
   if (!response.ok) {
     const data = (payload ?? {}) as { message?: unknown; fields?: unknown };

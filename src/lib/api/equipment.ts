@@ -46,7 +46,12 @@ export const equipmentListQueryOptions = (params: EquipmentListParams = {}) =>
   queryOptions({ queryKey: ["equipment", "list", params], queryFn: ({ signal }) => getEquipmentList(params, signal) });
 
 export const equipmentDetailQueryOptions = (id: string) =>
-  queryOptions({ queryKey: ["equipment", "detail", id], queryFn: ({ signal }) => getEquipmentDetail(id, signal) });
+  queryOptions({
+    queryKey: ["equipment", "detail", id],
+    queryFn: ({ signal }) => getEquipmentDetail(id, signal),
+    // Pages that learn the id from another answer (a visit) pass "" meanwhile: "/equipment/" is the whole list.
+    enabled: id !== "",
+  });
 
 export const sitesQueryOptions = () => queryOptions({ queryKey: ["sites", "list"], queryFn: ({ signal }) => getSites(signal) });
 

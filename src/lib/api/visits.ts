@@ -6,6 +6,7 @@ import {
   PhotoSchema,
   ReadingSchema,
   VisitEventSchema,
+  VisitDetailResponseSchema,
   VisitSchema,
   type AdjustmentCreate,
   type ReadingBody,
@@ -18,6 +19,7 @@ import { ImportSummarySchema, type ImportSummary } from "@shared/schemas/reading
 import { VisitPageSchema, type VisitListParams, type VisitPage } from "@shared/schemas/list-pages.ts";
 import { ApiError, apiRequest } from "./api-client.ts";
 import { listQueryString } from "./list-params.ts";
+import { mergeVisitDelta } from "./merge-visit-delta.ts";
 import { viewerTimeZone } from "@shared/format/date-time.ts";
 
 const VisitEnvelopeSchema = z.object({ visit: VisitSchema });
@@ -30,8 +32,16 @@ export async function getVisits(params: VisitListParams = {}, signal?: AbortSign
   return apiRequest(`/visits${listQueryString(params)}`, { schema: VisitPageSchema, signal });
 }
 
-export async function getVisit(id: string, signal?: AbortSignal): Promise<Visit> {
-  return (await apiRequest(`/visits/${id}`, { schema: VisitEnvelopeSchema, signal })).visit;
+/**
+ * The visit. With the copy already held, asks only for what changed since its revision: the
+ * server answers 304 (nothing changed: the held copy is returned as it is), a delta (merged into
+ * the held copy) or, when it cannot build on that revision, the whole visit.
+ */
+export async function getVisit(id: string, signal?: AbortSignal, held?: Visit): Promise<Visit> {
+  if (!held) return (await apiRequest(`/visits/${id}`, { schema: VisitEnvelopeSchema, signal })).visit;
+  const answer = await apiRequest(`/visits/${id}?since=${encodeURIComponent(held.revision)}`, { schema: VisitDetailResponseSchema, signal, ifNoneMatch: `W/"${held.revision}"` });
+  if (answer === undefined) return held;
+  return "delta" in answer ? mergeVisitDelta(held, answer.delta) : answer.visit;
 }
 
 export async function createVisit(values: VisitCreate): Promise<Visit> {
@@ -104,7 +114,8 @@ export const visitsQueryOptions = (params: VisitListParams = {}) =>
 export const visitQueryOptions = (id: string) =>
   queryOptions({
     queryKey: ["visits", "detail", id],
-    queryFn: ({ signal }) => getVisit(id, signal),
+    // The refresh builds on the copy in the cache, so a poll costs what changed, not the whole visit.
+    queryFn: ({ signal, client, queryKey }) => getVisit(id, signal, client.getQueryData<Visit>(queryKey)),
     // Live while the visit can still change; a signed-off visit is a closed record.
     refetchInterval: (query) => (query.state.data?.status === "signed-off" ? false : LIVE_REFRESH_MS),
   });

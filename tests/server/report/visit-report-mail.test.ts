@@ -28,6 +28,7 @@ const visit = VisitSchema.parse({
   adjustments: [],
   comments: [],
   photos: [],
+  revision: "fixture",
   atmosphere: { pressureKPa: 101.325, basis: "standard", altitudeM: null, description: "standard atmosphere: site has no altitude" },
   events: [],
 });

@@ -1,6 +1,8 @@
 import { PencilLine } from "lucide-react";
+import { useState } from "react";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { ADJUSTMENT_KIND_LABELS, type Adjustment, type Reading } from "@shared/schemas/visits.ts";
+import { Button } from "@/components/ui/button/button.tsx";
 import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
 import { useVoidRecord } from "@/lib/api/visits.ts";
@@ -16,6 +18,13 @@ import {
 import { formatTime } from "@shared/format/date-time.ts";
 
 const clock = (iso: string) => formatTime(iso);
+
+/**
+ * Entries drawn at first, newest first; "Show earlier entries" adds as many again. A logged
+ * series holds thousands of readings: drawing them all made the page slow to open on a phone,
+ * and the one to void is nearly always among the latest.
+ */
+export const ENTRIES_PAGE = 50;
 
 type Entry =
   { kind: "reading"; at: string; reading: Reading } | { kind: "adjustment"; at: string; adjustment: Adjustment };
@@ -45,6 +54,7 @@ export function RecordedEntries({
   canVoid,
 }: RecordedEntriesProps) {
   const voidRecord = useVoidRecord();
+  const [shown, setShown] = useState(ENTRIES_PAGE);
   const entries: Entry[] = [
     ...readings
       .filter((reading) => reading.circuit === circuit)
@@ -60,64 +70,77 @@ export function RecordedEntries({
   const pressure = (kPa: number, atmosphere: number) =>
     `${formatNumber(gaugeToDisplay(kPa, units.pressure, atmosphere), PRESSURE_DECIMALS[units.pressure])} ${GAUGE_LABEL[units.pressure]}`;
 
+  const hidden = entries.length - shown;
+
   return (
-    <ol
-      aria-label={`Entries on circuit ${circuit}, newest first`}
-      className="divide-y-2 divide-rule rounded-card border-2 border-rule bg-surface"
-    >
-      {entries.map((entry) => {
-        const id = entry.kind === "reading" ? entry.reading.id : entry.adjustment.id;
-        const voided = entry.kind === "reading" ? entry.reading.voided : entry.adjustment.voided;
-        const what =
-          entry.kind === "reading"
-            ? `the reading of ${clock(entry.at)} on circuit ${circuit}`
-            : `the adjustment of ${clock(entry.at)}`;
-        return (
-          <li key={id} className="flex flex-wrap items-start justify-between gap-2 p-3" data-testid={`entry-${id}`}>
-            <VoidedRecord voided={voided} className="min-w-0 flex-1">
-              {entry.kind === "reading" ? (
-                <p className="num">
-                  <span className="font-sans font-semibold">{clock(entry.at)} reading</span> · suction{" "}
-                  {pressure(
-                    entry.reading.input.suctionPressureKPa,
-                    entry.reading.input.atmosphericPressureKPa ?? atmosphericKPa,
-                  )}
-                  , liquid{" "}
-                  {pressure(
-                    entry.reading.input.liquidPressureKPa,
-                    entry.reading.input.atmosphericPressureKPa ?? atmosphericKPa,
-                  )}{" "}
-                  · SH {diff(entry.reading.result.superheatK)} {k}, SC {diff(entry.reading.result.subcoolingK)} {k} ·{" "}
-                  <span className="font-sans">{chargeStateText[entry.reading.result.chargeState].short}</span>
-                  {entry.reading.recordedBy && (
-                    <span className="font-sans text-muted"> · {entry.reading.recordedBy.name}</span>
-                  )}
-                </p>
-              ) : (
-                <p className="flex items-start gap-1">
-                  <PencilLine aria-hidden className="mt-1 size-4 shrink-0" />
-                  <span>
-                    <span className="font-semibold">
-                      {clock(entry.at)} {ADJUSTMENT_KIND_LABELS[entry.adjustment.kind].toLowerCase()}
-                    </span>
-                    : {entry.adjustment.description}
-                    {entry.adjustment.amountKg != null && (
-                      <span className="num"> ({entry.adjustment.amountKg} kg)</span>
+    <div className="space-y-2">
+      <ol
+        aria-label={`Entries on circuit ${circuit}, newest first`}
+        className="divide-y-2 divide-rule rounded-card border-2 border-rule bg-surface"
+      >
+        {entries.slice(0, shown).map((entry) => {
+          const id = entry.kind === "reading" ? entry.reading.id : entry.adjustment.id;
+          const voided = entry.kind === "reading" ? entry.reading.voided : entry.adjustment.voided;
+          const what =
+            entry.kind === "reading"
+              ? `the reading of ${clock(entry.at)} on circuit ${circuit}`
+              : `the adjustment of ${clock(entry.at)}`;
+          return (
+            <li key={id} className="flex flex-wrap items-start justify-between gap-2 p-3" data-testid={`entry-${id}`}>
+              <VoidedRecord voided={voided} className="min-w-0 flex-1">
+                {entry.kind === "reading" ? (
+                  <p className="num">
+                    <span className="font-sans font-semibold">{clock(entry.at)} reading</span> · suction{" "}
+                    {pressure(
+                      entry.reading.input.suctionPressureKPa,
+                      entry.reading.input.atmosphericPressureKPa ?? atmosphericKPa,
                     )}
-                  </span>
-                </p>
+                    , liquid{" "}
+                    {pressure(
+                      entry.reading.input.liquidPressureKPa,
+                      entry.reading.input.atmosphericPressureKPa ?? atmosphericKPa,
+                    )}{" "}
+                    · SH {diff(entry.reading.result.superheatK)} {k}, SC {diff(entry.reading.result.subcoolingK)} {k} ·{" "}
+                    <span className="font-sans">{chargeStateText[entry.reading.result.chargeState].short}</span>
+                    {entry.reading.recordedBy && (
+                      <span className="font-sans text-muted"> · {entry.reading.recordedBy.name}</span>
+                    )}
+                  </p>
+                ) : (
+                  <p className="flex items-start gap-1">
+                    <PencilLine aria-hidden className="mt-1 size-4 shrink-0" />
+                    <span>
+                      <span className="font-semibold">
+                        {clock(entry.at)} {ADJUSTMENT_KIND_LABELS[entry.adjustment.kind].toLowerCase()}
+                      </span>
+                      : {entry.adjustment.description}
+                      {entry.adjustment.amountKg != null && (
+                        <span className="num"> ({entry.adjustment.amountKg} kg)</span>
+                      )}
+                    </span>
+                  </p>
+                )}
+              </VoidedRecord>
+              {canVoid && !voided && (
+                <VoidAction
+                  what={what}
+                  alsoVoids={
+                    entry.kind === "adjustment" && entry.adjustment.movementId
+                      ? "Its line in the refrigerant register is voided with it, with the same reason."
+                      : undefined
+                  }
+                  onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: entry.kind, recordId: id, reason })}
+                />
               )}
-            </VoidedRecord>
-            {canVoid && !voided && (
-              <VoidAction
-                what={what}
-                alsoVoids={entry.kind === "adjustment" && entry.adjustment.movementId ? "Its line in the refrigerant register is voided with it, with the same reason." : undefined}
-                onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: entry.kind, recordId: id, reason })}
-              />
-            )}
-          </li>
-        );
-      })}
-    </ol>
+            </li>
+          );
+        })}
+      </ol>
+      {hidden > 0 && (
+        <Button variant="secondary" onClick={() => setShown((count) => count + ENTRIES_PAGE)}>
+          Show earlier entries ({Math.min(hidden, ENTRIES_PAGE)} of {hidden} more)
+        </Button>
+      )}
+    </div>
   );
 }
