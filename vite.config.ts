@@ -22,7 +22,7 @@ export default defineConfig({
     include: ["tests/**/*.test.{ts,tsx}"],
     exclude: ["tests/browser/**", "node_modules/**"],
     environment: "node",
-    setupFiles: ["tests/setup/setup-test-env.ts"],
+    setupFiles: ["tests/setup/load-refrigerant-tables.ts", "tests/setup/setup-test-env.ts"],
     testTimeout: 30_000,
     hookTimeout: 60_000,
   },
