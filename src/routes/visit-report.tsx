@@ -18,7 +18,7 @@ import { ReadingsTable } from "@/features/report/components/readings-table.tsx";
 import { SendReportForm } from "@/features/report/components/send-report-form.tsx";
 import { FindingPanel } from "@/features/run-log/components/finding-panel.tsx";
 import { MeasuredCyclePanel } from "@/features/run-log/components/measured-cycle-panel.tsx";
-import { TrendChart } from "@/features/run-log/components/trend-chart.tsx";
+import { TrendChart } from "@/features/run-log/components/lazy-trend-chart.tsx";
 import { circuitSeries } from "@/features/run-log/utils/circuit-series.ts";
 import { AuditTrail } from "@/features/visit/components/audit-trail.tsx";
 import { useMe } from "@/lib/api/auth.ts";
