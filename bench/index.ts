@@ -8,5 +8,8 @@ import "./trend.bench.ts";
 import "./procedures.bench.ts";
 import "./import.bench.ts";
 import { runRegisteredBenches } from "./bench-registry.ts";
+import { loadAllRefrigerants } from "../shared/engine/index.ts";
 
+// The benches look up any refrigerant synchronously, as the server does after loading them all.
+await loadAllRefrigerants();
 await runRegisteredBenches();
