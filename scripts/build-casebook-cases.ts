@@ -10,6 +10,10 @@ import { diagnose, measuredCycle } from "../shared/engine/index.ts";
 import { loadSinglePhaseTable } from "../shared/property-tables/load-single-phase-table.ts";
 import { BuiltInCaseFileSchema, BUILT_IN_CASE_FORMAT, type BuiltInCase, type CaseDifficulty, type CaseStory } from "../shared/schemas/casebook.ts";
 import type { Application, ChargeState, DiagnosisInput } from "../shared/schemas/diagnosis.ts";
+import { loadAllRefrigerants } from "../shared/engine/index.ts";
+
+// Every saturation table, before anything looks one up (tables load per refrigerant).
+await loadAllRefrigerants();
 
 type Spec = {
   id: string; title: string; difficulty: CaseDifficulty; story: CaseStory; state: ChargeState;

@@ -23,6 +23,10 @@ import {
   DiagnosisCaseFileSchema,
   type DiagnosisCase,
 } from "../tests/fixtures/diagnosis-cases/diagnosis-case-schema.ts";
+import { loadAllRefrigerants } from "../shared/engine/index.ts";
+
+// Every saturation table, before anything looks one up (tables load per refrigerant).
+await loadAllRefrigerants();
 
 interface CaseSpec {
   id: string;

@@ -14,6 +14,10 @@ import path from "node:path";
 import { repoRoot, requireReferencePack } from "./eos/index.ts";
 import { buildSinglePhaseTable, createSinglePhaseSolver } from "./single-phase/index.ts";
 import { RefrigerantTableSchema } from "../shared/engine/properties/refrigerant-table-schema.ts";
+import { loadAllRefrigerants } from "../shared/engine/index.ts";
+
+// Every saturation table, before anything looks one up (tables load per refrigerant).
+await loadAllRefrigerants();
 
 function main(): void {
   const dataNote = requireReferencePack();

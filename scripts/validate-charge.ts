@@ -34,6 +34,10 @@ import { drawChargeCircuit, SUBCOOLED_SHARE_PER_K } from "./charge-inventory/dra
 import { inventoryReadings, type ReadingScatter } from "./charge-inventory/inventory-readings.ts";
 import { operatingPointAt } from "./charge-inventory/operating-point-at.ts";
 import { solveOperatingPoint } from "./charge-inventory/solve-operating-point.ts";
+import { loadAllRefrigerants } from "../shared/engine/index.ts";
+
+// Every saturation table, before anything looks one up (tables load per refrigerant).
+await loadAllRefrigerants();
 
 const argument = (name: string) => {
   const index = process.argv.indexOf(`--${name}`);

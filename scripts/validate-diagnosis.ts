@@ -14,6 +14,10 @@
 import { APPLICATIONS, CHARGE_STATES, type Application, type ChargeState, type EvidenceState, type MeteringDevice } from "../shared/schemas/diagnosis.ts";
 import { diagnose, seededRandom } from "../shared/engine/index.ts";
 import { drawFaultScenario } from "../shared/engine/casebook/draw-fault-scenario.ts";
+import { loadAllRefrigerants } from "../shared/engine/index.ts";
+
+// Every saturation table, before anything looks one up (tables load per refrigerant).
+await loadAllRefrigerants();
 
 const argument = (name: string) => {
   const index = process.argv.indexOf(`--${name}`);

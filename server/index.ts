@@ -3,6 +3,7 @@
  * database, loads the demo company when the database is empty, and listens.
  */
 import type { Server } from "node:http";
+import { loadAllRefrigerants } from "@shared/engine/index.ts";
 import { createApp } from "./app.ts";
 import { openDatabase } from "./db/client.ts";
 import { deleteExpiredSessions } from "./db/expired-sessions.ts";
@@ -18,6 +19,9 @@ import { createLogger } from "./logger.ts";
 
 const env = readEnv();
 const logger = createLogger(env);
+// Every refrigerant's saturation table, before anything judges a reading: the server's lookups
+// stay synchronous (the browser loads one refrigerant per screen instead).
+await loadAllRefrigerants();
 
 const database = await openDatabase(env.DATA_DIR);
 // A CSV import cut off by a stop leaves staged rows that never became readings: clear them.

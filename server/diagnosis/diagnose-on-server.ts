@@ -4,13 +4,17 @@
  * table and asks for the same, so both give the same result). A refrigerant without a
  * single-phase table is diagnosed from its saturation readings only.
  */
-import { diagnose } from "@shared/engine/index.ts";
+import { diagnose, loadRefrigerant } from "@shared/engine/index.ts";
 import { loadSinglePhaseTable } from "@shared/property-tables/load-single-phase-table.ts";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 
-/** Loads the single-phase table of a refrigerant, if there is one; never rejects. */
+/**
+ * Loads the saturation and single-phase tables of a refrigerant, if it has them; never rejects
+ * (an unknown refrigerant is refused by `diagnose` with its own message). The server has every
+ * saturation table from its start; the CSV import's worker thread has only what this loads.
+ */
 export async function prepareRefrigerant(refrigerant: string): Promise<void> {
-  await loadSinglePhaseTable(refrigerant).catch(() => undefined);
+  await Promise.all([loadRefrigerant(refrigerant).catch(() => undefined), loadSinglePhaseTable(refrigerant).catch(() => undefined)]);
 }
 
 export async function diagnoseReading(input: DiagnosisInput): Promise<DiagnosisResult> {

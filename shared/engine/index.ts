@@ -2,7 +2,10 @@
  * Public entry point of the Satura engine: the only module src/ and server/ import from.
  */
 
-// Refrigerant properties (tables generated from published equations of state)
+// Refrigerant properties (tables generated from published equations of state, loaded per refrigerant)
+export { loadRefrigerant } from "./properties/load-refrigerant.ts";
+export { loadAllRefrigerants } from "./properties/load-all-refrigerants.ts";
+export { isRefrigerantLoaded } from "./properties/is-refrigerant-loaded.ts";
 export { listRefrigerants } from "./properties/list-refrigerants.ts";
 export { getRefrigerant } from "./properties/get-refrigerant.ts";
 export type { RefrigerantInfo } from "./properties/resolve-refrigerant.ts";

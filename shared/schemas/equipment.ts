@@ -4,7 +4,7 @@
  * rely on, so it is validated here once for the form, the server and the CSV import.
  */
 import { z } from "zod";
-import { listRefrigerants } from "../engine/index.ts";
+import { isKnownRefrigerant } from "../property-tables/refrigerant-catalogue.ts";
 import { ApplicationSchema, MAX_CIRCUIT_CHARGE_KG, MAX_LINE_LENGTH_M, MeteringDeviceSchema, type Application } from "./diagnosis.ts";
 import { text } from "./text.ts";
 
@@ -125,7 +125,6 @@ export const EQUIPMENT_KINDS = [
   "other",
 ] as const;
 
-const knownRefrigerants = () => new Set(listRefrigerants().map((info) => info.id));
 
 /** Application a new unit of each kind usually has (the form's starting point; the technician decides). */
 export const DEFAULT_APPLICATION_BY_KIND: Readonly<Record<(typeof EQUIPMENT_KINDS)[number], Application>> = {
@@ -150,7 +149,7 @@ export const EquipmentInputSchema = z.object({
   maker: optionalText(MAX_NAME_LENGTH),
   model: optionalText(MAX_NAME_LENGTH),
   serial: optionalText(MAX_NAME_LENGTH),
-  refrigerant: text({ error: "Choose the refrigerant" }).refine((id) => knownRefrigerants().has(id), "Choose a refrigerant from the list"),
+  refrigerant: text({ error: "Choose the refrigerant" }).refine(isKnownRefrigerant, "Choose a refrigerant from the list"),
   circuits: z
     .array(CircuitNameplateSchema)
     .min(1, "A unit has at least one circuit")

@@ -10,7 +10,7 @@
  * kg recovered / added (virgin or reclaimed) / sent on, cylinder id, technician, date.
  */
 import { z } from "zod";
-import { listRefrigerants } from "../engine/index.ts";
+import { isKnownRefrigerant } from "../property-tables/refrigerant-catalogue.ts";
 import { MAX_CIRCUIT_CHARGE_KG, MAX_CIRCUITS, MAX_NOTE_LENGTH } from "./equipment.ts";
 import {
   AnnualLeakRateSchema,
@@ -39,7 +39,6 @@ export const CYLINDER_KIND_LABELS: Record<CylinderKind, string> = {
 
 export const MAX_LABEL_LENGTH = 60;
 
-const knownRefrigerants = () => new Set(listRefrigerants().map((info) => info.id));
 
 const massKg = (label: string, max: number) =>
   z
@@ -60,7 +59,7 @@ export const CylinderCreateSchema = z
       // An emptied field means "no serial", never an empty string in the record.
       .transform((value) => (value ? value : null)),
     kind: CylinderKindSchema,
-    refrigerant: text({ error: "Choose the refrigerant" }).refine((id) => knownRefrigerants().has(id), "Choose a refrigerant from the list"),
+    refrigerant: text({ error: "Choose the refrigerant" }).refine(isKnownRefrigerant, "Choose a refrigerant from the list"),
     waterCapacityKg: massKg("Water capacity", MAX_WATER_CAPACITY_KG).refine((value) => value > 0, "Water capacity must be above 0 kg"),
     tareKg: massKg("Tare", MAX_WATER_CAPACITY_KG).refine((value) => value > 0, "Tare must be above 0 kg"),
     /** What is in it on the day it is entered: gross weight on the scale minus the tare. */

@@ -1,7 +1,8 @@
 import { Printer } from "lucide-react";
 import { useState } from "react";
 import { Link, useParams } from "react-router-dom";
-import { listRefrigerants } from "@shared/engine/index.ts";
+import { getRefrigerant } from "@shared/engine/index.ts";
+import { isKnownRefrigerant } from "@shared/property-tables/refrigerant-catalogue.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
@@ -30,7 +31,8 @@ function defaultRange(minimumC: number, maximumC: number, units: DisplayUnits): 
 
 export default function PtTableRoute() {
   const { refrigerantId = "" } = useParams();
-  const info = listRefrigerants().find((candidate) => candidate.id === refrigerantId);
+  // The route's loader has loaded this refrigerant's table (src/router.tsx).
+  const info = isKnownRefrigerant(refrigerantId) ? getRefrigerant(refrigerantId) : undefined;
   const profile = useDisplayUnits();
   // Starts in the user's display units; switching here changes this page only.
   const [chosenUnits, setUnits] = useState<DisplayUnits | null>(null);

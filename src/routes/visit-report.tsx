@@ -19,7 +19,7 @@ import { SendReportForm } from "@/features/report/components/send-report-form.ts
 import { readingsThatMatter, REPORT_LATEST_READINGS } from "@/features/report/utils/readings-that-matter.ts";
 import { FindingPanel } from "@/features/run-log/components/finding-panel.tsx";
 import { MeasuredCyclePanel } from "@/features/run-log/components/measured-cycle-panel.tsx";
-import { TrendChart } from "@/features/run-log/components/trend-chart.tsx";
+import { TrendChart } from "@/features/run-log/components/lazy-trend-chart.tsx";
 import { circuitSeries } from "@/features/run-log/utils/circuit-series.ts";
 import { AuditTrail } from "@/features/visit/components/audit-trail.tsx";
 import { useMe } from "@/lib/api/auth.ts";

@@ -9,18 +9,12 @@ import { acceptsEntries, closedVisitMessage, visitReasonText } from "@shared/sch
 import { canCasebook } from "@shared/schemas/casebook.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { lazyPanel } from "@/components/lazy/lazy-panel.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
-import { CaseFromReading } from "@/features/casebook/components/case-from-reading.tsx";
 import { RunLog } from "@/features/run-log/components/run-log.tsx";
-import { ElectricalPanel } from "@/features/procedures/components/electrical-panel.tsx";
-import { EvacuationPanel } from "@/features/procedures/components/evacuation-panel.tsx";
-import { LeakSearchPanel } from "@/features/procedures/components/leak-search-panel.tsx";
-import { StandingPressurePanel } from "@/features/procedures/components/standing-pressure-panel.tsx";
 import { ROLE_READ_ONLY_NOTE } from "@/features/procedures/components/procedure-layout.tsx";
-import { PressureTestPanel } from "@/features/procedures/components/pressure-test-panel.tsx";
-import { VisitRefrigerant } from "@/features/register/components/visit-refrigerant.tsx";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { AuditTrail } from "@/features/visit/components/audit-trail.tsx";
 import { CommentsPanel } from "@/features/visit/components/comments-panel.tsx";
@@ -32,6 +26,15 @@ import { useEquipmentDetail } from "@/lib/api/equipment.ts";
 import { useVisit } from "@/lib/api/visits.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
+
+// Sections other than the run log, and the senior's case-from-reading, load when first shown.
+const ElectricalPanel = lazyPanel(() => import("@/features/procedures/components/electrical-panel.tsx"), "ElectricalPanel");
+const LeakSearchPanel = lazyPanel(() => import("@/features/procedures/components/leak-search-panel.tsx"), "LeakSearchPanel");
+const StandingPressurePanel = lazyPanel(() => import("@/features/procedures/components/standing-pressure-panel.tsx"), "StandingPressurePanel");
+const PressureTestPanel = lazyPanel(() => import("@/features/procedures/components/pressure-test-panel.tsx"), "PressureTestPanel");
+const EvacuationPanel = lazyPanel(() => import("@/features/procedures/components/evacuation-panel.tsx"), "EvacuationPanel");
+const VisitRefrigerant = lazyPanel(() => import("@/features/register/components/visit-refrigerant.tsx"), "VisitRefrigerant");
+const CaseFromReading = lazyPanel(() => import("@/features/casebook/components/case-from-reading.tsx"), "CaseFromReading");
 
 const METERING_LABELS = { txv: "TXV", eev: "EEV", "fixed-orifice": "fixed orifice", capillary: "capillary" } as const;
 

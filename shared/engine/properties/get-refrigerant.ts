@@ -5,8 +5,8 @@
  *
  * @param id ASHRAE designation, exact spelling as in the table file names ("R1234ze(E)")
  * @returns frozen metadata object
- * @throws PropertyRangeError UNKNOWN_REFRIGERANT for an id without a table
- * @example getRefrigerant("R32").safety.class // "A2L"
+ * @throws PropertyRangeError UNKNOWN_REFRIGERANT for an id without a table; TABLE_NOT_LOADED before `loadRefrigerant(id)`
+ * @example (await loadRefrigerant("R32"), getRefrigerant("R32").safety.class) // "A2L"
  */
 import { resolveRefrigerant, type RefrigerantInfo } from "./resolve-refrigerant.ts";
 

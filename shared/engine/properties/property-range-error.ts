@@ -18,7 +18,7 @@ export type PropertyErrorCode =
   | "INVALID_TABLE"
   /** single-phase lookups: the state lies between the bubble and dew curves */
   | "INSIDE_DOME"
-  /** single-phase lookups: the refrigerant's single-phase table has not been registered */
+  /** the refrigerant's saturation table (loadRefrigerant) or single-phase table has not been loaded */
   | "TABLE_NOT_LOADED";
 
 export class PropertyRangeError extends Error {

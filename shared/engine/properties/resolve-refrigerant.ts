@@ -1,13 +1,13 @@
 /**
- * Registry of the generated refrigerant tables. The JSON files are imported
- * statically (refrigerant-table-files.ts, written by `npm run tables`), so the
- * same code works in the browser bundle, the server and tests with no I/O.
- * Each table is validated with its zod schema and compiled into typed arrays the
- * first time it is used; later lookups are a Map hit.
+ * Registry of the saturation tables. No table is imported statically: `loadRefrigerant` fetches
+ * one refrigerant's JSON (its own chunk in the browser; README decision "Saturation tables loaded per refrigerant") and registers it
+ * here, where it is validated with its zod schema and compiled into typed arrays once; every
+ * lookup after that is synchronous, a Map hit. A lookup before its table is loaded throws
+ * TABLE_NOT_LOADED, naming the call that fixes it.
  */
 import { PropertyRangeError } from "./property-range-error.ts";
-import { REFRIGERANT_TABLE_FILES } from "./refrigerant-table-files.ts";
 import { RefrigerantTableSchema, type RefrigerantTable } from "./refrigerant-table-schema.ts";
+import { SATURATION_TABLE_IMPORTS } from "./saturation-table-imports.ts";
 
 /** Refrigerant metadata: everything in a table except its rows. */
 export type RefrigerantInfo = Readonly<Omit<RefrigerantTable, "columns" | "units" | "interpolation">>;
@@ -45,15 +45,29 @@ export interface CompiledRefrigerant {
   readonly maximumC: number;
 }
 
+/**
+ * Loaded tables by refrigerant id, as loaded and once compiled (module state: caches filled by
+ * loadRefrigerant). A table is validated and compiled on its first lookup, so loading all of
+ * them at a server's or a test's start costs only the import.
+ */
 const rawById = new Map<string, unknown>();
-for (const raw of REFRIGERANT_TABLE_FILES) {
-  const id = (raw as { id?: unknown }).id;
-  if (typeof id === "string") rawById.set(id, raw);
-}
 const compiledById = new Map<string, CompiledRefrigerant>();
 
-/** Every refrigerant id with a table, in file order. */
-export const REFRIGERANT_IDS: readonly string[] = [...rawById.keys()];
+/** Every refrigerant id with a table, loaded or not, in file order. */
+export const REFRIGERANT_IDS: readonly string[] = Object.keys(SATURATION_TABLE_IMPORTS);
+
+/** Whether Satura has a table for this id (exact spelling). */
+export function isKnownRefrigerantId(id: string): boolean {
+  return Object.hasOwn(SATURATION_TABLE_IMPORTS, id);
+}
+
+export function unknownRefrigerantError(id: string): PropertyRangeError {
+  return new PropertyRangeError(
+    "UNKNOWN_REFRIGERANT",
+    String(id),
+    `${String(id)} is not a refrigerant Satura has tables for (known: ${REFRIGERANT_IDS.join(", ")})`,
+  );
+}
 
 function deepFreeze<T>(value: T): T {
   if (value && typeof value === "object") {
@@ -112,25 +126,49 @@ function compile(id: string, raw: unknown): CompiledRefrigerant {
 }
 
 /**
+ * Register a loaded saturation table (the parsed JSON of data/refrigerants/<id>.json) so that
+ * the lookups can use it; it is validated and compiled on first use. Registering the same
+ * refrigerant again replaces the table.
+ *
+ * @param raw the table as loaded (unknown until validated)
+ * @returns the refrigerant id
+ * @throws PropertyRangeError UNKNOWN_REFRIGERANT for an id Satura has no table for
+ * @example registerRefrigerantTable((await import("data/refrigerants/R32.json")).default) // "R32"
+ */
+export function registerRefrigerantTable(raw: unknown): string {
+  const id = String((raw as { id?: unknown } | null)?.id ?? "unknown");
+  if (!isKnownRefrigerantId(id)) throw unknownRefrigerantError(id);
+  rawById.set(id, raw);
+  compiledById.delete(id);
+  return id;
+}
+
+/** Whether a refrigerant's saturation table is loaded, so that its lookups run synchronously. */
+export function isRefrigerantTableLoaded(id: string): boolean {
+  return rawById.has(id);
+}
+
+/**
  * Resolve a refrigerant id to its compiled table.
  *
  * @param id ASHRAE designation as in the table file names, e.g. "R32", "R1234ze(E)" (exact spelling)
  * @returns the compiled table (cached)
- * @throws PropertyRangeError UNKNOWN_REFRIGERANT for an id without a table; INVALID_TABLE when the file fails its schema
- * @example resolveRefrigerant("R32").maximumC // 78.005
+ * @throws PropertyRangeError UNKNOWN_REFRIGERANT for an id without a table; TABLE_NOT_LOADED when its table has not been loaded yet (`await loadRefrigerant(id)` first)
+ * @example (await loadRefrigerant("R32"), resolveRefrigerant("R32").maximumC) // 78.005
  */
 export function resolveRefrigerant(id: string): CompiledRefrigerant {
   const cached = compiledById.get(id);
   if (cached) return cached;
   const raw = rawById.get(id);
-  if (raw === undefined) {
-    throw new PropertyRangeError(
-      "UNKNOWN_REFRIGERANT",
-      String(id),
-      `${String(id)} is not a refrigerant Satura has tables for (known: ${REFRIGERANT_IDS.join(", ")})`,
-    );
+  if (raw !== undefined) {
+    const compiled = compile(id, raw);
+    compiledById.set(id, compiled);
+    return compiled;
   }
-  const compiled = compile(id, raw);
-  compiledById.set(id, compiled);
-  return compiled;
+  if (!isKnownRefrigerantId(id)) throw unknownRefrigerantError(id);
+  throw new PropertyRangeError(
+    "TABLE_NOT_LOADED",
+    id,
+    `The ${id} saturation table is not loaded: await loadRefrigerant("${id}") before using it`,
+  );
 }

@@ -1,12 +1,12 @@
 import { useMemo, useState, type FormEvent, type ReactNode } from "react";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { cautions } from "@shared/content/cautions.ts";
+import { REFRIGERANT_IDS } from "@shared/property-tables/refrigerant-catalogue.ts";
 import {
   authoredAnswers,
   chargeToAdd,
   diagnose,
   DiagnosisInputError,
-  listRefrigerants,
   workedSolution,
 } from "@shared/engine/index.ts";
 import {
@@ -31,6 +31,7 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { NumberInput } from "@/components/ui/field/number-input.tsx";
 import { ChargeStateBadge } from "@/components/ui/state/charge-state-badge.tsx";
+import { useRefrigerantTable } from "@/lib/api/refrigerant-tables.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { CASE_READINGS, METERING_LABELS } from "../utils/case-readings.ts";
 import { formatQuantity, parseQuantity, unitLabel, withUnit } from "../utils/quantities.ts";
@@ -125,11 +126,13 @@ export function CaseEditor({
   const [state, setState] = useState(() => initialState(item, units, atmosphericKPa));
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
-  const refrigerants = useMemo(() => listRefrigerants().map((info) => info.id), []);
+  const refrigerants = REFRIGERANT_IDS;
   const converted = useMemo(() => toInput(state, units, atmosphericKPa), [state, units, atmosphericKPa]);
+  // The preview computes with the chosen refrigerant's table, loaded when it is picked.
+  const tableLoaded = useRefrigerantTable(state.refrigerant).isSuccess;
 
   const preview = useMemo(() => {
-    if (Object.keys(converted.errors).length > 0) return null;
+    if (Object.keys(converted.errors).length > 0 || !tableLoaded) return null;
     try {
       const input = converted.input as DiagnosisInput;
       const result = diagnose(input);
@@ -145,7 +148,7 @@ export function CaseEditor({
         return { problems: Object.values(error.fieldErrors).flat().concat(error.formErrors) };
       throw error;
     }
-  }, [converted, state.reasoning]);
+  }, [converted, state.reasoning, tableLoaded]);
 
   const setReading = (field: ReadingField) => (text: string) =>
     setState((current) => ({ ...current, readings: { ...current.readings, [field]: text } }));

@@ -2,7 +2,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { Plus, Trash2 } from "lucide-react";
 import { useMemo, useState } from "react";
 import { useFieldArray, useForm, useWatch, type Path } from "react-hook-form";
-import { listRefrigerants } from "@shared/engine/index.ts";
+import { REFRIGERANT_CATALOGUE } from "@shared/property-tables/refrigerant-catalogue.ts";
 import { describeSafetyClass, safetyClasses } from "@shared/content/safety-classes.ts";
 import { applicationText } from "@shared/content/applications.ts";
 import { APPLICATIONS, METERING_DEVICES } from "@shared/schemas/diagnosis.ts";
@@ -92,7 +92,7 @@ export function EquipmentForm({ onCreated }: { onCreated: (equipment: Equipment)
   const sites = useSites();
   const create = useCreateEquipment();
   const refrigerants = useMemo(
-    () => [...listRefrigerants()].sort((a, b) => a.id.localeCompare(b.id, "en", { numeric: true })),
+    () => [...REFRIGERANT_CATALOGUE].sort((a, b) => a.id.localeCompare(b.id, "en", { numeric: true })),
     [],
   );
   const [formError, setFormError] = useState<string | null>(null);

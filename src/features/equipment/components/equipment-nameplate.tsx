@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 import { applicationText } from "@shared/content/applications.ts";
-import { listRefrigerants } from "@shared/engine/index.ts";
+import { findRefrigerant } from "@shared/property-tables/refrigerant-catalogue.ts";
 import type { Equipment } from "@shared/schemas/equipment.ts";
 import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
 import {
@@ -35,7 +35,7 @@ export function EquipmentNameplate({
   units: DisplayUnits;
   atmosphericKPa: number;
 }) {
-  const info = listRefrigerants().find((candidate) => candidate.id === equipment.refrigerant);
+  const info = findRefrigerant(equipment.refrigerant);
   const pressure = (kPaGauge: number | null) =>
     kPaGauge == null ? null : (
       <span className="num">

@@ -1,7 +1,7 @@
 import { createColumnHelper, useTable, type SortingState } from "@tanstack/react-table";
 import { useId, useMemo, useState, type ReactNode } from "react";
 import { Link } from "react-router-dom";
-import { listRefrigerants } from "@shared/engine/index.ts";
+import { REFRIGERANT_CATALOGUE } from "@shared/property-tables/refrigerant-catalogue.ts";
 import type { SafetyClass } from "@shared/content/safety-classes.ts";
 import { EQUIPMENT_KINDS, type Equipment } from "@shared/schemas/equipment.ts";
 import type { EquipmentSort } from "@shared/schemas/list-pages.ts";
@@ -33,7 +33,7 @@ export interface EquipmentRow {
 }
 
 export function toEquipmentRows(equipment: readonly Equipment[]): EquipmentRow[] {
-  const classes = new Map(listRefrigerants().map((info) => [info.id, info.safety.class]));
+  const classes = new Map(REFRIGERANT_CATALOGUE.map((info) => [info.id, info.safety.class]));
   return equipment.map((unit) => ({
     id: unit.id,
     name: unit.name,

@@ -1,14 +1,8 @@
 import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { micronsToPa } from "@shared/engine/index.ts";
 import type { Evacuation } from "@shared/schemas/procedure-records.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
+import { formatVacuum, VACUUM_LABEL, vacuumToDisplay, type VacuumUnit } from "./vacuum-units.ts";
 
-export type VacuumUnit = "micron" | "Pa";
-export const VACUUM_LABEL: Record<VacuumUnit, string> = { micron: "µm", Pa: "Pa" };
-
-/** A vacuum reading in the chosen unit; microns are stored, pascals converted by the engine. */
-export const vacuumToDisplay = (microns: number, unit: VacuumUnit) => (unit === "micron" ? microns : micronsToPa(microns));
-export const formatVacuum = (microns: number, unit: VacuumUnit) => `${formatNumber(vacuumToDisplay(microns, unit), unit === "micron" ? 0 : 1)} ${VACUUM_LABEL[unit]}`;
 
 /** The log axis cannot show zero: a perfect-vacuum reading is drawn at the gauge's last digit. */
 const LOG_FLOOR_MICRONS = 1;
@@ -25,7 +19,7 @@ interface EvacuationChartProps {
  * together) against minutes, with the target as a horizontal line and the moment the pump was
  * valved off as a vertical one. The curve after that line is the decay test.
  */
-export function EvacuationChart({ evacuation, unit, width, height = 280 }: EvacuationChartProps) {
+export default function EvacuationChart({ evacuation, unit, width, height = 280 }: EvacuationChartProps) {
   const data = evacuation.samples.map((sample) => ({
     minutes: sample.minutes,
     vacuum: Number(vacuumToDisplay(Math.max(sample.microns, LOG_FLOOR_MICRONS), unit).toPrecision(4)),

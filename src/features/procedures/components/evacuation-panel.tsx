@@ -25,7 +25,8 @@ import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { recordTime } from "../utils/record-time.ts";
-import { EvacuationChart, formatVacuum, VACUUM_LABEL, type VacuumUnit } from "./evacuation-chart.tsx";
+import { EvacuationChart } from "./lazy-evacuation-chart.tsx";
+import { formatVacuum, VACUUM_LABEL, type VacuumUnit } from "./vacuum-units.ts";
 import { EvacuationBadge, EvacuationSummary } from "./evacuation-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 

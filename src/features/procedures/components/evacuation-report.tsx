@@ -1,6 +1,6 @@
 import { isStanding } from "@shared/schemas/visits.ts";
 import { useEvacuations } from "@/lib/api/procedures.ts";
-import { EvacuationChart } from "./evacuation-chart.tsx";
+import { EvacuationChart } from "./lazy-evacuation-chart.tsx";
 import { EvacuationSummary } from "./evacuation-view.tsx";
 import { ReportSection } from "./report-section.tsx";
 import { formatDateTime } from "@shared/format/date-time.ts";

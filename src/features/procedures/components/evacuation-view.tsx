@@ -2,7 +2,7 @@ import { describeDecay } from "@shared/engine/index.ts";
 import type { DecayVerdict } from "@shared/schemas/procedures.ts";
 import type { Evacuation } from "@shared/schemas/procedure-records.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
-import { formatVacuum, vacuumToDisplay, VACUUM_LABEL, type VacuumUnit } from "./evacuation-chart.tsx";
+import { formatVacuum, vacuumToDisplay, VACUUM_LABEL, type VacuumUnit } from "./vacuum-units.ts";
 import { VerdictBadge, VerdictPanel } from "./verdict-badge.tsx";
 
 export const DECAY_WORDS: Record<DecayVerdict, string> = { held: "Held", moisture: "Moisture", leak: "Leak" };

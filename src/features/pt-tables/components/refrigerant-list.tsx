@@ -1,6 +1,6 @@
-import { useDeferredValue, useId, useMemo, useState } from "react";
+import { useDeferredValue, useId, useState } from "react";
 import { Link } from "react-router-dom";
-import { listRefrigerants } from "@shared/engine/index.ts";
+import { REFRIGERANT_CATALOGUE } from "@shared/property-tables/refrigerant-catalogue.ts";
 import { describeSafetyClass, safetyClasses } from "@shared/content/safety-classes.ts";
 import { paths } from "@/config/paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
@@ -16,7 +16,7 @@ export function RefrigerantList() {
   const [query, setQuery] = useState("");
   const deferredQuery = useDeferredValue(query);
   const searchId = useId();
-  const refrigerants = useMemo(() => listRefrigerants(), []);
+  const refrigerants = REFRIGERANT_CATALOGUE;
   const needle = normalise(deferredQuery);
   const shown = refrigerants.filter((info) => needle === "" || normalise(info.id).includes(needle) || normalise(info.name).includes(needle));
 

@@ -1,7 +1,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { listRefrigerants } from "@shared/engine/index.ts";
+import { REFRIGERANT_CATALOGUE } from "@shared/property-tables/refrigerant-catalogue.ts";
 import { CYLINDER_KIND_LABELS, CYLINDER_KINDS, CylinderCreateSchema, type CylinderCreate } from "@shared/schemas/register.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
@@ -46,7 +46,7 @@ export function CylinderForm({ onSaved }: { onSaved?: () => void }) {
           ))}
         </SelectField>
         <SelectField label="Refrigerant" error={errors.refrigerant?.message} hint="One refrigerant per cylinder." {...form.register("refrigerant")}>
-          {listRefrigerants().map((info) => (
+          {REFRIGERANT_CATALOGUE.map((info) => (
             <option key={info.id} value={info.id}>
               {info.id}
             </option>

@@ -32,7 +32,7 @@ import { RecordedEntries } from "./recorded-entries.tsx";
 import { ReadingCards } from "./reading-cards.tsx";
 import { SettledIndicator } from "./settled-indicator.tsx";
 import { TimelineStrip } from "./timeline-strip.tsx";
-import { TrendChart } from "./trend-chart.tsx";
+import { TrendChart } from "./lazy-trend-chart.tsx";
 import { formatTime } from "@shared/format/date-time.ts";
 
 const FIELD_LABELS: Partial<Record<DraftField, string>> = {

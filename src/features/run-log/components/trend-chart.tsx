@@ -44,7 +44,7 @@ interface TrendChartProps {
  * which the circuit was last settled as a green one, against clock time. Every line differs
  * by dash pattern as well as colour, so it reads in Sunlight mode and on a grey-scale print.
  */
-export function TrendChart({ series, units, width, height = 320 }: TrendChartProps) {
+export default function TrendChart({ series, units, width, height = 320 }: TrendChartProps) {
   const k = DIFFERENCE_LABEL[units.temperature];
   const t = TEMPERATURE_LABEL[units.temperature];
   const difference = (kelvin: number) => Number(differenceToDisplay(kelvin, units.temperature).toFixed(2));

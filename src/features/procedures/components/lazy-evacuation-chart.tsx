@@ -1,0 +1,19 @@
+import { lazy, Suspense, type ComponentProps } from "react";
+
+// The chart and its charting package load only when a chart is shown (a chunk of their own).
+const Chart = lazy(() => import("./evacuation-chart.tsx"));
+
+/** The evacuation chart, fetched on first show; the space it takes is held while it loads. */
+export function EvacuationChart(props: ComponentProps<typeof Chart>) {
+  return (
+    <Suspense
+      fallback={
+        <p aria-busy="true" className="text-muted" style={{ minHeight: props.height ?? 280 }}>
+          Drawing the chart…
+        </p>
+      }
+    >
+      <Chart {...props} />
+    </Suspense>
+  );
+}
