@@ -18,7 +18,7 @@
 import { parseArgs } from "node:util";
 import { performance } from "node:perf_hooks";
 import { and, count, eq, sql } from "drizzle-orm";
-import { atmosphericPressureAtAltitude, saturationPressure } from "@shared/engine/index.ts";
+import { atmosphericPressureAtAltitude, loadAllRefrigerants, saturationPressure } from "@shared/engine/index.ts";
 import { visitReasonText, VISIT_EVENT_LABELS, type MeasuredValues, type VisitStatus } from "@shared/schemas/visits.ts";
 import { MOVEMENT_DIRECTION } from "@shared/schemas/register.ts";
 import { circuitCharge } from "../server/db/charge-references.ts";
@@ -376,6 +376,8 @@ export async function describeDataSet(db: Database, organisationId: string) {
 const megabytes = (bytes: number) => `${(bytes / 1_048_576).toFixed(1)} MB`;
 
 async function main() {
+  // Tables load on demand (decision on saturation tables); the builder looks up every refrigerant it seeds.
+  await loadAllRefrigerants();
   const { values } = parseArgs({
     options: {
       dir: { type: "string", default: "data/large" },
