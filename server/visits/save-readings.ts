@@ -29,7 +29,7 @@ import { HttpError, notFound } from "../http/http-error.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
 import { calibrateAfterWeighIn } from "./calibrate-after-weigh-in.ts";
 import { readingInput } from "./reading-input.ts";
-import { lockVisits } from "./write-to-visit.ts";
+import { bumpVisitRevisions, lockVisits } from "./write-to-visit.ts";
 
 /** One save as the route hands it over: who, which visit, and the body as parsed at the boundary. */
 export interface ReadingSave {
@@ -158,6 +158,7 @@ async function saveTogether(tx: Database, batch: Pending[]): Promise<Outcome[]> 
   if (rows.length === 0) return outcomes;
 
   const people: People = new Map(batch.map(({ save }) => [save.user.id, save.user]));
+  await bumpVisitRevisions(tx, [...new Set(rows.map(({ row }) => row.visitId))]);
   const stored = await insertReadings(
     tx,
     rows.map(({ row }) => row),

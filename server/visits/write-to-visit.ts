@@ -56,21 +56,23 @@ export function writeToVisit<T>(
  * saved together, server/visits/save-readings.ts). The caller checks each row's organisation and
  * status, as writeToVisit does for one.
  */
-export async function lockVisits(tx: Database, visitIds: readonly string[]): Promise<VisitRow[]> {
-  const rows = await tx
+export function lockVisits(tx: Database, visitIds: readonly string[]): Promise<VisitRow[]> {
+  return tx
     .select()
     .from(visits)
     .where(inArray(visits.id, [...visitIds]))
     .orderBy(asc(visits.id))
     .for("update");
-  // Locked in id order first (no deadlock between batches), then bumped like writeToVisit does,
-  // so the rows the batch writes are stamped with a new revision and pollers see them.
-  if (rows.length === 0) return rows;
-  const bumped = await tx
+}
+
+/**
+ * Bumps the revision of the locked visits a batch is about to write to (before its inserts, so
+ * the trigger stamps the rows with the new revision); visits whose saves were all refused keep theirs.
+ */
+export async function bumpVisitRevisions(tx: Database, visitIds: readonly string[]): Promise<void> {
+  if (visitIds.length === 0) return;
+  await tx
     .update(visits)
     .set({ revision: sql`${visits.revision} + 1` })
-    .where(inArray(visits.id, [...visitIds]))
-    .returning();
-  const byId = new Map(bumped.map((row) => [row.id, row]));
-  return rows.map((row) => byId.get(row.id) ?? row);
+    .where(inArray(visits.id, [...visitIds]));
 }
