@@ -197,19 +197,6 @@ export async function joinCrews(db: Database, members: { visitId: string; userId
   if (members.length > 0) await db.insert(visitTechnicians).values(members).onConflictDoNothing();
 }
 
-export async function insertReading(
-  db: Database,
-  organisationId: string,
-  values: { visitId: string; circuit: number; takenAt?: Date; note?: string; input: DiagnosisInput; result: DiagnosisResult; recordedBy: string },
-): Promise<Reading> {
-  const [row] = await db
-    .insert(readings)
-    .values({ ...values, note: values.note || null, organisationId })
-    .returning();
-  const people = await peopleById(db, [row.recordedBy]);
-  return toReading(row, people);
-}
-
 /** A reading to store with insertReadings: its id and time chosen by the caller. */
 export interface NewReading {
   id: string;
@@ -403,24 +390,6 @@ export async function getVisitDetail(db: Database, organisationId: string, visit
 /** What changed on the visit after `sinceRevision` (see buildVisit), and the token it brings the client to. */
 export async function getVisitDelta(db: Database, organisationId: string, head: VisitHead, sinceRevision: number) {
   return buildVisit(db, organisationId, head, sinceRevision);
-}
-
-/** Readings of one unit's most recent visit with any, per circuit, for the equipment page. */
-export async function latestVisitReadings(db: Database, organisationId: string, equipmentId: string) {
-  const [latest] = await db
-    .select({ visitId: readings.visitId })
-    .from(readings)
-    .innerJoin(visits, eq(visits.id, readings.visitId))
-    .where(and(eq(visits.organisationId, organisationId), eq(visits.equipmentId, equipmentId), countsInResults))
-    .orderBy(desc(readings.takenAt))
-    .limit(1);
-  if (!latest) return [];
-  return db
-    .select()
-    .from(readings)
-    .where(and(eq(readings.visitId, latest.visitId), countsInResults))
-    // Equal times in the order they were stored, so the trend keeps the later entry.
-    .orderBy(asc(readings.takenAt), asc(readings.createdAt));
 }
 
 export async function insertPhoto(
