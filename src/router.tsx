@@ -1,7 +1,6 @@
 import type { QueryClient } from "@tanstack/react-query";
 import type { ComponentType } from "react";
 import { createBrowserRouter, type LoaderFunction, type LoaderFunctionArgs } from "react-router-dom";
-import { AppShell } from "@/components/layouts/app-shell.tsx";
 import { AuthLayout } from "@/components/layouts/auth-layout.tsx";
 import { RouteError } from "@/components/errors/route-error.tsx";
 import { paths } from "@/config/paths.ts";
@@ -63,7 +62,9 @@ export function createRouter(queryClient: QueryClient) {
       loader: requireSessionLoader(queryClient),
       // Shown for the moment the session check takes on first load.
       hydrateFallbackElement: <p className="p-6 text-muted">Loading Satura…</p>,
-      element: <AppShell />,
+      // The app's frame (navigation, user menu) loads beside the screen's own chunk and its data,
+      // so the public screens never download it.
+      lazy: async () => ({ Component: (await import("@/components/layouts/app-shell.tsx")).AppShell }),
       errorElement: <RouteError />,
       children: [
         {

@@ -1,0 +1,48 @@
+/**
+ * `npx tsx bench/web/run-log-timeline.ts [path]`: where the run log's first load spends its time on
+ * the throttled phone profile of `bench:web` — each request's start and end from navigation, the
+ * main thread's long tasks (over 50 ms, as the Long Tasks API counts them) and the moment the page
+ * became interactive. A tool for finding waterfalls and main-thread work, not a benchmark; the
+ * client must be built first. Opens the demo visit's run log unless given another path.
+ */
+import { DEMO_VISIT_REASON, findDemoVisit, runLogInteractive, throttle } from "./profile.ts";
+import { launchBrowser, signedInContext, startServer } from "../browser/launch.ts";
+
+const server = await startServer(Number(process.env.BENCH_WEB_PORT ?? 3214));
+try {
+  const browser = await launchBrowser();
+  const context = await signedInContext(browser, server.base, { viewport: { width: 412, height: 915 } });
+  const target = process.argv[2] ?? `/visits/${await findDemoVisit(context, server.base)}`;
+  const page = await context.newPage();
+  await throttle(context, page);
+  await page.addInitScript(() => {
+    const store = window as unknown as { longTasks: { start: number; duration: number }[] };
+    store.longTasks = [];
+    new PerformanceObserver((list) => {
+      for (const entry of list.getEntries()) store.longTasks.push({ start: entry.startTime, duration: entry.duration });
+    }).observe({ type: "longtask", buffered: true });
+  });
+  await page.goto(`${server.base}${target}`, { waitUntil: "commit" });
+  await page.waitForFunction(runLogInteractive, undefined, { polling: 50, timeout: 120_000 });
+  const { requests, longTasks, interactiveAt } = await page.evaluate(() => ({
+    requests: (performance.getEntriesByType("resource") as PerformanceResourceTiming[]).map((entry) => ({
+      name: entry.name.replace(location.origin, ""),
+      start: entry.startTime,
+      end: entry.responseEnd,
+      bytes: entry.encodedBodySize,
+    })),
+    longTasks: (window as unknown as { longTasks: { start: number; duration: number }[] }).longTasks,
+    interactiveAt: (window as unknown as { interactiveAt: number }).interactiveAt,
+  }));
+  console.log(`${target} (${DEMO_VISIT_REASON}): interactive at ${interactiveAt.toFixed(0)} ms`);
+  console.log("requests (ms from navigation: start → end, bytes on the wire):");
+  for (const request of requests.sort((a, b) => a.start - b.start)) {
+    console.log(`  ${request.start.toFixed(0).padStart(6)} → ${request.end.toFixed(0).padStart(6)}  ${String(request.bytes).padStart(8)}  ${request.name}`);
+  }
+  const busy = longTasks.reduce((sum, task) => sum + task.duration, 0);
+  console.log(`long tasks: ${longTasks.length}, ${busy.toFixed(0)} ms in all`);
+  for (const task of longTasks) console.log(`  at ${task.start.toFixed(0).padStart(6)}  ${task.duration.toFixed(0).padStart(5)} ms`);
+  await browser.close();
+} finally {
+  server.stop();
+}
