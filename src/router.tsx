@@ -38,7 +38,9 @@ function screen(
 ) {
   return {
     loader: async ({ params }: LoaderFunctionArgs) => prefetch(await screenData(), queryClient, params),
-    lazy: async () => ({ Component: (await load()).default }),
+    // The object form tells the router that the chunk brings only the component, so it runs the
+    // loader at once instead of after the chunk.
+    lazy: { Component: async () => (await load()).default },
   };
 }
 
@@ -64,7 +66,7 @@ export function createRouter(queryClient: QueryClient) {
       hydrateFallbackElement: <p className="p-6 text-muted">Loading Satura…</p>,
       // The app's frame (navigation, user menu) loads beside the screen's own chunk and its data,
       // so the public screens never download it.
-      lazy: async () => ({ Component: (await import("@/components/layouts/app-shell.tsx")).AppShell }),
+      lazy: { Component: async () => (await import("@/components/layouts/app-shell.tsx")).AppShell },
       errorElement: <RouteError />,
       children: [
         {

@@ -22,8 +22,14 @@ try {
       for (const entry of list.getEntries()) store.longTasks.push({ start: entry.startTime, duration: entry.duration });
     }).observe({ type: "longtask", buffered: true });
   });
+  // The CPU profile: self time per function, to find the main thread's work on first render.
+  const profiler = await context.newCDPSession(page);
+  await profiler.send("Profiler.enable");
+  await profiler.send("Profiler.setSamplingInterval", { interval: 500 });
+  await profiler.send("Profiler.start");
   await page.goto(`${server.base}${target}`, { waitUntil: "commit" });
   await page.waitForFunction(runLogInteractive, undefined, { polling: 50, timeout: 120_000 });
+  const { profile } = await profiler.send("Profiler.stop");
   const { requests, longTasks, interactiveAt } = await page.evaluate(() => ({
     requests: (performance.getEntriesByType("resource") as PerformanceResourceTiming[]).map((entry) => ({
       name: entry.name.replace(location.origin, ""),
@@ -42,6 +48,16 @@ try {
   const busy = longTasks.reduce((sum, task) => sum + task.duration, 0);
   console.log(`long tasks: ${longTasks.length}, ${busy.toFixed(0)} ms in all`);
   for (const task of longTasks) console.log(`  at ${task.start.toFixed(0).padStart(6)}  ${task.duration.toFixed(0).padStart(5)} ms`);
+  const selfTime = new Map<string, number>();
+  const intervals = profile.timeDeltas ?? [];
+  const nodeById = new Map(profile.nodes.map((node) => [node.id, node]));
+  (profile.samples ?? []).forEach((id, index) => {
+    const frame = nodeById.get(id)!.callFrame;
+    const where = `${frame.functionName || "(anonymous)"} ${frame.url.replace(/^.*\//, "")}:${frame.lineNumber + 1}:${frame.columnNumber + 1}`;
+    selfTime.set(where, (selfTime.get(where) ?? 0) + (intervals[index] ?? 0) / 1000);
+  });
+  console.log("CPU self time by function (top 25, ms; the page's CPU is throttled):");
+  for (const [where, ms] of [...selfTime].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(`  ${ms.toFixed(0).padStart(6)}  ${where}`);
   await browser.close();
 } finally {
   server.stop();
