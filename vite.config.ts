@@ -36,25 +36,27 @@ const chunkGroups = [
     test: /node_modules[\\/](@tanstack[\\/](react-table|table-core|store|react-store)|use-sync-external-store)[\\/]|src[\\/]components[\\/]ui[\\/]data-table[\\/]/,
     priority: 30,
   },
-  // The engine without its tables (each refrigerant's table stays a chunk of its own) and
-  // without the three small modules the API schemas read, which would pull it into every screen;
-  // with the casebook's schema and API module, which read the case generator.
+  // The engine without its tables (each refrigerant's table stays a chunk of its own), without
+  // the three small modules the API schemas read, which would pull it into every screen, and
+  // without the tables' import list, which the first screen uses before the engine has arrived
+  // (prefetch-refrigerant-table.ts); with the casebook's schema and API module, which read the
+  // case generator, and the display units, which convert with the engine.
   {
     name: "engine",
     test: (id: string) =>
-      /shared[\\/](engine|property-tables)[\\/]|(schemas|api)[\\/]casebook\.ts$|node_modules[\\/](psychrolib|convert-units|lodash\.)/.test(id) &&
+      /shared[\\/](engine|property-tables)[\\/]|(schemas|api)[\\/]casebook\.ts$|src[\\/]lib[\\/]units[\\/]|node_modules[\\/](psychrolib|convert-units|lodash\.)/.test(id) &&
       !REFRIGERANT_TABLE.test(id) &&
-      !/refrigerant-catalogue|property-tolerances|procedure-limits/.test(id),
+      !/refrigerant-catalogue|property-tolerances|procedure-limits|saturation-table-imports|prefetch-refrigerant-table/.test(id),
     priority: 20,
   },
   // The signed-in screens' common code: zod and the API contracts, the API layer, components, icons.
-  // Left out, so that this chunk never imports the engine's: the display units (the engine's unit
-  // conversions), the refrigerant tables' queries and the route loaders' module (small, fetched first).
+  // The route loaders' module comes with it (one request fewer when a screen opens). Left out, so
+  // that this chunk never imports the engine's: the display units (the engine's unit conversions).
   {
     name: "app",
     test: (id: string) =>
       /shared[\\/](schemas|content|format)[\\/]|refrigerant-catalogue|property-tolerances|procedure-limits|src[\\/](lib|components|hooks)[\\/]|node_modules[\\/](zod|lucide-react|class-variance-authority|react-error-boundary|@tanstack[\\/](query-core|react-query))[\\/]/.test(id) &&
-      !/(schemas|api)[\\/]casebook\.ts$|src[\\/]lib[\\/](units[\\/]|api[\\/](refrigerant-tables|screen-data))/.test(id),
+      !/(schemas|api)[\\/]casebook\.ts$|src[\\/]lib[\\/]units[\\/]/.test(id),
     minShareCount: 2,
     priority: 10,
   },

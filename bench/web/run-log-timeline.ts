@@ -30,7 +30,7 @@ try {
   await page.goto(`${server.base}${target}`, { waitUntil: "commit" });
   await page.waitForFunction(runLogInteractive, undefined, { polling: 50, timeout: 120_000 });
   const { profile } = await profiler.send("Profiler.stop");
-  const { requests, longTasks, interactiveAt } = await page.evaluate(() => ({
+  const { requests, longTasks, interactiveAt, elements, hiddenElements } = await page.evaluate(() => ({
     requests: (performance.getEntriesByType("resource") as PerformanceResourceTiming[]).map((entry) => ({
       name: entry.name.replace(location.origin, ""),
       start: entry.startTime,
@@ -39,8 +39,10 @@ try {
     })),
     longTasks: (window as unknown as { longTasks: { start: number; duration: number }[] }).longTasks,
     interactiveAt: (window as unknown as { interactiveAt: number }).interactiveAt,
+    elements: document.querySelectorAll("*").length,
+    hiddenElements: document.querySelectorAll("details:not([open]) *").length,
   }));
-  console.log(`${target} (${DEMO_VISIT_REASON}): interactive at ${interactiveAt.toFixed(0)} ms`);
+  console.log(`${target} (${DEMO_VISIT_REASON}): interactive at ${interactiveAt.toFixed(0)} ms; ${elements} elements, ${hiddenElements} of them in closed folds`);
   console.log("requests (ms from navigation: start → end, bytes on the wire):");
   for (const request of requests.sort((a, b) => a.start - b.start)) {
     console.log(`  ${request.start.toFixed(0).padStart(6)} → ${request.end.toFixed(0).padStart(6)}  ${String(request.bytes).padStart(8)}  ${request.name}`);

@@ -47,9 +47,13 @@ const EARLY_REQUEST_TTL_MS = 30_000;
 
 const sendRequest = (path: string, init: RequestInit) => fetch(`/api${path}`, { credentials: "same-origin", ...init });
 
-/** Starts `GET /api<path>` now, for apiRequest to answer from when the screen asks for it. */
-export function startEarlyRequest(path: string): void {
-  if (earlyRequests.has(path)) return;
+/**
+ * Starts `GET /api<path>` now, for apiRequest to answer from when the screen asks for it.
+ * Returns the response (for a caller to peek at a copy: `response.clone()`).
+ */
+export function startEarlyRequest(path: string): Promise<Response> {
+  const started = earlyRequests.get(path);
+  if (started) return started;
   const request = sendRequest(path, { headers: { Accept: "application/json" } });
   // A failure is the asking apiRequest's to report; unasked, it is dropped quietly.
   request.catch(() => undefined);
@@ -57,6 +61,7 @@ export function startEarlyRequest(path: string): void {
   setTimeout(() => {
     if (earlyRequests.get(path) === request) earlyRequests.delete(path);
   }, EARLY_REQUEST_TTL_MS);
+  return request;
 }
 
 /** The early request for a plain GET of `path`, if one was started and not yet taken. */
