@@ -6,7 +6,7 @@
  *
  * - first-load JS of each screen a technician or a reviewer opens first (sign-in, Today, jobs,
  *   equipment, the run log and the report of the demo visit — the quarterly check on the
- *   server-cupboard split, R410A — and the review queue): every script the browser fetched until
+ *   server-cupboard split — and the review queue): every script the browser fetched until
  *   the page was ready and the network idle, sized as the built files compress with gzip and
  *   brotli (node:zlib, level 9 and 11), with the number of files and how many refrigerant tables
  *   were among them; and the stylesheets and fonts beside them;

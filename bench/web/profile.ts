@@ -9,7 +9,7 @@ export const SLOW_4G = { offline: false, latency: 400, downloadThroughput: (1.6e
 export const CPU_SLOWDOWN = 4;
 export const PHONE_VIEWPORT = { width: 412, height: 915 };
 
-/** The demo visit the run-log figures are taken on: the quarterly check on the server-cupboard split (R410A). */
+/** The demo visit the run-log figures are taken on: the quarterly check on the server-cupboard split. */
 export const DEMO_VISIT_REASON = "Quarterly check of the server cupboard split";
 
 /** Slows the page's CPU and network as a mid-range phone on a poor connection (CDP). */
