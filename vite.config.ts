@@ -18,6 +18,50 @@ function chunkFileName(chunk: { facadeModuleId: string | null }): string {
   return `assets/${table[1] ? "single-phase" : "refrigerant"}-${id}-[hash].js`;
 }
 
+/**
+ * Fewer, larger chunks. Left to itself the bundler cuts one chunk per set of screens sharing a
+ * module, and the run log's first load came to 52 files: on HTTP/1.1 a browser opens six
+ * connections to a host, so its data requests queued behind forty scripts. Each group below is
+ * one file; higher priority picks first. Modules used by one screen only stay in its chunk.
+ */
+const REFRIGERANT_TABLE = /data[\\/]refrigerants[\\/]/;
+const chunkGroups = [
+  // Everything the first page needs, whichever it is, in one file beside the entry.
+  { name: "start", tags: ["$initial" as const], priority: 50 },
+  { name: "forms", test: /node_modules[\\/](react-hook-form|@hookform)[\\/]|src[\\/]lib[\\/](form-errors|lazy-zod-resolver)/, priority: 40 },
+  // What the public forms draw with, apart from the app's other components.
+  { name: "ui-basics", test: /src[\\/]components[\\/]ui[\\/](button|field)[\\/]/, priority: 35, includeDependenciesRecursively: true },
+  {
+    name: "data-table",
+    test: /node_modules[\\/](@tanstack[\\/](react-table|table-core|store|react-store)|use-sync-external-store)[\\/]|src[\\/]components[\\/]ui[\\/]data-table[\\/]/,
+    priority: 30,
+  },
+  // The engine without its tables (each refrigerant's table stays a chunk of its own), without
+  // the three small modules the API schemas read, which would pull it into every screen, and
+  // without the tables' import list, which the first screen uses before the engine has arrived
+  // (prefetch-refrigerant-table.ts); with the casebook's schema and API module, which read the
+  // case generator, and the display units, which convert with the engine.
+  {
+    name: "engine",
+    test: (id: string) =>
+      /shared[\\/](engine|property-tables)[\\/]|(schemas|api)[\\/]casebook\.ts$|src[\\/]lib[\\/]units[\\/]|node_modules[\\/](psychrolib|convert-units|lodash\.)/.test(id) &&
+      !REFRIGERANT_TABLE.test(id) &&
+      !/refrigerant-catalogue|property-tolerances|procedure-limits|saturation-table-imports|prefetch-refrigerant-table/.test(id),
+    priority: 20,
+  },
+  // The signed-in screens' common code: zod and the API contracts, the API layer, components, icons.
+  // The route loaders' module comes with it (one request fewer when a screen opens). Left out, so
+  // that this chunk never imports the engine's: the display units (the engine's unit conversions).
+  {
+    name: "app",
+    test: (id: string) =>
+      /shared[\\/](schemas|content|format)[\\/]|refrigerant-catalogue|property-tolerances|procedure-limits|src[\\/](lib|components|hooks)[\\/]|node_modules[\\/](zod|lucide-react|class-variance-authority|react-error-boundary|@tanstack[\\/](query-core|react-query))[\\/]/.test(id) &&
+      !/(schemas|api)[\\/]casebook\.ts$|src[\\/]lib[\\/]units[\\/]/.test(id),
+    minShareCount: 2,
+    priority: 10,
+  },
+];
+
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   // convert-units 2.x pulls lodash modules that read `global` (STACK.md gotcha 3).
@@ -33,7 +77,13 @@ export default defineConfig({
   build: {
     outDir: "dist",
     sourcemap: false,
-    rolldownOptions: { output: { chunkFileNames: chunkFileName } },
+    rolldownOptions: {
+      output: {
+        chunkFileNames: chunkFileName,
+        // Groups take only the modules they name; what those import stays where it belongs.
+        codeSplitting: { includeDependenciesRecursively: false, groups: chunkGroups },
+      },
+    },
   },
   test: {
     include: ["tests/**/*.test.{ts,tsx}"],

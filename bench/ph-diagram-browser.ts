@@ -8,31 +8,9 @@
  * meantime). The run-log panel is folded and unfolded to draw it again. Figures only,
  * never a pass/fail test.
  */
-import { spawn } from "node:child_process";
-import { chromium } from "playwright-core";
-import { CHROMIUM_PATH } from "../scripts/chromium-path.mjs";
+import { launchBrowser, startServer } from "./browser/launch.ts";
 
-const PORT = Number(process.env.BENCH_PORT ?? 3229);
-const BASE = `http://127.0.0.1:${PORT}`;
 const DRAWS = 15;
-
-const server = spawn("npx", ["tsx", "server/index.ts"], {
-  env: { ...process.env, NODE_ENV: "production", DATA_DIR: "memory://", PORT: String(PORT), LOG_LEVEL: "warn", APP_URL: BASE },
-  stdio: "ignore",
-  detached: true,
-});
-
-async function waitForServer(): Promise<void> {
-  for (let attempt = 0; attempt < 240; attempt++) {
-    try {
-      if ((await fetch(`${BASE}/api/health`)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((resolve) => setTimeout(resolve, 500));
-  }
-  throw new Error(`the server did not start on ${BASE}`);
-}
 
 const summary = (label: string, values: number[]) => {
   const sorted = [...values].sort((a, b) => a - b);
@@ -40,9 +18,10 @@ const summary = (label: string, values: number[]) => {
   console.log(`${label.padEnd(44)} median ${median.toFixed(1).padStart(6)} ms   best ${sorted[0]!.toFixed(1).padStart(6)} ms   worst ${sorted.at(-1)!.toFixed(1).padStart(6)} ms   (${values.length} draws)`);
 };
 
+const server = await startServer(Number(process.env.BENCH_PORT ?? 3229));
+const BASE = server.base;
 try {
-  await waitForServer();
-  const browser = await chromium.launch({ executablePath: CHROMIUM_PATH, args: ["--headless", "--no-sandbox", "--disable-gpu"] });
+  const browser = await launchBrowser();
   const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
   await page.goto(`${BASE}/equipment`);
   await page.getByLabel("E-mail").fill("tech@bellbird.example");
@@ -94,12 +73,12 @@ try {
     report.push(Number(await page.getByTestId("ph-diagram").first().getAttribute("data-draw-ms")));
 
   }
-  console.log(`\n== pressure–enthalpy diagram in Chromium (${CHROMIUM_PATH}) ==`);
+  console.log(`\n== pressure–enthalpy diagram in Chromium (${browser.version()}) ==`);
   console.log(`${"first draw on the run log (lazy chunk loaded)".padEnd(44)} ${first.toFixed(1).padStart(6)} ms`);
   summary("run log: render → drawn", draws);
   summary("run log: unfold click → drawn", opens);
   summary("report page: render → drawn (whole page)", report);
   await browser.close();
 } finally {
-  if (server.pid) process.kill(-server.pid, "SIGTERM");
+  server.stop();
 }

@@ -3,6 +3,7 @@ import { createRoot } from "react-dom/client";
 import { RouterProvider } from "react-router-dom";
 import "./styles/app.css";
 import { applyTheme, readTheme } from "./features/theme/theme-store.ts";
+import { startFirstRequests } from "./lib/api/first-requests.ts";
 import { createQueryClient } from "./lib/api/query-client.ts";
 import { AppProviders } from "./providers.tsx";
 import { createRouter } from "./router.tsx";
@@ -11,6 +12,8 @@ import { createRouter } from "./router.tsx";
 applyTheme(readTheme());
 
 const queryClient = createQueryClient();
+// The screen's data goes out before the router asks for the screen's scripts.
+startFirstRequests(queryClient, window.location.pathname);
 const router = createRouter(queryClient);
 
 createRoot(document.getElementById("root")!).render(

@@ -1,7 +1,6 @@
 import type { QueryClient } from "@tanstack/react-query";
 import type { ComponentType } from "react";
 import { createBrowserRouter, type LoaderFunction, type LoaderFunctionArgs } from "react-router-dom";
-import { AppShell } from "@/components/layouts/app-shell.tsx";
 import { AuthLayout } from "@/components/layouts/auth-layout.tsx";
 import { RouteError } from "@/components/errors/route-error.tsx";
 import { paths } from "@/config/paths.ts";
@@ -39,7 +38,9 @@ function screen(
 ) {
   return {
     loader: async ({ params }: LoaderFunctionArgs) => prefetch(await screenData(), queryClient, params),
-    lazy: async () => ({ Component: (await load()).default }),
+    // The object form tells the router that the chunk brings only the component, so it runs the
+    // loader at once instead of after the chunk.
+    lazy: { Component: async () => (await load()).default },
   };
 }
 
@@ -63,7 +64,9 @@ export function createRouter(queryClient: QueryClient) {
       loader: requireSessionLoader(queryClient),
       // Shown for the moment the session check takes on first load.
       hydrateFallbackElement: <p className="p-6 text-muted">Loading Satura…</p>,
-      element: <AppShell />,
+      // The app's frame (navigation, user menu) loads beside the screen's own chunk and its data,
+      // so the public screens never download it.
+      lazy: { Component: async () => (await import("@/components/layouts/app-shell.tsx")).AppShell },
       errorElement: <RouteError />,
       children: [
         {

@@ -36,6 +36,42 @@ interface RequestOptions<T> {
   ifNoneMatch?: string;
 }
 
+/**
+ * GETs sent before the code that reads them has loaded (startEarlyRequest), by path: on a slow
+ * link the first screen's data would otherwise wait for its scripts and then queue behind them
+ * for one of the browser's six connections. Each is taken up once, by the first apiRequest for
+ * the same path, and forgotten after EARLY_REQUEST_TTL_MS if nothing asks for it.
+ */
+const earlyRequests = new Map<string, Promise<Response>>();
+const EARLY_REQUEST_TTL_MS = 30_000;
+
+const sendRequest = (path: string, init: RequestInit) => fetch(`/api${path}`, { credentials: "same-origin", ...init });
+
+/**
+ * Starts `GET /api<path>` now, for apiRequest to answer from when the screen asks for it.
+ * Returns the response (for a caller to peek at a copy: `response.clone()`).
+ */
+export function startEarlyRequest(path: string): Promise<Response> {
+  const started = earlyRequests.get(path);
+  if (started) return started;
+  const request = sendRequest(path, { headers: { Accept: "application/json" } });
+  // A failure is the asking apiRequest's to report; unasked, it is dropped quietly.
+  request.catch(() => undefined);
+  earlyRequests.set(path, request);
+  setTimeout(() => {
+    if (earlyRequests.get(path) === request) earlyRequests.delete(path);
+  }, EARLY_REQUEST_TTL_MS);
+  return request;
+}
+
+/** The early request for a plain GET of `path`, if one was started and not yet taken. */
+function takeEarlyRequest(path: string, method: string, conditional: boolean): Promise<Response> | undefined {
+  if (method !== "GET" || conditional) return undefined;
+  const request = earlyRequests.get(path);
+  earlyRequests.delete(path);
+  return request;
+}
+
 /** A write that has had no answer by then is reported as not confirmed, so no form waits for ever. */
 export const WRITE_TIMEOUT_MS = 20_000;
 
@@ -56,13 +92,13 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
   }
   let response: Response;
   try {
-    response = await fetch(`/api${path}`, {
-      method,
-      credentials: "same-origin",
-      headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
-      signal: signal ?? (write ? AbortSignal.timeout(WRITE_TIMEOUT_MS) : undefined),
-    });
+    response = await (takeEarlyRequest(path, method, ifNoneMatch !== undefined) ??
+      sendRequest(path, {
+        method,
+        headers,
+        body: body === undefined ? undefined : JSON.stringify(body),
+        signal: signal ?? (write ? AbortSignal.timeout(WRITE_TIMEOUT_MS) : undefined),
+      }));
   } catch (error) {
     const name = (error as Error).name;
     if (name === "TimeoutError") {

@@ -1,21 +1,26 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import {
-  MeResponseSchema,
-  MessageResponseSchema,
-  type AuthUser,
-  type MessageResponse,
-  type PasswordResetConfirm,
-  type PasswordResetRequest,
-  type SignIn,
-  type SignUp,
+import type {
+  AuthUser,
+  MessageResponse,
+  PasswordResetConfirm,
+  PasswordResetRequest,
+  SignIn,
+  SignUp,
 } from "@shared/schemas/auth.ts";
 import { ApiError, apiRequest } from "./api-client.ts";
+
+/**
+ * The answers are parsed with the shared schemas as everywhere, but the schemas (and zod with
+ * them) load when an answer arrives, not with the app's first script: the sign-in screen, whose
+ * session check answers 401, never needs them, and a signed-in screen fetches them beside its own.
+ */
+const authSchemas = () => import("@shared/schemas/auth.ts");
 
 /** The signed-in user, or null when there is no session (401). Other failures throw. */
 export async function getMe(signal?: AbortSignal): Promise<AuthUser | null> {
   try {
-    const { user } = await apiRequest("/auth/me", { schema: MeResponseSchema, signal });
-    return user;
+    const payload = await apiRequest("/auth/me", { signal });
+    return (await authSchemas()).MeResponseSchema.parse(payload).user;
   } catch (error) {
     if (error instanceof ApiError && error.status === 401) return null;
     throw error;
@@ -23,19 +28,22 @@ export async function getMe(signal?: AbortSignal): Promise<AuthUser | null> {
 }
 
 export async function signIn(input: SignIn): Promise<AuthUser> {
-  return (await apiRequest("/auth/sign-in", { method: "POST", body: input, schema: MeResponseSchema })).user;
+  const payload = await apiRequest("/auth/sign-in", { method: "POST", body: input });
+  return (await authSchemas()).MeResponseSchema.parse(payload).user;
 }
 
 export async function signUp(input: SignUp): Promise<AuthUser> {
-  return (await apiRequest("/auth/sign-up", { method: "POST", body: input, schema: MeResponseSchema })).user;
+  const payload = await apiRequest("/auth/sign-up", { method: "POST", body: input });
+  return (await authSchemas()).MeResponseSchema.parse(payload).user;
 }
 
 export function signOut(): Promise<void> {
   return apiRequest("/auth/sign-out", { method: "POST" });
 }
 
-export function requestPasswordReset(input: PasswordResetRequest): Promise<MessageResponse> {
-  return apiRequest("/auth/password-reset/request", { method: "POST", body: input, schema: MessageResponseSchema });
+export async function requestPasswordReset(input: PasswordResetRequest): Promise<MessageResponse> {
+  const payload = await apiRequest("/auth/password-reset/request", { method: "POST", body: input });
+  return (await authSchemas()).MessageResponseSchema.parse(payload);
 }
 
 export function confirmPasswordReset(input: PasswordResetConfirm): Promise<void> {

@@ -1,5 +1,5 @@
 import { MutationCache, QueryCache, QueryClient } from "@tanstack/react-query";
-import { toast } from "sonner";
+import { toastError } from "@/components/ui/toaster/toaster.tsx";
 import { ApiError } from "./api-client.ts";
 
 /** Client and server errors will not change on retry; only network and 5xx failures are retried. */
@@ -16,7 +16,7 @@ export function createQueryClient(): QueryClient {
   return new QueryClient({
     queryCache: new QueryCache({
       onError: (error, query) => {
-        if (query.state.data !== undefined) toast.error(`Could not refresh: ${error.message}`);
+        if (query.state.data !== undefined) toastError(`Could not refresh: ${error.message}`);
       },
     }),
     mutationCache: new MutationCache({
@@ -24,7 +24,7 @@ export function createQueryClient(): QueryClient {
         // Forms show field errors themselves; a toast covers everything else.
         if (mutation.options.meta?.silentErrors) return;
         if (error instanceof ApiError && Object.keys(error.fields).length > 0) return;
-        toast.error(error.message);
+        toastError(error.message);
       },
     }),
     defaultOptions: {

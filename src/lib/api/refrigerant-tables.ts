@@ -1,5 +1,4 @@
 import { queryOptions, useQuery, type QueryClient } from "@tanstack/react-query";
-import { loadRefrigerant } from "@shared/engine/index.ts";
 import { isKnownRefrigerant } from "@shared/property-tables/refrigerant-catalogue.ts";
 
 /**
@@ -12,7 +11,9 @@ import { isKnownRefrigerant } from "@shared/property-tables/refrigerant-catalogu
 export const refrigerantTableQueryOptions = (id: string) =>
   queryOptions({
     queryKey: ["refrigerant-tables", id],
-    queryFn: () => loadRefrigerant(id),
+    // The engine registers the table; imported here on demand, so that a route loader importing
+    // this module can send its requests before the engine's script has arrived.
+    queryFn: async () => (await import("@shared/engine/index.ts")).loadRefrigerant(id),
     staleTime: Infinity,
     gcTime: Infinity,
   });

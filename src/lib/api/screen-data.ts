@@ -1,5 +1,4 @@
 import type { QueryClient } from "@tanstack/react-query";
-import { caseQueryOptions } from "./casebook.ts";
 import { chargeReferencesQueryOptions } from "./charge-references.ts";
 import { equipmentDetailQueryOptions } from "./equipment.ts";
 import { ensureRefrigerantTable } from "./refrigerant-tables.ts";
@@ -14,14 +13,19 @@ import { visitQueryOptions } from "./visits.ts";
  */
 const settle = (work: Promise<unknown>) => work.catch(() => null);
 
-/** A visit (run log, procedures) or its report: the visit, its unit, the unit's refrigerant table. */
+/**
+ * A visit (run log, procedures) or its report: the visit, then together its unit, the unit's
+ * charge references and the refrigerant's table (the visit names the unit's refrigerant, so the
+ * table need not wait for the unit: one round trip fewer on a slow link).
+ */
 export async function prefetchVisitScreen(queryClient: QueryClient, visitId: string): Promise<null> {
   const visit = await queryClient.ensureQueryData(visitQueryOptions(visitId)).catch(() => null);
   if (!visit) return null;
-  const unit = queryClient.ensureQueryData(equipmentDetailQueryOptions(visit.equipmentId)).catch(() => null);
   void settle(queryClient.prefetchQuery(chargeReferencesQueryOptions(visit.equipmentId)));
-  const detail = await unit;
-  if (detail) await ensureRefrigerantTable(queryClient, detail.equipment.refrigerant);
+  await Promise.all([
+    settle(queryClient.ensureQueryData(equipmentDetailQueryOptions(visit.equipmentId))),
+    ensureRefrigerantTable(queryClient, visit.refrigerant),
+  ]);
   return null;
 }
 
@@ -37,6 +41,9 @@ export async function prefetchCaseScreen(queryClient: QueryClient, caseId: strin
     await ensureRefrigerantTable(queryClient, fallbackRefrigerant);
     return null;
   }
+  // The casebook's API module reads the case generator (engine): imported here, not above, so
+  // that the other screens' loaders do not wait for the engine's script.
+  const { caseQueryOptions } = await import("./casebook.ts");
   const item = await queryClient.ensureQueryData(caseQueryOptions(caseId)).catch(() => null);
   if (item) await ensureRefrigerantTable(queryClient, item.input.refrigerant);
   return null;

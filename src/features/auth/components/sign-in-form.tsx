@@ -1,21 +1,23 @@
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Link, useNavigate, useSearchParams } from "react-router-dom";
-import { SignInSchema } from "@shared/schemas/auth.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, PasswordField, TextField } from "@/components/ui/field/field.tsx";
 import { paths } from "@/config/paths.ts";
 import { useSignIn } from "@/lib/api/auth.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
+import { lazyZodResolver } from "@/lib/lazy-zod-resolver.ts";
 import { safeNext } from "../utils/safe-next.ts";
+
+// The app's first screen: its schema (and zod) load on the first submit (lazy-zod-resolver.ts).
+const signInResolver = lazyZodResolver(async () => (await import("@shared/schemas/auth.ts")).SignInSchema);
 
 export function SignInForm() {
   const [params] = useSearchParams();
   const navigate = useNavigate();
   const signIn = useSignIn();
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm({ resolver: zodResolver(SignInSchema), defaultValues: { email: "", password: "" } });
+  const form = useForm({ resolver: signInResolver, defaultValues: { email: "", password: "" } });
   const { errors } = form.formState;
 
   const onSubmit = form.handleSubmit(async (values) => {

@@ -1,0 +1,46 @@
+import type { QueryClient } from "@tanstack/react-query";
+import { matchPath } from "react-router-dom";
+import { prefetchRefrigerantTable } from "@shared/property-tables/prefetch-refrigerant-table.ts";
+import { paths } from "@/config/paths.ts";
+import { startEarlyRequest } from "./api-client.ts";
+import { meQueryOptions } from "./auth.ts";
+
+/** Screens that never ask who is signed in (a mailed link, a forgotten password). */
+const WITHOUT_SESSION = [paths.forgotPassword.path, paths.resetPassword.path, paths.acceptInvitation.path];
+const RECORD_ID = /^[0-9a-f-]{36}$/i;
+
+/**
+ * Sends the first screen's own requests at start-up, before the router asks for the screen's
+ * scripts: on a slow link a request sent after them waits for a free connection (six per host)
+ * and arrived seconds late. Who is signed in, for every screen that checks; a unit's record; a
+ * visit's record and, as soon as it answers, its unit's record and its refrigerant's table. The
+ * screen's loader and queries then take these up (startEarlyRequest) and parse them with the
+ * shared schemas as always; here only two ids are read from a copy of the visit, to send the
+ * next requests sooner.
+ */
+export function startFirstRequests(queryClient: QueryClient, pathname: string): void {
+  if (!WITHOUT_SESSION.some((path) => matchPath(path, pathname))) void queryClient.prefetchQuery(meQueryOptions());
+  const visitId = (matchPath(paths.visits.detail.path, pathname) ?? matchPath(paths.visits.report.path, pathname))?.params.visitId;
+  if (visitId && RECORD_ID.test(visitId)) {
+    startEarlyRequest(`/visits/${visitId}`)
+      .then(async (response) => (response.ok ? ((await response.clone().json()) as EarlyVisit) : null))
+      .then((answer) => {
+        if (typeof answer?.visit?.refrigerant === "string") prefetchRefrigerantTable(answer.visit.refrigerant);
+        if (typeof answer?.visit?.equipmentId === "string") startUnitRequests(answer.visit.equipmentId);
+      })
+      .catch(() => undefined); // the screen's own request reports failures
+  }
+  const equipmentId = matchPath(paths.equipment.detail.path, pathname)?.params.equipmentId;
+  if (equipmentId) startUnitRequests(equipmentId);
+}
+
+/** The two fields read from the visit before its schema has loaded; anything else is ignored. */
+interface EarlyVisit {
+  visit?: { equipmentId?: unknown; refrigerant?: unknown };
+}
+
+function startUnitRequests(equipmentId: string): void {
+  if (!RECORD_ID.test(equipmentId)) return;
+  startEarlyRequest(`/equipment/${equipmentId}`);
+  startEarlyRequest(`/equipment/${equipmentId}/charge-references`);
+}

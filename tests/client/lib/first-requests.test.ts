@@ -1,0 +1,93 @@
+import { QueryClient } from "@tanstack/react-query";
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { z } from "zod";
+import { apiRequest, startEarlyRequest } from "@/lib/api/api-client.ts";
+import { startFirstRequests } from "@/lib/api/first-requests.ts";
+
+const VISIT_ID = "00000000-0000-4000-8000-000000000100";
+const UNIT_ID = "00000000-0000-4000-8000-000000000101";
+const USER = { id: "00000000-0000-4000-8000-000000000007", email: "tech@bellbird.example", name: "Sam Toko", role: "technician", organisationId: "00000000-0000-4000-8000-000000000001" };
+
+/** A server that answers every GET with `{ path }`, and /api/auth/me with 401; counts what was asked. */
+function stubServer() {
+  const asked: string[] = [];
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async (input: RequestInfo | URL) => {
+      const url = String(input);
+      asked.push(url);
+      if (url === "/api/auth/me") return new Response(JSON.stringify({ message: "Sign in first" }), { status: 401 });
+      return new Response(JSON.stringify({ path: url }), { status: 200, headers: { "Content-Type": "application/json" } });
+    }),
+  );
+  return asked;
+}
+const PathSchema = z.object({ path: z.string() });
+
+afterEach(() => vi.unstubAllGlobals());
+
+describe("startEarlyRequest", () => {
+  it("answers the first apiRequest for the same path from the request already sent", async () => {
+    const asked = stubServer();
+    startEarlyRequest(`/visits/${VISIT_ID}`);
+    expect(asked).toEqual([`/api/visits/${VISIT_ID}`]);
+    await expect(apiRequest(`/visits/${VISIT_ID}`, { schema: PathSchema })).resolves.toEqual({ path: `/api/visits/${VISIT_ID}` });
+    expect(asked).toHaveLength(1);
+  });
+
+  it("is taken up once: the next request for the path goes to the server", async () => {
+    const asked = stubServer();
+    startEarlyRequest("/equipment/one");
+    await apiRequest("/equipment/one");
+    await apiRequest("/equipment/one");
+    expect(asked).toEqual(["/api/equipment/one", "/api/equipment/one"]);
+  });
+
+  it("never answers a conditional request or a write", async () => {
+    const asked = stubServer();
+    startEarlyRequest("/visits/two");
+    await apiRequest("/visits/two", { ifNoneMatch: 'W/"e.1"' });
+    await apiRequest("/visits/two", { method: "POST", body: {} });
+    expect(asked).toEqual(["/api/visits/two", "/api/visits/two", "/api/visits/two"]);
+    // The early one is still there for the plain GET.
+    await apiRequest("/visits/two");
+    expect(asked).toHaveLength(3);
+  });
+});
+
+describe("startFirstRequests", () => {
+  it("asks who is signed in and starts the visit's record on a visit's page", async () => {
+    const asked = stubServer();
+    const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+    startFirstRequests(queryClient, `/visits/${VISIT_ID}`);
+    expect(asked).toEqual(["/api/auth/me", `/api/visits/${VISIT_ID}`]);
+    await apiRequest(`/visits/${VISIT_ID}`);
+    expect(asked).toHaveLength(2);
+  });
+
+  it("starts a unit's record and charge references on the unit's page, not on the new-unit form", () => {
+    const asked = stubServer();
+    const queryClient = new QueryClient();
+    startFirstRequests(queryClient, `/equipment/${UNIT_ID}`);
+    startFirstRequests(queryClient, "/equipment/new");
+    expect(asked).toContain(`/api/equipment/${UNIT_ID}`);
+    expect(asked).toContain(`/api/equipment/${UNIT_ID}/charge-references`);
+    expect(asked).not.toContain("/api/equipment/new");
+  });
+
+  it("leaves the screens of a mailed link without a session check", () => {
+    const asked = stubServer();
+    startFirstRequests(new QueryClient(), "/reset-password");
+    expect(asked).toEqual([]);
+  });
+
+  it("parses who is signed in with the shared schema once the answer arrives", async () => {
+    vi.stubGlobal("fetch", vi.fn(async () => new Response(JSON.stringify({ user: USER }), { status: 200 })));
+    const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+    startFirstRequests(queryClient, "/");
+    await vi.waitFor(() => expect(queryClient.getQueryState(["auth", "me"])?.status).not.toBe("pending"));
+    const state = queryClient.getQueryState(["auth", "me"]);
+    expect(state?.error ?? null).toBeNull();
+    expect(state?.data).toMatchObject({ email: USER.email });
+  });
+});
