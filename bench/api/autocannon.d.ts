@@ -11,6 +11,7 @@ declare module "autocannon" {
     url: string;
     connections?: number;
     duration?: number;
+    amount?: number;
     maxOverallRequests?: number;
     timeout?: number;
     headers?: Record<string, string>;
