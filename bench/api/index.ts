@@ -1,17 +1,24 @@
 /**
- * `npm run bench:api [-- --dir data/large --seconds 5 --only <name>]`: the API at the size of a
- * busy company (issue 16). Starts the real server on the large data set in a child process,
- * signs the demo people in, and measures each GET route a screen calls and saving a reading,
- * closed-loop at 1 connection (lists and saving also at 10 and 50), then the list routes again
- * on a demo-size database: their ratio shows whether a list's time grows with the rows behind it.
+ * `npm run bench:api [-- --dir data/large --seconds 5 --only <name> --cpu-prof <folder>]`: the API
+ * at the size of a busy company (issue 16). Starts the real server on the large data set in a
+ * child process, signs the demo people in, and measures each GET route a screen calls and saving a
+ * reading (bench/api/save-reading.ts), closed-loop through autocannon (bench/api/load.ts) at 1
+ * connection (lists also at 10, saving at 10 and 50), then the list routes and saving again on a
+ * demo-size database: their ratio shows whether a route's time grows with the rows behind it.
  * Prints the data set, the server's memory idle and under load, what a stored reading costs, and
  * each figure beside its target. Timings on a shared machine are noisy: compare runs, not digits.
+ * `--cpu-prof` writes the servers' CPU profiles there (open them in Chrome's DevTools).
+ *
+ * Saving writes readings into the data set: point `--dir` at a copy to keep the original as built.
  */
 import { existsSync } from "node:fs";
+import { cpus, loadavg } from "node:os";
+import { resolve } from "node:path";
 import { parseArgs } from "node:util";
 import { readDataSet, type DataSet } from "./data-set.ts";
 import { runLoad, type LoadResult } from "./load.ts";
-import { READING_BODY, ROUTES, SAVE_CONNECTIONS, type BenchRoute, type Person } from "./routes.ts";
+import { ROUTES, type BenchRoute, type Person } from "./routes.ts";
+import { measureSaving, openVisitsForSaving, type SaveLevel } from "./save-reading.ts";
 import { startServer, type BenchServer } from "./server-process.ts";
 
 /** Targets of issue 16. */
@@ -27,6 +34,7 @@ const { values } = parseArgs({
     seconds: { type: "string", default: "5" },
     only: { type: "string" },
     "skip-demo": { type: "boolean", default: false },
+    "cpu-prof": { type: "string" },
   },
 });
 const seconds = Number(values.seconds);
@@ -41,6 +49,11 @@ const EMAILS: Record<Person, string> = { tech: "tech@bellbird.example", senior: 
 const ms = (value: number) => (Number.isFinite(value) ? value.toFixed(value < 10 ? 1 : 0) : "–");
 const mb = (bytes: number) => `${(bytes / 1_048_576).toFixed(0)} MB`;
 const selected = (route: BenchRoute) => !values.only || route.name.includes(values.only);
+const SAVE_ROUTE = "save a reading (POST readings)";
+const savingSelected = !values.only || SAVE_ROUTE.includes(values.only);
+const nodeArgs = values["cpu-prof"] ? ["--cpu-prof", "--cpu-prof-dir", resolve(values["cpu-prof"])] : [];
+/** Open visits the saves of the demo-size database spread over. */
+const DEMO_OPEN_VISITS = 12;
 
 interface Row {
   name: string;
@@ -98,25 +111,14 @@ async function measureRoutes(server: BenchServer, dataSet: DataSet | undefined, 
   return rows;
 }
 
-async function measureSaving(server: BenchServer, openVisits: readonly string[]): Promise<Row[]> {
-  if (openVisits.length === 0) return [];
-  const cookie = await server.signIn(EMAILS.tech);
-  const body = JSON.stringify(READING_BODY);
-  const rows: Row[] = [];
-  for (const connections of SAVE_CONNECTIONS) {
-    const result = await runLoad({
-      origin: server.origin,
-      connections,
-      seconds,
-      // Each save goes to the next open visit, as a crew spread over jobs would send them.
-      next: (index) => ({ method: "POST", path: `/api/visits/${openVisits[index % openVisits.length]}/readings`, headers: { cookie, origin: server.origin }, body }),
-      expectStatus: [201],
-    });
+async function saveRows(server: BenchServer, openVisits: () => Promise<string[]>, cookie: string): Promise<{ rows: Row[]; levels: SaveLevel[] }> {
+  const levels = await measureSaving(server, cookie, await openVisits(), seconds);
+  const rows = levels.map(({ connections, result }): Row => {
     const targeted = connections === SAVE_TARGET_CONNECTIONS;
-    rows.push({ name: "save a reading (POST readings)", connections, result, target: targeted ? `p95 < ${SAVE_P95_MS} ms` : "", pass: targeted ? result.p95 < SAVE_P95_MS : null });
-    process.stdout.write(".");
-  }
-  return rows;
+    return { name: SAVE_ROUTE, connections, result, target: targeted ? `p95 < ${SAVE_P95_MS} ms` : "", pass: targeted ? result.p95 < SAVE_P95_MS : null };
+  });
+  process.stdout.write(".");
+  return { rows, levels };
 }
 
 function printRows(rows: readonly Row[]) {
@@ -157,8 +159,25 @@ console.log(
     `its result column ${cost.resultStored.toFixed(0)} B stored (${cost.resultText.toFixed(0)} B as JSON text), its input ${cost.inputStored.toFixed(0)} B`,
 );
 
-const large = await startServer(values.dir);
+/** Saving at each level on both databases, with the server's CPU per save: the figure that bounds one process. */
+function printSaving(large: readonly SaveLevel[], demo: readonly SaveLevel[]) {
+  if (large.length === 0) return;
+  console.log(`\nSaving a reading (${SAVE_ROUTE}), large data set vs demo size; target p95 < ${SAVE_P95_MS} ms at ${SAVE_TARGET_CONNECTIONS} connections:`);
+  console.log("  conn   large: p50 / p95 / p99 ms    saves/s  server CPU/save   demo: p50 / p95 / p99 ms    saves/s  server CPU/save   p95 large/demo");
+  for (const level of large) {
+    const other = demo.find((candidate) => candidate.connections === level.connections);
+    const figures = (one: SaveLevel) => `${[one.result.p50, one.result.p95, one.result.p99].map((value) => ms(value).padStart(5)).join(" / ")}   ${one.result.perSecond.toFixed(0).padStart(7)}  ${one.serverCpuMs.toFixed(2).padStart(10)} ms`;
+    const verdict = level.connections === SAVE_TARGET_CONNECTIONS ? (level.result.p95 < SAVE_P95_MS ? "  pass" : "  MISS") : "";
+    console.log(
+      `  ${String(level.connections).padStart(4)}   ${figures(level)}      ${other ? `${figures(other)}     ×${(level.result.p95 / other.result.p95).toFixed(1)}` : "–"}${verdict}`,
+    );
+  }
+}
+
+const large = await startServer(values.dir, {}, nodeArgs);
 let rows: Row[] = [];
+let largeSaves: SaveLevel[] = [];
+let demoSaves: SaveLevel[] = [];
 const memoryRows: [string, NodeJS.MemoryUsage][] = [];
 try {
   memoryRows.push(["idle after start", await large.memory()]);
@@ -166,9 +185,11 @@ try {
   const { value: routeRows, peak: routePeak } = await withPeakMemory(large, () => measureRoutes(large, dataSet, routes, (route) => route.connections));
   rows = routeRows;
   memoryRows.push(["peak under the GET routes", routePeak]);
-  if (!values.only || "save a reading".includes(values.only)) {
-    const { value: saveRows, peak: savePeak } = await withPeakMemory(large, () => measureSaving(large, dataSet.openReadingVisits));
-    rows.push(...saveRows);
+  if (savingSelected && dataSet.openReadingVisits.length > 0) {
+    const cookie = await large.signIn(EMAILS.tech);
+    const { value: saved, peak: savePeak } = await withPeakMemory(large, () => saveRows(large, async () => dataSet.openReadingVisits, cookie));
+    rows.push(...saved.rows);
+    largeSaves = saved.levels;
     memoryRows.push(["peak while saving readings", savePeak]);
   }
   await new Promise((resolve) => setTimeout(resolve, 2_000));
@@ -179,18 +200,24 @@ try {
 
 let ratios: { name: string; demo: number; large: number }[] = [];
 if (!values["skip-demo"]) {
-  const demo = await startServer("memory://");
+  const demo = await startServer("memory://", {}, nodeArgs);
   try {
     const lists = ROUTES.filter((route) => route.list && selected(route));
     const demoRows = await measureRoutes(demo, undefined, lists, () => [1]);
     ratios = demoRows.map((row) => ({ name: row.name, demo: row.result.p50, large: rows.find((candidate) => candidate.name === row.name && candidate.connections === 1)!.result.p50 }));
+    if (savingSelected) {
+      const cookie = await demo.signIn(EMAILS.tech);
+      demoSaves = (await saveRows(demo, () => openVisitsForSaving(demo, cookie, DEMO_OPEN_VISITS), cookie)).levels;
+    }
   } finally {
     await demo.stop();
   }
 }
 
 console.log("\n\nLatency at the large data set (closed loop, each level for " + `${seconds} s or 5,000 requests):`);
+console.log(`load average ${loadavg().map((value) => value.toFixed(1)).join(" ")} on ${cpus().length} cores (other jobs included)`);
 printRows(rows);
+printSaving(largeSaves, demoSaves);
 if (ratios.length > 0) {
   console.log(`\nLists at the demo size vs the large data set (p50 at 1 connection; target: at most ${LIST_RATIO}× the demo's):`);
   for (const ratio of ratios) {

@@ -67,19 +67,3 @@ export const ROUTES: readonly BenchRoute[] = [
   { name: "organisation settings", path: () => "/api/organisation/settings", as: "tech", connections: [1] },
   { name: "members", path: () => "/api/members", as: "owner", connections: [1] },
 ];
-
-/** POST /api/visits/:id/readings: a reading a technician types on an R407C unit, spread over open visits. */
-export const READING_BODY = {
-  circuit: 1,
-  suctionPressureKPa: 468,
-  suctionLineTempC: 12.1,
-  liquidPressureKPa: 1685,
-  liquidLineTempC: 37,
-  dischargeLineTempC: 82,
-  returnAirDryBulbC: 24.5,
-  returnAirWetBulbC: 17.8,
-  supplyAirDryBulbC: 13.6,
-  outdoorAirDryBulbC: 30.2,
-  runMinutes: 20,
-};
-export const SAVE_CONNECTIONS = [1, 10, 50] as const;

@@ -15,6 +15,8 @@ export interface BenchServer {
   child: ChildProcess;
   /** Resident set, V8 heap and ArrayBuffers (PGlite's WebAssembly memory), in bytes. */
   memory: () => Promise<NodeJS.MemoryUsage>;
+  /** The server process's CPU time so far (user and system, µs): its cost per request, apart from the client's. */
+  cpu: () => Promise<NodeJS.CpuUsage>;
   signIn: (email: string) => Promise<string>;
   stop: () => Promise<void>;
 }
@@ -44,26 +46,38 @@ async function waitForHealth(origin: string, child: ChildProcess, timeoutMs: num
   throw new Error(`the server did not answer /api/health within ${timeoutMs / 1000} s`);
 }
 
-/** `dataDir`: a PGlite folder, or "memory://" for a fresh demo-size database. */
-export async function startServer(dataDir: string, extraEnv: Record<string, string> = {}): Promise<BenchServer> {
+/**
+ * `dataDir`: a PGlite folder, or "memory://" for a fresh demo-size database. `nodeArgs`: more
+ * options for the server's node (e.g. `--cpu-prof`, to see where a route's time goes).
+ */
+export async function startServer(dataDir: string, extraEnv: Record<string, string> = {}, nodeArgs: readonly string[] = []): Promise<BenchServer> {
   const port = await freePort();
   const origin = `http://127.0.0.1:${port}`;
-  const child = spawn(process.execPath, ["--import", "tsx", "--import", "./bench/api/memory-probe.ts", "server/index.ts"], {
+  const child = spawn(process.execPath, [...nodeArgs, "--import", "tsx", "--import", "./bench/api/memory-probe.ts", "server/index.ts"], {
     cwd: root,
     env: { ...process.env, NODE_ENV: "production", HOST: "127.0.0.1", PORT: String(port), APP_URL: origin, DATA_DIR: dataDir, DEMO_DATA: "true", LOG_LEVEL: "fatal", COOKIE_SECURE: "false", ...extraEnv },
     stdio: ["ignore", "inherit", "inherit", "ipc"],
   });
   await waitForHealth(origin, child, 120_000);
 
-  const memory = () =>
-    new Promise<NodeJS.MemoryUsage>((resolve, reject) => {
-      const timer = setTimeout(() => reject(new Error("the server did not report its memory")), 5_000);
-      child.once("message", (message: { memory: NodeJS.MemoryUsage }) => {
+  // Answers are told apart by their key (two questions of one kind at once both take the first answer).
+  const ask = <T>(kind: "memory" | "cpu") =>
+    new Promise<T>((resolve, reject) => {
+      const listener = (message: Record<string, T>) => {
+        if (!(kind in message)) return;
         clearTimeout(timer);
-        resolve(message.memory);
-      });
-      child.send("memory");
+        child.off("message", listener);
+        resolve(message[kind]!);
+      };
+      const timer = setTimeout(() => {
+        child.off("message", listener);
+        reject(new Error(`the server did not report its ${kind}`));
+      }, 5_000);
+      child.on("message", listener);
+      child.send(kind);
     });
+  const memory = () => ask<NodeJS.MemoryUsage>("memory");
+  const cpu = () => ask<NodeJS.CpuUsage>("cpu");
 
   const signIn = async (email: string) => {
     const response = await fetch(`${origin}/api/auth/sign-in`, {
@@ -84,5 +98,5 @@ export async function startServer(dataDir: string, extraEnv: Record<string, stri
       child.kill("SIGTERM");
     });
 
-  return { origin, child, memory, signIn, stop };
+  return { origin, child, memory, cpu, signIn, stop };
 }

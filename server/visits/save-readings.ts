@@ -4,7 +4,8 @@
  * charge record, lock, insert, names, crew, calibration checks, begin, commit) held fifty
  * technicians to about a hundred saves a second, each waiting seconds behind the others.
  *
- * Saves that arrive while a batch is being written wait for the next one, and each batch is one
+ * Saves that arrive while a batch is being written wait for the next one, which also waits for the
+ * saves still on their way in while they keep coming (MAX_GATHER_MS at most); each batch is one
  * transaction of a fixed number of statements whatever its size: the visits' rows locked in id
  * order and checked (README decision 012), the units' nameplates, sites and charge records read
  * once, every reading judged, one insert, one crew insert, one check for a weigh-in awaiting its
@@ -16,6 +17,7 @@
  * the others.
  */
 import { randomUUID } from "node:crypto";
+import { performance } from "node:perf_hooks";
 import type { z, ZodSafeParseResult } from "zod";
 import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import type { Reading, ReadingBodySchema } from "@shared/schemas/visits.ts";
@@ -51,15 +53,43 @@ interface Pending {
 /** Enough to take a full room of technicians in one transaction; more wait for the next. */
 const MAX_BATCH = 200;
 
+/**
+ * How long a batch may wait for saves still on their way through the request pipeline (body,
+ * session, parse). A batch waits only while saves keep arriving: it starts after the first turn
+ * of the event loop that brought none (so a lone save waits one turn, as before), when it is
+ * full, or after this long. Without it, fifty technicians' saves went in batches of one to four:
+ * a batch's statements run in one turn, so the saves that came meanwhile were still being read
+ * when the next batch started, and each batch costs the same statements whatever its size.
+ */
+const MAX_GATHER_MS = 10;
+
+export interface ReadingSaverOptions {
+  /** The longest a batch waits for saves still arriving (MAX_GATHER_MS unless a test needs another). */
+  maxGatherMs?: number;
+}
+
 /** @returns save(), which resolves to the stored reading or rejects with that save's own refusal. */
-export function createReadingSaver(db: Database): (save: ReadingSave) => Promise<Reading> {
+export function createReadingSaver(db: Database, { maxGatherMs = MAX_GATHER_MS }: ReadingSaverOptions = {}): (save: ReadingSave) => Promise<Reading> {
   const queue: Pending[] = [];
   let writing = false;
   let lastArrival = 0;
 
-  async function drain(): Promise<void> {
-    while (queue.length > 0) await writeBatch(db, queue.splice(0, MAX_BATCH));
-    writing = false;
+  /** Waits a turn at a time while saves keep arriving, then writes a batch. */
+  function gather(since: number, seen: number): void {
+    setImmediate(() => {
+      if (queue.length > seen && queue.length < MAX_BATCH && performance.now() - since < maxGatherMs) return gather(since, queue.length);
+      void write();
+    });
+  }
+
+  async function write(): Promise<void> {
+    try {
+      await writeBatch(db, queue.splice(0, MAX_BATCH));
+    } finally {
+      // Saves that came while this batch was written start the next one.
+      if (queue.length > 0) gather(performance.now(), queue.length);
+      else writing = false;
+    }
   }
 
   return (save) =>
@@ -70,8 +100,7 @@ export function createReadingSaver(db: Database): (save: ReadingSave) => Promise
       queue.push({ save, arrivedAt: new Date(lastArrival), resolve, reject });
       if (writing) return;
       writing = true;
-      // Saves that arrived in the same turn of the event loop share the first batch.
-      setImmediate(() => void drain());
+      gather(performance.now(), queue.length);
     });
 }
 

@@ -125,6 +125,53 @@ describe("readings saved together", () => {
     expect(await storedOn(closed)).toEqual([]);
   });
 
+  it("gathers saves arriving a turn of the event loop apart into one batch, each with its own answer, in arrival order", async () => {
+    const visitId = await openVisit();
+    const db = testApp.database.db;
+    let transactions = 0;
+    const counted = new Proxy(db, {
+      get: (target, property) =>
+        property === "transaction"
+          ? (write: Parameters<typeof db.transaction>[0]) => {
+              transactions++;
+              return target.transaction(write);
+            }
+          : Reflect.get(target, property, target),
+    });
+    // A long window: what ends the gathering here is the first turn that brings no save.
+    const saveReading = createReadingSaver(counted, { maxGatherMs: 60_000 });
+    const temperatures = [13, 13.1, 13.2, 13.3, 13.4];
+    const pending: Promise<unknown>[] = [];
+    const send = (index: number) => {
+      const values = body(temperatures[index]!);
+      const saved = saveReading(save(visitId, index === 2 ? { ...values, suctionPressureKPa: -500 } : values));
+      saved.catch(() => undefined); // its refusal is read below
+      pending.push(saved);
+    };
+    // Each save after the first arrives a turn later, ahead of that turn's check, as a request
+    // read from its socket comes before the batch's turn: saves still coming in one by one.
+    await new Promise<void>((resolve) => {
+      const arrive = (index: number) =>
+        setImmediate(() => {
+          send(index);
+          if (index + 1 < temperatures.length) arrive(index + 1);
+          else resolve();
+        });
+      arrive(1);
+      send(0);
+    });
+    const outcomes = await Promise.allSettled(pending);
+    expect(transactions).toBe(1);
+    expect(outcomes.map((outcome) => outcome.status)).toEqual(["fulfilled", "fulfilled", "rejected", "fulfilled", "fulfilled"]);
+    expect((outcomes[2] as PromiseRejectedResult).reason).toBeInstanceOf(ZodError);
+    expect((await storedOn(visitId)).map((row) => row.input.suctionLineTempC)).toEqual([13, 13.1, 13.3, 13.4]);
+
+    // A save arriving alone is written after one quiet turn, never held for the window.
+    const alone = await saveReading(save(visitId, body(13.5)));
+    expect(alone.input.suctionLineTempC).toBe(13.5);
+    expect(transactions).toBe(2);
+  });
+
   it("writes the saves again one by one when the batch's transaction fails, so only the failing one is lost", async () => {
     const visitId = await openVisit();
     const saveReading = createReadingSaver(testApp.database.db);
