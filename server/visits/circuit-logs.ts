@@ -4,13 +4,15 @@
  * log's own rule), the chart series reduced to a few hundred points, and the readings that
  * matter. The series is read from the readings' figure columns (migration 0015), so a circuit of
  * 10,000 readings costs one index scan of small rows, not 10,000 stored results decompressed;
- * only the handful of readings sent whole are read whole.
+ * only the handful of readings sent whole are read whole. The logs change only when the visit's
+ * readings or adjustments do, so they are kept per visit under that stamp: every viewer's
+ * refresh and first load between two writes costs two index lookups, not the series again.
  */
 import { assessTrend, DiagnosisInputError, lastAtEachInstant } from "@shared/engine/index.ts";
 import type { TrendResult } from "@shared/schemas/diagnosis.ts";
 import type { Adjustment, ChartPoint, CircuitLog } from "@shared/schemas/visits.ts";
 import type { Database } from "../db/client.ts";
-import { circuitCounts, circuitFigures, readingRowsById, type CircuitCount, type ReadingFigures, type ReadingRow } from "../db/circuit-readings.ts";
+import { readingRowsById, runLogStamp, visitFigures, type ReadingFigures, type ReadingRow } from "../db/circuit-readings.ts";
 import { readingsThatMatter } from "../report/readings-that-matter.ts";
 import { chartSeries } from "./chart-series.ts";
 
@@ -28,7 +30,7 @@ export type CircuitLogRows = Omit<CircuitLog, "keyReadings" | "olderCursor"> & {
  * settled reading's and the latest) are the whole stored ones.
  */
 async function trendOf(db: Database, figures: readonly ReadingFigures[], adjustments: readonly Adjustment[]): Promise<TrendResult | null> {
-  const distinct = lastAtEachInstant(figures, (row) => row.takenAt.getTime());
+  const distinct = lastAtEachInstant(figures, (row) => row.takenAt);
   if (distinct.length === 0) return null;
   const older = distinct.filter((row) => row.resultIsCurrent !== true).map((row) => row.id);
   const whole = new Map((await readingRowsById(db, older)).map((row) => [row.id, row]));
@@ -36,14 +38,14 @@ async function trendOf(db: Database, figures: readonly ReadingFigures[], adjustm
   let next = 0;
   let previous = -Infinity;
   const series = distinct.map((row) => {
-    const time = row.takenAt.getTime();
+    const time = row.takenAt;
     // Adjustments come in time order: skip those before the previous reading, take the first since.
     while (next < changes.length && changes[next]!.at <= previous) next += 1;
     const change = next < changes.length && changes[next]!.at <= time ? changes[next]! : undefined;
     previous = time;
     const stored = whole.get(row.id);
     return {
-      takenAt: row.takenAt.toISOString(),
+      takenAt: new Date(row.takenAt).toISOString(),
       // What the rule reads of a current result: the two figures, and the fields that mark it current.
       input: stored?.input ?? (row.runMinutes === null ? {} : { runMinutes: row.runMinutes }),
       result: stored?.result ?? { chargeState: null, chargeDeviation: null, superheatK: row.superheatK, subcoolingK: row.subcoolingK },
@@ -69,45 +71,74 @@ async function trendOf(db: Database, figures: readonly ReadingFigures[], adjustm
   };
 }
 
-/** One circuit's log from its counts, figures and the adjustments that apply to it. */
-async function circuitLog(db: Database, visitId: string, count: CircuitCount, adjustments: readonly Adjustment[]): Promise<CircuitLogRows> {
-  const figures = count.standing === 0 ? [] : await circuitFigures(db, visitId, count.circuit);
-  const relevant = adjustments.filter((adjustment) => adjustment.voided === null && (adjustment.circuit === null || adjustment.circuit === count.circuit));
-  const origin = figures[0]?.takenAt.getTime() ?? 0;
+/** One circuit's log from its records' figures (in time order) and the visit's adjustments. */
+async function circuitLog(db: Database, circuit: number, records: readonly ReadingFigures[], adjustments: readonly Adjustment[]): Promise<CircuitLogRows> {
+  const figures = records.filter((row) => row.standing);
+  const relevant = adjustments.filter((adjustment) => adjustment.voided === null && (adjustment.circuit === null || adjustment.circuit === circuit));
+  const origin = figures[0]?.takenAt ?? 0;
   const points: ChartPoint[] = figures.map((row) => ({
-    x: (row.takenAt.getTime() - origin) / MINUTE_MS,
-    takenAt: row.takenAt.toISOString(),
+    x: (row.takenAt - origin) / MINUTE_MS,
+    takenAt: new Date(row.takenAt).toISOString(),
     superheatK: row.superheatK,
     subcoolingK: row.subcoolingK,
     evaporatingTempC: row.evaporatingTempC,
     condensingTempC: row.condensingTempC,
   }));
-  const [trend, keyRows] = await Promise.all([
-    trendOf(db, figures, relevant),
-    readingRowsById(db, readingsThatMatter(figures, relevant.map((adjustment) => adjustment.at)).readings.map((row) => row.id)),
-  ]);
+  const trend = await trendOf(db, figures, relevant);
+  const keyRows = await readingRowsById(db, readingsThatMatter(figures, relevant.map((adjustment) => adjustment.at)).readings.map((row) => row.id));
   return {
-    circuit: count.circuit,
-    recordCount: count.records,
-    readingCount: count.standing,
-    firstTakenAt: count.firstTakenAt?.toISOString() ?? null,
-    lastTakenAt: count.lastTakenAt?.toISOString() ?? null,
+    circuit,
+    recordCount: records.length,
+    readingCount: figures.length,
+    firstTakenAt: points[0]?.takenAt ?? null,
+    lastTakenAt: points.at(-1)?.takenAt ?? null,
     points: chartSeries(points),
     trend,
     keyRows,
   };
 }
 
+/** Visits whose logs are kept, most recently used last; a few open visits are watched at once. */
+const CACHED_VISITS = 16;
+type LogCache = Map<string, { stamp: string; logs: Promise<CircuitLogRows[]> }>;
+/** Per database (tests run several in one process), per visit. */
+const caches = new WeakMap<Database, LogCache>();
+
+async function workOut(db: Database, visitId: string, adjustments: readonly Adjustment[]): Promise<CircuitLogRows[]> {
+  const records = await visitFigures(db, visitId);
+  const logs: CircuitLogRows[] = [];
+  let start = 0;
+  // Records come by circuit: one circuit's slice at a time.
+  while (start < records.length) {
+    const circuit = records[start]!.circuit;
+    let end = start;
+    while (end < records.length && records[end]!.circuit === circuit) end += 1;
+    logs.push(await circuitLog(db, circuit, records.slice(start, end), adjustments));
+    start = end;
+  }
+  return logs;
+}
+
 /**
- * The log of every circuit with readings on the visit, in circuit order.
+ * The log of every circuit with readings on the visit, in circuit order, from the cache when
+ * neither the readings nor the adjustments changed since it was worked out.
  *
  * @param adjustments the visit's adjustments in time order (voided ones are left out here)
  */
 export async function circuitLogs(db: Database, visitId: string, adjustments: readonly Adjustment[]): Promise<CircuitLogRows[]> {
-  const counts = await circuitCounts(db, visitId);
-  const logs: CircuitLogRows[] = [];
-  // One circuit after another: PGlite runs one query at a time anyway, and this keeps one
-  // circuit's figures in memory at once.
-  for (const count of counts) logs.push(await circuitLog(db, visitId, count, adjustments));
+  let cache = caches.get(db);
+  if (!cache) caches.set(db, (cache = new Map()));
+  const stamp = await runLogStamp(db, visitId);
+  const held = cache.get(visitId);
+  cache.delete(visitId);
+  if (held && held.stamp === stamp) {
+    cache.set(visitId, held);
+    return held.logs;
+  }
+  const logs = workOut(db, visitId, adjustments);
+  // Concurrent first loads share one computation; a failed one is not kept.
+  cache.set(visitId, { stamp, logs });
+  logs.catch(() => cache.get(visitId)?.logs === logs && cache.delete(visitId));
+  while (cache.size > CACHED_VISITS) cache.delete(cache.keys().next().value!);
   return logs;
 }
