@@ -41,6 +41,8 @@ export interface ReadingFigures {
   circuit: number;
   /** ms since the epoch, to the millisecond (as a Date holds it). */
   takenAt: number;
+  /** When stored, µs since the epoch: the order of readings taken at the same instant. */
+  createdAtMicros: number;
   standing: boolean;
   runMinutes: number | null;
   superheatK: number | null;
@@ -59,14 +61,16 @@ const figure = (text: string | undefined) => (text === undefined || text === "" 
  * (migration 0015), never the stored result. The rows come as ONE text value that PostgreSQL
  * builds and this splits: 10,000 rows passed one by one through PGlite's protocol took 0.4–1 s
  * on a busy machine, the single value 70–150 ms. Numbers are written by float8out, which gives
- * the shortest text that reads back as the same double, so nothing is rounded on the way.
+ * the shortest text that reads back as the same double, so nothing is rounded on the way. With
+ * `sinceRevision`, only the records written after it (readings_visit_revision_idx).
  */
-export async function visitFigures(db: Database, visitId: string): Promise<ReadingFigures[]> {
+export async function visitFigures(db: Database, visitId: string, sinceRevision?: number): Promise<ReadingFigures[]> {
   const text = (value: SQL) => sql`coalesce((${value})::text, '')`;
   const { rows } = await db.execute<{ figures: string | null }>(sql`
     select string_agg(concat_ws(',',
       ${readings.circuit},
       round(date_part('epoch', date_trunc('milliseconds', ${readings.takenAt})) * 1000)::bigint,
+      round(date_part('epoch', ${readings.createdAt}) * 1000000)::bigint,
       (${readings.voidedAt} is null)::int,
       coalesce(${readings.resultIsCurrent}, false)::int,
       ${readings.id},
@@ -74,15 +78,17 @@ export async function visitFigures(db: Database, visitId: string): Promise<Readi
       ${text(sql`${readings.evaporatingTempC}`)}, ${text(sql`${readings.condensingTempC}`)}
     ), ';' order by ${readings.circuit}, ${readings.takenAt}, ${readings.createdAt}, ${readings.id}) as figures
     from ${readings}
-    where ${readings.visitId} = ${visitId} and ${readings.pendingImportId} is null`);
+    where ${readings.visitId} = ${visitId} and ${readings.pendingImportId} is null
+      ${sinceRevision === undefined ? sql`` : sql`and ${readings.revision} > ${sinceRevision}`}`);
   const all = rows[0]?.figures;
   if (!all) return [];
   return all.split(";").map((line) => {
-    const [circuit, takenAt, standing, current, id, runMinutes, superheatK, subcoolingK, evaporatingTempC, condensingTempC] = line.split(",");
+    const [circuit, takenAt, createdAtMicros, standing, current, id, runMinutes, superheatK, subcoolingK, evaporatingTempC, condensingTempC] = line.split(",");
     return {
       id: id!,
       circuit: Number(circuit),
       takenAt: Number(takenAt),
+      createdAtMicros: Number(createdAtMicros),
       standing: standing === "1",
       resultIsCurrent: current === "1",
       runMinutes: figure(runMinutes),
@@ -95,15 +101,22 @@ export async function visitFigures(db: Database, visitId: string): Promise<Readi
 }
 
 /**
- * A stamp that changes whenever the visit's readings or adjustments do (each written row carries
- * the visit's revision, migration 0014, and a void or an import's commit rewrites it): what the
- * circuit logs are cached under. Two index-only lookups.
+ * A stamp that changes whenever the visit's readings or adjustments do: what the circuit logs
+ * are kept under. Each written row carries the visit's revision (migration 0014), and every
+ * write to a visit bumps it first under the visit's lock (server/visits/write-to-visit.ts), so
+ * a void or an import's commit moves the maximum; the count of records also catches rows
+ * stored without that bump (the seed and the large data set's builder insert directly).
  */
-export async function runLogStamp(db: Database, visitId: string): Promise<string> {
-  const { rows } = await db.execute<{ readings: number | null; adjustments: number | null }>(sql`
-    select (select max(revision) from ${readings} where visit_id = ${visitId}) as readings,
-           (select max(revision) from ${adjustments} where visit_id = ${visitId}) as adjustments`);
-  return `${rows[0]?.readings ?? 0}.${rows[0]?.adjustments ?? 0}`;
+export async function runLogStamp(db: Database, visitId: string): Promise<{ readings: number; records: number; adjustments: number }> {
+  const { rows } = await db.execute<{ readings: number | null; records: number; adjustments: number | null }>(sql`
+    select r.readings, r.records, (select max(revision) from ${adjustments} where visit_id = ${visitId}) as adjustments
+    from (select max(revision) as readings, count(*)::int as records from ${readings} where visit_id = ${visitId} and pending_import_id is null) r`);
+  return { readings: Number(rows[0]?.readings ?? 0), records: Number(rows[0]?.records ?? 0), adjustments: Number(rows[0]?.adjustments ?? 0) };
+}
+
+/** The order visitFigures gives: by circuit, time, when stored, id. */
+export function compareFigures(a: ReadingFigures, b: ReadingFigures): number {
+  return a.circuit - b.circuit || a.takenAt - b.takenAt || a.createdAtMicros - b.createdAtMicros || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
 }
 
 /** Whole rows of these readings, in time order. */

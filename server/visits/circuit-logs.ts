@@ -6,13 +6,14 @@
  * 10,000 readings costs one index scan of small rows, not 10,000 stored results decompressed;
  * only the handful of readings sent whole are read whole. The logs change only when the visit's
  * readings or adjustments do, so they are kept per visit under that stamp: every viewer's
- * refresh and first load between two writes costs two index lookups, not the series again.
+ * refresh and first load between two writes costs two index lookups, not the series again, and
+ * a write costs the rows it wrote (see circuitLogs).
  */
 import { assessTrend, DiagnosisInputError, lastAtEachInstant } from "@shared/engine/index.ts";
 import type { TrendResult } from "@shared/schemas/diagnosis.ts";
 import type { Adjustment, ChartPoint, CircuitLog } from "@shared/schemas/visits.ts";
 import type { Database } from "../db/client.ts";
-import { readingRowsById, runLogStamp, visitFigures, type ReadingFigures, type ReadingRow } from "../db/circuit-readings.ts";
+import { compareFigures, readingRowsById, runLogStamp, visitFigures, type ReadingFigures, type ReadingRow } from "../db/circuit-readings.ts";
 import { readingsThatMatter } from "../report/readings-that-matter.ts";
 import { chartSeries } from "./chart-series.ts";
 
@@ -100,12 +101,37 @@ async function circuitLog(db: Database, circuit: number, records: readonly Readi
 
 /** Visits whose logs are kept, most recently used last; a few open visits are watched at once. */
 const CACHED_VISITS = 16;
-type LogCache = Map<string, { stamp: string; logs: Promise<CircuitLogRows[]> }>;
+type Stamp = Awaited<ReturnType<typeof runLogStamp>>;
+interface Worked {
+  records: ReadingFigures[];
+  logs: CircuitLogRows[];
+}
+type LogCache = Map<string, { stamp: Stamp; work: Promise<Worked> }>;
 /** Per database (tests run several in one process), per visit. */
 const caches = new WeakMap<Database, LogCache>();
 
-async function workOut(db: Database, visitId: string, adjustments: readonly Adjustment[]): Promise<CircuitLogRows[]> {
-  const records = await visitFigures(db, visitId);
+/**
+ * Every record's figures: from the held ones and only the rows written since their stamp (each
+ * write stamps its rows with the visit's new revision, under the visit's lock, so nothing older
+ * can appear later), or all of them read again.
+ */
+async function recordsOf(db: Database, visitId: string, stamp: Stamp, held?: { stamp: Stamp; work: Promise<Worked> }): Promise<ReadingFigures[]> {
+  const base = held ? await held.work.catch(() => undefined) : undefined;
+  if (!held || !base) return visitFigures(db, visitId);
+  if (stamp.readings === held.stamp.readings && stamp.records === held.stamp.records) return base.records;
+  if (stamp.readings > held.stamp.readings) {
+    const changed = await visitFigures(db, visitId, held.stamp.readings);
+    const replaced = new Map(changed.map((row) => [row.id, row]));
+    const records = base.records.map((row) => replaced.get(row.id) ?? row);
+    const known = new Set(base.records.map((row) => row.id));
+    records.push(...changed.filter((row) => !known.has(row.id)));
+    // Rows stored without a revision of their own would be missing: then all are read again.
+    if (records.length === stamp.records) return records.sort(compareFigures);
+  }
+  return visitFigures(db, visitId);
+}
+
+async function workOut(db: Database, records: ReadingFigures[], adjustments: readonly Adjustment[]): Promise<Worked> {
   const logs: CircuitLogRows[] = [];
   let start = 0;
   // Records come by circuit: one circuit's slice at a time.
@@ -116,12 +142,15 @@ async function workOut(db: Database, visitId: string, adjustments: readonly Adju
     logs.push(await circuitLog(db, circuit, records.slice(start, end), adjustments));
     start = end;
   }
-  return logs;
+  return { records, logs };
 }
 
 /**
- * The log of every circuit with readings on the visit, in circuit order, from the cache when
- * neither the readings nor the adjustments changed since it was worked out.
+ * The log of every circuit with readings on the visit, in circuit order. Kept per visit: when
+ * neither its readings nor its adjustments changed, the kept logs; when readings changed, only
+ * the records written since are read and merged into the kept figures before the logs are
+ * worked out again (in memory: the trend and the series are linear and take milliseconds), so a
+ * live logger's every new reading costs its own rows, not the visit's 10,000 again.
  *
  * @param adjustments the visit's adjustments in time order (voided ones are left out here)
  */
@@ -131,14 +160,14 @@ export async function circuitLogs(db: Database, visitId: string, adjustments: re
   const stamp = await runLogStamp(db, visitId);
   const held = cache.get(visitId);
   cache.delete(visitId);
-  if (held && held.stamp === stamp) {
+  if (held && held.stamp.readings === stamp.readings && held.stamp.records === stamp.records && held.stamp.adjustments === stamp.adjustments) {
     cache.set(visitId, held);
-    return held.logs;
+    return (await held.work).logs;
   }
-  const logs = workOut(db, visitId, adjustments);
+  const work = recordsOf(db, visitId, stamp, held).then((records) => workOut(db, records, adjustments));
   // Concurrent first loads share one computation; a failed one is not kept.
-  cache.set(visitId, { stamp, logs });
-  logs.catch(() => cache.get(visitId)?.logs === logs && cache.delete(visitId));
+  cache.set(visitId, { stamp, work });
+  work.catch(() => cache.get(visitId)?.work === work && cache.delete(visitId));
   while (cache.size > CACHED_VISITS) cache.delete(cache.keys().next().value!);
-  return logs;
+  return (await work).logs;
 }

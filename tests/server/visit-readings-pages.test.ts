@@ -10,6 +10,7 @@ import { assessTrend, diagnose, lastAtEachInstant, saturationPressure, STANDARD_
 import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import { READINGS_PAGE_SIZE, ReadingsPageSchema, VisitDetailResponseSchema, VisitSchema, type CircuitLog, type Visit } from "@shared/schemas/visits.ts";
 import { insertReadings, type NewReading } from "@server/db/visits.ts";
+import { writeToVisit } from "@server/visits/write-to-visit.ts";
 import { readings, users } from "@server/db/schema.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
@@ -62,11 +63,13 @@ describe("paged visit detail and circuit logs", () => {
       return { id: crypto.randomUUID(), organisationId, visitId, circuit: 1, takenAt: new Date(takenAtMs), note: null, input, result: diagnose(input), recordedBy: user!.id };
     };
     const batch = Array.from({ length: COUNT }, (_, index) => row(index, START + index * 30_000));
-    await insertReadings(db, batch, new Map());
+    // Under the visit's lock, bumping its revision, as every save does.
+    const store = (rows: NewReading[]) => writeToVisit(db, organisationId, visitId, (tx) => insertReadings(tx, rows, new Map()));
+    await store(batch);
     stored.push(...batch);
     // A second reading at the same instant as reading 100, stored later: the trend keeps the later one.
     const again = row(101, START + 100 * 30_000);
-    await insertReadings(db, [again], new Map());
+    await store([again]);
     stored.push(again);
     adjustmentAt = new Date(START + 250 * 30_000 - 10_000).toISOString();
     expect((await technician.post(`/api/visits/${visitId}/adjustments`).send({ circuit: 1, kind: "metering", description: "Opened the TXV a quarter turn", at: adjustmentAt })).status).toBe(201);
@@ -186,6 +189,26 @@ describe("paged visit detail and circuit logs", () => {
     expect(logOf(await detail()).trend).toEqual(expected.trend);
   });
 
+  it("brings a reading saved after the logs were worked out into them, and one stored without a revision bump too", async () => {
+    const before = logOf(await detail());
+    const body = { circuit: 1, suctionPressureKPa: 390, suctionLineTempC: 20, liquidPressureKPa: 1500, liquidLineTempC: 35 };
+    const saved = (await technician.post(`/api/visits/${visitId}/readings`).send(body)).body.reading;
+    const after = logOf(await detail());
+    expect(after.readingCount).toBe(before.readingCount + 1);
+    expect(after.points.at(-1)!.takenAt).toBe(saved.takenAt);
+    expect(after.trend!.latest).toEqual(saved.result);
+    stored.push({ ...saved, takenAt: new Date(saved.takenAt), recordedBy: saved.recordedBy.id });
+    // The seed and the large data set's builder insert directly, without the visit's lock.
+    const db = testApp.database.db;
+    const [user] = await db.select().from(users).where(eq(users.email, BELLBIRD.technician));
+    const input = inputAt(5);
+    const organisationId = (await db.execute<{ organisation_id: string }>(sql`select organisation_id from visits where id = ${visitId}`)).rows[0]!.organisation_id;
+    const direct: NewReading = { id: crypto.randomUUID(), organisationId, visitId, circuit: 1, takenAt: new Date(Date.now() + 60_000), note: null, input, result: diagnose(input), recordedBy: user!.id };
+    await insertReadings(db, [direct], new Map());
+    stored.push(direct);
+    expect(logOf(await detail()).readingCount).toBe(after.readingCount + 1);
+  });
+
   it("sends the whole visit instead of a delta when more readings changed than a page holds", async () => {
     const before = await detail();
     const db = testApp.database.db;
@@ -205,7 +228,7 @@ describe("paged visit detail and circuit logs", () => {
     const byId = new Map(stored.map((row) => [row.id, row]));
     for (const row of rows) {
       const { result, input } = byId.get(row.id)!;
-      expect(row).toEqual({ id: row.id, superheatK: result.superheatK, subcoolingK: result.subcoolingK, evaporatingTempC: result.evaporatingTempC, condensingTempC: result.condensingTempC, runMinutes: input.runMinutes, chargeState: result.chargeState, current: true });
+      expect(row).toEqual({ id: row.id, superheatK: result.superheatK, subcoolingK: result.subcoolingK, evaporatingTempC: result.evaporatingTempC, condensingTempC: result.condensingTempC, runMinutes: input.runMinutes ?? null, chargeState: result.chargeState, current: true });
     }
     const target = stored[3]!;
     await db.update(readings).set({ result: { ...target.result, superheatK: 99 } }).where(eq(readings.id, target.id));
