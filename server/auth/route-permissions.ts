@@ -64,6 +64,7 @@ export const ROUTE_PERMISSIONS = {
   "GET /api/visits": SIGNED_IN,
   "POST /api/visits": PERMISSIONS.writeRecords,
   "GET /api/visits/:id": SIGNED_IN,
+  "GET /api/visits/:id/readings": SIGNED_IN,
   "POST /api/visits/:id/readings": PERMISSIONS.writeRecords,
   "POST /api/visits/:id/readings/import": PERMISSIONS.writeRecords,
   "POST /api/visits/:id/adjustments": PERMISSIONS.writeRecords,

@@ -3,7 +3,7 @@
  * "last settled state" needs, without loading a logger's whole series (10,000 readings of
  * about 11 kB of stored result each) to look at its last few minutes.
  */
-import { and, desc, eq, sql } from "drizzle-orm";
+import { and, desc, eq } from "drizzle-orm";
 import type { DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import type { Database } from "./client.ts";
 import { readings, visits } from "./schema.ts";
@@ -29,28 +29,22 @@ export async function latestReadingVisit(db: Database, organisationId: string, e
  * the order they were stored, so the trend keeps the later entry. Reads readings_visit_idx
  * (visit, circuit, taken_at) backwards, so its cost is the limit, not the visit's length. Each
  * reading comes with only what the settling rule reads (assessTrend: the run time, superheat,
- * subcooling, and the two fields that mark a current result), about 100 bytes instead of the
- * 11 kB stored result; readingResult fetches the whole result of the one reading shown.
+ * subcooling, and the fields that mark a current result), from the readings' figure columns
+ * (migration 0015): the stored result is never decompressed; readingResult fetches the whole
+ * result of the one reading shown.
  */
 export async function latestCircuitReadings(db: Database, visitId: string, circuit: number, limit: number) {
-  // jsonb_to_record reads each stored result once: four `result->'…'` would decompress its
-  // TOASTed 4.5 kB four times, which was most of this query's time.
-  const { rows } = await db.execute<{ id: string; taken_at: string; run_minutes: number | null; figures: TrendFigures }>(sql`
-    select r.id, r.taken_at, (r.input->>'runMinutes')::float8 as run_minutes,
-           jsonb_build_object('chargeState', f."chargeState", 'chargeDeviation', f."chargeDeviation", 'superheatK', f."superheatK", 'subcoolingK', f."subcoolingK") as figures
-    from (
-      select id, taken_at, created_at, input, result from ${readings}
-      where visit_id = ${visitId} and circuit = ${circuit} and pending_import_id is null and voided_at is null
-      order by taken_at desc, created_at desc
-      limit ${limit}
-    ) r, jsonb_to_record(r.result) as f("chargeState" jsonb, "chargeDeviation" jsonb, "superheatK" float8, "subcoolingK" float8)
-    order by r.taken_at, r.created_at`);
-  return rows.map((row) => ({
-    id: row.id,
-    takenAt: new Date(row.taken_at),
-    input: row.run_minutes === null ? {} : { runMinutes: row.run_minutes },
-    result: row.figures,
-  }));
+  const rows = await db
+    .select({ id: readings.id, takenAt: readings.takenAt, createdAt: readings.createdAt, runMinutes: readings.runMinutes, superheatK: readings.superheatK, subcoolingK: readings.subcoolingK, chargeState: readings.chargeState })
+    .from(readings)
+    .where(and(eq(readings.visitId, visitId), eq(readings.circuit, circuit), countsInResults))
+    .orderBy(desc(readings.takenAt), desc(readings.createdAt))
+    .limit(limit);
+  return rows.reverse().map((row) => {
+    // What the rule reads of a stored result; chargeDeviation only marks it as the current engine's.
+    const result: TrendFigures = { chargeState: row.chargeState!, chargeDeviation: null, superheatK: row.superheatK, subcoolingK: row.subcoolingK };
+    return { id: row.id, takenAt: row.takenAt, input: row.runMinutes === null ? {} : { runMinutes: row.runMinutes }, result };
+  });
 }
 
 /** The stored result of one reading. */

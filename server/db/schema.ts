@@ -298,6 +298,27 @@ export const visitTechnicians = pgTable(
  * One timed set of readings on one circuit. `input` is what the technician entered
  * (SI-metric, gauge pressures); `result` is what the server's diagnosis engine made of it.
  */
+/** A number of the stored result (or input) as a column, null where the field is null or missing. */
+const figureOf = (column: "result" | "input", field: string) => sql.raw(`(("${column}"->>'${field}')::double precision)`);
+
+/** See `readings`: generated from `result` and `input`, never written by the application. */
+function readingFigureColumns() {
+  return {
+    superheatK: doublePrecision("superheat_k").generatedAlwaysAs(figureOf("result", "superheatK")),
+    subcoolingK: doublePrecision("subcooling_k").generatedAlwaysAs(figureOf("result", "subcoolingK")),
+    evaporatingTempC: doublePrecision("evaporating_temp_c").generatedAlwaysAs(figureOf("result", "evaporatingTempC")),
+    condensingTempC: doublePrecision("condensing_temp_c").generatedAlwaysAs(figureOf("result", "condensingTempC")),
+    /** The recorded run time, minutes (input.runMinutes): the trend's minimum-run rule reads it. */
+    runMinutes: doublePrecision("run_minutes").generatedAlwaysAs(figureOf("input", "runMinutes")),
+    chargeState: text("charge_state").$type<ChargeState>().generatedAlwaysAs(sql.raw(`("result"->>'chargeState')`)),
+    /**
+     * Whether the stored result is the current engine's (it has CURRENT_RESULT_FIELD,
+     * shared/engine/diagnosis/read-trend-series.ts): an older one is read whole and diagnosed again.
+     */
+    resultIsCurrent: boolean("result_is_current").generatedAlwaysAs(sql.raw(`("result" ? 'chargeDeviation')`)),
+  };
+}
+
 export const readings = pgTable(
   "readings",
   {
@@ -324,6 +345,12 @@ export const readings = pgTable(
     revision: integer("revision").notNull().default(0),
     ...voidColumns(),
     createdAt,
+    // The few figures the trend, the chart series and lists read, copied out of `result` and
+    // `input` by the database itself (stored generated columns): every insert path (saves, CSV
+    // imports, the seed, the large data set) and every rewrite of a stored result keeps them
+    // right, and reading them does not decompress the reading's whole stored result (about
+    // 11 kB of TOASTed jsonb), which was most of the cost of a long visit's trend.
+    ...readingFigureColumns(),
   },
   (table) => [
     index("readings_visit_idx").on(table.visitId, table.circuit, table.takenAt),

@@ -6,10 +6,25 @@ import { and, asc, count, desc, eq, gt, inArray, isNotNull, isNull, max, sql, ty
 import { unionAll } from "drizzle-orm/pg-core";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import { defaultDirection, type VisitListQuery, type VisitPage, type VisitSort } from "@shared/schemas/list-pages.ts";
-import { visitReasonText, type Adjustment, type Comment, type Photo, type Reading, type VisitStatus, type VisitSummary } from "@shared/schemas/visits.ts";
+import {
+  MAX_READINGS_PAGE_SIZE,
+  READINGS_PAGE_SIZE,
+  visitReasonText,
+  type Adjustment,
+  type Comment,
+  type Photo,
+  type Reading,
+  type ReadingsPage,
+  type Visit,
+  type VisitDelta,
+  type VisitStatus,
+  type VisitSummary,
+} from "@shared/schemas/visits.ts";
+import { circuitLogs } from "../visits/circuit-logs.ts";
 import { siteAtmosphere } from "../visits/reading-input.ts";
 import { visitRevisionToken } from "../visits/visit-revision.ts";
 import type { Database } from "./client.ts";
+import { circuitReadingsPage } from "./circuit-readings.ts";
 import { afterCursor, cursorColumns, decodeCursor, keysetOrder, matchesSearchSql, pageOf, searchTextOf, type SortKey } from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
 import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitTechnicians, visits } from "./schema.ts";
@@ -218,22 +233,16 @@ export interface NewReading {
 export async function insertReadings(db: Database, rows: NewReading[], people: People): Promise<Reading[]> {
   if (rows.length === 0) return [];
   await db.insert(readings).values(rows);
-  return rows.map((row) => ({
-    id: row.id,
-    visitId: row.visitId,
-    circuit: row.circuit,
-    takenAt: row.takenAt.toISOString(),
-    note: row.note,
-    input: row.input,
-    result: row.result,
-    recordedBy: person(people, row.recordedBy),
-    voided: null,
-  }));
+  return rows.map((row) => toReading({ ...row, voidedAt: null, voidedBy: null, voidReason: null }, people));
 }
 
 const mentionedPeople = (row: { recordedBy: string | null; voidedBy: string | null }) => [row.recordedBy, row.voidedBy];
 
-function toReading(row: typeof readings.$inferSelect, people: People): Reading {
+/** A stored reading as the API shows it: the one mapper for inserts, the detail, deltas and pages. */
+export function toReading(
+  row: Pick<typeof readings.$inferSelect, "id" | "visitId" | "circuit" | "takenAt" | "note" | "input" | "result" | "recordedBy" | "voidedAt" | "voidedBy" | "voidReason">,
+  people: People,
+): Reading {
   return {
     id: row.id,
     visitId: row.visitId,
@@ -330,26 +339,42 @@ export async function getVisitHead(db: Database, organisationId: string, visitId
 export type VisitHead = NonNullable<Awaited<ReturnType<typeof getVisitHead>>>;
 
 /**
- * The visit with its run log in time order. With `sinceRevision`, only the run-log rows written
- * (added, voided, imported) after that revision: a delta the client merges by id; the summary,
- * review state, counts and crew are always whole (they are small).
+ * The visit with the latest page of each circuit's readings (older ones: visitReadingsPage) and
+ * each circuit's log, worked out over all its readings (server/visits/circuit-logs.ts), so the
+ * detail's size and cost follow the page, not the visit's length. With `sinceRevision`, only
+ * the run-log rows written (added, voided, imported) after that revision: a delta the client
+ * merges by id; the summary, review state, counts, crew and (when readings or adjustments
+ * changed) the circuit logs are always whole (they are bounded).
  */
 async function buildVisit(db: Database, organisationId: string, head: VisitHead, sinceRevision?: number) {
   const visitId = head.id;
   const changed = <T extends typeof readings | typeof adjustments | typeof visitComments | typeof photos>(table: T) =>
     sinceRevision === undefined ? undefined : gt(table.revision, sinceRevision);
-  const [readingRows, adjustmentRows, commentRows, photoRows, extra, events] = await Promise.all([
-    db.select().from(readings).where(and(eq(readings.visitId, visitId), isRecord, changed(readings))).orderBy(asc(readings.takenAt), asc(readings.createdAt)),
-    db.select().from(adjustments).where(and(eq(adjustments.visitId, visitId), changed(adjustments))).orderBy(asc(adjustments.at)),
+  const [changedReadings, allAdjustmentRows, commentRows, photoRows, extra, events] = await Promise.all([
+    sinceRevision === undefined
+      ? Promise.resolve(undefined)
+      : db.select().from(readings).where(and(eq(readings.visitId, visitId), isRecord, changed(readings))).orderBy(asc(readings.takenAt), asc(readings.createdAt)),
+    db.select().from(adjustments).where(eq(adjustments.visitId, visitId)).orderBy(asc(adjustments.at)),
     db.select().from(visitComments).where(and(eq(visitComments.visitId, visitId), changed(visitComments))).orderBy(asc(visitComments.createdAt)),
     db.select().from(photos).where(and(eq(photos.visitId, visitId), changed(photos))).orderBy(asc(photos.createdAt)),
     summarise(db, [head]),
     listVisitEvents(db, organisationId, visitId, sinceRevision),
   ]);
+  const adjustmentRows = sinceRevision === undefined ? allAdjustmentRows : allAdjustmentRows.filter((row) => row.revision > sinceRevision);
+  const adjustmentPeople = await peopleById(db, allAdjustmentRows.flatMap(mentionedPeople));
+  const allAdjustments = allAdjustmentRows.map((row) => toAdjustment(row, adjustmentPeople));
+  // The logs change only with the readings and adjustments; a delta without either leaves the held ones.
+  const logsChanged = changedReadings === undefined || changedReadings.length > 0 || adjustmentRows.length > 0;
+  const logs = logsChanged ? await circuitLogs(db, visitId, allAdjustments) : undefined;
+  const pages = new Map<number, { rows: (typeof readings.$inferSelect)[]; olderCursor: string | null }>();
+  if (changedReadings === undefined) {
+    for (const log of logs!) pages.set(log.circuit, await circuitReadingsPage(db, visitId, log.circuit, READINGS_PAGE_SIZE));
+  }
+  const readingRows = changedReadings ?? [...pages.values()].flatMap((page) => page.rows).sort((a, b) => a.takenAt.getTime() - b.takenAt.getTime());
   const people = await peopleById(db, [
     head.signedOffBy,
     ...readingRows.flatMap(mentionedPeople),
-    ...adjustmentRows.flatMap(mentionedPeople),
+    ...(logs ?? []).flatMap((log) => log.keyRows.flatMap(mentionedPeople)),
     ...commentRows.map((row) => row.authorId),
   ]);
   const { siteAltitudeM, token, revision: _revision, ...visit } = head;
@@ -363,7 +388,12 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
     signedOffBy: person(people, head.signedOffBy),
     signedOffAt: head.signedOffAt?.toISOString() ?? null,
     readings: readingRows.map((row) => toReading(row, people)),
-    adjustments: adjustmentRows.map((row) => toAdjustment(row, people)),
+    circuitLogs: logs?.map(({ keyRows, ...log }) => ({
+      ...log,
+      olderCursor: pages.get(log.circuit)?.olderCursor ?? null,
+      keyReadings: keyRows.map((row) => toReading(row, people)),
+    })),
+    adjustments: sinceRevision === undefined ? allAdjustments : adjustmentRows.map((row) => toAdjustment(row, adjustmentPeople)),
     comments: commentRows.map((row) => ({
       id: row.id,
       readingId: row.readingId,
@@ -381,15 +411,37 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
   };
 }
 
-/** The whole visit: summary, review state, and its run log in time order. */
-export async function getVisitDetail(db: Database, organisationId: string, visitId: string, head?: VisitHead) {
+/** The whole visit: summary, review state, the latest page of each circuit's readings and each circuit's log. */
+export async function getVisitDetail(db: Database, organisationId: string, visitId: string, head?: VisitHead): Promise<Visit | undefined> {
   const found = head ?? (await getVisitHead(db, organisationId, visitId));
-  return found && buildVisit(db, organisationId, found);
+  if (!found) return undefined;
+  const built = await buildVisit(db, organisationId, found);
+  return { ...built, circuitLogs: built.circuitLogs ?? [] };
 }
 
-/** What changed on the visit after `sinceRevision` (see buildVisit), and the token it brings the client to. */
-export async function getVisitDelta(db: Database, organisationId: string, head: VisitHead, sinceRevision: number) {
+/**
+ * What changed on the visit after `sinceRevision` (see buildVisit), and the token it brings the
+ * client to; undefined when more readings changed than a page holds (an imported series): the
+ * caller answers with the whole visit, whose size is bounded, instead.
+ */
+export async function getVisitDelta(db: Database, organisationId: string, head: VisitHead, sinceRevision: number): Promise<Omit<VisitDelta, "since"> | undefined> {
+  const changedReadings = await db
+    .select({ id: readings.id })
+    .from(readings)
+    .where(and(eq(readings.visitId, head.id), isRecord, gt(readings.revision, sinceRevision)))
+    .limit(MAX_READINGS_PAGE_SIZE + 1);
+  if (changedReadings.length > MAX_READINGS_PAGE_SIZE) return undefined;
   return buildVisit(db, organisationId, head, sinceRevision);
+}
+
+/**
+ * One circuit's readings (voided ones included) before the reading `before`, a page at a time,
+ * for "Show earlier entries". The caller has checked the visit is the organisation's.
+ */
+export async function visitReadingsPage(db: Database, visitId: string, query: { circuit: number; before: string; limit: number }): Promise<ReadingsPage> {
+  const page = await circuitReadingsPage(db, visitId, query.circuit, query.limit, query.before);
+  const people = await peopleById(db, page.rows.flatMap(mentionedPeople));
+  return { readings: page.rows.map((row) => toReading(row, people)), olderCursor: page.olderCursor };
 }
 
 export async function insertPhoto(

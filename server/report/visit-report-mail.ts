@@ -14,9 +14,9 @@ const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (character) => `&#
  */
 export function visitReportMail(visit: Visit, reportUrl: string, to: string, organisationId: string, timeZone = "UTC"): MailMessage {
   // Voided records are corrections: the report leaves them out (the audit trail keeps them).
-  const readings = visit.readings.filter((reading) => reading.voided === null);
+  // The detail carries each circuit's latest page of readings only; its log holds the latest standing one.
+  const logs = visit.circuitLogs.filter((log) => log.readingCount > 0 && log.keyReadings.length > 0);
   const adjustments = visit.adjustments.filter((adjustment) => adjustment.voided === null);
-  const circuits = [...new Set(readings.map((reading) => reading.circuit))].sort();
   const lines: string[] = [
     `Service visit report — ${visit.equipmentName}`,
     `${visit.customerName}, ${visit.siteName}`,
@@ -25,14 +25,14 @@ export function visitReportMail(visit: Visit, reportUrl: string, to: string, org
     `Status: ${VISIT_STATUS_LABELS[visit.status]}${visit.signedOffBy ? ` (signed off by ${visit.signedOffBy.name}${visit.signedOffAt ? ` on ${formatDateTime(visit.signedOffAt, timeZone)}` : ""})` : ""}`,
     "",
   ];
-  for (const circuit of circuits) {
-    const last = readings.filter((reading) => reading.circuit === circuit).at(-1)!;
+  for (const log of logs) {
+    const last = log.keyReadings.at(-1)!;
     lines.push(
-      `Circuit ${circuit}, last reading: ${chargeStateText[last.result.chargeState].title}.`,
+      `Circuit ${log.circuit}, last reading: ${chargeStateText[last.result.chargeState].title}.`,
       `  Evaporating ${fixed(last.result.evaporatingTempC)} °C, superheat ${fixed(last.result.superheatK)} K; condensing ${fixed(last.result.condensingTempC)} °C, subcooling ${fixed(last.result.subcoolingK)} K.`,
     );
   }
-  if (circuits.length === 0) lines.push("No readings were recorded.");
+  if (logs.length === 0) lines.push("No readings were recorded.");
   if (adjustments.length > 0) {
     lines.push("", "Work done:");
     for (const adjustment of adjustments) lines.push(`  - ${adjustment.description}${adjustment.amountKg != null ? ` (${adjustment.amountKg} kg)` : ""}`);

@@ -12,6 +12,7 @@ import {
   PHOTO_KINDS,
   REASON_NEEDED_MESSAGE,
   ReadingBodySchema,
+  ReadingsPageQuerySchema,
   ReviewActionSchema,
   SendReportSchema,
   STATUSES_OPEN_FOR_COMMENTS,
@@ -41,6 +42,7 @@ import {
   joinCrew,
   listVisitPage,
   updateVisitStatus,
+  visitReadingsPage,
 } from "../db/visits.ts";
 import { singleFileUpload } from "../http/file-upload.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
@@ -144,8 +146,19 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     res.setHeader("Cache-Control", "private, no-cache");
     if (matchesIfNoneMatch(req.get("if-none-match"), etag)) return void res.status(304).end();
     const sinceRevision = revisionSince(since, head.revision);
-    if (sinceRevision !== undefined) return void res.json({ delta: { ...(await getVisitDelta(db, organisationId, head, sinceRevision)), since } });
+    const delta = sinceRevision === undefined ? undefined : await getVisitDelta(db, organisationId, head, sinceRevision);
+    if (delta) return void res.json({ delta: { ...delta, since } });
     res.json({ visit: await getVisitDetail(db, organisationId, head.id, head) });
+  });
+
+  // Older readings of one circuit, a page at a time before the oldest the client holds (the
+  // detail carries each circuit's latest page and, in circuitLogs, the cursor to go on from).
+  router.get("/:id/readings", async (req, res) => {
+    const { organisationId } = getAuth(res);
+    // The visit first: another company's visit is missing (404) whatever the query says.
+    const visit = await loadVisit(organisationId, req.params.id);
+    const query = ReadingsPageQuerySchema.parse(req.query);
+    res.json(await visitReadingsPage(db, visit.id, query));
   });
 
   // The body holds measured values only (strict); the server adds the nameplate, the RLA and

@@ -4,7 +4,7 @@
  * computed from it with the same engine the client runs.
  */
 import { z } from "zod";
-import { DiagnosisInputObjectSchema, DiagnosisInputSchema, DiagnosisResultSchema } from "./diagnosis.ts";
+import { DiagnosisInputObjectSchema, DiagnosisInputSchema, DiagnosisResultSchema, TrendResultSchema } from "./diagnosis.ts";
 import { MAX_CIRCUITS } from "./equipment.ts";
 import { instant } from "./dates.ts";
 import { isTimeZone } from "../format/date-time.ts";
@@ -353,12 +353,81 @@ export const VisitSummarySchema = z.object({
 });
 export type VisitSummary = z.infer<typeof VisitSummarySchema>;
 
+/**
+ * How many of a circuit's latest readings (voided ones included) the visit detail carries, and
+ * the largest page of older ones GET /api/visits/:id/readings gives: a logger's series holds
+ * thousands, each with its whole result (about 11 kB of JSON), and the run log draws the latest
+ * 50 entries first (recorded entries).
+ */
+export const READINGS_PAGE_SIZE = 50;
+export const MAX_READINGS_PAGE_SIZE = 200;
+/**
+ * Chart points per circuit, at most, that the server sends: the whole series reduced to the
+ * least and greatest of each line per time bucket (peaks and dips stay), the latest readings as
+ * they are. A few hundred points draw the same line on a phone as ten thousand.
+ */
+export const MAX_SERIES_POINTS = 400;
+/** Up to this many readings, a circuit's report table lists every one. */
+export const REPORT_ALL_READINGS_UP_TO = 40;
+/** Of a longer series, the report keeps the latest this many (the settled state the finding is drawn from). */
+export const REPORT_LATEST_READINGS = 12;
+
+/** One point of a circuit's trend chart: a standing reading's figures. */
+export const ChartPointSchema = z.object({
+  /** Minutes since the circuit's first standing reading. */
+  x: z.number(),
+  takenAt: z.string(),
+  superheatK: z.number().nullable(),
+  subcoolingK: z.number().nullable(),
+  evaporatingTempC: z.number().nullable(),
+  condensingTempC: z.number().nullable(),
+});
+export type ChartPoint = z.infer<typeof ChartPointSchema>;
+
+/**
+ * What the server works out over ALL of one circuit's standing readings, so the run log, the
+ * review and the report never need the whole series in the browser: counts, the settling
+ * assessment, the chart series (downsampled) and the readings that matter, sent whole.
+ */
+export const CircuitLogSchema = z.object({
+  circuit: z.number().int(),
+  /** Readings recorded on the circuit, voided ones included. */
+  recordCount: z.number().int(),
+  /** Standing (not voided) readings. */
+  readingCount: z.number().int(),
+  /** The first and last standing readings' times; null without any. */
+  firstTakenAt: z.string().nullable(),
+  lastTakenAt: z.string().nullable(),
+  /**
+   * `before` for GET /api/visits/:id/readings: the oldest of this circuit's readings the detail
+   * carries, when older ones exist; null when the detail carries them all.
+   */
+  olderCursor: z.string().nullable(),
+  /** The whole standing series for the chart, at most MAX_SERIES_POINTS points, in time order. */
+  points: z.array(ChartPointSchema),
+  /** assessTrend over every standing reading (one per instant, adjustments marked); null without any. */
+  trend: TrendResultSchema.nullable(),
+  /**
+   * The standing readings that tell the story, whole, in time order: the first, those either side
+   * of each adjustment and the latest REPORT_LATEST_READINGS (all of them up to
+   * REPORT_ALL_READINGS_UP_TO). The report lists them; charge-step checks read them.
+   */
+  keyReadings: z.array(ReadingSchema),
+});
+export type CircuitLog = z.infer<typeof CircuitLogSchema>;
+
 export const VisitSchema = VisitSummarySchema.extend({
   customerContactEmail: z.string().nullable(),
   reviewNote: z.string().nullable(),
   signedOffBy: PersonRefSchema.nullable(),
   signedOffAt: z.string().nullable(),
+  /**
+   * The latest READINGS_PAGE_SIZE readings of each circuit (voided ones included), in time order;
+   * older ones come a page at a time (GET /api/visits/:id/readings, from circuitLogs' olderCursor).
+   */
   readings: z.array(ReadingSchema),
+  /** Per circuit with readings, what the server works out over all of them. */
+  circuitLogs: z.array(CircuitLogSchema),
   adjustments: z.array(AdjustmentSchema),
   comments: z.array(CommentSchema),
   photos: z.array(PhotoSchema),
@@ -373,15 +442,36 @@ export const VisitSchema = VisitSummarySchema.extend({
 });
 export type Visit = z.infer<typeof VisitSchema>;
 
+/** Query of GET /api/visits/:id/readings: one circuit's readings taken before the reading `before`. */
+export const ReadingsPageQuerySchema = z.object({
+  circuit: z.coerce.number().int().min(1).max(MAX_CIRCUITS),
+  before: z.uuid("before names a reading"),
+  limit: z.coerce.number().int().min(1).max(MAX_READINGS_PAGE_SIZE).default(READINGS_PAGE_SIZE),
+});
+export type ReadingsPageQuery = z.input<typeof ReadingsPageQuerySchema>;
+
+/**
+ * Answer of GET /api/visits/:id/readings: readings (voided ones included) in time order, the
+ * newest just before `before`; `olderCursor` asks for the page before these, null at the first.
+ */
+export const ReadingsPageSchema = z.object({ readings: z.array(ReadingSchema), olderCursor: z.string().nullable() });
+export type ReadingsPage = z.infer<typeof ReadingsPageSchema>;
+
 /** Query of GET /api/visits/:id: `since`, the revision the client holds, asks for a delta. */
 export const VisitDetailQuerySchema = z.object({ since: z.string().max(100).optional() });
 
 /**
- * What changed on a visit after the revision `since`: the summary, counts, crew and review state
- * whole; in the lists only the records added or changed (voided, imported) since, each whole, to
- * be merged by id. `revision` is the state the client holds once merged.
+ * What changed on a visit after the revision `since`: the summary, counts, crew, review state and
+ * circuit logs whole; in the lists only the records added or changed (voided, imported) since,
+ * each whole, to be merged by id. `revision` is the state the client holds once merged. When
+ * more readings changed than a page holds (an imported series), the server sends the whole
+ * (bounded) visit instead.
  */
-export const VisitDeltaSchema = VisitSchema.extend({ since: z.string() });
+export const VisitDeltaSchema = VisitSchema.extend({
+  since: z.string(),
+  /** Left out when no reading or adjustment changed: the held logs still hold. */
+  circuitLogs: z.array(CircuitLogSchema).optional(),
+});
 export type VisitDelta = z.infer<typeof VisitDeltaSchema>;
 
 /**

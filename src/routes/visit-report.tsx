@@ -3,7 +3,7 @@ import { applicationText } from "@shared/content/applications.ts";
 import { Printer } from "lucide-react";
 import { useState } from "react";
 import { Link, useParams } from "react-router-dom";
-import { ADJUSTMENT_KIND_LABELS, isStanding, VISIT_STATUS_LABELS, visitReasonText } from "@shared/schemas/visits.ts";
+import { ADJUSTMENT_KIND_LABELS, isStanding, REPORT_LATEST_READINGS, VISIT_STATUS_LABELS, visitReasonText } from "@shared/schemas/visits.ts";
 import { can } from "@shared/schemas/auth.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
@@ -16,7 +16,6 @@ import { PressureTestReport } from "@/features/procedures/components/pressure-te
 import { RefrigerantReport } from "@/features/register/components/refrigerant-report.tsx";
 import { ReadingsTable } from "@/features/report/components/readings-table.tsx";
 import { SendReportForm } from "@/features/report/components/send-report-form.tsx";
-import { readingsThatMatter, REPORT_LATEST_READINGS } from "@/features/report/utils/readings-that-matter.ts";
 import { FindingPanel } from "@/features/run-log/components/finding-panel.tsx";
 import { MeasuredCyclePanel } from "@/features/run-log/components/measured-cycle-panel.tsx";
 import { TrendChart } from "@/features/run-log/components/lazy-trend-chart.tsx";
@@ -112,9 +111,10 @@ export default function VisitReportRoute() {
       </section>
 
       {unit.circuits.map((circuit) => {
-        const series = circuitSeries(data.readings, data.adjustments, circuit.number);
+        const series = circuitSeries(data, circuit.number);
         const last = series.readings.at(-1);
-        const listed = readingsThatMatter(series.readings, series.adjustments.map((adjustment) => adjustment.at));
+        // Chosen by the server over the whole series (server/report/readings-that-matter.ts).
+        const listed = { readings: series.keyReadings, leftOut: series.readingCount - series.keyReadings.length };
         return (
           <section key={circuit.number} aria-labelledby={`circuit-${circuit.number}-heading`} className="space-y-3">
             <h2 id={`circuit-${circuit.number}-heading`} className="text-lg font-semibold">
@@ -123,7 +123,7 @@ export default function VisitReportRoute() {
             <ReadingsTable readings={listed.readings} units={units} atmosphericKPa={atmosphericKPa} />
             {listed.leftOut > 0 && (
               <p className="text-sm text-muted" data-testid="readings-left-out">
-                {listed.readings.length} of {series.readings.length} readings listed: the first, those either side of each adjustment and the latest{" "}
+                {listed.readings.length} of {series.readingCount} readings listed: the first, those either side of each adjustment and the latest{" "}
                 {REPORT_LATEST_READINGS}. The trend chart below draws the whole series.
               </p>
             )}
@@ -165,7 +165,7 @@ export default function VisitReportRoute() {
       <StandingPressureReport visitId={data.id} units={units} />
       <PressureTestReport visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} />
       <EvacuationReport visitId={data.id} chartWidth={chartWidth} />
-      <RefrigerantReport visitId={data.id} readings={data.readings} />
+      <RefrigerantReport visitId={data.id} readings={data.circuitLogs.flatMap((log) => circuitSeries(data, log.circuit).readings)} />
 
       {data.photos.length > 0 && (
         <section aria-labelledby="photos-heading" className="keep-together">

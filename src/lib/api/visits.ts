@@ -5,11 +5,14 @@ import {
   CommentSchema,
   PhotoSchema,
   ReadingSchema,
+  ReadingsPageSchema,
   VisitEventSchema,
   VisitDetailResponseSchema,
   VisitSchema,
   type AdjustmentCreate,
   type ReadingBody,
+  type ReadingsPage,
+  type ReadingsPageQuery,
   type ReviewAction,
   type Visit,
   type VisitCreate,
@@ -19,7 +22,7 @@ import { ImportSummarySchema, type ImportSummary } from "@shared/schemas/reading
 import { VisitPageSchema, type VisitListParams, type VisitPage } from "@shared/schemas/list-pages.ts";
 import { ApiError, apiRequest } from "./api-client.ts";
 import { listQueryString } from "./list-params.ts";
-import { mergeVisitDelta } from "./merge-visit-delta.ts";
+import { mergeReadingsPage, mergeVisitDelta } from "./merge-visit-delta.ts";
 import { viewerTimeZone } from "@shared/format/date-time.ts";
 
 const VisitEnvelopeSchema = z.object({ visit: VisitSchema });
@@ -42,6 +45,12 @@ export async function getVisit(id: string, signal?: AbortSignal, held?: Visit): 
   const answer = await apiRequest(`/visits/${id}?since=${encodeURIComponent(held.revision)}`, { schema: VisitDetailResponseSchema, signal, ifNoneMatch: `W/"${held.revision}"` });
   if (answer === undefined) return held;
   return "delta" in answer ? mergeVisitDelta(held, answer.delta) : answer.visit;
+}
+
+/** A page of one circuit's readings taken before the reading `before` (see circuitLogs' olderCursor). */
+export async function getVisitReadings({ visitId, circuit, before, limit }: ReadingsPageQuery & { visitId: string }, signal?: AbortSignal): Promise<ReadingsPage> {
+  const query = new URLSearchParams({ circuit: String(circuit), before, ...(limit ? { limit: String(limit) } : {}) });
+  return apiRequest(`/visits/${visitId}/readings?${query}`, { schema: ReadingsPageSchema, signal });
 }
 
 export async function createVisit(values: VisitCreate): Promise<Visit> {
@@ -164,6 +173,19 @@ export function useVoidRecord() {
         queryClient.invalidateQueries({ queryKey: ["cylinders"] }),
         queryClient.invalidateQueries({ queryKey: ["equipment"] }),
       ]),
+  });
+}
+/**
+ * "Show earlier entries": fetches the page of a circuit's readings before the oldest held and
+ * merges it into the cached visit, so every screen reading the visit sees them and the next
+ * refresh still asks only for what changed.
+ */
+export function useEarlierReadings() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (variables: { visitId: string; circuit: number; before: string }) => getVisitReadings(variables),
+    onSuccess: (page, { visitId, circuit }) =>
+      queryClient.setQueryData<Visit>(["visits", "detail", visitId], (held) => (held ? mergeReadingsPage(held, circuit, page) : held)),
   });
 }
 export const useUploadPhoto = () => useVisitMutation(uploadPhoto);

@@ -25,6 +25,7 @@ const visit: Visit = {
   signedOffBy: null,
   signedOffAt: null,
   readings: [],
+  circuitLogs: [],
   adjustments: [],
   comments: [{ id: id(1), readingId: null, body: "Filter blocked", author: person, createdAt: "2026-12-02T01:02:00.000Z" }],
   photos: [],

@@ -25,6 +25,7 @@ const visit = VisitSchema.parse({
   signedOffBy: { id: "0b6f6f3e-8a77-4d4b-9d5c-3f1f7a1a2b03", name: "Priya Raman" },
   signedOffAt: "2026-12-02T13:30:00Z",
   readings: [],
+  circuitLogs: [],
   adjustments: [],
   comments: [],
   photos: [],

@@ -35,7 +35,10 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
   const visit = useQuery({ ...visitQueryOptions(visitId), enabled: visitId !== "" });
   const id = useId();
   const withReadings = visits.filter((candidate) => candidate.readingCount > 0);
-  const readings = (visit.data?.readings ?? []).filter((reading) => reading.circuit === circuit && reading.voided === null);
+  // The latest readings the detail carries and the circuit's readings that matter (the server's choice over all of them).
+  const keyReadings = visit.data?.circuitLogs.find((log) => log.circuit === circuit)?.keyReadings ?? [];
+  const held = (visit.data?.readings ?? []).filter((reading) => reading.circuit === circuit && reading.voided === null);
+  const readings = [...held, ...keyReadings.filter((reading) => !held.some((candidate) => candidate.id === reading.id))].sort((a, b) => Date.parse(a.takenAt) - Date.parse(b.takenAt));
   const difference = (kelvin: number | null) =>
     kelvin === null ? "—" : `${formatNumber(differenceToDisplay(kelvin, units.temperature), TEMPERATURE_DECIMALS)} ${DIFFERENCE_LABEL[units.temperature]}`;
 

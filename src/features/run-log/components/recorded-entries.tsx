@@ -5,7 +5,7 @@ import { ADJUSTMENT_KIND_LABELS, type Adjustment, type Reading } from "@shared/s
 import { Button } from "@/components/ui/button/button.tsx";
 import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
-import { useVoidRecord } from "@/lib/api/visits.ts";
+import { useEarlierReadings, useVoidRecord } from "@/lib/api/visits.ts";
 import {
   DIFFERENCE_LABEL,
   differenceToDisplay,
@@ -20,9 +20,10 @@ import { formatTime } from "@shared/format/date-time.ts";
 const clock = (iso: string) => formatTime(iso);
 
 /**
- * Entries drawn at first, newest first; "Show earlier entries" adds as many again. A logged
- * series holds thousands of readings: drawing them all made the page slow to open on a phone,
- * and the one to void is nearly always among the latest.
+ * Entries drawn at first, newest first; "Show earlier entries" adds as many again, fetching the
+ * page of older readings from the server once the held ones are all shown. A logged series
+ * holds thousands of readings: drawing (or downloading) them all made the page slow to open on
+ * a phone, and the one to void is nearly always among the latest.
  */
 export const ENTRIES_PAGE = 50;
 
@@ -33,6 +34,10 @@ interface RecordedEntriesProps {
   visitId: string;
   circuit: number;
   readings: readonly Reading[];
+  /** Where the circuit's older readings go on from (circuitLogs' olderCursor); null when all are held. */
+  olderCursor: string | null;
+  /** Readings recorded on the circuit, voided ones included, held or not. */
+  recordCount: number;
   adjustments: readonly Adjustment[];
   units: DisplayUnits;
   atmosphericKPa: number;
@@ -48,12 +53,15 @@ export function RecordedEntries({
   visitId,
   circuit,
   readings,
+  olderCursor,
+  recordCount,
   adjustments,
   units,
   atmosphericKPa,
   canVoid,
 }: RecordedEntriesProps) {
   const voidRecord = useVoidRecord();
+  const earlier = useEarlierReadings();
   const [shown, setShown] = useState(ENTRIES_PAGE);
   const entries: Entry[] = [
     ...readings
@@ -70,7 +78,16 @@ export function RecordedEntries({
   const pressure = (kPa: number, atmosphere: number) =>
     `${formatNumber(gaugeToDisplay(kPa, units.pressure, atmosphere), PRESSURE_DECIMALS[units.pressure])} ${GAUGE_LABEL[units.pressure]}`;
 
-  const hidden = entries.length - shown;
+  const heldReadings = entries.filter((entry) => entry.kind === "reading").length;
+  // Entries held but not drawn, and readings on the server not held yet.
+  const hidden = entries.length - shown + (olderCursor === null ? 0 : Math.max(0, recordCount - heldReadings));
+  const showEarlier = async () => {
+    // Held entries run out within the next page: fetch the older readings first.
+    if (olderCursor !== null && entries.length - shown < ENTRIES_PAGE) {
+      await earlier.mutateAsync({ visitId, circuit, before: olderCursor });
+    }
+    setShown((count) => count + ENTRIES_PAGE);
+  };
 
   return (
     <div className="space-y-2">
@@ -137,10 +154,11 @@ export function RecordedEntries({
         })}
       </ol>
       {hidden > 0 && (
-        <Button variant="secondary" onClick={() => setShown((count) => count + ENTRIES_PAGE)}>
-          Show earlier entries ({Math.min(hidden, ENTRIES_PAGE)} of {hidden} more)
+        <Button variant="secondary" disabled={earlier.isPending} onClick={() => void showEarlier().catch(() => undefined)}>
+          {earlier.isPending ? "Loading earlier entries…" : `Show earlier entries (${Math.min(hidden, ENTRIES_PAGE)} of ${hidden} more)`}
         </Button>
       )}
+      {earlier.isError && <p role="alert" className="text-sm">The earlier entries could not be loaded: {earlier.error.message}</p>}
     </div>
   );
 }

@@ -62,8 +62,8 @@ interface RunLogProps {
 export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, canWrite, readOnlyNote }: RunLogProps) {
   const atmosphericKPa = atmosphere.pressureKPa;
   const series = useMemo(
-    () => circuitSeries(visit.readings, visit.adjustments, circuit),
-    [visit.readings, visit.adjustments, circuit],
+    () => circuitSeries(visit, circuit),
+    [visit, circuit],
   );
   const lastInput = series.readings.at(-1)?.input;
   // Last values carried forward, so a new reading changes only what moved. What is typed is
@@ -329,6 +329,8 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
           visitId={visit.id}
           circuit={circuit}
           readings={visit.readings}
+          olderCursor={visit.circuitLogs.find((log) => log.circuit === circuit)?.olderCursor ?? null}
+          recordCount={visit.circuitLogs.find((log) => log.circuit === circuit)?.recordCount ?? 0}
           adjustments={visit.adjustments}
           units={units}
           atmosphericKPa={atmosphericKPa}

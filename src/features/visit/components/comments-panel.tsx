@@ -16,7 +16,8 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
   const [error, setError] = useState<string | null>(null);
   const createComment = useCreateComment();
   const readingLabel = (id: string | null) => {
-    const reading = visit.readings.find((candidate) => candidate.id === id);
+    // A comment may be about a reading older than the pages held: the readings that matter may name it.
+    const reading = visit.readings.find((candidate) => candidate.id === id) ?? visit.circuitLogs.flatMap((log) => log.keyReadings).find((candidate) => candidate.id === id);
     return reading ? `circuit ${reading.circuit}, ${formatTime(reading.takenAt)}` : null;
   };
 

@@ -72,7 +72,8 @@ function SubmitChecklist({ visit, onDone }: { visit: Visit; onDone: () => void }
       : submitChecklist({
           reason: visit.reason,
           circuits: equipment.data.equipment.circuits.map((circuit) => circuit.number),
-          readings: visit.readings,
+          // Which circuits have standing readings, counted by the server over all of them.
+          readings: visit.circuitLogs.filter((log) => log.readingCount > 0).map((log) => ({ circuit: log.circuit, voided: null })),
           adjustments: visit.adjustments,
           registerChargedKg: refrigerant.data.circuits.reduce((sum, circuit) => sum + circuit.addedKg + circuit.reusedKg, 0),
           tests: {

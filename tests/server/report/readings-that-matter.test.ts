@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { Reading } from "@shared/schemas/visits.ts";
-import { REPORT_ALL_READINGS_UP_TO, REPORT_LATEST_READINGS, readingsThatMatter } from "@/features/report/utils/readings-that-matter.ts";
+import { REPORT_ALL_READINGS_UP_TO, REPORT_LATEST_READINGS } from "@shared/schemas/visits.ts";
+import { readingsThatMatter } from "@server/report/readings-that-matter.ts";
 
 const START = Date.parse("2026-12-02T01:00:00.000Z");
 /** One reading a minute; only the id and time matter here. */
