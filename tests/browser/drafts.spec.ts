@@ -109,3 +109,38 @@ for (const size of [
     });
   });
 }
+
+test("the message of a failed save shows even when the toast code cannot be fetched", async ({ page, context }) => {
+  // The toast library loads after the first screen; here every fetch of it fails, as on a
+  // device that lost signal before it was ever held. The message must still show, and the
+  // page and the typed values must survive.
+  await page.route("**/assets/*.js", async (route) => {
+    const response = await route.fetch();
+    const body = await response.text();
+    if (body.includes("sonner-loading-wrapper")) return route.abort();
+    return route.fulfill({ response, body });
+  });
+  await page.goto("/equipment");
+  await signIn(page, "tech@bellbird.example");
+  await page
+    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+    .first()
+    .click();
+  await page.getByLabel("Reason for the visit").fill("Toasts without their code");
+  await page.getByRole("button", { name: "Start the visit" }).click();
+  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+  await page.getByLabel("Suction pressure", { exact: true }).fill("465");
+  await page.getByLabel("Suction line temperature", { exact: true }).fill("12");
+  await page.getByLabel("Liquid pressure", { exact: true }).fill("1736");
+  await page.getByLabel("Line temperature for subcooling", { exact: true }).fill("37");
+
+  await context.setOffline(true);
+  await page.getByRole("button", { name: "Save reading" }).click();
+  await expect(page.getByRole("alert").filter({ hasText: /No connection/ }).first()).toBeVisible({ timeout: 3000 });
+  await expect(page.getByLabel("Suction pressure", { exact: true })).toHaveValue("465");
+  // The plain stand-in for the toasts: its messages stay until dismissed.
+  await page.getByRole("button", { name: "Dismiss" }).click();
+  await expect(page.getByRole("button", { name: "Dismiss" })).toBeHidden();
+  await context.setOffline(false);
+  await expect(page.getByRole("button", { name: "Save reading" })).toBeEnabled();
+});

@@ -1,29 +1,52 @@
-import { lazy, Suspense, useEffect, useSyncExternalStore } from "react";
+import { useEffect, useSyncExternalStore } from "react";
 
 /**
- * Error toasts, with the toast library (sonner) loaded on the first one: most sessions never
- * show a toast, and the library was 9 kB of every first page, the sign-in screen's included.
- * Messages raised before it has loaded wait in `queued` and are shown once its Toaster is
- * mounted (a Toaster shows only toasts raised after it subscribed).
+ * Error toasts, with the toast library (sonner) kept off the first load: it was 9 kB of every
+ * first page, the sign-in screen's included. It is fetched once the browser is idle after the
+ * first screen, so that it is already held when the first toast comes, which is often the
+ * moment the connection has gone ("No connection"). If it still cannot be fetched, the
+ * messages show in a plain alert list instead and the next toast tries again: a toast must
+ * never take the page down with it.
  */
 type Sonner = typeof import("sonner");
 
 let sonner: Sonner | null = null;
+/** Set once sonner's Toaster is mounted and listening; toasts before that wait in `pending`. */
+let mounted = false;
+let loading: Promise<Sonner> | null = null;
+/** Messages raised while the library is not mounted yet, or could not be fetched. */
+let pending: readonly string[] = [];
 let wanted = false;
-const queued: string[] = [];
 const listeners = new Set<() => void>();
 
-/** Shows an error toast; the first call loads the toast library. */
+function notify() {
+  for (const listener of listeners) listener();
+}
+
+function loadSonner(): Promise<Sonner> {
+  loading ??= import("sonner").catch((error: unknown) => {
+    loading = null; // the next toast tries again
+    throw error;
+  });
+  return loading;
+}
+
+/** Shows an error toast; the library is fetched now if the idle-time fetch has not run yet. */
 export function toastError(message: string): void {
-  if (sonner) {
+  if (sonner && mounted) {
     sonner.toast.error(message);
     return;
   }
-  queued.push(message);
-  if (!wanted) {
-    wanted = true;
-    for (const listener of listeners) listener();
-  }
+  pending = [...pending, message];
+  wanted = true;
+  notify();
+  loadSonner().then(
+    (library) => {
+      sonner ??= library;
+      notify();
+    },
+    () => notify(),
+  );
 }
 
 function subscribe(listener: () => void) {
@@ -31,26 +54,79 @@ function subscribe(listener: () => void) {
   return () => listeners.delete(listener);
 }
 
-const SonnerToaster = lazy(async () => {
-  const library = await import("sonner");
-  function LoadedToaster() {
-    // Runs after sonner's own Toaster has subscribed (a child's effects run first).
-    useEffect(() => {
-      sonner = library;
-      for (const message of queued.splice(0)) library.toast.error(message);
-    }, []);
-    return <library.Toaster position="top-center" richColors closeButton toastOptions={{ style: { fontSize: "1rem" } }} />;
+interface ToasterState {
+  library: Sonner | null;
+  pending: readonly string[];
+  wanted: boolean;
+}
+let snapshot: ToasterState = { library: null, pending, wanted };
+function getSnapshot(): ToasterState {
+  if (snapshot.library !== sonner || snapshot.pending !== pending || snapshot.wanted !== wanted) {
+    snapshot = { library: sonner, pending, wanted };
   }
-  return { default: LoadedToaster };
-});
+  return snapshot;
+}
 
-/** Where toasts appear; renders nothing until the first toast is asked for. */
-export function Toaster() {
-  const shown = useSyncExternalStore(subscribe, () => wanted);
-  if (!shown) return null;
+function LoadedToaster({ library }: { library: Sonner }) {
+  // Runs after sonner's own Toaster has subscribed (a child's effects run first): a Toaster
+  // shows only toasts raised after it subscribed.
+  useEffect(() => {
+    mounted = true;
+    const waiting = pending;
+    pending = [];
+    for (const message of waiting) library.toast.error(message);
+    notify();
+    return () => {
+      mounted = false;
+    };
+  }, [library]);
+  return <library.Toaster position="top-center" richColors closeButton toastOptions={{ style: { fontSize: "1rem" } }} />;
+}
+
+/** Shown only when the toast library could not be fetched (offline before it was ever held). */
+function PlainToasts({ messages }: { messages: readonly string[] }) {
+  if (messages.length === 0) return null;
   return (
-    <Suspense fallback={null}>
-      <SonnerToaster />
-    </Suspense>
+    <div role="alert" className="fixed inset-x-2 top-2 z-50 mx-auto max-w-md space-y-2">
+      {messages.map((message, index) => (
+        <p key={index} className="rounded-card border-2 border-rule bg-surface p-3 shadow-card">
+          {message}
+        </p>
+      ))}
+      <button
+        type="button"
+        className="min-h-touch rounded-card border-2 border-rule bg-surface px-4 font-medium"
+        onClick={() => {
+          pending = [];
+          notify();
+        }}
+      >
+        Dismiss
+      </button>
+    </div>
   );
+}
+
+/** Where toasts appear. Fetches the toast library when the browser is first idle. */
+export function Toaster() {
+  const state = useSyncExternalStore(subscribe, getSnapshot);
+  useEffect(() => {
+    const fetchWhenIdle = () =>
+      void loadSonner().then(
+        (library) => {
+          sonner ??= library;
+          notify();
+        },
+        () => undefined, // offline now: the first toast tries again, or plain alerts stand in
+      );
+    if (typeof requestIdleCallback === "function") {
+      const handle = requestIdleCallback(fetchWhenIdle, { timeout: 5000 });
+      return () => cancelIdleCallback(handle);
+    }
+    const handle = setTimeout(fetchWhenIdle, 2000);
+    return () => clearTimeout(handle);
+  }, []);
+  if (state.library) return <LoadedToaster library={state.library} />;
+  if (!state.wanted) return null;
+  return <PlainToasts messages={state.pending} />;
 }
