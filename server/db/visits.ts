@@ -2,17 +2,18 @@
  * Queries for visits and their run log. Every function takes the caller's organisation id;
  * a visit of another organisation reads as missing.
  */
-import { and, asc, count, desc, eq, gt, inArray, isNotNull, isNull, max, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, gt, inArray, isNotNull, isNull, max, sql, type AnyColumn, type SQL } from "drizzle-orm";
 import { unionAll } from "drizzle-orm/pg-core";
+import type { SearchTerm } from "@shared/format/search-terms.ts";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import { defaultDirection, type VisitListQuery, type VisitPage, type VisitSort } from "@shared/schemas/list-pages.ts";
 import { visitReasonText, type Adjustment, type Comment, type Photo, type Reading, type VisitStatus, type VisitSummary } from "@shared/schemas/visits.ts";
 import { siteAtmosphere } from "../visits/reading-input.ts";
 import { visitRevisionToken } from "../visits/visit-revision.ts";
 import type { Database } from "./client.ts";
-import { afterCursor, cursorColumns, decodeCursor, keysetOrder, matchesSearchSql, pageOf, searchTextOf, type SortKey } from "./keyset.ts";
+import { afterCursor, containsTerm, cursorColumns, decodeCursor, keysetOrder, matchesSearchSql, pageOf, type SortKey } from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
-import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitTechnicians, visits } from "./schema.ts";
+import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitSearch, visitTechnicians, visits } from "./schema.ts";
 import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
 
 /** Readings that are records: not rows of a CSV import still being stored (see readings.pendingImportId). */
@@ -82,20 +83,33 @@ export interface VisitFilter {
   equipmentId?: string;
 }
 
-const VISIT_SORT_KEYS: Record<VisitSort, SortKey[]> = {
-  startedAt: [{ expr: visits.startedAt, type: "timestamptz" }],
-  // lower(): the table sorted "a" with "A" before; Postgres would put every capital first.
-  equipmentName: [{ expr: sql`lower(${equipment.name})`, type: "text" }],
-  reason: [{ expr: sql`lower(${visits.reason})`, type: "text" }],
-  status: [{ expr: visits.status, type: "text" }],
+/**
+ * Each sort's keys and the id that breaks ties, each pair with an index in that order: visits
+ * (organisation_id, started_at) and (organisation_id, status, id); visit_search (organisation_id,
+ * unit_name, visit_id) and (organisation_id, reason, visit_id), whose keys are lower(): the table
+ * sorted "a" with "A" before, where Postgres would put every capital first.
+ */
+const VISIT_SORTS: Record<VisitSort, { keys: SortKey[]; id: AnyColumn }> = {
+  startedAt: { keys: [{ expr: visits.startedAt, type: "timestamptz" }], id: visits.id },
+  equipmentName: { keys: [{ expr: visitSearch.unitName, type: "text" }], id: visitSearch.visitId },
+  reason: { keys: [{ expr: visitSearch.reason, type: "text" }], id: visitSearch.visitId },
+  status: { keys: [{ expr: visits.status, type: "text" }], id: visits.id },
 };
 
 /**
- * A search word that names someone on the visit's crew: the visits of the people whose name
- * holds the word, read once per query (an uncorrelated, hashed subquery), not once per visit.
+ * One search word against a visit: in its unit, site, customer, refrigerant or reason
+ * (visit_search, through its trigram index), or in the name of someone on its crew. Both are
+ * sets of visit ids read from an index, so a rare word reads few rows and a word found nowhere
+ * reads none, whatever the number of visits. (Inside the subquery, visit_search names its own
+ * FROM, not the outer query's join.)
  */
-const crewNamed = (word: string) =>
-  sql`${visits.id} in (select ${visitTechnicians.visitId} from ${visitTechnicians} inner join ${users} on ${users.id} = ${visitTechnicians.userId} where strpos(lower(${users.name}), ${word}) > 0)`;
+function visitMatches(organisationId: string, term: SearchTerm): SQL {
+  return sql`${visits.id} in (
+    select ${visitSearch.visitId} from ${visitSearch} where ${visitSearch.organisationId} = ${organisationId} and ${containsTerm(visitSearch.searchText, term)}
+    union all
+    select ${visitTechnicians.visitId} from ${visitTechnicians} inner join ${users} on ${users.id} = ${visitTechnicians.userId}
+    where ${users.organisationId} = ${organisationId} and strpos(lower(${users.name}), ${term.word}) > 0)`;
+}
 
 /**
  * One page of the organisation's visits in the asked order, after `query.cursor`. Reading
@@ -104,23 +118,24 @@ const crewNamed = (word: string) =>
  */
 export async function listVisitPage(db: Database, organisationId: string, query: VisitListQuery, viewerId: string): Promise<VisitPage> {
   const direction = query.dir ?? defaultDirection(query.sort);
-  const keys = VISIT_SORT_KEYS[query.sort];
+  const { keys, id } = VISIT_SORTS[query.sort];
   const conditions: (SQL | undefined)[] = [eq(visits.organisationId, organisationId)];
   if (query.status) conditions.push(query.status.length === 1 ? eq(visits.status, query.status[0]) : inArray(visits.status, query.status));
   if (query.equipmentId) conditions.push(eq(visits.equipmentId, query.equipmentId));
   if (query.crew === "me") {
     conditions.push(sql`exists (select 1 from ${visitTechnicians} where ${visitTechnicians.visitId} = ${visits.id} and ${visitTechnicians.userId} = ${viewerId})`);
   }
-  conditions.push(matchesSearchSql(searchTextOf(equipment.name, sites.name, customers.name, equipment.refrigerant, visits.reason), query.q, crewNamed));
-  if (query.cursor) conditions.push(afterCursor(keys, visits.id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
+  conditions.push(matchesSearchSql(query.q, (term) => visitMatches(organisationId, term)));
+  if (query.cursor) conditions.push(afterCursor(keys, id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
   const rows = await db
     .select({ ...summaryColumns, ...cursorColumns(keys) })
     .from(visits)
+    .innerJoin(visitSearch, eq(visitSearch.visitId, visits.id))
     .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
     .innerJoin(sites, eq(sites.id, equipment.siteId))
     .innerJoin(customers, eq(customers.id, sites.customerId))
     .where(and(...conditions))
-    .orderBy(...keysetOrder(keys, visits.id, direction))
+    .orderBy(...keysetOrder(keys, id, direction))
     .limit(query.limit + 1);
   const { page, nextCursor } = pageOf(rows, query.limit, keys, query.sort, direction);
   const extra = await summarise(db, page, viewerId);
