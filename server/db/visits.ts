@@ -4,14 +4,14 @@
  */
 import { and, asc, count, desc, eq, gt, inArray, isNotNull, isNull, max, sql, type AnyColumn, type SQL } from "drizzle-orm";
 import { unionAll } from "drizzle-orm/pg-core";
-import type { SearchTerm } from "@shared/format/search-terms.ts";
+import { searchTerms, type SearchTerm } from "@shared/format/search-terms.ts";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import { defaultDirection, type VisitListQuery, type VisitPage, type VisitSort } from "@shared/schemas/list-pages.ts";
 import { visitReasonText, type Adjustment, type Comment, type Photo, type Reading, type VisitStatus, type VisitSummary } from "@shared/schemas/visits.ts";
 import { siteAtmosphere } from "../visits/reading-input.ts";
 import { visitRevisionToken } from "../visits/visit-revision.ts";
 import type { Database } from "./client.ts";
-import { afterCursor, containsTerm, cursorColumns, decodeCursor, keysetOrder, matchesSearchSql, pageOf, type SortKey } from "./keyset.ts";
+import { afterCursor, containsTerm, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKey } from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
 import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitSearch, visitTechnicians, visits } from "./schema.ts";
 import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
@@ -97,19 +97,41 @@ const VISIT_SORTS: Record<VisitSort, { keys: SortKey[]; id: AnyColumn }> = {
 };
 
 /**
- * One search word against a visit: in its unit, site, customer, refrigerant or reason
- * (visit_search, through its trigram index), or in the name of someone on its crew. Both are
- * sets of visit ids read from an index, so a rare word reads few rows and a word found nowhere
- * reads none, whatever the number of visits. (Inside the subquery, visit_search names its own
- * FROM, not the outer query's join.)
+ * The visits one search word finds: in their unit, site, customer, refrigerant or reason
+ * (visit_search, through its trigram index), or in the name of someone on their crew
+ * (visit_technicians by person). Both read an index, so a rare word reads few rows.
  */
-function visitMatches(organisationId: string, term: SearchTerm): SQL {
-  return sql`${visits.id} in (
-    select ${visitSearch.visitId} from ${visitSearch} where ${visitSearch.organisationId} = ${organisationId} and ${containsTerm(visitSearch.searchText, term)}
+function visitsMatching(organisationId: string, term: SearchTerm): SQL {
+  return sql`select ${visitSearch.visitId} from ${visitSearch} where ${visitSearch.organisationId} = ${organisationId} and ${containsTerm(visitSearch.searchText, term)}
     union all
     select ${visitTechnicians.visitId} from ${visitTechnicians} inner join ${users} on ${users.id} = ${visitTechnicians.userId}
-    where ${users.organisationId} = ${organisationId} and strpos(lower(${users.name}), ${term.word}) > 0)`;
+    where ${users.organisationId} = ${organisationId} and strpos(lower(${users.name}), ${term.word}) > 0`;
 }
+
+/**
+ * Up to this many matches, a search reads its visits by id and sorts them; beyond it, the page
+ * walks the sort's index and keeps the rows that match, which then come often enough to fill a
+ * page soon. Either way a search costs about its matches or a page, never every visit.
+ */
+export const SEARCH_BY_ID_LIMIT = 2000;
+
+/** The visits every word finds, or null when there are more than SEARCH_BY_ID_LIMIT. */
+async function searchedVisitIds(db: Database, organisationId: string, terms: SearchTerm[]): Promise<string[] | null> {
+  const everyWord = sql.join(
+    terms.map((term) => sql`(${visitsMatching(organisationId, term)})`),
+    sql` intersect `,
+  );
+  const { rows } = await db.execute<{ visit_id: string }>(sql`select visit_id from (${everyWord}) as found limit ${SEARCH_BY_ID_LIMIT + 1}`);
+  return rows.length > SEARCH_BY_ID_LIMIT ? null : rows.map((row) => row.visit_id);
+}
+
+/**
+ * The same word, row by row, for a page read in index order (many matches). The crew's half
+ * looks up this visit's crew (correlated), so the planner keeps walking the sort's index and
+ * stops at a page, where an uncorrelated set would lead it to join and sort every visit.
+ */
+const rowMatches = (term: SearchTerm) =>
+  sql`(${containsTerm(visitSearch.searchText, term)} or exists (select 1 from ${visitTechnicians} inner join ${users} on ${users.id} = ${visitTechnicians.userId} where ${visitTechnicians.visitId} = ${visits.id} and strpos(lower(${users.name}), ${term.word}) > 0))`;
 
 /**
  * One page of the organisation's visits in the asked order, after `query.cursor`. Reading
@@ -119,13 +141,19 @@ function visitMatches(organisationId: string, term: SearchTerm): SQL {
 export async function listVisitPage(db: Database, organisationId: string, query: VisitListQuery, viewerId: string): Promise<VisitPage> {
   const direction = query.dir ?? defaultDirection(query.sort);
   const { keys, id } = VISIT_SORTS[query.sort];
-  const conditions: (SQL | undefined)[] = [eq(visits.organisationId, organisationId)];
+  // Both rows' organisation: the unit-name and reason sorts read visit_search's index from it.
+  const conditions: (SQL | undefined)[] = [eq(visits.organisationId, organisationId), eq(visitSearch.organisationId, organisationId)];
   if (query.status) conditions.push(query.status.length === 1 ? eq(visits.status, query.status[0]) : inArray(visits.status, query.status));
   if (query.equipmentId) conditions.push(eq(visits.equipmentId, query.equipmentId));
   if (query.crew === "me") {
     conditions.push(sql`exists (select 1 from ${visitTechnicians} where ${visitTechnicians.visitId} = ${visits.id} and ${visitTechnicians.userId} = ${viewerId})`);
   }
-  conditions.push(matchesSearchSql(query.q, (term) => visitMatches(organisationId, term)));
+  const terms = query.q ? searchTerms(query.q) : [];
+  if (terms.length > 0) {
+    const found = await searchedVisitIds(db, organisationId, terms);
+    if (found?.length === 0) return { visits: [], nextCursor: null };
+    conditions.push(found ? sql`${visits.id} = any(${sql.param(found)}::uuid[])` : and(...terms.map(rowMatches)));
+  }
   if (query.cursor) conditions.push(afterCursor(keys, id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
   const rows = await db
     .select({ ...summaryColumns, ...cursorColumns(keys) })

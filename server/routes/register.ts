@@ -6,6 +6,8 @@
  * run log's charge adjustment (charge-added / charge-removed on /api/visits/:id/adjustments)
  * are one entry: either route writes both, linked, with one figure (server/register/charge-entry.ts).
  */
+import { Readable } from "node:stream";
+import { pipeline } from "node:stream/promises";
 import { Router, type Response } from "express";
 import { z } from "zod";
 import { boundEnd, boundStart } from "@shared/schemas/dates.ts";
@@ -49,7 +51,7 @@ import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import { circuitBalance, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
 import { registerCsvLine } from "../register/register-csv.ts";
-import { EXPORT_CHUNK_LINES, writeRegisterCsv } from "../register/write-register-csv.ts";
+import { EXPORT_CHUNK_LINES, registerCsvText } from "../register/register-csv-text.ts";
 import { mayReadRegisterLine, readsWholeRegister, visibleRegisterLines, type RegisterReader } from "../register/register-visibility.ts";
 import { licenceNumbers } from "../db/licence-numbers.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
@@ -285,7 +287,7 @@ export function registerRouter({ db }: Deps): Router {
     res.json({ movements, totals, allTechnicians, nextCursor: page.nextCursor });
   });
 
-  // The whole period, streamed as it is read (server/register/write-register-csv.ts).
+  // The whole period, streamed as it is read (serv../register/register-csv-text.ts).
   router.get("/export.csv", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const query = RegisterQuerySchema.parse(req.query);
@@ -296,15 +298,15 @@ export function registerRouter({ db }: Deps): Router {
     res.setHeader("Content-Disposition", `attachment; filename="${name}.csv"`);
     res.setHeader("Cache-Control", "private, no-store");
     try {
-      await writeRegisterCsv(res, registerChunks(db, organisationId, filter, EXPORT_CHUNK_LINES), (movement) =>
+      const lines = registerCsvText(registerChunks(db, organisationId, filter, EXPORT_CHUNK_LINES), (movement) =>
         mayReadRegisterLine(user, movement.technician?.id ?? null) ? registerCsvLine(movement, licences) : undefined,
       );
+      await pipeline(Readable.from(lines), res);
     } catch (error) {
-      // Past the first line the status is sent: cut the download short rather than end a partial
-      // file that looks whole, and log why.
+      // Once the first lines are out the status is sent: the response is cut short (pipeline
+      // destroys it), so the download fails instead of ending a partial file that looks whole.
       if (!res.headersSent) throw error;
-      req.log?.error({ err: error }, "register export failed part-way");
-      res.destroy(error instanceof Error ? error : new Error(String(error)));
+      req.log?.error({ err: error }, "register export stopped part-way");
     }
   });
 
