@@ -4,6 +4,7 @@ import { listEquipmentPage } from "@server/db/equipment.ts";
 import { analyzeTables } from "@server/db/planner-statistics.ts";
 import * as schema from "@server/db/schema.ts";
 import { listVisitPage } from "@server/db/visits.ts";
+import { matchesSearch, searchTerms } from "@shared/format/search-terms.ts";
 import { EquipmentListQuerySchema, VisitListQuerySchema } from "@shared/schemas/list-pages.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../setup/demo-accounts.ts";
@@ -136,6 +137,20 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     expect(clinic.body.visits).toEqual([]);
     // % and _ are plain characters, not patterns.
     expect((await technician.get("/api/visits?q=%25")).body.visits).toEqual([]);
+  });
+
+  it("finds exactly what the client's search rule finds, whether it reads ids from the index or walks the list", async () => {
+    const all = (await walk<Summary & { technicians: { name: string }[] }>(technician, "/api/visits?limit=200", "visits")).rows;
+    const textOf = (visit: Summary) => [visit.equipmentName, visit.siteName, visit.customerName, visit.refrigerant, visit.reason].join(" ").toLowerCase();
+    // "grown" finds more visits than SEARCH_BY_ID_LIMIT (row by row); the others fewer (by id).
+    for (const query of ["grown", "grown visit 17", "R-32 toko", "wattle clinic", "17", "zzqx", "visit 1_", "50%", "rooftop -"]) {
+      const expected = all
+        .filter((visit) => searchTerms(query).every((term) => matchesSearch(textOf(visit), term.word) || visit.technicians.some((person) => person.name.toLowerCase().includes(term.word))))
+        .map((visit) => visit.id)
+        .sort();
+      const found = (await walk<Summary>(technician, `/api/visits?q=${encodeURIComponent(query)}&limit=200`, "visits")).rows.map((visit) => visit.id).sort();
+      expect(found, query).toEqual(expected);
+    }
   });
 
   it("lists the visits the asker is on the crew of, with their last activity", async () => {
