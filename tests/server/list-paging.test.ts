@@ -183,6 +183,29 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     expect((await technician.get("/api/equipment?kind=spaceship")).status).toBe(400);
   });
 
+  it("keeps the search text up to date when a visit is started or its unit, site or customer is renamed", async () => {
+    const { client } = testApp.database;
+    const unit = (await client.query<{ id: string; site_id: string }>("select id, site_id from equipment where organisation_id = $1 and name = 'Grown unit 7' limit 1", [organisationId])).rows[0]!;
+    const started = await technician.post("/api/visits").send({ equipmentId: unit.id, reason: "Quokka inspection" });
+    expect(started.status).toBe(201);
+    expect((await technician.get("/api/visits?q=quokka")).body.visits.map((visit: Summary) => visit.id)).toEqual([started.body.visit.id]);
+
+    await client.query("update equipment set name = 'Numbat chiller' where id = $1", [unit.id]);
+    const renamedUnit = (await walk<Summary>(technician, "/api/visits?q=numbat&limit=200", "visits")).rows;
+    expect(renamedUnit.length).toBe(await visitCount("equipment_id = $2", [unit.id]));
+    expect((await technician.get("/api/equipment?q=numbat")).body.equipment.map((row: Unit) => row.id)).toEqual([unit.id]);
+
+    await client.query("update sites set name = 'Bilby Depot' where id = $1", [unit.site_id]);
+    await client.query("update customers set name = 'Dunnart Holdings' where id = (select customer_id from sites where id = $1)", [unit.site_id]);
+    for (const query of ["bilby depot", "dunnart", "numbat bilby dunnart quokka"]) {
+      const found = (await walk<Summary>(technician, `/api/visits?q=${encodeURIComponent(query)}&limit=200`, "visits")).rows;
+      expect(found.length, query).toBeGreaterThan(0);
+      expect(found.every((visit) => visit.siteName === "Bilby Depot" && visit.customerName === "Dunnart Holdings"), query).toBe(true);
+    }
+    expect((await technician.get("/api/equipment?q=dunnart%20numbat")).body.equipment).toHaveLength(1);
+    expect((await technician.get("/api/visits?q=grown%20unit%207%20quokka")).body.visits).toEqual([]);
+  });
+
   it("never shows another organisation's rows, whatever it asks", async () => {
     expect((await outsider.get("/api/visits?limit=200")).body).toEqual({ visits: [], nextCursor: null });
     expect((await outsider.get("/api/visits?q=grown")).body.visits).toEqual([]);
