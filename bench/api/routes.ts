@@ -33,6 +33,18 @@ export const ROUTES: readonly BenchRoute[] = [
   // Jobs and equipment lists (server-driven paging: owned by the lists' engineer).
   { name: "jobs list", path: () => "/api/visits", as: "tech", connections: [1, 10], list: true },
   { name: "equipment list", path: () => "/api/equipment", as: "tech", connections: [1, 10], list: true },
+  // Their searches and sorts: a common word, two rare ones, a word found nowhere (every row read if unindexed).
+  { name: "jobs search clinic", path: () => "/api/visits?q=clinic", as: "tech", connections: [1], list: true },
+  { name: "jobs search ironbark pharmacy", path: () => "/api/visits?q=ironbark%20pharmacy", as: "tech", connections: [1], list: true },
+  { name: "jobs search no match", path: () => "/api/visits?q=zzqx", as: "tech", connections: [1], list: true },
+  { name: "jobs sort unit", path: () => "/api/visits?sort=equipmentName", as: "tech", connections: [1], list: true },
+  { name: "jobs sort reason", path: () => "/api/visits?sort=reason", as: "tech", connections: [1], list: true },
+  { name: "jobs sort status", path: () => "/api/visits?sort=status", as: "tech", connections: [1], list: true },
+  { name: "equipment search r32", path: () => "/api/equipment?q=r32", as: "tech", connections: [1], list: true },
+  { name: "equipment search no match", path: () => "/api/equipment?q=zzqx", as: "tech", connections: [1], list: true },
+  { name: "equipment sort place", path: () => "/api/equipment?sort=place", as: "tech", connections: [1], list: true },
+  { name: "equipment sort circuits", path: () => "/api/equipment?sort=circuits&dir=desc", as: "tech", connections: [1], list: true },
+  { name: "equipment sort factory charge", path: () => "/api/equipment?sort=factoryCharge&dir=desc", as: "tech", connections: [1], list: true },
   { name: "customers", path: () => "/api/customers", as: "tech", connections: [1], list: true },
   { name: "sites", path: () => "/api/sites", as: "tech", connections: [1], list: true },
   // Equipment detail.
@@ -54,6 +66,7 @@ export const ROUTES: readonly BenchRoute[] = [
   { name: "evacuations", path: (ids) => `/api/visits/${ids.longVisitId}/evacuations`, as: "tech", connections: [1] },
   // Register and cylinders.
   { name: "register", path: () => "/api/register", as: "owner", connections: [1, 10], list: true },
+  { name: "register newest first", path: () => "/api/register?dir=desc", as: "owner", connections: [1], list: true },
   { name: "register CSV export", path: () => "/api/register/export.csv", as: "owner", connections: [1], list: true },
   { name: "cylinders", path: () => "/api/cylinders", as: "tech", connections: [1, 10], list: true },
   { name: "cylinder detail", path: (ids) => `/api/cylinders/${ids.cylinderId}`, as: "tech", connections: [1] },

@@ -1,6 +1,7 @@
 import { mkdirSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { PGlite } from "@electric-sql/pglite";
+import { pg_trgm } from "@electric-sql/pglite/contrib/pg_trgm";
 import type { PgDatabase } from "drizzle-orm/pg-core";
 import { drizzle, type PgliteDatabase, type PgliteQueryResultHKT } from "drizzle-orm/pglite";
 import { migrate } from "drizzle-orm/pglite/migrator";
@@ -23,6 +24,12 @@ export const migrationsFolder = fileURLToPath(new URL("../../drizzle", import.me
 const MEMORY = "memory://";
 
 /**
+ * The PostgreSQL extensions the migrations use, which PGlite loads only when asked: pg_trgm for
+ * the lists' trigram search indexes (migration list_search). Pass these to every PGlite.create.
+ */
+export const PGLITE_EXTENSIONS = { pg_trgm };
+
+/**
  * Opens the embedded PostgreSQL (PGlite) at `dataDir`, or in memory for "memory://",
  * and applies every migration in drizzle/ that has not run yet.
  */
@@ -30,7 +37,7 @@ export async function openDatabase(dataDir: string): Promise<DatabaseHandle> {
   // PGlite does not create parent folders and then fails with a misleading
   // "CREATE SCHEMA" error (STACK.md gotcha 5), so make the folder first.
   if (dataDir !== MEMORY) mkdirSync(dataDir, { recursive: true });
-  const client = await PGlite.create(dataDir === MEMORY ? undefined : dataDir);
+  const client = await PGlite.create(dataDir === MEMORY ? undefined : dataDir, { extensions: PGLITE_EXTENSIONS });
   return attachDatabase(client);
 }
 

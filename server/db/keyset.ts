@@ -5,7 +5,7 @@
  * rows added or removed meanwhile cannot make a row repeat or drop out between pages.
  */
 import { and, asc, desc, sql, type AnyColumn, type SQL } from "drizzle-orm";
-import { searchTerms } from "@shared/format/search-terms.ts";
+import { searchTerms, type SearchTerm } from "@shared/format/search-terms.ts";
 import type { SortDirection } from "@shared/schemas/list-pages.ts";
 import { HttpError } from "../http/http-error.ts";
 
@@ -107,29 +107,23 @@ export function pageOf<Row extends { id: string }>(rows: Row[], limit: number, k
   return { page: withoutKeys, nextCursor };
 }
 
+/** A LIKE pattern for "contains `text`", with LIKE's wildcards (%, _) and its escape (\\) taken literally. */
+export const containsPattern = (text: string): string => `%${text.replace(/[\\%_]/g, (char) => `\\${char}`)}%`;
+
 /**
- * The search of shared/format/search-terms.ts in SQL over a lower-case text expression: each
- * word found in the text as typed, or without dashes (or a leading "r") in the text with its
- * spaces and dashes removed, or by `alsoMatches` (e.g. a crew member's name). Words are bound
- * parameters and matched with strpos, so % and _ are plain characters.
+ * The search of shared/format/search-terms.ts in SQL: every word of the query must match, as
+ * `termMatches` says (usually `containsTerm` on the record's search column).
  */
-export function matchesSearchSql(searchText: SQL, query: string | undefined, alsoMatches?: (word: string) => SQL): SQL | undefined {
+export function matchesSearchSql(query: string | undefined, termMatches: (term: SearchTerm) => SQL): SQL | undefined {
   const terms = query ? searchTerms(query) : [];
-  if (terms.length === 0) return undefined;
-  // The text is built once per row (OFFSET 0 keeps the planner from copying the expression
-  // into every strpos); the compact form drops what compactSearchText drops on the client
-  // (white space, hyphen, en dash), with translate(), several times cheaper than a regex.
-  const plain = sql.raw("search.plain");
-  const compact = sql.raw("search.compact");
-  const every = sql.join(
-    terms.map(
-      (term) =>
-        sql`(strpos(${plain}, ${term.word}) > 0 or strpos(${compact}, ${term.bare}) > 0 or strpos(${compact}, ${term.withoutR}) > 0${alsoMatches ? sql` or ${alsoMatches(term.word)}` : sql``})`,
-    ),
-    sql` and `,
-  );
-  return sql`exists (select 1 from (select words.plain, translate(words.plain, ' -–' || chr(9) || chr(10) || chr(13), '') as compact from (select ${searchText} as plain offset 0) as words offset 0) as search where ${every})`;
+  return terms.length === 0 ? undefined : and(...terms.map(termMatches));
 }
 
-/** lower(concat_ws(' ', …)): the record's words in one lower-case text, nulls skipped. */
-export const searchTextOf = (...parts: (SQL | AnyColumn)[]) => sql`lower(concat_ws(' ', ${sql.join(parts.map((part) => sql`${part}`), sql`, `)}))`;
+/**
+ * One word of a search against a maintained search column (the record's words, lower-case,
+ * spaces and dashes taken out: search_compact in migration list_search). A word found as typed
+ * in the plain text is found without its dashes in the compact text, and then without its
+ * leading "r" too; so the rule "as typed, or without dashes, or without the r" is the same as
+ * "its `withoutR` is in the compact text": one LIKE, which a trigram index answers.
+ */
+export const containsTerm = (searchColumn: AnyColumn | SQL, term: SearchTerm): SQL => sql`${searchColumn} like ${containsPattern(term.withoutR)}`;

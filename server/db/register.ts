@@ -6,10 +6,12 @@
  * movements out of it (MOVEMENT_CYLINDER_RULES says which way each kind goes).
  */
 import { and, asc, desc, eq, gte, inArray, isNull, lt, sql, type SQL } from "drizzle-orm";
-import { MOVEMENT_CYLINDER_RULES, MOVEMENT_DIRECTION, type CylinderValues, type Movement, type MovementKind, type RunLogChargeCheck } from "@shared/schemas/register.ts";
+import type { SortDirection } from "@shared/schemas/list-pages.ts";
+import { MOVEMENT_CYLINDER_RULES, MOVEMENT_DIRECTION, MOVEMENT_KINDS, type CylinderValues, type Movement, type MovementKind, type RunLogChargeCheck } from "@shared/schemas/register.ts";
 import { CHARGE_ADJUSTMENT_KINDS, type ChargeAdjustmentKind } from "@shared/schemas/visits.ts";
-import { alias } from "drizzle-orm/pg-core";
+import { alias, type PgSelect } from "drizzle-orm/pg-core";
 import type { Database } from "./client.ts";
+import { afterCursor, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKey } from "./keyset.ts";
 import { adjustments, circuitCharges, cylinders, equipment, refrigerantMovements, sites, users } from "./schema.ts";
 
 export type CylinderRow = typeof cylinders.$inferSelect & { contentsKg: number };
@@ -89,9 +91,16 @@ const movementColumns = {
 export type MovementRow = Movement & { siteName: string | null; location: string | null };
 
 function selectMovements(db: Database, conditions: SQL[]) {
-  return db
-    .select(movementColumns)
-    .from(refrigerantMovements)
+  return withMovementJoins(db.select(movementColumns).from(refrigerantMovements).$dynamic(), conditions);
+}
+
+/** The register's page: the movements with their sort keys as text, for the next cursor. */
+function selectRegisterPage(db: Database, conditions: SQL[]) {
+  return withMovementJoins(db.select({ ...movementColumns, ...cursorColumns(REGISTER_KEYS) }).from(refrigerantMovements).$dynamic(), conditions);
+}
+
+function withMovementJoins<Query extends PgSelect>(query: Query, conditions: SQL[]) {
+  return query
     .leftJoin(equipment, eq(equipment.id, refrigerantMovements.equipmentId))
     .leftJoin(sites, eq(sites.id, equipment.siteId))
     .leftJoin(cylinders, eq(cylinders.id, refrigerantMovements.cylinderId))
@@ -155,16 +164,101 @@ export interface RegisterFilter {
 }
 
 /**
- * The register for a period, oldest first (the order a regulator's record reads in). Voided
- * movements are left out: the register, its totals and its export hold what really moved.
+ * The register's lines for a period: voided movements are left out, since the register, its
+ * totals and its export hold what really moved.
  */
-export async function registerMovements(db: Database, organisationId: string, filter: RegisterFilter): Promise<MovementRow[]> {
+function registerConditions(organisationId: string, filter: RegisterFilter): SQL[] {
   const conditions: SQL[] = [eq(refrigerantMovements.organisationId, organisationId), isNull(refrigerantMovements.voidedAt)];
   if (filter.fromMs !== undefined) conditions.push(gte(refrigerantMovements.at, new Date(filter.fromMs)));
   if (filter.toMs !== undefined) conditions.push(lt(refrigerantMovements.at, new Date(filter.toMs)));
   if (filter.technicianId) conditions.push(eq(refrigerantMovements.technicianId, filter.technicianId));
-  const rows = await selectMovements(db, conditions).orderBy(asc(refrigerantMovements.at), asc(refrigerantMovements.createdAt));
+  return conditions;
+}
+
+/**
+ * The register's order: by date, then by when the line was entered (two movements logged for
+ * the same minute keep the order they were typed in), then by id. Oldest first is the order a
+ * regulator's record reads in; the screen may ask for newest first. Each key has an index over
+ * the standing lines (refrigerant_movements_register_idx and its per-technician twin).
+ */
+const REGISTER_KEYS: readonly SortKey[] = [
+  { expr: refrigerantMovements.at, type: "timestamptz" },
+  { expr: refrigerantMovements.createdAt, type: "timestamptz" },
+];
+const REGISTER_SORT = "at";
+
+export interface RegisterPageRequest extends RegisterFilter {
+  direction: SortDirection;
+  /** A `nextCursor` this function gave out for the same direction. */
+  cursor?: string;
+  limit: number;
+}
+
+/**
+ * One page of the register after `request.cursor`: the database reads the page's lines in index
+ * order from the cursor, so a page costs the same on the first day and after ten years of lines.
+ * @throws HttpError 400 for a cursor this list did not give out
+ */
+export async function registerPage(db: Database, organisationId: string, request: RegisterPageRequest): Promise<{ rows: MovementRow[]; nextCursor: string | null }> {
+  const conditions = registerConditions(organisationId, request);
+  if (request.cursor) {
+    conditions.push(afterCursor(REGISTER_KEYS, refrigerantMovements.id, request.direction, decodeCursor(request.cursor, REGISTER_SORT, request.direction, REGISTER_KEYS)));
+  }
+  const rows = await selectRegisterPage(db, conditions)
+    .orderBy(...keysetOrder(REGISTER_KEYS, refrigerantMovements.id, request.direction))
+    .limit(request.limit + 1);
+  const { page, nextCursor } = pageOf(rows, request.limit, REGISTER_KEYS, REGISTER_SORT, request.direction);
+  return { rows: page.map(toMovement), nextCursor };
+}
+
+/**
+ * Every line of the period, oldest first, `chunkSize` lines at a time: the CSV export writes each
+ * chunk before reading the next, so its memory stays one chunk whatever the register's size, and
+ * other requests reach the database between chunks.
+ */
+export async function* registerChunks(db: Database, organisationId: string, filter: RegisterFilter, chunkSize: number): AsyncGenerator<MovementRow[]> {
+  let cursor: string | undefined;
+  do {
+    const { rows, nextCursor } = await registerPage(db, organisationId, { ...filter, direction: "asc", cursor, limit: chunkSize });
+    if (rows.length > 0) yield rows;
+    cursor = nextCursor ?? undefined;
+  } while (cursor);
+}
+
+/** The register for a period, oldest first, whole: for callers that need every line at once (tests, small periods). */
+export async function registerMovements(db: Database, organisationId: string, filter: RegisterFilter): Promise<MovementRow[]> {
+  const rows = await selectMovements(db, registerConditions(organisationId, filter)).orderBy(...keysetOrder(REGISTER_KEYS, refrigerantMovements.id, "asc"));
   return rows.map(toMovement);
+}
+
+export interface RegisterTotal {
+  refrigerant: string;
+  kind: MovementKind;
+  kg: number;
+}
+
+/**
+ * Kilograms by refrigerant and kind over every line of the period (not only the page shown),
+ * summed in the database: one row per refrigerant and kind comes back, however many lines there
+ * are. Rounded to grams, the scale's resolution (TRADE.md §6 weigh-in: about ±28 g). Ordered by
+ * refrigerant, then kind in MOVEMENT_KINDS order (recovered before reused before added…).
+ */
+export async function registerTotals(db: Database, organisationId: string, filter: RegisterFilter): Promise<RegisterTotal[]> {
+  const kindOrder = sql`array_position(array[${sql.join(
+    MOVEMENT_KINDS.map((kind) => sql`${kind}`),
+    sql`, `,
+  )}]::text[], ${refrigerantMovements.kind})`;
+  const rows = await db
+    .select({
+      refrigerant: refrigerantMovements.refrigerant,
+      kind: refrigerantMovements.kind,
+      kg: sql<number>`round(sum(${refrigerantMovements.kg})::numeric, 3)`.mapWith(Number),
+    })
+    .from(refrigerantMovements)
+    .where(and(...registerConditions(organisationId, filter)))
+    .groupBy(refrigerantMovements.refrigerant, refrigerantMovements.kind)
+    .orderBy(asc(refrigerantMovements.refrigerant), kindOrder);
+  return rows;
 }
 
 export interface MovementInsert {

@@ -240,9 +240,27 @@ export const equipment = pgTable(
     ratedHighSideKPa: doublePrecision("rated_high_side_kpa"),
     ratedLowSideKPa: doublePrecision("rated_low_side_kpa"),
     archived: boolean("archived").notNull().default(false),
+    /**
+     * The unit's words for the list's search, lower-case with spaces and dashes taken out
+     * (shared/format/search-terms.ts): name, kind, site, customer, refrigerant, location, maker,
+     * model, serial. Written by a trigger on every change to those (and on a site's or customer's
+     * rename), never by the app; searched through a trigram index. Migration list_search.
+     */
+    searchText: text("search_text").notNull().default(""),
     ...timestamps,
   },
-  (table) => [index("equipment_organisation_idx").on(table.organisationId), index("equipment_site_idx").on(table.siteId)],
+  (table) => [
+    index("equipment_organisation_idx").on(table.organisationId),
+    index("equipment_site_idx").on(table.siteId),
+    // The list's sorts, each read in index order from a page's cursor (server/db/equipment.ts);
+    // the factory-charge sort's index is on a function, so it is written in the migration.
+    index("equipment_organisation_name_idx").on(table.organisationId, sql`lower(${table.name})`, table.id).where(sql`NOT ${table.archived}`),
+    index("equipment_organisation_kind_idx").on(table.organisationId, table.kind, sql`lower(${table.name})`, table.id).where(sql`NOT ${table.archived}`),
+    index("equipment_organisation_refrigerant_idx").on(table.organisationId, table.refrigerant, sql`lower(${table.name})`, table.id).where(sql`NOT ${table.archived}`),
+    index("equipment_organisation_circuits_idx")
+      .on(table.organisationId, sql`jsonb_array_length(${table.circuits})`, sql`lower(${table.name})`, table.id)
+      .where(sql`NOT ${table.archived}`),
+  ],
 );
 
 /** A visit to one unit: the run log, adjustments, comments and photos hang off it. */
@@ -274,7 +292,8 @@ export const visits = pgTable(
   (table) => [
     index("visits_organisation_idx").on(table.organisationId),
     index("visits_equipment_idx").on(table.equipmentId),
-    index("visits_status_idx").on(table.organisationId, table.status),
+    // id too: the jobs list's status sort pages by (status, id).
+    index("visits_status_idx").on(table.organisationId, table.status, table.id),
     // The company's visits newest first (lists, the review queue) read in index order instead of
     // sorting every visit the company has.
     index("visits_organisation_started_idx").on(table.organisationId, table.startedAt),
@@ -291,7 +310,39 @@ export const visitTechnicians = pgTable(
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
   },
-  (table) => [primaryKey({ columns: [table.visitId, table.userId] })],
+  // By person too: a search word naming someone finds their visits (server/db/visits.ts).
+  (table) => [primaryKey({ columns: [table.visitId, table.userId] }), index("visit_technicians_user_idx").on(table.userId, table.visitId)],
+);
+
+/**
+ * What the jobs list searches and sorts a visit by, kept apart from the visit's row so that the
+ * writes every reading makes to a visit (its revision) never touch these indexes. One row per
+ * visit, written only by triggers (migration list_search): on a visit's insert or change of
+ * unit or reason, and on a rename of its unit, site or customer.
+ */
+export const visitSearch = pgTable(
+  "visit_search",
+  {
+    visitId: uuid("visit_id")
+      .primaryKey()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    organisationId: uuid("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    /**
+     * Unit, site, customer, refrigerant and reason, lower-case with spaces and dashes taken out
+     * (shared/format/search-terms.ts); searched through a trigram index.
+     */
+    searchText: text("search_text").notNull(),
+    /** lower(unit name): the list's "Unit" sort. */
+    unitName: text("unit_name").notNull(),
+    /** lower(reason): the list's "Reason" sort. */
+    reason: text("reason").notNull(),
+  },
+  (table) => [
+    index("visit_search_unit_name_idx").on(table.organisationId, table.unitName, table.visitId),
+    index("visit_search_reason_idx").on(table.organisationId, table.reason, table.visitId),
+  ],
 );
 
 /**
@@ -703,6 +754,12 @@ export const refrigerantMovements = pgTable(
     index("refrigerant_movements_visit_idx").on(table.visitId),
     index("refrigerant_movements_equipment_idx").on(table.equipmentId, table.at),
     index("refrigerant_movements_cylinder_idx").on(table.cylinderId),
+    // The register's pages in their order (server/db/register.ts), over the standing lines only,
+    // for everyone's lines and for one technician's.
+    index("refrigerant_movements_register_idx").on(table.organisationId, table.at, table.createdAt, table.id).where(sql`${table.voidedAt} is null`),
+    index("refrigerant_movements_technician_register_idx")
+      .on(table.organisationId, table.technicianId, table.at, table.createdAt, table.id)
+      .where(sql`${table.voidedAt} is null`),
   ],
 );
 

@@ -2,8 +2,9 @@
  * Queries for visits and their run log. Every function takes the caller's organisation id;
  * a visit of another organisation reads as missing.
  */
-import { and, asc, count, desc, eq, gt, inArray, isNotNull, isNull, max, sql, type SQL } from "drizzle-orm";
+import { and, asc, desc, eq, gt, inArray, isNotNull, isNull, max, sql, type AnyColumn, type SQL } from "drizzle-orm";
 import { unionAll } from "drizzle-orm/pg-core";
+import { searchTerms, type SearchTerm } from "@shared/format/search-terms.ts";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import { defaultDirection, type VisitListQuery, type VisitPage, type VisitSort } from "@shared/schemas/list-pages.ts";
 import {
@@ -25,9 +26,9 @@ import { siteAtmosphere } from "../visits/reading-input.ts";
 import { visitRevisionToken } from "../visits/visit-revision.ts";
 import type { Database } from "./client.ts";
 import { circuitReadingsPage } from "./circuit-readings.ts";
-import { afterCursor, cursorColumns, decodeCursor, keysetOrder, matchesSearchSql, pageOf, searchTextOf, type SortKey } from "./keyset.ts";
+import { afterCursor, containsTerm, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKey } from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
-import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitTechnicians, visits } from "./schema.ts";
+import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitSearch, visitTechnicians, visits } from "./schema.ts";
 import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
 
 /** Readings that are records: not rows of a CSV import still being stored (see readings.pendingImportId). */
@@ -50,12 +51,12 @@ const summaryColumns = {
 type SummaryExtra = Pick<VisitSummary, "readingCount" | "technicians" | "yourLastActivityAt">;
 
 /**
- * When one person last recorded anything on each of these visits: readings, adjustments,
- * comments and the trail's events (started, submitted, voided, imported…), in one query.
+ * When one person last recorded anything on each of these visits other than readings (which
+ * summarise reads with the counts, in one pass over them): adjustments, comments and the trail's
+ * events (started, submitted, voided, imported…), in one query.
  */
 async function lastActivityOf(db: Database, viewerId: string, ids: string[]): Promise<Map<string, Date>> {
   const rows = await unionAll(
-    db.select({ visitId: readings.visitId, at: max(readings.createdAt) }).from(readings).where(and(inArray(readings.visitId, ids), eq(readings.recordedBy, viewerId), isRecord)).groupBy(readings.visitId),
     db.select({ visitId: adjustments.visitId, at: max(adjustments.createdAt) }).from(adjustments).where(and(inArray(adjustments.visitId, ids), eq(adjustments.recordedBy, viewerId))).groupBy(adjustments.visitId),
     db.select({ visitId: visitComments.visitId, at: max(visitComments.createdAt) }).from(visitComments).where(and(inArray(visitComments.visitId, ids), eq(visitComments.authorId, viewerId))).groupBy(visitComments.visitId),
     db.select({ visitId: visitEvents.visitId, at: max(visitEvents.at) }).from(visitEvents).where(and(inArray(visitEvents.visitId, ids), eq(visitEvents.actorId, viewerId))).groupBy(visitEvents.visitId),
@@ -74,10 +75,19 @@ async function summarise(db: Database, rows: { id: string; startedAt: Date }[], 
   const ids = rows.map((row) => row.id);
   const result = new Map<string, SummaryExtra>();
   if (ids.length === 0) return result;
+  // One pass over the page's readings for both figures: a visit with a logger on it holds
+  // thousands, and reading them twice was most of a page's time.
   const counts = await db
-    .select({ visitId: readings.visitId, n: count() })
+    .select({
+      visitId: readings.visitId,
+      n: sql<number>`count(*) filter (where ${readings.voidedAt} is null)`.mapWith(Number),
+      // Milliseconds since the epoch: a number, where a timestamp from a raw select is text.
+      viewersLastMs: viewerId
+        ? sql<number | null>`extract(epoch from max(${readings.createdAt}) filter (where ${readings.recordedBy} = ${viewerId})) * 1000`.mapWith((value) => (value === null ? null : Number(value)))
+        : sql<null>`null`,
+    })
     .from(readings)
-    .where(and(inArray(readings.visitId, ids), countsInResults))
+    .where(and(inArray(readings.visitId, ids), isRecord))
     .groupBy(readings.visitId);
   const crew = await db
     .select({ visitId: visitTechnicians.visitId, id: users.id, name: users.name })
@@ -87,7 +97,12 @@ async function summarise(db: Database, rows: { id: string; startedAt: Date }[], 
     .orderBy(asc(users.name));
   const activity = viewerId ? await lastActivityOf(db, viewerId, ids) : new Map<string, Date>();
   for (const id of ids) result.set(id, { readingCount: 0, technicians: [], yourLastActivityAt: activity.get(id)?.toISOString() ?? null });
-  for (const row of counts) result.get(row.visitId)!.readingCount = row.n;
+  for (const row of counts) {
+    const extra = result.get(row.visitId)!;
+    extra.readingCount = row.n;
+    const readingAt = row.viewersLastMs === null ? null : new Date(row.viewersLastMs);
+    if (readingAt && (!extra.yourLastActivityAt || readingAt > new Date(extra.yourLastActivityAt))) extra.yourLastActivityAt = readingAt.toISOString();
+  }
   for (const row of crew) result.get(row.visitId)!.technicians.push({ id: row.id, name: row.name });
   return result;
 }
@@ -97,20 +112,55 @@ export interface VisitFilter {
   equipmentId?: string;
 }
 
-const VISIT_SORT_KEYS: Record<VisitSort, SortKey[]> = {
-  startedAt: [{ expr: visits.startedAt, type: "timestamptz" }],
-  // lower(): the table sorted "a" with "A" before; Postgres would put every capital first.
-  equipmentName: [{ expr: sql`lower(${equipment.name})`, type: "text" }],
-  reason: [{ expr: sql`lower(${visits.reason})`, type: "text" }],
-  status: [{ expr: visits.status, type: "text" }],
+/**
+ * Each sort's keys and the id that breaks ties, each pair with an index in that order: visits
+ * (organisation_id, started_at) and (organisation_id, status, id); visit_search (organisation_id,
+ * unit_name, visit_id) and (organisation_id, reason, visit_id), whose keys are lower(): the table
+ * sorted "a" with "A" before, where Postgres would put every capital first.
+ */
+const VISIT_SORTS: Record<VisitSort, { keys: SortKey[]; id: AnyColumn }> = {
+  startedAt: { keys: [{ expr: visits.startedAt, type: "timestamptz" }], id: visits.id },
+  equipmentName: { keys: [{ expr: visitSearch.unitName, type: "text" }], id: visitSearch.visitId },
+  reason: { keys: [{ expr: visitSearch.reason, type: "text" }], id: visitSearch.visitId },
+  status: { keys: [{ expr: visits.status, type: "text" }], id: visits.id },
 };
 
 /**
- * A search word that names someone on the visit's crew: the visits of the people whose name
- * holds the word, read once per query (an uncorrelated, hashed subquery), not once per visit.
+ * The visits one search word finds: in their unit, site, customer, refrigerant or reason
+ * (visit_search, through its trigram index), or in the name of someone on their crew
+ * (visit_technicians by person). Both read an index, so a rare word reads few rows.
  */
-const crewNamed = (word: string) =>
-  sql`${visits.id} in (select ${visitTechnicians.visitId} from ${visitTechnicians} inner join ${users} on ${users.id} = ${visitTechnicians.userId} where strpos(lower(${users.name}), ${word}) > 0)`;
+function visitsMatching(organisationId: string, term: SearchTerm): SQL {
+  return sql`select ${visitSearch.visitId} from ${visitSearch} where ${visitSearch.organisationId} = ${organisationId} and ${containsTerm(visitSearch.searchText, term)}
+    union all
+    select ${visitTechnicians.visitId} from ${visitTechnicians} inner join ${users} on ${users.id} = ${visitTechnicians.userId}
+    where ${users.organisationId} = ${organisationId} and strpos(lower(${users.name}), ${term.word}) > 0`;
+}
+
+/**
+ * Up to this many matches, a search reads its visits by id and sorts them; beyond it, the page
+ * walks the sort's index and keeps the rows that match, which then come often enough to fill a
+ * page soon. Either way a search costs about its matches or a page, never every visit.
+ */
+export const SEARCH_BY_ID_LIMIT = 2000;
+
+/** The visits every word finds, or null when there are more than SEARCH_BY_ID_LIMIT. */
+async function searchedVisitIds(db: Database, organisationId: string, terms: SearchTerm[]): Promise<string[] | null> {
+  const everyWord = sql.join(
+    terms.map((term) => sql`(${visitsMatching(organisationId, term)})`),
+    sql` intersect `,
+  );
+  const { rows } = await db.execute<{ visit_id: string }>(sql`select visit_id from (${everyWord}) as found limit ${SEARCH_BY_ID_LIMIT + 1}`);
+  return rows.length > SEARCH_BY_ID_LIMIT ? null : rows.map((row) => row.visit_id);
+}
+
+/**
+ * The same word, row by row, for a page read in index order (many matches). The crew's half
+ * looks up this visit's crew (correlated), so the planner keeps walking the sort's index and
+ * stops at a page, where an uncorrelated set would lead it to join and sort every visit.
+ */
+const rowMatches = (term: SearchTerm) =>
+  sql`(${containsTerm(visitSearch.searchText, term)} or exists (select 1 from ${visitTechnicians} inner join ${users} on ${users.id} = ${visitTechnicians.userId} where ${visitTechnicians.visitId} = ${visits.id} and strpos(lower(${users.name}), ${term.word}) > 0))`;
 
 /**
  * One page of the organisation's visits in the asked order, after `query.cursor`. Reading
@@ -119,23 +169,30 @@ const crewNamed = (word: string) =>
  */
 export async function listVisitPage(db: Database, organisationId: string, query: VisitListQuery, viewerId: string): Promise<VisitPage> {
   const direction = query.dir ?? defaultDirection(query.sort);
-  const keys = VISIT_SORT_KEYS[query.sort];
-  const conditions: (SQL | undefined)[] = [eq(visits.organisationId, organisationId)];
+  const { keys, id } = VISIT_SORTS[query.sort];
+  // Both rows' organisation: the unit-name and reason sorts read visit_search's index from it.
+  const conditions: (SQL | undefined)[] = [eq(visits.organisationId, organisationId), eq(visitSearch.organisationId, organisationId)];
   if (query.status) conditions.push(query.status.length === 1 ? eq(visits.status, query.status[0]) : inArray(visits.status, query.status));
   if (query.equipmentId) conditions.push(eq(visits.equipmentId, query.equipmentId));
   if (query.crew === "me") {
     conditions.push(sql`exists (select 1 from ${visitTechnicians} where ${visitTechnicians.visitId} = ${visits.id} and ${visitTechnicians.userId} = ${viewerId})`);
   }
-  conditions.push(matchesSearchSql(searchTextOf(equipment.name, sites.name, customers.name, equipment.refrigerant, visits.reason), query.q, crewNamed));
-  if (query.cursor) conditions.push(afterCursor(keys, visits.id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
+  const terms = query.q ? searchTerms(query.q) : [];
+  if (terms.length > 0) {
+    const found = await searchedVisitIds(db, organisationId, terms);
+    if (found?.length === 0) return { visits: [], nextCursor: null };
+    conditions.push(found ? sql`${visits.id} = any(${sql.param(found)}::uuid[])` : and(...terms.map(rowMatches)));
+  }
+  if (query.cursor) conditions.push(afterCursor(keys, id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
   const rows = await db
     .select({ ...summaryColumns, ...cursorColumns(keys) })
     .from(visits)
+    .innerJoin(visitSearch, eq(visitSearch.visitId, visits.id))
     .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
     .innerJoin(sites, eq(sites.id, equipment.siteId))
     .innerJoin(customers, eq(customers.id, sites.customerId))
     .where(and(...conditions))
-    .orderBy(...keysetOrder(keys, visits.id, direction))
+    .orderBy(...keysetOrder(keys, id, direction))
     .limit(query.limit + 1);
   const { page, nextCursor } = pageOf(rows, query.limit, keys, query.sort, direction);
   const extra = await summarise(db, page, viewerId);

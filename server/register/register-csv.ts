@@ -42,27 +42,32 @@ export function csvLine(fields: (string | number | null | undefined)[]): string 
 }
 
 /**
+ * One movement as a CSV line.
  * @param licenceNumbers licence or certificate number per user id, from each member's profile;
  * blank for anyone who has not entered one.
  */
+export function registerCsvLine(movement: MovementRow, licenceNumbers: ReadonlyMap<string, string>): string {
+  const location = [movement.siteName, movement.location].filter(Boolean).join(" — ");
+  return csvLine([
+    movement.at,
+    movement.technician?.name ?? "",
+    movement.technician ? (licenceNumbers.get(movement.technician.id) ?? "") : "",
+    movement.equipmentName ?? "",
+    location,
+    movement.refrigerant,
+    MOVEMENT_KIND_LABELS[movement.kind],
+    // Grams are the scale's resolution (TRADE.md §6 weigh-in: about ±28 g).
+    Number(movement.kg.toFixed(3)),
+    movement.cylinder?.label ?? "",
+    movement.circuit,
+    movement.note ?? "",
+  ]);
+}
+
+/** The header line: the columns' names. */
+export const registerCsvHeader = (): string => csvLine([...REGISTER_CSV_COLUMNS]);
+
+/** The whole export at once: the header and a line per movement (the route streams the same lines in chunks). */
 export function registerCsv(movements: readonly MovementRow[], licenceNumbers: ReadonlyMap<string, string> = new Map()): string {
-  let csv = csvLine([...REGISTER_CSV_COLUMNS]);
-  for (const movement of movements) {
-    const location = [movement.siteName, movement.location].filter(Boolean).join(" — ");
-    csv += csvLine([
-      movement.at,
-      movement.technician?.name ?? "",
-      movement.technician ? (licenceNumbers.get(movement.technician.id) ?? "") : "",
-      movement.equipmentName ?? "",
-      location,
-      movement.refrigerant,
-      MOVEMENT_KIND_LABELS[movement.kind],
-      // Grams are the scale's resolution (TRADE.md §6 weigh-in: about ±28 g).
-      Number(movement.kg.toFixed(3)),
-      movement.cylinder?.label ?? "",
-      movement.circuit,
-      movement.note ?? "",
-    ]);
-  }
-  return csv;
+  return registerCsvHeader() + movements.map((movement) => registerCsvLine(movement, licenceNumbers)).join("");
 }

@@ -6,6 +6,8 @@
  * run log's charge adjustment (charge-added / charge-removed on /api/visits/:id/adjustments)
  * are one entry: either route writes both, linked, with one figure (server/register/charge-entry.ts).
  */
+import { Readable } from "node:stream";
+import { pipeline } from "node:stream/promises";
 import { Router, type Response } from "express";
 import { z } from "zod";
 import { boundEnd, boundStart } from "@shared/schemas/dates.ts";
@@ -17,8 +19,8 @@ import {
   MovementCreateSchema,
   ReclaimCreateSchema,
   RegisterQuerySchema,
-  type MovementKind,
 } from "@shared/schemas/register.ts";
+import { RegisterPageQuerySchema } from "@shared/schemas/list-pages.ts";
 import { getAuth } from "../auth/session.ts";
 import { getEquipment } from "../db/equipment.ts";
 import {
@@ -30,7 +32,10 @@ import {
   getCylinder,
   insertMovement,
   listCylinders,
-  registerMovements,
+  registerChunks,
+  registerPage,
+  registerTotals,
+  type RegisterFilter,
   runLogChargeCheck,
   visitCircuitCharges,
   visitMovements,
@@ -45,7 +50,8 @@ import { checkCylinder, fieldError, recordChargeEntry } from "../register/charge
 import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import { circuitBalance, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
-import { registerCsv } from "../register/register-csv.ts";
+import { registerCsvLine } from "../register/register-csv.ts";
+import { EXPORT_CHUNK_LINES, registerCsvText } from "../register/register-csv-text.ts";
 import { mayReadRegisterLine, readsWholeRegister, visibleRegisterLines, type RegisterReader } from "../register/register-visibility.ts";
 import { licenceNumbers } from "../db/licence-numbers.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
@@ -254,40 +260,54 @@ export function equipmentRefrigerantRouter({ db }: Deps): Router {
 export function registerRouter({ db }: Deps): Router {
   const router = Router();
 
-  async function movementsFor(res: Response, query: unknown) {
-    const { organisationId, user } = getAuth(res);
-    const filter = RegisterQuerySchema.parse(query);
-    const scope = registerScope(res, filter.technicianId);
+  /** The period and technician asked for, within what the reader may see. */
+  async function filterFor(res: Response, query: { from?: string; to?: string; technicianId?: string }) {
+    const { organisationId } = getAuth(res);
+    const scope = registerScope(res, query.technicianId);
     if (scope.technicianId && !(await findMember(db, organisationId, scope.technicianId))) throw fieldError("technicianId", "Choose one of your company's people");
-    const rows = await registerMovements(db, organisationId, {
-      fromMs: filter.from ? boundStart(filter.from) : undefined,
-      toMs: filter.to ? boundEnd(filter.to) : undefined,
+    const filter: RegisterFilter = {
+      fromMs: query.from ? boundStart(query.from) : undefined,
+      toMs: query.to ? boundEnd(query.to) : undefined,
       technicianId: scope.technicianId,
-    });
-    // The filter above already keeps a technician to their own lines; the rule is still the one that decides.
-    const { movements } = visibleRegisterLines(user, rows);
-    return { movements, allTechnicians: scope.allTechnicians, filter };
+    };
+    return { filter, allTechnicians: scope.allTechnicians };
   }
 
+  // A page of lines, with the totals of the whole period (summed in the database).
   router.get("/", async (req, res) => {
-    const { movements, allTechnicians } = await movementsFor(res, req.query);
-    const totals = new Map<string, { refrigerant: string; kind: MovementKind; kg: number }>();
-    for (const movement of movements) {
-      const key = `${movement.refrigerant} ${movement.kind}`;
-      const total = totals.get(key) ?? { refrigerant: movement.refrigerant, kind: movement.kind, kg: 0 };
-      total.kg = Math.round((total.kg + movement.kg) * 1000) / 1000;
-      totals.set(key, total);
-    }
-    res.json({ movements, totals: [...totals.values()], allTechnicians });
+    const { organisationId, user } = getAuth(res);
+    const query = RegisterPageQuerySchema.parse(req.query);
+    const { filter, allTechnicians } = await filterFor(res, query);
+    const [page, totals] = await Promise.all([
+      registerPage(db, organisationId, { ...filter, direction: query.dir ?? "asc", cursor: query.cursor, limit: query.limit }),
+      registerTotals(db, organisationId, filter),
+    ]);
+    // The filter above already keeps a technician to their own lines; the rule is still the one that decides.
+    const { movements } = visibleRegisterLines(user, page.rows);
+    res.json({ movements, totals, allTechnicians, nextCursor: page.nextCursor });
   });
 
+  // The whole period, streamed as it is read (serv../register/register-csv-text.ts).
   router.get("/export.csv", async (req, res) => {
-    const { movements, filter } = await movementsFor(res, req.query);
-    const name = ["refrigerant-register", filter.from, filter.to].filter(Boolean).join("_").replace(/[^0-9A-Za-z_-]/g, "-");
+    const { organisationId, user } = getAuth(res);
+    const query = RegisterQuerySchema.parse(req.query);
+    const { filter } = await filterFor(res, query);
+    const licences = await licenceNumbers(db, organisationId);
+    const name = ["refrigerant-register", query.from, query.to].filter(Boolean).join("_").replace(/[^0-9A-Za-z_-]/g, "-");
     res.setHeader("Content-Type", "text/csv; charset=utf-8");
     res.setHeader("Content-Disposition", `attachment; filename="${name}.csv"`);
     res.setHeader("Cache-Control", "private, no-store");
-    res.send(registerCsv(movements, await licenceNumbers(db, getAuth(res).organisationId)));
+    try {
+      const lines = registerCsvText(registerChunks(db, organisationId, filter, EXPORT_CHUNK_LINES), (movement) =>
+        mayReadRegisterLine(user, movement.technician?.id ?? null) ? registerCsvLine(movement, licences) : undefined,
+      );
+      await pipeline(Readable.from(lines), res);
+    } catch (error) {
+      // Once the first lines are out the status is sent: the response is cut short (pipeline
+      // destroys it), so the download fails instead of ending a partial file that looks whole.
+      if (!res.headersSent) throw error;
+      req.log?.error({ err: error }, "register export stopped part-way");
+    }
   });
 
   return router;

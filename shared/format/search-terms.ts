@@ -32,7 +32,12 @@ export function searchTerms(query: string): SearchTerm[] {
 /** The text with the characters a refrigerant name may or may not carry taken out. */
 export const compactSearchText = (searchText: string) => searchText.replace(/[\s\-–]/g, "");
 
-/** Matches "r32", "32", "R-32" alike, and every word of the query anywhere in the text. */
+/**
+ * Matches "r32", "32", "R-32" alike, and every word of the query anywhere in the text. The three
+ * ways a word may match nest (found as typed ⇒ found without dashes in the compact text ⇒ found
+ * without the "r" too), so the rule is "every word's `withoutR` is in the compact text": the
+ * server asks exactly that of a maintained compact column (server/db/keyset.ts containsTerm).
+ */
 export function matchesSearch(searchText: string, query: string): boolean {
   const compact = compactSearchText(searchText);
   return searchTerms(query).every(

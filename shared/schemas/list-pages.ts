@@ -1,11 +1,12 @@
 /**
- * The contracts of the paged lists (GET /api/visits, GET /api/equipment): what a page may ask
+ * The contracts of the paged lists (GET /api/visits, GET /api/equipment, GET /api/register): what a page may ask
  * for and what it answers. Pages follow a keyset cursor, not an offset: the server reads the
  * next rows after the last one shown in index order, so a page costs the same at the first
  * visit and at the twenty-thousandth, and a row added meanwhile neither repeats nor hides one.
  */
 import { z } from "zod";
 import { EQUIPMENT_KINDS, EquipmentSchema } from "./equipment.ts";
+import { periodInOrder, REGISTER_FILTER_FIELDS } from "./register.ts";
 import { text } from "./text.ts";
 import { VISIT_STATUSES, VisitStatusSchema, VisitSummarySchema } from "./visits.ts";
 
@@ -81,6 +82,14 @@ export const EquipmentListQuerySchema = z.object({
 });
 export type EquipmentListQuery = z.output<typeof EquipmentListQuerySchema>;
 export type EquipmentListParams = Omit<z.input<typeof EquipmentListQuerySchema>, "limit"> & { limit?: number };
+
+/**
+ * GET /api/register: the period and technician of the CSV export, a page at a time, oldest
+ * first unless `dir=desc` (the screen shows the latest lines first).
+ */
+export const RegisterPageQuerySchema = z.object({ ...REGISTER_FILTER_FIELDS, dir: direction, cursor, limit }).refine(...periodInOrder);
+export type RegisterPageQuery = z.output<typeof RegisterPageQuerySchema>;
+export type RegisterPageParams = Omit<z.input<typeof RegisterPageQuerySchema>, "limit"> & { limit?: number };
 
 /** The default direction of each sort: dates newest first, everything else A (or least) first. */
 export const defaultDirection = (sort: string): SortDirection => (sort === "startedAt" ? "desc" : "asc");

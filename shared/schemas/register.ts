@@ -318,28 +318,40 @@ export type EquipmentRefrigerant = z.infer<typeof EquipmentRefrigerantSchema>;
 /** A calendar date or a date-time with offset; a bare date is a whole UTC day. */
 const DateBoundSchema = dayOrInstant();
 
-export const RegisterQuerySchema = z
-  .object({
-    from: DateBoundSchema.optional(),
-    to: DateBoundSchema.optional(),
-    technicianId: z.uuid("Choose a technician").optional(),
-  })
-  .refine((value) => !value.from || !value.to || boundStart(value.from) <= boundEnd(value.to), {
-    path: ["to"],
-    message: "The end of the period is before its start",
-  });
+/** The register's filters: a period and a technician, shared by the list and its CSV export. */
+export const REGISTER_FILTER_FIELDS = {
+  from: DateBoundSchema.optional(),
+  to: DateBoundSchema.optional(),
+  technicianId: z.uuid("Choose a technician").optional(),
+};
+
+/** A period whose end comes before its start is a typing slip, not an empty register. */
+export const periodInOrder: [(value: { from?: string; to?: string }) => boolean, { path: string[]; message: string }] = [
+  (value) => !value.from || !value.to || boundStart(value.from) <= boundEnd(value.to),
+  { path: ["to"], message: "The end of the period is before its start" },
+];
+
+/** Query of GET /api/register/export.csv (and the filters of GET /api/register). */
+export const RegisterQuerySchema = z.object(REGISTER_FILTER_FIELDS).refine(...periodInOrder);
 export type RegisterQuery = z.input<typeof RegisterQuerySchema>;
 
+export const RegisterLineSchema = MovementSchema.extend({
+  siteName: z.string().nullable(),
+  location: z.string().nullable(),
+});
+export type RegisterLine = z.infer<typeof RegisterLineSchema>;
+
+/** GET /api/register: one page of lines (RegisterPageQuerySchema in list-pages.ts) and the period's totals. */
 export const RegisterListSchema = z.object({
-  movements: z.array(
-    MovementSchema.extend({
-      siteName: z.string().nullable(),
-      location: z.string().nullable(),
-    }),
-  ),
-  /** Totals by refrigerant and kind, kg, for the period. */
+  movements: z.array(RegisterLineSchema),
+  /**
+   * Totals by refrigerant and kind, kg, over every line of the period and technician, not only
+   * the page shown: what a regulator's return asks for.
+   */
   totals: z.array(z.object({ refrigerant: z.string(), kind: MovementKindSchema, kg: z.number() })),
   /** False when the caller may only see their own movements (technicians). */
   allTechnicians: z.boolean(),
+  /** The cursor of the next page; null on the last. */
+  nextCursor: z.string().nullable(),
 });
 export type RegisterList = z.infer<typeof RegisterListSchema>;

@@ -4,6 +4,7 @@ import { listEquipmentPage } from "@server/db/equipment.ts";
 import { analyzeTables } from "@server/db/planner-statistics.ts";
 import * as schema from "@server/db/schema.ts";
 import { listVisitPage } from "@server/db/visits.ts";
+import { matchesSearch, searchTerms } from "@shared/format/search-terms.ts";
 import { EquipmentListQuerySchema, VisitListQuerySchema } from "@shared/schemas/list-pages.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../setup/demo-accounts.ts";
@@ -138,6 +139,20 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     expect((await technician.get("/api/visits?q=%25")).body.visits).toEqual([]);
   });
 
+  it("finds exactly what the client's search rule finds, whether it reads ids from the index or walks the list", async () => {
+    const all = (await walk<Summary & { technicians: { name: string }[] }>(technician, "/api/visits?limit=200", "visits")).rows;
+    const textOf = (visit: Summary) => [visit.equipmentName, visit.siteName, visit.customerName, visit.refrigerant, visit.reason].join(" ").toLowerCase();
+    // "grown" finds more visits than SEARCH_BY_ID_LIMIT (row by row); the others fewer (by id).
+    for (const query of ["grown", "grown visit 17", "R-32 toko", "wattle clinic", "17", "zzqx", "visit 1_", "50%", "rooftop -"]) {
+      const expected = all
+        .filter((visit) => searchTerms(query).every((term) => matchesSearch(textOf(visit), term.word) || visit.technicians.some((person) => person.name.toLowerCase().includes(term.word))))
+        .map((visit) => visit.id)
+        .sort();
+      const found = (await walk<Summary>(technician, `/api/visits?q=${encodeURIComponent(query)}&limit=200`, "visits")).rows.map((visit) => visit.id).sort();
+      expect(found, query).toEqual(expected);
+    }
+  });
+
   it("lists the visits the asker is on the crew of, with their last activity", async () => {
     const { rows } = await walk<Summary & { technicians: { id: string }[]; yourLastActivityAt: string | null }>(technician, "/api/visits?crew=me&limit=200", "visits");
     const onCrew = (await testApp.database.client.query<{ n: number }>("select count(*)::int as n from visit_technicians where user_id = $1", [technicianId])).rows[0]!.n;
@@ -166,6 +181,29 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     }
     expect((await technician.get("/api/equipment?cursor=" + byDate)).status).toBe(400);
     expect((await technician.get("/api/equipment?kind=spaceship")).status).toBe(400);
+  });
+
+  it("keeps the search text up to date when a visit is started or its unit, site or customer is renamed", async () => {
+    const { client } = testApp.database;
+    const unit = (await client.query<{ id: string; site_id: string }>("select id, site_id from equipment where organisation_id = $1 and name = 'Grown unit 7' limit 1", [organisationId])).rows[0]!;
+    const started = await technician.post("/api/visits").send({ equipmentId: unit.id, reason: "Quokka inspection" });
+    expect(started.status).toBe(201);
+    expect((await technician.get("/api/visits?q=quokka")).body.visits.map((visit: Summary) => visit.id)).toEqual([started.body.visit.id]);
+
+    await client.query("update equipment set name = 'Numbat chiller' where id = $1", [unit.id]);
+    const renamedUnit = (await walk<Summary>(technician, "/api/visits?q=numbat&limit=200", "visits")).rows;
+    expect(renamedUnit.length).toBe(await visitCount("equipment_id = $2", [unit.id]));
+    expect((await technician.get("/api/equipment?q=numbat")).body.equipment.map((row: Unit) => row.id)).toEqual([unit.id]);
+
+    await client.query("update sites set name = 'Bilby Depot' where id = $1", [unit.site_id]);
+    await client.query("update customers set name = 'Dunnart Holdings' where id = (select customer_id from sites where id = $1)", [unit.site_id]);
+    for (const query of ["bilby depot", "dunnart", "numbat bilby dunnart quokka"]) {
+      const found = (await walk<Summary>(technician, `/api/visits?q=${encodeURIComponent(query)}&limit=200`, "visits")).rows;
+      expect(found.length, query).toBeGreaterThan(0);
+      expect(found.every((visit) => visit.siteName === "Bilby Depot" && visit.customerName === "Dunnart Holdings"), query).toBe(true);
+    }
+    expect((await technician.get("/api/equipment?q=dunnart%20numbat")).body.equipment).toHaveLength(1);
+    expect((await technician.get("/api/visits?q=grown%20unit%207%20quokka")).body.visits).toEqual([]);
   });
 
   it("never shows another organisation's rows, whatever it asks", async () => {

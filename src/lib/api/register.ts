@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import {
   CylinderDetailSchema,
@@ -18,7 +18,9 @@ import {
   type RegisterQuery,
   type VisitRefrigerant,
 } from "@shared/schemas/register.ts";
+import type { RegisterPageParams } from "@shared/schemas/list-pages.ts";
 import { apiRequest } from "./api-client.ts";
+import { listQueryString } from "./list-params.ts";
 
 const CylinderListSchema = z.object({ cylinders: z.array(CylinderSchema) });
 const CylinderEnvelopeSchema = z.object({ cylinder: CylinderSchema });
@@ -57,17 +59,16 @@ export function getEquipmentRefrigerant(equipmentId: string, signal?: AbortSigna
   return apiRequest(`/equipment/${equipmentId}/refrigerant`, { schema: EquipmentRefrigerantSchema, signal });
 }
 
-function registerSearch(filter: RegisterQuery): string {
-  const search = new URLSearchParams(Object.entries(filter).filter((entry): entry is [string, string] => Boolean(entry[1])));
-  return search.size > 0 ? `?${search}` : "";
+/** One page of the register and the totals of its whole period (see RegisterPageQuerySchema). */
+export function getRegister(params: RegisterPageParams, signal?: AbortSignal): Promise<RegisterList> {
+  return apiRequest(`/register${listQueryString(params)}`, { schema: RegisterListSchema, signal });
 }
 
-export function getRegister(filter: RegisterQuery, signal?: AbortSignal): Promise<RegisterList> {
-  return apiRequest(`/register${registerSearch(filter)}`, { schema: RegisterListSchema, signal });
-}
-
-/** The CSV is downloaded by the browser itself (a plain link), so it keeps the session cookie. */
-export const registerExportHref = (filter: RegisterQuery) => `/api/register/export.csv${registerSearch(filter)}`;
+/**
+ * The CSV of the whole period (not a page), downloaded by the browser itself (a plain link), so
+ * it keeps the session cookie.
+ */
+export const registerExportHref = (filter: RegisterQuery) => `/api/register/export.csv${listQueryString(filter)}`;
 
 export const cylindersQueryOptions = (filter: { refrigerant?: string } = {}) =>
   queryOptions({ queryKey: ["cylinders", "list", filter], queryFn: ({ signal }) => getCylinders(filter, signal) });
@@ -81,14 +82,16 @@ export const visitRefrigerantQueryOptions = (visitId: string) =>
 export const equipmentRefrigerantQueryOptions = (equipmentId: string) =>
   queryOptions({ queryKey: ["register", "equipment", equipmentId], queryFn: ({ signal }) => getEquipmentRefrigerant(equipmentId, signal) });
 
-export const registerQueryOptions = (filter: RegisterQuery) =>
-  queryOptions({ queryKey: ["register", "list", filter], queryFn: ({ signal }) => getRegister(filter, signal) });
+/** The key holds every parameter, cursor included: each page of each period is its own entry. */
+export const registerQueryOptions = (params: RegisterPageParams) =>
+  queryOptions({ queryKey: ["register", "list", params], queryFn: ({ signal }) => getRegister(params, signal) });
 
 export const useCylinders = (filter: { refrigerant?: string } = {}) => useQuery(cylindersQueryOptions(filter));
 export const useCylinder = (id: string) => useQuery(cylinderQueryOptions(id));
 export const useVisitRefrigerant = (visitId: string) => useQuery(visitRefrigerantQueryOptions(visitId));
 export const useEquipmentRefrigerant = (equipmentId: string) => useQuery(equipmentRefrigerantQueryOptions(equipmentId));
-export const useRegister = (filter: RegisterQuery) => useQuery(registerQueryOptions(filter));
+/** A page of the register; while the next page (or another period) loads, the last one stays on screen. */
+export const useRegister = (params: RegisterPageParams) => useQuery({ ...registerQueryOptions(params), placeholderData: keepPreviousData });
 
 /**
  * Every register change moves cylinder contents and balances: refresh both families. A weigh-in

@@ -283,15 +283,7 @@ export function EquipmentTable({ empty }: { empty?: ReactNode }) {
           <SortableTable table={table} caption="Equipment, sortable by each column" words={{ asc: "(sorted A to Z, low to high)", desc: "(sorted Z to A, high to low)" }} />
         </>
       )}
-      <PageControls
-        noun="units"
-        pageNumber={pages.pageNumber}
-        shown={rows.length}
-        hasNext={nextCursor !== null}
-        loading={list.isPlaceholderData}
-        onPrevious={pages.previous}
-        onNext={() => nextCursor && pages.next(nextCursor)}
-      />
+      <PageControls noun="units" pages={pages} query={list} shown={rows.length} />
     </div>
   );
 }

@@ -171,15 +171,7 @@ export function JobsTable({ status, empty }: { status: VisitStatus | null; empty
           <SortableTable table={table} caption="Visits, newest first; sortable by start, unit, reason and status" words={{ asc: "(oldest or A first)", desc: "(newest or Z first)" }} />
         </>
       )}
-      <PageControls
-        noun="visits"
-        pageNumber={pages.pageNumber}
-        shown={rows.length}
-        hasNext={nextCursor !== null}
-        loading={visits.isPlaceholderData}
-        onPrevious={pages.previous}
-        onNext={() => nextCursor && pages.next(nextCursor)}
-      />
+      <PageControls noun="visits" pages={pages} query={visits} shown={rows.length} />
     </div>
   );
 }

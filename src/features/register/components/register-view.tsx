@@ -1,8 +1,11 @@
 import { Download } from "lucide-react";
-import { useId } from "react";
+import { useId, useState } from "react";
+import type { SortDirection } from "@shared/schemas/list-pages.ts";
 import { MOVEMENT_KIND_LABELS, type RegisterQuery } from "@shared/schemas/register.ts";
 import { buttonVariants } from "@/components/ui/button/button.tsx";
+import { PageControls } from "@/components/ui/data-table/page-controls.tsx";
 import { SelectField, TextField } from "@/components/ui/field/field.tsx";
+import { useCursorPages } from "@/hooks/use-cursor-pages.ts";
 import { useMembers } from "@/lib/api/members.ts";
 import { registerExportHref, useRegister } from "@/lib/api/register.ts";
 import { formatKg, localDayEnd, localDayStart } from "../utils/format-register.ts";
@@ -25,12 +28,16 @@ export function registerQuery(filters: RegisterFilters): RegisterQuery {
 }
 
 /**
- * The register for a period and technician, with totals by refrigerant and the CSV export
- * of exactly what is on screen.
+ * The register for a period and technician, with totals by refrigerant over the whole period, its
+ * lines a page at a time (the server pages them: a company keeps years of lines), and the CSV
+ * export of every line of the period and technician on screen.
  */
 export function RegisterView({ filters, onChange, mayChooseTechnician }: { filters: RegisterFilters; onChange: (next: RegisterFilters) => void; mayChooseTechnician: boolean }) {
   const query = registerQuery(filters);
-  const register = useRegister(query);
+  // Latest first on screen, where the last job's entries are looked for; the export reads oldest first.
+  const [dir, setDir] = useState<SortDirection>("desc");
+  const pages = useCursorPages(JSON.stringify([query, dir]));
+  const register = useRegister({ ...query, dir, cursor: pages.cursor });
   const members = useMembers();
   const totalsId = useId();
   const backwards = Boolean(filters.from && filters.to && filters.from > filters.to);
@@ -92,6 +99,17 @@ export function RegisterView({ filters, onChange, mayChooseTechnician }: { filte
             )}
           </section>
           {register.data.movements.length > 0 && (
+            <div className="flex flex-wrap items-end justify-between gap-3">
+              <h2 className="text-xl font-semibold">
+                Entries
+              </h2>
+              <SelectField label="Order" value={dir} onChange={(event) => setDir(event.target.value as SortDirection)}>
+                <option value="desc">Latest first</option>
+                <option value="asc">Oldest first</option>
+              </SelectField>
+            </div>
+          )}
+          {register.data.movements.length > 0 && (
             <ul aria-label="Register entries" className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface">
               {register.data.movements.map((movement) => (
                 <li key={movement.id} className="grid gap-1 p-3 md:grid-cols-[11rem_1fr_8rem]">
@@ -114,6 +132,7 @@ export function RegisterView({ filters, onChange, mayChooseTechnician }: { filte
               ))}
             </ul>
           )}
+          <PageControls noun="entries" pages={pages} query={register} shown={register.data.movements.length} />
         </>
       )}
     </div>
