@@ -3,8 +3,8 @@
  * "last settled state" needs, without loading a logger's whole series (10,000 readings of
  * about 11 kB of stored result each) to look at its last few minutes.
  */
-import { and, desc, eq } from "drizzle-orm";
-import type { DiagnosisResult } from "@shared/schemas/diagnosis.ts";
+import { and, desc, eq, lt, sql } from "drizzle-orm";
+import type { ChargeDeviation, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import type { Database } from "./client.ts";
 import { readings, visits } from "./schema.ts";
 
@@ -51,4 +51,21 @@ export async function latestCircuitReadings(db: Database, visitId: string, circu
 export async function readingResult(db: Database, readingId: string): Promise<DiagnosisResult | undefined> {
   const [row] = await db.select({ result: readings.result }).from(readings).where(eq(readings.id, readingId));
   return row?.result;
+}
+
+/**
+ * The charge estimate of a circuit's last reading taken before `before` that counts and carries
+ * one (equal times: the later stored), or null. Read from the end of readings_visit_idx, so it
+ * costs one row however long the run log; the report sets it beside what the scale found on
+ * the circuit's first recovery.
+ */
+export async function chargeEstimateBefore(db: Database, visitId: string, circuit: number, before: Date): Promise<ChargeDeviation | null> {
+  const deviation = sql<ChargeDeviation | null>`${readings.result} -> 'chargeDeviation'`;
+  const [row] = await db
+    .select({ deviation })
+    .from(readings)
+    .where(and(eq(readings.visitId, visitId), eq(readings.circuit, circuit), countsInResults, lt(readings.takenAt, before), sql`jsonb_typeof(${deviation}) = 'object'`))
+    .orderBy(desc(readings.takenAt), desc(readings.createdAt))
+    .limit(1);
+  return row?.deviation ?? null;
 }

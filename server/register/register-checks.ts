@@ -13,6 +13,7 @@ import {
   judgeCylinderFill,
   refrigerantBalance,
 } from "@shared/engine/index.ts";
+import type { ChargeDeviation } from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import {
   ZEOTROPE_GLIDE_NOTE_K,
@@ -88,7 +89,12 @@ export const ADDED_KINDS: readonly MovementKind[] = ["added-new", "added-reclaim
  * this visit (emptied and recharged) or the technician declared a full weigh-in; the weighed-in
  * mass is what the register says went in (reused + added), so it is never typed twice.
  */
-export function circuitBalance(nameplate: CircuitNameplate, movements: readonly MovementRow[], declared: { id: string; lineAdjustmentKg: number } | undefined): CircuitBalance {
+export function circuitBalance(
+  nameplate: CircuitNameplate,
+  movements: readonly MovementRow[],
+  declared: { id: string; lineAdjustmentKg: number } | undefined,
+  estimateBeforeRecovery: ChargeDeviation | null = null,
+): CircuitBalance {
   const own = movements.filter((movement) => movement.circuit === nameplate.number);
   const recoveredKg = sumKg(own, ["recovered"]);
   const reusedKg = sumKg(own, ["reused"]);
@@ -107,6 +113,7 @@ export function circuitBalance(nameplate: CircuitNameplate, movements: readonly 
     sentForReclaimKg: sumKg(own, ["sent-for-reclaim"]),
     balance,
     recoveredOnVisit: recoveredKg > 0,
+    estimateBeforeRecovery: recoveredKg > 0 ? estimateBeforeRecovery : null,
     charging: check
       ? {
           weighedInKg,

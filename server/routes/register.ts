@@ -35,12 +35,14 @@ import {
   registerChunks,
   registerPage,
   registerTotals,
+  type MovementRow,
   type RegisterFilter,
   runLogChargeCheck,
   visitCircuitCharges,
   visitMovements,
   voidReclaim,
 } from "../db/register.ts";
+import { chargeEstimateBefore } from "../db/latest-readings.ts";
 import { insertVisitEvent } from "../db/visit-events.ts";
 import { findVisit, joinCrew } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
@@ -154,22 +156,32 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
     return { visit, unit };
   }
 
+  /** The readings' charge estimate just before the circuit's first standing recovery on the visit, or null. */
+  async function estimateAtFirstRecovery(visitId: string, circuit: number, movements: readonly MovementRow[]) {
+    const recoveries = movements.filter((movement) => movement.kind === "recovered" && movement.circuit === circuit && movement.voided === null);
+    if (recoveries.length === 0) return null;
+    const firstRecovery = Math.min(...recoveries.map((movement) => Date.parse(movement.at)));
+    return chargeEstimateBefore(db, visitId, circuit, new Date(firstRecovery));
+  }
+
   /** The visit's refrigerant as `reader` may see it: their lines, balances over all of them. */
   async function visitRefrigerant(reader: RegisterReader, organisationId: string, visitId: string, unit: NonNullable<Awaited<ReturnType<typeof getEquipment>>>) {
     const [movements, charges] = await Promise.all([visitMovements(db, organisationId, visitId), visitCircuitCharges(db, organisationId, visitId)]);
     // Over every movement, like the balances: the check compares totals, not the lines shown.
     const runLogCheck = await runLogChargeCheck(db, organisationId, visitId, movements);
     const { note, glideK } = liquidChargingNote(unit.refrigerant);
+    const estimates = await Promise.all(unit.circuits.map((nameplate) => estimateAtFirstRecovery(visitId, nameplate.number, movements)));
     return {
       refrigerant: unit.refrigerant,
       liquidChargingNote: note,
       glideK,
       ...visibleRegisterLines(reader, movements),
-      circuits: unit.circuits.map((nameplate) =>
+      circuits: unit.circuits.map((nameplate, index) =>
         circuitBalance(
           nameplate,
           movements,
           charges.find((charge) => charge.circuit === nameplate.number),
+          estimates[index],
         ),
       ),
       runLogCheck,

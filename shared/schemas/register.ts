@@ -20,6 +20,7 @@ import {
   VerdictSchema,
 } from "./procedures.ts";
 import { PersonRefSchema, VoidInfoSchema } from "./visits.ts";
+import { ChargeDeviationSchema } from "./diagnosis.ts";
 import { boundEnd, boundStart, dayOrInstant, instant } from "./dates.ts";
 import { text } from "./text.ts";
 
@@ -239,6 +240,13 @@ export const CircuitBalanceSchema = z.object({
   balance: RefrigerantBalanceSchema,
   /** True when refrigerant was recovered, so the shortfall says how far short the system was. */
   recoveredOnVisit: z.boolean(),
+  /**
+   * The charge estimate of the circuit's last standing reading taken before its first standing
+   * recovery on the visit, set beside what the scale then found; null when the circuit was not
+   * recovered or no reading before it carried an estimate. Worked out over every reading of
+   * the visit on the server (the browser holds only the latest pages of a long run log).
+   */
+  estimateBeforeRecovery: ChargeDeviationSchema.nullable(),
   /** The full weigh-in against the nameplate, when the circuit was emptied or a weigh-in was declared. */
   charging: z
     .object({

@@ -165,7 +165,7 @@ export default function VisitReportRoute() {
       <StandingPressureReport visitId={data.id} units={units} />
       <PressureTestReport visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} />
       <EvacuationReport visitId={data.id} chartWidth={chartWidth} />
-      <RefrigerantReport visitId={data.id} readings={data.circuitLogs.flatMap((log) => circuitSeries(data, log.circuit).readings)} />
+      <RefrigerantReport visitId={data.id} />
 
       {data.photos.length > 0 && (
         <section aria-labelledby="photos-heading" className="keep-together">

@@ -1,7 +1,6 @@
-import { isStanding, type Reading } from "@shared/schemas/visits.ts";
+import { isStanding } from "@shared/schemas/visits.ts";
 import { MOVEMENT_KIND_LABELS } from "@shared/schemas/register.ts";
 import { useVisitRefrigerant } from "@/lib/api/register.ts";
-import { estimateBeforeRecovery } from "../utils/estimate-before-recovery.ts";
 import { formatKg, formatSignedKg } from "../utils/format-register.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
 import { HiddenLinesNote } from "./hidden-lines-note.tsx";
@@ -13,7 +12,7 @@ import { VerdictLine } from "./verdict-line.tsx";
  * circuit, and — where the circuit was recovered — the readings' charge estimate beside what the
  * scale found, so the estimate is checked against the scale on every recovery.
  */
-export function RefrigerantReport({ visitId, readings = [] }: { visitId: string; readings?: readonly Reading[] }) {
+export function RefrigerantReport({ visitId }: { visitId: string }) {
   const register = useVisitRefrigerant(visitId);
   // Voided movements are corrections: the report leaves them out (the audit trail names them).
   const movements = (register.data?.movements ?? []).filter(isStanding);
@@ -54,7 +53,7 @@ export function RefrigerantReport({ visitId, readings = [] }: { visitId: string;
             </tbody>
           </table>
           {register.data.circuits.map((circuit) => {
-            const estimate = circuit.recoveredOnVisit ? estimateBeforeRecovery(readings, movements, circuit.circuit) : null;
+            const estimate = circuit.estimateBeforeRecovery;
             if (!estimate) return null;
             // shortfall = nameplate − recovered; the estimate's kg is negative when short.
             const scaleKg = -circuit.balance.shortfallKg;
