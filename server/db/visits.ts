@@ -341,16 +341,18 @@ export async function insertComment(
   organisationId: string,
   values: { visitId: string; readingId: string | null; authorId: string; body: string },
 ): Promise<Comment | undefined> {
+  let reading: Comment["reading"] = null;
   if (values.readingId) {
-    const [reading] = await db
-      .select({ id: readings.id })
+    const [found] = await db
+      .select({ circuit: readings.circuit, takenAt: readings.takenAt })
       .from(readings)
       .where(and(eq(readings.id, values.readingId), eq(readings.visitId, values.visitId), isRecord));
-    if (!reading) return undefined;
+    if (!found) return undefined;
+    reading = { circuit: found.circuit, takenAt: found.takenAt.toISOString() };
   }
   const [row] = await db.insert(visitComments).values({ ...values, organisationId }).returning();
   const people = await peopleById(db, [row.authorId]);
-  return { id: row.id, readingId: row.readingId, body: row.body, author: person(people, row.authorId), createdAt: row.createdAt.toISOString() };
+  return { id: row.id, readingId: row.readingId, reading, body: row.body, author: person(people, row.authorId), createdAt: row.createdAt.toISOString() };
 }
 
 export async function updateVisitStatus(
@@ -412,7 +414,12 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
       ? Promise.resolve(undefined)
       : db.select().from(readings).where(and(eq(readings.visitId, visitId), isRecord, changed(readings))).orderBy(asc(readings.takenAt), asc(readings.createdAt)),
     db.select().from(adjustments).where(eq(adjustments.visitId, visitId)).orderBy(asc(adjustments.at)),
-    db.select().from(visitComments).where(and(eq(visitComments.visitId, visitId), changed(visitComments))).orderBy(asc(visitComments.createdAt)),
+    db
+      .select({ comment: visitComments, readingCircuit: readings.circuit, readingTakenAt: readings.takenAt })
+      .from(visitComments)
+      .leftJoin(readings, eq(readings.id, visitComments.readingId))
+      .where(and(eq(visitComments.visitId, visitId), changed(visitComments)))
+      .orderBy(asc(visitComments.createdAt)),
     db.select().from(photos).where(and(eq(photos.visitId, visitId), changed(photos))).orderBy(asc(photos.createdAt)),
     summarise(db, [head]),
     listVisitEvents(db, organisationId, visitId, sinceRevision),
@@ -432,7 +439,7 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
     head.signedOffBy,
     ...readingRows.flatMap(mentionedPeople),
     ...(logs ?? []).flatMap((log) => log.keyRows.flatMap(mentionedPeople)),
-    ...commentRows.map((row) => row.authorId),
+    ...commentRows.map((row) => row.comment.authorId),
   ]);
   const { siteAltitudeM, token, revision: _revision, ...visit } = head;
   return {
@@ -451,12 +458,13 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
       keyReadings: keyRows.map((row) => toReading(row, people)),
     })),
     adjustments: sinceRevision === undefined ? allAdjustments : adjustmentRows.map((row) => toAdjustment(row, adjustmentPeople)),
-    comments: commentRows.map((row) => ({
-      id: row.id,
-      readingId: row.readingId,
-      body: row.body,
-      author: person(people, row.authorId),
-      createdAt: row.createdAt.toISOString(),
+    comments: commentRows.map(({ comment, readingCircuit, readingTakenAt }) => ({
+      id: comment.id,
+      readingId: comment.readingId,
+      reading: readingCircuit !== null && readingTakenAt !== null ? { circuit: readingCircuit, takenAt: readingTakenAt.toISOString() } : null,
+      body: comment.body,
+      author: person(people, comment.authorId),
+      createdAt: comment.createdAt.toISOString(),
     })),
     photos: photoRows.map((row) => ({
       id: row.id,

@@ -300,6 +300,8 @@ export const CommentCreateSchema = z.object({
 export const CommentSchema = z.object({
   id: z.uuid(),
   readingId: z.uuid().nullable(),
+  /** Which reading the comment is about, named by the server: the run log may not hold it (older pages). */
+  reading: z.object({ circuit: z.number().int(), takenAt: z.string() }).nullable(),
   body: z.string(),
   author: PersonRefSchema.nullable(),
   createdAt: z.string(),

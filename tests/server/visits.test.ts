@@ -131,6 +131,11 @@ describe("visits and the run log API", () => {
     const comment = await senior.post(`/api/visits/${visitId}/comments`).send({ body: "Superheat looks right; watch the DLT", readingId: visit.readings[0].id });
     expect(comment.status).toBe(201);
     expect(comment.body.comment.author.name).toBe("Priya Raman");
+    // The comment names its reading itself: a long run log's older pages are not held by the reader.
+    const named = { circuit: visit.readings[0].circuit, takenAt: visit.readings[0].takenAt };
+    expect(comment.body.comment.reading).toEqual(named);
+    const withComment = (await technician.get(`/api/visits/${visitId}`)).body.visit;
+    expect(withComment.comments.find((candidate: { id: string }) => candidate.id === comment.body.comment.id).reading).toEqual(named);
     expect((await apprentice.post(`/api/visits/${visitId}/comments`).send({ body: "hi" })).status).toBe(403);
   });
 

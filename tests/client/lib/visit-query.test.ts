@@ -27,7 +27,7 @@ const visit: Visit = {
   readings: [],
   circuitLogs: [],
   adjustments: [],
-  comments: [{ id: id(1), readingId: null, body: "Filter blocked", author: person, createdAt: "2026-12-02T01:02:00.000Z" }],
+  comments: [{ id: id(1), readingId: null, reading: null, body: "Filter blocked", author: person, createdAt: "2026-12-02T01:02:00.000Z" }],
   photos: [],
   atmosphere: { pressureKPa: 100.3, basis: "site-altitude", altitudeM: 85, description: "site altitude 85 m" },
   events: [],
@@ -53,7 +53,7 @@ describe("visitQueryOptions", () => {
   afterEach(() => vi.unstubAllGlobals());
 
   it("loads the whole visit, then refreshes with the revision it holds: 304 keeps the copy, a delta is merged into it", async () => {
-    const comment = { id: id(2), readingId: null, body: "Coil cleaned", author: person, createdAt: "2026-12-02T01:10:00.000Z" };
+    const comment = { id: id(2), readingId: null, reading: null, body: "Coil cleaned", author: person, createdAt: "2026-12-02T01:10:00.000Z" };
     const asked = stubServer([
       () => json({ visit }),
       () => new Response(null, { status: 304 }),

@@ -15,11 +15,6 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
   const [readingId, setReadingId] = useState("");
   const [error, setError] = useState<string | null>(null);
   const createComment = useCreateComment();
-  const readingLabel = (id: string | null) => {
-    // A comment may be about a reading older than the pages held: the readings that matter may name it.
-    const reading = visit.readings.find((candidate) => candidate.id === id) ?? visit.circuitLogs.flatMap((log) => log.keyReadings).find((candidate) => candidate.id === id);
-    return reading ? `circuit ${reading.circuit}, ${formatTime(reading.takenAt)}` : null;
-  };
 
   const submit = async () => {
     setError(null);
@@ -46,7 +41,12 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
             <li key={comment.id} className="border-l-4 border-accent pl-3">
               <p className="text-sm text-muted">
                 <strong className="text-ink">{comment.author?.name ?? "Former member"}</strong> · {stamp(comment.createdAt)}
-                {comment.readingId && <> · on the reading of {readingLabel(comment.readingId)}</>}
+                {comment.reading && (
+                  <>
+                    {" "}
+                    · on the reading of circuit {comment.reading.circuit}, {formatTime(comment.reading.takenAt)}
+                  </>
+                )}
               </p>
               <p className="whitespace-pre-wrap">{comment.body}</p>
             </li>
@@ -87,7 +87,7 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
                 <option value="">The whole visit</option>
                 {visit.readings.map((reading) => (
                   <option key={reading.id} value={reading.id}>
-                    Reading: {readingLabel(reading.id)}
+                    Reading: circuit {reading.circuit}, {formatTime(reading.takenAt)}
                   </option>
                 ))}
               </select>
