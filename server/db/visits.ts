@@ -429,7 +429,14 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
   const allAdjustments = allAdjustmentRows.map((row) => toAdjustment(row, adjustmentPeople));
   // The logs change only with the readings and adjustments; a delta without either leaves the held ones.
   const logsChanged = changedReadings === undefined || changedReadings.length > 0 || adjustmentRows.length > 0;
-  const logs = logsChanged ? await circuitLogs(db, visitId, allAdjustments) : undefined;
+  const allLogs = logsChanged ? await circuitLogs(db, visitId, allAdjustments) : undefined;
+  // A delta carries the logs of the circuits it touched only (each is up to a few hundred chart
+  // points): an adjustment for no one circuit touches them all.
+  const touched =
+    changedReadings === undefined || adjustmentRows.some((row) => row.circuit === null)
+      ? undefined
+      : new Set([...changedReadings.map((row) => row.circuit), ...adjustmentRows.map((row) => row.circuit!)]);
+  const logs = touched ? allLogs?.filter((log) => touched.has(log.circuit)) : allLogs;
   const pages = new Map<number, { rows: (typeof readings.$inferSelect)[]; olderCursor: string | null }>();
   if (changedReadings === undefined) {
     for (const log of logs!) pages.set(log.circuit, await circuitReadingsPage(db, visitId, log.circuit, READINGS_PAGE_SIZE));

@@ -463,15 +463,15 @@ export type ReadingsPage = z.infer<typeof ReadingsPageSchema>;
 export const VisitDetailQuerySchema = z.object({ since: z.string().max(100).optional() });
 
 /**
- * What changed on a visit after the revision `since`: the summary, counts, crew, review state and
- * circuit logs whole; in the lists only the records added or changed (voided, imported) since,
+ * What changed on a visit after the revision `since`: the summary, counts, crew and review state
+ * whole, with the whole log of each circuit that changed; in the lists only the records added or changed (voided, imported) since,
  * each whole, to be merged by id. `revision` is the state the client holds once merged. When
  * more readings changed than a page holds (an imported series), the server sends the whole
  * (bounded) visit instead.
  */
 export const VisitDeltaSchema = VisitSchema.extend({
   since: z.string(),
-  /** Left out when no reading or adjustment changed: the held logs still hold. */
+  /** The logs of the circuits whose readings or adjustments changed; left out when none did: the held logs still hold. */
   circuitLogs: z.array(CircuitLogSchema).optional(),
 });
 export type VisitDelta = z.infer<typeof VisitDeltaSchema>;

@@ -209,6 +209,32 @@ describe("paged visit detail and circuit logs", () => {
     expect(logOf(await detail()).readingCount).toBe(after.readingCount + 1);
   });
 
+  it("brings in a delta the logs of the circuits it touched only; an adjustment for the whole unit touches every circuit", async () => {
+    const deltaSince = async (revision: string) => {
+      const body = VisitDetailResponseSchema.parse((await technician.get(`/api/visits/${visitId}?since=${encodeURIComponent(revision)}`)).body);
+      if (!("delta" in body)) throw new Error("expected a delta");
+      return body.delta;
+    };
+    const save = async () => {
+      const body = { circuit: 2, suctionPressureKPa: 400, suctionLineTempC: 14, liquidPressureKPa: 1600, liquidLineTempC: 36 };
+      const response = await technician.post(`/api/visits/${visitId}/readings`).send(body);
+      expect(response.status).toBe(201);
+      const saved = response.body.reading;
+      stored.push({ ...saved, takenAt: new Date(saved.takenAt), recordedBy: saved.recordedBy.id });
+    };
+    await save();
+    let before = await detail();
+    expect(before.circuitLogs.map((log) => log.circuit)).toEqual([1, 2]);
+    await save();
+    const afterReading = await deltaSince(before.revision);
+    expect(afterReading.circuitLogs!.map((log) => log.circuit)).toEqual([2]);
+    expect(afterReading.circuitLogs![0]!.readingCount).toBe(2);
+
+    before = await detail();
+    expect((await technician.post(`/api/visits/${visitId}/adjustments`).send({ circuit: null, kind: "airflow", description: "Changed both filters" })).status).toBe(201);
+    expect((await deltaSince(before.revision)).circuitLogs!.map((log) => log.circuit)).toEqual([1, 2]);
+  });
+
   it("sends the whole visit instead of a delta when more readings changed than a page holds", async () => {
     const before = await detail();
     const db = testApp.database.db;

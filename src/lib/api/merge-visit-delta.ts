@@ -51,12 +51,18 @@ export function mergeReadingsPage(held: Visit, circuit: number, page: ReadingsPa
 }
 
 /**
- * A delta's logs, each keeping the held copy's cursor: the server's names the oldest reading of
- * its latest page, and the client may already hold pages before that.
+ * A delta's logs (the circuits that changed) put in place of the held ones, each keeping the
+ * held copy's cursor: the server's names the oldest reading of its latest page, and the client
+ * may already hold pages before that. Circuits the delta leaves out keep their held logs.
  */
 function mergeCircuitLogs(held: readonly CircuitLog[], changed: readonly CircuitLog[]): CircuitLog[] {
-  const cursors = new Map(held.map((log) => [log.circuit, log.olderCursor]));
-  return changed.map((log) => (cursors.has(log.circuit) ? { ...log, olderCursor: cursors.get(log.circuit)! } : log));
+  const byCircuit = new Map(changed.map((log) => [log.circuit, log]));
+  const merged = held.map((log) => {
+    const update = byCircuit.get(log.circuit);
+    byCircuit.delete(log.circuit);
+    return update ? { ...update, olderCursor: log.olderCursor } : log;
+  });
+  return [...merged, ...byCircuit.values()].sort((a, b) => a.circuit - b.circuit);
 }
 
 function mergeById<T extends { id: string }>(held: T[], changed: T[], timeOf: (row: T) => string): T[] {

@@ -68,6 +68,16 @@ describe("mergeVisitDelta", () => {
     ]);
   });
 
+  it("replaces only the logs of the circuits the delta brings; the others keep theirs", () => {
+    const twoCircuits = { ...held, circuitLogs: [log(1, null, 3), log(2, id(7), 120)] };
+    const merged = mergeVisitDelta(twoCircuits, delta({ readings: [reading(3, "2026-12-02T01:10:00.000Z")], circuitLogs: [log(1, null, 4)] }));
+    expect(merged.circuitLogs.map((entry) => [entry.circuit, entry.readingCount])).toEqual([
+      [1, 4],
+      [2, 120],
+    ]);
+    expect(merged.circuitLogs[1]).toBe(twoCircuits.circuitLogs[1]);
+  });
+
   it("keeps the held cursor of a circuit: the client may hold pages before the server's latest page", () => {
     const paged = { ...held, circuitLogs: [log(1, id(1), 500)] };
     const merged = mergeVisitDelta(paged, delta({ readings: [reading(3, "2026-12-02T01:10:00.000Z")], circuitLogs: [log(1, id(60), 501)] }));
