@@ -1,4 +1,4 @@
-import { expect, test } from "@playwright/test";
+import { expect, test, type Page } from "@playwright/test";
 import { signIn } from "./sign-in.ts";
 
 /**
@@ -72,21 +72,7 @@ for (const size of [
       page,
       context,
     }) => {
-      await page.goto("/equipment");
-      await signIn(page, "tech@bellbird.example");
-      await page
-        .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-        .first()
-        .click();
-      await page.getByLabel("Reason for the visit").fill("Save without signal");
-      await page.getByRole("button", { name: "Start the visit" }).click();
-      await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
-
-      // R407C: 465 kPa gauge ≈ 6 °C dew, 1736 kPa ≈ 42 °C bubble at the site (see run-log.spec.ts).
-      await page.getByLabel("Suction pressure", { exact: true }).fill("465");
-      await page.getByLabel("Suction line temperature", { exact: true }).fill("12");
-      await page.getByLabel("Liquid pressure", { exact: true }).fill("1736");
-      await page.getByLabel("Line temperature for subcooling", { exact: true }).fill("37");
+      await startVisitAndTypeReading(page, "Save without signal");
       // While the last field is typed the verdict is in view: the live line on a phone, the finding beside the fields on a tablet.
       await expect(page.getByTestId(size.width < 1024 ? "live-line" : "charge-state")).toBeInViewport();
 
@@ -120,19 +106,7 @@ test("the message of a failed save shows even when the toast code cannot be fetc
     if (body.includes("sonner-loading-wrapper")) return route.abort();
     return route.fulfill({ response, body });
   });
-  await page.goto("/equipment");
-  await signIn(page, "tech@bellbird.example");
-  await page
-    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-    .first()
-    .click();
-  await page.getByLabel("Reason for the visit").fill("Toasts without their code");
-  await page.getByRole("button", { name: "Start the visit" }).click();
-  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
-  await page.getByLabel("Suction pressure", { exact: true }).fill("465");
-  await page.getByLabel("Suction line temperature", { exact: true }).fill("12");
-  await page.getByLabel("Liquid pressure", { exact: true }).fill("1736");
-  await page.getByLabel("Line temperature for subcooling", { exact: true }).fill("37");
+  await startVisitAndTypeReading(page, "Toasts without their code");
 
   await context.setOffline(true);
   await page.getByRole("button", { name: "Save reading" }).click();
@@ -144,3 +118,21 @@ test("the message of a failed save shows even when the toast code cannot be fetc
   await context.setOffline(false);
   await expect(page.getByRole("button", { name: "Save reading" })).toBeEnabled();
 });
+
+/** Signs the technician in, starts a visit on RTU-1 and types a whole reading, not saved yet. */
+async function startVisitAndTypeReading(page: Page, reason: string) {
+  await page.goto("/equipment");
+  await signIn(page, "tech@bellbird.example");
+  await page
+    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+    .first()
+    .click();
+  await page.getByLabel("Reason for the visit").fill(reason);
+  await page.getByRole("button", { name: "Start the visit" }).click();
+  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+  // R407C: 465 kPa gauge ≈ 6 °C dew, 1736 kPa ≈ 42 °C bubble at the site (see run-log.spec.ts).
+  await page.getByLabel("Suction pressure", { exact: true }).fill("465");
+  await page.getByLabel("Suction line temperature", { exact: true }).fill("12");
+  await page.getByLabel("Liquid pressure", { exact: true }).fill("1736");
+  await page.getByLabel("Line temperature for subcooling", { exact: true }).fill("37");
+}
