@@ -6,17 +6,15 @@
  * for each stored reading (diagnose), picked the way the rule says: the last standing reading
  * taken before the first standing recovery that carries an estimate.
  */
-import { eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { diagnose, saturationPressure, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.ts";
+import { saturationPressure, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.ts";
 import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import { VisitRefrigerantSchema } from "@shared/schemas/register.ts";
 import { READINGS_PAGE_SIZE, VisitSchema } from "@shared/schemas/visits.ts";
-import { insertReadings, type NewReading } from "@server/db/visits.ts";
-import { writeToVisit } from "@server/visits/write-to-visit.ts";
-import { users } from "@server/db/schema.ts";
+import type { NewReading } from "@server/db/visits.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
+import { readingStore, startRooftopVisit } from "../setup/stored-readings.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -51,20 +49,12 @@ describe("the charge estimate before a circuit's first recovery", () => {
     testApp = await createTestApp();
     await seedBellbird(testApp);
     technician = await signedIn(testApp.app, BELLBIRD.technician);
-    const units = (await technician.get("/api/equipment")).body.equipment as { id: string; refrigerant: string }[];
-    const rooftop = units.find((unit) => unit.refrigerant === "R407C")!;
-    visitId = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Short of charge, recover and weigh in" })).body.visit.id;
+    visitId = await startRooftopVisit(technician, "Short of charge, recover and weigh in");
     const cylinders = (await technician.get("/api/cylinders?refrigerant=R407C")).body.cylinders as { id: string; kind: string }[];
     recoveryCylinder = cylinders.find((cylinder) => cylinder.kind === "recovery")!.id;
-
-    const db = testApp.database.db;
-    const [user] = await db.select().from(users).where(eq(users.email, BELLBIRD.technician));
-    const organisationId = (await db.execute<{ organisation_id: string }>(sql`select organisation_id from visits where id = ${visitId}`)).rows[0]!.organisation_id;
-    for (let index = 0; index < COUNT; index++) {
-      const input = inputAt(index);
-      stored.push({ id: crypto.randomUUID(), organisationId, visitId, circuit: 1, takenAt: new Date(START + index * STEP_MS), note: null, input, result: diagnose(input), recordedBy: user!.id });
-    }
-    await writeToVisit(db, organisationId, visitId, (tx) => insertReadings(tx, stored, new Map()));
+    const readings = await readingStore(testApp, visitId);
+    for (let index = 0; index < COUNT; index++) stored.push(readings.row(inputAt(index), new Date(START + index * STEP_MS)));
+    await readings.store(stored);
   }, 120_000);
   afterAll(() => testApp.close());
 

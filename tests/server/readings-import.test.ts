@@ -8,6 +8,7 @@ import { demoSite } from "@server/db/seed/demo-scenario.ts";
 import { atmosphericPressureAtAltitude, saturationPressure } from "@shared/engine/index.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
+import { startRooftopVisit } from "../setup/stored-readings.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 /** Gauges at the demo clinic (85 m) read against the ISO 2533 atmosphere there. */
@@ -34,9 +35,7 @@ describe("CSV import of a reading series", () => {
     testApp = await createTestApp();
     await seedBellbird(testApp);
     technician = await signedIn(testApp.app, BELLBIRD.technician);
-    const units = (await technician.get("/api/equipment")).body.equipment;
-    const rooftop = units.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C");
-    visitId = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Logger data from last week" })).body.visit.id;
+    visitId = await startRooftopVisit(technician, "Logger data from last week");
   });
   afterAll(() => testApp.close());
 

@@ -6,14 +6,14 @@
  */
 import { eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { assessTrend, diagnose, lastAtEachInstant, saturationPressure, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.ts";
+import { assessTrend, lastAtEachInstant, saturationPressure, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.ts";
 import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import { READINGS_PAGE_SIZE, ReadingsPageSchema, VisitDetailResponseSchema, VisitSchema, type CircuitLog, type Visit } from "@shared/schemas/visits.ts";
 import { insertReadings, type NewReading } from "@server/db/visits.ts";
-import { writeToVisit } from "@server/visits/write-to-visit.ts";
-import { readings, users } from "@server/db/schema.ts";
+import { readings } from "@server/db/schema.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
+import { readingStore, startRooftopVisit } from "../setup/stored-readings.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -52,19 +52,12 @@ describe("paged visit detail and circuit logs", () => {
     testApp = await createTestApp();
     await seedBellbird(testApp);
     technician = await signedIn(testApp.app, BELLBIRD.technician);
-    const units = (await technician.get("/api/equipment")).body.equipment;
-    const rooftop = units.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C");
-    visitId = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Logger left on overnight" })).body.visit.id;
-    const db = testApp.database.db;
-    const [user] = await db.select().from(users).where(eq(users.email, BELLBIRD.technician));
-    const organisationId = (await db.execute<{ organisation_id: string }>(sql`select organisation_id from visits where id = ${visitId}`)).rows[0]!.organisation_id;
-    const row = (index: number, takenAtMs: number): NewReading => {
-      const input = inputAt(index);
-      return { id: crypto.randomUUID(), organisationId, visitId, circuit: 1, takenAt: new Date(takenAtMs), note: null, input, result: diagnose(input), recordedBy: user!.id };
-    };
+    visitId = await startRooftopVisit(technician, "Logger left on overnight");
+    const log = await readingStore(testApp, visitId);
+    const row = (index: number, takenAtMs: number) => log.row(inputAt(index), new Date(takenAtMs));
     const batch = Array.from({ length: COUNT }, (_, index) => row(index, START + index * 30_000));
     // Under the visit's lock, bumping its revision, as every save does.
-    const store = (rows: NewReading[]) => writeToVisit(db, organisationId, visitId, (tx) => insertReadings(tx, rows, new Map()));
+    const store = log.store;
     await store(batch);
     stored.push(...batch);
     // A second reading at the same instant as reading 100, stored later: the trend keeps the later one.
@@ -199,12 +192,8 @@ describe("paged visit detail and circuit logs", () => {
     expect(after.trend!.latest).toEqual(saved.result);
     stored.push({ ...saved, takenAt: new Date(saved.takenAt), recordedBy: saved.recordedBy.id });
     // The seed and the large data set's builder insert directly, without the visit's lock.
-    const db = testApp.database.db;
-    const [user] = await db.select().from(users).where(eq(users.email, BELLBIRD.technician));
-    const input = inputAt(5);
-    const organisationId = (await db.execute<{ organisation_id: string }>(sql`select organisation_id from visits where id = ${visitId}`)).rows[0]!.organisation_id;
-    const direct: NewReading = { id: crypto.randomUUID(), organisationId, visitId, circuit: 1, takenAt: new Date(Date.now() + 60_000), note: null, input, result: diagnose(input), recordedBy: user!.id };
-    await insertReadings(db, [direct], new Map());
+    const direct = (await readingStore(testApp, visitId)).row(inputAt(5), new Date(Date.now() + 60_000));
+    await insertReadings(testApp.database.db, [direct], new Map());
     stored.push(direct);
     expect(logOf(await detail()).readingCount).toBe(after.readingCount + 1);
   });

@@ -1,0 +1,42 @@
+import { eq, sql } from "drizzle-orm";
+import { diagnose } from "@shared/engine/index.ts";
+import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
+import { insertReadings, type NewReading } from "@server/db/visits.ts";
+import { users } from "@server/db/schema.ts";
+import { writeToVisit } from "@server/visits/write-to-visit.ts";
+import { BELLBIRD, signedIn } from "./demo-accounts.ts";
+import type { TestApp } from "./test-app.ts";
+
+type Agent = Awaited<ReturnType<typeof signedIn>>;
+
+/** Starts a visit on the demo company's R407C rooftop unit (RTU-1) as `agent`; its id. */
+export async function startRooftopVisit(agent: Agent, reason: string): Promise<string> {
+  const units = (await agent.get("/api/equipment")).body.equipment as { id: string; refrigerant: string }[];
+  const rooftop = units.find((unit) => unit.refrigerant === "R407C")!;
+  return (await agent.post("/api/visits").send({ equipmentId: rooftop.id, reason })).body.visit.id as string;
+}
+
+/**
+ * Long run logs without a request per reading: `row` builds a reading of `visitId` judged by the
+ * engine (diagnose) as the demo technician's, `store` writes rows under the visit's lock,
+ * bumping its revision as every save does.
+ */
+export async function readingStore(testApp: TestApp, visitId: string) {
+  const db = testApp.database.db;
+  const [user] = await db.select().from(users).where(eq(users.email, BELLBIRD.technician));
+  const organisationId = (await db.execute<{ organisation_id: string }>(sql`select organisation_id from visits where id = ${visitId}`)).rows[0]!.organisation_id;
+  return {
+    row: (input: DiagnosisInput, takenAt: Date, circuit = 1): NewReading => ({
+      id: crypto.randomUUID(),
+      organisationId,
+      visitId,
+      circuit,
+      takenAt,
+      note: null,
+      input,
+      result: diagnose(input),
+      recordedBy: user!.id,
+    }),
+    store: (rows: NewReading[]) => writeToVisit(db, organisationId, visitId, (tx) => insertReadings(tx, rows, new Map())),
+  };
+}
