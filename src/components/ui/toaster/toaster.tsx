@@ -13,22 +13,27 @@ type Sonner = typeof import("sonner");
 let sonner: Sonner | null = null;
 /** Set once sonner's Toaster is mounted and listening; toasts before that wait in `pending`. */
 let mounted = false;
-let loading: Promise<Sonner> | null = null;
+let loading: Promise<void> | null = null;
 /** Messages raised while the library is not mounted yet, or could not be fetched. */
 let pending: readonly string[] = [];
-let wanted = false;
 const listeners = new Set<() => void>();
 
 function notify() {
   for (const listener of listeners) listener();
 }
 
-function loadSonner(): Promise<Sonner> {
-  loading ??= import("sonner").catch((error: unknown) => {
-    loading = null; // the next toast tries again
-    throw error;
-  });
-  return loading;
+/** Fetches the library once; a failed fetch (offline) is forgotten, so the next call tries again. */
+function fetchSonner(): void {
+  loading ??= import("sonner").then(
+    (library) => {
+      sonner ??= library;
+      notify();
+    },
+    () => {
+      loading = null; // shown as plain alerts meanwhile
+      notify();
+    },
+  );
 }
 
 /** Shows an error toast; the library is fetched now if the idle-time fetch has not run yet. */
@@ -38,15 +43,8 @@ export function toastError(message: string): void {
     return;
   }
   pending = [...pending, message];
-  wanted = true;
   notify();
-  loadSonner().then(
-    (library) => {
-      sonner ??= library;
-      notify();
-    },
-    () => notify(),
-  );
+  fetchSonner();
 }
 
 function subscribe(listener: () => void) {
@@ -57,13 +55,10 @@ function subscribe(listener: () => void) {
 interface ToasterState {
   library: Sonner | null;
   pending: readonly string[];
-  wanted: boolean;
 }
-let snapshot: ToasterState = { library: null, pending, wanted };
+let snapshot: ToasterState = { library: null, pending };
 function getSnapshot(): ToasterState {
-  if (snapshot.library !== sonner || snapshot.pending !== pending || snapshot.wanted !== wanted) {
-    snapshot = { library: sonner, pending, wanted };
-  }
+  if (snapshot.library !== sonner || snapshot.pending !== pending) snapshot = { library: sonner, pending };
   return snapshot;
 }
 
@@ -111,22 +106,13 @@ function PlainToasts({ messages }: { messages: readonly string[] }) {
 export function Toaster() {
   const state = useSyncExternalStore(subscribe, getSnapshot);
   useEffect(() => {
-    const fetchWhenIdle = () =>
-      void loadSonner().then(
-        (library) => {
-          sonner ??= library;
-          notify();
-        },
-        () => undefined, // offline now: the first toast tries again, or plain alerts stand in
-      );
     if (typeof requestIdleCallback === "function") {
-      const handle = requestIdleCallback(fetchWhenIdle, { timeout: 5000 });
+      const handle = requestIdleCallback(fetchSonner, { timeout: 5000 });
       return () => cancelIdleCallback(handle);
     }
-    const handle = setTimeout(fetchWhenIdle, 2000);
+    const handle = setTimeout(fetchSonner, 2000);
     return () => clearTimeout(handle);
   }, []);
   if (state.library) return <LoadedToaster library={state.library} />;
-  if (!state.wanted) return null;
   return <PlainToasts messages={state.pending} />;
 }
