@@ -55,9 +55,10 @@ export async function readingResult(db: Database, readingId: string): Promise<Di
 
 /**
  * The charge estimate of a circuit's last reading taken before `before` that counts and carries
- * one (equal times: the later stored), or null. Read from the end of readings_visit_idx, so it
- * costs one row however long the run log; the report sets it beside what the scale found on
- * the circuit's first recovery.
+ * one (equal times: the later stored), or null. Walks readings_visit_idx back from `before` and
+ * stops at the first reading with an estimate (usually the first it meets), so its cost does not
+ * grow with the readings after it; the report sets it beside what the scale found on the
+ * circuit's first recovery.
  */
 export async function chargeEstimateBefore(db: Database, visitId: string, circuit: number, before: Date): Promise<ChargeDeviation | null> {
   const deviation = sql<ChargeDeviation | null>`${readings.result} -> 'chargeDeviation'`;
