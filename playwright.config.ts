@@ -18,6 +18,9 @@ export default defineConfig({
     baseURL: `http://127.0.0.1:${PORT}`,
     trace: "retain-on-failure",
     screenshot: "only-on-failure",
+    // The app's service worker answers requests before page.route sees them, so specs that
+    // intercept the network run without it; the offline specs turn it on.
+    serviceWorkers: "block",
     launchOptions: {
       executablePath: CHROMIUM_PATH,
       args: [

@@ -1,7 +1,9 @@
 import { fileURLToPath } from "node:url";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
+import { VitePWA } from "vite-plugin-pwa";
 import { defineConfig } from "vitest/config";
+import { TABLE_CACHE, TABLE_URL } from "./src/features/offline/table-cache.ts";
 
 const fromRoot = (path: string) => fileURLToPath(new URL(path, import.meta.url));
 
@@ -62,8 +64,53 @@ const chunkGroups = [
   },
 ];
 
+/**
+ * The installable app (decision 026). Workbox precaches the shell: every script, stylesheet,
+ * font and the icon, so that the app starts with no network. The refrigerant tables are left
+ * out of the precache (31 saturation and 31 single-phase tables, several megabytes that a phone
+ * on a roof should not fetch for refrigerants it never meets); they are cached when first loaded
+ * and warmed for the refrigerants of the technician's own equipment
+ * (src/features/offline/warm-refrigerant-tables.ts). The API is never cached by the service
+ * worker: data kept for offline use lives in the app's own store. A navigation under /api/ (a
+ * photo, a CSV export) goes to the network, never to the app's page.
+ */
+const installableApp = VitePWA({
+  strategies: "generateSW",
+  registerType: "prompt",
+  // Registered from the app, on idle, by src/features/offline/service-worker.ts.
+  injectRegister: false,
+  manifest: {
+    name: "Satura",
+    short_name: "Satura",
+    description: "Saturation, superheat, subcooling and the service record for refrigeration and air-conditioning technicians.",
+    lang: "en-AU",
+    start_url: "/",
+    scope: "/",
+    display: "standalone",
+    background_color: "#f4efe4",
+    theme_color: "#f4efe4",
+    icons: [{ src: "/satura-mark.svg", sizes: "any", type: "image/svg+xml", purpose: "any" }],
+  },
+  workbox: {
+    globPatterns: ["**/*.{js,css,html,woff2,svg}"],
+    // Latin and Latin Extended cover the app's text; the other subsets of the fonts are fetched
+    // only if a page shows such a character, and fall back to the system font offline.
+    globIgnores: ["**/assets/refrigerant-*.js", "**/assets/single-phase-*.js", "**/assets/*-{cyrillic,cyrillic-ext,greek,vietnamese}-*.woff2"],
+    navigateFallback: "/index.html",
+    navigateFallbackDenylist: [/^\/api\//],
+    cleanupOutdatedCaches: true,
+    runtimeCaching: [
+      {
+        urlPattern: TABLE_URL,
+        handler: "CacheFirst",
+        options: { cacheName: TABLE_CACHE },
+      },
+    ],
+  },
+});
+
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [react(), tailwindcss(), installableApp],
   // convert-units 2.x pulls lodash modules that read `global` (STACK.md gotcha 3).
   define: { global: "globalThis" },
   resolve: {

@@ -133,7 +133,17 @@ export function createApp(deps: AppDeps): Express {
   } else if (existsSync(distFolder)) {
     // Hashed asset names change with content, so they can be cached for a year.
     app.use("/assets", express.static(`${distFolder}/assets`, { immutable: true, maxAge: "1y", index: false }));
-    app.use(express.static(distFolder, { index: false, maxAge: "1h" }));
+    app.use(
+      express.static(distFolder, {
+        index: false,
+        maxAge: "1h",
+        // The service worker and the manifest keep their names from one version to the next: the
+        // browser must ask each time, or a deployed fix would wait an hour to reach the devices.
+        setHeaders: (res, file) => {
+          if (/[\\/](sw\.js|manifest\.webmanifest)$/.test(file)) res.setHeader("Cache-Control", "no-cache");
+        },
+      }),
+    );
     app.get("/{*splat}", (_req, res) => {
       res.setHeader("Cache-Control", "no-cache");
       res.sendFile(`${distFolder}/index.html`);

@@ -4,6 +4,7 @@ import { RouterProvider } from "react-router-dom";
 import "./styles/app.css";
 import { applyTheme, readTheme } from "./features/theme/theme-store.ts";
 import { startFirstRequests } from "./lib/api/first-requests.ts";
+import { registerServiceWorker } from "./features/offline/service-worker.ts";
 import { createQueryClient } from "./lib/api/query-client.ts";
 import { AppProviders } from "./providers.tsx";
 import { createRouter } from "./router.tsx";
@@ -23,3 +24,5 @@ createRoot(document.getElementById("root")!).render(
     </AppProviders>
   </StrictMode>,
 );
+
+registerServiceWorker();

@@ -54,6 +54,7 @@ export const ROUTE_PERMISSIONS = {
   "POST /api/sites": PERMISSIONS.writeRecords,
   "GET /api/equipment": SIGNED_IN,
   "POST /api/equipment": PERMISSIONS.writeRecords,
+  "GET /api/equipment/refrigerants": SIGNED_IN,
   "GET /api/equipment/:id": SIGNED_IN,
   "GET /api/equipment/:id/refrigerant": SIGNED_IN,
   "GET /api/equipment/:id/charge-references": SIGNED_IN,

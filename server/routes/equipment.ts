@@ -1,6 +1,7 @@
 import { Router } from "express";
 import { CustomerInputSchema, EquipmentInputSchema, SiteInputSchema } from "@shared/schemas/equipment.ts";
 import type { EquipmentDetail } from "@shared/schemas/equipment-detail.ts";
+import type { RefrigerantsInUse } from "@shared/schemas/refrigerants-in-use.ts";
 import { EquipmentListQuerySchema } from "@shared/schemas/list-pages.ts";
 import { getAuth } from "../auth/session.ts";
 import {
@@ -13,6 +14,7 @@ import {
   listSites,
   type EquipmentRow,
 } from "../db/equipment.ts";
+import { refrigerantsInUse } from "../db/refrigerants-in-use.ts";
 import { listVisits } from "../db/visits.ts";
 import { lastSettledStates } from "../equipment/last-settled-states.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
@@ -64,6 +66,11 @@ export function equipmentRouter({ db }: Deps): Router {
     const created = await createEquipment(db, getAuth(res).organisationId, values);
     if (!created) throw new HttpError(400, "Some fields need attention", { siteId: "Choose one of your sites" });
     res.status(201).json({ equipment: toEquipment(created) });
+  });
+
+  // Before "/:id": the refrigerants a device keeps the tables of for offline use.
+  router.get("/refrigerants", async (_req, res) => {
+    res.json({ refrigerants: await refrigerantsInUse(db, getAuth(res).organisationId) } satisfies RefrigerantsInUse);
   });
 
   router.get("/:id", async (req, res) => {

@@ -8,6 +8,7 @@ import { SunlightToggle } from "@/features/theme/components/sunlight-toggle.tsx"
 import { useMe } from "@/lib/api/auth.ts";
 import { useOutboxAvailable } from "@/lib/api/outbox.ts";
 import { useHealth } from "@/lib/api/health.ts";
+import { useOfflineTables } from "@/features/offline/use-offline-tables.ts";
 import { cn } from "@/lib/cn.ts";
 
 function ServerStatus() {
@@ -32,6 +33,7 @@ export function AppShell() {
   const role = me.data?.role ?? "apprentice";
   const outbox = useOutboxAvailable(role === "owner");
   const navigation = navigationFor(role, { outbox: outbox.data === true });
+  useOfflineTables();
   // The session ended while the app was open (expired, signed out elsewhere, member removed).
   if (me.isSuccess && me.data === null) return <Navigate to={paths.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
   return (

@@ -12,6 +12,7 @@ import {
   type Site,
   type SiteInput,
 } from "@shared/schemas/equipment.ts";
+import { RefrigerantsInUseSchema } from "@shared/schemas/refrigerants-in-use.ts";
 import { EquipmentPageSchema, type EquipmentListParams, type EquipmentPage } from "@shared/schemas/list-pages.ts";
 import { apiRequest } from "./api-client.ts";
 import { listQueryString } from "./list-params.ts";
@@ -96,4 +97,9 @@ export function useCreateSite() {
     mutationFn: createSite,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ["sites"] }),
   });
+}
+
+/** The refrigerants of the company's units in use: the property tables a device keeps for offline use. */
+export async function getRefrigerantsInUse(signal?: AbortSignal): Promise<string[]> {
+  return (await apiRequest("/equipment/refrigerants", { schema: RefrigerantsInUseSchema, signal })).refrigerants;
 }

@@ -1,0 +1,32 @@
+import { offerUpdate } from "./app-update.ts";
+
+/** How often an open app asks the server whether a new version was deployed. */
+const UPDATE_CHECK_MS = 60 * 60 * 1000;
+
+/**
+ * Registers the service worker that keeps the app's shell on the device (vite.config.ts,
+ * `installableApp`), once the first screen is drawn and the browser is idle: the worker's
+ * first install fetches the whole shell, which must not compete with the screen's own
+ * requests. Production builds only; the development server has no worker.
+ *
+ * A new version is never forced on a technician mid-visit: it waits until they choose to
+ * reload from the banner (the typed values are kept on the device by the drafts).
+ */
+export function registerServiceWorker(): void {
+  if (!import.meta.env.PROD || !("serviceWorker" in navigator)) return;
+  const register = () => {
+    void import("virtual:pwa-register").then(({ registerSW }) => {
+      const updateServiceWorker = registerSW({
+        onNeedRefresh: () => offerUpdate({ apply: () => updateServiceWorker(true) }),
+        onRegisteredSW: (_url, registration) => {
+          if (!registration) return;
+          setInterval(() => {
+            if (navigator.onLine) void registration.update().catch(() => undefined);
+          }, UPDATE_CHECK_MS);
+        },
+      });
+    });
+  };
+  if ("requestIdleCallback" in window) requestIdleCallback(register, { timeout: 5000 });
+  else setTimeout(register, 2000);
+}
