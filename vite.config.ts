@@ -112,7 +112,9 @@ const installableApp = VitePWA({
 export default defineConfig({
   plugins: [react(), tailwindcss(), installableApp],
   // convert-units 2.x pulls lodash modules that read `global` (STACK.md gotcha 3).
-  define: { global: "globalThis" },
+  // __SATURA_BUILD__: the build's identity, so that data kept on a device (src/features/offline/
+  // persist-queries.ts) is read only by the screens that wrote it.
+  define: { global: "globalThis", __SATURA_BUILD__: JSON.stringify(Date.now().toString(36)) },
   resolve: {
     alias: {
       "@/": fromRoot("./src/"),

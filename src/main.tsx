@@ -4,6 +4,7 @@ import { RouterProvider } from "react-router-dom";
 import "./styles/app.css";
 import { applyTheme, readTheme } from "./features/theme/theme-store.ts";
 import { startFirstRequests } from "./lib/api/first-requests.ts";
+import { keepDataOnDevice, restoreKeptData } from "./features/offline/persist-queries.ts";
 import { registerServiceWorker } from "./features/offline/service-worker.ts";
 import { createQueryClient } from "./lib/api/query-client.ts";
 import { AppProviders } from "./providers.tsx";
@@ -13,8 +14,11 @@ import { createRouter } from "./router.tsx";
 applyTheme(readTheme());
 
 const queryClient = createQueryClient();
+// The data kept on the device comes back while the scripts download; the session loader waits
+// for it, so a screen opened without signal finds its visit. Then each change is kept again.
+void restoreKeptData(queryClient).then(() => keepDataOnDevice(queryClient));
 // The screen's data goes out before the router asks for the screen's scripts.
-startFirstRequests(queryClient, window.location.pathname);
+if (navigator.onLine) startFirstRequests(queryClient, window.location.pathname);
 const router = createRouter(queryClient);
 
 createRoot(document.getElementById("root")!).render(

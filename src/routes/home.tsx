@@ -8,13 +8,10 @@ import { QuickStartVisit } from "@/features/jobs/components/quick-start-visit.ts
 import { ResumeVisit } from "@/features/jobs/components/resume-visit.tsx";
 import { visitToResume } from "@/features/jobs/utils/visit-to-resume.ts";
 import { useMe } from "@/lib/api/auth.ts";
-import { useVisits } from "@/lib/api/visits.ts";
+import { MY_OPEN_VISITS, OPEN_VISITS_FIRST_PAGE, useVisits } from "@/lib/api/visits.ts";
 
 /** Today lists a short first page of each kind; the jobs page holds the rest. */
 const SHORT_LIST = 10;
-/** The visits one person is on the crew of and still open: few, so one page holds them all. */
-const OWN_OPEN_VISITS = 50;
-const IN_PROGRESS = "open,sent-back";
 
 function VisitLinks({ title, visits, empty, more }: { title: string; visits: VisitSummary[] | undefined; empty: string; more: { shown: boolean; href: string } }) {
   return (
@@ -53,9 +50,9 @@ function VisitLinks({ title, visits, empty, more }: { title: string; visits: Vis
 
 export default function HomeRoute() {
   const me = useMe();
-  const inProgress = useVisits({ status: IN_PROGRESS, limit: SHORT_LIST });
+  const inProgress = useVisits(OPEN_VISITS_FIRST_PAGE);
   // The visit to resume is among those the person is on the crew of (they join it by recording).
-  const own = useVisits({ status: IN_PROGRESS, crew: "me", limit: OWN_OPEN_VISITS });
+  const own = useVisits(MY_OPEN_VISITS);
   const reviewer = me.data ? can(me.data.role, "signOff") : false;
   const awaiting = useVisits({ status: "awaiting-review", limit: SHORT_LIST }, { enabled: reviewer });
   const resume = own.data ? visitToResume(own.data.visits) : null;

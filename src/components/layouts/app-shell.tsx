@@ -4,11 +4,12 @@ import { Link, Navigate, Outlet, useLocation, useNavigation } from "react-router
 import { isNavItemActive, navigationFor, type NavItem } from "@/config/navigation.ts";
 import { paths } from "@/config/paths.ts";
 import { UserMenu } from "@/features/auth/components/user-menu.tsx";
+import { useDayOnDevice } from "@/features/offline/use-day-on-device.ts";
+import { useOfflineTables } from "@/features/offline/use-offline-tables.ts";
 import { SunlightToggle } from "@/features/theme/components/sunlight-toggle.tsx";
 import { useMe } from "@/lib/api/auth.ts";
 import { useOutboxAvailable } from "@/lib/api/outbox.ts";
 import { useHealth } from "@/lib/api/health.ts";
-import { useOfflineTables } from "@/features/offline/use-offline-tables.ts";
 import { cn } from "@/lib/cn.ts";
 
 function ServerStatus() {
@@ -34,6 +35,7 @@ export function AppShell() {
   const outbox = useOutboxAvailable(role === "owner");
   const navigation = navigationFor(role, { outbox: outbox.data === true });
   useOfflineTables();
+  useDayOnDevice();
   // The session ended while the app was open (expired, signed out elsewhere, member removed).
   if (me.isSuccess && me.data === null) return <Navigate to={paths.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
   return (

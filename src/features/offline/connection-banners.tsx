@@ -19,11 +19,15 @@ export function ConnectionBanners() {
     <div className="no-print sticky top-0 z-40">
       {!online && (
         <p role="status" className="border-b-2 border-caution bg-surface px-4 py-2 text-sm font-medium">
-          <span aria-hidden>⚠ </span>Offline. The app and what you type stay on this device; entries are saved when the signal returns.
+          <span aria-hidden>⚠ </span>Offline. Visits kept on this device open as usual; saving needs the signal, and
+          what you type stays here until then.
         </p>
       )}
       {showUpdate && (
-        <div role="status" className="flex flex-wrap items-center gap-3 border-b-2 border-rule bg-surface px-4 py-2 text-sm">
+        <div
+          role="status"
+          className="flex flex-wrap items-center gap-3 border-b-2 border-rule bg-surface px-4 py-2 text-sm"
+        >
           <span className="font-medium">A new version of Satura is ready.</span>
           <span className="text-muted">What you have typed is kept.</span>
           <span className="ml-auto flex gap-2">

@@ -1,4 +1,5 @@
 import { offerUpdate } from "./app-update.ts";
+import { whenIdle } from "./when-idle.ts";
 
 /** How often an open app asks the server whether a new version was deployed. */
 const UPDATE_CHECK_MS = 60 * 60 * 1000;
@@ -27,6 +28,5 @@ export function registerServiceWorker(): void {
       });
     });
   };
-  if ("requestIdleCallback" in window) requestIdleCallback(register, { timeout: 5000 });
-  else setTimeout(register, 2000);
+  whenIdle(register, 5000);
 }

@@ -1,6 +1,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { useEffect } from "react";
 import { getRefrigerantsInUse } from "@/lib/api/equipment.ts";
+import { whenIdle } from "./when-idle.ts";
 
 /**
  * Once per start of the signed-in app, when the browser is idle and online: the property tables
@@ -18,12 +19,9 @@ export function useOfflineTables(): void {
   const ids = refrigerants.data;
   useEffect(() => {
     if (!ids || ids.length === 0) return;
-    const warm = () => void import("./warm-refrigerant-tables.ts").then(({ warmRefrigerantTables }) => warmRefrigerantTables(ids));
-    if ("requestIdleCallback" in window) {
-      const handle = requestIdleCallback(warm, { timeout: 10_000 });
-      return () => cancelIdleCallback(handle);
-    }
-    const handle = setTimeout(warm, 3000);
-    return () => clearTimeout(handle);
+    return whenIdle(
+      () => void import("./warm-refrigerant-tables.ts").then(({ warmRefrigerantTables }) => warmRefrigerantTables(ids)),
+      10_000,
+    );
   }, [ids]);
 }

@@ -55,6 +55,9 @@ export const meQueryOptions = () =>
     queryKey: ["auth", "me"],
     queryFn: ({ signal }) => getMe(signal),
     staleTime: 5 * 60_000,
+    // Asked even offline, so that a start without signal and without data kept on the device
+    // fails at once with "No connection" instead of waiting for the network with a blank page.
+    networkMode: "always",
   });
 
 export const useMe = () => useQuery(meQueryOptions());

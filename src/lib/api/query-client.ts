@@ -16,7 +16,8 @@ export function createQueryClient(): QueryClient {
   return new QueryClient({
     queryCache: new QueryCache({
       onError: (error, query) => {
-        if (query.state.data !== undefined) toastError(`Could not refresh: ${error.message}`);
+        // Offline, the bar at the top already says so; the screen keeps what it shows.
+        if (query.state.data !== undefined && (typeof navigator === "undefined" || navigator.onLine)) toastError(`Could not refresh: ${error.message}`);
       },
     }),
     mutationCache: new MutationCache({

@@ -116,6 +116,12 @@ export function sendReport({ visitId, to }: { visitId: string; to: string }): Pr
   return apiRequest(`/visits/${visitId}/report/send`, { method: "POST", body: { to, timeZone: viewerTimeZone() }, schema: z.object({ sentTo: z.string() }) });
 }
 
+const IN_PROGRESS = "open,sent-back";
+/** Today's first list: the company's visits still open, a short first page (the jobs page holds the rest). */
+export const OPEN_VISITS_FIRST_PAGE: VisitListParams = { status: IN_PROGRESS, limit: 10 };
+/** The visits one person is on the crew of and still open: few, so one page holds them all. */
+export const MY_OPEN_VISITS: VisitListParams = { status: IN_PROGRESS, crew: "me", limit: 50 };
+
 /** The key holds every parameter, cursor included: each page of each order is its own entry. */
 export const visitsQueryOptions = (params: VisitListParams = {}) =>
   queryOptions({ queryKey: ["visits", "list", params], queryFn: ({ signal }) => getVisits(params, signal) });

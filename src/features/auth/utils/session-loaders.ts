@@ -1,6 +1,7 @@
 import type { QueryClient } from "@tanstack/react-query";
 import { redirect, type LoaderFunctionArgs } from "react-router-dom";
 import { paths } from "@/config/paths.ts";
+import { keptDataRestored } from "@/features/offline/persist-queries.ts";
 import { meQueryOptions } from "@/lib/api/auth.ts";
 
 /**
@@ -9,6 +10,8 @@ import { meQueryOptions } from "@/lib/api/auth.ts";
  */
 export function requireSessionLoader(queryClient: QueryClient) {
   return async ({ request }: LoaderFunctionArgs) => {
+    // Offline, who is signed in comes from the data kept on the device (or nowhere).
+    await keptDataRestored();
     const user = await queryClient.ensureQueryData(meQueryOptions());
     if (!user) {
       const url = new URL(request.url);
@@ -21,6 +24,7 @@ export function requireSessionLoader(queryClient: QueryClient) {
 /** Loader of sign-in and sign-up: someone already signed in goes straight to the app. */
 export function redirectIfSignedInLoader(queryClient: QueryClient) {
   return async () => {
+    await keptDataRestored();
     const user = await queryClient.ensureQueryData(meQueryOptions()).catch(() => null);
     if (user) throw redirect(paths.home.getHref());
     return null;

@@ -1,0 +1,31 @@
+import { chromium } from "playwright-core";
+import { CHROMIUM_PATH } from "./scripts/chromium-path.mjs";
+const base = "http://127.0.0.1:3341";
+const browser = await chromium.launch({ executablePath: CHROMIUM_PATH, args: ["--headless", "--no-sandbox", "--disable-gpu"] });
+const context = await browser.newContext({ viewport: { width: 390, height: 844 }, serviceWorkers: "allow" });
+const page = await context.newPage();
+page.on("console", (m) => console.log("console:", m.type(), m.text().slice(0, 200)));
+page.on("pageerror", (e) => console.log("pageerror", e.message));
+await page.goto(base + "/");
+await page.getByLabel("E-mail").fill("tech@bellbird.example");
+await page.getByLabel("Password", { exact: true }).fill("bellbird-demo-2026");
+await page.getByRole("button", { name: "Sign in" }).click();
+await page.getByRole("heading", { name: "Today" }).waitFor();
+const keys = () => page.evaluate(() => new Promise<string[]>((resolve) => {
+  const r = indexedDB.open("satura-device-cache", 1);
+  r.onsuccess = () => { const g = r.result.transaction("kept").objectStore("kept").get("queries"); g.onsuccess = () => resolve(g.result ? g.result.state.queries.map((q: any) => JSON.stringify(q.queryKey)) : []); };
+  r.onerror = () => resolve(["err"]);
+}));
+for (let i = 0; i < 15; i++) { const k = await keys(); console.log(i, k.length, k.join(" ").slice(0, 800)); if (k.some((x) => x.includes("register"))) break; await page.waitForTimeout(1000); }
+await page.waitForTimeout(3000);
+await context.setOffline(true);
+await page.reload();
+await page.waitForTimeout(2000);
+await page.screenshot({ path: "/tmp/offline-today2.png" });
+console.log("TODAY:", (await page.locator("main").innerText()).slice(0, 700));
+const link = page.getByRole("link", { name: /split/i }).first();
+await link.click();
+await page.waitForTimeout(3000);
+await page.screenshot({ path: "/tmp/offline-visit.png" });
+console.log("VISIT:", page.url(), (await page.locator("main").innerText()).slice(0, 900));
+await browser.close();

@@ -1,0 +1,164 @@
+import { expect, test, type Page } from "@playwright/test";
+import { signIn, signOut } from "./sign-in.ts";
+
+/**
+ * The installed app starts without a network: the service worker holds the shell (scripts,
+ * styles, fonts) and the property tables of the refrigerants in the company's units, which the
+ * app fetches once it is signed in and idle; the visits of the day and their units are kept on
+ * the device. The demo company's units use R32, R404A and R407C (server/db/seed/demo-scenario.ts).
+ */
+test.use({ serviceWorkers: "allow", viewport: { width: 390, height: 844 } });
+
+const TABLES_OF_THE_DEMO_UNITS = ["R32", "R404A", "R407C"];
+
+/** The file names in the worker's table cache, e.g. "refrigerant-R32-DlsBzkk6.js". */
+function cachedTables(page: Page): Promise<string[]> {
+  return page.evaluate(async () => {
+    const cache = await caches.open("satura-refrigerant-tables");
+    return (await cache.keys()).map((request) => new URL(request.url).pathname.split("/").pop()!);
+  });
+}
+
+/** The data kept on the device (src/features/offline/device-cache.ts): each query's key and data. */
+function keptQueries(page: Page): Promise<{ key: string; data: unknown }[]> {
+  return page.evaluate(
+    () =>
+      new Promise<{ key: string; data: unknown }[]>((resolve, reject) => {
+        const open = indexedDB.open("satura-device-cache", 1);
+        open.onerror = () => reject(open.error);
+        open.onsuccess = () => {
+          const get = open.result.transaction("kept").objectStore("kept").get("queries");
+          get.onsuccess = () =>
+            resolve(
+              ((get.result?.state.queries ?? []) as { queryKey: unknown; state: { data: unknown } }[]).map((query) => ({
+                key: JSON.stringify(query.queryKey),
+                data: query.state.data,
+              })),
+            );
+        };
+      }),
+  );
+}
+
+const keptQueryKeys = async (page: Page) => (await keptQueries(page)).map((query) => query.key);
+
+test("the shell and the tables of the company's refrigerants open with no network", async ({ page, context }) => {
+  await page.goto("/");
+  await signIn(page, "tech@bellbird.example");
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  expect(await page.evaluate(async () => Boolean((await navigator.serviceWorker.ready).active))).toBe(true);
+
+  // Both tables of each refrigerant: saturation (the run log's figures) and single phase (the cycle).
+  const expected = TABLES_OF_THE_DEMO_UNITS.flatMap((id) => [`refrigerant-${id}-`, `single-phase-${id}-`]);
+  await expect
+    .poll(
+      async () => {
+        const held = await cachedTables(page);
+        return expected.filter((prefix) => !held.some((name) => name.startsWith(prefix)));
+      },
+      { timeout: 30_000 },
+    )
+    .toEqual([]);
+  await expect
+    .poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["auth", "me"])), { timeout: 10_000 })
+    .toBe(true);
+
+  await context.setOffline(true);
+  await page.reload();
+  // The page came from the worker, not the browser's "no internet" page, says it is offline, and
+  // Today opens from the data kept on the device.
+  await expect(page.getByRole("status").filter({ hasText: "Offline." })).toBeVisible();
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+
+  // Every cached table is served with no network, through the worker.
+  const tables = await cachedTables(page);
+  const statuses = await page.evaluate(
+    (names) => Promise.all(names.map(async (name) => (await fetch(`/assets/${name}`)).status)),
+    tables,
+  );
+  expect(statuses.every((status) => status === 200)).toBe(true);
+
+  await context.setOffline(false);
+  await expect(page.getByRole("status").filter({ hasText: "Offline." })).toBeHidden();
+});
+
+test("a visit of the day opens with no network, and the finding works out as values are typed", async ({
+  page,
+  context,
+}) => {
+  await page.goto("/equipment");
+  await signIn(page, "tech@bellbird.example");
+  await page
+    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+    .first()
+    .click();
+  await page.getByLabel("Reason for the visit").fill("Offline check on the roof");
+  await page.getByRole("button", { name: "Start the visit" }).click();
+  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+  const visitId = new URL(page.url()).pathname.split("/").pop()!;
+  await page.getByRole("link", { name: "Today" }).first().click();
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+
+  // Kept while there is signal: the visit, its unit and its refrigerant balance.
+  await expect
+    .poll(
+      async () => {
+        const keys = await keptQueryKeys(page);
+        return ["visits", "register"].every((kind) =>
+          keys.includes(JSON.stringify([kind, kind === "visits" ? "detail" : "visit", visitId])),
+        );
+      },
+      { timeout: 30_000 },
+    )
+    .toBe(true);
+  await expect
+    .poll(async () => (await cachedTables(page)).some((name) => name.startsWith("refrigerant-R407C-")), {
+      timeout: 30_000,
+    })
+    .toBe(true);
+
+  await context.setOffline(true);
+  await page.reload();
+  await expect(page.getByRole("status").filter({ hasText: "Offline." })).toBeVisible();
+  await page
+    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+    .first()
+    .click();
+  await expect(page.getByRole("heading", { name: /RTU-1/ })).toBeVisible();
+
+  // R407C at the demo clinic (run-log.spec.ts): suction dew 1 °C at 377 kPa, liquid bubble 38 °C
+  // at 1565 kPa; lines at 13 °C and 37 °C give 12 K superheat and 1 K subcooling, on the device.
+  await page.getByLabel("Suction pressure", { exact: true }).fill("377");
+  await page.getByLabel("Suction line temperature", { exact: true }).fill("13");
+  await page.getByLabel("Liquid pressure", { exact: true }).fill("1565");
+  await page.getByLabel("Line temperature for subcooling", { exact: true }).fill("37");
+  await expect(page.getByTestId("superheat")).toHaveText("12.0");
+  await expect(page.getByTestId("subcooling")).toHaveText("1.0");
+});
+
+test("signing out deletes the data kept on the device; the next person keeps only their own", async ({ page }) => {
+  await page.goto("/");
+  await signIn(page, "tech@bellbird.example");
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  await expect
+    .poll(async () => (await keptQueryKeys(page)).some((key) => key.startsWith('["visits","detail"')), {
+      timeout: 30_000,
+    })
+    .toBe(true);
+
+  await signOut(page);
+  await expect.poll(() => keptQueryKeys(page), { timeout: 10_000 }).toEqual([]);
+
+  await signIn(page, "senior@bellbird.example");
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  await expect
+    .poll(
+      async () =>
+        (
+          (await keptQueries(page)).find((query) => query.key === JSON.stringify(["auth", "me"]))?.data as
+            { email?: string } | undefined
+        )?.email,
+      { timeout: 10_000 },
+    )
+    .toBe("senior@bellbird.example");
+});
