@@ -32,7 +32,8 @@ const { values } = parseArgs({
   options: {
     dir: { type: "string", default: "data/large" },
     seconds: { type: "string", default: "5" },
-    only: { type: "string" },
+    // Repeatable: routes whose name contains any of them (`--only "jobs list" --only "equipment list"`).
+    only: { type: "string", multiple: true },
     "skip-demo": { type: "boolean", default: false },
     "cpu-prof": { type: "string" },
   },
@@ -48,9 +49,10 @@ if (!existsSync(values.dir)) {
 const EMAILS: Record<Person, string> = { tech: "tech@bellbird.example", senior: "senior@bellbird.example", owner: "owner@bellbird.example" };
 const ms = (value: number) => (Number.isFinite(value) ? value.toFixed(value < 10 ? 1 : 0) : "–");
 const mb = (bytes: number) => `${(bytes / 1_048_576).toFixed(0)} MB`;
-const selected = (route: BenchRoute) => !values.only || route.name.includes(values.only);
+const nameSelected = (name: string) => !values.only || values.only.some((part) => name.includes(part));
+const selected = (route: BenchRoute) => nameSelected(route.name);
 const SAVE_ROUTE = "save a reading (POST readings)";
-const savingSelected = !values.only || SAVE_ROUTE.includes(values.only);
+const savingSelected = nameSelected(SAVE_ROUTE);
 const nodeArgs = values["cpu-prof"] ? ["--cpu-prof", "--cpu-prof-dir", resolve(values["cpu-prof"])] : [];
 /** Open visits the saves of the demo-size database spread over. */
 const DEMO_OPEN_VISITS = 12;
