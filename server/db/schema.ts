@@ -287,6 +287,13 @@ export const visits = pgTable(
      * lock), so it orders the visit's writes: the detail's ETag and the `since` of a delta.
      */
     revision: integer("revision").notNull().default(0),
+    /**
+     * The visit's readings that count in results (records, not voided: countsInResults in
+     * server/db/visits.ts), so a list shows it without reading a logger's thousands of rows.
+     * Kept by triggers on readings' inserts, updates (void, import commit) and deletes, never
+     * written by the app. Migration visit_reading_count.
+     */
+    readingCount: integer("reading_count").notNull().default(0),
     ...timestamps,
   },
   (table) => [
@@ -312,6 +319,26 @@ export const visitTechnicians = pgTable(
   },
   // By person too: a search word naming someone finds their visits (server/db/visits.ts).
   (table) => [primaryKey({ columns: [table.visitId, table.userId] }), index("visit_technicians_user_idx").on(table.userId, table.visitId)],
+);
+
+/**
+ * When each person last recorded a reading on a visit (the latest created_at of their readings
+ * that are records, voided ones included): the jobs list's "you last worked on it", read per
+ * page row without reading the visit's readings. One row per visit and recorder, kept by the
+ * same triggers as visits.reading_count (migration visit_reading_count), never written by the app.
+ */
+export const visitReadingRecorders = pgTable(
+  "visit_reading_recorders",
+  {
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    lastRecordedAt: timestamp("last_recorded_at", { withTimezone: true, mode: "date" }).notNull(),
+  },
+  (table) => [primaryKey({ columns: [table.visitId, table.userId] })],
 );
 
 /**
