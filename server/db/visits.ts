@@ -61,10 +61,10 @@ type SummaryExtra = Pick<VisitSummary, "readingCount" | "technicians" | "yourLas
  */
 async function lastActivityOf(db: Database, viewerId: string, ids: string[]): Promise<Map<string, Date>> {
   const rows = await unionAll(
-    db.select({ visitId: visitReadingRecorders.visitId, at: visitReadingRecorders.lastRecordedAt }).from(visitReadingRecorders).where(and(inArray(visitReadingRecorders.visitId, ids), eq(visitReadingRecorders.userId, viewerId))),
     db.select({ visitId: adjustments.visitId, at: max(adjustments.createdAt) }).from(adjustments).where(and(inArray(adjustments.visitId, ids), eq(adjustments.recordedBy, viewerId))).groupBy(adjustments.visitId),
     db.select({ visitId: visitComments.visitId, at: max(visitComments.createdAt) }).from(visitComments).where(and(inArray(visitComments.visitId, ids), eq(visitComments.authorId, viewerId))).groupBy(visitComments.visitId),
     db.select({ visitId: visitEvents.visitId, at: max(visitEvents.at) }).from(visitEvents).where(and(inArray(visitEvents.visitId, ids), eq(visitEvents.actorId, viewerId))).groupBy(visitEvents.visitId),
+    db.select({ visitId: visitReadingRecorders.visitId, at: visitReadingRecorders.lastRecordedAt }).from(visitReadingRecorders).where(and(inArray(visitReadingRecorders.visitId, ids), eq(visitReadingRecorders.userId, viewerId))),
   );
   const latest = new Map<string, Date>();
   for (const row of rows) {
