@@ -5,12 +5,16 @@ CREATE TABLE "visit_reading_recorders" (
 	CONSTRAINT "visit_reading_recorders_visit_id_user_id_pk" PRIMARY KEY("visit_id","user_id")
 );
 --> statement-breakpoint
+ALTER TABLE "equipment" ADD COLUMN "site_sort_name" text DEFAULT '' NOT NULL;--> statement-breakpoint
+ALTER TABLE "equipment" ADD COLUMN "customer_sort_name" text DEFAULT '' NOT NULL;--> statement-breakpoint
 ALTER TABLE "visits" ADD COLUMN "reading_count" integer DEFAULT 0 NOT NULL;--> statement-breakpoint
 ALTER TABLE "visit_reading_recorders" ADD CONSTRAINT "visit_reading_recorders_visit_id_visits_id_fk" FOREIGN KEY ("visit_id") REFERENCES "public"."visits"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "visit_reading_recorders" ADD CONSTRAINT "visit_reading_recorders_user_id_users_id_fk" FOREIGN KEY ("user_id") REFERENCES "public"."users"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+CREATE INDEX "equipment_organisation_place_idx" ON "equipment" USING btree ("organisation_id","site_sort_name","customer_sort_name",lower("name"),"id") WHERE NOT "equipment"."archived";--> statement-breakpoint
+CREATE INDEX "visits_organisation_status_started_idx" ON "visits" USING btree ("organisation_id","status","started_at");--> statement-breakpoint
 -- ============================================================================================
--- Hand-written (visit_reading_count): the lists' per-visit reading figures kept by triggers, and
--- their backfill. Nothing above this block depends on it.
+-- Hand-written (visit_reading_count): the lists' per-visit reading figures and the equipment
+-- list's place names, kept by triggers, and their backfill. Nothing above this block depends on it.
 -- ============================================================================================
 -- A reading counts when it is a record (not a row a CSV import is still staging) and not voided,
 -- as countsInResults in server/db/visits.ts; a recorder's latest time counts every record, voided
@@ -96,4 +100,17 @@ CREATE TRIGGER "readings_inserted_figures" AFTER INSERT ON "readings" REFERENCIN
 CREATE TRIGGER "readings_updated_figures" AFTER UPDATE ON "readings" REFERENCING OLD TABLE AS old_readings NEW TABLE AS new_readings
   FOR EACH STATEMENT EXECUTE FUNCTION "readings_updated_figures"();--> statement-breakpoint
 CREATE TRIGGER "readings_deleted_figures" AFTER DELETE ON "readings" REFERENCING OLD TABLE AS old_readings
-  FOR EACH STATEMENT EXECUTE FUNCTION "readings_deleted_figures"();
+  FOR EACH STATEMENT EXECUTE FUNCTION "readings_deleted_figures"();--> statement-breakpoint
+-- The equipment list's "Place" sort keys, written beside the search text by the trigger that
+-- already reads the unit's site and customer (migration list_search), so a site's or customer's
+-- rename, which works that text out again, rewrites them too.
+CREATE OR REPLACE FUNCTION "equipment_fill_search_text"() RETURNS trigger LANGUAGE plpgsql AS $$
+BEGIN
+  SELECT search_compact(concat_ws(' ', NEW.name, NEW.kind, s.name, c.name, NEW.refrigerant, NEW.location, NEW.maker, NEW.model, NEW.serial)), lower(s.name), lower(c.name)
+    INTO NEW.search_text, NEW.site_sort_name, NEW.customer_sort_name
+    FROM sites s JOIN customers c ON c.id = s.customer_id WHERE s.id = NEW.site_id;
+  RETURN NEW;
+END;
+$$;--> statement-breakpoint
+UPDATE equipment e SET site_sort_name = lower(s.name), customer_sort_name = lower(c.name)
+  FROM sites s JOIN customers c ON c.id = s.customer_id WHERE s.id = e.site_id;

@@ -247,6 +247,14 @@ export const equipment = pgTable(
      * rename), never by the app; searched through a trigram index. Migration list_search.
      */
     searchText: text("search_text").notNull().default(""),
+    /**
+     * lower() of the unit's site and customer names: the list's "Place" sort, read in index order
+     * (equipment_organisation_place_idx) rather than joining and sorting every unit. Written by the
+     * same trigger as searchText, on every change and on a site's or customer's rename, never by
+     * the app. Migration visit_reading_count.
+     */
+    siteSortName: text("site_sort_name").notNull().default(""),
+    customerSortName: text("customer_sort_name").notNull().default(""),
     ...timestamps,
   },
   (table) => [
@@ -259,6 +267,9 @@ export const equipment = pgTable(
     index("equipment_organisation_refrigerant_idx").on(table.organisationId, table.refrigerant, sql`lower(${table.name})`, table.id).where(sql`NOT ${table.archived}`),
     index("equipment_organisation_circuits_idx")
       .on(table.organisationId, sql`jsonb_array_length(${table.circuits})`, sql`lower(${table.name})`, table.id)
+      .where(sql`NOT ${table.archived}`),
+    index("equipment_organisation_place_idx")
+      .on(table.organisationId, table.siteSortName, table.customerSortName, sql`lower(${table.name})`, table.id)
       .where(sql`NOT ${table.archived}`),
   ],
 );
@@ -304,6 +315,8 @@ export const visits = pgTable(
     // The company's visits newest first (lists, the review queue) read in index order instead of
     // sorting every visit the company has.
     index("visits_organisation_started_idx").on(table.organisationId, table.startedAt),
+    // Today's lists (one status, newest first) read a page of that status, not every visit since.
+    index("visits_organisation_status_started_idx").on(table.organisationId, table.status, table.startedAt),
   ],
 );
 
