@@ -6,7 +6,8 @@
  * connection (lists also at 10, saving at 10 and 50), then the list routes and saving again on a
  * demo-size database: their ratio shows whether a route's time grows with the rows behind it.
  * Prints the data set, the server's memory idle and under load, what a stored reading costs, and
- * each figure beside its target. Timings on a shared machine are noisy: compare runs, not digits.
+ * each figure beside its target; a streamed answer (the register's CSV export) also its time to
+ * first byte (bench/api/first-byte.ts). Timings on a shared machine are noisy: compare runs, not digits.
  * `--cpu-prof` writes the servers' CPU profiles there (open them in Chrome's DevTools).
  *
  * Saving writes readings into the data set: point `--dir` at a copy to keep the original as built.
@@ -16,6 +17,7 @@ import { cpus, loadavg } from "node:os";
 import { resolve } from "node:path";
 import { parseArgs } from "node:util";
 import { readDataSet, type DataSet } from "./data-set.ts";
+import { measureFirstByte, type FirstByteResult } from "./first-byte.ts";
 import { runLoad, type LoadResult } from "./load.ts";
 import { ROUTES, type BenchRoute, type Person } from "./routes.ts";
 import { measureSaving, openVisitsForSaving, type SaveLevel } from "./save-reading.ts";
@@ -32,7 +34,8 @@ const { values } = parseArgs({
   options: {
     dir: { type: "string", default: "data/large" },
     seconds: { type: "string", default: "5" },
-    only: { type: "string" },
+    // Repeatable: routes whose name contains any of them (`--only "jobs list" --only "equipment list"`).
+    only: { type: "string", multiple: true },
     "skip-demo": { type: "boolean", default: false },
     "cpu-prof": { type: "string" },
   },
@@ -48,10 +51,13 @@ if (!existsSync(values.dir)) {
 const EMAILS: Record<Person, string> = { tech: "tech@bellbird.example", senior: "senior@bellbird.example", owner: "owner@bellbird.example" };
 const ms = (value: number) => (Number.isFinite(value) ? value.toFixed(value < 10 ? 1 : 0) : "–");
 const mb = (bytes: number) => `${(bytes / 1_048_576).toFixed(0)} MB`;
-const selected = (route: BenchRoute) => !values.only || route.name.includes(values.only);
+const nameSelected = (name: string) => !values.only || values.only.some((part) => name.includes(part));
+const selected = (route: BenchRoute) => nameSelected(route.name);
 const SAVE_ROUTE = "save a reading (POST readings)";
-const savingSelected = !values.only || SAVE_ROUTE.includes(values.only);
+const savingSelected = nameSelected(SAVE_ROUTE);
 const nodeArgs = values["cpu-prof"] ? ["--cpu-prof", "--cpu-prof-dir", resolve(values["cpu-prof"])] : [];
+/** Requests, one at a time, timing a streamed route's first byte. */
+const FIRST_BYTE_REQUESTS = 20;
 /** Open visits the saves of the demo-size database spread over. */
 const DEMO_OPEN_VISITS = 12;
 
@@ -61,6 +67,8 @@ interface Row {
   result: LoadResult;
   target: string;
   pass: boolean | null;
+  /** A streamed route's time to first byte beside its whole answer, at 1 connection. */
+  firstByte?: FirstByteResult;
 }
 
 async function sessions(server: BenchServer): Promise<Record<Person, string>> {
@@ -104,7 +112,8 @@ async function measureRoutes(server: BenchServer, dataSet: DataSet | undefined, 
     for (const connections of levels(route)) {
       const result = await runLoad({ origin: server.origin, connections, seconds, maxRequests: 5_000, next: () => ({ path, headers }), expectStatus: route.conditional ? [304] : [200] });
       const pass = connections === 1 ? result.p95 < ROUTE_P95_MS : null;
-      rows.push({ name: route.name, connections, result, target: connections === 1 ? `p95 < ${ROUTE_P95_MS} ms` : "", pass });
+      const firstByte = route.streamed && connections === 1 ? await measureFirstByte(`${server.origin}${path}`, headers, FIRST_BYTE_REQUESTS) : undefined;
+      rows.push({ name: route.name, connections, result, target: connections === 1 ? `p95 < ${ROUTE_P95_MS} ms` : "", pass, firstByte });
       process.stdout.write(".");
     }
   }
@@ -143,6 +152,16 @@ function printRows(rows: readonly Row[]) {
   const format = (cells: string[]) => cells.map((cell, column) => (column === 0 || column >= 9 ? cell.padEnd(widths[column]!) : cell.padStart(widths[column]!))).join("  ");
   console.log(format(header));
   for (const line of lines) console.log(format(line));
+}
+
+/** Streamed routes: when the first bytes arrive, beside the whole answer (the table's times). */
+function printFirstBytes(rows: readonly Row[]) {
+  const streamed = rows.filter((row) => row.firstByte);
+  if (streamed.length === 0) return;
+  console.log(`\nStreamed answers, ${FIRST_BYTE_REQUESTS} requests one at a time: first byte of the body vs the whole answer (p50 / p95 ms):`);
+  for (const { name, firstByte } of streamed) {
+    console.log(`  ${name.padEnd(30)} headers ${ms(firstByte!.headersP50).padStart(5)}   first byte ${ms(firstByte!.firstByteP50).padStart(5)} / ${ms(firstByte!.firstByteP95).padStart(5)}   whole ${ms(firstByte!.wholeP50).padStart(5)} / ${ms(firstByte!.wholeP95).padStart(5)}`);
+  }
 }
 
 function printMemory(label: string, memory: NodeJS.MemoryUsage) {
@@ -217,6 +236,7 @@ if (!values["skip-demo"]) {
 console.log("\n\nLatency at the large data set (closed loop, each level for " + `${seconds} s or 5,000 requests):`);
 console.log(`load average ${loadavg().map((value) => value.toFixed(1)).join(" ")} on ${cpus().length} cores (other jobs included)`);
 printRows(rows);
+printFirstBytes(rows);
 printSaving(largeSaves, demoSaves);
 if (ratios.length > 0) {
   console.log(`\nLists at the demo size vs the large data set (p50 at 1 connection; target: at most ${LIST_RATIO}× the demo's):`);

@@ -3,7 +3,8 @@
  * `?after=`) or changes its path is a one-line edit. `as`: who calls it; `connections`: the
  * concurrency levels measured; `list`: also measured on a demo-size database, to show its time
  * does not grow with the organisation's rows; `conditional`: sent again with the ETag of a
- * first answer (If-None-Match), expecting 304.
+ * first answer (If-None-Match), expecting 304; `streamed`: written as it is read, so its time to
+ * first byte is measured too (bench/api/first-byte.ts).
  */
 export interface BenchIds {
   equipmentId: string;
@@ -23,6 +24,7 @@ export interface BenchRoute {
   connections: readonly number[];
   list?: boolean;
   conditional?: boolean;
+  streamed?: boolean;
 }
 
 export const ROUTES: readonly BenchRoute[] = [
@@ -67,7 +69,7 @@ export const ROUTES: readonly BenchRoute[] = [
   // Register and cylinders.
   { name: "register", path: () => "/api/register", as: "owner", connections: [1, 10], list: true },
   { name: "register newest first", path: () => "/api/register?dir=desc", as: "owner", connections: [1], list: true },
-  { name: "register CSV export", path: () => "/api/register/export.csv", as: "owner", connections: [1], list: true },
+  { name: "register CSV export", path: () => "/api/register/export.csv", as: "owner", connections: [1], list: true, streamed: true },
   { name: "cylinders", path: () => "/api/cylinders", as: "tech", connections: [1, 10], list: true },
   { name: "cylinder detail", path: (ids) => `/api/cylinders/${ids.cylinderId}`, as: "tech", connections: [1] },
   // Casebook.

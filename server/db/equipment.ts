@@ -117,13 +117,14 @@ export function listEquipment(db: Database, organisationId: string) {
 const totalFactoryCharge = sql`equipment_factory_charge_kg(${equipment.circuits})`;
 
 // lower(): the table sorted "a" with "A" before; Postgres would put every capital first. Each
-// sort but the place has an index in its order (server/db/schema.ts, equipment_organisation_*_idx);
-// the place sort reads sites and customers, so it sorts the company's units (a few thousand).
+// sort has an index in its order (server/db/schema.ts, equipment_organisation_*_idx), so a page
+// reads a page of units; the place sort reads the unit's own lower-case copies of its site's and
+// customer's names (kept by a trigger, migration visit_reading_count), not the joined tables.
 const byName: SortKey = { expr: sql`lower(${equipment.name})`, type: "text" };
 const EQUIPMENT_SORT_KEYS: Record<EquipmentSort, SortKey[]> = {
   name: [byName],
   kind: [{ expr: equipment.kind, type: "text" }, byName],
-  place: [{ expr: sql`lower(${sites.name})`, type: "text" }, { expr: sql`lower(${customers.name})`, type: "text" }, byName],
+  place: [{ expr: equipment.siteSortName, type: "text" }, { expr: equipment.customerSortName, type: "text" }, byName],
   refrigerant: [{ expr: equipment.refrigerant, type: "text" }, byName],
   circuits: [{ expr: sql`jsonb_array_length(${equipment.circuits})`, type: "numeric" }, byName],
   factoryCharge: [{ expr: totalFactoryCharge, type: "numeric" }, byName],

@@ -247,6 +247,14 @@ export const equipment = pgTable(
      * rename), never by the app; searched through a trigram index. Migration list_search.
      */
     searchText: text("search_text").notNull().default(""),
+    /**
+     * lower() of the unit's site and customer names: the list's "Place" sort, read in index order
+     * (equipment_organisation_place_idx) rather than joining and sorting every unit. Written by the
+     * same trigger as searchText, on every change and on a site's or customer's rename, never by
+     * the app. Migration visit_reading_count.
+     */
+    siteSortName: text("site_sort_name").notNull().default(""),
+    customerSortName: text("customer_sort_name").notNull().default(""),
     ...timestamps,
   },
   (table) => [
@@ -259,6 +267,9 @@ export const equipment = pgTable(
     index("equipment_organisation_refrigerant_idx").on(table.organisationId, table.refrigerant, sql`lower(${table.name})`, table.id).where(sql`NOT ${table.archived}`),
     index("equipment_organisation_circuits_idx")
       .on(table.organisationId, sql`jsonb_array_length(${table.circuits})`, sql`lower(${table.name})`, table.id)
+      .where(sql`NOT ${table.archived}`),
+    index("equipment_organisation_place_idx")
+      .on(table.organisationId, table.siteSortName, table.customerSortName, sql`lower(${table.name})`, table.id)
       .where(sql`NOT ${table.archived}`),
   ],
 );
@@ -287,6 +298,13 @@ export const visits = pgTable(
      * lock), so it orders the visit's writes: the detail's ETag and the `since` of a delta.
      */
     revision: integer("revision").notNull().default(0),
+    /**
+     * The visit's readings that count in results (records, not voided: countsInResults in
+     * server/db/visits.ts), so a list shows it without reading a logger's thousands of rows.
+     * Kept by triggers on readings' inserts, updates (void, import commit) and deletes, never
+     * written by the app. Migration visit_reading_count.
+     */
+    readingCount: integer("reading_count").notNull().default(0),
     ...timestamps,
   },
   (table) => [
@@ -297,6 +315,8 @@ export const visits = pgTable(
     // The company's visits newest first (lists, the review queue) read in index order instead of
     // sorting every visit the company has.
     index("visits_organisation_started_idx").on(table.organisationId, table.startedAt),
+    // Today's lists (one status, newest first) read a page of that status, not every visit since.
+    index("visits_organisation_status_started_idx").on(table.organisationId, table.status, table.startedAt),
   ],
 );
 
@@ -312,6 +332,26 @@ export const visitTechnicians = pgTable(
   },
   // By person too: a search word naming someone finds their visits (server/db/visits.ts).
   (table) => [primaryKey({ columns: [table.visitId, table.userId] }), index("visit_technicians_user_idx").on(table.userId, table.visitId)],
+);
+
+/**
+ * When each person last recorded a reading on a visit (the latest created_at of their readings
+ * that are records, voided ones included): the jobs list's "you last worked on it", read per
+ * page row without reading the visit's readings. One row per visit and recorder, kept by the
+ * same triggers as visits.reading_count (migration visit_reading_count), never written by the app.
+ */
+export const visitReadingRecorders = pgTable(
+  "visit_reading_recorders",
+  {
+    visitId: uuid("visit_id")
+      .notNull()
+      .references(() => visits.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    lastRecordedAt: timestamp("last_recorded_at", { withTimezone: true, mode: "date" }).notNull(),
+  },
+  (table) => [primaryKey({ columns: [table.visitId, table.userId] })],
 );
 
 /**

@@ -28,7 +28,7 @@ import type { Database } from "./client.ts";
 import { circuitReadingsPage } from "./circuit-readings.ts";
 import { afterCursor, containsTerm, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKey } from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
-import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitSearch, visitTechnicians, visits } from "./schema.ts";
+import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitReadingRecorders, visitSearch, visitTechnicians, visits } from "./schema.ts";
 import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
 
 /** Readings that are records: not rows of a CSV import still being stored (see readings.pendingImportId). */
@@ -48,18 +48,23 @@ const summaryColumns = {
   startedAt: visits.startedAt,
 };
 
+/** A list's row: the summary's own columns and the stored reading count (migration visit_reading_count). */
+const listColumns = { ...summaryColumns, readingCount: visits.readingCount };
+
 type SummaryExtra = Pick<VisitSummary, "readingCount" | "technicians" | "yourLastActivityAt">;
 
 /**
- * When one person last recorded anything on each of these visits other than readings (which
- * summarise reads with the counts, in one pass over them): adjustments, comments and the trail's
- * events (started, submitted, voided, imported…), in one query.
+ * When one person last recorded anything on each of these visits: readings (their latest time is
+ * stored per visit and recorder, migration visit_reading_count, so a logger's thousands of
+ * readings are not read), adjustments, comments and the trail's events (started, submitted,
+ * voided, imported…), in one query.
  */
 async function lastActivityOf(db: Database, viewerId: string, ids: string[]): Promise<Map<string, Date>> {
   const rows = await unionAll(
     db.select({ visitId: adjustments.visitId, at: max(adjustments.createdAt) }).from(adjustments).where(and(inArray(adjustments.visitId, ids), eq(adjustments.recordedBy, viewerId))).groupBy(adjustments.visitId),
     db.select({ visitId: visitComments.visitId, at: max(visitComments.createdAt) }).from(visitComments).where(and(inArray(visitComments.visitId, ids), eq(visitComments.authorId, viewerId))).groupBy(visitComments.visitId),
     db.select({ visitId: visitEvents.visitId, at: max(visitEvents.at) }).from(visitEvents).where(and(inArray(visitEvents.visitId, ids), eq(visitEvents.actorId, viewerId))).groupBy(visitEvents.visitId),
+    db.select({ visitId: visitReadingRecorders.visitId, at: visitReadingRecorders.lastRecordedAt }).from(visitReadingRecorders).where(and(inArray(visitReadingRecorders.visitId, ids), eq(visitReadingRecorders.userId, viewerId))),
   );
   const latest = new Map<string, Date>();
   for (const row of rows) {
@@ -71,24 +76,14 @@ async function lastActivityOf(db: Database, viewerId: string, ids: string[]): Pr
   return latest;
 }
 
-async function summarise(db: Database, rows: { id: string; startedAt: Date }[], viewerId?: string): Promise<Map<string, SummaryExtra>> {
+/**
+ * The crew and the viewer's last activity of each listed visit, for the page's rows only. The
+ * reading count comes with the rows themselves (visits.reading_count, kept by triggers).
+ */
+async function summarise(db: Database, rows: { id: string; readingCount: number }[], viewerId?: string): Promise<Map<string, SummaryExtra>> {
   const ids = rows.map((row) => row.id);
   const result = new Map<string, SummaryExtra>();
   if (ids.length === 0) return result;
-  // One pass over the page's readings for both figures: a visit with a logger on it holds
-  // thousands, and reading them twice was most of a page's time.
-  const counts = await db
-    .select({
-      visitId: readings.visitId,
-      n: sql<number>`count(*) filter (where ${readings.voidedAt} is null)`.mapWith(Number),
-      // Milliseconds since the epoch: a number, where a timestamp from a raw select is text.
-      viewersLastMs: viewerId
-        ? sql<number | null>`extract(epoch from max(${readings.createdAt}) filter (where ${readings.recordedBy} = ${viewerId})) * 1000`.mapWith((value) => (value === null ? null : Number(value)))
-        : sql<null>`null`,
-    })
-    .from(readings)
-    .where(and(inArray(readings.visitId, ids), isRecord))
-    .groupBy(readings.visitId);
   const crew = await db
     .select({ visitId: visitTechnicians.visitId, id: users.id, name: users.name })
     .from(visitTechnicians)
@@ -96,13 +91,7 @@ async function summarise(db: Database, rows: { id: string; startedAt: Date }[], 
     .where(inArray(visitTechnicians.visitId, ids))
     .orderBy(asc(users.name));
   const activity = viewerId ? await lastActivityOf(db, viewerId, ids) : new Map<string, Date>();
-  for (const id of ids) result.set(id, { readingCount: 0, technicians: [], yourLastActivityAt: activity.get(id)?.toISOString() ?? null });
-  for (const row of counts) {
-    const extra = result.get(row.visitId)!;
-    extra.readingCount = row.n;
-    const readingAt = row.viewersLastMs === null ? null : new Date(row.viewersLastMs);
-    if (readingAt && (!extra.yourLastActivityAt || readingAt > new Date(extra.yourLastActivityAt))) extra.yourLastActivityAt = readingAt.toISOString();
-  }
+  for (const row of rows) result.set(row.id, { readingCount: row.readingCount, technicians: [], yourLastActivityAt: activity.get(row.id)?.toISOString() ?? null });
   for (const row of crew) result.get(row.visitId)!.technicians.push({ id: row.id, name: row.name });
   return result;
 }
@@ -185,7 +174,7 @@ export async function listVisitPage(db: Database, organisationId: string, query:
   }
   if (query.cursor) conditions.push(afterCursor(keys, id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
   const rows = await db
-    .select({ ...summaryColumns, ...cursorColumns(keys) })
+    .select({ ...listColumns, ...cursorColumns(keys) })
     .from(visits)
     .innerJoin(visitSearch, eq(visitSearch.visitId, visits.id))
     .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
@@ -221,7 +210,7 @@ export async function listVisits(db: Database, organisationId: string, filter: V
   if (filter.status) conditions.push(eq(visits.status, filter.status));
   if (filter.equipmentId) conditions.push(eq(visits.equipmentId, filter.equipmentId));
   const rows = await db
-    .select(summaryColumns)
+    .select(listColumns)
     .from(visits)
     .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
     .innerJoin(sites, eq(sites.id, equipment.siteId))
@@ -377,7 +366,7 @@ export function photoUrls(id: string): Pick<Photo, "url" | "thumbnailUrl"> {
 export async function getVisitHead(db: Database, organisationId: string, visitId: string) {
   const [head] = await db
     .select({
-      ...summaryColumns,
+      ...listColumns,
       customerContactEmail: customers.contactEmail,
       reviewNote: visits.reviewNote,
       signedOffBy: visits.signedOffBy,

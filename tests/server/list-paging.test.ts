@@ -203,6 +203,9 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
       expect(found.every((visit) => visit.siteName === "Bilby Depot" && visit.customerName === "Dunnart Holdings"), query).toBe(true);
     }
     expect((await technician.get("/api/equipment?q=dunnart%20numbat")).body.equipment).toHaveLength(1);
+    // The place sort's own copies of the names follow the renames (the same trigger as the search text).
+    const sortNames = (await client.query<{ site_sort_name: string; customer_sort_name: string }>("select site_sort_name, customer_sort_name from equipment where id = $1", [unit.id])).rows[0];
+    expect(sortNames).toEqual({ site_sort_name: "bilby depot", customer_sort_name: "dunnart holdings" });
     expect((await technician.get("/api/visits?q=grown%20unit%207%20quokka")).body.visits).toEqual([]);
   });
 
@@ -264,5 +267,21 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     if (process.env.SHOW_PLANS) console.info(plan);
     expect(plan).toContain("equipment_organisation_name_idx");
     expect(plan).not.toMatch(/Seq Scan on equipment/);
+  });
+
+  it("reads one status's newest visits and the units by place in index order, not every row", async () => {
+    const captured: { query: string; params: unknown[] }[] = [];
+    const db = drizzle({ client: testApp.database.client, schema, logger: { logQuery: (query, params) => void captured.push({ query, params }) } });
+    await analyzeTables(testApp.database.db);
+    const planOf = async (entry: { query: string; params: unknown[] }) =>
+      (await testApp.database.client.query<{ "QUERY PLAN": string }>(`explain ${entry.query}`, entry.params)).rows.map((row) => row["QUERY PLAN"]).join("\n");
+    await listVisitPage(db, organisationId, VisitListQuerySchema.parse({ status: "sent-back", limit: "20" }), technicianId);
+    const statusPlan = await planOf(captured.find((entry) => entry.query.includes('from "visits"') && entry.query.includes("limit"))!);
+    expect(statusPlan).toContain("visits_organisation_status_started_idx");
+    captured.length = 0;
+    await listEquipmentPage(db, organisationId, EquipmentListQuerySchema.parse({ sort: "place", limit: "20" }));
+    const placePlan = await planOf(captured[0]!);
+    expect(placePlan).toContain("equipment_organisation_place_idx");
+    expect(placePlan).not.toMatch(/Seq Scan on equipment/);
   });
 });
