@@ -636,7 +636,8 @@ export const evacuations = pgTable(
     targetMicrons: doublePrecision("target_microns").notNull(),
     /** Minutes from the start at which the pump was valved off; null while still pulling down. */
     isolatedAtMinutes: doublePrecision("isolated_at_minutes"),
-    samples: jsonb("samples").$type<{ minutes: number; microns: number }[]>().notNull().default([]),
+    /** A sample added from a device keeps its client id, so a repeated send adds it once (README decision 026). */
+    samples: jsonb("samples").$type<{ minutes: number; microns: number; clientId?: string }[]>().notNull().default([]),
     note: text("note"),
     result: jsonb("result").$type<Record<string, unknown>>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
