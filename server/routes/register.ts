@@ -203,7 +203,7 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
     if (earlier) return void sendEntry(res, { movement: earlier.movement, cylinder: earlier.cylinder ? toCylinder(earlier.cylinder) : null }, true);
     requireWritableVisit(visit.status);
     const values = MovementCreateSchema.parse(req.body);
-    requireDeviceTime("at", values.at, visit);
+    requireDeviceTime("at", values.at, visit, { backDated: true });
     if (!unit.circuits.some((circuit) => circuit.number === values.circuit)) {
       throw fieldError("circuit", `${unit.name} has ${unit.circuits.length} circuit(s)`);
     }

@@ -211,7 +211,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     if (await answeredBefore(db, res, adjustmentEntries, "adjustment", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
     const { clientId, ...values } = AdjustmentCreateSchema.parse(req.body);
-    requireDeviceTime("at", values.at, visit);
+    requireDeviceTime("at", values.at, visit, { backDated: true });
     const at = deviceDate(values.at);
     if (isChargeAdjustment(values.kind)) {
       // Refrigerant added or removed is a register movement: both records in one transaction,
