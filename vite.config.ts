@@ -65,7 +65,7 @@ const chunkGroups = [
 ];
 
 /**
- * The installable app (decision 026). Workbox precaches the shell: every script, stylesheet,
+ * The installable app (decision 027). Workbox precaches the shell: every script, stylesheet,
  * font and the icon, so that the app starts with no network. The refrigerant tables are left
  * out of the precache (31 saturation and 31 single-phase tables, several megabytes that a phone
  * on a roof should not fetch for refrigerants it never meets); they are cached when first loaded

@@ -10,6 +10,7 @@ import { cylindersQueryOptions } from "@/lib/api/register.ts";
 import { useCreateAdjustment, useVisit } from "@/lib/api/visits.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 
 /**
  * The register movement a charge adjustment becomes with the cylinder chosen (the server
@@ -28,6 +29,8 @@ const kgText = (kg: number) => `${formatNumber(kg, 2)} kg`;
  */
 export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string; circuit: number; onSaved?: () => void }) {
   const createAdjustment = useCreateAdjustment();
+  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
+  const entryId = useEntryClientId();
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<AdjustmentCreate>({
     resolver: zodResolver(AdjustmentCreateSchema),
@@ -54,7 +57,8 @@ export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string;
   const submit = form.handleSubmit(async (values) => {
     setFormError(null);
     try {
-      await createAdjustment.mutateAsync({ ...values, circuit, visitId, cylinderId: charge ? values.cylinderId : null });
+      await createAdjustment.mutateAsync({ ...values, circuit, visitId, cylinderId: charge ? values.cylinderId : null , clientId: entryId.take() });
+      entryId.release();
       form.reset({ kind: values.kind, description: "", circuit, amountKg: null, cylinderId: values.cylinderId });
       onSaved?.();
     } catch (error) {

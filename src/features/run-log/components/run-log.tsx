@@ -9,6 +9,7 @@ import { FormAlert } from "@/components/ui/field/field.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateReading } from "@/lib/api/visits.ts";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useStoredDraft } from "@/lib/drafts/use-stored-draft.ts";
 import { formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { useLiveDiagnosis, type CircuitContext } from "../hooks/use-live-diagnosis.ts";
@@ -95,8 +96,11 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
 
   // A save that failed keeps the time the reading was taken for the next try, until a value changes.
   const [pendingTakenAt, setPendingTakenAt] = useState<string | null>(null);
+  // And its client id, so a save whose answer was lost is stored once when tried again.
+  const entryId = useEntryClientId();
   const setField = (field: DraftField, value: string) => {
     setPendingTakenAt(null);
+    entryId.release();
     setDraft((current) => ({ ...current, [field]: value }));
     setServerErrors(({ [field]: _dropped, ...rest }) => rest);
   };
@@ -126,12 +130,14 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
         visitId: visit.id,
         circuit,
         takenAt,
+        clientId: entryId.take(),
         ...(values as MeasuredValues),
       });
       setSavedAt(reading.takenAt);
       setServerErrors({});
       stored.discard((current) => ({ ...current, runMinutes: "" }));
       setPendingTakenAt(null);
+      entryId.release();
     } catch (error) {
       setPendingTakenAt(takenAt);
       if (error instanceof ApiError && Object.keys(error.fields).length > 0) {
