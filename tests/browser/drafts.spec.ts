@@ -60,7 +60,7 @@ for (const size of [
       ).toEqual([]);
     });
 
-    test("a save without a connection fails at once and keeps the values and the time taken", async ({
+    test("a save without a connection is kept on the device at once and sent, with the time taken, when the signal returns", async ({
       page,
       context,
     }) => {
@@ -71,19 +71,20 @@ for (const size of [
       await context.setOffline(true);
       const tried = Date.now();
       await page.getByRole("button", { name: "Save reading" }).click();
-      await expect(page.getByText(/No connection/).first()).toBeVisible({ timeout: 3000 });
+      await expect(page.getByText(/^Kept on this device \(\d\d:\d\d\) — sent when online$/)).toBeVisible({ timeout: 3000 });
+      await expect(page.getByRole("region", { name: "Entries on this device" }).getByText("Waiting to send")).toHaveCount(1);
+      // The values carry forward for the next reading, as after any save.
       await expect(page.getByLabel("Liquid pressure", { exact: true })).toHaveValue("1736");
 
-      // Back online a while later: the reading is stored with the time of the first try.
+      // Back online a while later: the device sends it by itself, stamped with the time it was taken.
       await page.waitForTimeout(2500);
-      await context.setOffline(false);
       const saved = page.waitForResponse(
         (response) => response.url().includes("/readings") && response.request().method() === "POST",
       );
-      await page.getByRole("button", { name: "Save reading" }).click();
+      await context.setOffline(false);
       const body = (await (await saved).json()) as { reading: { takenAt: string } };
       expect(Date.parse(body.reading.takenAt)).toBeLessThan(tried + 2000);
-      await expect(page.getByText(/Saved at/)).toBeVisible();
+      await expect(page.getByRole("region", { name: "Entries on this device" })).toBeHidden();
     });
   });
 }
@@ -100,10 +101,14 @@ test("the message of a failed save shows even when the toast code cannot be fetc
   });
   await startVisitAndTypeReading(page, "Toasts without their code");
 
+  // An adjustment is not kept on the device yet: without a connection its save fails, with a toast.
   await context.setOffline(true);
-  await page.getByRole("button", { name: "Save reading" }).click();
+  await page.getByLabel("What changed").selectOption("airflow");
+  await page.getByLabel("Description").fill("Cleaned the return air filter");
+  await page.getByRole("button", { name: "Log adjustment" }).click();
   await expect(page.getByRole("alert").filter({ hasText: /No connection/ }).first()).toBeVisible({ timeout: 3000 });
   await expect(page.getByLabel("Suction pressure", { exact: true })).toHaveValue("465");
+  await expect(page.getByLabel("Description")).toHaveValue("Cleaned the return air filter");
   // The plain stand-in for the toasts: its messages stay until dismissed.
   await page.getByRole("button", { name: "Dismiss" }).click();
   await expect(page.getByRole("button", { name: "Dismiss" })).toBeHidden();

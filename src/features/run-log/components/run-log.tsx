@@ -8,7 +8,11 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
+import { useMe } from "@/lib/api/auth.ts";
 import { useCreateReading } from "@/lib/api/visits.ts";
+import { discardEntry, keepInOutbox, type OutboxEntry } from "@/features/offline/outbox-store.ts";
+import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
+import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useStoredDraft } from "@/lib/drafts/use-stored-draft.ts";
 import { formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
@@ -79,6 +83,10 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
   const [savedAt, setSavedAt] = useState<string | null>(null);
+  // A reading saved without a connection: kept in the device's outbox, sent when the signal returns.
+  const [keptAt, setKeptAt] = useState<string | null>(null);
+  const userId = useMe().data?.id;
+  const onDevice = useOutboxEntries().filter((entry) => entry.visitId === visit.id && entry.body.circuit === circuit);
   const [showTrend, setShowTrend] = useState(false);
   const createReading = useCreateReading();
   const now = useNow();
@@ -134,11 +142,38 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
         ...(values as MeasuredValues),
       });
       setSavedAt(reading.takenAt);
+      setKeptAt(null);
       setServerErrors({});
       stored.discard((current) => ({ ...current, runMinutes: "" }));
       setPendingTakenAt(null);
       entryId.release();
     } catch (error) {
+      // No connection, or no answer in time: the reading goes to the outbox under its client id
+      // (the server stores it once, even if this try did reach it) with the time it was taken.
+      if (error instanceof ApiError && error.status === 0 && userId) {
+        const clientId = entryId.take();
+        const kept = await keepInOutbox({
+          clientId,
+          userId,
+          visitId: visit.id,
+          label: `Reading, circuit ${circuit}`,
+          path: `/visits/${visit.id}/readings`,
+          body: { circuit, takenAt, clientId, ...(values as MeasuredValues) },
+          takenAt,
+        }).then(
+          () => true,
+          () => false,
+        );
+        if (kept) {
+          setKeptAt(takenAt);
+          setSavedAt(null);
+          setServerErrors({});
+          stored.discard((current) => ({ ...current, runMinutes: "" }));
+          setPendingTakenAt(null);
+          entryId.release();
+          return;
+        }
+      }
       setPendingTakenAt(takenAt);
       if (error instanceof ApiError && Object.keys(error.fields).length > 0) {
         setServerErrors(error.fields);
@@ -147,6 +182,16 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
         setFormError(error instanceof Error ? error.message : "The reading was not saved. Try again.");
       }
     }
+  };
+
+  // A refused reading's values go back in the form, with the server's field messages, to be
+  // corrected and saved again (as a new entry); the refused one leaves the device.
+  const putBack = (entry: OutboxEntry) => {
+    setDraft(() => ({ ...draftFromInput(entry.body as Partial<MeasuredValues>, units, atmosphericKPa), runMinutes: "" }));
+    setServerErrors(entry.fields ?? {});
+    setFormError(entry.reason ?? null);
+    setKeptAt(null);
+    void discardEntry(entry.clientId);
   };
 
   const missingRequired = REQUIRED_FIELDS.filter((field) => draft[field] === "");
@@ -278,7 +323,9 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
                     <Save aria-hidden className="size-5" /> {createReading.isPending ? "Saving…" : "Save reading"}
                   </Button>
                   <span className="line-clamp-2 text-xs text-muted sm:text-sm" aria-live="polite">
-                    {savedAt
+                    {keptAt
+                      ? `Kept on this device (${formatTime(keptAt)}) — sent when online`
+                      : savedAt
                       ? `✓ Saved at ${formatTime(savedAt)} — values stay for the next reading`
                       : stored.restored
                         ? "Values typed earlier on this device are back — not saved yet"
@@ -294,6 +341,8 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
           </form>
         </div>
       </div>
+
+      <WaitingEntries entries={onDevice} onPutBack={(entry: OutboxEntry) => putBack(entry)} />
 
       {shownInput && shownResult && (
         <PanelBoundary>
