@@ -6,16 +6,22 @@ import { useOnlineStatus } from "./online-status.ts";
 import { entriesOf, type OutboxEntry } from "./outbox-store.ts";
 import { sendWaitingEntries } from "./outbox-sender.ts";
 
+const NONE: OutboxEntry[] = [];
+
 /** The signed-in person's entries on this device (waiting and refused), kept up to date. */
 export function useOutboxEntries(): OutboxEntry[] {
   const userId = useMe().data?.id;
-  const [entries, setEntries] = useState<OutboxEntry[]>([]);
+  // Tagged with whose they are, so that another person's never show while theirs load.
+  const [held, setHeld] = useState<{ userId: string; entries: OutboxEntry[] } | null>(null);
   useEffect(() => {
-    if (!userId) return setEntries([]);
-    const subscription = liveQuery(() => entriesOf(userId)).subscribe({ next: setEntries, error: () => setEntries([]) });
+    if (!userId) return;
+    const subscription = liveQuery(() => entriesOf(userId)).subscribe({
+      next: (entries) => setHeld({ userId, entries }),
+      error: () => setHeld({ userId, entries: [] }),
+    });
     return () => subscription.unsubscribe();
   }, [userId]);
-  return entries;
+  return held && held.userId === userId ? held.entries : NONE;
 }
 
 /** First wait after a round that could not reach the server; doubled each time, up to the most. */
