@@ -186,7 +186,7 @@ async function saveRtuReading(page: Page, suctionLineC: string) {
   await page.getByLabel("Liquid pressure", { exact: true }).fill("1565");
   await page.getByLabel("Line temperature for subcooling", { exact: true }).fill("37");
   await page.getByRole("button", { name: "Save reading" }).click();
-  await expect(page.getByText(/^Kept on this device \(\d\d:\d\d\) — sent when online$/)).toBeVisible();
+  await expect(page.getByTestId("save-bar").getByText(/^Kept on this device \(\d\d:\d\d\) — sent when online$/)).toBeVisible();
 }
 
 /** The outbox entries on the device (src/features/offline/outbox-store.ts): client id and time taken. */
@@ -204,7 +204,7 @@ function outboxEntries(page: Page): Promise<{ clientId: string; takenAt: string;
   );
 }
 
-test("readings saved with no network wait on the device, survive a reload, and are stored once with their times", async ({ page, context }) => {
+test("readings and an adjustment saved with no network wait on the device, survive a reload, and are stored once with their times", async ({ page, context }) => {
   await page.goto("/");
   await signIn(page, "tech@bellbird.example");
   await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
@@ -213,26 +213,36 @@ test("readings saved with no network wait on the device, survive a reload, and a
 
   await context.setOffline(true);
   await page.goto(`/visits/${visitId}`);
-  for (const suctionLine of ["13", "14", "15"]) await saveRtuReading(page, suctionLine);
+  await saveRtuReading(page, "13");
+  await page.getByLabel("What changed").selectOption("airflow");
+  await page.getByLabel("Description").fill("Cleaned the return air filter");
+  await page.getByRole("button", { name: "Log adjustment" }).click();
+  await expect(page.getByRole("status").filter({ hasText: /^Kept on this device \(\d\d:\d\d\) — sent when online$/ })).toBeVisible();
+  for (const suctionLine of ["14", "15"]) await saveRtuReading(page, suctionLine);
   const waiting = page.getByRole("region", { name: "Entries on this device" });
-  await expect(waiting.getByText("Waiting to send")).toHaveCount(3);
-  await expect(page.getByTestId("outbox-waiting")).toHaveText("3 entries waiting to send.");
+  await expect(waiting.getByText("Waiting to send")).toHaveCount(4);
+  await expect(waiting.getByText("Airflow changed, circuit 1")).toBeVisible();
+  await expect(page.getByTestId("outbox-waiting")).toHaveText("4 entries waiting to send.");
   const kept = await outboxEntries(page);
-  expect(kept).toHaveLength(3);
+  expect(kept).toHaveLength(4);
 
   // Still there after a reload with no network.
   await page.reload();
-  await expect(page.getByRole("region", { name: "Entries on this device" }).getByText("Waiting to send")).toHaveCount(3);
+  await expect(page.getByRole("region", { name: "Entries on this device" }).getByText("Waiting to send")).toHaveCount(4);
 
   await context.setOffline(false);
   await expect(page.getByRole("region", { name: "Entries on this device" })).toBeHidden({ timeout: 30_000 });
   await expect(page.getByTestId("outbox-waiting")).toBeHidden();
-  const visit = (await (await page.request.get(`/api/visits/${visitId}`)).json()) as { visit: { readings: { takenAt: string; suctionLineTempC?: number; input: { suctionLineTempC: number } }[] } };
-  const stored = visit.visit.readings;
-  expect(stored).toHaveLength(3);
+  const visit = (await (await page.request.get(`/api/visits/${visitId}`)).json()) as {
+    visit: { readings: { takenAt: string; input: { suctionLineTempC: number } }[]; adjustments: { at: string; description: string }[] };
+  };
+  const { readings, adjustments } = visit.visit;
+  expect(readings).toHaveLength(3);
+  expect(adjustments.map((adjustment) => adjustment.description)).toEqual(["Cleaned the return air filter"]);
   // Each with the time it was taken on the device, not the time it reached the server.
-  expect(stored.map((reading) => Date.parse(reading.takenAt)).sort()).toEqual(kept.map((entry) => Date.parse(entry.takenAt)).sort());
-  expect(stored.map((reading) => reading.input.suctionLineTempC).sort()).toEqual([13, 14, 15]);
+  const storedTimes = [...readings.map((reading) => reading.takenAt), adjustments[0]!.at].map(Date.parse).sort();
+  expect(storedTimes).toEqual(kept.map((entry) => Date.parse(entry.takenAt)).sort());
+  expect(readings.map((reading) => reading.input.suctionLineTempC).sort()).toEqual([13, 14, 15]);
 });
 
 test("an entry the server refuses on arrival stays on the device with the reason; the others are stored", async ({ page, context, playwright, baseURL }) => {

@@ -56,7 +56,8 @@ async function sendRound(queryClient: QueryClient, userId: string): Promise<Send
     }
     if (touched.size > 0) {
       void queryClient.invalidateQueries({ queryKey: ["visits", "list"] });
-      void queryClient.invalidateQueries({ queryKey: ["charge-references"] });
+      // A reading may set a charge reference; an adjustment of charge moves a cylinder's contents.
+      for (const kind of ["charge-references", "cylinders", "equipment"]) void queryClient.invalidateQueries({ queryKey: [kind] });
     }
   }
 }

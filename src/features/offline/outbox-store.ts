@@ -1,4 +1,5 @@
 import { Dexie, type EntityTable } from "dexie";
+import { ApiError } from "@/lib/api/api-client.ts";
 
 /**
  * The device's outbox: every entry made at a visit that has not reached the server yet, in the
@@ -12,6 +13,8 @@ export interface OutboxEntry {
   /** Whose entry it is: only they send it or see it on this device. */
   userId: string;
   visitId: string;
+  /** Which form made it: a refused entry goes back into that form. */
+  kind: OutboxKind;
   /** What the technician sees in the lists, e.g. "Reading, circuit 1". */
   label: string;
   /** The write as it will be sent: POST to this API path with this JSON body (clientId included). */
@@ -27,6 +30,8 @@ export interface OutboxEntry {
   fields?: Record<string, string>;
   attempts: number;
 }
+
+export type OutboxKind = "reading" | "adjustment";
 
 class OutboxDatabase extends Dexie {
   entries!: EntityTable<OutboxEntry, "clientId">;
@@ -49,3 +54,29 @@ export const entriesOf = (userId: string): Promise<OutboxEntry[]> =>
   outbox.entries.where("[userId+queuedAt]").between([userId, Dexie.minKey], [userId, Dexie.maxKey]).toArray();
 
 export const discardEntry = (clientId: string): Promise<void> => outbox.entries.delete(clientId);
+
+/**
+ * Sends a visit entry now; without a connection, or without an answer in time, keeps it in the
+ * outbox under its client id instead (the server stores it once even if this try reached it).
+ * Offline it is kept at once, without trying. Any other failure is the caller's to show.
+ *
+ * @returns "stored" with the server's answer, or "kept" when it waits on the device
+ */
+export async function sendOrKeep<T>(
+  send: () => Promise<T>,
+  entry: Omit<OutboxEntry, "queuedAt" | "state" | "attempts">,
+): Promise<{ outcome: "stored"; stored: T } | { outcome: "kept" }> {
+  if (navigator.onLine) {
+    try {
+      return { outcome: "stored", stored: await send() };
+    } catch (error) {
+      if (!(error instanceof ApiError && error.status === 0)) throw error;
+    }
+  }
+  try {
+    await keepInOutbox(entry);
+  } catch {
+    throw new ApiError(0, "No connection, and this device could not keep the entry: nothing was saved. Your values are kept here; save again when the signal is back.");
+  }
+  return { outcome: "kept" };
+}

@@ -143,12 +143,12 @@ export const useVisit = (id: string) => useQuery(visitQueryOptions(id));
 function useVisitMutation<TVariables extends { visitId: string }, TResult>(
   mutationFn: (variables: TVariables) => Promise<TResult>,
   alsoRefresh: readonly string[][] = [],
-  { silentErrors = false } = {},
+  meta: { silentErrors?: boolean; keptOffline?: boolean } = {},
 ) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn,
-    meta: { silentErrors },
+    meta,
     onSuccess: (_result, variables) =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: ["visits", "detail", variables.visitId] }),
@@ -163,7 +163,8 @@ function useVisitMutation<TVariables extends { visitId: string }, TResult>(
 // The run log says itself what became of a save (stored, kept on the device, or refused), so no toast.
 export const useCreateReading = () => useVisitMutation(createReading, [["charge-references"]], { silentErrors: true });
 // A charge adjustment is also a register movement: the visit's refrigerant and the cylinders change with it.
-export const useCreateAdjustment = () => useVisitMutation(createAdjustment, [["register"], ["cylinders"], ["equipment"]]);
+// Without a connection the form keeps it in the device's outbox (src/features/offline/outbox-store.ts).
+export const useCreateAdjustment = () => useVisitMutation(createAdjustment, [["register"], ["cylinders"], ["equipment"]], { keptOffline: true });
 export const useCreateComment = () => useVisitMutation(createComment);
 export const useReviewVisit = () => useVisitMutation(reviewVisit);
 

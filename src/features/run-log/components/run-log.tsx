@@ -10,7 +10,7 @@ import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useMe } from "@/lib/api/auth.ts";
 import { useCreateReading } from "@/lib/api/visits.ts";
-import { discardEntry, keepInOutbox, type OutboxEntry } from "@/features/offline/outbox-store.ts";
+import { discardEntry, sendOrKeep, type OutboxEntry } from "@/features/offline/outbox-store.ts";
 import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
 import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
@@ -132,48 +132,28 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
     const { values } = parseDraft(effectiveDraft, units, atmosphericKPa);
     // The reading keeps the time it was taken, however long the answer takes or how often the save is tried.
     const takenAt = pendingTakenAt ?? new Date().toISOString();
+    const clientId = entryId.take();
+    // Measured values only: the server adds the nameplate targets, the RLA and the site's atmosphere.
+    const body = { circuit, takenAt, clientId, ...(values as MeasuredValues) };
     try {
-      // Measured values only: the server adds the nameplate targets, the RLA and the site's atmosphere.
-      const reading = await createReading.mutateAsync({
+      // Without a connection (or an answer in time) the reading waits in the device's outbox.
+      const sent = await sendOrKeep(() => createReading.mutateAsync({ visitId: visit.id, ...body }), {
+        clientId,
+        userId: userId ?? "",
         visitId: visit.id,
-        circuit,
+        kind: "reading",
+        label: `Reading, circuit ${circuit}`,
+        path: `/visits/${visit.id}/readings`,
+        body,
         takenAt,
-        clientId: entryId.take(),
-        ...(values as MeasuredValues),
       });
-      setSavedAt(reading.takenAt);
-      setKeptAt(null);
+      setSavedAt(sent.outcome === "stored" ? sent.stored.takenAt : null);
+      setKeptAt(sent.outcome === "kept" ? takenAt : null);
       setServerErrors({});
       stored.discard((current) => ({ ...current, runMinutes: "" }));
       setPendingTakenAt(null);
       entryId.release();
     } catch (error) {
-      // No connection, or no answer in time: the reading goes to the outbox under its client id
-      // (the server stores it once, even if this try did reach it) with the time it was taken.
-      if (error instanceof ApiError && error.status === 0 && userId) {
-        const clientId = entryId.take();
-        const kept = await keepInOutbox({
-          clientId,
-          userId,
-          visitId: visit.id,
-          label: `Reading, circuit ${circuit}`,
-          path: `/visits/${visit.id}/readings`,
-          body: { circuit, takenAt, clientId, ...(values as MeasuredValues) },
-          takenAt,
-        }).then(
-          () => true,
-          () => false,
-        );
-        if (kept) {
-          setKeptAt(takenAt);
-          setSavedAt(null);
-          setServerErrors({});
-          stored.discard((current) => ({ ...current, runMinutes: "" }));
-          setPendingTakenAt(null);
-          entryId.release();
-          return;
-        }
-      }
       setPendingTakenAt(takenAt);
       if (error instanceof ApiError && Object.keys(error.fields).length > 0) {
         setServerErrors(error.fields);
@@ -342,7 +322,7 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
         </div>
       </div>
 
-      <WaitingEntries entries={onDevice} onPutBack={(entry: OutboxEntry) => putBack(entry)} />
+      <WaitingEntries entries={onDevice} onPutBack={(entry: OutboxEntry) => (entry.kind === "reading" ? putBack(entry) : undefined)} />
 
       {shownInput && shownResult && (
         <PanelBoundary>
