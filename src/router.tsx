@@ -5,6 +5,7 @@ import { AuthLayout } from "@/components/layouts/auth-layout.tsx";
 import { RouteError } from "@/components/errors/route-error.tsx";
 import { paths } from "@/config/paths.ts";
 import { requireSessionLoader } from "@/features/auth/utils/session-loaders.ts";
+import { keptDataRestored } from "@/features/offline/persist-queries.ts";
 
 interface RouteModule {
   default: ComponentType;
@@ -37,7 +38,11 @@ function screen(
   prefetch: (data: ScreenData, queryClient: QueryClient, params: LoaderFunctionArgs["params"]) => Promise<unknown>,
 ) {
   return {
-    loader: async ({ params }: LoaderFunctionArgs) => prefetch(await screenData(), queryClient, params),
+    // Offline, the screen's data is what the device kept: put back before the loader looks.
+    loader: async ({ params }: LoaderFunctionArgs) => {
+      const [data] = await Promise.all([screenData(), keptDataRestored()]);
+      return prefetch(data, queryClient, params);
+    },
     // The object form tells the router that the chunk brings only the component, so it runs the
     // loader at once instead of after the chunk.
     lazy: { Component: async () => (await load()).default },

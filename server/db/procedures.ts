@@ -25,9 +25,16 @@ import type { StandingPressureResult, Verdict } from "@shared/schemas/procedures
 import type { Database } from "./client.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
 import { electricalChecks, evacuations, leakSearches, organisations, pressureTests, standingPressureChecks } from "./schema.ts";
+import { entryKind, insertEntryOnce, type StoredEntry } from "./store-once.ts";
 
 /** The people a record names: who recorded it and who voided it. */
 const mentioned = (rows: { recordedBy: string | null; voidedBy: string | null }[]) => rows.flatMap((row) => [row.recordedBy, row.voidedBy]);
+
+/** What every new procedure record may carry from the device: its client id and when it was taken (README decision 026). */
+export interface DeviceEntryValues {
+  clientId?: string;
+  takenAt?: Date;
+}
 /** The organisation's procedure settings (organisations.settings), malformed figures dropped. */
 export async function getProcedureSettings(db: Database, organisationId: string): Promise<ProcedureSettings> {
   const [row] = await db.select({ settings: organisations.settings }).from(organisations).where(eq(organisations.id, organisationId));
@@ -48,6 +55,9 @@ function toElectricalCheck(row: typeof electricalChecks.$inferSelect, people: Pe
   };
 }
 
+/** ElectricalCheck entries, for storing once per client id and answering a repeated send. */
+export const electricalCheckEntries = entryKind(electricalChecks, async (db, row) => toElectricalCheck(row, await peopleById(db, mentioned([row]))));
+
 export async function listElectricalChecks(db: Database, organisationId: string, visitId: string): Promise<ElectricalCheck[]> {
   const rows = await db
     .select()
@@ -61,20 +71,18 @@ export async function listElectricalChecks(db: Database, organisationId: string,
 export async function insertElectricalCheck(
   db: Database,
   organisationId: string,
-  values: { visitId: string; input: ElectricalCheckInput; result: ElectricalCheckResult; recordedBy: string },
-): Promise<ElectricalCheck> {
-  const [row] = await db
-    .insert(electricalChecks)
-    .values({
-      organisationId,
-      visitId: values.visitId,
-      target: values.input.target,
-      input: values.input as unknown as Record<string, unknown>,
-      result: values.result as unknown as Record<string, unknown>,
-      recordedBy: values.recordedBy,
-    })
-    .returning();
-  return toElectricalCheck(row, await peopleById(db, mentioned([row])));
+  values: { visitId: string; input: ElectricalCheckInput; result: ElectricalCheckResult; recordedBy: string } & DeviceEntryValues,
+): Promise<StoredEntry<ElectricalCheck>> {
+  return insertEntryOnce(db, electricalCheckEntries, {
+    organisationId,
+    visitId: values.visitId,
+    target: values.input.target,
+    input: values.input as unknown as Record<string, unknown>,
+    result: values.result as unknown as Record<string, unknown>,
+    recordedBy: values.recordedBy,
+    clientId: values.clientId,
+    takenAt: values.takenAt,
+  });
 }
 
 // ---- leak searches --------------------------------------------------------------------------
@@ -91,6 +99,9 @@ function toLeakSearch(row: typeof leakSearches.$inferSelect, people: People): Le
   };
 }
 
+/** LeakSearch entries, for storing once per client id and answering a repeated send. */
+export const leakSearchEntries = entryKind(leakSearches, async (db, row) => toLeakSearch(row, await peopleById(db, mentioned([row]))));
+
 export async function listLeakSearches(db: Database, organisationId: string, visitId: string): Promise<LeakSearch[]> {
   const rows = await db
     .select()
@@ -104,20 +115,18 @@ export async function listLeakSearches(db: Database, organisationId: string, vis
 export async function insertLeakSearch(
   db: Database,
   organisationId: string,
-  values: { visitId: string; input: LeakSearchInput; result: Verdict; recordedBy: string },
-): Promise<LeakSearch> {
-  const [row] = await db
-    .insert(leakSearches)
-    .values({
-      organisationId,
-      visitId: values.visitId,
-      method: values.input.method,
-      input: values.input as unknown as Record<string, unknown>,
-      result: values.result as unknown as Record<string, unknown>,
-      recordedBy: values.recordedBy,
-    })
-    .returning();
-  return toLeakSearch(row, await peopleById(db, mentioned([row])));
+  values: { visitId: string; input: LeakSearchInput; result: Verdict; recordedBy: string } & DeviceEntryValues,
+): Promise<StoredEntry<LeakSearch>> {
+  return insertEntryOnce(db, leakSearchEntries, {
+    organisationId,
+    visitId: values.visitId,
+    method: values.input.method,
+    input: values.input as unknown as Record<string, unknown>,
+    result: values.result as unknown as Record<string, unknown>,
+    recordedBy: values.recordedBy,
+    clientId: values.clientId,
+    takenAt: values.takenAt,
+  });
 }
 
 // ---- standing-pressure checks ---------------------------------------------------------------
@@ -134,6 +143,9 @@ function toStandingPressureCheck(row: typeof standingPressureChecks.$inferSelect
   };
 }
 
+/** StandingPressureCheck entries, for storing once per client id and answering a repeated send. */
+export const standingPressureCheckEntries = entryKind(standingPressureChecks, async (db, row) => toStandingPressureCheck(row, await peopleById(db, mentioned([row]))));
+
 export async function listStandingPressureChecks(db: Database, organisationId: string, visitId: string): Promise<StandingPressureCheck[]> {
   const rows = await db
     .select()
@@ -147,20 +159,18 @@ export async function listStandingPressureChecks(db: Database, organisationId: s
 export async function insertStandingPressureCheck(
   db: Database,
   organisationId: string,
-  values: { visitId: string; input: StandingPressureRecordInput; result: StandingPressureResult; recordedBy: string },
-): Promise<StandingPressureCheck> {
-  const [row] = await db
-    .insert(standingPressureChecks)
-    .values({
-      organisationId,
-      visitId: values.visitId,
-      circuit: values.input.circuit,
-      input: values.input as unknown as Record<string, unknown>,
-      result: values.result as unknown as Record<string, unknown>,
-      recordedBy: values.recordedBy,
-    })
-    .returning();
-  return toStandingPressureCheck(row, await peopleById(db, mentioned([row])));
+  values: { visitId: string; input: StandingPressureRecordInput; result: StandingPressureResult; recordedBy: string } & DeviceEntryValues,
+): Promise<StoredEntry<StandingPressureCheck>> {
+  return insertEntryOnce(db, standingPressureCheckEntries, {
+    organisationId,
+    visitId: values.visitId,
+    circuit: values.input.circuit,
+    input: values.input as unknown as Record<string, unknown>,
+    result: values.result as unknown as Record<string, unknown>,
+    recordedBy: values.recordedBy,
+    clientId: values.clientId,
+    takenAt: values.takenAt,
+  });
 }
 
 // ---- pressure tests -------------------------------------------------------------------------
@@ -177,6 +187,9 @@ function toPressureTest(row: typeof pressureTests.$inferSelect, people: People):
   };
 }
 
+/** PressureTest entries, for storing once per client id and answering a repeated send. */
+export const pressureTestEntries = entryKind(pressureTests, async (db, row) => toPressureTest(row, await peopleById(db, mentioned([row]))));
+
 export async function listPressureTests(db: Database, organisationId: string, visitId: string): Promise<PressureTest[]> {
   const rows = await db
     .select()
@@ -190,19 +203,17 @@ export async function listPressureTests(db: Database, organisationId: string, vi
 export async function insertPressureTest(
   db: Database,
   organisationId: string,
-  values: { visitId: string; input: PressureTestRecordInput; result: PressureTestRecordResult; recordedBy: string },
-): Promise<PressureTest> {
-  const [row] = await db
-    .insert(pressureTests)
-    .values({
-      organisationId,
-      visitId: values.visitId,
-      input: values.input as unknown as Record<string, unknown>,
-      result: values.result as unknown as Record<string, unknown>,
-      recordedBy: values.recordedBy,
-    })
-    .returning();
-  return toPressureTest(row, await peopleById(db, mentioned([row])));
+  values: { visitId: string; input: PressureTestRecordInput; result: PressureTestRecordResult; recordedBy: string } & DeviceEntryValues,
+): Promise<StoredEntry<PressureTest>> {
+  return insertEntryOnce(db, pressureTestEntries, {
+    organisationId,
+    visitId: values.visitId,
+    input: values.input as unknown as Record<string, unknown>,
+    result: values.result as unknown as Record<string, unknown>,
+    recordedBy: values.recordedBy,
+    clientId: values.clientId,
+    takenAt: values.takenAt,
+  });
 }
 
 // ---- evacuations ----------------------------------------------------------------------------
@@ -225,6 +236,9 @@ function toEvacuation(row: EvacuationRow, people: People): Evacuation {
     voided: voidInfo(row, people),
   };
 }
+
+/** Evacuation entries, for storing once per client id and answering a repeated send. */
+export const evacuationEntries = entryKind(evacuations, async (db, row) => toEvacuation(row, await peopleById(db, mentioned([row]))));
 
 export async function listEvacuations(db: Database, organisationId: string, visitId: string): Promise<Evacuation[]> {
   const rows = await db
@@ -256,13 +270,12 @@ export async function insertEvacuation(
     note: string | null;
     result: EvacuationResult;
     recordedBy: string;
+    clientId?: string;
+    /** When the pump was started by the device's clock; now by the server's without it. */
+    startedAt?: Date;
   },
-): Promise<Evacuation> {
-  const [row] = await db
-    .insert(evacuations)
-    .values({ ...values, organisationId, result: values.result as unknown as Record<string, unknown> })
-    .returning();
-  return toEvacuation(row, await peopleById(db, mentioned([row])));
+): Promise<StoredEntry<Evacuation>> {
+  return insertEntryOnce(db, evacuationEntries, { ...values, organisationId, result: values.result as unknown as Record<string, unknown> });
 }
 
 /**
@@ -275,7 +288,7 @@ export async function updateEvacuation(
   db: Database,
   organisationId: string,
   evacuationId: string,
-  values: { targetMicrons: number; isolatedAtMinutes: number | null; samples: { minutes: number; microns: number }[]; note: string | null; result: EvacuationResult },
+  values: { targetMicrons: number; isolatedAtMinutes: number | null; samples: EvacuationRow["samples"]; note: string | null; result: EvacuationResult },
   version?: number,
 ): Promise<Evacuation | undefined> {
   const [row] = await db

@@ -11,6 +11,7 @@ import { MOVEMENT_CYLINDER_RULES, MOVEMENT_DIRECTION, MOVEMENT_KINDS, type Cylin
 import { CHARGE_ADJUSTMENT_KINDS, type ChargeAdjustmentKind } from "@shared/schemas/visits.ts";
 import { alias, type PgSelect } from "drizzle-orm/pg-core";
 import type { Database } from "./client.ts";
+import { entryKind, insertEntryOnce, type StoredEntry } from "./store-once.ts";
 import { afterCursor, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKey } from "./keyset.ts";
 import { adjustments, circuitCharges, cylinders, equipment, refrigerantMovements, sites, users } from "./schema.ts";
 
@@ -274,13 +275,15 @@ export interface MovementInsert {
   note: string | null;
 }
 
-export async function insertMovement(db: Database, organisationId: string, values: MovementInsert): Promise<MovementRow> {
-  const [row] = await db
-    .insert(refrigerantMovements)
-    .values({ ...values, organisationId })
-    .returning({ id: refrigerantMovements.id });
-  const [created] = await selectMovements(db, [eq(refrigerantMovements.id, row.id)]);
-  return toMovement(created);
+/** Register movements of visits, for storing once per client id and answering a repeated send. */
+export const movementEntries = entryKind(refrigerantMovements, async (db, row) => toMovement((await selectMovements(db, [eq(refrigerantMovements.id, row.id)]))[0]!));
+
+/**
+ * Stores a movement, once per client id on a visit (README decision 026): a movement the visit
+ * already holds under the id is answered instead, with `replayed`.
+ */
+export async function insertMovement(db: Database, organisationId: string, values: MovementInsert & { clientId?: string }): Promise<StoredEntry<MovementRow>> {
+  return insertEntryOnce(db, movementEntries, { ...values, organisationId });
 }
 
 /** The standing (not voided) full weigh-in declarations of a visit's circuits. */

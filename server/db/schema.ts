@@ -47,6 +47,20 @@ const voidComplete = (table: string, columns: { voidedAt: AnyPgColumn; voidReaso
   check(`${table}_void_complete`, sql`(${columns.voidedAt} is null) = (${columns.voidReason} is null)`);
 
 /**
+ * The id a device gave an entry when it was first submitted (README decision 026): a send
+ * repeated because its answer was lost names the same id, and the unique index below makes the
+ * database store it once. Null for entries made without one (imports, the seed, older clients).
+ */
+const clientId = () => ({ clientId: uuid("client_id") });
+/**
+ * One entry per client id on a visit (so within one organisation: a visit is one
+ * organisation's), per table. An insert that meets it reads the entry stored first instead
+ * (server/db/store-once.ts); partial, so entries without a client id cost the index nothing.
+ */
+const clientIdUnique = (table: string, columns: { visitId: AnyPgColumn; clientId: AnyPgColumn }) =>
+  uniqueIndex(`${table}_client_id_unique`).on(columns.visitId, columns.clientId).where(sql`${columns.clientId} is not null`);
+
+/**
  * Optimistic concurrency for records people edit: every change bumps the version, and a write
  * naming an older version (If-Match) is refused with 409 instead of silently overwriting.
  */
@@ -434,6 +448,7 @@ export const readings = pgTable(
     pendingImportId: uuid("pending_import_id"),
     /** The visit's revision when this row was last written (inserted, voided, imported): a trigger sets it (migration 0014). */
     revision: integer("revision").notNull().default(0),
+    ...clientId(),
     ...voidColumns(),
     createdAt,
     // The few figures the trend, the chart series and lists read, copied out of `result` and
@@ -449,6 +464,7 @@ export const readings = pgTable(
     index("readings_visit_revision_idx").on(table.visitId, table.revision),
     index("readings_pending_import_idx").on(table.pendingImportId).where(sql`${table.pendingImportId} is not null`),
     voidComplete("readings", table),
+    clientIdUnique("readings", table),
   ],
 );
 
@@ -478,6 +494,7 @@ export const adjustments = pgTable(
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     /** The visit's revision when this row was last written (inserted, voided, imported): a trigger sets it (migration 0014). */
     revision: integer("revision").notNull().default(0),
+    ...clientId(),
     ...voidColumns(),
     createdAt,
   },
@@ -486,6 +503,7 @@ export const adjustments = pgTable(
     voidComplete("adjustments", table),
     // One movement has one run-log entry, so a kilogram can never be shown twice.
     uniqueIndex("adjustments_movement_unique").on(table.movementId).where(sql`${table.movementId} is not null`),
+    clientIdUnique("adjustments", table),
   ],
 );
 
@@ -504,9 +522,10 @@ export const visitComments = pgTable(
     body: text("body").notNull(),
     /** The visit's revision when this row was last written (inserted, voided, imported): a trigger sets it (migration 0014). */
     revision: integer("revision").notNull().default(0),
+    ...clientId(),
     createdAt,
   },
-  (table) => [index("visit_comments_visit_idx").on(table.visitId, table.createdAt)],
+  (table) => [index("visit_comments_visit_idx").on(table.visitId, table.createdAt), clientIdUnique("visit_comments", table)],
 );
 
 /** Photos are stored as files under the data folder with random names; this is their index. */
@@ -529,9 +548,10 @@ export const photos = pgTable(
     uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
     /** The visit's revision when this row was last written (inserted, voided, imported): a trigger sets it (migration 0014). */
     revision: integer("revision").notNull().default(0),
+    ...clientId(),
     createdAt,
   },
-  (table) => [index("photos_visit_idx").on(table.visitId)],
+  (table) => [index("photos_visit_idx").on(table.visitId), clientIdUnique("photos", table)],
 );
 
 /*
@@ -559,10 +579,11 @@ export const electricalChecks = pgTable(
     result: jsonb("result").$type<Record<string, unknown>>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [index("electrical_checks_visit_idx").on(table.visitId, table.takenAt), voidComplete("electrical_checks", table)],
+  (table) => [index("electrical_checks_visit_idx").on(table.visitId, table.takenAt), voidComplete("electrical_checks", table), clientIdUnique("electrical_checks", table)],
 );
 
 /** One leak search: the method, the places checked, leaks found and repaired, the recheck. */
@@ -581,10 +602,11 @@ export const leakSearches = pgTable(
     result: jsonb("result").$type<Record<string, unknown>>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [index("leak_searches_visit_idx").on(table.visitId, table.takenAt), voidComplete("leak_searches", table)],
+  (table) => [index("leak_searches_visit_idx").on(table.visitId, table.takenAt), voidComplete("leak_searches", table), clientIdUnique("leak_searches", table)],
 );
 
 /**
@@ -608,10 +630,11 @@ export const standingPressureChecks = pgTable(
     result: jsonb("result").$type<Record<string, unknown>>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [index("standing_pressure_checks_visit_idx").on(table.visitId, table.takenAt), voidComplete("standing_pressure_checks", table)],
+  (table) => [index("standing_pressure_checks_visit_idx").on(table.visitId, table.takenAt), voidComplete("standing_pressure_checks", table), clientIdUnique("standing_pressure_checks", table)],
 );
 
 /** A nitrogen strength/tightness test: test pressure against the rated pressure, start and end of the hold. */
@@ -629,10 +652,11 @@ export const pressureTests = pgTable(
     result: jsonb("result").$type<Record<string, unknown>>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [index("pressure_tests_visit_idx").on(table.visitId, table.takenAt), voidComplete("pressure_tests", table)],
+  (table) => [index("pressure_tests_visit_idx").on(table.visitId, table.takenAt), voidComplete("pressure_tests", table), clientIdUnique("pressure_tests", table)],
 );
 
 /**
@@ -652,17 +676,19 @@ export const evacuations = pgTable(
     targetMicrons: doublePrecision("target_microns").notNull(),
     /** Minutes from the start at which the pump was valved off; null while still pulling down. */
     isolatedAtMinutes: doublePrecision("isolated_at_minutes"),
-    samples: jsonb("samples").$type<{ minutes: number; microns: number }[]>().notNull().default([]),
+    /** A sample added from a device keeps its client id, so a repeated send adds it once (README decision 026). */
+    samples: jsonb("samples").$type<{ minutes: number; microns: number; clientId?: string }[]>().notNull().default([]),
     note: text("note"),
     result: jsonb("result").$type<Record<string, unknown>>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     startedAt: timestamp("started_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     /** Valving off, the target and the note can change (PATCH with If-Match). */
     version: version(),
+    ...clientId(),
     ...voidColumns(),
     ...timestamps,
   },
-  (table) => [index("evacuations_visit_idx").on(table.visitId, table.startedAt), voidComplete("evacuations", table)],
+  (table) => [index("evacuations_visit_idx").on(table.visitId, table.startedAt), voidComplete("evacuations", table), clientIdUnique("evacuations", table)],
 );
 
 /**
@@ -785,6 +811,7 @@ export const refrigerantMovements = pgTable(
     technicianId: uuid("technician_id").references(() => users.id),
     at: timestamp("at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     note: text("note"),
+    ...clientId(),
     ...voidColumns(),
     createdAt,
   },
@@ -800,6 +827,7 @@ export const refrigerantMovements = pgTable(
     index("refrigerant_movements_technician_register_idx")
       .on(table.organisationId, table.technicianId, table.at, table.createdAt, table.id)
       .where(sql`${table.voidedAt} is null`),
+    clientIdUnique("refrigerant_movements", table),
   ],
 );
 

@@ -28,6 +28,7 @@ import type { Database } from "./client.ts";
 import { circuitReadingsPage } from "./circuit-readings.ts";
 import { afterCursor, containsTerm, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKey } from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
+import { entryKind, insertEntryOnce, type StoredEntry } from "./store-once.ts";
 import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitReadingRecorders, visitSearch, visitTechnicians, visits } from "./schema.ts";
 import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
 
@@ -269,17 +270,54 @@ export interface NewReading {
   input: DiagnosisInput;
   result: DiagnosisResult;
   recordedBy: string;
+  /** The device's id for the reading (README decision 026): stored once per visit. */
+  clientId?: string | null;
 }
 
 /**
  * Several readings in one statement (readings saved together, server/visits/save-readings.ts),
- * answered as the run log shows them. The caller knows the ids, times and recorders' names, so
- * nothing is read back: the stored input and result are the caller's own.
+ * answered as the run log shows them, in the order given. The caller knows the ids, times and
+ * recorders' names, so what it stored is not read back. A reading whose client id the visit
+ * already holds is not stored again (the unique index decides, even between two batches racing
+ * on two servers): its answer is the reading stored first, read back, marked `replayed`. The
+ * caller gives each client id of a visit once.
  */
-export async function insertReadings(db: Database, rows: NewReading[], people: People): Promise<Reading[]> {
+export async function insertReadings(db: Database, rows: NewReading[], people: People): Promise<StoredEntry<Reading>[]> {
   if (rows.length === 0) return [];
-  await db.insert(readings).values(rows);
-  return rows.map((row) => toReading({ ...row, voidedAt: null, voidedBy: null, voidReason: null }, people));
+  const inserted = new Set(
+    (
+      await db
+        .insert(readings)
+        .values(rows)
+        .onConflictDoNothing({ target: [readings.visitId, readings.clientId], where: sql`${readings.clientId} is not null` })
+        .returning({ id: readings.id })
+    ).map((row) => row.id),
+  );
+  const held = rows.filter((row) => !inserted.has(row.id));
+  const stored = new Map((await readingsByClientId(db, held)).map((row) => [`${row.visitId}:${row.clientId}`, row]));
+  const heldPeople = await peopleById(db, [...stored.values()].flatMap(mentionedPeople));
+  return rows.map((row) => {
+    if (inserted.has(row.id)) return { entry: toReading({ ...row, voidedAt: null, voidedBy: null, voidReason: null }, people), replayed: false };
+    const first = stored.get(`${row.visitId}:${row.clientId}`);
+    if (!first) throw new Error(`insertReadings found no reading holding client id ${row.clientId}`);
+    return { entry: toReading(first, heldPeople), replayed: true };
+  });
+}
+
+/** The stored readings holding the client ids of these (visit, client id) pairs, in one query. */
+export async function readingsByClientId(db: Database, keys: readonly { visitId: string; clientId?: string | null }[]): Promise<(typeof readings.$inferSelect)[]> {
+  const named = keys.filter((key): key is { visitId: string; clientId: string } => Boolean(key.clientId));
+  if (named.length === 0) return [];
+  return db
+    .select()
+    .from(readings)
+    .where(
+      and(
+        inArray(readings.visitId, [...new Set(named.map((key) => key.visitId))]),
+        inArray(readings.clientId, [...new Set(named.map((key) => key.clientId))]),
+        isRecord,
+      ),
+    );
 }
 
 const mentionedPeople = (row: { recordedBy: string | null; voidedBy: string | null }) => [row.recordedBy, row.voidedBy];
@@ -316,32 +354,43 @@ function toAdjustment(row: typeof adjustments.$inferSelect, people: People): Adj
   };
 }
 
+/** Adjustments, for storing once per client id and answering a repeated send. */
+export const adjustmentEntries = entryKind(adjustments, async (db, row) => toAdjustment(row, await peopleById(db, mentionedPeople(row))));
+
+/** Stores an adjustment, once per client id on the visit (README decision 026). */
 export async function insertAdjustment(
   db: Database,
   organisationId: string,
-  values: { visitId: string; circuit: number | null; at?: Date; kind: string; description: string; amountKg: number | null; movementId?: string | null; recordedBy: string },
-): Promise<Adjustment> {
-  const [row] = await db.insert(adjustments).values({ ...values, organisationId }).returning();
-  return toAdjustment(row, await peopleById(db, [row.recordedBy]));
+  values: { visitId: string; circuit: number | null; at?: Date; kind: string; description: string; amountKg: number | null; movementId?: string | null; recordedBy: string; clientId?: string },
+): Promise<StoredEntry<Adjustment>> {
+  return insertEntryOnce(db, adjustmentEntries, { ...values, organisationId });
 }
 
+/** The reading a comment is about, as the comment shows it; undefined when it is no record of the visit. */
+async function commentedReading(db: Database, visitId: string, readingId: string | null): Promise<Comment["reading"] | undefined> {
+  if (!readingId) return null;
+  const [found] = await db
+    .select({ circuit: readings.circuit, takenAt: readings.takenAt })
+    .from(readings)
+    .where(and(eq(readings.id, readingId), eq(readings.visitId, visitId), isRecord));
+  return found ? { circuit: found.circuit, takenAt: found.takenAt.toISOString() } : undefined;
+}
+
+/** Comments, for storing once per client id and answering a repeated send. */
+export const commentEntries = entryKind(visitComments, async (db, row): Promise<Comment> => {
+  const people = await peopleById(db, [row.authorId]);
+  const reading = (await commentedReading(db, row.visitId, row.readingId)) ?? null;
+  return { id: row.id, readingId: row.readingId, reading, body: row.body, author: person(people, row.authorId), createdAt: row.createdAt.toISOString() };
+});
+
+/** Stores a comment, once per client id on the visit; undefined when the reading it names is not the visit's. */
 export async function insertComment(
   db: Database,
   organisationId: string,
-  values: { visitId: string; readingId: string | null; authorId: string; body: string },
-): Promise<Comment | undefined> {
-  let reading: Comment["reading"] = null;
-  if (values.readingId) {
-    const [found] = await db
-      .select({ circuit: readings.circuit, takenAt: readings.takenAt })
-      .from(readings)
-      .where(and(eq(readings.id, values.readingId), eq(readings.visitId, values.visitId), isRecord));
-    if (!found) return undefined;
-    reading = { circuit: found.circuit, takenAt: found.takenAt.toISOString() };
-  }
-  const [row] = await db.insert(visitComments).values({ ...values, organisationId }).returning();
-  const people = await peopleById(db, [row.authorId]);
-  return { id: row.id, readingId: row.readingId, reading, body: row.body, author: person(people, row.authorId), createdAt: row.createdAt.toISOString() };
+  values: { visitId: string; readingId: string | null; authorId: string; body: string; clientId?: string },
+): Promise<StoredEntry<Comment> | undefined> {
+  if ((await commentedReading(db, values.visitId, values.readingId)) === undefined) return undefined;
+  return insertEntryOnce(db, commentEntries, { ...values, organisationId });
 }
 
 export async function updateVisitStatus(
@@ -505,13 +554,22 @@ export async function visitReadingsPage(db: Database, visitId: string, query: { 
   return { readings: page.rows.map((row) => toReading(row, people)), olderCursor: page.olderCursor };
 }
 
+/** Photos, for storing once per client id and answering a repeated send. */
+export const photoEntries = entryKind(photos, async (_db, row): Promise<Photo> => ({
+  id: row.id,
+  kind: row.kind as Photo["kind"],
+  caption: row.caption,
+  createdAt: row.createdAt.toISOString(),
+  ...photoUrls(row.id),
+}));
+
+/** Stores a photo's index row, once per client id on the visit (a repeat's files are the caller's to discard). */
 export async function insertPhoto(
   db: Database,
   organisationId: string,
-  values: { visitId: string; kind: string; caption: string | null; storedName: string; thumbnailName: string; mimeType: string; bytes: number; uploadedBy: string },
-): Promise<Photo> {
-  const [row] = await db.insert(photos).values({ ...values, organisationId }).returning();
-  return { id: row.id, kind: row.kind as Photo["kind"], caption: row.caption, createdAt: row.createdAt.toISOString(), ...photoUrls(row.id) };
+  values: { visitId: string; kind: string; caption: string | null; storedName: string; thumbnailName: string; mimeType: string; bytes: number; uploadedBy: string; clientId?: string },
+): Promise<StoredEntry<Photo>> {
+  return insertEntryOnce(db, photoEntries, { ...values, organisationId });
 }
 
 export async function findPhoto(db: Database, organisationId: string, photoId: string) {

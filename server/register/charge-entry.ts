@@ -16,9 +16,10 @@ import {
 } from "@shared/schemas/register.ts";
 import type { Adjustment, ChargeAdjustmentKind } from "@shared/schemas/visits.ts";
 import type { Database } from "../db/client.ts";
-import { getCylinder, insertMovement, visitMovements, type CylinderRow, type MovementRow } from "../db/register.ts";
+import { getCylinder, insertMovement, movementEntries, visitMovements, type CylinderRow, type MovementRow } from "../db/register.ts";
 import { adjustments } from "../db/schema.ts";
-import { insertAdjustment } from "../db/visits.ts";
+import { findEntry, type StoredEntry } from "../db/store-once.ts";
+import { adjustmentEntries, insertAdjustment } from "../db/visits.ts";
 import { HttpError } from "../http/http-error.ts";
 import { cylinderFill } from "./register-checks.ts";
 
@@ -101,16 +102,44 @@ export interface MovementEntry {
   note: string | null;
 }
 
+/** A charge entry as stored: the movement, its run-log adjustment and the cylinder it used. */
+export interface ChargeEntry {
+  movement: MovementRow;
+  adjustment: Adjustment;
+  cylinder: CylinderRow | undefined;
+  /** Stored by an earlier send of the same client id (README decision 026): nothing was stored now. */
+  replayed: boolean;
+}
+
+/** The charge entry of the visit a device stored under this client id (on its movement), if any. */
+export async function findChargeEntry(db: Database, organisationId: string, visitId: string, clientId: string | undefined): Promise<ChargeEntry | undefined> {
+  const movement = await findEntry(db, movementEntries, visitId, clientId);
+  return movement ? storedChargeEntry(db, organisationId, movement) : undefined;
+}
+
+/** A stored movement with its linked run-log adjustment and its cylinder as they stand now. */
+async function storedChargeEntry(db: Database, organisationId: string, movement: MovementRow): Promise<ChargeEntry> {
+  const [row] = await db
+    .select()
+    .from(adjustments)
+    .where(and(eq(adjustments.organisationId, organisationId), eq(adjustments.movementId, movement.id)));
+  if (!row) throw new Error(`Movement ${movement.id} has no run-log adjustment`);
+  const cylinder = movement.cylinder ? await getCylinder(db, organisationId, movement.cylinder.id) : undefined;
+  return { movement, adjustment: await adjustmentEntries.present(db, row), cylinder, replayed: true };
+}
+
 /**
  * Checks a visit movement against the register rules and stores it, with its run-log charge
  * adjustment linked to it. Call inside writeToVisit: the cylinder's contents are read in the
- * same transaction, and a refusal (thrown) rolls both records back.
+ * same transaction, and a refusal (thrown) rolls both records back. With a client id, both
+ * records carry it and the movement's insert decides (its unique index): a movement the visit
+ * already holds under the id is answered with its adjustment, and nothing is stored.
  */
 export async function recordChargeEntry(
   tx: Database,
   organisationId: string,
-  values: { visitId: string; unit: VisitUnit; technicianId: string; movement: MovementEntry; adjustment?: { description: string } },
-): Promise<{ movement: MovementRow; adjustment: Adjustment; cylinder: CylinderRow | undefined }> {
+  values: { visitId: string; unit: VisitUnit; technicianId: string; movement: MovementEntry; adjustment?: { description: string }; clientId?: string },
+): Promise<ChargeEntry> {
   const { unit, movement: entry } = values;
   if (entry.kind === "sent-for-reclaim") throw fieldError("kind", "A cylinder is sent for reclaim from the Cylinders page, not from a visit");
   let cylinder: CylinderRow | undefined;
@@ -135,7 +164,8 @@ export async function recordChargeEntry(
       );
     }
   }
-  const movement = await insertMovement(tx, organisationId, {
+  const { entry: movement, replayed } = await insertMovement(tx, organisationId, {
+    clientId: values.clientId,
     visitId: values.visitId,
     equipmentId: unit.id,
     circuit: entry.circuit,
@@ -147,7 +177,9 @@ export async function recordChargeEntry(
     at: entry.at,
     note: entry.note,
   });
-  const adjustment = await insertAdjustment(tx, organisationId, {
+  if (replayed) return storedChargeEntry(tx, organisationId, movement);
+  const { entry: adjustment } = await insertAdjustment(tx, organisationId, {
+    clientId: values.clientId,
     visitId: values.visitId,
     circuit: entry.circuit,
     at: new Date(movement.at),
@@ -157,7 +189,7 @@ export async function recordChargeEntry(
     movementId: movement.id,
     recordedBy: values.technicianId,
   });
-  return { movement, adjustment, cylinder };
+  return { movement, adjustment, cylinder, replayed: false };
 }
 
 /**
@@ -168,8 +200,8 @@ export async function recordChargeEntry(
 export async function linkToMovement(
   tx: Database,
   organisationId: string,
-  values: { visitId: string; movementId: string; kind: ChargeAdjustmentKind; amountKg: number; circuit: number; description: string; at?: Date; recordedBy: string },
-): Promise<Adjustment> {
+  values: { visitId: string; movementId: string; kind: ChargeAdjustmentKind; amountKg: number; circuit: number; description: string; at?: Date; recordedBy: string; clientId?: string },
+): Promise<StoredEntry<Adjustment>> {
   const movement = (await visitMovements(tx, organisationId, values.visitId)).find((candidate) => candidate.id === values.movementId);
   if (!movement || movement.voided !== null) throw fieldError("movementId", "Choose a standing register line of this visit");
   if (movement.kind === "sent-for-reclaim" || MOVEMENT_DIRECTION[movement.kind] !== values.kind) {
@@ -191,5 +223,6 @@ export async function linkToMovement(
     amountKg: movement.kg,
     movementId: movement.id,
     recordedBy: values.recordedBy,
+    clientId: values.clientId,
   });
 }

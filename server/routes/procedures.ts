@@ -25,6 +25,9 @@ import { getAuth } from "../auth/session.ts";
 import type { Database } from "../db/client.ts";
 import { getEquipment, getSite } from "../db/equipment.ts";
 import {
+  electricalCheckEntries,
+  evacuationEntries,
+  type EvacuationRow,
   findEvacuation,
   getProcedureSettings,
   insertElectricalCheck,
@@ -32,11 +35,14 @@ import {
   insertLeakSearch,
   insertPressureTest,
   insertStandingPressureCheck,
+  leakSearchEntries,
   listElectricalChecks,
   listEvacuations,
   listLeakSearches,
   listPressureTests,
   listStandingPressureChecks,
+  pressureTestEntries,
+  standingPressureCheckEntries,
   updateEvacuation,
 } from "../db/procedures.ts";
 import { findVisit, joinCrew } from "../db/visits.ts";
@@ -44,6 +50,7 @@ import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
 import { requireIfMatch, staleWrite } from "../http/versioning.ts";
+import { answeredBefore, clientIdOf, deviceDate, requireDeviceTime, sendEntry } from "../visits/device-entry.ts";
 import { siteAtmosphere } from "../visits/reading-input.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import { electricalCheckResult, evacuationResult, leakSearchResult, pressureTestRecordResult } from "../procedures/record-results.ts";
@@ -104,8 +111,10 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.post("/:id/electrical-checks", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
+    if (await answeredBefore(db, res, electricalCheckEntries, "electricalCheck", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
-    const body = ElectricalCheckBodySchema.parse(req.body);
+    const { clientId, takenAt, ...body } = ElectricalCheckBodySchema.parse(req.body);
+    requireDeviceTime("takenAt", takenAt, visit);
     const unit = await loadUnit(organisationId, visit.equipmentId);
     // The nameplate fills in what the technician did not type (as targets do for readings).
     const nameplateV = body.nameplateV ?? unit.supplyVoltageV ?? null;
@@ -130,10 +139,10 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     };
     const settings = await getProcedureSettings(db, organisationId);
     const result = electricalCheckResult(input, settings.procedureLimits);
-    const electricalCheck = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertElectricalCheck(tx, organisationId, { visitId: visit.id, input, result, recordedBy: user.id }),
+    const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+      insertElectricalCheck(tx, organisationId, { visitId: visit.id, input, result, recordedBy: user.id, clientId, takenAt: deviceDate(takenAt) }),
     );
-    res.status(201).json({ electricalCheck });
+    sendEntry(res, { electricalCheck: entry }, replayed);
   });
 
   // ---- leak searches ------------------------------------------------------------------------
@@ -147,12 +156,14 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.post("/:id/leak-searches", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
+    if (await answeredBefore(db, res, leakSearchEntries, "leakSearch", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
-    const input = LeakSearchBodySchema.parse(req.body);
-    const leakSearch = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertLeakSearch(tx, organisationId, { visitId: visit.id, input, result: leakSearchResult(input), recordedBy: user.id }),
+    const { clientId, takenAt, ...input } = LeakSearchBodySchema.parse(req.body);
+    requireDeviceTime("takenAt", takenAt, visit);
+    const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+      insertLeakSearch(tx, organisationId, { visitId: visit.id, input, result: leakSearchResult(input), recordedBy: user.id, clientId, takenAt: deviceDate(takenAt) }),
     );
-    res.status(201).json({ leakSearch });
+    sendEntry(res, { leakSearch: entry }, replayed);
   });
 
   // ---- standing-pressure checks -------------------------------------------------------------
@@ -168,8 +179,10 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.post("/:id/standing-pressure-checks", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
+    if (await answeredBefore(db, res, standingPressureCheckEntries, "standingPressureCheck", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
-    const body = StandingPressureBodySchema.parse(req.body);
+    const { clientId, takenAt, ...body } = StandingPressureBodySchema.parse(req.body);
+    requireDeviceTime("takenAt", takenAt, visit);
     const unit = await loadUnit(organisationId, visit.equipmentId);
     const circuit = body.circuit ?? null;
     if (circuit !== null && !unit.circuits.some((candidate) => candidate.number === circuit)) {
@@ -187,10 +200,10 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     };
     const outcome = standingPressureOutcome(input);
     if ("problem" in outcome) throw new HttpError(400, FIELDS, { [outcome.problem.field]: outcome.problem.message });
-    const standingPressureCheck = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertStandingPressureCheck(tx, organisationId, { visitId: visit.id, input, result: outcome.result, recordedBy: user.id }),
+    const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+      insertStandingPressureCheck(tx, organisationId, { visitId: visit.id, input, result: outcome.result, recordedBy: user.id, clientId, takenAt: deviceDate(takenAt) }),
     );
-    res.status(201).json({ standingPressureCheck });
+    sendEntry(res, { standingPressureCheck: entry }, replayed);
   });
 
   // ---- pressure tests -----------------------------------------------------------------------
@@ -209,8 +222,10 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.post("/:id/pressure-tests", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
+    if (await answeredBefore(db, res, pressureTestEntries, "pressureTest", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
-    const body = PressureTestBodySchema.parse(req.body);
+    const { clientId, takenAt, ...body } = PressureTestBodySchema.parse(req.body);
+    requireDeviceTime("takenAt", takenAt, visit);
     const settings = await getProcedureSettings(db, organisationId);
     const input = {
       ...body,
@@ -219,10 +234,10 @@ export function proceduresRouter({ db }: { db: Database }): Router {
       note: body.note || null,
     };
     const result = pressureTestRecordResult(input, settings.procedureLimits);
-    const pressureTest = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertPressureTest(tx, organisationId, { visitId: visit.id, input, result, recordedBy: user.id }),
+    const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+      insertPressureTest(tx, organisationId, { visitId: visit.id, input, result, recordedBy: user.id, clientId, takenAt: deviceDate(takenAt) }),
     );
-    res.status(201).json({ pressureTest });
+    sendEntry(res, { pressureTest: entry }, replayed);
   });
 
   // ---- evacuations --------------------------------------------------------------------------
@@ -237,13 +252,15 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   router.post("/:id/evacuations", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
+    if (await answeredBefore(db, res, evacuationEntries, "evacuation", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
-    const body = EvacuationCreateSchema.parse(req.body);
+    const { clientId, startedAt, ...body } = EvacuationCreateSchema.parse(req.body);
+    requireDeviceTime("startedAt", startedAt, visit);
     const settings = await getProcedureSettings(db, organisationId);
     const target = body.targetMicrons ?? targetMicrons(settings);
     const samples = body.samples ?? [];
     const isolatedAtMinutes = body.isolatedAtMinutes ?? null;
-    const evacuation = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+    const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
       insertEvacuation(tx, organisationId, {
         visitId: visit.id,
         targetMicrons: target,
@@ -252,9 +269,11 @@ export function proceduresRouter({ db }: { db: Database }): Router {
         note: body.note || null,
         result: evacuationResult(samples, target, isolatedAtMinutes, settings.procedureLimits),
         recordedBy: user.id,
+        clientId,
+        startedAt: deviceDate(startedAt),
       }),
     );
-    res.status(201).json({ evacuation });
+    sendEntry(res, { evacuation: entry }, replayed);
   });
 
   /** The evacuation as it stands, read under the visit's lock; a voided one takes no more changes. */
@@ -265,21 +284,39 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     return row;
   }
 
+  /** The evacuation as the API shows it when it already holds the sample with this client id, if it does. */
+  async function holdingSample(tx: Database, row: EvacuationRow | undefined, clientId: string | undefined) {
+    if (!row || !clientId || !row.samples.some((sample) => sample.clientId === clientId)) return undefined;
+    return evacuationEntries.present(tx, row);
+  }
+
   // Samples are appended under the visit's lock, so two devices adding readings at once both land.
+  // A sample is no row of its own but an element of the evacuation's series: a repeated send is
+  // told apart by the client id kept on the sample, checked under that same lock (which every
+  // change to the series takes), so two sends of one sample add it once (README decision 026).
   router.post("/:id/evacuations/:evacuationId/samples", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
+    const evacuationId = parseId(req.params.evacuationId, "Evacuation");
+    const repeated = await holdingSample(db, await findEvacuation(db, organisationId, visit.id, evacuationId), clientIdOf(req.body));
+    if (repeated) return void sendEntry(res, { evacuation: repeated }, true);
     requireWritableVisit(visit.status);
-    const body = EvacuationSampleBodySchema.parse(req.body);
+    const { clientId, ...body } = EvacuationSampleBodySchema.parse(req.body);
     const settings = await getProcedureSettings(db, organisationId);
+    let replayed = false;
     const evacuation = await recordOnVisit(organisationId, visit.id, user.id, async (tx) => {
-      const row = await loadEvacuation(tx, organisationId, visit.id, req.params.evacuationId);
+      const held = await holdingSample(tx, await findEvacuation(tx, organisationId, visit.id, evacuationId), clientId);
+      if (held) {
+        replayed = true;
+        return held;
+      }
+      const row = await loadEvacuation(tx, organisationId, visit.id, evacuationId);
       const minutes = body.minutes ?? minutesSince(row.startedAt);
       const last = row.samples.at(-1);
       if (last && minutes <= last.minutes) {
         throw new HttpError(400, FIELDS, { minutes: `Each reading must be later than the one before it (${last.minutes} min)` });
       }
-      const samples = [...row.samples, { minutes, microns: body.microns }];
+      const samples = [...row.samples, { minutes, microns: body.microns, ...(clientId ? { clientId } : {}) }];
       return (await updateEvacuation(tx, organisationId, row.id, {
         targetMicrons: row.targetMicrons,
         isolatedAtMinutes: row.isolatedAtMinutes,
@@ -288,7 +325,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
         result: evacuationResult(samples, row.targetMicrons, row.isolatedAtMinutes, settings.procedureLimits),
       }))!;
     });
-    res.status(201).json({ evacuation });
+    sendEntry(res, { evacuation }, replayed);
   });
 
   // Valving off, the target and the note change the record: the request names the version it saw.

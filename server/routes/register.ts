@@ -48,7 +48,8 @@ import { findVisit, joinCrew } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
-import { checkCylinder, fieldError, recordChargeEntry } from "../register/charge-entry.ts";
+import { checkCylinder, fieldError, findChargeEntry, recordChargeEntry } from "../register/charge-entry.ts";
+import { clientIdOf, deviceDate, requireDeviceTime, sendEntry } from "../visits/device-entry.ts";
 import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import { circuitBalance, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
@@ -103,7 +104,7 @@ export function cylindersRouter({ db }: Deps): Router {
     if (!row) throw notFound("Cylinder");
     const values = ReclaimCreateSchema.parse(req.body);
     checkCylinder(row, "sent-for-reclaim", row.refrigerant, values.kg);
-    const movement = await insertMovement(db, organisationId, {
+    const { entry: movement } = await insertMovement(db, organisationId, {
       visitId: null,
       equipmentId: null,
       circuit: null,
@@ -197,24 +198,29 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
   router.post("/:id/refrigerant", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
+    // A repeated send (README decision 026) is answered with the entry stored first, whatever the visit's status now.
+    const earlier = await findChargeEntry(db, organisationId, visit.id, clientIdOf(req.body));
+    if (earlier) return void sendEntry(res, { movement: earlier.movement, cylinder: earlier.cylinder ? toCylinder(earlier.cylinder) : null }, true);
     requireWritableVisit(visit.status);
     const values = MovementCreateSchema.parse(req.body);
+    requireDeviceTime("at", values.at, visit, { backDated: true });
     if (!unit.circuits.some((circuit) => circuit.number === values.circuit)) {
       throw fieldError("circuit", `${unit.name} has ${unit.circuits.length} circuit(s)`);
     }
     // The movement and its run-log charge adjustment, checked and stored together (server/register/charge-entry.ts).
-    const { movement, cylinder } = await writeToVisit(db, organisationId, visit.id, async (tx) => {
+    const { movement, cylinder, replayed } = await writeToVisit(db, organisationId, visit.id, async (tx) => {
       const stored = await recordChargeEntry(tx, organisationId, {
         visitId: visit.id,
         unit,
         technicianId: user.id,
-        movement: { kind: values.kind, kg: values.kg, circuit: values.circuit, cylinderId: values.cylinderId ?? null, at: values.at ? new Date(values.at) : undefined, note: values.note },
+        movement: { kind: values.kind, kg: values.kg, circuit: values.circuit, cylinderId: values.cylinderId ?? null, at: deviceDate(values.at), note: values.note },
+        clientId: values.clientId,
       });
       await joinCrew(tx, visit.id, user.id);
       return stored;
     });
     const after = cylinder ? await getCylinder(db, organisationId, cylinder.id) : undefined;
-    res.status(201).json({ movement, cylinder: after ? toCylinder(after) : null });
+    sendEntry(res, { movement, cylinder: after ? toCylinder(after) : null }, replayed);
   });
 
   // Declares that the circuit had a full weigh-in; the weighed-in mass is the register's

@@ -2,6 +2,7 @@ import { Router } from "express";
 import { z } from "zod";
 import { can, type Permission } from "@shared/schemas/auth.ts";
 import { instant } from "@shared/schemas/dates.ts";
+import { optionalClientId } from "@shared/schemas/device-entries.ts";
 import { VisitListQuerySchema } from "@shared/schemas/list-pages.ts";
 import { text } from "@shared/schemas/text.ts";
 import {
@@ -29,7 +30,10 @@ import { getAuth } from "../auth/session.ts";
 import { circuitCharge } from "../db/charge-references.ts";
 import { getEquipment, getSite } from "../db/equipment.ts";
 import { insertVisitEvent } from "../db/visit-events.ts";
+import { findEntry } from "../db/store-once.ts";
 import {
+  adjustmentEntries,
+  commentEntries,
   createVisit,
   findPhoto,
   findVisit,
@@ -41,6 +45,7 @@ import {
   insertPhoto,
   joinCrew,
   listVisitPage,
+  photoEntries,
   updateVisitStatus,
   visitReadingsPage,
 } from "../db/visits.ts";
@@ -57,6 +62,7 @@ import { chargeMovementKind, linkToMovement, recordChargeEntry } from "../regist
 import { createReadingSaver } from "../visits/save-readings.ts";
 import type { ReadingContext } from "../visits/reading-input.ts";
 import { matchesIfNoneMatch, revisionSince, visitEtag } from "../visits/visit-revision.ts";
+import { answeredBefore, deviceDate, requireDeviceTime, sendEntry } from "../visits/device-entry.ts";
 import { voidVisitRecord } from "../visits/void-record.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
@@ -169,8 +175,9 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     const visitId = parseId(req.params.id, "Visit");
     // Checked against the visit first (404, 409), then the body's refusal (400), inside the batch.
     const body = ReadingBodySchema.safeParse(req.body);
-    const reading = await saveReading({ organisationId, visitId, user: { id: user.id, name: user.name }, body });
-    res.status(201).json({ reading });
+    let replayed = false;
+    const reading = await saveReading({ organisationId, visitId, user: { id: user.id, name: user.name }, body, onReplayed: () => (replayed = true) });
+    sendEntry(res, { reading }, replayed);
   });
 
   // CSV import: preview first (nothing stored), then store all rows only if every row is
@@ -201,8 +208,11 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   router.post("/:id/adjustments", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
+    if (await answeredBefore(db, res, adjustmentEntries, "adjustment", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
-    const values = AdjustmentCreateSchema.parse(req.body);
+    const { clientId, ...values } = AdjustmentCreateSchema.parse(req.body);
+    requireDeviceTime("at", values.at, visit, { backDated: true });
+    const at = deviceDate(values.at);
     if (isChargeAdjustment(values.kind)) {
       // Refrigerant added or removed is a register movement: both records in one transaction,
       // linked, with one figure; the register's rules refuse it whole or store it whole.
@@ -211,36 +221,40 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
       const circuit = values.circuit!;
       if (!unit.circuits.some((candidate) => candidate.number === circuit)) throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
       const kind = values.kind;
-      const at = values.at ? new Date(values.at) : undefined;
-      const entry = await writeToVisit(db, organisationId, visit.id, async (tx) => {
-        const stored = values.movementId
-          ? { adjustment: await linkToMovement(tx, organisationId, { visitId: visit.id, movementId: values.movementId, kind, amountKg: values.amountKg!, circuit, description: values.description, at, recordedBy: user.id }) }
+      const stored = await writeToVisit(db, organisationId, visit.id, async (tx) => {
+        // Under the visit's lock, so a repeat racing its first send finds it here.
+        const earlier = await findEntry(tx, adjustmentEntries, visit.id, clientId);
+        if (earlier) return { entry: earlier, replayed: true };
+        const entry = values.movementId
+          ? await linkToMovement(tx, organisationId, { visitId: visit.id, movementId: values.movementId, kind, amountKg: values.amountKg!, circuit, description: values.description, at, recordedBy: user.id, clientId })
           : await recordChargeEntry(tx, organisationId, {
               visitId: visit.id,
               unit,
               technicianId: user.id,
               movement: { kind: await chargeMovementKind(tx, organisationId, kind, values.cylinderId!), kg: values.amountKg!, circuit, cylinderId: values.cylinderId!, at, note: values.description },
               adjustment: { description: values.description },
-            });
+              clientId,
+            }).then(({ adjustment, replayed }) => ({ entry: adjustment, replayed }));
         await joinCrew(tx, visit.id, user.id);
-        return stored;
+        return entry;
       });
-      return void res.status(201).json({ adjustment: entry.adjustment });
+      return void sendEntry(res, { adjustment: stored.entry }, stored.replayed);
     }
-    const adjustment = await writeToVisit(db, organisationId, visit.id, async (tx) => {
+    const { entry, replayed } = await writeToVisit(db, organisationId, visit.id, async (tx) => {
       const stored = await insertAdjustment(tx, organisationId, {
         visitId: visit.id,
         circuit: values.circuit ?? null,
-        at: values.at ? new Date(values.at) : undefined,
+        at,
         kind: values.kind,
         description: values.description,
         amountKg: values.amountKg ?? null,
         recordedBy: user.id,
+        clientId,
       });
       await joinCrew(tx, visit.id, user.id);
       return stored;
     });
-    res.status(201).json({ adjustment });
+    sendEntry(res, { adjustment: entry }, replayed);
   });
 
   // Corrections: a record is voided with a reason (and entered again if need be), never deleted.
@@ -256,16 +270,17 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   router.post("/:id/comments", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
+    if (await answeredBefore(db, res, commentEntries, "comment", visit.id, req.body)) return;
     const values = CommentCreateSchema.parse(req.body);
-    const comment = await writeToVisit(
+    const stored = await writeToVisit(
       db,
       organisationId,
       visit.id,
-      (tx) => insertComment(tx, organisationId, { visitId: visit.id, readingId: values.readingId ?? null, authorId: user.id, body: values.body }),
+      (tx) => insertComment(tx, organisationId, { visitId: visit.id, readingId: values.readingId ?? null, authorId: user.id, body: values.body, clientId: values.clientId }),
       { allow: STATUSES_OPEN_FOR_COMMENTS, refuse: () => new HttpError(409, "This visit is signed off: comments are closed until it is reopened") },
     );
-    if (!comment) throw new HttpError(400, FIELDS, { readingId: "That reading is not part of this visit" });
-    res.status(201).json({ comment });
+    if (!stored) throw new HttpError(400, FIELDS, { readingId: "That reading is not part of this visit" });
+    sendEntry(res, { comment: stored.entry }, stored.replayed);
   });
 
   router.post("/:id/review", async (req, res) => {
@@ -310,17 +325,21 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   router.post("/:id/photos", photoUpload, async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
+    // A repeat is answered before the upload is decoded again.
+    if (await answeredBefore(db, res, photoEntries, "photo", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
     if (!req.file) throw new HttpError(400, FIELDS, { photo: "Choose a photo to upload" });
     const meta = z
-      .object({ kind: z.enum(PHOTO_KINDS).default("other"), caption: text().max(200).optional() })
+      .object({ kind: z.enum(PHOTO_KINDS).default("other"), caption: text().max(200).optional(), clientId: optionalClientId })
       .parse(req.body ?? {});
     const stored = await storePhoto(env.UPLOADS_DIR, req.file.buffer);
     try {
-      const photo = await writeToVisit(db, organisationId, visit.id, (tx) =>
-        insertPhoto(tx, organisationId, { visitId: visit.id, kind: meta.kind, caption: meta.caption || null, ...stored, uploadedBy: user.id }),
+      const { entry, replayed } = await writeToVisit(db, organisationId, visit.id, (tx) =>
+        insertPhoto(tx, organisationId, { visitId: visit.id, kind: meta.kind, caption: meta.caption || null, ...stored, uploadedBy: user.id, clientId: meta.clientId }),
       );
-      res.status(201).json({ photo });
+      // A send that raced its repeat stored no row: its files are nobody's.
+      if (replayed) await discardPhoto(env.UPLOADS_DIR, stored);
+      sendEntry(res, { photo: entry }, replayed);
     } catch (error) {
       await discardPhoto(env.UPLOADS_DIR, stored);
       throw error;

@@ -12,7 +12,10 @@
  * reference. A save arriving alone is written at once, as before.
  *
  * Each save keeps its own answer: a closed visit (409), another company's visit (404), a wrong
- * circuit or bad values (400) refuse that save only, inside the batch. Should the transaction
+ * circuit, bad values or a device time out of bounds (400) refuse that save only, inside the batch.
+ * A save naming a client id the visit already holds (README decision 026) is answered with the
+ * reading stored first, before the visit's status is checked, and stores nothing; two saves with
+ * one client id in one batch store one reading and both get it. Should the transaction
  * itself fail, its saves are written again one by one, so one save's failure never loses or fails
  * the others.
  */
@@ -25,11 +28,14 @@ import { circuitsAwaitingWeighInReference } from "../db/charge-references.ts";
 import type { Database } from "../db/client.ts";
 import type { People } from "../db/people.ts";
 import { unitsForReadings } from "../db/reading-contexts.ts";
-import { insertReadings, joinCrews, type NewReading } from "../db/visits.ts";
+import { insertReadings, joinCrews, readingsByClientId, toReading, type NewReading } from "../db/visits.ts";
+import { peopleById } from "../db/people.ts";
+import type { StoredEntry } from "../db/store-once.ts";
 import { diagnoseReading } from "../diagnosis/diagnose-on-server.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
 import { calibrateAfterWeighIn } from "./calibrate-after-weigh-in.ts";
+import { requireDeviceTime } from "./device-entry.ts";
 import { readingInput } from "./reading-input.ts";
 import { bumpVisitRevisions, lockVisits } from "./write-to-visit.ts";
 
@@ -40,13 +46,15 @@ export interface ReadingSave {
   user: { id: string; name: string };
   /** The body's parse: a refusal is answered after the visit's own checks, as before (404, 409, then 400). */
   body: ZodSafeParseResult<z.infer<typeof ReadingBodySchema>>;
+  /** Called when the save is answered with a reading an earlier send of its client id stored. */
+  onReplayed?: () => void;
 }
 
 interface Pending {
   save: ReadingSave;
   /** When the save arrived: its time when the body gives none, so readings keep their order. */
   arrivedAt: Date;
-  resolve: (reading: Reading) => void;
+  resolve: (stored: StoredEntry<Reading>) => void;
   reject: (error: unknown) => void;
 }
 
@@ -97,14 +105,18 @@ export function createReadingSaver(db: Database, { maxGatherMs = MAX_GATHER_MS }
       // A millisecond apart at least: readings without a time of their own, stored in one
       // transaction, still sort in the order they arrived (the run log orders by time).
       lastArrival = Math.max(Date.now(), lastArrival + 1);
-      queue.push({ save, arrivedAt: new Date(lastArrival), resolve, reject });
+      const answer = ({ entry, replayed }: StoredEntry<Reading>) => {
+        if (replayed) save.onReplayed?.();
+        resolve(entry);
+      };
+      queue.push({ save, arrivedAt: new Date(lastArrival), resolve: answer, reject });
       if (writing) return;
       writing = true;
       gather(performance.now(), queue.length);
     });
 }
 
-type Outcome = { reading: Reading } | { error: unknown };
+type Outcome = { stored: StoredEntry<Reading> } | { error: unknown };
 
 /** Writes a batch, then answers each save; one by one if the batch's transaction failed. */
 async function writeBatch(db: Database, batch: Pending[]): Promise<void> {
@@ -127,7 +139,7 @@ async function writeBatch(db: Database, batch: Pending[]): Promise<void> {
   }
   batch.forEach((pending, index) => {
     const outcome = outcomes[index]!;
-    if ("reading" in outcome) pending.resolve(outcome.reading);
+    if ("stored" in outcome) pending.resolve(outcome.stored);
     else pending.reject(outcome.error);
   });
 }
@@ -145,15 +157,40 @@ async function saveTogether(tx: Database, batch: Pending[]): Promise<Outcome[]> 
     ...new Set([...locked.values()].map((visit) => visit.equipmentId)),
   ]);
 
+  // Readings the visits already hold under a client id a save names: those saves are repeats.
+  const held = await readingsByClientId(
+    tx,
+    batch.flatMap(({ save }) => (save.body.success ? [{ visitId: save.visitId, clientId: save.body.data.clientId }] : [])),
+  );
+  const heldByKey = new Map(held.map((row) => [`${row.visitId}:${row.clientId}`, row]));
+  const heldPeople = await peopleById(tx, held.flatMap((row) => [row.recordedBy, row.voidedBy]));
+
   const outcomes: Outcome[] = [];
   const rows: { index: number; row: NewReading }[] = [];
+  /** Saves repeating a client id an earlier save of this batch stores: the index of that save. */
+  const sameAs = new Map<number, number>();
+  const claimed = new Map<string, number>();
   for (const [index, { save, arrivedAt }] of batch.entries()) {
     try {
       const visit = locked.get(save.visitId);
       if (!visit || visit.organisationId !== save.organisationId) throw notFound("Visit");
+      const clientId = save.body.success ? save.body.data.clientId : undefined;
+      const key = clientId ? `${visit.id}:${clientId}` : undefined;
+      const first = key ? heldByKey.get(key) : undefined;
+      if (first) {
+        outcomes.push({ stored: { entry: toReading(first, heldPeople), replayed: true } });
+        continue;
+      }
+      const earlier = key ? claimed.get(key) : undefined;
+      if (earlier !== undefined) {
+        sameAs.set(index, earlier);
+        outcomes.push({ error: undefined }); // replaced by the earlier save's reading once stored
+        continue;
+      }
       requireWritableVisit(visit.status);
       if (!save.body.success) throw save.body.error;
-      const { circuit, takenAt, note, ...measured } = save.body.data;
+      const { circuit, takenAt, note, clientId: _clientId, ...measured } = save.body.data;
+      requireDeviceTime("takenAt", takenAt, visit);
       const unit = units.get(visit.equipmentId);
       if (!unit || unit.organisationId !== save.organisationId) throw notFound("Equipment");
       const context = unit.context(circuit);
@@ -177,8 +214,10 @@ async function saveTogether(tx: Database, batch: Pending[]): Promise<Outcome[]> 
           input,
           result,
           recordedBy: save.user.id,
+          clientId: clientId ?? null,
         },
       });
+      if (key) claimed.set(key, index);
       outcomes.push({ error: undefined }); // replaced by the reading once stored
     } catch (error) {
       outcomes.push({ error });
@@ -193,7 +232,11 @@ async function saveTogether(tx: Database, batch: Pending[]): Promise<Outcome[]> 
     rows.map(({ row }) => row),
     people,
   );
-  rows.forEach(({ index }, position) => (outcomes[index] = { reading: stored[position]! }));
+  rows.forEach(({ index }, position) => (outcomes[index] = { stored: stored[position]! }));
+  for (const [index, earlier] of sameAs) {
+    const outcome = outcomes[earlier]!;
+    outcomes[index] = "stored" in outcome ? { stored: { entry: outcome.stored.entry, replayed: true } } : outcome;
+  }
   // Whoever records something on a visit is on its crew.
   const crew = new Map(
     rows.map(({ row }) => [`${row.visitId}:${row.recordedBy}`, { visitId: row.visitId, userId: row.recordedBy }]),

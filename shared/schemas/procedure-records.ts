@@ -32,6 +32,7 @@ import {
 } from "./procedures.ts";
 import { PersonRefSchema, unknownFieldsMessage, VoidInfoSchema } from "./visits.ts";
 import { text } from "./text.ts";
+import { deviceTime, optionalClientId } from "./device-entries.ts";
 
 export const MAX_NOTE_LENGTH = 500;
 const NoteSchema = text({ multiline: true }).max(MAX_NOTE_LENGTH, `Keep notes under ${MAX_NOTE_LENGTH} characters`).optional();
@@ -72,6 +73,8 @@ export const ElectricalCheckBodySchema = z
     runningAmps: z.array(RunningCurrentInputSchema.shape.amps).min(1).max(3, "Enter at most three phase currents").optional(),
     ratedA: RunningCurrentInputSchema.shape.ratedA.optional(),
     note: NoteSchema,
+    clientId: optionalClientId,
+    takenAt: deviceTime("takenAt"),
   })
   // A record with nothing measured says nothing; ask for at least one reading.
   .refine((body) => Boolean(body.supplyVolts?.length || body.insulation?.length || body.windingOhms || body.singlePhaseWindingOhms || body.runningAmps?.length), {
@@ -181,6 +184,8 @@ export const LeakSearchBodySchema = z
     leaks: z.array(LeakFoundSchema).max(20).default([]),
     recheck: RecheckResultSchema.default("not-done"),
     note: NoteSchema,
+    clientId: optionalClientId,
+    takenAt: deviceTime("takenAt"),
   })
   // "Still leaking" after a search that found nothing contradicts itself.
   .refine((body) => body.recheck !== "still-leaking" || body.leaks.length > 0, {
@@ -217,6 +222,8 @@ export const StandingPressureBodySchema = z.strictObject(
     equalisedTempC: StandingPressureInputSchema.shape.equalisedTempC,
     circuit: CircuitSchema,
     note: NoteSchema,
+    clientId: optionalClientId,
+    takenAt: deviceTime("takenAt"),
   },
   {
     error: (issue) =>
@@ -287,6 +294,8 @@ export const PressureTestBodySchema = PressureTestInputSchema.extend({
   /** Optional: the organisation's figure is used when absent. */
   allowedDropKPa: PressureTestInputSchema.shape.allowedDropKPa.optional(),
   note: NoteSchema,
+  clientId: optionalClientId,
+  takenAt: deviceTime("takenAt"),
 });
 export type PressureTestBody = z.input<typeof PressureTestBodySchema>;
 
@@ -333,6 +342,9 @@ export const EvacuationCreateSchema = z.object({
   samples: VacuumSamplesSchema.optional(),
   isolatedAtMinutes: MinutesSchema.optional(),
   note: NoteSchema,
+  clientId: optionalClientId,
+  /** When the pump was started, by the device's clock (samples count minutes from it). */
+  startedAt: deviceTime("startedAt"),
 });
 export type EvacuationCreate = z.input<typeof EvacuationCreateSchema>;
 
@@ -340,6 +352,7 @@ export type EvacuationCreate = z.input<typeof EvacuationCreateSchema>;
 export const EvacuationSampleBodySchema = z.object({
   microns: VacuumSampleSchema.shape.microns,
   minutes: MinutesSchema.optional(),
+  clientId: optionalClientId,
 });
 export type EvacuationSampleBody = z.input<typeof EvacuationSampleBodySchema>;
 
@@ -374,7 +387,8 @@ export const EvacuationSchema = RecordBaseSchema.omit({ takenAt: true }).extend(
   updatedAt: z.string(),
   targetMicrons: z.number(),
   isolatedAtMinutes: z.number().nullable(),
-  samples: z.array(z.object({ minutes: z.number(), microns: z.number() })),
+  /** A sample added from a device carries its client id (README decision 026). */
+  samples: z.array(z.object({ minutes: z.number(), microns: z.number(), clientId: z.uuid().optional() })),
   note: z.string().nullable(),
   result: EvacuationResultSchema,
   /** Sent back as If-Match when valving off or changing the target or note. */

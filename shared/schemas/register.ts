@@ -22,6 +22,7 @@ import {
 import { PersonRefSchema, VoidInfoSchema } from "./visits.ts";
 import { ChargeDeviationSchema } from "./diagnosis.ts";
 import { boundEnd, boundStart, dayOrInstant, instant } from "./dates.ts";
+import { optionalClientId } from "./device-entries.ts";
 import { text } from "./text.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -161,6 +162,8 @@ export const MovementCreateSchema = z
     cylinderId: z.uuid("Choose a cylinder").optional().nullable(),
     at: instant("at must be an ISO 8601 date and time").optional(),
     note: optionalNote,
+    /** The device's id for this movement: a repeated send stores it once (README decision 026). */
+    clientId: optionalClientId,
   })
   // The register must say where the refrigerant went or came from (TRADE.md §6 record fields).
   .refine((value) => !MOVEMENT_CYLINDER_RULES[value.kind].cylinderRequired || Boolean(value.cylinderId), {

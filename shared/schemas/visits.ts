@@ -7,6 +7,7 @@ import { z } from "zod";
 import { DiagnosisInputObjectSchema, DiagnosisInputSchema, DiagnosisResultSchema, TrendResultSchema } from "./diagnosis.ts";
 import { MAX_CIRCUITS } from "./equipment.ts";
 import { instant } from "./dates.ts";
+import { optionalClientId } from "./device-entries.ts";
 import { isTimeZone } from "../format/date-time.ts";
 import { text } from "./text.ts";
 
@@ -120,6 +121,8 @@ export const ReadingBodySchema = z.strictObject(
     circuit: CircuitNumberSchema,
     takenAt: instant("takenAt must be an ISO 8601 date and time").optional(),
     note: text({ multiline: true }).max(MAX_REASON_LENGTH).optional(),
+    /** The device's id for this reading: a repeated send stores it once (README decision 026). */
+    clientId: optionalClientId,
     ...MeasuredValuesSchema.shape,
   },
   {
@@ -253,6 +256,7 @@ export const AdjustmentCreateSchema = z
     cylinderId: z.uuid("Choose a cylinder").optional().nullable(),
     /** Charge adjustments: a movement already in the visit's register that this entry is. */
     movementId: z.uuid("Choose a register line").optional().nullable(),
+    clientId: optionalClientId,
   })
   // A charge change is only meaningful with its mass: the register needs the kilograms.
   .refine((value) => !isChargeAdjustment(value.kind) || value.amountKg != null, {
@@ -295,6 +299,7 @@ export const CommentCreateSchema = z.object({
     .min(1, "Write a comment")
     .max(MAX_COMMENT_LENGTH, `Keep comments under ${MAX_COMMENT_LENGTH} characters`),
   readingId: z.uuid().optional().nullable(),
+  clientId: optionalClientId,
 });
 
 export const CommentSchema = z.object({

@@ -51,7 +51,9 @@ export default function VisitRoute() {
   if (visit.isPending || (visit.isSuccess && equipment.isPending)) {
     return <p aria-busy="true">Loading the visit…</p>;
   }
-  if (visit.isError || equipment.isError) {
+  // Only when there is nothing to show: a failed refresh of a visit on screen is a toast, and the
+  // run log, with what is being typed, stays.
+  if (visit.data === undefined || equipment.data === undefined) {
     const error = visit.error ?? equipment.error;
     return (
       <div role="alert" className="space-y-2">
@@ -65,7 +67,7 @@ export default function VisitRoute() {
   }
 
   const data = visit.data;
-  const unit = equipment.data!.equipment;
+  const unit = equipment.data.equipment;
   const role = me.data?.role ?? "apprentice";
   // Entries and voids only while the visit is open or sent back; awaiting review and signed off are closed.
   const open = acceptsEntries(data.status);

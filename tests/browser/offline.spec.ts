@@ -1,5 +1,5 @@
 import { expect, test, type Page } from "@playwright/test";
-import { signIn, signOut } from "./sign-in.ts";
+import { DEMO_PASSWORD, signIn, signOut } from "./sign-in.ts";
 
 /**
  * The installed app starts without a network: the service worker holds the shell (scripts,
@@ -161,4 +161,123 @@ test("signing out deletes the data kept on the device; the next person keeps onl
       { timeout: 10_000 },
     )
     .toBe("senior@bellbird.example");
+});
+
+/** Starts a visit on the named unit (online) and returns its id. */
+async function startVisitOn(page: Page, unit: RegExp, reason: string): Promise<string> {
+  await page.goto("/equipment");
+  await page.getByRole("link", { name: unit }).first().click();
+  await page.getByLabel("Reason for the visit").fill(reason);
+  await page.getByRole("button", { name: "Start the visit" }).click();
+  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+  return new URL(page.url()).pathname.split("/").pop()!;
+}
+
+/** Waits until the visit, with what its screen needs, is kept on the device. */
+async function keptForOffline(page: Page, visitId: string) {
+  await page.getByRole("link", { name: "Today" }).first().click();
+  await expect.poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["register", "visit", visitId])), { timeout: 30_000 }).toBe(true);
+}
+
+/** Types a reading of RTU-1 (R407C at the demo clinic: 12 K superheat, 1 K subcooling) and saves it. */
+async function saveRtuReading(page: Page, suctionLineC: string) {
+  await page.getByLabel("Suction pressure", { exact: true }).fill("377");
+  await page.getByLabel("Suction line temperature", { exact: true }).fill(suctionLineC);
+  await page.getByLabel("Liquid pressure", { exact: true }).fill("1565");
+  await page.getByLabel("Line temperature for subcooling", { exact: true }).fill("37");
+  await page.getByRole("button", { name: "Save reading" }).click();
+  await expect(page.getByTestId("save-bar").getByText(/^Kept on this device \(\d\d:\d\d\) — sent when online$/)).toBeVisible();
+}
+
+/** The outbox entries on the device (src/features/offline/outbox-store.ts): client id and time taken. */
+function outboxEntries(page: Page): Promise<{ clientId: string; takenAt: string; state: string }[]> {
+  return page.evaluate(
+    () =>
+      new Promise((resolve, reject) => {
+        const open = indexedDB.open("satura-outbox");
+        open.onerror = () => reject(open.error);
+        open.onsuccess = () => {
+          const all = open.result.transaction("entries").objectStore("entries").getAll();
+          all.onsuccess = () => resolve(all.result as { clientId: string; takenAt: string; state: string }[]);
+        };
+      }),
+  );
+}
+
+test("readings and an adjustment saved with no network wait on the device, survive a reload, and are stored once with their times", async ({ page, context }) => {
+  await page.goto("/");
+  await signIn(page, "tech@bellbird.example");
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  const visitId = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Readings kept while offline");
+  await keptForOffline(page, visitId);
+
+  await context.setOffline(true);
+  await page.goto(`/visits/${visitId}`);
+  await saveRtuReading(page, "13");
+  await page.getByLabel("What changed").selectOption("airflow");
+  await page.getByLabel("Description").fill("Cleaned the return air filter");
+  await page.getByRole("button", { name: "Log adjustment" }).click();
+  await expect(page.getByRole("status").filter({ hasText: /^Kept on this device \(\d\d:\d\d\) — sent when online$/ })).toBeVisible();
+  for (const suctionLine of ["14", "15"]) await saveRtuReading(page, suctionLine);
+  const waiting = page.getByRole("region", { name: "Entries on this device" });
+  await expect(waiting.getByText("Waiting to send")).toHaveCount(4);
+  await expect(waiting.getByText("Airflow changed, circuit 1")).toBeVisible();
+  await expect(page.getByTestId("outbox-waiting")).toHaveText("4 entries waiting to send.");
+  const kept = await outboxEntries(page);
+  expect(kept).toHaveLength(4);
+
+  // Still there after a reload with no network.
+  await page.reload();
+  await expect(page.getByRole("region", { name: "Entries on this device" }).getByText("Waiting to send")).toHaveCount(4);
+
+  await context.setOffline(false);
+  await expect(page.getByRole("region", { name: "Entries on this device" })).toBeHidden({ timeout: 30_000 });
+  await expect(page.getByTestId("outbox-waiting")).toBeHidden();
+  const visit = (await (await page.request.get(`/api/visits/${visitId}`)).json()) as {
+    visit: { readings: { takenAt: string; input: { suctionLineTempC: number } }[]; adjustments: { at: string; description: string }[] };
+  };
+  const { readings, adjustments } = visit.visit;
+  expect(readings).toHaveLength(3);
+  expect(adjustments.map((adjustment) => adjustment.description)).toEqual(["Cleaned the return air filter"]);
+  // Each with the time it was taken on the device, not the time it reached the server.
+  const storedTimes = [...readings.map((reading) => reading.takenAt), adjustments[0]!.at].map(Date.parse).sort();
+  expect(storedTimes).toEqual(kept.map((entry) => Date.parse(entry.takenAt)).sort());
+  expect(readings.map((reading) => reading.input.suctionLineTempC).sort()).toEqual([13, 14, 15]);
+});
+
+test("an entry the server refuses on arrival stays on the device with the reason; the others are stored", async ({ page, context, playwright, baseURL }) => {
+  await page.goto("/");
+  await signIn(page, "tech@bellbird.example");
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  const stays = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Stays open while offline");
+  const closes = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Submitted meanwhile");
+  await keptForOffline(page, stays);
+  await keptForOffline(page, closes);
+
+  await context.setOffline(true);
+  await page.goto(`/visits/${stays}`);
+  await saveRtuReading(page, "13");
+  await page.goto(`/visits/${closes}`);
+  await saveRtuReading(page, "14");
+
+  // Meanwhile, from another device, the second visit goes for review: it takes no more readings.
+  const office = await playwright.request.newContext({ baseURL });
+  expect((await office.post("/api/auth/sign-in", { data: { email: "tech@bellbird.example", password: DEMO_PASSWORD } })).status()).toBe(200);
+  expect((await office.post(`/api/visits/${closes}/review`, { data: { action: "submit" } })).status()).toBeLessThan(300);
+
+  await context.setOffline(false);
+  const onDevice = page.getByRole("region", { name: "Entries on this device" });
+  await expect(onDevice.getByText("Refused by the server:")).toBeVisible({ timeout: 30_000 });
+  await expect(page.getByText("1 entry refused by the server: see the visit.")).toBeVisible();
+  const stored = (await (await office.get(`/api/visits/${stays}`)).json()) as { visit: { readings: unknown[] } };
+  expect(stored.visit.readings).toHaveLength(1);
+  const refused = (await (await office.get(`/api/visits/${closes}`)).json()) as { visit: { readings: unknown[] } };
+  expect(refused.visit.readings).toHaveLength(0);
+
+  // Still on the device after a reload, until the technician discards it.
+  await page.reload();
+  await expect(onDevice.getByText("Refused by the server:")).toBeVisible();
+  await onDevice.getByRole("button", { name: "Discard" }).click();
+  await expect(onDevice).toBeHidden();
+  await office.dispose();
 });

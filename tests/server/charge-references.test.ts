@@ -3,6 +3,7 @@ import { demoSite } from "@server/db/seed/demo-scenario.ts";
 import { atmosphericPressureAtAltitude, saturationPressure } from "@shared/engine/index.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../setup/demo-accounts.ts";
+import { startVisitAt } from "../setup/stored-readings.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -139,6 +140,7 @@ describe("charge reference points", () => {
     const fresh = cylinders.find((cylinder) => cylinder.kind === "new")!.id;
     const visitId = (await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Circuit 2 evacuated and weighed in" })).body.visit.id;
     const weighedIn = Date.now() - 60 * MINUTE;
+    await startVisitAt(testApp, visitId, new Date(weighedIn - 2 * 60 * MINUTE));
     const register = (body: Record<string, unknown>) => technician.post(`/api/visits/${visitId}/refrigerant`).send({ circuit: 2, ...body });
     expect((await register({ kind: "recovered", kg: 3.1, cylinderId: recovery, at: new Date(weighedIn - 60 * MINUTE).toISOString() })).status).toBe(201);
     expect((await register({ kind: "added-new", kg: 4.5, cylinderId: fresh, at: new Date(weighedIn).toISOString() })).status).toBe(201);

@@ -10,6 +10,7 @@ import {
 } from "@shared/engine/index.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
+import { startVisitAt } from "../setup/stored-readings.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -197,6 +198,7 @@ describe("readings are built from the measured values, the nameplate and the sit
 
   it("keeps the unit's page and the trend working when two readings share one instant (the later entry stands)", async () => {
     const at = "2026-12-02T03:04:05.000Z";
+    await startVisitAt(testApp, visitId, new Date(Date.parse(at) - 60 * 60_000));
     for (const suctionLineTempC of [12, 13]) {
       const saved = await technician.post(`/api/visits/${visitId}/readings`).send({ circuit: 1, ...measured, suctionLineTempC, takenAt: at });
       expect(saved.status).toBe(201);

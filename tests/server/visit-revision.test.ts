@@ -11,6 +11,7 @@ import { atmosphericPressureAtAltitude, saturationPressure } from "@shared/engin
 import { VisitDetailResponseSchema } from "@shared/schemas/visits.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
+import { startVisitAt } from "../setup/stored-readings.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -110,6 +111,7 @@ describe("visit revision, conditional GET and deltas", () => {
   it("sends a reading saved with an earlier time in the delta too (the order is by revision, not by time)", async () => {
     const before = await currentRevision();
     const past = new Date(Date.now() - 3 * 3600_000).toISOString();
+    await startVisitAt(testApp, visitId, new Date(Date.now() - 4 * 3600_000));
     const saved = await technician.post(`/api/visits/${visitId}/readings`).send(reading(13, past));
     expect((await deltaSince(before)).readings.map((row) => row.id)).toEqual([saved.body.reading.id]);
   });

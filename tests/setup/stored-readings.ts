@@ -17,6 +17,15 @@ export async function startRooftopVisit(agent: Agent, reason: string): Promise<s
 }
 
 /**
+ * Moves the visit's start back to `startedAt`, as if it had been opened then: readings sent with
+ * a device time are refused before the visit's start (README decision 026), so a test that logs
+ * readings in the past starts its visit before them.
+ */
+export async function startVisitAt(testApp: TestApp, visitId: string, startedAt: Date): Promise<void> {
+  await testApp.database.db.execute(sql`update visits set started_at = ${startedAt.toISOString()} where id = ${visitId}`);
+}
+
+/**
  * Long run logs without a request per reading: `row` builds a reading of `visitId` judged by the
  * engine (diagnose) as the demo technician's, `store` writes rows under the visit's lock,
  * bumping its revision as every save does.

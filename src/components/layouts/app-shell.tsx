@@ -6,6 +6,7 @@ import { paths } from "@/config/paths.ts";
 import { UserMenu } from "@/features/auth/components/user-menu.tsx";
 import { useDayOnDevice } from "@/features/offline/use-day-on-device.ts";
 import { useOfflineTables } from "@/features/offline/use-offline-tables.ts";
+import { useOutboxEntries, useOutboxSender } from "@/features/offline/use-outbox.ts";
 import { SunlightToggle } from "@/features/theme/components/sunlight-toggle.tsx";
 import { useMe } from "@/lib/api/auth.ts";
 import { useOutboxAvailable } from "@/lib/api/outbox.ts";
@@ -36,6 +37,7 @@ export function AppShell() {
   const navigation = navigationFor(role, { outbox: outbox.data === true });
   useOfflineTables();
   useDayOnDevice();
+  useOutboxSender(useOutboxEntries());
   // The session ended while the app was open (expired, signed out elsewhere, member removed).
   if (me.isSuccess && me.data === null) return <Navigate to={paths.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
   return (

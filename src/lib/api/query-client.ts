@@ -24,6 +24,8 @@ export function createQueryClient(): QueryClient {
       onError: (error, _variables, _context, mutation) => {
         // Forms show field errors themselves; a toast covers everything else.
         if (mutation.options.meta?.silentErrors) return;
+        // A write the outbox keeps when there is no connection: the form says it was kept.
+        if (mutation.options.meta?.keptOffline && error instanceof ApiError && error.status === 0) return;
         if (error instanceof ApiError && Object.keys(error.fields).length > 0) return;
         toastError(error.message);
       },
@@ -40,6 +42,6 @@ export function createQueryClient(): QueryClient {
 
 declare module "@tanstack/react-query" {
   interface Register {
-    mutationMeta: { silentErrors?: boolean };
+    mutationMeta: { silentErrors?: boolean; keptOffline?: boolean };
   }
 }

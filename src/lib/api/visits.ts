@@ -140,10 +140,15 @@ export const useVisits = (params: VisitListParams = {}, { enabled = true } = {})
   useQuery({ ...visitsQueryOptions(params), placeholderData: keepPreviousData, enabled });
 export const useVisit = (id: string) => useQuery(visitQueryOptions(id));
 
-function useVisitMutation<TVariables extends { visitId: string }, TResult>(mutationFn: (variables: TVariables) => Promise<TResult>, alsoRefresh: readonly string[][] = []) {
+function useVisitMutation<TVariables extends { visitId: string }, TResult>(
+  mutationFn: (variables: TVariables) => Promise<TResult>,
+  alsoRefresh: readonly string[][] = [],
+  meta: { silentErrors?: boolean; keptOffline?: boolean } = {},
+) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn,
+    meta,
     onSuccess: (_result, variables) =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: ["visits", "detail", variables.visitId] }),
@@ -155,9 +160,11 @@ function useVisitMutation<TVariables extends { visitId: string }, TResult>(mutat
 
 // A stored reading may make a circuit's settled readings after a weigh-in its charge reference
 // point (calibrated on the server), so the units' reference points are fetched again too.
-export const useCreateReading = () => useVisitMutation(createReading, [["charge-references"]]);
+// The run log says itself what became of a save (stored, kept on the device, or refused), so no toast.
+export const useCreateReading = () => useVisitMutation(createReading, [["charge-references"]], { silentErrors: true });
 // A charge adjustment is also a register movement: the visit's refrigerant and the cylinders change with it.
-export const useCreateAdjustment = () => useVisitMutation(createAdjustment, [["register"], ["cylinders"], ["equipment"]]);
+// Without a connection the form keeps it in the device's outbox (src/features/offline/outbox-store.ts).
+export const useCreateAdjustment = () => useVisitMutation(createAdjustment, [["register"], ["cylinders"], ["equipment"]], { keptOffline: true });
 export const useCreateComment = () => useVisitMutation(createComment);
 export const useReviewVisit = () => useVisitMutation(reviewVisit);
 

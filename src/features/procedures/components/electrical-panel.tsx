@@ -12,6 +12,7 @@ import { FormAlert, TextField } from "@/components/ui/field/field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateElectricalCheck, useElectricalChecks } from "@/lib/api/procedures.ts";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { errorFor, fieldErrorsOf } from "../utils/field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { ElectricalCheckView } from "./electrical-check-view.tsx";
@@ -56,6 +57,8 @@ const filledTerminals = (values: string[]) => {
 export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: ElectricalPanelProps) {
   const checks = useElectricalChecks(visitId);
   const create = useCreateElectricalCheck();
+  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
+  const entryId = useEntryClientId();
   const defaults = checks.data?.defaults;
   const threePhase = (defaults?.phases ?? 3) === 3;
   const phaseCount = threePhase ? 3 : 1;
@@ -164,7 +167,8 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
       return;
     }
     try {
-      await create.mutateAsync({ visitId, ...parsed.data });
+      await create.mutateAsync({ visitId, ...parsed.data , clientId: entryId.take() });
+      entryId.release();
       setSaved(true);
       setAttempted(false);
       setVolts(["", "", ""]);

@@ -21,6 +21,7 @@ import { ApiError } from "@/lib/api/api-client.ts";
 import { useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
 import { useVoidRecord } from "@/lib/api/visits.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
@@ -49,6 +50,8 @@ function errorText(error: unknown, fallback: string): { message: string; fields:
 function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitId: string; evacuation: Evacuation; unit: VacuumUnit; canWrite: boolean; onReload: () => Promise<unknown> }) {
   const now = useNow(5_000);
   const addSample = useAddEvacuationSample();
+  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
+  const entryId = useEntryClientId();
   const update = useUpdateEvacuation();
   const [reading, setReading] = useState("");
   const [minutes, setMinutes] = useState<string | null>(null);
@@ -79,7 +82,8 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
     setReading("");
     setMinutes(null);
     try {
-      await addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...parsed.data });
+      await addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...parsed.data , clientId: entryId.take() });
+      entryId.release();
     } catch (error) {
       const { message, fields } = errorText(error, "The reading was not saved. Try again.");
       setReading(typed.reading);
@@ -159,6 +163,8 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
 export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWrite: boolean }) {
   const evacuations = useEvacuations(visitId);
   const create = useCreateEvacuation();
+  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
+  const entryId = useEntryClientId();
   const [unit, setUnit] = useState<VacuumUnit>("micron");
   // Typed in the unit shown; stored and sent in microns.
   const [target, setTarget] = useState<string | null>(null);
@@ -187,7 +193,8 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
       return;
     }
     try {
-      await create.mutateAsync({ visitId, ...parsed.data });
+      await create.mutateAsync({ visitId, ...parsed.data , clientId: entryId.take() });
+      entryId.release();
       setTarget(null);
     } catch (error) {
       setStartError(errorText(error, "The evacuation was not started. Try again."));

@@ -17,6 +17,7 @@ import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.t
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateLeakSearch, useLeakSearches } from "@/lib/api/procedures.ts";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { LeakSearchView } from "./leak-search-view.tsx";
@@ -30,6 +31,8 @@ const emptyLeak = (): LeakRow => ({ location: "", severity: "small", repair: "",
 export function LeakSearchPanel({ visitId, canWrite, readOnlyNote }: { visitId: string; canWrite: boolean; readOnlyNote?: string }) {
   const searches = useLeakSearches(visitId);
   const create = useCreateLeakSearch();
+  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
+  const entryId = useEntryClientId();
   const [method, setMethod] = useState<LeakMethod>("electronic-detector");
   const [places, setPlaces] = useState("");
   const [leaks, setLeaks] = useState<LeakRow[]>([]);
@@ -68,7 +71,8 @@ export function LeakSearchPanel({ visitId, canWrite, readOnlyNote }: { visitId: 
     }
     setErrors({});
     try {
-      await create.mutateAsync({ visitId, ...body });
+      await create.mutateAsync({ visitId, ...body , clientId: entryId.take() });
+      entryId.release();
       setPlaces("");
       setLeaks([]);
       setRecheck("not-done");

@@ -21,6 +21,7 @@ import {
   temperatureFromDisplay,
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
@@ -54,6 +55,8 @@ function ratedFor(section: PressureTestSection, high: number | null, low: number
 export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, readOnlyNote }: PressureTestPanelProps) {
   const tests = usePressureTests(visitId);
   const create = useCreatePressureTest();
+  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
+  const entryId = useEntryClientId();
   const defaults = tests.data?.defaults;
   const pressureUnit = GAUGE_LABEL[units.pressure];
   const temperatureUnit = TEMPERATURE_LABEL[units.temperature];
@@ -117,7 +120,8 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
     }
     setErrors({});
     try {
-      await create.mutateAsync({ visitId, ...parsed.data });
+      await create.mutateAsync({ visitId, ...parsed.data , clientId: entryId.take() });
+      entryId.release();
       setStart("");
       setEnd("");
       setStartTemp("");

@@ -9,6 +9,7 @@ import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateStandingPressureCheck, useStandingPressureChecks } from "@/lib/api/procedures.ts";
 import { GAUGE_LABEL, gaugeFromDisplay, TEMPERATURE_LABEL, temperatureFromDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted } from "../utils/parse-number.ts";
@@ -38,6 +39,8 @@ interface StandingPressurePanelProps {
 export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits, units, atmosphericKPa, canWrite, readOnlyNote }: StandingPressurePanelProps) {
   const checks = useStandingPressureChecks(visitId);
   const create = useCreateStandingPressureCheck();
+  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
+  const entryId = useEntryClientId();
   const [standing, setStanding] = useState("");
   const [temperature, setTemperature] = useState("");
   const [circuit, setCircuit] = useState(String(circuits[0] ?? 1));
@@ -78,7 +81,8 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
     }
     setErrors({});
     try {
-      await create.mutateAsync({ visitId, ...parsed.data });
+      await create.mutateAsync({ visitId, ...parsed.data , clientId: entryId.take() });
+      entryId.release();
       setStanding("");
       setTemperature("");
       setNote("");

@@ -10,6 +10,10 @@ import { cylindersQueryOptions } from "@/lib/api/register.ts";
 import { useCreateAdjustment, useVisit } from "@/lib/api/visits.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
+import { useMe } from "@/lib/api/auth.ts";
+import { sendOrKeep } from "@/features/offline/outbox-store.ts";
+import { formatTime } from "@shared/format/date-time.ts";
 
 /**
  * The register movement a charge adjustment becomes with the cylinder chosen (the server
@@ -28,7 +32,12 @@ const kgText = (kg: number) => `${formatNumber(kg, 2)} kg`;
  */
 export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string; circuit: number; onSaved?: () => void }) {
   const createAdjustment = useCreateAdjustment();
+  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
+  const entryId = useEntryClientId();
   const [formError, setFormError] = useState<string | null>(null);
+  // Logged without a connection: kept on the device, sent when the signal returns.
+  const [keptAt, setKeptAt] = useState<string | null>(null);
+  const userId = useMe().data?.id;
   const form = useForm<AdjustmentCreate>({
     resolver: zodResolver(AdjustmentCreateSchema),
     defaultValues: { kind: "metering", description: "", circuit, amountKg: null, cylinderId: null },
@@ -53,8 +62,23 @@ export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string;
 
   const submit = form.handleSubmit(async (values) => {
     setFormError(null);
+    setKeptAt(null);
+    const clientId = entryId.take();
+    // The time it was made, sent with it: if it waits on the device, it is stored with this time.
+    const body = { ...values, circuit, cylinderId: charge ? values.cylinderId : null, clientId, at: values.at ?? new Date().toISOString() };
     try {
-      await createAdjustment.mutateAsync({ ...values, circuit, visitId, cylinderId: charge ? values.cylinderId : null });
+      const sent = await sendOrKeep(() => createAdjustment.mutateAsync({ ...body, visitId }), {
+        clientId,
+        userId: userId ?? "",
+        visitId,
+        kind: "adjustment",
+        label: `${ADJUSTMENT_KIND_LABELS[values.kind]}, circuit ${circuit}`,
+        path: `/visits/${visitId}/adjustments`,
+        body,
+        takenAt: body.at,
+      });
+      if (sent.outcome === "kept") setKeptAt(body.at);
+      entryId.release();
       form.reset({ kind: values.kind, description: "", circuit, amountKg: null, cylinderId: values.cylinderId });
       onSaved?.();
     } catch (error) {
@@ -118,6 +142,11 @@ export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string;
       <Button type="submit" variant="secondary" disabled={createAdjustment.isPending}>
         {createAdjustment.isPending ? "Saving…" : "Log adjustment"}
       </Button>
+      {keptAt && (
+        <p role="status" className="text-sm text-muted">
+          Kept on this device ({formatTime(keptAt)}) — sent when online
+        </p>
+      )}
     </form>
   );
 }

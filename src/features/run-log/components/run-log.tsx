@@ -8,7 +8,12 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
+import { useMe } from "@/lib/api/auth.ts";
 import { useCreateReading } from "@/lib/api/visits.ts";
+import { discardEntry, sendOrKeep, type OutboxEntry } from "@/features/offline/outbox-store.ts";
+import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
+import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useStoredDraft } from "@/lib/drafts/use-stored-draft.ts";
 import { formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { useLiveDiagnosis, type CircuitContext } from "../hooks/use-live-diagnosis.ts";
@@ -78,6 +83,10 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
   const [savedAt, setSavedAt] = useState<string | null>(null);
+  // A reading saved without a connection: kept in the device's outbox, sent when the signal returns.
+  const [keptAt, setKeptAt] = useState<string | null>(null);
+  const userId = useMe().data?.id;
+  const onDevice = useOutboxEntries().filter((entry) => entry.visitId === visit.id && entry.body.circuit === circuit);
   const [showTrend, setShowTrend] = useState(false);
   const createReading = useCreateReading();
   const now = useNow();
@@ -95,8 +104,11 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
 
   // A save that failed keeps the time the reading was taken for the next try, until a value changes.
   const [pendingTakenAt, setPendingTakenAt] = useState<string | null>(null);
+  // And its client id, so a save whose answer was lost is stored once when tried again.
+  const entryId = useEntryClientId();
   const setField = (field: DraftField, value: string) => {
     setPendingTakenAt(null);
+    entryId.release();
     setDraft((current) => ({ ...current, [field]: value }));
     setServerErrors(({ [field]: _dropped, ...rest }) => rest);
   };
@@ -120,18 +132,27 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
     const { values } = parseDraft(effectiveDraft, units, atmosphericKPa);
     // The reading keeps the time it was taken, however long the answer takes or how often the save is tried.
     const takenAt = pendingTakenAt ?? new Date().toISOString();
+    const clientId = entryId.take();
+    // Measured values only: the server adds the nameplate targets, the RLA and the site's atmosphere.
+    const body = { circuit, takenAt, clientId, ...(values as MeasuredValues) };
     try {
-      // Measured values only: the server adds the nameplate targets, the RLA and the site's atmosphere.
-      const reading = await createReading.mutateAsync({
+      // Without a connection (or an answer in time) the reading waits in the device's outbox.
+      const sent = await sendOrKeep(() => createReading.mutateAsync({ visitId: visit.id, ...body }), {
+        clientId,
+        userId: userId ?? "",
         visitId: visit.id,
-        circuit,
+        kind: "reading",
+        label: `Reading, circuit ${circuit}`,
+        path: `/visits/${visit.id}/readings`,
+        body,
         takenAt,
-        ...(values as MeasuredValues),
       });
-      setSavedAt(reading.takenAt);
+      setSavedAt(sent.outcome === "stored" ? sent.stored.takenAt : null);
+      setKeptAt(sent.outcome === "kept" ? takenAt : null);
       setServerErrors({});
       stored.discard((current) => ({ ...current, runMinutes: "" }));
       setPendingTakenAt(null);
+      entryId.release();
     } catch (error) {
       setPendingTakenAt(takenAt);
       if (error instanceof ApiError && Object.keys(error.fields).length > 0) {
@@ -141,6 +162,16 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
         setFormError(error instanceof Error ? error.message : "The reading was not saved. Try again.");
       }
     }
+  };
+
+  // A refused reading's values go back in the form, with the server's field messages, to be
+  // corrected and saved again (as a new entry); the refused one leaves the device.
+  const putBack = (entry: OutboxEntry) => {
+    setDraft(() => ({ ...draftFromInput(entry.body as Partial<MeasuredValues>, units, atmosphericKPa), runMinutes: "" }));
+    setServerErrors(entry.fields ?? {});
+    setFormError(entry.reason ?? null);
+    setKeptAt(null);
+    void discardEntry(entry.clientId);
   };
 
   const missingRequired = REQUIRED_FIELDS.filter((field) => draft[field] === "");
@@ -272,7 +303,9 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
                     <Save aria-hidden className="size-5" /> {createReading.isPending ? "Saving…" : "Save reading"}
                   </Button>
                   <span className="line-clamp-2 text-xs text-muted sm:text-sm" aria-live="polite">
-                    {savedAt
+                    {keptAt
+                      ? `Kept on this device (${formatTime(keptAt)}) — sent when online`
+                      : savedAt
                       ? `✓ Saved at ${formatTime(savedAt)} — values stay for the next reading`
                       : stored.restored
                         ? "Values typed earlier on this device are back — not saved yet"
@@ -288,6 +321,8 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
           </form>
         </div>
       </div>
+
+      <WaitingEntries entries={onDevice} onPutBack={(entry: OutboxEntry) => (entry.kind === "reading" ? putBack(entry) : undefined)} />
 
       {shownInput && shownResult && (
         <PanelBoundary>

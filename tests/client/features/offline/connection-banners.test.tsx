@@ -1,8 +1,13 @@
 // @vitest-environment jsdom
-import { act, cleanup, fireEvent, render, screen } from "@testing-library/react";
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { act, cleanup, fireEvent, render as renderElement, screen } from "@testing-library/react";
+import type { ReactElement } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { offerUpdate } from "@/features/offline/app-update.ts";
 import { ConnectionBanners } from "@/features/offline/connection-banners.tsx";
+
+/** No one is signed in here, so there is no outbox to count. */
+const render = (element: ReactElement) => renderElement(<QueryClientProvider client={new QueryClient()}>{element}</QueryClientProvider>);
 
 function setOnline(online: boolean) {
   Object.defineProperty(navigator, "onLine", { configurable: true, get: () => online });
@@ -18,7 +23,7 @@ describe("ConnectionBanners", () => {
 
   it("shows nothing while online with no update waiting", () => {
     const { container } = render(<ConnectionBanners />);
-    expect(container.innerHTML).toBe("");
+    expect(container.textContent).toBe("");
   });
 
   it("says the device is offline while it is, and goes when the network returns", () => {

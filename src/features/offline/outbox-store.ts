@@ -1,0 +1,82 @@
+import { Dexie, type EntityTable } from "dexie";
+import { ApiError } from "@/lib/api/api-client.ts";
+
+/**
+ * The device's outbox: every entry made at a visit that has not reached the server yet, in the
+ * order it was made, each with the id the device gave it (the server stores an entry once per
+ * id, however often it is sent) and the time it was taken. An entry the server refused stays,
+ * with the reason, until the technician deals with it: nothing is dropped silently.
+ */
+export interface OutboxEntry {
+  /** Made on the device at the first save; the server's key for storing the entry once. */
+  clientId: string;
+  /** Whose entry it is: only they send it or see it on this device. */
+  userId: string;
+  visitId: string;
+  /** Which form made it: a refused entry goes back into that form. */
+  kind: OutboxKind;
+  /** What the technician sees in the lists, e.g. "Reading, circuit 1". */
+  label: string;
+  /** The write as it will be sent: POST to this API path with this JSON body (clientId included). */
+  path: string;
+  body: Record<string, unknown>;
+  /** When the entry was taken (ISO), as the server will store it. */
+  takenAt: string;
+  /** Orders sending: entries leave in the order they were made. */
+  queuedAt: number;
+  state: "waiting" | "refused";
+  /** The server's message and field messages for a refused entry. */
+  reason?: string;
+  fields?: Record<string, string>;
+  attempts: number;
+}
+
+export type OutboxKind = "reading" | "adjustment";
+
+class OutboxDatabase extends Dexie {
+  entries!: EntityTable<OutboxEntry, "clientId">;
+  constructor() {
+    super("satura-outbox");
+    this.version(1).stores({ entries: "clientId, [userId+queuedAt], [userId+visitId]" });
+  }
+}
+
+export const outbox = new OutboxDatabase();
+
+/** Keeps an entry to send later (again under the same id, if it was already kept). */
+export async function keepInOutbox(entry: Omit<OutboxEntry, "queuedAt" | "state" | "attempts">): Promise<void> {
+  const kept = await outbox.entries.get(entry.clientId);
+  await outbox.entries.put({ ...entry, queuedAt: kept?.queuedAt ?? Date.now(), state: "waiting", attempts: kept?.attempts ?? 0 });
+}
+
+/** A person's entries in the order they were made. */
+export const entriesOf = (userId: string): Promise<OutboxEntry[]> =>
+  outbox.entries.where("[userId+queuedAt]").between([userId, Dexie.minKey], [userId, Dexie.maxKey]).toArray();
+
+export const discardEntry = (clientId: string): Promise<void> => outbox.entries.delete(clientId);
+
+/**
+ * Sends a visit entry now; without a connection, or without an answer in time, keeps it in the
+ * outbox under its client id instead (the server stores it once even if this try reached it).
+ * Offline it is kept at once, without trying. Any other failure is the caller's to show.
+ *
+ * @returns "stored" with the server's answer, or "kept" when it waits on the device
+ */
+export async function sendOrKeep<T>(
+  send: () => Promise<T>,
+  entry: Omit<OutboxEntry, "queuedAt" | "state" | "attempts">,
+): Promise<{ outcome: "stored"; stored: T } | { outcome: "kept" }> {
+  if (navigator.onLine) {
+    try {
+      return { outcome: "stored", stored: await send() };
+    } catch (error) {
+      if (!(error instanceof ApiError && error.status === 0)) throw error;
+    }
+  }
+  try {
+    await keepInOutbox(entry);
+  } catch {
+    throw new ApiError(0, "No connection, and this device could not keep the entry: nothing was saved. Your values are kept here; save again when the signal is back.");
+  }
+  return { outcome: "kept" };
+}
