@@ -2,6 +2,7 @@ import { fileURLToPath } from "node:url";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
 import { defineConfig } from "vitest/config";
+import { precompressAssets } from "./scripts/precompress-assets.ts";
 
 const fromRoot = (path: string) => fileURLToPath(new URL(path, import.meta.url));
 
@@ -63,7 +64,7 @@ const chunkGroups = [
 ];
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [react(), tailwindcss(), precompressAssets()],
   // convert-units 2.x pulls lodash modules that read `global` (STACK.md gotcha 3).
   define: { global: "globalThis" },
   resolve: {
