@@ -29,7 +29,10 @@ export function precompressAssets(): Plugin {
       await Promise.all(
         names.map(async (name) => {
           const body = await readFile(path.join(assets, name));
-          await writeFile(path.join(assets, `${name}.br`), await compressBrotli(body, { params: { [constants.BROTLI_PARAM_QUALITY]: 11 } }));
+          await writeFile(
+            path.join(assets, `${name}.br`),
+            await compressBrotli(body, { params: { [constants.BROTLI_PARAM_QUALITY]: 11 } }),
+          );
           await writeFile(path.join(assets, `${name}.gz`), await compressGzip(body, { level: 9 }));
         }),
       );

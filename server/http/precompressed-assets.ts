@@ -20,7 +20,9 @@ export function precompressedAssets(assetsFolder: string, cacheControl: string):
   return (req, res, next) => {
     if (req.method !== "GET" && req.method !== "HEAD") return next();
     const name = req.path.slice(1);
-    const encoding = ENCODINGS.find(({ name: accepted, suffix }) => copies.has(`${name}${suffix}`) && req.acceptsEncodings(accepted) === accepted);
+    const encoding = ENCODINGS.find(
+      ({ name: accepted, suffix }) => copies.has(`${name}${suffix}`) && req.acceptsEncodings(accepted) === accepted,
+    );
     if (!encoding) return next();
     res.setHeader("Content-Encoding", encoding.name);
     res.setHeader("Content-Type", `${name.endsWith(".css") ? "text/css" : "text/javascript"}; charset=utf-8`);

@@ -4,7 +4,7 @@ import { createTailwindMerge } from "tailwind-merge";
 /**
  * Which Tailwind classes replace which, for the utilities this app writes. tailwind-merge's own
  * table covers every utility Tailwind has and was 8.8 kB (brotli) of every first page, the
- * sign-in screen's included; this one is 2 kB in all. Each group names its classes' first words
+ * sign-in screen's included; with this one cn is 3.8 kB. Each group names its classes' first words
  * and takes any value after them (`min-h-touch`, `min-h-14`), except where words share a start:
  * there the exact words pick the group first (`text-xl` is a size, `text-ink` a colour;
  * `border-2` a width, `border-rule` a colour). tests/client/lib/cn.test.ts checks that every pair
@@ -17,7 +17,17 @@ const isWidth = (value: string) => /^\d+$/.test(value);
 const isOffset = (value: string) => /^(\d+(\.\d+)?|\d+\/\d+|px|full|auto|\[.+\])$/.test(value);
 const SIDES = ["t", "r", "b", "l", "x", "y"] as const;
 const FONT_SIZES = ["xs", "sm", "base", "lg", "xl", "2xl", "3xl", "4xl", "5xl", "6xl", "7xl", "8xl", "9xl"];
-const DISPLAYS = ["block", "inline-block", "inline", "flex", "inline-flex", "grid", "inline-grid", "contents", "hidden"];
+const DISPLAYS = [
+  "block",
+  "inline-block",
+  "inline",
+  "flex",
+  "inline-flex",
+  "grid",
+  "inline-grid",
+  "contents",
+  "hidden",
+];
 const TABLE_DISPLAYS = ["table", "table-row", "table-cell", "table-header-group", "table-row-group", "table-caption"];
 
 const byWord = (word: string) => [{ [word]: [anyValue] }];
@@ -81,7 +91,9 @@ const twMerge = createTailwindMerge(() => ({
     "font-size": [{ text: FONT_SIZES }],
     "text-alignment": [{ text: ["left", "center", "right", "justify", "start", "end"] }],
     "text-color": byWord("text"),
-    "font-weight": [{ font: ["thin", "extralight", "light", "normal", "medium", "semibold", "bold", "extrabold", "black"] }],
+    "font-weight": [
+      { font: ["thin", "extralight", "light", "normal", "medium", "semibold", "bold", "extrabold", "black"] },
+    ],
     "font-family": [{ font: ["sans", "serif", "mono"] }],
     leading: byWord("leading"),
     tracking: byWord("tracking"),
@@ -135,14 +147,51 @@ const twMerge = createTailwindMerge(() => ({
     size: ["w", "h"],
     "line-clamp": ["display", "overflow"],
     // `sr-only` sets these itself, and Tailwind writes them after it: an earlier one would undo the hiding.
-    "sr-only": ["not-sr-only", "position", "size", "w", "h", "p", "px", "py", "pt", "pr", "pb", "pl", "m", "mx", "my", "mt", "mr", "mb", "ml", "overflow", "overflow-x", "overflow-y", "whitespace"],
+    "sr-only": [
+      "not-sr-only",
+      "position",
+      "size",
+      "w",
+      "h",
+      "p",
+      "px",
+      "py",
+      "pt",
+      "pr",
+      "pb",
+      "pl",
+      "m",
+      "mx",
+      "my",
+      "mt",
+      "mr",
+      "mb",
+      "ml",
+      "overflow",
+      "overflow-x",
+      "overflow-y",
+      "whitespace",
+    ],
     "not-sr-only": ["sr-only"],
     "border-w": ["border-w-t", "border-w-r", "border-w-b", "border-w-l", "border-w-x", "border-w-y"],
     "border-w-x": ["border-w-r", "border-w-l"],
     "border-w-y": ["border-w-t", "border-w-b"],
   },
   conflictingClassGroupModifiers: { "font-size": ["leading"] },
-  orderSensitiveModifiers: ["*", "**", "after", "backdrop", "before", "details-content", "file", "first-letter", "first-line", "marker", "placeholder", "selection"],
+  orderSensitiveModifiers: [
+    "*",
+    "**",
+    "after",
+    "backdrop",
+    "before",
+    "details-content",
+    "file",
+    "first-letter",
+    "first-line",
+    "marker",
+    "placeholder",
+    "selection",
+  ],
 }));
 
 /** Joins class names and lets later Tailwind classes win over earlier ones. */

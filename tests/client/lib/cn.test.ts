@@ -18,10 +18,13 @@ const fullMerge = extendTailwindMerge({
 /** Every word in a string literal of src/ that could be a class (cn's own table left out). */
 function classesWrittenInSource(): string[] {
   const words = new Set<string>();
-  const files = readdirSync(SOURCE, { recursive: true, encoding: "utf8" }).filter((file) => /\.tsx?$/.test(file) && !file.endsWith(path.join("lib", "cn.ts")));
+  const files = readdirSync(SOURCE, { recursive: true, encoding: "utf8" }).filter(
+    (file) => /\.tsx?$/.test(file) && !file.endsWith(path.join("lib", "cn.ts")),
+  );
   for (const file of files) {
     for (const literal of readFileSync(path.join(SOURCE, file), "utf8").matchAll(/"([^"\n]*)"|`([^`]*)`/g)) {
-      for (const word of (literal[1] ?? literal[2] ?? "").split(/\s+/)) if (/^[a-z!-][a-z0-9:\-[\]=./!()_%&>*]+$/.test(word)) words.add(word);
+      for (const word of (literal[1] ?? literal[2] ?? "").split(/\s+/))
+        if (/^[a-z!-][a-z0-9:\-[\]=./!()_%&>*]+$/.test(word)) words.add(word);
     }
   }
   // Words neither table knows are kept as they are by both.

@@ -13,14 +13,23 @@ const SCRIPT = "export const answer = 42; // ".padEnd(4000, "x");
 const CACHE = "public, max-age=31536000, immutable";
 
 /** The raw bytes and headers of one answer, undecoded (fetch and supertest would decode them). */
-function rawGet(server: Server, file: string, acceptEncoding: string): Promise<{ status: number; headers: IncomingHttpHeaders; body: Buffer }> {
+function rawGet(
+  server: Server,
+  file: string,
+  acceptEncoding: string,
+): Promise<{ status: number; headers: IncomingHttpHeaders; body: Buffer }> {
   const { port } = server.address() as AddressInfo;
   return new Promise((resolve, reject) => {
-    get({ host: "127.0.0.1", port, path: `/assets/${file}`, headers: { "Accept-Encoding": acceptEncoding } }, (response) => {
-      const chunks: Buffer[] = [];
-      response.on("data", (chunk: Buffer) => chunks.push(chunk));
-      response.on("end", () => resolve({ status: response.statusCode ?? 0, headers: response.headers, body: Buffer.concat(chunks) }));
-    }).on("error", reject);
+    get(
+      { host: "127.0.0.1", port, path: `/assets/${file}`, headers: { "Accept-Encoding": acceptEncoding } },
+      (response) => {
+        const chunks: Buffer[] = [];
+        response.on("data", (chunk: Buffer) => chunks.push(chunk));
+        response.on("end", () =>
+          resolve({ status: response.statusCode ?? 0, headers: response.headers, body: Buffer.concat(chunks) }),
+        );
+      },
+    ).on("error", reject);
   });
 }
 
