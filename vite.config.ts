@@ -4,6 +4,7 @@ import tailwindcss from "@tailwindcss/vite";
 import { VitePWA } from "vite-plugin-pwa";
 import { defineConfig } from "vitest/config";
 import { TABLE_CACHE, TABLE_URL } from "./src/features/offline/table-cache.ts";
+import { precompressAssets } from "./scripts/precompress-assets.ts";
 
 const fromRoot = (path: string) => fileURLToPath(new URL(path, import.meta.url));
 
@@ -110,7 +111,7 @@ const installableApp = VitePWA({
 });
 
 export default defineConfig({
-  plugins: [react(), tailwindcss(), installableApp],
+  plugins: [react(), tailwindcss(), installableApp, precompressAssets()],
   // convert-units 2.x pulls lodash modules that read `global` (STACK.md gotcha 3).
   // __SATURA_BUILD__: the build's identity, so that data kept on a device (src/features/offline/
   // persist-queries.ts) is read only by the screens that wrote it.

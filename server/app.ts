@@ -15,6 +15,7 @@ import { loadSession } from "./auth/session.ts";
 import type { Database } from "./db/client.ts";
 import type { Env } from "./env.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
+import { precompressedAssets } from "./http/precompressed-assets.ts";
 import type { Mailer } from "./mail/mailer.ts";
 import { attemptsRouter } from "./routes/attempts.ts";
 import { authRouter } from "./routes/auth.ts";
@@ -132,6 +133,7 @@ export function createApp(deps: AppDeps): Express {
     app.use(deps.clientMiddleware);
   } else if (existsSync(distFolder)) {
     // Hashed asset names change with content, so they can be cached for a year.
+    app.use("/assets", precompressedAssets(`${distFolder}/assets`, "public, max-age=31536000, immutable"));
     app.use("/assets", express.static(`${distFolder}/assets`, { immutable: true, maxAge: "1y", index: false }));
     app.use(
       express.static(distFolder, {

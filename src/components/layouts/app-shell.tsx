@@ -1,6 +1,7 @@
 import { Menu } from "lucide-react";
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { Link, Navigate, Outlet, useLocation, useNavigation } from "react-router-dom";
+import { fetchToastLibraryWhenIdle } from "@/components/ui/toaster/toaster.tsx";
 import { isNavItemActive, navigationFor, type NavItem } from "@/config/navigation.ts";
 import { paths } from "@/config/paths.ts";
 import { UserMenu } from "@/features/auth/components/user-menu.tsx";
@@ -35,6 +36,8 @@ export function AppShell() {
   const role = me.data?.role ?? "apprentice";
   const outbox = useOutboxAvailable(role === "owner");
   const navigation = navigationFor(role, { outbox: outbox.data === true });
+  // Held before the first toast of a signed-in screen (toaster.tsx says why).
+  useEffect(fetchToastLibraryWhenIdle, []);
   useOfflineTables();
   useDayOnDevice();
   useOutboxSender(useOutboxEntries());

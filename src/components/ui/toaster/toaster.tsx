@@ -2,11 +2,12 @@ import { useEffect, useSyncExternalStore } from "react";
 
 /**
  * Error toasts, with the toast library (sonner) kept off the first load: it was 9 kB of every
- * first page, the sign-in screen's included. It is fetched once the browser is idle after the
- * first screen, so that it is already held when the first toast comes, which is often the
- * moment the connection has gone ("No connection"). If it still cannot be fetched, the
- * messages show in a plain alert list instead and the next toast tries again: a toast must
- * never take the page down with it.
+ * first page, the sign-in screen's included. The signed-in frame fetches it once the browser is
+ * idle after the first screen (fetchToastLibraryWhenIdle), so that it is already held when the
+ * first toast comes, which is often the moment the connection has gone ("No connection"); a
+ * public screen (sign-in, a mailed link), whose errors show in its form, fetches it for its first
+ * toast only. If it still cannot be fetched, the messages show in a plain alert list instead and
+ * the next toast tries again: a toast must never take the page down with it.
  */
 type Sonner = typeof import("sonner");
 
@@ -102,17 +103,19 @@ function PlainToasts({ messages }: { messages: readonly string[] }) {
   );
 }
 
-/** Where toasts appear. Fetches the toast library when the browser is first idle. */
+/** Fetches the toast library once the browser is idle; returns the cancel for an effect's clean-up. */
+export function fetchToastLibraryWhenIdle(): () => void {
+  if (typeof requestIdleCallback === "function") {
+    const handle = requestIdleCallback(fetchSonner, { timeout: 5000 });
+    return () => cancelIdleCallback(handle);
+  }
+  const handle = setTimeout(fetchSonner, 2000);
+  return () => clearTimeout(handle);
+}
+
+/** Where toasts appear. */
 export function Toaster() {
   const state = useSyncExternalStore(subscribe, getSnapshot);
-  useEffect(() => {
-    if (typeof requestIdleCallback === "function") {
-      const handle = requestIdleCallback(fetchSonner, { timeout: 5000 });
-      return () => cancelIdleCallback(handle);
-    }
-    const handle = setTimeout(fetchSonner, 2000);
-    return () => clearTimeout(handle);
-  }, []);
   if (state.library) return <LoadedToaster library={state.library} />;
   return <PlainToasts messages={state.pending} />;
 }
