@@ -190,7 +190,7 @@ async function saveRtuReading(page: Page, suctionLineC: string) {
 }
 
 /** The outbox entries on the device (src/features/offline/outbox-store.ts): client id and time taken. */
-function outboxEntries(page: Page): Promise<{ clientId: string; takenAt: string; state: string }[]> {
+function outboxEntries(page: Page): Promise<{ clientId: string; takenAt: string; state: string; path: string }[]> {
   return page.evaluate(
     () =>
       new Promise((resolve, reject) => {
@@ -198,18 +198,23 @@ function outboxEntries(page: Page): Promise<{ clientId: string; takenAt: string;
         open.onerror = () => reject(open.error);
         open.onsuccess = () => {
           const all = open.result.transaction("entries").objectStore("entries").getAll();
-          all.onsuccess = () => resolve(all.result as { clientId: string; takenAt: string; state: string }[]);
+          all.onsuccess = () => resolve(all.result as { clientId: string; takenAt: string; state: string; path: string }[]);
         };
       }),
   );
 }
 
-test("readings and an adjustment saved with no network wait on the device, survive a reload, and are stored once with their times", async ({ page, context }) => {
+test("readings, an adjustment and an evacuation sample saved with no network wait on the device, survive a reload, and are stored once with their times", async ({ page, context }) => {
   await page.goto("/");
   await signIn(page, "tech@bellbird.example");
   await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
   const visitId = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Readings kept while offline");
+  // An evacuation begun with signal takes its samples offline.
+  await page.getByRole("radio", { name: "Evacuation" }).click();
+  await page.getByRole("button", { name: "Start the evacuation" }).click();
+  await expect(page.getByText("Pulling down")).toBeVisible();
   await keptForOffline(page, visitId);
+  await expect.poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["procedures", "evacuations", visitId])), { timeout: 30_000 }).toBe(true);
 
   await context.setOffline(true);
   await page.goto(`/visits/${visitId}`);
@@ -222,13 +227,19 @@ test("readings and an adjustment saved with no network wait on the device, survi
   const waiting = page.getByRole("region", { name: "Entries on this device" });
   await expect(waiting.getByText("Waiting to send")).toHaveCount(4);
   await expect(waiting.getByText("Airflow changed, circuit 1")).toBeVisible();
-  await expect(page.getByTestId("outbox-waiting")).toHaveText("4 entries waiting to send.");
+
+  await page.getByRole("radio", { name: "Evacuation" }).click();
+  await page.getByLabel("Time from start", { exact: true }).fill("12");
+  await page.getByLabel("Vacuum reading", { exact: true }).fill("2400");
+  await page.getByRole("button", { name: "Add reading" }).click();
+  await expect(waiting.getByText("Evacuation reading")).toBeVisible();
+  await expect(page.getByTestId("outbox-waiting")).toHaveText("5 entries waiting to send.");
   const kept = await outboxEntries(page);
-  expect(kept).toHaveLength(4);
+  expect(kept).toHaveLength(5);
 
   // Still there after a reload with no network.
   await page.reload();
-  await expect(page.getByRole("region", { name: "Entries on this device" }).getByText("Waiting to send")).toHaveCount(4);
+  await expect(page.getByTestId("outbox-waiting")).toHaveText("5 entries waiting to send.");
 
   await context.setOffline(false);
   await expect(page.getByRole("region", { name: "Entries on this device" })).toBeHidden({ timeout: 30_000 });
@@ -241,7 +252,11 @@ test("readings and an adjustment saved with no network wait on the device, survi
   expect(adjustments.map((adjustment) => adjustment.description)).toEqual(["Cleaned the return air filter"]);
   // Each with the time it was taken on the device, not the time it reached the server.
   const storedTimes = [...readings.map((reading) => reading.takenAt), adjustments[0]!.at].map(Date.parse).sort();
-  expect(storedTimes).toEqual(kept.map((entry) => Date.parse(entry.takenAt)).sort());
+  const keptTimes = kept.filter((entry) => !entry.path.includes("/evacuations/"));
+  expect(storedTimes).toEqual(keptTimes.map((entry) => Date.parse(entry.takenAt)).sort());
+  // The sample, at the minute typed on the device.
+  const evacuations = (await (await page.request.get(`/api/visits/${visitId}/evacuations`)).json()) as { evacuations: { samples: { minutes: number; microns: number }[] }[] };
+  expect(evacuations.evacuations[0]!.samples).toEqual([expect.objectContaining({ minutes: 12, microns: 2400 })]);
   expect(readings.map((reading) => reading.input.suctionLineTempC).sort()).toEqual([13, 14, 15]);
 });
 

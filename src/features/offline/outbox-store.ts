@@ -31,7 +31,18 @@ export interface OutboxEntry {
   attempts: number;
 }
 
-export type OutboxKind = "reading" | "adjustment";
+export type OutboxKind = "reading" | "adjustment" | "electrical-check" | "leak-search" | "standing-pressure-check" | "pressure-test" | "evacuation-sample";
+
+/** How each kind of entry is named in the lists of entries on the device. */
+export const OUTBOX_KIND_LABELS: Record<OutboxKind, string> = {
+  reading: "Reading",
+  adjustment: "Adjustment",
+  "electrical-check": "Electrical check",
+  "leak-search": "Leak search",
+  "standing-pressure-check": "Standing-pressure check",
+  "pressure-test": "Pressure test",
+  "evacuation-sample": "Evacuation reading",
+};
 
 class OutboxDatabase extends Dexie {
   entries!: EntityTable<OutboxEntry, "clientId">;

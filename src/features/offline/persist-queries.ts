@@ -5,8 +5,8 @@ import { deleteKeptData, readKeptData, writeKeptData } from "./device-cache.ts";
 
 /**
  * What the app keeps of its data on the device, so that the screens of the day open without
- * signal: who is signed in, visits and their units, the register's view of them, charge
- * references, cylinders and the company's limits. Not kept: property tables (the service worker
+ * signal: who is signed in, visits and their units, their procedure records, the register's view
+ * of them, charge references, cylinders and the company's limits. Not kept: property tables (the service worker
  * holds those), server health, mail, invitations, members, and anything of pages past the first
  * or of a search.
  */
@@ -19,6 +19,7 @@ const KEPT_KINDS = new Set([
   "cylinders",
   "organisation",
   "profile",
+  "procedures",
 ]);
 /** Kept data older than this is dropped rather than shown as the day's. */
 const MAX_AGE_MS = 7 * 24 * 60 * 60 * 1000;

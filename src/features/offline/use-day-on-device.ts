@@ -1,6 +1,7 @@
 import { useQueries, useQueryClient } from "@tanstack/react-query";
 import { useEffect } from "react";
 import { visitRefrigerantQueryOptions } from "@/lib/api/register.ts";
+import { prefetchProcedureLists } from "@/lib/api/procedures.ts";
 import { prefetchVisitScreen } from "@/lib/api/screen-data.ts";
 import { MY_OPEN_VISITS, OPEN_VISITS_FIRST_PAGE, visitsQueryOptions } from "@/lib/api/visits.ts";
 import { useOnlineStatus } from "./online-status.ts";
@@ -12,8 +13,8 @@ const VISITS_KEPT = 20;
 /**
  * The day at hand, fetched ahead while there is signal, so that it opens on a roof without: the
  * visits the person is on the crew of and the company's first page of open visits (what Today
- * lists), each with what its screen needs (unit, charge references, refrigerant table) and its
- * refrigerant balance. One visit after another, when the browser is idle, whenever the lists
+ * lists), each with what its screen needs (unit, charge references, refrigerant table), its
+ * refrigerant balance and its procedure records. One visit after another, when the browser is idle, whenever the lists
  * change (a visit started, one signed off) or the signal returns; what is already in the cache
  * is not asked again. The cache is kept on the device by persist-queries.ts.
  */
@@ -34,6 +35,8 @@ export function useDayOnDevice(): void {
         if (stopped || !navigator.onLine) return;
         await prefetchVisitScreen(queryClient, id);
         await queryClient.prefetchQuery(visitRefrigerantQueryOptions(id));
+        // The sections' records: an evacuation begun with signal takes its samples offline.
+        await prefetchProcedureLists(queryClient, id);
       }
     };
     const cancel = whenIdle(() => void keep(), 10_000);

@@ -1,9 +1,9 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { liveQuery } from "dexie";
-import { useEffect, useState } from "react";
+import { useCallback, useEffect, useState } from "react";
 import { useMe } from "@/lib/api/auth.ts";
 import { useOnlineStatus } from "./online-status.ts";
-import { entriesOf, type OutboxEntry } from "./outbox-store.ts";
+import { entriesOf, OUTBOX_KIND_LABELS, sendOrKeep, type OutboxEntry, type OutboxKind } from "./outbox-store.ts";
 import { sendWaitingEntries } from "./outbox-sender.ts";
 
 const NONE: OutboxEntry[] = [];
@@ -56,4 +56,23 @@ export function useOutboxSender(entries: OutboxEntry[]): void {
       clearTimeout(timer);
     };
   }, [userId, online, waiting, queryClient]);
+}
+
+/**
+ * `sendOrKeep` for a form of a visit's records: the entry is named by its kind and keeps the
+ * body's `takenAt` (or now) as the time it was taken.
+ */
+export function useKeepWhenOffline() {
+  const userId = useMe().data?.id ?? "";
+  return useCallback(
+    <T>(send: () => Promise<T>, entry: { kind: OutboxKind; visitId: string; path: string; body: Record<string, unknown> & { clientId: string; takenAt?: string } }) =>
+      sendOrKeep(send, {
+        ...entry,
+        clientId: entry.body.clientId,
+        userId,
+        label: OUTBOX_KIND_LABELS[entry.kind],
+        takenAt: entry.body.takenAt ?? new Date().toISOString(),
+      }),
+    [userId],
+  );
 }

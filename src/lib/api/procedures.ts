@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { type QueryClient, queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import {
   ElectricalCheckListSchema,
@@ -82,6 +82,17 @@ export const evacuationsQueryOptions = (visitId: string) =>
 
 // ---- hooks ------------------------------------------------------------------------------------
 
+/** Fetches every procedure list of a visit not yet held: what its sections show, ahead of offline use. */
+export function prefetchProcedureLists(queryClient: QueryClient, visitId: string): Promise<unknown> {
+  return Promise.all([
+    queryClient.prefetchQuery(electricalChecksQueryOptions(visitId)),
+    queryClient.prefetchQuery(leakSearchesQueryOptions(visitId)),
+    queryClient.prefetchQuery(standingPressureChecksQueryOptions(visitId)),
+    queryClient.prefetchQuery(pressureTestsQueryOptions(visitId)),
+    queryClient.prefetchQuery(evacuationsQueryOptions(visitId)),
+  ]);
+}
+
 export const useElectricalChecks = (visitId: string) => useQuery(electricalChecksQueryOptions(visitId));
 export const useLeakSearches = (visitId: string) => useQuery(leakSearchesQueryOptions(visitId));
 export const useStandingPressureChecks = (visitId: string) => useQuery(standingPressureChecksQueryOptions(visitId));
@@ -93,6 +104,8 @@ function useProcedureMutation<TVariables extends { visitId: string }, TResult>(k
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn,
+    // Without a connection the panels keep new records in the device's outbox and say so.
+    meta: { keptOffline: true },
     onSuccess: (_result, variables) =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: key(kind, variables.visitId) }),

@@ -5,12 +5,14 @@ import { paths } from "@/config/paths.ts";
 import { useMe, useSignOut } from "@/lib/api/auth.ts";
 import { cn } from "@/lib/cn.ts";
 import { clearAllDrafts, countDrafts } from "@/lib/drafts/draft-store.ts";
+import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
 
 /** Who is signed in (name and role, in words) and the sign-out button. */
 export function UserMenu({ compact = false, className }: { compact?: boolean; className?: string }) {
   const me = useMe();
   const signOut = useSignOut();
   const navigate = useNavigate();
+  const outboxEntries = useOutboxEntries();
   const user = me.data;
   if (!user) return null;
 
@@ -19,6 +21,16 @@ export function UserMenu({ compact = false, className }: { compact?: boolean; cl
     // person on a shared tablet, so it asks first and then clears them.
     const drafts = countDrafts();
     if (drafts > 0 && !window.confirm(`${drafts === 1 ? "One form holds" : `${drafts} forms hold`} values that are not saved yet. Sign out and discard them?`)) return;
+    // Entries in the outbox are kept for this person (never sent or shown for anyone else), but
+    // they reach the server only once this person signs in again on this device: say so.
+    const unsent = outboxEntries.length;
+    if (
+      unsent > 0 &&
+      !window.confirm(
+        `${unsent === 1 ? "One entry has" : `${unsent} entries have`} not reached the server yet. They stay on this device and are sent when you sign in here again. Sign out now?`,
+      )
+    )
+      return;
     signOut.mutate(undefined, {
       onSuccess: () => clearAllDrafts(),
       onSettled: () => navigate(paths.signIn.getHref(), { replace: true }),

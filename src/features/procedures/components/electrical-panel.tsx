@@ -13,6 +13,7 @@ import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateElectricalCheck, useElectricalChecks } from "@/lib/api/procedures.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
+import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
 import { errorFor, fieldErrorsOf } from "../utils/field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { ElectricalCheckView } from "./electrical-check-view.tsx";
@@ -59,6 +60,7 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
   const create = useCreateElectricalCheck();
   // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
   const entryId = useEntryClientId();
+  const keepWhenOffline = useKeepWhenOffline();
   const defaults = checks.data?.defaults;
   const threePhase = (defaults?.phases ?? 3) === 3;
   const phaseCount = threePhase ? 3 : 1;
@@ -167,9 +169,11 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
       return;
     }
     try {
-      await create.mutateAsync({ visitId, ...parsed.data , clientId: entryId.take() });
+      // Taken now, by the device's clock; without a connection it waits in the outbox.
+      const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
+      const sent = await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "electrical-check", visitId, path: `/visits/${visitId}/electrical-checks`, body: record });
       entryId.release();
-      setSaved(true);
+      setSaved(sent.outcome === "stored");
       setAttempted(false);
       setVolts(["", "", ""]);
       setInsulation([emptyInsulation()]);

@@ -22,6 +22,8 @@ import { useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateE
 import { useVoidRecord } from "@/lib/api/visits.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
+import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-outbox.ts";
+import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
@@ -50,6 +52,7 @@ function errorText(error: unknown, fallback: string): { message: string; fields:
 function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitId: string; evacuation: Evacuation; unit: VacuumUnit; canWrite: boolean; onReload: () => Promise<unknown> }) {
   const now = useNow(5_000);
   const addSample = useAddEvacuationSample();
+  const keepWhenOffline = useKeepWhenOffline();
   // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
   const entryId = useEntryClientId();
   const update = useUpdateEvacuation();
@@ -82,7 +85,18 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
     setReading("");
     setMinutes(null);
     try {
-      await addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...parsed.data , clientId: entryId.take() });
+      // A sample kept on the device counts its minutes from the pump's start now, not when it arrives.
+      const sample = {
+        ...parsed.data,
+        minutes: parsed.data.minutes ?? Math.max(0, Math.round((Date.now() - Date.parse(evacuation.startedAt)) / 6000) / 10),
+        clientId: entryId.take(),
+      };
+      await keepWhenOffline(() => addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...sample }), {
+        kind: "evacuation-sample",
+        visitId,
+        path: `/visits/${visitId}/evacuations/${evacuation.id}/samples`,
+        body: sample,
+      });
       entryId.release();
     } catch (error) {
       const { message, fields } = errorText(error, "The reading was not saved. Try again.");
@@ -175,6 +189,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
   // The latest evacuation that stands is the one in progress; voided ones stay listed below.
   const current = list.filter(isStanding).at(-1);
   const earlier = list.filter((evacuation) => evacuation !== current);
+  const onDevice = useOutboxEntries();
   const voidEvacuation = (evacuation: Evacuation) => (reason: string) => voidRecord.mutateAsync({ visitId, kind: "evacuation", recordId: evacuation.id, reason });
   const targetText =
     target ?? (evacuations.data ? convertTyped(String(evacuations.data.defaults.targetMicrons), "micron", unit) : "");
@@ -206,6 +221,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
       <CautionPanel topic="electrical" />
       <p className="text-sm text-muted">Read the vacuum on an electronic (micron) gauge at the point furthest from the pump, never a compound gauge.</p>
       {evacuations.isError && <FormAlert>The evacuations could not be loaded: {evacuations.error.message}</FormAlert>}
+      <WaitingEntries entries={onDevice.filter((entry) => entry.visitId === visitId && entry.kind === "evacuation-sample")} />
 
       <Segmented<VacuumUnit>
         label="Vacuum unit"

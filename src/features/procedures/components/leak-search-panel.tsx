@@ -18,6 +18,7 @@ import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateLeakSearch, useLeakSearches } from "@/lib/api/procedures.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
+import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { LeakSearchView } from "./leak-search-view.tsx";
@@ -33,6 +34,7 @@ export function LeakSearchPanel({ visitId, canWrite, readOnlyNote }: { visitId: 
   const create = useCreateLeakSearch();
   // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
   const entryId = useEntryClientId();
+  const keepWhenOffline = useKeepWhenOffline();
   const [method, setMethod] = useState<LeakMethod>("electronic-detector");
   const [places, setPlaces] = useState("");
   const [leaks, setLeaks] = useState<LeakRow[]>([]);
@@ -71,7 +73,9 @@ export function LeakSearchPanel({ visitId, canWrite, readOnlyNote }: { visitId: 
     }
     setErrors({});
     try {
-      await create.mutateAsync({ visitId, ...body , clientId: entryId.take() });
+      // Taken now, by the device's clock; without a connection it waits in the outbox.
+      const record = { ...body, clientId: entryId.take(), takenAt: new Date().toISOString() };
+      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "leak-search", visitId, path: `/visits/${visitId}/leak-searches`, body: record });
       entryId.release();
       setPlaces("");
       setLeaks([]);

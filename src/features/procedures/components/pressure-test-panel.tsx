@@ -22,6 +22,7 @@ import {
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
+import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
@@ -57,6 +58,7 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
   const create = useCreatePressureTest();
   // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
   const entryId = useEntryClientId();
+  const keepWhenOffline = useKeepWhenOffline();
   const defaults = tests.data?.defaults;
   const pressureUnit = GAUGE_LABEL[units.pressure];
   const temperatureUnit = TEMPERATURE_LABEL[units.temperature];
@@ -120,7 +122,9 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
     }
     setErrors({});
     try {
-      await create.mutateAsync({ visitId, ...parsed.data , clientId: entryId.take() });
+      // Taken now, by the device's clock; without a connection it waits in the outbox.
+      const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
+      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "pressure-test", visitId, path: `/visits/${visitId}/pressure-tests`, body: record });
       entryId.release();
       setStart("");
       setEnd("");

@@ -6,6 +6,8 @@ import { FormAlert } from "@/components/ui/field/field.tsx";
 import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
 import { useVoidRecord } from "@/lib/api/visits.ts";
+import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
+import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 
 /** One saved record: how it looks, and what the void dialog calls it. */
 export interface SavedRecord {
@@ -41,6 +43,7 @@ export const ROLE_READ_ONLY_NOTE = "You can read this visit; recording is for te
 
 export function ProcedureLayout({ visitId, caution, saved, loadError, form, readOnlyNote = ROLE_READ_ONLY_NOTE }: ProcedureLayoutProps) {
   const voidRecord = useVoidRecord();
+  const onDevice = useOutboxEntries();
   return (
     <div className="space-y-4">
       {caution && <CautionPanel topic={caution} />}
@@ -59,6 +62,8 @@ export function ProcedureLayout({ visitId, caution, saved, loadError, form, read
           ))}
         </section>
       )}
+      {/* This kind's entries on the device: waiting to send, or refused with the reason. */}
+      <WaitingEntries entries={onDevice.filter((entry) => entry.visitId === visitId && (entry.kind === saved.kind || entry.kind.startsWith(`${saved.kind}-`)))} />
       {loadError && <FormAlert>{loadError}</FormAlert>}
       {form ? (
         <form

@@ -10,6 +10,7 @@ import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateStandingPressureCheck, useStandingPressureChecks } from "@/lib/api/procedures.ts";
 import { GAUGE_LABEL, gaugeFromDisplay, TEMPERATURE_LABEL, temperatureFromDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
+import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted } from "../utils/parse-number.ts";
@@ -41,6 +42,7 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
   const create = useCreateStandingPressureCheck();
   // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
   const entryId = useEntryClientId();
+  const keepWhenOffline = useKeepWhenOffline();
   const [standing, setStanding] = useState("");
   const [temperature, setTemperature] = useState("");
   const [circuit, setCircuit] = useState(String(circuits[0] ?? 1));
@@ -81,7 +83,9 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
     }
     setErrors({});
     try {
-      await create.mutateAsync({ visitId, ...parsed.data , clientId: entryId.take() });
+      // Taken now, by the device's clock; without a connection it waits in the outbox.
+      const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
+      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "standing-pressure-check", visitId, path: `/visits/${visitId}/standing-pressure-checks`, body: record });
       entryId.release();
       setStanding("");
       setTemperature("");
