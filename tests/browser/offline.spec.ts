@@ -86,16 +86,10 @@ test("a visit of the day opens with no network, and the finding works out as val
   page,
   context,
 }) => {
-  await page.goto("/equipment");
+  await page.goto("/");
   await signIn(page, "tech@bellbird.example");
-  await page
-    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-    .first()
-    .click();
-  await page.getByLabel("Reason for the visit").fill("Offline check on the roof");
-  await page.getByRole("button", { name: "Start the visit" }).click();
-  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
-  const visitId = new URL(page.url()).pathname.split("/").pop()!;
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  const visitId = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Offline check on the roof");
   await page.getByRole("link", { name: "Today" }).first().click();
   await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
 
