@@ -27,7 +27,7 @@ export function ConnectionBanners() {
         <p role="status" className="border-b-2 border-caution bg-surface px-4 py-2 text-sm font-medium">
           {!online && (
             <>
-              <span aria-hidden>⚠ </span>Offline. Visits kept on this device open as usual; readings you save wait here and are sent when the
+              <span aria-hidden>⚠ </span>Offline. Visits kept on this device open as usual; entries you save wait here and are sent when the
               signal returns.{" "}
             </>
           )}
