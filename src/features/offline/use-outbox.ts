@@ -59,19 +59,22 @@ export function useOutboxSender(entries: OutboxEntry[]): void {
 }
 
 /**
- * `sendOrKeep` for a form of a visit's records: the entry is named by its kind and keeps the
- * body's `takenAt` (or now) as the time it was taken.
+ * `sendOrKeep` for a form of a visit's records, for the person signed in: the entry is named by
+ * its kind (or `label`) and keeps `takenAt`, else the body's, else now, as the time it was taken.
  */
 export function useKeepWhenOffline() {
   const userId = useMe().data?.id ?? "";
   return useCallback(
-    <T>(send: () => Promise<T>, entry: { kind: OutboxKind; visitId: string; path: string; body: Record<string, unknown> & { clientId: string; takenAt?: string } }) =>
+    <T>(
+      send: () => Promise<T>,
+      entry: { kind: OutboxKind; visitId: string; path: string; label?: string; takenAt?: string; body: Record<string, unknown> & { clientId: string; takenAt?: string } },
+    ) =>
       sendOrKeep(send, {
         ...entry,
         clientId: entry.body.clientId,
         userId,
-        label: OUTBOX_KIND_LABELS[entry.kind],
-        takenAt: entry.body.takenAt ?? new Date().toISOString(),
+        label: entry.label ?? OUTBOX_KIND_LABELS[entry.kind],
+        takenAt: entry.takenAt ?? entry.body.takenAt ?? new Date().toISOString(),
       }),
     [userId],
   );

@@ -25,39 +25,44 @@ type Kind = "electrical-checks" | "leak-searches" | "standing-pressure-checks" |
 
 // ---- requests ---------------------------------------------------------------------------------
 
-export const getElectricalChecks = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/electrical-checks`, { schema: ElectricalCheckListSchema, signal });
-export const getLeakSearches = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/leak-searches`, { schema: LeakSearchListSchema, signal });
+/** Where a visit's records of one kind are listed and created; the outbox sends kept entries there too. */
+export const procedureRecordsPath = (kind: Kind, visitId: string) => `/visits/${visitId}/${kind}`;
+/** Where an evacuation's samples are added. */
+export const evacuationSamplesPath = (visitId: string, evacuationId: string) => `/visits/${visitId}/evacuations/${evacuationId}/samples`;
+
+export const getElectricalChecks = (visitId: string, signal?: AbortSignal) => apiRequest(procedureRecordsPath("electrical-checks", visitId), { schema: ElectricalCheckListSchema, signal });
+export const getLeakSearches = (visitId: string, signal?: AbortSignal) => apiRequest(procedureRecordsPath("leak-searches", visitId), { schema: LeakSearchListSchema, signal });
 export const getStandingPressureChecks = (visitId: string, signal?: AbortSignal) =>
-  apiRequest(`/visits/${visitId}/standing-pressure-checks`, { schema: StandingPressureCheckListSchema, signal });
-export const getPressureTests = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/pressure-tests`, { schema: PressureTestListSchema, signal });
-export const getEvacuations = (visitId: string, signal?: AbortSignal) => apiRequest(`/visits/${visitId}/evacuations`, { schema: EvacuationListSchema, signal });
+  apiRequest(procedureRecordsPath("standing-pressure-checks", visitId), { schema: StandingPressureCheckListSchema, signal });
+export const getPressureTests = (visitId: string, signal?: AbortSignal) => apiRequest(procedureRecordsPath("pressure-tests", visitId), { schema: PressureTestListSchema, signal });
+export const getEvacuations = (visitId: string, signal?: AbortSignal) => apiRequest(procedureRecordsPath("evacuations", visitId), { schema: EvacuationListSchema, signal });
 
 export async function createElectricalCheck({ visitId, ...body }: ElectricalCheckBody & { visitId: string }) {
-  return (await apiRequest(`/visits/${visitId}/electrical-checks`, { method: "POST", body, schema: z.object({ electricalCheck: ElectricalCheckSchema }) })).electricalCheck;
+  return (await apiRequest(procedureRecordsPath("electrical-checks", visitId), { method: "POST", body, schema: z.object({ electricalCheck: ElectricalCheckSchema }) })).electricalCheck;
 }
 
 export async function createLeakSearch({ visitId, ...body }: LeakSearchBody & { visitId: string }) {
-  return (await apiRequest(`/visits/${visitId}/leak-searches`, { method: "POST", body, schema: z.object({ leakSearch: LeakSearchSchema }) })).leakSearch;
+  return (await apiRequest(procedureRecordsPath("leak-searches", visitId), { method: "POST", body, schema: z.object({ leakSearch: LeakSearchSchema }) })).leakSearch;
 }
 
 export async function createStandingPressureCheck({ visitId, ...body }: StandingPressureBody & { visitId: string }) {
   return (
-    await apiRequest(`/visits/${visitId}/standing-pressure-checks`, { method: "POST", body, schema: z.object({ standingPressureCheck: StandingPressureCheckSchema }) })
+    await apiRequest(procedureRecordsPath("standing-pressure-checks", visitId), { method: "POST", body, schema: z.object({ standingPressureCheck: StandingPressureCheckSchema }) })
   ).standingPressureCheck;
 }
 
 export async function createPressureTest({ visitId, ...body }: PressureTestBody & { visitId: string }) {
-  return (await apiRequest(`/visits/${visitId}/pressure-tests`, { method: "POST", body, schema: z.object({ pressureTest: PressureTestSchema }) })).pressureTest;
+  return (await apiRequest(procedureRecordsPath("pressure-tests", visitId), { method: "POST", body, schema: z.object({ pressureTest: PressureTestSchema }) })).pressureTest;
 }
 
 const EvacuationEnvelope = z.object({ evacuation: EvacuationSchema });
 
 export async function createEvacuation({ visitId, ...body }: EvacuationCreate & { visitId: string }) {
-  return (await apiRequest(`/visits/${visitId}/evacuations`, { method: "POST", body, schema: EvacuationEnvelope })).evacuation;
+  return (await apiRequest(procedureRecordsPath("evacuations", visitId), { method: "POST", body, schema: EvacuationEnvelope })).evacuation;
 }
 
 export async function addEvacuationSample({ visitId, evacuationId, ...body }: EvacuationSampleBody & { visitId: string; evacuationId: string }) {
-  return (await apiRequest(`/visits/${visitId}/evacuations/${evacuationId}/samples`, { method: "POST", body, schema: EvacuationEnvelope })).evacuation;
+  return (await apiRequest(evacuationSamplesPath(visitId, evacuationId), { method: "POST", body, schema: EvacuationEnvelope })).evacuation;
 }
 
 /** Valves off or changes the target or note, naming the version the screen showed (409 if stale). */

@@ -57,12 +57,16 @@ export async function createVisit(values: VisitCreate): Promise<Visit> {
   return (await apiRequest("/visits", { method: "POST", body: values, schema: VisitEnvelopeSchema })).visit;
 }
 
+/** Where a visit's readings and adjustments are created; the outbox sends kept entries there too. */
+export const readingsPath = (visitId: string) => `/visits/${visitId}/readings`;
+export const adjustmentsPath = (visitId: string) => `/visits/${visitId}/adjustments`;
+
 export async function createReading({ visitId, ...body }: ReadingBody & { visitId: string }) {
-  return (await apiRequest(`/visits/${visitId}/readings`, { method: "POST", body, schema: z.object({ reading: ReadingSchema }) })).reading;
+  return (await apiRequest(readingsPath(visitId), { method: "POST", body, schema: z.object({ reading: ReadingSchema }) })).reading;
 }
 
 export async function createAdjustment({ visitId, ...body }: AdjustmentCreate & { visitId: string }) {
-  return (await apiRequest(`/visits/${visitId}/adjustments`, { method: "POST", body, schema: z.object({ adjustment: AdjustmentSchema }) })).adjustment;
+  return (await apiRequest(adjustmentsPath(visitId), { method: "POST", body, schema: z.object({ adjustment: AdjustmentSchema }) })).adjustment;
 }
 
 export async function createComment({ visitId, ...body }: { visitId: string; body: string; readingId?: string | null }) {

@@ -11,7 +11,7 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, TextField } from "@/components/ui/field/field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { useCreateElectricalCheck, useElectricalChecks } from "@/lib/api/procedures.ts";
+import { procedureRecordsPath, useCreateElectricalCheck, useElectricalChecks } from "@/lib/api/procedures.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
 import { errorFor, fieldErrorsOf } from "../utils/field-errors.ts";
@@ -171,7 +171,7 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
     try {
       // Taken now, by the device's clock; without a connection it waits in the outbox.
       const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      const sent = await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "electrical-check", visitId, path: `/visits/${visitId}/electrical-checks`, body: record });
+      const sent = await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "electrical-check", visitId, path: procedureRecordsPath("electrical-checks", visitId), body: record });
       entryId.release();
       setSaved(sent.outcome === "stored");
       setAttempted(false);

@@ -18,7 +18,7 @@ import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
+import { evacuationSamplesPath, useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
 import { useVoidRecord } from "@/lib/api/visits.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
@@ -94,7 +94,7 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
       await keepWhenOffline(() => addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...sample }), {
         kind: "evacuation-sample",
         visitId,
-        path: `/visits/${visitId}/evacuations/${evacuation.id}/samples`,
+        path: evacuationSamplesPath(visitId, evacuation.id),
         body: sample,
       });
       entryId.release();

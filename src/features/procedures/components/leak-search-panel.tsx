@@ -16,7 +16,7 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { useCreateLeakSearch, useLeakSearches } from "@/lib/api/procedures.ts";
+import { procedureRecordsPath, useCreateLeakSearch, useLeakSearches } from "@/lib/api/procedures.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
@@ -75,7 +75,7 @@ export function LeakSearchPanel({ visitId, canWrite, readOnlyNote }: { visitId: 
     try {
       // Taken now, by the device's clock; without a connection it waits in the outbox.
       const record = { ...body, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "leak-search", visitId, path: `/visits/${visitId}/leak-searches`, body: record });
+      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "leak-search", visitId, path: procedureRecordsPath("leak-searches", visitId), body: record });
       entryId.release();
       setPlaces("");
       setLeaks([]);

@@ -10,7 +10,7 @@ import {
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { useCreatePressureTest, usePressureTests } from "@/lib/api/procedures.ts";
+import { procedureRecordsPath, useCreatePressureTest, usePressureTests } from "@/lib/api/procedures.ts";
 import {
   formatNumber,
   GAUGE_LABEL,
@@ -124,7 +124,7 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
     try {
       // Taken now, by the device's clock; without a connection it waits in the outbox.
       const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "pressure-test", visitId, path: `/visits/${visitId}/pressure-tests`, body: record });
+      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "pressure-test", visitId, path: procedureRecordsPath("pressure-tests", visitId), body: record });
       entryId.release();
       setStart("");
       setEnd("");

@@ -7,7 +7,7 @@ import { FormAlert, TextField } from "@/components/ui/field/field.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { useCreateStandingPressureCheck, useStandingPressureChecks } from "@/lib/api/procedures.ts";
+import { procedureRecordsPath, useCreateStandingPressureCheck, useStandingPressureChecks } from "@/lib/api/procedures.ts";
 import { GAUGE_LABEL, gaugeFromDisplay, TEMPERATURE_LABEL, temperatureFromDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
@@ -85,7 +85,7 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
     try {
       // Taken now, by the device's clock; without a connection it waits in the outbox.
       const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "standing-pressure-check", visitId, path: `/visits/${visitId}/standing-pressure-checks`, body: record });
+      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "standing-pressure-check", visitId, path: procedureRecordsPath("standing-pressure-checks", visitId), body: record });
       entryId.release();
       setStanding("");
       setTemperature("");

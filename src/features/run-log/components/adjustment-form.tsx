@@ -7,12 +7,11 @@ import { ADJUSTMENT_KIND_LABELS, ADJUSTMENT_KINDS, AdjustmentCreateSchema, isCha
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { cylindersQueryOptions } from "@/lib/api/register.ts";
-import { useCreateAdjustment, useVisit } from "@/lib/api/visits.ts";
+import { adjustmentsPath, useCreateAdjustment, useVisit } from "@/lib/api/visits.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
-import { useMe } from "@/lib/api/auth.ts";
-import { sendOrKeep } from "@/features/offline/outbox-store.ts";
+import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
 import { formatTime } from "@shared/format/date-time.ts";
 
 /**
@@ -37,7 +36,7 @@ export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string;
   const [formError, setFormError] = useState<string | null>(null);
   // Logged without a connection: kept on the device, sent when the signal returns.
   const [keptAt, setKeptAt] = useState<string | null>(null);
-  const userId = useMe().data?.id;
+  const keepWhenOffline = useKeepWhenOffline();
   const form = useForm<AdjustmentCreate>({
     resolver: zodResolver(AdjustmentCreateSchema),
     defaultValues: { kind: "metering", description: "", circuit, amountKg: null, cylinderId: null },
@@ -67,15 +66,13 @@ export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string;
     // The time it was made, sent with it: if it waits on the device, it is stored with this time.
     const body = { ...values, circuit, cylinderId: charge ? values.cylinderId : null, clientId, at: values.at ?? new Date().toISOString() };
     try {
-      const sent = await sendOrKeep(() => createAdjustment.mutateAsync({ ...body, visitId }), {
-        clientId,
-        userId: userId ?? "",
-        visitId,
+      const sent = await keepWhenOffline(() => createAdjustment.mutateAsync({ ...body, visitId }), {
         kind: "adjustment",
+        visitId,
         label: `${ADJUSTMENT_KIND_LABELS[values.kind]}, circuit ${circuit}`,
-        path: `/visits/${visitId}/adjustments`,
-        body,
+        path: adjustmentsPath(visitId),
         takenAt: body.at,
+        body,
       });
       if (sent.outcome === "kept") setKeptAt(body.at);
       entryId.release();

@@ -8,10 +8,9 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { useMe } from "@/lib/api/auth.ts";
-import { useCreateReading } from "@/lib/api/visits.ts";
-import { discardEntry, sendOrKeep, type OutboxEntry } from "@/features/offline/outbox-store.ts";
-import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
+import { readingsPath, useCreateReading } from "@/lib/api/visits.ts";
+import { discardEntry, type OutboxEntry } from "@/features/offline/outbox-store.ts";
+import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-outbox.ts";
 import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useStoredDraft } from "@/lib/drafts/use-stored-draft.ts";
@@ -85,7 +84,7 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
   const [savedAt, setSavedAt] = useState<string | null>(null);
   // A reading saved without a connection: kept in the device's outbox, sent when the signal returns.
   const [keptAt, setKeptAt] = useState<string | null>(null);
-  const userId = useMe().data?.id;
+  const keepWhenOffline = useKeepWhenOffline();
   const onDevice = useOutboxEntries().filter((entry) => entry.visitId === visit.id && entry.body.circuit === circuit);
   const [showTrend, setShowTrend] = useState(false);
   const createReading = useCreateReading();
@@ -137,15 +136,12 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
     const body = { circuit, takenAt, clientId, ...(values as MeasuredValues) };
     try {
       // Without a connection (or an answer in time) the reading waits in the device's outbox.
-      const sent = await sendOrKeep(() => createReading.mutateAsync({ visitId: visit.id, ...body }), {
-        clientId,
-        userId: userId ?? "",
-        visitId: visit.id,
+      const sent = await keepWhenOffline(() => createReading.mutateAsync({ visitId: visit.id, ...body }), {
         kind: "reading",
+        visitId: visit.id,
         label: `Reading, circuit ${circuit}`,
-        path: `/visits/${visit.id}/readings`,
+        path: readingsPath(visit.id),
         body,
-        takenAt,
       });
       setSavedAt(sent.outcome === "stored" ? sent.stored.takenAt : null);
       setKeptAt(sent.outcome === "kept" ? takenAt : null);
