@@ -25,16 +25,11 @@ import type { StandingPressureResult, Verdict } from "@shared/schemas/procedures
 import type { Database } from "./client.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
 import { electricalChecks, evacuations, leakSearches, organisations, pressureTests, standingPressureChecks } from "./schema.ts";
-import { entryKind, insertEntryOnce, type StoredEntry } from "./store-once.ts";
+import { entryKind, insertEntryOnce, type DeviceEntryValues, type StoredEntry } from "./store-once.ts";
 
 /** The people a record names: who recorded it and who voided it. */
 const mentioned = (rows: { recordedBy: string | null; voidedBy: string | null }[]) => rows.flatMap((row) => [row.recordedBy, row.voidedBy]);
 
-/** What every new procedure record may carry from the device: its client id and when it was taken (README decision 026). */
-export interface DeviceEntryValues {
-  clientId?: string;
-  takenAt?: Date;
-}
 /** The organisation's procedure settings (organisations.settings), malformed figures dropped. */
 export async function getProcedureSettings(db: Database, organisationId: string): Promise<ProcedureSettings> {
   const [row] = await db.select({ settings: organisations.settings }).from(organisations).where(eq(organisations.id, organisationId));

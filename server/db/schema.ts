@@ -546,6 +546,8 @@ export const photos = pgTable(
     mimeType: text("mime_type").notNull(),
     bytes: integer("bytes").notNull(),
     uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
+    /** When the photo was added on the device: it may reach the server much later, from the outbox. */
+    takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     /** The visit's revision when this row was last written (inserted, voided, imported): a trigger sets it (migration 0014). */
     revision: integer("revision").notNull().default(0),
     ...clientId(),

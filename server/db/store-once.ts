@@ -88,6 +88,12 @@ export async function insertRowOnce<Table extends EntryTable>(
   return { row: stored, replayed: true };
 }
 
+/** What every new visit entry may carry from the device: its client id and when it was taken (README decision 026). */
+export interface DeviceEntryValues {
+  clientId?: string;
+  takenAt?: Date;
+}
+
 /** insertRowOnce, answered as the API shows the entry. */
 export async function insertEntryOnce<Table extends EntryTable, Entry>(
   db: Database,

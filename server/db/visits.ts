@@ -28,7 +28,7 @@ import type { Database } from "./client.ts";
 import { circuitReadingsPage } from "./circuit-readings.ts";
 import { afterCursor, containsTerm, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKey } from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
-import { entryKind, insertEntryOnce, type StoredEntry } from "./store-once.ts";
+import { entryKind, insertEntryOnce, type DeviceEntryValues, type StoredEntry } from "./store-once.ts";
 import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitReadingRecorders, visitSearch, visitTechnicians, visits } from "./schema.ts";
 import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
 
@@ -458,7 +458,7 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
       .leftJoin(readings, eq(readings.id, visitComments.readingId))
       .where(and(eq(visitComments.visitId, visitId), changed(visitComments)))
       .orderBy(asc(visitComments.createdAt)),
-    db.select().from(photos).where(and(eq(photos.visitId, visitId), changed(photos))).orderBy(asc(photos.createdAt)),
+    db.select().from(photos).where(and(eq(photos.visitId, visitId), changed(photos))).orderBy(asc(photos.takenAt), asc(photos.id)),
     summarise(db, [head]),
     listVisitEvents(db, organisationId, visitId, sinceRevision),
   ]);
@@ -511,13 +511,7 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
       author: person(people, comment.authorId),
       createdAt: comment.createdAt.toISOString(),
     })),
-    photos: photoRows.map((row) => ({
-      id: row.id,
-      kind: row.kind as Photo["kind"],
-      caption: row.caption,
-      createdAt: row.createdAt.toISOString(),
-      ...photoUrls(row.id),
-    })),
+    photos: photoRows.map(toPhoto),
   };
 }
 
@@ -554,20 +548,18 @@ export async function visitReadingsPage(db: Database, visitId: string, query: { 
   return { readings: page.rows.map((row) => toReading(row, people)), olderCursor: page.olderCursor };
 }
 
+function toPhoto(row: typeof photos.$inferSelect): Photo {
+  return { id: row.id, kind: row.kind as Photo["kind"], caption: row.caption, takenAt: row.takenAt.toISOString(), createdAt: row.createdAt.toISOString(), ...photoUrls(row.id) };
+}
+
 /** Photos, for storing once per client id and answering a repeated send. */
-export const photoEntries = entryKind(photos, async (_db, row): Promise<Photo> => ({
-  id: row.id,
-  kind: row.kind as Photo["kind"],
-  caption: row.caption,
-  createdAt: row.createdAt.toISOString(),
-  ...photoUrls(row.id),
-}));
+export const photoEntries = entryKind(photos, async (_db, row): Promise<Photo> => toPhoto(row));
 
 /** Stores a photo's index row, once per client id on the visit (a repeat's files are the caller's to discard). */
 export async function insertPhoto(
   db: Database,
   organisationId: string,
-  values: { visitId: string; kind: string; caption: string | null; storedName: string; thumbnailName: string; mimeType: string; bytes: number; uploadedBy: string; clientId?: string },
+  values: { visitId: string; kind: string; caption: string | null; storedName: string; thumbnailName: string; mimeType: string; bytes: number; uploadedBy: string } & DeviceEntryValues,
 ): Promise<StoredEntry<Photo>> {
   return insertEntryOnce(db, photoEntries, { ...values, organisationId });
 }

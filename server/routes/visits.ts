@@ -2,7 +2,7 @@ import { Router } from "express";
 import { z } from "zod";
 import { can, type Permission } from "@shared/schemas/auth.ts";
 import { instant } from "@shared/schemas/dates.ts";
-import { optionalClientId } from "@shared/schemas/device-entries.ts";
+import { deviceTime, optionalClientId } from "@shared/schemas/device-entries.ts";
 import { VisitListQuerySchema } from "@shared/schemas/list-pages.ts";
 import { text } from "@shared/schemas/text.ts";
 import {
@@ -330,12 +330,13 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     requireWritableVisit(visit.status);
     if (!req.file) throw new HttpError(400, FIELDS, { photo: "Choose a photo to upload" });
     const meta = z
-      .object({ kind: z.enum(PHOTO_KINDS).default("other"), caption: text().max(200).optional(), clientId: optionalClientId })
+      .object({ kind: z.enum(PHOTO_KINDS).default("other"), caption: text().max(200).optional(), clientId: optionalClientId, takenAt: deviceTime("takenAt") })
       .parse(req.body ?? {});
+    requireDeviceTime("takenAt", meta.takenAt, visit);
     const stored = await storePhoto(env.UPLOADS_DIR, req.file.buffer);
     try {
       const { entry, replayed } = await writeToVisit(db, organisationId, visit.id, (tx) =>
-        insertPhoto(tx, organisationId, { visitId: visit.id, kind: meta.kind, caption: meta.caption || null, ...stored, uploadedBy: user.id, clientId: meta.clientId }),
+        insertPhoto(tx, organisationId, { visitId: visit.id, kind: meta.kind, caption: meta.caption || null, ...stored, uploadedBy: user.id, clientId: meta.clientId, takenAt: deviceDate(meta.takenAt) }),
       );
       // A send that raced its repeat stored no row: its files are nobody's.
       if (replayed) await discardPhoto(env.UPLOADS_DIR, stored);

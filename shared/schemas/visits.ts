@@ -320,6 +320,8 @@ export const PhotoSchema = z.object({
   caption: z.string().nullable(),
   url: z.string(),
   thumbnailUrl: z.string(),
+  /** When it was added on the device (it may have waited there without signal). */
+  takenAt: z.string(),
   createdAt: z.string(),
 });
 export type Photo = z.infer<typeof PhotoSchema>;

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
 import { DEMO_PASSWORD, signIn, signOut } from "./sign-in.ts";
+import { TINY_PNG } from "./tiny-png.ts";
 
 /**
  * The installed app starts without a network: the service worker holds the shell (scripts,
@@ -201,7 +202,7 @@ function outboxEntries(page: Page): Promise<{ clientId: string; takenAt: string;
   );
 }
 
-test("readings, an adjustment and an evacuation sample saved with no network wait on the device, survive a reload, and are stored once with their times", async ({ page, context }) => {
+test("readings, an adjustment, an evacuation sample and a photo saved with no network wait on the device, survive a reload, and are stored once with their times", async ({ page, context }) => {
   await page.goto("/");
   await signIn(page, "tech@bellbird.example");
   await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
@@ -230,25 +231,38 @@ test("readings, an adjustment and an evacuation sample saved with no network wai
   await page.getByLabel("Vacuum reading", { exact: true }).fill("2400");
   await page.getByRole("button", { name: "Add reading" }).click();
   await expect(waiting.getByText("Evacuation reading")).toBeVisible();
-  await expect(page.getByTestId("outbox-waiting")).toHaveText("5 entries waiting to send.");
+  // A photo of the gauges, kept on the device as a file and shown from it.
+  const photos = page.getByRole("region", { name: "Photos" });
+  await page.getByLabel("Photo from the gallery").setInputFiles({ name: "gauges.png", mimeType: "image/png", buffer: TINY_PNG });
+  await expect(photos.getByRole("img", { name: "Gauges photo, on this device" })).toBeVisible();
+  await expect(photos.getByText("Waiting to send")).toBeVisible();
+  await expect(page.getByTestId("outbox-waiting")).toHaveText("6 entries waiting to send.");
   const kept = await outboxEntries(page);
-  expect(kept).toHaveLength(5);
+  expect(kept).toHaveLength(6);
 
-  // Still there after a reload with no network.
+  // Still there after a reload with no network, the photo included.
   await page.reload();
-  await expect(page.getByTestId("outbox-waiting")).toHaveText("5 entries waiting to send.");
+  await expect(page.getByTestId("outbox-waiting")).toHaveText("6 entries waiting to send.");
+  await expect(photos.getByRole("img", { name: "Gauges photo, on this device" })).toBeVisible();
 
   await context.setOffline(false);
   await expect(page.getByRole("region", { name: "Entries on this device" })).toBeHidden({ timeout: 30_000 });
   await expect(page.getByTestId("outbox-waiting")).toBeHidden();
+  await expect(photos.getByRole("img", { name: "Gauges photo" })).toBeVisible();
   const visit = (await (await page.request.get(`/api/visits/${visitId}`)).json()) as {
-    visit: { readings: { takenAt: string; input: { suctionLineTempC: number } }[]; adjustments: { at: string; description: string }[] };
+    visit: {
+      readings: { takenAt: string; input: { suctionLineTempC: number } }[];
+      adjustments: { at: string; description: string }[];
+      photos: { kind: string; takenAt: string; url: string }[];
+    };
   };
-  const { readings, adjustments } = visit.visit;
+  const { readings, adjustments, photos: storedPhotos } = visit.visit;
   expect(readings).toHaveLength(3);
   expect(adjustments.map((adjustment) => adjustment.description)).toEqual(["Cleaned the return air filter"]);
+  expect(storedPhotos.map((photo) => photo.kind)).toEqual(["gauges"]);
+  expect((await page.request.get(storedPhotos[0]!.url)).headers()["content-type"]).toBe("image/png");
   // Each with the time it was taken on the device, not the time it reached the server.
-  const storedTimes = [...readings.map((reading) => reading.takenAt), adjustments[0]!.at].map(Date.parse).sort();
+  const storedTimes = [...readings.map((reading) => reading.takenAt), adjustments[0]!.at, storedPhotos[0]!.takenAt].map(Date.parse).sort();
   const keptTimes = kept.filter((entry) => !entry.path.includes("/evacuations/"));
   expect(storedTimes).toEqual(keptTimes.map((entry) => Date.parse(entry.takenAt)).sort());
   // The sample, at the minute typed on the device.

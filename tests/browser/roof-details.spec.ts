@@ -1,6 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { formatDateTime } from "../../shared/format/date-time.ts";
 import { signIn } from "./sign-in.ts";
+import { TINY_PNG } from "./tiny-png.ts";
 
 /**
  * Small things that matter on a roof, on a 390 × 844 phone: dates written one way on the visit
@@ -10,11 +11,6 @@ import { signIn } from "./sign-in.ts";
  */
 const ZONE = "Australia/Sydney";
 const NUMERIC_DATE = /\b\d{1,2}\/\d{1,2}\/\d{2,4}\b/;
-// A PNG of 2 × 2 grey pixels: the upload checks the content, not the name.
-const TINY_PNG = Buffer.from(
-  "iVBORw0KGgoAAAANSUhEUgAAAAIAAAACCAIAAAD91JpzAAAADklEQVR4nGNoAAMGCAUAKg4GARWeQtcAAAAASUVORK5CYII=",
-  "base64",
-);
 
 // Waits, not assertions about speed: the test machine is shared and sometimes slow to answer.
 const slowExpect = expect.configure({ timeout: 20_000 });

@@ -1,5 +1,5 @@
 import type { QueryClient } from "@tanstack/react-query";
-import { ApiError, apiRequest } from "@/lib/api/api-client.ts";
+import { ApiError, apiRequest, formWithFile, UPLOAD_TIMEOUT_MS } from "@/lib/api/api-client.ts";
 import { entriesOf, outbox } from "./outbox-store.ts";
 
 /** How a round of sending ended: what the sender does next depends on it (use-outbox.ts). */
@@ -36,7 +36,7 @@ async function sendRound(queryClient: QueryClient, userId: string): Promise<Send
     for (const entry of await entriesOf(userId)) {
       if (entry.state !== "waiting") continue;
       try {
-        await apiRequest(entry.path, { method: "POST", body: entry.body });
+        await apiRequest(entry.path, entry.file ? { method: "POST", body: formWithFile(entry.body, entry.file), timeoutMs: UPLOAD_TIMEOUT_MS } : { method: "POST", body: entry.body });
         await outbox.entries.delete(entry.clientId);
         touched.add(entry.visitId);
       } catch (error) {

@@ -20,6 +20,8 @@ export interface OutboxEntry {
   /** The write as it will be sent: POST to this API path with this JSON body (clientId included). */
   path: string;
   body: Record<string, unknown>;
+  /** A photo's file: the entry is then sent as multipart form data, the body's fields beside it. */
+  file?: OutboxFile;
   /** When the entry was taken (ISO), as the server will store it. */
   takenAt: string;
   /** Orders sending: entries leave in the order they were made. */
@@ -31,7 +33,14 @@ export interface OutboxEntry {
   attempts: number;
 }
 
-export type OutboxKind = "reading" | "adjustment" | "electrical-check" | "leak-search" | "standing-pressure-check" | "pressure-test" | "evacuation-sample";
+/** A file kept as a blob in IndexedDB until it is sent, with the form field and file name it goes under. */
+export interface OutboxFile {
+  field: string;
+  blob: Blob;
+  name: string;
+}
+
+export type OutboxKind = "reading" | "adjustment" | "electrical-check" | "leak-search" | "standing-pressure-check" | "pressure-test" | "evacuation-sample" | "photo";
 
 /** How each kind of entry is named in the lists of entries on the device. */
 export const OUTBOX_KIND_LABELS: Record<OutboxKind, string> = {
@@ -42,6 +51,7 @@ export const OUTBOX_KIND_LABELS: Record<OutboxKind, string> = {
   "standing-pressure-check": "Standing-pressure check",
   "pressure-test": "Pressure test",
   "evacuation-sample": "Evacuation reading",
+  photo: "Photo",
 };
 
 class OutboxDatabase extends Dexie {

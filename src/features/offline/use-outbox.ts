@@ -1,27 +1,60 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { liveQuery } from "dexie";
-import { useCallback, useEffect, useState } from "react";
+import { useCallback, useEffect, useSyncExternalStore } from "react";
 import { useMe } from "@/lib/api/auth.ts";
 import { useOnlineStatus } from "./online-status.ts";
-import { entriesOf, OUTBOX_KIND_LABELS, sendOrKeep, type OutboxEntry, type OutboxKind } from "./outbox-store.ts";
+import { entriesOf, OUTBOX_KIND_LABELS, sendOrKeep, type OutboxEntry, type OutboxFile, type OutboxKind } from "./outbox-store.ts";
 import { sendWaitingEntries } from "./outbox-sender.ts";
 
 const NONE: OutboxEntry[] = [];
 
+/**
+ * One watch on IndexedDB per person, shared by every screen part that lists entries (the top
+ * bar, the run log, the procedure panels, the user menu…): each new subscriber gets the entries
+ * held, and the watch ends with its last subscriber.
+ */
+interface SharedWatch {
+  entries: OutboxEntry[];
+  listeners: Set<() => void>;
+  stop: () => void;
+}
+const watches = new Map<string, SharedWatch>();
+
+function watchEntries(userId: string, listener: () => void): () => void {
+  let watch = watches.get(userId);
+  if (!watch) {
+    const created: SharedWatch = { entries: NONE, listeners: new Set(), stop: () => undefined };
+    const subscription = liveQuery(() => entriesOf(userId)).subscribe({
+      next: (entries) => {
+        created.entries = entries;
+        for (const notify of created.listeners) notify();
+      },
+      error: () => {
+        created.entries = NONE;
+        for (const notify of created.listeners) notify();
+      },
+    });
+    created.stop = () => subscription.unsubscribe();
+    watches.set(userId, created);
+    watch = created;
+  }
+  const held = watch;
+  held.listeners.add(listener);
+  return () => {
+    held.listeners.delete(listener);
+    if (held.listeners.size === 0) {
+      held.stop();
+      watches.delete(userId);
+    }
+  };
+}
+
 /** The signed-in person's entries on this device (waiting and refused), kept up to date. */
 export function useOutboxEntries(): OutboxEntry[] {
   const userId = useMe().data?.id;
-  // Tagged with whose they are, so that another person's never show while theirs load.
-  const [held, setHeld] = useState<{ userId: string; entries: OutboxEntry[] } | null>(null);
-  useEffect(() => {
-    if (!userId) return;
-    const subscription = liveQuery(() => entriesOf(userId)).subscribe({
-      next: (entries) => setHeld({ userId, entries }),
-      error: () => setHeld({ userId, entries: [] }),
-    });
-    return () => subscription.unsubscribe();
-  }, [userId]);
-  return held && held.userId === userId ? held.entries : NONE;
+  // Keyed by whose they are, so that another person's never show while theirs load.
+  const subscribe = useCallback((listener: () => void) => (userId ? watchEntries(userId, listener) : () => undefined), [userId]);
+  return useSyncExternalStore(subscribe, () => (userId ? (watches.get(userId)?.entries ?? NONE) : NONE));
 }
 
 /** First wait after a round that could not reach the server; doubled each time, up to the most. */
@@ -63,19 +96,22 @@ export function useOutboxSender(entries: OutboxEntry[]): void {
  * its kind (or `label`) and keeps `takenAt`, else the body's, else now, as the time it was taken.
  */
 export function useKeepWhenOffline() {
-  const userId = useMe().data?.id ?? "";
+  const userId = useMe().data?.id;
   return useCallback(
     <T>(
       send: () => Promise<T>,
-      entry: { kind: OutboxKind; visitId: string; path: string; label?: string; takenAt?: string; body: Record<string, unknown> & { clientId: string; takenAt?: string } },
-    ) =>
-      sendOrKeep(send, {
+      entry: { kind: OutboxKind; visitId: string; path: string; label?: string; takenAt?: string; file?: OutboxFile; body: Record<string, unknown> & { clientId: string; takenAt?: string } },
+    ) => {
+      // Forms of a visit show only to someone signed in; an entry kept for no one could never be sent.
+      if (!userId) throw new Error("Sign in again to save: this device does not know who you are");
+      return sendOrKeep(send, {
         ...entry,
         clientId: entry.body.clientId,
         userId,
         label: entry.label ?? OUTBOX_KIND_LABELS[entry.kind],
         takenAt: entry.takenAt ?? entry.body.takenAt ?? new Date().toISOString(),
-      }),
+      });
+    },
     [userId],
   );
 }

@@ -34,6 +34,8 @@ interface RequestOptions<T> {
    * instead of answering from its own cache (Fetch standard, "HTTP-network-or-cache fetch").
    */
   ifNoneMatch?: string;
+  /** How long a write may go without an answer (default WRITE_TIMEOUT_MS): longer for an upload. */
+  timeoutMs?: number;
 }
 
 /**
@@ -74,16 +76,21 @@ function takeEarlyRequest(path: string, method: string, conditional: boolean): P
 
 /** A write that has had no answer by then is reported as not confirmed, so no form waits for ever. */
 export const WRITE_TIMEOUT_MS = 20_000;
+/** An upload's wait for an answer: a 12 MB photo on a weak mobile link takes a minute or more. */
+export const UPLOAD_TIMEOUT_MS = 180_000;
 
 /**
- * The one fetch wrapper of the client: JSON in and out, same-origin cookies, and a typed
- * ApiError with the server's message on any non-2xx answer. Writes without a connection fail at
- * once; writes without an answer within WRITE_TIMEOUT_MS fail with a message that says so.
+ * The one fetch wrapper of the client: JSON in and out (or multipart out, for a FormData body),
+ * same-origin cookies, and a typed ApiError with the server's message on any non-2xx answer.
+ * Writes without a connection fail at once; writes without an answer within WRITE_TIMEOUT_MS
+ * (or `timeoutMs`) fail with a message that says so.
  */
 export async function apiRequest<T = unknown>(path: string, options: RequestOptions<T> = {}): Promise<T> {
-  const { method = "GET", body, schema, signal, ifMatch, ifNoneMatch } = options;
+  const { method = "GET", body, schema, signal, ifMatch, ifNoneMatch, timeoutMs = WRITE_TIMEOUT_MS } = options;
   const headers: Record<string, string> = { Accept: "application/json" };
-  if (body !== undefined) headers["Content-Type"] = "application/json";
+  // A form's boundary goes in its Content-Type, which the browser writes itself.
+  const multipart = body instanceof FormData;
+  if (body !== undefined && !multipart) headers["Content-Type"] = "application/json";
   if (ifMatch !== undefined) headers["If-Match"] = `"${ifMatch}"`;
   if (ifNoneMatch !== undefined) headers["If-None-Match"] = ifNoneMatch;
   const write = method !== "GET";
@@ -96,13 +103,13 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
       sendRequest(path, {
         method,
         headers,
-        body: body === undefined ? undefined : JSON.stringify(body),
-        signal: signal ?? (write ? AbortSignal.timeout(WRITE_TIMEOUT_MS) : undefined),
+        body: body === undefined ? undefined : multipart ? body : JSON.stringify(body),
+        signal: signal ?? (write ? AbortSignal.timeout(timeoutMs) : undefined),
       }));
   } catch (error) {
     const name = (error as Error).name;
     if (name === "TimeoutError") {
-      throw new ApiError(0, `No answer from the Satura server within ${WRITE_TIMEOUT_MS / 1000} s, so this was not confirmed saved. Your values are kept; check the list before saving again.`);
+      throw new ApiError(0, `No answer from the Satura server within ${timeoutMs / 1000} s, so this was not confirmed saved. Your values are kept; check the list before saving again.`);
     }
     if (name === "AbortError") throw error;
     throw new ApiError(0, "No connection to the Satura server: nothing was confirmed saved. Check the network and try again.");
@@ -119,4 +126,14 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
     );
   }
   return schema ? schema.parse(payload) : (payload as T);
+}
+
+/** A multipart body: the text fields (empty ones left out), then the file under its field name. */
+export function formWithFile(fields: Record<string, unknown>, file: { field: string; blob: Blob; name: string }): FormData {
+  const form = new FormData();
+  for (const [name, value] of Object.entries(fields)) {
+    if (value !== undefined && value !== null && value !== "") form.append(name, String(value));
+  }
+  form.append(file.field, file.blob, file.name);
+  return form;
 }

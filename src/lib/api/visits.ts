@@ -20,7 +20,7 @@ import {
 } from "@shared/schemas/visits.ts";
 import { ImportSummarySchema, type ImportSummary } from "@shared/schemas/readings-import.ts";
 import { VisitPageSchema, type VisitListParams, type VisitPage } from "@shared/schemas/list-pages.ts";
-import { ApiError, apiRequest } from "./api-client.ts";
+import { ApiError, apiRequest, formWithFile, UPLOAD_TIMEOUT_MS } from "./api-client.ts";
 import { listQueryString } from "./list-params.ts";
 import { mergeReadingsPage, mergeVisitDelta } from "./merge-visit-delta.ts";
 import { viewerTimeZone } from "@shared/format/date-time.ts";
@@ -82,16 +82,22 @@ export async function reviewVisit({ visitId, ...action }: ReviewAction & { visit
   return (await apiRequest(`/visits/${visitId}/review`, { method: "POST", body: action, schema: VisitEnvelopeSchema })).visit;
 }
 
-/** Photos go as multipart form data, so they bypass the JSON wrapper but keep its errors. */
-export async function uploadPhoto({ visitId, file, kind, caption }: { visitId: string; file: File; kind: string; caption?: string }) {
-  const form = new FormData();
-  form.append("kind", kind);
-  if (caption) form.append("caption", caption);
-  form.append("photo", file);
-  const response = await fetch(`/api/visits/${visitId}/photos`, { method: "POST", body: form, credentials: "same-origin" });
-  const payload = (await response.json().catch(() => ({}))) as { message?: string; photo?: unknown; fields?: Record<string, string> };
-  if (!response.ok) throw new ApiError(response.status, payload.message ?? `Upload failed (${response.status})`, payload.fields ?? {});
-  return PhotoSchema.parse(payload.photo);
+/** Where a visit's photos are sent. */
+export const photosPath = (visitId: string) => `/visits/${visitId}/photos`;
+
+/** What goes beside a photo's file: the outbox keeps these as the entry's body. */
+export interface PhotoFields {
+  kind: string;
+  caption?: string;
+  clientId: string;
+  /** When it was added on the device. */
+  takenAt: string;
+}
+
+/** Photos go as multipart form data, with the JSON wrapper's errors. */
+export async function uploadPhoto({ visitId, file, ...fields }: PhotoFields & { visitId: string; file: File }) {
+  const body = formWithFile({ ...fields }, { field: "photo", blob: file, name: file.name });
+  return (await apiRequest(photosPath(visitId), { method: "POST", body, timeoutMs: UPLOAD_TIMEOUT_MS, schema: z.object({ photo: PhotoSchema }) })).photo;
 }
 
 /** Previews or stores a CSV series; a 422 (problems, nothing stored) still returns its summary. */

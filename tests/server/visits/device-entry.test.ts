@@ -207,6 +207,18 @@ describe("entries made on a device", () => {
     expect((await rowsOf<typeof photos.$inferSelect>(photos)).filter((row) => row.clientId === clientId)).toHaveLength(1);
   });
 
+  it("keeps the time a photo was added on the device, and refuses one beyond the clock's bounds", async () => {
+    const picture = await sharp({ create: { width: 40, height: 30, channels: 3, background: "#993366" } }).jpeg().toBuffer();
+    const upload = (takenAt: string) => technician.post(`/api/visits/${visitId}/photos`).field("kind", "damage").field("takenAt", takenAt).attach("photo", picture, "damage.jpg");
+    const takenAt = ago(3);
+    const kept = await upload(takenAt);
+    expect(kept.status).toBe(201);
+    expect(kept.body.photo.takenAt).toBe(takenAt);
+    const ahead = await upload(new Date(Date.now() + DEVICE_CLOCK_SKEW_MS + 5 * MINUTE).toISOString());
+    expect(ahead.status).toBe(400);
+    expect(ahead.body.fields.takenAt).toMatch(/in the future/);
+  });
+
   it("refuses a device time in the future beyond the clock skew, or before the visit started, naming the field", async () => {
     const future = new Date(Date.now() + DEVICE_CLOCK_SKEW_MS + 5 * MINUTE).toISOString();
     const ahead = await technician.post(`/api/visits/${visitId}/readings`).send(reading(15, { takenAt: future }));

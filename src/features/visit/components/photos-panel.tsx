@@ -1,9 +1,12 @@
-import { Camera, Images } from "lucide-react";
-import { useRef, useState } from "react";
+import { Camera, CloudOff, Images } from "lucide-react";
+import { useEffect, useRef, useState } from "react";
 import { PHOTO_KINDS, type Visit } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
-import { useUploadPhoto } from "@/lib/api/visits.ts";
+import { photosPath, useUploadPhoto } from "@/lib/api/visits.ts";
+import type { OutboxEntry } from "@/features/offline/outbox-store.ts";
+import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-outbox.ts";
+import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 
 const KIND_LABELS: Record<(typeof PHOTO_KINDS)[number], string> = {
   nameplate: "Nameplate",
@@ -20,16 +23,31 @@ const KIND_LABELS: Record<(typeof PHOTO_KINDS)[number], string> = {
  */
 export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boolean }) {
   const upload = useUploadPhoto();
+  const keepWhenOffline = useKeepWhenOffline();
+  const onDevice = useOutboxEntries().filter((entry) => entry.visitId === visit.id && entry.kind === "photo");
   const [kind, setKind] = useState<(typeof PHOTO_KINDS)[number]>("gauges");
   const [error, setError] = useState<string | null>(null);
+  const [kept, setKept] = useState(false);
   const cameraInput = useRef<HTMLInputElement>(null);
   const galleryInput = useRef<HTMLInputElement>(null);
 
   const send = async (file: File | undefined) => {
     if (!file) return;
     setError(null);
+    setKept(false);
+    // Its own id and the time it was added: without signal the photo waits on the device as a
+    // blob and is sent later, stored once, with this time (README decisions 026, 027).
+    const fields = { kind, clientId: crypto.randomUUID(), takenAt: new Date().toISOString() };
     try {
-      await upload.mutateAsync({ visitId: visit.id, file, kind });
+      const sent = await keepWhenOffline(() => upload.mutateAsync({ visitId: visit.id, file, ...fields }), {
+        kind: "photo",
+        visitId: visit.id,
+        label: `${KIND_LABELS[kind]} photo`,
+        path: photosPath(visit.id),
+        body: fields,
+        file: { field: "photo", blob: file, name: file.name },
+      });
+      setKept(sent.outcome === "kept");
     } catch (caught) {
       setError(caught instanceof Error ? caught.message : "The photo was not uploaded");
     } finally {
@@ -43,7 +61,7 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
       <h2 id="photos-heading" className="flex items-center gap-2 text-lg font-semibold">
         <Camera aria-hidden className="size-5" /> Photos
       </h2>
-      {visit.photos.length === 0 ? (
+      {visit.photos.length === 0 && onDevice.length === 0 ? (
         <p className="mt-2 text-muted">No photos yet.</p>
       ) : (
         <ul className="mt-2 grid grid-cols-2 gap-2 sm:grid-cols-4">
@@ -55,8 +73,20 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
               </a>
             </li>
           ))}
+          {onDevice.map((entry) => (
+            <li key={entry.clientId}>
+              <DevicePhoto entry={entry} />
+              <span className="flex items-center gap-1 text-sm font-medium">
+                <CloudOff aria-hidden className="size-4 shrink-0" /> {entry.state === "waiting" ? "Waiting to send" : "Refused"}
+              </span>
+            </li>
+          ))}
         </ul>
       )}
+      {/* Waiting ones are marked on their pictures; a refused one also needs its reason and a way to discard it. */}
+      <div className="mt-2">
+        <WaitingEntries entries={onDevice.filter((entry) => entry.state === "refused")} />
+      </div>
       {canUpload && (
         <div className="mt-3 space-y-2">
           {error && <FormAlert>{error}</FormAlert>}
@@ -104,10 +134,31 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
             </Button>
           </div>
           <p className="text-xs text-muted" role="status">
-            {upload.isPending ? "Uploading…" : "JPEG, PNG or WebP, up to 12 MB."}
+            {upload.isPending ? "Uploading…" : kept ? "Kept on this device: it is sent when the signal returns." : "JPEG, PNG or WebP, up to 12 MB."}
           </p>
         </div>
       )}
     </section>
+  );
+}
+
+/** A photo still on the device, shown from its kept file (the address lives as long as the picture). */
+function DevicePhoto({ entry }: { entry: OutboxEntry }) {
+  // The first read's Blob: each read of the outbox gives a new object for the same file (the
+  // list keys this component by the entry's id, so another photo is another component).
+  const [blob] = useState(entry.file?.blob);
+  const [source, setSource] = useState<string>();
+  useEffect(() => {
+    if (!blob) return;
+    const address = URL.createObjectURL(blob);
+    // Made and revoked by the effect, so the address lives exactly as long as the picture shown (StrictMode's second mount included).
+    // eslint-disable-next-line react-hooks/set-state-in-effect
+    setSource(address);
+    return () => URL.revokeObjectURL(address);
+  }, [blob]);
+  return source ? (
+    <img src={source} alt={`${entry.label}, on this device`} className="aspect-[4/3] w-full rounded-card border-2 border-dashed border-caution object-cover" />
+  ) : (
+    <div className="aspect-[4/3] w-full rounded-card border-2 border-dashed border-caution" />
   );
 }
