@@ -53,6 +53,34 @@ export async function insertVisitEvent(
   return toEvent(row, await peopleById(db, [row.actorId]));
 }
 
+/**
+ * The line that records this person voiding this record for this reason, if there is one: a void
+ * sent again from a device's outbox (its first answer lost) is that same void, not a new one.
+ */
+export async function findVoidEvent(
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  values: { recordKind: VoidableKind; recordId: string; reason: string; actorId: string },
+): Promise<VisitEvent | undefined> {
+  const [row] = await db
+    .select()
+    .from(visitEvents)
+    .where(
+      and(
+        eq(visitEvents.organisationId, organisationId),
+        eq(visitEvents.visitId, visitId),
+        eq(visitEvents.action, "voided"),
+        eq(visitEvents.recordKind, values.recordKind),
+        eq(visitEvents.recordId, values.recordId),
+        eq(visitEvents.actorId, values.actorId),
+        eq(visitEvents.reason, values.reason),
+      ),
+    )
+    .limit(1);
+  return row && toEvent(row, await peopleById(db, [row.actorId]));
+}
+
 /** The visit's trail, oldest first; with `sinceRevision`, only the lines written after that visit revision. */
 export async function listVisitEvents(db: Database, organisationId: string, visitId: string, sinceRevision?: number): Promise<VisitEvent[]> {
   const rows = await db

@@ -63,7 +63,7 @@ import { createReadingSaver } from "../visits/save-readings.ts";
 import type { ReadingContext } from "../visits/reading-input.ts";
 import { matchesIfNoneMatch, revisionSince, visitEtag } from "../visits/visit-revision.ts";
 import { answeredBefore, deviceDate, requireDeviceTime, sendEntry } from "../visits/device-entry.ts";
-import { voidVisitRecord } from "../visits/void-record.ts";
+import { findRepeatedVoid, voidVisitRecord } from "../visits/void-record.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
 
@@ -261,10 +261,12 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   router.post("/:id/voids", async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
-    requireWritableVisit(visit.status);
     const body = VoidBodySchema.parse(req.body);
-    const event = await writeToVisit(db, organisationId, visit.id, (tx) => voidVisitRecord(tx, organisationId, visit.id, body, user.id));
-    res.status(201).json({ event });
+    const repeated = await findRepeatedVoid(db, organisationId, visit.id, body, user.id);
+    if (repeated) return void sendEntry(res, { event: repeated }, true);
+    requireWritableVisit(visit.status);
+    const { event, replayed } = await writeToVisit(db, organisationId, visit.id, (tx) => voidVisitRecord(tx, organisationId, visit.id, body, user.id));
+    sendEntry(res, { event }, replayed);
   });
 
   router.post("/:id/comments", async (req, res) => {

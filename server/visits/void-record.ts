@@ -35,7 +35,7 @@ import {
   refrigerantMovements,
   standingPressureChecks,
 } from "../db/schema.ts";
-import { insertVisitEvent } from "../db/visit-events.ts";
+import { findVoidEvent, insertVisitEvent } from "../db/visit-events.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 
 /** Each voidable kind's table: all carry id, organisation_id, visit_id and the void columns. */
@@ -85,8 +85,16 @@ const SUMMARIES: Record<VoidableKind, (row: RawRow) => string> = {
 };
 
 /**
+ * The void this body asks for, if this person already made it (same record, same reason): a
+ * repeated send is answered with it (README decision 026) whatever the visit's status now.
+ */
+export const findRepeatedVoid = (db: Database, organisationId: string, visitId: string, body: VoidBody, actorId: string) =>
+  findVoidEvent(db, organisationId, visitId, { recordKind: body.kind, recordId: body.recordId, reason: body.reason.trim(), actorId });
+
+/**
  * Voids one record of the visit and writes the audit line. 404 when the visit has no such
- * record, 409 when it is already void or when voiding it would leave the register impossible.
+ * record, 409 when it is already void (unless this same void was made by this person: a repeat,
+ * answered with its line) or when voiding it would leave the register impossible.
  */
 export async function voidVisitRecord(
   tx: Database,
@@ -94,7 +102,7 @@ export async function voidVisitRecord(
   visitId: string,
   body: VoidBody,
   actorId: string,
-): Promise<VisitEvent> {
+): Promise<{ event: VisitEvent; replayed: boolean }> {
   const table = TABLES[body.kind];
   // Rows a CSV import is still staging are not records yet, so they cannot be voided.
   const recordsOnly = body.kind === "reading" ? sql`and pending_import_id is null` : sql``;
@@ -107,8 +115,11 @@ export async function voidVisitRecord(
     const found = await tx.execute(
       sql`select 1 from ${table} where id = ${body.recordId} and organisation_id = ${organisationId} and visit_id = ${visitId} ${recordsOnly}`,
     );
-    if (found.rows.length > 0)
+    if (found.rows.length > 0) {
+      const repeated = await findRepeatedVoid(tx, organisationId, visitId, body, actorId);
+      if (repeated) return { event: repeated, replayed: true };
       throw new HttpError(409, `This ${VOIDABLE_KIND_LABELS[body.kind].toLowerCase()} is already void`);
+    }
     throw notFound(VOIDABLE_KIND_LABELS[body.kind]);
   }
   if (body.kind === "movement") await requireRegisterStillPossible(tx, organisationId, visitId, row);
@@ -122,7 +133,7 @@ export async function voidVisitRecord(
     actorId,
   });
   await voidLinkedChargeEntry(tx, organisationId, visitId, body, row, actorId);
-  return event;
+  return { event, replayed: false };
 }
 
 /**

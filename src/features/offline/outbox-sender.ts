@@ -1,5 +1,6 @@
 import type { QueryClient } from "@tanstack/react-query";
 import { ApiError, apiRequest, formWithFile, UPLOAD_TIMEOUT_MS } from "@/lib/api/api-client.ts";
+import { PROCEDURE_RECORD_KINDS, procedureRecordsKey } from "@/lib/api/procedures.ts";
 import { entriesOf, outbox } from "./outbox-store.ts";
 
 /** How a round of sending ended: what the sender does next depends on it (use-outbox.ts). */
@@ -53,6 +54,7 @@ async function sendRound(queryClient: QueryClient, userId: string): Promise<Send
     for (const visitId of touched) {
       void queryClient.invalidateQueries({ queryKey: ["visits", "detail", visitId] });
       void queryClient.invalidateQueries({ queryKey: ["register", "visit", visitId] });
+      for (const kind of PROCEDURE_RECORD_KINDS) void queryClient.invalidateQueries({ queryKey: procedureRecordsKey(kind, visitId) });
     }
     if (touched.size > 0) {
       void queryClient.invalidateQueries({ queryKey: ["visits", "list"] });

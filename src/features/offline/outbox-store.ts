@@ -40,7 +40,7 @@ export interface OutboxFile {
   name: string;
 }
 
-export type OutboxKind = "reading" | "adjustment" | "electrical-check" | "leak-search" | "standing-pressure-check" | "pressure-test" | "evacuation-sample" | "photo";
+export type OutboxKind = "reading" | "adjustment" | "electrical-check" | "leak-search" | "standing-pressure-check" | "pressure-test" | "evacuation-sample" | "photo" | "comment" | "refrigerant-movement" | "void";
 
 /** How each kind of entry is named in the lists of entries on the device. */
 export const OUTBOX_KIND_LABELS: Record<OutboxKind, string> = {
@@ -52,6 +52,9 @@ export const OUTBOX_KIND_LABELS: Record<OutboxKind, string> = {
   "pressure-test": "Pressure test",
   "evacuation-sample": "Evacuation reading",
   photo: "Photo",
+  comment: "Comment",
+  "refrigerant-movement": "Refrigerant movement",
+  void: "Void",
 };
 
 class OutboxDatabase extends Dexie {

@@ -100,13 +100,25 @@ export function useKeepWhenOffline() {
   return useCallback(
     <T>(
       send: () => Promise<T>,
-      entry: { kind: OutboxKind; visitId: string; path: string; label?: string; takenAt?: string; file?: OutboxFile; body: Record<string, unknown> & { clientId: string; takenAt?: string } },
+      entry: {
+        kind: OutboxKind;
+        visitId: string;
+        path: string;
+        label?: string;
+        takenAt?: string;
+        file?: OutboxFile;
+        /** The outbox's key, when the body carries no client id (a void: the server knows a repeat by its record and reason). */
+        clientId?: string;
+        body: Record<string, unknown> & { clientId?: string; takenAt?: string };
+      },
     ) => {
       // Forms of a visit show only to someone signed in; an entry kept for no one could never be sent.
       if (!userId) throw new Error("Sign in again to save: this device does not know who you are");
+      const clientId = entry.clientId ?? entry.body.clientId;
+      if (!clientId) throw new Error("An entry kept on the device needs its client id");
       return sendOrKeep(send, {
         ...entry,
-        clientId: entry.body.clientId,
+        clientId,
         userId,
         label: entry.label ?? OUTBOX_KIND_LABELS[entry.kind],
         takenAt: entry.takenAt ?? entry.body.takenAt ?? new Date().toISOString(),

@@ -21,7 +21,9 @@ import {
 } from "@shared/schemas/procedure-records.ts";
 import { apiRequest } from "./api-client.ts";
 
-type Kind = "electrical-checks" | "leak-searches" | "standing-pressure-checks" | "pressure-tests" | "evacuations";
+/** The kinds of procedure record, as their API paths and query keys name them. */
+export const PROCEDURE_RECORD_KINDS = ["electrical-checks", "leak-searches", "standing-pressure-checks", "pressure-tests", "evacuations"] as const;
+type Kind = (typeof PROCEDURE_RECORD_KINDS)[number];
 
 // ---- requests ---------------------------------------------------------------------------------
 
@@ -72,18 +74,19 @@ export async function updateEvacuation({ visitId, evacuationId, version, ...body
 
 // ---- query options ----------------------------------------------------------------------------
 
-const key = (kind: Kind, visitId: string) => ["procedures", kind, visitId] as const;
+/** The query key of one kind of a visit's procedure records. */
+export const procedureRecordsKey = (kind: Kind, visitId: string) => ["procedures", kind, visitId] as const;
 
 export const electricalChecksQueryOptions = (visitId: string) =>
-  queryOptions({ queryKey: key("electrical-checks", visitId), queryFn: ({ signal }) => getElectricalChecks(visitId, signal) });
+  queryOptions({ queryKey: procedureRecordsKey("electrical-checks", visitId), queryFn: ({ signal }) => getElectricalChecks(visitId, signal) });
 export const leakSearchesQueryOptions = (visitId: string) =>
-  queryOptions({ queryKey: key("leak-searches", visitId), queryFn: ({ signal }) => getLeakSearches(visitId, signal) });
+  queryOptions({ queryKey: procedureRecordsKey("leak-searches", visitId), queryFn: ({ signal }) => getLeakSearches(visitId, signal) });
 export const standingPressureChecksQueryOptions = (visitId: string) =>
-  queryOptions({ queryKey: key("standing-pressure-checks", visitId), queryFn: ({ signal }) => getStandingPressureChecks(visitId, signal) });
+  queryOptions({ queryKey: procedureRecordsKey("standing-pressure-checks", visitId), queryFn: ({ signal }) => getStandingPressureChecks(visitId, signal) });
 export const pressureTestsQueryOptions = (visitId: string) =>
-  queryOptions({ queryKey: key("pressure-tests", visitId), queryFn: ({ signal }) => getPressureTests(visitId, signal) });
+  queryOptions({ queryKey: procedureRecordsKey("pressure-tests", visitId), queryFn: ({ signal }) => getPressureTests(visitId, signal) });
 export const evacuationsQueryOptions = (visitId: string) =>
-  queryOptions({ queryKey: key("evacuations", visitId), queryFn: ({ signal }) => getEvacuations(visitId, signal) });
+  queryOptions({ queryKey: procedureRecordsKey("evacuations", visitId), queryFn: ({ signal }) => getEvacuations(visitId, signal) });
 
 // ---- hooks ------------------------------------------------------------------------------------
 
@@ -113,7 +116,7 @@ function useProcedureMutation<TVariables extends { visitId: string }, TResult>(k
     meta: { keptOffline: true },
     onSuccess: (_result, variables) =>
       Promise.all([
-        queryClient.invalidateQueries({ queryKey: key(kind, variables.visitId) }),
+        queryClient.invalidateQueries({ queryKey: procedureRecordsKey(kind, variables.visitId) }),
         queryClient.invalidateQueries({ queryKey: ["visits", "detail", variables.visitId] }),
       ]),
   });

@@ -46,8 +46,11 @@ export function getVisitRefrigerant(visitId: string, signal?: AbortSignal): Prom
   return apiRequest(`/visits/${visitId}/refrigerant`, { schema: VisitRefrigerantSchema, signal });
 }
 
+/** Where a visit's register movements are logged. */
+export const movementsPath = (visitId: string) => `/visits/${visitId}/refrigerant`;
+
 export function createMovement({ visitId, ...body }: MovementCreate & { visitId: string }) {
-  return apiRequest(`/visits/${visitId}/refrigerant`, { method: "POST", body, schema: MovementCreatedSchema });
+  return apiRequest(movementsPath(visitId), { method: "POST", body, schema: MovementCreatedSchema });
 }
 
 /** Declares a full weigh-in of a circuit with its line adjustment (withdrawing one is a void). */

@@ -69,13 +69,19 @@ export async function createAdjustment({ visitId, ...body }: AdjustmentCreate & 
   return (await apiRequest(adjustmentsPath(visitId), { method: "POST", body, schema: z.object({ adjustment: AdjustmentSchema }) })).adjustment;
 }
 
-export async function createComment({ visitId, ...body }: { visitId: string; body: string; readingId?: string | null }) {
-  return (await apiRequest(`/visits/${visitId}/comments`, { method: "POST", body, schema: z.object({ comment: CommentSchema }) })).comment;
+/** Where a visit's comments are posted. */
+export const commentsPath = (visitId: string) => `/visits/${visitId}/comments`;
+
+export async function createComment({ visitId, ...body }: { visitId: string; body: string; readingId?: string | null; clientId?: string }) {
+  return (await apiRequest(commentsPath(visitId), { method: "POST", body, schema: z.object({ comment: CommentSchema }) })).comment;
 }
 
 /** Voids one of the visit's records with a reason (it stays on the record, struck through). */
+/** Where a visit's voids are sent. */
+export const voidsPath = (visitId: string) => `/visits/${visitId}/voids`;
+
 export async function voidRecord({ visitId, ...body }: VoidBody & { visitId: string }) {
-  return (await apiRequest(`/visits/${visitId}/voids`, { method: "POST", body, schema: z.object({ event: VisitEventSchema }) })).event;
+  return (await apiRequest(voidsPath(visitId), { method: "POST", body, schema: z.object({ event: VisitEventSchema }) })).event;
 }
 
 export async function reviewVisit({ visitId, ...action }: ReviewAction & { visitId: string }): Promise<Visit> {

@@ -2,7 +2,7 @@ import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { adjustments, electricalChecks, evacuations, photos, readings, refrigerantMovements } from "@server/db/schema.ts";
+import { adjustments, electricalChecks, evacuations, photos, readings, refrigerantMovements, visitEvents } from "@server/db/schema.ts";
 import { electricalCheckEntries } from "@server/db/procedures.ts";
 import { demoSite } from "@server/db/seed/demo-scenario.ts";
 import { insertEntryOnce } from "@server/db/store-once.ts";
@@ -193,6 +193,20 @@ describe("entries made on a device", () => {
     const late = await technician.post(path).send({ microns: 900, minutes: 10, clientId });
     expect(late.status).toBe(201);
     expect(late.body.evacuation.samples).toHaveLength(3);
+  });
+
+  it("makes a void sent twice once, answering the repeat with its line; another reason is still refused as already void", async () => {
+    const stored = await technician.post(`/api/visits/${visitId}/readings`).send(reading(17, { clientId: randomUUID() }));
+    const voiding = { kind: "reading", recordId: stored.body.reading.id, reason: "Typed the suction line for the liquid line" };
+    const first = await technician.post(`/api/visits/${visitId}/voids`).send(voiding);
+    const again = await technician.post(`/api/visits/${visitId}/voids`).send(voiding);
+    expect([first.status, again.status]).toEqual([201, 201]);
+    expect(again.body.event).toEqual(first.body.event);
+    expect(again.headers["idempotent-replayed"]).toBe("true");
+    const lines = (await testApp.database.db.select().from(visitEvents).where(eq(visitEvents.recordId, voiding.recordId))).filter((line) => line.action === "voided");
+    expect(lines).toHaveLength(1);
+    const other = await technician.post(`/api/visits/${visitId}/voids`).send({ ...voiding, reason: "Another reason altogether" });
+    expect(other.status).toBe(409);
   });
 
   it("stores a photo sent twice once", async () => {

@@ -14,12 +14,11 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { StaleWriteNotice } from "@/components/ui/stale-write/stale-write-notice.tsx";
-import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
+import { VisitVoidAction } from "@/features/visit/components/visit-void-action.tsx";
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { evacuationSamplesPath, useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
-import { useVoidRecord } from "@/lib/api/visits.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-outbox.ts";
@@ -184,13 +183,11 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
   const [target, setTarget] = useState<string | null>(null);
   const [startError, setStartError] = useState<{ message: string; fields: Record<string, string> } | null>(null);
 
-  const voidRecord = useVoidRecord();
   const list = evacuations.data?.evacuations ?? [];
   // The latest evacuation that stands is the one in progress; voided ones stay listed below.
   const current = list.filter(isStanding).at(-1);
   const earlier = list.filter((evacuation) => evacuation !== current);
   const onDevice = useOutboxEntries();
-  const voidEvacuation = (evacuation: Evacuation) => (reason: string) => voidRecord.mutateAsync({ visitId, kind: "evacuation", recordId: evacuation.id, reason });
   const targetText =
     target ?? (evacuations.data ? convertTyped(String(evacuations.data.defaults.targetMicrons), "micron", unit) : "");
   const targetRange = `${formatVacuum(MIN_TARGET_MICRONS, unit)} to ${formatVacuum(MAX_TARGET_MICRONS, unit)}`;
@@ -265,7 +262,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
               </table>
             </details>
           )}
-          {canWrite && <VoidAction what={`the evacuation started ${recordTime(current.startedAt)}`} onVoid={voidEvacuation(current)} />}
+          {canWrite && <VisitVoidAction visitId={visitId} kind="evacuation" recordId={current.id} what={`the evacuation started ${recordTime(current.startedAt)}`} />}
         </section>
       )}
 
@@ -314,7 +311,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
                   <EvacuationBadge evacuation={evacuation} />
                   {evacuation.samples.length > 0 && <span className="num text-muted">last {formatVacuum(evacuation.samples.at(-1)!.microns, unit)}</span>}
                 </VoidedRecord>
-                {canWrite && !evacuation.voided && <VoidAction what={`the evacuation started ${recordTime(evacuation.startedAt)}`} onVoid={voidEvacuation(evacuation)} />}
+                {canWrite && !evacuation.voided && <VisitVoidAction visitId={visitId} kind="evacuation" recordId={evacuation.id} what={`the evacuation started ${recordTime(evacuation.startedAt)}`} />}
               </li>
             ))}
           </ul>

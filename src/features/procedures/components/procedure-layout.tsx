@@ -3,9 +3,8 @@ import type { CautionTopic } from "@shared/content/cautions.ts";
 import type { VoidableKind, VoidInfo } from "@shared/schemas/visits.ts";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
-import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
+import { VisitVoidAction } from "@/features/visit/components/visit-void-action.tsx";
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
-import { useVoidRecord } from "@/lib/api/visits.ts";
 import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
 import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 
@@ -42,7 +41,6 @@ interface ProcedureLayoutProps {
 export const ROLE_READ_ONLY_NOTE = "You can read this visit; recording is for technicians, seniors and owners.";
 
 export function ProcedureLayout({ visitId, caution, saved, loadError, form, readOnlyNote = ROLE_READ_ONLY_NOTE }: ProcedureLayoutProps) {
-  const voidRecord = useVoidRecord();
   const onDevice = useOutboxEntries();
   return (
     <div className="space-y-4">
@@ -56,7 +54,7 @@ export function ProcedureLayout({ visitId, caution, saved, loadError, form, read
             <div key={record.id} className="space-y-1">
               <VoidedRecord voided={record.voided}>{record.element}</VoidedRecord>
               {saved.canVoid && !record.voided && (
-                <VoidAction what={record.what} onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: saved.kind, recordId: record.id, reason })} />
+                <VisitVoidAction visitId={visitId} kind={saved.kind} recordId={record.id} what={record.what} />
               )}
             </div>
           ))}

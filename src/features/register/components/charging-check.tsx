@@ -8,8 +8,7 @@ import { useSetCharging } from "@/lib/api/register.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 import { formatKg, formatSignedKg } from "../utils/format-register.ts";
 import { NumberField, typedNumber } from "@/components/ui/field/number-field.tsx";
-import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
-import { useVoidRecord } from "@/lib/api/visits.ts";
+import { VisitVoidAction } from "@/features/visit/components/visit-void-action.tsx";
 import { VerdictLine } from "./verdict-line.tsx";
 
 type FormValues = { lineAdjustmentKg: unknown };
@@ -21,7 +20,6 @@ type FormValues = { lineAdjustmentKg: unknown };
  */
 export function ChargingCheck({ visitId, balance, canWrite }: { visitId: string; balance: CircuitBalance; canWrite: boolean }) {
   const setCharging = useSetCharging();
-  const voidRecord = useVoidRecord();
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<FormValues>({
     resolver: zodResolver(ChargingUpdateSchema) as never,
@@ -73,10 +71,12 @@ export function ChargingCheck({ visitId, balance, canWrite }: { visitId: string;
             </Button>
             {/* Withdrawing a declaration voids it with a reason; the earlier figure stays on record. */}
             {charging?.declarationId && (
-              <VoidAction
+              <VisitVoidAction
+                visitId={visitId}
+                kind="charging"
+                recordId={charging.declarationId}
                 what={`the full weigh-in declaration of circuit ${balance.circuit}`}
                 disabled={setCharging.isPending}
-                onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: "charging", recordId: charging.declarationId!, reason })}
               />
             )}
           </div>

@@ -14,7 +14,10 @@ import {
 } from "@shared/schemas/register.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
-import { useCreateMovement } from "@/lib/api/register.ts";
+import { movementsPath, useCreateMovement } from "@/lib/api/register.ts";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
+import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
+import { formatTime } from "@shared/format/date-time.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 import { formatKg } from "../utils/format-register.ts";
 import { NumberField, typedNumber } from "@/components/ui/field/number-field.tsx";
@@ -49,6 +52,9 @@ export function MovementForm({
   cylinders: readonly Cylinder[];
 }) {
   const createMovement = useCreateMovement();
+  // One id per movement, kept across retries: a save whose answer was lost is stored once (README decision 026).
+  const entryId = useEntryClientId();
+  const keepWhenOffline = useKeepWhenOffline();
   const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
   const form = useForm<FormValues>({
@@ -100,10 +106,26 @@ export function MovementForm({
   const submit = form.handleSubmit(async (values) => {
     setFormError(null);
     setSaved(null);
+    // The time it was made goes with it: if it waits on the device, it is stored with this time.
+    const body = { ...(values as MovementCreate), clientId: entryId.take(), at: new Date().toISOString() };
+    const what = `${MOVEMENT_KIND_LABELS[body.kind]}: ${formatKg(body.kg)}`;
     try {
-      const result = await createMovement.mutateAsync({ ...(values as MovementCreate), visitId });
+      const sent = await keepWhenOffline(() => createMovement.mutateAsync({ ...body, visitId }), {
+        kind: "refrigerant-movement",
+        visitId,
+        label: `${what}, circuit ${body.circuit}`,
+        path: movementsPath(visitId),
+        takenAt: body.at,
+        body,
+      });
+      entryId.release();
       form.reset({ kind: values.kind, circuit: values.circuit, cylinderId: values.cylinderId, kg: "", note: "" });
-      setSaved(`${MOVEMENT_KIND_LABELS[result.movement.kind]}: ${formatKg(result.movement.kg)} logged${result.cylinder ? `; ${result.cylinder.label} now holds ${formatKg(result.cylinder.contentsKg)}` : ""}.`);
+      if (sent.outcome === "kept") {
+        setSaved(`${what} kept on this device (${formatTime(body.at)}); it goes in the register when the signal returns.`);
+      } else {
+        const { movement, cylinder } = sent.stored;
+        setSaved(`${MOVEMENT_KIND_LABELS[movement.kind]}: ${formatKg(movement.kg)} logged${cylinder ? `; ${cylinder.label} now holds ${formatKg(cylinder.contentsKg)}` : ""}.`);
+      }
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, ["kind", "kg", "cylinderId", "circuit", "note"]));
     }

@@ -2,8 +2,7 @@ import { Droplets } from "lucide-react";
 import { Link } from "react-router-dom";
 import type { Equipment } from "@shared/schemas/equipment.ts";
 import { MOVEMENT_KIND_LABELS, type CircuitBalance, type Movement } from "@shared/schemas/register.ts";
-import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
-import { useVoidRecord } from "@/lib/api/visits.ts";
+import { VisitVoidAction } from "@/features/visit/components/visit-void-action.tsx";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { paths } from "@/config/paths.ts";
 import { useCylinders, useVisitRefrigerant } from "@/lib/api/register.ts";
@@ -14,6 +13,8 @@ import { HiddenLinesNote } from "./hidden-lines-note.tsx";
 import { MovementForm } from "./movement-form.tsx";
 import { MovementRecord } from "./movement-record.tsx";
 import { RunLogCheck } from "./run-log-check.tsx";
+import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
+import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 
 function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitBalance; visitId: string; canWrite: boolean; single: boolean }) {
   const { shortfallKg, finalChargeKg, differenceFromNameplateKg } = balance.balance;
@@ -60,7 +61,6 @@ function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitB
 
 /** The visit's movements; a voided one stays, struck through with its reason, and counts in no balance. */
 function MovementList({ visitId, movements, hidden, canWrite }: { visitId: string; movements: readonly Movement[]; hidden: number; canWrite: boolean }) {
-  const voidRecord = useVoidRecord();
   if (movements.length === 0 && hidden === 0) return <p className="text-muted">No refrigerant logged on this visit yet.</p>;
   if (movements.length === 0) return <HiddenLinesNote count={hidden} />;
   return (
@@ -71,7 +71,7 @@ function MovementList({ visitId, movements, hidden, canWrite }: { visitId: strin
           <li key={movement.id} className="space-y-1 p-3">
             <MovementRecord movement={movement} />
             {canWrite && !movement.voided && (
-              <VoidAction what={`the movement “${what}” and its run-log entry`} onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: "movement", recordId: movement.id, reason })} />
+              <VisitVoidAction visitId={visitId} kind="movement" recordId={movement.id} what={`the movement “${what}” and its run-log entry`} />
             )}
           </li>
         );
@@ -84,6 +84,7 @@ function MovementList({ visitId, movements, hidden, canWrite }: { visitId: strin
 export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId: string; unit: Equipment; circuit: number; canWrite: boolean }) {
   const register = useVisitRefrigerant(visitId);
   const cylinders = useCylinders({ refrigerant: unit.refrigerant });
+  const onDevice = useOutboxEntries();
 
   if (register.isPending) return <p aria-busy="true">Reading the register…</p>;
   if (register.isError) return <p role="alert" className="font-medium text-fault">⚠ The register did not load: {register.error.message}</p>;
@@ -129,6 +130,7 @@ export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId
             Log refrigerant
           </h3>
           {cylinders.isError && <p role="alert" className="text-fault">⚠ The cylinders did not load: {cylinders.error.message}</p>}
+          <WaitingEntries entries={onDevice.filter((entry) => entry.visitId === visitId && entry.kind === "refrigerant-movement")} />
           <MovementForm visitId={visitId} refrigerant={unit.refrigerant} circuits={unit.circuits} defaultCircuit={circuit} cylinders={cylinders.data ?? []} />
           <CautionPanel topic="liquid-refrigerant" compact />
           <p className="text-sm text-muted">

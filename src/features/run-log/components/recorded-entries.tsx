@@ -3,9 +3,9 @@ import { useState } from "react";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { ADJUSTMENT_KIND_LABELS, type Adjustment, type Reading } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
-import { VoidAction } from "@/components/ui/void-record/void-action.tsx";
+import { VisitVoidAction } from "@/features/visit/components/visit-void-action.tsx";
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
-import { useEarlierReadings, useVoidRecord } from "@/lib/api/visits.ts";
+import { useEarlierReadings } from "@/lib/api/visits.ts";
 import {
   DIFFERENCE_LABEL,
   differenceToDisplay,
@@ -60,7 +60,6 @@ export function RecordedEntries({
   atmosphericKPa,
   canVoid,
 }: RecordedEntriesProps) {
-  const voidRecord = useVoidRecord();
   const earlier = useEarlierReadings();
   const [shown, setShown] = useState(ENTRIES_PAGE);
   const entries: Entry[] = [
@@ -139,14 +138,16 @@ export function RecordedEntries({
                 )}
               </VoidedRecord>
               {canVoid && !voided && (
-                <VoidAction
+                <VisitVoidAction
+                  visitId={visitId}
+                  kind={entry.kind}
+                  recordId={id}
                   what={what}
                   alsoVoids={
                     entry.kind === "adjustment" && entry.adjustment.movementId
                       ? "Its line in the refrigerant register is voided with it, with the same reason."
                       : undefined
                   }
-                  onVoid={(reason) => voidRecord.mutateAsync({ visitId, kind: entry.kind, recordId: id, reason })}
                 />
               )}
             </li>

@@ -4,7 +4,10 @@ import type { Visit } from "@shared/schemas/visits.ts";
 import { MAX_COMMENT_LENGTH } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
-import { useCreateComment } from "@/lib/api/visits.ts";
+import { commentsPath, useCreateComment } from "@/lib/api/visits.ts";
+import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
+import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-outbox.ts";
+import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 import { formatDateTime, formatTime } from "@shared/format/date-time.ts";
 
 const stamp = (iso: string) => formatDateTime(iso);
@@ -15,12 +18,24 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
   const [readingId, setReadingId] = useState("");
   const [error, setError] = useState<string | null>(null);
   const createComment = useCreateComment();
+  // One id per comment, kept across retries: a post whose answer was lost is stored once (README decision 026).
+  const entryId = useEntryClientId();
+  const keepWhenOffline = useKeepWhenOffline();
+  const onDevice = useOutboxEntries().filter((entry) => entry.visitId === visit.id && entry.kind === "comment");
 
   const submit = async () => {
     setError(null);
     if (body.trim() === "") return setError("Write a comment first");
+    const values = { body, readingId: readingId || null, clientId: entryId.take() };
     try {
-      await createComment.mutateAsync({ visitId: visit.id, body, readingId: readingId || null });
+      await keepWhenOffline(() => createComment.mutateAsync({ visitId: visit.id, ...values }), {
+        kind: "comment",
+        visitId: visit.id,
+        label: `Comment: “${body.length > 40 ? `${body.slice(0, 40)}…` : body}”`,
+        path: commentsPath(visit.id),
+        body: values,
+      });
+      entryId.release();
       setBody("");
       setReadingId("");
     } catch (caught) {
@@ -53,6 +68,9 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
           ))}
         </ul>
       )}
+      <div className="mt-2">
+        <WaitingEntries entries={onDevice} />
+      </div>
       {canComment && (
         <form
           className="mt-3 space-y-2"
@@ -69,7 +87,10 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
             id="comment-body"
             value={body}
             maxLength={MAX_COMMENT_LENGTH}
-            onChange={(event) => setBody(event.target.value)}
+            onChange={(event) => {
+              setBody(event.target.value);
+              entryId.release();
+            }}
             rows={3}
             className="block w-full rounded-card border-2 border-rule bg-surface p-3"
           />
