@@ -309,3 +309,77 @@ test("an entry the server refuses on arrival stays on the device with the reason
   await expect(onDevice).toBeHidden();
   await office.dispose();
 });
+
+test("a comment, a refrigerant movement and a void wait on the device too; when the session ends they wait for the same person, never another", async ({ page, context, playwright, baseURL }) => {
+  await page.goto("/");
+  await signIn(page, "tech@bellbird.example");
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  const visitId = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Session ends on the roof");
+  // One reading stored with signal, to be voided without it.
+  const stored = await page.request.post(`/api/visits/${visitId}/readings`, { data: { circuit: 1, suctionPressureKPa: 377, suctionLineTempC: 12, liquidPressureKPa: 1565, liquidLineTempC: 37 } });
+  expect(stored.status()).toBe(201);
+  await page.reload();
+  await page.getByText("Recorded entries (to check or void)").click();
+  await expect(page.getByRole("button", { name: /^Void the reading of / })).toBeVisible();
+  // The Refrigerant section opened once with signal holds the cylinders for later.
+  await page.goto(`/visits/${visitId}?section=refrigerant`);
+  await expect(page.getByRole("form", { name: "Log a refrigerant movement" })).toBeVisible();
+  await keptForOffline(page, visitId);
+
+  await context.setOffline(true);
+  await page.goto(`/visits/${visitId}?section=refrigerant`);
+  const movement = page.getByRole("form", { name: "Log a refrigerant movement" });
+  await movement.getByLabel("What happened").selectOption("added-new");
+  await movement.getByLabel("Mass").fill("0.30");
+  const cylinder = movement.getByLabel("Cylinder", { exact: true });
+  await cylinder.selectOption((await cylinder.locator("option", { hasText: "BM-407C-N3" }).getAttribute("value"))!);
+  await movement.getByRole("button", { name: "Log movement" }).click();
+  await expect(movement.getByText(/kept on this device \(\d\d:\d\d\); it goes in the register when the signal returns/)).toBeVisible();
+
+  await page.getByRole("radio", { name: "Run log" }).click();
+  await page.getByText("Recorded entries (to check or void)").click();
+  await page.getByRole("button", { name: /^Void the reading of / }).click();
+  const dialog = page.getByRole("dialog", { name: /Void the reading/ });
+  await dialog.getByLabel("Reason (required)").fill("Gauge still settling");
+  await dialog.getByRole("button", { name: "Void the record" }).click();
+  await expect(dialog).toBeHidden();
+  await expect(page.getByText("Void waiting to send")).toBeVisible();
+
+  await page.getByLabel("Add a comment").fill("Condenser coil needs a wash next visit");
+  await page.getByRole("button", { name: "Post comment" }).click();
+  await expect(page.getByText("Comment: “Condenser coil needs a wash next visit”")).toBeVisible();
+  await expect(page.getByTestId("outbox-waiting")).toHaveText("3 entries waiting to send.");
+
+  // The session ends while the device is offline (here: its cookie is gone). Back online, the
+  // first send is refused as signed out: the app goes to the sign-in screen and keeps the entries.
+  await context.clearCookies();
+  await context.setOffline(false);
+  await expect(page.getByRole("heading", { name: "Sign in" })).toBeVisible({ timeout: 30_000 });
+  expect(await outboxEntries(page)).toHaveLength(3);
+
+  // Someone else signs in on the device: they neither see nor send the first person's entries.
+  await signIn(page, "apprentice@bellbird.example");
+  // Back on the screen the session ended on, as the apprentice.
+  await expect(page.getByRole("heading", { name: "RTU-1 packaged rooftop unit" })).toBeVisible();
+  await expect(page.getByRole("region", { name: "Comments" }).getByText("No comments yet.")).toBeVisible();
+  await expect(page.getByTestId("outbox-waiting")).toBeHidden();
+  await expect(page.getByText("Void waiting to send")).toBeHidden();
+  const office = await playwright.request.newContext({ baseURL });
+  expect((await office.post("/api/auth/sign-in", { data: { email: "tech@bellbird.example", password: DEMO_PASSWORD } })).status()).toBe(200);
+  const visitNow = async () =>
+    ((await (await office.get(`/api/visits/${visitId}`)).json()) as { visit: { comments: { body: string }[]; readings: { voided: unknown }[]; adjustments: { description: string; amountKg: number | null }[] } }).visit;
+  expect((await visitNow()).comments).toHaveLength(0);
+  expect(await outboxEntries(page)).toHaveLength(3);
+  await signOut(page);
+
+  // The same person signs in again: the entries go, each stored once.
+  await signIn(page, "tech@bellbird.example");
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  await expect.poll(async () => (await outboxEntries(page)).length, { timeout: 30_000 }).toBe(0);
+  const visit = await visitNow();
+  expect(visit.comments.map((comment) => comment.body)).toEqual(["Condenser coil needs a wash next visit"]);
+  expect(visit.readings).toEqual([expect.objectContaining({ voided: expect.objectContaining({ reason: "Gauge still settling" }) })]);
+  // The movement is also the run log's charge adjustment (one entry, one figure).
+  expect(visit.adjustments.map((adjustment) => adjustment.amountKg)).toEqual([0.3]);
+  await office.dispose();
+});

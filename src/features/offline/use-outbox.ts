@@ -1,7 +1,7 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { liveQuery } from "dexie";
 import { useCallback, useEffect, useSyncExternalStore } from "react";
-import { useMe } from "@/lib/api/auth.ts";
+import { meQueryOptions, useMe } from "@/lib/api/auth.ts";
 import { useOnlineStatus } from "./online-status.ts";
 import { entriesOf, OUTBOX_KIND_LABELS, sendOrKeep, type OutboxEntry, type OutboxFile, type OutboxKind } from "./outbox-store.ts";
 import { sendWaitingEntries } from "./outbox-sender.ts";
@@ -79,6 +79,9 @@ export function useOutboxSender(entries: OutboxEntry[]): void {
     let delay = RETRY_FIRST_MS;
     const send = async () => {
       const outcome = await sendWaitingEntries(queryClient, userId);
+      // The session ended: asking who is signed in takes the app to the sign-in screen, and
+      // the same person signing in again mounts this anew, which sends the entries.
+      if (outcome === "signed-out") void queryClient.invalidateQueries({ queryKey: meQueryOptions().queryKey });
       if (stopped || outcome !== "no-connection") return;
       timer = setTimeout(() => void send(), delay);
       delay = Math.min(delay * 2, RETRY_MOST_MS);
