@@ -4,7 +4,7 @@
  * still carries the organisation id and every read filters by it, so a record of another
  * organisation reads as missing.
  */
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq, or, sql } from "drizzle-orm";
 import type {
   ElectricalCheck,
   ElectricalCheckInput,
@@ -225,6 +225,7 @@ function toEvacuation(row: EvacuationRow, people: People): Evacuation {
     targetMicrons: row.targetMicrons,
     isolatedAtMinutes: row.isolatedAtMinutes,
     samples: row.samples,
+    clientId: row.clientId,
     note: row.note,
     result: row.result as unknown as EvacuationResult,
     version: row.version,
@@ -245,12 +246,25 @@ export async function listEvacuations(db: Database, organisationId: string, visi
   return rows.map((row) => toEvacuation(row, people));
 }
 
-/** One evacuation of the given visit, scoped by organisation; undefined when not found. */
+/**
+ * One evacuation of the given visit, scoped by organisation, named by its id or by the client id
+ * the device gave it: an evacuation started without signal has no server id on the device yet,
+ * so its readings, sent after it, name it by that (README decision 027). Undefined when not found.
+ */
 export async function findEvacuation(db: Database, organisationId: string, visitId: string, evacuationId: string): Promise<EvacuationRow | undefined> {
   const [row] = await db
     .select()
     .from(evacuations)
-    .where(and(eq(evacuations.organisationId, organisationId), eq(evacuations.visitId, visitId), eq(evacuations.id, evacuationId)));
+    .where(
+      and(
+        eq(evacuations.organisationId, organisationId),
+        eq(evacuations.visitId, visitId),
+        or(eq(evacuations.id, evacuationId), eq(evacuations.clientId, evacuationId)),
+      ),
+    )
+    // Both are random UUIDs; should one ever equal another's client id, the id wins.
+    .orderBy(sql`${evacuations.id} = ${evacuationId} desc`)
+    .limit(1);
   return row;
 }
 

@@ -4,10 +4,8 @@
  * stored verdicts always come from the engine's current rules and the organisation's limits.
  */
 import {
-  analyseDecay,
   checkTestPressure,
   currentImbalance,
-  evacuationReached,
   judgeInsulationResistance,
   judgeLeakSearch,
   judgeSupplyVoltage,
@@ -21,13 +19,12 @@ import {
 import type {
   ElectricalCheckInput,
   ElectricalCheckResult,
-  EvacuationResult,
   LeakSearchInput,
   OverallVerdict,
   PressureTestRecordInput,
   PressureTestRecordResult,
 } from "@shared/schemas/procedure-records.ts";
-import type { InsulationKind, ProcedureLimits, RunningCurrentKind, VacuumSample, Verdict } from "@shared/schemas/procedures.ts";
+import type { InsulationKind, ProcedureLimits, RunningCurrentKind, Verdict } from "@shared/schemas/procedures.ts";
 
 const SEVERITY = { pass: 0, warn: 1, fail: 2 } as const;
 
@@ -106,30 +103,3 @@ export function pressureTestRecordResult(input: PressureTestRecordInput, limits:
   };
 }
 
-const DECAY_VERDICT: Record<"held" | "moisture" | "leak", Verdict["verdict"]> = { held: "pass", moisture: "warn", leak: "fail" };
-
-/**
- * The evacuation so far: whether the pull-down reached the target and, once the pump is valved
- * off and at least two readings follow (the one at isolation counts), the decay analysis.
- */
-export function evacuationResult(
-  samples: VacuumSample[],
-  targetMicrons: number,
-  isolatedAtMinutes: number | null,
-  limits: ProcedureLimits = {},
-): EvacuationResult {
-  const pullDown = isolatedAtMinutes === null ? samples : samples.filter((sample) => sample.minutes <= isolatedAtMinutes);
-  const reached = pullDown.length > 0 ? evacuationReached(pullDown, targetMicrons) : { reached: false, atMinutes: null };
-  if (isolatedAtMinutes === null) return { stage: "pulling-down", reached, decay: null, decayMinutes: null, overall: null };
-
-  const decaySamples = samples.filter((sample) => sample.minutes >= isolatedAtMinutes);
-  if (decaySamples.length < 2) return { stage: "decay-test", reached, decay: null, decayMinutes: null, overall: null };
-  const decay = analyseDecay(decaySamples, { ...limits.evacuation, targetMicrons });
-  return {
-    stage: "judged",
-    reached,
-    decay,
-    decayMinutes: decaySamples.at(-1)!.minutes - decaySamples[0]!.minutes,
-    overall: { check: "Decay test", verdict: DECAY_VERDICT[decay.verdict], reason: decay.reason, source: decay.source },
-  };
-}

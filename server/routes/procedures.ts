@@ -20,7 +20,7 @@ import {
   StandingPressureBodySchema,
   type ProcedureSettings,
 } from "@shared/schemas/procedure-records.ts";
-import { EVACUATION_LIMITS, standingPressureOutcome } from "@shared/engine/index.ts";
+import { EVACUATION_LIMITS, evacuationResult, standingPressureOutcome } from "@shared/engine/index.ts";
 import { getAuth } from "../auth/session.ts";
 import type { Database } from "../db/client.ts";
 import { getEquipment, getSite } from "../db/equipment.ts";
@@ -53,7 +53,7 @@ import { requireIfMatch, staleWrite } from "../http/versioning.ts";
 import { answeredBefore, clientIdOf, deviceDate, requireDeviceTime, sendEntry } from "../visits/device-entry.ts";
 import { siteAtmosphere } from "../visits/reading-input.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
-import { electricalCheckResult, evacuationResult, leakSearchResult, pressureTestRecordResult } from "../procedures/record-results.ts";
+import { electricalCheckResult, leakSearchResult, pressureTestRecordResult } from "../procedures/record-results.ts";
 
 const FIELDS = "Some fields need attention";
 
@@ -246,7 +246,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     const { organisationId } = getAuth(res);
     const visit = await loadVisit(organisationId, req.params.id);
     const settings = await getProcedureSettings(db, organisationId);
-    res.json({ evacuations: await listEvacuations(db, organisationId, visit.id), defaults: { targetMicrons: targetMicrons(settings) } });
+    res.json({ evacuations: await listEvacuations(db, organisationId, visit.id), defaults: { targetMicrons: targetMicrons(settings), limits: settings.procedureLimits ?? {} } });
   });
 
   router.post("/:id/evacuations", async (req, res) => {

@@ -131,6 +131,7 @@ export { pressureTestResult } from "./procedures/pressure-test-result.ts";
 export { checkTestPressure } from "./procedures/check-test-pressure.ts";
 export { analyseDecay } from "./procedures/analyse-decay.ts";
 export { evacuationReached } from "./procedures/evacuation-reached.ts";
+export { evacuationResult } from "./procedures/evacuation-result.ts";
 export { micronsToPa } from "./procedures/microns-to-pa.ts";
 export { paToMicrons } from "./procedures/pa-to-microns.ts";
 export { refrigerantBalance } from "./procedures/refrigerant-balance.ts";

@@ -389,6 +389,8 @@ export const EvacuationSchema = RecordBaseSchema.omit({ takenAt: true }).extend(
   isolatedAtMinutes: z.number().nullable(),
   /** A sample added from a device carries its client id (README decision 026). */
   samples: z.array(z.object({ minutes: z.number(), microns: z.number(), clientId: z.uuid().optional() })),
+  /** The device's id for it, by which a device that started it offline names it until it learns its id. */
+  clientId: z.uuid().nullable(),
   note: z.string().nullable(),
   result: EvacuationResultSchema,
   /** Sent back as If-Match when valving off or changing the target or note. */
@@ -412,8 +414,10 @@ export const PressureTestListSchema = z.object({
 });
 export const EvacuationListSchema = z.object({
   evacuations: z.array(EvacuationSchema),
-  defaults: z.object({ targetMicrons: z.number() }),
+  /** The company's target, and its limits, so a device judges readings waiting on it as the server will. */
+  defaults: z.object({ targetMicrons: z.number(), limits: ProcedureLimitsSchema }),
 });
+export type EvacuationList = z.infer<typeof EvacuationListSchema>;
 
 /**
  * Organisation settings read for procedures (organisations.settings); anything else there is

@@ -383,3 +383,55 @@ test("a comment, a refrigerant movement and a void wait on the device too; when 
   expect(visit.adjustments.map((adjustment) => adjustment.amountKg)).toEqual([0.3]);
   await office.dispose();
 });
+
+test("an evacuation started with no network takes its readings on the device, judged as they are entered, and reaches the server in order", async ({ page, context }) => {
+  await page.goto("/");
+  await signIn(page, "tech@bellbird.example");
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  const visitId = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Evacuation begun offline");
+  await page.goto(`/visits/${visitId}?section=evacuation`);
+  await expect(page.getByRole("button", { name: "Start the evacuation" })).toBeVisible();
+  await keptForOffline(page, visitId);
+  await expect.poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["procedures", "evacuations", visitId])), { timeout: 30_000 }).toBe(true);
+
+  await context.setOffline(true);
+  await page.goto(`/visits/${visitId}?section=evacuation`);
+  await page.getByRole("button", { name: "Start the evacuation" }).click();
+  const current = page.getByRole("region", { name: /^Evacuation started/ });
+  await expect(current.getByText("On this device: waiting to send, with its readings")).toBeVisible();
+  // Two readings, the second under the 500-micron target: the device says it is reached at once.
+  for (const [minutes, microns] of [
+    ["10", "2400"],
+    ["25", "450"],
+  ] as const) {
+    await page.getByLabel("Time from start", { exact: true }).fill(minutes);
+    await page.getByLabel("Vacuum reading", { exact: true }).fill(microns);
+    await page.getByRole("button", { name: "Add reading" }).click();
+    await expect(current.getByText(new RegExp(`last [\\d ,]+ µm at ${minutes}\\.0 min`))).toBeVisible();
+  }
+  await expect(current.getByText("target reached at 25.0 min")).toBeVisible();
+  await expect(current.getByRole("button", { name: "Pump valved off" })).toBeDisabled();
+  await expect(page.getByTestId("outbox-waiting")).toHaveText("3 entries waiting to send.");
+  const kept = await outboxEntries(page);
+
+  // Still there after a reload with no network.
+  await page.reload();
+  await expect(current.getByText("target reached at 25.0 min")).toBeVisible();
+
+  await context.setOffline(false);
+  await expect(page.getByTestId("outbox-waiting")).toBeHidden({ timeout: 30_000 });
+  await expect(current.getByText("On this device: waiting to send, with its readings")).toBeHidden();
+  const stored = (await (await page.request.get(`/api/visits/${visitId}/evacuations`)).json()) as {
+    evacuations: { startedAt: string; samples: { minutes: number; microns: number }[]; result: { reached: { reached: boolean } } }[];
+  };
+  expect(stored.evacuations).toHaveLength(1);
+  const [evacuation] = stored.evacuations;
+  expect(evacuation!.samples.map(({ minutes, microns }) => [minutes, microns])).toEqual([
+    [10, 2400],
+    [25, 450],
+  ]);
+  expect(evacuation!.result.reached.reached).toBe(true);
+  // Started at the time the device kept, not when it reached the server.
+  const started = kept.find((entry) => entry.path.endsWith("/evacuations"))!;
+  expect(Date.parse(evacuation!.startedAt)).toBe(Date.parse(started.takenAt));
+});

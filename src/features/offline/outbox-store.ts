@@ -40,7 +40,7 @@ export interface OutboxFile {
   name: string;
 }
 
-export type OutboxKind = "reading" | "adjustment" | "electrical-check" | "leak-search" | "standing-pressure-check" | "pressure-test" | "evacuation-sample" | "photo" | "comment" | "refrigerant-movement" | "void";
+export type OutboxKind = "reading" | "adjustment" | "electrical-check" | "leak-search" | "standing-pressure-check" | "pressure-test" | "evacuation" | "evacuation-sample" | "photo" | "comment" | "refrigerant-movement" | "void";
 
 /** How each kind of entry is named in the lists of entries on the device. */
 export const OUTBOX_KIND_LABELS: Record<OutboxKind, string> = {
@@ -50,6 +50,7 @@ export const OUTBOX_KIND_LABELS: Record<OutboxKind, string> = {
   "leak-search": "Leak search",
   "standing-pressure-check": "Standing-pressure check",
   "pressure-test": "Pressure test",
+  evacuation: "Evacuation started",
   "evacuation-sample": "Evacuation reading",
   photo: "Photo",
   comment: "Comment",

@@ -195,6 +195,20 @@ describe("entries made on a device", () => {
     expect(late.body.evacuation.samples).toHaveLength(3);
   });
 
+  it("takes the readings of an evacuation started offline by the client id the device gave it", async () => {
+    const evacuationClientId = randomUUID();
+    // Sent from the outbox in order: the evacuation, then its readings, which name it by its client id.
+    const started = await technician.post(`/api/visits/${visitId}/evacuations`).send({ targetMicrons: 500, clientId: evacuationClientId, startedAt: ago(20) });
+    expect(started.status).toBe(201);
+    expect(started.body.evacuation.clientId).toBe(evacuationClientId);
+    const sample = await technician.post(`/api/visits/${visitId}/evacuations/${evacuationClientId}/samples`).send({ microns: 1200, minutes: 15, clientId: randomUUID() });
+    expect(sample.status).toBe(201);
+    expect(sample.body.evacuation.id).toBe(started.body.evacuation.id);
+    expect(sample.body.evacuation.samples).toEqual([expect.objectContaining({ minutes: 15, microns: 1200 })]);
+    // Another visit's evacuation is not reached through this one's path.
+    expect((await outsider.post(`/api/visits/${outsiderVisitId}/evacuations/${evacuationClientId}/samples`).send({ microns: 900, minutes: 16 })).status).toBe(404);
+  });
+
   it("makes a void sent twice once, answering the repeat with its line; another reason is still refused as already void", async () => {
     const stored = await technician.post(`/api/visits/${visitId}/readings`).send(reading(17, { clientId: randomUUID() }));
     const voiding = { kind: "reading", recordId: stored.body.reading.id, reason: "Typed the suction line for the liquid line" };

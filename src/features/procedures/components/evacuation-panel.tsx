@@ -1,4 +1,4 @@
-import { Plus, Play, Power, Undo2 } from "lucide-react";
+import { CloudOff, Plus, Play, Power, Undo2 } from "lucide-react";
 import { useState } from "react";
 import { micronsToPa, paToMicrons } from "@shared/engine/index.ts";
 import {
@@ -6,7 +6,6 @@ import {
   EvacuationSampleBodySchema,
   MAX_TARGET_MICRONS,
   MIN_TARGET_MICRONS,
-  type Evacuation,
 } from "@shared/schemas/procedure-records.ts";
 import { isStanding } from "@shared/schemas/visits.ts";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
@@ -18,7 +17,7 @@ import { VisitVoidAction } from "@/features/visit/components/visit-void-action.t
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { evacuationSamplesPath, useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
+import { evacuationSamplesPath, procedureRecordsPath, useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-outbox.ts";
@@ -28,6 +27,7 @@ import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { recordTime } from "../utils/record-time.ts";
 import { EvacuationChart } from "./lazy-evacuation-chart.tsx";
+import { evacuationsOnDevice, type ShownEvacuation } from "../utils/evacuations-on-device.ts";
 import { formatVacuum, VACUUM_LABEL, type VacuumUnit } from "./vacuum-units.ts";
 import { EvacuationBadge, EvacuationSummary } from "./evacuation-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
@@ -48,7 +48,7 @@ function errorText(error: unknown, fallback: string): { message: string; fields:
 }
 
 /** Readings entry for the evacuation in progress: the time fills itself in, the unit is the technician's choice. */
-function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitId: string; evacuation: Evacuation; unit: VacuumUnit; canWrite: boolean; onReload: () => Promise<unknown> }) {
+function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitId: string; evacuation: ShownEvacuation; unit: VacuumUnit; canWrite: boolean; onReload: () => Promise<unknown> }) {
   const now = useNow(5_000);
   const addSample = useAddEvacuationSample();
   const keepWhenOffline = useKeepWhenOffline();
@@ -90,7 +90,10 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
         minutes: parsed.data.minutes ?? Math.max(0, Math.round((Date.now() - Date.parse(evacuation.startedAt)) / 6000) / 10),
         clientId: entryId.take(),
       };
-      await keepWhenOffline(() => addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...sample }), {
+      // Readings of an evacuation still on the device go after it, in order, from the outbox: sent
+      // now, they would reach the server before the evacuation they belong to.
+      const send = evacuation.onDevice ? () => Promise.reject(new ApiError(0, "Kept behind its evacuation")) : () => addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...sample });
+      await keepWhenOffline(send, {
         kind: "evacuation-sample",
         visitId,
         path: evacuationSamplesPath(visitId, evacuation.id),
@@ -142,9 +145,14 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
       {evacuation.isolatedAtMinutes === null ? (
         <div className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[10rem_auto]">
           <NumberField label="Valved off at" unit="min" value={isolationText} onValueChange={setIsolation} error={errors.isolatedAtMinutes} />
-          <Button variant="secondary" size="lg" disabled={update.isPending || evacuation.samples.length === 0} onClick={() => void setIsolated(toNumber(isolationText) ?? null)}>
+          <Button variant="secondary" size="lg" disabled={update.isPending || evacuation.samples.length === 0 || evacuation.onDevice} onClick={() => void setIsolated(toNumber(isolationText) ?? null)}>
             <Power aria-hidden className="size-5" /> Pump valved off
           </Button>
+          {evacuation.onDevice && (
+            <p className="col-span-2 text-sm text-muted">
+              The decay test starts on the server: mark the pump valved off once this evacuation has been sent. Keep entering readings meanwhile.
+            </p>
+          )}
         </div>
       ) : (
         <Button variant="quiet" disabled={update.isPending} onClick={() => void setIsolated(null)}>
@@ -176,6 +184,7 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
 export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWrite: boolean }) {
   const evacuations = useEvacuations(visitId);
   const create = useCreateEvacuation();
+  const keepWhenOffline = useKeepWhenOffline();
   // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
   const entryId = useEntryClientId();
   const [unit, setUnit] = useState<VacuumUnit>("micron");
@@ -183,11 +192,12 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
   const [target, setTarget] = useState<string | null>(null);
   const [startError, setStartError] = useState<{ message: string; fields: Record<string, string> } | null>(null);
 
-  const list = evacuations.data?.evacuations ?? [];
+  const onDevice = useOutboxEntries();
+  // The server's evacuations with what waits on this device (readings, or one started without signal).
+  const list = evacuationsOnDevice(evacuations.data, onDevice, visitId);
   // The latest evacuation that stands is the one in progress; voided ones stay listed below.
   const current = list.filter(isStanding).at(-1);
   const earlier = list.filter((evacuation) => evacuation !== current);
-  const onDevice = useOutboxEntries();
   const targetText =
     target ?? (evacuations.data ? convertTyped(String(evacuations.data.defaults.targetMicrons), "micron", unit) : "");
   const targetRange = `${formatVacuum(MIN_TARGET_MICRONS, unit)} to ${formatVacuum(MAX_TARGET_MICRONS, unit)}`;
@@ -195,8 +205,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
   const start = async () => {
     setStartError(null);
     const typed = toNumber(targetText);
-    const body = { targetMicrons: typed === undefined || Number.isNaN(typed) ? typed : Math.round(fromDisplay(typed, unit)) };
-    const parsed = EvacuationCreateSchema.safeParse(body);
+    const parsed = EvacuationCreateSchema.safeParse({ targetMicrons: typed === undefined || Number.isNaN(typed) ? typed : Math.round(fromDisplay(typed, unit)) });
     if (!parsed.success) {
       // The schema speaks microns; someone reading pascals gets the range in pascals.
       const fields = fieldErrorsOf(parsed.error);
@@ -204,8 +213,17 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
       setStartError({ message: "Check the target", fields });
       return;
     }
+    // The pump's start by this device's clock: kept without signal, the evacuation is stored with it.
+    const body = { ...parsed.data, clientId: entryId.take(), startedAt: new Date().toISOString() };
     try {
-      await create.mutateAsync({ visitId, ...parsed.data , clientId: entryId.take() });
+      await keepWhenOffline(() => create.mutateAsync({ visitId, ...body }), {
+        kind: "evacuation",
+        visitId,
+        label: `Evacuation to ${formatVacuum(body.targetMicrons ?? evacuations.data?.defaults.targetMicrons ?? 500, unit)}`,
+        path: procedureRecordsPath("evacuations", visitId),
+        takenAt: body.startedAt,
+        body,
+      });
       entryId.release();
       setTarget(null);
     } catch (error) {
@@ -218,7 +236,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
       <CautionPanel topic="electrical" />
       <p className="text-sm text-muted">Read the vacuum on an electronic (micron) gauge at the point furthest from the pump, never a compound gauge.</p>
       {evacuations.isError && <FormAlert>The evacuations could not be loaded: {evacuations.error.message}</FormAlert>}
-      <WaitingEntries entries={onDevice.filter((entry) => entry.visitId === visitId && entry.kind === "evacuation-sample")} />
+      <WaitingEntries entries={onDevice.filter((entry) => entry.visitId === visitId && (entry.kind === "evacuation" || entry.kind === "evacuation-sample"))} />
 
       <Segmented<VacuumUnit>
         label="Vacuum unit"
@@ -236,6 +254,11 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
           <h2 id="evacuation-current-heading" className="text-lg font-semibold">
             Evacuation started {recordTime(current.startedAt)}
           </h2>
+          {current.onDevice && (
+            <p className="flex items-center gap-2 text-sm font-medium">
+              <CloudOff aria-hidden className="size-5 shrink-0" /> On this device: waiting to send, with its readings
+            </p>
+          )}
           <EvacuationSummary evacuation={current} unit={unit} />
           <EvacuationChart evacuation={current} unit={unit} />
           <SampleEntry key={current.id} visitId={visitId} evacuation={current} unit={unit} canWrite={canWrite} onReload={() => evacuations.refetch()} />
@@ -262,7 +285,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
               </table>
             </details>
           )}
-          {canWrite && <VisitVoidAction visitId={visitId} kind="evacuation" recordId={current.id} what={`the evacuation started ${recordTime(current.startedAt)}`} />}
+          {canWrite && !current.onDevice && <VisitVoidAction visitId={visitId} kind="evacuation" recordId={current.id} what={`the evacuation started ${recordTime(current.startedAt)}`} />}
         </section>
       )}
 
@@ -311,7 +334,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
                   <EvacuationBadge evacuation={evacuation} />
                   {evacuation.samples.length > 0 && <span className="num text-muted">last {formatVacuum(evacuation.samples.at(-1)!.microns, unit)}</span>}
                 </VoidedRecord>
-                {canWrite && !evacuation.voided && <VisitVoidAction visitId={visitId} kind="evacuation" recordId={evacuation.id} what={`the evacuation started ${recordTime(evacuation.startedAt)}`} />}
+                {canWrite && !evacuation.voided && !evacuation.onDevice && <VisitVoidAction visitId={visitId} kind="evacuation" recordId={evacuation.id} what={`the evacuation started ${recordTime(evacuation.startedAt)}`} />}
               </li>
             ))}
           </ul>
