@@ -314,9 +314,14 @@ test("a comment, a refrigerant movement and a void wait on the device too; when 
   await page.goto("/");
   await signIn(page, "tech@bellbird.example");
   await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
-  const visitId = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Session ends on the roof");
-  // One reading stored with signal, to be voided without it.
-  const stored = await page.request.post(`/api/visits/${visitId}/readings`, { data: { circuit: 1, suctionPressureKPa: 377, suctionLineTempC: 12, liquidPressureKPa: 1565, liquidLineTempC: 37 } });
+  // On the cool room, with a cylinder of its own: other specs count the rooftop unit's register
+  // lines and the demo cylinders' contents.
+  const cylinder = await page.request.post("/api/cylinders", { data: { label: "OFF-404A-N1", kind: "new", refrigerant: "R404A", waterCapacityKg: 11, tareKg: 6, initialContentsKg: 9 } });
+  expect(cylinder.status()).toBe(201);
+  const visitId = await startVisitOn(page, /Vaccine and stores cool room/, "Session ends in the plant room");
+  // One reading stored with signal, to be voided without it. R404A near −28 °C evaporating and
+  // 40 °C condensing: about 120 and 1730 kPa gauge (the engine's tables, rounded).
+  const stored = await page.request.post(`/api/visits/${visitId}/readings`, { data: { circuit: 1, suctionPressureKPa: 120, suctionLineTempC: -22, liquidPressureKPa: 1730, liquidLineTempC: 36 } });
   expect(stored.status()).toBe(201);
   await page.reload();
   await page.getByText("Recorded entries (to check or void)").click();
@@ -331,8 +336,7 @@ test("a comment, a refrigerant movement and a void wait on the device too; when 
   const movement = page.getByRole("form", { name: "Log a refrigerant movement" });
   await movement.getByLabel("What happened").selectOption("added-new");
   await movement.getByLabel("Mass").fill("0.30");
-  const cylinder = movement.getByLabel("Cylinder", { exact: true });
-  await cylinder.selectOption((await cylinder.locator("option", { hasText: "BM-407C-N3" }).getAttribute("value"))!);
+  await movement.getByLabel("Cylinder", { exact: true }).selectOption({ label: "OFF-404A-N1 · New (virgin) · holds 9.00 kg" });
   await movement.getByRole("button", { name: "Log movement" }).click();
   await expect(movement.getByText(/kept on this device \(\d\d:\d\d\); it goes in the register when the signal returns/)).toBeVisible();
 
@@ -360,7 +364,7 @@ test("a comment, a refrigerant movement and a void wait on the device too; when 
   // Someone else signs in on the device: they neither see nor send the first person's entries.
   await signIn(page, "apprentice@bellbird.example");
   // Back on the screen the session ended on, as the apprentice.
-  await expect(page.getByRole("heading", { name: "RTU-1 packaged rooftop unit" })).toBeVisible();
+  await expect(page.getByRole("heading", { name: "Vaccine and stores cool room" })).toBeVisible();
   await expect(page.getByRole("region", { name: "Comments" }).getByText("No comments yet.")).toBeVisible();
   await expect(page.getByTestId("outbox-waiting")).toBeHidden();
   await expect(page.getByText("Void waiting to send")).toBeHidden();
@@ -381,6 +385,10 @@ test("a comment, a refrigerant movement and a void wait on the device too; when 
   expect(visit.readings).toEqual([expect.objectContaining({ voided: expect.objectContaining({ reason: "Gauge still settling" }) })]);
   // The movement is also the run log's charge adjustment (one entry, one figure).
   expect(visit.adjustments.map((adjustment) => adjustment.amountKg)).toEqual([0.3]);
+  // Voided again (a voided line leaves the company register's list), for the register spec's count.
+  const register = (await (await office.get(`/api/visits/${visitId}/refrigerant`)).json()) as { movements: { id: string }[] };
+  expect(register.movements).toHaveLength(1);
+  expect((await office.post(`/api/visits/${visitId}/voids`, { data: { kind: "movement", recordId: register.movements[0]!.id, reason: "Test entry, not a real charge" } })).status()).toBe(201);
   await office.dispose();
 });
 
