@@ -6,8 +6,8 @@
  *
  * - first-load JS of each screen a technician or a reviewer opens first (sign-in, Today, jobs,
  *   equipment, the run log and the report of the demo visit — the quarterly check on the
- *   server-cupboard split — and the review queue): every script the browser fetched until
- *   the page was ready and the network idle, sized as the built files compress with gzip and
+ *   server-cupboard split — and the review queue): every script the browser asked for until
+ *   the page was ready (what fetched after that, until the network is idle, is shown apart), sized as the built files compress with gzip and
  *   brotli (node:zlib, level 9 and 11), with the number of files and how many refrigerant tables
  *   were among them; and the stylesheets and fonts beside them;
  * - the run log on a throttled phone profile (CDP: CPU 4× slower, "Slow 4G" ≈ 400 ms RTT,
@@ -54,12 +54,17 @@ function sizesOf(urls: string[]): Sizes {
   return { files, raw, gzip, brotli };
 }
 
-/** Records every script, stylesheet and font the page fetches. */
-function recordAssets(page: Page): { scripts: string[]; styles: string[]; fonts: string[] } {
-  const assets = { scripts: [] as string[], styles: [] as string[], fonts: [] as string[] };
+/**
+ * Records every script, stylesheet and font the page fetches; scripts asked for once the screen
+ * is ready (`ready` set) are kept apart: those are the idle-time fetches — the refrigerant tables
+ * of the company's units and the day's data kept for offline use (decision 027), the toast
+ * library — which no screen waits for.
+ */
+function recordAssets(page: Page): { scripts: string[]; afterReady: string[]; styles: string[]; fonts: string[]; ready: boolean } {
+  const assets = { scripts: [] as string[], afterReady: [] as string[], styles: [] as string[], fonts: [] as string[], ready: false };
   page.on("request", (request) => {
     const type = request.resourceType();
-    if (type === "script") assets.scripts.push(request.url());
+    if (type === "script") (assets.ready ? assets.afterReady : assets.scripts).push(request.url());
     else if (type === "stylesheet") assets.styles.push(request.url());
     else if (type === "font") assets.fonts.push(request.url());
   });
@@ -96,8 +101,10 @@ try {
     const assets = recordAssets(page);
     await page.goto(`${server.base}${target.path}`);
     await target.ready(page);
+    assets.ready = true;
     await page.waitForLoadState("networkidle");
     const sizes = sizesOf(assets.scripts);
+    const idle = sizesOf(assets.afterReady.filter((url) => !assets.scripts.includes(url)));
     const css = sizesOf(assets.styles);
     const tables = sizes.files.filter((file) => /\/refrigerant-R[^/]*$/.test(file)).map((file) => path.basename(file).replace(/-[\w-]{8}\.js$/, ""));
     const singlePhase = sizes.files.filter((file) => /\/single-phase-/.test(file)).length;
@@ -108,7 +115,11 @@ try {
         `  css ${kb(css.gzip)} gzip, ${new Set(assets.fonts).size} fonts` +
         (limit ? `   target < ${limit} KB compressed` : ""),
     );
-    if (process.env.BENCH_WEB_LIST) for (const file of [...sizes.files, ...css.files, ...new Set(assets.fonts)]) console.log(`      ${file}`);
+    if (idle.files.length > 0) {
+      const idleTables = idle.files.filter((file) => /\/(refrigerant|single-phase)-/.test(file)).length;
+      console.log(`  ${"".padEnd(9)} then, when idle: brotli ${kb(idle.brotli)} in ${idle.files.length} files (${idleTables} tables kept for offline use)`);
+    }
+    if (process.env.BENCH_WEB_LIST) for (const file of [...sizes.files, ...css.files, ...new Set(assets.fonts), ...idle.files.map((file) => `${file} (idle)`)]) console.log(`      ${file}`);
     await context.close();
   }
 

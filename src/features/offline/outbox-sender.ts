@@ -1,6 +1,6 @@
 import type { QueryClient } from "@tanstack/react-query";
 import { ApiError, apiRequest, formWithFile, UPLOAD_TIMEOUT_MS } from "@/lib/api/api-client.ts";
-import { PROCEDURE_RECORD_KINDS, procedureRecordsKey } from "@/lib/api/procedures.ts";
+import { PROCEDURE_RECORD_KINDS, procedureRecordsKey } from "@/lib/api/procedure-paths.ts";
 import { entriesOf, outbox } from "./outbox-store.ts";
 
 /** How a round of sending ended: what the sender does next depends on it (use-outbox.ts). */

@@ -20,17 +20,11 @@ import {
   type StandingPressureBody,
 } from "@shared/schemas/procedure-records.ts";
 import { apiRequest } from "./api-client.ts";
+import { evacuationSamplesPath, procedureRecordsKey, procedureRecordsPath, type ProcedureRecordKind } from "./procedure-paths.ts";
 
-/** The kinds of procedure record, as their API paths and query keys name them. */
-export const PROCEDURE_RECORD_KINDS = ["electrical-checks", "leak-searches", "standing-pressure-checks", "pressure-tests", "evacuations"] as const;
-type Kind = (typeof PROCEDURE_RECORD_KINDS)[number];
+type Kind = ProcedureRecordKind;
 
 // ---- requests ---------------------------------------------------------------------------------
-
-/** Where a visit's records of one kind are listed and created; the outbox sends kept entries there too. */
-export const procedureRecordsPath = (kind: Kind, visitId: string) => `/visits/${visitId}/${kind}`;
-/** Where an evacuation's samples are added. */
-export const evacuationSamplesPath = (visitId: string, evacuationId: string) => `/visits/${visitId}/evacuations/${evacuationId}/samples`;
 
 export const getElectricalChecks = (visitId: string, signal?: AbortSignal) => apiRequest(procedureRecordsPath("electrical-checks", visitId), { schema: ElectricalCheckListSchema, signal });
 export const getLeakSearches = (visitId: string, signal?: AbortSignal) => apiRequest(procedureRecordsPath("leak-searches", visitId), { schema: LeakSearchListSchema, signal });
@@ -74,8 +68,6 @@ export async function updateEvacuation({ visitId, evacuationId, version, ...body
 
 // ---- query options ----------------------------------------------------------------------------
 
-/** The query key of one kind of a visit's procedure records. */
-export const procedureRecordsKey = (kind: Kind, visitId: string) => ["procedures", kind, visitId] as const;
 
 export const electricalChecksQueryOptions = (visitId: string) =>
   queryOptions({ queryKey: procedureRecordsKey("electrical-checks", visitId), queryFn: ({ signal }) => getElectricalChecks(visitId, signal) });

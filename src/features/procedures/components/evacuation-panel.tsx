@@ -17,7 +17,8 @@ import { VisitVoidAction } from "@/features/visit/components/visit-void-action.t
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { evacuationSamplesPath, procedureRecordsPath, useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
+import { useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
+import { evacuationSamplesPath, procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-outbox.ts";

@@ -10,7 +10,8 @@ import {
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { procedureRecordsPath, useCreatePressureTest, usePressureTests } from "@/lib/api/procedures.ts";
+import { useCreatePressureTest, usePressureTests } from "@/lib/api/procedures.ts";
+import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import {
   formatNumber,
   GAUGE_LABEL,

@@ -1,7 +1,7 @@
 import { evacuationResult } from "@shared/engine/index.ts";
 import type { Evacuation, EvacuationList } from "@shared/schemas/procedure-records.ts";
 import type { OutboxEntry } from "@/features/offline/outbox-store.ts";
-import { evacuationSamplesPath } from "@/lib/api/procedures.ts";
+import { evacuationSamplesPath } from "@/lib/api/procedure-paths.ts";
 
 /** An evacuation as this device shows it; `onDevice`: started here without signal, not on the server yet. */
 export type ShownEvacuation = Evacuation & { onDevice: boolean };
