@@ -1,7 +1,7 @@
 import type { QueryClient } from "@tanstack/react-query";
 import { ApiError, apiRequest, formWithFile, UPLOAD_TIMEOUT_MS } from "@/lib/api/api-client.ts";
 import { PROCEDURE_RECORD_KINDS, procedureRecordsKey } from "@/lib/api/procedure-paths.ts";
-import { entriesOf, outbox } from "./outbox-store.ts";
+import { countAttempt, discardEntry, entriesOf, markRefused } from "./outbox-store.ts";
 
 /** How a round of sending ended: what the sender does next depends on it (use-outbox.ts). */
 export type SendOutcome = "sent" | "no-connection" | "signed-out";
@@ -38,14 +38,14 @@ async function sendRound(queryClient: QueryClient, userId: string): Promise<Send
       if (entry.state !== "waiting") continue;
       try {
         await apiRequest(entry.path, entry.file ? { method: "POST", body: formWithFile(entry.body, entry.file), timeoutMs: UPLOAD_TIMEOUT_MS } : { method: "POST", body: entry.body });
-        await outbox.entries.delete(entry.clientId);
+        await discardEntry(entry.clientId);
         touched.add(entry.visitId);
       } catch (error) {
         if (isRefusal(error)) {
-          await outbox.entries.update(entry.clientId, { state: "refused", reason: error.message, fields: error.fields, attempts: entry.attempts + 1 });
+          await markRefused(entry, error.message, error.fields);
           continue;
         }
-        await outbox.entries.update(entry.clientId, { attempts: entry.attempts + 1 });
+        await countAttempt(entry);
         return error instanceof ApiError && error.status === 401 ? "signed-out" : "no-connection";
       }
     }

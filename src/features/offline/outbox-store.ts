@@ -1,5 +1,5 @@
-import { Dexie, type EntityTable } from "dexie";
 import { ApiError } from "@/lib/api/api-client.ts";
+import { whenIdle } from "./when-idle.ts";
 
 /**
  * The device's outbox: every entry made at a visit that has not reached the server yet, in the
@@ -58,27 +58,72 @@ export const OUTBOX_KIND_LABELS: Record<OutboxKind, string> = {
   void: "Void",
 };
 
-class OutboxDatabase extends Dexie {
-  entries!: EntityTable<OutboxEntry, "clientId">;
-  constructor() {
-    super("satura-outbox");
-    this.version(1).stores({ entries: "clientId, [userId+queuedAt], [userId+visitId]" });
-  }
-}
-
-export const outbox = new OutboxDatabase();
+/**
+ * The outbox's database, opened on first use: dexie loads with it, in a chunk of its own, so the
+ * sign-in screen and the first paint of the others do not wait for it (README decision 023).
+ */
+let opened: Promise<typeof import("./outbox-database.ts")> | undefined;
+/** The longest the first watch of the outbox waits for the browser to be idle, ms. */
+const OUTBOX_WATCH_WAIT_MS = 2_000;
+const openOutbox = () => (opened ??= import("./outbox-database.ts"));
 
 /** Keeps an entry to send later (again under the same id, if it was already kept). */
 export async function keepInOutbox(entry: Omit<OutboxEntry, "queuedAt" | "state" | "attempts">): Promise<void> {
+  const { outbox } = await openOutbox();
   const kept = await outbox.entries.get(entry.clientId);
   await outbox.entries.put({ ...entry, queuedAt: kept?.queuedAt ?? Date.now(), state: "waiting", attempts: kept?.attempts ?? 0 });
 }
 
 /** A person's entries in the order they were made. */
-export const entriesOf = (userId: string): Promise<OutboxEntry[]> =>
-  outbox.entries.where("[userId+queuedAt]").between([userId, Dexie.minKey], [userId, Dexie.maxKey]).toArray();
+export async function entriesOf(userId: string): Promise<OutboxEntry[]> {
+  const { entriesOf: read } = await openOutbox();
+  return read(userId);
+}
 
-export const discardEntry = (clientId: string): Promise<void> => outbox.entries.delete(clientId);
+/**
+ * Watches a person's entries: `onChange` gets them now and after every change to the outbox,
+ * from any tab. Returns the function that stops watching.
+ */
+export function watchEntries(userId: string, onChange: (entries: OutboxEntry[]) => void): () => void {
+  let stop: (() => void) | undefined;
+  let stopped = false;
+  const start = () =>
+    void openOutbox().then(
+      ({ liveQuery, entriesOf: read }) => {
+        if (stopped) return;
+        const subscription = liveQuery(() => read(userId)).subscribe({ next: onChange, error: () => onChange([]) });
+        stop = () => subscription.unsubscribe();
+      },
+      () => onChange([]),
+    );
+  // Once the screen is drawn, unless the outbox is open already (an entry was kept meanwhile).
+  let cancel = () => undefined as void;
+  if (opened) start();
+  else cancel = whenIdle(start, OUTBOX_WATCH_WAIT_MS);
+  return () => {
+    stopped = true;
+    cancel();
+    stop?.();
+  };
+}
+
+/** Takes an entry off the device: it reached the server, or the technician discarded it. */
+export async function discardEntry(clientId: string): Promise<void> {
+  const { outbox } = await openOutbox();
+  await outbox.entries.delete(clientId);
+}
+
+/** The server refused the entry: it stays, refused, with the reason and the field messages. */
+export async function markRefused(entry: OutboxEntry, reason: string, fields: Record<string, string>): Promise<void> {
+  const { outbox } = await openOutbox();
+  await outbox.entries.update(entry.clientId, { state: "refused", reason, fields, attempts: entry.attempts + 1 });
+}
+
+/** A try that did not reach the server: the entry waits for the next. */
+export async function countAttempt(entry: OutboxEntry): Promise<void> {
+  const { outbox } = await openOutbox();
+  await outbox.entries.update(entry.clientId, { attempts: entry.attempts + 1 });
+}
 
 /**
  * Sends a visit entry now; without a connection, or without an answer in time, keeps it in the

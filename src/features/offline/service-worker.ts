@@ -28,5 +28,9 @@ export function registerServiceWorker(): void {
       });
     });
   };
-  whenIdle(register, 5000);
+  // After the page's load event: while a lazily loaded screen is still on its way, the browser
+  // is idle between requests, and the worker would otherwise start before the screen is drawn.
+  const afterLoad = () => whenIdle(register, 5000);
+  if (document.readyState === "complete") afterLoad();
+  else window.addEventListener("load", afterLoad, { once: true });
 }

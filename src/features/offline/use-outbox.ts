@@ -1,10 +1,6 @@
-import { useQueryClient } from "@tanstack/react-query";
-import { liveQuery } from "dexie";
-import { useCallback, useEffect, useSyncExternalStore } from "react";
-import { meQueryOptions, useMe } from "@/lib/api/auth.ts";
-import { useOnlineStatus } from "./online-status.ts";
-import { entriesOf, OUTBOX_KIND_LABELS, sendOrKeep, type OutboxEntry, type OutboxFile, type OutboxKind } from "./outbox-store.ts";
-import { sendWaitingEntries } from "./outbox-sender.ts";
+import { useCallback, useSyncExternalStore } from "react";
+import { useMe } from "@/lib/api/auth.ts";
+import { OUTBOX_KIND_LABELS, watchEntries, sendOrKeep, type OutboxEntry, type OutboxFile, type OutboxKind } from "./outbox-store.ts";
 
 const NONE: OutboxEntry[] = [];
 
@@ -20,21 +16,14 @@ interface SharedWatch {
 }
 const watches = new Map<string, SharedWatch>();
 
-function watchEntries(userId: string, listener: () => void): () => void {
+function watchShared(userId: string, listener: () => void): () => void {
   let watch = watches.get(userId);
   if (!watch) {
     const created: SharedWatch = { entries: NONE, listeners: new Set(), stop: () => undefined };
-    const subscription = liveQuery(() => entriesOf(userId)).subscribe({
-      next: (entries) => {
-        created.entries = entries;
-        for (const notify of created.listeners) notify();
-      },
-      error: () => {
-        created.entries = NONE;
-        for (const notify of created.listeners) notify();
-      },
+    created.stop = watchEntries(userId, (entries) => {
+      created.entries = entries;
+      for (const notify of created.listeners) notify();
     });
-    created.stop = () => subscription.unsubscribe();
     watches.set(userId, created);
     watch = created;
   }
@@ -53,45 +42,8 @@ function watchEntries(userId: string, listener: () => void): () => void {
 export function useOutboxEntries(): OutboxEntry[] {
   const userId = useMe().data?.id;
   // Keyed by whose they are, so that another person's never show while theirs load.
-  const subscribe = useCallback((listener: () => void) => (userId ? watchEntries(userId, listener) : () => undefined), [userId]);
+  const subscribe = useCallback((listener: () => void) => (userId ? watchShared(userId, listener) : () => undefined), [userId]);
   return useSyncExternalStore(subscribe, () => (userId ? (watches.get(userId)?.entries ?? NONE) : NONE));
-}
-
-/** First wait after a round that could not reach the server; doubled each time, up to the most. */
-const RETRY_FIRST_MS = 5_000;
-const RETRY_MOST_MS = 5 * 60_000;
-
-/**
- * Sends the signed-in person's waiting entries: at start, whenever one is kept, when the signal
- * returns, and after a failed round again and again with a growing wait. A session that has
- * ended stops it until the same person signs in again (a new `me`); someone else signing in on
- * the device never sends or sees the entries of the first.
- */
-export function useOutboxSender(entries: OutboxEntry[]): void {
-  const queryClient = useQueryClient();
-  const userId = useMe().data?.id;
-  const online = useOnlineStatus();
-  const waiting = entries.filter((entry) => entry.state === "waiting").map((entry) => entry.clientId).join(" ");
-  useEffect(() => {
-    if (!userId || !online || !waiting) return;
-    let stopped = false;
-    let timer: ReturnType<typeof setTimeout> | undefined;
-    let delay = RETRY_FIRST_MS;
-    const send = async () => {
-      const outcome = await sendWaitingEntries(queryClient, userId);
-      // The session ended: asking who is signed in takes the app to the sign-in screen, and
-      // the same person signing in again mounts this anew, which sends the entries.
-      if (outcome === "signed-out") void queryClient.invalidateQueries({ queryKey: meQueryOptions().queryKey });
-      if (stopped || outcome !== "no-connection") return;
-      timer = setTimeout(() => void send(), delay);
-      delay = Math.min(delay * 2, RETRY_MOST_MS);
-    };
-    void send();
-    return () => {
-      stopped = true;
-      clearTimeout(timer);
-    };
-  }, [userId, online, waiting, queryClient]);
 }
 
 /**
