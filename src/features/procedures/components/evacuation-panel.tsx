@@ -88,7 +88,7 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
       // A sample kept on the device counts its minutes from the pump's start now, not when it arrives.
       const sample = {
         ...parsed.data,
-        minutes: parsed.data.minutes ?? Math.max(0, Math.round((Date.now() - Date.parse(evacuation.startedAt)) / 6000) / 10),
+        minutes: parsed.data.minutes ?? minutesSince(evacuation.startedAt, Date.now()),
         clientId: entryId.take(),
       };
       // Readings of an evacuation still on the device go after it, in order, from the outbox: sent
