@@ -18,8 +18,11 @@ export interface ReadingCost {
   /** Mean stored (compressed) size of each JSON column, pg_column_size. */
   resultStored: number;
   inputStored: number;
-  /** Mean size of the result as JSON text, before compression. */
+  /** Mean size of the result column as JSON text, before the database's compression (a packed result's is its envelope). */
   resultText: number;
+  /** Readings whose result is stored packed (server/db/stored-result.ts, README decision 030), and their mean stored result. */
+  packedResults: number;
+  packedResultStored: number;
 }
 
 export interface DataSet {
@@ -49,14 +52,16 @@ export async function readDataSet(dataDir: string): Promise<DataSet> {
       `select v.id from visits v join equipment e on e.id = v.equipment_id where v.status = 'open' and e.refrigerant = 'R407C' and v.id <> $1 order by v.started_at desc`,
       [longVisitId],
     );
-    const cost = await one<{ heap: string; toast: string; indexes: string; total: string; result_stored: string; input_stored: string; result_text: string }>(`
+    const cost = await one<{ heap: string; toast: string; indexes: string; total: string; result_stored: string; input_stored: string; result_text: string; packed: string; packed_stored: string | null }>(`
       select pg_relation_size('readings') as heap,
              coalesce(pg_total_relation_size(nullif(c.reltoastrelid, 0)), 0) as toast,
              pg_indexes_size('readings') as indexes,
              pg_total_relation_size('readings') as total,
              (select avg(pg_column_size(result)) from readings) as result_stored,
              (select avg(pg_column_size(input)) from readings) as input_stored,
-             (select avg(octet_length(result::text)) from (select result from readings limit 2000) sample) as result_text
+             (select avg(octet_length(result::text)) from (select result from readings limit 2000) sample) as result_text,
+             (select count(*) from readings where result ? 'packed') as packed,
+             (select avg(pg_column_size(result)) from readings where result ? 'packed') as packed_stored
       from pg_class c where c.oid = 'readings'::regclass`);
     const rows = counts.readings!;
     const per = (value: string) => Number(value) / rows;
@@ -74,6 +79,8 @@ export async function readDataSet(dataDir: string): Promise<DataSet> {
         resultStored: Number(cost.result_stored),
         inputStored: Number(cost.input_stored),
         resultText: Number(cost.result_text),
+        packedResults: Number(cost.packed),
+        packedResultStored: Number(cost.packed_stored ?? 0),
       },
       databaseBytes: Number(database.bytes),
     };

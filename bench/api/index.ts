@@ -177,6 +177,9 @@ console.log(
   `  a stored reading: ${cost.totalPerReading.toFixed(0)} B on disk (heap ${cost.heapPerReading.toFixed(0)}, TOAST ${cost.toastPerReading.toFixed(0)}, indexes ${cost.indexesPerReading.toFixed(0)}); ` +
     `its result column ${cost.resultStored.toFixed(0)} B stored (${cost.resultText.toFixed(0)} B as JSON text), its input ${cost.inputStored.toFixed(0)} B`,
 );
+if (cost.packedResults > 0) {
+  console.log(`  ${cost.packedResults.toLocaleString("en")} of the readings' results are stored packed (decision 030): ${cost.packedResultStored.toFixed(0)} B each`);
+}
 
 /** Saving at each level on both databases, with the server's CPU per save: the figure that bounds one process. */
 function printSaving(large: readonly SaveLevel[], demo: readonly SaveLevel[]) {

@@ -14,6 +14,8 @@ import * as schema from "./schema.ts";
 
 const ALL_TABLES: readonly PgTable[] = Object.values<unknown>(schema).filter((value): value is PgTable => is(value, PgTable));
 
+const JSON_TYPES = new Set(["json", "jsonb"]);
+
 /**
  * `table (columns…)` without its JSON columns. Nothing is ever filtered or joined on a stored
  * input or result, yet sampling and sorting them is nearly all of ANALYZE's work: on 28 000
@@ -21,7 +23,8 @@ const ALL_TABLES: readonly PgTable[] = Object.values<unknown>(schema).filter((va
  * PGlite connection answers nobody. Row counts (pg_class.reltuples) are gathered either way.
  */
 function analyzeTarget(table: PgTable): SQL {
-  const columns = Object.values(getTableColumns(table)).filter((column) => column.columnType !== "PgJsonb" && column.columnType !== "PgJson");
+  // By SQL type, so a custom jsonb column (a reading's packed result, server/db/stored-result.ts) is left out too.
+  const columns = Object.values(getTableColumns(table)).filter((column) => !JSON_TYPES.has(column.getSQLType()));
   if (columns.length === 0) return sql`${table}`;
   return sql`${table} (${sql.join(
     columns.map((column) => sql.identifier(column.name)),

@@ -8,7 +8,7 @@
 import { sql } from "drizzle-orm";
 import type { Role } from "@shared/schemas/auth.ts";
 import type { AttemptAnswers, AttemptScore, CaseDifficulty, CaseExpected, CaseStatus, CaseStory, SafetyNote, WorkedStep } from "@shared/schemas/casebook.ts";
-import type { Application, ChargeState, DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
+import type { Application, ChargeState, DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import { CHARGE_REFERENCE_SOURCES, type ChargeReferenceSource } from "@shared/schemas/charge-references.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { CylinderKind, MovementKind } from "@shared/schemas/register.ts";
@@ -28,6 +28,7 @@ import {
   uuid,
   type AnyPgColumn,
 } from "drizzle-orm/pg-core";
+import { storedResult } from "./stored-result.ts";
 
 const createdAt = timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow();
 const updatedAt = timestamp("updated_at", { withTimezone: true, mode: "date" }).notNull().defaultNow();
@@ -438,7 +439,8 @@ export const readings = pgTable(
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     note: text("note"),
     input: jsonb("input").$type<DiagnosisInput>().notNull(),
-    result: jsonb("result").$type<DiagnosisResult>().notNull(),
+    /** jsonb holding the result packed (server/db/stored-result.ts, README decision 030); read and written as a DiagnosisResult. */
+    result: storedResult("result").notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     /**
      * Set while a CSV import stores its rows in short slices (so other requests are not held
@@ -454,8 +456,9 @@ export const readings = pgTable(
     // The few figures the trend, the chart series and lists read, copied out of `result` and
     // `input` by the database itself (stored generated columns): every insert path (saves, CSV
     // imports, the seed, the large data set) and every rewrite of a stored result keeps them
-    // right, and reading them does not decompress the reading's whole stored result (about
-    // 11 kB of TOASTed jsonb), which was most of the cost of a long visit's trend.
+    // right, and reading them does not unpack the reading's whole stored result, which was most
+    // of the cost of a long visit's trend. A packed result (decision 030) carries these fields
+    // beside its compressed text, so the same expressions read either form.
     ...readingFigureColumns(),
   },
   (table) => [

@@ -574,7 +574,8 @@ export async function findPhoto(db: Database, organisationId: string, photoId: s
 
 /**
  * One slice of a CSV import, stored hidden under its import id. `rowsJson` is the worker's
- * JSON array of { takenAt, input, result }: PostgreSQL unpacks it, so the server's thread
+ * JSON array of { takenAt, input, result }, each result already packed as the `result` column
+ * stores it (server/db/stored-result.ts): PostgreSQL unpacks the array, so the server's thread
  * never builds or parses the whole series, and each slice holds the database only briefly.
  */
 export async function stageImportedReadings(

@@ -13,6 +13,7 @@ import { z } from "zod";
 import { diagnose } from "@shared/engine/index.ts";
 import { isStorableInstant } from "@shared/schemas/dates.ts";
 import { MEASURED_FIELDS, type NumericMeasuredField } from "@shared/schemas/visits.ts";
+import { packResult } from "../db/stored-result.ts";
 import { readingInput, type ReadingContext } from "../visits/reading-input.ts";
 
 /** Reading fields a column can be mapped to, besides the time column: every measured number. */
@@ -85,10 +86,11 @@ export interface ImportPreview {
   validCount: number;
   problems: RowProblem[];
   /**
-   * The valid rows as UTF-8 JSON arrays of { takenAt, input, result }, IMPORT_SLICE_ROWS at a
-   * time (only when keepRows), all views of one buffer. Serialised here and handed over without
-   * a copy (the worker transfers the buffer), so the server's thread neither builds nor clones
-   * thousands of objects; PostgreSQL unpacks them (stageImportedReadings).
+   * The valid rows as UTF-8 JSON arrays of { takenAt, input, result }, the result packed as
+   * stored (server/db/stored-result.ts), IMPORT_SLICE_ROWS at a time (only when keepRows), all
+   * views of one buffer. Serialised here and handed over without a copy (the worker transfers
+   * the buffer), so the server's thread neither builds, compresses nor clones thousands of
+   * objects; PostgreSQL unpacks them (stageImportedReadings).
    */
   slices: Uint8Array[];
 }
@@ -189,7 +191,9 @@ export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRef
       const issue = parsed.error.issues[0]!;
       return problems.push({ line, field: issue.path.join(".") || undefined, message: issue.message });
     }
-    valid.push({ takenAt: takenAt.toISOString(), input: parsed.data, result: diagnose(parsed.data, { withMeasuredCycle: true }) });
+    const result = diagnose(parsed.data, { withMeasuredCycle: true });
+    // Packed here, in the worker, as every stored result is (server/db/stored-result.ts): a preview stores nothing.
+    valid.push({ takenAt: takenAt.toISOString(), input: parsed.data, result: task.keepRows ? packResult(result) : result });
   });
   return summary();
 }
