@@ -55,6 +55,8 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
     return;
   }
   if (error instanceof HttpError) {
+    // A refusal the server could not help (503 etc.) is logged with its cause; a 4xx is the client's.
+    if (error.status >= 500) req.log?.error({ err: error.cause ?? error }, error.message);
     res.status(error.status).json({ message: error.message, ...(error.fields ? { fields: error.fields } : {}) });
     return;
   }

@@ -4,8 +4,10 @@ export class HttpError extends Error {
     readonly status: number,
     message: string,
     readonly fields?: Record<string, string>,
+    /** What went wrong underneath (logged with a 5xx, never sent). */
+    options?: ErrorOptions,
   ) {
-    super(message);
+    super(message, options);
     this.name = "HttpError";
   }
 }
