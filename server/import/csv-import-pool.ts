@@ -72,7 +72,10 @@ export async function judgeCsvOffThread(task: CsvImportTask): Promise<ImportPrev
     if ((error as Error).message === "Task queue is at limit")
       throw new HttpError(503, "Too many imports are running at once; try again in a minute");
     const failure = failedPools.get(running);
-    if (failure) throw new HttpError(503, "The import could not start on the server; try again in a minute", undefined, { cause: failure });
+    if (failure)
+      throw new HttpError(503, "The import could not start on the server; try again in a minute", undefined, {
+        cause: failure,
+      });
     throw error;
   }
   if ("refused" in outcome)
