@@ -217,10 +217,12 @@ export async function registerPage(db: Database, organisationId: string, request
  * chunk before reading the next, so its memory stays one chunk whatever the register's size, and
  * other requests reach the database between chunks.
  */
-export async function* registerChunks(db: Database, organisationId: string, filter: RegisterFilter, chunkSize: number): AsyncGenerator<MovementRow[]> {
+export async function* registerChunks(db: Database, organisationId: string, filter: RegisterFilter, chunkSize: number, firstChunkSize = chunkSize): AsyncGenerator<MovementRow[]> {
   let cursor: string | undefined;
+  let limit = firstChunkSize;
   do {
-    const { rows, nextCursor } = await registerPage(db, organisationId, { ...filter, direction: "asc", cursor, limit: chunkSize });
+    const { rows, nextCursor } = await registerPage(db, organisationId, { ...filter, direction: "asc", cursor, limit });
+    limit = chunkSize;
     if (rows.length > 0) yield rows;
     cursor = nextCursor ?? undefined;
   } while (cursor);

@@ -6,8 +6,6 @@
  * run log's charge adjustment (charge-added / charge-removed on /api/visits/:id/adjustments)
  * are one entry: either route writes both, linked, with one figure (server/register/charge-entry.ts).
  */
-import { Readable } from "node:stream";
-import { pipeline } from "node:stream/promises";
 import { Router, type Response } from "express";
 import { z } from "zod";
 import { boundEnd, boundStart } from "@shared/schemas/dates.ts";
@@ -54,7 +52,8 @@ import { calibrateAfterWeighIn } from "../visits/calibrate-after-weigh-in.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import { circuitBalance, leakRate, liquidChargingNote, toCylinder, topUps } from "../register/register-checks.ts";
 import { registerCsvLine } from "../register/register-csv.ts";
-import { EXPORT_CHUNK_LINES, registerCsvText } from "../register/register-csv-text.ts";
+import { EXPORT_CHUNK_LINES, FIRST_EXPORT_CHUNK_LINES, registerCsvText } from "../register/register-csv-text.ts";
+import { streamPieces } from "../http/stream-pieces.ts";
 import { mayReadRegisterLine, readsWholeRegister, visibleRegisterLines, type RegisterReader } from "../register/register-visibility.ts";
 import { licenceNumbers } from "../db/licence-numbers.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
@@ -316,12 +315,12 @@ export function registerRouter({ db }: Deps): Router {
     res.setHeader("Content-Disposition", `attachment; filename="${name}.csv"`);
     res.setHeader("Cache-Control", "private, no-store");
     try {
-      const lines = registerCsvText(registerChunks(db, organisationId, filter, EXPORT_CHUNK_LINES), (movement) =>
+      const lines = registerCsvText(registerChunks(db, organisationId, filter, EXPORT_CHUNK_LINES, FIRST_EXPORT_CHUNK_LINES), (movement) =>
         mayReadRegisterLine(user, movement.technician?.id ?? null) ? registerCsvLine(movement, licences) : undefined,
       );
-      await pipeline(Readable.from(lines), res);
+      await streamPieces(res, lines);
     } catch (error) {
-      // Once the first lines are out the status is sent: the response is cut short (pipeline
+      // Once the header is out the status is sent: the response is cut short (streamPieces
       // destroys it), so the download fails instead of ending a partial file that looks whole.
       if (!res.headersSent) throw error;
       req.log?.error({ err: error }, "register export stopped part-way");
