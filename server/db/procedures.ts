@@ -45,8 +45,8 @@ function toElectricalCheck(row: typeof electricalChecks.$inferSelect, people: Pe
     takenAt: row.takenAt.toISOString(),
     recordedBy: person(people, row.recordedBy),
     voided: voidInfo(row, people),
-    input: row.input as unknown as ElectricalCheckInput,
-    result: row.result as unknown as ElectricalCheckResult,
+    input: row.input,
+    result: row.result,
   };
 }
 
@@ -72,8 +72,8 @@ export async function insertElectricalCheck(
     organisationId,
     visitId: values.visitId,
     target: values.input.target,
-    input: values.input as unknown as Record<string, unknown>,
-    result: values.result as unknown as Record<string, unknown>,
+    input: values.input,
+    result: values.result,
     recordedBy: values.recordedBy,
     clientId: values.clientId,
     takenAt: values.takenAt,
@@ -89,8 +89,8 @@ function toLeakSearch(row: typeof leakSearches.$inferSelect, people: People): Le
     takenAt: row.takenAt.toISOString(),
     recordedBy: person(people, row.recordedBy),
     voided: voidInfo(row, people),
-    input: row.input as unknown as LeakSearch["input"],
-    result: row.result as unknown as Verdict,
+    input: row.input,
+    result: row.result,
   };
 }
 
@@ -116,8 +116,8 @@ export async function insertLeakSearch(
     organisationId,
     visitId: values.visitId,
     method: values.input.method,
-    input: values.input as unknown as Record<string, unknown>,
-    result: values.result as unknown as Record<string, unknown>,
+    input: values.input,
+    result: values.result,
     recordedBy: values.recordedBy,
     clientId: values.clientId,
     takenAt: values.takenAt,
@@ -133,8 +133,8 @@ function toStandingPressureCheck(row: typeof standingPressureChecks.$inferSelect
     takenAt: row.takenAt.toISOString(),
     recordedBy: person(people, row.recordedBy),
     voided: voidInfo(row, people),
-    input: row.input as unknown as StandingPressureRecordInput,
-    result: row.result as unknown as StandingPressureResult,
+    input: row.input,
+    result: row.result,
   };
 }
 
@@ -160,8 +160,8 @@ export async function insertStandingPressureCheck(
     organisationId,
     visitId: values.visitId,
     circuit: values.input.circuit,
-    input: values.input as unknown as Record<string, unknown>,
-    result: values.result as unknown as Record<string, unknown>,
+    input: values.input,
+    result: values.result,
     recordedBy: values.recordedBy,
     clientId: values.clientId,
     takenAt: values.takenAt,
@@ -177,8 +177,8 @@ function toPressureTest(row: typeof pressureTests.$inferSelect, people: People):
     takenAt: row.takenAt.toISOString(),
     recordedBy: person(people, row.recordedBy),
     voided: voidInfo(row, people),
-    input: row.input as unknown as PressureTestRecordInput,
-    result: row.result as unknown as PressureTestRecordResult,
+    input: row.input,
+    result: row.result,
   };
 }
 
@@ -203,8 +203,8 @@ export async function insertPressureTest(
   return insertEntryOnce(db, pressureTestEntries, {
     organisationId,
     visitId: values.visitId,
-    input: values.input as unknown as Record<string, unknown>,
-    result: values.result as unknown as Record<string, unknown>,
+    input: values.input,
+    result: values.result,
     recordedBy: values.recordedBy,
     clientId: values.clientId,
     takenAt: values.takenAt,
@@ -227,7 +227,7 @@ function toEvacuation(row: EvacuationRow, people: People): Evacuation {
     samples: row.samples,
     clientId: row.clientId,
     note: row.note,
-    result: row.result as unknown as EvacuationResult,
+    result: row.result,
     version: row.version,
     voided: voidInfo(row, people),
   };
@@ -284,7 +284,7 @@ export async function insertEvacuation(
     startedAt?: Date;
   },
 ): Promise<StoredEntry<Evacuation>> {
-  return insertEntryOnce(db, evacuationEntries, { ...values, organisationId, result: values.result as unknown as Record<string, unknown> });
+  return insertEntryOnce(db, evacuationEntries, { ...values, organisationId, result: values.result });
 }
 
 /**
@@ -304,7 +304,7 @@ export async function updateEvacuation(
     .update(evacuations)
     .set({
       ...values,
-      result: values.result as unknown as Record<string, unknown>,
+      result: values.result,
       ...(version === undefined ? {} : { version: sql`${evacuations.version} + 1` }),
       updatedAt: new Date(),
     })

@@ -6,13 +6,47 @@
  * Every organisation-owned row carries organisation_id: queries are always scoped by it.
  */
 import { sql } from "drizzle-orm";
-import type { Role } from "@shared/schemas/auth.ts";
-import type { AttemptAnswers, AttemptScore, CaseDifficulty, CaseExpected, CaseStatus, CaseStory, SafetyNote, WorkedStep } from "@shared/schemas/casebook.ts";
-import type { Application, ChargeState, DiagnosisInput } from "@shared/schemas/diagnosis.ts";
+import { ROLES, type Role } from "@shared/schemas/auth.ts";
+import {
+  CASE_DIFFICULTIES,
+  CASE_STATUSES,
+  type AttemptAnswers,
+  type AttemptScore,
+  type CaseDifficulty,
+  type CaseExpected,
+  type CaseStatus,
+  type CaseStory,
+  type SafetyNote,
+  type WorkedStep,
+} from "@shared/schemas/casebook.ts";
+import {
+  APPLICATIONS,
+  CHARGE_STATES,
+  type Application,
+  type ChargeState,
+  type DiagnosisInput,
+} from "@shared/schemas/diagnosis.ts";
 import { CHARGE_REFERENCE_SOURCES, type ChargeReferenceSource } from "@shared/schemas/charge-references.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
-import type { CylinderKind, MovementKind } from "@shared/schemas/register.ts";
-import { VISIT_EVENT_ACTIONS, type VisitEventAction, type VisitStatus, type VoidableKind } from "@shared/schemas/visits.ts";
+import { CYLINDER_KINDS, MOVEMENT_KINDS, type CylinderKind, type MovementKind } from "@shared/schemas/register.ts";
+import type {
+  ElectricalCheckInput,
+  ElectricalCheckResult,
+  EvacuationResult,
+  LeakSearchInput,
+  PressureTestRecordInput,
+  PressureTestRecordResult,
+  StandingPressureRecordInput,
+} from "@shared/schemas/procedure-records.ts";
+import type { StandingPressureResult, Verdict } from "@shared/schemas/procedures.ts";
+import {
+  VISIT_EVENT_ACTIONS,
+  VISIT_STATUSES,
+  VOIDABLE_KINDS,
+  type VisitEventAction,
+  type VisitStatus,
+  type VoidableKind,
+} from "@shared/schemas/visits.ts";
 import {
   boolean,
   check,
@@ -33,6 +67,17 @@ import { storedResult } from "./stored-result.ts";
 const createdAt = timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow();
 const updatedAt = timestamp("updated_at", { withTimezone: true, mode: "date" }).notNull().defaultNow();
 const timestamps = { createdAt, updatedAt };
+
+/** A closed set's values as an SQL list: constants of the app, written as literals so a migration holds them. */
+const valueList = (values: readonly string[]) =>
+  sql.raw(`(${values.map((value) => `'${value.replaceAll("'", "''")}'`).join(", ")})`);
+/**
+ * A text column that holds one of a closed set (a role, a status, a kind). The set is the zod
+ * schema's own list, so the database refuses what the API would: a value written by hand, by a
+ * script or by an older server cannot reach the screens that switch on it.
+ */
+const oneOf = (name: string, column: AnyPgColumn, values: readonly string[]) =>
+  check(name, sql`${column} in ${valueList(values)}`);
 
 /**
  * A visit record is corrected by voiding it with a reason, never by deleting or editing it:
@@ -59,7 +104,9 @@ const clientId = () => ({ clientId: uuid("client_id") });
  * (server/db/store-once.ts); partial, so entries without a client id cost the index nothing.
  */
 const clientIdUnique = (table: string, columns: { visitId: AnyPgColumn; clientId: AnyPgColumn }) =>
-  uniqueIndex(`${table}_client_id_unique`).on(columns.visitId, columns.clientId).where(sql`${columns.clientId} is not null`);
+  uniqueIndex(`${table}_client_id_unique`)
+    .on(columns.visitId, columns.clientId)
+    .where(sql`${columns.clientId} is not null`);
 
 /**
  * Optimistic concurrency for records people edit: every change bumps the version, and a write
@@ -107,6 +154,7 @@ export const users = pgTable(
   (table) => [
     uniqueIndex("users_email_unique").on(sql`lower(${table.email})`),
     index("users_organisation_idx").on(table.organisationId),
+    oneOf("users_role_known", table.role, ROLES),
   ],
 );
 
@@ -142,6 +190,7 @@ export const invitations = pgTable(
   (table) => [
     uniqueIndex("invitations_token_hash_unique").on(table.tokenHash),
     index("invitations_organisation_idx").on(table.organisationId),
+    oneOf("invitations_role_known", table.role, ROLES),
   ],
 );
 
@@ -277,15 +326,22 @@ export const equipment = pgTable(
     index("equipment_site_idx").on(table.siteId),
     // The list's sorts, each read in index order from a page's cursor (server/db/equipment.ts);
     // the factory-charge sort's index is on a function, so it is written in the migration.
-    index("equipment_organisation_name_idx").on(table.organisationId, sql`lower(${table.name})`, table.id).where(sql`NOT ${table.archived}`),
-    index("equipment_organisation_kind_idx").on(table.organisationId, table.kind, sql`lower(${table.name})`, table.id).where(sql`NOT ${table.archived}`),
-    index("equipment_organisation_refrigerant_idx").on(table.organisationId, table.refrigerant, sql`lower(${table.name})`, table.id).where(sql`NOT ${table.archived}`),
+    index("equipment_organisation_name_idx")
+      .on(table.organisationId, sql`lower(${table.name})`, table.id)
+      .where(sql`NOT ${table.archived}`),
+    index("equipment_organisation_kind_idx")
+      .on(table.organisationId, table.kind, sql`lower(${table.name})`, table.id)
+      .where(sql`NOT ${table.archived}`),
+    index("equipment_organisation_refrigerant_idx")
+      .on(table.organisationId, table.refrigerant, sql`lower(${table.name})`, table.id)
+      .where(sql`NOT ${table.archived}`),
     index("equipment_organisation_circuits_idx")
       .on(table.organisationId, sql`jsonb_array_length(${table.circuits})`, sql`lower(${table.name})`, table.id)
       .where(sql`NOT ${table.archived}`),
     index("equipment_organisation_place_idx")
       .on(table.organisationId, table.siteSortName, table.customerSortName, sql`lower(${table.name})`, table.id)
       .where(sql`NOT ${table.archived}`),
+    oneOf("equipment_application_known", table.application, APPLICATIONS),
   ],
 );
 
@@ -332,6 +388,7 @@ export const visits = pgTable(
     index("visits_organisation_started_idx").on(table.organisationId, table.startedAt),
     // Today's lists (one status, newest first) read a page of that status, not every visit since.
     index("visits_organisation_status_started_idx").on(table.organisationId, table.status, table.startedAt),
+    oneOf("visits_status_known", table.status, VISIT_STATUSES),
   ],
 );
 
@@ -346,7 +403,10 @@ export const visitTechnicians = pgTable(
       .references(() => users.id, { onDelete: "cascade" }),
   },
   // By person too: a search word naming someone finds their visits (server/db/visits.ts).
-  (table) => [primaryKey({ columns: [table.visitId, table.userId] }), index("visit_technicians_user_idx").on(table.userId, table.visitId)],
+  (table) => [
+    primaryKey({ columns: [table.visitId, table.userId] }),
+    index("visit_technicians_user_idx").on(table.userId, table.visitId),
+  ],
 );
 
 /**
@@ -405,7 +465,8 @@ export const visitSearch = pgTable(
  * (SI-metric, gauge pressures); `result` is what the server's diagnosis engine made of it.
  */
 /** A number of the stored result (or input) as a column, null where the field is null or missing. */
-const figureOf = (column: "result" | "input", field: string) => sql.raw(`(("${column}"->>'${field}')::double precision)`);
+const figureOf = (column: "result" | "input", field: string) =>
+  sql.raw(`(("${column}"->>'${field}')::double precision)`);
 
 /** See `readings`: generated from `result` and `input`, never written by the application. */
 function readingFigureColumns() {
@@ -465,7 +526,9 @@ export const readings = pgTable(
     index("readings_visit_idx").on(table.visitId, table.circuit, table.takenAt),
     // A delta (what changed since a revision) reads only the changed rows of a long visit.
     index("readings_visit_revision_idx").on(table.visitId, table.revision),
-    index("readings_pending_import_idx").on(table.pendingImportId).where(sql`${table.pendingImportId} is not null`),
+    index("readings_pending_import_idx")
+      .on(table.pendingImportId)
+      .where(sql`${table.pendingImportId} is not null`),
     voidComplete("readings", table),
     clientIdUnique("readings", table),
   ],
@@ -505,7 +568,9 @@ export const adjustments = pgTable(
     index("adjustments_visit_idx").on(table.visitId, table.at),
     voidComplete("adjustments", table),
     // One movement has one run-log entry, so a kilogram can never be shown twice.
-    uniqueIndex("adjustments_movement_unique").on(table.movementId).where(sql`${table.movementId} is not null`),
+    uniqueIndex("adjustments_movement_unique")
+      .on(table.movementId)
+      .where(sql`${table.movementId} is not null`),
     clientIdUnique("adjustments", table),
   ],
 );
@@ -528,7 +593,10 @@ export const visitComments = pgTable(
     ...clientId(),
     createdAt,
   },
-  (table) => [index("visit_comments_visit_idx").on(table.visitId, table.createdAt), clientIdUnique("visit_comments", table)],
+  (table) => [
+    index("visit_comments_visit_idx").on(table.visitId, table.createdAt),
+    clientIdUnique("visit_comments", table),
+  ],
 );
 
 /** Photos are stored as files under the data folder with random names; this is their index. */
@@ -579,16 +647,20 @@ export const electricalChecks = pgTable(
     /** compressor, fan or supply. */
     target: text("target").notNull(),
     /** Phase voltages, insulation readings with their test voltage, winding resistances, running currents. */
-    input: jsonb("input").$type<Record<string, unknown>>().notNull(),
+    input: jsonb("input").$type<ElectricalCheckInput>().notNull(),
     /** The verdicts per check and overall, as the engine judged them. */
-    result: jsonb("result").$type<Record<string, unknown>>().notNull(),
+    result: jsonb("result").$type<ElectricalCheckResult>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [index("electrical_checks_visit_idx").on(table.visitId, table.takenAt), voidComplete("electrical_checks", table), clientIdUnique("electrical_checks", table)],
+  (table) => [
+    index("electrical_checks_visit_idx").on(table.visitId, table.takenAt),
+    voidComplete("electrical_checks", table),
+    clientIdUnique("electrical_checks", table),
+  ],
 );
 
 /** One leak search: the method, the places checked, leaks found and repaired, the recheck. */
@@ -603,15 +675,19 @@ export const leakSearches = pgTable(
       .notNull()
       .references(() => visits.id, { onDelete: "cascade" }),
     method: text("method").notNull(),
-    input: jsonb("input").$type<Record<string, unknown>>().notNull(),
-    result: jsonb("result").$type<Record<string, unknown>>().notNull(),
+    input: jsonb("input").$type<LeakSearchInput>().notNull(),
+    result: jsonb("result").$type<Verdict>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [index("leak_searches_visit_idx").on(table.visitId, table.takenAt), voidComplete("leak_searches", table), clientIdUnique("leak_searches", table)],
+  (table) => [
+    index("leak_searches_visit_idx").on(table.visitId, table.takenAt),
+    voidComplete("leak_searches", table),
+    clientIdUnique("leak_searches", table),
+  ],
 );
 
 /**
@@ -631,15 +707,19 @@ export const standingPressureChecks = pgTable(
       .references(() => visits.id, { onDelete: "cascade" }),
     /** The circuit read, or null for a single-circuit unit or a check not tied to one. */
     circuit: integer("circuit"),
-    input: jsonb("input").$type<Record<string, unknown>>().notNull(),
-    result: jsonb("result").$type<Record<string, unknown>>().notNull(),
+    input: jsonb("input").$type<StandingPressureRecordInput>().notNull(),
+    result: jsonb("result").$type<StandingPressureResult>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [index("standing_pressure_checks_visit_idx").on(table.visitId, table.takenAt), voidComplete("standing_pressure_checks", table), clientIdUnique("standing_pressure_checks", table)],
+  (table) => [
+    index("standing_pressure_checks_visit_idx").on(table.visitId, table.takenAt),
+    voidComplete("standing_pressure_checks", table),
+    clientIdUnique("standing_pressure_checks", table),
+  ],
 );
 
 /** A nitrogen strength/tightness test: test pressure against the rated pressure, start and end of the hold. */
@@ -653,15 +733,19 @@ export const pressureTests = pgTable(
     visitId: uuid("visit_id")
       .notNull()
       .references(() => visits.id, { onDelete: "cascade" }),
-    input: jsonb("input").$type<Record<string, unknown>>().notNull(),
-    result: jsonb("result").$type<Record<string, unknown>>().notNull(),
+    input: jsonb("input").$type<PressureTestRecordInput>().notNull(),
+    result: jsonb("result").$type<PressureTestRecordResult>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [index("pressure_tests_visit_idx").on(table.visitId, table.takenAt), voidComplete("pressure_tests", table), clientIdUnique("pressure_tests", table)],
+  (table) => [
+    index("pressure_tests_visit_idx").on(table.visitId, table.takenAt),
+    voidComplete("pressure_tests", table),
+    clientIdUnique("pressure_tests", table),
+  ],
 );
 
 /**
@@ -684,7 +768,7 @@ export const evacuations = pgTable(
     /** A sample added from a device keeps its client id, so a repeated send adds it once (README decision 026). */
     samples: jsonb("samples").$type<{ minutes: number; microns: number; clientId?: string }[]>().notNull().default([]),
     note: text("note"),
-    result: jsonb("result").$type<Record<string, unknown>>().notNull(),
+    result: jsonb("result").$type<EvacuationResult>().notNull(),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
     startedAt: timestamp("started_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     /** Valving off, the target and the note can change (PATCH with If-Match). */
@@ -693,7 +777,11 @@ export const evacuations = pgTable(
     ...voidColumns(),
     ...timestamps,
   },
-  (table) => [index("evacuations_visit_idx").on(table.visitId, table.startedAt), voidComplete("evacuations", table), clientIdUnique("evacuations", table)],
+  (table) => [
+    index("evacuations_visit_idx").on(table.visitId, table.startedAt),
+    voidComplete("evacuations", table),
+    clientIdUnique("evacuations", table),
+  ],
 );
 
 /**
@@ -723,7 +811,11 @@ export const casebookCases = pgTable(
     version: version(),
     ...timestamps,
   },
-  (table) => [index("casebook_cases_organisation_idx").on(table.organisationId, table.status)],
+  (table) => [
+    index("casebook_cases_organisation_idx").on(table.organisationId, table.status),
+    oneOf("casebook_cases_difficulty_known", table.difficulty, CASE_DIFFICULTIES),
+    oneOf("casebook_cases_status_known", table.status, CASE_STATUSES),
+  ],
 );
 
 /**
@@ -759,6 +851,7 @@ export const casebookAttempts = pgTable(
   (table) => [
     index("casebook_attempts_user_idx").on(table.organisationId, table.userId, table.createdAt),
     index("casebook_attempts_case_idx").on(table.organisationId, table.caseId),
+    oneOf("casebook_attempts_expected_state_known", table.expectedState, CHARGE_STATES),
   ],
 );
 
@@ -788,6 +881,7 @@ export const cylinders = pgTable(
   (table) => [
     index("cylinders_organisation_idx").on(table.organisationId),
     uniqueIndex("cylinders_label_unique").on(table.organisationId, sql`lower(${table.label})`),
+    oneOf("cylinders_kind_known", table.kind, CYLINDER_KINDS),
   ],
 );
 
@@ -828,11 +922,14 @@ export const refrigerantMovements = pgTable(
     index("refrigerant_movements_cylinder_idx").on(table.cylinderId),
     // The register's pages in their order (server/db/register.ts), over the standing lines only,
     // for everyone's lines and for one technician's.
-    index("refrigerant_movements_register_idx").on(table.organisationId, table.at, table.createdAt, table.id).where(sql`${table.voidedAt} is null`),
+    index("refrigerant_movements_register_idx")
+      .on(table.organisationId, table.at, table.createdAt, table.id)
+      .where(sql`${table.voidedAt} is null`),
     index("refrigerant_movements_technician_register_idx")
       .on(table.organisationId, table.technicianId, table.at, table.createdAt, table.id)
       .where(sql`${table.voidedAt} is null`),
     clientIdUnique("refrigerant_movements", table),
+    oneOf("refrigerant_movements_kind_known", table.kind, MOVEMENT_KINDS),
   ],
 );
 
@@ -858,7 +955,9 @@ export const circuitCharges = pgTable(
   },
   (table) => [
     // One standing declaration per circuit; voided ones stay beside it as history.
-    uniqueIndex("circuit_charges_visit_circuit_unique").on(table.visitId, table.circuit).where(sql`${table.voidedAt} is null`),
+    uniqueIndex("circuit_charges_visit_circuit_unique")
+      .on(table.visitId, table.circuit)
+      .where(sql`${table.voidedAt} is null`),
     voidComplete("circuit_charges", table),
   ],
 );
@@ -897,10 +996,12 @@ export const chargeReferences = pgTable(
   },
   (table) => [
     // One standing reference per circuit; cleared ones stay beside it as history.
-    uniqueIndex("charge_references_circuit_unique").on(table.equipmentId, table.circuit).where(sql`${table.voidedAt} is null`),
+    uniqueIndex("charge_references_circuit_unique")
+      .on(table.equipmentId, table.circuit)
+      .where(sql`${table.voidedAt} is null`),
     index("charge_references_equipment_idx").on(table.equipmentId, table.circuit, table.setAt),
     voidComplete("charge_references", table),
-    check("charge_references_source_known", sql.raw(`source in (${CHARGE_REFERENCE_SOURCES.map((source) => `'${source}'`).join(", ")})`)),
+    oneOf("charge_references_source_known", table.source, CHARGE_REFERENCE_SOURCES),
   ],
 );
 
@@ -932,6 +1033,10 @@ export const visitEvents = pgTable(
   },
   (table) => [
     index("visit_events_visit_idx").on(table.visitId, table.at),
-    check("visit_events_action_known", sql.raw(`action in (${VISIT_EVENT_ACTIONS.map((action) => `'${action}'`).join(", ")})`)),
+    oneOf("visit_events_action_known", table.action, VISIT_EVENT_ACTIONS),
+    check(
+      "visit_events_record_kind_known",
+      sql`${table.recordKind} is null or ${table.recordKind} in ${valueList(VOIDABLE_KINDS)}`,
+    ),
   ],
 );
