@@ -113,12 +113,11 @@ export function createApp(deps: AppDeps): Express {
   api.use("/customers", customersRouter(deps));
   api.use("/sites", sitesRouter(deps));
   api.use("/equipment", equipmentRouter(deps));
-  api.use("/visits", visitsRouter(accountDeps));
+  // One mount for a visit's routes: its readings, entries and review (server/routes/visits.ts),
+  // its procedure records (procedures.ts) and its refrigerant (register.ts).
+  api.use("/visits", visitsRouter(accountDeps), proceduresRouter(deps), visitRefrigerantRouter(deps));
   api.use("/photos", photosRouter(deps));
-  // A visit's procedure records (server/routes/procedures.ts) sit beside its readings.
-  api.use("/visits", proceduresRouter(deps));
-  // The refrigerant register (server/routes/register.ts): its visit and equipment routes sit beside theirs.
-  api.use("/visits", visitRefrigerantRouter(deps));
+  // The refrigerant register (server/routes/register.ts): its equipment route sits beside the unit's.
   api.use("/equipment", equipmentRefrigerantRouter(deps));
   // Each circuit's charge reference point (server/routes/charge-references.ts) sits beside the unit.
   api.use("/equipment", chargeReferencesRouter(deps));

@@ -11,13 +11,16 @@
 import { parse } from "csv-parse/sync";
 import { z } from "zod";
 import { diagnose } from "@shared/engine/index.ts";
-import { isStorableInstant } from "@shared/schemas/dates.ts";
+import { instant, isStorableInstant } from "@shared/schemas/dates.ts";
+import { text } from "@shared/schemas/text.ts";
 import { MEASURED_FIELDS, type NumericMeasuredField } from "@shared/schemas/visits.ts";
 import { packResult } from "../db/stored-result.ts";
 import { readingInput, type ReadingContext } from "../visits/reading-input.ts";
 
 /** Reading fields a column can be mapped to, besides the time column: every measured number. */
-export const IMPORTABLE_FIELDS = MEASURED_FIELDS.filter((field): field is NumericMeasuredField => field !== "liquidTempLocation");
+export const IMPORTABLE_FIELDS = MEASURED_FIELDS.filter(
+  (field): field is NumericMeasuredField => field !== "liquidTempLocation",
+);
 export type ImportableField = NumericMeasuredField;
 export const MAX_IMPORT_ROWS = 5000;
 /** A logger's export has a time column and a dozen readings; 64 columns leaves room for any. */
@@ -28,7 +31,10 @@ export const MAX_IMPORT_LINE_CHARS = 4096;
 export const IMPORT_SLICE_ROWS = 50;
 
 // The labels the client shows for these targets live in shared/schemas/readings-import.ts.
-export const ColumnMappingSchema = z.record(z.string(), z.union([z.enum(IMPORTABLE_FIELDS), z.literal("takenAt"), z.literal("ignore")]));
+export const ColumnMappingSchema = z.record(
+  z.string(),
+  z.union([z.enum(IMPORTABLE_FIELDS), z.literal("takenAt"), z.literal("ignore")]),
+);
 export type ColumnMapping = z.infer<typeof ColumnMappingSchema>;
 
 /** Header words that identify a column without the user mapping it by hand. */
@@ -134,16 +140,28 @@ function overlongLine(text: string): ImportRefusal | null {
   return null;
 }
 
-const readError = (error: unknown): ImportRefusal => ({ refused: { status: 400, message: `This is not a readable CSV file: ${(error as Error).message}` } });
+const readError = (error: unknown): ImportRefusal => ({
+  refused: { status: 400, message: `This is not a readable CSV file: ${(error as Error).message}` },
+});
 
 export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRefusal {
   const tooLong = overlongLine(task.text);
   if (tooLong) return tooLong;
   let records: string[][];
   try {
-    const [header = []] = parse(task.text, { to_line: 1, bom: true, trim: true, relax_column_count: true }) as string[][];
+    const [header = []] = parse(task.text, {
+      to_line: 1,
+      bom: true,
+      trim: true,
+      relax_column_count: true,
+    }) as string[][];
     if (header.length > MAX_IMPORT_COLUMNS) {
-      return { refused: { status: 400, message: `The header has ${thousands(header.length)} columns; Satura reads at most ${MAX_IMPORT_COLUMNS}.` } };
+      return {
+        refused: {
+          status: 400,
+          message: `The header has ${thousands(header.length)} columns; Satura reads at most ${MAX_IMPORT_COLUMNS}.`,
+        },
+      };
     }
     records = parse(task.text, { skip_empty_lines: true, trim: true, relax_column_count: true, bom: true });
   } catch (error) {
@@ -164,7 +182,8 @@ export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRef
   const timeColumn = headers.findIndex((header) => mapping[header] === "takenAt");
   if (headers.length === 0) problems.push({ line: 1, message: "The file is empty" });
   if (timeColumn < 0 && headers.length > 0) problems.push({ line: 1, message: "Map one column to the reading time" });
-  if (rows.length > MAX_IMPORT_ROWS) problems.push({ line: MAX_IMPORT_ROWS + 2, message: `At most ${MAX_IMPORT_ROWS} rows per import` });
+  if (rows.length > MAX_IMPORT_ROWS)
+    problems.push({ line: MAX_IMPORT_ROWS + 2, message: `At most ${MAX_IMPORT_ROWS} rows per import` });
   if (problems.length > 0) return summary();
 
   const dayStart = new Date(task.dayStart);
@@ -172,8 +191,18 @@ export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRef
   rows.forEach((row, index) => {
     const line = index + 2;
     const takenAt = parseTime(row[timeColumn] ?? "", dayStart);
-    if (!takenAt) return problems.push({ line, field: "takenAt", message: `“${row[timeColumn] ?? ""}” is not a time (use 2026-03-14T10:05 or 10:05)` });
-    if (takenAt.getTime() <= previousTime) return problems.push({ line, field: "takenAt", message: "Rows must be in time order, each later than the one before" });
+    if (!takenAt)
+      return problems.push({
+        line,
+        field: "takenAt",
+        message: `“${row[timeColumn] ?? ""}” is not a time (use 2026-03-14T10:05 or 10:05)`,
+      });
+    if (takenAt.getTime() <= previousTime)
+      return problems.push({
+        line,
+        field: "takenAt",
+        message: "Rows must be in time order, each later than the one before",
+      });
     previousTime = takenAt.getTime();
 
     const values: Partial<Record<ImportableField, number>> = {};
@@ -183,7 +212,8 @@ export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRef
       const cell = (row[column] ?? "").replace(",", ".");
       if (cell === "") continue;
       const number = Number(cell);
-      if (!Number.isFinite(number)) return problems.push({ line, field, message: `${header}: “${row[column]}” is not a number` });
+      if (!Number.isFinite(number))
+        return problems.push({ line, field, message: `${header}: “${row[column]}” is not a number` });
       values[field] = number;
     }
     const parsed = readingInput(values, task.context);
@@ -193,7 +223,11 @@ export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRef
     }
     const result = diagnose(parsed.data, { withMeasuredCycle: true });
     // Packed here, in the worker, as every stored result is (server/db/stored-result.ts): a preview stores nothing.
-    valid.push({ takenAt: takenAt.toISOString(), input: parsed.data, result: task.keepRows ? packResult(result) : result });
+    valid.push({
+      takenAt: takenAt.toISOString(),
+      input: parsed.data,
+      result: task.keepRows ? packResult(result) : result,
+    });
   });
   return summary();
 }
@@ -201,7 +235,8 @@ export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRef
 function slicesOf(rows: readonly unknown[]): Uint8Array[] {
   const encoder = new TextEncoder();
   const encoded: Uint8Array[] = [];
-  for (let start = 0; start < rows.length; start += IMPORT_SLICE_ROWS) encoded.push(encoder.encode(JSON.stringify(rows.slice(start, start + IMPORT_SLICE_ROWS))));
+  for (let start = 0; start < rows.length; start += IMPORT_SLICE_ROWS)
+    encoded.push(encoder.encode(JSON.stringify(rows.slice(start, start + IMPORT_SLICE_ROWS))));
   // One buffer for all slices, so the worker can transfer it in one move.
   const buffer = new Uint8Array(encoded.reduce((total, slice) => total + slice.length, 0));
   let offset = 0;
@@ -211,3 +246,21 @@ function slicesOf(rows: readonly unknown[]): Uint8Array[] {
     return buffer.subarray(offset - slice.length, offset);
   });
 }
+
+/** The form fields sent with a CSV file: the circuit, the logging day's start, preview or store, and the column mapping (JSON). */
+export const ImportFieldsSchema = z.object({
+  circuit: z.coerce.number().int().min(1),
+  dayStart: instant("dayStart must be an ISO date-time"),
+  mode: z.enum(["preview", "all", "valid-only"]).default("preview"),
+  mapping: text({ multiline: true })
+    .optional()
+    .transform((json, context) => {
+      if (!json) return undefined;
+      try {
+        return ColumnMappingSchema.parse(JSON.parse(json));
+      } catch {
+        context.addIssue({ code: "custom", message: "The column mapping is not valid" });
+        return z.NEVER;
+      }
+    }),
+});

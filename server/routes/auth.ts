@@ -32,12 +32,15 @@ export function authRouter({ db, env, logger, auth, mailer, limiters }: AccountR
     const input = SignUpSchema.parse(req.body);
     // Sign-up must say when an address is taken; it is throttled per IP like sign-in.
     const taken = () =>
-      new HttpError(409, "Some fields need attention", { email: "This e-mail address already has an account. Sign in, or reset the password." });
+      new HttpError(409, "Some fields need attention", {
+        email: "This e-mail address already has an account. Sign in, or reset the password.",
+      });
     if (await emailInUse(db, input.email)) throw taken();
     // Two sign-ups for one address at once both pass the check above; the unique index stops the second.
-    const user = await createOrganisationWithOwner(db, { ...input, passwordHash: await hashPassword(input.password) }).catch((error: unknown) =>
-      Promise.reject(uniqueViolation(error) ? taken() : error),
-    );
+    const user = await createOrganisationWithOwner(db, {
+      ...input,
+      passwordHash: await hashPassword(input.password),
+    }).catch((error: unknown) => Promise.reject(uniqueViolation(error) ? taken() : error));
     await startSession(auth, res, user.id);
     res.status(201).json({ user: toAuthUser(user) } satisfies MeResponse);
   });
@@ -46,7 +49,11 @@ export function authRouter({ db, env, logger, auth, mailer, limiters }: AccountR
     const parsed = SignInSchema.safeParse(req.body);
     // A malformed address gets the same answer as a wrong one; only missing fields are 400.
     if (!parsed.success) {
-      if (typeof req.body?.email === "string" && typeof req.body?.password === "string" && req.body.password.length > 0) {
+      if (
+        typeof req.body?.email === "string" &&
+        typeof req.body?.password === "string" &&
+        req.body.password.length > 0
+      ) {
         throw new HttpError(401, SIGN_IN_FAILED);
       }
       throw parsed.error;
@@ -54,7 +61,9 @@ export function authRouter({ db, env, logger, auth, mailer, limiters }: AccountR
     const { email, password } = parsed.data;
     const user = await findUserByEmail(db, email);
     const passwordOk =
-      user && !user.deactivatedAt ? await verifyPassword(user.passwordHash, password) : await verifyDummyPassword(password);
+      user && !user.deactivatedAt
+        ? await verifyPassword(user.passwordHash, password)
+        : await verifyDummyPassword(password);
     if (!user || user.deactivatedAt || !passwordOk) throw new HttpError(401, SIGN_IN_FAILED);
     await startSession(auth, res, user.id);
     res.status(200).json({ user: toAuthUser(user) } satisfies MeResponse);
@@ -86,7 +95,13 @@ export function authRouter({ db, env, logger, auth, mailer, limiters }: AccountR
       });
       const link = tokenLink(env.APP_URL, "/reset-password", token);
       await mailer.send(
-        passwordResetMail({ to: user.email, name: user.name, link, validMinutes: PASSWORD_RESET_VALID_MINUTES, organisationId: user.organisationId }),
+        passwordResetMail({
+          to: user.email,
+          name: user.name,
+          link,
+          validMinutes: PASSWORD_RESET_VALID_MINUTES,
+          organisationId: user.organisationId,
+        }),
       );
     } catch (error) {
       logger.error({ err: error }, "password reset mail failed");
@@ -95,7 +110,10 @@ export function authRouter({ db, env, logger, auth, mailer, limiters }: AccountR
 
   router.post("/password-reset/confirm", ...limiters.resetConfirm, async (req, res) => {
     const { token, password } = PasswordResetConfirmSchema.parse(req.body);
-    const done = await consumePasswordReset(db, { tokenHash: hashToken(token), passwordHash: await hashPassword(password) });
+    const done = await consumePasswordReset(db, {
+      tokenHash: hashToken(token),
+      passwordHash: await hashPassword(password),
+    });
     if (!done) {
       throw new HttpError(400, "This reset link is not valid any more. Ask for a new one.", {
         token: "This reset link has expired or was already used",

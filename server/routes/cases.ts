@@ -163,7 +163,9 @@ export function casesRouter({ db }: Deps): Router {
     refuseSharedCase(id);
     const { organisationId } = getAuth(res);
     const draft = CaseDraftSchema.parse(req.body);
-    requireDone(await updateCase(db, organisationId, parseId(id, "Case"), withEngineAnswers(draft), requireIfMatch(req)));
+    requireDone(
+      await updateCase(db, organisationId, parseId(id, "Case"), withEngineAnswers(draft), requireIfMatch(req)),
+    );
     await send(res, organisationId, id);
   });
 

@@ -5,14 +5,23 @@
  * history stays: a replaced or cleared reference keeps its row with who, when and why.
  */
 import { Router } from "express";
-import { ChargeReferenceClearSchema, ChargeReferenceSetSchema, type ChargeReferencesResponse } from "@shared/schemas/charge-references.ts";
+import {
+  ChargeReferenceClearSchema,
+  ChargeReferenceSetSchema,
+  type ChargeReferencesResponse,
+} from "@shared/schemas/charge-references.ts";
 import { ChargeReferenceSchema, type ChargeReference } from "@shared/schemas/diagnosis.ts";
 import { getAuth } from "../auth/session.ts";
-import { clearChargeReference, findUnitReading, listChargeReferences, setChargeReference } from "../db/charge-references.ts";
-import { getEquipment, type EquipmentRow } from "../db/equipment.ts";
+import {
+  clearChargeReference,
+  findUnitReading,
+  listChargeReferences,
+  setChargeReference,
+} from "../db/charge-references.ts";
+import type { EquipmentRow } from "../db/equipment.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
-import { parseId } from "../http/parse-id.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
+import { loadUnit } from "../visits/load-records.ts";
 
 type Deps = Pick<AccountRouteDeps, "db">;
 
@@ -34,7 +43,10 @@ function referenceFromReading(reading: NonNullable<Awaited<ReturnType<typeof fin
     result.evaporatingTempC === null && "evaporating temperature",
     result.condensingTempC === null && "condensing temperature",
   ].filter(Boolean);
-  if (missing.length > 0) throw new HttpError(400, FIELDS, { readingId: `That reading has no valid ${missing.join(", ")}: choose a settled reading with suction and liquid measured` });
+  if (missing.length > 0)
+    throw new HttpError(400, FIELDS, {
+      readingId: `That reading has no valid ${missing.join(", ")}: choose a settled reading with suction and liquid measured`,
+    });
   const parsed = ChargeReferenceSchema.safeParse({
     subcoolingK: result.subcoolingK,
     superheatK: result.superheatK,
@@ -43,18 +55,15 @@ function referenceFromReading(reading: NonNullable<Awaited<ReturnType<typeof fin
     outdoorAirDryBulbC: input.outdoorAirDryBulbC ?? null,
     returnAirDryBulbC: input.returnAirDryBulbC ?? null,
   });
-  if (!parsed.success) throw new HttpError(400, FIELDS, { readingId: `That reading cannot be a reference point: ${parsed.error.issues[0]?.message ?? "its values are out of range"}` });
+  if (!parsed.success)
+    throw new HttpError(400, FIELDS, {
+      readingId: `That reading cannot be a reference point: ${parsed.error.issues[0]?.message ?? "its values are out of range"}`,
+    });
   return parsed.data;
 }
 
 export function chargeReferencesRouter({ db }: Deps): Router {
   const router = Router();
-
-  async function loadUnit(organisationId: string, rawId: unknown) {
-    const unit = await getEquipment(db, organisationId, parseId(rawId, "Equipment"));
-    if (!unit) throw notFound("Equipment");
-    return unit;
-  }
 
   async function respond(organisationId: string, unit: NonNullable<EquipmentRow>): Promise<ChargeReferencesResponse> {
     return { circuits: await listChargeReferences(db, organisationId, unit.id, unit.circuits) };
@@ -62,13 +71,13 @@ export function chargeReferencesRouter({ db }: Deps): Router {
 
   router.get("/:id/charge-references", async (req, res) => {
     const { organisationId } = getAuth(res);
-    const unit = await loadUnit(organisationId, req.params.id);
+    const unit = await loadUnit(db, organisationId, req.params.id);
     res.json(await respond(organisationId, unit));
   });
 
   router.put("/:id/charge-references/:circuit", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const unit = await loadUnit(organisationId, req.params.id);
+    const unit = await loadUnit(db, organisationId, req.params.id);
     const circuit = circuitOf(unit, req.params.circuit);
     const body = ChargeReferenceSetSchema.parse(req.body);
     let values: ChargeReference;
@@ -77,7 +86,10 @@ export function chargeReferencesRouter({ db }: Deps): Router {
     if ("readingId" in body) {
       const reading = await findUnitReading(db, organisationId, unit.id, body.readingId);
       if (!reading) throw new HttpError(400, FIELDS, { readingId: `Choose a standing reading of ${unit.name}` });
-      if (reading.circuit !== circuit) throw new HttpError(400, FIELDS, { readingId: `That reading is of circuit ${reading.circuit}, not circuit ${circuit}` });
+      if (reading.circuit !== circuit)
+        throw new HttpError(400, FIELDS, {
+          readingId: `That reading is of circuit ${reading.circuit}, not circuit ${circuit}`,
+        });
       values = referenceFromReading(reading);
       visitId = reading.visitId;
       readingId = reading.id;
@@ -102,10 +114,15 @@ export function chargeReferencesRouter({ db }: Deps): Router {
 
   router.delete("/:id/charge-references/:circuit", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const unit = await loadUnit(organisationId, req.params.id);
+    const unit = await loadUnit(db, organisationId, req.params.id);
     const circuit = circuitOf(unit, req.params.circuit);
     const { reason } = ChargeReferenceClearSchema.parse(req.body ?? {});
-    const cleared = await clearChargeReference(db, organisationId, { equipmentId: unit.id, circuit, reason, clearedBy: user.id });
+    const cleared = await clearChargeReference(db, organisationId, {
+      equipmentId: unit.id,
+      circuit,
+      reason,
+      clearedBy: user.id,
+    });
     if (!cleared) throw new HttpError(404, `Circuit ${circuit} has no reference point to clear`);
     res.json(await respond(organisationId, unit));
   });

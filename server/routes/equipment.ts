@@ -80,7 +80,10 @@ export function equipmentRouter({ db }: Deps): Router {
     if (!row) throw notFound("Equipment");
     // The last settled state of each circuit, judged by the same trend rule as the run log, from
     // the tail of the latest visit only (server/equipment/last-settled-states.ts).
-    const [visits, lastSettled] = await Promise.all([listVisits(db, organisationId, { equipmentId: id }), lastSettledStates(db, organisationId, id, row.circuits)]);
+    const [visits, lastSettled] = await Promise.all([
+      listVisits(db, organisationId, { equipmentId: id }),
+      lastSettledStates(db, organisationId, id, row.circuits),
+    ]);
     res.json({ equipment: toEquipment(row), visits, lastSettled } satisfies EquipmentDetail);
   });
 

@@ -12,7 +12,9 @@ export function healthRouter(db: Database): Router {
     } catch {
       dbStatus = "error";
     }
-    res.status(dbStatus === "ok" ? 200 : 503).json({ status: dbStatus === "ok" ? "ok" : "degraded", db: dbStatus, version: appVersion });
+    res
+      .status(dbStatus === "ok" ? 200 : 503)
+      .json({ status: dbStatus === "ok" ? "ok" : "degraded", db: dbStatus, version: appVersion });
   });
   return router;
 }

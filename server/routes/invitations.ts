@@ -13,7 +13,13 @@ import { getAuth, startSession } from "../auth/session.ts";
 import { createToken, hashToken, tokenLink } from "../auth/tokens.ts";
 import { emailInUse, findUserByEmail, toAuthUser } from "../db/accounts.ts";
 import { uniqueViolation } from "../db/errors.ts";
-import { acceptInvitation, createInvitation, findUsableInvitation, listPendingInvitations, revokeInvitation } from "../db/invitations.ts";
+import {
+  acceptInvitation,
+  createInvitation,
+  findUsableInvitation,
+  listPendingInvitations,
+  revokeInvitation,
+} from "../db/invitations.ts";
 import { getProfile } from "../db/accounts.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { invitationMail } from "../mail/messages.ts";
@@ -53,7 +59,14 @@ export function invitationsRouter({ db, env, auth, mailer, limiters }: AccountRo
     });
     const link = tokenLink(env.APP_URL, "/accept-invitation", token);
     await mailer.send(
-      invitationMail({ to: email, organisationName: profile?.organisationName ?? "your company", invitedByName: user.name, role, link, organisationId }),
+      invitationMail({
+        to: email,
+        organisationName: profile?.organisationName ?? "your company",
+        invitedByName: user.name,
+        role,
+        link,
+        organisationId,
+      }),
     );
     res.status(201).json({ invitation } satisfies InvitationResponse);
   });
@@ -70,7 +83,11 @@ export function invitationsRouter({ db, env, auth, mailer, limiters }: AccountRo
     const { token } = InvitationPreviewRequestSchema.parse(req.body);
     const found = await findUsableInvitation(db, hashToken(token));
     if (!found) throw new HttpError(404, INVALID_LINK);
-    const preview: InvitationPreview = { organisationName: found.organisationName, email: found.invitation.email, role: found.invitation.role };
+    const preview: InvitationPreview = {
+      organisationName: found.organisationName,
+      email: found.invitation.email,
+      role: found.invitation.role,
+    };
     res.json(preview);
   });
 
@@ -79,11 +96,16 @@ export function invitationsRouter({ db, env, auth, mailer, limiters }: AccountRo
     const found = await findUsableInvitation(db, hashToken(token));
     if (!found) throw new HttpError(404, INVALID_LINK);
     const taken = () =>
-      new HttpError(409, "This e-mail address already has a Satura account. Sign in with it, or ask for an invitation to another address.");
+      new HttpError(
+        409,
+        "This e-mail address already has a Satura account. Sign in with it, or ask for an invitation to another address.",
+      );
     if (await emailInUse(db, found.invitation.email)) throw taken();
-    const user = await acceptInvitation(db, { invitationId: found.invitation.id, name, passwordHash: await hashPassword(password) }).catch(
-      (error: unknown) => Promise.reject(uniqueViolation(error) ? taken() : error),
-    );
+    const user = await acceptInvitation(db, {
+      invitationId: found.invitation.id,
+      name,
+      passwordHash: await hashPassword(password),
+    }).catch((error: unknown) => Promise.reject(uniqueViolation(error) ? taken() : error));
     if (!user) throw new HttpError(404, INVALID_LINK);
     await startSession(auth, res, user.id);
     res.status(201).json({ user: toAuthUser(user) });

@@ -26,7 +26,9 @@ export function membersRouter({ db }: AccountRouteDeps): Router {
     const { organisationId } = getAuth(res);
     const id = parseId(req.params.id, "Member");
     const { role } = UpdateMemberSchema.parse(req.body);
-    const member = await changeMemberRole(db, organisationId, id, role).catch((error) => Promise.reject(lastOwner(error)));
+    const member = await changeMemberRole(db, organisationId, id, role).catch((error) =>
+      Promise.reject(lastOwner(error)),
+    );
     if (!member) throw notFound("Member");
     res.json({ member } satisfies MemberResponse);
   });

@@ -11,12 +11,21 @@ import { getVersionedProcedureSettings, updateProcedureSettings } from "../db/pr
 import { requireIfMatch, setVersion, staleWrite } from "../http/versioning.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
 
-const respond = ({ settings, version }: { settings: ProcedureSettings; version: number }): ProcedureSettingsResponse => ({
+const respond = ({
+  settings,
+  version,
+}: {
+  settings: ProcedureSettings;
+  version: number;
+}): ProcedureSettingsResponse => ({
   settings: {
     evacuationTargetMicrons: settings.evacuationTargetMicrons ?? null,
     pressureTestAllowedDropKPa: settings.pressureTestAllowedDropKPa ?? null,
   },
-  defaults: { evacuationTargetMicrons: EVACUATION_LIMITS.targetMicrons, pressureTestAllowedDropKPa: DEFAULT_ALLOWED_DROP_KPA },
+  defaults: {
+    evacuationTargetMicrons: EVACUATION_LIMITS.targetMicrons,
+    pressureTestAllowedDropKPa: DEFAULT_ALLOWED_DROP_KPA,
+  },
   version,
 });
 

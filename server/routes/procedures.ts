@@ -23,7 +23,7 @@ import {
 import { EVACUATION_LIMITS, evacuationResult, standingPressureOutcome } from "@shared/engine/index.ts";
 import { getAuth } from "../auth/session.ts";
 import type { Database } from "../db/client.ts";
-import { getEquipment, getSite } from "../db/equipment.ts";
+import { getSite } from "../db/equipment.ts";
 import {
   electricalCheckEntries,
   evacuationEntries,
@@ -45,7 +45,7 @@ import {
   standingPressureCheckEntries,
   updateEvacuation,
 } from "../db/procedures.ts";
-import { findVisit, joinCrew } from "../db/visits.ts";
+import { joinCrew } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
@@ -54,10 +54,14 @@ import { answeredBefore, clientIdOf, deviceDate, requireDeviceTime, sendEntry } 
 import { siteAtmosphere } from "../visits/reading-input.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import { electricalCheckResult, leakSearchResult, pressureTestRecordResult } from "../procedures/record-results.ts";
+import { loadUnit, loadVisit } from "../visits/load-records.ts";
 
 const FIELDS = "Some fields need attention";
 
-const targetMicrons = (settings: ProcedureSettings) => settings.evacuationTargetMicrons ?? settings.procedureLimits?.evacuation?.targetMicrons ?? EVACUATION_LIMITS.targetMicrons;
+const targetMicrons = (settings: ProcedureSettings) =>
+  settings.evacuationTargetMicrons ??
+  settings.procedureLimits?.evacuation?.targetMicrons ??
+  EVACUATION_LIMITS.targetMicrons;
 const allowedDropKPa = (settings: ProcedureSettings) => settings.pressureTestAllowedDropKPa ?? DEFAULT_ALLOWED_DROP_KPA;
 /** Minutes since a moment, to the tenth, from the server's clock. */
 const minutesSince = (start: Date) => Math.round((Date.now() - start.getTime()) / 6_000) / 10;
@@ -75,14 +79,13 @@ function isolationNow(startedAt: Date, samples: { minutes: number }[]): number {
 export function proceduresRouter({ db }: { db: Database }): Router {
   const router = Router();
 
-  async function loadVisit(organisationId: string, rawId: unknown) {
-    const visit = await findVisit(db, organisationId, parseId(rawId, "Visit"));
-    if (!visit) throw notFound("Visit");
-    return visit;
-  }
-
   /** Stores a record under the visit's lock (refused if the visit closed meanwhile) and puts the author on the crew. */
-  function recordOnVisit<T>(organisationId: string, visitId: string, userId: string, write: (tx: Database) => Promise<T>): Promise<T> {
+  function recordOnVisit<T>(
+    organisationId: string,
+    visitId: string,
+    userId: string,
+    write: (tx: Database) => Promise<T>,
+  ): Promise<T> {
     return writeToVisit(db, organisationId, visitId, async (tx) => {
       const stored = await write(tx);
       await joinCrew(tx, visitId, userId);
@@ -90,37 +93,41 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     });
   }
 
-  async function loadUnit(organisationId: string, equipmentId: string) {
-    const unit = await getEquipment(db, organisationId, equipmentId);
-    if (!unit) throw notFound("Equipment");
-    return unit;
-  }
-
   // ---- electrical checks --------------------------------------------------------------------
 
   router.get("/:id/electrical-checks", async (req, res) => {
     const { organisationId } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
-    const unit = await loadUnit(organisationId, visit.equipmentId);
+    const visit = await loadVisit(db, organisationId, req.params.id);
+    const unit = await loadUnit(db, organisationId, visit.equipmentId);
     res.json({
       electricalChecks: await listElectricalChecks(db, organisationId, visit.id),
-      defaults: { nameplateV: unit.supplyVoltageV, phases: unit.phases, compressorRlaA: unit.compressorRlaA, fanFlaA: unit.fanFlaA },
+      defaults: {
+        nameplateV: unit.supplyVoltageV,
+        phases: unit.phases,
+        compressorRlaA: unit.compressorRlaA,
+        fanFlaA: unit.fanFlaA,
+      },
     });
   });
 
   router.post("/:id/electrical-checks", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     if (await answeredBefore(db, res, electricalCheckEntries, "electricalCheck", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
     const { clientId, takenAt, ...body } = ElectricalCheckBodySchema.parse(req.body);
     requireDeviceTime("takenAt", takenAt, visit);
-    const unit = await loadUnit(organisationId, visit.equipmentId);
+    const unit = await loadUnit(db, organisationId, visit.equipmentId);
     // The nameplate fills in what the technician did not type (as targets do for readings).
     const nameplateV = body.nameplateV ?? unit.supplyVoltageV ?? null;
-    const ratedA = body.ratedA ?? (body.target === "compressor" ? unit.compressorRlaA : body.target === "fan" ? unit.fanFlaA : null) ?? null;
+    const ratedA =
+      body.ratedA ??
+      (body.target === "compressor" ? unit.compressorRlaA : body.target === "fan" ? unit.fanFlaA : null) ??
+      null;
     if (body.runningAmps?.length && ratedA === null) {
-      throw new HttpError(400, FIELDS, { ratedA: `Enter the nameplate ${body.target === "fan" ? "FLA" : "RLA"}: ${unit.name} has none on record` });
+      throw new HttpError(400, FIELDS, {
+        ratedA: `Enter the nameplate ${body.target === "fan" ? "FLA" : "RLA"}: ${unit.name} has none on record`,
+      });
     }
     if (body.supplyVolts?.length && nameplateV === null) {
       throw new HttpError(400, FIELDS, { nameplateV: `Enter the nameplate voltage: ${unit.name} has none on record` });
@@ -130,7 +137,11 @@ export function proceduresRouter({ db }: { db: Database }): Router {
       circuit: body.circuit ?? null,
       supplyVolts: body.supplyVolts ?? null,
       nameplateV,
-      insulation: (body.insulation ?? []).map((reading) => ({ megohms: reading.megohms, testVoltageV: reading.testVoltageV, ...(reading.point ? { point: reading.point } : {}) })),
+      insulation: (body.insulation ?? []).map((reading) => ({
+        megohms: reading.megohms,
+        testVoltageV: reading.testVoltageV,
+        ...(reading.point ? { point: reading.point } : {}),
+      })),
       windingOhms: body.windingOhms ?? null,
       singlePhaseWindingOhms: body.singlePhaseWindingOhms ?? null,
       runningAmps: body.runningAmps ?? null,
@@ -140,7 +151,14 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     const settings = await getProcedureSettings(db, organisationId);
     const result = electricalCheckResult(input, settings.procedureLimits);
     const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertElectricalCheck(tx, organisationId, { visitId: visit.id, input, result, recordedBy: user.id, clientId, takenAt: deviceDate(takenAt) }),
+      insertElectricalCheck(tx, organisationId, {
+        visitId: visit.id,
+        input,
+        result,
+        recordedBy: user.id,
+        clientId,
+        takenAt: deviceDate(takenAt),
+      }),
     );
     sendEntry(res, { electricalCheck: entry }, replayed);
   });
@@ -149,19 +167,26 @@ export function proceduresRouter({ db }: { db: Database }): Router {
 
   router.get("/:id/leak-searches", async (req, res) => {
     const { organisationId } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     res.json({ leakSearches: await listLeakSearches(db, organisationId, visit.id) });
   });
 
   router.post("/:id/leak-searches", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     if (await answeredBefore(db, res, leakSearchEntries, "leakSearch", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
     const { clientId, takenAt, ...input } = LeakSearchBodySchema.parse(req.body);
     requireDeviceTime("takenAt", takenAt, visit);
     const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertLeakSearch(tx, organisationId, { visitId: visit.id, input, result: leakSearchResult(input), recordedBy: user.id, clientId, takenAt: deviceDate(takenAt) }),
+      insertLeakSearch(tx, organisationId, {
+        visitId: visit.id,
+        input,
+        result: leakSearchResult(input),
+        recordedBy: user.id,
+        clientId,
+        takenAt: deviceDate(takenAt),
+      }),
     );
     sendEntry(res, { leakSearch: entry }, replayed);
   });
@@ -170,7 +195,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
 
   router.get("/:id/standing-pressure-checks", async (req, res) => {
     const { organisationId } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     res.json({ standingPressureChecks: await listStandingPressureChecks(db, organisationId, visit.id) });
   });
 
@@ -178,12 +203,13 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   // site's, as for readings) are the server's, so the stored verdict cannot be steered.
   router.post("/:id/standing-pressure-checks", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
-    if (await answeredBefore(db, res, standingPressureCheckEntries, "standingPressureCheck", visit.id, req.body)) return;
+    const visit = await loadVisit(db, organisationId, req.params.id);
+    if (await answeredBefore(db, res, standingPressureCheckEntries, "standingPressureCheck", visit.id, req.body))
+      return;
     requireWritableVisit(visit.status);
     const { clientId, takenAt, ...body } = StandingPressureBodySchema.parse(req.body);
     requireDeviceTime("takenAt", takenAt, visit);
-    const unit = await loadUnit(organisationId, visit.equipmentId);
+    const unit = await loadUnit(db, organisationId, visit.equipmentId);
     const circuit = body.circuit ?? null;
     if (circuit !== null && !unit.circuits.some((candidate) => candidate.number === circuit)) {
       throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
@@ -201,7 +227,14 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     const outcome = standingPressureOutcome(input);
     if ("problem" in outcome) throw new HttpError(400, FIELDS, { [outcome.problem.field]: outcome.problem.message });
     const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertStandingPressureCheck(tx, organisationId, { visitId: visit.id, input, result: outcome.result, recordedBy: user.id, clientId, takenAt: deviceDate(takenAt) }),
+      insertStandingPressureCheck(tx, organisationId, {
+        visitId: visit.id,
+        input,
+        result: outcome.result,
+        recordedBy: user.id,
+        clientId,
+        takenAt: deviceDate(takenAt),
+      }),
     );
     sendEntry(res, { standingPressureCheck: entry }, replayed);
   });
@@ -210,18 +243,22 @@ export function proceduresRouter({ db }: { db: Database }): Router {
 
   router.get("/:id/pressure-tests", async (req, res) => {
     const { organisationId } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
-    const unit = await loadUnit(organisationId, visit.equipmentId);
+    const visit = await loadVisit(db, organisationId, req.params.id);
+    const unit = await loadUnit(db, organisationId, visit.equipmentId);
     const settings = await getProcedureSettings(db, organisationId);
     res.json({
       pressureTests: await listPressureTests(db, organisationId, visit.id),
-      defaults: { allowedDropKPa: allowedDropKPa(settings), ratedHighSideKPa: unit.ratedHighSideKPa, ratedLowSideKPa: unit.ratedLowSideKPa },
+      defaults: {
+        allowedDropKPa: allowedDropKPa(settings),
+        ratedHighSideKPa: unit.ratedHighSideKPa,
+        ratedLowSideKPa: unit.ratedLowSideKPa,
+      },
     });
   });
 
   router.post("/:id/pressure-tests", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     if (await answeredBefore(db, res, pressureTestEntries, "pressureTest", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
     const { clientId, takenAt, ...body } = PressureTestBodySchema.parse(req.body);
@@ -235,7 +272,14 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     };
     const result = pressureTestRecordResult(input, settings.procedureLimits);
     const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertPressureTest(tx, organisationId, { visitId: visit.id, input, result, recordedBy: user.id, clientId, takenAt: deviceDate(takenAt) }),
+      insertPressureTest(tx, organisationId, {
+        visitId: visit.id,
+        input,
+        result,
+        recordedBy: user.id,
+        clientId,
+        takenAt: deviceDate(takenAt),
+      }),
     );
     sendEntry(res, { pressureTest: entry }, replayed);
   });
@@ -244,14 +288,17 @@ export function proceduresRouter({ db }: { db: Database }): Router {
 
   router.get("/:id/evacuations", async (req, res) => {
     const { organisationId } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     const settings = await getProcedureSettings(db, organisationId);
-    res.json({ evacuations: await listEvacuations(db, organisationId, visit.id), defaults: { targetMicrons: targetMicrons(settings), limits: settings.procedureLimits ?? {} } });
+    res.json({
+      evacuations: await listEvacuations(db, organisationId, visit.id),
+      defaults: { targetMicrons: targetMicrons(settings), limits: settings.procedureLimits ?? {} },
+    });
   });
 
   router.post("/:id/evacuations", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     if (await answeredBefore(db, res, evacuationEntries, "evacuation", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
     const { clientId, startedAt, ...body } = EvacuationCreateSchema.parse(req.body);
@@ -296,9 +343,13 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   // change to the series takes), so two sends of one sample add it once (README decision 026).
   router.post("/:id/evacuations/:evacuationId/samples", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     const evacuationId = parseId(req.params.evacuationId, "Evacuation");
-    const repeated = await holdingSample(db, await findEvacuation(db, organisationId, visit.id, evacuationId), clientIdOf(req.body));
+    const repeated = await holdingSample(
+      db,
+      await findEvacuation(db, organisationId, visit.id, evacuationId),
+      clientIdOf(req.body),
+    );
     if (repeated) return void sendEntry(res, { evacuation: repeated }, true);
     requireWritableVisit(visit.status);
     const { clientId, ...body } = EvacuationSampleBodySchema.parse(req.body);
@@ -314,7 +365,9 @@ export function proceduresRouter({ db }: { db: Database }): Router {
       const minutes = body.minutes ?? minutesSince(row.startedAt);
       const last = row.samples.at(-1);
       if (last && minutes <= last.minutes) {
-        throw new HttpError(400, FIELDS, { minutes: `Each reading must be later than the one before it (${last.minutes} min)` });
+        throw new HttpError(400, FIELDS, {
+          minutes: `Each reading must be later than the one before it (${last.minutes} min)`,
+        });
       }
       const samples = [...row.samples, { minutes, microns: body.microns, ...(clientId ? { clientId } : {}) }];
       return (await updateEvacuation(tx, organisationId, row.id, {
@@ -331,14 +384,18 @@ export function proceduresRouter({ db }: { db: Database }): Router {
   // Valving off, the target and the note change the record: the request names the version it saw.
   router.patch("/:id/evacuations/:evacuationId", async (req, res) => {
     const { organisationId } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     requireWritableVisit(visit.status);
     const body = EvacuationUpdateSchema.parse(req.body);
     const version = requireIfMatch(req);
     const settings = await getProcedureSettings(db, organisationId);
     const evacuation = await writeToVisit(db, organisationId, visit.id, async (tx) => {
       const row = await loadEvacuation(tx, organisationId, visit.id, req.params.evacuationId);
-      const isolatedAtMinutes = body.isolateNow ? isolationNow(row.startedAt, row.samples) : body.isolatedAtMinutes === undefined ? row.isolatedAtMinutes : body.isolatedAtMinutes;
+      const isolatedAtMinutes = body.isolateNow
+        ? isolationNow(row.startedAt, row.samples)
+        : body.isolatedAtMinutes === undefined
+          ? row.isolatedAtMinutes
+          : body.isolatedAtMinutes;
       const target = body.targetMicrons ?? row.targetMicrons;
       const updated = await updateEvacuation(
         tx,

@@ -42,7 +42,7 @@ import {
 } from "../db/register.ts";
 import { chargeEstimateBefore } from "../db/latest-readings.ts";
 import { insertVisitEvent } from "../db/visit-events.ts";
-import { findVisit, joinCrew } from "../db/visits.ts";
+import { joinCrew } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
@@ -54,9 +54,15 @@ import { circuitBalance, leakRate, liquidChargingNote, toCylinder, topUps } from
 import { registerCsvLine } from "../register/register-csv.ts";
 import { EXPORT_CHUNK_LINES, FIRST_EXPORT_CHUNK_LINES, registerCsvText } from "../register/register-csv-text.ts";
 import { streamPieces } from "../http/stream-pieces.ts";
-import { mayReadRegisterLine, readsWholeRegister, visibleRegisterLines, type RegisterReader } from "../register/register-visibility.ts";
+import {
+  mayReadRegisterLine,
+  readsWholeRegister,
+  visibleRegisterLines,
+  type RegisterReader,
+} from "../register/register-visibility.ts";
 import { licenceNumbers } from "../db/licence-numbers.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
+import { loadUnit, loadVisitAndUnit } from "../visits/load-records.ts";
 
 type Deps = Pick<AccountRouteDeps, "db">;
 
@@ -64,11 +70,15 @@ type Deps = Pick<AccountRouteDeps, "db">;
  * The register's technician filter within what the reader may see (server/register/register-visibility.ts):
  * the whole register reads anyone's lines or everyone's; otherwise only one's own.
  */
-function registerScope(res: Response, requested: string | undefined): { technicianId?: string; allTechnicians: boolean } {
+function registerScope(
+  res: Response,
+  requested: string | undefined,
+): { technicianId?: string; allTechnicians: boolean } {
   const { user } = getAuth(res);
   if (readsWholeRegister(user)) return { technicianId: requested, allTechnicians: true };
   const technicianId = requested ?? user.id;
-  if (!mayReadRegisterLine(user, technicianId)) throw new HttpError(403, "You can see and export only your own refrigerant records");
+  if (!mayReadRegisterLine(user, technicianId))
+    throw new HttpError(403, "You can see and export only your own refrigerant records");
   return { technicianId, allTechnicians: false };
 }
 
@@ -93,7 +103,10 @@ export function cylindersRouter({ db }: Deps): Router {
     const { organisationId, user } = getAuth(res);
     const row = await getCylinder(db, organisationId, parseId(req.params.id, "Cylinder"));
     if (!row) throw notFound("Cylinder");
-    res.json({ cylinder: toCylinder(row), ...visibleRegisterLines(user, await cylinderMovements(db, organisationId, row.id)) });
+    res.json({
+      cylinder: toCylinder(row),
+      ...visibleRegisterLines(user, await cylinderMovements(db, organisationId, row.id)),
+    });
   });
 
   // A recovery cylinder's contents handed to a reclaimer: a register entry with no visit.
@@ -126,9 +139,15 @@ export function cylindersRouter({ db }: Deps): Router {
     const row = await getCylinder(db, organisationId, parseId(req.params.id, "Cylinder"));
     if (!row) throw notFound("Cylinder");
     const { reason } = MovementVoidBodySchema.parse(req.body);
-    const outcome = await voidReclaim(db, organisationId, { cylinderId: row.id, movementId: parseId(req.params.movementId, "Movement"), reason, voidedBy: user.id });
+    const outcome = await voidReclaim(db, organisationId, {
+      cylinderId: row.id,
+      movementId: parseId(req.params.movementId, "Movement"),
+      reason,
+      voidedBy: user.id,
+    });
     if (outcome === "missing") throw notFound("Movement");
-    if (outcome === "on-a-visit") throw new HttpError(409, "This movement was logged on a visit: void it on that visit's Refrigerant section");
+    if (outcome === "on-a-visit")
+      throw new HttpError(409, "This movement was logged on a visit: void it on that visit's Refrigerant section");
     if (outcome === "already-void") throw new HttpError(409, "This movement is already void");
     const after = await getCylinder(db, organisationId, row.id);
     res.status(201).json({ movement: outcome, cylinder: after ? toCylinder(after) : null });
@@ -148,29 +167,33 @@ function circuitOf(unit: { circuits: { number: number }[] }, raw: unknown): numb
 export function visitRefrigerantRouter({ db }: Deps): Router {
   const router = Router();
 
-  async function loadVisitAndUnit(organisationId: string, rawId: unknown) {
-    const visit = await findVisit(db, organisationId, parseId(rawId, "Visit"));
-    if (!visit) throw notFound("Visit");
-    const unit = await getEquipment(db, organisationId, visit.equipmentId);
-    if (!unit) throw notFound("Equipment");
-    return { visit, unit };
-  }
-
   /** The readings' charge estimate just before the circuit's first standing recovery on the visit, or null. */
   async function estimateAtFirstRecovery(visitId: string, circuit: number, movements: readonly MovementRow[]) {
-    const recoveries = movements.filter((movement) => movement.kind === "recovered" && movement.circuit === circuit && movement.voided === null);
+    const recoveries = movements.filter(
+      (movement) => movement.kind === "recovered" && movement.circuit === circuit && movement.voided === null,
+    );
     if (recoveries.length === 0) return null;
     const firstRecovery = Math.min(...recoveries.map((movement) => Date.parse(movement.at)));
     return chargeEstimateBefore(db, visitId, circuit, new Date(firstRecovery));
   }
 
   /** The visit's refrigerant as `reader` may see it: their lines, balances over all of them. */
-  async function visitRefrigerant(reader: RegisterReader, organisationId: string, visitId: string, unit: NonNullable<Awaited<ReturnType<typeof getEquipment>>>) {
-    const [movements, charges] = await Promise.all([visitMovements(db, organisationId, visitId), visitCircuitCharges(db, organisationId, visitId)]);
+  async function visitRefrigerant(
+    reader: RegisterReader,
+    organisationId: string,
+    visitId: string,
+    unit: NonNullable<Awaited<ReturnType<typeof getEquipment>>>,
+  ) {
+    const [movements, charges] = await Promise.all([
+      visitMovements(db, organisationId, visitId),
+      visitCircuitCharges(db, organisationId, visitId),
+    ]);
     // Over every movement, like the balances: the check compares totals, not the lines shown.
     const runLogCheck = await runLogChargeCheck(db, organisationId, visitId, movements);
     const { note, glideK } = liquidChargingNote(unit.refrigerant);
-    const estimates = await Promise.all(unit.circuits.map((nameplate) => estimateAtFirstRecovery(visitId, nameplate.number, movements)));
+    const estimates = await Promise.all(
+      unit.circuits.map((nameplate) => estimateAtFirstRecovery(visitId, nameplate.number, movements)),
+    );
     return {
       refrigerant: unit.refrigerant,
       liquidChargingNote: note,
@@ -190,16 +213,21 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
 
   router.get("/:id/refrigerant", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
+    const { visit, unit } = await loadVisitAndUnit(db, organisationId, req.params.id);
     res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
   });
 
   router.post("/:id/refrigerant", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
+    const { visit, unit } = await loadVisitAndUnit(db, organisationId, req.params.id);
     // A repeated send (README decision 026) is answered with the entry stored first, whatever the visit's status now.
     const earlier = await findChargeEntry(db, organisationId, visit.id, clientIdOf(req.body));
-    if (earlier) return void sendEntry(res, { movement: earlier.movement, cylinder: earlier.cylinder ? toCylinder(earlier.cylinder) : null }, true);
+    if (earlier)
+      return void sendEntry(
+        res,
+        { movement: earlier.movement, cylinder: earlier.cylinder ? toCylinder(earlier.cylinder) : null },
+        true,
+      );
     requireWritableVisit(visit.status);
     const values = MovementCreateSchema.parse(req.body);
     requireDeviceTime("at", values.at, visit, { backDated: true });
@@ -212,7 +240,14 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
         visitId: visit.id,
         unit,
         technicianId: user.id,
-        movement: { kind: values.kind, kg: values.kg, circuit: values.circuit, cylinderId: values.cylinderId ?? null, at: deviceDate(values.at), note: values.note },
+        movement: {
+          kind: values.kind,
+          kg: values.kg,
+          circuit: values.circuit,
+          cylinderId: values.cylinderId ?? null,
+          at: deviceDate(values.at),
+          note: values.note,
+        },
         clientId: values.clientId,
       });
       await joinCrew(tx, visit.id, user.id);
@@ -227,12 +262,17 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
   // the standing declaration (kept, with what changed); withdrawing one is a void with a reason.
   router.put("/:id/refrigerant/charging/:circuit", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const { visit, unit } = await loadVisitAndUnit(organisationId, req.params.id);
+    const { visit, unit } = await loadVisitAndUnit(db, organisationId, req.params.id);
     requireWritableVisit(visit.status);
     const circuit = circuitOf(unit, req.params.circuit);
     const values = ChargingUpdateSchema.parse(req.body);
     await writeToVisit(db, organisationId, visit.id, async (tx) => {
-      const replaced = await declareCircuitCharge(tx, organisationId, { visitId: visit.id, circuit, lineAdjustmentKg: values.lineAdjustmentKg, recordedBy: user.id });
+      const replaced = await declareCircuitCharge(tx, organisationId, {
+        visitId: visit.id,
+        circuit,
+        lineAdjustmentKg: values.lineAdjustmentKg,
+        recordedBy: user.id,
+      });
       if (replaced) {
         await insertVisitEvent(tx, organisationId, {
           visitId: visit.id,
@@ -245,7 +285,12 @@ export function visitRefrigerantRouter({ db }: Deps): Router {
         });
       }
       // Readings logged before the declaration may already show the circuit settled on its new charge.
-      await calibrateAfterWeighIn(tx, organisationId, { visitId: visit.id, equipmentId: unit.id, circuit, actorId: user.id });
+      await calibrateAfterWeighIn(tx, organisationId, {
+        visitId: visit.id,
+        equipmentId: unit.id,
+        circuit,
+        actorId: user.id,
+      });
     });
     res.json(await visitRefrigerant(user, organisationId, visit.id, unit));
   });
@@ -258,8 +303,7 @@ export function equipmentRefrigerantRouter({ db }: Deps): Router {
   const router = Router();
   router.get("/:id/refrigerant", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const unit = await getEquipment(db, organisationId, parseId(req.params.id, "Equipment"));
-    if (!unit) throw notFound("Equipment");
+    const unit = await loadUnit(db, organisationId, req.params.id);
     const movements = await equipmentMovements(db, organisationId, unit.id);
     const nameplateKg = unit.circuits.reduce((sum, circuit) => sum + circuit.factoryChargeKg, 0);
     const events = topUps(movements);
@@ -281,7 +325,8 @@ export function registerRouter({ db }: Deps): Router {
   async function filterFor(res: Response, query: { from?: string; to?: string; technicianId?: string }) {
     const { organisationId } = getAuth(res);
     const scope = registerScope(res, query.technicianId);
-    if (scope.technicianId && !(await findMember(db, organisationId, scope.technicianId))) throw fieldError("technicianId", "Choose one of your company's people");
+    if (scope.technicianId && !(await findMember(db, organisationId, scope.technicianId)))
+      throw fieldError("technicianId", "Choose one of your company's people");
     const filter: RegisterFilter = {
       fromMs: query.from ? boundStart(query.from) : undefined,
       toMs: query.to ? boundEnd(query.to) : undefined,
@@ -296,7 +341,12 @@ export function registerRouter({ db }: Deps): Router {
     const query = RegisterPageQuerySchema.parse(req.query);
     const { filter, allTechnicians } = await filterFor(res, query);
     const [page, totals] = await Promise.all([
-      registerPage(db, organisationId, { ...filter, direction: query.dir ?? "asc", cursor: query.cursor, limit: query.limit }),
+      registerPage(db, organisationId, {
+        ...filter,
+        direction: query.dir ?? "asc",
+        cursor: query.cursor,
+        limit: query.limit,
+      }),
       registerTotals(db, organisationId, filter),
     ]);
     // The filter above already keeps a technician to their own lines; the rule is still the one that decides.
@@ -310,13 +360,18 @@ export function registerRouter({ db }: Deps): Router {
     const query = RegisterQuerySchema.parse(req.query);
     const { filter } = await filterFor(res, query);
     const licences = await licenceNumbers(db, organisationId);
-    const name = ["refrigerant-register", query.from, query.to].filter(Boolean).join("_").replace(/[^0-9A-Za-z_-]/g, "-");
+    const name = ["refrigerant-register", query.from, query.to]
+      .filter(Boolean)
+      .join("_")
+      .replace(/[^0-9A-Za-z_-]/g, "-");
     res.setHeader("Content-Type", "text/csv; charset=utf-8");
     res.setHeader("Content-Disposition", `attachment; filename="${name}.csv"`);
     res.setHeader("Cache-Control", "private, no-store");
     try {
-      const lines = registerCsvText(registerChunks(db, organisationId, filter, EXPORT_CHUNK_LINES, FIRST_EXPORT_CHUNK_LINES), (movement) =>
-        mayReadRegisterLine(user, movement.technician?.id ?? null) ? registerCsvLine(movement, licences) : undefined,
+      const lines = registerCsvText(
+        registerChunks(db, organisationId, filter, EXPORT_CHUNK_LINES, FIRST_EXPORT_CHUNK_LINES),
+        (movement) =>
+          mayReadRegisterLine(user, movement.technician?.id ?? null) ? registerCsvLine(movement, licences) : undefined,
       );
       await streamPieces(res, lines);
     } catch (error) {

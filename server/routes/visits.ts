@@ -1,42 +1,28 @@
 import { Router } from "express";
-import { z } from "zod";
-import { can, type Permission } from "@shared/schemas/auth.ts";
-import { instant } from "@shared/schemas/dates.ts";
-import { deviceTime, optionalClientId } from "@shared/schemas/device-entries.ts";
 import { VisitListQuerySchema } from "@shared/schemas/list-pages.ts";
-import { text } from "@shared/schemas/text.ts";
 import {
   AdjustmentCreateSchema,
   CommentCreateSchema,
-  hasReason,
   isChargeAdjustment,
-  PHOTO_KINDS,
-  REASON_NEEDED_MESSAGE,
+  PhotoFieldsSchema,
   ReadingBodySchema,
   ReadingsPageQuerySchema,
   ReviewActionSchema,
   SendReportSchema,
   STATUSES_OPEN_FOR_COMMENTS,
-  VISIT_EVENT_LABELS,
-  VISIT_STATUS_LABELS,
   VisitCreateSchema,
   VisitDetailQuerySchema,
   VoidBodySchema,
-  type ReviewAction,
-  type VisitEventAction,
-  type VisitStatus,
 } from "@shared/schemas/visits.ts";
 import { getAuth } from "../auth/session.ts";
 import { circuitCharge } from "../db/charge-references.ts";
-import { getEquipment, getSite } from "../db/equipment.ts";
-import { insertVisitEvent } from "../db/visit-events.ts";
+import { getSite } from "../db/equipment.ts";
 import { findEntry } from "../db/store-once.ts";
 import {
   adjustmentEntries,
   commentEntries,
   createVisit,
   findPhoto,
-  findVisit,
   getVisitDelta,
   getVisitDetail,
   getVisitHead,
@@ -46,15 +32,15 @@ import {
   joinCrew,
   listVisitPage,
   photoEntries,
-  updateVisitStatus,
   visitReadingsPage,
 } from "../db/visits.ts";
 import { singleFileUpload } from "../http/file-upload.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
+import { reviewVisit } from "../visits/review-visit.ts";
 import { judgeCsvOffThread } from "../import/csv-import-pool.ts";
-import { ColumnMappingSchema } from "../import/readings-csv.ts";
+import { ImportFieldsSchema } from "../import/readings-csv.ts";
 import { storeImportedReadings } from "../import/store-imported-readings.ts";
 import { discardPhoto, MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
 import { visitReportMail } from "../report/visit-report-mail.ts";
@@ -66,6 +52,7 @@ import { answeredBefore, deviceDate, requireDeviceTime, sendEntry } from "../vis
 import { findRepeatedVoid, voidVisitRecord } from "../visits/void-record.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import type { AccountRouteDeps } from "./route-deps.ts";
+import { loadUnit, loadVisit } from "../visits/load-records.ts";
 
 type Deps = Pick<AccountRouteDeps, "db" | "env">;
 
@@ -73,51 +60,22 @@ const FIELDS = "Some fields need attention";
 /** A logged series of a few thousand rows is well under 2 MB of CSV. */
 const MAX_CSV_BYTES = 2 * 1024 * 1024;
 
-/** Each review action: the statuses it starts from, where it leads, who may take it, and its audit line. */
-const TRANSITIONS: Record<ReviewAction["action"], { from: VisitStatus[]; to: VisitStatus; permission: Permission; event: VisitEventAction; verb: string; refused: string }> = {
-  submit: { from: ["open", "sent-back"], to: "awaiting-review", permission: "writeRecords", event: "submitted", verb: "submitted", refused: "Apprentices can read visits but not submit them" },
-  "sign-off": { from: ["open", "awaiting-review"], to: "signed-off", permission: "signOff", event: "signed-off", verb: "signed off", refused: "Only a senior technician or an owner can sign off or send back" },
-  "send-back": { from: ["open", "awaiting-review"], to: "sent-back", permission: "signOff", event: "sent-back", verb: "sent back", refused: "Only a senior technician or an owner can sign off or send back" },
-  // Corrections after review: only a senior or owner reopens, with a reason kept in the audit trail.
-  reopen: { from: ["awaiting-review", "signed-off"], to: "open", permission: "signOff", event: "reopened", verb: "reopened", refused: "Only a senior technician or an owner can reopen a visit" },
-};
-
 export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, "mailer">): Router {
   const router = Router();
   const saveReading = createReadingSaver(db);
   const photoUpload = singleFileUpload("photo", "photo", MAX_PHOTO_BYTES);
   const csvUpload = singleFileUpload("file", "CSV file", MAX_CSV_BYTES);
 
-  const ImportFieldsSchema = z.object({
-    circuit: z.coerce.number().int().min(1),
-    dayStart: instant("dayStart must be an ISO date-time"),
-    mode: z.enum(["preview", "all", "valid-only"]).default("preview"),
-    mapping: text({ multiline: true })
-      .optional()
-      .transform((json, context) => {
-        if (!json) return undefined;
-        try {
-          return ColumnMappingSchema.parse(JSON.parse(json));
-        } catch {
-          context.addIssue({ code: "custom", message: "The column mapping is not valid" });
-          return z.NEVER;
-        }
-      }),
-  });
-
-  async function loadVisit(organisationId: string, rawId: unknown) {
-    const visit = await findVisit(db, organisationId, parseId(rawId, "Visit"));
-    if (!visit) throw notFound("Visit");
-    return visit;
-  }
-
   /** The unit, the circuit's nameplate and charge record, and the site: what the server adds to every reading. */
   async function readingContext(organisationId: string, equipmentId: string, circuit: number): Promise<ReadingContext> {
-    const unit = await getEquipment(db, organisationId, equipmentId);
-    if (!unit) throw notFound("Equipment");
+    const unit = await loadUnit(db, organisationId, equipmentId);
     const nameplate = unit.circuits.find((candidate) => candidate.number === circuit);
-    if (!nameplate) throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
-    const [site, charge] = await Promise.all([getSite(db, organisationId, unit.siteId), circuitCharge(db, organisationId, unit.id, nameplate)]);
+    if (!nameplate)
+      throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
+    const [site, charge] = await Promise.all([
+      getSite(db, organisationId, unit.siteId),
+      circuitCharge(db, organisationId, unit.id, nameplate),
+    ]);
     if (!site) throw notFound("Site");
     return { unit, nameplate, site, charge };
   }
@@ -152,7 +110,8 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     res.setHeader("Cache-Control", "private, no-cache");
     if (matchesIfNoneMatch(req.get("if-none-match"), etag)) return void res.status(304).end();
     const sinceRevision = revisionSince(since, head.revision);
-    const delta = sinceRevision === undefined ? undefined : await getVisitDelta(db, organisationId, head, sinceRevision);
+    const delta =
+      sinceRevision === undefined ? undefined : await getVisitDelta(db, organisationId, head, sinceRevision);
     if (delta) return void res.json({ delta: { ...delta, since } });
     res.json({ visit: await getVisitDetail(db, organisationId, head.id, head) });
   });
@@ -162,7 +121,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   router.get("/:id/readings", async (req, res) => {
     const { organisationId } = getAuth(res);
     // The visit first: another company's visit is missing (404) whatever the query says.
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     const query = ReadingsPageQuerySchema.parse(req.query);
     res.json(await visitReadingsPage(db, visit.id, query));
   });
@@ -176,7 +135,13 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     // Checked against the visit first (404, 409), then the body's refusal (400), inside the batch.
     const body = ReadingBodySchema.safeParse(req.body);
     let replayed = false;
-    const reading = await saveReading({ organisationId, visitId, user: { id: user.id, name: user.name }, body, onReplayed: () => (replayed = true) });
+    const reading = await saveReading({
+      organisationId,
+      visitId,
+      user: { id: user.id, name: user.name },
+      body,
+      onReplayed: () => (replayed = true),
+    });
     sendEntry(res, { reading }, replayed);
   });
 
@@ -185,7 +150,7 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   // file is parsed and judged in a worker thread; the rows are stored in slices.
   router.post("/:id/readings/import", csvUpload, async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     requireWritableVisit(visit.status);
     if (!req.file) throw new HttpError(400, FIELDS, { file: "Choose a CSV file" });
     const fields = ImportFieldsSchema.parse(req.body ?? {});
@@ -199,15 +164,27 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     });
     if (fields.mode === "preview") return void res.json({ ...summary, stored: 0 });
     if (fields.mode === "all" && summary.problems.length > 0) {
-      return void res.status(422).json({ message: `${summary.problems.length} row(s) have problems: nothing was stored`, ...summary, stored: 0 });
+      return void res
+        .status(422)
+        .json({
+          message: `${summary.problems.length} row(s) have problems: nothing was stored`,
+          ...summary,
+          stored: 0,
+        });
     }
-    const stored = await storeImportedReadings(db, organisationId, { visitId: visit.id, equipmentId: visit.equipmentId, circuit: fields.circuit, recordedBy: user.id, slices });
+    const stored = await storeImportedReadings(db, organisationId, {
+      visitId: visit.id,
+      equipmentId: visit.equipmentId,
+      circuit: fields.circuit,
+      recordedBy: user.id,
+      slices,
+    });
     res.status(201).json({ ...summary, stored });
   });
 
   router.post("/:id/adjustments", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     if (await answeredBefore(db, res, adjustmentEntries, "adjustment", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
     const { clientId, ...values } = AdjustmentCreateSchema.parse(req.body);
@@ -216,22 +193,39 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     if (isChargeAdjustment(values.kind)) {
       // Refrigerant added or removed is a register movement: both records in one transaction,
       // linked, with one figure; the register's rules refuse it whole or store it whole.
-      const unit = await getEquipment(db, organisationId, visit.equipmentId);
-      if (!unit) throw notFound("Equipment");
+      const unit = await loadUnit(db, organisationId, visit.equipmentId);
       const circuit = values.circuit!;
-      if (!unit.circuits.some((candidate) => candidate.number === circuit)) throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
+      if (!unit.circuits.some((candidate) => candidate.number === circuit))
+        throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
       const kind = values.kind;
       const stored = await writeToVisit(db, organisationId, visit.id, async (tx) => {
         // Under the visit's lock, so a repeat racing its first send finds it here.
         const earlier = await findEntry(tx, adjustmentEntries, visit.id, clientId);
         if (earlier) return { entry: earlier, replayed: true };
         const entry = values.movementId
-          ? await linkToMovement(tx, organisationId, { visitId: visit.id, movementId: values.movementId, kind, amountKg: values.amountKg!, circuit, description: values.description, at, recordedBy: user.id, clientId })
+          ? await linkToMovement(tx, organisationId, {
+              visitId: visit.id,
+              movementId: values.movementId,
+              kind,
+              amountKg: values.amountKg!,
+              circuit,
+              description: values.description,
+              at,
+              recordedBy: user.id,
+              clientId,
+            })
           : await recordChargeEntry(tx, organisationId, {
               visitId: visit.id,
               unit,
               technicianId: user.id,
-              movement: { kind: await chargeMovementKind(tx, organisationId, kind, values.cylinderId!), kg: values.amountKg!, circuit, cylinderId: values.cylinderId!, at, note: values.description },
+              movement: {
+                kind: await chargeMovementKind(tx, organisationId, kind, values.cylinderId!),
+                kg: values.amountKg!,
+                circuit,
+                cylinderId: values.cylinderId!,
+                at,
+                note: values.description,
+              },
               adjustment: { description: values.description },
               clientId,
             }).then(({ adjustment, replayed }) => ({ entry: adjustment, replayed }));
@@ -260,26 +254,38 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   // Corrections: a record is voided with a reason (and entered again if need be), never deleted.
   router.post("/:id/voids", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     const body = VoidBodySchema.parse(req.body);
     const repeated = await findRepeatedVoid(db, organisationId, visit.id, body, user.id);
     if (repeated) return void sendEntry(res, { event: repeated }, true);
     requireWritableVisit(visit.status);
-    const { event, replayed } = await writeToVisit(db, organisationId, visit.id, (tx) => voidVisitRecord(tx, organisationId, visit.id, body, user.id));
+    const { event, replayed } = await writeToVisit(db, organisationId, visit.id, (tx) =>
+      voidVisitRecord(tx, organisationId, visit.id, body, user.id),
+    );
     sendEntry(res, { event }, replayed);
   });
 
   router.post("/:id/comments", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     if (await answeredBefore(db, res, commentEntries, "comment", visit.id, req.body)) return;
     const values = CommentCreateSchema.parse(req.body);
     const stored = await writeToVisit(
       db,
       organisationId,
       visit.id,
-      (tx) => insertComment(tx, organisationId, { visitId: visit.id, readingId: values.readingId ?? null, authorId: user.id, body: values.body, clientId: values.clientId }),
-      { allow: STATUSES_OPEN_FOR_COMMENTS, refuse: () => new HttpError(409, "This visit is signed off: comments are closed until it is reopened") },
+      (tx) =>
+        insertComment(tx, organisationId, {
+          visitId: visit.id,
+          readingId: values.readingId ?? null,
+          authorId: user.id,
+          body: values.body,
+          clientId: values.clientId,
+        }),
+      {
+        allow: STATUSES_OPEN_FOR_COMMENTS,
+        refuse: () => new HttpError(409, "This visit is signed off: comments are closed until it is reopened"),
+      },
     );
     if (!stored) throw new HttpError(400, FIELDS, { readingId: "That reading is not part of this visit" });
     sendEntry(res, { comment: stored.entry }, stored.replayed);
@@ -287,38 +293,8 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
 
   router.post("/:id/review", async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
-    const action = ReviewActionSchema.parse(req.body);
-    const transition = TRANSITIONS[action.action];
-    if (!can(user.role, transition.permission)) throw new HttpError(403, transition.refused);
-    const refuse = (status: VisitStatus) => new HttpError(409, `A visit that is ${VISIT_STATUS_LABELS[status].toLowerCase()} cannot be ${transition.verb}`);
-    await writeToVisit(
-      db,
-      organisationId,
-      visit.id,
-      async (tx, locked) => {
-        if (action.action === "submit") {
-          // A visit may start without its reason, but never goes for review without one.
-          // Checked on the locked row, so a reason given meanwhile in another tab counts.
-          const given = action.reason ?? "";
-          if (!hasReason(given) && !hasReason(locked.reason)) throw new HttpError(400, REASON_NEEDED_MESSAGE, { reason: REASON_NEEDED_MESSAGE });
-          await updateVisitStatus(tx, visit.id, { status: transition.to, ...(hasReason(given) ? { reason: given } : {}) });
-          await insertVisitEvent(tx, organisationId, { visitId: visit.id, action: transition.event, summary: VISIT_EVENT_LABELS[transition.event], reason: hasReason(given) ? `Reason for the visit: ${given}` : null, actorId: user.id });
-          return;
-        }
-        const reason = action.action === "sign-off" ? action.note || null : action.reason;
-        if (action.action === "sign-off") {
-          await updateVisitStatus(tx, visit.id, { status: transition.to, reviewNote: reason, signedOffBy: user.id, signedOffAt: new Date() });
-        } else if (action.action === "send-back" || action.action === "reopen") {
-          // Reopening undoes the sign-off on the visit itself; the trail keeps when it was signed and by whom.
-          await updateVisitStatus(tx, visit.id, { status: transition.to, reviewNote: action.action === "send-back" ? reason : null, signedOffBy: null, signedOffAt: null });
-        }
-        // The reason also goes on the visit's thread, so the technician sees it in context.
-        if (action.action === "send-back") await insertComment(tx, organisationId, { visitId: visit.id, readingId: null, authorId: user.id, body: `Sent back: ${reason}` });
-        await insertVisitEvent(tx, organisationId, { visitId: visit.id, action: transition.event, summary: VISIT_EVENT_LABELS[transition.event], reason, actorId: user.id });
-      },
-      { allow: transition.from, refuse },
-    );
+    const visit = await loadVisit(db, organisationId, req.params.id);
+    await reviewVisit(db, organisationId, visit.id, ReviewActionSchema.parse(req.body), user);
     res.json({ visit: await getVisitDetail(db, organisationId, visit.id) });
   });
 
@@ -326,19 +302,25 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   // visit closed meanwhile, the insert is refused under the lock and the files are removed.
   router.post("/:id/photos", photoUpload, async (req, res) => {
     const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(organisationId, req.params.id);
+    const visit = await loadVisit(db, organisationId, req.params.id);
     // A repeat is answered before the upload is decoded again.
     if (await answeredBefore(db, res, photoEntries, "photo", visit.id, req.body)) return;
     requireWritableVisit(visit.status);
     if (!req.file) throw new HttpError(400, FIELDS, { photo: "Choose a photo to upload" });
-    const meta = z
-      .object({ kind: z.enum(PHOTO_KINDS).default("other"), caption: text().max(200).optional(), clientId: optionalClientId, takenAt: deviceTime("takenAt") })
-      .parse(req.body ?? {});
+    const meta = PhotoFieldsSchema.parse(req.body ?? {});
     requireDeviceTime("takenAt", meta.takenAt, visit);
     const stored = await storePhoto(env.UPLOADS_DIR, req.file.buffer);
     try {
       const { entry, replayed } = await writeToVisit(db, organisationId, visit.id, (tx) =>
-        insertPhoto(tx, organisationId, { visitId: visit.id, kind: meta.kind, caption: meta.caption || null, ...stored, uploadedBy: user.id, clientId: meta.clientId, takenAt: deviceDate(meta.takenAt) }),
+        insertPhoto(tx, organisationId, {
+          visitId: visit.id,
+          kind: meta.kind,
+          caption: meta.caption || null,
+          ...stored,
+          uploadedBy: user.id,
+          clientId: meta.clientId,
+          takenAt: deviceDate(meta.takenAt),
+        }),
       );
       // A send that raced its repeat stored no row: its files are nobody's.
       if (replayed) await discardPhoto(env.UPLOADS_DIR, stored);
@@ -364,8 +346,8 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
 
 export function photosRouter({ db, env }: Deps): Router {
   const router = Router();
-  const send = (variant: "original" | "thumbnail") =>
-    async (req: import("express").Request, res: import("express").Response) => {
+  const send =
+    (variant: "original" | "thumbnail") => async (req: import("express").Request, res: import("express").Response) => {
       const photo = await findPhoto(db, getAuth(res).organisationId, parseId(req.params.id, "Photo"));
       if (!photo) throw notFound("Photo");
       const data = await readPhoto(env.UPLOADS_DIR, variant === "original" ? photo.storedName : photo.thumbnailName);

@@ -4,10 +4,15 @@
  * computed from it with the same engine the client runs.
  */
 import { z } from "zod";
-import { DiagnosisInputObjectSchema, DiagnosisInputSchema, DiagnosisResultSchema, TrendResultSchema } from "./diagnosis.ts";
+import {
+  DiagnosisInputObjectSchema,
+  DiagnosisInputSchema,
+  DiagnosisResultSchema,
+  TrendResultSchema,
+} from "./diagnosis.ts";
 import { MAX_CIRCUITS } from "./equipment.ts";
 import { instant } from "./dates.ts";
-import { optionalClientId } from "./device-entries.ts";
+import { deviceTime, optionalClientId } from "./device-entries.ts";
 import { isTimeZone } from "../format/date-time.ts";
 import { text } from "./text.ts";
 
@@ -30,9 +35,14 @@ export const MAX_COMMENT_LENGTH = 2000;
  * voids. Awaiting review and signed off are closed until a senior or owner reopens the visit.
  */
 export const STATUSES_OPEN_FOR_ENTRIES = ["open", "sent-back"] as const satisfies readonly VisitStatus[];
-export const acceptsEntries = (status: VisitStatus) => (STATUSES_OPEN_FOR_ENTRIES as readonly VisitStatus[]).includes(status);
+export const acceptsEntries = (status: VisitStatus) =>
+  (STATUSES_OPEN_FOR_ENTRIES as readonly VisitStatus[]).includes(status);
 /** Comments stay possible while a senior reviews; only a signed-off visit is closed to them. */
-export const STATUSES_OPEN_FOR_COMMENTS = ["open", "sent-back", "awaiting-review"] as const satisfies readonly VisitStatus[];
+export const STATUSES_OPEN_FOR_COMMENTS = [
+  "open",
+  "sent-back",
+  "awaiting-review",
+] as const satisfies readonly VisitStatus[];
 
 /** Why a closed visit refuses an entry, in words the technician can act on. */
 export function closedVisitMessage(status: VisitStatus): string {
@@ -58,7 +68,10 @@ const reasonSchema = (prompt: string) =>
 const VisitReasonSchema = text({ multiline: true, error: "Say why you are visiting" })
   .max(MAX_REASON_LENGTH, `Keep the reason under ${MAX_REASON_LENGTH} characters`)
   // Empty means "not given yet"; anything typed must say something.
-  .refine((value) => value === "" || value.length >= 3, "Say why you are visiting (at least a few words), or leave it for later");
+  .refine(
+    (value) => value === "" || value.length >= 3,
+    "Say why you are visiting (at least a few words), or leave it for later",
+  );
 
 /** What screens show for a visit whose reason is still to be given. */
 export const NO_REASON_YET = "No reason given yet";
@@ -106,11 +119,14 @@ export type MeasuredField = (typeof MEASURED_FIELDS)[number];
 /** The measured fields that hold a number (all but where the temperatures were taken). */
 export type NumericMeasuredField = Exclude<MeasuredField, "liquidTempLocation" | "suctionTempLocation">;
 
-export const MeasuredValuesSchema = DiagnosisInputObjectSchema.pick(Object.fromEntries(MEASURED_FIELDS.map((field) => [field, true])) as Record<MeasuredField, true>);
+export const MeasuredValuesSchema = DiagnosisInputObjectSchema.pick(
+  Object.fromEntries(MEASURED_FIELDS.map((field) => [field, true])) as Record<MeasuredField, true>,
+);
 export type MeasuredValues = z.infer<typeof MeasuredValuesSchema>;
 
 /** The message for fields a strict body does not take, naming each one. */
-export const unknownFieldsMessage = (keys: readonly string[], hint: string) => `Not accepted: ${keys.join(", ")}. ${hint}`;
+export const unknownFieldsMessage = (keys: readonly string[], hint: string) =>
+  `Not accepted: ${keys.join(", ")}. ${hint}`;
 
 /**
  * Body of POST /api/visits/:id/readings: the circuit, when it was read, and the measured
@@ -128,7 +144,10 @@ export const ReadingBodySchema = z.strictObject(
   {
     error: (issue) =>
       issue.code === "unrecognized_keys"
-        ? unknownFieldsMessage(issue.keys, "A reading takes measured values only; targets and ratings come from the equipment, the atmosphere from the site.")
+        ? unknownFieldsMessage(
+            issue.keys,
+            "A reading takes measured values only; targets and ratings come from the equipment, the atmosphere from the site.",
+          )
         : undefined,
   },
 );
@@ -137,13 +156,25 @@ export type ReadingBody = z.input<typeof ReadingBodySchema>;
 export const PersonRefSchema = z.object({ id: z.uuid(), name: z.string() });
 
 /** Who voided a record, when and why; null while the record stands. */
-export const VoidInfoSchema = z.object({ at: z.string(), by: PersonRefSchema.nullable(), reason: z.string() }).nullable();
+export const VoidInfoSchema = z
+  .object({ at: z.string(), by: PersonRefSchema.nullable(), reason: z.string() })
+  .nullable();
 export type VoidInfo = z.infer<typeof VoidInfoSchema>;
 /** A record that has not been voided: the only kind results, balances and reports count. */
 export const isStanding = (record: { voided: VoidInfo }) => record.voided === null;
 
 /** Records of a visit that can be voided (with a reason) and entered again; none is ever deleted. */
-export const VOIDABLE_KINDS = ["reading", "adjustment", "electrical-check", "leak-search", "standing-pressure", "pressure-test", "evacuation", "movement", "charging"] as const;
+export const VOIDABLE_KINDS = [
+  "reading",
+  "adjustment",
+  "electrical-check",
+  "leak-search",
+  "standing-pressure",
+  "pressure-test",
+  "evacuation",
+  "movement",
+  "charging",
+] as const;
 export const VoidableKindSchema = z.enum(VOIDABLE_KINDS);
 export type VoidableKind = z.infer<typeof VoidableKindSchema>;
 export const VOIDABLE_KIND_LABELS: Record<VoidableKind, string> = {
@@ -169,7 +200,16 @@ export type VoidBody = z.input<typeof VoidBodySchema>;
 /** Body of POST /api/cylinders/:id/movements/:movementId/void (a reclaim, which has no visit). */
 export const MovementVoidBodySchema = VoidBodySchema.pick({ reason: true });
 
-export const VISIT_EVENT_ACTIONS = ["started", "submitted", "signed-off", "sent-back", "reopened", "voided", "imported", "charge-reference-set"] as const;
+export const VISIT_EVENT_ACTIONS = [
+  "started",
+  "submitted",
+  "signed-off",
+  "sent-back",
+  "reopened",
+  "voided",
+  "imported",
+  "charge-reference-set",
+] as const;
 export type VisitEventAction = (typeof VISIT_EVENT_ACTIONS)[number];
 export const VISIT_EVENT_LABELS: Record<VisitEventAction, string> = {
   started: "Started the visit",
@@ -223,7 +263,14 @@ export const ReadingSchema = z.object({
 });
 export type Reading = z.infer<typeof ReadingSchema>;
 
-export const ADJUSTMENT_KINDS = ["metering", "charge-added", "charge-removed", "airflow", "electrical", "other"] as const;
+export const ADJUSTMENT_KINDS = [
+  "metering",
+  "charge-added",
+  "charge-removed",
+  "airflow",
+  "electrical",
+  "other",
+] as const;
 export const ADJUSTMENT_KIND_LABELS: Record<(typeof ADJUSTMENT_KINDS)[number], string> = {
   metering: "Metering device adjusted",
   "charge-added": "Refrigerant added",
@@ -236,7 +283,8 @@ export const ADJUSTMENT_KIND_LABELS: Record<(typeof ADJUSTMENT_KINDS)[number], s
 /** Adjustment kinds that move refrigerant: each is one register movement, never a second figure. */
 export const CHARGE_ADJUSTMENT_KINDS = ["charge-added", "charge-removed"] as const;
 export type ChargeAdjustmentKind = (typeof CHARGE_ADJUSTMENT_KINDS)[number];
-export const isChargeAdjustment = (kind: string): kind is ChargeAdjustmentKind => (CHARGE_ADJUSTMENT_KINDS as readonly string[]).includes(kind);
+export const isChargeAdjustment = (kind: string): kind is ChargeAdjustmentKind =>
+  (CHARGE_ADJUSTMENT_KINDS as readonly string[]).includes(kind);
 
 export const AdjustmentCreateSchema = z
   .object({
@@ -326,6 +374,14 @@ export const PhotoSchema = z.object({
 });
 export type Photo = z.infer<typeof PhotoSchema>;
 
+/** The form fields sent with a photo (multipart, beside the file). */
+export const PhotoFieldsSchema = z.object({
+  kind: z.enum(PHOTO_KINDS).default("other"),
+  caption: text().max(200).optional(),
+  clientId: optionalClientId,
+  takenAt: deviceTime("takenAt"),
+});
+
 export const ReviewActionSchema = z.discriminatedUnion("action", [
   // A visit started without a reason gets it here, at the latest: submit refuses without one.
   z.object({ action: z.literal("submit"), reason: VisitReasonSchema.optional() }),
@@ -337,7 +393,10 @@ export const ReviewActionSchema = z.discriminatedUnion("action", [
       .max(MAX_COMMENT_LENGTH),
   }),
   // A senior or owner opens a closed visit again for corrections; the reason goes in the audit trail.
-  z.object({ action: z.literal("reopen"), reason: reasonSchema("Say why the visit is reopened, e.g. “pressure test entered wrongly”") }),
+  z.object({
+    action: z.literal("reopen"),
+    reason: reasonSchema("Say why the visit is reopened, e.g. “pressure test entered wrongly”"),
+  }),
 ]);
 export type ReviewAction = z.infer<typeof ReviewActionSchema>;
 
@@ -487,7 +546,10 @@ export type VisitDelta = z.infer<typeof VisitDeltaSchema>;
  * Answer of GET /api/visits/:id: the whole visit, or (asked with a `since` the server can build
  * on) a delta. 304 with no body when If-None-Match names the current revision.
  */
-export const VisitDetailResponseSchema = z.union([z.object({ visit: VisitSchema }), z.object({ delta: VisitDeltaSchema })]);
+export const VisitDetailResponseSchema = z.union([
+  z.object({ visit: VisitSchema }),
+  z.object({ delta: VisitDeltaSchema }),
+]);
 
 export const SendReportSchema = z.object({
   to: z.email("Enter an e-mail address, like facilities@example.com"),
