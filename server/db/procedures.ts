@@ -8,37 +8,59 @@ import { and, asc, eq, or, sql } from "drizzle-orm";
 import type {
   ElectricalCheck,
   ElectricalCheckInput,
-  ElectricalCheckResult,
   Evacuation,
   EvacuationResult,
   LeakSearch,
   LeakSearchInput,
   PressureTest,
-  PressureTestRecordInput,
-  PressureTestRecordResult,
   ProcedureSettings,
   StandingPressureCheck,
   StandingPressureRecordInput,
 } from "@shared/schemas/procedure-records.ts";
 import { ProcedureSettingsSchema } from "@shared/schemas/procedure-records.ts";
-import type { StandingPressureResult, Verdict } from "@shared/schemas/procedures.ts";
 import type { Database } from "./client.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
-import { electricalChecks, evacuations, leakSearches, organisations, pressureTests, standingPressureChecks } from "./schema.ts";
+import {
+  electricalChecks,
+  evacuations,
+  leakSearches,
+  organisations,
+  pressureTests,
+  standingPressureChecks,
+} from "./schema.ts";
 import { entryKind, insertEntryOnce, type DeviceEntryValues, type StoredEntry } from "./store-once.ts";
 
 /** The people a record names: who recorded it and who voided it. */
-const mentioned = (rows: { recordedBy: string | null; voidedBy: string | null }[]) => rows.flatMap((row) => [row.recordedBy, row.voidedBy]);
+const mentioned = (rows: { recordedBy: string | null; voidedBy: string | null }[]) =>
+  rows.flatMap((row) => [row.recordedBy, row.voidedBy]);
 
 /** The organisation's procedure settings (organisations.settings), malformed figures dropped. */
 export async function getProcedureSettings(db: Database, organisationId: string): Promise<ProcedureSettings> {
-  const [row] = await db.select({ settings: organisations.settings }).from(organisations).where(eq(organisations.id, organisationId));
+  const [row] = await db
+    .select({ settings: organisations.settings })
+    .from(organisations)
+    .where(eq(organisations.id, organisationId));
   return ProcedureSettingsSchema.parse(row?.settings ?? {});
 }
 
-// ---- electrical checks ----------------------------------------------------------------------
+// ---- checks and tests: electrical checks, leak searches, standing-pressure checks, pressure tests
 
-function toElectricalCheck(row: typeof electricalChecks.$inferSelect, people: People): ElectricalCheck {
+/** A table of one kind of a visit's checks: each row is what was entered (input) and the verdict on it (result). */
+type CheckTable = typeof electricalChecks | typeof leakSearches | typeof standingPressureChecks | typeof pressureTests;
+type CheckRow<Table extends CheckTable> = Table["$inferSelect"];
+
+/** A stored check as the API shows it. */
+interface CheckRecord<Table extends CheckTable> {
+  id: string;
+  visitId: string;
+  takenAt: string;
+  recordedBy: ReturnType<typeof person>;
+  voided: ReturnType<typeof voidInfo>;
+  input: CheckRow<Table>["input"];
+  result: CheckRow<Table>["result"];
+}
+
+function toCheckRecord<Table extends CheckTable>(row: CheckRow<Table>, people: People): CheckRecord<Table> {
   return {
     id: row.id,
     visitId: row.visitId,
@@ -50,166 +72,86 @@ function toElectricalCheck(row: typeof electricalChecks.$inferSelect, people: Pe
   };
 }
 
-/** ElectricalCheck entries, for storing once per client id and answering a repeated send. */
-export const electricalCheckEntries = entryKind(electricalChecks, async (db, row) => toElectricalCheck(row, await peopleById(db, mentioned([row]))));
-
-export async function listElectricalChecks(db: Database, organisationId: string, visitId: string): Promise<ElectricalCheck[]> {
-  const rows = await db
-    .select()
-    .from(electricalChecks)
-    .where(and(eq(electricalChecks.organisationId, organisationId), eq(electricalChecks.visitId, visitId)))
-    .orderBy(asc(electricalChecks.takenAt));
-  const people = await peopleById(db, mentioned(rows));
-  return rows.map((row) => toElectricalCheck(row, people));
+/**
+ * One kind of check: its entries (stored once per client id, decision 026), its list on a visit,
+ * and its insert. `indexed` copies the figure of the input a column of its own holds (the
+ * electrical check's target, the leak search's method, the standing-pressure check's circuit).
+ */
+function checkKind<Table extends CheckTable>(
+  table: Table,
+  indexed: (input: CheckRow<Table>["input"]) => Partial<Table["$inferInsert"]> = () => ({}),
+) {
+  const entries = entryKind(table, async (db, row: CheckRow<Table>) =>
+    toCheckRecord<Table>(row, await peopleById(db, mentioned([row]))),
+  );
+  async function list(db: Database, organisationId: string, visitId: string): Promise<CheckRecord<Table>[]> {
+    const rows = (await db
+      .select()
+      .from(table as CheckTable)
+      .where(and(eq(table.organisationId, organisationId), eq(table.visitId, visitId)))
+      .orderBy(asc(table.takenAt))) as CheckRow<Table>[];
+    const people = await peopleById(db, mentioned(rows));
+    return rows.map((row) => toCheckRecord<Table>(row, people));
+  }
+  function insert(
+    db: Database,
+    organisationId: string,
+    values: {
+      visitId: string;
+      input: CheckRow<Table>["input"];
+      result: CheckRow<Table>["result"];
+      recordedBy: string;
+    } & DeviceEntryValues,
+  ): Promise<StoredEntry<CheckRecord<Table>>> {
+    const row = {
+      organisationId,
+      visitId: values.visitId,
+      ...indexed(values.input),
+      input: values.input,
+      result: values.result,
+      recordedBy: values.recordedBy,
+      clientId: values.clientId,
+      takenAt: values.takenAt,
+    } as Table["$inferInsert"] & { visitId: string; clientId?: string | null };
+    return insertEntryOnce(db, entries, row);
+  }
+  return { entries, list, insert };
 }
 
-export async function insertElectricalCheck(
+const electricalCheckKind = checkKind(electricalChecks, (input: ElectricalCheckInput) => ({ target: input.target }));
+const leakSearchKind = checkKind(leakSearches, (input: LeakSearchInput) => ({ method: input.method }));
+const standingPressureKind = checkKind(standingPressureChecks, (input: StandingPressureRecordInput) => ({
+  circuit: input.circuit,
+}));
+const pressureTestKind = checkKind(pressureTests);
+
+/** Each kind's entries, for storing once per client id and answering a repeated send. */
+export const electricalCheckEntries = electricalCheckKind.entries;
+export const leakSearchEntries = leakSearchKind.entries;
+export const standingPressureCheckEntries = standingPressureKind.entries;
+export const pressureTestEntries = pressureTestKind.entries;
+
+/** A visit's checks of each kind, in the order they were taken. */
+export const listElectricalChecks: (
   db: Database,
   organisationId: string,
-  values: { visitId: string; input: ElectricalCheckInput; result: ElectricalCheckResult; recordedBy: string } & DeviceEntryValues,
-): Promise<StoredEntry<ElectricalCheck>> {
-  return insertEntryOnce(db, electricalCheckEntries, {
-    organisationId,
-    visitId: values.visitId,
-    target: values.input.target,
-    input: values.input,
-    result: values.result,
-    recordedBy: values.recordedBy,
-    clientId: values.clientId,
-    takenAt: values.takenAt,
-  });
-}
-
-// ---- leak searches --------------------------------------------------------------------------
-
-function toLeakSearch(row: typeof leakSearches.$inferSelect, people: People): LeakSearch {
-  return {
-    id: row.id,
-    visitId: row.visitId,
-    takenAt: row.takenAt.toISOString(),
-    recordedBy: person(people, row.recordedBy),
-    voided: voidInfo(row, people),
-    input: row.input,
-    result: row.result,
-  };
-}
-
-/** LeakSearch entries, for storing once per client id and answering a repeated send. */
-export const leakSearchEntries = entryKind(leakSearches, async (db, row) => toLeakSearch(row, await peopleById(db, mentioned([row]))));
-
-export async function listLeakSearches(db: Database, organisationId: string, visitId: string): Promise<LeakSearch[]> {
-  const rows = await db
-    .select()
-    .from(leakSearches)
-    .where(and(eq(leakSearches.organisationId, organisationId), eq(leakSearches.visitId, visitId)))
-    .orderBy(asc(leakSearches.takenAt));
-  const people = await peopleById(db, mentioned(rows));
-  return rows.map((row) => toLeakSearch(row, people));
-}
-
-export async function insertLeakSearch(
+  visitId: string,
+) => Promise<ElectricalCheck[]> = electricalCheckKind.list;
+export const listLeakSearches: (db: Database, organisationId: string, visitId: string) => Promise<LeakSearch[]> =
+  leakSearchKind.list;
+export const listStandingPressureChecks: (
   db: Database,
   organisationId: string,
-  values: { visitId: string; input: LeakSearchInput; result: Verdict; recordedBy: string } & DeviceEntryValues,
-): Promise<StoredEntry<LeakSearch>> {
-  return insertEntryOnce(db, leakSearchEntries, {
-    organisationId,
-    visitId: values.visitId,
-    method: values.input.method,
-    input: values.input,
-    result: values.result,
-    recordedBy: values.recordedBy,
-    clientId: values.clientId,
-    takenAt: values.takenAt,
-  });
-}
+  visitId: string,
+) => Promise<StandingPressureCheck[]> = standingPressureKind.list;
+export const listPressureTests: (db: Database, organisationId: string, visitId: string) => Promise<PressureTest[]> =
+  pressureTestKind.list;
 
-// ---- standing-pressure checks ---------------------------------------------------------------
-
-function toStandingPressureCheck(row: typeof standingPressureChecks.$inferSelect, people: People): StandingPressureCheck {
-  return {
-    id: row.id,
-    visitId: row.visitId,
-    takenAt: row.takenAt.toISOString(),
-    recordedBy: person(people, row.recordedBy),
-    voided: voidInfo(row, people),
-    input: row.input,
-    result: row.result,
-  };
-}
-
-/** StandingPressureCheck entries, for storing once per client id and answering a repeated send. */
-export const standingPressureCheckEntries = entryKind(standingPressureChecks, async (db, row) => toStandingPressureCheck(row, await peopleById(db, mentioned([row]))));
-
-export async function listStandingPressureChecks(db: Database, organisationId: string, visitId: string): Promise<StandingPressureCheck[]> {
-  const rows = await db
-    .select()
-    .from(standingPressureChecks)
-    .where(and(eq(standingPressureChecks.organisationId, organisationId), eq(standingPressureChecks.visitId, visitId)))
-    .orderBy(asc(standingPressureChecks.takenAt));
-  const people = await peopleById(db, mentioned(rows));
-  return rows.map((row) => toStandingPressureCheck(row, people));
-}
-
-export async function insertStandingPressureCheck(
-  db: Database,
-  organisationId: string,
-  values: { visitId: string; input: StandingPressureRecordInput; result: StandingPressureResult; recordedBy: string } & DeviceEntryValues,
-): Promise<StoredEntry<StandingPressureCheck>> {
-  return insertEntryOnce(db, standingPressureCheckEntries, {
-    organisationId,
-    visitId: values.visitId,
-    circuit: values.input.circuit,
-    input: values.input,
-    result: values.result,
-    recordedBy: values.recordedBy,
-    clientId: values.clientId,
-    takenAt: values.takenAt,
-  });
-}
-
-// ---- pressure tests -------------------------------------------------------------------------
-
-function toPressureTest(row: typeof pressureTests.$inferSelect, people: People): PressureTest {
-  return {
-    id: row.id,
-    visitId: row.visitId,
-    takenAt: row.takenAt.toISOString(),
-    recordedBy: person(people, row.recordedBy),
-    voided: voidInfo(row, people),
-    input: row.input,
-    result: row.result,
-  };
-}
-
-/** PressureTest entries, for storing once per client id and answering a repeated send. */
-export const pressureTestEntries = entryKind(pressureTests, async (db, row) => toPressureTest(row, await peopleById(db, mentioned([row]))));
-
-export async function listPressureTests(db: Database, organisationId: string, visitId: string): Promise<PressureTest[]> {
-  const rows = await db
-    .select()
-    .from(pressureTests)
-    .where(and(eq(pressureTests.organisationId, organisationId), eq(pressureTests.visitId, visitId)))
-    .orderBy(asc(pressureTests.takenAt));
-  const people = await peopleById(db, mentioned(rows));
-  return rows.map((row) => toPressureTest(row, people));
-}
-
-export async function insertPressureTest(
-  db: Database,
-  organisationId: string,
-  values: { visitId: string; input: PressureTestRecordInput; result: PressureTestRecordResult; recordedBy: string } & DeviceEntryValues,
-): Promise<StoredEntry<PressureTest>> {
-  return insertEntryOnce(db, pressureTestEntries, {
-    organisationId,
-    visitId: values.visitId,
-    input: values.input,
-    result: values.result,
-    recordedBy: values.recordedBy,
-    clientId: values.clientId,
-    takenAt: values.takenAt,
-  });
-}
+/** Stores a check once per client id (a repeat answers with the first). */
+export const insertElectricalCheck = electricalCheckKind.insert;
+export const insertLeakSearch = leakSearchKind.insert;
+export const insertStandingPressureCheck = standingPressureKind.insert;
+export const insertPressureTest = pressureTestKind.insert;
 
 // ---- evacuations ----------------------------------------------------------------------------
 
@@ -234,7 +176,9 @@ function toEvacuation(row: EvacuationRow, people: People): Evacuation {
 }
 
 /** Evacuation entries, for storing once per client id and answering a repeated send. */
-export const evacuationEntries = entryKind(evacuations, async (db, row) => toEvacuation(row, await peopleById(db, mentioned([row]))));
+export const evacuationEntries = entryKind(evacuations, async (db, row) =>
+  toEvacuation(row, await peopleById(db, mentioned([row]))),
+);
 
 export async function listEvacuations(db: Database, organisationId: string, visitId: string): Promise<Evacuation[]> {
   const rows = await db
@@ -251,7 +195,12 @@ export async function listEvacuations(db: Database, organisationId: string, visi
  * the device gave it: an evacuation started without signal has no server id on the device yet,
  * so its readings, sent after it, name it by that (README decision 027). Undefined when not found.
  */
-export async function findEvacuation(db: Database, organisationId: string, visitId: string, evacuationId: string): Promise<EvacuationRow | undefined> {
+export async function findEvacuation(
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  evacuationId: string,
+): Promise<EvacuationRow | undefined> {
   const [row] = await db
     .select()
     .from(evacuations)
@@ -297,7 +246,13 @@ export async function updateEvacuation(
   db: Database,
   organisationId: string,
   evacuationId: string,
-  values: { targetMicrons: number; isolatedAtMinutes: number | null; samples: EvacuationRow["samples"]; note: string | null; result: EvacuationResult },
+  values: {
+    targetMicrons: number;
+    isolatedAtMinutes: number | null;
+    samples: EvacuationRow["samples"];
+    note: string | null;
+    result: EvacuationResult;
+  },
   version?: number,
 ): Promise<Evacuation | undefined> {
   const [row] = await db
@@ -320,7 +275,10 @@ export async function updateEvacuation(
 }
 
 /** The organisation's procedure settings with their version (for the company limits page). */
-export async function getVersionedProcedureSettings(db: Database, organisationId: string): Promise<{ settings: ProcedureSettings; version: number }> {
+export async function getVersionedProcedureSettings(
+  db: Database,
+  organisationId: string,
+): Promise<{ settings: ProcedureSettings; version: number }> {
   const [row] = await db
     .select({ settings: organisations.settings, version: organisations.settingsVersion })
     .from(organisations)
