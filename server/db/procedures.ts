@@ -6,15 +6,11 @@
  */
 import { and, asc, eq, or, sql } from "drizzle-orm";
 import type {
-  ElectricalCheck,
   ElectricalCheckInput,
   Evacuation,
   EvacuationResult,
-  LeakSearch,
   LeakSearchInput,
-  PressureTest,
   ProcedureSettings,
-  StandingPressureCheck,
   StandingPressureRecordInput,
 } from "@shared/schemas/procedure-records.ts";
 import { ProcedureSettingsSchema } from "@shared/schemas/procedure-records.ts";
@@ -46,7 +42,8 @@ export async function getProcedureSettings(db: Database, organisationId: string)
 // ---- checks and tests: electrical checks, leak searches, standing-pressure checks, pressure tests
 
 /** A table of one kind of a visit's checks: each row is what was entered (input) and the verdict on it (result). */
-type CheckTable = typeof electricalChecks | typeof leakSearches | typeof standingPressureChecks | typeof pressureTests;
+export type CheckTable =
+  typeof electricalChecks | typeof leakSearches | typeof standingPressureChecks | typeof pressureTests;
 type CheckRow<Table extends CheckTable> = Table["$inferSelect"];
 
 /** A stored check as the API shows it. */
@@ -118,40 +115,17 @@ function checkKind<Table extends CheckTable>(
   return { entries, list, insert };
 }
 
-const electricalCheckKind = checkKind(electricalChecks, (input: ElectricalCheckInput) => ({ target: input.target }));
-const leakSearchKind = checkKind(leakSearches, (input: LeakSearchInput) => ({ method: input.method }));
-const standingPressureKind = checkKind(standingPressureChecks, (input: StandingPressureRecordInput) => ({
+/** One kind of check (checkKind): what a route stores and lists through. */
+export type CheckKind<Table extends CheckTable> = ReturnType<typeof checkKind<Table>>;
+
+export const electricalCheckKind = checkKind(electricalChecks, (input: ElectricalCheckInput) => ({
+  target: input.target,
+}));
+export const leakSearchKind = checkKind(leakSearches, (input: LeakSearchInput) => ({ method: input.method }));
+export const standingPressureKind = checkKind(standingPressureChecks, (input: StandingPressureRecordInput) => ({
   circuit: input.circuit,
 }));
-const pressureTestKind = checkKind(pressureTests);
-
-/** Each kind's entries, for storing once per client id and answering a repeated send. */
-export const electricalCheckEntries = electricalCheckKind.entries;
-export const leakSearchEntries = leakSearchKind.entries;
-export const standingPressureCheckEntries = standingPressureKind.entries;
-export const pressureTestEntries = pressureTestKind.entries;
-
-/** A visit's checks of each kind, in the order they were taken. */
-export const listElectricalChecks: (
-  db: Database,
-  organisationId: string,
-  visitId: string,
-) => Promise<ElectricalCheck[]> = electricalCheckKind.list;
-export const listLeakSearches: (db: Database, organisationId: string, visitId: string) => Promise<LeakSearch[]> =
-  leakSearchKind.list;
-export const listStandingPressureChecks: (
-  db: Database,
-  organisationId: string,
-  visitId: string,
-) => Promise<StandingPressureCheck[]> = standingPressureKind.list;
-export const listPressureTests: (db: Database, organisationId: string, visitId: string) => Promise<PressureTest[]> =
-  pressureTestKind.list;
-
-/** Stores a check once per client id (a repeat answers with the first). */
-export const insertElectricalCheck = electricalCheckKind.insert;
-export const insertLeakSearch = leakSearchKind.insert;
-export const insertStandingPressureCheck = standingPressureKind.insert;
-export const insertPressureTest = pressureTestKind.insert;
+export const pressureTestKind = checkKind(pressureTests);
 
 // ---- evacuations ----------------------------------------------------------------------------
 

@@ -223,7 +223,10 @@ export async function listVisits(db: Database, organisationId: string, filter: V
 }
 
 /** The visit row itself (for permission and status checks), scoped by organisation. */
-export async function findVisit(db: Database, organisationId: string, visitId: string) {
+/** A visit's own row, as routes load it (server/visits/load-records.ts). */
+export type VisitRow = typeof visits.$inferSelect;
+
+export async function findVisit(db: Database, organisationId: string, visitId: string): Promise<VisitRow | undefined> {
   const [row] = await db
     .select()
     .from(visits)

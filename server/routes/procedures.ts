@@ -18,34 +18,32 @@ import {
   LeakSearchBodySchema,
   PressureTestBodySchema,
   StandingPressureBodySchema,
+  type ElectricalCheck,
+  type LeakSearch,
+  type PressureTest,
   type ProcedureSettings,
+  type StandingPressureCheck,
 } from "@shared/schemas/procedure-records.ts";
 import { EVACUATION_LIMITS, evacuationResult, standingPressureOutcome } from "@shared/engine/index.ts";
 import { getAuth } from "../auth/session.ts";
 import type { Database } from "../db/client.ts";
 import { getSite } from "../db/equipment.ts";
 import {
-  electricalCheckEntries,
+  type CheckKind,
+  type CheckTable,
+  electricalCheckKind,
   evacuationEntries,
+  leakSearchKind,
+  pressureTestKind,
+  standingPressureKind,
   type EvacuationRow,
   findEvacuation,
   getProcedureSettings,
-  insertElectricalCheck,
   insertEvacuation,
-  insertLeakSearch,
-  insertPressureTest,
-  insertStandingPressureCheck,
-  leakSearchEntries,
-  listElectricalChecks,
   listEvacuations,
-  listLeakSearches,
-  listPressureTests,
-  listStandingPressureChecks,
-  pressureTestEntries,
-  standingPressureCheckEntries,
   updateEvacuation,
 } from "../db/procedures.ts";
-import { joinCrew } from "../db/visits.ts";
+import { joinCrew, type VisitRow } from "../db/visits.ts";
 import { HttpError, notFound } from "../http/http-error.ts";
 import { parseId } from "../http/parse-id.ts";
 import { requireWritableVisit } from "../http/require-writable-visit.ts";
@@ -93,6 +91,44 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     });
   }
 
+  /**
+   * POST of one kind of check. A repeat of an earlier send (same client id) is answered with the
+   * check it stored; otherwise the visit must take entries, the body is parsed with its schema,
+   * its device time bounded, `judge` makes the stored input and the engine's result from it (with
+   * the unit's and the company's figures), and the check is stored under the visit's lock.
+   */
+  function postCheck<Table extends CheckTable, Body extends { clientId?: string; takenAt?: string }>(
+    path: string,
+    key: string,
+    kind: CheckKind<Table>,
+    schema: { parse: (body: unknown) => Body },
+    judge: (
+      body: Omit<Body, "clientId" | "takenAt">,
+      context: { organisationId: string; visit: VisitRow },
+    ) => Promise<{ input: Table["$inferSelect"]["input"]; result: Table["$inferSelect"]["result"] }>,
+  ) {
+    router.post(path, async (req, res) => {
+      const { organisationId, user } = getAuth(res);
+      const visit = await loadVisit(db, organisationId, req.params.id);
+      if (await answeredBefore(db, res, kind.entries, key, visit.id, req.body)) return;
+      requireWritableVisit(visit.status);
+      const { clientId, takenAt, ...body } = schema.parse(req.body);
+      requireDeviceTime("takenAt", takenAt, visit);
+      const { input, result } = await judge(body, { organisationId, visit });
+      const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
+        kind.insert(tx, organisationId, {
+          visitId: visit.id,
+          input,
+          result,
+          recordedBy: user.id,
+          clientId,
+          takenAt: deviceDate(takenAt),
+        }),
+      );
+      sendEntry(res, { [key]: entry }, replayed);
+    });
+  }
+
   // ---- electrical checks --------------------------------------------------------------------
 
   router.get("/:id/electrical-checks", async (req, res) => {
@@ -100,7 +136,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     const visit = await loadVisit(db, organisationId, req.params.id);
     const unit = await loadUnit(db, organisationId, visit.equipmentId);
     res.json({
-      electricalChecks: await listElectricalChecks(db, organisationId, visit.id),
+      electricalChecks: (await electricalCheckKind.list(db, organisationId, visit.id)) satisfies ElectricalCheck[],
       defaults: {
         nameplateV: unit.supplyVoltageV,
         phases: unit.phases,
@@ -110,134 +146,105 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     });
   });
 
-  router.post("/:id/electrical-checks", async (req, res) => {
-    const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(db, organisationId, req.params.id);
-    if (await answeredBefore(db, res, electricalCheckEntries, "electricalCheck", visit.id, req.body)) return;
-    requireWritableVisit(visit.status);
-    const { clientId, takenAt, ...body } = ElectricalCheckBodySchema.parse(req.body);
-    requireDeviceTime("takenAt", takenAt, visit);
-    const unit = await loadUnit(db, organisationId, visit.equipmentId);
-    // The nameplate fills in what the technician did not type (as targets do for readings).
-    const nameplateV = body.nameplateV ?? unit.supplyVoltageV ?? null;
-    const ratedA =
-      body.ratedA ??
-      (body.target === "compressor" ? unit.compressorRlaA : body.target === "fan" ? unit.fanFlaA : null) ??
-      null;
-    if (body.runningAmps?.length && ratedA === null) {
-      throw new HttpError(400, FIELDS, {
-        ratedA: `Enter the nameplate ${body.target === "fan" ? "FLA" : "RLA"}: ${unit.name} has none on record`,
-      });
-    }
-    if (body.supplyVolts?.length && nameplateV === null) {
-      throw new HttpError(400, FIELDS, { nameplateV: `Enter the nameplate voltage: ${unit.name} has none on record` });
-    }
-    const input = {
-      target: body.target,
-      circuit: body.circuit ?? null,
-      supplyVolts: body.supplyVolts ?? null,
-      nameplateV,
-      insulation: (body.insulation ?? []).map((reading) => ({
-        megohms: reading.megohms,
-        testVoltageV: reading.testVoltageV,
-        ...(reading.point ? { point: reading.point } : {}),
-      })),
-      windingOhms: body.windingOhms ?? null,
-      singlePhaseWindingOhms: body.singlePhaseWindingOhms ?? null,
-      runningAmps: body.runningAmps ?? null,
-      ratedA,
-      note: body.note || null,
-    };
-    const settings = await getProcedureSettings(db, organisationId);
-    const result = electricalCheckResult(input, settings.procedureLimits);
-    const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertElectricalCheck(tx, organisationId, {
-        visitId: visit.id,
-        input,
-        result,
-        recordedBy: user.id,
-        clientId,
-        takenAt: deviceDate(takenAt),
-      }),
-    );
-    sendEntry(res, { electricalCheck: entry }, replayed);
-  });
+  postCheck(
+    "/:id/electrical-checks",
+    "electricalCheck",
+    electricalCheckKind,
+    ElectricalCheckBodySchema,
+    async (body, { organisationId, visit }) => {
+      const unit = await loadUnit(db, organisationId, visit.equipmentId);
+      // The nameplate fills in what the technician did not type (as targets do for readings).
+      const nameplateV = body.nameplateV ?? unit.supplyVoltageV ?? null;
+      const ratedA =
+        body.ratedA ??
+        (body.target === "compressor" ? unit.compressorRlaA : body.target === "fan" ? unit.fanFlaA : null) ??
+        null;
+      if (body.runningAmps?.length && ratedA === null) {
+        throw new HttpError(400, FIELDS, {
+          ratedA: `Enter the nameplate ${body.target === "fan" ? "FLA" : "RLA"}: ${unit.name} has none on record`,
+        });
+      }
+      if (body.supplyVolts?.length && nameplateV === null) {
+        throw new HttpError(400, FIELDS, {
+          nameplateV: `Enter the nameplate voltage: ${unit.name} has none on record`,
+        });
+      }
+      const input = {
+        target: body.target,
+        circuit: body.circuit ?? null,
+        supplyVolts: body.supplyVolts ?? null,
+        nameplateV,
+        insulation: (body.insulation ?? []).map((reading) => ({
+          megohms: reading.megohms,
+          testVoltageV: reading.testVoltageV,
+          ...(reading.point ? { point: reading.point } : {}),
+        })),
+        windingOhms: body.windingOhms ?? null,
+        singlePhaseWindingOhms: body.singlePhaseWindingOhms ?? null,
+        runningAmps: body.runningAmps ?? null,
+        ratedA,
+        note: body.note || null,
+      };
+      const settings = await getProcedureSettings(db, organisationId);
+      return { input, result: electricalCheckResult(input, settings.procedureLimits) };
+    },
+  );
 
   // ---- leak searches ------------------------------------------------------------------------
 
   router.get("/:id/leak-searches", async (req, res) => {
     const { organisationId } = getAuth(res);
     const visit = await loadVisit(db, organisationId, req.params.id);
-    res.json({ leakSearches: await listLeakSearches(db, organisationId, visit.id) });
+    res.json({ leakSearches: (await leakSearchKind.list(db, organisationId, visit.id)) satisfies LeakSearch[] });
   });
 
-  router.post("/:id/leak-searches", async (req, res) => {
-    const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(db, organisationId, req.params.id);
-    if (await answeredBefore(db, res, leakSearchEntries, "leakSearch", visit.id, req.body)) return;
-    requireWritableVisit(visit.status);
-    const { clientId, takenAt, ...input } = LeakSearchBodySchema.parse(req.body);
-    requireDeviceTime("takenAt", takenAt, visit);
-    const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertLeakSearch(tx, organisationId, {
-        visitId: visit.id,
-        input,
-        result: leakSearchResult(input),
-        recordedBy: user.id,
-        clientId,
-        takenAt: deviceDate(takenAt),
-      }),
-    );
-    sendEntry(res, { leakSearch: entry }, replayed);
-  });
+  postCheck("/:id/leak-searches", "leakSearch", leakSearchKind, LeakSearchBodySchema, async (input) => ({
+    input,
+    result: leakSearchResult(input),
+  }));
 
   // ---- standing-pressure checks -------------------------------------------------------------
 
   router.get("/:id/standing-pressure-checks", async (req, res) => {
     const { organisationId } = getAuth(res);
     const visit = await loadVisit(db, organisationId, req.params.id);
-    res.json({ standingPressureChecks: await listStandingPressureChecks(db, organisationId, visit.id) });
+    res.json({
+      standingPressureChecks: (await standingPressureKind.list(
+        db,
+        organisationId,
+        visit.id,
+      )) satisfies StandingPressureCheck[],
+    });
   });
 
   // The body holds the two readings; the refrigerant (the unit's) and the atmosphere (the
   // site's, as for readings) are the server's, so the stored verdict cannot be steered.
-  router.post("/:id/standing-pressure-checks", async (req, res) => {
-    const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(db, organisationId, req.params.id);
-    if (await answeredBefore(db, res, standingPressureCheckEntries, "standingPressureCheck", visit.id, req.body))
-      return;
-    requireWritableVisit(visit.status);
-    const { clientId, takenAt, ...body } = StandingPressureBodySchema.parse(req.body);
-    requireDeviceTime("takenAt", takenAt, visit);
-    const unit = await loadUnit(db, organisationId, visit.equipmentId);
-    const circuit = body.circuit ?? null;
-    if (circuit !== null && !unit.circuits.some((candidate) => candidate.number === circuit)) {
-      throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
-    }
-    const site = await getSite(db, organisationId, unit.siteId);
-    if (!site) throw notFound("Site");
-    const input = {
-      refrigerant: unit.refrigerant,
-      standingGaugeKPa: body.standingGaugeKPa,
-      equalisedTempC: body.equalisedTempC,
-      atmosphericPressureKPa: siteAtmosphere(site).pressureKPa,
-      circuit,
-      note: body.note || null,
-    };
-    const outcome = standingPressureOutcome(input);
-    if ("problem" in outcome) throw new HttpError(400, FIELDS, { [outcome.problem.field]: outcome.problem.message });
-    const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertStandingPressureCheck(tx, organisationId, {
-        visitId: visit.id,
-        input,
-        result: outcome.result,
-        recordedBy: user.id,
-        clientId,
-        takenAt: deviceDate(takenAt),
-      }),
-    );
-    sendEntry(res, { standingPressureCheck: entry }, replayed);
-  });
+  postCheck(
+    "/:id/standing-pressure-checks",
+    "standingPressureCheck",
+    standingPressureKind,
+    StandingPressureBodySchema,
+    async (body, { organisationId, visit }) => {
+      const unit = await loadUnit(db, organisationId, visit.equipmentId);
+      const circuit = body.circuit ?? null;
+      if (circuit !== null && !unit.circuits.some((candidate) => candidate.number === circuit)) {
+        throw new HttpError(400, FIELDS, { circuit: `${unit.name} has ${unit.circuits.length} circuit(s)` });
+      }
+      const site = await getSite(db, organisationId, unit.siteId);
+      if (!site) throw notFound("Site");
+      const input = {
+        refrigerant: unit.refrigerant,
+        standingGaugeKPa: body.standingGaugeKPa,
+        equalisedTempC: body.equalisedTempC,
+        atmosphericPressureKPa: siteAtmosphere(site).pressureKPa,
+        circuit,
+        note: body.note || null,
+      };
+      const outcome = standingPressureOutcome(input);
+      if ("problem" in outcome) throw new HttpError(400, FIELDS, { [outcome.problem.field]: outcome.problem.message });
+      return { input, result: outcome.result };
+    },
+  );
 
   // ---- pressure tests -----------------------------------------------------------------------
 
@@ -247,7 +254,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     const unit = await loadUnit(db, organisationId, visit.equipmentId);
     const settings = await getProcedureSettings(db, organisationId);
     res.json({
-      pressureTests: await listPressureTests(db, organisationId, visit.id),
+      pressureTests: (await pressureTestKind.list(db, organisationId, visit.id)) satisfies PressureTest[],
       defaults: {
         allowedDropKPa: allowedDropKPa(settings),
         ratedHighSideKPa: unit.ratedHighSideKPa,
@@ -256,33 +263,22 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     });
   });
 
-  router.post("/:id/pressure-tests", async (req, res) => {
-    const { organisationId, user } = getAuth(res);
-    const visit = await loadVisit(db, organisationId, req.params.id);
-    if (await answeredBefore(db, res, pressureTestEntries, "pressureTest", visit.id, req.body)) return;
-    requireWritableVisit(visit.status);
-    const { clientId, takenAt, ...body } = PressureTestBodySchema.parse(req.body);
-    requireDeviceTime("takenAt", takenAt, visit);
-    const settings = await getProcedureSettings(db, organisationId);
-    const input = {
-      ...body,
-      testGaugeKPa: body.testGaugeKPa ?? body.startGaugeKPa,
-      allowedDropKPa: body.allowedDropKPa ?? allowedDropKPa(settings),
-      note: body.note || null,
-    };
-    const result = pressureTestRecordResult(input, settings.procedureLimits);
-    const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>
-      insertPressureTest(tx, organisationId, {
-        visitId: visit.id,
-        input,
-        result,
-        recordedBy: user.id,
-        clientId,
-        takenAt: deviceDate(takenAt),
-      }),
-    );
-    sendEntry(res, { pressureTest: entry }, replayed);
-  });
+  postCheck(
+    "/:id/pressure-tests",
+    "pressureTest",
+    pressureTestKind,
+    PressureTestBodySchema,
+    async (body, { organisationId }) => {
+      const settings = await getProcedureSettings(db, organisationId);
+      const input = {
+        ...body,
+        testGaugeKPa: body.testGaugeKPa ?? body.startGaugeKPa,
+        allowedDropKPa: body.allowedDropKPa ?? allowedDropKPa(settings),
+        note: body.note || null,
+      };
+      return { input, result: pressureTestRecordResult(input, settings.procedureLimits) };
+    },
+  );
 
   // ---- evacuations --------------------------------------------------------------------------
 
