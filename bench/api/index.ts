@@ -111,9 +111,12 @@ async function measureRoutes(server: BenchServer, dataSet: DataSet | undefined, 
     }
     for (const connections of levels(route)) {
       const result = await runLoad({ origin: server.origin, connections, seconds, maxRequests: 5_000, next: () => ({ path, headers }), expectStatus: route.conditional ? [304] : [200] });
-      const pass = connections === 1 ? result.p95 < ROUTE_P95_MS : null;
       const firstByte = route.streamed && connections === 1 ? await measureFirstByte(`${server.origin}${path}`, headers, FIRST_BYTE_REQUESTS) : undefined;
-      rows.push({ name: route.name, connections, result, target: connections === 1 ? `p95 < ${ROUTE_P95_MS} ms` : "", pass, firstByte });
+      // A streamed download (every line of a period) is judged by when it starts: its whole
+      // time grows with the lines by design, and is printed beside the first byte.
+      const pass = connections !== 1 ? null : firstByte ? firstByte.firstByteP95 < ROUTE_P95_MS : result.p95 < ROUTE_P95_MS;
+      const target = connections !== 1 ? "" : firstByte ? `first byte p95 < ${ROUTE_P95_MS} ms` : `p95 < ${ROUTE_P95_MS} ms`;
+      rows.push({ name: route.name, connections, result, target, pass, firstByte });
       process.stdout.write(".");
     }
   }
@@ -226,7 +229,9 @@ if (!values["skip-demo"]) {
   try {
     const lists = ROUTES.filter((route) => route.list && selected(route));
     const demoRows = await measureRoutes(demo, undefined, lists, () => [1]);
-    ratios = demoRows.map((row) => ({ name: row.name, demo: row.result.p50, large: rows.find((candidate) => candidate.name === row.name && candidate.connections === 1)!.result.p50 }));
+    // A streamed route's figure is its first byte (see measureRoutes); the others', the whole answer.
+    const figure = (row: Row) => row.firstByte?.firstByteP50 ?? row.result.p50;
+    ratios = demoRows.map((row) => ({ name: row.name, demo: figure(row), large: figure(rows.find((candidate) => candidate.name === row.name && candidate.connections === 1)!) }));
     if (savingSelected) {
       const cookie = await demo.signIn(EMAILS.tech);
       demoSaves = (await saveRows(demo, () => openVisitsForSaving(demo, cookie, DEMO_OPEN_VISITS), cookie)).levels;
@@ -242,7 +247,7 @@ printRows(rows);
 printFirstBytes(rows);
 printSaving(largeSaves, demoSaves);
 if (ratios.length > 0) {
-  console.log(`\nLists at the demo size vs the large data set (p50 at 1 connection; target: at most ${LIST_RATIO}× the demo's):`);
+  console.log(`\nLists at the demo size vs the large data set (p50 at 1 connection, a streamed answer's first byte; target: at most ${LIST_RATIO}× the demo's):`);
   for (const ratio of ratios) {
     const times = ratio.large / ratio.demo;
     console.log(`  ${ratio.name.padEnd(30)} demo ${ms(ratio.demo).padStart(6)} ms   large ${ms(ratio.large).padStart(6)} ms   ×${times.toFixed(1).padStart(6)}   ${times <= LIST_RATIO ? "pass" : "MISS"}`);
