@@ -5,7 +5,7 @@ import { prefetchProcedureLists } from "@/lib/api/procedures.ts";
 import { prefetchVisitScreen } from "@/lib/api/screen-data.ts";
 import { MY_OPEN_VISITS, OPEN_VISITS_FIRST_PAGE, visitsQueryOptions } from "@/lib/api/visits.ts";
 import { useOnlineStatus } from "./online-status.ts";
-import { whenIdle } from "./when-idle.ts";
+import { whenIdle } from "@/lib/when-idle.ts";
 
 /** At most this many visits are fetched ahead for offline use. */
 const VISITS_KEPT = 20;

@@ -1,7 +1,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { useEffect } from "react";
 import { getRefrigerantsInUse } from "@/lib/api/equipment.ts";
-import { whenIdle } from "./when-idle.ts";
+import { whenIdle } from "@/lib/when-idle.ts";
 
 /**
  * Once per start of the signed-in app, when the browser is idle and online: the property tables
