@@ -79,6 +79,25 @@ export function afterFirstScreen(work: () => void): void {
   listeners.add(listener);
 }
 
+/**
+ * Runs `work` once the first screen has settled and the browser is then idle (or after
+ * `timeoutMs` at the latest): for work kept for later (offline use, the toast library), which
+ * must never share a slow link with the screen the technician is waiting for.
+ *
+ * @returns a function that cancels it if it has not run yet
+ */
+export function whenIdleAfterFirstScreen(work: () => void, timeoutMs: number): () => void {
+  let cancelled = false;
+  let cancelIdle: (() => void) | null = null;
+  afterFirstScreen(() => {
+    if (!cancelled) cancelIdle = whenIdle(work, timeoutMs);
+  });
+  return () => {
+    cancelled = true;
+    cancelIdle?.();
+  };
+}
+
 function subscribe(listener: () => void) {
   listeners.add(listener);
   return () => listeners.delete(listener);

@@ -1,5 +1,5 @@
 import { ApiError } from "@/lib/api/api-client.ts";
-import { whenIdle } from "@/lib/when-idle.ts";
+import { whenIdleAfterFirstScreen } from "@/lib/first-screen.ts";
 
 /**
  * The device's outbox: every entry made at a visit that has not reached the server yet, in the
@@ -113,10 +113,11 @@ export function watchEntries(userId: string, onChange: (entries: OutboxEntry[]) 
       },
       () => onChange([]),
     );
-  // Once the screen is drawn, unless the outbox is open already (an entry was kept meanwhile).
+  // Once the first screen is drawn with its data (dexie is 28 kB brotli) and the browser is idle,
+  // unless the outbox is open already (an entry was kept meanwhile).
   let cancel = () => undefined as void;
   if (opened) start();
-  else cancel = whenIdle(start, OUTBOX_WATCH_WAIT_MS);
+  else cancel = whenIdleAfterFirstScreen(start, OUTBOX_WATCH_WAIT_MS);
   return () => {
     stopped = true;
     cancel();

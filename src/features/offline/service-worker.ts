@@ -1,6 +1,5 @@
 import { offerUpdate } from "./app-update.ts";
-import { afterFirstScreen } from "@/lib/first-screen.ts";
-import { whenIdle } from "@/lib/when-idle.ts";
+import { whenIdleAfterFirstScreen } from "@/lib/first-screen.ts";
 
 /** How often an open app asks the server whether a new version was deployed. */
 const UPDATE_CHECK_MS = 60 * 60 * 1000;
@@ -43,5 +42,5 @@ export function registerServiceWorker(): void {
   };
   // Not at the page's load event: the screen's own chunks, its data and the run log's
   // refrigerant tables are still on their way then, and the worker's script took their bandwidth.
-  afterFirstScreen(() => whenIdle(register, 5000));
+  whenIdleAfterFirstScreen(register, 5000);
 }
