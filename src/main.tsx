@@ -5,8 +5,8 @@ import "./styles/app.css";
 import { applyTheme, readTheme } from "./features/theme/theme-store.ts";
 import { startFirstRequests } from "./lib/api/first-requests.ts";
 import { keepDataOnDevice, restoreKeptData } from "./features/offline/persist-queries.ts";
-import { registerServiceWorker } from "./features/offline/service-worker.ts";
 import { createQueryClient } from "./lib/api/query-client.ts";
+import { watchFirstScreen } from "./lib/first-screen.ts";
 import { AppProviders } from "./providers.tsx";
 import { createRouter } from "./router.tsx";
 
@@ -20,6 +20,9 @@ void restoreKeptData(queryClient).then(() => keepDataOnDevice(queryClient));
 // The screen's data goes out before the router asks for the screen's scripts.
 if (navigator.onLine) startFirstRequests(queryClient, window.location.pathname);
 const router = createRouter(queryClient);
+// Work the first screen does not need (the service worker, the connection banners, panels below
+// the first screenful) waits until it is drawn with its data.
+watchFirstScreen(router, queryClient);
 
 createRoot(document.getElementById("root")!).render(
   <StrictMode>
@@ -28,5 +31,3 @@ createRoot(document.getElementById("root")!).render(
     </AppProviders>
   </StrictMode>,
 );
-
-registerServiceWorker();

@@ -1,12 +1,12 @@
 import { QueryClientProvider, type QueryClient } from "@tanstack/react-query";
 import type { ReactNode } from "react";
 import { Toaster } from "@/components/ui/toaster/toaster.tsx";
-import { ConnectionBanners } from "@/features/offline/connection-banners.tsx";
+import { DeferredConnectionBanners } from "@/features/offline/deferred-connection-banners.tsx";
 
 export function AppProviders({ queryClient, children }: { queryClient: QueryClient; children: ReactNode }) {
   return (
     <QueryClientProvider client={queryClient}>
-      <ConnectionBanners />
+      <DeferredConnectionBanners />
       {children}
       <Toaster />
     </QueryClientProvider>

@@ -16,10 +16,6 @@ import { paths } from "@/config/paths.ts";
 import { RunLog } from "@/features/run-log/components/run-log.tsx";
 import { ROLE_READ_ONLY_NOTE } from "@/features/procedures/components/procedure-layout.tsx";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
-import { AuditTrail } from "@/features/visit/components/audit-trail.tsx";
-import { CommentsPanel } from "@/features/visit/components/comments-panel.tsx";
-import { PhotosPanel } from "@/features/visit/components/photos-panel.tsx";
-import { ReviewPanel } from "@/features/visit/components/review-panel.tsx";
 import { useMe } from "@/lib/api/auth.ts";
 import { useChargeReferences } from "@/lib/api/charge-references.ts";
 import { useEquipmentDetail } from "@/lib/api/equipment.ts";
@@ -28,13 +24,57 @@ import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
 
 // Sections other than the run log, and the senior's case-from-reading, load when first shown.
-const ElectricalPanel = lazyPanel(() => import("@/features/procedures/components/electrical-panel.tsx"), "ElectricalPanel");
-const LeakSearchPanel = lazyPanel(() => import("@/features/procedures/components/leak-search-panel.tsx"), "LeakSearchPanel");
-const StandingPressurePanel = lazyPanel(() => import("@/features/procedures/components/standing-pressure-panel.tsx"), "StandingPressurePanel");
-const PressureTestPanel = lazyPanel(() => import("@/features/procedures/components/pressure-test-panel.tsx"), "PressureTestPanel");
-const EvacuationPanel = lazyPanel(() => import("@/features/procedures/components/evacuation-panel.tsx"), "EvacuationPanel");
-const VisitRefrigerant = lazyPanel(() => import("@/features/register/components/visit-refrigerant.tsx"), "VisitRefrigerant");
-const CaseFromReading = lazyPanel(() => import("@/features/casebook/components/case-from-reading.tsx"), "CaseFromReading");
+const ElectricalPanel = lazyPanel(
+  () => import("@/features/procedures/components/electrical-panel.tsx"),
+  "ElectricalPanel",
+);
+const LeakSearchPanel = lazyPanel(
+  () => import("@/features/procedures/components/leak-search-panel.tsx"),
+  "LeakSearchPanel",
+);
+const StandingPressurePanel = lazyPanel(
+  () => import("@/features/procedures/components/standing-pressure-panel.tsx"),
+  "StandingPressurePanel",
+);
+const PressureTestPanel = lazyPanel(
+  () => import("@/features/procedures/components/pressure-test-panel.tsx"),
+  "PressureTestPanel",
+);
+const EvacuationPanel = lazyPanel(
+  () => import("@/features/procedures/components/evacuation-panel.tsx"),
+  "EvacuationPanel",
+);
+const VisitRefrigerant = lazyPanel(
+  () => import("@/features/register/components/visit-refrigerant.tsx"),
+  "VisitRefrigerant",
+);
+const CaseFromReading = lazyPanel(
+  () => import("@/features/casebook/components/case-from-reading.tsx"),
+  "CaseFromReading",
+);
+// The panels below the visit's section: fetched once the first screen is drawn with its data, so
+// that on a slow link they never hold up the run log and its finding.
+const belowTheSection = { afterFirstScreen: true };
+const ReviewPanel = lazyPanel(
+  () => import("@/features/visit/components/review-panel.tsx"),
+  "ReviewPanel",
+  belowTheSection,
+);
+const CommentsPanel = lazyPanel(
+  () => import("@/features/visit/components/comments-panel.tsx"),
+  "CommentsPanel",
+  belowTheSection,
+);
+const PhotosPanel = lazyPanel(
+  () => import("@/features/visit/components/photos-panel.tsx"),
+  "PhotosPanel",
+  belowTheSection,
+);
+const AuditTrail = lazyPanel(
+  () => import("@/features/visit/components/audit-trail.tsx"),
+  "AuditTrail",
+  belowTheSection,
+);
 
 const METERING_LABELS = { txv: "TXV", eev: "EEV", "fixed-orifice": "fixed orifice", capillary: "capillary" } as const;
 
@@ -93,13 +133,28 @@ export default function VisitRoute() {
               label="Circuit"
               value={String(circuit)}
               onChange={(value) => setCircuit(Number(value))}
-              options={unit.circuits.map((candidate) => ({ value: String(candidate.number), label: `Circuit ${candidate.number}` }))}
+              options={unit.circuits.map((candidate) => ({
+                value: String(candidate.number),
+                label: `Circuit ${candidate.number}`,
+              }))}
             />
           )}
           <p className="text-sm text-muted">
-            {applicationText[unit.application].label} · Circuit {nameplate.number}: {METERING_LABELS[nameplate.meteringDevice]}, factory charge <span className="num">{nameplate.factoryChargeKg} kg</span>
-            {nameplate.targetSuperheatK != null && <> · target superheat <span className="num">{nameplate.targetSuperheatK} K</span></>}
-            {nameplate.targetSubcoolingK != null && <> · target subcooling <span className="num">{nameplate.targetSubcoolingK} K</span></>}
+            {applicationText[unit.application].label} · Circuit {nameplate.number}:{" "}
+            {METERING_LABELS[nameplate.meteringDevice]}, factory charge{" "}
+            <span className="num">{nameplate.factoryChargeKg} kg</span>
+            {nameplate.targetSuperheatK != null && (
+              <>
+                {" "}
+                · target superheat <span className="num">{nameplate.targetSuperheatK} K</span>
+              </>
+            )}
+            {nameplate.targetSubcoolingK != null && (
+              <>
+                {" "}
+                · target subcooling <span className="num">{nameplate.targetSubcoolingK} K</span>
+              </>
+            )}
           </p>
           {unit.kind === "packaged rooftop" && <CautionLine topic="height" />}
 
@@ -129,8 +184,23 @@ export default function VisitRoute() {
         </div>
       ),
     },
-    { id: "electrical", label: "Electrical", element: <ElectricalPanel visitId={data.id} circuits={unit.circuits.map((candidate) => candidate.number)} canWrite={canWrite} readOnlyNote={readOnlyNote} /> },
-    { id: "leak-search", label: "Leak search", element: <LeakSearchPanel visitId={data.id} canWrite={canWrite} readOnlyNote={readOnlyNote} /> },
+    {
+      id: "electrical",
+      label: "Electrical",
+      element: (
+        <ElectricalPanel
+          visitId={data.id}
+          circuits={unit.circuits.map((candidate) => candidate.number)}
+          canWrite={canWrite}
+          readOnlyNote={readOnlyNote}
+        />
+      ),
+    },
+    {
+      id: "leak-search",
+      label: "Leak search",
+      element: <LeakSearchPanel visitId={data.id} canWrite={canWrite} readOnlyNote={readOnlyNote} />,
+    },
     {
       id: "standing-pressure",
       label: "Standing pressure",
@@ -150,10 +220,22 @@ export default function VisitRoute() {
     {
       id: "pressure-test",
       label: "Pressure test",
-      element: <PressureTestPanel visitId={data.id} units={units} atmosphericKPa={atmosphericKPa} canWrite={canWrite} readOnlyNote={readOnlyNote} />,
+      element: (
+        <PressureTestPanel
+          visitId={data.id}
+          units={units}
+          atmosphericKPa={atmosphericKPa}
+          canWrite={canWrite}
+          readOnlyNote={readOnlyNote}
+        />
+      ),
     },
     { id: "evacuation", label: "Evacuation", element: <EvacuationPanel visitId={data.id} canWrite={canWrite} /> },
-    { id: "refrigerant", label: "Refrigerant", element: <VisitRefrigerant visitId={data.id} unit={unit} circuit={nameplate.number} canWrite={canWrite} /> },
+    {
+      id: "refrigerant",
+      label: "Refrigerant",
+      element: <VisitRefrigerant visitId={data.id} unit={unit} circuit={nameplate.number} canWrite={canWrite} />,
+    },
   ];
   const activeSection = sections.find((section) => section.id === searchParams.get("section")) ?? sections[0]!;
 
@@ -180,35 +262,56 @@ export default function VisitRoute() {
         <p>
           <span className="font-medium">Reason:</span> {visitReasonText(data.reason)}
         </p>
-        <Link to={paths.visits.report.getHref(data.id)} className="inline-flex min-h-touch items-center gap-2 font-medium text-accent underline underline-offset-4">
+        <Link
+          to={paths.visits.report.getHref(data.id)}
+          className="inline-flex min-h-touch items-center gap-2 font-medium text-accent underline underline-offset-4"
+        >
           <FileText aria-hidden className="size-5" /> Visit report
         </Link>
       </header>
 
       {!open && (
-        <div role="status" className="flex items-start gap-3 rounded-card border-2 border-ink bg-surface p-4" data-testid="visit-closed">
+        <div
+          role="status"
+          className="flex items-start gap-3 rounded-card border-2 border-ink bg-surface p-4"
+          data-testid="visit-closed"
+        >
           <Lock aria-hidden className="mt-0.5 size-5 shrink-0" />
           <div>
             <p className="font-semibold">{closedVisitMessage(data.status)}.</p>
-            {can(role, "signOff") && <p className="text-sm">To correct it, reopen it with a reason in the Review panel below.</p>}
+            {can(role, "signOff") && (
+              <p className="text-sm">To correct it, reopen it with a reason in the Review panel below.</p>
+            )}
           </div>
         </div>
       )}
 
       {data.status === "sent-back" && (
-        <div role="alert" className="flex items-start gap-3 rounded-card border-2 border-caution bg-surface p-4" data-testid="sent-back-note">
+        <div
+          role="alert"
+          className="flex items-start gap-3 rounded-card border-2 border-caution bg-surface p-4"
+          data-testid="sent-back-note"
+        >
           <Undo2 aria-hidden className="mt-0.5 size-5 shrink-0 text-caution" />
           <div>
             <p className="font-semibold">Sent back by the reviewer</p>
             <p>{data.reviewNote ?? "No reason was given; see the comments."}</p>
-            <p className="text-sm text-muted">Record what was asked for, then submit for review again (Review panel below).</p>
+            <p className="text-sm text-muted">
+              Record what was asked for, then submit for review again (Review panel below).
+            </p>
           </div>
         </div>
       )}
 
       {caution && <CautionPanel topic={caution} compact />}
 
-      <Segmented<string> label="Visit section" value={activeSection.id} onChange={(id) => setSearchParams({ section: id }, { replace: true })} options={sections.map(({ id, label }) => ({ value: id, label }))} className="flex flex-wrap" />
+      <Segmented<string>
+        label="Visit section"
+        value={activeSection.id}
+        onChange={(id) => setSearchParams({ section: id }, { replace: true })}
+        options={sections.map(({ id, label }) => ({ value: id, label }))}
+        className="flex flex-wrap"
+      />
       <PanelBoundary key={activeSection.id}>{activeSection.element}</PanelBoundary>
 
       <div className="grid gap-4 lg:grid-cols-2">

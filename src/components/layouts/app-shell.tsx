@@ -6,6 +6,8 @@ import { isNavItemActive, navigationFor, type NavItem } from "@/config/navigatio
 import { paths } from "@/config/paths.ts";
 import { UserMenu } from "@/features/auth/components/user-menu.tsx";
 import { useDayOnDevice } from "@/features/offline/use-day-on-device.ts";
+import { wantConnectionBanners } from "@/features/offline/deferred-connection-banners.tsx";
+import { registerServiceWorker } from "@/features/offline/service-worker.ts";
 import { useOfflineTables } from "@/features/offline/use-offline-tables.ts";
 import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
 import { useOutboxSender } from "@/features/offline/use-outbox-sender.ts";
@@ -18,7 +20,8 @@ import { cn } from "@/lib/cn.ts";
 function ServerStatus() {
   const health = useHealth();
   if (health.isPending) return <span className="text-muted">Connecting…</span>;
-  if (health.isError) return <span className="font-medium text-fault">⚠ Server unreachable — entries are not being saved</span>;
+  if (health.isError)
+    return <span className="font-medium text-fault">⚠ Server unreachable — entries are not being saved</span>;
   return (
     <span className="text-muted">
       ● Server connected <span className="num">v{health.data.version}</span>
@@ -39,14 +42,22 @@ export function AppShell() {
   const navigation = navigationFor(role, { outbox: outbox.data === true });
   // Held before the first toast of a signed-in screen (toaster.tsx says why).
   useEffect(fetchToastLibraryWhenIdle, []);
+  // The app's shell on the device for offline use, once this first screen is drawn (service-worker.ts).
+  useEffect(registerServiceWorker, []);
+  // Entries waiting on the device, counted in the banners above every screen, are this person's.
+  useEffect(wantConnectionBanners, []);
   useOfflineTables();
   useDayOnDevice();
   useOutboxSender(useOutboxEntries());
   // The session ended while the app was open (expired, signed out elsewhere, member removed).
-  if (me.isSuccess && me.data === null) return <Navigate to={paths.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
+  if (me.isSuccess && me.data === null)
+    return <Navigate to={paths.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
   return (
     <div className="flex min-h-dvh flex-col md:flex-row">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-surface focus:p-3">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-surface focus:p-3"
+      >
         Skip to content
       </a>
       <aside className="no-print hidden w-56 shrink-0 flex-col border-r-2 border-rule bg-surface md:flex">
@@ -88,7 +99,9 @@ export function AppShell() {
           </div>
         </header>
         <div aria-live="polite" className="h-1">
-          {navigationState.state === "loading" && <div className="h-1 w-full animate-pulse bg-accent" role="progressbar" aria-label="Loading page" />}
+          {navigationState.state === "loading" && (
+            <div className="h-1 w-full animate-pulse bg-accent" role="progressbar" aria-label="Loading page" />
+          )}
         </div>
         <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-4 pb-28 pt-4 md:px-8 md:pb-10">
           <Outlet />
@@ -107,15 +120,27 @@ export function AppShell() {
  * The phone's bottom bar: the four sections used on the roof, then "More" for the rest, so
  * every target stays wide enough for a gloved thumb.
  */
-function PhoneNavigation({ navigation, location }: { navigation: NavItem[]; location: { pathname: string; search: string } }) {
+function PhoneNavigation({
+  navigation,
+  location,
+}: {
+  navigation: NavItem[];
+  location: { pathname: string; search: string };
+}) {
   const [moreOpen, setMoreOpen] = useState(false);
   const onBar = navigation.filter((item) => item.phoneBar);
   const behindMore = navigation.filter((item) => !item.phoneBar);
   const moreActive = behindMore.some((item) => isNavItemActive(item, location, navigation));
   const itemClass = (active: boolean) =>
-    cn("flex min-h-16 flex-1 flex-col items-center justify-center gap-0.5 text-xs font-medium", active ? "bg-ink text-paper" : "text-ink");
+    cn(
+      "flex min-h-16 flex-1 flex-col items-center justify-center gap-0.5 text-xs font-medium",
+      active ? "bg-ink text-paper" : "text-ink",
+    );
   return (
-    <nav aria-label="Main" className="no-print fixed inset-x-0 bottom-0 z-40 border-t-2 border-rule bg-surface pb-[env(safe-area-inset-bottom)] md:hidden">
+    <nav
+      aria-label="Main"
+      className="no-print fixed inset-x-0 bottom-0 z-40 border-t-2 border-rule bg-surface pb-[env(safe-area-inset-bottom)] md:hidden"
+    >
       {moreOpen && (
         <ul id="more-sections" className="grid grid-cols-2 gap-1 border-b-2 border-rule p-2">
           {behindMore.map((item) => (
@@ -124,7 +149,10 @@ function PhoneNavigation({ navigation, location }: { navigation: NavItem[]; loca
                 to={item.href}
                 onClick={() => setMoreOpen(false)}
                 aria-current={isNavItemActive(item, location, navigation) ? "page" : undefined}
-                className={cn("flex min-h-touch items-center gap-2 rounded-card px-3 font-medium", isNavItemActive(item, location, navigation) ? "bg-ink text-paper" : "hover:bg-sunken")}
+                className={cn(
+                  "flex min-h-touch items-center gap-2 rounded-card px-3 font-medium",
+                  isNavItemActive(item, location, navigation) ? "bg-ink text-paper" : "hover:bg-sunken",
+                )}
               >
                 <item.icon aria-hidden className="size-5" />
                 {item.label}
@@ -147,7 +175,13 @@ function PhoneNavigation({ navigation, location }: { navigation: NavItem[]; loca
           </Link>
         ))}
         {behindMore.length > 0 && (
-          <button type="button" aria-expanded={moreOpen} aria-controls="more-sections" onClick={() => setMoreOpen((open) => !open)} className={itemClass(moreActive || moreOpen)}>
+          <button
+            type="button"
+            aria-expanded={moreOpen}
+            aria-controls="more-sections"
+            onClick={() => setMoreOpen((open) => !open)}
+            className={itemClass(moreActive || moreOpen)}
+          >
             <Menu aria-hidden className="size-6" />
             More
           </button>

@@ -1,5 +1,5 @@
 import { ApiError } from "@/lib/api/api-client.ts";
-import { whenIdle } from "./when-idle.ts";
+import { whenIdleAfterFirstScreen } from "@/lib/first-screen.ts";
 
 /**
  * The device's outbox: every entry made at a visit that has not reached the server yet, in the
@@ -40,7 +40,19 @@ export interface OutboxFile {
   name: string;
 }
 
-export type OutboxKind = "reading" | "adjustment" | "electrical-check" | "leak-search" | "standing-pressure-check" | "pressure-test" | "evacuation" | "evacuation-sample" | "photo" | "comment" | "refrigerant-movement" | "void";
+export type OutboxKind =
+  | "reading"
+  | "adjustment"
+  | "electrical-check"
+  | "leak-search"
+  | "standing-pressure-check"
+  | "pressure-test"
+  | "evacuation"
+  | "evacuation-sample"
+  | "photo"
+  | "comment"
+  | "refrigerant-movement"
+  | "void";
 
 /** How each kind of entry is named in the lists of entries on the device. */
 export const OUTBOX_KIND_LABELS: Record<OutboxKind, string> = {
@@ -71,7 +83,12 @@ const openOutbox = () => (opened ??= import("./outbox-database.ts"));
 export async function keepInOutbox(entry: Omit<OutboxEntry, "queuedAt" | "state" | "attempts">): Promise<void> {
   const { outbox } = await openOutbox();
   const kept = await outbox.entries.get(entry.clientId);
-  await outbox.entries.put({ ...entry, queuedAt: kept?.queuedAt ?? Date.now(), state: "waiting", attempts: kept?.attempts ?? 0 });
+  await outbox.entries.put({
+    ...entry,
+    queuedAt: kept?.queuedAt ?? Date.now(),
+    state: "waiting",
+    attempts: kept?.attempts ?? 0,
+  });
 }
 
 /** A person's entries in the order they were made. */
@@ -96,10 +113,11 @@ export function watchEntries(userId: string, onChange: (entries: OutboxEntry[]) 
       },
       () => onChange([]),
     );
-  // Once the screen is drawn, unless the outbox is open already (an entry was kept meanwhile).
+  // Once the first screen is drawn with its data (dexie is 28 kB brotli) and the browser is idle,
+  // unless the outbox is open already (an entry was kept meanwhile).
   let cancel = () => undefined as void;
   if (opened) start();
-  else cancel = whenIdle(start, OUTBOX_WATCH_WAIT_MS);
+  else cancel = whenIdleAfterFirstScreen(start, OUTBOX_WATCH_WAIT_MS);
   return () => {
     stopped = true;
     cancel();
@@ -146,7 +164,10 @@ export async function sendOrKeep<T>(
   try {
     await keepInOutbox(entry);
   } catch {
-    throw new ApiError(0, "No connection, and this device could not keep the entry: nothing was saved. Your values are kept here; save again when the signal is back.");
+    throw new ApiError(
+      0,
+      "No connection, and this device could not keep the entry: nothing was saved. Your values are kept here; save again when the signal is back.",
+    );
   }
   return { outcome: "kept" };
 }

@@ -5,7 +5,7 @@ import { prefetchProcedureLists } from "@/lib/api/procedures.ts";
 import { prefetchVisitScreen } from "@/lib/api/screen-data.ts";
 import { MY_OPEN_VISITS, OPEN_VISITS_FIRST_PAGE, visitsQueryOptions } from "@/lib/api/visits.ts";
 import { useOnlineStatus } from "./online-status.ts";
-import { whenIdle } from "./when-idle.ts";
+import { whenIdleAfterFirstScreen } from "@/lib/first-screen.ts";
 
 /** At most this many visits are fetched ahead for offline use. */
 const VISITS_KEPT = 20;
@@ -39,7 +39,7 @@ export function useDayOnDevice(): void {
         await prefetchProcedureLists(queryClient, id);
       }
     };
-    const cancel = whenIdle(() => void keep(), 10_000);
+    const cancel = whenIdleAfterFirstScreen(() => void keep(), 10_000);
     return () => {
       stopped = true;
       cancel();

@@ -1,7 +1,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { useEffect } from "react";
 import { getRefrigerantsInUse } from "@/lib/api/equipment.ts";
-import { whenIdle } from "./when-idle.ts";
+import { whenIdleAfterFirstScreen } from "@/lib/first-screen.ts";
 
 /**
  * Once per start of the signed-in app, when the browser is idle and online: the property tables
@@ -19,7 +19,7 @@ export function useOfflineTables(): void {
   const ids = refrigerants.data;
   useEffect(() => {
     if (!ids || ids.length === 0) return;
-    return whenIdle(
+    return whenIdleAfterFirstScreen(
       () => void import("./warm-refrigerant-tables.ts").then(({ warmRefrigerantTables }) => warmRefrigerantTables(ids)),
       10_000,
     );

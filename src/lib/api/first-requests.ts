@@ -1,6 +1,5 @@
 import type { QueryClient } from "@tanstack/react-query";
 import { matchPath } from "react-router-dom";
-import { prefetchRefrigerantTable } from "@shared/property-tables/prefetch-refrigerant-table.ts";
 import { paths } from "@/config/paths.ts";
 import { startEarlyRequest } from "./api-client.ts";
 import { meQueryOptions } from "./auth.ts";
@@ -20,13 +19,18 @@ const RECORD_ID = /^[0-9a-f-]{36}$/i;
  */
 export function startFirstRequests(queryClient: QueryClient, pathname: string): void {
   if (!WITHOUT_SESSION.some((path) => matchPath(path, pathname))) void queryClient.prefetchQuery(meQueryOptions());
-  const visitId = (matchPath(paths.visits.detail.path, pathname) ?? matchPath(paths.visits.report.path, pathname))?.params.visitId;
+  const visitId = (matchPath(paths.visits.detail.path, pathname) ?? matchPath(paths.visits.report.path, pathname))
+    ?.params.visitId;
   if (visitId && RECORD_ID.test(visitId)) {
+    // The tables' import list (62 entries) is needed on a visit's screen only: it comes with the
+    // app's common chunk, which that screen loads anyway, and so is off the sign-in page.
+    const tables = import("./refrigerant-tables.ts");
     startEarlyRequest(`/visits/${visitId}`)
       .then(async (response) => (response.ok ? ((await response.clone().json()) as EarlyVisit) : null))
-      .then((answer) => {
-        if (typeof answer?.visit?.refrigerant === "string") prefetchRefrigerantTable(answer.visit.refrigerant);
+      .then(async (answer) => {
         if (typeof answer?.visit?.equipmentId === "string") startUnitRequests(answer.visit.equipmentId);
+        if (typeof answer?.visit?.refrigerant === "string")
+          (await tables).prefetchRefrigerantTable(answer.visit.refrigerant);
       })
       .catch(() => undefined); // the screen's own request reports failures
   }

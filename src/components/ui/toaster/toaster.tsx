@@ -1,4 +1,5 @@
 import { useEffect, useSyncExternalStore } from "react";
+import { whenIdleAfterFirstScreen } from "@/lib/first-screen.ts";
 
 /**
  * Error toasts, with the toast library (sonner) kept off the first load: it was 9 kB of every
@@ -76,7 +77,9 @@ function LoadedToaster({ library }: { library: Sonner }) {
       mounted = false;
     };
   }, [library]);
-  return <library.Toaster position="top-center" richColors closeButton toastOptions={{ style: { fontSize: "1rem" } }} />;
+  return (
+    <library.Toaster position="top-center" richColors closeButton toastOptions={{ style: { fontSize: "1rem" } }} />
+  );
 }
 
 /** Shown only when the toast library could not be fetched (offline before it was ever held). */
@@ -105,12 +108,8 @@ function PlainToasts({ messages }: { messages: readonly string[] }) {
 
 /** Fetches the toast library once the browser is idle; returns the cancel for an effect's clean-up. */
 export function fetchToastLibraryWhenIdle(): () => void {
-  if (typeof requestIdleCallback === "function") {
-    const handle = requestIdleCallback(fetchSonner, { timeout: 5000 });
-    return () => cancelIdleCallback(handle);
-  }
-  const handle = setTimeout(fetchSonner, 2000);
-  return () => clearTimeout(handle);
+  // After the first screen is drawn with its data: on a slow link, not between its requests.
+  return whenIdleAfterFirstScreen(fetchSonner, 5000);
 }
 
 /** Where toasts appear. */

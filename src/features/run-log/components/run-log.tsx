@@ -7,6 +7,7 @@ import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { useNow } from "@/hooks/use-now.ts";
+import { lazyPanel } from "@/components/lazy/lazy-panel.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { readingsPath, useCreateReading } from "@/lib/api/visits.ts";
 import { discardEntry, type OutboxEntry } from "@/features/offline/outbox-store.ts";
@@ -26,7 +27,6 @@ import {
   type ReadingDraft,
 } from "../utils/reading-draft.ts";
 import { runMinutesAt, runTimeBase } from "../utils/run-time-base.ts";
-import { AdjustmentForm } from "./adjustment-form.tsx";
 import { ChargingPlanPanel } from "./charging-plan-panel.tsx";
 import { CsvImport } from "./csv-import.tsx";
 import { FindingPanel } from "./finding-panel.tsx";
@@ -38,6 +38,10 @@ import { SettledIndicator } from "./settled-indicator.tsx";
 import { TimelineStrip } from "./timeline-strip.tsx";
 import { TrendChart } from "./lazy-trend-chart.tsx";
 import { formatTime } from "@shared/format/date-time.ts";
+
+// Below the reading and the timeline, with react-hook-form (14 kB): fetched once the run log is
+// drawn with its finding, so that it never delays them on a slow link.
+const AdjustmentForm = lazyPanel(() => import("./adjustment-form.tsx"), "AdjustmentForm", { afterFirstScreen: true });
 
 const FIELD_LABELS: Partial<Record<DraftField, string>> = {
   suctionPressureKPa: "suction pressure",
@@ -65,10 +69,7 @@ interface RunLogProps {
  */
 export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, canWrite, readOnlyNote }: RunLogProps) {
   const atmosphericKPa = atmosphere.pressureKPa;
-  const series = useMemo(
-    () => circuitSeries(visit, circuit),
-    [visit, circuit],
-  );
+  const series = useMemo(() => circuitSeries(visit, circuit), [visit, circuit]);
   const lastInput = series.readings.at(-1)?.input;
   // Last values carried forward, so a new reading changes only what moved. What is typed is
   // kept on the device (per visit, circuit and display units) until it is saved: a switch of
@@ -163,7 +164,10 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
   // A refused reading's values go back in the form, with the server's field messages, to be
   // corrected and saved again (as a new entry); the refused one leaves the device.
   const putBack = (entry: OutboxEntry) => {
-    setDraft(() => ({ ...draftFromInput(entry.body as Partial<MeasuredValues>, units, atmosphericKPa), runMinutes: "" }));
+    setDraft(() => ({
+      ...draftFromInput(entry.body as Partial<MeasuredValues>, units, atmosphericKPa),
+      runMinutes: "",
+    }));
     setServerErrors(entry.fields ?? {});
     setFormError(entry.reason ?? null);
     setKeptAt(null);
@@ -230,8 +234,7 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
                 data-testid="finding-waits"
               >
                 Waiting for the readings: the finding below is the last saved reading&apos;s (
-                {formatTime(lastReading.takenAt)}), not the
-                values on screen now.
+                {formatTime(lastReading.takenAt)}), not the values on screen now.
               </p>
             )}
             {shownResult ? (
@@ -302,12 +305,12 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
                     {keptAt
                       ? `Kept on this device (${formatTime(keptAt)}) — sent when online`
                       : savedAt
-                      ? `✓ Saved at ${formatTime(savedAt)} — values stay for the next reading`
-                      : stored.restored
-                        ? "Values typed earlier on this device are back — not saved yet"
-                        : missingRequired.length > 0
-                          ? `${missingRequired.length} required field(s) to go`
-                          : "Values carry forward: change only what moved"}
+                        ? `✓ Saved at ${formatTime(savedAt)} — values stay for the next reading`
+                        : stored.restored
+                          ? "Values typed earlier on this device are back — not saved yet"
+                          : missingRequired.length > 0
+                            ? `${missingRequired.length} required field(s) to go`
+                            : "Values carry forward: change only what moved"}
                   </span>
                 </div>
               </div>
@@ -318,7 +321,10 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
         </div>
       </div>
 
-      <WaitingEntries entries={onDevice} onPutBack={(entry: OutboxEntry) => (entry.kind === "reading" ? putBack(entry) : undefined)} />
+      <WaitingEntries
+        entries={onDevice}
+        onPutBack={(entry: OutboxEntry) => (entry.kind === "reading" ? putBack(entry) : undefined)}
+      />
 
       {shownInput && shownResult && (
         <PanelBoundary>
@@ -374,7 +380,9 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
           <h2 id={`adjust-${circuit}`} className="mb-2 text-lg font-semibold">
             Log an adjustment
           </h2>
-          <AdjustmentForm visitId={visit.id} circuit={circuit} />
+          <PanelBoundary>
+            <AdjustmentForm visitId={visit.id} circuit={circuit} />
+          </PanelBoundary>
         </section>
       )}
       {canWrite && (
