@@ -20,7 +20,6 @@ import { circuitSeries } from "../utils/circuit-series.ts";
 import {
   draftFromInput,
   emptyDraft,
-  parseDraft,
   REQUIRED_FIELDS,
   type DraftField,
   type ReadingDraft,
@@ -65,10 +64,7 @@ interface RunLogProps {
  */
 export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, canWrite, readOnlyNote }: RunLogProps) {
   const atmosphericKPa = atmosphere.pressureKPa;
-  const series = useMemo(
-    () => circuitSeries(visit, circuit),
-    [visit, circuit],
-  );
+  const series = useMemo(() => circuitSeries(visit, circuit), [visit, circuit]);
   const lastInput = series.readings.at(-1)?.input;
   // Last values carried forward, so a new reading changes only what moved. What is typed is
   // kept on the device (per visit, circuit and display units) until it is saved: a switch of
@@ -92,9 +88,13 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
 
   // Run time counts on by itself from the last reading or adjustment unless typed over.
   const autoRunMinutes = runMinutesAt(runTimeBase(series), now);
-  const effectiveDraft =
-    draft.runMinutes === "" && autoRunMinutes !== null ? { ...draft, runMinutes: String(autoRunMinutes) } : draft;
-  const live = useLiveDiagnosis(effectiveDraft, context, units, atmosphericKPa);
+  // Memoised, so the draft is checked once per change rather than on every render.
+  const effectiveDraft = useMemo(
+    () =>
+      draft.runMinutes === "" && autoRunMinutes !== null ? { ...draft, runMinutes: String(autoRunMinutes) } : draft,
+    [draft, autoRunMinutes],
+  );
+  const { reading, live } = useLiveDiagnosis(effectiveDraft, context, units, atmosphericKPa);
   const fieldErrors = { ...live.fieldErrors, ...serverErrors };
   const lastReading = series.readings.at(-1);
   const shownResult = live.kind === "ready" ? live.result : (lastReading?.result ?? null);
@@ -118,22 +118,22 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
 
   const save = async () => {
     setFormError(null);
-    if (live.kind !== "ready") {
+    // What is typed was checked once, as it changed: the save sends that reading.
+    if (reading.kind !== "valid") {
       setFormError(
-        live.kind === "incomplete" && live.missing.length > 0
-          ? `Enter the ${live.missing.map((field) => FIELD_LABELS[field] ?? field).join(", ")} first`
-          : live.kind === "invalid" && live.formError
-            ? live.formError
+        reading.kind === "incomplete" && reading.missing.length > 0
+          ? `Enter the ${reading.missing.map((field) => FIELD_LABELS[field] ?? field).join(", ")} first`
+          : reading.kind === "invalid" && reading.formError
+            ? reading.formError
             : "Check the fields marked below",
       );
       return;
     }
-    const { values } = parseDraft(effectiveDraft, units, atmosphericKPa);
     // The reading keeps the time it was taken, however long the answer takes or how often the save is tried.
     const takenAt = pendingTakenAt ?? new Date().toISOString();
     const clientId = entryId.take();
     // Measured values only: the server adds the nameplate targets, the RLA and the site's atmosphere.
-    const body = { circuit, takenAt, clientId, ...(values as MeasuredValues) };
+    const body = { circuit, takenAt, clientId, ...reading.measured };
     try {
       // Without a connection (or an answer in time) the reading waits in the device's outbox.
       const sent = await keepWhenOffline(() => createReading.mutateAsync({ visitId: visit.id, ...body }), {
@@ -163,7 +163,10 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
   // A refused reading's values go back in the form, with the server's field messages, to be
   // corrected and saved again (as a new entry); the refused one leaves the device.
   const putBack = (entry: OutboxEntry) => {
-    setDraft(() => ({ ...draftFromInput(entry.body as Partial<MeasuredValues>, units, atmosphericKPa), runMinutes: "" }));
+    setDraft(() => ({
+      ...draftFromInput(entry.body as Partial<MeasuredValues>, units, atmosphericKPa),
+      runMinutes: "",
+    }));
     setServerErrors(entry.fields ?? {});
     setFormError(entry.reason ?? null);
     setKeptAt(null);
@@ -230,8 +233,7 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
                 data-testid="finding-waits"
               >
                 Waiting for the readings: the finding below is the last saved reading&apos;s (
-                {formatTime(lastReading.takenAt)}), not the
-                values on screen now.
+                {formatTime(lastReading.takenAt)}), not the values on screen now.
               </p>
             )}
             {shownResult ? (
@@ -302,12 +304,12 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
                     {keptAt
                       ? `Kept on this device (${formatTime(keptAt)}) — sent when online`
                       : savedAt
-                      ? `✓ Saved at ${formatTime(savedAt)} — values stay for the next reading`
-                      : stored.restored
-                        ? "Values typed earlier on this device are back — not saved yet"
-                        : missingRequired.length > 0
-                          ? `${missingRequired.length} required field(s) to go`
-                          : "Values carry forward: change only what moved"}
+                        ? `✓ Saved at ${formatTime(savedAt)} — values stay for the next reading`
+                        : stored.restored
+                          ? "Values typed earlier on this device are back — not saved yet"
+                          : missingRequired.length > 0
+                            ? `${missingRequired.length} required field(s) to go`
+                            : "Values carry forward: change only what moved"}
                   </span>
                 </div>
               </div>
@@ -318,7 +320,10 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
         </div>
       </div>
 
-      <WaitingEntries entries={onDevice} onPutBack={(entry: OutboxEntry) => (entry.kind === "reading" ? putBack(entry) : undefined)} />
+      <WaitingEntries
+        entries={onDevice}
+        onPutBack={(entry: OutboxEntry) => (entry.kind === "reading" ? putBack(entry) : undefined)}
+      />
 
       {shownInput && shownResult && (
         <PanelBoundary>
