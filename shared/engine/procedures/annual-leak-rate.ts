@@ -1,3 +1,8 @@
+import type { AnnualLeakRate } from "../../schemas/procedures.ts";
+import { DAYS_PER_YEAR } from "./procedure-limits.ts";
+
+const MILLISECONDS_PER_DAY = 86_400_000;
+
 /**
  * Estimated annual leak rate of one piece of equipment from its refrigerant additions
  * (top-ups replace what leaked out), as kg per year and percent of the full (nameplate)
@@ -24,11 +29,6 @@
  * @example annualLeakRate([{ date: "2025-01-10", addedKg: 0.5 }, { date: "2025-07-11", addedKg: 0.6 }], 4)
  *   // { kgPerYear: ≈ 1.203, percentOfChargePerYear: ≈ 30.08, periodDays: 182 }
  */
-import type { AnnualLeakRate } from "../../schemas/procedures.ts";
-import { DAYS_PER_YEAR } from "./procedure-limits.ts";
-
-const MILLISECONDS_PER_DAY = 86_400_000;
-
 export function annualLeakRate(events: readonly { date: string; addedKg: number }[], nameplateKg: number, periodDays?: number): AnnualLeakRate {
   if (events.length === 0) throw new RangeError("annualLeakRate requires at least one event");
   if (!Number.isFinite(nameplateKg) || !(nameplateKg > 0)) throw new RangeError("annualLeakRate requires a nameplate charge above zero");

@@ -1,3 +1,13 @@
+import type { ChargeAgainstNameplateResult } from "../../schemas/procedures.ts";
+import { formatHundredths } from "../diagnosis/format-hundredths.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { limitSource } from "./limit-source.ts";
+import { CHARGE_LIMITS, type ChargeLimits } from "./procedure-limits.ts";
+import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCE = citeProcedure(["S11", "S10"], `2 % and 10 % bands (${COMMON_PRACTICE})`);
+
 /**
  * Judges a weighed-in charge against the nameplate charge plus the line-length adjustment
  * (the nameplate covers the unit and a stated line length; add or remove per metre of liquid
@@ -13,16 +23,6 @@
  *   weighed-in charge, or an expected charge (nameplate + adjustment) ≤ 0
  * @example chargeAgainstNameplate({ nameplateKg: 2.4, weighedInKg: 2.65, lineAdjustmentKg: 0.3 }).verdict // "pass"
  */
-import type { ChargeAgainstNameplateResult } from "../../schemas/procedures.ts";
-import { formatHundredths } from "../diagnosis/format-hundredths.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { limitSource } from "./limit-source.ts";
-import { CHARGE_LIMITS, type ChargeLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCE = citeProcedure(["S11", "S10"], `2 % and 10 % bands (${COMMON_PRACTICE})`);
-
 export function chargeAgainstNameplate(
   input: { nameplateKg: number; weighedInKg: number; lineAdjustmentKg?: number },
   limits?: Partial<ChargeLimits>,

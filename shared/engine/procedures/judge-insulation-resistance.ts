@@ -1,3 +1,16 @@
+import type { InsulationKind, InsulationResistanceResult } from "../../schemas/procedures.ts";
+import { formatHundredths } from "../diagnosis/format-hundredths.ts";
+import { limitSource } from "./limit-source.ts";
+import { INSULATION_LIMITS, type InsulationLimits } from "./procedure-limits.ts";
+import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCES: Record<InsulationKind, string> = {
+  wiring: citeProcedure(["S47"], `500 V d.c. test voltage (${MEMORY})`),
+  compressor: citeProcedure(["S48", "S49"], `re-test after the crankcase heater has run (${COMMON_PRACTICE})`),
+  motor: citeProcedure(["S47"], `IEEE 43 5 MΩ for random-wound machines below 1 kV (${MEMORY})`),
+};
+
 /**
  * Judges an insulation-resistance reading to earth. Nothing is refused; every reading is judged.
  *
@@ -20,19 +33,6 @@
  * @throws RangeError "judgeInsulationResistance requires ..." for a negative or non-finite reading or a test voltage ≤ 0
  * @example judgeInsulationResistance({ megohms: 1.2, testVoltageV: 500, kind: "compressor" }).verdict // "warn"
  */
-import type { InsulationKind, InsulationResistanceResult } from "../../schemas/procedures.ts";
-import { formatHundredths } from "../diagnosis/format-hundredths.ts";
-import { limitSource } from "./limit-source.ts";
-import { INSULATION_LIMITS, type InsulationLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCES: Record<InsulationKind, string> = {
-  wiring: citeProcedure(["S47"], `500 V d.c. test voltage (${MEMORY})`),
-  compressor: citeProcedure(["S48", "S49"], `re-test after the crankcase heater has run (${COMMON_PRACTICE})`),
-  motor: citeProcedure(["S47"], `IEEE 43 5 MΩ for random-wound machines below 1 kV (${MEMORY})`),
-};
-
 export function judgeInsulationResistance(
   input: { megohms: number; testVoltageV: number; kind: InsulationKind },
   limits?: Partial<InsulationLimits>,

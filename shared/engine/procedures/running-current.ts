@@ -1,3 +1,15 @@
+import type { RunningCurrentKind, RunningCurrentResult } from "../../schemas/procedures.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { limitSource } from "./limit-source.ts";
+import { RUNNING_CURRENT_LIMITS, type RunningCurrentLimits } from "./procedure-limits.ts";
+import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCES: Record<RunningCurrentKind, string> = {
+  "compressor-rla": citeProcedure(["S39"], COMMON_PRACTICE),
+  "fan-fla": `${COMMON_PRACTICE}; service factor 1.15 (${MEMORY})`,
+};
+
 /**
  * Judges one phase's running current against the nameplate.
  *
@@ -15,18 +27,6 @@
  * @throws RangeError "runningCurrent requires ..." for a negative or non-finite current or a rating ≤ 0
  * @example runningCurrent({ amps: 9.2, ratedA: 10, kind: "compressor-rla" }).percentOfRated // ≈ 92
  */
-import type { RunningCurrentKind, RunningCurrentResult } from "../../schemas/procedures.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { limitSource } from "./limit-source.ts";
-import { RUNNING_CURRENT_LIMITS, type RunningCurrentLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCES: Record<RunningCurrentKind, string> = {
-  "compressor-rla": citeProcedure(["S39"], COMMON_PRACTICE),
-  "fan-fla": `${COMMON_PRACTICE}; service factor 1.15 (${MEMORY})`,
-};
-
 export function runningCurrent(input: { amps: number; ratedA: number; kind: RunningCurrentKind }, limits?: Partial<RunningCurrentLimits>): RunningCurrentResult {
   const { amps, ratedA, kind } = input;
   if (!Number.isFinite(amps) || amps < 0) throw new RangeError("runningCurrent requires a finite current of zero or more");
