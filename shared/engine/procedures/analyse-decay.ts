@@ -47,12 +47,20 @@ function slopeOf(samples: readonly { minutes: number; microns: number }[]): numb
  *   non-finite readings, or a non-positive or non-finite limit
  * @example analyseDecay([{ minutes: 0, microns: 400 }, { minutes: 10, microns: 430 }, { minutes: 20, microns: 450 }]).verdict // "held"
  */
-export function analyseDecay(samples: readonly { minutes: number; microns: number }[], options: DecayOptions = {}): DecayAnalysis {
+export function analyseDecay(
+  samples: readonly { minutes: number; microns: number }[],
+  options: DecayOptions = {},
+): DecayAnalysis {
   requireVacuumSamples(samples, 2, "analyseDecay");
   const { holdMicrons: holdOption, ...limitOptions } = options;
   const { limits, overridden } = resolveLimits(EVACUATION_LIMITS, limitOptions);
   const holdMicrons = holdOption ?? limits.targetMicrons;
-  if (!Number.isFinite(holdMicrons) || !(holdMicrons > 0) || !(limits.targetMicrons > 0) || !(limits.leakRiseMicrons > 0)) {
+  if (
+    !Number.isFinite(holdMicrons) ||
+    !(holdMicrons > 0) ||
+    !(limits.targetMicrons > 0) ||
+    !(limits.leakRiseMicrons > 0)
+  ) {
     throw new RangeError("analyseDecay requires hold, target and leak limits above zero microns");
   }
   const source = limitSource(SOURCE, overridden || holdOption !== undefined);
@@ -93,7 +101,10 @@ export function analyseDecay(samples: readonly { minutes: number; microns: numbe
   if (finalMicrons > limits.leakRiseMicrons) return judged("leak", "leak-past-threshold");
   if (levelledOff) {
     // "Rose above" only when the pull-down had reached the hold limit; otherwise it never got there.
-    return judged("moisture", first.microns > holdMicrons ? "moisture-never-reached" : facts.risen ? "moisture-rose" : "moisture-stayed-above");
+    return judged(
+      "moisture",
+      first.microns > holdMicrons ? "moisture-never-reached" : facts.risen ? "moisture-rose" : "moisture-stayed-above",
+    );
   }
   return judged("leak", "leak-still-rising");
 }

@@ -29,10 +29,12 @@ export function chargeAgainstNameplate(
 ): ChargeAgainstNameplateResult {
   const { nameplateKg, weighedInKg } = input;
   const lineAdjustmentKg = input.lineAdjustmentKg ?? 0;
-  if (![nameplateKg, weighedInKg, lineAdjustmentKg].every(Number.isFinite)) throw new RangeError("chargeAgainstNameplate requires finite masses");
+  if (![nameplateKg, weighedInKg, lineAdjustmentKg].every(Number.isFinite))
+    throw new RangeError("chargeAgainstNameplate requires finite masses");
   if (weighedInKg < 0) throw new RangeError("chargeAgainstNameplate requires a weighed-in charge of zero or more");
   const expectedKg = nameplateKg + lineAdjustmentKg;
-  if (!(nameplateKg > 0) || !(expectedKg > 0)) throw new RangeError("chargeAgainstNameplate requires a nameplate charge, with its line adjustment, above zero");
+  if (!(nameplateKg > 0) || !(expectedKg > 0))
+    throw new RangeError("chargeAgainstNameplate requires a nameplate charge, with its line adjustment, above zero");
   const { limits: applied, overridden } = resolveLimits(CHARGE_LIMITS, limits);
   const source = limitSource(SOURCE, overridden);
   const differenceKg = weighedInKg - expectedKg;
@@ -48,5 +50,9 @@ export function chargeAgainstNameplate(
   if (Math.abs(percent) <= applied.warnWithinPercent) {
     return { verdict: "warn", reason: `${shown}: ${off}; check by subcooling or superheat once stable`, ...result };
   }
-  return { verdict: "fail", reason: `${shown}: ${off}, beyond ${applied.warnWithinPercent} %; recheck the nameplate, line length and scale`, ...result };
+  return {
+    verdict: "fail",
+    reason: `${shown}: ${off}, beyond ${applied.warnWithinPercent} %; recheck the nameplate, line length and scale`,
+    ...result,
+  };
 }

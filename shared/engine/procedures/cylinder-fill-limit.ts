@@ -29,10 +29,12 @@ export function cylinderFillLimit(
   input: { waterCapacityKg: number; refrigerant: string; referenceTempC?: number },
   limits?: Partial<CylinderFillLimits>,
 ): CylinderFillLimit {
-  if (!Number.isFinite(input.waterCapacityKg) || !(input.waterCapacityKg > 0)) throw new RangeError("cylinderFillLimit requires a water capacity above zero");
+  if (!Number.isFinite(input.waterCapacityKg) || !(input.waterCapacityKg > 0))
+    throw new RangeError("cylinderFillLimit requires a water capacity above zero");
   const { limits: applied } = resolveLimits(CYLINDER_FILL_LIMITS, limits);
   const referenceTempC = input.referenceTempC ?? applied.referenceTempC;
-  const liquidDensityKgPerL = saturatedState(input.refrigerant, referenceTempC).liquidDensityKgPerM3 / KG_PER_M3_PER_KG_PER_L;
+  const liquidDensityKgPerL =
+    saturatedState(input.refrigerant, referenceTempC).liquidDensityKgPerM3 / KG_PER_M3_PER_KG_PER_L;
   const waterCapacityL = input.waterCapacityKg;
   return {
     maxContentsKg: applied.liquidVolumeFraction * waterCapacityL * liquidDensityKgPerL,

@@ -19,16 +19,25 @@ const SOURCE = citeProcedure(["S79", "S78"], `warning margin (${COMMON_PRACTICE}
  * @throws RangeError "judgeCylinderFill requires ..." for negative or non-finite contents or a limit ≤ 0
  * @example judgeCylinderFill({ contentsKg: 7.2, maxContentsKg: 7.7 }).verdict // "warn"
  */
-export function judgeCylinderFill(input: { contentsKg: number; maxContentsKg: number }, limits?: Partial<CylinderFillLimits>): Verdict {
+export function judgeCylinderFill(
+  input: { contentsKg: number; maxContentsKg: number },
+  limits?: Partial<CylinderFillLimits>,
+): Verdict {
   const { contentsKg, maxContentsKg } = input;
-  if (!Number.isFinite(contentsKg) || contentsKg < 0) throw new RangeError("judgeCylinderFill requires finite contents of zero or more");
-  if (!Number.isFinite(maxContentsKg) || !(maxContentsKg > 0)) throw new RangeError("judgeCylinderFill requires a fill limit above zero");
+  if (!Number.isFinite(contentsKg) || contentsKg < 0)
+    throw new RangeError("judgeCylinderFill requires finite contents of zero or more");
+  if (!Number.isFinite(maxContentsKg) || !(maxContentsKg > 0))
+    throw new RangeError("judgeCylinderFill requires a fill limit above zero");
   const { limits: applied, overridden } = resolveLimits(CYLINDER_FILL_LIMITS, limits);
   const source = limitSource(SOURCE, overridden);
   const percent = Math.round((100 * contentsKg) / maxContentsKg);
   const shown = `${formatHundredths(contentsKg)} kg is ${percent} % of the ${formatHundredths(maxContentsKg)} kg fill limit`;
   if (contentsKg > maxContentsKg) {
-    return { verdict: "fail", reason: `Overfilled: ${shown}; transfer refrigerant out before the cylinder warms`, source };
+    return {
+      verdict: "fail",
+      reason: `Overfilled: ${shown}; transfer refrigerant out before the cylinder warms`,
+      source,
+    };
   }
   if (contentsKg >= applied.warnFromFractionOfLimit * maxContentsKg) {
     return { verdict: "warn", reason: `Nearly full: ${shown}; use another cylinder for further recovery`, source };

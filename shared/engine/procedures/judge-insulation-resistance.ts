@@ -38,8 +38,10 @@ export function judgeInsulationResistance(
   limits?: Partial<InsulationLimits>,
 ): InsulationResistanceResult {
   const { megohms, testVoltageV, kind } = input;
-  if (!Number.isFinite(megohms) || megohms < 0) throw new RangeError("judgeInsulationResistance requires a finite reading of zero or more megohms");
-  if (!Number.isFinite(testVoltageV) || !(testVoltageV > 0)) throw new RangeError("judgeInsulationResistance requires a test voltage above zero");
+  if (!Number.isFinite(megohms) || megohms < 0)
+    throw new RangeError("judgeInsulationResistance requires a finite reading of zero or more megohms");
+  if (!Number.isFinite(testVoltageV) || !(testVoltageV > 0))
+    throw new RangeError("judgeInsulationResistance requires a test voltage above zero");
   const { limits: applied, overridden } = resolveLimits(INSULATION_LIMITS, limits);
   const source = limitSource(SOURCES[kind], overridden);
   const reading = `${formatHundredths(megohms)} MΩ at ${testVoltageV} V`;
@@ -47,23 +49,51 @@ export function judgeInsulationResistance(
   if (kind === "wiring") {
     const minimumMegohms = applied.wiringMinimumMegohms;
     if (megohms < minimumMegohms) {
-      return { verdict: "fail", reason: `Wiring insulation ${reading} is below the ${minimumMegohms} MΩ minimum: find the fault before energising`, source, minimumMegohms };
+      return {
+        verdict: "fail",
+        reason: `Wiring insulation ${reading} is below the ${minimumMegohms} MΩ minimum: find the fault before energising`,
+        source,
+        minimumMegohms,
+      };
     }
     if (testVoltageV < applied.wiringTestVoltageV) {
-      return { verdict: "warn", reason: `Wiring insulation ${reading} meets ${minimumMegohms} MΩ, but the test voltage is below ${applied.wiringTestVoltageV} V d.c.: re-test at ${applied.wiringTestVoltageV} V`, source, minimumMegohms };
+      return {
+        verdict: "warn",
+        reason: `Wiring insulation ${reading} meets ${minimumMegohms} MΩ, but the test voltage is below ${applied.wiringTestVoltageV} V d.c.: re-test at ${applied.wiringTestVoltageV} V`,
+        source,
+        minimumMegohms,
+      };
     }
-    return { verdict: "pass", reason: `Wiring insulation ${reading} meets the ${minimumMegohms} MΩ minimum`, source, minimumMegohms };
+    return {
+      verdict: "pass",
+      reason: `Wiring insulation ${reading} meets the ${minimumMegohms} MΩ minimum`,
+      source,
+      minimumMegohms,
+    };
   }
 
   const failBelow = kind === "compressor" ? applied.compressorFailBelowMegohms : applied.motorFailBelowMegohms;
   const minimumMegohms = kind === "compressor" ? applied.compressorPassFromMegohms : applied.motorPassFromMegohms;
   const what = kind === "compressor" ? "Compressor winding insulation" : "Motor winding insulation";
   if (megohms < failBelow) {
-    return { verdict: "fail", reason: `${what} ${reading} is below ${failBelow} MΩ: treat it as a ground fault and do not energise`, source, minimumMegohms };
+    return {
+      verdict: "fail",
+      reason: `${what} ${reading} is below ${failBelow} MΩ: treat it as a ground fault and do not energise`,
+      source,
+      minimumMegohms,
+    };
   }
   if (megohms < minimumMegohms) {
-    const advice = kind === "compressor" ? "check the maker's minimum, run the crankcase heater and re-test" : "dry out or re-test, and check the maker's minimum";
-    return { verdict: "warn", reason: `${what} ${reading} is below ${minimumMegohms} MΩ: ${advice}`, source, minimumMegohms };
+    const advice =
+      kind === "compressor"
+        ? "check the maker's minimum, run the crankcase heater and re-test"
+        : "dry out or re-test, and check the maker's minimum";
+    return {
+      verdict: "warn",
+      reason: `${what} ${reading} is below ${minimumMegohms} MΩ: ${advice}`,
+      source,
+      minimumMegohms,
+    };
   }
   return { verdict: "pass", reason: `${what} ${reading} is at or above ${minimumMegohms} MΩ`, source, minimumMegohms };
 }

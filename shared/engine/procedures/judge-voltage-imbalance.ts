@@ -20,18 +20,31 @@ const SOURCE = citeProcedure(["S41", "S42", "S43", "S44"]);
  * @example judgeVoltageImbalance(1.97).verdict // "pass"
  */
 export function judgeVoltageImbalance(percent: number, limits?: Partial<VoltageImbalanceLimits>): Verdict {
-  if (!Number.isFinite(percent) || percent < 0) throw new RangeError("judgeVoltageImbalance requires a finite percentage of zero or more");
+  if (!Number.isFinite(percent) || percent < 0)
+    throw new RangeError("judgeVoltageImbalance requires a finite percentage of zero or more");
   const { limits: applied, overridden } = resolveLimits(VOLTAGE_IMBALANCE_LIMITS, limits);
   const source = limitSource(SOURCE, overridden);
   const shown = `${formatTenths(percent)} %`;
   if (percent > applied.failAbovePercent) {
-    return { verdict: "fail", reason: `Voltage imbalance ${shown} is above ${applied.failAbovePercent} %: do not run the motor until the supply is corrected`, source };
+    return {
+      verdict: "fail",
+      reason: `Voltage imbalance ${shown} is above ${applied.failAbovePercent} %: do not run the motor until the supply is corrected`,
+      source,
+    };
   }
   if (percent > applied.passUpToPercent) {
-    return { verdict: "warn", reason: `Voltage imbalance ${shown} is above the ${applied.passUpToPercent} % equipment limit: the motor runs hot; have the supply checked`, source };
+    return {
+      verdict: "warn",
+      reason: `Voltage imbalance ${shown} is above the ${applied.passUpToPercent} % equipment limit: the motor runs hot; have the supply checked`,
+      source,
+    };
   }
   if (percent > applied.recommendedPercent) {
-    return { verdict: "pass", reason: `Voltage imbalance ${shown} is within the ${applied.passUpToPercent} % equipment limit (NEMA MG-1 recommends ${applied.recommendedPercent} % or less at the motor terminals)`, source };
+    return {
+      verdict: "pass",
+      reason: `Voltage imbalance ${shown} is within the ${applied.passUpToPercent} % equipment limit (NEMA MG-1 recommends ${applied.recommendedPercent} % or less at the motor terminals)`,
+      source,
+    };
   }
   return { verdict: "pass", reason: `Voltage imbalance ${shown} is within ${applied.recommendedPercent} %`, source };
 }

@@ -37,13 +37,15 @@ export function pressureTestResult(input: {
   const { startGaugeKPa, startTempC, endGaugeKPa, endTempC, allowedDropKPa } = input;
   const atmosphere = input.atmosphericPressureKPa ?? STANDARD_ATMOSPHERE_KPA;
   const values = [startGaugeKPa, startTempC, endGaugeKPa, endTempC, allowedDropKPa, atmosphere];
-  if (values.some((value) => !Number.isFinite(value))) throw new RangeError("pressureTestResult requires finite numbers");
+  if (values.some((value) => !Number.isFinite(value)))
+    throw new RangeError("pressureTestResult requires finite numbers");
   if (!(startGaugeKPa > 0)) throw new RangeError("pressureTestResult requires a start pressure above 0 kPa gauge");
   if (!(atmosphere > 0)) throw new RangeError("pressureTestResult requires an atmospheric pressure above zero");
   if (allowedDropKPa < 0) throw new RangeError("pressureTestResult requires an allowed drop of zero or more");
   const startK = startTempC + KELVIN_OFFSET;
   const endK = endTempC + KELVIN_OFFSET;
-  if (!(startK > 0) || !(endK > 0)) throw new RangeError("pressureTestResult requires temperatures above absolute zero");
+  if (!(startK > 0) || !(endK > 0))
+    throw new RangeError("pressureTestResult requires temperatures above absolute zero");
 
   const startAbsKPa = startGaugeKPa + atmosphere;
   const expectedEndGaugeKPa = (startAbsKPa * endK) / startK - atmosphere;

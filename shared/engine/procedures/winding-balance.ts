@@ -21,17 +21,36 @@ const SOURCE = citeProcedure(["S44"], `small hermetic compressors within a few p
  * @throws RangeError "windingBalance requires ..." for a zero, negative or non-finite resistance
  * @example windingBalance([1.52, 1.50, 1.55]).maxDeviationPercent // ≈ 1.75
  */
-export function windingBalance(ohms: readonly [number, number, number], limits?: Partial<WindingBalanceLimits>): WindingBalanceResult {
-  if (ohms.some((value) => !Number.isFinite(value) || !(value > 0))) throw new RangeError("windingBalance requires three finite resistances above zero");
+export function windingBalance(
+  ohms: readonly [number, number, number],
+  limits?: Partial<WindingBalanceLimits>,
+): WindingBalanceResult {
+  if (ohms.some((value) => !Number.isFinite(value) || !(value > 0)))
+    throw new RangeError("windingBalance requires three finite resistances above zero");
   const maxDeviationPercent = largestDeviationPercent(ohms, "windingBalance");
   const { limits: applied, overridden } = resolveLimits(WINDING_BALANCE_LIMITS, limits);
   const source = limitSource(SOURCE, overridden);
   const shown = `${formatTenths(maxDeviationPercent)} %`;
   if (maxDeviationPercent > applied.warnWithinPercent) {
-    return { verdict: "fail", reason: `Winding resistances differ by up to ${shown} from their average, more than ${applied.warnWithinPercent} %: suspect a shorted turn or a poor connection`, source, maxDeviationPercent };
+    return {
+      verdict: "fail",
+      reason: `Winding resistances differ by up to ${shown} from their average, more than ${applied.warnWithinPercent} %: suspect a shorted turn or a poor connection`,
+      source,
+      maxDeviationPercent,
+    };
   }
   if (maxDeviationPercent > applied.passWithinPercent) {
-    return { verdict: "warn", reason: `Winding resistances differ by up to ${shown} from their average, more than ${applied.passWithinPercent} %: compare with the maker's figures`, source, maxDeviationPercent };
+    return {
+      verdict: "warn",
+      reason: `Winding resistances differ by up to ${shown} from their average, more than ${applied.passWithinPercent} %: compare with the maker's figures`,
+      source,
+      maxDeviationPercent,
+    };
   }
-  return { verdict: "pass", reason: `Winding resistances are within ${applied.passWithinPercent} % of their average (${shown})`, source, maxDeviationPercent };
+  return {
+    verdict: "pass",
+    reason: `Winding resistances are within ${applied.passWithinPercent} % of their average (${shown})`,
+    source,
+    maxDeviationPercent,
+  };
 }
