@@ -16,6 +16,16 @@ import {
 const gaugeAt = (id: string, temperatureC: number, point: "bubble" | "dew") =>
   absoluteToGauge(saturationPressure(id, temperatureC, point));
 
+// Tolerances, as toBeCloseTo's digits (passes when |actual − expected| < 0.5 × 10^−digits).
+/**
+ * Pressures made by saturationPressure at a design temperature and read back by
+ * saturationTemperature: the two interpolations of one table (decision 003) are inverse to far
+ * inside the table's own accuracy against the equation of state (INTERPOLATION_TOLERANCE_K, 0.005 K).
+ */
+const TABLE_ROUND_TRIP_DIGITS = 6;
+/** The engine's figure against the same engine function on the same readings: round-off only. */
+const SAME_FUNCTION_DIGITS = 9;
+
 const r407c: DiagnosisInputDraft = Object.freeze({
   refrigerant: "R407C",
   meteringDevice: "txv",
@@ -39,12 +49,12 @@ function fieldErrorsOf(input: unknown): Record<string, string[]> {
 describe("diagnose", () => {
   it("takes superheat from the dew point and subcooling from the bubble point of a blend (TRADE.md §1.1 [S1][S2][S3])", () => {
     const result = diagnose(r407c);
-    expect(result.evaporatingTempC).toBeCloseTo(5, 6);
-    expect(result.condensingTempC).toBeCloseTo(45, 6);
-    expect(result.superheatK).toBeCloseTo(5, 6);
-    expect(result.subcoolingK).toBeCloseTo(5, 6);
-    expect(result.superheatK).toBeCloseTo(superheat("R407C", r407c.suctionPressureKPa, 10), 9);
-    expect(result.subcoolingK).toBeCloseTo(subcooling("R407C", r407c.liquidPressureKPa, 40), 9);
+    expect(result.evaporatingTempC).toBeCloseTo(5, TABLE_ROUND_TRIP_DIGITS);
+    expect(result.condensingTempC).toBeCloseTo(45, TABLE_ROUND_TRIP_DIGITS);
+    expect(result.superheatK).toBeCloseTo(5, TABLE_ROUND_TRIP_DIGITS);
+    expect(result.subcoolingK).toBeCloseTo(5, TABLE_ROUND_TRIP_DIGITS);
+    expect(result.superheatK).toBeCloseTo(superheat("R407C", r407c.suctionPressureKPa, 10), SAME_FUNCTION_DIGITS);
+    expect(result.subcoolingK).toBeCloseTo(subcooling("R407C", r407c.liquidPressureKPa, 40), SAME_FUNCTION_DIGITS);
   });
 
   it("reports the glide: about 5–7 K for R407C (TRADE.md §1.1, memory), in line with the table's glide at 0 °C", () => {
@@ -55,7 +65,7 @@ describe("diagnose", () => {
     expect(Math.abs(result.glideK! - tableGlide)).toBeLessThan(0.5);
     expect(result.evaporatingBubbleTempC).toBeCloseTo(
       saturationTemperature("R407C", gaugeToAbsolute(r407c.suctionPressureKPa), "bubble"),
-      9,
+      SAME_FUNCTION_DIGITS,
     );
   });
 
@@ -66,8 +76,8 @@ describe("diagnose", () => {
       suctionPressureKPa: gaugeAt("R32", 5, "dew"),
       liquidPressureKPa: gaugeAt("R32", 45, "bubble"),
     });
-    expect(result.glideK).toBeCloseTo(0, 9);
-    expect(result.condenserGlideK).toBeCloseTo(0, 9);
+    expect(result.glideK).toBeCloseTo(0, SAME_FUNCTION_DIGITS);
+    expect(result.condenserGlideK).toBeCloseTo(0, SAME_FUNCTION_DIGITS);
   });
 
   it("computes the compression ratio from absolute pressures [S38], from discharge pressure when given", () => {
@@ -75,7 +85,7 @@ describe("diagnose", () => {
     expect(fromLiquid.compressionRatioBasis).toBe("liquid");
     expect(fromLiquid.compressionRatio).toBeCloseTo(
       gaugeToAbsolute(r407c.liquidPressureKPa) / gaugeToAbsolute(r407c.suctionPressureKPa),
-      9,
+      SAME_FUNCTION_DIGITS,
     );
     const fromDischarge = diagnose({ ...r407c, dischargePressureKPa: r407c.liquidPressureKPa + 50 });
     expect(fromDischarge.compressionRatioBasis).toBe("discharge");
