@@ -6,7 +6,7 @@
 import { writeFileSync } from "node:fs";
 import { designCaseInput, type CaseDesign } from "../shared/engine/casebook/design-case-input.ts";
 import { expectedAnswers } from "../shared/engine/casebook/expected-answers.ts";
-import { diagnose, measuredCycle } from "../shared/engine/index.ts";
+import { diagnose, measuredCycle, parseDiagnosisInput } from "../shared/engine/index.ts";
 import { loadSinglePhaseTable } from "../shared/property-tables/load-single-phase-table.ts";
 import { BuiltInCaseFileSchema, BUILT_IN_CASE_FORMAT, type BuiltInCase, type CaseDifficulty, type CaseStory } from "../shared/schemas/casebook.ts";
 import type { Application, ChargeState, DiagnosisInput } from "../shared/schemas/diagnosis.ts";
@@ -253,7 +253,8 @@ function applicationOf(spec: Spec): Application {
 await Promise.all([...new Set(SPECS.filter((spec) => spec.cycle).map((spec) => spec.design.refrigerant))].map((id) => loadSinglePhaseTable(id)));
 
 const cases: BuiltInCase[] = SPECS.map((spec) => {
-  const input = designCaseInput({ ...spec.design, pressureResolutionKPa: 1, readings: { application: applicationOf(spec), ...spec.readings } });
+  // Written here: the case passes the schema before diagnose(), which trusts its input.
+  const input = parseDiagnosisInput(designCaseInput({ ...spec.design, pressureResolutionKPa: 1, readings: { application: applicationOf(spec), ...spec.readings } }));
   const result = diagnose(input);
   if (result.chargeState !== spec.state) console.error(`!! ${spec.id}: engine says ${result.chargeState}, wanted ${spec.state}`, result.alternatives.slice(0, 2), result.warnings.map((w) => w.code));
   const cycle = spec.cycle ? measuredCycle(input) : undefined;

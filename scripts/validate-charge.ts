@@ -25,10 +25,14 @@
  * --void-fraction homogeneous (instead of Zivi, the same check for the two-phase zones).
  */
 import { writeFileSync } from "node:fs";
-import { diagnose, listRefrigerants, seededRandom } from "../shared/engine/index.ts";
+import { diagnose, listRefrigerants, parseDiagnosisInput, seededRandom } from "../shared/engine/index.ts";
 import { loadSinglePhaseTable } from "../shared/property-tables/load-single-phase-table.ts";
 import type { ChargeReference } from "../shared/schemas/diagnosis.ts";
-import { DESIGN_CONDITIONS, type InventoryConditions, type InventoryMeteringDevice } from "./charge-inventory/charge-circuit.ts";
+import {
+  DESIGN_CONDITIONS,
+  type InventoryConditions,
+  type InventoryMeteringDevice,
+} from "./charge-inventory/charge-circuit.ts";
 import { designFlowOf } from "./charge-inventory/design-flow-of.ts";
 import { drawChargeCircuit, SUBCOOLED_SHARE_PER_K } from "./charge-inventory/draw-charge-circuit.ts";
 import { inventoryReadings, type ReadingScatter } from "./charge-inventory/inventory-readings.ts";
@@ -48,8 +52,13 @@ const SEED = Number(argument("seed") ?? 2026);
 const SCATTER = !process.argv.includes("--no-scatter");
 const DUMP = argument("dump");
 const VOID_FRACTION = argument("void-fraction") === "homogeneous" ? "homogeneous" : "zivi";
-const SHARE_PER_K = (argument("subcooled-share-per-k")?.split(",").map(Number) ?? [...SUBCOOLED_SHARE_PER_K]) as [number, number];
-const dumped: string[] = ["refrigerant,device,basis,outdoorC,returnC,deviation,chargeKg,trueKg,kg,lowKg,highKg,subcoolingK,superheatK,referenceSubcoolingK,referenceSuperheatK,valveWideOpen"];
+const SHARE_PER_K = (argument("subcooled-share-per-k")?.split(",").map(Number) ?? [...SUBCOOLED_SHARE_PER_K]) as [
+  number,
+  number,
+];
+const dumped: string[] = [
+  "refrigerant,device,basis,outdoorC,returnC,deviation,chargeKg,trueKg,kg,lowKg,highKg,subcoolingK,superheatK,referenceSubcoolingK,referenceSuperheatK,valveWideOpen",
+];
 
 const WANTED = ["R410A", "R32", "R454B", "R407C", "R134a", "R22"];
 const known = new Set(listRefrigerants().map((entry) => (typeof entry === "string" ? entry : entry.id)));
@@ -74,7 +83,16 @@ interface Tally {
   widthShare: number;
   unsolved: number;
 }
-const emptyTally = (): Tally => ({ cases: 0, estimates: 0, absoluteErrorShare: 0, signedErrorShare: 0, within10: 0, contained: 0, widthShare: 0, unsolved: 0 });
+const emptyTally = (): Tally => ({
+  cases: 0,
+  estimates: 0,
+  absoluteErrorShare: 0,
+  signedErrorShare: 0,
+  within10: 0,
+  contained: 0,
+  widthShare: 0,
+  unsolved: 0,
+});
 const tallies = new Map<string, Tally>();
 const tally = (key: string) => {
   let entry = tallies.get(key);
@@ -90,12 +108,18 @@ for (const refrigerant of REFRIGERANTS) {
   await loadSinglePhaseTable(refrigerant);
   for (const device of DEVICES) {
     for (let index = 0; index < CIRCUITS; index += 1) {
-      const circuit = { ...drawChargeCircuit(refrigerant, device, random, SHARE_PER_K), voidFraction: VOID_FRACTION } as const;
+      const circuit = {
+        ...drawChargeCircuit(refrigerant, device, random, SHARE_PER_K),
+        voidFraction: VOID_FRACTION,
+      } as const;
       const design = designFlowOf(circuit, DESIGN_CONDITIONS);
       const correct = operatingPointAt(circuit, DESIGN_CONDITIONS, circuit.designSubcooledShare, design);
       const correctKg = correct.inventory.totalKg;
       // The reference point as the app stores it: the settled readings at the correct charge, measured.
-      const referenceRun = diagnose(inventoryReadings(circuit, DESIGN_CONDITIONS, correct, correctKg, scatter));
+      // Modelled readings are new data: they pass the schema before diagnose(), which trusts its input.
+      const referenceRun = diagnose(
+        parseDiagnosisInput(inventoryReadings(circuit, DESIGN_CONDITIONS, correct, correctKg, scatter)),
+      );
       const chargeReference: ChargeReference = {
         subcoolingK: referenceRun.subcoolingK ?? correct.subcoolingK,
         superheatK: referenceRun.superheatK ?? correct.superheatK,
@@ -111,17 +135,41 @@ for (const refrigerant of REFRIGERANTS) {
             const trueKg = correctKg * deviation;
             const point = solveOperatingPoint(circuit, conditions, correctKg + trueKg, design);
             for (const basis of ["generic", "unit-reference"] as const) {
-              const keys = [`${refrigerant}|${device}|${basis}`, `all|${device}|${basis}`, `all|all|${basis}`, `deviation ${deviation}|${device === "fixed-orifice" ? "fixed" : "valve"}|${basis}`];
+              const keys = [
+                `${refrigerant}|${device}|${basis}`,
+                `all|${device}|${basis}`,
+                `all|all|${basis}`,
+                `deviation ${deviation}|${device === "fixed-orifice" ? "fixed" : "valve"}|${basis}`,
+              ];
               if (!point) {
                 for (const key of keys) tally(key).unsolved += 1;
                 continue;
               }
-              const input = inventoryReadings(circuit, conditions, point, correctKg, scatter);
+              const input = parseDiagnosisInput(inventoryReadings(circuit, conditions, point, correctKg, scatter));
               const result = diagnose(basis === "generic" ? input : { ...input, chargeReference });
               const estimate = result.chargeDeviation;
               if (DUMP && estimate)
                 dumped.push(
-                  [refrigerant, device, basis, outdoorAirC, returnAirC, deviation, correctKg.toFixed(3), trueKg.toFixed(3), estimate.kg, estimate.lowKg, estimate.highKg, result.subcoolingK?.toFixed(2), result.superheatK?.toFixed(2), basis === "generic" ? (result.targets.subcooling?.targetK.toFixed(2) ?? "") : chargeReference.subcoolingK.toFixed(2), chargeReference.superheatK.toFixed(2), point.valveWideOpen].join(","),
+                  [
+                    refrigerant,
+                    device,
+                    basis,
+                    outdoorAirC,
+                    returnAirC,
+                    deviation,
+                    correctKg.toFixed(3),
+                    trueKg.toFixed(3),
+                    estimate.kg,
+                    estimate.lowKg,
+                    estimate.highKg,
+                    result.subcoolingK?.toFixed(2),
+                    result.superheatK?.toFixed(2),
+                    basis === "generic"
+                      ? (result.targets.subcooling?.targetK.toFixed(2) ?? "")
+                      : chargeReference.subcoolingK.toFixed(2),
+                    chargeReference.superheatK.toFixed(2),
+                    point.valveWideOpen,
+                  ].join(","),
                 );
               for (const key of keys) {
                 const entry = tally(key);
@@ -162,16 +210,37 @@ const row = (label: string, entry: Tally) => {
     percent(entry.widthShare / shown).padStart(9),
   ].join("");
 };
-const header = ["".padEnd(34), "cases".padStart(6), "estimate".padStart(9), "MAE".padStart(9), "bias".padStart(9), "≤10 %".padStart(9), "in range".padStart(10), "width".padStart(9)].join("");
+const header = [
+  "".padEnd(34),
+  "cases".padStart(6),
+  "estimate".padStart(9),
+  "MAE".padStart(9),
+  "bias".padStart(9),
+  "≤10 %".padStart(9),
+  "in range".padStart(10),
+  "width".padStart(9),
+].join("");
 const total = tally("all|all|generic").cases + tally("all|all|generic").unsolved;
-console.log(`\nCharge deviation validation: ${REFRIGERANTS.join(", ")} × ${DEVICES.join(", ")}, ${CIRCUITS} circuits each, ${total} charge levels × 2 bases in ${seconds.toFixed(1)} s (seed ${SEED})`);
-console.log(`Model: ${VOID_FRACTION === "zivi" ? "Zivi" : "homogeneous"} void fraction; subcooled zone ${SHARE_PER_K.join("–")} of the condenser per kelvin of design subcooling`);
-console.log(`Sensor scatter ${SCATTER ? "±0.5 K on temperatures, ±1 % on pressures" : "none"}; true deviation ${DEVIATIONS[0]! * 100} % to +${DEVIATIONS.at(-1)! * 100} %; outdoor ${OUTDOOR_C.join("/")} °C; return air ${RETURN_AIR.map(([dry]) => dry).join("/")} °C`);
-console.log("MAE, bias (mean signed error) and width in % of the correct charge, over the cases with an estimate; ≤10 %: share within 10 % of the charge\n");
+console.log(
+  `\nCharge deviation validation: ${REFRIGERANTS.join(", ")} × ${DEVICES.join(", ")}, ${CIRCUITS} circuits each, ${total} charge levels × 2 bases in ${seconds.toFixed(1)} s (seed ${SEED})`,
+);
+console.log(
+  `Model: ${VOID_FRACTION === "zivi" ? "Zivi" : "homogeneous"} void fraction; subcooled zone ${SHARE_PER_K.join("–")} of the condenser per kelvin of design subcooling`,
+);
+console.log(
+  `Sensor scatter ${SCATTER ? "±0.5 K on temperatures, ±1 % on pressures" : "none"}; true deviation ${DEVIATIONS[0]! * 100} % to +${DEVIATIONS.at(-1)! * 100} %; outdoor ${OUTDOOR_C.join("/")} °C; return air ${RETURN_AIR.map(([dry]) => dry).join("/")} °C`,
+);
+console.log(
+  "MAE, bias (mean signed error) and width in % of the correct charge, over the cases with an estimate; ≤10 %: share within 10 % of the charge\n",
+);
 for (const basis of ["unit-reference", "generic"] as const) {
-  console.log(`${basis === "unit-reference" ? "With the circuit's own reference point" : "Generic (targets and default coefficients)"}`);
+  console.log(
+    `${basis === "unit-reference" ? "With the circuit's own reference point" : "Generic (targets and default coefficients)"}`,
+  );
   console.log(header);
-  for (const refrigerant of REFRIGERANTS) for (const device of DEVICES) console.log(row(`${refrigerant} · ${device}`, tally(`${refrigerant}|${device}|${basis}`)));
+  for (const refrigerant of REFRIGERANTS)
+    for (const device of DEVICES)
+      console.log(row(`${refrigerant} · ${device}`, tally(`${refrigerant}|${device}|${basis}`)));
   for (const device of DEVICES) console.log(row(`all · ${device}`, tally(`all|${device}|${basis}`)));
   console.log(row("all", tally(`all|all|${basis}`)));
   console.log("");
@@ -187,7 +256,8 @@ for (const basis of ["unit-reference", "generic"] as const)
 const unsolved = tally("all|all|generic").unsolved;
 console.log(`\nCharge levels outside the model (no operating point): ${unsolved}`);
 console.log("No estimate, by reason:");
-for (const [note, count] of [...notes].sort((first, second) => second[1] - first[1])) console.log(`  ${String(count).padStart(5)}  ${note}`);
+for (const [note, count] of [...notes].sort((first, second) => second[1] - first[1]))
+  console.log(`  ${String(count).padStart(5)}  ${note}`);
 if (DUMP) {
   writeFileSync(DUMP, `${dumped.join("\n")}\n`);
   console.log(`\nEvery estimate written to ${DUMP}`);

@@ -18,11 +18,19 @@ export type ReadingRow = typeof readings.$inferSelect;
  * readings_visit_idx, so a page costs its length whatever the visit's. `olderCursor` names the
  * oldest row returned when older ones remain.
  */
-export async function circuitReadingsPage(db: Database, visitId: string, circuit: number, limit: number, before?: string): Promise<{ rows: ReadingRow[]; olderCursor: string | null }> {
+export async function circuitReadingsPage(
+  db: Database,
+  visitId: string,
+  circuit: number,
+  limit: number,
+  before?: string,
+): Promise<{ rows: ReadingRow[]; olderCursor: string | null }> {
   const conditions: (SQL | undefined)[] = [eq(readings.visitId, visitId), eq(readings.circuit, circuit), isRecord];
   if (before) {
     // A reading of another visit or circuit names no place in this one: nothing before it.
-    conditions.push(sql`(${readings.takenAt}, ${readings.id}) < (select r.taken_at, r.id from ${readings} r where r.id = ${before} and r.visit_id = ${visitId} and r.circuit = ${circuit})`);
+    conditions.push(
+      sql`(${readings.takenAt}, ${readings.id}) < (select r.taken_at, r.id from ${readings} r where r.id = ${before} and r.visit_id = ${visitId} and r.circuit = ${circuit})`,
+    );
   }
   const rows = await db
     .select()
@@ -49,8 +57,6 @@ export interface ReadingFigures {
   subcoolingK: number | null;
   evaporatingTempC: number | null;
   condensingTempC: number | null;
-  /** The stored result is the current engine's (readings.resultIsCurrent). */
-  resultIsCurrent: boolean;
 }
 
 const figure = (text: string | undefined) => (text === undefined || text === "" ? null : Number(text));
@@ -72,7 +78,6 @@ export async function visitFigures(db: Database, visitId: string, sinceRevision?
       round(date_part('epoch', date_trunc('milliseconds', ${readings.takenAt})) * 1000)::bigint,
       round(date_part('epoch', ${readings.createdAt}) * 1000000)::bigint,
       (${readings.voidedAt} is null)::int,
-      coalesce(${readings.resultIsCurrent}, false)::int,
       ${readings.id},
       ${text(sql`${readings.runMinutes}`)}, ${text(sql`${readings.superheatK}`)}, ${text(sql`${readings.subcoolingK}`)},
       ${text(sql`${readings.evaporatingTempC}`)}, ${text(sql`${readings.condensingTempC}`)}
@@ -83,14 +88,24 @@ export async function visitFigures(db: Database, visitId: string, sinceRevision?
   const all = rows[0]?.figures;
   if (!all) return [];
   return all.split(";").map((line) => {
-    const [circuit, takenAt, createdAtMicros, standing, current, id, runMinutes, superheatK, subcoolingK, evaporatingTempC, condensingTempC] = line.split(",");
+    const [
+      circuit,
+      takenAt,
+      createdAtMicros,
+      standing,
+      id,
+      runMinutes,
+      superheatK,
+      subcoolingK,
+      evaporatingTempC,
+      condensingTempC,
+    ] = line.split(",");
     return {
       id: id!,
       circuit: Number(circuit),
       takenAt: Number(takenAt),
       createdAtMicros: Number(createdAtMicros),
       standing: standing === "1",
-      resultIsCurrent: current === "1",
       runMinutes: figure(runMinutes),
       superheatK: figure(superheatK),
       subcoolingK: figure(subcoolingK),
@@ -107,16 +122,28 @@ export async function visitFigures(db: Database, visitId: string, sinceRevision?
  * a void or an import's commit moves the maximum; the count of records also catches rows
  * stored without that bump (the seed and the large data set's builder insert directly).
  */
-export async function runLogStamp(db: Database, visitId: string): Promise<{ readings: number; records: number; adjustments: number }> {
+export async function runLogStamp(
+  db: Database,
+  visitId: string,
+): Promise<{ readings: number; records: number; adjustments: number }> {
   const { rows } = await db.execute<{ readings: number | null; records: number; adjustments: number | null }>(sql`
     select r.readings, r.records, (select max(revision) from ${adjustments} where visit_id = ${visitId}) as adjustments
     from (select max(revision) as readings, count(*)::int as records from ${readings} where visit_id = ${visitId} and pending_import_id is null) r`);
-  return { readings: Number(rows[0]?.readings ?? 0), records: Number(rows[0]?.records ?? 0), adjustments: Number(rows[0]?.adjustments ?? 0) };
+  return {
+    readings: Number(rows[0]?.readings ?? 0),
+    records: Number(rows[0]?.records ?? 0),
+    adjustments: Number(rows[0]?.adjustments ?? 0),
+  };
 }
 
 /** The order visitFigures gives: by circuit, time, when stored, id. */
 export function compareFigures(a: ReadingFigures, b: ReadingFigures): number {
-  return a.circuit - b.circuit || a.takenAt - b.takenAt || a.createdAtMicros - b.createdAtMicros || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
+  return (
+    a.circuit - b.circuit ||
+    a.takenAt - b.takenAt ||
+    a.createdAtMicros - b.createdAtMicros ||
+    (a.id < b.id ? -1 : a.id > b.id ? 1 : 0)
+  );
 }
 
 /** Whole rows of these readings, in time order. */

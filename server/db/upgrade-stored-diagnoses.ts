@@ -9,6 +9,7 @@
  * was not the unit's history when the reading was taken.
  */
 import { and, isNull, sql } from "drizzle-orm";
+import { parseDiagnosisInput } from "@shared/engine/index.ts";
 import { diagnoseReading } from "../diagnosis/diagnose-on-server.ts";
 import type { Database } from "./client.ts";
 import { circuitCharges, equipment, readings, visits } from "./schema.ts";
@@ -22,19 +23,43 @@ export async function upgradeStoredDiagnoses(db: Database): Promise<number> {
   let upgraded = 0;
   for (;;) {
     const stale = await db
-      .select({ id: readings.id, circuit: readings.circuit, input: readings.input, application: equipment.application, circuits: equipment.circuits, lineAdjustmentKg: circuitCharges.lineAdjustmentKg })
+      .select({
+        id: readings.id,
+        circuit: readings.circuit,
+        input: readings.input,
+        application: equipment.application,
+        circuits: equipment.circuits,
+        lineAdjustmentKg: circuitCharges.lineAdjustmentKg,
+      })
       .from(readings)
       .innerJoin(visits, sql`${visits.id} = ${readings.visitId}`)
       .innerJoin(equipment, sql`${equipment.id} = ${visits.equipmentId}`)
-      .leftJoin(circuitCharges, and(sql`${circuitCharges.visitId} = ${readings.visitId}`, sql`${circuitCharges.circuit} = ${readings.circuit}`, isNull(circuitCharges.voidedAt)))
+      .leftJoin(
+        circuitCharges,
+        and(
+          sql`${circuitCharges.visitId} = ${readings.visitId}`,
+          sql`${circuitCharges.circuit} = ${readings.circuit}`,
+          isNull(circuitCharges.voidedAt),
+        ),
+      )
       .where(sql`NOT (${readings.result} ? ${MARKER_FIELD})`)
       .limit(BATCH);
     if (stale.length === 0) return upgraded;
     for (const row of stale) {
       const factoryChargeKg = row.circuits.find((circuit) => circuit.number === row.circuit)?.factoryChargeKg;
-      const chargeKg = row.input.chargeKg ?? (factoryChargeKg === undefined ? undefined : factoryChargeKg + (row.lineAdjustmentKg ?? 0));
-      const input = { ...row.input, application: row.input.application ?? row.application, ...(chargeKg === undefined ? {} : { chargeKg }) };
-      await db.update(readings).set({ input, result: await diagnoseReading(input) }).where(sql`${readings.id} = ${row.id}`);
+      const chargeKg =
+        row.input.chargeKg ??
+        (factoryChargeKg === undefined ? undefined : factoryChargeKg + (row.lineAdjustmentKg ?? 0));
+      // Saved by an older version and given fields here: it passes today's schema before diagnose(), which trusts its input.
+      const input = parseDiagnosisInput({
+        ...row.input,
+        application: row.input.application ?? row.application,
+        ...(chargeKg === undefined ? {} : { chargeKg }),
+      });
+      await db
+        .update(readings)
+        .set({ input, result: await diagnoseReading(input) })
+        .where(sql`${readings.id} = ${row.id}`);
     }
     upgraded += stale.length;
   }

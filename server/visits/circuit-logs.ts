@@ -13,7 +13,14 @@ import { assessTrend, DiagnosisInputError, lastAtEachInstant } from "@shared/eng
 import type { TrendResult } from "@shared/schemas/diagnosis.ts";
 import type { Adjustment, ChartPoint, CircuitLog } from "@shared/schemas/visits.ts";
 import type { Database } from "../db/client.ts";
-import { compareFigures, readingRowsById, runLogStamp, visitFigures, type ReadingFigures, type ReadingRow } from "../db/circuit-readings.ts";
+import {
+  compareFigures,
+  readingRowsById,
+  runLogStamp,
+  visitFigures,
+  type ReadingFigures,
+  type ReadingRow,
+} from "../db/circuit-readings.ts";
 import { readingsThatMatter } from "../report/readings-that-matter.ts";
 import { chartSeries } from "./chart-series.ts";
 
@@ -25,17 +32,23 @@ export type CircuitLogRows = Omit<CircuitLog, "keyReadings" | "olderCursor"> & {
 /**
  * The settling assessment over the figures of one circuit's standing readings, the same as
  * assessTrend over the whole readings: one reading per instant (the last stored), each marked
- * with the first adjustment made since the reading before it. A reading whose stored result is
- * the current engine's is judged from its figures (all the rule reads of it); an older one is
- * read whole and diagnosed again, as assessTrend does. The results the answer carries (the last
- * settled reading's and the latest) are the whole stored ones.
+ * with the first adjustment made since the reading before it. Every reading is judged from its
+ * stored result's figures (all the rule reads of it), never diagnosed again: a stored result is
+ * the finding the technician saw (README decision 004), and the server brings results of an
+ * older engine up to date at start-up (server/db/upgrade-stored-diagnoses.ts). The results the
+ * answer carries (the last settled reading's and the latest) are the whole stored ones.
  */
-async function trendOf(db: Database, figures: readonly ReadingFigures[], adjustments: readonly Adjustment[]): Promise<TrendResult | null> {
+async function trendOf(
+  db: Database,
+  figures: readonly ReadingFigures[],
+  adjustments: readonly Adjustment[],
+): Promise<TrendResult | null> {
   const distinct = lastAtEachInstant(figures, (row) => row.takenAt);
   if (distinct.length === 0) return null;
-  const older = distinct.filter((row) => row.resultIsCurrent !== true).map((row) => row.id);
-  const whole = new Map((await readingRowsById(db, older)).map((row) => [row.id, row]));
-  const changes = adjustments.map((adjustment) => ({ at: Date.parse(adjustment.at), description: adjustment.description }));
+  const changes = adjustments.map((adjustment) => ({
+    at: Date.parse(adjustment.at),
+    description: adjustment.description,
+  }));
   let next = 0;
   let previous = -Infinity;
   const series = distinct.map((row) => {
@@ -44,12 +57,11 @@ async function trendOf(db: Database, figures: readonly ReadingFigures[], adjustm
     while (next < changes.length && changes[next]!.at <= previous) next += 1;
     const change = next < changes.length && changes[next]!.at <= time ? changes[next]! : undefined;
     previous = time;
-    const stored = whole.get(row.id);
     return {
       takenAt: new Date(row.takenAt).toISOString(),
-      // What the rule reads of a current result: the two figures, and the fields that mark it current.
-      input: stored?.input ?? (row.runMinutes === null ? {} : { runMinutes: row.runMinutes }),
-      result: stored?.result ?? { chargeState: null, chargeDeviation: null, superheatK: row.superheatK, subcoolingK: row.subcoolingK },
+      // What the rule reads of a stored result: the two figures, and the fields that mark it as one to read, not work out again.
+      input: row.runMinutes === null ? {} : { runMinutes: row.runMinutes },
+      result: { chargeState: null, chargeDeviation: null, superheatK: row.superheatK, subcoolingK: row.subcoolingK },
       ...(change ? { adjustment: change.description } : {}),
     };
   });
@@ -73,9 +85,16 @@ async function trendOf(db: Database, figures: readonly ReadingFigures[], adjustm
 }
 
 /** One circuit's log from its records' figures (in time order) and the visit's adjustments. */
-async function circuitLog(db: Database, circuit: number, records: readonly ReadingFigures[], adjustments: readonly Adjustment[]): Promise<CircuitLogRows> {
+async function circuitLog(
+  db: Database,
+  circuit: number,
+  records: readonly ReadingFigures[],
+  adjustments: readonly Adjustment[],
+): Promise<CircuitLogRows> {
   const figures = records.filter((row) => row.standing);
-  const relevant = adjustments.filter((adjustment) => adjustment.voided === null && (adjustment.circuit === null || adjustment.circuit === circuit));
+  const relevant = adjustments.filter(
+    (adjustment) => adjustment.voided === null && (adjustment.circuit === null || adjustment.circuit === circuit),
+  );
   const origin = figures[0]?.takenAt ?? 0;
   const points: ChartPoint[] = figures.map((row) => ({
     x: (row.takenAt - origin) / MINUTE_MS,
@@ -86,7 +105,13 @@ async function circuitLog(db: Database, circuit: number, records: readonly Readi
     condensingTempC: row.condensingTempC,
   }));
   const trend = await trendOf(db, figures, relevant);
-  const keyRows = await readingRowsById(db, readingsThatMatter(figures, relevant.map((adjustment) => adjustment.at)).readings.map((row) => row.id));
+  const keyRows = await readingRowsById(
+    db,
+    readingsThatMatter(
+      figures,
+      relevant.map((adjustment) => adjustment.at),
+    ).readings.map((row) => row.id),
+  );
   return {
     circuit,
     recordCount: records.length,
@@ -115,7 +140,12 @@ const caches = new WeakMap<Database, LogCache>();
  * write stamps its rows with the visit's new revision, under the visit's lock, so nothing older
  * can appear later), or all of them read again.
  */
-async function recordsOf(db: Database, visitId: string, stamp: Stamp, held?: { stamp: Stamp; work: Promise<Worked> }): Promise<ReadingFigures[]> {
+async function recordsOf(
+  db: Database,
+  visitId: string,
+  stamp: Stamp,
+  held?: { stamp: Stamp; work: Promise<Worked> },
+): Promise<ReadingFigures[]> {
   const base = held ? await held.work.catch(() => undefined) : undefined;
   if (!held || !base) return visitFigures(db, visitId);
   if (stamp.readings === held.stamp.readings && stamp.records === held.stamp.records) return base.records;
@@ -154,13 +184,22 @@ async function workOut(db: Database, records: ReadingFigures[], adjustments: rea
  *
  * @param adjustments the visit's adjustments in time order (voided ones are left out here)
  */
-export async function circuitLogs(db: Database, visitId: string, adjustments: readonly Adjustment[]): Promise<CircuitLogRows[]> {
+export async function circuitLogs(
+  db: Database,
+  visitId: string,
+  adjustments: readonly Adjustment[],
+): Promise<CircuitLogRows[]> {
   let cache = caches.get(db);
   if (!cache) caches.set(db, (cache = new Map()));
   const stamp = await runLogStamp(db, visitId);
   const held = cache.get(visitId);
   cache.delete(visitId);
-  if (held && held.stamp.readings === stamp.readings && held.stamp.records === stamp.records && held.stamp.adjustments === stamp.adjustments) {
+  if (
+    held &&
+    held.stamp.readings === stamp.readings &&
+    held.stamp.records === stamp.records &&
+    held.stamp.adjustments === stamp.adjustments
+  ) {
     cache.set(visitId, held);
     return (await held.work).logs;
   }

@@ -10,9 +10,13 @@
  *
  * Pure: no database, no I/O; the callers load the equipment and the site.
  */
-import { fastParseDiagnosisInput } from "@shared/engine/diagnosis/fast-parse-diagnosis-input.ts";
 import { atmosphericPressureAtAltitude, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.ts";
-import { DiagnosisInputSchema, type Application, type ChargeReference, type DiagnosisInput } from "@shared/schemas/diagnosis.ts";
+import {
+  DiagnosisInputSchema,
+  type Application,
+  type ChargeReference,
+  type DiagnosisInput,
+} from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { Atmosphere, MeasuredValues } from "@shared/schemas/visits.ts";
 import type { z } from "zod";
@@ -71,11 +75,13 @@ export function siteAtmosphere(site: ReadingSite): Atmosphere {
  * The validated diagnosis input for measured values on a circuit, or the zod error naming the
  * fields to fix (a single reading answers it as a 400; the CSV import reports it by line).
  *
- * Validated once: the engine's hand-written check (README decision 006, held to the schema by
- * its property test) accepts valid input without zod's cost, on every save and imported row;
- * only what it refuses goes through the schema, which stays the source of every message.
+ * Validated once, here, by `DiagnosisInputSchema` (README decision 034): this is the API's
+ * boundary for the engine's input, and `diagnose()` trusts what passes it.
  */
-export function readingInput(measured: Partial<MeasuredValues>, { unit, nameplate, site, charge }: ReadingContext): z.ZodSafeParseResult<DiagnosisInput> {
+export function readingInput(
+  measured: Partial<MeasuredValues>,
+  { unit, nameplate, site, charge }: ReadingContext,
+): z.ZodSafeParseResult<DiagnosisInput> {
   const merged = {
     ...measured,
     refrigerant: unit.refrigerant,
@@ -89,6 +95,5 @@ export function readingInput(measured: Partial<MeasuredValues>, { unit, nameplat
     chargeReference: charge.chargeReference ?? undefined,
     atmosphericPressureKPa: siteAtmosphere(site).pressureKPa,
   };
-  const accepted = fastParseDiagnosisInput(merged);
-  return accepted ? { success: true, data: accepted } : DiagnosisInputSchema.safeParse(merged);
+  return DiagnosisInputSchema.safeParse(merged);
 }

@@ -18,11 +18,7 @@ export { PropertyRangeError } from "./properties/property-range-error.ts";
 export type { PropertyErrorCode } from "./properties/property-range-error.ts";
 export { RefrigerantTableSchema } from "./properties/refrigerant-table-schema.ts";
 export type { RefrigerantTable } from "./properties/refrigerant-table-schema.ts";
-export {
-  INTERPOLATION_TOLERANCE_K,
-  KELVIN_OFFSET,
-  STANDARD_ATMOSPHERE_KPA,
-} from "./properties/property-tolerances.ts";
+export { INTERPOLATION_TOLERANCE_K, KELVIN_OFFSET, STANDARD_ATMOSPHERE_KPA } from "./properties/property-tolerances.ts";
 export { relativeDifference } from "./properties/relative-difference.ts";
 // Single-phase states (superheated vapour, subcooled liquid): tables loaded per refrigerant
 export { registerSinglePhaseTable } from "./properties/single-phase-registry.ts";
@@ -75,8 +71,14 @@ export * as cycleLimits from "./cycle/cycle-limits.ts";
 export { diagnose, MIN_VERDICT_SCORE, MIN_VERDICT_SCORE_WITHOUT_CHARGE_SIGNAL } from "./diagnosis/diagnose.ts";
 export type { DiagnoseOptions } from "./diagnosis/diagnose.ts";
 export { lastAtEachInstant } from "./diagnosis/last-at-each-instant.ts";
-export { assessTrend, SETTLED_WINDOW_MINUTES, SETTLED_MAX_CHANGE_K, SETTLED_MAX_RATE_K_PER_MIN } from "./diagnosis/assess-trend.ts";
+export {
+  assessTrend,
+  SETTLED_WINDOW_MINUTES,
+  SETTLED_MAX_CHANGE_K,
+  SETTLED_MAX_RATE_K_PER_MIN,
+} from "./diagnosis/assess-trend.ts";
 export { DiagnosisInputError } from "./diagnosis/diagnosis-input-error.ts";
+export { parseDiagnosisInput } from "./diagnosis/parse-diagnosis-input.ts";
 export type { FieldErrors } from "./diagnosis/diagnosis-input-error.ts";
 export { superheat } from "./diagnosis/superheat.ts";
 export { subcooling } from "./diagnosis/subcooling.ts";
@@ -90,7 +92,13 @@ export { suctionLineAllowance } from "./diagnosis/suction-line-allowance.ts";
 export { dischargeLineLimits } from "./diagnosis/discharge-line-limits.ts";
 export { inferApplication } from "./diagnosis/infer-application.ts";
 export { SIGNATURES, SIGNATURE_FEATURES, EXPECTATIONS } from "./diagnosis/signature-table.ts";
-export type { Signature, SignatureCell, SignatureFeature, Expectation, MeteringFamily } from "./diagnosis/signature-table.ts";
+export type {
+  Signature,
+  SignatureCell,
+  SignatureFeature,
+  Expectation,
+  MeteringFamily,
+} from "./diagnosis/signature-table.ts";
 export { signatureMatch } from "./diagnosis/signature-match.ts";
 export { meteringFamilyOf } from "./diagnosis/metering-family-of.ts";
 export { DIAGNOSIS_RULES } from "./diagnosis/rules/registry.ts";
@@ -108,7 +116,14 @@ export type { ChargeToAdd } from "./casebook/charge-to-add.ts";
 export { authoredAnswers } from "./casebook/authored-answers.ts";
 export { workedSolution } from "./casebook/worked-solution.ts";
 export { caseSafetyNotes } from "./casebook/case-safety-notes.ts";
-export { generateCase, GENERATOR_REFRIGERANTS, SENSOR_NOISE_K, GAUGE_NOISE_FRACTION, GAUGE_RESOLUTION_KPA, MAX_GENERATOR_DRAWS } from "./casebook/generate-case.ts";
+export {
+  generateCase,
+  GENERATOR_REFRIGERANTS,
+  SENSOR_NOISE_K,
+  GAUGE_NOISE_FRACTION,
+  GAUGE_RESOLUTION_KPA,
+  MAX_GENERATOR_DRAWS,
+} from "./casebook/generate-case.ts";
 export { drawFaultScenario } from "./casebook/draw-fault-scenario.ts";
 export type { FaultScenario, FaultScenarioOptions } from "./casebook/draw-fault-scenario.ts";
 export { OPERATING_POINTS, FAULT_MOVES, BAND_UNITS } from "./casebook/fault-scenarios.ts";
@@ -140,7 +155,11 @@ export { judgeCylinderFill } from "./procedures/judge-cylinder-fill.ts";
 export { annualLeakRate } from "./procedures/annual-leak-rate.ts";
 export { chargeAgainstNameplate } from "./procedures/charge-against-nameplate.ts";
 export { judgeLeakSearch } from "./procedures/judge-leak-search.ts";
-export { judgeStandingPressure, NON_CONDENSABLE_EXCESS_K, STANDING_PRESSURE_TOLERANCE_K } from "./procedures/judge-standing-pressure.ts";
+export {
+  judgeStandingPressure,
+  NON_CONDENSABLE_EXCESS_K,
+  STANDING_PRESSURE_TOLERANCE_K,
+} from "./procedures/judge-standing-pressure.ts";
 export { standingPressureOutcome } from "./procedures/standing-pressure-outcome.ts";
 export type { StandingPressureProblem } from "./procedures/standing-pressure-outcome.ts";
 export type { LeakSearchFindings } from "./procedures/judge-leak-search.ts";

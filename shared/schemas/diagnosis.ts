@@ -40,7 +40,8 @@ export const APPLICATIONS = [
   "process-chilling",
 ] as const;
 export const ApplicationSchema = z.enum(APPLICATIONS, {
-  error: "Choose the application: comfort cooling, heat pump, medium- or low-temperature refrigeration, or process chilling",
+  error:
+    "Choose the application: comfort cooling, heat pump, medium- or low-temperature refrigeration, or process chilling",
 });
 export type Application = z.infer<typeof ApplicationSchema>;
 
@@ -126,7 +127,12 @@ interface FieldRange {
 
 function gaugePressureRange(label: string): FieldRange {
   // The lower bound (a perfect vacuum) depends on atmospheric pressure: checked separately.
-  return { min: -Infinity, max: MAX_GAUGE_PRESSURE_KPA, minMessage: "", maxMessage: `${label} above ${MAX_GAUGE_PRESSURE_KPA} kPa gauge is beyond any refrigeration gauge` };
+  return {
+    min: -Infinity,
+    max: MAX_GAUGE_PRESSURE_KPA,
+    minMessage: "",
+    maxMessage: `${label} above ${MAX_GAUGE_PRESSURE_KPA} kPa gauge is beyond any refrigeration gauge`,
+  };
 }
 
 function lineTemperatureRange(label: string): FieldRange {
@@ -148,7 +154,12 @@ function airTemperatureRange(label: string): FieldRange {
 }
 
 function targetRange(label: string): FieldRange {
-  return { min: 0, max: MAX_TARGET_K, minMessage: `${label} cannot be negative`, maxMessage: `${label} above ${MAX_TARGET_K} K is not a nameplate value` };
+  return {
+    min: 0,
+    max: MAX_TARGET_K,
+    minMessage: `${label} cannot be negative`,
+    maxMessage: `${label} above ${MAX_TARGET_K} K is not a nameplate value`,
+  };
 }
 
 /** Ranges of the numeric readings, by field. */
@@ -170,8 +181,19 @@ export const DIAGNOSIS_FIELD_RANGES = {
   },
   supplyAirDryBulbC: airTemperatureRange("Supply air dry bulb"),
   outdoorAirDryBulbC: airTemperatureRange("Outdoor air dry bulb"),
-  compressorAmps: { min: 0, max: MAX_CURRENT_A, minMessage: "Compressor current cannot be negative", maxMessage: `Compressor current above ${MAX_CURRENT_A} A is not plausible` },
-  compressorRla: { min: 0, minExclusive: true, max: MAX_CURRENT_A, minMessage: "Compressor RLA must be above 0 A", maxMessage: `Compressor RLA above ${MAX_CURRENT_A} A is not plausible` },
+  compressorAmps: {
+    min: 0,
+    max: MAX_CURRENT_A,
+    minMessage: "Compressor current cannot be negative",
+    maxMessage: `Compressor current above ${MAX_CURRENT_A} A is not plausible`,
+  },
+  compressorRla: {
+    min: 0,
+    minExclusive: true,
+    max: MAX_CURRENT_A,
+    minMessage: "Compressor RLA must be above 0 A",
+    maxMessage: `Compressor RLA above ${MAX_CURRENT_A} A is not plausible`,
+  },
   targetSuperheatK: targetRange("Target superheat"),
   targetSubcoolingK: targetRange("Target subcooling"),
   atmosphericPressureKPa: {
@@ -197,18 +219,27 @@ export const DIAGNOSIS_FIELD_RANGES = {
 } as const satisfies Record<string, FieldRange>;
 const RANGE_ENTRIES = Object.entries(DIAGNOSIS_FIELD_RANGES) as [keyof typeof DIAGNOSIS_FIELD_RANGES, FieldRange][];
 
+/** Bounds of a reference point's figures, °C and K. */
+export const CHARGE_REFERENCE_LIMITS = {
+  temperatureC: { min: -80, max: 90 },
+  differenceK: { min: -5, max: 60 },
+} as const;
+const { temperatureC: REF_T, differenceK: REF_D } = CHARGE_REFERENCE_LIMITS;
+const referenceTemperature = (label: string) =>
+  z
+    .number({ error: `${label} must be a number in °C` })
+    .min(REF_T.min, `${label} below −80 °C is not a running circuit`)
+    .max(REF_T.max, `${label} above 90 °C is not a running circuit`);
+const referenceDifference = (label: string) =>
+  z
+    .number({ error: `${label} must be a number in K` })
+    .min(REF_D.min, `${label} below −5 K is not a settled reading`)
+    .max(REF_D.max, `${label} above 60 K is not a settled reading`);
 /**
  * A circuit's charge reference point: settled readings taken at a known correct charge (after a
  * weigh-in of the nameplate charge into an evacuated circuit). Charge deviation is measured from
  * it (virtual refrigerant charge method, Li & Braun 2009).
  */
-/** Bounds of a reference point's figures (the fast input check reads them too). */
-export const CHARGE_REFERENCE_LIMITS = { temperatureC: { min: -80, max: 90 }, differenceK: { min: -5, max: 60 } } as const;
-const { temperatureC: REF_T, differenceK: REF_D } = CHARGE_REFERENCE_LIMITS;
-const referenceTemperature = (label: string) =>
-  z.number({ error: `${label} must be a number in °C` }).min(REF_T.min, `${label} below −80 °C is not a running circuit`).max(REF_T.max, `${label} above 90 °C is not a running circuit`);
-const referenceDifference = (label: string) =>
-  z.number({ error: `${label} must be a number in K` }).min(REF_D.min, `${label} below −5 K is not a settled reading`).max(REF_D.max, `${label} above 60 K is not a settled reading`);
 export const ChargeReferenceSchema = z.object({
   subcoolingK: referenceDifference("Reference subcooling"),
   superheatK: referenceDifference("Reference superheat"),
@@ -299,7 +330,8 @@ export const DiagnosisInputSchema = DiagnosisInputObjectSchema.superRefine((inpu
   for (const [field, range] of RANGE_ENTRIES) {
     const value = input[field];
     if (value === undefined) continue;
-    if (range.minExclusive ? value <= range.min : value < range.min) ctx.addIssue({ code: "custom", path: [field], message: range.minMessage });
+    if (range.minExclusive ? value <= range.min : value < range.min)
+      ctx.addIssue({ code: "custom", path: [field], message: range.minMessage });
     else if (value > range.max) ctx.addIssue({ code: "custom", path: [field], message: range.maxMessage });
   }
   const atmosphere = input.atmosphericPressureKPa ?? STANDARD_ATMOSPHERE_KPA;
@@ -542,7 +574,12 @@ export const TrendReadingSchema = z.object({
    * The diagnosis stored with the reading when it was saved (the server's own `diagnose()`
    * output): the trend reads it instead of diagnosing again. Trusted, not re-validated.
    */
-  result: z.custom<DiagnosisResult>((value) => typeof value === "object" && value !== null && "chargeState" in value, "A stored result must be a diagnosis").optional(),
+  result: z
+    .custom<DiagnosisResult>(
+      (value) => typeof value === "object" && value !== null && "chargeState" in value,
+      "A stored result must be a diagnosis",
+    )
+    .optional(),
 });
 export type TrendReading = z.infer<typeof TrendReadingSchema>;
 
@@ -571,7 +608,13 @@ export const TrendResultSchema = z.object({
   /** Why settled or not, in words. */
   reason: z.string(),
   /** The criterion applied. */
-  criterion: z.object({ windowMinutes: z.number(), maxChangeK: z.number(), maxRateKPerMin: z.number(), minRunMinutes: z.number(), source: z.string() }),
+  criterion: z.object({
+    windowMinutes: z.number(),
+    maxChangeK: z.number(),
+    maxRateKPerMin: z.number(),
+    minRunMinutes: z.number(),
+    source: z.string(),
+  }),
   /** Least-squares slope over the last window (or the readings since the last adjustment), K/min. */
   rate: RateSchema,
   /** Largest − smallest value over the last window, K. */
@@ -579,9 +622,7 @@ export const TrendResultSchema = z.object({
   /** Minutes from the first reading (or last adjustment) to the last reading. */
   minutesObserved: z.number(),
   /** The most recent reading at which the circuit was settled, with its diagnosis. */
-  lastSettled: z
-    .object({ index: z.number().int(), takenAt: z.string(), result: DiagnosisResultSchema })
-    .nullable(),
+  lastSettled: z.object({ index: z.number().int(), takenAt: z.string(), result: DiagnosisResultSchema }).nullable(),
   /** Diagnosis of the latest reading (settled or not). */
   latest: DiagnosisResultSchema,
 });

@@ -9,7 +9,7 @@
  * the same engine as a live reading, with the circuit's correct charge and reference point as
  * the server gives them.
  */
-import { atmosphericPressureAtAltitude, diagnose, saturationPressure } from "@shared/engine/index.ts";
+import { atmosphericPressureAtAltitude, diagnose, parseDiagnosisInput, saturationPressure } from "@shared/engine/index.ts";
 import type { Application, ChargeReference, DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import { prepareRefrigerant } from "../../diagnosis/diagnose-on-server.ts";
 import { calibrateAfterWeighIn } from "../../visits/calibrate-after-weigh-in.ts";
@@ -64,7 +64,8 @@ function readingRows(
 ) {
   const nameplate = unit.circuits.find((candidate) => candidate.number === circuit)!;
   return series.map((reading) => {
-    const input: DiagnosisInput = {
+    // Made up here, so it passes the schema as a saved reading does (diagnose() trusts its input).
+    const input = parseDiagnosisInput({
       refrigerant: unit.refrigerant,
       meteringDevice: nameplate.meteringDevice,
       suctionPressureKPa: gauge(unit.refrigerant, reading.evaporatingDewC, "dew"),
@@ -83,7 +84,7 @@ function readingRows(
       chargeKg: nameplate.factoryChargeKg,
       ...(chargeReference ? { chargeReference } : {}),
       ...air,
-    };
+    } satisfies DiagnosisInput);
     return { organisationId, visitId, circuit, takenAt: new Date(start + reading.minutes * MINUTE), input, result: diagnose(input, { withMeasuredCycle: true }), recordedBy };
   });
 }

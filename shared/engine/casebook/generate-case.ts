@@ -1,6 +1,7 @@
 import type { BuiltInCase, CaseDifficulty, GeneratorFault } from "../../schemas/casebook.ts";
 import type { Application, MeteringDevice } from "../../schemas/diagnosis.ts";
 import { diagnose } from "../diagnosis/diagnose.ts";
+import { parseDiagnosisInput } from "../diagnosis/parse-diagnosis-input.ts";
 import { getRefrigerant } from "../properties/get-refrigerant.ts";
 import { PropertyRangeError } from "../properties/property-range-error.ts";
 import { drawFaultScenario } from "./draw-fault-scenario.ts";
@@ -63,49 +64,77 @@ const NOT_COOLING = [
 
 const STORIES: Record<GeneratorFault, FaultStory> = {
   normal: {
-    complaints: ["Scheduled service: check the charge", "New tenant wants the unit checked", "Noisy fan reported; check the circuit while there"],
-    reasoning: "Every reading sits in its band: the charge signal is on target and head, suction against the load and the split are normal.",
+    complaints: [
+      "Scheduled service: check the charge",
+      "New tenant wants the unit checked",
+      "Noisy fan reported; check the circuit while there",
+    ],
+    reasoning:
+      "Every reading sits in its band: the charge signal is on target and head, suction against the load and the split are normal.",
     difficulty: "starter",
   },
   undercharged: {
     complaints: NOT_COOLING,
-    reasoning: "High superheat with almost no subcooling, suction low for the load and low head: the evaporator is starved because refrigerant is missing.",
+    reasoning:
+      "High superheat with almost no subcooling, suction low for the load and low head: the evaporator is starved because refrigerant is missing.",
     difficulty: "starter",
   },
   overcharged: {
-    complaints: ["Topped up last month by someone else; now tripping on hot days", "Compressor sounds laboured and the suction line is sweating"],
-    reasoning: "Subcooling far above target with high head and high amps, and the liquid leaving close to the outdoor air: liquid is stacking in the condenser because there is too much refrigerant.",
+    complaints: [
+      "Topped up last month by someone else; now tripping on hot days",
+      "Compressor sounds laboured and the suction line is sweating",
+    ],
+    reasoning:
+      "Subcooling far above target with high head and high amps, and the liquid leaving close to the outdoor air: liquid is stacking in the condenser because there is too much refrigerant.",
     difficulty: "starter",
   },
   "restricted-metering": {
     complaints: [...NOT_COOLING, "Frost spot on the liquid line near the filter drier"],
-    reasoning: "High superheat like a shortage, but subcooling at or above target: liquid is backing up behind a restriction instead of reaching the evaporator.",
+    reasoning:
+      "High superheat like a shortage, but subcooling at or above target: liquid is backing up behind a restriction instead of reaching the evaporator.",
     difficulty: "intermediate",
   },
   "low-evaporator-airflow": {
-    complaints: ["Weak airflow from the grilles and the coil sweating heavily", "Cold air but very little of it; the filter has not been changed for a year", "Ice building on the evaporator"],
-    reasoning: "Subcooling is right, so the charge is right; the coil runs far below the air it cools and the split is wide: too little air over the evaporator.",
+    complaints: [
+      "Weak airflow from the grilles and the coil sweating heavily",
+      "Cold air but very little of it; the filter has not been changed for a year",
+      "Ice building on the evaporator",
+    ],
+    reasoning:
+      "Subcooling is right, so the charge is right; the coil runs far below the air it cools and the split is wide: too little air over the evaporator.",
     difficulty: "intermediate",
   },
   "overfeeding-metering": {
-    complaints: ["Suction line frosting back to the compressor", "Compressor noisy at start; the suction line is sweating all the way back"],
-    reasoning: "Superheat near zero while subcooling and head are normal: not an overcharge (which stacks liquid in the condenser) but a metering device passing too much — check the bulb before anything else.",
+    complaints: [
+      "Suction line frosting back to the compressor",
+      "Compressor noisy at start; the suction line is sweating all the way back",
+    ],
+    reasoning:
+      "Superheat near zero while subcooling and head are normal: not an overcharge (which stacks liquid in the condenser) but a metering device passing too much — check the bulb before anything else.",
     difficulty: "intermediate",
   },
   "condenser-airflow": {
-    complaints: ["Tripping on high pressure in the afternoons", "Outdoor unit sits behind a hedge and blows hot air back into itself"],
-    reasoning: "Condensing far above ambient with normal subcooling, high amps and the liquid leaving far above the outdoor air: the condenser cannot reject its heat.",
+    complaints: [
+      "Tripping on high pressure in the afternoons",
+      "Outdoor unit sits behind a hedge and blows hot air back into itself",
+    ],
+    reasoning:
+      "Condensing far above ambient with normal subcooling, high amps and the liquid leaving far above the outdoor air: the condenser cannot reject its heat.",
     difficulty: "intermediate",
   },
   "non-condensables": {
-    complaints: ["Repaired and recharged last week; head pressure has been high ever since", "New installation, line set not evacuated by the installer"],
+    complaints: [
+      "Repaired and recharged last week; head pressure has been high ever since",
+      "New installation, line set not evacuated by the installer",
+    ],
     reasoning:
       "Head far above ambient and the subcooling reads high, yet the liquid leaves no closer to the outdoor air than usual: the gauge is reading the pressure of air in the circuit. Confirm with a standing-pressure check.",
     difficulty: "advanced",
   },
   "weak-compressor": {
     complaints: ["Runs all day, hums, barely any cooling", "Pressures equalise almost at once when the unit stops"],
-    reasoning: "High suction with low head, low amps and a small split: the compressor cannot pull its pressure difference.",
+    reasoning:
+      "High suction with low head, low amps and a small split: the compressor cannot pull its pressure difference.",
     difficulty: "advanced",
   },
 };
@@ -158,7 +187,9 @@ function pick<T>(random: () => number, items: readonly T[]): T {
  */
 export function generateCase(options: GenerateCaseOptions): GeneratedCase {
   if (!(GENERATOR_REFRIGERANTS as readonly string[]).includes(options.refrigerant)) {
-    throw new RangeError(`generateCase requires one of ${GENERATOR_REFRIGERANTS.join(", ")}; ${options.refrigerant} is not supported`);
+    throw new RangeError(
+      `generateCase requires one of ${GENERATOR_REFRIGERANTS.join(", ")}; ${options.refrigerant} is not supported`,
+    );
   }
   const application = options.application ?? "comfort-cooling";
   const story = STORIES[options.fault];
@@ -181,7 +212,8 @@ export function generateCase(options: GenerateCaseOptions): GeneratedCase {
       if (error instanceof RangeError || error instanceof PropertyRangeError) continue;
       throw error;
     }
-    const result = diagnose(input);
+    // A random draw is new data: it passes the schema before diagnose(), which trusts its input.
+    const result = diagnose(parseDiagnosisInput(input));
     if (result.chargeState !== options.fault) continue;
     const equipment = pick(options.random, EQUIPMENT[application]);
     const blend = info.kind === "blend" && options.fault !== "normal";

@@ -1,3 +1,15 @@
+import psychrolib from "psychrolib";
+import { moistAirState } from "./moist-air-state.ts";
+
+export interface AirSideCapacity {
+  /** kg dry air per second */
+  dryAirMassFlowKgPerS: number;
+  /** kW */
+  sensibleKW: number;
+  /** kW; null without the supply air's humidity */
+  totalKW: number | null;
+}
+
 /**
  * Cooling capacity of an evaporator coil measured on the air side: the dry-air mass flow
  * (volumetric airflow at the return-air state ÷ its specific volume) times the fall in moist-air
@@ -12,18 +24,6 @@
  * @throws {RangeError} for an airflow ≤ 0 or air readings outside moistAirState's range
  * @example airSideCapacity({ airflowM3PerS: 0.4, returnDryBulbC: 26.7, returnWetBulbC: 19.4, supplyDryBulbC: 14, supplyWetBulbC: 13, atmosphericKPa: 101.325 }).totalKW // ≈ 8.58 (kW; sensible ≈ 6.03)
  */
-import psychrolib from "psychrolib";
-import { moistAirState } from "./moist-air-state.ts";
-
-export interface AirSideCapacity {
-  /** kg dry air per second */
-  dryAirMassFlowKgPerS: number;
-  /** kW */
-  sensibleKW: number;
-  /** kW; null without the supply air's humidity */
-  totalKW: number | null;
-}
-
 export function airSideCapacity(input: {
   airflowM3PerS: number;
   returnDryBulbC: number;

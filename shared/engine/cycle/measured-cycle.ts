@@ -1,52 +1,3 @@
-/**
- * The technician's own refrigeration cycle from one reading: the four states on a
- * pressure–enthalpy diagram and what they say about the compressor and the coils.
- *
- * States (kPa absolute from the gauge readings and the site's atmosphere):
- * 1. suction (compressor inlet): suction pressure and suction line temperature — superheated
- *    vapour (singlePhaseState); a line within SATURATED_WITHIN_K of the dew point is taken as
- *    saturated vapour, a colder one gives no state (the vapour may carry liquid).
- * 2. discharge (compressor outlet): the discharge pressure, or the liquid pressure plus the
- *    pressure of DISCHARGE_PRESSURE_ALLOWANCE_K of dew temperature (discharge line and condenser
- *    drop), and the discharge line temperature.
- * 3. liquid (expansion-device inlet): liquid pressure and liquid line temperature — subcooled
- *    liquid; within SATURATED_WITHIN_K above the bubble point it is taken as saturated liquid, a
- *    warmer line (flash gas) or a temperature taken on the discharge line gives no state.
- * 4. evaporator inlet: h₄ = h₃ (the expansion is isenthalpic: adiabatic, no work, e.g. ASHRAE
- *    Handbook—Fundamentals ch. 2 "Thermodynamics and refrigeration cycles"), at the suction
- *    pressure (the real inlet is higher by the evaporator and suction-line drop); its quality by
- *    the lever rule (twoPhaseStateFromEnthalpy).
- *
- * Figures (same source, ch. 2, for the cycle relations), each null with the reason in `notes`
- * when an input is missing:
- * - refrigerating effect q = h₁ − h₄ (kJ/kg); it includes any heat the suction line picks up
- *   between the coil and the probe.
- * - compression work w = h₂ − h₁ (kJ/kg), from the measured discharge temperature.
- * - discharge superheat = discharge line temperature − dew point at the discharge pressure (K).
- * - isentropic efficiency η_s = (h₂s − h₁)/(h₂ − h₁), h₂s at the discharge pressure and the
- *   suction entropy. Caveat: h₂ comes from a pipe temperature, so heat lost from the shell and
- *   the line before the probe makes η_s read high, while a hermetic compressor's motor heat in
- *   the gas makes it read low; compare a compressor with itself over time.
- * - COP = q / w: the measured cycle's coefficient of performance; with an adiabatic compressor
- *   it equals capacity ÷ electrical input (heat lost from the shell makes the true COP lower).
- * - electrical input: measured kW, or V·I·cos φ (×√3 on three phases) with the compressor
- *   current (electricalInputPower).
- * - mass flow ṁ = P/w (energy balance on an adiabatic compressor: all electrical input ends up
- *   in the gas; an upper bound when the shell loses heat); capacity Q = ṁ·q (kW).
- * - air side: airflow (measured, or NOMINAL_AIRFLOW_M3_PER_S_PER_KW × the nominal capacity),
- *   return and supply air → airSideCapacity; its ratio to the refrigerant-side capacity, which
- *   should be within ±AIR_REFRIGERANT_AGREEMENT_FRACTION (total), or above 1 neither (sensible).
- *
- * Units: DiagnosisInput as validated (kPa gauge, °C); extras V, A, kW, m³/s, °C. Out: kPa absolute,
- * °C, kJ/kg, kJ/(kg·K), kg/m³, K, kg/s, kW.
- * Valid range: pressures and temperatures inside the refrigerant's single-phase table (a few
- * kelvin short of the critical point; vapour up to 180 °C at most); outside it a state is null
- * with the reason.
- *
- * @throws PropertyRangeError TABLE_NOT_LOADED when the refrigerant's single-phase table has not
- *   been loaded (load it first; see shared/property-tables), UNKNOWN_REFRIGERANT for an unknown id
- * @example measuredCycle({ refrigerant: "R410A", meteringDevice: "txv", suctionPressureKPa: 820, suctionLineTempC: 12, liquidPressureKPa: 2600, liquidLineTempC: 38, dischargeLineTempC: 75 }).refrigeratingEffectKJPerKg // ≈ 168.9 (kJ/kg)
- */
 import { STANDARD_ATMOSPHERE_KPA, type DiagnosisInput } from "../../schemas/diagnosis.ts";
 import { PropertyRangeError } from "../properties/property-range-error.ts";
 import { resolveSinglePhaseTable } from "../properties/resolve-single-phase-table.ts";
@@ -206,6 +157,55 @@ function vapourAtLine(
   return fromSinglePhase(point, state, lineC < dewC ? `${basis} (at the dew point: saturated vapour)` : basis);
 }
 
+/**
+ * The technician's own refrigeration cycle from one reading: the four states on a
+ * pressure–enthalpy diagram and what they say about the compressor and the coils.
+ *
+ * States (kPa absolute from the gauge readings and the site's atmosphere):
+ * 1. suction (compressor inlet): suction pressure and suction line temperature — superheated
+ *    vapour (singlePhaseState); a line within SATURATED_WITHIN_K of the dew point is taken as
+ *    saturated vapour, a colder one gives no state (the vapour may carry liquid).
+ * 2. discharge (compressor outlet): the discharge pressure, or the liquid pressure plus the
+ *    pressure of DISCHARGE_PRESSURE_ALLOWANCE_K of dew temperature (discharge line and condenser
+ *    drop), and the discharge line temperature.
+ * 3. liquid (expansion-device inlet): liquid pressure and liquid line temperature — subcooled
+ *    liquid; within SATURATED_WITHIN_K above the bubble point it is taken as saturated liquid, a
+ *    warmer line (flash gas) or a temperature taken on the discharge line gives no state.
+ * 4. evaporator inlet: h₄ = h₃ (the expansion is isenthalpic: adiabatic, no work, e.g. ASHRAE
+ *    Handbook—Fundamentals ch. 2 "Thermodynamics and refrigeration cycles"), at the suction
+ *    pressure (the real inlet is higher by the evaporator and suction-line drop); its quality by
+ *    the lever rule (twoPhaseStateFromEnthalpy).
+ *
+ * Figures (same source, ch. 2, for the cycle relations), each null with the reason in `notes`
+ * when an input is missing:
+ * - refrigerating effect q = h₁ − h₄ (kJ/kg); it includes any heat the suction line picks up
+ *   between the coil and the probe.
+ * - compression work w = h₂ − h₁ (kJ/kg), from the measured discharge temperature.
+ * - discharge superheat = discharge line temperature − dew point at the discharge pressure (K).
+ * - isentropic efficiency η_s = (h₂s − h₁)/(h₂ − h₁), h₂s at the discharge pressure and the
+ *   suction entropy. Caveat: h₂ comes from a pipe temperature, so heat lost from the shell and
+ *   the line before the probe makes η_s read high, while a hermetic compressor's motor heat in
+ *   the gas makes it read low; compare a compressor with itself over time.
+ * - COP = q / w: the measured cycle's coefficient of performance; with an adiabatic compressor
+ *   it equals capacity ÷ electrical input (heat lost from the shell makes the true COP lower).
+ * - electrical input: measured kW, or V·I·cos φ (×√3 on three phases) with the compressor
+ *   current (electricalInputPower).
+ * - mass flow ṁ = P/w (energy balance on an adiabatic compressor: all electrical input ends up
+ *   in the gas; an upper bound when the shell loses heat); capacity Q = ṁ·q (kW).
+ * - air side: airflow (measured, or NOMINAL_AIRFLOW_M3_PER_S_PER_KW × the nominal capacity),
+ *   return and supply air → airSideCapacity; its ratio to the refrigerant-side capacity, which
+ *   should be within ±AIR_REFRIGERANT_AGREEMENT_FRACTION (total), or above 1 neither (sensible).
+ *
+ * Units: DiagnosisInput as validated (kPa gauge, °C); extras V, A, kW, m³/s, °C. Out: kPa absolute,
+ * °C, kJ/kg, kJ/(kg·K), kg/m³, K, kg/s, kW.
+ * Valid range: pressures and temperatures inside the refrigerant's single-phase table (a few
+ * kelvin short of the critical point; vapour up to 180 °C at most); outside it a state is null
+ * with the reason.
+ *
+ * @throws PropertyRangeError TABLE_NOT_LOADED when the refrigerant's single-phase table has not
+ *   been loaded (load it first; see shared/property-tables), UNKNOWN_REFRIGERANT for an unknown id
+ * @example measuredCycle({ refrigerant: "R410A", meteringDevice: "txv", suctionPressureKPa: 820, suctionLineTempC: 12, liquidPressureKPa: 2600, liquidLineTempC: 38, dischargeLineTempC: 75 }).refrigeratingEffectKJPerKg // ≈ 168.9 (kJ/kg)
+ */
 export function measuredCycle(input: DiagnosisInput, extras: MeasuredCycleExtras = {}): MeasuredCycle {
   const refrigerant = input.refrigerant;
   resolveSinglePhaseTable(refrigerant); // fail loudly before any figure when the table is not loaded

@@ -1,7 +1,5 @@
 import {
-  DiagnosisInputSchema,
   type DiagnosisInput,
-  type DiagnosisInputDraft,
   type DiagnosisResult,
   type DiagnosisWarning,
   type EvidenceState,
@@ -15,7 +13,6 @@ import { buildDiagnosisSnapshot } from "./build-diagnosis-snapshot.ts";
 import { DiagnosisInputError } from "./diagnosis-input-error.ts";
 import { MIN_RUN_MINUTES, NO_CHARGE_SIGNAL_CONFIDENCE, UNSETTLED_CONFIDENCE_FLOOR } from "./diagnosis-limits.ts";
 import { evidenceWeight } from "./evidence-weight.ts";
-import { fastParseDiagnosisInput } from "./fast-parse-diagnosis-input.ts";
 import { rankChargeStates } from "./rank-charge-states.ts";
 import { DIAGNOSIS_RULES } from "./rules/registry.ts";
 import { COMMON_PRACTICE, cite } from "./sources.ts";
@@ -46,7 +43,7 @@ const NO_SIGNAL_SOURCE = `${cite(["S9", "S10", "S11"])}; judging from the remain
 /** Confidence multiplier for the run time: readings drift for 10–15 min after a start [S10][S20]. */
 function settlingFactor(runMinutes: number | undefined): number {
   if (runMinutes === undefined || runMinutes >= MIN_RUN_MINUTES) return 1;
-  return UNSETTLED_CONFIDENCE_FLOOR + (1 - UNSETTLED_CONFIDENCE_FLOOR) * Math.max(0, runMinutes) / MIN_RUN_MINUTES;
+  return UNSETTLED_CONFIDENCE_FLOOR + ((1 - UNSETTLED_CONFIDENCE_FLOOR) * Math.max(0, runMinutes)) / MIN_RUN_MINUTES;
 }
 
 function readingsLeftOut(snapshot: DiagnosisSnapshot): LeftOutReading[] {
@@ -58,16 +55,25 @@ function readingsLeftOut(snapshot: DiagnosisSnapshot): LeftOutReading[] {
   return left;
 }
 
+/** Options of `diagnose()`. */
+export interface DiagnoseOptions {
+  /**
+   * Judge the compressor from the measured cycle too (its apparent isentropic efficiency), when
+   * the refrigerant's single-phase table is loaded. The run log asks for it (server and browser
+   * both load the table first); worked cases and the casebook judge the saturation readings only.
+   */
+  withMeasuredCycle?: boolean;
+}
+
 /**
  * Charge diagnosis of one running circuit: saturation temperatures (dew point at suction,
  * bubble point at the liquid pressure), superheat, subcooling, glide, their targets, the air
  * and condenser values, and the state of the circuit with its evidence and warnings.
  *
- * How: the readings are validated (`DiagnosisInputSchema`, after `fastParseDiagnosisInput`
- * has accepted the valid ones faster), every derived value is computed once into a snapshot
- * through the property engine, each rule of `DIAGNOSIS_RULES` judges one reading against its
- * band (the equipment's application sets the bands) and the signature table
- * (signature-table.ts, docs/diagnosis-signatures.md) turns it into evidence for every state;
+ * How: every derived value is computed once into a snapshot through the property engine,
+ * each rule of `DIAGNOSIS_RULES` judges one reading against its band (the equipment's
+ * application sets the bands) and the signature table (signature-table.ts,
+ * docs/diagnosis-signatures.md) turns it into evidence for every state;
  * `rankChargeStates` sums the evidence. The verdict is the best-supported state, except that:
  * a danger warning (liquid floodback, a suction below the table, a discharge line past its
  * limit) never ends as "normal"; a fixed device without its superheat target names no charge
@@ -80,33 +86,19 @@ function readingsLeftOut(snapshot: DiagnosisSnapshot): LeftOutReading[] {
  * (`chargeKg`, and `chargeReference` when the circuit has its own reference point) the result
  * says how many kilograms the charge is off (`chargeDeviation`, see estimateChargeDeviation).
  *
+ * The readings must already be validated by `DiagnosisInputSchema` at the boundary they came
+ * through (the API, the run-log form, `parseDiagnosisInput`; README decision 034): the engine
+ * trusts its typed input and does not check it again. Stored inputs were validated when saved.
+ *
  * Units: kPa gauge, °C in; °C, K, ratios out (see `DiagnosisResultSchema`).
  *
- * @throws {DiagnosisInputError} when the readings are invalid or impossible (field messages),
- *   or the refrigerant is unknown
+ * @throws {DiagnosisInputError} when the refrigerant has no table (message on `refrigerant`)
  * @example diagnose({ refrigerant: "R410A", meteringDevice: "txv", suctionPressureKPa: 820, suctionLineTempC: 13, liquidPressureKPa: 2650, liquidLineTempC: 38 }).chargeState
  */
-export interface DiagnoseOptions {
-  /**
-   * Judge the compressor from the measured cycle too (its apparent isentropic efficiency), when
-   * the refrigerant's single-phase table is loaded. The run log asks for it (server and browser
-   * both load the table first); worked cases and the casebook judge the saturation readings only.
-   */
-  withMeasuredCycle?: boolean;
-}
-
-export function diagnose(input: DiagnosisInputDraft, options: DiagnoseOptions = {}): DiagnosisResult {
-  // Performance: the hand-written check accepts valid readings without zod's cost; anything it
-  // refuses goes through the schema, which stays the source of every message.
-  let data: DiagnosisInput | null = fastParseDiagnosisInput(input);
-  if (data === null) {
-    const parsed = DiagnosisInputSchema.safeParse(input);
-    if (!parsed.success) throw DiagnosisInputError.fromZodError(parsed.error);
-    data = parsed.data;
-  }
+export function diagnose(input: DiagnosisInput, options: DiagnoseOptions = {}): DiagnosisResult {
   let snapshot;
   try {
-    snapshot = buildDiagnosisSnapshot(data, options.withMeasuredCycle === true);
+    snapshot = buildDiagnosisSnapshot(input, options.withMeasuredCycle === true);
   } catch (error) {
     if (error instanceof PropertyRangeError && error.code === "UNKNOWN_REFRIGERANT") {
       throw new DiagnosisInputError({ refrigerant: [error.message] });
@@ -135,7 +127,7 @@ export function diagnose(input: DiagnosisInputDraft, options: DiagnoseOptions = 
     }
   }
 
-  const quality = settlingFactor(data.runMinutes) * (judged ? 1 : NO_CHARGE_SIGNAL_CONFIDENCE);
+  const quality = settlingFactor(input.runMinutes) * (judged ? 1 : NO_CHARGE_SIGNAL_CONFIDENCE);
   const ranked: RankedState[] = [];
   for (const entry of rankChargeStates(findings)) {
     // A danger never ends as "normal"; it is not offered as an alternative either.
@@ -157,7 +149,10 @@ export function diagnose(input: DiagnosisInputDraft, options: DiagnoseOptions = 
   if (verdict) {
     if (!judged) {
       const missing = snapshot.meteringFamily === "fixed" ? "superheat" : "subcooling";
-      const why = snapshot.meteringFamily === "fixed" ? snapshot.superheatExcluded?.reason ?? snapshot.superheatTargetNote : snapshot.subcoolingExcluded?.reason;
+      const why =
+        snapshot.meteringFamily === "fixed"
+          ? (snapshot.superheatExcluded?.reason ?? snapshot.superheatTargetNote)
+          : snapshot.subcoolingExcluded?.reason;
       warnings.push({
         code: "judged-without-charge-signal",
         severity: "caution",
@@ -187,8 +182,8 @@ export function diagnose(input: DiagnosisInputDraft, options: DiagnoseOptions = 
   }
 
   return {
-    refrigerant: data.refrigerant,
-    meteringDevice: data.meteringDevice,
+    refrigerant: input.refrigerant,
+    meteringDevice: input.meteringDevice,
     application: snapshot.application,
     applicationBasis: snapshot.applicationBasis,
     atmosphericPressureKPa: snapshot.atmosphericPressureKPa,

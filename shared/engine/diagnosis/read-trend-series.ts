@@ -1,4 +1,10 @@
-import { TrendInputSchema, TrendReadingSchema, type DiagnosisResult, type TrendReading } from "../../schemas/diagnosis.ts";
+import {
+  DiagnosisInputSchema,
+  TrendInputSchema,
+  TrendReadingSchema,
+  type DiagnosisResult,
+  type TrendReading,
+} from "../../schemas/diagnosis.ts";
 import { diagnose } from "./diagnose.ts";
 import { DiagnosisInputError } from "./diagnosis-input-error.ts";
 
@@ -30,7 +36,9 @@ const isObject = (value: unknown): value is Record<string, unknown> => typeof va
 
 /** The stored result when it is one of the current engine's, else null (diagnose again). */
 function currentResult(result: unknown): DiagnosisResult | null {
-  return isObject(result) && "chargeState" in result && CURRENT_RESULT_FIELD in result ? (result as DiagnosisResult) : null;
+  return isObject(result) && "chargeState" in result && CURRENT_RESULT_FIELD in result
+    ? (result as DiagnosisResult)
+    : null;
 }
 
 /**
@@ -65,8 +73,11 @@ function readStoredSeries(readings: readonly unknown[]): TrendSeries | null {
     if (result !== undefined && !(isObject(result) && "chargeState" in result)) return null;
     let diagnosis = currentResult(result);
     if (diagnosis === null) {
+      // diagnose() trusts its input: the one input it is given here passes the schema first.
+      const input = DiagnosisInputSchema.safeParse(reading.input);
+      if (!input.success) return null;
       try {
-        diagnosis = diagnose(reading.input as Parameters<typeof diagnose>[0]);
+        diagnosis = diagnose(input.data);
       } catch (error) {
         if (error instanceof DiagnosisInputError) return null;
         throw error;
@@ -101,8 +112,7 @@ function readValidatedSeries(readings: readonly unknown[]): TrendSeries {
 /**
  * Reads one circuit's run log for `assessTrend`: times parsed once, each reading's stored
  * diagnosis taken as it is, and a reading without a current one diagnosed once. Anything the
- * quick check doubts goes through `TrendInputSchema`, which stays the source of every message
- * (as `diagnose()` does with its input, decision 006).
+ * quick check doubts goes through `TrendInputSchema`, which stays the source of every message.
  *
  * @throws {DiagnosisInputError} when the series is empty, out of time order, or a reading to be
  *   diagnosed is invalid (fields prefixed by the reading's index, e.g. "2.input.suctionPressureKPa")

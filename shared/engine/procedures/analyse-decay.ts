@@ -1,3 +1,23 @@
+import type { DecayAnalysis, DecayOptions, DecayWording } from "../../schemas/procedures.ts";
+import { leastSquaresSlope } from "../diagnosis/least-squares-slope.ts";
+import { describeDecay } from "./describe-decay.ts";
+import { limitSource } from "./limit-source.ts";
+import { EVACUATION_LIMITS } from "./procedure-limits.ts";
+import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { requireVacuumSamples } from "./require-vacuum-samples.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCE = citeProcedure(["S4", "S52", "S53", "S54", "S55", "S58"], `levelling-off test (${COMMON_PRACTICE})`);
+/** Shortest hold makers ask for, minutes [S53] (another asks 20 [S52]). */
+const SHORTEST_MAKER_HOLD_MINUTES = 15;
+
+function slopeOf(samples: readonly { minutes: number; microns: number }[]): number {
+  return leastSquaresSlope(
+    samples.map((sample) => sample.minutes),
+    samples.map((sample) => sample.microns),
+  );
+}
+
 /**
  * Reads a vacuum decay (pressure-rise) test: the readings taken after the pump is valved off.
  *
@@ -27,32 +47,20 @@
  *   non-finite readings, or a non-positive or non-finite limit
  * @example analyseDecay([{ minutes: 0, microns: 400 }, { minutes: 10, microns: 430 }, { minutes: 20, microns: 450 }]).verdict // "held"
  */
-import type { DecayAnalysis, DecayOptions, DecayWording } from "../../schemas/procedures.ts";
-import { leastSquaresSlope } from "../diagnosis/least-squares-slope.ts";
-import { describeDecay } from "./describe-decay.ts";
-import { limitSource } from "./limit-source.ts";
-import { EVACUATION_LIMITS } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
-import { requireVacuumSamples } from "./require-vacuum-samples.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCE = citeProcedure(["S4", "S52", "S53", "S54", "S55", "S58"], `levelling-off test (${COMMON_PRACTICE})`);
-/** Shortest hold makers ask for, minutes [S53] (another asks 20 [S52]). */
-const SHORTEST_MAKER_HOLD_MINUTES = 15;
-
-function slopeOf(samples: readonly { minutes: number; microns: number }[]): number {
-  return leastSquaresSlope(
-    samples.map((sample) => sample.minutes),
-    samples.map((sample) => sample.microns),
-  );
-}
-
-export function analyseDecay(samples: readonly { minutes: number; microns: number }[], options: DecayOptions = {}): DecayAnalysis {
+export function analyseDecay(
+  samples: readonly { minutes: number; microns: number }[],
+  options: DecayOptions = {},
+): DecayAnalysis {
   requireVacuumSamples(samples, 2, "analyseDecay");
   const { holdMicrons: holdOption, ...limitOptions } = options;
   const { limits, overridden } = resolveLimits(EVACUATION_LIMITS, limitOptions);
   const holdMicrons = holdOption ?? limits.targetMicrons;
-  if (!Number.isFinite(holdMicrons) || !(holdMicrons > 0) || !(limits.targetMicrons > 0) || !(limits.leakRiseMicrons > 0)) {
+  if (
+    !Number.isFinite(holdMicrons) ||
+    !(holdMicrons > 0) ||
+    !(limits.targetMicrons > 0) ||
+    !(limits.leakRiseMicrons > 0)
+  ) {
     throw new RangeError("analyseDecay requires hold, target and leak limits above zero microns");
   }
   const source = limitSource(SOURCE, overridden || holdOption !== undefined);
@@ -93,7 +101,10 @@ export function analyseDecay(samples: readonly { minutes: number; microns: numbe
   if (finalMicrons > limits.leakRiseMicrons) return judged("leak", "leak-past-threshold");
   if (levelledOff) {
     // "Rose above" only when the pull-down had reached the hold limit; otherwise it never got there.
-    return judged("moisture", first.microns > holdMicrons ? "moisture-never-reached" : facts.risen ? "moisture-rose" : "moisture-stayed-above");
+    return judged(
+      "moisture",
+      first.microns > holdMicrons ? "moisture-never-reached" : facts.risen ? "moisture-rose" : "moisture-stayed-above",
+    );
   }
   return judged("leak", "leak-still-rising");
 }

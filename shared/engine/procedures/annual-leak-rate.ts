@@ -1,3 +1,8 @@
+import type { AnnualLeakRate } from "../../schemas/procedures.ts";
+import { DAYS_PER_YEAR } from "./procedure-limits.ts";
+
+const MILLISECONDS_PER_DAY = 86_400_000;
+
 /**
  * Estimated annual leak rate of one piece of equipment from its refrigerant additions
  * (top-ups replace what leaked out), as kg per year and percent of the full (nameplate)
@@ -24,32 +29,35 @@
  * @example annualLeakRate([{ date: "2025-01-10", addedKg: 0.5 }, { date: "2025-07-11", addedKg: 0.6 }], 4)
  *   // { kgPerYear: ≈ 1.203, percentOfChargePerYear: ≈ 30.08, periodDays: 182 }
  */
-import type { AnnualLeakRate } from "../../schemas/procedures.ts";
-import { DAYS_PER_YEAR } from "./procedure-limits.ts";
-
-const MILLISECONDS_PER_DAY = 86_400_000;
-
-export function annualLeakRate(events: readonly { date: string; addedKg: number }[], nameplateKg: number, periodDays?: number): AnnualLeakRate {
+export function annualLeakRate(
+  events: readonly { date: string; addedKg: number }[],
+  nameplateKg: number,
+  periodDays?: number,
+): AnnualLeakRate {
   if (events.length === 0) throw new RangeError("annualLeakRate requires at least one event");
-  if (!Number.isFinite(nameplateKg) || !(nameplateKg > 0)) throw new RangeError("annualLeakRate requires a nameplate charge above zero");
+  if (!Number.isFinite(nameplateKg) || !(nameplateKg > 0))
+    throw new RangeError("annualLeakRate requires a nameplate charge above zero");
   const timed = events.map((event) => {
     const time = Date.parse(event.date);
     if (Number.isNaN(time)) throw new RangeError("annualLeakRate requires ISO 8601 dates");
-    if (!Number.isFinite(event.addedKg) || event.addedKg < 0) throw new RangeError("annualLeakRate requires added masses of zero or more");
+    if (!Number.isFinite(event.addedKg) || event.addedKg < 0)
+      throw new RangeError("annualLeakRate requires added masses of zero or more");
     return { time, addedKg: event.addedKg };
   });
 
   let leakedKg: number;
   let days: number;
   if (periodDays !== undefined) {
-    if (!Number.isFinite(periodDays) || !(periodDays > 0)) throw new RangeError("annualLeakRate requires a period above zero days");
+    if (!Number.isFinite(periodDays) || !(periodDays > 0))
+      throw new RangeError("annualLeakRate requires a period above zero days");
     leakedKg = timed.reduce((sum, event) => sum + event.addedKg, 0);
     days = periodDays;
   } else {
     const start = Math.min(...timed.map((event) => event.time));
     const end = Math.max(...timed.map((event) => event.time));
     days = (end - start) / MILLISECONDS_PER_DAY;
-    if (days < 1) throw new RangeError("annualLeakRate requires a period, or first and last events at least one day apart");
+    if (days < 1)
+      throw new RangeError("annualLeakRate requires a period, or first and last events at least one day apart");
     leakedKg = timed.reduce((sum, event) => (event.time > start ? sum + event.addedKg : sum), 0);
   }
   const kgPerYear = (leakedKg * DAYS_PER_YEAR) / days;

@@ -1,3 +1,13 @@
+import type { ChargeAgainstNameplateResult } from "../../schemas/procedures.ts";
+import { formatHundredths } from "../diagnosis/format-hundredths.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { limitSource } from "./limit-source.ts";
+import { CHARGE_LIMITS, type ChargeLimits } from "./procedure-limits.ts";
+import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCE = citeProcedure(["S11", "S10"], `2 % and 10 % bands (${COMMON_PRACTICE})`);
+
 /**
  * Judges a weighed-in charge against the nameplate charge plus the line-length adjustment
  * (the nameplate covers the unit and a stated line length; add or remove per metre of liquid
@@ -13,26 +23,18 @@
  *   weighed-in charge, or an expected charge (nameplate + adjustment) ≤ 0
  * @example chargeAgainstNameplate({ nameplateKg: 2.4, weighedInKg: 2.65, lineAdjustmentKg: 0.3 }).verdict // "pass"
  */
-import type { ChargeAgainstNameplateResult } from "../../schemas/procedures.ts";
-import { formatHundredths } from "../diagnosis/format-hundredths.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { limitSource } from "./limit-source.ts";
-import { CHARGE_LIMITS, type ChargeLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCE = citeProcedure(["S11", "S10"], `2 % and 10 % bands (${COMMON_PRACTICE})`);
-
 export function chargeAgainstNameplate(
   input: { nameplateKg: number; weighedInKg: number; lineAdjustmentKg?: number },
   limits?: Partial<ChargeLimits>,
 ): ChargeAgainstNameplateResult {
   const { nameplateKg, weighedInKg } = input;
   const lineAdjustmentKg = input.lineAdjustmentKg ?? 0;
-  if (![nameplateKg, weighedInKg, lineAdjustmentKg].every(Number.isFinite)) throw new RangeError("chargeAgainstNameplate requires finite masses");
+  if (![nameplateKg, weighedInKg, lineAdjustmentKg].every(Number.isFinite))
+    throw new RangeError("chargeAgainstNameplate requires finite masses");
   if (weighedInKg < 0) throw new RangeError("chargeAgainstNameplate requires a weighed-in charge of zero or more");
   const expectedKg = nameplateKg + lineAdjustmentKg;
-  if (!(nameplateKg > 0) || !(expectedKg > 0)) throw new RangeError("chargeAgainstNameplate requires a nameplate charge, with its line adjustment, above zero");
+  if (!(nameplateKg > 0) || !(expectedKg > 0))
+    throw new RangeError("chargeAgainstNameplate requires a nameplate charge, with its line adjustment, above zero");
   const { limits: applied, overridden } = resolveLimits(CHARGE_LIMITS, limits);
   const source = limitSource(SOURCE, overridden);
   const differenceKg = weighedInKg - expectedKg;
@@ -48,5 +50,9 @@ export function chargeAgainstNameplate(
   if (Math.abs(percent) <= applied.warnWithinPercent) {
     return { verdict: "warn", reason: `${shown}: ${off}; check by subcooling or superheat once stable`, ...result };
   }
-  return { verdict: "fail", reason: `${shown}: ${off}, beyond ${applied.warnWithinPercent} %; recheck the nameplate, line length and scale`, ...result };
+  return {
+    verdict: "fail",
+    reason: `${shown}: ${off}, beyond ${applied.warnWithinPercent} %; recheck the nameplate, line length and scale`,
+    ...result,
+  };
 }

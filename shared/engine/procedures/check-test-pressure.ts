@@ -1,3 +1,12 @@
+import type { Verdict } from "../../schemas/procedures.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { limitSource } from "./limit-source.ts";
+import { TEST_PRESSURE_LIMITS, type TestPressureLimits } from "./procedure-limits.ts";
+import { citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCE = citeProcedure(["S57", "S63", "S64"]);
+
 /**
  * Checks a nitrogen test pressure against the rated (maximum allowable, PS) pressure of the
  * lowest-rated component in the part of the system under test: never exceed it; isolate or
@@ -10,19 +19,15 @@
  * @throws RangeError "checkTestPressure requires ..." for non-finite or non-positive pressures
  * @example checkTestPressure({ testGaugeKPa: 3800, ratedKPa: 4150 }).verdict // "pass"
  */
-import type { Verdict } from "../../schemas/procedures.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { limitSource } from "./limit-source.ts";
-import { TEST_PRESSURE_LIMITS, type TestPressureLimits } from "./procedure-limits.ts";
-import { citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCE = citeProcedure(["S57", "S63", "S64"]);
-
-export function checkTestPressure(input: { testGaugeKPa: number; ratedKPa: number }, limits?: Partial<TestPressureLimits>): Verdict {
+export function checkTestPressure(
+  input: { testGaugeKPa: number; ratedKPa: number },
+  limits?: Partial<TestPressureLimits>,
+): Verdict {
   const { testGaugeKPa, ratedKPa } = input;
-  if (!Number.isFinite(testGaugeKPa) || !(testGaugeKPa > 0)) throw new RangeError("checkTestPressure requires a test pressure above 0 kPa gauge");
-  if (!Number.isFinite(ratedKPa) || !(ratedKPa > 0)) throw new RangeError("checkTestPressure requires a rated pressure above 0 kPa gauge");
+  if (!Number.isFinite(testGaugeKPa) || !(testGaugeKPa > 0))
+    throw new RangeError("checkTestPressure requires a test pressure above 0 kPa gauge");
+  if (!Number.isFinite(ratedKPa) || !(ratedKPa > 0))
+    throw new RangeError("checkTestPressure requires a rated pressure above 0 kPa gauge");
   const { limits: applied, overridden } = resolveLimits(TEST_PRESSURE_LIMITS, limits);
   const source = limitSource(SOURCE, overridden);
   const limitKPa = ratedKPa * applied.maxFractionOfRated;
@@ -33,5 +38,9 @@ export function checkTestPressure(input: { testGaugeKPa: number; ratedKPa: numbe
       source,
     };
   }
-  return { verdict: "pass", reason: `Test pressure ${formatTenths(testGaugeKPa)} kPa is within the ${formatTenths(limitKPa)} kPa limit of the lowest-rated component`, source };
+  return {
+    verdict: "pass",
+    reason: `Test pressure ${formatTenths(testGaugeKPa)} kPa is within the ${formatTenths(limitKPa)} kPa limit of the lowest-rated component`,
+    source,
+  };
 }

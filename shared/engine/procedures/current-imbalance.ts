@@ -1,3 +1,5 @@
+import { largestDeviationPercent } from "./largest-deviation-percent.ts";
+
 /**
  * Three-phase current imbalance, same formula as the voltage imbalance: 100 × the largest
  * deviation of a phase current from the average, divided by the average. One compressor maker
@@ -8,8 +10,6 @@
  * @throws RangeError "currentImbalance requires ..." for a negative or non-finite current or all zero
  * @example currentImbalance([10, 11, 9]) // 10
  */
-import { largestDeviationPercent } from "./largest-deviation-percent.ts";
-
 export function currentImbalance(amps: readonly [number, number, number]): number {
   return largestDeviationPercent(amps, "currentImbalance");
 }

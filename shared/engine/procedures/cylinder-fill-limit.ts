@@ -1,3 +1,10 @@
+import type { CylinderFillLimit } from "../../schemas/procedures.ts";
+import { saturatedState } from "../properties/saturated-state.ts";
+import { CYLINDER_FILL_LIMITS, type CylinderFillLimits } from "./procedure-limits.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const KG_PER_M3_PER_KG_PER_L = 1000;
+
 /**
  * Largest mass of refrigerant a recovery cylinder may hold: liquid may fill at most 80 % of the
  * internal volume at the hottest temperature the cylinder may see [S79][S78], so
@@ -18,21 +25,16 @@
  *   (including above its critical temperature, e.g. R744 at 54 °C)
  * @example cylinderFillLimit({ waterCapacityKg: 10.9, refrigerant: "R410A" }).maxContentsKg // ≈ 7.6
  */
-import type { CylinderFillLimit } from "../../schemas/procedures.ts";
-import { saturatedState } from "../properties/saturated-state.ts";
-import { CYLINDER_FILL_LIMITS, type CylinderFillLimits } from "./procedure-limits.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const KG_PER_M3_PER_KG_PER_L = 1000;
-
 export function cylinderFillLimit(
   input: { waterCapacityKg: number; refrigerant: string; referenceTempC?: number },
   limits?: Partial<CylinderFillLimits>,
 ): CylinderFillLimit {
-  if (!Number.isFinite(input.waterCapacityKg) || !(input.waterCapacityKg > 0)) throw new RangeError("cylinderFillLimit requires a water capacity above zero");
+  if (!Number.isFinite(input.waterCapacityKg) || !(input.waterCapacityKg > 0))
+    throw new RangeError("cylinderFillLimit requires a water capacity above zero");
   const { limits: applied } = resolveLimits(CYLINDER_FILL_LIMITS, limits);
   const referenceTempC = input.referenceTempC ?? applied.referenceTempC;
-  const liquidDensityKgPerL = saturatedState(input.refrigerant, referenceTempC).liquidDensityKgPerM3 / KG_PER_M3_PER_KG_PER_L;
+  const liquidDensityKgPerL =
+    saturatedState(input.refrigerant, referenceTempC).liquidDensityKgPerM3 / KG_PER_M3_PER_KG_PER_L;
   const waterCapacityL = input.waterCapacityKg;
   return {
     maxContentsKg: applied.liquidVolumeFraction * waterCapacityL * liquidDensityKgPerL,

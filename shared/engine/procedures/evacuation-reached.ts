@@ -1,3 +1,7 @@
+import type { EvacuationReached } from "../../schemas/procedures.ts";
+import { EVACUATION_LIMITS } from "./procedure-limits.ts";
+import { requireVacuumSamples } from "./require-vacuum-samples.ts";
+
 /**
  * Whether a pull-down reached the evacuation target, and when: the time of the first reading
  * at or below the target (no interpolation between readings; the technician saw that reading).
@@ -10,12 +14,12 @@
  * @throws RangeError "evacuationReached requires ..." for no readings, unsorted or non-finite readings, or a target ≤ 0
  * @example evacuationReached([{ minutes: 0, microns: 20000 }, { minutes: 30, microns: 450 }]) // { reached: true, atMinutes: 30 }
  */
-import type { EvacuationReached } from "../../schemas/procedures.ts";
-import { EVACUATION_LIMITS } from "./procedure-limits.ts";
-import { requireVacuumSamples } from "./require-vacuum-samples.ts";
-
-export function evacuationReached(samples: readonly { minutes: number; microns: number }[], targetMicrons: number = EVACUATION_LIMITS.targetMicrons): EvacuationReached {
-  if (!Number.isFinite(targetMicrons) || !(targetMicrons > 0)) throw new RangeError("evacuationReached requires a target above zero microns");
+export function evacuationReached(
+  samples: readonly { minutes: number; microns: number }[],
+  targetMicrons: number = EVACUATION_LIMITS.targetMicrons,
+): EvacuationReached {
+  if (!Number.isFinite(targetMicrons) || !(targetMicrons > 0))
+    throw new RangeError("evacuationReached requires a target above zero microns");
   requireVacuumSamples(samples, 1, "evacuationReached");
   const first = samples.find((sample) => sample.microns <= targetMicrons);
   return first === undefined ? { reached: false, atMinutes: null } : { reached: true, atMinutes: first.minutes };

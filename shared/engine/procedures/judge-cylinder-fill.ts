@@ -1,3 +1,12 @@
+import type { Verdict } from "../../schemas/procedures.ts";
+import { formatHundredths } from "../diagnosis/format-hundredths.ts";
+import { limitSource } from "./limit-source.ts";
+import { CYLINDER_FILL_LIMITS, type CylinderFillLimits } from "./procedure-limits.ts";
+import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCE = citeProcedure(["S79", "S78"], `warning margin (${COMMON_PRACTICE})`);
+
 /**
  * Judges a recovery cylinder's contents against its fill limit (from `cylinderFillLimit`):
  * past the limit fails (liquid could fill the cylinder when it warms [S79][S78]); from 90 % of
@@ -10,25 +19,25 @@
  * @throws RangeError "judgeCylinderFill requires ..." for negative or non-finite contents or a limit ≤ 0
  * @example judgeCylinderFill({ contentsKg: 7.2, maxContentsKg: 7.7 }).verdict // "warn"
  */
-import type { Verdict } from "../../schemas/procedures.ts";
-import { formatHundredths } from "../diagnosis/format-hundredths.ts";
-import { limitSource } from "./limit-source.ts";
-import { CYLINDER_FILL_LIMITS, type CylinderFillLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCE = citeProcedure(["S79", "S78"], `warning margin (${COMMON_PRACTICE})`);
-
-export function judgeCylinderFill(input: { contentsKg: number; maxContentsKg: number }, limits?: Partial<CylinderFillLimits>): Verdict {
+export function judgeCylinderFill(
+  input: { contentsKg: number; maxContentsKg: number },
+  limits?: Partial<CylinderFillLimits>,
+): Verdict {
   const { contentsKg, maxContentsKg } = input;
-  if (!Number.isFinite(contentsKg) || contentsKg < 0) throw new RangeError("judgeCylinderFill requires finite contents of zero or more");
-  if (!Number.isFinite(maxContentsKg) || !(maxContentsKg > 0)) throw new RangeError("judgeCylinderFill requires a fill limit above zero");
+  if (!Number.isFinite(contentsKg) || contentsKg < 0)
+    throw new RangeError("judgeCylinderFill requires finite contents of zero or more");
+  if (!Number.isFinite(maxContentsKg) || !(maxContentsKg > 0))
+    throw new RangeError("judgeCylinderFill requires a fill limit above zero");
   const { limits: applied, overridden } = resolveLimits(CYLINDER_FILL_LIMITS, limits);
   const source = limitSource(SOURCE, overridden);
   const percent = Math.round((100 * contentsKg) / maxContentsKg);
   const shown = `${formatHundredths(contentsKg)} kg is ${percent} % of the ${formatHundredths(maxContentsKg)} kg fill limit`;
   if (contentsKg > maxContentsKg) {
-    return { verdict: "fail", reason: `Overfilled: ${shown}; transfer refrigerant out before the cylinder warms`, source };
+    return {
+      verdict: "fail",
+      reason: `Overfilled: ${shown}; transfer refrigerant out before the cylinder warms`,
+      source,
+    };
   }
   if (contentsKg >= applied.warnFromFractionOfLimit * maxContentsKg) {
     return { verdict: "warn", reason: `Nearly full: ${shown}; use another cylinder for further recovery`, source };

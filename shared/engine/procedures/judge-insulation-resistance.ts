@@ -1,3 +1,16 @@
+import type { InsulationKind, InsulationResistanceResult } from "../../schemas/procedures.ts";
+import { formatHundredths } from "../diagnosis/format-hundredths.ts";
+import { limitSource } from "./limit-source.ts";
+import { INSULATION_LIMITS, type InsulationLimits } from "./procedure-limits.ts";
+import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCES: Record<InsulationKind, string> = {
+  wiring: citeProcedure(["S47"], `500 V d.c. test voltage (${MEMORY})`),
+  compressor: citeProcedure(["S48", "S49"], `re-test after the crankcase heater has run (${COMMON_PRACTICE})`),
+  motor: citeProcedure(["S47"], `IEEE 43 5 MΩ for random-wound machines below 1 kV (${MEMORY})`),
+};
+
 /**
  * Judges an insulation-resistance reading to earth. Nothing is refused; every reading is judged.
  *
@@ -20,26 +33,15 @@
  * @throws RangeError "judgeInsulationResistance requires ..." for a negative or non-finite reading or a test voltage ≤ 0
  * @example judgeInsulationResistance({ megohms: 1.2, testVoltageV: 500, kind: "compressor" }).verdict // "warn"
  */
-import type { InsulationKind, InsulationResistanceResult } from "../../schemas/procedures.ts";
-import { formatHundredths } from "../diagnosis/format-hundredths.ts";
-import { limitSource } from "./limit-source.ts";
-import { INSULATION_LIMITS, type InsulationLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCES: Record<InsulationKind, string> = {
-  wiring: citeProcedure(["S47"], `500 V d.c. test voltage (${MEMORY})`),
-  compressor: citeProcedure(["S48", "S49"], `re-test after the crankcase heater has run (${COMMON_PRACTICE})`),
-  motor: citeProcedure(["S47"], `IEEE 43 5 MΩ for random-wound machines below 1 kV (${MEMORY})`),
-};
-
 export function judgeInsulationResistance(
   input: { megohms: number; testVoltageV: number; kind: InsulationKind },
   limits?: Partial<InsulationLimits>,
 ): InsulationResistanceResult {
   const { megohms, testVoltageV, kind } = input;
-  if (!Number.isFinite(megohms) || megohms < 0) throw new RangeError("judgeInsulationResistance requires a finite reading of zero or more megohms");
-  if (!Number.isFinite(testVoltageV) || !(testVoltageV > 0)) throw new RangeError("judgeInsulationResistance requires a test voltage above zero");
+  if (!Number.isFinite(megohms) || megohms < 0)
+    throw new RangeError("judgeInsulationResistance requires a finite reading of zero or more megohms");
+  if (!Number.isFinite(testVoltageV) || !(testVoltageV > 0))
+    throw new RangeError("judgeInsulationResistance requires a test voltage above zero");
   const { limits: applied, overridden } = resolveLimits(INSULATION_LIMITS, limits);
   const source = limitSource(SOURCES[kind], overridden);
   const reading = `${formatHundredths(megohms)} MΩ at ${testVoltageV} V`;
@@ -47,23 +49,51 @@ export function judgeInsulationResistance(
   if (kind === "wiring") {
     const minimumMegohms = applied.wiringMinimumMegohms;
     if (megohms < minimumMegohms) {
-      return { verdict: "fail", reason: `Wiring insulation ${reading} is below the ${minimumMegohms} MΩ minimum: find the fault before energising`, source, minimumMegohms };
+      return {
+        verdict: "fail",
+        reason: `Wiring insulation ${reading} is below the ${minimumMegohms} MΩ minimum: find the fault before energising`,
+        source,
+        minimumMegohms,
+      };
     }
     if (testVoltageV < applied.wiringTestVoltageV) {
-      return { verdict: "warn", reason: `Wiring insulation ${reading} meets ${minimumMegohms} MΩ, but the test voltage is below ${applied.wiringTestVoltageV} V d.c.: re-test at ${applied.wiringTestVoltageV} V`, source, minimumMegohms };
+      return {
+        verdict: "warn",
+        reason: `Wiring insulation ${reading} meets ${minimumMegohms} MΩ, but the test voltage is below ${applied.wiringTestVoltageV} V d.c.: re-test at ${applied.wiringTestVoltageV} V`,
+        source,
+        minimumMegohms,
+      };
     }
-    return { verdict: "pass", reason: `Wiring insulation ${reading} meets the ${minimumMegohms} MΩ minimum`, source, minimumMegohms };
+    return {
+      verdict: "pass",
+      reason: `Wiring insulation ${reading} meets the ${minimumMegohms} MΩ minimum`,
+      source,
+      minimumMegohms,
+    };
   }
 
   const failBelow = kind === "compressor" ? applied.compressorFailBelowMegohms : applied.motorFailBelowMegohms;
   const minimumMegohms = kind === "compressor" ? applied.compressorPassFromMegohms : applied.motorPassFromMegohms;
   const what = kind === "compressor" ? "Compressor winding insulation" : "Motor winding insulation";
   if (megohms < failBelow) {
-    return { verdict: "fail", reason: `${what} ${reading} is below ${failBelow} MΩ: treat it as a ground fault and do not energise`, source, minimumMegohms };
+    return {
+      verdict: "fail",
+      reason: `${what} ${reading} is below ${failBelow} MΩ: treat it as a ground fault and do not energise`,
+      source,
+      minimumMegohms,
+    };
   }
   if (megohms < minimumMegohms) {
-    const advice = kind === "compressor" ? "check the maker's minimum, run the crankcase heater and re-test" : "dry out or re-test, and check the maker's minimum";
-    return { verdict: "warn", reason: `${what} ${reading} is below ${minimumMegohms} MΩ: ${advice}`, source, minimumMegohms };
+    const advice =
+      kind === "compressor"
+        ? "check the maker's minimum, run the crankcase heater and re-test"
+        : "dry out or re-test, and check the maker's minimum";
+    return {
+      verdict: "warn",
+      reason: `${what} ${reading} is below ${minimumMegohms} MΩ: ${advice}`,
+      source,
+      minimumMegohms,
+    };
   }
   return { verdict: "pass", reason: `${what} ${reading} is at or above ${minimumMegohms} MΩ`, source, minimumMegohms };
 }

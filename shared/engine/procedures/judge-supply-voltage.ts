@@ -1,3 +1,12 @@
+import type { SupplyVoltageResult } from "../../schemas/procedures.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { limitSource } from "./limit-source.ts";
+import { SUPPLY_VOLTAGE_LIMITS, type SupplyVoltageLimits } from "./procedure-limits.ts";
+import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCE = citeProcedure(["S40"], COMMON_PRACTICE);
+
 /**
  * Judges the supply voltage while running against the nameplate: each phase within ±10 % of
  * the nameplate voltage [S40] (also common practice). Any phase outside fails.
@@ -8,28 +17,37 @@
  * @throws RangeError "judgeSupplyVoltage requires ..." for no readings, a negative reading or a nameplate ≤ 0
  * @example judgeSupplyVoltage({ measuredV: [410, 398, 405], nameplateV: 400 }).deviationPercent // [2.5, -0.5, 1.25]
  */
-import type { SupplyVoltageResult } from "../../schemas/procedures.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { limitSource } from "./limit-source.ts";
-import { SUPPLY_VOLTAGE_LIMITS, type SupplyVoltageLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCE = citeProcedure(["S40"], COMMON_PRACTICE);
-
-export function judgeSupplyVoltage(input: { measuredV: readonly number[]; nameplateV: number }, limits?: Partial<SupplyVoltageLimits>): SupplyVoltageResult {
+export function judgeSupplyVoltage(
+  input: { measuredV: readonly number[]; nameplateV: number },
+  limits?: Partial<SupplyVoltageLimits>,
+): SupplyVoltageResult {
   const { measuredV, nameplateV } = input;
   if (measuredV.length === 0) throw new RangeError("judgeSupplyVoltage requires at least one measured voltage");
-  if (!Number.isFinite(nameplateV) || !(nameplateV > 0)) throw new RangeError("judgeSupplyVoltage requires a nameplate voltage above zero");
-  if (measuredV.some((volts) => !Number.isFinite(volts) || volts < 0)) throw new RangeError("judgeSupplyVoltage requires finite measured voltages of zero or more");
+  if (!Number.isFinite(nameplateV) || !(nameplateV > 0))
+    throw new RangeError("judgeSupplyVoltage requires a nameplate voltage above zero");
+  if (measuredV.some((volts) => !Number.isFinite(volts) || volts < 0))
+    throw new RangeError("judgeSupplyVoltage requires finite measured voltages of zero or more");
   const { limits: applied, overridden } = resolveLimits(SUPPLY_VOLTAGE_LIMITS, limits);
   const source = limitSource(SOURCE, overridden);
   const deviationPercent = measuredV.map((volts) => (100 * (volts - nameplateV)) / nameplateV);
-  const worst = deviationPercent.reduce((largest, deviation) => (Math.abs(deviation) > Math.abs(largest) ? deviation : largest), 0);
+  const worst = deviationPercent.reduce(
+    (largest, deviation) => (Math.abs(deviation) > Math.abs(largest) ? deviation : largest),
+    0,
+  );
   const band = `±${applied.maxDeviationPercent} % of the ${nameplateV} V nameplate`;
   if (Math.abs(worst) > applied.maxDeviationPercent) {
     const direction = worst > 0 ? "above" : "below";
-    return { verdict: "fail", reason: `Supply is ${formatTenths(Math.abs(worst))} % ${direction} the nameplate, outside ${band}: correct the supply before running`, source, deviationPercent };
+    return {
+      verdict: "fail",
+      reason: `Supply is ${formatTenths(Math.abs(worst))} % ${direction} the nameplate, outside ${band}: correct the supply before running`,
+      source,
+      deviationPercent,
+    };
   }
-  return { verdict: "pass", reason: `Supply is within ${band} (largest deviation ${formatTenths(worst)} %)`, source, deviationPercent };
+  return {
+    verdict: "pass",
+    reason: `Supply is within ${band} (largest deviation ${formatTenths(worst)} %)`,
+    source,
+    deviationPercent,
+  };
 }

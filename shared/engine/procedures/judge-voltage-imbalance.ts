@@ -1,3 +1,12 @@
+import type { Verdict } from "../../schemas/procedures.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { limitSource } from "./limit-source.ts";
+import { VOLTAGE_IMBALANCE_LIMITS, type VoltageImbalanceLimits } from "./procedure-limits.ts";
+import { citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCE = citeProcedure(["S41", "S42", "S43", "S44"]);
+
 /**
  * Judges a three-phase voltage imbalance. Up to 2 % passes (HVAC equipment makers' maximum
  * [S41][S42]); above 2 % warns (motor heating, derate; call the supply authority); above 5 %
@@ -10,28 +19,32 @@
  * @throws RangeError "judgeVoltageImbalance requires a finite percentage of zero or more"
  * @example judgeVoltageImbalance(1.97).verdict // "pass"
  */
-import type { Verdict } from "../../schemas/procedures.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { limitSource } from "./limit-source.ts";
-import { VOLTAGE_IMBALANCE_LIMITS, type VoltageImbalanceLimits } from "./procedure-limits.ts";
-import { citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCE = citeProcedure(["S41", "S42", "S43", "S44"]);
-
 export function judgeVoltageImbalance(percent: number, limits?: Partial<VoltageImbalanceLimits>): Verdict {
-  if (!Number.isFinite(percent) || percent < 0) throw new RangeError("judgeVoltageImbalance requires a finite percentage of zero or more");
+  if (!Number.isFinite(percent) || percent < 0)
+    throw new RangeError("judgeVoltageImbalance requires a finite percentage of zero or more");
   const { limits: applied, overridden } = resolveLimits(VOLTAGE_IMBALANCE_LIMITS, limits);
   const source = limitSource(SOURCE, overridden);
   const shown = `${formatTenths(percent)} %`;
   if (percent > applied.failAbovePercent) {
-    return { verdict: "fail", reason: `Voltage imbalance ${shown} is above ${applied.failAbovePercent} %: do not run the motor until the supply is corrected`, source };
+    return {
+      verdict: "fail",
+      reason: `Voltage imbalance ${shown} is above ${applied.failAbovePercent} %: do not run the motor until the supply is corrected`,
+      source,
+    };
   }
   if (percent > applied.passUpToPercent) {
-    return { verdict: "warn", reason: `Voltage imbalance ${shown} is above the ${applied.passUpToPercent} % equipment limit: the motor runs hot; have the supply checked`, source };
+    return {
+      verdict: "warn",
+      reason: `Voltage imbalance ${shown} is above the ${applied.passUpToPercent} % equipment limit: the motor runs hot; have the supply checked`,
+      source,
+    };
   }
   if (percent > applied.recommendedPercent) {
-    return { verdict: "pass", reason: `Voltage imbalance ${shown} is within the ${applied.passUpToPercent} % equipment limit (NEMA MG-1 recommends ${applied.recommendedPercent} % or less at the motor terminals)`, source };
+    return {
+      verdict: "pass",
+      reason: `Voltage imbalance ${shown} is within the ${applied.passUpToPercent} % equipment limit (NEMA MG-1 recommends ${applied.recommendedPercent} % or less at the motor terminals)`,
+      source,
+    };
   }
   return { verdict: "pass", reason: `Voltage imbalance ${shown} is within ${applied.recommendedPercent} %`, source };
 }

@@ -1,3 +1,5 @@
+import { convertPressure } from "../units/convert-pressure.ts";
+
 /**
  * Vacuum reading in microns of mercury (µmHg, = millitorr) to pascals absolute, through
  * `convertPressure` (convert-units; no hand-written factor). 1 micron = 1 mTorr = 0.133322 Pa
@@ -8,8 +10,6 @@
  * @throws Error "convertPressure requires a finite number" for NaN or ±Infinity
  * @example micronsToPa(500) // ≈ 66.661
  */
-import { convertPressure } from "../units/convert-pressure.ts";
-
 export function micronsToPa(microns: number): number {
   return convertPressure(microns, "micron", "Pa");
 }

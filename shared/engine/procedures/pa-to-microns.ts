@@ -1,3 +1,5 @@
+import { convertPressure } from "../units/convert-pressure.ts";
+
 /**
  * Pascals absolute to microns of mercury (µmHg, = millitorr), the inverse of `micronsToPa`,
  * through `convertPressure` (convert-units). 133.322 Pa = 1000 microns [S60].
@@ -7,8 +9,6 @@
  * @throws Error "convertPressure requires a finite number" for NaN or ±Infinity
  * @example paToMicrons(133.322) // ≈ 1000
  */
-import { convertPressure } from "../units/convert-pressure.ts";
-
 export function paToMicrons(pa: number): number {
   return convertPressure(pa, "Pa", "micron");
 }

@@ -1,3 +1,10 @@
+import type { PressureTestResult } from "../../schemas/procedures.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { KELVIN_OFFSET, STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
+import { COMPUTED, citeProcedure } from "./procedure-sources.ts";
+
+const SOURCE = citeProcedure(["S65", "S74"], `ideal-gas correction on absolute pressure and kelvin (${COMPUTED})`);
+
 /**
  * Result of a standing nitrogen pressure (tightness) test, corrected for temperature. Nitrogen
  * is an ideal gas at these pressures, so in a fixed volume the absolute pressure follows the
@@ -19,13 +26,6 @@
  * @example pressureTestResult({ startGaugeKPa: 3800, startTempC: 27, endGaugeKPa: 3730, endTempC: 20, allowedDropKPa: 0 })
  *   // { expectedEndGaugeKPa: 3709.0…, correctedDropKPa: -21.0…, pass: true, … } — [S65] worked example: no leak
  */
-import type { PressureTestResult } from "../../schemas/procedures.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { KELVIN_OFFSET, STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
-import { COMPUTED, citeProcedure } from "./procedure-sources.ts";
-
-const SOURCE = citeProcedure(["S65", "S74"], `ideal-gas correction on absolute pressure and kelvin (${COMPUTED})`);
-
 export function pressureTestResult(input: {
   startGaugeKPa: number;
   startTempC: number;
@@ -37,13 +37,15 @@ export function pressureTestResult(input: {
   const { startGaugeKPa, startTempC, endGaugeKPa, endTempC, allowedDropKPa } = input;
   const atmosphere = input.atmosphericPressureKPa ?? STANDARD_ATMOSPHERE_KPA;
   const values = [startGaugeKPa, startTempC, endGaugeKPa, endTempC, allowedDropKPa, atmosphere];
-  if (values.some((value) => !Number.isFinite(value))) throw new RangeError("pressureTestResult requires finite numbers");
+  if (values.some((value) => !Number.isFinite(value)))
+    throw new RangeError("pressureTestResult requires finite numbers");
   if (!(startGaugeKPa > 0)) throw new RangeError("pressureTestResult requires a start pressure above 0 kPa gauge");
   if (!(atmosphere > 0)) throw new RangeError("pressureTestResult requires an atmospheric pressure above zero");
   if (allowedDropKPa < 0) throw new RangeError("pressureTestResult requires an allowed drop of zero or more");
   const startK = startTempC + KELVIN_OFFSET;
   const endK = endTempC + KELVIN_OFFSET;
-  if (!(startK > 0) || !(endK > 0)) throw new RangeError("pressureTestResult requires temperatures above absolute zero");
+  if (!(startK > 0) || !(endK > 0))
+    throw new RangeError("pressureTestResult requires temperatures above absolute zero");
 
   const startAbsKPa = startGaugeKPa + atmosphere;
   const expectedEndGaugeKPa = (startAbsKPa * endK) / startK - atmosphere;

@@ -1,3 +1,5 @@
+import type { RefrigerantBalance } from "../../schemas/procedures.ts";
+
 /**
  * Refrigerant balance of one visit on a circuit that was recovered (emptied into a recovery
  * cylinder) and recharged. Registers record the quantities recovered, reused and added per
@@ -19,16 +21,20 @@
  * @example refrigerantBalance({ nameplateKg: 2.4, recoveredKg: 1.6, addedKg: 0.8, reusedKg: 1.6 })
  *   // { shortfallKg: 0.8, finalChargeKg: 2.4, differenceFromNameplateKg: 0 } (to rounding)
  */
-import type { RefrigerantBalance } from "../../schemas/procedures.ts";
-
-export function refrigerantBalance(input: { nameplateKg: number; recoveredKg: number; addedKg: number; reusedKg?: number }): RefrigerantBalance {
+export function refrigerantBalance(input: {
+  nameplateKg: number;
+  recoveredKg: number;
+  addedKg: number;
+  reusedKg?: number;
+}): RefrigerantBalance {
   const { nameplateKg, recoveredKg, addedKg } = input;
   const reusedKg = input.reusedKg ?? 0;
   if ([nameplateKg, recoveredKg, addedKg, reusedKg].some((value) => !Number.isFinite(value) || value < 0)) {
     throw new RangeError("refrigerantBalance requires finite masses of zero or more");
   }
   if (!(nameplateKg > 0)) throw new RangeError("refrigerantBalance requires a nameplate charge above zero");
-  if (reusedKg > recoveredKg) throw new RangeError("refrigerantBalance requires reused refrigerant no more than was recovered");
+  if (reusedKg > recoveredKg)
+    throw new RangeError("refrigerantBalance requires reused refrigerant no more than was recovered");
   const finalChargeKg = reusedKg + addedKg;
   return {
     shortfallKg: nameplateKg - recoveredKg,

@@ -1,3 +1,16 @@
+import type { RunningCurrentKind } from "../../schemas/procedures.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { MAX_PLAUSIBLE_TIMES_RATED, type RunningCurrentLimits } from "./procedure-limits.ts";
+import { MEMORY } from "./procedure-sources.ts";
+import { runningCurrent } from "./running-current.ts";
+
+/** A message shown beside a field while typing: caution (check it) or danger (stop). */
+export interface LiveNotice {
+  level: "caution" | "danger";
+  message: string;
+  source: string;
+}
+
 /**
  * What to say next to a running-current box while the technician types, before anything is
  * saved: the same verdict the server will store (runningCurrent: above the nameplate warns,
@@ -13,19 +26,6 @@
  * @throws never
  * @example runningCurrentNotice({ amps: 15, ratedA: 10, kind: "compressor-rla" })?.level // "danger"
  */
-import type { RunningCurrentKind } from "../../schemas/procedures.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { MAX_PLAUSIBLE_TIMES_RATED, type RunningCurrentLimits } from "./procedure-limits.ts";
-import { MEMORY } from "./procedure-sources.ts";
-import { runningCurrent } from "./running-current.ts";
-
-/** A message shown beside a field while typing: caution (check it) or danger (stop). */
-export interface LiveNotice {
-  level: "caution" | "danger";
-  message: string;
-  source: string;
-}
-
 export function runningCurrentNotice(
   input: { amps: number; ratedA: number; kind: RunningCurrentKind },
   limits?: Partial<RunningCurrentLimits>,

@@ -1,3 +1,15 @@
+import type { RunningCurrentKind, RunningCurrentResult } from "../../schemas/procedures.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { limitSource } from "./limit-source.ts";
+import { RUNNING_CURRENT_LIMITS, type RunningCurrentLimits } from "./procedure-limits.ts";
+import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCES: Record<RunningCurrentKind, string> = {
+  "compressor-rla": citeProcedure(["S39"], COMMON_PRACTICE),
+  "fan-fla": `${COMMON_PRACTICE}; service factor 1.15 (${MEMORY})`,
+};
+
 /**
  * Judges one phase's running current against the nameplate.
  *
@@ -15,22 +27,15 @@
  * @throws RangeError "runningCurrent requires ..." for a negative or non-finite current or a rating ≤ 0
  * @example runningCurrent({ amps: 9.2, ratedA: 10, kind: "compressor-rla" }).percentOfRated // ≈ 92
  */
-import type { RunningCurrentKind, RunningCurrentResult } from "../../schemas/procedures.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { limitSource } from "./limit-source.ts";
-import { RUNNING_CURRENT_LIMITS, type RunningCurrentLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCES: Record<RunningCurrentKind, string> = {
-  "compressor-rla": citeProcedure(["S39"], COMMON_PRACTICE),
-  "fan-fla": `${COMMON_PRACTICE}; service factor 1.15 (${MEMORY})`,
-};
-
-export function runningCurrent(input: { amps: number; ratedA: number; kind: RunningCurrentKind }, limits?: Partial<RunningCurrentLimits>): RunningCurrentResult {
+export function runningCurrent(
+  input: { amps: number; ratedA: number; kind: RunningCurrentKind },
+  limits?: Partial<RunningCurrentLimits>,
+): RunningCurrentResult {
   const { amps, ratedA, kind } = input;
-  if (!Number.isFinite(amps) || amps < 0) throw new RangeError("runningCurrent requires a finite current of zero or more");
-  if (!Number.isFinite(ratedA) || !(ratedA > 0)) throw new RangeError("runningCurrent requires a nameplate current above zero");
+  if (!Number.isFinite(amps) || amps < 0)
+    throw new RangeError("runningCurrent requires a finite current of zero or more");
+  if (!Number.isFinite(ratedA) || !(ratedA > 0))
+    throw new RangeError("runningCurrent requires a nameplate current above zero");
   const { limits: applied, overridden } = resolveLimits(RUNNING_CURRENT_LIMITS, limits);
   const source = limitSource(SOURCES[kind], overridden);
   const percentOfRated = (100 * amps) / ratedA;
@@ -39,13 +44,26 @@ export function runningCurrent(input: { amps: number; ratedA: number; kind: Runn
   const failAbove = kind === "compressor-rla" ? applied.compressorFailAbovePercent : applied.fanFailAbovePercent;
   const shown = `${formatTenths(amps)} A is ${formatTenths(percentOfRated)} % of the ${formatTenths(ratedA)} A ${rating}`;
   if (amps === 0) {
-    return { verdict: "warn", reason: `No current measured: check that the motor is running and the clamp is round one conductor`, source, percentOfRated };
+    return {
+      verdict: "warn",
+      reason: `No current measured: check that the motor is running and the clamp is round one conductor`,
+      source,
+      percentOfRated,
+    };
   }
   if (percentOfRated > failAbove) {
-    return { verdict: "fail", reason: `${shown}, above ${failAbove} %: stop and find the cause (voltage, load, mechanical fault)`, source, percentOfRated };
+    return {
+      verdict: "fail",
+      reason: `${shown}, above ${failAbove} %: stop and find the cause (voltage, load, mechanical fault)`,
+      source,
+      percentOfRated,
+    };
   }
   if (percentOfRated > warnAbove) {
-    const advice = kind === "compressor-rla" ? "investigate against the maker's performance data" : "check the service factor on the nameplate and the fan's load";
+    const advice =
+      kind === "compressor-rla"
+        ? "investigate against the maker's performance data"
+        : "check the service factor on the nameplate and the fan's load";
     return { verdict: "warn", reason: `${shown}, above the nameplate: ${advice}`, source, percentOfRated };
   }
   return { verdict: "pass", reason: `${shown}, within the nameplate`, source, percentOfRated };

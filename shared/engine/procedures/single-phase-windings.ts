@@ -1,3 +1,15 @@
+import type { SinglePhaseWindingInput, SinglePhaseWindingResult } from "../../schemas/procedures.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { limitSource } from "./limit-source.ts";
+import { SINGLE_PHASE_WINDING_LIMITS, type SinglePhaseWindingLimits } from "./procedure-limits.ts";
+import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCE = citeProcedure(["S46"], `R–S = C–R + C–S (${MEMORY}); tolerance bands (${COMMON_PRACTICE})`);
+
+/** Ohms to two decimals: winding readings are often a few ohms, so tenths hide the difference. */
+const ohmsText = (value: number) => `${(Math.round(value * 100) / 100).toFixed(2)} Ω`;
+
 /**
  * Judges a single-phase compressor's windings from its three terminal readings. The run winding
  * sits between C and R, the start winding between C and S, so R–S reads both in series:
@@ -15,18 +27,6 @@
  * @throws RangeError "singlePhaseWindings requires ..." for a zero, negative or non-finite resistance
  * @example singlePhaseWindings({ commonRun: 1.2, commonStart: 3.1, runStart: 4.3 }).verdict // "pass"
  */
-import type { SinglePhaseWindingInput, SinglePhaseWindingResult } from "../../schemas/procedures.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { limitSource } from "./limit-source.ts";
-import { SINGLE_PHASE_WINDING_LIMITS, type SinglePhaseWindingLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCE = citeProcedure(["S46"], `R–S = C–R + C–S (${MEMORY}); tolerance bands (${COMMON_PRACTICE})`);
-
-/** Ohms to two decimals: winding readings are often a few ohms, so tenths hide the difference. */
-const ohmsText = (value: number) => `${(Math.round(value * 100) / 100).toFixed(2)} Ω`;
-
 export function singlePhaseWindings(
   ohms: SinglePhaseWindingInput,
   limits?: Partial<SinglePhaseWindingLimits>,

@@ -1,3 +1,13 @@
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { checkTestPressure } from "./check-test-pressure.ts";
+import { citeProcedure } from "./procedure-sources.ts";
+import { TEST_PRESSURE_LIMITS, type TestPressureLimits } from "./procedure-limits.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+import type { LiveNotice } from "./running-current-notice.ts";
+
+const usable = (value: number | null | undefined): value is number =>
+  value !== null && value !== undefined && Number.isFinite(value) && value > 0;
+
 /**
  * What to say next to the test-pressure box while the technician types: never exceed the rated
  * (maximum allowable, PS) pressure of the lowest-rated component [S57][S63][S64]. The limit is
@@ -13,16 +23,6 @@
  * @throws never
  * @example testPressureNotice({ testGaugeKPa: 4500, ratedKPa: 4150, nameplateKPa: 4150 })?.level // "danger"
  */
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { checkTestPressure } from "./check-test-pressure.ts";
-import { citeProcedure } from "./procedure-sources.ts";
-import { TEST_PRESSURE_LIMITS, type TestPressureLimits } from "./procedure-limits.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-import type { LiveNotice } from "./running-current-notice.ts";
-
-const usable = (value: number | null | undefined): value is number =>
-  value !== null && value !== undefined && Number.isFinite(value) && value > 0;
-
 export function testPressureNotice(
   input: { testGaugeKPa: number | undefined; ratedKPa: number | undefined; nameplateKPa: number | null },
   format: (kPa: number) => string = (kPa) => `${formatTenths(kPa)} kPa`,

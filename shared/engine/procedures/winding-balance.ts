@@ -1,3 +1,13 @@
+import type { WindingBalanceResult } from "../../schemas/procedures.ts";
+import { formatTenths } from "../diagnosis/format-tenths.ts";
+import { largestDeviationPercent } from "./largest-deviation-percent.ts";
+import { limitSource } from "./limit-source.ts";
+import { WINDING_BALANCE_LIMITS, type WindingBalanceLimits } from "./procedure-limits.ts";
+import { MEMORY, citeProcedure } from "./procedure-sources.ts";
+import { resolveLimits } from "./resolve-limits.ts";
+
+const SOURCE = citeProcedure(["S44"], `small hermetic compressors within a few percent (${MEMORY})`);
+
 /**
  * Judges the balance of three lead-to-lead winding resistances: the largest deviation from
  * their average, percent of the average (same formula as the voltage imbalance). Within 2 %
@@ -11,27 +21,36 @@
  * @throws RangeError "windingBalance requires ..." for a zero, negative or non-finite resistance
  * @example windingBalance([1.52, 1.50, 1.55]).maxDeviationPercent // ≈ 1.75
  */
-import type { WindingBalanceResult } from "../../schemas/procedures.ts";
-import { formatTenths } from "../diagnosis/format-tenths.ts";
-import { largestDeviationPercent } from "./largest-deviation-percent.ts";
-import { limitSource } from "./limit-source.ts";
-import { WINDING_BALANCE_LIMITS, type WindingBalanceLimits } from "./procedure-limits.ts";
-import { MEMORY, citeProcedure } from "./procedure-sources.ts";
-import { resolveLimits } from "./resolve-limits.ts";
-
-const SOURCE = citeProcedure(["S44"], `small hermetic compressors within a few percent (${MEMORY})`);
-
-export function windingBalance(ohms: readonly [number, number, number], limits?: Partial<WindingBalanceLimits>): WindingBalanceResult {
-  if (ohms.some((value) => !Number.isFinite(value) || !(value > 0))) throw new RangeError("windingBalance requires three finite resistances above zero");
+export function windingBalance(
+  ohms: readonly [number, number, number],
+  limits?: Partial<WindingBalanceLimits>,
+): WindingBalanceResult {
+  if (ohms.some((value) => !Number.isFinite(value) || !(value > 0)))
+    throw new RangeError("windingBalance requires three finite resistances above zero");
   const maxDeviationPercent = largestDeviationPercent(ohms, "windingBalance");
   const { limits: applied, overridden } = resolveLimits(WINDING_BALANCE_LIMITS, limits);
   const source = limitSource(SOURCE, overridden);
   const shown = `${formatTenths(maxDeviationPercent)} %`;
   if (maxDeviationPercent > applied.warnWithinPercent) {
-    return { verdict: "fail", reason: `Winding resistances differ by up to ${shown} from their average, more than ${applied.warnWithinPercent} %: suspect a shorted turn or a poor connection`, source, maxDeviationPercent };
+    return {
+      verdict: "fail",
+      reason: `Winding resistances differ by up to ${shown} from their average, more than ${applied.warnWithinPercent} %: suspect a shorted turn or a poor connection`,
+      source,
+      maxDeviationPercent,
+    };
   }
   if (maxDeviationPercent > applied.passWithinPercent) {
-    return { verdict: "warn", reason: `Winding resistances differ by up to ${shown} from their average, more than ${applied.passWithinPercent} %: compare with the maker's figures`, source, maxDeviationPercent };
+    return {
+      verdict: "warn",
+      reason: `Winding resistances differ by up to ${shown} from their average, more than ${applied.passWithinPercent} %: compare with the maker's figures`,
+      source,
+      maxDeviationPercent,
+    };
   }
-  return { verdict: "pass", reason: `Winding resistances are within ${applied.passWithinPercent} % of their average (${shown})`, source, maxDeviationPercent };
+  return {
+    verdict: "pass",
+    reason: `Winding resistances are within ${applied.passWithinPercent} % of their average (${shown})`,
+    source,
+    maxDeviationPercent,
+  };
 }

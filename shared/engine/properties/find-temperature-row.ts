@@ -1,3 +1,6 @@
+import { findInterval } from "./find-interval.ts";
+import type { CompiledRefrigerant } from "./resolve-refrigerant.ts";
+
 /**
  * Row i of a refrigerant table with temperature[i] ≤ T ≤ temperature[i+1], by
  * direct index on the uniform part of the grid (falls back to a binary search for
@@ -9,9 +12,6 @@
  * @throws never
  * @example findTemperatureRow(resolveRefrigerant("R32"), 0.2) // 120 (the row of 0 °C)
  */
-import { findInterval } from "./find-interval.ts";
-import type { CompiledRefrigerant } from "./resolve-refrigerant.ts";
-
 export function findTemperatureRow(refrigerant: CompiledRefrigerant, temperatureC: number): number {
   const { gridStep, temperatureC: rows, rowCount } = refrigerant;
   if (gridStep === 0) return findInterval(rows, temperatureC);

@@ -1,3 +1,5 @@
+import { resolveRefrigerant, type RefrigerantInfo } from "./resolve-refrigerant.ts";
+
 /**
  * Metadata of one refrigerant: designation, pure or blend, safety class
  * (ASHRAE 34 / ISO 817), GWP100 (IPCC AR4 and AR5, named), critical point, normal
@@ -8,8 +10,6 @@
  * @throws PropertyRangeError UNKNOWN_REFRIGERANT for an id without a table; TABLE_NOT_LOADED before `loadRefrigerant(id)`
  * @example (await loadRefrigerant("R32"), getRefrigerant("R32").safety.class) // "A2L"
  */
-import { resolveRefrigerant, type RefrigerantInfo } from "./resolve-refrigerant.ts";
-
 export function getRefrigerant(id: string): RefrigerantInfo {
   return resolveRefrigerant(id).info;
 }

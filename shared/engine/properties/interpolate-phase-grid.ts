@@ -1,3 +1,13 @@
+import { findInterval } from "./find-interval.ts";
+import type { PhaseGridRows } from "./phase-grid-rows.ts";
+import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
+
+export interface PhaseGridValues {
+  enthalpy: number;
+  entropy: number;
+  logDensity: number;
+}
+
 /**
  * Enthalpy, entropy and ln density of one phase at (ln p, r) from its single-phase grid:
  * cubic Hermite in the reduced temperature r along each of the four nearest rows (exact
@@ -13,16 +23,6 @@
  * @throws never (the caller checks the ranges)
  * @example interpolatePhaseGrid(r32.vapour, phaseGridRows(r32.vapour, 1000), 0.2).enthalpy // ≈ 552.30 (kJ/kg, R32 at 1000 kPa, 43.2 °C)
  */
-import { findInterval } from "./find-interval.ts";
-import type { PhaseGridRows } from "./phase-grid-rows.ts";
-import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
-
-export interface PhaseGridValues {
-  enthalpy: number;
-  entropy: number;
-  logDensity: number;
-}
-
 export function interpolatePhaseGrid(grid: CompiledPhaseGrid, rows: PhaseGridRows, reduced: number): PhaseGridValues {
   const { nodes, columns } = grid;
   const j = findInterval(nodes, reduced);

@@ -1,21 +1,3 @@
-/**
- * Reduced temperature r at which one phase grid, at a fixed pressure, has a given enthalpy or
- * entropy: the inverse of interpolatePhaseGrid along r. Both rise with temperature at constant
- * pressure (c_p > 0), so along r they rise for the vapour (r grows with T) and fall for the
- * liquid (r grows as T falls). The node interval comes from a binary search on the node values
- * of the interpolated row; inside it the Hermite cubic is solved by Newton's method kept inside
- * the interval by bisection.
- *
- * @param grid compiled phase grid
- * @param rows window and weights from phaseGridRows at the pressure
- * @param property "enthalpy" (kJ/kg) or "entropy" (kJ/(kg·K))
- * @param target the value sought
- * @returns r in [0, 1]; "saturation-side" when the value lies beyond the saturation curve (in the
- *   dome or the other phase); "beyond-bound" when it lies past the far temperature bound by more
- *   than the table's promised error (within it, the bound: r = 1)
- * @throws never
- * @example invertPhaseGrid(r32.vapour, phaseGridRows(r32.vapour, 1000), "enthalpy", 560) // ≈ 0.2469
- */
 import type { PhaseGridRows } from "./phase-grid-rows.ts";
 import { SINGLE_PHASE_TOLERANCES } from "./property-tolerances.ts";
 import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
@@ -36,6 +18,24 @@ function rowValue(
   );
 }
 
+/**
+ * Reduced temperature r at which one phase grid, at a fixed pressure, has a given enthalpy or
+ * entropy: the inverse of interpolatePhaseGrid along r. Both rise with temperature at constant
+ * pressure (c_p > 0), so along r they rise for the vapour (r grows with T) and fall for the
+ * liquid (r grows as T falls). The node interval comes from a binary search on the node values
+ * of the interpolated row; inside it the Hermite cubic is solved by Newton's method kept inside
+ * the interval by bisection.
+ *
+ * @param grid compiled phase grid
+ * @param rows window and weights from phaseGridRows at the pressure
+ * @param property "enthalpy" (kJ/kg) or "entropy" (kJ/(kg·K))
+ * @param target the value sought
+ * @returns r in [0, 1]; "saturation-side" when the value lies beyond the saturation curve (in the
+ *   dome or the other phase); "beyond-bound" when it lies past the far temperature bound by more
+ *   than the table's promised error (within it, the bound: r = 1)
+ * @throws never
+ * @example invertPhaseGrid(r32.vapour, phaseGridRows(r32.vapour, 1000), "enthalpy", 560) // ≈ 0.2469
+ */
 export function invertPhaseGrid(
   grid: CompiledPhaseGrid,
   rows: PhaseGridRows,

@@ -1,3 +1,5 @@
+import { isRefrigerantTableLoaded } from "./resolve-refrigerant.ts";
+
 /**
  * Whether a refrigerant's saturation table has been loaded (`loadRefrigerant`), so that its
  * lookups run synchronously.
@@ -7,8 +9,6 @@
  * @throws never
  * @example isRefrigerantLoaded("R410A") // false until `await loadRefrigerant("R410A")`
  */
-import { isRefrigerantTableLoaded } from "./resolve-refrigerant.ts";
-
 export function isRefrigerantLoaded(id: string): boolean {
   return isRefrigerantTableLoaded(id);
 }

@@ -1,3 +1,5 @@
+import { SINGLE_PHASE_TABLES } from "./single-phase-registry.ts";
+
 /**
  * Whether a refrigerant's single-phase table has been registered, so that singlePhaseState
  * and measuredCycle can run synchronously.
@@ -7,8 +9,6 @@
  * @throws never
  * @example isSinglePhaseTableLoaded("R410A") // false until its table is loaded
  */
-import { SINGLE_PHASE_TABLES } from "./single-phase-registry.ts";
-
 export function isSinglePhaseTableLoaded(id: string): boolean {
   return SINGLE_PHASE_TABLES.has(id);
 }

@@ -1,3 +1,7 @@
+import { REFRIGERANT_IDS, resolveRefrigerant, type RefrigerantInfo } from "./resolve-refrigerant.ts";
+
+const byDesignation = (a: string, b: string) => a.localeCompare(b, "en", { numeric: true });
+
 /**
  * Metadata of every refrigerant with a table, ordered by designation number
  * (R12, R22, R32, R123, R134a, …, R1234ze(E)). Needs every table loaded
@@ -8,10 +12,6 @@
  * @throws PropertyRangeError TABLE_NOT_LOADED while any table is not loaded
  * @example (await loadAllRefrigerants(), listRefrigerants().length) // 31
  */
-import { REFRIGERANT_IDS, resolveRefrigerant, type RefrigerantInfo } from "./resolve-refrigerant.ts";
-
-const byDesignation = (a: string, b: string) => a.localeCompare(b, "en", { numeric: true });
-
 export function listRefrigerants(): RefrigerantInfo[] {
   return [...REFRIGERANT_IDS].sort(byDesignation).map((id) => resolveRefrigerant(id).info);
 }

@@ -1,3 +1,6 @@
+import { importRefrigerantTable } from "./import-refrigerant-table.ts";
+import { resolveRefrigerant, type RefrigerantInfo } from "./resolve-refrigerant.ts";
+
 /**
  * Loads one refrigerant's saturation table and registers it with the engine, once: the only way
  * tables reach `saturationPressure`, `saturationTemperature`, `saturatedState`, `getRefrigerant`
@@ -13,9 +16,6 @@
  *   INVALID_TABLE when the file fails its schema
  * @example (await loadRefrigerant("R32")).safety.class // "A2L"; then saturationPressure("R32", 0) runs synchronously
  */
-import { importRefrigerantTable } from "./import-refrigerant-table.ts";
-import { resolveRefrigerant, type RefrigerantInfo } from "./resolve-refrigerant.ts";
-
 export async function loadRefrigerant(id: string): Promise<RefrigerantInfo> {
   await importRefrigerantTable(id);
   return resolveRefrigerant(id).info;

@@ -1,3 +1,10 @@
+import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
+
+export interface PhaseGridRows {
+  start: number;
+  weights: [number, number, number, number];
+}
+
 /**
  * The four rows of a single-phase grid around a pressure and their cubic Lagrange weights in
  * the row coordinate y = ln(p / (1 − p/p_s)) (rows are uniform in y; at the ends the window of
@@ -10,13 +17,6 @@
  * @throws never
  * @example phaseGridRows(grid, grid.minimumPressureKPa).weights // [1, 0, 0, 0] (to rounding)
  */
-import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
-
-export interface PhaseGridRows {
-  start: number;
-  weights: [number, number, number, number];
-}
-
 export function phaseGridRows(grid: CompiledPhaseGrid, pressureKPa: number): PhaseGridRows {
   const coordinate = Math.log(pressureKPa) - Math.log1p(-pressureKPa / grid.pressureScaleKPa);
   const position = (coordinate - grid.coordinateStart) / grid.coordinateStep;

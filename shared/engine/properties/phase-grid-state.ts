@@ -1,17 +1,3 @@
-/**
- * The single-phase state of one grid at a pressure and reduced temperature: the values of
- * interpolatePhaseGrid turned into the public SinglePhaseState (°C, kPa absolute, kJ/kg,
- * kJ/(kg·K), kg/m³).
- *
- * @param grid compiled phase grid
- * @param rows window and weights from phaseGridRows at the pressure
- * @param pressureKPa kPa absolute
- * @param saturationC saturation temperature at the pressure (dew for vapour, bubble for liquid), °C
- * @param reduced r in [0, 1]
- * @returns the state
- * @throws never
- * @example phaseGridState(r32.vapour, phaseGridRows(r32.vapour, 1000), 1000, 6.62, 0.1).phase // "vapour"
- */
 import { interpolatePhaseGrid } from "./interpolate-phase-grid.ts";
 import type { PhaseGridRows } from "./phase-grid-rows.ts";
 import type { CompiledPhaseGrid, SinglePhase } from "./single-phase-registry.ts";
@@ -31,6 +17,20 @@ export interface SinglePhaseState {
   densityKgPerM3: number;
 }
 
+/**
+ * The single-phase state of one grid at a pressure and reduced temperature: the values of
+ * interpolatePhaseGrid turned into the public SinglePhaseState (°C, kPa absolute, kJ/kg,
+ * kJ/(kg·K), kg/m³).
+ *
+ * @param grid compiled phase grid
+ * @param rows window and weights from phaseGridRows at the pressure
+ * @param pressureKPa kPa absolute
+ * @param saturationC saturation temperature at the pressure (dew for vapour, bubble for liquid), °C
+ * @param reduced r in [0, 1]
+ * @returns the state
+ * @throws never
+ * @example phaseGridState(r32.vapour, phaseGridRows(r32.vapour, 1000), 1000, 6.62, 0.1).phase // "vapour"
+ */
 export function phaseGridState(
   grid: CompiledPhaseGrid,
   rows: PhaseGridRows,

@@ -1,3 +1,7 @@
+import { PropertyRangeError } from "./property-range-error.ts";
+
+export type SaturationPoint = "bubble" | "dew";
+
 /**
  * Checks the `point` option of a saturation lookup.
  *
@@ -7,10 +11,6 @@
  * @throws PropertyRangeError INVALID_POINT for anything else
  * @example requireSaturationPoint("R407C", "mid") // throws
  */
-import { PropertyRangeError } from "./property-range-error.ts";
-
-export type SaturationPoint = "bubble" | "dew";
-
 export function requireSaturationPoint(id: string, point: unknown): asserts point is SaturationPoint {
   if (point !== "bubble" && point !== "dew") {
     throw new PropertyRangeError(

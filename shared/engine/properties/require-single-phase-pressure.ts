@@ -1,3 +1,8 @@
+import { PropertyRangeError } from "./property-range-error.ts";
+import type { CompiledSinglePhaseTable } from "./single-phase-registry.ts";
+
+const formatKPa = (value: number) => (value >= 100 ? value.toFixed(0) : value.toPrecision(3));
+
 /**
  * Checks a pressure for a single-phase lookup: a finite number inside the rows of at least
  * one phase of the refrigerant's single-phase table.
@@ -8,11 +13,6 @@
  * @throws PropertyRangeError NOT_FINITE, BELOW_RANGE or ABOVE_RANGE with a technician-readable message
  * @example requireSinglePhasePressure(resolveSinglePhaseTable("R32"), 20000) // throws ABOVE_RANGE
  */
-import { PropertyRangeError } from "./property-range-error.ts";
-import type { CompiledSinglePhaseTable } from "./single-phase-registry.ts";
-
-const formatKPa = (value: number) => (value >= 100 ? value.toFixed(0) : value.toPrecision(3));
-
 export function requireSinglePhasePressure(table: CompiledSinglePhaseTable, pressureKPa: number): void {
   const { id, vapour, liquid } = table;
   if (typeof pressureKPa !== "number" || !Number.isFinite(pressureKPa)) {

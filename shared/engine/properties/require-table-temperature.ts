@@ -1,3 +1,6 @@
+import { PropertyRangeError } from "./property-range-error.ts";
+import type { CompiledRefrigerant } from "./resolve-refrigerant.ts";
+
 /**
  * Checks that a temperature is a finite number inside a refrigerant's table.
  *
@@ -7,9 +10,6 @@
  * @throws PropertyRangeError NOT_FINITE, BELOW_RANGE or ABOVE_RANGE with a technician-readable message
  * @example requireTableTemperature(resolveRefrigerant("R32"), -80) // throws "R32 below -60 °C is outside the table …"
  */
-import { PropertyRangeError } from "./property-range-error.ts";
-import type { CompiledRefrigerant } from "./resolve-refrigerant.ts";
-
 export function requireTableTemperature(refrigerant: CompiledRefrigerant, temperatureC: number): void {
   // Fast path first: this runs on every lookup, so no message is built unless it throws.
   if (

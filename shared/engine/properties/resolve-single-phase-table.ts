@@ -1,3 +1,7 @@
+import { PropertyRangeError } from "./property-range-error.ts";
+import { resolveRefrigerant } from "./resolve-refrigerant.ts";
+import { SINGLE_PHASE_TABLES, type CompiledSinglePhaseTable } from "./single-phase-registry.ts";
+
 /**
  * The registered single-phase table of a refrigerant, or a clear error saying it was not
  * loaded (a program error: load it first, see shared/property-tables/load-single-phase-table.ts).
@@ -8,10 +12,6 @@
  *   TABLE_NOT_LOADED when the single-phase table has not been registered
  * @example resolveSinglePhaseTable("R32").vapour.rows // 34 (after loading R32)
  */
-import { PropertyRangeError } from "./property-range-error.ts";
-import { resolveRefrigerant } from "./resolve-refrigerant.ts";
-import { SINGLE_PHASE_TABLES, type CompiledSinglePhaseTable } from "./single-phase-registry.ts";
-
 export function resolveSinglePhaseTable(id: string): CompiledSinglePhaseTable {
   const table = SINGLE_PHASE_TABLES.get(id);
   if (table) return table;

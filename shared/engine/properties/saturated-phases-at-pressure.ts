@@ -1,15 +1,3 @@
-/**
- * Saturated liquid (bubble point) and saturated vapour (dew point) of a refrigerant at one
- * pressure, from the edges (r = 0) of its single-phase table: the end points of the two-phase
- * line at that pressure on a pressure–enthalpy diagram, consistent with singlePhaseState on
- * either side. For a blend the two temperatures differ by the glide.
- *
- * @param refrigerant ASHRAE designation
- * @param pressureKPa kPa absolute, inside both phase grids of the single-phase table
- * @returns liquid and vapour states (phase, °C, kJ/kg, kJ/(kg·K), kg/m³)
- * @throws PropertyRangeError TABLE_NOT_LOADED, NOT_FINITE, BELOW_RANGE or ABOVE_RANGE
- * @example saturatedPhasesAtPressure("R134a", 292.8).vapour.enthalpyKJPerKg // ≈ 398.6 (kJ/kg at 0 °C)
- */
 import { phaseGridRows } from "./phase-grid-rows.ts";
 import { phaseGridState, type SinglePhaseState } from "./phase-grid-state.ts";
 import { PropertyRangeError } from "./property-range-error.ts";
@@ -22,6 +10,18 @@ export interface SaturatedPhases {
   vapour: SinglePhaseState;
 }
 
+/**
+ * Saturated liquid (bubble point) and saturated vapour (dew point) of a refrigerant at one
+ * pressure, from the edges (r = 0) of its single-phase table: the end points of the two-phase
+ * line at that pressure on a pressure–enthalpy diagram, consistent with singlePhaseState on
+ * either side. For a blend the two temperatures differ by the glide.
+ *
+ * @param refrigerant ASHRAE designation
+ * @param pressureKPa kPa absolute, inside both phase grids of the single-phase table
+ * @returns liquid and vapour states (phase, °C, kJ/kg, kJ/(kg·K), kg/m³)
+ * @throws PropertyRangeError TABLE_NOT_LOADED, NOT_FINITE, BELOW_RANGE or ABOVE_RANGE
+ * @example saturatedPhasesAtPressure("R134a", 292.8).vapour.enthalpyKJPerKg // ≈ 398.6 (kJ/kg at 0 °C)
+ */
 export function saturatedPhasesAtPressure(refrigerant: string, pressureKPa: number): SaturatedPhases {
   const table = resolveSinglePhaseTable(refrigerant);
   requireSinglePhasePressure(table, pressureKPa);

@@ -1,3 +1,9 @@
+import { findTemperatureRow } from "./find-temperature-row.ts";
+import { interpolateHermite } from "./interpolate-hermite.ts";
+import { requireSaturationPoint, type SaturationPoint } from "./require-saturation-point.ts";
+import { requireTableTemperature } from "./require-table-temperature.ts";
+import { resolveRefrigerant } from "./resolve-refrigerant.ts";
+
 /**
  * Saturation pressure of a refrigerant at a temperature, from its generated table.
  *
@@ -17,12 +23,6 @@
  * @throws PropertyRangeError for an unknown id, a non-finite or out-of-range temperature, or an invalid point
  * @example saturationPressure("R32", 0) // 813.10 (kPa absolute)
  */
-import { findTemperatureRow } from "./find-temperature-row.ts";
-import { interpolateHermite } from "./interpolate-hermite.ts";
-import { requireSaturationPoint, type SaturationPoint } from "./require-saturation-point.ts";
-import { requireTableTemperature } from "./require-table-temperature.ts";
-import { resolveRefrigerant } from "./resolve-refrigerant.ts";
-
 export function saturationPressure(id: string, temperatureC: number, point: SaturationPoint = "dew"): number {
   const refrigerant = resolveRefrigerant(id);
   requireTableTemperature(refrigerant, temperatureC);

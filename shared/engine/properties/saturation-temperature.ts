@@ -1,3 +1,11 @@
+import { findInterval } from "./find-interval.ts";
+import { interpolateHermite } from "./interpolate-hermite.ts";
+import { PropertyRangeError } from "./property-range-error.ts";
+import { requireSaturationPoint, type SaturationPoint } from "./require-saturation-point.ts";
+import { resolveRefrigerant } from "./resolve-refrigerant.ts";
+
+const formatKPa = (value: number) => (value >= 100 ? value.toFixed(1) : value.toPrecision(4));
+
 /**
  * Saturation temperature of a refrigerant at a pressure, from its generated table.
  *
@@ -14,14 +22,6 @@
  * @throws PropertyRangeError for an unknown id, a non-finite or out-of-range pressure, or an invalid point
  * @example saturationTemperature("R32", 813.1013) // ≈ 0.000 (°C)
  */
-import { findInterval } from "./find-interval.ts";
-import { interpolateHermite } from "./interpolate-hermite.ts";
-import { PropertyRangeError } from "./property-range-error.ts";
-import { requireSaturationPoint, type SaturationPoint } from "./require-saturation-point.ts";
-import { resolveRefrigerant } from "./resolve-refrigerant.ts";
-
-const formatKPa = (value: number) => (value >= 100 ? value.toFixed(1) : value.toPrecision(4));
-
 export function saturationTemperature(id: string, pressureKPaAbs: number, point: SaturationPoint = "dew"): number {
   const refrigerant = resolveRefrigerant(id);
   requireSaturationPoint(id, point);

@@ -1,3 +1,6 @@
+import type { SinglePhaseState } from "./phase-grid-state.ts";
+import { singlePhaseStateFromProperty } from "./single-phase-state-from-property.ts";
+
 /**
  * Superheated vapour or subcooled liquid at a pressure with a given enthalpy: its temperature,
  * entropy and density (the inverse of singlePhaseState in T). Used for the state after a
@@ -13,9 +16,6 @@
  *   INSIDE_DOME when the enthalpy lies between saturated liquid and vapour at p
  * @example singlePhaseStateFromEnthalpy("R134a", 1000, 441.5).temperatureC // ≈ 59.97 (°C)
  */
-import type { SinglePhaseState } from "./phase-grid-state.ts";
-import { singlePhaseStateFromProperty } from "./single-phase-state-from-property.ts";
-
 export function singlePhaseStateFromEnthalpy(
   refrigerant: string,
   pressureKPa: number,

@@ -1,3 +1,6 @@
+import type { SinglePhaseState } from "./phase-grid-state.ts";
+import { singlePhaseStateFromProperty } from "./single-phase-state-from-property.ts";
+
 /**
  * Superheated vapour or subcooled liquid at a pressure with a given entropy: its temperature,
  * enthalpy and density. The isentropic end of a compression: the state at discharge pressure
@@ -13,9 +16,6 @@
  *   INSIDE_DOME when the entropy lies between saturated liquid and vapour at p
  * @example singlePhaseStateFromEntropy("R134a", 1000, 1.7476).temperatureC // ≈ 49.8 (°C, superheated vapour)
  */
-import type { SinglePhaseState } from "./phase-grid-state.ts";
-import { singlePhaseStateFromProperty } from "./single-phase-state-from-property.ts";
-
 export function singlePhaseStateFromEntropy(
   refrigerant: string,
   pressureKPa: number,

@@ -1,3 +1,13 @@
+import { invertPhaseGrid } from "./invert-phase-grid.ts";
+import { phaseGridRows } from "./phase-grid-rows.ts";
+import { phaseGridState, type SinglePhaseState } from "./phase-grid-state.ts";
+import { PropertyRangeError } from "./property-range-error.ts";
+import { requireSinglePhasePressure } from "./require-single-phase-pressure.ts";
+import { resolveSinglePhaseTable } from "./resolve-single-phase-table.ts";
+import { saturationTemperature } from "./saturation-temperature.ts";
+
+const LABEL = { enthalpy: ["enthalpy", "kJ/kg", 2], entropy: ["entropy", "kJ/(kg·K)", 4] } as const;
+
 /**
  * Single-phase state at a pressure from its enthalpy or entropy (the shared body of
  * singlePhaseStateFromEnthalpy and singlePhaseStateFromEntropy): the vapour grid when the
@@ -12,16 +22,6 @@
  * @throws PropertyRangeError TABLE_NOT_LOADED, NOT_FINITE, BELOW_RANGE, ABOVE_RANGE or INSIDE_DOME
  * @example singlePhaseStateFromProperty("R134a", 1000, "enthalpy", 441.5).temperatureC // ≈ 59.97
  */
-import { invertPhaseGrid } from "./invert-phase-grid.ts";
-import { phaseGridRows } from "./phase-grid-rows.ts";
-import { phaseGridState, type SinglePhaseState } from "./phase-grid-state.ts";
-import { PropertyRangeError } from "./property-range-error.ts";
-import { requireSinglePhasePressure } from "./require-single-phase-pressure.ts";
-import { resolveSinglePhaseTable } from "./resolve-single-phase-table.ts";
-import { saturationTemperature } from "./saturation-temperature.ts";
-
-const LABEL = { enthalpy: ["enthalpy", "kJ/kg", 2], entropy: ["entropy", "kJ/(kg·K)", 4] } as const;
-
 export function singlePhaseStateFromProperty(
   refrigerant: string,
   pressureKPa: number,

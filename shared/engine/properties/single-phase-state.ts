@@ -1,3 +1,26 @@
+import { phaseGridRows } from "./phase-grid-rows.ts";
+import { phaseGridState, type SinglePhaseState } from "./phase-grid-state.ts";
+import { PropertyRangeError } from "./property-range-error.ts";
+import { requireSinglePhasePressure } from "./require-single-phase-pressure.ts";
+import { resolveSinglePhaseTable } from "./resolve-single-phase-table.ts";
+import { saturationTemperature } from "./saturation-temperature.ts";
+import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
+
+export type { SinglePhaseState };
+
+const formatC = (value: number) => value.toFixed(2);
+/** Rounding of a temperature computed at a table's end must not refuse it, K. */
+const BOUND_SLACK_K = 1e-9;
+
+function pressureOutsidePhase(id: string, grid: CompiledPhaseGrid, pressureKPa: number): PropertyRangeError {
+  const range = `${grid.minimumPressureKPa.toFixed(1)} to ${grid.maximumPressureKPa.toFixed(0)} kPa absolute`;
+  return new PropertyRangeError(
+    pressureKPa < grid.minimumPressureKPa ? "BELOW_RANGE" : "ABOVE_RANGE",
+    id,
+    `${id} ${grid.phase} at ${pressureKPa.toFixed(1)} kPa absolute is outside the single-phase table (${grid.phase} ${range})`,
+  );
+}
+
 /**
  * Superheated vapour or subcooled (compressed) liquid at a pressure and temperature:
  * enthalpy, entropy and density on the IIR reference (the same as the saturation tables).
@@ -25,29 +48,6 @@
  *   ABOVE_RANGE, or INSIDE_DOME between the bubble and dew temperatures
  * @example singlePhaseState("R134a", 1000, 60).enthalpyKJPerKg // ≈ 441.5 (kJ/kg; superheated vapour)
  */
-import { phaseGridRows } from "./phase-grid-rows.ts";
-import { phaseGridState, type SinglePhaseState } from "./phase-grid-state.ts";
-import { PropertyRangeError } from "./property-range-error.ts";
-import { requireSinglePhasePressure } from "./require-single-phase-pressure.ts";
-import { resolveSinglePhaseTable } from "./resolve-single-phase-table.ts";
-import { saturationTemperature } from "./saturation-temperature.ts";
-import type { CompiledPhaseGrid } from "./single-phase-registry.ts";
-
-export type { SinglePhaseState };
-
-const formatC = (value: number) => value.toFixed(2);
-/** Rounding of a temperature computed at a table's end must not refuse it, K. */
-const BOUND_SLACK_K = 1e-9;
-
-function pressureOutsidePhase(id: string, grid: CompiledPhaseGrid, pressureKPa: number): PropertyRangeError {
-  const range = `${grid.minimumPressureKPa.toFixed(1)} to ${grid.maximumPressureKPa.toFixed(0)} kPa absolute`;
-  return new PropertyRangeError(
-    pressureKPa < grid.minimumPressureKPa ? "BELOW_RANGE" : "ABOVE_RANGE",
-    id,
-    `${id} ${grid.phase} at ${pressureKPa.toFixed(1)} kPa absolute is outside the single-phase table (${grid.phase} ${range})`,
-  );
-}
-
 export function singlePhaseState(refrigerant: string, pressureKPa: number, temperatureC: number): SinglePhaseState {
   const table = resolveSinglePhaseTable(refrigerant);
   requireSinglePhasePressure(table, pressureKPa);

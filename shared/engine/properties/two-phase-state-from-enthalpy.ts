@@ -1,3 +1,22 @@
+import { PropertyRangeError } from "./property-range-error.ts";
+import { saturatedPhasesAtPressure } from "./saturated-phases-at-pressure.ts";
+
+export interface TwoPhaseState {
+  phase: "two-phase";
+  /** kPa absolute */
+  pressureKPa: number;
+  /** vapour mass fraction, 0 … 1 */
+  quality: number;
+  /** °C (linear in enthalpy between bubble and dew for blends) */
+  temperatureC: number;
+  bubbleC: number;
+  dewC: number;
+  /** kJ/kg */
+  enthalpyKJPerKg: number;
+  saturatedLiquidEnthalpyKJPerKg: number;
+  saturatedVapourEnthalpyKJPerKg: number;
+}
+
 /**
  * A two-phase (liquid + vapour) state at a pressure from its enthalpy: the vapour mass fraction
  * (quality) x = (h − h′)/(h″ − h′), with h′ the saturated liquid (bubble point) and h″ the
@@ -18,25 +37,6 @@
  *   pressure; INVALID_POINT when the enthalpy lies outside the two-phase region
  * @example twoPhaseStateFromEnthalpy("R134a", 292.8, 256.4).quality // ≈ 0.28 (0 °C, h of liquid at 40 °C)
  */
-import { PropertyRangeError } from "./property-range-error.ts";
-import { saturatedPhasesAtPressure } from "./saturated-phases-at-pressure.ts";
-
-export interface TwoPhaseState {
-  phase: "two-phase";
-  /** kPa absolute */
-  pressureKPa: number;
-  /** vapour mass fraction, 0 … 1 */
-  quality: number;
-  /** °C (linear in enthalpy between bubble and dew for blends) */
-  temperatureC: number;
-  bubbleC: number;
-  dewC: number;
-  /** kJ/kg */
-  enthalpyKJPerKg: number;
-  saturatedLiquidEnthalpyKJPerKg: number;
-  saturatedVapourEnthalpyKJPerKg: number;
-}
-
 export function twoPhaseStateFromEnthalpy(
   refrigerant: string,
   pressureKPa: number,

@@ -1,3 +1,5 @@
+import { STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
+
 /**
  * Absolute pressure to gauge pressure: p_gauge = p_abs − p_atmosphere.
  *
@@ -7,8 +9,6 @@
  * @throws Error "absoluteToGauge requires finite numbers and a positive atmospheric pressure"
  * @example absoluteToGauge(813.1) // 711.775
  */
-import { STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
-
 export function absoluteToGauge(kPaAbs: number, atmosphericKPa: number = STANDARD_ATMOSPHERE_KPA): number {
   if (!Number.isFinite(kPaAbs) || !Number.isFinite(atmosphericKPa) || !(atmosphericKPa > 0)) {
     throw new Error("absoluteToGauge requires finite numbers and a positive atmospheric pressure");

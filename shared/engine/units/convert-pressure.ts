@@ -1,19 +1,3 @@
-/**
- * Pressure conversion for display, through the convert-units package (no
- * hand-written factors): Pa, kPa, MPa, bar, psi and torr come straight from it;
- * inHg is torr → mmHg (1 torr = 1 mmHg to 1.4e-7, below display precision) and
- * mm → in via convert-units' length table; "micron" is the vacuum-gauge micron of
- * mercury (1 µmHg = 1 mTorr to the same precision).
- * All units here are on one scale (absolute or gauge — the caller keeps track;
- * see pressureToDisplay for gauge and vacuum scales).
- *
- * @param value pressure in `from` units, finite
- * @param from source unit
- * @param to target unit
- * @returns pressure in `to` units
- * @throws Error "convertPressure requires a finite number" for NaN/±Infinity
- * @example convertPressure(101.325, "kPa", "psi") // ≈ 14.696
- */
 import convert from "convert-units";
 
 export const PRESSURE_UNITS = ["Pa", "kPa", "MPa", "bar", "psi", "torr", "inHg", "micron"] as const;
@@ -31,6 +15,22 @@ function fromTorr(valueTorr: number, unit: "inHg" | "micron"): number {
   return unit === "inHg" ? convert(valueTorr).from("mm").to("in") : valueTorr * 1000;
 }
 
+/**
+ * Pressure conversion for display, through the convert-units package (no
+ * hand-written factors): Pa, kPa, MPa, bar, psi and torr come straight from it;
+ * inHg is torr → mmHg (1 torr = 1 mmHg to 1.4e-7, below display precision) and
+ * mm → in via convert-units' length table; "micron" is the vacuum-gauge micron of
+ * mercury (1 µmHg = 1 mTorr to the same precision).
+ * All units here are on one scale (absolute or gauge — the caller keeps track;
+ * see pressureToDisplay for gauge and vacuum scales).
+ *
+ * @param value pressure in `from` units, finite
+ * @param from source unit
+ * @param to target unit
+ * @returns pressure in `to` units
+ * @throws Error "convertPressure requires a finite number" for NaN/±Infinity
+ * @example convertPressure(101.325, "kPa", "psi") // ≈ 14.696
+ */
 export function convertPressure(value: number, from: PressureUnit, to: PressureUnit): number {
   if (!Number.isFinite(value)) throw new Error("convertPressure requires a finite number");
   if (from === to) return value;

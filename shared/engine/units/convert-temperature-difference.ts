@@ -1,3 +1,5 @@
+import { convertTemperature, type TemperatureUnit } from "./convert-temperature.ts";
+
 /**
  * Conversion of a temperature difference (superheat, subcooling, glide): K ↔ °F
  * difference (1 K = 1.8 °F). Computed as the difference of two convert-units
@@ -10,8 +12,6 @@
  * @throws Error "convertTemperatureDifference requires a finite number" for NaN/±Infinity
  * @example convertTemperatureDifference(5, "K", "F") // 9
  */
-import { convertTemperature, type TemperatureUnit } from "./convert-temperature.ts";
-
 export function convertTemperatureDifference(value: number, from: TemperatureUnit, to: TemperatureUnit): number {
   if (!Number.isFinite(value)) throw new Error("convertTemperatureDifference requires a finite number");
   if (from === to) return value;

@@ -1,3 +1,8 @@
+import convert from "convert-units";
+
+export const TEMPERATURE_UNITS = ["C", "F", "K"] as const;
+export type TemperatureUnit = (typeof TEMPERATURE_UNITS)[number];
+
 /**
  * Temperature conversion for display through convert-units: °C, °F and K.
  *
@@ -8,11 +13,6 @@
  * @throws Error "convertTemperature requires a finite number" for NaN/±Infinity
  * @example convertTemperature(0, "C", "F") // 32
  */
-import convert from "convert-units";
-
-export const TEMPERATURE_UNITS = ["C", "F", "K"] as const;
-export type TemperatureUnit = (typeof TEMPERATURE_UNITS)[number];
-
 export function convertTemperature(value: number, from: TemperatureUnit, to: TemperatureUnit): number {
   if (!Number.isFinite(value)) throw new Error("convertTemperature requires a finite number");
   if (from === to) return value;

@@ -1,3 +1,5 @@
+import { STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
+
 /**
  * Gauge pressure to absolute pressure: p_abs = p_gauge + p_atmosphere.
  * Gauges read relative to the local atmosphere; saturation lookups need absolute.
@@ -8,8 +10,6 @@
  * @throws Error "gaugeToAbsolute requires finite numbers and a positive atmospheric pressure"
  * @example gaugeToAbsolute(1000) // 1101.325
  */
-import { STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
-
 export function gaugeToAbsolute(kPaGauge: number, atmosphericKPa: number = STANDARD_ATMOSPHERE_KPA): number {
   if (!Number.isFinite(kPaGauge) || !Number.isFinite(atmosphericKPa) || !(atmosphericKPa > 0)) {
     throw new Error("gaugeToAbsolute requires finite numbers and a positive atmospheric pressure");

@@ -1,3 +1,7 @@
+import { STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
+import { convertPressure, type PressureUnit } from "./convert-pressure.ts";
+import type { PressureScale } from "./pressure-to-display.ts";
+
 /**
  * A display value (unit + scale) back to absolute kPa, the engine's unit; the
  * inverse of pressureToDisplay.
@@ -10,10 +14,6 @@
  * @throws Error for non-finite inputs
  * @example pressureFromDisplay(118, "psi", "gauge") // ≈ 914.9 (kPa abs)
  */
-import { STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
-import { convertPressure, type PressureUnit } from "./convert-pressure.ts";
-import type { PressureScale } from "./pressure-to-display.ts";
-
 export function pressureFromDisplay(
   value: number,
   unit: PressureUnit,

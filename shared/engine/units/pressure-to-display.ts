@@ -1,3 +1,8 @@
+import { STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
+import { convertPressure, type PressureUnit } from "./convert-pressure.ts";
+
+export type PressureScale = "absolute" | "gauge" | "vacuum";
+
 /**
  * Absolute pressure (kPa, the engine's unit) to a display value on a chosen scale:
  * "absolute", "gauge" (relative to atmosphere) or "vacuum" (how far below
@@ -11,11 +16,6 @@
  * @throws Error for non-finite inputs
  * @example pressureToDisplay(813.1, "psi", "gauge") // ≈ 103.23 (psig)
  */
-import { STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
-import { convertPressure, type PressureUnit } from "./convert-pressure.ts";
-
-export type PressureScale = "absolute" | "gauge" | "vacuum";
-
 export function pressureToDisplay(
   kPaAbs: number,
   unit: PressureUnit,

@@ -27,6 +27,28 @@ import { loadSinglePhaseTable } from "@shared/property-tables/load-single-phase-
 
 const gauge = (absoluteKPa: number) => absoluteKPa - STANDARD_ATMOSPHERE_KPA;
 
+// Tolerances, as toBeCloseTo's digits (passes when |actual − expected| < 0.5 × 10^−digits).
+/** Çengel & Boles print Example 11–1's kW and COP to two decimals: agreement to their last printed digit. */
+const BOOK_PRINTED_DIGITS = 2;
+/**
+ * The ideal compressor's outlet is found from the suction entropy in the same single-phase table
+ * the efficiency is read from (singlePhaseStateFromEntropy), so η_s differs from 1 only by that
+ * inversion's own error, well inside SINGLE_PHASE_TOLERANCES.
+ */
+const ISENTROPIC_ROUND_TRIP_DIGITS = 3;
+/**
+ * The same value reached by another path (a gauge ↔ absolute round trip, a clamp to saturation,
+ * the energy balance run backwards): round-off only.
+ */
+const OTHER_PATH_DIGITS = 9;
+/** The same arithmetic on the same doubles as the expected value: floating-point round-off only. */
+const SAME_ARITHMETIC_DIGITS = 12;
+/**
+ * 400 cfm per ton with 1 ton of refrigeration = 3.5169 kW and 1 cfm = 0.00047195 m³/s (NIST SP 811
+ * appendix B conversion factors, to five significant digits): good to 10⁻³ m³/s.
+ */
+const AIRFLOW_CONVERSION_DIGITS = 3;
+
 describe("measuredCycle", () => {
   beforeAll(async () => {
     await Promise.all(["R134a", "R410A", "R407C", "R32"].map((id) => loadSinglePhaseTable(id)));
@@ -54,21 +76,21 @@ describe("measuredCycle", () => {
     });
     const cycle = measuredCycle(input);
     const massFlow = 0.05;
-    expect(massFlow * cycle.refrigeratingEffectKJPerKg!).toBeCloseTo(7.18, 2); // Q̇_L, kW
-    expect(massFlow * cycle.compressionWorkKJPerKg!).toBeCloseTo(1.81, 2); // Ẇ_in, kW
+    expect(massFlow * cycle.refrigeratingEffectKJPerKg!).toBeCloseTo(7.18, BOOK_PRINTED_DIGITS); // Q̇_L, kW
+    expect(massFlow * cycle.compressionWorkKJPerKg!).toBeCloseTo(1.81, BOOK_PRINTED_DIGITS); // Ẇ_in, kW
     expect(massFlow * (cycle.states.discharge!.enthalpyKJPerKg - cycle.states.liquid!.enthalpyKJPerKg)).toBeCloseTo(
       8.99,
-      2,
+      BOOK_PRINTED_DIGITS,
     ); // Q̇_H
-    expect(cycle.cop).toBeCloseTo(3.97, 2);
-    expect(cycle.isentropicEfficiency).toBeCloseTo(1, 3);
+    expect(cycle.cop).toBeCloseTo(3.97, BOOK_PRINTED_DIGITS);
+    expect(cycle.isentropicEfficiency).toBeCloseTo(1, ISENTROPIC_ROUND_TRIP_DIGITS);
     // the evaporator inlet is the throttled liquid: same enthalpy, at the suction pressure
     expect(cycle.states.evaporatorInlet!.enthalpyKJPerKg).toBe(cycle.states.liquid!.enthalpyKJPerKg);
-    expect(cycle.states.evaporatorInlet!.pressureKPa).toBeCloseTo(low, 9);
+    expect(cycle.states.evaporatorInlet!.pressureKPa).toBeCloseTo(low, OTHER_PATH_DIGITS);
     // with the book's power input, the energy balance gives back the book's mass flow and capacity
     const metered = measuredCycle(input, { measuredPowerKW: massFlow * cycle.compressionWorkKJPerKg! });
-    expect(metered.massFlowKgPerS).toBeCloseTo(massFlow, 9);
-    expect(metered.capacityKW).toBeCloseTo(7.18, 2);
+    expect(metered.massFlowKgPerS).toBeCloseTo(massFlow, OTHER_PATH_DIGITS);
+    expect(metered.capacityKW).toBeCloseTo(7.18, BOOK_PRINTED_DIGITS);
   });
 
   const field: DiagnosisInput = Object.freeze({
@@ -88,27 +110,35 @@ describe("measuredCycle", () => {
   it("fixes each state from its own pressure and line temperature (IIR enthalpies from the single-phase table)", () => {
     const cycle = measuredCycle(field);
     const suctionKPa = 820 + STANDARD_ATMOSPHERE_KPA;
-    expect(cycle.states.suction!.enthalpyKJPerKg).toBe(singlePhaseState("R410A", suctionKPa, 12).enthalpyKJPerKg);
+    expect(cycle.states.suction!.enthalpyKJPerKg).toBe(
+      singlePhaseState("R410A", suctionKPa, SAME_ARITHMETIC_DIGITS).enthalpyKJPerKg,
+    );
     expect(cycle.states.liquid!.enthalpyKJPerKg).toBe(
       singlePhaseState("R410A", 2600 + STANDARD_ATMOSPHERE_KPA, 38).enthalpyKJPerKg,
     );
     expect(cycle.refrigeratingEffectKJPerKg).toBeCloseTo(
       cycle.states.suction!.enthalpyKJPerKg - cycle.states.liquid!.enthalpyKJPerKg,
-      12,
+      SAME_ARITHMETIC_DIGITS,
     );
     // no discharge gauge: liquid pressure plus the pressure of 1 K of dew temperature
     const condensingDewC = saturationTemperature("R410A", 2600 + STANDARD_ATMOSPHERE_KPA, "dew");
     const expectedKPa = saturationPressure("R410A", condensingDewC + cycleLimits.DISCHARGE_PRESSURE_ALLOWANCE_K, "dew");
-    expect(cycle.states.discharge!.pressureKPa).toBeCloseTo(expectedKPa, 9);
+    expect(cycle.states.discharge!.pressureKPa).toBeCloseTo(expectedKPa, OTHER_PATH_DIGITS);
     expect(cycle.dischargePressureBasis).toBe("liquid-plus-allowance");
-    expect(cycle.dischargeSuperheatK).toBeCloseTo(75 - saturationTemperature("R410A", expectedKPa, "dew"), 9);
+    expect(cycle.dischargeSuperheatK).toBeCloseTo(
+      75 - saturationTemperature("R410A", expectedKPa, "dew"),
+      OTHER_PATH_DIGITS,
+    );
     expect(cycle.notes.some((note) => note.figure === "discharge" && /liquid pressure plus/.test(note.message))).toBe(
       true,
     );
     // a sound scroll compressor on R410A: apparent η_s between 0.5 and 1
     expect(cycle.isentropicEfficiency!).toBeGreaterThan(0.5);
     expect(cycle.isentropicEfficiency!).toBeLessThan(1);
-    expect(cycle.cop).toBeCloseTo(cycle.refrigeratingEffectKJPerKg! / cycle.compressionWorkKJPerKg!, 12);
+    expect(cycle.cop).toBeCloseTo(
+      cycle.refrigeratingEffectKJPerKg! / cycle.compressionWorkKJPerKg!,
+      SAME_ARITHMETIC_DIGITS,
+    );
     // no electrical input or airflow: null, with what is missing
     expect(cycle.capacityKW).toBeNull();
     expect(cycle.notes.find((note) => note.figure === "electricalPower")!.message).toMatch(
@@ -125,12 +155,21 @@ describe("measuredCycle", () => {
       airflowM3PerS: 0.45,
       supplyAirWetBulbC: 13.2,
     });
-    expect(cycle.electricalPowerKW).toBeCloseTo((230 * 10 * 0.9) / 1000, 12);
-    expect(cycle.massFlowKgPerS).toBeCloseTo(cycle.electricalPowerKW! / cycle.compressionWorkKJPerKg!, 12);
-    expect(cycle.capacityKW).toBeCloseTo(cycle.massFlowKgPerS! * cycle.refrigeratingEffectKJPerKg!, 12);
+    expect(cycle.electricalPowerKW).toBeCloseTo((230 * 10 * 0.9) / 1000, SAME_ARITHMETIC_DIGITS);
+    expect(cycle.massFlowKgPerS).toBeCloseTo(
+      cycle.electricalPowerKW! / cycle.compressionWorkKJPerKg!,
+      SAME_ARITHMETIC_DIGITS,
+    );
+    expect(cycle.capacityKW).toBeCloseTo(
+      cycle.massFlowKgPerS! * cycle.refrigeratingEffectKJPerKg!,
+      SAME_ARITHMETIC_DIGITS,
+    );
     expect(cycle.airSide!.airflowBasis).toBe("measured");
     expect(cycle.airSide!.totalKW).not.toBeNull();
-    expect(cycle.airToRefrigerantRatio).toBeCloseTo(cycle.airSide!.totalKW! / cycle.capacityKW!, 12);
+    expect(cycle.airToRefrigerantRatio).toBeCloseTo(
+      cycle.airSide!.totalKW! / cycle.capacityKW!,
+      SAME_ARITHMETIC_DIGITS,
+    );
     expect(cycle.notes.some((note) => note.figure === "airSide" && /(agree within|differ by)/.test(note.message))).toBe(
       true,
     );
@@ -140,7 +179,7 @@ describe("measuredCycle", () => {
     const cycle = measuredCycle(field, { nominalCapacityKW: 7 });
     expect(cycle.airSide!.airflowBasis).toBe("nominal-capacity");
     // 2 tons = 800 cfm = 0.3776 m³/s
-    expect(cycle.airSide!.airflowM3PerS).toBeCloseTo((7 / 3.5169) * 400 * 0.00047195, 3);
+    expect(cycle.airSide!.airflowM3PerS).toBeCloseTo((7 / 3.5169) * 400 * 0.00047195, AIRFLOW_CONVERSION_DIGITS);
     expect(cycle.airSide!.totalKW).toBeNull();
   });
 
@@ -155,7 +194,7 @@ describe("measuredCycle", () => {
     );
     // within probe accuracy of the dew point: saturated vapour
     const saturated = measuredCycle({ ...field, suctionLineTempC: dewC - 0.1 });
-    expect(saturated.states.suction!.temperatureC).toBeCloseTo(dewC, 9);
+    expect(saturated.states.suction!.temperatureC).toBeCloseTo(dewC, OTHER_PATH_DIGITS);
   });
 
   it("gives no liquid state for a temperature taken on the discharge line or above the bubble point", () => {
@@ -168,7 +207,7 @@ describe("measuredCycle", () => {
     const saturated = measuredCycle({ ...field, liquidLineTempC: bubbleC });
     expect(saturated.states.liquid!.enthalpyKJPerKg).toBeCloseTo(
       saturatedPhasesAtPressure("R410A", 2600 + STANDARD_ATMOSPHERE_KPA).liquid.enthalpyKJPerKg,
-      9,
+      OTHER_PATH_DIGITS,
     );
   });
 
@@ -193,7 +232,7 @@ describe("measuredCycle", () => {
   it("reports a discharge line at or below its dew point as near-zero superheat, without a state", () => {
     const cycle = measuredCycle({ ...field, dischargePressureKPa: 2700, dischargeLineTempC: 40 });
     const dewC = saturationTemperature("R410A", 2700 + STANDARD_ATMOSPHERE_KPA, "dew");
-    expect(cycle.dischargeSuperheatK).toBeCloseTo(40 - dewC, 9);
+    expect(cycle.dischargeSuperheatK).toBeCloseTo(40 - dewC, OTHER_PATH_DIGITS);
     expect(cycle.states.discharge).toBeNull();
     expect(
       cycle.notes.some((note) => note.figure === "dischargeSuperheat" && /below the dew point/.test(note.message)),

@@ -7,6 +7,7 @@ import {
   chargeToAdd,
   diagnose,
   DiagnosisInputError,
+  parseDiagnosisInput,
   workedSolution,
 } from "@shared/engine/index.ts";
 import {
@@ -134,7 +135,8 @@ export function CaseEditor({
   const preview = useMemo(() => {
     if (Object.keys(converted.errors).length > 0 || !tableLoaded) return null;
     try {
-      const input = converted.input as DiagnosisInput;
+      // The preview's readings pass the schema once here; diagnose() trusts them.
+      const input = parseDiagnosisInput(converted.input);
       const result = diagnose(input);
       const expected = authoredAnswers(result);
       return {

@@ -2,7 +2,7 @@ import { ListChecks } from "lucide-react";
 import { useMemo } from "react";
 import { chargeStepChecks, chargingPlan, getRefrigerant } from "@shared/engine/index.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
-import type { DiagnosisInputDraft, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
+import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import { CautionPanel, DeferToCodes } from "@/components/ui/caution-panel/caution-panel.tsx";
 import type { CircuitSeries } from "../utils/circuit-series.ts";
 import { formatTime } from "@shared/format/date-time.ts";
@@ -12,7 +12,7 @@ const signedKg = (kg: number) => `${kg > 0 ? "+" : kg < 0 ? "−" : ""}${Math.ab
 
 interface ChargingPlanPanelProps {
   result: DiagnosisResult;
-  input: DiagnosisInputDraft;
+  input: DiagnosisInput;
   series: CircuitSeries;
   isBlend: boolean;
 }
@@ -63,8 +63,8 @@ export function ChargingPlanPanel({ result, input, series, isBlend }: ChargingPl
           <ol className="list-decimal space-y-1 pl-6">
             {plan.steps.map((step, index) => (
               <li key={index}>
-                {plan.action === "add" ? "Add" : "Recover"} <span className="num">{kgText(step)}</span>, log it as an adjustment with its weight,
-                then wait {plan.settleMinutes} min and save a reading
+                {plan.action === "add" ? "Add" : "Recover"} <span className="num">{kgText(step)}</span>, log it as an
+                adjustment with its weight, then wait {plan.settleMinutes} min and save a reading
               </li>
             ))}
           </ol>
@@ -85,11 +85,17 @@ export function ChargingPlanPanel({ result, input, series, isBlend }: ChargingPl
           <ul className="mt-1 space-y-1 text-sm" aria-label="Charge steps checked">
             {checks.map((check) => (
               <li key={check.step.at} className="border-t border-rule pt-1">
-                <span className="num">{signedKg(check.step.kg)}</span> at{" "}
-                {formatTime(check.step.at)}:{" "}
+                <span className="num">{signedKg(check.step.kg)}</span> at {formatTime(check.step.at)}:{" "}
                 {check.refill ? (
                   <span className="text-muted">
-                    weighed in after recovery{check.afterKg === null ? "" : <>; estimate since <span className="num">{signedKg(check.afterKg)}</span></>}
+                    weighed in after recovery
+                    {check.afterKg === null ? (
+                      ""
+                    ) : (
+                      <>
+                        ; estimate since <span className="num">{signedKg(check.afterKg)}</span>
+                      </>
+                    )}
                   </span>
                 ) : check.expectedKg === null || check.afterKg === null ? (
                   <span className="text-muted">

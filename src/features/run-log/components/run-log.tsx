@@ -21,7 +21,6 @@ import { circuitSeries } from "../utils/circuit-series.ts";
 import {
   draftFromInput,
   emptyDraft,
-  parseDraft,
   REQUIRED_FIELDS,
   type DraftField,
   type ReadingDraft,
@@ -93,9 +92,13 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
 
   // Run time counts on by itself from the last reading or adjustment unless typed over.
   const autoRunMinutes = runMinutesAt(runTimeBase(series), now);
-  const effectiveDraft =
-    draft.runMinutes === "" && autoRunMinutes !== null ? { ...draft, runMinutes: String(autoRunMinutes) } : draft;
-  const live = useLiveDiagnosis(effectiveDraft, context, units, atmosphericKPa);
+  // Memoised, so the draft is checked once per change rather than on every render.
+  const effectiveDraft = useMemo(
+    () =>
+      draft.runMinutes === "" && autoRunMinutes !== null ? { ...draft, runMinutes: String(autoRunMinutes) } : draft,
+    [draft, autoRunMinutes],
+  );
+  const { reading, live } = useLiveDiagnosis(effectiveDraft, context, units, atmosphericKPa);
   const fieldErrors = { ...live.fieldErrors, ...serverErrors };
   const lastReading = series.readings.at(-1);
   const shownResult = live.kind === "ready" ? live.result : (lastReading?.result ?? null);
@@ -119,22 +122,22 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
 
   const save = async () => {
     setFormError(null);
-    if (live.kind !== "ready") {
+    // What is typed was checked once, as it changed: the save sends that reading.
+    if (reading.kind !== "valid") {
       setFormError(
-        live.kind === "incomplete" && live.missing.length > 0
-          ? `Enter the ${live.missing.map((field) => FIELD_LABELS[field] ?? field).join(", ")} first`
-          : live.kind === "invalid" && live.formError
-            ? live.formError
+        reading.kind === "incomplete" && reading.missing.length > 0
+          ? `Enter the ${reading.missing.map((field) => FIELD_LABELS[field] ?? field).join(", ")} first`
+          : reading.kind === "invalid" && reading.formError
+            ? reading.formError
             : "Check the fields marked below",
       );
       return;
     }
-    const { values } = parseDraft(effectiveDraft, units, atmosphericKPa);
     // The reading keeps the time it was taken, however long the answer takes or how often the save is tried.
     const takenAt = pendingTakenAt ?? new Date().toISOString();
     const clientId = entryId.take();
     // Measured values only: the server adds the nameplate targets, the RLA and the site's atmosphere.
-    const body = { circuit, takenAt, clientId, ...(values as MeasuredValues) };
+    const body = { circuit, takenAt, clientId, ...reading.measured };
     try {
       // Without a connection (or an answer in time) the reading waits in the device's outbox.
       const sent = await keepWhenOffline(() => createReading.mutateAsync({ visitId: visit.id, ...body }), {

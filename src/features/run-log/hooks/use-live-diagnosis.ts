@@ -1,6 +1,14 @@
 import { useDeferredValue, useMemo } from "react";
 import { diagnose, DiagnosisInputError } from "@shared/engine/index.ts";
-import type { Application, ChargeReference, DiagnosisInputDraft, DiagnosisResult, MeteringDevice } from "@shared/schemas/diagnosis.ts";
+import {
+  DiagnosisInputSchema,
+  type Application,
+  type ChargeReference,
+  type DiagnosisInput,
+  type DiagnosisResult,
+  type MeteringDevice,
+} from "@shared/schemas/diagnosis.ts";
+import type { MeasuredValues } from "@shared/schemas/visits.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { useSinglePhaseTable } from "./use-single-phase-table.ts";
 import { parseDraft, type DraftField, type ReadingDraft } from "../utils/reading-draft.ts";
@@ -23,42 +31,87 @@ export interface CircuitContext {
   chargeReference: ChargeReference | null;
 }
 
-export type LiveDiagnosis =
+type NotReady =
   | { kind: "incomplete"; missing: DraftField[]; fieldErrors: Record<string, string> }
-  | { kind: "invalid"; fieldErrors: Record<string, string>; formError: string | null }
-  | { kind: "ready"; input: DiagnosisInputDraft; result: DiagnosisResult; fieldErrors: Record<string, string> };
+  | { kind: "invalid"; fieldErrors: Record<string, string>; formError: string | null };
+
+/** What is typed, checked once: the engine's validated input and the measured values a save sends. */
+export type CheckedReading =
+  NotReady | { kind: "valid"; input: DiagnosisInput; measured: MeasuredValues; fieldErrors: Record<string, string> };
+
+export type LiveDiagnosis =
+  NotReady | { kind: "ready"; input: DiagnosisInput; result: DiagnosisResult; fieldErrors: Record<string, string> };
+
+function invalid(error: DiagnosisInputError, fieldErrors: Record<string, string>): NotReady {
+  const marked = { ...fieldErrors };
+  for (const [field, messages] of Object.entries(error.fieldErrors)) marked[field] = messages[0] ?? "Check this value";
+  return { kind: "invalid", fieldErrors: marked, formError: error.formErrors[0] ?? null };
+}
 
 /**
- * Runs the same engine the server runs, on what is typed so far. The draft is deferred, so a
- * burst of keystrokes re-diagnoses once the typing pauses rather than on every key.
+ * The form's one check of what is typed: numbers in the technician's units become SI-metric
+ * (parseDraft), the circuit's nameplate and the site's atmosphere join them, and the whole goes
+ * through `DiagnosisInputSchema`, the schema the server checks the same reading with.
  */
-export function useLiveDiagnosis(draft: ReadingDraft, context: CircuitContext, units: DisplayUnits, atmosphericKPa: number): LiveDiagnosis {
-  const deferredDraft = useDeferredValue(draft);
+function checkReading(
+  draft: ReadingDraft,
+  context: CircuitContext,
+  units: DisplayUnits,
+  atmosphericKPa: number,
+): CheckedReading {
+  const { values, typingErrors, missing } = parseDraft(draft, units, atmosphericKPa);
+  const fieldErrors: Record<string, string> = { ...typingErrors };
+  if (missing.length > 0 || Object.keys(typingErrors).length > 0) return { kind: "incomplete", missing, fieldErrors };
+  const parsed = DiagnosisInputSchema.safeParse({
+    refrigerant: context.refrigerant,
+    meteringDevice: context.meteringDevice,
+    targetSuperheatK: context.targetSuperheatK ?? undefined,
+    targetSubcoolingK: context.targetSubcoolingK ?? undefined,
+    compressorRla: context.compressorRla ?? undefined,
+    application: context.application,
+    liquidLineLengthM: context.liquidLineLengthM ?? undefined,
+    chargeKg: context.chargeKg ?? undefined,
+    chargeReference: context.chargeReference ?? undefined,
+    atmosphericPressureKPa: atmosphericKPa,
+    ...values,
+  });
+  if (!parsed.success) return invalid(DiagnosisInputError.fromZodError(parsed.error), fieldErrors);
+  // Measured values only go to the server: it adds the nameplate targets, the RLA and the site's atmosphere.
+  return { kind: "valid", input: parsed.data, measured: values as MeasuredValues, fieldErrors };
+}
+
+/**
+ * Runs the same engine the server runs, on what is typed so far. The draft is checked once per
+ * change (`reading`, which a save sends as it is); the diagnosis is deferred, so a burst of
+ * keystrokes re-diagnoses once the typing pauses rather than on every key (`live`).
+ */
+export function useLiveDiagnosis(
+  draft: ReadingDraft,
+  context: CircuitContext,
+  units: DisplayUnits,
+  atmosphericKPa: number,
+): { reading: CheckedReading; live: LiveDiagnosis } {
+  const reading = useMemo(
+    () => checkReading(draft, context, units, atmosphericKPa),
+    [draft, context, units, atmosphericKPa],
+  );
+  const deferred = useDeferredValue(reading);
   // The compressor is judged from the measured cycle once its table is here, as on the server.
   const cycleReady = useSinglePhaseTable(context.refrigerant).isSuccess;
-  return useMemo(() => {
-    const { values, typingErrors, missing } = parseDraft(deferredDraft, units, atmosphericKPa);
-    const fieldErrors: Record<string, string> = { ...typingErrors };
-    if (missing.length > 0 || Object.keys(typingErrors).length > 0) return { kind: "incomplete", missing, fieldErrors };
-    const input: DiagnosisInputDraft = {
-      refrigerant: context.refrigerant,
-      meteringDevice: context.meteringDevice,
-      targetSuperheatK: context.targetSuperheatK ?? undefined,
-      targetSubcoolingK: context.targetSubcoolingK ?? undefined,
-      compressorRla: context.compressorRla ?? undefined,
-      application: context.application,
-      liquidLineLengthM: context.liquidLineLengthM ?? undefined,
-      chargeKg: context.chargeKg ?? undefined,
-      chargeReference: context.chargeReference ?? undefined,
-      atmosphericPressureKPa: atmosphericKPa,
-      ...(values as Omit<DiagnosisInputDraft, "refrigerant" | "meteringDevice">),
-    };
+  const live = useMemo((): LiveDiagnosis => {
+    if (deferred.kind !== "valid") return deferred;
     try {
-      return { kind: "ready", input, result: diagnose(input, { withMeasuredCycle: cycleReady }), fieldErrors };
+      return {
+        kind: "ready",
+        input: deferred.input,
+        result: diagnose(deferred.input, { withMeasuredCycle: cycleReady }),
+        fieldErrors: deferred.fieldErrors,
+      };
     } catch (error) {
+      // A refrigerant without a table: said on its field, as the server's 400 would.
       if (!(error instanceof DiagnosisInputError)) throw error;
-      for (const [field, messages] of Object.entries(error.fieldErrors)) fieldErrors[field] = messages[0] ?? "Check this value";
-      return { kind: "invalid", fieldErrors, formError: error.formErrors[0] ?? null };
+      return invalid(error, deferred.fieldErrors);
     }
-  }, [deferredDraft, context, units, atmosphericKPa, cycleReady]);
+  }, [deferred, cycleReady]);
+  return { reading, live };
 }
