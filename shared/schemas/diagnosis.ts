@@ -100,6 +100,12 @@ export const MAX_LINE_LENGTH_M = 300;
 export const MAX_CIRCUIT_CHARGE_KG = 500;
 /** Largest current accepted, A. */
 export const MAX_CURRENT_A = 2_000;
+/**
+ * The smallest compressor rating taken, amperes. The smallest hermetic compressors (domestic
+ * refrigerators, about 1/12 hp) are rated near half an ampere (memory (unverified)); below a tenth
+ * of that a typed RLA is a slip, and the current ratio divided by it would run away.
+ */
+export const MIN_RLA_A = 0.05;
 /** Wet bulb may read this much above dry bulb before it is called impossible (sensor noise), K. */
 export const WET_BULB_ABOVE_DRY_BULB_TOLERANCE_K = 0.2;
 
@@ -188,10 +194,9 @@ export const DIAGNOSIS_FIELD_RANGES = {
     maxMessage: `Compressor current above ${MAX_CURRENT_A} A is not plausible`,
   },
   compressorRla: {
-    min: 0,
-    minExclusive: true,
+    min: MIN_RLA_A,
     max: MAX_CURRENT_A,
-    minMessage: "Compressor RLA must be above 0 A",
+    minMessage: `Compressor RLA below ${MIN_RLA_A} A is not a compressor's rating`,
     maxMessage: `Compressor RLA above ${MAX_CURRENT_A} A is not plausible`,
   },
   targetSuperheatK: targetRange("Target superheat"),

@@ -5,7 +5,14 @@
  */
 import { z } from "zod";
 import { isKnownRefrigerant } from "../property-tables/refrigerant-catalogue.ts";
-import { ApplicationSchema, MAX_CIRCUIT_CHARGE_KG, MAX_LINE_LENGTH_M, MeteringDeviceSchema, type Application } from "./diagnosis.ts";
+import {
+  ApplicationSchema,
+  MAX_CIRCUIT_CHARGE_KG,
+  MAX_LINE_LENGTH_M,
+  MeteringDeviceSchema,
+  MIN_RLA_A,
+  type Application,
+} from "./diagnosis.ts";
 import { text } from "./text.ts";
 
 export const MAX_CIRCUITS = 4;
@@ -125,7 +132,6 @@ export const EQUIPMENT_KINDS = [
   "other",
 ] as const;
 
-
 /** Application a new unit of each kind usually has (the form's starting point; the technician decides). */
 export const DEFAULT_APPLICATION_BY_KIND: Readonly<Record<(typeof EQUIPMENT_KINDS)[number], Application>> = {
   "packaged rooftop": "comfort-cooling",
@@ -139,42 +145,52 @@ export const DEFAULT_APPLICATION_BY_KIND: Readonly<Record<(typeof EQUIPMENT_KIND
   other: "comfort-cooling",
 };
 
-export const EquipmentInputSchema = z.object({
-  siteId: z.uuid("Choose the site"),
-  name: requiredName("unit"),
-  kind: z.enum(EQUIPMENT_KINDS, { error: "Choose the kind of equipment" }),
-  /** What the unit does: sets the bands its readings are judged against. Absent: the kind's usual one. */
-  application: ApplicationSchema.optional(),
-  location: optionalText(MAX_NOTE_LENGTH),
-  maker: optionalText(MAX_NAME_LENGTH),
-  model: optionalText(MAX_NAME_LENGTH),
-  serial: optionalText(MAX_NAME_LENGTH),
-  refrigerant: text({ error: "Choose the refrigerant" }).refine(isKnownRefrigerant, "Choose a refrigerant from the list"),
-  circuits: z
-    .array(CircuitNameplateSchema)
-    .min(1, "A unit has at least one circuit")
-    .max(MAX_CIRCUITS, `Satura records up to ${MAX_CIRCUITS} circuits per unit`)
-    // Circuits are numbered 1…n in order, so readings can name them unambiguously.
-    .refine((circuits) => circuits.every((circuit, index) => circuit.number === index + 1), "Number the circuits 1, 2, 3… in order"),
-  compressorRlaA: optionalPositive("Compressor RLA", "A", 2000),
-  compressorLraA: optionalPositive("Compressor LRA", "A", 10_000),
-  fanFlaA: optionalPositive("Fan FLA", "A", 500),
-  supplyVoltageV: z
-    .number({ error: "Supply voltage must be a number in V" })
-    .int("Supply voltage is a whole number of volts")
-    .min(12, "Supply voltage below 12 V is not a mains supply")
-    .max(1000, "Supply voltage above 1 000 V is beyond low voltage equipment")
-    .optional()
-    .nullable()
-    .transform((value) => value ?? null),
-  phases: z
-    .union([z.literal(1), z.literal(3)], { error: "Phases are 1 or 3" })
-    .optional()
-    .nullable()
-    .transform((value) => value ?? null),
-  ratedHighSideKPa: optionalPositive("Rated high-side pressure", "kPa", 15_000),
-  ratedLowSideKPa: optionalPositive("Rated low-side pressure", "kPa", 15_000),
-})
+export const EquipmentInputSchema = z
+  .object({
+    siteId: z.uuid("Choose the site"),
+    name: requiredName("unit"),
+    kind: z.enum(EQUIPMENT_KINDS, { error: "Choose the kind of equipment" }),
+    /** What the unit does: sets the bands its readings are judged against. Absent: the kind's usual one. */
+    application: ApplicationSchema.optional(),
+    location: optionalText(MAX_NOTE_LENGTH),
+    maker: optionalText(MAX_NAME_LENGTH),
+    model: optionalText(MAX_NAME_LENGTH),
+    serial: optionalText(MAX_NAME_LENGTH),
+    refrigerant: text({ error: "Choose the refrigerant" }).refine(
+      isKnownRefrigerant,
+      "Choose a refrigerant from the list",
+    ),
+    circuits: z
+      .array(CircuitNameplateSchema)
+      .min(1, "A unit has at least one circuit")
+      .max(MAX_CIRCUITS, `Satura records up to ${MAX_CIRCUITS} circuits per unit`)
+      // Circuits are numbered 1…n in order, so readings can name them unambiguously.
+      .refine(
+        (circuits) => circuits.every((circuit, index) => circuit.number === index + 1),
+        "Number the circuits 1, 2, 3… in order",
+      ),
+    compressorRlaA: optionalPositive("Compressor RLA", "A", 2000).refine(
+      (value) => value === null || value >= MIN_RLA_A,
+      `Compressor RLA below ${MIN_RLA_A} A is not a compressor's rating`,
+    ),
+    compressorLraA: optionalPositive("Compressor LRA", "A", 10_000),
+    fanFlaA: optionalPositive("Fan FLA", "A", 500),
+    supplyVoltageV: z
+      .number({ error: "Supply voltage must be a number in V" })
+      .int("Supply voltage is a whole number of volts")
+      .min(12, "Supply voltage below 12 V is not a mains supply")
+      .max(1000, "Supply voltage above 1 000 V is beyond low voltage equipment")
+      .optional()
+      .nullable()
+      .transform((value) => value ?? null),
+    phases: z
+      .union([z.literal(1), z.literal(3)], { error: "Phases are 1 or 3" })
+      .optional()
+      .nullable()
+      .transform((value) => value ?? null),
+    ratedHighSideKPa: optionalPositive("Rated high-side pressure", "kPa", 15_000),
+    ratedLowSideKPa: optionalPositive("Rated low-side pressure", "kPa", 15_000),
+  })
   // An API client that leaves the application out gets the one its kind usually has.
   .transform((values) => ({ ...values, application: values.application ?? DEFAULT_APPLICATION_BY_KIND[values.kind] }));
 

@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import {
   DIAGNOSIS_FIELD_RANGES,
   DiagnosisInputSchema,
+  DiagnosisResultSchema,
   LIQUID_TEMP_LOCATIONS,
   METERING_DEVICES,
 } from "@shared/schemas/diagnosis";
@@ -163,7 +164,11 @@ describe("parseDiagnosisInput", () => {
         // The engine does not check its input again, so it must cope with everything the schema
         // lets through; only a refrigerant without a table is refused, on its own field.
         try {
-          expect(diagnose(schema.data).chargeState).toBeTypeOf("string");
+          const result = diagnose(schema.data);
+          expect(result.chargeState).toBeTypeOf("string");
+          // And what it answers is a result the API can send and the screens can read.
+          const answered = DiagnosisResultSchema.safeParse(result);
+          expect(answered.success, JSON.stringify(answered.error?.issues)).toBe(true);
         } catch (error) {
           if (!(error instanceof DiagnosisInputError)) throw error;
           expect(Object.keys(error.fieldErrors)).toEqual(["refrigerant"]);
