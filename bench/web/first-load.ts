@@ -60,8 +60,20 @@ function sizesOf(urls: string[]): Sizes {
  * of the company's units and the day's data kept for offline use (decision 027), the toast
  * library — which no screen waits for.
  */
-function recordAssets(page: Page): { scripts: string[]; afterReady: string[]; styles: string[]; fonts: string[]; ready: boolean } {
-  const assets = { scripts: [] as string[], afterReady: [] as string[], styles: [] as string[], fonts: [] as string[], ready: false };
+function recordAssets(page: Page): {
+  scripts: string[];
+  afterReady: string[];
+  styles: string[];
+  fonts: string[];
+  ready: boolean;
+} {
+  const assets = {
+    scripts: [] as string[],
+    afterReady: [] as string[],
+    styles: [] as string[],
+    fonts: [] as string[],
+    ready: false,
+  };
   page.on("request", (request) => {
     const type = request.resourceType();
     if (type === "script") (assets.ready ? assets.afterReady : assets.scripts).push(request.url());
@@ -73,7 +85,10 @@ function recordAssets(page: Page): { scripts: string[]; afterReady: string[]; st
 
 const kb = (bytes: number) => `${(bytes / 1024).toFixed(1)} KB`;
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
-const load = () => loadavg().map((value) => value.toFixed(1)).join(" ");
+const load = () =>
+  loadavg()
+    .map((value) => value.toFixed(1))
+    .join(" ");
 
 const server = await startServer(Number(process.env.BENCH_WEB_PORT ?? 3214));
 try {
@@ -89,14 +104,22 @@ try {
     { name: "today", path: "/", signedIn: true, ready: heading },
     { name: "jobs", path: "/jobs", signedIn: true, ready: heading },
     { name: "equipment", path: "/equipment", signedIn: true, ready: heading },
-    { name: "run log", path: `/visits/${demoVisit}`, signedIn: true, ready: (page) => page.waitForFunction(runLogInteractive, undefined, { polling: 50, timeout: 60_000 }) },
+    {
+      name: "run log",
+      path: `/visits/${demoVisit}`,
+      signedIn: true,
+      ready: (page) => page.waitForFunction(runLogInteractive, undefined, { polling: 50, timeout: 60_000 }),
+    },
     { name: "review", path: "/jobs?status=awaiting-review", signedIn: true, ready: heading },
     { name: "report", path: `/visits/${demoVisit}/report`, signedIn: true, ready: heading },
   ];
 
   console.log(`first-load JS (built files, compressed; fresh cache) — ${server.base}; load average ${load()}`);
   for (const target of pages) {
-    const context = await browser.newContext({ viewport: PHONE_VIEWPORT, ...(target.signedIn ? { storageState: state } : {}) });
+    const context = await browser.newContext({
+      viewport: PHONE_VIEWPORT,
+      ...(target.signedIn ? { storageState: state } : {}),
+    });
     const page = await context.newPage();
     const assets = recordAssets(page);
     await page.goto(`${server.base}${target.path}`);
@@ -106,7 +129,9 @@ try {
     const sizes = sizesOf(assets.scripts);
     const idle = sizesOf(assets.afterReady.filter((url) => !assets.scripts.includes(url)));
     const css = sizesOf(assets.styles);
-    const tables = sizes.files.filter((file) => /\/refrigerant-R[^/]*$/.test(file)).map((file) => path.basename(file).replace(/-[\w-]{8}\.js$/, ""));
+    const tables = sizes.files
+      .filter((file) => /\/refrigerant-R[^/]*$/.test(file))
+      .map((file) => path.basename(file).replace(/-[\w-]{8}\.js$/, ""));
     const singlePhase = sizes.files.filter((file) => /\/single-phase-/.test(file)).length;
     const limit = TARGETS_KB[target.name];
     console.log(
@@ -117,13 +142,26 @@ try {
     );
     if (idle.files.length > 0) {
       const idleTables = idle.files.filter((file) => /\/(refrigerant|single-phase)-/.test(file)).length;
-      console.log(`  ${"".padEnd(9)} then, when idle: brotli ${kb(idle.brotli)} in ${idle.files.length} files (${idleTables} tables kept for offline use)`);
+      console.log(
+        `  ${"".padEnd(9)} then, when idle: brotli ${kb(idle.brotli)} in ${idle.files.length} files (${idleTables} tables kept for offline use)`,
+      );
     }
-    if (process.env.BENCH_WEB_LIST) for (const file of [...sizes.files, ...css.files, ...new Set(assets.fonts), ...idle.files.map((file) => `${file} (idle)`)]) console.log(`      ${file}`);
+    if (process.env.BENCH_WEB_LIST)
+      for (const file of [
+        ...sizes.files,
+        ...css.files,
+        ...new Set(assets.fonts),
+        ...idle.files.map((file) => `${file} (idle)`),
+      ])
+        console.log(`      ${file}`);
     await context.close();
   }
 
-  console.log(`run log of the demo visit on a throttled phone (CPU ${CPU_SLOWDOWN}× slower, Slow 4G: ${SLOW_4G.latency} ms RTT, 1.6/0.75 Mbit/s), ${RUNS} runs`);
+  // BENCH_WEB_RUNS=0: sizes only, no timed runs (and no median of nothing).
+  if (RUNS > 0)
+    console.log(
+      `run log of the demo visit on a throttled phone (CPU ${CPU_SLOWDOWN}× slower, Slow 4G: ${SLOW_4G.latency} ms RTT, 1.6/0.75 Mbit/s), ${RUNS} runs`,
+    );
   const times: number[] = [];
   for (let run = 0; run < RUNS; run++) {
     const context = await browser.newContext({ viewport: PHONE_VIEWPORT, storageState: state });
@@ -134,9 +172,10 @@ try {
     times.push(await page.evaluate(() => (window as unknown as { interactiveAt: number }).interactiveAt));
     await context.close();
   }
-  console.log(
-    `  interactive: median ${median(times).toFixed(0)} ms (runs: ${times.map((time) => time.toFixed(0)).join(", ")})   target < ${INTERACTIVE_TARGET_MS} ms; load average ${load()}`,
-  );
+  if (RUNS > 0)
+    console.log(
+      `  interactive: median ${median(times).toFixed(0)} ms (runs: ${times.map((time) => time.toFixed(0)).join(", ")})   target < ${INTERACTIVE_TARGET_MS} ms; load average ${load()}`,
+    );
   await browser.close();
 } finally {
   server.stop();
