@@ -8,7 +8,18 @@ import globals from "globals";
 import tseslint from "typescript-eslint";
 
 export default tseslint.config(
-  { ignores: [".scratch/**", "dist/**", "node_modules/**", "coverage/**", "data/**", "drizzle/**", "test-results/**", "playwright-report/**"] },
+  {
+    ignores: [
+      ".scratch/**",
+      "dist/**",
+      "node_modules/**",
+      "coverage/**",
+      "data/**",
+      "drizzle/**",
+      "test-results/**",
+      "playwright-report/**",
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
@@ -20,7 +31,11 @@ export default tseslint.config(
     rules: {
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
       // File and folder names are kebab-case everywhere (STYLE.md, Naming).
-      "check-file/filename-naming-convention": ["error", { "**/*.{ts,tsx}": "KEBAB_CASE" }, { ignoreMiddleExtensions: true }],
+      "check-file/filename-naming-convention": [
+        "error",
+        { "**/*.{ts,tsx}": "KEBAB_CASE" },
+        { ignoreMiddleExtensions: true },
+      ],
       "check-file/folder-naming-convention": ["error", { "{src,server,shared,tests,scripts,bench}/**/": "KEBAB_CASE" }],
       // Import boundaries of the design card: shared/ is pure; the client never reaches into the server.
       "import-x/no-restricted-paths": [

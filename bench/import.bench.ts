@@ -61,7 +61,13 @@ registerBench("CSV import (5 000 rows) and /api/health meanwhile", async () => {
       .map((header) => header.split(";")[0])
       .join("; ");
     const equipment = (await (await fetch(`${base}/equipment`, { headers: { cookie } })).json()) as {
-      equipment: { id: string; refrigerant: string; compressorRlaA: number | null; application: Application; circuits: never[] }[];
+      equipment: {
+        id: string;
+        refrigerant: string;
+        compressorRlaA: number | null;
+        application: Application;
+        circuits: never[];
+      }[];
     };
     const rooftop = equipment.equipment.find((unit) => unit.refrigerant === "R407C")!;
     const text = loggerFile(ROWS);
@@ -70,7 +76,12 @@ registerBench("CSV import (5 000 rows) and /api/health meanwhile", async () => {
     const inline = performance.now();
     judgeReadingsCsv({
       text,
-      context: { unit: rooftop, nameplate: rooftop.circuits[0]!, site: { altitudeM: demoSite.altitudeM }, charge: { chargeKg: 4.2, chargeReference: null } },
+      context: {
+        unit: rooftop,
+        nameplate: rooftop.circuits[0]!,
+        site: { altitudeM: demoSite.altitudeM },
+        charge: { chargeKg: 4.2, chargeReference: null },
+      },
       dayStart: "2026-12-01T00:00:00Z",
       keepRows: true,
     });

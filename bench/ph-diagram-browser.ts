@@ -15,7 +15,9 @@ const DRAWS = 15;
 const summary = (label: string, values: number[]) => {
   const sorted = [...values].sort((a, b) => a - b);
   const median = sorted[Math.floor(sorted.length / 2)]!;
-  console.log(`${label.padEnd(44)} median ${median.toFixed(1).padStart(6)} ms   best ${sorted[0]!.toFixed(1).padStart(6)} ms   worst ${sorted.at(-1)!.toFixed(1).padStart(6)} ms   (${values.length} draws)`);
+  console.log(
+    `${label.padEnd(44)} median ${median.toFixed(1).padStart(6)} ms   best ${sorted[0]!.toFixed(1).padStart(6)} ms   worst ${sorted.at(-1)!.toFixed(1).padStart(6)} ms   (${values.length} draws)`,
+  );
 };
 
 const server = await startServer(Number(process.env.BENCH_PORT ?? 3229));
@@ -27,18 +29,32 @@ try {
   await page.getByLabel("E-mail").fill("tech@bellbird.example");
   await page.getByLabel("Password", { exact: true }).fill("bellbird-demo-2026");
   await page.getByRole("button", { name: "Sign in" }).click();
-  await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().waitFor();
+  await page
+    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+    .first()
+    .waitFor();
   const headers = { Origin: BASE };
-  const equipment = (await (await page.request.get(`${BASE}/api/equipment`)).json()) as { equipment: { id: string; name: string }[] };
+  const equipment = (await (await page.request.get(`${BASE}/api/equipment`)).json()) as {
+    equipment: { id: string; name: string }[];
+  };
   const rtu = equipment.equipment.find((unit) => /RTU-1/.test(unit.name))!;
-  const visit = (await (await page.request.post(`${BASE}/api/visits`, { headers, data: { equipmentId: rtu.id, reason: "Diagram bench" } })).json()) as { visit: { id: string } };
+  const visit = (await (
+    await page.request.post(`${BASE}/api/visits`, { headers, data: { equipmentId: rtu.id, reason: "Diagram bench" } })
+  ).json()) as { visit: { id: string } };
   for (const [suction, liquid, suctionLine, liquidLine] of [
     [376, 1564, 13, 37],
     [446, 1734, 12, 38],
   ] as const) {
     const response = await page.request.post(`${BASE}/api/visits/${visit.visit.id}/readings`, {
       headers,
-      data: { circuit: 1, suctionPressureKPa: suction, suctionLineTempC: suctionLine, liquidPressureKPa: liquid, liquidLineTempC: liquidLine, dischargeLineTempC: 92 },
+      data: {
+        circuit: 1,
+        suctionPressureKPa: suction,
+        suctionLineTempC: suctionLine,
+        liquidPressureKPa: liquid,
+        liquidLineTempC: liquidLine,
+        dischargeLineTempC: 92,
+      },
     });
     if (!response.ok()) throw new Error(`reading refused: ${response.status()} ${await response.text()}`);
   }
@@ -71,7 +87,6 @@ try {
     await page.goto(`${BASE}/visits/${visit.visit.id}/report`);
     await page.locator("[data-testid=ph-diagram][data-draw-ms]").first().waitFor({ timeout: 30_000 });
     report.push(Number(await page.getByTestId("ph-diagram").first().getAttribute("data-draw-ms")));
-
   }
   console.log(`\n== pressure–enthalpy diagram in Chromium (${browser.version()}) ==`);
   console.log(`${"first draw on the run log (lazy chunk loaded)".padEnd(44)} ${first.toFixed(1).padStart(6)} ms`);

@@ -49,7 +49,9 @@ function bestMilliseconds(series: readonly TrendReading[], expectSettled: boolea
 
 function report(label: string, milliseconds: number): void {
   const verdict = milliseconds < TARGET_MS ? "under" : "ABOVE";
-  console.log(`${label.padEnd(52)} ${milliseconds.toFixed(2).padStart(8)} ms   target ${TARGET_MS} ms   ratio ${(milliseconds / TARGET_MS).toFixed(2)} (${verdict})`);
+  console.log(
+    `${label.padEnd(52)} ${milliseconds.toFixed(2).padStart(8)} ms   target ${TARGET_MS} ms   ratio ${(milliseconds / TARGET_MS).toFixed(2)} (${verdict})`,
+  );
 }
 
 registerBench("settling assessment (assessTrend)", () => {

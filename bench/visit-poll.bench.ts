@@ -27,7 +27,8 @@ const SAMPLES = 20;
 const POLL_TARGET_MS = 100;
 
 const atmosphere = atmosphericPressureAtAltitude(demoSite.altitudeM);
-const gauge = (temperatureC: number, point: "bubble" | "dew") => (saturationPressure("R407C", temperatureC, point) - atmosphere).toFixed(1);
+const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+  (saturationPressure("R407C", temperatureC, point) - atmosphere).toFixed(1);
 
 function loggerFile(offsetSeconds: number): string {
   const lines = ["Time,Suction pressure kPa,Suction temp C,Liquid pressure kPa,Liquid temp C,Outdoor C"];
@@ -39,7 +40,8 @@ function loggerFile(offsetSeconds: number): string {
 }
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)] ?? NaN;
-const p95 = (values: number[]) => [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.floor(values.length * 0.95))] ?? NaN;
+const p95 = (values: number[]) =>
+  [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.floor(values.length * 0.95))] ?? NaN;
 const ms = (value: number) => `${value.toFixed(1).padStart(7)} ms`;
 const kb = (bytes: number) => `${(bytes / 1024).toFixed(1).padStart(8)} KB`;
 
@@ -58,11 +60,20 @@ registerBench("Open visit refresh (10 000 readings): whole, 304, delta", async (
       headers: { "Content-Type": "application/json" },
       body: JSON.stringify({ email: "tech@bellbird.example", password: "bellbird-demo-2026" }),
     });
-    const cookie = signIn.headers.getSetCookie().map((header) => header.split(";")[0]).join("; ");
-    const units = (await (await fetch(`${base}/equipment`, { headers: { cookie } })).json()) as { equipment: { id: string; refrigerant: string }[] };
+    const cookie = signIn.headers
+      .getSetCookie()
+      .map((header) => header.split(";")[0])
+      .join("; ");
+    const units = (await (await fetch(`${base}/equipment`, { headers: { cookie } })).json()) as {
+      equipment: { id: string; refrigerant: string }[];
+    };
     const rooftop = units.equipment.find((unit) => unit.refrigerant === "R407C")!;
     const created = (await (
-      await fetch(`${base}/visits`, { method: "POST", headers: { cookie, "Content-Type": "application/json" }, body: JSON.stringify({ equipmentId: rooftop.id, reason: "Week of logger data" }) })
+      await fetch(`${base}/visits`, {
+        method: "POST",
+        headers: { cookie, "Content-Type": "application/json" },
+        body: JSON.stringify({ equipmentId: rooftop.id, reason: "Week of logger data" }),
+      })
     ).json()) as { visit: { id: string } };
     const visitUrl = `${base}/visits/${created.visit.id}`;
     for (let file = 0; file < FILES; file++) {
@@ -74,16 +85,28 @@ registerBench("Open visit refresh (10 000 readings): whole, 304, delta", async (
       const stored = await fetch(`${visitUrl}/readings/import`, { method: "POST", headers: { cookie }, body: form });
       if (stored.status !== 201) throw new Error(`import answered ${stored.status}`);
     }
-    console.log(`data set: demo company + 1 visit with ${FILES * ROWS_PER_FILE} readings (CSV import through the app; rebuilt by this bench)`);
+    console.log(
+      `data set: demo company + 1 visit with ${FILES * ROWS_PER_FILE} readings (CSV import through the app; rebuilt by this bench)`,
+    );
 
     // Asked with gzip as a browser does; Node's fetch decodes it, so sizes are of the JSON itself.
     const timed = async (url: string, headers: Record<string, string> = {}) => {
       const started = performance.now();
       const response = await fetch(url, { headers: { cookie, "Accept-Encoding": "gzip", ...headers } });
       const body = await response.arrayBuffer();
-      return { ms: performance.now() - started, status: response.status, bytes: body.byteLength, etag: response.headers.get("etag"), body };
+      return {
+        ms: performance.now() - started,
+        status: response.status,
+        bytes: body.byteLength,
+        etag: response.headers.get("etag"),
+        body,
+      };
     };
-    const series = async (label: string, run: () => Promise<{ ms: number; status: number; bytes: number }>, samples = SAMPLES) => {
+    const series = async (
+      label: string,
+      run: () => Promise<{ ms: number; status: number; bytes: number }>,
+      samples = SAMPLES,
+    ) => {
       const times: number[] = [];
       let last = { status: 0, bytes: 0 };
       for (let sample = 0; sample < samples; sample++) {
@@ -91,21 +114,33 @@ registerBench("Open visit refresh (10 000 readings): whole, 304, delta", async (
         times.push(outcome.ms);
         last = outcome;
       }
-      console.log(`${label.padEnd(44)} ${last.status}  median ${ms(median(times))}  p95 ${ms(p95(times))}  body ${kb(last.bytes)} (decoded)  target < ${POLL_TARGET_MS} ms`);
+      console.log(
+        `${label.padEnd(44)} ${last.status}  median ${ms(median(times))}  p95 ${ms(p95(times))}  body ${kb(last.bytes)} (decoded)  target < ${POLL_TARGET_MS} ms`,
+      );
     };
 
     const whole = await timed(visitUrl);
     const { visit } = JSON.parse(new TextDecoder().decode(whole.body)) as { visit: { revision: string } };
     // Seconds each: a few samples say enough.
     await series("whole visit (first load)", () => timed(visitUrl), 3);
-    await series("poll, nothing new (If-None-Match → 304)", () => timed(`${visitUrl}?since=${encodeURIComponent(visit.revision)}`, { "If-None-Match": whole.etag! }));
+    await series("poll, nothing new (If-None-Match → 304)", () =>
+      timed(`${visitUrl}?since=${encodeURIComponent(visit.revision)}`, { "If-None-Match": whole.etag! }),
+    );
     const reading = await fetch(`${visitUrl}/readings`, {
       method: "POST",
       headers: { cookie, "Content-Type": "application/json" },
-      body: JSON.stringify({ circuit: 1, suctionPressureKPa: Number(gauge(6, "dew")), suctionLineTempC: 12, liquidPressureKPa: Number(gauge(42, "bubble")), liquidLineTempC: 37 }),
+      body: JSON.stringify({
+        circuit: 1,
+        suctionPressureKPa: Number(gauge(6, "dew")),
+        suctionLineTempC: 12,
+        liquidPressureKPa: Number(gauge(42, "bubble")),
+        liquidLineTempC: 37,
+      }),
     });
     if (reading.status !== 201) throw new Error(`reading answered ${reading.status}`);
-    await series("poll after one new reading (delta)", () => timed(`${visitUrl}?since=${encodeURIComponent(visit.revision)}`, { "If-None-Match": whole.etag! }));
+    await series("poll after one new reading (delta)", () =>
+      timed(`${visitUrl}?since=${encodeURIComponent(visit.revision)}`, { "If-None-Match": whole.etag! }),
+    );
   } finally {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await closeCsvImportPool();

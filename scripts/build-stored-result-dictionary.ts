@@ -27,16 +27,19 @@ import { diagnoseReading } from "../server/diagnosis/diagnose-on-server.ts";
 const WINDOW_BYTES = 32 * 1024;
 
 const { values } = parseArgs({ options: { version: { type: "string" } } });
-if (!values.version || !/^\d+$/.test(values.version)) throw new Error("--version <n> is required (the next unused dictionary number)");
+if (!values.version || !/^\d+$/.test(values.version))
+  throw new Error("--version <n> is required (the next unused dictionary number)");
 const target = fileURLToPath(new URL(`../server/db/stored-result-dictionary-${values.version}.txt`, import.meta.url));
-if (existsSync(target)) throw new Error(`${target} exists: a dictionary is never rewritten (readings stored with it need it byte for byte)`);
+if (existsSync(target))
+  throw new Error(`${target} exists: a dictionary is never rewritten (readings stored with it need it byte for byte)`);
 
 await loadAllRefrigerants();
 const casesFile = fileURLToPath(new URL("../tests/fixtures/diagnosis-cases/cases.json", import.meta.url));
 const { cases } = DiagnosisCaseFileSchema.parse(JSON.parse(readFileSync(casesFile, "utf8")));
 const results: string[] = [];
 for (const worked of cases) results.push(JSON.stringify(await diagnoseReading(worked.input)));
-const packedSize = (dictionary: Buffer) => results.reduce((total, text) => total + deflateSync(text, { dictionary }).length, 0);
+const packedSize = (dictionary: Buffer) =>
+  results.reduce((total, text) => total + deflateSync(text, { dictionary }).length, 0);
 // Greedy: each step adds the result that makes every worked case's result smallest, placed in
 // front of those already chosen (the first chosen, the most useful, stays nearest the end).
 const chosen: string[] = [];
@@ -53,4 +56,6 @@ for (;;) {
 }
 const dictionary = dictionaryOf(chosen);
 writeFileSync(target, dictionary);
-console.log(`${target}: ${dictionary.length} bytes, ${chosen.length} results; the worked cases' results pack to ${(packedSize(dictionary) / results.length).toFixed(0)} B on average`);
+console.log(
+  `${target}: ${dictionary.length} bytes, ${chosen.length} results; the worked cases' results pack to ${(packedSize(dictionary) / results.length).toFixed(0)} B on average`,
+);

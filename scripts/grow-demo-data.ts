@@ -94,17 +94,64 @@ type Random = ReturnType<typeof randomSource>;
  * How each demo unit kind runs when healthy (saturation temperatures and line temperatures, °C),
  * from the demo's own settled readings; the cool room's are a medium-temperature box at 2–4 °C.
  */
-const HEALTHY: Record<string, { evaporatingDewC: number; superheatK: number; condensingBubbleC: number; subcoolingK: number; dischargeLineTempC: number; air: "comfort" | "box" }> = {
-  R407C: { evaporatingDewC: 6, superheatK: 6, condensingBubbleC: 42, subcoolingK: 5, dischargeLineTempC: 82, air: "comfort" },
-  R32: { evaporatingDewC: 8, superheatK: 5, condensingBubbleC: 40, subcoolingK: 5, dischargeLineTempC: 72, air: "comfort" },
-  R404A: { evaporatingDewC: -8, superheatK: 5.5, condensingBubbleC: 38, subcoolingK: 4, dischargeLineTempC: 70, air: "box" },
+const HEALTHY: Record<
+  string,
+  {
+    evaporatingDewC: number;
+    superheatK: number;
+    condensingBubbleC: number;
+    subcoolingK: number;
+    dischargeLineTempC: number;
+    air: "comfort" | "box";
+  }
+> = {
+  R407C: {
+    evaporatingDewC: 6,
+    superheatK: 6,
+    condensingBubbleC: 42,
+    subcoolingK: 5,
+    dischargeLineTempC: 82,
+    air: "comfort",
+  },
+  R32: {
+    evaporatingDewC: 8,
+    superheatK: 5,
+    condensingBubbleC: 40,
+    subcoolingK: 5,
+    dischargeLineTempC: 72,
+    air: "comfort",
+  },
+  R404A: {
+    evaporatingDewC: -8,
+    superheatK: 5.5,
+    condensingBubbleC: 38,
+    subcoolingK: 4,
+    dischargeLineTempC: 70,
+    air: "box",
+  },
 };
 
 /** The few faults the history draws on, as shifts from the healthy state (the demo's own cases). */
 const CONDITIONS = [
   { name: "healthy", weight: 70, evaporatingK: 0, superheatK: 0, condensingK: 0, subcoolingK: 0, dischargeK: 0 },
-  { name: "short of charge", weight: 12, evaporatingK: -5, superheatK: 8, condensingK: -4, subcoolingK: -3, dischargeK: 14 },
-  { name: "dirty condenser", weight: 10, evaporatingK: 1, superheatK: 0, condensingK: 9, subcoolingK: 1, dischargeK: 12 },
+  {
+    name: "short of charge",
+    weight: 12,
+    evaporatingK: -5,
+    superheatK: 8,
+    condensingK: -4,
+    subcoolingK: -3,
+    dischargeK: 14,
+  },
+  {
+    name: "dirty condenser",
+    weight: 10,
+    evaporatingK: 1,
+    superheatK: 0,
+    condensingK: 9,
+    subcoolingK: 1,
+    dischargeK: 12,
+  },
   { name: "restriction", weight: 8, evaporatingK: -7, superheatK: 10, condensingK: -1, subcoolingK: 6, dischargeK: 10 },
 ] as const;
 type Condition = (typeof CONDITIONS)[number];
@@ -119,8 +166,28 @@ const REASONS = [
   "Box temperature drifting up overnight",
   "Annual leak check",
 ];
-const SUBURBS = ["Bellbird Creek", "Wattle Flat", "Kookaburra Hill", "Red Gum Vale", "Magpie Bend", "Banksia Point", "Ironbark Ridge", "Lyrebird Gully"];
-const BUSINESSES = ["Clinic", "Bakery", "Pharmacy", "Library", "Community Hall", "Dental Surgery", "Supermarket", "Childcare Centre", "Veterinary Hospital", "Hotel"];
+const SUBURBS = [
+  "Bellbird Creek",
+  "Wattle Flat",
+  "Kookaburra Hill",
+  "Red Gum Vale",
+  "Magpie Bend",
+  "Banksia Point",
+  "Ironbark Ridge",
+  "Lyrebird Gully",
+];
+const BUSINESSES = [
+  "Clinic",
+  "Bakery",
+  "Pharmacy",
+  "Library",
+  "Community Hall",
+  "Dental Surgery",
+  "Supermarket",
+  "Childcare Centre",
+  "Veterinary Hospital",
+  "Hotel",
+];
 
 function pickCondition(random: Random): Condition {
   let roll = random.next() * CONDITIONS.reduce((sum, condition) => sum + condition.weight, 0);
@@ -139,21 +206,37 @@ function pickCondition(random: Random): Condition {
  * scatter between readings (a logger's fixed probes scatter far less than hand-held ones moved
  * from unit to unit).
  */
-function measuredValues(refrigerant: string, atmosphereKPa: number, condition: Condition, random: Random, runMinutes: number, settle = 1, noiseScale = 1): MeasuredValues {
+function measuredValues(
+  refrigerant: string,
+  atmosphereKPa: number,
+  condition: Condition,
+  random: Random,
+  runMinutes: number,
+  settle = 1,
+  noiseScale = 1,
+): MeasuredValues {
   const healthy = HEALTHY[refrigerant]!;
   const noise = (spread: number) => noiseScale * random.between(-spread, spread);
   const startUp = 1 - settle;
   const evaporatingDewC = healthy.evaporatingDewC + condition.evaporatingK + noise(0.4) - 3 * startUp;
   const condensingBubbleC = healthy.condensingBubbleC + condition.condensingK + noise(0.5) + 2 * startUp;
-  const gauge = (temperatureC: number, point: "bubble" | "dew") => Math.round(saturationPressure(refrigerant, temperatureC, point) - atmosphereKPa);
+  const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+    Math.round(saturationPressure(refrigerant, temperatureC, point) - atmosphereKPa);
   const tenth = (value: number) => Math.round(value * 10) / 10;
   const air =
     healthy.air === "comfort"
-      ? { returnAirDryBulbC: tenth(24 + noise(1.5)), returnAirWetBulbC: tenth(17.5 + noise(1)), supplyAirDryBulbC: tenth(13.5 + noise(1) + 4 * startUp), outdoorAirDryBulbC: tenth(30 + noise(4)) }
+      ? {
+          returnAirDryBulbC: tenth(24 + noise(1.5)),
+          returnAirWetBulbC: tenth(17.5 + noise(1)),
+          supplyAirDryBulbC: tenth(13.5 + noise(1) + 4 * startUp),
+          outdoorAirDryBulbC: tenth(30 + noise(4)),
+        }
       : { outdoorAirDryBulbC: tenth(27 + noise(4)) };
   return {
     suctionPressureKPa: gauge(evaporatingDewC, "dew"),
-    suctionLineTempC: tenth(evaporatingDewC + Math.max(1, healthy.superheatK + condition.superheatK + noise(0.8) + 6 * startUp)),
+    suctionLineTempC: tenth(
+      evaporatingDewC + Math.max(1, healthy.superheatK + condition.superheatK + noise(0.8) + 6 * startUp),
+    ),
     liquidPressureKPa: gauge(condensingBubbleC, "bubble"),
     liquidLineTempC: tenth(condensingBubbleC - Math.max(0.5, healthy.subcoolingK + condition.subcoolingK + noise(0.5))),
     dischargeLineTempC: tenth(healthy.dischargeLineTempC + condition.dischargeK + noise(2) + 8 * startUp),
@@ -163,7 +246,11 @@ function measuredValues(refrigerant: string, atmosphereKPa: number, condition: C
 }
 
 /** One reading row as POST /api/visits/:id/readings stores it: readingInput, then the engine. */
-async function readingRow(context: ReadingContext, measured: MeasuredValues, row: { organisationId: string; visitId: string; circuit: number; takenAt: Date; recordedBy: string }) {
+async function readingRow(
+  context: ReadingContext,
+  measured: MeasuredValues,
+  row: { organisationId: string; visitId: string; circuit: number; takenAt: Date; recordedBy: string },
+) {
   const parsed = readingInput(measured, context);
   if (!parsed.success) throw new Error(`grow-demo-data built an invalid reading: ${parsed.error.message}`);
   return { ...row, note: null, input: parsed.data, result: await diagnoseReading(parsed.data) };
@@ -190,16 +277,27 @@ export interface GrowReport {
  * Grows the demo organisation in `db` (seeding it first when the database is empty) to `sizes`.
  * @throws when the database holds another organisation but not Bellbird
  */
-export async function growDemoData(db: Database, sizes: GrowSizes, { now = Date.now(), progress = (_step: string) => {} } = {}): Promise<GrowReport> {
+export async function growDemoData(
+  db: Database,
+  sizes: GrowSizes,
+  { now = Date.now(), progress = (_step: string) => {} } = {},
+): Promise<GrowReport> {
   await seedDemoData(db);
   const random = randomSource(sizes.seed);
   const [organisation] = await db.select().from(organisations).where(eq(organisations.name, demoOrganisation.name));
   if (!organisation) throw new Error("growDemoData requires the demo organisation (Bellbird Mechanical)");
   const organisationId = organisation.id;
-  const people = await db.select({ id: users.id, email: users.email, role: users.role }).from(users).where(eq(users.organisationId, organisationId));
+  const people = await db
+    .select({ id: users.id, email: users.email, role: users.role })
+    .from(users)
+    .where(eq(users.organisationId, organisationId));
   const byEmail = (email: string) => people.find((person) => person.email === email)!.id;
-  const technicians = people.filter((person) => person.role === "technician" || person.role === "senior").map((person) => person.id);
-  const seniors = people.filter((person) => person.role === "senior" || person.role === "owner").map((person) => person.id);
+  const technicians = people
+    .filter((person) => person.role === "technician" || person.role === "senior")
+    .map((person) => person.id);
+  const seniors = people
+    .filter((person) => person.role === "senior" || person.role === "owner")
+    .map((person) => person.id);
   let addedReadings = 0;
 
   // Customers and sites: about five units a site, four sites a customer.
@@ -214,22 +312,46 @@ export async function growDemoData(db: Database, sizes: GrowSizes, { now = Date.
       contactEmail: `facilities${existingUnits + index + 1}@customers.example`,
       contactPhone: `03 5550 ${String(1000 + index).slice(-4)}`,
     }));
-    const storedCustomers = await db.insert(customers).values(customerRows).returning({ id: customers.id, name: customers.name });
+    const storedCustomers = await db
+      .insert(customers)
+      .values(customerRows)
+      .returning({ id: customers.id, name: customers.name });
     const siteRows = Array.from({ length: siteCount }, (_, index) => {
       const customer = storedCustomers[Math.floor(index / 4)]!;
-      return { organisationId, customerId: customer.id, name: `${customer.name} — building ${(index % 4) + 1}`, address: `${random.integer(1, 400)} Main Road, ${random.pick(SUBURBS)}`, altitudeM: random.integer(0, 700) };
+      return {
+        organisationId,
+        customerId: customer.id,
+        name: `${customer.name} — building ${(index % 4) + 1}`,
+        address: `${random.integer(1, 400)} Main Road, ${random.pick(SUBURBS)}`,
+        altitudeM: random.integer(0, 700),
+      };
     });
     const storedSites = await db.insert(sites).values(siteRows).returning({ id: sites.id });
     const unitRows = Array.from({ length: unitsToAdd }, (_, index) => {
       const template = demoEquipment[index % demoEquipment.length]!;
       const number = existingUnits + index + 1;
-      return { ...template, organisationId, siteId: storedSites[Math.floor(index / 5)]!.id, name: `${template.name} #${number}`, serial: `${template.serial.split("-")[0]}-${String(100_000 + number)}` };
+      return {
+        ...template,
+        organisationId,
+        siteId: storedSites[Math.floor(index / 5)]!.id,
+        name: `${template.name} #${number}`,
+        serial: `${template.serial.split("-")[0]}-${String(100_000 + number)}`,
+      };
     });
     await insertInSlices(unitRows, (slice) => db.insert(equipment).values(slice));
   }
 
   const units = await db
-    .select({ id: equipment.id, siteId: equipment.siteId, name: equipment.name, refrigerant: equipment.refrigerant, circuits: equipment.circuits, compressorRlaA: equipment.compressorRlaA, application: equipment.application, altitudeM: sites.altitudeM })
+    .select({
+      id: equipment.id,
+      siteId: equipment.siteId,
+      name: equipment.name,
+      refrigerant: equipment.refrigerant,
+      circuits: equipment.circuits,
+      compressorRlaA: equipment.compressorRlaA,
+      application: equipment.application,
+      altitudeM: sites.altitudeM,
+    })
     .from(equipment)
     .innerJoin(sites, eq(sites.id, equipment.siteId))
     .where(eq(equipment.organisationId, organisationId))
@@ -242,7 +364,12 @@ export async function growDemoData(db: Database, sizes: GrowSizes, { now = Date.
     let context = contexts.get(key);
     if (!context) {
       const nameplate = unit.circuits.find((candidate) => candidate.number === circuit)!;
-      context = { unit, nameplate, site: { altitudeM: unit.altitudeM }, charge: await circuitCharge(db, organisationId, unit.id, nameplate) };
+      context = {
+        unit,
+        nameplate,
+        site: { altitudeM: unit.altitudeM },
+        charge: await circuitCharge(db, organisationId, unit.id, nameplate),
+      };
       contexts.set(key, context);
     }
     return context;
@@ -252,19 +379,54 @@ export async function growDemoData(db: Database, sizes: GrowSizes, { now = Date.
   // The long open visit on the demo's rooftop unit: pull-down, then settled with probe noise.
   const rooftop = units.find((unit) => unit.refrigerant === "R407C")!;
   const technician = byEmail("tech@bellbird.example");
-  let [longVisit] = await db.select({ id: visits.id }).from(visits).where(and(eq(visits.organisationId, organisationId), eq(visits.reason, LONG_VISIT_REASON)));
+  let [longVisit] = await db
+    .select({ id: visits.id })
+    .from(visits)
+    .where(and(eq(visits.organisationId, organisationId), eq(visits.reason, LONG_VISIT_REASON)));
   if (!longVisit) {
     const startedAt = now - Math.ceil((sizes.longVisitReadings * 2_000) / MINUTE) * MINUTE - 10 * MINUTE;
-    [longVisit] = await db.insert(visits).values({ organisationId, equipmentId: rooftop.id, reason: LONG_VISIT_REASON, createdBy: technician, startedAt: new Date(startedAt) }).returning({ id: visits.id });
+    [longVisit] = await db
+      .insert(visits)
+      .values({
+        organisationId,
+        equipmentId: rooftop.id,
+        reason: LONG_VISIT_REASON,
+        createdBy: technician,
+        startedAt: new Date(startedAt),
+      })
+      .returning({ id: visits.id });
     await db.insert(visitTechnicians).values({ visitId: longVisit!.id, userId: technician });
-    await db.insert(visitEvents).values({ organisationId, visitId: longVisit!.id, action: "started", summary: LONG_VISIT_REASON, actorId: technician, at: new Date(startedAt) });
+    await db.insert(visitEvents).values({
+      organisationId,
+      visitId: longVisit!.id,
+      action: "started",
+      summary: LONG_VISIT_REASON,
+      actorId: technician,
+      at: new Date(startedAt),
+    });
     const context = await contextOf(rooftop, 1);
     const healthy = CONDITIONS[0];
     let rows = [];
     for (let index = 0; index < sizes.longVisitReadings; index++) {
       const seconds = index * 2;
-      const measured = measuredValues(rooftop.refrigerant, atmosphereOf(rooftop), healthy, random, 5 + seconds / 60, 1 - Math.exp(-seconds / 600), LOGGER_NOISE);
-      rows.push(await readingRow(context, measured, { organisationId, visitId: longVisit!.id, circuit: 1, takenAt: new Date(startedAt + 5 * MINUTE + seconds * 1_000), recordedBy: technician }));
+      const measured = measuredValues(
+        rooftop.refrigerant,
+        atmosphereOf(rooftop),
+        healthy,
+        random,
+        5 + seconds / 60,
+        1 - Math.exp(-seconds / 600),
+        LOGGER_NOISE,
+      );
+      rows.push(
+        await readingRow(context, measured, {
+          organisationId,
+          visitId: longVisit!.id,
+          circuit: 1,
+          takenAt: new Date(startedAt + 5 * MINUTE + seconds * 1_000),
+          recordedBy: technician,
+        }),
+      );
       if (rows.length === SLICE_ROWS) {
         await db.insert(readings).values(rows);
         addedReadings += rows.length;
@@ -284,7 +446,16 @@ export async function growDemoData(db: Database, sizes: GrowSizes, { now = Date.
     if (!stock || stock.leftKg < kg) {
       const [row] = await db
         .insert(cylinders)
-        .values({ organisationId, label: `BM-${refrigerant}-G${cylinderStock.size}-${random.integer(10_000, 99_999)}`, serial: `GR-${random.integer(100_000, 999_999)}`, kind: "new", refrigerant, waterCapacityKg: 15, tareKg: 6.1, initialContentsKg: 10 })
+        .values({
+          organisationId,
+          label: `BM-${refrigerant}-G${cylinderStock.size}-${random.integer(10_000, 99_999)}`,
+          serial: `GR-${random.integer(100_000, 999_999)}`,
+          kind: "new",
+          refrigerant,
+          waterCapacityKg: 15,
+          tareKg: 6.1,
+          initialContentsKg: 10,
+        })
         .returning({ id: cylinders.id });
       stock = { id: row!.id, leftKg: 10 };
       cylinderStock.set(refrigerant, stock);
@@ -301,10 +472,25 @@ export async function growDemoData(db: Database, sizes: GrowSizes, { now = Date.
       const open = visitsToAdd - index <= OPEN_VISITS;
       const daysAgo = open ? random.between(0, 2) : random.between(2, 4 * 365);
       const statusRoll = random.next();
-      const status: VisitStatus = open ? "open" : daysAgo < 20 && statusRoll < 0.3 ? "awaiting-review" : statusRoll < 0.02 ? "sent-back" : "signed-off";
+      const status: VisitStatus = open
+        ? "open"
+        : daysAgo < 20 && statusRoll < 0.3
+          ? "awaiting-review"
+          : statusRoll < 0.02
+            ? "sent-back"
+            : "signed-off";
       const unit = random.pick(units);
       const crew = random.pick(technicians);
-      return { unit, crew, status, startedAt: now - daysAgo * DAY, reason: random.pick(REASONS), condition: pickCondition(random), readingCount: random.integer(1, 3), signer: random.pick(seniors) };
+      return {
+        unit,
+        crew,
+        status,
+        startedAt: now - daysAgo * DAY,
+        reason: random.pick(REASONS),
+        condition: pickCondition(random),
+        readingCount: random.integer(1, 3),
+        signer: random.pick(seniors),
+      };
     });
     const storedVisits = await db
       .insert(visits)
@@ -316,7 +502,13 @@ export async function growDemoData(db: Database, sizes: GrowSizes, { now = Date.
           status: visit.status,
           createdBy: visit.crew,
           startedAt: new Date(visit.startedAt),
-          ...(visit.status === "signed-off" ? { signedOffBy: visit.signer, signedOffAt: new Date(visit.startedAt + 3 * 60 * MINUTE), reviewNote: "Checked and in band." } : {}),
+          ...(visit.status === "signed-off"
+            ? {
+                signedOffBy: visit.signer,
+                signedOffAt: new Date(visit.startedAt + 3 * 60 * MINUTE),
+                reviewNote: "Checked and in band.",
+              }
+            : {}),
           ...(visit.status === "sent-back" ? { reviewNote: "Please add the supply air temperature." } : {}),
         })),
       )
@@ -328,23 +520,81 @@ export async function growDemoData(db: Database, sizes: GrowSizes, { now = Date.
     for (const [offset, visit] of planned.entries()) {
       const visitId = storedVisits[offset]!.id;
       const at = (minutes: number) => new Date(visit.startedAt + minutes * MINUTE);
-      eventRows.push({ organisationId, visitId, action: "started" as const, summary: visitReasonText(visit.reason), actorId: visit.crew, at: at(0) });
-      if (visit.status !== "open") eventRows.push({ organisationId, visitId, action: "submitted" as const, summary: VISIT_EVENT_LABELS.submitted, actorId: visit.crew, at: at(90) });
-      if (visit.status === "signed-off" || visit.status === "sent-back") eventRows.push({ organisationId, visitId, action: visit.status, summary: VISIT_EVENT_LABELS[visit.status], actorId: visit.signer, at: at(180) });
+      eventRows.push({
+        organisationId,
+        visitId,
+        action: "started" as const,
+        summary: visitReasonText(visit.reason),
+        actorId: visit.crew,
+        at: at(0),
+      });
+      if (visit.status !== "open")
+        eventRows.push({
+          organisationId,
+          visitId,
+          action: "submitted" as const,
+          summary: VISIT_EVENT_LABELS.submitted,
+          actorId: visit.crew,
+          at: at(90),
+        });
+      if (visit.status === "signed-off" || visit.status === "sent-back")
+        eventRows.push({
+          organisationId,
+          visitId,
+          action: visit.status,
+          summary: VISIT_EVENT_LABELS[visit.status],
+          actorId: visit.signer,
+          at: at(180),
+        });
       const circuit = random.integer(1, visit.unit.circuits.length);
       const context = await contextOf(visit.unit, circuit);
       for (let reading = 0; reading < visit.readingCount; reading++) {
-        const measured = measuredValues(visit.unit.refrigerant, atmosphereOf(visit.unit), visit.condition, random, 12 + reading * 5);
-        readingRows.push(await readingRow(context, measured, { organisationId, visitId, circuit, takenAt: at(20 + reading * 5), recordedBy: visit.crew }));
+        const measured = measuredValues(
+          visit.unit.refrigerant,
+          atmosphereOf(visit.unit),
+          visit.condition,
+          random,
+          12 + reading * 5,
+        );
+        readingRows.push(
+          await readingRow(context, measured, {
+            organisationId,
+            visitId,
+            circuit,
+            takenAt: at(20 + reading * 5),
+            recordedBy: visit.crew,
+          }),
+        );
       }
       // A visit that found the circuit short tops it up: a register movement and its linked run-log line.
       if (visit.condition.name === "short of charge" && visit.status !== "open") {
         const kg = Math.round(random.between(0.2, 1.2) * 100) / 100;
-        chargeRows.push({ organisationId, visitId, equipmentId: visit.unit.id, circuit, refrigerant: visit.unit.refrigerant, kind: "added-new" as const, kg, cylinderId: await cylinderFor(visit.unit.refrigerant, kg), technicianId: visit.crew, at: at(40), note: "Topped up after the leak was repaired" });
+        chargeRows.push({
+          organisationId,
+          visitId,
+          equipmentId: visit.unit.id,
+          circuit,
+          refrigerant: visit.unit.refrigerant,
+          kind: "added-new" as const,
+          kg,
+          cylinderId: await cylinderFor(visit.unit.refrigerant, kg),
+          technicianId: visit.crew,
+          at: at(40),
+          note: "Topped up after the leak was repaired",
+        });
       }
-      if (random.next() < 0.1) commentRows.push({ organisationId, visitId, authorId: visit.crew, body: "Customer asked for a quote to replace the unit next year.", createdAt: at(60) });
+      if (random.next() < 0.1)
+        commentRows.push({
+          organisationId,
+          visitId,
+          authorId: visit.crew,
+          body: "Customer asked for a quote to replace the unit next year.",
+          createdAt: at(60),
+        });
     }
-    await db.insert(visitTechnicians).values(planned.map((visit, offset) => ({ visitId: storedVisits[offset]!.id, userId: visit.crew })));
+    await db
+      .insert(visitTechnicians)
+      .values(planned.map((visit, offset) => ({ visitId: storedVisits[offset]!.id, userId: visit.crew })));
     await insertInSlices(eventRows, (slice) => db.insert(visitEvents).values(slice));
     await insertInSlices(readingRows, (slice) => db.insert(readings).values(slice));
     addedReadings += readingRows.length;
@@ -352,24 +602,61 @@ export async function growDemoData(db: Database, sizes: GrowSizes, { now = Date.
     if (chargeRows.length > 0) {
       const movements = await db.insert(refrigerantMovements).values(chargeRows).returning();
       await db.insert(adjustments).values(
-        movements.map((row) => ({ organisationId, visitId: row.visitId!, circuit: row.circuit, at: row.at, kind: MOVEMENT_DIRECTION[row.kind as "added-new"], description: row.note ?? "", amountKg: row.kg, movementId: row.id, recordedBy: row.technicianId })),
+        movements.map((row) => ({
+          organisationId,
+          visitId: row.visitId!,
+          circuit: row.circuit,
+          at: row.at,
+          kind: MOVEMENT_DIRECTION[row.kind as "added-new"],
+          description: row.note ?? "",
+          amountKg: row.kg,
+          movementId: row.id,
+          recordedBy: row.technicianId,
+        })),
       );
     }
   }
 
   // A bulk write: without fresh statistics the planner would still see the demo's few rows.
   await analyzeTables(db);
-  return { organisationId, addedUnits: unitsToAdd, addedVisits: visitsToAdd, addedReadings, longVisitId: longVisit!.id };
+  return {
+    organisationId,
+    addedUnits: unitsToAdd,
+    addedVisits: visitsToAdd,
+    addedReadings,
+    longVisitId: longVisit!.id,
+  };
 }
 
 /** Row counts and on-disk sizes of the biggest tables, for the report and the bench. */
 export async function describeDataSet(db: Database, organisationId: string) {
-  const counted = async (table: string) => Number((await db.execute<{ n: number }>(sql.raw(`select count(*)::int as n from ${table} where organisation_id = '${organisationId}'`))).rows[0]!.n);
-  const size = async (table: string) => Number((await db.execute<{ bytes: string }>(sql.raw(`select pg_total_relation_size('${table}') as bytes`))).rows[0]!.bytes);
-  const tables = ["equipment", "visits", "readings", "visit_events", "refrigerant_movements", "cylinders", "customers", "sites"];
+  const counted = async (table: string) =>
+    Number(
+      (
+        await db.execute<{ n: number }>(
+          sql.raw(`select count(*)::int as n from ${table} where organisation_id = '${organisationId}'`),
+        )
+      ).rows[0]!.n,
+    );
+  const size = async (table: string) =>
+    Number(
+      (await db.execute<{ bytes: string }>(sql.raw(`select pg_total_relation_size('${table}') as bytes`))).rows[0]!
+        .bytes,
+    );
+  const tables = [
+    "equipment",
+    "visits",
+    "readings",
+    "visit_events",
+    "refrigerant_movements",
+    "cylinders",
+    "customers",
+    "sites",
+  ];
   const rows = [];
   for (const table of tables) rows.push({ table, rows: await counted(table), bytes: await size(table) });
-  const [database] = (await db.execute<{ bytes: string }>(sql`select pg_database_size(current_database()) as bytes`)).rows;
+  const [database] = (await db.execute<{ bytes: string }>(sql`select pg_database_size(current_database()) as bytes`))
+    .rows;
   return { tables: rows, databaseBytes: Number(database!.bytes) };
 }
 
@@ -387,17 +674,28 @@ async function main() {
       seed: { type: "string", default: String(LARGE_SIZES.seed) },
     },
   });
-  const sizes: GrowSizes = { units: Number(values.units), visits: Number(values.visits), longVisitReadings: Number(values["long-readings"]), seed: Number(values.seed) };
+  const sizes: GrowSizes = {
+    units: Number(values.units),
+    visits: Number(values.visits),
+    longVisitReadings: Number(values["long-readings"]),
+    seed: Number(values.seed),
+  };
   const started = performance.now();
   const handle = await openDatabase(values.dir);
   try {
-    const progress = (step: string) => console.log(`  ${((performance.now() - started) / 1000).toFixed(0).padStart(5)} s  ${step}`);
+    const progress = (step: string) =>
+      console.log(`  ${((performance.now() - started) / 1000).toFixed(0).padStart(5)} s  ${step}`);
     const report = await growDemoData(handle.db, sizes, { progress });
     const seconds = ((performance.now() - started) / 1000).toFixed(1);
-    console.log(`Grew ${values.dir} in ${seconds} s: +${report.addedUnits} units, +${report.addedVisits} visits, +${report.addedReadings} readings (seed ${sizes.seed}).`);
+    console.log(
+      `Grew ${values.dir} in ${seconds} s: +${report.addedUnits} units, +${report.addedVisits} visits, +${report.addedReadings} readings (seed ${sizes.seed}).`,
+    );
     console.log(`Long open visit: /api/visits/${report.longVisitId}`);
     const { tables, databaseBytes } = await describeDataSet(handle.db, report.organisationId);
-    for (const row of tables) console.log(`  ${row.table.padEnd(22)} ${String(row.rows).padStart(8)} rows  ${megabytes(row.bytes).padStart(10)}`);
+    for (const row of tables)
+      console.log(
+        `  ${row.table.padEnd(22)} ${String(row.rows).padStart(8)} rows  ${megabytes(row.bytes).padStart(10)}`,
+      );
     console.log(`  database                               ${megabytes(databaseBytes).padStart(10)}`);
   } finally {
     await handle.close();

@@ -30,7 +30,12 @@ import { organisationRouter } from "./routes/organisation.ts";
 import { outboxRouter } from "./routes/outbox.ts";
 import { profileRouter } from "./routes/profile.ts";
 import { proceduresRouter } from "./routes/procedures.ts";
-import { cylindersRouter, equipmentRefrigerantRouter, registerRouter, visitRefrigerantRouter } from "./routes/register.ts";
+import {
+  cylindersRouter,
+  equipmentRefrigerantRouter,
+  registerRouter,
+  visitRefrigerantRouter,
+} from "./routes/register.ts";
 
 export interface AppDeps {
   db: Database;
@@ -74,10 +79,13 @@ export function createApp(deps: AppDeps): Express {
           "img-src": ["'self'", "data:", "blob:"],
           // Only an https install may ask browsers to upgrade: on a plain-http LAN host (a tablet
           // on the workshop network) the upgraded requests would have nowhere to go.
-          "upgrade-insecure-requests": env.NODE_ENV === "production" && new URL(env.APP_URL).protocol === "https:" ? [] : null,
+          "upgrade-insecure-requests":
+            env.NODE_ENV === "production" && new URL(env.APP_URL).protocol === "https:" ? [] : null,
           // Vite's dev server injects an inline React Refresh preamble and talks over a
           // websocket; the production build has neither, so only development relaxes these.
-          ...(deps.clientMiddleware ? { "script-src": ["'self'", "'unsafe-inline'"], "connect-src": ["'self'", "ws:"] } : {}),
+          ...(deps.clientMiddleware
+            ? { "script-src": ["'self'", "'unsafe-inline'"], "connect-src": ["'self'", "ws:"] }
+            : {}),
         },
       },
     }),
@@ -91,7 +99,8 @@ export function createApp(deps: AppDeps): Express {
       serializers: logSerializers,
       // Quiet logs: health probes and static assets are noise.
       autoLogging: { ignore: (req) => req.url === "/api/health" || !req.url?.startsWith("/api") },
-      customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
+      customLogLevel: (_req, res, error) =>
+        error || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info",
     }),
   );
   app.use("/api", express.json({ limit: JSON_BODY_LIMIT }));

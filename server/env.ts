@@ -63,8 +63,11 @@ const ResolvedEnvSchema = EnvSchema.superRefine((env, context) => {
 }).transform((env) => ({
   ...env,
   APP_URL: (env.APP_URL ?? `http://localhost:${env.PORT}`).replace(/\/+$/, ""),
-  UPLOADS_DIR: env.UPLOADS_DIR ?? (env.DATA_DIR === "memory://" ? join(tmpdir(), `satura-uploads-${process.pid}`) : "data/uploads"),
-  outboxEnabled: !env.SMTP_HOST && (env.OUTBOX_ENABLED === undefined ? env.NODE_ENV !== "production" : isOn(env.OUTBOX_ENABLED)),
+  UPLOADS_DIR:
+    env.UPLOADS_DIR ??
+    (env.DATA_DIR === "memory://" ? join(tmpdir(), `satura-uploads-${process.pid}`) : "data/uploads"),
+  outboxEnabled:
+    !env.SMTP_HOST && (env.OUTBOX_ENABLED === undefined ? env.NODE_ENV !== "production" : isOn(env.OUTBOX_ENABLED)),
   cookieSecure: env.COOKIE_SECURE === undefined ? env.NODE_ENV === "production" : isOn(env.COOKIE_SECURE),
 }));
 

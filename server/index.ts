@@ -34,11 +34,15 @@ if (upgraded > 0) logger.info(`${upgraded} stored reading(s) re-diagnosed in the
 // PGlite has no autovacuum, so the planner's statistics are gathered here after migrations (and
 // any seed or upgrade), then every few minutes for the tables that changed enough since (see
 // analyzeChangedTables); a failure only leaves older estimates, so it is logged.
-const logStatisticsFailure = (error: unknown) => logger.error({ err: error }, "could not refresh the planner's statistics");
+const logStatisticsFailure = (error: unknown) =>
+  logger.error({ err: error }, "could not refresh the planner's statistics");
 await analyzeTables(database.db).catch(logStatisticsFailure);
 /** Often enough that a day's readings never wait long for fresh estimates; a quiet check is one small query. */
 const STATISTICS_CHECK_INTERVAL_MS = 10 * 60 * 1000;
-const statisticsTimer = setInterval(() => void analyzeChangedTables(database.db).catch(logStatisticsFailure), STATISTICS_CHECK_INTERVAL_MS);
+const statisticsTimer = setInterval(
+  () => void analyzeChangedTables(database.db).catch(logStatisticsFailure),
+  STATISTICS_CHECK_INTERVAL_MS,
+);
 statisticsTimer.unref();
 
 let clientMiddleware;

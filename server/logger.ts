@@ -1,4 +1,11 @@
-import { pino, stdSerializers, type DestinationStream, type Logger, type SerializedError, type SerializedRequest } from "pino";
+import {
+  pino,
+  stdSerializers,
+  type DestinationStream,
+  type Logger,
+  type SerializedError,
+  type SerializedRequest,
+} from "pino";
 import type { Env } from "./env.ts";
 
 /**
@@ -52,7 +59,9 @@ interface QueryError extends Error {
 }
 
 const isQueryError = (error: unknown): error is QueryError =>
-  error instanceof Error && typeof (error as Partial<QueryError>).query === "string" && Array.isArray((error as Partial<QueryError>).params);
+  error instanceof Error &&
+  typeof (error as Partial<QueryError>).query === "string" &&
+  Array.isArray((error as Partial<QueryError>).params);
 
 /**
  * Errors as logged. A failed database query (DrizzleQueryError) names its parameters in its
@@ -70,7 +79,14 @@ export function serializeError(error: unknown): SerializedError | unknown {
     message,
     stack: [`${error.constructor.name}: ${message}`, ...frames].join("\n"),
     ...(cause
-      ? { cause: { message: String(cause.message ?? ""), code: cause.code, constraint: cause.constraint, table: cause.table } }
+      ? {
+          cause: {
+            message: String(cause.message ?? ""),
+            code: cause.code,
+            constraint: cause.constraint,
+            table: cause.table,
+          },
+        }
       : {}),
   };
 }

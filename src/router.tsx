@@ -58,9 +58,18 @@ export function createRouter(queryClient: QueryClient) {
       children: [
         { path: paths.signIn.path, lazy: lazyRoute(queryClient, () => import("./routes/auth/sign-in.tsx")) },
         { path: paths.signUp.path, lazy: lazyRoute(queryClient, () => import("./routes/auth/sign-up.tsx")) },
-        { path: paths.forgotPassword.path, lazy: lazyRoute(queryClient, () => import("./routes/auth/forgot-password.tsx")) },
-        { path: paths.resetPassword.path, lazy: lazyRoute(queryClient, () => import("./routes/auth/reset-password.tsx")) },
-        { path: paths.acceptInvitation.path, lazy: lazyRoute(queryClient, () => import("./routes/auth/accept-invitation.tsx")) },
+        {
+          path: paths.forgotPassword.path,
+          lazy: lazyRoute(queryClient, () => import("./routes/auth/forgot-password.tsx")),
+        },
+        {
+          path: paths.resetPassword.path,
+          lazy: lazyRoute(queryClient, () => import("./routes/auth/reset-password.tsx")),
+        },
+        {
+          path: paths.acceptInvitation.path,
+          lazy: lazyRoute(queryClient, () => import("./routes/auth/accept-invitation.tsx")),
+        },
       ],
     },
     {
@@ -82,55 +91,78 @@ export function createRouter(queryClient: QueryClient) {
             { path: paths.tables.path, lazy: lazyRoute(queryClient, () => import("./routes/pt-tables.tsx")) },
             {
               path: paths.tables.detail.path,
-              ...screen(queryClient, () => import("./routes/pt-table.tsx"), (data, client, params) =>
-                data.prefetchRefrigerantScreen(client, params.refrigerantId ?? ""),
+              ...screen(
+                queryClient,
+                () => import("./routes/pt-table.tsx"),
+                (data, client, params) => data.prefetchRefrigerantScreen(client, params.refrigerantId ?? ""),
               ),
             },
             { path: paths.safety.path, lazy: lazyRoute(queryClient, () => import("./routes/safety.tsx")) },
             { path: paths.jobs.path, lazy: lazyRoute(queryClient, () => import("./routes/jobs.tsx")) },
             { path: paths.equipment.path, lazy: lazyRoute(queryClient, () => import("./routes/equipment-list.tsx")) },
-            { path: paths.equipment.new.path, lazy: lazyRoute(queryClient, () => import("./routes/equipment-new.tsx")) },
+            {
+              path: paths.equipment.new.path,
+              lazy: lazyRoute(queryClient, () => import("./routes/equipment-new.tsx")),
+            },
             {
               path: paths.equipment.detail.path,
-              ...screen(queryClient, () => import("./routes/equipment-detail.tsx"), (data, client, params) =>
-                data.prefetchEquipmentScreen(client, params.equipmentId ?? ""),
+              ...screen(
+                queryClient,
+                () => import("./routes/equipment-detail.tsx"),
+                (data, client, params) => data.prefetchEquipmentScreen(client, params.equipmentId ?? ""),
               ),
             },
             {
               path: paths.visits.detail.path,
-              ...screen(queryClient, () => import("./routes/visit.tsx"), (data, client, params) =>
-                data.prefetchVisitScreen(client, params.visitId ?? ""),
+              ...screen(
+                queryClient,
+                () => import("./routes/visit.tsx"),
+                (data, client, params) => data.prefetchVisitScreen(client, params.visitId ?? ""),
               ),
             },
             {
               path: paths.visits.report.path,
-              ...screen(queryClient, () => import("./routes/visit-report.tsx"), (data, client, params) =>
-                data.prefetchVisitScreen(client, params.visitId ?? ""),
+              ...screen(
+                queryClient,
+                () => import("./routes/visit-report.tsx"),
+                (data, client, params) => data.prefetchVisitScreen(client, params.visitId ?? ""),
               ),
             },
             { path: paths.casebook.path, lazy: lazyRoute(queryClient, () => import("./routes/casebook.tsx")) },
             {
               path: paths.casebook.new.path,
-              ...screen(queryClient, () => import("./routes/casebook-editor.tsx"), (data, client) =>
-                data.prefetchCaseScreen(client, undefined, NEW_CASE_REFRIGERANT),
+              ...screen(
+                queryClient,
+                () => import("./routes/casebook-editor.tsx"),
+                (data, client) => data.prefetchCaseScreen(client, undefined, NEW_CASE_REFRIGERANT),
               ),
             },
-            { path: paths.casebook.team.path, lazy: lazyRoute(queryClient, () => import("./routes/casebook-team.tsx")) },
+            {
+              path: paths.casebook.team.path,
+              lazy: lazyRoute(queryClient, () => import("./routes/casebook-team.tsx")),
+            },
             {
               path: paths.casebook.case.path,
-              ...screen(queryClient, () => import("./routes/casebook-case.tsx"), (data, client, params) =>
-                data.prefetchCaseScreen(client, params.caseId, NEW_CASE_REFRIGERANT),
+              ...screen(
+                queryClient,
+                () => import("./routes/casebook-case.tsx"),
+                (data, client, params) => data.prefetchCaseScreen(client, params.caseId, NEW_CASE_REFRIGERANT),
               ),
             },
             {
               path: paths.casebook.edit.path,
-              ...screen(queryClient, () => import("./routes/casebook-editor.tsx"), (data, client, params) =>
-                data.prefetchCaseScreen(client, params.caseId, NEW_CASE_REFRIGERANT),
+              ...screen(
+                queryClient,
+                () => import("./routes/casebook-editor.tsx"),
+                (data, client, params) => data.prefetchCaseScreen(client, params.caseId, NEW_CASE_REFRIGERANT),
               ),
             },
             { path: paths.cylinders.path, lazy: lazyRoute(queryClient, () => import("./routes/cylinders.tsx")) },
             { path: paths.register.path, lazy: lazyRoute(queryClient, () => import("./routes/register.tsx")) },
-            { path: paths.companySettings.path, lazy: lazyRoute(queryClient, () => import("./routes/company-settings.tsx")) },
+            {
+              path: paths.companySettings.path,
+              lazy: lazyRoute(queryClient, () => import("./routes/company-settings.tsx")),
+            },
             { path: paths.members.path, lazy: lazyRoute(queryClient, () => import("./routes/members.tsx")) },
             { path: paths.profile.path, lazy: lazyRoute(queryClient, () => import("./routes/profile.tsx")) },
             { path: paths.outbox.path, lazy: lazyRoute(queryClient, () => import("./routes/outbox.tsx")) },

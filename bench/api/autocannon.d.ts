@@ -25,7 +25,10 @@ declare module "autocannon" {
     finish: Date;
   }
   interface Instance extends PromiseLike<AutocannonResult> {
-    on(event: "response", listener: (client: unknown, statusCode: number, resBytes: number, responseTime: number) => void): this;
+    on(
+      event: "response",
+      listener: (client: unknown, statusCode: number, resBytes: number, responseTime: number) => void,
+    ): this;
     on(event: "reqError", listener: (error: Error) => void): this;
     stop(): void;
   }

@@ -38,21 +38,50 @@ export async function readDataSet(dataDir: string): Promise<DataSet> {
   try {
     const one = async <T>(query: string) => (await handle.client.query<T>(query)).rows[0]!;
     const counts: Record<string, number> = {};
-    for (const table of ["equipment", "visits", "readings", "refrigerant_movements", "cylinders", "visit_events", "customers", "sites"]) {
+    for (const table of [
+      "equipment",
+      "visits",
+      "readings",
+      "refrigerant_movements",
+      "cylinders",
+      "visit_events",
+      "customers",
+      "sites",
+    ]) {
       counts[table] = (await one<{ n: number }>(`select count(*)::int as n from ${table}`)).n;
     }
-    const long = await handle.client.query<{ id: string }>(`select id from visits where reason = $1`, [LONG_VISIT_REASON]);
-    const busiest = await one<{ id: string }>(`select visit_id as id from readings group by visit_id order by count(*) desc limit 1`);
+    const long = await handle.client.query<{ id: string }>(`select id from visits where reason = $1`, [
+      LONG_VISIT_REASON,
+    ]);
+    const busiest = await one<{ id: string }>(
+      `select visit_id as id from readings group by visit_id order by count(*) desc limit 1`,
+    );
     const longVisitId = long.rows[0]?.id ?? busiest.id;
-    const ordinary = await one<{ id: string }>(`select v.id from visits v where v.status = 'signed-off' and exists (select 1 from readings r where r.visit_id = v.id) order by v.started_at desc limit 1`);
+    const ordinary = await one<{ id: string }>(
+      `select v.id from visits v where v.status = 'signed-off' and exists (select 1 from readings r where r.visit_id = v.id) order by v.started_at desc limit 1`,
+    );
     const logged = await one<{ id: string }>(`select equipment_id as id from visits where id = '${longVisitId}'`);
-    const unit = await one<{ id: string }>(`select equipment_id as id from visits group by equipment_id order by count(*) desc limit 1`);
-    const cylinder = await one<{ id: string }>(`select cylinder_id as id from refrigerant_movements where cylinder_id is not null group by cylinder_id order by count(*) desc limit 1`);
+    const unit = await one<{ id: string }>(
+      `select equipment_id as id from visits group by equipment_id order by count(*) desc limit 1`,
+    );
+    const cylinder = await one<{ id: string }>(
+      `select cylinder_id as id from refrigerant_movements where cylinder_id is not null group by cylinder_id order by count(*) desc limit 1`,
+    );
     const open = await handle.client.query<{ id: string }>(
       `select v.id from visits v join equipment e on e.id = v.equipment_id where v.status = 'open' and e.refrigerant = 'R407C' and v.id <> $1 order by v.started_at desc`,
       [longVisitId],
     );
-    const cost = await one<{ heap: string; toast: string; indexes: string; total: string; result_stored: string; input_stored: string; result_text: string; packed: string; packed_stored: string | null }>(`
+    const cost = await one<{
+      heap: string;
+      toast: string;
+      indexes: string;
+      total: string;
+      result_stored: string;
+      input_stored: string;
+      result_text: string;
+      packed: string;
+      packed_stored: string | null;
+    }>(`
       select pg_relation_size('readings') as heap,
              coalesce(pg_total_relation_size(nullif(c.reltoastrelid, 0)), 0) as toast,
              pg_indexes_size('readings') as indexes,
@@ -68,7 +97,13 @@ export async function readDataSet(dataDir: string): Promise<DataSet> {
     const database = await one<{ bytes: string }>(`select pg_database_size(current_database()) as bytes`);
     return {
       counts,
-      ids: { equipmentId: unit.id, loggedEquipmentId: logged.id, visitId: ordinary.id, longVisitId, cylinderId: cylinder.id },
+      ids: {
+        equipmentId: unit.id,
+        loggedEquipmentId: logged.id,
+        visitId: ordinary.id,
+        longVisitId,
+        cylinderId: cylinder.id,
+      },
       openReadingVisits: open.rows.map((row) => row.id),
       readingCost: {
         readings: rows,

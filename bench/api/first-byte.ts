@@ -18,7 +18,11 @@ function percentile(sorted: readonly number[], fraction: number): number {
   return sorted[Math.min(sorted.length - 1, Math.ceil(fraction * sorted.length) - 1)]!;
 }
 
-export async function measureFirstByte(url: string, headers: Record<string, string>, requests: number): Promise<FirstByteResult> {
+export async function measureFirstByte(
+  url: string,
+  headers: Record<string, string>,
+  requests: number,
+): Promise<FirstByteResult> {
   const heads: number[] = [];
   const firsts: number[] = [];
   const wholes: number[] = [];

@@ -51,7 +51,10 @@ export async function runLoad(options: LoadOptions): Promise<LoadResult> {
   return timed.requests > 0 ? timed : runOnce(options, { amount: options.connections });
 }
 
-async function runOnce({ origin, connections, maxRequests, next, expectStatus = [200] }: LoadOptions, length: { duration: number } | { amount: number }): Promise<LoadResult> {
+async function runOnce(
+  { origin, connections, maxRequests, next, expectStatus = [200] }: LoadOptions,
+  length: { duration: number } | { amount: number },
+): Promise<LoadResult> {
   const latencies: number[] = [];
   const unexpected: Record<number, number> = {};
   let issued = 0;
@@ -74,7 +77,11 @@ async function runOnce({ origin, connections, maxRequests, next, expectStatus = 
             ...request,
             method: load.method ?? "GET",
             path: load.path,
-            headers: { ...request.headers, ...(load.body ? { "content-type": "application/json" } : {}), ...load.headers },
+            headers: {
+              ...request.headers,
+              ...(load.body ? { "content-type": "application/json" } : {}),
+              ...load.headers,
+            },
             body: load.body ?? Buffer.alloc(0),
           };
         },

@@ -40,7 +40,9 @@ export interface SaveLevel {
  */
 export async function openVisitsForSaving(server: BenchServer, cookie: string, count: number): Promise<string[]> {
   const headers = { cookie, origin: server.origin, "content-type": "application/json" };
-  const page = (await (await fetch(`${server.origin}/api/equipment?q=R407C`, { headers })).json()) as { equipment: { id: string; refrigerant: string }[] };
+  const page = (await (await fetch(`${server.origin}/api/equipment?q=R407C`, { headers })).json()) as {
+    equipment: { id: string; refrigerant: string }[];
+  };
   const units = page.equipment.filter((unit) => unit.refrigerant === "R407C");
   if (units.length === 0) throw new Error("no R407C unit to open visits on");
   const visits: string[] = [];
@@ -50,14 +52,21 @@ export async function openVisitsForSaving(server: BenchServer, cookie: string, c
       headers,
       body: JSON.stringify({ equipmentId: units[index % units.length]!.id, reason: "Load test: quarterly check" }),
     });
-    if (response.status !== 201) throw new Error(`opening a visit answered ${response.status}: ${await response.text()}`);
+    if (response.status !== 201)
+      throw new Error(`opening a visit answered ${response.status}: ${await response.text()}`);
     visits.push(((await response.json()) as { visit: { id: string } }).visit.id);
   }
   return visits;
 }
 
 /** Each level for `seconds`, after a short warm-up (JIT, the planner, the session cache). */
-export async function measureSaving(server: BenchServer, cookie: string, openVisits: readonly string[], seconds: number, levels: readonly number[] = SAVE_CONNECTIONS): Promise<SaveLevel[]> {
+export async function measureSaving(
+  server: BenchServer,
+  cookie: string,
+  openVisits: readonly string[],
+  seconds: number,
+  levels: readonly number[] = SAVE_CONNECTIONS,
+): Promise<SaveLevel[]> {
   const body = JSON.stringify(READING_BODY);
   // Each save goes to the next open visit.
   const load = (connections: number, duration: number) =>
@@ -65,7 +74,12 @@ export async function measureSaving(server: BenchServer, cookie: string, openVis
       origin: server.origin,
       connections,
       seconds: duration,
-      next: (index) => ({ method: "POST", path: `/api/visits/${openVisits[index % openVisits.length]}/readings`, headers: { cookie, origin: server.origin }, body }),
+      next: (index) => ({
+        method: "POST",
+        path: `/api/visits/${openVisits[index % openVisits.length]}/readings`,
+        headers: { cookie, origin: server.origin },
+        body,
+      }),
       expectStatus: [201],
     });
   await load(4, 2);

@@ -50,14 +50,33 @@ async function waitForHealth(origin: string, child: ChildProcess, timeoutMs: num
  * `dataDir`: a PGlite folder, or "memory://" for a fresh demo-size database. `nodeArgs`: more
  * options for the server's node (e.g. `--cpu-prof`, to see where a route's time goes).
  */
-export async function startServer(dataDir: string, extraEnv: Record<string, string> = {}, nodeArgs: readonly string[] = []): Promise<BenchServer> {
+export async function startServer(
+  dataDir: string,
+  extraEnv: Record<string, string> = {},
+  nodeArgs: readonly string[] = [],
+): Promise<BenchServer> {
   const port = await freePort();
   const origin = `http://127.0.0.1:${port}`;
-  const child = spawn(process.execPath, [...nodeArgs, "--import", "tsx", "--import", "./bench/api/memory-probe.ts", "server/index.ts"], {
-    cwd: root,
-    env: { ...process.env, NODE_ENV: "production", HOST: "127.0.0.1", PORT: String(port), APP_URL: origin, DATA_DIR: dataDir, DEMO_DATA: "true", LOG_LEVEL: "fatal", COOKIE_SECURE: "false", ...extraEnv },
-    stdio: ["ignore", "inherit", "inherit", "ipc"],
-  });
+  const child = spawn(
+    process.execPath,
+    [...nodeArgs, "--import", "tsx", "--import", "./bench/api/memory-probe.ts", "server/index.ts"],
+    {
+      cwd: root,
+      env: {
+        ...process.env,
+        NODE_ENV: "production",
+        HOST: "127.0.0.1",
+        PORT: String(port),
+        APP_URL: origin,
+        DATA_DIR: dataDir,
+        DEMO_DATA: "true",
+        LOG_LEVEL: "fatal",
+        COOKIE_SECURE: "false",
+        ...extraEnv,
+      },
+      stdio: ["ignore", "inherit", "inherit", "ipc"],
+    },
+  );
   await waitForHealth(origin, child, 120_000);
 
   // Answers are told apart by their key (two questions of one kind at once both take the first answer).

@@ -21,7 +21,14 @@ export interface BenchServer {
 export async function startServer(port: number, dataDir = "memory://"): Promise<BenchServer> {
   const base = `http://127.0.0.1:${port}`;
   const child: ChildProcess = spawn("npx", ["tsx", "server/index.ts"], {
-    env: { ...process.env, NODE_ENV: "production", DATA_DIR: dataDir, PORT: String(port), LOG_LEVEL: "warn", APP_URL: base },
+    env: {
+      ...process.env,
+      NODE_ENV: "production",
+      DATA_DIR: dataDir,
+      PORT: String(port),
+      LOG_LEVEL: "warn",
+      APP_URL: base,
+    },
     stdio: "ignore",
     detached: true,
   });

@@ -5,7 +5,12 @@
 import type { BrowserContext, Page } from "playwright-core";
 
 /** Chrome DevTools' "Slow 4G" as the issue states it; throughput in bytes per second. */
-export const SLOW_4G = { offline: false, latency: 400, downloadThroughput: (1.6e6 / 8) * 0.9, uploadThroughput: (0.75e6 / 8) * 0.9 };
+export const SLOW_4G = {
+  offline: false,
+  latency: 400,
+  downloadThroughput: (1.6e6 / 8) * 0.9,
+  uploadThroughput: (0.75e6 / 8) * 0.9,
+};
 export const CPU_SLOWDOWN = 4;
 export const PHONE_VIEWPORT = { width: 412, height: 915 };
 
@@ -36,7 +41,9 @@ export async function findDemoVisit(context: BrowserContext, base: string): Prom
  * stamps that moment (`window.interactiveAt`, ms from navigation) the first time.
  */
 export function runLogInteractive(): boolean {
-  const label = [...document.querySelectorAll("label")].find((candidate) => candidate.textContent?.trim().startsWith("Suction pressure"));
+  const label = [...document.querySelectorAll("label")].find((candidate) =>
+    candidate.textContent?.trim().startsWith("Suction pressure"),
+  );
   const field = label?.control as HTMLInputElement | null | undefined;
   const finding = document.querySelector("[data-testid=charge-state]")?.textContent?.trim();
   const ready = Boolean(field && !field.disabled && finding);

@@ -42,14 +42,19 @@ try {
     elements: document.querySelectorAll("*").length,
     hiddenElements: document.querySelectorAll("details:not([open]) *").length,
   }));
-  console.log(`${target} (${DEMO_VISIT_REASON}): interactive at ${interactiveAt.toFixed(0)} ms; ${elements} elements, ${hiddenElements} of them in closed folds`);
+  console.log(
+    `${target} (${DEMO_VISIT_REASON}): interactive at ${interactiveAt.toFixed(0)} ms; ${elements} elements, ${hiddenElements} of them in closed folds`,
+  );
   console.log("requests (ms from navigation: start → end, bytes on the wire):");
   for (const request of requests.sort((a, b) => a.start - b.start)) {
-    console.log(`  ${request.start.toFixed(0).padStart(6)} → ${request.end.toFixed(0).padStart(6)}  ${String(request.bytes).padStart(8)}  ${request.name}`);
+    console.log(
+      `  ${request.start.toFixed(0).padStart(6)} → ${request.end.toFixed(0).padStart(6)}  ${String(request.bytes).padStart(8)}  ${request.name}`,
+    );
   }
   const busy = longTasks.reduce((sum, task) => sum + task.duration, 0);
   console.log(`long tasks: ${longTasks.length}, ${busy.toFixed(0)} ms in all`);
-  for (const task of longTasks) console.log(`  at ${task.start.toFixed(0).padStart(6)}  ${task.duration.toFixed(0).padStart(5)} ms`);
+  for (const task of longTasks)
+    console.log(`  at ${task.start.toFixed(0).padStart(6)}  ${task.duration.toFixed(0).padStart(5)} ms`);
   const selfTime = new Map<string, number>();
   const intervals = profile.timeDeltas ?? [];
   const nodeById = new Map(profile.nodes.map((node) => [node.id, node]));
@@ -59,7 +64,8 @@ try {
     selfTime.set(where, (selfTime.get(where) ?? 0) + (intervals[index] ?? 0) / 1000);
   });
   console.log("CPU self time by function (top 25, ms; the page's CPU is throttled):");
-  for (const [where, ms] of [...selfTime].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(`  ${ms.toFixed(0).padStart(6)}  ${where}`);
+  for (const [where, ms] of [...selfTime].sort((a, b) => b[1] - a[1]).slice(0, 25))
+    console.log(`  ${ms.toFixed(0).padStart(6)}  ${where}`);
   await browser.close();
 } finally {
   server.stop();

@@ -16,11 +16,15 @@ export function designFlowOf(circuit: ChargeCircuit, conditions: InventoryCondit
   const point = operatingPointAt(circuit, conditions, circuit.designSubcooledShare, null);
   const refrigerant = circuit.refrigerant;
   const liquid =
-    point.subcoolingK > 0.01 ? singlePhaseState(refrigerant, point.condensingPressureKPa, point.liquidLineC) : saturatedPhasesAtPressure(refrigerant, point.condensingPressureKPa).liquid;
+    point.subcoolingK > 0.01
+      ? singlePhaseState(refrigerant, point.condensingPressureKPa, point.liquidLineC)
+      : saturatedPhasesAtPressure(refrigerant, point.condensingPressureKPa).liquid;
   const low = saturatedPhasesAtPressure(refrigerant, point.evaporatingPressureKPa);
-  const orificeGain = circuit.meteringDevice === "fixed-orifice" ? 1 + circuit.orificeSubcoolingGainPerK * point.subcoolingK : 1;
+  const orificeGain =
+    circuit.meteringDevice === "fixed-orifice" ? 1 + circuit.orificeSubcoolingGainPerK * point.subcoolingK : 1;
   return {
-    flowFactor: Math.sqrt(liquid.densityKgPerM3 * (point.condensingPressureKPa - point.evaporatingPressureKPa)) * orificeGain,
+    flowFactor:
+      Math.sqrt(liquid.densityKgPerM3 * (point.condensingPressureKPa - point.evaporatingPressureKPa)) * orificeGain,
     twoPhaseEnthalpyRiseKJPerKg: low.vapour.enthalpyKJPerKg - liquid.enthalpyKJPerKg,
   };
 }

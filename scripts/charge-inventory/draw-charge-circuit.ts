@@ -2,7 +2,7 @@ import { fixedOrificeTargetSuperheat } from "../../shared/engine/index.ts";
 import { DESIGN_CONDITIONS, type ChargeCircuit, type InventoryMeteringDevice } from "./charge-circuit.ts";
 
 /** Liquid line inner diameters, m: 1/4, 5/16 and 3/8 in copper (0.76 mm wall) — common line sets. */
-const LIQUID_LINE_INNER_DIAMETERS_M = [0.00483, 0.00643, 0.00800];
+const LIQUID_LINE_INNER_DIAMETERS_M = [0.00483, 0.00643, 0.008];
 
 /** Share of circuits whose label gives no target subcooling. */
 const NO_NAMEPLATE_TARGET_SHARE = 0.25;
@@ -49,7 +49,8 @@ export function drawChargeCircuit(
     condenserVolumeM3: between(1.5, 5) / 1000,
     evaporatorVolumeM3: between(1, 3) / 1000,
     liquidLineLengthM: between(3, 25),
-    liquidLineInnerDiameterM: LIQUID_LINE_INNER_DIAMETERS_M[Math.floor(random() * LIQUID_LINE_INNER_DIAMETERS_M.length)]!,
+    liquidLineInnerDiameterM:
+      LIQUID_LINE_INNER_DIAMETERS_M[Math.floor(random() * LIQUID_LINE_INNER_DIAMETERS_M.length)]!,
     suctionLineInnerDiameterM: between(0.011, 0.0175),
     compressorAllowanceKg: between(0.08, 0.3),
     desuperheatingShare: between(0.05, 0.12),

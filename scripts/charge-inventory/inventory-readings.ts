@@ -27,7 +27,8 @@ export function inventoryReadings(
   scatter: ReadingScatter | null,
 ): DiagnosisInput {
   const spread = (width: number) => (scatter ? (2 * scatter.random() - 1) * width : 0);
-  const pressure = (absoluteKPa: number) => Math.round(absoluteKPa * (1 + spread(scatter?.pressureFraction ?? 0)) - STANDARD_ATMOSPHERE_KPA);
+  const pressure = (absoluteKPa: number) =>
+    Math.round(absoluteKPa * (1 + spread(scatter?.pressureFraction ?? 0)) - STANDARD_ATMOSPHERE_KPA);
   const temperature = (celsius: number) => Math.round((celsius + spread(scatter?.temperatureK ?? 0)) * 10) / 10;
   return {
     refrigerant: circuit.refrigerant,
@@ -41,7 +42,12 @@ export function inventoryReadings(
     returnAirWetBulbC: conditions.returnWetBulbC,
     ...(circuit.nameplateSubcoolingOffsetK === null
       ? {}
-      : { targetSubcoolingK: Math.max(1, Math.round((circuit.designSubcoolingK + circuit.nameplateSubcoolingOffsetK) * 10) / 10) }),
+      : {
+          targetSubcoolingK: Math.max(
+            1,
+            Math.round((circuit.designSubcoolingK + circuit.nameplateSubcoolingOffsetK) * 10) / 10,
+          ),
+        }),
     application: "comfort-cooling",
     runMinutes: 20,
     chargeKg: Math.round(correctChargeKg * 100) / 100,

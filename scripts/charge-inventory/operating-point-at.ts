@@ -57,7 +57,12 @@ const tubeVolume = (innerDiameterM: number, lengthM: number) => (Math.PI / 4) * 
  *
  * @throws PropertyRangeError when the point leaves the property tables
  */
-export function operatingPointAt(circuit: ChargeCircuit, conditions: InventoryConditions, coordinate: number, design: DesignFlow | null): OperatingPoint {
+export function operatingPointAt(
+  circuit: ChargeCircuit,
+  conditions: InventoryConditions,
+  coordinate: number,
+  design: DesignFlow | null,
+): OperatingPoint {
   const refrigerant = circuit.refrigerant;
   const voidFraction = circuit.voidFraction === "homogeneous" ? homogeneousVoidFraction : ziviVoidFraction;
   const subcooledShare = Math.max(coordinate, 0);
@@ -68,16 +73,27 @@ export function operatingPointAt(circuit: ChargeCircuit, conditions: InventoryCo
   const condensingOverAmbientK = (circuit.condensingOverAmbientK * designTwoPhaseShare) / twoPhaseShare;
   const condensingBubbleC = conditions.outdoorAirC + condensingOverAmbientK;
   const condensingPressureKPa = saturationPressure(refrigerant, condensingBubbleC, "bubble");
-  const subcoolerNtu = -Math.log(1 - circuit.designSubcoolingK / circuit.condensingOverAmbientK) / circuit.designSubcooledShare;
+  const subcoolerNtu =
+    -Math.log(1 - circuit.designSubcoolingK / circuit.condensingOverAmbientK) / circuit.designSubcooledShare;
   const subcoolingK = condensingOverAmbientK * (1 - Math.exp(-subcoolerNtu * subcooledShare));
 
   const high = saturatedPhasesAtPressure(refrigerant, condensingPressureKPa);
-  const liquid = subcoolingK > SATURATED_WITHIN_K ? singlePhaseState(refrigerant, condensingPressureKPa, condensingBubbleC - subcoolingK) : high.liquid;
+  const liquid =
+    subcoolingK > SATURATED_WITHIN_K
+      ? singlePhaseState(refrigerant, condensingPressureKPa, condensingBubbleC - subcoolingK)
+      : high.liquid;
   const inletEnthalpy =
-    outletQuality > 0 ? high.liquid.enthalpyKJPerKg + outletQuality * (high.vapour.enthalpyKJPerKg - high.liquid.enthalpyKJPerKg) : liquid.enthalpyKJPerKg;
+    outletQuality > 0
+      ? high.liquid.enthalpyKJPerKg + outletQuality * (high.vapour.enthalpyKJPerKg - high.liquid.enthalpyKJPerKg)
+      : liquid.enthalpyKJPerKg;
   const inletDensity =
-    outletQuality > 0 ? 1 / (outletQuality / high.vapour.densityKgPerM3 + (1 - outletQuality) / high.liquid.densityKgPerM3) : liquid.densityKgPerM3;
-  const liquidLineC = outletQuality > 0 ? condensingBubbleC + outletQuality * (high.vapour.temperatureC - condensingBubbleC) : condensingBubbleC - subcoolingK;
+    outletQuality > 0
+      ? 1 / (outletQuality / high.vapour.densityKgPerM3 + (1 - outletQuality) / high.liquid.densityKgPerM3)
+      : liquid.densityKgPerM3;
+  const liquidLineC =
+    outletQuality > 0
+      ? condensingBubbleC + outletQuality * (high.vapour.temperatureC - condensingBubbleC)
+      : condensingBubbleC - subcoolingK;
 
   const evaporatingDewC = conditions.returnAirC - circuit.evaporatorTemperatureDifferenceK;
   const evaporatingPressureKPa = saturationPressure(refrigerant, evaporatingDewC, "dew");
@@ -86,7 +102,8 @@ export function operatingPointAt(circuit: ChargeCircuit, conditions: InventoryCo
   const inletQuality = Math.min(Math.max((inletEnthalpy - low.liquid.enthalpyKJPerKg) / latent, 0), 1);
   const twoPhaseRise = low.vapour.enthalpyKJPerKg - inletEnthalpy;
 
-  const orificeGain = circuit.meteringDevice === "fixed-orifice" ? 1 + circuit.orificeSubcoolingGainPerK * subcoolingK : 1;
+  const orificeGain =
+    circuit.meteringDevice === "fixed-orifice" ? 1 + circuit.orificeSubcoolingGainPerK * subcoolingK : 1;
   const flowFactor = Math.sqrt(inletDensity * (condensingPressureKPa - evaporatingPressureKPa)) * orificeGain;
   let superheatedShare = circuit.designSuperheatedShare;
   let valveWideOpen = false;
@@ -101,25 +118,39 @@ export function operatingPointAt(circuit: ChargeCircuit, conditions: InventoryCo
     superheatedShare = Math.min(Math.max(superheatedShare, 0), MAX_SUPERHEATED_SHARE);
   }
   const evaporatorDifferenceK = circuit.evaporatorTemperatureDifferenceK;
-  const superheaterNtu = -Math.log(1 - circuit.designSuperheatK / evaporatorDifferenceK) / circuit.designSuperheatedShare;
+  const superheaterNtu =
+    -Math.log(1 - circuit.designSuperheatK / evaporatorDifferenceK) / circuit.designSuperheatedShare;
   const superheatK = evaporatorDifferenceK * (1 - Math.exp(-superheaterNtu * superheatedShare));
 
   const vapourAt = (temperatureC: number) =>
-    temperatureC - low.vapour.temperatureC > SATURATED_WITHIN_K ? singlePhaseState(refrigerant, evaporatingPressureKPa, temperatureC).densityKgPerM3 : low.vapour.densityKgPerM3;
+    temperatureC - low.vapour.temperatureC > SATURATED_WITHIN_K
+      ? singlePhaseState(refrigerant, evaporatingPressureKPa, temperatureC).densityKgPerM3
+      : low.vapour.densityKgPerM3;
   const condenserKg =
     circuit.condenserVolumeM3 *
-    (circuit.desuperheatingShare * singlePhaseState(refrigerant, condensingPressureKPa, high.vapour.temperatureC + MEAN_DESUPERHEAT_K).densityKgPerM3 +
-      twoPhaseShare * meanTwoPhaseDensity(outletQuality, 1, high.vapour.densityKgPerM3, high.liquid.densityKgPerM3, voidFraction) +
+    (circuit.desuperheatingShare *
+      singlePhaseState(refrigerant, condensingPressureKPa, high.vapour.temperatureC + MEAN_DESUPERHEAT_K)
+        .densityKgPerM3 +
+      twoPhaseShare *
+        meanTwoPhaseDensity(outletQuality, 1, high.vapour.densityKgPerM3, high.liquid.densityKgPerM3, voidFraction) +
       subcooledShare *
-        (subcoolingK > SATURATED_WITHIN_K ? singlePhaseState(refrigerant, condensingPressureKPa, condensingBubbleC - subcoolingK / 2).densityKgPerM3 : high.liquid.densityKgPerM3));
+        (subcoolingK > SATURATED_WITHIN_K
+          ? singlePhaseState(refrigerant, condensingPressureKPa, condensingBubbleC - subcoolingK / 2).densityKgPerM3
+          : high.liquid.densityKgPerM3));
   const lineVoid = voidFraction(outletQuality, high.vapour.densityKgPerM3, high.liquid.densityKgPerM3);
-  const liquidLineDensity = outletQuality > 0 ? lineVoid * high.vapour.densityKgPerM3 + (1 - lineVoid) * high.liquid.densityKgPerM3 : liquid.densityKgPerM3;
+  const liquidLineDensity =
+    outletQuality > 0
+      ? lineVoid * high.vapour.densityKgPerM3 + (1 - lineVoid) * high.liquid.densityKgPerM3
+      : liquid.densityKgPerM3;
   const liquidLineKg = tubeVolume(circuit.liquidLineInnerDiameterM, circuit.liquidLineLengthM) * liquidLineDensity;
   const evaporatorKg =
     circuit.evaporatorVolumeM3 *
-    ((1 - superheatedShare) * meanTwoPhaseDensity(inletQuality, 1, low.vapour.densityKgPerM3, low.liquid.densityKgPerM3, voidFraction) +
+    ((1 - superheatedShare) *
+      meanTwoPhaseDensity(inletQuality, 1, low.vapour.densityKgPerM3, low.liquid.densityKgPerM3, voidFraction) +
       superheatedShare * vapourAt(evaporatingDewC + superheatK / 2));
-  const suctionLineKg = tubeVolume(circuit.suctionLineInnerDiameterM, circuit.liquidLineLengthM + 1) * vapourAt(evaporatingDewC + superheatK);
+  const suctionLineKg =
+    tubeVolume(circuit.suctionLineInnerDiameterM, circuit.liquidLineLengthM + 1) *
+    vapourAt(evaporatingDewC + superheatK);
   const compressorKg = circuit.compressorAllowanceKg;
 
   return {
@@ -144,4 +175,3 @@ export function operatingPointAt(circuit: ChargeCircuit, conditions: InventoryCo
     },
   };
 }
-

@@ -20,7 +20,12 @@ const BISECTION_STEPS = 60;
  *   condenser past 60 % outlet quality, or a condenser over four-fifths full of liquid)
  * @throws PropertyRangeError when a point leaves the property tables
  */
-export function solveOperatingPoint(circuit: ChargeCircuit, conditions: InventoryConditions, chargeKg: number, design: DesignFlow): OperatingPoint | null {
+export function solveOperatingPoint(
+  circuit: ChargeCircuit,
+  conditions: InventoryConditions,
+  chargeKg: number,
+  design: DesignFlow,
+): OperatingPoint | null {
   let low = -MAX_OUTLET_QUALITY;
   const designTwoPhaseShare = 1 - circuit.desuperheatingShare - circuit.designSubcooledShare;
   let high = 1 - circuit.desuperheatingShare - Math.max(MIN_TWO_PHASE_SHARE, designTwoPhaseShare / 2);

@@ -100,8 +100,20 @@ export function createAuthLimiters(db: Database, overrides: Partial<AuthLimits> 
     signIn: [
       // Failures only: a depot's crew signs in from one address at the start of a shift.
       limiter(db, { name: "sign-in:client", limit: limits.signInPerIp, windowMs, key: "client", onlyFailures: true }),
-      limiter(db, { name: "sign-in:account-client", limit: limits.signInFailuresPerAccountAndClient, windowMs, key: "accountAndClient", onlyFailures: true }),
-      limiter(db, { name: "sign-in:account", limit: limits.signInFailuresPerAccount, windowMs: limits.accountWindowMs, key: "account", onlyFailures: true }),
+      limiter(db, {
+        name: "sign-in:account-client",
+        limit: limits.signInFailuresPerAccountAndClient,
+        windowMs,
+        key: "accountAndClient",
+        onlyFailures: true,
+      }),
+      limiter(db, {
+        name: "sign-in:account",
+        limit: limits.signInFailuresPerAccount,
+        windowMs: limits.accountWindowMs,
+        key: "account",
+        onlyFailures: true,
+      }),
     ],
     resetRequest: [
       limiter(db, { name: "reset:client", limit: limits.resetPerIp, windowMs, key: "client" }),

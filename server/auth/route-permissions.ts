@@ -133,7 +133,8 @@ function guard(access: Access): RequestHandler {
 export function parseRouteKey(key: string): { method: Method; path: string } {
   const [method, path] = key.split(" ") as [string, string];
   const lower = method.toLowerCase() as Method;
-  if (!METHODS.includes(lower) || !path.startsWith("/api/")) throw new Error(`Route key "${key}" is not "METHOD /api/…"`);
+  if (!METHODS.includes(lower) || !path.startsWith("/api/"))
+    throw new Error(`Route key "${key}" is not "METHOD /api/…"`);
   return { method: lower, path: path.slice("/api".length) };
 }
 

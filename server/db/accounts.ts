@@ -35,7 +35,13 @@ export async function createOrganisationWithOwner(
     const [organisation] = await tx.insert(organisations).values({ name: input.organisationName }).returning();
     const [owner] = await tx
       .insert(users)
-      .values({ organisationId: organisation.id, name: input.name, email: input.email, role: "owner", passwordHash: input.passwordHash })
+      .values({
+        organisationId: organisation.id,
+        name: input.name,
+        email: input.email,
+        role: "owner",
+        passwordHash: input.passwordHash,
+      })
       .returning();
     return owner;
   });

@@ -201,7 +201,12 @@ export async function insertCase(
  */
 export type CaseWrite = "done" | "stale" | "missing";
 
-async function caseWriteOutcome(db: Database, organisationId: string, id: string, written: boolean): Promise<CaseWrite> {
+async function caseWriteOutcome(
+  db: Database,
+  organisationId: string,
+  id: string,
+  written: boolean,
+): Promise<CaseWrite> {
   if (written) return "done";
   const [exists] = await db
     .select({ id: casebookCases.id })
@@ -229,17 +234,35 @@ export async function updateCase(
   return caseWriteOutcome(db, organisationId, id, rows.length > 0);
 }
 
-export async function publishCase(db: Database, organisationId: string, id: string, version: number): Promise<CaseWrite> {
+export async function publishCase(
+  db: Database,
+  organisationId: string,
+  id: string,
+  version: number,
+): Promise<CaseWrite> {
   const rows = await db
     .update(casebookCases)
-    .set({ status: "published", publishedAt: new Date(), version: sql`${casebookCases.version} + 1`, updatedAt: new Date() })
+    .set({
+      status: "published",
+      publishedAt: new Date(),
+      version: sql`${casebookCases.version} + 1`,
+      updatedAt: new Date(),
+    })
     .where(caseAt(organisationId, id, version))
     .returning({ id: casebookCases.id });
   return caseWriteOutcome(db, organisationId, id, rows.length > 0);
 }
 
-export async function deleteCase(db: Database, organisationId: string, id: string, version: number): Promise<CaseWrite> {
-  const rows = await db.delete(casebookCases).where(caseAt(organisationId, id, version)).returning({ id: casebookCases.id });
+export async function deleteCase(
+  db: Database,
+  organisationId: string,
+  id: string,
+  version: number,
+): Promise<CaseWrite> {
+  const rows = await db
+    .delete(casebookCases)
+    .where(caseAt(organisationId, id, version))
+    .returning({ id: casebookCases.id });
   return caseWriteOutcome(db, organisationId, id, rows.length > 0);
 }
 
@@ -260,7 +283,14 @@ export async function findReadingForCase(db: Database, organisationId: string, r
     .innerJoin(visits, eq(visits.id, readings.visitId))
     .innerJoin(equipment, eq(equipment.id, visits.equipmentId))
     // A voided reading is not evidence of anything, and a staged import row is not yet a record.
-    .where(and(eq(readings.organisationId, organisationId), eq(readings.id, readingId), isNull(readings.voidedAt), isNull(readings.pendingImportId)));
+    .where(
+      and(
+        eq(readings.organisationId, organisationId),
+        eq(readings.id, readingId),
+        isNull(readings.voidedAt),
+        isNull(readings.pendingImportId),
+      ),
+    );
   return row;
 }
 

@@ -4,7 +4,11 @@
  * reads or writes another organisation's rows.
  */
 import { and, desc, eq, inArray, isNull, notExists } from "drizzle-orm";
-import type { ChargeReferenceSource, CircuitChargeReferences, StoredChargeReference } from "@shared/schemas/charge-references.ts";
+import type {
+  ChargeReferenceSource,
+  CircuitChargeReferences,
+  StoredChargeReference,
+} from "@shared/schemas/charge-references.ts";
 import type { ChargeReference } from "@shared/schemas/diagnosis.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { Database } from "./client.ts";
@@ -27,7 +31,12 @@ function valuesOf(row: ReferenceRow): ChargeReference {
 }
 
 /** The standing reference point of one circuit, as the diagnosis takes it, or null. */
-export async function standingChargeReference(db: Database, organisationId: string, equipmentId: string, circuit: number): Promise<ChargeReference | null> {
+export async function standingChargeReference(
+  db: Database,
+  organisationId: string,
+  equipmentId: string,
+  circuit: number,
+): Promise<ChargeReference | null> {
   const [row] = await db
     .select()
     .from(chargeReferences)
@@ -47,7 +56,12 @@ export async function standingChargeReference(db: Database, organisationId: stri
  * it has none): the installed line set holds refrigerant the factory charge does not cover, so
  * the correct charge is the nameplate plus this.
  */
-export async function circuitLineAdjustmentKg(db: Database, organisationId: string, equipmentId: string, circuit: number): Promise<number> {
+export async function circuitLineAdjustmentKg(
+  db: Database,
+  organisationId: string,
+  equipmentId: string,
+  circuit: number,
+): Promise<number> {
   const [row] = await db
     .select({ lineAdjustmentKg: circuitCharges.lineAdjustmentKg })
     .from(circuitCharges)
@@ -71,7 +85,12 @@ export interface CircuitCharge {
   chargeReference: ChargeReference | null;
 }
 
-export async function circuitCharge(db: Database, organisationId: string, equipmentId: string, nameplate: CircuitNameplate): Promise<CircuitCharge> {
+export async function circuitCharge(
+  db: Database,
+  organisationId: string,
+  equipmentId: string,
+  nameplate: CircuitNameplate,
+): Promise<CircuitCharge> {
   const [lineAdjustmentKg, chargeReference] = await Promise.all([
     circuitLineAdjustmentKg(db, organisationId, equipmentId, nameplate.number),
     standingChargeReference(db, organisationId, equipmentId, nameplate.number),
@@ -84,7 +103,11 @@ export async function circuitCharge(db: Database, organisationId: string, equipm
  * yet (standing or cleared): the only ones a new reading can calibrate (calibrateAfterWeighIn).
  * One indexed query, so a save skips the calibration's reads when there is nothing to do.
  */
-export async function circuitsAwaitingWeighInReference(db: Database, organisationIds: readonly string[], visitIds: readonly string[]): Promise<{ visitId: string; circuit: number }[]> {
+export async function circuitsAwaitingWeighInReference(
+  db: Database,
+  organisationIds: readonly string[],
+  visitIds: readonly string[],
+): Promise<{ visitId: string; circuit: number }[]> {
   return db
     .selectDistinct({ visitId: circuitCharges.visitId, circuit: circuitCharges.circuit })
     .from(circuitCharges)
@@ -97,14 +120,25 @@ export async function circuitsAwaitingWeighInReference(db: Database, organisatio
           db
             .select({ id: chargeReferences.id })
             .from(chargeReferences)
-            .where(and(eq(chargeReferences.visitId, circuitCharges.visitId), eq(chargeReferences.circuit, circuitCharges.circuit), eq(chargeReferences.source, "weigh-in"))),
+            .where(
+              and(
+                eq(chargeReferences.visitId, circuitCharges.visitId),
+                eq(chargeReferences.circuit, circuitCharges.circuit),
+                eq(chargeReferences.source, "weigh-in"),
+              ),
+            ),
         ),
       ),
     );
 }
 
 /** Every reference point of a unit's circuits, the standing one first, then newest first; with the correct charge. */
-export async function listChargeReferences(db: Database, organisationId: string, equipmentId: string, circuits: CircuitNameplate[]): Promise<CircuitChargeReferences[]> {
+export async function listChargeReferences(
+  db: Database,
+  organisationId: string,
+  equipmentId: string,
+  circuits: CircuitNameplate[],
+): Promise<CircuitChargeReferences[]> {
   const rows = await db
     .select({ reference: chargeReferences, visitStartedAt: visits.startedAt })
     .from(chargeReferences)
@@ -115,22 +149,20 @@ export async function listChargeReferences(db: Database, organisationId: string,
     db,
     rows.flatMap(({ reference }) => [reference.setBy, reference.voidedBy]),
   );
-  const stored = rows.map(
-    ({ reference, visitStartedAt }): StoredChargeReference => ({
-      id: reference.id,
-      circuit: reference.circuit,
-      values: valuesOf(reference),
-      source: reference.source,
-      setAt: reference.setAt.toISOString(),
-      setBy: person(people, reference.setBy),
-      visitId: reference.visitId,
-      visitStartedAt: visitStartedAt?.toISOString() ?? null,
-      readingId: reference.readingId,
-      readingCount: reference.readingCount,
-      note: reference.note,
-      cleared: voidInfo(reference, people),
-    }),
-  );
+  const stored = rows.map(({ reference, visitStartedAt }): StoredChargeReference => ({
+    id: reference.id,
+    circuit: reference.circuit,
+    values: valuesOf(reference),
+    source: reference.source,
+    setAt: reference.setAt.toISOString(),
+    setBy: person(people, reference.setBy),
+    visitId: reference.visitId,
+    visitStartedAt: visitStartedAt?.toISOString() ?? null,
+    readingId: reference.readingId,
+    readingCount: reference.readingCount,
+    note: reference.note,
+    cleared: voidInfo(reference, people),
+  }));
   return Promise.all(
     circuits.map(async (nameplate) => {
       const lineAdjustmentKg = await circuitLineAdjustmentKg(db, organisationId, equipmentId, nameplate.number);
@@ -165,10 +197,23 @@ export interface ChargeReferenceInsert {
  * reason naming what replaced it, so the history reads in order. Run inside a transaction.
  * @returns the new row's id
  */
-export async function setChargeReference(db: Database, organisationId: string, values: ChargeReferenceInsert): Promise<string> {
-  const reason = values.source === "weigh-in" ? "Replaced by the reference point settled after a weigh-in" : "Replaced by a reference point set by a senior";
+export async function setChargeReference(
+  db: Database,
+  organisationId: string,
+  values: ChargeReferenceInsert,
+): Promise<string> {
+  const reason =
+    values.source === "weigh-in"
+      ? "Replaced by the reference point settled after a weigh-in"
+      : "Replaced by a reference point set by a senior";
   const at = values.at ?? new Date();
-  await clearChargeReference(db, organisationId, { equipmentId: values.equipmentId, circuit: values.circuit, reason, clearedBy: values.setBy, at });
+  await clearChargeReference(db, organisationId, {
+    equipmentId: values.equipmentId,
+    circuit: values.circuit,
+    reason,
+    clearedBy: values.setBy,
+    at,
+  });
   const [row] = await db
     .insert(chargeReferences)
     .values({
@@ -213,7 +258,12 @@ export async function clearChargeReference(
  * Has this visit already given the circuit a reference point from its weigh-in (standing or
  * since cleared)? A senior's clearing must not be undone by the next reading stored.
  */
-export async function hasWeighInReferenceFromVisit(db: Database, organisationId: string, visitId: string, circuit: number): Promise<boolean> {
+export async function hasWeighInReferenceFromVisit(
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  circuit: number,
+): Promise<boolean> {
   const [row] = await db
     .select({ id: chargeReferences.id })
     .from(chargeReferences)
@@ -232,9 +282,22 @@ export async function hasWeighInReferenceFromVisit(db: Database, organisationId:
 /** A standing reading of one of the unit's circuits, by id (any visit of the unit), or undefined. */
 export async function findUnitReading(db: Database, organisationId: string, equipmentId: string, readingId: string) {
   const [row] = await db
-    .select({ id: readings.id, visitId: readings.visitId, circuit: readings.circuit, input: readings.input, result: readings.result })
+    .select({
+      id: readings.id,
+      visitId: readings.visitId,
+      circuit: readings.circuit,
+      input: readings.input,
+      result: readings.result,
+    })
     .from(readings)
     .innerJoin(visits, eq(visits.id, readings.visitId))
-    .where(and(eq(readings.organisationId, organisationId), eq(visits.equipmentId, equipmentId), eq(readings.id, readingId), countsInResults));
+    .where(
+      and(
+        eq(readings.organisationId, organisationId),
+        eq(visits.equipmentId, equipmentId),
+        eq(readings.id, readingId),
+        countsInResults,
+      ),
+    );
   return row;
 }

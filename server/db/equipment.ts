@@ -7,7 +7,16 @@ import type { z } from "zod";
 import type { CustomerInputSchema, EquipmentValues, SiteInputSchema } from "@shared/schemas/equipment.ts";
 import { defaultDirection, type EquipmentListQuery, type EquipmentSort } from "@shared/schemas/list-pages.ts";
 import type { Database } from "./client.ts";
-import { afterCursor, containsTerm, cursorColumns, decodeCursor, keysetOrder, matchesSearchSql, pageOf, type SortKey } from "./keyset.ts";
+import {
+  afterCursor,
+  containsTerm,
+  cursorColumns,
+  decodeCursor,
+  keysetOrder,
+  matchesSearchSql,
+  pageOf,
+  type SortKey,
+} from "./keyset.ts";
 import { customers, equipment, sites } from "./schema.ts";
 
 type CustomerValues = z.output<typeof CustomerInputSchema>;
@@ -22,11 +31,18 @@ const customerColumns = {
 };
 
 export function listCustomers(db: Database, organisationId: string) {
-  return db.select(customerColumns).from(customers).where(eq(customers.organisationId, organisationId)).orderBy(asc(customers.name));
+  return db
+    .select(customerColumns)
+    .from(customers)
+    .where(eq(customers.organisationId, organisationId))
+    .orderBy(asc(customers.name));
 }
 
 export async function createCustomer(db: Database, organisationId: string, values: CustomerValues) {
-  const [row] = await db.insert(customers).values({ ...values, organisationId }).returning(customerColumns);
+  const [row] = await db
+    .insert(customers)
+    .values({ ...values, organisationId })
+    .returning(customerColumns);
   return row;
 }
 
@@ -64,7 +80,10 @@ export async function createSite(db: Database, organisationId: string, values: S
     .from(customers)
     .where(and(eq(customers.organisationId, organisationId), eq(customers.id, values.customerId)));
   if (!customer) return undefined;
-  const [row] = await db.insert(sites).values({ ...values, organisationId }).returning({ id: sites.id });
+  const [row] = await db
+    .insert(sites)
+    .values({ ...values, organisationId })
+    .returning({ id: sites.id });
   return getSite(db, organisationId, row.id);
 }
 
@@ -138,7 +157,10 @@ export async function listEquipmentPage(db: Database, organisationId: string, qu
   if (query.kind) conditions.push(eq(equipment.kind, query.kind));
   // Name, kind, site, customer, refrigerant, location, maker, model and serial (equipment.searchText).
   conditions.push(matchesSearchSql(query.q, (term) => containsTerm(equipment.searchText, term)));
-  if (query.cursor) conditions.push(afterCursor(keys, equipment.id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
+  if (query.cursor)
+    conditions.push(
+      afterCursor(keys, equipment.id, direction, decodeCursor(query.cursor, query.sort, direction, keys)),
+    );
   const rows = await db
     .select({ ...equipmentColumns, ...cursorColumns(keys) })
     .from(equipment)
@@ -152,7 +174,9 @@ export async function listEquipmentPage(db: Database, organisationId: string, qu
 }
 
 export async function getEquipment(db: Database, organisationId: string, equipmentId: string) {
-  const [row] = await selectEquipment(db).where(and(eq(equipment.organisationId, organisationId), eq(equipment.id, equipmentId)));
+  const [row] = await selectEquipment(db).where(
+    and(eq(equipment.organisationId, organisationId), eq(equipment.id, equipmentId)),
+  );
   return row;
 }
 
@@ -160,6 +184,9 @@ export async function getEquipment(db: Database, organisationId: string, equipme
 export async function createEquipment(db: Database, organisationId: string, values: EquipmentValues) {
   const site = await getSite(db, organisationId, values.siteId);
   if (!site) return undefined;
-  const [row] = await db.insert(equipment).values({ ...values, organisationId }).returning({ id: equipment.id });
+  const [row] = await db
+    .insert(equipment)
+    .values({ ...values, organisationId })
+    .returning({ id: equipment.id });
   return getEquipment(db, organisationId, row.id);
 }

@@ -13,8 +13,13 @@ interface DatabaseError {
  * end here: the database's unique index is the final guard.
  */
 export function uniqueViolation(error: unknown): { constraint: string | undefined } | undefined {
-  for (let current = error as DatabaseError | undefined, depth = 0; current && depth < 5; current = current.cause as DatabaseError | undefined, depth++) {
-    if (current.code === UNIQUE_VIOLATION) return { constraint: typeof current.constraint === "string" ? current.constraint : undefined };
+  for (
+    let current = error as DatabaseError | undefined, depth = 0;
+    current && depth < 5;
+    current = current.cause as DatabaseError | undefined, depth++
+  ) {
+    if (current.code === UNIQUE_VIOLATION)
+      return { constraint: typeof current.constraint === "string" ? current.constraint : undefined };
   }
   return undefined;
 }

@@ -20,7 +20,11 @@ function toInvitation(row: InvitationRow, invitedByName: string | null): Invitat
 const pending = (now: Date) => and(isNull(invitations.acceptedAt), gt(invitations.expiresAt, now));
 
 /** Pending (not accepted, not expired) invitations of one organisation, newest first. */
-export async function listPendingInvitations(db: Database, organisationId: string, now = new Date()): Promise<Invitation[]> {
+export async function listPendingInvitations(
+  db: Database,
+  organisationId: string,
+  now = new Date(),
+): Promise<Invitation[]> {
   const rows = await db
     .select({ invitation: invitations, invitedByName: users.name })
     .from(invitations)
@@ -36,7 +40,15 @@ export async function listPendingInvitations(db: Database, organisationId: strin
  */
 export async function createInvitation(
   db: Database,
-  input: { organisationId: string; email: string; role: Role; tokenHash: string; invitedBy: string; invitedByName: string; expiresAt: Date },
+  input: {
+    organisationId: string;
+    email: string;
+    role: Role;
+    tokenHash: string;
+    invitedBy: string;
+    invitedByName: string;
+    expiresAt: Date;
+  },
 ): Promise<Invitation> {
   return db.transaction(async (tx) => {
     await tx
@@ -67,7 +79,13 @@ export async function createInvitation(
 export async function revokeInvitation(db: Database, organisationId: string, invitationId: string): Promise<boolean> {
   const deleted = await db
     .delete(invitations)
-    .where(and(eq(invitations.organisationId, organisationId), eq(invitations.id, invitationId), isNull(invitations.acceptedAt)))
+    .where(
+      and(
+        eq(invitations.organisationId, organisationId),
+        eq(invitations.id, invitationId),
+        isNull(invitations.acceptedAt),
+      ),
+    )
     .returning({ id: invitations.id });
   return deleted.length > 0;
 }

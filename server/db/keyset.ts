@@ -52,7 +52,9 @@ export function decodeCursor(raw: string, sort: string, direction: SortDirection
   if (typeof parsed !== "object" || parsed === null) throw refuse();
   const { s, d, v, id } = parsed as Record<string, unknown>;
   if (s !== sort || d !== direction) {
-    throw new HttpError(400, "That cursor belongs to another sort order; start from the first page", { cursor: "The sort order changed" });
+    throw new HttpError(400, "That cursor belongs to another sort order; start from the first page", {
+      cursor: "The sort order changed",
+    });
   }
   if (typeof id !== "string" || !UUID.test(id) || !Array.isArray(v) || v.length !== keys.length) throw refuse();
   const values = v.map((value, index) => {
@@ -63,18 +65,33 @@ export function decodeCursor(raw: string, sort: string, direction: SortDirection
 }
 
 const typed = (value: string, type: KeyType) =>
-  type === "timestamptz" ? sql`cast(${value} as timestamptz)` : type === "numeric" ? sql`cast(${value} as numeric)` : sql`${value}`;
+  type === "timestamptz"
+    ? sql`cast(${value} as timestamptz)`
+    : type === "numeric"
+      ? sql`cast(${value} as numeric)`
+      : sql`${value}`;
 
 /**
  * Rows strictly after the cursor in this order. The first key's bound is also written on its
  * own, so the planner can start an index scan there instead of filtering every row.
  */
-export function afterCursor(keys: readonly SortKey[], idColumn: AnyColumn, direction: SortDirection, cursor: Cursor): SQL {
+export function afterCursor(
+  keys: readonly SortKey[],
+  idColumn: AnyColumn,
+  direction: SortDirection,
+  cursor: Cursor,
+): SQL {
   const beyond = direction === "asc" ? sql.raw(">") : sql.raw("<");
   const reaches = direction === "asc" ? sql.raw(">=") : sql.raw("<=");
   const left = sql.join([...keys.map((key) => sql`${key.expr}`), sql`${idColumn}`], sql`, `);
-  const right = sql.join([...keys.map((key, index) => typed(cursor.values[index], key.type)), sql`cast(${cursor.id} as uuid)`], sql`, `);
-  return and(sql`${keys[0].expr} ${reaches} ${typed(cursor.values[0], keys[0].type)}`, sql`(${left}) ${beyond} (${right})`)!;
+  const right = sql.join(
+    [...keys.map((key, index) => typed(cursor.values[index], key.type)), sql`cast(${cursor.id} as uuid)`],
+    sql`, `,
+  );
+  return and(
+    sql`${keys[0].expr} ${reaches} ${typed(cursor.values[0], keys[0].type)}`,
+    sql`(${left}) ${beyond} (${right})`,
+  )!;
 }
 
 export function keysetOrder(keys: readonly SortKey[], idColumn: AnyColumn, direction: SortDirection): SQL[] {
@@ -84,19 +101,32 @@ export function keysetOrder(keys: readonly SortKey[], idColumn: AnyColumn, direc
 
 /** The keys as text in the select list, to build the next cursor from the page's last row. */
 export function cursorColumns(keys: readonly SortKey[]): Record<string, SQL.Aliased<string>> {
-  return Object.fromEntries(keys.map((key, index) => [`cursorKey${index}`, sql<string>`(${key.expr})::text`.as(`cursor_key_${index}`)]));
+  return Object.fromEntries(
+    keys.map((key, index) => [`cursorKey${index}`, sql<string>`(${key.expr})::text`.as(`cursor_key_${index}`)]),
+  );
 }
 
 /**
  * Takes `limit + 1` rows as read: the extra one only says that another page exists.
  * @returns the page's rows and the cursor after its last row (null on the last page).
  */
-export function pageOf<Row extends { id: string }>(rows: Row[], limit: number, keys: readonly SortKey[], sort: string, direction: SortDirection) {
+export function pageOf<Row extends { id: string }>(
+  rows: Row[],
+  limit: number,
+  keys: readonly SortKey[],
+  sort: string,
+  direction: SortDirection,
+) {
   const page = rows.slice(0, limit) as (Row & Record<string, unknown>)[];
   const last = page.at(-1);
   const nextCursor =
     rows.length > limit && last
-      ? encodeCursor(sort, direction, keys.map((_key, index) => String(last[`cursorKey${index}`])), last.id)
+      ? encodeCursor(
+          sort,
+          direction,
+          keys.map((_key, index) => String(last[`cursorKey${index}`])),
+          last.id,
+        )
       : null;
   // The keys were read for the cursor only; the rows go out without them.
   const withoutKeys = page.map((row) => {
@@ -126,4 +156,5 @@ export function matchesSearchSql(query: string | undefined, termMatches: (term: 
  * leading "r" too; so the rule "as typed, or without dashes, or without the r" is the same as
  * "its `withoutR` is in the compact text": one LIKE, which a trigram index answers.
  */
-export const containsTerm = (searchColumn: AnyColumn | SQL, term: SearchTerm): SQL => sql`${searchColumn} like ${containsPattern(term.withoutR)}`;
+export const containsTerm = (searchColumn: AnyColumn | SQL, term: SearchTerm): SQL =>
+  sql`${searchColumn} like ${containsPattern(term.withoutR)}`;

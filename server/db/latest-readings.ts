@@ -13,7 +13,11 @@ type TrendFigures = Pick<DiagnosisResult, "chargeState" | "chargeDeviation" | "s
 import { countsInResults } from "./visits.ts";
 
 /** The visit of the unit's most recent reading that counts, or undefined when it has none. */
-export async function latestReadingVisit(db: Database, organisationId: string, equipmentId: string): Promise<string | undefined> {
+export async function latestReadingVisit(
+  db: Database,
+  organisationId: string,
+  equipmentId: string,
+): Promise<string | undefined> {
   const [latest] = await db
     .select({ visitId: readings.visitId })
     .from(readings)
@@ -35,15 +39,33 @@ export async function latestReadingVisit(db: Database, organisationId: string, e
  */
 export async function latestCircuitReadings(db: Database, visitId: string, circuit: number, limit: number) {
   const rows = await db
-    .select({ id: readings.id, takenAt: readings.takenAt, createdAt: readings.createdAt, runMinutes: readings.runMinutes, superheatK: readings.superheatK, subcoolingK: readings.subcoolingK, chargeState: readings.chargeState })
+    .select({
+      id: readings.id,
+      takenAt: readings.takenAt,
+      createdAt: readings.createdAt,
+      runMinutes: readings.runMinutes,
+      superheatK: readings.superheatK,
+      subcoolingK: readings.subcoolingK,
+      chargeState: readings.chargeState,
+    })
     .from(readings)
     .where(and(eq(readings.visitId, visitId), eq(readings.circuit, circuit), countsInResults))
     .orderBy(desc(readings.takenAt), desc(readings.createdAt))
     .limit(limit);
   return rows.reverse().map((row) => {
     // What the rule reads of a stored result; chargeDeviation only marks it as the current engine's.
-    const result: TrendFigures = { chargeState: row.chargeState!, chargeDeviation: null, superheatK: row.superheatK, subcoolingK: row.subcoolingK };
-    return { id: row.id, takenAt: row.takenAt, input: row.runMinutes === null ? {} : { runMinutes: row.runMinutes }, result };
+    const result: TrendFigures = {
+      chargeState: row.chargeState!,
+      chargeDeviation: null,
+      superheatK: row.superheatK,
+      subcoolingK: row.subcoolingK,
+    };
+    return {
+      id: row.id,
+      takenAt: row.takenAt,
+      input: row.runMinutes === null ? {} : { runMinutes: row.runMinutes },
+      result,
+    };
   });
 }
 
@@ -60,12 +82,25 @@ export async function readingResult(db: Database, readingId: string): Promise<Di
  * grow with the readings after it; the report sets it beside what the scale found on the
  * circuit's first recovery.
  */
-export async function chargeEstimateBefore(db: Database, visitId: string, circuit: number, before: Date): Promise<ChargeDeviation | null> {
+export async function chargeEstimateBefore(
+  db: Database,
+  visitId: string,
+  circuit: number,
+  before: Date,
+): Promise<ChargeDeviation | null> {
   const deviation = sql<ChargeDeviation | null>`${readings.result} -> 'chargeDeviation'`;
   const [row] = await db
     .select({ deviation })
     .from(readings)
-    .where(and(eq(readings.visitId, visitId), eq(readings.circuit, circuit), countsInResults, lt(readings.takenAt, before), sql`jsonb_typeof(${deviation}) = 'object'`))
+    .where(
+      and(
+        eq(readings.visitId, visitId),
+        eq(readings.circuit, circuit),
+        countsInResults,
+        lt(readings.takenAt, before),
+        sql`jsonb_typeof(${deviation}) = 'object'`,
+      ),
+    )
     .orderBy(desc(readings.takenAt), desc(readings.createdAt))
     .limit(1);
   return row?.deviation ?? null;

@@ -47,12 +47,26 @@ async function ownerCount(db: Pick<Database, "select">, organisationId: string):
  * Changes a member's role. Refuses (LastOwnerError) to demote the last owner, inside one
  * transaction so two owners demoting each other cannot both succeed.
  */
-export async function changeMemberRole(db: Database, organisationId: string, memberId: string, role: Role): Promise<Member | undefined> {
+export async function changeMemberRole(
+  db: Database,
+  organisationId: string,
+  memberId: string,
+  role: Role,
+): Promise<Member | undefined> {
   const member = await db.transaction(async (tx) => {
-    const [row] = await tx.select().from(users).where(and(activeIn(organisationId), eq(users.id, memberId))).for("update");
+    const [row] = await tx
+      .select()
+      .from(users)
+      .where(and(activeIn(organisationId), eq(users.id, memberId)))
+      .for("update");
     if (!row) return undefined;
-    if (row.role === "owner" && role !== "owner" && (await ownerCount(tx, organisationId)) <= 1) throw new LastOwnerError();
-    const [updated] = await tx.update(users).set({ role, updatedAt: new Date() }).where(eq(users.id, memberId)).returning();
+    if (row.role === "owner" && role !== "owner" && (await ownerCount(tx, organisationId)) <= 1)
+      throw new LastOwnerError();
+    const [updated] = await tx
+      .update(users)
+      .set({ role, updatedAt: new Date() })
+      .where(eq(users.id, memberId))
+      .returning();
     return toMember(updated);
   });
   forgetUserSessions(memberId); // the new role applies to their next request
@@ -66,7 +80,11 @@ export async function changeMemberRole(db: Database, organisationId: string, mem
  */
 export async function removeMember(db: Database, organisationId: string, memberId: string): Promise<boolean> {
   const removed = await db.transaction(async (tx) => {
-    const [row] = await tx.select().from(users).where(and(activeIn(organisationId), eq(users.id, memberId))).for("update");
+    const [row] = await tx
+      .select()
+      .from(users)
+      .where(and(activeIn(organisationId), eq(users.id, memberId)))
+      .for("update");
     if (!row) return false;
     if (row.role === "owner" && (await ownerCount(tx, organisationId)) <= 1) throw new LastOwnerError();
     await tx.update(users).set({ deactivatedAt: new Date(), updatedAt: new Date() }).where(eq(users.id, memberId));

@@ -13,12 +13,21 @@ export async function recordOutboundMail(
 }
 
 /** The organisation's latest messages, newest first. */
-export async function listOutboundMail(db: Database, organisationId: string): Promise<Omit<OutboxMessage, "linksHidden">[]> {
+export async function listOutboundMail(
+  db: Database,
+  organisationId: string,
+): Promise<Omit<OutboxMessage, "linksHidden">[]> {
   const rows = await db
     .select()
     .from(outboundMail)
     .where(eq(outboundMail.organisationId, organisationId))
     .orderBy(desc(outboundMail.createdAt))
     .limit(OUTBOX_PAGE_SIZE);
-  return rows.map((row) => ({ id: row.id, to: row.to, subject: row.subject, text: row.text, createdAt: row.createdAt.toISOString() }));
+  return rows.map((row) => ({
+    id: row.id,
+    to: row.to,
+    subject: row.subject,
+    text: row.text,
+    createdAt: row.createdAt.toISOString(),
+  }));
 }

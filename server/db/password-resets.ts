@@ -4,7 +4,11 @@ import { passwordResets, sessions, users } from "./schema.ts";
 import { forgetUserSessions } from "../auth/session-cache.ts";
 
 /** Stores a new reset token for the user; any earlier unused one stops working. */
-export async function createPasswordReset(db: Database, input: { userId: string; tokenHash: string; expiresAt: Date }, now = new Date()) {
+export async function createPasswordReset(
+  db: Database,
+  input: { userId: string; tokenHash: string; expiresAt: Date },
+  now = new Date(),
+) {
   await db.transaction(async (tx) => {
     await tx
       .update(passwordResets)
@@ -19,12 +23,22 @@ export async function createPasswordReset(db: Database, input: { userId: string;
  * session of the user (whoever knew the old password is signed out), in one transaction.
  * @returns false when the token is unknown, used or expired.
  */
-export async function consumePasswordReset(db: Database, input: { tokenHash: string; passwordHash: string }, now = new Date()) {
+export async function consumePasswordReset(
+  db: Database,
+  input: { tokenHash: string; passwordHash: string },
+  now = new Date(),
+) {
   const consumed = await db.transaction(async (tx) => {
     const [reset] = await tx
       .update(passwordResets)
       .set({ usedAt: now })
-      .where(and(eq(passwordResets.tokenHash, input.tokenHash), isNull(passwordResets.usedAt), gt(passwordResets.expiresAt, now)))
+      .where(
+        and(
+          eq(passwordResets.tokenHash, input.tokenHash),
+          isNull(passwordResets.usedAt),
+          gt(passwordResets.expiresAt, now),
+        ),
+      )
       .returning();
     if (!reset) return false;
     const [user] = await tx

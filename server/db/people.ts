@@ -18,6 +18,11 @@ export async function peopleById(db: Database, ids: (string | null)[]): Promise<
 export const person = (people: People, id: string | null): PersonRef | null => (id ? (people.get(id) ?? null) : null);
 
 /** A voidable row's void (who, when, why), or null while it stands. */
-export function voidInfo(row: { voidedAt: Date | null; voidedBy: string | null; voidReason: string | null }, people: People): VoidInfo {
-  return row.voidedAt ? { at: row.voidedAt.toISOString(), by: person(people, row.voidedBy), reason: row.voidReason ?? "" } : null;
+export function voidInfo(
+  row: { voidedAt: Date | null; voidedBy: string | null; voidReason: string | null },
+  people: People,
+): VoidInfo {
+  return row.voidedAt
+    ? { at: row.voidedAt.toISOString(), by: person(people, row.voidedBy), reason: row.voidReason ?? "" }
+    : null;
 }

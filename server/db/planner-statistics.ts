@@ -12,7 +12,9 @@ import { PgTable } from "drizzle-orm/pg-core";
 import type { Database } from "./client.ts";
 import * as schema from "./schema.ts";
 
-const ALL_TABLES: readonly PgTable[] = Object.values<unknown>(schema).filter((value): value is PgTable => is(value, PgTable));
+const ALL_TABLES: readonly PgTable[] = Object.values<unknown>(schema).filter((value): value is PgTable =>
+  is(value, PgTable),
+);
 
 const JSON_TYPES = new Set(["json", "jsonb"]);
 

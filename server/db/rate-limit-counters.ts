@@ -52,6 +52,9 @@ export async function deleteCounter(db: Database, key: string): Promise<void> {
 
 /** Deletes counters whose window has ended; they count nothing any more. */
 export async function deleteEndedCounters(db: Database): Promise<number> {
-  const removed = await db.delete(rateLimitCounters).where(lt(rateLimitCounters.resetAt, sql`now()`)).returning({ key: rateLimitCounters.key });
+  const removed = await db
+    .delete(rateLimitCounters)
+    .where(lt(rateLimitCounters.resetAt, sql`now()`))
+    .returning({ key: rateLimitCounters.key });
   return removed.length;
 }

@@ -7,7 +7,15 @@
  */
 import { and, asc, desc, eq, gte, inArray, isNull, lt, sql, type SQL } from "drizzle-orm";
 import type { SortDirection } from "@shared/schemas/list-pages.ts";
-import { MOVEMENT_CYLINDER_RULES, MOVEMENT_DIRECTION, MOVEMENT_KINDS, type CylinderValues, type Movement, type MovementKind, type RunLogChargeCheck } from "@shared/schemas/register.ts";
+import {
+  MOVEMENT_CYLINDER_RULES,
+  MOVEMENT_DIRECTION,
+  MOVEMENT_KINDS,
+  type CylinderValues,
+  type Movement,
+  type MovementKind,
+  type RunLogChargeCheck,
+} from "@shared/schemas/register.ts";
 import { CHARGE_ADJUSTMENT_KINDS, type ChargeAdjustmentKind } from "@shared/schemas/visits.ts";
 import { alias, type PgSelect } from "drizzle-orm/pg-core";
 import type { Database } from "./client.ts";
@@ -25,10 +33,22 @@ async function contentsById(db: Database, rows: (typeof cylinders.$inferSelect)[
   const result = new Map(rows.map((row) => [row.id, row.initialContentsKg]));
   if (rows.length === 0) return result;
   const sums = await db
-    .select({ cylinderId: refrigerantMovements.cylinderId, kind: refrigerantMovements.kind, kg: sql<number>`sum(${refrigerantMovements.kg})`.mapWith(Number) })
+    .select({
+      cylinderId: refrigerantMovements.cylinderId,
+      kind: refrigerantMovements.kind,
+      kg: sql<number>`sum(${refrigerantMovements.kg})`.mapWith(Number),
+    })
     .from(refrigerantMovements)
     // A voided movement never moved anything: it counts in no cylinder's contents.
-    .where(and(inArray(refrigerantMovements.cylinderId, rows.map((row) => row.id)), isNull(refrigerantMovements.voidedAt)))
+    .where(
+      and(
+        inArray(
+          refrigerantMovements.cylinderId,
+          rows.map((row) => row.id),
+        ),
+        isNull(refrigerantMovements.voidedAt),
+      ),
+    )
     .groupBy(refrigerantMovements.cylinderId, refrigerantMovements.kind);
   for (const sum of sums) {
     if (!sum.cylinderId) continue;
@@ -40,29 +60,51 @@ async function contentsById(db: Database, rows: (typeof cylinders.$inferSelect)[
   return result;
 }
 
-export async function listCylinders(db: Database, organisationId: string, filter: { refrigerant?: string } = {}): Promise<CylinderRow[]> {
+export async function listCylinders(
+  db: Database,
+  organisationId: string,
+  filter: { refrigerant?: string } = {},
+): Promise<CylinderRow[]> {
   const conditions: SQL[] = [eq(cylinders.organisationId, organisationId)];
   if (filter.refrigerant) conditions.push(eq(cylinders.refrigerant, filter.refrigerant));
-  const rows = await db.select().from(cylinders).where(and(...conditions)).orderBy(asc(cylinders.refrigerant), asc(cylinders.label));
+  const rows = await db
+    .select()
+    .from(cylinders)
+    .where(and(...conditions))
+    .orderBy(asc(cylinders.refrigerant), asc(cylinders.label));
   const contents = await contentsById(db, rows);
   return rows.map((row) => ({ ...row, contentsKg: contents.get(row.id) ?? 0 }));
 }
 
-export async function getCylinder(db: Database, organisationId: string, cylinderId: string): Promise<CylinderRow | undefined> {
-  const [row] = await db.select().from(cylinders).where(and(eq(cylinders.organisationId, organisationId), eq(cylinders.id, cylinderId)));
+export async function getCylinder(
+  db: Database,
+  organisationId: string,
+  cylinderId: string,
+): Promise<CylinderRow | undefined> {
+  const [row] = await db
+    .select()
+    .from(cylinders)
+    .where(and(eq(cylinders.organisationId, organisationId), eq(cylinders.id, cylinderId)));
   if (!row) return undefined;
   const contents = await contentsById(db, [row]);
   return { ...row, contentsKg: contents.get(row.id) ?? 0 };
 }
 
 /** @returns the new cylinder, or undefined when the organisation already has one with that label. */
-export async function createCylinder(db: Database, organisationId: string, values: CylinderValues): Promise<CylinderRow | undefined> {
+export async function createCylinder(
+  db: Database,
+  organisationId: string,
+  values: CylinderValues,
+): Promise<CylinderRow | undefined> {
   const [existing] = await db
     .select({ id: cylinders.id })
     .from(cylinders)
     .where(and(eq(cylinders.organisationId, organisationId), sql`lower(${cylinders.label}) = lower(${values.label})`));
   if (existing) return undefined;
-  const [row] = await db.insert(cylinders).values({ ...values, organisationId }).returning();
+  const [row] = await db
+    .insert(cylinders)
+    .values({ ...values, organisationId })
+    .returning();
   return { ...row, contentsKg: row.initialContentsKg };
 }
 
@@ -97,7 +139,13 @@ function selectMovements(db: Database, conditions: SQL[]) {
 
 /** The register's page: the movements with their sort keys as text, for the next cursor. */
 function selectRegisterPage(db: Database, conditions: SQL[]) {
-  return withMovementJoins(db.select({ ...movementColumns, ...cursorColumns(REGISTER_KEYS) }).from(refrigerantMovements).$dynamic(), conditions);
+  return withMovementJoins(
+    db
+      .select({ ...movementColumns, ...cursorColumns(REGISTER_KEYS) })
+      .from(refrigerantMovements)
+      .$dynamic(),
+    conditions,
+  );
 }
 
 function withMovementJoins<Query extends PgSelect>(query: Query, conditions: SQL[]) {
@@ -125,7 +173,11 @@ function toMovement(row: Awaited<ReturnType<typeof selectMovements>>[number]): M
     at: row.at.toISOString(),
     note: row.note,
     voided: row.voidedAt
-      ? { at: row.voidedAt.toISOString(), by: row.voidedBy && row.voidedByName ? { id: row.voidedBy, name: row.voidedByName } : null, reason: row.voidReason ?? "" }
+      ? {
+          at: row.voidedAt.toISOString(),
+          by: row.voidedBy && row.voidedByName ? { id: row.voidedBy, name: row.voidedByName } : null,
+          reason: row.voidReason ?? "",
+        }
       : null,
     siteName: row.siteName,
     location: row.equipmentLocation,
@@ -133,26 +185,34 @@ function toMovement(row: Awaited<ReturnType<typeof selectMovements>>[number]): M
 }
 
 export async function visitMovements(db: Database, organisationId: string, visitId: string): Promise<MovementRow[]> {
-  const rows = await selectMovements(db, [eq(refrigerantMovements.organisationId, organisationId), eq(refrigerantMovements.visitId, visitId)]).orderBy(
-    asc(refrigerantMovements.at),
-    asc(refrigerantMovements.createdAt),
-  );
+  const rows = await selectMovements(db, [
+    eq(refrigerantMovements.organisationId, organisationId),
+    eq(refrigerantMovements.visitId, visitId),
+  ]).orderBy(asc(refrigerantMovements.at), asc(refrigerantMovements.createdAt));
   return rows.map(toMovement);
 }
 
-export async function equipmentMovements(db: Database, organisationId: string, equipmentId: string): Promise<MovementRow[]> {
-  const rows = await selectMovements(db, [eq(refrigerantMovements.organisationId, organisationId), eq(refrigerantMovements.equipmentId, equipmentId)]).orderBy(
-    asc(refrigerantMovements.at),
-    asc(refrigerantMovements.createdAt),
-  );
+export async function equipmentMovements(
+  db: Database,
+  organisationId: string,
+  equipmentId: string,
+): Promise<MovementRow[]> {
+  const rows = await selectMovements(db, [
+    eq(refrigerantMovements.organisationId, organisationId),
+    eq(refrigerantMovements.equipmentId, equipmentId),
+  ]).orderBy(asc(refrigerantMovements.at), asc(refrigerantMovements.createdAt));
   return rows.map(toMovement);
 }
 
-export async function cylinderMovements(db: Database, organisationId: string, cylinderId: string): Promise<MovementRow[]> {
-  const rows = await selectMovements(db, [eq(refrigerantMovements.organisationId, organisationId), eq(refrigerantMovements.cylinderId, cylinderId)]).orderBy(
-    desc(refrigerantMovements.at),
-    desc(refrigerantMovements.createdAt),
-  );
+export async function cylinderMovements(
+  db: Database,
+  organisationId: string,
+  cylinderId: string,
+): Promise<MovementRow[]> {
+  const rows = await selectMovements(db, [
+    eq(refrigerantMovements.organisationId, organisationId),
+    eq(refrigerantMovements.cylinderId, cylinderId),
+  ]).orderBy(desc(refrigerantMovements.at), desc(refrigerantMovements.createdAt));
   return rows.map(toMovement);
 }
 
@@ -169,7 +229,10 @@ export interface RegisterFilter {
  * totals and its export hold what really moved.
  */
 function registerConditions(organisationId: string, filter: RegisterFilter): SQL[] {
-  const conditions: SQL[] = [eq(refrigerantMovements.organisationId, organisationId), isNull(refrigerantMovements.voidedAt)];
+  const conditions: SQL[] = [
+    eq(refrigerantMovements.organisationId, organisationId),
+    isNull(refrigerantMovements.voidedAt),
+  ];
   if (filter.fromMs !== undefined) conditions.push(gte(refrigerantMovements.at, new Date(filter.fromMs)));
   if (filter.toMs !== undefined) conditions.push(lt(refrigerantMovements.at, new Date(filter.toMs)));
   if (filter.technicianId) conditions.push(eq(refrigerantMovements.technicianId, filter.technicianId));
@@ -200,10 +263,21 @@ export interface RegisterPageRequest extends RegisterFilter {
  * order from the cursor, so a page costs the same on the first day and after ten years of lines.
  * @throws HttpError 400 for a cursor this list did not give out
  */
-export async function registerPage(db: Database, organisationId: string, request: RegisterPageRequest): Promise<{ rows: MovementRow[]; nextCursor: string | null }> {
+export async function registerPage(
+  db: Database,
+  organisationId: string,
+  request: RegisterPageRequest,
+): Promise<{ rows: MovementRow[]; nextCursor: string | null }> {
   const conditions = registerConditions(organisationId, request);
   if (request.cursor) {
-    conditions.push(afterCursor(REGISTER_KEYS, refrigerantMovements.id, request.direction, decodeCursor(request.cursor, REGISTER_SORT, request.direction, REGISTER_KEYS)));
+    conditions.push(
+      afterCursor(
+        REGISTER_KEYS,
+        refrigerantMovements.id,
+        request.direction,
+        decodeCursor(request.cursor, REGISTER_SORT, request.direction, REGISTER_KEYS),
+      ),
+    );
   }
   const rows = await selectRegisterPage(db, conditions)
     .orderBy(...keysetOrder(REGISTER_KEYS, refrigerantMovements.id, request.direction))
@@ -217,7 +291,13 @@ export async function registerPage(db: Database, organisationId: string, request
  * chunk before reading the next, so its memory stays one chunk whatever the register's size, and
  * other requests reach the database between chunks.
  */
-export async function* registerChunks(db: Database, organisationId: string, filter: RegisterFilter, chunkSize: number, firstChunkSize = chunkSize): AsyncGenerator<MovementRow[]> {
+export async function* registerChunks(
+  db: Database,
+  organisationId: string,
+  filter: RegisterFilter,
+  chunkSize: number,
+  firstChunkSize = chunkSize,
+): AsyncGenerator<MovementRow[]> {
   let cursor: string | undefined;
   let limit = firstChunkSize;
   do {
@@ -229,8 +309,14 @@ export async function* registerChunks(db: Database, organisationId: string, filt
 }
 
 /** The register for a period, oldest first, whole: for callers that need every line at once (tests, small periods). */
-export async function registerMovements(db: Database, organisationId: string, filter: RegisterFilter): Promise<MovementRow[]> {
-  const rows = await selectMovements(db, registerConditions(organisationId, filter)).orderBy(...keysetOrder(REGISTER_KEYS, refrigerantMovements.id, "asc"));
+export async function registerMovements(
+  db: Database,
+  organisationId: string,
+  filter: RegisterFilter,
+): Promise<MovementRow[]> {
+  const rows = await selectMovements(db, registerConditions(organisationId, filter)).orderBy(
+    ...keysetOrder(REGISTER_KEYS, refrigerantMovements.id, "asc"),
+  );
   return rows.map(toMovement);
 }
 
@@ -246,7 +332,11 @@ export interface RegisterTotal {
  * are. Rounded to grams, the scale's resolution (TRADE.md §6 weigh-in: about ±28 g). Ordered by
  * refrigerant, then kind in MOVEMENT_KINDS order (recovered before reused before added…).
  */
-export async function registerTotals(db: Database, organisationId: string, filter: RegisterFilter): Promise<RegisterTotal[]> {
+export async function registerTotals(
+  db: Database,
+  organisationId: string,
+  filter: RegisterFilter,
+): Promise<RegisterTotal[]> {
   const kindOrder = sql`array_position(array[${sql.join(
     MOVEMENT_KINDS.map((kind) => sql`${kind}`),
     sql`, `,
@@ -278,22 +368,38 @@ export interface MovementInsert {
 }
 
 /** Register movements of visits, for storing once per client id and answering a repeated send. */
-export const movementEntries = entryKind(refrigerantMovements, async (db, row) => toMovement((await selectMovements(db, [eq(refrigerantMovements.id, row.id)]))[0]!));
+export const movementEntries = entryKind(refrigerantMovements, async (db, row) =>
+  toMovement((await selectMovements(db, [eq(refrigerantMovements.id, row.id)]))[0]!),
+);
 
 /**
  * Stores a movement, once per client id on a visit (README decision 026): a movement the visit
  * already holds under the id is answered instead, with `replayed`.
  */
-export async function insertMovement(db: Database, organisationId: string, values: MovementInsert & { clientId?: string }): Promise<StoredEntry<MovementRow>> {
+export async function insertMovement(
+  db: Database,
+  organisationId: string,
+  values: MovementInsert & { clientId?: string },
+): Promise<StoredEntry<MovementRow>> {
   return insertEntryOnce(db, movementEntries, { ...values, organisationId });
 }
 
 /** The standing (not voided) full weigh-in declarations of a visit's circuits. */
 export async function visitCircuitCharges(db: Database, organisationId: string, visitId: string) {
   return db
-    .select({ id: circuitCharges.id, circuit: circuitCharges.circuit, lineAdjustmentKg: circuitCharges.lineAdjustmentKg })
+    .select({
+      id: circuitCharges.id,
+      circuit: circuitCharges.circuit,
+      lineAdjustmentKg: circuitCharges.lineAdjustmentKg,
+    })
     .from(circuitCharges)
-    .where(and(eq(circuitCharges.organisationId, organisationId), eq(circuitCharges.visitId, visitId), isNull(circuitCharges.voidedAt)));
+    .where(
+      and(
+        eq(circuitCharges.organisationId, organisationId),
+        eq(circuitCharges.visitId, visitId),
+        isNull(circuitCharges.voidedAt),
+      ),
+    );
 }
 
 /**
@@ -307,7 +413,9 @@ export async function declareCircuitCharge(
   organisationId: string,
   values: { visitId: string; circuit: number; lineAdjustmentKg: number; recordedBy: string },
 ): Promise<{ replacedId: string; reason: string } | null> {
-  const [standing] = (await visitCircuitCharges(db, organisationId, values.visitId)).filter((charge) => charge.circuit === values.circuit);
+  const [standing] = (await visitCircuitCharges(db, organisationId, values.visitId)).filter(
+    (charge) => charge.circuit === values.circuit,
+  );
   if (standing && standing.lineAdjustmentKg === values.lineAdjustmentKg) return null;
   let replaced: { replacedId: string; reason: string } | null = null;
   if (standing) {
@@ -335,7 +443,13 @@ export async function voidReclaim(
   const [row] = await db
     .select({ visitId: refrigerantMovements.visitId, voidedAt: refrigerantMovements.voidedAt })
     .from(refrigerantMovements)
-    .where(and(eq(refrigerantMovements.organisationId, organisationId), eq(refrigerantMovements.cylinderId, values.cylinderId), eq(refrigerantMovements.id, values.movementId)));
+    .where(
+      and(
+        eq(refrigerantMovements.organisationId, organisationId),
+        eq(refrigerantMovements.cylinderId, values.cylinderId),
+        eq(refrigerantMovements.id, values.movementId),
+      ),
+    );
   if (!row) return "missing";
   if (row.visitId) return "on-a-visit";
   const voided = await db
@@ -365,9 +479,21 @@ const grams = (value: number) => Math.round(value * 1000) / 1000;
  * changed outside Satura; the report prints the check either way. Unlinked adjustments (stored
  * before entries were linked) are listed for the reader and counted nowhere.
  */
-export async function runLogChargeCheck(db: Database, organisationId: string, visitId: string, movements: readonly Movement[]): Promise<RunLogChargeCheck> {
+export async function runLogChargeCheck(
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  movements: readonly Movement[],
+): Promise<RunLogChargeCheck> {
   const rows = await db
-    .select({ id: adjustments.id, at: adjustments.at, circuit: adjustments.circuit, kind: adjustments.kind, amountKg: adjustments.amountKg, movementId: adjustments.movementId })
+    .select({
+      id: adjustments.id,
+      at: adjustments.at,
+      circuit: adjustments.circuit,
+      kind: adjustments.kind,
+      amountKg: adjustments.amountKg,
+      movementId: adjustments.movementId,
+    })
     .from(adjustments)
     .where(
       and(
@@ -379,16 +505,32 @@ export async function runLogChargeCheck(db: Database, organisationId: string, vi
     )
     .orderBy(asc(adjustments.at));
   const linked = rows.filter((row) => row.movementId !== null);
-  const sumOf = (kind: string) => grams(linked.filter((row) => row.kind === kind).reduce((sum, row) => sum + (row.amountKg ?? 0), 0));
+  const sumOf = (kind: string) =>
+    grams(linked.filter((row) => row.kind === kind).reduce((sum, row) => sum + (row.amountKg ?? 0), 0));
   const standing = movements.filter((movement) => movement.voided === null && movement.kind !== "sent-for-reclaim");
   const registerOf = (direction: string) =>
-    grams(standing.filter((movement) => MOVEMENT_DIRECTION[movement.kind as keyof typeof MOVEMENT_DIRECTION] === direction).reduce((sum, movement) => sum + movement.kg, 0));
-  const check = { runLogInKg: sumOf("charge-added"), runLogOutKg: sumOf("charge-removed"), registerInKg: registerOf("charge-added"), registerOutKg: registerOf("charge-removed") };
+    grams(
+      standing
+        .filter((movement) => MOVEMENT_DIRECTION[movement.kind as keyof typeof MOVEMENT_DIRECTION] === direction)
+        .reduce((sum, movement) => sum + movement.kg, 0),
+    );
+  const check = {
+    runLogInKg: sumOf("charge-added"),
+    runLogOutKg: sumOf("charge-removed"),
+    registerInKg: registerOf("charge-added"),
+    registerOutKg: registerOf("charge-removed"),
+  };
   return {
     ...check,
     agrees: check.runLogInKg === check.registerInKg && check.runLogOutKg === check.registerOutKg,
     unlinked: rows
       .filter((row) => row.movementId === null && row.amountKg !== null)
-      .map((row) => ({ id: row.id, at: row.at.toISOString(), circuit: row.circuit, kind: row.kind as ChargeAdjustmentKind, amountKg: row.amountKg! })),
+      .map((row) => ({
+        id: row.id,
+        at: row.at.toISOString(),
+        circuit: row.circuit,
+        kind: row.kind as ChargeAdjustmentKind,
+        amountKg: row.amountKg!,
+      })),
   };
 }

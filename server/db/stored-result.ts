@@ -26,11 +26,20 @@ import { customType } from "drizzle-orm/pg-core";
 import type { DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 
 /** The fields of a result that SQL reads, copied beside the packed text (present only where the result has them). */
-export const RESULT_FIELDS_READ_IN_SQL = ["superheatK", "subcoolingK", "evaporatingTempC", "condensingTempC", "chargeState", "chargeDeviation"] as const;
+export const RESULT_FIELDS_READ_IN_SQL = [
+  "superheatK",
+  "subcoolingK",
+  "evaporatingTempC",
+  "condensingTempC",
+  "chargeState",
+  "chargeDeviation",
+] as const;
 
 /** The dictionary new results are packed with. */
 const CURRENT_DICTIONARY = 1;
-const dictionaries = new Map<number, Buffer>([[1, readFileSync(new URL("./stored-result-dictionary-1.txt", import.meta.url))]]);
+const dictionaries = new Map<number, Buffer>([
+  [1, readFileSync(new URL("./stored-result-dictionary-1.txt", import.meta.url))],
+]);
 /**
  * zlib's level for packing. Over 2,000 results of the large data set, level 3 packs to 1.22 kB in
  * about 120 µs, level 6 (zlib's default) to 1.1 kB in about 170 µs. Reading does not depend on it.
@@ -53,7 +62,10 @@ function envelope(result: DiagnosisResult, packed: string): PackedResult {
 
 /** The packed form of a result, as stored (the CSV import's worker packs its rows with this). */
 export function packResult(result: DiagnosisResult): PackedResult {
-  const compressed = deflateSync(JSON.stringify(result), { dictionary: dictionaries.get(CURRENT_DICTIONARY)!, level: PACK_LEVEL });
+  const compressed = deflateSync(JSON.stringify(result), {
+    dictionary: dictionaries.get(CURRENT_DICTIONARY)!,
+    level: PACK_LEVEL,
+  });
   return envelope(result, compressed.toString("base64"));
 }
 
@@ -64,8 +76,11 @@ export function unpackResult(stored: unknown): DiagnosisResult {
   const value = (typeof stored === "string" ? JSON.parse(stored) : stored) as DiagnosisResult | PackedResult;
   if (!isPacked(value)) return value;
   const dictionary = dictionaries.get(value.packedWith);
-  if (!dictionary) throw new Error(`A stored result was packed with dictionary ${value.packedWith}, which this server does not have`);
-  return JSON.parse(inflateSync(Buffer.from(value.packed, "base64"), { dictionary }).toString("utf8")) as DiagnosisResult;
+  if (!dictionary)
+    throw new Error(`A stored result was packed with dictionary ${value.packedWith}, which this server does not have`);
+  return JSON.parse(
+    inflateSync(Buffer.from(value.packed, "base64"), { dictionary }).toString("utf8"),
+  ) as DiagnosisResult;
 }
 
 /** A jsonb column holding a packed result; drizzle code reads and writes DiagnosisResult. */

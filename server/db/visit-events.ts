@@ -82,11 +82,22 @@ export async function findVoidEvent(
 }
 
 /** The visit's trail, oldest first; with `sinceRevision`, only the lines written after that visit revision. */
-export async function listVisitEvents(db: Database, organisationId: string, visitId: string, sinceRevision?: number): Promise<VisitEvent[]> {
+export async function listVisitEvents(
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  sinceRevision?: number,
+): Promise<VisitEvent[]> {
   const rows = await db
     .select()
     .from(visitEvents)
-    .where(and(eq(visitEvents.organisationId, organisationId), eq(visitEvents.visitId, visitId), sinceRevision === undefined ? undefined : gt(visitEvents.revision, sinceRevision)))
+    .where(
+      and(
+        eq(visitEvents.organisationId, organisationId),
+        eq(visitEvents.visitId, visitId),
+        sinceRevision === undefined ? undefined : gt(visitEvents.revision, sinceRevision),
+      ),
+    )
     .orderBy(asc(visitEvents.at), asc(visitEvents.id));
   const people = await peopleById(
     db,

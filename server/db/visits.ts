@@ -29,7 +29,21 @@ import { circuitReadingsPage } from "./circuit-readings.ts";
 import { afterCursor, containsTerm, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKey } from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
 import { entryKind, insertEntryOnce, type DeviceEntryValues, type StoredEntry } from "./store-once.ts";
-import { adjustments, customers, equipment, photos, readings, sites, users, visitComments, visitEvents, visitReadingRecorders, visitSearch, visitTechnicians, visits } from "./schema.ts";
+import {
+  adjustments,
+  customers,
+  equipment,
+  photos,
+  readings,
+  sites,
+  users,
+  visitComments,
+  visitEvents,
+  visitReadingRecorders,
+  visitSearch,
+  visitTechnicians,
+  visits,
+} from "./schema.ts";
 import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
 
 /** Readings that are records: not rows of a CSV import still being stored (see readings.pendingImportId). */
@@ -62,10 +76,25 @@ type SummaryExtra = Pick<VisitSummary, "readingCount" | "technicians" | "yourLas
  */
 async function lastActivityOf(db: Database, viewerId: string, ids: string[]): Promise<Map<string, Date>> {
   const rows = await unionAll(
-    db.select({ visitId: adjustments.visitId, at: max(adjustments.createdAt) }).from(adjustments).where(and(inArray(adjustments.visitId, ids), eq(adjustments.recordedBy, viewerId))).groupBy(adjustments.visitId),
-    db.select({ visitId: visitComments.visitId, at: max(visitComments.createdAt) }).from(visitComments).where(and(inArray(visitComments.visitId, ids), eq(visitComments.authorId, viewerId))).groupBy(visitComments.visitId),
-    db.select({ visitId: visitEvents.visitId, at: max(visitEvents.at) }).from(visitEvents).where(and(inArray(visitEvents.visitId, ids), eq(visitEvents.actorId, viewerId))).groupBy(visitEvents.visitId),
-    db.select({ visitId: visitReadingRecorders.visitId, at: visitReadingRecorders.lastRecordedAt }).from(visitReadingRecorders).where(and(inArray(visitReadingRecorders.visitId, ids), eq(visitReadingRecorders.userId, viewerId))),
+    db
+      .select({ visitId: adjustments.visitId, at: max(adjustments.createdAt) })
+      .from(adjustments)
+      .where(and(inArray(adjustments.visitId, ids), eq(adjustments.recordedBy, viewerId)))
+      .groupBy(adjustments.visitId),
+    db
+      .select({ visitId: visitComments.visitId, at: max(visitComments.createdAt) })
+      .from(visitComments)
+      .where(and(inArray(visitComments.visitId, ids), eq(visitComments.authorId, viewerId)))
+      .groupBy(visitComments.visitId),
+    db
+      .select({ visitId: visitEvents.visitId, at: max(visitEvents.at) })
+      .from(visitEvents)
+      .where(and(inArray(visitEvents.visitId, ids), eq(visitEvents.actorId, viewerId)))
+      .groupBy(visitEvents.visitId),
+    db
+      .select({ visitId: visitReadingRecorders.visitId, at: visitReadingRecorders.lastRecordedAt })
+      .from(visitReadingRecorders)
+      .where(and(inArray(visitReadingRecorders.visitId, ids), eq(visitReadingRecorders.userId, viewerId))),
   );
   const latest = new Map<string, Date>();
   for (const row of rows) {
@@ -81,7 +110,11 @@ async function lastActivityOf(db: Database, viewerId: string, ids: string[]): Pr
  * The crew and the viewer's last activity of each listed visit, for the page's rows only. The
  * reading count comes with the rows themselves (visits.reading_count, kept by triggers).
  */
-async function summarise(db: Database, rows: { id: string; readingCount: number }[], viewerId?: string): Promise<Map<string, SummaryExtra>> {
+async function summarise(
+  db: Database,
+  rows: { id: string; readingCount: number }[],
+  viewerId?: string,
+): Promise<Map<string, SummaryExtra>> {
   const ids = rows.map((row) => row.id);
   const result = new Map<string, SummaryExtra>();
   if (ids.length === 0) return result;
@@ -92,7 +125,12 @@ async function summarise(db: Database, rows: { id: string; readingCount: number 
     .where(inArray(visitTechnicians.visitId, ids))
     .orderBy(asc(users.name));
   const activity = viewerId ? await lastActivityOf(db, viewerId, ids) : new Map<string, Date>();
-  for (const row of rows) result.set(row.id, { readingCount: row.readingCount, technicians: [], yourLastActivityAt: activity.get(row.id)?.toISOString() ?? null });
+  for (const row of rows)
+    result.set(row.id, {
+      readingCount: row.readingCount,
+      technicians: [],
+      yourLastActivityAt: activity.get(row.id)?.toISOString() ?? null,
+    });
   for (const row of crew) result.get(row.visitId)!.technicians.push({ id: row.id, name: row.name });
   return result;
 }
@@ -140,7 +178,9 @@ async function searchedVisitIds(db: Database, organisationId: string, terms: Sea
     terms.map((term) => sql`(${visitsMatching(organisationId, term)})`),
     sql` intersect `,
   );
-  const { rows } = await db.execute<{ visit_id: string }>(sql`select visit_id from (${everyWord}) as found limit ${SEARCH_BY_ID_LIMIT + 1}`);
+  const { rows } = await db.execute<{ visit_id: string }>(
+    sql`select visit_id from (${everyWord}) as found limit ${SEARCH_BY_ID_LIMIT + 1}`,
+  );
   return rows.length > SEARCH_BY_ID_LIMIT ? null : rows.map((row) => row.visit_id);
 }
 
@@ -157,15 +197,28 @@ const rowMatches = (term: SearchTerm) =>
  * counts, crew and the viewer's last activity are gathered for the page's rows only (at most
  * `query.limit` ids), so the cost follows the page, not the organisation.
  */
-export async function listVisitPage(db: Database, organisationId: string, query: VisitListQuery, viewerId: string): Promise<VisitPage> {
+export async function listVisitPage(
+  db: Database,
+  organisationId: string,
+  query: VisitListQuery,
+  viewerId: string,
+): Promise<VisitPage> {
   const direction = query.dir ?? defaultDirection(query.sort);
   const { keys, id } = VISIT_SORTS[query.sort];
   // Both rows' organisation: the unit-name and reason sorts read visit_search's index from it.
-  const conditions: (SQL | undefined)[] = [eq(visits.organisationId, organisationId), eq(visitSearch.organisationId, organisationId)];
-  if (query.status) conditions.push(query.status.length === 1 ? eq(visits.status, query.status[0]) : inArray(visits.status, query.status));
+  const conditions: (SQL | undefined)[] = [
+    eq(visits.organisationId, organisationId),
+    eq(visitSearch.organisationId, organisationId),
+  ];
+  if (query.status)
+    conditions.push(
+      query.status.length === 1 ? eq(visits.status, query.status[0]) : inArray(visits.status, query.status),
+    );
   if (query.equipmentId) conditions.push(eq(visits.equipmentId, query.equipmentId));
   if (query.crew === "me") {
-    conditions.push(sql`exists (select 1 from ${visitTechnicians} where ${visitTechnicians.visitId} = ${visits.id} and ${visitTechnicians.userId} = ${viewerId})`);
+    conditions.push(
+      sql`exists (select 1 from ${visitTechnicians} where ${visitTechnicians.visitId} = ${visits.id} and ${visitTechnicians.userId} = ${viewerId})`,
+    );
   }
   const terms = query.q ? searchTerms(query.q) : [];
   if (terms.length > 0) {
@@ -173,7 +226,8 @@ export async function listVisitPage(db: Database, organisationId: string, query:
     if (found?.length === 0) return { visits: [], nextCursor: null };
     conditions.push(found ? sql`${visits.id} = any(${sql.param(found)}::uuid[])` : and(...terms.map(rowMatches)));
   }
-  if (query.cursor) conditions.push(afterCursor(keys, id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
+  if (query.cursor)
+    conditions.push(afterCursor(keys, id, direction, decodeCursor(query.cursor, query.sort, direction, keys)));
   const rows = await db
     .select({ ...listColumns, ...cursorColumns(keys) })
     .from(visits)
@@ -206,7 +260,12 @@ export async function listVisitPage(db: Database, organisationId: string, query:
  * with that unit's visits only. Lists over the organisation use `listVisitPage`.
  * `viewerId`: whose last activity each summary carries (`yourLastActivityAt`).
  */
-export async function listVisits(db: Database, organisationId: string, filter: VisitFilter = {}, viewerId?: string): Promise<VisitSummary[]> {
+export async function listVisits(
+  db: Database,
+  organisationId: string,
+  filter: VisitFilter = {},
+  viewerId?: string,
+): Promise<VisitSummary[]> {
   const conditions: SQL[] = [eq(visits.organisationId, organisationId)];
   if (filter.status) conditions.push(eq(visits.status, filter.status));
   if (filter.equipmentId) conditions.push(eq(visits.equipmentId, filter.equipmentId));
@@ -245,9 +304,17 @@ export async function createVisit(
     .where(and(eq(equipment.organisationId, organisationId), eq(equipment.id, values.equipmentId)));
   if (!unit) return undefined;
   return db.transaction(async (tx) => {
-    const [row] = await tx.insert(visits).values({ ...values, organisationId }).returning({ id: visits.id });
+    const [row] = await tx
+      .insert(visits)
+      .values({ ...values, organisationId })
+      .returning({ id: visits.id });
     await tx.insert(visitTechnicians).values({ visitId: row.id, userId: values.createdBy });
-    await insertVisitEvent(tx, organisationId, { visitId: row.id, action: "started", summary: visitReasonText(values.reason), actorId: values.createdBy });
+    await insertVisitEvent(tx, organisationId, {
+      visitId: row.id,
+      action: "started",
+      summary: visitReasonText(values.reason),
+      actorId: values.createdBy,
+    });
     return row.id;
   });
 }
@@ -285,14 +352,21 @@ export interface NewReading {
  * on two servers): its answer is the reading stored first, read back, marked `replayed`. The
  * caller gives each client id of a visit once.
  */
-export async function insertReadings(db: Database, rows: NewReading[], people: People): Promise<StoredEntry<Reading>[]> {
+export async function insertReadings(
+  db: Database,
+  rows: NewReading[],
+  people: People,
+): Promise<StoredEntry<Reading>[]> {
   if (rows.length === 0) return [];
   const inserted = new Set(
     (
       await db
         .insert(readings)
         .values(rows)
-        .onConflictDoNothing({ target: [readings.visitId, readings.clientId], where: sql`${readings.clientId} is not null` })
+        .onConflictDoNothing({
+          target: [readings.visitId, readings.clientId],
+          where: sql`${readings.clientId} is not null`,
+        })
         .returning({ id: readings.id })
     ).map((row) => row.id),
   );
@@ -300,7 +374,11 @@ export async function insertReadings(db: Database, rows: NewReading[], people: P
   const stored = new Map((await readingsByClientId(db, held)).map((row) => [`${row.visitId}:${row.clientId}`, row]));
   const heldPeople = await peopleById(db, [...stored.values()].flatMap(mentionedPeople));
   return rows.map((row) => {
-    if (inserted.has(row.id)) return { entry: toReading({ ...row, voidedAt: null, voidedBy: null, voidReason: null }, people), replayed: false };
+    if (inserted.has(row.id))
+      return {
+        entry: toReading({ ...row, voidedAt: null, voidedBy: null, voidReason: null }, people),
+        replayed: false,
+      };
     const first = stored.get(`${row.visitId}:${row.clientId}`);
     if (!first) throw new Error(`insertReadings found no reading holding client id ${row.clientId}`);
     return { entry: toReading(first, heldPeople), replayed: true };
@@ -308,7 +386,10 @@ export async function insertReadings(db: Database, rows: NewReading[], people: P
 }
 
 /** The stored readings holding the client ids of these (visit, client id) pairs, in one query. */
-export async function readingsByClientId(db: Database, keys: readonly { visitId: string; clientId?: string | null }[]): Promise<(typeof readings.$inferSelect)[]> {
+export async function readingsByClientId(
+  db: Database,
+  keys: readonly { visitId: string; clientId?: string | null }[],
+): Promise<(typeof readings.$inferSelect)[]> {
   const named = keys.filter((key): key is { visitId: string; clientId: string } => Boolean(key.clientId));
   if (named.length === 0) return [];
   return db
@@ -327,7 +408,20 @@ const mentionedPeople = (row: { recordedBy: string | null; voidedBy: string | nu
 
 /** A stored reading as the API shows it: the one mapper for inserts, the detail, deltas and pages. */
 export function toReading(
-  row: Pick<typeof readings.$inferSelect, "id" | "visitId" | "circuit" | "takenAt" | "note" | "input" | "result" | "recordedBy" | "voidedAt" | "voidedBy" | "voidReason">,
+  row: Pick<
+    typeof readings.$inferSelect,
+    | "id"
+    | "visitId"
+    | "circuit"
+    | "takenAt"
+    | "note"
+    | "input"
+    | "result"
+    | "recordedBy"
+    | "voidedAt"
+    | "voidedBy"
+    | "voidReason"
+  >,
   people: People,
 ): Reading {
   return {
@@ -358,19 +452,35 @@ function toAdjustment(row: typeof adjustments.$inferSelect, people: People): Adj
 }
 
 /** Adjustments, for storing once per client id and answering a repeated send. */
-export const adjustmentEntries = entryKind(adjustments, async (db, row) => toAdjustment(row, await peopleById(db, mentionedPeople(row))));
+export const adjustmentEntries = entryKind(adjustments, async (db, row) =>
+  toAdjustment(row, await peopleById(db, mentionedPeople(row))),
+);
 
 /** Stores an adjustment, once per client id on the visit (README decision 026). */
 export async function insertAdjustment(
   db: Database,
   organisationId: string,
-  values: { visitId: string; circuit: number | null; at?: Date; kind: string; description: string; amountKg: number | null; movementId?: string | null; recordedBy: string; clientId?: string },
+  values: {
+    visitId: string;
+    circuit: number | null;
+    at?: Date;
+    kind: string;
+    description: string;
+    amountKg: number | null;
+    movementId?: string | null;
+    recordedBy: string;
+    clientId?: string;
+  },
 ): Promise<StoredEntry<Adjustment>> {
   return insertEntryOnce(db, adjustmentEntries, { ...values, organisationId });
 }
 
 /** The reading a comment is about, as the comment shows it; undefined when it is no record of the visit. */
-async function commentedReading(db: Database, visitId: string, readingId: string | null): Promise<Comment["reading"] | undefined> {
+async function commentedReading(
+  db: Database,
+  visitId: string,
+  readingId: string | null,
+): Promise<Comment["reading"] | undefined> {
   if (!readingId) return null;
   const [found] = await db
     .select({ circuit: readings.circuit, takenAt: readings.takenAt })
@@ -383,7 +493,14 @@ async function commentedReading(db: Database, visitId: string, readingId: string
 export const commentEntries = entryKind(visitComments, async (db, row): Promise<Comment> => {
   const people = await peopleById(db, [row.authorId]);
   const reading = (await commentedReading(db, row.visitId, row.readingId)) ?? null;
-  return { id: row.id, readingId: row.readingId, reading, body: row.body, author: person(people, row.authorId), createdAt: row.createdAt.toISOString() };
+  return {
+    id: row.id,
+    readingId: row.readingId,
+    reading,
+    body: row.body,
+    author: person(people, row.authorId),
+    createdAt: row.createdAt.toISOString(),
+  };
 });
 
 /** Stores a comment, once per client id on the visit; undefined when the reading it names is not the visit's. */
@@ -399,7 +516,13 @@ export async function insertComment(
 export async function updateVisitStatus(
   db: Database,
   visitId: string,
-  values: { status: VisitStatus; reviewNote?: string | null; signedOffBy?: string | null; signedOffAt?: Date | null; reason?: string },
+  values: {
+    status: VisitStatus;
+    reviewNote?: string | null;
+    signedOffBy?: string | null;
+    signedOffAt?: Date | null;
+    reason?: string;
+  },
 ): Promise<void> {
   await db
     .update(visits)
@@ -434,7 +557,17 @@ export async function getVisitHead(db: Database, organisationId: string, visitId
   if (!head) return undefined;
   const { equipmentName, siteName, customerName, refrigerant, customerContactEmail, siteAltitudeM } = head;
   // What other tables contribute to the detail changes without a visit write, so it is in the token.
-  return { ...head, token: visitRevisionToken(head.revision, [equipmentName, siteName, customerName, refrigerant, customerContactEmail, siteAltitudeM]) };
+  return {
+    ...head,
+    token: visitRevisionToken(head.revision, [
+      equipmentName,
+      siteName,
+      customerName,
+      refrigerant,
+      customerContactEmail,
+      siteAltitudeM,
+    ]),
+  };
 }
 export type VisitHead = NonNullable<Awaited<ReturnType<typeof getVisitHead>>>;
 
@@ -453,7 +586,11 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
   const [changedReadings, allAdjustmentRows, commentRows, photoRows, extra, events] = await Promise.all([
     sinceRevision === undefined
       ? Promise.resolve(undefined)
-      : db.select().from(readings).where(and(eq(readings.visitId, visitId), isRecord, changed(readings))).orderBy(asc(readings.takenAt), asc(readings.createdAt)),
+      : db
+          .select()
+          .from(readings)
+          .where(and(eq(readings.visitId, visitId), isRecord, changed(readings)))
+          .orderBy(asc(readings.takenAt), asc(readings.createdAt)),
     db.select().from(adjustments).where(eq(adjustments.visitId, visitId)).orderBy(asc(adjustments.at)),
     db
       .select({ comment: visitComments, readingCircuit: readings.circuit, readingTakenAt: readings.takenAt })
@@ -461,11 +598,16 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
       .leftJoin(readings, eq(readings.id, visitComments.readingId))
       .where(and(eq(visitComments.visitId, visitId), changed(visitComments)))
       .orderBy(asc(visitComments.createdAt)),
-    db.select().from(photos).where(and(eq(photos.visitId, visitId), changed(photos))).orderBy(asc(photos.takenAt), asc(photos.id)),
+    db
+      .select()
+      .from(photos)
+      .where(and(eq(photos.visitId, visitId), changed(photos)))
+      .orderBy(asc(photos.takenAt), asc(photos.id)),
     summarise(db, [head]),
     listVisitEvents(db, organisationId, visitId, sinceRevision),
   ]);
-  const adjustmentRows = sinceRevision === undefined ? allAdjustmentRows : allAdjustmentRows.filter((row) => row.revision > sinceRevision);
+  const adjustmentRows =
+    sinceRevision === undefined ? allAdjustmentRows : allAdjustmentRows.filter((row) => row.revision > sinceRevision);
   const adjustmentPeople = await peopleById(db, allAdjustmentRows.flatMap(mentionedPeople));
   const allAdjustments = allAdjustmentRows.map((row) => toAdjustment(row, adjustmentPeople));
   // The logs change only with the readings and adjustments; a delta without either leaves the held ones.
@@ -480,9 +622,12 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
   const logs = touched ? allLogs?.filter((log) => touched.has(log.circuit)) : allLogs;
   const pages = new Map<number, { rows: (typeof readings.$inferSelect)[]; olderCursor: string | null }>();
   if (changedReadings === undefined) {
-    for (const log of logs!) pages.set(log.circuit, await circuitReadingsPage(db, visitId, log.circuit, READINGS_PAGE_SIZE));
+    for (const log of logs!)
+      pages.set(log.circuit, await circuitReadingsPage(db, visitId, log.circuit, READINGS_PAGE_SIZE));
   }
-  const readingRows = changedReadings ?? [...pages.values()].flatMap((page) => page.rows).sort((a, b) => a.takenAt.getTime() - b.takenAt.getTime());
+  const readingRows =
+    changedReadings ??
+    [...pages.values()].flatMap((page) => page.rows).sort((a, b) => a.takenAt.getTime() - b.takenAt.getTime());
   const people = await peopleById(db, [
     head.signedOffBy,
     ...readingRows.flatMap(mentionedPeople),
@@ -505,11 +650,15 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
       olderCursor: pages.get(log.circuit)?.olderCursor ?? null,
       keyReadings: keyRows.map((row) => toReading(row, people)),
     })),
-    adjustments: sinceRevision === undefined ? allAdjustments : adjustmentRows.map((row) => toAdjustment(row, adjustmentPeople)),
+    adjustments:
+      sinceRevision === undefined ? allAdjustments : adjustmentRows.map((row) => toAdjustment(row, adjustmentPeople)),
     comments: commentRows.map(({ comment, readingCircuit, readingTakenAt }) => ({
       id: comment.id,
       readingId: comment.readingId,
-      reading: readingCircuit !== null && readingTakenAt !== null ? { circuit: readingCircuit, takenAt: readingTakenAt.toISOString() } : null,
+      reading:
+        readingCircuit !== null && readingTakenAt !== null
+          ? { circuit: readingCircuit, takenAt: readingTakenAt.toISOString() }
+          : null,
       body: comment.body,
       author: person(people, comment.authorId),
       createdAt: comment.createdAt.toISOString(),
@@ -519,7 +668,12 @@ async function buildVisit(db: Database, organisationId: string, head: VisitHead,
 }
 
 /** The whole visit: summary, review state, the latest page of each circuit's readings and each circuit's log. */
-export async function getVisitDetail(db: Database, organisationId: string, visitId: string, head?: VisitHead): Promise<Visit | undefined> {
+export async function getVisitDetail(
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  head?: VisitHead,
+): Promise<Visit | undefined> {
   const found = head ?? (await getVisitHead(db, organisationId, visitId));
   if (!found) return undefined;
   const built = await buildVisit(db, organisationId, found);
@@ -531,7 +685,12 @@ export async function getVisitDetail(db: Database, organisationId: string, visit
  * client to; undefined when more readings changed than a page holds (an imported series): the
  * caller answers with the whole visit, whose size is bounded, instead.
  */
-export async function getVisitDelta(db: Database, organisationId: string, head: VisitHead, sinceRevision: number): Promise<Omit<VisitDelta, "since"> | undefined> {
+export async function getVisitDelta(
+  db: Database,
+  organisationId: string,
+  head: VisitHead,
+  sinceRevision: number,
+): Promise<Omit<VisitDelta, "since"> | undefined> {
   const changedReadings = await db
     .select({ id: readings.id })
     .from(readings)
@@ -545,14 +704,25 @@ export async function getVisitDelta(db: Database, organisationId: string, head: 
  * One circuit's readings (voided ones included) before the reading `before`, a page at a time,
  * for "Show earlier entries". The caller has checked the visit is the organisation's.
  */
-export async function visitReadingsPage(db: Database, visitId: string, query: { circuit: number; before: string; limit: number }): Promise<ReadingsPage> {
+export async function visitReadingsPage(
+  db: Database,
+  visitId: string,
+  query: { circuit: number; before: string; limit: number },
+): Promise<ReadingsPage> {
   const page = await circuitReadingsPage(db, visitId, query.circuit, query.limit, query.before);
   const people = await peopleById(db, page.rows.flatMap(mentionedPeople));
   return { readings: page.rows.map((row) => toReading(row, people)), olderCursor: page.olderCursor };
 }
 
 function toPhoto(row: typeof photos.$inferSelect): Photo {
-  return { id: row.id, kind: row.kind as Photo["kind"], caption: row.caption, takenAt: row.takenAt.toISOString(), createdAt: row.createdAt.toISOString(), ...photoUrls(row.id) };
+  return {
+    id: row.id,
+    kind: row.kind as Photo["kind"],
+    caption: row.caption,
+    takenAt: row.takenAt.toISOString(),
+    createdAt: row.createdAt.toISOString(),
+    ...photoUrls(row.id),
+  };
 }
 
 /** Photos, for storing once per client id and answering a repeated send. */
@@ -562,7 +732,16 @@ export const photoEntries = entryKind(photos, async (_db, row): Promise<Photo> =
 export async function insertPhoto(
   db: Database,
   organisationId: string,
-  values: { visitId: string; kind: string; caption: string | null; storedName: string; thumbnailName: string; mimeType: string; bytes: number; uploadedBy: string } & DeviceEntryValues,
+  values: {
+    visitId: string;
+    kind: string;
+    caption: string | null;
+    storedName: string;
+    thumbnailName: string;
+    mimeType: string;
+    bytes: number;
+    uploadedBy: string;
+  } & DeviceEntryValues,
 ): Promise<StoredEntry<Photo>> {
   return insertEntryOnce(db, photoEntries, { ...values, organisationId });
 }
@@ -608,5 +787,7 @@ export async function commitImportedReadings(db: Database, importId: string): Pr
  * restart): they were never records, so nothing recorded is lost. Without an id, every one.
  */
 export async function discardStagedReadings(db: Database, importId?: string): Promise<void> {
-  await db.delete(readings).where(importId ? eq(readings.pendingImportId, importId) : isNotNull(readings.pendingImportId));
+  await db
+    .delete(readings)
+    .where(importId ? eq(readings.pendingImportId, importId) : isNotNull(readings.pendingImportId));
 }

@@ -19,11 +19,23 @@ export interface WeighInRunLog {
 }
 
 /** The run log after the circuit's full weigh-in on this visit, or null when it has none standing. */
-export async function weighInRunLog(db: Database, organisationId: string, visitId: string, circuit: number): Promise<WeighInRunLog | null> {
+export async function weighInRunLog(
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  circuit: number,
+): Promise<WeighInRunLog | null> {
   const [declaration] = await db
     .select({ createdAt: circuitCharges.createdAt })
     .from(circuitCharges)
-    .where(and(eq(circuitCharges.organisationId, organisationId), eq(circuitCharges.visitId, visitId), eq(circuitCharges.circuit, circuit), isNull(circuitCharges.voidedAt)));
+    .where(
+      and(
+        eq(circuitCharges.organisationId, organisationId),
+        eq(circuitCharges.visitId, visitId),
+        eq(circuitCharges.circuit, circuit),
+        isNull(circuitCharges.voidedAt),
+      ),
+    );
   if (!declaration) return null;
   const [charged] = await db
     .select({ at: refrigerantMovements.at })
@@ -44,7 +56,14 @@ export async function weighInRunLog(db: Database, organisationId: string, visitI
     db
       .select({ id: readings.id, takenAt: readings.takenAt, input: readings.input, result: readings.result })
       .from(readings)
-      .where(and(eq(readings.visitId, visitId), eq(readings.circuit, circuit), gte(readings.takenAt, weighedInAt), countsInResults))
+      .where(
+        and(
+          eq(readings.visitId, visitId),
+          eq(readings.circuit, circuit),
+          gte(readings.takenAt, weighedInAt),
+          countsInResults,
+        ),
+      )
       .orderBy(asc(readings.takenAt), asc(readings.createdAt), asc(readings.id)),
     db
       .select({ at: adjustments.at, description: adjustments.description })

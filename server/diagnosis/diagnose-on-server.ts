@@ -14,7 +14,10 @@ import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.
  * saturation table from its start; the CSV import's worker thread has only what this loads.
  */
 export async function prepareRefrigerant(refrigerant: string): Promise<void> {
-  await Promise.all([loadRefrigerant(refrigerant).catch(() => undefined), loadSinglePhaseTable(refrigerant).catch(() => undefined)]);
+  await Promise.all([
+    loadRefrigerant(refrigerant).catch(() => undefined),
+    loadSinglePhaseTable(refrigerant).catch(() => undefined),
+  ]);
 }
 
 export async function diagnoseReading(input: DiagnosisInput): Promise<DiagnosisResult> {

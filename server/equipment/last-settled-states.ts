@@ -25,16 +25,27 @@ export const MAX_TAIL_READINGS = 1_024;
 type LastSettled = EquipmentDetail["lastSettled"][number];
 
 /** The last settled reading of a tail (by the run log's rule), with its whole stored result. */
-async function lastSettledIn(db: Database, circuit: number, rows: Awaited<ReturnType<typeof latestCircuitReadings>>): Promise<LastSettled> {
+async function lastSettledIn(
+  db: Database,
+  circuit: number,
+  rows: Awaited<ReturnType<typeof latestCircuitReadings>>,
+): Promise<LastSettled> {
   const series = lastAtEachInstant(rows, (reading) => reading.takenAt.getTime());
   if (series.length === 0) return { circuit, takenAt: null, result: null };
-  const { lastSettled } = assessTrend(series.map((reading) => ({ takenAt: reading.takenAt.toISOString(), input: reading.input, result: reading.result })));
+  const { lastSettled } = assessTrend(
+    series.map((reading) => ({ takenAt: reading.takenAt.toISOString(), input: reading.input, result: reading.result })),
+  );
   if (!lastSettled) return { circuit, takenAt: null, result: null };
   const result = await readingResult(db, series[lastSettled.index]!.id);
   return { circuit, takenAt: lastSettled.takenAt, result: result ?? null };
 }
 
-export async function lastSettledStates(db: Database, organisationId: string, equipmentId: string, circuits: readonly CircuitNameplate[]): Promise<LastSettled[]> {
+export async function lastSettledStates(
+  db: Database,
+  organisationId: string,
+  equipmentId: string,
+  circuits: readonly CircuitNameplate[],
+): Promise<LastSettled[]> {
   const visitId = await latestReadingVisit(db, organisationId, equipmentId);
   const states: LastSettled[] = [];
   for (const { number } of circuits) {

@@ -13,7 +13,10 @@ export function fieldMessages(error: ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {
     const prefix = issue.path.length > 0 ? `${issue.path.join(".")}.` : "";
-    const keys = issue.code === "unrecognized_keys" ? issue.keys.map((key) => `${prefix}${key}`) : [issue.path.length > 0 ? issue.path.join(".") : "_"];
+    const keys =
+      issue.code === "unrecognized_keys"
+        ? issue.keys.map((key) => `${prefix}${key}`)
+        : [issue.path.length > 0 ? issue.path.join(".") : "_"];
     for (const key of keys) fields[key] ??= issue.message;
   }
   return fields;
@@ -40,18 +43,24 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
     return;
   }
   if (error instanceof DiagnosisInputError) {
-    const fields = Object.fromEntries(Object.entries(error.fieldErrors).map(([field, messages]) => [field, messages[0] ?? "Check this value"]));
+    const fields = Object.fromEntries(
+      Object.entries(error.fieldErrors).map(([field, messages]) => [field, messages[0] ?? "Check this value"]),
+    );
     res.status(400).json({ message: error.formErrors[0] ?? "Some fields need attention", fields });
     return;
   }
   if (error instanceof multer.MulterError) {
     const tooLarge = error.code === "LIMIT_FILE_SIZE";
-    res.status(tooLarge ? 413 : 400).json({ message: tooLarge ? "That file is too large" : `Upload refused: ${error.message}` });
+    res
+      .status(tooLarge ? 413 : 400)
+      .json({ message: tooLarge ? "That file is too large" : `Upload refused: ${error.message}` });
     return;
   }
   // Two requests raced past a route's own "is it taken?" check; the unique index held.
   if (uniqueViolation(error)) {
-    res.status(409).json({ message: "That record already exists: another request saved it a moment ago. Reload to see it." });
+    res
+      .status(409)
+      .json({ message: "That record already exists: another request saved it a moment ago. Reload to see it." });
     return;
   }
   if (error instanceof HttpError) {
@@ -61,7 +70,8 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
     return;
   }
   // Errors raised by body-parser and multer carry their own status (413, 400 …).
-  const status = typeof error?.status === "number" ? error.status : typeof error?.statusCode === "number" ? error.statusCode : 500;
+  const status =
+    typeof error?.status === "number" ? error.status : typeof error?.statusCode === "number" ? error.statusCode : 500;
   if (status >= 400 && status < 500) {
     const message =
       error?.type === "entity.too.large"

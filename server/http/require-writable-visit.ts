@@ -6,6 +6,9 @@ import { HttpError } from "./http-error.ts";
  * refrigerant, photos) and no voids until a senior or owner reopens it. Routes call this
  * early to refuse before any slow work; writeToVisit checks again under the row lock.
  */
-export function requireWritableVisit(status: VisitStatus, allow: readonly VisitStatus[] = STATUSES_OPEN_FOR_ENTRIES): void {
+export function requireWritableVisit(
+  status: VisitStatus,
+  allow: readonly VisitStatus[] = STATUSES_OPEN_FOR_ENTRIES,
+): void {
   if (!allow.includes(status)) throw new HttpError(409, closedVisitMessage(status));
 }

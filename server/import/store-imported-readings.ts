@@ -47,7 +47,12 @@ export async function storeImportedReadings(
         actorId: values.recordedBy,
       });
       // A logged series after a full weigh-in calibrates the circuit as hand-entered readings do.
-      await calibrateAfterWeighIn(tx, organisationId, { visitId: values.visitId, equipmentId: values.equipmentId, circuit: values.circuit, actorId: values.recordedBy });
+      await calibrateAfterWeighIn(tx, organisationId, {
+        visitId: values.visitId,
+        equipmentId: values.equipmentId,
+        circuit: values.circuit,
+        actorId: values.recordedBy,
+      });
       return stored;
     });
   } catch (error) {

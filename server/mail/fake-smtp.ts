@@ -26,7 +26,9 @@ export interface FakeSmtp {
 
 /** Undoes quoted-printable (RFC 2045 §6.7) well enough to read links in the text part. */
 function decodeQuotedPrintable(raw: string): string {
-  return raw.replace(/=\r?\n/g, "").replace(/=([0-9A-F]{2})/g, (_match, hex: string) => String.fromCharCode(parseInt(hex, 16)));
+  return raw
+    .replace(/=\r?\n/g, "")
+    .replace(/=([0-9A-F]{2})/g, (_match, hex: string) => String.fromCharCode(parseInt(hex, 16)));
 }
 
 /**
@@ -59,7 +61,11 @@ export async function startFakeSmtp(options: { dropDir?: string } = {}): Promise
         };
         messages.push(mail);
         // One file per message, named to sort by arrival, for whoever reads the drop folder.
-        if (options.dropDir) writeFileSync(join(options.dropDir, `${mail.receivedAt.getTime()}-${randomBytes(4).toString("hex")}.eml`), mail.decoded);
+        if (options.dropDir)
+          writeFileSync(
+            join(options.dropDir, `${mail.receivedAt.getTime()}-${randomBytes(4).toString("hex")}.eml`),
+            mail.decoded,
+          );
         for (const waiter of waiters) waiter(mail);
         callback();
       });

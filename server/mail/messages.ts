@@ -34,7 +34,13 @@ export function invitationMail(input: {
   };
 }
 
-export function passwordResetMail(input: { to: string; name: string; link: string; validMinutes: number; organisationId: string }): MailMessage {
+export function passwordResetMail(input: {
+  to: string;
+  name: string;
+  link: string;
+  validMinutes: number;
+  organisationId: string;
+}): MailMessage {
   const lines = [
     `Hello ${input.name},`,
     `Someone asked to reset the password of your Satura account. Open the link below to choose a new one. It works once and expires in ${input.validMinutes} minutes.`,

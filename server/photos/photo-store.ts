@@ -20,7 +20,8 @@ const ORIGINAL_QUALITY = 90;
 /** What the content says the file is; the name and the browser's type are not trusted. */
 const ACCEPTED_FORMATS = { jpeg: "image/jpeg", png: "image/png", webp: "image/webp" } as const;
 type AcceptedFormat = keyof typeof ACCEPTED_FORMATS;
-const isAccepted = (format: string | undefined): format is AcceptedFormat => format !== undefined && format in ACCEPTED_FORMATS;
+const isAccepted = (format: string | undefined): format is AcceptedFormat =>
+  format !== undefined && format in ACCEPTED_FORMATS;
 
 export interface StoredPhoto {
   storedName: string;
@@ -74,7 +75,10 @@ export async function storePhoto(folder: string, buffer: Buffer): Promise<Stored
     ]);
   } catch {
     // The header was readable but the pixels are not: a cut-off upload or a damaged file.
-    throw new HttpError(400, "That photo could not be read to the end: the file is damaged or incomplete. Take or choose it again.");
+    throw new HttpError(
+      400,
+      "That photo could not be read to the end: the file is damaged or incomplete. Take or choose it again.",
+    );
   }
 
   await mkdir(folder, { recursive: true });
@@ -93,6 +97,9 @@ export function readPhoto(folder: string, name: string): Promise<Buffer> {
 }
 
 /** Removes the files of a photo that was refused after they were written (its visit closed meanwhile). */
-export async function discardPhoto(folder: string, photo: Pick<StoredPhoto, "storedName" | "thumbnailName">): Promise<void> {
+export async function discardPhoto(
+  folder: string,
+  photo: Pick<StoredPhoto, "storedName" | "thumbnailName">,
+): Promise<void> {
   await Promise.all([photo.storedName, photo.thumbnailName].map((name) => rm(join(folder, name), { force: true })));
 }

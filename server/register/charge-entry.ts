@@ -16,19 +16,31 @@ import {
 } from "@shared/schemas/register.ts";
 import type { Adjustment, ChargeAdjustmentKind } from "@shared/schemas/visits.ts";
 import type { Database } from "../db/client.ts";
-import { getCylinder, insertMovement, movementEntries, visitMovements, type CylinderRow, type MovementRow } from "../db/register.ts";
+import {
+  getCylinder,
+  insertMovement,
+  movementEntries,
+  visitMovements,
+  type CylinderRow,
+  type MovementRow,
+} from "../db/register.ts";
 import { adjustments } from "../db/schema.ts";
 import { findEntry, type StoredEntry } from "../db/store-once.ts";
 import { adjustmentEntries, insertAdjustment } from "../db/visits.ts";
 import { HttpError } from "../http/http-error.ts";
 import { cylinderFill } from "./register-checks.ts";
 
-export const fieldError = (field: string, message: string) => new HttpError(400, "Some fields need attention", { [field]: message });
+export const fieldError = (field: string, message: string) =>
+  new HttpError(400, "Some fields need attention", { [field]: message });
 const kg = (value: number) => `${Number(value.toFixed(2))} kg`;
 /** The scale's resolution: two figures within half a gram are the same weighing. */
 const SAME_MASS_KG = 0.0005;
 
-const KIND_NAMES: Record<CylinderKind, string> = { recovery: "a recovery", new: "a new-refrigerant", reclaimed: "a reclaimed-refrigerant" };
+const KIND_NAMES: Record<CylinderKind, string> = {
+  recovery: "a recovery",
+  new: "a new-refrigerant",
+  reclaimed: "a reclaimed-refrigerant",
+};
 
 /**
  * Checks that a movement may use this cylinder and that its contents allow it: one
@@ -51,7 +63,10 @@ export function checkCylinder(cylinder: CylinderRow, kind: MovementKind, refrige
     );
   }
   if (!rule.intoCylinder && massKg > cylinder.contentsKg + 1e-9) {
-    throw fieldError("kg", `${cylinder.label} holds only ${kg(cylinder.contentsKg)} by the register: weigh it and check the figure.`);
+    throw fieldError(
+      "kg",
+      `${cylinder.label} holds only ${kg(cylinder.contentsKg)} by the register: weigh it and check the figure.`,
+    );
   }
   if (rule.intoCylinder) {
     const after = cylinderFill(cylinder, cylinder.contentsKg + massKg);
@@ -76,7 +91,12 @@ export function movementKindFor(kind: ChargeAdjustmentKind, cylinderKind: Cylind
 }
 
 /** movementKindFor with the chosen cylinder read in the transaction; a cylinder of another company is no cylinder. */
-export async function chargeMovementKind(tx: Database, organisationId: string, kind: ChargeAdjustmentKind, cylinderId: string): Promise<MovementKind> {
+export async function chargeMovementKind(
+  tx: Database,
+  organisationId: string,
+  kind: ChargeAdjustmentKind,
+  cylinderId: string,
+): Promise<MovementKind> {
   const cylinder = await getCylinder(tx, organisationId, cylinderId);
   if (!cylinder) throw fieldError("cylinderId", "Choose one of your company's cylinders");
   return movementKindFor(kind, cylinder.kind);
@@ -112,7 +132,12 @@ export interface ChargeEntry {
 }
 
 /** The charge entry of the visit a device stored under this client id (on its movement), if any. */
-export async function findChargeEntry(db: Database, organisationId: string, visitId: string, clientId: string | undefined): Promise<ChargeEntry | undefined> {
+export async function findChargeEntry(
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  clientId: string | undefined,
+): Promise<ChargeEntry | undefined> {
   const movement = await findEntry(db, movementEntries, visitId, clientId);
   return movement ? storedChargeEntry(db, organisationId, movement) : undefined;
 }
@@ -138,10 +163,18 @@ async function storedChargeEntry(db: Database, organisationId: string, movement:
 export async function recordChargeEntry(
   tx: Database,
   organisationId: string,
-  values: { visitId: string; unit: VisitUnit; technicianId: string; movement: MovementEntry; adjustment?: { description: string }; clientId?: string },
+  values: {
+    visitId: string;
+    unit: VisitUnit;
+    technicianId: string;
+    movement: MovementEntry;
+    adjustment?: { description: string };
+    clientId?: string;
+  },
 ): Promise<ChargeEntry> {
   const { unit, movement: entry } = values;
-  if (entry.kind === "sent-for-reclaim") throw fieldError("kind", "A cylinder is sent for reclaim from the Cylinders page, not from a visit");
+  if (entry.kind === "sent-for-reclaim")
+    throw fieldError("kind", "A cylinder is sent for reclaim from the Cylinders page, not from a visit");
   let cylinder: CylinderRow | undefined;
   if (entry.cylinderId) {
     cylinder = await getCylinder(tx, organisationId, entry.cylinderId);
@@ -152,8 +185,12 @@ export async function recordChargeEntry(
   }
   if (entry.kind === "reused") {
     // Reused refrigerant is what was recovered from this circuit and put back (TRADE.md §6 records: destination "reuse in same system").
-    const own = (await visitMovements(tx, organisationId, values.visitId)).filter((movement) => movement.circuit === entry.circuit && movement.voided === null);
-    const recovered = own.filter((movement) => movement.kind === "recovered").reduce((sum, movement) => sum + movement.kg, 0);
+    const own = (await visitMovements(tx, organisationId, values.visitId)).filter(
+      (movement) => movement.circuit === entry.circuit && movement.voided === null,
+    );
+    const recovered = own
+      .filter((movement) => movement.kind === "recovered")
+      .reduce((sum, movement) => sum + movement.kg, 0);
     const reused = own.filter((movement) => movement.kind === "reused").reduce((sum, movement) => sum + movement.kg, 0);
     if (reused + entry.kg > recovered + 1e-9) {
       throw fieldError(
@@ -184,7 +221,8 @@ export async function recordChargeEntry(
     circuit: entry.circuit,
     at: new Date(movement.at),
     kind: MOVEMENT_DIRECTION[entry.kind],
-    description: values.adjustment?.description ?? entry.note ?? describeMovement(entry.kind, entry.kg, cylinder?.label ?? null),
+    description:
+      values.adjustment?.description ?? entry.note ?? describeMovement(entry.kind, entry.kg, cylinder?.label ?? null),
     amountKg: entry.kg,
     movementId: movement.id,
     recordedBy: values.technicianId,
@@ -200,15 +238,33 @@ export async function recordChargeEntry(
 export async function linkToMovement(
   tx: Database,
   organisationId: string,
-  values: { visitId: string; movementId: string; kind: ChargeAdjustmentKind; amountKg: number; circuit: number; description: string; at?: Date; recordedBy: string; clientId?: string },
+  values: {
+    visitId: string;
+    movementId: string;
+    kind: ChargeAdjustmentKind;
+    amountKg: number;
+    circuit: number;
+    description: string;
+    at?: Date;
+    recordedBy: string;
+    clientId?: string;
+  },
 ): Promise<StoredEntry<Adjustment>> {
-  const movement = (await visitMovements(tx, organisationId, values.visitId)).find((candidate) => candidate.id === values.movementId);
-  if (!movement || movement.voided !== null) throw fieldError("movementId", "Choose a standing register line of this visit");
+  const movement = (await visitMovements(tx, organisationId, values.visitId)).find(
+    (candidate) => candidate.id === values.movementId,
+  );
+  if (!movement || movement.voided !== null)
+    throw fieldError("movementId", "Choose a standing register line of this visit");
   if (movement.kind === "sent-for-reclaim" || MOVEMENT_DIRECTION[movement.kind] !== values.kind) {
-    throw fieldError("movementId", `That register line is ${MOVEMENT_KIND_LABELS[movement.kind].toLowerCase()}, not ${values.kind === "charge-added" ? "refrigerant added" : "refrigerant removed"}`);
+    throw fieldError(
+      "movementId",
+      `That register line is ${MOVEMENT_KIND_LABELS[movement.kind].toLowerCase()}, not ${values.kind === "charge-added" ? "refrigerant added" : "refrigerant removed"}`,
+    );
   }
-  if (Math.abs(movement.kg - values.amountKg) > SAME_MASS_KG) throw fieldError("amountKg", `That register line says ${kg(movement.kg)}: one entry, one number`);
-  if (movement.circuit !== values.circuit) throw fieldError("movementId", `That register line is on circuit ${movement.circuit}`);
+  if (Math.abs(movement.kg - values.amountKg) > SAME_MASS_KG)
+    throw fieldError("amountKg", `That register line says ${kg(movement.kg)}: one entry, one number`);
+  if (movement.circuit !== values.circuit)
+    throw fieldError("movementId", `That register line is on circuit ${movement.circuit}`);
   const [linked] = await tx
     .select({ id: adjustments.id })
     .from(adjustments)

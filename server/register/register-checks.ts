@@ -34,10 +34,17 @@ export const CYLINDER_REFERENCE_TEMP_C = 54;
  * ratio, so Satura shows their limit but does not judge them (TRADE.md §6 states the 80 %
  * rule for recovery cylinders).
  */
-export function cylinderFill(cylinder: Pick<CylinderRow, "waterCapacityKg" | "refrigerant" | "kind">, contentsKg: number): CylinderFill {
+export function cylinderFill(
+  cylinder: Pick<CylinderRow, "waterCapacityKg" | "refrigerant" | "kind">,
+  contentsKg: number,
+): CylinderFill {
   let maxContentsKg: number;
   try {
-    maxContentsKg = cylinderFillLimit({ waterCapacityKg: cylinder.waterCapacityKg, refrigerant: cylinder.refrigerant, referenceTempC: CYLINDER_REFERENCE_TEMP_C }).maxContentsKg;
+    maxContentsKg = cylinderFillLimit({
+      waterCapacityKg: cylinder.waterCapacityKg,
+      refrigerant: cylinder.refrigerant,
+      referenceTempC: CYLINDER_REFERENCE_TEMP_C,
+    }).maxContentsKg;
   } catch {
     // e.g. R744 is supercritical at 54 °C: there is no liquid density to turn 80 % into kg.
     return {
@@ -48,7 +55,12 @@ export function cylinderFill(cylinder: Pick<CylinderRow, "waterCapacityKg" | "re
     };
   }
   if (cylinder.kind !== "recovery") {
-    return { maxContentsKg, referenceTempC: CYLINDER_REFERENCE_TEMP_C, check: null, note: "Filled by the supplier: not judged against the recovery limit." };
+    return {
+      maxContentsKg,
+      referenceTempC: CYLINDER_REFERENCE_TEMP_C,
+      check: null,
+      note: "Filled by the supplier: not judged against the recovery limit.",
+    };
   }
   const verdict = judgeCylinderFill({ contentsKg: Math.max(0, contentsKg), maxContentsKg });
   return {
@@ -79,7 +91,9 @@ export function toCylinder(row: CylinderRow): Cylinder {
 /** Voided movements stay on the lists, struck through, but count in no sum of kilograms. */
 const sumKg = (movements: readonly MovementRow[], kinds: readonly MovementKind[]) =>
   Math.round(
-    movements.filter((movement) => movement.voided === null && kinds.includes(movement.kind)).reduce((sum, movement) => sum + movement.kg, 0) * 1000,
+    movements
+      .filter((movement) => movement.voided === null && kinds.includes(movement.kind))
+      .reduce((sum, movement) => sum + movement.kg, 0) * 1000,
   ) / 1000;
 
 export const ADDED_KINDS: readonly MovementKind[] = ["added-new", "added-reclaimed"];
@@ -103,7 +117,10 @@ export function circuitBalance(
   const weighedInKg = Math.round((reusedKg + addedKg) * 1000) / 1000;
   const fullWeighIn = recoveredKg > 0 || declared !== undefined;
   const lineAdjustmentKg = declared?.lineAdjustmentKg ?? 0;
-  const check = fullWeighIn && weighedInKg > 0 ? chargeAgainstNameplate({ nameplateKg: nameplate.factoryChargeKg, weighedInKg, lineAdjustmentKg }) : null;
+  const check =
+    fullWeighIn && weighedInKg > 0
+      ? chargeAgainstNameplate({ nameplateKg: nameplate.factoryChargeKg, weighedInKg, lineAdjustmentKg })
+      : null;
   return {
     circuit: nameplate.number,
     nameplateKg: nameplate.factoryChargeKg,
@@ -168,7 +185,10 @@ export function topUps(movements: readonly MovementRow[]): EquipmentRefrigerant[
  * opening the period (what it replaced leaked over an unknown time), so two top-ups at least
  * a day apart are needed.
  */
-export function leakRate(events: EquipmentRefrigerant["topUps"], nameplateKg: number): EquipmentRefrigerant["leakRate"] {
+export function leakRate(
+  events: EquipmentRefrigerant["topUps"],
+  nameplateKg: number,
+): EquipmentRefrigerant["leakRate"] {
   if (events.length < 2) return null;
   const span = Date.parse(events.at(-1)!.date) - Date.parse(events[0]!.date);
   if (span < 86_400_000) return null;

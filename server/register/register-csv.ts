@@ -68,6 +68,9 @@ export function registerCsvLine(movement: MovementRow, licenceNumbers: ReadonlyM
 export const registerCsvHeader = (): string => csvLine([...REGISTER_CSV_COLUMNS]);
 
 /** The whole export at once: the header and a line per movement (the route streams the same lines in chunks). */
-export function registerCsv(movements: readonly MovementRow[], licenceNumbers: ReadonlyMap<string, string> = new Map()): string {
+export function registerCsv(
+  movements: readonly MovementRow[],
+  licenceNumbers: ReadonlyMap<string, string> = new Map(),
+): string {
   return registerCsvHeader() + movements.map((movement) => registerCsvLine(movement, licenceNumbers)).join("");
 }

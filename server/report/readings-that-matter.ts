@@ -17,10 +17,14 @@ export interface ReportReadings<T> {
  * @param readings one circuit's standing readings, in the order taken
  * @param adjustmentTimes ISO times of the adjustments that apply to the circuit
  */
-export function readingsThatMatter<T extends { takenAt: string | number | Date }>(readings: readonly T[], adjustmentTimes: readonly string[]): ReportReadings<T> {
+export function readingsThatMatter<T extends { takenAt: string | number | Date }>(
+  readings: readonly T[],
+  adjustmentTimes: readonly string[],
+): ReportReadings<T> {
   if (readings.length <= REPORT_ALL_READINGS_UP_TO) return { readings: [...readings], leftOut: 0 };
   const keep = new Set<number>([0]);
-  for (let index = Math.max(0, readings.length - REPORT_LATEST_READINGS); index < readings.length; index++) keep.add(index);
+  for (let index = Math.max(0, readings.length - REPORT_LATEST_READINGS); index < readings.length; index++)
+    keep.add(index);
   const times = readings.map((reading) => new Date(reading.takenAt).getTime());
   for (const at of adjustmentTimes.map((time) => Date.parse(time))) {
     // The first reading at or after the change, and the one before it.

@@ -12,7 +12,13 @@ const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (character) => `&#
  * circuit, what was changed, the sign-off) and a link to the full printable report.
  * Metric units, as stored; times in `timeZone` (the sender's, an IANA name), named beside them.
  */
-export function visitReportMail(visit: Visit, reportUrl: string, to: string, organisationId: string, timeZone = "UTC"): MailMessage {
+export function visitReportMail(
+  visit: Visit,
+  reportUrl: string,
+  to: string,
+  organisationId: string,
+  timeZone = "UTC",
+): MailMessage {
   // Voided records are corrections: the report leaves them out (the audit trail keeps them).
   // The detail carries each circuit's latest page of readings only; its log holds the latest standing one.
   const logs = visit.circuitLogs.filter((log) => log.readingCount > 0 && log.keyReadings.length > 0);
@@ -35,7 +41,8 @@ export function visitReportMail(visit: Visit, reportUrl: string, to: string, org
   if (logs.length === 0) lines.push("No readings were recorded.");
   if (adjustments.length > 0) {
     lines.push("", "Work done:");
-    for (const adjustment of adjustments) lines.push(`  - ${adjustment.description}${adjustment.amountKg != null ? ` (${adjustment.amountKg} kg)` : ""}`);
+    for (const adjustment of adjustments)
+      lines.push(`  - ${adjustment.description}${adjustment.amountKg != null ? ` (${adjustment.amountKg} kg)` : ""}`);
   }
   lines.push("", `Full report: ${reportUrl}`);
   const text = lines.join("\n");

@@ -164,13 +164,11 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     });
     if (fields.mode === "preview") return void res.json({ ...summary, stored: 0 });
     if (fields.mode === "all" && summary.problems.length > 0) {
-      return void res
-        .status(422)
-        .json({
-          message: `${summary.problems.length} row(s) have problems: nothing was stored`,
-          ...summary,
-          stored: 0,
-        });
+      return void res.status(422).json({
+        message: `${summary.problems.length} row(s) have problems: nothing was stored`,
+        ...summary,
+        stored: 0,
+      });
     }
     const stored = await storeImportedReadings(db, organisationId, {
       visitId: visit.id,

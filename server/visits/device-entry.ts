@@ -19,9 +19,17 @@ export const REPLAYED_HEADER = "Idempotent-Replayed";
  * time entered after the fact (a recovery made before the visit was opened in the app, a
  * register line written up later) — are held to the future bound only.
  */
-export function requireDeviceTime(field: string, iso: string | undefined, visit: { startedAt: Date }, { backDated = false, nowMs = Date.now() } = {}): void {
+export function requireDeviceTime(
+  field: string,
+  iso: string | undefined,
+  visit: { startedAt: Date },
+  { backDated = false, nowMs = Date.now() } = {},
+): void {
   if (iso === undefined) return;
-  const problem = deviceTimeProblem(Date.parse(iso), { nowMs, visitStartedMs: backDated ? -Infinity : visit.startedAt.getTime() });
+  const problem = deviceTimeProblem(Date.parse(iso), {
+    nowMs,
+    visitStartedMs: backDated ? -Infinity : visit.startedAt.getTime(),
+  });
   if (problem) throw new HttpError(400, "Some fields need attention", { [field]: problem });
 }
 

@@ -77,7 +77,10 @@ export interface ReadingSaverOptions {
 }
 
 /** @returns save(), which resolves to the stored reading or rejects with that save's own refusal. */
-export function createReadingSaver(db: Database, { maxGatherMs = MAX_GATHER_MS }: ReadingSaverOptions = {}): (save: ReadingSave) => Promise<Reading> {
+export function createReadingSaver(
+  db: Database,
+  { maxGatherMs = MAX_GATHER_MS }: ReadingSaverOptions = {},
+): (save: ReadingSave) => Promise<Reading> {
   const queue: Pending[] = [];
   let writing = false;
   let lastArrival = 0;
@@ -85,7 +88,8 @@ export function createReadingSaver(db: Database, { maxGatherMs = MAX_GATHER_MS }
   /** Waits a turn at a time while saves keep arriving, then writes a batch. */
   function gather(since: number, seen: number): void {
     setImmediate(() => {
-      if (queue.length > seen && queue.length < MAX_BATCH && performance.now() - since < maxGatherMs) return gather(since, queue.length);
+      if (queue.length > seen && queue.length < MAX_BATCH && performance.now() - since < maxGatherMs)
+        return gather(since, queue.length);
       void write();
     });
   }
@@ -160,10 +164,15 @@ async function saveTogether(tx: Database, batch: Pending[]): Promise<Outcome[]> 
   // Readings the visits already hold under a client id a save names: those saves are repeats.
   const held = await readingsByClientId(
     tx,
-    batch.flatMap(({ save }) => (save.body.success ? [{ visitId: save.visitId, clientId: save.body.data.clientId }] : [])),
+    batch.flatMap(({ save }) =>
+      save.body.success ? [{ visitId: save.visitId, clientId: save.body.data.clientId }] : [],
+    ),
   );
   const heldByKey = new Map(held.map((row) => [`${row.visitId}:${row.clientId}`, row]));
-  const heldPeople = await peopleById(tx, held.flatMap((row) => [row.recordedBy, row.voidedBy]));
+  const heldPeople = await peopleById(
+    tx,
+    held.flatMap((row) => [row.recordedBy, row.voidedBy]),
+  );
 
   const outcomes: Outcome[] = [];
   const rows: { index: number; row: NewReading }[] = [];

@@ -38,11 +38,19 @@ export function settledChargeReference(runLog: WeighInRunLog): SettledChargeRefe
   let nextAdjustment = 0;
   const series: TrendReading[] = logged.map((reading) => {
     let adjustment: string | undefined;
-    while (nextAdjustment < runLog.adjustments.length && runLog.adjustments[nextAdjustment]!.at.getTime() <= reading.takenAt.getTime()) {
+    while (
+      nextAdjustment < runLog.adjustments.length &&
+      runLog.adjustments[nextAdjustment]!.at.getTime() <= reading.takenAt.getTime()
+    ) {
       adjustment = runLog.adjustments[nextAdjustment]!.description;
       nextAdjustment += 1;
     }
-    return { takenAt: reading.takenAt.toISOString(), input: reading.input, result: reading.result, ...(adjustment ? { adjustment } : {}) };
+    return {
+      takenAt: reading.takenAt.toISOString(),
+      input: reading.input,
+      result: reading.result,
+      ...(adjustment ? { adjustment } : {}),
+    };
   });
   let settledAt: number;
   try {

@@ -88,8 +88,19 @@ const SUMMARIES: Record<VoidableKind, (row: RawRow) => string> = {
  * The void this body asks for, if this person already made it (same record, same reason): a
  * repeated send is answered with it (README decision 026) whatever the visit's status now.
  */
-export const findRepeatedVoid = (db: Database, organisationId: string, visitId: string, body: VoidBody, actorId: string) =>
-  findVoidEvent(db, organisationId, visitId, { recordKind: body.kind, recordId: body.recordId, reason: body.reason.trim(), actorId });
+export const findRepeatedVoid = (
+  db: Database,
+  organisationId: string,
+  visitId: string,
+  body: VoidBody,
+  actorId: string,
+) =>
+  findVoidEvent(db, organisationId, visitId, {
+    recordKind: body.kind,
+    recordId: body.recordId,
+    reason: body.reason.trim(),
+    actorId,
+  });
 
 /**
  * Voids one record of the visit and writes the audit line. 404 when the visit has no such
@@ -141,7 +152,14 @@ export async function voidVisitRecord(
  * with the same reason, in the same transaction, so the run log and the register never show
  * different kilograms. Each void gets its own line in the audit trail.
  */
-async function voidLinkedChargeEntry(tx: Database, organisationId: string, visitId: string, body: VoidBody, row: RawRow, actorId: string): Promise<void> {
+async function voidLinkedChargeEntry(
+  tx: Database,
+  organisationId: string,
+  visitId: string,
+  body: VoidBody,
+  row: RawRow,
+  actorId: string,
+): Promise<void> {
   let linked: { kind: VoidableKind; row: RawRow } | undefined;
   if (body.kind === "adjustment" && typeof row.movement_id === "string") {
     const updated = await tx.execute<RawRow>(sql`

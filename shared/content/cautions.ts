@@ -50,7 +50,8 @@ export const cautions: Record<CautionTopic, Caution> = {
       "Never purge with air or oxygen; vent the vacuum pump exhaust away from ignition sources.",
       "Never charge a flammable refrigerant into equipment designed for a non-flammable one.",
     ],
-    source: "IEC 60335-2-40 servicing requirements as reproduced in makers' service manuals; state gas-work licensing rules",
+    source:
+      "IEC 60335-2-40 servicing requirements as reproduced in makers' service manuals; state gas-work licensing rules",
   },
   toxic: {
     topic: "toxic",
@@ -108,7 +109,8 @@ export const cautions: Record<CautionTopic, Caution> = {
       "Carry gauges, cylinders and tools up by hoist or line, not in your hands on the ladder; secure the ladder at the top.",
       "Stop in high wind, rain or ice; hot roof sheeting and glare tire you faster than you notice.",
     ],
-    source: "Work-at-height regulations and codes of practice (e.g. Safe Work Australia, Managing the risk of falls at workplaces; OSHA 29 CFR 1926 Subpart M); common practice",
+    source:
+      "Work-at-height regulations and codes of practice (e.g. Safe Work Australia, Managing the risk of falls at workplaces; OSHA 29 CFR 1926 Subpart M); common practice",
   },
   "hot-surface": {
     topic: "hot-surface",

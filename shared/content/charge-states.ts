@@ -38,12 +38,14 @@ export const chargeStateText: Record<ChargeState, ChargeStateText> = {
   "low-evaporator-airflow": {
     title: "Low airflow across the evaporator",
     short: "Low evap air",
-    nextStep: "Check filters, coil (ice), fan speed and belts, and on refrigeration the defrost, before touching the charge.",
+    nextStep:
+      "Check filters, coil (ice), fan speed and belts, and on refrigeration the defrost, before touching the charge.",
   },
   "overfeeding-metering": {
     title: "Metering device overfeeding",
     short: "Overfeeding",
-    nextStep: "Check the TXV bulb is tight, insulated and at the right spot on the suction line, then the valve setting; a stuck or oversized valve (or orifice) needs replacing. Do not add refrigerant.",
+    nextStep:
+      "Check the TXV bulb is tight, insulated and at the right spot on the suction line, then the valve setting; a stuck or oversized valve (or orifice) needs replacing. Do not add refrigerant.",
   },
   "condenser-airflow": {
     title: "Condenser not rejecting heat",

@@ -58,7 +58,13 @@ function partsOf(instant: Instant, timeZone: string | undefined): Parts | null {
   if (Number.isNaN(date.getTime())) return null;
   const found: Record<string, string> = {};
   for (const part of formatterFor(timeZone).formatToParts(date)) found[part.type] = part.value;
-  return { day: Number(found.day), month: Number(found.month), year: Number(found.year), hour: found.hour ?? "00", minute: found.minute ?? "00" };
+  return {
+    day: Number(found.day),
+    month: Number(found.month),
+    year: Number(found.year),
+    hour: found.hour ?? "00",
+    minute: found.minute ?? "00",
+  };
 }
 
 const dateOf = (parts: Parts) => `${parts.day} ${MONTHS[parts.month - 1]} ${parts.year}`;

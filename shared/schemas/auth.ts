@@ -83,9 +83,7 @@ export const OrganisationNameSchema = text()
   .max(NAME_MAX_LENGTH, `At most ${NAME_MAX_LENGTH} characters`);
 
 /** One-time tokens from e-mailed links: 32 random bytes in base64url. */
-export const TokenSchema = text()
-  .min(20, "This link is incomplete")
-  .max(100, "This link is not valid");
+export const TokenSchema = text().min(20, "This link is incomplete").max(100, "This link is not valid");
 
 /** POST /api/auth/sign-up: a new service company and its first owner. */
 export const SignUpSchema = z.object({
@@ -100,7 +98,9 @@ export type SignUp = z.infer<typeof SignUpSchema>;
 export const SignInSchema = z.object({
   email: EmailSchema,
   // Tabs and line breaks pass: a password set before the text rules must still sign in.
-  password: text({ trim: false, multiline: true }).min(1, "Enter your password").max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters`),
+  password: text({ trim: false, multiline: true })
+    .min(1, "Enter your password")
+    .max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters`),
 });
 export type SignIn = z.infer<typeof SignInSchema>;
 

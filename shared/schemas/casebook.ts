@@ -231,7 +231,10 @@ export const GenerateCaseSchema = z
     refrigerant: text({ error: "Choose the refrigerant" })
       .min(1, "Choose the refrigerant")
       // The generator's own list: a case id naming any other refrigerant is not a case.
-      .refine((id) => (GENERATOR_REFRIGERANTS as readonly string[]).includes(id), `The generator makes cases for ${GENERATOR_REFRIGERANTS.join(", ")}`),
+      .refine(
+        (id) => (GENERATOR_REFRIGERANTS as readonly string[]).includes(id),
+        `The generator makes cases for ${GENERATOR_REFRIGERANTS.join(", ")}`,
+      ),
     meteringDevice: MeteringDeviceSchema,
     fault: GeneratorFaultSchema,
     /** What the equipment does; comfort cooling when absent. */
@@ -247,7 +250,8 @@ export const GenerateCaseSchema = z
   // A fixed orifice belongs to air conditioning, a capillary to small units and cabinets, never to a chiller.
   .refine((options) => GENERATOR_DEVICES[options.application ?? "comfort-cooling"].includes(options.meteringDevice), {
     path: ["meteringDevice"],
-    message: "That metering device is not used in that application: choose a TXV or EEV (or a capillary for small refrigeration)",
+    message:
+      "That metering device is not used in that application: choose a TXV or EEV (or a capillary for small refrigeration)",
   });
 export type GenerateCase = z.infer<typeof GenerateCaseSchema>;
 
@@ -257,10 +261,19 @@ export type GenerateCase = z.infer<typeof GenerateCaseSchema>;
  * "~" never occurs in refrigerant names, devices or faults, and needs no URL escaping.
  */
 const GENERATED_PREFIX = "gen";
-export type GeneratedCaseOptions = Omit<GenerateCase, "seed" | "application"> & { seed: number; application?: Application };
+export type GeneratedCaseOptions = Omit<GenerateCase, "seed" | "application"> & {
+  seed: number;
+  application?: Application;
+};
 
 export function generatedCaseId(options: GeneratedCaseOptions): string {
-  const parts: (string | number)[] = [GENERATED_PREFIX, options.seed, options.meteringDevice, options.fault, options.refrigerant];
+  const parts: (string | number)[] = [
+    GENERATED_PREFIX,
+    options.seed,
+    options.meteringDevice,
+    options.fault,
+    options.refrigerant,
+  ];
   // Comfort cooling needs no part of its own, so ids made before applications existed still work.
   if (options.application && options.application !== "comfort-cooling") parts.push(options.application);
   return parts.join("~");

@@ -57,17 +57,22 @@ export type CircuitChargeReferences = z.infer<typeof CircuitChargeReferencesSche
 export const ChargeReferencesResponseSchema = z.object({ circuits: z.array(CircuitChargeReferencesSchema) });
 export type ChargeReferencesResponse = z.infer<typeof ChargeReferencesResponseSchema>;
 
-const noteSchema = text({ multiline: true }).max(MAX_CLEAR_REASON_LENGTH, `Keep the note under ${MAX_CLEAR_REASON_LENGTH} characters`).optional();
+const noteSchema = text({ multiline: true })
+  .max(MAX_CLEAR_REASON_LENGTH, `Keep the note under ${MAX_CLEAR_REASON_LENGTH} characters`)
+  .optional();
 
 /**
  * PUT /api/equipment/:id/charge-references/:circuit: from one of the circuit's readings (its
  * computed subcooling, superheat and saturation temperatures, and its measured air), or from
  * values typed in (e.g. a commissioning sheet). Strict: one or the other, nothing else.
  */
-export const ChargeReferenceSetSchema = z.union([
-  z.strictObject({ readingId: z.uuid("Choose a reading of this circuit"), note: noteSchema }),
-  z.strictObject({ values: ChargeReferenceSchema, note: noteSchema }),
-], { error: "Send either readingId (a reading of this circuit) or values (the reference point)" });
+export const ChargeReferenceSetSchema = z.union(
+  [
+    z.strictObject({ readingId: z.uuid("Choose a reading of this circuit"), note: noteSchema }),
+    z.strictObject({ values: ChargeReferenceSchema, note: noteSchema }),
+  ],
+  { error: "Send either readingId (a reading of this circuit) or values (the reference point)" },
+);
 export type ChargeReferenceSet = z.input<typeof ChargeReferenceSetSchema>;
 
 /** DELETE /api/equipment/:id/charge-references/:circuit: the reason stays in the history. */

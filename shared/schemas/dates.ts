@@ -26,7 +26,9 @@ export function isStorableInstant(ms: number): boolean {
 
 /** An ISO 8601 date-time with an offset (`2026-07-01T09:30:00+10:00` or `…Z`) that can be stored. */
 export function instant(error = "Use an ISO 8601 date and time, like 2026-07-01T09:30:00+10:00") {
-  return z.iso.datetime({ offset: true, error }).refine((value) => isStorableInstant(Date.parse(value)), OUT_OF_RANGE_MESSAGE);
+  return z.iso
+    .datetime({ offset: true, error })
+    .refine((value) => isStorableInstant(Date.parse(value)), OUT_OF_RANGE_MESSAGE);
 }
 
 /** Start of a period bound (ms since the epoch): a calendar date starts at 00:00 UTC. */

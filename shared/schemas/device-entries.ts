@@ -31,7 +31,10 @@ export const DEVICE_CLOCK_SKEW_MS = 2 * 60_000;
  * not later than now plus the skew, and not earlier than the visit's start minus the skew.
  * Times in ms since the epoch; the visit's start and now are the server's.
  */
-export function deviceTimeProblem(takenAtMs: number, { nowMs, visitStartedMs }: { nowMs: number; visitStartedMs: number }): string | undefined {
+export function deviceTimeProblem(
+  takenAtMs: number,
+  { nowMs, visitStartedMs }: { nowMs: number; visitStartedMs: number },
+): string | undefined {
   if (takenAtMs > nowMs + DEVICE_CLOCK_SKEW_MS) {
     return "This time is in the future by the server's clock: check the date and time set on the device";
   }

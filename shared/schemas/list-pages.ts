@@ -43,7 +43,12 @@ const direction = z.enum(SORT_DIRECTIONS, { error: "The direction is asc or desc
 const statuses = z
   .string()
   .transform((value) => value.split(",").filter(Boolean))
-  .pipe(z.array(VisitStatusSchema, { error: `A status is one of ${VISIT_STATUSES.join(", ")}` }).min(1).max(VISIT_STATUSES.length))
+  .pipe(
+    z
+      .array(VisitStatusSchema, { error: `A status is one of ${VISIT_STATUSES.join(", ")}` })
+      .min(1)
+      .max(VISIT_STATUSES.length),
+  )
   .optional();
 
 /** The columns the jobs list sorts by on the server; counts and crew are per page, so not sortable. */
@@ -87,7 +92,9 @@ export type EquipmentListParams = Omit<z.input<typeof EquipmentListQuerySchema>,
  * GET /api/register: the period and technician of the CSV export, a page at a time, oldest
  * first unless `dir=desc` (the screen shows the latest lines first).
  */
-export const RegisterPageQuerySchema = z.object({ ...REGISTER_FILTER_FIELDS, dir: direction, cursor, limit }).refine(...periodInOrder);
+export const RegisterPageQuerySchema = z
+  .object({ ...REGISTER_FILTER_FIELDS, dir: direction, cursor, limit })
+  .refine(...periodInOrder);
 export type RegisterPageQuery = z.output<typeof RegisterPageQuerySchema>;
 export type RegisterPageParams = Omit<z.input<typeof RegisterPageQuerySchema>, "limit"> & { limit?: number };
 

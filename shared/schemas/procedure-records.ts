@@ -35,7 +35,9 @@ import { text } from "./text.ts";
 import { deviceTime, optionalClientId } from "./device-entries.ts";
 
 export const MAX_NOTE_LENGTH = 500;
-const NoteSchema = text({ multiline: true }).max(MAX_NOTE_LENGTH, `Keep notes under ${MAX_NOTE_LENGTH} characters`).optional();
+const NoteSchema = text({ multiline: true })
+  .max(MAX_NOTE_LENGTH, `Keep notes under ${MAX_NOTE_LENGTH} characters`)
+  .optional();
 const CircuitSchema = z.number().int("Circuits are numbered 1, 2, 3…").min(1).max(MAX_CIRCUITS).optional().nullable();
 
 /** The verdict of a whole record: the worst of its checks, with that check's reason and source. */
@@ -47,9 +49,15 @@ export type OverallVerdict = z.infer<typeof OverallVerdictSchema>;
 // ---------------------------------------------------------------------------------------------
 
 export const ELECTRICAL_TARGETS = ["compressor", "fan", "supply"] as const;
-export const ElectricalTargetSchema = z.enum(ELECTRICAL_TARGETS, { error: "Choose what was checked: compressor, fan or supply" });
+export const ElectricalTargetSchema = z.enum(ELECTRICAL_TARGETS, {
+  error: "Choose what was checked: compressor, fan or supply",
+});
 export type ElectricalTarget = z.infer<typeof ElectricalTargetSchema>;
-export const ELECTRICAL_TARGET_LABELS: Record<ElectricalTarget, string> = { compressor: "Compressor", fan: "Fan motor", supply: "Supply" };
+export const ELECTRICAL_TARGET_LABELS: Record<ElectricalTarget, string> = {
+  compressor: "Compressor",
+  fan: "Fan motor",
+  supply: "Supply",
+};
 
 /** One insulation reading to earth, named by the point tested (e.g. "C to earth"). */
 export const InsulationReadingSchema = InsulationResistanceInputSchema.omit({ kind: true }).extend({
@@ -70,22 +78,40 @@ export const ElectricalCheckBodySchema = z
     windingOhms: WindingBalanceInputSchema.shape.ohms.optional(),
     /** A single-phase compressor's terminals C–R, C–S, R–S (instead of three-phase T1–T2…). */
     singlePhaseWindingOhms: SinglePhaseWindingInputSchema.optional(),
-    runningAmps: z.array(RunningCurrentInputSchema.shape.amps).min(1).max(3, "Enter at most three phase currents").optional(),
+    runningAmps: z
+      .array(RunningCurrentInputSchema.shape.amps)
+      .min(1)
+      .max(3, "Enter at most three phase currents")
+      .optional(),
     ratedA: RunningCurrentInputSchema.shape.ratedA.optional(),
     note: NoteSchema,
     clientId: optionalClientId,
     takenAt: deviceTime("takenAt"),
   })
   // A record with nothing measured says nothing; ask for at least one reading.
-  .refine((body) => Boolean(body.supplyVolts?.length || body.insulation?.length || body.windingOhms || body.singlePhaseWindingOhms || body.runningAmps?.length), {
-    path: ["supplyVolts"],
-    message: "Enter at least one measurement: supply voltage, insulation, winding resistance or running current",
-  })
+  .refine(
+    (body) =>
+      Boolean(
+        body.supplyVolts?.length ||
+        body.insulation?.length ||
+        body.windingOhms ||
+        body.singlePhaseWindingOhms ||
+        body.runningAmps?.length,
+      ),
+    {
+      path: ["supplyVolts"],
+      message: "Enter at least one measurement: supply voltage, insulation, winding resistance or running current",
+    },
+  )
   // The supply has no windings or running current of its own.
-  .refine((body) => body.target !== "supply" || (!body.windingOhms && !body.singlePhaseWindingOhms && !body.runningAmps?.length), {
-    path: ["target"],
-    message: "Winding resistance and running current belong to a compressor or fan check",
-  })
+  .refine(
+    (body) =>
+      body.target !== "supply" || (!body.windingOhms && !body.singlePhaseWindingOhms && !body.runningAmps?.length),
+    {
+      path: ["target"],
+      message: "Winding resistance and running current belong to a compressor or fan check",
+    },
+  )
   // C, R and S are a compressor's terminals; one motor has either three-phase or single-phase windings.
   .refine((body) => !body.singlePhaseWindingOhms || (body.target === "compressor" && !body.windingOhms), {
     path: ["singlePhaseWindingOhms"],
@@ -102,7 +128,10 @@ export const ElectricalCheckInputSchema = z.object({
   insulation: z.array(z.object({ megohms: z.number(), testVoltageV: z.number(), point: z.string().optional() })),
   windingOhms: z.tuple([z.number(), z.number(), z.number()]).nullable(),
   /** Absent on checks saved before single-phase windings were recorded. */
-  singlePhaseWindingOhms: z.object({ commonRun: z.number(), commonStart: z.number(), runStart: z.number() }).nullable().optional(),
+  singlePhaseWindingOhms: z
+    .object({ commonRun: z.number(), commonStart: z.number(), runStart: z.number() })
+    .nullable()
+    .optional(),
   runningAmps: z.array(z.number()).nullable(),
   ratedA: z.number().nullable(),
   note: z.string().nullable(),
@@ -132,14 +161,24 @@ const RecordBaseSchema = z.object({
   voided: VoidInfoSchema,
 });
 
-export const ElectricalCheckSchema = RecordBaseSchema.extend({ input: ElectricalCheckInputSchema, result: ElectricalCheckResultSchema });
+export const ElectricalCheckSchema = RecordBaseSchema.extend({
+  input: ElectricalCheckInputSchema,
+  result: ElectricalCheckResultSchema,
+});
 export type ElectricalCheck = z.infer<typeof ElectricalCheckSchema>;
 
 // ---------------------------------------------------------------------------------------------
 // Leak search
 // ---------------------------------------------------------------------------------------------
 
-export const LEAK_METHODS = ["electronic-detector", "bubble-solution", "nitrogen-tracer", "uv-dye", "ultrasonic", "standing-pressure"] as const;
+export const LEAK_METHODS = [
+  "electronic-detector",
+  "bubble-solution",
+  "nitrogen-tracer",
+  "uv-dye",
+  "ultrasonic",
+  "standing-pressure",
+] as const;
 export const LeakMethodSchema = z.enum(LEAK_METHODS, { error: "Choose how you searched" });
 export type LeakMethod = z.infer<typeof LeakMethodSchema>;
 export const LEAK_METHOD_LABELS: Record<LeakMethod, string> = {
@@ -163,10 +202,16 @@ export const LEAK_SEVERITY_LABELS: Record<LeakSeverity, string> = {
 export const RECHECK_RESULTS = ["not-done", "no-leak", "still-leaking"] as const;
 export const RecheckResultSchema = z.enum(RECHECK_RESULTS, { error: "Say what the recheck found" });
 export type RecheckResult = z.infer<typeof RecheckResultSchema>;
-export const RECHECK_LABELS: Record<RecheckResult, string> = { "not-done": "Not rechecked yet", "no-leak": "No leak on recheck", "still-leaking": "Still leaking" };
+export const RECHECK_LABELS: Record<RecheckResult, string> = {
+  "not-done": "Not rechecked yet",
+  "no-leak": "No leak on recheck",
+  "still-leaking": "Still leaking",
+};
 
 export const LeakFoundSchema = z.object({
-  location: text({ error: "Say where the leak is" }).min(2, "Say where the leak is, e.g. “Schrader core, suction service valve”").max(200),
+  location: text({ error: "Say where the leak is" })
+    .min(2, "Say where the leak is, e.g. “Schrader core, suction service valve”")
+    .max(200),
   severity: LeakSeveritySchema,
   repair: text().max(200).optional(),
   repaired: z.boolean().default(false),
@@ -228,7 +273,10 @@ export const StandingPressureBodySchema = z.strictObject(
   {
     error: (issue) =>
       issue.code === "unrecognized_keys"
-        ? unknownFieldsMessage(issue.keys, "A standing-pressure check takes the gauge pressure and the temperature; the refrigerant comes from the equipment, the atmosphere from the site.")
+        ? unknownFieldsMessage(
+            issue.keys,
+            "A standing-pressure check takes the gauge pressure and the temperature; the refrigerant comes from the equipment, the atmosphere from the site.",
+          )
         : undefined,
   },
 );
@@ -245,7 +293,10 @@ export const StandingPressureRecordInputSchema = z.object({
 });
 export type StandingPressureRecordInput = z.infer<typeof StandingPressureRecordInputSchema>;
 
-export const StandingPressureCheckSchema = RecordBaseSchema.extend({ input: StandingPressureRecordInputSchema, result: StandingPressureResultSchema });
+export const StandingPressureCheckSchema = RecordBaseSchema.extend({
+  input: StandingPressureRecordInputSchema,
+  result: StandingPressureResultSchema,
+});
 export type StandingPressureCheck = z.infer<typeof StandingPressureCheckSchema>;
 
 // ---------------------------------------------------------------------------------------------
@@ -278,7 +329,10 @@ export const MAX_ALLOWED_DROP_KPA = 50;
 const CompanyAllowedDropSchema = z
   .number({ error: "Allowed drop must be a number in kPa" })
   .min(0, "Allowed drop cannot be negative")
-  .max(MAX_ALLOWED_DROP_KPA, `An allowed drop above ${MAX_ALLOWED_DROP_KPA} kPa would pass a leaking joint; the test asks for no drop beyond gauge and thermometer error`);
+  .max(
+    MAX_ALLOWED_DROP_KPA,
+    `An allowed drop above ${MAX_ALLOWED_DROP_KPA} kPa would pass a leaking joint; the test asks for no drop beyond gauge and thermometer error`,
+  );
 
 /** Body of POST /api/visits/:id/pressure-tests. The rated pressure is the user's, checked against the nameplate. */
 export const PressureTestBodySchema = PressureTestInputSchema.extend({
@@ -290,7 +344,10 @@ export const PressureTestBodySchema = PressureTestInputSchema.extend({
     .max(MAX_GAUGE_PRESSURE_KPA, `Rated pressure above ${MAX_GAUGE_PRESSURE_KPA} kPa is not plausible`),
   /** Highest pressure applied, if above the start of the hold; kPa gauge. */
   testGaugeKPa: PressureTestInputSchema.shape.startGaugeKPa.optional(),
-  holdMinutes: z.number({ error: "Hold time must be a number of minutes" }).gt(0, "Hold time must be above 0 minutes").max(14 * 24 * 60, "A hold over two weeks is not plausible"),
+  holdMinutes: z
+    .number({ error: "Hold time must be a number of minutes" })
+    .gt(0, "Hold time must be above 0 minutes")
+    .max(14 * 24 * 60, "A hold over two weeks is not plausible"),
   /** Optional: the organisation's figure is used when absent. */
   allowedDropKPa: PressureTestInputSchema.shape.allowedDropKPa.optional(),
   note: NoteSchema,
@@ -315,7 +372,10 @@ export const PressureTestRecordResultSchema = z.object({
 });
 export type PressureTestRecordResult = z.infer<typeof PressureTestRecordResultSchema>;
 
-export const PressureTestSchema = RecordBaseSchema.extend({ input: PressureTestRecordInputSchema, result: PressureTestRecordResultSchema });
+export const PressureTestSchema = RecordBaseSchema.extend({
+  input: PressureTestRecordInputSchema,
+  result: PressureTestRecordResultSchema,
+});
 export type PressureTest = z.infer<typeof PressureTestSchema>;
 
 // ---------------------------------------------------------------------------------------------
@@ -332,9 +392,18 @@ export const MIN_TARGET_MICRONS = 50;
 export const MAX_TARGET_MICRONS = 1000;
 const TargetMicronsSchema = z
   .number({ error: "Target must be a number of microns" })
-  .min(MIN_TARGET_MICRONS, `A target below ${MIN_TARGET_MICRONS} microns is beyond what a field pump and micron gauge reach; makers ask for 250–500 µm`)
-  .max(MAX_TARGET_MICRONS, `A target above ${MAX_TARGET_MICRONS} microns leaves moisture in the system; makers ask for 250–500 µm, the trade norm is 500`);
-const MinutesSchema = z.number({ error: "Time must be a number of minutes" }).min(0, "Time cannot be negative").max(7 * 24 * 60, "An evacuation over a week is not plausible");
+  .min(
+    MIN_TARGET_MICRONS,
+    `A target below ${MIN_TARGET_MICRONS} microns is beyond what a field pump and micron gauge reach; makers ask for 250–500 µm`,
+  )
+  .max(
+    MAX_TARGET_MICRONS,
+    `A target above ${MAX_TARGET_MICRONS} microns leaves moisture in the system; makers ask for 250–500 µm, the trade norm is 500`,
+  );
+const MinutesSchema = z
+  .number({ error: "Time must be a number of minutes" })
+  .min(0, "Time cannot be negative")
+  .max(7 * 24 * 60, "An evacuation over a week is not plausible");
 
 /** Body of POST /api/visits/:id/evacuations: start one; samples may come now or later. */
 export const EvacuationCreateSchema = z.object({
@@ -365,7 +434,10 @@ export const EvacuationUpdateSchema = z
     targetMicrons: TargetMicronsSchema.optional(),
     note: NoteSchema,
   })
-  .refine((body) => Object.values(body).some((value) => value !== undefined), { path: ["isolatedAtMinutes"], message: "Nothing to change" });
+  .refine((body) => Object.values(body).some((value) => value !== undefined), {
+    path: ["isolatedAtMinutes"],
+    message: "Nothing to change",
+  });
 export type EvacuationUpdate = z.input<typeof EvacuationUpdateSchema>;
 
 export const EVACUATION_STAGES = ["pulling-down", "decay-test", "judged"] as const;
@@ -404,13 +476,24 @@ export type Evacuation = z.infer<typeof EvacuationSchema>;
 
 export const ElectricalCheckListSchema = z.object({
   electricalChecks: z.array(ElectricalCheckSchema),
-  defaults: z.object({ nameplateV: z.number().nullable(), phases: z.number().nullable(), compressorRlaA: z.number().nullable(), fanFlaA: z.number().nullable() }),
+  defaults: z.object({
+    nameplateV: z.number().nullable(),
+    phases: z.number().nullable(),
+    compressorRlaA: z.number().nullable(),
+    fanFlaA: z.number().nullable(),
+  }),
 });
 export const LeakSearchListSchema = z.object({ leakSearches: z.array(LeakSearchSchema) });
-export const StandingPressureCheckListSchema = z.object({ standingPressureChecks: z.array(StandingPressureCheckSchema) });
+export const StandingPressureCheckListSchema = z.object({
+  standingPressureChecks: z.array(StandingPressureCheckSchema),
+});
 export const PressureTestListSchema = z.object({
   pressureTests: z.array(PressureTestSchema),
-  defaults: z.object({ allowedDropKPa: z.number(), ratedHighSideKPa: z.number().nullable(), ratedLowSideKPa: z.number().nullable() }),
+  defaults: z.object({
+    allowedDropKPa: z.number(),
+    ratedHighSideKPa: z.number().nullable(),
+    ratedLowSideKPa: z.number().nullable(),
+  }),
 });
 export const EvacuationListSchema = z.object({
   evacuations: z.array(EvacuationSchema),
@@ -441,12 +524,18 @@ export const ProcedureSettingsUpdateSchema = z
     evacuationTargetMicrons: TargetMicronsSchema.nullable().optional(),
     pressureTestAllowedDropKPa: CompanyAllowedDropSchema.nullable().optional(),
   })
-  .refine((body) => Object.values(body).some((value) => value !== undefined), { path: ["evacuationTargetMicrons"], message: "Nothing to change" });
+  .refine((body) => Object.values(body).some((value) => value !== undefined), {
+    path: ["evacuationTargetMicrons"],
+    message: "Nothing to change",
+  });
 export type ProcedureSettingsUpdate = z.input<typeof ProcedureSettingsUpdateSchema>;
 
 /** Answer of GET/PATCH /api/organisation/settings: the overrides, the defaults they replace, and their version. */
 export const ProcedureSettingsResponseSchema = z.object({
-  settings: z.object({ evacuationTargetMicrons: z.number().nullable(), pressureTestAllowedDropKPa: z.number().nullable() }),
+  settings: z.object({
+    evacuationTargetMicrons: z.number().nullable(),
+    pressureTestAllowedDropKPa: z.number().nullable(),
+  }),
   defaults: z.object({ evacuationTargetMicrons: z.number(), pressureTestAllowedDropKPa: z.number() }),
   version: z.number().int(),
 });

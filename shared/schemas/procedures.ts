@@ -20,7 +20,12 @@ import {
   VOLTAGE_IMBALANCE_LIMITS,
   WINDING_BALANCE_LIMITS,
 } from "../engine/procedures/procedure-limits.ts";
-import { MAX_ATMOSPHERIC_PRESSURE_KPA, MAX_CURRENT_A, MAX_GAUGE_PRESSURE_KPA, MIN_ATMOSPHERIC_PRESSURE_KPA } from "./diagnosis.ts";
+import {
+  MAX_ATMOSPHERIC_PRESSURE_KPA,
+  MAX_CURRENT_A,
+  MAX_GAUGE_PRESSURE_KPA,
+  MIN_ATMOSPHERIC_PRESSURE_KPA,
+} from "./diagnosis.ts";
 import { dayOrInstant } from "./dates.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -109,13 +114,19 @@ const phaseAmps = nonNegative("Phase current", "A", MAX_CURRENT_A);
 
 /** Line-to-line voltages L1–L2, L2–L3, L3–L1 (V); a lost phase may read 0 V. */
 export const VoltageImbalanceInputSchema = z.object({
-  volts: threePhase("the line voltage", "V", phaseVolts).refine((volts) => volts.some((v) => v > 0), "At least one phase voltage must be above 0 V"),
+  volts: threePhase("the line voltage", "V", phaseVolts).refine(
+    (volts) => volts.some((v) => v > 0),
+    "At least one phase voltage must be above 0 V",
+  ),
 });
 export type VoltageImbalanceInput = z.infer<typeof VoltageImbalanceInputSchema>;
 
 /** Running current in each phase (A); a lost phase may read 0 A. */
 export const CurrentImbalanceInputSchema = z.object({
-  amps: threePhase("the running current", "A", phaseAmps).refine((amps) => amps.some((a) => a > 0), "At least one phase current must be above 0 A: is the motor running?"),
+  amps: threePhase("the running current", "A", phaseAmps).refine(
+    (amps) => amps.some((a) => a > 0),
+    "At least one phase current must be above 0 A: is the motor running?",
+  ),
 });
 export type CurrentImbalanceInput = z.infer<typeof CurrentImbalanceInputSchema>;
 
@@ -130,7 +141,9 @@ export const SupplyVoltageInputSchema = z.object({
 export type SupplyVoltageInput = z.infer<typeof SupplyVoltageInputSchema>;
 
 export const INSULATION_KINDS = ["compressor", "motor", "wiring"] as const;
-export const InsulationKindSchema = z.enum(INSULATION_KINDS, { error: "Say what was tested: compressor, motor or wiring" });
+export const InsulationKindSchema = z.enum(INSULATION_KINDS, {
+  error: "Say what was tested: compressor, motor or wiring",
+});
 export type InsulationKind = z.infer<typeof InsulationKindSchema>;
 
 /** One insulation-resistance reading to earth. Any reading is judged, none refused. */
@@ -159,7 +172,9 @@ export const SinglePhaseWindingInputSchema = z.object(
 export type SinglePhaseWindingInput = z.infer<typeof SinglePhaseWindingInputSchema>;
 
 export const RUNNING_CURRENT_KINDS = ["compressor-rla", "fan-fla"] as const;
-export const RunningCurrentKindSchema = z.enum(RUNNING_CURRENT_KINDS, { error: "Say which nameplate current this is: compressor RLA or fan FLA" });
+export const RunningCurrentKindSchema = z.enum(RUNNING_CURRENT_KINDS, {
+  error: "Say which nameplate current this is: compressor RLA or fan FLA",
+});
 export type RunningCurrentKind = z.infer<typeof RunningCurrentKindSchema>;
 
 /** One phase's running current against the nameplate RLA (compressor) or FLA (fan). */
@@ -183,8 +198,14 @@ export const PressureTestInputSchema = z.object({
   allowedDropKPa: nonNegative("Allowed drop", "kPa", MAX_GAUGE_PRESSURE_KPA),
   /** Site atmospheric pressure, kPa absolute; default 101.325. */
   atmosphericPressureKPa: number("Atmospheric pressure", "kPa absolute")
-    .min(MIN_ATMOSPHERIC_PRESSURE_KPA, `Atmospheric pressure below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`)
-    .max(MAX_ATMOSPHERIC_PRESSURE_KPA, `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`)
+    .min(
+      MIN_ATMOSPHERIC_PRESSURE_KPA,
+      `Atmospheric pressure below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`,
+    )
+    .max(
+      MAX_ATMOSPHERIC_PRESSURE_KPA,
+      `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`,
+    )
     .optional(),
 });
 export type PressureTestInput = z.infer<typeof PressureTestInputSchema>;
@@ -200,12 +221,21 @@ export type PressureTestInput = z.infer<typeof PressureTestInputSchema>;
  */
 export const StandingPressureInputSchema = z.object({
   refrigerant: z.string({ error: "Choose the refrigerant" }).trim().min(1, "Choose the refrigerant"),
-  standingGaugeKPa: number("Standing pressure", "kPa gauge").max(MAX_GAUGE_PRESSURE_KPA, `Standing pressure above ${MAX_GAUGE_PRESSURE_KPA} kPa gauge is beyond any refrigeration gauge`),
+  standingGaugeKPa: number("Standing pressure", "kPa gauge").max(
+    MAX_GAUGE_PRESSURE_KPA,
+    `Standing pressure above ${MAX_GAUGE_PRESSURE_KPA} kPa gauge is beyond any refrigeration gauge`,
+  ),
   equalisedTempC: temperature("Equalised temperature"),
   /** Site atmospheric pressure, kPa absolute; default 101.325. */
   atmosphericPressureKPa: number("Atmospheric pressure", "kPa absolute")
-    .min(MIN_ATMOSPHERIC_PRESSURE_KPA, `Atmospheric pressure below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`)
-    .max(MAX_ATMOSPHERIC_PRESSURE_KPA, `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`)
+    .min(
+      MIN_ATMOSPHERIC_PRESSURE_KPA,
+      `Atmospheric pressure below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`,
+    )
+    .max(
+      MAX_ATMOSPHERIC_PRESSURE_KPA,
+      `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`,
+    )
     .optional(),
 });
 export type StandingPressureInput = z.infer<typeof StandingPressureInputSchema>;
@@ -250,13 +280,20 @@ export const VacuumSamplesSchema = z
     // Rates need time to move forward; a repeated or earlier time is a typing error.
     for (let i = 1; i < samples.length; i++) {
       if (samples[i]!.minutes <= samples[i - 1]!.minutes) {
-        ctx.addIssue({ code: "custom", path: [i, "minutes"], message: "Each reading must be later than the one before it" });
+        ctx.addIssue({
+          code: "custom",
+          path: [i, "minutes"],
+          message: "Each reading must be later than the one before it",
+        });
       }
     }
   });
 
 /** Decay test readings, taken after the pump is valved off: at least two (start and end). */
-export const DecaySamplesSchema = VacuumSamplesSchema.refine((samples) => samples.length >= 2, "Enter at least two readings after valving off the pump: the first and the last");
+export const DecaySamplesSchema = VacuumSamplesSchema.refine(
+  (samples) => samples.length >= 2,
+  "Enter at least two readings after valving off the pump: the first and the last",
+);
 
 export const DecayOptionsSchema = z.object({
   /** Evacuation target, microns; default 500 [S4]. */
@@ -266,7 +303,10 @@ export const DecayOptionsSchema = z.object({
   /** Above this the rise is a leak, microns; default 5000 [S54]. */
   leakRiseMicrons: positive("Leak threshold", "microns", MAX_MICRONS).optional(),
   /** Later-half rise rate at most this fraction of the earlier-half rate counts as levelled; default 0.25. */
-  levelledRatio: number("Levelling ratio", "a fraction").min(0, "Levelling ratio cannot be negative").max(1, "Levelling ratio cannot exceed 1").optional(),
+  levelledRatio: number("Levelling ratio", "a fraction")
+    .min(0, "Levelling ratio cannot be negative")
+    .max(1, "Levelling ratio cannot exceed 1")
+    .optional(),
   /** A later-half rise no faster than this counts as level, microns per minute; default 2. */
   flatRiseMicronsPerMinute: nonNegative("Flat rise rate", "microns per minute", MAX_MICRONS).optional(),
 });
@@ -335,7 +375,9 @@ export const LeakEventSchema = z.object({
 export type LeakEvent = z.infer<typeof LeakEventSchema>;
 
 export const AnnualLeakRateInputSchema = z.object({
-  events: z.array(LeakEventSchema, { error: "Enter the refrigerant additions" }).min(1, "Enter at least one refrigerant addition"),
+  events: z
+    .array(LeakEventSchema, { error: "Enter the refrigerant additions" })
+    .min(1, "Enter at least one refrigerant addition"),
   nameplateKg: positive("Nameplate charge", "kg", MAX_REFRIGERANT_KG),
   /** Length of the period the events cover, days; without it the period runs from the first to the last event. */
   periodDays: positive("Period", "days", 100 * 365).optional(),
@@ -360,7 +402,13 @@ export type ChargeAgainstNameplateInput = z.infer<typeof ChargeAgainstNameplateI
 
 function overrides<T extends Record<string, number>>(defaults: T) {
   const shape = Object.fromEntries(
-    Object.keys(defaults).map((key) => [key, z.number({ error: `${key} must be a number` }).min(0, `${key} cannot be negative`).optional()]),
+    Object.keys(defaults).map((key) => [
+      key,
+      z
+        .number({ error: `${key} must be a number` })
+        .min(0, `${key} cannot be negative`)
+        .optional(),
+    ]),
   ) as { [K in keyof T]: z.ZodOptional<z.ZodNumber> };
   return z.object(shape).strict();
 }
@@ -424,7 +472,14 @@ export type PressureTestResult = z.infer<typeof PressureTestResultSchema>;
 export const VACUUM_UNITS = ["micron", "Pa"] as const;
 export type VacuumUnit = (typeof VACUUM_UNITS)[number];
 
-export const DECAY_CASES = ["held", "leak-past-threshold", "moisture-never-reached", "moisture-rose", "moisture-stayed-above", "leak-still-rising"] as const;
+export const DECAY_CASES = [
+  "held",
+  "leak-past-threshold",
+  "moisture-never-reached",
+  "moisture-rose",
+  "moisture-stayed-above",
+  "leak-still-rising",
+] as const;
 
 /**
  * The figures a decay verdict's sentence is built from, so it can be worded again in the unit
@@ -483,5 +538,9 @@ export const AnnualLeakRateSchema = z.object({
 });
 export type AnnualLeakRate = z.infer<typeof AnnualLeakRateSchema>;
 
-export const ChargeAgainstNameplateResultSchema = VerdictSchema.extend({ differenceKg: z.number(), percent: z.number(), expectedKg: z.number() });
+export const ChargeAgainstNameplateResultSchema = VerdictSchema.extend({
+  differenceKg: z.number(),
+  percent: z.number(),
+  expectedKg: z.number(),
+});
 export type ChargeAgainstNameplateResult = z.infer<typeof ChargeAgainstNameplateResultSchema>;

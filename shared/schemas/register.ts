@@ -41,7 +41,6 @@ export const CYLINDER_KIND_LABELS: Record<CylinderKind, string> = {
 
 export const MAX_LABEL_LENGTH = 60;
 
-
 const massKg = (label: string, max: number) =>
   z
     .number({ error: `${label} must be a number in kg` })
@@ -61,8 +60,14 @@ export const CylinderCreateSchema = z
       // An emptied field means "no serial", never an empty string in the record.
       .transform((value) => (value ? value : null)),
     kind: CylinderKindSchema,
-    refrigerant: text({ error: "Choose the refrigerant" }).refine(isKnownRefrigerant, "Choose a refrigerant from the list"),
-    waterCapacityKg: massKg("Water capacity", MAX_WATER_CAPACITY_KG).refine((value) => value > 0, "Water capacity must be above 0 kg"),
+    refrigerant: text({ error: "Choose the refrigerant" }).refine(
+      isKnownRefrigerant,
+      "Choose a refrigerant from the list",
+    ),
+    waterCapacityKg: massKg("Water capacity", MAX_WATER_CAPACITY_KG).refine(
+      (value) => value > 0,
+      "Water capacity must be above 0 kg",
+    ),
     tareKg: massKg("Tare", MAX_WATER_CAPACITY_KG).refine((value) => value > 0, "Tare must be above 0 kg"),
     /** What is in it on the day it is entered: gross weight on the scale minus the tare. */
     initialContentsKg: massKg("Contents", MAX_WATER_CAPACITY_KG).default(0),
@@ -126,7 +131,10 @@ export const MOVEMENT_KIND_LABELS: Record<MovementKind, string> = {
  * one (or straight from the unit's own receiver, with no cylinder); additions come from a new
  * or reclaimed cylinder; a recovery cylinder's contents are sent for reclaim.
  */
-export const MOVEMENT_CYLINDER_RULES: Record<MovementKind, { cylinderKinds: readonly CylinderKind[]; cylinderRequired: boolean; intoCylinder: boolean }> = {
+export const MOVEMENT_CYLINDER_RULES: Record<
+  MovementKind,
+  { cylinderKinds: readonly CylinderKind[]; cylinderRequired: boolean; intoCylinder: boolean }
+> = {
   recovered: { cylinderKinds: ["recovery"], cylinderRequired: true, intoCylinder: true },
   reused: { cylinderKinds: ["recovery"], cylinderRequired: false, intoCylinder: false },
   "added-new": { cylinderKinds: ["new"], cylinderRequired: true, intoCylinder: false },
@@ -205,7 +213,11 @@ export type Movement = z.infer<typeof MovementSchema>;
  */
 const HiddenMovementsSchema = z.number().int().min(0);
 
-export const CylinderDetailSchema = z.object({ cylinder: CylinderSchema, movements: z.array(MovementSchema), hiddenMovements: HiddenMovementsSchema });
+export const CylinderDetailSchema = z.object({
+  cylinder: CylinderSchema,
+  movements: z.array(MovementSchema),
+  hiddenMovements: HiddenMovementsSchema,
+});
 export type CylinderDetail = z.infer<typeof CylinderDetailSchema>;
 
 /** The answer to POST /api/visits/:id/refrigerant: the movement and, if it used one, its cylinder after it. */
@@ -278,13 +290,22 @@ export const RunLogChargeCheckSchema = z.object({
   registerOutKg: z.number(),
   agrees: z.boolean(),
   unlinked: z.array(
-    z.object({ id: z.uuid(), at: z.string(), circuit: z.number().int().nullable(), kind: z.enum(["charge-added", "charge-removed"]), amountKg: z.number() }),
+    z.object({
+      id: z.uuid(),
+      at: z.string(),
+      circuit: z.number().int().nullable(),
+      kind: z.enum(["charge-added", "charge-removed"]),
+      amountKg: z.number(),
+    }),
   ),
 });
 export type RunLogChargeCheck = z.infer<typeof RunLogChargeCheckSchema>;
 
 /** Into or out of the system, for the run log's two charge adjustment kinds. */
-export const MOVEMENT_DIRECTION: Record<Exclude<MovementKind, "sent-for-reclaim">, "charge-added" | "charge-removed"> = {
+export const MOVEMENT_DIRECTION: Record<
+  Exclude<MovementKind, "sent-for-reclaim">,
+  "charge-added" | "charge-removed"
+> = {
   recovered: "charge-removed",
   reused: "charge-added",
   "added-new": "charge-added",
@@ -337,10 +358,11 @@ export const REGISTER_FILTER_FIELDS = {
 };
 
 /** A period whose end comes before its start is a typing slip, not an empty register. */
-export const periodInOrder: [(value: { from?: string; to?: string }) => boolean, { path: string[]; message: string }] = [
-  (value) => !value.from || !value.to || boundStart(value.from) <= boundEnd(value.to),
-  { path: ["to"], message: "The end of the period is before its start" },
-];
+export const periodInOrder: [(value: { from?: string; to?: string }) => boolean, { path: string[]; message: string }] =
+  [
+    (value) => !value.from || !value.to || boundStart(value.from) <= boundEnd(value.to),
+    { path: ["to"], message: "The end of the period is before its start" },
+  ];
 
 /** Query of GET /api/register/export.csv (and the filters of GET /api/register). */
 export const RegisterQuerySchema = z.object(REGISTER_FILTER_FIELDS).refine(...periodInOrder);

@@ -1,4 +1,18 @@
-import { Gauge, ClipboardCheck, ClipboardList, Cylinder, GraduationCap, HardHat, Home, Mail, SlidersHorizontal, Table2, Users, Wrench, type LucideIcon } from "lucide-react";
+import {
+  Gauge,
+  ClipboardCheck,
+  ClipboardList,
+  Cylinder,
+  GraduationCap,
+  HardHat,
+  Home,
+  Mail,
+  SlidersHorizontal,
+  Table2,
+  Users,
+  Wrench,
+  type LucideIcon,
+} from "lucide-react";
 import { PERMISSIONS, type Role } from "@shared/schemas/auth.ts";
 import { paths } from "./paths.ts";
 
@@ -37,10 +51,16 @@ export const navigation: NavItem[] = [
  * Whether an item is the current section. Items may share a path and differ by query (Jobs
  * and the Review queue, /jobs?status=awaiting-review): the one whose query matches wins.
  */
-export function isNavItemActive(item: NavItem, location: { pathname: string; search: string }, items: readonly NavItem[]): boolean {
+export function isNavItemActive(
+  item: NavItem,
+  location: { pathname: string; search: string },
+  items: readonly NavItem[],
+): boolean {
   const matches = (candidate: NavItem) => {
     const url = new URL(candidate.href, "http://satura.invalid");
-    const onPath = candidate.matchPrefix ? location.pathname === url.pathname || location.pathname.startsWith(`${url.pathname}/`) : location.pathname === url.pathname;
+    const onPath = candidate.matchPrefix
+      ? location.pathname === url.pathname || location.pathname.startsWith(`${url.pathname}/`)
+      : location.pathname === url.pathname;
     if (!onPath) return false;
     const current = new URLSearchParams(location.search);
     return [...url.searchParams].every(([key, value]) => current.get(key) === value);
@@ -53,5 +73,7 @@ export function isNavItemActive(item: NavItem, location: { pathname: string; sea
 
 /** The items one user sees. */
 export function navigationFor(role: Role, features: { outbox: boolean }): NavItem[] {
-  return navigation.filter((item) => (!item.roles || item.roles.includes(role)) && (item.requires !== "outbox" || features.outbox));
+  return navigation.filter(
+    (item) => (!item.roles || item.roles.includes(role)) && (item.requires !== "outbox" || features.outbox),
+  );
 }

@@ -17,8 +17,14 @@ export const paths = {
   signUp: { path: "/sign-up", getHref: () => "/sign-up" },
   forgotPassword: { path: "/forgot-password", getHref: () => "/forgot-password" },
   // The server mails links to these two; keep them in step with server/routes/{auth,invitations}.ts.
-  resetPassword: { path: "/reset-password", getHref: (token: string) => `/reset-password?token=${encodeURIComponent(token)}` },
-  acceptInvitation: { path: "/accept-invitation", getHref: (token: string) => `/accept-invitation?token=${encodeURIComponent(token)}` },
+  resetPassword: {
+    path: "/reset-password",
+    getHref: (token: string) => `/reset-password?token=${encodeURIComponent(token)}`,
+  },
+  acceptInvitation: {
+    path: "/accept-invitation",
+    getHref: (token: string) => `/accept-invitation?token=${encodeURIComponent(token)}`,
+  },
 
   jobs: {
     path: "/jobs",
@@ -42,7 +48,10 @@ export const paths = {
     new: { path: "/casebook/new", getHref: () => "/casebook/new" },
     team: { path: "/casebook/team", getHref: () => "/casebook/team" },
     case: { path: "/casebook/cases/:caseId", getHref: (id: string) => `/casebook/cases/${encodeURIComponent(id)}` },
-    edit: { path: "/casebook/cases/:caseId/edit", getHref: (id: string) => `/casebook/cases/${encodeURIComponent(id)}/edit` },
+    edit: {
+      path: "/casebook/cases/:caseId/edit",
+      getHref: (id: string) => `/casebook/cases/${encodeURIComponent(id)}/edit`,
+    },
   },
 
   cylinders: { path: "/cylinders", getHref: () => "/cylinders" },

@@ -19,7 +19,10 @@ export interface CursorPages {
  * Pair it with PageControls (src/components/ui/data-table/page-controls.tsx).
  */
 export function useCursorPages(resetKey: string): CursorPages {
-  const [state, setState] = useState<{ key: string; stack: (string | undefined)[] }>({ key: resetKey, stack: [undefined] });
+  const [state, setState] = useState<{ key: string; stack: (string | undefined)[] }>({
+    key: resetKey,
+    stack: [undefined],
+  });
   // Reset during render (not in an effect) so the first page is asked for at once, not after a stale one.
   const current = state.key === resetKey ? state : { key: resetKey, stack: [undefined] };
   if (current !== state) setState(current);
@@ -27,6 +30,7 @@ export function useCursorPages(resetKey: string): CursorPages {
     cursor: current.stack.at(-1),
     pageNumber: current.stack.length,
     next: (cursor: string) => setState({ key: resetKey, stack: [...current.stack, cursor] }),
-    previous: () => setState({ key: resetKey, stack: current.stack.length > 1 ? current.stack.slice(0, -1) : current.stack }),
+    previous: () =>
+      setState({ key: resetKey, stack: current.stack.length > 1 ? current.stack.slice(0, -1) : current.stack }),
   };
 }

@@ -6,7 +6,11 @@ import { ApiError } from "./api/api-client.ts";
  * inputs, and returns the message to show above the form when no field took it. Values the
  * user typed stay as they are.
  */
-export function applyServerErrors<T extends FieldValues>(error: unknown, setError: UseFormSetError<T>, fieldNames: readonly Path<T>[]): string | null {
+export function applyServerErrors<T extends FieldValues>(
+  error: unknown,
+  setError: UseFormSetError<T>,
+  fieldNames: readonly Path<T>[],
+): string | null {
   if (!(error instanceof ApiError)) return error instanceof Error ? error.message : "Something went wrong. Try again.";
   let placed = false;
   for (const [name, message] of Object.entries(error.fields)) {

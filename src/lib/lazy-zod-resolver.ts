@@ -9,7 +9,9 @@ import type { z } from "zod";
  *
  * @example useForm({ resolver: lazyZodResolver(async () => (await import("@shared/schemas/auth.ts")).SignInSchema) })
  */
-export function lazyZodResolver<Values extends FieldValues>(loadSchema: () => Promise<z.ZodType<Values, Values>>): Resolver<Values> {
+export function lazyZodResolver<Values extends FieldValues>(
+  loadSchema: () => Promise<z.ZodType<Values, Values>>,
+): Resolver<Values> {
   let loaded: Promise<Resolver<Values>> | undefined;
   return async (values, context, options) => {
     loaded ??= Promise.all([import("@hookform/resolvers/zod"), loadSchema()]).then(

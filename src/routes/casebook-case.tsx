@@ -81,7 +81,10 @@ export default function CasebookCaseRoute() {
                 <Pencil aria-hidden className="size-5" /> Edit
               </Link>
               {data.status === "draft" && (
-                <Button disabled={publish.isPending} onClick={() => publish.mutate({ id: data.id, version: data.version ?? 0 })}>
+                <Button
+                  disabled={publish.isPending}
+                  onClick={() => publish.mutate({ id: data.id, version: data.version ?? 0 })}
+                >
                   <CheckCheck aria-hidden className="size-5" /> Publish to your company
                 </Button>
               )}
@@ -89,7 +92,11 @@ export default function CasebookCaseRoute() {
           )}
           {publish.isError &&
             (publish.error instanceof ApiError && publish.error.isStale ? (
-              <StaleWriteNotice message={publish.error.message} onReload={() => void item.refetch().then(() => publish.reset())} reloading={item.isFetching} />
+              <StaleWriteNotice
+                message={publish.error.message}
+                onReload={() => void item.refetch().then(() => publish.reset())}
+                reloading={item.isFetching}
+              />
             ) : (
               <FormAlert>{publish.error.message}</FormAlert>
             ))}

@@ -47,7 +47,9 @@ export default function CasebookEditorRoute() {
   const save = async (draft: CaseDraft) => {
     setStale(null);
     try {
-      const saved = caseId ? await update.mutateAsync({ id: caseId, draft, version: existing.data?.version ?? 0 }) : await create.mutateAsync(draft);
+      const saved = caseId
+        ? await update.mutateAsync({ id: caseId, draft, version: existing.data?.version ?? 0 })
+        : await create.mutateAsync(draft);
       navigate(paths.casebook.case.getHref(saved.id));
     } catch (error) {
       // Someone saved the case after this editor opened it: keep the text in the form, offer the latest.
@@ -89,7 +91,12 @@ export default function CasebookEditorRoute() {
           caseId && (
             <div className="space-y-2">
               <StaleWriteNotice message={stale} onReload={() => void reload()} reloading={existing.isFetching} />
-              <a href={paths.casebook.case.getHref(caseId)} target="_blank" rel="noreferrer" className="font-medium text-accent underline underline-offset-4">
+              <a
+                href={paths.casebook.case.getHref(caseId)}
+                target="_blank"
+                rel="noreferrer"
+                className="font-medium text-accent underline underline-offset-4"
+              >
                 Open the saved case in a new tab
               </a>
             </div>

@@ -14,7 +14,10 @@ import { parseDecimal } from "@/components/ui/field/number-input.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useOrganisationSettings, useUpdateOrganisationSettings } from "@/lib/api/organisation.ts";
 
-const LABELS = { evacuationTargetMicrons: "Evacuation target (µm)", pressureTestAllowedDropKPa: "Allowed pressure drop (kPa)" } as const;
+const LABELS = {
+  evacuationTargetMicrons: "Evacuation target (µm)",
+  pressureTestAllowedDropKPa: "Allowed pressure drop (kPa)",
+} as const;
 
 const asText = (value: number | null) => (value === null ? "" : String(value));
 /** "" clears the override; unreadable text goes through as text so the schema names the field. */
@@ -23,7 +26,15 @@ const asValue = (text: string) => {
   return parsed === undefined ? null : parsed === "invalid" ? text : parsed;
 };
 
-function SettingsForm({ current, onReload, reloading }: { current: ProcedureSettingsResponse; onReload: () => Promise<unknown>; reloading: boolean }) {
+function SettingsForm({
+  current,
+  onReload,
+  reloading,
+}: {
+  current: ProcedureSettingsResponse;
+  onReload: () => Promise<unknown>;
+  reloading: boolean;
+}) {
   const [target, setTarget] = useState(asText(current.settings.evacuationTargetMicrons));
   const [drop, setDrop] = useState(asText(current.settings.pressureTestAllowedDropKPa));
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -59,10 +70,18 @@ function SettingsForm({ current, onReload, reloading }: { current: ProcedureSett
       setSaved(true);
     } catch (error) {
       if (error instanceof ApiError && error.isStale) {
-        setStale({ message: error.message, typed: Object.keys(changed).map((field) => [LABELS[field as keyof typeof LABELS], typed[field as keyof typeof typed]]) });
+        setStale({
+          message: error.message,
+          typed: Object.keys(changed).map((field) => [
+            LABELS[field as keyof typeof LABELS],
+            typed[field as keyof typeof typed],
+          ]),
+        });
         return;
       }
-      setErrors(error instanceof ApiError ? { ...error.fields, _: error.message } : { _: "The settings were not saved" });
+      setErrors(
+        error instanceof ApiError ? { ...error.fields, _: error.message } : { _: "The settings were not saved" },
+      );
     }
   };
 
@@ -73,7 +92,11 @@ function SettingsForm({ current, onReload, reloading }: { current: ProcedureSett
       setTarget(asText(latest.data.settings.evacuationTargetMicrons));
       setDrop(asText(latest.data.settings.pressureTestAllowedDropKPa));
     }
-    setStale((shown) => (shown ? { ...shown, message: "These are the limits as saved now. Make your change again if it still applies." } : null));
+    setStale((shown) =>
+      shown
+        ? { ...shown, message: "These are the limits as saved now. Make your change again if it still applies." }
+        : null,
+    );
   };
 
   return (
@@ -86,7 +109,14 @@ function SettingsForm({ current, onReload, reloading }: { current: ProcedureSett
       }}
     >
       {errors._ && <FormAlert>{errors._}</FormAlert>}
-      {stale && <StaleWriteNotice message={stale.message} typed={stale.typed} onReload={() => void reload()} reloading={reloading} />}
+      {stale && (
+        <StaleWriteNotice
+          message={stale.message}
+          typed={stale.typed}
+          onReload={() => void reload()}
+          reloading={reloading}
+        />
+      )}
       {saved && <FormAlert tone="good">Saved: new procedures on every visit use these limits</FormAlert>}
       <NumberField
         label="Evacuation target"
@@ -118,8 +148,8 @@ export default function CompanySettingsRoute() {
       <header>
         <h1 className="text-2xl font-semibold">Company limits</h1>
         <p className="mt-1 text-muted">
-          Where your local code or your customers ask for stricter limits than Satura's defaults, set them here. Local codes,
-          the maker's instructions and licensed practice decide.
+          Where your local code or your customers ask for stricter limits than Satura's defaults, set them here. Local
+          codes, the maker's instructions and licensed practice decide.
         </p>
       </header>
       {settings.isPending && <p aria-busy="true">Loading…</p>}
@@ -128,7 +158,9 @@ export default function CompanySettingsRoute() {
           ⚠ {settings.error.message}
         </p>
       )}
-      {settings.isSuccess && <SettingsForm current={settings.data} onReload={() => settings.refetch()} reloading={settings.isFetching} />}
+      {settings.isSuccess && (
+        <SettingsForm current={settings.data} onReload={() => settings.refetch()} reloading={settings.isFetching} />
+      )}
     </div>
   );
 }

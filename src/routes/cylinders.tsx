@@ -16,9 +16,15 @@ export default function CylindersRoute() {
     <div className="space-y-6">
       <header className="space-y-1">
         <h1 className="text-3xl font-semibold">Cylinders</h1>
-        <p className="text-muted">Contents follow the refrigerant register; recovery cylinders are checked against 80 % of their liquid capacity.</p>
+        <p className="text-muted">
+          Contents follow the refrigerant register; recovery cylinders are checked against 80 % of their liquid
+          capacity.
+        </p>
         {canWrite && (
-          <Link to={paths.register.getHref()} className="inline-flex min-h-touch items-center font-medium text-accent underline underline-offset-4">
+          <Link
+            to={paths.register.getHref()}
+            className="inline-flex min-h-touch items-center font-medium text-accent underline underline-offset-4"
+          >
             Open the refrigerant register and its CSV export
           </Link>
         )}
@@ -36,7 +42,10 @@ export default function CylindersRoute() {
         )}
       </PanelBoundary>
       {canWrite && (
-        <section aria-labelledby="add-cylinder-heading" className="space-y-3 rounded-card border-2 border-accent bg-surface p-4">
+        <section
+          aria-labelledby="add-cylinder-heading"
+          className="space-y-3 rounded-card border-2 border-accent bg-surface p-4"
+        >
           <h2 id="add-cylinder-heading" className="text-xl font-semibold">
             Add a cylinder
           </h2>

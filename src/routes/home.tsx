@@ -13,7 +13,17 @@ import { MY_OPEN_VISITS, OPEN_VISITS_FIRST_PAGE, useVisits } from "@/lib/api/vis
 /** Today lists a short first page of each kind; the jobs page holds the rest. */
 const SHORT_LIST = 10;
 
-function VisitLinks({ title, visits, empty, more }: { title: string; visits: VisitSummary[] | undefined; empty: string; more: { shown: boolean; href: string } }) {
+function VisitLinks({
+  title,
+  visits,
+  empty,
+  more,
+}: {
+  title: string;
+  visits: VisitSummary[] | undefined;
+  empty: string;
+  more: { shown: boolean; href: string };
+}) {
   return (
     <section aria-label={title} className="rounded-card border-2 border-rule bg-surface p-4">
       <h2 className="text-lg font-semibold">{title}</h2>
@@ -25,7 +35,10 @@ function VisitLinks({ title, visits, empty, more }: { title: string; visits: Vis
         <ul className="mt-2 divide-y-2 divide-rule">
           {visits.map((visit) => (
             <li key={visit.id}>
-              <Link to={paths.visits.detail.getHref(visit.id)} className="flex min-h-touch items-center gap-3 py-2 hover:bg-sunken">
+              <Link
+                to={paths.visits.detail.getHref(visit.id)}
+                className="flex min-h-touch items-center gap-3 py-2 hover:bg-sunken"
+              >
                 <div className="min-w-0 flex-1">
                   <p className="font-medium">{visit.equipmentName}</p>
                   <p className="truncate text-sm text-muted">
@@ -40,7 +53,10 @@ function VisitLinks({ title, visits, empty, more }: { title: string; visits: Vis
         </ul>
       )}
       {more.shown && (
-        <Link to={more.href} className="mt-2 inline-flex min-h-touch items-center gap-1 font-medium text-accent underline underline-offset-4">
+        <Link
+          to={more.href}
+          className="mt-2 inline-flex min-h-touch items-center gap-1 font-medium text-accent underline underline-offset-4"
+        >
           See all on the jobs page <ChevronRight aria-hidden className="size-5" />
         </Link>
       )}

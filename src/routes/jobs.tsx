@@ -71,7 +71,11 @@ export default function JobsRoute() {
       <PanelBoundary>
         <JobsTable
           status={status}
-          empty={<p className="rounded-card border-2 border-dashed border-rule p-6 text-center">{EMPTY_TEXT[status ?? "all"]}</p>}
+          empty={
+            <p className="rounded-card border-2 border-dashed border-rule p-6 text-center">
+              {EMPTY_TEXT[status ?? "all"]}
+            </p>
+          }
         />
       </PanelBoundary>
     </div>

@@ -16,12 +16,18 @@ export default function MembersRoute() {
       <header>
         <h1 className="text-3xl font-semibold">Members</h1>
         <p className="mt-1 text-muted">
-          {isOwner ? "Invite people, set their roles, and remove those who have left." : "Everyone in your company and their role. Owners manage this list."}
+          {isOwner
+            ? "Invite people, set their roles, and remove those who have left."
+            : "Everyone in your company and their role. Owners manage this list."}
         </p>
       </header>
       <PanelBoundary>
         {members.isPending && <p>Loading members…</p>}
-        {members.isError && <p role="alert" className="font-medium text-fault">⚠ {members.error.message}</p>}
+        {members.isError && (
+          <p role="alert" className="font-medium text-fault">
+            ⚠ {members.error.message}
+          </p>
+        )}
         {members.isSuccess && me.data && <MembersTable members={members.data} viewer={me.data} />}
       </PanelBoundary>
       {isOwner && (
@@ -31,7 +37,9 @@ export default function MembersRoute() {
               <InviteMemberForm />
             </section>
           </PanelBoundary>
-          <PanelBoundary>{invitations.isSuccess && <PendingInvitations invitations={invitations.data} />}</PanelBoundary>
+          <PanelBoundary>
+            {invitations.isSuccess && <PendingInvitations invitations={invitations.data} />}
+          </PanelBoundary>
         </>
       )}
     </div>

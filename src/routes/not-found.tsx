@@ -8,7 +8,10 @@ export default function NotFoundRoute() {
       <p>
         Nothing lives at <span className="num">{location.pathname}</span>.
       </p>
-      <Link to="/" className="inline-flex min-h-touch items-center rounded-card bg-accent px-4 font-medium text-accent-ink">
+      <Link
+        to="/"
+        className="inline-flex min-h-touch items-center rounded-card bg-accent px-4 font-medium text-accent-ink"
+      >
         Back to Today
       </Link>
     </div>

@@ -8,11 +8,16 @@ export default function OutboxRoute() {
       <header>
         <h1 className="text-3xl font-semibold">Outbox</h1>
         <p className="mt-1 text-muted">
-          Development only: mail caught by the built-in mail server instead of being delivered. Set SMTP_HOST to send real mail.
+          Development only: mail caught by the built-in mail server instead of being delivered. Set SMTP_HOST to send
+          real mail.
         </p>
       </header>
       {outbox.isPending && <p>Loading mail…</p>}
-      {outbox.isError && <p role="alert" className="font-medium text-fault">⚠ {outbox.error.message}</p>}
+      {outbox.isError && (
+        <p role="alert" className="font-medium text-fault">
+          ⚠ {outbox.error.message}
+        </p>
+      )}
       {outbox.isSuccess && <OutboxList messages={outbox.data} />}
     </div>
   );

@@ -10,12 +10,17 @@ export default function ProfileRoute() {
         <h1 className="text-3xl font-semibold">Profile</h1>
         {profile.isSuccess && (
           <p className="mt-1 text-muted">
-            <span className="break-all">{profile.data.user.email}</span> · {ROLE_LABELS[profile.data.user.role]} at {profile.data.organisationName}
+            <span className="break-all">{profile.data.user.email}</span> · {ROLE_LABELS[profile.data.user.role]} at{" "}
+            {profile.data.organisationName}
           </p>
         )}
       </header>
       {profile.isPending && <p>Loading your settings…</p>}
-      {profile.isError && <p role="alert" className="font-medium text-fault">⚠ {profile.error.message}</p>}
+      {profile.isError && (
+        <p role="alert" className="font-medium text-fault">
+          ⚠ {profile.error.message}
+        </p>
+      )}
       {profile.isSuccess && <ProfileForm profile={profile.data} />}
     </div>
   );

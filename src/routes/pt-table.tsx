@@ -55,7 +55,13 @@ export default function PtTableRoute() {
 
   const limits = info.validRange;
   const currentRange = range ?? defaultRange(limits.minimumC, limits.maximumC, units);
-  const resolved = resolveRange(currentRange.fromText, currentRange.toText, currentRange.stepK, units.temperature, limits);
+  const resolved = resolveRange(
+    currentRange.fromText,
+    currentRange.toText,
+    currentRange.stepK,
+    units.temperature,
+    limits,
+  );
   const caution = safetyClasses[info.safety.class].caution;
   const atmosphericKPa = profile.atmosphericKPa;
 
@@ -88,7 +94,12 @@ export default function PtTableRoute() {
         />
       </div>
       <div className="no-print">
-        <SaturationConverter refrigerantId={info.id} isBlend={info.kind === "blend"} units={units} atmosphericKPa={atmosphericKPa} />
+        <SaturationConverter
+          refrigerantId={info.id}
+          isBlend={info.kind === "blend"}
+          units={units}
+          atmosphericKPa={atmosphericKPa}
+        />
       </div>
       <section aria-labelledby="table-heading" className="space-y-3">
         <div className="flex flex-wrap items-center justify-between gap-2">
@@ -102,7 +113,12 @@ export default function PtTableRoute() {
         <p className="text-sm text-muted">
           Gauge pressures against an atmosphere of <span className="num">{atmosphericKPa} kPa</span>.
         </p>
-        <TableControls range={currentRange} onChange={setRange} temperatureUnit={units.temperature} error={resolved.ok ? null : resolved.message} />
+        <TableControls
+          range={currentRange}
+          onChange={setRange}
+          temperatureUnit={units.temperature}
+          error={resolved.ok ? null : resolved.message}
+        />
         {/* Focusable so keyboard users can scroll a long table (WCAG 2.1.1). */}
         <div
           tabIndex={0}

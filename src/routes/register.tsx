@@ -7,7 +7,11 @@ import { useMe } from "@/lib/api/auth.ts";
 export default function RegisterRoute() {
   const me = useMe();
   const [search, setSearch] = useSearchParams();
-  const filters: RegisterFilters = { from: search.get("from") ?? "", to: search.get("to") ?? "", technicianId: search.get("technician") ?? "" };
+  const filters: RegisterFilters = {
+    from: search.get("from") ?? "",
+    to: search.get("to") ?? "",
+    technicianId: search.get("technician") ?? "",
+  };
   const role = me.data?.role ?? "apprentice";
   const update = (next: RegisterFilters) => {
     const params = new URLSearchParams();
@@ -20,14 +24,19 @@ export default function RegisterRoute() {
     <div className="space-y-6">
       <header className="space-y-1">
         <h1 className="text-3xl font-semibold">Refrigerant register</h1>
-        <p className="text-muted">Every kilogram recovered, reused, added and sent for reclaim, for the regulator's record keeping.</p>
+        <p className="text-muted">
+          Every kilogram recovered, reused, added and sent for reclaim, for the regulator's record keeping.
+        </p>
       </header>
       {can(role, "writeRecords") ? (
         <PanelBoundary>
           <RegisterView filters={filters} onChange={update} mayChooseTechnician={can(role, "signOff")} />
         </PanelBoundary>
       ) : (
-        <p role="alert">Apprentices work under supervision and keep no register of their own; ask your supervisor for the company's records.</p>
+        <p role="alert">
+          Apprentices work under supervision and keep no register of their own; ask your supervisor for the company's
+          records.
+        </p>
       )}
     </div>
   );

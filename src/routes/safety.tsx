@@ -1,7 +1,17 @@
 import type { CautionTopic } from "@shared/content/cautions.ts";
 import { CautionPanel, DeferToCodes } from "@/components/ui/caution-panel/caution-panel.tsx";
 
-const TOPICS: CautionTopic[] = ["electrical", "flammable", "toxic", "nitrogen", "pressure", "liquid-refrigerant", "recovery-cylinder", "height", "hot-surface"];
+const TOPICS: CautionTopic[] = [
+  "electrical",
+  "flammable",
+  "toxic",
+  "nitrogen",
+  "pressure",
+  "liquid-refrigerant",
+  "recovery-cylinder",
+  "height",
+  "hot-surface",
+];
 
 export default function SafetyRoute() {
   return (

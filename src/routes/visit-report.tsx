@@ -3,7 +3,13 @@ import { applicationText } from "@shared/content/applications.ts";
 import { Printer } from "lucide-react";
 import { useState } from "react";
 import { Link, useParams } from "react-router-dom";
-import { ADJUSTMENT_KIND_LABELS, isStanding, REPORT_LATEST_READINGS, VISIT_STATUS_LABELS, visitReasonText } from "@shared/schemas/visits.ts";
+import {
+  ADJUSTMENT_KIND_LABELS,
+  isStanding,
+  REPORT_LATEST_READINGS,
+  VISIT_STATUS_LABELS,
+  visitReasonText,
+} from "@shared/schemas/visits.ts";
 import { can } from "@shared/schemas/auth.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
@@ -34,7 +40,8 @@ import { formatDateTime, viewerTimeZone } from "@shared/format/date-time.ts";
  */
 const PRINT_CHART_WIDTH = 680;
 const SCREEN_MARGIN_PX = 32;
-const chartWidthFor = (viewportWidth: number) => Math.max(280, Math.min(PRINT_CHART_WIDTH, viewportWidth - SCREEN_MARGIN_PX));
+const chartWidthFor = (viewportWidth: number) =>
+  Math.max(280, Math.min(PRINT_CHART_WIDTH, viewportWidth - SCREEN_MARGIN_PX));
 const stamp = (iso: string) => formatDateTime(iso);
 
 export default function VisitReportRoute() {
@@ -43,7 +50,9 @@ export default function VisitReportRoute() {
   const equipment = useEquipmentDetail(visit.data?.equipmentId ?? "");
   const me = useMe();
   const { units } = useDisplayUnits();
-  const [chartWidth] = useState(() => chartWidthFor(typeof window === "undefined" ? PRINT_CHART_WIDTH + SCREEN_MARGIN_PX : window.innerWidth));
+  const [chartWidth] = useState(() =>
+    chartWidthFor(typeof window === "undefined" ? PRINT_CHART_WIDTH + SCREEN_MARGIN_PX : window.innerWidth),
+  );
 
   if (visit.isPending || (visit.isSuccess && equipment.isPending)) return <p aria-busy="true">Preparing the report…</p>;
   if (visit.isError || equipment.isError) {
@@ -62,7 +71,10 @@ export default function VisitReportRoute() {
   return (
     <article className="report space-y-6" aria-label="Visit report">
       <div className="no-print flex flex-wrap items-center gap-3">
-        <Link to={paths.visits.detail.getHref(data.id)} className="font-medium text-accent underline underline-offset-4">
+        <Link
+          to={paths.visits.detail.getHref(data.id)}
+          className="font-medium text-accent underline underline-offset-4"
+        >
           ← Back to the visit
         </Link>
         <Button variant="secondary" onClick={() => window.print()}>
@@ -77,7 +89,8 @@ export default function VisitReportRoute() {
           {data.customerName} · {data.siteName}
         </p>
         <p className="flex flex-wrap items-center gap-2 text-sm">
-          <VisitStatusBadge status={data.status} /> Started {stamp(data.startedAt)} ({viewerTimeZone()} time) · Crew: {data.technicians.map((person) => person.name).join(", ") || "—"}
+          <VisitStatusBadge status={data.status} /> Started {stamp(data.startedAt)} ({viewerTimeZone()} time) · Crew:{" "}
+          {data.technicians.map((person) => person.name).join(", ") || "—"}
         </p>
         <p className="mt-1">
           <span className="font-medium">Reason:</span> {visitReasonText(data.reason)}
@@ -123,8 +136,8 @@ export default function VisitReportRoute() {
             <ReadingsTable readings={listed.readings} units={units} atmosphericKPa={atmosphericKPa} />
             {listed.leftOut > 0 && (
               <p className="text-sm text-muted" data-testid="readings-left-out">
-                {listed.readings.length} of {series.readingCount} readings listed: the first, those either side of each adjustment and the latest{" "}
-                {REPORT_LATEST_READINGS}. The trend chart below draws the whole series.
+                {listed.readings.length} of {series.readingCount} readings listed: the first, those either side of each
+                adjustment and the latest {REPORT_LATEST_READINGS}. The trend chart below draws the whole series.
               </p>
             )}
             {series.points.length > 0 && <TrendChart series={series} units={units} width={chartWidth} height={260} />}
@@ -135,7 +148,15 @@ export default function VisitReportRoute() {
                 <span className="num">{formatNumber(last.result.atmosphericPressureKPa, 1)} kPa</span> atmosphere.
               </p>
             )}
-            {last && <MeasuredCyclePanel mode="report" input={last.input} previousInput={series.readings.at(-2)?.input ?? null} units={units} width={chartWidth} />}
+            {last && (
+              <MeasuredCyclePanel
+                mode="report"
+                input={last.input}
+                previousInput={series.readings.at(-2)?.input ?? null}
+                units={units}
+                width={chartWidth}
+              />
+            )}
             {last && <FindingPanel result={last.result} variant="report" />}
           </section>
         );
@@ -151,7 +172,8 @@ export default function VisitReportRoute() {
           <ul className="mt-1 space-y-1">
             {adjustments.map((adjustment) => (
               <li key={adjustment.id}>
-                <span className="num text-muted">{stamp(adjustment.at)}</span> — {ADJUSTMENT_KIND_LABELS[adjustment.kind]}
+                <span className="num text-muted">{stamp(adjustment.at)}</span> —{" "}
+                {ADJUSTMENT_KIND_LABELS[adjustment.kind]}
                 {adjustment.circuit ? ` (circuit ${adjustment.circuit})` : ""}: {adjustment.description}
                 {adjustment.amountKg != null && <span className="num"> · {adjustment.amountKg} kg</span>}
               </li>
@@ -174,7 +196,12 @@ export default function VisitReportRoute() {
           </h2>
           <div className="mt-1 grid grid-cols-3 gap-2">
             {data.photos.map((photo) => (
-              <img key={photo.id} src={photo.thumbnailUrl} alt={`${photo.kind} photo`} className="w-full rounded-card border border-rule" />
+              <img
+                key={photo.id}
+                src={photo.thumbnailUrl}
+                alt={`${photo.kind} photo`}
+                className="w-full rounded-card border border-rule"
+              />
             ))}
           </div>
         </section>
@@ -197,7 +224,9 @@ export default function VisitReportRoute() {
 
       <AuditTrail events={data.events} />
 
-      {me.data && can(me.data.role, "writeRecords") && <SendReportForm visitId={data.id} defaultTo={data.customerContactEmail} />}
+      {me.data && can(me.data.role, "writeRecords") && (
+        <SendReportForm visitId={data.id} defaultTo={data.customerContactEmail} />
+      )}
     </article>
   );
 }

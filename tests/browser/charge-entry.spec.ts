@@ -10,12 +10,17 @@ import { signIn } from "./sign-in.ts";
 test.describe("charge entry", () => {
   test.use({ viewport: { width: 390, height: 844 } });
 
-  test("a charge adjustment logged on the run log is the register line, with the same figure in the report", async ({ page }) => {
+  test("a charge adjustment logged on the run log is the register line, with the same figure in the report", async ({
+    page,
+  }) => {
     // Three pages and a void on one phone-sized session: more than the default budget on a busy machine.
     test.slow();
     await page.goto("/equipment");
     await signIn(page, "tech@bellbird.example");
-    await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
+    await page
+      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+      .first()
+      .click();
     await page.getByLabel("Reason for the visit").fill("Short of charge on circuit 1");
     await page.getByRole("button", { name: "Start the visit" }).click();
     // The first visit page of a fresh server loads its property tables: wait for it, however slow the machine.
@@ -33,7 +38,9 @@ test.describe("charge entry", () => {
     await expect(form.getByText("Goes in the register as: added, new refrigerant")).toBeVisible();
     await expect(form.getByTestId("adjustment-cylinder-after")).toContainText("BM-407C-N3 will hold 9.55 kg");
     await form.getByRole("button", { name: "Log adjustment" }).click();
-    await expect(page.getByRole("list", { name: "Latest readings and adjustments" })).toContainText("Topped up as liquid");
+    await expect(page.getByRole("list", { name: "Latest readings and adjustments" })).toContainText(
+      "Topped up as liquid",
+    );
 
     // The Refrigerant section: the same 0.45 kg, once, from the new cylinder.
     await page.getByRole("radio", { name: "Refrigerant" }).click();
@@ -42,7 +49,9 @@ test.describe("charge entry", () => {
     await expect(logged.first()).toContainText("0.45 kg added, new refrigerant");
     await expect(logged.first()).toContainText("cylinder BM-407C-N3");
     await expect(page.getByTestId("balance-1")).toContainText("0.45 kg");
-    await expect(page.getByTestId("run-log-check")).toContainText("Run log and register agree: 0.45 kg into the system, 0.00 kg out of it");
+    await expect(page.getByTestId("run-log-check")).toContainText(
+      "Run log and register agree: 0.45 kg into the system, 0.00 kg out of it",
+    );
 
     // The report: the adjustment and the register line carry the one figure, and say they agree.
     await page.goto(`${visitUrl}/report`);
@@ -52,14 +61,18 @@ test.describe("charge entry", () => {
     await expect(adjustments).toContainText("0.45 kg");
     const refrigerant = report.getByRole("region", { name: "Refrigerant" });
     await expect(refrigerant).toContainText("Added, new refrigerant (circuit 1): 0.45 kg · cylinder BM-407C-N3");
-    await expect(refrigerant.getByTestId("run-log-check")).toContainText("Run log and register agree: 0.45 kg into the system");
+    await expect(refrigerant.getByTestId("run-log-check")).toContainText(
+      "Run log and register agree: 0.45 kg into the system",
+    );
     await expect(refrigerant).not.toContainText("differ");
     await page.screenshot({ path: "test-results/charge-entry-report-390.png", fullPage: true });
 
     // Voided on the Refrigerant section, the run-log entry goes with it and the cylinder gets its 0.45 kg back.
     await page.goto(visitUrl);
     await page.getByRole("radio", { name: "Refrigerant" }).click();
-    await page.getByRole("button", { name: /^Void the movement “0.45 kg added, new refrigerant” and its run-log entry/ }).click();
+    await page
+      .getByRole("button", { name: /^Void the movement “0.45 kg added, new refrigerant” and its run-log entry/ })
+      .click();
     const dialog = page.getByRole("dialog", { name: /Void the movement/ });
     await dialog.getByLabel("Reason (required)").fill("Weighed on the wrong scale");
     await dialog.getByRole("button", { name: "Void the record" }).click();
@@ -67,7 +80,9 @@ test.describe("charge entry", () => {
     await expect(page.getByTestId("run-log-check")).not.toContainText("0.45 kg");
     await page.getByRole("radio", { name: "Run log" }).click();
     await page.getByRole("form", { name: "Log an adjustment" }).getByLabel("What changed").selectOption("charge-added");
-    await expect(page.getByRole("form", { name: "Log an adjustment" }).getByLabel("From cylinder")).toContainText("BM-407C-N3 · New (virgin) · 10.00 kg in it");
+    await expect(page.getByRole("form", { name: "Log an adjustment" }).getByLabel("From cylinder")).toContainText(
+      "BM-407C-N3 · New (virgin) · 10.00 kg in it",
+    );
     // Its run-log entry is voided too: no standing reading or adjustment is left for the timeline strip.
     await expect(page.getByRole("list", { name: "Latest readings and adjustments" })).toHaveCount(0);
   });

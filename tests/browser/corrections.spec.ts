@@ -10,7 +10,10 @@ test.describe("corrections", () => {
   test("a technician voids a mistyped pressure test; a senior reopens the submitted visit", async ({ page }) => {
     await page.goto("/equipment");
     await signIn(page, "tech@bellbird.example");
-    await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
+    await page
+      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+      .first()
+      .click();
     await page.getByLabel("Reason for the visit").fill("Nitrogen test after brazing the suction line");
     await page.getByRole("button", { name: "Start the visit" }).click();
     await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
@@ -42,8 +45,13 @@ test.describe("corrections", () => {
 
     await page.getByRole("button", { name: "Submit for review" }).click();
     // The checklist comes first; its warnings are read and confirmed.
-    await page.getByTestId("submit-checklist").getByRole("button", { name: /^Confirm and submit/ }).click();
-    await expect(page.getByTestId("visit-closed")).toContainText("awaiting review: nothing more can be recorded or voided");
+    await page
+      .getByTestId("submit-checklist")
+      .getByRole("button", { name: /^Confirm and submit/ })
+      .click();
+    await expect(page.getByTestId("visit-closed")).toContainText(
+      "awaiting review: nothing more can be recorded or voided",
+    );
     await expect(page.getByRole("button", { name: "Save pressure test" })).toHaveCount(0);
     await signOut(page);
 
@@ -68,25 +76,35 @@ test.describe("corrections", () => {
     await expect(report.getByRole("region", { name: "Audit trail" })).toContainText("Typed 3500 for 350 kPa");
   });
 
-  test("a stale save of the company limits is refused and offers to reload, keeping what was typed in view", async ({ page }) => {
+  test("a stale save of the company limits is refused and offers to reload, keeping what was typed in view", async ({
+    page,
+  }) => {
     await page.goto("/company-limits");
     await signIn(page, "owner@bellbird.example");
     await expect(page.getByRole("heading", { name: "Company limits" })).toBeVisible();
     const { version } = (await (await page.request.get("/api/organisation/settings")).json()) as { version: number };
     await page.getByLabel("Evacuation target").fill("300");
     // Another owner's save lands first.
-    const other = await page.request.patch("/api/organisation/settings", { headers: { "If-Match": `"${version}"` }, data: { pressureTestAllowedDropKPa: 7 } });
+    const other = await page.request.patch("/api/organisation/settings", {
+      headers: { "If-Match": `"${version}"` },
+      data: { pressureTestAllowedDropKPa: 7 },
+    });
     expect(other.status()).toBe(200);
     await page.getByRole("button", { name: "Save limits" }).click();
     const notice = page.getByRole("alert").filter({ hasText: "A newer version of the company limits was saved" });
     await expect(notice).toContainText("Evacuation target (µm)");
     await expect(notice).toContainText("300");
     await notice.getByRole("button", { name: "Reload the latest version" }).click();
-    await expect(page.getByLabel("Allowed pressure drop in a nitrogen test (after temperature correction)")).toHaveValue("7");
+    await expect(
+      page.getByLabel("Allowed pressure drop in a nitrogen test (after temperature correction)"),
+    ).toHaveValue("7");
     await page.getByLabel("Evacuation target").fill("300");
     await page.getByRole("button", { name: "Save limits" }).click();
     await expect(page.getByText("Saved: new procedures on every visit use these limits")).toBeVisible();
-    const saved = (await (await page.request.get("/api/organisation/settings")).json()) as { settings: object; version: number };
+    const saved = (await (await page.request.get("/api/organisation/settings")).json()) as {
+      settings: object;
+      version: number;
+    };
     expect(saved.settings).toEqual({ evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 7 });
     // Back to Satura's defaults for the tests that follow on this server.
     const reset = await page.request.patch("/api/organisation/settings", {

@@ -71,8 +71,12 @@ for (const size of [
       await context.setOffline(true);
       const tried = Date.now();
       await page.getByRole("button", { name: "Save reading" }).click();
-      await expect(page.getByText(/^Kept on this device \(\d\d:\d\d\) — sent when online$/)).toBeVisible({ timeout: 3000 });
-      await expect(page.getByRole("region", { name: "Entries on this device" }).getByText("Waiting to send")).toHaveCount(1);
+      await expect(page.getByText(/^Kept on this device \(\d\d:\d\d\) — sent when online$/)).toBeVisible({
+        timeout: 3000,
+      });
+      await expect(
+        page.getByRole("region", { name: "Entries on this device" }).getByText("Waiting to send"),
+      ).toHaveCount(1);
       // The values carry forward for the next reading, as after any save.
       await expect(page.getByLabel("Liquid pressure", { exact: true })).toHaveValue("1736");
 
@@ -107,9 +111,16 @@ test("a failure's message shows even when the toast code cannot be fetched", asy
 
   // The visit's live refresh fails (the server answers 500): a toast says so.
   await page.route(/\/api\/visits\/[0-9a-f-]{36}(\?|$)/, (route) =>
-    route.request().method() === "GET" ? route.fulfill({ status: 500, json: { message: "The server fell over" } }) : route.fallback(),
+    route.request().method() === "GET"
+      ? route.fulfill({ status: 500, json: { message: "The server fell over" } })
+      : route.fallback(),
   );
-  await expect(page.getByRole("alert").filter({ hasText: /Could not refresh/ }).first()).toBeVisible({ timeout: 20_000 });
+  await expect(
+    page
+      .getByRole("alert")
+      .filter({ hasText: /Could not refresh/ })
+      .first(),
+  ).toBeVisible({ timeout: 20_000 });
   await expect(page.getByLabel("Suction pressure", { exact: true })).toHaveValue("465");
   await page.unroute(/\/api\/visits\/[0-9a-f-]{36}(\?|$)/);
   // The plain stand-in for the toasts: its messages stay until dismissed.

@@ -23,7 +23,11 @@ const ROUND: Record<string, { suctionKPa: string; suctionLineC: string; liquidKP
  */
 async function tapCounter(page: Page) {
   await page.addInitScript(() => {
-    window.addEventListener("pointerdown", () => sessionStorage.setItem("taps", String(Number(sessionStorage.getItem("taps") ?? "0") + 1)), true);
+    window.addEventListener(
+      "pointerdown",
+      () => sessionStorage.setItem("taps", String(Number(sessionStorage.getItem("taps") ?? "0") + 1)),
+      true,
+    );
   });
   let taps = 0;
   return {
@@ -56,7 +60,9 @@ for (const [device, viewport] of [
     test.use({ viewport });
     test.slow();
 
-    test("a returning technician goes from the sign-in page to a saved finding in 5 taps or fewer", async ({ page }) => {
+    test("a returning technician goes from the sign-in page to a saved finding in 5 taps or fewer", async ({
+      page,
+    }) => {
       const { tap, count } = await tapCounter(page);
       await page.goto("/");
       await expect(page.getByRole("heading", { name: "Sign in" })).toBeVisible();
@@ -75,7 +81,10 @@ for (const [device, viewport] of [
       await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/, PAGE_LOAD);
       await expect(page.getByRole("form", { name: /New reading/ })).toBeVisible(PAGE_LOAD);
       // The visit's header names the unit's refrigerant: "Customer · Site · R32 · started …".
-      const header = await page.locator("header").filter({ has: page.getByRole("heading", { level: 1 }) }).innerText();
+      const header = await page
+        .locator("header")
+        .filter({ has: page.getByRole("heading", { level: 1 }) })
+        .innerText();
       const refrigerant = /· (R\w+) ·/.exec(header)?.[1] ?? "";
       const values = ROUND[refrigerant];
       expect(values, `round figures for ${refrigerant}`).toBeDefined();
@@ -111,7 +120,9 @@ test.describe("start from Today without a reason", () => {
   // Several pages and a dozen requests each: give them room on a shared, busy machine.
   test.slow();
 
-  test("starts a visit from Today's search with no reason; submitting asks for it and shows the checklist", async ({ page }) => {
+  test("starts a visit from Today's search with no reason; submitting asks for it and shows the checklist", async ({
+    page,
+  }) => {
     await page.goto("/");
     await signIn(page, "tech@bellbird.example");
     await expect(page.getByRole("heading", { name: "Today" })).toBeVisible(PAGE_LOAD);
@@ -121,7 +132,9 @@ test.describe("start from Today without a reason", () => {
     await expect(page.getByRole("list", { name: "Units found" })).toContainText("RTU-1");
     await expect(page.getByRole("list", { name: "Units found" })).toContainText("Server cupboard wall split");
     // A unit with a visit in progress (the demo's open check on the split) offers that visit, not a second one.
-    await expect(page.getByRole("link", { name: "Continue the visit in progress on Server cupboard wall split" })).toBeVisible();
+    await expect(
+      page.getByRole("link", { name: "Continue the visit in progress on Server cupboard wall split" }),
+    ).toBeVisible();
     await page.getByLabel("Find the unit by its name, site or customer").fill("cool room");
     await expect(page.getByRole("list", { name: "Units found" }).getByRole("listitem")).toHaveCount(1);
     await page.getByRole("button", { name: /^Start a visit on Vaccine and stores cool room/ }).click();
@@ -134,7 +147,9 @@ test.describe("start from Today without a reason", () => {
     await page.getByLabel("What changed").selectOption("airflow");
     await page.getByLabel("Description").fill("Cleared ice off the evaporator coil");
     await page.getByRole("button", { name: "Log adjustment" }).click();
-    await expect(page.getByRole("list", { name: "Latest readings and adjustments" })).toContainText("Cleared ice off the evaporator coil");
+    await expect(page.getByRole("list", { name: "Latest readings and adjustments" })).toContainText(
+      "Cleared ice off the evaporator coil",
+    );
 
     // Back on Today, this visit is the one to resume, and says its reason is still to come.
     await page.goto("/");
@@ -164,7 +179,10 @@ test.describe("start from Today without a reason", () => {
     await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/, PAGE_LOAD);
     await page.getByRole("link", { name: "Visit report" }).click();
     const form = page.getByRole("form", { name: "Send the report" });
-    await expect(form.getByTestId("unsigned-report-warning")).toContainText("the customer will get an unsigned report", PAGE_LOAD);
+    await expect(form.getByTestId("unsigned-report-warning")).toContainText(
+      "the customer will get an unsigned report",
+      PAGE_LOAD,
+    );
     await form.getByLabel("Send the report to").fill("facilities@wattlelane.example");
     await form.getByRole("button", { name: "Send unsigned report" }).click();
     await expect(form.getByRole("alert")).toContainText("Tick the box to send a report that is not signed off");

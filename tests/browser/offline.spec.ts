@@ -171,21 +171,31 @@ async function startVisitOn(page: Page, unit: RegExp, reason: string): Promise<s
 /** Waits until the visit, with what its screen needs, is kept on the device. */
 async function keptForOffline(page: Page, visitId: string) {
   await page.getByRole("link", { name: "Today" }).first().click();
-  await expect.poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["register", "visit", visitId])), { timeout: 30_000 }).toBe(true);
+  await expect
+    .poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["register", "visit", visitId])), {
+      timeout: 30_000,
+    })
+    .toBe(true);
 }
 
 /** Types a reading (gauge kPa and °C) and saves it while offline: it must be kept on the device. */
-async function saveKeptReading(page: Page, values: { suction: string; suctionLine: string; liquid: string; liquidLine: string }) {
+async function saveKeptReading(
+  page: Page,
+  values: { suction: string; suctionLine: string; liquid: string; liquidLine: string },
+) {
   await page.getByLabel("Suction pressure", { exact: true }).fill(values.suction);
   await page.getByLabel("Suction line temperature", { exact: true }).fill(values.suctionLine);
   await page.getByLabel("Liquid pressure", { exact: true }).fill(values.liquid);
   await page.getByLabel("Line temperature for subcooling", { exact: true }).fill(values.liquidLine);
   await page.getByRole("button", { name: "Save reading" }).click();
-  await expect(page.getByTestId("save-bar").getByText(/^Kept on this device \(\d\d:\d\d\) — sent when online$/)).toBeVisible();
+  await expect(
+    page.getByTestId("save-bar").getByText(/^Kept on this device \(\d\d:\d\d\) — sent when online$/),
+  ).toBeVisible();
 }
 
 /** A reading of RTU-1 (R407C at the demo clinic: suction dew 1 °C, liquid bubble 38 °C, as above). */
-const saveRtuReading = (page: Page, suctionLineC: string) => saveKeptReading(page, { suction: "377", suctionLine: suctionLineC, liquid: "1565", liquidLine: "37" });
+const saveRtuReading = (page: Page, suctionLineC: string) =>
+  saveKeptReading(page, { suction: "377", suctionLine: suctionLineC, liquid: "1565", liquidLine: "37" });
 
 /** The outbox entries on the device (src/features/offline/outbox-store.ts): client id and time taken. */
 function outboxEntries(page: Page): Promise<{ clientId: string; takenAt: string; state: string; path: string }[]> {
@@ -196,13 +206,17 @@ function outboxEntries(page: Page): Promise<{ clientId: string; takenAt: string;
         open.onerror = () => reject(open.error);
         open.onsuccess = () => {
           const all = open.result.transaction("entries").objectStore("entries").getAll();
-          all.onsuccess = () => resolve(all.result as { clientId: string; takenAt: string; state: string; path: string }[]);
+          all.onsuccess = () =>
+            resolve(all.result as { clientId: string; takenAt: string; state: string; path: string }[]);
         };
       }),
   );
 }
 
-test("readings, an adjustment, an evacuation sample and a photo saved with no network wait on the device, survive a reload, and are stored once with their times", async ({ page, context }) => {
+test("readings, an adjustment, an evacuation sample and a photo saved with no network wait on the device, survive a reload, and are stored once with their times", async ({
+  page,
+  context,
+}) => {
   await page.goto("/");
   await signIn(page, "tech@bellbird.example");
   await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
@@ -212,7 +226,11 @@ test("readings, an adjustment, an evacuation sample and a photo saved with no ne
   await page.getByRole("button", { name: "Start the evacuation" }).click();
   await expect(page.getByText("Pulling down")).toBeVisible();
   await keptForOffline(page, visitId);
-  await expect.poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["procedures", "evacuations", visitId])), { timeout: 30_000 }).toBe(true);
+  await expect
+    .poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["procedures", "evacuations", visitId])), {
+      timeout: 30_000,
+    })
+    .toBe(true);
 
   await context.setOffline(true);
   await page.goto(`/visits/${visitId}`);
@@ -220,7 +238,9 @@ test("readings, an adjustment, an evacuation sample and a photo saved with no ne
   await page.getByLabel("What changed").selectOption("airflow");
   await page.getByLabel("Description").fill("Cleaned the return air filter");
   await page.getByRole("button", { name: "Log adjustment" }).click();
-  await expect(page.getByRole("status").filter({ hasText: /^Kept on this device \(\d\d:\d\d\) — sent when online$/ })).toBeVisible();
+  await expect(
+    page.getByRole("status").filter({ hasText: /^Kept on this device \(\d\d:\d\d\) — sent when online$/ }),
+  ).toBeVisible();
   for (const suctionLine of ["14", "15"]) await saveRtuReading(page, suctionLine);
   const waiting = page.getByRole("region", { name: "Entries on this device" });
   await expect(waiting.getByText("Waiting to send")).toHaveCount(4);
@@ -233,7 +253,9 @@ test("readings, an adjustment, an evacuation sample and a photo saved with no ne
   await expect(waiting.getByText("Evacuation reading")).toBeVisible();
   // A photo of the gauges, kept on the device as a file and shown from it.
   const photos = page.getByRole("region", { name: "Photos" });
-  await page.getByLabel("Photo from the gallery").setInputFiles({ name: "gauges.png", mimeType: "image/png", buffer: TINY_PNG });
+  await page
+    .getByLabel("Photo from the gallery")
+    .setInputFiles({ name: "gauges.png", mimeType: "image/png", buffer: TINY_PNG });
   await expect(photos.getByRole("img", { name: "Gauges photo, on this device" })).toBeVisible();
   await expect(photos.getByText("Waiting to send")).toBeVisible();
   await expect(page.getByTestId("outbox-waiting")).toHaveText("6 entries waiting to send.");
@@ -262,16 +284,25 @@ test("readings, an adjustment, an evacuation sample and a photo saved with no ne
   expect(storedPhotos.map((photo) => photo.kind)).toEqual(["gauges"]);
   expect((await page.request.get(storedPhotos[0]!.url)).headers()["content-type"]).toBe("image/png");
   // Each with the time it was taken on the device, not the time it reached the server.
-  const storedTimes = [...readings.map((reading) => reading.takenAt), adjustments[0]!.at, storedPhotos[0]!.takenAt].map(Date.parse).sort();
+  const storedTimes = [...readings.map((reading) => reading.takenAt), adjustments[0]!.at, storedPhotos[0]!.takenAt]
+    .map(Date.parse)
+    .sort();
   const keptTimes = kept.filter((entry) => !entry.path.includes("/evacuations/"));
   expect(storedTimes).toEqual(keptTimes.map((entry) => Date.parse(entry.takenAt)).sort());
   // The sample, at the minute typed on the device.
-  const evacuations = (await (await page.request.get(`/api/visits/${visitId}/evacuations`)).json()) as { evacuations: { samples: { minutes: number; microns: number }[] }[] };
+  const evacuations = (await (await page.request.get(`/api/visits/${visitId}/evacuations`)).json()) as {
+    evacuations: { samples: { minutes: number; microns: number }[] }[];
+  };
   expect(evacuations.evacuations[0]!.samples).toEqual([expect.objectContaining({ minutes: 12, microns: 2400 })]);
   expect(readings.map((reading) => reading.input.suctionLineTempC).sort()).toEqual([13, 14, 15]);
 });
 
-test("an entry the server refuses on arrival stays on the device with the reason; the others are stored", async ({ page, context, playwright, baseURL }) => {
+test("an entry the server refuses on arrival stays on the device with the reason; the others are stored", async ({
+  page,
+  context,
+  playwright,
+  baseURL,
+}) => {
   await page.goto("/");
   await signIn(page, "tech@bellbird.example");
   await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
@@ -290,8 +321,14 @@ test("an entry the server refuses on arrival stays on the device with the reason
 
   // Meanwhile, from another device, the second visit goes for review: it takes no more readings.
   const office = await playwright.request.newContext({ baseURL });
-  expect((await office.post("/api/auth/sign-in", { data: { email: "tech@bellbird.example", password: DEMO_PASSWORD } })).status()).toBe(200);
-  expect((await office.post(`/api/visits/${closes}/review`, { data: { action: "submit" } })).status()).toBeLessThan(300);
+  expect(
+    (
+      await office.post("/api/auth/sign-in", { data: { email: "tech@bellbird.example", password: DEMO_PASSWORD } })
+    ).status(),
+  ).toBe(200);
+  expect((await office.post(`/api/visits/${closes}/review`, { data: { action: "submit" } })).status()).toBeLessThan(
+    300,
+  );
 
   await context.setOffline(false);
   const onDevice = page.getByRole("region", { name: "Entries on this device" });
@@ -310,18 +347,34 @@ test("an entry the server refuses on arrival stays on the device with the reason
   await office.dispose();
 });
 
-test("a comment, a refrigerant movement and a void wait on the device too; when the session ends they wait for the same person, never another", async ({ page, context, playwright, baseURL }) => {
+test("a comment, a refrigerant movement and a void wait on the device too; when the session ends they wait for the same person, never another", async ({
+  page,
+  context,
+  playwright,
+  baseURL,
+}) => {
   await page.goto("/");
   await signIn(page, "tech@bellbird.example");
   await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
   // On the cool room, with a cylinder of its own: other specs count the rooftop unit's register
   // lines and the demo cylinders' contents.
-  const cylinder = await page.request.post("/api/cylinders", { data: { label: "OFF-404A-N1", kind: "new", refrigerant: "R404A", waterCapacityKg: 11, tareKg: 6, initialContentsKg: 9 } });
+  const cylinder = await page.request.post("/api/cylinders", {
+    data: {
+      label: "OFF-404A-N1",
+      kind: "new",
+      refrigerant: "R404A",
+      waterCapacityKg: 11,
+      tareKg: 6,
+      initialContentsKg: 9,
+    },
+  });
   expect(cylinder.status()).toBe(201);
   const visitId = await startVisitOn(page, /Vaccine and stores cool room/, "Session ends in the plant room");
   // One reading stored with signal, to be voided without it. R404A near −28 °C evaporating and
   // 40 °C condensing: about 120 and 1730 kPa gauge (the engine's tables, rounded).
-  const stored = await page.request.post(`/api/visits/${visitId}/readings`, { data: { circuit: 1, suctionPressureKPa: 120, suctionLineTempC: -22, liquidPressureKPa: 1730, liquidLineTempC: 36 } });
+  const stored = await page.request.post(`/api/visits/${visitId}/readings`, {
+    data: { circuit: 1, suctionPressureKPa: 120, suctionLineTempC: -22, liquidPressureKPa: 1730, liquidLineTempC: 36 },
+  });
   expect(stored.status()).toBe(201);
   await page.reload();
   await page.getByText("Recorded entries (to check or void)").click();
@@ -336,9 +389,13 @@ test("a comment, a refrigerant movement and a void wait on the device too; when 
   const movement = page.getByRole("form", { name: "Log a refrigerant movement" });
   await movement.getByLabel("What happened").selectOption("added-new");
   await movement.getByLabel("Mass").fill("0.30");
-  await movement.getByLabel("Cylinder", { exact: true }).selectOption({ label: "OFF-404A-N1 · New (virgin) · holds 9.00 kg" });
+  await movement
+    .getByLabel("Cylinder", { exact: true })
+    .selectOption({ label: "OFF-404A-N1 · New (virgin) · holds 9.00 kg" });
   await movement.getByRole("button", { name: "Log movement" }).click();
-  await expect(movement.getByText(/kept on this device \(\d\d:\d\d\); it goes in the register when the signal returns/)).toBeVisible();
+  await expect(
+    movement.getByText(/kept on this device \(\d\d:\d\d\); it goes in the register when the signal returns/),
+  ).toBeVisible();
 
   await page.getByRole("radio", { name: "Run log" }).click();
   await page.getByText("Recorded entries (to check or void)").click();
@@ -369,9 +426,21 @@ test("a comment, a refrigerant movement and a void wait on the device too; when 
   await expect(page.getByTestId("outbox-waiting")).toBeHidden();
   await expect(page.getByText("Void waiting to send")).toBeHidden();
   const office = await playwright.request.newContext({ baseURL });
-  expect((await office.post("/api/auth/sign-in", { data: { email: "tech@bellbird.example", password: DEMO_PASSWORD } })).status()).toBe(200);
+  expect(
+    (
+      await office.post("/api/auth/sign-in", { data: { email: "tech@bellbird.example", password: DEMO_PASSWORD } })
+    ).status(),
+  ).toBe(200);
   const visitNow = async () =>
-    ((await (await office.get(`/api/visits/${visitId}`)).json()) as { visit: { comments: { body: string }[]; readings: { voided: unknown }[]; adjustments: { description: string; amountKg: number | null }[] } }).visit;
+    (
+      (await (await office.get(`/api/visits/${visitId}`)).json()) as {
+        visit: {
+          comments: { body: string }[];
+          readings: { voided: unknown }[];
+          adjustments: { description: string; amountKg: number | null }[];
+        };
+      }
+    ).visit;
   expect((await visitNow()).comments).toHaveLength(0);
   expect(await outboxEntries(page)).toHaveLength(3);
   await signOut(page);
@@ -382,17 +451,30 @@ test("a comment, a refrigerant movement and a void wait on the device too; when 
   await expect.poll(async () => (await outboxEntries(page)).length, { timeout: 30_000 }).toBe(0);
   const visit = await visitNow();
   expect(visit.comments.map((comment) => comment.body)).toEqual(["Condenser coil needs a wash next visit"]);
-  expect(visit.readings).toEqual([expect.objectContaining({ voided: expect.objectContaining({ reason: "Gauge still settling" }) })]);
+  expect(visit.readings).toEqual([
+    expect.objectContaining({ voided: expect.objectContaining({ reason: "Gauge still settling" }) }),
+  ]);
   // The movement is also the run log's charge adjustment (one entry, one figure).
   expect(visit.adjustments.map((adjustment) => adjustment.amountKg)).toEqual([0.3]);
   // Voided again (a voided line leaves the company register's list), for the register spec's count.
-  const register = (await (await office.get(`/api/visits/${visitId}/refrigerant`)).json()) as { movements: { id: string }[] };
+  const register = (await (await office.get(`/api/visits/${visitId}/refrigerant`)).json()) as {
+    movements: { id: string }[];
+  };
   expect(register.movements).toHaveLength(1);
-  expect((await office.post(`/api/visits/${visitId}/voids`, { data: { kind: "movement", recordId: register.movements[0]!.id, reason: "Test entry, not a real charge" } })).status()).toBe(201);
+  expect(
+    (
+      await office.post(`/api/visits/${visitId}/voids`, {
+        data: { kind: "movement", recordId: register.movements[0]!.id, reason: "Test entry, not a real charge" },
+      })
+    ).status(),
+  ).toBe(201);
   await office.dispose();
 });
 
-test("an evacuation started with no network takes its readings on the device, judged as they are entered, and reaches the server in order", async ({ page, context }) => {
+test("an evacuation started with no network takes its readings on the device, judged as they are entered, and reaches the server in order", async ({
+  page,
+  context,
+}) => {
   await page.goto("/");
   await signIn(page, "tech@bellbird.example");
   await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
@@ -400,7 +482,11 @@ test("an evacuation started with no network takes its readings on the device, ju
   await page.goto(`/visits/${visitId}?section=evacuation`);
   await expect(page.getByRole("button", { name: "Start the evacuation" })).toBeVisible();
   await keptForOffline(page, visitId);
-  await expect.poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["procedures", "evacuations", visitId])), { timeout: 30_000 }).toBe(true);
+  await expect
+    .poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["procedures", "evacuations", visitId])), {
+      timeout: 30_000,
+    })
+    .toBe(true);
 
   await context.setOffline(true);
   await page.goto(`/visits/${visitId}?section=evacuation`);
@@ -430,7 +516,11 @@ test("an evacuation started with no network takes its readings on the device, ju
   await expect(page.getByTestId("outbox-waiting")).toBeHidden({ timeout: 30_000 });
   await expect(current.getByText("On this device: waiting to send, with its readings")).toBeHidden();
   const stored = (await (await page.request.get(`/api/visits/${visitId}/evacuations`)).json()) as {
-    evacuations: { startedAt: string; samples: { minutes: number; microns: number }[]; result: { reached: { reached: boolean } } }[];
+    evacuations: {
+      startedAt: string;
+      samples: { minutes: number; microns: number }[];
+      result: { reached: { reached: boolean } };
+    }[];
   };
   expect(stored.evacuations).toHaveLength(1);
   const [evacuation] = stored.evacuations;

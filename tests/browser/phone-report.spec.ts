@@ -9,7 +9,9 @@ test.describe("visit report on a phone", () => {
     await page.goto("/jobs");
     await signIn(page, "tech@bellbird.example");
     await expect(page.getByRole("heading", { name: "Jobs" })).toBeVisible();
-    const { visits } = (await (await page.request.get("/api/visits")).json()) as { visits: { id: string; readingCount: number }[] };
+    const { visits } = (await (await page.request.get("/api/visits")).json()) as {
+      visits: { id: string; readingCount: number }[];
+    };
     const withReadings = visits.find((visit) => visit.readingCount > 0)!;
     await page.goto(`/visits/${withReadings.id}/report`);
     const report = page.getByRole("article", { name: "Visit report" });

@@ -5,10 +5,15 @@ import { signIn } from "./sign-in.ts";
 test.use({ viewport: { width: 390, height: 844 } });
 
 test.describe("procedures on a phone, checked while typing", () => {
-  test("electrical check: a winding box shows 12.45 whole, a corrected error clears, a high current is flagged as typed", async ({ page }) => {
+  test("electrical check: a winding box shows 12.45 whole, a corrected error clears, a high current is flagged as typed", async ({
+    page,
+  }) => {
     await page.goto("/equipment");
     await signIn(page, "tech@bellbird.example");
-    await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
+    await page
+      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+      .first()
+      .click();
     await page.getByLabel("Reason for the visit").fill("Compressor running hot");
     await page.getByRole("button", { name: "Start the visit" }).click();
     // The visit page loads lazily; on a busy machine that can take longer than the default wait.
@@ -20,7 +25,10 @@ test.describe("procedures on a phone, checked while typing", () => {
     await expect(winding).toBeVisible({ timeout: 30_000 });
     await winding.fill("12.45");
     await expect(winding).toHaveValue("12.45");
-    const fits = await winding.evaluate((input: HTMLInputElement) => ({ scroll: input.scrollWidth, client: input.clientWidth }));
+    const fits = await winding.evaluate((input: HTMLInputElement) => ({
+      scroll: input.scrollWidth,
+      client: input.clientWidth,
+    }));
     expect(fits.scroll).toBeLessThanOrEqual(fits.client);
 
     // A negative current is refused on save; once corrected, the message goes at once.
@@ -46,7 +54,9 @@ test.describe("procedures on a phone, checked while typing", () => {
     await expect(notices).not.toContainText("RLA");
   });
 
-  test("company limits refuse an evacuation target of 100000 µm and say why; the server refuses it too", async ({ page }) => {
+  test("company limits refuse an evacuation target of 100000 µm and say why; the server refuses it too", async ({
+    page,
+  }) => {
     await page.goto("/company-limits");
     await signIn(page, "owner@bellbird.example");
     await expect(page.getByRole("heading", { name: "Company limits" })).toBeVisible();
@@ -59,10 +69,15 @@ test.describe("procedures on a phone, checked while typing", () => {
     await expect(page.getByText("Saved: new procedures")).toHaveCount(0);
 
     const current = await (await page.request.get("/api/organisation/settings")).json();
-    const refused = await page.request.patch("/api/organisation/settings", { headers: { "If-Match": `"${current.version}"` }, data: { evacuationTargetMicrons: 100000 } });
+    const refused = await page.request.patch("/api/organisation/settings", {
+      headers: { "If-Match": `"${current.version}"` },
+      data: { evacuationTargetMicrons: 100000 },
+    });
     expect(refused.status()).toBe(400);
     expect((await refused.json()).fields.evacuationTargetMicrons).toMatch(/above 1000 microns/);
-    expect((await (await page.request.get("/api/organisation/settings")).json()).settings.evacuationTargetMicrons).toBe(current.settings.evacuationTargetMicrons);
+    expect((await (await page.request.get("/api/organisation/settings")).json()).settings.evacuationTargetMicrons).toBe(
+      current.settings.evacuationTargetMicrons,
+    );
 
     // A figure inside the bounds clears the message as it is typed and saves.
     await target.fill("300");

@@ -17,7 +17,10 @@ test.describe("procedure records", () => {
   test("a technician records a nitrogen test and an evacuation; the report shows both judged", async ({ page }) => {
     await page.goto("/equipment");
     await signIn(page, "tech@bellbird.example");
-    await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
+    await page
+      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+      .first()
+      .click();
     await page.getByLabel("Reason for the visit").fill("Leak repaired: pressure test and evacuate before charging");
     await page.getByRole("button", { name: "Start the visit" }).click();
     await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
@@ -27,7 +30,9 @@ test.describe("procedure records", () => {
     // (1034 + 101.325) × 293.15 / 298.15 − 101.325 = 1015.0 kPa g expected, so 1013 kPa g is a
     // corrected drop of 2 kPa, within the 10 kPa allowed by default.
     await page.getByRole("radio", { name: "Pressure test" }).click();
-    await expect(page.getByRole("region", { name: "Caution: Pressure testing with nitrogen" })).toContainText("never oxygen or compressed air");
+    await expect(page.getByRole("region", { name: "Caution: Pressure testing with nitrogen" })).toContainText(
+      "never oxygen or compressed air",
+    );
     // The rating is offered from the nameplate (lower of 2900 high side and 1700 low side kPa g).
     await expect(page.getByLabel("Rated pressure (lowest-rated component)")).toHaveValue("1700");
     await fill(page, "Start pressure", "1034");

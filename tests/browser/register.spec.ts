@@ -9,10 +9,15 @@ import { signIn } from "./sign-in.ts";
  * about 93 %) passes the engine's 90 % warning margin without reaching the limit.
  */
 test.describe("refrigerant register", () => {
-  test("a technician logs a recovery and an addition on a visit and sees the balance and the cylinder warning", async ({ page }) => {
+  test("a technician logs a recovery and an addition on a visit and sees the balance and the cylinder warning", async ({
+    page,
+  }) => {
     await page.goto("/equipment");
     await signIn(page, "tech@bellbird.example");
-    await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
+    await page
+      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+      .first()
+      .click();
     await page.getByLabel("Reason for the visit").fill("Compressor change on circuit 1");
     await page.getByRole("button", { name: "Start the visit" }).click();
     await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
@@ -32,7 +37,9 @@ test.describe("refrigerant register", () => {
     await expect(form.getByRole("status")).toContainText("BM-REC-07 now holds 8.80 kg");
 
     // Nameplate 4.2 kg, recovered 3.6 kg: the circuit was 0.6 kg short.
-    await expect(page.getByTestId("shortfall-1")).toHaveText("The circuit was 0.60 kg short of its nameplate charge when recovered.");
+    await expect(page.getByTestId("shortfall-1")).toHaveText(
+      "The circuit was 0.60 kg short of its nameplate charge when recovered.",
+    );
     await expect(page.getByTestId("cylinder-warnings")).toContainText("BM-REC-07");
     await expect(page.getByRole("region", { name: "Caution: Recovery cylinders" })).toBeVisible();
 
@@ -45,7 +52,9 @@ test.describe("refrigerant register", () => {
     await expect(page.getByTestId("balance-1")).toContainText("Charge now: 4.20 kg");
     // 4.2 kg weighed in against 4.2 kg: within the ±28 g scale accuracy [S11].
     await expect(page.getByTestId("charging-verdict-1")).toContainText("Pass");
-    await expect(page.getByRole("list", { name: "Refrigerant logged on this visit" }).getByRole("listitem")).toHaveCount(2);
+    await expect(
+      page.getByRole("list", { name: "Refrigerant logged on this visit" }).getByRole("listitem"),
+    ).toHaveCount(2);
 
     // The cylinders page and the unit's history follow the register.
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Cylinders" }).click();

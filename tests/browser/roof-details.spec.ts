@@ -22,12 +22,17 @@ test.describe("on the roof, at 390 × 844", () => {
   test("dates read one way, photos come from camera or gallery, the focus ring wraps the unit", async ({ page }) => {
     await page.goto("/equipment");
     await signIn(page, "tech@bellbird.example");
-    await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
+    await page
+      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+      .first()
+      .click();
     await page.getByLabel("Reason for the visit").fill("Checking the date format");
     await page.getByRole("button", { name: "Start the visit" }).click();
     await slowExpect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
     const visitId = page.url().split("/").at(-1)!;
-    const { visit } = (await (await page.request.get(`/api/visits/${visitId}`)).json()) as { visit: { startedAt: string } };
+    const { visit } = (await (await page.request.get(`/api/visits/${visitId}`)).json()) as {
+      visit: { startedAt: string };
+    };
     const started = formatDateTime(visit.startedAt, ZONE);
     expect(started).toMatch(/^\d{1,2} (Jan|Feb|Mar|Apr|May|Jun|Jul|Aug|Sep|Oct|Nov|Dec) \d{4}, [0-2]\d:[0-5]\d$/);
 

@@ -14,7 +14,10 @@ const LOADED = { timeout: 20_000 };
 async function startVisit(page: Page, reason: string) {
   await page.goto("/equipment");
   await signIn(page, "tech@bellbird.example");
-  await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
+  await page
+    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+    .first()
+    .click();
   await page.getByLabel("Reason for the visit").fill(reason);
   await page.getByRole("button", { name: "Start the visit" }).click();
   await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/, LOADED);
@@ -35,9 +38,13 @@ async function enterReading(page: Page) {
 
 /** The demo visit awaiting review (RTU-1, R407C, a settled run with two adjustments; server/db/seed). */
 async function demoVisitId(page: Page): Promise<string> {
-  const response = await page.request.post("/api/auth/sign-in", { data: { email: "senior@bellbird.example", password: DEMO_PASSWORD } });
+  const response = await page.request.post("/api/auth/sign-in", {
+    data: { email: "senior@bellbird.example", password: DEMO_PASSWORD },
+  });
   expect(response.status()).toBe(200);
-  const { visits } = (await (await page.request.get("/api/visits?status=awaiting-review")).json()) as { visits: { id: string; equipmentName: string }[] };
+  const { visits } = (await (await page.request.get("/api/visits?status=awaiting-review")).json()) as {
+    visits: { id: string; equipmentName: string }[];
+  };
   return visits.find((visit) => visit.equipmentName === "RTU-1 packaged rooftop unit")!.id;
 }
 
@@ -45,7 +52,9 @@ test.describe("run log layout", () => {
   test.describe("on a phone (390 × 844)", () => {
     test.use({ viewport: { width: 390, height: 844 } });
 
-    test("a focused field's derived values stay above the save bar; evidence is folded and opens on a tap", async ({ page }) => {
+    test("a focused field's derived values stay above the save bar; evidence is folded and opens on a tap", async ({
+      page,
+    }) => {
       await startVisit(page, "Layout on a phone");
       await enterReading(page);
 
@@ -101,9 +110,13 @@ test.describe("run log layout", () => {
       // The width is used: the two columns together span most of the content area (rail 224 px).
       expect(findingBox.x + findingBox.width - formBox.x).toBeGreaterThan(600);
       // Beside the finding the fields column is narrow: every typed value still shows whole.
-      const clipped = await form.locator("input[data-reading-field]").evaluateAll((inputs) =>
-        (inputs as HTMLInputElement[]).filter((input) => input.value !== "" && input.scrollWidth > input.clientWidth).map((input) => input.name),
-      );
+      const clipped = await form
+        .locator("input[data-reading-field]")
+        .evaluateAll((inputs) =>
+          (inputs as HTMLInputElement[])
+            .filter((input) => input.value !== "" && input.scrollWidth > input.clientWidth)
+            .map((input) => input.name),
+        );
       expect(clipped).toEqual([]);
 
       for (const label of ["Line temperature for subcooling", "Running since start or last change"]) {
@@ -135,7 +148,9 @@ test.describe("run log layout", () => {
       for (const marker of markers) expect(Number(marker.replace(/[[\]]/g, ""))).toBeLessThanOrEqual(count);
     });
 
-    test("the trend chart shades the target bands, marks the settled reading and reads in clock times", async ({ page }) => {
+    test("the trend chart shades the target bands, marks the settled reading and reads in clock times", async ({
+      page,
+    }) => {
       const visitId = await demoVisitId(page);
       await page.goto(`/visits/${visitId}`);
       await page.getByRole("button", { name: "Open trend chart" }).click(LOADED);

@@ -8,7 +8,13 @@ import { signIn, signOut } from "./sign-in.ts";
  * the run log and the server both use. Playwright's loader cannot import the JSON tables, so
  * the values are written here, rounded to the kPa a gauge shows.
  */
-const R407C_GAUGE: Record<string, string> = { "dew 1": "377", "bubble 38": "1565", "dew 5": "447", "bubble 42": "1736", "dew 6": "465" };
+const R407C_GAUGE: Record<string, string> = {
+  "dew 1": "377",
+  "bubble 38": "1565",
+  "dew 5": "447",
+  "bubble 42": "1736",
+  "dew 6": "465",
+};
 const gauge = (temperatureC: number, point: "bubble" | "dew") => R407C_GAUGE[`${point} ${temperatureC}`]!;
 
 async function fill(page: Page, label: string, value: string) {
@@ -16,17 +22,24 @@ async function fill(page: Page, label: string, value: string) {
 }
 
 test.describe("run log and review", () => {
-  test("a technician logs readings and an adjustment; a senior comments and signs off; the report shows it all", async ({ page }) => {
+  test("a technician logs readings and an adjustment; a senior comments and signs off; the report shows it all", async ({
+    page,
+  }) => {
     await page.goto("/equipment");
     await signIn(page, "tech@bellbird.example");
-    await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
+    await page
+      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+      .first()
+      .click();
     await page.getByLabel("Reason for the visit").fill("Waiting room warm in the afternoons");
     await page.getByRole("button", { name: "Start the visit" }).click();
     await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
     const visitUrl = page.url();
 
     // The run log says which atmosphere the gauges read against: the site's, as the server uses.
-    await expect(page.getByTestId("atmosphere-line")).toHaveText("Gauge pressures against 100.3 kPa absolute: site altitude 85 m.");
+    await expect(page.getByTestId("atmosphere-line")).toHaveText(
+      "Gauge pressures against 100.3 kPa absolute: site altitude 85 m.",
+    );
     // Reading 1: short of charge — suction dew 1 °C, suction line 13 °C (12 K superheat), liquid bubble 38 °C, line 37 °C.
     await fill(page, "Suction pressure", gauge(1, "dew"));
     await fill(page, "Suction line temperature", "13");
@@ -43,7 +56,10 @@ test.describe("run log and review", () => {
     await expect(page.getByTestId("subcooling")).toHaveText("1.0");
     await expect(page.getByTestId("charge-state")).toHaveText("Undercharged");
     // The evidence starts folded: one tap on "Why: N points" opens it.
-    await page.getByTestId("evidence").getByText(/^Why: \d+ points?$/).click();
+    await page
+      .getByTestId("evidence")
+      .getByText(/^Why: \d+ points?$/)
+      .click();
     await expect(page.getByRole("list", { name: "Evidence" })).toContainText("Superheat");
     await page.getByRole("button", { name: "Save reading" }).click();
     await expect(page.getByText(/Saved at/)).toBeVisible();
@@ -64,7 +80,9 @@ test.describe("run log and review", () => {
     await fill(page, "Line temperature for subcooling", "38");
     await fill(page, "Running since start or last change", "12");
     await page.getByRole("button", { name: "Save reading" }).click();
-    await expect(page.getByRole("list", { name: "Latest readings and adjustments" }).getByText("SH", { exact: false })).toHaveCount(2);
+    await expect(
+      page.getByRole("list", { name: "Latest readings and adjustments" }).getByText("SH", { exact: false }),
+    ).toHaveCount(2);
 
     await fill(page, "Suction pressure", gauge(6, "dew"));
     await fill(page, "Line temperature for subcooling", "37");
@@ -73,7 +91,9 @@ test.describe("run log and review", () => {
     await expect(page.getByTestId("subcooling")).toHaveText("5.0");
     await expect(page.getByTestId("charge-state")).toHaveText("Charge and flow look right");
     await page.getByRole("button", { name: "Save reading" }).click();
-    await expect(page.getByRole("list", { name: "Latest readings and adjustments" }).getByText("SH", { exact: false })).toHaveCount(3);
+    await expect(
+      page.getByRole("list", { name: "Latest readings and adjustments" }).getByText("SH", { exact: false }),
+    ).toHaveCount(3);
 
     await page.getByRole("button", { name: "Open trend chart" }).click();
     await expect(page.getByTestId("trend-chart").getByRole("application")).toBeVisible();
@@ -83,7 +103,10 @@ test.describe("run log and review", () => {
 
     await page.getByRole("button", { name: "Submit for review" }).click();
     // The checklist comes first; its warnings are read and confirmed.
-    await page.getByTestId("submit-checklist").getByRole("button", { name: /^Confirm and submit/ }).click();
+    await page
+      .getByTestId("submit-checklist")
+      .getByRole("button", { name: /^Confirm and submit/ })
+      .click();
     await expect(page.getByRole("heading", { name: /Review/ })).toContainText("Awaiting review");
     await signOut(page);
 

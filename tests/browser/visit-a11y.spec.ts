@@ -9,9 +9,13 @@ test.describe("accessibility of the field screens", () => {
   test("the visit's sections, its report and a P–T table pass axe", async ({ page }) => {
     // Seven screens, each with a full axe run: near a minute on a busy 2-core machine.
     test.slow();
-    const signIn = await page.request.post("/api/auth/sign-in", { data: { email: "senior@bellbird.example", password: DEMO_PASSWORD } });
+    const signIn = await page.request.post("/api/auth/sign-in", {
+      data: { email: "senior@bellbird.example", password: DEMO_PASSWORD },
+    });
     expect(signIn.status()).toBe(200);
-    const { visits } = (await (await page.request.get("/api/visits?status=awaiting-review")).json()) as { visits: { id: string; equipmentName: string }[] };
+    const { visits } = (await (await page.request.get("/api/visits?status=awaiting-review")).json()) as {
+      visits: { id: string; equipmentName: string }[];
+    };
     const leakRepair = visits.find((visit) => visit.equipmentName === "RTU-1 packaged rooftop unit")!;
     const screens = [
       [`/visits/${leakRepair.id}`, "Charge and flow look right"],
@@ -27,7 +31,9 @@ test.describe("accessibility of the field screens", () => {
       await page.goto(path);
       await expect(page.getByText(landmark).first()).toBeVisible();
       const results = await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze();
-      expect(results.violations, `${path}: ${results.violations.map((violation) => violation.id).join(", ")}`).toEqual([]);
+      expect(results.violations, `${path}: ${results.violations.map((violation) => violation.id).join(", ")}`).toEqual(
+        [],
+      );
     }
   });
 });

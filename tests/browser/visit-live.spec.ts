@@ -5,10 +5,17 @@ import { DEMO_PASSWORD, signIn } from "./sign-in.ts";
  * A visit open on one device shows what another person records on it within the page's refresh
  * (LIVE_REFRESH_MS, 4 s), through the revision-based poll: 304 while nothing changes, then a delta.
  */
-test("a reading saved from another session appears on the open visit within the refresh", async ({ page, playwright, baseURL }) => {
+test("a reading saved from another session appears on the open visit within the refresh", async ({
+  page,
+  playwright,
+  baseURL,
+}) => {
   await page.goto("/equipment");
   await signIn(page, "tech@bellbird.example");
-  await page.getByRole("link", { name: /RTU-1 packaged rooftop unit/ }).first().click();
+  await page
+    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
+    .first()
+    .click();
   await page.getByLabel("Reason for the visit").fill("Second technician on the roof");
   await page.getByRole("button", { name: "Start the visit" }).click();
   await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
@@ -23,7 +30,11 @@ test("a reading saved from another session appears on the open visit within the 
   // The senior, on another device, records a reading over the API.
   const other = await playwright.request.newContext({ baseURL });
   try {
-    expect((await other.post("/api/auth/sign-in", { data: { email: "senior@bellbird.example", password: DEMO_PASSWORD } })).ok()).toBe(true);
+    expect(
+      (
+        await other.post("/api/auth/sign-in", { data: { email: "senior@bellbird.example", password: DEMO_PASSWORD } })
+      ).ok(),
+    ).toBe(true);
     const saved = await other.post(`/api/visits/${visitId}/readings`, {
       data: { circuit: 1, suctionPressureKPa: 465, suctionLineTempC: 12, liquidPressureKPa: 1736, liquidLineTempC: 37 },
     });
@@ -34,5 +45,7 @@ test("a reading saved from another session appears on the open visit within the 
 
   const entries = page.getByRole("list", { name: "Entries on circuit 1, newest first" });
   await expect(entries).toContainText("Priya Raman", { timeout: 10_000 });
-  await expect(page.getByRole("list", { name: "Latest readings and adjustments" }).getByRole("listitem")).toHaveCount(1);
+  await expect(page.getByRole("list", { name: "Latest readings and adjustments" }).getByRole("listitem")).toHaveCount(
+    1,
+  );
 });

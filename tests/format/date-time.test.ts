@@ -1,5 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { formatDate, formatDateTime, formatTime, isTimeZone, NO_DATE, viewerTimeZone } from "@shared/format/date-time.ts";
+import {
+  formatDate,
+  formatDateTime,
+  formatTime,
+  isTimeZone,
+  NO_DATE,
+  viewerTimeZone,
+} from "@shared/format/date-time.ts";
 
 // Offsets below come from the IANA time zone database (https://www.iana.org/time-zones), as
 // published by the states themselves: New South Wales keeps AEST (UTC+10) and, from 02:00 on the
@@ -40,13 +47,18 @@ describe("date-time formatting", () => {
   });
 
   it("names every month with the same three letters, whatever the runtime's ICU", () => {
-    const months = Array.from({ length: 12 }, (_, index) => formatDate(Date.UTC(2026, index, 15, 12), "UTC").split(" ")[1]);
+    const months = Array.from(
+      { length: 12 },
+      (_, index) => formatDate(Date.UTC(2026, index, 15, 12), "UTC").split(" ")[1],
+    );
     expect(months).toEqual(["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"]);
   });
 
   it("never writes an all-number date that reads two ways", () => {
     for (let month = 0; month < 12; month++) {
-      expect(formatDateTime(new Date(Date.UTC(2026, month, 2, 9, 7)), "UTC")).not.toMatch(/\d{1,2}[/.-]\d{1,2}[/.-]\d{2,4}/);
+      expect(formatDateTime(new Date(Date.UTC(2026, month, 2, 9, 7)), "UTC")).not.toMatch(
+        /\d{1,2}[/.-]\d{1,2}[/.-]\d{2,4}/,
+      );
     }
   });
 

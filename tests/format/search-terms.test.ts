@@ -19,7 +19,9 @@ describe("searchTerms", () => {
     fc.assert(
       fc.property(text, query, (searchText, typed) => {
         const compact = compactSearchText(searchText);
-        expect(matchesSearch(searchText, typed)).toBe(searchTerms(typed).every((term) => compact.includes(term.withoutR)));
+        expect(matchesSearch(searchText, typed)).toBe(
+          searchTerms(typed).every((term) => compact.includes(term.withoutR)),
+        );
       }),
       { numRuns: 2000 },
     );

@@ -1,7 +1,17 @@
 import { describe, expect, it } from "vitest";
-import { EARLIEST_INSTANT_MS, LATEST_INSTANT_MS, OUT_OF_RANGE_MESSAGE, boundEnd, boundStart, dayOrInstant, instant, isStorableInstant } from "@shared/schemas/dates.ts";
+import {
+  EARLIEST_INSTANT_MS,
+  LATEST_INSTANT_MS,
+  OUT_OF_RANGE_MESSAGE,
+  boundEnd,
+  boundStart,
+  dayOrInstant,
+  instant,
+  isStorableInstant,
+} from "@shared/schemas/dates.ts";
 
-const messages = (result: { error?: { issues: { message: string }[] } }) => result.error?.issues.map((issue) => issue.message) ?? [];
+const messages = (result: { error?: { issues: { message: string }[] } }) =>
+  result.error?.issues.map((issue) => issue.message) ?? [];
 
 // PostgreSQL 16 manual §8.5 (timestamptz, no year 0) and the four-digit years of ISO 8601 strings.
 describe("dates", () => {

@@ -1,8 +1,15 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { BROKEN_CHARACTER_MESSAGE, CONTROL_CHARACTER_MESSAGE, SINGLE_LINE_MESSAGE, isCleanText, text } from "@shared/schemas/text.ts";
+import {
+  BROKEN_CHARACTER_MESSAGE,
+  CONTROL_CHARACTER_MESSAGE,
+  SINGLE_LINE_MESSAGE,
+  isCleanText,
+  text,
+} from "@shared/schemas/text.ts";
 
-const messages = (result: { error?: { issues: { message: string }[] } }) => result.error?.issues.map((issue) => issue.message) ?? [];
+const messages = (result: { error?: { issues: { message: string }[] } }) =>
+  result.error?.issues.map((issue) => issue.message) ?? [];
 
 describe("text", () => {
   it("trims and accepts ordinary text, accents and characters beyond the BMP", () => {
@@ -26,7 +33,9 @@ describe("text", () => {
 
   it("refuses lone surrogates, high or low, anywhere (no UTF-8 form; jsonb refuses them)", () => {
     for (const value of ["\uD83D", "a\uD83Db", "\uDE00a", "\uDE00\uD83D", "ok\uD83D\uD83D\uDE00"]) {
-      expect(messages(text({ multiline: true }).safeParse(value)), JSON.stringify(value)).toEqual([BROKEN_CHARACTER_MESSAGE]);
+      expect(messages(text({ multiline: true }).safeParse(value)), JSON.stringify(value)).toEqual([
+        BROKEN_CHARACTER_MESSAGE,
+      ]);
     }
     expect(text().parse("\uD83D\uDE00")).toBe("😀");
   });

@@ -15,7 +15,8 @@ describe("growDemoData", () => {
   });
   afterAll(() => handle.close());
 
-  const countOf = async (table: typeof equipment | typeof visits | typeof readings | typeof visitEvents) => (await handle.db.select({ n: count() }).from(table))[0]!.n;
+  const countOf = async (table: typeof equipment | typeof visits | typeof readings | typeof visitEvents) =>
+    (await handle.db.select({ n: count() }).from(table))[0]!.n;
 
   it("seeds the demo and grows it to the sizes asked, with one long open visit", async () => {
     const report = await growDemoData(handle.db, sizes);
@@ -23,14 +24,17 @@ describe("growDemoData", () => {
     expect(await countOf(visits)).toBe(sizes.visits);
     const [long] = await handle.db.select().from(visits).where(eq(visits.id, report.longVisitId));
     expect(long).toMatchObject({ reason: LONG_VISIT_REASON, status: "open" });
-    expect((await handle.db.select({ n: count() }).from(readings).where(eq(readings.visitId, report.longVisitId)))[0]!.n).toBe(sizes.longVisitReadings);
+    expect(
+      (await handle.db.select({ n: count() }).from(readings).where(eq(readings.visitId, report.longVisitId)))[0]!.n,
+    ).toBe(sizes.longVisitReadings);
     // Every visit has its audit trail from the start, as POST /api/visits writes it.
     expect(await countOf(visitEvents)).toBeGreaterThanOrEqual(sizes.visits - 4);
   });
 
   it("stores each reading's result as the server's engine gives it for the stored input", async () => {
     const sample = await handle.db.select().from(readings).limit(25);
-    for (const reading of sample) expect(reading.result).toEqual(JSON.parse(JSON.stringify(await diagnoseReading(reading.input))));
+    for (const reading of sample)
+      expect(reading.result).toEqual(JSON.parse(JSON.stringify(await diagnoseReading(reading.input))));
   });
 
   it("adds nothing when run again at the same size", async () => {

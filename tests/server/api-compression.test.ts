@@ -17,13 +17,16 @@ describe("API answers compressed", () => {
   });
   afterAll(() => testApp.close());
 
-  it.each(["gzip", "br"])("sends a list in %s when the client takes it, and identity when it takes none", async (encoding) => {
-    const compressed = await technician.get("/api/visits").set("Accept-Encoding", encoding);
-    expect(compressed.status).toBe(200);
-    expect(compressed.headers["content-encoding"]).toBe(encoding);
-    const plain = await technician.get("/api/visits").set("Accept-Encoding", "identity");
-    expect(plain.headers["content-encoding"]).toBeUndefined();
-    expect(compressed.body).toEqual(plain.body);
-    expect(plain.body.visits.length).toBeGreaterThan(0);
-  });
+  it.each(["gzip", "br"])(
+    "sends a list in %s when the client takes it, and identity when it takes none",
+    async (encoding) => {
+      const compressed = await technician.get("/api/visits").set("Accept-Encoding", encoding);
+      expect(compressed.status).toBe(200);
+      expect(compressed.headers["content-encoding"]).toBe(encoding);
+      const plain = await technician.get("/api/visits").set("Accept-Encoding", "identity");
+      expect(plain.headers["content-encoding"]).toBeUndefined();
+      expect(compressed.body).toEqual(plain.body);
+      expect(plain.body.visits.length).toBeGreaterThan(0);
+    },
+  );
 });

@@ -57,7 +57,10 @@ const NASTY_STRINGS = [
 ];
 const NASTY_NUMBERS = [0, -0, -1, 0.5, 1.5, 7, 99, 1e6, 1e308, -1e308, 2 ** 31, Number.MAX_SAFE_INTEGER + 2, 5e-324];
 
-const nastyString = fc.oneof({ arbitrary: fc.constantFrom(...NASTY_STRINGS), weight: 3 }, { arbitrary: fc.string({ unit: "binary", maxLength: 40 }), weight: 1 });
+const nastyString = fc.oneof(
+  { arbitrary: fc.constantFrom(...NASTY_STRINGS), weight: 3 },
+  { arbitrary: fc.string({ unit: "binary", maxLength: 40 }), weight: 1 },
+);
 const nastyLeaf = fc.oneof(
   { arbitrary: nastyString, weight: 4 },
   { arbitrary: fc.constantFrom<unknown>(...NASTY_NUMBERS), weight: 3 },
@@ -73,11 +76,61 @@ const nastyValue: fc.Arbitrary<unknown> = fc.oneof(
 
 /** Field names the API's bodies use, so that random objects hit real fields. */
 const FIELD_NAMES = [
-  "name", "email", "password", "organisationName", "token", "role", "body", "reason", "note", "kind", "kg", "circuit", "cylinderId", "at",
-  "takenAt", "title", "story", "input", "reasoning", "refrigerant", "meteringDevice", "fault", "seed", "caseId", "answers", "action", "to",
-  "label", "serial", "waterCapacityKg", "tareKg", "customerId", "siteId", "equipmentId", "address", "altitudeM", "circuits", "microns",
-  "minutes", "isolateNow", "targetMicrons", "samples", "method", "placesChecked", "leaks", "target", "supplyVolts", "preferences",
-  "readingId", "description", "amountKg", "suctionPressureKPa", "liquidPressureKPa", "lineAdjustmentKg", "evacuationTargetMicrons",
+  "name",
+  "email",
+  "password",
+  "organisationName",
+  "token",
+  "role",
+  "body",
+  "reason",
+  "note",
+  "kind",
+  "kg",
+  "circuit",
+  "cylinderId",
+  "at",
+  "takenAt",
+  "title",
+  "story",
+  "input",
+  "reasoning",
+  "refrigerant",
+  "meteringDevice",
+  "fault",
+  "seed",
+  "caseId",
+  "answers",
+  "action",
+  "to",
+  "label",
+  "serial",
+  "waterCapacityKg",
+  "tareKg",
+  "customerId",
+  "siteId",
+  "equipmentId",
+  "address",
+  "altitudeM",
+  "circuits",
+  "microns",
+  "minutes",
+  "isolateNow",
+  "targetMicrons",
+  "samples",
+  "method",
+  "placesChecked",
+  "leaks",
+  "target",
+  "supplyVolts",
+  "preferences",
+  "readingId",
+  "description",
+  "amountKg",
+  "suctionPressureKPa",
+  "liquidPressureKPa",
+  "lineAdjustmentKg",
+  "evacuationTargetMicrons",
 ];
 
 type Mutation = [index: number, value: unknown, how: "replace" | "delete" | "add"];
@@ -99,7 +152,12 @@ function mutate(sample: Record<string, unknown>, mutations: Mutation[]): unknown
       body = how === "replace" ? value : body;
       continue;
     }
-    const parent = path.slice(0, -1).reduce<unknown>((node, key) => (node as Record<string | number, unknown>)[key], body) as Record<string | number, unknown>;
+    const parent = path
+      .slice(0, -1)
+      .reduce<unknown>((node, key) => (node as Record<string | number, unknown>)[key], body) as Record<
+      string | number,
+      unknown
+    >;
     const key = path.at(-1)!;
     if (how === "replace") parent[key] = value;
     else if (how === "delete") delete parent[key];
@@ -108,8 +166,13 @@ function mutate(sample: Record<string, unknown>, mutations: Mutation[]): unknown
   return body;
 }
 
-const mutations = fc.array(fc.tuple(fc.nat(), nastyValue, fc.constantFrom("replace" as const, "delete" as const, "add" as const)), { maxLength: 2 });
-const randomObject = fc.dictionary(fc.oneof(fc.constantFrom(...FIELD_NAMES), fc.string({ maxLength: 8 })), nastyValue, { maxKeys: 6 });
+const mutations = fc.array(
+  fc.tuple(fc.nat(), nastyValue, fc.constantFrom("replace" as const, "delete" as const, "add" as const)),
+  { maxLength: 2 },
+);
+const randomObject = fc.dictionary(fc.oneof(fc.constantFrom(...FIELD_NAMES), fc.string({ maxLength: 8 })), nastyValue, {
+  maxKeys: 6,
+});
 
 type Body = { kind: "json"; value: unknown } | { kind: "raw"; text: string } | { kind: "none" };
 const rawJson = fc.constantFrom("{", "[1,", '{"name":', "null", '"text"', "12", `{"a":"${"y".repeat(250_000)}"}`);
@@ -126,20 +189,69 @@ function bodyFor(sample: Record<string, unknown> | undefined): fc.Arbitrary<Body
 }
 
 /** Path segments that are not ids: malformed percent-escapes, dots, numbers, another refrigerant's case id. */
-const ODD_SEGMENTS = ["%", "%zz", "%00", "%ED%A0%80", "..", "1.5", "-1", "0", "99999999999999999999", "abc", "gen~1~txv~normal~R744", "gen~7~txv~undercharged~R410A", "%2F", "x".repeat(300)];
+const ODD_SEGMENTS = [
+  "%",
+  "%zz",
+  "%00",
+  "%ED%A0%80",
+  "..",
+  "1.5",
+  "-1",
+  "0",
+  "99999999999999999999",
+  "abc",
+  "gen~1~txv~normal~R744",
+  "gen~7~txv~undercharged~R410A",
+  "%2F",
+  "x".repeat(300),
+];
 
 const safeEncode = (text: string) => encodeURIComponent(text.replace(/[\uD800-\uDFFF]/g, "\uFFFD"));
 const QUERY_NAMES = ["from", "to", "technicianId", "refrigerant", "status", "equipmentId", "userId", "token"];
 const queryArb = fc.option(
-  fc.array(fc.tuple(fc.oneof(fc.constantFrom(...QUERY_NAMES), fc.string({ maxLength: 6 })), fc.oneof(nastyString.map(safeEncode), fc.constantFrom("%00", "%ED%A0%80", "%zz", "2026-07-01"))), { maxLength: 4 }),
+  fc.array(
+    fc.tuple(
+      fc.oneof(fc.constantFrom(...QUERY_NAMES), fc.string({ maxLength: 6 })),
+      fc.oneof(nastyString.map(safeEncode), fc.constantFrom("%00", "%ED%A0%80", "%zz", "2026-07-01")),
+    ),
+    { maxLength: 4 },
+  ),
   { nil: undefined },
 );
 
 /** A CSV as a logger or a careless hand might write it. */
-const CSV_CELLS = ["10:05", "10:06:30", "25:00", "99999", "2026-03-14T10:05", "0000-01-01T00:00:00Z", "464", "12", "1734", "37", "-5", "1e309", "abc", "", '"quoted, cell"'];
+const CSV_CELLS = [
+  "10:05",
+  "10:06:30",
+  "25:00",
+  "99999",
+  "2026-03-14T10:05",
+  "0000-01-01T00:00:00Z",
+  "464",
+  "12",
+  "1734",
+  "37",
+  "-5",
+  "1e309",
+  "abc",
+  "",
+  '"quoted, cell"',
+];
 const csvArb = fc
   .tuple(
-    fc.shuffledSubarray(["Time", "Suction pressure kPa", "Suction temp C", "Liquid pressure kPa", "Liquid temp C", "DLT", "Outdoor C", "\u0000odd"], { minLength: 0 }),
+    fc.shuffledSubarray(
+      [
+        "Time",
+        "Suction pressure kPa",
+        "Suction temp C",
+        "Liquid pressure kPa",
+        "Liquid temp C",
+        "DLT",
+        "Outdoor C",
+        "\u0000odd",
+      ],
+      { minLength: 0 },
+    ),
     fc.array(fc.array(fc.constantFrom(...CSV_CELLS), { maxLength: 8 }), { maxLength: 6 }),
   )
   .map(([header, rows]) => [header.join(","), ...rows.map((row) => row.join(","))].join("\n"));
@@ -160,9 +272,20 @@ describe("API fuzz", () => {
     testApp = await createTestApp({ authLimits: UNTHROTTLED });
     world = await twoCompanies(testApp);
     samples = sampleBodies(world.records);
-    const png = await sharp({ create: { width: 64, height: 48, channels: 3, background: "#3366aa" } }).png().toBuffer();
-    const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: "#aa6633" } }).jpeg().toBuffer();
-    photoBytes = [png, jpeg, png.subarray(0, 60), jpeg.subarray(0, jpeg.length - 40), Buffer.from("not a photo"), Buffer.alloc(0)];
+    const png = await sharp({ create: { width: 64, height: 48, channels: 3, background: "#3366aa" } })
+      .png()
+      .toBuffer();
+    const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: "#aa6633" } })
+      .jpeg()
+      .toBuffer();
+    photoBytes = [
+      png,
+      jpeg,
+      png.subarray(0, 60),
+      jpeg.subarray(0, jpeg.length - 40),
+      Buffer.from("not a photo"),
+      Buffer.alloc(0),
+    ];
   }, 120_000);
   afterAll(async () => {
     await testApp.close();
@@ -171,8 +294,27 @@ describe("API fuzz", () => {
   function uploadFor(route: AppRoute): fc.Arbitrary<Upload> | undefined {
     if (route.path.endsWith("/photos")) {
       return fc.record({
-        fields: fc.array(fc.tuple(fc.constantFrom("kind", "caption"), fc.oneof(fc.constantFrom("gauges", "nameplate", "selfie"), nastyString.filter((text) => !text.includes("\u0000")))), { maxLength: 2 }),
-        file: fc.option(fc.record({ field: fc.constantFrom("photo", "file"), bytes: fc.oneof(fc.constantFrom(...photoBytes), fc.uint8Array({ maxLength: 300 }).map((bytes) => Buffer.from(bytes))), name: fc.constantFrom("a.png", "b.jpg", "c.txt") }), { nil: undefined }),
+        fields: fc.array(
+          fc.tuple(
+            fc.constantFrom("kind", "caption"),
+            fc.oneof(
+              fc.constantFrom("gauges", "nameplate", "selfie"),
+              nastyString.filter((text) => !text.includes("\u0000")),
+            ),
+          ),
+          { maxLength: 2 },
+        ),
+        file: fc.option(
+          fc.record({
+            field: fc.constantFrom("photo", "file"),
+            bytes: fc.oneof(
+              fc.constantFrom(...photoBytes),
+              fc.uint8Array({ maxLength: 300 }).map((bytes) => Buffer.from(bytes)),
+            ),
+            name: fc.constantFrom("a.png", "b.jpg", "c.txt"),
+          }),
+          { nil: undefined },
+        ),
       });
     }
     if (route.path.endsWith("/readings/import")) {
@@ -180,11 +322,32 @@ describe("API fuzz", () => {
         fields: fc.array(
           fc.tuple(
             fc.constantFrom("circuit", "dayStart", "mode", "mapping"),
-            fc.oneof(fc.constantFrom("1", "2", "1.5", "2026-12-01T00:00:00+11:00", "0000-01-01T00:00:00Z", "preview", "valid-only", "all", '{"Time":"takenAt"}', "{"), nastyString.filter((text) => !text.includes("\u0000"))),
+            fc.oneof(
+              fc.constantFrom(
+                "1",
+                "2",
+                "1.5",
+                "2026-12-01T00:00:00+11:00",
+                "0000-01-01T00:00:00Z",
+                "preview",
+                "valid-only",
+                "all",
+                '{"Time":"takenAt"}',
+                "{",
+              ),
+              nastyString.filter((text) => !text.includes("\u0000")),
+            ),
           ),
           { maxLength: 4 },
         ),
-        file: fc.option(fc.record({ field: fc.constant("file"), bytes: csvArb.map((text) => Buffer.from(text)), name: fc.constant("log.csv") }), { nil: undefined }),
+        file: fc.option(
+          fc.record({
+            field: fc.constant("file"),
+            bytes: csvArb.map((text) => Buffer.from(text)),
+            name: fc.constant("log.csv"),
+          }),
+          { nil: undefined },
+        ),
       });
     }
     return undefined;
@@ -194,7 +357,13 @@ describe("API fuzz", () => {
     const real = pathFor(route.path, world.records);
     const segments = route.path.split("/");
     return fc
-      .tuple(...segments.map((segment, index) => (segment.startsWith(":") ? fc.oneof(fc.constant(real.split("/")[index]!), fc.uuid(), fc.constantFrom(...ODD_SEGMENTS)) : fc.constant(segment))))
+      .tuple(
+        ...segments.map((segment, index) =>
+          segment.startsWith(":")
+            ? fc.oneof(fc.constant(real.split("/")[index]!), fc.uuid(), fc.constantFrom(...ODD_SEGMENTS))
+            : fc.constant(segment),
+        ),
+      )
       .map((parts) => parts.join("/"));
   }
 
@@ -204,9 +373,19 @@ describe("API fuzz", () => {
     return SESSION_ROUTES.has(route.key as RouteKey) ? signedIn(testApp.app, BELLBIRD[caller]) : world.bellbird[caller];
   }
 
-  async function send(caller: Caller, route: AppRoute, path: string, query: [string, string][] | undefined, body: Body, upload: Upload | undefined) {
+  async function send(
+    caller: Caller,
+    route: AppRoute,
+    path: string,
+    query: [string, string][] | undefined,
+    body: Body,
+    upload: Upload | undefined,
+  ) {
     const agent = await agentFor(caller, route);
-    const url = query && query.length > 0 ? `${path}?${query.map(([name, value]) => `${safeEncode(name)}=${value}`).join("&")}` : path;
+    const url =
+      query && query.length > 0
+        ? `${path}?${query.map(([name, value]) => `${safeEncode(name)}=${value}`).join("&")}`
+        : path;
     const method = route.method.toLowerCase() as "get" | "post" | "put" | "patch" | "delete";
     const call = agent[method](url);
     if (upload) {

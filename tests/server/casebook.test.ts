@@ -192,7 +192,10 @@ describe("casebook API", () => {
     expect(edited.body.case.expected.chargeState).toBe("undercharged");
 
     // An owner who opened the case before that edit: their copy is stale and is refused.
-    const stale = await owner.put(`/api/cases/${draft.id}`).set("If-Match", '"1"').send({ ...authored, title: "Overwritten" });
+    const stale = await owner
+      .put(`/api/cases/${draft.id}`)
+      .set("If-Match", '"1"')
+      .send({ ...authored, title: "Overwritten" });
     expect(stale.status).toBe(409);
     expect(stale.body.message).toMatch(/A newer version of this case was saved.*Reload/);
     expect((await senior.get(`/api/cases/${draft.id}`)).body.case.title).toBe(authored.title);
@@ -231,19 +234,17 @@ describe("casebook API", () => {
     expect((await outsider.delete(`/api/cases/${own.id}`).set("If-Match", '"1"')).status).toBe(404);
     expect(
       (
-        await outsider
-          .post("/api/attempts")
-          .send({
-            caseId: own.id,
-            answers: {
-              evaporatingTempC: 7,
-              condensingTempC: 45,
-              superheatK: 6,
-              subcoolingK: 5,
-              chargeState: "normal",
-              reasoning: "guess",
-            },
-          })
+        await outsider.post("/api/attempts").send({
+          caseId: own.id,
+          answers: {
+            evaporatingTempC: 7,
+            condensingTempC: 45,
+            superheatK: 6,
+            subcoolingK: 5,
+            chargeState: "normal",
+            reasoning: "guess",
+          },
+        })
       ).status,
     ).toBe(404);
     // Their own list has the built-in library but not Bellbird's cases.
@@ -258,17 +259,15 @@ describe("casebook API", () => {
     const visit = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Waiting room warm" }))
       .body.visit;
     const reading = (
-      await technician
-        .post(`/api/visits/${visit.id}/readings`)
-        .send({
-          circuit: 1,
-          // A reading carries measured values only; the nameplate gives the rest.
-          ...authored.input,
-          refrigerant: undefined,
-          meteringDevice: undefined,
-          targetSubcoolingK: undefined,
-          note: "Spoke with the practice manager",
-        })
+      await technician.post(`/api/visits/${visit.id}/readings`).send({
+        circuit: 1,
+        // A reading carries measured values only; the nameplate gives the rest.
+        ...authored.input,
+        refrigerant: undefined,
+        meteringDevice: undefined,
+        targetSubcoolingK: undefined,
+        note: "Spoke with the practice manager",
+      })
     ).body.reading;
     expect((await apprentice.post("/api/cases/from-reading").send({ readingId: reading.id })).status).toBe(403);
     expect((await outsider.post("/api/cases/from-reading").send({ readingId: reading.id })).status).toBe(404);
@@ -292,12 +291,10 @@ describe("casebook API", () => {
     const again = await senior.get(`/api/cases/${encodeURIComponent(made.id)}`);
     expect(again.body.case.input).toEqual(made.input);
     expect(again.body.case.expected.chargeState).toBe("restricted-metering");
-    const attempt = await apprentice
-      .post("/api/attempts")
-      .send({
-        caseId: made.id,
-        answers: { ...again.body.case.expected, reasoning: "High superheat with high subcooling" },
-      });
+    const attempt = await apprentice.post("/api/attempts").send({
+      caseId: made.id,
+      answers: { ...again.body.case.expected, reasoning: "High superheat with high subcooling" },
+    });
     expect(attempt.status).toBe(201);
     expect(attempt.body.attempt.score.allCorrect).toBe(true);
     expect((await senior.put(`/api/cases/${encodeURIComponent(made.id)}`).send(authored)).status).toBe(403);

@@ -11,7 +11,8 @@ const MINUTE = 60_000;
 /** The demo clinic stands at 85 m: gauges there read against the ISO 2533 atmosphere at that altitude. */
 const ATMOSPHERE = atmosphericPressureAtAltitude(demoSite.altitudeM);
 /** Gauge pressure at which R407C has the wanted saturation temperature. */
-const gauge = (temperatureC: number, point: "bubble" | "dew") => Number((saturationPressure("R407C", temperatureC, point) - ATMOSPHERE).toFixed(1));
+const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+  Number((saturationPressure("R407C", temperatureC, point) - ATMOSPHERE).toFixed(1));
 
 /** Circuit 2 of the demo rooftop unit running at its nameplate charge: superheat 6 K, subcooling 5 K. */
 const onCharge = {
@@ -28,7 +29,14 @@ const onCharge = {
   runMinutes: 20,
 };
 
-const VALUES = { subcoolingK: 5, superheatK: 6, evaporatingTempC: 6, condensingTempC: 42, outdoorAirDryBulbC: 31, returnAirDryBulbC: 25 };
+const VALUES = {
+  subcoolingK: 5,
+  superheatK: 6,
+  evaporatingTempC: 6,
+  condensingTempC: 42,
+  outdoorAirDryBulbC: 31,
+  returnAirDryBulbC: 25,
+};
 
 describe("charge reference points", () => {
   let testApp: TestApp;
@@ -54,12 +62,15 @@ describe("charge reference points", () => {
   });
   afterAll(() => testApp.close());
 
-  const path = (unitId: string, circuit?: number) => `/api/equipment/${unitId}/charge-references${circuit === undefined ? "" : `/${circuit}`}`;
+  const path = (unitId: string, circuit?: number) =>
+    `/api/equipment/${unitId}/charge-references${circuit === undefined ? "" : `/${circuit}`}`;
 
   it("lists each circuit with its correct charge and no reference point until one is set", async () => {
     const response = await apprentice.get(path(splitId));
     expect(response.status).toBe(200);
-    expect(response.body.circuits).toEqual([{ circuit: 1, correctChargeKg: 0.85, lineAdjustmentKg: 0, current: null, history: [] }]);
+    expect(response.body.circuits).toEqual([
+      { circuit: 1, correctChargeKg: 0.85, lineAdjustmentKg: 0, current: null, history: [] },
+    ]);
   });
 
   it("lets a senior set one from typed values and names who set it", async () => {
@@ -89,10 +100,18 @@ describe("charge reference points", () => {
       visitId: visit.id,
       readingId: reading.id,
       readingCount: 1,
-      values: { subcoolingK: reading.result.subcoolingK, superheatK: reading.result.superheatK, outdoorAirDryBulbC: 28, returnAirDryBulbC: 23 },
+      values: {
+        subcoolingK: reading.result.subcoolingK,
+        superheatK: reading.result.superheatK,
+        outdoorAirDryBulbC: 28,
+        returnAirDryBulbC: 23,
+      },
     });
     expect(circuit.history).toHaveLength(2);
-    expect(circuit.history[1].cleared).toMatchObject({ reason: "Replaced by a reference point set by a senior", by: { name: "Dana Whitlock" } });
+    expect(circuit.history[1].cleared).toMatchObject({
+      reason: "Replaced by a reference point set by a senior",
+      by: { name: "Dana Whitlock" },
+    });
   });
 
   it("refuses technicians and apprentices: a reference point is a senior's call", async () => {
@@ -122,7 +141,10 @@ describe("charge reference points", () => {
     expect(cleared.status).toBe(200);
     const [circuit] = cleared.body.circuits;
     expect(circuit.current).toBeNull();
-    expect(circuit.history[0].cleared).toMatchObject({ reason: "Condenser coil replaced", by: { name: "Priya Raman" } });
+    expect(circuit.history[0].cleared).toMatchObject({
+      reason: "Condenser coil replaced",
+      by: { name: "Priya Raman" },
+    });
     const again = await senior.delete(path(splitId, 1)).send({ reason: "Condenser coil replaced" });
     expect(again.status).toBe(404);
     expect(again.body.message).toBe("Circuit 1 has no reference point to clear");
@@ -135,20 +157,43 @@ describe("charge reference points", () => {
   });
 
   it("takes the settled readings after a full weigh-in as the reference point, and measures a later short circuit from it", async () => {
-    const cylinders = (await technician.get("/api/cylinders?refrigerant=R407C")).body.cylinders as { id: string; kind: string }[];
+    const cylinders = (await technician.get("/api/cylinders?refrigerant=R407C")).body.cylinders as {
+      id: string;
+      kind: string;
+    }[];
     const recovery = cylinders.find((cylinder) => cylinder.kind === "recovery")!.id;
     const fresh = cylinders.find((cylinder) => cylinder.kind === "new")!.id;
-    const visitId = (await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Circuit 2 evacuated and weighed in" })).body.visit.id;
+    const visitId = (
+      await technician
+        .post("/api/visits")
+        .send({ equipmentId: rooftopId, reason: "Circuit 2 evacuated and weighed in" })
+    ).body.visit.id;
     const weighedIn = Date.now() - 60 * MINUTE;
     await startVisitAt(testApp, visitId, new Date(weighedIn - 2 * 60 * MINUTE));
-    const register = (body: Record<string, unknown>) => technician.post(`/api/visits/${visitId}/refrigerant`).send({ circuit: 2, ...body });
-    expect((await register({ kind: "recovered", kg: 3.1, cylinderId: recovery, at: new Date(weighedIn - 60 * MINUTE).toISOString() })).status).toBe(201);
-    expect((await register({ kind: "added-new", kg: 4.5, cylinderId: fresh, at: new Date(weighedIn).toISOString() })).status).toBe(201);
+    const register = (body: Record<string, unknown>) =>
+      technician.post(`/api/visits/${visitId}/refrigerant`).send({ circuit: 2, ...body });
+    expect(
+      (
+        await register({
+          kind: "recovered",
+          kg: 3.1,
+          cylinderId: recovery,
+          at: new Date(weighedIn - 60 * MINUTE).toISOString(),
+        })
+      ).status,
+    ).toBe(201);
+    expect(
+      (await register({ kind: "added-new", kg: 4.5, cylinderId: fresh, at: new Date(weighedIn).toISOString() })).status,
+    ).toBe(201);
     // The line set holds 0.3 kg beyond the factory charge: the correct charge is 4.5 kg.
-    expect((await technician.put(`/api/visits/${visitId}/refrigerant/charging/2`).send({ lineAdjustmentKg: 0.3 })).status).toBe(200);
+    expect(
+      (await technician.put(`/api/visits/${visitId}/refrigerant/charging/2`).send({ lineAdjustmentKg: 0.3 })).status,
+    ).toBe(200);
 
     const log = (minutes: number, values: Partial<typeof onCharge> = {}) =>
-      technician.post(`/api/visits/${visitId}/readings`).send({ ...onCharge, ...values, takenAt: new Date(weighedIn + minutes * MINUTE).toISOString() });
+      technician
+        .post(`/api/visits/${visitId}/readings`)
+        .send({ ...onCharge, ...values, takenAt: new Date(weighedIn + minutes * MINUTE).toISOString() });
     // Still pulling down: not settled, so no reference point yet.
     expect((await log(2, { liquidLineTempC: 39, suctionLineTempC: 15 })).status).toBe(201);
     expect((await log(4)).status).toBe(201);
@@ -159,14 +204,24 @@ describe("charge reference points", () => {
     expect(circuits[1].correctChargeKg).toBeCloseTo(4.5, 9);
     // Settled per the run log's rule (changes under 1 K over 5 min; Title 24 and makers' 15–20 min
     // settling, window and limits common practice); the reference is the window's mean.
-    expect(circuits[1].current).toMatchObject({ source: "weigh-in", visitId, setBy: { name: "Sam Toko" }, values: { outdoorAirDryBulbC: 31, returnAirDryBulbC: 24 } });
+    expect(circuits[1].current).toMatchObject({
+      source: "weigh-in",
+      visitId,
+      setBy: { name: "Sam Toko" },
+      values: { outdoorAirDryBulbC: 31, returnAirDryBulbC: 24 },
+    });
     expect(circuits[1].current.values.subcoolingK).toBeCloseTo(5, 0);
     expect(circuits[1].current.values.superheatK).toBeCloseTo(6, 0);
     expect(circuits[1].current.readingCount).toBeGreaterThanOrEqual(3);
     expect(circuits[0].current?.visitId).not.toBe(visitId);
     // The visit's trail says its readings now calibrate the unit.
-    const trail = (await technician.get(`/api/visits/${visitId}`)).body.visit.events as { action: string; summary: string }[];
-    expect(trail.filter((event) => event.action === "charge-reference-set")).toEqual([expect.objectContaining({ summary: expect.stringMatching(/^Circuit 2: settled after the full weigh-in/) })]);
+    const trail = (await technician.get(`/api/visits/${visitId}`)).body.visit.events as {
+      action: string;
+      summary: string;
+    }[];
+    expect(trail.filter((event) => event.action === "charge-reference-set")).toEqual([
+      expect.objectContaining({ summary: expect.stringMatching(/^Circuit 2: settled after the full weigh-in/) }),
+    ]);
 
     // One per visit: after a senior clears it, more settled readings do not bring it back.
     expect((await senior.delete(path(rooftopId, 2)).send({ reason: "Checking the clear holds" })).status).toBe(200);
@@ -176,8 +231,12 @@ describe("charge reference points", () => {
 
     // A later visit finds the circuit short: subcooling down, superheat up. Virtual refrigerant
     // charge (Li & Braun 2009): the deviation is measured from the circuit's own reference point.
-    const later = (await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Circuit 2 warm again" })).body.visit.id;
-    const short = await technician.post(`/api/visits/${later}/readings`).send({ ...onCharge, liquidLineTempC: 40.5, suctionLineTempC: 17 });
+    const later = (
+      await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Circuit 2 warm again" })
+    ).body.visit.id;
+    const short = await technician
+      .post(`/api/visits/${later}/readings`)
+      .send({ ...onCharge, liquidLineTempC: 40.5, suctionLineTempC: 17 });
     expect(short.status).toBe(201);
     const { input, result } = short.body.reading;
     expect(input).toMatchObject({ chargeKg: 4.5, chargeReference: circuits[1].current.values });

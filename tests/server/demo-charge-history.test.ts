@@ -33,13 +33,19 @@ describe("demo charge history", () => {
     const { circuits } = (await senior.get(`/api/equipment/${rooftopId}/charge-references`)).body;
     expect(circuits[0].current).toMatchObject({ source: "weigh-in", setBy: { name: "Sam Toko" }, cleared: null });
     expect(circuits[0].history).toHaveLength(2);
-    expect(circuits[0].history[1]).toMatchObject({ source: "weigh-in", setBy: { name: "Lee Hargreaves" }, cleared: { reason: "Replaced by the reference point settled after a weigh-in" } });
+    expect(circuits[0].history[1]).toMatchObject({
+      source: "weigh-in",
+      setBy: { name: "Lee Hargreaves" },
+      cleared: { reason: "Replaced by the reference point settled after a weigh-in" },
+    });
     expect(circuits[0].history[1].values.subcoolingK).toBeCloseTo(5, 0);
     expect(circuits[1].current).toBeNull();
   });
 
   it("puts the recovered-and-weighed shortfall inside the range estimated from the short readings", async () => {
-    const visits = (await senior.get(`/api/visits?equipmentId=${rooftopId}&status=awaiting-review`)).body.visits as { id: string }[];
+    const visits = (await senior.get(`/api/visits?equipmentId=${rooftopId}&status=awaiting-review`)).body.visits as {
+      id: string;
+    }[];
     const visit = (await senior.get(`/api/visits/${visits[0]!.id}`)).body.visit;
     const refrigerant = (await senior.get(`/api/visits/${visit.id}/refrigerant`)).body;
     const recoveredKg = refrigerant.movements

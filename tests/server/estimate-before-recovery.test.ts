@@ -21,7 +21,8 @@ type Agent = Awaited<ReturnType<typeof signedIn>>;
 const COUNT = 3 * READINGS_PAGE_SIZE;
 const START = Date.UTC(2026, 11, 2, 1, 0, 0);
 const STEP_MS = 30_000;
-const gauge = (temperatureC: number, point: "bubble" | "dew") => saturationPressure("R407C", temperatureC, point) - STANDARD_ATMOSPHERE_KPA;
+const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+  saturationPressure("R407C", temperatureC, point) - STANDARD_ATMOSPHERE_KPA;
 
 /** Reading `index`: a TXV circuit of 4.2 kg whose subcooling falls as the log runs (losing charge), so each estimate differs. */
 function inputAt(index: number): DiagnosisInput {
@@ -50,15 +51,20 @@ describe("the charge estimate before a circuit's first recovery", () => {
     await seedBellbird(testApp);
     technician = await signedIn(testApp.app, BELLBIRD.technician);
     visitId = await startRooftopVisit(technician, "Short of charge, recover and weigh in");
-    const cylinders = (await technician.get("/api/cylinders?refrigerant=R407C")).body.cylinders as { id: string; kind: string }[];
+    const cylinders = (await technician.get("/api/cylinders?refrigerant=R407C")).body.cylinders as {
+      id: string;
+      kind: string;
+    }[];
     recoveryCylinder = cylinders.find((cylinder) => cylinder.kind === "recovery")!.id;
     const readings = await readingStore(testApp, visitId);
-    for (let index = 0; index < COUNT; index++) stored.push(readings.row(inputAt(index), new Date(START + index * STEP_MS)));
+    for (let index = 0; index < COUNT; index++)
+      stored.push(readings.row(inputAt(index), new Date(START + index * STEP_MS)));
     await readings.store(stored);
   }, 120_000);
   afterAll(() => testApp.close());
 
-  const refrigerant = async () => VisitRefrigerantSchema.parse((await technician.get(`/api/visits/${visitId}/refrigerant`)).body);
+  const refrigerant = async () =>
+    VisitRefrigerantSchema.parse((await technician.get(`/api/visits/${visitId}/refrigerant`)).body);
   const recover = async (kg: number, at: number) => {
     const response = await technician
       .post(`/api/visits/${visitId}/refrigerant`)
@@ -92,15 +98,25 @@ describe("the charge estimate before a circuit's first recovery", () => {
 
   it("skips a voided reading: a correction never counts", async () => {
     const voided = stored[40]!;
-    expect((await technician.post(`/api/visits/${visitId}/voids`).send({ kind: "reading", recordId: voided.id, reason: "Probe slipped off the liquid line" })).status).toBe(201);
+    expect(
+      (
+        await technician
+          .post(`/api/visits/${visitId}/voids`)
+          .send({ kind: "reading", recordId: voided.id, reason: "Probe slipped off the liquid line" })
+      ).status,
+    ).toBe(201);
     const circuit = (await refrigerant()).circuits.find((balance) => balance.circuit === 1)!;
     expect(circuit.estimateBeforeRecovery).toEqual(stored[39]!.result.chargeDeviation);
   });
 
   it("follows the first standing recovery when the earlier one is voided", async () => {
     const refrigerantNow = await refrigerant();
-    const first = refrigerantNow.movements.filter((movement) => movement.kind === "recovered").sort((a, b) => Date.parse(a.at) - Date.parse(b.at))[0]!;
-    const voided = await technician.post(`/api/visits/${visitId}/voids`).send({ kind: "movement", recordId: first.id, reason: "Logged against the wrong visit" });
+    const first = refrigerantNow.movements
+      .filter((movement) => movement.kind === "recovered")
+      .sort((a, b) => Date.parse(a.at) - Date.parse(b.at))[0]!;
+    const voided = await technician
+      .post(`/api/visits/${visitId}/voids`)
+      .send({ kind: "movement", recordId: first.id, reason: "Logged against the wrong visit" });
     expect(voided.status).toBe(201);
     const circuit = (await refrigerant()).circuits.find((balance) => balance.circuit === 1)!;
     // The later recovery now stands first: the last reading before it is number COUNT − 11.

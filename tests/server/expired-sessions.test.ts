@@ -18,7 +18,10 @@ describe("expired session purge", () => {
     await signedIn(testApp.app, BELLBIRD.senior);
     const { db } = testApp.database;
     const [first] = await db.select().from(sessions).limit(1);
-    await db.update(sessions).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(sessions.id, first!.id));
+    await db
+      .update(sessions)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(sessions.id, first!.id));
     expect(await deleteExpiredSessions(db)).toBe(1);
     expect(await db.select().from(sessions)).toHaveLength(1);
     expect(await deleteExpiredSessions(db)).toBe(0);

@@ -23,7 +23,10 @@ describe("GET /api/health", () => {
   });
 
   it("answers malformed JSON with a 400 and a message", async () => {
-    const response = await request(testApp.app).post("/api/health").set("Content-Type", "application/json").send("{bad");
+    const response = await request(testApp.app)
+      .post("/api/health")
+      .set("Content-Type", "application/json")
+      .send("{bad");
     expect(response.status).toBe(400);
     expect(response.body.message).toBe("The request body is not valid JSON");
   });

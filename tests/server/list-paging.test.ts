@@ -62,8 +62,14 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     technician = await signedIn(testApp.app, BELLBIRD.technician);
     outsider = (await signUpOtherCompany(testApp.app)).agent;
     const { client, db } = testApp.database;
-    organisationId = (await client.query<{ organisation_id: string }>("select organisation_id from users where email = $1", [BELLBIRD.technician])).rows[0]!.organisation_id;
-    const site = (await client.query<{ id: string }>("select id from sites where organisation_id = $1 limit 1", [organisationId])).rows[0]!.id;
+    organisationId = (
+      await client.query<{ organisation_id: string }>("select organisation_id from users where email = $1", [
+        BELLBIRD.technician,
+      ])
+    ).rows[0]!.organisation_id;
+    const site = (
+      await client.query<{ id: string }>("select id from sites where organisation_id = $1 limit 1", [organisationId])
+    ).rows[0]!.id;
     // Units with repeated names (ties on the name sort) and charges from 0.5 to 12.4 kg.
     await client.query(
       `insert into equipment (organisation_id, site_id, name, kind, refrigerant, circuits)
@@ -85,7 +91,12 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
   afterAll(() => testApp.close());
 
   const visitCount = async (where = "true", params: unknown[] = []) =>
-    (await testApp.database.client.query<{ n: number }>(`select count(*)::int as n from visits where organisation_id = $1 and ${where}`, [organisationId, ...params])).rows[0]!.n;
+    (
+      await testApp.database.client.query<{ n: number }>(
+        `select count(*)::int as n from visits where organisation_id = $1 and ${where}`,
+        [organisationId, ...params],
+      )
+    ).rows[0]!.n;
 
   it("walks every visit once, newest first, with ties on the start time broken by id", async () => {
     const { rows, pages } = await walk<Summary>(technician, "/api/visits?limit=173", "visits");
@@ -94,19 +105,28 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     expect(rows).toHaveLength(total);
     expect(new Set(rows.map((row) => row.id)).size).toBe(total);
     expect(pages).toBe(Math.ceil(total / 173));
-    for (let index = 1; index < rows.length; index += 1) expect(Date.parse(rows[index - 1].startedAt)).toBeGreaterThanOrEqual(Date.parse(rows[index].startedAt));
+    for (let index = 1; index < rows.length; index += 1)
+      expect(Date.parse(rows[index - 1].startedAt)).toBeGreaterThanOrEqual(Date.parse(rows[index].startedAt));
   });
 
   it("gives the default page of 50 and a cursor, and the last page a null cursor", async () => {
     const first = await technician.get("/api/visits");
     expect(first.body.visits).toHaveLength(50);
     expect(typeof first.body.nextCursor).toBe("string");
-    const last = await technician.get("/api/visits?status=open&equipmentId=" + (first.body.visits[0] as Summary & { equipmentId: string }).equipmentId + "&limit=200");
+    const last = await technician.get(
+      "/api/visits?status=open&equipmentId=" +
+        (first.body.visits[0] as Summary & { equipmentId: string }).equipmentId +
+        "&limit=200",
+    );
     expect(last.body.nextCursor).toBeNull();
   });
 
   it("filters by several statuses and sorts by unit name, A to Z, without a gap or a repeat", async () => {
-    const { rows } = await walk<Summary>(technician, "/api/visits?status=open,sent-back&sort=equipmentName&limit=61", "visits");
+    const { rows } = await walk<Summary>(
+      technician,
+      "/api/visits?status=open,sent-back&sort=equipmentName&limit=61",
+      "visits",
+    );
     expect(rows).toHaveLength(await visitCount("status in ('open', 'sent-back')"));
     expect(new Set(rows.map((row) => row.id)).size).toBe(rows.length);
     expect(rows.every((row) => row.status === "open" || row.status === "sent-back")).toBe(true);
@@ -131,7 +151,10 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     for (const typed of ["r-404a", "404A", "R404A"]) {
       const found = await walk<Summary>(technician, `/api/visits?q=${typed}&limit=200`, "visits");
       expect(found.rows.length, typed).toBeGreaterThan(0);
-      expect(found.rows.every((row) => row.refrigerant.replace("-", "") === "R404A"), typed).toBe(true);
+      expect(
+        found.rows.every((row) => row.refrigerant.replace("-", "") === "R404A"),
+        typed,
+      ).toBe(true);
     }
     const clinic = await technician.get("/api/visits?q=wattle%20nothing-like-this");
     expect(clinic.body.visits).toEqual([]);
@@ -140,22 +163,56 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
   });
 
   it("finds exactly what the client's search rule finds, whether it reads ids from the index or walks the list", async () => {
-    const all = (await walk<Summary & { technicians: { name: string }[] }>(technician, "/api/visits?limit=200", "visits")).rows;
-    const textOf = (visit: Summary) => [visit.equipmentName, visit.siteName, visit.customerName, visit.refrigerant, visit.reason].join(" ").toLowerCase();
+    const all = (
+      await walk<Summary & { technicians: { name: string }[] }>(technician, "/api/visits?limit=200", "visits")
+    ).rows;
+    const textOf = (visit: Summary) =>
+      [visit.equipmentName, visit.siteName, visit.customerName, visit.refrigerant, visit.reason]
+        .join(" ")
+        .toLowerCase();
     // "grown" finds more visits than SEARCH_BY_ID_LIMIT (row by row); the others fewer (by id).
-    for (const query of ["grown", "grown visit 17", "R-32 toko", "wattle clinic", "17", "zzqx", "visit 1_", "50%", "rooftop -"]) {
+    for (const query of [
+      "grown",
+      "grown visit 17",
+      "R-32 toko",
+      "wattle clinic",
+      "17",
+      "zzqx",
+      "visit 1_",
+      "50%",
+      "rooftop -",
+    ]) {
       const expected = all
-        .filter((visit) => searchTerms(query).every((term) => matchesSearch(textOf(visit), term.word) || visit.technicians.some((person) => person.name.toLowerCase().includes(term.word))))
+        .filter((visit) =>
+          searchTerms(query).every(
+            (term) =>
+              matchesSearch(textOf(visit), term.word) ||
+              visit.technicians.some((person) => person.name.toLowerCase().includes(term.word)),
+          ),
+        )
         .map((visit) => visit.id)
         .sort();
-      const found = (await walk<Summary>(technician, `/api/visits?q=${encodeURIComponent(query)}&limit=200`, "visits")).rows.map((visit) => visit.id).sort();
+      const found = (
+        await walk<Summary>(technician, `/api/visits?q=${encodeURIComponent(query)}&limit=200`, "visits")
+      ).rows
+        .map((visit) => visit.id)
+        .sort();
       expect(found, query).toEqual(expected);
     }
   });
 
   it("lists the visits the asker is on the crew of, with their last activity", async () => {
-    const { rows } = await walk<Summary & { technicians: { id: string }[]; yourLastActivityAt: string | null }>(technician, "/api/visits?crew=me&limit=200", "visits");
-    const onCrew = (await testApp.database.client.query<{ n: number }>("select count(*)::int as n from visit_technicians where user_id = $1", [technicianId])).rows[0]!.n;
+    const { rows } = await walk<Summary & { technicians: { id: string }[]; yourLastActivityAt: string | null }>(
+      technician,
+      "/api/visits?crew=me&limit=200",
+      "visits",
+    );
+    const onCrew = (
+      await testApp.database.client.query<{ n: number }>(
+        "select count(*)::int as n from visit_technicians where user_id = $1",
+        [technicianId],
+      )
+    ).rows[0]!.n;
     expect(onCrew).toBeGreaterThan(0);
     expect(rows).toHaveLength(onCrew);
     expect(rows.every((row) => row.technicians.some((person) => person.id === technicianId))).toBe(true);
@@ -168,13 +225,22 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     const forged = await technician.get("/api/visits?cursor=not-a-cursor");
     expect(forged.status).toBe(400);
     expect(forged.body.message).toMatch(/cursor/i);
-    const wrongShape = Buffer.from(JSON.stringify({ s: "startedAt", d: "desc", v: ["yesterday"], id: "00000000-0000-4000-8000-000000000000" })).toString("base64url");
+    const wrongShape = Buffer.from(
+      JSON.stringify({ s: "startedAt", d: "desc", v: ["yesterday"], id: "00000000-0000-4000-8000-000000000000" }),
+    ).toString("base64url");
     expect((await technician.get(`/api/visits?cursor=${wrongShape}`)).status).toBe(400);
     const byDate = (await technician.get("/api/visits?limit=5")).body.nextCursor as string;
     const otherSort = await technician.get(`/api/visits?sort=reason&cursor=${byDate}`);
     expect(otherSort.status).toBe(400);
     expect(otherSort.body.message).toMatch(/another sort/);
-    for (const [query, field] of [["limit=0", "limit"], ["limit=201", "limit"], ["limit=ten", "limit"], ["sort=crew", "sort"], ["status=closed", "status"], ["dir=up", "dir"]] as const) {
+    for (const [query, field] of [
+      ["limit=0", "limit"],
+      ["limit=201", "limit"],
+      ["limit=ten", "limit"],
+      ["sort=crew", "sort"],
+      ["status=closed", "status"],
+      ["dir=up", "dir"],
+    ] as const) {
       const response = await technician.get(`/api/visits?${query}`);
       expect(response.status, query).toBe(400);
       expect(Object.keys(response.body.fields ?? {}).join(), query).toContain(field);
@@ -185,26 +251,47 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
 
   it("keeps the search text up to date when a visit is started or its unit, site or customer is renamed", async () => {
     const { client } = testApp.database;
-    const unit = (await client.query<{ id: string; site_id: string }>("select id, site_id from equipment where organisation_id = $1 and name = 'Grown unit 7' limit 1", [organisationId])).rows[0]!;
+    const unit = (
+      await client.query<{ id: string; site_id: string }>(
+        "select id, site_id from equipment where organisation_id = $1 and name = 'Grown unit 7' limit 1",
+        [organisationId],
+      )
+    ).rows[0]!;
     const started = await technician.post("/api/visits").send({ equipmentId: unit.id, reason: "Quokka inspection" });
     expect(started.status).toBe(201);
-    expect((await technician.get("/api/visits?q=quokka")).body.visits.map((visit: Summary) => visit.id)).toEqual([started.body.visit.id]);
+    expect((await technician.get("/api/visits?q=quokka")).body.visits.map((visit: Summary) => visit.id)).toEqual([
+      started.body.visit.id,
+    ]);
 
     await client.query("update equipment set name = 'Numbat chiller' where id = $1", [unit.id]);
     const renamedUnit = (await walk<Summary>(technician, "/api/visits?q=numbat&limit=200", "visits")).rows;
     expect(renamedUnit.length).toBe(await visitCount("equipment_id = $2", [unit.id]));
-    expect((await technician.get("/api/equipment?q=numbat")).body.equipment.map((row: Unit) => row.id)).toEqual([unit.id]);
+    expect((await technician.get("/api/equipment?q=numbat")).body.equipment.map((row: Unit) => row.id)).toEqual([
+      unit.id,
+    ]);
 
     await client.query("update sites set name = 'Bilby Depot' where id = $1", [unit.site_id]);
-    await client.query("update customers set name = 'Dunnart Holdings' where id = (select customer_id from sites where id = $1)", [unit.site_id]);
+    await client.query(
+      "update customers set name = 'Dunnart Holdings' where id = (select customer_id from sites where id = $1)",
+      [unit.site_id],
+    );
     for (const query of ["bilby depot", "dunnart", "numbat bilby dunnart quokka"]) {
-      const found = (await walk<Summary>(technician, `/api/visits?q=${encodeURIComponent(query)}&limit=200`, "visits")).rows;
+      const found = (await walk<Summary>(technician, `/api/visits?q=${encodeURIComponent(query)}&limit=200`, "visits"))
+        .rows;
       expect(found.length, query).toBeGreaterThan(0);
-      expect(found.every((visit) => visit.siteName === "Bilby Depot" && visit.customerName === "Dunnart Holdings"), query).toBe(true);
+      expect(
+        found.every((visit) => visit.siteName === "Bilby Depot" && visit.customerName === "Dunnart Holdings"),
+        query,
+      ).toBe(true);
     }
     expect((await technician.get("/api/equipment?q=dunnart%20numbat")).body.equipment).toHaveLength(1);
     // The place sort's own copies of the names follow the renames (the same trigger as the search text).
-    const sortNames = (await client.query<{ site_sort_name: string; customer_sort_name: string }>("select site_sort_name, customer_sort_name from equipment where id = $1", [unit.id])).rows[0];
+    const sortNames = (
+      await client.query<{ site_sort_name: string; customer_sort_name: string }>(
+        "select site_sort_name, customer_sort_name from equipment where id = $1",
+        [unit.id],
+      )
+    ).rows[0];
     expect(sortNames).toEqual({ site_sort_name: "bilby depot", customer_sort_name: "dunnart holdings" });
     expect((await technician.get("/api/visits?q=grown%20unit%207%20quokka")).body.visits).toEqual([]);
   });
@@ -219,7 +306,12 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
   });
 
   it("walks the equipment in each sort without a gap or a repeat, and searches and filters by kind", async () => {
-    const total = (await testApp.database.client.query<{ n: number }>("select count(*)::int as n from equipment where organisation_id = $1 and not archived", [organisationId])).rows[0]!.n;
+    const total = (
+      await testApp.database.client.query<{ n: number }>(
+        "select count(*)::int as n from equipment where organisation_id = $1 and not archived",
+        [organisationId],
+      )
+    ).rows[0]!.n;
     for (const sort of ["name", "kind", "place", "refrigerant", "circuits", "factoryCharge"]) {
       for (const dir of ["asc", "desc"]) {
         const { rows } = await walk<Unit>(technician, `/api/equipment?sort=${sort}&dir=${dir}&limit=37`, "equipment");
@@ -230,7 +322,11 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     const { rows: byCharge } = await walk<Unit>(technician, "/api/equipment?sort=factoryCharge&limit=50", "equipment");
     const charges = byCharge.map((unit) => unit.circuits.reduce((sum, circuit) => sum + circuit.factoryChargeKg, 0));
     expect(charges).toEqual([...charges].sort((a, b) => a - b));
-    const { rows: r32 } = await walk<Unit>(technician, "/api/equipment?q=r-32&kind=wall%20split&limit=200", "equipment");
+    const { rows: r32 } = await walk<Unit>(
+      technician,
+      "/api/equipment?q=r-32&kind=wall%20split&limit=200",
+      "equipment",
+    );
     expect(r32.length).toBeGreaterThan(0);
     expect(r32.every((unit) => unit.refrigerant === "R32" && unit.kind === "wall split")).toBe(true);
     // "404a" finds the units whose refrigerant was stored as R-404A.
@@ -242,14 +338,29 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
   it("reads the newest visits through the (organisation_id, started_at) index, first page and deep", async () => {
     // The queries the list sends, captured through a logger and explained as they ran.
     const captured: { query: string; params: unknown[] }[] = [];
-    const db = drizzle({ client: testApp.database.client, schema, logger: { logQuery: (query, params) => void captured.push({ query, params }) } });
+    const db = drizzle({
+      client: testApp.database.client,
+      schema,
+      logger: { logQuery: (query, params) => void captured.push({ query, params }) },
+    });
     const first = await listVisitPage(db, organisationId, VisitListQuerySchema.parse({ limit: "50" }), technicianId);
-    const deep = await listVisitPage(db, organisationId, VisitListQuerySchema.parse({ limit: "50", cursor: first.nextCursor! }), technicianId);
+    const deep = await listVisitPage(
+      db,
+      organisationId,
+      VisitListQuerySchema.parse({ limit: "50", cursor: first.nextCursor! }),
+      technicianId,
+    );
     expect(deep.visits[0].id).not.toBe(first.visits[0].id);
-    const listQueries = captured.filter((entry) => entry.query.includes('from "visits"') && entry.query.includes("limit"));
+    const listQueries = captured.filter(
+      (entry) => entry.query.includes('from "visits"') && entry.query.includes("limit"),
+    );
     expect(listQueries).toHaveLength(2);
     for (const entry of listQueries) {
-      const plan = (await testApp.database.client.query<{ "QUERY PLAN": string }>(`explain ${entry.query}`, entry.params)).rows.map((row) => row["QUERY PLAN"]).join("\n");
+      const plan = (
+        await testApp.database.client.query<{ "QUERY PLAN": string }>(`explain ${entry.query}`, entry.params)
+      ).rows
+        .map((row) => row["QUERY PLAN"])
+        .join("\n");
       expect(plan).toContain("visits_organisation_started_idx");
       expect(plan).not.toMatch(/Seq Scan on visits/);
     }
@@ -258,12 +369,18 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     expect(Math.max(...inLists)).toBeLessThanOrEqual(4 * (50 + 2));
     // The equipment list by name reads in index order with the index proposed for it (not yet a
     // migration: made here if missing); without it the organisation's units are read and sorted.
-    await testApp.database.client.query("create index if not exists equipment_organisation_name_idx on equipment (organisation_id, lower(name), id) where not archived");
+    await testApp.database.client.query(
+      "create index if not exists equipment_organisation_name_idx on equipment (organisation_id, lower(name), id) where not archived",
+    );
     await testApp.database.client.query("analyze equipment");
     captured.length = 0;
     await listEquipmentPage(db, organisationId, EquipmentListQuerySchema.parse({}));
     expect(captured).toHaveLength(1);
-    const plan = (await testApp.database.client.query<{ "QUERY PLAN": string }>(`explain ${captured[0].query}`, captured[0].params)).rows.map((row) => row["QUERY PLAN"]).join("\n");
+    const plan = (
+      await testApp.database.client.query<{ "QUERY PLAN": string }>(`explain ${captured[0].query}`, captured[0].params)
+    ).rows
+      .map((row) => row["QUERY PLAN"])
+      .join("\n");
     if (process.env.SHOW_PLANS) console.info(plan);
     expect(plan).toContain("equipment_organisation_name_idx");
     expect(plan).not.toMatch(/Seq Scan on equipment/);
@@ -271,12 +388,25 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
 
   it("reads one status's newest visits and the units by place in index order, not every row", async () => {
     const captured: { query: string; params: unknown[] }[] = [];
-    const db = drizzle({ client: testApp.database.client, schema, logger: { logQuery: (query, params) => void captured.push({ query, params }) } });
+    const db = drizzle({
+      client: testApp.database.client,
+      schema,
+      logger: { logQuery: (query, params) => void captured.push({ query, params }) },
+    });
     await analyzeTables(testApp.database.db);
     const planOf = async (entry: { query: string; params: unknown[] }) =>
-      (await testApp.database.client.query<{ "QUERY PLAN": string }>(`explain ${entry.query}`, entry.params)).rows.map((row) => row["QUERY PLAN"]).join("\n");
-    await listVisitPage(db, organisationId, VisitListQuerySchema.parse({ status: "sent-back", limit: "20" }), technicianId);
-    const statusPlan = await planOf(captured.find((entry) => entry.query.includes('from "visits"') && entry.query.includes("limit"))!);
+      (await testApp.database.client.query<{ "QUERY PLAN": string }>(`explain ${entry.query}`, entry.params)).rows
+        .map((row) => row["QUERY PLAN"])
+        .join("\n");
+    await listVisitPage(
+      db,
+      organisationId,
+      VisitListQuerySchema.parse({ status: "sent-back", limit: "20" }),
+      technicianId,
+    );
+    const statusPlan = await planOf(
+      captured.find((entry) => entry.query.includes('from "visits"') && entry.query.includes("limit"))!,
+    );
     expect(statusPlan).toContain("visits_organisation_status_started_idx");
     captured.length = 0;
     await listEquipmentPage(db, organisationId, EquipmentListQuerySchema.parse({ sort: "place", limit: "20" }));

@@ -41,7 +41,9 @@ describe("request log", () => {
   it("holds no session token, reset token or bearer credential after a signed-in session", async () => {
     const secrets: string[] = [];
     const agent = request.agent(testApp.app);
-    const signIn = await agent.post("/api/auth/sign-in").send({ email: BELLBIRD.owner, password: "bellbird-demo-2026" });
+    const signIn = await agent
+      .post("/api/auth/sign-in")
+      .send({ email: BELLBIRD.owner, password: "bellbird-demo-2026" });
     expect(signIn.status).toBe(200);
     secrets.push(...sessionIds(signIn));
     expect(secrets).toHaveLength(1);
@@ -51,7 +53,9 @@ describe("request log", () => {
     expect((await agent.get("/api/equipment")).status).toBe(200);
     expect((await agent.get("/api/visits/not-a-visit")).status).toBe(404);
     await request(testApp.app).post("/api/auth/password-reset/request").send({ email: BELLBIRD.owner });
-    const mail = await testApp.smtp.waitFor((message) => message.to.includes(BELLBIRD.owner) && message.decoded.includes("reset-password"));
+    const mail = await testApp.smtp.waitFor(
+      (message) => message.to.includes(BELLBIRD.owner) && message.decoded.includes("reset-password"),
+    );
     const resetToken = linkIn(mail.decoded).searchParams.get("token")!;
     secrets.push(resetToken);
     await agent
@@ -73,7 +77,9 @@ describe("request log", () => {
   });
 
   it("hides every query value in a logged URL, keeping the path and names", () => {
-    expect(redactUrl("/api/register?from=2026-01-01&technicianId=abc")).toBe("/api/register?from=[redacted]&technicianId=[redacted]");
+    expect(redactUrl("/api/register?from=2026-01-01&technicianId=abc")).toBe(
+      "/api/register?from=[redacted]&technicianId=[redacted]",
+    );
     expect(redactUrl("/accept-invitation?token=abc123")).toBe("/accept-invitation?token=[redacted]");
     expect(redactUrl("/api/visits")).toBe("/api/visits");
   });
@@ -84,7 +90,11 @@ describe("request log", () => {
       constraint: "users_email_unique",
       detail: "Key (lower(email))=(owner@bellbird.example) already exists.",
     });
-    const error = new DrizzleQueryError('insert into "users" ("email", "password_hash") values ($1, $2)', ["owner@bellbird.example", "$argon2id$v=19$secret-hash"], cause);
+    const error = new DrizzleQueryError(
+      'insert into "users" ("email", "password_hash") values ($1, $2)',
+      ["owner@bellbird.example", "$argon2id$v=19$secret-hash"],
+      cause,
+    );
     const serialized = JSON.stringify(serializeError(error));
     expect(serialized).toContain('insert into \\"users\\"');
     expect(serialized).toContain("23505");

@@ -21,7 +21,8 @@ describe("organisation procedure settings", () => {
   });
   afterAll(() => testApp.close());
 
-  const patch = (agent: Agent, version: number, body: object) => agent.patch("/api/organisation/settings").set("If-Match", `"${version}"`).send(body);
+  const patch = (agent: Agent, version: number, body: object) =>
+    agent.patch("/api/organisation/settings").set("If-Match", `"${version}"`).send(body);
   const currentVersion = async () => (await owner.get("/api/organisation/settings")).body.version as number;
 
   it("starts on Satura's defaults: 500 microns (the trade norm, ACHR News [S4]) and the app's 10 kPa allowed drop", async () => {
@@ -39,13 +40,18 @@ describe("organisation procedure settings", () => {
     expect((await patch(senior, 1, { evacuationTargetMicrons: 300 })).status).toBe(403);
     const bad = await patch(owner, 1, { evacuationTargetMicrons: -5, pressureTestAllowedDropKPa: "x" });
     expect(bad.status).toBe(400);
-    expect(Object.keys(bad.body.fields)).toEqual(expect.arrayContaining(["evacuationTargetMicrons", "pressureTestAllowedDropKPa"]));
+    expect(Object.keys(bad.body.fields)).toEqual(
+      expect.arrayContaining(["evacuationTargetMicrons", "pressureTestAllowedDropKPa"]),
+    );
     const unknown = await patch(owner, 1, { evacuationTargetMicrons: 300, procedureLimits: {} });
     expect(unknown.status).toBe(400);
     expect(unknown.body.fields.procedureLimits).toMatch(/procedureLimits/);
     const saved = await patch(owner, 1, { evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 5 });
     expect(saved.status).toBe(200);
-    expect(saved.body).toMatchObject({ settings: { evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 5 }, version: 2 });
+    expect(saved.body).toMatchObject({
+      settings: { evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 5 },
+      version: 2,
+    });
   });
 
   it("refuses an evacuation target outside 50–1000 µm and an allowed drop above 50 kPa, saving nothing", async () => {
@@ -63,7 +69,12 @@ describe("organisation procedure settings", () => {
     const after = await owner.get("/api/organisation/settings");
     expect(after.body).toEqual(before.body);
     // The bounds themselves are accepted.
-    for (const body of [{ evacuationTargetMicrons: 1000 }, { evacuationTargetMicrons: 50 }, { pressureTestAllowedDropKPa: 50 }, { pressureTestAllowedDropKPa: 5, evacuationTargetMicrons: 300 }]) {
+    for (const body of [
+      { evacuationTargetMicrons: 1000 },
+      { evacuationTargetMicrons: 50 },
+      { pressureTestAllowedDropKPa: 50 },
+      { pressureTestAllowedDropKPa: 5, evacuationTargetMicrons: 300 },
+    ]) {
       expect((await patch(owner, await currentVersion(), body)).status).toBe(200);
     }
   });
@@ -84,14 +95,19 @@ describe("organisation procedure settings", () => {
     const unversioned = await owner.patch("/api/organisation/settings").send({ evacuationTargetMicrons: 400 });
     expect(unversioned.status).toBe(428);
     expect(unversioned.body.message).toMatch(/If-Match/);
-    expect((await owner.patch("/api/organisation/settings").set("If-Match", "*").send({ evacuationTargetMicrons: 400 })).status).toBe(400);
+    expect(
+      (await owner.patch("/api/organisation/settings").set("If-Match", "*").send({ evacuationTargetMicrons: 400 }))
+        .status,
+    ).toBe(400);
     // Back to the figure the next test expects.
     expect((await patch(owner, await currentVersion(), { evacuationTargetMicrons: 300 })).status).toBe(200);
   });
 
   it("applies the override to new evacuations on a visit, and keeps it to the one organisation", async () => {
     const units = (await technician.get("/api/equipment")).body.equipment;
-    const visitId = (await technician.post("/api/visits").send({ equipmentId: units[0].id, reason: "Evacuation after repair" })).body.visit.id;
+    const visitId = (
+      await technician.post("/api/visits").send({ equipmentId: units[0].id, reason: "Evacuation after repair" })
+    ).body.visit.id;
     const started = await technician.post(`/api/visits/${visitId}/evacuations`).send({});
     expect(started.body.evacuation.targetMicrons).toBe(300);
     expect((await outsider.get("/api/organisation/settings")).body.settings.evacuationTargetMicrons).toBeNull();

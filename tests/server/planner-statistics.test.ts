@@ -19,10 +19,20 @@ import { createTestDatabase } from "../setup/test-database.ts";
 describe("planner statistics", () => {
   let handle: DatabaseHandle;
   const rowEstimate = async (table: string) =>
-    (await handle.client.query<{ reltuples: number }>("select reltuples from pg_class where oid = $1::regclass", [table])).rows[0]!.reltuples;
-  const rowCount = async (table: string) => (await handle.client.query<{ n: number }>(`select count(*)::int as n from ${table}`)).rows[0]!.n;
+    (
+      await handle.client.query<{ reltuples: number }>("select reltuples from pg_class where oid = $1::regclass", [
+        table,
+      ])
+    ).rows[0]!.reltuples;
+  const rowCount = async (table: string) =>
+    (await handle.client.query<{ n: number }>(`select count(*)::int as n from ${table}`)).rows[0]!.n;
   const statisticsColumns = async (table: string) =>
-    (await handle.client.query<{ attname: string }>("select attname from pg_stats where schemaname = 'public' and tablename = $1", [table])).rows.map((row) => row.attname);
+    (
+      await handle.client.query<{ attname: string }>(
+        "select attname from pg_stats where schemaname = 'public' and tablename = $1",
+        [table],
+      )
+    ).rows.map((row) => row.attname);
 
   beforeAll(async () => {
     handle = await createTestDatabase();
@@ -38,14 +48,18 @@ describe("planner statistics", () => {
       // A table this small is read whole by ANALYZE, so its estimate is the count itself.
       expect(await rowEstimate(table), table).toBe(count);
     }
-    expect(await statisticsColumns("visits")).toEqual(expect.arrayContaining(["organisation_id", "equipment_id", "started_at"]));
+    expect(await statisticsColumns("visits")).toEqual(
+      expect.arrayContaining(["organisation_id", "equipment_id", "started_at"]),
+    );
     expect(await statisticsColumns("readings")).toEqual(expect.arrayContaining(["visit_id", "circuit", "taken_at"]));
     // The stored inputs and results are never filtered on; sampling them was most of the cost.
     expect(await statisticsColumns("readings")).not.toContain("result");
   });
 
   it("brings a visit's row estimate in line after a bulk insert (the planner once guessed 65 of 19 938)", async () => {
-    const [visit] = await handle.client.query<{ visit_id: string }>("select visit_id from readings limit 1").then((result) => result.rows);
+    const [visit] = await handle.client
+      .query<{ visit_id: string }>("select visit_id from readings limit 1")
+      .then((result) => result.rows);
     await handle.client.query(
       `insert into readings (organisation_id, visit_id, circuit, taken_at, input, result)
        select organisation_id, visit_id, circuit, taken_at + make_interval(secs => step), input, result
@@ -53,7 +67,10 @@ describe("planner statistics", () => {
       [visit!.visit_id],
     );
     await analyzeTables(handle.db);
-    const expected = await handle.client.query<{ n: number }>("select count(*)::int as n from readings where visit_id = $1", [visit!.visit_id]);
+    const expected = await handle.client.query<{ n: number }>(
+      "select count(*)::int as n from readings where visit_id = $1",
+      [visit!.visit_id],
+    );
     const plan = await handle.client.query<{ "QUERY PLAN": [{ Plan: { "Plan Rows": number } }] }>(
       `explain (format json) select * from readings where visit_id = '${visit!.visit_id}'`,
     );
@@ -64,20 +81,41 @@ describe("planner statistics", () => {
 
   it("refreshes the readings' row count after a CSV import is stored", async () => {
     const [rooftop] = await handle.db.select().from(equipment).where(eq(equipment.refrigerant, "R407C"));
-    const [technician] = await handle.db.select({ id: users.id }).from(users).where(eq(users.email, "tech@bellbird.example"));
-    const [visit] = await handle.db.insert(visits).values({ organisationId: rooftop!.organisationId, equipmentId: rooftop!.id, reason: "Logger data" }).returning();
-    const gauge = (temperatureC: number, point: "bubble" | "dew") => (saturationPressure("R407C", temperatureC, point) - atmosphericPressureAtAltitude(demoSite.altitudeM)).toFixed(1);
+    const [technician] = await handle.db
+      .select({ id: users.id })
+      .from(users)
+      .where(eq(users.email, "tech@bellbird.example"));
+    const [visit] = await handle.db
+      .insert(visits)
+      .values({ organisationId: rooftop!.organisationId, equipmentId: rooftop!.id, reason: "Logger data" })
+      .returning();
+    const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+      (saturationPressure("R407C", temperatureC, point) - atmosphericPressureAtAltitude(demoSite.altitudeM)).toFixed(1);
     const lines = ["Time,Suction pressure kPa,Suction temp C,Liquid pressure kPa,Liquid temp C"];
-    for (let second = 0; second < 600; second++) lines.push(`${new Date(Date.UTC(2026, 10, 30, 20, 0, second)).toISOString()},${gauge(6, "dew")},12,${gauge(42, "bubble")},37`);
+    for (let second = 0; second < 600; second++)
+      lines.push(
+        `${new Date(Date.UTC(2026, 10, 30, 20, 0, second)).toISOString()},${gauge(6, "dew")},12,${gauge(42, "bubble")},37`,
+      );
     const judged = judgeReadingsCsv({
       text: lines.join("\n"),
-      context: { unit: rooftop!, nameplate: rooftop!.circuits[0]!, site: { altitudeM: demoSite.altitudeM }, charge: { chargeKg: rooftop!.circuits[0]!.factoryChargeKg ?? null, chargeReference: null } },
+      context: {
+        unit: rooftop!,
+        nameplate: rooftop!.circuits[0]!,
+        site: { altitudeM: demoSite.altitudeM },
+        charge: { chargeKg: rooftop!.circuits[0]!.factoryChargeKg ?? null, chargeReference: null },
+      },
       dayStart: "2026-12-01T00:00:00+11:00",
       keepRows: true,
     });
     if ("refused" in judged) throw new Error(judged.refused.message);
     const before = await rowEstimate("readings");
-    const stored = await storeImportedReadings(handle.db, rooftop!.organisationId, { visitId: visit!.id, equipmentId: rooftop!.id, circuit: 1, recordedBy: technician!.id, slices: judged.slices });
+    const stored = await storeImportedReadings(handle.db, rooftop!.organisationId, {
+      visitId: visit!.id,
+      equipmentId: rooftop!.id,
+      circuit: 1,
+      recordedBy: technician!.id,
+      slices: judged.slices,
+    });
     expect(stored).toBe(600);
     expect(await rowEstimate("readings")).toBe(before + 600);
     expect(await rowEstimate("readings")).toBe(await rowCount("readings"));
@@ -86,7 +124,9 @@ describe("planner statistics", () => {
   it("re-analyses only the tables changed past autovacuum's threshold, then none while quiet", async () => {
     await analyzeTables(handle.db);
     const before = await rowCount("readings");
-    const [visit] = await handle.client.query<{ visit_id: string }>("select visit_id from readings limit 1").then((result) => result.rows);
+    const [visit] = await handle.client
+      .query<{ visit_id: string }>("select visit_id from readings limit 1")
+      .then((result) => result.rows);
     await handle.client.query(
       `insert into readings (organisation_id, visit_id, circuit, taken_at, input, result)
        select organisation_id, visit_id, circuit, taken_at + make_interval(days => 1, secs => step), input, result
@@ -94,8 +134,14 @@ describe("planner statistics", () => {
       [visit!.visit_id],
     );
     // The counts reach pg_stat_user_tables when the session next reports them (about a second).
-    const live = async () => (await handle.client.query<{ n: number }>("select n_live_tup::int as n from pg_stat_user_tables where relname = 'readings'")).rows[0]!.n;
-    for (let attempt = 0; attempt < 40 && (await live()) < before + 1000; attempt++) await new Promise((resolve) => setTimeout(resolve, 250));
+    const live = async () =>
+      (
+        await handle.client.query<{ n: number }>(
+          "select n_live_tup::int as n from pg_stat_user_tables where relname = 'readings'",
+        )
+      ).rows[0]!.n;
+    for (let attempt = 0; attempt < 40 && (await live()) < before + 1000; attempt++)
+      await new Promise((resolve) => setTimeout(resolve, 250));
     expect(await live()).toBeGreaterThanOrEqual(before + 1000);
     expect(await rowEstimate("readings")).toBe(before);
     expect(await analyzeChangedTables(handle.db)).toEqual(["readings"]);

@@ -200,7 +200,9 @@ describe("readings are built from the measured values, the nameplate and the sit
     const at = "2026-12-02T03:04:05.000Z";
     await startVisitAt(testApp, visitId, new Date(Date.parse(at) - 60 * 60_000));
     for (const suctionLineTempC of [12, 13]) {
-      const saved = await technician.post(`/api/visits/${visitId}/readings`).send({ circuit: 1, ...measured, suctionLineTempC, takenAt: at });
+      const saved = await technician
+        .post(`/api/visits/${visitId}/readings`)
+        .send({ circuit: 1, ...measured, suctionLineTempC, takenAt: at });
       expect(saved.status).toBe(201);
     }
     const unit = await technician.get(`/api/equipment/${rooftop.id}`);
@@ -253,7 +255,14 @@ describe("readingInput and siteAtmosphere", () => {
   });
 
   it("takes the correct charge and the reference point from the circuit's charge record, never from the reading", () => {
-    const reference = { subcoolingK: 5, superheatK: 6, evaporatingTempC: 6, condensingTempC: 42, outdoorAirDryBulbC: 31, returnAirDryBulbC: 25 };
+    const reference = {
+      subcoolingK: 5,
+      superheatK: 6,
+      evaporatingTempC: 6,
+      condensingTempC: 42,
+      outdoorAirDryBulbC: 31,
+      returnAirDryBulbC: 25,
+    };
     const forged = { ...measured, chargeKg: 99, chargeReference: { ...reference, subcoolingK: 30 } } as typeof measured;
     const parsed = readingInput(forged, { ...context, charge: { chargeKg: 4.5, chargeReference: reference } });
     expect(parsed.data).toMatchObject({ chargeKg: 4.5, chargeReference: reference });

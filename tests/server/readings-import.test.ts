@@ -121,10 +121,17 @@ describe("CSV import of a reading series", () => {
   it("stores every row or none: a visit signed off while the slices go in gets none of them", async () => {
     const units = (await technician.get("/api/equipment")).body.equipment;
     const rooftop = units.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C");
-    const closing = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Signed off mid-import" })).body.visit.id;
+    const closing = (
+      await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Signed off mid-import" })
+    ).body.visit.id;
     const judged = judgeReadingsCsv({
       text: loggedSeries(30).join("\n"),
-      context: { unit: rooftop, nameplate: rooftop.circuits[0], site: { altitudeM: demoSite.altitudeM }, charge: { chargeKg: rooftop.circuits[0].factoryChargeKg, chargeReference: null } },
+      context: {
+        unit: rooftop,
+        nameplate: rooftop.circuits[0],
+        site: { altitudeM: demoSite.altitudeM },
+        charge: { chargeKg: rooftop.circuits[0].factoryChargeKg, chargeReference: null },
+      },
       dayStart,
       keepRows: true,
     });
@@ -136,9 +143,18 @@ describe("CSV import of a reading series", () => {
     const organisationId = (await technician.get("/api/auth/me")).body.user.organisationId;
     const recordedBy = (await technician.get("/api/auth/me")).body.user.id;
     await expect(
-      storeImportedReadings(testApp.database.db, organisationId, { visitId: closing, equipmentId: rooftop.id, circuit: 1, recordedBy, slices: judged.slices }),
+      storeImportedReadings(testApp.database.db, organisationId, {
+        visitId: closing,
+        equipmentId: rooftop.id,
+        circuit: 1,
+        recordedBy,
+        slices: judged.slices,
+      }),
     ).rejects.toThrow(/signed off/);
-    const staged = await testApp.database.db.select({ id: readings.id }).from(readings).where(isNotNull(readings.pendingImportId));
+    const staged = await testApp.database.db
+      .select({ id: readings.id })
+      .from(readings)
+      .where(isNotNull(readings.pendingImportId));
     expect(staged).toHaveLength(0);
     expect((await technician.get(`/api/visits/${closing}`)).body.visit.readings).toHaveLength(0);
   });
@@ -146,7 +162,8 @@ describe("CSV import of a reading series", () => {
   it("keeps the server answering while a 5 000-row file is judged and stored", async () => {
     const units = (await technician.get("/api/equipment")).body.equipment;
     const rooftop = units.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C");
-    const busy = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Week of logger data" })).body.visit.id;
+    const busy = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Week of logger data" }))
+      .body.visit.id;
     const lines = ["Time,Suction pressure kPa,Suction temp C,Liquid pressure kPa,Liquid temp C"];
     for (let second = 0; second < 5000; second++) {
       const iso = new Date(Date.UTC(2026, 10, 30, 20, 0, second)).toISOString();

@@ -67,8 +67,17 @@ describe("register paging: GET /api/register and its CSV export", () => {
     owner = await signedIn(testApp.app, BELLBIRD.owner);
     technician = await signedIn(testApp.app, BELLBIRD.technician);
     const { client } = testApp.database;
-    organisationId = (await client.query<{ organisation_id: string }>("select organisation_id from users where email = $1", [BELLBIRD.owner])).rows[0]!.organisation_id;
-    const unit = (await client.query<{ id: string; refrigerant: string }>("select id, refrigerant from equipment where organisation_id = $1 order by name limit 1", [organisationId])).rows[0]!;
+    organisationId = (
+      await client.query<{ organisation_id: string }>("select organisation_id from users where email = $1", [
+        BELLBIRD.owner,
+      ])
+    ).rows[0]!.organisation_id;
+    const unit = (
+      await client.query<{ id: string; refrigerant: string }>(
+        "select id, refrigerant from equipment where organisation_id = $1 order by name limit 1",
+        [organisationId],
+      )
+    ).rows[0]!;
     // Lines in threes on the same minute (ties on the date), by the technician and the senior in
     // turn, every seventh one voided; two refrigerants, three kinds, grams that add up unevenly.
     await client.query(
@@ -85,10 +94,10 @@ describe("register paging: GET /api/register and its CSV export", () => {
 
   const standingLines = async (where = "true", params: unknown[] = []) =>
     (
-      await testApp.database.client.query<{ n: number }>(`select count(*)::int as n from refrigerant_movements where organisation_id = $1 and voided_at is null and ${where}`, [
-        organisationId,
-        ...params,
-      ])
+      await testApp.database.client.query<{ n: number }>(
+        `select count(*)::int as n from refrigerant_movements where organisation_id = $1 and voided_at is null and ${where}`,
+        [organisationId, ...params],
+      )
     ).rows[0]!.n;
 
   it("walks every standing line once, oldest first, with ties on the date kept in a stable order", async () => {
@@ -98,7 +107,8 @@ describe("register paging: GET /api/register and its CSV export", () => {
     expect(lines).toHaveLength(total);
     expect(new Set(lines.map((line) => line.id)).size).toBe(total);
     expect(pages).toBe(Math.ceil(total / 37));
-    for (let index = 1; index < lines.length; index += 1) expect(Date.parse(lines[index - 1]!.at)).toBeLessThanOrEqual(Date.parse(lines[index]!.at));
+    for (let index = 1; index < lines.length; index += 1)
+      expect(Date.parse(lines[index - 1]!.at)).toBeLessThanOrEqual(Date.parse(lines[index]!.at));
     // The whole register read at once has the same lines in the same order.
     const whole = await registerMovements(testApp.database.db, organisationId, {});
     expect(lines.map((line) => line.id)).toEqual(whole.map((line) => line.id));
@@ -114,7 +124,12 @@ describe("register paging: GET /api/register and its CSV export", () => {
     const { lines, totals } = await walk(owner, "/api/register?limit=50");
     expect(totals.length).toBeGreaterThan(2);
     const expected = totalsOf(lines);
-    for (const pageTotals of totals) expect(pageTotals).toEqual(expect.arrayContaining(expected.map((total) => expect.objectContaining({ ...total, kg: expect.closeTo(total.kg, 6) }))));
+    for (const pageTotals of totals)
+      expect(pageTotals).toEqual(
+        expect.arrayContaining(
+          expected.map((total) => expect.objectContaining({ ...total, kg: expect.closeTo(total.kg, 6) })),
+        ),
+      );
     for (const pageTotals of totals) expect(pageTotals).toHaveLength(expected.length);
   });
 
@@ -122,7 +137,11 @@ describe("register paging: GET /api/register and its CSV export", () => {
     const march = await walk(owner, "/api/register?from=2025-03-01&to=2025-03-01&limit=100");
     expect(march.lines).toHaveLength(await standingLines("at >= '2025-03-01' and at < '2025-03-02'"));
     expect(march.lines.every((line) => line.at.startsWith("2025-03-01"))).toBe(true);
-    expect(march.totals[0]).toEqual(expect.arrayContaining(totalsOf(march.lines).map((total) => expect.objectContaining({ ...total, kg: expect.closeTo(total.kg, 6) }))));
+    expect(march.totals[0]).toEqual(
+      expect.arrayContaining(
+        totalsOf(march.lines).map((total) => expect.objectContaining({ ...total, kg: expect.closeTo(total.kg, 6) })),
+      ),
+    );
 
     // A technician reads their own lines only, and their totals are of their lines.
     const own = await walk(technician, "/api/register?limit=200");
@@ -152,7 +171,9 @@ describe("register paging: GET /api/register and its CSV export", () => {
     // In small chunks too: the pieces join into the same text.
     let pieces = 0;
     let text = "";
-    for await (const piece of registerCsvText(registerChunks(db, organisationId, {}, 7), (movement) => registerCsvLine(movement, licences))) {
+    for await (const piece of registerCsvText(registerChunks(db, organisationId, {}, 7), (movement) =>
+      registerCsvLine(movement, licences),
+    )) {
       pieces += 1;
       text += piece;
     }
@@ -164,7 +185,10 @@ describe("register paging: GET /api/register and its CSV export", () => {
   // Compressed, the export is still the whole register (each piece is flushed through the
   // compression: tests/server/http/stream-pieces.test.ts).
   it("sends the same text compressed", async () => {
-    const whole = registerCsv(await registerMovements(testApp.database.db, organisationId, {}), await licenceNumbers(testApp.database.db, organisationId));
+    const whole = registerCsv(
+      await registerMovements(testApp.database.db, organisationId, {}),
+      await licenceNumbers(testApp.database.db, organisationId),
+    );
     const response = await owner.get("/api/register/export.csv").set("Accept-Encoding", "gzip");
     expect(response.headers["content-encoding"]).toBe("gzip");
     expect(response.text).toBe(whole);

@@ -29,19 +29,36 @@ describe("who reads which register line", () => {
   beforeAll(async () => {
     testApp = await createTestApp();
     ids = await seedBellbird(testApp);
-    agents = { ...(await signedInBellbird(testApp.app)), technician2: await signedIn(testApp.app, "tech2@bellbird.example") };
+    agents = {
+      ...(await signedInBellbird(testApp.app)),
+      technician2: await signedIn(testApp.app, "tech2@bellbird.example"),
+    };
 
-    const unit = (await agents.technician.get("/api/equipment")).body.equipment.find((candidate: { refrigerant: string }) => candidate.refrigerant === "R407C");
+    const unit = (await agents.technician.get("/api/equipment")).body.equipment.find(
+      (candidate: { refrigerant: string }) => candidate.refrigerant === "R407C",
+    );
     unitId = unit.id;
-    visitId = (await agents.technician.post("/api/visits").send({ equipmentId: unitId, reason: "Two technicians on one job" })).body.visit.id;
-    recoveryId = (await agents.technician.post("/api/cylinders").send({ label: "VIS-REC-1", kind: "recovery", refrigerant: "R407C", waterCapacityKg: 26, tareKg: 14 })).body.cylinder.id;
+    visitId = (
+      await agents.technician.post("/api/visits").send({ equipmentId: unitId, reason: "Two technicians on one job" })
+    ).body.visit.id;
+    recoveryId = (
+      await agents.technician
+        .post("/api/cylinders")
+        .send({ label: "VIS-REC-1", kind: "recovery", refrigerant: "R407C", waterCapacityKg: 26, tareKg: 14 })
+    ).body.cylinder.id;
     const log = async (who: "technician" | "technician2" | "senior", body: object) => {
       const response = await agents[who].post(`/api/visits/${visitId}/refrigerant`).send(body);
       expect(response.status, JSON.stringify(response.body)).toBe(201);
       (linesBy[who] ??= []).push(response.body.movement.id);
     };
     await log("technician", { kind: "recovered", kg: 2, circuit: 1, cylinderId: recoveryId, note: "Sam's recovery" });
-    await log("technician2", { kind: "recovered", kg: 1.5, circuit: 1, cylinderId: recoveryId, note: "Lee's recovery" });
+    await log("technician2", {
+      kind: "recovered",
+      kg: 1.5,
+      circuit: 1,
+      cylinderId: recoveryId,
+      note: "Lee's recovery",
+    });
     await log("senior", { kind: "reused", kg: 1, circuit: 1, cylinderId: recoveryId });
   });
   afterAll(() => testApp.close());
@@ -94,7 +111,9 @@ describe("who reads which register line", () => {
     const own = (await agents.technician.get("/api/register")).body;
     expect(lineIds(own.movements)).toEqual([...linesBy.technician!].sort());
     expect(own.allTechnicians).toBe(false);
-    expect((await agents.technician.get(`/api/register?technicianId=${ids["tech2@bellbird.example"]}`)).status).toBe(403);
+    expect((await agents.technician.get(`/api/register?technicianId=${ids["tech2@bellbird.example"]}`)).status).toBe(
+      403,
+    );
     expect((await agents.apprentice.get("/api/register")).status).toBe(403);
     const whole = (await agents.senior.get("/api/register")).body;
     expect(lineIds(whole.movements)).toEqual(all());

@@ -70,7 +70,9 @@ describe("refrigerant register API", () => {
     const units = (await technician.get("/api/equipment")).body.equipment as { id: string; refrigerant: string }[];
     rooftopId = units.find((unit) => unit.refrigerant === "R407C")!.id;
     splitId = units.find((unit) => unit.refrigerant === "R32")!.id;
-    visitId = (await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Compressor change on circuit 1" })).body.visit.id;
+    visitId = (
+      await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Compressor change on circuit 1" })
+    ).body.visit.id;
   });
   afterAll(() => testApp.close());
 
@@ -93,42 +95,77 @@ describe("refrigerant register API", () => {
   });
 
   it("creates a cylinder with field messages, refuses a duplicate label, and apprentices may not", async () => {
-    const bad = await technician.post("/api/cylinders").send({ label: "", kind: "recovery", refrigerant: "R999", waterCapacityKg: -1, tareKg: 5 });
+    const bad = await technician
+      .post("/api/cylinders")
+      .send({ label: "", kind: "recovery", refrigerant: "R999", waterCapacityKg: -1, tareKg: 5 });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.fields)).toEqual(expect.arrayContaining(["label", "refrigerant", "waterCapacityKg"]));
-    const created = await technician
-      .post("/api/cylinders")
-      .send({ label: 'BM "Blue", 2', kind: "recovery", refrigerant: "R407C", waterCapacityKg: 12, tareKg: 7.2, initialContentsKg: 0 });
+    const created = await technician.post("/api/cylinders").send({
+      label: 'BM "Blue", 2',
+      kind: "recovery",
+      refrigerant: "R407C",
+      waterCapacityKg: 12,
+      tareKg: 7.2,
+      initialContentsKg: 0,
+    });
     expect(created.status).toBe(201);
     expect(created.body.cylinder).toMatchObject({ contentsKg: 0, kind: "recovery" });
-    const duplicate = await technician.post("/api/cylinders").send({ label: 'bm "blue", 2', kind: "new", refrigerant: "R407C", waterCapacityKg: 12, tareKg: 7.2 });
+    const duplicate = await technician
+      .post("/api/cylinders")
+      .send({ label: 'bm "blue", 2', kind: "new", refrigerant: "R407C", waterCapacityKg: 12, tareKg: 7.2 });
     expect(duplicate.status).toBe(400);
     expect(duplicate.body.fields.label).toMatch(/already has/);
-    expect((await apprentice.post("/api/cylinders").send({ label: "X", kind: "new", refrigerant: "R32", waterCapacityKg: 10, tareKg: 5 })).status).toBe(403);
+    expect(
+      (
+        await apprentice
+          .post("/api/cylinders")
+          .send({ label: "X", kind: "new", refrigerant: "R32", waterCapacityKg: 10, tareKg: 5 })
+      ).status,
+    ).toBe(403);
   });
 
   it("validates movements: kind, mass, circuit and a cylinder where the record needs one", async () => {
-    const noCylinder = await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "recovered", kg: 1, circuit: 1 });
+    const noCylinder = await technician
+      .post(`/api/visits/${visitId}/refrigerant`)
+      .send({ kind: "recovered", kg: 1, circuit: 1 });
     expect(noCylinder.status).toBe(400);
     expect(noCylinder.body.fields.cylinderId).toMatch(/cylinder/);
-    const bad = await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "vented", kg: -2, circuit: 0 });
+    const bad = await technician
+      .post(`/api/visits/${visitId}/refrigerant`)
+      .send({ kind: "vented", kg: -2, circuit: 0 });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.fields)).toEqual(expect.arrayContaining(["kind", "kg", "circuit"]));
-    const circuit = await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "recovered", kg: 1, circuit: 3, cylinderId: recovery.id });
+    const circuit = await technician
+      .post(`/api/visits/${visitId}/refrigerant`)
+      .send({ kind: "recovered", kg: 1, circuit: 3, cylinderId: recovery.id });
     expect(circuit.status).toBe(400);
     expect(circuit.body.fields.circuit).toMatch(/2 circuit/);
-    const wrongKind = await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "recovered", kg: 1, circuit: 1, cylinderId: fresh.id });
+    const wrongKind = await technician
+      .post(`/api/visits/${visitId}/refrigerant`)
+      .send({ kind: "recovered", kg: 1, circuit: 1, cylinderId: fresh.id });
     expect(wrongKind.status).toBe(400);
     expect(wrongKind.body.fields.cylinderId).toMatch(/recovery cylinder/);
-    const nothingToReuse = await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "reused", kg: 1, circuit: 1, cylinderId: recovery.id });
+    const nothingToReuse = await technician
+      .post(`/api/visits/${visitId}/refrigerant`)
+      .send({ kind: "reused", kg: 1, circuit: 1, cylinderId: recovery.id });
     expect(nothingToReuse.status).toBe(400);
     expect(nothingToReuse.body.fields.kg).toMatch(/Nothing has been recovered/);
-    expect((await apprentice.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "recovered", kg: 1, circuit: 1, cylinderId: recovery.id })).status).toBe(403);
+    expect(
+      (
+        await apprentice
+          .post(`/api/visits/${visitId}/refrigerant`)
+          .send({ kind: "recovered", kg: 1, circuit: 1, cylinderId: recovery.id })
+      ).status,
+    ).toBe(403);
   });
 
   it("refuses a recovery into a cylinder of another refrigerant with a clear 400", async () => {
-    const r32 = await technician.post("/api/cylinders").send({ label: "BM-REC-R32", kind: "recovery", refrigerant: "R32", waterCapacityKg: 12, tareKg: 7 });
-    const response = await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "recovered", kg: 1, circuit: 1, cylinderId: r32.body.cylinder.id });
+    const r32 = await technician
+      .post("/api/cylinders")
+      .send({ label: "BM-REC-R32", kind: "recovery", refrigerant: "R32", waterCapacityKg: 12, tareKg: 7 });
+    const response = await technician
+      .post(`/api/visits/${visitId}/refrigerant`)
+      .send({ kind: "recovered", kg: 1, circuit: 1, cylinderId: r32.body.cylinder.id });
     expect(response.status).toBe(400);
     // One refrigerant per recovery cylinder (TRADE.md §6, common practice; never mix).
     expect(response.body.fields.cylinderId).toMatch(/holds R32, not R407C/);
@@ -137,13 +174,27 @@ describe("refrigerant register API", () => {
 
   it("warns before a recovery cylinder passes 80 % and refuses a recovery that would pass it", async () => {
     // 5.2 kg + 3.6 kg = 8.8 kg ≈ 93 % of ≈ 9.5 kg: above the 90 %-of-limit warning (engine's margin), below the limit.
-    const recovered = await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "recovered", kg: 3.6, circuit: 1, cylinderId: recovery.id, note: "Recovered for the compressor change" });
+    const recovered = await technician.post(`/api/visits/${visitId}/refrigerant`).send({
+      kind: "recovered",
+      kg: 3.6,
+      circuit: 1,
+      cylinderId: recovery.id,
+      note: "Recovered for the compressor change",
+    });
     expect(recovered.status).toBe(201);
-    expect(recovered.body.movement).toMatchObject({ kind: "recovered", kg: 3.6, refrigerant: "R407C", circuit: 1, technician: { name: "Sam Toko" } });
+    expect(recovered.body.movement).toMatchObject({
+      kind: "recovered",
+      kg: 3.6,
+      refrigerant: "R407C",
+      circuit: 1,
+      technician: { name: "Sam Toko" },
+    });
     expect(recovered.body.cylinder.contentsKg).toBeCloseTo(8.8, 6);
     expect(recovered.body.cylinder.fill.check.verdict).toBe("warn");
     // A further 1 kg would make 9.8 kg, past the limit: refused, with the room left named.
-    const over = await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "recovered", kg: 1, circuit: 2, cylinderId: recovery.id });
+    const over = await technician
+      .post(`/api/visits/${visitId}/refrigerant`)
+      .send({ kind: "recovered", kg: 1, circuit: 2, cylinderId: recovery.id });
     expect(over.status).toBe(400);
     expect(over.body.fields.kg).toMatch(/past its 80 % limit/);
     expect((await technician.get(`/api/cylinders/${recovery.id}`)).body.cylinder.contentsKg).toBeCloseTo(8.8, 6);
@@ -160,11 +211,25 @@ describe("refrigerant register API", () => {
     expect(before.body.liquidChargingNote).toMatch(/as liquid/);
     expect(before.body.glideK).toBeGreaterThan(4);
 
-    expect((await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "reused", kg: 3.6, circuit: 1, cylinderId: recovery.id })).status).toBe(201);
-    const tooMuch = await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "added-new", kg: 11, circuit: 1, cylinderId: fresh.id });
+    expect(
+      (
+        await technician
+          .post(`/api/visits/${visitId}/refrigerant`)
+          .send({ kind: "reused", kg: 3.6, circuit: 1, cylinderId: recovery.id })
+      ).status,
+    ).toBe(201);
+    const tooMuch = await technician
+      .post(`/api/visits/${visitId}/refrigerant`)
+      .send({ kind: "added-new", kg: 11, circuit: 1, cylinderId: fresh.id });
     expect(tooMuch.status).toBe(400);
     expect(tooMuch.body.fields.kg).toMatch(/holds only 10 kg/);
-    expect((await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "added-new", kg: 0.6, circuit: 1, cylinderId: fresh.id })).status).toBe(201);
+    expect(
+      (
+        await technician
+          .post(`/api/visits/${visitId}/refrigerant`)
+          .send({ kind: "added-new", kg: 0.6, circuit: 1, cylinderId: fresh.id })
+      ).status,
+    ).toBe(201);
 
     const after = (await technician.get(`/api/visits/${visitId}/refrigerant`)).body;
     const balanced = after.circuits[0];
@@ -177,20 +242,32 @@ describe("refrigerant register API", () => {
 
     // A line-length allowance of +0.5 kg (TRADE.md §6: add per metre of extra liquid line) makes
     // 4.2 kg weighed in 0.5 kg short of 4.7 kg: 10.6 % under, beyond the engine's 10 % warning band.
-    const declared = await technician.put(`/api/visits/${visitId}/refrigerant/charging/1`).send({ lineAdjustmentKg: 0.5 });
+    const declared = await technician
+      .put(`/api/visits/${visitId}/refrigerant/charging/1`)
+      .send({ lineAdjustmentKg: 0.5 });
     expect(declared.status).toBe(200);
     expect(declared.body.circuits[0].charging).toMatchObject({ lineAdjustmentKg: 0.5, declared: true });
     expect(declared.body.circuits[0].charging.check.verdict).toBe("fail");
-    expect((await technician.put(`/api/visits/${visitId}/refrigerant/charging/1`).send({ lineAdjustmentKg: "lots" })).status).toBe(400);
+    expect(
+      (await technician.put(`/api/visits/${visitId}/refrigerant/charging/1`).send({ lineAdjustmentKg: "lots" })).status,
+    ).toBe(400);
     // Changing the figure keeps the earlier declaration, voided with what changed.
-    const changed = await technician.put(`/api/visits/${visitId}/refrigerant/charging/1`).send({ lineAdjustmentKg: 0.4 });
+    const changed = await technician
+      .put(`/api/visits/${visitId}/refrigerant/charging/1`)
+      .send({ lineAdjustmentKg: 0.4 });
     expect(changed.body.circuits[0].charging).toMatchObject({ lineAdjustmentKg: 0.4, declared: true });
     const trail = (await technician.get(`/api/visits/${visitId}`)).body.visit.events;
-    expect(trail.at(-1)).toMatchObject({ action: "voided", recordKind: "charging", reason: "Replaced: line adjustment 0.5 kg changed to 0.4 kg" });
+    expect(trail.at(-1)).toMatchObject({
+      action: "voided",
+      recordKind: "charging",
+      reason: "Replaced: line adjustment 0.5 kg changed to 0.4 kg",
+    });
     // Withdrawing a declaration is a void with a reason; nothing is deleted (no DELETE route).
-    const withdrawn = await technician
-      .post(`/api/visits/${visitId}/voids`)
-      .send({ kind: "charging", recordId: changed.body.circuits[0].charging.declarationId, reason: "Not a full weigh-in after all" });
+    const withdrawn = await technician.post(`/api/visits/${visitId}/voids`).send({
+      kind: "charging",
+      recordId: changed.body.circuits[0].charging.declarationId,
+      reason: "Not a full weigh-in after all",
+    });
     expect(withdrawn.status).toBe(201);
     expect((await technician.get(`/api/visits/${visitId}/refrigerant`)).body.circuits[0].charging.declared).toBe(false);
     expect((await technician.delete(`/api/visits/${visitId}/refrigerant/charging/1`)).status).toBe(404);
@@ -204,12 +281,20 @@ describe("refrigerant register API", () => {
 
   it("shows each register movement once on the run log, with the same figure (nothing counted twice)", async () => {
     const body = (await technician.get(`/api/visits/${visitId}/refrigerant`)).body;
-    const adjustments = (await technician.get(`/api/visits/${visitId}`)).body.visit.adjustments as { movementId: string | null; amountKg: number }[];
+    const adjustments = (await technician.get(`/api/visits/${visitId}`)).body.visit.adjustments as {
+      movementId: string | null;
+      amountKg: number;
+    }[];
     expect(adjustments).toHaveLength(body.movements.length);
     for (const movement of body.movements as { id: string; kg: number }[]) {
       expect(adjustments.find((adjustment) => adjustment.movementId === movement.id)?.amountKg).toBe(movement.kg);
     }
-    expect(body.runLogCheck).toMatchObject({ runLogInKg: body.runLogCheck.registerInKg, runLogOutKg: body.runLogCheck.registerOutKg, agrees: true, unlinked: [] });
+    expect(body.runLogCheck).toMatchObject({
+      runLogInKg: body.runLogCheck.registerInKg,
+      runLogOutKg: body.runLogCheck.registerOutKg,
+      agrees: true,
+      unlinked: [],
+    });
     expect(body.circuits[0].addedKg).toBeCloseTo(0.6, 6);
     expect(body.movements).toHaveLength(3);
   });
@@ -220,14 +305,43 @@ describe("refrigerant register API", () => {
     // (the annualizing idea of US 40 CFR 82.152, TRADE.md §8.3 leak-rate triggers).
     const r32 = (await technician.get("/api/cylinders?refrigerant=R32")).body.cylinders;
     expect(r32).toHaveLength(1);
-    const supply = await technician.post("/api/cylinders").send({ label: "BM-R32-N1", kind: "new", refrigerant: "R32", waterCapacityKg: 11, tareKg: 6, initialContentsKg: 9 });
-    const first = (await technician.post("/api/visits").send({ equipmentId: splitId, reason: "Warm server cupboard" })).body.visit.id;
-    const second = (await technician.post("/api/visits").send({ equipmentId: splitId, reason: "Warm again" })).body.visit.id;
-    expect((await technician.post(`/api/visits/${first}/refrigerant`).send({ kind: "added-new", kg: 0.15, circuit: 1, cylinderId: supply.body.cylinder.id, at: "2026-01-10T01:00:00Z" })).status).toBe(201);
+    const supply = await technician.post("/api/cylinders").send({
+      label: "BM-R32-N1",
+      kind: "new",
+      refrigerant: "R32",
+      waterCapacityKg: 11,
+      tareKg: 6,
+      initialContentsKg: 9,
+    });
+    const first = (await technician.post("/api/visits").send({ equipmentId: splitId, reason: "Warm server cupboard" }))
+      .body.visit.id;
+    const second = (await technician.post("/api/visits").send({ equipmentId: splitId, reason: "Warm again" })).body
+      .visit.id;
+    expect(
+      (
+        await technician.post(`/api/visits/${first}/refrigerant`).send({
+          kind: "added-new",
+          kg: 0.15,
+          circuit: 1,
+          cylinderId: supply.body.cylinder.id,
+          at: "2026-01-10T01:00:00Z",
+        })
+      ).status,
+    ).toBe(201);
     const single = (await technician.get(`/api/equipment/${splitId}/refrigerant`)).body;
     expect(single.topUps).toHaveLength(1);
     expect(single.leakRate).toBeNull();
-    expect((await technician.post(`/api/visits/${second}/refrigerant`).send({ kind: "added-new", kg: 0.2, circuit: 1, cylinderId: supply.body.cylinder.id, at: "2026-07-11T01:00:00Z" })).status).toBe(201);
+    expect(
+      (
+        await technician.post(`/api/visits/${second}/refrigerant`).send({
+          kind: "added-new",
+          kg: 0.2,
+          circuit: 1,
+          cylinderId: supply.body.cylinder.id,
+          at: "2026-07-11T01:00:00Z",
+        })
+      ).status,
+    ).toBe(201);
     const history = (await technician.get(`/api/equipment/${splitId}/refrigerant`)).body;
     expect(history.nameplateKg).toBe(0.85);
     expect(history.movements).toHaveLength(2);
@@ -243,17 +357,29 @@ describe("refrigerant register API", () => {
 
   it("exports the register as CSV with proper quoting, filtered by period and technician", async () => {
     // A senior's movement with text a spreadsheet would otherwise misread.
-    const other = (await senior.post("/api/visits").send({ equipmentId: rooftopId, reason: "Second opinion" })).body.visit.id;
+    const other = (await senior.post("/api/visits").send({ equipmentId: rooftopId, reason: "Second opinion" })).body
+      .visit.id;
     const quoted = await technician.get("/api/cylinders?refrigerant=R407C");
-    const blue = (quoted.body.cylinders as CylinderBody[]).find((cylinder) => cylinder.label.startsWith("BM \"Blue\""))!;
+    const blue = (quoted.body.cylinders as CylinderBody[]).find((cylinder) => cylinder.label.startsWith('BM "Blue"'))!;
     const note = '=SUM(A1) "drained", then\nweighed';
-    expect((await senior.post(`/api/visits/${other}/refrigerant`).send({ kind: "recovered", kg: 0.25, circuit: 2, cylinderId: blue.id, note })).status).toBe(201);
+    expect(
+      (
+        await senior
+          .post(`/api/visits/${other}/refrigerant`)
+          .send({ kind: "recovered", kg: 0.25, circuit: 2, cylinderId: blue.id, note })
+      ).status,
+    ).toBe(201);
 
     // The licence number a technician keeps on their profile goes beside their entries.
     const profile = (await technician.get("/api/profile")).body;
-    const licensed = await technician.put("/api/profile").set("If-Match", `"${profile.version}"`).send({ name: profile.user.name, preferences: profile.preferences, licenceNumber: " L123456 " });
+    const licensed = await technician
+      .put("/api/profile")
+      .set("If-Match", `"${profile.version}"`)
+      .send({ name: profile.user.name, preferences: profile.preferences, licenceNumber: " L123456 " });
     expect(licensed.body.licenceNumber).toBe("L123456");
-    const tooLong = await technician.put("/api/profile").send({ name: profile.user.name, preferences: profile.preferences, licenceNumber: "x".repeat(41) });
+    const tooLong = await technician
+      .put("/api/profile")
+      .send({ name: profile.user.name, preferences: profile.preferences, licenceNumber: "x".repeat(41) });
     expect(tooLong.status).toBe(400);
     expect(tooLong.body.fields.licenceNumber).toBeDefined();
 
@@ -262,7 +388,19 @@ describe("refrigerant register API", () => {
     expect(response.headers["content-type"]).toMatch(/^text\/csv/);
     expect(response.headers["content-disposition"]).toMatch(/attachment; filename="refrigerant-register\.csv"/);
     const rows = parseCsv(response.text);
-    expect(rows[0]).toEqual(["date (UTC)", "technician", "licence number", "equipment", "location", "refrigerant", "kind", "kg", "cylinder", "circuit", "note"]);
+    expect(rows[0]).toEqual([
+      "date (UTC)",
+      "technician",
+      "licence number",
+      "equipment",
+      "location",
+      "refrigerant",
+      "kind",
+      "kg",
+      "cylinder",
+      "circuit",
+      "note",
+    ]);
     const body = rows.slice(1);
     expect(body).toHaveLength(6);
     const seniorRow = body.find((row) => row[1] === "Priya Raman")!;
@@ -271,10 +409,19 @@ describe("refrigerant register API", () => {
     expect(seniorRow[8]).toBe('BM "Blue", 2');
     expect(seniorRow[10]).toBe(`'${note}`);
     expect(seniorRow[2]).toBe(""); // no licence number on Priya's profile: blank column
-    expect(seniorRow).toMatchObject({ 3: "RTU-1 packaged rooftop unit", 4: "Wattle Lane Clinic — main building — Roof, above the waiting room", 5: "R407C", 6: "Recovered from the system", 7: "0.25", 9: "2" });
+    expect(seniorRow).toMatchObject({
+      3: "RTU-1 packaged rooftop unit",
+      4: "Wattle Lane Clinic — main building — Roof, above the waiting room",
+      5: "R407C",
+      6: "Recovered from the system",
+      7: "0.25",
+      9: "2",
+    });
     expect(response.text).toContain('"BM ""Blue"", 2"');
 
-    const samsOnly = parseCsv((await owner.get(`/api/register/export.csv?technicianId=${people[BELLBIRD.technician]}`)).text).slice(1);
+    const samsOnly = parseCsv(
+      (await owner.get(`/api/register/export.csv?technicianId=${people[BELLBIRD.technician]}`)).text,
+    ).slice(1);
     expect(samsOnly).toHaveLength(5);
     expect(samsOnly.every((row) => row[1] === "Sam Toko" && row[2] === "L123456")).toBe(true);
     const period = parseCsv((await owner.get("/api/register/export.csv?from=2026-07-01&to=2026-09-30")).text).slice(1);
@@ -292,7 +439,9 @@ describe("refrigerant register API", () => {
     expect(all.totals).toEqual(expect.arrayContaining([{ refrigerant: "R407C", kind: "recovered", kg: 3.85 }]));
     const own = (await technician.get("/api/register")).body;
     expect(own.allTechnicians).toBe(false);
-    expect(own.movements.every((movement: { technician: { name: string } }) => movement.technician.name === "Sam Toko")).toBe(true);
+    expect(
+      own.movements.every((movement: { technician: { name: string } }) => movement.technician.name === "Sam Toko"),
+    ).toBe(true);
     expect((await technician.get(`/api/register?technicianId=${people[BELLBIRD.senior]}`)).status).toBe(403);
     expect((await technician.get(`/api/register/export.csv?technicianId=${people[BELLBIRD.senior]}`)).status).toBe(403);
     expect((await apprentice.get("/api/register")).status).toBe(403);
@@ -304,14 +453,24 @@ describe("refrigerant register API", () => {
   it("refuses to record on a signed-off visit", async () => {
     await technician.post(`/api/visits/${visitId}/review`).send({ action: "submit" });
     await senior.post(`/api/visits/${visitId}/review`).send({ action: "sign-off" });
-    const late = await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "added-new", kg: 0.1, circuit: 1, cylinderId: fresh.id });
+    const late = await technician
+      .post(`/api/visits/${visitId}/refrigerant`)
+      .send({ kind: "added-new", kg: 0.1, circuit: 1, cylinderId: fresh.id });
     expect(late.status).toBe(409);
-    expect((await technician.put(`/api/visits/${visitId}/refrigerant/charging/1`).send({ lineAdjustmentKg: 0 })).status).toBe(409);
+    expect(
+      (await technician.put(`/api/visits/${visitId}/refrigerant/charging/1`).send({ lineAdjustmentKg: 0 })).status,
+    ).toBe(409);
   });
 
   it("hides every register record of another organisation behind 404", async () => {
     expect((await outsider.get(`/api/visits/${visitId}/refrigerant`)).status).toBe(404);
-    expect((await outsider.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "recovered", kg: 1, circuit: 1, cylinderId: recovery.id })).status).toBe(404);
+    expect(
+      (
+        await outsider
+          .post(`/api/visits/${visitId}/refrigerant`)
+          .send({ kind: "recovered", kg: 1, circuit: 1, cylinderId: recovery.id })
+      ).status,
+    ).toBe(404);
     expect((await outsider.get(`/api/cylinders/${recovery.id}`)).status).toBe(404);
     expect((await outsider.post(`/api/cylinders/${recovery.id}/reclaim`).send({ kg: 1 })).status).toBe(404);
     expect((await outsider.get(`/api/equipment/${rooftopId}/refrigerant`)).status).toBe(404);
@@ -324,10 +483,19 @@ describe("refrigerant register API", () => {
     const customer = (await outsider.post("/api/customers").send({ name: "Frostline Foods" })).body.customer;
     const site = (await outsider.post("/api/sites").send({ customerId: customer.id, name: "Depot" })).body.site;
     const unit = (
-      await outsider.post("/api/equipment").send({ siteId: site.id, name: "Dock cool room", kind: "cool room", refrigerant: "R407C", circuits: [{ number: 1, factoryChargeKg: 3, meteringDevice: "txv" }] })
+      await outsider.post("/api/equipment").send({
+        siteId: site.id,
+        name: "Dock cool room",
+        kind: "cool room",
+        refrigerant: "R407C",
+        circuits: [{ number: 1, factoryChargeKg: 3, meteringDevice: "txv" }],
+      })
     ).body.equipment;
-    const theirVisit = (await outsider.post("/api/visits").send({ equipmentId: unit.id, reason: "Leak search" })).body.visit.id;
-    const borrowed = await outsider.post(`/api/visits/${theirVisit}/refrigerant`).send({ kind: "recovered", kg: 1, circuit: 1, cylinderId: recovery.id });
+    const theirVisit = (await outsider.post("/api/visits").send({ equipmentId: unit.id, reason: "Leak search" })).body
+      .visit.id;
+    const borrowed = await outsider
+      .post(`/api/visits/${theirVisit}/refrigerant`)
+      .send({ kind: "recovered", kg: 1, circuit: 1, cylinderId: recovery.id });
     expect(borrowed.status).toBe(400);
     expect(borrowed.body.fields.cylinderId).toMatch(/your company's cylinders/);
   });
@@ -335,7 +503,9 @@ describe("refrigerant register API", () => {
   it("sends a recovery cylinder's contents for reclaim from the cylinder itself", async () => {
     const tooMuch = await technician.post(`/api/cylinders/${recovery.id}/reclaim`).send({ kg: 50 });
     expect(tooMuch.status).toBe(400);
-    const sent = await technician.post(`/api/cylinders/${recovery.id}/reclaim`).send({ kg: 5.2, note: "Collected by the reclaimer" });
+    const sent = await technician
+      .post(`/api/cylinders/${recovery.id}/reclaim`)
+      .send({ kg: 5.2, note: "Collected by the reclaimer" });
     expect(sent.status).toBe(201);
     expect(sent.body.movement).toMatchObject({ kind: "sent-for-reclaim", visitId: null, equipmentId: null });
     expect(sent.body.cylinder.contentsKg).toBeCloseTo(0, 6);

@@ -2,7 +2,15 @@ import express from "express";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ROLES, type Role } from "@shared/schemas/auth.ts";
-import { PUBLIC, ROUTE_PERMISSIONS, SIGNED_IN, parseRouteKey, routePermissionGate, type Access, type RouteKey } from "@server/auth/route-permissions.ts";
+import {
+  PUBLIC,
+  ROUTE_PERMISSIONS,
+  SIGNED_IN,
+  parseRouteKey,
+  routePermissionGate,
+  type Access,
+  type RouteKey,
+} from "@server/auth/route-permissions.ts";
 import { errorHandler } from "@server/http/error-handler.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { appRoutes } from "../setup/route-table.ts";
@@ -10,7 +18,8 @@ import { BELLBIRD, signedIn } from "../setup/demo-accounts.ts";
 import { SESSION_ROUTES, UNTHROTTLED, sampleBodies } from "../setup/route-samples.ts";
 import { pathFor, twoCompanies, type TwoCompanies } from "../setup/two-companies.ts";
 
-const allows = (access: Access, role: Role) => access === PUBLIC || access === SIGNED_IN || (access as readonly Role[]).includes(role);
+const allows = (access: Access, role: Role) =>
+  access === PUBLIC || access === SIGNED_IN || (access as readonly Role[]).includes(role);
 const ENTRIES = Object.entries(ROUTE_PERMISSIONS) as [RouteKey, Access][];
 const hasRecordInPath = (key: RouteKey) => key.includes("/:");
 /** A uuid no record has: a permitted caller in its own company gets past the gate, then 404 or 400. */
@@ -54,10 +63,18 @@ describe("route permissions", () => {
   afterAll(() => testApp.close());
 
   it("has one entry for every route of the app, and a route for every entry", async () => {
-    const inApp = appRoutes(testApp.app).map((route) => route.key).sort();
+    const inApp = appRoutes(testApp.app)
+      .map((route) => route.key)
+      .sort();
     const inTable = Object.keys(ROUTE_PERMISSIONS).sort();
-    expect(inApp.filter((key) => !inTable.includes(key)), "routes without an entry in ROUTE_PERMISSIONS").toEqual([]);
-    expect(inTable.filter((key) => !inApp.includes(key)), "entries without a route").toEqual([]);
+    expect(
+      inApp.filter((key) => !inTable.includes(key)),
+      "routes without an entry in ROUTE_PERMISSIONS",
+    ).toEqual([]);
+    expect(
+      inTable.filter((key) => !inApp.includes(key)),
+      "entries without a route",
+    ).toEqual([]);
     expect(inApp.length).toBeGreaterThan(70);
   });
 
@@ -96,10 +113,13 @@ describe("route permissions", () => {
     });
 
     if (hasRecordInPath(key)) {
-      it.each(ROLES)("as a %s of another company naming Bellbird's record: 404 when allowed, 403 when not, never the record", async (role) => {
-        const response = await call(world.coldfront[role], key, `/api${pathFor(path, world.records)}`);
-        expect(response.status, JSON.stringify(response.body)).toBe(allows(access, role) ? 404 : 403);
-      });
+      it.each(ROLES)(
+        "as a %s of another company naming Bellbird's record: 404 when allowed, 403 when not, never the record",
+        async (role) => {
+          const response = await call(world.coldfront[role], key, `/api${pathFor(path, world.records)}`);
+          expect(response.status, JSON.stringify(response.body)).toBe(allows(access, role) ? 404 : 403);
+        },
+      );
     } else if (parseRouteKey(key).method === "get") {
       it.each(ROLES)("as a %s of another company: lists none of Bellbird's records", async (role) => {
         const response = await call(world.coldfront[role], key, `/api${path}`);

@@ -162,7 +162,13 @@ describe("readings saved together", () => {
     });
     const outcomes = await Promise.allSettled(pending);
     expect(transactions).toBe(1);
-    expect(outcomes.map((outcome) => outcome.status)).toEqual(["fulfilled", "fulfilled", "rejected", "fulfilled", "fulfilled"]);
+    expect(outcomes.map((outcome) => outcome.status)).toEqual([
+      "fulfilled",
+      "fulfilled",
+      "rejected",
+      "fulfilled",
+      "fulfilled",
+    ]);
     expect((outcomes[2] as PromiseRejectedResult).reason).toBeInstanceOf(ZodError);
     expect((await storedOn(visitId)).map((row) => row.input.suctionLineTempC)).toEqual([13, 13.1, 13.3, 13.4]);
 
@@ -202,17 +208,15 @@ describe("readings saved together", () => {
       },
       { organisationId, visitId: later, circuit: 2, lineAdjustmentKg: 0.3, recordedBy: technicianId },
     ]);
-    await db
-      .insert(circuitCharges)
-      .values({
-        organisationId,
-        visitId: earlier,
-        circuit: 1,
-        lineAdjustmentKg: 9,
-        recordedBy: technicianId,
-        voidedAt: new Date(),
-        voidReason: "Typed wrong",
-      });
+    await db.insert(circuitCharges).values({
+      organisationId,
+      visitId: earlier,
+      circuit: 1,
+      lineAdjustmentKg: 9,
+      recordedBy: technicianId,
+      voidedAt: new Date(),
+      voidReason: "Typed wrong",
+    });
     const reference = {
       subcoolingK: 5.5,
       superheatK: 6.5,
@@ -221,16 +225,14 @@ describe("readings saved together", () => {
       outdoorAirDryBulbC: 31,
       returnAirDryBulbC: null,
     };
-    await db
-      .insert(chargeReferences)
-      .values({
-        organisationId,
-        equipmentId: rooftopId,
-        circuit: 2,
-        ...reference,
-        source: "set-by-senior",
-        setBy: ids[BELLBIRD.senior]!,
-      });
+    await db.insert(chargeReferences).values({
+      organisationId,
+      equipmentId: rooftopId,
+      circuit: 2,
+      ...reference,
+      source: "set-by-senior",
+      setBy: ids[BELLBIRD.senior]!,
+    });
     const visitId = await openVisit();
     const [one, two] = await Promise.all([
       technician.post(`/api/visits/${visitId}/readings`).send(body(11, 1)),

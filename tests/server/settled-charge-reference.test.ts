@@ -5,7 +5,8 @@ import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 
 const MINUTE = 60_000;
 const START = Date.parse("2026-07-05T01:00:00Z");
-const gauge = (temperatureC: number, point: "bubble" | "dew") => Math.round(saturationPressure("R410A", temperatureC, point) - STANDARD_ATMOSPHERE_KPA);
+const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+  Math.round(saturationPressure("R410A", temperatureC, point) - STANDARD_ATMOSPHERE_KPA);
 
 /** An R410A TXV reading (no glide, so superheat and subcooling are the line temperatures' offsets). */
 function reading(minutes: number, superheatK: number, subcoolingK: number, outdoorAirDryBulbC = 30) {
@@ -21,12 +22,21 @@ function reading(minutes: number, superheatK: number, subcoolingK: number, outdo
     outdoorAirDryBulbC,
     returnAirDryBulbC: 24,
   };
-  return { id: `00000000-0000-4000-8000-${String(minutes).padStart(12, "0")}`, takenAt: new Date(START + minutes * MINUTE), input, result: diagnose(input) };
+  return {
+    id: `00000000-0000-4000-8000-${String(minutes).padStart(12, "0")}`,
+    takenAt: new Date(START + minutes * MINUTE),
+    input,
+    result: diagnose(input),
+  };
 }
 
 describe("settledChargeReference", () => {
   it("gives nothing while the circuit is still moving after the weigh-in", () => {
-    const runLog = { weighedInAt: new Date(START), adjustments: [], readings: [reading(0, 12, 1), reading(3, 9, 3), reading(6, 6, 5)] };
+    const runLog = {
+      weighedInAt: new Date(START),
+      adjustments: [],
+      readings: [reading(0, 12, 1), reading(3, 9, 3), reading(6, 6, 5)],
+    };
     expect(settledChargeReference(runLog)).toBeNull();
   });
 

@@ -33,17 +33,37 @@ describe("standing-pressure checks API (non-condensables from the off-cycle stan
       circuits: [{ number: 1, factoryChargeKg: 1.6, meteringDevice: "txv" }],
     });
     expect(unit.status).toBe(201);
-    visitId = (await technician.post("/api/visits").send({ equipmentId: unit.body.equipment.id, reason: "Head pressure high after a line-set repair" })).body.visit.id;
+    visitId = (
+      await technician
+        .post("/api/visits")
+        .send({ equipmentId: unit.body.equipment.id, reason: "Head pressure high after a line-set repair" })
+    ).body.visit.id;
   });
   afterAll(() => testApp.close());
 
   it("fails R410A standing at 1750 kPa gauge with the condenser at 25 °C: about 4 K over, more than the 3 K (5 °F) limit [S31]", async () => {
-    const response = await technician.post(path()).send({ standingGaugeKPa: 1750, equalisedTempC: 25, circuit: 1, note: "Fan run 10 min, air off = air on" });
+    const response = await technician
+      .post(path())
+      .send({ standingGaugeKPa: 1750, equalisedTempC: 25, circuit: 1, note: "Fan run 10 min, air off = air on" });
     expect(response.status).toBe(201);
     const { input, result } = response.body.standingPressureCheck;
     // The refrigerant is the unit's and the atmosphere the site's, never the client's.
-    expect(input).toEqual({ refrigerant: "R410A", standingGaugeKPa: 1750, equalisedTempC: 25, atmosphericPressureKPa: atmosphere, circuit: 1, note: "Fan run 10 min, air off = air on" });
-    expect(result).toEqual(judgeStandingPressure({ refrigerant: "R410A", standingGaugeKPa: 1750, equalisedTempC: 25, atmosphericPressureKPa: atmosphere }));
+    expect(input).toEqual({
+      refrigerant: "R410A",
+      standingGaugeKPa: 1750,
+      equalisedTempC: 25,
+      atmosphericPressureKPa: atmosphere,
+      circuit: 1,
+      note: "Fan run 10 min, air off = air on",
+    });
+    expect(result).toEqual(
+      judgeStandingPressure({
+        refrigerant: "R410A",
+        standingGaugeKPa: 1750,
+        equalisedTempC: 25,
+        atmosphericPressureKPa: atmosphere,
+      }),
+    );
     expect(result.verdict).toBe("fail");
     expect(result.excessK).toBeGreaterThan(3.5);
     expect(result.excessK).toBeLessThan(4.5);
@@ -64,10 +84,16 @@ describe("standing-pressure checks API (non-condensables from the off-cycle stan
   it("refuses a malformed body, a forged refrigerant and readings outside the table with field messages, never a 500", async () => {
     const bad = await technician.post(path()).send({ standingGaugeKPa: "lots", circuit: 0 });
     expect(bad.status).toBe(400);
-    expect(Object.keys(bad.body.fields)).toEqual(expect.arrayContaining(["standingGaugeKPa", "equalisedTempC", "circuit"]));
-    const forged = await technician.post(path()).send({ standingGaugeKPa: 1750, equalisedTempC: 25, refrigerant: "R22", atmosphericPressureKPa: 60 });
+    expect(Object.keys(bad.body.fields)).toEqual(
+      expect.arrayContaining(["standingGaugeKPa", "equalisedTempC", "circuit"]),
+    );
+    const forged = await technician
+      .post(path())
+      .send({ standingGaugeKPa: 1750, equalisedTempC: 25, refrigerant: "R22", atmosphericPressureKPa: 60 });
     expect(forged.status).toBe(400);
-    expect(forged.body.fields.refrigerant).toMatch(/^Not accepted: refrigerant, atmosphericPressureKPa\. .*refrigerant comes from the equipment/);
+    expect(forged.body.fields.refrigerant).toMatch(
+      /^Not accepted: refrigerant, atmosphericPressureKPa\. .*refrigerant comes from the equipment/,
+    );
     const hotCondenser = await technician.post(path()).send({ standingGaugeKPa: 1750, equalisedTempC: 90 });
     expect(hotCondenser.status).toBe(400);
     expect(Object.keys(hotCondenser.body.fields)).toEqual(["equalisedTempC"]);
@@ -88,7 +114,9 @@ describe("standing-pressure checks API (non-condensables from the off-cycle stan
 
   it("voids a check with a reason: still listed with who and why, and the trail names it", async () => {
     const [first] = (await technician.get(path())).body.standingPressureChecks;
-    const voided = await technician.post(`/api/visits/${visitId}/voids`).send({ kind: "standing-pressure", recordId: first.id, reason: "Condenser still in the sun" });
+    const voided = await technician
+      .post(`/api/visits/${visitId}/voids`)
+      .send({ kind: "standing-pressure", recordId: first.id, reason: "Condenser still in the sun" });
     expect(voided.status).toBe(201);
     const list = (await technician.get(path())).body.standingPressureChecks;
     expect(list[0].voided).toMatchObject({ reason: "Condenser still in the sun", by: { name: "Sam Toko" } });
@@ -100,6 +128,12 @@ describe("standing-pressure checks API (non-condensables from the off-cycle stan
       summary: "Standing pressure 1750 kPa gauge at 25 °C (R410A)",
       reason: "Condenser still in the sun",
     });
-    expect((await technician.post(`/api/visits/${visitId}/voids`).send({ kind: "standing-pressure", recordId: first.id, reason: "Again" })).status).toBe(409);
+    expect(
+      (
+        await technician
+          .post(`/api/visits/${visitId}/voids`)
+          .send({ kind: "standing-pressure", recordId: first.id, reason: "Again" })
+      ).status,
+    ).toBe(409);
   });
 });

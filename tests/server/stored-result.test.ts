@@ -39,7 +39,8 @@ describe("packed results", () => {
   });
 
   it("stores a fraction of the result's JSON", () => {
-    for (const result of results) expect(JSON.stringify(packResult(result)).length).toBeLessThan(JSON.stringify(result).length / 4);
+    for (const result of results)
+      expect(JSON.stringify(packResult(result)).length).toBeLessThan(JSON.stringify(result).length / 4);
   });
 
   it("carries the fields SQL reads, equal to the result's, and no field the result lacks", () => {
@@ -81,14 +82,25 @@ describe("packed results in the readings table", () => {
   it("stores a saved reading's result packed and small, and reads it back whole", async () => {
     const technician = await signedIn(testApp.app, BELLBIRD.technician);
     const visitId = await startRooftopVisit(technician, "Stored result check");
-    const saved = await technician.post(`/api/visits/${visitId}/readings`).send({ circuit: 1, suctionPressureKPa: 468, suctionLineTempC: 12.1, liquidPressureKPa: 1685, liquidLineTempC: 37 });
+    const saved = await technician.post(`/api/visits/${visitId}/readings`).send({
+      circuit: 1,
+      suctionPressureKPa: 468,
+      suctionLineTempC: 12.1,
+      liquidPressureKPa: 1685,
+      liquidLineTempC: 37,
+    });
     expect(saved.status).toBe(201);
     const { id, result } = saved.body.reading as { id: string; result: DiagnosisResult };
 
-    const { rows } = await testApp.database.db.execute<{ packed: boolean; bytes: number }>(sql`select result ? 'packed' as packed, pg_column_size(result) as bytes from readings where id = ${id}`);
+    const { rows } = await testApp.database.db.execute<{ packed: boolean; bytes: number }>(
+      sql`select result ? 'packed' as packed, pg_column_size(result) as bytes from readings where id = ${id}`,
+    );
     expect(rows[0]!.packed).toBe(true);
     expect(rows[0]!.bytes).toBeLessThan(JSON.stringify(result).length / 2);
-    const [stored] = await testApp.database.db.select({ result: readings.result }).from(readings).where(eq(readings.id, id));
+    const [stored] = await testApp.database.db
+      .select({ result: readings.result })
+      .from(readings)
+      .where(eq(readings.id, id));
     expect(stored!.result).toEqual(result);
   });
 
@@ -96,11 +108,26 @@ describe("packed results in the readings table", () => {
     const technician = await signedIn(testApp.app, BELLBIRD.technician);
     const visitId = await startRooftopVisit(technician, "Older stored result");
     const store = await readingStore(testApp, visitId);
-    const row = store.row({ refrigerant: "R407C", meteringDevice: "txv", suctionPressureKPa: 468, suctionLineTempC: 12.1, liquidPressureKPa: 1685, liquidLineTempC: 37 }, new Date());
+    const row = store.row(
+      {
+        refrigerant: "R407C",
+        meteringDevice: "txv",
+        suctionPressureKPa: 468,
+        suctionLineTempC: 12.1,
+        liquidPressureKPa: 1685,
+        liquidLineTempC: 37,
+      },
+      new Date(),
+    );
     await store.store([row]);
     // As every reading was stored before decision 030: the result's JSON itself.
-    await testApp.database.db.execute(sql`update readings set result = ${JSON.stringify(row.result)}::jsonb where id = ${row.id}`);
-    const [stored] = await testApp.database.db.select({ result: readings.result, superheatK: readings.superheatK }).from(readings).where(eq(readings.id, row.id));
+    await testApp.database.db.execute(
+      sql`update readings set result = ${JSON.stringify(row.result)}::jsonb where id = ${row.id}`,
+    );
+    const [stored] = await testApp.database.db
+      .select({ result: readings.result, superheatK: readings.superheatK })
+      .from(readings)
+      .where(eq(readings.id, row.id));
     expect(stored!.result).toEqual(asStored(row.result));
     expect(stored!.superheatK).toBe(row.result.superheatK);
   });

@@ -18,9 +18,16 @@ import { readingStore, startRooftopVisit } from "../setup/stored-readings.ts";
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
 const ATMOSPHERE = atmosphericPressureAtAltitude(demoSite.altitudeM);
-const gauge = (temperatureC: number, point: "bubble" | "dew") => Number((saturationPressure("R407C", temperatureC, point) - ATMOSPHERE).toFixed(1));
+const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+  Number((saturationPressure("R407C", temperatureC, point) - ATMOSPHERE).toFixed(1));
 /** A rooftop-unit reading as typed in; `suctionLineTempC` tells them apart. */
-const typed = (suctionLineTempC: number, circuit = 1) => ({ circuit, suctionPressureKPa: gauge(5, "dew"), suctionLineTempC, liquidPressureKPa: gauge(42, "bubble"), liquidLineTempC: 37 });
+const typed = (suctionLineTempC: number, circuit = 1) => ({
+  circuit,
+  suctionPressureKPa: gauge(5, "dew"),
+  suctionLineTempC,
+  liquidPressureKPa: gauge(42, "bubble"),
+  liquidLineTempC: 37,
+});
 
 /** The same reading as stored without a request (readingStore). */
 const logged = (suctionLineTempC: number): DiagnosisInput => ({
@@ -37,7 +44,10 @@ const logged = (suctionLineTempC: number): DiagnosisInput => ({
 /** A logger export of `rows` minutes (the CSV import's columns). */
 function loggedSeries(rows: number): string {
   const lines = ["Time,Suction pressure kPa,Suction temp C,Liquid pressure kPa,Liquid temp C"];
-  for (let minute = 0; minute < rows; minute++) lines.push(`10:${String(minute).padStart(2, "0")},${gauge(6, "dew")},${12 + minute * 0.05},${gauge(42, "bubble")},37`);
+  for (let minute = 0; minute < rows; minute++)
+    lines.push(
+      `10:${String(minute).padStart(2, "0")},${gauge(6, "dew")},${12 + minute * 0.05},${gauge(42, "bubble")},37`,
+    );
   return lines.join("\n");
 }
 
@@ -80,7 +90,9 @@ describe("stored reading figures of a visit", () => {
     const visitId = await startRooftopVisit(technician, "Stored count: saves");
     expect(await counts(visitId)).toEqual({ stored: 0, direct: 0 });
     for (const [index, circuit] of [1, 2, 2].entries()) {
-      expect((await technician.post(`/api/visits/${visitId}/readings`).send(typed(12 + index, circuit))).status).toBe(201);
+      expect((await technician.post(`/api/visits/${visitId}/readings`).send(typed(12 + index, circuit))).status).toBe(
+        201,
+      );
     }
     expect(await counts(visitId)).toEqual({ stored: 3, direct: 3 });
     const log = await readingStore(testApp, visitId);
@@ -102,7 +114,13 @@ describe("stored reading figures of a visit", () => {
     const wrong = (await technician.post(`/api/visits/${visitId}/readings`).send(typed(30, 2))).body.reading;
     const before = await recorders(visitId);
     expect(kept.id).toBeTruthy();
-    expect((await technician.post(`/api/visits/${visitId}/voids`).send({ kind: "reading", recordId: wrong.id, reason: "Probe on the wrong line" })).status).toBe(201);
+    expect(
+      (
+        await technician
+          .post(`/api/visits/${visitId}/voids`)
+          .send({ kind: "reading", recordId: wrong.id, reason: "Probe on the wrong line" })
+      ).status,
+    ).toBe(201);
     expect(await counts(visitId)).toEqual({ stored: 1, direct: 1 });
     expect((await listed(visitId)).readingCount).toBe(1);
     const after = await recorders(visitId);
@@ -129,7 +147,13 @@ describe("stored reading figures of a visit", () => {
     );
     const importId = crypto.randomUUID();
     const staged = JSON.stringify([{ takenAt: "2026-12-02T00:00:00Z", input: typed(12), result: {} }]);
-    await stageImportedReadings(testApp.database.db, rows[0]!.organisation_id, { importId, visitId, circuit: 1, recordedBy: rows[0]!.recorded_by, rowsJson: staged });
+    await stageImportedReadings(testApp.database.db, rows[0]!.organisation_id, {
+      importId,
+      visitId,
+      circuit: 1,
+      recordedBy: rows[0]!.recorded_by,
+      rowsJson: staged,
+    });
     expect(await counts(visitId)).toEqual({ stored: 41, direct: 41 });
     await discardStagedReadings(testApp.database.db, importId);
     expect(await counts(visitId)).toEqual({ stored: 41, direct: 41 });
@@ -141,7 +165,9 @@ describe("stored reading figures of a visit", () => {
     const visitId = await startRooftopVisit(technician, "Stored count: deletes");
     for (const value of [12, 13, 14]) await technician.post(`/api/visits/${visitId}/readings`).send(typed(value));
     const db = testApp.database.db;
-    await db.execute(sql`delete from readings where id = (select id from readings where visit_id = ${visitId} order by created_at desc limit 1)`);
+    await db.execute(
+      sql`delete from readings where id = (select id from readings where visit_id = ${visitId} order by created_at desc limit 1)`,
+    );
     expect(await counts(visitId)).toEqual({ stored: 2, direct: 2 });
     let { stored, direct } = await recorders(visitId);
     expect(stored).toEqual(direct);

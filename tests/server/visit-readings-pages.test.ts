@@ -8,7 +8,14 @@ import { eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { assessTrend, lastAtEachInstant, saturationPressure, STANDARD_ATMOSPHERE_KPA } from "@shared/engine/index.ts";
 import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
-import { READINGS_PAGE_SIZE, ReadingsPageSchema, VisitDetailResponseSchema, VisitSchema, type CircuitLog, type Visit } from "@shared/schemas/visits.ts";
+import {
+  READINGS_PAGE_SIZE,
+  ReadingsPageSchema,
+  VisitDetailResponseSchema,
+  VisitSchema,
+  type CircuitLog,
+  type Visit,
+} from "@shared/schemas/visits.ts";
 import { insertReadings, type NewReading } from "@server/db/visits.ts";
 import { readings } from "@server/db/schema.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
@@ -19,7 +26,8 @@ type Agent = Awaited<ReturnType<typeof signedIn>>;
 
 const COUNT = 600;
 const START = Date.UTC(2026, 11, 2, 1, 0, 0);
-const gauge = (temperatureC: number, point: "bubble" | "dew") => saturationPressure("R407C", temperatureC, point) - STANDARD_ATMOSPHERE_KPA;
+const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+  saturationPressure("R407C", temperatureC, point) - STANDARD_ATMOSPHERE_KPA;
 
 /**
  * Reading `index`, 30 s apart: steady for the first 200 (settled), then a suction line that
@@ -65,23 +73,37 @@ describe("paged visit detail and circuit logs", () => {
     await store([again]);
     stored.push(again);
     adjustmentAt = new Date(START + 250 * 30_000 - 10_000).toISOString();
-    expect((await technician.post(`/api/visits/${visitId}/adjustments`).send({ circuit: 1, kind: "metering", description: "Opened the TXV a quarter turn", at: adjustmentAt })).status).toBe(201);
+    expect(
+      (
+        await technician
+          .post(`/api/visits/${visitId}/adjustments`)
+          .send({ circuit: 1, kind: "metering", description: "Opened the TXV a quarter turn", at: adjustmentAt })
+      ).status,
+    ).toBe(201);
   }, 120_000);
   afterAll(() => testApp.close());
 
-  const detail = async (): Promise<Visit> => VisitSchema.parse((await technician.get(`/api/visits/${visitId}`)).body.visit);
+  const detail = async (): Promise<Visit> =>
+    VisitSchema.parse((await technician.get(`/api/visits/${visitId}`)).body.visit);
   const logOf = (visit: Pick<Visit, "circuitLogs">) => visit.circuitLogs.find((log) => log.circuit === 1)!;
 
   /** The engine over every standing reading, as the run log computed it in the browser. */
   function reference(voidedIds: ReadonlySet<string>) {
-    const standing = stored.filter((row) => !voidedIds.has(row.id)).sort((a, b) => a.takenAt.getTime() - b.takenAt.getTime());
+    const standing = stored
+      .filter((row) => !voidedIds.has(row.id))
+      .sort((a, b) => a.takenAt.getTime() - b.takenAt.getTime());
     const distinct = lastAtEachInstant(standing, (row) => row.takenAt.getTime());
     const adjustment = Date.parse(adjustmentAt);
     const trend = assessTrend(
       distinct.map((row, index) => {
         const previous = distinct[index - 1];
         const marked = adjustment <= row.takenAt.getTime() && (!previous || adjustment > previous.takenAt.getTime());
-        return { takenAt: row.takenAt.toISOString(), input: row.input, result: row.result, ...(marked ? { adjustment: "Opened the TXV a quarter turn" } : {}) };
+        return {
+          takenAt: row.takenAt.toISOString(),
+          input: row.input,
+          result: row.result,
+          ...(marked ? { adjustment: "Opened the TXV a quarter turn" } : {}),
+        };
       }),
     );
     return { standing, trend };
@@ -163,14 +185,26 @@ describe("paged visit detail and circuit logs", () => {
   it("refuses a page without a circuit or a reading to go back from, and hides another company's visit", async () => {
     expect((await technician.get(`/api/visits/${visitId}/readings?circuit=1`)).status).toBe(400);
     expect((await technician.get(`/api/visits/${visitId}/readings?before=${stored[5]!.id}`)).status).toBe(400);
-    expect((await technician.get(`/api/visits/00000000-0000-4000-8000-000000000000/readings?circuit=1&before=${stored[5]!.id}`)).status).toBe(404);
+    expect(
+      (
+        await technician.get(
+          `/api/visits/00000000-0000-4000-8000-000000000000/readings?circuit=1&before=${stored[5]!.id}`,
+        )
+      ).status,
+    ).toBe(404);
   });
 
   it("counts a void of an old reading the detail does not carry in the logs, the delta's and the whole detail's", async () => {
     const before = await detail();
     const old = stored[150]!;
     expect(before.readings.some((reading) => reading.id === old.id)).toBe(false);
-    expect((await technician.post(`/api/visits/${visitId}/voids`).send({ kind: "reading", recordId: old.id, reason: "Probe fell off the pipe" })).status).toBe(201);
+    expect(
+      (
+        await technician
+          .post(`/api/visits/${visitId}/voids`)
+          .send({ kind: "reading", recordId: old.id, reason: "Probe fell off the pipe" })
+      ).status,
+    ).toBe(201);
     const response = await technician.get(`/api/visits/${visitId}?since=${encodeURIComponent(before.revision)}`);
     const body = VisitDetailResponseSchema.parse(response.body);
     if (!("delta" in body)) throw new Error("expected a delta");
@@ -184,7 +218,13 @@ describe("paged visit detail and circuit logs", () => {
 
   it("brings a reading saved after the logs were worked out into them, and one stored without a revision bump too", async () => {
     const before = logOf(await detail());
-    const body = { circuit: 1, suctionPressureKPa: 390, suctionLineTempC: 20, liquidPressureKPa: 1500, liquidLineTempC: 35 };
+    const body = {
+      circuit: 1,
+      suctionPressureKPa: 390,
+      suctionLineTempC: 20,
+      liquidPressureKPa: 1500,
+      liquidLineTempC: 35,
+    };
     const saved = (await technician.post(`/api/visits/${visitId}/readings`).send(body)).body.reading;
     const after = logOf(await detail());
     expect(after.readingCount).toBe(before.readingCount + 1);
@@ -200,12 +240,20 @@ describe("paged visit detail and circuit logs", () => {
 
   it("brings in a delta the logs of the circuits it touched only; an adjustment for the whole unit touches every circuit", async () => {
     const deltaSince = async (revision: string) => {
-      const body = VisitDetailResponseSchema.parse((await technician.get(`/api/visits/${visitId}?since=${encodeURIComponent(revision)}`)).body);
+      const body = VisitDetailResponseSchema.parse(
+        (await technician.get(`/api/visits/${visitId}?since=${encodeURIComponent(revision)}`)).body,
+      );
       if (!("delta" in body)) throw new Error("expected a delta");
       return body.delta;
     };
     const save = async () => {
-      const body = { circuit: 2, suctionPressureKPa: 400, suctionLineTempC: 14, liquidPressureKPa: 1600, liquidLineTempC: 36 };
+      const body = {
+        circuit: 2,
+        suctionPressureKPa: 400,
+        suctionLineTempC: 14,
+        liquidPressureKPa: 1600,
+        liquidLineTempC: 36,
+      };
       const response = await technician.post(`/api/visits/${visitId}/readings`).send(body);
       expect(response.status).toBe(201);
       const saved = response.body.reading;
@@ -220,7 +268,13 @@ describe("paged visit detail and circuit logs", () => {
     expect(afterReading.circuitLogs![0]!.readingCount).toBe(2);
 
     before = await detail();
-    expect((await technician.post(`/api/visits/${visitId}/adjustments`).send({ circuit: null, kind: "airflow", description: "Changed both filters" })).status).toBe(201);
+    expect(
+      (
+        await technician
+          .post(`/api/visits/${visitId}/adjustments`)
+          .send({ circuit: null, kind: "airflow", description: "Changed both filters" })
+      ).status,
+    ).toBe(201);
     expect((await deltaSince(before.revision)).circuitLogs!.map((log) => log.circuit)).toEqual([1, 2]);
   });
 
@@ -230,24 +284,50 @@ describe("paged visit detail and circuit logs", () => {
     // As a CSV import's commit does: many rows stamped with a new revision at once.
     await db.execute(sql`update visits set revision = revision + 1 where id = ${visitId}`);
     await db.execute(sql`update readings set note = 'checked' where visit_id = ${visitId}`);
-    const body = VisitDetailResponseSchema.parse((await technician.get(`/api/visits/${visitId}?since=${encodeURIComponent(before.revision)}`)).body);
+    const body = VisitDetailResponseSchema.parse(
+      (await technician.get(`/api/visits/${visitId}?since=${encodeURIComponent(before.revision)}`)).body,
+    );
     expect("visit" in body).toBe(true);
   });
 
   it("keeps the figure columns equal to the stored result's fields, on insert and when a result is rewritten", async () => {
     const db = testApp.database.db;
     const rows = await db
-      .select({ id: readings.id, superheatK: readings.superheatK, subcoolingK: readings.subcoolingK, evaporatingTempC: readings.evaporatingTempC, condensingTempC: readings.condensingTempC, runMinutes: readings.runMinutes, chargeState: readings.chargeState, current: readings.resultIsCurrent })
+      .select({
+        id: readings.id,
+        superheatK: readings.superheatK,
+        subcoolingK: readings.subcoolingK,
+        evaporatingTempC: readings.evaporatingTempC,
+        condensingTempC: readings.condensingTempC,
+        runMinutes: readings.runMinutes,
+        chargeState: readings.chargeState,
+        current: readings.resultIsCurrent,
+      })
       .from(readings)
       .where(eq(readings.visitId, visitId));
     const byId = new Map(stored.map((row) => [row.id, row]));
     for (const row of rows) {
       const { result, input } = byId.get(row.id)!;
-      expect(row).toEqual({ id: row.id, superheatK: result.superheatK, subcoolingK: result.subcoolingK, evaporatingTempC: result.evaporatingTempC, condensingTempC: result.condensingTempC, runMinutes: input.runMinutes ?? null, chargeState: result.chargeState, current: true });
+      expect(row).toEqual({
+        id: row.id,
+        superheatK: result.superheatK,
+        subcoolingK: result.subcoolingK,
+        evaporatingTempC: result.evaporatingTempC,
+        condensingTempC: result.condensingTempC,
+        runMinutes: input.runMinutes ?? null,
+        chargeState: result.chargeState,
+        current: true,
+      });
     }
     const target = stored[3]!;
-    await db.update(readings).set({ result: { ...target.result, superheatK: 99 } }).where(eq(readings.id, target.id));
-    const [rewritten] = await db.select({ superheatK: readings.superheatK }).from(readings).where(eq(readings.id, target.id));
+    await db
+      .update(readings)
+      .set({ result: { ...target.result, superheatK: 99 } })
+      .where(eq(readings.id, target.id));
+    const [rewritten] = await db
+      .select({ superheatK: readings.superheatK })
+      .from(readings)
+      .where(eq(readings.id, target.id));
     expect(rewritten!.superheatK).toBe(99);
   });
 });

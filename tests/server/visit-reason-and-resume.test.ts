@@ -35,7 +35,8 @@ describe("a visit started without a reason, and the viewer's last activity", () 
   });
 
   it("refuses to submit without a reason (400, nothing changes), then takes the reason with the submit", async () => {
-    const visitId = (await technician.post("/api/visits").send({ equipmentId: unitIds[0], reason: "  " })).body.visit.id;
+    const visitId = (await technician.post("/api/visits").send({ equipmentId: unitIds[0], reason: "  " })).body.visit
+      .id;
     const refused = await technician.post(`/api/visits/${visitId}/review`).send({ action: "submit" });
     expect(refused.status).toBe(400);
     expect(refused.body.message).toBe(REASON_NEEDED_MESSAGE);
@@ -44,14 +45,24 @@ describe("a visit started without a reason, and the viewer's last activity", () 
     expect(unchanged).toMatchObject({ status: "open", reason: "" });
     expect(unchanged.events.map((event: { action: string }) => event.action)).toEqual(["started"]);
 
-    const submitted = await technician.post(`/api/visits/${visitId}/review`).send({ action: "submit", reason: "Quarterly check, customer reports noise" });
+    const submitted = await technician
+      .post(`/api/visits/${visitId}/review`)
+      .send({ action: "submit", reason: "Quarterly check, customer reports noise" });
     expect(submitted.status).toBe(200);
-    expect(submitted.body.visit).toMatchObject({ status: "awaiting-review", reason: "Quarterly check, customer reports noise" });
-    expect(submitted.body.visit.events.at(-1)).toMatchObject({ action: "submitted", reason: "Reason for the visit: Quarterly check, customer reports noise" });
+    expect(submitted.body.visit).toMatchObject({
+      status: "awaiting-review",
+      reason: "Quarterly check, customer reports noise",
+    });
+    expect(submitted.body.visit.events.at(-1)).toMatchObject({
+      action: "submitted",
+      reason: "Reason for the visit: Quarterly check, customer reports noise",
+    });
   });
 
   it("submits a visit that already has its reason without asking again, keeping that reason", async () => {
-    const visitId = (await technician.post("/api/visits").send({ equipmentId: unitIds[1], reason: "Iced suction line" })).body.visit.id;
+    const visitId = (
+      await technician.post("/api/visits").send({ equipmentId: unitIds[1], reason: "Iced suction line" })
+    ).body.visit.id;
     const submitted = await technician.post(`/api/visits/${visitId}/review`).send({ action: "submit" });
     expect(submitted.status).toBe(200);
     expect(submitted.body.visit.reason).toBe("Iced suction line");
@@ -59,7 +70,8 @@ describe("a visit started without a reason, and the viewer's last activity", () 
 
   it("tells each person when they last worked on each visit, and nothing for visits they never touched", async () => {
     const mine = (await technician.post("/api/visits").send({ equipmentId: unitIds[2] })).body.visit.id;
-    const theirs = (await senior.post("/api/visits").send({ equipmentId: unitIds[2], reason: "Second opinion" })).body.visit.id;
+    const theirs = (await senior.post("/api/visits").send({ equipmentId: unitIds[2], reason: "Second opinion" })).body
+      .visit.id;
     const forMe = (await technician.get("/api/visits?status=open")).body.visits;
     const mineSeen = forMe.find((visit: { id: string }) => visit.id === mine);
     expect(mineSeen.yourLastActivityAt).not.toBeNull();
@@ -67,7 +79,9 @@ describe("a visit started without a reason, and the viewer's last activity", () 
 
     // A comment later on is activity too: the time moves on.
     await technician.post(`/api/visits/${mine}/comments`).send({ body: "Filter changed" });
-    const later = (await technician.get("/api/visits?status=open")).body.visits.find((visit: { id: string }) => visit.id === mine);
+    const later = (await technician.get("/api/visits?status=open")).body.visits.find(
+      (visit: { id: string }) => visit.id === mine,
+    );
     expect(Date.parse(later.yourLastActivityAt)).toBeGreaterThanOrEqual(Date.parse(mineSeen.yourLastActivityAt));
     const forThem = (await senior.get("/api/visits?status=open")).body.visits;
     expect(forThem.find((visit: { id: string }) => visit.id === theirs).yourLastActivityAt).not.toBeNull();

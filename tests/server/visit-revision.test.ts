@@ -17,7 +17,9 @@ type Agent = Awaited<ReturnType<typeof signedIn>>;
 
 /** Gauges at the demo clinic (85 m) read against the ISO 2533 atmosphere there. */
 const gauge = (temperatureC: number, point: "bubble" | "dew") =>
-  Number((saturationPressure("R407C", temperatureC, point) - atmosphericPressureAtAltitude(demoSite.altitudeM)).toFixed(1));
+  Number(
+    (saturationPressure("R407C", temperatureC, point) - atmosphericPressureAtAltitude(demoSite.altitudeM)).toFixed(1),
+  );
 const reading = (suctionLineTempC: number, takenAt?: string) => ({
   circuit: 1,
   ...(takenAt ? { takenAt } : {}),
@@ -41,11 +43,14 @@ describe("visit revision, conditional GET and deltas", () => {
     senior = await signedIn(testApp.app, BELLBIRD.senior);
     const units = (await technician.get("/api/equipment")).body.equipment;
     const rooftop = units.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C");
-    visitId = (await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Not cooling the waiting room" })).body.visit.id;
+    visitId = (
+      await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Not cooling the waiting room" })
+    ).body.visit.id;
   });
   afterAll(() => testApp.close());
 
-  const detail = (query = "", headers: Record<string, string> = {}) => technician.get(`/api/visits/${visitId}${query}`).set(headers);
+  const detail = (query = "", headers: Record<string, string> = {}) =>
+    technician.get(`/api/visits/${visitId}${query}`).set(headers);
   const currentRevision = async () => (await detail()).body.visit.revision as string;
   const deltaSince = async (since: string) => {
     const response = await detail(`?since=${encodeURIComponent(since)}`);
@@ -97,14 +102,23 @@ describe("visit revision, conditional GET and deltas", () => {
     // Nothing changed since the delta's revision: an empty delta, and 304 with its ETag.
     const settled = await deltaSince(afterSave.revision);
     expect(settled.readings).toEqual([]);
-    expect((await detail(`?since=${afterSave.revision}`, { "If-None-Match": `W/"${afterSave.revision}"` })).status).toBe(304);
+    expect(
+      (await detail(`?since=${afterSave.revision}`, { "If-None-Match": `W/"${afterSave.revision}"` })).status,
+    ).toBe(304);
 
-    const voided = await technician.post(`/api/visits/${visitId}/voids`).send({ kind: "reading", recordId: saved.body.reading.id, reason: "typed 3500 for 350 kPa" });
+    const voided = await technician
+      .post(`/api/visits/${visitId}/voids`)
+      .send({ kind: "reading", recordId: saved.body.reading.id, reason: "typed 3500 for 350 kPa" });
     expect(voided.status).toBe(201);
     const afterVoid = await deltaSince(afterSave.revision);
     expect(afterVoid.readings).toHaveLength(1);
-    expect(afterVoid.readings[0]).toMatchObject({ id: saved.body.reading.id, voided: { reason: "typed 3500 for 350 kPa" } });
-    expect(afterVoid.events.map((event) => [event.action, event.recordId])).toEqual([["voided", saved.body.reading.id]]);
+    expect(afterVoid.readings[0]).toMatchObject({
+      id: saved.body.reading.id,
+      voided: { reason: "typed 3500 for 350 kPa" },
+    });
+    expect(afterVoid.events.map((event) => [event.action, event.recordId])).toEqual([
+      ["voided", saved.body.reading.id],
+    ]);
     expect(afterVoid.readingCount).toBe(0);
   });
 
@@ -119,9 +133,16 @@ describe("visit revision, conditional GET and deltas", () => {
   it("sends a new comment, adjustment and photo in the delta", async () => {
     const before = await currentRevision();
     const comment = await technician.post(`/api/visits/${visitId}/comments`).send({ body: "Filter was blocked" });
-    const adjustment = await technician.post(`/api/visits/${visitId}/adjustments`).send({ circuit: 1, kind: "airflow", description: "Filter replaced" });
-    const png = await sharp({ create: { width: 8, height: 8, channels: 3, background: "#336699" } }).png().toBuffer();
-    const photo = await technician.post(`/api/visits/${visitId}/photos`).field("kind", "gauges").attach("photo", png, "gauges.png");
+    const adjustment = await technician
+      .post(`/api/visits/${visitId}/adjustments`)
+      .send({ circuit: 1, kind: "airflow", description: "Filter replaced" });
+    const png = await sharp({ create: { width: 8, height: 8, channels: 3, background: "#336699" } })
+      .png()
+      .toBuffer();
+    const photo = await technician
+      .post(`/api/visits/${visitId}/photos`)
+      .field("kind", "gauges")
+      .attach("photo", png, "gauges.png");
     expect([comment.status, adjustment.status, photo.status]).toEqual([201, 201, 201]);
     const delta = await deltaSince(before);
     expect(delta.comments.map((row) => row.id)).toEqual([comment.body.comment.id]);
@@ -136,7 +157,13 @@ describe("visit revision, conditional GET and deltas", () => {
     const submitted = await deltaSince(before);
     expect(submitted.status).toBe("awaiting-review");
     expect(submitted.events.map((event) => event.action)).toEqual(["submitted"]);
-    expect((await senior.post(`/api/visits/${visitId}/review`).send({ action: "send-back", reason: "Add a reading after the filter change" })).status).toBe(200);
+    expect(
+      (
+        await senior
+          .post(`/api/visits/${visitId}/review`)
+          .send({ action: "send-back", reason: "Add a reading after the filter change" })
+      ).status,
+    ).toBe(200);
     const sentBack = await deltaSince(submitted.revision);
     expect(sentBack).toMatchObject({ status: "sent-back", reviewNote: "Add a reading after the filter change" });
     expect(sentBack.comments.map((row) => row.body)).toEqual(["Sent back: Add a reading after the filter change"]);
@@ -147,15 +174,39 @@ describe("visit revision, conditional GET and deltas", () => {
     const writes: [string, () => Promise<{ status: number }>][] = [
       ["reading", () => technician.post(`/api/visits/${visitId}/readings`).send(reading(14))],
       ["comment", () => technician.post(`/api/visits/${visitId}/comments`).send({ body: "Checked again" })],
-      ["adjustment", () => technician.post(`/api/visits/${visitId}/adjustments`).send({ kind: "other", description: "Cleaned the coil" })],
-      ["electrical check", () => technician.post(`/api/visits/${visitId}/electrical-checks`).send({ target: "supply", supplyVolts: [415, 414, 416] })],
-      ["CSV import", () =>
-        technician
-          .post(`/api/visits/${visitId}/readings/import`)
-          .field("circuit", "1")
-          .field("dayStart", "2026-12-01T00:00:00+11:00")
-          .field("mode", "all")
-          .attach("file", Buffer.from(["Time,Suction pressure kPa,Suction temp C,Liquid pressure kPa,Liquid temp C", `10:00,${gauge(6, "dew")},12,${gauge(42, "bubble")},37`].join("\n")), "log.csv")],
+      [
+        "adjustment",
+        () =>
+          technician
+            .post(`/api/visits/${visitId}/adjustments`)
+            .send({ kind: "other", description: "Cleaned the coil" }),
+      ],
+      [
+        "electrical check",
+        () =>
+          technician
+            .post(`/api/visits/${visitId}/electrical-checks`)
+            .send({ target: "supply", supplyVolts: [415, 414, 416] }),
+      ],
+      [
+        "CSV import",
+        () =>
+          technician
+            .post(`/api/visits/${visitId}/readings/import`)
+            .field("circuit", "1")
+            .field("dayStart", "2026-12-01T00:00:00+11:00")
+            .field("mode", "all")
+            .attach(
+              "file",
+              Buffer.from(
+                [
+                  "Time,Suction pressure kPa,Suction temp C,Liquid pressure kPa,Liquid temp C",
+                  `10:00,${gauge(6, "dew")},12,${gauge(42, "bubble")},37`,
+                ].join("\n"),
+              ),
+              "log.csv",
+            ),
+      ],
     ];
     for (const [what, write] of writes) {
       const before = await currentRevision();
@@ -172,8 +223,16 @@ describe("visit revision, conditional GET and deltas", () => {
 
   it("sends the imported readings in the delta", async () => {
     const before = await currentRevision();
-    const csv = ["Time,Suction pressure kPa,Suction temp C,Liquid pressure kPa,Liquid temp C", ...[0, 1, 2].map((minute) => `09:0${minute},${gauge(6, "dew")},12,${gauge(42, "bubble")},37`)].join("\n");
-    const response = await technician.post(`/api/visits/${visitId}/readings/import`).field("circuit", "1").field("dayStart", "2026-12-01T00:00:00+11:00").field("mode", "all").attach("file", Buffer.from(csv), "log.csv");
+    const csv = [
+      "Time,Suction pressure kPa,Suction temp C,Liquid pressure kPa,Liquid temp C",
+      ...[0, 1, 2].map((minute) => `09:0${minute},${gauge(6, "dew")},12,${gauge(42, "bubble")},37`),
+    ].join("\n");
+    const response = await technician
+      .post(`/api/visits/${visitId}/readings/import`)
+      .field("circuit", "1")
+      .field("dayStart", "2026-12-01T00:00:00+11:00")
+      .field("mode", "all")
+      .attach("file", Buffer.from(csv), "log.csv");
     expect(response.status).toBe(201);
     const delta = await deltaSince(before);
     expect(delta.readings).toHaveLength(3);
@@ -183,7 +242,11 @@ describe("visit revision, conditional GET and deltas", () => {
   it("sends the whole visit for a since it cannot build on: unknown, malformed or ahead of the visit", async () => {
     const current = await currentRevision();
     const [epoch, revision, fingerprint] = current.split(".");
-    for (const since of ["nonsense", `other.${revision}.${fingerprint}`, `${epoch}.${Number(revision) + 5}.${fingerprint}`]) {
+    for (const since of [
+      "nonsense",
+      `other.${revision}.${fingerprint}`,
+      `${epoch}.${Number(revision) + 5}.${fingerprint}`,
+    ]) {
       const response = await detail(`?since=${encodeURIComponent(since)}`);
       expect(response.status, since).toBe(200);
       expect(response.body.visit.readings.length, since).toBeGreaterThan(0);
@@ -192,7 +255,9 @@ describe("visit revision, conditional GET and deltas", () => {
 
   it("changes the ETag when the unit is renamed, though the visit itself was not written", async () => {
     const before = await detail();
-    await testApp.database.db.execute(sql`update equipment set name = 'Rooftop unit RTU-1 (renamed)' where id = ${before.body.visit.equipmentId}`);
+    await testApp.database.db.execute(
+      sql`update equipment set name = 'Rooftop unit RTU-1 (renamed)' where id = ${before.body.visit.equipmentId}`,
+    );
     const after = await detail("", { "If-None-Match": before.headers.etag });
     expect(after.status).toBe(200);
     expect(after.body.visit.equipmentName).toBe("Rooftop unit RTU-1 (renamed)");

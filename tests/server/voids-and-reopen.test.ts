@@ -128,12 +128,19 @@ describe("records are corrected by voiding, never lost; closed visits take nothi
         .post(`/api/visits/${visitId}/adjustments`)
         .send({ circuit: 1, kind: "charge-added", description: "Added 0.4 kg", amountKg: 0.4, cylinderId: supply.id })
     ).body.adjustment;
-    expect((await technician.get(`/api/visits/${visitId}/refrigerant`)).body.runLogCheck).toMatchObject({ runLogInKg: 0.4, registerInKg: 0.4 });
+    expect((await technician.get(`/api/visits/${visitId}/refrigerant`)).body.runLogCheck).toMatchObject({
+      runLogInKg: 0.4,
+      registerInKg: 0.4,
+    });
     expect(
       (await voidIt(technician, { kind: "adjustment", recordId: adjustment.id, reason: "Logged on the wrong unit" }))
         .status,
     ).toBe(201);
-    expect((await technician.get(`/api/visits/${visitId}/refrigerant`)).body.runLogCheck).toMatchObject({ runLogInKg: 0, registerInKg: 0, agrees: true });
+    expect((await technician.get(`/api/visits/${visitId}/refrigerant`)).body.runLogCheck).toMatchObject({
+      runLogInKg: 0,
+      registerInKg: 0,
+      agrees: true,
+    });
     expect((await visit()).adjustments[0].voided.reason).toBe("Logged on the wrong unit");
   });
 

@@ -18,7 +18,8 @@ export const BELLBIRD = {
 export async function signedIn(app: Express, email: string, password = DEMO_PASSWORD) {
   const agent = request.agent(app);
   const response = await agent.post("/api/auth/sign-in").send({ email, password });
-  if (response.status !== 200) throw new Error(`sign-in as ${email} failed: ${response.status} ${JSON.stringify(response.body)}`);
+  if (response.status !== 200)
+    throw new Error(`sign-in as ${email} failed: ${response.status} ${JSON.stringify(response.body)}`);
   return agent;
 }
 
@@ -37,7 +38,10 @@ export async function signedInBellbird(app: Express): Promise<Record<Role, Await
  * tests count lines from an empty register, so the demo's charge history (which writes register
  * lines) is left out unless a test asks for it.
  */
-export async function seedBellbird(testApp: TestApp, { withChargeHistory = false } = {}): Promise<Record<string, string>> {
+export async function seedBellbird(
+  testApp: TestApp,
+  { withChargeHistory = false } = {},
+): Promise<Record<string, string>> {
   await seedDemoData(testApp.database.db, { withChargeHistory });
   const ids: Record<string, string> = {};
   for (const person of demoPeople) {

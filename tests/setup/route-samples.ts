@@ -13,7 +13,12 @@ export const UNTHROTTLED: Partial<AuthLimits> = {
 };
 
 /** Public routes that end or replace the caller's session: call them with a session of their own. */
-export const SESSION_ROUTES: ReadonlySet<RouteKey> = new Set(["POST /api/auth/sign-out", "POST /api/auth/sign-up", "POST /api/auth/sign-in", "POST /api/invitations/accept"]);
+export const SESSION_ROUTES: ReadonlySet<RouteKey> = new Set([
+  "POST /api/auth/sign-out",
+  "POST /api/auth/sign-up",
+  "POST /api/auth/sign-in",
+  "POST /api/invitations/accept",
+]);
 
 /** A password that passes the rules but is nobody's: a sample never signs anyone in. */
 const SAMPLE_PASSWORD = "evaporator-coil-77";
@@ -28,7 +33,12 @@ const UNKNOWN_TOKEN = "A".repeat(43);
  */
 export function sampleBodies(records: BellbirdRecords): Partial<Record<RouteKey, Record<string, unknown>>> {
   return {
-    "POST /api/auth/sign-up": { name: "Kim Frost", email: "kim@frostline.example", password: SAMPLE_PASSWORD, organisationName: "Frostline" },
+    "POST /api/auth/sign-up": {
+      name: "Kim Frost",
+      email: "kim@frostline.example",
+      password: SAMPLE_PASSWORD,
+      organisationName: "Frostline",
+    },
     "POST /api/auth/sign-in": { email: "nobody@bellbird.example", password: SAMPLE_PASSWORD },
     "POST /api/auth/password-reset/request": { email: "owner@bellbird.example" },
     "POST /api/auth/password-reset/confirm": { token: UNKNOWN_TOKEN, password: SAMPLE_PASSWORD },
@@ -36,12 +46,30 @@ export function sampleBodies(records: BellbirdRecords): Partial<Record<RouteKey,
     "POST /api/invitations": { email: "sample-invitee@bellbird.example", role: "apprentice" },
     "POST /api/invitations/preview": { token: UNKNOWN_TOKEN },
     "POST /api/invitations/accept": { token: UNKNOWN_TOKEN, name: "New Person", password: SAMPLE_PASSWORD },
-    "PUT /api/profile": { name: "Same Name", preferences: { temperatureUnit: "C", pressureUnit: "kPa", atmosphericPressureKPa: 101.325 }, licenceNumber: "ARC-L123" },
+    "PUT /api/profile": {
+      name: "Same Name",
+      preferences: { temperatureUnit: "C", pressureUnit: "kPa", atmosphericPressureKPa: 101.325 },
+      licenceNumber: "ARC-L123",
+    },
     "PATCH /api/organisation/settings": { evacuationTargetMicrons: 500 },
-    "POST /api/visits/:id/voids": { kind: "reading", recordId: records.readingId, reason: "Typed into the wrong field" },
+    "POST /api/visits/:id/voids": {
+      kind: "reading",
+      recordId: records.readingId,
+      reason: "Typed into the wrong field",
+    },
     "POST /api/cylinders/:id/movements/:movementId/void": { reason: "Logged against the wrong cylinder" },
-    "POST /api/customers": { name: "Sample Customer", contactName: "Ann Lee", contactEmail: "ann@example.com", contactPhone: "0400 000 000" },
-    "POST /api/sites": { customerId: records.customerId, name: "Sample Site", address: "1 Main St\nBellbird", altitudeM: 40 },
+    "POST /api/customers": {
+      name: "Sample Customer",
+      contactName: "Ann Lee",
+      contactEmail: "ann@example.com",
+      contactPhone: "0400 000 000",
+    },
+    "POST /api/sites": {
+      customerId: records.customerId,
+      name: "Sample Site",
+      address: "1 Main St\nBellbird",
+      altitudeM: 40,
+    },
     "POST /api/equipment": {
       siteId: records.siteId,
       name: "Sample unit",
@@ -57,7 +85,14 @@ export function sampleBodies(records: BellbirdRecords): Partial<Record<RouteKey,
       phases: 1,
     },
     "PUT /api/equipment/:id/charge-references/:circuit": {
-      values: { subcoolingK: 5, superheatK: 6, evaporatingTempC: 6, condensingTempC: 42, outdoorAirDryBulbC: 31, returnAirDryBulbC: 25 },
+      values: {
+        subcoolingK: 5,
+        superheatK: 6,
+        evaporatingTempC: 6,
+        condensingTempC: 42,
+        outdoorAirDryBulbC: 31,
+        returnAirDryBulbC: 25,
+      },
       note: "From the commissioning sheet",
     },
     "DELETE /api/equipment/:id/charge-references/:circuit": { reason: "Condenser coil replaced" },
@@ -71,7 +106,12 @@ export function sampleBodies(records: BellbirdRecords): Partial<Record<RouteKey,
       liquidPressureKPa: 1600,
       liquidLineTempC: 37,
     },
-    "POST /api/visits/:id/adjustments": { circuit: 1, kind: "metering", description: "Opened the TXV a quarter turn", at: "2026-07-01T09:40:00Z" },
+    "POST /api/visits/:id/adjustments": {
+      circuit: 1,
+      kind: "metering",
+      description: "Opened the TXV a quarter turn",
+      at: "2026-07-01T09:40:00Z",
+    },
     "POST /api/visits/:id/comments": { body: "Looks fine", readingId: records.readingId },
     "POST /api/visits/:id/review": { action: "submit" },
     "POST /api/visits/:id/report/send": { to: "facilities@example.com" },
@@ -108,12 +148,31 @@ export function sampleBodies(records: BellbirdRecords): Partial<Record<RouteKey,
       holdMinutes: 30,
       note: "Nitrogen",
     },
-    "POST /api/visits/:id/evacuations": { targetMicrons: 500, samples: [{ minutes: 0, microns: 5000 }], note: "Pump on" },
+    "POST /api/visits/:id/evacuations": {
+      targetMicrons: 500,
+      samples: [{ minutes: 0, microns: 5000 }],
+      note: "Pump on",
+    },
     "POST /api/visits/:id/evacuations/:evacuationId/samples": { microns: 400, minutes: 30 },
     "PATCH /api/visits/:id/evacuations/:evacuationId": { isolateNow: true, note: "Valved off" },
-    "POST /api/visits/:id/refrigerant": { kind: "recovered", kg: 0.5, circuit: 1, cylinderId: records.cylinderId, at: "2026-07-01T10:00:00Z", note: "Recovered" },
+    "POST /api/visits/:id/refrigerant": {
+      kind: "recovered",
+      kg: 0.5,
+      circuit: 1,
+      cylinderId: records.cylinderId,
+      at: "2026-07-01T10:00:00Z",
+      note: "Recovered",
+    },
     "PUT /api/visits/:id/refrigerant/charging/:circuit": { lineAdjustmentKg: 0.2 },
-    "POST /api/cylinders": { label: "SAMPLE-1", kind: "recovery", refrigerant: "R407C", waterCapacityKg: 26, tareKg: 14, initialContentsKg: 0, serial: "S1" },
+    "POST /api/cylinders": {
+      label: "SAMPLE-1",
+      kind: "recovery",
+      refrigerant: "R407C",
+      waterCapacityKg: 26,
+      tareKg: 14,
+      initialContentsKg: 0,
+      serial: "S1",
+    },
     "POST /api/cylinders/:id/reclaim": { kg: 0.2, note: "To the reclaimer" },
     "POST /api/cases": CASE_DRAFT,
     "POST /api/cases/from-reading": { readingId: records.readingId },
@@ -121,7 +180,14 @@ export function sampleBodies(records: BellbirdRecords): Partial<Record<RouteKey,
     "PUT /api/cases/:id": CASE_DRAFT,
     "POST /api/attempts": {
       caseId: records.caseId,
-      answers: { evaporatingTempC: 5, condensingTempC: 40, superheatK: 6, subcoolingK: 5, chargeState: "normal", reasoning: "Both on target" },
+      answers: {
+        evaporatingTempC: 5,
+        condensingTempC: 40,
+        superheatK: 6,
+        subcoolingK: 5,
+        chargeState: "normal",
+        reasoning: "Both on target",
+      },
     },
   };
 }

@@ -13,7 +13,7 @@ interface Layer {
   handle?: { stack?: Layer[]; isPermissionGate?: boolean };
 }
 
-const joinPath = (base: string, path: string) => (`${base}/${path}`.replace(/\/+/g, "/").replace(/(.)\/$/, "$1"));
+const joinPath = (base: string, path: string) => `${base}/${path}`.replace(/\/+/g, "/").replace(/(.)\/$/, "$1");
 
 /**
  * Every route the app answers, read from its router stack (Express 5 / router 2.x: a layer's

@@ -22,7 +22,9 @@ export async function startRooftopVisit(agent: Agent, reason: string): Promise<s
  * readings in the past starts its visit before them.
  */
 export async function startVisitAt(testApp: TestApp, visitId: string, startedAt: Date): Promise<void> {
-  await testApp.database.db.execute(sql`update visits set started_at = ${startedAt.toISOString()} where id = ${visitId}`);
+  await testApp.database.db.execute(
+    sql`update visits set started_at = ${startedAt.toISOString()} where id = ${visitId}`,
+  );
 }
 
 /**
@@ -33,7 +35,9 @@ export async function startVisitAt(testApp: TestApp, visitId: string, startedAt:
 export async function readingStore(testApp: TestApp, visitId: string) {
   const db = testApp.database.db;
   const [user] = await db.select().from(users).where(eq(users.email, BELLBIRD.technician));
-  const organisationId = (await db.execute<{ organisation_id: string }>(sql`select organisation_id from visits where id = ${visitId}`)).rows[0]!.organisation_id;
+  const organisationId = (
+    await db.execute<{ organisation_id: string }>(sql`select organisation_id from visits where id = ${visitId}`)
+  ).rows[0]!.organisation_id;
   return {
     row: (input: DiagnosisInput, takenAt: Date, circuit = 1): NewReading => ({
       id: crypto.randomUUID(),
@@ -46,6 +50,7 @@ export async function readingStore(testApp: TestApp, visitId: string) {
       result: diagnose(input),
       recordedBy: user!.id,
     }),
-    store: (rows: NewReading[]) => writeToVisit(db, organisationId, visitId, (tx) => insertReadings(tx, rows, new Map())),
+    store: (rows: NewReading[]) =>
+      writeToVisit(db, organisationId, visitId, (tx) => insertReadings(tx, rows, new Map())),
   };
 }

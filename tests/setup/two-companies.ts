@@ -12,8 +12,20 @@ export type Agent = Awaited<ReturnType<typeof signedIn>>;
 export const CASE_DRAFT = {
   title: "Matrix practice case",
   difficulty: "starter",
-  story: { site: "A small office", equipment: "Wall split", complaint: "Warm in the afternoons", conditions: "32 °C outside" },
-  input: { refrigerant: "R410A", meteringDevice: "txv", suctionPressureKPa: 820, suctionLineTempC: 13, liquidPressureKPa: 2650, liquidLineTempC: 38 },
+  story: {
+    site: "A small office",
+    equipment: "Wall split",
+    complaint: "Warm in the afternoons",
+    conditions: "32 °C outside",
+  },
+  input: {
+    refrigerant: "R410A",
+    meteringDevice: "txv",
+    suctionPressureKPa: 820,
+    suctionLineTempC: 13,
+    liquidPressureKPa: 2650,
+    liquidLineTempC: 38,
+  },
   reasoning: "Superheat and subcooling are both near their targets.",
 };
 
@@ -58,7 +70,13 @@ export async function twoCompanies(testApp: TestApp): Promise<TwoCompanies> {
   const passwordHash = await hashPassword(COLDFRONT_PASSWORD);
   for (const role of ROLES.filter((candidate) => candidate !== "owner")) {
     const email = `${role}@coldfront.example`;
-    await createUser(testApp.database.db, { organisationId: user.organisationId, name: `Coldfront ${role}`, email, role, passwordHash });
+    await createUser(testApp.database.db, {
+      organisationId: user.organisationId,
+      name: `Coldfront ${role}`,
+      email,
+      role,
+      passwordHash,
+    });
     coldfront[role] = await signedIn(testApp.app, email, COLDFRONT_PASSWORD);
   }
 
@@ -67,29 +85,63 @@ export async function twoCompanies(testApp: TestApp): Promise<TwoCompanies> {
     if (response.status >= 300) throw new Error(`${what}: ${response.status} ${JSON.stringify(response.body)}`);
     return response.body;
   };
-  const unit = ok(await technician.get("/api/equipment"), "equipment").equipment.find((candidate: { refrigerant: string }) => candidate.refrigerant === "R407C");
+  const unit = ok(await technician.get("/api/equipment"), "equipment").equipment.find(
+    (candidate: { refrigerant: string }) => candidate.refrigerant === "R407C",
+  );
   const customerId = ok(await technician.get("/api/customers"), "customers").customers[0].id;
   const siteId = ok(await technician.get("/api/sites"), "sites").sites[0].id;
-  const visitId = ok(await technician.post("/api/visits").send({ equipmentId: unit.id, reason: "Matrix visit" }), "visit").visit.id;
+  const visitId = ok(
+    await technician.post("/api/visits").send({ equipmentId: unit.id, reason: "Matrix visit" }),
+    "visit",
+  ).visit.id;
   const readingId = ok(
-    await technician.post(`/api/visits/${visitId}/readings`).send({ circuit: 1, suctionPressureKPa: 350, suctionLineTempC: 12, liquidPressureKPa: 1600, liquidLineTempC: 37 }),
+    await technician.post(`/api/visits/${visitId}/readings`).send({
+      circuit: 1,
+      suctionPressureKPa: 350,
+      suctionLineTempC: 12,
+      liquidPressureKPa: 1600,
+      liquidLineTempC: 37,
+    }),
     "reading",
   ).reading.id;
   const cylinderId = ok(
-    await technician.post("/api/cylinders").send({ label: "MATRIX-REC", kind: "recovery", refrigerant: "R407C", waterCapacityKg: 26, tareKg: 14 }),
+    await technician
+      .post("/api/cylinders")
+      .send({ label: "MATRIX-REC", kind: "recovery", refrigerant: "R407C", waterCapacityKg: 26, tareKg: 14 }),
     "cylinder",
   ).cylinder.id;
-  ok(await technician.post(`/api/visits/${visitId}/refrigerant`).send({ kind: "recovered", kg: 1, circuit: 1, cylinderId }), "movement");
-  const png = await sharp({ create: { width: 40, height: 30, channels: 3, background: "#88aacc" } }).png().toBuffer();
-  const photoId = ok(await technician.post(`/api/visits/${visitId}/photos`).attach("photo", png, "plate.png"), "photo").photo.id;
-  const evacuationId = ok(await technician.post(`/api/visits/${visitId}/evacuations`).send({ samples: [{ minutes: 0, microns: 5000 }] }), "evacuation").evacuation.id;
-  const invitationId = ok(await owner.post("/api/invitations").send({ email: "matrix-invitee@bellbird.example", role: "apprentice" }), "invitation").invitation.id;
+  ok(
+    await technician
+      .post(`/api/visits/${visitId}/refrigerant`)
+      .send({ kind: "recovered", kg: 1, circuit: 1, cylinderId }),
+    "movement",
+  );
+  const png = await sharp({ create: { width: 40, height: 30, channels: 3, background: "#88aacc" } })
+    .png()
+    .toBuffer();
+  const photoId = ok(await technician.post(`/api/visits/${visitId}/photos`).attach("photo", png, "plate.png"), "photo")
+    .photo.id;
+  const evacuationId = ok(
+    await technician.post(`/api/visits/${visitId}/evacuations`).send({ samples: [{ minutes: 0, microns: 5000 }] }),
+    "evacuation",
+  ).evacuation.id;
+  const invitationId = ok(
+    await owner.post("/api/invitations").send({ email: "matrix-invitee@bellbird.example", role: "apprentice" }),
+    "invitation",
+  ).invitation.id;
   const caseId = ok(await senior.post("/api/cases").send(CASE_DRAFT), "case").case.id;
   ok(await senior.post(`/api/cases/${caseId}/publish`).set("If-Match", '"1"'), "publish");
   const attemptId = ok(
     await apprentice.post("/api/attempts").send({
       caseId,
-      answers: { evaporatingTempC: 5, condensingTempC: 40, superheatK: 6, subcoolingK: 5, chargeState: "normal", reasoning: "Both on target" },
+      answers: {
+        evaporatingTempC: 5,
+        condensingTempC: 40,
+        superheatK: 6,
+        subcoolingK: 5,
+        chargeState: "normal",
+        reasoning: "Both on target",
+      },
     }),
     "attempt",
   ).attempt.id;

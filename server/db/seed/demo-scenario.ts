@@ -62,8 +62,22 @@ export const demoEquipment: DemoEquipment[] = [
     serial: "SA21-44817",
     refrigerant: "R407C",
     circuits: [
-      { number: 1, factoryChargeKg: 4.2, meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, liquidLineLengthM: null },
-      { number: 2, factoryChargeKg: 4.2, meteringDevice: "txv", targetSuperheatK: 6, targetSubcoolingK: 5, liquidLineLengthM: null },
+      {
+        number: 1,
+        factoryChargeKg: 4.2,
+        meteringDevice: "txv",
+        targetSuperheatK: 6,
+        targetSubcoolingK: 5,
+        liquidLineLengthM: null,
+      },
+      {
+        number: 2,
+        factoryChargeKg: 4.2,
+        meteringDevice: "txv",
+        targetSuperheatK: 6,
+        targetSubcoolingK: 5,
+        liquidLineLengthM: null,
+      },
     ],
     compressorRlaA: 11.8,
     compressorLraA: 74,
@@ -82,7 +96,16 @@ export const demoEquipment: DemoEquipment[] = [
     model: "KW-35R32",
     serial: "KW3522-0931",
     refrigerant: "R32",
-    circuits: [{ number: 1, factoryChargeKg: 0.85, meteringDevice: "eev", targetSuperheatK: null, targetSubcoolingK: null, liquidLineLengthM: 6 }],
+    circuits: [
+      {
+        number: 1,
+        factoryChargeKg: 0.85,
+        meteringDevice: "eev",
+        targetSuperheatK: null,
+        targetSubcoolingK: null,
+        liquidLineLengthM: 6,
+      },
+    ],
     compressorRlaA: 6.4,
     compressorLraA: 28,
     fanFlaA: 0.4,
@@ -100,7 +123,16 @@ export const demoEquipment: DemoEquipment[] = [
     model: "PB-CR2",
     serial: "PB19-2260",
     refrigerant: "R404A",
-    circuits: [{ number: 1, factoryChargeKg: 2.6, meteringDevice: "txv", targetSuperheatK: 5.5, targetSubcoolingK: 4, liquidLineLengthM: 9 }],
+    circuits: [
+      {
+        number: 1,
+        factoryChargeKg: 2.6,
+        meteringDevice: "txv",
+        targetSuperheatK: 5.5,
+        targetSubcoolingK: 4,
+        liquidLineLengthM: 9,
+      },
+    ],
     compressorRlaA: 7.9,
     compressorLraA: 46,
     fanFlaA: 0.9,
@@ -125,6 +157,22 @@ export const demoCylinders: {
   tareKg: number;
   initialContentsKg: number;
 }[] = [
-  { label: "BM-REC-07", serial: "RC12-30871", kind: "recovery", refrigerant: "R407C", waterCapacityKg: 12, tareKg: 7.4, initialContentsKg: 5.2 },
-  { label: "BM-407C-N3", serial: "NX10-55214", kind: "new", refrigerant: "R407C", waterCapacityKg: 15, tareKg: 6.1, initialContentsKg: 10 },
+  {
+    label: "BM-REC-07",
+    serial: "RC12-30871",
+    kind: "recovery",
+    refrigerant: "R407C",
+    waterCapacityKg: 12,
+    tareKg: 7.4,
+    initialContentsKg: 5.2,
+  },
+  {
+    label: "BM-407C-N3",
+    serial: "NX10-55214",
+    kind: "new",
+    refrigerant: "R407C",
+    waterCapacityKg: 15,
+    tareKg: 6.1,
+    initialContentsKg: 10,
+  },
 ];

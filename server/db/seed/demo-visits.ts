@@ -9,7 +9,12 @@
  * the same engine as a live reading, with the circuit's correct charge and reference point as
  * the server gives them.
  */
-import { atmosphericPressureAtAltitude, diagnose, parseDiagnosisInput, saturationPressure } from "@shared/engine/index.ts";
+import {
+  atmosphericPressureAtAltitude,
+  diagnose,
+  parseDiagnosisInput,
+  saturationPressure,
+} from "@shared/engine/index.ts";
 import type { Application, ChargeReference, DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import { prepareRefrigerant } from "../../diagnosis/diagnose-on-server.ts";
 import { calibrateAfterWeighIn } from "../../visits/calibrate-after-weigh-in.ts";
@@ -17,14 +22,30 @@ import { standingChargeReference } from "../charge-references.ts";
 import { demoSite } from "./demo-scenario.ts";
 import type { Database } from "../client.ts";
 import { MOVEMENT_DIRECTION } from "@shared/schemas/register.ts";
-import { adjustments, circuitCharges, cylinders as cylinderTable, readings, refrigerantMovements, visitComments, visitTechnicians, visits } from "../schema.ts";
+import {
+  adjustments,
+  circuitCharges,
+  cylinders as cylinderTable,
+  readings,
+  refrigerantMovements,
+  visitComments,
+  visitTechnicians,
+  visits,
+} from "../schema.ts";
 
 type Unit = {
   id: string;
   refrigerant: string;
   name: string;
   application: Application;
-  circuits: { number: number; factoryChargeKg: number; meteringDevice: DiagnosisInput["meteringDevice"]; targetSuperheatK?: number | null; targetSubcoolingK?: number | null; liquidLineLengthM?: number | null }[];
+  circuits: {
+    number: number;
+    factoryChargeKg: number;
+    meteringDevice: DiagnosisInput["meteringDevice"];
+    targetSuperheatK?: number | null;
+    targetSubcoolingK?: number | null;
+    liquidLineLengthM?: number | null;
+  }[];
   compressorRlaA: number | null;
 };
 type People = Record<"owner" | "senior" | "technician" | "technician2", string>;
@@ -85,7 +106,15 @@ function readingRows(
       ...(chargeReference ? { chargeReference } : {}),
       ...air,
     } satisfies DiagnosisInput);
-    return { organisationId, visitId, circuit, takenAt: new Date(start + reading.minutes * MINUTE), input, result: diagnose(input, { withMeasuredCycle: true }), recordedBy };
+    return {
+      organisationId,
+      visitId,
+      circuit,
+      takenAt: new Date(start + reading.minutes * MINUTE),
+      input,
+      result: diagnose(input, { withMeasuredCycle: true }),
+      recordedBy,
+    };
   });
 }
 
@@ -110,7 +139,12 @@ export async function seedDemoVisits(
   // Judged as every run-log reading is: with the measured cycle's compressor figures.
   await Promise.all([prepareRefrigerant(rooftop.refrigerant), prepareRefrigerant(split.refrigerant)]);
   const rooftopAir = { returnAirDryBulbC: 25, returnAirWetBulbC: 18, supplyAirDryBulbC: 14, outdoorAirDryBulbC: 31 };
-  const movement = (visitId: string, technicianId: string, at: number, values: { kind: "recovered" | "reused" | "added-new"; kg: number; cylinderId: string | null; note: string }) => ({
+  const movement = (
+    visitId: string,
+    technicianId: string,
+    at: number,
+    values: { kind: "recovered" | "reused" | "added-new"; kg: number; cylinderId: string | null; note: string },
+  ) => ({
     organisationId,
     visitId,
     equipmentId: rooftop.id,
@@ -163,19 +197,84 @@ export async function seedDemoVisits(
       .returning({ id: visits.id });
     await db.insert(visitTechnicians).values({ visitId: drier.id, userId: people.technician2 });
     await insertChargeEntries([
-      movement(drier.id, people.technician2, drierStart + 30 * MINUTE, { kind: "recovered", kg: 4.2, cylinderId: cylinders.recovery, note: "Whole charge recovered before replacing the drier" }),
-      movement(drier.id, people.technician2, drierStart + 150 * MINUTE, { kind: "reused", kg: 4.2, cylinderId: cylinders.recovery, note: "Nameplate charge weighed back in as liquid" }),
+      movement(drier.id, people.technician2, drierStart + 30 * MINUTE, {
+        kind: "recovered",
+        kg: 4.2,
+        cylinderId: cylinders.recovery,
+        note: "Whole charge recovered before replacing the drier",
+      }),
+      movement(drier.id, people.technician2, drierStart + 150 * MINUTE, {
+        kind: "reused",
+        kg: 4.2,
+        cylinderId: cylinders.recovery,
+        note: "Nameplate charge weighed back in as liquid",
+      }),
     ]);
-    await db.insert(circuitCharges).values({ organisationId, visitId: drier.id, circuit: 1, lineAdjustmentKg: 0, recordedBy: people.technician2, createdAt: new Date(drierStart + 152 * MINUTE), updatedAt: new Date(drierStart + 152 * MINUTE) });
+    await db.insert(circuitCharges).values({
+      organisationId,
+      visitId: drier.id,
+      circuit: 1,
+      lineAdjustmentKg: 0,
+      recordedBy: people.technician2,
+      createdAt: new Date(drierStart + 152 * MINUTE),
+      updatedAt: new Date(drierStart + 152 * MINUTE),
+    });
     await db.insert(readings).values(
-      readingRows(rooftop, 1, drier.id, organisationId, people.technician2, drierStart + 160 * MINUTE, [
-        { minutes: 0, evaporatingDewC: 5.5, suctionLineTempC: 12.5, condensingBubbleC: 41.5, liquidLineTempC: 37.5, dischargeLineTempC: 84, runMinutes: 10 },
-        { minutes: 5, evaporatingDewC: 6, suctionLineTempC: 12.1, condensingBubbleC: 42, liquidLineTempC: 37, dischargeLineTempC: 82, runMinutes: 15 },
-        { minutes: 10, evaporatingDewC: 6, suctionLineTempC: 12, condensingBubbleC: 42, liquidLineTempC: 37, dischargeLineTempC: 82, runMinutes: 20 },
-        { minutes: 15, evaporatingDewC: 6, suctionLineTempC: 12, condensingBubbleC: 42, liquidLineTempC: 37.1, dischargeLineTempC: 81, runMinutes: 25 },
-      ], rooftopAir),
+      readingRows(
+        rooftop,
+        1,
+        drier.id,
+        organisationId,
+        people.technician2,
+        drierStart + 160 * MINUTE,
+        [
+          {
+            minutes: 0,
+            evaporatingDewC: 5.5,
+            suctionLineTempC: 12.5,
+            condensingBubbleC: 41.5,
+            liquidLineTempC: 37.5,
+            dischargeLineTempC: 84,
+            runMinutes: 10,
+          },
+          {
+            minutes: 5,
+            evaporatingDewC: 6,
+            suctionLineTempC: 12.1,
+            condensingBubbleC: 42,
+            liquidLineTempC: 37,
+            dischargeLineTempC: 82,
+            runMinutes: 15,
+          },
+          {
+            minutes: 10,
+            evaporatingDewC: 6,
+            suctionLineTempC: 12,
+            condensingBubbleC: 42,
+            liquidLineTempC: 37,
+            dischargeLineTempC: 82,
+            runMinutes: 20,
+          },
+          {
+            minutes: 15,
+            evaporatingDewC: 6,
+            suctionLineTempC: 12,
+            condensingBubbleC: 42,
+            liquidLineTempC: 37.1,
+            dischargeLineTempC: 81,
+            runMinutes: 25,
+          },
+        ],
+        rooftopAir,
+      ),
     );
-    await calibrateAfterWeighIn(db, organisationId, { visitId: drier.id, equipmentId: rooftop.id, circuit: 1, actorId: people.technician2, at: new Date(drierStart + 175 * MINUTE) });
+    await calibrateAfterWeighIn(db, organisationId, {
+      visitId: drier.id,
+      equipmentId: rooftop.id,
+      circuit: 1,
+      actorId: people.technician2,
+      at: new Date(drierStart + 175 * MINUTE),
+    });
   }
   const circuitOneReference = await standingChargeReference(db, organisationId, rooftop.id, 1);
 
@@ -206,11 +305,44 @@ export async function seedDemoVisits(
     recordedBy: people.technician2,
   });
   await db.insert(readings).values(
-    readingRows(rooftop, 2, repair.id, organisationId, people.technician2, repairStart + 60 * MINUTE, [
-      { minutes: 0, evaporatingDewC: 6, suctionLineTempC: 12.5, condensingBubbleC: 44, liquidLineTempC: 39, dischargeLineTempC: 84, runMinutes: 12 },
-      { minutes: 6, evaporatingDewC: 6, suctionLineTempC: 12.2, condensingBubbleC: 43, liquidLineTempC: 38, dischargeLineTempC: 82, runMinutes: 18 },
-      { minutes: 12, evaporatingDewC: 6, suctionLineTempC: 12, condensingBubbleC: 43, liquidLineTempC: 38, dischargeLineTempC: 81, runMinutes: 24 },
-    ], { ...rooftopAir, outdoorAirDryBulbC: 34 }),
+    readingRows(
+      rooftop,
+      2,
+      repair.id,
+      organisationId,
+      people.technician2,
+      repairStart + 60 * MINUTE,
+      [
+        {
+          minutes: 0,
+          evaporatingDewC: 6,
+          suctionLineTempC: 12.5,
+          condensingBubbleC: 44,
+          liquidLineTempC: 39,
+          dischargeLineTempC: 84,
+          runMinutes: 12,
+        },
+        {
+          minutes: 6,
+          evaporatingDewC: 6,
+          suctionLineTempC: 12.2,
+          condensingBubbleC: 43,
+          liquidLineTempC: 38,
+          dischargeLineTempC: 82,
+          runMinutes: 18,
+        },
+        {
+          minutes: 12,
+          evaporatingDewC: 6,
+          suctionLineTempC: 12,
+          condensingBubbleC: 43,
+          liquidLineTempC: 38,
+          dischargeLineTempC: 81,
+          runMinutes: 24,
+        },
+      ],
+      { ...rooftopAir, outdoorAirDryBulbC: 34 },
+    ),
   );
 
   // 2. Yesterday: waiting room warm; circuit 1 short of charge, leak at the liquid-port valve
@@ -232,40 +364,155 @@ export async function seedDemoVisits(
   await db.insert(visitTechnicians).values({ visitId: leak.id, userId: people.technician });
   const firstRead = leakStart + 20 * MINUTE;
   await db.insert(readings).values(
-    readingRows(rooftop, 1, leak.id, organisationId, people.technician, firstRead, [
-      { minutes: 0, evaporatingDewC: 0, suctionLineTempC: 13, condensingBubbleC: 37, liquidLineTempC: 36.5, dischargeLineTempC: 98, runMinutes: 25 },
-      { minutes: 5, evaporatingDewC: 0, suctionLineTempC: 13.2, condensingBubbleC: 37, liquidLineTempC: 36.6, dischargeLineTempC: 99, runMinutes: 30 },
-    ], rooftopAir, circuitOneReference),
+    readingRows(
+      rooftop,
+      1,
+      leak.id,
+      organisationId,
+      people.technician,
+      firstRead,
+      [
+        {
+          minutes: 0,
+          evaporatingDewC: 0,
+          suctionLineTempC: 13,
+          condensingBubbleC: 37,
+          liquidLineTempC: 36.5,
+          dischargeLineTempC: 98,
+          runMinutes: 25,
+        },
+        {
+          minutes: 5,
+          evaporatingDewC: 0,
+          suctionLineTempC: 13.2,
+          condensingBubbleC: 37,
+          liquidLineTempC: 36.6,
+          dischargeLineTempC: 99,
+          runMinutes: 30,
+        },
+      ],
+      rooftopAir,
+      circuitOneReference,
+    ),
   );
   // The kilograms (3.1 kg recovered, 3.1 kg reused, 1.1 kg new) are the register lines below,
   // each with its own run-log entry; this line says what was done, without a second figure.
   await db.insert(adjustments).values([
-    { organisationId, visitId: leak.id, circuit: 1, at: new Date(firstRead + 12 * MINUTE), kind: "other", description: "Leak found at liquid-port valve core (bubble test); charge recovered, core replaced, evacuated", recordedBy: people.technician },
+    {
+      organisationId,
+      visitId: leak.id,
+      circuit: 1,
+      at: new Date(firstRead + 12 * MINUTE),
+      kind: "other",
+      description: "Leak found at liquid-port valve core (bubble test); charge recovered, core replaced, evacuated",
+      recordedBy: people.technician,
+    },
   ]);
   if (withChargeHistory) {
     // Lee brought the recovery machine and the part-used cylinder from the van, and kept the register lines.
     await db.insert(visitTechnicians).values({ visitId: leak.id, userId: people.technician2 });
     const [van] = await db
       .insert(cylinderTable)
-      .values({ organisationId, label: "BM-407C-N2", serial: "NX10-51877", kind: "new", refrigerant: rooftop.refrigerant, waterCapacityKg: 15, tareKg: 6.1, initialContentsKg: 2.5 })
+      .values({
+        organisationId,
+        label: "BM-407C-N2",
+        serial: "NX10-51877",
+        kind: "new",
+        refrigerant: rooftop.refrigerant,
+        waterCapacityKg: 15,
+        tareKg: 6.1,
+        initialContentsKg: 2.5,
+      })
       .returning({ id: cylinderTable.id });
     await insertChargeEntries([
-      movement(leak.id, people.technician2, firstRead + 8 * MINUTE, { kind: "recovered", kg: 3.1, cylinderId: cylinders.recovery, note: "Recovered and weighed: 1.1 kg short of the nameplate" }),
-      movement(leak.id, people.technician2, firstRead + 28 * MINUTE, { kind: "reused", kg: 3.1, cylinderId: cylinders.recovery, note: "Recovered charge weighed back in" }),
-      movement(leak.id, people.technician2, firstRead + 30 * MINUTE, { kind: "added-new", kg: 1.1, cylinderId: van.id, note: "Made up to the 4.2 kg nameplate charge" }),
+      movement(leak.id, people.technician2, firstRead + 8 * MINUTE, {
+        kind: "recovered",
+        kg: 3.1,
+        cylinderId: cylinders.recovery,
+        note: "Recovered and weighed: 1.1 kg short of the nameplate",
+      }),
+      movement(leak.id, people.technician2, firstRead + 28 * MINUTE, {
+        kind: "reused",
+        kg: 3.1,
+        cylinderId: cylinders.recovery,
+        note: "Recovered charge weighed back in",
+      }),
+      movement(leak.id, people.technician2, firstRead + 30 * MINUTE, {
+        kind: "added-new",
+        kg: 1.1,
+        cylinderId: van.id,
+        note: "Made up to the 4.2 kg nameplate charge",
+      }),
     ]);
-    await db.insert(circuitCharges).values({ organisationId, visitId: leak.id, circuit: 1, lineAdjustmentKg: 0, recordedBy: people.technician, createdAt: new Date(firstRead + 31 * MINUTE), updatedAt: new Date(firstRead + 31 * MINUTE) });
+    await db.insert(circuitCharges).values({
+      organisationId,
+      visitId: leak.id,
+      circuit: 1,
+      lineAdjustmentKg: 0,
+      recordedBy: people.technician,
+      createdAt: new Date(firstRead + 31 * MINUTE),
+      updatedAt: new Date(firstRead + 31 * MINUTE),
+    });
   }
   await db.insert(readings).values(
-    readingRows(rooftop, 1, leak.id, organisationId, people.technician, firstRead + 42 * MINUTE, [
-      { minutes: 0, evaporatingDewC: 4, suctionLineTempC: 11.5, condensingBubbleC: 41, liquidLineTempC: 37.5, dischargeLineTempC: 88, runMinutes: 12 },
-      { minutes: 5, evaporatingDewC: 5.5, suctionLineTempC: 11.8, condensingBubbleC: 42, liquidLineTempC: 37.2, dischargeLineTempC: 84, runMinutes: 17 },
-      { minutes: 10, evaporatingDewC: 6, suctionLineTempC: 12, condensingBubbleC: 42, liquidLineTempC: 37, dischargeLineTempC: 82, runMinutes: 22 },
-      { minutes: 15, evaporatingDewC: 6, suctionLineTempC: 12.1, condensingBubbleC: 42, liquidLineTempC: 37, dischargeLineTempC: 82, runMinutes: 27 },
-    ], rooftopAir, circuitOneReference),
+    readingRows(
+      rooftop,
+      1,
+      leak.id,
+      organisationId,
+      people.technician,
+      firstRead + 42 * MINUTE,
+      [
+        {
+          minutes: 0,
+          evaporatingDewC: 4,
+          suctionLineTempC: 11.5,
+          condensingBubbleC: 41,
+          liquidLineTempC: 37.5,
+          dischargeLineTempC: 88,
+          runMinutes: 12,
+        },
+        {
+          minutes: 5,
+          evaporatingDewC: 5.5,
+          suctionLineTempC: 11.8,
+          condensingBubbleC: 42,
+          liquidLineTempC: 37.2,
+          dischargeLineTempC: 84,
+          runMinutes: 17,
+        },
+        {
+          minutes: 10,
+          evaporatingDewC: 6,
+          suctionLineTempC: 12,
+          condensingBubbleC: 42,
+          liquidLineTempC: 37,
+          dischargeLineTempC: 82,
+          runMinutes: 22,
+        },
+        {
+          minutes: 15,
+          evaporatingDewC: 6,
+          suctionLineTempC: 12.1,
+          condensingBubbleC: 42,
+          liquidLineTempC: 37,
+          dischargeLineTempC: 82,
+          runMinutes: 27,
+        },
+      ],
+      rooftopAir,
+      circuitOneReference,
+    ),
   );
   // Settled again on the new charge: this weigh-in becomes the circuit's reference point.
-  if (withChargeHistory) await calibrateAfterWeighIn(db, organisationId, { visitId: leak.id, equipmentId: rooftop.id, circuit: 1, actorId: people.technician, at: new Date(firstRead + 58 * MINUTE) });
+  if (withChargeHistory)
+    await calibrateAfterWeighIn(db, organisationId, {
+      visitId: leak.id,
+      equipmentId: rooftop.id,
+      circuit: 1,
+      actorId: people.technician,
+      at: new Date(firstRead + 58 * MINUTE),
+    });
   await db.insert(visitComments).values({
     organisationId,
     visitId: leak.id,
@@ -278,12 +525,35 @@ export async function seedDemoVisits(
   const checkStart = now - 25 * MINUTE;
   const [check] = await db
     .insert(visits)
-    .values({ organisationId, equipmentId: split.id, reason: "Quarterly check of the server cupboard split", createdBy: people.technician, startedAt: new Date(checkStart) })
+    .values({
+      organisationId,
+      equipmentId: split.id,
+      reason: "Quarterly check of the server cupboard split",
+      createdBy: people.technician,
+      startedAt: new Date(checkStart),
+    })
     .returning({ id: visits.id });
   await db.insert(visitTechnicians).values({ visitId: check.id, userId: people.technician });
   await db.insert(readings).values(
-    readingRows(split, 1, check.id, organisationId, people.technician, checkStart + 15 * MINUTE, [
-      { minutes: 0, evaporatingDewC: 8, suctionLineTempC: 13, condensingBubbleC: 40, liquidLineTempC: 35, dischargeLineTempC: 72, runMinutes: 15 },
-    ], { returnAirDryBulbC: 23, returnAirRelativeHumidity: 45, supplyAirDryBulbC: 12, outdoorAirDryBulbC: 28 }),
+    readingRows(
+      split,
+      1,
+      check.id,
+      organisationId,
+      people.technician,
+      checkStart + 15 * MINUTE,
+      [
+        {
+          minutes: 0,
+          evaporatingDewC: 8,
+          suctionLineTempC: 13,
+          condensingBubbleC: 40,
+          liquidLineTempC: 35,
+          dischargeLineTempC: 72,
+          runMinutes: 15,
+        },
+      ],
+      { returnAirDryBulbC: 23, returnAirRelativeHumidity: 45, supplyAirDryBulbC: 12, outdoorAirDryBulbC: 28 },
+    ),
   );
 }

@@ -19,7 +19,10 @@ import { seedDemoVisits, type DemoVisitOptions } from "./demo-visits.ts";
  * install opens on something to look at and a second start never duplicates it.
  * @returns true when the demo data was written, false when the database was not empty.
  */
-export async function seedDemoData(db: Database, options: Pick<DemoVisitOptions, "withChargeHistory"> = {}): Promise<boolean> {
+export async function seedDemoData(
+  db: Database,
+  options: Pick<DemoVisitOptions, "withChargeHistory"> = {},
+): Promise<boolean> {
   const [{ organisationCount }] = await db.select({ organisationCount: count() }).from(organisations);
   if (organisationCount > 0) return false;
 
@@ -46,12 +49,16 @@ export async function seedDemoData(db: Database, options: Pick<DemoVisitOptions,
       .insert(cylinders)
       .values(demoCylinders.map((cylinder) => ({ ...cylinder, organisationId: organisation.id })))
       .returning({ id: cylinders.id, kind: cylinders.kind, refrigerant: cylinders.refrigerant });
-    const cylinderOf = (kind: string) => stock.find((cylinder) => cylinder.kind === kind && cylinder.refrigerant === "R407C")!.id;
+    const cylinderOf = (kind: string) =>
+      stock.find((cylinder) => cylinder.kind === kind && cylinder.refrigerant === "R407C")!.id;
     const person = (email: string) => people.find((row) => row.email === email)!.id;
     await seedDemoVisits(
       tx,
       organisation.id,
-      { rooftop: units.find((unit) => unit.refrigerant === "R407C")!, split: units.find((unit) => unit.refrigerant === "R32")! },
+      {
+        rooftop: units.find((unit) => unit.refrigerant === "R407C")!,
+        split: units.find((unit) => unit.refrigerant === "R32")!,
+      },
       {
         owner: person("owner@bellbird.example"),
         senior: person("senior@bellbird.example"),

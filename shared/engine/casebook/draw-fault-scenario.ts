@@ -1,4 +1,10 @@
-import type { Application, DiagnosisInput, EvidenceState, MeteringDevice, SuctionTempLocation } from "../../schemas/diagnosis.ts";
+import type {
+  Application,
+  DiagnosisInput,
+  EvidenceState,
+  MeteringDevice,
+  SuctionTempLocation,
+} from "../../schemas/diagnosis.ts";
 import { STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
 import { saturationPressure } from "../properties/saturation-pressure.ts";
 import { saturationTemperature } from "../properties/saturation-temperature.ts";
@@ -71,7 +77,11 @@ export function drawFaultScenario(options: FaultScenarioOptions): FaultScenario 
   const units = BAND_UNITS[application];
   const fixed = meteringDevice === "fixed-orifice" || meteringDevice === "capillary";
   const temperatureNoise = () => between(random, [-options.temperatureNoiseK, options.temperatureNoiseK]);
-  const gauge = (absoluteKPa: number) => Math.round(absoluteKPa * (1 + between(random, [-options.pressureNoiseFraction, options.pressureNoiseFraction])) - STANDARD_ATMOSPHERE_KPA);
+  const gauge = (absoluteKPa: number) =>
+    Math.round(
+      absoluteKPa * (1 + between(random, [-options.pressureNoiseFraction, options.pressureNoiseFraction])) -
+        STANDARD_ATMOSPHERE_KPA,
+    );
 
   // Operating point; a fixed orifice in comfort cooling needs a chart target (TRADE.md §1.4).
   const drawConditions = () => {
@@ -84,28 +94,38 @@ export function drawFaultScenario(options: FaultScenarioOptions): FaultScenario 
   let chartTarget: number | null = null;
   if (fixed && point.capillarySuperheatTargetK === null) {
     for (let draw = 0; ; draw += 1) {
-      const target = conditions.returnWet === null ? null : fixedOrificeTargetSuperheat(conditions.returnWet, conditions.outdoor);
+      const target =
+        conditions.returnWet === null ? null : fixedOrificeTargetSuperheat(conditions.returnWet, conditions.outdoor);
       if (target?.status === "ok" && target.targetK >= MIN_CHART_TARGET_K) {
         chartTarget = target.targetK;
         break;
       }
-      if (draw >= MAX_CHART_DRAWS) throw new RangeError(`drawFaultScenario requires conditions with a charging-chart target; none found for ${application}`);
+      if (draw >= MAX_CHART_DRAWS)
+        throw new RangeError(
+          `drawFaultScenario requires conditions with a charging-chart target; none found for ${application}`,
+        );
       conditions = drawConditions();
     }
   }
   const { outdoor, returnDry, returnWet } = conditions;
 
   // Evaporator and condenser.
-  const evaporatorTd = between(random, point.evaporatorTdK) + between(random, move.evaporatorTdUnits) * units.evaporatorTdK;
+  const evaporatorTd =
+    between(random, point.evaporatorTdK) + between(random, move.evaporatorTdUnits) * units.evaporatorTdK;
   const evaporatingMean = returnDry - evaporatorTd;
-  const condensingMean = outdoor + between(random, point.condensingOverAmbientK) + between(random, move.condensingUnits) * units.condensingK;
+  const condensingMean =
+    outdoor + between(random, point.condensingOverAmbientK) + between(random, move.condensingUnits) * units.condensingK;
   const suctionAbs = pressureAtMeanTemperature(refrigerant, evaporatingMean);
   const trueLiquidAbs = pressureAtMeanTemperature(refrigerant, condensingMean);
   const trueBubble = saturationTemperature(refrigerant, trueLiquidAbs, "bubble");
   // Air in the condenser adds its partial pressure: the gauge reads the refrigerant's bubble
   // pressure of a hotter condenser than the liquid is really in.
   const liquidAbs = move.nonCondensableUnits
-    ? saturationPressure(refrigerant, trueBubble + between(random, move.nonCondensableUnits) * units.condensingK, "bubble")
+    ? saturationPressure(
+        refrigerant,
+        trueBubble + between(random, move.nonCondensableUnits) * units.condensingK,
+        "bubble",
+      )
     : trueLiquidAbs;
 
   // Subcooling (true, from the real condensing temperature) and superheat.
@@ -115,21 +135,30 @@ export function drawFaultScenario(options: FaultScenarioOptions): FaultScenario 
   const capillaryTarget = fixed ? point.capillarySuperheatTargetK : null;
   let superheat: number;
   if (move.anyDeviceSuperheatK) superheat = between(random, move.anyDeviceSuperheatK);
-  else if (fixed) superheat = Math.max(0.3, (chartTarget ?? capillaryTarget ?? 5) + between(random, move.fixedSuperheatFromTargetK));
+  else if (fixed)
+    superheat = Math.max(0.3, (chartTarget ?? capillaryTarget ?? 5) + between(random, move.fixedSuperheatFromTargetK));
   else superheat = between(random, move.valveSuperheatK ?? point.valveSuperheatK);
   const lineLength = tenth(between(random, [3, 20]));
   // Read at the outdoor unit, a valve circuit's superheat includes the line set's allowance;
   // read at the evaporator outlet, a fixed device's chart superheat loses it.
   if (options.suctionTempLocation === "outdoor-unit" && !fixed) superheat += suctionLineAllowance(lineLength);
-  if (options.suctionTempLocation === "evaporator-outlet" && fixed) superheat = Math.max(0.3, superheat - suctionLineAllowance(lineLength));
+  if (options.suctionTempLocation === "evaporator-outlet" && fixed)
+    superheat = Math.max(0.3, superheat - suctionLineAllowance(lineLength));
 
   // Air split, current and discharge.
-  const comfortTarget = returnWet === null ? null : targetTemperatureSplit(returnDry, returnWet, STANDARD_ATMOSPHERE_KPA);
-  const split = Math.max(0.3, (comfortTarget ?? 0) + between(random, point.splitK) + between(random, move.splitUnits) * units.splitK);
+  const comfortTarget =
+    returnWet === null ? null : targetTemperatureSplit(returnDry, returnWet, STANDARD_ATMOSPHERE_KPA);
+  const split = Math.max(
+    0.3,
+    (comfortTarget ?? 0) + between(random, point.splitK) + between(random, move.splitUnits) * units.splitK,
+  );
   const rla = Math.round(between(random, [8, 40]));
   const current = rla * between(random, [0.68, 0.88]) * between(random, move.currentFactor);
   const dischargeDew = saturationTemperature(refrigerant, liquidAbs, "dew");
-  const dischargeSuperheat = Math.max(3, between(random, point.dischargeSuperheatK) + between(random, move.dischargeSuperheatAddK));
+  const dischargeSuperheat = Math.max(
+    3,
+    between(random, point.dischargeSuperheatK) + between(random, move.dischargeSuperheatAddK),
+  );
 
   const input: DiagnosisInput = {
     refrigerant,
@@ -149,7 +178,9 @@ export function drawFaultScenario(options: FaultScenarioOptions): FaultScenario 
     ...(returnWet === null ? {} : { returnAirWetBulbC: tenth(Math.min(returnWet + temperatureNoise(), returnDry)) }),
     ...(!fixed && options.nameplateSubcooling ? { targetSubcoolingK: subcoolingTarget } : {}),
     ...(capillaryTarget !== null ? { targetSuperheatK: capillaryTarget } : {}),
-    ...(options.suctionTempLocation ? { suctionTempLocation: options.suctionTempLocation, liquidLineLengthM: lineLength } : {}),
+    ...(options.suctionTempLocation
+      ? { suctionTempLocation: options.suctionTempLocation, liquidLineLengthM: lineLength }
+      : {}),
   };
   return { input, fault };
 }

@@ -241,10 +241,11 @@ export const FAULT_MOVES: Readonly<Record<EvidenceState, FaultMove>> = {
 };
 
 /** Half-widths of each application's bands, K: one "band unit" (see above). */
-export const BAND_UNITS: Readonly<Record<Application, { evaporatorTdK: number; splitK: number; condensingK: number }>> = {
-  "comfort-cooling": { evaporatorTdK: 5, splitK: 2.5, condensingK: 4.2 },
-  "heat-pump": { evaporatorTdK: 5, splitK: 2.5, condensingK: 4.2 },
-  "medium-temperature-refrigeration": { evaporatorTdK: 3, splitK: 2, condensingK: 5.3 },
-  "low-temperature-refrigeration": { evaporatorTdK: 2, splitK: 1.75, condensingK: 5.3 },
-  "process-chilling": { evaporatorTdK: 2.5, splitK: 2, condensingK: 5.3 },
-};
+export const BAND_UNITS: Readonly<Record<Application, { evaporatorTdK: number; splitK: number; condensingK: number }>> =
+  {
+    "comfort-cooling": { evaporatorTdK: 5, splitK: 2.5, condensingK: 4.2 },
+    "heat-pump": { evaporatorTdK: 5, splitK: 2.5, condensingK: 4.2 },
+    "medium-temperature-refrigeration": { evaporatorTdK: 3, splitK: 2, condensingK: 5.3 },
+    "low-temperature-refrigeration": { evaporatorTdK: 2, splitK: 1.75, condensingK: 5.3 },
+    "process-chilling": { evaporatorTdK: 2.5, splitK: 2, condensingK: 5.3 },
+  };

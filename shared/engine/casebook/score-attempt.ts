@@ -67,7 +67,14 @@ export function scoreAttempt(
     const given = answers[field] ?? null;
     const energy = field === "refrigeratingEffectKJPerKg";
     if (want === null || given === null) {
-      marks.push({ field, expected: want, given, correct: want === given, differenceK: null, ...(energy ? { differenceKJPerKg: null } : {}) });
+      marks.push({
+        field,
+        expected: want,
+        given,
+        correct: want === given,
+        differenceK: null,
+        ...(energy ? { differenceKJPerKg: null } : {}),
+      });
       continue;
     }
     const difference = given - want;
@@ -103,6 +110,8 @@ export function scoreAttempt(
     total: marks.length,
     allCorrect: correctCount === marks.length,
     toleranceK,
-    ...(asked.includes("refrigeratingEffectKJPerKg") ? { toleranceKJPerKg: REFRIGERATING_EFFECT_TOLERANCE_KJ_PER_KG } : {}),
+    ...(asked.includes("refrigeratingEffectKJPerKg")
+      ? { toleranceKJPerKg: REFRIGERATING_EFFECT_TOLERANCE_KJ_PER_KG }
+      : {}),
   };
 }

@@ -40,14 +40,22 @@ export const REFILL_SHARE = 0.5;
  * @throws never
  * @example chargeStepChecks([{ at: "…10:20", kg: 0.3 }], points)[0]?.agrees // true when the next estimate moved by about 0.3 kg
  */
-export function chargeStepChecks(steps: readonly ChargeStep[], points: readonly EstimatePoint[], chargeKg?: number): ChargeStepCheck[] {
-  const ordered = [...points].filter((point) => point.chargeDeviation !== null).sort((a, b) => Date.parse(a.takenAt) - Date.parse(b.takenAt));
+export function chargeStepChecks(
+  steps: readonly ChargeStep[],
+  points: readonly EstimatePoint[],
+  chargeKg?: number,
+): ChargeStepCheck[] {
+  const ordered = [...points]
+    .filter((point) => point.chargeDeviation !== null)
+    .sort((a, b) => Date.parse(a.takenAt) - Date.parse(b.takenAt));
   const sortedSteps = [...steps].sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
   return sortedSteps.map((step, index) => {
     const at = Date.parse(step.at);
     const nextAt = index + 1 < sortedSteps.length ? Date.parse(sortedSteps[index + 1]!.at) : Number.POSITIVE_INFINITY;
     const before = ordered.filter((point) => Date.parse(point.takenAt) < at).at(-1)?.chargeDeviation ?? null;
-    const after = ordered.filter((point) => Date.parse(point.takenAt) > at && Date.parse(point.takenAt) < nextAt).at(-1)?.chargeDeviation ?? null;
+    const after =
+      ordered.filter((point) => Date.parse(point.takenAt) > at && Date.parse(point.takenAt) < nextAt).at(-1)
+        ?.chargeDeviation ?? null;
     const refill = chargeKg !== undefined && Math.abs(step.kg) > REFILL_SHARE * chargeKg;
     const expectedKg = before === null || refill ? null : before.kg + step.kg;
     return {

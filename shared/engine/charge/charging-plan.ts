@@ -27,7 +27,11 @@ export interface ChargingPlan {
 
 /** Rounded to the scale's 0.05 kg, as a clean decimal (20 steps per kg). */
 const roundToStep = (kg: number) => Math.round(kg / MIN_STEP_KG) / Math.round(1 / MIN_STEP_KG);
-const kgText = (kg: number) => kg.toFixed(kg < 1 ? 2 : 1).replace(/0$/, "").replace(/\.$/, "");
+const kgText = (kg: number) =>
+  kg
+    .toFixed(kg < 1 ? 2 : 1)
+    .replace(/0$/, "")
+    .replace(/\.$/, "");
 
 /**
  * How to bring an under- or overcharged circuit to its charge: the estimate split into equal
@@ -41,14 +45,20 @@ const kgText = (kg: number) => kg.toFixed(kg < 1 ? 2 : 1).replace(/0$/, "").repl
  * @throws never
  * @example chargingPlan({ kg: -0.6, lowKg: -0.9, highKg: -0.3, basis: "unit-reference", source: "" }, "undercharged", 3, true)?.steps // [0.3, 0.3]
  */
-export function chargingPlan(deviation: ChargeDeviation | null, state: ChargeState, chargeKg: number, zeotropic: boolean): ChargingPlan | null {
+export function chargingPlan(
+  deviation: ChargeDeviation | null,
+  state: ChargeState,
+  chargeKg: number,
+  zeotropic: boolean,
+): ChargingPlan | null {
   if (deviation === null || (state !== "undercharged" && state !== "overcharged")) return null;
   const action = state === "undercharged" ? "add" : "recover";
   const sign = action === "add" ? -1 : 1;
   const kg = sign * deviation.kg;
   if (kg < MIN_STEP_KG) return null;
   // The range turned into "amount to move": for an addition, −highKg is the cautious end.
-  const [lowKg, highKg] = action === "add" ? [-deviation.highKg, -deviation.lowKg] : [deviation.lowKg, deviation.highKg];
+  const [lowKg, highKg] =
+    action === "add" ? [-deviation.highKg, -deviation.lowKg] : [deviation.lowKg, deviation.highKg];
   // No step larger than a tenth of the charge, nor than the range's cautious end (so the first
   // step alone cannot overshoot), and at least two steps.
   const cautiousEnd = Math.max(lowKg, MIN_STEP_KG);

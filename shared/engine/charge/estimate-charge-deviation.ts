@@ -24,7 +24,11 @@ export interface ChargeDeviationEstimate {
   chargeDeviationNote: string | null;
 }
 
-const RECEIVER_APPLICATIONS: ReadonlySet<string> = new Set(["medium-temperature-refrigeration", "low-temperature-refrigeration", "process-chilling"]);
+const RECEIVER_APPLICATIONS: ReadonlySet<string> = new Set([
+  "medium-temperature-refrigeration",
+  "low-temperature-refrigeration",
+  "process-chilling",
+]);
 
 function none(note: string): ChargeDeviationEstimate {
   return { chargeDeviation: null, chargeDeviationNote: note };
@@ -60,18 +64,28 @@ function roundKg(kg: number): number {
 export function estimateChargeDeviation(snapshot: DiagnosisSnapshot): ChargeDeviationEstimate {
   const input = snapshot.input;
   const chargeKg = input.chargeKg;
-  if (chargeKg === undefined) return none("Enter the circuit's correct charge (nameplate plus the line-set adjustment) for an estimate in kilograms");
+  if (chargeKg === undefined)
+    return none(
+      "Enter the circuit's correct charge (nameplate plus the line-set adjustment) for an estimate in kilograms",
+    );
   if (input.meteringDevice === "capillary")
-    return none("No estimate for a capillary circuit: it is critically charged, a few grams move its readings, so weigh the charge in");
+    return none(
+      "No estimate for a capillary circuit: it is critically charged, a few grams move its readings, so weigh the charge in",
+    );
   if (RECEIVER_APPLICATIONS.has(snapshot.application))
-    return none("No estimate for a refrigeration or process circuit: a receiver or flooded condenser holds liquid the subcooling does not show; charge to the sight glass or receiver level, or weigh");
+    return none(
+      "No estimate for a refrigeration or process circuit: a receiver or flooded condenser holds liquid the subcooling does not show; charge to the sight glass or receiver level, or weigh",
+    );
   if (snapshot.transcritical) return none("No estimate above the critical point: a gas cooler has no subcooling");
   const subcooling = snapshot.subcoolingK;
   if (subcooling === null || snapshot.subcoolingExcluded !== null)
-    return none(`No estimate without a valid subcooling${snapshot.subcoolingExcluded ? ` (${snapshot.subcoolingExcluded.reason})` : ""}`);
+    return none(
+      `No estimate without a valid subcooling${snapshot.subcoolingExcluded ? ` (${snapshot.subcoolingExcluded.reason})` : ""}`,
+    );
   const superheat = snapshot.superheatExcluded === null ? snapshot.superheatK : null;
   const family = snapshot.meteringFamily;
-  if (family === "fixed" && superheat === null) return none("No estimate for a fixed metering device without a valid superheat: the charge shows in both");
+  if (family === "fixed" && superheat === null)
+    return none("No estimate for a fixed metering device without a valid superheat: the charge shows in both");
 
   const reference = input.chargeReference;
   let referenceSubcooling: number;
@@ -84,15 +98,23 @@ export function estimateChargeDeviation(snapshot: DiagnosisSnapshot): ChargeDevi
   } else {
     const subcoolingTarget = snapshot.subcoolingTarget;
     const superheatTarget = snapshot.superheatTarget;
-    if (subcoolingTarget === null) return none("No estimate without a subcooling target or the circuit's reference point");
+    if (subcoolingTarget === null)
+      return none("No estimate without a subcooling target or the circuit's reference point");
     if (family === "fixed" && superheatTarget === null)
-      return none(`No estimate for a fixed metering device without its superheat target${snapshot.superheatTargetNote ? ` (${snapshot.superheatTargetNote})` : ""}`);
+      return none(
+        `No estimate for a fixed metering device without its superheat target${snapshot.superheatTargetNote ? ` (${snapshot.superheatTargetNote})` : ""}`,
+      );
     referenceSubcooling = subcoolingTarget.targetK;
     referenceSuperheat = superheatTarget?.targetK ?? null;
     basis = "generic";
   }
 
-  const coefficients: VirtualChargeCoefficients = defaultChargeCoefficients(family, referenceSubcooling, chargeKg, input.liquidLineLengthM);
+  const coefficients: VirtualChargeCoefficients = defaultChargeCoefficients(
+    family,
+    referenceSubcooling,
+    chargeKg,
+    input.liquidLineLengthM,
+  );
   // A valve holds its superheat until it runs out of range: only the superheat above the band moves with the charge.
   let superheatDeviation = 0;
   if (superheat !== null && referenceSuperheat !== null) {
@@ -110,7 +132,10 @@ export function estimateChargeDeviation(snapshot: DiagnosisSnapshot): ChargeDevi
 
   let halfRangeKg: number;
   if (basis === "unit-reference") {
-    halfRangeKg = REFERENCE_RANGE_SHARE * chargeKg + (SENSOR_SUBCOOLING_K / coefficients.kChK) * chargeKg + REFERENCE_SLOPE_UNCERTAINTY * Math.abs(kg);
+    halfRangeKg =
+      REFERENCE_RANGE_SHARE * chargeKg +
+      (SENSOR_SUBCOOLING_K / coefficients.kChK) * chargeKg +
+      REFERENCE_SLOPE_UNCERTAINTY * Math.abs(kg);
     const outdoorNow = input.outdoorAirDryBulbC;
     const outdoorThen = reference?.outdoorAirDryBulbC;
     if (outdoorNow !== undefined && outdoorThen !== null && outdoorThen !== undefined) {

@@ -19,7 +19,11 @@ export interface VirtualChargeCoefficients {
  * @throws {RangeError} when k_ch is not above 0
  * @example virtualChargeFraction(-3, 10, { kChK: 25, superheatToSubcooling: -0.2 }) // -0.2 (20 % short)
  */
-export function virtualChargeFraction(subcoolingDeviationK: number, superheatDeviationK: number, coefficients: VirtualChargeCoefficients): number {
+export function virtualChargeFraction(
+  subcoolingDeviationK: number,
+  superheatDeviationK: number,
+  coefficients: VirtualChargeCoefficients,
+): number {
   if (!(coefficients.kChK > 0)) throw new RangeError(`k_ch must be above 0 K; got ${coefficients.kChK}`);
   return (subcoolingDeviationK + coefficients.superheatToSubcooling * superheatDeviationK) / coefficients.kChK;
 }

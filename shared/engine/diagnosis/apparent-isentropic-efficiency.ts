@@ -26,12 +26,15 @@ import type { DiagnosisSnapshot } from "./types.ts";
 export function apparentIsentropicEfficiency(snapshot: DiagnosisSnapshot): number | null {
   const refrigerant = snapshot.input.refrigerant;
   const dischargeLineTempC = snapshot.dischargeLineTempC;
-  if (dischargeLineTempC === null || snapshot.transcritical || snapshot.superheatK === null || snapshot.superheatK < 0) return null;
+  if (dischargeLineTempC === null || snapshot.transcritical || snapshot.superheatK === null || snapshot.superheatK < 0)
+    return null;
   if (!snapshot.withMeasuredCycle || !isSinglePhaseTableLoaded(refrigerant)) return null;
   try {
     const dischargeKPa =
       snapshot.dischargePressureKPaAbs ??
-      (snapshot.condensingDewTempC === null ? null : saturationPressure(refrigerant, snapshot.condensingDewTempC + DISCHARGE_PRESSURE_ALLOWANCE_K, "dew"));
+      (snapshot.condensingDewTempC === null
+        ? null
+        : saturationPressure(refrigerant, snapshot.condensingDewTempC + DISCHARGE_PRESSURE_ALLOWANCE_K, "dew"));
     if (dischargeKPa === null) return null;
     const suction = singlePhaseState(refrigerant, snapshot.suctionPressureKPaAbs, snapshot.input.suctionLineTempC);
     const discharge = singlePhaseState(refrigerant, dischargeKPa, dischargeLineTempC);

@@ -75,7 +75,12 @@ function windowBounds(series: TrendSeries): WindowBounds {
 }
 
 /** Spread and least-squares slope of one series over readings first…last (nulls skipped). */
-function spreadAndSlope(minutes: Float64Array, values: readonly (number | null)[], first: number, last: number): { change: number | null; rate: number | null } {
+function spreadAndSlope(
+  minutes: Float64Array,
+  values: readonly (number | null)[],
+  first: number,
+  last: number,
+): { change: number | null; rate: number | null } {
   let minimum = Infinity;
   let maximum = -Infinity;
   const x: number[] = [];
@@ -94,7 +99,13 @@ function spreadAndSlope(minutes: Float64Array, values: readonly (number | null)[
 }
 
 /** Settled status at reading `last`, in full: the figures the result reports. */
-function windowStatus(series: TrendSeries, bounds: WindowBounds, superheats: readonly (number | null)[], subcoolings: readonly (number | null)[], last: number): WindowStatus {
+function windowStatus(
+  series: TrendSeries,
+  bounds: WindowBounds,
+  superheats: readonly (number | null)[],
+  subcoolings: readonly (number | null)[],
+  last: number,
+): WindowStatus {
   const { minutes } = series;
   const start = bounds.observedFrom[last]!;
   const minutesObserved = minutes[last]! - minutes[start]!;
@@ -111,7 +122,11 @@ function windowStatus(series: TrendSeries, bounds: WindowBounds, superheats: rea
 
   const runMinutes = series.runMinutes[last];
   if (runMinutes !== undefined && runMinutes < MIN_RUN_MINUTES) {
-    return { ...base, settled: false, reason: `The unit has run ${runMinutes.toFixed(0)} min; wait for at least ${MIN_RUN_MINUTES} min` };
+    return {
+      ...base,
+      settled: false,
+      reason: `The unit has run ${runMinutes.toFixed(0)} min; wait for at least ${MIN_RUN_MINUTES} min`,
+    };
   }
   if (minutesObserved < SETTLED_WINDOW_MINUTES) {
     return {
@@ -121,19 +136,35 @@ function windowStatus(series: TrendSeries, bounds: WindowBounds, superheats: rea
     };
   }
   if (superheat.change === null && subcooling.change === null) {
-    return { ...base, settled: false, reason: "Neither superheat nor subcooling could be computed, so settling cannot be judged" };
+    return {
+      ...base,
+      settled: false,
+      reason: "Neither superheat nor subcooling could be computed, so settling cannot be judged",
+    };
   }
   const moving: string[] = [];
-  if (superheat.change !== null && superheat.change >= SETTLED_MAX_CHANGE_K) moving.push(`superheat moved ${superheat.change.toFixed(1)} K`);
-  if (subcooling.change !== null && subcooling.change >= SETTLED_MAX_CHANGE_K) moving.push(`subcooling moved ${subcooling.change.toFixed(1)} K`);
+  if (superheat.change !== null && superheat.change >= SETTLED_MAX_CHANGE_K)
+    moving.push(`superheat moved ${superheat.change.toFixed(1)} K`);
+  if (subcooling.change !== null && subcooling.change >= SETTLED_MAX_CHANGE_K)
+    moving.push(`subcooling moved ${subcooling.change.toFixed(1)} K`);
   if (moving.length > 0) {
-    return { ...base, settled: false, reason: `Still moving: ${moving.join(", ")} in the last ${SETTLED_WINDOW_MINUTES} min (limit ${SETTLED_MAX_CHANGE_K} K)` };
+    return {
+      ...base,
+      settled: false,
+      reason: `Still moving: ${moving.join(", ")} in the last ${SETTLED_WINDOW_MINUTES} min (limit ${SETTLED_MAX_CHANGE_K} K)`,
+    };
   }
   const drifting: string[] = [];
-  if (superheat.rate !== null && Math.abs(superheat.rate) >= SETTLED_MAX_RATE_K_PER_MIN) drifting.push(`superheat ${superheat.rate.toFixed(2)} K/min`);
-  if (subcooling.rate !== null && Math.abs(subcooling.rate) >= SETTLED_MAX_RATE_K_PER_MIN) drifting.push(`subcooling ${subcooling.rate.toFixed(2)} K/min`);
+  if (superheat.rate !== null && Math.abs(superheat.rate) >= SETTLED_MAX_RATE_K_PER_MIN)
+    drifting.push(`superheat ${superheat.rate.toFixed(2)} K/min`);
+  if (subcooling.rate !== null && Math.abs(subcooling.rate) >= SETTLED_MAX_RATE_K_PER_MIN)
+    drifting.push(`subcooling ${subcooling.rate.toFixed(2)} K/min`);
   if (drifting.length > 0) {
-    return { ...base, settled: false, reason: `Still drifting: ${drifting.join(", ")} (limit ${SETTLED_MAX_RATE_K_PER_MIN} K/min)` };
+    return {
+      ...base,
+      settled: false,
+      reason: `Still drifting: ${drifting.join(", ")} (limit ${SETTLED_MAX_RATE_K_PER_MIN} K/min)`,
+    };
   }
   return {
     ...base,
@@ -236,10 +267,17 @@ class SlidingColumn {
 }
 
 /** Whether one column drifts at or past the limit over first…last (false when it has no slope). */
-function driftsTooFast(column: SlidingColumn, minutes: Float64Array, values: readonly (number | null)[], first: number, last: number): boolean {
+function driftsTooFast(
+  column: SlidingColumn,
+  minutes: Float64Array,
+  values: readonly (number | null)[],
+  first: number,
+  last: number,
+): boolean {
   if (column.count < 2) return false;
   const estimate = Math.abs(column.estimatedRate());
-  if (Math.abs(estimate - SETTLED_MAX_RATE_K_PER_MIN) > RATE_MARGIN_K_PER_MIN) return estimate >= SETTLED_MAX_RATE_K_PER_MIN;
+  if (Math.abs(estimate - SETTLED_MAX_RATE_K_PER_MIN) > RATE_MARGIN_K_PER_MIN)
+    return estimate >= SETTLED_MAX_RATE_K_PER_MIN;
   // Too close to call (or NaN) from the sums: the two-pass slope the result would report.
   return Math.abs(spreadAndSlope(minutes, values, first, last).rate!) >= SETTLED_MAX_RATE_K_PER_MIN;
 }
@@ -250,7 +288,12 @@ function driftsTooFast(column: SlidingColumn, minutes: Float64Array, values: rea
  * time in proportion to the log, not to the log times the readings per window. Judges exactly
  * as `windowStatus` does, in the same order.
  */
-function lastSettledIndex(series: TrendSeries, bounds: WindowBounds, superheats: readonly (number | null)[], subcoolings: readonly (number | null)[]): number {
+function lastSettledIndex(
+  series: TrendSeries,
+  bounds: WindowBounds,
+  superheats: readonly (number | null)[],
+  subcoolings: readonly (number | null)[],
+): number {
   const { minutes, runMinutes } = series;
   const count = minutes.length;
   const superheat = new SlidingColumn(minutes, superheats);
@@ -310,7 +353,10 @@ export function assessTrend(readings: readonly unknown[]): TrendResult {
 
   const status = windowStatus(series, bounds, superheats, subcoolings, count - 1);
   const settledIndex = status.settled ? count - 1 : lastSettledIndex(series, bounds, superheats, subcoolings);
-  const lastSettled: TrendResult["lastSettled"] = settledIndex < 0 ? null : { index: settledIndex, takenAt: series.takenAt[settledIndex]!, result: results[settledIndex]! };
+  const lastSettled: TrendResult["lastSettled"] =
+    settledIndex < 0
+      ? null
+      : { index: settledIndex, takenAt: series.takenAt[settledIndex]!, result: results[settledIndex]! };
   return {
     settled: status.settled,
     reason: status.reason,

@@ -37,7 +37,13 @@ function mean(first: number | null, second: number | null): number | null {
 
 /** Saturation temperature, or null with an `outsideTable` entry (once per field) when the
  * pressure is outside the table; unknown refrigerants still throw. */
-function saturationOrExclusion(refrigerant: string, field: string, pressureKPaAbs: number, point: "bubble" | "dew", outsideTable: Exclusion[]): number | null {
+function saturationOrExclusion(
+  refrigerant: string,
+  field: string,
+  pressureKPaAbs: number,
+  point: "bubble" | "dew",
+  outsideTable: Exclusion[],
+): number | null {
   const range = tablePressureRange(refrigerant, point);
   if (!(pressureKPaAbs >= range.minimumKPaAbs && pressureKPaAbs <= range.maximumKPaAbs)) {
     if (!outsideTable.some((exclusion) => exclusion.field === field)) {
@@ -58,7 +64,11 @@ function saturationOrExclusion(refrigerant: string, field: string, pressureKPaAb
   } catch (error) {
     if (!(error instanceof PropertyRangeError) || error.code === "UNKNOWN_REFRIGERANT") throw error;
     if (!outsideTable.some((exclusion) => exclusion.field === field)) {
-      outsideTable.push({ code: "outside-table", field, reason: `${error.message}: no saturation temperature for this reading` });
+      outsideTable.push({
+        code: "outside-table",
+        field,
+        reason: `${error.message}: no saturation temperature for this reading`,
+      });
     }
     return null;
   }
@@ -69,7 +79,11 @@ function saturationOrExclusion(refrigerant: string, field: string, pressureKPaAb
  * [S26]). For a blend the liquid leaves from the bubble point, half the condensing glide below
  * the mid-glide temperature the condensing band is read with, so half the glide comes off too.
  */
-function approachTarget(condensing: { lowK: number; highK: number }, subcoolingTargetK: number, condenserGlideK: number | null): TargetBand {
+function approachTarget(
+  condensing: { lowK: number; highK: number },
+  subcoolingTargetK: number,
+  condenserGlideK: number | null,
+): TargetBand {
   const expected = (condensing.lowK + condensing.highK) / 2 - (condenserGlideK ?? 0) / 2 - subcoolingTargetK;
   return {
     targetK: expected,
@@ -81,17 +95,34 @@ function approachTarget(condensing: { lowK: number; highK: number }, subcoolingT
 }
 
 /** The expected air (or fluid) split: psychrometric for comfort coils with a wet bulb, else the application's band. */
-function splitTarget(snapshotApplication: DiagnosisSnapshot["application"], returnDryBulbC: number | undefined, wetBulbC: number | null, atmosphereKPa: number): TargetBand | null {
+function splitTarget(
+  snapshotApplication: DiagnosisSnapshot["application"],
+  returnDryBulbC: number | undefined,
+  wetBulbC: number | null,
+  atmosphereKPa: number,
+): TargetBand | null {
   const comfort = snapshotApplication === "comfort-cooling" || snapshotApplication === "heat-pump";
   if (comfort && returnDryBulbC !== undefined && wetBulbC !== null) {
     const target = targetTemperatureSplit(returnDryBulbC, wetBulbC, atmosphereKPa);
     if (target !== null) {
       const tolerance = SPLIT_TARGET_MODEL.toleranceK;
-      return { targetK: target, lowK: Math.max(0, target - tolerance), highK: target + tolerance, basis: "formula", source: SPLIT_SOURCE };
+      return {
+        targetK: target,
+        lowK: Math.max(0, target - tolerance),
+        highK: target + tolerance,
+        basis: "formula",
+        source: SPLIT_SOURCE,
+      };
     }
   }
   const band = APPLICATION_LIMITS[snapshotApplication].temperatureSplit;
-  return { targetK: (band.lowK + band.highK) / 2, lowK: band.lowK, highK: band.highK, basis: "common-practice", source: band.source };
+  return {
+    targetK: (band.lowK + band.highK) / 2,
+    lowK: band.lowK,
+    highK: band.highK,
+    basis: "common-practice",
+    source: band.source,
+  };
 }
 
 /**
@@ -124,7 +155,9 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput, withMeasuredCycle 
   const suctionPressureKPaAbs = gaugeToAbsolute(input.suctionPressureKPa, atmosphericPressureKPa);
   const liquidPressureKPaAbs = gaugeToAbsolute(input.liquidPressureKPa, atmosphericPressureKPa);
   const dischargePressureKPaAbs =
-    input.dischargePressureKPa === undefined ? null : gaugeToAbsolute(input.dischargePressureKPa, atmosphericPressureKPa);
+    input.dischargePressureKPa === undefined
+      ? null
+      : gaugeToAbsolute(input.dischargePressureKPa, atmosphericPressureKPa);
   // Above the critical pressure there is no condensing at all: R744 gas coolers run there by
   // design; for any other refrigerant such a reading is outside the table.
   const criticalKPa = info.criticalPoint.pressureKPa;
@@ -133,10 +166,24 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput, withMeasuredCycle 
   // Superheat from the dew point, subcooling from the bubble point (TRADE.md §1.1 [S1][S2][S3]).
   // A pure refrigerant (or azeotrope) has one saturation curve: one lookup per pressure.
   const oneCurve = info.kind !== "blend";
-  const evaporatingTempC = saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "dew", outsideTable);
-  const evaporatingBubbleTempC = oneCurve ? evaporatingTempC : saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "bubble", outsideTable);
-  const condensingTempC = transcritical ? null : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "bubble", outsideTable);
-  const condensingDewTempC = transcritical ? null : oneCurve ? condensingTempC : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "dew", outsideTable);
+  const evaporatingTempC = saturationOrExclusion(
+    refrigerant,
+    "suctionPressureKPa",
+    suctionPressureKPaAbs,
+    "dew",
+    outsideTable,
+  );
+  const evaporatingBubbleTempC = oneCurve
+    ? evaporatingTempC
+    : saturationOrExclusion(refrigerant, "suctionPressureKPa", suctionPressureKPaAbs, "bubble", outsideTable);
+  const condensingTempC = transcritical
+    ? null
+    : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "bubble", outsideTable);
+  const condensingDewTempC = transcritical
+    ? null
+    : oneCurve
+      ? condensingTempC
+      : saturationOrExclusion(refrigerant, "liquidPressureKPa", liquidPressureKPaAbs, "dew", outsideTable);
   const dischargeDewTempC =
     dischargePressureKPaAbs === null || (transcritical && dischargePressureKPaAbs > criticalKPa)
       ? condensingDewTempC
@@ -145,7 +192,11 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput, withMeasuredCycle 
   // Superheat: suction line − dew point. A vapour line below the bubble point is impossible.
   let superheatK = difference(input.suctionLineTempC, evaporatingTempC);
   let superheatExcluded: Exclusion | null = null;
-  if (superheatK !== null && evaporatingBubbleTempC !== null && input.suctionLineTempC < evaporatingBubbleTempC - SENSOR_TOLERANCE_K) {
+  if (
+    superheatK !== null &&
+    evaporatingBubbleTempC !== null &&
+    input.suctionLineTempC < evaporatingBubbleTempC - SENSOR_TOLERANCE_K
+  ) {
     superheatExcluded = {
       code: "suction-below-saturation",
       field: "suctionLineTempC",
@@ -173,14 +224,20 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput, withMeasuredCycle 
     subcoolingK = null;
     const dew = dischargeDewTempC;
     if (dew !== null && input.liquidLineTempC < dew - SENSOR_TOLERANCE_K) {
-      const looksLike = condensingTempC === null ? "" : `; if it was taken on the liquid line, mark it so and the subcooling is ${formatTenths(condensingTempC - input.liquidLineTempC)} K`;
+      const looksLike =
+        condensingTempC === null
+          ? ""
+          : `; if it was taken on the liquid line, mark it so and the subcooling is ${formatTenths(condensingTempC - input.liquidLineTempC)} K`;
       subcoolingExcluded = {
         code: "subcooling-on-discharge-line",
         field: "liquidTempLocation",
         reason: `A discharge line carries superheated gas and cannot be ${formatTenths(dew - input.liquidLineTempC)} K colder than the dew point ${formatTenths(dew)} °C at its pressure: ${formatTenths(input.liquidLineTempC)} °C cannot have been read on the discharge line${looksLike}. Subcooling is not used`,
       };
     } else {
-      const detail = dew === null ? "" : ` (line ${formatTenths(input.liquidLineTempC)} °C − dew point ${formatTenths(dew)} °C = ${formatTenths(input.liquidLineTempC - dew)} K is discharge superheat, not subcooling)`;
+      const detail =
+        dew === null
+          ? ""
+          : ` (line ${formatTenths(input.liquidLineTempC)} °C − dew point ${formatTenths(dew)} °C = ${formatTenths(input.liquidLineTempC - dew)} K is discharge superheat, not subcooling)`;
       subcoolingExcluded = {
         code: "subcooling-on-discharge-line",
         field: "liquidTempLocation",
@@ -199,7 +256,11 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput, withMeasuredCycle 
 
   // Discharge gas is superheated: its line cannot be colder than the dew point at its pressure.
   let dischargeLineExcluded: Exclusion | null = null;
-  if (input.dischargeLineTempC !== undefined && dischargeDewTempC !== null && input.dischargeLineTempC < dischargeDewTempC - SENSOR_TOLERANCE_K) {
+  if (
+    input.dischargeLineTempC !== undefined &&
+    dischargeDewTempC !== null &&
+    input.dischargeLineTempC < dischargeDewTempC - SENSOR_TOLERANCE_K
+  ) {
     dischargeLineExcluded = {
       code: "discharge-below-saturation",
       field: "dischargeLineTempC",
@@ -214,17 +275,27 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput, withMeasuredCycle 
     returnAirWetBulbC = input.returnAirWetBulbC;
     wetBulbBasis = "measured";
   } else if (input.returnAirRelativeHumidity !== undefined && input.returnAirDryBulbC !== undefined) {
-    returnAirWetBulbC = wetBulbFromRelativeHumidity(input.returnAirDryBulbC, input.returnAirRelativeHumidity, atmosphericPressureKPa);
+    returnAirWetBulbC = wetBulbFromRelativeHumidity(
+      input.returnAirDryBulbC,
+      input.returnAirRelativeHumidity,
+      atmosphericPressureKPa,
+    );
     wetBulbBasis = "from-relative-humidity";
   }
 
   const suctionTempLocation = input.suctionTempLocation ?? null;
   const allowanceK = suctionTempLocation === null ? 0 : suctionLineAllowance(input.liquidLineLengthM);
-  const superheatChoice = selectSuperheatTarget(input.meteringDevice, input.targetSuperheatK, returnAirWetBulbC, input.outdoorAirDryBulbC, {
-    application,
-    ...(suctionTempLocation === null ? {} : { suctionTempLocation }),
-    allowanceK,
-  });
+  const superheatChoice = selectSuperheatTarget(
+    input.meteringDevice,
+    input.targetSuperheatK,
+    returnAirWetBulbC,
+    input.outdoorAirDryBulbC,
+    {
+      application,
+      ...(suctionTempLocation === null ? {} : { suctionTempLocation }),
+      allowanceK,
+    },
+  );
   const subcoolingTarget = selectSubcoolingTarget(input.targetSubcoolingK, application);
   const liquidOnLiquidLine = !onDischargeLine && !transcritical && subcoolingExcluded === null;
   const evaporatingMeanTempC = mean(evaporatingTempC, evaporatingBubbleTempC);
@@ -266,8 +337,17 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput, withMeasuredCycle 
     superheatTargetNote: superheatChoice.note,
     subcoolingTarget,
     subcoolingPivotK: subcoolingTarget.targetK - SUBCOOLING_PIVOT_BELOW_TARGET_K,
-    condenserApproachTarget: approachTarget(limits.condensingOverAmbient, subcoolingTarget.targetK, difference(condensingDewTempC, condensingTempC)),
-    temperatureSplitTarget: splitTarget(application, input.returnAirDryBulbC, returnAirWetBulbC, atmosphericPressureKPa),
+    condenserApproachTarget: approachTarget(
+      limits.condensingOverAmbient,
+      subcoolingTarget.targetK,
+      difference(condensingDewTempC, condensingTempC),
+    ),
+    temperatureSplitTarget: splitTarget(
+      application,
+      input.returnAirDryBulbC,
+      returnAirWetBulbC,
+      atmosphericPressureKPa,
+    ),
     returnAirWetBulbC,
     wetBulbBasis,
     temperatureSplitK: difference(input.returnAirDryBulbC, input.supplyAirDryBulbC),
@@ -279,6 +359,8 @@ export function buildDiagnosisSnapshot(input: DiagnosisInput, withMeasuredCycle 
     compressionRatio: (dischargePressureKPaAbs ?? liquidPressureKPaAbs) / suctionPressureKPaAbs,
     compressionRatioBasis: dischargePressureKPaAbs === null ? "liquid" : "discharge",
     compressorCurrentRatio:
-      input.compressorAmps !== undefined && input.compressorRla !== undefined ? input.compressorAmps / input.compressorRla : null,
+      input.compressorAmps !== undefined && input.compressorRla !== undefined
+        ? input.compressorAmps / input.compressorRla
+        : null,
   };
 }

@@ -133,10 +133,18 @@ const COMFORT: ApplicationLimits = {
   returnWords: "return air",
   valveSuperheat: { lowK: 2.8, highK: 6.7, targetK: 5, source: cite(["S15", "S17", "S9"], COMMON_PRACTICE) },
   subcooling: { ...DEFAULT_SUBCOOLING_BAND, source: DEFAULT_SUBCOOLING_SOURCE },
-  evaporatorTd: { lowK: 14, highK: 24, source: `evaporator TD about 19 K for comfort cooling (${MEMORY}); ±5 K band (${COMMON_PRACTICE})` },
+  evaporatorTd: {
+    lowK: 14,
+    highK: 24,
+    source: `evaporator TD about 19 K for comfort cooling (${MEMORY}); ±5 K band (${COMMON_PRACTICE})`,
+  },
   temperatureSplit: { lowK: 8, highK: 13, source: cite(["S33"]) },
   condensingOverAmbient: { lowK: 8.3, highK: 16.7, source: `${cite(["S26"])} (16 SEER+ 8.3 K … ≤ 10 SEER 16.7 K)` },
-  dischargeLine: { elevatedC: 90, limitC: 107, source: `${cite(["S13", "S37"])}: healthy AC 71–82 °C in hot weather, keep below 107 °C (225 °F); 90 °C elevated (${COMMON_PRACTICE})` },
+  dischargeLine: {
+    elevatedC: 90,
+    limitC: 107,
+    source: `${cite(["S13", "S37"])}: healthy AC 71–82 °C in hot weather, keep below 107 °C (225 °F); 90 °C elevated (${COMMON_PRACTICE})`,
+  },
   returnRangeC: { min: 15, max: 40 },
   fixedOrificeChart: true,
 };
@@ -146,10 +154,19 @@ const COMFORT: ApplicationLimits = {
  * whatever the charge: 2–7 K without a maker's target (common practice; TRADE.md §1.3 gives no
  * refrigeration figure).
  */
-const REFRIGERATION_SUBCOOLING = { lowK: 2, highK: 7, targetK: 4.5, source: `refrigeration condensers with receivers hold 2–7 K (${COMMON_PRACTICE})` } as const;
+const REFRIGERATION_SUBCOOLING = {
+  lowK: 2,
+  highK: 7,
+  targetK: 4.5,
+  source: `refrigeration condensers with receivers hold 2–7 K (${COMMON_PRACTICE})`,
+} as const;
 
 const REFRIGERATION_CONDENSER = {
-  condensingOverAmbient: { lowK: 8.3, highK: 19, source: `${cite(["S35"])}: air-cooled refrigeration condensers 11–19 K; high-efficiency units from 8.3 K ${cite(["S26"])}` },
+  condensingOverAmbient: {
+    lowK: 8.3,
+    highK: 19,
+    source: `${cite(["S35"])}: air-cooled refrigeration condensers 11–19 K; high-efficiency units from 8.3 K ${cite(["S26"])}`,
+  },
 } as const;
 
 /** Bands by application; sources per band. */
@@ -160,23 +177,49 @@ export const APPLICATION_LIMITS: Readonly<Record<Application, ApplicationLimits>
   "heat-pump": COMFORT,
   "medium-temperature-refrigeration": {
     returnWords: "room air",
-    valveSuperheat: { lowK: 3, highK: 7.3, targetK: 5.6, source: `${cite(["S15"])}: medium temperature about 5.6 K (10 °F); ±1.7 K (${COMMON_PRACTICE})` },
+    valveSuperheat: {
+      lowK: 3,
+      highK: 7.3,
+      targetK: 5.6,
+      source: `${cite(["S15"])}: medium temperature about 5.6 K (10 °F); ±1.7 K (${COMMON_PRACTICE})`,
+    },
     subcooling: REFRIGERATION_SUBCOOLING,
-    evaporatorTd: { lowK: 4, highK: 10, source: `${cite(["S15"])}: coil TD by room humidity, about 8–18 °F (4.4–10 K)` },
+    evaporatorTd: {
+      lowK: 4,
+      highK: 10,
+      source: `${cite(["S15"])}: coil TD by room humidity, about 8–18 °F (4.4–10 K)`,
+    },
     temperatureSplit: { lowK: 2, highK: 6, source: `air on − air off a cool-room coil 2–6 K (${MEMORY})` },
     ...REFRIGERATION_CONDENSER,
-    dischargeLine: { elevatedC: 95, limitC: 107, source: `${cite(["S13"])}: keep below 107 °C; refrigeration runs higher compression ratios, 95 °C elevated (${COMMON_PRACTICE})` },
+    dischargeLine: {
+      elevatedC: 95,
+      limitC: 107,
+      source: `${cite(["S13"])}: keep below 107 °C; refrigeration runs higher compression ratios, 95 °C elevated (${COMMON_PRACTICE})`,
+    },
     returnRangeC: { min: -5, max: 15 },
     fixedOrificeChart: false,
   },
   "low-temperature-refrigeration": {
     returnWords: "room air",
-    valveSuperheat: { lowK: 1.7, highK: 4.5, targetK: 2.8, source: `${cite(["S15"])}: low temperature about 2.8 K (5 °F), range from 1.7 K` },
+    valveSuperheat: {
+      lowK: 1.7,
+      highK: 4.5,
+      targetK: 2.8,
+      source: `${cite(["S15"])}: low temperature about 2.8 K (5 °F), range from 1.7 K`,
+    },
     subcooling: REFRIGERATION_SUBCOOLING,
-    evaporatorTd: { lowK: 4, highK: 8, source: `${cite(["S15"])}: freezer coils run about 10 °F (5.6 K) TD; ±2 K (${COMMON_PRACTICE})` },
+    evaporatorTd: {
+      lowK: 4,
+      highK: 8,
+      source: `${cite(["S15"])}: freezer coils run about 10 °F (5.6 K) TD; ±2 K (${COMMON_PRACTICE})`,
+    },
     temperatureSplit: { lowK: 1.5, highK: 5, source: `air on − air off a freezer coil 1.5–5 K (${MEMORY})` },
     ...REFRIGERATION_CONDENSER,
-    dischargeLine: { elevatedC: 100, limitC: 107, source: `${cite(["S13"])}: keep below 107 °C; single-stage low temperature runs hot, 100 °C elevated (${COMMON_PRACTICE})` },
+    dischargeLine: {
+      elevatedC: 100,
+      limitC: 107,
+      source: `${cite(["S13"])}: keep below 107 °C; single-stage low temperature runs hot, 100 °C elevated (${COMMON_PRACTICE})`,
+    },
     returnRangeC: { min: -40, max: -8 },
     fixedOrificeChart: false,
   },
@@ -184,10 +227,22 @@ export const APPLICATION_LIMITS: Readonly<Record<Application, ApplicationLimits>
     returnWords: "entering water",
     valveSuperheat: { lowK: 3, highK: 7, targetK: 5, source: `chiller TXV superheat 3–7 K (${COMMON_PRACTICE})` },
     subcooling: { lowK: 3, highK: 8, targetK: 5.5, source: `air-cooled chiller condensers 3–8 K (${COMMON_PRACTICE})` },
-    evaporatorTd: { lowK: 5, highK: 10, source: `entering fluid − evaporating about 5–10 K: a 5 K fluid range plus a 2–5 K approach (${COMMON_PRACTICE})` },
-    temperatureSplit: { lowK: 3, highK: 7, source: `entering − leaving fluid about 5 K at design flow (12 → 7 °C rating conditions, ${MEMORY})` },
+    evaporatorTd: {
+      lowK: 5,
+      highK: 10,
+      source: `entering fluid − evaporating about 5–10 K: a 5 K fluid range plus a 2–5 K approach (${COMMON_PRACTICE})`,
+    },
+    temperatureSplit: {
+      lowK: 3,
+      highK: 7,
+      source: `entering − leaving fluid about 5 K at design flow (12 → 7 °C rating conditions, ${MEMORY})`,
+    },
     ...REFRIGERATION_CONDENSER,
-    dischargeLine: { elevatedC: 95, limitC: 107, source: `${cite(["S13"])}: keep below 107 °C; 95 °C elevated (${COMMON_PRACTICE})` },
+    dischargeLine: {
+      elevatedC: 95,
+      limitC: 107,
+      source: `${cite(["S13"])}: keep below 107 °C; 95 °C elevated (${COMMON_PRACTICE})`,
+    },
     returnRangeC: { min: -15, max: 30 },
     fixedOrificeChart: false,
   },

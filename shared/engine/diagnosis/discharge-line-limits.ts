@@ -1,5 +1,10 @@
 import type { Application } from "../../schemas/diagnosis.ts";
-import { APPLICATION_LIMITS, HOT_DISCHARGE_REFRIGERANTS, HOT_DISCHARGE_SOURCE, type DischargeLineLimits } from "./diagnosis-limits.ts";
+import {
+  APPLICATION_LIMITS,
+  HOT_DISCHARGE_REFRIGERANTS,
+  HOT_DISCHARGE_SOURCE,
+  type DischargeLineLimits,
+} from "./diagnosis-limits.ts";
 
 /** Built once per refrigerant and application (performance: no key strings per call). */
 const memo = new Map<string, Map<Application, DischargeLineLimits>>();
@@ -28,7 +33,11 @@ export function dischargeLineLimits(refrigerant: string, application: Applicatio
     const hot = HOT_DISCHARGE_REFRIGERANTS[refrigerant];
     const limitC = hot?.limitC ?? base.limitC;
     limits = hot
-      ? Object.freeze({ elevatedC: Math.min(limitC - 3, base.elevatedC + hot.elevatedAddK), limitC, source: `${base.source}; ${HOT_DISCHARGE_SOURCE}` })
+      ? Object.freeze({
+          elevatedC: Math.min(limitC - 3, base.elevatedC + hot.elevatedAddK),
+          limitC,
+          source: `${base.source}; ${HOT_DISCHARGE_SOURCE}`,
+        })
       : base;
     byApplication.set(application, limits);
   }

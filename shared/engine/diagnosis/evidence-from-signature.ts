@@ -1,7 +1,12 @@
 import { CHARGE_STATES, type Evidence, type EvidenceState } from "../../schemas/diagnosis.ts";
 import { signatureCell } from "./signature-cell.ts";
 import { signatureMatch } from "./signature-match.ts";
-import { SIGNATURE_FEATURES, type MeteringFamily, type SignatureCell, type SignatureFeature } from "./signature-table.ts";
+import {
+  SIGNATURE_FEATURES,
+  type MeteringFamily,
+  type SignatureCell,
+  type SignatureFeature,
+} from "./signature-table.ts";
 
 const EVIDENCE_STATES = CHARGE_STATES.filter((state): state is EvidenceState => state !== "insufficient-data");
 
@@ -34,7 +39,12 @@ const VALVE_CELLS = compile("expansion-valve");
  * @throws never
  * @example evidenceFromSignature("superheat", "fixed", 1, 0).find((e) => e.state === "undercharged")?.weight // 1.5
  */
-export function evidenceFromSignature(feature: SignatureFeature, family: MeteringFamily, bandStrength: number, pivotDeviation: number): Evidence[] {
+export function evidenceFromSignature(
+  feature: SignatureFeature,
+  family: MeteringFamily,
+  bandStrength: number,
+  pivotDeviation: number,
+): Evidence[] {
   const cells = (family === "fixed" ? FIXED_CELLS : VALVE_CELLS)[feature];
   const evidence: Evidence[] = [];
   for (let index = 0; index < cells.length; index += 1) {

@@ -21,7 +21,10 @@ const FREEZER_BELOW_C = -8;
  * @throws never
  * @example inferApplication(undefined, 3) // { application: "medium-temperature-refrigeration", basis: "inferred-from-return-air" }
  */
-export function inferApplication(recorded: Application | undefined, returnAirDryBulbC: number | undefined): ApplicationChoice {
+export function inferApplication(
+  recorded: Application | undefined,
+  returnAirDryBulbC: number | undefined,
+): ApplicationChoice {
   if (recorded !== undefined) return { application: recorded, basis: "equipment" };
   if (returnAirDryBulbC === undefined) return { application: "comfort-cooling", basis: "default" };
   const application: Application =

@@ -8,7 +8,8 @@
  * @example leastSquaresSlope([0, 1, 2], [10, 9, 8]) // -1
  */
 export function leastSquaresSlope(x: readonly number[], y: readonly number[]): number {
-  if (x.length !== y.length || x.length < 2) throw new RangeError("leastSquaresSlope requires two or more paired points");
+  if (x.length !== y.length || x.length < 2)
+    throw new RangeError("leastSquaresSlope requires two or more paired points");
   let meanX = 0;
   let meanY = 0;
   for (let index = 0; index < x.length; index += 1) {

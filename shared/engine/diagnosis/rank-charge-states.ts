@@ -6,7 +6,8 @@ type State = RankedState["state"];
 const SCORE_EPSILON = 1e-9;
 /** The states evidence can point to, in `CHARGE_STATES` order ("normal" first). */
 const EVIDENCE_STATES = CHARGE_STATES.filter((state): state is State => state !== "insufficient-data");
-if (EVIDENCE_STATES.length !== 9) throw new Error("rankChargeStates requires the nine evidence states of CHARGE_STATES");
+if (EVIDENCE_STATES.length !== 9)
+  throw new Error("rankChargeStates requires the nine evidence states of CHARGE_STATES");
 /**
  * The nine state names all differ in length, so a name's length is its index (one array read
  * instead of a hashed string lookup per evidence entry, about fifty per diagnosis; performance).
@@ -14,7 +15,8 @@ if (EVIDENCE_STATES.length !== 9) throw new Error("rankChargeStates requires the
  */
 const INDEX_BY_LENGTH: number[] = [];
 for (const [index, state] of EVIDENCE_STATES.entries()) {
-  if (INDEX_BY_LENGTH[state.length] !== undefined) throw new Error("rankChargeStates requires state names of distinct lengths");
+  if (INDEX_BY_LENGTH[state.length] !== undefined)
+    throw new Error("rankChargeStates requires state names of distinct lengths");
   INDEX_BY_LENGTH[state.length] = index;
 }
 

@@ -1,5 +1,9 @@
 import type { Application, TargetBand } from "../../schemas/diagnosis.ts";
-import { APPLICATION_LIMITS, NAMEPLATE_TARGET_TOLERANCE_K, NAMEPLATE_TARGET_TOLERANCE_SOURCE } from "./diagnosis-limits.ts";
+import {
+  APPLICATION_LIMITS,
+  NAMEPLATE_TARGET_TOLERANCE_K,
+  NAMEPLATE_TARGET_TOLERANCE_SOURCE,
+} from "./diagnosis-limits.ts";
 
 /** Never changes: built once here instead of on every call (performance). */
 const NAMEPLATE_SOURCE = `maker's target; ±${NAMEPLATE_TARGET_TOLERANCE_K} K: ${NAMEPLATE_TARGET_TOLERANCE_SOURCE}`;
@@ -21,7 +25,10 @@ const nameplateBands = new Map<number, TargetBand>();
  * @throws never
  * @example selectSubcoolingTarget(5).lowK // 3.3
  */
-export function selectSubcoolingTarget(nameplateTargetK: number | undefined, application: Application = "comfort-cooling"): TargetBand {
+export function selectSubcoolingTarget(
+  nameplateTargetK: number | undefined,
+  application: Application = "comfort-cooling",
+): TargetBand {
   if (nameplateTargetK !== undefined) {
     let band = nameplateBands.get(nameplateTargetK);
     if (!band) {

@@ -93,14 +93,24 @@ export function selectSuperheatTarget(
   const shift = !options.suctionTempLocation
     ? 0
     : fixed
-      ? options.suctionTempLocation === "evaporator-outlet" ? -allowance : 0
-      : options.suctionTempLocation === "outdoor-unit" ? allowance : 0;
+      ? options.suctionTempLocation === "evaporator-outlet"
+        ? -allowance
+        : 0
+      : options.suctionTempLocation === "outdoor-unit"
+        ? allowance
+        : 0;
   const where = options.suctionTempLocation === "outdoor-unit" ? "outdoor unit" : "evaporator outlet";
 
   if (nameplateTargetK !== undefined) {
     const tolerance = fixed ? FIXED_ORIFICE_SUPERHEAT_TOLERANCE_K : NAMEPLATE_TARGET_TOLERANCE_K;
     const source = fixed ? FIXED_NAMEPLATE_SOURCE : VALVE_NAMEPLATE_SOURCE;
-    const band: TargetBand = { targetK: nameplateTargetK, lowK: Math.max(0, nameplateTargetK - tolerance), highK: nameplateTargetK + tolerance, basis: "nameplate", source };
+    const band: TargetBand = {
+      targetK: nameplateTargetK,
+      lowK: Math.max(0, nameplateTargetK - tolerance),
+      highK: nameplateTargetK + tolerance,
+      basis: "nameplate",
+      source,
+    };
     return { band: shifted(band, shift, where), note: null, shiftK: shift };
   }
   if (!fixed) {
@@ -118,6 +128,12 @@ export function selectSuperheatTarget(
   const target = fixedOrificeTargetSuperheat(returnAirWetBulbC, outdoorAirDryBulbC);
   if (target.status !== "ok") return { band: null, note: target.reason, shiftK: 0 };
   const tolerance = FIXED_ORIFICE_SUPERHEAT_TOLERANCE_K;
-  const band: TargetBand = { targetK: target.targetK, lowK: target.targetK - tolerance, highK: target.targetK + tolerance, basis: "formula", source: FORMULA_SOURCE };
+  const band: TargetBand = {
+    targetK: target.targetK,
+    lowK: target.targetK - tolerance,
+    highK: target.targetK + tolerance,
+    basis: "formula",
+    source: FORMULA_SOURCE,
+  };
   return { band: shifted(band, shift, where), note: null, shiftK: shift };
 }

@@ -8,7 +8,11 @@ import { SIGNATURES, type MeteringFamily, type SignatureCell, type SignatureFeat
  * @throws never
  * @example signatureCell("undercharged", "subcooling", "expansion-valve") // { expect: "below-pivot", weight: 1.5 }
  */
-export function signatureCell(state: EvidenceState, feature: SignatureFeature, family: MeteringFamily): SignatureCell | null {
+export function signatureCell(
+  state: EvidenceState,
+  feature: SignatureFeature,
+  family: MeteringFamily,
+): SignatureCell | null {
   const entry = SIGNATURES[state].cells[feature];
   if (!entry) return null;
   if ("expect" in entry) return entry;

@@ -34,9 +34,13 @@ const ALLOWED_IN_BAND = 0.3;
 export function signatureMatch(expect: Expectation, bandStrength: number, pivotDeviation: number): number {
   switch (expect) {
     case "high":
-      return bandStrength >= 0 ? MISSING_SYMPTOM + (1 - MISSING_SYMPTOM) * bandStrength : MISSING_SYMPTOM + (1 + MISSING_SYMPTOM) * bandStrength;
+      return bandStrength >= 0
+        ? MISSING_SYMPTOM + (1 - MISSING_SYMPTOM) * bandStrength
+        : MISSING_SYMPTOM + (1 + MISSING_SYMPTOM) * bandStrength;
     case "low":
-      return bandStrength <= 0 ? MISSING_SYMPTOM - (1 - MISSING_SYMPTOM) * bandStrength : MISSING_SYMPTOM - (1 + MISSING_SYMPTOM) * bandStrength;
+      return bandStrength <= 0
+        ? MISSING_SYMPTOM - (1 - MISSING_SYMPTOM) * bandStrength
+        : MISSING_SYMPTOM - (1 + MISSING_SYMPTOM) * bandStrength;
     case "normal":
       return Math.max(FAR_OUT_OF_BAND, IN_BAND - OUT_OF_BAND_SLOPE * Math.abs(bandStrength));
     case "normal-or-high":

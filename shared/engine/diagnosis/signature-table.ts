@@ -24,7 +24,15 @@ export const SIGNATURE_FEATURES = [
 export type SignatureFeature = (typeof SIGNATURE_FEATURES)[number];
 
 /** What a reading does under a state, judged against its band (or, for the pivots, its target). */
-export const EXPECTATIONS = ["low", "low-or-normal", "normal", "normal-or-high", "high", "below-pivot", "above-pivot"] as const;
+export const EXPECTATIONS = [
+  "low",
+  "low-or-normal",
+  "normal",
+  "normal-or-high",
+  "high",
+  "below-pivot",
+  "above-pivot",
+] as const;
 export type Expectation = (typeof EXPECTATIONS)[number];
 
 /** One cell: the expectation and how much that reading counts for the state. */

@@ -18,6 +18,10 @@ export function subcooling(
   liquidLineTempC: number,
   atmosphericPressureKPa: number = STANDARD_ATMOSPHERE_KPA,
 ): number {
-  const bubblePointC = saturationTemperature(refrigerant, gaugeToAbsolute(liquidPressureKPaGauge, atmosphericPressureKPa), "bubble");
+  const bubblePointC = saturationTemperature(
+    refrigerant,
+    gaugeToAbsolute(liquidPressureKPaGauge, atmosphericPressureKPa),
+    "bubble",
+  );
   return bubblePointC - liquidLineTempC;
 }

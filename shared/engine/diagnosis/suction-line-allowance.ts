@@ -14,6 +14,10 @@ import { SUCTION_LINE_ALLOWANCE } from "./diagnosis-limits.ts";
  */
 export function suctionLineAllowance(liquidLineLengthM: number | undefined): number {
   const length = liquidLineLengthM ?? SUCTION_LINE_ALLOWANCE.defaultLengthM;
-  if (!(length >= 0) || !Number.isFinite(length)) throw new RangeError("suctionLineAllowance requires a length of 0 m or more");
-  return Math.min(SUCTION_LINE_ALLOWANCE.maxK, SUCTION_LINE_ALLOWANCE.baseK + SUCTION_LINE_ALLOWANCE.perMetreK * length);
+  if (!(length >= 0) || !Number.isFinite(length))
+    throw new RangeError("suctionLineAllowance requires a length of 0 m or more");
+  return Math.min(
+    SUCTION_LINE_ALLOWANCE.maxK,
+    SUCTION_LINE_ALLOWANCE.baseK + SUCTION_LINE_ALLOWANCE.perMetreK * length,
+  );
 }

@@ -18,6 +18,10 @@ export function superheat(
   suctionLineTempC: number,
   atmosphericPressureKPa: number = STANDARD_ATMOSPHERE_KPA,
 ): number {
-  const dewPointC = saturationTemperature(refrigerant, gaugeToAbsolute(suctionPressureKPaGauge, atmosphericPressureKPa), "dew");
+  const dewPointC = saturationTemperature(
+    refrigerant,
+    gaugeToAbsolute(suctionPressureKPaGauge, atmosphericPressureKPa),
+    "dew",
+  );
   return suctionLineTempC - dewPointC;
 }

@@ -3,7 +3,11 @@ import type { ProcedureLimits, VacuumSample, Verdict } from "../../schemas/proce
 import { analyseDecay } from "./analyse-decay.ts";
 import { evacuationReached } from "./evacuation-reached.ts";
 
-const DECAY_VERDICT: Record<"held" | "moisture" | "leak", Verdict["verdict"]> = { held: "pass", moisture: "warn", leak: "fail" };
+const DECAY_VERDICT: Record<"held" | "moisture" | "leak", Verdict["verdict"]> = {
+  held: "pass",
+  moisture: "warn",
+  leak: "fail",
+};
 
 /**
  * The evacuation so far: whether the pull-down reached the target and, once the pump is valved
@@ -15,9 +19,12 @@ export function evacuationResult(
   isolatedAtMinutes: number | null,
   limits: ProcedureLimits = {},
 ): EvacuationResult {
-  const pullDown = isolatedAtMinutes === null ? samples : samples.filter((sample) => sample.minutes <= isolatedAtMinutes);
-  const reached = pullDown.length > 0 ? evacuationReached(pullDown, targetMicrons) : { reached: false, atMinutes: null };
-  if (isolatedAtMinutes === null) return { stage: "pulling-down", reached, decay: null, decayMinutes: null, overall: null };
+  const pullDown =
+    isolatedAtMinutes === null ? samples : samples.filter((sample) => sample.minutes <= isolatedAtMinutes);
+  const reached =
+    pullDown.length > 0 ? evacuationReached(pullDown, targetMicrons) : { reached: false, atMinutes: null };
+  if (isolatedAtMinutes === null)
+    return { stage: "pulling-down", reached, decay: null, decayMinutes: null, overall: null };
 
   const decaySamples = samples.filter((sample) => sample.minutes >= isolatedAtMinutes);
   if (decaySamples.length < 2) return { stage: "decay-test", reached, decay: null, decayMinutes: null, overall: null };

@@ -11,7 +11,10 @@ export interface LeakSearchFindings {
 // Decay-curve guides say: leak → find it, repair, re-pressure-test [S58][S55]; the order of work
 // itself is common practice. Topping up before the leak is repaired is not allowed under the
 // Australian codes of practice (weak source / memory), so an unrepaired leak fails.
-const SOURCE = citeProcedure(["S58", "S55"], `find, repair and re-test before evacuating and charging (${COMMON_PRACTICE})`);
+const SOURCE = citeProcedure(
+  ["S58", "S55"],
+  `find, repair and re-test before evacuating and charging (${COMMON_PRACTICE})`,
+);
 
 /**
  * Judge a leak search: is the system fit to evacuate and charge?
@@ -48,7 +51,11 @@ export function judgeLeakSearch(findings: LeakSearchFindings): Verdict {
     };
   }
   if (findings.recheck === "not-done") {
-    return { verdict: "warn", reason: `${plural(found)} repaired but not rechecked yet: recheck before evacuating.`, source: SOURCE };
+    return {
+      verdict: "warn",
+      reason: `${plural(found)} repaired but not rechecked yet: recheck before evacuating.`,
+      source: SOURCE,
+    };
   }
   return { verdict: "pass", reason: `${plural(found)} found, repaired and tight on recheck.`, source: SOURCE };
 }

@@ -16,8 +16,14 @@ export const STANDING_PRESSURE_TOLERANCE_K = 1;
 /** Glide at the equalised temperature above which a blend is treated as zeotropic, K. */
 const ZEOTROPE_GLIDE_K = 0.5;
 
-const SOURCE = citeProcedure(["S27", "S28", "S31"], `±${STANDING_PRESSURE_TOLERANCE_K} K for thermometer and gauge (${COMMON_PRACTICE})`);
-const BLEND_SOURCE = citeProcedure(["S27", "S31", "S1"], `a blend's standing pressure lies between its dew and bubble pressures (${COMMON_PRACTICE})`);
+const SOURCE = citeProcedure(
+  ["S27", "S28", "S31"],
+  `±${STANDING_PRESSURE_TOLERANCE_K} K for thermometer and gauge (${COMMON_PRACTICE})`,
+);
+const BLEND_SOURCE = citeProcedure(
+  ["S27", "S31", "S1"],
+  `a blend's standing pressure lies between its dew and bubble pressures (${COMMON_PRACTICE})`,
+);
 
 /**
  * Non-condensables check from the off-cycle standing pressure: with the unit stopped and the
@@ -43,13 +49,15 @@ const BLEND_SOURCE = citeProcedure(["S27", "S31", "S1"], `a blend's standing pre
 export function judgeStandingPressure(input: StandingPressureInput): StandingPressureResult {
   const atmosphere = input.atmosphericPressureKPa ?? STANDARD_ATMOSPHERE_KPA;
   const { refrigerant, standingGaugeKPa, equalisedTempC } = input;
-  if (![standingGaugeKPa, equalisedTempC, atmosphere].every(Number.isFinite)) throw new RangeError("judgeStandingPressure requires finite readings");
+  if (![standingGaugeKPa, equalisedTempC, atmosphere].every(Number.isFinite))
+    throw new RangeError("judgeStandingPressure requires finite readings");
   const standingAbs = standingGaugeKPa + atmosphere;
   if (!(standingAbs > 0)) throw new RangeError("judgeStandingPressure requires a pressure above a perfect vacuum");
   const info = getRefrigerant(refrigerant);
   const bubbleAbs = saturationPressure(refrigerant, equalisedTempC, "bubble");
   const dewAbs = saturationPressure(refrigerant, equalisedTempC, "dew");
-  const zeotrope = info.kind === "blend" && saturationTemperature(refrigerant, bubbleAbs, "dew") - equalisedTempC > ZEOTROPE_GLIDE_K;
+  const zeotrope =
+    info.kind === "blend" && saturationTemperature(refrigerant, bubbleAbs, "dew") - equalisedTempC > ZEOTROPE_GLIDE_K;
   // Bubble point: the temperature a liquid-holding condenser would be at for this pressure.
   const standingSaturationC = saturationTemperature(refrigerant, standingAbs, "bubble");
   const excessK = standingSaturationC - equalisedTempC;

@@ -13,7 +13,8 @@ export function largestDeviationPercent(values: readonly number[], caller: strin
   if (values.length === 0) throw new RangeError(`${caller} requires at least one reading`);
   let sum = 0;
   for (const value of values) {
-    if (!Number.isFinite(value) || value < 0) throw new RangeError(`${caller} requires finite readings of zero or more`);
+    if (!Number.isFinite(value) || value < 0)
+      throw new RangeError(`${caller} requires finite readings of zero or more`);
     sum += value;
   }
   const mean = sum / values.length;

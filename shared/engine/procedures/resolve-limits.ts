@@ -9,14 +9,18 @@
  * @throws RangeError "resolveLimits requires finite, non-negative limits" for a bad override
  * @example resolveLimits({ a: 2 }, { a: 3 }) // { limits: { a: 3 }, overridden: true }
  */
-export function resolveLimits<T extends Record<string, number>>(defaults: T, override?: Partial<T>): { limits: T; overridden: boolean } {
+export function resolveLimits<T extends Record<string, number>>(
+  defaults: T,
+  override?: Partial<T>,
+): { limits: T; overridden: boolean } {
   if (override === undefined) return { limits: defaults, overridden: false };
   const limits = { ...defaults };
   let overridden = false;
   for (const key of Object.keys(defaults) as (keyof T)[]) {
     const value = override[key];
     if (value === undefined) continue;
-    if (!Number.isFinite(value) || (value as number) < 0) throw new RangeError("resolveLimits requires finite, non-negative limits");
+    if (!Number.isFinite(value) || (value as number) < 0)
+      throw new RangeError("resolveLimits requires finite, non-negative limits");
     if (value !== defaults[key]) overridden = true;
     limits[key] = value as T[keyof T];
   }

@@ -17,15 +17,25 @@ export interface StandingPressureProblem {
  * @example standingPressureOutcome({ refrigerant: "R410A", standingGaugeKPa: 1750, equalisedTempC: 25 }) // { result: { verdict: "fail", … } }
  * @example standingPressureOutcome({ refrigerant: "R410A", standingGaugeKPa: 1750, equalisedTempC: 90 }) // { problem: { field: "equalisedTempC", … } }
  */
-export function standingPressureOutcome(input: StandingPressureInput): { result: StandingPressureResult } | { problem: StandingPressureProblem } {
+export function standingPressureOutcome(
+  input: StandingPressureInput,
+): { result: StandingPressureResult } | { problem: StandingPressureProblem } {
   try {
     return { result: judgeStandingPressure(input) };
   } catch (error) {
-    if (error instanceof RangeError) return { problem: { field: "standingGaugeKPa", message: "The standing pressure is below a perfect vacuum: check the gauge reading" } };
+    if (error instanceof RangeError)
+      return {
+        problem: {
+          field: "standingGaugeKPa",
+          message: "The standing pressure is below a perfect vacuum: check the gauge reading",
+        },
+      };
     if (!(error instanceof PropertyRangeError)) throw error;
     if (error.code === "UNKNOWN_REFRIGERANT") return { problem: { field: "refrigerant", message: error.message } };
     // The engine looks the temperature up first; if that lookup alone succeeds, the pressure is the one outside the table.
-    return { problem: { field: temperatureInTable(input) ? "standingGaugeKPa" : "equalisedTempC", message: error.message } };
+    return {
+      problem: { field: temperatureInTable(input) ? "standingGaugeKPa" : "equalisedTempC", message: error.message },
+    };
   }
 }
 

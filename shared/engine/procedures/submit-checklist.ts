@@ -71,15 +71,23 @@ const kg = (value: number) => `${Number(value.toFixed(2))} kg`;
 export function submitChecklist(input: SubmitChecklistInput): SubmitChecklistItem[] {
   const items: SubmitChecklistItem[] = [];
   if (input.reason.trim() === "") {
-    items.push({ kind: "missing-reason", blocking: true, message: "Give the reason for the visit: the reviewer and the customer read it first" });
+    items.push({
+      kind: "missing-reason",
+      blocking: true,
+      message: "Give the reason for the visit: the reviewer and the customer read it first",
+    });
   }
 
   const read = new Set(input.readings.filter((reading) => reading.voided === null).map((reading) => reading.circuit));
   for (const circuit of [...input.circuits].sort((a, b) => a - b)) {
-    if (!read.has(circuit)) items.push({ kind: "circuit-without-readings", blocking: false, message: `Circuit ${circuit} has no readings` });
+    if (!read.has(circuit))
+      items.push({ kind: "circuit-without-readings", blocking: false, message: `Circuit ${circuit} has no readings` });
   }
 
-  for (const [group, records] of Object.entries(input.tests) as [keyof SubmitChecklistInput["tests"], readonly JudgedRecord[]][]) {
+  for (const [group, records] of Object.entries(input.tests) as [
+    keyof SubmitChecklistInput["tests"],
+    readonly JudgedRecord[],
+  ][]) {
     for (const record of records) {
       if (record.voided === null && record.verdict === "fail") {
         items.push({ kind: "failed-test", blocking: false, message: `${TEST_NAMES[group]} failed: ${record.reason}` });

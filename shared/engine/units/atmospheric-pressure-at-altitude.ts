@@ -31,7 +31,12 @@ const MAX_ALTITUDE_M = 11_000;
  */
 export function atmosphericPressureAtAltitude(altitudeM: number): number {
   if (!(altitudeM >= MIN_ALTITUDE_M && altitudeM <= MAX_ALTITUDE_M)) {
-    throw new RangeError(`atmosphericPressureAtAltitude requires an altitude from ${MIN_ALTITUDE_M} to ${MAX_ALTITUDE_M} m`);
+    throw new RangeError(
+      `atmosphericPressureAtAltitude requires an altitude from ${MIN_ALTITUDE_M} to ${MAX_ALTITUDE_M} m`,
+    );
   }
-  return STANDARD_ATMOSPHERE_KPA * Math.pow(1 - (LAPSE_RATE_K_PER_M * altitudeM) / SEA_LEVEL_TEMPERATURE_K, BAROMETRIC_EXPONENT);
+  return (
+    STANDARD_ATMOSPHERE_KPA *
+    Math.pow(1 - (LAPSE_RATE_K_PER_M * altitudeM) / SEA_LEVEL_TEMPERATURE_K, BAROMETRIC_EXPONENT)
+  );
 }

@@ -4,8 +4,14 @@ import { ErrorBoundary, type FallbackProps } from "react-error-boundary";
 function PanelFallback({ error, resetErrorBoundary }: FallbackProps) {
   return (
     <div role="alert" className="rounded-card border-2 border-fault bg-surface p-4">
-      <p className="font-semibold text-fault">⚠ This panel failed: {error instanceof Error ? error.message : String(error)}</p>
-      <button type="button" onClick={resetErrorBoundary} className="mt-2 min-h-touch rounded-card border-2 border-rule px-4 font-medium">
+      <p className="font-semibold text-fault">
+        ⚠ This panel failed: {error instanceof Error ? error.message : String(error)}
+      </p>
+      <button
+        type="button"
+        onClick={resetErrorBoundary}
+        className="mt-2 min-h-touch rounded-card border-2 border-rule px-4 font-medium"
+      >
         Try again
       </button>
     </div>

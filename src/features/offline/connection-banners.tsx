@@ -27,12 +27,14 @@ export function ConnectionBanners() {
         <p role="status" className="border-b-2 border-caution bg-surface px-4 py-2 text-sm font-medium">
           {!online && (
             <>
-              <span aria-hidden>⚠ </span>Offline. Visits kept on this device open as usual; entries you save wait here and are sent when the
-              signal returns.{" "}
+              <span aria-hidden>⚠ </span>Offline. Visits kept on this device open as usual; entries you save wait here
+              and are sent when the signal returns.{" "}
             </>
           )}
           {waiting > 0 && <span data-testid="outbox-waiting">{entriesText(waiting)} waiting to send. </span>}
-          {refused > 0 && <span className="text-fault">{entriesText(refused)} refused by the server: see the visit. </span>}
+          {refused > 0 && (
+            <span className="text-fault">{entriesText(refused)} refused by the server: see the visit. </span>
+          )}
         </p>
       )}
       {showUpdate && (

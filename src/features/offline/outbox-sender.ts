@@ -14,7 +14,9 @@ export type SendOutcome = "sent" | "no-connection" | "signed-out";
  * server's answer on the entry: it is marked refused, with the reason, for the technician.
  */
 function isRefusal(error: unknown): error is ApiError {
-  return error instanceof ApiError && error.status >= 400 && error.status < 500 && ![401, 408, 429].includes(error.status);
+  return (
+    error instanceof ApiError && error.status >= 400 && error.status < 500 && ![401, 408, 429].includes(error.status)
+  );
 }
 
 let round: Promise<SendOutcome> | null = null;
@@ -37,7 +39,12 @@ async function sendRound(queryClient: QueryClient, userId: string): Promise<Send
     for (const entry of await entriesOf(userId)) {
       if (entry.state !== "waiting") continue;
       try {
-        await apiRequest(entry.path, entry.file ? { method: "POST", body: formWithFile(entry.body, entry.file), timeoutMs: UPLOAD_TIMEOUT_MS } : { method: "POST", body: entry.body });
+        await apiRequest(
+          entry.path,
+          entry.file
+            ? { method: "POST", body: formWithFile(entry.body, entry.file), timeoutMs: UPLOAD_TIMEOUT_MS }
+            : { method: "POST", body: entry.body },
+        );
         await discardEntry(entry.clientId);
         touched.add(entry.visitId);
       } catch (error) {
@@ -54,12 +61,14 @@ async function sendRound(queryClient: QueryClient, userId: string): Promise<Send
     for (const visitId of touched) {
       void queryClient.invalidateQueries({ queryKey: ["visits", "detail", visitId] });
       void queryClient.invalidateQueries({ queryKey: ["register", "visit", visitId] });
-      for (const kind of PROCEDURE_RECORD_KINDS) void queryClient.invalidateQueries({ queryKey: procedureRecordsKey(kind, visitId) });
+      for (const kind of PROCEDURE_RECORD_KINDS)
+        void queryClient.invalidateQueries({ queryKey: procedureRecordsKey(kind, visitId) });
     }
     if (touched.size > 0) {
       void queryClient.invalidateQueries({ queryKey: ["visits", "list"] });
       // A reading may set a charge reference; an adjustment of charge moves a cylinder's contents.
-      for (const kind of ["charge-references", "cylinders", "equipment"]) void queryClient.invalidateQueries({ queryKey: [kind] });
+      for (const kind of ["charge-references", "cylinders", "equipment"])
+        void queryClient.invalidateQueries({ queryKey: [kind] });
     }
   }
 }

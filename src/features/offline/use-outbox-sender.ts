@@ -19,7 +19,10 @@ export function useOutboxSender(entries: OutboxEntry[]): void {
   const queryClient = useQueryClient();
   const userId = useMe().data?.id;
   const online = useOnlineStatus();
-  const waiting = entries.filter((entry) => entry.state === "waiting").map((entry) => entry.clientId).join(" ");
+  const waiting = entries
+    .filter((entry) => entry.state === "waiting")
+    .map((entry) => entry.clientId)
+    .join(" ");
   useEffect(() => {
     if (!userId || !online || !waiting) return;
     let stopped = false;

@@ -1,6 +1,13 @@
 import { useCallback, useSyncExternalStore } from "react";
 import { useMe } from "@/lib/api/auth.ts";
-import { OUTBOX_KIND_LABELS, watchEntries, sendOrKeep, type OutboxEntry, type OutboxFile, type OutboxKind } from "./outbox-store.ts";
+import {
+  OUTBOX_KIND_LABELS,
+  watchEntries,
+  sendOrKeep,
+  type OutboxEntry,
+  type OutboxFile,
+  type OutboxKind,
+} from "./outbox-store.ts";
 
 const NONE: OutboxEntry[] = [];
 
@@ -42,7 +49,10 @@ function watchShared(userId: string, listener: () => void): () => void {
 export function useOutboxEntries(): OutboxEntry[] {
   const userId = useMe().data?.id;
   // Keyed by whose they are, so that another person's never show while theirs load.
-  const subscribe = useCallback((listener: () => void) => (userId ? watchShared(userId, listener) : () => undefined), [userId]);
+  const subscribe = useCallback(
+    (listener: () => void) => (userId ? watchShared(userId, listener) : () => undefined),
+    [userId],
+  );
   return useSyncExternalStore(subscribe, () => (userId ? (watches.get(userId)?.entries ?? NONE) : NONE));
 }
 

@@ -19,7 +19,9 @@ export function readTheme(): Theme {
 
 export function applyTheme(theme: Theme): void {
   document.documentElement.dataset.theme = theme;
-  document.querySelector('meta[name="theme-color"]')?.setAttribute("content", theme === "sunlight" ? "#ffffff" : "#f4efe4");
+  document
+    .querySelector('meta[name="theme-color"]')
+    ?.setAttribute("content", theme === "sunlight" ? "#ffffff" : "#f4efe4");
 }
 
 export function setTheme(theme: Theme): void {

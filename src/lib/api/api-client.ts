@@ -95,7 +95,10 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
   if (ifNoneMatch !== undefined) headers["If-None-Match"] = ifNoneMatch;
   const write = method !== "GET";
   if (write && typeof navigator !== "undefined" && navigator.onLine === false) {
-    throw new ApiError(0, "No connection: nothing was saved. Your values are kept here; save again when the signal is back.");
+    throw new ApiError(
+      0,
+      "No connection: nothing was saved. Your values are kept here; save again when the signal is back.",
+    );
   }
   let response: Response;
   try {
@@ -109,10 +112,16 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
   } catch (error) {
     const name = (error as Error).name;
     if (name === "TimeoutError") {
-      throw new ApiError(0, `No answer from the Satura server within ${timeoutMs / 1000} s, so this was not confirmed saved. Your values are kept; check the list before saving again.`);
+      throw new ApiError(
+        0,
+        `No answer from the Satura server within ${timeoutMs / 1000} s, so this was not confirmed saved. Your values are kept; check the list before saving again.`,
+      );
     }
     if (name === "AbortError") throw error;
-    throw new ApiError(0, "No connection to the Satura server: nothing was confirmed saved. Check the network and try again.");
+    throw new ApiError(
+      0,
+      "No connection to the Satura server: nothing was confirmed saved. Check the network and try again.",
+    );
   }
 
   if (response.status === 204 || (response.status === 304 && ifNoneMatch !== undefined)) return undefined as T;
@@ -129,7 +138,10 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
 }
 
 /** A multipart body: the text fields (empty ones left out), then the file under its field name. */
-export function formWithFile(fields: Record<string, unknown>, file: { field: string; blob: Blob; name: string }): FormData {
+export function formWithFile(
+  fields: Record<string, unknown>,
+  file: { field: string; blob: Blob; name: string },
+): FormData {
   const form = new FormData();
   for (const [name, value] of Object.entries(fields)) {
     if (value !== undefined && value !== null && value !== "") form.append(name, String(value));

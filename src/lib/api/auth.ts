@@ -90,5 +90,7 @@ export function useSignOut() {
   });
 }
 
-export const useRequestPasswordReset = () => useMutation({ mutationFn: requestPasswordReset, meta: { silentErrors: true } });
-export const useConfirmPasswordReset = () => useMutation({ mutationFn: confirmPasswordReset, meta: { silentErrors: true } });
+export const useRequestPasswordReset = () =>
+  useMutation({ mutationFn: requestPasswordReset, meta: { silentErrors: true } });
+export const useConfirmPasswordReset = () =>
+  useMutation({ mutationFn: confirmPasswordReset, meta: { silentErrors: true } });

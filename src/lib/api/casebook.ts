@@ -36,12 +36,22 @@ export async function createCase(draft: CaseDraftInput): Promise<Case> {
 }
 
 /** Saves a case over the version the editor opened (409 when someone saved since). */
-export async function updateCase({ id, draft, version }: { id: string; draft: CaseDraftInput; version: number }): Promise<Case> {
-  return (await apiRequest(caseUrl(id), { method: "PUT", body: draft, schema: CaseEnvelopeSchema, ifMatch: version })).case;
+export async function updateCase({
+  id,
+  draft,
+  version,
+}: {
+  id: string;
+  draft: CaseDraftInput;
+  version: number;
+}): Promise<Case> {
+  return (await apiRequest(caseUrl(id), { method: "PUT", body: draft, schema: CaseEnvelopeSchema, ifMatch: version }))
+    .case;
 }
 
 export async function publishCase({ id, version }: { id: string; version: number }): Promise<Case> {
-  return (await apiRequest(`${caseUrl(id)}/publish`, { method: "POST", schema: CaseEnvelopeSchema, ifMatch: version })).case;
+  return (await apiRequest(`${caseUrl(id)}/publish`, { method: "POST", schema: CaseEnvelopeSchema, ifMatch: version }))
+    .case;
 }
 
 export async function createCaseFromReading(readingId: string): Promise<Case> {

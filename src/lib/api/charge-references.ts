@@ -11,12 +11,28 @@ export function getChargeReferences(equipmentId: string, signal?: AbortSignal): 
   return apiRequest(`/equipment/${equipmentId}/charge-references`, { schema: ChargeReferencesResponseSchema, signal });
 }
 
-export function updateChargeReference(equipmentId: string, circuit: number, body: ChargeReferenceSet): Promise<ChargeReferencesResponse> {
-  return apiRequest(`/equipment/${equipmentId}/charge-references/${circuit}`, { method: "PUT", body, schema: ChargeReferencesResponseSchema });
+export function updateChargeReference(
+  equipmentId: string,
+  circuit: number,
+  body: ChargeReferenceSet,
+): Promise<ChargeReferencesResponse> {
+  return apiRequest(`/equipment/${equipmentId}/charge-references/${circuit}`, {
+    method: "PUT",
+    body,
+    schema: ChargeReferencesResponseSchema,
+  });
 }
 
-export function deleteChargeReference(equipmentId: string, circuit: number, body: ChargeReferenceClear): Promise<ChargeReferencesResponse> {
-  return apiRequest(`/equipment/${equipmentId}/charge-references/${circuit}`, { method: "DELETE", body, schema: ChargeReferencesResponseSchema });
+export function deleteChargeReference(
+  equipmentId: string,
+  circuit: number,
+  body: ChargeReferenceClear,
+): Promise<ChargeReferencesResponse> {
+  return apiRequest(`/equipment/${equipmentId}/charge-references/${circuit}`, {
+    method: "DELETE",
+    body,
+    schema: ChargeReferencesResponseSchema,
+  });
 }
 
 export const chargeReferencesQueryOptions = (equipmentId: string) =>
@@ -32,7 +48,8 @@ export const useChargeReferences = (equipmentId: string) => useQuery(chargeRefer
 export function useSetChargeReference(equipmentId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ circuit, body }: { circuit: number; body: ChargeReferenceSet }) => updateChargeReference(equipmentId, circuit, body),
+    mutationFn: ({ circuit, body }: { circuit: number; body: ChargeReferenceSet }) =>
+      updateChargeReference(equipmentId, circuit, body),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ["charge-references", "equipment", equipmentId] }),
   });
 }
@@ -40,7 +57,8 @@ export function useSetChargeReference(equipmentId: string) {
 export function useClearChargeReference(equipmentId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ circuit, body }: { circuit: number; body: ChargeReferenceClear }) => deleteChargeReference(equipmentId, circuit, body),
+    mutationFn: ({ circuit, body }: { circuit: number; body: ChargeReferenceClear }) =>
+      deleteChargeReference(equipmentId, circuit, body),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ["charge-references", "equipment", equipmentId] }),
   });
 }

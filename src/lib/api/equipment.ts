@@ -54,7 +54,8 @@ export const equipmentDetailQueryOptions = (id: string) =>
     enabled: id !== "",
   });
 
-export const sitesQueryOptions = () => queryOptions({ queryKey: ["sites", "list"], queryFn: ({ signal }) => getSites(signal) });
+export const sitesQueryOptions = () =>
+  queryOptions({ queryKey: ["sites", "list"], queryFn: ({ signal }) => getSites(signal) });
 
 /** A page of units; while the next page (or another search) loads, the last one stays on screen. */
 export const useEquipmentList = (params: EquipmentListParams = {}, { enabled = true } = {}) =>
@@ -71,7 +72,9 @@ export function useCreateEquipment() {
 }
 
 export async function createCustomer(values: CustomerInput): Promise<Customer> {
-  return (await apiRequest("/customers", { method: "POST", body: values, schema: z.object({ customer: CustomerSchema }) })).customer;
+  return (
+    await apiRequest("/customers", { method: "POST", body: values, schema: z.object({ customer: CustomerSchema }) })
+  ).customer;
 }
 
 export async function createSite(values: SiteInput): Promise<Site> {

@@ -17,7 +17,8 @@ export async function getInvitations(signal?: AbortSignal): Promise<Invitation[]
 }
 
 export async function createInvitation(input: CreateInvitation): Promise<Invitation> {
-  return (await apiRequest("/invitations", { method: "POST", body: input, schema: InvitationResponseSchema })).invitation;
+  return (await apiRequest("/invitations", { method: "POST", body: input, schema: InvitationResponseSchema }))
+    .invitation;
 }
 
 export function revokeInvitation(id: string): Promise<void> {
@@ -26,7 +27,12 @@ export function revokeInvitation(id: string): Promise<void> {
 
 /** The token goes in a POST body so it never appears in server logs. */
 export function previewInvitation(token: string, signal?: AbortSignal): Promise<InvitationPreview> {
-  return apiRequest("/invitations/preview", { method: "POST", body: { token }, schema: InvitationPreviewSchema, signal });
+  return apiRequest("/invitations/preview", {
+    method: "POST",
+    body: { token },
+    schema: InvitationPreviewSchema,
+    signal,
+  });
 }
 
 export async function acceptInvitation(input: AcceptInvitation): Promise<AuthUser> {
@@ -48,7 +54,8 @@ export const invitationPreviewQueryOptions = (token: string) =>
   });
 
 export const useInvitations = (enabled = true) => useQuery({ ...invitationsQueryOptions(), enabled });
-export const useInvitationPreview = (token: string) => useQuery({ ...invitationPreviewQueryOptions(token), enabled: token.length > 0 });
+export const useInvitationPreview = (token: string) =>
+  useQuery({ ...invitationPreviewQueryOptions(token), enabled: token.length > 0 });
 
 export function useCreateInvitation() {
   const queryClient = useQueryClient();

@@ -28,7 +28,11 @@ export function useUpdateMemberRole() {
   return useMutation({
     mutationFn: updateMemberRole,
     // A changed role may be the viewer's own: refresh the session too.
-    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: ["members"] }), queryClient.invalidateQueries({ queryKey: ["auth"] })]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: ["members"] }),
+        queryClient.invalidateQueries({ queryKey: ["auth"] }),
+      ]),
   });
 }
 

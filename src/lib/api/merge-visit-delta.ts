@@ -35,7 +35,8 @@ function withinHeldRange(held: Visit) {
     if (!(ms >= (oldest.get(row.circuit) ?? Infinity))) oldest.set(row.circuit, ms);
   }
   const paged = new Set(held.circuitLogs.filter((log) => log.olderCursor !== null).map((log) => log.circuit));
-  return (row: Visit["readings"][number]) => known.has(row.id) || !paged.has(row.circuit) || Date.parse(row.takenAt) >= (oldest.get(row.circuit) ?? -Infinity);
+  return (row: Visit["readings"][number]) =>
+    known.has(row.id) || !paged.has(row.circuit) || Date.parse(row.takenAt) >= (oldest.get(row.circuit) ?? -Infinity);
 }
 
 /**
@@ -46,7 +47,9 @@ export function mergeReadingsPage(held: Visit, circuit: number, page: ReadingsPa
   return {
     ...held,
     readings: mergeById(held.readings, page.readings, (row) => row.takenAt),
-    circuitLogs: held.circuitLogs.map((log) => (log.circuit === circuit ? { ...log, olderCursor: page.olderCursor } : log)),
+    circuitLogs: held.circuitLogs.map((log) =>
+      log.circuit === circuit ? { ...log, olderCursor: page.olderCursor } : log,
+    ),
   };
 }
 
@@ -78,5 +81,7 @@ function mergeById<T extends { id: string }>(held: T[], changed: T[], timeOf: (r
   // Usually the new records are the latest; a reading entered with an earlier time (or an
   // imported series, or a page of older readings) goes in its place. The sort is stable: equal
   // times keep their stored order.
-  return last === undefined || added.every((row) => ms(row) >= ms(last)) ? combined : combined.sort((a, b) => ms(a) - ms(b));
+  return last === undefined || added.every((row) => ms(row) >= ms(last))
+    ? combined
+    : combined.sort((a, b) => ms(a) - ms(b));
 }

@@ -1,5 +1,9 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { ProcedureSettingsResponseSchema, type ProcedureSettingsResponse, type ProcedureSettingsUpdate } from "@shared/schemas/procedure-records.ts";
+import {
+  ProcedureSettingsResponseSchema,
+  type ProcedureSettingsResponse,
+  type ProcedureSettingsUpdate,
+} from "@shared/schemas/procedure-records.ts";
 import { apiRequest } from "./api-client.ts";
 
 export function getOrganisationSettings(signal?: AbortSignal): Promise<ProcedureSettingsResponse> {
@@ -7,8 +11,16 @@ export function getOrganisationSettings(signal?: AbortSignal): Promise<Procedure
 }
 
 /** Changes only the fields given, over the version the page showed (409 when someone saved since). */
-export function updateOrganisationSettings({ version, ...update }: ProcedureSettingsUpdate & { version: number }): Promise<ProcedureSettingsResponse> {
-  return apiRequest("/organisation/settings", { method: "PATCH", body: update, schema: ProcedureSettingsResponseSchema, ifMatch: version });
+export function updateOrganisationSettings({
+  version,
+  ...update
+}: ProcedureSettingsUpdate & { version: number }): Promise<ProcedureSettingsResponse> {
+  return apiRequest("/organisation/settings", {
+    method: "PATCH",
+    body: update,
+    schema: ProcedureSettingsResponseSchema,
+    ifMatch: version,
+  });
 }
 
 export const organisationSettingsQueryOptions = () =>

@@ -17,7 +17,8 @@ export function createQueryClient(): QueryClient {
     queryCache: new QueryCache({
       onError: (error, query) => {
         // Offline, the bar at the top already says so; the screen keeps what it shows.
-        if (query.state.data !== undefined && (typeof navigator === "undefined" || navigator.onLine)) toastError(`Could not refresh: ${error.message}`);
+        if (query.state.data !== undefined && (typeof navigator === "undefined" || navigator.onLine))
+          toastError(`Could not refresh: ${error.message}`);
       },
     }),
     mutationCache: new MutationCache({

@@ -54,8 +54,20 @@ export function createMovement({ visitId, ...body }: MovementCreate & { visitId:
 }
 
 /** Declares a full weigh-in of a circuit with its line adjustment (withdrawing one is a void). */
-export function setCharging({ visitId, circuit, value }: { visitId: string; circuit: number; value: ChargingUpdate }): Promise<VisitRefrigerant> {
-  return apiRequest(`/visits/${visitId}/refrigerant/charging/${circuit}`, { method: "PUT", body: value, schema: VisitRefrigerantSchema });
+export function setCharging({
+  visitId,
+  circuit,
+  value,
+}: {
+  visitId: string;
+  circuit: number;
+  value: ChargingUpdate;
+}): Promise<VisitRefrigerant> {
+  return apiRequest(`/visits/${visitId}/refrigerant/charging/${circuit}`, {
+    method: "PUT",
+    body: value,
+    schema: VisitRefrigerantSchema,
+  });
 }
 
 export function getEquipmentRefrigerant(equipmentId: string, signal?: AbortSignal): Promise<EquipmentRefrigerant> {
@@ -80,10 +92,16 @@ export const cylinderQueryOptions = (id: string) =>
   queryOptions({ queryKey: ["cylinders", "detail", id], queryFn: ({ signal }) => getCylinder(id, signal) });
 
 export const visitRefrigerantQueryOptions = (visitId: string) =>
-  queryOptions({ queryKey: ["register", "visit", visitId], queryFn: ({ signal }) => getVisitRefrigerant(visitId, signal) });
+  queryOptions({
+    queryKey: ["register", "visit", visitId],
+    queryFn: ({ signal }) => getVisitRefrigerant(visitId, signal),
+  });
 
 export const equipmentRefrigerantQueryOptions = (equipmentId: string) =>
-  queryOptions({ queryKey: ["register", "equipment", equipmentId], queryFn: ({ signal }) => getEquipmentRefrigerant(equipmentId, signal) });
+  queryOptions({
+    queryKey: ["register", "equipment", equipmentId],
+    queryFn: ({ signal }) => getEquipmentRefrigerant(equipmentId, signal),
+  });
 
 /** The key holds every parameter, cursor included: each page of each period is its own entry. */
 export const registerQueryOptions = (params: RegisterPageParams) =>
@@ -94,7 +112,8 @@ export const useCylinder = (id: string) => useQuery(cylinderQueryOptions(id));
 export const useVisitRefrigerant = (visitId: string) => useQuery(visitRefrigerantQueryOptions(visitId));
 export const useEquipmentRefrigerant = (equipmentId: string) => useQuery(equipmentRefrigerantQueryOptions(equipmentId));
 /** A page of the register; while the next page (or another period) loads, the last one stays on screen. */
-export const useRegister = (params: RegisterPageParams) => useQuery({ ...registerQueryOptions(params), placeholderData: keepPreviousData });
+export const useRegister = (params: RegisterPageParams) =>
+  useQuery({ ...registerQueryOptions(params), placeholderData: keepPreviousData });
 
 /**
  * Every register change moves cylinder contents and balances: refresh both families. A weigh-in

@@ -36,7 +36,11 @@ export async function prefetchRefrigerantScreen(queryClient: QueryClient, refrig
 }
 
 /** A casebook case, to answer or to edit: the case and its refrigerant's table. */
-export async function prefetchCaseScreen(queryClient: QueryClient, caseId: string | undefined, fallbackRefrigerant: string): Promise<null> {
+export async function prefetchCaseScreen(
+  queryClient: QueryClient,
+  caseId: string | undefined,
+  fallbackRefrigerant: string,
+): Promise<null> {
   if (!caseId) {
     await ensureRefrigerantTable(queryClient, fallbackRefrigerant);
     return null;

@@ -42,13 +42,20 @@ export async function getVisits(params: VisitListParams = {}, signal?: AbortSign
  */
 export async function getVisit(id: string, signal?: AbortSignal, held?: Visit): Promise<Visit> {
   if (!held) return (await apiRequest(`/visits/${id}`, { schema: VisitEnvelopeSchema, signal })).visit;
-  const answer = await apiRequest(`/visits/${id}?since=${encodeURIComponent(held.revision)}`, { schema: VisitDetailResponseSchema, signal, ifNoneMatch: `W/"${held.revision}"` });
+  const answer = await apiRequest(`/visits/${id}?since=${encodeURIComponent(held.revision)}`, {
+    schema: VisitDetailResponseSchema,
+    signal,
+    ifNoneMatch: `W/"${held.revision}"`,
+  });
   if (answer === undefined) return held;
   return "delta" in answer ? mergeVisitDelta(held, answer.delta) : answer.visit;
 }
 
 /** A page of one circuit's readings taken before the reading `before` (see circuitLogs' olderCursor). */
-export async function getVisitReadings({ visitId, circuit, before, limit }: ReadingsPageQuery & { visitId: string }, signal?: AbortSignal): Promise<ReadingsPage> {
+export async function getVisitReadings(
+  { visitId, circuit, before, limit }: ReadingsPageQuery & { visitId: string },
+  signal?: AbortSignal,
+): Promise<ReadingsPage> {
   const query = new URLSearchParams({ circuit: String(circuit), before, ...(limit ? { limit: String(limit) } : {}) });
   return apiRequest(`/visits/${visitId}/readings?${query}`, { schema: ReadingsPageSchema, signal });
 }
@@ -62,18 +69,36 @@ export const readingsPath = (visitId: string) => `/visits/${visitId}/readings`;
 export const adjustmentsPath = (visitId: string) => `/visits/${visitId}/adjustments`;
 
 export async function createReading({ visitId, ...body }: ReadingBody & { visitId: string }) {
-  return (await apiRequest(readingsPath(visitId), { method: "POST", body, schema: z.object({ reading: ReadingSchema }) })).reading;
+  return (
+    await apiRequest(readingsPath(visitId), { method: "POST", body, schema: z.object({ reading: ReadingSchema }) })
+  ).reading;
 }
 
 export async function createAdjustment({ visitId, ...body }: AdjustmentCreate & { visitId: string }) {
-  return (await apiRequest(adjustmentsPath(visitId), { method: "POST", body, schema: z.object({ adjustment: AdjustmentSchema }) })).adjustment;
+  return (
+    await apiRequest(adjustmentsPath(visitId), {
+      method: "POST",
+      body,
+      schema: z.object({ adjustment: AdjustmentSchema }),
+    })
+  ).adjustment;
 }
 
 /** Where a visit's comments are posted. */
 export const commentsPath = (visitId: string) => `/visits/${visitId}/comments`;
 
-export async function createComment({ visitId, ...body }: { visitId: string; body: string; readingId?: string | null; clientId?: string }) {
-  return (await apiRequest(commentsPath(visitId), { method: "POST", body, schema: z.object({ comment: CommentSchema }) })).comment;
+export async function createComment({
+  visitId,
+  ...body
+}: {
+  visitId: string;
+  body: string;
+  readingId?: string | null;
+  clientId?: string;
+}) {
+  return (
+    await apiRequest(commentsPath(visitId), { method: "POST", body, schema: z.object({ comment: CommentSchema }) })
+  ).comment;
 }
 
 /** Voids one of the visit's records with a reason (it stays on the record, struck through). */
@@ -81,11 +106,13 @@ export async function createComment({ visitId, ...body }: { visitId: string; bod
 export const voidsPath = (visitId: string) => `/visits/${visitId}/voids`;
 
 export async function voidRecord({ visitId, ...body }: VoidBody & { visitId: string }) {
-  return (await apiRequest(voidsPath(visitId), { method: "POST", body, schema: z.object({ event: VisitEventSchema }) })).event;
+  return (await apiRequest(voidsPath(visitId), { method: "POST", body, schema: z.object({ event: VisitEventSchema }) }))
+    .event;
 }
 
 export async function reviewVisit({ visitId, ...action }: ReviewAction & { visitId: string }): Promise<Visit> {
-  return (await apiRequest(`/visits/${visitId}/review`, { method: "POST", body: action, schema: VisitEnvelopeSchema })).visit;
+  return (await apiRequest(`/visits/${visitId}/review`, { method: "POST", body: action, schema: VisitEnvelopeSchema }))
+    .visit;
 }
 
 /** Where a visit's photos are sent. */
@@ -103,11 +130,30 @@ export interface PhotoFields {
 /** Photos go as multipart form data, with the JSON wrapper's errors. */
 export async function uploadPhoto({ visitId, file, ...fields }: PhotoFields & { visitId: string; file: File }) {
   const body = formWithFile({ ...fields }, { field: "photo", blob: file, name: file.name });
-  return (await apiRequest(photosPath(visitId), { method: "POST", body, timeoutMs: UPLOAD_TIMEOUT_MS, schema: z.object({ photo: PhotoSchema }) })).photo;
+  return (
+    await apiRequest(photosPath(visitId), {
+      method: "POST",
+      body,
+      timeoutMs: UPLOAD_TIMEOUT_MS,
+      schema: z.object({ photo: PhotoSchema }),
+    })
+  ).photo;
 }
 
 /** Previews or stores a CSV series; a 422 (problems, nothing stored) still returns its summary. */
-export async function importReadings({ visitId, file, circuit, mode, mapping }: { visitId: string; file: File; circuit: number; mode: "preview" | "all" | "valid-only"; mapping?: Record<string, string> }): Promise<ImportSummary> {
+export async function importReadings({
+  visitId,
+  file,
+  circuit,
+  mode,
+  mapping,
+}: {
+  visitId: string;
+  file: File;
+  circuit: number;
+  mode: "preview" | "all" | "valid-only";
+  mapping?: Record<string, string>;
+}): Promise<ImportSummary> {
   const form = new FormData();
   form.append("circuit", String(circuit));
   const day = new Date();
@@ -121,15 +167,24 @@ export async function importReadings({ visitId, file, circuit, mode, mapping }: 
   form.append("mode", mode);
   if (mapping) form.append("mapping", JSON.stringify(mapping));
   form.append("file", file);
-  const response = await fetch(`/api/visits/${visitId}/readings/import`, { method: "POST", body: form, credentials: "same-origin" });
+  const response = await fetch(`/api/visits/${visitId}/readings/import`, {
+    method: "POST",
+    body: form,
+    credentials: "same-origin",
+  });
   const payload = (await response.json().catch(() => ({}))) as { message?: string; fields?: Record<string, string> };
-  if (!response.ok && response.status !== 422) throw new ApiError(response.status, payload.message ?? `Import failed (${response.status})`, payload.fields ?? {});
+  if (!response.ok && response.status !== 422)
+    throw new ApiError(response.status, payload.message ?? `Import failed (${response.status})`, payload.fields ?? {});
   return ImportSummarySchema.parse(payload);
 }
 
 export function sendReport({ visitId, to }: { visitId: string; to: string }): Promise<{ sentTo: string }> {
   // The sender's zone, so the e-mail's times match the report on their screen.
-  return apiRequest(`/visits/${visitId}/report/send`, { method: "POST", body: { to, timeZone: viewerTimeZone() }, schema: z.object({ sentTo: z.string() }) });
+  return apiRequest(`/visits/${visitId}/report/send`, {
+    method: "POST",
+    body: { to, timeZone: viewerTimeZone() },
+    schema: z.object({ sentTo: z.string() }),
+  });
 }
 
 const IN_PROGRESS = "open,sent-back";
@@ -180,7 +235,8 @@ function useVisitMutation<TVariables extends { visitId: string }, TResult>(
 export const useCreateReading = () => useVisitMutation(createReading, [["charge-references"]], { silentErrors: true });
 // A charge adjustment is also a register movement: the visit's refrigerant and the cylinders change with it.
 // Without a connection the form keeps it in the device's outbox (src/features/offline/outbox-store.ts).
-export const useCreateAdjustment = () => useVisitMutation(createAdjustment, [["register"], ["cylinders"], ["equipment"]], { keptOffline: true });
+export const useCreateAdjustment = () =>
+  useVisitMutation(createAdjustment, [["register"], ["cylinders"], ["equipment"]], { keptOffline: true });
 export const useCreateComment = () => useVisitMutation(createComment);
 export const useReviewVisit = () => useVisitMutation(reviewVisit);
 
@@ -214,7 +270,9 @@ export function useEarlierReadings() {
   return useMutation({
     mutationFn: (variables: { visitId: string; circuit: number; before: string }) => getVisitReadings(variables),
     onSuccess: (page, { visitId, circuit }) =>
-      queryClient.setQueryData<Visit>(["visits", "detail", visitId], (held) => (held ? mergeReadingsPage(held, circuit, page) : held)),
+      queryClient.setQueryData<Visit>(["visits", "detail", visitId], (held) =>
+        held ? mergeReadingsPage(held, circuit, page) : held,
+      ),
   });
 }
 export const useUploadPhoto = () => useVisitMutation(uploadPhoto);
@@ -225,6 +283,10 @@ export function useCreateVisit() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createVisit,
-    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: ["visits"] }), queryClient.invalidateQueries({ queryKey: ["equipment"] })]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: ["visits"] }),
+        queryClient.invalidateQueries({ queryKey: ["equipment"] }),
+      ]),
   });
 }

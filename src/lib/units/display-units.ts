@@ -22,8 +22,18 @@ export const METRIC_UNITS: DisplayUnits = { temperature: "C", pressure: "kPa" };
 export const TEMPERATURE_LABEL: Record<TemperatureDisplayUnit, string> = { C: "°C", F: "°F" };
 export const DIFFERENCE_LABEL: Record<TemperatureDisplayUnit, string> = { C: "K", F: "°F" };
 /** Gauge pressures are marked as such; "psig" is the trade's own spelling. */
-export const GAUGE_LABEL: Record<PressureDisplayUnit, string> = { kPa: "kPa g", psi: "psig", bar: "bar g", MPa: "MPa g" };
-export const ABSOLUTE_LABEL: Record<PressureDisplayUnit, string> = { kPa: "kPa abs", psi: "psia", bar: "bar abs", MPa: "MPa abs" };
+export const GAUGE_LABEL: Record<PressureDisplayUnit, string> = {
+  kPa: "kPa g",
+  psi: "psig",
+  bar: "bar g",
+  MPa: "MPa g",
+};
+export const ABSOLUTE_LABEL: Record<PressureDisplayUnit, string> = {
+  kPa: "kPa abs",
+  psi: "psia",
+  bar: "bar abs",
+  MPa: "MPa abs",
+};
 
 /** Decimals that match what a gauge of that unit can be read to. */
 export const PRESSURE_DECIMALS: Record<PressureDisplayUnit, number> = { kPa: 0, psi: 1, bar: 2, MPa: 3 };

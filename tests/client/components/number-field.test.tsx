@@ -70,7 +70,11 @@ describe("NumberField", () => {
       const form = useForm<{ t: unknown }>();
       return (
         <form onSubmit={form.handleSubmit((values) => void (submitted = values.t))}>
-          <NumberField label="Box temperature" unit="°C" registration={form.register("t", { setValueAs: typedNumber })} />
+          <NumberField
+            label="Box temperature"
+            unit="°C"
+            registration={form.register("t", { setValueAs: typedNumber })}
+          />
           <button type="submit">Save</button>
         </form>
       );
@@ -84,7 +88,8 @@ describe("NumberField", () => {
 
   it("offers the button on temperatures and gauge pressures, not on masses, microns or absolute pressures", () => {
     for (const unit of ["°C", "°F", "kPa g", "psig", "bar g", "MPa g"]) expect(unitCanBeNegative(unit)).toBe(true);
-    for (const unit of ["kg", "µm", "kPa abs", "psia", "min", "V", "A", "K", ""]) expect(unitCanBeNegative(unit)).toBe(false);
+    for (const unit of ["kg", "µm", "kPa abs", "psia", "min", "V", "A", "K", ""])
+      expect(unitCanBeNegative(unit)).toBe(false);
     render(<NumberField label="Mass" unit="kg" />);
     expect(screen.queryByRole("button", { name: SIGN })).not.toBeInTheDocument();
   });

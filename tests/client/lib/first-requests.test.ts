@@ -6,7 +6,13 @@ import { startFirstRequests } from "@/lib/api/first-requests.ts";
 
 const VISIT_ID = "00000000-0000-4000-8000-000000000100";
 const UNIT_ID = "00000000-0000-4000-8000-000000000101";
-const USER = { id: "00000000-0000-4000-8000-000000000007", email: "tech@bellbird.example", name: "Sam Toko", role: "technician", organisationId: "00000000-0000-4000-8000-000000000001" };
+const USER = {
+  id: "00000000-0000-4000-8000-000000000007",
+  email: "tech@bellbird.example",
+  name: "Sam Toko",
+  role: "technician",
+  organisationId: "00000000-0000-4000-8000-000000000001",
+};
 
 /** A server that answers every GET with `{ path }`, and /api/auth/me with 401; counts what was asked. */
 function stubServer() {
@@ -17,7 +23,10 @@ function stubServer() {
       const url = String(input);
       asked.push(url);
       if (url === "/api/auth/me") return new Response(JSON.stringify({ message: "Sign in first" }), { status: 401 });
-      return new Response(JSON.stringify({ path: url }), { status: 200, headers: { "Content-Type": "application/json" } });
+      return new Response(JSON.stringify({ path: url }), {
+        status: 200,
+        headers: { "Content-Type": "application/json" },
+      });
     }),
   );
   return asked;
@@ -31,7 +40,9 @@ describe("startEarlyRequest", () => {
     const asked = stubServer();
     startEarlyRequest(`/visits/${VISIT_ID}`);
     expect(asked).toEqual([`/api/visits/${VISIT_ID}`]);
-    await expect(apiRequest(`/visits/${VISIT_ID}`, { schema: PathSchema })).resolves.toEqual({ path: `/api/visits/${VISIT_ID}` });
+    await expect(apiRequest(`/visits/${VISIT_ID}`, { schema: PathSchema })).resolves.toEqual({
+      path: `/api/visits/${VISIT_ID}`,
+    });
     expect(asked).toHaveLength(1);
   });
 
@@ -82,7 +93,10 @@ describe("startFirstRequests", () => {
   });
 
   it("parses who is signed in with the shared schema once the answer arrives", async () => {
-    vi.stubGlobal("fetch", vi.fn(async () => new Response(JSON.stringify({ user: USER }), { status: 200 })));
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => new Response(JSON.stringify({ user: USER }), { status: 200 })),
+    );
     const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
     startFirstRequests(queryClient, "/");
     await vi.waitFor(() => expect(queryClient.getQueryState(["auth", "me"])?.status).not.toBe("pending"));

@@ -19,7 +19,11 @@ describe("lazyZodResolver", () => {
 
   it("answers as the shared schema does: the values when valid, its messages when not", async () => {
     const resolver = lazyZodResolver(async () => SignInSchema);
-    const valid = await resolver({ email: "tech@bellbird.example", password: "bellbird-demo-2026" }, undefined, options);
+    const valid = await resolver(
+      { email: "tech@bellbird.example", password: "bellbird-demo-2026" },
+      undefined,
+      options,
+    );
     expect(valid.errors).toEqual({});
     expect(valid.values).toEqual({ email: "tech@bellbird.example", password: "bellbird-demo-2026" });
 

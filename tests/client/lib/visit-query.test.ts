@@ -27,7 +27,16 @@ const visit: Visit = {
   readings: [],
   circuitLogs: [],
   adjustments: [],
-  comments: [{ id: id(1), readingId: null, reading: null, body: "Filter blocked", author: person, createdAt: "2026-12-02T01:02:00.000Z" }],
+  comments: [
+    {
+      id: id(1),
+      readingId: null,
+      reading: null,
+      body: "Filter blocked",
+      author: person,
+      createdAt: "2026-12-02T01:02:00.000Z",
+    },
+  ],
   photos: [],
   atmosphere: { pressureKPa: 100.3, basis: "site-altitude", altitudeM: 85, description: "site altitude 85 m" },
   events: [],
@@ -47,17 +56,28 @@ function stubServer(answers: ((url: string, headers: Headers) => Response)[]) {
   );
   return asked;
 }
-const json = (body: unknown) => new Response(JSON.stringify(body), { status: 200, headers: { "Content-Type": "application/json" } });
+const json = (body: unknown) =>
+  new Response(JSON.stringify(body), { status: 200, headers: { "Content-Type": "application/json" } });
 
 describe("visitQueryOptions", () => {
   afterEach(() => vi.unstubAllGlobals());
 
   it("loads the whole visit, then refreshes with the revision it holds: 304 keeps the copy, a delta is merged into it", async () => {
-    const comment = { id: id(2), readingId: null, reading: null, body: "Coil cleaned", author: person, createdAt: "2026-12-02T01:10:00.000Z" };
+    const comment = {
+      id: id(2),
+      readingId: null,
+      reading: null,
+      body: "Coil cleaned",
+      author: person,
+      createdAt: "2026-12-02T01:10:00.000Z",
+    };
     const asked = stubServer([
       () => json({ visit }),
       () => new Response(null, { status: 304 }),
-      () => json({ delta: { ...visit, since: "e.3.f", revision: "e.4.f", comments: [comment], status: "awaiting-review" } }),
+      () =>
+        json({
+          delta: { ...visit, since: "e.3.f", revision: "e.4.f", comments: [comment], status: "awaiting-review" },
+        }),
     ]);
     const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
     const options = visitQueryOptions(VISIT_ID);

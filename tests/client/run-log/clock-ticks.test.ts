@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { clockLabel, clockTicks } from "@/features/run-log/utils/clock-ticks.ts";
 
 // Times built in local time, so the checks hold in any time zone the tests run in.
-const local = (hours: number, minutes: number, seconds = 0) => new Date(2026, 0, 5, hours, minutes, seconds).toISOString();
+const local = (hours: number, minutes: number, seconds = 0) =>
+  new Date(2026, 0, 5, hours, minutes, seconds).toISOString();
 
 describe("clockTicks", () => {
   it("puts ticks on round clock minutes, not on the minutes since the first reading", () => {
@@ -17,7 +18,12 @@ describe("clockTicks", () => {
     // 12 min in at most 6 ticks: 5-min steps (a 2-min step would give 7).
     expect(clockTicks(origin, 0, 12, 6).map((tick) => clockLabel(origin, tick))).toEqual(["09:00", "09:05", "09:10"]);
     // Three hours in at most 6 ticks: 60-min steps (30 min would give 7).
-    expect(clockTicks(origin, 0, 180, 6).map((tick) => clockLabel(origin, tick))).toEqual(["09:00", "10:00", "11:00", "12:00"]);
+    expect(clockTicks(origin, 0, 180, 6).map((tick) => clockLabel(origin, tick))).toEqual([
+      "09:00",
+      "10:00",
+      "11:00",
+      "12:00",
+    ]);
   });
 
   it("labels every tick with a whole minute, never a fraction of one", () => {

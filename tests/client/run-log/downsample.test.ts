@@ -28,13 +28,17 @@ describe("downsample (largest-triangle-three-buckets, Steinarsson 2013)", () => 
 
   it("never invents points and keeps time order", () => {
     fc.assert(
-      fc.property(fc.array(fc.double({ min: -50, max: 50, noNaN: true }), { minLength: 3, maxLength: 600 }), fc.integer({ min: 3, max: 200 }), (values, threshold) => {
-        const points = series(values);
-        const kept = downsample(points, threshold, y);
-        expect(kept.length).toBe(Math.min(points.length, threshold));
-        for (let index = 1; index < kept.length; index++) expect(kept[index]!.x).toBeGreaterThan(kept[index - 1]!.x);
-        for (const point of kept) expect(points).toContain(point);
-      }),
+      fc.property(
+        fc.array(fc.double({ min: -50, max: 50, noNaN: true }), { minLength: 3, maxLength: 600 }),
+        fc.integer({ min: 3, max: 200 }),
+        (values, threshold) => {
+          const points = series(values);
+          const kept = downsample(points, threshold, y);
+          expect(kept.length).toBe(Math.min(points.length, threshold));
+          for (let index = 1; index < kept.length; index++) expect(kept[index]!.x).toBeGreaterThan(kept[index - 1]!.x);
+          for (const point of kept) expect(points).toContain(point);
+        },
+      ),
     );
   });
 });

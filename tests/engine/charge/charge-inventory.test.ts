@@ -70,7 +70,8 @@ describe("charge inventory model", () => {
 
   it("loses subcooling when short and gains it when over; a fixed orifice's superheat rises when short (TRADE.md §2)", () => {
     const { circuit, design, correct } = circuitFor("R32", "fixed-orifice", 5);
-    const at = (share: number) => solveOperatingPoint(circuit, DESIGN_CONDITIONS, correct.inventory.totalKg * (1 + share), design)!;
+    const at = (share: number) =>
+      solveOperatingPoint(circuit, DESIGN_CONDITIONS, correct.inventory.totalKg * (1 + share), design)!;
     const short = at(-0.1);
     const over = at(0.1);
     expect(short.subcoolingK).toBeLessThan(correct.subcoolingK);
@@ -111,10 +112,16 @@ describe("charge inventory model", () => {
           const conditions = { ...DESIGN_CONDITIONS, outdoorAirC };
           const trueKg = correctKg * deviation;
           const point = solveOperatingPoint(circuit, conditions, correctKg + trueKg, design)!;
-          const estimate = diagnose({ ...inventoryReadings(circuit, conditions, point, correctKg, null), chargeReference }).chargeDeviation!;
+          const estimate = diagnose({
+            ...inventoryReadings(circuit, conditions, point, correctKg, null),
+            chargeReference,
+          }).chargeDeviation!;
           expect(estimate.basis).toBe("unit-reference");
           const inside = trueKg >= estimate.lowKg - ROUNDING_KG && trueKg <= estimate.highKg + ROUNDING_KG;
-          if (!inside) cases.push(`${refrigerant} ${device} ${outdoorAirC} °C ${deviation * 100} %: true ${trueKg.toFixed(2)} kg, estimate ${estimate.kg} (${estimate.lowKg} to ${estimate.highKg})`);
+          if (!inside)
+            cases.push(
+              `${refrigerant} ${device} ${outdoorAirC} °C ${deviation * 100} %: true ${trueKg.toFixed(2)} kg, estimate ${estimate.kg} (${estimate.lowKg} to ${estimate.highKg})`,
+            );
           // Short reads short, over reads over.
           expect(Math.sign(estimate.kg)).toBe(Math.sign(trueKg));
         }

@@ -8,7 +8,13 @@ import { describe, expect, it } from "vitest";
 import { chargeStepChecks, chargingPlan } from "@shared/engine/index.ts";
 import type { ChargeDeviation } from "@shared/schemas/diagnosis.ts";
 
-const deviation = (kg: number, lowKg: number, highKg: number): ChargeDeviation => ({ kg, lowKg, highKg, basis: "unit-reference", source: "test" });
+const deviation = (kg: number, lowKg: number, highKg: number): ChargeDeviation => ({
+  kg,
+  lowKg,
+  highKg,
+  basis: "unit-reference",
+  source: "test",
+});
 
 describe("chargingPlan", () => {
   it("adds a shortage in steps no larger than the range's cautious end or a tenth of the charge", () => {
@@ -17,7 +23,9 @@ describe("chargingPlan", () => {
     expect(plan.action).toBe("add");
     expect(plan.steps).toEqual([0.3, 0.3]);
     expect(plan).toMatchObject({ kg: 0.6, lowKg: 0.3, highKg: 0.9, liquidCharging: false });
-    expect(plan.summary).toBe("Add about 0.6 kg (0.3–0.9) in 2 steps of 0.3 kg; let the readings settle 10 minutes between steps and follow the new estimate");
+    expect(plan.summary).toBe(
+      "Add about 0.6 kg (0.3–0.9) in 2 steps of 0.3 kg; let the readings settle 10 minutes between steps and follow the new estimate",
+    );
   });
 
   it("splits a large shortage so no step exceeds a tenth of the charge, and charges a blend as liquid", () => {
@@ -55,7 +63,12 @@ describe("chargeStepChecks", () => {
         { at: "2026-12-01T10:30:00Z", kg: 0.3 },
         { at: "2026-12-01T10:10:00Z", kg: 0.3 },
       ],
-      [point("2026-12-01T10:00:00Z", -0.6), point("2026-12-01T10:20:00Z", -0.35), point("2026-12-01T10:25:00Z", -0.3), point("2026-12-01T10:45:00Z", 0.3)],
+      [
+        point("2026-12-01T10:00:00Z", -0.6),
+        point("2026-12-01T10:20:00Z", -0.35),
+        point("2026-12-01T10:25:00Z", -0.3),
+        point("2026-12-01T10:45:00Z", 0.3),
+      ],
     );
     expect(checks.map((check) => check.step.at)).toEqual(["2026-12-01T10:10:00Z", "2026-12-01T10:30:00Z"]);
     // −0.6 + 0.3 = −0.3 expected; −0.3 measured (range −0.5…−0.1): agrees
@@ -72,7 +85,11 @@ describe("chargeStepChecks", () => {
   });
 
   it("does not compare a weigh-in after recovery (more than half the charge at once) with the estimate before it", () => {
-    const [check] = chargeStepChecks([{ at: "2026-12-01T10:10:00Z", kg: 4.2 }], [point("2026-12-01T10:00:00Z", -1.2), point("2026-12-01T10:30:00Z", 0)], 4.2);
+    const [check] = chargeStepChecks(
+      [{ at: "2026-12-01T10:10:00Z", kg: 4.2 }],
+      [point("2026-12-01T10:00:00Z", -1.2), point("2026-12-01T10:30:00Z", 0)],
+      4.2,
+    );
     expect(check).toMatchObject({ refill: true, beforeKg: -1.2, afterKg: 0, expectedKg: null, agrees: null });
   });
 });

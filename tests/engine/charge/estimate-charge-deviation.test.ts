@@ -9,10 +9,15 @@ import { describe, expect, it } from "vitest";
 import type { ChargeReference, DiagnosisInputDraft } from "@shared/schemas/diagnosis";
 import { absoluteToGauge, diagnose, saturationPressure } from "@shared/engine/index";
 
-const gaugeAt = (id: string, temperatureC: number, point: "bubble" | "dew") => absoluteToGauge(saturationPressure(id, temperatureC, point));
+const gaugeAt = (id: string, temperatureC: number, point: "bubble" | "dew") =>
+  absoluteToGauge(saturationPressure(id, temperatureC, point));
 
 /** An R410A TXV split on a 35 °C day: evaporating 7 °C, condensing 45 °C, 3 kg correct charge, 7.5 m line. */
-function txvReading(subcoolingK: number, superheatK = 5, extra: Partial<DiagnosisInputDraft> = {}): DiagnosisInputDraft {
+function txvReading(
+  subcoolingK: number,
+  superheatK = 5,
+  extra: Partial<DiagnosisInputDraft> = {},
+): DiagnosisInputDraft {
   return Object.freeze({
     refrigerant: "R410A",
     meteringDevice: "txv",
@@ -102,7 +107,13 @@ describe("estimateChargeDeviation (through diagnose)", () => {
   it("never reaches below the whole charge missing", () => {
     // Fixed orifice, 2 kg, no line: k_ch = 4/0.25 = 16 K; (0 − 4 + (−0.1) × 60)/16 = −0.625 → −1.25 kg;
     // low −1.25 − (0.35 × 1.25 + 0.12) − 0.2 = −2.0075, held at −2 kg.
-    const input = txvReading(0, 60, { meteringDevice: "fixed-orifice", targetSuperheatK: 0, targetSubcoolingK: 4, chargeKg: 2, liquidLineLengthM: 0 });
+    const input = txvReading(0, 60, {
+      meteringDevice: "fixed-orifice",
+      targetSuperheatK: 0,
+      targetSubcoolingK: 4,
+      chargeKg: 2,
+      liquidLineLengthM: 0,
+    });
     const estimate = diagnose(input).chargeDeviation!;
     expect(estimate.kg).toBe(-1.25);
     expect(estimate.lowKg).toBe(-2);
@@ -122,7 +133,11 @@ describe("estimateChargeDeviation (through diagnose)", () => {
   });
 
   it("gives none for refrigeration: a receiver holds liquid the subcooling does not show (Li & Braun's method is for air conditioners without receivers, from memory)", () => {
-    for (const application of ["medium-temperature-refrigeration", "low-temperature-refrigeration", "process-chilling"] as const) {
+    for (const application of [
+      "medium-temperature-refrigeration",
+      "low-temperature-refrigeration",
+      "process-chilling",
+    ] as const) {
       const result = diagnose(txvReading(2, 6, { application }));
       expect(result.chargeDeviation).toBeNull();
       expect(result.chargeDeviationNote).toMatch(/receiver/);
@@ -137,7 +152,9 @@ describe("estimateChargeDeviation (through diagnose)", () => {
 
   it("gives none for a fixed device without its superheat target, with the target's reason (weigh in, TRADE.md §1.4)", () => {
     // 45 °C outdoor and a dry 15 °C wet bulb put the chart target below 2.8 K: a "dash".
-    const result = diagnose(txvReading(2, 8, { meteringDevice: "fixed-orifice", outdoorAirDryBulbC: 45, returnAirWetBulbC: 15 }));
+    const result = diagnose(
+      txvReading(2, 8, { meteringDevice: "fixed-orifice", outdoorAirDryBulbC: 45, returnAirWetBulbC: 15 }),
+    );
     expect(result.chargeDeviation).toBeNull();
     expect(result.chargeDeviationNote).toMatch(/superheat target/);
   });

@@ -40,6 +40,8 @@ describe("virtualChargeFraction", () => {
 
   it("refuses a k_ch that is not above 0", () => {
     expect(() => virtualChargeFraction(1, 0, { kChK: 0, superheatToSubcooling: 0 })).toThrow(RangeError);
-    expect(() => virtualChargeFraction(1, 0, { kChK: Number.NaN, superheatToSubcooling: 0 })).toThrow(/k_ch must be above 0 K/);
+    expect(() => virtualChargeFraction(1, 0, { kChK: Number.NaN, superheatToSubcooling: 0 })).toThrow(
+      /k_ch must be above 0 K/,
+    );
   });
 });

@@ -79,12 +79,21 @@ function referenceStatus(readings: readonly ReferenceReading[], last: number): R
       x.push(minute(index));
       y.push(value);
     }
-    return { change: y.length === 0 ? null : Math.max(...y) - Math.min(...y), rate: y.length >= 2 ? referenceSlope(x, y) : null };
+    return {
+      change: y.length === 0 ? null : Math.max(...y) - Math.min(...y),
+      rate: y.length >= 2 ? referenceSlope(x, y) : null,
+    };
   };
   const superheat = column((result) => result.superheatK);
   const subcooling = column((result) => result.subcoolingK);
   const minutesObserved = minute(last) - minute(start);
-  const figures = { superheatChangeK: superheat.change, subcoolingChangeK: subcooling.change, superheatRate: superheat.rate, subcoolingRate: subcooling.rate, minutesObserved };
+  const figures = {
+    superheatChangeK: superheat.change,
+    subcoolingChangeK: subcooling.change,
+    superheatRate: superheat.rate,
+    subcoolingRate: subcooling.rate,
+    minutesObserved,
+  };
   const runMinutes = readings[last]!.input.runMinutes;
   const kind: ReasonKind =
     runMinutes !== undefined && runMinutes < 10
@@ -95,7 +104,9 @@ function referenceStatus(readings: readonly ReferenceReading[], last: number): R
           ? "no-values"
           : [superheat.change, subcooling.change].some((change) => change !== null && change >= SETTLED_MAX_CHANGE_K)
             ? "moving"
-            : [superheat.rate, subcooling.rate].some((rate) => rate !== null && Math.abs(rate) >= SETTLED_MAX_RATE_K_PER_MIN)
+            : [superheat.rate, subcooling.rate].some(
+                  (rate) => rate !== null && Math.abs(rate) >= SETTLED_MAX_RATE_K_PER_MIN,
+                )
               ? "drifting"
               : "settled";
   return { kind, ...figures };
@@ -123,7 +134,10 @@ function expectSameAsReference(actual: TrendResult, readings: readonly Reference
   }
   expect(actual.settled).toBe(expected.kind === "settled");
   expect(actual.reason).toMatch(REASON_PATTERN[expected.kind]);
-  expect(actual.changeOverWindow).toEqual({ superheatK: expected.superheatChangeK, subcoolingK: expected.subcoolingChangeK });
+  expect(actual.changeOverWindow).toEqual({
+    superheatK: expected.superheatChangeK,
+    subcoolingK: expected.subcoolingChangeK,
+  });
   expect(actual.minutesObserved).toBe(expected.minutesObserved);
   for (const [rate, reference] of [
     [actual.rate.superheatKPerMin, expected.superheatRate],
@@ -144,7 +158,14 @@ function expectSameAsReference(actual: TrendResult, readings: readonly Reference
 const START = Date.parse("2026-03-02T09:00:00+10:00");
 const suctionKPa = absoluteToGauge(saturationPressure("R410A", 7, "dew"));
 const liquidKPa = absoluteToGauge(saturationPressure("R410A", 46, "bubble"));
-const input = { refrigerant: "R410A", meteringDevice: "txv" as const, suctionPressureKPa: suctionKPa, suctionLineTempC: 13, liquidPressureKPa: liquidKPa, liquidLineTempC: 40 };
+const input = {
+  refrigerant: "R410A",
+  meteringDevice: "txv" as const,
+  suctionPressureKPa: suctionKPa,
+  suctionLineTempC: 13,
+  liquidPressureKPa: liquidKPa,
+  liquidLineTempC: 40,
+};
 /** A real stored result; each reading of a random log carries a copy with its own superheat and subcooling. */
 const template = diagnose(input);
 
@@ -166,13 +187,20 @@ function randomRunLog(random: () => number, shape: Shape, length: number): Refer
   const driftsInSubcooling = random() < 0.5;
   for (let index = 0; index < length; index += 1) {
     const step = random();
-    milliseconds += step < 0.05 ? 1 + Math.floor(random() * 999) : step < 0.08 ? (5 + random() * 30) * 60_000 : (5 + random() * 85) * 1000;
+    milliseconds +=
+      step < 0.05
+        ? 1 + Math.floor(random() * 999)
+        : step < 0.08
+          ? (5 + random() * 30) * 60_000
+          : (5 + random() * 85) * 1000;
     const minute = (milliseconds - START) / 60_000;
     const wave = shape === "swinging" ? 1.5 * Math.sin(minute) : 0;
     const settle = shape === "settling" ? 8 * Math.exp(-minute / (1 + random() * 4)) : 0;
     const drift = shape === "drifting-near-limit" ? driftKPerMin * minute : 0;
-    const superheatK = random() < missingShare ? null : 6 + settle + wave + (driftsInSubcooling ? 0 : drift) + (random() - 0.5) * noiseK;
-    const subcoolingK = random() < missingShare ? null : 5 - settle / 3 + (driftsInSubcooling ? drift : 0) + (random() - 0.5) * noiseK;
+    const superheatK =
+      random() < missingShare ? null : 6 + settle + wave + (driftsInSubcooling ? 0 : drift) + (random() - 0.5) * noiseK;
+    const subcoolingK =
+      random() < missingShare ? null : 5 - settle / 3 + (driftsInSubcooling ? drift : 0) + (random() - 0.5) * noiseK;
     readings.push({
       takenAt: new Date(milliseconds).toISOString(),
       input: { ...input, ...(runStart === undefined ? {} : { runMinutes: runStart + minute }) },
@@ -215,8 +243,13 @@ describe("assessTrend against the criterion written out reading by reading", () 
       const random = seededRandom(seed);
       const readings: ReferenceReading[] = Array.from({ length: 2000 }, (_, index) => {
         const minute = index / 60;
-        const superheatK = seed === 1 ? 6 + 2 * Math.sin(minute) : 5 + 10 * Math.exp(-minute / 6) + (random() - 0.5) * 0.2;
-        return { takenAt: new Date(START + index * 1000).toISOString(), input: { ...input, runMinutes: 20 + minute }, result: { ...template, superheatK, subcoolingK: 5 } };
+        const superheatK =
+          seed === 1 ? 6 + 2 * Math.sin(minute) : 5 + 10 * Math.exp(-minute / 6) + (random() - 0.5) * 0.2;
+        return {
+          takenAt: new Date(START + index * 1000).toISOString(),
+          input: { ...input, runMinutes: 20 + minute },
+          result: { ...template, superheatK, subcoolingK: 5 },
+        };
       });
       const actual = assessTrend(deepFreeze(readings));
       expectSameAsReference(actual, readings);
@@ -237,10 +270,16 @@ describe("assessTrend against the criterion written out reading by reading", () 
 });
 
 describe("assessTrend on stored results", () => {
-  const reading = (minute: number, extra: object = {}) => ({ takenAt: new Date(START + minute * 60_000).toISOString(), input: { ...input, runMinutes: 20 + minute }, ...extra });
+  const reading = (minute: number, extra: object = {}) => ({
+    takenAt: new Date(START + minute * 60_000).toISOString(),
+    input: { ...input, runMinutes: 20 + minute },
+    ...extra,
+  });
 
   it("diagnoses a reading that has no stored result, once, as diagnose() does", () => {
-    const withResult = Array.from({ length: 8 }, (_, minute) => reading(minute, { result: diagnose(reading(minute).input) }));
+    const withResult = Array.from({ length: 8 }, (_, minute) =>
+      reading(minute, { result: diagnose(reading(minute).input) }),
+    );
     const withoutResult = Array.from({ length: 8 }, (_, minute) => reading(minute));
     expect(assessTrend(withoutResult)).toEqual(assessTrend(withResult));
   });
@@ -268,6 +307,8 @@ describe("assessTrend on stored results", () => {
     expect(() => assessTrend([reading(0, { result: { superheatK: 5 } })])).toThrow(DiagnosisInputError);
     expect(() => assessTrend([reading(0, { result: template, adjustment: "  " })])).toThrow(DiagnosisInputError);
     expect(() => assessTrend([])).toThrow(DiagnosisInputError);
-    expect(() => assessTrend([{ ...reading(0, { result: template }), takenAt: "yesterday" }])).toThrow(DiagnosisInputError);
+    expect(() => assessTrend([{ ...reading(0, { result: template }), takenAt: "yesterday" }])).toThrow(
+      DiagnosisInputError,
+    );
   });
 });

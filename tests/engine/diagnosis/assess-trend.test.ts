@@ -1,12 +1,24 @@
 import { describe, expect, it } from "vitest";
-import { absoluteToGauge, assessTrend, DiagnosisInputError, saturationPressure, SETTLED_MAX_CHANGE_K, SETTLED_WINDOW_MINUTES } from "@shared/engine/index";
+import {
+  absoluteToGauge,
+  assessTrend,
+  DiagnosisInputError,
+  saturationPressure,
+  SETTLED_MAX_CHANGE_K,
+  SETTLED_WINDOW_MINUTES,
+} from "@shared/engine/index";
 
 const START = Date.parse("2026-03-02T09:00:00+10:00");
 const suction = absoluteToGauge(saturationPressure("R410A", 7, "dew"));
 const liquid = absoluteToGauge(saturationPressure("R410A", 46, "bubble"));
 
 /** One reading at `minute` with the given superheat and subcooling (R410A TXV, 7 °C / 46 °C). */
-function reading(minute: number, superheatK: number, subcoolingK: number, extra: { adjustment?: string; runMinutes?: number } = {}) {
+function reading(
+  minute: number,
+  superheatK: number,
+  subcoolingK: number,
+  extra: { adjustment?: string; runMinutes?: number } = {},
+) {
   return {
     takenAt: new Date(START + minute * 60_000).toISOString(),
     input: {
@@ -23,12 +35,18 @@ function reading(minute: number, superheatK: number, subcoolingK: number, extra:
 }
 
 /** Superheat settling exponentially from 15 K to 5 K with a 3-minute time constant. */
-const settling = Array.from({ length: 21 }, (_, minute) => reading(minute, 5 + 10 * Math.exp(-minute / 3), 6 - 3 * Math.exp(-minute / 3)));
+const settling = Array.from({ length: 21 }, (_, minute) =>
+  reading(minute, 5 + 10 * Math.exp(-minute / 3), 6 - 3 * Math.exp(-minute / 3)),
+);
 
 describe("assessTrend", () => {
   it("states its criterion: < 1 K over the last 5 minutes (TRADE.md §1.5 [S10][S20]; limits common practice)", () => {
     const result = assessTrend(settling);
-    expect(result.criterion).toMatchObject({ windowMinutes: SETTLED_WINDOW_MINUTES, maxChangeK: SETTLED_MAX_CHANGE_K, minRunMinutes: 10 });
+    expect(result.criterion).toMatchObject({
+      windowMinutes: SETTLED_WINDOW_MINUTES,
+      maxChangeK: SETTLED_MAX_CHANGE_K,
+      minRunMinutes: 10,
+    });
     expect(result.criterion.source).toMatch(/\[S10\]/);
   });
 
@@ -59,7 +77,12 @@ describe("assessTrend", () => {
   });
 
   it("restarts the window after an adjustment and keeps the last settled result from before it", () => {
-    const adjusted = [...settling, reading(21, 9, 3, { adjustment: "added 0.3 kg" }), reading(22, 8, 3.5), reading(23, 7.5, 4)];
+    const adjusted = [
+      ...settling,
+      reading(21, 9, 3, { adjustment: "added 0.3 kg" }),
+      reading(22, 8, 3.5),
+      reading(23, 7.5, 4),
+    ];
     const result = assessTrend(adjusted);
     expect(result.settled).toBe(false);
     expect(result.reason).toMatch(/since the last adjustment/);

@@ -1,10 +1,18 @@
 import fc from "fast-check";
 import { describe, it } from "vitest";
-import { DiagnosisResultSchema, METERING_DEVICES, type DiagnosisInputDraft, type DiagnosisResult, type EvidenceState } from "@shared/schemas/diagnosis";
+import {
+  DiagnosisResultSchema,
+  METERING_DEVICES,
+  type DiagnosisInputDraft,
+  type DiagnosisResult,
+  type EvidenceState,
+} from "@shared/schemas/diagnosis";
 import { absoluteToGauge, diagnose, saturationPressure } from "@shared/engine/index";
 
 const confidenceOf = (result: DiagnosisResult, state: EvidenceState) =>
-  result.chargeState === state ? result.confidence : (result.alternatives.find((item) => item.state === state)?.confidence ?? 0);
+  result.chargeState === state
+    ? result.confidence
+    : (result.alternatives.find((item) => item.state === state)?.confidence ?? 0);
 
 /** Circuit readings built from saturation temperatures, so every sample is physically consistent. */
 const circuit = fc
@@ -92,7 +100,13 @@ describe("diagnose (properties)", () => {
   it("never names a charge state on a fixed orifice without a superheat target (weigh in [S10])", () => {
     fc.assert(
       fc.property(circuit, (input) => {
-        const bare = { ...input, meteringDevice: "fixed-orifice" as const, returnAirWetBulbC: undefined, returnAirRelativeHumidity: undefined, targetSuperheatK: undefined };
+        const bare = {
+          ...input,
+          meteringDevice: "fixed-orifice" as const,
+          returnAirWetBulbC: undefined,
+          returnAirRelativeHumidity: undefined,
+          targetSuperheatK: undefined,
+        };
         return !["normal", "undercharged", "overcharged"].includes(diagnose(bare).chargeState);
       }),
     );
@@ -105,7 +119,11 @@ describe("diagnose (properties)", () => {
       fc.property(circuit, (input) => {
         const result = diagnose(input);
         const danger = result.warnings.some((warning) => warning.severity === "danger");
-        return !danger || (result.chargeState !== "normal" && result.alternatives.every((alternative) => alternative.state !== "normal"));
+        return (
+          !danger ||
+          (result.chargeState !== "normal" &&
+            result.alternatives.every((alternative) => alternative.state !== "normal"))
+        );
       }),
     );
   });
@@ -130,7 +148,11 @@ describe("diagnose (properties)", () => {
       fc.property(circuit, fc.integer({ min: 0, max: 9 }), (input, minutes) => {
         const early = diagnose({ ...input, runMinutes: minutes });
         const settled = diagnose({ ...input, runMinutes: 20 });
-        return early.chargeState !== settled.chargeState || early.confidence <= settled.confidence * 0.96 || settled.confidence === 0;
+        return (
+          early.chargeState !== settled.chargeState ||
+          early.confidence <= settled.confidence * 0.96 ||
+          settled.confidence === 0
+        );
       }),
     );
   });

@@ -204,7 +204,9 @@ describe("diagnose", () => {
       expect(fieldErrorsOf({ ...r407c, compressorRla: 0 }).compressorRla?.[0]).toMatch(/below 0.05 A/);
       // A rating too small to be one: the current ratio divided by it ran away to Infinity,
       // which no result can carry (found by the boundary's property test).
-      expect(fieldErrorsOf({ ...r407c, compressorRla: 5e-324 }).compressorRla?.[0]).toMatch(/not a compressor's rating/);
+      expect(fieldErrorsOf({ ...r407c, compressorRla: 5e-324 }).compressorRla?.[0]).toMatch(
+        /not a compressor's rating/,
+      );
       expect(fieldErrorsOf({ ...r407c, atmosphericPressureKPa: 30 }).atmosphericPressureKPa?.[0]).toMatch(/altitude/);
     });
 

@@ -22,11 +22,19 @@ describe("diagnosis worked cases", () => {
     it("is physically consistent: its pressures give the design saturation temperatures", () => {
       const atmosphere = worked.input.atmosphericPressureKPa ?? 101.325;
       if (worked.design.evaporatingDewC !== null) {
-        const dew = saturationTemperature(worked.input.refrigerant, gaugeToAbsolute(worked.input.suctionPressureKPa, atmosphere), "dew");
+        const dew = saturationTemperature(
+          worked.input.refrigerant,
+          gaugeToAbsolute(worked.input.suctionPressureKPa, atmosphere),
+          "dew",
+        );
         expect(Math.abs(dew - worked.design.evaporatingDewC)).toBeLessThanOrEqual(worked.toleranceK);
       }
       if (worked.design.condensingBubbleC !== null) {
-        const bubble = saturationTemperature(worked.input.refrigerant, gaugeToAbsolute(worked.input.liquidPressureKPa, atmosphere), "bubble");
+        const bubble = saturationTemperature(
+          worked.input.refrigerant,
+          gaugeToAbsolute(worked.input.liquidPressureKPa, atmosphere),
+          "bubble",
+        );
         expect(Math.abs(bubble - worked.design.condensingBubbleC)).toBeLessThanOrEqual(worked.toleranceK);
       }
     });

@@ -12,7 +12,9 @@ const STRENGTHS = Array.from({ length: 41 }, (_, index) => -1 + index / 20);
 
 describe("diagnosis rule registry", () => {
   it("lists every rule file once, each with a kebab-case id, a one-line description and a source", () => {
-    const files = readdirSync(rulesFolder).filter((name) => !["registry.ts", "banded-finding.ts", "no-output.ts"].includes(name));
+    const files = readdirSync(rulesFolder).filter(
+      (name) => !["registry.ts", "banded-finding.ts", "no-output.ts"].includes(name),
+    );
     expect(DIAGNOSIS_RULES.length).toBe(files.length);
     const ids = DIAGNOSIS_RULES.map((rule) => rule.id);
     expect(new Set(ids).size).toBe(ids.length);
@@ -54,8 +56,12 @@ describe("signature table", () => {
       const over = signatureCell("overcharged", "subcooling", family)!;
       for (let index = 1; index < STRENGTHS.length; index += 1) {
         const [before, after] = [STRENGTHS[index - 1]!, STRENGTHS[index]!];
-        expect(signatureMatch(under.expect, after, after)).toBeLessThanOrEqual(signatureMatch(under.expect, before, before));
-        expect(signatureMatch(over.expect, after, after)).toBeGreaterThanOrEqual(signatureMatch(over.expect, before, before));
+        expect(signatureMatch(under.expect, after, after)).toBeLessThanOrEqual(
+          signatureMatch(under.expect, before, before),
+        );
+        expect(signatureMatch(over.expect, after, after)).toBeGreaterThanOrEqual(
+          signatureMatch(over.expect, before, before),
+        );
       }
     }
   });
@@ -64,14 +70,20 @@ describe("signature table", () => {
     for (const family of ["fixed", "expansion-valve"] as const) {
       const over = signatureCell("overcharged", "superheat", family)!;
       for (let index = 1; index < STRENGTHS.length; index += 1) {
-        expect(signatureMatch(over.expect, STRENGTHS[index]!, 0)).toBeLessThanOrEqual(signatureMatch(over.expect, STRENGTHS[index - 1]!, 0));
+        expect(signatureMatch(over.expect, STRENGTHS[index]!, 0)).toBeLessThanOrEqual(
+          signatureMatch(over.expect, STRENGTHS[index - 1]!, 0),
+        );
       }
     }
   });
 
   it("weighs superheat more on fixed devices and subcooling more on TXV/EEV (TRADE.md §2 notes [S11][S14])", () => {
-    expect(signatureCell("undercharged", "superheat", "fixed")!.weight).toBeGreaterThan(signatureCell("undercharged", "superheat", "expansion-valve")!.weight);
-    expect(signatureCell("undercharged", "subcooling", "expansion-valve")!.weight).toBeGreaterThan(signatureCell("undercharged", "subcooling", "fixed")!.weight);
+    expect(signatureCell("undercharged", "superheat", "fixed")!.weight).toBeGreaterThan(
+      signatureCell("undercharged", "superheat", "expansion-valve")!.weight,
+    );
+    expect(signatureCell("undercharged", "subcooling", "expansion-valve")!.weight).toBeGreaterThan(
+      signatureCell("undercharged", "subcooling", "fixed")!.weight,
+    );
   });
 
   it("matches between −2 and +1, continuously, with the symptom in full scoring +1", () => {
@@ -80,7 +92,10 @@ describe("signature table", () => {
         const value = signatureMatch(expect_, STRENGTHS[index]!, STRENGTHS[index]!);
         expect(value).toBeGreaterThanOrEqual(-2);
         expect(value).toBeLessThanOrEqual(1);
-        if (index > 0) expect(Math.abs(value - signatureMatch(expect_, STRENGTHS[index - 1]!, STRENGTHS[index - 1]!))).toBeLessThanOrEqual(0.2);
+        if (index > 0)
+          expect(
+            Math.abs(value - signatureMatch(expect_, STRENGTHS[index - 1]!, STRENGTHS[index - 1]!)),
+          ).toBeLessThanOrEqual(0.2);
       }
     }
     expect(signatureMatch("high", 1, 0)).toBe(1);
@@ -103,7 +118,10 @@ describe("signature table", () => {
     for (const state of STATES) {
       const line = doc.split("\n").find((row) => row.startsWith(`| \`${state}\``));
       expect(line, `row for ${state}`).toBeDefined();
-      const cells = line!.split("|").slice(2, 2 + SIGNATURE_FEATURES.length).map((cell) => cell.trim());
+      const cells = line!
+        .split("|")
+        .slice(2, 2 + SIGNATURE_FEATURES.length)
+        .map((cell) => cell.trim());
       SIGNATURE_FEATURES.forEach((feature, column) => {
         const valve = signatureCell(state, feature, "expansion-valve");
         const fixed = signatureCell(state, feature, "fixed");

@@ -14,12 +14,25 @@ import {
 } from "@shared/engine/index";
 
 /** Gauge pressure (kPa, sea level) whose saturation point is the given temperature. */
-const gauge = (refrigerant: string, temperatureC: number, point: "bubble" | "dew") => absoluteToGauge(saturationPressure(refrigerant, temperatureC, point));
+const gauge = (refrigerant: string, temperatureC: number, point: "bubble" | "dew") =>
+  absoluteToGauge(saturationPressure(refrigerant, temperatureC, point));
 /** Standard comfort conditions: 26.7 °C / 19.4 °C return (80/67 °F, AHRI rating point, memory), 35 °C outdoor. */
-const COMFORT = { returnAirDryBulbC: 26.7, returnAirWetBulbC: 19.4, supplyAirDryBulbC: 16.4, outdoorAirDryBulbC: 35 } as const;
+const COMFORT = {
+  returnAirDryBulbC: 26.7,
+  returnAirWetBulbC: 19.4,
+  supplyAirDryBulbC: 16.4,
+  outdoorAirDryBulbC: 35,
+} as const;
 
 /** An R410A TXV circuit evaporating at 7 °C and condensing at 46 °C with 5 K superheat and 6 K subcooling. */
-function r410a(overrides: Partial<DiagnosisInputDraft> & { evaporatingC?: number; condensingC?: number; superheatK?: number; subcoolingK?: number } = {}): DiagnosisInputDraft {
+function r410a(
+  overrides: Partial<DiagnosisInputDraft> & {
+    evaporatingC?: number;
+    condensingC?: number;
+    superheatK?: number;
+    subcoolingK?: number;
+  } = {},
+): DiagnosisInputDraft {
   const { evaporatingC = 7, condensingC = 46, superheatK = 5, subcoolingK = 6, ...rest } = overrides;
   return {
     refrigerant: "R410A",
@@ -40,7 +53,9 @@ const codes = (result: DiagnosisResult) => result.warnings.map((warning) => warn
 describe("judgement a master technician would sign (TRADE.md §2 symptom table)", () => {
   describe("a condenser that cannot reject heat is not air in the circuit [S21][S26][S27]", () => {
     it("high head, normal subcooling, high current and a high approach: condenser airflow", () => {
-      const result = diagnose(r410a({ condensingC: 57, compressorAmps: 20, compressorRla: 17, dischargeLineTempC: 98 }));
+      const result = diagnose(
+        r410a({ condensingC: 57, compressorAmps: 20, compressorRla: 17, dischargeLineTempC: 98 }),
+      );
       expect(result.chargeState).toBe("condenser-airflow");
       expect(result.condenserApproachK).toBeCloseTo(57 - 6 - 35, 1);
       expect(result.findings[0]!.message).toMatch(/approach high/);
@@ -65,7 +80,9 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
     });
 
     it("high head with high subcooling and the liquid close to ambient: a condenser stacked with liquid (overcharge) [S23]", () => {
-      const result = diagnose(r410a({ evaporatingC: 8.5, condensingC: 52, subcoolingK: 14, compressorAmps: 19, compressorRla: 17 }));
+      const result = diagnose(
+        r410a({ evaporatingC: 8.5, condensingC: 52, subcoolingK: 14, compressorAmps: 19, compressorRla: 17 }),
+      );
       expect(result.chargeState).toBe("overcharged");
     });
   });
@@ -79,7 +96,15 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
     });
 
     it("a suction line inside a zeotrope's glide is liquid leaving the coil, not normal [S1][S2]", () => {
-      const result = diagnose({ refrigerant: "R407C", meteringDevice: "txv", suctionPressureKPa: gauge("R407C", 7, "dew"), suctionLineTempC: 4, liquidPressureKPa: gauge("R407C", 45, "bubble"), liquidLineTempC: 40, targetSubcoolingK: 5 });
+      const result = diagnose({
+        refrigerant: "R407C",
+        meteringDevice: "txv",
+        suctionPressureKPa: gauge("R407C", 7, "dew"),
+        suctionLineTempC: 4,
+        liquidPressureKPa: gauge("R407C", 45, "bubble"),
+        liquidLineTempC: 40,
+        targetSubcoolingK: 5,
+      });
       expect(codes(result)).toContain("suction-inside-glide");
       expect(result.warnings.find((warning) => warning.code === "suction-inside-glide")!.severity).toBe("danger");
       expect(result.chargeState).not.toBe("normal");
@@ -93,7 +118,11 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
 
     it("overcharge raises subcooling and head; overfeeding does not", () => {
       const overfed = diagnose(r410a({ superheatK: 0.5, suctionTempLocation: "evaporator-outlet" }));
-      const overcharged = diagnose({ ...r410a({ evaporatingC: 8.5, condensingC: 52, subcoolingK: 14, superheatK: 0.8 }), meteringDevice: "fixed-orifice", targetSubcoolingK: undefined });
+      const overcharged = diagnose({
+        ...r410a({ evaporatingC: 8.5, condensingC: 52, subcoolingK: 14, superheatK: 0.8 }),
+        meteringDevice: "fixed-orifice",
+        targetSubcoolingK: undefined,
+      });
       expect(overfed.chargeState).toBe("overfeeding-metering");
       expect(overcharged.chargeState).toBe("overcharged");
     });
@@ -134,7 +163,9 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
       expect(dischargeLineLimits("R410A", "comfort-cooling").elevatedC).toBeLessThan(98);
       // Every application keeps the 225 °F (107 °C) ceiling [S13] for HFCs; R32 runs hotter than R410A (memory).
       expect(dischargeLineLimits("R404A", "low-temperature-refrigeration").limitC).toBe(107);
-      expect(dischargeLineLimits("R32", "comfort-cooling").elevatedC).toBeGreaterThan(dischargeLineLimits("R410A", "comfort-cooling").elevatedC);
+      expect(dischargeLineLimits("R32", "comfort-cooling").elevatedC).toBeGreaterThan(
+        dischargeLineLimits("R410A", "comfort-cooling").elevatedC,
+      );
     });
 
     it("infers the application from the return air: freezer below −8 °C, cool room below 12 °C (common practice)", () => {
@@ -147,26 +178,74 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
   });
 
   it("a compressor that no longer pumps has high suction and low head; a shortage has low suction and high superheat [S21][S29][S122]", () => {
-    const weak = diagnose(r410a({ evaporatingC: 14, condensingC: 39, superheatK: 4, subcoolingK: 4, outdoorAirDryBulbC: 33, supplyAirDryBulbC: 21.5, compressorAmps: 8, compressorRla: 18 }));
+    const weak = diagnose(
+      r410a({
+        evaporatingC: 14,
+        condensingC: 39,
+        superheatK: 4,
+        subcoolingK: 4,
+        outdoorAirDryBulbC: 33,
+        supplyAirDryBulbC: 21.5,
+        compressorAmps: 8,
+        compressorRla: 18,
+      }),
+    );
     expect(weak.chargeState).toBe("weak-compressor");
-    const short = diagnose(r410a({ evaporatingC: 1, condensingC: 40, superheatK: 15, subcoolingK: 1, supplyAirDryBulbC: 20, compressorAmps: 11, compressorRla: 18 }));
+    const short = diagnose(
+      r410a({
+        evaporatingC: 1,
+        condensingC: 40,
+        superheatK: 15,
+        subcoolingK: 1,
+        supplyAirDryBulbC: 20,
+        compressorAmps: 11,
+        compressorRla: 18,
+      }),
+    );
     expect(short.chargeState).toBe("undercharged");
   });
 
   it("on a TXV high superheat with subcooling below target is a shortage, and the first evidence line says so [S24][S25]", () => {
-    const result = diagnose({ refrigerant: "R407C", meteringDevice: "txv", suctionPressureKPa: gauge("R407C", 4, "dew"), suctionLineTempC: 15.9, liquidPressureKPa: gauge("R407C", 44, "bubble"), liquidLineTempC: 40.8, targetSubcoolingK: 5 });
+    const result = diagnose({
+      refrigerant: "R407C",
+      meteringDevice: "txv",
+      suctionPressureKPa: gauge("R407C", 4, "dew"),
+      suctionLineTempC: 15.9,
+      liquidPressureKPa: gauge("R407C", 44, "bubble"),
+      liquidLineTempC: 40.8,
+      targetSubcoolingK: 5,
+    });
     expect(result.superheatK!).toBeCloseTo(11.9, 1);
     expect(result.subcoolingK!).toBeCloseTo(3.2, 1);
     expect(result.chargeState).toBe("undercharged");
     expect(result.findings[0]!.direction).toBe("summary");
     expect(result.findings[0]!.message).toMatch(/undercharged: superheat high, subcooling low/);
-    const restricted = diagnose({ refrigerant: "R407C", meteringDevice: "txv", suctionPressureKPa: gauge("R407C", 4, "dew"), suctionLineTempC: 15.9, liquidPressureKPa: gauge("R407C", 44, "bubble"), liquidLineTempC: 37, targetSubcoolingK: 5 });
+    const restricted = diagnose({
+      refrigerant: "R407C",
+      meteringDevice: "txv",
+      suctionPressureKPa: gauge("R407C", 4, "dew"),
+      suctionLineTempC: 15.9,
+      liquidPressureKPa: gauge("R407C", 44, "bubble"),
+      liquidLineTempC: 37,
+      targetSubcoolingK: 5,
+    });
     expect(restricted.chargeState).toBe("restricted-metering");
   });
 
   describe("subcooling voided, judgement kept [S13]", () => {
     it("judges from what stays valid and names the reading left out", () => {
-      const result = diagnose(r410a({ evaporatingC: 2, condensingC: 40, superheatK: 14, liquidTempLocation: "discharge-line", liquidLineTempC: 85, supplyAirDryBulbC: 20.7, compressorAmps: 10, compressorRla: 18 }));
+      const result = diagnose(
+        r410a({
+          evaporatingC: 2,
+          condensingC: 40,
+          superheatK: 14,
+          liquidTempLocation: "discharge-line",
+          liquidLineTempC: 85,
+          supplyAirDryBulbC: 20.7,
+          compressorAmps: 10,
+          compressorRla: 18,
+        }),
+      );
       expect(result.subcoolingK).toBeNull();
       expect(result.chargeState).toBe("undercharged");
       expect(result.readingsLeftOut.map((left) => left.field)).toContain("liquidTempLocation");
@@ -196,7 +275,10 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
 
     it("a steady 0.15 K/min drift is not settled, though it moves under 1 K in 5 minutes", () => {
       const start = Date.parse("2026-03-02T09:00:00+10:00");
-      const drifting = Array.from({ length: 11 }, (_, minute) => ({ takenAt: new Date(start + minute * 60_000).toISOString(), input: r410a({ superheatK: 6 - 0.15 * minute }) }));
+      const drifting = Array.from({ length: 11 }, (_, minute) => ({
+        takenAt: new Date(start + minute * 60_000).toISOString(),
+        input: r410a({ superheatK: 6 - 0.15 * minute }),
+      }));
       const result = assessTrend(drifting);
       expect(result.changeOverWindow.superheatK!).toBeLessThan(1);
       expect(Math.abs(result.rate.superheatKPerMin!)).toBeGreaterThan(SETTLED_MAX_RATE_K_PER_MIN);
@@ -208,20 +290,42 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
       const start = Date.parse("2026-03-02T09:00:00+10:00");
       const stored = diagnose(r410a());
       const marked = { ...stored, chargeState: "overcharged" as const };
-      const series = Array.from({ length: 7 }, (_, minute) => ({ takenAt: new Date(start + minute * 60_000).toISOString(), input: r410a(), result: marked }));
+      const series = Array.from({ length: 7 }, (_, minute) => ({
+        takenAt: new Date(start + minute * 60_000).toISOString(),
+        input: r410a(),
+        result: marked,
+      }));
       expect(assessTrend(series).latest.chargeState).toBe("overcharged");
     });
   });
 
   describe("smaller errors", () => {
     it("condensing over ambient for a blend uses the mid-glide (mean) condensing temperature", () => {
-      const result = diagnose({ refrigerant: "R407C", meteringDevice: "txv", suctionPressureKPa: gauge("R407C", 7, "dew"), suctionLineTempC: 12, liquidPressureKPa: gauge("R407C", 45, "bubble"), liquidLineTempC: 40, outdoorAirDryBulbC: 33 });
-      expect(result.condensingOverAmbientK!).toBeCloseTo((result.condensingTempC! + result.condensingDewTempC!) / 2 - 33, 9);
+      const result = diagnose({
+        refrigerant: "R407C",
+        meteringDevice: "txv",
+        suctionPressureKPa: gauge("R407C", 7, "dew"),
+        suctionLineTempC: 12,
+        liquidPressureKPa: gauge("R407C", 45, "bubble"),
+        liquidLineTempC: 40,
+        outdoorAirDryBulbC: 33,
+      });
+      expect(result.condensingOverAmbientK!).toBeCloseTo(
+        (result.condensingTempC! + result.condensingDewTempC!) / 2 - 33,
+        9,
+      );
       expect(result.condensingOverAmbientK!).toBeGreaterThan(45 - 33 + 1.5);
     });
 
     it("R744 above its critical pressure is a transcritical gas cooler, not 'near the critical point'", () => {
-      const result = diagnose({ refrigerant: "R744", meteringDevice: "eev", suctionPressureKPa: 2900, suctionLineTempC: 0, liquidPressureKPa: 9000, liquidLineTempC: 36 });
+      const result = diagnose({
+        refrigerant: "R744",
+        meteringDevice: "eev",
+        suctionPressureKPa: 2900,
+        suctionLineTempC: 0,
+        liquidPressureKPa: 9000,
+        liquidLineTempC: 36,
+      });
       const warning = result.warnings.find((item) => item.code === "transcritical-gas-cooler")!;
       expect(warning.message).toMatch(/transcritical gas cooler/);
       expect(warning.message).toMatch(/subcooling does not apply/);
@@ -252,8 +356,14 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
       expect(outside.targets.superheat!.lowK - atCoil.targets.superheat!.lowK).toBeCloseTo(suctionLineAllowance(15), 9);
       expect(outside.suctionLineAllowanceK).toBeCloseTo(2, 9);
       const piston = diagnose({ ...r410a(), meteringDevice: "fixed-orifice" });
-      const pistonAtCoil = diagnose({ ...r410a({ suctionTempLocation: "evaporator-outlet" }), meteringDevice: "fixed-orifice" });
-      expect(piston.targets.superheat!.targetK - pistonAtCoil.targets.superheat!.targetK).toBeCloseTo(suctionLineAllowance(undefined), 9);
+      const pistonAtCoil = diagnose({
+        ...r410a({ suctionTempLocation: "evaporator-outlet" }),
+        meteringDevice: "fixed-orifice",
+      });
+      expect(piston.targets.superheat!.targetK - pistonAtCoil.targets.superheat!.targetK).toBeCloseTo(
+        suctionLineAllowance(undefined),
+        9,
+      );
     });
   });
 });

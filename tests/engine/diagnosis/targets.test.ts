@@ -1,5 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { diagnosisLimits, fixedOrificeTargetSuperheat, selectSubcoolingTarget, selectSuperheatTarget } from "@shared/engine/index";
+import {
+  diagnosisLimits,
+  fixedOrificeTargetSuperheat,
+  selectSubcoolingTarget,
+  selectSuperheatTarget,
+} from "@shared/engine/index";
 
 /** The °F form as commonly taught in trade training (TRADE.md §1.4, memory). */
 const fahrenheitTarget = (wetBulbF: number, dryBulbF: number) => (3 * wetBulbF - 80 - dryBulbF) / 2;

@@ -83,7 +83,10 @@ describe("judgeSupplyVoltage", () => {
 
 describe("judgeInsulationResistance", () => {
   it("wiring: 1 MΩ at 500 V d.c. is the AS/NZS 3000 minimum ([S47] weak; 500 V memory)", () => {
-    expect(judgeInsulationResistance({ megohms: 1, testVoltageV: 500, kind: "wiring" })).toMatchObject({ verdict: "pass", minimumMegohms: 1 });
+    expect(judgeInsulationResistance({ megohms: 1, testVoltageV: 500, kind: "wiring" })).toMatchObject({
+      verdict: "pass",
+      minimumMegohms: 1,
+    });
     expect(judgeInsulationResistance({ megohms: 0.99, testVoltageV: 500, kind: "wiring" }).verdict).toBe("fail");
   });
 
@@ -94,7 +97,10 @@ describe("judgeInsulationResistance", () => {
   });
 
   it("hermetic compressor: 2 MΩ and above passes; below 2 MΩ warns (one maker's ground-fault line [S48])", () => {
-    expect(judgeInsulationResistance({ megohms: 2, testVoltageV: 500, kind: "compressor" })).toMatchObject({ verdict: "pass", minimumMegohms: 2 });
+    expect(judgeInsulationResistance({ megohms: 2, testVoltageV: 500, kind: "compressor" })).toMatchObject({
+      verdict: "pass",
+      minimumMegohms: 2,
+    });
     const low = judgeInsulationResistance({ megohms: 1.9, testVoltageV: 500, kind: "compressor" });
     expect(low.verdict).toBe("warn");
     expect(low.reason).toMatch(/crankcase heater/);
@@ -108,7 +114,10 @@ describe("judgeInsulationResistance", () => {
   it("motor: below 1 MΩ fails [S47]; 1 up to 5 MΩ warns (IEEE 43 random-wound 5 MΩ, memory); 0 MΩ is judged, not refused", () => {
     expect(judgeInsulationResistance({ megohms: 0, testVoltageV: 500, kind: "motor" }).verdict).toBe("fail");
     expect(judgeInsulationResistance({ megohms: 3, testVoltageV: 500, kind: "motor" }).verdict).toBe("warn");
-    expect(judgeInsulationResistance({ megohms: 5, testVoltageV: 500, kind: "motor" })).toMatchObject({ verdict: "pass", minimumMegohms: 5 });
+    expect(judgeInsulationResistance({ megohms: 5, testVoltageV: 500, kind: "motor" })).toMatchObject({
+      verdict: "pass",
+      minimumMegohms: 5,
+    });
   });
 
   it("cites the maker's handbook and the scroll megohm article for compressors", () => {
@@ -126,7 +135,7 @@ describe("windingBalance", () => {
     expect(result.verdict).toBe("pass");
   });
 
-  it("warns from 2 % to 5 % (small hermetics \"within a few percent\", memory) and fails beyond", () => {
+  it('warns from 2 % to 5 % (small hermetics "within a few percent", memory) and fails beyond', () => {
     // 1.00/1.00/1.05 Ω: mean 1.01667, deviation 0.03333 → 3.28 %; 1.0/1.0/1.1 Ω: mean 1.0333, deviation 0.0667 → 6.45 %.
     expect(windingBalance([1.0, 1.0, 1.05])).toMatchObject({ verdict: "warn" });
     expect(windingBalance([1.0, 1.0, 1.05]).maxDeviationPercent).toBeCloseTo(3.279, 3);

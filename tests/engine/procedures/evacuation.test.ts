@@ -6,7 +6,8 @@ type Sample = { minutes: number; microns: number };
 /** Readings every `stepMinutes` from 0 to `endMinutes` of a curve `microns(t)`. */
 function sampled(microns: (minutes: number) => number, endMinutes = 20, stepMinutes = 2): Sample[] {
   const samples: Sample[] = [];
-  for (let minutes = 0; minutes <= endMinutes; minutes += stepMinutes) samples.push(Object.freeze({ minutes, microns: microns(minutes) }));
+  for (let minutes = 0; minutes <= endMinutes; minutes += stepMinutes)
+    samples.push(Object.freeze({ minutes, microns: microns(minutes) }));
   return Object.freeze(samples) as Sample[];
 }
 
@@ -48,7 +49,12 @@ describe("evacuationReached", () => {
   });
 
   it("refuses readings out of time order", () => {
-    expect(() => evacuationReached([{ minutes: 5, microns: 900 }, { minutes: 5, microns: 400 }])).toThrow(/strictly increasing minutes/);
+    expect(() =>
+      evacuationReached([
+        { minutes: 5, microns: 900 },
+        { minutes: 5, microns: 400 },
+      ]),
+    ).toThrow(/strictly increasing minutes/);
   });
 });
 
@@ -102,13 +108,21 @@ describe("analyseDecay", () => {
   });
 
   it("with only two readings above the hold limit calls it a leak and asks for more readings", () => {
-    const result = analyseDecay([{ minutes: 0, microns: 400 }, { minutes: 10, microns: 900 }]);
+    const result = analyseDecay([
+      { minutes: 0, microns: 400 },
+      { minutes: 10, microns: 900 },
+    ]);
     expect(result.verdict).toBe("leak");
     expect(result.reason).toMatch(/take more readings/);
   });
 
   it("notes a test shorter than the makers' 15 minutes [S53]", () => {
-    expect(analyseDecay([{ minutes: 0, microns: 400 }, { minutes: 5, microns: 410 }]).reason).toMatch(/lasted only 5\.0 min/);
+    expect(
+      analyseDecay([
+        { minutes: 0, microns: 400 },
+        { minutes: 5, microns: 410 },
+      ]).reason,
+    ).toMatch(/lasted only 5\.0 min/);
   });
 
   it("takes the organisation's hold and leak limits and says the organisation set them", () => {

@@ -1,5 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { analyseDecay, describeDecay, runningCurrentNotice, singlePhaseWindings, testPressureNotice } from "@shared/engine/index";
+import {
+  analyseDecay,
+  describeDecay,
+  runningCurrentNotice,
+  singlePhaseWindings,
+  testPressureNotice,
+} from "@shared/engine/index";
 
 describe("singlePhaseWindings", () => {
   it("passes C–R 1.20, C–S 3.10, R–S 4.30 Ω: R–S = C–R + C–S and start above run ([S46]; memory)", () => {
@@ -36,8 +42,12 @@ describe("singlePhaseWindings", () => {
   });
 
   it("refuses a zero, negative or non-finite reading", () => {
-    expect(() => singlePhaseWindings({ commonRun: 0, commonStart: 3, runStart: 3 })).toThrow(/singlePhaseWindings requires/);
-    expect(() => singlePhaseWindings({ commonRun: 1, commonStart: Number.NaN, runStart: 3 })).toThrow(/singlePhaseWindings requires/);
+    expect(() => singlePhaseWindings({ commonRun: 0, commonStart: 3, runStart: 3 })).toThrow(
+      /singlePhaseWindings requires/,
+    );
+    expect(() => singlePhaseWindings({ commonRun: 1, commonStart: Number.NaN, runStart: 3 })).toThrow(
+      /singlePhaseWindings requires/,
+    );
   });
 });
 
@@ -86,7 +96,9 @@ describe("testPressureNotice (while typing)", () => {
 
   it("words pressures with the formatter it is given (the technician's unit)", () => {
     const psi = (kPa: number) => `${Math.round(kPa / 6.894757)} psig`;
-    expect(testPressureNotice({ testGaugeKPa: 4500, ratedKPa: 4150, nameplateKPa: null }, psi)?.message).toMatch(/653 psig is above the 602 psig limit/);
+    expect(testPressureNotice({ testGaugeKPa: 4500, ratedKPa: 4150, nameplateKPa: null }, psi)?.message).toMatch(
+      /653 psig is above the 602 psig limit/,
+    );
   });
 });
 
@@ -119,7 +131,9 @@ describe("describeDecay", () => {
     expect(wet.verdict).toBe("moisture");
     for (const unit of ["micron", "Pa"] as const) expect(describeDecay(wet.wording!, unit)).not.toMatch(/rose above/);
     // 900 µm × 0.133322 = 120.0 Pa; 1460 µm = 194.7 Pa.
-    expect(describeDecay(wet.wording!, "Pa")).toMatch(/started at 120\.0 Pa \(the pull-down never reached 66\.7 Pa\) and levelled off at 194\.7 Pa/);
+    expect(describeDecay(wet.wording!, "Pa")).toMatch(
+      /started at 120\.0 Pa \(the pull-down never reached 66\.7 Pa\) and levelled off at 194\.7 Pa/,
+    );
   });
 
   it("gives a leak's rise rate in Pa/min: 150 µm/min = 20.0 Pa/min", () => {

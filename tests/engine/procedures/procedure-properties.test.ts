@@ -37,18 +37,23 @@ describe("procedure properties", () => {
     fc.assert(
       fc.property(threePhase, ([a, b, c]) => {
         const base = voltageImbalance([a, b, c]);
-        return [voltageImbalance([b, c, a]), voltageImbalance([c, a, b]), voltageImbalance([b, a, c]), currentImbalance([a, b, c])].every(
-          (other) => Math.abs(other - base) <= 1e-9 * Math.max(1, base),
-        );
+        return [
+          voltageImbalance([b, c, a]),
+          voltageImbalance([c, a, b]),
+          voltageImbalance([b, a, c]),
+          currentImbalance([a, b, c]),
+        ].every((other) => Math.abs(other - base) <= 1e-9 * Math.max(1, base));
       }),
     );
   });
 
   it("imbalance of three phases lies between 0 and 200 % (one phase carrying everything)", () => {
-    fc.assert(fc.property(fc.tuple(fc.double({ min: 0, max: 1e4, noNaN: true }), volts, volts), (phases) => {
-      const percent = voltageImbalance(phases);
-      return percent >= 0 && percent <= 200 + 1e-9;
-    }));
+    fc.assert(
+      fc.property(fc.tuple(fc.double({ min: 0, max: 1e4, noNaN: true }), volts, volts), (phases) => {
+        const percent = voltageImbalance(phases);
+        return percent >= 0 && percent <= 200 + 1e-9;
+      }),
+    );
   });
 
   it("the voltage-imbalance verdict never improves as the imbalance grows", () => {
@@ -69,8 +74,16 @@ describe("procedure properties", () => {
         fc.double({ min: 60, max: 110, noNaN: true }),
         (startGaugeKPa, startTempC, endTempC, atmosphericPressureKPa) => {
           // Independent statement of the law: p/T constant on the absolute scales.
-          const endAbs = ((startGaugeKPa + atmosphericPressureKPa) / (startTempC + KELVIN_OFFSET)) * (endTempC + KELVIN_OFFSET);
-          const result = pressureTestResult({ startGaugeKPa, startTempC, endGaugeKPa: Math.max(0, endAbs - atmosphericPressureKPa), endTempC, allowedDropKPa: 1e-6, atmosphericPressureKPa });
+          const endAbs =
+            ((startGaugeKPa + atmosphericPressureKPa) / (startTempC + KELVIN_OFFSET)) * (endTempC + KELVIN_OFFSET);
+          const result = pressureTestResult({
+            startGaugeKPa,
+            startTempC,
+            endGaugeKPa: Math.max(0, endAbs - atmosphericPressureKPa),
+            endTempC,
+            allowedDropKPa: 1e-6,
+            atmosphericPressureKPa,
+          });
           if (endAbs - atmosphericPressureKPa < 0) return true;
           return Math.abs(result.correctedDropKPa) <= 1e-9 * endAbs && result.pass;
         },
@@ -80,17 +93,25 @@ describe("procedure properties", () => {
 
   it("a lower end reading never turns a failed hold into a pass", () => {
     fc.assert(
-      fc.property(fc.double({ min: 100, max: 4000, noNaN: true }), fc.double({ min: 0, max: 100, noNaN: true }), fc.double({ min: 0, max: 50, noNaN: true }), (start, lost, allowed) => {
-        const base = { startGaugeKPa: start, startTempC: 20, endTempC: 22, allowedDropKPa: allowed };
-        const better = pressureTestResult({ ...base, endGaugeKPa: start });
-        const worse = pressureTestResult({ ...base, endGaugeKPa: Math.max(0, start - lost) });
-        return worse.correctedDropKPa >= better.correctedDropKPa && (!better.pass ? !worse.pass : true);
-      }),
+      fc.property(
+        fc.double({ min: 100, max: 4000, noNaN: true }),
+        fc.double({ min: 0, max: 100, noNaN: true }),
+        fc.double({ min: 0, max: 50, noNaN: true }),
+        (start, lost, allowed) => {
+          const base = { startGaugeKPa: start, startTempC: 20, endTempC: 22, allowedDropKPa: allowed };
+          const better = pressureTestResult({ ...base, endGaugeKPa: start });
+          const worse = pressureTestResult({ ...base, endGaugeKPa: Math.max(0, start - lost) });
+          return worse.correctedDropKPa >= better.correctedDropKPa && (!better.pass ? !worse.pass : true);
+        },
+      ),
     );
   });
 
   const decaySamples = fc
-    .array(fc.tuple(fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0, max: 20_000, noNaN: true })), { minLength: 2, maxLength: 15 })
+    .array(fc.tuple(fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0, max: 20_000, noNaN: true })), {
+      minLength: 2,
+      maxLength: 15,
+    })
     .map((steps) => {
       let minutes = 0;
       return steps.map(([gap, microns]) => ({ minutes: (minutes += gap), microns }));
@@ -134,35 +155,68 @@ describe("procedure properties", () => {
 
   it("the cylinder verdict never improves as the contents grow", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 100, noNaN: true }), fc.double({ min: 0, max: 100, noNaN: true }), fc.double({ min: 1, max: 100, noNaN: true }), (x, y, maxContentsKg) => {
-        const [low, high] = x <= y ? [x, y] : [y, x];
-        return SEVERITY[judgeCylinderFill({ contentsKg: low, maxContentsKg }).verdict] <= SEVERITY[judgeCylinderFill({ contentsKg: high, maxContentsKg }).verdict];
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 100, noNaN: true }),
+        fc.double({ min: 0, max: 100, noNaN: true }),
+        fc.double({ min: 1, max: 100, noNaN: true }),
+        (x, y, maxContentsKg) => {
+          const [low, high] = x <= y ? [x, y] : [y, x];
+          return (
+            SEVERITY[judgeCylinderFill({ contentsKg: low, maxContentsKg }).verdict] <=
+            SEVERITY[judgeCylinderFill({ contentsKg: high, maxContentsKg }).verdict]
+          );
+        },
+      ),
     );
   });
 
   it("the refrigerant balance closes: recovered + shortfall = nameplate, final − difference = nameplate", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.1, max: 500, noNaN: true }), fc.double({ min: 0, max: 500, noNaN: true }), fc.double({ min: 0, max: 500, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (nameplateKg, recoveredKg, addedKg, reusedShare) => {
-        const result = refrigerantBalance({ nameplateKg, recoveredKg, addedKg, reusedKg: recoveredKg * reusedShare });
-        return relativeDifference(result.shortfallKg + recoveredKg, nameplateKg) < 1e-9 && relativeDifference(result.finalChargeKg - result.differenceFromNameplateKg, nameplateKg) < 1e-9;
-      }),
+      fc.property(
+        fc.double({ min: 0.1, max: 500, noNaN: true }),
+        fc.double({ min: 0, max: 500, noNaN: true }),
+        fc.double({ min: 0, max: 500, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (nameplateKg, recoveredKg, addedKg, reusedShare) => {
+          const result = refrigerantBalance({ nameplateKg, recoveredKg, addedKg, reusedKg: recoveredKg * reusedShare });
+          return (
+            relativeDifference(result.shortfallKg + recoveredKg, nameplateKg) < 1e-9 &&
+            relativeDifference(result.finalChargeKg - result.differenceFromNameplateKg, nameplateKg) < 1e-9
+          );
+        },
+      ),
     );
   });
 
   it("the leak rate as a percentage halves when the charge doubles, and the kg rate does not change", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 50, noNaN: true }), fc.integer({ min: 1, max: 3000 }), fc.double({ min: 0.1, max: 500, noNaN: true }), (addedKg, days, nameplateKg) => {
-        const events = [{ date: "2024-01-01", addedKg: 1 }, { date: new Date(Date.UTC(2024, 0, 1 + days)).toISOString().slice(0, 10), addedKg }];
-        const single = annualLeakRate(events, nameplateKg);
-        const double = annualLeakRate(events, 2 * nameplateKg);
-        return single.kgPerYear === double.kgPerYear && Math.abs(single.percentOfChargePerYear - 2 * double.percentOfChargePerYear) <= 1e-9 * Math.max(1, single.percentOfChargePerYear);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 50, noNaN: true }),
+        fc.integer({ min: 1, max: 3000 }),
+        fc.double({ min: 0.1, max: 500, noNaN: true }),
+        (addedKg, days, nameplateKg) => {
+          const events = [
+            { date: "2024-01-01", addedKg: 1 },
+            { date: new Date(Date.UTC(2024, 0, 1 + days)).toISOString().slice(0, 10), addedKg },
+          ];
+          const single = annualLeakRate(events, nameplateKg);
+          const double = annualLeakRate(events, 2 * nameplateKg);
+          return (
+            single.kgPerYear === double.kgPerYear &&
+            Math.abs(single.percentOfChargePerYear - 2 * double.percentOfChargePerYear) <=
+              1e-9 * Math.max(1, single.percentOfChargePerYear)
+          );
+        },
+      ),
     );
   });
 
   it("never mutates its inputs", () => {
-    const samples = Object.freeze([Object.freeze({ minutes: 0, microns: 300 }), Object.freeze({ minutes: 5, microns: 700 }), Object.freeze({ minutes: 10, microns: 800 })]);
+    const samples = Object.freeze([
+      Object.freeze({ minutes: 0, microns: 300 }),
+      Object.freeze({ minutes: 5, microns: 700 }),
+      Object.freeze({ minutes: 10, microns: 800 }),
+    ]);
     expect(() => analyseDecay(samples, Object.freeze({ holdMicrons: 500 }))).not.toThrow();
     expect(() => voltageImbalance(Object.freeze([400, 410, 395]) as unknown as [number, number, number])).not.toThrow();
   });

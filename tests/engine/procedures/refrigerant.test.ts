@@ -1,5 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { annualLeakRate, chargeAgainstNameplate, cylinderFillLimit, judgeCylinderFill, refrigerantBalance, saturatedState } from "@shared/engine/index";
+import {
+  annualLeakRate,
+  chargeAgainstNameplate,
+  cylinderFillLimit,
+  judgeCylinderFill,
+  refrigerantBalance,
+  saturatedState,
+} from "@shared/engine/index";
 
 const KG_PER_LB = 0.45359237;
 /** 1 lb/ft³ in kg/m³. */
@@ -8,18 +15,26 @@ const KG_PER_M3_PER_LB_PER_FT3 = 16.018463;
 describe("refrigerantBalance", () => {
   it("gives how far short the system was and what it holds after the visit (by hand)", () => {
     // Nameplate 2.4 kg; recovered 1.6 kg (0.8 kg short); all 1.6 kg reused, 0.8 kg new added → back to 2.4 kg.
-    const result = refrigerantBalance(Object.freeze({ nameplateKg: 2.4, recoveredKg: 1.6, addedKg: 0.8, reusedKg: 1.6 }));
+    const result = refrigerantBalance(
+      Object.freeze({ nameplateKg: 2.4, recoveredKg: 1.6, addedKg: 0.8, reusedKg: 1.6 }),
+    );
     expect(result.shortfallKg).toBeCloseTo(0.8, 12);
     expect(result.finalChargeKg).toBeCloseTo(2.4, 12);
     expect(result.differenceFromNameplateKg).toBeCloseTo(0, 12);
   });
 
   it("treats a missing reusedKg as 0: the recovered charge stayed in the cylinder", () => {
-    expect(refrigerantBalance({ nameplateKg: 3, recoveredKg: 2.5, addedKg: 3.1 })).toEqual({ shortfallKg: 0.5, finalChargeKg: 3.1, differenceFromNameplateKg: 3.1 - 3 });
+    expect(refrigerantBalance({ nameplateKg: 3, recoveredKg: 2.5, addedKg: 3.1 })).toEqual({
+      shortfallKg: 0.5,
+      finalChargeKg: 3.1,
+      differenceFromNameplateKg: 3.1 - 3,
+    });
   });
 
   it("refuses reusing more than was recovered", () => {
-    expect(() => refrigerantBalance({ nameplateKg: 3, recoveredKg: 1, addedKg: 0, reusedKg: 1.5 })).toThrow(/reused refrigerant no more than was recovered/);
+    expect(() => refrigerantBalance({ nameplateKg: 3, recoveredKg: 1, addedKg: 0, reusedKg: 1.5 })).toThrow(
+      /reused refrigerant no more than was recovered/,
+    );
   });
 });
 
@@ -75,7 +90,13 @@ describe("judgeCylinderFill", () => {
 describe("annualLeakRate", () => {
   it("annualises the additions after the first over the time between them (40 CFR 82.152 annualizing method, memory; by hand)", () => {
     // 0.6 kg added 182 days after the first top-up on a 4 kg charge: 0.6 × 365 / 182 = 1.2033 kg/yr = 30.08 %.
-    const result = annualLeakRate(Object.freeze([Object.freeze({ date: "2025-01-10", addedKg: 0.5 }), Object.freeze({ date: "2025-07-11", addedKg: 0.6 })]), 4);
+    const result = annualLeakRate(
+      Object.freeze([
+        Object.freeze({ date: "2025-01-10", addedKg: 0.5 }),
+        Object.freeze({ date: "2025-07-11", addedKg: 0.6 }),
+      ]),
+      4,
+    );
     expect(result.periodDays).toBe(182);
     expect(result.kgPerYear).toBeCloseTo(1.2033, 4);
     expect(result.percentOfChargePerYear).toBeCloseTo(30.08, 2);
@@ -84,13 +105,26 @@ describe("annualLeakRate", () => {
   });
 
   it("counts every addition inside a given period", () => {
-    const result = annualLeakRate([{ date: "2025-07-11", addedKg: 0.6 }, { date: "2025-01-10", addedKg: 0.5 }], 4, 365);
+    const result = annualLeakRate(
+      [
+        { date: "2025-07-11", addedKg: 0.6 },
+        { date: "2025-01-10", addedKg: 0.5 },
+      ],
+      4,
+      365,
+    );
     expect(result.kgPerYear).toBeCloseTo(1.1, 12);
     expect(result.percentOfChargePerYear).toBeCloseTo(27.5, 10);
   });
 
   it("reads timestamps with offsets", () => {
-    const result = annualLeakRate([{ date: "2025-01-01T10:00:00+10:00", addedKg: 1 }, { date: "2026-01-01T10:00:00+10:00", addedKg: 0.4 }], 2);
+    const result = annualLeakRate(
+      [
+        { date: "2025-01-01T10:00:00+10:00", addedKg: 1 },
+        { date: "2026-01-01T10:00:00+10:00", addedKg: 0.4 },
+      ],
+      2,
+    );
     expect(result.periodDays).toBe(365);
     expect(result.kgPerYear).toBeCloseTo(0.4, 12);
   });

@@ -13,11 +13,17 @@ describe("standingPressureOutcome (the standing-pressure verdict, or the reading
   });
 
   it("names the pressure when only the pressure is outside the table", () => {
-    expect(standingPressureOutcome({ refrigerant: "R410A", standingGaugeKPa: 6000, equalisedTempC: 25 })).toMatchObject({ problem: { field: "standingGaugeKPa" } });
-    expect(standingPressureOutcome({ refrigerant: "R410A", standingGaugeKPa: -200, equalisedTempC: 25 })).toMatchObject({ problem: { field: "standingGaugeKPa" } });
+    expect(standingPressureOutcome({ refrigerant: "R410A", standingGaugeKPa: 6000, equalisedTempC: 25 })).toMatchObject(
+      { problem: { field: "standingGaugeKPa" } },
+    );
+    expect(standingPressureOutcome({ refrigerant: "R410A", standingGaugeKPa: -200, equalisedTempC: 25 })).toMatchObject(
+      { problem: { field: "standingGaugeKPa" } },
+    );
   });
 
   it("names the refrigerant when it has no table", () => {
-    expect(standingPressureOutcome({ refrigerant: "R999", standingGaugeKPa: 500, equalisedTempC: 20 })).toMatchObject({ problem: { field: "refrigerant" } });
+    expect(standingPressureOutcome({ refrigerant: "R999", standingGaugeKPa: 500, equalisedTempC: 20 })).toMatchObject({
+      problem: { field: "refrigerant" },
+    });
   });
 });

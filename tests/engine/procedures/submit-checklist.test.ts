@@ -77,7 +77,13 @@ describe("submitChecklist", () => {
   // on the run log must also be in the register by cylinder.
   it("warns when kilograms charged on the run log are not all in the register", () => {
     const none = submitChecklist(cleanVisit({ adjustments: [{ kind: "charge-added", amountKg: 0.8, voided: null }] }));
-    expect(none).toEqual([{ kind: "charge-not-in-register", blocking: false, message: "0.8 kg charged on the run log but none in the register: log it by cylinder (Refrigerant section)" }]);
+    expect(none).toEqual([
+      {
+        kind: "charge-not-in-register",
+        blocking: false,
+        message: "0.8 kg charged on the run log but none in the register: log it by cylinder (Refrigerant section)",
+      },
+    ]);
 
     const part = submitChecklist(
       cleanVisit({
@@ -88,13 +94,17 @@ describe("submitChecklist", () => {
         registerChargedKg: 0.5,
       }),
     );
-    expect(part.map((item) => item.message)).toEqual(["1.2 kg charged on the run log, 0.5 kg in the register: log the other 0.7 kg by cylinder"]);
+    expect(part.map((item) => item.message)).toEqual([
+      "1.2 kg charged on the run log, 0.5 kg in the register: log the other 0.7 kg by cylinder",
+    ]);
   });
 
   it("is satisfied when the register holds the charge (the demo's 3.1 kg reused + 1.1 kg new for a 4.2 kg weigh-in), within the scale's 10 g", () => {
     const weighIn = [{ kind: "charge-added" as const, amountKg: 4.2, voided: null }];
     expect(submitChecklist(cleanVisit({ adjustments: weighIn, registerChargedKg: 3.1 + 1.1 }))).toEqual([]);
-    expect(submitChecklist(cleanVisit({ adjustments: weighIn, registerChargedKg: 4.2 - CHARGE_MATCH_TOLERANCE_KG / 2 }))).toEqual([]);
+    expect(
+      submitChecklist(cleanVisit({ adjustments: weighIn, registerChargedKg: 4.2 - CHARGE_MATCH_TOLERANCE_KG / 2 })),
+    ).toEqual([]);
     // Removals, other adjustments and voided charge marks are not charged refrigerant.
     expect(
       submitChecklist(
@@ -110,8 +120,15 @@ describe("submitChecklist", () => {
   });
 
   it("puts the blocking reason first when several things are wrong", () => {
-    const items = submitChecklist(cleanVisit({ reason: "", readings: [], adjustments: [{ kind: "charge-added", amountKg: 1, voided: null }] }));
-    expect(items.map((item) => item.kind)).toEqual(["missing-reason", "circuit-without-readings", "circuit-without-readings", "charge-not-in-register"]);
+    const items = submitChecklist(
+      cleanVisit({ reason: "", readings: [], adjustments: [{ kind: "charge-added", amountKg: 1, voided: null }] }),
+    );
+    expect(items.map((item) => item.kind)).toEqual([
+      "missing-reason",
+      "circuit-without-readings",
+      "circuit-without-readings",
+      "charge-not-in-register",
+    ]);
     expect(items.filter((item) => item.blocking)).toHaveLength(1);
   });
 });

@@ -40,7 +40,9 @@ describe("loadRefrigerant", () => {
       const error = thrownBy(engine, lookup);
       expect(error.code).toBe("TABLE_NOT_LOADED");
       expect(error.refrigerantId).toBe("R32");
-      expect(error.message).toBe('The R32 saturation table is not loaded: await loadRefrigerant("R32") before using it');
+      expect(error.message).toBe(
+        'The R32 saturation table is not loaded: await loadRefrigerant("R32") before using it',
+      );
     }
   });
 
@@ -70,7 +72,10 @@ describe("loadRefrigerant", () => {
   });
 
   it("refuses an id without a table, loaded or not", async () => {
-    await expect(engine.loadRefrigerant("R999")).rejects.toMatchObject({ code: "UNKNOWN_REFRIGERANT", refrigerantId: "R999" });
+    await expect(engine.loadRefrigerant("R999")).rejects.toMatchObject({
+      code: "UNKNOWN_REFRIGERANT",
+      refrigerantId: "R999",
+    });
     expect(thrownBy(engine, () => engine.saturationPressure("R999", 0)).code).toBe("UNKNOWN_REFRIGERANT");
   });
 

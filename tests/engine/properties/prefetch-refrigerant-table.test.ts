@@ -10,7 +10,10 @@ describe("prefetchRefrigerantTable", () => {
   });
 
   it("imports the same module loadRefrigerant registers, so the table is fetched once", async () => {
-    const importTable = vi.spyOn(SATURATION_TABLE_IMPORTS as Record<string, () => Promise<{ default: unknown }>>, "R32");
+    const importTable = vi.spyOn(
+      SATURATION_TABLE_IMPORTS as Record<string, () => Promise<{ default: unknown }>>,
+      "R32",
+    );
     prefetchRefrigerantTable("R32");
     expect(importTable).toHaveBeenCalledTimes(1);
     const prefetched = await importTable.mock.results[0]!.value;

@@ -101,7 +101,10 @@ describe("saturation lookups (property-based)", () => {
     fc.assert(
       fc.property(fc.constantFrom(...pure), fc.double({ min: 0, max: 1, noNaN: true }), (info, fraction) => {
         // Clamped: min + 1 × (max − min) can round one ulp above max (fast-check found it for R134a).
-        const t = Math.min(info.validRange.maximumC, info.validRange.minimumC + fraction * (info.validRange.maximumC - info.validRange.minimumC));
+        const t = Math.min(
+          info.validRange.maximumC,
+          info.validRange.minimumC + fraction * (info.validRange.maximumC - info.validRange.minimumC),
+        );
         expect(saturationPressure(info.id, t, "bubble")).toBe(saturationPressure(info.id, t, "dew"));
       }),
     );

@@ -24,8 +24,12 @@ describe("authorisation matrix", () => {
     ids = await seedBellbird(testApp);
     agents = await signedInBellbird(testApp.app);
     outsider = (await signUpOtherCompany(testApp.app)).agent;
-    invitationId = (await agents.owner.post("/api/invitations").send({ email: "cross@bellbird.example", role: "apprentice" })).body.invitation.id;
-    outsiderInvitationId = (await outsider.post("/api/invitations").send({ email: "matrix@coldfront.example", role: "technician" })).body.invitation.id;
+    invitationId = (
+      await agents.owner.post("/api/invitations").send({ email: "cross@bellbird.example", role: "apprentice" })
+    ).body.invitation.id;
+    outsiderInvitationId = (
+      await outsider.post("/api/invitations").send({ email: "matrix@coldfront.example", role: "technician" })
+    ).body.invitation.id;
   });
   afterAll(() => testApp.close());
 
@@ -53,7 +57,10 @@ describe("authorisation matrix", () => {
         return a
           .put("/api/profile")
           .set("If-Match", `"${version}"`)
-          .send({ name: "Same Name", preferences: { temperatureUnit: "C", pressureUnit: "kPa", atmosphericPressureKPa: 101.325 } });
+          .send({
+            name: "Same Name",
+            preferences: { temperatureUnit: "C", pressureUnit: "kPa", atmosphericPressureKPa: 101.325 },
+          });
       },
       expect: allowAll(200),
     },
@@ -121,11 +128,15 @@ describe("authorisation matrix", () => {
     const members = await outsider.get("/api/members");
     expect(members.body.members.map((member: { email: string }) => member.email)).toEqual(["owner@coldfront.example"]);
     const invitations = await outsider.get("/api/invitations");
-    expect(invitations.body.invitations.map((item: { email: string }) => item.email)).toEqual(["matrix@coldfront.example"]);
+    expect(invitations.body.invitations.map((item: { email: string }) => item.email)).toEqual([
+      "matrix@coldfront.example",
+    ]);
     const outbox = await outsider.get("/api/outbox");
     for (const message of outbox.body.messages as { to: string }[]) expect(bellbirdEmails).not.toContain(message.to);
     const bellbirdMembers = await agents.owner.get("/api/members");
-    expect(bellbirdMembers.body.members.map((member: { email: string }) => member.email)).not.toContain("owner@coldfront.example");
+    expect(bellbirdMembers.body.members.map((member: { email: string }) => member.email)).not.toContain(
+      "owner@coldfront.example",
+    );
   });
 
   it("refuses a senior who tries to promote themselves to owner", async () => {

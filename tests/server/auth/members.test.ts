@@ -21,7 +21,9 @@ describe("members", () => {
     const names = response.body.members.map((member: { name: string }) => member.name);
     expect(names).toEqual([...names].sort());
     expect(response.body.members).toHaveLength(5);
-    expect(response.body.members.find((member: { email: string }) => member.email === BELLBIRD.apprentice).role).toBe("apprentice");
+    expect(response.body.members.find((member: { email: string }) => member.email === BELLBIRD.apprentice).role).toBe(
+      "apprentice",
+    );
   });
 
   it("lets an owner change a role", async () => {
@@ -59,7 +61,9 @@ describe("members", () => {
     const response = await owner.delete(`/api/members/${ids["tech2@bellbird.example"]}`);
     expect(response.status).toBe(204);
     expect((await leaver.get("/api/auth/me")).status).toBe(401);
-    expect(await testApp.database.db.select().from(sessions).where(eq(sessions.userId, ids["tech2@bellbird.example"]))).toHaveLength(0);
+    expect(
+      await testApp.database.db.select().from(sessions).where(eq(sessions.userId, ids["tech2@bellbird.example"])),
+    ).toHaveLength(0);
     const list = await owner.get("/api/members");
     expect(list.body.members.map((member: { email: string }) => member.email)).not.toContain("tech2@bellbird.example");
     expect((await owner.delete(`/api/members/${ids["tech2@bellbird.example"]}`)).status).toBe(404);

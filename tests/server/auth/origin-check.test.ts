@@ -14,7 +14,10 @@ describe("origin check", () => {
   afterAll(() => testApp.close());
 
   it("refuses a POST whose Origin is another site", async () => {
-    const response = await request(testApp.app).post("/api/auth/sign-in").set("Origin", "https://evil.example").send(credentials);
+    const response = await request(testApp.app)
+      .post("/api/auth/sign-in")
+      .set("Origin", "https://evil.example")
+      .send(credentials);
     expect(response.status).toBe(403);
     expect(response.body.message).toMatch(/another site/);
   });
@@ -30,9 +33,16 @@ describe("origin check", () => {
   });
 
   it("accepts the server's own origin and APP_URL", async () => {
-    const own = await request(testApp.app).post("/api/auth/sign-in").set("Host", "tablet.local:3000").set("Origin", "http://tablet.local:3000").send(credentials);
+    const own = await request(testApp.app)
+      .post("/api/auth/sign-in")
+      .set("Host", "tablet.local:3000")
+      .set("Origin", "http://tablet.local:3000")
+      .send(credentials);
     expect(own.status).toBe(200);
-    const appUrl = await request(testApp.app).post("/api/auth/sign-in").set("Origin", "http://satura.test").send(credentials);
+    const appUrl = await request(testApp.app)
+      .post("/api/auth/sign-in")
+      .set("Origin", "http://satura.test")
+      .send(credentials);
     expect(appUrl.status).toBe(200);
   });
 

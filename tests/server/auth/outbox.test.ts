@@ -20,7 +20,10 @@ describe("development outbox", () => {
     await testApp.smtp.waitFor((mail) => mail.to.includes("outbox-check@bellbird.example"));
     const response = await owner.get("/api/outbox");
     expect(response.status).toBe(200);
-    expect(response.body.messages[0]).toMatchObject({ to: "outbox-check@bellbird.example", subject: "Join Bellbird Mechanical on Satura" });
+    expect(response.body.messages[0]).toMatchObject({
+      to: "outbox-check@bellbird.example",
+      subject: "Join Bellbird Mechanical on Satura",
+    });
   });
 
   // Issue 13, item 11: the Outbox showed an owner the reset links of every member, enough to
@@ -38,7 +41,9 @@ describe("development outbox", () => {
       }),
     );
 
-    const { messages } = (await owner.get("/api/outbox")).body as { messages: { to: string; text: string; linksHidden: boolean }[] };
+    const { messages } = (await owner.get("/api/outbox")).body as {
+      messages: { to: string; text: string; linksHidden: boolean }[];
+    };
     const outbox = JSON.stringify(messages);
     for (const { to, token } of sent) {
       const message = messages.find((candidate) => candidate.to === to && /token=/.test(candidate.text))!;

@@ -39,7 +39,10 @@ describe("password reset", () => {
 
   it("stores only a hash of the token, which expires after an hour", async () => {
     const token = await tokenFrom(BELLBIRD.senior);
-    const rows = await testApp.database.db.select().from(passwordResets).where(eq(passwordResets.userId, ids[BELLBIRD.senior]));
+    const rows = await testApp.database.db
+      .select()
+      .from(passwordResets)
+      .where(eq(passwordResets.userId, ids[BELLBIRD.senior]));
     expect(rows.some((row) => row.tokenHash === token)).toBe(false);
     const latest = rows.find((row) => row.usedAt === null)!;
     const minutes = (latest.expiresAt.getTime() - latest.createdAt.getTime()) / 60_000;
@@ -49,16 +52,24 @@ describe("password reset", () => {
   it("sets the new password once, signs out every session and refuses the link a second time", async () => {
     const oldSession = await signedIn(testApp.app, BELLBIRD.senior);
     const token = await tokenFrom(BELLBIRD.senior);
-    const confirm = await request(testApp.app).post("/api/auth/password-reset/confirm").send({ token, password: "evaporator-glide-2027" });
+    const confirm = await request(testApp.app)
+      .post("/api/auth/password-reset/confirm")
+      .send({ token, password: "evaporator-glide-2027" });
     expect(confirm.status).toBe(204);
 
     expect((await oldSession.get("/api/auth/me")).status).toBe(401);
-    const oldPassword = await request(testApp.app).post("/api/auth/sign-in").send({ email: BELLBIRD.senior, password: "bellbird-demo-2026" });
+    const oldPassword = await request(testApp.app)
+      .post("/api/auth/sign-in")
+      .send({ email: BELLBIRD.senior, password: "bellbird-demo-2026" });
     expect(oldPassword.status).toBe(401);
-    const newPassword = await request(testApp.app).post("/api/auth/sign-in").send({ email: BELLBIRD.senior, password: "evaporator-glide-2027" });
+    const newPassword = await request(testApp.app)
+      .post("/api/auth/sign-in")
+      .send({ email: BELLBIRD.senior, password: "evaporator-glide-2027" });
     expect(newPassword.status).toBe(200);
 
-    const again = await request(testApp.app).post("/api/auth/password-reset/confirm").send({ token, password: "another-fresh-password" });
+    const again = await request(testApp.app)
+      .post("/api/auth/password-reset/confirm")
+      .send({ token, password: "another-fresh-password" });
     expect(again.status).toBe(400);
     expect(again.body.fields.token).toMatch(/expired or was already used/);
   });
@@ -70,9 +81,13 @@ describe("password reset", () => {
     await requestReset(BELLBIRD.apprentice);
     const second = await tokenFrom(BELLBIRD.apprentice);
     expect(second).not.toBe(first);
-    const stale = await request(testApp.app).post("/api/auth/password-reset/confirm").send({ token: first, password: "brand-new-password-1" });
+    const stale = await request(testApp.app)
+      .post("/api/auth/password-reset/confirm")
+      .send({ token: first, password: "brand-new-password-1" });
     expect(stale.status).toBe(400);
-    const fresh = await request(testApp.app).post("/api/auth/password-reset/confirm").send({ token: second, password: "brand-new-password-1" });
+    const fresh = await request(testApp.app)
+      .post("/api/auth/password-reset/confirm")
+      .send({ token: second, password: "brand-new-password-1" });
     expect(fresh.status).toBe(204);
   });
 
@@ -80,15 +95,25 @@ describe("password reset", () => {
     testApp.smtp.messages.length = 0;
     await requestReset(BELLBIRD.technician);
     const token = await tokenFrom(BELLBIRD.technician);
-    await testApp.database.db.update(passwordResets).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(passwordResets.userId, ids[BELLBIRD.technician]));
-    const response = await request(testApp.app).post("/api/auth/password-reset/confirm").send({ token, password: "brand-new-password-2" });
+    await testApp.database.db
+      .update(passwordResets)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(passwordResets.userId, ids[BELLBIRD.technician]));
+    const response = await request(testApp.app)
+      .post("/api/auth/password-reset/confirm")
+      .send({ token, password: "brand-new-password-2" });
     expect(response.status).toBe(400);
-    const sessionCount = await testApp.database.db.select().from(sessions).where(eq(sessions.userId, ids[BELLBIRD.technician]));
+    const sessionCount = await testApp.database.db
+      .select()
+      .from(sessions)
+      .where(eq(sessions.userId, ids[BELLBIRD.technician]));
     expect(sessionCount).toHaveLength(0);
   });
 
   it("applies the password policy to the new password", async () => {
-    const response = await request(testApp.app).post("/api/auth/password-reset/confirm").send({ token: "x".repeat(43), password: "password123" });
+    const response = await request(testApp.app)
+      .post("/api/auth/password-reset/confirm")
+      .send({ token: "x".repeat(43), password: "password123" });
     expect(response.status).toBe(400);
     expect(response.body.fields.password).toMatch(/too common/);
   });

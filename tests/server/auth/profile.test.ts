@@ -16,7 +16,11 @@ describe("profile settings", () => {
     expect(response.status).toBe(200);
     expect(response.body.organisationName).toBe("Bellbird Mechanical");
     // ISO 2533 standard atmosphere at sea level: 101.325 kPa.
-    expect(response.body.preferences).toEqual({ temperatureUnit: "C", pressureUnit: "kPa", atmosphericPressureKPa: 101.325 });
+    expect(response.body.preferences).toEqual({
+      temperatureUnit: "C",
+      pressureUnit: "kPa",
+      atmosphericPressureKPa: 101.325,
+    });
   });
 
   it("saves display units, atmospheric pressure and name for that user only", async () => {
@@ -24,10 +28,17 @@ describe("profile settings", () => {
     const update = await agent
       .put("/api/profile")
       .set("If-Match", '"1"')
-      .send({ name: "Sam Toko", preferences: { temperatureUnit: "F", pressureUnit: "psi", atmosphericPressureKPa: 95.5 } });
+      .send({
+        name: "Sam Toko",
+        preferences: { temperatureUnit: "F", pressureUnit: "psi", atmosphericPressureKPa: 95.5 },
+      });
     expect(update.status).toBe(200);
     expect(update.body.version).toBe(2);
-    expect(update.body.preferences).toEqual({ temperatureUnit: "F", pressureUnit: "psi", atmosphericPressureKPa: 95.5 });
+    expect(update.body.preferences).toEqual({
+      temperatureUnit: "F",
+      pressureUnit: "psi",
+      atmosphericPressureKPa: 95.5,
+    });
     expect((await agent.get("/api/profile")).body.preferences.pressureUnit).toBe("psi");
 
     const colleague = await signedIn(testApp.app, BELLBIRD.senior);
@@ -53,8 +64,14 @@ describe("profile settings", () => {
     const agent = await signedIn(testApp.app, BELLBIRD.senior);
     const { version } = (await agent.get("/api/profile")).body;
     // The form sends an emptied licence number as null (what the shared schema makes of "").
-    const body = (name: string) => ({ name, preferences: { temperatureUnit: "C", pressureUnit: "kPa", atmosphericPressureKPa: 101.325 }, licenceNumber: null });
-    expect((await agent.put("/api/profile").set("If-Match", `"${version}"`).send(body("Priya Raman"))).status).toBe(200);
+    const body = (name: string) => ({
+      name,
+      preferences: { temperatureUnit: "C", pressureUnit: "kPa", atmosphericPressureKPa: 101.325 },
+      licenceNumber: null,
+    });
+    expect((await agent.put("/api/profile").set("If-Match", `"${version}"`).send(body("Priya Raman"))).status).toBe(
+      200,
+    );
     const stale = await agent.put("/api/profile").set("If-Match", `"${version}"`).send(body("Priya R."));
     expect(stale.status).toBe(409);
     expect(stale.body.message).toMatch(/A newer version of your profile was saved/);

@@ -40,9 +40,14 @@ describe("sign-in and reset throttling", () => {
   it("lets no single client, however long it keeps at it, reach the account's ceiling", async () => {
     const attempts = DEFAULT_AUTH_LIMITS.signInFailuresPerAccount + 10;
     const statuses: number[] = [];
-    for (let attempt = 0; attempt < attempts; attempt++) statuses.push((await signIn(BELLBIRD.owner, "wrong-password", "198.51.100.8")).status);
-    expect(statuses.filter((status) => status === 401)).toHaveLength(DEFAULT_AUTH_LIMITS.signInFailuresPerAccountAndClient);
-    expect(statuses.slice(DEFAULT_AUTH_LIMITS.signInFailuresPerAccountAndClient).every((status) => status === 429)).toBe(true);
+    for (let attempt = 0; attempt < attempts; attempt++)
+      statuses.push((await signIn(BELLBIRD.owner, "wrong-password", "198.51.100.8")).status);
+    expect(statuses.filter((status) => status === 401)).toHaveLength(
+      DEFAULT_AUTH_LIMITS.signInFailuresPerAccountAndClient,
+    );
+    expect(
+      statuses.slice(DEFAULT_AUTH_LIMITS.signInFailuresPerAccountAndClient).every((status) => status === 429),
+    ).toBe(true);
     expect((await signIn(BELLBIRD.owner, PASSWORD, "203.0.113.51")).status).toBe(200);
   });
 
@@ -70,7 +75,12 @@ describe("sign-in and reset throttling", () => {
 
   it("keeps the counts in the database, shared by every app server, without addresses or e-mails in it", async () => {
     // A second app server over the same database, as a second process would be.
-    const env = readEnv({ NODE_ENV: "test", DATA_DIR: "memory://", APP_URL: "http://satura.test", LOG_LEVEL: "silent" });
+    const env = readEnv({
+      NODE_ENV: "test",
+      DATA_DIR: "memory://",
+      APP_URL: "http://satura.test",
+      LOG_LEVEL: "silent",
+    });
     const second = createApp({ db: testApp.database.db, env, logger: createLogger(env), mailer: testApp.mailer });
     for (let attempt = 0; attempt < DEFAULT_AUTH_LIMITS.signInFailuresPerAccountAndClient; attempt++) {
       const app = attempt % 2 === 0 ? testApp.app : second;
@@ -91,10 +101,14 @@ describe("sign-in and reset throttling", () => {
     const small = await createTestApp({ authLimits: { signInPerIp: 3 } });
     try {
       for (let attempt = 0; attempt < 3; attempt++) {
-        const response = await request(small.app).post("/api/auth/sign-in").send({ email: `user${attempt}@example.com`, password: "whatever-it-is" });
+        const response = await request(small.app)
+          .post("/api/auth/sign-in")
+          .send({ email: `user${attempt}@example.com`, password: "whatever-it-is" });
         expect(response.status).toBe(401);
       }
-      const blocked = await request(small.app).post("/api/auth/sign-in").send({ email: "user9@example.com", password: "whatever-it-is" });
+      const blocked = await request(small.app)
+        .post("/api/auth/sign-in")
+        .send({ email: "user9@example.com", password: "whatever-it-is" });
       expect(blocked.status).toBe(429);
     } finally {
       await small.close();
@@ -117,7 +131,10 @@ describe("sign-in and reset throttling", () => {
 
   it("answers 429 after 3 reset requests for one account", async () => {
     for (let attempt = 0; attempt < DEFAULT_AUTH_LIMITS.resetPerAccount; attempt++) {
-      const response = await request(testApp.app).post("/api/auth/password-reset/request").set("X-Forwarded-For", `192.0.2.${attempt}`).send({ email: BELLBIRD.owner });
+      const response = await request(testApp.app)
+        .post("/api/auth/password-reset/request")
+        .set("X-Forwarded-For", `192.0.2.${attempt}`)
+        .send({ email: BELLBIRD.owner });
       expect(response.status).toBe(202);
     }
     const blocked = await request(testApp.app).post("/api/auth/password-reset/request").send({ email: BELLBIRD.owner });
@@ -126,10 +143,14 @@ describe("sign-in and reset throttling", () => {
 
   it("answers 429 when one client asks for too many resets", async () => {
     for (let attempt = 0; attempt < DEFAULT_AUTH_LIMITS.resetPerIp; attempt++) {
-      const response = await request(testApp.app).post("/api/auth/password-reset/request").send({ email: `person${attempt}@example.com` });
+      const response = await request(testApp.app)
+        .post("/api/auth/password-reset/request")
+        .send({ email: `person${attempt}@example.com` });
       expect(response.status).toBe(202);
     }
-    const blocked = await request(testApp.app).post("/api/auth/password-reset/request").send({ email: "one-more@example.com" });
+    const blocked = await request(testApp.app)
+      .post("/api/auth/password-reset/request")
+      .send({ email: "one-more@example.com" });
     expect(blocked.status).toBe(429);
   });
 });

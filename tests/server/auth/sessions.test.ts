@@ -34,7 +34,10 @@ describe("sessions", () => {
   it("refuses an expired session and clears its cookie", async () => {
     const agent = await signedIn(testApp.app, BELLBIRD.senior);
     const session = await onlySessionOf(ids[BELLBIRD.senior]);
-    await testApp.database.db.update(sessions).set({ expiresAt: new Date(Date.now() - 1_000) }).where(eq(sessions.id, session.id));
+    await testApp.database.db
+      .update(sessions)
+      .set({ expiresAt: new Date(Date.now() - 1_000) })
+      .where(eq(sessions.id, session.id));
     const response = await agent.get("/api/auth/me");
     expect(response.status).toBe(401);
     expect(cookieHeader(response).join(";")).toMatch(/satura_session=;/);
@@ -61,13 +64,18 @@ describe("sessions", () => {
   });
 
   it("ignores a forged session id", async () => {
-    const response = await request(testApp.app).get("/api/auth/me").set("Cookie", "satura_session=not-a-real-session-id");
+    const response = await request(testApp.app)
+      .get("/api/auth/me")
+      .set("Cookie", "satura_session=not-a-real-session-id");
     expect(response.status).toBe(401);
   });
 
   it("applies a role change to an existing session at once", async () => {
     const agent = await signedIn(testApp.app, "tech2@bellbird.example");
-    await testApp.database.db.update(users).set({ role: "apprentice" }).where(eq(users.email, "tech2@bellbird.example"));
+    await testApp.database.db
+      .update(users)
+      .set({ role: "apprentice" })
+      .where(eq(users.email, "tech2@bellbird.example"));
     const me = await agent.get("/api/auth/me");
     expect(me.body.user.role).toBe("apprentice");
   });
@@ -80,7 +88,9 @@ describe("session fixation", () => {
       await seedBellbird(testApp);
       const agent = await signedIn(testApp.app, BELLBIRD.owner);
       const first = await testApp.database.db.select().from(sessions);
-      const again = await agent.post("/api/auth/sign-in").send({ email: BELLBIRD.owner, password: "bellbird-demo-2026" });
+      const again = await agent
+        .post("/api/auth/sign-in")
+        .send({ email: BELLBIRD.owner, password: "bellbird-demo-2026" });
       expect(again.status).toBe(200);
       const after = await testApp.database.db.select().from(sessions);
       expect(after).toHaveLength(1);

@@ -16,9 +16,12 @@ describe("sign-up, sign-in, sign-out and me", () => {
 
   it("creates an organisation and its owner on sign-up, answering 201 with a session cookie", async () => {
     const agent = request.agent(testApp.app);
-    const response = await agent
-      .post("/api/auth/sign-up")
-      .send({ name: " Mia Osei ", email: "Mia@Southwind.Example", password: "long-enough-passphrase", organisationName: "Southwind Air" });
+    const response = await agent.post("/api/auth/sign-up").send({
+      name: " Mia Osei ",
+      email: "Mia@Southwind.Example",
+      password: "long-enough-passphrase",
+      organisationName: "Southwind Air",
+    });
     expect(response.status).toBe(201);
     expect(response.body.user).toMatchObject({ name: "Mia Osei", email: "mia@southwind.example", role: "owner" });
     const cookie = cookieHeader(response).find((line) => line.startsWith("satura_session="));
@@ -31,16 +34,22 @@ describe("sign-up, sign-in, sign-out and me", () => {
     const me = await agent.get("/api/auth/me");
     expect(me.status).toBe(200);
     expect(me.body).toEqual({ user: response.body.user });
-    const [organisation] = await testApp.database.db.select().from(organisations).where(eq(organisations.id, me.body.user.organisationId));
+    const [organisation] = await testApp.database.db
+      .select()
+      .from(organisations)
+      .where(eq(organisations.id, me.body.user.organisationId));
     expect(organisation.name).toBe("Southwind Air");
   });
 
   it("marks the cookie Secure in production", async () => {
     const production = await createTestApp({ env: { NODE_ENV: "production" } });
     try {
-      const response = await request(production.app)
-        .post("/api/auth/sign-up")
-        .send({ name: "Kai Brand", email: "kai@prod.example", password: "another-long-passphrase", organisationName: "Prod Co" });
+      const response = await request(production.app).post("/api/auth/sign-up").send({
+        name: "Kai Brand",
+        email: "kai@prod.example",
+        password: "another-long-passphrase",
+        organisationName: "Prod Co",
+      });
       expect(response.status).toBe(201);
       expect(cookieHeader(response).join(";")).toMatch(/; Secure/i);
     } finally {
@@ -49,15 +58,20 @@ describe("sign-up, sign-in, sign-out and me", () => {
   });
 
   it("refuses a second account with the same address, whatever its case", async () => {
-    const response = await request(testApp.app)
-      .post("/api/auth/sign-up")
-      .send({ name: "Copy", email: "OWNER@bellbird.example", password: "long-enough-passphrase", organisationName: "Copy Co" });
+    const response = await request(testApp.app).post("/api/auth/sign-up").send({
+      name: "Copy",
+      email: "OWNER@bellbird.example",
+      password: "long-enough-passphrase",
+      organisationName: "Copy Co",
+    });
     expect(response.status).toBe(409);
     expect(response.body.fields.email).toMatch(/already has an account/);
   });
 
   it("validates every sign-up field with a message per field", async () => {
-    const response = await request(testApp.app).post("/api/auth/sign-up").send({ name: "", email: "not-an-address", password: "short", organisationName: "" });
+    const response = await request(testApp.app)
+      .post("/api/auth/sign-up")
+      .send({ name: "", email: "not-an-address", password: "short", organisationName: "" });
     expect(response.status).toBe(400);
     expect(Object.keys(response.body.fields).sort()).toEqual(["email", "name", "organisationName", "password"]);
   });
@@ -86,18 +100,30 @@ describe("sign-up, sign-in, sign-out and me", () => {
   });
 
   it("accepts the address in any case and with spaces around it", async () => {
-    const response = await request(testApp.app).post("/api/auth/sign-in").send({ email: "  Tech@Bellbird.EXAMPLE ", password: "bellbird-demo-2026" });
+    const response = await request(testApp.app)
+      .post("/api/auth/sign-in")
+      .send({ email: "  Tech@Bellbird.EXAMPLE ", password: "bellbird-demo-2026" });
     expect(response.status).toBe(200);
   });
 
   it("answers a wrong password, an unknown address and a malformed address with the same 401", async () => {
-    const wrongPassword = await request(testApp.app).post("/api/auth/sign-in").send({ email: BELLBIRD.owner, password: "not-the-password" });
-    const unknown = await request(testApp.app).post("/api/auth/sign-in").send({ email: "nobody@bellbird.example", password: "not-the-password" });
-    const malformed = await request(testApp.app).post("/api/auth/sign-in").send({ email: "nobody", password: "not-the-password" });
+    const wrongPassword = await request(testApp.app)
+      .post("/api/auth/sign-in")
+      .send({ email: BELLBIRD.owner, password: "not-the-password" });
+    const unknown = await request(testApp.app)
+      .post("/api/auth/sign-in")
+      .send({ email: "nobody@bellbird.example", password: "not-the-password" });
+    const malformed = await request(testApp.app)
+      .post("/api/auth/sign-in")
+      .send({ email: "nobody", password: "not-the-password" });
     for (const response of [wrongPassword, unknown, malformed]) {
       expect(response.status).toBe(401);
       expect(response.body).toEqual({ message: SIGN_IN_FAILED });
-      expect(cookieHeader(response).some((line) => line.startsWith("satura_session=") && !line.startsWith("satura_session=;"))).toBe(false);
+      expect(
+        cookieHeader(response).some(
+          (line) => line.startsWith("satura_session=") && !line.startsWith("satura_session=;"),
+        ),
+      ).toBe(false);
     }
   });
 
@@ -125,8 +151,13 @@ describe("sign-up, sign-in, sign-out and me", () => {
   });
 
   it("refuses sign-in to a removed member with the same generic 401", async () => {
-    await testApp.database.db.update(users).set({ deactivatedAt: new Date() }).where(eq(users.email, "tech2@bellbird.example"));
-    const response = await request(testApp.app).post("/api/auth/sign-in").send({ email: "tech2@bellbird.example", password: "bellbird-demo-2026" });
+    await testApp.database.db
+      .update(users)
+      .set({ deactivatedAt: new Date() })
+      .where(eq(users.email, "tech2@bellbird.example"));
+    const response = await request(testApp.app)
+      .post("/api/auth/sign-in")
+      .send({ email: "tech2@bellbird.example", password: "bellbird-demo-2026" });
     expect(response.status).toBe(401);
     expect(response.body).toEqual({ message: SIGN_IN_FAILED });
   });

@@ -30,13 +30,24 @@ const visit = VisitSchema.parse({
   comments: [],
   photos: [],
   revision: "fixture",
-  atmosphere: { pressureKPa: 101.325, basis: "standard", altitudeM: null, description: "standard atmosphere: site has no altitude" },
+  atmosphere: {
+    pressureKPa: 101.325,
+    basis: "standard",
+    altitudeM: null,
+    description: "standard atmosphere: site has no altitude",
+  },
   events: [],
 });
 
 describe("visitReportMail", () => {
   it("writes the start and the sign-off in the sender's zone, named, with the day across midnight", () => {
-    const mail = visitReportMail(visit, "https://satura.test/visits/x/report", "facilities@example.com", "org", "Australia/Sydney");
+    const mail = visitReportMail(
+      visit,
+      "https://satura.test/visits/x/report",
+      "facilities@example.com",
+      "org",
+      "Australia/Sydney",
+    );
     expect(mail.text).toContain("Started 2 Dec 2026, 14:05 (Australia/Sydney time).");
     // 13:30 UTC is 00:30 the next day in Sydney.
     expect(mail.text).toContain("signed off by Priya Raman on 3 Dec 2026, 00:30");

@@ -27,9 +27,30 @@ describe("chartSeries", () => {
     expect(kept.slice(-EXACT_TAIL_POINTS)).toEqual(points.slice(-EXACT_TAIL_POINTS));
     expect(kept).toContain(points[4_321]);
     expect(kept).toContain(points[7_654]);
-    const extreme = (values: (number | null)[], pick: (...numbers: number[]) => number) => pick(...values.filter((value): value is number => value !== null));
-    expect(extreme(kept.map((point) => point.condensingTempC), Math.max)).toBe(extreme(points.map((point) => point.condensingTempC), Math.max));
-    expect(extreme(kept.map((point) => point.superheatK), Math.min)).toBe(extreme(points.map((point) => point.superheatK), Math.min));
+    const extreme = (values: (number | null)[], pick: (...numbers: number[]) => number) =>
+      pick(...values.filter((value): value is number => value !== null));
+    expect(
+      extreme(
+        kept.map((point) => point.condensingTempC),
+        Math.max,
+      ),
+    ).toBe(
+      extreme(
+        points.map((point) => point.condensingTempC),
+        Math.max,
+      ),
+    );
+    expect(
+      extreme(
+        kept.map((point) => point.superheatK),
+        Math.min,
+      ),
+    ).toBe(
+      extreme(
+        points.map((point) => point.superheatK),
+        Math.min,
+      ),
+    );
     // Real readings, in time order.
     expect(kept.map((point) => point.x)).toEqual([...kept].map((point) => point.x).sort((a, b) => a - b));
   });

@@ -14,7 +14,10 @@ function apparatusDewPoint(pressurePa: number): { ratio: number; enthalpyKJPerKg
   let point = dewPointByPressure.get(pressurePa);
   if (!point) {
     const ratio = psychrolib.GetSatHumRatio(SPLIT_TARGET_MODEL.apparatusDewPointC, pressurePa) as number;
-    point = { ratio, enthalpyKJPerKg: (psychrolib.GetMoistAirEnthalpy(SPLIT_TARGET_MODEL.apparatusDewPointC, ratio) as number) / 1000 };
+    point = {
+      ratio,
+      enthalpyKJPerKg: (psychrolib.GetMoistAirEnthalpy(SPLIT_TARGET_MODEL.apparatusDewPointC, ratio) as number) / 1000,
+    };
     if (dewPointByPressure.size < 1000) dewPointByPressure.set(pressurePa, point);
   }
   return point;
@@ -40,10 +43,15 @@ function apparatusDewPoint(pressurePa: number): { ratio: number; enthalpyKJPerKg
  * @throws never; returns null outside the valid range
  * @example targetTemperatureSplit(26.7, 19.4, 101.325) // ≈ 10.3 (K)
  */
-export function targetTemperatureSplit(returnDryBulbC: number, returnWetBulbC: number, atmosphericPressureKPa: number): number | null {
+export function targetTemperatureSplit(
+  returnDryBulbC: number,
+  returnWetBulbC: number,
+  atmosphericPressureKPa: number,
+): number | null {
   const { min, max } = RETURN_DRY_BULB_RANGE_C;
   const model = SPLIT_TARGET_MODEL;
-  if (!(returnDryBulbC >= min && returnDryBulbC <= max) || !(returnWetBulbC <= returnDryBulbC) || !(returnWetBulbC > 0)) return null;
+  if (!(returnDryBulbC >= min && returnDryBulbC <= max) || !(returnWetBulbC <= returnDryBulbC) || !(returnWetBulbC > 0))
+    return null;
   if (!(atmosphericPressureKPa > 0) || returnDryBulbC <= model.apparatusDewPointC) return null;
   psychrolib.SetUnitSystem(psychrolib.SI);
   const pressurePa = atmosphericPressureKPa * 1000;

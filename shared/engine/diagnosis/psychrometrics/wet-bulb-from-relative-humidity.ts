@@ -25,7 +25,9 @@ export function wetBulbFromRelativeHumidity(
   atmosphericPressureKPa: number,
 ): number {
   if (!Number.isFinite(dryBulbC) || dryBulbC < MIN_DRY_BULB_C || dryBulbC > MAX_DRY_BULB_C) {
-    throw new RangeError(`wetBulbFromRelativeHumidity requires a dry bulb between ${MIN_DRY_BULB_C} and ${MAX_DRY_BULB_C} °C`);
+    throw new RangeError(
+      `wetBulbFromRelativeHumidity requires a dry bulb between ${MIN_DRY_BULB_C} and ${MAX_DRY_BULB_C} °C`,
+    );
   }
   if (!Number.isFinite(relativeHumidityPercent) || relativeHumidityPercent <= 0 || relativeHumidityPercent > 100) {
     throw new RangeError("wetBulbFromRelativeHumidity requires a relative humidity above 0 and at most 100 %");
@@ -34,5 +36,9 @@ export function wetBulbFromRelativeHumidity(
     throw new RangeError("wetBulbFromRelativeHumidity requires a positive atmospheric pressure in kPa");
   }
   psychrolib.SetUnitSystem(psychrolib.SI);
-  return psychrolib.GetTWetBulbFromRelHum(dryBulbC, relativeHumidityPercent / 100, atmosphericPressureKPa * 1000) as number;
+  return psychrolib.GetTWetBulbFromRelHum(
+    dryBulbC,
+    relativeHumidityPercent / 100,
+    atmosphericPressureKPa * 1000,
+  ) as number;
 }

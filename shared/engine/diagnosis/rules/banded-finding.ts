@@ -65,7 +65,10 @@ export function bandedFinding(spec: BandedReading, snapshot: DiagnosisSnapshot):
   const direction = deviation < 0 ? "low" : deviation > 0 ? "high" : "normal";
   const strength = deviationStrength(deviation, spec.fullStrength);
   const bandStrength = deviation < 0 ? -strength : strength;
-  const pivotDeviation = spec.pivot === undefined ? 0 : Math.sign(spec.value - spec.pivot) * deviationStrength(spec.value - spec.pivot, spec.fullStrength);
+  const pivotDeviation =
+    spec.pivot === undefined
+      ? 0
+      : Math.sign(spec.value - spec.pivot) * deviationStrength(spec.value - spec.pivot, spec.fullStrength);
   const message = spec.messages[direction](formatTenths(spec.value), spec.bandText ?? bandTextOf(spec.band), snapshot);
   return {
     ruleId: spec.ruleId,

@@ -14,11 +14,14 @@ const HIGH_RATIO_SOURCE = `${MEMORY}; ${cite(["S38"])}`;
 const BAND = { lowK: LOW_COMPRESSION_RATIO, highK: Number.POSITIVE_INFINITY };
 
 /** Compression ratio: too low means the compressor is not pumping; very high strains a single stage. */
-const basisOf = (snapshot: DiagnosisSnapshot) => (snapshot.compressionRatioBasis === "liquid" ? " (from liquid pressure)" : "");
+const basisOf = (snapshot: DiagnosisSnapshot) =>
+  snapshot.compressionRatioBasis === "liquid" ? " (from liquid pressure)" : "";
 
 const MESSAGES: BandedReading["messages"] = {
-  low: (_value, _band, snapshot) => `Compression ratio ${snapshot.compressionRatio!.toFixed(2)}:1${basisOf(snapshot)} is below ${LOW_COMPRESSION_RATIO}:1: the compressor is not building a normal pressure difference`,
-  normal: (_value, _band, snapshot) => `Compression ratio ${snapshot.compressionRatio!.toFixed(2)}:1${basisOf(snapshot)}`,
+  low: (_value, _band, snapshot) =>
+    `Compression ratio ${snapshot.compressionRatio!.toFixed(2)}:1${basisOf(snapshot)} is below ${LOW_COMPRESSION_RATIO}:1: the compressor is not building a normal pressure difference`,
+  normal: (_value, _band, snapshot) =>
+    `Compression ratio ${snapshot.compressionRatio!.toFixed(2)}:1${basisOf(snapshot)}`,
   high: (_value, _band, snapshot) => `Compression ratio ${snapshot.compressionRatio!.toFixed(2)}:1${basisOf(snapshot)}`,
 };
 
@@ -46,19 +49,22 @@ export const compressionRatioRule: DiagnosisRule = {
         ],
       };
     }
-    const finding = bandedFinding({
-      ruleId: this.id,
-      reading: "compressionRatio",
-      value: ratio,
-      unit: ":1",
-      band: BAND,
-      bandText: `${LOW_COMPRESSION_RATIO}`,
-      fullStrength: FULL_STRENGTH_RATIO_BELOW,
-      feature: "compressionRatio",
-      family: snapshot.meteringFamily,
-      messages: MESSAGES,
-      source: SOURCE,
-    }, snapshot);
+    const finding = bandedFinding(
+      {
+        ruleId: this.id,
+        reading: "compressionRatio",
+        value: ratio,
+        unit: ":1",
+        band: BAND,
+        bandText: `${LOW_COMPRESSION_RATIO}`,
+        fullStrength: FULL_STRENGTH_RATIO_BELOW,
+        feature: "compressionRatio",
+        family: snapshot.meteringFamily,
+        messages: MESSAGES,
+        source: SOURCE,
+      },
+      snapshot,
+    );
     return { findings: [finding], warnings: [] };
   },
 };

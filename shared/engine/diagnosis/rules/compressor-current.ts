@@ -9,14 +9,18 @@ const SOURCE = `${cite(["S39", "S21"])}; ${COMMON_PRACTICE}`;
 
 /** Compressor running current against RLA (RLA is a rating, not the expected running current). */
 const MESSAGES: BandedReading["messages"] = {
-  low: (_value, _band, { input, compressorCurrentRatio }) => `Compressor draws ${input.compressorAmps!.toFixed(1)} A, ${formatHundredths(compressorCurrentRatio!)} × RLA: little refrigerant is being pumped`,
-  normal: (_value, _band, { input, compressorCurrentRatio }) => `Compressor draws ${input.compressorAmps!.toFixed(1)} A, ${formatHundredths(compressorCurrentRatio!)} × RLA: within its rating`,
-  high: (_value, _band, { input, compressorCurrentRatio }) => `Compressor draws ${input.compressorAmps!.toFixed(1)} A, ${formatHundredths(compressorCurrentRatio!)} × RLA: above its rating — high head pressure or high load; investigate`,
+  low: (_value, _band, { input, compressorCurrentRatio }) =>
+    `Compressor draws ${input.compressorAmps!.toFixed(1)} A, ${formatHundredths(compressorCurrentRatio!)} × RLA: little refrigerant is being pumped`,
+  normal: (_value, _band, { input, compressorCurrentRatio }) =>
+    `Compressor draws ${input.compressorAmps!.toFixed(1)} A, ${formatHundredths(compressorCurrentRatio!)} × RLA: within its rating`,
+  high: (_value, _band, { input, compressorCurrentRatio }) =>
+    `Compressor draws ${input.compressorAmps!.toFixed(1)} A, ${formatHundredths(compressorCurrentRatio!)} × RLA: above its rating — high head pressure or high load; investigate`,
 };
 
 export const compressorCurrentRule: DiagnosisRule = {
   id: "compressor-current",
-  description: "Compressor current above RLA points to high load (head pressure); far below it, to little refrigerant pumped",
+  description:
+    "Compressor current above RLA points to high load (head pressure); far below it, to little refrigerant pumped",
   source: SOURCE,
   evaluate(snapshot) {
     const { compressorAmps, compressorRla } = snapshot.input;
@@ -36,18 +40,21 @@ export const compressorCurrentRule: DiagnosisRule = {
         ],
       };
     }
-    const finding = bandedFinding({
-      ruleId: this.id,
-      reading: "compressorCurrentRatio",
-      value: ratio,
-      unit: "× RLA",
-      band: CURRENT_RATIO_BAND,
-      fullStrength: CURRENT_RATIO_FULL_STRENGTH,
-      feature: "compressorCurrent",
-      family: snapshot.meteringFamily,
-      messages: MESSAGES,
-      source: SOURCE,
-    }, snapshot);
+    const finding = bandedFinding(
+      {
+        ruleId: this.id,
+        reading: "compressorCurrentRatio",
+        value: ratio,
+        unit: "× RLA",
+        band: CURRENT_RATIO_BAND,
+        fullStrength: CURRENT_RATIO_FULL_STRENGTH,
+        feature: "compressorCurrent",
+        family: snapshot.meteringFamily,
+        messages: MESSAGES,
+        source: SOURCE,
+      },
+      snapshot,
+    );
     return { findings: [finding], warnings: [] };
   },
 };

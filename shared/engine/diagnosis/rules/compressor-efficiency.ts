@@ -1,5 +1,9 @@
 import { apparentIsentropicEfficiency } from "../apparent-isentropic-efficiency.ts";
-import { COMPRESSOR_EFFICIENCY_BAND, COMPRESSOR_EFFICIENCY_FULL_STRENGTH, COMPRESSOR_EFFICIENCY_SOURCE } from "../diagnosis-limits.ts";
+import {
+  COMPRESSOR_EFFICIENCY_BAND,
+  COMPRESSOR_EFFICIENCY_FULL_STRENGTH,
+  COMPRESSOR_EFFICIENCY_SOURCE,
+} from "../diagnosis-limits.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
@@ -23,7 +27,8 @@ const MESSAGES: BandedReading["messages"] = {
  */
 export const compressorEfficiencyRule: DiagnosisRule = {
   id: "compressor-efficiency",
-  description: "Apparent isentropic efficiency of the compressor from the measured cycle: far below its class, gas is compressed twice (weak compressor)",
+  description:
+    "Apparent isentropic efficiency of the compressor from the measured cycle: far below its class, gas is compressed twice (weak compressor)",
   source: COMPRESSOR_EFFICIENCY_SOURCE,
   evaluate(snapshot) {
     const efficiency = apparentIsentropicEfficiency(snapshot);

@@ -15,9 +15,11 @@ const SOURCE = cite(["S26", "S34"]);
  * drop upstream of the probe (restriction) or a wrong probe can do it.
  */
 const MESSAGES: BandedReading["messages"] = {
-  low: (value, text) => `Liquid leaves the condenser only ${value} K above the outdoor air (expected ${text} K): the condenser is full of liquid`,
+  low: (value, text) =>
+    `Liquid leaves the condenser only ${value} K above the outdoor air (expected ${text} K): the condenser is full of liquid`,
   normal: (value, text) => `Liquid leaves the condenser ${value} K above the outdoor air (expected ${text} K)`,
-  high: (value, text) => `Liquid leaves the condenser ${value} K above the outdoor air (expected ${text} K): the condenser is not rejecting its heat — coil, fan or air recirculating`,
+  high: (value, text) =>
+    `Liquid leaves the condenser ${value} K above the outdoor air (expected ${text} K): the condenser is not rejecting its heat — coil, fan or air recirculating`,
 };
 
 /**
@@ -40,24 +42,28 @@ function expectedApproach(snapshot: DiagnosisSnapshot): TargetBand {
 
 export const condenserApproachRule: DiagnosisRule = {
   id: "condenser-approach",
-  description: "Liquid line minus outdoor air against the application's band: high when the condenser cannot reject heat, low when it is full of liquid",
+  description:
+    "Liquid line minus outdoor air against the application's band: high when the condenser cannot reject heat, low when it is full of liquid",
   source: SOURCE,
   evaluate(snapshot) {
     const approach = snapshot.condenserApproachK;
     if (approach === null) return NO_OUTPUT;
     const band = expectedApproach(snapshot);
-    const finding = bandedFinding({
-      ruleId: this.id,
-      reading: "condenserApproachK",
-      value: approach,
-      unit: "K",
-      band,
-      feature: "condenserApproach",
-      family: snapshot.meteringFamily,
-      pivot: band.targetK,
-      messages: MESSAGES,
-      source: SOURCE,
-    }, snapshot);
+    const finding = bandedFinding(
+      {
+        ruleId: this.id,
+        reading: "condenserApproachK",
+        value: approach,
+        unit: "K",
+        band,
+        feature: "condenserApproach",
+        family: snapshot.meteringFamily,
+        pivot: band.targetK,
+        messages: MESSAGES,
+        source: SOURCE,
+      },
+      snapshot,
+    );
     if (approach >= -SENSOR_TOLERANCE_K) return { findings: [finding], warnings: [] };
     return {
       findings: [finding],

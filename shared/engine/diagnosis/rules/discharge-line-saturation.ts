@@ -14,7 +14,15 @@ export const dischargeLineSaturationRule: DiagnosisRule = {
     if (!exclusion) return NO_OUTPUT;
     return {
       findings: [],
-      warnings: [{ code: exclusion.code, severity: "invalid-data", field: exclusion.field, message: exclusion.reason, source: SOURCE }],
+      warnings: [
+        {
+          code: exclusion.code,
+          severity: "invalid-data",
+          field: exclusion.field,
+          message: exclusion.reason,
+          source: SOURCE,
+        },
+      ],
     };
   },
 };

@@ -17,7 +17,8 @@ const LOW_SUPERHEAT_SOURCE = `discharge gas only a few kelvin above its dew poin
  */
 export const dischargeLineTemperatureRule: DiagnosisRule = {
   id: "discharge-line-temperature",
-  description: "Discharge line against its refrigerant's and application's limits: hot is a warning, barely superheated means liquid is returning",
+  description:
+    "Discharge line against its refrigerant's and application's limits: hot is a warning, barely superheated means liquid is returning",
   source: SOURCE,
   evaluate(snapshot) {
     const temperature = snapshot.dischargeLineTempC;
@@ -38,7 +39,10 @@ export const dischargeLineTemperatureRule: DiagnosisRule = {
     let strength = 0;
     if (temperature > elevatedC) strength = deviationStrength(temperature - elevatedC, Math.max(1, limitC - elevatedC));
     else if (dischargeSuperheat !== null && dischargeSuperheat < LOW_DISCHARGE_SUPERHEAT_K) {
-      strength = -deviationStrength(LOW_DISCHARGE_SUPERHEAT_K - dischargeSuperheat, LOW_DISCHARGE_SUPERHEAT_K - DANGER_DISCHARGE_SUPERHEAT_K);
+      strength = -deviationStrength(
+        LOW_DISCHARGE_SUPERHEAT_K - dischargeSuperheat,
+        LOW_DISCHARGE_SUPERHEAT_K - DANGER_DISCHARGE_SUPERHEAT_K,
+      );
       warnings.push({
         code: "low-discharge-superheat",
         severity: dischargeSuperheat < DANGER_DISCHARGE_SUPERHEAT_K ? "danger" : "caution",
@@ -48,7 +52,8 @@ export const dischargeLineTemperatureRule: DiagnosisRule = {
       });
     }
     const direction: Finding["direction"] = strength > 0 ? "high" : strength < 0 ? "low" : "normal";
-    const superheatText = dischargeSuperheat === null ? "" : `, ${formatTenths(dischargeSuperheat)} K above its dew point`;
+    const superheatText =
+      dischargeSuperheat === null ? "" : `, ${formatTenths(dischargeSuperheat)} K above its dew point`;
     const message =
       direction === "high"
         ? `Discharge line ${Math.round(temperature)} °C is hotter than the ${elevatedC} °C this circuit should run at: high suction superheat, high head or re-compressed gas`

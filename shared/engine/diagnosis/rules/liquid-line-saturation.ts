@@ -17,7 +17,15 @@ export const liquidLineSaturationRule: DiagnosisRule = {
     if (exclusion?.code === "liquid-above-saturation") {
       return {
         findings: [],
-        warnings: [{ code: exclusion.code, severity: "invalid-data", field: exclusion.field, message: exclusion.reason, source: SOURCE }],
+        warnings: [
+          {
+            code: exclusion.code,
+            severity: "invalid-data",
+            field: exclusion.field,
+            message: exclusion.reason,
+            source: SOURCE,
+          },
+        ],
       };
     }
     const subcooling = snapshot.subcoolingK;

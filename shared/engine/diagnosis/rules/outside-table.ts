@@ -13,7 +13,8 @@ const VERY_LOW_SOURCE = `${cite(["S21", "S22"])}; a compressor pulling the sucti
  */
 export const outsideTableRule: DiagnosisRule = {
   id: "outside-table",
-  description: "A pressure outside the refrigerant's saturation table gives no saturation temperature; suction below it is a danger in itself",
+  description:
+    "A pressure outside the refrigerant's saturation table gives no saturation temperature; suction below it is a danger in itself",
   source: SOURCE,
   evaluate(snapshot) {
     if (snapshot.outsideTable.length === 0) return NO_OUTPUT;
@@ -25,7 +26,10 @@ export const outsideTableRule: DiagnosisRule = {
       source: SOURCE,
     }));
     const findings: Finding[] = [];
-    const suctionBelow = snapshot.outsideTable.some((exclusion) => exclusion.field === "suctionPressureKPa") && snapshot.evaporatingTempC === null && snapshot.suctionPressureKPaAbs < snapshot.liquidPressureKPaAbs / 2;
+    const suctionBelow =
+      snapshot.outsideTable.some((exclusion) => exclusion.field === "suctionPressureKPa") &&
+      snapshot.evaporatingTempC === null &&
+      snapshot.suctionPressureKPaAbs < snapshot.liquidPressureKPaAbs / 2;
     if (suctionBelow) {
       warnings.push({
         code: "suction-pressure-very-low",

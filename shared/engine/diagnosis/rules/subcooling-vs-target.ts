@@ -8,7 +8,8 @@ const SOURCE = cite(["S9", "S11", "S14", "S21", "S24"]);
 const MESSAGES: BandedReading["messages"] = {
   low: (value, band) => `Subcooling ${value} K is below ${band} K: little liquid is held in the condenser`,
   normal: (value, band) => `Subcooling ${value} K sits in ${band} K`,
-  high: (value, band) => `Subcooling ${value} K is above ${band} K: liquid is backing up in the condenser (too much refrigerant, a restriction downstream) — or air in the circuit makes the gauge read high`,
+  high: (value, band) =>
+    `Subcooling ${value} K is above ${band} K: liquid is backing up in the condenser (too much refrigerant, a restriction downstream) — or air in the circuit makes the gauge read high`,
 };
 
 /** Subcooling (bubble point at liquid pressure) against its target band; the charge signal of TXV/EEV circuits. */
@@ -38,18 +39,21 @@ export const subcoolingVsTargetRule: DiagnosisRule = {
     }
     const subcooling = snapshot.subcoolingK;
     if (subcooling === null || band === null) return NO_OUTPUT;
-    const finding = bandedFinding({
-      ruleId: this.id,
-      reading: "subcoolingK",
-      value: subcooling,
-      unit: "K",
-      band,
-      feature: "subcooling",
-      family: snapshot.meteringFamily,
-      pivot: snapshot.subcoolingPivotK ?? band.targetK,
-      messages: MESSAGES,
-      source: SOURCE,
-    }, snapshot);
+    const finding = bandedFinding(
+      {
+        ruleId: this.id,
+        reading: "subcoolingK",
+        value: subcooling,
+        unit: "K",
+        band,
+        feature: "subcooling",
+        family: snapshot.meteringFamily,
+        pivot: snapshot.subcoolingPivotK ?? band.targetK,
+        messages: MESSAGES,
+        source: SOURCE,
+      },
+      snapshot,
+    );
     return { findings: [finding], warnings: [] };
   },
 };

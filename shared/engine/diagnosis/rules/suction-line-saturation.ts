@@ -14,14 +14,23 @@ const GLIDE_SOURCE = `between bubble and dew point a blend is still boiling (${c
  */
 export const suctionLineSaturationRule: DiagnosisRule = {
   id: "suction-line-saturation",
-  description: "Suction line below saturation is impossible; inside the glide or with superheat near zero, liquid is leaving the coil",
+  description:
+    "Suction line below saturation is impossible; inside the glide or with superheat near zero, liquid is leaving the coil",
   source: SOURCE,
   evaluate(snapshot) {
     const exclusion = snapshot.superheatExcluded;
     if (exclusion) {
       return {
         findings: [],
-        warnings: [{ code: exclusion.code, severity: "invalid-data", field: exclusion.field, message: exclusion.reason, source: SOURCE }],
+        warnings: [
+          {
+            code: exclusion.code,
+            severity: "invalid-data",
+            field: exclusion.field,
+            message: exclusion.reason,
+            source: SOURCE,
+          },
+        ],
       };
     }
     const superheat = snapshot.superheatK;

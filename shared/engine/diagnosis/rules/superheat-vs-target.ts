@@ -9,15 +9,20 @@ const SOURCE = cite(["S10", "S17", "S21", "S22", "S23"]);
 const TARGET_UNAVAILABLE_SOURCE = cite(["S10", "S17", "S18", "S19"]);
 
 const FIXED_MESSAGES: BandedReading["messages"] = {
-  low: (value, band) => `Superheat ${value} K is below its target ${band} K: the coil is flooding — too much refrigerant, too little air, or an oversized orifice`,
+  low: (value, band) =>
+    `Superheat ${value} K is below its target ${band} K: the coil is flooding — too much refrigerant, too little air, or an oversized orifice`,
   normal: (value, band) => `Superheat ${value} K sits in its target ${band} K`,
-  high: (value, band) => `Superheat ${value} K is above its target ${band} K: the evaporator is starved — short of charge or restricted`,
+  high: (value, band) =>
+    `Superheat ${value} K is above its target ${band} K: the evaporator is starved — short of charge or restricted`,
 };
 
 const VALVE_MESSAGES: BandedReading["messages"] = {
-  low: (value, band) => `Superheat ${value} K is below ${band} K: the valve is overfeeding (bulb contact or position, stuck open) or the coil has little load`,
-  normal: (value, band) => `Superheat ${value} K sits in ${band} K: the valve is controlling; subcooling carries the charge signal`,
-  high: (value, band) => `Superheat ${value} K is above ${band} K: the valve is wide open and still starving the coil — short of charge or restricted`,
+  low: (value, band) =>
+    `Superheat ${value} K is below ${band} K: the valve is overfeeding (bulb contact or position, stuck open) or the coil has little load`,
+  normal: (value, band) =>
+    `Superheat ${value} K sits in ${band} K: the valve is controlling; subcooling carries the charge signal`,
+  high: (value, band) =>
+    `Superheat ${value} K is above ${band} K: the valve is wide open and still starving the coil — short of charge or restricted`,
 };
 
 /** Superheat against its target band; the charge signal of fixed metering devices. */
@@ -55,17 +60,20 @@ export const superheatVsTargetRule: DiagnosisRule = {
       };
     }
     const fixed = snapshot.meteringFamily === "fixed";
-    const finding = bandedFinding({
-      ruleId: this.id,
-      reading: "superheatK",
-      value: superheat,
-      unit: "K",
-      band,
-      feature: "superheat",
-      family: snapshot.meteringFamily,
-      messages: fixed ? FIXED_MESSAGES : VALVE_MESSAGES,
-      source: SOURCE,
-    }, snapshot);
+    const finding = bandedFinding(
+      {
+        ruleId: this.id,
+        reading: "superheatK",
+        value: superheat,
+        unit: "K",
+        band,
+        feature: "superheat",
+        family: snapshot.meteringFamily,
+        messages: fixed ? FIXED_MESSAGES : VALVE_MESSAGES,
+        source: SOURCE,
+      },
+      snapshot,
+    );
     return { findings: [finding], warnings: [] };
   },
 };

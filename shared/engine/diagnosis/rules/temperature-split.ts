@@ -10,14 +10,17 @@ const fluidOf = (snapshot: DiagnosisSnapshot) => snapshot.application === "proce
 const what = (snapshot: DiagnosisSnapshot) => (fluidOf(snapshot) ? "Fluid range" : "Air split");
 
 const MESSAGES: BandedReading["messages"] = {
-  low: (value, text, snapshot) => `${what(snapshot)} ${value} K is below its target ${text} K: the coil is doing little cooling${fluidOf(snapshot) ? "" : " (humid air also lowers the split)"}`,
+  low: (value, text, snapshot) =>
+    `${what(snapshot)} ${value} K is below its target ${text} K: the coil is doing little cooling${fluidOf(snapshot) ? "" : " (humid air also lowers the split)"}`,
   normal: (value, text, snapshot) => `${what(snapshot)} ${value} K sits in its target ${text} K`,
-  high: (value, text, snapshot) => `${what(snapshot)} ${value} K is above its target ${text} K: too little ${fluidOf(snapshot) ? "flow" : "air"} over the evaporator — ${fluidOf(snapshot) ? "pump, strainer or valves" : "filter, coil or fan"}`,
+  high: (value, text, snapshot) =>
+    `${what(snapshot)} ${value} K is above its target ${text} K: too little ${fluidOf(snapshot) ? "flow" : "air"} over the evaporator — ${fluidOf(snapshot) ? "pump, strainer or valves" : "filter, coil or fan"}`,
 };
 
 export const temperatureSplitRule: DiagnosisRule = {
   id: "temperature-split",
-  description: "Return minus supply across the evaporator against its target: from the return dry and wet bulb for comfort cooling, else the application's band",
+  description:
+    "Return minus supply across the evaporator against its target: from the return dry and wet bulb for comfort cooling, else the application's band",
   source: SOURCE,
   evaluate(snapshot) {
     const split = snapshot.temperatureSplitK;
@@ -26,17 +29,20 @@ export const temperatureSplitRule: DiagnosisRule = {
     if (split === null || split < 0 || band === null) return NO_OUTPUT;
     return {
       findings: [
-        bandedFinding({
-          ruleId: this.id,
-          reading: "temperatureSplitK",
-          value: split,
-          unit: "K",
-          band,
-          feature: "temperatureSplit",
-          family: snapshot.meteringFamily,
-          messages: MESSAGES,
-          source: SOURCE,
-        }, snapshot),
+        bandedFinding(
+          {
+            ruleId: this.id,
+            reading: "temperatureSplitK",
+            value: split,
+            unit: "K",
+            band,
+            feature: "temperatureSplit",
+            family: snapshot.meteringFamily,
+            messages: MESSAGES,
+            source: SOURCE,
+          },
+          snapshot,
+        ),
       ],
       warnings: [],
     };

@@ -12,7 +12,8 @@ export function CautionLine({ topic, point = 0 }: { topic: CautionTopic; point?:
     <p className="flex items-start gap-2 text-sm" data-testid={`caution-line-${topic}`}>
       <TriangleAlert aria-hidden className="mt-0.5 size-4 shrink-0 text-caution" />
       <span>
-        <span className="font-semibold text-caution">{caution.title}:</span> {caution.points[point] ?? caution.points[0]}{" "}
+        <span className="font-semibold text-caution">{caution.title}:</span>{" "}
+        {caution.points[point] ?? caution.points[0]}{" "}
         <Link to={`/safety#${topic}`} className="underline">
           More
         </Link>

@@ -32,7 +32,13 @@ export function PageControls({ noun, pages, query, shown }: PageControlsProps) {
   if (pages.pageNumber === 1 && nextCursor === null) return null;
   return (
     <nav aria-label={`Pages of ${noun}`} className="flex flex-wrap items-center justify-between gap-3">
-      <Button variant="secondary" size="lg" onClick={pages.previous} disabled={pages.pageNumber === 1 || loading} aria-label={`Previous page of ${noun}`}>
+      <Button
+        variant="secondary"
+        size="lg"
+        onClick={pages.previous}
+        disabled={pages.pageNumber === 1 || loading}
+        aria-label={`Previous page of ${noun}`}
+      >
         <ChevronLeft aria-hidden className="size-5" /> Previous
       </Button>
       <p className="text-sm text-muted" aria-live="polite">

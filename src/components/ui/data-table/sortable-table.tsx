@@ -39,7 +39,15 @@ export interface SortWords {
   desc: string;
 }
 
-function SortableHeader<TData extends RowData>({ column, label, words }: { column: Column<SortableFeatures, TData>; label: string; words: SortWords }) {
+function SortableHeader<TData extends RowData>({
+  column,
+  label,
+  words,
+}: {
+  column: Column<SortableFeatures, TData>;
+  label: string;
+  words: SortWords;
+}) {
   const direction = column.getIsSorted();
   return (
     <button
@@ -72,12 +80,31 @@ export function SortableTable<TData extends RowData>({ table, caption, words }: 
               {group.headers.map((header) => {
                 const sorted = header.column.getIsSorted();
                 return (
-                  <th key={header.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : header.column.getCanSort() ? "none" : undefined} className="px-3 py-1">
+                  <th
+                    key={header.id}
+                    scope="col"
+                    aria-sort={
+                      sorted === "asc"
+                        ? "ascending"
+                        : sorted === "desc"
+                          ? "descending"
+                          : header.column.getCanSort()
+                            ? "none"
+                            : undefined
+                    }
+                    className="px-3 py-1"
+                  >
                     {header.column.getCanSort() ? (
-                      <SortableHeader column={header.column} label={String(header.column.columnDef.header)} words={words} />
+                      <SortableHeader
+                        column={header.column}
+                        label={String(header.column.columnDef.header)}
+                        words={words}
+                      />
                     ) : (
                       // Not sortable (a list paged by the server sorts by what it can read in order).
-                      <span className="inline-flex min-h-touch items-center whitespace-nowrap font-semibold">{String(header.column.columnDef.header)}</span>
+                      <span className="inline-flex min-h-touch items-center whitespace-nowrap font-semibold">
+                        {String(header.column.columnDef.header)}
+                      </span>
                     )}
                   </th>
                 );

@@ -114,7 +114,10 @@ export function FormAlert({ tone = "fault", children }: { tone?: "fault" | "good
   return (
     <div
       role={tone === "fault" ? "alert" : "status"}
-      className={cn("rounded-card border-2 bg-surface p-3 font-medium", tone === "fault" ? "border-fault text-fault" : "border-good text-good")}
+      className={cn(
+        "rounded-card border-2 bg-surface p-3 font-medium",
+        tone === "fault" ? "border-fault text-fault" : "border-good text-good",
+      )}
     >
       {tone === "fault" ? "⚠ " : "✓ "}
       {children}

@@ -33,7 +33,8 @@ export const NumberField = forwardRef<HTMLInputElement, NumberFieldProps>(functi
 ) {
   const generated = useId();
   const fieldId = id ?? generated;
-  const describedBy = [hint ? `${fieldId}-hint` : "", error ? `${fieldId}-error` : ""].filter(Boolean).join(" ") || undefined;
+  const describedBy =
+    [hint ? `${fieldId}-hint` : "", error ? `${fieldId}-error` : ""].filter(Boolean).join(" ") || undefined;
   return (
     <div className={wrapperClassName ?? "space-y-1"}>
       <label htmlFor={fieldId} className="block font-medium">

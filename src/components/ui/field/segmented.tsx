@@ -11,7 +11,11 @@ interface SegmentedProps<T extends string> {
 /** A row of large radio buttons for a short, exclusive choice (units, bubble/dew). */
 export function Segmented<T extends string>({ label, value, options, onChange, className }: SegmentedProps<T>) {
   return (
-    <div role="radiogroup" aria-label={label} className={cn("inline-flex rounded-card border-2 border-rule bg-surface p-0.5", className)}>
+    <div
+      role="radiogroup"
+      aria-label={label}
+      className={cn("inline-flex rounded-card border-2 border-rule bg-surface p-0.5", className)}
+    >
       {options.map((option) => {
         const checked = option.value === value;
         return (

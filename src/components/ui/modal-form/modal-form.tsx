@@ -22,7 +22,17 @@ interface ModalFormProps {
  * The frame of every confirm-with-details dialog: a native modal (keyboard kept inside, Escape
  * closes it) holding a titled form, its error and Cancel beside the action.
  */
-export function ModalForm({ dialogRef, title, explanation, error, pending, submit, submitVariant = "primary", onSubmit, children }: ModalFormProps) {
+export function ModalForm({
+  dialogRef,
+  title,
+  explanation,
+  error,
+  pending,
+  submit,
+  submitVariant = "primary",
+  onSubmit,
+  children,
+}: ModalFormProps) {
   const id = useId();
   return (
     <dialog

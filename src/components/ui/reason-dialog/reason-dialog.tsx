@@ -5,7 +5,13 @@ import { ModalForm } from "@/components/ui/modal-form/modal-form.tsx";
 
 interface ReasonDialogProps {
   /** The button that opens the dialog. */
-  trigger: { label: ReactNode; icon: LucideIcon; variant: "secondary" | "quiet"; ariaLabel?: string; disabled?: boolean };
+  trigger: {
+    label: ReactNode;
+    icon: LucideIcon;
+    variant: "secondary" | "quiet";
+    ariaLabel?: string;
+    disabled?: boolean;
+  };
   title: ReactNode;
   /** What happens to the record, in a sentence or two. */
   explanation: ReactNode;
@@ -24,7 +30,15 @@ interface ReasonDialogProps {
  * modal dialog that asks why, keeps the keyboard inside and closes on Escape. The record stays,
  * with the reason, wherever it is kept.
  */
-export function ReasonDialog({ trigger, title, explanation, maxLength, confirmLabel, pendingLabel, onConfirm }: ReasonDialogProps) {
+export function ReasonDialog({
+  trigger,
+  title,
+  explanation,
+  maxLength,
+  confirmLabel,
+  pendingLabel,
+  onConfirm,
+}: ReasonDialogProps) {
   const dialog = useRef<HTMLDialogElement>(null);
   const [reason, setReason] = useState("");
   const [error, setError] = useState<string | null>(null);

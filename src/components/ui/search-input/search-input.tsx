@@ -15,7 +15,12 @@ interface SearchInputProps {
 /** The one search field: a 56 px box with its icon, typed text kept as typed, no autocomplete. */
 export function SearchInput({ id, value, onChange, placeholder, large = false, className }: SearchInputProps) {
   return (
-    <div className={cn("mt-1 flex min-h-14 items-center gap-2 rounded-card border-2 border-rule bg-surface px-3 focus-within:border-ink", className)}>
+    <div
+      className={cn(
+        "mt-1 flex min-h-14 items-center gap-2 rounded-card border-2 border-rule bg-surface px-3 focus-within:border-ink",
+        className,
+      )}
+    >
       <Search aria-hidden className="size-5 text-muted" />
       <input
         id={id}

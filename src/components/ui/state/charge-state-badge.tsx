@@ -30,14 +30,32 @@ export const CHARGE_STATE_ICONS: Record<ChargeState, LucideIcon> = {
 };
 
 export function chargeStateTone(state: ChargeState): string {
-  return state === "normal" ? "text-good border-good" : state === "insufficient-data" ? "text-muted border-rule" : "text-fault border-fault";
+  return state === "normal"
+    ? "text-good border-good"
+    : state === "insufficient-data"
+      ? "text-muted border-rule"
+      : "text-fault border-fault";
 }
 
-export function ChargeStateBadge({ state, short = false, className }: { state: ChargeState; short?: boolean; className?: string }) {
+export function ChargeStateBadge({
+  state,
+  short = false,
+  className,
+}: {
+  state: ChargeState;
+  short?: boolean;
+  className?: string;
+}) {
   const Icon = CHARGE_STATE_ICONS[state];
   const text = chargeStateText[state];
   return (
-    <span className={cn("inline-flex items-center gap-1.5 rounded-md border-2 px-2 py-0.5 font-semibold", chargeStateTone(state), className)}>
+    <span
+      className={cn(
+        "inline-flex items-center gap-1.5 rounded-md border-2 px-2 py-0.5 font-semibold",
+        chargeStateTone(state),
+        className,
+      )}
+    >
       <Icon aria-hidden className="size-4 shrink-0" />
       <span>{short ? text.short : text.title}</span>
     </span>

@@ -20,7 +20,13 @@ const TONES: Record<VisitStatus, string> = {
 export function VisitStatusBadge({ status, className }: { status: VisitStatus; className?: string }) {
   const Icon = ICONS[status];
   return (
-    <span className={cn("inline-flex items-center gap-1.5 rounded-md border-2 px-2 py-0.5 text-sm font-semibold", TONES[status], className)}>
+    <span
+      className={cn(
+        "inline-flex items-center gap-1.5 rounded-md border-2 px-2 py-0.5 text-sm font-semibold",
+        TONES[status],
+        className,
+      )}
+    >
       <Icon aria-hidden className="size-4" />
       {VISIT_STATUS_LABELS[status]}
     </span>

@@ -11,9 +11,7 @@ export function VoidNote({ voided }: { voided: NonNullable<VoidInfo> }) {
       <Ban aria-hidden className="mt-0.5 size-4 shrink-0" />
       <span>
         <span className="uppercase tracking-wide">Void</span>: {voided.reason} — {voided.by?.name ?? "a former member"},{" "}
-        <span className="num">
-          {formatDateTime(voided.at)}
-        </span>
+        <span className="num">{formatDateTime(voided.at)}</span>
       </span>
     </p>
   );

@@ -32,10 +32,18 @@ export function AcceptInvitationForm({ token, preview }: { token: string; previe
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       <p>
-        You are joining <strong>{preview.organisationName}</strong> as <strong>{ROLE_LABELS[preview.role].toLowerCase()}</strong>.
+        You are joining <strong>{preview.organisationName}</strong> as{" "}
+        <strong>{ROLE_LABELS[preview.role].toLowerCase()}</strong>.
       </p>
       {formError && <FormAlert>{formError}</FormAlert>}
-      <TextField label="E-mail" type="email" value={preview.email} readOnly autoComplete="username" hint="The address the invitation was sent to." />
+      <TextField
+        label="E-mail"
+        type="email"
+        value={preview.email}
+        readOnly
+        autoComplete="username"
+        hint="The address the invitation was sent to."
+      />
       <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
       <PasswordField
         label="Choose a password"

@@ -41,7 +41,10 @@ export function ForgotPasswordForm() {
       <Button type="submit" size="lg" className="w-full" disabled={form.formState.isSubmitting}>
         {form.formState.isSubmitting ? "Sending…" : "Send the reset link"}
       </Button>
-      <Link to={paths.signIn.getHref()} className="inline-flex min-h-touch items-center text-sm font-medium text-accent underline underline-offset-4">
+      <Link
+        to={paths.signIn.getHref()}
+        className="inline-flex min-h-touch items-center text-sm font-medium text-accent underline underline-offset-4"
+      >
         Back to sign-in
       </Link>
     </form>

@@ -30,8 +30,13 @@ export function ResetPasswordForm({ token }: { token: string }) {
   if (done) {
     return (
       <div className="space-y-4">
-        <FormAlert tone="good">Your password is changed. Every device that was signed in has been signed out.</FormAlert>
-        <Link to={paths.signIn.getHref()} className="inline-flex min-h-touch w-full items-center justify-center rounded-card bg-accent px-4 font-medium text-accent-ink">
+        <FormAlert tone="good">
+          Your password is changed. Every device that was signed in has been signed out.
+        </FormAlert>
+        <Link
+          to={paths.signIn.getHref()}
+          className="inline-flex min-h-touch w-full items-center justify-center rounded-card bg-accent px-4 font-medium text-accent-ink"
+        >
           Sign in
         </Link>
       </div>

@@ -33,16 +33,34 @@ export function SignInForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       {formError && <FormAlert>{formError}</FormAlert>}
-      <TextField label="E-mail" type="email" autoComplete="username" inputMode="email" error={errors.email?.message} {...form.register("email")} />
-      <PasswordField label="Password" autoComplete="current-password" error={errors.password?.message} {...form.register("password")} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="username"
+        inputMode="email"
+        error={errors.email?.message}
+        {...form.register("email")}
+      />
+      <PasswordField
+        label="Password"
+        autoComplete="current-password"
+        error={errors.password?.message}
+        {...form.register("password")}
+      />
       <Button type="submit" size="lg" className="w-full" disabled={form.formState.isSubmitting}>
         {form.formState.isSubmitting ? "Signing in…" : "Sign in"}
       </Button>
       <p className="flex flex-wrap justify-between gap-2 text-sm">
-        <Link to={paths.forgotPassword.getHref()} className="inline-flex min-h-touch items-center font-medium text-accent underline underline-offset-4">
+        <Link
+          to={paths.forgotPassword.getHref()}
+          className="inline-flex min-h-touch items-center font-medium text-accent underline underline-offset-4"
+        >
           Forgot your password?
         </Link>
-        <Link to={paths.signUp.getHref()} className="inline-flex min-h-touch items-center font-medium text-accent underline underline-offset-4">
+        <Link
+          to={paths.signUp.getHref()}
+          className="inline-flex min-h-touch items-center font-medium text-accent underline underline-offset-4"
+        >
           New company? Create an account
         </Link>
       </p>

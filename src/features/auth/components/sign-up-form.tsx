@@ -32,9 +32,21 @@ export function SignUpForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       {formError && <FormAlert>{formError}</FormAlert>}
-      <TextField label="Company name" autoComplete="organization" error={errors.organisationName?.message} {...form.register("organisationName")} />
+      <TextField
+        label="Company name"
+        autoComplete="organization"
+        error={errors.organisationName?.message}
+        {...form.register("organisationName")}
+      />
       <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
-      <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" error={errors.email?.message} {...form.register("email")} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        inputMode="email"
+        error={errors.email?.message}
+        {...form.register("email")}
+      />
       <PasswordField
         label="Password"
         autoComplete="new-password"
@@ -47,7 +59,10 @@ export function SignUpForm() {
       </Button>
       <p className="text-sm">
         Already have an account?{" "}
-        <Link to={paths.signIn.getHref()} className="inline-flex min-h-touch items-center font-medium text-accent underline underline-offset-4">
+        <Link
+          to={paths.signIn.getHref()}
+          className="inline-flex min-h-touch items-center font-medium text-accent underline underline-offset-4"
+        >
           Sign in
         </Link>
       </p>

@@ -20,7 +20,13 @@ export function UserMenu({ compact = false, className }: { compact?: boolean; cl
     // Unsaved values are kept on this device per form; signing out would hand them to the next
     // person on a shared tablet, so it asks first and then clears them.
     const drafts = countDrafts();
-    if (drafts > 0 && !window.confirm(`${drafts === 1 ? "One form holds" : `${drafts} forms hold`} values that are not saved yet. Sign out and discard them?`)) return;
+    if (
+      drafts > 0 &&
+      !window.confirm(
+        `${drafts === 1 ? "One form holds" : `${drafts} forms hold`} values that are not saved yet. Sign out and discard them?`,
+      )
+    )
+      return;
     // Entries in the outbox are kept for this person (never sent or shown for anyone else), but
     // they reach the server only once this person signs in again on this device: say so.
     const unsent = outboxEntries.length;

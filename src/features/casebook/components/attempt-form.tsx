@@ -38,8 +38,16 @@ const NUMBER_FIELDS: {
 
 /** Measured-cycle questions (issue 18), shown only for cases that ask them; read off the pressure–enthalpy diagram. */
 const CYCLE_FIELDS: Record<CycleAnswerField, { label: string; hint: string; quantity: "energy" | "difference" }> = {
-  refrigeratingEffectKJPerKg: { label: "Refrigerating effect (h₁ − h₄)", hint: "From the diagram: suction enthalpy minus the liquid's", quantity: "energy" },
-  dischargeSuperheatK: { label: "Discharge superheat", hint: "Discharge line minus the dew point at the discharge pressure", quantity: "difference" },
+  refrigeratingEffectKJPerKg: {
+    label: "Refrigerating effect (h₁ − h₄)",
+    hint: "From the diagram: suction enthalpy minus the liquid's",
+    quantity: "energy",
+  },
+  dischargeSuperheatK: {
+    label: "Discharge superheat",
+    hint: "Discharge line minus the dew point at the discharge pressure",
+    quantity: "difference",
+  },
 };
 
 /** The charge-to-add question (issue 14), shown only for cases that ask it. */
@@ -143,13 +151,18 @@ export function AttemptForm({
     }
     for (const field of cycleQuestions) {
       const { label, quantity } = CYCLE_FIELDS[field];
-      const parsed = quantity === "energy" ? parseDecimal(draft[field]) : parseQuantity(draft[field], quantity, units, atmosphericKPa);
+      const parsed =
+        quantity === "energy"
+          ? parseDecimal(draft[field])
+          : parseQuantity(draft[field], quantity, units, atmosphericKPa);
       if (parsed === "invalid") found[field] = `${label} must be a number, e.g. 165`;
       numbers[field] = parsed === "invalid" || parsed === undefined ? null : parsed;
     }
     if (chargeQuestion) {
       const parsed = parseDecimal(draft[CHARGE_ANSWER_FIELD]);
-      if (parsed === "invalid") found[CHARGE_ANSWER_FIELD] = `${CHARGE_FIELD.label} must be a number of kilograms, e.g. 0.6, or -0.4 to recover`;
+      if (parsed === "invalid")
+        found[CHARGE_ANSWER_FIELD] =
+          `${CHARGE_FIELD.label} must be a number of kilograms, e.g. 0.6, or -0.4 to recover`;
       numbers[CHARGE_ANSWER_FIELD] = parsed === "invalid" || parsed === undefined ? null : parsed;
     }
     if (!draft.evaporatingTempC.trim()) found.evaporatingTempC ??= "Work out the evaporating temperature";
@@ -184,8 +197,8 @@ export function AttemptForm({
         {chargeQuestion && (
           <>
             {" "}
-            The charge to add is right when it lies within the range of the engine's estimate; the range is shown
-            after you answer.
+            The charge to add is right when it lies within the range of the engine's estimate; the range is shown after
+            you answer.
           </>
         )}
       </p>

@@ -83,7 +83,9 @@ export function AttemptResult({
                     {!mark.correct && mark.differenceK !== null && (
                       <> · off by {withUnit(Math.abs(mark.differenceK), "difference", units, 0)}</>
                     )}
-                    {!mark.correct && mark.differenceKJPerKg != null && <> · off by {formatNumber(Math.abs(mark.differenceKJPerKg), 1)} kJ/kg</>}
+                    {!mark.correct && mark.differenceKJPerKg != null && (
+                      <> · off by {formatNumber(Math.abs(mark.differenceKJPerKg), 1)} kJ/kg</>
+                    )}
                     {mark.rangeKg && (
                       <>
                         {" "}

@@ -8,8 +8,7 @@ import { paths } from "@/config/paths.ts";
 import { useCreateCaseFromReading } from "@/lib/api/casebook.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
 
-const label = (reading: Reading) =>
-  `Circuit ${reading.circuit}, ${formatDateTime(reading.takenAt)}`;
+const label = (reading: Reading) => `Circuit ${reading.circuit}, ${formatDateTime(reading.takenAt)}`;
 
 /**
  * Turns a real reading into a draft casebook case for apprentices: the server copies the
@@ -26,7 +25,9 @@ export function CaseFromReading({ readings }: { readings: Reading[] }) {
       <h2 id="case-from-reading-heading" className="flex items-center gap-2 text-lg font-semibold">
         <GraduationCap aria-hidden className="size-5" /> Teach from this visit
       </h2>
-      <p className="text-sm text-muted">Make a draft casebook case from one reading. Customer and site details are left out.</p>
+      <p className="text-sm text-muted">
+        Make a draft casebook case from one reading. Customer and site details are left out.
+      </p>
       {error && (
         <div className="mt-2">
           <FormAlert>{error}</FormAlert>
@@ -37,7 +38,12 @@ export function CaseFromReading({ readings }: { readings: Reading[] }) {
           <label htmlFor="case-reading" className="block text-sm font-medium">
             Reading
           </label>
-          <select id="case-reading" value={readingId} onChange={(event) => setReadingId(event.target.value)} className="min-h-touch rounded-card border-2 border-rule bg-surface px-3">
+          <select
+            id="case-reading"
+            value={readingId}
+            onChange={(event) => setReadingId(event.target.value)}
+            className="min-h-touch rounded-card border-2 border-rule bg-surface px-3"
+          >
             {readings.map((reading) => (
               <option key={reading.id} value={reading.id}>
                 {label(reading)}

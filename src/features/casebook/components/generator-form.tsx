@@ -49,7 +49,11 @@ export function GeneratorForm() {
         gauges. The fault is named only here — work it out as if you did not know.
       </p>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-        <SelectField label="Application" value={application} onChange={(event) => chooseApplication(event.target.value as Application)}>
+        <SelectField
+          label="Application"
+          value={application}
+          onChange={(event) => chooseApplication(event.target.value as Application)}
+        >
           {APPLICATIONS.map((value) => (
             <option key={value} value={value}>
               {applicationText[value].label}

@@ -12,9 +12,7 @@ export function TeamProgressList({ team }: { team: TeamProgress }) {
         <li key={user.id} className="space-y-1">
           <p className="text-sm text-muted">
             {ROLE_LABELS[user.role]}
-            {lastAttemptAt
-              ? ` · last attempt ${formatDateTime(lastAttemptAt)}`
-              : " · no attempts yet"}
+            {lastAttemptAt ? ` · last attempt ${formatDateTime(lastAttemptAt)}` : " · no attempts yet"}
           </p>
           <ProgressPanel progress={progress} title={user.name} />
         </li>

@@ -1,6 +1,10 @@
 import { Crosshair, History } from "lucide-react";
 import { Link } from "react-router-dom";
-import { CHARGE_REFERENCE_SOURCE_LABELS, type CircuitChargeReferences, type StoredChargeReference } from "@shared/schemas/charge-references.ts";
+import {
+  CHARGE_REFERENCE_SOURCE_LABELS,
+  type CircuitChargeReferences,
+  type StoredChargeReference,
+} from "@shared/schemas/charge-references.ts";
 import type { VisitSummary } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
@@ -32,7 +36,10 @@ function Provenance({ reference }: { reference: StoredChargeReference }) {
         <>
           {" "}
           · from{" "}
-          <Link to={paths.visits.detail.getHref(reference.visitId)} className="text-accent underline underline-offset-4">
+          <Link
+            to={paths.visits.detail.getHref(reference.visitId)}
+            className="text-accent underline underline-offset-4"
+          >
             the visit of {reference.visitStartedAt ? formatDateTime(reference.visitStartedAt) : "that day"}
           </Link>
         </>
@@ -43,11 +50,18 @@ function Provenance({ reference }: { reference: StoredChargeReference }) {
   );
 }
 
-function CircuitReference({ circuit, showNumber, ...props }: ChargeReferencePointsProps & { circuit: CircuitChargeReferences; showNumber: boolean }) {
+function CircuitReference({
+  circuit,
+  showNumber,
+  ...props
+}: ChargeReferencePointsProps & { circuit: CircuitChargeReferences; showNumber: boolean }) {
   const { current } = circuit;
   const earlier = circuit.history.filter((reference) => reference.id !== current?.id);
   return (
-    <article aria-label={`Circuit ${circuit.circuit} reference point`} className="space-y-3 rounded-card border-2 border-rule bg-surface p-4">
+    <article
+      aria-label={`Circuit ${circuit.circuit} reference point`}
+      className="space-y-3 rounded-card border-2 border-rule bg-surface p-4"
+    >
       <header className="space-y-0.5">
         {showNumber && <h3 className="text-lg font-semibold">Circuit {circuit.circuit}</h3>}
         <p className="text-sm text-muted">
@@ -55,7 +69,8 @@ function CircuitReference({ circuit, showNumber, ...props }: ChargeReferencePoin
           {circuit.lineAdjustmentKg !== 0 && (
             <>
               {" "}
-              (nameplate plus <span className="num">{formatNumber(circuit.lineAdjustmentKg, 2)} kg</span> for the line set)
+              (nameplate plus <span className="num">{formatNumber(circuit.lineAdjustmentKg, 2)} kg</span> for the line
+              set)
             </>
           )}
         </p>
@@ -63,7 +78,8 @@ function CircuitReference({ circuit, showNumber, ...props }: ChargeReferencePoin
       {current ? (
         <>
           <p className="flex items-center gap-2 font-medium">
-            <Crosshair aria-hidden className="size-5" /> Reference point set: estimates use this circuit&rsquo;s own history and a narrow range
+            <Crosshair aria-hidden className="size-5" /> Reference point set: estimates use this circuit&rsquo;s own
+            history and a narrow range
           </p>
           <ChargeReferenceValues values={current.values} units={props.units} />
           <Provenance reference={current} />
@@ -73,7 +89,12 @@ function CircuitReference({ circuit, showNumber, ...props }: ChargeReferencePoin
       )}
       {props.canManage && (
         <div className="flex flex-wrap gap-2">
-          <SetChargeReference equipmentId={props.equipmentId} circuit={circuit.circuit} visits={props.visits} units={props.units} />
+          <SetChargeReference
+            equipmentId={props.equipmentId}
+            circuit={circuit.circuit}
+            visits={props.visits}
+            units={props.units}
+          />
           {current && <ClearChargeReference equipmentId={props.equipmentId} circuit={circuit.circuit} />}
         </div>
       )}

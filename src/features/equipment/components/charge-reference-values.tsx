@@ -11,9 +11,12 @@ import {
 
 /** A reference point's six values: differences in K, temperatures in °C (or the user's display units). */
 export function ChargeReferenceValues({ values, units }: { values: ChargeReference; units: DisplayUnits }) {
-  const difference = (kelvin: number) => `${formatNumber(differenceToDisplay(kelvin, units.temperature), TEMPERATURE_DECIMALS)} ${DIFFERENCE_LABEL[units.temperature]}`;
+  const difference = (kelvin: number) =>
+    `${formatNumber(differenceToDisplay(kelvin, units.temperature), TEMPERATURE_DECIMALS)} ${DIFFERENCE_LABEL[units.temperature]}`;
   const temperature = (celsius: number | null) =>
-    celsius === null ? null : `${formatNumber(temperatureToDisplay(celsius, units.temperature), TEMPERATURE_DECIMALS)} ${TEMPERATURE_LABEL[units.temperature]}`;
+    celsius === null
+      ? null
+      : `${formatNumber(temperatureToDisplay(celsius, units.temperature), TEMPERATURE_DECIMALS)} ${TEMPERATURE_LABEL[units.temperature]}`;
   const rows: [string, string | null][] = [
     ["Subcooling", difference(values.subcoolingK)],
     ["Superheat", difference(values.superheatK)],
@@ -27,7 +30,9 @@ export function ChargeReferenceValues({ values, units }: { values: ChargeReferen
       {rows.map(([label, value]) => (
         <div key={label}>
           <dt className="text-sm text-muted">{label}</dt>
-          <dd className="num text-lg font-semibold">{value ?? <span className="text-base font-normal text-muted">not measured</span>}</dd>
+          <dd className="num text-lg font-semibold">
+            {value ?? <span className="text-base font-normal text-muted">not measured</span>}
+          </dd>
         </div>
       ))}
     </dl>

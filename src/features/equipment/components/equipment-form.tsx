@@ -64,7 +64,13 @@ const TOP_FIELDS = [
   "ratedHighSideKPa",
   "ratedLowSideKPa",
 ] as const satisfies readonly Path<EquipmentInput>[];
-const CIRCUIT_FIELDS = ["factoryChargeKg", "meteringDevice", "targetSuperheatK", "targetSubcoolingK", "liquidLineLengthM"] as const;
+const CIRCUIT_FIELDS = [
+  "factoryChargeKg",
+  "meteringDevice",
+  "targetSuperheatK",
+  "targetSubcoolingK",
+  "liquidLineLengthM",
+] as const;
 
 /** Every path a server message can land on, circuits included. */
 function fieldPaths(circuitCount: number): Path<EquipmentInput>[] {

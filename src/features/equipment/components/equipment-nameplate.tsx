@@ -121,7 +121,9 @@ export function EquipmentNameplate({
                 <td className="py-2 pr-3">{METERING_DEVICE_LABELS[circuit.meteringDevice]}</td>
                 <td className="num py-2 pr-3">{difference(circuit.targetSuperheatK)}</td>
                 <td className="num py-2 pr-3">{difference(circuit.targetSubcoolingK)}</td>
-                <td className="num py-2">{circuit.liquidLineLengthM == null ? "—" : `${formatNumber(circuit.liquidLineLengthM, 1)} m`}</td>
+                <td className="num py-2">
+                  {circuit.liquidLineLengthM == null ? "—" : `${formatNumber(circuit.liquidLineLengthM, 1)} m`}
+                </td>
               </tr>
             ))}
           </tbody>

@@ -112,8 +112,6 @@ const SORT_CHOICES = [
   { value: "totalChargeKg", label: "Factory charge" },
 ] as const;
 
-
-
 /**
  * The company's units: a sortable table on tablets and desktops, a column of cards on phones
  * (a wide table is unreadable at arm's length on a roof), both showing the page the server
@@ -172,7 +170,8 @@ export function EquipmentTable({ empty }: { empty?: ReactNode }) {
       </div>
     );
   }
-  if (pages.pageNumber === 1 && rows.length === 0 && !search && !kind && !list.isPlaceholderData && empty) return <>{empty}</>;
+  if (pages.pageNumber === 1 && rows.length === 0 && !search && !kind && !list.isPlaceholderData && empty)
+    return <>{empty}</>;
 
   return (
     <div className="space-y-4">
@@ -280,7 +279,11 @@ export function EquipmentTable({ empty }: { empty?: ReactNode }) {
           </div>
 
           {/* Tablets and desktops: the table. */}
-          <SortableTable table={table} caption="Equipment, sortable by each column" words={{ asc: "(sorted A to Z, low to high)", desc: "(sorted Z to A, high to low)" }} />
+          <SortableTable
+            table={table}
+            caption="Equipment, sortable by each column"
+            words={{ asc: "(sorted A to Z, low to high)", desc: "(sorted Z to A, high to low)" }}
+          />
         </>
       )}
       <PageControls noun="units" pages={pages} query={list} shown={rows.length} />

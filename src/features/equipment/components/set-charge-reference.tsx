@@ -9,7 +9,13 @@ import { FormAlert, SelectField } from "@/components/ui/field/field.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useSetChargeReference } from "@/lib/api/charge-references.ts";
 import { visitQueryOptions } from "@/lib/api/visits.ts";
-import { DIFFERENCE_LABEL, TEMPERATURE_DECIMALS, differenceToDisplay, formatNumber, type DisplayUnits } from "@/lib/units/display-units.ts";
+import {
+  DIFFERENCE_LABEL,
+  TEMPERATURE_DECIMALS,
+  differenceToDisplay,
+  formatNumber,
+  type DisplayUnits,
+} from "@/lib/units/display-units.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
 
 interface SetChargeReferenceProps {
@@ -38,9 +44,14 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
   // The latest readings the detail carries and the circuit's readings that matter (the server's choice over all of them).
   const keyReadings = visit.data?.circuitLogs.find((log) => log.circuit === circuit)?.keyReadings ?? [];
   const held = (visit.data?.readings ?? []).filter((reading) => reading.circuit === circuit && reading.voided === null);
-  const readings = [...held, ...keyReadings.filter((reading) => !held.some((candidate) => candidate.id === reading.id))].sort((a, b) => Date.parse(a.takenAt) - Date.parse(b.takenAt));
+  const readings = [
+    ...held,
+    ...keyReadings.filter((reading) => !held.some((candidate) => candidate.id === reading.id)),
+  ].sort((a, b) => Date.parse(a.takenAt) - Date.parse(b.takenAt));
   const difference = (kelvin: number | null) =>
-    kelvin === null ? "—" : `${formatNumber(differenceToDisplay(kelvin, units.temperature), TEMPERATURE_DECIMALS)} ${DIFFERENCE_LABEL[units.temperature]}`;
+    kelvin === null
+      ? "—"
+      : `${formatNumber(differenceToDisplay(kelvin, units.temperature), TEMPERATURE_DECIMALS)} ${DIFFERENCE_LABEL[units.temperature]}`;
 
   const open = () => {
     setVisitId("");
@@ -52,7 +63,12 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
   const confirm = async () => {
     // The same schema the server checks the body with.
     const parsed = ChargeReferenceSetSchema.safeParse({ readingId, ...(note.trim() ? { note } : {}) });
-    if (!parsed.success) return setError(readingId === "" ? "Choose a reading of this circuit" : (parsed.error.issues[0]?.message ?? "Check the reading"));
+    if (!parsed.success)
+      return setError(
+        readingId === ""
+          ? "Choose a reading of this circuit"
+          : (parsed.error.issues[0]?.message ?? "Check the reading"),
+      );
     setError(null);
     try {
       await set.mutateAsync({ circuit, body: parsed.data });
@@ -106,7 +122,8 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
               <option value="">Choose a reading…</option>
               {readings.map((reading) => (
                 <option key={reading.id} value={reading.id}>
-                  {formatDateTime(reading.takenAt)} · superheat {difference(reading.result.superheatK)} · subcooling {difference(reading.result.subcoolingK)}
+                  {formatDateTime(reading.takenAt)} · superheat {difference(reading.result.superheatK)} · subcooling{" "}
+                  {difference(reading.result.subcoolingK)}
                 </option>
               ))}
             </SelectField>

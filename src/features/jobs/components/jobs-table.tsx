@@ -19,7 +19,12 @@ interface JobRow extends VisitSummary {
 }
 
 /** The column ids the server sorts by (the table's ids are the server's names). */
-const SERVER_SORTS: Record<string, VisitSort> = { startedAt: "startedAt", equipmentName: "equipmentName", reason: "reason", status: "status" };
+const SERVER_SORTS: Record<string, VisitSort> = {
+  startedAt: "startedAt",
+  equipmentName: "equipmentName",
+  reason: "reason",
+  status: "status",
+};
 const DEFAULT_SORTING: SortingState = [{ id: "startedAt", desc: true }];
 
 const column = createColumnHelper<typeof sortableTableFeatures, JobRow>();
@@ -88,7 +93,10 @@ export function JobsTable({ status, empty }: { status: VisitStatus | null; empty
   const dir = current.desc ? "desc" : "asc";
   const pages = useCursorPages(JSON.stringify([status, search, sort, dir]));
   const visits = useVisits({ status: status ?? undefined, q: search || undefined, sort, dir, cursor: pages.cursor });
-  const rows: JobRow[] = (visits.data?.visits ?? []).map((visit) => ({ ...visit, crew: visit.technicians.map((person) => person.name).join(", ") }));
+  const rows: JobRow[] = (visits.data?.visits ?? []).map((visit) => ({
+    ...visit,
+    crew: visit.technicians.map((person) => person.name).join(", "),
+  }));
   const searchId = useId();
   const table = useTable({
     features: sortableTableFeatures,
@@ -155,20 +163,27 @@ export function JobsTable({ status, empty }: { status: VisitStatus | null; empty
                   className="block space-y-2 rounded-card border-2 border-rule bg-surface p-4 hover:border-ink"
                 >
                   <span className="flex flex-wrap items-center justify-between gap-2">
-                    <span className="font-semibold text-accent underline underline-offset-4">{visit.equipmentName}</span>
+                    <span className="font-semibold text-accent underline underline-offset-4">
+                      {visit.equipmentName}
+                    </span>
                     <VisitStatusBadge status={visit.status} />
                   </span>
                   <span className="block">{visitReasonText(visit.reason)}</span>
                   <span className="block text-sm text-muted">
                     <span className="num">{formatDateTime(visit.startedAt)}</span> · {visit.siteName} ·{" "}
-                    <span className="num">{visit.readingCount}</span> {visit.readingCount === 1 ? "reading" : "readings"}
+                    <span className="num">{visit.readingCount}</span>{" "}
+                    {visit.readingCount === 1 ? "reading" : "readings"}
                     {visit.crew && ` · ${visit.crew}`}
                   </span>
                 </Link>
               </li>
             ))}
           </ul>
-          <SortableTable table={table} caption="Visits, newest first; sortable by start, unit, reason and status" words={{ asc: "(oldest or A first)", desc: "(newest or Z first)" }} />
+          <SortableTable
+            table={table}
+            caption="Visits, newest first; sortable by start, unit, reason and status"
+            words={{ asc: "(oldest or A first)", desc: "(newest or Z first)" }}
+          />
         </>
       )}
       <PageControls noun="visits" pages={pages} query={visits} shown={rows.length} />

@@ -18,7 +18,17 @@ const MAX_SHOWN = 5;
  * one unit would split its readings and trend), else "Start visit". The server answers for
  * this unit alone, so the answer holds however many visits the company has open.
  */
-function FoundUnit({ unit, starting, disabled, onStart }: { unit: Equipment; starting: boolean; disabled: boolean; onStart: (unit: Equipment) => void }) {
+function FoundUnit({
+  unit,
+  starting,
+  disabled,
+  onStart,
+}: {
+  unit: Equipment;
+  starting: boolean;
+  disabled: boolean;
+  onStart: (unit: Equipment) => void;
+}) {
   const inProgress = useVisits({ equipmentId: unit.id, status: "open,sent-back", limit: 1 });
   const visit = inProgress.data?.visits[0];
   return (
@@ -38,7 +48,11 @@ function FoundUnit({ unit, starting, disabled, onStart }: { unit: Equipment; sta
           <Play aria-hidden className="size-5" /> Continue visit
         </Link>
       ) : (
-        <Button onClick={() => onStart(unit)} disabled={disabled || inProgress.isPending} aria-label={`Start a visit on ${unit.name}`}>
+        <Button
+          onClick={() => onStart(unit)}
+          disabled={disabled || inProgress.isPending}
+          aria-label={`Start a visit on ${unit.name}`}
+        >
           <Play aria-hidden className="size-5" /> {starting ? "Starting…" : "Start visit"}
         </Button>
       )}
@@ -103,11 +117,21 @@ export function QuickStartVisit() {
           <>
             <ul className="mt-2 divide-y-2 divide-rule" aria-label="Units found">
               {units.map((unit) => (
-                <FoundUnit key={unit.id} unit={unit} starting={starting === unit.id} disabled={create.isPending} onStart={(chosen) => void start(chosen)} />
+                <FoundUnit
+                  key={unit.id}
+                  unit={unit}
+                  starting={starting === unit.id}
+                  disabled={create.isPending}
+                  onStart={(chosen) => void start(chosen)}
+                />
               ))}
             </ul>
-            {found.data?.nextCursor && <p className="text-sm text-muted">More units match: add a word to narrow the search.</p>}
-            <p className="mt-1 text-sm text-muted">The reason for the visit can wait: you give it before you submit for review.</p>
+            {found.data?.nextCursor && (
+              <p className="text-sm text-muted">More units match: add a word to narrow the search.</p>
+            )}
+            <p className="mt-1 text-sm text-muted">
+              The reason for the visit can wait: you give it before you submit for review.
+            </p>
           </>
         ))}
     </section>

@@ -12,7 +12,10 @@ export function InviteMemberForm() {
   const create = useCreateInvitation();
   const [formError, setFormError] = useState<string | null>(null);
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const form = useForm({ resolver: zodResolver(CreateInvitationSchema), defaultValues: { email: "", role: "technician" as const } });
+  const form = useForm({
+    resolver: zodResolver(CreateInvitationSchema),
+    defaultValues: { email: "", role: "technician" as const },
+  });
   const { errors } = form.formState;
 
   const onSubmit = form.handleSubmit(async (values) => {
@@ -32,10 +35,21 @@ export function InviteMemberForm() {
       <h2 id="invite-heading" className="text-xl font-semibold">
         Invite someone
       </h2>
-      {sentTo && <FormAlert tone="good">Invitation sent to {sentTo}. The link works for {INVITATION_VALID_DAYS} days.</FormAlert>}
+      {sentTo && (
+        <FormAlert tone="good">
+          Invitation sent to {sentTo}. The link works for {INVITATION_VALID_DAYS} days.
+        </FormAlert>
+      )}
       {formError && <FormAlert>{formError}</FormAlert>}
       <div className="grid gap-4 sm:grid-cols-[2fr_1fr]">
-        <TextField label="Their e-mail" type="email" autoComplete="off" inputMode="email" error={errors.email?.message} {...form.register("email")} />
+        <TextField
+          label="Their e-mail"
+          type="email"
+          autoComplete="off"
+          inputMode="email"
+          error={errors.email?.message}
+          {...form.register("email")}
+        />
         <SelectField label="Role" error={errors.role?.message} {...form.register("role")}>
           {ROLES.map((role) => (
             <option key={role} value={role}>

@@ -51,24 +51,29 @@ function RemoveCell({ member, isSelf }: { member: Member; isSelf: boolean }) {
 }
 
 const nameColumn = column.accessor("name", { header: "Name" });
-const emailColumn = column.accessor("email", { header: "E-mail", cell: (info) => <span className="break-all">{info.getValue()}</span> });
+const emailColumn = column.accessor("email", {
+  header: "E-mail",
+  cell: (info) => <span className="break-all">{info.getValue()}</span>,
+});
 
 /** The company's people. Owners change roles and remove people in place; others just read it. */
 export function MembersTable({ members, viewer }: { members: Member[]; viewer: AuthUser }) {
   const canManage = viewer.role === "owner";
   // Columns stay the same object between renders (react-table v9 rebuilds its models when they change).
-  const columns = useMemo(
-    () => {
-      const roleColumn = column.accessor("role", { header: "Role", cell: (info) => <RoleCell member={info.row.original} canManage={canManage} /> });
-      const actionsColumn = column.display({
-        id: "actions",
-        header: "Actions",
-        cell: (info) => <RemoveCell member={info.row.original} isSelf={info.row.original.id === viewer.id} />,
-      });
-      return canManage ? column.columns([nameColumn, emailColumn, roleColumn, actionsColumn]) : column.columns([nameColumn, emailColumn, roleColumn]);
-    },
-    [canManage, viewer.id],
-  );
+  const columns = useMemo(() => {
+    const roleColumn = column.accessor("role", {
+      header: "Role",
+      cell: (info) => <RoleCell member={info.row.original} canManage={canManage} />,
+    });
+    const actionsColumn = column.display({
+      id: "actions",
+      header: "Actions",
+      cell: (info) => <RemoveCell member={info.row.original} isSelf={info.row.original.id === viewer.id} />,
+    });
+    return canManage
+      ? column.columns([nameColumn, emailColumn, roleColumn, actionsColumn])
+      : column.columns([nameColumn, emailColumn, roleColumn]);
+  }, [canManage, viewer.id]);
   const table = useTable({ features, columns, data: members, getRowId: (row) => row.id });
 
   // On a phone each member is a stacked card (label above value); from sm up it is a plain table.

@@ -20,10 +20,16 @@ export function PendingInvitations({ invitations }: { invitations: Invitation[] 
               <div className="min-w-0">
                 <div className="break-all font-medium">{invitation.email}</div>
                 <div className="text-sm text-muted">
-                  {ROLE_LABELS[invitation.role]} · link valid until <span className="num">{formatDate(invitation.expiresAt)}</span>
+                  {ROLE_LABELS[invitation.role]} · link valid until{" "}
+                  <span className="num">{formatDate(invitation.expiresAt)}</span>
                 </div>
               </div>
-              <Button variant="secondary" disabled={revoke.isPending} onClick={() => revoke.mutate(invitation.id)} aria-label={`Withdraw the invitation to ${invitation.email}`}>
+              <Button
+                variant="secondary"
+                disabled={revoke.isPending}
+                onClick={() => revoke.mutate(invitation.id)}
+                aria-label={`Withdraw the invitation to ${invitation.email}`}
+              >
                 Withdraw
               </Button>
             </li>

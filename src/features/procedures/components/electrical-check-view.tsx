@@ -4,13 +4,17 @@ import { formatNumber } from "@/lib/units/display-units.ts";
 import { VerdictBadge, VerdictLine } from "./verdict-badge.tsx";
 import { formatDateTime } from "@shared/format/date-time.ts";
 
-const list = (values: readonly number[], unit: string, decimals = 0) => `${values.map((value) => formatNumber(value, decimals)).join(" / ")} ${unit}`;
+const list = (values: readonly number[], unit: string, decimals = 0) =>
+  `${values.map((value) => formatNumber(value, decimals)).join(" / ")} ${unit}`;
 
 /** One saved electrical check: its overall verdict, then each judged check with its figure and source. */
 export function ElectricalCheckView({ check }: { check: ElectricalCheck }) {
   const { input, result } = check;
   return (
-    <article aria-label={`${ELECTRICAL_TARGET_LABELS[input.target]} check`} className="rounded-card border-2 border-rule bg-surface p-3">
+    <article
+      aria-label={`${ELECTRICAL_TARGET_LABELS[input.target]} check`}
+      className="rounded-card border-2 border-rule bg-surface p-3"
+    >
       <header className="flex flex-wrap items-center gap-2">
         <h3 className="font-semibold">
           {ELECTRICAL_TARGET_LABELS[input.target]}
@@ -61,7 +65,15 @@ export function ElectricalCheckView({ check }: { check: ElectricalCheck }) {
         {result.singlePhaseWindings && input.singlePhaseWindingOhms && (
           <VerdictLine
             label="Windings C–R / C–S / R–S"
-            figure={list([input.singlePhaseWindingOhms.commonRun, input.singlePhaseWindingOhms.commonStart, input.singlePhaseWindingOhms.runStart], "Ω", 2)}
+            figure={list(
+              [
+                input.singlePhaseWindingOhms.commonRun,
+                input.singlePhaseWindingOhms.commonStart,
+                input.singlePhaseWindingOhms.runStart,
+              ],
+              "Ω",
+              2,
+            )}
             verdict={result.singlePhaseWindings.verdict}
             reason={result.singlePhaseWindings.reason}
             source={result.singlePhaseWindings.source}
@@ -81,7 +93,10 @@ export function ElectricalCheckView({ check }: { check: ElectricalCheck }) {
       {result.currentImbalancePercent !== null && (
         <p className="mt-1 text-sm">
           Current imbalance <span className="num">{formatNumber(result.currentImbalancePercent, 1)} %</span>{" "}
-          <span className="text-muted">(one compressor maker allows up to {CURRENT_IMBALANCE_MAX_PERCENT} %; typically 6–10 × the voltage imbalance)</span>
+          <span className="text-muted">
+            (one compressor maker allows up to {CURRENT_IMBALANCE_MAX_PERCENT} %; typically 6–10 × the voltage
+            imbalance)
+          </span>
         </p>
       )}
       {input.note && <p className="mt-1 text-sm">Note: {input.note}</p>}

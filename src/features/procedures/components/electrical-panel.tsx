@@ -172,7 +172,12 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
     try {
       // Taken now, by the device's clock; without a connection it waits in the outbox.
       const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      const sent = await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "electrical-check", visitId, path: procedureRecordsPath("electrical-checks", visitId), body: record });
+      const sent = await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), {
+        kind: "electrical-check",
+        visitId,
+        path: procedureRecordsPath("electrical-checks", visitId),
+        body: record,
+      });
       entryId.release();
       setSaved(sent.outcome === "stored");
       setAttempted(false);

@@ -3,7 +3,6 @@ import type { Evacuation } from "@shared/schemas/procedure-records.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { formatVacuum, VACUUM_LABEL, vacuumToDisplay, type VacuumUnit } from "./vacuum-units.ts";
 
-
 /** The log axis cannot show zero: a perfect-vacuum reading is drawn at the gauge's last digit. */
 const LOG_FLOOR_MICRONS = 1;
 
@@ -30,7 +29,13 @@ export default function EvacuationChart({ evacuation, unit, width, height = 280 
   const chart = (
     <LineChart data={data} width={width} height={height} margin={{ top: 20, right: 16, bottom: 8, left: 8 }}>
       <CartesianGrid strokeDasharray="2 4" stroke="var(--color-rule)" />
-      <XAxis dataKey="minutes" type="number" domain={[0, "dataMax"]} unit=" min" tick={{ fontFamily: "IBM Plex Mono", fontSize: 12 }} />
+      <XAxis
+        dataKey="minutes"
+        type="number"
+        domain={[0, "dataMax"]}
+        unit=" min"
+        tick={{ fontFamily: "IBM Plex Mono", fontSize: 12 }}
+      />
       <YAxis
         dataKey="vacuum"
         scale="log"
@@ -41,19 +46,54 @@ export default function EvacuationChart({ evacuation, unit, width, height = 280 
         tickFormatter={(value: number) => formatNumber(value, value < 10 ? 1 : 0)}
         tick={{ fontFamily: "IBM Plex Mono", fontSize: 12 }}
       />
-      <Tooltip formatter={(value) => (typeof value === "number" ? `${formatNumber(value, unit === "micron" ? 0 : 1)} ${label}` : String(value))} labelFormatter={(x) => `${formatNumber(Number(x), 1)} min`} />
-      <ReferenceLine y={target} stroke="var(--color-good)" strokeWidth={2} strokeDasharray="8 4" label={{ value: `Target ${formatVacuum(evacuation.targetMicrons, unit)}`, position: "insideBottomLeft", fontSize: 12, fill: "var(--color-ink)" }} />
+      <Tooltip
+        formatter={(value) =>
+          typeof value === "number" ? `${formatNumber(value, unit === "micron" ? 0 : 1)} ${label}` : String(value)
+        }
+        labelFormatter={(x) => `${formatNumber(Number(x), 1)} min`}
+      />
+      <ReferenceLine
+        y={target}
+        stroke="var(--color-good)"
+        strokeWidth={2}
+        strokeDasharray="8 4"
+        label={{
+          value: `Target ${formatVacuum(evacuation.targetMicrons, unit)}`,
+          position: "insideBottomLeft",
+          fontSize: 12,
+          fill: "var(--color-ink)",
+        }}
+      />
       {evacuation.isolatedAtMinutes !== null && (
-        <ReferenceLine x={evacuation.isolatedAtMinutes} stroke="var(--color-ink)" strokeDasharray="6 3" label={{ value: "Pump valved off", position: "insideTopRight", fontSize: 12, fill: "var(--color-ink)" }} />
+        <ReferenceLine
+          x={evacuation.isolatedAtMinutes}
+          stroke="var(--color-ink)"
+          strokeDasharray="6 3"
+          label={{ value: "Pump valved off", position: "insideTopRight", fontSize: 12, fill: "var(--color-ink)" }}
+        />
       )}
-      <Line dataKey="vacuum" name={`Vacuum (${label})`} stroke="var(--color-low)" strokeWidth={3} dot={{ r: 4 }} isAnimationActive={false} />
+      <Line
+        dataKey="vacuum"
+        name={`Vacuum (${label})`}
+        stroke="var(--color-low)"
+        strokeWidth={3}
+        dot={{ r: 4 }}
+        isAnimationActive={false}
+      />
     </LineChart>
   );
   return (
     <figure aria-label="Evacuation pull-down and decay chart" data-testid="evacuation-chart">
-      {width ? chart : <ResponsiveContainer width="100%" height={height}>{chart}</ResponsiveContainer>}
+      {width ? (
+        chart
+      ) : (
+        <ResponsiveContainer width="100%" height={height}>
+          {chart}
+        </ResponsiveContainer>
+      )}
       <figcaption className="text-xs text-muted">
-        Log scale. Dashed horizontal line: the target; dashed vertical line: pump valved off (the decay test follows it).
+        Log scale. Dashed horizontal line: the target; dashed vertical line: pump valved off (the decay test follows
+        it).
       </figcaption>
     </figure>
   );

@@ -17,7 +17,12 @@ import { VisitVoidAction } from "@/features/visit/components/visit-void-action.t
 import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
 import { useNow } from "@/hooks/use-now.ts";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { useAddEvacuationSample, useCreateEvacuation, useEvacuations, useUpdateEvacuation } from "@/lib/api/procedures.ts";
+import {
+  useAddEvacuationSample,
+  useCreateEvacuation,
+  useEvacuations,
+  useUpdateEvacuation,
+} from "@/lib/api/procedures.ts";
 import { evacuationSamplesPath, procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
@@ -34,7 +39,8 @@ import { EvacuationBadge, EvacuationSummary } from "./evacuation-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 
 /** Minutes since the evacuation started, to the tenth, by this device's clock. */
-const minutesSince = (startedAt: string, now: number) => Math.max(0, Math.round((now - new Date(startedAt).getTime()) / 6_000) / 10);
+const minutesSince = (startedAt: string, now: number) =>
+  Math.max(0, Math.round((now - new Date(startedAt).getTime()) / 6_000) / 10);
 const fromDisplay = (value: number, unit: VacuumUnit) => (unit === "micron" ? value : paToMicrons(value));
 /** A typed target carried over to the other unit when the technician switches (text that is not a number stays as typed). */
 function convertTyped(text: string, from: VacuumUnit, to: VacuumUnit): string {
@@ -49,7 +55,19 @@ function errorText(error: unknown, fallback: string): { message: string; fields:
 }
 
 /** Readings entry for the evacuation in progress: the time fills itself in, the unit is the technician's choice. */
-function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitId: string; evacuation: ShownEvacuation; unit: VacuumUnit; canWrite: boolean; onReload: () => Promise<unknown> }) {
+function SampleEntry({
+  visitId,
+  evacuation,
+  unit,
+  canWrite,
+  onReload,
+}: {
+  visitId: string;
+  evacuation: ShownEvacuation;
+  unit: VacuumUnit;
+  canWrite: boolean;
+  onReload: () => Promise<unknown>;
+}) {
   const now = useNow(5_000);
   const addSample = useAddEvacuationSample();
   const keepWhenOffline = useKeepWhenOffline();
@@ -68,12 +86,19 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
   const lastMinutes = evacuation.samples.at(-1)?.minutes;
   const isolationText = isolation ?? (lastMinutes !== undefined ? String(lastMinutes) : autoMinutes);
   // A message goes as soon as its field is changed.
-  const [errors, setErrors] = useFieldErrors({ microns: reading, minutes: minutesText, isolatedAtMinutes: isolationText });
+  const [errors, setErrors] = useFieldErrors({
+    microns: reading,
+    minutes: minutesText,
+    isolatedAtMinutes: isolationText,
+  });
 
   const add = async () => {
     setFormError(null);
     const value = toNumber(reading);
-    const body = { microns: value === undefined || Number.isNaN(value) ? value : fromDisplay(value, unit), minutes: toNumber(minutesText) };
+    const body = {
+      microns: value === undefined || Number.isNaN(value) ? value : fromDisplay(value, unit),
+      minutes: toNumber(minutesText),
+    };
     const parsed = EvacuationSampleBodySchema.safeParse(body);
     if (!parsed.success) {
       setErrors(fieldErrorsOf(parsed.error));
@@ -93,7 +118,9 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
       };
       // Readings of an evacuation still on the device go after it, in order, from the outbox: sent
       // now, they would reach the server before the evacuation they belong to.
-      const send = evacuation.onDevice ? () => Promise.reject(new ApiError(0, "Kept behind its evacuation")) : () => addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...sample });
+      const send = evacuation.onDevice
+        ? () => Promise.reject(new ApiError(0, "Kept behind its evacuation"))
+        : () => addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...sample });
       await keepWhenOffline(send, {
         kind: "evacuation-sample",
         visitId,
@@ -114,7 +141,12 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
     setFormError(null);
     setStale(null);
     try {
-      await update.mutateAsync({ visitId, evacuationId: evacuation.id, isolatedAtMinutes, version: evacuation.version });
+      await update.mutateAsync({
+        visitId,
+        evacuationId: evacuation.id,
+        isolatedAtMinutes,
+        version: evacuation.version,
+      });
       setIsolation(null);
     } catch (error) {
       // Another device valved off (or undid it) since this screen loaded: show theirs first.
@@ -137,21 +169,46 @@ function SampleEntry({ visitId, evacuation, unit, canWrite, onReload }: { visitI
           void add();
         }}
       >
-        <NumberField label="Vacuum reading" unit={VACUUM_LABEL[unit]} value={reading} onValueChange={setReading} error={errors.microns} />
-        <NumberField label="Time from start" unit="min" value={minutesText} onValueChange={setMinutes} error={errors.minutes} hint={minutes === null ? "Fills in by itself" : undefined} />
+        <NumberField
+          label="Vacuum reading"
+          unit={VACUUM_LABEL[unit]}
+          value={reading}
+          onValueChange={setReading}
+          error={errors.microns}
+        />
+        <NumberField
+          label="Time from start"
+          unit="min"
+          value={minutesText}
+          onValueChange={setMinutes}
+          error={errors.minutes}
+          hint={minutes === null ? "Fills in by itself" : undefined}
+        />
         <Button type="submit" size="lg" disabled={addSample.isPending} className="col-span-2 sm:col-span-1">
           <Plus aria-hidden className="size-5" /> {addSample.isPending ? "Saving…" : "Add reading"}
         </Button>
       </form>
       {evacuation.isolatedAtMinutes === null ? (
         <div className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[10rem_auto]">
-          <NumberField label="Valved off at" unit="min" value={isolationText} onValueChange={setIsolation} error={errors.isolatedAtMinutes} />
-          <Button variant="secondary" size="lg" disabled={update.isPending || evacuation.samples.length === 0 || evacuation.onDevice} onClick={() => void setIsolated(toNumber(isolationText) ?? null)}>
+          <NumberField
+            label="Valved off at"
+            unit="min"
+            value={isolationText}
+            onValueChange={setIsolation}
+            error={errors.isolatedAtMinutes}
+          />
+          <Button
+            variant="secondary"
+            size="lg"
+            disabled={update.isPending || evacuation.samples.length === 0 || evacuation.onDevice}
+            onClick={() => void setIsolated(toNumber(isolationText) ?? null)}
+          >
             <Power aria-hidden className="size-5" /> Pump valved off
           </Button>
           {evacuation.onDevice && (
             <p className="col-span-2 text-sm text-muted">
-              The decay test starts on the server: mark the pump valved off once this evacuation has been sent. Keep entering readings meanwhile.
+              The decay test starts on the server: mark the pump valved off once this evacuation has been sent. Keep
+              entering readings meanwhile.
             </p>
           )}
         </div>
@@ -206,7 +263,9 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
   const start = async () => {
     setStartError(null);
     const typed = toNumber(targetText);
-    const parsed = EvacuationCreateSchema.safeParse({ targetMicrons: typed === undefined || Number.isNaN(typed) ? typed : Math.round(fromDisplay(typed, unit)) });
+    const parsed = EvacuationCreateSchema.safeParse({
+      targetMicrons: typed === undefined || Number.isNaN(typed) ? typed : Math.round(fromDisplay(typed, unit)),
+    });
     if (!parsed.success) {
       // The schema speaks microns; someone reading pascals gets the range in pascals.
       const fields = fieldErrorsOf(parsed.error);
@@ -235,9 +294,15 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
   return (
     <div className="space-y-4">
       <CautionPanel topic="electrical" />
-      <p className="text-sm text-muted">Read the vacuum on an electronic (micron) gauge at the point furthest from the pump, never a compound gauge.</p>
+      <p className="text-sm text-muted">
+        Read the vacuum on an electronic (micron) gauge at the point furthest from the pump, never a compound gauge.
+      </p>
       {evacuations.isError && <FormAlert>The evacuations could not be loaded: {evacuations.error.message}</FormAlert>}
-      <WaitingEntries entries={onDevice.filter((entry) => entry.visitId === visitId && (entry.kind === "evacuation" || entry.kind === "evacuation-sample"))} />
+      <WaitingEntries
+        entries={onDevice.filter(
+          (entry) => entry.visitId === visitId && (entry.kind === "evacuation" || entry.kind === "evacuation-sample"),
+        )}
+      />
 
       <Segmented<VacuumUnit>
         label="Vacuum unit"
@@ -247,11 +312,17 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
           setStartError(null);
           setUnit(next);
         }}
-        options={[{ value: "micron", label: "Microns" }, { value: "Pa", label: "Pa" }]}
+        options={[
+          { value: "micron", label: "Microns" },
+          { value: "Pa", label: "Pa" },
+        ]}
       />
 
       {current && (
-        <section aria-labelledby="evacuation-current-heading" className="space-y-3 rounded-card border-2 border-rule bg-surface p-4">
+        <section
+          aria-labelledby="evacuation-current-heading"
+          className="space-y-3 rounded-card border-2 border-rule bg-surface p-4"
+        >
           <h2 id="evacuation-current-heading" className="text-lg font-semibold">
             Evacuation started {recordTime(current.startedAt)}
           </h2>
@@ -262,10 +333,19 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
           )}
           <EvacuationSummary evacuation={current} unit={unit} />
           <EvacuationChart evacuation={current} unit={unit} />
-          <SampleEntry key={current.id} visitId={visitId} evacuation={current} unit={unit} canWrite={canWrite} onReload={() => evacuations.refetch()} />
+          <SampleEntry
+            key={current.id}
+            visitId={visitId}
+            evacuation={current}
+            unit={unit}
+            canWrite={canWrite}
+            onReload={() => evacuations.refetch()}
+          />
           {current.samples.length > 0 && (
             <details>
-              <summary className="min-h-touch cursor-pointer py-2 font-medium">Readings ({current.samples.length})</summary>
+              <summary className="min-h-touch cursor-pointer py-2 font-medium">
+                Readings ({current.samples.length})
+              </summary>
               <table className="num w-full max-w-sm text-sm">
                 <thead>
                   <tr className="text-left font-sans text-muted">
@@ -277,7 +357,10 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
                   {current.samples.map((sample) => (
                     <tr key={sample.minutes} className="border-t border-rule">
                       <td className="py-1">
-                        {formatNumber(sample.minutes, 1)} min{current.isolatedAtMinutes !== null && sample.minutes >= current.isolatedAtMinutes ? " (decay)" : ""}
+                        {formatNumber(sample.minutes, 1)} min
+                        {current.isolatedAtMinutes !== null && sample.minutes >= current.isolatedAtMinutes
+                          ? " (decay)"
+                          : ""}
                       </td>
                       <td className="py-1">{formatVacuum(sample.microns, unit)}</td>
                     </tr>
@@ -286,7 +369,14 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
               </table>
             </details>
           )}
-          {canWrite && !current.onDevice && <VisitVoidAction visitId={visitId} kind="evacuation" recordId={current.id} what={`the evacuation started ${recordTime(current.startedAt)}`} />}
+          {canWrite && !current.onDevice && (
+            <VisitVoidAction
+              visitId={visitId}
+              kind="evacuation"
+              recordId={current.id}
+              what={`the evacuation started ${recordTime(current.startedAt)}`}
+            />
+          )}
         </section>
       )}
 
@@ -333,9 +423,20 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
                 <VoidedRecord voided={evacuation.voided} className="flex flex-wrap items-center gap-2">
                   <span className="num">{recordTime(evacuation.startedAt)}</span>
                   <EvacuationBadge evacuation={evacuation} />
-                  {evacuation.samples.length > 0 && <span className="num text-muted">last {formatVacuum(evacuation.samples.at(-1)!.microns, unit)}</span>}
+                  {evacuation.samples.length > 0 && (
+                    <span className="num text-muted">
+                      last {formatVacuum(evacuation.samples.at(-1)!.microns, unit)}
+                    </span>
+                  )}
                 </VoidedRecord>
-                {canWrite && !evacuation.voided && !evacuation.onDevice && <VisitVoidAction visitId={visitId} kind="evacuation" recordId={evacuation.id} what={`the evacuation started ${recordTime(evacuation.startedAt)}`} />}
+                {canWrite && !evacuation.voided && !evacuation.onDevice && (
+                  <VisitVoidAction
+                    visitId={visitId}
+                    kind="evacuation"
+                    recordId={evacuation.id}
+                    what={`the evacuation started ${recordTime(evacuation.startedAt)}`}
+                  />
+                )}
               </li>
             ))}
           </ul>

@@ -11,9 +11,18 @@ export function EvacuationReport({ visitId, chartWidth }: { visitId: string; cha
   // Voided records are corrections: the report leaves them out (the audit trail names them).
   const list = (evacuations.data?.evacuations ?? []).filter(isStanding);
   return (
-    <ReportSection id="evacuation-report" title="Evacuation and decay test" state={evacuations} empty={list.length === 0}>
+    <ReportSection
+      id="evacuation-report"
+      title="Evacuation and decay test"
+      state={evacuations}
+      empty={list.length === 0}
+    >
       {list.map((evacuation) => (
-        <article key={evacuation.id} aria-label="Evacuation" className="space-y-2 rounded-card border-2 border-rule bg-surface p-3">
+        <article
+          key={evacuation.id}
+          aria-label="Evacuation"
+          className="space-y-2 rounded-card border-2 border-rule bg-surface p-3"
+        >
           <h3 className="font-semibold">
             Started {formatDateTime(evacuation.startedAt)}
             {evacuation.recordedBy && <span className="font-normal text-muted"> · {evacuation.recordedBy.name}</span>}

@@ -16,13 +16,19 @@ const STAGE_TEXT = {
 export function EvacuationSummary({ evacuation, unit }: { evacuation: Evacuation; unit: VacuumUnit }) {
   const { result } = evacuation;
   const last = evacuation.samples.at(-1);
-  const rate = result.decay ? `${formatNumber(vacuumToDisplay(result.decay.riseRateMicronsPerMinute, unit), 1)} ${VACUUM_LABEL[unit]}/min` : null;
+  const rate = result.decay
+    ? `${formatNumber(vacuumToDisplay(result.decay.riseRateMicronsPerMinute, unit), 1)} ${VACUUM_LABEL[unit]}/min`
+    : null;
   return (
     <div className="space-y-2">
       <p className="flex flex-wrap items-center gap-2 text-sm">
         <span className="font-medium">{STAGE_TEXT[result.stage]}</span>
         <span>· target {formatVacuum(evacuation.targetMicrons, unit)}</span>
-        {last && <span className="num">· last {formatVacuum(last.microns, unit)} at {formatNumber(last.minutes, 1)} min</span>}
+        {last && (
+          <span className="num">
+            · last {formatVacuum(last.microns, unit)} at {formatNumber(last.minutes, 1)} min
+          </span>
+        )}
         <span>
           ·{" "}
           {result.reached.reached ? (
@@ -33,7 +39,9 @@ export function EvacuationSummary({ evacuation, unit }: { evacuation: Evacuation
             "target not reached yet"
           )}
         </span>
-        {evacuation.isolatedAtMinutes !== null && <span className="num">· valved off at {formatNumber(evacuation.isolatedAtMinutes, 1)} min</span>}
+        {evacuation.isolatedAtMinutes !== null && (
+          <span className="num">· valved off at {formatNumber(evacuation.isolatedAtMinutes, 1)} min</span>
+        )}
       </p>
       {result.overall && result.decay ? (
         <VerdictPanel
@@ -46,7 +54,9 @@ export function EvacuationSummary({ evacuation, unit }: { evacuation: Evacuation
         />
       ) : (
         <p className="text-sm text-muted">
-          {result.stage === "pulling-down" ? "Valve off the pump once the target is reached to start the decay test." : "Keep reading the gauge: the decay test needs a reading after valving off."}
+          {result.stage === "pulling-down"
+            ? "Valve off the pump once the target is reached to start the decay test."
+            : "Keep reading the gauge: the decay test needs a reading after valving off."}
         </p>
       )}
     </div>

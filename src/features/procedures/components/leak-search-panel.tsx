@@ -30,7 +30,15 @@ type LeakRow = { location: string; severity: LeakSeverity; repair: string; repai
 const emptyLeak = (): LeakRow => ({ location: "", severity: "small", repair: "", repaired: false });
 
 /** The leak search: how, where, what was found and repaired, and what the recheck showed. */
-export function LeakSearchPanel({ visitId, canWrite, readOnlyNote }: { visitId: string; canWrite: boolean; readOnlyNote?: string }) {
+export function LeakSearchPanel({
+  visitId,
+  canWrite,
+  readOnlyNote,
+}: {
+  visitId: string;
+  canWrite: boolean;
+  readOnlyNote?: string;
+}) {
   const searches = useLeakSearches(visitId);
   const create = useCreateLeakSearch();
   // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
@@ -76,7 +84,12 @@ export function LeakSearchPanel({ visitId, canWrite, readOnlyNote }: { visitId: 
     try {
       // Taken now, by the device's clock; without a connection it waits in the outbox.
       const record = { ...body, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "leak-search", visitId, path: procedureRecordsPath("leak-searches", visitId), body: record });
+      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), {
+        kind: "leak-search",
+        visitId,
+        path: procedureRecordsPath("leak-searches", visitId),
+        body: record,
+      });
       entryId.release();
       setPlaces("");
       setLeaks([]);

@@ -1,4 +1,9 @@
-import { LEAK_METHOD_LABELS, LEAK_SEVERITY_LABELS, RECHECK_LABELS, type LeakSearch } from "@shared/schemas/procedure-records.ts";
+import {
+  LEAK_METHOD_LABELS,
+  LEAK_SEVERITY_LABELS,
+  RECHECK_LABELS,
+  type LeakSearch,
+} from "@shared/schemas/procedure-records.ts";
 import { VerdictBadge, VerdictLine } from "./verdict-badge.tsx";
 import { formatDateTime } from "@shared/format/date-time.ts";
 

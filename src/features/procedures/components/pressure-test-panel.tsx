@@ -82,7 +82,17 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
   const ratedText = rated ?? (ratedDefault !== null ? shown(ratedDefault) : "");
   const allowedText = allowed ?? (defaults ? shown(defaults.allowedDropKPa) : "");
   // A message goes as soon as its field is changed.
-  const [errors, setErrors] = useFieldErrors({ section, ratedKPa: ratedText, startGaugeKPa: start, startTempC: startTemp, endGaugeKPa: end, endTempC: endTemp, holdMinutes: hold, allowedDropKPa: allowedText, note });
+  const [errors, setErrors] = useFieldErrors({
+    section,
+    ratedKPa: ratedText,
+    startGaugeKPa: start,
+    startTempC: startTemp,
+    endGaugeKPa: end,
+    endTempC: endTemp,
+    holdMinutes: hold,
+    allowedDropKPa: allowedText,
+    note,
+  });
   const pressure = (text: string) =>
     toConverted(text, (value) => gaugeFromDisplay(value, units.pressure, atmosphericKPa));
 
@@ -125,7 +135,12 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
     try {
       // Taken now, by the device's clock; without a connection it waits in the outbox.
       const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "pressure-test", visitId, path: procedureRecordsPath("pressure-tests", visitId), body: record });
+      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), {
+        kind: "pressure-test",
+        visitId,
+        path: procedureRecordsPath("pressure-tests", visitId),
+        body: record,
+      });
       entryId.release();
       setStart("");
       setEnd("");

@@ -5,7 +5,15 @@ import { PressureTestView } from "./pressure-test-view.tsx";
 import { ReportSection } from "./report-section.tsx";
 
 /** The visit report's nitrogen pressure test section. */
-export function PressureTestReport({ visitId, units, atmosphericKPa }: { visitId: string; units: DisplayUnits; atmosphericKPa: number }) {
+export function PressureTestReport({
+  visitId,
+  units,
+  atmosphericKPa,
+}: {
+  visitId: string;
+  units: DisplayUnits;
+  atmosphericKPa: number;
+}) {
   const tests = usePressureTests(visitId);
   // Voided records are corrections: the report leaves them out (the audit trail names them).
   const list = (tests.data?.pressureTests ?? []).filter(isStanding);

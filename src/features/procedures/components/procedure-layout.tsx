@@ -40,7 +40,14 @@ interface ProcedureLayoutProps {
  */
 export const ROLE_READ_ONLY_NOTE = "You can read this visit; recording is for technicians, seniors and owners.";
 
-export function ProcedureLayout({ visitId, caution, saved, loadError, form, readOnlyNote = ROLE_READ_ONLY_NOTE }: ProcedureLayoutProps) {
+export function ProcedureLayout({
+  visitId,
+  caution,
+  saved,
+  loadError,
+  form,
+  readOnlyNote = ROLE_READ_ONLY_NOTE,
+}: ProcedureLayoutProps) {
   const onDevice = useOutboxEntries();
   return (
     <div className="space-y-4">
@@ -61,7 +68,12 @@ export function ProcedureLayout({ visitId, caution, saved, loadError, form, read
         </section>
       )}
       {/* This kind's entries on the device: waiting to send, or refused with the reason. */}
-      <WaitingEntries entries={onDevice.filter((entry) => entry.visitId === visitId && (entry.kind === saved.kind || entry.kind.startsWith(`${saved.kind}-`)))} />
+      <WaitingEntries
+        entries={onDevice.filter(
+          (entry) =>
+            entry.visitId === visitId && (entry.kind === saved.kind || entry.kind.startsWith(`${saved.kind}-`)),
+        )}
+      />
       {loadError && <FormAlert>{loadError}</FormAlert>}
       {form ? (
         <form

@@ -9,7 +9,13 @@ import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateStandingPressureCheck, useStandingPressureChecks } from "@/lib/api/procedures.ts";
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
-import { GAUGE_LABEL, gaugeFromDisplay, TEMPERATURE_LABEL, temperatureFromDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
+import {
+  GAUGE_LABEL,
+  gaugeFromDisplay,
+  TEMPERATURE_LABEL,
+  temperatureFromDisplay,
+  type DisplayUnits,
+} from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
 import { fieldErrorsOf } from "../utils/field-errors.ts";
@@ -17,7 +23,12 @@ import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted } from "../utils/parse-number.ts";
 import { recordTime } from "../utils/record-time.ts";
 import { ProcedureLayout } from "./procedure-layout.tsx";
-import { StandingPressureFigures, StandingPressureView, STANDING_PRESSURE_WORDS, ZEOTROPE_NOTE } from "./standing-pressure-view.tsx";
+import {
+  StandingPressureFigures,
+  StandingPressureView,
+  STANDING_PRESSURE_WORDS,
+  ZEOTROPE_NOTE,
+} from "./standing-pressure-view.tsx";
 import { VerdictPanel } from "./verdict-badge.tsx";
 
 interface StandingPressurePanelProps {
@@ -38,7 +49,16 @@ interface StandingPressurePanelProps {
  * against the saturation pressure of the equalised condenser temperature. The verdict is
  * previewed in the browser with the engine the server runs, and stored as the server judges it.
  */
-export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits, units, atmosphericKPa, canWrite, readOnlyNote }: StandingPressurePanelProps) {
+export function StandingPressurePanel({
+  visitId,
+  refrigerant,
+  isBlend,
+  circuits,
+  units,
+  atmosphericKPa,
+  canWrite,
+  readOnlyNote,
+}: StandingPressurePanelProps) {
   const checks = useStandingPressureChecks(visitId);
   const create = useCreateStandingPressureCheck();
   // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
@@ -50,7 +70,12 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
   const [note, setNote] = useState("");
   const [formError, setFormError] = useState<string | null>(null);
   // A message goes as soon as its field is changed.
-  const [errors, setErrors] = useFieldErrors({ standingGaugeKPa: standing, equalisedTempC: temperature, circuit, note });
+  const [errors, setErrors] = useFieldErrors({
+    standingGaugeKPa: standing,
+    equalisedTempC: temperature,
+    circuit,
+    note,
+  });
 
   const body = {
     standingGaugeKPa: toConverted(standing, (value) => gaugeFromDisplay(value, units.pressure, atmosphericKPa)),
@@ -86,7 +111,12 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
     try {
       // Taken now, by the device's clock; without a connection it waits in the outbox.
       const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), { kind: "standing-pressure-check", visitId, path: procedureRecordsPath("standing-pressure-checks", visitId), body: record });
+      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), {
+        kind: "standing-pressure-check",
+        visitId,
+        path: procedureRecordsPath("standing-pressure-checks", visitId),
+        body: record,
+      });
       entryId.release();
       setStanding("");
       setTemperature("");
@@ -116,7 +146,9 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
           element: <StandingPressureView check={check} units={units} />,
         })),
       }}
-      loadError={checks.isError ? `The standing-pressure checks could not be loaded: ${checks.error.message}` : undefined}
+      loadError={
+        checks.isError ? `The standing-pressure checks could not be loaded: ${checks.error.message}` : undefined
+      }
       form={
         canWrite
           ? {
@@ -129,11 +161,18 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
                     <p className="font-medium">How to read it</p>
                     <ol className="list-decimal space-y-1 pl-6">
                       <li>Stop the unit and leave the compressor off.</li>
-                      <li>Run the condenser fan on its own until the air leaving the coil is the same temperature as the air entering it.</li>
-                      <li>Measure the condenser's air temperature in the shade (the outdoor air for an air-cooled unit), then read the standing pressure on the gauge.</li>
+                      <li>
+                        Run the condenser fan on its own until the air leaving the coil is the same temperature as the
+                        air entering it.
+                      </li>
+                      <li>
+                        Measure the condenser's air temperature in the shade (the outdoor air for an air-cooled unit),
+                        then read the standing pressure on the gauge.
+                      </li>
                     </ol>
                     <p className="text-muted">
-                      Judged against {refrigerant} at the site's atmosphere. Air or nitrogen in the condenser stands above the saturation pressure of that temperature.
+                      Judged against {refrigerant} at the site's atmosphere. Air or nitrogen in the condenser stands
+                      above the saturation pressure of that temperature.
                     </p>
                   </div>
                   {circuits.length > 1 && (
@@ -150,7 +189,10 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
                       unit={GAUGE_LABEL[units.pressure]}
                       value={standing}
                       onValueChange={setStanding}
-                      error={errors.standingGaugeKPa ?? (previewProblem?.field === "standingGaugeKPa" ? previewProblem.message : undefined)}
+                      error={
+                        errors.standingGaugeKPa ??
+                        (previewProblem?.field === "standingGaugeKPa" ? previewProblem.message : undefined)
+                      }
                       hint="Gauge, unit stopped"
                     />
                     <NumberField
@@ -158,7 +200,10 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
                       unit={TEMPERATURE_LABEL[units.temperature]}
                       value={temperature}
                       onValueChange={setTemperature}
-                      error={errors.equalisedTempC ?? (previewProblem?.field === "equalisedTempC" ? previewProblem.message : undefined)}
+                      error={
+                        errors.equalisedTempC ??
+                        (previewProblem?.field === "equalisedTempC" ? previewProblem.message : undefined)
+                      }
                       hint="Condenser air, in the shade"
                     />
                   </div>
@@ -186,7 +231,8 @@ export function StandingPressurePanel({ visitId, refrigerant, isBlend, circuits,
                   {errors.circuit && <p className="text-sm font-medium text-fault">⚠ {errors.circuit}</p>}
                   {formError && <FormAlert>{formError}</FormAlert>}
                   <Button type="submit" size="lg" disabled={create.isPending}>
-                    <Save aria-hidden className="size-5" /> {create.isPending ? "Saving…" : "Save standing-pressure check"}
+                    <Save aria-hidden className="size-5" />{" "}
+                    {create.isPending ? "Saving…" : "Save standing-pressure check"}
                   </Button>
                 </>
               ),

@@ -22,8 +22,17 @@ export const ZEOTROPE_NOTE =
   "Zeotropic blend: the standing pressure can sit anywhere between the dew and bubble pressures, so only a pressure above the bubble pressure shows air; a little air inside the glide can neither be shown nor ruled out.";
 
 /** The judged figures of a standing-pressure check in the user's units: expected pressure and the excess. */
-export function StandingPressureFigures({ result, units, atmosphericKPa }: { result: StandingPressureResult; units: DisplayUnits; atmosphericKPa: number }) {
-  const gauge = (kPa: number) => `${formatNumber(gaugeToDisplay(kPa, units.pressure, atmosphericKPa), PRESSURE_DECIMALS[units.pressure])} ${GAUGE_LABEL[units.pressure]}`;
+export function StandingPressureFigures({
+  result,
+  units,
+  atmosphericKPa,
+}: {
+  result: StandingPressureResult;
+  units: DisplayUnits;
+  atmosphericKPa: number;
+}) {
+  const gauge = (kPa: number) =>
+    `${formatNumber(gaugeToDisplay(kPa, units.pressure, atmosphericKPa), PRESSURE_DECIMALS[units.pressure])} ${GAUGE_LABEL[units.pressure]}`;
   const excess = differenceToDisplay(result.excessK, units.temperature);
   return (
     <dl className="num grid grid-cols-2 gap-x-4 gap-y-1 text-sm">
@@ -52,7 +61,10 @@ export function StandingPressureView({ check, units }: { check: StandingPressure
   const gauge = `${formatNumber(gaugeToDisplay(input.standingGaugeKPa, units.pressure, atmosphere), PRESSURE_DECIMALS[units.pressure])} ${GAUGE_LABEL[units.pressure]}`;
   const temperature = `${formatNumber(temperatureToDisplay(input.equalisedTempC, units.temperature), 1)} ${TEMPERATURE_LABEL[units.temperature]}`;
   return (
-    <article aria-label="Standing-pressure check" className="space-y-2 rounded-card border-2 border-rule bg-surface p-3">
+    <article
+      aria-label="Standing-pressure check"
+      className="space-y-2 rounded-card border-2 border-rule bg-surface p-3"
+    >
       <header className="flex flex-wrap items-center gap-2">
         <h3 className="font-semibold">
           Standing pressure — {input.refrigerant}
@@ -67,7 +79,13 @@ export function StandingPressureView({ check, units }: { check: StandingPressure
       </p>
       <StandingPressureFigures result={result} units={units} atmosphericKPa={atmosphere} />
       <ul>
-        <VerdictLine label="Non-condensables" verdict={result.verdict} word={STANDING_PRESSURE_WORDS[result.verdict]} reason={result.reason} source={result.source} />
+        <VerdictLine
+          label="Non-condensables"
+          verdict={result.verdict}
+          word={STANDING_PRESSURE_WORDS[result.verdict]}
+          reason={result.reason}
+          source={result.source}
+        />
       </ul>
       {result.zeotrope && <p className="text-sm text-muted">{ZEOTROPE_NOTE}</p>}
       {input.note && <p className="text-sm">Note: {input.note}</p>}

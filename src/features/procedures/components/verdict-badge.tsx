@@ -9,10 +9,25 @@ export const VERDICT_TEXT: Record<VerdictLevel, { word: string; icon: LucideIcon
   fail: { word: "Fail", icon: OctagonX, tone: "text-fault border-fault" },
 };
 
-export function VerdictBadge({ verdict, word, className }: { verdict: VerdictLevel; word?: string; className?: string }) {
+export function VerdictBadge({
+  verdict,
+  word,
+  className,
+}: {
+  verdict: VerdictLevel;
+  word?: string;
+  className?: string;
+}) {
   const text = VERDICT_TEXT[verdict];
   return (
-    <span data-verdict={verdict} className={cn("inline-flex shrink-0 items-center gap-1.5 rounded-md border-2 px-2 py-0.5 font-semibold", text.tone, className)}>
+    <span
+      data-verdict={verdict}
+      className={cn(
+        "inline-flex shrink-0 items-center gap-1.5 rounded-md border-2 px-2 py-0.5 font-semibold",
+        text.tone,
+        className,
+      )}
+    >
       <text.icon aria-hidden className="size-4 shrink-0" strokeWidth={2.4} />
       <span>{word ?? text.word}</span>
     </span>
@@ -20,7 +35,21 @@ export function VerdictBadge({ verdict, word, className }: { verdict: VerdictLev
 }
 
 /** One judged check: what it is, the verdict, the figure, the reason and where the limit comes from. */
-export function VerdictLine({ label, verdict, figure, reason, source, word }: { label: string; verdict: VerdictLevel; figure?: string; reason: string; source: string; word?: string }) {
+export function VerdictLine({
+  label,
+  verdict,
+  figure,
+  reason,
+  source,
+  word,
+}: {
+  label: string;
+  verdict: VerdictLevel;
+  figure?: string;
+  reason: string;
+  source: string;
+  word?: string;
+}) {
   return (
     <li className="flex flex-col gap-1 border-t border-rule py-2 first:border-t-0 sm:flex-row sm:items-start sm:gap-3">
       <VerdictBadge verdict={verdict} word={word} className="self-start" />
@@ -36,10 +65,28 @@ export function VerdictLine({ label, verdict, figure, reason, source, word }: { 
 }
 
 /** The headline verdict of a record, large, with its reason and source. */
-export function VerdictPanel({ title, verdict, word, reason, source, testId }: { title: string; verdict: VerdictLevel; word?: string; reason: string; source: string; testId?: string }) {
+export function VerdictPanel({
+  title,
+  verdict,
+  word,
+  reason,
+  source,
+  testId,
+}: {
+  title: string;
+  verdict: VerdictLevel;
+  word?: string;
+  reason: string;
+  source: string;
+  testId?: string;
+}) {
   const text = VERDICT_TEXT[verdict];
   return (
-    <section aria-label={title} aria-live="polite" className={cn("rounded-card border-2 bg-surface p-4", text.tone.split(" ")[1])}>
+    <section
+      aria-label={title}
+      aria-live="polite"
+      className={cn("rounded-card border-2 bg-surface p-4", text.tone.split(" ")[1])}
+    >
       <div className="flex items-start gap-3">
         <text.icon aria-hidden className={cn("mt-0.5 size-8 shrink-0", text.tone.split(" ")[0])} strokeWidth={2.4} />
         <div className="min-w-0">

@@ -9,7 +9,10 @@ import { useState } from "react";
  * @returns the messages still true of the form, and the setter a save calls
  */
 export function useFieldErrors(typed: Readonly<Record<string, unknown>>) {
-  const [last, setLast] = useState<{ errors: Record<string, string>; typed: Record<string, unknown> }>({ errors: {}, typed: {} });
+  const [last, setLast] = useState<{ errors: Record<string, string>; typed: Record<string, unknown> }>({
+    errors: {},
+    typed: {},
+  });
   const errors: Record<string, string> = {};
   for (const [path, message] of Object.entries(last.errors)) {
     const field = path.split(".")[0]!;

@@ -19,11 +19,20 @@ interface KeptSample {
  * so the chart and the verdict move as readings are entered, as the server will judge them.
  * Refused entries are not counted: they are listed with their reason until dealt with.
  */
-export function evacuationsOnDevice(list: EvacuationList | undefined, entries: readonly OutboxEntry[], visitId: string): ShownEvacuation[] {
+export function evacuationsOnDevice(
+  list: EvacuationList | undefined,
+  entries: readonly OutboxEntry[],
+  visitId: string,
+): ShownEvacuation[] {
   const waiting = entries.filter((entry) => entry.visitId === visitId && entry.state === "waiting");
   const samplesFor = (evacuation: { id: string; clientId: string | null }): KeptSample[] => {
-    const paths = new Set([evacuationSamplesPath(visitId, evacuation.id), evacuation.clientId && evacuationSamplesPath(visitId, evacuation.clientId)]);
-    return waiting.filter((entry) => entry.kind === "evacuation-sample" && paths.has(entry.path)).map((entry) => entry.body as unknown as KeptSample);
+    const paths = new Set([
+      evacuationSamplesPath(visitId, evacuation.id),
+      evacuation.clientId && evacuationSamplesPath(visitId, evacuation.clientId),
+    ]);
+    return waiting
+      .filter((entry) => entry.kind === "evacuation-sample" && paths.has(entry.path))
+      .map((entry) => entry.body as unknown as KeptSample);
   };
   const judged = (evacuation: Evacuation, kept: KeptSample[], onDevice: boolean): ShownEvacuation => {
     // A reading the server already holds (sent, not yet cleared from the outbox) counts once.
@@ -31,7 +40,12 @@ export function evacuationsOnDevice(list: EvacuationList | undefined, entries: r
     const added = kept.filter((sample) => !held.has(sample.clientId));
     if (added.length === 0 && !onDevice) return { ...evacuation, onDevice };
     const samples = [...evacuation.samples, ...added].sort((a, b) => a.minutes - b.minutes);
-    const result = evacuationResult(samples, evacuation.targetMicrons, evacuation.isolatedAtMinutes, list?.defaults.limits);
+    const result = evacuationResult(
+      samples,
+      evacuation.targetMicrons,
+      evacuation.isolatedAtMinutes,
+      list?.defaults.limits,
+    );
     return { ...evacuation, samples, result, onDevice };
   };
 

@@ -17,10 +17,17 @@ import { ApiError } from "@/lib/api/api-client.ts";
 import { useProfile, useUpdateProfile } from "@/lib/api/profile.ts";
 import { applyServerErrors } from "@/lib/form-errors.ts";
 
-const TEMPERATURE_LABELS: Record<(typeof TEMPERATURE_UNITS)[number], string> = { C: "°C (Celsius)", F: "°F (Fahrenheit)" };
+const TEMPERATURE_LABELS: Record<(typeof TEMPERATURE_UNITS)[number], string> = {
+  C: "°C (Celsius)",
+  F: "°F (Fahrenheit)",
+};
 const PRESSURE_LABELS: Record<(typeof PRESSURE_UNITS)[number], string> = { kPa: "kPa", psi: "psi", bar: "bar" };
 
-const formValues = (profile: Profile) => ({ name: profile.user.name, preferences: profile.preferences, licenceNumber: profile.licenceNumber ?? "" });
+const formValues = (profile: Profile) => ({
+  name: profile.user.name,
+  preferences: profile.preferences,
+  licenceNumber: profile.licenceNumber ?? "",
+});
 
 export function ProfileForm({ profile }: { profile: Profile }) {
   const update = useUpdateProfile();
@@ -35,7 +42,11 @@ export function ProfileForm({ profile }: { profile: Profile }) {
   const reload = async () => {
     const fetched = await latest.refetch();
     if (fetched.data) form.reset(formValues(fetched.data));
-    setStale((shown) => (shown ? { ...shown, message: "This is your profile as saved now. Make your change again if it still applies." } : null));
+    setStale((shown) =>
+      shown
+        ? { ...shown, message: "This is your profile as saved now. Make your change again if it still applies." }
+        : null,
+    );
   };
 
   const onSubmit = form.handleSubmit(async (values) => {
@@ -54,14 +65,23 @@ export function ProfileForm({ profile }: { profile: Profile }) {
           typed: [
             ["Name", values.name],
             ["Licence number", values.licenceNumber ?? ""],
-            ["Units", `${TEMPERATURE_LABELS[preferences.temperatureUnit]}, ${PRESSURE_LABELS[preferences.pressureUnit]}`],
+            [
+              "Units",
+              `${TEMPERATURE_LABELS[preferences.temperatureUnit]}, ${PRESSURE_LABELS[preferences.pressureUnit]}`,
+            ],
             ["Atmospheric pressure", `${preferences.atmosphericPressureKPa} kPa`],
           ],
         });
         return;
       }
       setFormError(
-        applyServerErrors(error, form.setError, ["name", "licenceNumber", "preferences.temperatureUnit", "preferences.pressureUnit", "preferences.atmosphericPressureKPa"]),
+        applyServerErrors(error, form.setError, [
+          "name",
+          "licenceNumber",
+          "preferences.temperatureUnit",
+          "preferences.pressureUnit",
+          "preferences.atmosphericPressureKPa",
+        ]),
       );
     }
   });
@@ -70,8 +90,21 @@ export function ProfileForm({ profile }: { profile: Profile }) {
     <form onSubmit={onSubmit} noValidate className="max-w-xl space-y-4">
       {saved && <FormAlert tone="good">Settings saved.</FormAlert>}
       {formError && <FormAlert>{formError}</FormAlert>}
-      {stale && <StaleWriteNotice message={stale.message} typed={stale.typed} onReload={() => void reload()} reloading={latest.isFetching} />}
-      <TextField label="Your name" autoComplete="name" hint="Shown on the visits you record and sign." error={errors.name?.message} {...form.register("name")} />
+      {stale && (
+        <StaleWriteNotice
+          message={stale.message}
+          typed={stale.typed}
+          onReload={() => void reload()}
+          reloading={latest.isFetching}
+        />
+      )}
+      <TextField
+        label="Your name"
+        autoComplete="name"
+        hint="Shown on the visits you record and sign."
+        error={errors.name?.message}
+        {...form.register("name")}
+      />
       <TextField
         label="Refrigerant handling licence number (optional)"
         hint="Your licence or certificate number for handling refrigerant; printed beside your entries in the register export."
@@ -81,15 +114,25 @@ export function ProfileForm({ profile }: { profile: Profile }) {
       />
       <fieldset className="space-y-4 rounded-card border-2 border-rule p-4">
         <legend className="px-1 font-semibold">Display units</legend>
-        <p className="text-sm text-muted">Satura stores every reading in °C and kPa; this only changes what screens show.</p>
-        <SelectField label="Temperature" error={errors.preferences?.temperatureUnit?.message} {...form.register("preferences.temperatureUnit")}>
+        <p className="text-sm text-muted">
+          Satura stores every reading in °C and kPa; this only changes what screens show.
+        </p>
+        <SelectField
+          label="Temperature"
+          error={errors.preferences?.temperatureUnit?.message}
+          {...form.register("preferences.temperatureUnit")}
+        >
           {TEMPERATURE_UNITS.map((unit) => (
             <option key={unit} value={unit}>
               {TEMPERATURE_LABELS[unit]}
             </option>
           ))}
         </SelectField>
-        <SelectField label="Pressure" error={errors.preferences?.pressureUnit?.message} {...form.register("preferences.pressureUnit")}>
+        <SelectField
+          label="Pressure"
+          error={errors.preferences?.pressureUnit?.message}
+          {...form.register("preferences.pressureUnit")}
+        >
           {PRESSURE_UNITS.map((unit) => (
             <option key={unit} value={unit}>
               {PRESSURE_LABELS[unit]}

@@ -9,7 +9,10 @@ import { SearchInput } from "@/components/ui/search-input/search-input.tsx";
 
 /** Matches "r32", "32", "R-32", "1234ze" against designations and names. */
 function normalise(text: string): string {
-  return text.toLowerCase().replace(/[\s\-–()]/g, "").replace(/^r(?=\d)/, "");
+  return text
+    .toLowerCase()
+    .replace(/[\s\-–()]/g, "")
+    .replace(/^r(?=\d)/, "");
 }
 
 export function RefrigerantList() {
@@ -18,7 +21,9 @@ export function RefrigerantList() {
   const searchId = useId();
   const refrigerants = REFRIGERANT_CATALOGUE;
   const needle = normalise(deferredQuery);
-  const shown = refrigerants.filter((info) => needle === "" || normalise(info.id).includes(needle) || normalise(info.name).includes(needle));
+  const shown = refrigerants.filter(
+    (info) => needle === "" || normalise(info.id).includes(needle) || normalise(info.name).includes(needle),
+  );
 
   return (
     <div className="space-y-4">

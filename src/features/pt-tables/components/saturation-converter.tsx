@@ -1,5 +1,10 @@
 import { useId, useState } from "react";
-import { PropertyRangeError, pressureToDisplay, saturationPressure, saturationTemperature } from "@shared/engine/index.ts";
+import {
+  PropertyRangeError,
+  pressureToDisplay,
+  saturationPressure,
+  saturationTemperature,
+} from "@shared/engine/index.ts";
 import { NumberInput, parseDecimal } from "@/components/ui/field/number-input.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import {
@@ -37,12 +42,21 @@ function describeError(error: unknown): string {
 }
 
 /** The typed text in the new units, same quantity; text that is not a number is left as typed. */
-function convertEntry(text: string, direction: Direction, from: DisplayUnits, to: DisplayUnits, atmosphericKPa: number): string {
+function convertEntry(
+  text: string,
+  direction: Direction,
+  from: DisplayUnits,
+  to: DisplayUnits,
+  atmosphericKPa: number,
+): string {
   const parsed = parseDecimal(text);
   if (parsed === undefined || parsed === "invalid") return text;
   if (direction === "pressure-to-temperature") {
     const gaugeKPa = gaugeFromDisplay(parsed, from.pressure, atmosphericKPa);
-    return formatNumber(pressureToDisplay(gaugeKPa + atmosphericKPa, to.pressure, "gauge", atmosphericKPa), PRESSURE_DECIMALS[to.pressure]);
+    return formatNumber(
+      pressureToDisplay(gaugeKPa + atmosphericKPa, to.pressure, "gauge", atmosphericKPa),
+      PRESSURE_DECIMALS[to.pressure],
+    );
   }
   return formatNumber(temperatureToDisplay(temperatureFromDisplay(parsed, from.temperature), to.temperature), 1);
 }
@@ -84,7 +98,10 @@ export function SaturationConverter({ refrigerantId, isBlend, units, atmospheric
           answers: points.map(({ point, label, hint }) => ({
             label,
             hint,
-            value: formatNumber(temperatureToDisplay(saturationTemperature(refrigerantId, kPaAbs, point), units.temperature), 1),
+            value: formatNumber(
+              temperatureToDisplay(saturationTemperature(refrigerantId, kPaAbs, point), units.temperature),
+              1,
+            ),
             unit: TEMPERATURE_LABEL[units.temperature],
           })),
         };
@@ -94,9 +111,19 @@ export function SaturationConverter({ refrigerantId, isBlend, units, atmospheric
           kind: "answers",
           answers: points.map(({ point, label, hint }) => ({
             label,
-            hint: point === "dew" && isBlend ? "pressure where vapour starts to condense" : point === "bubble" ? "pressure where liquid starts to boil" : hint,
+            hint:
+              point === "dew" && isBlend
+                ? "pressure where vapour starts to condense"
+                : point === "bubble"
+                  ? "pressure where liquid starts to boil"
+                  : hint,
             value: formatNumber(
-              pressureToDisplay(saturationPressure(refrigerantId, celsius, point), units.pressure, "gauge", atmosphericKPa),
+              pressureToDisplay(
+                saturationPressure(refrigerantId, celsius, point),
+                units.pressure,
+                "gauge",
+                atmosphericKPa,
+              ),
               PRESSURE_DECIMALS[units.pressure],
             ),
             unit: GAUGE_LABEL[units.pressure],
@@ -108,7 +135,8 @@ export function SaturationConverter({ refrigerantId, isBlend, units, atmospheric
     }
   }
 
-  const inputUnit = direction === "pressure-to-temperature" ? GAUGE_LABEL[units.pressure] : TEMPERATURE_LABEL[units.temperature];
+  const inputUnit =
+    direction === "pressure-to-temperature" ? GAUGE_LABEL[units.pressure] : TEMPERATURE_LABEL[units.temperature];
   return (
     <section aria-labelledby={`${inputId}-heading`} className="rounded-card border-2 border-rule bg-surface p-4">
       <h2 id={`${inputId}-heading`} className="text-lg font-semibold">

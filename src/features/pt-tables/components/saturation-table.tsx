@@ -32,7 +32,8 @@ export const SaturationTable = memo(function SaturationTable(props: SaturationTa
   const rows = useMemo(() => saturationRows(refrigerantId, fromC, toC, stepK), [refrigerantId, fromC, toC, stepK]);
   const pressureLabel = scale === "gauge" ? GAUGE_LABEL[units.pressure] : ABSOLUTE_LABEL[units.pressure];
   const decimals = PRESSURE_DECIMALS[units.pressure];
-  const show = (kPaAbs: number) => formatNumber(pressureToDisplay(kPaAbs, units.pressure, scale, atmosphericKPa), decimals);
+  const show = (kPaAbs: number) =>
+    formatNumber(pressureToDisplay(kPaAbs, units.pressure, scale, atmosphericKPa), decimals);
 
   return (
     <table className="num w-full border-collapse text-right text-lg">

@@ -18,7 +18,15 @@ type FormValues = { lineAdjustmentKg: unknown };
  * register's reused + added kg; the technician only says that it was a full weigh-in and
  * enters the line-length adjustment from the maker's table (TRADE.md §6).
  */
-export function ChargingCheck({ visitId, balance, canWrite }: { visitId: string; balance: CircuitBalance; canWrite: boolean }) {
+export function ChargingCheck({
+  visitId,
+  balance,
+  canWrite,
+}: {
+  visitId: string;
+  balance: CircuitBalance;
+  canWrite: boolean;
+}) {
   const setCharging = useSetCharging();
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<FormValues>({
@@ -28,7 +36,11 @@ export function ChargingCheck({ visitId, balance, canWrite }: { visitId: string;
   const submit = form.handleSubmit(async (values) => {
     setFormError(null);
     try {
-      await setCharging.mutateAsync({ visitId, circuit: balance.circuit, value: { lineAdjustmentKg: values.lineAdjustmentKg as number } });
+      await setCharging.mutateAsync({
+        visitId,
+        circuit: balance.circuit,
+        value: { lineAdjustmentKg: values.lineAdjustmentKg as number },
+      });
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, ["lineAdjustmentKg"]));
     }
@@ -40,12 +52,16 @@ export function ChargingCheck({ visitId, balance, canWrite }: { visitId: string;
         <>
           <p>
             Weighed in <span className="num font-semibold">{formatKg(charging.weighedInKg)}</span> against{" "}
-            <span className="num">{formatKg(charging.check.expectedKg)}</span> expected (nameplate {formatKg(balance.nameplateKg)}
-            {charging.lineAdjustmentKg !== 0 && <>, line adjustment {formatSignedKg(charging.lineAdjustmentKg)}</>}):{" "}
-            <span className="num font-semibold">{formatSignedKg(charging.check.differenceKg)}</span>
+            <span className="num">{formatKg(charging.check.expectedKg)}</span> expected (nameplate{" "}
+            {formatKg(balance.nameplateKg)}
+            {charging.lineAdjustmentKg !== 0 && (
+              <>, line adjustment {formatSignedKg(charging.lineAdjustmentKg)}</>
+            )}): <span className="num font-semibold">{formatSignedKg(charging.check.differenceKg)}</span>
           </p>
           <VerdictLine result={charging.check} testId={`charging-verdict-${balance.circuit}`} />
-          <p className="text-sm text-muted">Then confirm the charge by subcooling (TXV/EEV) or superheat (fixed orifice) once the readings settle.</p>
+          <p className="text-sm text-muted">
+            Then confirm the charge by subcooling (TXV/EEV) or superheat (fixed orifice) once the readings settle.
+          </p>
         </>
       ) : (
         <p className="text-muted">
@@ -58,7 +74,8 @@ export function ChargingCheck({ visitId, balance, canWrite }: { visitId: string;
         <form onSubmit={submit} noValidate className="space-y-2" aria-label={`Weigh-in of circuit ${balance.circuit}`}>
           {formError && <FormAlert>{formError}</FormAlert>}
           <div className="max-w-xs">
-            <NumberField unit="kg"
+            <NumberField
+              unit="kg"
               label="Line-length adjustment"
               registration={form.register("lineAdjustmentKg", { setValueAs: typedNumber })}
               error={form.formState.errors.lineAdjustmentKg?.message}

@@ -13,15 +13,22 @@ export function CylinderFillBar({ cylinder, compact = false }: { cylinder: Cylin
   return (
     <div className="space-y-1" data-testid={`cylinder-fill-${cylinder.label}`}>
       <p className="num text-sm">
-        {formatKg(cylinder.contentsKg)} {limit !== null && <>of {formatKg(limit)} limit ({Math.round((cylinder.contentsKg / limit) * 100)} %)</>} · gross{" "}
-        {formatKg(cylinder.grossKg)}
+        {formatKg(cylinder.contentsKg)}{" "}
+        {limit !== null && (
+          <>
+            of {formatKg(limit)} limit ({Math.round((cylinder.contentsKg / limit) * 100)} %)
+          </>
+        )}{" "}
+        · gross {formatKg(cylinder.grossKg)}
       </p>
       {limit !== null && (
         <div className="h-3 overflow-hidden rounded-full border-2 border-rule bg-sunken" aria-hidden>
           <div className={cn("h-full", tone)} style={{ width: `${share * 100}%` }} />
         </div>
       )}
-      {fill.check && (!compact || fill.check.verdict !== "pass") && <VerdictLine result={fill.check} showSource={!compact} />}
+      {fill.check && (!compact || fill.check.verdict !== "pass") && (
+        <VerdictLine result={fill.check} showSource={!compact} />
+      )}
       {fill.note && !compact && <p className="text-sm text-muted">{fill.note}</p>}
     </div>
   );

@@ -9,7 +9,11 @@ export function CylinderList({ cylinders, canWrite }: { cylinders: readonly Cyli
   return (
     <ul aria-label="Cylinders" className="grid gap-3 md:grid-cols-2">
       {cylinders.map((cylinder) => (
-        <li key={cylinder.id} className="space-y-2 rounded-card border-2 border-rule bg-surface p-4" aria-label={cylinder.label}>
+        <li
+          key={cylinder.id}
+          className="space-y-2 rounded-card border-2 border-rule bg-surface p-4"
+          aria-label={cylinder.label}
+        >
           <div className="flex flex-wrap items-baseline justify-between gap-2">
             <h3 className="text-lg font-semibold">{cylinder.label}</h3>
             <p className="text-sm font-medium">

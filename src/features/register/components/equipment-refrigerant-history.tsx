@@ -13,7 +13,12 @@ import { MovementRecord } from "./movement-record.tsx";
 export function EquipmentRefrigerantHistory({ equipmentId }: { equipmentId: string }) {
   const history = useEquipmentRefrigerant(equipmentId);
   if (history.isPending) return <p aria-busy="true">Reading the register…</p>;
-  if (history.isError) return <p role="alert" className="font-medium text-fault">⚠ The register did not load: {history.error.message}</p>;
+  if (history.isError)
+    return (
+      <p role="alert" className="font-medium text-fault">
+        ⚠ The register did not load: {history.error.message}
+      </p>
+    );
   const { movements, hiddenMovements, leakRate, topUps, nameplateKg, refrigerant } = history.data;
   const newestFirst = [...movements].reverse();
   return (
@@ -23,24 +28,33 @@ export function EquipmentRefrigerantHistory({ equipmentId }: { equipmentId: stri
         {leakRate ? (
           <>
             <p className="num text-2xl">
-              {formatNumber(leakRate.kgPerYear, 2)} kg/yr · {formatNumber(leakRate.percentOfChargePerYear, 1)} % of the {formatKg(nameplateKg)} charge per year
+              {formatNumber(leakRate.kgPerYear, 2)} kg/yr · {formatNumber(leakRate.percentOfChargePerYear, 1)} % of the{" "}
+              {formatKg(nameplateKg)} charge per year
             </p>
             <p className="text-sm text-muted">
-              From {topUps.length} top-ups over {Math.round(leakRate.periodDays)} days (the first opens the period). Leak-repair rules compare this with triggers such as 10 % for comfort
-              cooling and 20 % for commercial refrigeration (US 40 CFR 82.157).
+              From {topUps.length} top-ups over {Math.round(leakRate.periodDays)} days (the first opens the period).
+              Leak-repair rules compare this with triggers such as 10 % for comfort cooling and 20 % for commercial
+              refrigeration (US 40 CFR 82.157).
             </p>
           </>
         ) : (
           <p className="text-muted">
-            {topUps.length === 0 ? "No refrigerant has had to be put back into this unit." : "One top-up so far: a rate needs two, at least a day apart."}
+            {topUps.length === 0
+              ? "No refrigerant has had to be put back into this unit."
+              : "One top-up so far: a rate needs two, at least a day apart."}
           </p>
         )}
       </div>
       <HiddenLinesNote count={hiddenMovements} />
       {newestFirst.length === 0 ? (
-        hiddenMovements === 0 && <p className="text-muted">No {refrigerant} recovered, reused or added on this unit yet.</p>
+        hiddenMovements === 0 && (
+          <p className="text-muted">No {refrigerant} recovered, reused or added on this unit yet.</p>
+        )
       ) : (
-        <ul aria-label="Refrigerant history" className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface">
+        <ul
+          aria-label="Refrigerant history"
+          className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface"
+        >
           {newestFirst.map((movement) => (
             <li key={movement.id} className="p-3">
               <MovementRecord
@@ -50,7 +64,10 @@ export function EquipmentRefrigerantHistory({ equipmentId }: { equipmentId: stri
                     <>
                       {" "}
                       ·{" "}
-                      <Link to={paths.visits.detail.getHref(movement.visitId)} className="text-accent underline underline-offset-4">
+                      <Link
+                        to={paths.visits.detail.getHref(movement.visitId)}
+                        className="text-accent underline underline-offset-4"
+                      >
                         open the visit
                       </Link>
                     </>

@@ -64,7 +64,9 @@ export function MovementForm({
   const errors = form.formState.errors;
   const [kind, cylinderId, typedKg] = useWatch({ control: form.control, name: ["kind", "cylinderId", "kg"] });
   const rule = MOVEMENT_CYLINDER_RULES[kind];
-  const choices = cylinders.filter((cylinder) => cylinder.refrigerant === refrigerant && rule.cylinderKinds.includes(cylinder.kind));
+  const choices = cylinders.filter(
+    (cylinder) => cylinder.refrigerant === refrigerant && rule.cylinderKinds.includes(cylinder.kind),
+  );
   const chosen = choices.find((cylinder) => cylinder.id === cylinderId);
   // A cylinder picked for another kind of movement no longer fits: clear it rather than send it.
   useEffect(() => {
@@ -78,7 +80,11 @@ export function MovementForm({
     const after = chosen.contentsKg + (rule.intoCylinder ? validMass : -validMass);
     const limit = chosen.kind === "recovery" ? chosen.fill.maxContentsKg : null;
     preview = (
-      <div className="space-y-1 rounded-card border-2 border-rule bg-sunken p-3" aria-live="polite" data-testid="cylinder-preview">
+      <div
+        className="space-y-1 rounded-card border-2 border-rule bg-sunken p-3"
+        aria-live="polite"
+        data-testid="cylinder-preview"
+      >
         <p>
           After this, {chosen.label} will hold <span className="num font-semibold">{formatKg(Math.max(0, after))}</span>
           {limit !== null && (
@@ -92,13 +98,21 @@ export function MovementForm({
         {rule.intoCylinder && limit !== null && after > limit ? (
           // The register refuses a movement past the limit, so say that, not a verdict on a fill that will not happen.
           <p className="font-medium text-fault" data-testid="overfill-refused">
-            ⚠ Will be refused: that is past the 80 % fill limit (room for <span className="num">{formatKg(Math.max(0, limit - chosen.contentsKg))}</span>). Stop
-            at the limit and switch to another recovery cylinder; log each cylinder&apos;s share.
+            ⚠ Will be refused: that is past the 80 % fill limit (room for{" "}
+            <span className="num">{formatKg(Math.max(0, limit - chosen.contentsKg))}</span>). Stop at the limit and
+            switch to another recovery cylinder; log each cylinder&apos;s share.
           </p>
         ) : (
-          rule.intoCylinder && limit !== null && <VerdictLine result={judgeCylinderFill({ contentsKg: after, maxContentsKg: limit })} showSource={false} />
+          rule.intoCylinder &&
+          limit !== null && (
+            <VerdictLine result={judgeCylinderFill({ contentsKg: after, maxContentsKg: limit })} showSource={false} />
+          )
         )}
-        {!rule.intoCylinder && after < 0 && <p className="font-medium text-fault">⚠ More than the register says is in the cylinder ({formatKg(chosen.contentsKg)}).</p>}
+        {!rule.intoCylinder && after < 0 && (
+          <p className="font-medium text-fault">
+            ⚠ More than the register says is in the cylinder ({formatKg(chosen.contentsKg)}).
+          </p>
+        )}
       </div>
     );
   }
@@ -121,10 +135,14 @@ export function MovementForm({
       entryId.release();
       form.reset({ kind: values.kind, circuit: values.circuit, cylinderId: values.cylinderId, kg: "", note: "" });
       if (sent.outcome === "kept") {
-        setSaved(`${what} kept on this device (${formatTime(body.at)}); it goes in the register when the signal returns.`);
+        setSaved(
+          `${what} kept on this device (${formatTime(body.at)}); it goes in the register when the signal returns.`,
+        );
       } else {
         const { movement, cylinder } = sent.stored;
-        setSaved(`${MOVEMENT_KIND_LABELS[movement.kind]}: ${formatKg(movement.kg)} logged${cylinder ? `; ${cylinder.label} now holds ${formatKg(cylinder.contentsKg)}` : ""}.`);
+        setSaved(
+          `${MOVEMENT_KIND_LABELS[movement.kind]}: ${formatKg(movement.kg)} logged${cylinder ? `; ${cylinder.label} now holds ${formatKg(cylinder.contentsKg)}` : ""}.`,
+        );
       }
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, ["kind", "kg", "cylinderId", "circuit", "note"]));
@@ -144,7 +162,11 @@ export function MovementForm({
           ))}
         </SelectField>
         {circuits.length > 1 ? (
-          <SelectField label="Circuit" error={errors.circuit?.message} {...form.register("circuit", { valueAsNumber: true })}>
+          <SelectField
+            label="Circuit"
+            error={errors.circuit?.message}
+            {...form.register("circuit", { valueAsNumber: true })}
+          >
             {circuits.map((circuit) => (
               <option key={circuit.number} value={circuit.number}>
                 Circuit {circuit.number} ({formatKg(circuit.factoryChargeKg)} nameplate)
@@ -154,12 +176,25 @@ export function MovementForm({
         ) : (
           <input type="hidden" {...form.register("circuit", { valueAsNumber: true })} />
         )}
-        <NumberField unit="kg" label="Mass" placeholder="0.00" error={errors.kg?.message} registration={form.register("kg", { setValueAs: typedNumber })} hint="Weighed on the refrigerant scale." />
+        <NumberField
+          unit="kg"
+          label="Mass"
+          placeholder="0.00"
+          error={errors.kg?.message}
+          registration={form.register("kg", { setValueAs: typedNumber })}
+          hint="Weighed on the refrigerant scale."
+        />
         <SelectField
           label={rule.cylinderRequired ? "Cylinder" : "Cylinder (if one was used)"}
           error={errors.cylinderId?.message}
-          hint={choices.length === 0 ? `No ${rule.cylinderKinds.map((value) => CYLINDER_KIND_LABELS[value].toLowerCase()).join(" or ")} ${refrigerant} cylinder yet: add one on the Cylinders page.` : `Only ${refrigerant} cylinders of the right kind are listed.`}
-          {...form.register("cylinderId", { setValueAs: (value: unknown) => (value === "" || value == null ? null : value) })}
+          hint={
+            choices.length === 0
+              ? `No ${rule.cylinderKinds.map((value) => CYLINDER_KIND_LABELS[value].toLowerCase()).join(" or ")} ${refrigerant} cylinder yet: add one on the Cylinders page.`
+              : `Only ${refrigerant} cylinders of the right kind are listed.`
+          }
+          {...form.register("cylinderId", {
+            setValueAs: (value: unknown) => (value === "" || value == null ? null : value),
+          })}
         >
           <option value="">{rule.cylinderRequired ? "Choose a cylinder" : "No cylinder (unit's own receiver)"}</option>
           {choices.map((cylinder) => (
@@ -170,7 +205,12 @@ export function MovementForm({
         </SelectField>
       </div>
       {preview}
-      <TextField label="Note (optional)" placeholder="e.g. recovered for compressor change" error={errors.note?.message} {...form.register("note")} />
+      <TextField
+        label="Note (optional)"
+        placeholder="e.g. recovered for compressor change"
+        error={errors.note?.message}
+        {...form.register("note")}
+      />
       <Button type="submit" disabled={createMovement.isPending}>
         {createMovement.isPending ? "Saving…" : "Log movement"}
       </Button>

@@ -31,8 +31,17 @@ export function ReclaimForm({ cylinder }: { cylinder: Cylinder }) {
     <form onSubmit={submit} noValidate className="space-y-2" aria-label={`Send ${cylinder.label} for reclaim`}>
       {formError && <FormAlert>{formError}</FormAlert>}
       <div className="grid gap-2 sm:grid-cols-2">
-        <NumberField unit="kg" label="Mass sent for reclaim" registration={form.register("kg", { setValueAs: typedNumber })} error={form.formState.errors.kg?.message} />
-        <TextField label="Reclaimer or docket (optional)" error={form.formState.errors.note?.message} {...form.register("note")} />
+        <NumberField
+          unit="kg"
+          label="Mass sent for reclaim"
+          registration={form.register("kg", { setValueAs: typedNumber })}
+          error={form.formState.errors.kg?.message}
+        />
+        <TextField
+          label="Reclaimer or docket (optional)"
+          error={form.formState.errors.note?.message}
+          {...form.register("note")}
+        />
       </div>
       <Button type="submit" variant="secondary" disabled={send.isPending}>
         Send for reclaim

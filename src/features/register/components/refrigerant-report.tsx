@@ -22,8 +22,14 @@ export function RefrigerantReport({ visitId }: { visitId: string }) {
         Refrigerant
       </h2>
       {register.isPending && <p aria-busy="true">Reading the register…</p>}
-      {register.isError && <p role="alert" className="text-fault">⚠ The register did not load: {register.error.message}</p>}
-      {register.data && movements.length + register.data.hiddenMovements === 0 && <p className="text-muted">No refrigerant recovered or added.</p>}
+      {register.isError && (
+        <p role="alert" className="text-fault">
+          ⚠ The register did not load: {register.error.message}
+        </p>
+      )}
+      {register.data && movements.length + register.data.hiddenMovements === 0 && (
+        <p className="text-muted">No refrigerant recovered or added.</p>
+      )}
       {register.data && movements.length + register.data.hiddenMovements > 0 && (
         <>
           <table className="num w-full text-left text-sm">
@@ -46,8 +52,12 @@ export function RefrigerantReport({ visitId }: { visitId: string }) {
                   <td className="py-1 pr-2">{formatKg(circuit.recoveredKg)}</td>
                   <td className="py-1 pr-2">{formatKg(circuit.reusedKg)}</td>
                   <td className="py-1 pr-2">{formatKg(circuit.addedKg)}</td>
-                  <td className="py-1 pr-2">{circuit.recoveredOnVisit ? formatKg(circuit.balance.shortfallKg) : "—"}</td>
-                  <td className="py-1">{circuit.recoveredOnVisit ? formatSignedKg(circuit.balance.differenceFromNameplateKg) : "—"}</td>
+                  <td className="py-1 pr-2">
+                    {circuit.recoveredOnVisit ? formatKg(circuit.balance.shortfallKg) : "—"}
+                  </td>
+                  <td className="py-1">
+                    {circuit.recoveredOnVisit ? formatSignedKg(circuit.balance.differenceFromNameplateKg) : "—"}
+                  </td>
                 </tr>
               ))}
             </tbody>
@@ -60,12 +70,14 @@ export function RefrigerantReport({ visitId }: { visitId: string }) {
             const inside = scaleKg >= estimate.lowKg && scaleKg <= estimate.highKg;
             return (
               <p key={`estimate-${circuit.circuit}`} className="text-sm" data-testid="estimate-against-scale">
-                Circuit {circuit.circuit}: the readings estimated <span className="num">{formatSignedKg(estimate.kg)}</span> (
+                Circuit {circuit.circuit}: the readings estimated{" "}
+                <span className="num">{formatSignedKg(estimate.kg)}</span> (
                 <span className="num">
                   {formatSignedKg(estimate.lowKg)} to {formatSignedKg(estimate.highKg)}
                 </span>
-                , {estimate.basis === "unit-reference" ? "against the circuit's reference point" : "generic coefficients"}); the scale found{" "}
-                <span className="num">{formatSignedKg(scaleKg)}</span> against nameplate —{" "}
+                ,{" "}
+                {estimate.basis === "unit-reference" ? "against the circuit's reference point" : "generic coefficients"}
+                ); the scale found <span className="num">{formatSignedKg(scaleKg)}</span> against nameplate —{" "}
                 {inside ? "inside the estimate's range" : <strong>outside the estimate's range</strong>}.
               </p>
             );
@@ -78,12 +90,16 @@ export function RefrigerantReport({ visitId }: { visitId: string }) {
                 <VerdictLine result={circuit.charging!.check} />
               </div>
             ))}
-          {register.data.liquidChargingNote && <p className="text-sm">{register.data.refrigerant} is a zeotropic blend: charged as liquid.</p>}
+          {register.data.liquidChargingNote && (
+            <p className="text-sm">{register.data.refrigerant} is a zeotropic blend: charged as liquid.</p>
+          )}
           <ul className="space-y-0.5 text-sm">
             {movements.map((movement) => (
               <li key={movement.id}>
-                <span className="num text-muted">{formatDateTime(movement.at)}</span> — {MOVEMENT_KIND_LABELS[movement.kind]}
-                {movement.circuit !== null && ` (circuit ${movement.circuit})`}: <span className="num">{formatKg(movement.kg)}</span>
+                <span className="num text-muted">{formatDateTime(movement.at)}</span> —{" "}
+                {MOVEMENT_KIND_LABELS[movement.kind]}
+                {movement.circuit !== null && ` (circuit ${movement.circuit})`}:{" "}
+                <span className="num">{formatKg(movement.kg)}</span>
                 {movement.cylinder && ` · cylinder ${movement.cylinder.label}`}
                 {movement.technician && ` · ${movement.technician.name}`}
               </li>
@@ -92,9 +108,10 @@ export function RefrigerantReport({ visitId }: { visitId: string }) {
           <HiddenLinesNote count={register.data.hiddenMovements} />
         </>
       )}
-      {register.data && (movements.length + register.data.hiddenMovements > 0 || register.data.runLogCheck.unlinked.length > 0) && (
-        <RunLogCheck check={register.data.runLogCheck} />
-      )}
+      {register.data &&
+        (movements.length + register.data.hiddenMovements > 0 || register.data.runLogCheck.unlinked.length > 0) && (
+          <RunLogCheck check={register.data.runLogCheck} />
+        )}
     </section>
   );
 }

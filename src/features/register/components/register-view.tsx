@@ -32,7 +32,15 @@ export function registerQuery(filters: RegisterFilters): RegisterQuery {
  * lines a page at a time (the server pages them: a company keeps years of lines), and the CSV
  * export of every line of the period and technician on screen.
  */
-export function RegisterView({ filters, onChange, mayChooseTechnician }: { filters: RegisterFilters; onChange: (next: RegisterFilters) => void; mayChooseTechnician: boolean }) {
+export function RegisterView({
+  filters,
+  onChange,
+  mayChooseTechnician,
+}: {
+  filters: RegisterFilters;
+  onChange: (next: RegisterFilters) => void;
+  mayChooseTechnician: boolean;
+}) {
   const query = registerQuery(filters);
   // Latest first on screen, where the last job's entries are looked for; the export reads oldest first.
   const [dir, setDir] = useState<SortDirection>("desc");
@@ -44,8 +52,17 @@ export function RegisterView({ filters, onChange, mayChooseTechnician }: { filte
 
   return (
     <div className="space-y-4">
-      <form className="grid gap-3 sm:grid-cols-3" aria-label="Register filters" onSubmit={(event) => event.preventDefault()}>
-        <TextField label="From" type="date" value={filters.from} onChange={(event) => onChange({ ...filters, from: event.target.value })} />
+      <form
+        className="grid gap-3 sm:grid-cols-3"
+        aria-label="Register filters"
+        onSubmit={(event) => event.preventDefault()}
+      >
+        <TextField
+          label="From"
+          type="date"
+          value={filters.from}
+          onChange={(event) => onChange({ ...filters, from: event.target.value })}
+        />
         <TextField
           label="To (inclusive)"
           type="date"
@@ -54,7 +71,11 @@ export function RegisterView({ filters, onChange, mayChooseTechnician }: { filte
           onChange={(event) => onChange({ ...filters, to: event.target.value })}
         />
         {mayChooseTechnician ? (
-          <SelectField label="Technician" value={filters.technicianId} onChange={(event) => onChange({ ...filters, technicianId: event.target.value })}>
+          <SelectField
+            label="Technician"
+            value={filters.technicianId}
+            onChange={(event) => onChange({ ...filters, technicianId: event.target.value })}
+          >
             <option value="">Everyone</option>
             {(members.data ?? []).map((member) => (
               <option key={member.id} value={member.id}>
@@ -63,11 +84,18 @@ export function RegisterView({ filters, onChange, mayChooseTechnician }: { filte
             ))}
           </SelectField>
         ) : (
-          <p className="self-end text-sm text-muted">Technicians see and export their own records; owners and seniors keep the company's.</p>
+          <p className="self-end text-sm text-muted">
+            Technicians see and export their own records; owners and seniors keep the company's.
+          </p>
         )}
       </form>
 
-      <a href={backwards ? undefined : registerExportHref(query)} aria-disabled={backwards || undefined} className={buttonVariants({ variant: "primary" })} download>
+      <a
+        href={backwards ? undefined : registerExportHref(query)}
+        aria-disabled={backwards || undefined}
+        className={buttonVariants({ variant: "primary" })}
+        download
+      >
         <Download aria-hidden className="size-5" /> Export CSV
       </a>
 
@@ -88,7 +116,10 @@ export function RegisterView({ filters, onChange, mayChooseTechnician }: { filte
             ) : (
               <dl className="num grid gap-x-6 gap-y-1 sm:grid-cols-2">
                 {register.data.totals.map((total) => (
-                  <div key={`${total.refrigerant}-${total.kind}`} className="flex justify-between gap-3 border-b border-rule py-1">
+                  <div
+                    key={`${total.refrigerant}-${total.kind}`}
+                    className="flex justify-between gap-3 border-b border-rule py-1"
+                  >
                     <dt className="font-sans">
                       {total.refrigerant} · {MOVEMENT_KIND_LABELS[total.kind].toLowerCase()}
                     </dt>
@@ -100,9 +131,7 @@ export function RegisterView({ filters, onChange, mayChooseTechnician }: { filte
           </section>
           {register.data.movements.length > 0 && (
             <div className="flex flex-wrap items-end justify-between gap-3">
-              <h2 className="text-xl font-semibold">
-                Entries
-              </h2>
+              <h2 className="text-xl font-semibold">Entries</h2>
               <SelectField label="Order" value={dir} onChange={(event) => setDir(event.target.value as SortDirection)}>
                 <option value="desc">Latest first</option>
                 <option value="asc">Oldest first</option>
@@ -110,7 +139,10 @@ export function RegisterView({ filters, onChange, mayChooseTechnician }: { filte
             </div>
           )}
           {register.data.movements.length > 0 && (
-            <ul aria-label="Register entries" className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface">
+            <ul
+              aria-label="Register entries"
+              className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface"
+            >
               {register.data.movements.map((movement) => (
                 <li key={movement.id} className="grid gap-1 p-3 md:grid-cols-[11rem_1fr_8rem]">
                   <p className="num text-sm text-muted">{formatDateTime(movement.at)}</p>

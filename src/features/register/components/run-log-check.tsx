@@ -18,17 +18,20 @@ export function RunLogCheck({ check }: { check: RunLogChargeCheck }) {
           <p className="flex items-start gap-2">
             <CheckCircle2 aria-hidden className="mt-0.5 size-4 shrink-0 text-good" />
             <span>
-              Run log and register agree: <span className="num font-semibold">{formatKg(check.registerInKg)}</span> into the system,{" "}
-              <span className="num font-semibold">{formatKg(check.registerOutKg)}</span> out of it. Each charge entry is one register line.
+              Run log and register agree: <span className="num font-semibold">{formatKg(check.registerInKg)}</span> into
+              the system, <span className="num font-semibold">{formatKg(check.registerOutKg)}</span> out of it. Each
+              charge entry is one register line.
             </span>
           </p>
         ) : (
           <p role="alert" className="flex items-start gap-2 font-semibold text-fault">
             <TriangleAlert aria-hidden className="mt-0.5 size-4 shrink-0" />
             <span>
-              Run log and register differ: the run log shows <span className="num">{formatKg(check.runLogInKg)}</span> in and{" "}
-              <span className="num">{formatKg(check.runLogOutKg)}</span> out, the register <span className="num">{formatKg(check.registerInKg)}</span> in and{" "}
-              <span className="num">{formatKg(check.registerOutKg)}</span> out. The register's figures are used here; ask the office to check the records.
+              Run log and register differ: the run log shows <span className="num">{formatKg(check.runLogInKg)}</span>{" "}
+              in and <span className="num">{formatKg(check.runLogOutKg)}</span> out, the register{" "}
+              <span className="num">{formatKg(check.registerInKg)}</span> in and{" "}
+              <span className="num">{formatKg(check.registerOutKg)}</span> out. The register's figures are used here;
+              ask the office to check the records.
             </span>
           </p>
         ))}
@@ -37,13 +40,17 @@ export function RunLogCheck({ check }: { check: RunLogChargeCheck }) {
           <TriangleAlert aria-hidden className="mt-0.5 size-4 shrink-0 text-caution" />
           <div>
             <p>
-              {check.unlinked.length === 1 ? "One run-log entry was" : `${check.unlinked.length} run-log entries were`} logged without a register line (before the two were
-              linked). {check.unlinked.length === 1 ? "It is" : "They are"} not counted: the figures above come from the register.
+              {check.unlinked.length === 1 ? "One run-log entry was" : `${check.unlinked.length} run-log entries were`}{" "}
+              logged without a register line (before the two were linked).{" "}
+              {check.unlinked.length === 1 ? "It is" : "They are"} not counted: the figures above come from the
+              register.
             </p>
             <ul className="list-disc pl-5">
               {check.unlinked.map((entry) => (
                 <li key={entry.id}>
-                  <span className="num">{formatDateTime(entry.at)}</span> — <span className="num">{formatKg(entry.amountKg)}</span> {entry.kind === "charge-added" ? "added" : "removed"}
+                  <span className="num">{formatDateTime(entry.at)}</span> —{" "}
+                  <span className="num">{formatKg(entry.amountKg)}</span>{" "}
+                  {entry.kind === "charge-added" ? "added" : "removed"}
                   {entry.circuit !== null && `, circuit ${entry.circuit}`}
                 </li>
               ))}

@@ -7,7 +7,15 @@ const WORDS: Record<Verdict["verdict"], string> = { pass: "Pass", warn: "Warning
 const TONES: Record<Verdict["verdict"], string> = { pass: "text-good", warn: "text-caution", fail: "text-fault" };
 
 /** A judged check as an icon, a word and its reason; colour is never the only signal. */
-export function VerdictLine({ result, showSource = true, testId }: { result: Verdict; showSource?: boolean; testId?: string }) {
+export function VerdictLine({
+  result,
+  showSource = true,
+  testId,
+}: {
+  result: Verdict;
+  showSource?: boolean;
+  testId?: string;
+}) {
   const Icon = ICONS[result.verdict];
   return (
     <div className="space-y-0.5" data-testid={testId}>

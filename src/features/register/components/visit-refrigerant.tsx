@@ -16,11 +16,27 @@ import { RunLogCheck } from "./run-log-check.tsx";
 import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
 import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 
-function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitBalance; visitId: string; canWrite: boolean; single: boolean }) {
+function BalanceCard({
+  balance,
+  visitId,
+  canWrite,
+  single,
+}: {
+  balance: CircuitBalance;
+  visitId: string;
+  canWrite: boolean;
+  single: boolean;
+}) {
   const { shortfallKg, finalChargeKg, differenceFromNameplateKg } = balance.balance;
   return (
-    <section aria-label={`Circuit ${balance.circuit} balance`} className="space-y-3 rounded-card border-2 border-rule bg-surface p-4" data-testid={`balance-${balance.circuit}`}>
-      <h3 className="font-semibold">{single ? "Balance against the nameplate" : `Circuit ${balance.circuit}: balance against the nameplate`}</h3>
+    <section
+      aria-label={`Circuit ${balance.circuit} balance`}
+      className="space-y-3 rounded-card border-2 border-rule bg-surface p-4"
+      data-testid={`balance-${balance.circuit}`}
+    >
+      <h3 className="font-semibold">
+        {single ? "Balance against the nameplate" : `Circuit ${balance.circuit}: balance against the nameplate`}
+      </h3>
       <dl className="grid gap-x-6 gap-y-1 sm:grid-cols-2">
         {(
           [
@@ -47,7 +63,8 @@ function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitB
                 : "The recovered mass matches the nameplate charge."}
           </p>
           <p>
-            Charge now: <span className="num font-semibold">{formatKg(finalChargeKg)}</span> (reused + added), {formatSignedKg(differenceFromNameplateKg)} against the nameplate.
+            Charge now: <span className="num font-semibold">{formatKg(finalChargeKg)}</span> (reused + added),{" "}
+            {formatSignedKg(differenceFromNameplateKg)} against the nameplate.
           </p>
         </div>
       ) : (
@@ -60,18 +77,37 @@ function BalanceCard({ balance, visitId, canWrite, single }: { balance: CircuitB
 }
 
 /** The visit's movements; a voided one stays, struck through with its reason, and counts in no balance. */
-function MovementList({ visitId, movements, hidden, canWrite }: { visitId: string; movements: readonly Movement[]; hidden: number; canWrite: boolean }) {
-  if (movements.length === 0 && hidden === 0) return <p className="text-muted">No refrigerant logged on this visit yet.</p>;
+function MovementList({
+  visitId,
+  movements,
+  hidden,
+  canWrite,
+}: {
+  visitId: string;
+  movements: readonly Movement[];
+  hidden: number;
+  canWrite: boolean;
+}) {
+  if (movements.length === 0 && hidden === 0)
+    return <p className="text-muted">No refrigerant logged on this visit yet.</p>;
   if (movements.length === 0) return <HiddenLinesNote count={hidden} />;
   return (
-    <ul aria-label="Refrigerant logged on this visit" className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface">
+    <ul
+      aria-label="Refrigerant logged on this visit"
+      className="divide-y-2 divide-rule overflow-hidden rounded-card border-2 border-rule bg-surface"
+    >
       {movements.map((movement) => {
         const what = `${formatKg(movement.kg)} ${MOVEMENT_KIND_LABELS[movement.kind].toLowerCase()}`;
         return (
           <li key={movement.id} className="space-y-1 p-3">
             <MovementRecord movement={movement} />
             {canWrite && !movement.voided && (
-              <VisitVoidAction visitId={visitId} kind="movement" recordId={movement.id} what={`the movement “${what}” and its run-log entry`} />
+              <VisitVoidAction
+                visitId={visitId}
+                kind="movement"
+                recordId={movement.id}
+                what={`the movement “${what}” and its run-log entry`}
+              />
             )}
           </li>
         );
@@ -81,13 +117,28 @@ function MovementList({ visitId, movements, hidden, canWrite }: { visitId: strin
 }
 
 /** The visit's refrigerant: what was recovered, reused and added, the balance, the cylinders, the charging check. */
-export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId: string; unit: Equipment; circuit: number; canWrite: boolean }) {
+export function VisitRefrigerant({
+  visitId,
+  unit,
+  circuit,
+  canWrite,
+}: {
+  visitId: string;
+  unit: Equipment;
+  circuit: number;
+  canWrite: boolean;
+}) {
   const register = useVisitRefrigerant(visitId);
   const cylinders = useCylinders({ refrigerant: unit.refrigerant });
   const onDevice = useOutboxEntries();
 
   if (register.isPending) return <p aria-busy="true">Reading the register…</p>;
-  if (register.isError) return <p role="alert" className="font-medium text-fault">⚠ The register did not load: {register.error.message}</p>;
+  if (register.isError)
+    return (
+      <p role="alert" className="font-medium text-fault">
+        ⚠ The register did not load: {register.error.message}
+      </p>
+    );
   const data = register.data;
   const recoveryCylinders = (cylinders.data ?? []).filter((cylinder) => cylinder.kind === "recovery");
   const filling = recoveryCylinders.filter((cylinder) => cylinder.fill.check && cylinder.fill.check.verdict !== "pass");
@@ -95,19 +146,31 @@ export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId
   return (
     <div className="space-y-4">
       {data.liquidChargingNote && (
-        <div className="flex gap-3 rounded-card border-2 border-accent bg-surface p-4" data-testid="liquid-charging-note">
+        <div
+          className="flex gap-3 rounded-card border-2 border-accent bg-surface p-4"
+          data-testid="liquid-charging-note"
+        >
           <Droplets aria-hidden className="mt-0.5 size-5 shrink-0 text-accent" />
           <div>
             <p className="font-semibold">Charge {data.refrigerant} as liquid</p>
             <p>{data.liquidChargingNote}</p>
-            <p className="text-sm text-muted">Source: ACHR News, “The New Wave of Blends” [S4]; a packaged-unit maker’s R407C service manual [S56]; metering liquid into the suction side is common practice.</p>
+            <p className="text-sm text-muted">
+              Source: ACHR News, “The New Wave of Blends” [S4]; a packaged-unit maker’s R407C service manual [S56];
+              metering liquid into the suction side is common practice.
+            </p>
           </div>
         </div>
       )}
 
       {filling.length > 0 && (
-        <div role="status" className="space-y-3 rounded-card border-2 border-caution bg-surface p-4" data-testid="cylinder-warnings">
-          <p className="font-semibold text-caution">⚠ Recovery cylinder{filling.length > 1 ? "s" : ""} near or past the 80 % fill limit</p>
+        <div
+          role="status"
+          className="space-y-3 rounded-card border-2 border-caution bg-surface p-4"
+          data-testid="cylinder-warnings"
+        >
+          <p className="font-semibold text-caution">
+            ⚠ Recovery cylinder{filling.length > 1 ? "s" : ""} near or past the 80 % fill limit
+          </p>
           {filling.map((cylinder) => (
             <div key={cylinder.id}>
               <p className="font-medium">{cylinder.label}</p>
@@ -120,18 +183,39 @@ export function VisitRefrigerant({ visitId, unit, circuit, canWrite }: { visitId
 
       <div className="grid gap-4 lg:grid-cols-2">
         {data.circuits.map((balance) => (
-          <BalanceCard key={balance.circuit} balance={balance} visitId={visitId} canWrite={canWrite} single={data.circuits.length === 1} />
+          <BalanceCard
+            key={balance.circuit}
+            balance={balance}
+            visitId={visitId}
+            canWrite={canWrite}
+            single={data.circuits.length === 1}
+          />
         ))}
       </div>
 
       {canWrite && (
-        <section aria-labelledby="movement-form-heading" className="space-y-3 rounded-card border-2 border-accent bg-surface p-4">
+        <section
+          aria-labelledby="movement-form-heading"
+          className="space-y-3 rounded-card border-2 border-accent bg-surface p-4"
+        >
           <h3 id="movement-form-heading" className="text-lg font-semibold">
             Log refrigerant
           </h3>
-          {cylinders.isError && <p role="alert" className="text-fault">⚠ The cylinders did not load: {cylinders.error.message}</p>}
-          <WaitingEntries entries={onDevice.filter((entry) => entry.visitId === visitId && entry.kind === "refrigerant-movement")} />
-          <MovementForm visitId={visitId} refrigerant={unit.refrigerant} circuits={unit.circuits} defaultCircuit={circuit} cylinders={cylinders.data ?? []} />
+          {cylinders.isError && (
+            <p role="alert" className="text-fault">
+              ⚠ The cylinders did not load: {cylinders.error.message}
+            </p>
+          )}
+          <WaitingEntries
+            entries={onDevice.filter((entry) => entry.visitId === visitId && entry.kind === "refrigerant-movement")}
+          />
+          <MovementForm
+            visitId={visitId}
+            refrigerant={unit.refrigerant}
+            circuits={unit.circuits}
+            defaultCircuit={circuit}
+            cylinders={cylinders.data ?? []}
+          />
           <CautionPanel topic="liquid-refrigerant" compact />
           <p className="text-sm text-muted">
             Cylinders are kept on the{" "}

@@ -14,29 +14,59 @@ import {
 import { formatTime } from "@shared/format/date-time.ts";
 
 /** Every reading of one circuit as a table, in the order taken. */
-export function ReadingsTable({ readings, units, atmosphericKPa }: { readings: Reading[]; units: DisplayUnits; atmosphericKPa: number }) {
+export function ReadingsTable({
+  readings,
+  units,
+  atmosphericKPa,
+}: {
+  readings: Reading[];
+  units: DisplayUnits;
+  atmosphericKPa: number;
+}) {
   const t = TEMPERATURE_LABEL[units.temperature];
   const k = DIFFERENCE_LABEL[units.temperature];
   const p = GAUGE_LABEL[units.pressure];
-  const temp = (value: number | null | undefined) => (value == null ? "—" : formatNumber(temperatureToDisplay(value, units.temperature), 1));
-  const diff = (value: number | null | undefined) => (value == null ? "—" : formatNumber(differenceToDisplay(value, units.temperature), 1));
+  const temp = (value: number | null | undefined) =>
+    value == null ? "—" : formatNumber(temperatureToDisplay(value, units.temperature), 1);
+  const diff = (value: number | null | undefined) =>
+    value == null ? "—" : formatNumber(differenceToDisplay(value, units.temperature), 1);
   const pressure = (value: number | undefined, atmosphere: number) =>
-    value === undefined ? "—" : formatNumber(gaugeToDisplay(value, units.pressure, atmosphere), PRESSURE_DECIMALS[units.pressure]);
+    value === undefined
+      ? "—"
+      : formatNumber(gaugeToDisplay(value, units.pressure, atmosphere), PRESSURE_DECIMALS[units.pressure]);
   if (readings.length === 0) return <p className="text-muted">No readings on this circuit.</p>;
   return (
     <div className="overflow-x-auto">
       <table className="num w-full border-collapse text-right text-sm">
         <thead className="font-sans">
           <tr className="border-b-2 border-ink align-bottom">
-            <th scope="col" className="px-2 py-1 text-left">Time</th>
-            <th scope="col" className="px-2 py-1">Suction {p}</th>
-            <th scope="col" className="px-2 py-1">Evap. {t}</th>
-            <th scope="col" className="px-2 py-1">SH {k}</th>
-            <th scope="col" className="px-2 py-1">Liquid {p}</th>
-            <th scope="col" className="px-2 py-1">Cond. {t}</th>
-            <th scope="col" className="px-2 py-1">SC {k}</th>
-            <th scope="col" className="px-2 py-1">DLT {t}</th>
-            <th scope="col" className="px-2 py-1 text-left">Finding</th>
+            <th scope="col" className="px-2 py-1 text-left">
+              Time
+            </th>
+            <th scope="col" className="px-2 py-1">
+              Suction {p}
+            </th>
+            <th scope="col" className="px-2 py-1">
+              Evap. {t}
+            </th>
+            <th scope="col" className="px-2 py-1">
+              SH {k}
+            </th>
+            <th scope="col" className="px-2 py-1">
+              Liquid {p}
+            </th>
+            <th scope="col" className="px-2 py-1">
+              Cond. {t}
+            </th>
+            <th scope="col" className="px-2 py-1">
+              SC {k}
+            </th>
+            <th scope="col" className="px-2 py-1">
+              DLT {t}
+            </th>
+            <th scope="col" className="px-2 py-1 text-left">
+              Finding
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -50,7 +80,9 @@ export function ReadingsTable({ readings, units, atmosphericKPa }: { readings: R
                 <td className="px-2 py-1">{diff(reading.result.superheatK)}</td>
                 <td className="px-2 py-1">{pressure(reading.input.liquidPressureKPa, atmosphere)}</td>
                 <td className="px-2 py-1">{temp(reading.result.condensingTempC)}</td>
-                <td className="px-2 py-1">{reading.input.liquidTempLocation === "discharge-line" ? "n/v" : diff(reading.result.subcoolingK)}</td>
+                <td className="px-2 py-1">
+                  {reading.input.liquidTempLocation === "discharge-line" ? "n/v" : diff(reading.result.subcoolingK)}
+                </td>
                 <td className="px-2 py-1">{temp(reading.input.dischargeLineTempC)}</td>
                 <td className="px-2 py-1 text-left font-sans">{chargeStateText[reading.result.chargeState].short}</td>
               </tr>

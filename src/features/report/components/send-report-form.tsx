@@ -46,14 +46,22 @@ export function SendReportForm({ visitId, defaultTo }: { visitId: string; defaul
         }
       }}
     >
-      <TextField label="Send the report to" type="email" value={to} onChange={(event) => setTo(event.target.value)} error={fieldError} autoComplete="email" />
+      <TextField
+        label="Send the report to"
+        type="email"
+        value={to}
+        onChange={(event) => setTo(event.target.value)}
+        error={fieldError}
+        autoComplete="email"
+      />
       {unsigned && (
         <div className="space-y-2 rounded-card border-2 border-caution p-3" data-testid="unsigned-report-warning">
           <p className="flex items-start gap-2 font-medium">
             <AlertTriangle aria-hidden className="mt-0.5 size-5 shrink-0 text-caution" />
             <span>
-              Not signed off{visit.data ? ` (${VISIT_STATUS_LABELS[visit.data.status].toLowerCase()})` : ""}: the customer will get an unsigned report, which a
-              senior technician has not checked and which may still change.
+              Not signed off{visit.data ? ` (${VISIT_STATUS_LABELS[visit.data.status].toLowerCase()})` : ""}: the
+              customer will get an unsigned report, which a senior technician has not checked and which may still
+              change.
             </span>
           </p>
           <label htmlFor={confirmId} className="flex min-h-touch cursor-pointer items-center gap-3">
@@ -74,9 +82,12 @@ export function SendReportForm({ visitId, defaultTo }: { visitId: string; defaul
         </div>
       )}
       <Button type="submit" disabled={send.isPending}>
-        <Send aria-hidden className="size-5" /> {send.isPending ? "Sending…" : unsigned ? "Send unsigned report" : "Send report"}
+        <Send aria-hidden className="size-5" />{" "}
+        {send.isPending ? "Sending…" : unsigned ? "Send unsigned report" : "Send report"}
       </Button>
-      {sentTo && <FormAlert tone="good">{unsigned ? `Unsigned report sent to ${sentTo}` : `Report sent to ${sentTo}`}</FormAlert>}
+      {sentTo && (
+        <FormAlert tone="good">{unsigned ? `Unsigned report sent to ${sentTo}` : `Report sent to ${sentTo}`}</FormAlert>
+      )}
     </form>
   );
 }

@@ -2,8 +2,20 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useQuery } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
-import { CYLINDER_KIND_LABELS, MOVEMENT_CYLINDER_RULES, MOVEMENT_KIND_LABELS, type CylinderKind, type MovementKind } from "@shared/schemas/register.ts";
-import { ADJUSTMENT_KIND_LABELS, ADJUSTMENT_KINDS, AdjustmentCreateSchema, isChargeAdjustment, type AdjustmentCreate } from "@shared/schemas/visits.ts";
+import {
+  CYLINDER_KIND_LABELS,
+  MOVEMENT_CYLINDER_RULES,
+  MOVEMENT_KIND_LABELS,
+  type CylinderKind,
+  type MovementKind,
+} from "@shared/schemas/register.ts";
+import {
+  ADJUSTMENT_KIND_LABELS,
+  ADJUSTMENT_KINDS,
+  AdjustmentCreateSchema,
+  isChargeAdjustment,
+  type AdjustmentCreate,
+} from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { cylindersQueryOptions } from "@/lib/api/register.ts";
@@ -20,7 +32,13 @@ import { formatTime } from "@shared/format/date-time.ts";
  * reclaimed cylinder, or back out of a recovery cylinder as reuse.
  */
 const movementFor = (kind: "charge-added" | "charge-removed", cylinderKind: CylinderKind): MovementKind =>
-  kind === "charge-removed" ? "recovered" : cylinderKind === "new" ? "added-new" : cylinderKind === "reclaimed" ? "added-reclaimed" : "reused";
+  kind === "charge-removed"
+    ? "recovered"
+    : cylinderKind === "new"
+      ? "added-new"
+      : cylinderKind === "reclaimed"
+        ? "added-reclaimed"
+        : "reused";
 
 const kgText = (kg: number) => `${formatNumber(kg, 2)} kg`;
 
@@ -29,7 +47,15 @@ const kgText = (kg: number) => `${formatNumber(kg, 2)} kg`;
  * Refrigerant added or removed also asks for the cylinder: the server records it in the
  * register as the same entry (one movement, one figure), or refuses both.
  */
-export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string; circuit: number; onSaved?: () => void }) {
+export function AdjustmentForm({
+  visitId,
+  circuit,
+  onSaved,
+}: {
+  visitId: string;
+  circuit: number;
+  onSaved?: () => void;
+}) {
   const createAdjustment = useCreateAdjustment();
   // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
   const entryId = useEntryClientId();
@@ -48,7 +74,9 @@ export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string;
   const refrigerant = useVisit(visitId).data?.refrigerant;
   const cylinders = useQuery({ ...cylindersQueryOptions({ refrigerant }), enabled: Boolean(charge && refrigerant) });
   const choices = charge
-    ? (cylinders.data ?? []).filter((cylinder) => MOVEMENT_CYLINDER_RULES[movementFor(charge, cylinder.kind)].cylinderKinds.includes(cylinder.kind))
+    ? (cylinders.data ?? []).filter((cylinder) =>
+        MOVEMENT_CYLINDER_RULES[movementFor(charge, cylinder.kind)].cylinderKinds.includes(cylinder.kind),
+      )
     : [];
   const chosen = choices.find((cylinder) => cylinder.id === cylinderId);
   // A cylinder picked for the other direction no longer fits: clear it rather than send it.
@@ -57,14 +85,23 @@ export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string;
   }, [cylinderId, chosen, cylinders.data, form]);
   const movement = charge && chosen ? movementFor(charge, chosen.kind) : null;
   const validMass = typeof amountKg === "number" && Number.isFinite(amountKg) && amountKg > 0 ? amountKg : null;
-  const after = chosen && movement && validMass !== null ? chosen.contentsKg + (MOVEMENT_CYLINDER_RULES[movement].intoCylinder ? validMass : -validMass) : null;
+  const after =
+    chosen && movement && validMass !== null
+      ? chosen.contentsKg + (MOVEMENT_CYLINDER_RULES[movement].intoCylinder ? validMass : -validMass)
+      : null;
 
   const submit = form.handleSubmit(async (values) => {
     setFormError(null);
     setKeptAt(null);
     const clientId = entryId.take();
     // The time it was made, sent with it: if it waits on the device, it is stored with this time.
-    const body = { ...values, circuit, cylinderId: charge ? values.cylinderId : null, clientId, at: values.at ?? new Date().toISOString() };
+    const body = {
+      ...values,
+      circuit,
+      cylinderId: charge ? values.cylinderId : null,
+      clientId,
+      at: values.at ?? new Date().toISOString(),
+    };
     try {
       const sent = await keepWhenOffline(() => createAdjustment.mutateAsync({ ...body, visitId }), {
         kind: "adjustment",
@@ -94,7 +131,12 @@ export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string;
             </option>
           ))}
         </SelectField>
-        <TextField label="Description" placeholder="e.g. metering opened half a turn" error={errors.description?.message} {...form.register("description")} />
+        <TextField
+          label="Description"
+          placeholder="e.g. metering opened half a turn"
+          error={errors.description?.message}
+          {...form.register("description")}
+        />
       </div>
       {charge && (
         <div className="grid gap-3 sm:grid-cols-[12rem_1fr]">
@@ -103,7 +145,10 @@ export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string;
             inputMode="decimal"
             className="num max-w-40 text-xl"
             error={errors.amountKg?.message}
-            {...form.register("amountKg", { setValueAs: (value: string) => (value === "" || value == null ? null : Number(String(value).replace(",", "."))) })}
+            {...form.register("amountKg", {
+              setValueAs: (value: string) =>
+                value === "" || value == null ? null : Number(String(value).replace(",", ".")),
+            })}
           />
           <SelectField
             label={charge === "charge-removed" ? "Into cylinder" : "From cylinder"}
@@ -124,16 +169,24 @@ export function AdjustmentForm({ visitId, circuit, onSaved }: { visitId: string;
           </SelectField>
         </div>
       )}
-      {charge && cylinders.isError && <p role="alert" className="text-fault">⚠ The cylinders did not load: {cylinders.error.message}</p>}
+      {charge && cylinders.isError && (
+        <p role="alert" className="text-fault">
+          ⚠ The cylinders did not load: {cylinders.error.message}
+        </p>
+      )}
       {charge && cylinders.data && choices.length === 0 && (
         <p role="status" className="font-medium text-caution">
-          ⚠ No {refrigerant} cylinder fits: add it on the Cylinders page before logging refrigerant {charge === "charge-removed" ? "removed" : "added"}.
+          ⚠ No {refrigerant} cylinder fits: add it on the Cylinders page before logging refrigerant{" "}
+          {charge === "charge-removed" ? "removed" : "added"}.
         </p>
       )}
       {chosen && after !== null && (
         <p className="text-sm" aria-live="polite" data-testid="adjustment-cylinder-after">
           After this, {chosen.label} will hold <span className="num font-semibold">{kgText(Math.max(0, after))}</span>
-          {chosen.kind === "recovery" && chosen.fill.maxContentsKg !== null && <> of its {kgText(chosen.fill.maxContentsKg)} fill limit</>}.
+          {chosen.kind === "recovery" && chosen.fill.maxContentsKg !== null && (
+            <> of its {kgText(chosen.fill.maxContentsKg)} fill limit</>
+          )}
+          .
         </p>
       )}
       <Button type="submit" variant="secondary" disabled={createAdjustment.isPending}>

@@ -20,7 +20,11 @@ export function CsvImport({ visitId, circuit }: { visitId: string; circuit: numb
   const fileInput = useRef<HTMLInputElement>(null);
   const importReadings = useImportReadings();
 
-  const run = async (mode: "preview" | "all" | "valid-only", chosen: File | null = file, columns: Record<string, string> | undefined = summary ? mapping : undefined) => {
+  const run = async (
+    mode: "preview" | "all" | "valid-only",
+    chosen: File | null = file,
+    columns: Record<string, string> | undefined = summary ? mapping : undefined,
+  ) => {
     if (!chosen) return;
     setError(null);
     setDone(null);
@@ -96,7 +100,10 @@ export function CsvImport({ visitId, circuit }: { visitId: string; circuit: numb
             {problems.length > 0 && <>; {problems.length} have problems</>}.
           </p>
           {problems.length > 0 && (
-            <ul aria-label="Problems by line" className="max-h-60 space-y-1 overflow-auto rounded-card border-2 border-fault p-2 text-sm">
+            <ul
+              aria-label="Problems by line"
+              className="max-h-60 space-y-1 overflow-auto rounded-card border-2 border-fault p-2 text-sm"
+            >
               {problems.slice(0, MAX_PROBLEMS_SHOWN).map((problem) => (
                 <li key={`${problem.line}-${problem.field ?? ""}`}>
                   <span className="num font-semibold">Line {problem.line}</span>: {problem.message}
@@ -106,7 +113,10 @@ export function CsvImport({ visitId, circuit }: { visitId: string; circuit: numb
             </ul>
           )}
           <div className="flex flex-wrap gap-2">
-            <Button onClick={() => void run("all")} disabled={importReadings.isPending || problems.length > 0 || summary.validCount === 0}>
+            <Button
+              onClick={() => void run("all")}
+              disabled={importReadings.isPending || problems.length > 0 || summary.validCount === 0}
+            >
               Import all {summary.validCount} rows
             </Button>
             {problems.length > 0 && summary.validCount > 0 && (

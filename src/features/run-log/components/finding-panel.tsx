@@ -24,7 +24,10 @@ export function confidenceWords(confidence: number): string {
   return `${words} (${percent} %)`;
 }
 
-const SEVERITY: Record<DiagnosisResult["warnings"][number]["severity"], { icon: LucideIcon; word: string; tone: string }> = {
+const SEVERITY: Record<
+  DiagnosisResult["warnings"][number]["severity"],
+  { icon: LucideIcon; word: string; tone: string }
+> = {
   danger: { icon: OctagonAlert, word: "Danger", tone: "border-fault text-fault" },
   "invalid-data": { icon: Ban, word: "Not used", tone: "border-caution text-caution" },
   caution: { icon: TriangleAlert, word: "Caution", tone: "border-caution text-caution" },
@@ -91,9 +94,21 @@ export function FindingPanel({ result, pending = false, variant = "run-log" }: F
   );
 
   return (
-    <section aria-label="Finding" aria-live="polite" className={cn("rounded-card border-2 bg-surface p-4", chargeStateTone(state).split(" ")[1], pending && "opacity-70")}>
+    <section
+      aria-label="Finding"
+      aria-live="polite"
+      className={cn(
+        "rounded-card border-2 bg-surface p-4",
+        chargeStateTone(state).split(" ")[1],
+        pending && "opacity-70",
+      )}
+    >
       <div className="flex items-start gap-3">
-        <Icon aria-hidden className={cn("mt-0.5 size-8 shrink-0", chargeStateTone(state).split(" ")[0])} strokeWidth={2.4} />
+        <Icon
+          aria-hidden
+          className={cn("mt-0.5 size-8 shrink-0", chargeStateTone(state).split(" ")[0])}
+          strokeWidth={2.4}
+        />
         <div className="min-w-0">
           <h2 className="text-xl font-semibold" data-testid="charge-state">
             {text.title}
@@ -103,7 +118,12 @@ export function FindingPanel({ result, pending = false, variant = "run-log" }: F
           {alternatives.length > 0 && (
             <p className="mt-1 text-sm text-muted">
               Also possible:{" "}
-              {alternatives.map((alternative) => `${chargeStateText[alternative.state].title} (${Math.round(alternative.confidence * 100)} %)`).join("; ")}
+              {alternatives
+                .map(
+                  (alternative) =>
+                    `${chargeStateText[alternative.state].title} (${Math.round(alternative.confidence * 100)} %)`,
+                )
+                .join("; ")}
             </p>
           )}
           <ChargeEstimate result={result} />

@@ -34,8 +34,14 @@ export function LiveLine({ result, trend, units, onOpen }: LiveLineProps) {
           <ChargeStateBadge state={result.chargeState} short />
           <span className="num text-sm">
             SH {value(result.superheatK)}
-            {result.targets.superheat && <span className="text-muted"> /{value(result.targets.superheat.targetK)}</span>} {k} · SC {value(result.subcoolingK)}
-            {result.targets.subcooling && <span className="text-muted"> /{value(result.targets.subcooling.targetK)}</span>} {k}
+            {result.targets.superheat && (
+              <span className="text-muted"> /{value(result.targets.superheat.targetK)}</span>
+            )}{" "}
+            {k} · SC {value(result.subcoolingK)}
+            {result.targets.subcooling && (
+              <span className="text-muted"> /{value(result.targets.subcooling.targetK)}</span>
+            )}{" "}
+            {k}
           </span>
         </>
       ) : (
@@ -43,7 +49,11 @@ export function LiveLine({ result, trend, units, onOpen }: LiveLineProps) {
       )}
       {trend && (
         <span className="inline-flex items-center gap-1 text-sm">
-          {trend.settled ? <CircleCheck aria-hidden className="size-4 text-good" /> : <Hourglass aria-hidden className="size-4 text-caution" />}
+          {trend.settled ? (
+            <CircleCheck aria-hidden className="size-4 text-good" />
+          ) : (
+            <Hourglass aria-hidden className="size-4 text-caution" />
+          )}
           {trend.settled ? "settled" : "settling"}
         </span>
       )}

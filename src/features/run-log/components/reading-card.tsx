@@ -19,7 +19,10 @@ export function ReadingCard({ step, title, where, side, children, derived }: Rea
   return (
     <section aria-labelledby={headingId} className="@container rounded-card border-2 border-rule bg-surface">
       <header className="flex flex-wrap items-baseline gap-x-3 gap-y-1 border-b-2 border-rule px-4 py-2">
-        <span aria-hidden className="num flex size-7 items-center justify-center rounded-full border-2 border-ink text-sm font-semibold">
+        <span
+          aria-hidden
+          className="num flex size-7 items-center justify-center rounded-full border-2 border-ink text-sm font-semibold"
+        >
           {step}
         </span>
         <h3 id={headingId} className="text-lg font-semibold">
@@ -27,7 +30,12 @@ export function ReadingCard({ step, title, where, side, children, derived }: Rea
         </h3>
         <span className="text-sm text-muted">{where}</span>
         {side && (
-          <span className={cn("ml-auto text-xs font-semibold uppercase tracking-wider", side === "low side" ? "text-low" : "text-high")}>
+          <span
+            className={cn(
+              "ml-auto text-xs font-semibold uppercase tracking-wider",
+              side === "low side" ? "text-low" : "text-high",
+            )}
+          >
             {side}
           </span>
         )}
@@ -46,7 +54,19 @@ export function ReadingCard({ step, title, where, side, children, derived }: Rea
 }
 
 /** A computed value on a card's derived line: name, number, unit, and optional target beside it. */
-export function Derived({ label, value, unit, target, testId }: { label: string; value: string | null; unit: string; target?: string; testId?: string }) {
+export function Derived({
+  label,
+  value,
+  unit,
+  target,
+  testId,
+}: {
+  label: string;
+  value: string | null;
+  unit: string;
+  target?: string;
+  testId?: string;
+}) {
   return (
     <div className="flex flex-wrap items-baseline gap-x-2">
       <span className="text-muted">{label}</span>

@@ -56,14 +56,28 @@ const DEFAULT_DISCHARGE_LIMIT_C = 107;
  * liquid (condenser outlet), then air and electrical. Each card shows what was measured, its
  * saturation counterpart and the derived value on one line.
  */
-export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fieldErrors, result, units, isBlend, dischargeLineTempC }: ReadingCardsProps) {
+export function ReadingCards({
+  draft,
+  onField,
+  onLocation,
+  onSuctionLocation,
+  fieldErrors,
+  result,
+  units,
+  isBlend,
+  dischargeLineTempC,
+}: ReadingCardsProps) {
   const t = TEMPERATURE_LABEL[units.temperature];
   const k = DIFFERENCE_LABEL[units.temperature];
   const p = GAUGE_LABEL[units.pressure];
-  const temp = (value: number | null | undefined) => (value == null ? null : formatNumber(temperatureToDisplay(value, units.temperature), 1));
-  const diff = (value: number | null | undefined) => (value == null ? null : formatNumber(differenceToDisplay(value, units.temperature), 1));
+  const temp = (value: number | null | undefined) =>
+    value == null ? null : formatNumber(temperatureToDisplay(value, units.temperature), 1);
+  const diff = (value: number | null | undefined) =>
+    value == null ? null : formatNumber(differenceToDisplay(value, units.temperature), 1);
   const band = (target: TargetBand | null | undefined) =>
-    target ? `target ${diff(target.targetK)} ${k} (${diff(target.lowK)}–${diff(target.highK)}, ${target.basis.replace("-", " ")})` : undefined;
+    target
+      ? `target ${diff(target.targetK)} ${k} (${diff(target.lowK)}–${diff(target.highK)}, ${target.basis.replace("-", " ")})`
+      : undefined;
   const input = (field: DraftField, label: string, unit: string, hint?: string) => (
     <NumberField
       name={field}
@@ -91,8 +105,19 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
         side="low side"
         derived={
           <div className="flex flex-wrap gap-x-8 gap-y-2">
-            <Derived label={isBlend ? "Dew point" : "Saturation"} value={temp(result?.evaporatingTempC)} unit={t} testId="evaporating-temp" />
-            <Derived label="Superheat" value={diff(result?.superheatK)} unit={k} target={band(result?.targets.superheat)} testId="superheat" />
+            <Derived
+              label={isBlend ? "Dew point" : "Saturation"}
+              value={temp(result?.evaporatingTempC)}
+              unit={t}
+              testId="evaporating-temp"
+            />
+            <Derived
+              label="Superheat"
+              value={diff(result?.superheatK)}
+              unit={k}
+              target={band(result?.targets.superheat)}
+              testId="superheat"
+            />
           </div>
         }
       >
@@ -114,7 +139,8 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
           />
           {result && result.suctionLineAllowanceK !== 0 && (
             <p className="mt-2 text-sm text-muted">
-              Target moved {result.suctionLineAllowanceK > 0 ? "up" : "down"} {diff(Math.abs(result.suctionLineAllowanceK))} {k} for the suction line between coil and outdoor unit.
+              Target moved {result.suctionLineAllowanceK > 0 ? "up" : "down"}{" "}
+              {diff(Math.abs(result.suctionLineAllowanceK))} {k} for the suction line between coil and outdoor unit.
             </p>
           )}
         </div>
@@ -134,12 +160,21 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
               target={`below the ${temp(dischargeLimit)} ${t} line limit`}
               testId="discharge-margin"
             />
-            <Derived label="Compression ratio" value={result?.compressionRatio == null ? null : formatNumber(result.compressionRatio, 1)} unit=": 1" />
+            <Derived
+              label="Compression ratio"
+              value={result?.compressionRatio == null ? null : formatNumber(result.compressionRatio, 1)}
+              unit=": 1"
+            />
           </div>
         }
       >
         {input("dischargePressureKPa", "Discharge pressure (optional)", p)}
-        {input("dischargeLineTempC", "Discharge line temperature", t, "Keep this in view: oil breaks down on an overheated discharge")}
+        {input(
+          "dischargeLineTempC",
+          "Discharge line temperature",
+          t,
+          "Keep this in view: oil breaks down on an overheated discharge",
+        )}
         <div className="@lg:col-span-2">
           <CautionLine topic="hot-surface" />
         </div>
@@ -152,12 +187,21 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
         side="high side"
         derived={
           <div className="flex flex-wrap gap-x-8 gap-y-2">
-            <Derived label={isBlend ? "Bubble point" : "Saturation"} value={temp(result?.condensingTempC)} unit={t} testId="condensing-temp" />
+            <Derived
+              label={isBlend ? "Bubble point" : "Saturation"}
+              value={temp(result?.condensingTempC)}
+              unit={t}
+              testId="condensing-temp"
+            />
             <Derived
               label="Subcooling"
               value={draft.liquidTempLocation === "discharge-line" ? null : diff(result?.subcoolingK)}
               unit={k}
-              target={draft.liquidTempLocation === "discharge-line" ? "not valid on a discharge line" : band(result?.targets.subcooling)}
+              target={
+                draft.liquidTempLocation === "discharge-line"
+                  ? "not valid on a discharge line"
+                  : band(result?.targets.subcooling)
+              }
               testId="subcooling"
             />
           </div>
@@ -177,7 +221,8 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
           />
           {draft.liquidTempLocation === "discharge-line" && (
             <p className="mt-2 font-medium text-caution">
-              ⚠ The discharge line carries superheated vapour: subcooling read there is not valid and is left out of the finding.
+              ⚠ The discharge line carries superheated vapour: subcooling read there is not valid and is left out of the
+              finding.
             </p>
           )}
         </div>
@@ -219,7 +264,12 @@ export function ReadingCards({ draft, onField, onLocation, onSuctionLocation, fi
         }
       >
         {input("compressorAmps", "Compressor running current", "A")}
-        {input("runMinutes", "Running since start or last change", "min", "Readings drift for 10–15 min after every change")}
+        {input(
+          "runMinutes",
+          "Running since start or last change",
+          "min",
+          "Readings drift for 10–15 min after every change",
+        )}
       </ReadingCard>
     </div>
   );

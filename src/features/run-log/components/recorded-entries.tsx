@@ -155,11 +155,21 @@ export function RecordedEntries({
         })}
       </ol>
       {hidden > 0 && (
-        <Button variant="secondary" disabled={earlier.isPending} onClick={() => void showEarlier().catch(() => undefined)}>
-          {earlier.isPending ? "Loading earlier entries…" : `Show earlier entries (${Math.min(hidden, ENTRIES_PAGE)} of ${hidden} more)`}
+        <Button
+          variant="secondary"
+          disabled={earlier.isPending}
+          onClick={() => void showEarlier().catch(() => undefined)}
+        >
+          {earlier.isPending
+            ? "Loading earlier entries…"
+            : `Show earlier entries (${Math.min(hidden, ENTRIES_PAGE)} of ${hidden} more)`}
         </Button>
       )}
-      {earlier.isError && <p role="alert" className="text-sm">The earlier entries could not be loaded: {earlier.error.message}</p>}
+      {earlier.isError && (
+        <p role="alert" className="text-sm">
+          The earlier entries could not be loaded: {earlier.error.message}
+        </p>
+      )}
     </div>
   );
 }

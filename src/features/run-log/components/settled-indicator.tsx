@@ -8,7 +8,13 @@ export function SettledIndicator({ trend }: { trend: TrendResult | null }) {
   if (!trend) return null;
   const Icon = trend.settled ? CircleCheck : Hourglass;
   return (
-    <div className={cn("flex items-start gap-2 rounded-card border-2 p-3", trend.settled ? "border-good" : "border-caution")} data-testid="settled-indicator">
+    <div
+      className={cn(
+        "flex items-start gap-2 rounded-card border-2 p-3",
+        trend.settled ? "border-good" : "border-caution",
+      )}
+      data-testid="settled-indicator"
+    >
       <Icon aria-hidden className={cn("mt-0.5 size-6 shrink-0", trend.settled ? "text-good" : "text-caution")} />
       <div className="min-w-0 flex-1">
         <p className="font-semibold">{trend.settled ? "Settled" : "Still settling"}</p>

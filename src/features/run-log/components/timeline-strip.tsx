@@ -9,7 +9,9 @@ import { formatTime } from "@shared/format/date-time.ts";
 const STRIP_LENGTH = 8;
 const clock = (iso: string) => formatTime(iso);
 
-type Entry = { kind: "reading"; at: string; reading: CircuitSeries["readings"][number] } | { kind: "adjustment"; at: string; adjustment: CircuitSeries["adjustments"][number] };
+type Entry =
+  | { kind: "reading"; at: string; reading: CircuitSeries["readings"][number] }
+  | { kind: "adjustment"; at: string; adjustment: CircuitSeries["adjustments"][number] };
 
 /** The last readings and adjustments side by side, newest on the right. */
 export function TimelineStrip({ series, units }: { series: CircuitSeries; units: DisplayUnits }) {
@@ -27,12 +29,19 @@ export function TimelineStrip({ series, units }: { series: CircuitSeries; units:
     const list = strip.current;
     if (list) list.scrollLeft = list.scrollWidth;
   }, [newest]);
-  if (entries.length === 0) return <p className="text-muted">No readings yet: the first one you save starts the timeline.</p>;
-  const diff = (value: number | null) => (value === null ? "—" : formatNumber(differenceToDisplay(value, units.temperature), 1));
+  if (entries.length === 0)
+    return <p className="text-muted">No readings yet: the first one you save starts the timeline.</p>;
+  const diff = (value: number | null) =>
+    value === null ? "—" : formatNumber(differenceToDisplay(value, units.temperature), 1);
 
   return (
     // A strip that scrolls sideways takes the keyboard focus, so arrow keys can scroll it.
-    <ol ref={strip} tabIndex={0} aria-label="Latest readings and adjustments" className="flex gap-2 overflow-x-auto pb-2">
+    <ol
+      ref={strip}
+      tabIndex={0}
+      aria-label="Latest readings and adjustments"
+      className="flex gap-2 overflow-x-auto pb-2"
+    >
       {entries.map((entry) =>
         entry.kind === "reading" ? (
           <li key={entry.reading.id} className="num min-w-28 rounded-card border-2 border-rule bg-surface p-2 text-sm">
@@ -52,7 +61,10 @@ export function TimelineStrip({ series, units }: { series: CircuitSeries; units:
             </p>
           </li>
         ) : (
-          <li key={entry.adjustment.id} className="min-w-32 rounded-card border-2 border-dashed border-ink bg-sunken p-2 text-sm">
+          <li
+            key={entry.adjustment.id}
+            className="min-w-32 rounded-card border-2 border-dashed border-ink bg-sunken p-2 text-sm"
+          >
             <p className="text-xs text-muted">{clock(entry.at)}</p>
             <p className="flex items-start gap-1 font-medium">
               <PencilLine aria-hidden className="mt-0.5 size-4 shrink-0" />

@@ -157,10 +157,42 @@ export default function TrendChart({ series, units, width, height = 320 }: Trend
       )}
       {/* Saturation lines last, so they are drawn over the thicker lines, in their own colours and patterns. */}
       {[
-        { axis: "difference", name: `Superheat (${k})`, key: "superheat", colour: "var(--color-low)", width: 3, dash: undefined, dots: true },
-        { axis: "difference", name: `Subcooling (${k})`, key: "subcooling", colour: "var(--color-high)", width: 3, dash: "8 4", dots: true },
-        { axis: "saturation", name: `Evaporating (${t})`, key: "evaporating", colour: "var(--color-accent)", width: 2, dash: "12 4 2 4", dots: false },
-        { axis: "saturation", name: `Condensing (${t})`, key: "condensing", colour: "var(--color-caution)", width: 2, dash: "2 3", dots: false },
+        {
+          axis: "difference",
+          name: `Superheat (${k})`,
+          key: "superheat",
+          colour: "var(--color-low)",
+          width: 3,
+          dash: undefined,
+          dots: true,
+        },
+        {
+          axis: "difference",
+          name: `Subcooling (${k})`,
+          key: "subcooling",
+          colour: "var(--color-high)",
+          width: 3,
+          dash: "8 4",
+          dots: true,
+        },
+        {
+          axis: "saturation",
+          name: `Evaporating (${t})`,
+          key: "evaporating",
+          colour: "var(--color-accent)",
+          width: 2,
+          dash: "12 4 2 4",
+          dots: false,
+        },
+        {
+          axis: "saturation",
+          name: `Condensing (${t})`,
+          key: "condensing",
+          colour: "var(--color-caution)",
+          width: 2,
+          dash: "2 3",
+          dots: false,
+        },
       ].map((line) => (
         <Line
           key={line.key}

@@ -29,7 +29,10 @@ const minutesBetween = (from: string, to: string) => (Date.parse(to) - Date.pars
  * corrections, not evidence: they are left out here, as the server leaves them out, so the
  * finding, the trend, the settled test and the report never count them.
  */
-export function circuitSeries(visit: Pick<Visit, "readings" | "adjustments" | "circuitLogs">, circuit: number): CircuitSeries {
+export function circuitSeries(
+  visit: Pick<Visit, "readings" | "adjustments" | "circuitLogs">,
+  circuit: number,
+): CircuitSeries {
   const log = visit.circuitLogs.find((candidate) => candidate.circuit === circuit);
   const voided = new Set(visit.readings.filter((reading) => reading.voided !== null).map((reading) => reading.id));
   const held = visit.readings.filter((reading) => reading.circuit === circuit && reading.voided === null);
@@ -40,7 +43,9 @@ export function circuitSeries(visit: Pick<Visit, "readings" | "adjustments" | "c
   );
   const origin = log?.points[0]?.takenAt ?? own[0]?.takenAt ?? visit.adjustments[0]?.at ?? new Date(0).toISOString();
   const relevant = visit.adjustments
-    .filter((adjustment) => adjustment.voided === null && (adjustment.circuit === null || adjustment.circuit === circuit))
+    .filter(
+      (adjustment) => adjustment.voided === null && (adjustment.circuit === null || adjustment.circuit === circuit),
+    )
     .map((adjustment) => ({ ...adjustment, x: minutesBetween(origin, adjustment.at) }));
   return {
     readings: own,

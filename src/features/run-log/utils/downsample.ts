@@ -8,7 +8,11 @@
  * @param threshold how many points to keep (≥ 3); fewer input points are returned as they are
  * @param y which value of a point to preserve the shape of
  */
-export function downsample<T extends { x: number }>(points: readonly T[], threshold: number, y: (point: T) => number | null): T[] {
+export function downsample<T extends { x: number }>(
+  points: readonly T[],
+  threshold: number,
+  y: (point: T) => number | null,
+): T[] {
   if (threshold < 3 || points.length <= threshold) return [...points];
   const valueOf = (point: T) => y(point) ?? 0;
   const sampled: T[] = [points[0]!];
@@ -35,7 +39,10 @@ export function downsample<T extends { x: number }>(points: readonly T[], thresh
     let best = start;
     for (let index = start; index < end; index++) {
       const candidate = points[index]!;
-      const area = Math.abs((anchor.x - averageX) * (valueOf(candidate) - valueOf(anchor)) - (anchor.x - candidate.x) * (averageY - valueOf(anchor)));
+      const area = Math.abs(
+        (anchor.x - averageX) * (valueOf(candidate) - valueOf(anchor)) -
+          (anchor.x - candidate.x) * (averageY - valueOf(anchor)),
+      );
       if (area > bestArea) {
         bestArea = area;
         best = index;

@@ -30,13 +30,21 @@ export const DRAFT_FIELDS = {
 } as const satisfies Partial<Record<keyof DiagnosisInput, FieldKind>>;
 
 export type DraftField = keyof typeof DRAFT_FIELDS;
-export const REQUIRED_FIELDS: DraftField[] = ["suctionPressureKPa", "suctionLineTempC", "liquidPressureKPa", "liquidLineTempC"];
+export const REQUIRED_FIELDS: DraftField[] = [
+  "suctionPressureKPa",
+  "suctionLineTempC",
+  "liquidPressureKPa",
+  "liquidLineTempC",
+];
 
 /** Where the suction temperature was taken; "" when the technician did not say. */
 export type SuctionLocationChoice = SuctionTempLocation | "";
 
 /** The entry form's state: exactly what was typed, in display units, so nothing is lost. */
-export type ReadingDraft = Record<DraftField, string> & { liquidTempLocation: LiquidTempLocation; suctionTempLocation: SuctionLocationChoice };
+export type ReadingDraft = Record<DraftField, string> & {
+  liquidTempLocation: LiquidTempLocation;
+  suctionTempLocation: SuctionLocationChoice;
+};
 
 export function emptyDraft(): ReadingDraft {
   const draft = Object.fromEntries(Object.keys(DRAFT_FIELDS).map((key) => [key, ""])) as Record<DraftField, string>;
@@ -44,7 +52,11 @@ export function emptyDraft(): ReadingDraft {
 }
 
 /** Carries a stored reading forward into the form, in the user's units. */
-export function draftFromInput(input: Partial<DiagnosisInput>, units: DisplayUnits, atmosphericKPa: number): ReadingDraft {
+export function draftFromInput(
+  input: Partial<DiagnosisInput>,
+  units: DisplayUnits,
+  atmosphericKPa: number,
+): ReadingDraft {
   const draft = emptyDraft();
   for (const [key, kind] of Object.entries(DRAFT_FIELDS) as [DraftField, FieldKind][]) {
     const value = input[key];
@@ -63,7 +75,9 @@ export function draftFromInput(input: Partial<DiagnosisInput>, units: DisplayUni
 
 export interface ParsedDraft {
   /** Every field that holds a number, converted to SI-metric (kPa gauge, °C). */
-  values: Partial<Pick<DiagnosisInput, DraftField | "suctionTempLocation">> & { liquidTempLocation: LiquidTempLocation };
+  values: Partial<Pick<DiagnosisInput, DraftField | "suctionTempLocation">> & {
+    liquidTempLocation: LiquidTempLocation;
+  };
   /** Fields whose text is not a number. */
   typingErrors: Partial<Record<DraftField, string>>;
   /** Required fields still empty. */

@@ -15,7 +15,8 @@ export function runTimeBase(series: CircuitSeries): RunTimeBase | null {
   if (lastAdjustment && (!lastReading || Date.parse(lastAdjustment.at) > Date.parse(lastReading.takenAt))) {
     return { minutes: 0, at: Date.parse(lastAdjustment.at) };
   }
-  if (lastReading?.input.runMinutes !== undefined) return { minutes: lastReading.input.runMinutes, at: Date.parse(lastReading.takenAt) };
+  if (lastReading?.input.runMinutes !== undefined)
+    return { minutes: lastReading.input.runMinutes, at: Date.parse(lastReading.takenAt) };
   return null;
 }
 

@@ -55,7 +55,8 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
           {visit.comments.map((comment) => (
             <li key={comment.id} className="border-l-4 border-accent pl-3">
               <p className="text-sm text-muted">
-                <strong className="text-ink">{comment.author?.name ?? "Former member"}</strong> · {stamp(comment.createdAt)}
+                <strong className="text-ink">{comment.author?.name ?? "Former member"}</strong> ·{" "}
+                {stamp(comment.createdAt)}
                 {comment.reading && (
                   <>
                     {" "}

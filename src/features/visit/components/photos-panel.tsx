@@ -68,7 +68,11 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
           {visit.photos.map((photo) => (
             <li key={photo.id}>
               <a href={photo.url} target="_blank" rel="noreferrer" className="block">
-                <img src={photo.thumbnailUrl} alt={`${KIND_LABELS[photo.kind]} photo${photo.caption ? `: ${photo.caption}` : ""}`} className="aspect-[4/3] w-full rounded-card border-2 border-rule object-cover" />
+                <img
+                  src={photo.thumbnailUrl}
+                  alt={`${KIND_LABELS[photo.kind]} photo${photo.caption ? `: ${photo.caption}` : ""}`}
+                  className="aspect-[4/3] w-full rounded-card border-2 border-rule object-cover"
+                />
                 <span className="text-sm">{KIND_LABELS[photo.kind]}</span>
               </a>
             </li>
@@ -77,7 +81,8 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
             <li key={entry.clientId}>
               <DevicePhoto entry={entry} />
               <span className="flex items-center gap-1 text-sm font-medium">
-                <CloudOff aria-hidden className="size-4 shrink-0" /> {entry.state === "waiting" ? "Waiting to send" : "Refused"}
+                <CloudOff aria-hidden className="size-4 shrink-0" />{" "}
+                {entry.state === "waiting" ? "Waiting to send" : "Refused"}
               </span>
             </li>
           ))}
@@ -95,7 +100,12 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
               <label htmlFor="photo-kind" className="block text-sm font-medium">
                 Photo of
               </label>
-              <select id="photo-kind" value={kind} onChange={(event) => setKind(event.target.value as typeof kind)} className="min-h-touch rounded-card border-2 border-rule bg-surface px-3">
+              <select
+                id="photo-kind"
+                value={kind}
+                onChange={(event) => setKind(event.target.value as typeof kind)}
+                className="min-h-touch rounded-card border-2 border-rule bg-surface px-3"
+              >
                 {PHOTO_KINDS.map((value) => (
                   <option key={value} value={value}>
                     {KIND_LABELS[value]}
@@ -126,15 +136,29 @@ export function PhotosPanel({ visit, canUpload }: { visit: Visit; canUpload: boo
               onChange={(event) => void send(event.target.files?.[0])}
             />
             {/* py-3: 52 px tall, over the 48 px target (min-h-touch alone gives 44). */}
-            <Button variant="secondary" className="py-3" onClick={() => cameraInput.current?.click()} disabled={upload.isPending}>
+            <Button
+              variant="secondary"
+              className="py-3"
+              onClick={() => cameraInput.current?.click()}
+              disabled={upload.isPending}
+            >
               <Camera aria-hidden className="size-5" /> Take photo
             </Button>
-            <Button variant="secondary" className="py-3" onClick={() => galleryInput.current?.click()} disabled={upload.isPending}>
+            <Button
+              variant="secondary"
+              className="py-3"
+              onClick={() => galleryInput.current?.click()}
+              disabled={upload.isPending}
+            >
               <Images aria-hidden className="size-5" /> Choose from gallery
             </Button>
           </div>
           <p className="text-xs text-muted" role="status">
-            {upload.isPending ? "Uploading…" : kept ? "Kept on this device: it is sent when the signal returns." : "JPEG, PNG or WebP, up to 12 MB."}
+            {upload.isPending
+              ? "Uploading…"
+              : kept
+                ? "Kept on this device: it is sent when the signal returns."
+                : "JPEG, PNG or WebP, up to 12 MB."}
           </p>
         </div>
       )}
@@ -157,7 +181,11 @@ function DevicePhoto({ entry }: { entry: OutboxEntry }) {
     return () => URL.revokeObjectURL(address);
   }, [blob]);
   return source ? (
-    <img src={source} alt={`${entry.label}, on this device`} className="aspect-[4/3] w-full rounded-card border-2 border-dashed border-caution object-cover" />
+    <img
+      src={source}
+      alt={`${entry.label}, on this device`}
+      className="aspect-[4/3] w-full rounded-card border-2 border-dashed border-caution object-cover"
+    />
   ) : (
     <div className="aspect-[4/3] w-full rounded-card border-2 border-dashed border-caution" />
   );

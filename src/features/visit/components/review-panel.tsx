@@ -7,7 +7,12 @@ import { FormAlert } from "@/components/ui/field/field.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useEquipmentDetail } from "@/lib/api/equipment.ts";
-import { useElectricalChecks, useEvacuations, usePressureTests, useStandingPressureChecks } from "@/lib/api/procedures.ts";
+import {
+  useElectricalChecks,
+  useEvacuations,
+  usePressureTests,
+  useStandingPressureChecks,
+} from "@/lib/api/procedures.ts";
 import { useVisitRefrigerant } from "@/lib/api/register.ts";
 import { useReviewVisit } from "@/lib/api/visits.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
@@ -19,7 +24,19 @@ interface ReviewPanelProps {
 }
 
 /** A labelled two-line text box for a review note or reason. */
-function ReasonBox({ id, label, value, onChange, placeholder }: { id: string; label: string; value: string; onChange: (value: string) => void; placeholder: string }) {
+function ReasonBox({
+  id,
+  label,
+  value,
+  onChange,
+  placeholder,
+}: {
+  id: string;
+  label: string;
+  value: string;
+  onChange: (value: string) => void;
+  placeholder: string;
+}) {
   return (
     <>
       <label htmlFor={id} className="block font-medium">
@@ -67,20 +84,47 @@ function SubmitChecklist({ visit, onDone }: { visit: Visit; onDone: () => void }
   const needsReason = !hasReason(visit.reason);
   // A check that could not load is said plainly; the technician may still submit (the server checks the reason).
   const items =
-    failed || !equipment.data || !pressureTests.data || !evacuations.data || !standing.data || !electrical.data || !refrigerant.data
+    failed ||
+    !equipment.data ||
+    !pressureTests.data ||
+    !evacuations.data ||
+    !standing.data ||
+    !electrical.data ||
+    !refrigerant.data
       ? []
       : submitChecklist({
           reason: visit.reason,
           circuits: equipment.data.equipment.circuits.map((circuit) => circuit.number),
           // Which circuits have standing readings, counted by the server over all of them.
-          readings: visit.circuitLogs.filter((log) => log.readingCount > 0).map((log) => ({ circuit: log.circuit, voided: null })),
+          readings: visit.circuitLogs
+            .filter((log) => log.readingCount > 0)
+            .map((log) => ({ circuit: log.circuit, voided: null })),
           adjustments: visit.adjustments,
-          registerChargedKg: refrigerant.data.circuits.reduce((sum, circuit) => sum + circuit.addedKg + circuit.reusedKg, 0),
+          registerChargedKg: refrigerant.data.circuits.reduce(
+            (sum, circuit) => sum + circuit.addedKg + circuit.reusedKg,
+            0,
+          ),
           tests: {
-            pressureTests: pressureTests.data.pressureTests.map((test) => ({ voided: test.voided, verdict: test.result.overall.verdict, reason: test.result.overall.reason })),
-            evacuations: evacuations.data.evacuations.map((evacuation) => ({ voided: evacuation.voided, verdict: evacuation.result.overall?.verdict ?? null, reason: evacuation.result.overall?.reason ?? "" })),
-            standingPressureChecks: standing.data.standingPressureChecks.map((check) => ({ voided: check.voided, verdict: check.result.verdict, reason: check.result.reason })),
-            electricalChecks: electrical.data.electricalChecks.map((check) => ({ voided: check.voided, verdict: check.result.overall.verdict, reason: check.result.overall.reason })),
+            pressureTests: pressureTests.data.pressureTests.map((test) => ({
+              voided: test.voided,
+              verdict: test.result.overall.verdict,
+              reason: test.result.overall.reason,
+            })),
+            evacuations: evacuations.data.evacuations.map((evacuation) => ({
+              voided: evacuation.voided,
+              verdict: evacuation.result.overall?.verdict ?? null,
+              reason: evacuation.result.overall?.reason ?? "",
+            })),
+            standingPressureChecks: standing.data.standingPressureChecks.map((check) => ({
+              voided: check.voided,
+              verdict: check.result.verdict,
+              reason: check.result.reason,
+            })),
+            electricalChecks: electrical.data.electricalChecks.map((check) => ({
+              voided: check.voided,
+              verdict: check.result.overall.verdict,
+              reason: check.result.overall.reason,
+            })),
           },
         });
   const warnings = items.filter((item) => !item.blocking);
@@ -92,17 +136,30 @@ function SubmitChecklist({ visit, onDone }: { visit: Visit; onDone: () => void }
       await review.mutateAsync({ visitId: visit.id, action: "submit", ...(needsReason ? { reason } : {}) });
       onDone();
     } catch (caught) {
-      setError(caught instanceof ApiError ? (caught.fields.reason ?? caught.message) : caught instanceof Error ? caught.message : "That did not go through");
+      setError(
+        caught instanceof ApiError
+          ? (caught.fields.reason ?? caught.message)
+          : caught instanceof Error
+            ? caught.message
+            : "That did not go through",
+      );
     }
   };
 
   return (
-    <div role="group" aria-labelledby={`${id}-title`} className="space-y-3 rounded-card border-2 border-ink p-3" data-testid="submit-checklist">
+    <div
+      role="group"
+      aria-labelledby={`${id}-title`}
+      className="space-y-3 rounded-card border-2 border-ink p-3"
+      data-testid="submit-checklist"
+    >
       <h3 id={`${id}-title`} className="flex items-center gap-2 font-semibold">
         <ClipboardCheck aria-hidden className="size-5" /> Before it goes for review
       </h3>
       {failed && <FormAlert>Could not check everything ({failed.message}). You can still submit.</FormAlert>}
-      {!failed && warnings.length === 0 && <p>Nothing to flag: every circuit has readings, no test failed, the charge is in the register.</p>}
+      {!failed && warnings.length === 0 && (
+        <p>Nothing to flag: every circuit has readings, no test failed, the charge is in the register.</p>
+      )}
       {warnings.length > 0 && (
         <ul className="space-y-2" aria-label="Warnings">
           {warnings.map((item) => (
@@ -136,10 +193,13 @@ function SubmitChecklist({ visit, onDone }: { visit: Visit; onDone: () => void }
         </div>
       )}
       {error && <FormAlert>{error}</FormAlert>}
-      {warnings.length > 0 && <p className="text-sm">Confirming says you have read these; the reviewer sees the same records.</p>}
+      {warnings.length > 0 && (
+        <p className="text-sm">Confirming says you have read these; the reviewer sees the same records.</p>
+      )}
       <div className="flex flex-wrap gap-2">
         <Button onClick={() => void submit()} disabled={review.isPending}>
-          <Send aria-hidden className="size-5" /> {review.isPending ? "Submitting…" : warnings.length > 0 ? "Confirm and submit anyway" : "Confirm and submit"}
+          <Send aria-hidden className="size-5" />{" "}
+          {review.isPending ? "Submitting…" : warnings.length > 0 ? "Confirm and submit anyway" : "Confirm and submit"}
         </Button>
         <Button variant="secondary" onClick={onDone} disabled={review.isPending}>
           Not yet
@@ -162,7 +222,8 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
   const act = async (action: "sign-off" | "send-back" | "reopen") => {
     setError(null);
     if (action === "send-back" && reason.trim().length < 3) return setError("Say what needs doing before sign-off");
-    if (action === "reopen" && reopenReason.trim().length < 3) return setError("Say why the visit is reopened, e.g. “pressure test entered wrongly”");
+    if (action === "reopen" && reopenReason.trim().length < 3)
+      return setError("Say why the visit is reopened, e.g. “pressure test entered wrongly”");
     try {
       await review.mutateAsync(
         action === "send-back"
@@ -202,7 +263,8 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
         </div>
       )}
       <div className="mt-3 space-y-3">
-        {canSubmit && submittable &&
+        {canSubmit &&
+          submittable &&
           (checking ? (
             <SubmitChecklist visit={visit} onDone={() => setChecking(false)} />
           ) : (
@@ -212,7 +274,13 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
           ))}
         {canSignOff && reviewable && (
           <div className="space-y-2">
-            <ReasonBox id="review-reason" label="Note or reason" value={reason} onChange={setReason} placeholder="A note with the sign-off, or what needs doing if you send it back" />
+            <ReasonBox
+              id="review-reason"
+              label="Note or reason"
+              value={reason}
+              onChange={setReason}
+              placeholder="A note with the sign-off, or what needs doing if you send it back"
+            />
             <div className="flex flex-wrap gap-2">
               <Button onClick={() => void act("sign-off")} disabled={review.isPending}>
                 Sign off
@@ -232,7 +300,10 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
               onChange={setReopenReason}
               placeholder="What must be corrected, e.g. “pressure test entered as 3500 kPa, was 350”"
             />
-            <p className="text-sm text-muted">Reopening lets the crew void and re-enter records; the reason goes in the audit trail{visit.status === "signed-off" ? " and the visit will need signing off again" : ""}.</p>
+            <p className="text-sm text-muted">
+              Reopening lets the crew void and re-enter records; the reason goes in the audit trail
+              {visit.status === "signed-off" ? " and the visit will need signing off again" : ""}.
+            </p>
             <Button variant="secondary" onClick={() => void act("reopen")} disabled={review.isPending}>
               <LockOpen aria-hidden className="size-5" /> Reopen the visit
             </Button>

@@ -26,7 +26,9 @@ interface VisitVoidActionProps {
 export function VisitVoidAction({ visitId, kind, recordId, what, alsoVoids, disabled }: VisitVoidActionProps) {
   const voidRecord = useVoidRecord();
   const keepWhenOffline = useKeepWhenOffline();
-  const onDevice = useOutboxEntries().find((entry) => entry.kind === "void" && entry.visitId === visitId && entry.body.recordId === recordId);
+  const onDevice = useOutboxEntries().find(
+    (entry) => entry.kind === "void" && entry.visitId === visitId && entry.body.recordId === recordId,
+  );
 
   if (onDevice?.state === "waiting") {
     return (

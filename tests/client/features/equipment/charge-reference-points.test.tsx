@@ -13,7 +13,14 @@ const VISIT = "00000000-0000-4000-8000-000000000020";
 const REFERENCE = {
   id: "00000000-0000-4000-8000-000000000030",
   circuit: 1,
-  values: { subcoolingK: 5, superheatK: 6.1, evaporatingTempC: 6, condensingTempC: 42, outdoorAirDryBulbC: 31, returnAirDryBulbC: null },
+  values: {
+    subcoolingK: 5,
+    superheatK: 6.1,
+    evaporatingTempC: 6,
+    condensingTempC: 42,
+    outdoorAirDryBulbC: 31,
+    returnAirDryBulbC: null,
+  },
   source: "weigh-in",
   setAt: "2026-07-05T03:15:00.000Z",
   setBy: { id: "00000000-0000-4000-8000-000000000040", name: "Lee Hargreaves" },
@@ -41,8 +48,20 @@ function stubApi(current: typeof REFERENCE | null) {
       const url = String(input);
       const method = init?.method ?? "GET";
       sent.push({ method, url, body: init?.body ? JSON.parse(String(init.body)) : undefined });
-      const json = (status: number, payload: unknown) => new Response(JSON.stringify(payload), { status, headers: { "Content-Type": "application/json" } });
-      const answer = () => json(200, { circuits: [{ circuit: 1, correctChargeKg: 4.2, lineAdjustmentKg: 0, current: standing, history: standing ? [standing] : [] }] });
+      const json = (status: number, payload: unknown) =>
+        new Response(JSON.stringify(payload), { status, headers: { "Content-Type": "application/json" } });
+      const answer = () =>
+        json(200, {
+          circuits: [
+            {
+              circuit: 1,
+              correctChargeKg: 4.2,
+              lineAdjustmentKg: 0,
+              current: standing,
+              history: standing ? [standing] : [],
+            },
+          ],
+        });
       if (url === `/api/equipment/${UNIT}/charge-references`) return answer();
       if (url === `/api/equipment/${UNIT}/charge-references/1` && method === "DELETE") {
         standing = null;
@@ -107,7 +126,9 @@ describe("ChargeReferencePoints", () => {
     await user.click(await screen.findByRole("button", { name: "Clear…" }));
     const dialog = screen.getByRole("dialog", { name: /Clear circuit 1/ });
     await user.click(within(dialog).getByRole("button", { name: /Clear the reference point/ }));
-    expect(within(dialog).getByRole("alert", { hidden: true })).toHaveTextContent("Say why the reference point is cleared");
+    expect(within(dialog).getByRole("alert", { hidden: true })).toHaveTextContent(
+      "Say why the reference point is cleared",
+    );
     expect(sent.filter((request) => request.method === "DELETE")).toEqual([]);
     await user.type(within(dialog).getByLabelText("Reason (required)"), "Condenser coil replaced");
     await user.click(within(dialog).getByRole("button", { name: /Clear the reference point/ }));

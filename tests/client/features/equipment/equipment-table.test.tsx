@@ -81,9 +81,13 @@ function serve(answer: (params: URLSearchParams) => { equipment: Equipment[]; ne
     "fetch",
     vi.fn(async (input: RequestInfo | URL) => {
       const url = new URL(String(input), "http://satura.test");
-      if (url.pathname !== "/api/equipment") return new Response(JSON.stringify({ message: "No such route" }), { status: 404 });
+      if (url.pathname !== "/api/equipment")
+        return new Response(JSON.stringify({ message: "No such route" }), { status: 404 });
       asked.push(url.searchParams);
-      return new Response(JSON.stringify(answer(url.searchParams)), { status: 200, headers: { "Content-Type": "application/json" } });
+      return new Response(JSON.stringify(answer(url.searchParams)), {
+        status: 200,
+        headers: { "Content-Type": "application/json" },
+      });
     }),
   );
   return asked;
@@ -116,7 +120,13 @@ describe("EquipmentTable", () => {
   it("shows the page the server sent, in its order, with the circuits and the total factory charge", async () => {
     serve(() => ({ equipment: units, nextCursor: null }));
     const { unitNames } = renderTable();
-    await waitFor(() => expect(unitNames()).toEqual(["RTU-1 packaged rooftop unit", "Server cupboard wall split", "Vaccine and stores cool room"]));
+    await waitFor(() =>
+      expect(unitNames()).toEqual([
+        "RTU-1 packaged rooftop unit",
+        "Server cupboard wall split",
+        "Vaccine and stores cool room",
+      ]),
+    );
     // 2 circuits × 4.2 kg = 8.40 kg in all.
     const rooftop = within(screen.getByRole("table")).getByRole("row", { name: /RTU-1/ });
     expect(within(rooftop).getByText("8.40 kg")).toBeInTheDocument();
@@ -174,7 +184,9 @@ describe("EquipmentTable", () => {
   it("pages with the cursor the server gave, and goes back to the first page", async () => {
     const user = userEvent.setup();
     const asked = serve((params) =>
-      params.get("cursor") === "after-rtu" ? { equipment: units.slice(1), nextCursor: null } : { equipment: units.slice(0, 1), nextCursor: "after-rtu" },
+      params.get("cursor") === "after-rtu"
+        ? { equipment: units.slice(1), nextCursor: null }
+        : { equipment: units.slice(0, 1), nextCursor: "after-rtu" },
     );
     const { unitNames } = renderTable();
     await waitFor(() => expect(unitNames()).toEqual(["RTU-1 packaged rooftop unit"]));

@@ -33,9 +33,13 @@ function serve(answer: (params: URLSearchParams) => { visits: VisitSummary[]; ne
     "fetch",
     vi.fn(async (input: RequestInfo | URL) => {
       const url = new URL(String(input), "http://satura.test");
-      if (url.pathname !== "/api/visits") return new Response(JSON.stringify({ message: "No such route" }), { status: 404 });
+      if (url.pathname !== "/api/visits")
+        return new Response(JSON.stringify({ message: "No such route" }), { status: 404 });
       asked.push(url.searchParams);
-      return new Response(JSON.stringify(answer(url.searchParams)), { status: 200, headers: { "Content-Type": "application/json" } });
+      return new Response(JSON.stringify(answer(url.searchParams)), {
+        status: 200,
+        headers: { "Content-Type": "application/json" },
+      });
     }),
   );
   return asked;
@@ -73,7 +77,9 @@ describe("JobsTable", () => {
 
   it("sorts by unit on the server and starts again from the first page", async () => {
     const user = userEvent.setup();
-    const asked = serve((params) => (params.get("cursor") ? { visits: [older], nextCursor: null } : { visits: [newer], nextCursor: "after-newer" }));
+    const asked = serve((params) =>
+      params.get("cursor") ? { visits: [older], nextCursor: null } : { visits: [newer], nextCursor: "after-newer" },
+    );
     renderJobs();
     await screen.findByRole("table");
     await user.click(screen.getByRole("button", { name: "Next page of visits" }));

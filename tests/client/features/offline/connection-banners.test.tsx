@@ -7,7 +7,8 @@ import { offerUpdate } from "@/features/offline/app-update.ts";
 import { ConnectionBanners } from "@/features/offline/connection-banners.tsx";
 
 /** No one is signed in here, so there is no outbox to count. */
-const render = (element: ReactElement) => renderElement(<QueryClientProvider client={new QueryClient()}>{element}</QueryClientProvider>);
+const render = (element: ReactElement) =>
+  renderElement(<QueryClientProvider client={new QueryClient()}>{element}</QueryClientProvider>);
 
 function setOnline(online: boolean) {
   Object.defineProperty(navigator, "onLine", { configurable: true, get: () => online });

@@ -11,7 +11,13 @@ const STARTED_OFFLINE = "7a1f3f1e-2b6c-4d7e-9f00-000000000003";
 /** 500 microns: the trade's usual target (TRADE.md; makers ask for 500 µm held [S52][S53]). */
 const TARGET = 500;
 
-const entry = (kind: OutboxEntry["kind"], clientId: string, path: string, body: Record<string, unknown>, state: OutboxEntry["state"] = "waiting"): OutboxEntry => ({
+const entry = (
+  kind: OutboxEntry["kind"],
+  clientId: string,
+  path: string,
+  body: Record<string, unknown>,
+  state: OutboxEntry["state"] = "waiting",
+): OutboxEntry => ({
   clientId,
   userId: "tech",
   visitId: VISIT,
@@ -60,8 +66,17 @@ describe("evacuationsOnDevice (what the evacuation panel shows without signal)",
     const [shown] = evacuationsOnDevice(
       list,
       [
-        entry("evacuation-sample", "sample-on-server", evacuationSamplesPath(VISIT, STORED), { minutes: 5, microns: 4000 }),
-        entry("evacuation-sample", "sample-refused", evacuationSamplesPath(VISIT, STORED), { minutes: 3, microns: 100 }, "refused"),
+        entry("evacuation-sample", "sample-on-server", evacuationSamplesPath(VISIT, STORED), {
+          minutes: 5,
+          microns: 4000,
+        }),
+        entry(
+          "evacuation-sample",
+          "sample-refused",
+          evacuationSamplesPath(VISIT, STORED),
+          { minutes: 3, microns: 100 },
+          "refused",
+        ),
       ],
       VISIT,
     );
@@ -73,14 +88,25 @@ describe("evacuationsOnDevice (what the evacuation panel shows without signal)",
     const shown = evacuationsOnDevice(
       list,
       [
-        entry("evacuation", STARTED_OFFLINE, procedureRecordsPath("evacuations", VISIT), { targetMicrons: 300, startedAt: "2026-12-03T11:00:00.000Z" }),
-        entry("evacuation-sample", "offline-1", evacuationSamplesPath(VISIT, STARTED_OFFLINE), { minutes: 12, microns: 800 }),
+        entry("evacuation", STARTED_OFFLINE, procedureRecordsPath("evacuations", VISIT), {
+          targetMicrons: 300,
+          startedAt: "2026-12-03T11:00:00.000Z",
+        }),
+        entry("evacuation-sample", "offline-1", evacuationSamplesPath(VISIT, STARTED_OFFLINE), {
+          minutes: 12,
+          microns: 800,
+        }),
       ],
       VISIT,
     );
     expect(shown.map((evacuation) => evacuation.id)).toEqual([STORED, STARTED_OFFLINE]);
     const started = shown[1]!;
-    expect(started).toMatchObject({ onDevice: true, targetMicrons: 300, startedAt: "2026-12-03T11:00:00.000Z", isolatedAtMinutes: null });
+    expect(started).toMatchObject({
+      onDevice: true,
+      targetMicrons: 300,
+      startedAt: "2026-12-03T11:00:00.000Z",
+      isolatedAtMinutes: null,
+    });
     expect(started.samples).toEqual([expect.objectContaining({ minutes: 12, microns: 800 })]);
     expect(started.result.reached.reached).toBe(false);
   });
@@ -92,7 +118,10 @@ describe("evacuationsOnDevice (what the evacuation panel shows without signal)",
       [
         entry("evacuation", STARTED_OFFLINE, procedureRecordsPath("evacuations", VISIT), { targetMicrons: 500 }),
         // A reading sent after it names it by its client id, and still counts on it.
-        entry("evacuation-sample", "late", evacuationSamplesPath(VISIT, STARTED_OFFLINE), { minutes: 30, microns: 400 }),
+        entry("evacuation-sample", "late", evacuationSamplesPath(VISIT, STARTED_OFFLINE), {
+          minutes: 30,
+          microns: 400,
+        }),
       ],
       VISIT,
     );

@@ -9,9 +9,13 @@ afterEach(cleanup);
 describe("useFieldErrors", () => {
   it("drops a message once its field is corrected and keeps the others", () => {
     const { result, rerender } = renderHook(({ typed }) => useFieldErrors(typed), {
-      initialProps: { typed: { startGaugeKPa: "12,,5", holdMinutes: "", leaks: [] as unknown[] } as Record<string, unknown> },
+      initialProps: {
+        typed: { startGaugeKPa: "12,,5", holdMinutes: "", leaks: [] as unknown[] } as Record<string, unknown>,
+      },
     });
-    act(() => result.current[1]({ startGaugeKPa: "Enter a number", holdMinutes: "Required", "leaks.0.location": "Say where" }));
+    act(() =>
+      result.current[1]({ startGaugeKPa: "Enter a number", holdMinutes: "Required", "leaks.0.location": "Say where" }),
+    );
     expect(Object.keys(result.current[0]).sort()).toEqual(["holdMinutes", "leaks.0.location", "startGaugeKPa"]);
 
     rerender({ typed: { startGaugeKPa: "1250", holdMinutes: "", leaks: [] } });
@@ -19,7 +23,9 @@ describe("useFieldErrors", () => {
   });
 
   it("keeps a message whose field it does not know until the next save", () => {
-    const { result, rerender } = renderHook(({ typed }) => useFieldErrors(typed), { initialProps: { typed: { note: "" } as Record<string, unknown> } });
+    const { result, rerender } = renderHook(({ typed }) => useFieldErrors(typed), {
+      initialProps: { typed: { note: "" } as Record<string, unknown> },
+    });
     act(() => result.current[1]({ atmosphericPressureKPa: "Out of range" }));
     rerender({ typed: { note: "changed" } });
     expect(result.current[0]).toEqual({ atmosphericPressureKPa: "Out of range" });

@@ -37,9 +37,11 @@ function serve(answer: (params: URLSearchParams) => RegisterList) {
     "fetch",
     vi.fn(async (input: RequestInfo | URL) => {
       const url = new URL(String(input), "http://satura.test");
-      const json = (body: unknown) => new Response(JSON.stringify(body), { status: 200, headers: { "Content-Type": "application/json" } });
+      const json = (body: unknown) =>
+        new Response(JSON.stringify(body), { status: 200, headers: { "Content-Type": "application/json" } });
       if (url.pathname === "/api/members") return json({ members: [] });
-      if (url.pathname !== "/api/register") return new Response(JSON.stringify({ message: "No such route" }), { status: 404 });
+      if (url.pathname !== "/api/register")
+        return new Response(JSON.stringify({ message: "No such route" }), { status: 404 });
       asked.push(url.searchParams);
       return json(answer(url.searchParams));
     }),
@@ -65,7 +67,9 @@ describe("RegisterView", () => {
   it("shows the latest page first with the period's totals, and pages on the server", async () => {
     const user = userEvent.setup();
     const asked = serve((params) =>
-      params.get("cursor") ? { movements: [older], totals, allTechnicians: true, nextCursor: null } : { movements: [newest], totals, allTechnicians: true, nextCursor: "after-newest" },
+      params.get("cursor")
+        ? { movements: [older], totals, allTechnicians: true, nextCursor: null }
+        : { movements: [newest], totals, allTechnicians: true, nextCursor: "after-newest" },
     );
     renderRegister();
     const entries = await screen.findByRole("list", { name: "Register entries" });
@@ -75,20 +79,26 @@ describe("RegisterView", () => {
     expect(screen.getByText("R407C · recovered from the system")).toBeInTheDocument();
 
     await user.click(screen.getByRole("button", { name: "Next page of entries" }));
-    await waitFor(() => expect(within(screen.getByRole("list", { name: "Register entries" })).getByText("0.25 kg")).toBeInTheDocument());
+    await waitFor(() =>
+      expect(within(screen.getByRole("list", { name: "Register entries" })).getByText("0.25 kg")).toBeInTheDocument(),
+    );
     expect(asked.at(-1)!.get("cursor")).toBe("after-newest");
     // The totals stay those of the whole period, not of the page shown.
     expect(screen.getByText("3.85 kg")).toBeInTheDocument();
     expect(screen.getByRole("button", { name: "Next page of entries" })).toBeDisabled();
 
     await user.click(screen.getByRole("button", { name: "Previous page of entries" }));
-    await waitFor(() => expect(within(screen.getByRole("list", { name: "Register entries" })).getByText("3.60 kg")).toBeInTheDocument());
+    await waitFor(() =>
+      expect(within(screen.getByRole("list", { name: "Register entries" })).getByText("3.60 kg")).toBeInTheDocument(),
+    );
   });
 
   it("starts again from the first page when the order changes, and exports the whole period", async () => {
     const user = userEvent.setup();
     const asked = serve((params) =>
-      params.get("cursor") ? { movements: [older], totals, allTechnicians: true, nextCursor: null } : { movements: [newest], totals, allTechnicians: true, nextCursor: "after-newest" },
+      params.get("cursor")
+        ? { movements: [older], totals, allTechnicians: true, nextCursor: null }
+        : { movements: [newest], totals, allTechnicians: true, nextCursor: "after-newest" },
     );
     renderRegister({ from: "2026-07-01", to: "", technicianId: "" });
     await screen.findByRole("list", { name: "Register entries" });

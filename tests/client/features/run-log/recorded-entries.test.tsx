@@ -12,11 +12,29 @@ import { METRIC_UNITS } from "@/lib/units/display-units.ts";
 const id = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, "0")}`;
 const VISIT_ID = id(9_999);
 const COUNT = 3 * ENTRIES_PAGE;
-const gauge = (temperatureC: number, point: "bubble" | "dew") => saturationPressure("R407C", temperatureC, point) - STANDARD_ATMOSPHERE_KPA;
-const input = { refrigerant: "R407C", meteringDevice: "txv" as const, suctionPressureKPa: gauge(6, "dew"), suctionLineTempC: 12, liquidPressureKPa: gauge(42, "bubble"), liquidLineTempC: 37 };
+const gauge = (temperatureC: number, point: "bubble" | "dew") =>
+  saturationPressure("R407C", temperatureC, point) - STANDARD_ATMOSPHERE_KPA;
+const input = {
+  refrigerant: "R407C",
+  meteringDevice: "txv" as const,
+  suctionPressureKPa: gauge(6, "dew"),
+  suctionLineTempC: 12,
+  liquidPressureKPa: gauge(42, "bubble"),
+  liquidLineTempC: 37,
+};
 const result = diagnose(input);
 /** Reading n of a series, one a minute. */
-const reading = (n: number): Reading => ({ id: id(n), visitId: VISIT_ID, circuit: 1, takenAt: new Date(Date.UTC(2026, 11, 2, 1, n)).toISOString(), note: null, input, result, recordedBy: null, voided: null });
+const reading = (n: number): Reading => ({
+  id: id(n),
+  visitId: VISIT_ID,
+  circuit: 1,
+  takenAt: new Date(Date.UTC(2026, 11, 2, 1, n)).toISOString(),
+  note: null,
+  input,
+  result,
+  recordedBy: null,
+  voided: null,
+});
 const all = Array.from({ length: COUNT }, (_, n) => reading(n));
 
 /** The visit as the detail sends it: the latest page, and the cursor for the rest. */
@@ -24,7 +42,19 @@ const held = {
   id: VISIT_ID,
   readings: all.slice(-ENTRIES_PAGE),
   adjustments: [],
-  circuitLogs: [{ circuit: 1, recordCount: COUNT, readingCount: COUNT, olderCursor: id(COUNT - ENTRIES_PAGE), firstTakenAt: all[0]!.takenAt, lastTakenAt: all.at(-1)!.takenAt, points: [], trend: null, keyReadings: [] }],
+  circuitLogs: [
+    {
+      circuit: 1,
+      recordCount: COUNT,
+      readingCount: COUNT,
+      olderCursor: id(COUNT - ENTRIES_PAGE),
+      firstTakenAt: all[0]!.takenAt,
+      lastTakenAt: all.at(-1)!.takenAt,
+      points: [],
+      trend: null,
+      keyReadings: [],
+    },
+  ],
 } as unknown as Visit;
 
 /** GET /api/visits/:id/readings: the page before `before`, as the server answers it. */
@@ -47,10 +77,26 @@ function stubPages() {
 
 /** The entries of the visit in the cache, as the run log passes them. */
 function Entries() {
-  const { data } = useQuery<Visit>({ queryKey: ["visits", "detail", VISIT_ID], queryFn: () => held, staleTime: Infinity });
+  const { data } = useQuery<Visit>({
+    queryKey: ["visits", "detail", VISIT_ID],
+    queryFn: () => held,
+    staleTime: Infinity,
+  });
   if (!data) return null;
   const log = data.circuitLogs[0]!;
-  return <RecordedEntries visitId={VISIT_ID} circuit={1} readings={data.readings} olderCursor={log.olderCursor} recordCount={log.recordCount} adjustments={data.adjustments} units={METRIC_UNITS} atmosphericKPa={STANDARD_ATMOSPHERE_KPA} canVoid={false} />;
+  return (
+    <RecordedEntries
+      visitId={VISIT_ID}
+      circuit={1}
+      readings={data.readings}
+      olderCursor={log.olderCursor}
+      recordCount={log.recordCount}
+      adjustments={data.adjustments}
+      units={METRIC_UNITS}
+      atmosphericKPa={STANDARD_ATMOSPHERE_KPA}
+      canVoid={false}
+    />
+  );
 }
 
 afterEach(() => {
@@ -71,7 +117,9 @@ describe("RecordedEntries", () => {
     const list = () => within(screen.getByRole("list", { name: /Entries on circuit 1/ })).getAllByRole("listitem");
     expect(list()).toHaveLength(ENTRIES_PAGE);
     const user = userEvent.setup();
-    await user.click(screen.getByRole("button", { name: `Show earlier entries (${ENTRIES_PAGE} of ${2 * ENTRIES_PAGE} more)` }));
+    await user.click(
+      screen.getByRole("button", { name: `Show earlier entries (${ENTRIES_PAGE} of ${2 * ENTRIES_PAGE} more)` }),
+    );
     expect(await screen.findByTestId(`entry-${id(COUNT - ENTRIES_PAGE - 1)}`)).toBeInTheDocument();
     expect(list()).toHaveLength(2 * ENTRIES_PAGE);
     await user.click(screen.getByRole("button", { name: /Show earlier entries/ }));
