@@ -69,7 +69,8 @@ export function createApp(deps: AppDeps): Express {
   const { env, logger } = deps;
   const app = express();
   app.disable("x-powered-by"); // no need to advertise the framework
-  app.set("trust proxy", "loopback"); // rate limits see the client IP behind a local proxy
+  // Rate limits see the client's address behind the proxies named in TRUST_PROXY, and only those.
+  app.set("trust proxy", env.TRUST_PROXY);
 
   app.use(
     helmet({

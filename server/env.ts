@@ -1,3 +1,4 @@
+import { isIP } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { z } from "zod";
@@ -50,7 +51,30 @@ const EnvSchema = z.object({
    * plain-http deployment on a closed network, or browsers will drop the cookie.
    */
   COOKIE_SECURE: z.enum(["true", "false", "1", "0"]).optional(),
+  /**
+   * The proxies whose X-Forwarded-For is believed, so that the sign-in throttles count the real
+   * client: Express's "trust proxy" list of addresses, subnets (10.0.0.0/24) or its names
+   * loopback, linklocal and uniquelocal, separated by commas. A proxy not listed here cannot
+   * pass on a client address, so no client can forge one. docs/deploy.md.
+   */
+  TRUST_PROXY: z
+    .string()
+    .default("loopback")
+    .transform((value) => value.split(",").map((part) => part.trim()))
+    .refine((parts) => parts.every(isTrustedProxy), {
+      message: "must be addresses, subnets (a.b.c.d/n) or loopback, linklocal, uniquelocal, separated by commas",
+    }),
 });
+
+const PROXY_NAMES = new Set(["loopback", "linklocal", "uniquelocal"]);
+function isTrustedProxy(part: string): boolean {
+  if (PROXY_NAMES.has(part)) return true;
+  const [address, bits, ...rest] = part.split("/");
+  if (rest.length > 0 || !address || isIP(address) === 0) return false;
+  if (bits === undefined) return true;
+  const prefix = Number(bits);
+  return /^\d+$/.test(bits) && prefix <= (isIP(address) === 4 ? 32 : 128);
+}
 
 const isOn = (value: string | undefined) => value === "true" || value === "1";
 

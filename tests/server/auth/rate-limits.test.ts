@@ -153,4 +153,38 @@ describe("sign-in and reset throttling", () => {
       .send({ email: "one-more@example.com" });
     expect(blocked.status).toBe(429);
   });
+
+  // Express's "trust proxy" (https://expressjs.com/en/guide/behind-proxies.html): a forwarded
+  // address counts only when the proxy that sent it is trusted. The tests connect from 127.0.0.1.
+  it("believes X-Forwarded-For only from the proxies in TRUST_PROXY", async () => {
+    const behindOtherProxy = await createTestApp({ env: { TRUST_PROXY: "203.0.113.7" } });
+    try {
+      // Each request claims another address, but 127.0.0.1 is not a trusted proxy: one client.
+      for (let attempt = 0; attempt < DEFAULT_AUTH_LIMITS.resetPerIp; attempt++) {
+        const response = await request(behindOtherProxy.app)
+          .post("/api/auth/password-reset/request")
+          .set("X-Forwarded-For", `198.51.100.${attempt}`)
+          .send({ email: `person${attempt}@example.com` });
+        expect(response.status).toBe(202);
+      }
+      const blocked = await request(behindOtherProxy.app)
+        .post("/api/auth/password-reset/request")
+        .set("X-Forwarded-For", "198.51.100.200")
+        .send({ email: "one-more@example.com" });
+      expect(blocked.status).toBe(429);
+    } finally {
+      await behindOtherProxy.close();
+    }
+  });
+
+  it("refuses a TRUST_PROXY that is not addresses, subnets or Express's names, naming the variable", () => {
+    expect(() => readEnv({ TRUST_PROXY: "everyone" })).toThrow(/TRUST_PROXY/);
+    expect(() => readEnv({ TRUST_PROXY: "10.0.0.0/33" })).toThrow(/TRUST_PROXY/);
+    expect(readEnv({ TRUST_PROXY: "10.0.0.10, 10.0.1.0/24,loopback" }).TRUST_PROXY).toEqual([
+      "10.0.0.10",
+      "10.0.1.0/24",
+      "loopback",
+    ]);
+    expect(readEnv({}).TRUST_PROXY).toEqual(["loopback"]);
+  });
 });
