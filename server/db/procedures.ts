@@ -14,6 +14,7 @@ import type {
   StandingPressureRecordInput,
 } from "@shared/schemas/procedure-records.ts";
 import { ProcedureSettingsSchema } from "@shared/schemas/procedure-records.ts";
+import type { ProcedureLimits } from "@shared/schemas/procedures.ts";
 import type { Database } from "./client.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
 import {
@@ -261,13 +262,13 @@ export async function getVersionedProcedureSettings(
 }
 
 /**
- * Changes only the overrides named in `update` (a null clears one), keeping every other
- * setting, if the settings are still at `version`; undefined when someone changed them since.
+ * Replaces the company's limits with `change(current limits)`, keeping every other setting, if
+ * the settings are still at `version`; undefined when someone changed them since.
  */
-export async function updateProcedureSettings(
+export async function updateProcedureLimits(
   db: Database,
   organisationId: string,
-  update: { evacuationTargetMicrons?: number | null; pressureTestAllowedDropKPa?: number | null },
+  change: (limits: ProcedureLimits) => ProcedureLimits,
   version: number,
 ): Promise<{ settings: ProcedureSettings; version: number } | undefined> {
   return db.transaction(async (tx) => {
@@ -277,16 +278,12 @@ export async function updateProcedureSettings(
       .where(eq(organisations.id, organisationId))
       .for("update");
     if (!row || row.version !== version) return undefined;
-    const next: Record<string, unknown> = { ...row.settings };
-    for (const [key, value] of Object.entries(update)) {
-      if (value === undefined) continue;
-      if (value === null) delete next[key];
-      else next[key] = value;
-    }
+    const procedureLimits = change(ProcedureSettingsSchema.parse(row.settings).procedureLimits ?? {});
+    const next = { ...row.settings, procedureLimits };
     await tx
       .update(organisations)
       .set({ settings: next, settingsVersion: row.version + 1, updatedAt: new Date() })
       .where(eq(organisations.id, organisationId));
-    return { settings: ProcedureSettingsSchema.parse(next), version: row.version + 1 };
+    return { settings: { procedureLimits }, version: row.version + 1 };
   });
 }

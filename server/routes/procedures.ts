@@ -10,7 +10,6 @@
  */
 import { Router } from "express";
 import {
-  DEFAULT_ALLOWED_DROP_KPA,
   ElectricalCheckBodySchema,
   EvacuationCreateSchema,
   EvacuationSampleBodySchema,
@@ -21,10 +20,9 @@ import {
   type ElectricalCheck,
   type LeakSearch,
   type PressureTest,
-  type ProcedureSettings,
   type StandingPressureCheck,
 } from "@shared/schemas/procedure-records.ts";
-import { EVACUATION_LIMITS, evacuationResult, standingPressureOutcome } from "@shared/engine/index.ts";
+import { evacuationResult, standingPressureOutcome } from "@shared/engine/index.ts";
 import { getAuth } from "../auth/session.ts";
 import type { Database } from "../db/client.ts";
 import { getSite } from "../db/equipment.ts";
@@ -53,14 +51,10 @@ import { siteAtmosphere } from "../visits/reading-input.ts";
 import { writeToVisit } from "../visits/write-to-visit.ts";
 import { electricalCheckResult, leakSearchResult, pressureTestRecordResult } from "../procedures/record-results.ts";
 import { loadUnit, loadVisit } from "../visits/load-records.ts";
+import { allowedDropKPa, evacuationTargetMicrons } from "../procedures/company-limits.ts";
 
 const FIELDS = "Some fields need attention";
 
-const targetMicrons = (settings: ProcedureSettings) =>
-  settings.evacuationTargetMicrons ??
-  settings.procedureLimits?.evacuation?.targetMicrons ??
-  EVACUATION_LIMITS.targetMicrons;
-const allowedDropKPa = (settings: ProcedureSettings) => settings.pressureTestAllowedDropKPa ?? DEFAULT_ALLOWED_DROP_KPA;
 /** Minutes since a moment, to the tenth, from the server's clock. */
 const minutesSince = (start: Date) => Math.round((Date.now() - start.getTime()) / 6_000) / 10;
 
@@ -288,7 +282,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     const settings = await getProcedureSettings(db, organisationId);
     res.json({
       evacuations: await listEvacuations(db, organisationId, visit.id),
-      defaults: { targetMicrons: targetMicrons(settings), limits: settings.procedureLimits ?? {} },
+      defaults: { targetMicrons: evacuationTargetMicrons(settings), limits: settings.procedureLimits ?? {} },
     });
   });
 
@@ -300,7 +294,7 @@ export function proceduresRouter({ db }: { db: Database }): Router {
     const { clientId, startedAt, ...body } = EvacuationCreateSchema.parse(req.body);
     requireDeviceTime("startedAt", startedAt, visit);
     const settings = await getProcedureSettings(db, organisationId);
-    const target = body.targetMicrons ?? targetMicrons(settings);
+    const target = body.targetMicrons ?? evacuationTargetMicrons(settings);
     const samples = body.samples ?? [];
     const isolatedAtMinutes = body.isolatedAtMinutes ?? null;
     const { entry, replayed } = await recordOnVisit(organisationId, visit.id, user.id, (tx) =>

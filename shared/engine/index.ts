@@ -177,11 +177,13 @@ export {
   MAX_PLAUSIBLE_TIMES_RATED,
   CURRENT_IMBALANCE_MAX_PERCENT,
   TEST_PRESSURE_LIMITS,
+  PRESSURE_HOLD_LIMITS,
   EVACUATION_LIMITS,
   CYLINDER_FILL_LIMITS,
   CHARGE_LIMITS,
 } from "./procedures/procedure-limits.ts";
 export type {
+  PressureHoldLimits,
   VoltageImbalanceLimits,
   SupplyVoltageLimits,
   InsulationLimits,

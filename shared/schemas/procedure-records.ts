@@ -6,6 +6,7 @@
  * the engine's result shapes come from ./procedures.ts; this file composes them into records.
  */
 import { z } from "zod";
+import { PRESSURE_HOLD_LIMITS } from "../engine/procedures/procedure-limits.ts";
 import { MAX_GAUGE_PRESSURE_KPA } from "./diagnosis.ts";
 import { MAX_CIRCUITS } from "./equipment.ts";
 import {
@@ -314,18 +315,11 @@ export const PRESSURE_TEST_SECTION_LABELS: Record<PressureTestSection, string> =
 };
 
 /**
- * Allowed drop over the hold when the organisation sets none, kPa: "no drop" [S53][S67], read
- * as no drop beyond what a gauge and a thermometer can resolve — 1 kPa of gauge resolution plus
- * ±0.5 K of temperature uncertainty at about 14 kPa/K near 4 MPa (trade notes §5.3) is about
- * 10 kPa (this app's choice; common practice leaves it to the gauge).
- */
-export const DEFAULT_ALLOWED_DROP_KPA = 10;
-/**
  * Largest allowed drop a company may set, kPa: five times the default. The test asks for no
  * drop [S53][S67]; a larger allowance than gauge and thermometer error explain would pass a
  * leaking joint (this app's ceiling).
  */
-export const MAX_ALLOWED_DROP_KPA = 50;
+export const MAX_ALLOWED_DROP_KPA = 5 * PRESSURE_HOLD_LIMITS.allowedDropKPa;
 const CompanyAllowedDropSchema = z
   .number({ error: "Allowed drop must be a number in kPa" })
   .min(0, "Allowed drop cannot be negative")
@@ -503,13 +497,13 @@ export const EvacuationListSchema = z.object({
 export type EvacuationList = z.infer<typeof EvacuationListSchema>;
 
 /**
- * Organisation settings read for procedures (organisations.settings); anything else there is
- * ignored, and a malformed figure falls back to the default.
+ * Organisation settings read for procedures (organisations.settings): the company's one limits
+ * object, the engine's own limit groups where the organisation's codes differ (the evacuation
+ * target is `evacuation.targetMicrons`, the pressure test's allowed drop
+ * `pressureHold.allowedDropKPa`). Anything else there is ignored, and malformed limits fall back
+ * to the defaults.
  */
 export const ProcedureSettingsSchema = z.object({
-  evacuationTargetMicrons: TargetMicronsSchema.optional().catch(undefined),
-  pressureTestAllowedDropKPa: CompanyAllowedDropSchema.optional().catch(undefined),
-  /** The engine's own limit groups, where the organisation's codes differ. */
   procedureLimits: ProcedureLimitsSchema.optional().catch(undefined),
 });
 export type ProcedureSettings = z.infer<typeof ProcedureSettingsSchema>;

@@ -298,7 +298,9 @@ describe("procedure records API", () => {
   it("uses the organisation's evacuation target and allowed drop when it sets them", async () => {
     await testApp.database.db
       .update(organisations)
-      .set({ settings: { evacuationTargetMicrons: 300, pressureTestAllowedDropKPa: 5 } })
+      .set({
+        settings: { procedureLimits: { evacuation: { targetMicrons: 300 }, pressureHold: { allowedDropKPa: 5 } } },
+      })
       .where(eq(organisations.id, organisationId));
     const evacuations = await technician.get(`/api/visits/${visitId}/evacuations`);
     expect(evacuations.body.defaults.targetMicrons).toBe(300);

@@ -113,6 +113,18 @@ export const TEST_PRESSURE_LIMITS = {
 };
 export type TestPressureLimits = typeof TEST_PRESSURE_LIMITS;
 
+/**
+ * Allowed drop over a pressure test's hold when the organisation sets none, kPa: "no drop"
+ * [S53][S67], read as no drop beyond what a gauge and a thermometer can resolve — 1 kPa of gauge
+ * resolution plus ±0.5 K of temperature uncertainty at about 14 kPa/K near 4 MPa (trade notes
+ * §5.3) is about 10 kPa (this app's choice; common practice leaves it to the gauge). A test
+ * record keeps the allowance it was judged by, so this is the default a new record starts from.
+ */
+export const PRESSURE_HOLD_LIMITS = {
+  allowedDropKPa: 10,
+};
+export type PressureHoldLimits = typeof PRESSURE_HOLD_LIMITS;
+
 // ---- Evacuation (trade notes §4) ------------------------------------------------------------------------
 
 /**
