@@ -1,3 +1,6 @@
+// Its page.evaluate callbacks run in Chromium, so they are checked against the DOM.
+/// <reference lib="dom" />
+/// <reference lib="dom.iterable" />
 /**
  * `npm run bench:diagram`: how long the pressure–enthalpy diagram takes to draw in a real
  * browser. Builds nothing itself (the npm script runs `vite build` first); starts the production

@@ -1,3 +1,6 @@
+// Its page.evaluate callbacks run in Chromium, so they are checked against the DOM.
+/// <reference lib="dom" />
+/// <reference lib="dom.iterable" />
 /**
  * `npm run bench:web`: what the browser downloads, and how soon the run log answers on a phone.
  * The npm script builds the client first (`vite build`); this starts the production server on an

@@ -1,3 +1,6 @@
+// Its page.evaluate callbacks run in Chromium, so they are checked against the DOM.
+/// <reference lib="dom" />
+/// <reference lib="dom.iterable" />
 /**
  * The phone the web benches measure on and the page they wait for, in one place for
  * `first-load.ts` and `run-log-timeline.ts`.

@@ -1,3 +1,6 @@
+// Its page.evaluate callbacks run in Chromium, so they are checked against the DOM.
+/// <reference lib="dom" />
+/// <reference lib="dom.iterable" />
 /**
  * `npx tsx bench/web/run-log-timeline.ts [path]`: where the run log's first load spends its time on
  * the throttled phone profile of `bench:web` — each request's start and end from navigation, the
