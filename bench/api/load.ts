@@ -46,15 +46,69 @@ function percentile(sorted: readonly number[], fraction: number): number {
 }
 
 export async function runLoad(options: LoadOptions): Promise<LoadResult> {
+  return summarise(await runRaw(options));
+}
+
+/**
+ * The same load spread over several app servers, as a load balancer would: the connections
+ * split evenly between `origins` (each server's share runs at once), one result over all answers.
+ */
+export async function runLoadAcross(
+  origins: readonly string[],
+  options: Omit<LoadOptions, "origin">,
+): Promise<LoadResult> {
+  const shares = origins.map((origin, index) => ({
+    ...options,
+    origin,
+    connections:
+      Math.floor(options.connections / origins.length) + (index < options.connections % origins.length ? 1 : 0),
+    maxRequests: options.maxRequests && Math.ceil(options.maxRequests / origins.length),
+  }));
+  const runs = await Promise.all(shares.filter((share) => share.connections > 0).map(runRaw));
+  return summarise({
+    latencies: runs.flatMap((run) => run.latencies),
+    unexpected: runs.reduce<Record<number, number>>((all, run) => {
+      for (const [status, count] of Object.entries(run.unexpected))
+        all[Number(status)] = (all[Number(status)] ?? 0) + count;
+      return all;
+    }, {}),
+    bytes: runs.reduce((sum, run) => sum + run.bytes, 0),
+    elapsed: Math.max(...runs.map((run) => run.elapsed)),
+  });
+}
+
+interface RawRun {
+  latencies: number[];
+  unexpected: Record<number, number>;
+  bytes: number;
+  /** Seconds the run took. */
+  elapsed: number;
+}
+
+async function runRaw(options: LoadOptions): Promise<RawRun> {
   const timed = await runOnce(options, { duration: options.seconds });
   // Slower than the run itself: one awaited request per connection instead.
-  return timed.requests > 0 ? timed : runOnce(options, { amount: options.connections });
+  return timed.latencies.length > 0 ? timed : runOnce(options, { amount: options.connections });
+}
+
+function summarise({ latencies, unexpected, bytes, elapsed }: RawRun): LoadResult {
+  const sorted = [...latencies].sort((a, b) => a - b);
+  return {
+    requests: sorted.length,
+    unexpected,
+    p50: percentile(sorted, 0.5),
+    p95: percentile(sorted, 0.95),
+    p99: percentile(sorted, 0.99),
+    max: sorted.at(-1) ?? Number.NaN,
+    perSecond: sorted.length / elapsed,
+    meanBytes: sorted.length ? bytes / sorted.length : 0,
+  };
 }
 
 async function runOnce(
   { origin, connections, maxRequests, next, expectStatus = [200] }: LoadOptions,
   length: { duration: number } | { amount: number },
-): Promise<LoadResult> {
+): Promise<RawRun> {
   const latencies: number[] = [];
   const unexpected: Record<number, number> = {};
   let issued = 0;
@@ -98,15 +152,5 @@ async function runOnce(
   const failed = result.errors;
   if (failed > 0) unexpected[0] = failed;
   const elapsed = (result.finish.getTime() - result.start.getTime()) / 1000;
-  const sorted = latencies.sort((a, b) => a - b);
-  return {
-    requests: sorted.length,
-    unexpected,
-    p50: percentile(sorted, 0.5),
-    p95: percentile(sorted, 0.95),
-    p99: percentile(sorted, 0.99),
-    max: sorted.at(-1) ?? Number.NaN,
-    perSecond: sorted.length / elapsed,
-    meanBytes: sorted.length ? bytes / sorted.length : 0,
-  };
+  return { latencies, unexpected, bytes, elapsed };
 }
