@@ -7,6 +7,8 @@ import { readEnv } from "@server/env.ts";
 import { createLogger } from "@server/logger.ts";
 import { createMailer, type Mailer } from "@server/mail/mailer.ts";
 import type { FakeSmtp } from "@server/mail/fake-smtp.ts";
+import { createPhotoStore } from "@server/photos/create-photo-store.ts";
+import type { PhotoStore } from "@server/photos/photo-store.ts";
 import { createTestDatabase } from "./test-database.ts";
 
 export interface TestApp {
@@ -15,6 +17,8 @@ export interface TestApp {
   mailer: Mailer;
   /** The in-process SMTP server that receives every message the app sends. */
   smtp: FakeSmtp;
+  /** Where this app keeps photos: UPLOADS_DIR, or the bucket PHOTO_STORE=s3 names. */
+  photoStore: PhotoStore;
   close: () => Promise<void>;
 }
 
@@ -38,13 +42,16 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
   });
   const logger = createLogger(env, options.logDestination);
   const mailer = await createMailer({ env, db: database.db, logger });
-  const app = createApp({ db: database.db, env, logger, mailer, authLimits: options.authLimits });
+  const photoStore = await createPhotoStore(env.photoStore);
+  const app = createApp({ db: database.db, env, logger, mailer, photoStore, authLimits: options.authLimits });
   return {
     app,
     database,
     mailer,
     smtp: mailer.fakeSmtp!,
+    photoStore,
     close: async () => {
+      photoStore.close();
       await mailer.close();
       await database.close();
     },
