@@ -9,6 +9,7 @@ import { createMailer, type Mailer } from "@server/mail/mailer.ts";
 import type { FakeSmtp } from "@server/mail/fake-smtp.ts";
 import { createPhotoStore } from "@server/photos/create-photo-store.ts";
 import type { PhotoStore } from "@server/photos/photo-store.ts";
+import { startS3TestStore } from "./photo-stores.ts";
 import { createTestDatabase } from "./test-database.ts";
 
 export interface TestApp {
@@ -33,11 +34,16 @@ export interface TestAppOptions {
 /** The real app in-process over a fresh database, as the server builds it, with a fake SMTP server. */
 export async function createTestApp(options: TestAppOptions = {}): Promise<TestApp> {
   const database = await createTestDatabase();
+  // TEST_PHOTO_STORE=s3 runs every test that does not pick a store with photos in a bucket of an
+  // in-process s3rver: the whole server suite on the other store, unchanged.
+  const bucket =
+    process.env.TEST_PHOTO_STORE === "s3" && !options.env?.PHOTO_STORE ? await startS3TestStore() : undefined;
   const env = readEnv({
     NODE_ENV: "test",
     DATA_DIR: "memory://",
     APP_URL: "http://satura.test",
     LOG_LEVEL: options.logDestination ? "info" : "silent",
+    ...bucket?.env,
     ...options.env,
   });
   const logger = createLogger(env, options.logDestination);
@@ -54,6 +60,7 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
       photoStore.close();
       await mailer.close();
       await database.close();
+      await bucket?.close();
     },
   };
 }
