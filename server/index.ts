@@ -60,10 +60,10 @@ if (env.NODE_ENV === "development") {
 const mailer = await createMailer({ env, db: database.db, logger });
 if (mailer.fakeSmtp) logger.info(`fake SMTP server on ${mailer.fakeSmtp.host}:${mailer.fakeSmtp.port}`);
 
-// Photos in a local folder or a bucket (PHOTO_STORE); a store not ready yet is reported, not fatal:
-// the bucket may come up after the app, and readiness keeps saying so until it does.
+// Photos in a local folder or a bucket (PHOTO_STORE). A store not ready yet is reported, not fatal,
+// and never holds up listening: the bucket may come up after the app, and readiness says so meanwhile.
 const photoStore = await createPhotoStore(env.photoStore);
-await photoStore.check().then(
+void photoStore.check().then(
   () => logger.info(`photos kept in ${photoStore.description}`),
   (error: unknown) => logger.warn({ err: error }, "the photo store is not ready"),
 );

@@ -315,6 +315,12 @@ export function visitsRouter({
     const meta = PhotoFieldsSchema.parse(req.body ?? {});
     requireDeviceTime("takenAt", meta.takenAt, visit);
     const stored = await storePhoto(photoStore, req.file.buffer);
+    // Removing files nobody will use must not hide the answer (or the error) of the request: a
+    // store that fails here leaves an orphan object, which costs only space.
+    const discard = () =>
+      discardPhoto(photoStore, stored).catch((failure: unknown) =>
+        req.log.warn({ err: failure, name: stored.storedName }, "could not remove the files of a photo not kept"),
+      );
     try {
       const { entry, replayed } = await writeToVisit(db, organisationId, visit.id, (tx) =>
         insertPhoto(tx, organisationId, {
@@ -328,10 +334,10 @@ export function visitsRouter({
         }),
       );
       // A send that raced its repeat stored no row: its files are nobody's.
-      if (replayed) await discardPhoto(photoStore, stored);
+      if (replayed) await discard();
       sendEntry(res, { photo: entry }, replayed);
     } catch (error) {
-      await discardPhoto(photoStore, stored);
+      await discard();
       throw error;
     }
   });
