@@ -8,6 +8,7 @@ import { createServer } from "node:http";
 import type { Application } from "../shared/schemas/diagnosis.ts";
 import type { AddressInfo } from "node:net";
 import { createApp } from "../server/app.ts";
+import { createLocalPhotoStore } from "../server/photos/local-photo-store.ts";
 import { openDatabase } from "../server/db/client.ts";
 import { demoSite } from "../server/db/seed/demo-scenario.ts";
 import { seedDemoData } from "../server/db/seed/seed-demo.ts";
@@ -46,7 +47,9 @@ registerBench("CSV import (5 000 rows) and /api/health meanwhile", async () => {
   await seedDemoData(database.db);
   const logger = createLogger(env);
   const mailer = await createMailer({ env, db: database.db, logger });
-  const server = createServer(createApp({ db: database.db, env, logger, mailer }));
+  const server = createServer(
+    createApp({ db: database.db, env, logger, mailer, photoStore: createLocalPhotoStore(env.UPLOADS_DIR) }),
+  );
   await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
   const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api`;
 

@@ -17,6 +17,7 @@ import type { Env } from "./env.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
 import { precompressedAssets } from "./http/precompressed-assets.ts";
 import type { Mailer } from "./mail/mailer.ts";
+import type { PhotoStore } from "./photos/photo-store.ts";
 import { attemptsRouter } from "./routes/attempts.ts";
 import { authRouter } from "./routes/auth.ts";
 import { casesRouter } from "./routes/cases.ts";
@@ -43,6 +44,8 @@ export interface AppDeps {
   logger: Logger;
   /** Outgoing mail (server/mail/mailer.ts); the caller starts it and closes it. */
   mailer: Mailer;
+  /** Where photos are kept (server/photos/create-photo-store.ts); the caller opens it and closes it. */
+  photoStore: PhotoStore;
   /** Tighter or looser sign-in and reset throttles (tests); defaults in server/auth/rate-limits.ts. */
   authLimits?: Partial<AuthLimits>;
   /** Serves the client: Vite's dev middleware, or nothing (the built files are served from dist/). */

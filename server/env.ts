@@ -21,6 +21,21 @@ const EnvSchema = z.object({
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   /** Folder for uploaded photos. Defaults to data/uploads, or a temporary folder with an in-memory database. */
   UPLOADS_DIR: z.string().min(1).optional(),
+  /** Where photos are kept: "local" (UPLOADS_DIR) or "s3" (a bucket of S3-compatible storage). */
+  PHOTO_STORE: z.enum(["local", "s3"]).default("local"),
+  /** The bucket, with PHOTO_STORE=s3: 3–63 lowercase letters, digits, dots and hyphens (S3's naming rules). */
+  S3_BUCKET: z
+    .string()
+    .regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, "must be 3–63 lowercase letters, digits, dots or hyphens")
+    .optional(),
+  /** An S3-compatible service's address (MinIO, Ceph, R2…); AWS's own endpoint when absent. */
+  S3_ENDPOINT: z.url({ protocol: /^https?$/ }).optional(),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  /** Both or neither: without them the AWS SDK's default chain (AWS_* variables, instance role) is used. */
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  /** Bucket in the path rather than the host name. Defaults to on with S3_ENDPOINT (most non-AWS services), else off. */
+  S3_FORCE_PATH_STYLE: z.enum(["true", "false", "1", "0"]).optional(),
 
   /**
    * The address people reach Satura at, e.g. https://satura.example.com. Links in e-mails
@@ -78,22 +93,56 @@ function isTrustedProxy(part: string): boolean {
 
 const isOn = (value: string | undefined) => value === "true" || value === "1";
 
+/** What server/photos/create-photo-store.ts needs to open the store PHOTO_STORE names. */
+function photoStoreSettings(env: z.infer<typeof EnvSchema>, uploadsDir: string) {
+  if (env.PHOTO_STORE === "local") return { kind: "local" as const, folder: uploadsDir };
+  return {
+    kind: "s3" as const,
+    // Checked by the refinement above: s3 without a bucket never gets here.
+    bucket: env.S3_BUCKET ?? "",
+    endpoint: env.S3_ENDPOINT,
+    region: env.S3_REGION,
+    forcePathStyle:
+      env.S3_FORCE_PATH_STYLE === undefined ? env.S3_ENDPOINT !== undefined : isOn(env.S3_FORCE_PATH_STYLE),
+    credentials:
+      env.S3_ACCESS_KEY_ID && env.S3_SECRET_ACCESS_KEY
+        ? { accessKeyId: env.S3_ACCESS_KEY_ID, secretAccessKey: env.S3_SECRET_ACCESS_KEY }
+        : undefined,
+  };
+}
+
 /** Settings derived from several variables, worked out once here rather than at each use. */
 const ResolvedEnvSchema = EnvSchema.superRefine((env, context) => {
   // Real mail carries sign-in links; they must point at the public address, not a guess.
   if (env.SMTP_HOST && !env.APP_URL && env.NODE_ENV === "production") {
     context.addIssue({ code: "custom", path: ["APP_URL"], message: "is required when SMTP_HOST is set in production" });
   }
-}).transform((env) => ({
-  ...env,
-  APP_URL: (env.APP_URL ?? `http://localhost:${env.PORT}`).replace(/\/+$/, ""),
-  UPLOADS_DIR:
+  if (env.PHOTO_STORE === "s3" && !env.S3_BUCKET) {
+    context.addIssue({ code: "custom", path: ["S3_BUCKET"], message: "is required when PHOTO_STORE is s3" });
+  }
+  // One key without the other would fall back to the SDK's chain silently, with other credentials.
+  if (Boolean(env.S3_ACCESS_KEY_ID) !== Boolean(env.S3_SECRET_ACCESS_KEY)) {
+    const missing = env.S3_ACCESS_KEY_ID ? "S3_SECRET_ACCESS_KEY" : "S3_ACCESS_KEY_ID";
+    context.addIssue({
+      code: "custom",
+      path: [missing],
+      message: "is required with the other S3 key (set both or neither)",
+    });
+  }
+}).transform((env) => {
+  const uploadsDir =
     env.UPLOADS_DIR ??
-    (env.DATA_DIR === "memory://" ? join(tmpdir(), `satura-uploads-${process.pid}`) : "data/uploads"),
-  outboxEnabled:
-    !env.SMTP_HOST && (env.OUTBOX_ENABLED === undefined ? env.NODE_ENV !== "production" : isOn(env.OUTBOX_ENABLED)),
-  cookieSecure: env.COOKIE_SECURE === undefined ? env.NODE_ENV === "production" : isOn(env.COOKIE_SECURE),
-}));
+    (env.DATA_DIR === "memory://" ? join(tmpdir(), `satura-uploads-${process.pid}`) : "data/uploads");
+  return {
+    ...env,
+    APP_URL: (env.APP_URL ?? `http://localhost:${env.PORT}`).replace(/\/+$/, ""),
+    UPLOADS_DIR: uploadsDir,
+    photoStore: photoStoreSettings(env, uploadsDir),
+    outboxEnabled:
+      !env.SMTP_HOST && (env.OUTBOX_ENABLED === undefined ? env.NODE_ENV !== "production" : isOn(env.OUTBOX_ENABLED)),
+    cookieSecure: env.COOKIE_SECURE === undefined ? env.NODE_ENV === "production" : isOn(env.COOKIE_SECURE),
+  };
+});
 
 export type Env = z.infer<typeof ResolvedEnvSchema>;
 

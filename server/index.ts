@@ -15,6 +15,7 @@ import { seedDemoData } from "./db/seed/seed-demo.ts";
 import { upgradeStoredDiagnoses } from "./db/upgrade-stored-diagnoses.ts";
 import { readEnv } from "./env.ts";
 import { createMailer } from "./mail/mailer.ts";
+import { createPhotoStore } from "./photos/create-photo-store.ts";
 import { createLogger } from "./logger.ts";
 
 const env = readEnv();
@@ -59,7 +60,15 @@ if (env.NODE_ENV === "development") {
 const mailer = await createMailer({ env, db: database.db, logger });
 if (mailer.fakeSmtp) logger.info(`fake SMTP server on ${mailer.fakeSmtp.host}:${mailer.fakeSmtp.port}`);
 
-const app = createApp({ db: database.db, env, logger, mailer, clientMiddleware });
+// Photos in a local folder or a bucket (PHOTO_STORE). A store not ready yet is reported, not fatal,
+// and never holds up listening: the bucket may come up after the app, and readiness says so meanwhile.
+const photoStore = await createPhotoStore(env.photoStore);
+void photoStore.check().then(
+  () => logger.info(`photos kept in ${photoStore.description}`),
+  (error: unknown) => logger.warn({ err: error }, "the photo store is not ready"),
+);
+
+const app = createApp({ db: database.db, env, logger, mailer, photoStore, clientMiddleware });
 const server: Server = app.listen(env.PORT, env.HOST, () => {
   const address = server.address();
   const port = typeof address === "object" && address ? address.port : env.PORT;

@@ -1,105 +1,34 @@
-import { randomBytes } from "node:crypto";
-import { mkdir, readFile, rm, writeFile } from "node:fs/promises";
-import { join } from "node:path";
-import sharp, { type Metadata } from "sharp";
-import { HttpError } from "../http/http-error.ts";
-
-/** Photos larger than this are refused: a phone camera JPEG is 2–6 MB. */
-export const MAX_PHOTO_BYTES = 12 * 1024 * 1024;
 /**
- * Largest photo accepted, in pixels: 50 megapixels, the full resolution of today's largest
- * common phone sensors. Decoding takes 3–4 bytes a pixel, so a 12 MB file that claims
- * 16000 × 16000 pixels would need about 1 GB; sharp refuses to decode beyond this
- * (limitInputPixels, https://sharp.pixelplumbing.com/api-constructor).
+ * Where photo bytes are kept, apart from how they are checked (prepare-photo.ts) and named
+ * (stored-photos.ts). Two implementations: a local folder (local-photo-store.ts, the default)
+ * and S3-compatible object storage (s3-photo-store.ts); create-photo-store.ts picks one from
+ * the environment. Decision 036 in the README.
  */
-export const MAX_PHOTO_PIXELS = 50_000_000;
-const THUMBNAIL_WIDTH = 320;
-/** Re-encoding quality of the stored original: close to what a phone camera writes. */
-const ORIGINAL_QUALITY = 90;
-
-/** What the content says the file is; the name and the browser's type are not trusted. */
-const ACCEPTED_FORMATS = { jpeg: "image/jpeg", png: "image/png", webp: "image/webp" } as const;
-type AcceptedFormat = keyof typeof ACCEPTED_FORMATS;
-const isAccepted = (format: string | undefined): format is AcceptedFormat =>
-  format !== undefined && format in ACCEPTED_FORMATS;
-
-export interface StoredPhoto {
-  storedName: string;
-  thumbnailName: string;
-  mimeType: string;
-  bytes: number;
+export interface PhotoStore {
+  /** What the store is, for logs and readiness answers: never a credential. */
+  readonly description: string;
+  /** Keeps bytes under a name; an existing object of that name is replaced. */
+  put(name: string, bytes: Buffer, contentType: string): Promise<void>;
+  /** The bytes kept under a name, or null when there are none: the caller answers 404. */
+  get(name: string): Promise<Buffer | null>;
+  /** Removes a name; a name already gone is not an error. */
+  delete(name: string): Promise<void>;
+  /**
+   * Resolves when the store can take and serve photos now; rejects with an Error whose message
+   * says what is wrong (folder not writable, bucket missing, endpoint unreachable).
+   */
+  check(): Promise<void>;
+  /** Lets go of connections (the S3 client's sockets); the store is not used afterwards. */
+  close(): void;
 }
 
-const megapixels = (pixels: number) => `${Math.round(pixels / 100_000) / 10} megapixels`;
-
-/**
- * Checks an upload by decoding it (not by its extension), then writes the original and a
- * small WebP thumbnail under random names, so a file name can never steer where it goes.
- *
- * The stored original is decoded and encoded again rather than kept byte for byte: that drops
- * its metadata (EXIF with the GPS position and the phone's make and serial, XMP, IPTC), which
- * sharp leaves out of every output unless asked to keep it. rotate() first turns the pixels
- * upright by the EXIF orientation, so the photo still shows the right way up without it.
- *
- * @throws HttpError 415 when the content is not a JPEG, PNG or WebP, 422 when it has more than
- *   MAX_PHOTO_PIXELS pixels, 400 when it cannot be decoded to the end (cut off or damaged).
- */
-export async function storePhoto(folder: string, buffer: Buffer): Promise<StoredPhoto> {
-  let metadata: Metadata | undefined;
-  try {
-    metadata = await sharp(buffer).metadata();
-  } catch {
-    metadata = undefined;
-  }
-  const format = metadata?.format;
-  if (!metadata || !isAccepted(format)) throw new HttpError(415, "That file is not a JPEG, PNG or WebP photo");
-  const pixels = (metadata.width ?? 0) * (metadata.height ?? 0);
-  if (pixels > MAX_PHOTO_PIXELS) {
-    throw new HttpError(
-      422,
-      `That photo is ${metadata.width} × ${metadata.height} pixels (${megapixels(pixels)}); Satura takes photos up to ${megapixels(MAX_PHOTO_PIXELS)}. Use the camera's normal setting, or make the photo smaller.`,
-    );
-  }
-
-  let original: Buffer;
-  let thumbnail: Buffer;
-  try {
-    const upright = sharp(buffer, { limitInputPixels: MAX_PHOTO_PIXELS }).rotate();
-    const encoded = upright.clone();
-    if (format === "jpeg") encoded.jpeg({ quality: ORIGINAL_QUALITY });
-    else if (format === "webp") encoded.webp({ quality: ORIGINAL_QUALITY });
-    else encoded.png();
-    [original, thumbnail] = await Promise.all([
-      encoded.toBuffer(),
-      upright.clone().resize({ width: THUMBNAIL_WIDTH, withoutEnlargement: true }).webp({ quality: 70 }).toBuffer(),
-    ]);
-  } catch {
-    // The header was readable but the pixels are not: a cut-off upload or a damaged file.
-    throw new HttpError(
-      400,
-      "That photo could not be read to the end: the file is damaged or incomplete. Take or choose it again.",
-    );
-  }
-
-  await mkdir(folder, { recursive: true });
-  const base = randomBytes(16).toString("hex");
-  const storedName = `${base}.${format === "jpeg" ? "jpg" : format}`;
-  const thumbnailName = `${base}-thumb.webp`;
-  await writeFile(join(folder, storedName), original);
-  await writeFile(join(folder, thumbnailName), thumbnail);
-  return { storedName, thumbnailName, mimeType: ACCEPTED_FORMATS[format], bytes: original.length };
+/** One readiness check, as a readiness endpoint lists them: a name and a check that rejects with the reason. */
+export interface ReadinessCheck {
+  name: string;
+  check: () => Promise<void>;
 }
 
-export function readPhoto(folder: string, name: string): Promise<Buffer> {
-  // Names come from the database, never from the request; still refuse anything path-like.
-  if (!/^[a-f0-9]{32}(-thumb)?\.(jpg|png|webp)$/.test(name)) throw new HttpError(404, "Photo not found");
-  return readFile(join(folder, name));
-}
-
-/** Removes the files of a photo that was refused after they were written (its visit closed meanwhile). */
-export async function discardPhoto(
-  folder: string,
-  photo: Pick<StoredPhoto, "storedName" | "thumbnailName">,
-): Promise<void> {
-  await Promise.all([photo.storedName, photo.thumbnailName].map((name) => rm(join(folder, name), { force: true })));
+/** The photo store's readiness check: can photos be written and read right now. */
+export function photoStoreReadinessCheck(store: PhotoStore): ReadinessCheck {
+  return { name: "photo store", check: () => store.check() };
 }

@@ -4,6 +4,7 @@ import type { Auth } from "../auth/lucia.ts";
 import type { Database } from "../db/client.ts";
 import type { Env } from "../env.ts";
 import type { Mailer } from "../mail/mailer.ts";
+import type { PhotoStore } from "../photos/photo-store.ts";
 
 /** What the account routes need, built once in createApp. */
 export interface AccountRouteDeps {
@@ -13,4 +14,5 @@ export interface AccountRouteDeps {
   auth: Auth;
   mailer: Mailer;
   limiters: AuthLimiters;
+  photoStore: PhotoStore;
 }

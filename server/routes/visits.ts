@@ -42,7 +42,8 @@ import { reviewVisit } from "../visits/review-visit.ts";
 import { judgeCsvOffThread } from "../import/csv-import-pool.ts";
 import { ImportFieldsSchema } from "../import/readings-csv.ts";
 import { storeImportedReadings } from "../import/store-imported-readings.ts";
-import { discardPhoto, MAX_PHOTO_BYTES, readPhoto, storePhoto } from "../photos/photo-store.ts";
+import { MAX_PHOTO_BYTES } from "../photos/prepare-photo.ts";
+import { discardPhoto, readPhoto, storePhoto } from "../photos/stored-photos.ts";
 import { visitReportMail } from "../report/visit-report-mail.ts";
 import { chargeMovementKind, linkToMovement, recordChargeEntry } from "../register/charge-entry.ts";
 import { createReadingSaver } from "../visits/save-readings.ts";
@@ -55,12 +56,18 @@ import type { AccountRouteDeps } from "./route-deps.ts";
 import { loadUnit, loadVisit } from "../visits/load-records.ts";
 
 type Deps = Pick<AccountRouteDeps, "db" | "env">;
+type PhotoDeps = Pick<AccountRouteDeps, "db" | "photoStore">;
 
 const FIELDS = "Some fields need attention";
 /** A logged series of a few thousand rows is well under 2 MB of CSV. */
 const MAX_CSV_BYTES = 2 * 1024 * 1024;
 
-export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, "mailer">): Router {
+export function visitsRouter({
+  db,
+  env,
+  mailer,
+  photoStore,
+}: Deps & Pick<AccountRouteDeps, "mailer" | "photoStore">): Router {
   const router = Router();
   const saveReading = createReadingSaver(db);
   const photoUpload = singleFileUpload("photo", "photo", MAX_PHOTO_BYTES);
@@ -307,7 +314,13 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
     if (!req.file) throw new HttpError(400, FIELDS, { photo: "Choose a photo to upload" });
     const meta = PhotoFieldsSchema.parse(req.body ?? {});
     requireDeviceTime("takenAt", meta.takenAt, visit);
-    const stored = await storePhoto(env.UPLOADS_DIR, req.file.buffer);
+    const stored = await storePhoto(photoStore, req.file.buffer);
+    // Removing files nobody will use must not hide the answer (or the error) of the request: a
+    // store that fails here leaves an orphan object, which costs only space.
+    const discard = () =>
+      discardPhoto(photoStore, stored).catch((failure: unknown) =>
+        req.log.warn({ err: failure, name: stored.storedName }, "could not remove the files of a photo not kept"),
+      );
     try {
       const { entry, replayed } = await writeToVisit(db, organisationId, visit.id, (tx) =>
         insertPhoto(tx, organisationId, {
@@ -321,10 +334,10 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
         }),
       );
       // A send that raced its repeat stored no row: its files are nobody's.
-      if (replayed) await discardPhoto(env.UPLOADS_DIR, stored);
+      if (replayed) await discard();
       sendEntry(res, { photo: entry }, replayed);
     } catch (error) {
-      await discardPhoto(env.UPLOADS_DIR, stored);
+      await discard();
       throw error;
     }
   });
@@ -342,13 +355,19 @@ export function visitsRouter({ db, env, mailer }: Deps & Pick<AccountRouteDeps, 
   return router;
 }
 
-export function photosRouter({ db, env }: Deps): Router {
+export function photosRouter({ db, photoStore }: PhotoDeps): Router {
   const router = Router();
   const send =
     (variant: "original" | "thumbnail") => async (req: import("express").Request, res: import("express").Response) => {
       const photo = await findPhoto(db, getAuth(res).organisationId, parseId(req.params.id, "Photo"));
       if (!photo) throw notFound("Photo");
-      const data = await readPhoto(env.UPLOADS_DIR, variant === "original" ? photo.storedName : photo.thumbnailName);
+      const name = variant === "original" ? photo.storedName : photo.thumbnailName;
+      const data = await readPhoto(photoStore, name);
+      if (!data) {
+        // A row whose bytes are gone (a store restored from an older copy): a 404, and a line for the operator.
+        req.log.warn({ photoId: photo.id, name }, "photo not found in the photo store");
+        throw notFound("Photo");
+      }
       res.setHeader("Content-Type", variant === "original" ? photo.mimeType : "image/webp");
       res.setHeader("Cache-Control", "private, max-age=86400");
       res.send(data);

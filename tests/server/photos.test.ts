@@ -1,9 +1,13 @@
+import { randomUUID } from "node:crypto";
 import { crc32 } from "node:zlib";
+import { eq } from "drizzle-orm";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { MAX_PHOTO_PIXELS } from "@server/photos/photo-store.ts";
+import { photos } from "@server/db/schema.ts";
+import { MAX_PHOTO_PIXELS } from "@server/photos/prepare-photo.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
+import { PHOTO_STORES, type TestPhotoStore } from "../setup/photo-stores.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -28,24 +32,37 @@ async function pngClaiming(width: number, height: number): Promise<Buffer> {
   return png;
 }
 
-// Issue 13, item 8 (and the cut-off PNG of item 5).
-describe("photo uploads", () => {
+// Issue 13, item 8 (and the cut-off PNG of item 5); issue 20: the same on each photo store.
+describe.each(PHOTO_STORES)("photo uploads, kept in the $store", ({ start }) => {
+  let photoStore: TestPhotoStore;
   let testApp: TestApp;
   let technician: Agent;
   let visitId: string;
 
   beforeAll(async () => {
-    testApp = await createTestApp();
+    photoStore = await start();
+    testApp = await createTestApp({ env: photoStore.env });
     await seedBellbird(testApp);
     technician = await signedIn(testApp.app, BELLBIRD.technician);
     const unit = (await technician.get("/api/equipment")).body.equipment[0];
     visitId = (await technician.post("/api/visits").send({ equipmentId: unit.id, reason: "Photo checks" })).body.visit
       .id;
   });
-  afterAll(() => testApp.close());
+  afterAll(async () => {
+    await testApp?.close();
+    await photoStore?.close();
+  });
 
   const upload = (photo: Buffer, name: string) =>
     technician.post(`/api/visits/${visitId}/photos`).field("kind", "gauges").attach("photo", photo, name);
+  const smallJpeg = () =>
+    sharp({ create: { width: 40, height: 30, channels: 3, background: "#336699" } })
+      .jpeg()
+      .toBuffer();
+  const photoRow = async (photoId: string) => {
+    const [row] = await testApp.database.db.select().from(photos).where(eq(photos.id, photoId));
+    return row!;
+  };
 
   it("stores the original without its EXIF (GPS position, phone), turned upright", async () => {
     const original = await sharp({ create: { width: 400, height: 200, channels: 3, background: "#336699" } })
@@ -103,5 +120,64 @@ describe("photo uploads", () => {
     const response = await upload(cut, "cut.png");
     expect(response.status).toBe(400);
     expect(response.body.message).toMatch(/damaged or incomplete/);
+  });
+
+  it("serves the original and the thumbnail with their type, a private day's cache, a length and an ETag", async () => {
+    const uploaded = await upload(await smallJpeg(), "gauges.jpg");
+    expect(uploaded.status).toBe(201);
+    const original = await technician.get(uploaded.body.photo.url).buffer(true);
+    const thumbnail = await technician.get(uploaded.body.photo.thumbnailUrl).buffer(true);
+    for (const [served, type] of [
+      [original, "image/jpeg"],
+      [thumbnail, "image/webp"],
+    ] as const) {
+      expect(served.status).toBe(200);
+      expect(served.headers["content-type"]).toBe(type);
+      expect(served.headers["cache-control"]).toBe("private, max-age=86400");
+      expect(Number(served.headers["content-length"])).toBe(served.body.length);
+      expect(served.headers["etag"]).toMatch(/^W\/"/);
+    }
+    expect((await sharp(original.body).metadata()).format).toBe("jpeg");
+    expect((await sharp(thumbnail.body).metadata()).format).toBe("webp");
+    // The bytes are kept under the names the row holds, and nothing else is written.
+    const row = await photoRow(uploaded.body.photo.id);
+    expect(await photoStore.storedNames()).toEqual(expect.arrayContaining([row.storedName, row.thumbnailName]));
+  });
+
+  it("answers 404 for a photo whose bytes are no longer in the store", async () => {
+    const uploaded = await upload(await smallJpeg(), "gauges.jpg");
+    const row = await photoRow(uploaded.body.photo.id);
+    await testApp.photoStore.delete(row.storedName);
+    const missing = await technician.get(uploaded.body.photo.url);
+    expect(missing.status).toBe(404);
+    expect(missing.body.message).toBe("Photo not found");
+    // The thumbnail is still there and still served.
+    expect((await technician.get(uploaded.body.photo.thumbnailUrl)).status).toBe(200);
+  });
+
+  it("keeps one original and one thumbnail for a photo sent twice at once", async () => {
+    const picture = await smallJpeg();
+    const before = await photoStore.storedNames();
+    const clientId = randomUUID();
+    const send = () =>
+      technician
+        .post(`/api/visits/${visitId}/photos`)
+        .field("kind", "gauges")
+        .field("clientId", clientId)
+        .attach("photo", picture, "gauges.jpg")
+        .then((response) => response);
+    const [first, second] = await Promise.all([send(), send()]);
+    expect([first.status, second.status]).toEqual([201, 201]);
+    expect(second.body.photo.id).toBe(first.body.photo.id);
+    // Whichever send lost the race removed what it had written.
+    const row = await photoRow(first.body.photo.id);
+    const added = (await photoStore.storedNames()).filter((name) => !before.includes(name));
+    expect(added.sort()).toEqual([row.storedName, row.thumbnailName].sort());
+  });
+
+  it("keeps nothing of a photo refused for what it is", async () => {
+    const before = await photoStore.storedNames();
+    expect((await upload(Buffer.from("not an image"), "evil.jpg")).status).toBe(415);
+    expect(await photoStore.storedNames()).toEqual(before);
   });
 });

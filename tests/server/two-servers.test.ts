@@ -6,11 +6,7 @@
  * Runs in the PostgreSQL pass (`npm run test:server:pg`, which sets TEST_DATABASE_URL); on the
  * embedded database alone there is no second server to start, so it says so and skips.
  */
-import { mkdtempSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
 import pg from "pg";
-import S3rver from "s3rver";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEFAULT_AUTH_LIMITS } from "@server/auth/rate-limits.ts";
@@ -18,6 +14,7 @@ import { SESSION_COOKIE_NAME } from "@server/auth/lucia.ts";
 import { LIVE_REFRESH_MS } from "@/lib/api/visits.ts";
 import { READING_BODY } from "../../bench/api/save-reading.ts";
 import { startServer, DEMO_PASSWORD, type BenchServer } from "../../bench/api/server-process.ts";
+import { startS3TestStore, type TestPhotoStore } from "../setup/photo-stores.ts";
 
 const adminUrl = process.env.TEST_DATABASE_URL;
 if (!adminUrl) {
@@ -29,7 +26,6 @@ if (!adminUrl) {
 const TECHNICIAN = "tech@bellbird.example";
 const SENIOR = "senior@bellbird.example";
 const OWNER = "owner@bellbird.example";
-const BUCKET = "satura-two-servers";
 /** Both servers start the real server/index.ts: tsx, every refrigerant's table, migrations. */
 const START_TIMEOUT_MS = 120_000;
 
@@ -62,8 +58,7 @@ function signInAttempt(server: BenchServer, email: string, password: string) {
 
 describe.skipIf(!adminUrl)("two app servers on one PostgreSQL and one S3 store", () => {
   const databaseName = `satura_two_servers_${process.pid}`;
-  const s3Folder = mkdtempSync(join(tmpdir(), "satura-s3-"));
-  let s3: S3rver;
+  let photos: TestPhotoStore;
   let first: BenchServer;
   let second: BenchServer;
 
@@ -76,25 +71,8 @@ describe.skipIf(!adminUrl)("two app servers on one PostgreSQL and one S3 store",
     const databaseUrl = new URL(adminUrl!);
     databaseUrl.pathname = `/${databaseName}`;
 
-    s3 = new S3rver({
-      address: "127.0.0.1",
-      port: 0,
-      silent: true,
-      directory: s3Folder,
-      configureBuckets: [{ name: BUCKET, configs: [] }],
-    });
-    const { port } = await s3.run();
-    const env = {
-      DATABASE_URL: databaseUrl.toString(),
-      PHOTO_STORE: "s3",
-      S3_BUCKET: BUCKET,
-      S3_ENDPOINT: `http://127.0.0.1:${port}`,
-      S3_REGION: "us-east-1",
-      S3_FORCE_PATH_STYLE: "true",
-      // s3rver's fixed development key.
-      S3_ACCESS_KEY_ID: "S3RVER",
-      S3_SECRET_ACCESS_KEY: "S3RVER",
-    };
+    photos = await startS3TestStore();
+    const env = { DATABASE_URL: databaseUrl.toString(), ...photos.env };
     // Both start together on the empty database: one migrates and loads the demo company under
     // the start-up lock, the other waits for it and then finds both done.
     [first, second] = await Promise.all([
@@ -105,8 +83,7 @@ describe.skipIf(!adminUrl)("two app servers on one PostgreSQL and one S3 store",
 
   afterAll(async () => {
     await Promise.all([first?.stop(), second?.stop()]);
-    await s3?.close();
-    rmSync(s3Folder, { recursive: true, force: true });
+    await photos?.close();
     const admin = new pg.Client({ connectionString: adminUrl });
     await admin.connect();
     await admin.query(`drop database if exists ${databaseName} with (force)`);

@@ -7,6 +7,9 @@ import { readEnv } from "@server/env.ts";
 import { createLogger } from "@server/logger.ts";
 import { createMailer, type Mailer } from "@server/mail/mailer.ts";
 import type { FakeSmtp } from "@server/mail/fake-smtp.ts";
+import { createPhotoStore } from "@server/photos/create-photo-store.ts";
+import type { PhotoStore } from "@server/photos/photo-store.ts";
+import { startS3TestStore } from "./photo-stores.ts";
 import { createTestDatabase } from "./test-database.ts";
 
 export interface TestApp {
@@ -15,6 +18,8 @@ export interface TestApp {
   mailer: Mailer;
   /** The in-process SMTP server that receives every message the app sends. */
   smtp: FakeSmtp;
+  /** Where this app keeps photos: UPLOADS_DIR, or the bucket PHOTO_STORE=s3 names. */
+  photoStore: PhotoStore;
   close: () => Promise<void>;
 }
 
@@ -29,24 +34,33 @@ export interface TestAppOptions {
 /** The real app in-process over a fresh database, as the server builds it, with a fake SMTP server. */
 export async function createTestApp(options: TestAppOptions = {}): Promise<TestApp> {
   const database = await createTestDatabase();
+  // TEST_PHOTO_STORE=s3 runs every test that does not pick a store with photos in a bucket of an
+  // in-process s3rver: the whole server suite on the other store, unchanged.
+  const bucket =
+    process.env.TEST_PHOTO_STORE === "s3" && !options.env?.PHOTO_STORE ? await startS3TestStore() : undefined;
   const env = readEnv({
     NODE_ENV: "test",
     DATA_DIR: "memory://",
     APP_URL: "http://satura.test",
     LOG_LEVEL: options.logDestination ? "info" : "silent",
+    ...bucket?.env,
     ...options.env,
   });
   const logger = createLogger(env, options.logDestination);
   const mailer = await createMailer({ env, db: database.db, logger });
-  const app = createApp({ db: database.db, env, logger, mailer, authLimits: options.authLimits });
+  const photoStore = await createPhotoStore(env.photoStore);
+  const app = createApp({ db: database.db, env, logger, mailer, photoStore, authLimits: options.authLimits });
   return {
     app,
     database,
     mailer,
     smtp: mailer.fakeSmtp!,
+    photoStore,
     close: async () => {
+      photoStore.close();
       await mailer.close();
       await database.close();
+      await bucket?.close();
     },
   };
 }

@@ -81,7 +81,13 @@ describe("sign-in and reset throttling", () => {
       APP_URL: "http://satura.test",
       LOG_LEVEL: "silent",
     });
-    const second = createApp({ db: testApp.database.db, env, logger: createLogger(env), mailer: testApp.mailer });
+    const second = createApp({
+      db: testApp.database.db,
+      env,
+      logger: createLogger(env),
+      mailer: testApp.mailer,
+      photoStore: testApp.photoStore,
+    });
     for (let attempt = 0; attempt < DEFAULT_AUTH_LIMITS.signInFailuresPerAccountAndClient; attempt++) {
       const app = attempt % 2 === 0 ? testApp.app : second;
       expect((await signIn(BELLBIRD.owner, "wrong-password", "198.51.100.11", app)).status).toBe(401);
