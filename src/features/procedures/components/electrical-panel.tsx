@@ -15,7 +15,8 @@ import { useCreateElectricalCheck, useElectricalChecks } from "@/lib/api/procedu
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { errorFor, fieldErrorsOf } from "../utils/field-errors.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
+import { errorFor } from "../utils/field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { ElectricalCheckView } from "./electrical-check-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
@@ -122,7 +123,7 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
   };
   // The same schema the server uses, on every keystroke: a corrected field loses its message at once.
   const parsed = ElectricalCheckBodySchema.safeParse(body);
-  const schemaErrors = parsed.success ? {} : fieldErrorsOf(parsed.error);
+  const schemaErrors = parsed.success ? {} : fieldMessages(parsed.error);
   const typedText = (path: string): string => {
     const [group, index, field] = path.split(".");
     const at = Number(index);

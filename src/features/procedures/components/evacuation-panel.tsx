@@ -28,7 +28,7 @@ import { formatNumber } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-outbox.ts";
 import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
-import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { recordTime } from "../utils/record-time.ts";
@@ -101,7 +101,7 @@ function SampleEntry({
     };
     const parsed = EvacuationSampleBodySchema.safeParse(body);
     if (!parsed.success) {
-      setErrors(fieldErrorsOf(parsed.error));
+      setErrors(fieldMessages(parsed.error));
       return;
     }
     setErrors({});
@@ -268,7 +268,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
     });
     if (!parsed.success) {
       // The schema speaks microns; someone reading pascals gets the range in pascals.
-      const fields = fieldErrorsOf(parsed.error);
+      const fields = fieldMessages(parsed.error);
       if (unit === "Pa" && fields.targetMicrons) fields.targetMicrons = `Enter a target from ${targetRange}`;
       setStartError({ message: "Check the target", fields });
       return;

@@ -20,7 +20,7 @@ import { useCreateLeakSearch, useLeakSearches } from "@/lib/api/procedures.ts";
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { LeakSearchView } from "./leak-search-view.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
@@ -76,7 +76,7 @@ export function LeakSearchPanel({
     };
     const parsed = LeakSearchBodySchema.safeParse(body);
     if (!parsed.success) {
-      setErrors(fieldErrorsOf(parsed.error));
+      setErrors(fieldMessages(parsed.error));
       setFormError("Check the fields marked below");
       return;
     }

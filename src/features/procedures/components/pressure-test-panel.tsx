@@ -24,7 +24,7 @@ import {
 } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
@@ -127,7 +127,7 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
     };
     const parsed = PressureTestBodySchema.safeParse(body);
     if (!parsed.success) {
-      setErrors(fieldErrorsOf(parsed.error));
+      setErrors(fieldMessages(parsed.error));
       setFormError("Check the fields marked below");
       return;
     }

@@ -18,7 +18,7 @@ import {
 } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted } from "../utils/parse-number.ts";
 import { recordTime } from "../utils/record-time.ts";
@@ -98,7 +98,7 @@ export function StandingPressurePanel({
   const save = async () => {
     setFormError(null);
     if (!parsed.success) {
-      setErrors(fieldErrorsOf(parsed.error));
+      setErrors(fieldMessages(parsed.error));
       setFormError("Check the fields marked below");
       return;
     }
