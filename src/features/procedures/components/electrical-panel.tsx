@@ -1,3 +1,4 @@
+import { formatTime } from "@shared/format/date-time.ts";
 import { Plus, Save, Trash2 } from "lucide-react";
 import { useState } from "react";
 import { runningCurrentNotice } from "@shared/engine/index.ts";
@@ -21,7 +22,6 @@ import { toNumber } from "../utils/parse-number.ts";
 import { ElectricalCheckView } from "./electrical-check-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
-import { recordTime } from "../utils/record-time.ts";
 import { LiveNoticeLine } from "./live-notice.tsx";
 
 interface ElectricalPanelProps {
@@ -207,7 +207,7 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
         records: (checks.data?.electricalChecks ?? []).map((check) => ({
           id: check.id,
           voided: check.voided,
-          what: `the electrical check of ${recordTime(check.takenAt)}`,
+          what: `the electrical check of ${formatTime(check.takenAt)}`,
           element: <ElectricalCheckView check={check} />,
         })),
       }}

@@ -1,3 +1,4 @@
+import { formatTime } from "@shared/format/date-time.ts";
 import { Plus, Save, Trash2 } from "lucide-react";
 import { useState } from "react";
 import {
@@ -24,7 +25,6 @@ import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { LeakSearchView } from "./leak-search-view.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
-import { recordTime } from "../utils/record-time.ts";
 
 type LeakRow = { location: string; severity: LeakSeverity; repair: string; repaired: boolean };
 const emptyLeak = (): LeakRow => ({ location: "", severity: "small", repair: "", repaired: false });
@@ -113,7 +113,7 @@ export function LeakSearchPanel({
         records: (searches.data?.leakSearches ?? []).map((search) => ({
           id: search.id,
           voided: search.voided,
-          what: `the leak search of ${recordTime(search.takenAt)}`,
+          what: `the leak search of ${formatTime(search.takenAt)}`,
           element: <LeakSearchView search={search} />,
         })),
       }}

@@ -1,3 +1,4 @@
+import { formatTime } from "@shared/format/date-time.ts";
 import { Save } from "lucide-react";
 import { useState } from "react";
 import { testPressureNotice } from "@shared/engine/index.ts";
@@ -29,7 +30,6 @@ import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
-import { recordTime } from "../utils/record-time.ts";
 import { PressureTestView } from "./pressure-test-view.tsx";
 import { LiveNoticeLine } from "./live-notice.tsx";
 
@@ -167,7 +167,7 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
         records: (tests.data?.pressureTests ?? []).map((test) => ({
           id: test.id,
           voided: test.voided,
-          what: `the pressure test of ${recordTime(test.takenAt)}`,
+          what: `the pressure test of ${formatTime(test.takenAt)}`,
           element: <PressureTestView test={test} units={units} atmosphericKPa={atmosphericKPa} />,
         })),
       }}
