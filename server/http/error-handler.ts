@@ -2,25 +2,9 @@ import type { ErrorRequestHandler, RequestHandler } from "express";
 import multer from "multer";
 import { ZodError } from "zod";
 import { DiagnosisInputError } from "@shared/engine/index.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { uniqueViolation } from "../db/errors.ts";
 import { HttpError } from "./http-error.ts";
-
-/**
- * Turns zod issues into one message per field path, e.g. { "suctionPressureKPa": "..." }. A
- * field a strict body does not take is listed under its own name, so the client can say which.
- */
-export function fieldMessages(error: ZodError): Record<string, string> {
-  const fields: Record<string, string> = {};
-  for (const issue of error.issues) {
-    const prefix = issue.path.length > 0 ? `${issue.path.join(".")}.` : "";
-    const keys =
-      issue.code === "unrecognized_keys"
-        ? issue.keys.map((key) => `${prefix}${key}`)
-        : [issue.path.length > 0 ? issue.path.join(".") : "_"];
-    for (const key of keys) fields[key] ??= issue.message;
-  }
-  return fields;
-}
 
 /** The answer's headline: what an unknown field is, when there is one, else a general prompt. */
 function validationMessage(error: ZodError): string {

@@ -17,6 +17,7 @@ import {
   type ChargeReference,
   type DiagnosisInput,
 } from "@shared/schemas/diagnosis.ts";
+import { circuitFacts, withCircuitFacts } from "@shared/schemas/circuit-facts.ts";
 import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { Atmosphere, MeasuredValues } from "@shared/schemas/visits.ts";
 import type { z } from "zod";
@@ -82,18 +83,7 @@ export function readingInput(
   measured: Partial<MeasuredValues>,
   { unit, nameplate, site, charge }: ReadingContext,
 ): z.ZodSafeParseResult<DiagnosisInput> {
-  const merged = {
-    ...measured,
-    refrigerant: unit.refrigerant,
-    meteringDevice: nameplate.meteringDevice,
-    targetSuperheatK: nameplate.targetSuperheatK ?? undefined,
-    targetSubcoolingK: nameplate.targetSubcoolingK ?? undefined,
-    compressorRla: unit.compressorRlaA ?? undefined,
-    application: unit.application,
-    liquidLineLengthM: nameplate.liquidLineLengthM ?? undefined,
-    chargeKg: charge.chargeKg,
-    chargeReference: charge.chargeReference ?? undefined,
-    atmosphericPressureKPa: siteAtmosphere(site).pressureKPa,
-  };
+  const facts = circuitFacts(unit, nameplate, charge);
+  const merged = withCircuitFacts(measured, facts, siteAtmosphere(site).pressureKPa);
   return DiagnosisInputSchema.safeParse(merged);
 }

@@ -165,8 +165,12 @@ export type { StandingPressureProblem } from "./procedures/standing-pressure-out
 export type { LeakSearchFindings } from "./procedures/judge-leak-search.ts";
 export { submitChecklist, CHARGE_MATCH_TOLERANCE_KG } from "./procedures/submit-checklist.ts";
 export type { SubmitChecklistInput, SubmitChecklistItem } from "./procedures/submit-checklist.ts";
-export { PROCEDURE_SOURCES, citeProcedure } from "./procedures/procedure-sources.ts";
-export type { ProcedureSourceTag } from "./procedures/procedure-sources.ts";
+export { cite } from "./sources/cite.ts";
+export type { SourceList } from "./sources/cite.ts";
+export { DIAGNOSIS_SOURCES } from "./sources/diagnosis-sources.ts";
+export type { DiagnosisSourceTag } from "./sources/diagnosis-sources.ts";
+export { PROCEDURE_SOURCES } from "./sources/procedure-sources.ts";
+export type { ProcedureSourceTag } from "./sources/procedure-sources.ts";
 export {
   VOLTAGE_IMBALANCE_LIMITS,
   SUPPLY_VOLTAGE_LIMITS,

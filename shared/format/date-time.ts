@@ -98,6 +98,27 @@ export function formatTime(instant: Instant, timeZone?: string): string {
   return parts ? timeOf(parts) : NO_DATE;
 }
 
+/**
+ * The instant a local calendar day starts, in the viewer's zone: a date input's "YYYY-MM-DD", or
+ * the day an instant falls on. A period or a logger's clock times are meant in local days, so
+ * they start at local midnight rather than UTC's.
+ * @example localDayStart("2026-12-02") // "2026-12-01T13:00:00.000Z" in Sydney (AEDT)
+ */
+export function localDayStart(day: string | Date): string {
+  return localMidnight(day, 0);
+}
+
+/** The instant the day after `day` starts, locally: the exclusive end of a period ending on `day`. */
+export function localDayEnd(day: string | Date): string {
+  return localMidnight(day, 1);
+}
+
+function localMidnight(day: string | Date, daysLater: number): string {
+  const [year, month, date] =
+    typeof day === "string" ? day.split("-").map(Number) : [day.getFullYear(), day.getMonth() + 1, day.getDate()];
+  return new Date(year!, month! - 1, date! + daysLater).toISOString();
+}
+
 /** Is `name` a time zone this runtime knows (IANA name, e.g. "Pacific/Auckland")? */
 export function isTimeZone(name: string): boolean {
   try {

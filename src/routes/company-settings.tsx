@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import {
   MAX_ALLOWED_DROP_KPA,
   MAX_TARGET_MICRONS,
@@ -61,7 +62,7 @@ function SettingsForm({
     if (Object.keys(changed).length === 0) return setSaved(true);
     const parsed = ProcedureSettingsUpdateSchema.safeParse(changed);
     if (!parsed.success) {
-      setErrors(Object.fromEntries(parsed.error.issues.map((issue) => [String(issue.path[0]), issue.message])));
+      setErrors(fieldMessages(parsed.error));
       return;
     }
     setErrors({});

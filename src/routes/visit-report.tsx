@@ -42,7 +42,6 @@ const PRINT_CHART_WIDTH = 680;
 const SCREEN_MARGIN_PX = 32;
 const chartWidthFor = (viewportWidth: number) =>
   Math.max(280, Math.min(PRINT_CHART_WIDTH, viewportWidth - SCREEN_MARGIN_PX));
-const stamp = (iso: string) => formatDateTime(iso);
 
 export default function VisitReportRoute() {
   const { visitId = "" } = useParams();
@@ -89,8 +88,8 @@ export default function VisitReportRoute() {
           {data.customerName} · {data.siteName}
         </p>
         <p className="flex flex-wrap items-center gap-2 text-sm">
-          <VisitStatusBadge status={data.status} /> Started {stamp(data.startedAt)} ({viewerTimeZone()} time) · Crew:{" "}
-          {data.technicians.map((person) => person.name).join(", ") || "—"}
+          <VisitStatusBadge status={data.status} /> Started {formatDateTime(data.startedAt)} ({viewerTimeZone()} time) ·
+          Crew: {data.technicians.map((person) => person.name).join(", ") || "—"}
         </p>
         <p className="mt-1">
           <span className="font-medium">Reason:</span> {visitReasonText(data.reason)}
@@ -172,7 +171,7 @@ export default function VisitReportRoute() {
           <ul className="mt-1 space-y-1">
             {adjustments.map((adjustment) => (
               <li key={adjustment.id}>
-                <span className="num text-muted">{stamp(adjustment.at)}</span> —{" "}
+                <span className="num text-muted">{formatDateTime(adjustment.at)}</span> —{" "}
                 {ADJUSTMENT_KIND_LABELS[adjustment.kind]}
                 {adjustment.circuit ? ` (circuit ${adjustment.circuit})` : ""}: {adjustment.description}
                 {adjustment.amountKg != null && <span className="num"> · {adjustment.amountKg} kg</span>}
@@ -214,7 +213,7 @@ export default function VisitReportRoute() {
         {data.status === "signed-off" ? (
           <p>
             {VISIT_STATUS_LABELS["signed-off"]} by <strong>{data.signedOffBy?.name ?? "—"}</strong>
-            {data.signedOffAt && ` on ${stamp(data.signedOffAt)}`}
+            {data.signedOffAt && ` on ${formatDateTime(data.signedOffAt)}`}
             {data.reviewNote && ` — “${data.reviewNote}”`}
           </p>
         ) : (

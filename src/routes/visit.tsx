@@ -7,6 +7,7 @@ import { getRefrigerant } from "@shared/engine/index.ts";
 import { can } from "@shared/schemas/auth.ts";
 import { acceptsEntries, closedVisitMessage, visitReasonText } from "@shared/schemas/visits.ts";
 import { canCasebook } from "@shared/schemas/casebook.ts";
+import { circuitFacts } from "@shared/schemas/circuit-facts.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { lazyPanel } from "@/components/lazy/lazy-panel.tsx";
@@ -163,17 +164,10 @@ export default function VisitRoute() {
               key={`${data.id}-${nameplate.number}`}
               visit={data}
               circuit={nameplate.number}
-              context={{
-                refrigerant: unit.refrigerant,
-                meteringDevice: nameplate.meteringDevice,
-                targetSuperheatK: nameplate.targetSuperheatK,
-                targetSubcoolingK: nameplate.targetSubcoolingK,
-                compressorRla: unit.compressorRlaA,
-                application: unit.application,
-                liquidLineLengthM: nameplate.liquidLineLengthM,
+              context={circuitFacts(unit, nameplate, {
                 chargeKg: circuitCharge?.correctChargeKg ?? null,
                 chargeReference: circuitCharge?.current?.values ?? null,
-              }}
+              })}
               isBlend={refrigerant.kind === "blend"}
               units={units}
               atmosphere={data.atmosphere}

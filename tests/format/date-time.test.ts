@@ -4,6 +4,8 @@ import {
   formatDateTime,
   formatTime,
   isTimeZone,
+  localDayEnd,
+  localDayStart,
   NO_DATE,
   viewerTimeZone,
 } from "@shared/format/date-time.ts";
@@ -86,5 +88,12 @@ describe("date-time formatting", () => {
     expect(isTimeZone("UTC")).toBe(true);
     expect(isTimeZone("Mars/Olympus_Mons")).toBe(false);
     expect(isTimeZone("")).toBe(false);
+  });
+
+  it("starts a local calendar day at the viewer's midnight, from a date input or an instant", () => {
+    // Built from local fields, so the check holds in whatever zone the tests run in.
+    expect(localDayStart("2026-12-02")).toBe(new Date(2026, 11, 2).toISOString());
+    expect(localDayEnd("2026-12-31")).toBe(new Date(2027, 0, 1).toISOString());
+    expect(localDayStart(new Date(2026, 11, 2, 14, 5))).toBe(new Date(2026, 11, 2).toISOString());
   });
 });

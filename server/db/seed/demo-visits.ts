@@ -15,6 +15,7 @@ import {
   parseDiagnosisInput,
   saturationPressure,
 } from "@shared/engine/index.ts";
+import { circuitFacts, withCircuitFacts } from "@shared/schemas/circuit-facts.ts";
 import type { Application, ChargeReference, DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import { prepareRefrigerant } from "../../diagnosis/diagnose-on-server.ts";
 import { calibrateAfterWeighIn } from "../../visits/calibrate-after-weigh-in.ts";
@@ -86,26 +87,17 @@ function readingRows(
   const nameplate = unit.circuits.find((candidate) => candidate.number === circuit)!;
   return series.map((reading) => {
     // Made up here, so it passes the schema as a saved reading does (diagnose() trusts its input).
-    const input = parseDiagnosisInput({
-      refrigerant: unit.refrigerant,
-      meteringDevice: nameplate.meteringDevice,
+    // No line-set adjustment on the demo units: the correct charge is the nameplate's.
+    const facts = circuitFacts(unit, nameplate, { chargeKg: nameplate.factoryChargeKg, chargeReference });
+    const measured = {
       suctionPressureKPa: gauge(unit.refrigerant, reading.evaporatingDewC, "dew"),
       suctionLineTempC: reading.suctionLineTempC,
       liquidPressureKPa: gauge(unit.refrigerant, reading.condensingBubbleC, "bubble"),
       liquidLineTempC: reading.liquidLineTempC,
       dischargeLineTempC: reading.dischargeLineTempC,
       runMinutes: reading.runMinutes,
-      atmosphericPressureKPa: ATMOSPHERE_KPA,
-      application: unit.application,
-      ...(nameplate.liquidLineLengthM != null ? { liquidLineLengthM: nameplate.liquidLineLengthM } : {}),
-      ...(nameplate.targetSuperheatK != null ? { targetSuperheatK: nameplate.targetSuperheatK } : {}),
-      ...(nameplate.targetSubcoolingK != null ? { targetSubcoolingK: nameplate.targetSubcoolingK } : {}),
-      ...(unit.compressorRlaA != null ? { compressorRla: unit.compressorRlaA } : {}),
-      // No line-set adjustment on the demo units: the correct charge is the nameplate's.
-      chargeKg: nameplate.factoryChargeKg,
-      ...(chargeReference ? { chargeReference } : {}),
-      ...air,
-    } satisfies DiagnosisInput);
+    };
+    const input = parseDiagnosisInput({ ...withCircuitFacts(measured, facts, ATMOSPHERE_KPA), ...air });
     return {
       organisationId,
       visitId,

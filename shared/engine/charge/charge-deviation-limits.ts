@@ -1,4 +1,4 @@
-import { MEMORY } from "../diagnosis/sources.ts";
+import { MEMORY } from "../sources/marks.ts";
 
 /**
  * The virtual refrigerant charge (VRC) method: the charge relative to a reference charge is

@@ -2,7 +2,9 @@ import type { TrendResult } from "../../schemas/diagnosis.ts";
 import { MIN_RUN_MINUTES } from "./diagnosis-limits.ts";
 import { leastSquaresSlope } from "./least-squares-slope.ts";
 import { readTrendSeries, type TrendSeries } from "./read-trend-series.ts";
-import { COMMON_PRACTICE, cite } from "./sources.ts";
+import { cite } from "../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../sources/diagnosis-sources.ts";
+import { COMMON_PRACTICE } from "../sources/marks.ts";
 
 /**
  * Settling window, minutes. Title 24 takes final readings after 15 minutes of cooling and
@@ -26,7 +28,7 @@ export const SETTLED_MAX_CHANGE_K = 1;
  */
 export const SETTLED_MAX_RATE_K_PER_MIN = 0.1;
 
-const CRITERION_SOURCE = `${cite(["S10", "S20"])}; window, change and drift limits: ${COMMON_PRACTICE}`;
+const CRITERION_SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S10", "S20"])}; window, change and drift limits: ${COMMON_PRACTICE}`;
 
 /**
  * How close an estimated drift may come to `SETTLED_MAX_RATE_K_PER_MIN` before the slope is

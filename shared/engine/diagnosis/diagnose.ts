@@ -15,7 +15,9 @@ import { MIN_RUN_MINUTES, NO_CHARGE_SIGNAL_CONFIDENCE, UNSETTLED_CONFIDENCE_FLOO
 import { evidenceWeight } from "./evidence-weight.ts";
 import { rankChargeStates } from "./rank-charge-states.ts";
 import { DIAGNOSIS_RULES } from "./rules/registry.ts";
-import { COMMON_PRACTICE, cite } from "./sources.ts";
+import { cite } from "../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../sources/diagnosis-sources.ts";
+import { COMMON_PRACTICE } from "../sources/marks.ts";
 import { summarizeVerdict } from "./summarize-verdict.ts";
 import type { DiagnosisSnapshot } from "./types.ts";
 
@@ -38,7 +40,7 @@ const PRIMARY_RULE = { fixed: "superheat-vs-target", "expansion-valve": "subcool
 /** States that say the charge is right or wrong: a fixed device without its superheat target can name none of them (weigh in [S10]). */
 const CHARGE_VERDICTS: ReadonlySet<EvidenceState> = new Set(["normal", "undercharged", "overcharged"]);
 const JUDGED = new Set<Finding["direction"]>(["low", "normal", "high"]);
-const NO_SIGNAL_SOURCE = `${cite(["S9", "S10", "S11"])}; judging from the remaining readings (${COMMON_PRACTICE})`;
+const NO_SIGNAL_SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S9", "S10", "S11"])}; judging from the remaining readings (${COMMON_PRACTICE})`;
 
 /** Confidence multiplier for the run time: readings drift for 10–15 min after a start [S10][S20]. */
 function settlingFactor(runMinutes: number | undefined): number {

@@ -5,7 +5,9 @@
  * docs/diagnosis-signatures.md explains how the rules read them.
  */
 import type { Application } from "../../schemas/diagnosis.ts";
-import { COMMON_PRACTICE, MEMORY, cite } from "./sources.ts";
+import { cite } from "../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../sources/diagnosis-sources.ts";
+import { COMMON_PRACTICE, MEMORY } from "../sources/marks.ts";
 
 /** A closed band of temperature difference, K (or of a ratio, where a rule says so). */
 export interface Band {
@@ -25,7 +27,7 @@ export interface SourcedBand extends Band {
  * (4.4–8.3 K); under 5 °F (2.8 K) suggests undercharge, over 20 °F (11 K) overcharge [S14].
  */
 export const DEFAULT_SUBCOOLING_BAND: Band & { targetK: number } = { lowK: 4.4, highK: 8.3, targetK: 6.4 };
-export const DEFAULT_SUBCOOLING_SOURCE = cite(["S14"], COMMON_PRACTICE);
+export const DEFAULT_SUBCOOLING_SOURCE = cite(DIAGNOSIS_SOURCES, ["S14"], COMMON_PRACTICE);
 
 /** Tolerance around a maker's subcooling or TXV superheat target, ±K: Title 24 ±3 °F. */
 export const NAMEPLATE_TARGET_TOLERANCE_K = 1.7;
@@ -39,7 +41,7 @@ export const MIN_VALID_TARGET_SUPERHEAT_K = 2.8;
 export const FIXED_ORIFICE_WET_BULB_RANGE_C = { min: 10, max: 24 } as const;
 /** Charging-chart input range, outdoor dry bulb °C [S17][S18]; Title 24 needs ≥ 12.8 °C [S19]. */
 export const FIXED_ORIFICE_OUTDOOR_RANGE_C = { min: 13, max: 46 } as const;
-export const FIXED_ORIFICE_TARGET_SOURCE = `${cite(["S10", "S17", "S18", "S19"])}; linear formula commonly taught in trade training (${MEMORY})`;
+export const FIXED_ORIFICE_TARGET_SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S10", "S17", "S18", "S19"])}; linear formula commonly taught in trade training (${MEMORY})`;
 
 /**
  * Below this subcooling difference from its target (K), a circuit with high superheat is short
@@ -92,7 +94,7 @@ function deepFreeze<T>(value: T): T {
  * efficiencies within one application (common practice).
  */
 export const CONDENSER_APPROACH_TOLERANCE_K = 3;
-export const CONDENSER_APPROACH_SOURCE = `condensing over ambient minus subcooling ${cite(["S26"])} (computed): the middle of the application's condensing band minus the subcooling target, ±3 K (${COMMON_PRACTICE}); approach charging ${cite(["S34"])}`;
+export const CONDENSER_APPROACH_SOURCE = `condensing over ambient minus subcooling ${cite(DIAGNOSIS_SOURCES, ["S26"])} (computed): the middle of the application's condensing band minus the subcooling target, ±3 K (${COMMON_PRACTICE}); approach charging ${cite(DIAGNOSIS_SOURCES, ["S34"])}`;
 
 /** Discharge line temperatures of one application, °C. */
 export interface DischargeLineLimits {
@@ -131,19 +133,28 @@ export interface ApplicationLimits {
 
 const COMFORT: ApplicationLimits = {
   returnWords: "return air",
-  valveSuperheat: { lowK: 2.8, highK: 6.7, targetK: 5, source: cite(["S15", "S17", "S9"], COMMON_PRACTICE) },
+  valveSuperheat: {
+    lowK: 2.8,
+    highK: 6.7,
+    targetK: 5,
+    source: cite(DIAGNOSIS_SOURCES, ["S15", "S17", "S9"], COMMON_PRACTICE),
+  },
   subcooling: { ...DEFAULT_SUBCOOLING_BAND, source: DEFAULT_SUBCOOLING_SOURCE },
   evaporatorTd: {
     lowK: 14,
     highK: 24,
     source: `evaporator TD about 19 K for comfort cooling (${MEMORY}); ±5 K band (${COMMON_PRACTICE})`,
   },
-  temperatureSplit: { lowK: 8, highK: 13, source: cite(["S33"]) },
-  condensingOverAmbient: { lowK: 8.3, highK: 16.7, source: `${cite(["S26"])} (16 SEER+ 8.3 K … ≤ 10 SEER 16.7 K)` },
+  temperatureSplit: { lowK: 8, highK: 13, source: cite(DIAGNOSIS_SOURCES, ["S33"]) },
+  condensingOverAmbient: {
+    lowK: 8.3,
+    highK: 16.7,
+    source: `${cite(DIAGNOSIS_SOURCES, ["S26"])} (16 SEER+ 8.3 K … ≤ 10 SEER 16.7 K)`,
+  },
   dischargeLine: {
     elevatedC: 90,
     limitC: 107,
-    source: `${cite(["S13", "S37"])}: healthy AC 71–82 °C in hot weather, keep below 107 °C (225 °F); 90 °C elevated (${COMMON_PRACTICE})`,
+    source: `${cite(DIAGNOSIS_SOURCES, ["S13", "S37"])}: healthy AC 71–82 °C in hot weather, keep below 107 °C (225 °F); 90 °C elevated (${COMMON_PRACTICE})`,
   },
   returnRangeC: { min: 15, max: 40 },
   fixedOrificeChart: true,
@@ -165,7 +176,7 @@ const REFRIGERATION_CONDENSER = {
   condensingOverAmbient: {
     lowK: 8.3,
     highK: 19,
-    source: `${cite(["S35"])}: air-cooled refrigeration condensers 11–19 K; high-efficiency units from 8.3 K ${cite(["S26"])}`,
+    source: `${cite(DIAGNOSIS_SOURCES, ["S35"])}: air-cooled refrigeration condensers 11–19 K; high-efficiency units from 8.3 K ${cite(DIAGNOSIS_SOURCES, ["S26"])}`,
   },
 } as const;
 
@@ -181,20 +192,20 @@ export const APPLICATION_LIMITS: Readonly<Record<Application, ApplicationLimits>
       lowK: 3,
       highK: 7.3,
       targetK: 5.6,
-      source: `${cite(["S15"])}: medium temperature about 5.6 K (10 °F); ±1.7 K (${COMMON_PRACTICE})`,
+      source: `${cite(DIAGNOSIS_SOURCES, ["S15"])}: medium temperature about 5.6 K (10 °F); ±1.7 K (${COMMON_PRACTICE})`,
     },
     subcooling: REFRIGERATION_SUBCOOLING,
     evaporatorTd: {
       lowK: 4,
       highK: 10,
-      source: `${cite(["S15"])}: coil TD by room humidity, about 8–18 °F (4.4–10 K)`,
+      source: `${cite(DIAGNOSIS_SOURCES, ["S15"])}: coil TD by room humidity, about 8–18 °F (4.4–10 K)`,
     },
     temperatureSplit: { lowK: 2, highK: 6, source: `air on − air off a cool-room coil 2–6 K (${MEMORY})` },
     ...REFRIGERATION_CONDENSER,
     dischargeLine: {
       elevatedC: 95,
       limitC: 107,
-      source: `${cite(["S13"])}: keep below 107 °C; refrigeration runs higher compression ratios, 95 °C elevated (${COMMON_PRACTICE})`,
+      source: `${cite(DIAGNOSIS_SOURCES, ["S13"])}: keep below 107 °C; refrigeration runs higher compression ratios, 95 °C elevated (${COMMON_PRACTICE})`,
     },
     returnRangeC: { min: -5, max: 15 },
     fixedOrificeChart: false,
@@ -205,20 +216,20 @@ export const APPLICATION_LIMITS: Readonly<Record<Application, ApplicationLimits>
       lowK: 1.7,
       highK: 4.5,
       targetK: 2.8,
-      source: `${cite(["S15"])}: low temperature about 2.8 K (5 °F), range from 1.7 K`,
+      source: `${cite(DIAGNOSIS_SOURCES, ["S15"])}: low temperature about 2.8 K (5 °F), range from 1.7 K`,
     },
     subcooling: REFRIGERATION_SUBCOOLING,
     evaporatorTd: {
       lowK: 4,
       highK: 8,
-      source: `${cite(["S15"])}: freezer coils run about 10 °F (5.6 K) TD; ±2 K (${COMMON_PRACTICE})`,
+      source: `${cite(DIAGNOSIS_SOURCES, ["S15"])}: freezer coils run about 10 °F (5.6 K) TD; ±2 K (${COMMON_PRACTICE})`,
     },
     temperatureSplit: { lowK: 1.5, highK: 5, source: `air on − air off a freezer coil 1.5–5 K (${MEMORY})` },
     ...REFRIGERATION_CONDENSER,
     dischargeLine: {
       elevatedC: 100,
       limitC: 107,
-      source: `${cite(["S13"])}: keep below 107 °C; single-stage low temperature runs hot, 100 °C elevated (${COMMON_PRACTICE})`,
+      source: `${cite(DIAGNOSIS_SOURCES, ["S13"])}: keep below 107 °C; single-stage low temperature runs hot, 100 °C elevated (${COMMON_PRACTICE})`,
     },
     returnRangeC: { min: -40, max: -8 },
     fixedOrificeChart: false,
@@ -241,7 +252,7 @@ export const APPLICATION_LIMITS: Readonly<Record<Application, ApplicationLimits>
     dischargeLine: {
       elevatedC: 95,
       limitC: 107,
-      source: `${cite(["S13"])}: keep below 107 °C; 95 °C elevated (${COMMON_PRACTICE})`,
+      source: `${cite(DIAGNOSIS_SOURCES, ["S13"])}: keep below 107 °C; 95 °C elevated (${COMMON_PRACTICE})`,
     },
     returnRangeC: { min: -15, max: 30 },
     fixedOrificeChart: false,
@@ -285,7 +296,7 @@ export const SPLIT_TARGET_MODEL = {
   toleranceK: 2.5,
   /** Density of return air used with the nominal airflow, kg/m³ (standard air). */
   airDensityKgPerM3: 1.2,
-  source: `${cite(["S33"])}; coil line to an 11 °C apparatus dew point (${MEMORY}); ±2.5 K (${COMMON_PRACTICE})`,
+  source: `${cite(DIAGNOSIS_SOURCES, ["S33"])}; coil line to an 11 °C apparatus dew point (${MEMORY}); ±2.5 K (${COMMON_PRACTICE})`,
 } as const;
 
 // ---- Compressor ---------------------------------------------------------------------------------
@@ -309,7 +320,7 @@ export const CURRENT_RATIO_FULL_STRENGTH = 0.2;
  */
 export const COMPRESSOR_EFFICIENCY_BAND: Band = { lowK: 0.45, highK: Number.POSITIVE_INFINITY };
 export const COMPRESSOR_EFFICIENCY_FULL_STRENGTH = 0.15;
-export const COMPRESSOR_EFFICIENCY_SOURCE = `apparent isentropic efficiency of healthy compressors about 0.6–0.75 (${MEMORY}); below 0.45 re-compressed gas (${COMMON_PRACTICE}); ${cite(["S21", "S29"])}`;
+export const COMPRESSOR_EFFICIENCY_SOURCE = `apparent isentropic efficiency of healthy compressors about 0.6–0.75 (${MEMORY}); below 0.45 re-compressed gas (${COMMON_PRACTICE}); ${cite(DIAGNOSIS_SOURCES, ["S21", "S29"])}`;
 
 // ---- Data quality --------------------------------------------------------------------------------
 

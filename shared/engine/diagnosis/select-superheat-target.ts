@@ -9,10 +9,11 @@ import {
 } from "./diagnosis-limits.ts";
 import { fixedOrificeTargetSuperheat } from "./fixed-orifice-target-superheat.ts";
 import { formatTenths } from "./format-tenths.ts";
-import { cite } from "./sources.ts";
+import { cite } from "../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../sources/diagnosis-sources.ts";
 
 // The band sources never change: built once here instead of on every call (performance).
-const FIXED_NAMEPLATE_SOURCE = `maker's target; ±${FIXED_ORIFICE_SUPERHEAT_TOLERANCE_K} K installer tolerance ${cite(["S10", "S17", "S18"])}`;
+const FIXED_NAMEPLATE_SOURCE = `maker's target; ±${FIXED_ORIFICE_SUPERHEAT_TOLERANCE_K} K installer tolerance ${cite(DIAGNOSIS_SOURCES, ["S10", "S17", "S18"])}`;
 const VALVE_NAMEPLATE_SOURCE = `maker's target; ±${NAMEPLATE_TARGET_TOLERANCE_K} K: ${NAMEPLATE_TARGET_TOLERANCE_SOURCE}`;
 const FORMULA_SOURCE = `SH = 1.5 × WB − 0.5 × DB − 4.4, ±${FIXED_ORIFICE_SUPERHEAT_TOLERANCE_K} K: ${FIXED_ORIFICE_TARGET_SOURCE}`;
 const NO_CHART_NOTE =

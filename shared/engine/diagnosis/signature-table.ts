@@ -6,7 +6,9 @@
  * step with it). Sources per row: TRADE.md §2 symptom table and §3.
  */
 import type { EvidenceState } from "../../schemas/diagnosis.ts";
-import { COMMON_PRACTICE, cite } from "./sources.ts";
+import { cite } from "../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../sources/diagnosis-sources.ts";
+import { COMMON_PRACTICE } from "../sources/marks.ts";
 
 /** The readings a signature is made of, in the order the table shows them. */
 export const SIGNATURE_FEATURES = [
@@ -78,7 +80,7 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       compressorCurrent: cell("normal", 0.3),
       dischargeLine: cell("normal", 0.5),
     },
-    source: `every reading in its band ${cite(["S9", "S10", "S26", "S33"])}`,
+    source: `every reading in its band ${cite(DIAGNOSIS_SOURCES, ["S9", "S10", "S26", "S33"])}`,
   },
   undercharged: {
     cells: {
@@ -90,7 +92,7 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       compressorCurrent: cell("low-or-normal", 0.4),
       dischargeLine: cell("normal-or-high", 0.3),
     },
-    source: cite(["S21", "S22", "S24"]),
+    source: cite(DIAGNOSIS_SOURCES, ["S21", "S22", "S24"]),
   },
   overcharged: {
     cells: {
@@ -102,7 +104,7 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       temperatureSplit: cell("low-or-normal", 0.3),
       compressorCurrent: cell("normal-or-high", 0.5),
     },
-    source: `${cite(["S21", "S23", "S20"])}; a condenser full of liquid cools it close to the outdoor air (small approach ${cite(["S26"])})`,
+    source: `${cite(DIAGNOSIS_SOURCES, ["S21", "S23", "S20"])}; a condenser full of liquid cools it close to the outdoor air (small approach ${cite(DIAGNOSIS_SOURCES, ["S26"])})`,
   },
   "restricted-metering": {
     cells: {
@@ -115,7 +117,7 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       compressorCurrent: cell("low-or-normal", 0.4),
       dischargeLine: cell("normal-or-high", 0.4),
     },
-    source: cite(["S21", "S24", "S25"]),
+    source: cite(DIAGNOSIS_SOURCES, ["S21", "S24", "S25"]),
   },
   "low-evaporator-airflow": {
     cells: {
@@ -127,7 +129,7 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       compressorCurrent: cell("low-or-normal", 0.3),
       dischargeLine: cell("low-or-normal", 0.3),
     },
-    source: `${cite(["S21", "S33", "S15"])}; an iced or air-starved coil runs far below the room`,
+    source: `${cite(DIAGNOSIS_SOURCES, ["S21", "S33", "S15"])}; an iced or air-starved coil runs far below the room`,
   },
   "overfeeding-metering": {
     cells: {
@@ -140,7 +142,7 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       compressorCurrent: cell("normal", 0.2),
       dischargeLine: cell("low", 0.6),
     },
-    source: `${cite(["S17", "S21"])}; a valve whose bulb is loose or misplaced, stuck open or oversized (or an oversized orifice) floods the coil while charge and head stay normal (${COMMON_PRACTICE})`,
+    source: `${cite(DIAGNOSIS_SOURCES, ["S17", "S21"])}; a valve whose bulb is loose or misplaced, stuck open or oversized (or an oversized orifice) floods the coil while charge and head stay normal (${COMMON_PRACTICE})`,
   },
   "condenser-airflow": {
     cells: {
@@ -153,7 +155,7 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       compressorCurrent: cell("normal-or-high", 0.6),
       dischargeLine: cell("normal-or-high", 0.4),
     },
-    source: `${cite(["S21", "S26"])}; the liquid leaves a condenser that cannot reject heat far above the outdoor air (high approach)`,
+    source: `${cite(DIAGNOSIS_SOURCES, ["S21", "S26"])}; the liquid leaves a condenser that cannot reject heat far above the outdoor air (high approach)`,
   },
   "non-condensables": {
     cells: {
@@ -166,7 +168,7 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       compressorCurrent: cell("normal-or-high", 0.5),
       dischargeLine: cell("normal-or-high", 0.4),
     },
-    source: `${cite(["S27", "S28", "S20"])}; air adds its own pressure, so the subcooling worked out from the gauge reads high while the liquid itself is not unusually cold; confirm with a standing-pressure check`,
+    source: `${cite(DIAGNOSIS_SOURCES, ["S27", "S28", "S20"])}; air adds its own pressure, so the subcooling worked out from the gauge reads high while the liquid itself is not unusually cold; confirm with a standing-pressure check`,
   },
   "weak-compressor": {
     cells: {
@@ -180,6 +182,6 @@ export const SIGNATURES: Readonly<Record<EvidenceState, Signature>> = {
       compressionRatio: cell("low", 0.8),
       compressorEfficiency: cell("low", 0.8),
     },
-    source: cite(["S21", "S29", "S30", "S122"]),
+    source: cite(DIAGNOSIS_SOURCES, ["S21", "S29", "S30", "S122"]),
   },
 };

@@ -3,11 +3,17 @@ import { leastSquaresSlope } from "../diagnosis/least-squares-slope.ts";
 import { describeDecay } from "./describe-decay.ts";
 import { limitSource } from "./limit-source.ts";
 import { EVACUATION_LIMITS } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { COMMON_PRACTICE } from "../sources/marks.ts";
 import { requireVacuumSamples } from "./require-vacuum-samples.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 
-const SOURCE = citeProcedure(["S4", "S52", "S53", "S54", "S55", "S58"], `levelling-off test (${COMMON_PRACTICE})`);
+const SOURCE = cite(
+  PROCEDURE_SOURCES,
+  ["S4", "S52", "S53", "S54", "S55", "S58"],
+  `levelling-off test (${COMMON_PRACTICE})`,
+);
 /** Shortest hold makers ask for, minutes [S53] (another asks 20 [S52]). */
 const SHORTEST_MAKER_HOLD_MINUTES = 15;
 

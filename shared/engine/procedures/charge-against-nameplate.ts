@@ -3,10 +3,12 @@ import { formatHundredths } from "../diagnosis/format-hundredths.ts";
 import { formatTenths } from "../diagnosis/format-tenths.ts";
 import { limitSource } from "./limit-source.ts";
 import { CHARGE_LIMITS, type ChargeLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { COMMON_PRACTICE } from "../sources/marks.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 
-const SOURCE = citeProcedure(["S11", "S10"], `2 % and 10 % bands (${COMMON_PRACTICE})`);
+const SOURCE = cite(PROCEDURE_SOURCES, ["S11", "S10"], `2 % and 10 % bands (${COMMON_PRACTICE})`);
 
 /**
  * Judges a weighed-in charge against the nameplate charge plus the line-length adjustment

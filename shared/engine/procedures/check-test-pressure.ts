@@ -2,10 +2,11 @@ import type { Verdict } from "../../schemas/procedures.ts";
 import { formatTenths } from "../diagnosis/format-tenths.ts";
 import { limitSource } from "./limit-source.ts";
 import { TEST_PRESSURE_LIMITS, type TestPressureLimits } from "./procedure-limits.ts";
-import { citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 
-const SOURCE = citeProcedure(["S57", "S63", "S64"]);
+const SOURCE = cite(PROCEDURE_SOURCES, ["S57", "S63", "S64"]);
 
 /**
  * Checks a nitrogen test pressure against the rated (maximum allowable, PS) pressure of the

@@ -2,10 +2,12 @@ import type { Verdict } from "../../schemas/procedures.ts";
 import { formatHundredths } from "../diagnosis/format-hundredths.ts";
 import { limitSource } from "./limit-source.ts";
 import { CYLINDER_FILL_LIMITS, type CylinderFillLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { COMMON_PRACTICE } from "../sources/marks.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 
-const SOURCE = citeProcedure(["S79", "S78"], `warning margin (${COMMON_PRACTICE})`);
+const SOURCE = cite(PROCEDURE_SOURCES, ["S79", "S78"], `warning margin (${COMMON_PRACTICE})`);
 
 /**
  * Judges a recovery cylinder's contents against its fill limit (from `cylinderFillLimit`):

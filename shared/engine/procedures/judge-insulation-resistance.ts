@@ -2,13 +2,19 @@ import type { InsulationKind, InsulationResistanceResult } from "../../schemas/p
 import { formatHundredths } from "../diagnosis/format-hundredths.ts";
 import { limitSource } from "./limit-source.ts";
 import { INSULATION_LIMITS, type InsulationLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { COMMON_PRACTICE, MEMORY } from "../sources/marks.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 
 const SOURCES: Record<InsulationKind, string> = {
-  wiring: citeProcedure(["S47"], `500 V d.c. test voltage (${MEMORY})`),
-  compressor: citeProcedure(["S48", "S49"], `re-test after the crankcase heater has run (${COMMON_PRACTICE})`),
-  motor: citeProcedure(["S47"], `IEEE 43 5 MΩ for random-wound machines below 1 kV (${MEMORY})`),
+  wiring: cite(PROCEDURE_SOURCES, ["S47"], `500 V d.c. test voltage (${MEMORY})`),
+  compressor: cite(
+    PROCEDURE_SOURCES,
+    ["S48", "S49"],
+    `re-test after the crankcase heater has run (${COMMON_PRACTICE})`,
+  ),
+  motor: cite(PROCEDURE_SOURCES, ["S47"], `IEEE 43 5 MΩ for random-wound machines below 1 kV (${MEMORY})`),
 };
 
 /**

@@ -1,5 +1,7 @@
 import type { Verdict } from "../../schemas/procedures.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { COMMON_PRACTICE } from "../sources/marks.ts";
 
 /** What a leak search found, as far as the verdict needs it. */
 export interface LeakSearchFindings {
@@ -11,7 +13,8 @@ export interface LeakSearchFindings {
 // Decay-curve guides say: leak → find it, repair, re-pressure-test [S58][S55]; the order of work
 // itself is common practice. Topping up before the leak is repaired is not allowed under the
 // Australian codes of practice (weak source / memory), so an unrepaired leak fails.
-const SOURCE = citeProcedure(
+const SOURCE = cite(
+  PROCEDURE_SOURCES,
   ["S58", "S55"],
   `find, repair and re-test before evacuating and charging (${COMMON_PRACTICE})`,
 );

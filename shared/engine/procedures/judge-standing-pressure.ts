@@ -4,7 +4,9 @@ import { getRefrigerant } from "../properties/get-refrigerant.ts";
 import { STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
 import { saturationPressure } from "../properties/saturation-pressure.ts";
 import { saturationTemperature } from "../properties/saturation-temperature.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { COMMON_PRACTICE } from "../sources/marks.ts";
 
 /**
  * Saturation temperature above the equalised temperature beyond which the standing pressure
@@ -16,11 +18,13 @@ export const STANDING_PRESSURE_TOLERANCE_K = 1;
 /** Glide at the equalised temperature above which a blend is treated as zeotropic, K. */
 const ZEOTROPE_GLIDE_K = 0.5;
 
-const SOURCE = citeProcedure(
+const SOURCE = cite(
+  PROCEDURE_SOURCES,
   ["S27", "S28", "S31"],
   `±${STANDING_PRESSURE_TOLERANCE_K} K for thermometer and gauge (${COMMON_PRACTICE})`,
 );
-const BLEND_SOURCE = citeProcedure(
+const BLEND_SOURCE = cite(
+  PROCEDURE_SOURCES,
   ["S27", "S31", "S1"],
   `a blend's standing pressure lies between its dew and bubble pressures (${COMMON_PRACTICE})`,
 );

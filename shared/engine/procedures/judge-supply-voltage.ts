@@ -2,10 +2,12 @@ import type { SupplyVoltageResult } from "../../schemas/procedures.ts";
 import { formatTenths } from "../diagnosis/format-tenths.ts";
 import { limitSource } from "./limit-source.ts";
 import { SUPPLY_VOLTAGE_LIMITS, type SupplyVoltageLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { COMMON_PRACTICE } from "../sources/marks.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 
-const SOURCE = citeProcedure(["S40"], COMMON_PRACTICE);
+const SOURCE = cite(PROCEDURE_SOURCES, ["S40"], COMMON_PRACTICE);
 
 /**
  * Judges the supply voltage while running against the nameplate: each phase within ±10 % of

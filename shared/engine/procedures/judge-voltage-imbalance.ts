@@ -2,10 +2,11 @@ import type { Verdict } from "../../schemas/procedures.ts";
 import { formatTenths } from "../diagnosis/format-tenths.ts";
 import { limitSource } from "./limit-source.ts";
 import { VOLTAGE_IMBALANCE_LIMITS, type VoltageImbalanceLimits } from "./procedure-limits.ts";
-import { citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 
-const SOURCE = citeProcedure(["S41", "S42", "S43", "S44"]);
+const SOURCE = cite(PROCEDURE_SOURCES, ["S41", "S42", "S43", "S44"]);
 
 /**
  * Judges a three-phase voltage imbalance. Up to 2 % passes (HVAC equipment makers' maximum

@@ -1,9 +1,15 @@
 import type { PressureTestResult } from "../../schemas/procedures.ts";
 import { formatTenths } from "../diagnosis/format-tenths.ts";
 import { KELVIN_OFFSET, STANDARD_ATMOSPHERE_KPA } from "../properties/property-tolerances.ts";
-import { COMPUTED, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { COMPUTED } from "../sources/marks.ts";
 
-const SOURCE = citeProcedure(["S65", "S74"], `ideal-gas correction on absolute pressure and kelvin (${COMPUTED})`);
+const SOURCE = cite(
+  PROCEDURE_SOURCES,
+  ["S65", "S74"],
+  `ideal-gas correction on absolute pressure and kelvin (${COMPUTED})`,
+);
 
 /**
  * Result of a standing nitrogen pressure (tightness) test, corrected for temperature. Nitrogen

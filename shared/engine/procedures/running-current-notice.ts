@@ -1,7 +1,7 @@
 import type { RunningCurrentKind } from "../../schemas/procedures.ts";
 import { formatTenths } from "../diagnosis/format-tenths.ts";
 import { MAX_PLAUSIBLE_TIMES_RATED, type RunningCurrentLimits } from "./procedure-limits.ts";
-import { MEMORY } from "./procedure-sources.ts";
+import { MEMORY } from "../sources/marks.ts";
 import { runningCurrent } from "./running-current.ts";
 
 /** A message shown beside a field while typing: caution (check it) or danger (stop). */

@@ -2,11 +2,13 @@ import type { RunningCurrentKind, RunningCurrentResult } from "../../schemas/pro
 import { formatTenths } from "../diagnosis/format-tenths.ts";
 import { limitSource } from "./limit-source.ts";
 import { RUNNING_CURRENT_LIMITS, type RunningCurrentLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { COMMON_PRACTICE, MEMORY } from "../sources/marks.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 
 const SOURCES: Record<RunningCurrentKind, string> = {
-  "compressor-rla": citeProcedure(["S39"], COMMON_PRACTICE),
+  "compressor-rla": cite(PROCEDURE_SOURCES, ["S39"], COMMON_PRACTICE),
   "fan-fla": `${COMMON_PRACTICE}; service factor 1.15 (${MEMORY})`,
 };
 

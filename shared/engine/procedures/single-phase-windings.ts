@@ -2,10 +2,12 @@ import type { SinglePhaseWindingInput, SinglePhaseWindingResult } from "../../sc
 import { formatTenths } from "../diagnosis/format-tenths.ts";
 import { limitSource } from "./limit-source.ts";
 import { SINGLE_PHASE_WINDING_LIMITS, type SinglePhaseWindingLimits } from "./procedure-limits.ts";
-import { COMMON_PRACTICE, MEMORY, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { COMMON_PRACTICE, MEMORY } from "../sources/marks.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 
-const SOURCE = citeProcedure(["S46"], `R–S = C–R + C–S (${MEMORY}); tolerance bands (${COMMON_PRACTICE})`);
+const SOURCE = cite(PROCEDURE_SOURCES, ["S46"], `R–S = C–R + C–S (${MEMORY}); tolerance bands (${COMMON_PRACTICE})`);
 
 /** Ohms to two decimals: winding readings are often a few ohms, so tenths hide the difference. */
 const ohmsText = (value: number) => `${(Math.round(value * 100) / 100).toFixed(2)} Ω`;

@@ -1,6 +1,7 @@
 import { formatTenths } from "../diagnosis/format-tenths.ts";
 import { checkTestPressure } from "./check-test-pressure.ts";
-import { citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
 import { TEST_PRESSURE_LIMITS, type TestPressureLimits } from "./procedure-limits.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 import type { LiveNotice } from "./running-current-notice.ts";
@@ -49,7 +50,7 @@ export function testPressureNotice(
     return {
       level: "caution",
       message: `The rated pressure entered, ${format(ratedKPa)}, is above the nameplate's ${format(nameplateKPa)}: the nameplate decides, so test to no more than ${format(nameplateKPa)}.`,
-      source: citeProcedure(["S57", "S63", "S64"]),
+      source: cite(PROCEDURE_SOURCES, ["S57", "S63", "S64"]),
     };
   }
   return null;

@@ -3,10 +3,12 @@ import { formatTenths } from "../diagnosis/format-tenths.ts";
 import { largestDeviationPercent } from "./largest-deviation-percent.ts";
 import { limitSource } from "./limit-source.ts";
 import { WINDING_BALANCE_LIMITS, type WindingBalanceLimits } from "./procedure-limits.ts";
-import { MEMORY, citeProcedure } from "./procedure-sources.ts";
+import { cite } from "../sources/cite.ts";
+import { PROCEDURE_SOURCES } from "../sources/procedure-sources.ts";
+import { MEMORY } from "../sources/marks.ts";
 import { resolveLimits } from "./resolve-limits.ts";
 
-const SOURCE = citeProcedure(["S44"], `small hermetic compressors within a few percent (${MEMORY})`);
+const SOURCE = cite(PROCEDURE_SOURCES, ["S44"], `small hermetic compressors within a few percent (${MEMORY})`);
 
 /**
  * Judges the balance of three lead-to-lead winding resistances: the largest deviation from

@@ -23,7 +23,7 @@ import { VisitPageSchema, type VisitListParams, type VisitPage } from "@shared/s
 import { ApiError, apiRequest, formWithFile, UPLOAD_TIMEOUT_MS } from "./api-client.ts";
 import { listQueryString } from "./list-params.ts";
 import { mergeReadingsPage, mergeVisitDelta } from "./merge-visit-delta.ts";
-import { viewerTimeZone } from "@shared/format/date-time.ts";
+import { localDayStart, viewerTimeZone } from "@shared/format/date-time.ts";
 
 const VisitEnvelopeSchema = z.object({ visit: VisitSchema });
 
@@ -156,14 +156,8 @@ export async function importReadings({
 }): Promise<ImportSummary> {
   const form = new FormData();
   form.append("circuit", String(circuit));
-  const day = new Date();
-  day.setHours(0, 0, 0, 0);
-  // Local midnight with its offset, so a logger's "10:05" lands on the right instant.
-  const offset = -day.getTimezoneOffset();
-  const sign = offset >= 0 ? "+" : "-";
-  const pad = (value: number) => String(Math.floor(Math.abs(value))).padStart(2, "0");
-  const localMidnight = `${day.getFullYear()}-${pad(day.getMonth() + 1)}-${pad(day.getDate())}T00:00:00${sign}${pad(offset / 60)}:${pad(offset % 60)}`;
-  form.append("dayStart", localMidnight);
+  // Today's local midnight, so a logger's "10:05" lands on the right instant.
+  form.append("dayStart", localDayStart(new Date()));
   form.append("mode", mode);
   if (mapping) form.append("mapping", JSON.stringify(mapping));
   form.append("file", file);

@@ -1,5 +1,7 @@
 import { HIGH_COMPRESSION_RATIO, LOW_COMPRESSION_RATIO } from "../diagnosis-limits.ts";
-import { MEMORY, cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
+import { MEMORY } from "../../sources/marks.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule, DiagnosisSnapshot } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
@@ -7,9 +9,9 @@ import { NO_OUTPUT } from "./no-output.ts";
 
 /** Ratio below the low limit at which the evidence reaches full strength. */
 const FULL_STRENGTH_RATIO_BELOW = 0.5;
-const SOURCE = cite(["S38", "S29"]);
+const SOURCE = cite(DIAGNOSIS_SOURCES, ["S38", "S29"]);
 /** Built once rather than per warning (performance). */
-const HIGH_RATIO_SOURCE = `${MEMORY}; ${cite(["S38"])}`;
+const HIGH_RATIO_SOURCE = `${MEMORY}; ${cite(DIAGNOSIS_SOURCES, ["S38"])}`;
 /** Only the low side is judged as evidence; the high side is a caution. */
 const BAND = { lowK: LOW_COMPRESSION_RATIO, highK: Number.POSITIVE_INFINITY };
 

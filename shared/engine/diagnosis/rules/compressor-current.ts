@@ -1,11 +1,13 @@
 import { CURRENT_RATIO_BAND, CURRENT_RATIO_FULL_STRENGTH } from "../diagnosis-limits.ts";
-import { COMMON_PRACTICE, cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
+import { COMMON_PRACTICE } from "../../sources/marks.ts";
 import { formatHundredths } from "../format-hundredths.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = `${cite(["S39", "S21"])}; ${COMMON_PRACTICE}`;
+const SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S39", "S21"])}; ${COMMON_PRACTICE}`;
 
 /** Compressor running current against RLA (RLA is a rating, not the expected running current). */
 const MESSAGES: BandedReading["messages"] = {

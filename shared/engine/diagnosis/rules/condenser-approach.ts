@@ -1,12 +1,13 @@
 import { SENSOR_TOLERANCE_K } from "../diagnosis-limits.ts";
 import { formatTenths } from "../format-tenths.ts";
-import { cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
 import type { TargetBand } from "../../../schemas/diagnosis.ts";
 import type { DiagnosisRule, DiagnosisSnapshot } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = cite(["S26", "S34"]);
+const SOURCE = cite(DIAGNOSIS_SOURCES, ["S26", "S34"]);
 
 /**
  * Liquid line minus the outdoor air entering the condenser: how close the condenser brings its

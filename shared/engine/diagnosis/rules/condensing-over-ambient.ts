@@ -1,9 +1,10 @@
-import { cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = `${cite(["S26", "S21", "S122"])}; mid-glide condensing temperature for blends`;
+const SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S26", "S21", "S122"])}; mid-glide condensing temperature for blends`;
 
 /** Mean condensing temperature over outdoor ambient: is head pressure right for the weather? */
 const MESSAGES: BandedReading["messages"] = {

@@ -3,11 +3,13 @@ import { DANGER_DISCHARGE_SUPERHEAT_K, LOW_DISCHARGE_SUPERHEAT_K } from "../diag
 import { deviationStrength } from "../deviation-strength.ts";
 import { evidenceFromSignature } from "../evidence-from-signature.ts";
 import { formatTenths } from "../format-tenths.ts";
-import { COMMON_PRACTICE, MEMORY, cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
+import { COMMON_PRACTICE, MEMORY } from "../../sources/marks.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = cite(["S13", "S37"]);
+const SOURCE = cite(DIAGNOSIS_SOURCES, ["S13", "S37"]);
 const LOW_SUPERHEAT_SOURCE = `discharge gas only a few kelvin above its dew point means liquid is reaching the compressor (${COMMON_PRACTICE}; ${MEMORY})`;
 
 /**

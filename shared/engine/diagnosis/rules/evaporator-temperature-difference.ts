@@ -1,9 +1,10 @@
-import { cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = `${cite(["S21", "S122", "S15"])}; mid-glide evaporating temperature for blends`;
+const SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S21", "S122", "S15"])}; mid-glide evaporating temperature for blends`;
 
 /**
  * Return (room, entering fluid) temperature minus the mean evaporating temperature: whether

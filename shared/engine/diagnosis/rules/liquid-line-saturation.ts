@@ -1,11 +1,13 @@
-import { COMMON_PRACTICE, cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
+import { COMMON_PRACTICE } from "../../sources/marks.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = `negative subcooling means vapour or flash gas at the measuring point, or the wrong pipe (${cite(["S1", "S2"])}; ${COMMON_PRACTICE})`;
+const SOURCE = `negative subcooling means vapour or flash gas at the measuring point, or the wrong pipe (${cite(DIAGNOSIS_SOURCES, ["S1", "S2"])}; ${COMMON_PRACTICE})`;
 /** Built once rather than per warning (performance). */
-const FLASH_GAS_SOURCE = `${SOURCE}; ${cite(["S22"])}`;
+const FLASH_GAS_SOURCE = `${SOURCE}; ${cite(DIAGNOSIS_SOURCES, ["S22"])}`;
 
 /** Liquid line warmer than its bubble point: flash gas, or vapour (wrong pipe) beyond the dew point. */
 export const liquidLineSaturationRule: DiagnosisRule = {

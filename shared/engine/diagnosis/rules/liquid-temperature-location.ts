@@ -1,8 +1,9 @@
-import { cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = `${cite(["S13"])}; subcooling exists only downstream of the condensing section (${cite(["S1"])})`;
+const SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S13"])}; subcooling exists only downstream of the condensing section (${cite(DIAGNOSIS_SOURCES, ["S1"])})`;
 
 /** Refuses subcooling when the "liquid" temperature was taken on the discharge line. */
 export const liquidTemperatureLocationRule: DiagnosisRule = {

@@ -1,10 +1,12 @@
 import type { DiagnosisWarning, Finding } from "../../../schemas/diagnosis.ts";
-import { COMMON_PRACTICE, cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
+import { COMMON_PRACTICE } from "../../sources/marks.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
 const SOURCE = `property tables never extrapolate (${COMMON_PRACTICE})`;
-const VERY_LOW_SOURCE = `${cite(["S21", "S22"])}; a compressor pulling the suction below the refrigerant's table runs hot and starved (${COMMON_PRACTICE})`;
+const VERY_LOW_SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S21", "S22"])}; a compressor pulling the suction below the refrigerant's table runs hot and starved (${COMMON_PRACTICE})`;
 
 /**
  * Reports readings the refrigerant's saturation table does not cover (never extrapolated). A

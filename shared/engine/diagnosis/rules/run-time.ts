@@ -1,9 +1,11 @@
 import { MIN_RUN_MINUTES } from "../diagnosis-limits.ts";
-import { COMMON_PRACTICE, cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
+import { COMMON_PRACTICE } from "../../sources/marks.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = `${cite(["S10", "S20"])}; ${MIN_RUN_MINUTES}-minute minimum: ${COMMON_PRACTICE}`;
+const SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S10", "S20"])}; ${MIN_RUN_MINUTES}-minute minimum: ${COMMON_PRACTICE}`;
 
 /** Warns when the compressor has run too briefly for readings to have settled. */
 export const runTimeRule: DiagnosisRule = {

@@ -1,9 +1,10 @@
-import { cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = cite(["S9", "S11", "S14", "S21", "S24"]);
+const SOURCE = cite(DIAGNOSIS_SOURCES, ["S9", "S11", "S14", "S21", "S24"]);
 
 const MESSAGES: BandedReading["messages"] = {
   low: (value, band) => `Subcooling ${value} K is below ${band} K: little liquid is held in the condenser`,

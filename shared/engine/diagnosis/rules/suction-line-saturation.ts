@@ -1,11 +1,12 @@
 import { EVAPORATOR_OUTLET_FLOODBACK_K, FLOODBACK_SUPERHEAT_K, SENSOR_TOLERANCE_K } from "../diagnosis-limits.ts";
-import { cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = `${cite(["S17"])}; vapour cannot be colder than its saturation temperature (${cite(["S1"])}); sensor allowance ${SENSOR_TOLERANCE_K} K ${cite(["S10"])}`;
-const GLIDE_SOURCE = `between bubble and dew point a blend is still boiling (${cite(["S1", "S2"])}); ${cite(["S17"])}`;
+const SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S17"])}; vapour cannot be colder than its saturation temperature (${cite(DIAGNOSIS_SOURCES, ["S1"])}); sensor allowance ${SENSOR_TOLERANCE_K} K ${cite(DIAGNOSIS_SOURCES, ["S10"])}`;
+const GLIDE_SOURCE = `between bubble and dew point a blend is still boiling (${cite(DIAGNOSIS_SOURCES, ["S1", "S2"])}); ${cite(DIAGNOSIS_SOURCES, ["S17"])}`;
 
 /**
  * Suction line colder than saturation (impossible), inside a blend's glide (still boiling: liquid

@@ -1,12 +1,13 @@
-import { cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = cite(["S10", "S17", "S21", "S22", "S23"]);
+const SOURCE = cite(DIAGNOSIS_SOURCES, ["S10", "S17", "S21", "S22", "S23"]);
 /** Built once rather than per warning (performance). */
-const TARGET_UNAVAILABLE_SOURCE = cite(["S10", "S17", "S18", "S19"]);
+const TARGET_UNAVAILABLE_SOURCE = cite(DIAGNOSIS_SOURCES, ["S10", "S17", "S18", "S19"]);
 
 const FIXED_MESSAGES: BandedReading["messages"] = {
   low: (value, band) =>

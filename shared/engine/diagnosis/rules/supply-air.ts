@@ -1,4 +1,4 @@
-import { COMMON_PRACTICE } from "../sources.ts";
+import { COMMON_PRACTICE } from "../../sources/marks.ts";
 import { formatTenths } from "../format-tenths.ts";
 import type { DiagnosisRule } from "../types.ts";
 import { NO_OUTPUT } from "./no-output.ts";

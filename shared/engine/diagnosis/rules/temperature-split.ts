@@ -1,9 +1,10 @@
-import { cite } from "../sources.ts";
+import { cite } from "../../sources/cite.ts";
+import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
 import type { DiagnosisRule, DiagnosisSnapshot } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
-const SOURCE = cite(["S33", "S21"]);
+const SOURCE = cite(DIAGNOSIS_SOURCES, ["S33", "S21"]);
 
 /** Temperature split across the evaporator (return − supply) against its expected value. */
 const fluidOf = (snapshot: DiagnosisSnapshot) => snapshot.application === "process-chilling";

@@ -65,16 +65,52 @@ function SortableHeader<TData extends RowData>({
 interface SortableTableProps<TData extends RowData> {
   table: ReactTable<SortableFeatures, TData>;
   caption: string;
-  words: SortWords;
+  /** What a screen reader hears for a sorted column; a list none of whose columns sort leaves it out. */
+  words?: SortWords;
+  /**
+   * How the list shows on a phone. Left out, the table is hidden below md and the screen draws its
+   * own cards there (jobs, equipment); `stacked`, the table itself shows each row as a card of
+   * label-above-value lines below sm, for a short list whose rows need no card of their own (members).
+   */
+  phones?: "own-cards" | "stacked";
 }
 
-/** The table view of a sortable list (tablets and desktops): headers that sort, the filtered, sorted rows. */
-export function SortableTable<TData extends RowData>({ table, caption, words }: SortableTableProps<TData>) {
+const LAYOUT = {
+  "own-cards": {
+    frame: "hidden overflow-x-auto rounded-card border-2 border-rule bg-surface md:block",
+    head: "border-b-2 border-rule",
+    header: "px-3 py-1",
+    row: "border-b border-rule last:border-b-0",
+    cell: "px-3 py-2 align-top",
+  },
+  stacked: {
+    frame: "rounded-card border-2 border-rule bg-surface",
+    head: "sr-only border-b-2 border-rule sm:not-sr-only sm:table-header-group",
+    header: "px-3 py-2",
+    row: "block border-b border-rule py-2 last:border-b-0 sm:table-row sm:py-0",
+    cell: "block px-3 py-1 align-middle sm:table-cell sm:py-2",
+  },
+} as const;
+
+const NO_SORT_WORDS: SortWords = { asc: "(sorted ascending)", desc: "(sorted descending)" };
+
+/**
+ * The table view of a list: headers that sort where the column can, the filtered, sorted rows.
+ * Every tabular list of Satura draws through it, so headers, sort announcements and row rules
+ * read the same everywhere.
+ */
+export function SortableTable<TData extends RowData>({
+  table,
+  caption,
+  words = NO_SORT_WORDS,
+  phones = "own-cards",
+}: SortableTableProps<TData>) {
+  const layout = LAYOUT[phones];
   return (
-    <div className="hidden overflow-x-auto rounded-card border-2 border-rule bg-surface md:block">
+    <div className={layout.frame}>
       <table className="w-full text-left">
         <caption className="sr-only">{caption}</caption>
-        <thead className="border-b-2 border-rule">
+        <thead className={layout.head}>
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
               {group.headers.map((header) => {
@@ -92,7 +128,7 @@ export function SortableTable<TData extends RowData>({ table, caption, words }: 
                             ? "none"
                             : undefined
                     }
-                    className="px-3 py-1"
+                    className={layout.header}
                   >
                     {header.column.getCanSort() ? (
                       <SortableHeader
@@ -100,6 +136,8 @@ export function SortableTable<TData extends RowData>({ table, caption, words }: 
                         label={String(header.column.columnDef.header)}
                         words={words}
                       />
+                    ) : phones === "stacked" ? (
+                      <span className="font-semibold">{String(header.column.columnDef.header)}</span>
                     ) : (
                       // Not sortable (a list paged by the server sorts by what it can read in order).
                       <span className="inline-flex min-h-touch items-center whitespace-nowrap font-semibold">
@@ -114,9 +152,15 @@ export function SortableTable<TData extends RowData>({ table, caption, words }: 
         </thead>
         <tbody>
           {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="border-b border-rule last:border-b-0">
+            <tr key={row.id} className={layout.row}>
               {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-2 align-top">
+                <td key={cell.id} className={layout.cell}>
+                  {phones === "stacked" ? (
+                    // The column's name above its value, for the card a row becomes on a phone.
+                    <span aria-hidden className="block text-sm text-muted sm:hidden">
+                      {String(cell.column.columnDef.header ?? "")}
+                    </span>
+                  ) : null}
                   <table.FlexRender cell={cell} />
                 </td>
               ))}

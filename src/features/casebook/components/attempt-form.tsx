@@ -1,4 +1,5 @@
 import { useId, useState, type FormEvent } from "react";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import {
   AttemptAnswersSchema,
@@ -173,8 +174,8 @@ export function AttemptForm({
       reasoning: draft.reasoning,
     });
     if (!parsed.success) {
-      for (const issue of parsed.error.issues)
-        found[String(issue.path[0])] ??= issue.path[0] === "chargeState" ? "Pick the charge state" : issue.message;
+      for (const [field, message] of Object.entries(fieldMessages(parsed.error)))
+        found[field] ??= field === "chargeState" ? "Pick the charge state" : message;
     }
     setErrors(found);
     if (Object.keys(found).length > 0 || !parsed.success) return;

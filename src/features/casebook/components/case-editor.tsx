@@ -1,4 +1,5 @@
 import { useMemo, useState, type FormEvent, type ReactNode } from "react";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { cautions } from "@shared/content/cautions.ts";
 import { REFRIGERANT_IDS } from "@shared/property-tables/refrigerant-catalogue.ts";
@@ -166,7 +167,8 @@ export function CaseEditor({
       safetyTopics: state.safetyTopics,
     });
     const found: Record<string, string> = { ...converted.errors };
-    if (!parsed.success) for (const issue of parsed.error.issues) found[issue.path.join(".")] ??= issue.message;
+    if (!parsed.success)
+      for (const [field, message] of Object.entries(fieldMessages(parsed.error))) found[field] ??= message;
     setErrors(found);
     if (Object.keys(found).length > 0 || !parsed.success) {
       setFormError("Some fields need attention");

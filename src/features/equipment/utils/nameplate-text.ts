@@ -1,4 +1,4 @@
-import type { CircuitNameplate, Equipment } from "@shared/schemas/equipment.ts";
+import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { MeteringDevice } from "@shared/schemas/diagnosis.ts";
 
 /** Metering devices as the trade writes them. */
@@ -21,27 +21,6 @@ export function meteringSummary(circuits: readonly Pick<CircuitNameplate, "numbe
   if (devices.size === 1) return `${circuits.length} × ${METERING_DEVICE_LABELS[circuits[0].meteringDevice]}`;
   return circuits.map((circuit) => `C${circuit.number} ${METERING_DEVICE_LABELS[circuit.meteringDevice]}`).join(" · ");
 }
-
-/** Every word a search box should find the unit by. */
-export function equipmentSearchText(unit: Equipment): string {
-  return [
-    unit.name,
-    unit.kind,
-    unit.siteName,
-    unit.customerName,
-    unit.refrigerant,
-    unit.location,
-    unit.maker,
-    unit.model,
-    unit.serial,
-  ]
-    .filter(Boolean)
-    .join(" ")
-    .toLowerCase();
-}
-
-/** The one search rule, shared with the server's SQL (shared/format/search-terms.ts). */
-export { matchesSearch } from "@shared/format/search-terms.ts";
 
 /** "packaged rooftop" → "Packaged rooftop": kinds are stored lower-case, shown as a label. */
 export function capitalise(text: string): string {

@@ -1,12 +1,12 @@
-import { createColumnHelper, tableFeatures, useTable } from "@tanstack/react-table";
+import { createColumnHelper, useTable } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import { ROLE_LABELS, ROLES, type AuthUser, type Role } from "@shared/schemas/auth.ts";
 import type { Member } from "@shared/schemas/members.ts";
 import { Button } from "@/components/ui/button/button.tsx";
+import { SortableTable, sortableTableFeatures } from "@/components/ui/data-table/sortable-table.tsx";
 import { useRemoveMember, useUpdateMemberRole } from "@/lib/api/members.ts";
 
-const features = tableFeatures({});
-const column = createColumnHelper<typeof features, Member>();
+const column = createColumnHelper<typeof sortableTableFeatures, Member>();
 
 function RoleCell({ member, canManage }: { member: Member; canManage: boolean }) {
   const update = useUpdateMemberRole();
@@ -74,39 +74,15 @@ export function MembersTable({ members, viewer }: { members: Member[]; viewer: A
       ? column.columns([nameColumn, emailColumn, roleColumn, actionsColumn])
       : column.columns([nameColumn, emailColumn, roleColumn]);
   }, [canManage, viewer.id]);
-  const table = useTable({ features, columns, data: members, getRowId: (row) => row.id });
+  // A company's handful of people reads in the server's order; no column sorts.
+  const table = useTable({
+    features: sortableTableFeatures,
+    columns,
+    data: members,
+    getRowId: (row) => row.id,
+    enableSorting: false,
+  });
 
   // On a phone each member is a stacked card (label above value); from sm up it is a plain table.
-  return (
-    <div className="rounded-card border-2 border-rule bg-surface">
-      <table className="w-full text-left">
-        <caption className="sr-only">Members and their roles</caption>
-        <thead className="sr-only border-b-2 border-rule sm:not-sr-only sm:table-header-group">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => (
-                <th key={header.id} scope="col" className="px-3 py-2 font-semibold">
-                  {header.isPlaceholder ? null : <table.FlexRender header={header} />}
-                </th>
-              ))}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="block border-b border-rule py-2 last:border-b-0 sm:table-row sm:py-0">
-              {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="block px-3 py-1 align-middle sm:table-cell sm:py-2">
-                  <span aria-hidden className="block text-sm text-muted sm:hidden">
-                    {String(cell.column.columnDef.header ?? "")}
-                  </span>
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
-  );
+  return <SortableTable table={table} caption="Members and their roles" phones="stacked" />;
 }

@@ -1,3 +1,4 @@
+import { formatTime } from "@shared/format/date-time.ts";
 import { Plus, Save, Trash2 } from "lucide-react";
 import { useState } from "react";
 import { runningCurrentNotice } from "@shared/engine/index.ts";
@@ -15,12 +16,12 @@ import { useCreateElectricalCheck, useElectricalChecks } from "@/lib/api/procedu
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { errorFor, fieldErrorsOf } from "../utils/field-errors.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
+import { errorFor } from "../utils/field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { ElectricalCheckView } from "./electrical-check-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
-import { recordTime } from "../utils/record-time.ts";
 import { LiveNoticeLine } from "./live-notice.tsx";
 
 interface ElectricalPanelProps {
@@ -122,7 +123,7 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
   };
   // The same schema the server uses, on every keystroke: a corrected field loses its message at once.
   const parsed = ElectricalCheckBodySchema.safeParse(body);
-  const schemaErrors = parsed.success ? {} : fieldErrorsOf(parsed.error);
+  const schemaErrors = parsed.success ? {} : fieldMessages(parsed.error);
   const typedText = (path: string): string => {
     const [group, index, field] = path.split(".");
     const at = Number(index);
@@ -206,7 +207,7 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
         records: (checks.data?.electricalChecks ?? []).map((check) => ({
           id: check.id,
           voided: check.voided,
-          what: `the electrical check of ${recordTime(check.takenAt)}`,
+          what: `the electrical check of ${formatTime(check.takenAt)}`,
           element: <ElectricalCheckView check={check} />,
         })),
       }}

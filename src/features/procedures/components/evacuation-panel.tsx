@@ -1,3 +1,4 @@
+import { formatTime } from "@shared/format/date-time.ts";
 import { CloudOff, Plus, Play, Power, Undo2 } from "lucide-react";
 import { useState } from "react";
 import { micronsToPa, paToMicrons } from "@shared/engine/index.ts";
@@ -28,10 +29,9 @@ import { formatNumber } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-outbox.ts";
 import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
-import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toNumber } from "../utils/parse-number.ts";
-import { recordTime } from "../utils/record-time.ts";
 import { EvacuationChart } from "./lazy-evacuation-chart.tsx";
 import { evacuationsOnDevice, type ShownEvacuation } from "../utils/evacuations-on-device.ts";
 import { formatVacuum, VACUUM_LABEL, type VacuumUnit } from "./vacuum-units.ts";
@@ -101,7 +101,7 @@ function SampleEntry({
     };
     const parsed = EvacuationSampleBodySchema.safeParse(body);
     if (!parsed.success) {
-      setErrors(fieldErrorsOf(parsed.error));
+      setErrors(fieldMessages(parsed.error));
       return;
     }
     setErrors({});
@@ -268,7 +268,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
     });
     if (!parsed.success) {
       // The schema speaks microns; someone reading pascals gets the range in pascals.
-      const fields = fieldErrorsOf(parsed.error);
+      const fields = fieldMessages(parsed.error);
       if (unit === "Pa" && fields.targetMicrons) fields.targetMicrons = `Enter a target from ${targetRange}`;
       setStartError({ message: "Check the target", fields });
       return;
@@ -324,7 +324,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
           className="space-y-3 rounded-card border-2 border-rule bg-surface p-4"
         >
           <h2 id="evacuation-current-heading" className="text-lg font-semibold">
-            Evacuation started {recordTime(current.startedAt)}
+            Evacuation started {formatTime(current.startedAt)}
           </h2>
           {current.onDevice && (
             <p className="flex items-center gap-2 text-sm font-medium">
@@ -374,7 +374,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
               visitId={visitId}
               kind="evacuation"
               recordId={current.id}
-              what={`the evacuation started ${recordTime(current.startedAt)}`}
+              what={`the evacuation started ${formatTime(current.startedAt)}`}
             />
           )}
         </section>
@@ -421,7 +421,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
             {earlier.map((evacuation) => (
               <li key={evacuation.id} className="flex flex-wrap items-center gap-2 text-sm">
                 <VoidedRecord voided={evacuation.voided} className="flex flex-wrap items-center gap-2">
-                  <span className="num">{recordTime(evacuation.startedAt)}</span>
+                  <span className="num">{formatTime(evacuation.startedAt)}</span>
                   <EvacuationBadge evacuation={evacuation} />
                   {evacuation.samples.length > 0 && (
                     <span className="num text-muted">
@@ -434,7 +434,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
                     visitId={visitId}
                     kind="evacuation"
                     recordId={evacuation.id}
-                    what={`the evacuation started ${recordTime(evacuation.startedAt)}`}
+                    what={`the evacuation started ${formatTime(evacuation.startedAt)}`}
                   />
                 )}
               </li>

@@ -1,3 +1,4 @@
+import { formatTime } from "@shared/format/date-time.ts";
 import { Plus, Save, Trash2 } from "lucide-react";
 import { useState } from "react";
 import {
@@ -20,11 +21,10 @@ import { useCreateLeakSearch, useLeakSearches } from "@/lib/api/procedures.ts";
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { LeakSearchView } from "./leak-search-view.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
-import { recordTime } from "../utils/record-time.ts";
 
 type LeakRow = { location: string; severity: LeakSeverity; repair: string; repaired: boolean };
 const emptyLeak = (): LeakRow => ({ location: "", severity: "small", repair: "", repaired: false });
@@ -76,7 +76,7 @@ export function LeakSearchPanel({
     };
     const parsed = LeakSearchBodySchema.safeParse(body);
     if (!parsed.success) {
-      setErrors(fieldErrorsOf(parsed.error));
+      setErrors(fieldMessages(parsed.error));
       setFormError("Check the fields marked below");
       return;
     }
@@ -113,7 +113,7 @@ export function LeakSearchPanel({
         records: (searches.data?.leakSearches ?? []).map((search) => ({
           id: search.id,
           voided: search.voided,
-          what: `the leak search of ${recordTime(search.takenAt)}`,
+          what: `the leak search of ${formatTime(search.takenAt)}`,
           element: <LeakSearchView search={search} />,
         })),
       }}

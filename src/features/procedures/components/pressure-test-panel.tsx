@@ -1,3 +1,4 @@
+import { formatTime } from "@shared/format/date-time.ts";
 import { Save } from "lucide-react";
 import { useState } from "react";
 import { testPressureNotice } from "@shared/engine/index.ts";
@@ -24,12 +25,11 @@ import {
 } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
-import { recordTime } from "../utils/record-time.ts";
 import { PressureTestView } from "./pressure-test-view.tsx";
 import { LiveNoticeLine } from "./live-notice.tsx";
 
@@ -127,7 +127,7 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
     };
     const parsed = PressureTestBodySchema.safeParse(body);
     if (!parsed.success) {
-      setErrors(fieldErrorsOf(parsed.error));
+      setErrors(fieldMessages(parsed.error));
       setFormError("Check the fields marked below");
       return;
     }
@@ -167,7 +167,7 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
         records: (tests.data?.pressureTests ?? []).map((test) => ({
           id: test.id,
           voided: test.voided,
-          what: `the pressure test of ${recordTime(test.takenAt)}`,
+          what: `the pressure test of ${formatTime(test.takenAt)}`,
           element: <PressureTestView test={test} units={units} atmosphericKPa={atmosphericKPa} />,
         })),
       }}

@@ -1,3 +1,4 @@
+import { formatTime } from "@shared/format/date-time.ts";
 import { Save } from "lucide-react";
 import { useState } from "react";
 import { standingPressureOutcome } from "@shared/engine/index.ts";
@@ -18,10 +19,9 @@ import {
 } from "@/lib/units/display-units.ts";
 import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
 import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { fieldErrorsOf } from "../utils/field-errors.ts";
+import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import { useFieldErrors } from "../hooks/use-field-errors.ts";
 import { toConverted } from "../utils/parse-number.ts";
-import { recordTime } from "../utils/record-time.ts";
 import { ProcedureLayout } from "./procedure-layout.tsx";
 import {
   StandingPressureFigures,
@@ -98,7 +98,7 @@ export function StandingPressurePanel({
   const save = async () => {
     setFormError(null);
     if (!parsed.success) {
-      setErrors(fieldErrorsOf(parsed.error));
+      setErrors(fieldMessages(parsed.error));
       setFormError("Check the fields marked below");
       return;
     }
@@ -142,7 +142,7 @@ export function StandingPressurePanel({
         records: (checks.data?.standingPressureChecks ?? []).map((check) => ({
           id: check.id,
           voided: check.voided,
-          what: `the standing-pressure check of ${recordTime(check.takenAt)}`,
+          what: `the standing-pressure check of ${formatTime(check.takenAt)}`,
           element: <StandingPressureView check={check} units={units} />,
         })),
       }}

@@ -1,18 +1,21 @@
 import { useDeferredValue, useId, useState } from "react";
 import { Link } from "react-router-dom";
-import { REFRIGERANT_CATALOGUE } from "@shared/property-tables/refrigerant-catalogue.ts";
+import { matchesSearch } from "@shared/format/search-terms.ts";
+import { REFRIGERANT_CATALOGUE, type RefrigerantSummary } from "@shared/property-tables/refrigerant-catalogue.ts";
 import { describeSafetyClass, safetyClasses } from "@shared/content/safety-classes.ts";
 import { paths } from "@/config/paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
 import { SearchInput } from "@/components/ui/search-input/search-input.tsx";
 
-/** Matches "r32", "32", "R-32", "1234ze" against designations and names. */
-function normalise(text: string): string {
-  return text
-    .toLowerCase()
-    .replace(/[\s\-–()]/g, "")
-    .replace(/^r(?=\d)/, "");
+/**
+ * The words the list finds a refrigerant by: its designation and name, and both again without
+ * brackets, since "R1234ze(E)" is as often typed "1234zeE". The search rule itself is the app's one
+ * (shared/format/search-terms.ts: "r32", "32" and "R-32" alike, every word somewhere).
+ */
+function searchTextOf(info: RefrigerantSummary): string {
+  const text = `${info.id} ${info.name}`.toLowerCase();
+  return `${text} ${text.replace(/[()]/g, "")}`;
 }
 
 export function RefrigerantList() {
@@ -20,10 +23,7 @@ export function RefrigerantList() {
   const deferredQuery = useDeferredValue(query);
   const searchId = useId();
   const refrigerants = REFRIGERANT_CATALOGUE;
-  const needle = normalise(deferredQuery);
-  const shown = refrigerants.filter(
-    (info) => needle === "" || normalise(info.id).includes(needle) || normalise(info.name).includes(needle),
-  );
+  const shown = refrigerants.filter((info) => matchesSearch(searchTextOf(info), deferredQuery));
 
   return (
     <div className="space-y-4">

@@ -8,8 +8,8 @@ import { SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { useCursorPages } from "@/hooks/use-cursor-pages.ts";
 import { useMembers } from "@/lib/api/members.ts";
 import { registerExportHref, useRegister } from "@/lib/api/register.ts";
-import { formatKg, localDayEnd, localDayStart } from "../utils/format-register.ts";
-import { formatDateTime } from "@shared/format/date-time.ts";
+import { formatKg } from "../utils/format-register.ts";
+import { formatDateTime, localDayEnd, localDayStart } from "@shared/format/date-time.ts";
 
 export interface RegisterFilters {
   /** Local calendar dates (YYYY-MM-DD) as typed in the date inputs; "" = open-ended. */

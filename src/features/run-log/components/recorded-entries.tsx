@@ -17,8 +17,6 @@ import {
 } from "@/lib/units/display-units.ts";
 import { formatTime } from "@shared/format/date-time.ts";
 
-const clock = (iso: string) => formatTime(iso);
-
 /**
  * Entries drawn at first, newest first; "Show earlier entries" adds as many again, fetching the
  * page of older readings from the server once the held ones are all shown. A logged series
@@ -99,14 +97,14 @@ export function RecordedEntries({
           const voided = entry.kind === "reading" ? entry.reading.voided : entry.adjustment.voided;
           const what =
             entry.kind === "reading"
-              ? `the reading of ${clock(entry.at)} on circuit ${circuit}`
-              : `the adjustment of ${clock(entry.at)}`;
+              ? `the reading of ${formatTime(entry.at)} on circuit ${circuit}`
+              : `the adjustment of ${formatTime(entry.at)}`;
           return (
             <li key={id} className="flex flex-wrap items-start justify-between gap-2 p-3" data-testid={`entry-${id}`}>
               <VoidedRecord voided={voided} className="min-w-0 flex-1">
                 {entry.kind === "reading" ? (
                   <p className="num">
-                    <span className="font-sans font-semibold">{clock(entry.at)} reading</span> · suction{" "}
+                    <span className="font-sans font-semibold">{formatTime(entry.at)} reading</span> · suction{" "}
                     {pressure(
                       entry.reading.input.suctionPressureKPa,
                       entry.reading.input.atmosphericPressureKPa ?? atmosphericKPa,
@@ -127,7 +125,7 @@ export function RecordedEntries({
                     <PencilLine aria-hidden className="mt-1 size-4 shrink-0" />
                     <span>
                       <span className="font-semibold">
-                        {clock(entry.at)} {ADJUSTMENT_KIND_LABELS[entry.adjustment.kind].toLowerCase()}
+                        {formatTime(entry.at)} {ADJUSTMENT_KIND_LABELS[entry.adjustment.kind].toLowerCase()}
                       </span>
                       : {entry.adjustment.description}
                       {entry.adjustment.amountKg != null && (

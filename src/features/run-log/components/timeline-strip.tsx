@@ -7,7 +7,6 @@ import type { CircuitSeries } from "../utils/circuit-series.ts";
 import { formatTime } from "@shared/format/date-time.ts";
 
 const STRIP_LENGTH = 8;
-const clock = (iso: string) => formatTime(iso);
 
 type Entry =
   | { kind: "reading"; at: string; reading: CircuitSeries["readings"][number] }
@@ -45,7 +44,7 @@ export function TimelineStrip({ series, units }: { series: CircuitSeries; units:
       {entries.map((entry) =>
         entry.kind === "reading" ? (
           <li key={entry.reading.id} className="num min-w-28 rounded-card border-2 border-rule bg-surface p-2 text-sm">
-            <p className="font-sans text-xs text-muted">{clock(entry.at)}</p>
+            <p className="font-sans text-xs text-muted">{formatTime(entry.at)}</p>
             <p>
               SH <strong>{diff(entry.reading.result.superheatK)}</strong> {k}
             </p>
@@ -65,7 +64,7 @@ export function TimelineStrip({ series, units }: { series: CircuitSeries; units:
             key={entry.adjustment.id}
             className="min-w-32 rounded-card border-2 border-dashed border-ink bg-sunken p-2 text-sm"
           >
-            <p className="text-xs text-muted">{clock(entry.at)}</p>
+            <p className="text-xs text-muted">{formatTime(entry.at)}</p>
             <p className="flex items-start gap-1 font-medium">
               <PencilLine aria-hidden className="mt-0.5 size-4 shrink-0" />
               {entry.adjustment.description}

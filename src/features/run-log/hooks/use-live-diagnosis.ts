@@ -1,35 +1,14 @@
 import { useDeferredValue, useMemo } from "react";
 import { diagnose, DiagnosisInputError } from "@shared/engine/index.ts";
-import {
-  DiagnosisInputSchema,
-  type Application,
-  type ChargeReference,
-  type DiagnosisInput,
-  type DiagnosisResult,
-  type MeteringDevice,
-} from "@shared/schemas/diagnosis.ts";
+import { withCircuitFacts, type CircuitFacts } from "@shared/schemas/circuit-facts.ts";
+import { DiagnosisInputSchema, type DiagnosisInput, type DiagnosisResult } from "@shared/schemas/diagnosis.ts";
 import type { MeasuredValues } from "@shared/schemas/visits.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { useSinglePhaseTable } from "./use-single-phase-table.ts";
 import { parseDraft, type DraftField, type ReadingDraft } from "../utils/reading-draft.ts";
 
-export interface CircuitContext {
-  refrigerant: string;
-  meteringDevice: MeteringDevice;
-  targetSuperheatK: number | null;
-  targetSubcoolingK: number | null;
-  compressorRla: number | null;
-  /** The equipment's application and the circuit's liquid line length: they set the bands. */
-  application: Application;
-  liquidLineLengthM: number | null;
-  /**
-   * The circuit's correct charge (nameplate plus its weigh-in line adjustment), kg, and its
-   * reference point, as the server diagnoses with them: the live charge estimate matches the
-   * stored one. Null while they load (no estimate in kilograms until then).
-   */
-  chargeKg: number | null;
-  chargeReference: ChargeReference | null;
-}
+/** The circuit's facts the live diagnosis joins to what is typed (`circuitFacts`). */
+export type CircuitContext = CircuitFacts;
 
 type NotReady =
   | { kind: "incomplete"; missing: DraftField[]; fieldErrors: Record<string, string> }
@@ -62,19 +41,7 @@ function checkReading(
   const { values, typingErrors, missing } = parseDraft(draft, units, atmosphericKPa);
   const fieldErrors: Record<string, string> = { ...typingErrors };
   if (missing.length > 0 || Object.keys(typingErrors).length > 0) return { kind: "incomplete", missing, fieldErrors };
-  const parsed = DiagnosisInputSchema.safeParse({
-    refrigerant: context.refrigerant,
-    meteringDevice: context.meteringDevice,
-    targetSuperheatK: context.targetSuperheatK ?? undefined,
-    targetSubcoolingK: context.targetSubcoolingK ?? undefined,
-    compressorRla: context.compressorRla ?? undefined,
-    application: context.application,
-    liquidLineLengthM: context.liquidLineLengthM ?? undefined,
-    chargeKg: context.chargeKg ?? undefined,
-    chargeReference: context.chargeReference ?? undefined,
-    atmosphericPressureKPa: atmosphericKPa,
-    ...values,
-  });
+  const parsed = DiagnosisInputSchema.safeParse(withCircuitFacts(values, context, atmosphericKPa));
   if (!parsed.success) return invalid(DiagnosisInputError.fromZodError(parsed.error), fieldErrors);
   // Measured values only go to the server: it adds the nameplate targets, the RLA and the site's atmosphere.
   return { kind: "valid", input: parsed.data, measured: values as MeasuredValues, fieldErrors };

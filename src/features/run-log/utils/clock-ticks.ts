@@ -1,3 +1,5 @@
+import { formatTime } from "@shared/format/date-time.ts";
+
 /** Tick spacings, minutes, that fall on round clock times (:05, :10, :15, :30, the hour…). */
 const TICK_STEPS_MINUTES = [1, 2, 5, 10, 15, 20, 30, 60, 120, 180, 240, 360, 720] as const;
 
@@ -34,6 +36,5 @@ export function clockTicks(originIso: string, fromMinutes: number, toMinutes: nu
 
 /** A chart's time value as a 24-hour clock time ("14:05"), minutes after `originIso`. */
 export function clockLabel(originIso: string, minutes: number): string {
-  const time = new Date(Date.parse(originIso) + minutes * 60_000);
-  return `${String(time.getHours()).padStart(2, "0")}:${String(time.getMinutes()).padStart(2, "0")}`;
+  return formatTime(Date.parse(originIso) + minutes * 60_000);
 }

@@ -2,8 +2,6 @@ import { History } from "lucide-react";
 import { VISIT_EVENT_LABELS, type VisitEvent } from "@shared/schemas/visits.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
 
-const stamp = (iso: string) => formatDateTime(iso);
-
 /**
  * The visit's audit trail: who did what to the record, when and why — review steps,
  * reopening, voids and imports, oldest first. Shown on the visit page and in the report.
@@ -32,7 +30,7 @@ export function AuditTrail({ events, headingLevel = 2 }: { events: readonly Visi
               </p>
               {event.reason && <p>Reason: {event.reason}</p>}
               <p className="text-sm text-muted">
-                {event.actor?.name ?? "A former member"} · <span className="num">{stamp(event.at)}</span>
+                {event.actor?.name ?? "A former member"} · <span className="num">{formatDateTime(event.at)}</span>
               </p>
             </li>
           ))}

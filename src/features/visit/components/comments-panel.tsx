@@ -10,8 +10,6 @@ import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-out
 import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 import { formatDateTime, formatTime } from "@shared/format/date-time.ts";
 
-const stamp = (iso: string) => formatDateTime(iso);
-
 /** The visit's conversation: comments on the visit or on one reading, for the crew and the reviewer. */
 export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment: boolean }) {
   const [body, setBody] = useState("");
@@ -56,7 +54,7 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
             <li key={comment.id} className="border-l-4 border-accent pl-3">
               <p className="text-sm text-muted">
                 <strong className="text-ink">{comment.author?.name ?? "Former member"}</strong> ·{" "}
-                {stamp(comment.createdAt)}
+                {formatDateTime(comment.createdAt)}
                 {comment.reading && (
                   <>
                     {" "}

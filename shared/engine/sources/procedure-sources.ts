@@ -1,7 +1,8 @@
 /**
  * Sources behind the procedure limits, by the tags of the project's trade research notes
  * (source list). Titles are the real documents; every verdict's `source` is built with
- * `citeProcedure()`, or says "common practice" / "memory" where no source was found.
+ * `cite(PROCEDURE_SOURCES, …)`, or says "common practice" / "memory" (./marks.ts) where no
+ * source was found.
  */
 export const PROCEDURE_SOURCES = {
   S4: "ACHR News, The New Wave of Blends (500-micron industry standard; liquid charging of blends)",
@@ -39,22 +40,3 @@ export const PROCEDURE_SOURCES = {
 } as const;
 
 export type ProcedureSourceTag = keyof typeof PROCEDURE_SOURCES;
-
-/** Marks for limits without a published source (trade notes, "How to read the marks"). */
-export const COMMON_PRACTICE = "common practice";
-export const MEMORY = "memory (unverified)";
-export const COMPUTED = "computed from the definition";
-
-/**
- * Formats source tags as "[S41] title; [S42] title", optionally followed by marks such as
- * `COMMON_PRACTICE`.
- *
- * @param tags source tags of the trade research notes
- * @param marks extra notes appended after the titles
- * @returns one line naming every source
- * @throws never
- * @example citeProcedure(["S60"]) // "[S60] sens4.com, Units for vacuum measurement (1 Torr = 133.322 Pa = 1000 micron)"
- */
-export function citeProcedure(tags: readonly ProcedureSourceTag[], ...marks: string[]): string {
-  return [...tags.map((tag) => `[${tag}] ${PROCEDURE_SOURCES[tag]}`), ...marks].join("; ");
-}

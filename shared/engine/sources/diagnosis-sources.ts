@@ -1,9 +1,11 @@
 /**
  * Sources behind the diagnosis rules, by the tags of the project's trade research notes
- * (TRADE.md, "Sources"). Every rule and limit names its source through `cite()`, or says
- * "common practice" / "memory" where no source was found.
+ * (TRADE.md, "Sources"). Every rule and limit names its source with `cite(DIAGNOSIS_SOURCES, …)`,
+ * or says "common practice" / "memory" (./marks.ts) where no source was found. The procedure
+ * limits keep their own list (./procedure-sources.ts): some tags carry the page or figure a
+ * procedure reads, so one tag's title may be longer there.
  */
-export const TRADE_SOURCES = {
+export const DIAGNOSIS_SOURCES = {
   S1: "Arkema Forane technical centre, Definitions (bubble point, dew point, glide)",
   S2: "HVAC School, What Is Temperature Glide?",
   S9: "Daikin DZ13SC installation manual p. 9",
@@ -36,18 +38,4 @@ export const TRADE_SOURCES = {
   S122: "Manufacturer troubleshooting charts (pressure pairings)",
 } as const;
 
-export type SourceTag = keyof typeof TRADE_SOURCES;
-
-/** Marks for rules without a published source (TRADE.md "How to read the marks"). */
-export const COMMON_PRACTICE = "common practice";
-export const MEMORY = "memory (unverified)";
-
-/**
- * Formats source tags as "[S10] title; [S17] title", optionally followed by a mark such as
- * `COMMON_PRACTICE`.
- *
- * @example cite(["S33"]) // "[S33] HVAC School, What should the Air Delta T be?"
- */
-export function cite(tags: readonly SourceTag[], ...marks: string[]): string {
-  return [...tags.map((tag) => `[${tag}] ${TRADE_SOURCES[tag]}`), ...marks].join("; ");
-}
+export type DiagnosisSourceTag = keyof typeof DIAGNOSIS_SOURCES;
