@@ -9,9 +9,12 @@
  * each figure beside its target; a streamed answer (the register's CSV export) also its time to
  * first byte (bench/api/first-byte.ts). Timings on a shared machine are noisy: compare runs, not digits.
  * `--cpu-prof` writes the servers' CPU profiles there (open them in Chrome's DevTools).
+ * `--postgres` instead compares saving on PGlite with PostgreSQL behind one and two app servers
+ * (bench/api/save-on-postgres.ts), on a throwaway PostgreSQL server it starts and removes.
  *
  * Saving writes readings into the data set: point `--dir` at a copy to keep the original as built.
  */
+import { spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { cpus, loadavg } from "node:os";
 import { resolve } from "node:path";
@@ -20,6 +23,7 @@ import { readDataSet, type DataSet } from "./data-set.ts";
 import { measureFirstByte, type FirstByteResult } from "./first-byte.ts";
 import { runLoad, type LoadResult } from "./load.ts";
 import { ROUTES, type BenchRoute, type Person } from "./routes.ts";
+import { comparePostgres } from "./save-on-postgres.ts";
 import { measureSaving, openVisitsForSaving, type SaveLevel } from "./save-reading.ts";
 import { startServer, type BenchServer } from "./server-process.ts";
 
@@ -38,9 +42,27 @@ const { values } = parseArgs({
     only: { type: "string", multiple: true },
     "skip-demo": { type: "boolean", default: false },
     "cpu-prof": { type: "string" },
+    // Saving on PGlite against PostgreSQL behind one and two app servers (bench/api/save-on-postgres.ts).
+    postgres: { type: "boolean", default: false },
   },
 });
 const seconds = Number(values.seconds);
+
+if (values.postgres) {
+  if (process.env.TEST_DATABASE_URL) {
+    await comparePostgres(seconds);
+  } else {
+    // A throwaway PostgreSQL server for the run: the same script the tests' PostgreSQL pass uses.
+    const run = spawnSync(
+      process.execPath,
+      ["--import", "tsx", "scripts/with-postgres.ts", process.execPath, "--import", "tsx", ...process.argv.slice(1)],
+      { stdio: "inherit", env: { ...process.env, REQUIRE_POSTGRES: "1" } },
+    );
+    process.exitCode = run.status ?? 1;
+  }
+  process.exit();
+}
+
 const REBUILD = `npm run data:large -- --dir ${values.dir}`;
 
 if (!existsSync(values.dir)) {

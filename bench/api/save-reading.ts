@@ -7,7 +7,7 @@
  * measure the other jobs, and the figure that bounds the throughput of one process (a save's
  * work, PGlite's included, runs on the server's one thread).
  */
-import { runLoad, type LoadResult } from "./load.ts";
+import { runLoadAcross, type LoadResult } from "./load.ts";
 import type { BenchServer } from "./server-process.ts";
 
 export const SAVE_CONNECTIONS = [1, 10, 50] as const;
@@ -39,7 +39,7 @@ export interface SaveLevel {
  * through the API on its R407C units (READING_BODY's refrigerant), `count` in all.
  */
 export async function openVisitsForSaving(server: BenchServer, cookie: string, count: number): Promise<string[]> {
-  const headers = { cookie, origin: server.origin, "content-type": "application/json" };
+  const headers = { cookie, origin: server.appUrl, "content-type": "application/json" };
   const page = (await (await fetch(`${server.origin}/api/equipment?q=R407C`, { headers })).json()) as {
     equipment: { id: string; refrigerant: string }[];
   };
@@ -59,36 +59,46 @@ export async function openVisitsForSaving(server: BenchServer, cookie: string, c
   return visits;
 }
 
-/** Each level for `seconds`, after a short warm-up (JIT, the planner, the session cache). */
+/**
+ * Each level for `seconds`, after a short warm-up (JIT, the planner, the session cache). Given
+ * several app servers on one database, each level's connections are spread over them as a load
+ * balancer would, and the CPU per save is theirs together.
+ */
 export async function measureSaving(
-  server: BenchServer,
+  serverOrServers: BenchServer | readonly BenchServer[],
   cookie: string,
   openVisits: readonly string[],
   seconds: number,
   levels: readonly number[] = SAVE_CONNECTIONS,
 ): Promise<SaveLevel[]> {
+  const servers = Array.isArray(serverOrServers) ? serverOrServers : [serverOrServers as BenchServer];
   const body = JSON.stringify(READING_BODY);
+  const cpu = async () => {
+    const usages = await Promise.all(servers.map((server) => server.cpu()));
+    return usages.reduce((sum, usage) => sum + usage.user + usage.system, 0);
+  };
   // Each save goes to the next open visit.
   const load = (connections: number, duration: number) =>
-    runLoad({
-      origin: server.origin,
-      connections,
-      seconds: duration,
-      next: (index) => ({
-        method: "POST",
-        path: `/api/visits/${openVisits[index % openVisits.length]}/readings`,
-        headers: { cookie, origin: server.origin },
-        body,
-      }),
-      expectStatus: [201],
-    });
+    runLoadAcross(
+      servers.map((server) => server.origin),
+      {
+        connections,
+        seconds: duration,
+        next: (index) => ({
+          method: "POST",
+          path: `/api/visits/${openVisits[index % openVisits.length]}/readings`,
+          headers: { cookie, origin: servers[0]!.appUrl },
+          body,
+        }),
+        expectStatus: [201],
+      },
+    );
   await load(4, 2);
   const measured: SaveLevel[] = [];
   for (const connections of levels) {
-    const before = await server.cpu();
+    const before = await cpu();
     const result = await load(connections, seconds);
-    const after = await server.cpu();
-    const cpuMs = (after.user - before.user + after.system - before.system) / 1000;
+    const cpuMs = ((await cpu()) - before) / 1000;
     measured.push({ connections, result, serverCpuMs: cpuMs / Math.max(1, result.requests) });
   }
   return measured;

@@ -12,6 +12,8 @@ const root = fileURLToPath(new URL("../..", import.meta.url));
 
 export interface BenchServer {
   origin: string;
+  /** Its APP_URL: the Origin its writes must carry (servers behind one balancer share it). */
+  appUrl: string;
   child: ChildProcess;
   /** Resident set, V8 heap and ArrayBuffers (PGlite's WebAssembly memory), in bytes. */
   memory: () => Promise<NodeJS.MemoryUsage>;
@@ -57,6 +59,7 @@ export async function startServer(
 ): Promise<BenchServer> {
   const port = await freePort();
   const origin = `http://127.0.0.1:${port}`;
+  const appUrl = extraEnv.APP_URL ?? origin;
   const child = spawn(
     process.execPath,
     [...nodeArgs, "--import", "tsx", "--import", "./bench/api/memory-probe.ts", "server/index.ts"],
@@ -67,7 +70,7 @@ export async function startServer(
         NODE_ENV: "production",
         HOST: "127.0.0.1",
         PORT: String(port),
-        APP_URL: origin,
+        APP_URL: appUrl,
         DATA_DIR: dataDir,
         DEMO_DATA: "true",
         LOG_LEVEL: "fatal",
@@ -101,7 +104,7 @@ export async function startServer(
   const signIn = async (email: string) => {
     const response = await fetch(`${origin}/api/auth/sign-in`, {
       method: "POST",
-      headers: { "content-type": "application/json", origin },
+      headers: { "content-type": "application/json", origin: appUrl },
       body: JSON.stringify({ email, password: DEMO_PASSWORD }),
     });
     if (!response.ok) throw new Error(`sign-in as ${email} answered ${response.status}`);
@@ -117,5 +120,5 @@ export async function startServer(
       child.kill("SIGTERM");
     });
 
-  return { origin, child, memory, cpu, signIn, stop };
+  return { origin, appUrl, child, memory, cpu, signIn, stop };
 }
