@@ -5,6 +5,7 @@
 import pg from "pg";
 import { drizzle } from "drizzle-orm/node-postgres";
 import { migrate } from "drizzle-orm/node-postgres/migrator";
+import { LOCK_KEYS } from "./advisory-locks.ts";
 import { migrationsFolder, type DatabaseHandle } from "./client.ts";
 import * as schema from "./schema.ts";
 
@@ -17,12 +18,6 @@ pg.types.setTypeParser(pg.types.builtins.INT8, (value) => {
   const whole = BigInt(value);
   return whole >= BigInt(Number.MIN_SAFE_INTEGER) && whole <= BigInt(Number.MAX_SAFE_INTEGER) ? Number(whole) : value;
 });
-
-/**
- * Key of the session-level advisory lock held while migrating: app servers starting together
- * wait for the first, then find nothing left to apply. Any fixed number only Satura uses.
- */
-export const MIGRATION_LOCK_KEY = 7_215_020_001;
 
 export interface PostgresOptions {
   connectionString: string;
@@ -52,17 +47,18 @@ export async function openPostgres({ connectionString, poolSize }: PostgresOptio
 }
 
 /**
- * Migrates on one dedicated connection that holds the advisory lock: a session lock is tied to
- * its connection, so the lock and the migration must share it.
+ * Migrates on one dedicated connection that holds a session advisory lock: app servers starting
+ * together wait for the first, then find nothing left to apply. A session lock is tied to its
+ * connection, so the lock and the migration must share it.
  */
 async function migrateOnce(pool: pg.Pool): Promise<void> {
   const connection = await pool.connect();
   try {
-    await connection.query("select pg_advisory_lock($1)", [MIGRATION_LOCK_KEY]);
+    await connection.query("select pg_advisory_lock($1)", [LOCK_KEYS.migrations]);
     try {
       await migrate(drizzle({ client: connection, schema }), { migrationsFolder });
     } finally {
-      await connection.query("select pg_advisory_unlock($1)", [MIGRATION_LOCK_KEY]);
+      await connection.query("select pg_advisory_unlock($1)", [LOCK_KEYS.migrations]);
     }
   } finally {
     connection.release();
