@@ -110,7 +110,9 @@ const purgeSessions = () =>
     return count;
   })
     .then((count) => count && logger.info({ count }, "expired sessions deleted"))
-    .catch((error: unknown) => logger.error({ err: error }, "could not delete expired sessions or throttle counters"));
+    .catch((error: unknown) =>
+      logger.error({ err: error }, "could not purge expired sessions, throttle counters or abandoned imports"),
+    );
 void purgeSessions();
 const purgeTimer = setInterval(() => void purgeSessions(), SESSION_PURGE_INTERVAL_MS);
 purgeTimer.unref();

@@ -22,6 +22,16 @@ describe("database migrations and demo seed", () => {
         expect.arrayContaining(["organisations", "users", "sessions", "customers", "sites", "equipment"]),
       );
 
+      // pg_trgm is there on both (PGlite's contrib build, Debian's postgresql-contrib), so the
+      // list search's "contains" is answered from its trigram indexes.
+      const trigramIndexes = await handle.query<{ indexname: string }>(
+        "select indexname from pg_indexes where indexname like '%\\_trgm\\_idx' order by indexname",
+      );
+      expect(trigramIndexes.map((row) => row.indexname)).toEqual([
+        "equipment_search_text_trgm_idx",
+        "visit_search_text_trgm_idx",
+      ]);
+
       expect(await seedDemoData(handle.db)).toBe(true);
       expect(await seedDemoData(handle.db)).toBe(false); // second start: nothing written
 
