@@ -181,6 +181,8 @@ export default defineConfig({
     exclude: ["tests/browser/**", "node_modules/**"],
     environment: "node",
     setupFiles: ["tests/setup/load-refrigerant-tables.ts", "tests/setup/setup-test-env.ts"],
+    // With TEST_DATABASE_URL: the migrated PostgreSQL template, made once per run.
+    globalSetup: ["tests/setup/postgres-template.ts"],
     testTimeout: 30_000,
     hookTimeout: 60_000,
   },

@@ -17,7 +17,7 @@ import type { Env } from "./env.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
 import { precompressedAssets } from "./http/precompressed-assets.ts";
 import type { Mailer } from "./mail/mailer.ts";
-import type { PhotoStore } from "./photos/photo-store.ts";
+import { photoStoreReadinessCheck, type PhotoStore } from "./photos/photo-store.ts";
 import { attemptsRouter } from "./routes/attempts.ts";
 import { authRouter } from "./routes/auth.ts";
 import { casesRouter } from "./routes/cases.ts";
@@ -25,6 +25,7 @@ import { chargeReferencesRouter } from "./routes/charge-references.ts";
 import { customersRouter, equipmentRouter, sitesRouter } from "./routes/equipment.ts";
 import { photosRouter, visitsRouter } from "./routes/visits.ts";
 import { healthRouter } from "./routes/health.ts";
+import { databaseReadiness, readinessRouter, type ReadinessCheck } from "./routes/readiness.ts";
 import { invitationsRouter } from "./routes/invitations.ts";
 import { membersRouter } from "./routes/members.ts";
 import { organisationRouter } from "./routes/organisation.ts";
@@ -50,6 +51,15 @@ export interface AppDeps {
   authLimits?: Partial<AuthLimits>;
   /** Serves the client: Vite's dev middleware, or nothing (the built files are served from dist/). */
   clientMiddleware?: RequestHandler;
+  /**
+   * Keep validated sessions a minute in memory (server/auth/session-cache.ts): on by default, for
+   * the one process on PGlite; off when several app servers share a PostgreSQL.
+   */
+  cacheSessions?: boolean;
+  /** What GET /api/ready asks before saying yes; the database by default. */
+  readinessChecks?: readonly ReadinessCheck[];
+  /** True once the server is stopping: GET /api/ready answers 503 so a load balancer drains it. */
+  isShuttingDown?: () => boolean;
 }
 
 const distFolder = fileURLToPath(new URL("../dist", import.meta.url));
@@ -102,7 +112,9 @@ export function createApp(deps: AppDeps): Express {
       // Cookies and tokens never reach the log: see server/logger.ts.
       serializers: logSerializers,
       // Quiet logs: health probes and static assets are noise.
-      autoLogging: { ignore: (req) => req.url === "/api/health" || !req.url?.startsWith("/api") },
+      autoLogging: {
+        ignore: (req) => req.url === "/api/health" || req.url === "/api/ready" || !req.url?.startsWith("/api"),
+      },
       customLogLevel: (_req, res, error) =>
         error || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info",
     }),
@@ -114,9 +126,17 @@ export function createApp(deps: AppDeps): Express {
 
   const api = express.Router();
   api.use(originCheck(env.APP_URL)); // refuse state-changing requests from other sites (CSRF)
-  api.use(loadSession(auth)); // res.locals.auth for signed-in users; see server/auth/session.ts
+  api.use(loadSession(auth, { cacheSessions: deps.cacheSessions ?? true })); // res.locals.auth for signed-in users; see server/auth/session.ts
   api.use(routePermissionGate()); // who may call which route: the one table in server/auth/route-permissions.ts
   api.use("/health", healthRouter(deps.db));
+  api.use(
+    "/ready",
+    readinessRouter({
+      checks: deps.readinessChecks ?? [databaseReadiness(deps.db), photoStoreReadinessCheck(deps.photoStore)],
+      isShuttingDown: deps.isShuttingDown ?? (() => false),
+      logger,
+    }),
+  );
   api.use("/auth", authRouter(accountDeps));
   api.use("/members", membersRouter(accountDeps));
   api.use("/invitations", invitationsRouter(accountDeps));

@@ -1,15 +1,17 @@
 /**
- * Satura's server entry: reads the environment, opens and migrates the embedded
- * database, loads the demo company when the database is empty, and listens.
+ * Satura's server entry: reads the environment, opens and migrates the database (embedded
+ * PGlite, or PostgreSQL at DATABASE_URL), loads the demo company when the database is empty,
+ * and listens.
  */
 import type { Server } from "node:http";
 import { loadAllRefrigerants } from "@shared/engine/index.ts";
 import { createApp } from "./app.ts";
-import { openDatabase } from "./db/client.ts";
+import { ifLockFree, LOCK_KEYS, withLock } from "./db/advisory-locks.ts";
+import { openConfiguredDatabase } from "./db/open-configured-database.ts";
 import { deleteExpiredSessions } from "./db/expired-sessions.ts";
 import { analyzeChangedTables, analyzeTables } from "./db/planner-statistics.ts";
 import { deleteEndedCounters } from "./db/rate-limit-counters.ts";
-import { discardStagedReadings } from "./db/visits.ts";
+import { discardStagedReadings, discardStagedReadingsBefore } from "./db/visits.ts";
 import { closeCsvImportPool } from "./import/csv-import-pool.ts";
 import { seedDemoData } from "./db/seed/seed-demo.ts";
 import { upgradeStoredDiagnoses } from "./db/upgrade-stored-diagnoses.ts";
@@ -24,27 +26,44 @@ const logger = createLogger(env);
 // stay synchronous (the browser loads one refrigerant per screen instead).
 await loadAllRefrigerants();
 
-const database = await openDatabase(env.DATA_DIR);
-// A CSV import cut off by a stop leaves staged rows that never became readings: clear them.
-await discardStagedReadings(database.db);
-if (env.DEMO_DATA && (await seedDemoData(database.db))) {
-  logger.info("demo data loaded (Bellbird Mechanical)");
-}
-const upgraded = await upgradeStoredDiagnoses(database.db);
-if (upgraded > 0) logger.info(`${upgraded} stored reading(s) re-diagnosed in the current result format`);
+const database = await openConfiguredDatabase(env);
+// Only the kind: DATABASE_URL may hold a password.
+logger.info(
+  database.kind === "postgres" ? "database: PostgreSQL (DATABASE_URL)" : `database: PGlite in ${env.DATA_DIR}`,
+);
+// Servers starting together take turns here, so the demo is seeded once and nothing is upgraded twice.
+await withLock(database.db, LOCK_KEYS.startUp, async (db) => {
+  // A CSV import cut off by a stop leaves staged rows that never became readings. PGlite is this
+  // process alone, so every staged row is abandoned; another PostgreSQL client may be importing
+  // now, so there the hourly purge clears them by age instead.
+  if (database.kind === "pglite") await discardStagedReadings(db);
+  if (env.DEMO_DATA && (await seedDemoData(db))) {
+    logger.info("demo data loaded (Bellbird Mechanical)");
+  }
+  const upgraded = await upgradeStoredDiagnoses(db);
+  if (upgraded > 0) logger.info(`${upgraded} stored reading(s) re-diagnosed in the current result format`);
+});
 // PGlite has no autovacuum, so the planner's statistics are gathered here after migrations (and
 // any seed or upgrade), then every few minutes for the tables that changed enough since (see
-// analyzeChangedTables); a failure only leaves older estimates, so it is logged.
+// analyzeChangedTables); a failure only leaves older estimates, so it is logged. PostgreSQL's
+// autovacuum analyses changed tables by the same rule on its own, so there only the start-up
+// refresh runs (cheap, and it covers a seed made moments ago), once across starting servers.
 const logStatisticsFailure = (error: unknown) =>
   logger.error({ err: error }, "could not refresh the planner's statistics");
-await analyzeTables(database.db).catch(logStatisticsFailure);
+await ifLockFree(database.db, LOCK_KEYS.statistics, (db) => analyzeTables(db)).catch(logStatisticsFailure);
 /** Often enough that a day's readings never wait long for fresh estimates; a quiet check is one small query. */
 const STATISTICS_CHECK_INTERVAL_MS = 10 * 60 * 1000;
-const statisticsTimer = setInterval(
-  () => void analyzeChangedTables(database.db).catch(logStatisticsFailure),
-  STATISTICS_CHECK_INTERVAL_MS,
-);
-statisticsTimer.unref();
+const statisticsTimer =
+  database.kind === "pglite"
+    ? setInterval(
+        () =>
+          void ifLockFree(database.db, LOCK_KEYS.statistics, (db) => analyzeChangedTables(db)).catch(
+            logStatisticsFailure,
+          ),
+        STATISTICS_CHECK_INTERVAL_MS,
+      )
+    : undefined;
+statisticsTimer?.unref();
 
 let clientMiddleware;
 let closeVite: (() => Promise<void>) | undefined;
@@ -68,7 +87,18 @@ void photoStore.check().then(
   (error: unknown) => logger.warn({ err: error }, "the photo store is not ready"),
 );
 
-const app = createApp({ db: database.db, env, logger, mailer, photoStore, clientMiddleware });
+let stopping = false;
+const app = createApp({
+  db: database.db,
+  env,
+  logger,
+  mailer,
+  photoStore,
+  clientMiddleware,
+  // Other app servers may share a PostgreSQL; this process's memory is not the whole picture then.
+  cacheSessions: database.kind === "pglite",
+  isShuttingDown: () => stopping,
+});
 const server: Server = app.listen(env.PORT, env.HOST, () => {
   const address = server.address();
   const port = typeof address === "object" && address ? address.port : env.PORT;
@@ -76,23 +106,35 @@ const server: Server = app.listen(env.PORT, env.HOST, () => {
 });
 
 // Expired sessions and ended throttle counters are purged at start and hourly; unref so the
-// timer never holds the process.
+// timer never holds the process. On a shared PostgreSQL a server skips the purge while another
+// runs it (each server still purges on its own hour, which finds little: the purge is idempotent).
 const SESSION_PURGE_INTERVAL_MS = 60 * 60 * 1000;
+/** An import stages its rows for seconds to minutes; rows an hour old belong to one cut off by a stop. */
+const ABANDONED_IMPORT_AGE_MS = 60 * 60 * 1000;
 const purgeSessions = () =>
-  Promise.all([deleteExpiredSessions(database.db), deleteEndedCounters(database.db)])
-    .then(([count]) => count > 0 && logger.info({ count }, "expired sessions deleted"))
-    .catch((error: unknown) => logger.error({ err: error }, "could not delete expired sessions or throttle counters"));
+  ifLockFree(database.db, LOCK_KEYS.purge, async (db) => {
+    const count = await deleteExpiredSessions(db);
+    await deleteEndedCounters(db);
+    if (database.kind === "postgres")
+      await discardStagedReadingsBefore(db, new Date(Date.now() - ABANDONED_IMPORT_AGE_MS));
+    return count;
+  })
+    .then((count) => count && logger.info({ count }, "expired sessions deleted"))
+    .catch((error: unknown) =>
+      logger.error({ err: error }, "could not purge expired sessions, throttle counters or abandoned imports"),
+    );
 void purgeSessions();
 const purgeTimer = setInterval(() => void purgeSessions(), SESSION_PURGE_INTERVAL_MS);
 purgeTimer.unref();
 
-let stopping = false;
 async function shutdown(signal: string) {
   if (stopping) return;
-  stopping = true;
+  stopping = true; // GET /api/ready now answers 503
   logger.info({ signal }, "shutting down");
-  // Stop taking requests, let those in flight finish, then close the database so
-  // PGlite flushes its files; a hard exit after 10 s if something hangs.
+  // Answer on while a load balancer notices the 503 (SHUTDOWN_DRAIN_MS), then stop taking
+  // requests, let those in flight finish, then close the database: PGlite flushes its files, the
+  // PostgreSQL pool closes its connections. A hard exit 10 s after the drain if something hangs.
+  await new Promise((resolve) => setTimeout(resolve, env.SHUTDOWN_DRAIN_MS));
   const timer = setTimeout(() => process.exit(1), 10_000);
   timer.unref();
   // No refresh or purge may start on a database being closed.
@@ -102,6 +144,7 @@ async function shutdown(signal: string) {
   await closeVite?.();
   await closeCsvImportPool();
   await mailer.close();
+  photoStore.close();
   await database.close();
   process.exit(0);
 }

@@ -36,7 +36,7 @@ export interface DataSet {
 export async function readDataSet(dataDir: string): Promise<DataSet> {
   const handle = await openDatabase(dataDir);
   try {
-    const one = async <T>(query: string) => (await handle.client.query<T>(query)).rows[0]!;
+    const one = async <T>(query: string) => (await handle.query<T>(query))[0]!;
     const counts: Record<string, number> = {};
     for (const table of [
       "equipment",
@@ -50,13 +50,11 @@ export async function readDataSet(dataDir: string): Promise<DataSet> {
     ]) {
       counts[table] = (await one<{ n: number }>(`select count(*)::int as n from ${table}`)).n;
     }
-    const long = await handle.client.query<{ id: string }>(`select id from visits where reason = $1`, [
-      LONG_VISIT_REASON,
-    ]);
+    const long = await handle.query<{ id: string }>(`select id from visits where reason = $1`, [LONG_VISIT_REASON]);
     const busiest = await one<{ id: string }>(
       `select visit_id as id from readings group by visit_id order by count(*) desc limit 1`,
     );
-    const longVisitId = long.rows[0]?.id ?? busiest.id;
+    const longVisitId = long[0]?.id ?? busiest.id;
     const ordinary = await one<{ id: string }>(
       `select v.id from visits v where v.status = 'signed-off' and exists (select 1 from readings r where r.visit_id = v.id) order by v.started_at desc limit 1`,
     );
@@ -67,7 +65,7 @@ export async function readDataSet(dataDir: string): Promise<DataSet> {
     const cylinder = await one<{ id: string }>(
       `select cylinder_id as id from refrigerant_movements where cylinder_id is not null group by cylinder_id order by count(*) desc limit 1`,
     );
-    const open = await handle.client.query<{ id: string }>(
+    const open = await handle.query<{ id: string }>(
       `select v.id from visits v join equipment e on e.id = v.equipment_id where v.status = 'open' and e.refrigerant = 'R407C' and v.id <> $1 order by v.started_at desc`,
       [longVisitId],
     );
@@ -104,7 +102,7 @@ export async function readDataSet(dataDir: string): Promise<DataSet> {
         longVisitId,
         cylinderId: cylinder.id,
       },
-      openReadingVisits: open.rows.map((row) => row.id),
+      openReadingVisits: open.map((row) => row.id),
       readingCost: {
         readings: rows,
         totalPerReading: per(cost.total),

@@ -18,7 +18,7 @@ import { CASEBOOK_PERMISSIONS } from "@shared/schemas/casebook.ts";
 import { apiNotFound } from "../http/error-handler.ts";
 import { requireRole, requireUser } from "./session.ts";
 
-/** Anyone, signed in or not (sign-in, invitation links, health). */
+/** Anyone, signed in or not (sign-in, invitation links, health and readiness). */
 export const PUBLIC = "public";
 /** Anyone signed in, whatever their role. */
 export const SIGNED_IN = "signed-in";
@@ -26,6 +26,7 @@ export type Access = typeof PUBLIC | typeof SIGNED_IN | readonly Role[];
 
 export const ROUTE_PERMISSIONS = {
   "GET /api/health": PUBLIC,
+  "GET /api/ready": PUBLIC,
 
   "POST /api/auth/sign-up": PUBLIC,
   "POST /api/auth/sign-in": PUBLIC,

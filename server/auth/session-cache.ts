@@ -7,7 +7,8 @@
  * out or in (server/auth/session.ts), a password reset or change, a role change, a member's
  * removal and a profile's new name (server/db/accounts.ts, members.ts, password-resets.ts).
  * Roles and deactivation therefore still apply to the very next request, as before. One
- * process holds the database (README decision 002), so one process's memory is the whole cache.
+ * process holds a PGlite database (README decision 002), so one process's memory is the whole
+ * cache; with several app servers on one PostgreSQL the cache is off (server/index.ts, decision 035).
  */
 import type { Session, User } from "lucia";
 

@@ -13,7 +13,7 @@
  *     …
  *   });
  *
- * - `loadSession(auth)` runs once for all of /api (mounted in app.ts). It reads the session
+ * - `loadSession(auth, …)` runs once for all of /api (mounted in app.ts). It reads the session
  *   cookie, validates it, renews it when lucia says so, clears it when it is stale, and puts
  *   `res.locals.auth = { user, session, organisationId }` for a signed-in, active user.
  * - `requireUser` answers 401 without a session. `requireRole(...roles)` also answers 403 when
@@ -48,13 +48,18 @@ declare global {
   }
 }
 
-export function loadSession(auth: Auth): RequestHandler {
+/**
+ * `cacheSessions`: keep validated sessions a minute in this process (server/auth/session-cache.ts).
+ * Only where this process is the only app server: another server's sign-out, role change or
+ * removal forgets the session in its own memory only, and this one would honour it for up to a minute.
+ */
+export function loadSession(auth: Auth, { cacheSessions }: { cacheSessions: boolean }): RequestHandler {
   return async (req, res, next) => {
     try {
       const sessionId = auth.readSessionCookie(req.headers.cookie ?? "");
       if (!sessionId) return next();
       // A session validated within the last minute and not changed since (server/auth/session-cache.ts).
-      const cached = cachedSession(sessionId);
+      const cached = cacheSessions ? cachedSession(sessionId) : undefined;
       const { session, user } = cached ?? (await auth.validateSession(sessionId));
       if (!session) {
         // Expired or signed out elsewhere: drop the dead cookie.
@@ -69,7 +74,7 @@ export function loadSession(auth: Auth): RequestHandler {
       }
       // lucia extended the session (renewal on use): send the cookie with the new expiry.
       if (session.fresh) res.append("Set-Cookie", auth.createSessionCookie(session.id).serialize());
-      if (!cached) rememberSession(session, user);
+      if (cacheSessions && !cached) rememberSession(session, user);
       res.locals.auth = { user, session, organisationId: user.organisationId };
       next();
     } catch (error) {

@@ -2,22 +2,43 @@ import { mkdirSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { PGlite } from "@electric-sql/pglite";
 import { pg_trgm } from "@electric-sql/pglite/contrib/pg_trgm";
-import type { PgDatabase } from "drizzle-orm/pg-core";
-import { drizzle, type PgliteDatabase, type PgliteQueryResultHKT } from "drizzle-orm/pglite";
+import type { Assume } from "drizzle-orm";
+import type { PgDatabase, PgQueryResultHKT } from "drizzle-orm/pg-core";
+import { drizzle } from "drizzle-orm/pglite";
 import { migrate } from "drizzle-orm/pglite/migrator";
 import * as schema from "./schema.ts";
 
 /**
- * What queries run on: the database or a transaction on it. Every query function takes this,
- * so a caller can run several of them in one transaction (e.g. under a visit's row lock).
+ * What a raw `db.execute` answers, on either driver: PGlite's Results and node-postgres'
+ * QueryResult both carry the rows as `rows`, and nothing here reads more than that.
  */
-export type Database = PgDatabase<PgliteQueryResultHKT, typeof schema>;
+export interface QueryResultHKT extends PgQueryResultHKT {
+  type: QueryRows<Assume<this["row"], Record<string, unknown>>>;
+}
 
+export interface QueryRows<Row> {
+  rows: Row[];
+}
+
+/**
+ * What queries run on: the database or a transaction on it, embedded (PGlite) or a PostgreSQL
+ * server (node-postgres). Every query function takes this, so a caller can run several of them in
+ * one transaction (e.g. under a visit's row lock).
+ */
+export type Database = PgDatabase<QueryResultHKT, typeof schema>;
+
+/** An open database, whichever kind: the Drizzle handle, plain SQL for tests and scripts, and close. */
 export interface DatabaseHandle {
-  db: PgliteDatabase<typeof schema>;
-  client: PGlite;
+  kind: "pglite" | "postgres";
+  db: Database;
+  /** One SQL statement with $1… parameters, answering its rows. */
+  query: <Row = Record<string, unknown>>(text: string, params?: unknown[]) => Promise<Row[]>;
+  /** Another Drizzle handle on the same connection that reports each query it sends (tests read plans). */
+  withQueryLog: (logQuery: QueryLog) => Database;
   close: () => Promise<void>;
 }
+
+export type QueryLog = (query: string, params: unknown[]) => void;
 
 export const migrationsFolder = fileURLToPath(new URL("../../drizzle", import.meta.url));
 
@@ -45,5 +66,11 @@ export async function openDatabase(dataDir: string): Promise<DatabaseHandle> {
 export async function attachDatabase(client: PGlite): Promise<DatabaseHandle> {
   const db = drizzle({ client, schema });
   await migrate(db, { migrationsFolder });
-  return { db, client, close: () => client.close() };
+  return {
+    kind: "pglite",
+    db,
+    query: async <Row>(text: string, params?: unknown[]) => (await client.query<Row>(text, params)).rows,
+    withQueryLog: (logQuery) => drizzle({ client, schema, logger: { logQuery } }),
+    close: () => client.close(),
+  };
 }

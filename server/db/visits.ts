@@ -2,7 +2,21 @@
  * Queries for visits and their run log. Every function takes the caller's organisation id;
  * a visit of another organisation reads as missing.
  */
-import { and, asc, desc, eq, gt, inArray, isNotNull, isNull, max, sql, type AnyColumn, type SQL } from "drizzle-orm";
+import {
+  and,
+  asc,
+  desc,
+  eq,
+  gt,
+  inArray,
+  isNotNull,
+  isNull,
+  lt,
+  max,
+  sql,
+  type AnyColumn,
+  type SQL,
+} from "drizzle-orm";
 import { unionAll } from "drizzle-orm/pg-core";
 import { searchTerms, type SearchTerm } from "@shared/format/search-terms.ts";
 import type { DiagnosisInput, DiagnosisResult } from "@shared/schemas/diagnosis.ts";
@@ -790,4 +804,16 @@ export async function discardStagedReadings(db: Database, importId?: string): Pr
   await db
     .delete(readings)
     .where(importId ? eq(readings.pendingImportId, importId) : isNotNull(readings.pendingImportId));
+}
+
+/**
+ * Removes staged rows older than `before`: with several app servers one cannot clear every
+ * staged row at start-up, as another may be importing right now, so abandoned ones go by age.
+ */
+export async function discardStagedReadingsBefore(db: Database, before: Date): Promise<number> {
+  const removed = await db
+    .delete(readings)
+    .where(and(isNotNull(readings.pendingImportId), lt(readings.createdAt, before)))
+    .returning({ id: readings.id });
+  return removed.length;
 }

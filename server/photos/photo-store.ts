@@ -4,6 +4,8 @@
  * and S3-compatible object storage (s3-photo-store.ts); create-photo-store.ts picks one from
  * the environment. Decision 036 in the README.
  */
+import type { ReadinessCheck } from "../routes/readiness.ts";
+
 export interface PhotoStore {
   /** What the store is, for logs and readiness answers: never a credential. */
   readonly description: string;
@@ -20,12 +22,6 @@ export interface PhotoStore {
   check(): Promise<void>;
   /** Lets go of connections (the S3 client's sockets); the store is not used afterwards. */
   close(): void;
-}
-
-/** One readiness check, as a readiness endpoint lists them: a name and a check that rejects with the reason. */
-export interface ReadinessCheck {
-  name: string;
-  check: () => Promise<void>;
 }
 
 /** The photo store's readiness check: can photos be written and read right now. */

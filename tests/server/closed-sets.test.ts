@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openDatabase, type DatabaseHandle } from "@server/db/client.ts";
+import type { DatabaseHandle } from "@server/db/client.ts";
 import { seedDemoData } from "@server/db/seed/seed-demo.ts";
+import { createTestDatabase } from "../setup/test-database.ts";
 
 /**
  * Columns holding one of a closed set (migration 0020): the database refuses a value outside
@@ -19,7 +20,7 @@ const CASES: { table: string; column: string; good: string }[] = [
 describe("closed sets checked by the database", () => {
   let handle: DatabaseHandle;
   beforeAll(async () => {
-    handle = await openDatabase("memory://");
+    handle = await createTestDatabase();
     await seedDemoData(handle.db);
   });
   afterAll(() => handle.close());
@@ -27,22 +28,20 @@ describe("closed sets checked by the database", () => {
   it.each(CASES)(
     "refuses an unknown value of $table $column and keeps a known one",
     async ({ table, column, good }) => {
-      const [row] = (await handle.client.query<{ id: string }>(`select id from ${table} limit 1`)).rows;
+      const [row] = await handle.query<{ id: string }>(`select id from ${table} limit 1`);
       expect(row, `the demo seeds at least one row of ${table}`).toBeDefined();
       await expect(
-        handle.client.query(`update ${table} set ${column} = 'not-a-known-value' where id = $1`, [row!.id]),
+        handle.query(`update ${table} set ${column} = 'not-a-known-value' where id = $1`, [row!.id]),
       ).rejects.toMatchObject({ code: "23514" });
       await expect(
-        handle.client.query(`update ${table} set ${column} = $2 where id = $1`, [row!.id, good]),
+        handle.query(`update ${table} set ${column} = $2 where id = $1`, [row!.id, good]),
       ).resolves.toBeDefined();
     },
   );
 
   // The demo seeds no casebook case or attempt (a senior writes them): their checks are looked up instead.
   it("has the casebook's and the charge references' checks too", async () => {
-    const { rows } = await handle.client.query<{ conname: string }>(
-      "select conname from pg_constraint where contype = 'c'",
-    );
+    const rows = await handle.query<{ conname: string }>("select conname from pg_constraint where contype = 'c'");
     expect(rows.map((row) => row.conname)).toEqual(
       expect.arrayContaining([
         "casebook_cases_difficulty_known",
@@ -55,12 +54,12 @@ describe("closed sets checked by the database", () => {
   });
 
   it("lets an audit line name no record kind, but not an unknown one", async () => {
-    const [row] = (await handle.client.query<{ id: string }>("select id from visit_events limit 1")).rows;
+    const [row] = await handle.query<{ id: string }>("select id from visit_events limit 1");
     await expect(
-      handle.client.query("update visit_events set record_kind = null where id = $1", [row!.id]),
+      handle.query("update visit_events set record_kind = null where id = $1", [row!.id]),
     ).resolves.toBeDefined();
     await expect(
-      handle.client.query("update visit_events set record_kind = 'photo' where id = $1", [row!.id]),
+      handle.query("update visit_events set record_kind = 'photo' where id = $1", [row!.id]),
     ).rejects.toMatchObject({ code: "23514" });
   });
 });

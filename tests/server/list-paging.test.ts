@@ -1,8 +1,6 @@
-import { drizzle } from "drizzle-orm/pglite";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { listEquipmentPage } from "@server/db/equipment.ts";
 import { analyzeTables } from "@server/db/planner-statistics.ts";
-import * as schema from "@server/db/schema.ts";
 import { listVisitPage } from "@server/db/visits.ts";
 import { matchesSearch, searchTerms } from "@shared/format/search-terms.ts";
 import { EquipmentListQuerySchema, VisitListQuerySchema } from "@shared/schemas/list-pages.ts";
@@ -61,24 +59,24 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     technicianId = ids[BELLBIRD.technician];
     technician = await signedIn(testApp.app, BELLBIRD.technician);
     outsider = (await signUpOtherCompany(testApp.app)).agent;
-    const { client, db } = testApp.database;
+    const { query, db } = testApp.database;
     organisationId = (
-      await client.query<{ organisation_id: string }>("select organisation_id from users where email = $1", [
+      await query<{ organisation_id: string }>("select organisation_id from users where email = $1", [
         BELLBIRD.technician,
       ])
-    ).rows[0]!.organisation_id;
+    )[0]!.organisation_id;
     const site = (
-      await client.query<{ id: string }>("select id from sites where organisation_id = $1 limit 1", [organisationId])
-    ).rows[0]!.id;
+      await query<{ id: string }>("select id from sites where organisation_id = $1 limit 1", [organisationId])
+    )[0]!.id;
     // Units with repeated names (ties on the name sort) and charges from 0.5 to 12.4 kg.
-    await client.query(
+    await query(
       `insert into equipment (organisation_id, site_id, name, kind, refrigerant, circuits)
        select $1, $2, 'Grown unit ' || (g % 60), (array['wall split','cool room','packaged rooftop'])[1 + g % 3], (array['R32','R410A','R-404A'])[1 + g % 3],
               jsonb_build_array(jsonb_build_object('number', 1, 'factoryChargeKg', 0.5 + (g % 120) / 10.0, 'meteringDevice', 'txv', 'targetSuperheatK', null, 'targetSubcoolingK', null, 'liquidLineLengthM', null))
        from generate_series(1, ${GROWN_UNITS}) g`,
       [organisationId, site],
     );
-    await client.query(
+    await query(
       `insert into visits (organisation_id, equipment_id, reason, status, started_at)
        select $1, units.ids[1 + g % array_length(units.ids, 1)], 'Grown visit ' || g,
               (array['open','awaiting-review','signed-off','sent-back','signed-off','signed-off'])[1 + g % 6],
@@ -92,11 +90,11 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
 
   const visitCount = async (where = "true", params: unknown[] = []) =>
     (
-      await testApp.database.client.query<{ n: number }>(
+      await testApp.database.query<{ n: number }>(
         `select count(*)::int as n from visits where organisation_id = $1 and ${where}`,
         [organisationId, ...params],
       )
-    ).rows[0]!.n;
+    )[0]!.n;
 
   it("walks every visit once, newest first, with ties on the start time broken by id", async () => {
     const { rows, pages } = await walk<Summary>(technician, "/api/visits?limit=173", "visits");
@@ -208,11 +206,11 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
       "visits",
     );
     const onCrew = (
-      await testApp.database.client.query<{ n: number }>(
+      await testApp.database.query<{ n: number }>(
         "select count(*)::int as n from visit_technicians where user_id = $1",
         [technicianId],
       )
-    ).rows[0]!.n;
+    )[0]!.n;
     expect(onCrew).toBeGreaterThan(0);
     expect(rows).toHaveLength(onCrew);
     expect(rows.every((row) => row.technicians.some((person) => person.id === technicianId))).toBe(true);
@@ -250,28 +248,28 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
   });
 
   it("keeps the search text up to date when a visit is started or its unit, site or customer is renamed", async () => {
-    const { client } = testApp.database;
+    const { query } = testApp.database;
     const unit = (
-      await client.query<{ id: string; site_id: string }>(
+      await query<{ id: string; site_id: string }>(
         "select id, site_id from equipment where organisation_id = $1 and name = 'Grown unit 7' limit 1",
         [organisationId],
       )
-    ).rows[0]!;
+    )[0]!;
     const started = await technician.post("/api/visits").send({ equipmentId: unit.id, reason: "Quokka inspection" });
     expect(started.status).toBe(201);
     expect((await technician.get("/api/visits?q=quokka")).body.visits.map((visit: Summary) => visit.id)).toEqual([
       started.body.visit.id,
     ]);
 
-    await client.query("update equipment set name = 'Numbat chiller' where id = $1", [unit.id]);
+    await query("update equipment set name = 'Numbat chiller' where id = $1", [unit.id]);
     const renamedUnit = (await walk<Summary>(technician, "/api/visits?q=numbat&limit=200", "visits")).rows;
     expect(renamedUnit.length).toBe(await visitCount("equipment_id = $2", [unit.id]));
     expect((await technician.get("/api/equipment?q=numbat")).body.equipment.map((row: Unit) => row.id)).toEqual([
       unit.id,
     ]);
 
-    await client.query("update sites set name = 'Bilby Depot' where id = $1", [unit.site_id]);
-    await client.query(
+    await query("update sites set name = 'Bilby Depot' where id = $1", [unit.site_id]);
+    await query(
       "update customers set name = 'Dunnart Holdings' where id = (select customer_id from sites where id = $1)",
       [unit.site_id],
     );
@@ -287,11 +285,11 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     expect((await technician.get("/api/equipment?q=dunnart%20numbat")).body.equipment).toHaveLength(1);
     // The place sort's own copies of the names follow the renames (the same trigger as the search text).
     const sortNames = (
-      await client.query<{ site_sort_name: string; customer_sort_name: string }>(
+      await query<{ site_sort_name: string; customer_sort_name: string }>(
         "select site_sort_name, customer_sort_name from equipment where id = $1",
         [unit.id],
       )
-    ).rows[0];
+    )[0];
     expect(sortNames).toEqual({ site_sort_name: "bilby depot", customer_sort_name: "dunnart holdings" });
     expect((await technician.get("/api/visits?q=grown%20unit%207%20quokka")).body.visits).toEqual([]);
   });
@@ -307,11 +305,11 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
 
   it("walks the equipment in each sort without a gap or a repeat, and searches and filters by kind", async () => {
     const total = (
-      await testApp.database.client.query<{ n: number }>(
+      await testApp.database.query<{ n: number }>(
         "select count(*)::int as n from equipment where organisation_id = $1 and not archived",
         [organisationId],
       )
-    ).rows[0]!.n;
+    )[0]!.n;
     for (const sort of ["name", "kind", "place", "refrigerant", "circuits", "factoryCharge"]) {
       for (const dir of ["asc", "desc"]) {
         const { rows } = await walk<Unit>(technician, `/api/equipment?sort=${sort}&dir=${dir}&limit=37`, "equipment");
@@ -338,11 +336,7 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
   it("reads the newest visits through the (organisation_id, started_at) index, first page and deep", async () => {
     // The queries the list sends, captured through a logger and explained as they ran.
     const captured: { query: string; params: unknown[] }[] = [];
-    const db = drizzle({
-      client: testApp.database.client,
-      schema,
-      logger: { logQuery: (query, params) => void captured.push({ query, params }) },
-    });
+    const db = testApp.database.withQueryLog((query, params) => void captured.push({ query, params }));
     const first = await listVisitPage(db, organisationId, VisitListQuerySchema.parse({ limit: "50" }), technicianId);
     const deep = await listVisitPage(
       db,
@@ -356,9 +350,7 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     );
     expect(listQueries).toHaveLength(2);
     for (const entry of listQueries) {
-      const plan = (
-        await testApp.database.client.query<{ "QUERY PLAN": string }>(`explain ${entry.query}`, entry.params)
-      ).rows
+      const plan = (await testApp.database.query<{ "QUERY PLAN": string }>(`explain ${entry.query}`, entry.params))
         .map((row) => row["QUERY PLAN"])
         .join("\n");
       expect(plan).toContain("visits_organisation_started_idx");
@@ -369,16 +361,16 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     expect(Math.max(...inLists)).toBeLessThanOrEqual(4 * (50 + 2));
     // The equipment list by name reads in index order with the index proposed for it (not yet a
     // migration: made here if missing); without it the organisation's units are read and sorted.
-    await testApp.database.client.query(
+    await testApp.database.query(
       "create index if not exists equipment_organisation_name_idx on equipment (organisation_id, lower(name), id) where not archived",
     );
-    await testApp.database.client.query("analyze equipment");
+    await testApp.database.query("analyze equipment");
     captured.length = 0;
     await listEquipmentPage(db, organisationId, EquipmentListQuerySchema.parse({}));
     expect(captured).toHaveLength(1);
     const plan = (
-      await testApp.database.client.query<{ "QUERY PLAN": string }>(`explain ${captured[0].query}`, captured[0].params)
-    ).rows
+      await testApp.database.query<{ "QUERY PLAN": string }>(`explain ${captured[0].query}`, captured[0].params)
+    )
       .map((row) => row["QUERY PLAN"])
       .join("\n");
     if (process.env.SHOW_PLANS) console.info(plan);
@@ -388,14 +380,10 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
 
   it("reads one status's newest visits and the units by place in index order, not every row", async () => {
     const captured: { query: string; params: unknown[] }[] = [];
-    const db = drizzle({
-      client: testApp.database.client,
-      schema,
-      logger: { logQuery: (query, params) => void captured.push({ query, params }) },
-    });
+    const db = testApp.database.withQueryLog((query, params) => void captured.push({ query, params }));
     await analyzeTables(testApp.database.db);
     const planOf = async (entry: { query: string; params: unknown[] }) =>
-      (await testApp.database.client.query<{ "QUERY PLAN": string }>(`explain ${entry.query}`, entry.params)).rows
+      (await testApp.database.query<{ "QUERY PLAN": string }>(`explain ${entry.query}`, entry.params))
         .map((row) => row["QUERY PLAN"])
         .join("\n");
     await listVisitPage(

@@ -19,20 +19,17 @@ import { createTestDatabase } from "../setup/test-database.ts";
 describe("planner statistics", () => {
   let handle: DatabaseHandle;
   const rowEstimate = async (table: string) =>
-    (
-      await handle.client.query<{ reltuples: number }>("select reltuples from pg_class where oid = $1::regclass", [
-        table,
-      ])
-    ).rows[0]!.reltuples;
+    (await handle.query<{ reltuples: number }>("select reltuples from pg_class where oid = $1::regclass", [table]))[0]!
+      .reltuples;
   const rowCount = async (table: string) =>
-    (await handle.client.query<{ n: number }>(`select count(*)::int as n from ${table}`)).rows[0]!.n;
+    (await handle.query<{ n: number }>(`select count(*)::int as n from ${table}`))[0]!.n;
   const statisticsColumns = async (table: string) =>
     (
-      await handle.client.query<{ attname: string }>(
+      await handle.query<{ attname: string }>(
         "select attname from pg_stats where schemaname = 'public' and tablename = $1",
         [table],
       )
-    ).rows.map((row) => row.attname);
+    ).map((row) => row.attname);
 
   beforeAll(async () => {
     handle = await createTestDatabase();
@@ -57,26 +54,23 @@ describe("planner statistics", () => {
   });
 
   it("brings a visit's row estimate in line after a bulk insert (the planner once guessed 65 of 19 938)", async () => {
-    const [visit] = await handle.client
-      .query<{ visit_id: string }>("select visit_id from readings limit 1")
-      .then((result) => result.rows);
-    await handle.client.query(
+    const [visit] = await handle.query<{ visit_id: string }>("select visit_id from readings limit 1");
+    await handle.query(
       `insert into readings (organisation_id, visit_id, circuit, taken_at, input, result)
        select organisation_id, visit_id, circuit, taken_at + make_interval(secs => step), input, result
        from (select * from readings where visit_id = $1 limit 1) one, generate_series(1, 4000) step`,
       [visit!.visit_id],
     );
     await analyzeTables(handle.db);
-    const expected = await handle.client.query<{ n: number }>(
-      "select count(*)::int as n from readings where visit_id = $1",
-      [visit!.visit_id],
-    );
-    const plan = await handle.client.query<{ "QUERY PLAN": [{ Plan: { "Plan Rows": number } }] }>(
+    const expected = await handle.query<{ n: number }>("select count(*)::int as n from readings where visit_id = $1", [
+      visit!.visit_id,
+    ]);
+    const plan = await handle.query<{ "QUERY PLAN": [{ Plan: { "Plan Rows": number } }] }>(
       `explain (format json) select * from readings where visit_id = '${visit!.visit_id}'`,
     );
-    const estimated = plan.rows[0]!["QUERY PLAN"][0].Plan["Plan Rows"];
+    const estimated = plan[0]!["QUERY PLAN"][0].Plan["Plan Rows"];
     // Within 10 % of the true count: the most common value in the sample is this visit.
-    expect(Math.abs(estimated - expected.rows[0]!.n) / expected.rows[0]!.n).toBeLessThan(0.1);
+    expect(Math.abs(estimated - expected[0]!.n) / expected[0]!.n).toBeLessThan(0.1);
   });
 
   it("refreshes the readings' row count after a CSV import is stored", async () => {
@@ -124,10 +118,8 @@ describe("planner statistics", () => {
   it("re-analyses only the tables changed past autovacuum's threshold, then none while quiet", async () => {
     await analyzeTables(handle.db);
     const before = await rowCount("readings");
-    const [visit] = await handle.client
-      .query<{ visit_id: string }>("select visit_id from readings limit 1")
-      .then((result) => result.rows);
-    await handle.client.query(
+    const [visit] = await handle.query<{ visit_id: string }>("select visit_id from readings limit 1");
+    await handle.query(
       `insert into readings (organisation_id, visit_id, circuit, taken_at, input, result)
        select organisation_id, visit_id, circuit, taken_at + make_interval(days => 1, secs => step), input, result
        from (select * from readings where visit_id = $1 limit 1) one, generate_series(1, 1000) step`,
@@ -136,10 +128,10 @@ describe("planner statistics", () => {
     // The counts reach pg_stat_user_tables when the session next reports them (about a second).
     const live = async () =>
       (
-        await handle.client.query<{ n: number }>(
+        await handle.query<{ n: number }>(
           "select n_live_tup::int as n from pg_stat_user_tables where relname = 'readings'",
         )
-      ).rows[0]!.n;
+      )[0]!.n;
     for (let attempt = 0; attempt < 40 && (await live()) < before + 1000; attempt++)
       await new Promise((resolve) => setTimeout(resolve, 250));
     expect(await live()).toBeGreaterThanOrEqual(before + 1000);

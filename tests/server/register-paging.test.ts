@@ -66,21 +66,19 @@ describe("register paging: GET /api/register and its CSV export", () => {
     people = await seedBellbird(testApp);
     owner = await signedIn(testApp.app, BELLBIRD.owner);
     technician = await signedIn(testApp.app, BELLBIRD.technician);
-    const { client } = testApp.database;
+    const { query } = testApp.database;
     organisationId = (
-      await client.query<{ organisation_id: string }>("select organisation_id from users where email = $1", [
-        BELLBIRD.owner,
-      ])
-    ).rows[0]!.organisation_id;
+      await query<{ organisation_id: string }>("select organisation_id from users where email = $1", [BELLBIRD.owner])
+    )[0]!.organisation_id;
     const unit = (
-      await client.query<{ id: string; refrigerant: string }>(
+      await query<{ id: string; refrigerant: string }>(
         "select id, refrigerant from equipment where organisation_id = $1 order by name limit 1",
         [organisationId],
       )
-    ).rows[0]!;
+    )[0]!;
     // Lines in threes on the same minute (ties on the date), by the technician and the senior in
     // turn, every seventh one voided; two refrigerants, three kinds, grams that add up unevenly.
-    await client.query(
+    await query(
       `insert into refrigerant_movements (organisation_id, equipment_id, circuit, refrigerant, kind, kg, technician_id, at, voided_at, void_reason)
        select $1, $2, 1, (array['R407C','R32'])[1 + g % 2], (array['recovered','added-new','reused'])[1 + g % 3], 0.013 + (g % 40) / 10.0,
               case when g % 2 = 0 then $3::uuid else $4::uuid end,
@@ -94,11 +92,11 @@ describe("register paging: GET /api/register and its CSV export", () => {
 
   const standingLines = async (where = "true", params: unknown[] = []) =>
     (
-      await testApp.database.client.query<{ n: number }>(
+      await testApp.database.query<{ n: number }>(
         `select count(*)::int as n from refrigerant_movements where organisation_id = $1 and voided_at is null and ${where}`,
         [organisationId, ...params],
       )
-    ).rows[0]!.n;
+    )[0]!.n;
 
   it("walks every standing line once, oldest first, with ties on the date kept in a stable order", async () => {
     const { lines, pages } = await walk(owner, "/api/register?limit=37");

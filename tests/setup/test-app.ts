@@ -6,6 +6,7 @@ import type { DatabaseHandle } from "@server/db/client.ts";
 import { readEnv } from "@server/env.ts";
 import { createLogger } from "@server/logger.ts";
 import { createMailer, type Mailer } from "@server/mail/mailer.ts";
+import type { ReadinessCheck } from "@server/routes/readiness.ts";
 import type { FakeSmtp } from "@server/mail/fake-smtp.ts";
 import { createPhotoStore } from "@server/photos/create-photo-store.ts";
 import type { PhotoStore } from "@server/photos/photo-store.ts";
@@ -29,6 +30,10 @@ export interface TestAppOptions {
   authLimits?: Partial<AuthLimits>;
   /** Where log lines go (at LOG_LEVEL, default info); without it the test app logs nothing. */
   logDestination?: DestinationStream;
+  /** What GET /api/ready asks, in place of the database alone. */
+  readinessChecks?: (database: DatabaseHandle) => ReadinessCheck[];
+  /** Whether the app is stopping (GET /api/ready answers 503). */
+  isShuttingDown?: () => boolean;
 }
 
 /** The real app in-process over a fresh database, as the server builds it, with a fake SMTP server. */
@@ -49,7 +54,18 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
   const logger = createLogger(env, options.logDestination);
   const mailer = await createMailer({ env, db: database.db, logger });
   const photoStore = await createPhotoStore(env.photoStore);
-  const app = createApp({ db: database.db, env, logger, mailer, photoStore, authLimits: options.authLimits });
+  const app = createApp({
+    db: database.db,
+    env,
+    logger,
+    mailer,
+    photoStore,
+    authLimits: options.authLimits,
+    // As the server decides it: the run on PostgreSQL goes through every session look-up.
+    cacheSessions: database.kind === "pglite",
+    readinessChecks: options.readinessChecks?.(database),
+    isShuttingDown: options.isShuttingDown,
+  });
   return {
     app,
     database,
