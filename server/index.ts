@@ -7,6 +7,7 @@ import type { Server } from "node:http";
 import { loadAllRefrigerants } from "@shared/engine/index.ts";
 import { createApp } from "./app.ts";
 import { ifLockFree, LOCK_KEYS, withLock } from "./db/advisory-locks.ts";
+import { oncePerInterval } from "./db/periodic-jobs.ts";
 import { openConfiguredDatabase } from "./db/open-configured-database.ts";
 import { deleteExpiredSessions } from "./db/expired-sessions.ts";
 import { analyzeChangedTables, analyzeTables } from "./db/planner-statistics.ts";
@@ -106,13 +107,13 @@ const server: Server = app.listen(env.PORT, env.HOST, () => {
 });
 
 // Expired sessions and ended throttle counters are purged at start and hourly; unref so the
-// timer never holds the process. On a shared PostgreSQL a server skips the purge while another
-// runs it (each server still purges on its own hour, which finds little: the purge is idempotent).
+// timer never holds the process. On a shared PostgreSQL the purge runs once an hour across all
+// app servers: the first whose timer fires in the hour does it, the others skip (periodic-jobs.ts).
 const SESSION_PURGE_INTERVAL_MS = 60 * 60 * 1000;
 /** An import stages its rows for seconds to minutes; rows an hour old belong to one cut off by a stop. */
 const ABANDONED_IMPORT_AGE_MS = 60 * 60 * 1000;
 const purgeSessions = () =>
-  ifLockFree(database.db, LOCK_KEYS.purge, async (db) => {
+  oncePerInterval(database.db, LOCK_KEYS.purge, SESSION_PURGE_INTERVAL_MS, async (db) => {
     const count = await deleteExpiredSessions(db);
     await deleteEndedCounters(db);
     if (database.kind === "postgres")

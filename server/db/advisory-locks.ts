@@ -18,7 +18,7 @@ export const LOCK_KEYS = {
   statistics: 7_215_020_004,
 } as const;
 
-type LockKey = (typeof LOCK_KEYS)[keyof typeof LOCK_KEYS];
+export type LockKey = (typeof LOCK_KEYS)[keyof typeof LOCK_KEYS];
 
 /**
  * Runs `job` in a transaction that first waits for the lock: servers starting together take
