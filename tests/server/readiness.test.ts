@@ -1,6 +1,7 @@
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { databaseReadiness } from "@server/routes/readiness.ts";
+import { startS3TestStore, type TestPhotoStore } from "../setup/photo-stores.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 
 describe("GET /api/ready", () => {
@@ -10,7 +11,7 @@ describe("GET /api/ready", () => {
   beforeAll(async () => {
     testApp = await createTestApp({
       isShuttingDown: () => shuttingDown,
-      // A second dependency beside the database, as the photo store will be.
+      // A second dependency beside the database, as the photo store is.
       readinessChecks: (database) => [
         databaseReadiness(database.db),
         {
@@ -63,8 +64,27 @@ describe("GET /api/ready with the default checks", () => {
   });
   afterAll(() => testApp.close());
 
-  it("checks the database", async () => {
+  it("checks the database and the photo store", async () => {
     const response = await request(testApp.app).get("/api/ready");
-    expect(response.body).toEqual({ ready: true, checks: { database: "ok" } });
+    expect(response.body).toEqual({ ready: true, checks: { database: "ok", "photo store": "ok" } });
+  });
+});
+
+describe("GET /api/ready with a photo bucket that is missing", () => {
+  let testApp: TestApp;
+  let store: TestPhotoStore;
+  beforeAll(async () => {
+    store = await startS3TestStore({ withoutBucket: true });
+    testApp = await createTestApp({ env: store.env });
+  });
+  afterAll(async () => {
+    await testApp.close();
+    await store.close();
+  });
+
+  it("is not ready, naming the photo store", async () => {
+    const response = await request(testApp.app).get("/api/ready");
+    expect(response.status).toBe(503);
+    expect(response.body).toEqual({ ready: false, checks: { database: "ok", "photo store": "failed" } });
   });
 });
