@@ -6,7 +6,7 @@
  * Needs TEST_DATABASE_URL, a PostgreSQL server this may create a database on;
  * `npm run bench:api -- --postgres` starts a throwaway one (scripts/with-postgres.ts) and runs this.
  */
-import pg from "pg";
+import { databaseUrl, dropDatabase, onServer } from "../../tests/setup/postgres-test-server.ts";
 import { measureSaving, openVisitsForSaving, type SaveLevel } from "./save-reading.ts";
 import { startServer, type BenchServer } from "./server-process.ts";
 
@@ -19,16 +19,6 @@ const SHARED_APP_URL = "http://satura.bench.test";
 interface Setup {
   name: string;
   levels: SaveLevel[];
-}
-
-async function onServer(url: string, statement: string): Promise<void> {
-  const client = new pg.Client({ connectionString: url });
-  await client.connect();
-  try {
-    await client.query(statement);
-  } finally {
-    await client.end();
-  }
 }
 
 async function measure(servers: BenchServer[], seconds: number): Promise<SaveLevel[]> {
@@ -52,9 +42,7 @@ export async function comparePostgres(seconds: number): Promise<void> {
   const serverUrl = process.env.TEST_DATABASE_URL;
   if (!serverUrl) throw new Error("TEST_DATABASE_URL is not set: run through `npm run bench:api -- --postgres`");
   const database = `satura_bench_${process.pid}`;
-  const databaseUrl = new URL(serverUrl);
-  databaseUrl.pathname = `/${database}`;
-  const onPostgres = { DATABASE_URL: databaseUrl.toString(), APP_URL: SHARED_APP_URL };
+  const onPostgres = { DATABASE_URL: databaseUrl(serverUrl, database), APP_URL: SHARED_APP_URL };
 
   const setups: Setup[] = [];
   setups.push({
@@ -63,7 +51,7 @@ export async function comparePostgres(seconds: number): Promise<void> {
   });
   process.stdout.write(".");
   for (const count of [1, 2]) {
-    await onServer(serverUrl, `drop database if exists ${database} with (force)`);
+    await dropDatabase(serverUrl, database);
     await onServer(serverUrl, `create database ${database}`);
     const starts = Array.from({ length: count }, () => () => startServer("memory://", onPostgres));
     setups.push({
@@ -72,7 +60,7 @@ export async function comparePostgres(seconds: number): Promise<void> {
     });
     process.stdout.write(".");
   }
-  await onServer(serverUrl, `drop database if exists ${database} with (force)`);
+  await dropDatabase(serverUrl, database);
 
   const ms = (value: number) => (Number.isFinite(value) ? value.toFixed(value < 10 ? 1 : 0) : "–");
   console.log(

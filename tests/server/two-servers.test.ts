@@ -6,7 +6,6 @@
  * Runs in the PostgreSQL pass (`npm run test:server:pg`, which sets TEST_DATABASE_URL); on the
  * embedded database alone there is no second server to start, so it says so and skips.
  */
-import pg from "pg";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEFAULT_AUTH_LIMITS } from "@server/auth/rate-limits.ts";
@@ -15,6 +14,7 @@ import { LIVE_REFRESH_MS } from "@/lib/api/visits.ts";
 import { READING_BODY } from "../../bench/api/save-reading.ts";
 import { startServer, DEMO_PASSWORD, type BenchServer } from "../../bench/api/server-process.ts";
 import { startS3TestStore, type TestPhotoStore } from "../setup/photo-stores.ts";
+import { databaseUrl, dropDatabase, onServer } from "../setup/postgres-test-server.ts";
 
 const adminUrl = process.env.TEST_DATABASE_URL;
 if (!adminUrl) {
@@ -63,16 +63,11 @@ describe.skipIf(!adminUrl)("two app servers on one PostgreSQL and one S3 store",
   let second: BenchServer;
 
   beforeAll(async () => {
-    const admin = new pg.Client({ connectionString: adminUrl });
-    await admin.connect();
-    await admin.query(`drop database if exists ${databaseName}`);
-    await admin.query(`create database ${databaseName}`);
-    await admin.end();
-    const databaseUrl = new URL(adminUrl!);
-    databaseUrl.pathname = `/${databaseName}`;
+    await dropDatabase(adminUrl!, databaseName);
+    await onServer(adminUrl!, `create database ${databaseName}`);
 
     photos = await startS3TestStore();
-    const env = { DATABASE_URL: databaseUrl.toString(), ...photos.env };
+    const env = { DATABASE_URL: databaseUrl(adminUrl!, databaseName), ...photos.env };
     // Both start together on the empty database: one migrates and loads the demo company under
     // the start-up lock, the other waits for it and then finds both done.
     [first, second] = await Promise.all([
@@ -84,10 +79,7 @@ describe.skipIf(!adminUrl)("two app servers on one PostgreSQL and one S3 store",
   afterAll(async () => {
     await Promise.all([first?.stop(), second?.stop()]);
     await photos?.close();
-    const admin = new pg.Client({ connectionString: adminUrl });
-    await admin.connect();
-    await admin.query(`drop database if exists ${databaseName} with (force)`);
-    await admin.end();
+    await dropDatabase(adminUrl!, databaseName);
   });
 
   it("both are ready: each reaches the database and the photo store", async () => {
