@@ -13,15 +13,16 @@ import { z } from "zod";
 import { diagnose } from "@shared/engine/index.ts";
 import { instant, isStorableInstant } from "@shared/schemas/dates.ts";
 import { text } from "@shared/schemas/text.ts";
-import { MEASURED_FIELDS, type NumericMeasuredField } from "@shared/schemas/visits.ts";
+import {
+  ColumnMappingSchema,
+  guessMapping,
+  NO_TIME_COLUMN_MESSAGE,
+  type ColumnMapping,
+  type ImportableField,
+} from "@shared/schemas/readings-import.ts";
 import { packResult } from "../db/stored-result.ts";
 import { readingInput, type ReadingContext } from "../visits/reading-input.ts";
 
-/** Reading fields a column can be mapped to, besides the time column: every measured number. */
-export const IMPORTABLE_FIELDS = MEASURED_FIELDS.filter(
-  (field): field is NumericMeasuredField => field !== "liquidTempLocation",
-);
-export type ImportableField = NumericMeasuredField;
 export const MAX_IMPORT_ROWS = 5000;
 /** A logger's export has a time column and a dozen readings; 64 columns leaves room for any. */
 export const MAX_IMPORT_COLUMNS = 64;
@@ -29,42 +30,6 @@ export const MAX_IMPORT_COLUMNS = 64;
 export const MAX_IMPORT_LINE_CHARS = 4096;
 /** Rows per slice handed back for storing: each slice holds the database for a few tens of milliseconds. */
 export const IMPORT_SLICE_ROWS = 50;
-
-// The labels the client shows for these targets live in shared/schemas/readings-import.ts.
-export const ColumnMappingSchema = z.record(
-  z.string(),
-  z.union([z.enum(IMPORTABLE_FIELDS), z.literal("takenAt"), z.literal("ignore")]),
-);
-export type ColumnMapping = z.infer<typeof ColumnMappingSchema>;
-
-/** Header words that identify a column without the user mapping it by hand. */
-const GUESSES: [RegExp, ImportableField | "takenAt"][] = [
-  [/^(time|timestamp|date.?time|taken)/i, "takenAt"],
-  [/suction.*(press|kpa)|^p.?suc|low.?side.*press/i, "suctionPressureKPa"],
-  [/suction.*(temp|line)|^t.?suc/i, "suctionLineTempC"],
-  [/discharge.*(press|kpa)|^p.?dis/i, "dischargePressureKPa"],
-  [/discharge.*(temp|line)|^dlt$|^t.?dis/i, "dischargeLineTempC"],
-  [/liquid.*(press|kpa)|head.*press|^p.?liq/i, "liquidPressureKPa"],
-  [/liquid.*(temp|line)|^t.?liq/i, "liquidLineTempC"],
-  [/return.*(wet|wb)/i, "returnAirWetBulbC"],
-  [/return.*(rh|humid)/i, "returnAirRelativeHumidity"],
-  [/return.*(dry|db|air)/i, "returnAirDryBulbC"],
-  [/supply/i, "supplyAirDryBulbC"],
-  [/outdoor|ambient|oat/i, "outdoorAirDryBulbC"],
-  [/amp|current/i, "compressorAmps"],
-  [/run.?(min|time)/i, "runMinutes"],
-];
-
-export function guessMapping(headers: string[]): ColumnMapping {
-  const mapping: ColumnMapping = {};
-  const used = new Set<string>();
-  for (const header of headers) {
-    const match = GUESSES.find(([pattern, field]) => pattern.test(header.trim()) && !used.has(field));
-    mapping[header] = match ? match[1] : "ignore";
-    if (match) used.add(match[1]);
-  }
-  return mapping;
-}
 
 export interface RowProblem {
   /** 1-based line in the file, counting the header as line 1. */
@@ -181,7 +146,7 @@ export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRef
   });
   const timeColumn = headers.findIndex((header) => mapping[header] === "takenAt");
   if (headers.length === 0) problems.push({ line: 1, message: "The file is empty" });
-  if (timeColumn < 0 && headers.length > 0) problems.push({ line: 1, message: "Map one column to the reading time" });
+  if (timeColumn < 0 && headers.length > 0) problems.push({ line: 1, message: NO_TIME_COLUMN_MESSAGE });
   if (rows.length > MAX_IMPORT_ROWS)
     problems.push({ line: MAX_IMPORT_ROWS + 2, message: `At most ${MAX_IMPORT_ROWS} rows per import` });
   if (problems.length > 0) return summary();

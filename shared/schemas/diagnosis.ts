@@ -9,6 +9,7 @@
  */
 import { z } from "zod";
 import { STANDARD_ATMOSPHERE_KPA } from "../engine/properties/property-tolerances.ts";
+import { READING_FIELDS, STORED_UNITS, type ReadingField } from "./reading-fields.ts";
 import { text } from "./text.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -113,8 +114,16 @@ export const WET_BULB_ABOVE_DRY_BULB_TOLERANCE_K = 0.2;
 // Input
 // ---------------------------------------------------------------------------------------------
 
-function number(label: string, unit: string) {
-  return z.number({ error: `${label} must be a number in ${unit}` });
+/** A field's name, from the catalogue of reading fields: the messages below say it as the screens do. */
+const name = (field: ReadingField) => READING_FIELDS[field].label;
+
+type NumberField = {
+  [Field in ReadingField]: (typeof READING_FIELDS)[Field]["kind"] extends keyof typeof STORED_UNITS ? Field : never;
+}[ReadingField];
+
+/** A numeric field of the input, refused in the catalogue's words and stored unit when it is not a number. */
+function number(field: NumberField) {
+  return z.number({ error: `${name(field)} must be a number in ${STORED_UNITS[READING_FIELDS[field].kind]}` });
 }
 
 /**
@@ -168,60 +177,60 @@ function targetRange(label: string): FieldRange {
   };
 }
 
-/** Ranges of the numeric readings, by field. */
+/** Ranges of the numeric readings, by field: one for every number of the catalogue. */
 export const DIAGNOSIS_FIELD_RANGES = {
-  suctionPressureKPa: gaugePressureRange("Suction pressure"),
-  suctionLineTempC: lineTemperatureRange("Suction line temperature"),
-  liquidPressureKPa: gaugePressureRange("Liquid pressure"),
-  liquidLineTempC: lineTemperatureRange("Liquid line temperature"),
-  dischargePressureKPa: gaugePressureRange("Discharge pressure"),
-  dischargeLineTempC: lineTemperatureRange("Discharge line temperature"),
-  returnAirDryBulbC: airTemperatureRange("Return air dry bulb"),
-  returnAirWetBulbC: airTemperatureRange("Return air wet bulb"),
+  suctionPressureKPa: gaugePressureRange(name("suctionPressureKPa")),
+  suctionLineTempC: lineTemperatureRange(name("suctionLineTempC")),
+  liquidPressureKPa: gaugePressureRange(name("liquidPressureKPa")),
+  liquidLineTempC: lineTemperatureRange(name("liquidLineTempC")),
+  dischargePressureKPa: gaugePressureRange(name("dischargePressureKPa")),
+  dischargeLineTempC: lineTemperatureRange(name("dischargeLineTempC")),
+  returnAirDryBulbC: airTemperatureRange(name("returnAirDryBulbC")),
+  returnAirWetBulbC: airTemperatureRange(name("returnAirWetBulbC")),
   returnAirRelativeHumidity: {
     min: 0,
     minExclusive: true,
     max: 100,
-    minMessage: "Return air relative humidity must be above 0 %",
-    maxMessage: "Return air relative humidity cannot exceed 100 %",
+    minMessage: `${name("returnAirRelativeHumidity")} must be above 0 %`,
+    maxMessage: `${name("returnAirRelativeHumidity")} cannot exceed 100 %`,
   },
-  supplyAirDryBulbC: airTemperatureRange("Supply air dry bulb"),
-  outdoorAirDryBulbC: airTemperatureRange("Outdoor air dry bulb"),
+  supplyAirDryBulbC: airTemperatureRange(name("supplyAirDryBulbC")),
+  outdoorAirDryBulbC: airTemperatureRange(name("outdoorAirDryBulbC")),
   compressorAmps: {
     min: 0,
     max: MAX_CURRENT_A,
-    minMessage: "Compressor current cannot be negative",
-    maxMessage: `Compressor current above ${MAX_CURRENT_A} A is not plausible`,
+    minMessage: `${name("compressorAmps")} cannot be negative`,
+    maxMessage: `${name("compressorAmps")} above ${MAX_CURRENT_A} A is not plausible`,
   },
   compressorRla: {
     min: MIN_RLA_A,
     max: MAX_CURRENT_A,
-    minMessage: `Compressor RLA below ${MIN_RLA_A} A is not a compressor's rating`,
-    maxMessage: `Compressor RLA above ${MAX_CURRENT_A} A is not plausible`,
+    minMessage: `${name("compressorRla")} below ${MIN_RLA_A} A is not a compressor's rating`,
+    maxMessage: `${name("compressorRla")} above ${MAX_CURRENT_A} A is not plausible`,
   },
-  targetSuperheatK: targetRange("Target superheat"),
-  targetSubcoolingK: targetRange("Target subcooling"),
+  targetSuperheatK: targetRange(name("targetSuperheatK")),
+  targetSubcoolingK: targetRange(name("targetSubcoolingK")),
   atmosphericPressureKPa: {
     min: MIN_ATMOSPHERIC_PRESSURE_KPA,
     max: MAX_ATMOSPHERIC_PRESSURE_KPA,
-    minMessage: `Atmospheric pressure below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`,
-    maxMessage: `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`,
+    minMessage: `${name("atmosphericPressureKPa")} below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`,
+    maxMessage: `${name("atmosphericPressureKPa")} above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`,
   },
-  runMinutes: { min: 0, max: Infinity, minMessage: "Run time cannot be negative", maxMessage: "" },
+  runMinutes: { min: 0, max: Infinity, minMessage: `${name("runMinutes")} cannot be negative`, maxMessage: "" },
   liquidLineLengthM: {
     min: 0,
     max: MAX_LINE_LENGTH_M,
-    minMessage: "Liquid line length cannot be negative",
-    maxMessage: `Liquid line length above ${MAX_LINE_LENGTH_M} m is not a line set`,
+    minMessage: `${name("liquidLineLengthM")} cannot be negative`,
+    maxMessage: `${name("liquidLineLengthM")} above ${MAX_LINE_LENGTH_M} m is not a line set`,
   },
   chargeKg: {
     min: 0,
     minExclusive: true,
     max: MAX_CIRCUIT_CHARGE_KG,
-    minMessage: "Correct charge must be above 0 kg",
-    maxMessage: `Correct charge above ${MAX_CIRCUIT_CHARGE_KG} kg is not one circuit`,
+    minMessage: `${name("chargeKg")} must be above 0 kg`,
+    maxMessage: `${name("chargeKg")} above ${MAX_CIRCUIT_CHARGE_KG} kg is not one circuit`,
   },
-} as const satisfies Record<string, FieldRange>;
+} as const satisfies Record<NumberField, FieldRange>;
 const RANGE_ENTRIES = Object.entries(DIAGNOSIS_FIELD_RANGES) as [keyof typeof DIAGNOSIS_FIELD_RANGES, FieldRange][];
 
 /** Bounds of a reference point's figures, °C and K. */
@@ -274,55 +283,55 @@ export const DiagnosisInputObjectSchema = z.object({
   refrigerant: text({ error: "Choose the refrigerant" }).min(1, "Choose the refrigerant"),
   meteringDevice: MeteringDeviceSchema,
   /** Suction pressure at the suction service port, kPa gauge. */
-  suctionPressureKPa: number("Suction pressure", "kPa gauge"),
+  suctionPressureKPa: number("suctionPressureKPa"),
   /** Suction line temperature next to the suction port / evaporator outlet, °C. */
-  suctionLineTempC: number("Suction line temperature", "°C"),
+  suctionLineTempC: number("suctionLineTempC"),
   /**
    * Where the suction temperature was taken. Unstated, each target is read at its own reference
    * point (TXV/EEV at the evaporator outlet, fixed-device charts at the outdoor unit).
    */
   suctionTempLocation: SuctionTempLocationSchema.optional(),
   /** Liquid pressure at the liquid service port (condenser outlet), kPa gauge. */
-  liquidPressureKPa: number("Liquid pressure", "kPa gauge"),
+  liquidPressureKPa: number("liquidPressureKPa"),
   /** Pipe temperature taken for subcooling, °C. */
-  liquidLineTempC: number("Liquid line temperature", "°C"),
+  liquidLineTempC: number("liquidLineTempC"),
   /** Where `liquidLineTempC` was taken; default liquid line. A discharge-line reading voids subcooling. */
   liquidTempLocation: LiquidTempLocationSchema.optional(),
   /** Discharge pressure at the compressor, kPa gauge. */
-  dischargePressureKPa: number("Discharge pressure", "kPa gauge").optional(),
+  dischargePressureKPa: number("dischargePressureKPa").optional(),
   /** Discharge line temperature within about 15 cm of the compressor, °C. */
-  dischargeLineTempC: number("Discharge line temperature", "°C").optional(),
+  dischargeLineTempC: number("dischargeLineTempC").optional(),
   /**
    * Air entering the evaporator, °C: return air for comfort cooling and heat pumps, the room or
    * box air on the coil for refrigeration, the entering water or glycol for process chilling.
    */
-  returnAirDryBulbC: number("Return air dry bulb", "°C").optional(),
-  returnAirWetBulbC: number("Return air wet bulb", "°C").optional(),
+  returnAirDryBulbC: number("returnAirDryBulbC").optional(),
+  returnAirWetBulbC: number("returnAirWetBulbC").optional(),
   /** Return air relative humidity, percent (0–100]; used for the wet bulb when none is measured. */
-  returnAirRelativeHumidity: number("Return air relative humidity", "%").optional(),
+  returnAirRelativeHumidity: number("returnAirRelativeHumidity").optional(),
   /** Air (or fluid, for process chilling) leaving the evaporator, °C. */
-  supplyAirDryBulbC: number("Supply air dry bulb", "°C").optional(),
+  supplyAirDryBulbC: number("supplyAirDryBulbC").optional(),
   /** Outdoor air entering the condenser, in the shade, °C. */
-  outdoorAirDryBulbC: number("Outdoor air dry bulb", "°C").optional(),
-  compressorAmps: number("Compressor current", "A").optional(),
-  compressorRla: number("Compressor RLA", "A").optional(),
+  outdoorAirDryBulbC: number("outdoorAirDryBulbC").optional(),
+  compressorAmps: number("compressorAmps").optional(),
+  compressorRla: number("compressorRla").optional(),
   /** Maker's target superheat, K (nameplate, manual or the unit's own charging chart). */
-  targetSuperheatK: number("Target superheat", "K").optional(),
+  targetSuperheatK: number("targetSuperheatK").optional(),
   /** Maker's target subcooling, K. */
-  targetSubcoolingK: number("Target subcooling", "K").optional(),
+  targetSubcoolingK: number("targetSubcoolingK").optional(),
   /** Site atmospheric pressure, kPa absolute; default 101.325. */
-  atmosphericPressureKPa: number("Atmospheric pressure", "kPa absolute").optional(),
+  atmosphericPressureKPa: number("atmosphericPressureKPa").optional(),
   /** Minutes the compressor has run since start or the last adjustment. */
-  runMinutes: number("Run time", "minutes").optional(),
+  runMinutes: number("runMinutes").optional(),
   /**
    * What the equipment does (from the equipment record). Without it the engine infers it from
    * the return air temperature and says so.
    */
   application: ApplicationSchema.optional(),
   /** Length of the liquid line (the line set), m: sets the suction line allowance. */
-  liquidLineLengthM: number("Liquid line length", "m").optional(),
+  liquidLineLengthM: number("liquidLineLengthM").optional(),
   /** The circuit's correct charge (nameplate plus any line-set adjustment), kg: sets the scale of `chargeDeviation`. */
-  chargeKg: number("Correct charge", "kg").optional(),
+  chargeKg: number("chargeKg").optional(),
   /** The circuit's own reference point (settled readings at a known correct charge), when one was set. */
   chargeReference: ChargeReferenceSchema.optional(),
 });
@@ -342,16 +351,16 @@ export const DiagnosisInputSchema = DiagnosisInputObjectSchema.superRefine((inpu
   const atmosphere = input.atmosphericPressureKPa ?? STANDARD_ATMOSPHERE_KPA;
   // A gauge cannot read below a perfect vacuum: absolute pressure must stay above zero.
   const gauges = [
-    ["suctionPressureKPa", "Suction pressure", input.suctionPressureKPa],
-    ["liquidPressureKPa", "Liquid pressure", input.liquidPressureKPa],
-    ["dischargePressureKPa", "Discharge pressure", input.dischargePressureKPa],
+    ["suctionPressureKPa", input.suctionPressureKPa],
+    ["liquidPressureKPa", input.liquidPressureKPa],
+    ["dischargePressureKPa", input.dischargePressureKPa],
   ] as const;
-  for (const [field, label, value] of gauges) {
+  for (const [field, value] of gauges) {
     if (value !== undefined && value <= -atmosphere) {
       ctx.addIssue({
         code: "custom",
         path: [field],
-        message: `${label} of ${value} kPa gauge is below a perfect vacuum (${(-atmosphere).toFixed(1)} kPa gauge at this atmospheric pressure)`,
+        message: `${name(field)} of ${value} kPa gauge is below a perfect vacuum (${(-atmosphere).toFixed(1)} kPa gauge at this atmospheric pressure)`,
       });
     }
   }

@@ -11,6 +11,7 @@ import {
   TrendResultSchema,
 } from "./diagnosis.ts";
 import { MAX_CIRCUITS } from "./equipment.ts";
+import { MEASURED_FIELDS, type MeasuredField } from "./reading-fields.ts";
 import { instant } from "./dates.ts";
 import { deviceTime, optionalClientId } from "./device-entries.ts";
 import { isTimeZone } from "../format/date-time.ts";
@@ -93,32 +94,9 @@ const CircuitNumberSchema = z
   .max(MAX_CIRCUITS, `Satura records up to ${MAX_CIRCUITS} circuits`);
 
 /**
- * What a technician measures: the only diagnosis inputs a reading body (and a CSV column) may
- * carry. Everything else the engine needs — refrigerant, metering device, targets, RLA, the
- * atmosphere — the server takes from the equipment and the site (server/visits/reading-input.ts),
- * so a client cannot make a stored finding say what it likes.
+ * The measured values a reading body (and a CSV row) carries: the catalogue's measured fields
+ * (shared/schemas/reading-fields.ts), with the input schema's checks.
  */
-export const MEASURED_FIELDS = [
-  "suctionPressureKPa",
-  "suctionLineTempC",
-  "suctionTempLocation",
-  "dischargePressureKPa",
-  "dischargeLineTempC",
-  "liquidPressureKPa",
-  "liquidLineTempC",
-  "liquidTempLocation",
-  "returnAirDryBulbC",
-  "returnAirWetBulbC",
-  "returnAirRelativeHumidity",
-  "supplyAirDryBulbC",
-  "outdoorAirDryBulbC",
-  "compressorAmps",
-  "runMinutes",
-] as const;
-export type MeasuredField = (typeof MEASURED_FIELDS)[number];
-/** The measured fields that hold a number (all but where the temperatures were taken). */
-export type NumericMeasuredField = Exclude<MeasuredField, "liquidTempLocation" | "suctionTempLocation">;
-
 export const MeasuredValuesSchema = DiagnosisInputObjectSchema.pick(
   Object.fromEntries(MEASURED_FIELDS.map((field) => [field, true])) as Record<MeasuredField, true>,
 );

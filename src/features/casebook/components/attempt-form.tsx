@@ -13,7 +13,8 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { NumberInput, parseDecimal } from "@/components/ui/field/number-input.tsx";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
-import { parseQuantity, unitLabel, type Quantity } from "../utils/quantities.ts";
+import type { Quantity } from "@shared/schemas/reading-fields.ts";
+import { parseQuantity, unitLabel } from "@/lib/units/quantities.ts";
 
 const NUMBER_FIELDS: {
   field: "evaporatingTempC" | "condensingTempC" | "superheatK" | "subcoolingK";

@@ -36,12 +36,11 @@ import { ChargeStateBadge } from "@/components/ui/state/charge-state-badge.tsx";
 import { useRefrigerantTable } from "@/lib/api/refrigerant-tables.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { CASE_READINGS, METERING_LABELS } from "../utils/case-readings.ts";
-import { formatQuantity, parseQuantity, unitLabel, withUnit } from "../utils/quantities.ts";
+import { formatQuantity, parseQuantity, unitLabel, withUnit } from "@/lib/units/quantities.ts";
 import { signedKg } from "../utils/signed-kg.ts";
 import { WorkedSteps } from "./worked-steps.tsx";
 
 type ReadingField = (typeof CASE_READINGS)[number]["field"];
-const REQUIRED: ReadingField[] = ["suctionPressureKPa", "suctionLineTempC", "liquidPressureKPa", "liquidLineTempC"];
 const STORY_FIELDS: { field: keyof CaseStory; label: string; hint: string }[] = [
   { field: "site", label: "Site", hint: "Invented, or a real site with the customer's name left out" },
   { field: "equipment", label: "Equipment", hint: "Kind of unit, refrigerant, metering device, nameplate targets" },
@@ -93,11 +92,11 @@ function toInput(
   const input: Record<string, unknown> = { refrigerant: state.refrigerant, meteringDevice: state.meteringDevice };
   if (state.liquidTempLocation !== "liquid-line") input.liquidTempLocation = state.liquidTempLocation;
   const errors: Record<string, string> = {};
-  for (const { field, label, quantity } of CASE_READINGS) {
+  for (const { field, label, quantity, required } of CASE_READINGS) {
     const parsed = parseQuantity(state.readings[field], quantity, units, atmosphericKPa);
     if (parsed === "invalid") errors[`input.${field}`] = `${label} must be a number`;
     else if (parsed !== undefined) input[field] = Number(parsed.toFixed(3));
-    else if (REQUIRED.includes(field)) errors[`input.${field}`] = `${label} is needed`;
+    else if (required) errors[`input.${field}`] = `${label} is needed`;
   }
   if (atmosphericKPa !== 101.325) input.atmosphericPressureKPa = atmosphericKPa;
   if (state.chargeReference) input.chargeReference = state.chargeReference;
@@ -261,14 +260,14 @@ export function CaseEditor({
             </SelectField>
           </div>
           <div className="grid gap-3 sm:grid-cols-2">
-            {CASE_READINGS.map(({ field, label, quantity }) => {
+            {CASE_READINGS.map(({ field, label, quantity, required }) => {
               const error = errors[`input.${field}`];
               const id = `case-reading-${field}`;
               return (
                 <div key={field} className="space-y-1">
                   <label htmlFor={id} className="block font-medium">
                     {label}
-                    {REQUIRED.includes(field) ? "" : " (optional)"}
+                    {required ? "" : " (optional)"}
                   </label>
                   <NumberInput
                     id={id}

@@ -3,7 +3,7 @@ import type { Case } from "@shared/schemas/casebook.ts";
 import type { ChargeReference } from "@shared/schemas/diagnosis.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { CASE_READINGS, METERING_LABELS } from "../utils/case-readings.ts";
-import { unitLabel, formatQuantity } from "../utils/quantities.ts";
+import { unitLabel, formatQuantity } from "@/lib/units/quantities.ts";
 
 const GROUP_TITLES = {
   refrigerant: "Refrigerant circuit",

@@ -3,7 +3,7 @@ import type { WorkedStep } from "@shared/schemas/casebook.ts";
 import { ChargeStateBadge } from "@/components/ui/state/charge-state-badge.tsx";
 import { ABSOLUTE_LABEL, formatNumber, PRESSURE_DECIMALS, type DisplayUnits } from "@/lib/units/display-units.ts";
 import { pressureToDisplay } from "@shared/engine/index.ts";
-import { withUnit } from "../utils/quantities.ts";
+import { withUnit } from "@/lib/units/quantities.ts";
 
 function Figures({ children }: { children: React.ReactNode }) {
   return <p className="num rounded-card bg-sunken px-3 py-2 text-base">{children}</p>;

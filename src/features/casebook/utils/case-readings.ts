@@ -1,33 +1,38 @@
-import type { DiagnosisInput } from "@shared/schemas/diagnosis.ts";
-import type { Quantity } from "./quantities.ts";
+import {
+  CASE_READING_FIELDS,
+  quantityOf,
+  readingField,
+  READING_FIELDS,
+  type CaseReadingField,
+  type Quantity,
+} from "@shared/schemas/reading-fields.ts";
 
-/** The readings of a case in the order a technician takes them: around the circuit, then air and electrical. */
-export const CASE_READINGS: {
-  field: keyof DiagnosisInput;
+/** The groups a case's readings are told in: refrigerant circuit, air, electrical, nameplate. */
+export type CaseReadingGroup = (typeof READING_FIELDS)[CaseReadingField]["group"];
+
+export interface CaseReading {
+  field: CaseReadingField;
   label: string;
   quantity: Quantity;
-  group: "refrigerant" | "air" | "electrical" | "nameplate";
-}[] = [
-  { field: "suctionPressureKPa", label: "Suction pressure (low side)", quantity: "pressure", group: "refrigerant" },
-  { field: "suctionLineTempC", label: "Suction line temperature", quantity: "temperature", group: "refrigerant" },
-  { field: "dischargePressureKPa", label: "Discharge pressure", quantity: "pressure", group: "refrigerant" },
-  { field: "dischargeLineTempC", label: "Discharge line temperature", quantity: "temperature", group: "refrigerant" },
-  { field: "liquidPressureKPa", label: "Liquid pressure (high side)", quantity: "pressure", group: "refrigerant" },
-  { field: "liquidLineTempC", label: "Liquid line temperature", quantity: "temperature", group: "refrigerant" },
-  { field: "returnAirDryBulbC", label: "Return air dry bulb", quantity: "temperature", group: "air" },
-  { field: "returnAirWetBulbC", label: "Return air wet bulb", quantity: "temperature", group: "air" },
-  { field: "returnAirRelativeHumidity", label: "Return air humidity", quantity: "percent", group: "air" },
-  { field: "supplyAirDryBulbC", label: "Supply air dry bulb", quantity: "temperature", group: "air" },
-  { field: "outdoorAirDryBulbC", label: "Outdoor air (condenser inlet)", quantity: "temperature", group: "air" },
-  { field: "compressorAmps", label: "Compressor current", quantity: "current", group: "electrical" },
-  { field: "compressorRla", label: "Compressor RLA (nameplate)", quantity: "current", group: "nameplate" },
-  { field: "targetSuperheatK", label: "Target superheat (nameplate)", quantity: "difference", group: "nameplate" },
-  { field: "targetSubcoolingK", label: "Target subcooling (nameplate)", quantity: "difference", group: "nameplate" },
-  // The circuit's correct charge lets the engine estimate the charge to add (issue 14).
-  { field: "chargeKg", label: "Correct charge (nameplate plus line set)", quantity: "mass", group: "nameplate" },
-  { field: "liquidLineLengthM", label: "Liquid line length", quantity: "length", group: "nameplate" },
-  { field: "runMinutes", label: "Running time", quantity: "minutes", group: "electrical" },
-];
+  group: CaseReadingGroup;
+  /** A case is not saved without it. */
+  required: boolean;
+}
+
+/**
+ * The readings of a case in the order a technician takes them (around the circuit, then air and
+ * electrical) with what the nameplate says: the catalogue's numbers, measured or from the records.
+ */
+export const CASE_READINGS: readonly CaseReading[] = CASE_READING_FIELDS.map((field) => {
+  const entry = readingField(field);
+  return {
+    field,
+    label: entry.caseLabel ?? entry.label,
+    quantity: quantityOf(field),
+    group: READING_FIELDS[field].group,
+    required: entry.required === true,
+  };
+});
 
 export const METERING_LABELS = {
   txv: "TXV",

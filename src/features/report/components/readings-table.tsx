@@ -1,17 +1,38 @@
 import { chargeStateText } from "@shared/content/charge-states.ts";
+import { quantityOf, readingField, type NumericMeasuredField, type Quantity } from "@shared/schemas/reading-fields.ts";
 import type { Reading } from "@shared/schemas/visits.ts";
-import {
-  DIFFERENCE_LABEL,
-  GAUGE_LABEL,
-  PRESSURE_DECIMALS,
-  TEMPERATURE_LABEL,
-  differenceToDisplay,
-  formatNumber,
-  gaugeToDisplay,
-  temperatureToDisplay,
-  type DisplayUnits,
-} from "@/lib/units/display-units.ts";
+import type { DisplayUnits } from "@/lib/units/display-units.ts";
+import { formatQuantity, unitLabel } from "@/lib/units/quantities.ts";
 import { formatTime } from "@shared/format/date-time.ts";
+
+interface Column {
+  head: string;
+  quantity: Quantity;
+  /** The SI figure, null when there is none, or "n/v" when it is not valid where it was taken. */
+  value: (reading: Reading) => number | null | undefined | "n/v";
+}
+
+/** A measured field's column: its short name and kind of number from the catalogue of reading fields. */
+const measured = (field: NumericMeasuredField): Column => {
+  const { columnLabel, label } = readingField(field);
+  return { head: columnLabel ?? label, quantity: quantityOf(field), value: (reading) => reading.input[field] };
+};
+
+/** The columns after the time, around the circuit: each pressure beside its saturation and margin. */
+const COLUMNS: Column[] = [
+  measured("suctionPressureKPa"),
+  { head: "Evap.", quantity: "temperature", value: (reading) => reading.result.evaporatingTempC },
+  { head: "SH", quantity: "difference", value: (reading) => reading.result.superheatK },
+  measured("liquidPressureKPa"),
+  { head: "Cond.", quantity: "temperature", value: (reading) => reading.result.condensingTempC },
+  {
+    head: "SC",
+    quantity: "difference",
+    // Subcooling read on the discharge line is not valid: said so rather than left blank.
+    value: (reading) => (reading.input.liquidTempLocation === "discharge-line" ? "n/v" : reading.result.subcoolingK),
+  },
+  measured("dischargeLineTempC"),
+];
 
 /** Every reading of one circuit as a table, in the order taken. */
 export function ReadingsTable({
@@ -23,17 +44,6 @@ export function ReadingsTable({
   units: DisplayUnits;
   atmosphericKPa: number;
 }) {
-  const t = TEMPERATURE_LABEL[units.temperature];
-  const k = DIFFERENCE_LABEL[units.temperature];
-  const p = GAUGE_LABEL[units.pressure];
-  const temp = (value: number | null | undefined) =>
-    value == null ? "—" : formatNumber(temperatureToDisplay(value, units.temperature), 1);
-  const diff = (value: number | null | undefined) =>
-    value == null ? "—" : formatNumber(differenceToDisplay(value, units.temperature), 1);
-  const pressure = (value: number | undefined, atmosphere: number) =>
-    value === undefined
-      ? "—"
-      : formatNumber(gaugeToDisplay(value, units.pressure, atmosphere), PRESSURE_DECIMALS[units.pressure]);
   if (readings.length === 0) return <p className="text-muted">No readings on this circuit.</p>;
   return (
     <div className="overflow-x-auto">
@@ -43,27 +53,11 @@ export function ReadingsTable({
             <th scope="col" className="px-2 py-1 text-left">
               Time
             </th>
-            <th scope="col" className="px-2 py-1">
-              Suction {p}
-            </th>
-            <th scope="col" className="px-2 py-1">
-              Evap. {t}
-            </th>
-            <th scope="col" className="px-2 py-1">
-              SH {k}
-            </th>
-            <th scope="col" className="px-2 py-1">
-              Liquid {p}
-            </th>
-            <th scope="col" className="px-2 py-1">
-              Cond. {t}
-            </th>
-            <th scope="col" className="px-2 py-1">
-              SC {k}
-            </th>
-            <th scope="col" className="px-2 py-1">
-              DLT {t}
-            </th>
+            {COLUMNS.map(({ head, quantity }) => (
+              <th key={head} scope="col" className="px-2 py-1">
+                {head} {unitLabel(quantity, units)}
+              </th>
+            ))}
             <th scope="col" className="px-2 py-1 text-left">
               Finding
             </th>
@@ -75,15 +69,18 @@ export function ReadingsTable({
             return (
               <tr key={reading.id} className="border-b border-rule">
                 <td className="px-2 py-1 text-left">{formatTime(reading.takenAt)}</td>
-                <td className="px-2 py-1">{pressure(reading.input.suctionPressureKPa, atmosphere)}</td>
-                <td className="px-2 py-1">{temp(reading.result.evaporatingTempC)}</td>
-                <td className="px-2 py-1">{diff(reading.result.superheatK)}</td>
-                <td className="px-2 py-1">{pressure(reading.input.liquidPressureKPa, atmosphere)}</td>
-                <td className="px-2 py-1">{temp(reading.result.condensingTempC)}</td>
-                <td className="px-2 py-1">
-                  {reading.input.liquidTempLocation === "discharge-line" ? "n/v" : diff(reading.result.subcoolingK)}
-                </td>
-                <td className="px-2 py-1">{temp(reading.input.dischargeLineTempC)}</td>
+                {COLUMNS.map(({ head, quantity, value }) => {
+                  const figure = value(reading);
+                  return (
+                    <td key={head} className="px-2 py-1">
+                      {figure == null
+                        ? "—"
+                        : figure === "n/v"
+                          ? figure
+                          : formatQuantity(figure, quantity, units, atmosphere)}
+                    </td>
+                  );
+                })}
                 <td className="px-2 py-1 text-left font-sans">{chargeStateText[reading.result.chargeState].short}</td>
               </tr>
             );

@@ -4,14 +4,20 @@ import type { DiagnosisResult, LiquidTempLocation, TargetBand } from "@shared/sc
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import {
   DIFFERENCE_LABEL,
-  GAUGE_LABEL,
   TEMPERATURE_LABEL,
   differenceToDisplay,
   formatNumber,
   temperatureToDisplay,
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
-import type { DraftField, ReadingDraft, SuctionLocationChoice } from "../utils/reading-draft.ts";
+import { quantityOf, READING_FIELDS, readingField } from "@shared/schemas/reading-fields.ts";
+import { unitLabel } from "@/lib/units/quantities.ts";
+import {
+  DRAFT_FIELDS,
+  type DraftField,
+  type ReadingDraft,
+  type SuctionLocationChoice,
+} from "../utils/reading-draft.ts";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { Derived, ReadingCard } from "./reading-card.tsx";
 
@@ -29,7 +35,7 @@ interface ReadingCardsProps {
 }
 
 /** The last field on the cards: its Enter ("done" on the keypad) saves the reading. */
-const LAST_FIELD: DraftField = "runMinutes";
+const LAST_FIELD = DRAFT_FIELDS.at(-1);
 
 /**
  * Enter (the keypad's "next") moves to the next reading field with its value selected, so a
@@ -69,7 +75,6 @@ export function ReadingCards({
 }: ReadingCardsProps) {
   const t = TEMPERATURE_LABEL[units.temperature];
   const k = DIFFERENCE_LABEL[units.temperature];
-  const p = GAUGE_LABEL[units.pressure];
   const temp = (value: number | null | undefined) =>
     value == null ? null : formatNumber(temperatureToDisplay(value, units.temperature), 1);
   const diff = (value: number | null | undefined) =>
@@ -78,19 +83,23 @@ export function ReadingCards({
     target
       ? `target ${diff(target.targetK)} ${k} (${diff(target.lowK)}–${diff(target.highK)}, ${target.basis.replace("-", " ")})`
       : undefined;
-  const input = (field: DraftField, label: string, unit: string, hint?: string) => (
-    <NumberField
-      name={field}
-      label={label}
-      unit={unit}
-      value={draft[field]}
-      onValueChange={(value) => onField(field, value)}
-      error={fieldErrors[field]}
-      hint={hint}
-      data-reading-field
-      enterKeyHint={field === LAST_FIELD ? "done" : "next"}
-    />
-  );
+  // Words and unit from the catalogue of reading fields: the card's own where they say more.
+  const input = (field: DraftField) => {
+    const entry = readingField(field);
+    return (
+      <NumberField
+        name={field}
+        label={entry.entryLabel ?? entry.label}
+        unit={entry.entryUnit ?? unitLabel(quantityOf(field), units)}
+        value={draft[field]}
+        onValueChange={(value) => onField(field, value)}
+        error={fieldErrors[field]}
+        hint={entry.entryHint}
+        data-reading-field
+        enterKeyHint={field === LAST_FIELD ? "done" : "next"}
+      />
+    );
+  };
   // The limit depends on the refrigerant and the application: the engine's result carries it.
   const dischargeLimit = result?.dischargeLineLimits.limitC ?? DEFAULT_DISCHARGE_LIMIT_C;
   const dischargeMargin = dischargeLineTempC === undefined ? null : dischargeLimit - dischargeLineTempC;
@@ -121,14 +130,14 @@ export function ReadingCards({
           </div>
         }
       >
-        {input("suctionPressureKPa", "Suction pressure", p)}
-        {input("suctionLineTempC", "Suction line temperature", t)}
+        {input("suctionPressureKPa")}
+        {input("suctionLineTempC")}
         <div className="@lg:col-span-2">
           <CautionLine topic="pressure" point={1} />
         </div>
         <div className="@lg:col-span-2">
           <Segmented<SuctionLocationChoice>
-            label="Where the suction temperature was taken"
+            label={READING_FIELDS.suctionTempLocation.label}
             value={draft.suctionTempLocation}
             onChange={onSuctionLocation}
             options={[
@@ -168,13 +177,8 @@ export function ReadingCards({
           </div>
         }
       >
-        {input("dischargePressureKPa", "Discharge pressure (optional)", p)}
-        {input(
-          "dischargeLineTempC",
-          "Discharge line temperature",
-          t,
-          "Keep this in view: oil breaks down on an overheated discharge",
-        )}
+        {input("dischargePressureKPa")}
+        {input("dischargeLineTempC")}
         <div className="@lg:col-span-2">
           <CautionLine topic="hot-surface" />
         </div>
@@ -207,11 +211,11 @@ export function ReadingCards({
           </div>
         }
       >
-        {input("liquidPressureKPa", "Liquid pressure", p)}
-        {input("liquidLineTempC", "Line temperature for subcooling", t)}
+        {input("liquidPressureKPa")}
+        {input("liquidLineTempC")}
         <div className="@lg:col-span-2">
           <Segmented<LiquidTempLocation>
-            label="Where the temperature was taken"
+            label={READING_FIELDS.liquidTempLocation.entryLabel}
             value={draft.liquidTempLocation}
             onChange={onLocation}
             options={[
@@ -244,11 +248,11 @@ export function ReadingCards({
           </div>
         }
       >
-        {input("returnAirDryBulbC", "Return air dry bulb", t)}
-        {input("returnAirWetBulbC", "Return air wet bulb", t, "Or enter relative humidity below")}
-        {input("returnAirRelativeHumidity", "Return air relative humidity", "% RH")}
-        {input("supplyAirDryBulbC", "Supply air dry bulb", t)}
-        {input("outdoorAirDryBulbC", "Outdoor air (condenser inlet, shade)", t)}
+        {input("returnAirDryBulbC")}
+        {input("returnAirWetBulbC")}
+        {input("returnAirRelativeHumidity")}
+        {input("supplyAirDryBulbC")}
+        {input("outdoorAirDryBulbC")}
       </ReadingCard>
 
       <ReadingCard
@@ -263,13 +267,8 @@ export function ReadingCards({
           />
         }
       >
-        {input("compressorAmps", "Compressor running current", "A")}
-        {input(
-          "runMinutes",
-          "Running since start or last change",
-          "min",
-          "Readings drift for 10–15 min after every change",
-        )}
+        {input("compressorAmps")}
+        {input("runMinutes")}
       </ReadingCard>
     </div>
   );

@@ -2,6 +2,7 @@ import { Mountain, Save } from "lucide-react";
 import { useLayoutEffect, useMemo, useRef, useState, type FocusEvent } from "react";
 import type { LiquidTempLocation } from "@shared/schemas/diagnosis.ts";
 import type { SuctionLocationChoice } from "../utils/reading-draft.ts";
+import { readingField } from "@shared/schemas/reading-fields.ts";
 import type { Atmosphere, MeasuredValues, Visit } from "@shared/schemas/visits.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
@@ -42,11 +43,10 @@ import { formatTime } from "@shared/format/date-time.ts";
 // drawn with its finding, so that it never delays them on a slow link.
 const AdjustmentForm = lazyPanel(() => import("./adjustment-form.tsx"), "AdjustmentForm", { afterFirstScreen: true });
 
-const FIELD_LABELS: Partial<Record<DraftField, string>> = {
-  suctionPressureKPa: "suction pressure",
-  suctionLineTempC: "suction line temperature",
-  liquidPressureKPa: "liquid pressure",
-  liquidLineTempC: "liquid line temperature",
+/** A field's name within a sentence: "Enter the suction pressure first". */
+const nameInSentence = (field: DraftField) => {
+  const { label } = readingField(field);
+  return label.charAt(0).toLowerCase() + label.slice(1);
 };
 
 interface RunLogProps {
@@ -126,7 +126,7 @@ export function RunLog({ visit, circuit, context, isBlend, units, atmosphere, ca
     if (reading.kind !== "valid") {
       setFormError(
         reading.kind === "incomplete" && reading.missing.length > 0
-          ? `Enter the ${reading.missing.map((field) => FIELD_LABELS[field] ?? field).join(", ")} first`
+          ? `Enter the ${reading.missing.map(nameInSentence).join(", ")} first`
           : reading.kind === "invalid" && reading.formError
             ? reading.formError
             : "Check the fields marked below",

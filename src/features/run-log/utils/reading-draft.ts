@@ -1,41 +1,18 @@
 import type { DiagnosisInput, LiquidTempLocation, SuctionTempLocation } from "@shared/schemas/diagnosis.ts";
-import { parseDecimal } from "@/components/ui/field/number-input.tsx";
 import {
-  formatNumber,
-  gaugeFromDisplay,
-  gaugeToDisplay,
-  PRESSURE_DECIMALS,
-  temperatureFromDisplay,
-  temperatureToDisplay,
-  type DisplayUnits,
-} from "@/lib/units/display-units.ts";
+  NUMERIC_MEASURED_FIELDS,
+  quantityOf,
+  REQUIRED_MEASURED_FIELDS,
+  type NumericMeasuredField,
+} from "@shared/schemas/reading-fields.ts";
+import { parseDecimal } from "@/components/ui/field/number-input.tsx";
+import type { DisplayUnits } from "@/lib/units/display-units.ts";
+import { formatQuantity, toSi } from "@/lib/units/quantities.ts";
 
-/** What each typed field is, so it converts from display units to the engine's SI-metric. */
-type FieldKind = "pressure" | "temperature" | "percent" | "current" | "minutes";
-
-export const DRAFT_FIELDS = {
-  suctionPressureKPa: "pressure",
-  suctionLineTempC: "temperature",
-  dischargePressureKPa: "pressure",
-  dischargeLineTempC: "temperature",
-  liquidPressureKPa: "pressure",
-  liquidLineTempC: "temperature",
-  returnAirDryBulbC: "temperature",
-  returnAirWetBulbC: "temperature",
-  returnAirRelativeHumidity: "percent",
-  supplyAirDryBulbC: "temperature",
-  outdoorAirDryBulbC: "temperature",
-  compressorAmps: "current",
-  runMinutes: "minutes",
-} as const satisfies Partial<Record<keyof DiagnosisInput, FieldKind>>;
-
-export type DraftField = keyof typeof DRAFT_FIELDS;
-export const REQUIRED_FIELDS: DraftField[] = [
-  "suctionPressureKPa",
-  "suctionLineTempC",
-  "liquidPressureKPa",
-  "liquidLineTempC",
-];
+/** The fields typed on the run log's form: every measured number, from the catalogue of reading fields. */
+export const DRAFT_FIELDS = NUMERIC_MEASURED_FIELDS;
+export type DraftField = NumericMeasuredField;
+export const REQUIRED_FIELDS: readonly DraftField[] = REQUIRED_MEASURED_FIELDS;
 
 /** Where the suction temperature was taken; "" when the technician did not say. */
 export type SuctionLocationChoice = SuctionTempLocation | "";
@@ -47,7 +24,7 @@ export type ReadingDraft = Record<DraftField, string> & {
 };
 
 export function emptyDraft(): ReadingDraft {
-  const draft = Object.fromEntries(Object.keys(DRAFT_FIELDS).map((key) => [key, ""])) as Record<DraftField, string>;
+  const draft = Object.fromEntries(DRAFT_FIELDS.map((key) => [key, ""])) as Record<DraftField, string>;
   return { ...draft, liquidTempLocation: "liquid-line", suctionTempLocation: "" };
 }
 
@@ -58,15 +35,9 @@ export function draftFromInput(
   atmosphericKPa: number,
 ): ReadingDraft {
   const draft = emptyDraft();
-  for (const [key, kind] of Object.entries(DRAFT_FIELDS) as [DraftField, FieldKind][]) {
+  for (const key of DRAFT_FIELDS) {
     const value = input[key];
-    if (typeof value !== "number") continue;
-    draft[key] =
-      kind === "pressure"
-        ? formatNumber(gaugeToDisplay(value, units.pressure, atmosphericKPa), PRESSURE_DECIMALS[units.pressure])
-        : kind === "temperature"
-          ? formatNumber(temperatureToDisplay(value, units.temperature), 1)
-          : String(value);
+    if (typeof value === "number") draft[key] = formatQuantity(value, quantityOf(key), units, atmosphericKPa);
   }
   draft.liquidTempLocation = input.liquidTempLocation ?? "liquid-line";
   draft.suctionTempLocation = input.suctionTempLocation ?? "";
@@ -91,7 +62,7 @@ export function parseDraft(draft: ReadingDraft, units: DisplayUnits, atmospheric
   };
   const typingErrors: ParsedDraft["typingErrors"] = {};
   const missing: DraftField[] = [];
-  for (const [key, kind] of Object.entries(DRAFT_FIELDS) as [DraftField, FieldKind][]) {
+  for (const key of DRAFT_FIELDS) {
     const parsed = parseDecimal(draft[key]);
     if (parsed === undefined) {
       if (REQUIRED_FIELDS.includes(key)) missing.push(key);
@@ -101,12 +72,12 @@ export function parseDraft(draft: ReadingDraft, units: DisplayUnits, atmospheric
       typingErrors[key] = "Type a number, e.g. 520 or -3.5";
       continue;
     }
+    const quantity = quantityOf(key);
+    // A converted figure is kept to 3 decimals (the conversion leaves float noise); a count as typed.
     values[key] =
-      kind === "pressure"
-        ? Number(gaugeFromDisplay(parsed, units.pressure, atmosphericKPa).toFixed(3))
-        : kind === "temperature"
-          ? Number(temperatureFromDisplay(parsed, units.temperature).toFixed(3))
-          : parsed;
+      quantity === "pressure" || quantity === "temperature"
+        ? Number(toSi(parsed, quantity, units, atmosphericKPa).toFixed(3))
+        : parsed;
   }
   return { values, typingErrors, missing };
 }

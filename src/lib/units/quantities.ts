@@ -1,3 +1,10 @@
+/**
+ * Numbers shown and typed in the user's display units; storage stays SI-metric. What a number is
+ * (its `Quantity`) comes from the catalogue of reading fields (shared/schemas/reading-fields.ts).
+ * Charge (kg) and line length (m) are shown metric whatever the display units: the display
+ * settings have no mass or length unit yet.
+ */
+import type { Quantity } from "@shared/schemas/reading-fields.ts";
 import { parseDecimal } from "@/components/ui/field/number-input.tsx";
 import {
   DIFFERENCE_LABEL,
@@ -12,14 +19,6 @@ import {
   temperatureToDisplay,
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
-
-/**
- * What a number is, so it shows and converts in the user's display units; storage stays SI-metric.
- * Charge (kg) and line length (m) are shown metric whatever the display units: the display
- * settings have no mass or length unit yet.
- */
-export type Quantity =
-  "pressure" | "temperature" | "difference" | "current" | "minutes" | "percent" | "mass" | "length";
 
 export function unitLabel(quantity: Quantity, units: DisplayUnits): string {
   switch (quantity) {
