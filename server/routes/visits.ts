@@ -152,9 +152,11 @@ export function visitsRouter({
     sendEntry(res, { reading }, replayed);
   });
 
-  // CSV import: preview first (nothing stored), then store all rows only if every row is
-  // valid, or store the valid rows when the user explicitly accepts skipping the others. The
-  // file is parsed and judged in a worker thread; the rows are stored in slices.
+  // CSV import: store all rows only if every row is valid, or the valid rows when the user
+  // explicitly accepts skipping the others; "preview" judges the file and stores nothing (the
+  // run log previews its columns in the browser and sends the file once, to import it). The
+  // file is parsed and judged in a worker thread, whatever the browser made of it; the rows are
+  // stored in slices.
   router.post("/:id/readings/import", csvUpload, async (req, res) => {
     const { organisationId, user } = getAuth(res);
     const visit = await loadVisit(db, organisationId, req.params.id);

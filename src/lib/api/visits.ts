@@ -18,7 +18,7 @@ import {
   type VisitCreate,
   type VoidBody,
 } from "@shared/schemas/visits.ts";
-import { ImportSummarySchema, type ImportSummary } from "@shared/schemas/readings-import.ts";
+import { ImportSummarySchema, type ColumnMapping, type ImportSummary } from "@shared/schemas/readings-import.ts";
 import { VisitPageSchema, type VisitListParams, type VisitPage } from "@shared/schemas/list-pages.ts";
 import { ApiError, apiRequest, formWithFile, UPLOAD_TIMEOUT_MS } from "./api-client.ts";
 import { listQueryString } from "./list-params.ts";
@@ -140,7 +140,10 @@ export async function uploadPhoto({ visitId, file, ...fields }: PhotoFields & { 
   ).photo;
 }
 
-/** Previews or stores a CSV series; a 422 (problems, nothing stored) still returns its summary. */
+/**
+ * Imports a CSV series with its column mapping (the browser previews the file itself, so it is
+ * sent once); a 422 (problems, nothing stored) still returns its summary.
+ */
 export async function importReadings({
   visitId,
   file,
@@ -151,15 +154,15 @@ export async function importReadings({
   visitId: string;
   file: File;
   circuit: number;
-  mode: "preview" | "all" | "valid-only";
-  mapping?: Record<string, string>;
+  mode: "all" | "valid-only";
+  mapping: ColumnMapping;
 }): Promise<ImportSummary> {
   const form = new FormData();
   form.append("circuit", String(circuit));
   // Today's local midnight, so a logger's "10:05" lands on the right instant.
   form.append("dayStart", localDayStart(new Date()));
   form.append("mode", mode);
-  if (mapping) form.append("mapping", JSON.stringify(mapping));
+  form.append("mapping", JSON.stringify(mapping));
   form.append("file", file);
   const response = await fetch(`/api/visits/${visitId}/readings/import`, {
     method: "POST",
