@@ -52,6 +52,19 @@ export default tseslint.config(
     },
   },
   {
+    // convert-units is imported by one module; everything else calls its convertMeasure (decision 043).
+    files: ["**/*.{ts,tsx,js,mjs}"],
+    ignores: ["shared/engine/units/convert-measure.ts"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        {
+          paths: [{ name: "convert-units", message: "Call convertMeasure (shared/engine/units/convert-measure.ts)." }],
+        },
+      ],
+    },
+  },
+  {
     files: ["src/**/*.{ts,tsx}"],
     plugins: { "react-hooks": reactHooks, "@tanstack/query": tanstackQuery },
     rules: {

@@ -46,7 +46,7 @@ registerBench("CSV import (5 000 rows) and /api/health meanwhile", async () => {
   const database = await openDatabase(env.DATA_DIR);
   await seedDemoData(database.db);
   const logger = createLogger(env);
-  const mailer = await createMailer({ env, db: database.db, logger });
+  const mailer = createMailer({ env, db: database.db, logger });
   const server = createServer(
     createApp({ db: database.db, env, logger, mailer, photoStore: createLocalPhotoStore(env.UPLOADS_DIR) }),
   );

@@ -51,7 +51,7 @@ registerBench("Open visit refresh (10 000 readings): whole, 304, delta", async (
   const database = await openDatabase(env.DATA_DIR);
   await seedDemoData(database.db);
   const logger = createLogger(env);
-  const mailer = await createMailer({ env, db: database.db, logger });
+  const mailer = createMailer({ env, db: database.db, logger });
   const server = createServer(
     createApp({ db: database.db, env, logger, mailer, photoStore: createLocalPhotoStore(env.UPLOADS_DIR) }),
   );

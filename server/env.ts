@@ -59,7 +59,7 @@ const EnvSchema = z.object({
    * and it is an allowed Origin for state-changing requests. Defaults to http://localhost:PORT.
    */
   APP_URL: z.url({ protocol: /^https?$/ }).optional(),
-  /** Real outgoing mail. Without SMTP_HOST an in-process fake SMTP server receives every message. */
+  /** Real outgoing mail. Without SMTP_HOST every message is composed and caught in-process, never delivered. */
   SMTP_HOST: z.string().min(1).optional(),
   SMTP_PORT: z.coerce.number().int().min(1).max(65_535).default(587),
   SMTP_USER: z.string().min(1).optional(),
@@ -67,12 +67,12 @@ const EnvSchema = z.object({
   /** Sender of every message, e.g. "Satura <no-reply@example.com>". */
   MAIL_FROM: z.string().min(3).default("Satura <no-reply@satura.localhost>"),
   /**
-   * Shows the Outbox (mail caught by the fake SMTP server) to owners. On by default outside
+   * Shows the Outbox (mail caught for want of SMTP_HOST) to owners. On by default outside
    * production; never available when a real SMTP host is configured.
    */
   OUTBOX_ENABLED: z.enum(["true", "false", "1", "0"]).optional(),
   /**
-   * A folder where the built-in fake mail server also writes each message it catches, one
+   * A folder where each message caught for want of SMTP_HOST is also written, one
    * file each: the mailbox of people who cannot read the Outbox (an invitee, a colleague whose
    * reset link the Outbox hides). For development and the browser tests; ignored with SMTP_HOST.
    */

@@ -76,9 +76,12 @@ if (env.NODE_ENV === "development") {
   closeVite = () => vite.close();
 }
 
-// Real SMTP from SMTP_HOST, else a fake SMTP server inside this process (development, tests).
-const mailer = await createMailer({ env, db: database.db, logger });
-if (mailer.fakeSmtp) logger.info(`fake SMTP server on ${mailer.fakeSmtp.host}:${mailer.fakeSmtp.port}`);
+// Real SMTP from SMTP_HOST, else mail is composed and caught in this process (Outbox, MAIL_DROP_DIR).
+const mailer = createMailer({ env, db: database.db, logger });
+if (!env.SMTP_HOST)
+  logger.info(
+    `no SMTP_HOST: e-mail is caught, never delivered${env.MAIL_DROP_DIR ? `, and written to ${env.MAIL_DROP_DIR}` : ""}`,
+  );
 
 // Photos in a local folder or a bucket (PHOTO_STORE). A store not ready yet is reported, not fatal,
 // and never holds up listening: the bucket may come up after the app, and readiness says so meanwhile.

@@ -3,7 +3,7 @@ import type { Logger } from "pino";
 import type { Database } from "../db/client.ts";
 import { recordOutboundMail } from "../db/outbox.ts";
 import type { Env } from "../env.ts";
-import { startFakeSmtp, type FakeSmtp } from "./fake-smtp.ts";
+import { createMailCatcher, type CaughtMail } from "./mail-catcher.ts";
 
 export interface MailMessage {
   to: string;
@@ -15,24 +15,34 @@ export interface MailMessage {
 }
 
 /**
- * The one way Satura sends e-mail (invitations, password resets, and later visit reports).
- * `send` resolves once the SMTP server has accepted the message and throws if it refuses.
+ * The one way Satura sends e-mail (invitations, password resets, visit reports).
+ * `send` resolves once the SMTP server has accepted the message (or the catcher has kept it)
+ * and throws if it refuses.
  */
 export interface Mailer {
   send: (message: MailMessage) => Promise<void>;
-  /** True when mail goes to the in-process fake server and owners may read it in the Outbox. */
+  /** True when mail is caught rather than delivered and owners may read it in the Outbox. */
   readonly outboxEnabled: boolean;
-  /** The fake SMTP server, when mail is not going to a real host (development and tests). */
-  readonly fakeSmtp?: FakeSmtp;
   close: () => Promise<void>;
 }
 
 /**
  * Builds the mailer from the environment: nodemailer over SMTP to SMTP_HOST when it is set,
- * otherwise to a fake SMTP server started here, inside the app's process. Mail sent through
- * the fake server is also written to outbound_mail, so the Outbox page can list it.
+ * otherwise nodemailer's stream transport, which composes each message and delivers none
+ * (server/mail/mail-catcher.ts). Caught mail is also written to outbound_mail, so the Outbox
+ * page can list it; `onCaught` hands each caught message to the caller (the tests' mailbox).
  */
-export async function createMailer({ env, db, logger }: { env: Env; db: Database; logger: Logger }): Promise<Mailer> {
+export function createMailer({
+  env,
+  db,
+  logger,
+  onCaught,
+}: {
+  env: Env;
+  db: Database;
+  logger: Logger;
+  onCaught?: (mail: CaughtMail) => void;
+}): Mailer {
   if (env.SMTP_HOST) {
     const transport = nodemailer.createTransport({
       host: env.SMTP_HOST,
@@ -52,26 +62,16 @@ export async function createMailer({ env, db, logger }: { env: Env; db: Database
   }
 
   if (env.NODE_ENV === "production") {
-    logger.warn("SMTP_HOST is not set: e-mail goes to the built-in fake mail server and is never delivered");
+    logger.warn("SMTP_HOST is not set: e-mail is composed but never delivered");
   }
-  const fakeSmtp = await startFakeSmtp({ dropDir: env.MAIL_DROP_DIR });
-  const transport = nodemailer.createTransport({
-    host: fakeSmtp.host,
-    port: fakeSmtp.port,
-    secure: false,
-    ignoreTLS: true,
-  });
+  const catcher = createMailCatcher({ dropDir: env.MAIL_DROP_DIR, onCaught });
   return {
     outboxEnabled: env.outboxEnabled,
-    fakeSmtp,
     async send({ to, subject, text, html, organisationId = null }) {
-      await transport.sendMail({ from: env.MAIL_FROM, to, subject, text, html });
+      await catcher.send({ from: env.MAIL_FROM, to, subject, text, html });
       // Kept only in this mode: the messages hold sign-in links and must not pile up in production.
       await recordOutboundMail(db, { to, subject, text, html: html ?? null, organisationId });
     },
-    async close() {
-      transport.close();
-      await fakeSmtp.close();
-    },
+    close: async () => {},
   };
 }

@@ -19,7 +19,7 @@ test.describe("invitations", () => {
     await expect(page.getByRole("status")).toContainText(`Invitation sent to ${email}`);
     await expect(page.getByRole("region", { name: "Waiting to join" })).toContainText(email);
 
-    // The fake SMTP server caught the mail; the owner sees it on the Outbox page, but not its
+    // The mail was caught (no SMTP_HOST); the owner sees it on the Outbox page, but not its
     // working link, which is the invitee's alone (issue 13, item 11).
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Outbox" }).click();
     const mail = page.getByRole("article", { name: `Mail to ${email}: Join Bellbird Mechanical on Satura` });

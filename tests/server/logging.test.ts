@@ -53,7 +53,7 @@ describe("request log", () => {
     expect((await agent.get("/api/equipment")).status).toBe(200);
     expect((await agent.get("/api/visits/not-a-visit")).status).toBe(404);
     await request(testApp.app).post("/api/auth/password-reset/request").send({ email: BELLBIRD.owner });
-    const mail = await testApp.smtp.waitFor(
+    const mail = await testApp.mailbox.waitFor(
       (message) => message.to.includes(BELLBIRD.owner) && message.decoded.includes("reset-password"),
     );
     const resetToken = linkIn(mail.decoded).searchParams.get("token")!;

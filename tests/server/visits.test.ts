@@ -216,7 +216,7 @@ describe("visits and the run log API", () => {
       .post(`/api/visits/${visitId}/report/send`)
       .send({ to: "facilities@wattlelane.example" });
     expect(sent.status).toBe(200);
-    const mail = await testApp.smtp.waitFor((message) => message.to.includes("facilities@wattlelane.example"));
+    const mail = await testApp.mailbox.waitFor((message) => message.to.includes("facilities@wattlelane.example"));
     // The subject is RFC 2047-encoded (it holds an em dash); the text part reads plainly.
     expect(mail.decoded).toMatch(/Subject: =\?UTF-8\?Q\?Service_report:_RTU-1/);
     expect(mail.decoded).toContain("RTU-1 packaged rooftop unit");
@@ -235,7 +235,7 @@ describe("visits and the run log API", () => {
     await technician
       .post(`/api/visits/${visitId}/report/send`)
       .send({ to: "zoned@wattlelane.example", timeZone: "Australia/Sydney" });
-    const zoned = await testApp.smtp.waitFor((message) => message.to.includes("zoned@wattlelane.example"));
+    const zoned = await testApp.mailbox.waitFor((message) => message.to.includes("zoned@wattlelane.example"));
     expect(zoned.decoded).toMatch(/Started \d{1,2} [A-Z][a-z]{2} \d{4}, [0-2]\d:[0-5]\d \(Australia\/Sydney time\)/);
     expect((await apprentice.post(`/api/visits/${visitId}/report/send`).send({ to: "x@example.com" })).status).toBe(
       403,

@@ -61,7 +61,7 @@ export async function signUpOtherCompany(app: Express, email = "owner@coldfront.
   return { agent, user: response.body.user as { id: string; organisationId: string } };
 }
 
-/** The first URL in a mail caught by the fake SMTP server. */
+/** The first URL in a caught mail (decoded text). */
 export function linkIn(decodedMail: string): URL {
   const match = decodedMail.match(/https?:\/\/[^\s"<>]+/);
   if (!match) throw new Error("no link in the mail");

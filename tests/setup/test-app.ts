@@ -7,9 +7,9 @@ import { readEnv } from "@server/env.ts";
 import { createLogger } from "@server/logger.ts";
 import { createMailer, type Mailer } from "@server/mail/mailer.ts";
 import type { ReadinessCheck } from "@server/routes/readiness.ts";
-import type { FakeSmtp } from "@server/mail/fake-smtp.ts";
 import { createPhotoStore } from "@server/photos/create-photo-store.ts";
 import type { PhotoStore } from "@server/photos/photo-store.ts";
+import { createMailbox, type Mailbox } from "./mailbox.ts";
 import { startS3TestStore } from "./photo-stores.ts";
 import { createTestDatabase } from "./test-database.ts";
 
@@ -17,8 +17,8 @@ export interface TestApp {
   app: Express;
   database: DatabaseHandle;
   mailer: Mailer;
-  /** The in-process SMTP server that receives every message the app sends. */
-  smtp: FakeSmtp;
+  /** Every message the app sends, caught by nodemailer's stream transport. */
+  mailbox: Mailbox;
   /** Where this app keeps photos: UPLOADS_DIR, or the bucket PHOTO_STORE=s3 names. */
   photoStore: PhotoStore;
   close: () => Promise<void>;
@@ -36,7 +36,7 @@ export interface TestAppOptions {
   isShuttingDown?: () => boolean;
 }
 
-/** The real app in-process over a fresh database, as the server builds it, with a fake SMTP server. */
+/** The real app in-process over a fresh database, as the server builds it, with a mailbox for what it sends. */
 export async function createTestApp(options: TestAppOptions = {}): Promise<TestApp> {
   const database = await createTestDatabase();
   // TEST_PHOTO_STORE=s3 runs every test that does not pick a store with photos in a bucket of an
@@ -52,7 +52,8 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     ...options.env,
   });
   const logger = createLogger(env, options.logDestination);
-  const mailer = await createMailer({ env, db: database.db, logger });
+  const mailbox = createMailbox();
+  const mailer = createMailer({ env, db: database.db, logger, onCaught: mailbox.receive });
   const photoStore = await createPhotoStore(env.photoStore);
   const app = createApp({
     db: database.db,
@@ -70,7 +71,7 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     app,
     database,
     mailer,
-    smtp: mailer.fakeSmtp!,
+    mailbox,
     photoStore,
     close: async () => {
       photoStore.close();

@@ -1,4 +1,4 @@
-import convert from "convert-units";
+import { convertMeasure } from "./convert-measure.ts";
 
 export const PRESSURE_UNITS = ["Pa", "kPa", "MPa", "bar", "psi", "torr", "inHg", "micron"] as const;
 export type PressureUnit = (typeof PRESSURE_UNITS)[number];
@@ -6,17 +6,17 @@ export type PressureUnit = (typeof PRESSURE_UNITS)[number];
 type LibraryUnit = "Pa" | "kPa" | "MPa" | "bar" | "psi" | "torr";
 
 function toLibrary(value: number, unit: PressureUnit): { value: number; unit: LibraryUnit } {
-  if (unit === "inHg") return { value: convert(value).from("in").to("mm"), unit: "torr" };
+  if (unit === "inHg") return { value: convertMeasure(value, "in", "mm"), unit: "torr" };
   if (unit === "micron") return { value: value / 1000, unit: "torr" };
   return { value, unit };
 }
 
 function fromTorr(valueTorr: number, unit: "inHg" | "micron"): number {
-  return unit === "inHg" ? convert(valueTorr).from("mm").to("in") : valueTorr * 1000;
+  return unit === "inHg" ? convertMeasure(valueTorr, "mm", "in") : valueTorr * 1000;
 }
 
 /**
- * Pressure conversion for display, through the convert-units package (no
+ * Pressure conversion for display, through the convert-units package (`convertMeasure`; no
  * hand-written factors): Pa, kPa, MPa, bar, psi and torr come straight from it;
  * inHg is torr → mmHg (1 torr = 1 mmHg to 1.4e-7, below display precision) and
  * mm → in via convert-units' length table; "micron" is the vacuum-gauge micron of
@@ -36,8 +36,8 @@ export function convertPressure(value: number, from: PressureUnit, to: PressureU
   if (from === to) return value;
   const source = toLibrary(value, from);
   if (to === "inHg" || to === "micron") {
-    const torr = source.unit === "torr" ? source.value : convert(source.value).from(source.unit).to("torr");
+    const torr = source.unit === "torr" ? source.value : convertMeasure(source.value, source.unit, "torr");
     return fromTorr(torr, to);
   }
-  return source.unit === to ? source.value : convert(source.value).from(source.unit).to(to);
+  return source.unit === to ? source.value : convertMeasure(source.value, source.unit, to);
 }

@@ -1,10 +1,10 @@
-import convert from "convert-units";
+import { convertMeasure } from "./convert-measure.ts";
 
 export const TEMPERATURE_UNITS = ["C", "F", "K"] as const;
 export type TemperatureUnit = (typeof TEMPERATURE_UNITS)[number];
 
 /**
- * Temperature conversion for display through convert-units: °C, °F and K.
+ * Temperature conversion for display through convert-units (`convertMeasure`): °C, °F and K.
  *
  * @param value temperature in `from` units, finite
  * @param from "C", "F" or "K"
@@ -16,5 +16,5 @@ export type TemperatureUnit = (typeof TEMPERATURE_UNITS)[number];
 export function convertTemperature(value: number, from: TemperatureUnit, to: TemperatureUnit): number {
   if (!Number.isFinite(value)) throw new Error("convertTemperature requires a finite number");
   if (from === to) return value;
-  return convert(value).from(from).to(to);
+  return convertMeasure(value, from, to);
 }

@@ -22,6 +22,18 @@ import { blendModel, mixturePackMissingReason, mixturePackPresent, PSEUDO_PURE_B
 
 const KELVIN = 273.15;
 
+/** README §9.4 prints pressures to 0.001 kPa: half a unit of that digit, plus 2e-7 relative for the convergence criteria. */
+const REGRESSION_PRESSURE_KPA = { printed: 0.0005, relative: 2e-7 } as const;
+/** README §9.4 prints ρ' to 0.01 kg/m³: half a unit of that digit, plus 1e-7 relative for the convergence criteria. */
+const REGRESSION_DENSITY_KG_PER_M3 = { printed: 0.005, relative: 1e-7 } as const;
+/** README §6 h' and s' before the IIR shift: the source library's ideal-gas parts differ by "a few J/mol" (README §7.3). */
+const SHIPPED_REFERENCE_ENTHALPY_KJ_PER_KG = 0.05;
+const SHIPPED_REFERENCE_ENTROPY_KJ_PER_KG_K = 2e-4;
+/** Issue 9: the mixture model fails beyond 0.5 % of Lemmon's (2003) published pseudo-pure pressures. */
+const PSEUDO_PURE_PRESSURE_RELATIVE = 0.005;
+/** Lemmon's pseudo-critical point is a fit's, not the mixture's own, so only closeness is asked, K. */
+const PSEUDO_CRITICAL_TEMPERATURE_K = 0.1;
+
 /** README §9.4: p_bub / p_dew (kPa) at −20, 0, 40 °C and ρ' (kg/m³) at the 0 °C bubble point. */
 const REGRESSION: Record<string, [number, number, number, number, number, number, number]> = {
   R404A: [307.1, 300.192, 610.192, 600.33, 1829.414, 1814.645, 1150.01],
@@ -58,7 +70,9 @@ describe.skipIf(!mixturePackPresent)(
     it.each(Object.keys(REGRESSION))("%s reproduces the pack's regression values (README §9.4)", (id) => {
       const expected = REGRESSION[id]!;
       const within = (valueKPa: number, target: number) =>
-        expect(Math.abs(valueKPa - target)).toBeLessThanOrEqual(0.0005 + 2e-7 * target);
+        expect(Math.abs(valueKPa - target)).toBeLessThanOrEqual(
+          REGRESSION_PRESSURE_KPA.printed + REGRESSION_PRESSURE_KPA.relative * target,
+        );
       [-20, 0, 40].forEach((celsius, k) => {
         const bubble = pointAt(id, "bubble", celsius + KELVIN);
         const dew = pointAt(id, "dew", celsius + KELVIN);
@@ -67,7 +81,9 @@ describe.skipIf(!mixturePackPresent)(
         expect(bubble.p).toBeGreaterThanOrEqual(dew.p);
         if (celsius === 0) {
           const rhoLiquid = bubble.bulkDensity * blendModel(id).molarMass;
-          expect(Math.abs(rhoLiquid - expected[6]!)).toBeLessThanOrEqual(0.005 + 1e-7 * expected[6]!);
+          expect(Math.abs(rhoLiquid - expected[6]!)).toBeLessThanOrEqual(
+            REGRESSION_DENSITY_KG_PER_M3.printed + REGRESSION_DENSITY_KG_PER_M3.relative * expected[6]!,
+          );
         }
       });
     });
@@ -89,8 +105,8 @@ describe.skipIf(!mixturePackPresent)(
       blend.model.entropyOffset = 0;
       const caloric = blend.model.caloric(KELVIN, bubble.bulkDensity, blend.moleFractions);
       [blend.model.enthalpyOffset, blend.model.entropyOffset] = saved;
-      expect(Math.abs(caloric.h / blend.molarMass / 1000 - h)).toBeLessThan(0.05);
-      expect(Math.abs(caloric.s / blend.molarMass / 1000 - s)).toBeLessThan(2e-4);
+      expect(Math.abs(caloric.h / blend.molarMass / 1000 - h)).toBeLessThan(SHIPPED_REFERENCE_ENTHALPY_KJ_PER_KG);
+      expect(Math.abs(caloric.s / blend.molarMass / 1000 - s)).toBeLessThan(SHIPPED_REFERENCE_ENTROPY_KJ_PER_KG_K);
     });
 
     const worstDeviation = new Map<string, { bubble: number; dew: number }>();
@@ -114,8 +130,8 @@ describe.skipIf(!mixturePackPresent)(
         console.info(
           `${id} mixture model vs Lemmon 2003 pL/pV, −40…+50 °C: bubble ${(worst.bubble * 100).toFixed(3)} %, dew ${(worst.dew * 100).toFixed(3)} %`,
         );
-        expect(worst.bubble).toBeLessThan(0.005);
-        expect(worst.dew).toBeLessThan(0.005);
+        expect(worst.bubble).toBeLessThan(PSEUDO_PURE_PRESSURE_RELATIVE);
+        expect(worst.dew).toBeLessThan(PSEUDO_PURE_PRESSURE_RELATIVE);
       },
     );
 
@@ -132,8 +148,8 @@ describe.skipIf(!mixturePackPresent)(
           [pointAt(id, "bubble", critical.T - 12)],
         );
         const found = blendCriticalPoint(blend, curve[curve.length - 1]!);
-        expect(Math.abs(found.T - critical.T)).toBeLessThan(0.1);
-        expect(Math.abs(found.p / critical.p - 1)).toBeLessThan(0.005);
+        expect(Math.abs(found.T - critical.T)).toBeLessThan(PSEUDO_CRITICAL_TEMPERATURE_K);
+        expect(Math.abs(found.p / critical.p - 1)).toBeLessThan(PSEUDO_PURE_PRESSURE_RELATIVE);
       },
     );
   },

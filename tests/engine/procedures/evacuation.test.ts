@@ -3,6 +3,14 @@ import { analyseDecay, evacuationReached, micronsToPa, paToMicrons } from "@shar
 
 type Sample = { minutes: number; microns: number };
 
+// Digits for toBeCloseTo, which passes when |actual − expected| < 0.5 × 10^−digits.
+/** [S60] prints 1 micron = 0.133322 Pa: half a unit of its last digit. */
+const S60_PA_DIGITS = 6;
+/** 133.322 Pa back to microns: the printed factor's rounding (5e-7 Pa per micron) times 1000, with margin. */
+const S60_MICRONS_DIGITS = 2;
+/** A reading converted there and back: float rounding alone. */
+const ROUND_TRIP_DIGITS = 6;
+
 /** Readings every `stepMinutes` from 0 to `endMinutes` of a curve `microns(t)`. */
 function sampled(microns: (minutes: number) => number, endMinutes = 20, stepMinutes = 2): Sample[] {
   const samples: Sample[] = [];
@@ -13,8 +21,8 @@ function sampled(microns: (minutes: number) => number, endMinutes = 20, stepMinu
 
 describe("micronsToPa / paToMicrons", () => {
   it("uses 1 micron = 1 mTorr = 0.133322 Pa [S60]", () => {
-    expect(micronsToPa(1)).toBeCloseTo(0.133322, 6);
-    expect(paToMicrons(133.322)).toBeCloseTo(1000, 2);
+    expect(micronsToPa(1)).toBeCloseTo(0.133322, S60_PA_DIGITS);
+    expect(paToMicrons(133.322)).toBeCloseTo(1000, S60_MICRONS_DIGITS);
   });
 
   it("matches the conversion table of the trade notes §4.2 (computed from [S60]) to its printed precision", () => {
@@ -29,7 +37,7 @@ describe("micronsToPa / paToMicrons", () => {
     ];
     for (const [microns, pa, halfUnit] of table) {
       expect(Math.abs(micronsToPa(microns) - pa)).toBeLessThanOrEqual(halfUnit);
-      expect(paToMicrons(micronsToPa(microns))).toBeCloseTo(microns, 6);
+      expect(paToMicrons(micronsToPa(microns))).toBeCloseTo(microns, ROUND_TRIP_DIGITS);
     }
   });
 });

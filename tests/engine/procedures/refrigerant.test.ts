@@ -12,6 +12,13 @@ const KG_PER_LB = 0.45359237;
 /** 1 lb/ft³ in kg/m³. */
 const KG_PER_M3_PER_LB_PER_FT3 = 16.018463;
 
+/** [S79]'s liquid densities come from a maker's data sheet of its day, ours from current equations of state: relative. */
+const DATA_SHEET_DENSITY_RELATIVE = 0.01;
+/** [S79] gives tank contents in whole pounds: half a pound either way. */
+const WHOLE_POUND_ROUNDING_LB = 0.5;
+/** [S79]'s 7.7 kg, to its tenths: toBeCloseTo digits. */
+const EXAMPLE_KG_DIGITS = 1;
+
 describe("refrigerantBalance", () => {
   it("gives how far short the system was and what it holds after the visit (by hand)", () => {
     // Nameplate 2.4 kg; recovered 1.6 kg (0.8 kg short); all 1.6 kg reused, 0.8 kg new added → back to 2.4 kg.
@@ -44,8 +51,8 @@ describe("cylinderFillLimit", () => {
     // here come from the current equations of state. R22 agrees to 0.2 %, R410A to 0.7 %.
     const at130F = (130 - 32) / 1.8;
     const lbPerFt3 = (id: string) => saturatedState(id, at130F).liquidDensityKgPerM3 / KG_PER_M3_PER_LB_PER_FT3;
-    expect(Math.abs(lbPerFt3("R22") / 66.17 - 1)).toBeLessThan(0.01);
-    expect(Math.abs(lbPerFt3("R410A") / 54.7 - 1)).toBeLessThan(0.01);
+    expect(Math.abs(lbPerFt3("R22") / 66.17 - 1)).toBeLessThan(DATA_SHEET_DENSITY_RELATIVE);
+    expect(Math.abs(lbPerFt3("R410A") / 54.7 - 1)).toBeLessThan(DATA_SHEET_DENSITY_RELATIVE);
   });
 
   it("agrees with the 30-lb-class tank example: ≤ 17 lb (7.7 kg) R410A and ≤ 21 lb (9.5 kg) R22 at 54 °C [S79]", () => {
@@ -56,9 +63,9 @@ describe("cylinderFillLimit", () => {
     const waterCapacityKg = (17 * KG_PER_LB) / perKgOfWater;
     const r410a = cylinderFillLimit({ waterCapacityKg, refrigerant: "R410A" });
     const r22 = cylinderFillLimit({ waterCapacityKg, refrigerant: "R22" });
-    expect(r410a.maxContentsKg).toBeCloseTo(7.7, 1);
-    expect(Math.abs(r22.maxContentsKg / KG_PER_LB - 21)).toBeLessThanOrEqual(0.5);
-    expect(Math.abs(r22.maxContentsKg - 9.5)).toBeLessThanOrEqual(0.5 * KG_PER_LB);
+    expect(r410a.maxContentsKg).toBeCloseTo(7.7, EXAMPLE_KG_DIGITS);
+    expect(Math.abs(r22.maxContentsKg / KG_PER_LB - 21)).toBeLessThanOrEqual(WHOLE_POUND_ROUNDING_LB);
+    expect(Math.abs(r22.maxContentsKg - 9.5)).toBeLessThanOrEqual(WHOLE_POUND_ROUNDING_LB * KG_PER_LB);
     // The implied water capacity is a plausible 30-lb-class tank (about 24–26 lb of water, memory).
     expect(waterCapacityKg / KG_PER_LB).toBeGreaterThan(23);
     expect(waterCapacityKg / KG_PER_LB).toBeLessThan(27);

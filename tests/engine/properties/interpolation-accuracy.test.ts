@@ -7,6 +7,7 @@
  */
 import { afterAll, describe, expect, it } from "vitest";
 import { resolveRefrigerant } from "@shared/engine/properties/resolve-refrigerant.ts";
+import { SATURATED_TABLE_TOLERANCES } from "../../setup/tolerances.ts";
 import { referencePackMissingReason, referencePackPresent } from "./reference-pack.ts";
 import {
   INTERPOLATION_TOLERANCE_K,
@@ -82,10 +83,18 @@ describe.skipIf(!referencePackPresent)(
           const temperatureC = 0.5 * (rows[i]! + rows[i + 1]!);
           const eos = saturationStateAt(model, temperatureC + KELVIN_OFFSET);
           const table = saturatedState(id, temperatureC);
-          expect(Math.abs(table.liquidDensityKgPerM3 / (eos.liquidDensity * M) - 1)).toBeLessThan(2e-4);
-          expect(Math.abs(table.vapourDensityKgPerM3 / (eos.vapourDensity * M) - 1)).toBeLessThan(2e-3);
-          expect(Math.abs(table.liquidEnthalpyKJPerKg - eos.liquidEnthalpy / M / 1000)).toBeLessThan(0.05);
-          expect(Math.abs(table.vapourEnthalpyKJPerKg - eos.vapourEnthalpy / M / 1000)).toBeLessThan(0.05);
+          expect(Math.abs(table.liquidDensityKgPerM3 / (eos.liquidDensity * M) - 1)).toBeLessThan(
+            SATURATED_TABLE_TOLERANCES.liquidDensityRelative,
+          );
+          expect(Math.abs(table.vapourDensityKgPerM3 / (eos.vapourDensity * M) - 1)).toBeLessThan(
+            SATURATED_TABLE_TOLERANCES.vapourDensityRelative,
+          );
+          expect(Math.abs(table.liquidEnthalpyKJPerKg - eos.liquidEnthalpy / M / 1000)).toBeLessThan(
+            SATURATED_TABLE_TOLERANCES.enthalpyKJPerKg,
+          );
+          expect(Math.abs(table.vapourEnthalpyKJPerKg - eos.vapourEnthalpy / M / 1000)).toBeLessThan(
+            SATURATED_TABLE_TOLERANCES.enthalpyKJPerKg,
+          );
         }
       },
     );

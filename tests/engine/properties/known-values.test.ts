@@ -14,6 +14,25 @@ import {
   saturationTemperature,
 } from "@shared/engine/index.ts";
 
+/** Normal boiling points recalled from the NIST WebBook / ASHRAE tables (printed to 0.01 K), not re-read, K. */
+const RECALLED_BOILING_POINT_K = 0.05;
+/** Critical temperatures: the tables carry the EOS papers' constants (printed to 0.001 K or finer), K. */
+const EOS_CRITICAL_TEMPERATURE_K = 1e-3;
+/** Saturation pressures recalled from the NIST WebBook (four or five figures), not re-read: relative. */
+const RECALLED_PRESSURE_RELATIVE = 2e-3;
+/** README §9.2 at 0 °C, printed to 0.0001 kPa: half a unit of that digit, with room for binary rounding. */
+const README_PRESSURE_KPA = 6e-5;
+/** README §9.2 liquid density, printed to 0.001 kg/m³: half a unit, with room for binary rounding. */
+const README_LIQUID_DENSITY_KG_PER_M3 = 6e-4;
+/** README §9.2 vapour density, printed to 0.0001 kg/m³: half a unit, with room for binary rounding. */
+const README_VAPOUR_DENSITY_KG_PER_M3 = 6e-5;
+/** README §9.2 h'', printed to 0.001 kJ/kg: one unit, as R717 and R1234ze(E) combine it with a printed shift (README §6). */
+const README_ENTHALPY_KJ_PER_KG = 0.001;
+/** h' = 200 kJ/kg at 0 °C by definition of the IIR reference (README §6): only the generator's arithmetic is left, kJ/kg. */
+const IIR_REFERENCE_KJ_PER_KG = 1e-4;
+/** Blend bubble/dew temperatures from Lemmon's (2003) pL/pV equations via README §9.2, printed to 0.001 K, K. */
+const PUBLISHED_BLEND_BOILING_K = 0.002;
+
 describe("refrigerant tables against published values", () => {
   it("lists every refrigerant of the reference pack, R13I1 included", () => {
     const ids = listRefrigerants().map((r) => r.id);
@@ -61,8 +80,8 @@ describe("refrigerant tables against published values", () => {
   it.each(normalBoilingPoints)(
     "%s boils at %f °C at one atmosphere (NIST WebBook / ASHRAE, from memory)",
     (id, expected) => {
-      expect(Math.abs(saturationTemperature(id, 101.325) - expected)).toBeLessThan(0.05);
-      expect(Math.abs(getRefrigerant(id).normalBoilingPoint!.dewC - expected)).toBeLessThan(0.05);
+      expect(Math.abs(saturationTemperature(id, 101.325) - expected)).toBeLessThan(RECALLED_BOILING_POINT_K);
+      expect(Math.abs(getRefrigerant(id).normalBoilingPoint!.dewC - expected)).toBeLessThan(RECALLED_BOILING_POINT_K);
     },
   );
 
@@ -80,7 +99,9 @@ describe("refrigerant tables against published values", () => {
     ["R123", 456.83],
   ];
   it.each(criticalTemperaturesK)("%s has its critical point at %f K (EOS paper, README §9.1)", (id, kelvin) => {
-    expect(Math.abs(getRefrigerant(id).criticalPoint.temperatureC - (kelvin - 273.15))).toBeLessThan(1e-3);
+    expect(Math.abs(getRefrigerant(id).criticalPoint.temperatureC - (kelvin - 273.15))).toBeLessThan(
+      EOS_CRITICAL_TEMPERATURE_K,
+    );
   });
 
   it("stops each table just below its critical point (issue 3)", () => {
@@ -112,7 +133,7 @@ describe("refrigerant tables against published values", () => {
     ["R600a", 0, 156.9],
   ];
   it.each(pressures)("%s at %f °C saturates at %f kPa (NIST WebBook, from memory)", (id, temperatureC, kPa) => {
-    expect(relativeDifference(saturationPressure(id, temperatureC), kPa)).toBeLessThan(2e-3);
+    expect(relativeDifference(saturationPressure(id, temperatureC), kPa)).toBeLessThan(RECALLED_PRESSURE_RELATIVE);
   });
 
   // 0 °C saturation states implied by the EOS. Source: ../shared/reference/README.md §9.2
@@ -144,15 +165,14 @@ describe("refrigerant tables against published values", () => {
   it.each(zeroCelsius)(
     "%s at 0 °C matches README §9.2 (p %f / %f kPa)",
     (id, bubble, dew, liquid, vapour, vapourEnthalpy) => {
-      // tolerances: half a unit in the last digit README §9.2 prints
       const state = saturatedState(id, 0);
-      expect(Math.abs(state.bubblePressureKPa - bubble)).toBeLessThan(6e-5);
-      expect(Math.abs(state.dewPressureKPa - dew)).toBeLessThan(6e-5);
-      expect(Math.abs(state.liquidDensityKgPerM3 - liquid)).toBeLessThan(6e-4);
-      expect(Math.abs(state.vapourDensityKgPerM3 - vapour)).toBeLessThan(6e-5);
-      expect(Math.abs(state.vapourEnthalpyKJPerKg - vapourEnthalpy)).toBeLessThan(0.001);
+      expect(Math.abs(state.bubblePressureKPa - bubble)).toBeLessThan(README_PRESSURE_KPA);
+      expect(Math.abs(state.dewPressureKPa - dew)).toBeLessThan(README_PRESSURE_KPA);
+      expect(Math.abs(state.liquidDensityKgPerM3 - liquid)).toBeLessThan(README_LIQUID_DENSITY_KG_PER_M3);
+      expect(Math.abs(state.vapourDensityKgPerM3 - vapour)).toBeLessThan(README_VAPOUR_DENSITY_KG_PER_M3);
+      expect(Math.abs(state.vapourEnthalpyKJPerKg - vapourEnthalpy)).toBeLessThan(README_ENTHALPY_KJ_PER_KG);
       // IIR reference state: h' = 200 kJ/kg at 0 °C (README §6)
-      expect(Math.abs(state.liquidEnthalpyKJPerKg - 200)).toBeLessThan(1e-4);
+      expect(Math.abs(state.liquidEnthalpyKJPerKg - 200)).toBeLessThan(IIR_REFERENCE_KJ_PER_KG);
     },
   );
 
@@ -167,8 +187,12 @@ describe("refrigerant tables against published values", () => {
   it.each(blendBoiling)(
     "%s bubbles at %f K and is dew at %f K at 101.325 kPa (Lemmon 2003 via README §9.2)",
     (id, bubbleK, dewK) => {
-      expect(Math.abs(saturationTemperature(id, 101.325, "bubble") - (bubbleK - 273.15))).toBeLessThan(0.002);
-      expect(Math.abs(saturationTemperature(id, 101.325, "dew") - (dewK - 273.15))).toBeLessThan(0.002);
+      expect(Math.abs(saturationTemperature(id, 101.325, "bubble") - (bubbleK - 273.15))).toBeLessThan(
+        PUBLISHED_BLEND_BOILING_K,
+      );
+      expect(Math.abs(saturationTemperature(id, 101.325, "dew") - (dewK - 273.15))).toBeLessThan(
+        PUBLISHED_BLEND_BOILING_K,
+      );
     },
   );
 

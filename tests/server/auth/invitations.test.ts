@@ -16,7 +16,7 @@ describe("invitations", () => {
   afterAll(() => testApp.close());
 
   const tokenFor = async (email: string) => {
-    const mail = await testApp.smtp.waitFor((message) => message.to.includes(email));
+    const mail = await testApp.mailbox.waitFor((message) => message.to.includes(email));
     return linkIn(mail.decoded).searchParams.get("token")!;
   };
 
@@ -30,7 +30,7 @@ describe("invitations", () => {
     });
     expect(response.body.invitation.token).toBeUndefined();
 
-    const mail = await testApp.smtp.waitFor((message) => message.to.includes("casey@bellbird.example"));
+    const mail = await testApp.mailbox.waitFor((message) => message.to.includes("casey@bellbird.example"));
     expect(mail.decoded).toContain("Subject: Join Bellbird Mechanical on Satura");
     expect(linkIn(mail.decoded).pathname).toBe("/accept-invitation");
 
@@ -124,7 +124,7 @@ describe("invitations", () => {
   it("replaces a pending invitation when the same address is invited again", async () => {
     await owner.post("/api/invitations").send({ email: "twice@bellbird.example", role: "apprentice" });
     const first = await tokenFor("twice@bellbird.example");
-    testApp.smtp.messages.length = 0;
+    testApp.mailbox.messages.length = 0;
     await owner.post("/api/invitations").send({ email: "twice@bellbird.example", role: "technician" });
     const second = await tokenFor("twice@bellbird.example");
     expect((await request(testApp.app).post("/api/invitations/preview").send({ token: first })).status).toBe(404);
@@ -137,7 +137,7 @@ describe("invitations", () => {
   });
 
   it("lets an owner revoke an invitation, after which its link is dead", async () => {
-    testApp.smtp.messages.length = 0;
+    testApp.mailbox.messages.length = 0;
     const created = await owner
       .post("/api/invitations")
       .send({ email: "revoked@bellbird.example", role: "apprentice" });

@@ -14,10 +14,10 @@ describe("development outbox", () => {
   });
   afterAll(() => testApp.close());
 
-  it("lists, for an owner, the mail the fake SMTP server received for that company", async () => {
+  it("lists, for an owner, the mail caught for that company", async () => {
     const owner = await signedIn(testApp.app, BELLBIRD.owner);
     await owner.post("/api/invitations").send({ email: "outbox-check@bellbird.example", role: "technician" });
-    await testApp.smtp.waitFor((mail) => mail.to.includes("outbox-check@bellbird.example"));
+    await testApp.mailbox.waitFor((mail) => mail.to.includes("outbox-check@bellbird.example"));
     const response = await owner.get("/api/outbox");
     expect(response.status).toBe(200);
     expect(response.body.messages[0]).toMatchObject({
@@ -36,7 +36,9 @@ describe("development outbox", () => {
     }
     const sent = await Promise.all(
       ["newcomer@bellbird.example", BELLBIRD.technician, BELLBIRD.senior, BELLBIRD.owner].map(async (to) => {
-        const mail = await testApp.smtp.waitFor((message) => message.to.includes(to) && /token=/.test(message.decoded));
+        const mail = await testApp.mailbox.waitFor(
+          (message) => message.to.includes(to) && /token=/.test(message.decoded),
+        );
         return { to, token: linkIn(mail.decoded).searchParams.get("token")! };
       }),
     );
@@ -72,7 +74,7 @@ describe("development outbox", () => {
       await seedBellbird(dropping);
       const owner = await signedIn(dropping.app, BELLBIRD.owner);
       await owner.post("/api/invitations").send({ email: "dropped@bellbird.example", role: "technician" });
-      const mail = await dropping.smtp.waitFor((message) => message.to.includes("dropped@bellbird.example"));
+      const mail = await dropping.mailbox.waitFor((message) => message.to.includes("dropped@bellbird.example"));
       const files = readdirSync(folder).map((name) => readFileSync(join(folder, name), "utf8"));
       expect(files).toHaveLength(1);
       expect(files[0]).toMatch(/^To: dropped@bellbird\.example/m);

@@ -16,7 +16,7 @@ describe("password reset", () => {
   afterAll(() => testApp.close());
 
   const requestReset = (email: string) => request(testApp.app).post("/api/auth/password-reset/request").send({ email });
-  const mailTo = (email: string) => testApp.smtp.waitFor((mail) => mail.to.includes(email));
+  const mailTo = (email: string) => testApp.mailbox.waitFor((mail) => mail.to.includes(email));
   const tokenFrom = async (email: string) => linkIn((await mailTo(email)).decoded).searchParams.get("token")!;
 
   it("answers a known and an unknown address identically, and mails only the known one", async () => {
@@ -34,7 +34,7 @@ describe("password reset", () => {
     expect(link.pathname).toBe("/reset-password");
     // Give a stray mail a moment to show up before asserting none did.
     await new Promise((resolve) => setTimeout(resolve, 200));
-    expect(testApp.smtp.messages.some((message) => message.to.includes("nobody@bellbird.example"))).toBe(false);
+    expect(testApp.mailbox.messages.some((message) => message.to.includes("nobody@bellbird.example"))).toBe(false);
   });
 
   it("stores only a hash of the token, which expires after an hour", async () => {
@@ -77,7 +77,7 @@ describe("password reset", () => {
   it("makes an earlier link useless when a newer one is sent", async () => {
     await requestReset(BELLBIRD.apprentice);
     const first = await tokenFrom(BELLBIRD.apprentice);
-    testApp.smtp.messages.length = 0;
+    testApp.mailbox.messages.length = 0;
     await requestReset(BELLBIRD.apprentice);
     const second = await tokenFrom(BELLBIRD.apprentice);
     expect(second).not.toBe(first);
@@ -92,7 +92,7 @@ describe("password reset", () => {
   });
 
   it("refuses an expired link", async () => {
-    testApp.smtp.messages.length = 0;
+    testApp.mailbox.messages.length = 0;
     await requestReset(BELLBIRD.technician);
     const token = await tokenFrom(BELLBIRD.technician);
     await testApp.database.db
