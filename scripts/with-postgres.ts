@@ -10,9 +10,9 @@
  */
 import { spawn, spawnSync } from "node:child_process";
 import { chownSync, existsSync, mkdtempSync, readdirSync, rmSync } from "node:fs";
-import { createServer } from "node:net";
 import { tmpdir, userInfo } from "node:os";
 import { join } from "node:path";
+import { freePort } from "./local-servers/free-port.ts";
 
 const POSTGRES_ROOT = "/usr/lib/postgresql";
 
@@ -23,20 +23,6 @@ function findBinaries(): string | undefined {
     .filter((version) => existsSync(join(POSTGRES_ROOT, version, "bin", "initdb")))
     .sort((a, b) => Number(b) - Number(a));
   return versions[0] ? join(POSTGRES_ROOT, versions[0], "bin") : undefined;
-}
-
-/** A port nothing listens on right now (the kernel's pick). */
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.once("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() =>
-        typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port")),
-      );
-    });
-  });
 }
 
 // PostgreSQL refuses to run as root, so as root the server runs as the `postgres` user the package creates.

@@ -6,7 +6,7 @@
  * Needs TEST_DATABASE_URL, a PostgreSQL server this may create a database on;
  * `npm run bench:api -- --postgres` starts a throwaway one (scripts/with-postgres.ts) and runs this.
  */
-import { databaseUrl, dropDatabase, onServer } from "../../tests/setup/postgres-test-server.ts";
+import { databaseUrl, dropDatabase, onServer } from "../../scripts/local-servers/postgres-admin.ts";
 import { measureSaving, openVisitsForSaving, type SaveLevel } from "./save-reading.ts";
 import { startServer, type BenchServer } from "./server-process.ts";
 

@@ -3,8 +3,8 @@
  * given data folder, signs the demo people in, and reads its memory through bench/api/memory-probe.ts.
  */
 import { spawn, type ChildProcess } from "node:child_process";
-import { createServer } from "node:net";
 import { fileURLToPath } from "node:url";
+import { freePort } from "../../scripts/local-servers/free-port.ts";
 import { SESSION_COOKIE_NAME } from "../../server/auth/lucia.ts";
 
 export const DEMO_PASSWORD = "bellbird-demo-2026";
@@ -21,17 +21,6 @@ export interface BenchServer {
   cpu: () => Promise<NodeJS.CpuUsage>;
   signIn: (email: string) => Promise<string>;
   stop: () => Promise<void>;
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once("error", reject);
-    probe.listen(0, "127.0.0.1", () => {
-      const address = probe.address();
-      probe.close(() => resolve(typeof address === "object" && address ? address.port : 0));
-    });
-  });
 }
 
 async function waitForHealth(origin: string, child: ChildProcess, timeoutMs: number) {

@@ -14,7 +14,7 @@ import { LIVE_REFRESH_MS } from "@/lib/api/visits.ts";
 import { READING_BODY } from "../../bench/api/save-reading.ts";
 import { startServer, DEMO_PASSWORD, type BenchServer } from "../../bench/api/server-process.ts";
 import { startS3TestStore, type TestPhotoStore } from "../setup/photo-stores.ts";
-import { databaseUrl, dropDatabase, onServer } from "../setup/postgres-test-server.ts";
+import { databaseUrl, dropDatabase, onServer } from "../../scripts/local-servers/postgres-admin.ts";
 
 const adminUrl = process.env.TEST_DATABASE_URL;
 if (!adminUrl) {

@@ -3,7 +3,8 @@
  * worker starts, and drops it after the run. Without it (PGlite), does nothing.
  */
 import { openPostgres } from "@server/db/postgres-client.ts";
-import { databaseUrl, dropDatabase, onServer, TEMPLATE_DATABASE, testServerUrl } from "./postgres-test-server.ts";
+import { databaseUrl, dropDatabase, onServer } from "../../scripts/local-servers/postgres-admin.ts";
+import { TEMPLATE_DATABASE, testServerUrl } from "./postgres-test-server.ts";
 
 export async function setup(): Promise<void> {
   const serverUrl = testServerUrl();

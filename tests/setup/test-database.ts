@@ -1,7 +1,8 @@
 import { PGlite } from "@electric-sql/pglite";
 import { attachDatabase, PGLITE_EXTENSIONS, type DatabaseHandle } from "@server/db/client.ts";
 import { openPostgres } from "@server/db/postgres-client.ts";
-import { databaseUrl, dropDatabase, onServer, TEMPLATE_DATABASE, testServerUrl } from "./postgres-test-server.ts";
+import { databaseUrl, dropDatabase, onServer } from "../../scripts/local-servers/postgres-admin.ts";
+import { TEMPLATE_DATABASE, testServerUrl } from "./postgres-test-server.ts";
 
 /** Which database the tests run on: PGlite, or the PostgreSQL server at TEST_DATABASE_URL. */
 export const testDatabaseKind: DatabaseHandle["kind"] = testServerUrl() ? "postgres" : "pglite";
