@@ -11,6 +11,7 @@ import { RouteError } from "@/components/errors/route-error.tsx";
 import { paths } from "@/config/paths.ts";
 import { requireSessionLoader } from "@/features/auth/utils/session-loaders.ts";
 import { keptDataRestored } from "@/features/offline/persist-queries.ts";
+import { meQueryOptions } from "@/lib/api/auth.ts";
 
 interface RouteModule {
   default: ComponentType;
@@ -28,7 +29,7 @@ interface RouteModule {
  * (a section, a filter, a page) does not run the loader again: the screen's first render had its
  * data, and a list fetches its next page or filter itself, keeping the last one on screen.
  */
-function lazyRoute(queryClient: QueryClient, load: () => Promise<RouteModule>) {
+function lazyRoute(queryClient: QueryClient, load: () => Promise<RouteModule>, { signedIn = false } = {}) {
   return async () => {
     const module = await load();
     const loader = module.clientLoader?.(queryClient);
@@ -38,6 +39,9 @@ function lazyRoute(queryClient: QueryClient, load: () => Promise<RouteModule>) {
         loader &&
         (async (args: LoaderFunctionArgs) => {
           await keptDataRestored();
+          // React Router runs the signed-in frame's session check beside this loader: without a
+          // session that check sends the person to sign in, and the screen asks for nothing.
+          if (signedIn && !(await queryClient.ensureQueryData(meQueryOptions()).catch(() => null))) return null;
           // The screens read the query cache, not the loader's value; the router wants one all the same.
           return (await loader(args)) ?? null;
         }),
@@ -48,6 +52,7 @@ function lazyRoute(queryClient: QueryClient, load: () => Promise<RouteModule>) {
 }
 
 export function createRouter(queryClient: QueryClient) {
+  const screen = (load: () => Promise<RouteModule>) => lazyRoute(queryClient, load, { signedIn: true });
   return createBrowserRouter([
     {
       // Public account screens: no session needed, no app navigation.
@@ -85,49 +90,28 @@ export function createRouter(queryClient: QueryClient) {
           errorElement: <RouteError />,
           // One line per screen.
           children: [
-            { path: paths.home.path, lazy: lazyRoute(queryClient, () => import("./routes/home.tsx")) },
-            { path: paths.tables.path, lazy: lazyRoute(queryClient, () => import("./routes/pt-tables.tsx")) },
-            { path: paths.tables.detail.path, lazy: lazyRoute(queryClient, () => import("./routes/pt-table.tsx")) },
-            { path: paths.safety.path, lazy: lazyRoute(queryClient, () => import("./routes/safety.tsx")) },
-            { path: paths.jobs.path, lazy: lazyRoute(queryClient, () => import("./routes/jobs.tsx")) },
-            { path: paths.equipment.path, lazy: lazyRoute(queryClient, () => import("./routes/equipment-list.tsx")) },
-            {
-              path: paths.equipment.new.path,
-              lazy: lazyRoute(queryClient, () => import("./routes/equipment-new.tsx")),
-            },
-            {
-              path: paths.equipment.detail.path,
-              lazy: lazyRoute(queryClient, () => import("./routes/equipment-detail.tsx")),
-            },
-            { path: paths.visits.detail.path, lazy: lazyRoute(queryClient, () => import("./routes/visit.tsx")) },
-            { path: paths.visits.report.path, lazy: lazyRoute(queryClient, () => import("./routes/visit-report.tsx")) },
-            { path: paths.casebook.path, lazy: lazyRoute(queryClient, () => import("./routes/casebook.tsx")) },
-            {
-              path: paths.casebook.new.path,
-              lazy: lazyRoute(queryClient, () => import("./routes/casebook-editor.tsx")),
-            },
-            {
-              path: paths.casebook.team.path,
-              lazy: lazyRoute(queryClient, () => import("./routes/casebook-team.tsx")),
-            },
-            {
-              path: paths.casebook.case.path,
-              lazy: lazyRoute(queryClient, () => import("./routes/casebook-case.tsx")),
-            },
-            {
-              path: paths.casebook.edit.path,
-              lazy: lazyRoute(queryClient, () => import("./routes/casebook-editor.tsx")),
-            },
-            { path: paths.cylinders.path, lazy: lazyRoute(queryClient, () => import("./routes/cylinders.tsx")) },
-            { path: paths.register.path, lazy: lazyRoute(queryClient, () => import("./routes/register.tsx")) },
-            {
-              path: paths.companySettings.path,
-              lazy: lazyRoute(queryClient, () => import("./routes/company-settings.tsx")),
-            },
-            { path: paths.members.path, lazy: lazyRoute(queryClient, () => import("./routes/members.tsx")) },
-            { path: paths.profile.path, lazy: lazyRoute(queryClient, () => import("./routes/profile.tsx")) },
-            { path: paths.outbox.path, lazy: lazyRoute(queryClient, () => import("./routes/outbox.tsx")) },
-            { path: "*", lazy: lazyRoute(queryClient, () => import("./routes/not-found.tsx")) },
+            { path: paths.home.path, lazy: screen(() => import("./routes/home.tsx")) },
+            { path: paths.tables.path, lazy: screen(() => import("./routes/pt-tables.tsx")) },
+            { path: paths.tables.detail.path, lazy: screen(() => import("./routes/pt-table.tsx")) },
+            { path: paths.safety.path, lazy: screen(() => import("./routes/safety.tsx")) },
+            { path: paths.jobs.path, lazy: screen(() => import("./routes/jobs.tsx")) },
+            { path: paths.equipment.path, lazy: screen(() => import("./routes/equipment-list.tsx")) },
+            { path: paths.equipment.new.path, lazy: screen(() => import("./routes/equipment-new.tsx")) },
+            { path: paths.equipment.detail.path, lazy: screen(() => import("./routes/equipment-detail.tsx")) },
+            { path: paths.visits.detail.path, lazy: screen(() => import("./routes/visit.tsx")) },
+            { path: paths.visits.report.path, lazy: screen(() => import("./routes/visit-report.tsx")) },
+            { path: paths.casebook.path, lazy: screen(() => import("./routes/casebook.tsx")) },
+            { path: paths.casebook.new.path, lazy: screen(() => import("./routes/casebook-editor.tsx")) },
+            { path: paths.casebook.team.path, lazy: screen(() => import("./routes/casebook-team.tsx")) },
+            { path: paths.casebook.case.path, lazy: screen(() => import("./routes/casebook-case.tsx")) },
+            { path: paths.casebook.edit.path, lazy: screen(() => import("./routes/casebook-editor.tsx")) },
+            { path: paths.cylinders.path, lazy: screen(() => import("./routes/cylinders.tsx")) },
+            { path: paths.register.path, lazy: screen(() => import("./routes/register.tsx")) },
+            { path: paths.companySettings.path, lazy: screen(() => import("./routes/company-settings.tsx")) },
+            { path: paths.members.path, lazy: screen(() => import("./routes/members.tsx")) },
+            { path: paths.profile.path, lazy: screen(() => import("./routes/profile.tsx")) },
+            { path: paths.outbox.path, lazy: screen(() => import("./routes/outbox.tsx")) },
+            { path: "*", lazy: screen(() => import("./routes/not-found.tsx")) },
           ],
         },
       ],
