@@ -94,8 +94,6 @@ export const caseQueryOptions = (id: string) =>
   queryOptions({
     queryKey: ["cases", "detail", id],
     queryFn: ({ signal }) => getCase(id, signal),
-    // The editor of a new case has no id: "/cases/" would fetch the whole list.
-    enabled: id !== "",
     // A generated case never changes: its id is its seed.
     staleTime: id.startsWith("gen~") ? Infinity : undefined,
   });
