@@ -1,55 +1,58 @@
 import type { QueryClient } from "@tanstack/react-query";
 import type { ComponentType } from "react";
-import { createBrowserRouter, type LoaderFunction, type LoaderFunctionArgs } from "react-router-dom";
+import {
+  createBrowserRouter,
+  type LoaderFunction,
+  type LoaderFunctionArgs,
+  type ShouldRevalidateFunctionArgs,
+} from "react-router-dom";
 import { AuthLayout } from "@/components/layouts/auth-layout.tsx";
 import { RouteError } from "@/components/errors/route-error.tsx";
 import { paths } from "@/config/paths.ts";
 import { requireSessionLoader } from "@/features/auth/utils/session-loaders.ts";
 import { keptDataRestored } from "@/features/offline/persist-queries.ts";
+import { meQueryOptions } from "@/lib/api/auth.ts";
 
 interface RouteModule {
   default: ComponentType;
-  /** A route that needs data before render exports a loader factory taking the QueryClient. */
+  /**
+   * A screen that needs data before render exports a loader factory taking the QueryClient; the
+   * loader calls `ensureQueryData` with the options the screen reads through `useSuspenseQuery`
+   * (decision 040).
+   */
   clientLoader?: (queryClient: QueryClient) => LoaderFunction;
 }
 
-/** Each screen is its own chunk, loaded when first visited. */
-function lazyRoute(queryClient: QueryClient, load: () => Promise<RouteModule>) {
+/**
+ * Each screen is its own chunk, loaded when first visited, with its loader. Offline, the screen's
+ * data is what the device kept: put back before any loader looks. A change of the search alone
+ * (a section, a filter, a page) does not run the loader again: the screen's first render had its
+ * data, and a list fetches its next page or filter itself, keeping the last one on screen.
+ */
+function lazyRoute(queryClient: QueryClient, load: () => Promise<RouteModule>, { signedIn = false } = {}) {
   return async () => {
     const module = await load();
-    return { Component: module.default, loader: module.clientLoader?.(queryClient) };
-  };
-}
-
-/**
- * A screen whose data the router starts itself: React Router runs a route's own loader beside
- * its lazy chunk, so the requests (and the refrigerant table) go out while the screen's script
- * downloads instead of after it. The loaders live in one small module of their own.
- */
-/** The case editor starts a new case on R410A (case-editor.tsx). */
-const NEW_CASE_REFRIGERANT = "R410A";
-
-type ScreenData = typeof import("@/lib/api/screen-data.ts");
-const screenData = () => import("@/lib/api/screen-data.ts");
-
-function screen(
-  queryClient: QueryClient,
-  load: () => Promise<RouteModule>,
-  prefetch: (data: ScreenData, queryClient: QueryClient, params: LoaderFunctionArgs["params"]) => Promise<unknown>,
-) {
-  return {
-    // Offline, the screen's data is what the device kept: put back before the loader looks.
-    loader: async ({ params }: LoaderFunctionArgs) => {
-      const [data] = await Promise.all([screenData(), keptDataRestored()]);
-      return prefetch(data, queryClient, params);
-    },
-    // The object form tells the router that the chunk brings only the component, so it runs the
-    // loader at once instead of after the chunk.
-    lazy: { Component: async () => (await load()).default },
+    const loader = module.clientLoader?.(queryClient);
+    return {
+      Component: module.default,
+      loader:
+        loader &&
+        (async (args: LoaderFunctionArgs) => {
+          await keptDataRestored();
+          // React Router runs the signed-in frame's session check beside this loader: without a
+          // session that check sends the person to sign in, and the screen asks for nothing.
+          if (signedIn && !(await queryClient.ensureQueryData(meQueryOptions()).catch(() => null))) return null;
+          // The screens read the query cache, not the loader's value; the router wants one all the same.
+          return (await loader(args)) ?? null;
+        }),
+      shouldRevalidate: ({ currentUrl, nextUrl, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) =>
+        currentUrl.pathname !== nextUrl.pathname && defaultShouldRevalidate,
+    };
   };
 }
 
 export function createRouter(queryClient: QueryClient) {
+  const screen = (load: () => Promise<RouteModule>) => lazyRoute(queryClient, load, { signedIn: true });
   return createBrowserRouter([
     {
       // Public account screens: no session needed, no app navigation.
@@ -87,86 +90,28 @@ export function createRouter(queryClient: QueryClient) {
           errorElement: <RouteError />,
           // One line per screen.
           children: [
-            { path: paths.home.path, lazy: lazyRoute(queryClient, () => import("./routes/home.tsx")) },
-            { path: paths.tables.path, lazy: lazyRoute(queryClient, () => import("./routes/pt-tables.tsx")) },
-            {
-              path: paths.tables.detail.path,
-              ...screen(
-                queryClient,
-                () => import("./routes/pt-table.tsx"),
-                (data, client, params) => data.prefetchRefrigerantScreen(client, params.refrigerantId ?? ""),
-              ),
-            },
-            { path: paths.safety.path, lazy: lazyRoute(queryClient, () => import("./routes/safety.tsx")) },
-            { path: paths.jobs.path, lazy: lazyRoute(queryClient, () => import("./routes/jobs.tsx")) },
-            { path: paths.equipment.path, lazy: lazyRoute(queryClient, () => import("./routes/equipment-list.tsx")) },
-            {
-              path: paths.equipment.new.path,
-              lazy: lazyRoute(queryClient, () => import("./routes/equipment-new.tsx")),
-            },
-            {
-              path: paths.equipment.detail.path,
-              ...screen(
-                queryClient,
-                () => import("./routes/equipment-detail.tsx"),
-                (data, client, params) => data.prefetchEquipmentScreen(client, params.equipmentId ?? ""),
-              ),
-            },
-            {
-              path: paths.visits.detail.path,
-              ...screen(
-                queryClient,
-                () => import("./routes/visit.tsx"),
-                (data, client, params) => data.prefetchVisitScreen(client, params.visitId ?? ""),
-              ),
-            },
-            {
-              path: paths.visits.report.path,
-              ...screen(
-                queryClient,
-                () => import("./routes/visit-report.tsx"),
-                (data, client, params) => data.prefetchVisitScreen(client, params.visitId ?? ""),
-              ),
-            },
-            { path: paths.casebook.path, lazy: lazyRoute(queryClient, () => import("./routes/casebook.tsx")) },
-            {
-              path: paths.casebook.new.path,
-              ...screen(
-                queryClient,
-                () => import("./routes/casebook-editor.tsx"),
-                (data, client) => data.prefetchCaseScreen(client, undefined, NEW_CASE_REFRIGERANT),
-              ),
-            },
-            {
-              path: paths.casebook.team.path,
-              lazy: lazyRoute(queryClient, () => import("./routes/casebook-team.tsx")),
-            },
-            {
-              path: paths.casebook.case.path,
-              ...screen(
-                queryClient,
-                () => import("./routes/casebook-case.tsx"),
-                (data, client, params) => data.prefetchCaseScreen(client, params.caseId, NEW_CASE_REFRIGERANT),
-              ),
-            },
-            {
-              path: paths.casebook.edit.path,
-              ...screen(
-                queryClient,
-                () => import("./routes/casebook-editor.tsx"),
-                (data, client, params) => data.prefetchCaseScreen(client, params.caseId, NEW_CASE_REFRIGERANT),
-              ),
-            },
-            { path: paths.cylinders.path, lazy: lazyRoute(queryClient, () => import("./routes/cylinders.tsx")) },
-            { path: paths.register.path, lazy: lazyRoute(queryClient, () => import("./routes/register.tsx")) },
-            {
-              path: paths.companySettings.path,
-              lazy: lazyRoute(queryClient, () => import("./routes/company-settings.tsx")),
-            },
-            { path: paths.members.path, lazy: lazyRoute(queryClient, () => import("./routes/members.tsx")) },
-            { path: paths.profile.path, lazy: lazyRoute(queryClient, () => import("./routes/profile.tsx")) },
-            { path: paths.outbox.path, lazy: lazyRoute(queryClient, () => import("./routes/outbox.tsx")) },
-            { path: "*", lazy: lazyRoute(queryClient, () => import("./routes/not-found.tsx")) },
+            { path: paths.home.path, lazy: screen(() => import("./routes/home.tsx")) },
+            { path: paths.tables.path, lazy: screen(() => import("./routes/pt-tables.tsx")) },
+            { path: paths.tables.detail.path, lazy: screen(() => import("./routes/pt-table.tsx")) },
+            { path: paths.safety.path, lazy: screen(() => import("./routes/safety.tsx")) },
+            { path: paths.jobs.path, lazy: screen(() => import("./routes/jobs.tsx")) },
+            { path: paths.equipment.path, lazy: screen(() => import("./routes/equipment-list.tsx")) },
+            { path: paths.equipment.new.path, lazy: screen(() => import("./routes/equipment-new.tsx")) },
+            { path: paths.equipment.detail.path, lazy: screen(() => import("./routes/equipment-detail.tsx")) },
+            { path: paths.visits.detail.path, lazy: screen(() => import("./routes/visit.tsx")) },
+            { path: paths.visits.report.path, lazy: screen(() => import("./routes/visit-report.tsx")) },
+            { path: paths.casebook.path, lazy: screen(() => import("./routes/casebook.tsx")) },
+            { path: paths.casebook.new.path, lazy: screen(() => import("./routes/casebook-editor.tsx")) },
+            { path: paths.casebook.team.path, lazy: screen(() => import("./routes/casebook-team.tsx")) },
+            { path: paths.casebook.case.path, lazy: screen(() => import("./routes/casebook-case.tsx")) },
+            { path: paths.casebook.edit.path, lazy: screen(() => import("./routes/casebook-editor.tsx")) },
+            { path: paths.cylinders.path, lazy: screen(() => import("./routes/cylinders.tsx")) },
+            { path: paths.register.path, lazy: screen(() => import("./routes/register.tsx")) },
+            { path: paths.companySettings.path, lazy: screen(() => import("./routes/company-settings.tsx")) },
+            { path: paths.members.path, lazy: screen(() => import("./routes/members.tsx")) },
+            { path: paths.profile.path, lazy: screen(() => import("./routes/profile.tsx")) },
+            { path: paths.outbox.path, lazy: screen(() => import("./routes/outbox.tsx")) },
+            { path: "*", lazy: screen(() => import("./routes/not-found.tsx")) },
           ],
         },
       ],

@@ -1,9 +1,11 @@
 import { CheckCheck, Pencil } from "lucide-react";
 import { useState } from "react";
-import { Link, useParams } from "react-router-dom";
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
+import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { diagnose, workedSolution } from "@shared/engine/index.ts";
 import { DIFFICULTY_LABELS, canCasebook, type Attempt } from "@shared/schemas/casebook.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { Button, buttonVariants } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { ChargeStateBadge } from "@/components/ui/state/charge-state-badge.tsx";
@@ -15,7 +17,7 @@ import { CaseStory } from "@/features/casebook/components/case-story.tsx";
 import { WorkedSteps } from "@/features/casebook/components/worked-steps.tsx";
 import { MeasuredCyclePanel } from "@/features/run-log/components/measured-cycle-panel.tsx";
 import { useMe } from "@/lib/api/auth.ts";
-import { useCase, useCreateAttempt, usePublishCase } from "@/lib/api/casebook.ts";
+import { caseQueryOptions, loadCaseScreen, useCreateAttempt, usePublishCase } from "@/lib/api/casebook.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
 import { StaleWriteNotice } from "@/components/ui/stale-write/stale-write-notice.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
@@ -26,27 +28,41 @@ const SOURCE_WORDS = {
   generated: "Generated practice case",
 } as const;
 
+/** The case and its refrigerant's table before the screen renders. */
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ params }: LoaderFunctionArgs) =>
+    loadCaseScreen(queryClient, params.caseId);
+
 export default function CasebookCaseRoute() {
   const { caseId = "" } = useParams();
-  const item = useCase(caseId);
+  return (
+    <ScreenBoundary
+      key={caseId}
+      pending={<p aria-busy="true">Loading the case…</p>}
+      failed={(error) => (
+        <div role="alert" className="space-y-2">
+          <h1 className="text-2xl font-semibold">This case could not be opened</h1>
+          <p>{error.message}</p>
+          <Link to={paths.casebook.getHref()} className="font-medium text-accent underline underline-offset-4">
+            Back to the casebook
+          </Link>
+        </div>
+      )}
+    >
+      <CaseScreen caseId={caseId} />
+    </ScreenBoundary>
+  );
+}
+
+function CaseScreen({ caseId }: { caseId: string }) {
+  const item = useSuspenseQuery(caseQueryOptions(caseId));
   const me = useMe();
   const { units, atmosphericKPa } = useDisplayUnits();
   const attempt = useCreateAttempt();
   const publish = usePublishCase();
   const [result, setResult] = useState<Attempt | null>(null);
 
-  if (item.isPending) return <p aria-busy="true">Loading the case…</p>;
-  if (item.isError) {
-    return (
-      <div role="alert" className="space-y-2">
-        <h1 className="text-2xl font-semibold">This case could not be opened</h1>
-        <p>{item.error.message}</p>
-        <Link to={paths.casebook.getHref()} className="font-medium text-accent underline underline-offset-4">
-          Back to the casebook
-        </Link>
-      </div>
-    );
-  }
   const data = item.data;
   const author = me.data ? canCasebook(me.data.role, "author") : false;
 

@@ -1,15 +1,27 @@
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
 import { Link } from "react-router-dom";
 import { canCasebook } from "@shared/schemas/casebook.ts";
-import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { paths } from "@/config/paths.ts";
 import { TeamProgressList } from "@/features/casebook/components/team-progress.tsx";
-import { useMe } from "@/lib/api/auth.ts";
-import { useTeamProgress } from "@/lib/api/casebook.ts";
+import { meQueryOptions, useMe } from "@/lib/api/auth.ts";
+import { teamProgressQueryOptions } from "@/lib/api/casebook.ts";
+import { loadQuery } from "@/lib/api/screen-data.ts";
+
+/** The team's progress before the screen renders, for those who may see it. */
+export const clientLoader = (queryClient: QueryClient) => async () => {
+  const me = await loadQuery(queryClient, meQueryOptions());
+  if (me && canCasebook(me.role, "seeTeamProgress")) await loadQuery(queryClient, teamProgressQueryOptions());
+  return null;
+};
+
+function Team() {
+  return <TeamProgressList team={useSuspenseQuery(teamProgressQueryOptions()).data} />;
+}
 
 export default function CasebookTeamRoute() {
   const me = useMe();
   const allowed = me.data ? canCasebook(me.data.role, "seeTeamProgress") : false;
-  const team = useTeamProgress(allowed);
   return (
     <div className="space-y-5">
       <nav aria-label="Breadcrumb" className="text-sm">
@@ -22,15 +34,18 @@ export default function CasebookTeamRoute() {
         <p className="mt-1 text-muted">Every apprentice in your company, by charge state and refrigerant.</p>
       </header>
       {me.data && !allowed && <p role="alert">Only seniors and owners see the team's progress.</p>}
-      <PanelBoundary>
-        {allowed && team.isPending && <p aria-busy="true">Loading…</p>}
-        {team.isError && (
-          <p role="alert" className="font-medium text-fault">
-            ⚠ {team.error.message}
-          </p>
-        )}
-        {team.data && <TeamProgressList team={team.data} />}
-      </PanelBoundary>
+      {allowed && (
+        <ScreenBoundary
+          pending={<p aria-busy="true">Loading…</p>}
+          failed={(error) => (
+            <p role="alert" className="font-medium text-fault">
+              ⚠ {error.message}
+            </p>
+          )}
+        >
+          <Team />
+        </ScreenBoundary>
+      )}
     </div>
   );
 }

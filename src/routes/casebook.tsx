@@ -1,14 +1,18 @@
 import { Plus, Users } from "lucide-react";
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
+import type { ReactNode } from "react";
 import { Link } from "react-router-dom";
 import { canCasebook } from "@shared/schemas/casebook.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { buttonVariants } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
 import { CaseList } from "@/features/casebook/components/case-list.tsx";
 import { GeneratorForm } from "@/features/casebook/components/generator-form.tsx";
 import { ProgressPanel } from "@/features/casebook/components/progress-panel.tsx";
 import { useMe } from "@/lib/api/auth.ts";
-import { useCases, useProgress } from "@/lib/api/casebook.ts";
+import { casesQueryOptions, progressQueryOptions } from "@/lib/api/casebook.ts";
+import { loadQuery } from "@/lib/api/screen-data.ts";
 
 function Loading({ what }: { what: string }) {
   return (
@@ -26,10 +30,31 @@ function Failed({ message }: { message: string }) {
   );
 }
 
+/** The person's progress and the case library before the screen renders. */
+export const clientLoader = (queryClient: QueryClient) => async () => {
+  await Promise.all([loadQuery(queryClient, progressQueryOptions()), loadQuery(queryClient, casesQueryOptions())]);
+  return null;
+};
+
+/** One panel of the screen: its loading line and its failure, each in the panel's place. */
+function Panel({ what, children }: { what: string; children: ReactNode }) {
+  return (
+    <ScreenBoundary pending={<Loading what={what} />} failed={(error) => <Failed message={error.message} />}>
+      {children}
+    </ScreenBoundary>
+  );
+}
+
+function Progress() {
+  return <ProgressPanel progress={useSuspenseQuery(progressQueryOptions()).data} />;
+}
+
+function Cases() {
+  return <CaseList cases={useSuspenseQuery(casesQueryOptions()).data} />;
+}
+
 export default function CasebookRoute() {
   const me = useMe();
-  const cases = useCases();
-  const progress = useProgress();
   const role = me.data?.role;
   const author = role ? canCasebook(role, "author") : false;
   return (
@@ -53,27 +78,15 @@ export default function CasebookRoute() {
           </div>
         )}
       </header>
-      <PanelBoundary>
-        {progress.isPending ? (
-          <Loading what="your progress" />
-        ) : progress.isError ? (
-          <Failed message={progress.error.message} />
-        ) : (
-          <ProgressPanel progress={progress.data} />
-        )}
-      </PanelBoundary>
+      <Panel what="your progress">
+        <Progress />
+      </Panel>
       <PanelBoundary>
         <GeneratorForm />
       </PanelBoundary>
-      <PanelBoundary>
-        {cases.isPending ? (
-          <Loading what="the cases" />
-        ) : cases.isError ? (
-          <Failed message={cases.error.message} />
-        ) : (
-          <CaseList cases={cases.data} />
-        )}
-      </PanelBoundary>
+      <Panel what="the cases">
+        <Cases />
+      </Panel>
     </div>
   );
 }

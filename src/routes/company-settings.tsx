@@ -1,3 +1,4 @@
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { fieldMessages } from "@shared/schemas/field-messages.ts";
 import {
@@ -7,13 +8,15 @@ import {
   ProcedureSettingsUpdateSchema,
   type ProcedureSettingsResponse,
 } from "@shared/schemas/procedure-records.ts";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { StaleWriteNotice } from "@/components/ui/stale-write/stale-write-notice.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { parseDecimal } from "@/components/ui/field/number-input.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
-import { useOrganisationSettings, useUpdateOrganisationSettings } from "@/lib/api/organisation.ts";
+import { organisationSettingsQueryOptions, useUpdateOrganisationSettings } from "@/lib/api/organisation.ts";
+import { loadQuery } from "@/lib/api/screen-data.ts";
 
 const LABELS = {
   evacuationTargetMicrons: "Evacuation target (µm)",
@@ -142,8 +145,16 @@ function SettingsForm({
   );
 }
 
+/** The company's limits before the screen renders. */
+export const clientLoader = (queryClient: QueryClient) => () =>
+  loadQuery(queryClient, organisationSettingsQueryOptions());
+
+function Settings() {
+  const settings = useSuspenseQuery(organisationSettingsQueryOptions());
+  return <SettingsForm current={settings.data} onReload={() => settings.refetch()} reloading={settings.isFetching} />;
+}
+
 export default function CompanySettingsRoute() {
-  const settings = useOrganisationSettings();
   return (
     <div className="max-w-2xl space-y-4">
       <header>
@@ -153,15 +164,16 @@ export default function CompanySettingsRoute() {
           codes, the maker's instructions and licensed practice decide.
         </p>
       </header>
-      {settings.isPending && <p aria-busy="true">Loading…</p>}
-      {settings.isError && (
-        <p role="alert" className="font-medium text-fault">
-          ⚠ {settings.error.message}
-        </p>
-      )}
-      {settings.isSuccess && (
-        <SettingsForm current={settings.data} onReload={() => settings.refetch()} reloading={settings.isFetching} />
-      )}
+      <ScreenBoundary
+        pending={<p aria-busy="true">Loading…</p>}
+        failed={(error) => (
+          <p role="alert" className="font-medium text-fault">
+            ⚠ {error.message}
+          </p>
+        )}
+      >
+        <Settings />
+      </ScreenBoundary>
     </div>
   );
 }

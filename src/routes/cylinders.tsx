@@ -1,16 +1,26 @@
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
 import { Link } from "react-router-dom";
 import { can } from "@shared/schemas/auth.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { paths } from "@/config/paths.ts";
 import { CylinderForm } from "@/features/register/components/cylinder-form.tsx";
 import { CylinderList } from "@/features/register/components/cylinder-list.tsx";
 import { useMe } from "@/lib/api/auth.ts";
-import { useCylinders } from "@/lib/api/register.ts";
+import { cylindersQueryOptions } from "@/lib/api/register.ts";
+import { loadQuery } from "@/lib/api/screen-data.ts";
+
+/** The company's cylinders before the screen renders. */
+export const clientLoader = (queryClient: QueryClient) => () => loadQuery(queryClient, cylindersQueryOptions());
+
+function Cylinders({ canWrite }: { canWrite: boolean }) {
+  const cylinders = useSuspenseQuery(cylindersQueryOptions());
+  return <CylinderList cylinders={cylinders.data} canWrite={canWrite} />;
+}
 
 export default function CylindersRoute() {
   const me = useMe();
-  const cylinders = useCylinders();
   const canWrite = me.data ? can(me.data.role, "writeRecords") : false;
   return (
     <div className="space-y-6">
@@ -31,15 +41,16 @@ export default function CylindersRoute() {
       </header>
       <CautionPanel topic="recovery-cylinder" />
       <PanelBoundary>
-        {cylinders.isPending ? (
-          <p aria-busy="true">Loading the cylinders…</p>
-        ) : cylinders.isError ? (
-          <p role="alert" className="font-medium text-fault">
-            ⚠ The cylinders did not load: {cylinders.error.message}
-          </p>
-        ) : (
-          <CylinderList cylinders={cylinders.data} canWrite={canWrite} />
-        )}
+        <ScreenBoundary
+          pending={<p aria-busy="true">Loading the cylinders…</p>}
+          failed={(error) => (
+            <p role="alert" className="font-medium text-fault">
+              ⚠ The cylinders did not load: {error.message}
+            </p>
+          )}
+        >
+          <Cylinders canWrite={canWrite} />
+        </ScreenBoundary>
       </PanelBoundary>
       {canWrite && (
         <section

@@ -1,7 +1,9 @@
 import { MapPin } from "lucide-react";
-import { Link, useNavigate, useParams } from "react-router-dom";
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { can } from "@shared/schemas/auth.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
 import { ChargeReferencePoints } from "@/features/equipment/components/charge-reference-points.tsx";
@@ -12,7 +14,9 @@ import { StartVisitForm } from "@/features/jobs/components/start-visit-form.tsx"
 import { VisitList } from "@/features/jobs/components/visit-list.tsx";
 import { ApiError } from "@/lib/api/api-client.ts";
 import { useMe } from "@/lib/api/auth.ts";
-import { useEquipmentDetail } from "@/lib/api/equipment.ts";
+import { chargeReferencesQueryOptions } from "@/lib/api/charge-references.ts";
+import { equipmentDetailQueryOptions } from "@/lib/api/equipment.ts";
+import { loadQuery } from "@/lib/api/screen-data.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
 
 function Panel({ title, id, children }: { title: string; id: string; children: React.ReactNode }) {
@@ -26,51 +30,72 @@ function Panel({ title, id, children }: { title: string; id: string; children: R
   );
 }
 
-export default function EquipmentDetailRoute() {
-  const { equipmentId = "" } = useParams();
-  const navigate = useNavigate();
-  const me = useMe();
-  const detail = useEquipmentDetail(equipmentId);
-  const { units, atmosphericKPa } = useDisplayUnits();
-  const mayWrite = me.data ? can(me.data.role, "writeRecords") : false;
-  const mayCalibrate = me.data ? can(me.data.role, "setChargeReference") : false;
+/** The unit's detail before the screen renders; its charge references are started beside it. */
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const equipmentId = params.equipmentId ?? "";
+    // A panel of its own below the nameplate (ChargeReferencePoints reads it): not waited for.
+    void loadQuery(queryClient, chargeReferencesQueryOptions(equipmentId));
+    await loadQuery(queryClient, equipmentDetailQueryOptions(equipmentId));
+    return null;
+  };
 
-  const breadcrumb = (
+function Breadcrumb({ unitName }: { unitName?: string }) {
+  return (
     <nav aria-label="Breadcrumb" className="text-sm">
       <Link to={paths.equipment.getHref()} className="text-accent underline underline-offset-4">
         Equipment
       </Link>
-      {detail.data && <> / {detail.data.equipment.name}</>}
+      {unitName && <> / {unitName}</>}
     </nav>
   );
+}
 
-  if (detail.isPending) {
-    return (
-      <div className="space-y-4">
-        {breadcrumb}
-        <p role="status" className="text-muted">
-          Loading the unit…
-        </p>
-      </div>
-    );
-  }
-  if (detail.isError) {
-    const missing = detail.error instanceof ApiError && (detail.error.status === 404 || detail.error.status === 400);
-    return (
-      <div className="space-y-4">
-        {breadcrumb}
-        <h1 className="text-2xl font-semibold">{missing ? "Unit not found" : "The unit did not load"}</h1>
-        <p role="alert">
-          {missing ? "No unit of your company lives at this address. It may have been removed." : detail.error.message}
-        </p>
-        {!missing && (
-          <Button variant="secondary" onClick={() => void detail.refetch()}>
-            Try again
-          </Button>
-        )}
-      </div>
-    );
-  }
+export default function EquipmentDetailRoute() {
+  const { equipmentId = "" } = useParams();
+  return (
+    <ScreenBoundary
+      key={equipmentId}
+      pending={
+        <div className="space-y-4">
+          <Breadcrumb />
+          <p role="status" className="text-muted">
+            Loading the unit…
+          </p>
+        </div>
+      }
+      failed={(error, retry) => {
+        const missing = error instanceof ApiError && (error.status === 404 || error.status === 400);
+        return (
+          <div className="space-y-4">
+            <Breadcrumb />
+            <h1 className="text-2xl font-semibold">{missing ? "Unit not found" : "The unit did not load"}</h1>
+            <p role="alert">
+              {missing ? "No unit of your company lives at this address. It may have been removed." : error.message}
+            </p>
+            {!missing && (
+              <Button variant="secondary" onClick={retry}>
+                Try again
+              </Button>
+            )}
+          </div>
+        );
+      }}
+    >
+      <EquipmentDetail equipmentId={equipmentId} />
+    </ScreenBoundary>
+  );
+}
+
+function EquipmentDetail({ equipmentId }: { equipmentId: string }) {
+  const navigate = useNavigate();
+  const me = useMe();
+  const detail = useSuspenseQuery(equipmentDetailQueryOptions(equipmentId));
+  const { units, atmosphericKPa } = useDisplayUnits();
+  const mayWrite = me.data ? can(me.data.role, "writeRecords") : false;
+  const mayCalibrate = me.data ? can(me.data.role, "setChargeReference") : false;
+  const breadcrumb = <Breadcrumb unitName={detail.data.equipment.name} />;
 
   const { equipment, visits, lastSettled } = detail.data;
   return (

@@ -1,11 +1,14 @@
 import { Plus } from "lucide-react";
+import type { QueryClient } from "@tanstack/react-query";
 import { Link } from "react-router-dom";
 import { can } from "@shared/schemas/auth.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { buttonVariants } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
-import { EquipmentTable } from "@/features/equipment/components/equipment-table.tsx";
+import { EquipmentTable, FIRST_EQUIPMENT_PAGE } from "@/features/equipment/components/equipment-table.tsx";
 import { useMe } from "@/lib/api/auth.ts";
+import { equipmentListQueryOptions } from "@/lib/api/equipment.ts";
+import { loadQuery } from "@/lib/api/screen-data.ts";
 
 function AddEquipmentLink() {
   return (
@@ -14,6 +17,10 @@ function AddEquipmentLink() {
     </Link>
   );
 }
+
+/** The table's first page (the table pages, searches and filters itself). */
+export const clientLoader = (queryClient: QueryClient) => () =>
+  loadQuery(queryClient, equipmentListQueryOptions(FIRST_EQUIPMENT_PAGE));
 
 export default function EquipmentListRoute() {
   const me = useMe();

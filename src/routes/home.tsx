@@ -1,35 +1,61 @@
 import { ChevronRight } from "lucide-react";
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
 import { Link } from "react-router-dom";
 import { can } from "@shared/schemas/auth.ts";
-import { visitReasonText, type VisitSummary } from "@shared/schemas/visits.ts";
+import { visitReasonText } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
 import { QuickStartVisit } from "@/features/jobs/components/quick-start-visit.tsx";
 import { ResumeVisit } from "@/features/jobs/components/resume-visit.tsx";
 import { visitToResume } from "@/features/jobs/utils/visit-to-resume.ts";
-import { useMe } from "@/lib/api/auth.ts";
-import { MY_OPEN_VISITS, OPEN_VISITS_FIRST_PAGE, useVisits } from "@/lib/api/visits.ts";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
+import { meQueryOptions, useMe } from "@/lib/api/auth.ts";
+import { loadQuery } from "@/lib/api/screen-data.ts";
+import { MY_OPEN_VISITS, OPEN_VISITS_FIRST_PAGE, visitsQueryOptions } from "@/lib/api/visits.ts";
 
 /** Today lists a short first page of each kind; the jobs page holds the rest. */
 const SHORT_LIST = 10;
 
-function VisitLinks({
-  title,
-  visits,
-  empty,
-  more,
-}: {
-  title: string;
-  visits: VisitSummary[] | undefined;
-  empty: string;
-  more: { shown: boolean; href: string };
-}) {
+/** Today's short lists; the review list is a reviewer's only. */
+const IN_PROGRESS = visitsQueryOptions(OPEN_VISITS_FIRST_PAGE);
+// The visit to resume is among those the person is on the crew of (they join it by recording).
+const OWN = visitsQueryOptions(MY_OPEN_VISITS);
+const AWAITING_REVIEW = visitsQueryOptions({ status: "awaiting-review", limit: SHORT_LIST });
+type VisitsQuery = typeof IN_PROGRESS;
+
+/** Today's lists before the screen renders (the person's role says whether the review list is one). */
+export const clientLoader = (queryClient: QueryClient) => async () => {
+  const me = await loadQuery(queryClient, meQueryOptions());
+  const reviewer = me ? can(me.role, "signOff") : false;
+  await Promise.all(
+    [IN_PROGRESS, OWN, ...(reviewer ? [AWAITING_REVIEW] : [])].map((query) => loadQuery(queryClient, query)),
+  );
+  return null;
+};
+
+/** Each list fails alone, in the words Today used for any of them. */
+const listFailed = (error: Error) => (
+  <p role="alert" className="font-medium text-fault">
+    ⚠ {error.message}
+  </p>
+);
+
+function VisitLinks({ title, query, empty, more }: { title: string; query: VisitsQuery; empty: string; more: string }) {
   return (
     <section aria-label={title} className="rounded-card border-2 border-rule bg-surface p-4">
       <h2 className="text-lg font-semibold">{title}</h2>
-      {visits === undefined ? (
-        <p className="mt-1 text-muted">Loading…</p>
-      ) : visits.length === 0 ? (
+      <ScreenBoundary pending={<p className="mt-1 text-muted">Loading…</p>} failed={listFailed}>
+        <VisitLinkList query={query} empty={empty} more={more} />
+      </ScreenBoundary>
+    </section>
+  );
+}
+
+function VisitLinkList({ query, empty, more }: { query: VisitsQuery; empty: string; more: string }) {
+  const { visits, nextCursor } = useSuspenseQuery(query).data;
+  return (
+    <>
+      {visits.length === 0 ? (
         <p className="mt-1 text-muted">{empty}</p>
       ) : (
         <ul className="mt-2 divide-y-2 divide-rule">
@@ -52,26 +78,27 @@ function VisitLinks({
           ))}
         </ul>
       )}
-      {more.shown && (
+      {nextCursor && (
         <Link
-          to={more.href}
+          to={more}
           className="mt-2 inline-flex min-h-touch items-center gap-1 font-medium text-accent underline underline-offset-4"
         >
           See all on the jobs page <ChevronRight aria-hidden className="size-5" />
         </Link>
       )}
-    </section>
+    </>
   );
+}
+
+/** The open visit the person was last on, if any. */
+function Resume() {
+  const resume = visitToResume(useSuspenseQuery(OWN).data.visits);
+  return resume && <ResumeVisit visit={resume} />;
 }
 
 export default function HomeRoute() {
   const me = useMe();
-  const inProgress = useVisits(OPEN_VISITS_FIRST_PAGE);
-  // The visit to resume is among those the person is on the crew of (they join it by recording).
-  const own = useVisits(MY_OPEN_VISITS);
   const reviewer = me.data ? can(me.data.role, "signOff") : false;
-  const awaiting = useVisits({ status: "awaiting-review", limit: SHORT_LIST }, { enabled: reviewer });
-  const resume = own.data ? visitToResume(own.data.visits) : null;
   const writer = me.data ? can(me.data.role, "writeRecords") : false;
 
   return (
@@ -83,25 +110,22 @@ export default function HomeRoute() {
           superheat, subcooling and what the circuit is telling you — and keeps the visit as a record.
         </p>
       </header>
-      {(inProgress.isError || own.isError || awaiting.isError) && (
-        <p role="alert" className="font-medium text-fault">
-          ⚠ {(inProgress.error ?? own.error ?? awaiting.error)?.message}
-        </p>
-      )}
-      {resume && <ResumeVisit visit={resume} />}
+      <ScreenBoundary pending={null} failed={listFailed}>
+        <Resume />
+      </ScreenBoundary>
       {writer && <QuickStartVisit />}
       <VisitLinks
         title="Visits in progress"
-        visits={inProgress.data?.visits}
+        query={IN_PROGRESS}
         empty={writer ? "No open visits. Find a unit above to start one." : "No open visits."}
-        more={{ shown: Boolean(inProgress.data?.nextCursor), href: paths.jobs.getHref() }}
+        more={paths.jobs.getHref()}
       />
       {reviewer && (
         <VisitLinks
           title="Waiting for your review"
-          visits={awaiting.data?.visits}
+          query={AWAITING_REVIEW}
           empty="Nothing is waiting for review."
-          more={{ shown: Boolean(awaiting.data?.nextCursor), href: paths.jobs.getHref("awaiting-review") }}
+          more={paths.jobs.getHref("awaiting-review")}
         />
       )}
       <section className="rounded-card border-2 border-caution bg-surface p-4">

@@ -1,15 +1,18 @@
 import { Play, X } from "lucide-react";
 import { useState } from "react";
-import { useNavigate, useSearchParams } from "react-router-dom";
+import type { QueryClient } from "@tanstack/react-query";
+import { useNavigate, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
 import { can } from "@shared/schemas/auth.ts";
 import { VisitStatusSchema, type VisitStatus } from "@shared/schemas/visits.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
-import { JobsTable } from "@/features/jobs/components/jobs-table.tsx";
+import { firstVisitsPage, JobsTable } from "@/features/jobs/components/jobs-table.tsx";
 import { StartVisitForm } from "@/features/jobs/components/start-visit-form.tsx";
 import { StatusFilter } from "@/features/jobs/components/status-filter.tsx";
 import { useMe } from "@/lib/api/auth.ts";
+import { loadQuery } from "@/lib/api/screen-data.ts";
+import { visitsQueryOptions } from "@/lib/api/visits.ts";
 
 const EMPTY_TEXT: Record<VisitStatus | "all", string> = {
   all: "No visits yet. Start one from here or from a unit's page.",
@@ -19,12 +22,23 @@ const EMPTY_TEXT: Record<VisitStatus | "all", string> = {
   "sent-back": "No visit has been sent back.",
 };
 
+/** The table's first page for the status in the address (the table pages and searches itself). */
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ request }: LoaderFunctionArgs) =>
+    loadQuery(queryClient, visitsQueryOptions(firstVisitsPage(statusIn(new URL(request.url).searchParams))));
+
+/** The status filter in the address; anything else is every status. */
+function statusIn(params: URLSearchParams): VisitStatus | null {
+  const parsed = VisitStatusSchema.safeParse(params.get("status"));
+  return parsed.success ? parsed.data : null;
+}
+
 export default function JobsRoute() {
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
   const me = useMe();
-  const parsed = VisitStatusSchema.safeParse(params.get("status"));
-  const status = parsed.success ? parsed.data : null;
+  const status = statusIn(params);
   const [starting, setStarting] = useState(false);
   const mayWrite = me.data ? can(me.data.role, "writeRecords") : false;
   const reviewing = status === "awaiting-review" && me.data != null && can(me.data.role, "signOff");

@@ -1,15 +1,31 @@
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
+import type { AuthUser } from "@shared/schemas/auth.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { InviteMemberForm } from "@/features/members/components/invite-member-form.tsx";
 import { MembersTable } from "@/features/members/components/members-table.tsx";
 import { PendingInvitations } from "@/features/members/components/pending-invitations.tsx";
-import { useMe } from "@/lib/api/auth.ts";
-import { useInvitations } from "@/lib/api/invitations.ts";
-import { useMembers } from "@/lib/api/members.ts";
+import { meQueryOptions, useMe } from "@/lib/api/auth.ts";
+import { invitationsQueryOptions, useInvitations } from "@/lib/api/invitations.ts";
+import { membersQueryOptions } from "@/lib/api/members.ts";
+import { loadQuery } from "@/lib/api/screen-data.ts";
+
+/** The company's members before the screen renders; an owner's pending invitations are started too. */
+export const clientLoader = (queryClient: QueryClient) => async () => {
+  const me = await loadQuery(queryClient, meQueryOptions());
+  if (me?.role === "owner") void loadQuery(queryClient, invitationsQueryOptions());
+  await loadQuery(queryClient, membersQueryOptions());
+  return null;
+};
+
+function Members({ viewer }: { viewer: AuthUser }) {
+  return <MembersTable members={useSuspenseQuery(membersQueryOptions()).data} viewer={viewer} />;
+}
 
 export default function MembersRoute() {
   const me = useMe();
-  const members = useMembers();
   const isOwner = me.data?.role === "owner";
+  // An owner's panel below the list, drawn once it is there (it has no loading line of its own).
   const invitations = useInvitations(isOwner);
   return (
     <div className="space-y-8">
@@ -21,15 +37,16 @@ export default function MembersRoute() {
             : "Everyone in your company and their role. Owners manage this list."}
         </p>
       </header>
-      <PanelBoundary>
-        {members.isPending && <p>Loading members…</p>}
-        {members.isError && (
+      <ScreenBoundary
+        pending={<p>Loading members…</p>}
+        failed={(error) => (
           <p role="alert" className="font-medium text-fault">
-            ⚠ {members.error.message}
+            ⚠ {error.message}
           </p>
         )}
-        {members.isSuccess && me.data && <MembersTable members={members.data} viewer={me.data} />}
-      </PanelBoundary>
+      >
+        {me.data && <Members viewer={me.data} />}
+      </ScreenBoundary>
       {isOwner && (
         <>
           <PanelBoundary>

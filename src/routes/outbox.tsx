@@ -1,8 +1,17 @@
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { OutboxList } from "@/features/outbox/components/outbox-list.tsx";
-import { useOutbox } from "@/lib/api/outbox.ts";
+import { outboxQueryOptions } from "@/lib/api/outbox.ts";
+import { loadQuery } from "@/lib/api/screen-data.ts";
+
+/** The caught mail before the screen renders (it then refreshes itself: outboxQueryOptions). */
+export const clientLoader = (queryClient: QueryClient) => () => loadQuery(queryClient, outboxQueryOptions());
+
+function Mail() {
+  return <OutboxList messages={useSuspenseQuery(outboxQueryOptions()).data} />;
+}
 
 export default function OutboxRoute() {
-  const outbox = useOutbox();
   return (
     <div className="space-y-6">
       <header>
@@ -12,13 +21,16 @@ export default function OutboxRoute() {
           real mail.
         </p>
       </header>
-      {outbox.isPending && <p>Loading mail…</p>}
-      {outbox.isError && (
-        <p role="alert" className="font-medium text-fault">
-          ⚠ {outbox.error.message}
-        </p>
-      )}
-      {outbox.isSuccess && <OutboxList messages={outbox.data} />}
+      <ScreenBoundary
+        pending={<p>Loading mail…</p>}
+        failed={(error) => (
+          <p role="alert" className="font-medium text-fault">
+            ⚠ {error.message}
+          </p>
+        )}
+      >
+        <Mail />
+      </ScreenBoundary>
     </div>
   );
 }

@@ -1,9 +1,11 @@
 import { Printer } from "lucide-react";
 import { useState } from "react";
-import { Link, useParams } from "react-router-dom";
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
+import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { getRefrigerant } from "@shared/engine/index.ts";
 import { isKnownRefrigerant } from "@shared/property-tables/refrigerant-catalogue.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
@@ -15,6 +17,7 @@ import { TableControls, type TableRange } from "@/features/pt-tables/components/
 import { UnitsBar } from "@/features/pt-tables/components/units-bar.tsx";
 import { resolveRange } from "@/features/pt-tables/utils/resolve-range.ts";
 import { formatNumber, temperatureToDisplay, type DisplayUnits } from "@/lib/units/display-units.ts";
+import { ensureRefrigerantTable, refrigerantTableQueryOptions } from "@/lib/api/refrigerant-tables.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
 
 function defaultRange(minimumC: number, maximumC: number, units: DisplayUnits): TableRange {
@@ -29,17 +32,15 @@ function defaultRange(minimumC: number, maximumC: number, units: DisplayUnits): 
   };
 }
 
+/** The refrigerant's table before the screen renders (an unknown name loads nothing). */
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ params }: LoaderFunctionArgs) =>
+    ensureRefrigerantTable(queryClient, params.refrigerantId ?? "");
+
 export default function PtTableRoute() {
   const { refrigerantId = "" } = useParams();
-  // The route's loader has loaded this refrigerant's table (src/router.tsx).
-  const info = isKnownRefrigerant(refrigerantId) ? getRefrigerant(refrigerantId) : undefined;
-  const profile = useDisplayUnits();
-  // Starts in the user's display units; switching here changes this page only.
-  const [chosenUnits, setUnits] = useState<DisplayUnits | null>(null);
-  const units = chosenUnits ?? profile.units;
-  const [range, setRange] = useState<TableRange | null>(null);
-
-  if (!info) {
+  if (!isKnownRefrigerant(refrigerantId)) {
     return (
       <div className="space-y-3">
         <h1 className="text-2xl font-semibold">Unknown refrigerant</h1>
@@ -52,6 +53,35 @@ export default function PtTableRoute() {
       </div>
     );
   }
+  return (
+    <ScreenBoundary
+      key={refrigerantId}
+      pending={<p aria-busy="true">Loading the {refrigerantId} table…</p>}
+      failed={(error, retry) => (
+        <div role="alert" className="space-y-2">
+          <p className="font-medium text-fault">
+            ⚠ The {refrigerantId} table did not load: {error.message}
+          </p>
+          <Button variant="secondary" onClick={retry}>
+            Try again
+          </Button>
+        </div>
+      )}
+    >
+      <PtTable refrigerantId={refrigerantId} />
+    </ScreenBoundary>
+  );
+}
+
+function PtTable({ refrigerantId }: { refrigerantId: string }) {
+  // The engine looks the table up synchronously once it is loaded (decision 022).
+  useSuspenseQuery(refrigerantTableQueryOptions(refrigerantId));
+  const info = getRefrigerant(refrigerantId);
+  const profile = useDisplayUnits();
+  // Starts in the user's display units; switching here changes this page only.
+  const [chosenUnits, setUnits] = useState<DisplayUnits | null>(null);
+  const units = chosenUnits ?? profile.units;
+  const [range, setRange] = useState<TableRange | null>(null);
 
   const limits = info.validRange;
   const currentRange = range ?? defaultRange(limits.minimumC, limits.maximumC, units);

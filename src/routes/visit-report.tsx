@@ -2,7 +2,8 @@ import { formatNumber } from "@/lib/units/display-units.ts";
 import { applicationText } from "@shared/content/applications.ts";
 import { Printer } from "lucide-react";
 import { useState } from "react";
-import { Link, useParams } from "react-router-dom";
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
+import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import {
   ADJUSTMENT_KIND_LABELS,
   isStanding,
@@ -11,6 +12,7 @@ import {
   visitReasonText,
 } from "@shared/schemas/visits.ts";
 import { can } from "@shared/schemas/auth.ts";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
@@ -28,8 +30,9 @@ import { TrendChart } from "@/features/run-log/components/lazy-trend-chart.tsx";
 import { circuitSeries } from "@/features/run-log/utils/circuit-series.ts";
 import { AuditTrail } from "@/features/visit/components/audit-trail.tsx";
 import { useMe } from "@/lib/api/auth.ts";
-import { useEquipmentDetail } from "@/lib/api/equipment.ts";
-import { useVisit } from "@/lib/api/visits.ts";
+import { equipmentDetailQueryOptions } from "@/lib/api/equipment.ts";
+import { loadVisitScreen } from "@/lib/api/screen-data.ts";
+import { visitQueryOptions } from "@/lib/api/visits.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
 import { formatDateTime, viewerTimeZone } from "@shared/format/date-time.ts";
 
@@ -43,26 +46,38 @@ const SCREEN_MARGIN_PX = 32;
 const chartWidthFor = (viewportWidth: number) =>
   Math.max(280, Math.min(PRINT_CHART_WIDTH, viewportWidth - SCREEN_MARGIN_PX));
 
+/** The visit, its unit and its refrigerant's table before the report renders (screen-data.ts). */
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ params }: LoaderFunctionArgs) =>
+    loadVisitScreen(queryClient, params.visitId ?? "");
+
 export default function VisitReportRoute() {
   const { visitId = "" } = useParams();
-  const visit = useVisit(visitId);
-  const equipment = useEquipmentDetail(visit.data?.equipmentId ?? "");
+  return (
+    <ScreenBoundary
+      key={visitId}
+      pending={<p aria-busy="true">Preparing the report…</p>}
+      failed={(error) => (
+        <p role="alert" className="font-medium text-fault">
+          ⚠ The report could not be prepared: {error.message}
+        </p>
+      )}
+    >
+      <VisitReport visitId={visitId} />
+    </ScreenBoundary>
+  );
+}
+
+function VisitReport({ visitId }: { visitId: string }) {
+  const { data } = useSuspenseQuery(visitQueryOptions(visitId));
+  // The unit is asked for once the visit names it: never "/equipment/" with an empty id.
+  const unit = useSuspenseQuery(equipmentDetailQueryOptions(data.equipmentId)).data.equipment;
   const me = useMe();
   const { units } = useDisplayUnits();
   const [chartWidth] = useState(() =>
     chartWidthFor(typeof window === "undefined" ? PRINT_CHART_WIDTH + SCREEN_MARGIN_PX : window.innerWidth),
   );
-
-  if (visit.isPending || (visit.isSuccess && equipment.isPending)) return <p aria-busy="true">Preparing the report…</p>;
-  if (visit.isError || equipment.isError) {
-    return (
-      <p role="alert" className="font-medium text-fault">
-        ⚠ The report could not be prepared: {(visit.error ?? equipment.error)?.message}
-      </p>
-    );
-  }
-  const data = visit.data;
-  const unit = equipment.data!.equipment;
   const atmosphericKPa = data.atmosphere.pressureKPa;
   // Voided records are corrections: left out of the report, named in its audit trail.
   const adjustments = data.adjustments.filter(isStanding);

@@ -2,7 +2,8 @@ import { CautionLine } from "@/components/ui/caution-panel/caution-line.tsx";
 import { applicationText } from "@shared/content/applications.ts";
 import { FileText, Lock, Undo2 } from "lucide-react";
 import { useState, type ReactNode } from "react";
-import { Link, useParams, useSearchParams } from "react-router-dom";
+import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
+import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
 import { getRefrigerant } from "@shared/engine/index.ts";
 import { can } from "@shared/schemas/auth.ts";
 import { acceptsEntries, closedVisitMessage, visitReasonText } from "@shared/schemas/visits.ts";
@@ -10,6 +11,7 @@ import { canCasebook } from "@shared/schemas/casebook.ts";
 import { circuitFacts } from "@shared/schemas/circuit-facts.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
+import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { lazyPanel } from "@/components/lazy/lazy-panel.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
@@ -19,8 +21,9 @@ import { ROLE_READ_ONLY_NOTE } from "@/features/procedures/components/procedure-
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { useMe } from "@/lib/api/auth.ts";
 import { useChargeReferences } from "@/lib/api/charge-references.ts";
-import { useEquipmentDetail } from "@/lib/api/equipment.ts";
-import { useVisit } from "@/lib/api/visits.ts";
+import { equipmentDetailQueryOptions } from "@/lib/api/equipment.ts";
+import { loadVisitScreen } from "@/lib/api/screen-data.ts";
+import { visitQueryOptions } from "@/lib/api/visits.ts";
 import { useDisplayUnits } from "@/lib/units/use-display-units.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
 
@@ -79,36 +82,47 @@ const AuditTrail = lazyPanel(
 
 const METERING_LABELS = { txv: "TXV", eev: "EEV", "fixed-orifice": "fixed orifice", capillary: "capillary" } as const;
 
+/** The visit, its unit and its refrigerant's table before the screen renders (screen-data.ts). */
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ params }: LoaderFunctionArgs) =>
+    loadVisitScreen(queryClient, params.visitId ?? "");
+
 export default function VisitRoute() {
   const { visitId = "" } = useParams();
-  const visit = useVisit(visitId);
-  const equipment = useEquipmentDetail(visit.data?.equipmentId ?? "");
-  const chargeReferences = useChargeReferences(visit.data?.equipmentId ?? "");
+  return (
+    // Keyed by the visit: another visit's page starts afresh, a failed one is not carried over.
+    <ScreenBoundary
+      key={visitId}
+      pending={<p aria-busy="true">Loading the visit…</p>}
+      failed={(error) => (
+        <div role="alert" className="space-y-2">
+          <h1 className="text-2xl font-semibold">This visit could not be opened</h1>
+          <p>{error.message}</p>
+          <Link to={paths.jobs.getHref()} className="font-medium text-accent underline underline-offset-4">
+            Back to jobs
+          </Link>
+        </div>
+      )}
+    >
+      <VisitScreen visitId={visitId} />
+    </ScreenBoundary>
+  );
+}
+
+// A failed refresh of a visit on screen is a toast (query-client.ts), and the run log, with what
+// is being typed, stays: a suspense query throws only when it has nothing to show.
+function VisitScreen({ visitId }: { visitId: string }) {
+  const { data } = useSuspenseQuery(visitQueryOptions(visitId));
+  // The unit is asked for once the visit names it: never "/equipment/" with an empty id.
+  const unit = useSuspenseQuery(equipmentDetailQueryOptions(data.equipmentId)).data.equipment;
+  // Optional: the run log judges without the circuit's reference point until it comes.
+  const chargeReferences = useChargeReferences(data.equipmentId);
   const me = useMe();
   const { units } = useDisplayUnits();
   const [circuit, setCircuit] = useState(1);
   const [searchParams, setSearchParams] = useSearchParams();
 
-  if (visit.isPending || (visit.isSuccess && equipment.isPending)) {
-    return <p aria-busy="true">Loading the visit…</p>;
-  }
-  // Only when there is nothing to show: a failed refresh of a visit on screen is a toast, and the
-  // run log, with what is being typed, stays.
-  if (visit.data === undefined || equipment.data === undefined) {
-    const error = visit.error ?? equipment.error;
-    return (
-      <div role="alert" className="space-y-2">
-        <h1 className="text-2xl font-semibold">This visit could not be opened</h1>
-        <p>{error?.message}</p>
-        <Link to={paths.jobs.getHref()} className="font-medium text-accent underline underline-offset-4">
-          Back to jobs
-        </Link>
-      </div>
-    );
-  }
-
-  const data = visit.data;
-  const unit = equipment.data.equipment;
   const role = me.data?.role ?? "apprentice";
   // Entries and voids only while the visit is open or sent back; awaiting review and signed off are closed.
   const open = acceptsEntries(data.status);

@@ -51,6 +51,13 @@ export function restoreKeptData(queryClient: QueryClient): Promise<void> {
     .then((kept) => {
       if (!kept || kept.build !== __SATURA_BUILD__ || Date.now() - kept.savedAt > MAX_AGE_MS) return;
       hydrate(queryClient, kept.state);
+      // Saved a moment after each change, the kept copy can be older than what this device last
+      // showed (a reload right after a save): shown at once, and asked again by each screen that
+      // reads it (with signal). A query already answered since the page started keeps its answer.
+      for (const { queryKey, state } of kept.state.queries) {
+        if (queryClient.getQueryState(queryKey)?.dataUpdatedAt === state.dataUpdatedAt)
+          void queryClient.invalidateQueries({ queryKey, exact: true, refetchType: "none" });
+      }
     })
     .catch(() => undefined);
   return restoring;

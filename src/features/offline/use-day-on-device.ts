@@ -2,7 +2,7 @@ import { useQueries, useQueryClient } from "@tanstack/react-query";
 import { useEffect } from "react";
 import { visitRefrigerantQueryOptions } from "@/lib/api/register.ts";
 import { prefetchProcedureLists } from "@/lib/api/procedures.ts";
-import { prefetchVisitScreen } from "@/lib/api/screen-data.ts";
+import { loadVisitScreen } from "@/lib/api/screen-data.ts";
 import { MY_OPEN_VISITS, OPEN_VISITS_FIRST_PAGE, visitsQueryOptions } from "@/lib/api/visits.ts";
 import { useOnlineStatus } from "./online-status.ts";
 import { whenIdleAfterFirstScreen } from "@/lib/first-screen.ts";
@@ -33,7 +33,7 @@ export function useDayOnDevice(): void {
     const keep = async () => {
       for (const id of ids.split(" ")) {
         if (stopped || !navigator.onLine) return;
-        await prefetchVisitScreen(queryClient, id);
+        await loadVisitScreen(queryClient, id);
         await queryClient.prefetchQuery(visitRefrigerantQueryOptions(id));
         // The sections' records: an evacuation begun with signal takes its samples offline.
         await prefetchProcedureLists(queryClient, id);

@@ -66,6 +66,14 @@ export function startEarlyRequest(path: string): Promise<Response> {
   return request;
 }
 
+/**
+ * Drops the early requests not yet taken: sent under the session the page started with, their
+ * answers are not the next one's (a visit opened signed out is refused; after signing in it is not).
+ */
+export function forgetEarlyRequests(): void {
+  earlyRequests.clear();
+}
+
 /** The early request for a plain GET of `path`, if one was started and not yet taken. */
 function takeEarlyRequest(path: string, method: string, conditional: boolean): Promise<Response> | undefined {
   if (method !== "GET" || conditional) return undefined;

@@ -7,7 +7,7 @@ import type {
   SignIn,
   SignUp,
 } from "@shared/schemas/auth.ts";
-import { ApiError, apiRequest } from "./api-client.ts";
+import { ApiError, apiRequest, forgetEarlyRequests } from "./api-client.ts";
 
 /**
  * The answers are parsed with the shared schemas as everywhere, but the schemas (and zod with
@@ -69,6 +69,7 @@ function useSessionStart<T>(request: (input: T) => Promise<AuthUser>) {
     mutationFn: request,
     meta: { silentErrors: true },
     onSuccess: (user) => {
+      forgetEarlyRequests();
       queryClient.clear();
       queryClient.setQueryData(meQueryOptions().queryKey, user);
     },
@@ -84,6 +85,7 @@ export function useSignOut() {
     mutationFn: signOut,
     // Nothing of the last user may stay on a shared tablet.
     onSettled: () => {
+      forgetEarlyRequests();
       queryClient.clear();
       queryClient.setQueryData(meQueryOptions().queryKey, null);
     },

@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { queryOptions, useMutation, useQuery, useQueryClient, type QueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import {
   AttemptSchema,
@@ -18,6 +18,8 @@ import {
   type TeamProgress,
 } from "@shared/schemas/casebook.ts";
 import { apiRequest } from "./api-client.ts";
+import { ensureRefrigerantTable } from "./refrigerant-tables.ts";
+import { loadQuery } from "./screen-data.ts";
 
 const CaseEnvelopeSchema = z.object({ case: CaseSchema });
 const AttemptEnvelopeSchema = z.object({ attempt: AttemptSchema });
@@ -92,8 +94,6 @@ export const caseQueryOptions = (id: string) =>
   queryOptions({
     queryKey: ["cases", "detail", id],
     queryFn: ({ signal }) => getCase(id, signal),
-    // The editor of a new case has no id: "/cases/" would fetch the whole list.
-    enabled: id !== "",
     // A generated case never changes: its id is its seed.
     staleTime: id.startsWith("gen~") ? Infinity : undefined,
   });
@@ -109,12 +109,22 @@ export const progressQueryOptions = () =>
 export const teamProgressQueryOptions = () =>
   queryOptions({ queryKey: ["attempts", "progress", "team"], queryFn: ({ signal }) => getTeamProgress(signal) });
 
-export const useCases = () => useQuery(casesQueryOptions());
-export const useCase = (id: string) => useQuery(caseQueryOptions(id));
+/** A new case starts on this refrigerant (case-editor.tsx): its table is loaded with the editor. */
+const NEW_CASE_REFRIGERANT = "R410A";
+
+/**
+ * The loader of a case's screens (answer, edit; new without an id): the case and its
+ * refrigerant's table. The screens read the case with `useSuspenseQuery(caseQueryOptions(id))`.
+ */
+export async function loadCaseScreen(queryClient: QueryClient, caseId: string | undefined): Promise<null> {
+  const item = caseId ? await loadQuery(queryClient, caseQueryOptions(caseId)) : undefined;
+  if (caseId && !item) return null;
+  await ensureRefrigerantTable(queryClient, item?.input.refrigerant ?? NEW_CASE_REFRIGERANT);
+  return null;
+}
+
 export const useAttempts = (userId?: string) => useQuery(attemptsQueryOptions(userId));
 export const useAttempt = (id: string) => useQuery(attemptQueryOptions(id));
-export const useProgress = () => useQuery(progressQueryOptions());
-export const useTeamProgress = (enabled = true) => useQuery({ ...teamProgressQueryOptions(), enabled });
 
 /** Case changes touch the library list and that case. */
 function useCaseMutation<TVariables>(mutationFn: (variables: TVariables) => Promise<Case>) {

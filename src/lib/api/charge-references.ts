@@ -39,7 +39,6 @@ export const chargeReferencesQueryOptions = (equipmentId: string) =>
   queryOptions({
     queryKey: ["charge-references", "equipment", equipmentId],
     queryFn: ({ signal }) => getChargeReferences(equipmentId, signal),
-    enabled: equipmentId !== "",
   });
 
 export const useChargeReferences = (equipmentId: string) => useQuery(chargeReferencesQueryOptions(equipmentId));

@@ -50,8 +50,6 @@ export const equipmentDetailQueryOptions = (id: string) =>
   queryOptions({
     queryKey: ["equipment", "detail", id],
     queryFn: ({ signal }) => getEquipmentDetail(id, signal),
-    // Pages that learn the id from another answer (a visit) pass "" meanwhile: "/equipment/" is the whole list.
-    enabled: id !== "",
   });
 
 export const sitesQueryOptions = () =>

@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
 import {
   ProcedureSettingsResponseSchema,
   type ProcedureSettingsResponse,
@@ -25,8 +25,6 @@ export function updateOrganisationSettings({
 
 export const organisationSettingsQueryOptions = () =>
   queryOptions({ queryKey: ["organisation", "settings"], queryFn: ({ signal }) => getOrganisationSettings(signal) });
-
-export const useOrganisationSettings = () => useQuery(organisationSettingsQueryOptions());
 
 export function useUpdateOrganisationSettings() {
   const queryClient = useQueryClient();

@@ -6,6 +6,7 @@ export async function getOutbox(signal?: AbortSignal): Promise<OutboxMessage[]> 
   return (await apiRequest("/outbox", { schema: OutboxResponseSchema, signal })).messages;
 }
 
+/** Only owners in development get an answer; anyone else's query fails with 403 or 404. */
 export const outboxQueryOptions = () =>
   queryOptions({
     queryKey: ["outbox", "list"],
@@ -14,9 +15,6 @@ export const outboxQueryOptions = () =>
     refetchInterval: 5_000,
     retry: false,
   });
-
-/** Only owners in development get an answer; anyone else's query fails with 403 or 404. */
-export const useOutbox = (enabled = true) => useQuery({ ...outboxQueryOptions(), enabled });
 
 /** Whether this server has an outbox for this user (owners, development mail server); asked once per session. */
 export const outboxAvailableQueryOptions = () =>

@@ -1,7 +1,7 @@
 import { QueryClient } from "@tanstack/react-query";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { z } from "zod";
-import { apiRequest, startEarlyRequest } from "@/lib/api/api-client.ts";
+import { apiRequest, forgetEarlyRequests, startEarlyRequest } from "@/lib/api/api-client.ts";
 import { startFirstRequests } from "@/lib/api/first-requests.ts";
 
 const VISIT_ID = "00000000-0000-4000-8000-000000000100";
@@ -63,6 +63,16 @@ describe("startEarlyRequest", () => {
     // The early one is still there for the plain GET.
     await apiRequest("/visits/two");
     expect(asked).toHaveLength(3);
+  });
+
+  // Regression: a visit opened signed out went to sign-in, and after signing in the screen took up
+  // the early request's 401 and said "Sign in to continue".
+  it("is forgotten when a session starts or ends: its answer was the last session's", async () => {
+    const asked = stubServer();
+    startEarlyRequest("/visits/three");
+    forgetEarlyRequests();
+    await apiRequest("/visits/three");
+    expect(asked).toEqual(["/api/visits/three", "/api/visits/three"]);
   });
 });
 

@@ -1,47 +1,7 @@
 import { QueryClient } from "@tanstack/react-query";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import type { Visit } from "@shared/schemas/visits.ts";
+import { id, person, visit, VISIT_ID } from "../../fixtures/visit.ts";
 import { visitQueryOptions } from "@/lib/api/visits.ts";
-
-const id = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, "0")}`;
-const VISIT_ID = id(100);
-const person = { id: id(7), name: "Sam Toko" };
-
-const visit: Visit = {
-  id: VISIT_ID,
-  equipmentId: id(101),
-  equipmentName: "RTU-1 rooftop",
-  siteName: "Wattle Lane Clinic",
-  customerName: "Wattle Lane Health",
-  refrigerant: "R407C",
-  reason: "Not cooling",
-  status: "open",
-  startedAt: "2026-12-02T01:00:00.000Z",
-  readingCount: 0,
-  technicians: [person],
-  yourLastActivityAt: null,
-  customerContactEmail: null,
-  reviewNote: null,
-  signedOffBy: null,
-  signedOffAt: null,
-  readings: [],
-  circuitLogs: [],
-  adjustments: [],
-  comments: [
-    {
-      id: id(1),
-      readingId: null,
-      reading: null,
-      body: "Filter blocked",
-      author: person,
-      createdAt: "2026-12-02T01:02:00.000Z",
-    },
-  ],
-  photos: [],
-  atmosphere: { pressureKPa: 100.3, basis: "site-altitude", altitudeM: 85, description: "site altitude 85 m" },
-  events: [],
-  revision: "e.3.f",
-};
 
 /** GET /api/visits/:id as the server answers it: whole, 304, or a delta, in the order given. */
 function stubServer(answers: ((url: string, headers: Headers) => Response)[]) {

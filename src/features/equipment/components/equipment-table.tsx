@@ -4,7 +4,7 @@ import { Link } from "react-router-dom";
 import { REFRIGERANT_CATALOGUE } from "@shared/property-tables/refrigerant-catalogue.ts";
 import type { SafetyClass } from "@shared/content/safety-classes.ts";
 import { EQUIPMENT_KINDS, type Equipment } from "@shared/schemas/equipment.ts";
-import type { EquipmentSort } from "@shared/schemas/list-pages.ts";
+import type { EquipmentListParams, EquipmentSort } from "@shared/schemas/list-pages.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { PageControls } from "@/components/ui/data-table/page-controls.tsx";
 import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
@@ -95,6 +95,12 @@ const columns = column.columns([
   }),
 ]);
 
+/**
+ * What the table asks for first (its default sort below, no search or kind): the equipment
+ * route's loader fetches it, so the table opens on the same cache entry.
+ */
+export const FIRST_EQUIPMENT_PAGE: EquipmentListParams = { sort: "name", dir: "asc" };
+
 /** The server's sort for each column id. */
 const SERVER_SORTS: Record<string, EquipmentSort> = {
   name: "name",
@@ -127,6 +133,8 @@ export function EquipmentTable({ empty }: { empty?: ReactNode }) {
   const sort = SERVER_SORTS[current.id] ?? "name";
   const dir = current.desc ? "desc" : "asc";
   const pages = useCursorPages(JSON.stringify([search, kind, sort, dir]));
+  // Paged by a cursor and searched as typed, keeping the last page on screen meanwhile (useQuery's
+  // placeholder): a suspense query would blank the table on each. The first page is the loader's.
   const list = useEquipmentList({
     q: search || undefined,
     kind: (kind || undefined) as (typeof EQUIPMENT_KINDS)[number] | undefined,

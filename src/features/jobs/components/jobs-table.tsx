@@ -1,7 +1,7 @@
 import { createColumnHelper, useTable, type SortingState } from "@tanstack/react-table";
 import { useId, useState, type ReactNode } from "react";
 import { Link } from "react-router-dom";
-import type { VisitSort } from "@shared/schemas/list-pages.ts";
+import type { VisitListParams, VisitSort } from "@shared/schemas/list-pages.ts";
 import { visitReasonText, type VisitStatus, type VisitSummary } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { PageControls } from "@/components/ui/data-table/page-controls.tsx";
@@ -26,6 +26,16 @@ const SERVER_SORTS: Record<string, VisitSort> = {
   status: "status",
 };
 const DEFAULT_SORTING: SortingState = [{ id: "startedAt", desc: true }];
+
+/**
+ * What the table asks for first (DEFAULT_SORTING, no search): the jobs route's loader fetches it,
+ * so the table opens on the same cache entry.
+ */
+export const firstVisitsPage = (status: VisitStatus | null): VisitListParams => ({
+  status: status ?? undefined,
+  sort: "startedAt",
+  dir: "desc",
+});
 
 const column = createColumnHelper<typeof sortableTableFeatures, JobRow>();
 
@@ -92,6 +102,8 @@ export function JobsTable({ status, empty }: { status: VisitStatus | null; empty
   const sort = SERVER_SORTS[current.id] ?? "startedAt";
   const dir = current.desc ? "desc" : "asc";
   const pages = useCursorPages(JSON.stringify([status, search, sort, dir]));
+  // Paged by a cursor and searched as typed, keeping the last page on screen meanwhile (useQuery's
+  // placeholder): a suspense query would blank the table on each. The first page is the loader's.
   const visits = useVisits({ status: status ?? undefined, q: search || undefined, sort, dir, cursor: pages.cursor });
   const rows: JobRow[] = (visits.data?.visits ?? []).map((visit) => ({
     ...visit,

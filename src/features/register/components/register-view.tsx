@@ -1,6 +1,6 @@
 import { Download } from "lucide-react";
 import { useId, useState } from "react";
-import type { SortDirection } from "@shared/schemas/list-pages.ts";
+import type { RegisterPageParams, SortDirection } from "@shared/schemas/list-pages.ts";
 import { MOVEMENT_KIND_LABELS, type RegisterQuery } from "@shared/schemas/register.ts";
 import { buttonVariants } from "@/components/ui/button/button.tsx";
 import { PageControls } from "@/components/ui/data-table/page-controls.tsx";
@@ -27,6 +27,15 @@ export function registerQuery(filters: RegisterFilters): RegisterQuery {
   };
 }
 
+/** Latest first on screen, where the last job's entries are looked for; the export reads oldest first. */
+const FIRST_DIRECTION: SortDirection = "desc";
+
+/** What the view asks for first for the filters: the register route's loader fetches it. */
+export const firstRegisterPage = (filters: RegisterFilters): RegisterPageParams => ({
+  ...registerQuery(filters),
+  dir: FIRST_DIRECTION,
+});
+
 /**
  * The register for a period and technician, with totals by refrigerant over the whole period, its
  * lines a page at a time (the server pages them: a company keeps years of lines), and the CSV
@@ -42,9 +51,10 @@ export function RegisterView({
   mayChooseTechnician: boolean;
 }) {
   const query = registerQuery(filters);
-  // Latest first on screen, where the last job's entries are looked for; the export reads oldest first.
-  const [dir, setDir] = useState<SortDirection>("desc");
+  const [dir, setDir] = useState<SortDirection>(FIRST_DIRECTION);
   const pages = useCursorPages(JSON.stringify([query, dir]));
+  // Paged by a cursor, keeping the last page on screen while the next one or another period loads
+  // (useQuery's placeholder): a suspense query would blank the view each time. The first page is the loader's.
   const register = useRegister({ ...query, dir, cursor: pages.cursor });
   const members = useMembers();
   const totalsId = useId();
