@@ -52,6 +52,16 @@ export default tseslint.config(
     },
   },
   {
+    // Type-aware rules for the Node side and the shared code: a promise nobody awaits loses its
+    // error and its ordering. The client joins once src/ is clean under the same rules.
+    files: ["{server,shared,scripts,bench}/**/*.ts", "*.ts"],
+    languageOptions: { parserOptions: { projectService: true, tsconfigRootDir: import.meta.dirname } },
+    rules: {
+      "@typescript-eslint/no-floating-promises": "error",
+      "@typescript-eslint/no-misused-promises": "error",
+    },
+  },
+  {
     files: ["src/**/*.{ts,tsx}"],
     plugins: { "react-hooks": reactHooks, "@tanstack/query": tanstackQuery },
     rules: {

@@ -56,6 +56,7 @@ function csvPool(): CsvPool {
   created.on("error", (error: Error) => {
     failedPools.set(created, error);
     if (pool === created) pool = undefined;
+    // Not awaited: the handler only lets go of the broken threads; no caller waits on them.
     void created.destroy();
   });
   pool = created;

@@ -90,6 +90,7 @@ export function createReadingSaver(
     setImmediate(() => {
       if (queue.length > seen && queue.length < MAX_BATCH && performance.now() - since < maxGatherMs)
         return gather(since, queue.length);
+      // Nothing waits on the batch: writeBatch answers each save's own promise, failures included.
       void write();
     });
   }
