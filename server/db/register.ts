@@ -373,7 +373,7 @@ export interface MovementInsert {
 
 /** Register movements of visits, for storing once per client id and answering a repeated send. */
 export const movementEntries = entryKind(refrigerantMovements, async (db, row) =>
-  toMovement((await selectMovements(db, [eq(refrigerantMovements.id, row.id)]))[0]!),
+  toMovement(oneRow(await selectMovements(db, [eq(refrigerantMovements.id, row.id)]), "select stored movement")),
 );
 
 /**
