@@ -3,6 +3,7 @@ import type { AuthUser, Role } from "@shared/schemas/auth.ts";
 import { DEFAULT_PREFERENCES, PreferencesSchema, type Preferences } from "@shared/schemas/profile.ts";
 import type { Database } from "./client.ts";
 import { organisations, users } from "./schema.ts";
+import { oneRow } from "./one-row.ts";
 import { forgetUserSessions } from "../auth/session-cache.ts";
 
 type UserRow = typeof users.$inferSelect;
@@ -32,8 +33,11 @@ export async function createOrganisationWithOwner(
   input: { organisationName: string; name: string; email: string; passwordHash: string },
 ): Promise<UserRow> {
   return db.transaction(async (tx) => {
-    const [organisation] = await tx.insert(organisations).values({ name: input.organisationName }).returning();
-    const [owner] = await tx
+    const organisation = oneRow(
+      await tx.insert(organisations).values({ name: input.organisationName }).returning(),
+      "insert organisation",
+    );
+    const owners = await tx
       .insert(users)
       .values({
         organisationId: organisation.id,
@@ -43,7 +47,7 @@ export async function createOrganisationWithOwner(
         passwordHash: input.passwordHash,
       })
       .returning();
-    return owner;
+    return oneRow(owners, "insert owner");
   });
 }
 
@@ -51,8 +55,7 @@ export async function createUser(
   db: Database,
   input: { organisationId: string; name: string; email: string; role: Role; passwordHash: string },
 ): Promise<UserRow> {
-  const [row] = await db.insert(users).values(input).returning();
-  return row;
+  return oneRow(await db.insert(users).values(input).returning(), "insert user");
 }
 
 export async function setPasswordHash(db: Database, userId: string, passwordHash: string): Promise<void> {

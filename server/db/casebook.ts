@@ -28,6 +28,7 @@ import type { ChargeState, DiagnosisInput } from "@shared/schemas/diagnosis.ts";
 import builtInFile from "../../data/casebook/built-in-cases.json";
 import type { Database } from "./client.ts";
 import { casebookAttempts, casebookCases, equipment, readings, users, visits } from "./schema.ts";
+import { oneRow } from "./one-row.ts";
 
 /** The built-in library, checked against its schema once at start-up (bad data fails loudly). */
 const BUILT_IN_CASES: readonly BuiltInCase[] = BuiltInCaseFileSchema.parse(builtInFile).cases;
@@ -188,11 +189,11 @@ export async function insertCase(
   organisationId: string,
   values: CaseDraft & { expected: CaseExpected; createdBy: string; fromReadingId?: string },
 ): Promise<string> {
-  const [row] = await db
+  const rows = await db
     .insert(casebookCases)
     .values({ ...values, organisationId, status: "draft" })
     .returning({ id: casebookCases.id });
-  return row.id;
+  return oneRow(rows, "insert case").id;
 }
 
 /**
@@ -311,7 +312,7 @@ export async function insertAttempt(
   },
 ): Promise<string> {
   const { caseRecord } = values;
-  const [row] = await db
+  const rows = await db
     .insert(casebookAttempts)
     .values({
       organisationId,
@@ -330,7 +331,7 @@ export async function insertAttempt(
       safety: values.safety,
     })
     .returning({ id: casebookAttempts.id });
-  return row.id;
+  return oneRow(rows, "insert attempt").id;
 }
 
 /** One attempt of the organisation; `userId` narrows it to that person's own. */

@@ -14,6 +14,7 @@ import type { CircuitNameplate } from "@shared/schemas/equipment.ts";
 import type { Database } from "./client.ts";
 import { peopleById, person, voidInfo } from "./people.ts";
 import { chargeReferences, circuitCharges, readings, visits } from "./schema.ts";
+import { oneRow } from "./one-row.ts";
 import { countsInResults } from "./visits.ts";
 
 type ReferenceRow = typeof chargeReferences.$inferSelect;
@@ -214,7 +215,7 @@ export async function setChargeReference(
     clearedBy: values.setBy,
     at,
   });
-  const [row] = await db
+  const rows = await db
     .insert(chargeReferences)
     .values({
       organisationId,
@@ -230,7 +231,7 @@ export async function setChargeReference(
       setAt: at,
     })
     .returning({ id: chargeReferences.id });
-  return row.id;
+  return oneRow(rows, "insert charge reference").id;
 }
 
 /** Clears the circuit's standing reference point, keeping it with the reason. @returns whether one stood. */

@@ -40,7 +40,8 @@ export async function circuitReadingsPage(
     .limit(limit + 1);
   const more = rows.length > limit;
   const page = rows.slice(0, limit).reverse();
-  return { rows: page, olderCursor: more ? page[0]!.id : null };
+  const oldest = page[0];
+  return { rows: page, olderCursor: more && oldest ? oldest.id : null };
 }
 
 /** A reading's figures: what counts, the trend, the chart and the report's choice read. */

@@ -16,8 +16,10 @@ import {
   matchesSearchSql,
   pageOf,
   type SortKey,
+  type SortKeys,
 } from "./keyset.ts";
 import { customers, equipment, sites } from "./schema.ts";
+import { oneRow } from "./one-row.ts";
 
 type CustomerValues = z.output<typeof CustomerInputSchema>;
 type SiteValues = z.output<typeof SiteInputSchema>;
@@ -80,11 +82,11 @@ export async function createSite(db: Database, organisationId: string, values: S
     .from(customers)
     .where(and(eq(customers.organisationId, organisationId), eq(customers.id, values.customerId)));
   if (!customer) return undefined;
-  const [row] = await db
+  const rows = await db
     .insert(sites)
     .values({ ...values, organisationId })
     .returning({ id: sites.id });
-  return getSite(db, organisationId, row.id);
+  return getSite(db, organisationId, oneRow(rows, "insert site").id);
 }
 
 const equipmentColumns = {
@@ -140,7 +142,7 @@ const totalFactoryCharge = sql`equipment_factory_charge_kg(${equipment.circuits}
 // reads a page of units; the place sort reads the unit's own lower-case copies of its site's and
 // customer's names (kept by a trigger, migration visit_reading_count), not the joined tables.
 const byName: SortKey = { expr: sql`lower(${equipment.name})`, type: "text" };
-const EQUIPMENT_SORT_KEYS: Record<EquipmentSort, SortKey[]> = {
+const EQUIPMENT_SORT_KEYS: Record<EquipmentSort, SortKeys> = {
   name: [byName],
   kind: [{ expr: equipment.kind, type: "text" }, byName],
   place: [{ expr: equipment.siteSortName, type: "text" }, { expr: equipment.customerSortName, type: "text" }, byName],
@@ -184,9 +186,9 @@ export async function getEquipment(db: Database, organisationId: string, equipme
 export async function createEquipment(db: Database, organisationId: string, values: EquipmentValues) {
   const site = await getSite(db, organisationId, values.siteId);
   if (!site) return undefined;
-  const [row] = await db
+  const rows = await db
     .insert(equipment)
     .values({ ...values, organisationId })
     .returning({ id: equipment.id });
-  return getEquipment(db, organisationId, row.id);
+  return getEquipment(db, organisationId, oneRow(rows, "insert equipment").id);
 }

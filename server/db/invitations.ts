@@ -3,6 +3,7 @@ import type { Invitation } from "@shared/schemas/invitations.ts";
 import type { Role } from "@shared/schemas/auth.ts";
 import type { Database } from "./client.ts";
 import { invitations, organisations, users } from "./schema.ts";
+import { oneRow } from "./one-row.ts";
 
 type InvitationRow = typeof invitations.$inferSelect;
 
@@ -60,7 +61,7 @@ export async function createInvitation(
           isNull(invitations.acceptedAt),
         ),
       );
-    const [row] = await tx
+    const rows = await tx
       .insert(invitations)
       .values({
         organisationId: input.organisationId,
@@ -71,7 +72,7 @@ export async function createInvitation(
         expiresAt: input.expiresAt,
       })
       .returning();
-    return toInvitation(row, input.invitedByName);
+    return toInvitation(oneRow(rows, "insert invitation"), input.invitedByName);
   });
 }
 

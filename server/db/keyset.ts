@@ -18,6 +18,9 @@ export interface SortKey {
   type: KeyType;
 }
 
+/** A list's sort: at least one key, the first of which an index can start from. */
+export type SortKeys = readonly [SortKey, ...SortKey[]];
+
 interface Cursor {
   values: string[];
   id: string;
@@ -41,7 +44,7 @@ export function encodeCursor(sort: string, direction: SortDirection, values: str
 }
 
 /** @throws HttpError 400 when the cursor was not made by `encodeCursor` for this sort and direction. */
-export function decodeCursor(raw: string, sort: string, direction: SortDirection, keys: readonly SortKey[]): Cursor {
+export function decodeCursor(raw: string, sort: string, direction: SortDirection, keys: SortKeys): Cursor {
   const refuse = () => new HttpError(400, BAD_CURSOR, { cursor: BAD_CURSOR });
   let parsed: unknown;
   try {
@@ -57,8 +60,9 @@ export function decodeCursor(raw: string, sort: string, direction: SortDirection
     });
   }
   if (typeof id !== "string" || !UUID.test(id) || !Array.isArray(v) || v.length !== keys.length) throw refuse();
-  const values = v.map((value, index) => {
-    if (typeof value !== "string" || !VALUE_SHAPES[keys[index].type].test(value)) throw refuse();
+  const values = keys.map((key, index) => {
+    const value: unknown = v[index];
+    if (typeof value !== "string" || !VALUE_SHAPES[key.type].test(value)) throw refuse();
     return value;
   });
   return { values, id };
@@ -75,23 +79,25 @@ const typed = (value: string, type: KeyType) =>
  * Rows strictly after the cursor in this order. The first key's bound is also written on its
  * own, so the planner can start an index scan there instead of filtering every row.
  */
-export function afterCursor(
-  keys: readonly SortKey[],
-  idColumn: AnyColumn,
-  direction: SortDirection,
-  cursor: Cursor,
-): SQL {
+export function afterCursor(keys: SortKeys, idColumn: AnyColumn, direction: SortDirection, cursor: Cursor): SQL {
   const beyond = direction === "asc" ? sql.raw(">") : sql.raw("<");
   const reaches = direction === "asc" ? sql.raw(">=") : sql.raw("<=");
   const left = sql.join([...keys.map((key) => sql`${key.expr}`), sql`${idColumn}`], sql`, `);
   const right = sql.join(
-    [...keys.map((key, index) => typed(cursor.values[index], key.type)), sql`cast(${cursor.id} as uuid)`],
+    [...keys.map((key, index) => typed(cursorValue(cursor, index), key.type)), sql`cast(${cursor.id} as uuid)`],
     sql`, `,
   );
   return and(
-    sql`${keys[0].expr} ${reaches} ${typed(cursor.values[0], keys[0].type)}`,
+    sql`${keys[0].expr} ${reaches} ${typed(cursorValue(cursor, 0), keys[0].type)}`,
     sql`(${left}) ${beyond} (${right})`,
   )!;
+}
+
+/** The cursor's value for the key at `index`: `decodeCursor` gave it one per key of the same sort. */
+function cursorValue(cursor: Cursor, index: number): string {
+  const value = cursor.values[index];
+  if (value === undefined) throw new Error(`afterCursor requires a cursor value for sort key ${index}`);
+  return value;
 }
 
 export function keysetOrder(keys: readonly SortKey[], idColumn: AnyColumn, direction: SortDirection): SQL[] {

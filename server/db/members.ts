@@ -3,6 +3,7 @@ import type { Member } from "@shared/schemas/members.ts";
 import type { Role } from "@shared/schemas/auth.ts";
 import type { Database } from "./client.ts";
 import { sessions, users } from "./schema.ts";
+import { oneRow } from "./one-row.ts";
 import { forgetUserSessions } from "../auth/session-cache.ts";
 
 type UserRow = typeof users.$inferSelect;
@@ -36,11 +37,11 @@ export class LastOwnerError extends Error {
 }
 
 async function ownerCount(db: Pick<Database, "select">, organisationId: string): Promise<number> {
-  const [{ owners }] = await db
+  const rows = await db
     .select({ owners: count() })
     .from(users)
     .where(and(activeIn(organisationId), eq(users.role, "owner")));
-  return owners;
+  return oneRow(rows, "count owners").owners;
 }
 
 /**
@@ -62,12 +63,13 @@ export async function changeMemberRole(
     if (!row) return undefined;
     if (row.role === "owner" && role !== "owner" && (await ownerCount(tx, organisationId)) <= 1)
       throw new LastOwnerError();
-    const [updated] = await tx
+    // The row is locked above, so the update finds it.
+    const updated = await tx
       .update(users)
       .set({ role, updatedAt: new Date() })
       .where(eq(users.id, memberId))
       .returning();
-    return toMember(updated);
+    return toMember(oneRow(updated, "update member role"));
   });
   forgetUserSessions(memberId); // the new role applies to their next request
   return member;

@@ -6,6 +6,7 @@
 import { and, eq, gt, lt, sql } from "drizzle-orm";
 import type { Database } from "./client.ts";
 import { rateLimitCounters } from "./schema.ts";
+import { oneRow } from "./one-row.ts";
 
 export interface Counter {
   hits: number;
@@ -15,7 +16,7 @@ export interface Counter {
 /** Adds a hit, starting a new window of `windowMs` when the last one has ended. */
 export async function countHit(db: Database, key: string, windowMs: number): Promise<Counter> {
   const ended = sql`${rateLimitCounters.resetAt} <= now()`;
-  const [row] = await db
+  const rows = await db
     .insert(rateLimitCounters)
     .values({ key, hits: 1, resetAt: sql`now() + ${windowMs} * interval '1 millisecond'` })
     .onConflictDoUpdate({
@@ -26,7 +27,7 @@ export async function countHit(db: Database, key: string, windowMs: number): Pro
       },
     })
     .returning({ hits: rateLimitCounters.hits, resetAt: rateLimitCounters.resetAt });
-  return row;
+  return oneRow(rows, "count hit");
 }
 
 /** Takes back a hit in the current window (a request that turned out not to count). */

@@ -20,8 +20,9 @@ import { CHARGE_ADJUSTMENT_KINDS, type ChargeAdjustmentKind } from "@shared/sche
 import { alias, type PgSelect } from "drizzle-orm/pg-core";
 import type { Database } from "./client.ts";
 import { entryKind, insertEntryOnce, type StoredEntry } from "./store-once.ts";
-import { afterCursor, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKey } from "./keyset.ts";
+import { afterCursor, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKeys } from "./keyset.ts";
 import { adjustments, circuitCharges, cylinders, equipment, refrigerantMovements, sites, users } from "./schema.ts";
+import { oneRow } from "./one-row.ts";
 
 export type CylinderRow = typeof cylinders.$inferSelect & { contentsKg: number };
 
@@ -101,10 +102,13 @@ export async function createCylinder(
     .from(cylinders)
     .where(and(eq(cylinders.organisationId, organisationId), sql`lower(${cylinders.label}) = lower(${values.label})`));
   if (existing) return undefined;
-  const [row] = await db
-    .insert(cylinders)
-    .values({ ...values, organisationId })
-    .returning();
+  const row = oneRow(
+    await db
+      .insert(cylinders)
+      .values({ ...values, organisationId })
+      .returning(),
+    "insert cylinder",
+  );
   return { ...row, contentsKg: row.initialContentsKg };
 }
 
@@ -245,7 +249,7 @@ function registerConditions(organisationId: string, filter: RegisterFilter): SQL
  * regulator's record reads in; the screen may ask for newest first. Each key has an index over
  * the standing lines (refrigerant_movements_register_idx and its per-technician twin).
  */
-const REGISTER_KEYS: readonly SortKey[] = [
+const REGISTER_KEYS: SortKeys = [
   { expr: refrigerantMovements.at, type: "timestamptz" },
   { expr: refrigerantMovements.createdAt, type: "timestamptz" },
 ];
@@ -369,7 +373,7 @@ export interface MovementInsert {
 
 /** Register movements of visits, for storing once per client id and answering a repeated send. */
 export const movementEntries = entryKind(refrigerantMovements, async (db, row) =>
-  toMovement((await selectMovements(db, [eq(refrigerantMovements.id, row.id)]))[0]!),
+  toMovement(oneRow(await selectMovements(db, [eq(refrigerantMovements.id, row.id)]), "select stored movement")),
 );
 
 /**
@@ -458,8 +462,8 @@ export async function voidReclaim(
     .where(and(eq(refrigerantMovements.id, values.movementId), isNull(refrigerantMovements.voidedAt)))
     .returning({ id: refrigerantMovements.id });
   if (voided.length === 0) return "already-void";
-  const [movement] = await selectMovements(db, [eq(refrigerantMovements.id, values.movementId)]);
-  return toMovement(movement);
+  const movements = await selectMovements(db, [eq(refrigerantMovements.id, values.movementId)]);
+  return toMovement(oneRow(movements, "select voided movement"));
 }
 
 /** A member of the organisation by id (for the technician filter), or undefined. */

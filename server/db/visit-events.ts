@@ -7,6 +7,7 @@ import type { VisitEvent, VisitEventAction, VoidableKind } from "@shared/schemas
 import type { Database } from "./client.ts";
 import { peopleById, person } from "./people.ts";
 import { visitEvents } from "./schema.ts";
+import { oneRow } from "./one-row.ts";
 
 export interface VisitEventInsert {
   visitId: string;
@@ -40,7 +41,7 @@ export async function insertVisitEvent(
   organisationId: string,
   values: VisitEventInsert,
 ): Promise<VisitEvent> {
-  const [row] = await db
+  const rows = await db
     .insert(visitEvents)
     .values({
       ...values,
@@ -50,6 +51,7 @@ export async function insertVisitEvent(
       organisationId,
     })
     .returning();
+  const row = oneRow(rows, "insert visit event");
   return toEvent(row, await peopleById(db, [row.actorId]));
 }
 

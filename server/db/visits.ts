@@ -40,7 +40,15 @@ import { siteAtmosphere } from "../visits/reading-input.ts";
 import { visitRevisionToken } from "../visits/visit-revision.ts";
 import type { Database } from "./client.ts";
 import { circuitReadingsPage } from "./circuit-readings.ts";
-import { afterCursor, containsTerm, cursorColumns, decodeCursor, keysetOrder, pageOf, type SortKey } from "./keyset.ts";
+import {
+  afterCursor,
+  containsTerm,
+  cursorColumns,
+  decodeCursor,
+  keysetOrder,
+  pageOf,
+  type SortKeys,
+} from "./keyset.ts";
 import { peopleById, person, voidInfo, type People } from "./people.ts";
 import { entryKind, insertEntryOnce, type DeviceEntryValues, type StoredEntry } from "./store-once.ts";
 import {
@@ -58,6 +66,7 @@ import {
   visitTechnicians,
   visits,
 } from "./schema.ts";
+import { oneRow } from "./one-row.ts";
 import { insertVisitEvent, listVisitEvents } from "./visit-events.ts";
 
 /** Readings that are records: not rows of a CSV import still being stored (see readings.pendingImportId). */
@@ -160,7 +169,7 @@ export interface VisitFilter {
  * unit_name, visit_id) and (organisation_id, reason, visit_id), whose keys are lower(): the table
  * sorted "a" with "A" before, where Postgres would put every capital first.
  */
-const VISIT_SORTS: Record<VisitSort, { keys: SortKey[]; id: AnyColumn }> = {
+const VISIT_SORTS: Record<VisitSort, { keys: SortKeys; id: AnyColumn }> = {
   startedAt: { keys: [{ expr: visits.startedAt, type: "timestamptz" }], id: visits.id },
   equipmentName: { keys: [{ expr: visitSearch.unitName, type: "text" }], id: visitSearch.visitId },
   reason: { keys: [{ expr: visitSearch.reason, type: "text" }], id: visitSearch.visitId },
@@ -224,10 +233,10 @@ export async function listVisitPage(
     eq(visits.organisationId, organisationId),
     eq(visitSearch.organisationId, organisationId),
   ];
-  if (query.status)
-    conditions.push(
-      query.status.length === 1 ? eq(visits.status, query.status[0]) : inArray(visits.status, query.status),
-    );
+  if (query.status) {
+    const [only] = query.status;
+    conditions.push(query.status.length === 1 && only ? eq(visits.status, only) : inArray(visits.status, query.status));
+  }
   if (query.equipmentId) conditions.push(eq(visits.equipmentId, query.equipmentId));
   if (query.crew === "me") {
     conditions.push(
@@ -318,10 +327,13 @@ export async function createVisit(
     .where(and(eq(equipment.organisationId, organisationId), eq(equipment.id, values.equipmentId)));
   if (!unit) return undefined;
   return db.transaction(async (tx) => {
-    const [row] = await tx
-      .insert(visits)
-      .values({ ...values, organisationId })
-      .returning({ id: visits.id });
+    const row = oneRow(
+      await tx
+        .insert(visits)
+        .values({ ...values, organisationId })
+        .returning({ id: visits.id }),
+      "insert visit",
+    );
     await tx.insert(visitTechnicians).values({ visitId: row.id, userId: values.createdBy });
     await insertVisitEvent(tx, organisationId, {
       visitId: row.id,

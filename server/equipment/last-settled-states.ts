@@ -35,8 +35,10 @@ async function lastSettledIn(
   const { lastSettled } = assessTrend(
     series.map((reading) => ({ takenAt: reading.takenAt.toISOString(), input: reading.input, result: reading.result })),
   );
-  if (!lastSettled) return { circuit, takenAt: null, result: null };
-  const result = await readingResult(db, series[lastSettled.index]!.id);
+  // lastSettled.index is a reading of the series the trend was given.
+  const settled = lastSettled && series[lastSettled.index];
+  if (!lastSettled || !settled) return { circuit, takenAt: null, result: null };
+  const result = await readingResult(db, settled.id);
   return { circuit, takenAt: lastSettled.takenAt, result: result ?? null };
 }
 

@@ -24,11 +24,16 @@ const PRELOAD_FLAGS = new Set(["--import", "--require", "-r", "--loader", "--exp
  */
 export function workerExecArgv(serverArgv: readonly string[] = process.execArgv): string[] {
   const kept: string[] = [];
-  for (let index = 0; index < serverArgv.length; index += 1) {
-    const option = serverArgv[index]!;
-    const flag = option.split("=", 1)[0]!;
+  let moduleFollows = false;
+  for (const option of serverArgv) {
+    if (moduleFollows) {
+      moduleFollows = false; // the preloaded module of `--import x`, left out with its flag
+      continue;
+    }
+    const equals = option.indexOf("=");
+    const flag = equals === -1 ? option : option.slice(0, equals);
     if (!PRELOAD_FLAGS.has(flag)) kept.push(option);
-    else if (!option.includes("=")) index += 1;
+    else moduleFollows = equals === -1;
   }
   return kept;
 }
@@ -56,6 +61,7 @@ function csvPool(): CsvPool {
   created.on("error", (error: Error) => {
     failedPools.set(created, error);
     if (pool === created) pool = undefined;
+    // Not awaited: the handler only lets go of the broken threads; no caller waits on them.
     void created.destroy();
   });
   pool = created;

@@ -183,8 +183,13 @@ export function judgeReadingsCsv(task: CsvImportTask): ImportPreview | ImportRef
     }
     const parsed = readingInput(values, task.context);
     if (!parsed.success) {
-      const issue = parsed.error.issues[0]!;
-      return problems.push({ line, field: issue.path.join(".") || undefined, message: issue.message });
+      // A failed parse names at least one issue; the row reports the first.
+      const [issue] = parsed.error.issues;
+      return problems.push({
+        line,
+        field: issue?.path.join(".") || undefined,
+        message: issue?.message ?? "This row is not a reading",
+      });
     }
     const result = diagnose(parsed.data, { withMeasuredCycle: true });
     // Packed here, in the worker, as every stored result is (server/db/stored-result.ts): a preview stores nothing.

@@ -174,7 +174,8 @@ export function topUps(movements: readonly MovementRow[]): EquipmentRefrigerant[
   for (const [visitId, own] of byVisit) {
     const net = sumKg(own, ["reused", ...ADDED_KINDS]) - sumKg(own, ["recovered"]);
     const addedKg = Math.round(net * 1000) / 1000;
-    if (addedKg > 0) result.push({ visitId, date: own[0]!.at, addedKg });
+    const [first] = own;
+    if (addedKg > 0 && first) result.push({ visitId, date: first.at, addedKg });
   }
   return result.sort((a, b) => Date.parse(a.date) - Date.parse(b.date));
 }
@@ -189,8 +190,10 @@ export function leakRate(
   events: EquipmentRefrigerant["topUps"],
   nameplateKg: number,
 ): EquipmentRefrigerant["leakRate"] {
-  if (events.length < 2) return null;
-  const span = Date.parse(events.at(-1)!.date) - Date.parse(events[0]!.date);
+  const first = events[0];
+  const last = events.at(-1);
+  if (events.length < 2 || !first || !last) return null;
+  const span = Date.parse(last.date) - Date.parse(first.date);
   if (span < 86_400_000) return null;
   return annualLeakRate(
     events.map((event) => ({ date: event.date, addedKg: event.addedKg })),

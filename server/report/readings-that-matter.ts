@@ -35,6 +35,6 @@ export function readingsThatMatter<T extends { takenAt: string | number | Date }
       if (after > 0) keep.add(after - 1);
     }
   }
-  const kept = [...keep].sort((a, b) => a - b).map((index) => readings[index]!);
+  const kept = readings.filter((_reading, index) => keep.has(index));
   return { readings: kept, leftOut: readings.length - kept.length };
 }

@@ -1,5 +1,6 @@
 import { randomInt } from "node:crypto";
 import { Router, type Response } from "express";
+import { upperFirst } from "@shared/format/upper-first.ts";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { authoredAnswers, diagnose, generateCase, seededRandom } from "@shared/engine/index.ts";
 import {
@@ -120,7 +121,7 @@ export function casesRouter({ db }: Deps): Router {
       difficulty: "intermediate",
       story: {
         site: "A real site (customer details removed)",
-        equipment: `${reading.kind[0]!.toUpperCase()}${reading.kind.slice(1)} on ${input.refrigerant}, circuit ${reading.circuit}, ${METERING_WORDS[input.meteringDevice]}`,
+        equipment: `${upperFirst(reading.kind)} on ${input.refrigerant}, circuit ${reading.circuit}, ${METERING_WORDS[input.meteringDevice]}`,
         complaint: "Describe what the customer reported.",
         conditions:
           input.runMinutes === undefined

@@ -19,6 +19,8 @@ export function chartSeries(points: readonly ChartPoint[], maxPoints = MAX_SERIE
   if (points.length <= maxPoints) return [...points];
   const tailStart = points.length - EXACT_TAIL_POINTS;
   const buckets = Math.max(1, Math.floor((maxPoints - EXACT_TAIL_POINTS - 1) / (2 * LINES.length)));
+  // Hot path (every poll of a long run log), unchecked reads: the series is longer than maxPoints
+  // here, indexes run below its length, slots below buckets × lines, and LINES[line] is a line.
   const from = points[0]!.x;
   const span = points[tailStart - 1]!.x - from;
   const width = span > 0 ? span / buckets : 1;
@@ -42,5 +44,5 @@ export function chartSeries(points: readonly ChartPoint[], maxPoints = MAX_SERIE
   for (const index of least) if (index >= 0) kept.add(index);
   for (const index of greatest) if (index >= 0) kept.add(index);
   for (let index = tailStart; index < points.length; index++) kept.add(index);
-  return [...kept].sort((a, b) => a - b).map((index) => points[index]!);
+  return [...kept].sort((a, b) => a - b).map((index) => points[index]!); // kept holds indexes of points
 }

@@ -44,7 +44,8 @@ async function trendOf(
   adjustments: readonly Adjustment[],
 ): Promise<TrendResult | null> {
   const distinct = lastAtEachInstant(figures, (row) => row.takenAt);
-  if (distinct.length === 0) return null;
+  const latest = distinct.at(-1);
+  if (!latest) return null;
   const changes = adjustments.map((adjustment) => ({
     at: Date.parse(adjustment.at),
     description: adjustment.description,
@@ -54,8 +55,9 @@ async function trendOf(
   const series = distinct.map((row) => {
     const time = row.takenAt;
     // Adjustments come in time order: skip those before the previous reading, take the first since.
-    while (next < changes.length && changes[next]!.at <= previous) next += 1;
-    const change = next < changes.length && changes[next]!.at <= time ? changes[next]! : undefined;
+    let pending = changes[next];
+    while (pending && pending.at <= previous) pending = changes[++next];
+    const change = pending && pending.at <= time ? pending : undefined;
     previous = time;
     return {
       takenAt: new Date(row.takenAt).toISOString(),
@@ -73,8 +75,9 @@ async function trendOf(
     if (error instanceof DiagnosisInputError) return null;
     throw error;
   }
-  const settledId = trend.lastSettled ? distinct[trend.lastSettled.index]!.id : null;
-  const latestId = distinct.at(-1)!.id;
+  // lastSettled.index is a reading of the series, which has one per distinct reading.
+  const settledId = trend.lastSettled ? (distinct[trend.lastSettled.index]?.id ?? null) : null;
+  const latestId = latest.id;
   const wholeRows = await readingRowsById(db, settledId && settledId !== latestId ? [latestId, settledId] : [latestId]);
   const results = new Map(wholeRows.map((row) => [row.id, row.result]));
   return {
@@ -163,14 +166,16 @@ async function recordsOf(
 
 async function workOut(db: Database, records: ReadingFigures[], adjustments: readonly Adjustment[]): Promise<Worked> {
   const logs: CircuitLogRows[] = [];
-  let start = 0;
   // Records come by circuit: one circuit's slice at a time.
-  while (start < records.length) {
-    const circuit = records[start]!.circuit;
-    let end = start;
-    while (end < records.length && records[end]!.circuit === circuit) end += 1;
+  let start = 0;
+  let first = records[0];
+  while (first) {
+    const { circuit } = first;
+    let end = start + 1;
+    while (records[end]?.circuit === circuit) end += 1;
     logs.push(await circuitLog(db, circuit, records.slice(start, end), adjustments));
     start = end;
+    first = records[start];
   }
   return { records, logs };
 }

@@ -90,6 +90,7 @@ export function createReadingSaver(
     setImmediate(() => {
       if (queue.length > seen && queue.length < MAX_BATCH && performance.now() - since < maxGatherMs)
         return gather(since, queue.length);
+      // Nothing waits on the batch: writeBatch answers each save's own promise, failures included.
       void write();
     });
   }
@@ -142,7 +143,7 @@ async function writeBatch(db: Database, batch: Pending[]): Promise<void> {
     }
   }
   batch.forEach((pending, index) => {
-    const outcome = outcomes[index]!;
+    const outcome = outcomes[index] ?? { error: new Error("writeBatch requires one outcome per save") };
     if ("stored" in outcome) pending.resolve(outcome.stored);
     else pending.reject(outcome.error);
   });
@@ -241,10 +242,16 @@ async function saveTogether(tx: Database, batch: Pending[]): Promise<Outcome[]> 
     rows.map(({ row }) => row),
     people,
   );
-  rows.forEach(({ index }, position) => (outcomes[index] = { stored: stored[position]! }));
+  rows.forEach(({ index }, position) => {
+    const entry = stored[position];
+    // Thrown inside the transaction: the batch rolls back and each save is tried alone.
+    if (!entry) throw new Error("insertReadings returned fewer readings than it was given");
+    outcomes[index] = { stored: entry };
+  });
   for (const [index, earlier] of sameAs) {
-    const outcome = outcomes[earlier]!;
-    outcomes[index] = "stored" in outcome ? { stored: { entry: outcome.stored.entry, replayed: true } } : outcome;
+    const outcome = outcomes[earlier];
+    if (outcome)
+      outcomes[index] = "stored" in outcome ? { stored: { entry: outcome.stored.entry, replayed: true } } : outcome;
   }
   // Whoever records something on a visit is on its crew.
   const crew = new Map(

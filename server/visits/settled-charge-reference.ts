@@ -38,12 +38,11 @@ export function settledChargeReference(runLog: WeighInRunLog): SettledChargeRefe
   let nextAdjustment = 0;
   const series: TrendReading[] = logged.map((reading) => {
     let adjustment: string | undefined;
-    while (
-      nextAdjustment < runLog.adjustments.length &&
-      runLog.adjustments[nextAdjustment]!.at.getTime() <= reading.takenAt.getTime()
-    ) {
-      adjustment = runLog.adjustments[nextAdjustment]!.description;
+    let due = runLog.adjustments[nextAdjustment];
+    while (due && due.at.getTime() <= reading.takenAt.getTime()) {
+      adjustment = due.description;
       nextAdjustment += 1;
+      due = runLog.adjustments[nextAdjustment];
     }
     return {
       takenAt: reading.takenAt.toISOString(),
@@ -53,10 +52,12 @@ export function settledChargeReference(runLog: WeighInRunLog): SettledChargeRefe
     };
   });
   let settledAt: number;
+  let settled: (typeof logged)[number] | undefined;
   try {
     const trend = assessTrend(series);
     if (!trend.lastSettled) return null;
     settledAt = trend.lastSettled.index;
+    settled = logged[settledAt]; // a reading of `series`, which has one per logged reading
   } catch (error) {
     // Stored readings were valid when saved; a run log the trend cannot read gives no reference.
     if (error instanceof DiagnosisInputError) return null;
@@ -65,20 +66,17 @@ export function settledChargeReference(runLog: WeighInRunLog): SettledChargeRefe
 
   // The settled window, as the trend judged it: back to the reading at or before one window
   // earlier, never before the last adjustment.
-  const settledMs = logged[settledAt]!.takenAt.getTime();
-  let first = 0;
-  for (let index = settledAt; index >= 0; index -= 1) {
-    if (series[index]!.adjustment !== undefined) {
-      first = index;
-      break;
-    }
-  }
-  for (let index = settledAt; index >= first; index -= 1) {
-    if (settledMs - logged[index]!.takenAt.getTime() >= SETTLED_WINDOW_MINUTES * MINUTE_MS) {
-      first = index;
-      break;
-    }
-  }
+  if (!settled) return null;
+  const settledMs = settled.takenAt.getTime();
+  const adjustedAt = series.findLastIndex((reading, index) => index <= settledAt && reading.adjustment !== undefined);
+  const sinceAdjustment = Math.max(0, adjustedAt);
+  const windowStart = logged.findLastIndex(
+    (reading, index) =>
+      index >= sinceAdjustment &&
+      index <= settledAt &&
+      settledMs - reading.takenAt.getTime() >= SETTLED_WINDOW_MINUTES * MINUTE_MS,
+  );
+  const first = windowStart === -1 ? sinceAdjustment : windowStart;
   const window = logged.slice(first, settledAt + 1);
   const subcoolingK = meanOf(window.map((reading) => reading.result.subcoolingK));
   const superheatK = meanOf(window.map((reading) => reading.result.superheatK));
@@ -97,5 +95,5 @@ export function settledChargeReference(runLog: WeighInRunLog): SettledChargeRefe
     returnAirDryBulbC: returnAirDryBulbC === null ? null : tenths(returnAirDryBulbC),
   });
   if (!parsed.success) return null;
-  return { values: parsed.data, readingId: logged[settledAt]!.id, readingCount: window.length };
+  return { values: parsed.data, readingId: settled.id, readingCount: window.length };
 }

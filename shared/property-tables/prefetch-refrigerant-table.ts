@@ -12,6 +12,7 @@
 import { SATURATION_TABLE_IMPORTS } from "../engine/properties/saturation-table-imports.ts";
 
 export function prefetchRefrigerantTable(id: string): void {
-  if (!Object.hasOwn(SATURATION_TABLE_IMPORTS, id)) return;
-  SATURATION_TABLE_IMPORTS[id]!().catch(() => undefined);
+  // Own keys only: an id such as "toString" has no table.
+  const load = Object.hasOwn(SATURATION_TABLE_IMPORTS, id) ? SATURATION_TABLE_IMPORTS[id] : undefined;
+  load?.().catch(() => undefined);
 }

@@ -601,15 +601,18 @@ export const TrendInputSchema = z
   .array(TrendReadingSchema)
   .min(1, "A trend needs at least one reading")
   .superRefine((series, ctx) => {
-    for (let index = 1; index < series.length; index += 1) {
-      if (Date.parse(series[index]!.takenAt) <= Date.parse(series[index - 1]!.takenAt)) {
+    let previous = Number.NEGATIVE_INFINITY;
+    series.forEach((reading, index) => {
+      const at = Date.parse(reading.takenAt);
+      if (at <= previous) {
         ctx.addIssue({
           code: "custom",
           path: [index, "takenAt"],
           message: "Readings must be in time order, each later than the one before",
         });
       }
-    }
+      previous = at;
+    });
   });
 
 const RateSchema = z.object({

@@ -279,15 +279,17 @@ export const VacuumSamplesSchema = z
   .min(1, "Enter at least one vacuum reading")
   .superRefine((samples, ctx) => {
     // Rates need time to move forward; a repeated or earlier time is a typing error.
-    for (let i = 1; i < samples.length; i++) {
-      if (samples[i]!.minutes <= samples[i - 1]!.minutes) {
+    let previous = Number.NEGATIVE_INFINITY;
+    samples.forEach((sample, index) => {
+      if (sample.minutes <= previous) {
         ctx.addIssue({
           code: "custom",
-          path: [i, "minutes"],
+          path: [index, "minutes"],
           message: "Each reading must be later than the one before it",
         });
       }
-    }
+      previous = sample.minutes;
+    });
   });
 
 /** Decay test readings, taken after the pump is valved off: at least two (start and end). */

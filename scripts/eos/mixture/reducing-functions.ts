@@ -112,10 +112,11 @@ export function createReducingFunctions(
         const [fV, fVi, fVj] = pairShape(xi, xj, pair.betaV * pair.betaV);
         temperature += temperatureFactor[p]! * fT;
         volume += volumeFactor[p]! * fV;
-        result.dTemperature[pair.i] += temperatureFactor[p]! * fTi;
-        result.dTemperature[pair.j] += temperatureFactor[p]! * fTj;
-        result.dVolume[pair.i] += volumeFactor[p]! * fVi;
-        result.dVolume[pair.j] += volumeFactor[p]! * fVj;
+        // pair.i and pair.j are component indices, below `count`, the length of both arrays.
+        result.dTemperature[pair.i]! += temperatureFactor[p]! * fTi;
+        result.dTemperature[pair.j]! += temperatureFactor[p]! * fTj;
+        result.dVolume[pair.i]! += volumeFactor[p]! * fVi;
+        result.dVolume[pair.j]! += volumeFactor[p]! * fVj;
       }
       result.temperature = temperature;
       result.density = 1 / volume;

@@ -22,6 +22,7 @@ import { calibrateAfterWeighIn } from "../../visits/calibrate-after-weigh-in.ts"
 import { standingChargeReference } from "../charge-references.ts";
 import { demoSite } from "./demo-scenario.ts";
 import type { Database } from "../client.ts";
+import { oneRow } from "../one-row.ts";
 import { MOVEMENT_DIRECTION } from "@shared/schemas/register.ts";
 import {
   adjustments,
@@ -173,20 +174,23 @@ export async function seedDemoVisits(
     // the drier replaced, the circuit evacuated and the 4.2 kg nameplate charge weighed back in;
     // it settled on target, which made those readings circuit 1's charge reference point.
     const drierStart = now - 150 * DAY;
-    const [drier] = await db
-      .insert(visits)
-      .values({
-        organisationId,
-        equipmentId: rooftop.id,
-        reason: "Circuit 1 frosting at the liquid line filter-drier",
-        status: "signed-off",
-        reviewNote: "Drier replaced, nameplate charge weighed in, settled on target.",
-        signedOffBy: people.senior,
-        signedOffAt: new Date(drierStart + 5 * 60 * MINUTE),
-        createdBy: people.technician2,
-        startedAt: new Date(drierStart),
-      })
-      .returning({ id: visits.id });
+    const drier = oneRow(
+      await db
+        .insert(visits)
+        .values({
+          organisationId,
+          equipmentId: rooftop.id,
+          reason: "Circuit 1 frosting at the liquid line filter-drier",
+          status: "signed-off",
+          reviewNote: "Drier replaced, nameplate charge weighed in, settled on target.",
+          signedOffBy: people.senior,
+          signedOffAt: new Date(drierStart + 5 * 60 * MINUTE),
+          createdBy: people.technician2,
+          startedAt: new Date(drierStart),
+        })
+        .returning({ id: visits.id }),
+      "insert the drier visit",
+    );
     await db.insert(visitTechnicians).values({ visitId: drier.id, userId: people.technician2 });
     await insertChargeEntries([
       movement(drier.id, people.technician2, drierStart + 30 * MINUTE, {
@@ -272,20 +276,23 @@ export async function seedDemoVisits(
 
   // 1. Three weeks ago: circuit 2 tripping on high pressure; a burnt condenser-fan contactor.
   const repairStart = now - 21 * DAY;
-  const [repair] = await db
-    .insert(visits)
-    .values({
-      organisationId,
-      equipmentId: rooftop.id,
-      reason: "Circuit 2 trips on high pressure on hot afternoons",
-      status: "signed-off",
-      reviewNote: "Contactor replaced, circuit settled in band.",
-      signedOffBy: people.senior,
-      signedOffAt: new Date(repairStart + 3 * 60 * MINUTE),
-      createdBy: people.technician2,
-      startedAt: new Date(repairStart),
-    })
-    .returning({ id: visits.id });
+  const repair = oneRow(
+    await db
+      .insert(visits)
+      .values({
+        organisationId,
+        equipmentId: rooftop.id,
+        reason: "Circuit 2 trips on high pressure on hot afternoons",
+        status: "signed-off",
+        reviewNote: "Contactor replaced, circuit settled in band.",
+        signedOffBy: people.senior,
+        signedOffAt: new Date(repairStart + 3 * 60 * MINUTE),
+        createdBy: people.technician2,
+        startedAt: new Date(repairStart),
+      })
+      .returning({ id: visits.id }),
+    "insert the repair visit",
+  );
   await db.insert(visitTechnicians).values({ visitId: repair.id, userId: people.technician2 });
   await db.insert(adjustments).values({
     organisationId,
@@ -342,17 +349,20 @@ export async function seedDemoVisits(
   // ago; the charge was then recovered and weighed (3.1 kg of 4.2 kg: 1.1 kg short), the core
   // replaced and the nameplate charge weighed back in.
   const leakStart = now - DAY;
-  const [leak] = await db
-    .insert(visits)
-    .values({
-      organisationId,
-      equipmentId: rooftop.id,
-      reason: "Waiting room warm in the afternoons; circuit 1 iced suction line reported",
-      status: "awaiting-review",
-      createdBy: people.technician,
-      startedAt: new Date(leakStart),
-    })
-    .returning({ id: visits.id });
+  const leak = oneRow(
+    await db
+      .insert(visits)
+      .values({
+        organisationId,
+        equipmentId: rooftop.id,
+        reason: "Waiting room warm in the afternoons; circuit 1 iced suction line reported",
+        status: "awaiting-review",
+        createdBy: people.technician,
+        startedAt: new Date(leakStart),
+      })
+      .returning({ id: visits.id }),
+    "insert the leak visit",
+  );
   await db.insert(visitTechnicians).values({ visitId: leak.id, userId: people.technician });
   const firstRead = leakStart + 20 * MINUTE;
   await db.insert(readings).values(
@@ -403,19 +413,22 @@ export async function seedDemoVisits(
   if (withChargeHistory) {
     // Lee brought the recovery machine and the part-used cylinder from the van, and kept the register lines.
     await db.insert(visitTechnicians).values({ visitId: leak.id, userId: people.technician2 });
-    const [van] = await db
-      .insert(cylinderTable)
-      .values({
-        organisationId,
-        label: "BM-407C-N2",
-        serial: "NX10-51877",
-        kind: "new",
-        refrigerant: rooftop.refrigerant,
-        waterCapacityKg: 15,
-        tareKg: 6.1,
-        initialContentsKg: 2.5,
-      })
-      .returning({ id: cylinderTable.id });
+    const van = oneRow(
+      await db
+        .insert(cylinderTable)
+        .values({
+          organisationId,
+          label: "BM-407C-N2",
+          serial: "NX10-51877",
+          kind: "new",
+          refrigerant: rooftop.refrigerant,
+          waterCapacityKg: 15,
+          tareKg: 6.1,
+          initialContentsKg: 2.5,
+        })
+        .returning({ id: cylinderTable.id }),
+      "insert the van cylinder",
+    );
     await insertChargeEntries([
       movement(leak.id, people.technician2, firstRead + 8 * MINUTE, {
         kind: "recovered",
@@ -515,16 +528,19 @@ export async function seedDemoVisits(
 
   // 3. Today: the quarterly check on the server-cupboard split is under way.
   const checkStart = now - 25 * MINUTE;
-  const [check] = await db
-    .insert(visits)
-    .values({
-      organisationId,
-      equipmentId: split.id,
-      reason: "Quarterly check of the server cupboard split",
-      createdBy: people.technician,
-      startedAt: new Date(checkStart),
-    })
-    .returning({ id: visits.id });
+  const check = oneRow(
+    await db
+      .insert(visits)
+      .values({
+        organisationId,
+        equipmentId: split.id,
+        reason: "Quarterly check of the server cupboard split",
+        createdBy: people.technician,
+        startedAt: new Date(checkStart),
+      })
+      .returning({ id: visits.id }),
+    "insert the check visit",
+  );
   await db.insert(visitTechnicians).values({ visitId: check.id, userId: people.technician });
   await db.insert(readings).values(
     readingRows(

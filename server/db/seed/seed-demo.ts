@@ -1,6 +1,7 @@
 import { count } from "drizzle-orm";
 import { hashPassword } from "../../auth/password.ts";
 import type { Database } from "../client.ts";
+import { oneRow } from "../one-row.ts";
 import { analyzeTables } from "../planner-statistics.ts";
 import { customers, cylinders, equipment, organisations, sites, users } from "../schema.ts";
 import {
@@ -23,24 +24,36 @@ export async function seedDemoData(
   db: Database,
   options: Pick<DemoVisitOptions, "withChargeHistory"> = {},
 ): Promise<boolean> {
-  const [{ organisationCount }] = await db.select({ organisationCount: count() }).from(organisations);
+  const { organisationCount } = oneRow(
+    await db.select({ organisationCount: count() }).from(organisations),
+    "count organisations",
+  );
   if (organisationCount > 0) return false;
 
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await db.transaction(async (tx) => {
-    const [organisation] = await tx.insert(organisations).values(demoOrganisation).returning();
+    const organisation = oneRow(
+      await tx.insert(organisations).values(demoOrganisation).returning(),
+      "insert the demo organisation",
+    );
     const people = await tx
       .insert(users)
       .values(demoPeople.map((person) => ({ ...person, organisationId: organisation.id, passwordHash })))
       .returning({ id: users.id, email: users.email });
-    const [customer] = await tx
-      .insert(customers)
-      .values({ ...demoCustomer, organisationId: organisation.id })
-      .returning();
-    const [site] = await tx
-      .insert(sites)
-      .values({ ...demoSite, organisationId: organisation.id, customerId: customer.id })
-      .returning();
+    const customer = oneRow(
+      await tx
+        .insert(customers)
+        .values({ ...demoCustomer, organisationId: organisation.id })
+        .returning(),
+      "insert the demo customer",
+    );
+    const site = oneRow(
+      await tx
+        .insert(sites)
+        .values({ ...demoSite, organisationId: organisation.id, customerId: customer.id })
+        .returning(),
+      "insert the demo site",
+    );
     const units = await tx
       .insert(equipment)
       .values(demoEquipment.map((item) => ({ ...item, organisationId: organisation.id, siteId: site.id })))

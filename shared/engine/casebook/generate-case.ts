@@ -1,3 +1,4 @@
+import { upperFirst } from "../../format/upper-first.ts";
 import type { BuiltInCase, CaseDifficulty, GeneratorFault } from "../../schemas/casebook.ts";
 import type { Application, MeteringDevice } from "../../schemas/diagnosis.ts";
 import { diagnose } from "../diagnosis/diagnose.ts";
@@ -167,7 +168,9 @@ const SITES = [
 ] as const;
 
 function pick<T>(random: () => number, items: readonly T[]): T {
-  return items[Math.min(items.length - 1, Math.floor(random() * items.length))]!;
+  const item = items[Math.min(items.length - 1, Math.floor(random() * items.length))];
+  if (item === undefined) throw new RangeError("generateCase requires a list to pick from with at least one item");
+  return item;
 }
 
 /**
@@ -223,7 +226,7 @@ export function generateCase(options: GenerateCaseOptions): GeneratedCase {
       difficulty,
       story: {
         site: pick(options.random, SITES),
-        equipment: `${equipment[0]!.toUpperCase()}${equipment.slice(1)} on ${options.refrigerant} with a ${DEVICE_WORDS[options.meteringDevice]}, ${APPLICATION_WORDS[application]}`,
+        equipment: `${upperFirst(equipment)} on ${options.refrigerant} with a ${DEVICE_WORDS[options.meteringDevice]}, ${APPLICATION_WORDS[application]}`,
         complaint: pick(options.random, story.complaints),
         conditions: "Settled readings after the unit has run a while, panels on, filters as found.",
       },

@@ -51,7 +51,8 @@ export function chargeStepChecks(
   const sortedSteps = [...steps].sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
   return sortedSteps.map((step, index) => {
     const at = Date.parse(step.at);
-    const nextAt = index + 1 < sortedSteps.length ? Date.parse(sortedSteps[index + 1]!.at) : Number.POSITIVE_INFINITY;
+    const next = sortedSteps[index + 1];
+    const nextAt = next ? Date.parse(next.at) : Number.POSITIVE_INFINITY;
     const before = ordered.filter((point) => Date.parse(point.takenAt) < at).at(-1)?.chargeDeviation ?? null;
     const after =
       ordered.filter((point) => Date.parse(point.takenAt) > at && Date.parse(point.takenAt) < nextAt).at(-1)

@@ -66,6 +66,7 @@ function windowBounds(series: TrendSeries): WindowBounds {
   const first = new Int32Array(count);
   let adjustment = 0;
   let pointer = 0;
+  // Hot path, unchecked reads: pointer ≤ index < count, so both are readings.
   for (let index = 0; index < count; index += 1) {
     if (adjusted[index] === 1) adjustment = index;
     observedFrom[index] = adjustment;
@@ -92,11 +93,11 @@ function spreadAndSlope(
     if (value === null || value === undefined) continue;
     if (value < minimum) minimum = value;
     if (value > maximum) maximum = value;
-    x.push(minutes[index]!);
+    x.push(minutes[index]!); // first ≤ index ≤ last: a reading
     y.push(value);
   }
   const change = x.length === 0 ? null : maximum - minimum;
-  const rate = x.length >= 2 && x[x.length - 1]! > x[0]! ? leastSquaresSlope(x, y) : null;
+  const rate = x.length >= 2 && x[x.length - 1]! > x[0]! ? leastSquaresSlope(x, y) : null; // two or more: both ends exist
   return { change, rate };
 }
 
@@ -109,6 +110,7 @@ function windowStatus(
   last: number,
 ): WindowStatus {
   const { minutes } = series;
+  // `last` is a reading, and windowBounds holds reading indexes for each.
   const start = bounds.observedFrom[last]!;
   const minutesObserved = minutes[last]! - minutes[start]!;
   const first = bounds.first[last]!;
@@ -183,6 +185,8 @@ function windowStatus(
  * window has turned over, so rounding stays that of a few windows' sums.
  */
 class SlidingColumn {
+  // Hot path, unchecked reads: every index passed in, and every queue entry in [low, high), is a
+  // reading of the log, which `minutes`, `values` and both queues are as long as.
   private readonly minQueue: Int32Array;
   private readonly maxQueue: Int32Array;
   // Each queue holds window indices in increasing order in [low, high): pushed on the left,
@@ -248,12 +252,12 @@ class SlidingColumn {
   private rebuildWhenWorn(first: number, last: number): void {
     if (this.updates <= 2 * (last - first + 1) + 16) return;
     this.updates = 0;
-    this.origin = last >= 0 ? this.minutes[last]! : 0;
+    this.origin = last >= 0 ? this.minutes[last]! : 0; // a reading when not −1
     this.count = this.sumX = this.sumY = this.sumXX = this.sumXY = 0;
     for (let index = first; index <= last; index += 1) this.accumulate(index, 1);
   }
 
-  /** Largest − smallest value in the window, K (only while count > 0). */
+  /** Largest − smallest value in the window, K (only while count > 0, when neither queue is empty). */
   change(): number {
     return this.values[this.maxQueue[this.maxHigh - 1]!]! - this.values[this.minQueue[this.minHigh - 1]!]!;
   }
@@ -298,6 +302,7 @@ function lastSettledIndex(
 ): number {
   const { minutes, runMinutes } = series;
   const count = minutes.length;
+  // Hot path, unchecked reads: `last` < count, and windowBounds holds reading indexes.
   const superheat = new SlidingColumn(minutes, superheats);
   const subcooling = new SlidingColumn(minutes, subcoolings);
   let first = count;
@@ -355,6 +360,7 @@ export function assessTrend(readings: readonly unknown[]): TrendResult {
 
   const status = windowStatus(series, bounds, superheats, subcoolings, count - 1);
   const settledIndex = status.settled ? count - 1 : lastSettledIndex(series, bounds, superheats, subcoolings);
+  // The series holds one reading or more (its schema), and settledIndex, when not −1, is one of them.
   const lastSettled: TrendResult["lastSettled"] =
     settledIndex < 0
       ? null

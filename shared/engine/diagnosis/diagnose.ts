@@ -114,6 +114,7 @@ export function diagnose(input: DiagnosisInput, options: DiagnoseOptions = {}): 
   const primaryRule = PRIMARY_RULE[snapshot.meteringFamily];
   let judged = false;
   let danger = false;
+  // Hot path: indexed loops over arrays (no iterators); each `!` reads an index below its array's length.
   for (let ruleIndex = 0; ruleIndex < DIAGNOSIS_RULES.length; ruleIndex += 1) {
     const output = DIAGNOSIS_RULES[ruleIndex]!.evaluate(snapshot);
     const ruleFindings = output.findings;
@@ -171,7 +172,7 @@ export function diagnose(input: DiagnosisInput, options: DiagnoseOptions = {}): 
     for (let index = 0; index < findings.length; index += 1) {
       const finding = findings[index]!;
       const weight = evidenceWeight(finding, state);
-      let position = index;
+      let position = index; // 0 < position ≤ index below: weights and findings both hold position − 1
       while (position > 0 && weights[position - 1]! < weight) {
         weights[position] = weights[position - 1]!;
         findings[position] = findings[position - 1]!;

@@ -47,6 +47,7 @@ export function evidenceFromSignature(
 ): Evidence[] {
   const cells = (family === "fixed" ? FIXED_CELLS : VALVE_CELLS)[feature];
   const evidence: Evidence[] = [];
+  // Hot path (once per rule per diagnosis): an indexed loop, index < cells.length.
   for (let index = 0; index < cells.length; index += 1) {
     const entry = cells[index]!;
     const found = entry[1];

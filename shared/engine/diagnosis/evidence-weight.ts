@@ -9,6 +9,7 @@ import type { EvidenceState, Finding } from "../../schemas/diagnosis.ts";
  */
 export function evidenceWeight(finding: Finding, state: EvidenceState): number {
   const pointsTo = finding.pointsTo;
+  // Hot path (once per finding and state): an indexed loop, index < pointsTo.length.
   for (let index = 0; index < pointsTo.length; index += 1)
     if (pointsTo[index]!.state === state) return pointsTo[index]!.weight;
   return 0;

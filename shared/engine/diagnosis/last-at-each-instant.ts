@@ -12,10 +12,9 @@
  */
 export function lastAtEachInstant<T>(readings: readonly T[], time: (reading: T) => number): T[] {
   const kept: T[] = [];
-  for (let index = 0; index < readings.length; index += 1) {
-    const reading = readings[index]!;
+  readings.forEach((reading, index) => {
     const next = readings[index + 1];
     if (next === undefined || time(next) > time(reading)) kept.push(reading);
-  }
+  });
   return kept;
 }

@@ -10,6 +10,7 @@
 export function leastSquaresSlope(x: readonly number[], y: readonly number[]): number {
   if (x.length !== y.length || x.length < 2)
     throw new RangeError("leastSquaresSlope requires two or more paired points");
+  // Hot path (the trend's rates): x and y have the same length (checked above), so index reads both.
   let meanX = 0;
   let meanY = 0;
   for (let index = 0; index < x.length; index += 1) {

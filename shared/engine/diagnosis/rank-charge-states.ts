@@ -36,6 +36,8 @@ const byScoreDescending = (first: RankedState, second: RankedState) => second.sc
  */
 export function rankChargeStates(findings: readonly Finding[]): RankedState[] {
   const scores = [0, 0, 0, 0, 0, 0, 0, 0, 0];
+  // Hot path: indexes stay below their arrays' lengths, and every state's length is in
+  // INDEX_BY_LENGTH (built from the same nine states) with an index below nine.
   for (let findingIndex = 0; findingIndex < findings.length; findingIndex += 1) {
     const pointsTo = findings[findingIndex]!.pointsTo;
     for (let evidenceIndex = 0; evidenceIndex < pointsTo.length; evidenceIndex += 1) {

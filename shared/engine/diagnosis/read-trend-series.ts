@@ -99,7 +99,9 @@ function readValidatedSeries(readings: readonly unknown[]): TrendSeries {
   const parsed = TrendInputSchema.safeParse(readings);
   if (!parsed.success) throw DiagnosisInputError.fromZodError(parsed.error);
   const valid: TrendReading[] = parsed.data;
-  const origin = Date.parse(valid[0]!.takenAt);
+  // The schema keeps at least one reading; with none there would be no minutes to count from it.
+  const [first] = valid;
+  const origin = first ? Date.parse(first.takenAt) : 0;
   return {
     takenAt: valid.map((reading) => reading.takenAt),
     minutes: Float64Array.from(valid, (reading) => (Date.parse(reading.takenAt) - origin) / MINUTE_MS),

@@ -74,6 +74,7 @@ export function summarizeVerdict(
   // The findings come sorted by their weight for the verdict, strongest first (diagnose()).
   const parts: string[] = [];
   let total = 0;
+  // index < findings.length, and `weights`, when given, holds one per finding (contract above).
   for (let index = 0; index < findings.length; index += 1) {
     const finding = findings[index]!;
     const weight = weights ? weights[index]! : evidenceWeight(finding, state);

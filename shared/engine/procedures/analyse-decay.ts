@@ -57,7 +57,7 @@ export function analyseDecay(
   samples: readonly { minutes: number; microns: number }[],
   options: DecayOptions = {},
 ): DecayAnalysis {
-  requireVacuumSamples(samples, 2, "analyseDecay");
+  const { first, last } = requireVacuumSamples(samples, 2, "analyseDecay");
   const { holdMicrons: holdOption, ...limitOptions } = options;
   const { limits, overridden } = resolveLimits(EVACUATION_LIMITS, limitOptions);
   const holdMicrons = holdOption ?? limits.targetMicrons;
@@ -71,8 +71,6 @@ export function analyseDecay(
   }
   const source = limitSource(SOURCE, overridden || holdOption !== undefined);
 
-  const first = samples[0]!;
-  const last = samples[samples.length - 1]!;
   const finalMicrons = last.microns;
   const peakMicrons = Math.max(...samples.map((sample) => sample.microns));
   const middle = Math.floor((samples.length - 1) / 2);

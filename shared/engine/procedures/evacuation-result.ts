@@ -27,13 +27,16 @@ export function evacuationResult(
     return { stage: "pulling-down", reached, decay: null, decayMinutes: null, overall: null };
 
   const decaySamples = samples.filter((sample) => sample.minutes >= isolatedAtMinutes);
-  if (decaySamples.length < 2) return { stage: "decay-test", reached, decay: null, decayMinutes: null, overall: null };
+  const [firstDecay] = decaySamples;
+  const lastDecay = decaySamples.at(-1);
+  if (decaySamples.length < 2 || !firstDecay || !lastDecay)
+    return { stage: "decay-test", reached, decay: null, decayMinutes: null, overall: null };
   const decay = analyseDecay(decaySamples, { ...limits.evacuation, targetMicrons });
   return {
     stage: "judged",
     reached,
     decay,
-    decayMinutes: decaySamples.at(-1)!.minutes - decaySamples[0]!.minutes,
+    decayMinutes: lastDecay.minutes - firstDecay.minutes,
     overall: { check: "Decay test", verdict: DECAY_VERDICT[decay.verdict], reason: decay.reason, source: decay.source },
   };
 }

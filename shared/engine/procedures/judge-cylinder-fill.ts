@@ -1,4 +1,5 @@
 import type { Verdict } from "../../schemas/procedures.ts";
+import { upperFirst } from "../../format/upper-first.ts";
 import { formatHundredths } from "../diagnosis/format-hundredths.ts";
 import { limitSource } from "./limit-source.ts";
 import { CYLINDER_FILL_LIMITS, type CylinderFillLimits } from "./procedure-limits.ts";
@@ -44,5 +45,5 @@ export function judgeCylinderFill(
   if (contentsKg >= applied.warnFromFractionOfLimit * maxContentsKg) {
     return { verdict: "warn", reason: `Nearly full: ${shown}; use another cylinder for further recovery`, source };
   }
-  return { verdict: "pass", reason: `${shown[0]!.toUpperCase()}${shown.slice(1)}`, source };
+  return { verdict: "pass", reason: upperFirst(shown), source };
 }

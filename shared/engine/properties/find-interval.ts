@@ -11,7 +11,7 @@ export function findInterval(values: Float64Array, x: number): number {
   let low = 0;
   let high = values.length - 2;
   while (low < high) {
-    const middle = (low + high + 1) >> 1;
+    const middle = (low + high + 1) >> 1; // low < middle ≤ high ≤ length − 2: a row
     if (values[middle]! <= x) low = middle;
     else high = middle - 1;
   }

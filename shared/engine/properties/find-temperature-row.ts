@@ -19,6 +19,7 @@ export function findTemperatureRow(refrigerant: CompiledRefrigerant, temperature
   if (i < 0) i = 0;
   else if (i > rowCount - 2) i = rowCount - 2;
   // the first and last intervals are shorter than the step; rounding can land one off
+  // (i is clamped to 0 … rowCount − 2 above, so i and i + 1 are rows)
   if (rows[i]! > temperatureC && i > 0) i--;
   else if (rows[i + 1]! < temperatureC && i < rowCount - 2) i++;
   return i;

@@ -21,8 +21,9 @@ export function importRefrigerantTable(id: string): Promise<void> {
   if (isRefrigerantTableLoaded(id)) return Promise.resolve();
   const inFlight = pending.get(id);
   if (inFlight) return inFlight;
-  if (!isKnownRefrigerantId(id)) return Promise.reject(unknownRefrigerantError(id));
-  const loading = SATURATION_TABLE_IMPORTS[id]!()
+  const load = isKnownRefrigerantId(id) ? SATURATION_TABLE_IMPORTS[id] : undefined;
+  if (!load) return Promise.reject(unknownRefrigerantError(id));
+  const loading = load()
     .then((module) => {
       registerRefrigerantTable(module.default);
     })

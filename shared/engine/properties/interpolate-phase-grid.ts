@@ -26,6 +26,7 @@ export interface PhaseGridValues {
 export function interpolatePhaseGrid(grid: CompiledPhaseGrid, rows: PhaseGridRows, reduced: number): PhaseGridValues {
   const { nodes, columns } = grid;
   const j = findInterval(nodes, reduced);
+  // Hot path, no checks: findInterval returns j ≤ nodes.length − 2, so j and j + 1 are nodes.
   const width = nodes[j + 1]! - nodes[j]!;
   const t = (reduced - nodes[j]!) / width;
   const t2 = t * t;
@@ -38,6 +39,7 @@ export function interpolatePhaseGrid(grid: CompiledPhaseGrid, rows: PhaseGridRow
   let enthalpy = 0;
   let entropy = 0;
   let logDensity = 0;
+  // Rows start … start + 3 are in the grid (phaseGridRows keeps start ≤ rows − 4) and j + 1 < columns.
   for (let m = 0; m < 4; m++) {
     const w = rows.weights[m]!;
     const k = (rows.start + m) * columns + j;

@@ -10,6 +10,7 @@ function rowValue(
   columns: number,
   j: number,
 ): number {
+  // phaseGridRows keeps start ≤ rows − 4 and callers pass j < columns: all four cells are in the grid.
   return (
     weights[0] * array[start * columns + j]! +
     weights[1] * array[(start + 1) * columns + j]! +
@@ -62,6 +63,7 @@ export function invertPhaseGrid(
     if (direction * (rowValue(values, weights, start, columns, middle) - target) <= 0) low = middle;
     else high = middle;
   }
+  // 0 ≤ low < high ≤ columns − 1: both are nodes.
   const width = nodes[high]! - nodes[low]!;
   const v0 = rowValue(values, weights, start, columns, low) - target;
   const v1 = rowValue(values, weights, start, columns, high) - target;
@@ -87,5 +89,5 @@ export function invertPhaseGrid(
     if (!(next > lowT && next < highT)) next = 0.5 * (lowT + highT);
     t = next;
   }
-  return nodes[low]! + t * width;
+  return nodes[low]! + t * width; // low is a node (above)
 }

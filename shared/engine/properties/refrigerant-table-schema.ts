@@ -99,15 +99,16 @@ export const RefrigerantTableSchema = z
     // Strictly increasing axes: temperature and both pressures (saturation curves rise with T).
     for (const name of ["temperature", "bubblePressure", "dewPressure"] as const) {
       const values = columns[name];
-      for (let i = 1; i < values.length; i++) {
-        if (!(values[i]! > values[i - 1]!)) {
-          context.addIssue({
-            code: "custom",
-            message: `column ${name} is not strictly increasing at row ${i}`,
-            path: ["columns", name],
-          });
-          break;
-        }
+      const row = values.findIndex((value, index) => {
+        const before = values[index - 1];
+        return before !== undefined && !(value > before);
+      });
+      if (row !== -1) {
+        context.addIssue({
+          code: "custom",
+          message: `column ${name} is not strictly increasing at row ${row}`,
+          path: ["columns", name],
+        });
       }
     }
     for (const name of [

@@ -85,15 +85,23 @@ function compileCurve(pressure: number[], slope: number[]): CompiledCurve {
   };
 }
 
-function uniformGrid(temperatureC: Float64Array): { gridStart: number; gridStep: number } {
-  const n = temperatureC.length;
-  if (n < 4) return { gridStart: temperatureC[0]!, gridStep: 0 };
-  const step = temperatureC[2]! - temperatureC[1]!;
-  for (let i = 2; i < n - 1; i++) {
-    if (Math.abs(temperatureC[i]! - temperatureC[i - 1]! - step) > 1e-9)
-      return { gridStart: temperatureC[0]!, gridStep: 0 };
+/**
+ * Rows one step apart, from the second to the second-last (the end intervals may be shorter),
+ * let a lookup compute its row instead of searching for it: their start and step, or step 0
+ * when they are not evenly spaced or too few to tell.
+ */
+function uniformGrid(temperatureC: readonly number[], minimumC: number): { gridStart: number; gridStep: number } {
+  const notUniform = { gridStart: minimumC, gridStep: 0 };
+  const [start, ...rest] = temperatureC.slice(1, -1);
+  const second = rest[0];
+  if (start === undefined || second === undefined) return notUniform;
+  const step = second - start;
+  let previous = start;
+  for (const value of rest) {
+    if (Math.abs(value - previous - step) > 1e-9) return notUniform;
+    previous = value;
   }
-  return { gridStart: temperatureC[1]!, gridStep: step };
+  return { gridStart: start, gridStep: step };
 }
 
 function compile(id: string, raw: unknown): CompiledRefrigerant {
@@ -113,15 +121,16 @@ function compile(id: string, raw: unknown): CompiledRefrigerant {
     units,
     rowCount: temperatureC.length,
     temperatureC,
-    ...uniformGrid(temperatureC),
+    ...uniformGrid(columns.temperature, metadata.validRange.minimumC),
     bubble: compileCurve(columns.bubblePressure, columns.bubbleSlope),
     dew: compileCurve(columns.dewPressure, columns.dewSlope),
     liquidDensity: Float64Array.from(columns.liquidDensity),
     vapourDensity: Float64Array.from(columns.vapourDensity),
     liquidEnthalpy: Float64Array.from(columns.liquidEnthalpy),
     vapourEnthalpy: Float64Array.from(columns.vapourEnthalpy),
-    minimumC: temperatureC[0]!,
-    maximumC: temperatureC[temperatureC.length - 1]!,
+    // The schema holds the first and last rows to the valid range.
+    minimumC: metadata.validRange.minimumC,
+    maximumC: metadata.validRange.maximumC,
   };
 }
 

@@ -32,6 +32,7 @@ export function saturatedState(id: string, temperatureC: number): SaturatedState
   requireTableTemperature(refrigerant, temperatureC);
   const t = refrigerant.temperatureC;
   const i = findTemperatureRow(refrigerant, temperatureC);
+  // findTemperatureRow returns i ≤ rowCount − 2, so i and i + 1 are rows of every column.
   const fraction = (temperatureC - t[i]!) / (t[i + 1]! - t[i]!);
   const linear = (column: Float64Array) => column[i]! + fraction * (column[i + 1]! - column[i]!);
   return {

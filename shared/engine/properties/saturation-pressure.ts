@@ -30,6 +30,7 @@ export function saturationPressure(id: string, temperatureC: number, point: Satu
   const curve = point === "bubble" ? refrigerant.bubble : refrigerant.dew;
   const i = findTemperatureRow(refrigerant, temperatureC);
   const t = refrigerant.temperatureC;
+  // Hot path, no checks: findTemperatureRow returns i ≤ rowCount − 2, so i and i + 1 are rows.
   return interpolateHermite(
     t[i]!,
     curve.pressure[i]!,

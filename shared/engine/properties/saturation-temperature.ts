@@ -35,6 +35,8 @@ export function saturationTemperature(id: string, pressureKPaAbs: number, point:
   const curve = point === "bubble" ? refrigerant.bubble : refrigerant.dew;
   const last = refrigerant.rowCount - 1;
   const pressures = curve.pressure;
+  // Hot path, no checks: a compiled table has two rows or more (schema), so 0 and `last` are rows,
+  // and findInterval below returns i ≤ last − 1.
   if (!(pressureKPaAbs >= pressures[0]!)) {
     const lowest = pressures[0]!;
     throw new PropertyRangeError(

@@ -57,18 +57,25 @@ function compileGrid(phase: SinglePhase, grid: SinglePhaseGrid): CompiledPhaseGr
   const enthalpyByR = new Float64Array(size);
   const entropyByR = new Float64Array(size);
   const logDensityByR = new Float64Array(size);
-  for (let i = 0; i < grid.rows; i++) {
+  // The schema checked one value per row and node; a miss here is a damaged table, said loudly.
+  const valueAt = (values: readonly number[], k: number): number => {
+    const value = values[k];
+    if (value === undefined) throw new RangeError(`registerSinglePhaseTable requires a complete ${phase} grid`);
+    return value;
+  };
+  saturationK.forEach((rowK, i) => {
     // dT/dr along a row is its width T_bound − T_sat (negative for the liquid)
-    const width = boundK - saturationK[i]!;
-    for (let j = 0; j < columns; j++) {
+    const width = boundK - rowK;
+    grid.nodes.forEach((node, j) => {
       const k = i * columns + j;
-      const temperatureK = saturationK[i]! + grid.nodes[j]! * width;
-      enthalpyByR[k] = grid.enthalpySlope[k]! * width;
+      const temperatureK = rowK + node * width;
+      const enthalpySlope = valueAt(grid.enthalpySlope, k);
+      enthalpyByR[k] = enthalpySlope * width;
       // (∂s/∂T)_p = c_p / T
-      entropyByR[k] = (grid.enthalpySlope[k]! / temperatureK) * width;
-      logDensityByR[k] = grid.logDensitySlope[k]! * width;
-    }
-  }
+      entropyByR[k] = (enthalpySlope / temperatureK) * width;
+      logDensityByR[k] = valueAt(grid.logDensitySlope, k) * width;
+    });
+  });
   const coordinateEnd = grid.coordinateStart + (grid.rows - 1) * grid.coordinateStep;
   // p from y: e^y = p / (1 − p/p_s)  ⇒  p = e^y / (1 + e^y/p_s)
   const pressureAt = (y: number) => Math.exp(y) / (1 + Math.exp(y) / grid.pressureScaleKPa);

@@ -56,10 +56,11 @@ const PhaseGridSchema = z
     if (grid.nodes[0] !== 0 || grid.nodes[grid.nodes.length - 1] !== 1) {
       ctx.addIssue({ code: "custom", path: ["nodes"], message: "must run from 0 to 1" });
     }
-    for (let j = 1; j < grid.nodes.length; j++) {
-      if (!(grid.nodes[j]! > grid.nodes[j - 1]!))
+    grid.nodes.forEach((node, index) => {
+      const before = grid.nodes[index - 1];
+      if (before !== undefined && !(node > before))
         ctx.addIssue({ code: "custom", path: ["nodes"], message: "must increase strictly" });
-    }
+    });
   });
 export type SinglePhaseGrid = z.infer<typeof PhaseGridSchema>;
 

@@ -1,3 +1,4 @@
+import { upperFirst } from "../../../format/upper-first.ts";
 import { formatTenths } from "../format-tenths.ts";
 import { COMMON_PRACTICE } from "../../sources/marks.ts";
 import type { DiagnosisRule } from "../types.ts";
@@ -48,7 +49,7 @@ export const applicationFitRule: DiagnosisRule = {
           code: "application-mismatch",
           severity: "caution",
           field: "returnAirDryBulbC",
-          message: `${snapshot.limits.returnWords[0]!.toUpperCase()}${snapshot.limits.returnWords.slice(1)} ${formatTenths(returnAir)} °C does not fit ${WORDS[snapshot.application]} (${min} to ${max} °C): check the probe and the unit's application — the bands used are that application's`,
+          message: `${upperFirst(snapshot.limits.returnWords)} ${formatTenths(returnAir)} °C does not fit ${WORDS[snapshot.application]} (${min} to ${max} °C): check the probe and the unit's application — the bands used are that application's`,
           source: SOURCE,
         },
       ],
