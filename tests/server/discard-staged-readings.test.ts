@@ -29,16 +29,16 @@ describe("discardStagedReadingsBefore", () => {
     )[0]!.n;
 
   it("removes staged rows older than the cut-off and keeps younger ones and every reading", async () => {
-    const [{ n: readingsBefore }] = await handle.query<{ n: number }>(
-      "select count(*)::int as n from readings where pending_import_id is null",
-    );
+    const { n: readingsBefore } = (
+      await handle.query<{ n: number }>("select count(*)::int as n from readings where pending_import_id is null")
+    )[0]!;
     await stage("2 hours");
     await stage("1 minute");
     expect(await discardStagedReadingsBefore(handle.db, new Date(Date.now() - 60 * 60 * 1000))).toBe(1);
     expect(await staged()).toBe(1);
-    const [{ n: readingsAfter }] = await handle.query<{ n: number }>(
-      "select count(*)::int as n from readings where pending_import_id is null",
-    );
+    const { n: readingsAfter } = (
+      await handle.query<{ n: number }>("select count(*)::int as n from readings where pending_import_id is null")
+    )[0]!;
     expect(readingsAfter).toBe(readingsBefore);
   });
 });

@@ -104,7 +104,7 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     expect(new Set(rows.map((row) => row.id)).size).toBe(total);
     expect(pages).toBe(Math.ceil(total / 173));
     for (let index = 1; index < rows.length; index += 1)
-      expect(Date.parse(rows[index - 1].startedAt)).toBeGreaterThanOrEqual(Date.parse(rows[index].startedAt));
+      expect(Date.parse(rows[index - 1]!.startedAt)).toBeGreaterThanOrEqual(Date.parse(rows[index]!.startedAt));
   });
 
   it("gives the default page of 50 and a cursor, and the last page a null cursor", async () => {
@@ -344,7 +344,7 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
       VisitListQuerySchema.parse({ limit: "50", cursor: first.nextCursor! }),
       technicianId,
     );
-    expect(deep.visits[0].id).not.toBe(first.visits[0].id);
+    expect(deep.visits[0]!.id).not.toBe(first.visits[0]!.id);
     const listQueries = captured.filter(
       (entry) => entry.query.includes('from "visits"') && entry.query.includes("limit"),
     );
@@ -369,7 +369,7 @@ describe("paged lists: GET /api/visits and GET /api/equipment", () => {
     await listEquipmentPage(db, organisationId, EquipmentListQuerySchema.parse({}));
     expect(captured).toHaveLength(1);
     const plan = (
-      await testApp.database.query<{ "QUERY PLAN": string }>(`explain ${captured[0].query}`, captured[0].params)
+      await testApp.database.query<{ "QUERY PLAN": string }>(`explain ${captured[0]!.query}`, captured[0]!.params)
     )
       .map((row) => row["QUERY PLAN"])
       .join("\n");

@@ -40,11 +40,11 @@ describe("database migrations and demo seed", () => {
       const [customerRows] = await handle.db.select({ n: count() }).from(customers);
       const [siteRows] = await handle.db.select({ n: count() }).from(sites);
       const [units] = await handle.db.select({ n: count() }).from(equipment);
-      expect(orgs.n).toBe(1);
-      expect(people.n).toBe(demoPeople.length);
-      expect(customerRows.n).toBe(1);
-      expect(siteRows.n).toBe(1);
-      expect(units.n).toBe(demoEquipment.length);
+      expect(orgs!.n).toBe(1);
+      expect(people!.n).toBe(demoPeople.length);
+      expect(customerRows!.n).toBe(1);
+      expect(siteRows!.n).toBe(1);
+      expect(units!.n).toBe(demoEquipment.length);
     } finally {
       await empty.close();
     }

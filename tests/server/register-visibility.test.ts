@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Role } from "@shared/schemas/auth.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn, signedInBellbird } from "../setup/demo-accounts.ts";
+import { BELLBIRD, seedBellbird, signedIn, signedInBellbird, type DemoIds } from "../setup/demo-accounts.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 interface Line {
@@ -18,7 +18,7 @@ interface Line {
  */
 describe("who reads which register line", () => {
   let testApp: TestApp;
-  let ids: Record<string, string>;
+  let ids: DemoIds;
   let agents: Record<Role | "technician2", Agent>;
   let visitId: string;
   let unitId: string;

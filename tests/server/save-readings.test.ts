@@ -9,7 +9,7 @@ import { createReadingSaver, type ReadingSave } from "@server/visits/save-readin
 import { atmosphericPressureAtAltitude, saturationPressure } from "@shared/engine/index.ts";
 import { ReadingBodySchema } from "@shared/schemas/visits.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
+import { BELLBIRD, seedBellbird, signedIn, type DemoIds } from "../setup/demo-accounts.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -31,7 +31,7 @@ const body = (suctionLineTempC: number, circuit = 1) => ({
  */
 describe("readings saved together", () => {
   let testApp: TestApp;
-  let ids: Record<string, string>;
+  let ids: DemoIds;
   let technician: Agent;
   let senior: Agent;
   let organisationId: string;

@@ -66,17 +66,17 @@ describe("visit revision, conditional GET and deltas", () => {
     expect(first.headers.etag).toBe(`W/"${first.body.visit.revision}"`);
     expect(first.headers["cache-control"]).toContain("no-cache");
     for (const encoding of ["gzip", "identity"]) {
-      const again = await detail("", { "If-None-Match": first.headers.etag, "Accept-Encoding": encoding });
+      const again = await detail("", { "If-None-Match": first.headers.etag!, "Accept-Encoding": encoding });
       expect(again.status).toBe(304);
       expect(again.text ?? "").toBe("");
     }
     // A delta request naming the same revision is answered the same way.
-    const since = await detail(`?since=${first.body.visit.revision}`, { "If-None-Match": first.headers.etag });
+    const since = await detail(`?since=${first.body.visit.revision}`, { "If-None-Match": first.headers.etag! });
     expect(since.status).toBe(304);
   });
 
   it("answers 304 from the visit's row alone: the run log's tables are not read", async () => {
-    const etag = (await detail()).headers.etag;
+    const etag = (await detail()).headers.etag!;
     const db = testApp.database.db;
     // Hide the run log's tables: a 304 that needed them would fail.
     await db.execute(sql`alter table readings rename to readings_hidden`);
@@ -258,7 +258,7 @@ describe("visit revision, conditional GET and deltas", () => {
     await testApp.database.db.execute(
       sql`update equipment set name = 'Rooftop unit RTU-1 (renamed)' where id = ${before.body.visit.equipmentId}`,
     );
-    const after = await detail("", { "If-None-Match": before.headers.etag });
+    const after = await detail("", { "If-None-Match": before.headers.etag! });
     expect(after.status).toBe(200);
     expect(after.body.visit.equipmentName).toBe("Rooftop unit RTU-1 (renamed)");
   });

@@ -3,7 +3,8 @@ import type { Express } from "express";
 import type { Role } from "@shared/schemas/auth.ts";
 import request from "supertest";
 import { users } from "@server/db/schema.ts";
-import { DEMO_PASSWORD, demoPeople } from "@server/db/seed/demo-scenario.ts";
+import { DEMO_PASSWORD, demoPeople, type DemoEmail } from "@server/db/seed/demo-scenario.ts";
+import { oneRow } from "@server/db/one-row.ts";
 import { seedDemoData } from "@server/db/seed/seed-demo.ts";
 import type { TestApp } from "./test-app.ts";
 
@@ -41,15 +42,18 @@ export async function signedInBellbird(app: Express): Promise<Record<Role, Await
 export async function seedBellbird(
   testApp: TestApp,
   { withChargeHistory = false } = {},
-): Promise<Record<string, string>> {
+): Promise<Record<DemoEmail, string>> {
   await seedDemoData(testApp.database.db, { withChargeHistory });
-  const ids: Record<string, string> = {};
+  const ids: Partial<Record<DemoEmail, string>> = {};
   for (const person of demoPeople) {
-    const [row] = await testApp.database.db.select({ id: users.id }).from(users).where(eq(users.email, person.email));
-    ids[person.email] = row.id;
+    const rows = await testApp.database.db.select({ id: users.id }).from(users).where(eq(users.email, person.email));
+    ids[person.email] = oneRow(rows, `the demo person ${person.email}`).id;
   }
-  return ids;
+  return ids as Record<DemoEmail, string>;
 }
+
+/** Each demo person's user id by e-mail, as seedBellbird returns them. */
+export type DemoIds = Record<DemoEmail, string>;
 
 /** A second, unrelated company with its own owner, signed in. */
 export async function signUpOtherCompany(app: Express, email = "owner@coldfront.example") {

@@ -11,13 +11,15 @@ export const DEMO_PASSWORD = "bellbird-demo-2026";
 
 export const demoOrganisation = { name: "Bellbird Mechanical" };
 
-export const demoPeople: { email: string; name: string; role: Role }[] = [
+export const demoPeople = [
   { email: "owner@bellbird.example", name: "Dana Whitlock", role: "owner" },
   { email: "senior@bellbird.example", name: "Priya Raman", role: "senior" },
   { email: "tech@bellbird.example", name: "Sam Toko", role: "technician" },
   { email: "tech2@bellbird.example", name: "Lee Hargreaves", role: "technician" },
   { email: "apprentice@bellbird.example", name: "Jordan Vu", role: "apprentice" },
-];
+] as const satisfies readonly { email: string; name: string; role: Role }[];
+/** A demo person's e-mail: the key the tests look the demo people up by. */
+export type DemoEmail = (typeof demoPeople)[number]["email"];
 
 export const demoCustomer = {
   name: "Wattle Lane Clinic",

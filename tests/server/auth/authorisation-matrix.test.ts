@@ -2,7 +2,14 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Role } from "@shared/schemas/auth.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn, signedInBellbird, signUpOtherCompany } from "../../setup/demo-accounts.ts";
+import {
+  BELLBIRD,
+  seedBellbird,
+  signedIn,
+  signedInBellbird,
+  signUpOtherCompany,
+  type DemoIds,
+} from "../../setup/demo-accounts.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -13,7 +20,7 @@ type Agent = Awaited<ReturnType<typeof signedIn>>;
  */
 describe("authorisation matrix", () => {
   let testApp: TestApp;
-  let ids: Record<string, string>;
+  let ids: DemoIds;
   let agents: Record<Role, Agent>;
   let outsider: Agent;
   let invitationId: string;

@@ -118,7 +118,7 @@ describe("invitations", () => {
     expect(accept.status).toBe(409);
     const rows = await testApp.database.db.select().from(users).where(eq(users.email, "boss@coldfront.example"));
     expect(rows).toHaveLength(1);
-    expect(rows[0].role).toBe("owner");
+    expect(rows[0]!.role).toBe("owner");
   });
 
   it("replaces a pending invitation when the same address is invited again", async () => {

@@ -2,11 +2,11 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { sessions } from "@server/db/schema.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn } from "../../setup/demo-accounts.ts";
+import { BELLBIRD, seedBellbird, signedIn, type DemoIds } from "../../setup/demo-accounts.ts";
 
 describe("members", () => {
   let testApp: TestApp;
-  let ids: Record<string, string>;
+  let ids: DemoIds;
   let owner: Awaited<ReturnType<typeof signedIn>>;
   beforeAll(async () => {
     testApp = await createTestApp();

@@ -4,11 +4,11 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { passwordResets, sessions } from "@server/db/schema.ts";
 import { RESET_REQUESTED } from "@server/routes/auth.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, linkIn, seedBellbird, signedIn } from "../../setup/demo-accounts.ts";
+import { BELLBIRD, linkIn, seedBellbird, signedIn, type DemoIds } from "../../setup/demo-accounts.ts";
 
 describe("password reset", () => {
   let testApp: TestApp;
-  let ids: Record<string, string>;
+  let ids: DemoIds;
   beforeAll(async () => {
     testApp = await createTestApp();
     ids = await seedBellbird(testApp);

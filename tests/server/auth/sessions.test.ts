@@ -4,13 +4,13 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { SESSION_LIFETIME } from "@server/auth/lucia.ts";
 import { sessions, users } from "@server/db/schema.ts";
 import { createTestApp, type TestApp } from "../../setup/test-app.ts";
-import { BELLBIRD, cookieHeader, seedBellbird, signedIn } from "../../setup/demo-accounts.ts";
+import { BELLBIRD, cookieHeader, seedBellbird, signedIn, type DemoIds } from "../../setup/demo-accounts.ts";
 
 const DAY_MS = 24 * 3600_000;
 
 describe("sessions", () => {
   let testApp: TestApp;
-  let ids: Record<string, string>;
+  let ids: DemoIds;
   beforeAll(async () => {
     testApp = await createTestApp();
     ids = await seedBellbird(testApp);
@@ -20,7 +20,7 @@ describe("sessions", () => {
   async function onlySessionOf(userId: string) {
     const rows = await testApp.database.db.select().from(sessions).where(eq(sessions.userId, userId));
     expect(rows).toHaveLength(1);
-    return rows[0];
+    return rows[0]!;
   }
 
   it("stores a session that expires 30 days after sign-in", async () => {
@@ -94,7 +94,7 @@ describe("session fixation", () => {
       expect(again.status).toBe(200);
       const after = await testApp.database.db.select().from(sessions);
       expect(after).toHaveLength(1);
-      expect(after[0].id).not.toBe(first[0].id);
+      expect(after[0]!.id).not.toBe(first[0]!.id);
     } finally {
       await testApp.close();
     }

@@ -38,7 +38,7 @@ describe("sign-up, sign-in, sign-out and me", () => {
       .select()
       .from(organisations)
       .where(eq(organisations.id, me.body.user.organisationId));
-    expect(organisation.name).toBe("Southwind Air");
+    expect(organisation!.name).toBe("Southwind Air");
   });
 
   it("marks the cookie Secure in production", async () => {

@@ -23,11 +23,10 @@ describe("lastSettledStates", () => {
   beforeAll(async () => {
     handle = await createTestDatabase();
     await seedDemoData(handle.db, { withChargeHistory: false });
-    [rooftop] = await handle.db.select().from(equipment).where(eq(equipment.refrigerant, "R407C"));
-    [{ id: technician }] = await handle.db
-      .select({ id: users.id })
-      .from(users)
-      .where(eq(users.email, "tech@bellbird.example"));
+    rooftop = (await handle.db.select().from(equipment).where(eq(equipment.refrigerant, "R407C")))[0]!;
+    technician = (
+      await handle.db.select({ id: users.id }).from(users).where(eq(users.email, "tech@bellbird.example"))
+    )[0]!.id;
   });
   afterAll(() => handle.close());
 

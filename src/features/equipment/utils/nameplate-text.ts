@@ -16,9 +16,10 @@ export function totalFactoryChargeKg(circuits: readonly Pick<CircuitNameplate, "
 
 /** "2 × TXV" when every circuit has the same device, else "C1 TXV · C2 EEV". */
 export function meteringSummary(circuits: readonly Pick<CircuitNameplate, "number" | "meteringDevice">[]): string {
-  if (circuits.length === 0) return "—";
+  const [first] = circuits;
+  if (first === undefined) return "—";
   const devices = new Set(circuits.map((circuit) => circuit.meteringDevice));
-  if (devices.size === 1) return `${circuits.length} × ${METERING_DEVICE_LABELS[circuits[0].meteringDevice]}`;
+  if (devices.size === 1) return `${circuits.length} × ${METERING_DEVICE_LABELS[first.meteringDevice]}`;
   return circuits.map((circuit) => `C${circuit.number} ${METERING_DEVICE_LABELS[circuit.meteringDevice]}`).join(" · ");
 }
 

@@ -25,7 +25,8 @@ const SERVER_SORTS: Record<string, VisitSort> = {
   reason: "reason",
   status: "status",
 };
-const DEFAULT_SORTING: SortingState = [{ id: "startedAt", desc: true }];
+const DEFAULT_SORT = { id: "startedAt", desc: true };
+const DEFAULT_SORTING: SortingState = [DEFAULT_SORT];
 
 /**
  * What the table asks for first (DEFAULT_SORTING, no search): the jobs route's loader fetches it,
@@ -98,7 +99,7 @@ export function JobsTable({ status, empty }: { status: VisitStatus | null; empty
   const [query, setQuery] = useState("");
   const search = useDebouncedValue(query.trim());
   const [sorting, setSorting] = useState<SortingState>(DEFAULT_SORTING);
-  const current = sorting[0] ?? DEFAULT_SORTING[0];
+  const current = sorting[0] ?? DEFAULT_SORT;
   const sort = SERVER_SORTS[current.id] ?? "startedAt";
   const dir = current.desc ? "desc" : "asc";
   const pages = useCursorPages(JSON.stringify([status, search, sort, dir]));

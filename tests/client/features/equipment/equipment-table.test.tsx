@@ -145,7 +145,7 @@ describe("EquipmentTable", () => {
 
   it("asks the server once typing stops, and shows what it found", async () => {
     const user = userEvent.setup();
-    const asked = serve((params) => ({ equipment: params.get("q") ? [units[1]] : units, nextCursor: null }));
+    const asked = serve((params) => ({ equipment: params.get("q") ? [units[1]!] : units, nextCursor: null }));
     const { unitNames } = renderTable();
     await waitFor(() => expect(unitNames()).toHaveLength(3));
     // Typed as fast as a phone's suggestion bar puts in a word.

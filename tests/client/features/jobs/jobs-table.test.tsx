@@ -67,9 +67,9 @@ describe("JobsTable", () => {
     renderJobs("open");
     const table = await screen.findByRole("table");
     expect(within(table).getByRole("link", { name: "RTU-1 packaged rooftop unit" })).toBeInTheDocument();
-    expect(asked[0].get("status")).toBe("open");
-    expect(asked[0].get("sort")).toBe("startedAt");
-    expect(asked[0].get("dir")).toBe("desc");
+    expect(asked[0]!.get("status")).toBe("open");
+    expect(asked[0]!.get("sort")).toBe("startedAt");
+    expect(asked[0]!.get("dir")).toBe("desc");
     // Readings and crew are counted per page, so their headers do not offer a sort.
     expect(within(table).queryByRole("button", { name: /Readings/ })).not.toBeInTheDocument();
     expect(within(table).getByRole("columnheader", { name: "Crew" })).not.toHaveAttribute("aria-sort");
