@@ -1,6 +1,8 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { fieldMessages } from "@shared/schemas/field-messages.ts";
+import { useForm } from "react-hook-form";
+import { z } from "zod";
 import {
   MAX_ALLOWED_DROP_KPA,
   MAX_TARGET_MICRONS,
@@ -23,12 +25,27 @@ const LABELS = {
   pressureTestAllowedDropKPa: "Allowed pressure drop (kPa)",
 } as const;
 
+type Limit = keyof typeof LABELS;
+type TypedLimits = Record<Limit, string>;
+
 const asText = (value: number | null) => (value === null ? "" : String(value));
 /** "" clears the override; unreadable text goes through as text so the schema names the field. */
 const asValue = (text: string) => {
   const parsed = parseDecimal(text);
   return parsed === undefined ? null : parsed === "invalid" ? text : parsed;
 };
+const typedOf = (settings: ProcedureSettingsResponse["settings"]): TypedLimits => ({
+  evacuationTargetMicrons: asText(settings.evacuationTargetMicrons),
+  pressureTestAllowedDropKPa: asText(settings.pressureTestAllowedDropKPa),
+});
+/** Both limits as the PATCH body's schema reads them; only the changed ones are sent. */
+const LimitsFormSchema = z.preprocess(
+  (typed: TypedLimits) => ({
+    evacuationTargetMicrons: asValue(typed.evacuationTargetMicrons),
+    pressureTestAllowedDropKPa: asValue(typed.pressureTestAllowedDropKPa),
+  }),
+  ProcedureSettingsUpdateSchema,
+);
 
 function SettingsForm({
   current,
@@ -39,63 +56,50 @@ function SettingsForm({
   onReload: () => Promise<unknown>;
   reloading: boolean;
 }) {
-  const [target, setTarget] = useState(asText(current.settings.evacuationTargetMicrons));
-  const [drop, setDrop] = useState(asText(current.settings.pressureTestAllowedDropKPa));
-  const [errors, setErrors] = useState<Record<string, string>>({});
+  const form = useForm({ resolver: zodResolver(LimitsFormSchema), defaultValues: typedOf(current.settings) });
+  const { errors } = form.formState;
+  const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
   const [stale, setStale] = useState<{ message: string; typed: [string, string][] } | null>(null);
   const update = useUpdateOrganisationSettings();
-  // A corrected field drops its old message at once; the others keep theirs until the next save.
-  const edit = (field: keyof typeof LABELS, set: (text: string) => void) => (text: string) => {
-    set(text);
-    setSaved(false);
-    setErrors(({ [field]: _corrected, ...rest }) => rest);
-  };
+  // Only what changed is sent (PATCH), so a colleague's change to the other limit is kept.
+  const changedLimits = (typed: TypedLimits) =>
+    (Object.keys(LABELS) as Limit[]).filter((field) => typed[field] !== typedOf(current.settings)[field]);
 
-  const submit = async () => {
-    setSaved(false);
-    setStale(null);
-    // Only what changed is sent (PATCH), so a colleague's change to the other limit is kept.
-    const typed = { evacuationTargetMicrons: target, pressureTestAllowedDropKPa: drop };
-    const changed = Object.fromEntries(
-      Object.entries(typed)
-        .filter(([field, text]) => text !== asText(current.settings[field as keyof typeof typed]))
-        .map(([field, text]) => [field, asValue(text)]),
-    );
-    if (Object.keys(changed).length === 0) return setSaved(true);
-    const parsed = ProcedureSettingsUpdateSchema.safeParse(changed);
-    if (!parsed.success) {
-      setErrors(fieldMessages(parsed.error));
-      return;
-    }
-    setErrors({});
+  const save = async (body: z.output<typeof LimitsFormSchema>) => {
+    const typed = form.getValues();
+    const changed = changedLimits(typed);
     try {
-      await update.mutateAsync({ ...parsed.data, version: current.version });
+      await update.mutateAsync({
+        ...Object.fromEntries(changed.map((field) => [field, body[field]])),
+        version: current.version,
+      });
       setSaved(true);
     } catch (error) {
       if (error instanceof ApiError && error.isStale) {
-        setStale({
-          message: error.message,
-          typed: Object.keys(changed).map((field) => [
-            LABELS[field as keyof typeof LABELS],
-            typed[field as keyof typeof typed],
-          ]),
-        });
+        setStale({ message: error.message, typed: changed.map((field) => [LABELS[field], typed[field]]) });
         return;
       }
-      setErrors(
-        error instanceof ApiError ? { ...error.fields, _: error.message } : { _: "The settings were not saved" },
-      );
+      if (error instanceof ApiError) {
+        for (const [field, message] of Object.entries(error.fields))
+          form.setError(field as Limit, { type: "server", message });
+      }
+      setFormError(error instanceof ApiError ? error.message : "The settings were not saved");
     }
+  };
+
+  const submit = () => {
+    setSaved(false);
+    setStale(null);
+    setFormError(null);
+    if (changedLimits(form.getValues()).length === 0) return setSaved(true);
+    return form.handleSubmit(save)();
   };
 
   // Loads the saved limits into the form; what the person typed stays listed in the notice.
   const reload = async () => {
     const latest = (await onReload()) as { data?: ProcedureSettingsResponse } | undefined;
-    if (latest?.data) {
-      setTarget(asText(latest.data.settings.evacuationTargetMicrons));
-      setDrop(asText(latest.data.settings.pressureTestAllowedDropKPa));
-    }
+    if (latest?.data) form.reset(typedOf(latest.data.settings));
     setStale((shown) =>
       shown
         ? { ...shown, message: "These are the limits as saved now. Make your change again if it still applies." }
@@ -112,7 +116,7 @@ function SettingsForm({
         void submit();
       }}
     >
-      {errors._ && <FormAlert>{errors._}</FormAlert>}
+      {formError && <FormAlert>{formError}</FormAlert>}
       {stale && (
         <StaleWriteNotice
           message={stale.message}
@@ -125,17 +129,15 @@ function SettingsForm({
       <NumberField
         label="Evacuation target"
         unit="µm"
-        value={target}
-        onValueChange={edit("evacuationTargetMicrons", setTarget)}
-        error={errors.evacuationTargetMicrons}
+        registration={form.register("evacuationTargetMicrons", { onChange: () => setSaved(false) })}
+        error={errors.evacuationTargetMicrons?.message}
         hint={`${MIN_TARGET_MICRONS}–${MAX_TARGET_MICRONS} µm. Leave empty for ${current.defaults.evacuationTargetMicrons} microns, the trade norm`}
       />
       <NumberField
         label="Allowed pressure drop in a nitrogen test (after temperature correction)"
         unit="kPa"
-        value={drop}
-        onValueChange={edit("pressureTestAllowedDropKPa", setDrop)}
-        error={errors.pressureTestAllowedDropKPa}
+        registration={form.register("pressureTestAllowedDropKPa", { onChange: () => setSaved(false) })}
+        error={errors.pressureTestAllowedDropKPa?.message}
         hint={`0–${MAX_ALLOWED_DROP_KPA} kPa. Leave empty for ${current.defaults.pressureTestAllowedDropKPa} kPa: gauge resolution plus thermometer error near 4 MPa`}
       />
       <Button type="submit" disabled={update.isPending}>

@@ -1,5 +1,8 @@
-import { useId, useState, type FormEvent } from "react";
-import { fieldMessages } from "@shared/schemas/field-messages.ts";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useId } from "react";
+import { useForm, type UseFormRegisterReturn } from "react-hook-form";
+import { z } from "zod";
+import { fieldMessages, FORM_MESSAGE_KEY } from "@shared/schemas/field-messages.ts";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import {
   AttemptAnswersSchema,
@@ -78,16 +81,14 @@ function NumberAnswer({
   label,
   hint,
   unit,
-  value,
+  registration,
   error,
-  onChange,
 }: {
   label: string;
   hint: string;
   unit: string;
-  value: string;
+  registration: UseFormRegisterReturn;
   error?: string;
-  onChange: (text: string) => void;
 }) {
   const id = useId();
   return (
@@ -98,10 +99,9 @@ function NumberAnswer({
       <NumberInput
         id={id}
         unit={unit}
-        value={value}
         invalid={Boolean(error)}
         aria-describedby={`${id}-hint${error ? ` ${id}-error` : ""}`}
-        onChange={(event) => onChange(event.target.value)}
+        {...registration}
       />
       <p id={`${id}-hint`} className="text-sm text-muted">
         {hint}
@@ -116,34 +116,17 @@ function NumberAnswer({
 }
 
 /**
- * The apprentice's answers in their display units. Each is converted to SI-metric before it
- * is checked with the shared schema and sent; the server does the scoring.
+ * What was typed, read as the shared schema's answers: each number converted to SI-metric, with
+ * this form's own words for a number it cannot read or a saturation temperature left out, and
+ * the schema's messages for the rest, all at once.
  */
-export function AttemptForm({
-  units,
-  atmosphericKPa,
-  pending,
-  serverError,
-  onSubmit,
-  cycleQuestions = [],
-  chargeQuestion = false,
-}: {
-  units: DisplayUnits;
-  atmosphericKPa: number;
-  pending: boolean;
-  serverError: string | null;
-  onSubmit: (answers: AttemptAnswers) => void;
-  /** The case's measured-cycle questions, if any. */
-  cycleQuestions?: readonly CycleAnswerField[];
-  /** Whether the case asks the charge to add. */
-  chargeQuestion?: boolean;
-}) {
-  const [draft, setDraft] = useState<Draft>(EMPTY);
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const set = (field: keyof Draft) => (text: string) => setDraft((current) => ({ ...current, [field]: text }));
-
-  function submit(event: FormEvent) {
-    event.preventDefault();
+function answersSchema(
+  units: DisplayUnits,
+  atmosphericKPa: number,
+  cycleQuestions: readonly CycleAnswerField[],
+  chargeQuestion: boolean,
+) {
+  return z.custom<Draft>().transform((draft, context) => {
     const found: Record<string, string> = {};
     const numbers: Record<string, number | null> = {};
     for (const { field, label, quantity } of NUMBER_FIELDS) {
@@ -178,10 +161,41 @@ export function AttemptForm({
       for (const [field, message] of Object.entries(fieldMessages(parsed.error)))
         found[field] ??= field === "chargeState" ? "Pick the charge state" : message;
     }
-    setErrors(found);
-    if (Object.keys(found).length > 0 || !parsed.success) return;
-    onSubmit(parsed.data);
-  }
+    for (const [field, message] of Object.entries(found))
+      context.addIssue({ code: "custom", message, path: field === FORM_MESSAGE_KEY ? [] : [field] });
+    return parsed.success && Object.keys(found).length === 0 ? parsed.data : z.NEVER;
+  });
+}
+
+/**
+ * The apprentice's answers in their display units. Each is converted to SI-metric before it
+ * is checked with the shared schema and sent; the server does the scoring.
+ */
+export function AttemptForm({
+  units,
+  atmosphericKPa,
+  pending,
+  serverError,
+  onSubmit,
+  cycleQuestions = [],
+  chargeQuestion = false,
+}: {
+  units: DisplayUnits;
+  atmosphericKPa: number;
+  pending: boolean;
+  serverError: string | null;
+  onSubmit: (answers: AttemptAnswers) => void;
+  /** The case's measured-cycle questions, if any. */
+  cycleQuestions?: readonly CycleAnswerField[];
+  /** Whether the case asks the charge to add. */
+  chargeQuestion?: boolean;
+}) {
+  const form = useForm({
+    resolver: zodResolver(answersSchema(units, atmosphericKPa, cycleQuestions, chargeQuestion)),
+    defaultValues: EMPTY,
+  });
+  const { errors } = form.formState;
+  const submit = form.handleSubmit(onSubmit);
 
   return (
     <form
@@ -211,9 +225,8 @@ export function AttemptForm({
             label={label}
             hint={hint}
             unit={unitLabel(quantity, units)}
-            value={draft[field]}
-            error={errors[field]}
-            onChange={set(field)}
+            registration={form.register(field)}
+            error={errors[field]?.message}
           />
         ))}
         {cycleQuestions.map((field) => (
@@ -222,9 +235,8 @@ export function AttemptForm({
             label={CYCLE_FIELDS[field].label}
             hint={CYCLE_FIELDS[field].hint}
             unit={CYCLE_FIELDS[field].quantity === "energy" ? "kJ/kg" : unitLabel("difference", units)}
-            value={draft[field]}
-            error={errors[field]}
-            onChange={set(field)}
+            registration={form.register(field)}
+            error={errors[field]?.message}
           />
         ))}
         {chargeQuestion && (
@@ -232,18 +244,12 @@ export function AttemptForm({
             label={CHARGE_FIELD.label}
             hint={CHARGE_FIELD.hint}
             unit="kg"
-            value={draft[CHARGE_ANSWER_FIELD]}
-            error={errors[CHARGE_ANSWER_FIELD]}
-            onChange={set(CHARGE_ANSWER_FIELD)}
+            registration={form.register(CHARGE_ANSWER_FIELD)}
+            error={errors[CHARGE_ANSWER_FIELD]?.message}
           />
         )}
       </div>
-      <SelectField
-        label="Charge state"
-        value={draft.chargeState}
-        error={errors.chargeState}
-        onChange={(event) => set("chargeState")(event.target.value)}
-      >
+      <SelectField label="Charge state" error={errors.chargeState?.message} {...form.register("chargeState")}>
         <option value="">Choose…</option>
         {CHARGE_STATES.map((state) => (
           <option key={state} value={state}>
@@ -255,9 +261,8 @@ export function AttemptForm({
         label="Your reasoning, in one line"
         hint="Which reading points where, e.g. “low subcooling on a TXV with high superheat”"
         maxLength={REASONING_MAX_LENGTH}
-        value={draft.reasoning}
-        error={errors.reasoning}
-        onChange={(event) => set("reasoning")(event.target.value)}
+        error={errors.reasoning?.message}
+        {...form.register("reasoning")}
       />
       {serverError && <FormAlert>{serverError}</FormAlert>}
       <Button type="submit" size="lg" disabled={pending}>

@@ -1,6 +1,9 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { GraduationCap } from "lucide-react";
 import { useState } from "react";
+import { useForm, useWatch } from "react-hook-form";
 import { useNavigate } from "react-router-dom";
+import { CaseFromReadingSchema } from "@shared/schemas/casebook.ts";
 import type { Reading } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
@@ -15,10 +18,25 @@ const label = (reading: Reading) => `Circuit ${reading.circuit}, ${formatDateTim
  * numbers and the kind of unit only, never the customer, and opens it in the case editor.
  */
 export function CaseFromReading({ readings }: { readings: Reading[] }) {
-  const [readingId, setReadingId] = useState(readings.at(-1)?.id ?? "");
+  const form = useForm({
+    resolver: zodResolver(CaseFromReadingSchema),
+    defaultValues: { readingId: readings.at(-1)?.id ?? "" },
+  });
+  const readingId = useWatch({ control: form.control, name: "readingId" });
   const [error, setError] = useState<string | null>(null);
   const create = useCreateCaseFromReading();
   const navigate = useNavigate();
+  const submit = form.handleSubmit(
+    async (values) => {
+      try {
+        const created = await create.mutateAsync(values.readingId);
+        navigate(paths.casebook.edit.getHref(created.id));
+      } catch (caught) {
+        setError(caught instanceof Error ? caught.message : "The case was not made");
+      }
+    },
+    (errors) => setError(errors.readingId?.message ?? null),
+  );
   if (readings.length === 0) return null;
   return (
     <section aria-labelledby="case-from-reading-heading" className="rounded-card border-2 border-rule bg-surface p-4">
@@ -40,8 +58,7 @@ export function CaseFromReading({ readings }: { readings: Reading[] }) {
           </label>
           <select
             id="case-reading"
-            value={readingId}
-            onChange={(event) => setReadingId(event.target.value)}
+            {...form.register("readingId")}
             className="min-h-touch rounded-card border-2 border-rule bg-surface px-3"
           >
             {readings.map((reading) => (
@@ -54,14 +71,9 @@ export function CaseFromReading({ readings }: { readings: Reading[] }) {
         <Button
           variant="secondary"
           disabled={create.isPending || readingId === ""}
-          onClick={async () => {
+          onClick={() => {
             setError(null);
-            try {
-              const created = await create.mutateAsync(readingId);
-              navigate(paths.casebook.edit.getHref(created.id));
-            } catch (caught) {
-              setError(caught instanceof Error ? caught.message : "The case was not made");
-            }
+            void submit();
           }}
         >
           {create.isPending ? "Making the case…" : "Make a casebook case"}

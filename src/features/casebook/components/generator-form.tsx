@@ -1,10 +1,11 @@
-import { useState, type FormEvent } from "react";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useForm, useWatch } from "react-hook-form";
 import { useNavigate } from "react-router-dom";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { GENERATOR_REFRIGERANTS } from "@shared/engine/index.ts";
 import { applicationText } from "@shared/content/applications.ts";
-import { GENERATOR_DEVICES, GENERATOR_FAULTS, type GeneratorFault } from "@shared/schemas/casebook.ts";
-import { APPLICATIONS, type Application, type MeteringDevice } from "@shared/schemas/diagnosis.ts";
+import { GenerateCaseSchema, GENERATOR_DEVICES, GENERATOR_FAULTS } from "@shared/schemas/casebook.ts";
+import { APPLICATIONS, type Application } from "@shared/schemas/diagnosis.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField } from "@/components/ui/field/field.tsx";
 import { paths } from "@/config/paths.ts";
@@ -15,25 +16,22 @@ import { METERING_LABELS } from "../utils/case-readings.ts";
 export function GeneratorForm() {
   const navigate = useNavigate();
   const generate = useGenerateCase();
-  const [refrigerant, setRefrigerant] = useState<string>("R410A");
-  const [meteringDevice, setMeteringDevice] = useState<MeteringDevice>("txv");
-  const [fault, setFault] = useState<GeneratorFault>("undercharged");
-  const [application, setApplication] = useState<Application>("comfort-cooling");
+  const form = useForm({
+    resolver: zodResolver(GenerateCaseSchema),
+    defaultValues: {
+      refrigerant: "R410A",
+      meteringDevice: "txv",
+      fault: "undercharged",
+      application: "comfort-cooling",
+    },
+  });
+  const { errors } = form.formState;
+  const application = useWatch({ control: form.control, name: "application" }) ?? "comfort-cooling";
   const devices = GENERATOR_DEVICES[application];
 
-  function chooseApplication(next: Application) {
-    setApplication(next);
-    // Keep the device valid for the new application (a chiller has no fixed orifice).
-    if (!GENERATOR_DEVICES[next].includes(meteringDevice)) setMeteringDevice(GENERATOR_DEVICES[next][0]!);
-  }
-
-  function submit(event: FormEvent) {
-    event.preventDefault();
-    generate.mutate(
-      { refrigerant, meteringDevice, fault, application },
-      { onSuccess: (made) => navigate(paths.casebook.case.getHref(made.id)) },
-    );
-  }
+  const submit = form.handleSubmit((options) =>
+    generate.mutate(options, { onSuccess: (made) => navigate(paths.casebook.case.getHref(made.id)) }),
+  );
 
   return (
     <form
@@ -51,8 +49,14 @@ export function GeneratorForm() {
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
         <SelectField
           label="Application"
-          value={application}
-          onChange={(event) => chooseApplication(event.target.value as Application)}
+          error={errors.application?.message}
+          {...form.register("application", {
+            onChange: (event: { target: { value: Application } }) => {
+              const next = GENERATOR_DEVICES[event.target.value];
+              // Keep the device valid for the new application (a chiller has no fixed orifice).
+              if (!next.includes(form.getValues("meteringDevice"))) form.setValue("meteringDevice", next[0]!);
+            },
+          })}
         >
           {APPLICATIONS.map((value) => (
             <option key={value} value={value}>
@@ -60,7 +64,7 @@ export function GeneratorForm() {
             </option>
           ))}
         </SelectField>
-        <SelectField label="Refrigerant" value={refrigerant} onChange={(event) => setRefrigerant(event.target.value)}>
+        <SelectField label="Refrigerant" error={errors.refrigerant?.message} {...form.register("refrigerant")}>
           {GENERATOR_REFRIGERANTS.map((id) => (
             <option key={id} value={id}>
               {id}
@@ -69,8 +73,8 @@ export function GeneratorForm() {
         </SelectField>
         <SelectField
           label="Metering device"
-          value={meteringDevice}
-          onChange={(event) => setMeteringDevice(event.target.value as MeteringDevice)}
+          error={errors.meteringDevice?.message}
+          {...form.register("meteringDevice")}
         >
           {devices.map((device) => (
             <option key={device} value={device}>
@@ -78,7 +82,7 @@ export function GeneratorForm() {
             </option>
           ))}
         </SelectField>
-        <SelectField label="Fault" value={fault} onChange={(event) => setFault(event.target.value as GeneratorFault)}>
+        <SelectField label="Fault" error={errors.fault?.message} {...form.register("fault")}>
           {GENERATOR_FAULTS.map((state) => (
             <option key={state} value={state}>
               {chargeStateText[state].title}

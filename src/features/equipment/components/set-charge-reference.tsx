@@ -1,6 +1,9 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { useQuery } from "@tanstack/react-query";
 import { Crosshair } from "lucide-react";
 import { useId, useRef, useState } from "react";
+import { useForm, useWatch } from "react-hook-form";
+import { z } from "zod";
 import { ChargeReferenceSetSchema, MAX_CLEAR_REASON_LENGTH } from "@shared/schemas/charge-references.ts";
 import type { VisitSummary } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
@@ -26,15 +29,30 @@ interface SetChargeReferenceProps {
   units: DisplayUnits;
 }
 
+/** What the dialog holds: the visit only narrows the readings offered; the body is the reading and the note. */
+interface TypedChoice {
+  visitId: string;
+  readingId: string;
+  note: string;
+}
+
+/** The body as the server checks it: the form of ChargeReferenceSetSchema that names a reading. */
+const SetFromReadingSchema = z.preprocess(
+  (typed: TypedChoice) => ({ readingId: typed.readingId, ...(typed.note.trim() ? { note: typed.note } : {}) }),
+  ChargeReferenceSetSchema.options[0],
+);
+
 /**
  * "Set from a reading…": a senior picks a visit, then one settled reading of this circuit on it;
  * its subcooling, superheat, saturation temperatures and air become the reference point.
  */
 export function SetChargeReference({ equipmentId, circuit, visits, units }: SetChargeReferenceProps) {
   const dialog = useRef<HTMLDialogElement>(null);
-  const [visitId, setVisitId] = useState("");
-  const [readingId, setReadingId] = useState("");
-  const [note, setNote] = useState("");
+  const form = useForm({
+    resolver: zodResolver(SetFromReadingSchema),
+    defaultValues: { visitId: "", readingId: "", note: "" },
+  });
+  const visitId = useWatch({ control: form.control, name: "visitId" });
   const [error, setError] = useState<string | null>(null);
   const set = useSetChargeReference(equipmentId);
   // Only once a visit is chosen: no query fires with an empty id.
@@ -54,31 +72,25 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
       : `${formatNumber(differenceToDisplay(kelvin, units.temperature), TEMPERATURE_DECIMALS)} ${DIFFERENCE_LABEL[units.temperature]}`;
 
   const open = () => {
-    setVisitId("");
-    setReadingId("");
-    setNote("");
+    form.reset();
     setError(null);
     dialog.current?.showModal();
   };
-  const confirm = async () => {
-    // The same schema the server checks the body with.
-    const parsed = ChargeReferenceSetSchema.safeParse({ readingId, ...(note.trim() ? { note } : {}) });
-    if (!parsed.success)
-      return setError(
-        readingId === ""
-          ? "Choose a reading of this circuit"
-          : (parsed.error.issues[0]?.message ?? "Check the reading"),
-      );
-    setError(null);
-    try {
-      await set.mutateAsync({ circuit, body: parsed.data });
-      dialog.current?.close();
-    } catch (caught) {
-      const field = caught instanceof ApiError ? caught.fields.readingId : undefined;
-      setError(field ?? (caught instanceof Error ? caught.message : "The reference point was not set"));
-    }
-  };
-
+  // The dialog shows one message at a time, above its fields.
+  const confirm = () =>
+    form.handleSubmit(
+      async (body) => {
+        setError(null);
+        try {
+          await set.mutateAsync({ circuit, body });
+          dialog.current?.close();
+        } catch (caught) {
+          const field = caught instanceof ApiError ? caught.fields.readingId : undefined;
+          setError(field ?? (caught instanceof Error ? caught.message : "The reference point was not set"));
+        }
+      },
+      (errors) => setError(errors.readingId?.message ?? errors.note?.message ?? "Check the reading"),
+    )();
   return (
     <>
       <Button variant="secondary" onClick={open}>
@@ -99,11 +111,8 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
       >
         <SelectField
           label="Visit"
-          value={visitId}
-          onChange={(event) => {
-            setVisitId(event.target.value);
-            setReadingId("");
-          }}
+          // Another visit, other readings: the one chosen before is not among them.
+          {...form.register("visitId", { onChange: () => form.setValue("readingId", "") })}
         >
           <option value="">Choose a visit…</option>
           {withReadings.map((candidate) => (
@@ -118,7 +127,7 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
           (readings.length === 0 ? (
             <p className="text-muted">No standing reading of circuit {circuit} on this visit.</p>
           ) : (
-            <SelectField label="Reading" value={readingId} onChange={(event) => setReadingId(event.target.value)}>
+            <SelectField label="Reading" {...form.register("readingId")}>
               <option value="">Choose a reading…</option>
               {readings.map((reading) => (
                 <option key={reading.id} value={reading.id}>
@@ -136,8 +145,7 @@ export function SetChargeReference({ equipmentId, circuit, visits, units }: SetC
             id={`${id}-note`}
             rows={2}
             maxLength={MAX_CLEAR_REASON_LENGTH}
-            value={note}
-            onChange={(event) => setNote(event.target.value)}
+            {...form.register("note")}
             className="block w-full rounded-card border-2 border-rule bg-surface p-3"
           />
         </div>

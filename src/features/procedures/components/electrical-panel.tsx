@@ -1,6 +1,8 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { formatTime } from "@shared/format/date-time.ts";
 import { Plus, Save, Trash2 } from "lucide-react";
-import { useState } from "react";
+import { Controller, useFieldArray, useForm } from "react-hook-form";
+import { z } from "zod";
 import { runningCurrentNotice } from "@shared/engine/index.ts";
 import {
   ELECTRICAL_TARGET_LABELS,
@@ -11,13 +13,11 @@ import {
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, TextField } from "@/components/ui/field/field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
-import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateElectricalCheck, useElectricalChecks } from "@/lib/api/procedures.ts";
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
-import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
-import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { fieldMessages } from "@shared/schemas/field-messages.ts";
-import { errorFor } from "../utils/field-errors.ts";
+import { messageAt } from "@/lib/form-errors.ts";
+import { useFormValues } from "@/hooks/use-form-values.ts";
+import { useProcedureSave } from "../hooks/use-procedure-save.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { ElectricalCheckView } from "./electrical-check-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
@@ -32,14 +32,15 @@ interface ElectricalPanelProps {
 }
 
 type InsulationRow = { point: string; megohms: string; testVoltageV: string };
+type TerminalKey = "commonRun" | "commonStart" | "runStart";
 const PHASE_PAIRS = ["L1–L2", "L2–L3", "L3–L1"];
 const WINDING_PAIRS = ["T1–T2", "T2–T3", "T3–T1"];
 /** A single-phase compressor's terminal pairs, in the order the body names them. */
-const TERMINAL_PAIRS = [
+const TERMINAL_PAIRS: readonly { key: TerminalKey; label: string }[] = [
   { key: "commonRun", label: "C–R (run)" },
   { key: "commonStart", label: "C–S (start)" },
   { key: "runStart", label: "R–S" },
-] as const;
+];
 /** Insulation testers for low-voltage plant are usually set to 500 V d.c. (AS/NZS 3000 verification, from memory). */
 const DEFAULT_TEST_VOLTAGE = "500";
 
@@ -47,10 +48,30 @@ const emptyInsulation = (): InsulationRow => ({ point: "", megohms: "", testVolt
 /** Only filled values go to the schema; three empty phase boxes mean "not measured". */
 const filled = (values: string[]) =>
   values.some((value) => value.trim() !== "") ? values.map((value) => toNumber(value) ?? Number.NaN) : undefined;
-const filledTerminals = (values: string[]) => {
-  const numbers = filled(values);
-  return numbers ? { commonRun: numbers[0]!, commonStart: numbers[1]!, runStart: numbers[2]! } : undefined;
-};
+
+/** What the form holds, named as the body's fields so the schema's messages land under them. */
+interface TypedElectricalCheck {
+  target: ElectricalTarget;
+  circuit: string;
+  supplyVolts: string[];
+  nameplateV: string;
+  insulation: InsulationRow[];
+  windingOhms: string[];
+  singlePhaseWindingOhms: Record<TerminalKey, string>;
+  runningAmps: string[];
+  ratedA: string;
+  note: string;
+}
+
+/** The readings cleared after a save; what was checked, the circuit and the nameplate figures stay. */
+const READINGS_CLEARED = {
+  supplyVolts: ["", "", ""],
+  insulation: [emptyInsulation()],
+  windingOhms: ["", "", ""],
+  singlePhaseWindingOhms: { commonRun: "", commonStart: "", runStart: "" },
+  runningAmps: ["", "", ""],
+  note: "",
+} satisfies Partial<TypedElectricalCheck>;
 
 /**
  * Electrical checks on a compressor, a fan motor or the supply: phase voltages and imbalance,
@@ -60,99 +81,77 @@ const filledTerminals = (values: string[]) => {
 export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: ElectricalPanelProps) {
   const checks = useElectricalChecks(visitId);
   const create = useCreateElectricalCheck();
-  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
-  const entryId = useEntryClientId();
-  const keepWhenOffline = useKeepWhenOffline();
   const defaults = checks.data?.defaults;
   const threePhase = (defaults?.phases ?? 3) === 3;
   const phaseCount = threePhase ? 3 : 1;
 
-  const [target, setTarget] = useState<ElectricalTarget>("compressor");
-  const [circuit, setCircuit] = useState(String(circuits[0] ?? 1));
-  const [volts, setVolts] = useState<string[]>(["", "", ""]);
-  const [nameplateV, setNameplateV] = useState("");
-  const [insulation, setInsulation] = useState<InsulationRow[]>([emptyInsulation()]);
-  const [ohms, setOhms] = useState<string[]>(["", "", ""]);
-  const [terminals, setTerminals] = useState<string[]>(["", "", ""]);
-  const [amps, setAmps] = useState<string[]>(["", "", ""]);
-  const [ratedA, setRatedA] = useState("");
-  const [note, setNote] = useState("");
-  // Messages from the server for what it alone knows (e.g. no RLA on record); a field's own is dropped when it is edited.
-  const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
-  // Once a save was tried every field is checked; before that only the ones typed in.
-  const [attempted, setAttempted] = useState(false);
-  const [formError, setFormError] = useState<string | null>(null);
-  const [saved, setSaved] = useState(false);
+  /** The body POST …/electrical-checks takes, from what was typed for the thing checked. */
+  const toBody = (typed: TypedElectricalCheck) => {
+    const insulationRows = typed.insulation.filter((row) => row.megohms.trim() !== "");
+    const terminals = filled(TERMINAL_PAIRS.map((pair) => typed.singlePhaseWindingOhms[pair.key]));
+    return {
+      target: typed.target,
+      circuit: typed.target === "supply" ? null : Number(typed.circuit),
+      supplyVolts: filled(typed.supplyVolts.slice(0, phaseCount)),
+      nameplateV: toNumber(typed.nameplateV),
+      insulation:
+        insulationRows.length > 0
+          ? insulationRows.map((row) => ({
+              point: row.point.trim() || undefined,
+              megohms: toNumber(row.megohms) ?? Number.NaN,
+              testVoltageV: toNumber(row.testVoltageV) ?? Number.NaN,
+            }))
+          : undefined,
+      windingOhms: typed.target === "supply" || !threePhase ? undefined : filled(typed.windingOhms),
+      singlePhaseWindingOhms:
+        typed.target === "compressor" && !threePhase && terminals
+          ? { commonRun: terminals[0]!, commonStart: terminals[1]!, runStart: terminals[2]! }
+          : undefined,
+      runningAmps: typed.target === "supply" ? undefined : filled(typed.runningAmps.slice(0, phaseCount)),
+      ratedA: toNumber(typed.ratedA),
+      note: typed.note.trim() || undefined,
+    };
+  };
 
+  const form = useForm<TypedElectricalCheck, unknown, z.output<typeof ElectricalCheckBodySchema>>({
+    resolver: zodResolver(z.preprocess(toBody, ElectricalCheckBodySchema)),
+    // The same schema the server uses, as each field is typed: a corrected field loses its message at once.
+    mode: "onChange",
+    defaultValues: {
+      target: "compressor",
+      circuit: String(circuits[0] ?? 1),
+      nameplateV: "",
+      ratedA: "",
+      ...READINGS_CLEARED,
+    },
+  });
+  const insulation = useFieldArray({ control: form.control, name: "insulation" });
+  const { errors } = form.formState;
+  const save = useProcedureSave({
+    form,
+    visitId,
+    mutation: create,
+    // Taken now, by the device's clock; without a connection it waits in the outbox.
+    record: (body, clientId) => ({ ...body, clientId, takenAt: new Date().toISOString() }),
+    send: (record) => create.mutateAsync({ visitId, ...record }),
+    entry: () => ({ kind: "electrical-check", path: procedureRecordsPath("electrical-checks", visitId) }),
+    cleared: (typed) => ({ ...typed, ...READINGS_CLEARED, insulation: [emptyInsulation()] }),
+    notSaved: "The check was not saved. Try again.",
+  });
+
+  const typed = useFormValues(form.control);
+  const target = typed.target;
   const ratedDefault = target === "compressor" ? defaults?.compressorRlaA : target === "fan" ? defaults?.fanFlaA : null;
   const singlePhaseCompressor = target === "compressor" && !threePhase;
-  const edited = (path: string) =>
-    setServerErrors((fields) =>
-      Object.fromEntries(Object.entries(fields).filter(([key]) => key !== path && key !== "_")),
-    );
-  const setAt = (
-    setter: (update: (values: string[]) => string[]) => void,
-    index: number,
-    value: string,
-    path?: string,
-  ) => {
-    setter((values) => values.map((old, at) => (at === index ? value : old)));
-    if (path) edited(`${path}.${index}`);
-  };
-
-  const insulationRows = insulation.filter((row) => row.megohms.trim() !== "");
-  const body = {
-    target,
-    circuit: target === "supply" ? null : Number(circuit),
-    supplyVolts: filled(volts.slice(0, phaseCount)),
-    nameplateV: toNumber(nameplateV),
-    insulation:
-      insulationRows.length > 0
-        ? insulationRows.map((row) => ({
-            point: row.point.trim() || undefined,
-            megohms: toNumber(row.megohms) ?? Number.NaN,
-            testVoltageV: toNumber(row.testVoltageV) ?? Number.NaN,
-          }))
-        : undefined,
-    windingOhms:
-      target === "supply" || !threePhase ? undefined : (filled(ohms) as [number, number, number] | undefined),
-    singlePhaseWindingOhms: singlePhaseCompressor ? filledTerminals(terminals) : undefined,
-    runningAmps: target === "supply" ? undefined : filled(amps.slice(0, phaseCount)),
-    ratedA: toNumber(ratedA),
-    note: note.trim() || undefined,
-  };
-  // The same schema the server uses, on every keystroke: a corrected field loses its message at once.
-  const parsed = ElectricalCheckBodySchema.safeParse(body);
-  const schemaErrors = parsed.success ? {} : fieldMessages(parsed.error);
-  const typedText = (path: string): string => {
-    const [group, index, field] = path.split(".");
-    const at = Number(index);
-    if (group === "supplyVolts" && index !== undefined) return volts[at] ?? "";
-    if (group === "windingOhms" && index !== undefined) return ohms[at] ?? "";
-    if (group === "singlePhaseWindingOhms" && index !== undefined)
-      return terminals[TERMINAL_PAIRS.findIndex((pair) => pair.key === index)] ?? "";
-    if (group === "runningAmps" && index !== undefined) return amps[at] ?? "";
-    if (group === "insulation" && field) return insulation[at]?.[field as keyof InsulationRow] ?? "";
-    if (group === "nameplateV") return nameplateV;
-    if (group === "ratedA") return ratedA;
-    if (group === "note") return note;
-    return "";
-  };
-  const errors: Record<string, string> = {
-    ...(attempted
-      ? schemaErrors
-      : Object.fromEntries(Object.entries(schemaErrors).filter(([path]) => typedText(path).trim() !== ""))),
-    ...serverErrors,
-  };
 
   // The engine's own running-current verdict (and a plausibility check) while the amps are typed.
-  const ratedForNotice = toNumber(ratedA) ?? ratedDefault ?? undefined;
+  const ratedForNotice = toNumber(typed.ratedA) ?? ratedDefault ?? undefined;
   const currentNotices =
     target === "supply" || ratedForNotice === undefined
       ? []
-      : amps.slice(0, phaseCount).map((text, index) => {
+      : typed.runningAmps.slice(0, phaseCount).map((text, index) => {
           const value = toNumber(text);
-          if (value === undefined || errors[`runningAmps.${index}`] || errors.ratedA) return null;
+          if (value === undefined || messageAt(errors, `runningAmps.${index}`) || errors.ratedA) return null;
           const notice = runningCurrentNotice({
             amps: value,
             ratedA: ratedForNotice,
@@ -160,39 +159,6 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
           });
           return notice && { notice, label: threePhase ? `L${index + 1}` : undefined };
         });
-
-  const save = async () => {
-    setFormError(null);
-    setSaved(false);
-    setAttempted(true);
-    setServerErrors({});
-    if (!parsed.success) {
-      setFormError("Check the fields marked below");
-      return;
-    }
-    try {
-      // Taken now, by the device's clock; without a connection it waits in the outbox.
-      const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      const sent = await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), {
-        kind: "electrical-check",
-        visitId,
-        path: procedureRecordsPath("electrical-checks", visitId),
-        body: record,
-      });
-      entryId.release();
-      setSaved(sent.outcome === "stored");
-      setAttempted(false);
-      setVolts(["", "", ""]);
-      setInsulation([emptyInsulation()]);
-      setOhms(["", "", ""]);
-      setTerminals(["", "", ""]);
-      setAmps(["", "", ""]);
-      setNote("");
-    } catch (error) {
-      if (error instanceof ApiError) setServerErrors(error.fields);
-      setFormError(error instanceof Error ? error.message : "The check was not saved. Try again.");
-    }
-  };
 
   return (
     <ProcedureLayout
@@ -217,60 +183,72 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
           ? {
               label: "New electrical check",
               title: "New electrical check",
-              onSubmit: () => void save(),
+              onSubmit: () => void save.submit(),
               children: (
                 <>
                   <div className="flex flex-wrap gap-3">
-                    <Segmented<ElectricalTarget>
-                      label="What was checked"
-                      value={target}
-                      onChange={(value) => {
-                        setTarget(value);
-                        setServerErrors({});
-                        setAttempted(false);
-                      }}
-                      options={ELECTRICAL_TARGETS.map((value) => ({ value, label: ELECTRICAL_TARGET_LABELS[value] }))}
+                    <Controller
+                      control={form.control}
+                      name="target"
+                      render={({ field }) => (
+                        <Segmented<ElectricalTarget>
+                          label="What was checked"
+                          value={field.value}
+                          onChange={(value) => {
+                            field.onChange(value);
+                            // Another thing checked: the last save's messages were about the one before.
+                            form.clearErrors();
+                          }}
+                          options={ELECTRICAL_TARGETS.map((value) => ({
+                            value,
+                            label: ELECTRICAL_TARGET_LABELS[value],
+                          }))}
+                        />
+                      )}
                     />
                     {target !== "supply" && circuits.length > 1 && (
-                      <Segmented<string>
-                        label="Circuit"
-                        value={circuit}
-                        onChange={setCircuit}
-                        options={circuits.map((number) => ({ value: String(number), label: `Circuit ${number}` }))}
+                      <Controller
+                        control={form.control}
+                        name="circuit"
+                        render={({ field }) => (
+                          <Segmented<string>
+                            label="Circuit"
+                            value={field.value}
+                            onChange={field.onChange}
+                            options={circuits.map((number) => ({ value: String(number), label: `Circuit ${number}` }))}
+                          />
+                        )}
                       />
                     )}
                   </div>
-                  {errors.target && <p className="text-sm font-medium text-fault">⚠ {errors.target}</p>}
+                  {errors.target && <p className="text-sm font-medium text-fault">⚠ {errors.target.message}</p>}
 
                   <fieldset className="space-y-2">
                     <legend className="font-semibold">
                       Supply voltage {threePhase ? "(line to line, running)" : "(running)"}
                     </legend>
                     <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-                      {volts.slice(0, phaseCount).map((value, index) => (
+                      {PHASE_PAIRS.slice(0, phaseCount).map((pair, index) => (
                         <NumberField
-                          key={index}
-                          label={threePhase ? PHASE_PAIRS[index]! : "Measured"}
+                          key={pair}
+                          label={threePhase ? pair : "Measured"}
                           unit="V"
-                          value={value}
-                          onValueChange={(text) => setAt(setVolts, index, text, "supplyVolts")}
-                          error={errors[`supplyVolts.${index}`]}
+                          registration={form.register(`supplyVolts.${index}`)}
+                          error={errors.supplyVolts?.[index]?.message}
                         />
                       ))}
                       <NumberField
                         label="Nameplate"
                         unit="V"
-                        value={nameplateV}
-                        onValueChange={(text) => {
-                          setNameplateV(text);
-                          edited("nameplateV");
-                        }}
-                        error={errors.nameplateV}
+                        registration={form.register("nameplateV")}
+                        error={errors.nameplateV?.message}
                         hint={defaults?.nameplateV ? `${defaults.nameplateV} V on the unit if left blank` : undefined}
                       />
                     </div>
-                    {(errors.supplyVolts || errors._) && (
-                      <p className="text-sm font-medium text-fault">⚠ {errors.supplyVolts ?? errors._}</p>
+                    {(errors.supplyVolts?.message || messageAt(errors, "_")) && (
+                      <p className="text-sm font-medium text-fault">
+                        ⚠ {errors.supplyVolts?.message ?? messageAt(errors, "_")}
+                      </p>
                     )}
                   </fieldset>
 
@@ -279,56 +257,42 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
                     <p className="text-sm text-muted">
                       Never on a compressor under vacuum. Enter the tester voltage you used.
                     </p>
-                    {insulation.map((row, index) => (
-                      <div key={index} className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[1fr_10rem_10rem_auto]">
+                    {insulation.fields.map((row, index) => (
+                      <div
+                        key={row.id}
+                        className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[1fr_10rem_10rem_auto]"
+                      >
                         <TextField
                           label="Point tested"
                           placeholder={target === "supply" ? "e.g. L1 to earth" : "e.g. C to earth"}
-                          value={row.point}
-                          onChange={(event) =>
-                            setInsulation((rows) =>
-                              rows.map((old, at) => (at === index ? { ...old, point: event.target.value } : old)),
-                            )
-                          }
                           className="col-span-2 sm:col-span-1"
+                          {...form.register(`insulation.${index}.point`)}
                         />
                         <NumberField
                           label="Reading"
                           unit="MΩ"
-                          value={row.megohms}
-                          onValueChange={(text) => {
-                            setInsulation((rows) =>
-                              rows.map((old, at) => (at === index ? { ...old, megohms: text } : old)),
-                            );
-                            edited(`insulation.${index}.megohms`);
-                          }}
-                          error={errors[`insulation.${index}.megohms`]}
+                          registration={form.register(`insulation.${index}.megohms`)}
+                          error={errors.insulation?.[index]?.megohms?.message}
                         />
                         <NumberField
                           label="Test voltage"
                           unit="V d.c."
-                          value={row.testVoltageV}
-                          onValueChange={(text) => {
-                            setInsulation((rows) =>
-                              rows.map((old, at) => (at === index ? { ...old, testVoltageV: text } : old)),
-                            );
-                            edited(`insulation.${index}.testVoltageV`);
-                          }}
-                          error={errors[`insulation.${index}.testVoltageV`]}
+                          registration={form.register(`insulation.${index}.testVoltageV`)}
+                          error={errors.insulation?.[index]?.testVoltageV?.message}
                         />
-                        {insulation.length > 1 && (
+                        {insulation.fields.length > 1 && (
                           <Button
                             variant="quiet"
                             aria-label={`Remove insulation reading ${index + 1}`}
-                            onClick={() => setInsulation((rows) => rows.filter((_row, at) => at !== index))}
+                            onClick={() => insulation.remove(index)}
                           >
                             <Trash2 aria-hidden className="size-5" />
                           </Button>
                         )}
                       </div>
                     ))}
-                    {insulation.length < 6 && (
-                      <Button variant="secondary" onClick={() => setInsulation((rows) => [...rows, emptyInsulation()])}>
+                    {insulation.fields.length < 6 && (
+                      <Button variant="secondary" onClick={() => insulation.append(emptyInsulation())}>
                         <Plus aria-hidden className="size-5" /> Another insulation reading
                       </Button>
                     )}
@@ -341,19 +305,18 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
                           <legend className="font-semibold">Winding resistance (lead to lead)</legend>
                           {/* Two across on a phone: three boxes of 24 px digits cut "12.45" to "12.4" at 390 px. */}
                           <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-                            {ohms.map((value, index) => (
+                            {WINDING_PAIRS.map((pair, index) => (
                               <NumberField
-                                key={index}
-                                label={WINDING_PAIRS[index]!}
+                                key={pair}
+                                label={pair}
                                 unit="Ω"
-                                value={value}
-                                onValueChange={(text) => setAt(setOhms, index, text, "windingOhms")}
-                                error={errors[`windingOhms.${index}`]}
+                                registration={form.register(`windingOhms.${index}`)}
+                                error={errors.windingOhms?.[index]?.message}
                               />
                             ))}
                           </div>
-                          {errors.windingOhms && (
-                            <p className="text-sm font-medium text-fault">⚠ {errors.windingOhms}</p>
+                          {errors.windingOhms?.message && (
+                            <p className="text-sm font-medium text-fault">⚠ {errors.windingOhms.message}</p>
                           )}
                         </fieldset>
                       )}
@@ -365,47 +328,38 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
                             run.
                           </p>
                           <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-                            {TERMINAL_PAIRS.map((pair, index) => (
+                            {TERMINAL_PAIRS.map((pair) => (
                               <NumberField
                                 key={pair.key}
                                 label={pair.label}
                                 unit="Ω"
-                                value={terminals[index]!}
-                                onValueChange={(text) => {
-                                  setAt(setTerminals, index, text);
-                                  edited(`singlePhaseWindingOhms.${pair.key}`);
-                                }}
-                                error={errors[`singlePhaseWindingOhms.${pair.key}`]}
+                                registration={form.register(`singlePhaseWindingOhms.${pair.key}`)}
+                                error={errors.singlePhaseWindingOhms?.[pair.key]?.message}
                               />
                             ))}
                           </div>
-                          {errors.singlePhaseWindingOhms && (
-                            <p className="text-sm font-medium text-fault">⚠ {errors.singlePhaseWindingOhms}</p>
+                          {errors.singlePhaseWindingOhms?.message && (
+                            <p className="text-sm font-medium text-fault">⚠ {errors.singlePhaseWindingOhms.message}</p>
                           )}
                         </fieldset>
                       )}
                       <fieldset className="space-y-2">
                         <legend className="font-semibold">Running current</legend>
                         <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-                          {amps.slice(0, phaseCount).map((value, index) => (
+                          {PHASE_PAIRS.slice(0, phaseCount).map((pair, index) => (
                             <NumberField
-                              key={index}
+                              key={pair}
                               label={threePhase ? `L${index + 1}` : "Measured"}
                               unit="A"
-                              value={value}
-                              onValueChange={(text) => setAt(setAmps, index, text, "runningAmps")}
-                              error={errors[`runningAmps.${index}`]}
+                              registration={form.register(`runningAmps.${index}`)}
+                              error={errors.runningAmps?.[index]?.message}
                             />
                           ))}
                           <NumberField
                             label={target === "fan" ? "Nameplate FLA" : "Nameplate RLA"}
                             unit="A"
-                            value={ratedA}
-                            onValueChange={(text) => {
-                              setRatedA(text);
-                              edited("ratedA");
-                            }}
-                            error={errors.ratedA}
+                            registration={form.register("ratedA")}
+                            error={errors.ratedA?.message}
                             hint={ratedDefault ? `${ratedDefault} A on the unit if left blank` : undefined}
                           />
                         </div>
@@ -420,20 +374,16 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
 
                   <TextField
                     label="Note"
-                    value={note}
-                    onChange={(event) => {
-                      setNote(event.target.value);
-                      edited("note");
-                    }}
-                    error={errorFor(errors, "note")}
+                    error={messageAt(errors, "note")}
                     placeholder="e.g. contactor pitted, replaced"
+                    {...form.register("note")}
                   />
-                  {formError && <FormAlert>{formError}</FormAlert>}
+                  {save.formError && <FormAlert>{save.formError}</FormAlert>}
                   <div className="flex flex-wrap items-center gap-3">
-                    <Button type="submit" size="lg" disabled={create.isPending}>
-                      <Save aria-hidden className="size-5" /> {create.isPending ? "Saving…" : "Save electrical check"}
+                    <Button type="submit" size="lg" disabled={save.pending}>
+                      <Save aria-hidden className="size-5" /> {save.pending ? "Saving…" : "Save electrical check"}
                     </Button>
-                    {saved && (
+                    {save.stored && (
                       <span role="status" className="text-sm text-muted">
                         ✓ Saved and judged — see the check above
                       </span>

@@ -1,6 +1,9 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { formatTime } from "@shared/format/date-time.ts";
 import { CloudOff, Plus, Play, Power, Undo2 } from "lucide-react";
 import { useState } from "react";
+import { Controller, useForm } from "react-hook-form";
+import { z } from "zod";
 import { micronsToPa, paToMicrons } from "@shared/engine/index.ts";
 import {
   EvacuationCreateSchema,
@@ -26,11 +29,10 @@ import {
 } from "@/lib/api/procedures.ts";
 import { evacuationSamplesPath, procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
-import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
-import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-outbox.ts";
+import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
 import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
-import { fieldMessages } from "@shared/schemas/field-messages.ts";
-import { useFieldErrors } from "../hooks/use-field-errors.ts";
+import { useFormValues } from "@/hooks/use-form-values.ts";
+import { useProcedureSave } from "../hooks/use-procedure-save.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { EvacuationChart } from "./lazy-evacuation-chart.tsx";
 import { evacuationsOnDevice, type ShownEvacuation } from "../utils/evacuations-on-device.ts";
@@ -49,9 +51,17 @@ function convertTyped(text: string, from: VacuumUnit, to: VacuumUnit): string {
   return to === "micron" ? String(Math.round(paToMicrons(value))) : formatNumber(micronsToPa(value), 1);
 }
 
-function errorText(error: unknown, fallback: string): { message: string; fields: Record<string, string> } {
-  if (error instanceof ApiError) return { message: error.message, fields: error.fields };
-  return { message: error instanceof Error ? error.message : fallback, fields: {} };
+/** What the reading form holds; a time still null fills itself in from the clock. */
+interface TypedSample {
+  microns: string;
+  minutes: string | null;
+  /** Typed beside "Pump valved off" (an update of the evacuation, not a reading); null: the last reading's time. */
+  isolatedAtMinutes: string | null;
+}
+
+/** What the start form holds; a target still null is the company's figure. */
+interface TypedStart {
+  targetMicrons: string | null;
 }
 
 /** Readings entry for the evacuation in progress: the time fills itself in, the unit is the technician's choice. */
@@ -70,75 +80,56 @@ function SampleEntry({
 }) {
   const now = useNow(5_000);
   const addSample = useAddEvacuationSample();
-  const keepWhenOffline = useKeepWhenOffline();
-  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
-  const entryId = useEntryClientId();
   const update = useUpdateEvacuation();
-  const [reading, setReading] = useState("");
-  const [minutes, setMinutes] = useState<string | null>(null);
-  const [isolation, setIsolation] = useState<string | null>(null);
-  const [formError, setFormError] = useState<string | null>(null);
+  const [actionError, setActionError] = useState<string | null>(null);
   const [stale, setStale] = useState<string | null>(null);
   const [reloading, setReloading] = useState(false);
 
   const autoMinutes = formatNumber(minutesSince(evacuation.startedAt, now), 1);
-  const minutesText = minutes ?? autoMinutes;
   const lastMinutes = evacuation.samples.at(-1)?.minutes;
-  const isolationText = isolation ?? (lastMinutes !== undefined ? String(lastMinutes) : autoMinutes);
-  // A message goes as soon as its field is changed.
-  const [errors, setErrors] = useFieldErrors({
-    microns: reading,
-    minutes: minutesText,
-    isolatedAtMinutes: isolationText,
-  });
-
-  const add = async () => {
-    setFormError(null);
-    const value = toNumber(reading);
-    const body = {
+  /** The body POST …/samples takes: the reading in microns, at the minutes typed or counted. */
+  const toBody = (typed: TypedSample) => {
+    const value = toNumber(typed.microns);
+    return {
       microns: value === undefined || Number.isNaN(value) ? value : fromDisplay(value, unit),
-      minutes: toNumber(minutesText),
+      minutes: toNumber(typed.minutes ?? autoMinutes),
     };
-    const parsed = EvacuationSampleBodySchema.safeParse(body);
-    if (!parsed.success) {
-      setErrors(fieldMessages(parsed.error));
-      return;
-    }
-    setErrors({});
-    // Cleared at once, so the next reading can be typed while this one saves; restored on failure.
-    const typed = { reading, minutes };
-    setReading("");
-    setMinutes(null);
-    try {
-      // A sample kept on the device counts its minutes from the pump's start now, not when it arrives.
-      const sample = {
-        ...parsed.data,
-        minutes: parsed.data.minutes ?? minutesSince(evacuation.startedAt, Date.now()),
-        clientId: entryId.take(),
-      };
-      // Readings of an evacuation still on the device go after it, in order, from the outbox: sent
-      // now, they would reach the server before the evacuation they belong to.
-      const send = evacuation.onDevice
-        ? () => Promise.reject(new ApiError(0, "Kept behind its evacuation"))
-        : () => addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...sample });
-      await keepWhenOffline(send, {
-        kind: "evacuation-sample",
-        visitId,
-        path: evacuationSamplesPath(visitId, evacuation.id),
-        body: sample,
-      });
-      entryId.release();
-    } catch (error) {
-      const { message, fields } = errorText(error, "The reading was not saved. Try again.");
-      setReading(typed.reading);
-      setMinutes(typed.minutes);
-      setErrors(fields);
-      setFormError(message);
-    }
   };
+  const form = useForm<TypedSample, unknown, z.output<typeof EvacuationSampleBodySchema>>({
+    resolver: zodResolver(z.preprocess(toBody, EvacuationSampleBodySchema)),
+    defaultValues: { microns: "", minutes: null, isolatedAtMinutes: null },
+  });
+  const { errors } = form.formState;
+  const save = useProcedureSave({
+    form,
+    visitId,
+    mutation: addSample,
+    // A sample kept on the device counts its minutes from the pump's start now, not when it arrives.
+    record: (body, clientId) => ({
+      ...body,
+      minutes: body.minutes ?? minutesSince(evacuation.startedAt, Date.now()),
+      clientId,
+    }),
+    // Readings of an evacuation still on the device go after it, in order, from the outbox: sent
+    // now, they would reach the server before the evacuation they belong to.
+    send: (sample) =>
+      evacuation.onDevice
+        ? Promise.reject(new ApiError(0, "Kept behind its evacuation"))
+        : addSample.mutateAsync({ visitId, evacuationId: evacuation.id, ...sample }),
+    entry: () => ({ kind: "evacuation-sample", path: evacuationSamplesPath(visitId, evacuation.id) }),
+    // Cleared at once, so the next reading can be typed while this one saves; restored on failure.
+    clearAtOnce: true,
+    cleared: (typed) => ({ ...typed, microns: "", minutes: null }),
+    notSaved: "The reading was not saved. Try again.",
+    invalidMessage: null,
+  });
+  const typed = useFormValues(form.control);
+  const minutesText = typed.minutes ?? autoMinutes;
+  const isolationText = typed.isolatedAtMinutes ?? (lastMinutes !== undefined ? String(lastMinutes) : autoMinutes);
 
   const setIsolated = async (isolatedAtMinutes: number | null) => {
-    setFormError(null);
+    save.dismiss();
+    setActionError(null);
     setStale(null);
     try {
       await update.mutateAsync({
@@ -147,15 +138,18 @@ function SampleEntry({
         isolatedAtMinutes,
         version: evacuation.version,
       });
-      setIsolation(null);
+      form.setValue("isolatedAtMinutes", null);
     } catch (error) {
       // Another device valved off (or undid it) since this screen loaded: show theirs first.
       if (error instanceof ApiError && error.isStale) return setStale(error.message);
-      const { message, fields } = errorText(error, "The change was not saved. Try again.");
-      setErrors(fields);
-      setFormError(message);
+      if (error instanceof ApiError) {
+        for (const [path, message] of Object.entries(error.fields))
+          form.setError(path as keyof TypedSample, { type: "server", message });
+      }
+      setActionError(error instanceof Error ? error.message : "The change was not saved. Try again.");
     }
   };
+  const formError = save.formError ?? actionError;
 
   if (!canWrite) return null;
   return (
@@ -166,36 +160,52 @@ function SampleEntry({
         className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[1fr_10rem_auto]"
         onSubmit={(event) => {
           event.preventDefault();
-          void add();
+          setActionError(null);
+          void save.submit();
         }}
       >
         <NumberField
           label="Vacuum reading"
           unit={VACUUM_LABEL[unit]}
-          value={reading}
-          onValueChange={setReading}
-          error={errors.microns}
+          registration={form.register("microns")}
+          error={errors.microns?.message}
         />
-        <NumberField
-          label="Time from start"
-          unit="min"
-          value={minutesText}
-          onValueChange={setMinutes}
-          error={errors.minutes}
-          hint={minutes === null ? "Fills in by itself" : undefined}
+        <Controller
+          control={form.control}
+          name="minutes"
+          render={({ field }) => (
+            <NumberField
+              ref={field.ref}
+              label="Time from start"
+              unit="min"
+              value={minutesText}
+              onValueChange={field.onChange}
+              onBlur={field.onBlur}
+              error={errors.minutes?.message}
+              hint={field.value === null ? "Fills in by itself" : undefined}
+            />
+          )}
         />
-        <Button type="submit" size="lg" disabled={addSample.isPending} className="col-span-2 sm:col-span-1">
-          <Plus aria-hidden className="size-5" /> {addSample.isPending ? "Saving…" : "Add reading"}
+        <Button type="submit" size="lg" disabled={save.pending} className="col-span-2 sm:col-span-1">
+          <Plus aria-hidden className="size-5" /> {save.pending ? "Saving…" : "Add reading"}
         </Button>
       </form>
       {evacuation.isolatedAtMinutes === null ? (
         <div className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[10rem_auto]">
-          <NumberField
-            label="Valved off at"
-            unit="min"
-            value={isolationText}
-            onValueChange={setIsolation}
-            error={errors.isolatedAtMinutes}
+          <Controller
+            control={form.control}
+            name="isolatedAtMinutes"
+            render={({ field }) => (
+              <NumberField
+                ref={field.ref}
+                label="Valved off at"
+                unit="min"
+                value={isolationText}
+                onValueChange={field.onChange}
+                onBlur={field.onBlur}
+                error={errors.isolatedAtMinutes?.message}
+              />
+            )}
           />
           <Button
             variant="secondary"
@@ -242,13 +252,7 @@ function SampleEntry({
 export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWrite: boolean }) {
   const evacuations = useEvacuations(visitId);
   const create = useCreateEvacuation();
-  const keepWhenOffline = useKeepWhenOffline();
-  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
-  const entryId = useEntryClientId();
   const [unit, setUnit] = useState<VacuumUnit>("micron");
-  // Typed in the unit shown; stored and sent in microns.
-  const [target, setTarget] = useState<string | null>(null);
-  const [startError, setStartError] = useState<{ message: string; fields: Record<string, string> } | null>(null);
 
   const onDevice = useOutboxEntries();
   // The server's evacuations with what waits on this device (readings, or one started without signal).
@@ -256,40 +260,38 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
   // The latest evacuation that stands is the one in progress; voided ones stay listed below.
   const current = list.filter(isStanding).at(-1);
   const earlier = list.filter((evacuation) => evacuation !== current);
-  const targetText =
-    target ?? (evacuations.data ? convertTyped(String(evacuations.data.defaults.targetMicrons), "micron", unit) : "");
+  // Typed in the unit shown; stored and sent in microns.
+  const targetTextOf = (typed: TypedStart) =>
+    typed.targetMicrons ??
+    (evacuations.data ? convertTyped(String(evacuations.data.defaults.targetMicrons), "micron", unit) : "");
   const targetRange = `${formatVacuum(MIN_TARGET_MICRONS, unit)} to ${formatVacuum(MAX_TARGET_MICRONS, unit)}`;
-
-  const start = async () => {
-    setStartError(null);
-    const typed = toNumber(targetText);
-    const parsed = EvacuationCreateSchema.safeParse({
-      targetMicrons: typed === undefined || Number.isNaN(typed) ? typed : Math.round(fromDisplay(typed, unit)),
-    });
-    if (!parsed.success) {
-      // The schema speaks microns; someone reading pascals gets the range in pascals.
-      const fields = fieldMessages(parsed.error);
-      if (unit === "Pa" && fields.targetMicrons) fields.targetMicrons = `Enter a target from ${targetRange}`;
-      setStartError({ message: "Check the target", fields });
-      return;
-    }
-    // The pump's start by this device's clock: kept without signal, the evacuation is stored with it.
-    const body = { ...parsed.data, clientId: entryId.take(), startedAt: new Date().toISOString() };
-    try {
-      await keepWhenOffline(() => create.mutateAsync({ visitId, ...body }), {
-        kind: "evacuation",
-        visitId,
-        label: `Evacuation to ${formatVacuum(body.targetMicrons ?? evacuations.data?.defaults.targetMicrons ?? 500, unit)}`,
-        path: procedureRecordsPath("evacuations", visitId),
-        takenAt: body.startedAt,
-        body,
-      });
-      entryId.release();
-      setTarget(null);
-    } catch (error) {
-      setStartError(errorText(error, "The evacuation was not started. Try again."));
-    }
+  /** The body POST …/evacuations takes: the target in whole microns. */
+  const toBody = (typed: TypedStart) => {
+    const value = toNumber(targetTextOf(typed));
+    return { targetMicrons: value === undefined || Number.isNaN(value) ? value : Math.round(fromDisplay(value, unit)) };
   };
+  const form = useForm<TypedStart, unknown, z.output<typeof EvacuationCreateSchema>>({
+    resolver: zodResolver(z.preprocess(toBody, EvacuationCreateSchema)),
+    defaultValues: { targetMicrons: null },
+  });
+  const targetError = form.formState.errors.targetMicrons;
+  const start = useProcedureSave({
+    form,
+    visitId,
+    mutation: create,
+    // The pump's start by this device's clock: kept without signal, the evacuation is stored with it.
+    record: (body, clientId) => ({ ...body, clientId, startedAt: new Date().toISOString() }),
+    send: (record) => create.mutateAsync({ visitId, ...record }),
+    entry: (record) => ({
+      kind: "evacuation",
+      label: `Evacuation to ${formatVacuum(record.targetMicrons ?? evacuations.data?.defaults.targetMicrons ?? 500, unit)}`,
+      path: procedureRecordsPath("evacuations", visitId),
+      takenAt: record.startedAt,
+    }),
+    cleared: () => ({ targetMicrons: null }),
+    notSaved: "The evacuation was not started. Try again.",
+    invalidMessage: "Check the target",
+  });
 
   return (
     <div className="space-y-4">
@@ -308,8 +310,10 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
         label="Vacuum unit"
         value={unit}
         onChange={(next) => {
-          setTarget((typed) => (typed === null ? null : convertTyped(typed, unit, next)));
-          setStartError(null);
+          const typed = form.getValues("targetMicrons");
+          if (typed !== null) form.setValue("targetMicrons", convertTyped(typed, unit, next));
+          form.clearErrors();
+          start.dismiss();
           setUnit(next);
         }}
         options={[
@@ -387,26 +391,39 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
           className="grid items-end gap-3 rounded-card border-2 border-dashed border-rule p-4 sm:grid-cols-[12rem_auto]"
           onSubmit={(event) => {
             event.preventDefault();
-            void start();
+            void start.submit();
           }}
         >
-          <NumberField
-            label="Target"
-            unit={VACUUM_LABEL[unit]}
-            value={targetText}
-            onValueChange={(text) => {
-              setTarget(text);
-              setStartError(null);
-            }}
-            error={startError?.fields.targetMicrons}
-            hint={`Your company's figure; ${formatVacuum(500, unit)} is the trade norm (${targetRange} accepted)`}
+          <Controller
+            control={form.control}
+            name="targetMicrons"
+            render={({ field }) => (
+              <NumberField
+                ref={field.ref}
+                label="Target"
+                unit={VACUUM_LABEL[unit]}
+                value={targetTextOf({ targetMicrons: field.value })}
+                onValueChange={(text) => {
+                  field.onChange(text);
+                  start.dismiss();
+                }}
+                onBlur={field.onBlur}
+                error={
+                  // The schema speaks microns; someone reading pascals gets the range in pascals.
+                  targetError && unit === "Pa" && targetError.type !== "server"
+                    ? `Enter a target from ${targetRange}`
+                    : targetError?.message
+                }
+                hint={`Your company's figure; ${formatVacuum(500, unit)} is the trade norm (${targetRange} accepted)`}
+              />
+            )}
           />
-          <Button type="submit" size="lg" variant={current ? "secondary" : "primary"} disabled={create.isPending}>
+          <Button type="submit" size="lg" variant={current ? "secondary" : "primary"} disabled={start.pending}>
             <Play aria-hidden className="size-5" /> {current ? "Start another evacuation" : "Start the evacuation"}
           </Button>
-          {startError && !startError.fields.targetMicrons && (
+          {start.formError && !targetError && (
             <div className="sm:col-span-2">
-              <FormAlert>{startError.message}</FormAlert>
+              <FormAlert>{start.formError}</FormAlert>
             </div>
           )}
         </form>

@@ -1,6 +1,8 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { formatTime } from "@shared/format/date-time.ts";
 import { Plus, Save, Trash2 } from "lucide-react";
-import { useState } from "react";
+import { Controller, useFieldArray, useForm } from "react-hook-form";
+import { z } from "zod";
 import {
   LEAK_METHOD_LABELS,
   LEAK_METHODS,
@@ -16,18 +18,50 @@ import {
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
-import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateLeakSearch, useLeakSearches } from "@/lib/api/procedures.ts";
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
-import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
-import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { fieldMessages } from "@shared/schemas/field-messages.ts";
-import { useFieldErrors } from "../hooks/use-field-errors.ts";
+import { messageAt } from "@/lib/form-errors.ts";
+import { useProcedureSave } from "../hooks/use-procedure-save.ts";
 import { LeakSearchView } from "./leak-search-view.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
 
 type LeakRow = { location: string; severity: LeakSeverity; repair: string; repaired: boolean };
 const emptyLeak = (): LeakRow => ({ location: "", severity: "small", repair: "", repaired: false });
+
+/** What the form holds, named as the body's fields so the schema's messages land under them. */
+interface TypedLeakSearch {
+  method: LeakMethod;
+  placesChecked: string;
+  leaks: LeakRow[];
+  recheck: RecheckResult;
+  note: string;
+}
+
+const EMPTY_SEARCH: TypedLeakSearch = {
+  method: "electronic-detector",
+  placesChecked: "",
+  leaks: [],
+  recheck: "not-done",
+  note: "",
+};
+
+/** The body POST …/leak-searches takes, from what was typed. */
+const toBody = (typed: TypedLeakSearch) => ({
+  method: typed.method,
+  // One place per line or separated by semicolons, as a technician jots them down.
+  placesChecked: typed.placesChecked
+    .split(/[\n;]/)
+    .map((place) => place.trim())
+    .filter(Boolean),
+  leaks: typed.leaks.map((leak) => ({
+    location: leak.location,
+    severity: leak.severity,
+    repair: leak.repair.trim() || undefined,
+    repaired: leak.repaired,
+  })),
+  recheck: typed.recheck,
+  note: typed.note.trim() || undefined,
+});
 
 /** The leak search: how, where, what was found and repaired, and what the recheck showed. */
 export function LeakSearchPanel({
@@ -41,65 +75,24 @@ export function LeakSearchPanel({
 }) {
   const searches = useLeakSearches(visitId);
   const create = useCreateLeakSearch();
-  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
-  const entryId = useEntryClientId();
-  const keepWhenOffline = useKeepWhenOffline();
-  const [method, setMethod] = useState<LeakMethod>("electronic-detector");
-  const [places, setPlaces] = useState("");
-  const [leaks, setLeaks] = useState<LeakRow[]>([]);
-  const [recheck, setRecheck] = useState<RecheckResult>("not-done");
-  const [note, setNote] = useState("");
-  const [formError, setFormError] = useState<string | null>(null);
-
-  const updateLeak = (index: number, change: Partial<LeakRow>) =>
-    setLeaks((rows) => rows.map((row, at) => (at === index ? { ...row, ...change } : row)));
-  // A message goes as soon as its field is changed.
-  const [errors, setErrors] = useFieldErrors({ method, placesChecked: places, leaks, recheck, note });
-
-  const save = async () => {
-    setFormError(null);
-    const body = {
-      method,
-      // One place per line or separated by semicolons, as a technician jots them down.
-      placesChecked: places
-        .split(/[\n;]/)
-        .map((place) => place.trim())
-        .filter(Boolean),
-      leaks: leaks.map((leak) => ({
-        location: leak.location,
-        severity: leak.severity,
-        repair: leak.repair.trim() || undefined,
-        repaired: leak.repaired,
-      })),
-      recheck,
-      note: note.trim() || undefined,
-    };
-    const parsed = LeakSearchBodySchema.safeParse(body);
-    if (!parsed.success) {
-      setErrors(fieldMessages(parsed.error));
-      setFormError("Check the fields marked below");
-      return;
-    }
-    setErrors({});
-    try {
-      // Taken now, by the device's clock; without a connection it waits in the outbox.
-      const record = { ...body, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), {
-        kind: "leak-search",
-        visitId,
-        path: procedureRecordsPath("leak-searches", visitId),
-        body: record,
-      });
-      entryId.release();
-      setPlaces("");
-      setLeaks([]);
-      setRecheck("not-done");
-      setNote("");
-    } catch (error) {
-      if (error instanceof ApiError) setErrors(error.fields);
-      setFormError(error instanceof Error ? error.message : "The leak search was not saved. Try again.");
-    }
-  };
+  const form = useForm({
+    resolver: zodResolver(z.preprocess(toBody, LeakSearchBodySchema)),
+    defaultValues: EMPTY_SEARCH,
+  });
+  const leaks = useFieldArray({ control: form.control, name: "leaks" });
+  const { errors } = form.formState;
+  const save = useProcedureSave({
+    form,
+    visitId,
+    mutation: create,
+    // Taken now, by the device's clock; without a connection it waits in the outbox.
+    record: (body, clientId) => ({ ...body, clientId, takenAt: new Date().toISOString() }),
+    send: (record) => create.mutateAsync({ visitId, ...record }),
+    entry: () => ({ kind: "leak-search", path: procedureRecordsPath("leak-searches", visitId) }),
+    // The method stays: the next search on this visit is usually made the same way.
+    cleared: (typed) => ({ ...EMPTY_SEARCH, method: typed.method }),
+    notSaved: "The leak search was not saved. Try again.",
+  });
 
   return (
     <ProcedureLayout
@@ -123,15 +116,10 @@ export function LeakSearchPanel({
           ? {
               label: "New leak search",
               title: "New leak search",
-              onSubmit: () => void save(),
+              onSubmit: () => void save.submit(),
               children: (
                 <>
-                  <SelectField
-                    label="Method"
-                    value={method}
-                    onChange={(event) => setMethod(event.target.value as LeakMethod)}
-                    error={errors.method}
-                  >
+                  <SelectField label="Method" error={errors.method?.message} {...form.register("method")}>
                     {LEAK_METHODS.map((value) => (
                       <option key={value} value={value}>
                         {LEAK_METHOD_LABELS[value]}
@@ -145,37 +133,35 @@ export function LeakSearchPanel({
                     <textarea
                       id="leak-places"
                       rows={3}
-                      value={places}
-                      onChange={(event) => setPlaces(event.target.value)}
-                      aria-invalid={errors.placesChecked ? true : undefined}
+                      aria-invalid={messageAt(errors, "placesChecked") ? true : undefined}
                       aria-describedby="leak-places-hint"
                       placeholder={"Service valves and caps\nEvaporator U-bends\nFilter drier flare nuts"}
                       className="block w-full rounded-card border-2 border-rule bg-surface px-3 py-2 text-base aria-[invalid=true]:border-fault"
+                      {...form.register("placesChecked")}
                     />
                     <p id="leak-places-hint" className="text-sm text-muted">
                       One place per line.
                     </p>
-                    {errors.placesChecked && <p className="text-sm font-medium text-fault">⚠ {errors.placesChecked}</p>}
+                    {messageAt(errors, "placesChecked") && (
+                      <p className="text-sm font-medium text-fault">⚠ {messageAt(errors, "placesChecked")}</p>
+                    )}
                   </div>
 
                   <fieldset className="space-y-3">
                     <legend className="font-semibold">Leaks found</legend>
-                    {leaks.length === 0 && <p className="text-sm text-muted">None recorded. Add each leak you find.</p>}
-                    {leaks.map((leak, index) => (
-                      <div key={index} className="space-y-2 rounded-card border-2 border-rule p-3">
+                    {leaks.fields.length === 0 && (
+                      <p className="text-sm text-muted">None recorded. Add each leak you find.</p>
+                    )}
+                    {leaks.fields.map((leak, index) => (
+                      <div key={leak.id} className="space-y-2 rounded-card border-2 border-rule p-3">
                         <div className="grid gap-3 sm:grid-cols-[1fr_14rem]">
                           <TextField
                             label={`Leak ${index + 1}: where`}
-                            value={leak.location}
-                            onChange={(event) => updateLeak(index, { location: event.target.value })}
-                            error={errors[`leaks.${index}.location`]}
+                            error={messageAt(errors, `leaks.${index}.location`)}
                             placeholder="e.g. Schrader core, suction service valve"
+                            {...form.register(`leaks.${index}.location`)}
                           />
-                          <SelectField
-                            label="Severity"
-                            value={leak.severity}
-                            onChange={(event) => updateLeak(index, { severity: event.target.value as LeakSeverity })}
-                          >
+                          <SelectField label="Severity" {...form.register(`leaks.${index}.severity`)}>
                             {LEAK_SEVERITIES.map((value) => (
                               <option key={value} value={value}>
                                 {LEAK_SEVERITY_LABELS[value]}
@@ -185,54 +171,46 @@ export function LeakSearchPanel({
                         </div>
                         <TextField
                           label="Repair done"
-                          value={leak.repair}
-                          onChange={(event) => updateLeak(index, { repair: event.target.value })}
                           placeholder="e.g. core replaced, cap fitted"
+                          {...form.register(`leaks.${index}.repair`)}
                         />
                         <div className="flex flex-wrap items-center gap-3">
                           <label className="inline-flex min-h-touch items-center gap-2 font-medium">
-                            <input
-                              type="checkbox"
-                              className="size-6"
-                              checked={leak.repaired}
-                              onChange={(event) => updateLeak(index, { repaired: event.target.checked })}
-                            />{" "}
+                            <input type="checkbox" className="size-6" {...form.register(`leaks.${index}.repaired`)} />{" "}
                             Repaired
                           </label>
-                          <Button
-                            variant="quiet"
-                            onClick={() => setLeaks((rows) => rows.filter((_row, at) => at !== index))}
-                          >
+                          <Button variant="quiet" onClick={() => leaks.remove(index)}>
                             <Trash2 aria-hidden className="size-5" /> Remove leak {index + 1}
                           </Button>
                         </div>
                       </div>
                     ))}
-                    <Button variant="secondary" onClick={() => setLeaks((rows) => [...rows, emptyLeak()])}>
+                    <Button variant="secondary" onClick={() => leaks.append(emptyLeak())}>
                       <Plus aria-hidden className="size-5" /> Add a leak found
                     </Button>
                   </fieldset>
 
                   <div className="space-y-1">
                     <p className="font-medium">Recheck after repair</p>
-                    <Segmented<RecheckResult>
-                      label="Recheck after repair"
-                      value={recheck}
-                      onChange={setRecheck}
-                      options={RECHECK_RESULTS.map((value) => ({ value, label: RECHECK_LABELS[value] }))}
-                      className="flex-wrap"
+                    <Controller
+                      control={form.control}
+                      name="recheck"
+                      render={({ field }) => (
+                        <Segmented<RecheckResult>
+                          label="Recheck after repair"
+                          value={field.value}
+                          onChange={field.onChange}
+                          options={RECHECK_RESULTS.map((value) => ({ value, label: RECHECK_LABELS[value] }))}
+                          className="flex-wrap"
+                        />
+                      )}
                     />
-                    {errors.recheck && <p className="text-sm font-medium text-fault">⚠ {errors.recheck}</p>}
+                    {errors.recheck && <p className="text-sm font-medium text-fault">⚠ {errors.recheck.message}</p>}
                   </div>
-                  <TextField
-                    label="Note"
-                    value={note}
-                    onChange={(event) => setNote(event.target.value)}
-                    error={errors.note}
-                  />
-                  {formError && <FormAlert>{formError}</FormAlert>}
-                  <Button type="submit" size="lg" disabled={create.isPending}>
-                    <Save aria-hidden className="size-5" /> {create.isPending ? "Saving…" : "Save leak search"}
+                  <TextField label="Note" error={errors.note?.message} {...form.register("note")} />
+                  {save.formError && <FormAlert>{save.formError}</FormAlert>}
+                  <Button type="submit" size="lg" disabled={save.pending}>
+                    <Save aria-hidden className="size-5" /> {save.pending ? "Saving…" : "Save leak search"}
                   </Button>
                 </>
               ),

@@ -1,6 +1,8 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { formatTime } from "@shared/format/date-time.ts";
 import { Save } from "lucide-react";
-import { useState } from "react";
+import { Controller, useForm } from "react-hook-form";
+import { z } from "zod";
 import { testPressureNotice } from "@shared/engine/index.ts";
 import {
   PRESSURE_TEST_SECTION_LABELS,
@@ -10,7 +12,6 @@ import {
 } from "@shared/schemas/procedure-records.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
-import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreatePressureTest, usePressureTests } from "@/lib/api/procedures.ts";
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import {
@@ -23,10 +24,8 @@ import {
   temperatureFromDisplay,
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
-import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
-import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { fieldMessages } from "@shared/schemas/field-messages.ts";
-import { useFieldErrors } from "../hooks/use-field-errors.ts";
+import { useFormValues } from "@/hooks/use-form-values.ts";
+import { useProcedureSave } from "../hooks/use-procedure-save.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { ProcedureLayout } from "./procedure-layout.tsx";
@@ -40,6 +39,28 @@ interface PressureTestPanelProps {
   canWrite: boolean;
   readOnlyNote?: string;
 }
+
+/** What the form holds, named as the body's fields; a rating or allowed drop still null was not typed over. */
+interface TypedPressureTest {
+  section: PressureTestSection;
+  ratedKPa: string | null;
+  startGaugeKPa: string;
+  startTempC: string;
+  endGaugeKPa: string;
+  endTempC: string;
+  holdMinutes: string;
+  allowedDropKPa: string | null;
+  note: string;
+}
+
+const READINGS_CLEARED = {
+  startGaugeKPa: "",
+  startTempC: "",
+  endGaugeKPa: "",
+  endTempC: "",
+  holdMinutes: "",
+  note: "",
+} as const;
 
 /** The nameplate rating that applies to the part tested: the lower side governs a whole-system test. */
 function ratedFor(section: PressureTestSection, high: number | null, low: number | null): number | null {
@@ -57,47 +78,62 @@ function ratedFor(section: PressureTestSection, high: number | null, low: number
 export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, readOnlyNote }: PressureTestPanelProps) {
   const tests = usePressureTests(visitId);
   const create = useCreatePressureTest();
-  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
-  const entryId = useEntryClientId();
-  const keepWhenOffline = useKeepWhenOffline();
   const defaults = tests.data?.defaults;
   const pressureUnit = GAUGE_LABEL[units.pressure];
   const temperatureUnit = TEMPERATURE_LABEL[units.temperature];
   const shown = (kPa: number) =>
     formatNumber(gaugeToDisplay(kPa, units.pressure, atmosphericKPa), PRESSURE_DECIMALS[units.pressure]);
-
-  const [section, setSection] = useState<PressureTestSection>("whole-system");
-  const [rated, setRated] = useState<string | null>(null);
-  const [start, setStart] = useState("");
-  const [startTemp, setStartTemp] = useState("");
-  const [end, setEnd] = useState("");
-  const [endTemp, setEndTemp] = useState("");
-  const [hold, setHold] = useState("");
-  const [allowed, setAllowed] = useState<string | null>(null);
-  const [note, setNote] = useState("");
-  const [formError, setFormError] = useState<string | null>(null);
-
-  // Until the technician types their own, the nameplate rating and the organisation's allowed drop are offered.
-  const ratedDefault = defaults ? ratedFor(section, defaults.ratedHighSideKPa, defaults.ratedLowSideKPa) : null;
-  const ratedText = rated ?? (ratedDefault !== null ? shown(ratedDefault) : "");
-  const allowedText = allowed ?? (defaults ? shown(defaults.allowedDropKPa) : "");
-  // A message goes as soon as its field is changed.
-  const [errors, setErrors] = useFieldErrors({
-    section,
-    ratedKPa: ratedText,
-    startGaugeKPa: start,
-    startTempC: startTemp,
-    endGaugeKPa: end,
-    endTempC: endTemp,
-    holdMinutes: hold,
-    allowedDropKPa: allowedText,
-    note,
-  });
   const pressure = (text: string) =>
     toConverted(text, (value) => gaugeFromDisplay(value, units.pressure, atmosphericKPa));
+  const temperature = (text: string) => toConverted(text, (value) => temperatureFromDisplay(value, units.temperature));
 
+  // Until the technician types their own, the nameplate rating and the organisation's allowed drop are offered.
+  const ratedDefaultFor = (section: PressureTestSection) =>
+    defaults ? ratedFor(section, defaults.ratedHighSideKPa, defaults.ratedLowSideKPa) : null;
+  const ratedTextOf = (typed: TypedPressureTest) => {
+    const offered = ratedDefaultFor(typed.section);
+    return typed.ratedKPa ?? (offered !== null ? shown(offered) : "");
+  };
+  const allowedTextOf = (typed: TypedPressureTest) =>
+    typed.allowedDropKPa ?? (defaults ? shown(defaults.allowedDropKPa) : "");
+  /** The body POST …/pressure-tests takes: what was typed, in the units the server keeps. */
+  const toBody = (typed: TypedPressureTest) => ({
+    section: typed.section,
+    ratedKPa: pressure(ratedTextOf(typed)),
+    startGaugeKPa: pressure(typed.startGaugeKPa),
+    startTempC: temperature(typed.startTempC),
+    endGaugeKPa: pressure(typed.endGaugeKPa),
+    endTempC: temperature(typed.endTempC),
+    holdMinutes: toNumber(typed.holdMinutes),
+    allowedDropKPa: pressure(allowedTextOf(typed)),
+    atmosphericPressureKPa: atmosphericKPa,
+    note: typed.note.trim() || undefined,
+  });
+
+  const form = useForm<TypedPressureTest, unknown, z.output<typeof PressureTestBodySchema>>({
+    resolver: zodResolver(z.preprocess(toBody, PressureTestBodySchema)),
+    defaultValues: { section: "whole-system", ratedKPa: null, allowedDropKPa: null, ...READINGS_CLEARED },
+  });
+  const { errors } = form.formState;
+  const save = useProcedureSave({
+    form,
+    visitId,
+    mutation: create,
+    // Taken now, by the device's clock; without a connection it waits in the outbox.
+    record: (body, clientId) => ({ ...body, clientId, takenAt: new Date().toISOString() }),
+    send: (record) => create.mutateAsync({ visitId, ...record }),
+    entry: () => ({ kind: "pressure-test", path: procedureRecordsPath("pressure-tests", visitId) }),
+    // The part tested, its rating and the allowed drop stay for a retest.
+    cleared: (typed) => ({ ...typed, ...READINGS_CLEARED }),
+    notSaved: "The test was not saved. Try again.",
+  });
+
+  const typed = useFormValues(form.control);
+  const ratedDefault = ratedDefaultFor(typed.section);
+  const ratedText = ratedTextOf(typed);
+  const allowedText = allowedTextOf(typed);
   // While typing: the highest pressure in the hold against the lower of the typed and nameplate ratings.
-  const held = [pressure(start), pressure(end)].filter(
+  const held = [pressure(typed.startGaugeKPa), pressure(typed.endGaugeKPa)].filter(
     (value): value is number => value !== undefined && !Number.isNaN(value),
   );
   const ratedNotice = testPressureNotice(
@@ -108,51 +144,6 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
     },
     (kPa) => `${shown(kPa)} ${pressureUnit}`,
   );
-
-  const save = async () => {
-    setFormError(null);
-    const temperature = (text: string) =>
-      toConverted(text, (value) => temperatureFromDisplay(value, units.temperature));
-    const body = {
-      section,
-      ratedKPa: pressure(ratedText),
-      startGaugeKPa: pressure(start),
-      startTempC: temperature(startTemp),
-      endGaugeKPa: pressure(end),
-      endTempC: temperature(endTemp),
-      holdMinutes: toNumber(hold),
-      allowedDropKPa: pressure(allowedText),
-      atmosphericPressureKPa: atmosphericKPa,
-      note: note.trim() || undefined,
-    };
-    const parsed = PressureTestBodySchema.safeParse(body);
-    if (!parsed.success) {
-      setErrors(fieldMessages(parsed.error));
-      setFormError("Check the fields marked below");
-      return;
-    }
-    setErrors({});
-    try {
-      // Taken now, by the device's clock; without a connection it waits in the outbox.
-      const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), {
-        kind: "pressure-test",
-        visitId,
-        path: procedureRecordsPath("pressure-tests", visitId),
-        body: record,
-      });
-      entryId.release();
-      setStart("");
-      setEnd("");
-      setStartTemp("");
-      setEndTemp("");
-      setHold("");
-      setNote("");
-    } catch (error) {
-      if (error instanceof ApiError) setErrors(error.fields);
-      setFormError(error instanceof Error ? error.message : "The test was not saved. Try again.");
-    }
-  };
 
   return (
     <ProcedureLayout
@@ -177,17 +168,14 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
           ? {
               label: "New pressure test",
               title: "New nitrogen pressure test",
-              onSubmit: () => void save(),
+              onSubmit: () => void save.submit(),
               children: (
                 <>
                   <div className="grid gap-3 sm:grid-cols-2">
                     <SelectField
                       label="Part tested"
-                      value={section}
-                      onChange={(event) => {
-                        setSection(event.target.value as PressureTestSection);
-                        setRated(null);
-                      }}
+                      // Another part has another rating: the nameplate's is offered again.
+                      {...form.register("section", { onChange: () => form.setValue("ratedKPa", null) })}
                     >
                       {PRESSURE_TEST_SECTIONS.map((value) => (
                         <option key={value} value={value}>
@@ -195,17 +183,25 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
                         </option>
                       ))}
                     </SelectField>
-                    <NumberField
-                      label="Rated pressure (lowest-rated component)"
-                      unit={pressureUnit}
-                      value={ratedText}
-                      onValueChange={setRated}
-                      error={errors.ratedKPa}
-                      hint={
-                        ratedDefault !== null
-                          ? "From the nameplate: confirm it for the parts under test"
-                          : "Not on the nameplate record: enter it from the maker's data"
-                      }
+                    <Controller
+                      control={form.control}
+                      name="ratedKPa"
+                      render={({ field }) => (
+                        <NumberField
+                          ref={field.ref}
+                          label="Rated pressure (lowest-rated component)"
+                          unit={pressureUnit}
+                          value={ratedText}
+                          onValueChange={field.onChange}
+                          onBlur={field.onBlur}
+                          error={errors.ratedKPa?.message}
+                          hint={
+                            ratedDefault !== null
+                              ? "From the nameplate: confirm it for the parts under test"
+                              : "Not on the nameplate record: enter it from the maker's data"
+                          }
+                        />
+                      )}
                     />
                   </div>
                   <fieldset className="grid grid-cols-2 gap-3">
@@ -213,16 +209,14 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
                     <NumberField
                       label="Start pressure"
                       unit={pressureUnit}
-                      value={start}
-                      onValueChange={setStart}
-                      error={errors.startGaugeKPa}
+                      registration={form.register("startGaugeKPa")}
+                      error={errors.startGaugeKPa?.message}
                     />
                     <NumberField
                       label="Start temperature"
                       unit={temperatureUnit}
-                      value={startTemp}
-                      onValueChange={setStartTemp}
-                      error={errors.startTempC}
+                      registration={form.register("startTempC")}
+                      error={errors.startTempC?.message}
                       hint="Ambient or pipe"
                     />
                     <div className="col-span-2">
@@ -234,45 +228,49 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
                     <NumberField
                       label="End pressure"
                       unit={pressureUnit}
-                      value={end}
-                      onValueChange={setEnd}
-                      error={errors.endGaugeKPa}
+                      registration={form.register("endGaugeKPa")}
+                      error={errors.endGaugeKPa?.message}
                     />
                     <NumberField
                       label="End temperature"
                       unit={temperatureUnit}
-                      value={endTemp}
-                      onValueChange={setEndTemp}
-                      error={errors.endTempC}
+                      registration={form.register("endTempC")}
+                      error={errors.endTempC?.message}
                     />
                   </fieldset>
                   <div className="grid grid-cols-2 gap-3">
                     <NumberField
                       label="Hold time"
                       unit="min"
-                      value={hold}
-                      onValueChange={setHold}
-                      error={errors.holdMinutes}
+                      registration={form.register("holdMinutes")}
+                      error={errors.holdMinutes?.message}
                     />
-                    <NumberField
-                      label="Allowed drop"
-                      unit={units.pressure}
-                      value={allowedText}
-                      onValueChange={setAllowed}
-                      error={errors.allowedDropKPa}
-                      hint="After temperature correction; your company's figure"
+                    <Controller
+                      control={form.control}
+                      name="allowedDropKPa"
+                      render={({ field }) => (
+                        <NumberField
+                          ref={field.ref}
+                          label="Allowed drop"
+                          unit={units.pressure}
+                          value={allowedText}
+                          onValueChange={field.onChange}
+                          onBlur={field.onBlur}
+                          error={errors.allowedDropKPa?.message}
+                          hint="After temperature correction; your company's figure"
+                        />
+                      )}
                     />
                   </div>
                   <TextField
                     label="Note"
-                    value={note}
-                    onChange={(event) => setNote(event.target.value)}
-                    error={errors.note}
+                    error={errors.note?.message}
                     placeholder="e.g. compressor and LP switch isolated"
+                    {...form.register("note")}
                   />
-                  {formError && <FormAlert>{formError}</FormAlert>}
-                  <Button type="submit" size="lg" disabled={create.isPending}>
-                    <Save aria-hidden className="size-5" /> {create.isPending ? "Saving…" : "Save pressure test"}
+                  {save.formError && <FormAlert>{save.formError}</FormAlert>}
+                  <Button type="submit" size="lg" disabled={save.pending}>
+                    <Save aria-hidden className="size-5" /> {save.pending ? "Saving…" : "Save pressure test"}
                   </Button>
                 </>
               ),

@@ -1,13 +1,14 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { formatTime } from "@shared/format/date-time.ts";
 import { Save } from "lucide-react";
-import { useState } from "react";
+import { Controller, useForm, type Path } from "react-hook-form";
+import { z } from "zod";
 import { standingPressureOutcome } from "@shared/engine/index.ts";
 import { StandingPressureBodySchema } from "@shared/schemas/procedure-records.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, TextField } from "@/components/ui/field/field.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
-import { ApiError } from "@/lib/api/api-client.ts";
 import { useCreateStandingPressureCheck, useStandingPressureChecks } from "@/lib/api/procedures.ts";
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import {
@@ -17,10 +18,8 @@ import {
   temperatureFromDisplay,
   type DisplayUnits,
 } from "@/lib/units/display-units.ts";
-import { useEntryClientId } from "@/lib/drafts/use-entry-client-id.ts";
-import { useKeepWhenOffline } from "@/features/offline/use-outbox.ts";
-import { fieldMessages } from "@shared/schemas/field-messages.ts";
-import { useFieldErrors } from "../hooks/use-field-errors.ts";
+import { useFormValues } from "@/hooks/use-form-values.ts";
+import { useProcedureSave } from "../hooks/use-procedure-save.ts";
 import { toConverted } from "../utils/parse-number.ts";
 import { ProcedureLayout } from "./procedure-layout.tsx";
 import {
@@ -44,6 +43,14 @@ interface StandingPressurePanelProps {
   readOnlyNote?: string;
 }
 
+/** What the form holds, named as the body's fields. */
+interface TypedStandingPressure {
+  standingGaugeKPa: string;
+  equalisedTempC: string;
+  circuit: string;
+  note: string;
+}
+
 /**
  * The off-cycle standing-pressure check for non-condensables: the stopped unit's gauge pressure
  * against the saturation pressure of the equalised condenser temperature. The verdict is
@@ -61,72 +68,53 @@ export function StandingPressurePanel({
 }: StandingPressurePanelProps) {
   const checks = useStandingPressureChecks(visitId);
   const create = useCreateStandingPressureCheck();
-  // One id per entry, kept across retries: a save whose answer was lost is stored once (README decision 026).
-  const entryId = useEntryClientId();
-  const keepWhenOffline = useKeepWhenOffline();
-  const [standing, setStanding] = useState("");
-  const [temperature, setTemperature] = useState("");
-  const [circuit, setCircuit] = useState(String(circuits[0] ?? 1));
-  const [note, setNote] = useState("");
-  const [formError, setFormError] = useState<string | null>(null);
-  // A message goes as soon as its field is changed.
-  const [errors, setErrors] = useFieldErrors({
-    standingGaugeKPa: standing,
-    equalisedTempC: temperature,
-    circuit,
-    note,
+  /** The body POST …/standing-pressure-checks takes: what was typed, in the units the server keeps. */
+  const toBody = (typed: TypedStandingPressure) => ({
+    standingGaugeKPa: toConverted(typed.standingGaugeKPa, (value) =>
+      gaugeFromDisplay(value, units.pressure, atmosphericKPa),
+    ),
+    equalisedTempC: toConverted(typed.equalisedTempC, (value) => temperatureFromDisplay(value, units.temperature)),
+    // A single-circuit unit's check needs no circuit named.
+    circuit: circuits.length > 1 ? Number(typed.circuit) : undefined,
+    note: typed.note.trim() || undefined,
+  });
+  const outcomeOf = (body: z.output<typeof StandingPressureBodySchema>) =>
+    standingPressureOutcome({
+      refrigerant,
+      standingGaugeKPa: body.standingGaugeKPa,
+      equalisedTempC: body.equalisedTempC,
+      atmosphericPressureKPa: atmosphericKPa,
+    });
+
+  const form = useForm<TypedStandingPressure, unknown, z.output<typeof StandingPressureBodySchema>>({
+    resolver: zodResolver(z.preprocess(toBody, StandingPressureBodySchema)),
+    defaultValues: { standingGaugeKPa: "", equalisedTempC: "", circuit: String(circuits[0] ?? 1), note: "" },
+  });
+  const { errors } = form.formState;
+  const save = useProcedureSave({
+    form,
+    visitId,
+    mutation: create,
+    // Taken now, by the device's clock; without a connection it waits in the outbox.
+    record: (body, clientId) => ({ ...body, clientId, takenAt: new Date().toISOString() }),
+    send: (record) => create.mutateAsync({ visitId, ...record }),
+    entry: () => ({ kind: "standing-pressure-check", path: procedureRecordsPath("standing-pressure-checks", visitId) }),
+    // The circuit stays for the next check.
+    cleared: (typed) => ({ ...typed, standingGaugeKPa: "", equalisedTempC: "", note: "" }),
+    notSaved: "The check was not saved. Try again.",
+    // Readings the engine cannot judge (e.g. beyond the refrigerant's table) are refused here, as the server would.
+    check: (body) => {
+      const outcome = outcomeOf(body);
+      return "problem" in outcome
+        ? { field: outcome.problem.field as Path<TypedStandingPressure>, message: outcome.problem.message }
+        : null;
+    },
   });
 
-  const body = {
-    standingGaugeKPa: toConverted(standing, (value) => gaugeFromDisplay(value, units.pressure, atmosphericKPa)),
-    equalisedTempC: toConverted(temperature, (value) => temperatureFromDisplay(value, units.temperature)),
-    // A single-circuit unit's check needs no circuit named.
-    circuit: circuits.length > 1 ? Number(circuit) : undefined,
-    note: note.trim() || undefined,
-  };
-  const parsed = StandingPressureBodySchema.safeParse(body);
+  const typed = useFormValues(form.control);
+  const parsed = StandingPressureBodySchema.safeParse(toBody(typed));
   // The preview waits for both readings; a reading the schema refuses shows its message on save.
-  const preview = parsed.success
-    ? standingPressureOutcome({
-        refrigerant,
-        standingGaugeKPa: parsed.data.standingGaugeKPa,
-        equalisedTempC: parsed.data.equalisedTempC,
-        atmosphericPressureKPa: atmosphericKPa,
-      })
-    : null;
-
-  const save = async () => {
-    setFormError(null);
-    if (!parsed.success) {
-      setErrors(fieldMessages(parsed.error));
-      setFormError("Check the fields marked below");
-      return;
-    }
-    if (preview && "problem" in preview) {
-      setErrors({ [preview.problem.field]: preview.problem.message });
-      setFormError("Check the fields marked below");
-      return;
-    }
-    setErrors({});
-    try {
-      // Taken now, by the device's clock; without a connection it waits in the outbox.
-      const record = { ...parsed.data, clientId: entryId.take(), takenAt: new Date().toISOString() };
-      await keepWhenOffline(() => create.mutateAsync({ visitId, ...record }), {
-        kind: "standing-pressure-check",
-        visitId,
-        path: procedureRecordsPath("standing-pressure-checks", visitId),
-        body: record,
-      });
-      entryId.release();
-      setStanding("");
-      setTemperature("");
-      setNote("");
-    } catch (error) {
-      if (error instanceof ApiError) setErrors(error.fields);
-      setFormError(error instanceof Error ? error.message : "The check was not saved. Try again.");
-    }
-  };
-
+  const preview = parsed.success ? outcomeOf(parsed.data) : null;
   const previewProblem = preview && "problem" in preview ? preview.problem : null;
 
   return (
@@ -154,7 +142,7 @@ export function StandingPressurePanel({
           ? {
               label: "New standing-pressure check",
               title: "New standing-pressure check",
-              onSubmit: () => void save(),
+              onSubmit: () => void save.submit(),
               children: (
                 <>
                   <div className="space-y-1 text-sm">
@@ -176,21 +164,26 @@ export function StandingPressurePanel({
                     </p>
                   </div>
                   {circuits.length > 1 && (
-                    <Segmented<string>
-                      label="Circuit"
-                      value={circuit}
-                      onChange={setCircuit}
-                      options={circuits.map((number) => ({ value: String(number), label: `Circuit ${number}` }))}
+                    <Controller
+                      control={form.control}
+                      name="circuit"
+                      render={({ field }) => (
+                        <Segmented<string>
+                          label="Circuit"
+                          value={field.value}
+                          onChange={field.onChange}
+                          options={circuits.map((number) => ({ value: String(number), label: `Circuit ${number}` }))}
+                        />
+                      )}
                     />
                   )}
                   <div className="grid grid-cols-2 gap-3">
                     <NumberField
                       label="Standing pressure"
                       unit={GAUGE_LABEL[units.pressure]}
-                      value={standing}
-                      onValueChange={setStanding}
+                      registration={form.register("standingGaugeKPa")}
                       error={
-                        errors.standingGaugeKPa ??
+                        errors.standingGaugeKPa?.message ??
                         (previewProblem?.field === "standingGaugeKPa" ? previewProblem.message : undefined)
                       }
                       hint="Gauge, unit stopped"
@@ -198,10 +191,9 @@ export function StandingPressurePanel({
                     <NumberField
                       label="Equalised temperature"
                       unit={TEMPERATURE_LABEL[units.temperature]}
-                      value={temperature}
-                      onValueChange={setTemperature}
+                      registration={form.register("equalisedTempC")}
                       error={
-                        errors.equalisedTempC ??
+                        errors.equalisedTempC?.message ??
                         (previewProblem?.field === "equalisedTempC" ? previewProblem.message : undefined)
                       }
                       hint="Condenser air, in the shade"
@@ -223,16 +215,14 @@ export function StandingPressurePanel({
                   {previewProblem?.field === "refrigerant" && <FormAlert>{previewProblem.message}</FormAlert>}
                   <TextField
                     label="Note"
-                    value={note}
-                    onChange={(event) => setNote(event.target.value)}
-                    error={errors.note}
+                    error={errors.note?.message}
                     placeholder="e.g. fan run 10 min, air off = air on"
+                    {...form.register("note")}
                   />
-                  {errors.circuit && <p className="text-sm font-medium text-fault">⚠ {errors.circuit}</p>}
-                  {formError && <FormAlert>{formError}</FormAlert>}
-                  <Button type="submit" size="lg" disabled={create.isPending}>
-                    <Save aria-hidden className="size-5" />{" "}
-                    {create.isPending ? "Saving…" : "Save standing-pressure check"}
+                  {errors.circuit && <p className="text-sm font-medium text-fault">⚠ {errors.circuit.message}</p>}
+                  {save.formError && <FormAlert>{save.formError}</FormAlert>}
+                  <Button type="submit" size="lg" disabled={save.pending}>
+                    <Save aria-hidden className="size-5" /> {save.pending ? "Saving…" : "Save standing-pressure check"}
                   </Button>
                 </>
               ),

@@ -1,12 +1,18 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { AlertTriangle, Send } from "lucide-react";
 import { useId, useState } from "react";
+import { useForm } from "react-hook-form";
 import { z } from "zod";
-import { VISIT_STATUS_LABELS } from "@shared/schemas/visits.ts";
+import { SendReportSchema, VISIT_STATUS_LABELS } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, TextField } from "@/components/ui/field/field.tsx";
 import { useSendReport, useVisit } from "@/lib/api/visits.ts";
 
-const RecipientSchema = z.email("Enter an e-mail address, like facilities@example.com");
+/** The recipient as the server checks it (spaces around a pasted address dropped), and the tick for an unsigned report. */
+const SendReportFormSchema = z.object({
+  to: z.string().trim().pipe(SendReportSchema.shape.to),
+  sendUnsigned: z.boolean(),
+});
 const UNSIGNED_CONFIRMATION_NEEDED = "Tick the box to send a report that is not signed off, or wait for the sign-off";
 
 /**
@@ -15,11 +21,13 @@ const UNSIGNED_CONFIRMATION_NEEDED = "Tick the box to send a report that is not 
  * the technician has ticked that they mean it.
  */
 export function SendReportForm({ visitId, defaultTo }: { visitId: string; defaultTo: string | null }) {
-  const [to, setTo] = useState(defaultTo ?? "");
-  const [fieldError, setFieldError] = useState<string | undefined>();
+  const form = useForm({
+    resolver: zodResolver(SendReportFormSchema),
+    defaultValues: { to: defaultTo ?? "", sendUnsigned: false },
+  });
+  const { errors } = form.formState;
+  const confirmError = errors.sendUnsigned?.message;
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const [sendUnsigned, setSendUnsigned] = useState(false);
-  const [confirmError, setConfirmError] = useState<string | null>(null);
   const send = useSendReport();
   // The same cached visit the report page shows (and refreshes), so a sign-off meanwhile counts.
   const visit = useVisit(visitId);
@@ -30,29 +38,31 @@ export function SendReportForm({ visitId, defaultTo }: { visitId: string; defaul
       className="no-print space-y-2 rounded-card border-2 border-rule bg-surface p-4"
       aria-label="Send the report"
       noValidate
-      onSubmit={async (event) => {
-        event.preventDefault();
+      onSubmit={(event) => {
         setSentTo(null);
-        setConfirmError(null);
-        const parsed = RecipientSchema.safeParse(to.trim());
-        if (!parsed.success) return setFieldError(parsed.error.issues[0]?.message);
-        setFieldError(undefined);
-        if (unsigned && !sendUnsigned) return setConfirmError(UNSIGNED_CONFIRMATION_NEEDED);
-        try {
-          await send.mutateAsync({ visitId, to: parsed.data });
-          setSentTo(parsed.data);
-        } catch (error) {
-          setFieldError(error instanceof Error ? error.message : "The report was not sent");
-        }
+        return form.handleSubmit(async ({ to, sendUnsigned }) => {
+          if (unsigned && !sendUnsigned) {
+            form.setError("sendUnsigned", { type: "confirm", message: UNSIGNED_CONFIRMATION_NEEDED });
+            return;
+          }
+          try {
+            await send.mutateAsync({ visitId, to });
+            setSentTo(to);
+          } catch (error) {
+            form.setError("to", {
+              type: "server",
+              message: error instanceof Error ? error.message : "The report was not sent",
+            });
+          }
+        })(event);
       }}
     >
       <TextField
         label="Send the report to"
         type="email"
-        value={to}
-        onChange={(event) => setTo(event.target.value)}
-        error={fieldError}
+        error={errors.to?.message}
         autoComplete="email"
+        {...form.register("to")}
       />
       {unsigned && (
         <div className="space-y-2 rounded-card border-2 border-caution p-3" data-testid="unsigned-report-warning">
@@ -68,11 +78,10 @@ export function SendReportForm({ visitId, defaultTo }: { visitId: string; defaul
             <input
               id={confirmId}
               type="checkbox"
-              checked={sendUnsigned}
-              onChange={(event) => {
-                setSendUnsigned(event.target.checked);
-                setConfirmError(null);
-              }}
+              {...form.register("sendUnsigned", {
+                // Ticked or not, the request to tick it has been read.
+                onChange: () => form.clearErrors("sendUnsigned"),
+              })}
               aria-invalid={confirmError ? true : undefined}
               className="size-6 shrink-0 accent-current"
             />

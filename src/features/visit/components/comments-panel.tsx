@@ -1,7 +1,10 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { MessageSquare } from "lucide-react";
 import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { z } from "zod";
 import type { Visit } from "@shared/schemas/visits.ts";
-import { MAX_COMMENT_LENGTH } from "@shared/schemas/visits.ts";
+import { CommentCreateSchema, MAX_COMMENT_LENGTH } from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { commentsPath, useCreateComment } from "@/lib/api/visits.ts";
@@ -10,10 +13,18 @@ import { useKeepWhenOffline, useOutboxEntries } from "@/features/offline/use-out
 import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 import { formatDateTime, formatTime } from "@shared/format/date-time.ts";
 
+/** The comment as the server checks it, after a first check for an empty box in this form's own words. */
+const CommentFormSchema = z.object({
+  body: z
+    .string()
+    .refine((body) => body.trim() !== "", "Write a comment first")
+    .pipe(CommentCreateSchema.shape.body),
+  readingId: z.string(),
+});
+
 /** The visit's conversation: comments on the visit or on one reading, for the crew and the reviewer. */
 export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment: boolean }) {
-  const [body, setBody] = useState("");
-  const [readingId, setReadingId] = useState("");
+  const form = useForm({ resolver: zodResolver(CommentFormSchema), defaultValues: { body: "", readingId: "" } });
   const [error, setError] = useState<string | null>(null);
   const createComment = useCreateComment();
   // One id per comment, kept across retries: a post whose answer was lost is stored once (README decision 026).
@@ -21,9 +32,7 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
   const keepWhenOffline = useKeepWhenOffline();
   const onDevice = useOutboxEntries().filter((entry) => entry.visitId === visit.id && entry.kind === "comment");
 
-  const submit = async () => {
-    setError(null);
-    if (body.trim() === "") return setError("Write a comment first");
+  const submit = form.handleSubmit(async ({ body, readingId }) => {
     const values = { body, readingId: readingId || null, clientId: entryId.take() };
     try {
       await keepWhenOffline(() => createComment.mutateAsync({ visitId: visit.id, ...values }), {
@@ -34,12 +43,12 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
         body: values,
       });
       entryId.release();
-      setBody("");
-      setReadingId("");
+      form.reset();
     } catch (caught) {
       setError(caught instanceof Error ? caught.message : "The comment was not saved");
     }
-  };
+  });
+  const shownError = form.formState.errors.body?.message ?? error;
 
   return (
     <section aria-labelledby="comments-heading" className="rounded-card border-2 border-rule bg-surface p-4">
@@ -74,22 +83,19 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
         <form
           className="mt-3 space-y-2"
           onSubmit={(event) => {
-            event.preventDefault();
-            void submit();
+            setError(null);
+            void submit(event);
           }}
         >
-          {error && <FormAlert>{error}</FormAlert>}
+          {shownError && <FormAlert>{shownError}</FormAlert>}
           <label htmlFor="comment-body" className="block font-medium">
             Add a comment
           </label>
           <textarea
             id="comment-body"
-            value={body}
             maxLength={MAX_COMMENT_LENGTH}
-            onChange={(event) => {
-              setBody(event.target.value);
-              entryId.release();
-            }}
+            // Another text is another comment: it gets its own client id.
+            {...form.register("body", { onChange: () => entryId.release() })}
             rows={3}
             className="block w-full rounded-card border-2 border-rule bg-surface p-3"
           />
@@ -100,8 +106,7 @@ export function CommentsPanel({ visit, canComment }: { visit: Visit; canComment:
               </label>
               <select
                 id="comment-reading"
-                value={readingId}
-                onChange={(event) => setReadingId(event.target.value)}
+                {...form.register("readingId")}
                 className="min-h-touch rounded-card border-2 border-rule bg-surface px-3"
               >
                 <option value="">The whole visit</option>

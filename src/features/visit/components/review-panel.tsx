@@ -1,7 +1,16 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import { AlertTriangle, ClipboardCheck, LockOpen, Send } from "lucide-react";
 import { useId, useState } from "react";
+import { useForm, type FieldErrors, type UseFormRegisterReturn } from "react-hook-form";
+import { z } from "zod";
 import { submitChecklist } from "@shared/engine/index.ts";
-import { hasReason, MAX_REASON_LENGTH, REASON_NEEDED_MESSAGE, type Visit } from "@shared/schemas/visits.ts";
+import {
+  hasReason,
+  MAX_REASON_LENGTH,
+  REASON_NEEDED_MESSAGE,
+  ReviewActionSchema,
+  type Visit,
+} from "@shared/schemas/visits.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
@@ -23,18 +32,49 @@ interface ReviewPanelProps {
   canSignOff: boolean;
 }
 
+/**
+ * Submitting, as the server checks it; a visit started without a reason needs one here, in this
+ * screen's words, before the shared schema's own check of it.
+ */
+const submitSchema = (needsReason: boolean) =>
+  z
+    .object({
+      reason: z.string().refine((reason) => !needsReason || reason.trim().length >= 3, REASON_NEEDED_MESSAGE),
+    })
+    .transform(({ reason }) => ({ action: "submit" as const, ...(needsReason ? { reason } : {}) }))
+    .pipe(ReviewActionSchema.options[0]);
+
+/** Signing off (the text is a note) or sending back (it is the reason), as the server checks it. */
+const ReviewFormSchema = z.preprocess(
+  (typed: { action: "sign-off" | "send-back"; reason: string }) =>
+    typed.action === "send-back"
+      ? { action: typed.action, reason: typed.reason }
+      : { action: typed.action, note: typed.reason || undefined },
+  ReviewActionSchema,
+);
+
+/** Reopening, as the server checks it: the reason goes in the audit trail. */
+const ReopenFormSchema = z.preprocess(
+  (typed: { reason: string }) => ({ action: "reopen", reason: typed.reason }),
+  ReviewActionSchema,
+);
+
+/** The first message of a refused form: the panel says one thing at a time, above its buttons. */
+const firstMessage = (errors: FieldErrors): string =>
+  Object.values(errors)
+    .find((error) => error?.message)
+    ?.message?.toString() ?? "That did not go through";
+
 /** A labelled two-line text box for a review note or reason. */
 function ReasonBox({
   id,
   label,
-  value,
-  onChange,
+  registration,
   placeholder,
 }: {
   id: string;
   label: string;
-  value: string;
-  onChange: (value: string) => void;
+  registration: UseFormRegisterReturn;
   placeholder: string;
 }) {
   return (
@@ -45,9 +85,8 @@ function ReasonBox({
       <textarea
         id={id}
         rows={2}
-        value={value}
-        onChange={(event) => onChange(event.target.value)}
         placeholder={placeholder}
+        {...registration}
         className="block w-full rounded-card border-2 border-rule bg-surface p-3"
       />
     </>
@@ -68,7 +107,8 @@ function SubmitChecklist({ visit, onDone }: { visit: Visit; onDone: () => void }
   const standing = useStandingPressureChecks(visit.id);
   const electrical = useElectricalChecks(visit.id);
   const refrigerant = useVisitRefrigerant(visit.id);
-  const [reason, setReason] = useState("");
+  const needsReason = !hasReason(visit.reason);
+  const form = useForm({ resolver: zodResolver(submitSchema(needsReason)), defaultValues: { reason: "" } });
   const [error, setError] = useState<string | null>(null);
   const id = useId();
   const queries = [equipment, pressureTests, evacuations, standing, electrical, refrigerant];
@@ -81,7 +121,6 @@ function SubmitChecklist({ visit, onDone }: { visit: Visit; onDone: () => void }
       </p>
     );
   }
-  const needsReason = !hasReason(visit.reason);
   // A check that could not load is said plainly; the technician may still submit (the server checks the reason).
   const items =
     failed ||
@@ -129,21 +168,25 @@ function SubmitChecklist({ visit, onDone }: { visit: Visit; onDone: () => void }
         });
   const warnings = items.filter((item) => !item.blocking);
 
-  const submit = async () => {
+  const submit = () => {
     setError(null);
-    if (needsReason && reason.trim().length < 3) return setError(REASON_NEEDED_MESSAGE);
-    try {
-      await review.mutateAsync({ visitId: visit.id, action: "submit", ...(needsReason ? { reason } : {}) });
-      onDone();
-    } catch (caught) {
-      setError(
-        caught instanceof ApiError
-          ? (caught.fields.reason ?? caught.message)
-          : caught instanceof Error
-            ? caught.message
-            : "That did not go through",
-      );
-    }
+    return form.handleSubmit(
+      async (body) => {
+        try {
+          await review.mutateAsync({ visitId: visit.id, ...body });
+          onDone();
+        } catch (caught) {
+          setError(
+            caught instanceof ApiError
+              ? (caught.fields.reason ?? caught.message)
+              : caught instanceof Error
+                ? caught.message
+                : "That did not go through",
+          );
+        }
+      },
+      (errors) => setError(firstMessage(errors)),
+    )();
   };
 
   return (
@@ -182,8 +225,7 @@ function SubmitChecklist({ visit, onDone }: { visit: Visit; onDone: () => void }
             id={`${id}-reason`}
             rows={2}
             maxLength={MAX_REASON_LENGTH}
-            value={reason}
-            onChange={(event) => setReason(event.target.value)}
+            {...form.register("reason")}
             aria-required="true"
             aria-describedby={`${id}-reason-hint`}
             aria-invalid={error === REASON_NEEDED_MESSAGE || undefined}
@@ -215,28 +257,29 @@ function SubmitChecklist({ visit, onDone }: { visit: Visit; onDone: () => void }
  */
 export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) {
   const review = useReviewVisit();
-  const [reason, setReason] = useState("");
-  const [reopenReason, setReopenReason] = useState("");
+  // Two forms: the reviewer's note or reason (sign off or send back), and the reason to reopen.
+  const reviewForm = useForm({
+    resolver: zodResolver(ReviewFormSchema),
+    defaultValues: { action: "sign-off" as "sign-off" | "send-back", reason: "" },
+  });
+  const reopenForm = useForm({ resolver: zodResolver(ReopenFormSchema), defaultValues: { reason: "" } });
   const [error, setError] = useState<string | null>(null);
   const [checking, setChecking] = useState(false);
-  const act = async (action: "sign-off" | "send-back" | "reopen") => {
-    setError(null);
-    if (action === "send-back" && reason.trim().length < 3) return setError("Say what needs doing before sign-off");
-    if (action === "reopen" && reopenReason.trim().length < 3)
-      return setError("Say why the visit is reopened, e.g. “pressure test entered wrongly”");
+  const send = async (body: z.output<typeof ReviewActionSchema>) => {
     try {
-      await review.mutateAsync(
-        action === "send-back"
-          ? { visitId: visit.id, action, reason }
-          : action === "reopen"
-            ? { visitId: visit.id, action, reason: reopenReason }
-            : { visitId: visit.id, action, note: reason || undefined },
-      );
-      setReopenReason("");
-      setReason("");
+      await review.mutateAsync({ visitId: visit.id, ...body });
+      reopenForm.reset();
+      reviewForm.reset();
     } catch (caught) {
       setError(caught instanceof Error ? caught.message : "That did not go through");
     }
+  };
+  const refused = (errors: FieldErrors) => setError(firstMessage(errors));
+  const act = (action: "sign-off" | "send-back" | "reopen") => {
+    setError(null);
+    if (action === "reopen") return reopenForm.handleSubmit(send, refused)();
+    reviewForm.setValue("action", action);
+    return reviewForm.handleSubmit(send, refused)();
   };
   const reviewable = visit.status === "open" || visit.status === "awaiting-review";
   const submittable = visit.status === "open" || visit.status === "sent-back";
@@ -277,8 +320,7 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
             <ReasonBox
               id="review-reason"
               label="Note or reason"
-              value={reason}
-              onChange={setReason}
+              registration={reviewForm.register("reason")}
               placeholder="A note with the sign-off, or what needs doing if you send it back"
             />
             <div className="flex flex-wrap gap-2">
@@ -296,8 +338,7 @@ export function ReviewPanel({ visit, canSubmit, canSignOff }: ReviewPanelProps) 
             <ReasonBox
               id="reopen-reason"
               label="Reason for reopening (required)"
-              value={reopenReason}
-              onChange={setReopenReason}
+              registration={reopenForm.register("reason")}
               placeholder="What must be corrected, e.g. “pressure test entered as 3500 kPa, was 350”"
             />
             <p className="text-sm text-muted">
