@@ -47,6 +47,10 @@ export const ROUTES: readonly BenchRoute[] = [
   // Jobs and equipment lists (server-driven paging: owned by the lists' engineer).
   { name: "jobs list", path: () => "/api/visits", as: "tech", connections: [1, 10], list: true },
   { name: "equipment list", path: () => "/api/equipment", as: "tech", connections: [1, 10], list: true },
+  // The same page length at both sizes (the demo company has 4 visits and 3 units, so its full
+  // pages are shorter than the large set's 50 rows): their ratio is the organisation's size alone.
+  { name: "jobs list, 3 rows", path: () => "/api/visits?limit=3", as: "tech", connections: [1], list: true },
+  { name: "equipment list, 3 rows", path: () => "/api/equipment?limit=3", as: "tech", connections: [1], list: true },
   // Their searches and sorts: a common word, two rare ones, a word found nowhere (every row read if unindexed).
   { name: "jobs search clinic", path: () => "/api/visits?q=clinic", as: "tech", connections: [1], list: true },
   {
