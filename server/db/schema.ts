@@ -114,6 +114,37 @@ const clientIdUnique = (table: string, columns: { visitId: AnyPgColumn; clientId
  */
 const version = (name = "version") => integer(name).notNull().default(1);
 
+/** The first columns of every record of a visit: its id, and the organisation and visit it belongs to (deleted with them). */
+const ofVisit = () => ({
+  id: uuid("id").primaryKey().defaultRandom(),
+  organisationId: uuid("organisation_id")
+    .notNull()
+    .references(() => organisations.id, { onDelete: "cascade" }),
+  visitId: uuid("visit_id")
+    .notNull()
+    .references(() => visits.id, { onDelete: "cascade" }),
+});
+/** Who recorded an entry at the unit, and when it was taken on the device (it may arrive later, from the outbox). */
+const takenBy = () => ({
+  recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
+  takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+});
+/** A procedure record's keys: read in the visit's order, voided whole, stored once per client id. */
+const procedureRecordKeys = (
+  table: string,
+  columns: {
+    visitId: AnyPgColumn;
+    takenAt: AnyPgColumn;
+    voidedAt: AnyPgColumn;
+    voidReason: AnyPgColumn;
+    clientId: AnyPgColumn;
+  },
+) => [
+  index(`${table}_visit_idx`).on(columns.visitId, columns.takenAt),
+  voidComplete(table, columns),
+  clientIdUnique(table, columns),
+];
+
 /** The service company: the customer of Satura. */
 export const organisations = pgTable("organisations", {
   id: uuid("id").primaryKey().defaultRandom(),
@@ -489,13 +520,7 @@ function readingFigureColumns() {
 export const readings = pgTable(
   "readings",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     circuit: integer("circuit").notNull(),
     takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     note: text("note"),
@@ -543,13 +568,7 @@ export const readings = pgTable(
 export const adjustments = pgTable(
   "adjustments",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     circuit: integer("circuit"),
     at: timestamp("at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
     kind: text("kind").notNull(),
@@ -578,13 +597,7 @@ export const adjustments = pgTable(
 export const visitComments = pgTable(
   "visit_comments",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     readingId: uuid("reading_id").references(() => readings.id, { onDelete: "cascade" }),
     authorId: uuid("author_id").references(() => users.id, { onDelete: "set null" }),
     body: text("body").notNull(),
@@ -603,13 +616,7 @@ export const visitComments = pgTable(
 export const photos = pgTable(
   "photos",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     kind: text("kind").notNull(),
     caption: text("caption"),
     storedName: text("stored_name").notNull(),
@@ -637,57 +644,35 @@ export const photos = pgTable(
 export const electricalChecks = pgTable(
   "electrical_checks",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     /** compressor, fan or supply. */
     target: text("target").notNull(),
     /** Phase voltages, insulation readings with their test voltage, winding resistances, running currents. */
     input: jsonb("input").$type<ElectricalCheckInput>().notNull(),
     /** The verdicts per check and overall, as the engine judged them. */
     result: jsonb("result").$type<ElectricalCheckResult>().notNull(),
-    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
-    takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...takenBy(),
     ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [
-    index("electrical_checks_visit_idx").on(table.visitId, table.takenAt),
-    voidComplete("electrical_checks", table),
-    clientIdUnique("electrical_checks", table),
-  ],
+  (table) => procedureRecordKeys("electrical_checks", table),
 );
 
 /** One leak search: the method, the places checked, leaks found and repaired, the recheck. */
 export const leakSearches = pgTable(
   "leak_searches",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     method: text("method").notNull(),
     input: jsonb("input").$type<LeakSearchInput>().notNull(),
     result: jsonb("result").$type<Verdict>().notNull(),
-    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
-    takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...takenBy(),
     ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [
-    index("leak_searches_visit_idx").on(table.visitId, table.takenAt),
-    voidComplete("leak_searches", table),
-    clientIdUnique("leak_searches", table),
-  ],
+  (table) => procedureRecordKeys("leak_searches", table),
 );
 
 /**
@@ -698,54 +683,32 @@ export const leakSearches = pgTable(
 export const standingPressureChecks = pgTable(
   "standing_pressure_checks",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     /** The circuit read, or null for a single-circuit unit or a check not tied to one. */
     circuit: integer("circuit"),
     input: jsonb("input").$type<StandingPressureRecordInput>().notNull(),
     result: jsonb("result").$type<StandingPressureResult>().notNull(),
-    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
-    takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...takenBy(),
     ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [
-    index("standing_pressure_checks_visit_idx").on(table.visitId, table.takenAt),
-    voidComplete("standing_pressure_checks", table),
-    clientIdUnique("standing_pressure_checks", table),
-  ],
+  (table) => procedureRecordKeys("standing_pressure_checks", table),
 );
 
 /** A nitrogen strength/tightness test: test pressure against the rated pressure, start and end of the hold. */
 export const pressureTests = pgTable(
   "pressure_tests",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     input: jsonb("input").$type<PressureTestRecordInput>().notNull(),
     result: jsonb("result").$type<PressureTestRecordResult>().notNull(),
-    recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
-    takenAt: timestamp("taken_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    ...takenBy(),
     ...clientId(),
     ...voidColumns(),
     createdAt,
   },
-  (table) => [
-    index("pressure_tests_visit_idx").on(table.visitId, table.takenAt),
-    voidComplete("pressure_tests", table),
-    clientIdUnique("pressure_tests", table),
-  ],
+  (table) => procedureRecordKeys("pressure_tests", table),
 );
 
 /**
@@ -755,13 +718,7 @@ export const pressureTests = pgTable(
 export const evacuations = pgTable(
   "evacuations",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     targetMicrons: doublePrecision("target_microns").notNull(),
     /** Minutes from the start at which the pump was valved off; null while still pulling down. */
     isolatedAtMinutes: doublePrecision("isolated_at_minutes"),
@@ -940,13 +897,7 @@ export const refrigerantMovements = pgTable(
 export const circuitCharges = pgTable(
   "circuit_charges",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     circuit: integer("circuit").notNull(),
     lineAdjustmentKg: doublePrecision("line_adjustment_kg").notNull().default(0),
     recordedBy: uuid("recorded_by").references(() => users.id, { onDelete: "set null" }),
@@ -1012,13 +963,7 @@ export const chargeReferences = pgTable(
 export const visitEvents = pgTable(
   "visit_events",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    organisationId: uuid("organisation_id")
-      .notNull()
-      .references(() => organisations.id, { onDelete: "cascade" }),
-    visitId: uuid("visit_id")
-      .notNull()
-      .references(() => visits.id, { onDelete: "cascade" }),
+    ...ofVisit(),
     action: text("action").$type<VisitEventAction>().notNull(),
     /** The record concerned (a void), by kind and id; null for events about the whole visit. */
     recordKind: text("record_kind").$type<VoidableKind>(),
