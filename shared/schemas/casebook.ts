@@ -202,19 +202,11 @@ export type CaseDraftInput = z.input<typeof CaseDraftSchema>;
 
 export const CaseFromReadingSchema = z.object({ readingId: z.uuid("Choose a reading") });
 
-/** Faults the generator can make (every state evidence can point to). */
-export const GENERATOR_FAULTS = [
-  "normal",
-  "undercharged",
-  "overcharged",
-  "restricted-metering",
-  "low-evaporator-airflow",
-  "overfeeding-metering",
-  "condenser-airflow",
-  "non-condensables",
-  "weak-compressor",
-] as const;
-export const GeneratorFaultSchema = z.enum(GENERATOR_FAULTS, { error: "Choose the fault to practise" });
+/** Faults the generator can make: every state evidence can point to. */
+export const GeneratorFaultSchema = ChargeStateSchema.exclude(["insufficient-data"], {
+  error: "Choose the fault to practise",
+});
+export const GENERATOR_FAULTS = GeneratorFaultSchema.options;
 export type GeneratorFault = z.infer<typeof GeneratorFaultSchema>;
 
 /** Metering devices each application is built with (a fixed orifice is a comfort-cooling part). */
