@@ -9,7 +9,10 @@ import {
   sortFn_datetime,
   sortFn_text,
   tableFeatures,
+  useTable,
   type Column,
+  type SortingState,
+  type TableOptions,
   type ReactTable,
   type RowData,
 } from "@tanstack/react-table";
@@ -25,6 +28,28 @@ export const sortableTableFeatures = tableFeatures({
   sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic, datetime: sortFn_datetime, text: sortFn_text },
 });
 export type SortableFeatures = typeof sortableTableFeatures;
+
+/**
+ * A list the server pages, searches and sorts (decision 019): the table shows the rows in the
+ * order they came and only asks for a new order, which the screen sends as its query.
+ */
+export function useServerSortedTable<TData extends RowData & { id: string }>(
+  columns: TableOptions<SortableFeatures, TData>["columns"],
+  data: TData[],
+  sorting: SortingState,
+  onSortingChange: TableOptions<SortableFeatures, TData>["onSortingChange"],
+) {
+  return useTable({
+    features: sortableTableFeatures,
+    columns,
+    data,
+    getRowId: (row) => row.id,
+    state: { sorting },
+    onSortingChange,
+    manualSorting: true,
+    manualFiltering: true,
+  });
+}
 
 /** The sort direction as a shape, so it reads without colour. */
 export function SortIcon({ direction }: { direction: false | "asc" | "desc" }) {

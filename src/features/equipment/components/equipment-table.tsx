@@ -1,4 +1,4 @@
-import { createColumnHelper, useTable, type SortingState } from "@tanstack/react-table";
+import { createColumnHelper, type SortingState } from "@tanstack/react-table";
 import { useId, useMemo, useState, type ReactNode } from "react";
 import { Link } from "react-router-dom";
 import { REFRIGERANT_CATALOGUE } from "@shared/property-tables/refrigerant-catalogue.ts";
@@ -8,7 +8,12 @@ import type { EquipmentListParams, EquipmentSort } from "@shared/schemas/list-pa
 import { Button } from "@/components/ui/button/button.tsx";
 import { PageControls } from "@/components/ui/data-table/page-controls.tsx";
 import { SafetyBadge } from "@/components/ui/safety-badge/safety-badge.tsx";
-import { SortableTable, sortableTableFeatures, SortIcon } from "@/components/ui/data-table/sortable-table.tsx";
+import {
+  SortableTable,
+  sortableTableFeatures,
+  SortIcon,
+  useServerSortedTable,
+} from "@/components/ui/data-table/sortable-table.tsx";
 import { paths } from "@/config/paths.ts";
 import { formatNumber } from "@/lib/units/display-units.ts";
 import { capitalise, meteringSummary, totalFactoryChargeKg } from "../utils/nameplate-text.ts";
@@ -147,17 +152,7 @@ export function EquipmentTable({ empty }: { empty?: ReactNode }) {
   const kindId = useId();
   const sortId = useId();
 
-  const table = useTable({
-    features: sortableTableFeatures,
-    columns,
-    data: rows,
-    getRowId: (row) => row.id,
-    state: { sorting },
-    onSortingChange: setSorting,
-    // The rows come searched and sorted from the server.
-    manualSorting: true,
-    manualFiltering: true,
-  });
+  const table = useServerSortedTable(columns, rows, sorting, setSorting);
   const shown = table.getRowModel().rows;
   const nextCursor = list.data?.nextCursor ?? null;
 

@@ -1,11 +1,15 @@
-import { createColumnHelper, useTable, type SortingState } from "@tanstack/react-table";
+import { createColumnHelper, type SortingState } from "@tanstack/react-table";
 import { useId, useState, type ReactNode } from "react";
 import { Link } from "react-router-dom";
 import type { VisitListParams, VisitSort } from "@shared/schemas/list-pages.ts";
 import { visitReasonText, type VisitStatus, type VisitSummary } from "@shared/schemas/visits.ts";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { PageControls } from "@/components/ui/data-table/page-controls.tsx";
-import { SortableTable, sortableTableFeatures } from "@/components/ui/data-table/sortable-table.tsx";
+import {
+  SortableTable,
+  sortableTableFeatures,
+  useServerSortedTable,
+} from "@/components/ui/data-table/sortable-table.tsx";
 import { Button } from "@/components/ui/button/button.tsx";
 import { paths } from "@/config/paths.ts";
 import { formatDateTime } from "@shared/format/date-time.ts";
@@ -111,17 +115,7 @@ export function JobsTable({ status, empty }: { status: VisitStatus | null; empty
     crew: visit.technicians.map((person) => person.name).join(", "),
   }));
   const searchId = useId();
-  const table = useTable({
-    features: sortableTableFeatures,
-    columns,
-    data: rows,
-    getRowId: (row) => row.id,
-    state: { sorting },
-    onSortingChange: setSorting,
-    // The rows come sorted and filtered from the server.
-    manualSorting: true,
-    manualFiltering: true,
-  });
+  const table = useServerSortedTable(columns, rows, sorting, setSorting);
 
   if (visits.isPending) {
     return (
