@@ -186,6 +186,18 @@ export const RunningCurrentInputSchema = z.object({
 });
 export type RunningCurrentInput = z.infer<typeof RunningCurrentInputSchema>;
 
+/** The site's atmospheric pressure a gauge reads against, kPa absolute, within what weather and altitude allow. */
+const atmosphericPressure = number("Atmospheric pressure", "kPa absolute")
+  .min(
+    MIN_ATMOSPHERIC_PRESSURE_KPA,
+    `Atmospheric pressure below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`,
+  )
+  .max(
+    MAX_ATMOSPHERIC_PRESSURE_KPA,
+    `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`,
+  )
+  .optional();
+
 // ---------------------------------------------------------------------------------------------
 // Nitrogen pressure test (trade notes §5)
 // ---------------------------------------------------------------------------------------------
@@ -198,16 +210,7 @@ export const PressureTestInputSchema = z.object({
   endTempC: temperature("End temperature"),
   allowedDropKPa: nonNegative("Allowed drop", "kPa", MAX_GAUGE_PRESSURE_KPA),
   /** Site atmospheric pressure, kPa absolute; default 101.325. */
-  atmosphericPressureKPa: number("Atmospheric pressure", "kPa absolute")
-    .min(
-      MIN_ATMOSPHERIC_PRESSURE_KPA,
-      `Atmospheric pressure below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`,
-    )
-    .max(
-      MAX_ATMOSPHERIC_PRESSURE_KPA,
-      `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`,
-    )
-    .optional(),
+  atmosphericPressureKPa: atmosphericPressure,
 });
 export type PressureTestInput = z.infer<typeof PressureTestInputSchema>;
 
@@ -228,16 +231,7 @@ export const StandingPressureInputSchema = z.object({
   ),
   equalisedTempC: temperature("Equalised temperature"),
   /** Site atmospheric pressure, kPa absolute; default 101.325. */
-  atmosphericPressureKPa: number("Atmospheric pressure", "kPa absolute")
-    .min(
-      MIN_ATMOSPHERIC_PRESSURE_KPA,
-      `Atmospheric pressure below ${MIN_ATMOSPHERIC_PRESSURE_KPA} kPa is above any inhabited altitude`,
-    )
-    .max(
-      MAX_ATMOSPHERIC_PRESSURE_KPA,
-      `Atmospheric pressure above ${MAX_ATMOSPHERIC_PRESSURE_KPA} kPa is not a weather reading`,
-    )
-    .optional(),
+  atmosphericPressureKPa: atmosphericPressure,
 });
 export type StandingPressureInput = z.infer<typeof StandingPressureInputSchema>;
 
