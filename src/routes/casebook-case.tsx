@@ -6,6 +6,7 @@ import { diagnose, workedSolution } from "@shared/engine/index.ts";
 import { DIFFICULTY_LABELS, canCasebook, type Attempt } from "@shared/schemas/casebook.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
+import { ScreenFailed } from "@/components/errors/screen-failed.tsx";
 import { Button, buttonVariants } from "@/components/ui/button/button.tsx";
 import { FormAlert } from "@/components/ui/field/field.tsx";
 import { ChargeStateBadge } from "@/components/ui/state/charge-state-badge.tsx";
@@ -40,14 +41,13 @@ export default function CasebookCaseRoute() {
     <ScreenBoundary
       key={caseId}
       pending={<p aria-busy="true">Loading the case…</p>}
-      failed={(error) => (
-        <div role="alert" className="space-y-2">
-          <h1 className="text-2xl font-semibold">This case could not be opened</h1>
-          <p>{error.message}</p>
-          <Link to={paths.casebook.getHref()} className="font-medium text-accent underline underline-offset-4">
-            Back to the casebook
-          </Link>
-        </div>
+      failed={(error, retry) => (
+        <ScreenFailed
+          title="This case could not be opened"
+          error={error}
+          retry={retry}
+          back={{ to: paths.casebook.getHref(), label: "Back to the casebook" }}
+        />
       )}
     >
       <CaseScreen caseId={caseId} />

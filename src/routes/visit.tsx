@@ -12,6 +12,7 @@ import { circuitFacts } from "@shared/schemas/circuit-facts.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
+import { ScreenFailed } from "@/components/errors/screen-failed.tsx";
 import { lazyPanel } from "@/components/lazy/lazy-panel.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
@@ -95,14 +96,13 @@ export default function VisitRoute() {
     <ScreenBoundary
       key={visitId}
       pending={<p aria-busy="true">Loading the visit…</p>}
-      failed={(error) => (
-        <div role="alert" className="space-y-2">
-          <h1 className="text-2xl font-semibold">This visit could not be opened</h1>
-          <p>{error.message}</p>
-          <Link to={paths.jobs.getHref()} className="font-medium text-accent underline underline-offset-4">
-            Back to jobs
-          </Link>
-        </div>
+      failed={(error, retry) => (
+        <ScreenFailed
+          title="This visit could not be opened"
+          error={error}
+          retry={retry}
+          back={{ to: paths.jobs.getHref(), label: "Back to jobs" }}
+        />
       )}
     >
       <VisitScreen visitId={visitId} />
