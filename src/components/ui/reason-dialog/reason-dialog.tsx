@@ -1,9 +1,12 @@
+import { zodResolver } from "@hookform/resolvers/zod";
 import type { LucideIcon } from "lucide-react";
 import { useId, useRef, useState, type ReactNode } from "react";
+import { useForm } from "react-hook-form";
+import type { z } from "zod";
 import { Button } from "@/components/ui/button/button.tsx";
 import { ModalForm } from "@/components/ui/modal-form/modal-form.tsx";
 
-interface ReasonDialogProps {
+interface ReasonDialogProps<Body> {
   /** The button that opens the dialog. */
   trigger: {
     label: ReactNode;
@@ -18,11 +21,10 @@ interface ReasonDialogProps {
   maxLength: number;
   confirmLabel: string;
   pendingLabel: string;
-  /**
-   * Checks the reason and acts on it: returns an error message to show (the dialog stays open)
-   * or null when done (it closes). A thrown error's message is shown as well.
-   */
-  onConfirm: (reason: string) => Promise<string | null>;
+  /** The body as the server checks it, made of the reason typed: its messages are the dialog's. */
+  schema: z.ZodType<Body, { reason: string }>;
+  /** Acts on the checked body; the dialog closes when it is done, or shows the message of what it throws. */
+  onConfirm: (body: Body) => Promise<unknown>;
 }
 
 /**
@@ -30,39 +32,42 @@ interface ReasonDialogProps {
  * modal dialog that asks why, keeps the keyboard inside and closes on Escape. The record stays,
  * with the reason, wherever it is kept.
  */
-export function ReasonDialog({
+export function ReasonDialog<Body>({
   trigger,
   title,
   explanation,
   maxLength,
   confirmLabel,
   pendingLabel,
+  schema,
   onConfirm,
-}: ReasonDialogProps) {
+}: ReasonDialogProps<Body>) {
   const dialog = useRef<HTMLDialogElement>(null);
-  const [reason, setReason] = useState("");
+  const form = useForm({ resolver: zodResolver(schema), defaultValues: { reason: "" } });
+  // One message at a time, above the buttons: the schema's or the server's.
   const [error, setError] = useState<string | null>(null);
-  const [pending, setPending] = useState(false);
+  const pending = form.formState.isSubmitting;
   const id = useId();
   const Icon = trigger.icon;
 
   const open = () => {
-    setReason("");
+    form.reset();
     setError(null);
     dialog.current?.showModal();
   };
-  const confirm = async () => {
-    setPending(true);
+  const confirm = () => {
     setError(null);
-    try {
-      const problem = await onConfirm(reason);
-      if (problem) setError(problem);
-      else dialog.current?.close();
-    } catch (caught) {
-      setError(caught instanceof Error ? caught.message : "Not done: try again");
-    } finally {
-      setPending(false);
-    }
+    return form.handleSubmit(
+      async (body) => {
+        try {
+          await onConfirm(body);
+          dialog.current?.close();
+        } catch (caught) {
+          setError(caught instanceof Error ? caught.message : "Not done: try again");
+        }
+      },
+      (errors) => setError(errors.reason?.message ?? "Not done: try again"),
+    )();
   };
 
   return (
@@ -93,8 +98,7 @@ export function ReasonDialog({
             rows={3}
             aria-required="true"
             maxLength={maxLength}
-            value={reason}
-            onChange={(event) => setReason(event.target.value)}
+            {...form.register("reason")}
             aria-invalid={error ? true : undefined}
             className="block w-full rounded-card border-2 border-rule bg-surface p-3"
           />

@@ -1,5 +1,5 @@
 import { Ban } from "lucide-react";
-import { MAX_REASON_LENGTH } from "@shared/schemas/visits.ts";
+import { MAX_REASON_LENGTH, VoidBodySchema } from "@shared/schemas/visits.ts";
 import { ReasonDialog } from "@/components/ui/reason-dialog/reason-dialog.tsx";
 
 interface VoidActionProps {
@@ -12,7 +12,8 @@ interface VoidActionProps {
   disabled?: boolean;
 }
 
-const MIN_REASON = 3;
+/** The reason as the server checks it in every void's body. */
+const VoidReasonSchema = VoidBodySchema.pick({ reason: true });
 
 /** "Void" on a record: asks why (required) and says that the record stays, struck through. */
 export function VoidAction({ what, alsoVoids, onVoid, disabled = false }: VoidActionProps) {
@@ -24,11 +25,8 @@ export function VoidAction({ what, alsoVoids, onVoid, disabled = false }: VoidAc
       maxLength={MAX_REASON_LENGTH}
       confirmLabel="Void the record"
       pendingLabel="Voiding…"
-      onConfirm={async (reason) => {
-        if (reason.trim().length < MIN_REASON) return "Say why this record is void, e.g. “typed 3500 for 350 kPa”";
-        await onVoid(reason.trim());
-        return null;
-      }}
+      schema={VoidReasonSchema}
+      onConfirm={({ reason }) => onVoid(reason)}
     />
   );
 }

@@ -1,5 +1,8 @@
-import { useMemo, useState, type FormEvent, type ReactNode } from "react";
-import { fieldMessages } from "@shared/schemas/field-messages.ts";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMemo, useState, type ReactNode } from "react";
+import { Controller, useForm } from "react-hook-form";
+import { z } from "zod";
+import { fieldMessages, FORM_MESSAGE_KEY } from "@shared/schemas/field-messages.ts";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { cautions } from "@shared/content/cautions.ts";
 import { REFRIGERANT_IDS } from "@shared/property-tables/refrigerant-catalogue.ts";
@@ -33,7 +36,9 @@ import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { NumberInput } from "@/components/ui/field/number-input.tsx";
 import { ChargeStateBadge } from "@/components/ui/state/charge-state-badge.tsx";
+import { useFormValues } from "@/hooks/use-form-values.ts";
 import { useRefrigerantTable } from "@/lib/api/refrigerant-tables.ts";
+import { applyServerErrors, messageAt } from "@/lib/form-errors.ts";
 import type { DisplayUnits } from "@/lib/units/display-units.ts";
 import { CASE_READINGS, METERING_LABELS } from "../utils/case-readings.ts";
 import { formatQuantity, parseQuantity, unitLabel, withUnit } from "@/lib/units/quantities.ts";
@@ -48,21 +53,25 @@ const STORY_FIELDS: { field: keyof CaseStory; label: string; hint: string }[] = 
   { field: "conditions", label: "Conditions", hint: "Weather, run time, anything unusual on the day" },
 ];
 
-interface EditorState {
+/** What the form holds, named as the body's paths so the schema's and the server's messages land under the fields. */
+interface TypedCase {
   title: string;
   difficulty: CaseDifficulty;
   story: CaseStory;
-  refrigerant: string;
-  meteringDevice: MeteringDevice;
-  liquidTempLocation: LiquidTempLocation;
-  readings: Record<ReadingField, string>;
+  /** The readings as typed, in the user's units. */
+  input: Record<ReadingField, string> & {
+    refrigerant: string;
+    meteringDevice: MeteringDevice;
+    liquidTempLocation: LiquidTempLocation;
+  };
   reasoning: string;
   safetyTopics: SafetyNote["topic"][];
-  /** Kept as it came (a case from a reading of a circuit with one); the editor does not change it. */
-  chargeReference?: ChargeReference;
 }
 
-function initialState(item: Case | undefined, units: DisplayUnits, atmosphericKPa: number): EditorState {
+/** Where the server's field messages may land: every field is under one of these. */
+const FIELD_NAMES = ["title", "difficulty", "story", "input", "reasoning", "safetyTopics"] as const;
+
+function typedCase(item: Case | undefined, units: DisplayUnits, atmosphericKPa: number): TypedCase {
   const readings = Object.fromEntries(
     CASE_READINGS.map(({ field, quantity }) => {
       const value = item?.input[field];
@@ -73,34 +82,54 @@ function initialState(item: Case | undefined, units: DisplayUnits, atmosphericKP
     title: item?.title ?? "",
     difficulty: item?.difficulty ?? "starter",
     story: item?.story ?? { site: "", equipment: "", complaint: "", conditions: "" },
-    refrigerant: item?.input.refrigerant ?? "R410A",
-    meteringDevice: item?.input.meteringDevice ?? "txv",
-    liquidTempLocation: item?.input.liquidTempLocation ?? "liquid-line",
-    readings,
+    input: {
+      ...readings,
+      refrigerant: item?.input.refrigerant ?? "R410A",
+      meteringDevice: item?.input.meteringDevice ?? "txv",
+      liquidTempLocation: item?.input.liquidTempLocation ?? "liquid-line",
+    },
     reasoning: item?.reasoning ?? "",
     safetyTopics: item?.safetyTopics ?? [],
-    ...(item?.input.chargeReference ? { chargeReference: item.input.chargeReference } : {}),
   };
 }
 
 /** The typed readings as the engine's SI-metric input, or the fields that are not numbers. */
 function toInput(
-  state: EditorState,
+  typed: TypedCase["input"],
   units: DisplayUnits,
   atmosphericKPa: number,
+  chargeReference: ChargeReference | undefined,
 ): { input: Partial<DiagnosisInput>; errors: Record<string, string> } {
-  const input: Record<string, unknown> = { refrigerant: state.refrigerant, meteringDevice: state.meteringDevice };
-  if (state.liquidTempLocation !== "liquid-line") input.liquidTempLocation = state.liquidTempLocation;
+  const input: Record<string, unknown> = { refrigerant: typed.refrigerant, meteringDevice: typed.meteringDevice };
+  if (typed.liquidTempLocation !== "liquid-line") input.liquidTempLocation = typed.liquidTempLocation;
   const errors: Record<string, string> = {};
   for (const { field, label, quantity, required } of CASE_READINGS) {
-    const parsed = parseQuantity(state.readings[field], quantity, units, atmosphericKPa);
+    const parsed = parseQuantity(typed[field], quantity, units, atmosphericKPa);
     if (parsed === "invalid") errors[`input.${field}`] = `${label} must be a number`;
     else if (parsed !== undefined) input[field] = Number(parsed.toFixed(3));
     else if (required) errors[`input.${field}`] = `${label} is needed`;
   }
   if (atmosphericKPa !== 101.325) input.atmosphericPressureKPa = atmosphericKPa;
-  if (state.chargeReference) input.chargeReference = state.chargeReference;
+  if (chargeReference) input.chargeReference = chargeReference;
   return { input: input as Partial<DiagnosisInput>, errors };
+}
+
+/**
+ * What was typed, read as the shared schema's case: the readings converted to SI-metric, with
+ * this form's own words for a reading it cannot read or a required one left out, and the
+ * schema's messages for the rest, all at once.
+ */
+function caseSchema(units: DisplayUnits, atmosphericKPa: number, chargeReference: ChargeReference | undefined) {
+  return z.custom<TypedCase>().transform((typed, context) => {
+    const { input, errors } = toInput(typed.input, units, atmosphericKPa, chargeReference);
+    const found = { ...errors };
+    const parsed = CaseDraftSchema.safeParse({ ...typed, input });
+    if (!parsed.success)
+      for (const [field, message] of Object.entries(fieldMessages(parsed.error))) found[field] ??= message;
+    for (const [field, message] of Object.entries(found))
+      context.addIssue({ code: "custom", message, path: field === FORM_MESSAGE_KEY ? [] : field.split(".") });
+    return parsed.success && Object.keys(found).length === 0 ? parsed.data : z.NEVER;
+  });
 }
 
 /**
@@ -124,13 +153,22 @@ export function CaseEditor({
   /** Shown beside the save button, e.g. that a newer version was saved meanwhile. */
   notice?: ReactNode;
 }) {
-  const [state, setState] = useState(() => initialState(item, units, atmosphericKPa));
-  const [errors, setErrors] = useState<Record<string, string>>({});
+  // Kept as it came (a case from a reading of a circuit with one); the editor does not change it.
+  const chargeReference = item?.input.chargeReference;
+  const form = useForm({
+    resolver: zodResolver(caseSchema(units, atmosphericKPa, chargeReference)),
+    defaultValues: typedCase(item, units, atmosphericKPa),
+  });
+  const { errors } = form.formState;
   const [formError, setFormError] = useState<string | null>(null);
+  const typed = useFormValues(form.control);
   const refrigerants = REFRIGERANT_IDS;
-  const converted = useMemo(() => toInput(state, units, atmosphericKPa), [state, units, atmosphericKPa]);
+  const converted = useMemo(
+    () => toInput(typed.input, units, atmosphericKPa, chargeReference),
+    [typed.input, units, atmosphericKPa, chargeReference],
+  );
   // The preview computes with the chosen refrigerant's table, loaded when it is picked.
-  const tableLoaded = useRefrigerantTable(state.refrigerant).isSuccess;
+  const tableLoaded = useRefrigerantTable(typed.input.refrigerant).isSuccess;
 
   const preview = useMemo(() => {
     if (Object.keys(converted.errors).length > 0 || !tableLoaded) return null;
@@ -143,45 +181,27 @@ export function CaseEditor({
         result,
         expected,
         toAdd: expected.chargeDeviation ? chargeToAdd(expected.chargeDeviation) : null,
-        steps: workedSolution(input, result, state.reasoning.trim() || null),
+        steps: workedSolution(input, result, typed.reasoning.trim() || null),
       };
     } catch (error) {
       if (error instanceof DiagnosisInputError)
         return { problems: Object.values(error.fieldErrors).flat().concat(error.formErrors) };
       throw error;
     }
-  }, [converted, state.reasoning, tableLoaded]);
+  }, [converted, typed.reasoning, tableLoaded]);
 
-  const setReading = (field: ReadingField) => (text: string) =>
-    setState((current) => ({ ...current, readings: { ...current.readings, [field]: text } }));
-
-  async function submit(event: FormEvent) {
-    event.preventDefault();
-    const parsed = CaseDraftSchema.safeParse({
-      title: state.title,
-      difficulty: state.difficulty,
-      story: state.story,
-      input: converted.input,
-      reasoning: state.reasoning,
-      safetyTopics: state.safetyTopics,
-    });
-    const found: Record<string, string> = { ...converted.errors };
-    if (!parsed.success)
-      for (const [field, message] of Object.entries(fieldMessages(parsed.error))) found[field] ??= message;
-    setErrors(found);
-    if (Object.keys(found).length > 0 || !parsed.success) {
-      setFormError("Some fields need attention");
-      return;
-    }
-    setFormError(null);
-    try {
-      await onSave(parsed.data);
-    } catch (error) {
-      const fields = (error as { fields?: Record<string, string> }).fields ?? {};
-      setErrors(fields);
-      setFormError((error as Error).message);
-    }
-  }
+  const submit = form.handleSubmit(
+    async (draft) => {
+      setFormError(null);
+      try {
+        await onSave(draft);
+      } catch (error) {
+        // The server's message stays above the button, its field messages go under the fields.
+        setFormError(applyServerErrors(error, form.setError, FIELD_NAMES) ?? (error as Error).message);
+      }
+    },
+    () => setFormError("Some fields need attention"),
+  );
 
   return (
     <form onSubmit={submit} noValidate className="grid gap-5 lg:grid-cols-[1fr_26rem]">
@@ -190,17 +210,8 @@ export function CaseEditor({
           <h2 id="editor-story" className="text-xl font-semibold">
             Story
           </h2>
-          <TextField
-            label="Title"
-            value={state.title}
-            error={errors.title}
-            onChange={(event) => setState({ ...state, title: event.target.value })}
-          />
-          <SelectField
-            label="Difficulty"
-            value={state.difficulty}
-            onChange={(event) => setState({ ...state, difficulty: event.target.value as CaseDifficulty })}
-          >
+          <TextField label="Title" error={messageAt(errors, "title")} {...form.register("title")} />
+          <SelectField label="Difficulty" {...form.register("difficulty")}>
             {CASE_DIFFICULTIES.map((value) => (
               <option key={value} value={value}>
                 {DIFFICULTY_LABELS[value]}
@@ -212,9 +223,8 @@ export function CaseEditor({
               key={field}
               label={label}
               hint={hint}
-              value={state.story[field]}
-              error={errors[`story.${field}`]}
-              onChange={(event) => setState({ ...state, story: { ...state.story, [field]: event.target.value } })}
+              error={messageAt(errors, `story.${field}`)}
+              {...form.register(`story.${field}`)}
             />
           ))}
         </section>
@@ -229,9 +239,8 @@ export function CaseEditor({
           <div className="grid gap-3 sm:grid-cols-2">
             <SelectField
               label="Refrigerant"
-              value={state.refrigerant}
-              error={errors["input.refrigerant"]}
-              onChange={(event) => setState({ ...state, refrigerant: event.target.value })}
+              error={messageAt(errors, "input.refrigerant")}
+              {...form.register("input.refrigerant")}
             >
               {refrigerants.map((id) => (
                 <option key={id} value={id}>
@@ -239,29 +248,21 @@ export function CaseEditor({
                 </option>
               ))}
             </SelectField>
-            <SelectField
-              label="Metering device"
-              value={state.meteringDevice}
-              onChange={(event) => setState({ ...state, meteringDevice: event.target.value as MeteringDevice })}
-            >
+            <SelectField label="Metering device" {...form.register("input.meteringDevice")}>
               {METERING_DEVICES.map((device) => (
                 <option key={device} value={device}>
                   {METERING_LABELS[device]}
                 </option>
               ))}
             </SelectField>
-            <SelectField
-              label="Liquid temperature taken on"
-              value={state.liquidTempLocation}
-              onChange={(event) => setState({ ...state, liquidTempLocation: event.target.value as LiquidTempLocation })}
-            >
+            <SelectField label="Liquid temperature taken on" {...form.register("input.liquidTempLocation")}>
               <option value="liquid-line">Liquid line (condenser outlet)</option>
               <option value="discharge-line">Discharge line (a mistake to teach)</option>
             </SelectField>
           </div>
           <div className="grid gap-3 sm:grid-cols-2">
             {CASE_READINGS.map(({ field, label, quantity, required }) => {
-              const error = errors[`input.${field}`];
+              const error = messageAt(errors, `input.${field}`);
               const id = `case-reading-${field}`;
               return (
                 <div key={field} className="space-y-1">
@@ -272,9 +273,8 @@ export function CaseEditor({
                   <NumberInput
                     id={id}
                     unit={unitLabel(quantity, units)}
-                    value={state.readings[field]}
                     invalid={Boolean(error)}
-                    onChange={(event) => setReading(field)(event.target.value)}
+                    {...form.register(`input.${field}`)}
                   />
                   {error && <p className="text-sm font-medium text-fault">⚠ {error}</p>}
                 </div>
@@ -293,30 +293,37 @@ export function CaseEditor({
           <TextField
             label="Reasoning behind the verdict"
             hint="One or two sentences apprentices see after their attempt"
-            value={state.reasoning}
-            error={errors.reasoning}
-            onChange={(event) => setState({ ...state, reasoning: event.target.value })}
+            error={messageAt(errors, "reasoning")}
+            {...form.register("reasoning")}
           />
           <fieldset className="space-y-1">
             <legend className="font-medium">Hazards of this job (the refrigerant's class is added by itself)</legend>
-            {CASE_SAFETY_TOPICS.map((topic) => (
-              <label key={topic} className="flex min-h-touch items-center gap-3">
-                <input
-                  type="checkbox"
-                  className="size-5"
-                  checked={state.safetyTopics.includes(topic)}
-                  onChange={(event) =>
-                    setState({
-                      ...state,
-                      safetyTopics: event.target.checked
-                        ? [...state.safetyTopics, topic]
-                        : state.safetyTopics.filter((other) => other !== topic),
-                    })
-                  }
-                />
-                {cautions[topic].title}
-              </label>
-            ))}
+            {/* Kept in the order they were ticked, as they are stored and shown. */}
+            <Controller
+              control={form.control}
+              name="safetyTopics"
+              render={({ field }) => (
+                <>
+                  {CASE_SAFETY_TOPICS.map((topic) => (
+                    <label key={topic} className="flex min-h-touch items-center gap-3">
+                      <input
+                        type="checkbox"
+                        className="size-5"
+                        checked={field.value.includes(topic)}
+                        onChange={(event) =>
+                          field.onChange(
+                            event.target.checked
+                              ? [...field.value, topic]
+                              : field.value.filter((other) => other !== topic),
+                          )
+                        }
+                      />
+                      {cautions[topic].title}
+                    </label>
+                  ))}
+                </>
+              )}
+            />
           </fieldset>
         </section>
         {formError && <FormAlert>{formError}</FormAlert>}

@@ -14,13 +14,8 @@ export function ClearChargeReference({ equipmentId, circuit }: { equipmentId: st
       maxLength={MAX_CLEAR_REASON_LENGTH}
       confirmLabel="Clear the reference point"
       pendingLabel="Clearing…"
-      onConfirm={async (reason) => {
-        // The same schema the server checks the body with.
-        const parsed = ChargeReferenceClearSchema.safeParse({ reason });
-        if (!parsed.success) return parsed.error.issues[0]?.message ?? "Say why the reference point is cleared";
-        await clear.mutateAsync({ circuit, body: parsed.data });
-        return null;
-      }}
+      schema={ChargeReferenceClearSchema}
+      onConfirm={(body) => clear.mutateAsync({ circuit, body })}
     />
   );
 }

@@ -131,9 +131,7 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
     form,
     visitId,
     mutation: create,
-    // Taken now, by the device's clock; without a connection it waits in the outbox.
-    record: (body, clientId) => ({ ...body, clientId, takenAt: new Date().toISOString() }),
-    send: (record) => create.mutateAsync({ visitId, ...record }),
+    stamp: "takenAt",
     entry: () => ({ kind: "electrical-check", path: procedureRecordsPath("electrical-checks", visitId) }),
     cleared: (typed) => ({ ...typed, ...READINGS_CLEARED, insulation: [emptyInsulation()] }),
     notSaved: "The check was not saved. Try again.",

@@ -280,8 +280,7 @@ export function EvacuationPanel({ visitId, canWrite }: { visitId: string; canWri
     visitId,
     mutation: create,
     // The pump's start by this device's clock: kept without signal, the evacuation is stored with it.
-    record: (body, clientId) => ({ ...body, clientId, startedAt: new Date().toISOString() }),
-    send: (record) => create.mutateAsync({ visitId, ...record }),
+    stamp: "startedAt",
     entry: (record) => ({
       kind: "evacuation",
       label: `Evacuation to ${formatVacuum(record.targetMicrons ?? evacuations.data?.defaults.targetMicrons ?? 500, unit)}`,

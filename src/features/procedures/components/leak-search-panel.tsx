@@ -85,9 +85,7 @@ export function LeakSearchPanel({
     form,
     visitId,
     mutation: create,
-    // Taken now, by the device's clock; without a connection it waits in the outbox.
-    record: (body, clientId) => ({ ...body, clientId, takenAt: new Date().toISOString() }),
-    send: (record) => create.mutateAsync({ visitId, ...record }),
+    stamp: "takenAt",
     entry: () => ({ kind: "leak-search", path: procedureRecordsPath("leak-searches", visitId) }),
     // The method stays: the next search on this visit is usually made the same way.
     cleared: (typed) => ({ ...EMPTY_SEARCH, method: typed.method }),

@@ -119,9 +119,7 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
     form,
     visitId,
     mutation: create,
-    // Taken now, by the device's clock; without a connection it waits in the outbox.
-    record: (body, clientId) => ({ ...body, clientId, takenAt: new Date().toISOString() }),
-    send: (record) => create.mutateAsync({ visitId, ...record }),
+    stamp: "takenAt",
     entry: () => ({ kind: "pressure-test", path: procedureRecordsPath("pressure-tests", visitId) }),
     // The part tested, its rating and the allowed drop stay for a retest.
     cleared: (typed) => ({ ...typed, ...READINGS_CLEARED }),

@@ -95,9 +95,7 @@ export function StandingPressurePanel({
     form,
     visitId,
     mutation: create,
-    // Taken now, by the device's clock; without a connection it waits in the outbox.
-    record: (body, clientId) => ({ ...body, clientId, takenAt: new Date().toISOString() }),
-    send: (record) => create.mutateAsync({ visitId, ...record }),
+    stamp: "takenAt",
     entry: () => ({ kind: "standing-pressure-check", path: procedureRecordsPath("standing-pressure-checks", visitId) }),
     // The circuit stays for the next check.
     cleared: (typed) => ({ ...typed, standingGaugeKPa: "", equalisedTempC: "", note: "" }),

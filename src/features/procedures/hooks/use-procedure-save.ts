@@ -10,18 +10,17 @@ export const CHECK_FIELDS_MESSAGE = "Check the fields marked below";
 
 type Sent = Record<string, unknown> & { clientId: string };
 
-interface ProcedureSaveOptions<Typed extends FieldValues, Body, Record extends Sent> {
+/** The moment a record carries, by this device's clock: a test's or check's `takenAt`, an evacuation's `startedAt`. */
+type Stamp = "takenAt" | "startedAt";
+/** A record as most panels send it: the checked body, its client id and the moment it was saved. */
+type Stamped<Body, S extends Stamp> = Body & { clientId: string } & Record<S, string>;
+
+interface SaveOptions<Typed extends FieldValues, Body, Item extends Sent> {
   /** The panel's form; its resolver turns what was typed into the body and checks it with the shared schema. */
   form: UseFormReturn<Typed, unknown, Body>;
   visitId: string;
-  /** The panel's mutation (it invalidates the visit's lists); `send` calls it. */
-  mutation: { isPending: boolean };
-  /** The record as sent: the checked body with its client id and the moment by this device's clock. */
-  record: (body: Body, clientId: string) => Record;
-  /** Sends the record now; without a connection it is kept in the outbox instead (README decision 027). */
-  send: (record: Record) => Promise<unknown>;
   /** The outbox entry that keeps the record when it cannot be sent. */
-  entry: (record: Record) => { kind: OutboxKind; path: string; label?: string; takenAt?: string };
+  entry: (record: Item) => { kind: OutboxKind; path: string; label?: string; takenAt?: string };
   /** What the form holds once the record is saved (or kept): typically the readings cleared, the choices kept. */
   cleared: (typed: Typed) => Typed;
   /** Said when the save failed without a message of its own. */
@@ -34,30 +33,98 @@ interface ProcedureSaveOptions<Typed extends FieldValues, Body, Record extends S
   invalidMessage?: string | null;
 }
 
+/** A record of a visit's own: the body stamped with the moment it is saved, sent with the panel's mutation. */
+interface StampedSaveOptions<Typed extends FieldValues, Body, S extends Stamp> extends SaveOptions<
+  Typed,
+  Body,
+  Stamped<Body, S>
+> {
+  /**
+   * The field that takes the moment of the save by this device's clock: without a connection the
+   * record waits in the outbox and is stored with it (README decision 026).
+   */
+  stamp: S;
+  /** The panel's create mutation (it invalidates the visit's lists); the record is sent with it, under the visit. */
+  mutation: {
+    isPending: boolean;
+    // NoInfer: the body's type comes from the form alone, as the schema's output.
+    mutateAsync: (variables: NoInfer<Stamped<Body, S>> & { visitId: string }) => Promise<unknown>;
+  };
+}
+
+/** A record made and sent the panel's own way (an evacuation's reading: its minutes, behind its evacuation). */
+interface OwnSaveOptions<Typed extends FieldValues, Body, Item extends Sent> extends SaveOptions<Typed, Body, Item> {
+  /** The panel's mutation (it invalidates the visit's lists); `send` calls it. */
+  mutation: { isPending: boolean };
+  /** The record as sent: the checked body with its client id. */
+  record: (body: Body, clientId: string) => Item;
+  /** Sends the record now; without a connection it is kept in the outbox instead (README decision 027). */
+  send: (record: Item) => Promise<unknown>;
+}
+
+interface ProcedureSave {
+  /** For the form's onSubmit. */
+  submit: () => Promise<void>;
+  /** The message above the button. */
+  formError: string | null;
+  /** Takes the message above the button away (what it said no longer applies). */
+  dismiss: () => void;
+  /** Whether the last save was kept on the device rather than reaching the server. */
+  stored: boolean;
+  /** Whether a save is being sent. */
+  pending: boolean;
+}
+
+/** The record and its sending for a stamped save: the moment is taken on each attempt, as the save happens. */
+function stampedSave<Typed extends FieldValues, Body, S extends Stamp>({
+  stamp,
+  mutation,
+  visitId,
+}: StampedSaveOptions<Typed, Body, S>): Pick<OwnSaveOptions<Typed, Body, Stamped<Body, S>>, "record" | "send"> {
+  return {
+    // A computed key is typed as a string index; it is the one field named by `stamp`.
+    record: (body, clientId) => ({
+      ...body,
+      clientId,
+      ...({ [stamp]: new Date().toISOString() } as Record<S, string>),
+    }),
+    send: (record) => mutation.mutateAsync({ visitId, ...record }),
+  };
+}
+
 /**
  * The save of a procedure record, written once for every panel: the shared schema checks what
  * was typed (the form's resolver), the record gets one client id kept across retries so a save
  * whose answer was lost is stored once (README decision 026), it is sent or kept on the device
  * when there is no connection, the form is cleared for the next one, and a refusal puts the
  * server's messages under the fields that caused them (`fieldMessages` keys are the form's
- * field paths) with its message above the button.
- *
- * @returns `submit` for the form's onSubmit, the message above the button (and `dismiss` for it),
- * whether the last save reached the server, and whether one is being sent
+ * field paths) with its message above the button. A record is the body stamped with the moment
+ * of the save (`stamp`) and sent with the panel's mutation, or made and sent the panel's own way
+ * (`record` and `send`).
  */
-export function useProcedureSave<Typed extends FieldValues, Body, Record extends Sent>({
-  form,
-  visitId,
-  mutation,
-  record: makeRecord,
-  send,
-  entry,
-  cleared,
-  notSaved,
-  check,
-  clearAtOnce = false,
-  invalidMessage = CHECK_FIELDS_MESSAGE,
-}: ProcedureSaveOptions<Typed, Body, Record>) {
+export function useProcedureSave<Typed extends FieldValues, Body, S extends Stamp>(
+  options: StampedSaveOptions<Typed, Body, S>,
+): ProcedureSave;
+export function useProcedureSave<Typed extends FieldValues, Body, Item extends Sent>(
+  options: OwnSaveOptions<Typed, Body, Item>,
+): ProcedureSave;
+export function useProcedureSave<Typed extends FieldValues, Body>(
+  options: StampedSaveOptions<Typed, Body, Stamp> | OwnSaveOptions<Typed, Body, Sent>,
+): ProcedureSave {
+  const {
+    form,
+    visitId,
+    mutation,
+    record: makeRecord,
+    send,
+    entry,
+    cleared,
+    notSaved,
+    check,
+    clearAtOnce = false,
+    invalidMessage = CHECK_FIELDS_MESSAGE,
+    // The overloads type each panel's record; here a record is any record with its client id.
+  } = ("stamp" in options ? { ...options, ...stampedSave(options) } : options) as OwnSaveOptions<Typed, Body, Sent>;
   const entryId = useEntryClientId();
   const keepWhenOffline = useKeepWhenOffline();
   const [formError, setFormError] = useState<string | null>(null);
@@ -94,7 +161,6 @@ export function useProcedureSave<Typed extends FieldValues, Body, Record extends
     return form.handleSubmit(save, () => setFormError(invalidMessage))();
   };
 
-  /** Takes the message above the button away (what it said no longer applies). */
   const dismiss = () => setFormError(null);
 
   return { submit, dismiss, formError, stored, pending: mutation.isPending };
