@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { diagnose, expectedAnswers, gaugeToAbsolute, saturationTemperature } from "@shared/engine/index.ts";
 import { BuiltInCaseFileSchema, CASE_DIFFICULTIES } from "@shared/schemas/casebook.ts";
-import { CHARGE_STATES, METERING_DEVICES } from "@shared/schemas/diagnosis.ts";
+import { CHARGE_STATES, METERING_DEVICES, type ChargeState } from "@shared/schemas/diagnosis.ts";
 import rawFile from "../../../data/casebook/built-in-cases.json" with { type: "json" };
 
 // The built-in cases are invented (PRODUCT.md demo world and other made-up sites). Their
@@ -51,7 +51,7 @@ const FIXED_RESTRICTORS = new Set(["fixed-orifice", "capillary"]);
  * - normal: SH → with a fixed restrictor (its target is the charging chart's, §1.4); SC within
  *   the installer's tolerance of its target (Title 24, ±1.7 K, TRADE.md §1.3, from memory).
  */
-const SYMPTOMS: Record<string, { sh?: Arrow[]; shFixed?: Arrow[]; sc?: Arrow[] }> = {
+const SYMPTOMS: Record<ChargeState, { sh?: Arrow[]; shFixed?: Arrow[]; sc?: Arrow[] }> = {
   undercharged: { sh: ["↑", "→"], shFixed: ["↑"], sc: ["↓"] },
   overcharged: { shFixed: ["↓"], sc: ["↑"] },
   "restricted-metering": { sh: ["↑"], sc: ["→", "↑"] },
