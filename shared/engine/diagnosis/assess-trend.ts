@@ -136,7 +136,11 @@ function windowStatus(
     return {
       ...base,
       settled: false,
-      reason: `Only ${minutesObserved.toFixed(1)} min of readings${start > 0 ? " since the last adjustment" : ""}; settling needs ${SETTLED_WINDOW_MINUTES} min`,
+      // A lone reading spans no time: "0.0 min of readings" would read as a fault of the log.
+      reason:
+        last === start
+          ? `Only one reading${start > 0 ? " since the last adjustment" : " so far"}; settling needs ${SETTLED_WINDOW_MINUTES} min of readings`
+          : `Only ${minutesObserved.toFixed(1)} min of readings${start > 0 ? " since the last adjustment" : ""}; settling needs ${SETTLED_WINDOW_MINUTES} min`,
     };
   }
   if (superheat.change === null && subcooling.change === null) {
