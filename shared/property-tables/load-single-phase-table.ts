@@ -1,3 +1,8 @@
+import { isSinglePhaseTableLoaded, PropertyRangeError, registerSinglePhaseTable } from "../engine/index.ts";
+import { SINGLE_PHASE_TABLE_IMPORTS } from "./single-phase-table-imports.ts";
+
+const pending = new Map<string, Promise<void>>();
+
 /**
  * Loads one refrigerant's single-phase table and registers it with the engine, once: the only
  * way tables reach `singlePhaseState` and `measuredCycle`. Each table is its own dynamic import
@@ -11,11 +16,6 @@
  *   INVALID_TABLE when the file fails its schema
  * @example await loadSinglePhaseTable("R410A"); singlePhaseState("R410A", 1000, 40)
  */
-import { isSinglePhaseTableLoaded, PropertyRangeError, registerSinglePhaseTable } from "../engine/index.ts";
-import { SINGLE_PHASE_TABLE_IMPORTS } from "./single-phase-table-imports.ts";
-
-const pending = new Map<string, Promise<void>>();
-
 export function loadSinglePhaseTable(refrigerant: string): Promise<void> {
   if (isSinglePhaseTableLoaded(refrigerant)) return Promise.resolve();
   const inFlight = pending.get(refrigerant);

@@ -1,3 +1,5 @@
+import { SATURATION_TABLE_IMPORTS } from "../engine/properties/saturation-table-imports.ts";
+
 /**
  * Starts downloading one refrigerant's saturation table without the engine: the first screen
  * learns its refrigerant (from the visit) before the engine's script has arrived on a slow link,
@@ -9,8 +11,6 @@
  * @param id ASHRAE designation, e.g. "R410A"
  * @example prefetchRefrigerantTable("R32"); … await loadRefrigerant("R32") // no second download
  */
-import { SATURATION_TABLE_IMPORTS } from "../engine/properties/saturation-table-imports.ts";
-
 export function prefetchRefrigerantTable(id: string): void {
   // Own keys only: an id such as "toString" has no table.
   const load = Object.hasOwn(SATURATION_TABLE_IMPORTS, id) ? SATURATION_TABLE_IMPORTS[id] : undefined;

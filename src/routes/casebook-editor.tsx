@@ -79,7 +79,7 @@ function EditorScreen({ existing }: { existing?: UseSuspenseQueryResult<Case> })
       const saved = caseId
         ? await update.mutateAsync({ id: caseId, draft, version: existing?.data.version ?? 0 })
         : await create.mutateAsync(draft);
-      navigate(paths.casebook.case.getHref(saved.id));
+      void navigate(paths.casebook.case.getHref(saved.id));
     } catch (error) {
       // Someone saved the case after this editor opened it: keep the text in the form, offer the latest.
       if (error instanceof ApiError && error.isStale) return setStale(error.message);

@@ -124,7 +124,7 @@ function EquipmentDetail({ equipmentId }: { equipmentId: string }) {
           </h2>
           <StartVisitForm
             equipmentId={equipment.id}
-            onStarted={(visit) => navigate(paths.visits.detail.getHref(visit.id))}
+            onStarted={(visit) => void navigate(paths.visits.detail.getHref(visit.id))}
           />
         </section>
       )}

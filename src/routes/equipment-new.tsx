@@ -30,7 +30,7 @@ export default function EquipmentNewRoute() {
         </p>
       ) : (
         <PanelBoundary>
-          <EquipmentForm onCreated={(unit) => navigate(paths.equipment.detail.getHref(unit.id))} />
+          <EquipmentForm onCreated={(unit) => void navigate(paths.equipment.detail.getHref(unit.id))} />
         </PanelBoundary>
       )}
     </div>

@@ -75,7 +75,7 @@ export default function JobsRoute() {
             </Button>
           </div>
           <PanelBoundary>
-            <StartVisitForm onStarted={(visit) => navigate(paths.visits.detail.getHref(visit.id))} />
+            <StartVisitForm onStarted={(visit) => void navigate(paths.visits.detail.getHref(visit.id))} />
           </PanelBoundary>
         </section>
       )}

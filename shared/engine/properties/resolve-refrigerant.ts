@@ -61,6 +61,7 @@ export function isKnownRefrigerantId(id: string): boolean {
   return Object.hasOwn(SATURATION_TABLE_IMPORTS, id);
 }
 
+/** The error for an id Satura has no saturation table for (UNKNOWN_REFRIGERANT), naming the known ones. */
 export function unknownRefrigerantError(id: string): PropertyRangeError {
   return new PropertyRangeError(
     "UNKNOWN_REFRIGERANT",

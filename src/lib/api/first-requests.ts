@@ -45,6 +45,7 @@ interface EarlyVisit {
 
 function startUnitRequests(equipmentId: string): void {
   if (!RECORD_ID.test(equipmentId)) return;
-  startEarlyRequest(`/equipment/${equipmentId}`);
-  startEarlyRequest(`/equipment/${equipmentId}/charge-references`);
+  // Taken up by the screen's own requests, which report a failure.
+  void startEarlyRequest(`/equipment/${equipmentId}`);
+  void startEarlyRequest(`/equipment/${equipmentId}/charge-references`);
 }

@@ -38,7 +38,7 @@ afterEach(() => vi.unstubAllGlobals());
 describe("startEarlyRequest", () => {
   it("answers the first apiRequest for the same path from the request already sent", async () => {
     const asked = stubServer();
-    startEarlyRequest(`/visits/${VISIT_ID}`);
+    void startEarlyRequest(`/visits/${VISIT_ID}`);
     expect(asked).toEqual([`/api/visits/${VISIT_ID}`]);
     await expect(apiRequest(`/visits/${VISIT_ID}`, { schema: PathSchema })).resolves.toEqual({
       path: `/api/visits/${VISIT_ID}`,
@@ -48,7 +48,7 @@ describe("startEarlyRequest", () => {
 
   it("is taken up once: the next request for the path goes to the server", async () => {
     const asked = stubServer();
-    startEarlyRequest("/equipment/one");
+    void startEarlyRequest("/equipment/one");
     await apiRequest("/equipment/one");
     await apiRequest("/equipment/one");
     expect(asked).toEqual(["/api/equipment/one", "/api/equipment/one"]);
@@ -56,7 +56,7 @@ describe("startEarlyRequest", () => {
 
   it("never answers a conditional request or a write", async () => {
     const asked = stubServer();
-    startEarlyRequest("/visits/two");
+    void startEarlyRequest("/visits/two");
     await apiRequest("/visits/two", { ifNoneMatch: 'W/"e.1"' });
     await apiRequest("/visits/two", { method: "POST", body: {} });
     expect(asked).toEqual(["/api/visits/two", "/api/visits/two", "/api/visits/two"]);
@@ -69,7 +69,7 @@ describe("startEarlyRequest", () => {
   // the early request's 401 and said "Sign in to continue".
   it("is forgotten when a session starts or ends: its answer was the last session's", async () => {
     const asked = stubServer();
-    startEarlyRequest("/visits/three");
+    void startEarlyRequest("/visits/three");
     forgetEarlyRequests();
     await apiRequest("/visits/three");
     expect(asked).toEqual(["/api/visits/three", "/api/visits/three"]);

@@ -23,7 +23,7 @@ export function AcceptInvitationForm({ token, preview }: { token: string; previe
     setFormError(null);
     try {
       await accept.mutateAsync({ token, ...values });
-      navigate(paths.home.getHref(), { replace: true });
+      void navigate(paths.home.getHref(), { replace: true });
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, ["name", "password"]));
     }

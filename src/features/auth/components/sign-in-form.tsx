@@ -24,7 +24,7 @@ export function SignInForm() {
     setFormError(null);
     try {
       await signIn.mutateAsync(values);
-      navigate(safeNext(params.get("next")), { replace: true });
+      void navigate(safeNext(params.get("next")), { replace: true });
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, ["email", "password"]));
     }

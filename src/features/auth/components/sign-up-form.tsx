@@ -23,7 +23,7 @@ export function SignUpForm() {
     setFormError(null);
     try {
       await signUp.mutateAsync(values);
-      navigate(paths.home.getHref(), { replace: true });
+      void navigate(paths.home.getHref(), { replace: true });
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, ["organisationName", "name", "email", "password"]));
     }

@@ -39,7 +39,7 @@ export function UserMenu({ compact = false, className }: { compact?: boolean; cl
       return;
     signOut.mutate(undefined, {
       onSuccess: () => clearAllDrafts(),
-      onSettled: () => navigate(paths.signIn.getHref(), { replace: true }),
+      onSettled: () => void navigate(paths.signIn.getHref(), { replace: true }),
     });
   };
 

@@ -30,7 +30,7 @@ export function CaseFromReading({ readings }: { readings: Reading[] }) {
     async (values) => {
       try {
         const created = await create.mutateAsync(values.readingId);
-        navigate(paths.casebook.edit.getHref(created.id));
+        void navigate(paths.casebook.edit.getHref(created.id));
       } catch (caught) {
         setError(caught instanceof Error ? caught.message : "The case was not made");
       }

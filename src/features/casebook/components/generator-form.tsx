@@ -30,7 +30,7 @@ export function GeneratorForm() {
   const devices = GENERATOR_DEVICES[application];
 
   const submit = form.handleSubmit((options) =>
-    generate.mutate(options, { onSuccess: (made) => navigate(paths.casebook.case.getHref(made.id)) }),
+    generate.mutate(options, { onSuccess: (made) => void navigate(paths.casebook.case.getHref(made.id)) }),
   );
 
   return (

@@ -82,7 +82,7 @@ export function QuickStartVisit() {
     setStarting(unit.id);
     try {
       const visit = await create.mutateAsync({ equipmentId: unit.id });
-      navigate(paths.visits.detail.getHref(visit.id));
+      void navigate(paths.visits.detail.getHref(visit.id));
     } catch (caught) {
       setError(caught instanceof Error ? caught.message : "The visit was not started. Try again.");
       setStarting(null);

@@ -63,7 +63,7 @@ function EquipmentPicker({
           {...registration}
           onChange={(event) => {
             setChosen(choices.find((unit) => unit.id === event.target.value) ?? null);
-            return registration.onChange(event);
+            void registration.onChange(event);
           }}
         >
           <option value="">Choose the unit…</option>

@@ -40,7 +40,7 @@ export function SendReportForm({ visitId, defaultTo }: { visitId: string; defaul
       noValidate
       onSubmit={(event) => {
         setSentTo(null);
-        return form.handleSubmit(async ({ to, sendUnsigned }) => {
+        void form.handleSubmit(async ({ to, sendUnsigned }) => {
           if (unsigned && !sendUnsigned) {
             form.setError("sendUnsigned", { type: "confirm", message: UNSIGNED_CONFIRMATION_NEEDED });
             return;
