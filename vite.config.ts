@@ -51,9 +51,18 @@ const REFRIGERANT_TABLE = /data[\\/]refrigerants[\\/]/;
 const chunkGroups = [
   // Everything the first page needs, whichever it is, in one file beside the entry.
   { name: "start", tags: ["$initial" as const], priority: 50 },
+  // react-hook-form and the app's helpers around it (use-form-values.ts with them: in the common
+  // chunk it put the forms on every signed-in screen's first load, the run log's included).
   {
     name: "forms",
-    test: /node_modules[\\/](react-hook-form|@hookform)[\\/]|src[\\/]lib[\\/](form-errors|lazy-zod-resolver)/,
+    test: /node_modules[\\/]react-hook-form[\\/]|src[\\/](lib[\\/](form-errors|lazy-zod-resolver)|hooks[\\/]use-form-values)\./,
+    priority: 40,
+  },
+  // Apart from react-hook-form: the public screens' forms load it on their first check
+  // (lazy-zod-resolver.ts), so the sign-in page never fetches it.
+  {
+    name: "zod-resolver",
+    test: /node_modules[\\/]@hookform[\\/]resolvers[\\/]/,
     priority: 40,
   },
   // What the public forms draw with, apart from the app's other components.
@@ -63,16 +72,33 @@ const chunkGroups = [
     priority: 35,
     includeDependenciesRecursively: true,
   },
+  // The saturation tables' import list, alone: a visit's first screen reads it as soon as the
+  // visit names its refrigerant (first-requests.ts), before the engine's and the common chunk
+  // have arrived, and no other first screen needs it.
+  {
+    name: "table-imports",
+    test: /saturation-table-imports|prefetch-refrigerant-table/,
+    priority: 30,
+  },
+  // What a visit's run log shares with its other sections and its report (the finding, the
+  // measured cycle, the outbox's waiting entries, voiding, the procedures' frame): one file, not
+  // five, three of them under 1 kB. On HTTP/1.1 the browser sends six requests at a time, and the
+  // unit and its refrigerant's table, asked for as the visit answers, waited behind them.
+  {
+    name: "visit-parts",
+    test: /src[\\/]features[\\/](run-log[\\/]|offline[\\/]waiting-entries|visit[\\/]components[\\/]visit-void-action|procedures[\\/]components[\\/]procedure-layout)/,
+    minShareCount: 2,
+    priority: 15,
+  },
   {
     name: "data-table",
     test: /node_modules[\\/](@tanstack[\\/](react-table|table-core|store|react-store)|use-sync-external-store)[\\/]|src[\\/]components[\\/]ui[\\/]data-table[\\/]/,
     priority: 30,
   },
-  // The engine without its tables (each refrigerant's table stays a chunk of its own), without
-  // the three small modules the API schemas read, which would pull it into every screen, and
-  // without the tables' import list, which the first screen uses before the engine has arrived
-  // (prefetch-refrigerant-table.ts); with the casebook's schema and API module, which read the
-  // case generator, and the display units, which convert with the engine.
+  // The engine without its tables (each refrigerant's table stays a chunk of its own, their
+  // import list one of its own above) and without the three small modules the API schemas read,
+  // which would pull it into every screen; with the casebook's schema and API module, which read
+  // the case generator, and the display units, which convert with the engine.
   {
     name: "engine",
     test: (id: string) =>
@@ -80,20 +106,17 @@ const chunkGroups = [
         id,
       ) &&
       !REFRIGERANT_TABLE.test(id) &&
-      !/refrigerant-catalogue|property-tolerances|procedure-limits|saturation-table-imports|prefetch-refrigerant-table/.test(
-        id,
-      ),
+      !/refrigerant-catalogue|property-tolerances|procedure-limits/.test(id),
     priority: 20,
   },
   // The signed-in screens' common code: zod and the API contracts, the API layer, components, icons.
   // The route loaders' module comes with it (one request fewer when a screen opens), and so does
-  // the tables' import list, which a visit's screen reads before the engine has arrived
-  // (first-requests.ts) and which no other first screen needs. Left out, so
+  // the outbox, which the app's frame reads on every signed-in screen. Left out, so
   // that this chunk never imports the engine's: the display units (the engine's unit conversions).
   {
     name: "app",
     test: (id: string) =>
-      /shared[\\/](schemas|content|format)[\\/]|refrigerant-catalogue|property-tolerances|procedure-limits|saturation-table-imports|prefetch-refrigerant-table|src[\\/](lib|components|hooks)[\\/]|node_modules[\\/](zod|lucide-react|class-variance-authority|react-error-boundary|@tanstack[\\/](query-core|react-query))[\\/]/.test(
+      /shared[\\/](schemas|content|format)[\\/]|refrigerant-catalogue|property-tolerances|procedure-limits|src[\\/](lib|components|hooks)[\\/]|src[\\/]features[\\/]offline[\\/](outbox-store|use-outbox)\.|node_modules[\\/](zod|lucide-react|class-variance-authority|react-error-boundary|@tanstack[\\/](query-core|react-query))[\\/]/.test(
         id,
       ) && !/(schemas|api)[\\/]casebook\.ts$|src[\\/]lib[\\/]units[\\/]/.test(id),
     minShareCount: 2,

@@ -7,6 +7,7 @@ import { startFirstRequests } from "./lib/api/first-requests.ts";
 import { keepDataOnDevice, restoreKeptData } from "./features/offline/persist-queries.ts";
 import { createQueryClient } from "./lib/api/query-client.ts";
 import { watchFirstScreen } from "./lib/first-screen.ts";
+import { warmDateFormat } from "./lib/warm-date-format.ts";
 import { AppProviders } from "./providers.tsx";
 import { createRouter } from "./router.tsx";
 
@@ -31,3 +32,5 @@ createRoot(document.getElementById("root")!).render(
     </AppProviders>
   </StrictMode>,
 );
+// The first screen's scripts and data have been asked for: build Intl's date data while they come.
+warmDateFormat();

@@ -22,9 +22,10 @@ export function startFirstRequests(queryClient: QueryClient, pathname: string): 
   const visitId = (matchPath(paths.visits.detail.path, pathname) ?? matchPath(paths.visits.report.path, pathname))
     ?.params.visitId;
   if (visitId && RECORD_ID.test(visitId)) {
-    // The tables' import list (62 entries) is needed on a visit's screen only: it comes with the
-    // app's common chunk, which that screen loads anyway, and so is off the sign-in page.
-    const tables = import("./refrigerant-tables.ts");
+    // The tables' import list (62 entries) is needed on a visit's screen only, so it is a chunk
+    // of its own, off the sign-in page; asked for beside the visit, it is there when the visit
+    // answers, and the table goes out then, not once the common chunk has arrived and run.
+    const tables = import("@shared/property-tables/prefetch-refrigerant-table.ts");
     startEarlyRequest(`/visits/${visitId}`)
       .then(async (response) => (response.ok ? ((await response.clone().json()) as EarlyVisit) : null))
       .then(async (answer) => {

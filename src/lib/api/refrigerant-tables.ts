@@ -22,12 +22,6 @@ export const refrigerantTableQueryOptions = (id: string) =>
 export const useRefrigerantTable = (id: string) =>
   useQuery({ ...refrigerantTableQueryOptions(id), enabled: isKnownRefrigerant(id) });
 
-/**
- * For first-requests.ts, which imports this module when a visit's screen opens: the tables'
- * import list then comes with the signed-in screens' common chunk, never on the entry chunk.
- */
-export { prefetchRefrigerantTable } from "@shared/property-tables/prefetch-refrigerant-table.ts";
-
 /** Loads a table for a route loader; a failure is left for the screen to show, never thrown. */
 export function ensureRefrigerantTable(queryClient: QueryClient, id: string): Promise<unknown> {
   if (!isKnownRefrigerant(id)) return Promise.resolve(null);
