@@ -10,7 +10,7 @@ import { Router, type Response } from "express";
 import { z } from "zod";
 import { boundEnd, boundStart } from "@shared/schemas/dates.ts";
 import { text } from "@shared/schemas/text.ts";
-import { MovementVoidBodySchema } from "@shared/schemas/visits.ts";
+import { VoidReasonSchema } from "@shared/schemas/visits.ts";
 import {
   ChargingUpdateSchema,
   CylinderCreateSchema,
@@ -138,7 +138,7 @@ export function cylindersRouter({ db }: Deps): Router {
     const { organisationId, user } = getAuth(res);
     const row = await getCylinder(db, organisationId, parseId(req.params.id, "Cylinder"));
     if (!row) throw notFound("Cylinder");
-    const { reason } = MovementVoidBodySchema.parse(req.body);
+    const { reason } = VoidReasonSchema.parse(req.body);
     const outcome = await voidReclaim(db, organisationId, {
       cylinderId: row.id,
       movementId: parseId(req.params.movementId, "Movement"),

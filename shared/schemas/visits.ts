@@ -167,16 +167,22 @@ export const VOIDABLE_KIND_LABELS: Record<VoidableKind, string> = {
   charging: "Full weigh-in declaration",
 };
 
+/**
+ * The reason every void carries, checked the same wherever a record is voided: the body of
+ * POST /api/cylinders/:id/movements/:movementId/void (a reclaim, which has no visit) and the
+ * void dialog's form.
+ */
+export const VoidReasonSchema = z.strictObject({
+  reason: reasonSchema("Say why this record is void, e.g. “typed 3500 for 350 kPa”"),
+});
+
 /** Body of POST /api/visits/:id/voids. */
 export const VoidBodySchema = z.strictObject({
   kind: VoidableKindSchema,
   recordId: z.uuid("Say which record to void"),
-  reason: reasonSchema("Say why this record is void, e.g. “typed 3500 for 350 kPa”"),
+  reason: VoidReasonSchema.shape.reason,
 });
 export type VoidBody = z.input<typeof VoidBodySchema>;
-
-/** Body of POST /api/cylinders/:id/movements/:movementId/void (a reclaim, which has no visit). */
-export const MovementVoidBodySchema = VoidBodySchema.pick({ reason: true });
 
 export const VISIT_EVENT_ACTIONS = [
   "started",

@@ -1,5 +1,5 @@
 import { Ban } from "lucide-react";
-import { MAX_REASON_LENGTH, VoidBodySchema } from "@shared/schemas/visits.ts";
+import { MAX_REASON_LENGTH, VoidReasonSchema } from "@shared/schemas/visits.ts";
 import { ReasonDialog } from "@/components/ui/reason-dialog/reason-dialog.tsx";
 
 interface VoidActionProps {
@@ -11,9 +11,6 @@ interface VoidActionProps {
   onVoid: (reason: string) => Promise<unknown>;
   disabled?: boolean;
 }
-
-/** The reason as the server checks it in every void's body. */
-const VoidReasonSchema = VoidBodySchema.pick({ reason: true });
 
 /** "Void" on a record: asks why (required) and says that the record stays, struck through. */
 export function VoidAction({ what, alsoVoids, onVoid, disabled = false }: VoidActionProps) {

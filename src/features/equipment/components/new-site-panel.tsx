@@ -1,6 +1,6 @@
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useState, type KeyboardEvent } from "react";
-import { useForm } from "react-hook-form";
+import { useState, type KeyboardEvent, type ReactNode } from "react";
+import { useForm, type FieldValues, type Path, type UseFormReturn } from "react-hook-form";
 import { CustomerInputSchema, SiteInputSchema, type Customer, type Site } from "@shared/schemas/equipment.ts";
 import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
@@ -23,29 +23,85 @@ function submitOnEnter(submit: () => void) {
   };
 }
 
+/** The site's panel is framed as a panel; the customer's, inside it, dashed and smaller. */
+const FRAMES = {
+  panel: { fieldset: "space-y-3 rounded-card border-2 border-rule bg-paper p-4", legend: "px-1 text-lg font-semibold" },
+  inner: { fieldset: "space-y-3 rounded-card border-2 border-dashed border-rule p-3", legend: "px-1 font-semibold" },
+} as const;
+
+interface NestedCreateFormProps<Input extends FieldValues, Values, Created> {
+  /** What is made, e.g. "site": the heading says "New site", the button "Save site". */
+  thing: string;
+  frame: keyof typeof FRAMES;
+  form: UseFormReturn<Input, unknown, Values>;
+  /** Every field a server message can land on. */
+  fields: readonly Path<Input>[];
+  create: (values: Values) => Promise<Created>;
+  onCreated: (created: Created) => void;
+  onCancel?: () => void;
+  children: ReactNode;
+}
+
+/**
+ * A record made without leaving the equipment form (a site, its customer), saved the same way
+ * each time: checked by the shared schema, sent, and on refusal the server's messages put under
+ * their fields with what is left above them; Save and Cancel last.
+ */
+function NestedCreateForm<Input extends FieldValues, Values, Created>({
+  thing,
+  frame,
+  form,
+  fields,
+  create,
+  onCreated,
+  onCancel,
+  children,
+}: NestedCreateFormProps<Input, Values, Created>) {
+  const [formError, setFormError] = useState<string | null>(null);
+  const submit = form.handleSubmit(async (values) => {
+    setFormError(null);
+    try {
+      onCreated(await create(values));
+    } catch (error) {
+      setFormError(applyServerErrors(error, form.setError, fields));
+    }
+  });
+  return (
+    <fieldset className={FRAMES[frame].fieldset} onKeyDown={submitOnEnter(() => void submit())}>
+      <legend className={FRAMES[frame].legend}>New {thing}</legend>
+      {formError && <FormAlert>{formError}</FormAlert>}
+      {children}
+      <div className="flex flex-wrap gap-2">
+        <Button onClick={() => void submit()} disabled={form.formState.isSubmitting}>
+          {form.formState.isSubmitting ? `Saving ${thing}…` : `Save ${thing}`}
+        </Button>
+        {onCancel && (
+          <Button variant="quiet" onClick={onCancel}>
+            Cancel
+          </Button>
+        )}
+      </div>
+    </fieldset>
+  );
+}
+
 function NewCustomerForm({ onCreated, onCancel }: { onCreated: (customer: Customer) => void; onCancel?: () => void }) {
   const create = useCreateCustomer();
-  const [formError, setFormError] = useState<string | null>(null);
   const form = useForm({
     resolver: zodResolver(CustomerInputSchema),
     defaultValues: { name: "", contactName: "", contactEmail: "", contactPhone: "" },
   });
   const { errors } = form.formState;
-  const submit = form.handleSubmit(async (values) => {
-    setFormError(null);
-    try {
-      onCreated(await create.mutateAsync(values));
-    } catch (error) {
-      setFormError(applyServerErrors(error, form.setError, ["name", "contactName", "contactEmail", "contactPhone"]));
-    }
-  });
   return (
-    <fieldset
-      className="space-y-3 rounded-card border-2 border-dashed border-rule p-3"
-      onKeyDown={submitOnEnter(() => void submit())}
+    <NestedCreateForm
+      thing="customer"
+      frame="inner"
+      form={form}
+      fields={["name", "contactName", "contactEmail", "contactPhone"]}
+      create={create.mutateAsync}
+      onCreated={onCreated}
+      onCancel={onCancel}
     >
-      <legend className="px-1 font-semibold">New customer</legend>
-      {formError && <FormAlert>{formError}</FormAlert>}
       <TextField label="Customer name" error={errors.name?.message} {...form.register("name")} />
       <div className="grid gap-3 sm:grid-cols-2">
         <TextField
@@ -69,17 +125,7 @@ function NewCustomerForm({ onCreated, onCancel }: { onCreated: (customer: Custom
           {...form.register("contactPhone")}
         />
       </div>
-      <div className="flex flex-wrap gap-2">
-        <Button onClick={() => void submit()} disabled={form.formState.isSubmitting}>
-          {form.formState.isSubmitting ? "Saving customer…" : "Save customer"}
-        </Button>
-        {onCancel && (
-          <Button variant="quiet" onClick={onCancel}>
-            Cancel
-          </Button>
-        )}
-      </div>
-    </fieldset>
+    </NestedCreateForm>
   );
 }
 
@@ -87,7 +133,6 @@ function NewCustomerForm({ onCreated, onCancel }: { onCreated: (customer: Custom
 export function NewSitePanel({ onCreated, onCancel }: { onCreated: (site: Site) => void; onCancel?: () => void }) {
   const customers = useCustomers();
   const create = useCreateSite();
-  const [formError, setFormError] = useState<string | null>(null);
   const [addingCustomer, setAddingCustomer] = useState(false);
   const form = useForm({
     resolver: zodResolver(SiteInputSchema),
@@ -97,22 +142,16 @@ export function NewSitePanel({ onCreated, onCancel }: { onCreated: (site: Site) 
   const noCustomers = customers.isSuccess && customers.data.length === 0;
   const showCustomerForm = addingCustomer || noCustomers;
 
-  const submit = form.handleSubmit(async (values) => {
-    setFormError(null);
-    try {
-      onCreated(await create.mutateAsync(values));
-    } catch (error) {
-      setFormError(applyServerErrors(error, form.setError, ["customerId", "name", "address", "altitudeM"]));
-    }
-  });
-
   return (
-    <fieldset
-      className="space-y-3 rounded-card border-2 border-rule bg-paper p-4"
-      onKeyDown={submitOnEnter(() => void submit())}
+    <NestedCreateForm
+      thing="site"
+      frame="panel"
+      form={form}
+      fields={["customerId", "name", "address", "altitudeM"]}
+      create={create.mutateAsync}
+      onCreated={onCreated}
+      onCancel={onCancel}
     >
-      <legend className="px-1 text-lg font-semibold">New site</legend>
-      {formError && <FormAlert>{formError}</FormAlert>}
       {customers.isPending && <p>Loading customers…</p>}
       {customers.isError && <FormAlert>{customers.error.message}</FormAlert>}
       {customers.isSuccess && !noCustomers && (
@@ -170,16 +209,6 @@ export function NewSitePanel({ onCreated, onCancel }: { onCreated: (site: Site) 
         error={errors.altitudeM?.message}
         registration={form.register("altitudeM", { setValueAs: typedNumber })}
       />
-      <div className="flex flex-wrap gap-2">
-        <Button onClick={() => void submit()} disabled={form.formState.isSubmitting}>
-          {form.formState.isSubmitting ? "Saving site…" : "Save site"}
-        </Button>
-        {onCancel && (
-          <Button variant="quiet" onClick={onCancel}>
-            Cancel
-          </Button>
-        )}
-      </div>
-    </fieldset>
+    </NestedCreateForm>
   );
 }

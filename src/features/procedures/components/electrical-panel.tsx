@@ -1,6 +1,5 @@
 import { zodResolver } from "@hookform/resolvers/zod";
-import { formatTime } from "@shared/format/date-time.ts";
-import { Plus, Save, Trash2 } from "lucide-react";
+import { Plus, Trash2 } from "lucide-react";
 import { Controller, useFieldArray, useForm } from "react-hook-form";
 import { z } from "zod";
 import { runningCurrentNotice } from "@shared/engine/index.ts";
@@ -11,7 +10,7 @@ import {
   type ElectricalTarget,
 } from "@shared/schemas/procedure-records.ts";
 import { Button } from "@/components/ui/button/button.tsx";
-import { FormAlert, TextField } from "@/components/ui/field/field.tsx";
+import { TextField } from "@/components/ui/field/field.tsx";
 import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { useCreateElectricalCheck, useElectricalChecks } from "@/lib/api/procedures.ts";
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
@@ -21,14 +20,11 @@ import { useProcedureSave } from "../hooks/use-procedure-save.ts";
 import { toNumber } from "../utils/parse-number.ts";
 import { ElectricalCheckView } from "./electrical-check-view.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
-import { ProcedureLayout } from "./procedure-layout.tsx";
+import { CircuitChoice, ProcedureLayout, type ProcedurePanelProps } from "./procedure-layout.tsx";
 import { LiveNoticeLine } from "./live-notice.tsx";
 
-interface ElectricalPanelProps {
-  visitId: string;
+interface ElectricalPanelProps extends ProcedurePanelProps {
   circuits: number[];
-  canWrite: boolean;
-  readOnlyNote?: string;
 }
 
 type InsulationRow = { point: string; megohms: string; testVoltageV: string };
@@ -78,7 +74,8 @@ const READINGS_CLEARED = {
  * insulation to earth with the test voltage, winding balance, running current against the
  * nameplate. Judged by the server's engine when saved.
  */
-export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: ElectricalPanelProps) {
+export function ElectricalPanel({ circuits, ...panel }: ElectricalPanelProps) {
+  const { visitId } = panel;
   const checks = useElectricalChecks(visitId);
   const create = useCreateElectricalCheck();
   const defaults = checks.data?.defaults;
@@ -160,238 +157,209 @@ export function ElectricalPanel({ visitId, circuits, canWrite, readOnlyNote }: E
 
   return (
     <ProcedureLayout
+      {...panel}
       caution="electrical"
-      visitId={visitId}
-      readOnlyNote={readOnlyNote}
+      kind="electrical-check"
       saved={{
-        headingId: "electrical-saved-heading",
         title: "Checks on this visit",
-        kind: "electrical-check",
-        canVoid: canWrite,
-        records: (checks.data?.electricalChecks ?? []).map((check) => ({
-          id: check.id,
-          voided: check.voided,
-          what: `the electrical check of ${formatTime(check.takenAt)}`,
-          element: <ElectricalCheckView check={check} />,
-        })),
+        records: checks.data?.electricalChecks,
+        name: "the electrical check",
+        view: (check) => <ElectricalCheckView check={check} />,
       }}
       loadError={checks.isError ? `The electrical checks could not be loaded: ${checks.error.message}` : undefined}
-      form={
-        canWrite
-          ? {
-              label: "New electrical check",
-              title: "New electrical check",
-              onSubmit: () => void save.submit(),
-              children: (
-                <>
-                  <div className="flex flex-wrap gap-3">
-                    <Controller
-                      control={form.control}
-                      name="target"
-                      render={({ field }) => (
-                        <Segmented<ElectricalTarget>
-                          label="What was checked"
-                          value={field.value}
-                          onChange={(value) => {
-                            field.onChange(value);
-                            // Another thing checked: the last save's messages were about the one before.
-                            form.clearErrors();
-                          }}
-                          options={ELECTRICAL_TARGETS.map((value) => ({
-                            value,
-                            label: ELECTRICAL_TARGET_LABELS[value],
-                          }))}
-                        />
-                      )}
-                    />
-                    {target !== "supply" && circuits.length > 1 && (
-                      <Controller
-                        control={form.control}
-                        name="circuit"
-                        render={({ field }) => (
-                          <Segmented<string>
-                            label="Circuit"
-                            value={field.value}
-                            onChange={field.onChange}
-                            options={circuits.map((number) => ({ value: String(number), label: `Circuit ${number}` }))}
-                          />
-                        )}
-                      />
-                    )}
-                  </div>
-                  {errors.target && <p className="text-sm font-medium text-fault">⚠ {errors.target.message}</p>}
+      form={{
+        label: "New electrical check",
+        save,
+        saveLabel: "Save electrical check",
+        storedNote: "✓ Saved and judged — see the check above",
+        children: (
+          <>
+            <div className="flex flex-wrap gap-3">
+              <Controller
+                control={form.control}
+                name="target"
+                render={({ field }) => (
+                  <Segmented<ElectricalTarget>
+                    label="What was checked"
+                    value={field.value}
+                    onChange={(value) => {
+                      field.onChange(value);
+                      // Another thing checked: the last save's messages were about the one before.
+                      form.clearErrors();
+                    }}
+                    options={ELECTRICAL_TARGETS.map((value) => ({
+                      value,
+                      label: ELECTRICAL_TARGET_LABELS[value],
+                    }))}
+                  />
+                )}
+              />
+              {target !== "supply" && circuits.length > 1 && (
+                <Controller
+                  control={form.control}
+                  name="circuit"
+                  render={({ field }) => (
+                    <CircuitChoice circuits={circuits} value={field.value} onChange={field.onChange} />
+                  )}
+                />
+              )}
+            </div>
+            {errors.target && <p className="text-sm font-medium text-fault">⚠ {errors.target.message}</p>}
 
+            <fieldset className="space-y-2">
+              <legend className="font-semibold">
+                Supply voltage {threePhase ? "(line to line, running)" : "(running)"}
+              </legend>
+              <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+                {PHASE_PAIRS.slice(0, phaseCount).map((pair, index) => (
+                  <NumberField
+                    key={pair}
+                    label={threePhase ? pair : "Measured"}
+                    unit="V"
+                    registration={form.register(`supplyVolts.${index}`)}
+                    error={errors.supplyVolts?.[index]?.message}
+                  />
+                ))}
+                <NumberField
+                  label="Nameplate"
+                  unit="V"
+                  registration={form.register("nameplateV")}
+                  error={errors.nameplateV?.message}
+                  hint={defaults?.nameplateV ? `${defaults.nameplateV} V on the unit if left blank` : undefined}
+                />
+              </div>
+              {(errors.supplyVolts?.message || messageAt(errors, "_")) && (
+                <p className="text-sm font-medium text-fault">
+                  ⚠ {errors.supplyVolts?.message ?? messageAt(errors, "_")}
+                </p>
+              )}
+            </fieldset>
+
+            <fieldset className="space-y-2">
+              <legend className="font-semibold">Insulation resistance to earth</legend>
+              <p className="text-sm text-muted">
+                Never on a compressor under vacuum. Enter the tester voltage you used.
+              </p>
+              {insulation.fields.map((row, index) => (
+                <div key={row.id} className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[1fr_10rem_10rem_auto]">
+                  <TextField
+                    label="Point tested"
+                    placeholder={target === "supply" ? "e.g. L1 to earth" : "e.g. C to earth"}
+                    className="col-span-2 sm:col-span-1"
+                    {...form.register(`insulation.${index}.point`)}
+                  />
+                  <NumberField
+                    label="Reading"
+                    unit="MΩ"
+                    registration={form.register(`insulation.${index}.megohms`)}
+                    error={errors.insulation?.[index]?.megohms?.message}
+                  />
+                  <NumberField
+                    label="Test voltage"
+                    unit="V d.c."
+                    registration={form.register(`insulation.${index}.testVoltageV`)}
+                    error={errors.insulation?.[index]?.testVoltageV?.message}
+                  />
+                  {insulation.fields.length > 1 && (
+                    <Button
+                      variant="quiet"
+                      aria-label={`Remove insulation reading ${index + 1}`}
+                      onClick={() => insulation.remove(index)}
+                    >
+                      <Trash2 aria-hidden className="size-5" />
+                    </Button>
+                  )}
+                </div>
+              ))}
+              {insulation.fields.length < 6 && (
+                <Button variant="secondary" onClick={() => insulation.append(emptyInsulation())}>
+                  <Plus aria-hidden className="size-5" /> Another insulation reading
+                </Button>
+              )}
+            </fieldset>
+
+            {target !== "supply" && (
+              <>
+                {threePhase && (
                   <fieldset className="space-y-2">
-                    <legend className="font-semibold">
-                      Supply voltage {threePhase ? "(line to line, running)" : "(running)"}
-                    </legend>
-                    <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-                      {PHASE_PAIRS.slice(0, phaseCount).map((pair, index) => (
+                    <legend className="font-semibold">Winding resistance (lead to lead)</legend>
+                    {/* Two across on a phone: three boxes of 24 px digits cut "12.45" to "12.4" at 390 px. */}
+                    <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
+                      {WINDING_PAIRS.map((pair, index) => (
                         <NumberField
                           key={pair}
-                          label={threePhase ? pair : "Measured"}
-                          unit="V"
-                          registration={form.register(`supplyVolts.${index}`)}
-                          error={errors.supplyVolts?.[index]?.message}
+                          label={pair}
+                          unit="Ω"
+                          registration={form.register(`windingOhms.${index}`)}
+                          error={errors.windingOhms?.[index]?.message}
                         />
                       ))}
-                      <NumberField
-                        label="Nameplate"
-                        unit="V"
-                        registration={form.register("nameplateV")}
-                        error={errors.nameplateV?.message}
-                        hint={defaults?.nameplateV ? `${defaults.nameplateV} V on the unit if left blank` : undefined}
-                      />
                     </div>
-                    {(errors.supplyVolts?.message || messageAt(errors, "_")) && (
-                      <p className="text-sm font-medium text-fault">
-                        ⚠ {errors.supplyVolts?.message ?? messageAt(errors, "_")}
-                      </p>
+                    {errors.windingOhms?.message && (
+                      <p className="text-sm font-medium text-fault">⚠ {errors.windingOhms.message}</p>
                     )}
                   </fieldset>
-
+                )}
+                {singlePhaseCompressor && (
                   <fieldset className="space-y-2">
-                    <legend className="font-semibold">Insulation resistance to earth</legend>
+                    <legend className="font-semibold">Compressor windings (terminal to terminal)</legend>
                     <p className="text-sm text-muted">
-                      Never on a compressor under vacuum. Enter the tester voltage you used.
+                      Power off and isolated. R–S should equal C–R + C–S; the start winding reads higher than the run.
                     </p>
-                    {insulation.fields.map((row, index) => (
-                      <div
-                        key={row.id}
-                        className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[1fr_10rem_10rem_auto]"
-                      >
-                        <TextField
-                          label="Point tested"
-                          placeholder={target === "supply" ? "e.g. L1 to earth" : "e.g. C to earth"}
-                          className="col-span-2 sm:col-span-1"
-                          {...form.register(`insulation.${index}.point`)}
-                        />
+                    <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
+                      {TERMINAL_PAIRS.map((pair) => (
                         <NumberField
-                          label="Reading"
-                          unit="MΩ"
-                          registration={form.register(`insulation.${index}.megohms`)}
-                          error={errors.insulation?.[index]?.megohms?.message}
+                          key={pair.key}
+                          label={pair.label}
+                          unit="Ω"
+                          registration={form.register(`singlePhaseWindingOhms.${pair.key}`)}
+                          error={errors.singlePhaseWindingOhms?.[pair.key]?.message}
                         />
-                        <NumberField
-                          label="Test voltage"
-                          unit="V d.c."
-                          registration={form.register(`insulation.${index}.testVoltageV`)}
-                          error={errors.insulation?.[index]?.testVoltageV?.message}
-                        />
-                        {insulation.fields.length > 1 && (
-                          <Button
-                            variant="quiet"
-                            aria-label={`Remove insulation reading ${index + 1}`}
-                            onClick={() => insulation.remove(index)}
-                          >
-                            <Trash2 aria-hidden className="size-5" />
-                          </Button>
-                        )}
-                      </div>
-                    ))}
-                    {insulation.fields.length < 6 && (
-                      <Button variant="secondary" onClick={() => insulation.append(emptyInsulation())}>
-                        <Plus aria-hidden className="size-5" /> Another insulation reading
-                      </Button>
+                      ))}
+                    </div>
+                    {errors.singlePhaseWindingOhms?.message && (
+                      <p className="text-sm font-medium text-fault">⚠ {errors.singlePhaseWindingOhms.message}</p>
                     )}
                   </fieldset>
-
-                  {target !== "supply" && (
-                    <>
-                      {threePhase && (
-                        <fieldset className="space-y-2">
-                          <legend className="font-semibold">Winding resistance (lead to lead)</legend>
-                          {/* Two across on a phone: three boxes of 24 px digits cut "12.45" to "12.4" at 390 px. */}
-                          <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-                            {WINDING_PAIRS.map((pair, index) => (
-                              <NumberField
-                                key={pair}
-                                label={pair}
-                                unit="Ω"
-                                registration={form.register(`windingOhms.${index}`)}
-                                error={errors.windingOhms?.[index]?.message}
-                              />
-                            ))}
-                          </div>
-                          {errors.windingOhms?.message && (
-                            <p className="text-sm font-medium text-fault">⚠ {errors.windingOhms.message}</p>
-                          )}
-                        </fieldset>
-                      )}
-                      {singlePhaseCompressor && (
-                        <fieldset className="space-y-2">
-                          <legend className="font-semibold">Compressor windings (terminal to terminal)</legend>
-                          <p className="text-sm text-muted">
-                            Power off and isolated. R–S should equal C–R + C–S; the start winding reads higher than the
-                            run.
-                          </p>
-                          <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-                            {TERMINAL_PAIRS.map((pair) => (
-                              <NumberField
-                                key={pair.key}
-                                label={pair.label}
-                                unit="Ω"
-                                registration={form.register(`singlePhaseWindingOhms.${pair.key}`)}
-                                error={errors.singlePhaseWindingOhms?.[pair.key]?.message}
-                              />
-                            ))}
-                          </div>
-                          {errors.singlePhaseWindingOhms?.message && (
-                            <p className="text-sm font-medium text-fault">⚠ {errors.singlePhaseWindingOhms.message}</p>
-                          )}
-                        </fieldset>
-                      )}
-                      <fieldset className="space-y-2">
-                        <legend className="font-semibold">Running current</legend>
-                        <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-                          {PHASE_PAIRS.slice(0, phaseCount).map((pair, index) => (
-                            <NumberField
-                              key={pair}
-                              label={threePhase ? `L${index + 1}` : "Measured"}
-                              unit="A"
-                              registration={form.register(`runningAmps.${index}`)}
-                              error={errors.runningAmps?.[index]?.message}
-                            />
-                          ))}
-                          <NumberField
-                            label={target === "fan" ? "Nameplate FLA" : "Nameplate RLA"}
-                            unit="A"
-                            registration={form.register("ratedA")}
-                            error={errors.ratedA?.message}
-                            hint={ratedDefault ? `${ratedDefault} A on the unit if left blank` : undefined}
-                          />
-                        </div>
-                        <div className="space-y-2" data-testid="running-current-notices">
-                          {currentNotices.map((entry, index) => (
-                            <LiveNoticeLine key={index} notice={entry?.notice ?? null} label={entry?.label} />
-                          ))}
-                        </div>
-                      </fieldset>
-                    </>
-                  )}
-
-                  <TextField
-                    label="Note"
-                    error={messageAt(errors, "note")}
-                    placeholder="e.g. contactor pitted, replaced"
-                    {...form.register("note")}
-                  />
-                  {save.formError && <FormAlert>{save.formError}</FormAlert>}
-                  <div className="flex flex-wrap items-center gap-3">
-                    <Button type="submit" size="lg" disabled={save.pending}>
-                      <Save aria-hidden className="size-5" /> {save.pending ? "Saving…" : "Save electrical check"}
-                    </Button>
-                    {save.stored && (
-                      <span role="status" className="text-sm text-muted">
-                        ✓ Saved and judged — see the check above
-                      </span>
-                    )}
+                )}
+                <fieldset className="space-y-2">
+                  <legend className="font-semibold">Running current</legend>
+                  <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+                    {PHASE_PAIRS.slice(0, phaseCount).map((pair, index) => (
+                      <NumberField
+                        key={pair}
+                        label={threePhase ? `L${index + 1}` : "Measured"}
+                        unit="A"
+                        registration={form.register(`runningAmps.${index}`)}
+                        error={errors.runningAmps?.[index]?.message}
+                      />
+                    ))}
+                    <NumberField
+                      label={target === "fan" ? "Nameplate FLA" : "Nameplate RLA"}
+                      unit="A"
+                      registration={form.register("ratedA")}
+                      error={errors.ratedA?.message}
+                      hint={ratedDefault ? `${ratedDefault} A on the unit if left blank` : undefined}
+                    />
                   </div>
-                </>
-              ),
-            }
-          : null
-      }
+                  <div className="space-y-2" data-testid="running-current-notices">
+                    {currentNotices.map((entry, index) => (
+                      <LiveNoticeLine key={index} notice={entry?.notice ?? null} label={entry?.label} />
+                    ))}
+                  </div>
+                </fieldset>
+              </>
+            )}
+
+            <TextField
+              label="Note"
+              error={messageAt(errors, "note")}
+              placeholder="e.g. contactor pitted, replaced"
+              {...form.register("note")}
+            />
+          </>
+        ),
+      }}
     />
   );
 }

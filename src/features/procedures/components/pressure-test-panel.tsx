@@ -1,6 +1,4 @@
 import { zodResolver } from "@hookform/resolvers/zod";
-import { formatTime } from "@shared/format/date-time.ts";
-import { Save } from "lucide-react";
 import { Controller, useForm } from "react-hook-form";
 import { z } from "zod";
 import { testPressureNotice } from "@shared/engine/index.ts";
@@ -10,8 +8,7 @@ import {
   PressureTestBodySchema,
   type PressureTestSection,
 } from "@shared/schemas/procedure-records.ts";
-import { Button } from "@/components/ui/button/button.tsx";
-import { FormAlert, SelectField, TextField } from "@/components/ui/field/field.tsx";
+import { SelectField, TextField } from "@/components/ui/field/field.tsx";
 import { useCreatePressureTest, usePressureTests } from "@/lib/api/procedures.ts";
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import {
@@ -28,16 +25,13 @@ import { useFormValues } from "@/hooks/use-form-values.ts";
 import { useProcedureSave } from "../hooks/use-procedure-save.ts";
 import { toConverted, toNumber } from "../utils/parse-number.ts";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
-import { ProcedureLayout } from "./procedure-layout.tsx";
+import { ProcedureLayout, type ProcedurePanelProps } from "./procedure-layout.tsx";
 import { PressureTestView } from "./pressure-test-view.tsx";
 import { LiveNoticeLine } from "./live-notice.tsx";
 
-interface PressureTestPanelProps {
-  visitId: string;
+interface PressureTestPanelProps extends ProcedurePanelProps {
   units: DisplayUnits;
   atmosphericKPa: number;
-  canWrite: boolean;
-  readOnlyNote?: string;
 }
 
 /** What the form holds, named as the body's fields; a rating or allowed drop still null was not typed over. */
@@ -75,7 +69,8 @@ function ratedFor(section: PressureTestSection, high: number | null, low: number
  * confirms, start and end of the hold with their temperatures; the server corrects the drop
  * for temperature (ideal gas) and judges it against the allowed drop.
  */
-export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, readOnlyNote }: PressureTestPanelProps) {
+export function PressureTestPanel({ units, atmosphericKPa, ...panel }: PressureTestPanelProps) {
+  const { visitId } = panel;
   const tests = usePressureTests(visitId);
   const create = useCreatePressureTest();
   const defaults = tests.data?.defaults;
@@ -145,136 +140,123 @@ export function PressureTestPanel({ visitId, units, atmosphericKPa, canWrite, re
 
   return (
     <ProcedureLayout
+      {...panel}
       caution="nitrogen"
-      visitId={visitId}
-      readOnlyNote={readOnlyNote}
+      kind="pressure-test"
       saved={{
-        headingId: "pressure-saved-heading",
         title: "Tests on this visit",
-        kind: "pressure-test",
-        canVoid: canWrite,
-        records: (tests.data?.pressureTests ?? []).map((test) => ({
-          id: test.id,
-          voided: test.voided,
-          what: `the pressure test of ${formatTime(test.takenAt)}`,
-          element: <PressureTestView test={test} units={units} atmosphericKPa={atmosphericKPa} />,
-        })),
+        records: tests.data?.pressureTests,
+        name: "the pressure test",
+        view: (test) => <PressureTestView test={test} units={units} atmosphericKPa={atmosphericKPa} />,
       }}
       loadError={tests.isError ? `The pressure tests could not be loaded: ${tests.error.message}` : undefined}
-      form={
-        canWrite
-          ? {
-              label: "New pressure test",
-              title: "New nitrogen pressure test",
-              onSubmit: () => void save.submit(),
-              children: (
-                <>
-                  <div className="grid gap-3 sm:grid-cols-2">
-                    <SelectField
-                      label="Part tested"
-                      // Another part has another rating: the nameplate's is offered again.
-                      {...form.register("section", { onChange: () => form.setValue("ratedKPa", null) })}
-                    >
-                      {PRESSURE_TEST_SECTIONS.map((value) => (
-                        <option key={value} value={value}>
-                          {PRESSURE_TEST_SECTION_LABELS[value]}
-                        </option>
-                      ))}
-                    </SelectField>
-                    <Controller
-                      control={form.control}
-                      name="ratedKPa"
-                      render={({ field }) => (
-                        <NumberField
-                          ref={field.ref}
-                          label="Rated pressure (lowest-rated component)"
-                          unit={pressureUnit}
-                          value={ratedText}
-                          onValueChange={field.onChange}
-                          onBlur={field.onBlur}
-                          error={errors.ratedKPa?.message}
-                          hint={
-                            ratedDefault !== null
-                              ? "From the nameplate: confirm it for the parts under test"
-                              : "Not on the nameplate record: enter it from the maker's data"
-                          }
-                        />
-                      )}
-                    />
-                  </div>
-                  <fieldset className="grid grid-cols-2 gap-3">
-                    <legend className="col-span-2 font-semibold">Start of the hold</legend>
-                    <NumberField
-                      label="Start pressure"
-                      unit={pressureUnit}
-                      registration={form.register("startGaugeKPa")}
-                      error={errors.startGaugeKPa?.message}
-                    />
-                    <NumberField
-                      label="Start temperature"
-                      unit={temperatureUnit}
-                      registration={form.register("startTempC")}
-                      error={errors.startTempC?.message}
-                      hint="Ambient or pipe"
-                    />
-                    <div className="col-span-2">
-                      <LiveNoticeLine notice={ratedNotice} testId="test-pressure-notice" />
-                    </div>
-                  </fieldset>
-                  <fieldset className="grid grid-cols-2 gap-3">
-                    <legend className="col-span-2 font-semibold">End of the hold</legend>
-                    <NumberField
-                      label="End pressure"
-                      unit={pressureUnit}
-                      registration={form.register("endGaugeKPa")}
-                      error={errors.endGaugeKPa?.message}
-                    />
-                    <NumberField
-                      label="End temperature"
-                      unit={temperatureUnit}
-                      registration={form.register("endTempC")}
-                      error={errors.endTempC?.message}
-                    />
-                  </fieldset>
-                  <div className="grid grid-cols-2 gap-3">
-                    <NumberField
-                      label="Hold time"
-                      unit="min"
-                      registration={form.register("holdMinutes")}
-                      error={errors.holdMinutes?.message}
-                    />
-                    <Controller
-                      control={form.control}
-                      name="allowedDropKPa"
-                      render={({ field }) => (
-                        <NumberField
-                          ref={field.ref}
-                          label="Allowed drop"
-                          unit={units.pressure}
-                          value={allowedText}
-                          onValueChange={field.onChange}
-                          onBlur={field.onBlur}
-                          error={errors.allowedDropKPa?.message}
-                          hint="After temperature correction; your company's figure"
-                        />
-                      )}
-                    />
-                  </div>
-                  <TextField
-                    label="Note"
-                    error={errors.note?.message}
-                    placeholder="e.g. compressor and LP switch isolated"
-                    {...form.register("note")}
+      form={{
+        label: "New pressure test",
+        title: "New nitrogen pressure test",
+        save,
+        saveLabel: "Save pressure test",
+        children: (
+          <>
+            <div className="grid gap-3 sm:grid-cols-2">
+              <SelectField
+                label="Part tested"
+                // Another part has another rating: the nameplate's is offered again.
+                {...form.register("section", { onChange: () => form.setValue("ratedKPa", null) })}
+              >
+                {PRESSURE_TEST_SECTIONS.map((value) => (
+                  <option key={value} value={value}>
+                    {PRESSURE_TEST_SECTION_LABELS[value]}
+                  </option>
+                ))}
+              </SelectField>
+              <Controller
+                control={form.control}
+                name="ratedKPa"
+                render={({ field }) => (
+                  <NumberField
+                    ref={field.ref}
+                    label="Rated pressure (lowest-rated component)"
+                    unit={pressureUnit}
+                    value={ratedText}
+                    onValueChange={field.onChange}
+                    onBlur={field.onBlur}
+                    error={errors.ratedKPa?.message}
+                    hint={
+                      ratedDefault !== null
+                        ? "From the nameplate: confirm it for the parts under test"
+                        : "Not on the nameplate record: enter it from the maker's data"
+                    }
                   />
-                  {save.formError && <FormAlert>{save.formError}</FormAlert>}
-                  <Button type="submit" size="lg" disabled={save.pending}>
-                    <Save aria-hidden className="size-5" /> {save.pending ? "Saving…" : "Save pressure test"}
-                  </Button>
-                </>
-              ),
-            }
-          : null
-      }
+                )}
+              />
+            </div>
+            <fieldset className="grid grid-cols-2 gap-3">
+              <legend className="col-span-2 font-semibold">Start of the hold</legend>
+              <NumberField
+                label="Start pressure"
+                unit={pressureUnit}
+                registration={form.register("startGaugeKPa")}
+                error={errors.startGaugeKPa?.message}
+              />
+              <NumberField
+                label="Start temperature"
+                unit={temperatureUnit}
+                registration={form.register("startTempC")}
+                error={errors.startTempC?.message}
+                hint="Ambient or pipe"
+              />
+              <div className="col-span-2">
+                <LiveNoticeLine notice={ratedNotice} testId="test-pressure-notice" />
+              </div>
+            </fieldset>
+            <fieldset className="grid grid-cols-2 gap-3">
+              <legend className="col-span-2 font-semibold">End of the hold</legend>
+              <NumberField
+                label="End pressure"
+                unit={pressureUnit}
+                registration={form.register("endGaugeKPa")}
+                error={errors.endGaugeKPa?.message}
+              />
+              <NumberField
+                label="End temperature"
+                unit={temperatureUnit}
+                registration={form.register("endTempC")}
+                error={errors.endTempC?.message}
+              />
+            </fieldset>
+            <div className="grid grid-cols-2 gap-3">
+              <NumberField
+                label="Hold time"
+                unit="min"
+                registration={form.register("holdMinutes")}
+                error={errors.holdMinutes?.message}
+              />
+              <Controller
+                control={form.control}
+                name="allowedDropKPa"
+                render={({ field }) => (
+                  <NumberField
+                    ref={field.ref}
+                    label="Allowed drop"
+                    unit={units.pressure}
+                    value={allowedText}
+                    onValueChange={field.onChange}
+                    onBlur={field.onBlur}
+                    error={errors.allowedDropKPa?.message}
+                    hint="After temperature correction; your company's figure"
+                  />
+                )}
+              />
+            </div>
+            <TextField
+              label="Note"
+              error={errors.note?.message}
+              placeholder="e.g. compressor and LP switch isolated"
+              {...form.register("note")}
+            />
+          </>
+        ),
+      }}
     />
   );
 }

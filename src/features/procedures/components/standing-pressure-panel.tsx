@@ -1,14 +1,10 @@
 import { zodResolver } from "@hookform/resolvers/zod";
-import { formatTime } from "@shared/format/date-time.ts";
-import { Save } from "lucide-react";
 import { Controller, useForm, type Path } from "react-hook-form";
 import { z } from "zod";
 import { standingPressureOutcome } from "@shared/engine/index.ts";
 import { StandingPressureBodySchema } from "@shared/schemas/procedure-records.ts";
-import { Button } from "@/components/ui/button/button.tsx";
 import { FormAlert, TextField } from "@/components/ui/field/field.tsx";
 import { NumberField } from "@/components/ui/field/number-field.tsx";
-import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { useCreateStandingPressureCheck, useStandingPressureChecks } from "@/lib/api/procedures.ts";
 import { procedureRecordsPath } from "@/lib/api/procedure-paths.ts";
 import {
@@ -21,7 +17,7 @@ import {
 import { useFormValues } from "@/hooks/use-form-values.ts";
 import { useProcedureSave } from "../hooks/use-procedure-save.ts";
 import { toConverted } from "../utils/parse-number.ts";
-import { ProcedureLayout } from "./procedure-layout.tsx";
+import { CircuitChoice, ProcedureLayout, type ProcedurePanelProps } from "./procedure-layout.tsx";
 import {
   StandingPressureFigures,
   StandingPressureView,
@@ -30,8 +26,7 @@ import {
 } from "./standing-pressure-view.tsx";
 import { VerdictPanel } from "./verdict-badge.tsx";
 
-interface StandingPressurePanelProps {
-  visitId: string;
+interface StandingPressurePanelProps extends ProcedurePanelProps {
   /** The unit's refrigerant: the server judges with the same one, so the preview matches what is stored. */
   refrigerant: string;
   isBlend: boolean;
@@ -39,8 +34,6 @@ interface StandingPressurePanelProps {
   units: DisplayUnits;
   /** The site's atmosphere, kPa absolute, as the server uses it. */
   atmosphericKPa: number;
-  canWrite: boolean;
-  readOnlyNote?: string;
 }
 
 /** What the form holds, named as the body's fields. */
@@ -57,15 +50,14 @@ interface TypedStandingPressure {
  * previewed in the browser with the engine the server runs, and stored as the server judges it.
  */
 export function StandingPressurePanel({
-  visitId,
   refrigerant,
   isBlend,
   circuits,
   units,
   atmosphericKPa,
-  canWrite,
-  readOnlyNote,
+  ...panel
 }: StandingPressurePanelProps) {
+  const { visitId } = panel;
   const checks = useStandingPressureChecks(visitId);
   const create = useCreateStandingPressureCheck();
   /** The body POST …/standing-pressure-checks takes: what was typed, in the units the server keeps. */
@@ -117,116 +109,97 @@ export function StandingPressurePanel({
 
   return (
     <ProcedureLayout
+      {...panel}
       caution="pressure"
-      visitId={visitId}
-      readOnlyNote={readOnlyNote}
+      kind="standing-pressure"
       saved={{
-        headingId: "standing-saved-heading",
         title: "Standing-pressure checks on this visit",
-        kind: "standing-pressure",
-        canVoid: canWrite,
-        records: (checks.data?.standingPressureChecks ?? []).map((check) => ({
-          id: check.id,
-          voided: check.voided,
-          what: `the standing-pressure check of ${formatTime(check.takenAt)}`,
-          element: <StandingPressureView check={check} units={units} />,
-        })),
+        records: checks.data?.standingPressureChecks,
+        name: "the standing-pressure check",
+        view: (check) => <StandingPressureView check={check} units={units} />,
       }}
       loadError={
         checks.isError ? `The standing-pressure checks could not be loaded: ${checks.error.message}` : undefined
       }
-      form={
-        canWrite
-          ? {
-              label: "New standing-pressure check",
-              title: "New standing-pressure check",
-              onSubmit: () => void save.submit(),
-              children: (
-                <>
-                  <div className="space-y-1 text-sm">
-                    <p className="font-medium">How to read it</p>
-                    <ol className="list-decimal space-y-1 pl-6">
-                      <li>Stop the unit and leave the compressor off.</li>
-                      <li>
-                        Run the condenser fan on its own until the air leaving the coil is the same temperature as the
-                        air entering it.
-                      </li>
-                      <li>
-                        Measure the condenser's air temperature in the shade (the outdoor air for an air-cooled unit),
-                        then read the standing pressure on the gauge.
-                      </li>
-                    </ol>
-                    <p className="text-muted">
-                      Judged against {refrigerant} at the site's atmosphere. Air or nitrogen in the condenser stands
-                      above the saturation pressure of that temperature.
-                    </p>
-                  </div>
-                  {circuits.length > 1 && (
-                    <Controller
-                      control={form.control}
-                      name="circuit"
-                      render={({ field }) => (
-                        <Segmented<string>
-                          label="Circuit"
-                          value={field.value}
-                          onChange={field.onChange}
-                          options={circuits.map((number) => ({ value: String(number), label: `Circuit ${number}` }))}
-                        />
-                      )}
-                    />
-                  )}
-                  <div className="grid grid-cols-2 gap-3">
-                    <NumberField
-                      label="Standing pressure"
-                      unit={GAUGE_LABEL[units.pressure]}
-                      registration={form.register("standingGaugeKPa")}
-                      error={
-                        errors.standingGaugeKPa?.message ??
-                        (previewProblem?.field === "standingGaugeKPa" ? previewProblem.message : undefined)
-                      }
-                      hint="Gauge, unit stopped"
-                    />
-                    <NumberField
-                      label="Equalised temperature"
-                      unit={TEMPERATURE_LABEL[units.temperature]}
-                      registration={form.register("equalisedTempC")}
-                      error={
-                        errors.equalisedTempC?.message ??
-                        (previewProblem?.field === "equalisedTempC" ? previewProblem.message : undefined)
-                      }
-                      hint="Condenser air, in the shade"
-                    />
-                  </div>
-                  {isBlend && <p className="text-sm text-muted">{ZEOTROPE_NOTE}</p>}
-                  {preview && "result" in preview && (
-                    <div className="space-y-2" data-testid="standing-preview">
-                      <VerdictPanel
-                        title="Preview"
-                        verdict={preview.result.verdict}
-                        word={STANDING_PRESSURE_WORDS[preview.result.verdict]}
-                        reason={preview.result.reason}
-                        source={preview.result.source}
-                      />
-                      <StandingPressureFigures result={preview.result} units={units} atmosphericKPa={atmosphericKPa} />
-                    </div>
-                  )}
-                  {previewProblem?.field === "refrigerant" && <FormAlert>{previewProblem.message}</FormAlert>}
-                  <TextField
-                    label="Note"
-                    error={errors.note?.message}
-                    placeholder="e.g. fan run 10 min, air off = air on"
-                    {...form.register("note")}
-                  />
-                  {errors.circuit && <p className="text-sm font-medium text-fault">⚠ {errors.circuit.message}</p>}
-                  {save.formError && <FormAlert>{save.formError}</FormAlert>}
-                  <Button type="submit" size="lg" disabled={save.pending}>
-                    <Save aria-hidden className="size-5" /> {save.pending ? "Saving…" : "Save standing-pressure check"}
-                  </Button>
-                </>
-              ),
-            }
-          : null
-      }
+      form={{
+        label: "New standing-pressure check",
+        save,
+        saveLabel: "Save standing-pressure check",
+        children: (
+          <>
+            <div className="space-y-1 text-sm">
+              <p className="font-medium">How to read it</p>
+              <ol className="list-decimal space-y-1 pl-6">
+                <li>Stop the unit and leave the compressor off.</li>
+                <li>
+                  Run the condenser fan on its own until the air leaving the coil is the same temperature as the air
+                  entering it.
+                </li>
+                <li>
+                  Measure the condenser's air temperature in the shade (the outdoor air for an air-cooled unit), then
+                  read the standing pressure on the gauge.
+                </li>
+              </ol>
+              <p className="text-muted">
+                Judged against {refrigerant} at the site's atmosphere. Air or nitrogen in the condenser stands above the
+                saturation pressure of that temperature.
+              </p>
+            </div>
+            {circuits.length > 1 && (
+              <Controller
+                control={form.control}
+                name="circuit"
+                render={({ field }) => (
+                  <CircuitChoice circuits={circuits} value={field.value} onChange={field.onChange} />
+                )}
+              />
+            )}
+            <div className="grid grid-cols-2 gap-3">
+              <NumberField
+                label="Standing pressure"
+                unit={GAUGE_LABEL[units.pressure]}
+                registration={form.register("standingGaugeKPa")}
+                error={
+                  errors.standingGaugeKPa?.message ??
+                  (previewProblem?.field === "standingGaugeKPa" ? previewProblem.message : undefined)
+                }
+                hint="Gauge, unit stopped"
+              />
+              <NumberField
+                label="Equalised temperature"
+                unit={TEMPERATURE_LABEL[units.temperature]}
+                registration={form.register("equalisedTempC")}
+                error={
+                  errors.equalisedTempC?.message ??
+                  (previewProblem?.field === "equalisedTempC" ? previewProblem.message : undefined)
+                }
+                hint="Condenser air, in the shade"
+              />
+            </div>
+            {isBlend && <p className="text-sm text-muted">{ZEOTROPE_NOTE}</p>}
+            {preview && "result" in preview && (
+              <div className="space-y-2" data-testid="standing-preview">
+                <VerdictPanel
+                  title="Preview"
+                  verdict={preview.result.verdict}
+                  word={STANDING_PRESSURE_WORDS[preview.result.verdict]}
+                  reason={preview.result.reason}
+                  source={preview.result.source}
+                />
+                <StandingPressureFigures result={preview.result} units={units} atmosphericKPa={atmosphericKPa} />
+              </div>
+            )}
+            {previewProblem?.field === "refrigerant" && <FormAlert>{previewProblem.message}</FormAlert>}
+            <TextField
+              label="Note"
+              error={errors.note?.message}
+              placeholder="e.g. fan run 10 min, air off = air on"
+              {...form.register("note")}
+            />
+            {errors.circuit && <p className="text-sm font-medium text-fault">⚠ {errors.circuit.message}</p>}
+          </>
+        ),
+      }}
     />
   );
 }

@@ -62,7 +62,7 @@ interface OwnSaveOptions<Typed extends FieldValues, Body, Item extends Sent> ext
   send: (record: Item) => Promise<unknown>;
 }
 
-interface ProcedureSave {
+export interface ProcedureSave {
   /** For the form's onSubmit. */
   submit: () => Promise<void>;
   /** The message above the button. */
