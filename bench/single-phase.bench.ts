@@ -17,6 +17,7 @@ import { loadSinglePhaseTable } from "../shared/property-tables/load-single-phas
 import { referencePackExists } from "../scripts/eos/index.ts";
 import { createSinglePhaseSolver, type SinglePhaseSolver } from "../scripts/single-phase/index.ts";
 import { resolveSinglePhaseTable } from "../shared/engine/properties/resolve-single-phase-table.ts";
+import { R410A_FIELD_READING } from "../tests/fixtures/field-reading.ts";
 import { nanosecondsPerCall, pseudoRandomSequence, registerBench, reportLookup } from "./bench-registry.ts";
 
 const POINTS = 4096;
@@ -107,20 +108,7 @@ registerBench("single-phase states and the measured cycle", async () => {
     reportLookup(`singlePhaseState, ${group}`, stateNs, directStateNs, 48);
     reportLookup(`singlePhaseStateFromEnthalpy, ${group}`, inverseNs, directInverseNs, 48);
   }
-  const input = {
-    refrigerant: "R410A",
-    meteringDevice: "txv" as const,
-    suctionPressureKPa: 820,
-    suctionLineTempC: 12,
-    liquidPressureKPa: 2600,
-    liquidLineTempC: 38,
-    dischargeLineTempC: 75,
-    compressorAmps: 10,
-    returnAirDryBulbC: 26.7,
-    returnAirWetBulbC: 19.4,
-    supplyAirDryBulbC: 14,
-    atmosphericPressureKPa: STANDARD_ATMOSPHERE_KPA,
-  };
+  const input = { ...R410A_FIELD_READING, atmosphericPressureKPa: STANDARD_ATMOSPHERE_KPA };
   const cycleNs = nanosecondsPerCall(
     (i) => measuredCycle({ ...input, suctionLineTempC: 10 + (i & 7) }).refrigeratingEffectKJPerKg ?? 0,
     50_000,

@@ -8,37 +8,13 @@
  * stored through the app's own CSV import (two files of 5 000, one reading a second).
  * Rebuild: `npm run bench` (this module builds it every run).
  */
-import { createServer } from "node:http";
-import type { AddressInfo } from "node:net";
-import { createApp } from "../server/app.ts";
-import { createLocalPhotoStore } from "../server/photos/local-photo-store.ts";
-import { openDatabase } from "../server/db/client.ts";
-import { demoSite } from "../server/db/seed/demo-scenario.ts";
-import { seedDemoData } from "../server/db/seed/seed-demo.ts";
-import { readEnv } from "../server/env.ts";
-import { closeCsvImportPool } from "../server/import/csv-import-pool.ts";
-import { createLogger } from "../server/logger.ts";
-import { createMailer } from "../server/mail/mailer.ts";
-import { atmosphericPressureAtAltitude, saturationPressure } from "../shared/engine/index.ts";
 import { registerBench } from "./bench-registry.ts";
+import { createVisit, demoGauge, importForm, loggerFile, startDemoApp } from "./demo-app.ts";
 
 const FILES = 2;
 const ROWS_PER_FILE = 5000;
 const SAMPLES = 20;
 const POLL_TARGET_MS = 100;
-
-const atmosphere = atmosphericPressureAtAltitude(demoSite.altitudeM);
-const gauge = (temperatureC: number, point: "bubble" | "dew") =>
-  (saturationPressure("R407C", temperatureC, point) - atmosphere).toFixed(1);
-
-function loggerFile(offsetSeconds: number): string {
-  const lines = ["Time,Suction pressure kPa,Suction temp C,Liquid pressure kPa,Liquid temp C,Outdoor C"];
-  for (let second = 0; second < ROWS_PER_FILE; second++) {
-    const at = new Date(Date.UTC(2026, 10, 30, 20, 0, offsetSeconds + second)).toISOString();
-    lines.push(`${at},${gauge(6, "dew")},${(12 + (second % 50) / 100).toFixed(2)},${gauge(42, "bubble")},37,31`);
-  }
-  return lines.join("\n");
-}
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)] ?? NaN;
 const p95 = (values: number[]) =>
@@ -47,44 +23,16 @@ const ms = (value: number) => `${value.toFixed(1).padStart(7)} ms`;
 const kb = (bytes: number) => `${(bytes / 1024).toFixed(1).padStart(8)} KB`;
 
 registerBench("Open visit refresh (10 000 readings): whole, 304, delta", async () => {
-  const env = readEnv({ NODE_ENV: "test", DATA_DIR: "memory://", LOG_LEVEL: "silent", DEMO_DATA: "false" });
-  const database = await openDatabase(env.DATA_DIR);
-  await seedDemoData(database.db);
-  const logger = createLogger(env);
-  const mailer = createMailer({ env, db: database.db, logger });
-  const server = createServer(
-    createApp({ db: database.db, env, logger, mailer, photoStore: createLocalPhotoStore(env.UPLOADS_DIR) }),
-  );
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api`;
+  const app = await startDemoApp();
+  const { base, cookie } = app;
   try {
-    const signIn = await fetch(`${base}/auth/sign-in`, {
-      method: "POST",
-      headers: { "Content-Type": "application/json" },
-      body: JSON.stringify({ email: "tech@bellbird.example", password: "bellbird-demo-2026" }),
-    });
-    const cookie = signIn.headers
-      .getSetCookie()
-      .map((header) => header.split(";")[0])
-      .join("; ");
     const units = (await (await fetch(`${base}/equipment`, { headers: { cookie } })).json()) as {
       equipment: { id: string; refrigerant: string }[];
     };
     const rooftop = units.equipment.find((unit) => unit.refrigerant === "R407C")!;
-    const created = (await (
-      await fetch(`${base}/visits`, {
-        method: "POST",
-        headers: { cookie, "Content-Type": "application/json" },
-        body: JSON.stringify({ equipmentId: rooftop.id, reason: "Week of logger data" }),
-      })
-    ).json()) as { visit: { id: string } };
-    const visitUrl = `${base}/visits/${created.visit.id}`;
+    const visitUrl = `${base}/visits/${await createVisit(app, rooftop.id, "Week of logger data")}`;
     for (let file = 0; file < FILES; file++) {
-      const form = new FormData();
-      form.append("circuit", "1");
-      form.append("dayStart", "2026-12-01T00:00:00+11:00");
-      form.append("mode", "all");
-      form.append("file", new Blob([loggerFile(file * ROWS_PER_FILE)], { type: "text/csv" }), "week.csv");
+      const form = importForm(loggerFile(ROWS_PER_FILE, file * ROWS_PER_FILE));
       const stored = await fetch(`${visitUrl}/readings/import`, { method: "POST", headers: { cookie }, body: form });
       if (stored.status !== 201) throw new Error(`import answered ${stored.status}`);
     }
@@ -134,9 +82,9 @@ registerBench("Open visit refresh (10 000 readings): whole, 304, delta", async (
       headers: { cookie, "Content-Type": "application/json" },
       body: JSON.stringify({
         circuit: 1,
-        suctionPressureKPa: Number(gauge(6, "dew")),
+        suctionPressureKPa: Number(demoGauge(6, "dew")),
         suctionLineTempC: 12,
-        liquidPressureKPa: Number(gauge(42, "bubble")),
+        liquidPressureKPa: Number(demoGauge(42, "bubble")),
         liquidLineTempC: 37,
       }),
     });
@@ -145,9 +93,6 @@ registerBench("Open visit refresh (10 000 readings): whole, 304, delta", async (
       timed(`${visitUrl}?since=${encodeURIComponent(visit.revision)}`, { "If-None-Match": whole.etag! }),
     );
   } finally {
-    await new Promise<void>((resolve) => server.close(() => resolve()));
-    await closeCsvImportPool();
-    await mailer.close();
-    await database.close();
+    await app.close();
   }
 });

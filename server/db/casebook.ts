@@ -219,13 +219,17 @@ async function caseWriteOutcome(
 const caseAt = (organisationId: string, id: string, version: number) =>
   and(eq(casebookCases.organisationId, organisationId), eq(casebookCases.id, id), eq(casebookCases.version, version));
 
-/** Changes an organisation case if it is still at `version`. */
-export async function updateCase(
+/**
+ * Sets columns of an organisation case if it is still at `version`, moving it to the next version.
+ * Editing and publishing are both this write, so both bump the version the same way and answer
+ * the same outcomes.
+ */
+async function changeCaseAt(
   db: Database,
   organisationId: string,
   id: string,
-  values: CaseDraft & { expected: CaseExpected },
   version: number,
+  values: Partial<typeof casebookCases.$inferInsert>,
 ): Promise<CaseWrite> {
   const rows = await db
     .update(casebookCases)
@@ -235,23 +239,24 @@ export async function updateCase(
   return caseWriteOutcome(db, organisationId, id, rows.length > 0);
 }
 
+/** Changes an organisation case if it is still at `version`. */
+export async function updateCase(
+  db: Database,
+  organisationId: string,
+  id: string,
+  values: CaseDraft & { expected: CaseExpected },
+  version: number,
+): Promise<CaseWrite> {
+  return changeCaseAt(db, organisationId, id, version, values);
+}
+
 export async function publishCase(
   db: Database,
   organisationId: string,
   id: string,
   version: number,
 ): Promise<CaseWrite> {
-  const rows = await db
-    .update(casebookCases)
-    .set({
-      status: "published",
-      publishedAt: new Date(),
-      version: sql`${casebookCases.version} + 1`,
-      updatedAt: new Date(),
-    })
-    .where(caseAt(organisationId, id, version))
-    .returning({ id: casebookCases.id });
-  return caseWriteOutcome(db, organisationId, id, rows.length > 0);
+  return changeCaseAt(db, organisationId, id, version, { status: "published", publishedAt: new Date() });
 }
 
 export async function deleteCase(

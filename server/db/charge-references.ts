@@ -31,6 +31,19 @@ function valuesOf(row: ReferenceRow): ChargeReference {
   };
 }
 
+/**
+ * The circuit's standing reference point: not cleared. Reading it and clearing it must pick the
+ * same row, so both use this.
+ */
+function standingReferenceOf(organisationId: string, equipmentId: string, circuit: number) {
+  return and(
+    eq(chargeReferences.organisationId, organisationId),
+    eq(chargeReferences.equipmentId, equipmentId),
+    eq(chargeReferences.circuit, circuit),
+    isNull(chargeReferences.voidedAt),
+  );
+}
+
 /** The standing reference point of one circuit, as the diagnosis takes it, or null. */
 export async function standingChargeReference(
   db: Database,
@@ -41,14 +54,7 @@ export async function standingChargeReference(
   const [row] = await db
     .select()
     .from(chargeReferences)
-    .where(
-      and(
-        eq(chargeReferences.organisationId, organisationId),
-        eq(chargeReferences.equipmentId, equipmentId),
-        eq(chargeReferences.circuit, circuit),
-        isNull(chargeReferences.voidedAt),
-      ),
-    );
+    .where(standingReferenceOf(organisationId, equipmentId, circuit));
   return row ? valuesOf(row) : null;
 }
 
@@ -243,14 +249,7 @@ export async function clearChargeReference(
   const cleared = await db
     .update(chargeReferences)
     .set({ voidedAt: values.at ?? new Date(), voidedBy: values.clearedBy, voidReason: values.reason })
-    .where(
-      and(
-        eq(chargeReferences.organisationId, organisationId),
-        eq(chargeReferences.equipmentId, values.equipmentId),
-        eq(chargeReferences.circuit, values.circuit),
-        isNull(chargeReferences.voidedAt),
-      ),
-    )
+    .where(standingReferenceOf(organisationId, values.equipmentId, values.circuit))
     .returning({ id: chargeReferences.id });
   return cleared.length > 0;
 }

@@ -1,5 +1,5 @@
 import { expect, test } from "@playwright/test";
-import { signIn } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 /**
  * One charge entry, one number, on a phone: "refrigerant added 0.45 kg" logged on the run log
@@ -15,16 +15,8 @@ test.describe("charge entry", () => {
   }) => {
     // Three pages and a void on one phone-sized session: more than the default budget on a busy machine.
     test.slow();
-    await page.goto("/equipment");
-    await signIn(page, "tech@bellbird.example");
-    await page
-      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-      .first()
-      .click();
-    await page.getByLabel("Reason for the visit").fill("Short of charge on circuit 1");
-    await page.getByRole("button", { name: "Start the visit" }).click();
     // The first visit page of a fresh server loads its property tables: wait for it, however slow the machine.
-    await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/, { timeout: 30_000 });
+    await signInAndStartVisit(page, "Short of charge on circuit 1", { wait: { timeout: 30_000 } });
     const visitUrl = page.url();
 
     const form = page.getByRole("form", { name: "Log an adjustment" });

@@ -1,5 +1,6 @@
 import { expect, test } from "@playwright/test";
 import { signIn, signOut } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 /**
  * Records are corrected, never lost (issue 13): a mistyped nitrogen test is voided with a
@@ -8,15 +9,7 @@ import { signIn, signOut } from "./sign-in.ts";
  */
 test.describe("corrections", () => {
   test("a technician voids a mistyped pressure test; a senior reopens the submitted visit", async ({ page }) => {
-    await page.goto("/equipment");
-    await signIn(page, "tech@bellbird.example");
-    await page
-      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-      .first()
-      .click();
-    await page.getByLabel("Reason for the visit").fill("Nitrogen test after brazing the suction line");
-    await page.getByRole("button", { name: "Start the visit" }).click();
-    await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+    await signInAndStartVisit(page, "Nitrogen test after brazing the suction line");
     const visitUrl = page.url();
 
     await page.getByRole("radio", { name: "Pressure test" }).click();

@@ -1,5 +1,5 @@
 import { expect, test } from "@playwright/test";
-import { signIn } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 /**
  * R407C gauge pressures (kPa) at the demo clinic (100.308 kPa at 85 m, ISO 2533): dew 6 °C and
@@ -15,17 +15,7 @@ const LOG = [
 ].join("\n");
 
 test("a logged series is mapped in the browser and sent once, with its mapping, to import", async ({ page }) => {
-  await page.goto("/equipment");
-  await signIn(page, "tech@bellbird.example");
-  await page
-    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-    .first()
-    .click();
-  await page.getByLabel("Reason for the visit").fill("Logger data from the weekend");
-  await page.getByRole("button", { name: "Start the visit" }).click();
-  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
-
-  const visitId = new URL(page.url()).pathname.split("/").at(-1)!;
+  const visitId = await signInAndStartVisit(page, "Logger data from the weekend");
   const imports: string[] = [];
   page.on("request", (request) => {
     if (request.url().endsWith("/readings/import")) imports.push(request.method());

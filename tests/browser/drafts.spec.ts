@@ -1,5 +1,5 @@
 import { expect, test, type Page } from "@playwright/test";
-import { signIn } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 /**
  * Nothing typed at the unit is lost: values not yet saved survive a switch of section and a
@@ -16,7 +16,7 @@ for (const size of [
     test("survive a section switch, a circuit switch and a reload; sign-out asks before discarding them", async ({
       page,
     }) => {
-      await startVisit(page, "Drafts at the unit");
+      await signInAndStartVisit(page, "Drafts at the unit");
 
       await page.getByLabel("Suction pressure", { exact: true }).fill("431");
       await page.getByLabel("Suction line temperature", { exact: true }).fill("12.5");
@@ -130,21 +130,10 @@ test("a failure's message shows even when the toast code cannot be fetched", asy
 });
 
 /** Signs the technician in and starts a visit on RTU-1. */
-async function startVisit(page: Page, reason: string) {
-  await page.goto("/equipment");
-  await signIn(page, "tech@bellbird.example");
-  await page
-    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-    .first()
-    .click();
-  await page.getByLabel("Reason for the visit").fill(reason);
-  await page.getByRole("button", { name: "Start the visit" }).click();
-  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
-}
 
 /** Starts a visit on RTU-1 and types a whole reading, not saved yet. */
 async function startVisitAndTypeReading(page: Page, reason: string) {
-  await startVisit(page, reason);
+  await signInAndStartVisit(page, reason);
   // R407C: 465 kPa gauge ≈ 6 °C dew, 1736 kPa ≈ 42 °C bubble at the site (see run-log.spec.ts).
   await page.getByLabel("Suction pressure", { exact: true }).fill("465");
   await page.getByLabel("Suction line temperature", { exact: true }).fill("12");

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
 import { DEMO_PASSWORD, signIn, signOut } from "./sign-in.ts";
+import { RTU_1, startVisitOn } from "./start-visit.ts";
 import { TINY_PNG } from "./tiny-png.ts";
 
 /**
@@ -44,9 +45,7 @@ function keptQueries(page: Page): Promise<{ key: string; data: unknown }[]> {
 const keptQueryKeys = async (page: Page) => (await keptQueries(page)).map((query) => query.key);
 
 test("the shell and the tables of the company's refrigerants open with no network", async ({ page, context }) => {
-  await page.goto("/");
-  await signIn(page, "tech@bellbird.example");
-  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  await signInOnToday(page);
   expect(await page.evaluate(async () => Boolean((await navigator.serviceWorker.ready).active))).toBe(true);
 
   // Both tables of each refrigerant: saturation (the run log's figures) and single phase (the cycle).
@@ -87,10 +86,8 @@ test("a visit of the day opens with no network, and the finding works out as val
   page,
   context,
 }) => {
-  await page.goto("/");
-  await signIn(page, "tech@bellbird.example");
-  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
-  const visitId = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Offline check on the roof");
+  await signInOnToday(page);
+  const visitId = await startVisitOn(page, RTU_1, "Offline check on the roof");
   await page.getByRole("link", { name: "Today" }).first().click();
   await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
 
@@ -132,9 +129,7 @@ test("a visit of the day opens with no network, and the finding works out as val
 });
 
 test("signing out deletes the data kept on the device; the next person keeps only their own", async ({ page }) => {
-  await page.goto("/");
-  await signIn(page, "tech@bellbird.example");
-  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  await signInOnToday(page);
   await expect
     .poll(async () => (await keptQueryKeys(page)).some((key) => key.startsWith('["visits","detail"')), {
       timeout: 30_000,
@@ -158,14 +153,20 @@ test("signing out deletes the data kept on the device; the next person keeps onl
     .toBe("senior@bellbird.example");
 });
 
-/** Starts a visit on the named unit (online) and returns its id. */
-async function startVisitOn(page: Page, unit: RegExp, reason: string): Promise<string> {
-  await page.goto("/equipment");
-  await page.getByRole("link", { name: unit }).first().click();
-  await page.getByLabel("Reason for the visit").fill(reason);
-  await page.getByRole("button", { name: "Start the visit" }).click();
-  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
-  return new URL(page.url()).pathname.split("/").pop()!;
+/** Signs the demo technician in from the app's start, Today, whose visits the app keeps on the device. */
+async function signInOnToday(page: Page) {
+  await page.goto("/");
+  await signIn(page, "tech@bellbird.example");
+  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+}
+
+/** Waits until the visit's evacuations are kept on the device too, so one can go on offline. */
+async function evacuationsKeptForOffline(page: Page, visitId: string) {
+  await expect
+    .poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["procedures", "evacuations", visitId])), {
+      timeout: 30_000,
+    })
+    .toBe(true);
 }
 
 /** Waits until the visit, with what its screen needs, is kept on the device. */
@@ -217,20 +218,14 @@ test("readings, an adjustment, an evacuation sample and a photo saved with no ne
   page,
   context,
 }) => {
-  await page.goto("/");
-  await signIn(page, "tech@bellbird.example");
-  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
-  const visitId = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Readings kept while offline");
+  await signInOnToday(page);
+  const visitId = await startVisitOn(page, RTU_1, "Readings kept while offline");
   // An evacuation begun with signal takes its samples offline.
   await page.getByRole("radio", { name: "Evacuation" }).click();
   await page.getByRole("button", { name: "Start the evacuation" }).click();
   await expect(page.getByText("Pulling down")).toBeVisible();
   await keptForOffline(page, visitId);
-  await expect
-    .poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["procedures", "evacuations", visitId])), {
-      timeout: 30_000,
-    })
-    .toBe(true);
+  await evacuationsKeptForOffline(page, visitId);
 
   await context.setOffline(true);
   await page.goto(`/visits/${visitId}`);
@@ -303,10 +298,8 @@ test("an entry the server refuses on arrival stays on the device with the reason
   playwright,
   baseURL,
 }) => {
-  await page.goto("/");
-  await signIn(page, "tech@bellbird.example");
-  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
-  const stays = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Stays open while offline");
+  await signInOnToday(page);
+  const stays = await startVisitOn(page, RTU_1, "Stays open while offline");
   // On the split, not RTU-1: other specs read the demo's RTU-1 visit awaiting review, and this
   // one goes for review too. R32 near 5 °C evaporating and 44 °C condensing (memory, round figures).
   const closes = await startVisitOn(page, /Server cupboard wall split/, "Submitted meanwhile");
@@ -353,9 +346,7 @@ test("a comment, a refrigerant movement and a void wait on the device too; when 
   playwright,
   baseURL,
 }) => {
-  await page.goto("/");
-  await signIn(page, "tech@bellbird.example");
-  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
+  await signInOnToday(page);
   // On the cool room, with a cylinder of its own: other specs count the rooftop unit's register
   // lines and the demo cylinders' contents.
   const cylinder = await page.request.post("/api/cylinders", {
@@ -475,18 +466,12 @@ test("an evacuation started with no network takes its readings on the device, ju
   page,
   context,
 }) => {
-  await page.goto("/");
-  await signIn(page, "tech@bellbird.example");
-  await expect(page.getByRole("heading", { name: "Today" })).toBeVisible();
-  const visitId = await startVisitOn(page, /RTU-1 packaged rooftop unit/, "Evacuation begun offline");
+  await signInOnToday(page);
+  const visitId = await startVisitOn(page, RTU_1, "Evacuation begun offline");
   await page.goto(`/visits/${visitId}?section=evacuation`);
   await expect(page.getByRole("button", { name: "Start the evacuation" })).toBeVisible();
   await keptForOffline(page, visitId);
-  await expect
-    .poll(async () => (await keptQueryKeys(page)).includes(JSON.stringify(["procedures", "evacuations", visitId])), {
-      timeout: 30_000,
-    })
-    .toBe(true);
+  await evacuationsKeptForOffline(page, visitId);
 
   await context.setOffline(true);
   await page.goto(`/visits/${visitId}?section=evacuation`);

@@ -1,5 +1,6 @@
 import { expect, test } from "@playwright/test";
 import { signIn } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 // At the unit, on a phone: checks made while typing, before anything is saved.
 test.use({ viewport: { width: 390, height: 844 } });
@@ -8,16 +9,8 @@ test.describe("procedures on a phone, checked while typing", () => {
   test("electrical check: a winding box shows 12.45 whole, a corrected error clears, a high current is flagged as typed", async ({
     page,
   }) => {
-    await page.goto("/equipment");
-    await signIn(page, "tech@bellbird.example");
-    await page
-      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-      .first()
-      .click();
-    await page.getByLabel("Reason for the visit").fill("Compressor running hot");
-    await page.getByRole("button", { name: "Start the visit" }).click();
     // The visit page loads lazily; on a busy machine that can take longer than the default wait.
-    await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/, { timeout: 30_000 });
+    await signInAndStartVisit(page, "Compressor running hot", { wait: { timeout: 30_000 } });
     await page.getByRole("radio", { name: "Electrical" }).click();
 
     // Two-decimal winding readings are common on a low-resistance ohmmeter: none of it may be cut off.

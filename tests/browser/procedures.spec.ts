@@ -1,5 +1,5 @@
 import { expect, test, type Page } from "@playwright/test";
-import { signIn } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 async function fill(page: Page, label: string, value: string) {
   await page.getByLabel(label, { exact: true }).fill(value);
@@ -15,15 +15,7 @@ async function addReading(page: Page, minutes: number, microns: number) {
 
 test.describe("procedure records", () => {
   test("a technician records a nitrogen test and an evacuation; the report shows both judged", async ({ page }) => {
-    await page.goto("/equipment");
-    await signIn(page, "tech@bellbird.example");
-    await page
-      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-      .first()
-      .click();
-    await page.getByLabel("Reason for the visit").fill("Leak repaired: pressure test and evacuate before charging");
-    await page.getByRole("button", { name: "Start the visit" }).click();
-    await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+    await signInAndStartVisit(page, "Leak repaired: pressure test and evacuate before charging");
 
     // Nitrogen hold on the line set: 1034 kPa g (150 psig, the ducted-split maximum [S53][S67]) at
     // 25 °C, read at 20 °C. Ideal gas on absolute pressure and kelvin (trade notes §5.3):

@@ -1,5 +1,5 @@
 import { expect, test } from "@playwright/test";
-import { signIn } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 /**
  * The demo's R407C cylinders (server/db/seed/demo-scenario.ts): BM-REC-07, a recovery cylinder
@@ -12,15 +12,7 @@ test.describe("refrigerant register", () => {
   test("a technician logs a recovery and an addition on a visit and sees the balance and the cylinder warning", async ({
     page,
   }) => {
-    await page.goto("/equipment");
-    await signIn(page, "tech@bellbird.example");
-    await page
-      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-      .first()
-      .click();
-    await page.getByLabel("Reason for the visit").fill("Compressor change on circuit 1");
-    await page.getByRole("button", { name: "Start the visit" }).click();
-    await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+    await signInAndStartVisit(page, "Compressor change on circuit 1");
 
     await page.getByRole("radio", { name: "Refrigerant" }).click();
     // R407C glides several kelvin (TRADE.md §6 zeotropic blends [S4][S56]): charge as liquid.

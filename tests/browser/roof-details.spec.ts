@@ -1,6 +1,6 @@
 import { expect, test } from "@playwright/test";
 import { formatDateTime } from "../../shared/format/date-time.ts";
-import { signIn } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 import { TINY_PNG } from "./tiny-png.ts";
 
 /**
@@ -13,23 +13,15 @@ const ZONE = "Australia/Sydney";
 const NUMERIC_DATE = /\b\d{1,2}\/\d{1,2}\/\d{2,4}\b/;
 
 // Waits, not assertions about speed: the test machine is shared and sometimes slow to answer.
-const slowExpect = expect.configure({ timeout: 20_000 });
+const SLOW = { timeout: 20_000 };
+const slowExpect = expect.configure(SLOW);
 
 test.describe("on the roof, at 390 × 844", () => {
   test.describe.configure({ timeout: 120_000 });
   test.use({ viewport: { width: 390, height: 844 }, timezoneId: ZONE, locale: "en-US" });
 
   test("dates read one way, photos come from camera or gallery, the focus ring wraps the unit", async ({ page }) => {
-    await page.goto("/equipment");
-    await signIn(page, "tech@bellbird.example");
-    await page
-      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-      .first()
-      .click();
-    await page.getByLabel("Reason for the visit").fill("Checking the date format");
-    await page.getByRole("button", { name: "Start the visit" }).click();
-    await slowExpect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
-    const visitId = page.url().split("/").at(-1)!;
+    const visitId = await signInAndStartVisit(page, "Checking the date format", { wait: SLOW });
     const { visit } = (await (await page.request.get(`/api/visits/${visitId}`)).json()) as {
       visit: { startedAt: string };
     };

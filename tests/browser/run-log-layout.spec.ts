@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
-import { DEMO_PASSWORD, signIn } from "./sign-in.ts";
+import { DEMO_PASSWORD } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 /**
  * R407C gauge pressures (kPa) at the demo clinic's 100.308 kPa atmosphere, as in run-log.spec.ts
@@ -12,15 +13,7 @@ const LIQUID_BUBBLE_42C = "1736";
 const LOADED = { timeout: 20_000 };
 
 async function startVisit(page: Page, reason: string) {
-  await page.goto("/equipment");
-  await signIn(page, "tech@bellbird.example");
-  await page
-    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-    .first()
-    .click();
-  await page.getByLabel("Reason for the visit").fill(reason);
-  await page.getByRole("button", { name: "Start the visit" }).click();
-  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/, LOADED);
+  await signInAndStartVisit(page, reason, { wait: LOADED });
   await expect(page.getByLabel("Suction pressure", { exact: true })).toBeVisible(LOADED);
 }
 

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
 import { signIn, signOut } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 /**
  * R407C gauge pressures (kPa) at which it saturates at the given temperature, from Satura's
@@ -25,15 +26,7 @@ test.describe("run log and review", () => {
   test("a technician logs readings and an adjustment; a senior comments and signs off; the report shows it all", async ({
     page,
   }) => {
-    await page.goto("/equipment");
-    await signIn(page, "tech@bellbird.example");
-    await page
-      .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-      .first()
-      .click();
-    await page.getByLabel("Reason for the visit").fill("Waiting room warm in the afternoons");
-    await page.getByRole("button", { name: "Start the visit" }).click();
-    await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+    await signInAndStartVisit(page, "Waiting room warm in the afternoons");
     const visitUrl = page.url();
 
     // The run log says which atmosphere the gauges read against: the site's, as the server uses.

@@ -1,20 +1,14 @@
 import { expect, test } from "@playwright/test";
-import { signIn } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 test.describe("standing-pressure check", () => {
   test("a technician on a phone reads the standing pressure, sees the verdict as they type, and records it", async ({
     page,
   }) => {
     await page.setViewportSize({ width: 390, height: 844 });
-    await page.goto("/equipment");
-    await signIn(page, "tech@bellbird.example");
-    await page
-      .getByRole("link", { name: /Server cupboard wall split/ })
-      .first()
-      .click();
-    await page.getByLabel("Reason for the visit").fill("High head pressure after a compressor change");
-    await page.getByRole("button", { name: "Start the visit" }).click();
-    await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+    await signInAndStartVisit(page, "High head pressure after a compressor change", {
+      unit: /Server cupboard wall split/,
+    });
 
     await page.getByRole("radio", { name: "Standing pressure" }).click();
     await expect(page.getByRole("region", { name: "Caution: Pressure", exact: true })).toBeVisible();

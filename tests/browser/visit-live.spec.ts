@@ -1,5 +1,6 @@
 import { expect, test } from "@playwright/test";
-import { DEMO_PASSWORD, signIn } from "./sign-in.ts";
+import { DEMO_PASSWORD } from "./sign-in.ts";
+import { signInAndStartVisit } from "./start-visit.ts";
 
 /**
  * A visit open on one device shows what another person records on it within the page's refresh
@@ -10,16 +11,7 @@ test("a reading saved from another session appears on the open visit within the 
   playwright,
   baseURL,
 }) => {
-  await page.goto("/equipment");
-  await signIn(page, "tech@bellbird.example");
-  await page
-    .getByRole("link", { name: /RTU-1 packaged rooftop unit/ })
-    .first()
-    .click();
-  await page.getByLabel("Reason for the visit").fill("Second technician on the roof");
-  await page.getByRole("button", { name: "Start the visit" }).click();
-  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
-  const visitId = page.url().split("/").at(-1)!;
+  const visitId = await signInAndStartVisit(page, "Second technician on the roof");
   await page.getByText("Recorded entries (to check or void)").click();
   await expect(page.getByText("Nothing recorded on this circuit yet.")).toBeVisible();
 

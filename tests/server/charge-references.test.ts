@@ -2,7 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoSite } from "@server/db/seed/demo-scenario.ts";
 import { atmosphericPressureAtAltitude, saturationPressure } from "@shared/engine/index.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../setup/demo-accounts.ts";
+import { bellbirdAndOutsider, signedIn } from "../setup/demo-accounts.ts";
+import { demoUnitIds } from "../setup/demo-units.ts";
 import { startVisitAt } from "../setup/stored-readings.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
@@ -50,15 +51,8 @@ describe("charge reference points", () => {
 
   beforeAll(async () => {
     testApp = await createTestApp();
-    await seedBellbird(testApp);
-    owner = await signedIn(testApp.app, BELLBIRD.owner);
-    senior = await signedIn(testApp.app, BELLBIRD.senior);
-    technician = await signedIn(testApp.app, BELLBIRD.technician);
-    apprentice = await signedIn(testApp.app, BELLBIRD.apprentice);
-    outsider = (await signUpOtherCompany(testApp.app)).agent;
-    const units = (await technician.get("/api/equipment")).body.equipment as { id: string; refrigerant: string }[];
-    rooftopId = units.find((unit) => unit.refrigerant === "R407C")!.id;
-    splitId = units.find((unit) => unit.refrigerant === "R32")!.id;
+    ({ owner, senior, technician, apprentice, outsider } = await bellbirdAndOutsider(testApp));
+    ({ rooftop: rooftopId, split: splitId } = await demoUnitIds(technician));
   });
   afterAll(() => testApp.close());
 

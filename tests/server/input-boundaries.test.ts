@@ -5,6 +5,7 @@ import { BROKEN_CHARACTER_MESSAGE, CONTROL_CHARACTER_MESSAGE, SINGLE_LINE_MESSAG
 import { OUT_OF_RANGE_MESSAGE } from "@shared/schemas/dates.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
+import { CASE_ANSWERS, CASE_DRAFT } from "../setup/two-companies.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -100,23 +101,9 @@ describe("input boundaries", () => {
         "a case story (stored in jsonb)",
         () =>
           senior.post("/api/cases").send({
+            ...CASE_DRAFT,
             title: "Surrogate case",
-            difficulty: "starter",
-            story: {
-              site: `Roof ${LONE_SURROGATE}`,
-              equipment: "Split system",
-              complaint: "Not cooling",
-              conditions: "Hot day",
-            },
-            input: {
-              refrigerant: "R410A",
-              meteringDevice: "txv",
-              suctionPressureKPa: 820,
-              suctionLineTempC: 13,
-              liquidPressureKPa: 2650,
-              liquidLineTempC: 38,
-            },
-            reasoning: "Superheat and subcooling are both on target.",
+            story: { ...CASE_DRAFT.story, site: `Roof ${LONE_SURROGATE}` },
           }),
         "story.site",
       ],
@@ -213,14 +200,7 @@ describe("input boundaries", () => {
     expect((await technician.get(`/api/cases/${encodeURIComponent(id)}`)).status).toBe(404);
     const attempt = await technician.post("/api/attempts").send({
       caseId: id,
-      answers: {
-        evaporatingTempC: 5,
-        condensingTempC: 40,
-        superheatK: 6,
-        subcoolingK: 5,
-        chargeState: "normal",
-        reasoning: "All on target",
-      },
+      answers: CASE_ANSWERS,
     });
     expect(attempt.status).toBe(404);
     const generate = await technician

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../setup/demo-accounts.ts";
+import { bellbirdAndOutsider, signedIn } from "../setup/demo-accounts.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
@@ -13,11 +13,7 @@ describe("organisation procedure settings", () => {
 
   beforeAll(async () => {
     testApp = await createTestApp();
-    await seedBellbird(testApp);
-    owner = await signedIn(testApp.app, BELLBIRD.owner);
-    senior = await signedIn(testApp.app, BELLBIRD.senior);
-    technician = await signedIn(testApp.app, BELLBIRD.technician);
-    outsider = (await signUpOtherCompany(testApp.app)).agent;
+    ({ owner, senior, technician, outsider } = await bellbirdAndOutsider(testApp));
   });
   afterAll(() => testApp.close());
 

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../setup/demo-accounts.ts";
+import { bellbirdAndOutsider, BELLBIRD, signedIn } from "../setup/demo-accounts.ts";
+import { demoUnitIds, openVisit } from "../setup/demo-units.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -61,18 +62,9 @@ describe("refrigerant register API", () => {
 
   beforeAll(async () => {
     testApp = await createTestApp();
-    people = await seedBellbird(testApp);
-    owner = await signedIn(testApp.app, BELLBIRD.owner);
-    senior = await signedIn(testApp.app, BELLBIRD.senior);
-    technician = await signedIn(testApp.app, BELLBIRD.technician);
-    apprentice = await signedIn(testApp.app, BELLBIRD.apprentice);
-    outsider = (await signUpOtherCompany(testApp.app)).agent;
-    const units = (await technician.get("/api/equipment")).body.equipment as { id: string; refrigerant: string }[];
-    rooftopId = units.find((unit) => unit.refrigerant === "R407C")!.id;
-    splitId = units.find((unit) => unit.refrigerant === "R32")!.id;
-    visitId = (
-      await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Compressor change on circuit 1" })
-    ).body.visit.id;
+    ({ ids: people, owner, senior, technician, apprentice, outsider } = await bellbirdAndOutsider(testApp));
+    ({ rooftop: rooftopId, split: splitId } = await demoUnitIds(technician));
+    visitId = await openVisit(technician, rooftopId, "Compressor change on circuit 1");
   });
   afterAll(() => testApp.close());
 

@@ -11,7 +11,7 @@ import { atmosphericPressureAtAltitude, saturationPressure } from "@shared/engin
 import { VisitDetailResponseSchema } from "@shared/schemas/visits.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
-import { startVisitAt } from "../setup/stored-readings.ts";
+import { startRooftopVisit, startVisitAt } from "../setup/stored-readings.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -41,11 +41,7 @@ describe("visit revision, conditional GET and deltas", () => {
     await seedBellbird(testApp);
     technician = await signedIn(testApp.app, BELLBIRD.technician);
     senior = await signedIn(testApp.app, BELLBIRD.senior);
-    const units = (await technician.get("/api/equipment")).body.equipment;
-    const rooftop = units.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C");
-    visitId = (
-      await technician.post("/api/visits").send({ equipmentId: rooftop.id, reason: "Not cooling the waiting room" })
-    ).body.visit.id;
+    visitId = await startRooftopVisit(technician, "Not cooling the waiting room");
   });
   afterAll(() => testApp.close());
 

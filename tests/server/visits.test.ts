@@ -4,7 +4,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoSite } from "@server/db/seed/demo-scenario.ts";
 import { atmosphericPressureAtAltitude, diagnose, saturationPressure } from "@shared/engine/index.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
-import { BELLBIRD, seedBellbird, signedIn, signUpOtherCompany } from "../setup/demo-accounts.ts";
+import { bellbirdAndOutsider, signedIn } from "../setup/demo-accounts.ts";
+import { demoUnitIds } from "../setup/demo-units.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -40,13 +41,8 @@ describe("visits and the run log API", () => {
 
   beforeAll(async () => {
     testApp = await createTestApp();
-    await seedBellbird(testApp);
-    technician = await signedIn(testApp.app, BELLBIRD.technician);
-    senior = await signedIn(testApp.app, BELLBIRD.senior);
-    apprentice = await signedIn(testApp.app, BELLBIRD.apprentice);
-    outsider = (await signUpOtherCompany(testApp.app)).agent;
-    const list = await technician.get("/api/equipment");
-    rooftopId = list.body.equipment.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C").id;
+    ({ technician, senior, apprentice, outsider } = await bellbirdAndOutsider(testApp));
+    rooftopId = (await demoUnitIds(technician)).rooftop;
   });
   afterAll(() => testApp.close());
 

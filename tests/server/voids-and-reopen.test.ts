@@ -3,6 +3,7 @@ import { demoSite } from "@server/db/seed/demo-scenario.ts";
 import { atmosphericPressureAtAltitude, saturationPressure } from "@shared/engine/index.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
+import { demoUnitIds, openVisit } from "../setup/demo-units.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -42,11 +43,8 @@ describe("records are corrected by voiding, never lost; closed visits take nothi
     technician = await signedIn(testApp.app, BELLBIRD.technician);
     senior = await signedIn(testApp.app, BELLBIRD.senior);
     owner = await signedIn(testApp.app, BELLBIRD.owner);
-    const units = (await technician.get("/api/equipment")).body.equipment;
-    rooftopId = units.find((unit: { refrigerant: string }) => unit.refrigerant === "R407C").id;
-    visitId = (
-      await technician.post("/api/visits").send({ equipmentId: rooftopId, reason: "Leak repair and recharge" })
-    ).body.visit.id;
+    rooftopId = (await demoUnitIds(technician)).rooftop;
+    visitId = await openVisit(technician, rooftopId, "Leak repair and recharge");
   });
   afterAll(() => testApp.close());
 

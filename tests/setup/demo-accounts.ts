@@ -65,6 +65,17 @@ export async function signUpOtherCompany(app: Express, email = "owner@coldfront.
   return { agent, user: response.body.user as { id: string; organisationId: string } };
 }
 
+/**
+ * The arrangement of most API tests: Bellbird loaded (without its charge history), each of its
+ * roles signed in, and the owner of another company signed in to show what an outsider cannot reach.
+ */
+export async function bellbirdAndOutsider(testApp: TestApp) {
+  const ids = await seedBellbird(testApp);
+  const agents = await signedInBellbird(testApp.app);
+  const outsider = (await signUpOtherCompany(testApp.app)).agent;
+  return { ids, ...agents, outsider };
+}
+
 /** The first URL in a caught mail (decoded text). */
 export function linkIn(decodedMail: string): URL {
   const match = decodedMail.match(/https?:\/\/[^\s"<>]+/);

@@ -1,6 +1,6 @@
 import type { AuthLimits } from "@server/auth/rate-limits.ts";
 import type { RouteKey } from "@server/auth/route-permissions.ts";
-import { CASE_DRAFT, type BellbirdRecords } from "./two-companies.ts";
+import { CASE_ANSWERS, CASE_DRAFT, type BellbirdRecords } from "./two-companies.ts";
 
 /** Throttles high enough for tests that call every route from one address (the throttles have their own tests). */
 export const UNTHROTTLED: Partial<AuthLimits> = {
@@ -178,16 +178,6 @@ export function sampleBodies(records: BellbirdRecords): Partial<Record<RouteKey,
     "POST /api/cases/from-reading": { readingId: records.readingId },
     "POST /api/cases/generate": { refrigerant: "R410A", meteringDevice: "txv", fault: "undercharged", seed: 7 },
     "PUT /api/cases/:id": CASE_DRAFT,
-    "POST /api/attempts": {
-      caseId: records.caseId,
-      answers: {
-        evaporatingTempC: 5,
-        condensingTempC: 40,
-        superheatK: 6,
-        subcoolingK: 5,
-        chargeState: "normal",
-        reasoning: "Both on target",
-      },
-    },
+    "POST /api/attempts": { caseId: records.caseId, answers: CASE_ANSWERS },
   };
 }

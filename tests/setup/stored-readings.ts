@@ -5,15 +5,14 @@ import { insertReadings, type NewReading } from "@server/db/visits.ts";
 import { users } from "@server/db/schema.ts";
 import { writeToVisit } from "@server/visits/write-to-visit.ts";
 import { BELLBIRD, signedIn } from "./demo-accounts.ts";
+import { demoUnitIds, openVisit } from "./demo-units.ts";
 import type { TestApp } from "./test-app.ts";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
 /** Starts a visit on the demo company's R407C rooftop unit (RTU-1) as `agent`; its id. */
 export async function startRooftopVisit(agent: Agent, reason: string): Promise<string> {
-  const units = (await agent.get("/api/equipment")).body.equipment as { id: string; refrigerant: string }[];
-  const rooftop = units.find((unit) => unit.refrigerant === "R407C")!;
-  return (await agent.post("/api/visits").send({ equipmentId: rooftop.id, reason })).body.visit.id as string;
+  return openVisit(agent, (await demoUnitIds(agent)).rooftop, reason);
 }
 
 /**

@@ -29,6 +29,16 @@ export const CASE_DRAFT = {
   reasoning: "Superheat and subcooling are both near their targets.",
 };
 
+/** Answers to an attempt at a case, valid in shape (the figures of CASE_DRAFT, on target). */
+export const CASE_ANSWERS = {
+  evaporatingTempC: 5,
+  condensingTempC: 40,
+  superheatK: 6,
+  subcoolingK: 5,
+  chargeState: "normal",
+  reasoning: "Both on target",
+};
+
 /** Records of the first company, one of each kind a route can name in its path. */
 export interface BellbirdRecords {
   visitId: string;
@@ -134,14 +144,7 @@ export async function twoCompanies(testApp: TestApp): Promise<TwoCompanies> {
   const attemptId = ok(
     await apprentice.post("/api/attempts").send({
       caseId,
-      answers: {
-        evaporatingTempC: 5,
-        condensingTempC: 40,
-        superheatK: 6,
-        subcoolingK: 5,
-        chargeState: "normal",
-        reasoning: "Both on target",
-      },
+      answers: CASE_ANSWERS,
     }),
     "attempt",
   ).attempt.id;

@@ -24,6 +24,7 @@ import {
   STANDARD_ATMOSPHERE_KPA,
 } from "@shared/engine/index.ts";
 import { loadSinglePhaseTable } from "@shared/property-tables/load-single-phase-table.ts";
+import { R410A_FIELD_READING } from "../../fixtures/field-reading.ts";
 
 const gauge = (absoluteKPa: number) => absoluteKPa - STANDARD_ATMOSPHERE_KPA;
 
@@ -93,19 +94,7 @@ describe("measuredCycle", () => {
     expect(metered.capacityKW).toBeCloseTo(7.18, BOOK_PRINTED_DIGITS);
   });
 
-  const field: DiagnosisInput = Object.freeze({
-    refrigerant: "R410A",
-    meteringDevice: "txv",
-    suctionPressureKPa: 820,
-    suctionLineTempC: 12,
-    liquidPressureKPa: 2600,
-    liquidLineTempC: 38,
-    dischargeLineTempC: 75,
-    compressorAmps: 10,
-    returnAirDryBulbC: 26.7,
-    returnAirWetBulbC: 19.4,
-    supplyAirDryBulbC: 14,
-  });
+  const field = R410A_FIELD_READING;
 
   it("fixes each state from its own pressure and line temperature (IIR enthalpies from the single-phase table)", () => {
     const cycle = measuredCycle(field);

@@ -7,6 +7,7 @@ import { MemoryRouter } from "react-router-dom";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import type { Equipment } from "@shared/schemas/equipment.ts";
 import { EquipmentTable } from "@/features/equipment/components/equipment-table.tsx";
+import { servePagedList } from "../../../setup/serve-paged-list.ts";
 
 const site = {
   siteId: "00000000-0000-4000-8000-000000000001",
@@ -70,28 +71,9 @@ const units: Equipment[] = [
   },
 ];
 
-/**
- * The server's side, as the table sees it: each request is recorded, and answered with the
- * units `answer` picks for its query (the search, sort and paging themselves are the server's,
- * tested in tests/server/list-paging.test.ts).
- */
-function serve(answer: (params: URLSearchParams) => { equipment: Equipment[]; nextCursor: string | null }) {
-  const asked: URLSearchParams[] = [];
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL) => {
-      const url = new URL(String(input), "http://satura.test");
-      if (url.pathname !== "/api/equipment")
-        return new Response(JSON.stringify({ message: "No such route" }), { status: 404 });
-      asked.push(url.searchParams);
-      return new Response(JSON.stringify(answer(url.searchParams)), {
-        status: 200,
-        headers: { "Content-Type": "application/json" },
-      });
-    }),
-  );
-  return asked;
-}
+/** Records what the table asks GET /api/equipment, and answers with the units `answer` picks for its query. */
+const serve = (answer: (params: URLSearchParams) => { equipment: Equipment[]; nextCursor: string | null }) =>
+  servePagedList("/api/equipment", answer);
 
 function renderTable() {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });

@@ -7,6 +7,7 @@ import { MemoryRouter } from "react-router-dom";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import type { VisitSummary } from "@shared/schemas/visits.ts";
 import { JobsTable } from "@/features/jobs/components/jobs-table.tsx";
+import { servePagedList } from "../../../setup/serve-paged-list.ts";
 
 // Invented visits of the demo scenario (PRODUCT.md "Demo scenario").
 const visit = (id: number, equipmentName: string, status: VisitSummary["status"], startedAt: string): VisitSummary => ({
@@ -27,23 +28,8 @@ const newer = visit(1, "RTU-1 packaged rooftop unit", "open", "2026-11-30T01:00:
 const older = visit(2, "Server cupboard wall split", "signed-off", "2026-11-20T01:00:00.000Z");
 
 /** Records what the table asks GET /api/visits, and answers with what `answer` picks. */
-function serve(answer: (params: URLSearchParams) => { visits: VisitSummary[]; nextCursor: string | null }) {
-  const asked: URLSearchParams[] = [];
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL) => {
-      const url = new URL(String(input), "http://satura.test");
-      if (url.pathname !== "/api/visits")
-        return new Response(JSON.stringify({ message: "No such route" }), { status: 404 });
-      asked.push(url.searchParams);
-      return new Response(JSON.stringify(answer(url.searchParams)), {
-        status: 200,
-        headers: { "Content-Type": "application/json" },
-      });
-    }),
-  );
-  return asked;
-}
+const serve = (answer: (params: URLSearchParams) => { visits: VisitSummary[]; nextCursor: string | null }) =>
+  servePagedList("/api/visits", answer);
 
 function renderJobs(status: VisitSummary["status"] | null = null) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });

@@ -6,6 +6,7 @@ import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import type { RegisterLine, RegisterList } from "@shared/schemas/register.ts";
 import { RegisterView, type RegisterFilters } from "@/features/register/components/register-view.tsx";
+import { servePagedList } from "../../../setup/serve-paged-list.ts";
 
 // Invented lines of the demo scenario (PRODUCT.md "Demo scenario").
 const line = (id: number, kg: number, at: string): RegisterLine => ({
@@ -30,24 +31,9 @@ const older = line(2, 0.25, "2026-07-11T01:00:00.000Z");
 // The totals are the whole period's, the same on every page.
 const totals = [{ refrigerant: "R407C", kind: "recovered" as const, kg: 3.85 }];
 
-/** Records what the view asks GET /api/register, and answers with what `answer` picks. */
-function serve(answer: (params: URLSearchParams) => RegisterList) {
-  const asked: URLSearchParams[] = [];
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL) => {
-      const url = new URL(String(input), "http://satura.test");
-      const json = (body: unknown) =>
-        new Response(JSON.stringify(body), { status: 200, headers: { "Content-Type": "application/json" } });
-      if (url.pathname === "/api/members") return json({ members: [] });
-      if (url.pathname !== "/api/register")
-        return new Response(JSON.stringify({ message: "No such route" }), { status: 404 });
-      asked.push(url.searchParams);
-      return json(answer(url.searchParams));
-    }),
-  );
-  return asked;
-}
+/** Records what the view asks GET /api/register, and answers with what `answer` picks; no members to choose from. */
+const serve = (answer: (params: URLSearchParams) => RegisterList) =>
+  servePagedList("/api/register", answer, { "/api/members": { members: [] } });
 
 function renderRegister(filters: RegisterFilters = { from: "", to: "", technicianId: "" }) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
