@@ -148,10 +148,10 @@ const SPECS: Spec[] = [
       complaint: "Circuit 2 runs all day and the upstairs consulting rooms stay warm.",
       conditions: "Hot afternoon; unit running 30 minutes.",
     },
-    design: d("R407C", "txv", 17, 37, 4, 3.5),
+    design: d("R407C", "txv", 17, 40, 4, 6.5),
     readings: {
       ...RTU_T,
-      dischargePressureKPa: 1430,
+      dischargePressureKPa: 1680,
       returnAirDryBulbC: 26,
       returnAirWetBulbC: 18.5,
       supplyAirDryBulbC: 20,
@@ -161,7 +161,7 @@ const SPECS: Spec[] = [
       runMinutes: 30,
     },
     reasoning:
-      "The coil runs only about 11 K below the return air (suction high for the load) while condensing sits a few kelvin over ambient, with half the rated amps and a small split: the compressor cannot pull its pressure difference. A shortage would pull the suction down instead.",
+      "The coil runs only about 11 K below the return air (suction high for the load) while condensing sits only 7 K over ambient, with half the rated amps and a small split; the condenser, barely loaded, subcools the little liquid it gets. The compressor cannot pull its pressure difference. A shortage would pull the suction down and the subcooling with it.",
     sources: ["S21", "S29", "S122"],
   },
   {
@@ -529,7 +529,7 @@ const SPECS: Spec[] = [
       complaint: "Cooling fades through the afternoon; pressures equalise almost at once when the unit stops.",
       conditions: "Hot afternoon; unit running 20 minutes.",
     },
-    design: d("R22", "txv", 15, 40, 3.5, 9),
+    design: d("R22", "txv", 15, 43, 3.5, 7.5),
     readings: {
       returnAirDryBulbC: 26.7,
       returnAirWetBulbC: 19,

@@ -40,6 +40,12 @@ export interface FaultScenario {
 const MAX_CHART_DRAWS = 50;
 /** Smallest chart target accepted for a fixed device, K (below 2.8 K there is no superheat test [S10]). */
 const MIN_CHART_TARGET_K = 4;
+/**
+ * Least the liquid leaving an air-cooled condenser stays above the air entering it, K: "never
+ * colder than the entering air" (TRADE.md §3 [S26][S34]); the half kelvin keeps the probes'
+ * scatter (±0.3 K each) from crossing it.
+ */
+const MIN_CONDENSER_APPROACH_K = 0.5;
 
 const between = (random: () => number, [low, high]: Range) => low + (high - low) * random();
 const tenth = (value: number) => Math.round(value * 10) / 10;
@@ -130,7 +136,15 @@ export function drawFaultScenario(options: FaultScenarioOptions): FaultScenario 
 
   // Subcooling (true, from the real condensing temperature) and superheat.
   const subcoolingTarget = Math.round(between(random, point.subcoolingTargetK) * 2) / 2;
-  const subcooling = Math.max(0, subcoolingTarget + between(random, move.subcoolingFromTargetK));
+  // An air-cooled condenser cannot cool its liquid below the air crossing it (TRADE.md §3,
+  // condenser approach [S26][S34]): subcooling stops short of the outdoor air.
+  const subcooling = Math.max(
+    0,
+    Math.min(
+      subcoolingTarget + between(random, move.subcoolingFromTargetK),
+      trueBubble - outdoor - MIN_CONDENSER_APPROACH_K,
+    ),
+  );
   const dewAtSuction = saturationTemperature(refrigerant, suctionAbs, "dew");
   const capillaryTarget = fixed ? point.capillarySuperheatTargetK : null;
   let superheat: number;

@@ -43,9 +43,7 @@ const FIXED_RESTRICTORS = new Set(["fixed-orifice", "capillary"]);
  * - restriction: SH ↑ with SC normal or high, which separates it from undercharge [S24][S25];
  * - low evaporator airflow: SH ↓, which a TXV holds at its setting (→); SC → to ↑ [S21];
  * - low condenser airflow: SC ↓ [S21][S26]; its SH moves either way with severity;
- * - inefficient compressor: SH ↓ [S21][S29][S30]. The table also gives SC ↑; the built-in case of
- *   a compressor that hums and barely pumps reads SC 1.5 K under target, so that cell is not
- *   judged here (noted for the casebook's authors);
+ * - inefficient compressor: SH ↓, SC ↑ [S21][S29][S30];
  * - a metering device overfeeding is not in the table: it floods the evaporator, so SH ↓
  *   (common practice, from memory);
  * - normal: SH → with a fixed restrictor (its target is the charging chart's, §1.4); SC within
@@ -58,7 +56,7 @@ const SYMPTOMS: Record<ChargeState, { sh?: Arrow[]; shFixed?: Arrow[]; sc?: Arro
   "low-evaporator-airflow": { sh: ["↓", "→"], sc: ["→", "↑"] },
   "condenser-airflow": { sc: ["↓"] },
   "non-condensables": {},
-  "weak-compressor": { sh: ["↓"] },
+  "weak-compressor": { sh: ["↓"], sc: ["↑"] },
   "overfeeding-metering": { sh: ["↓"] },
   normal: { shFixed: ["→"] },
   "insufficient-data": {},
@@ -96,6 +94,19 @@ describe("built-in casebook cases", () => {
       );
       expect(Math.abs(dew - worked.design.evaporatingDewC!)).toBeLessThanOrEqual(DESIGN_TOLERANCE_K);
       expect(Math.abs(bubble - worked.design.condensingBubbleC!)).toBeLessThanOrEqual(DESIGN_TOLERANCE_K);
+    });
+
+    it("is physically possible: discharge above liquid, liquid no colder than the condenser's air", () => {
+      const { dischargePressureKPa, liquidPressureKPa, liquidLineTempC, outdoorAirDryBulbC } = worked.input;
+      // Refrigerant flows from the discharge through the condenser to the liquid line, so the
+      // discharge pressure cannot be the lower of the two (any refrigeration text).
+      if (dischargePressureKPa != null) expect(dischargePressureKPa).toBeGreaterThanOrEqual(liquidPressureKPa);
+      // "Liquid line should never be colder than the entering air (unless a restriction upstream)":
+      // TRADE.md §3, condenser approach [S26][S34]; the probe's ±1 K as above (common practice).
+      if (outdoorAirDryBulbC != null && worked.expected.chargeState !== "restricted-metering")
+        expect(liquidLineTempC, "liquid line against outdoor air").toBeGreaterThanOrEqual(
+          outdoorAirDryBulbC - NORMAL_BAND_K,
+        );
     });
 
     it(`reads as the symptom table reads its state: ${worked.expected.chargeState} (TRADE.md §2)`, () => {

@@ -34,6 +34,17 @@ describe("generateCase", () => {
     );
   });
 
+  it("never cools the liquid below the air crossing the condenser (TRADE.md §3, condenser approach [S26][S34])", () => {
+    fc.assert(
+      fc.property(combination, ({ seed, ...options }) => {
+        const { input } = generateCase({ ...options, random: seededRandom(seed) });
+        // Each probe scatters ±SENSOR_NOISE_K, so the two readings may cross by twice that.
+        expect(input.liquidLineTempC).toBeGreaterThanOrEqual(input.outdoorAirDryBulbC! - 2 * SENSOR_NOISE_K);
+      }),
+      { numRuns: 400 },
+    );
+  });
+
   it("is reproducible: the same seed gives the same case, another seed another", () => {
     const options = { refrigerant: "R407C", meteringDevice: "txv", fault: "undercharged" } as const;
     expect(generateCase({ ...options, random: seededRandom(11) })).toEqual(

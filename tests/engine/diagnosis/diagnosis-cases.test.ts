@@ -8,6 +8,8 @@ import { DiagnosisCaseFileSchema } from "../../fixtures/diagnosis-cases/diagnosi
 // temperatures through the property engine (scripts/build-diagnosis-cases.ts), and each
 // expected state follows the symptom table of TRADE.md §2 (sources named in each case).
 const file = DiagnosisCaseFileSchema.parse(rawCases);
+/** A clamp-on line probe reads within about ±1 K (common practice). */
+const PROBE_BAND_K = 1;
 
 describe("diagnosis worked cases", () => {
   it("cover at least 40 cases, 8 refrigerants, all metering devices and every charge state", () => {
@@ -37,6 +39,16 @@ describe("diagnosis worked cases", () => {
         );
         expect(Math.abs(bubble - worked.design.condensingBubbleC)).toBeLessThanOrEqual(worked.toleranceK);
       }
+    });
+
+    it("is physically possible: discharge above liquid, liquid no colder than the condenser's air", () => {
+      const { dischargePressureKPa, liquidPressureKPa, liquidLineTempC, outdoorAirDryBulbC } = worked.input;
+      // Refrigerant flows from the discharge through the condenser to the liquid line.
+      if (dischargePressureKPa != null) expect(dischargePressureKPa).toBeGreaterThanOrEqual(liquidPressureKPa);
+      // "Liquid line should never be colder than the entering air (unless a restriction upstream)",
+      // TRADE.md §3, condenser approach [S26][S34]; ±1 K for the probe (common practice).
+      if (outdoorAirDryBulbC != null && worked.expected.chargeState !== "restricted-metering")
+        expect(liquidLineTempC).toBeGreaterThanOrEqual(outdoorAirDryBulbC - PROBE_BAND_K);
     });
 
     it(`diagnoses ${worked.expected.chargeState} with the expected values and warnings`, () => {
