@@ -471,6 +471,7 @@ export const WARNING_CODES = [
   "application-mismatch",
   "low-discharge-superheat",
   "judged-without-charge-signal",
+  "charge-estimate-beside-other-fault",
 ] as const;
 export const WarningCodeSchema = z.enum(WARNING_CODES);
 export type WarningCode = z.infer<typeof WarningCodeSchema>;

@@ -10,6 +10,7 @@ import {
 import { estimateChargeDeviation } from "../charge/estimate-charge-deviation.ts";
 import { PropertyRangeError } from "../properties/property-range-error.ts";
 import { buildDiagnosisSnapshot } from "./build-diagnosis-snapshot.ts";
+import { chargeStateText } from "../../content/charge-states.ts";
 import { DiagnosisInputError } from "./diagnosis-input-error.ts";
 import { MIN_RUN_MINUTES, NO_CHARGE_SIGNAL_CONFIDENCE, UNSETTLED_CONFIDENCE_FLOOR } from "./diagnosis-limits.ts";
 import { evidenceWeight } from "./evidence-weight.ts";
@@ -40,6 +41,13 @@ const PRIMARY_RULE = { fixed: "superheat-vs-target", "expansion-valve": "subcool
 /** States that say the charge is right or wrong: a fixed device without its superheat target can name none of them (weigh in [S10]). */
 const CHARGE_VERDICTS: ReadonlySet<EvidenceState> = new Set(["normal", "undercharged", "overcharged"]);
 const JUDGED = new Set<Finding["direction"]>(["low", "normal", "high"]);
+/**
+ * Kilograms read from the subcooling and superheat hold only when the charge is the fault: a weak
+ * compressor or a dirty condenser moves them too. Charge is judged once airflow and the other
+ * faults are right (Title 24 RA3 verifies airflow before the charge [S10], from memory; common
+ * practice).
+ */
+const OTHER_FAULT_SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S10"])}, from memory; ${COMMON_PRACTICE}`;
 const NO_SIGNAL_SOURCE = `${cite(DIAGNOSIS_SOURCES, ["S9", "S10", "S11"])}; judging from the remaining readings (${COMMON_PRACTICE})`;
 
 /** Confidence multiplier for the run time: readings drift for 10–15 min after a start [S10][S20]. */
@@ -86,7 +94,8 @@ export interface DiagnoseOptions {
  * With `withMeasuredCycle` (and the refrigerant's single-phase table loaded) the compressor's
  * apparent isentropic efficiency joins the evidence. With the circuit's correct charge
  * (`chargeKg`, and `chargeReference` when the circuit has its own reference point) the result
- * says how many kilograms the charge is off (`chargeDeviation`, see estimateChargeDeviation).
+ * says how many kilograms the charge is off (`chargeDeviation`, see estimateChargeDeviation); beside
+ * a verdict naming another fault it adds the caution `charge-estimate-beside-other-fault`.
  *
  * The readings must already be validated by `DiagnosisInputSchema` at the boundary they came
  * through (the API, the run-log form, `parseDiagnosisInput`; README decision 034): the engine
@@ -184,6 +193,18 @@ export function diagnose(input: DiagnosisInput, options: DiagnoseOptions = {}): 
     findings.unshift(summarizeVerdict(state, findings, weights));
   }
 
+  const chargeState = verdict ? verdict.state : "insufficient-data";
+  const charge = estimateChargeDeviation(snapshot);
+  if (charge.chargeDeviation !== null && verdict && !CHARGE_VERDICTS.has(verdict.state)) {
+    warnings.push({
+      code: "charge-estimate-beside-other-fault",
+      severity: "caution",
+      field: "chargeKg",
+      message: `The kilograms assume the charge is the only fault, but the readings point at another (${chargeStateText[verdict.state].title.toLowerCase()}), which moves the subcooling and superheat too: put it right first, then judge the charge again`,
+      source: OTHER_FAULT_SOURCE,
+    });
+  }
+
   return {
     refrigerant: input.refrigerant,
     meteringDevice: input.meteringDevice,
@@ -217,11 +238,11 @@ export function diagnose(input: DiagnosisInput, options: DiagnoseOptions = {}): 
     compressionRatio: snapshot.compressionRatio,
     compressionRatioBasis: snapshot.compressionRatioBasis,
     compressorCurrentRatio: snapshot.compressorCurrentRatio,
-    chargeState: verdict ? verdict.state : "insufficient-data",
+    chargeState,
     confidence: verdict ? verdict.confidence : 0,
     alternatives: verdict ? ranked.filter((entry) => entry !== verdict) : ranked,
     readingsLeftOut: readingsLeftOut(snapshot),
-    ...estimateChargeDeviation(snapshot),
+    ...charge,
     findings,
     warnings,
   };

@@ -158,4 +158,28 @@ describe("estimateChargeDeviation (through diagnose)", () => {
     expect(result.chargeDeviation).toBeNull();
     expect(result.chargeDeviationNote).toMatch(/superheat target/);
   });
+
+  it("cautions that the kilograms assume the charge is the only fault when the verdict names another (common practice: airflow and other faults first)", () => {
+    // A compressor that no longer pumps (TRADE.md §2): suction high for the load (coil 11.7 K below
+    // the return air), condensing only 6 K over ambient, half its rated current, a small split.
+    const weak = diagnose({
+      ...txvReading(4.5, 4),
+      suctionPressureKPa: gaugeAt("R410A", 15, "dew"),
+      suctionLineTempC: 19,
+      liquidPressureKPa: gaugeAt("R410A", 41, "bubble"),
+      liquidLineTempC: 36.5,
+      supplyAirDryBulbC: 21,
+      compressorAmps: 8,
+      compressorRla: 18,
+    });
+    expect(weak.chargeState).toBe("weak-compressor");
+    expect(weak.chargeDeviation).not.toBeNull();
+    const caution = weak.warnings.find((warning) => warning.code === "charge-estimate-beside-other-fault");
+    expect(caution?.severity).toBe("caution");
+    expect(caution?.message).toMatch(/compressor not pumping well/);
+    // A shortage read as a shortage carries no such caution.
+    const short = diagnose(txvReading(1, 14));
+    expect(short.chargeState).toBe("undercharged");
+    expect(short.warnings.map((warning) => warning.code)).not.toContain("charge-estimate-beside-other-fault");
+  });
 });

@@ -205,6 +205,45 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
     expect(short.chargeState).toBe("undercharged");
   });
 
+  it("does not read subcooling short of a target the condenser cannot reach as a shortage: its liquid cannot leave colder than the air (TRADE.md §3 [S26][S34])", () => {
+    // Condensing 3.5 K over a 33 °C day: at most 3.5 K of subcooling, whatever the charge.
+    const atAmbient = diagnose(
+      r410a({
+        evaporatingC: 14,
+        condensingC: 36.5,
+        superheatK: 4,
+        subcoolingK: 3,
+        outdoorAirDryBulbC: 33,
+        supplyAirDryBulbC: 21.5,
+        compressorAmps: 8,
+        compressorRla: 18,
+      }),
+    );
+    const subcooling = atAmbient.findings.find((finding) => finding.ruleId === "subcooling-vs-target")!;
+    expect(subcooling.direction).toBe("normal");
+    expect(subcooling.message).toMatch(/cannot give more .* says nothing about the charge/);
+    // At most a trace for a shortage: 3.0 K sits at the lowered pivot.
+    const shortage = subcooling.pointsTo.find((evidence) => evidence.state === "undercharged")?.weight ?? 0;
+    expect(shortage).toBeLessThan(0.2);
+    expect(atAmbient.chargeState).toBe("weak-compressor");
+    // A shortage on the same day keeps its liquid well above the air: still low against what the
+    // condenser could give, and still undercharged.
+    const short = diagnose(
+      r410a({
+        evaporatingC: 1,
+        condensingC: 40,
+        superheatK: 15,
+        subcoolingK: 0.5,
+        outdoorAirDryBulbC: 38,
+        supplyAirDryBulbC: 20,
+        compressorAmps: 11,
+        compressorRla: 18,
+      }),
+    );
+    expect(short.findings.find((finding) => finding.ruleId === "subcooling-vs-target")!.direction).toBe("low");
+    expect(short.chargeState).toBe("undercharged");
+  });
+
   it("on a TXV high superheat with subcooling below target is a shortage, and the first evidence line says so [S24][S25]", () => {
     const result = diagnose({
       refrigerant: "R407C",
