@@ -3,6 +3,7 @@ import { diagnose, expectedAnswers, gaugeToAbsolute, saturationTemperature } fro
 import { BuiltInCaseFileSchema, CASE_DIFFICULTIES } from "@shared/schemas/casebook.ts";
 import { CHARGE_STATES, METERING_DEVICES, type ChargeState } from "@shared/schemas/diagnosis.ts";
 import rawFile from "../../../data/casebook/built-in-cases.json" with { type: "json" };
+import { expectPhysicallyPossible, PROBE_BAND_K } from "../../fixtures/physical-limits.ts";
 
 // The built-in cases are invented (PRODUCT.md demo world and other made-up sites). Their
 // pressures come from design saturation temperatures through the property engine, and their
@@ -21,10 +22,9 @@ const DESIGN_TOLERANCE_K = 0.3;
  * probe (common practice). Null when the case has no such figure (it cannot be judged).
  */
 type Arrow = "↑" | "→" | "↓" | null;
-const NORMAL_BAND_K = 1;
 function arrow(value: number | null, target: number | null): Arrow {
   if (value === null || target === null) return null;
-  return value - target > NORMAL_BAND_K ? "↑" : target - value > NORMAL_BAND_K ? "↓" : "→";
+  return value - target > PROBE_BAND_K ? "↑" : target - value > PROBE_BAND_K ? "↓" : "→";
 }
 
 /** An installer's pass band around the target subcooling: Title 24, about ±3 °F (TRADE.md §1.3, from memory). */
@@ -97,16 +97,7 @@ describe("built-in casebook cases", () => {
     });
 
     it("is physically possible: discharge above liquid, liquid no colder than the condenser's air", () => {
-      const { dischargePressureKPa, liquidPressureKPa, liquidLineTempC, outdoorAirDryBulbC } = worked.input;
-      // Refrigerant flows from the discharge through the condenser to the liquid line, so the
-      // discharge pressure cannot be the lower of the two (any refrigeration text).
-      if (dischargePressureKPa != null) expect(dischargePressureKPa).toBeGreaterThanOrEqual(liquidPressureKPa);
-      // "Liquid line should never be colder than the entering air (unless a restriction upstream)":
-      // TRADE.md §3, condenser approach [S26][S34]; the probe's ±1 K as above (common practice).
-      if (outdoorAirDryBulbC != null && worked.expected.chargeState !== "restricted-metering")
-        expect(liquidLineTempC, "liquid line against outdoor air").toBeGreaterThanOrEqual(
-          outdoorAirDryBulbC - NORMAL_BAND_K,
-        );
+      expectPhysicallyPossible(worked.input, worked.expected.chargeState);
     });
 
     it(`reads as the symptom table reads its state: ${worked.expected.chargeState} (TRADE.md §2)`, () => {

@@ -131,7 +131,7 @@ export function FindingPanel({ result, pending = false, variant = "run-log" }: F
       </div>
 
       {result.warnings.length > 0 && (
-        <ul className="mt-3 space-y-2" aria-label="Warnings about the readings">
+        <ul className="mt-3 space-y-2" aria-label="Warnings and cautions">
           {result.warnings.map((warning, index) => {
             const severity = SEVERITY[warning.severity];
             return (
