@@ -58,6 +58,15 @@ const chunkGroups = [
     test: /node_modules[\\/]react-hook-form[\\/]|src[\\/](lib[\\/](form-errors|lazy-zod-resolver)|hooks[\\/]use-form-values)\./,
     priority: 40,
   },
+  // The reason dialog (void a record, clear a reference point) is a react-hook-form form: in the
+  // common chunk it put the forms on every signed-in screen's first load; in the forms chunk it
+  // would bring the common chunk to the sign-in page. Loaded by the panels that void, which the
+  // run log loads once its first screen is drawn.
+  {
+    name: "reason-dialog",
+    test: /src[\\/](components[\\/]ui[\\/](reason-dialog|void-record)[\\/]|features[\\/]visit[\\/]components[\\/]visit-void-action\.)/,
+    priority: 20,
+  },
   // Apart from react-hook-form: the public screens' forms load it on their first check
   // (lazy-zod-resolver.ts), so the sign-in page never fetches it.
   {
@@ -81,12 +90,12 @@ const chunkGroups = [
     priority: 30,
   },
   // What a visit's run log shares with its other sections and its report (the finding, the
-  // measured cycle, the outbox's waiting entries, voiding, the procedures' frame): one file, not
-  // five, three of them under 1 kB. On HTTP/1.1 the browser sends six requests at a time, and the
+  // measured cycle, the outbox's waiting entries): one file, not five, three of them under 1 kB.
+  // Voiding and the procedures' frame are not on the run log's first screen and stay out. On HTTP/1.1 the browser sends six requests at a time, and the
   // unit and its refrigerant's table, asked for as the visit answers, waited behind them.
   {
     name: "visit-parts",
-    test: /src[\\/]features[\\/](run-log[\\/]|offline[\\/]waiting-entries|visit[\\/]components[\\/]visit-void-action|procedures[\\/]components[\\/]procedure-layout)/,
+    test: /src[\\/]features[\\/](run-log[\\/]|offline[\\/]waiting-entries)/,
     minShareCount: 2,
     priority: 15,
   },

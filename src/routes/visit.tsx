@@ -18,7 +18,7 @@ import { Segmented } from "@/components/ui/field/segmented.tsx";
 import { VisitStatusBadge } from "@/components/ui/state/visit-status-badge.tsx";
 import { paths } from "@/config/paths.ts";
 import { RunLog } from "@/features/run-log/components/run-log.tsx";
-import { ROLE_READ_ONLY_NOTE } from "@/features/procedures/components/procedure-layout.tsx";
+import { ROLE_READ_ONLY_NOTE } from "@/features/procedures/utils/read-only-note.ts";
 import { CautionPanel } from "@/components/ui/caution-panel/caution-panel.tsx";
 import { useMe } from "@/lib/api/auth.ts";
 import { useChargeReferences } from "@/lib/api/charge-references.ts";

@@ -12,6 +12,7 @@ import { VoidedRecord } from "@/components/ui/void-record/voided-record.tsx";
 import { useOutboxEntries } from "@/features/offline/use-outbox.ts";
 import { WaitingEntries } from "@/features/offline/waiting-entries.tsx";
 import type { ProcedureSave } from "../hooks/use-procedure-save.ts";
+import { ROLE_READ_ONLY_NOTE } from "../utils/read-only-note.ts";
 
 /** A saved record as each procedure's list returns it: voidable, and named by the time it was taken. */
 interface TimedRecord {
@@ -61,8 +62,6 @@ interface ProcedureLayoutProps<Saved extends TimedRecord> extends ProcedurePanel
     children: ReactNode;
   };
 }
-
-export const ROLE_READ_ONLY_NOTE = "You can read this visit; recording is for technicians, seniors and owners.";
 
 /**
  * The frame the procedure sections share: their caution first, what was recorded on this

@@ -32,7 +32,6 @@ import { CsvImport } from "./csv-import.tsx";
 import { FindingPanel } from "./finding-panel.tsx";
 import { LiveLine } from "./live-line.tsx";
 import { MeasuredCyclePanel } from "./measured-cycle-panel.tsx";
-import { RecordedEntries } from "./recorded-entries.tsx";
 import { ReadingCards } from "./reading-cards.tsx";
 import { SettledIndicator } from "./settled-indicator.tsx";
 import { TimelineStrip } from "./timeline-strip.tsx";
@@ -42,6 +41,10 @@ import { formatTime } from "@shared/format/date-time.ts";
 // Below the reading and the timeline, with react-hook-form (14 kB): fetched once the run log is
 // drawn with its finding, so that it never delays them on a slow link.
 const AdjustmentForm = lazyPanel(() => import("./adjustment-form.tsx"), "AdjustmentForm", { afterFirstScreen: true });
+// Folded at first, and its void dialogs bring react-hook-form: loaded once the first screen is drawn.
+const RecordedEntries = lazyPanel(() => import("./recorded-entries.tsx"), "RecordedEntries", {
+  afterFirstScreen: true,
+});
 
 /** A field's name within a sentence: "Enter the suction pressure first". */
 const nameInSentence = (field: DraftField) => {

@@ -5,11 +5,8 @@ import { cleanup, render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { formatTime } from "@shared/format/date-time.ts";
-import {
-  CircuitChoice,
-  ProcedureLayout,
-  ROLE_READ_ONLY_NOTE,
-} from "@/features/procedures/components/procedure-layout.tsx";
+import { CircuitChoice, ProcedureLayout } from "@/features/procedures/components/procedure-layout.tsx";
+import { ROLE_READ_ONLY_NOTE } from "@/features/procedures/utils/read-only-note.ts";
 
 const VISIT_ID = "00000000-0000-4000-8000-000000000001";
 const STANDING = { id: "00000000-0000-4000-8000-000000000011", takenAt: "2026-12-01T08:05:00.000Z", voided: null };
