@@ -91,8 +91,9 @@ const chunkGroups = [
   },
   // What a visit's run log shares with its other sections and its report (the finding, the
   // measured cycle, the outbox's waiting entries): one file, not five, three of them under 1 kB.
-  // Voiding and the procedures' frame are not on the run log's first screen and stay out. On HTTP/1.1 the browser sends six requests at a time, and the
-  // unit and its refrigerant's table, asked for as the visit answers, waited behind them.
+  // Voiding and the procedures' frame are not on the run log's first screen and stay out. On
+  // HTTP/1.1 the browser sends six requests at a time, and the unit and its refrigerant's table,
+  // asked for as the visit answers, waited behind them.
   {
     name: "visit-parts",
     test: /src[\\/]features[\\/](run-log[\\/]|offline[\\/]waiting-entries)/,

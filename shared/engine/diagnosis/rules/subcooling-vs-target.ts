@@ -36,9 +36,10 @@ function reach(snapshot: DiagnosisSnapshot): number {
  * the air crossing it (TRADE.md §3, approach [S26][S34]), so subcooling is at most condensing
  * (bubble) minus outdoor air. When the head has fallen near ambient (a compressor that no longer
  * pumps) that can be less than the target: subcooling short of a target it could never reach is
- * not a shortage of liquid. Liquid within `SENSOR_TOLERANCE_K` of the air counts as at the air. A real shortage keeps its liquid well above the air (a large
- * approach), so it still reads low against the lowered band; and with the superheat high the band
- * stands, since the subcooling then separates a shortage from a restriction. Null: the band stands.
+ * not a shortage of liquid. Liquid within `SENSOR_TOLERANCE_K` of the air counts as at the air.
+ * A real shortage keeps its liquid well above the air (a large approach), so it still reads low
+ * against the lowered band; and with the superheat high the band stands, since the subcooling
+ * then separates a shortage from a restriction. Null: the band stands.
  */
 function reachableBand(snapshot: DiagnosisSnapshot, band: TargetBand): Band | null {
   if (snapshot.condenserApproachK === null || snapshot.subcoolingK === null) return null;
@@ -88,31 +89,19 @@ export const subcoolingVsTargetRule: DiagnosisRule = {
     const pivot = snapshot.subcoolingPivotK ?? band.targetK;
     const reachable = reachableBand(snapshot, band);
     const finding = bandedFinding(
-      reachable === null
-        ? {
-            ruleId: this.id,
-            reading: "subcoolingK",
-            value: subcooling,
-            unit: "K",
-            band,
-            feature: "subcooling",
-            family: snapshot.meteringFamily,
-            pivot,
-            messages: MESSAGES,
-            source: SOURCE,
-          }
-        : {
-            ruleId: this.id,
-            reading: "subcoolingK",
-            value: subcooling,
-            unit: "K",
-            band: reachable,
-            feature: "subcooling",
-            family: snapshot.meteringFamily,
-            pivot: pivot - (band.lowK - reachable.lowK),
-            messages: REACH_MESSAGES,
-            source: REACH_SOURCE,
-          },
+      {
+        ruleId: this.id,
+        reading: "subcoolingK",
+        value: subcooling,
+        unit: "K",
+        band: reachable ?? band,
+        feature: "subcooling",
+        family: snapshot.meteringFamily,
+        // The pivot moves down with the band it belongs to.
+        pivot: reachable === null ? pivot : pivot - (band.lowK - reachable.lowK),
+        messages: reachable === null ? MESSAGES : REACH_MESSAGES,
+        source: reachable === null ? SOURCE : REACH_SOURCE,
+      },
       snapshot,
     );
     return { findings: [finding], warnings: [] };
