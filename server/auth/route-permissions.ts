@@ -14,7 +14,7 @@
  */
 import { Router, type RequestHandler } from "express";
 import { PERMISSIONS, type Role } from "@shared/schemas/auth.ts";
-import { CASEBOOK_PERMISSIONS } from "@shared/schemas/casebook.ts";
+import { CASEBOOK_PERMISSIONS } from "@shared/schemas/casebook-permissions.ts";
 import { apiNotFound } from "../http/error-handler.ts";
 import { requireRole, requireUser } from "./session.ts";
 

@@ -1,7 +1,8 @@
 import { Router } from "express";
 import { z } from "zod";
 import { caseSafetyNotes, diagnose, scoreAttempt, workedSolution } from "@shared/engine/index.ts";
-import { AttemptCreateSchema, canCasebook } from "@shared/schemas/casebook.ts";
+import { AttemptCreateSchema } from "@shared/schemas/casebook.ts";
+import { canCasebook } from "@shared/schemas/casebook-permissions.ts";
 import { getAuth } from "../auth/session.ts";
 import { findAttempt, findCase, insertAttempt, listAttempts, progressFor, teamProgress } from "../db/casebook.ts";
 import { notFound } from "../http/http-error.ts";

@@ -14,7 +14,7 @@
 import { z } from "zod";
 // Straight from its file, not the engine's index: the index also loads the scorer, which reads this module.
 import { GENERATOR_REFRIGERANTS } from "../engine/casebook/generate-case.ts";
-import { ROLES, type Role } from "./auth.ts";
+import { ROLES } from "./auth.ts";
 import {
   ApplicationSchema,
   ChargeDeviationSchema,
@@ -76,17 +76,6 @@ export const CASE_SAFETY_TOPICS = [
   "hot-surface",
 ] as const;
 export const CaseSafetyTopicSchema = z.enum(CASE_SAFETY_TOPICS);
-
-/** Who may do what in the casebook (issue 5 role rules: everyone reads and practises; seniors and owners author). */
-export const CASEBOOK_PERMISSIONS = {
-  author: ["owner", "senior"],
-  attempt: ROLES,
-  seeTeamProgress: ["owner", "senior"],
-} as const satisfies Record<string, readonly Role[]>;
-
-export function canCasebook(role: Role, permission: keyof typeof CASEBOOK_PERMISSIONS): boolean {
-  return (CASEBOOK_PERMISSIONS[permission] as readonly Role[]).includes(role);
-}
 
 // ---------------------------------------------------------------------------------------------
 // The case

@@ -5,10 +5,31 @@
  * visit and at the twenty-thousandth, and a row added meanwhile neither repeats nor hides one.
  */
 import { z } from "zod";
+import { boundEnd, boundStart, dayOrInstant } from "./dates.ts";
 import { EQUIPMENT_KINDS, EquipmentSchema } from "./equipment.ts";
-import { periodInOrder, REGISTER_FILTER_FIELDS } from "./register.ts";
 import { text } from "./text.ts";
 import { VISIT_STATUSES, VisitStatusSchema, VisitSummarySchema } from "./visits.ts";
+
+/** A calendar date or a date-time with offset; a bare date is a whole UTC day. */
+const DateBoundSchema = dayOrInstant();
+
+/**
+ * The register's filters: a period and a technician, shared by its page (below) and its CSV
+ * export (register.ts). Here, not there, so that the lists' contracts, which every signed-in
+ * screen loads, do not build the register's.
+ */
+export const REGISTER_FILTER_FIELDS = {
+  from: DateBoundSchema.optional(),
+  to: DateBoundSchema.optional(),
+  technicianId: z.uuid("Choose a technician").optional(),
+};
+
+/** A period whose end comes before its start is a typing slip, not an empty register. */
+export const periodInOrder: [(value: { from?: string; to?: string }) => boolean, { path: string[]; message: string }] =
+  [
+    (value) => !value.from || !value.to || boundStart(value.from) <= boundEnd(value.to),
+    { path: ["to"], message: "The end of the period is before its start" },
+  ];
 
 /** Rows in a page when the client does not say: a screenful on a tablet, a few scrolls on a phone. */
 export const DEFAULT_PAGE_SIZE = 50;

@@ -21,7 +21,8 @@ import {
 } from "./procedures.ts";
 import { PersonRefSchema, VoidInfoSchema } from "./visits.ts";
 import { ChargeDeviationSchema } from "./diagnosis.ts";
-import { boundEnd, boundStart, dayOrInstant, instant } from "./dates.ts";
+import { instant } from "./dates.ts";
+import { periodInOrder, REGISTER_FILTER_FIELDS } from "./list-pages.ts";
 import { optionalClientId } from "./device-entries.ts";
 import { text } from "./text.ts";
 
@@ -346,23 +347,6 @@ export const EquipmentRefrigerantSchema = z.object({
   leakRate: AnnualLeakRateSchema.nullable(),
 });
 export type EquipmentRefrigerant = z.infer<typeof EquipmentRefrigerantSchema>;
-
-/** A calendar date or a date-time with offset; a bare date is a whole UTC day. */
-const DateBoundSchema = dayOrInstant();
-
-/** The register's filters: a period and a technician, shared by the list and its CSV export. */
-export const REGISTER_FILTER_FIELDS = {
-  from: DateBoundSchema.optional(),
-  to: DateBoundSchema.optional(),
-  technicianId: z.uuid("Choose a technician").optional(),
-};
-
-/** A period whose end comes before its start is a typing slip, not an empty register. */
-export const periodInOrder: [(value: { from?: string; to?: string }) => boolean, { path: string[]; message: string }] =
-  [
-    (value) => !value.from || !value.to || boundStart(value.from) <= boundEnd(value.to),
-    { path: ["to"], message: "The end of the period is before its start" },
-  ];
 
 /** Query of GET /api/register/export.csv (and the filters of GET /api/register). */
 export const RegisterQuerySchema = z.object(REGISTER_FILTER_FIELDS).refine(...periodInOrder);

@@ -1,7 +1,8 @@
 import { useState } from "react";
 import { useSuspenseQuery, type QueryClient, type UseSuspenseQueryResult } from "@tanstack/react-query";
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from "react-router-dom";
-import { canCasebook, type Case, type CaseDraft } from "@shared/schemas/casebook.ts";
+import { type Case, type CaseDraft } from "@shared/schemas/casebook.ts";
+import { canCasebook } from "@shared/schemas/casebook-permissions.ts";
 import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { StaleWriteNotice } from "@/components/ui/stale-write/stale-write-notice.tsx";
 import { paths } from "@/config/paths.ts";

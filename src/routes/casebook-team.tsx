@@ -1,6 +1,6 @@
 import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
 import { Link } from "react-router-dom";
-import { canCasebook } from "@shared/schemas/casebook.ts";
+import { canCasebook } from "@shared/schemas/casebook-permissions.ts";
 import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { paths } from "@/config/paths.ts";
 import { TeamProgressList } from "@/features/casebook/components/team-progress.tsx";

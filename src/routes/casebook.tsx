@@ -2,7 +2,7 @@ import { Plus, Users } from "lucide-react";
 import { useSuspenseQuery, type QueryClient } from "@tanstack/react-query";
 import type { ReactNode } from "react";
 import { Link } from "react-router-dom";
-import { canCasebook } from "@shared/schemas/casebook.ts";
+import { canCasebook } from "@shared/schemas/casebook-permissions.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";
 import { ScreenBoundary } from "@/components/errors/screen-boundary.tsx";
 import { buttonVariants } from "@/components/ui/button/button.tsx";

@@ -7,7 +7,7 @@ import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from "react
 import { getRefrigerant } from "@shared/engine/index.ts";
 import { can } from "@shared/schemas/auth.ts";
 import { acceptsEntries, closedVisitMessage, visitReasonText } from "@shared/schemas/visits.ts";
-import { canCasebook } from "@shared/schemas/casebook.ts";
+import { canCasebook } from "@shared/schemas/casebook-permissions.ts";
 import { circuitFacts } from "@shared/schemas/circuit-facts.ts";
 import { safetyClasses } from "@shared/content/safety-classes.ts";
 import { PanelBoundary } from "@/components/errors/panel-boundary.tsx";

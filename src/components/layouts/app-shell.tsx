@@ -2,6 +2,7 @@ import { Menu } from "lucide-react";
 import { useEffect, useState } from "react";
 import { Link, Navigate, Outlet, useLocation, useNavigation } from "react-router-dom";
 import { fetchToastLibraryWhenIdle } from "@/components/ui/toaster/toaster.tsx";
+import { SaturaMark } from "@/components/ui/satura-mark/satura-mark.tsx";
 import { isNavItemActive, navigationFor, type NavItem } from "@/config/navigation.ts";
 import { paths } from "@/config/paths.ts";
 import { UserMenu } from "@/features/auth/components/user-menu.tsx";
@@ -62,7 +63,7 @@ export function AppShell() {
       </a>
       <aside className="no-print hidden w-56 shrink-0 flex-col border-r-2 border-rule bg-surface md:flex">
         <div className="flex items-center gap-2 px-4 py-5">
-          <img src="/satura-mark.svg" alt="" className="size-8" />
+          <SaturaMark className="size-8" />
           <span className="text-xl font-semibold tracking-tight">Satura</span>
         </div>
         <nav aria-label="Main" className="flex flex-col gap-1 px-2">
@@ -90,7 +91,7 @@ export function AppShell() {
       <div className="flex min-w-0 flex-1 flex-col">
         <header className="no-print flex items-center justify-between gap-2 border-b-2 border-rule bg-surface px-4 py-2 md:hidden">
           <div className="flex items-center gap-2">
-            <img src="/satura-mark.svg" alt="" className="size-7" />
+            <SaturaMark className="size-7" />
             <span className="text-lg font-semibold">Satura</span>
           </div>
           <div className="flex items-center gap-2">

@@ -1,7 +1,5 @@
 import { useQueries, useQueryClient } from "@tanstack/react-query";
 import { useEffect } from "react";
-import { visitRefrigerantQueryOptions } from "@/lib/api/register.ts";
-import { prefetchProcedureLists } from "@/lib/api/procedures.ts";
 import { loadVisitScreen } from "@/lib/api/screen-data.ts";
 import { MY_OPEN_VISITS, OPEN_VISITS_FIRST_PAGE, visitsQueryOptions } from "@/lib/api/visits.ts";
 import { useOnlineStatus } from "./online-status.ts";
@@ -31,6 +29,12 @@ export function useDayOnDevice(): void {
     if (!online || !ids) return;
     let stopped = false;
     const keep = async () => {
+      // The register's and the procedures' contracts come now, not with the frame: building
+      // their schemas held up every signed-in screen's first render (vite.config.ts).
+      const [{ visitRefrigerantQueryOptions }, { prefetchProcedureLists }] = await Promise.all([
+        import("@/lib/api/register.ts"),
+        import("@/lib/api/procedures.ts"),
+      ]);
       for (const id of ids.split(" ")) {
         if (stopped || !navigator.onLine) return;
         await loadVisitScreen(queryClient, id);
