@@ -129,8 +129,8 @@ const chunkGroups = [
   },
   // The engine without its tables (each refrigerant's table stays a chunk of its own, their
   // import list one of its own above) and without the three small modules the API schemas read,
-  // which would pull it into every screen; with the casebook's schema and API module, which read
-  // the case generator, and the display units, which convert with the engine.
+  // which would pull it into every screen; with the display units, which convert with the engine.
+  // The casebook's contract, which reads the case generator, is in its own group above.
   {
     name: "engine",
     test: (id: string) =>
