@@ -3,7 +3,16 @@ import { Router, type Response } from "express";
 import { upperFirst } from "@shared/format/upper-first.ts";
 import { chargeStateText } from "@shared/content/charge-states.ts";
 import { authoredAnswers, diagnose, generateCase, seededRandom } from "@shared/engine/index.ts";
-import { asksChargeToAdd, CaseDraftSchema, CaseFromReadingSchema, cycleQuestionsOf, GenerateCaseSchema, generatedCaseId, type Case, type CaseDraft } from "@shared/schemas/casebook.ts";
+import {
+  asksChargeToAdd,
+  CaseDraftSchema,
+  CaseFromReadingSchema,
+  cycleQuestionsOf,
+  GenerateCaseSchema,
+  generatedCaseId,
+  type Case,
+  type CaseDraft,
+} from "@shared/schemas/casebook.ts";
 import { canCasebook } from "@shared/schemas/casebook-permissions.ts";
 import { getAuth } from "../auth/session.ts";
 import {
