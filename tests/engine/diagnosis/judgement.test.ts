@@ -226,6 +226,12 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
     const shortage = subcooling.pointsTo.find((evidence) => evidence.state === "undercharged")?.weight ?? 0;
     expect(shortage).toBeLessThan(0.2);
     expect(atAmbient.chargeState).toBe("weak-compressor");
+    // Its liquid 0.5 K over the air is the head near ambient, not a condenser full of liquid: a
+    // flooded condenser subcools well above its band (TRADE.md §2: overcharge, SC ↑), and this
+    // one is short of subcooling, so the approach is no evidence of an overcharge.
+    const approach = atAmbient.findings.find((finding) => finding.ruleId === "condenser-approach")!;
+    expect(approach.direction).not.toBe("low");
+    expect(atAmbient.alternatives.map((alternative) => alternative.state)).not.toContain("overcharged");
     // A shortage on the same day keeps its liquid well above the air: still low against what the
     // condenser could give, and still undercharged.
     const short = diagnose(

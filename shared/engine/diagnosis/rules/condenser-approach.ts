@@ -24,12 +24,13 @@ const MESSAGES: BandedReading["messages"] = {
 };
 
 /**
- * The expected approach, raised by any subcooling shortfall. Approach ≈ condensing over ambient −
- * subcooling, so a liquid line with too little subcooling reads a high approach from a condenser
- * that rejects its heat well; that shortfall is the subcooling rule's evidence (undercharge,
- * restriction), not the condenser's. Only a high approach the short subcooling does not explain
- * points at the condenser. Subcooling above target is left alone: a high computed subcooling with
- * a high approach is what tells air in the system from a dirty coil.
+ * The expected approach, its upper side raised by any subcooling shortfall and its lower side
+ * dropped. Approach ≈ condensing over ambient − subcooling, so a liquid line with too little
+ * subcooling reads a high approach from a condenser that rejects its heat well; that shortfall is
+ * the subcooling rule's evidence (undercharge, restriction), not the condenser's. Only a high
+ * approach the short subcooling does not explain points at the condenser. Subcooling above target
+ * is left alone: a high computed subcooling with a high approach is what tells air in the system
+ * from a dirty coil.
  */
 function expectedApproach(snapshot: DiagnosisSnapshot): TargetBand {
   const band = snapshot.condenserApproachTarget;
@@ -38,7 +39,9 @@ function expectedApproach(snapshot: DiagnosisSnapshot): TargetBand {
   if (target === null || subcooling === null || snapshot.subcoolingExcluded !== null) return band;
   const shortfall = target.lowK - subcooling;
   if (shortfall <= 0) return band;
-  return { ...band, lowK: band.lowK + shortfall, highK: band.highK + shortfall, targetK: band.targetK + shortfall };
+  // A condenser short of subcooling holds no liquid to spare, so a small approach there says the
+  // head is near the air (a compressor that no longer pumps, a light load), not that it is full.
+  return { ...band, lowK: 0, highK: band.highK + shortfall, targetK: band.targetK + shortfall };
 }
 
 export const condenserApproachRule: DiagnosisRule = {
