@@ -49,14 +49,19 @@ function reactRouterProductionBuild(): Plugin {
  */
 const REFRIGERANT_TABLE = /data[\\/]refrigerants[\\/]/;
 /**
- * The casebook's, the procedures' and the register's contracts: about 1,600 of the 2,800 zod
- * schemas the client builds, each built when its module first runs (15–25 µs apiece on a
- * desktop, four times that on the throttled phone). In the common chunk every signed-in screen
- * built them all before its first render; in groups of their own they come with the screens
- * that use them.
+ * The casebook's, the procedures' and the register's contracts, each a chunk group of its own: about
+ * 1,600 of the 2,800 zod schemas the client builds, each built when its module first runs (15–25 µs
+ * apiece on a desktop, four times that on the throttled phone). In the common chunk every signed-in
+ * screen built them all before its first render; apart, they come with the screens that use them.
+ * The casebook's takes the scorer, which reads its answer fields and tolerances: in the engine's
+ * chunk it made the engine import this one, which imports the engine's case generator.
  */
-const FEATURE_CONTRACTS =
-  /shared[\\/]schemas[\\/](casebook|procedures|procedure-records|register)\.ts$|src[\\/]lib[\\/]api[\\/](casebook|procedures|organisation|register)\.ts$/;
+const FEATURE_CONTRACTS: Record<string, RegExp> = {
+  "casebook-contracts": /(schemas|api)[\\/]casebook\.ts$|engine[\\/]casebook[\\/]score-attempt\.ts$/,
+  "procedure-contracts": /schemas[\\/]procedure(s|-records)\.ts$|api[\\/](procedures|organisation)\.ts$/,
+  "register-contracts": /(schemas|api)[\\/]register\.ts$/,
+};
+const isFeatureContract = (id: string) => Object.values(FEATURE_CONTRACTS).some((test) => test.test(id));
 const chunkGroups = [
   // Everything the first page needs, whichever it is, in one file beside the entry.
   { name: "start", tags: ["$initial" as const], priority: 50 },
@@ -109,19 +114,7 @@ const chunkGroups = [
     minShareCount: 2,
     priority: 15,
   },
-  // With the scorer, which reads the casebook's contract (its answer fields and tolerances): in the
-  // engine's chunk it made the engine import this one, which imports the engine's case generator.
-  {
-    name: "casebook-contracts",
-    test: /(schemas|api)[\\/]casebook\.ts$|engine[\\/]casebook[\\/]score-attempt\.ts$/,
-    priority: 25,
-  },
-  {
-    name: "procedure-contracts",
-    test: /schemas[\\/]procedure(s|-records)\.ts$|api[\\/](procedures|organisation)\.ts$/,
-    priority: 25,
-  },
-  { name: "register-contracts", test: /(schemas|api)[\\/]register\.ts$/, priority: 25 },
+  ...Object.entries(FEATURE_CONTRACTS).map(([name, test]) => ({ name, test, priority: 25 })),
   {
     name: "data-table",
     test: /node_modules[\\/](@tanstack[\\/](react-table|table-core|store|react-store)|use-sync-external-store)[\\/]|src[\\/]components[\\/]ui[\\/]data-table[\\/]/,
@@ -152,7 +145,7 @@ const chunkGroups = [
       /shared[\\/](schemas|content|format)[\\/]|refrigerant-catalogue|property-tolerances|procedure-limits|src[\\/](lib|components|hooks)[\\/]|src[\\/]features[\\/]offline[\\/](outbox-store|use-outbox)\.|read-only-note\.|node_modules[\\/](zod|lucide-react|class-variance-authority|react-error-boundary|@tanstack[\\/](query-core|react-query))[\\/]/.test(
         id,
       ) &&
-      !FEATURE_CONTRACTS.test(id) &&
+      !isFeatureContract(id) &&
       !/src[\\/]lib[\\/]units[\\/]/.test(id),
     minShareCount: 2,
     priority: 10,
