@@ -250,6 +250,29 @@ describe("judgement a master technician would sign (TRADE.md §2 symptom table)"
     expect(short.chargeState).toBe("undercharged");
   });
 
+  it("liquid colder than the outdoor air is not read as a condenser full of liquid: the figure gives no state any weight (TRADE.md §3 [S26][S34])", () => {
+    // Liquid 2 K under a 34 °C day, subcooling in its band. No condenser cools its liquid below
+    // the air cooling it, so the approach is a probe or a restriction, never an overcharge.
+    const inputs = [
+      r410a({ condensingC: 40, subcoolingK: 6, outdoorAirDryBulbC: 36 }),
+      r410a({ condensingC: 40, subcoolingK: 2, outdoorAirDryBulbC: 40 }),
+    ];
+    for (const input of inputs) {
+      const result = diagnose(input);
+      const approach = result.findings.find((finding) => finding.ruleId === "condenser-approach")!;
+      expect(result.condenserApproachK).toBeLessThan(-1);
+      expect(approach.direction).toBe("not-judged");
+      expect(approach.pointsTo).toEqual([]);
+      expect(approach.message).not.toMatch(/full of liquid/);
+      expect(codes(result)).toContain("liquid-colder-than-outdoor-air");
+    }
+    // Within the probes' tolerance (1 K) of the air it is still judged: low, a full condenser.
+    const atTheAir = diagnose(r410a({ condensingC: 40, subcoolingK: 6, outdoorAirDryBulbC: 34.5 }));
+    const approach = atTheAir.findings.find((finding) => finding.ruleId === "condenser-approach")!;
+    expect(approach.direction).toBe("low");
+    expect(codes(atTheAir)).not.toContain("liquid-colder-than-outdoor-air");
+  });
+
   it("on a TXV high superheat with subcooling below target is a shortage, and the first evidence line says so [S24][S25]", () => {
     const result = diagnose({
       refrigerant: "R407C",

@@ -3,7 +3,7 @@ import { formatTenths } from "../format-tenths.ts";
 import { cite } from "../../sources/cite.ts";
 import { DIAGNOSIS_SOURCES } from "../../sources/diagnosis-sources.ts";
 import type { TargetBand } from "../../../schemas/diagnosis.ts";
-import type { DiagnosisRule, DiagnosisSnapshot } from "../types.ts";
+import type { DiagnosisRule, DiagnosisSnapshot, RuleOutput } from "../types.ts";
 import { bandedFinding, type BandedReading } from "./banded-finding.ts";
 import { NO_OUTPUT } from "./no-output.ts";
 
@@ -52,6 +52,7 @@ export const condenserApproachRule: DiagnosisRule = {
   evaluate(snapshot) {
     const approach = snapshot.condenserApproachK;
     if (approach === null) return NO_OUTPUT;
+    if (approach < -SENSOR_TOLERANCE_K) return colderThanTheAir(snapshot, approach);
     const band = expectedApproach(snapshot);
     const finding = bandedFinding(
       {
@@ -68,18 +69,37 @@ export const condenserApproachRule: DiagnosisRule = {
       },
       snapshot,
     );
-    if (approach >= -SENSOR_TOLERANCE_K) return { findings: [finding], warnings: [] };
-    return {
-      findings: [finding],
-      warnings: [
-        {
-          code: "liquid-colder-than-outdoor-air",
-          severity: "caution",
-          field: "liquidLineTempC",
-          message: `Liquid line ${formatTenths(snapshot.input.liquidLineTempC)} °C is colder than the outdoor air ${formatTenths(snapshot.input.outdoorAirDryBulbC ?? Number.NaN)} °C: only a pressure drop (restriction) before the probe can do that — check the probe, then look for a cold spot or sweat before it`,
-          source: SOURCE,
-        },
-      ],
-    };
+    return { findings: [finding], warnings: [] };
   },
 };
+
+/**
+ * Liquid colder than the air cooling it, beyond the probes' tolerance: no condenser does that, so
+ * the figure is not judged and gives no state any weight (read as "low" it would count for an
+ * overcharge). A probe is wrong, or the liquid flashed through a restriction before its probe.
+ */
+function colderThanTheAir(snapshot: DiagnosisSnapshot, approach: number): RuleOutput {
+  return {
+    findings: [
+      {
+        ruleId: condenserApproachRule.id,
+        reading: "condenserApproachK",
+        value: approach,
+        unit: "K",
+        direction: "not-judged",
+        pointsTo: [],
+        message: `Condenser approach ${formatTenths(approach)} K is not judged: no condenser cools its liquid below the air cooling it`,
+        source: SOURCE,
+      },
+    ],
+    warnings: [
+      {
+        code: "liquid-colder-than-outdoor-air",
+        severity: "caution",
+        field: "liquidLineTempC",
+        message: `Liquid line ${formatTenths(snapshot.input.liquidLineTempC)} °C is colder than the outdoor air ${formatTenths(snapshot.input.outdoorAirDryBulbC ?? Number.NaN)} °C: only a pressure drop (restriction) before the probe can do that — check the probe, then look for a cold spot or sweat before it`,
+        source: SOURCE,
+      },
+    ],
+  };
+}
