@@ -1,4 +1,5 @@
 import { Router } from "express";
+import { VISIT_EQUIPMENT_HEADER, VISIT_REFRIGERANT_HEADER } from "@shared/http/visit-headers.ts";
 import { VisitListQuerySchema } from "@shared/schemas/list-pages.ts";
 import {
   AdjustmentCreateSchema,
@@ -113,6 +114,8 @@ export function visitsRouter({
     if (!head) throw notFound("Visit");
     const etag = visitEtag(head.token);
     res.setHeader("ETag", etag);
+    res.setHeader(VISIT_EQUIPMENT_HEADER, head.equipmentId);
+    res.setHeader(VISIT_REFRIGERANT_HEADER, head.refrigerant);
     // Always revalidate: a visit is live, and a cached copy must be checked against its revision.
     res.setHeader("Cache-Control", "private, no-cache");
     if (matchesIfNoneMatch(req.get("if-none-match"), etag)) return void res.status(304).end();

@@ -8,6 +8,7 @@ import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoSite } from "@server/db/seed/demo-scenario.ts";
 import { atmosphericPressureAtAltitude, saturationPressure } from "@shared/engine/index.ts";
+import { VISIT_EQUIPMENT_HEADER, VISIT_REFRIGERANT_HEADER } from "@shared/http/visit-headers.ts";
 import { VisitDetailResponseSchema } from "@shared/schemas/visits.ts";
 import { createTestApp, type TestApp } from "../setup/test-app.ts";
 import { BELLBIRD, seedBellbird, signedIn } from "../setup/demo-accounts.ts";
@@ -69,6 +70,15 @@ describe("visit revision, conditional GET and deltas", () => {
     // A delta request naming the same revision is answered the same way.
     const since = await detail(`?since=${first.body.visit.revision}`, { "If-None-Match": first.headers.etag! });
     expect(since.status).toBe(304);
+  });
+
+  it("names the visit's unit and refrigerant in its headers, as its body does, on 200 and on 304", async () => {
+    const first = await detail();
+    expect(first.headers[VISIT_EQUIPMENT_HEADER.toLowerCase()]).toBe(first.body.visit.equipmentId);
+    expect(first.headers[VISIT_REFRIGERANT_HEADER.toLowerCase()]).toBe(first.body.visit.refrigerant);
+    const again = await detail("", { "If-None-Match": first.headers.etag! });
+    expect(again.status).toBe(304);
+    expect(again.headers[VISIT_EQUIPMENT_HEADER.toLowerCase()]).toBe(first.body.visit.equipmentId);
   });
 
   it("answers 304 from the visit's row alone: the run log's tables are not read", async () => {

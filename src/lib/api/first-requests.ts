@@ -1,6 +1,7 @@
 import type { QueryClient } from "@tanstack/react-query";
 import { matchPath } from "react-router-dom";
 import { paths } from "@/config/paths.ts";
+import { VISIT_EQUIPMENT_HEADER, VISIT_REFRIGERANT_HEADER } from "@shared/http/visit-headers.ts";
 import { startEarlyRequest } from "./api-client.ts";
 import { meQueryOptions } from "./auth.ts";
 
@@ -12,10 +13,9 @@ const RECORD_ID = /^[0-9a-f-]{36}$/i;
  * Sends the first screen's own requests at start-up, before the router asks for the screen's
  * scripts: on a slow link a request sent after them waits for a free connection (six per host)
  * and arrived seconds late. Who is signed in, for every screen that checks; a unit's record; a
- * visit's record and, as soon as it answers, its unit's record and its refrigerant's table. The
- * screen's loader and queries then take these up (startEarlyRequest) and parse them with the
- * shared schemas as always; here only two ids are read from a copy of the visit, to send the
- * next requests sooner.
+ * visit's record and, as soon as its headers arrive, its unit's record and its refrigerant's
+ * table. The screen's loader and queries then take these up (startEarlyRequest) and parse them
+ * with the shared schemas as always; here nothing is parsed.
  */
 export function startFirstRequests(queryClient: QueryClient, pathname: string): void {
   if (!WITHOUT_SESSION.some((path) => matchPath(path, pathname))) void queryClient.prefetchQuery(meQueryOptions());
@@ -27,21 +27,19 @@ export function startFirstRequests(queryClient: QueryClient, pathname: string): 
     // answers, and the table goes out then, not once the common chunk has arrived and run.
     const tables = import("@shared/property-tables/prefetch-refrigerant-table.ts");
     startEarlyRequest(`/visits/${visitId}`)
-      .then(async (response) => (response.ok ? ((await response.clone().json()) as EarlyVisit) : null))
-      .then(async (answer) => {
-        if (typeof answer?.visit?.equipmentId === "string") startUnitRequests(answer.visit.equipmentId);
-        if (typeof answer?.visit?.refrigerant === "string")
-          (await tables).prefetchRefrigerantTable(answer.visit.refrigerant);
+      .then(async (response) => {
+        if (!response.ok) return;
+        // Named in the headers (shared/http/visit-headers.ts), so these go out as the headers
+        // arrive, not once the body has come and been parsed a second time.
+        const equipmentId = response.headers.get(VISIT_EQUIPMENT_HEADER);
+        const refrigerant = response.headers.get(VISIT_REFRIGERANT_HEADER);
+        if (equipmentId) startUnitRequests(equipmentId);
+        if (refrigerant) (await tables).prefetchRefrigerantTable(refrigerant);
       })
       .catch(() => undefined); // the screen's own request reports failures
   }
   const equipmentId = matchPath(paths.equipment.detail.path, pathname)?.params.equipmentId;
   if (equipmentId) startUnitRequests(equipmentId);
-}
-
-/** The two fields read from the visit before its schema has loaded; anything else is ignored. */
-interface EarlyVisit {
-  visit?: { equipmentId?: unknown; refrigerant?: unknown };
 }
 
 function startUnitRequests(equipmentId: string): void {

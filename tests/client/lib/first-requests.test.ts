@@ -3,6 +3,7 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 import { z } from "zod";
 import { apiRequest, forgetEarlyRequests, startEarlyRequest } from "@/lib/api/api-client.ts";
 import { startFirstRequests } from "@/lib/api/first-requests.ts";
+import { VISIT_EQUIPMENT_HEADER } from "@shared/http/visit-headers.ts";
 
 const VISIT_ID = "00000000-0000-4000-8000-000000000100";
 const UNIT_ID = "00000000-0000-4000-8000-000000000101";
@@ -84,6 +85,47 @@ describe("startFirstRequests", () => {
     expect(asked).toEqual(["/api/auth/me", `/api/visits/${VISIT_ID}`]);
     await apiRequest(`/visits/${VISIT_ID}`);
     expect(asked).toHaveLength(2);
+  });
+
+  it("asks for the visit's unit as soon as the visit's headers name it, before its body has arrived", async () => {
+    const asked: string[] = [];
+    // The visit's body never finishes arriving: only its headers can have sent the unit's requests.
+    const endless = new ReadableStream<Uint8Array>({
+      start: (controller) => controller.enqueue(new Uint8Array([123])),
+    });
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async (input: RequestInfo | URL) => {
+        const url = String(input);
+        asked.push(url);
+        if (url === `/api/visits/${VISIT_ID}`)
+          return new Response(endless, { status: 200, headers: { [VISIT_EQUIPMENT_HEADER]: UNIT_ID } });
+        return new Response("{}", { status: url === "/api/auth/me" ? 401 : 200 });
+      }),
+    );
+    startFirstRequests(new QueryClient({ defaultOptions: { queries: { retry: false } } }), `/visits/${VISIT_ID}`);
+    await vi.waitFor(() => expect(asked).toContain(`/api/equipment/${UNIT_ID}`));
+    expect(asked).toContain(`/api/equipment/${UNIT_ID}/charge-references`);
+  });
+
+  it("asks for no unit when the visit is refused or its headers name none", async () => {
+    for (const answer of [
+      () => new Response("{}", { status: 404, headers: { [VISIT_EQUIPMENT_HEADER]: UNIT_ID } }),
+      () => new Response("{}", { status: 200 }),
+    ]) {
+      const asked: string[] = [];
+      vi.stubGlobal(
+        "fetch",
+        vi.fn(async (input: RequestInfo | URL) => {
+          asked.push(String(input));
+          return String(input) === `/api/visits/${VISIT_ID}` ? answer() : new Response("{}", { status: 401 });
+        }),
+      );
+      startFirstRequests(new QueryClient({ defaultOptions: { queries: { retry: false } } }), `/visits/${VISIT_ID}`);
+      await new Promise((resolve) => setTimeout(resolve, 20));
+      expect(asked.some((url) => url.startsWith("/api/equipment/"))).toBe(false);
+      forgetEarlyRequests();
+    }
   });
 
   it("starts a unit's record and charge references on the unit's page, not on the new-unit form", () => {
