@@ -13,3 +13,11 @@ beforeEach(() => {
 afterEach(() => {
   errorSpy?.mockRestore();
 });
+
+// Screens rendered in a page (jsdom) are unmounted after each test, as Testing Library does by
+// itself where test functions are global: one left mounted kept listening, and an answer arriving
+// after its page was gone (a library still loading) failed the run with "window is not defined".
+if (typeof document !== "undefined") {
+  const { cleanup } = await import("@testing-library/react");
+  afterEach(cleanup);
+}
