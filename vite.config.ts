@@ -1,3 +1,4 @@
+import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
@@ -38,6 +39,26 @@ function reactRouterProductionBuild(): Plugin {
     apply: "build",
     enforce: "pre",
     resolveId: (source) => builds[source] ?? null,
+  };
+}
+
+/**
+ * The tab's icon written into the page as a data URL, from public/satura-mark.svg (the installed
+ * app's icon), so the mark has one source: fetched, the icon held one of the six connections a
+ * slow link gives the first screen's scripts and data. index.html names the file; the development
+ * server and the build both inline it.
+ */
+function inlineTabIcon(): Plugin {
+  const file = fromRoot("./public/satura-mark.svg");
+  return {
+    name: "inline-tab-icon",
+    transformIndexHtml(html) {
+      const svg = readFileSync(file, "utf8").trim();
+      const dataUrl = `data:image/svg+xml,${encodeURIComponent(svg)}`;
+      const link = /<link rel="icon" type="image\/svg\+xml" href="\/satura-mark\.svg" \/>/;
+      if (!link.test(html)) throw new Error("index.html no longer names /satura-mark.svg as the tab's icon");
+      return html.replace(link, `<link rel="icon" type="image/svg+xml" href="${dataUrl}" />`);
+    },
   };
 }
 
@@ -203,7 +224,7 @@ const installableApp = VitePWA({
 });
 
 export default defineConfig({
-  plugins: [react(), tailwindcss(), reactRouterProductionBuild(), installableApp, precompressAssets()],
+  plugins: [react(), tailwindcss(), reactRouterProductionBuild(), inlineTabIcon(), installableApp, precompressAssets()],
   // convert-units 2.x pulls lodash modules that read `global` (STACK.md gotcha 3).
   // __SATURA_BUILD__: the build's identity, so that data kept on a device (src/features/offline/
   // persist-queries.ts) is read only by the screens that wrote it.

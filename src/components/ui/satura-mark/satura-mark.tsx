@@ -1,7 +1,8 @@
 /**
- * Satura's mark, drawn in the page rather than fetched (public/satura-mark.svg stays the
- * installed app's icon, and index.html inlines the tab's): on a slow link an image request
- * holds one of the browser's six connections while the screen's scripts and data wait for one.
+ * Satura's mark, drawn in the page rather than fetched: on a slow link an image request holds one
+ * of the browser's six connections while the screen's scripts and data wait for one. The same
+ * shapes as public/satura-mark.svg, the installed app's icon and (inlined by the build) the tab's;
+ * tests/client/components/satura-mark.test.tsx holds the two together.
  */
 export function SaturaMark({ className }: { className?: string }) {
   return (
