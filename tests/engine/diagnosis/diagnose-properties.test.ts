@@ -8,6 +8,7 @@ import {
   type EvidenceState,
 } from "@shared/schemas/diagnosis";
 import { absoluteToGauge, diagnose, saturationPressure } from "@shared/engine/index";
+import { SENSOR_TOLERANCE_K } from "@shared/engine/diagnosis/diagnosis-limits";
 
 const confidenceOf = (result: DiagnosisResult, state: EvidenceState) =>
   result.chargeState === state
@@ -59,6 +60,18 @@ const circuit = fc
 
 const step = fc.double({ min: 0.05, max: 8, noNaN: true });
 
+/**
+ * Liquid no colder than the air cooling the condenser, within the probes' tolerance: a liquid line
+ * below it is not liquid backing up but a probe or a restriction before it, and its approach is
+ * not judged (decision 045; TRADE.md §3 [S26][S34]). The subcooling properties hold on such
+ * readings; a circuit with no outdoor air has nothing to be colder than.
+ */
+const liquidOverTheAir = (input: DiagnosisInputDraft) =>
+  input.outdoorAirDryBulbC === undefined ||
+  input.liquidLineTempC === undefined ||
+  // The approach as the engine works it out (liquid − air), so a boundary case is judged alike.
+  input.liquidLineTempC - input.outdoorAirDryBulbC >= -SENSOR_TOLERANCE_K;
+
 describe("diagnose (properties)", () => {
   it("returns a schema-valid result for any consistent circuit", () => {
     fc.assert(fc.property(circuit, (input) => DiagnosisResultSchema.safeParse(diagnose(input)).success));
@@ -70,6 +83,7 @@ describe("diagnose (properties)", () => {
     fc.assert(
       fc.property(circuit, step, (input, more) => {
         const colder = { ...input, liquidLineTempC: input.liquidLineTempC - more };
+        fc.pre(liquidOverTheAir(colder));
         return confidenceOf(diagnose(colder), "undercharged") <= confidenceOf(diagnose(input), "undercharged") + 1e-12;
       }),
     );
@@ -79,6 +93,7 @@ describe("diagnose (properties)", () => {
     fc.assert(
       fc.property(circuit, step, (input, more) => {
         const colder = { ...input, liquidLineTempC: input.liquidLineTempC - more };
+        fc.pre(liquidOverTheAir(colder));
         return confidenceOf(diagnose(colder), "overcharged") >= confidenceOf(diagnose(input), "overcharged") - 1e-12;
       }),
     );
