@@ -31,7 +31,15 @@ import { brotliCompressSync, constants, gzipSync } from "node:zlib";
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { LONG_VISIT_REASON } from "../../scripts/grow-demo-data.ts";
 import { launchBrowser, signedInContext, startServer } from "../browser/launch.ts";
-import { CPU_SLOWDOWN, PHONE_VIEWPORT, SLOW_4G, findDemoVisit, runLogInteractive, throttle } from "./profile.ts";
+import {
+  CPU_SLOWDOWN,
+  PHONE_VIEWPORT,
+  SLOW_4G,
+  findDemoVisit,
+  findVisitByReason,
+  runLogInteractive,
+  throttle,
+} from "./profile.ts";
 
 const RUNS = Number(process.env.BENCH_WEB_RUNS ?? 3);
 const DIST = fileURLToPath(new URL("../../dist", import.meta.url));
@@ -125,16 +133,13 @@ async function timeLoggerVisit(browser: Browser, summary: (times: number[]) => s
   const large = await startServer(Number(process.env.BENCH_WEB_PORT ?? 3214) + 1, dir);
   try {
     const signedIn = await signedInContext(browser, large.base, { viewport: PHONE_VIEWPORT });
-    const found = await signedIn.request.get(`${large.base}/api/visits?q=${encodeURIComponent(LONG_VISIT_REASON)}`);
-    const { visits } = (await found.json()) as { visits: { id: string; reason: string | null }[] };
-    const logger = visits.find((visit) => visit.reason === LONG_VISIT_REASON);
+    const logger = await findVisitByReason(signedIn, large.base, LONG_VISIT_REASON);
     const state = await signedIn.storageState();
     await signedIn.close();
-    if (!logger) throw new Error(`the logger's visit ("${LONG_VISIT_REASON}") is missing from ${dir}`);
     const times: number[] = [];
     for (let run = 0; run < RUNS; run++) {
       const context = await browser.newContext({ viewport: PHONE_VIEWPORT, storageState: state });
-      times.push(await throttledRunLog(context, `${large.base}/visits/${logger.id}`));
+      times.push(await throttledRunLog(context, `${large.base}/visits/${logger}`));
       await context.close();
     }
     console.log(
