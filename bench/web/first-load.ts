@@ -37,7 +37,8 @@ import {
   SLOW_4G,
   findDemoVisit,
   findVisitByReason,
-  runLogInteractive,
+  runLogInteractiveAt,
+  stampRunLogInteractive,
   throttle,
 } from "./profile.ts";
 
@@ -110,9 +111,9 @@ const load = () =>
 async function throttledRunLog(context: BrowserContext, url: string): Promise<number> {
   const page = await context.newPage();
   await throttle(context, page);
+  await page.addInitScript(stampRunLogInteractive);
   await page.goto(url, { waitUntil: "commit" });
-  await page.waitForFunction(runLogInteractive, undefined, { polling: 50, timeout: 120_000 });
-  const interactiveAt = await page.evaluate(() => (window as unknown as { interactiveAt: number }).interactiveAt);
+  const interactiveAt = await runLogInteractiveAt(context, page);
   await page.close();
   return interactiveAt;
 }
@@ -168,7 +169,7 @@ try {
       name: "run log",
       path: `/visits/${demoVisit}`,
       signedIn: true,
-      ready: (page) => page.waitForFunction(runLogInteractive, undefined, { polling: 50, timeout: 60_000 }),
+      ready: (page) => runLogInteractiveAt(page.context(), page, 60_000),
     },
     { name: "review", path: "/jobs?status=awaiting-review", signedIn: true, ready: heading },
     { name: "report", path: `/visits/${demoVisit}/report`, signedIn: true, ready: heading },
@@ -182,6 +183,7 @@ try {
     });
     const page = await context.newPage();
     const assets = recordAssets(page);
+    await page.addInitScript(stampRunLogInteractive); // the run log's readiness (other screens never stamp)
     await page.goto(`${server.base}${target.path}`);
     await target.ready(page);
     assets.ready = true;

@@ -45,17 +45,46 @@ export const findDemoVisit = (context: BrowserContext, base: string): Promise<st
   findVisitByReason(context, base, DEMO_VISIT_REASON);
 
 /**
- * Runs in the page: true once the first reading field is enabled and the finding is shown, and
- * stamps that moment (`window.interactiveAt`, ms from navigation) the first time.
+ * An init script (`page.addInitScript`): watches the page's DOM from its first script and stamps
+ * `window.interactiveAt` (ms from navigation) when the first reading field is enabled and the
+ * finding is shown. The page is watched from inside so that the harness runs nothing in it
+ * until then: Playwright's `waitForFunction` and `evaluate` first inject Playwright's own script
+ * into the page, and on the 4× slower CPU compiling it held the main thread for 0.25–0.35 s just
+ * as the entry chunk was ready to run.
  */
-export function runLogInteractive(): boolean {
-  const label = [...document.querySelectorAll("label")].find((candidate) =>
-    candidate.textContent?.trim().startsWith("Suction pressure"),
-  );
-  const field = label?.control as HTMLInputElement | null | undefined;
-  const finding = document.querySelector("[data-testid=charge-state]")?.textContent?.trim();
-  const ready = Boolean(field && !field.disabled && finding);
+export function stampRunLogInteractive(): void {
   const stamped = window as unknown as { interactiveAt?: number };
-  if (ready) stamped.interactiveAt ??= performance.now();
-  return ready;
+  const observer = new MutationObserver(() => {
+    const label = [...document.querySelectorAll("label")].find((candidate) =>
+      candidate.textContent?.trim().startsWith("Suction pressure"),
+    );
+    const field = label?.control as HTMLInputElement | null | undefined;
+    const finding = document.querySelector("[data-testid=charge-state]")?.textContent?.trim();
+    if (!field || field.disabled || !finding) return;
+    stamped.interactiveAt = performance.now();
+    observer.disconnect();
+  });
+  observer.observe(document, { subtree: true, childList: true, attributes: true, characterData: true });
+}
+
+/**
+ * Waits for the stamp of `stampRunLogInteractive` through the DevTools protocol's own evaluation,
+ * which injects nothing into the page; the stamp in ms from navigation.
+ */
+export async function runLogInteractiveAt(context: BrowserContext, page: Page, timeoutMs = 120_000): Promise<number> {
+  const cdp = await context.newCDPSession(page);
+  const deadline = Date.now() + timeoutMs;
+  try {
+    for (;;) {
+      const { result } = (await cdp.send("Runtime.evaluate", {
+        expression: "window.interactiveAt ?? null",
+        returnByValue: true,
+      })) as { result: { value: unknown } };
+      if (typeof result.value === "number") return result.value;
+      if (Date.now() > deadline) throw new Error(`the run log was not interactive after ${timeoutMs} ms`);
+      await new Promise((resolve) => setTimeout(resolve, 100));
+    }
+  } finally {
+    await cdp.detach();
+  }
 }

@@ -8,7 +8,7 @@
  * became interactive. A tool for finding waterfalls and main-thread work, not a benchmark; the
  * client must be built first. Opens the demo visit's run log unless given another path.
  */
-import { DEMO_VISIT_REASON, findDemoVisit, runLogInteractive, throttle } from "./profile.ts";
+import { DEMO_VISIT_REASON, findDemoVisit, runLogInteractiveAt, stampRunLogInteractive, throttle } from "./profile.ts";
 import { launchBrowser, signedInContext, startServer } from "../browser/launch.ts";
 
 const server = await startServer(Number(process.env.BENCH_WEB_PORT ?? 3214));
@@ -18,6 +18,7 @@ try {
   const target = process.argv[2] ?? `/visits/${await findDemoVisit(context, server.base)}`;
   const page = await context.newPage();
   await throttle(context, page);
+  await page.addInitScript(stampRunLogInteractive);
   await page.addInitScript(() => {
     const store = window as unknown as { longTasks: { start: number; duration: number }[] };
     store.longTasks = [];
@@ -31,7 +32,7 @@ try {
   await profiler.send("Profiler.setSamplingInterval", { interval: 500 });
   await profiler.send("Profiler.start");
   await page.goto(`${server.base}${target}`, { waitUntil: "commit" });
-  await page.waitForFunction(runLogInteractive, undefined, { polling: 50, timeout: 120_000 });
+  await runLogInteractiveAt(context, page);
   const { profile } = await profiler.send("Profiler.stop");
   const { requests, longTasks, interactiveAt, elements, hiddenElements } = await page.evaluate(() => ({
     requests: (performance.getEntriesByType("resource") as PerformanceResourceTiming[]).map((entry) => ({
