@@ -1,9 +1,10 @@
+// First: its body runs before the other modules of the entry chunk (start-first-screen.ts).
+import "./start-first-screen.ts";
 import { StrictMode } from "react";
 import { createRoot } from "react-dom/client";
 import { RouterProvider } from "react-router-dom";
 import "./styles/app.css";
 import { applyTheme, readTheme } from "./features/theme/theme-store.ts";
-import { startFirstRequests } from "./lib/api/first-requests.ts";
 import { keepDataOnDevice, restoreKeptData } from "./features/offline/persist-queries.ts";
 import { createQueryClient } from "./lib/api/query-client.ts";
 import { watchFirstScreen } from "./lib/first-screen.ts";
@@ -18,8 +19,6 @@ const queryClient = createQueryClient();
 // The data kept on the device comes back while the scripts download; the session loader waits
 // for it, so a screen opened without signal finds its visit. Then each change is kept again.
 void restoreKeptData(queryClient).then(() => keepDataOnDevice(queryClient));
-// The screen's data goes out before the router asks for the screen's scripts.
-if (navigator.onLine) startFirstRequests(queryClient, window.location.pathname);
 const router = createRouter(queryClient);
 // Work the first screen does not need (the service worker, the connection banners, panels below
 // the first screenful) waits until it is drawn with its data.

@@ -1,9 +1,8 @@
-import type { QueryClient } from "@tanstack/react-query";
-import { matchPath } from "react-router-dom";
+// From react-router itself: this runs before React DOM's module (src/start-first-screen.ts).
+import { matchPath } from "react-router";
 import { paths } from "@/config/paths.ts";
 import { VISIT_EQUIPMENT_HEADER, VISIT_REFRIGERANT_HEADER } from "@shared/http/visit-headers.ts";
 import { startEarlyRequest } from "./api-client.ts";
-import { meQueryOptions } from "./auth.ts";
 
 /** Screens that never ask who is signed in (a mailed link, a forgotten password). */
 const WITHOUT_SESSION = [paths.forgotPassword.path, paths.resetPassword.path, paths.acceptInvitation.path];
@@ -14,11 +13,11 @@ const RECORD_ID = /^[0-9a-f-]{36}$/i;
  * scripts: on a slow link a request sent after them waits for a free connection (six per host)
  * and arrived seconds late. Who is signed in, for every screen that checks; a unit's record; a
  * visit's record and, as soon as its headers arrive, its unit's record and its refrigerant's
- * table. The screen's loader and queries then take these up (startEarlyRequest) and parse them
- * with the shared schemas as always; here nothing is parsed.
+ * table. The session check, the screen's loader and its queries then take these up
+ * (startEarlyRequest) and parse them with the shared schemas as always; here nothing is parsed.
  */
-export function startFirstRequests(queryClient: QueryClient, pathname: string): void {
-  if (!WITHOUT_SESSION.some((path) => matchPath(path, pathname))) void queryClient.prefetchQuery(meQueryOptions());
+export function startFirstRequests(pathname: string): void {
+  if (!WITHOUT_SESSION.some((path) => matchPath(path, pathname))) void startEarlyRequest("/auth/me");
   const visitId = (matchPath(paths.visits.detail.path, pathname) ?? matchPath(paths.visits.report.path, pathname))
     ?.params.visitId;
   if (visitId && RECORD_ID.test(visitId)) {
