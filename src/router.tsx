@@ -1,9 +1,5 @@
 import type { QueryClient } from "@tanstack/react-query";
-import {
-  createBrowserRouter,
-  type LoaderFunctionArgs,
-  type ShouldRevalidateFunctionArgs,
-} from "react-router-dom";
+import { createBrowserRouter, type LoaderFunctionArgs, type ShouldRevalidateFunctionArgs } from "react-router-dom";
 import { AuthLayout } from "@/components/layouts/auth-layout.tsx";
 import { RouteError } from "@/components/errors/route-error.tsx";
 import { requireSessionLoader } from "@/features/auth/utils/session-loaders.ts";
