@@ -5,7 +5,10 @@
  * built first (`vite build`, which the npm scripts run).
  */
 import { spawn, type ChildProcess } from "node:child_process";
-import { chromium, type Browser, type BrowserContext } from "playwright-core";
+import { mkdtemp, rm } from "node:fs/promises";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { chromium, type Browser, type BrowserContext, type Cookie } from "playwright-core";
 import { CHROMIUM_PATH } from "../../scripts/chromium-path.mjs";
 
 export interface BenchServer {
@@ -57,9 +60,37 @@ async function waitForHealth(base: string): Promise<void> {
   throw new Error(`the server did not start on ${base}`);
 }
 
+const CHROMIUM_ARGS = ["--headless", "--no-sandbox", "--disable-gpu"];
+
 /** Headless Chromium, without a sandbox (the benches run as root in a container). */
 export function launchBrowser(): Promise<Browser> {
-  return chromium.launch({ executablePath: CHROMIUM_PATH, args: ["--headless", "--no-sandbox", "--disable-gpu"] });
+  return chromium.launch({ executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS });
+}
+
+/**
+ * A browser with a new profile on disk of its own, as a phone's browser keeps one, holding
+ * `cookies`; closing it deletes the profile. A context of `launchBrowser` keeps everything in
+ * memory, and there Chromium keeps no compiled code for scripts from a service worker's cache:
+ * each opening compiled them again, where a phone, from its second opening, runs them compiled.
+ */
+export async function launchProfile(options: {
+  viewport: { width: number; height: number };
+  cookies: Cookie[];
+}): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
+  const dir = await mkdtemp(path.join(tmpdir(), "satura-bench-profile-"));
+  const context = await chromium.launchPersistentContext(dir, {
+    executablePath: CHROMIUM_PATH,
+    args: CHROMIUM_ARGS,
+    viewport: options.viewport,
+  });
+  await context.addCookies(options.cookies);
+  return {
+    context,
+    close: async () => {
+      await context.close();
+      await rm(dir, { recursive: true, force: true });
+    },
+  };
 }
 
 /** The demo technician; every demo person shares the password. */
